@@ -1,0 +1,57 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { Alert } from "@/components/ui/Alert";
+import { Badge } from "@/components/ui/Badge";
+import { Card } from "@/components/ui/Card";
+import { PageHeader } from "@/components/ui/PageHeader";
+import { requirePageCaller } from "@/lib/auth/session";
+import { db } from "@/lib/db";
+import type { Role } from "@/lib/db/types";
+import { findUserById } from "@/lib/server/users";
+
+export const metadata: Metadata = { title: "Your account" };
+
+const CAN: Record<Role, { title: string; items: string[] }> = {
+  member: { title: "Member", items: ["Compare setups and keep the comparisons you save", "Keep vehicles with their measured clearances", "Share a comparison by link"] },
+  shop_staff: { title: "Shop staff", items: ["Everything a member can do", "Read your shop's catalog", "Create and send quotes at the counter"] },
+  shop_owner: { title: "Shop owner", items: ["Everything shop staff can do", "Manage the shop's settings, catalog and staff", "See every quote of the shop"] },
+  admin: { title: "Admin", items: ["Everything a member can do", "List users and change their roles", "Read the development outbox"] },
+};
+
+export default async function AccountPage({ searchParams }: { searchParams: Promise<{ welcome?: string }> }) {
+  const caller = await requirePageCaller("/account");
+  const [user, sp] = await Promise.all([findUserById(db, caller.userId), searchParams]);
+  const shop = caller.shopId ? await db("shops").where({ id: caller.shopId }).first("name") : null;
+  const can = CAN[caller.role];
+  return (
+    <>
+      <PageHeader title={`Hello, ${user?.name ?? caller.name}`} lead={user?.email} />
+      {sp.welcome && <Alert tone="success" className="mb-6">Your account is ready.</Alert>}
+      <div className="grid gap-6 md:grid-cols-2">
+        <Card>
+          <h2 className="text-lg font-semibold">Your role</h2>
+          <p className="mt-2 flex items-center gap-2">
+            <Badge tone="ember">{can.title}</Badge>
+            {shop && <span className="text-sm text-basalt-600">at {shop.name}</span>}
+          </p>
+          <ul className="mt-4 list-disc space-y-1 pl-5 text-sm text-basalt-700">
+            {can.items.map((i) => <li key={i}>{i}</li>)}
+          </ul>
+        </Card>
+        <Card>
+          <h2 className="text-lg font-semibold">Where to go</h2>
+          <ul className="mt-3 space-y-2 text-sm">
+            {(caller.role === "shop_staff" || caller.role === "shop_owner") && <li><Link className="text-ember-700 underline" href="/shop">Your shop</Link></li>}
+            {caller.role === "admin" && (
+              <>
+                <li><Link className="text-ember-700 underline" href="/admin/users">Users and roles</Link></li>
+                <li><Link className="text-ember-700 underline" href="/admin/outbox">Development outbox</Link></li>
+              </>
+            )}
+            <li><Link className="text-ember-700 underline" href="/forgot-password">Change your password by e-mail</Link></li>
+          </ul>
+        </Card>
+      </div>
+    </>
+  );
+}

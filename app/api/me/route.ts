@@ -1,0 +1,9 @@
+import { route } from "@/lib/http/route";
+
+export const GET = route({ access: "signed-in" }, async ({ caller }) => ({
+  id: caller.userId,
+  name: caller.name,
+  email: caller.email,
+  role: caller.role,
+  shopId: caller.shopId,
+}));

@@ -1,0 +1,19 @@
+import type { Role } from "@/lib/db/types";
+
+export interface NavItem {
+  href: string;
+  label: string;
+  /** Who sees the link; the pages and routes check again on the server. */
+  roles: "all" | "signed-in" | Role[];
+}
+
+export const NAV: NavItem[] = [
+  { href: "/account", label: "Account", roles: "signed-in" },
+  { href: "/shop", label: "Shop", roles: ["shop_staff", "shop_owner"] },
+  { href: "/admin/users", label: "Users", roles: ["admin"] },
+  { href: "/admin/outbox", label: "Outbox", roles: ["admin"] },
+];
+
+export function visibleNav(role: Role | null): NavItem[] {
+  return NAV.filter((n) => n.roles === "all" || (role && (n.roles === "signed-in" || n.roles.includes(role))));
+}

@@ -1,0 +1,40 @@
+/** Row types, one place for every table. Column names are snake_case as stored. */
+
+export const ROLES = ["member", "shop_staff", "shop_owner", "admin"] as const;
+export type Role = (typeof ROLES)[number];
+export const SHOP_ROLES: readonly Role[] = ["shop_staff", "shop_owner"];
+
+export interface ShopRow {
+  id: string;
+  name: string;
+  created_at: Date;
+}
+
+export interface UserRow {
+  id: string;
+  email: string;
+  name: string;
+  password_hash: string;
+  role: Role;
+  shop_id: string | null;
+  created_at: Date;
+  updated_at: Date;
+}
+
+export type PublicUser = Omit<UserRow, "password_hash">;
+
+export interface PasswordResetRow {
+  id: string;
+  user_id: string;
+  token_hash: string;
+  expires_at: Date;
+  used_at: Date | null;
+  created_at: Date;
+}
+
+export interface SignInThrottleRow {
+  key: string;
+  failures: number;
+  window_started_at: Date;
+  locked_until: Date | null;
+}

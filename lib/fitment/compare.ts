@@ -1,0 +1,181 @@
+/**
+ * Comparison of a current and a planned setup: clearance, poke, scrub, track, speedometer, gearing.
+ *
+ * - diameter change ΔD = D_planned − D_current; ground clearance under the axle changes by ΔD/2.
+ * - inner clearance change = inner swing (current) − inner swing (planned): positive = more room.
+ * - outer poke change = outer swing (planned) − outer swing (current).
+ * - wheel-plane shift outboard s = effective offset (current) − effective offset (planned);
+ *   track width per axle changes by 2s.
+ * - scrub radius change (zero camber) = s − Δr · tan(KPI), Δr = ΔD/2: a taller tire lowers the
+ *   ground line, where the inclined steering axis meets it further outboard (common geometry,
+ *   no source). KPI defaults to 0°, i.e. no vehicle value is assumed: pass the vehicle's figure.
+ * - speedometer (calibrated on the current tire): actual = indicated × D_planned / D_current.
+ * - gearing: effective ratio with the planned tire = axle × D_current / D_planned; ratio to
+ *   restore the current engine speed = axle × D_planned / D_current; suggested = nearest of the
+ *   common ring-and-pinion ratios.
+ * - engine speed RPM = mph · axle · transmission · 336.135 / D(in) (handbook formula;
+ *   336.135 ≈ 63 360 in/mile ÷ 60 min/h ÷ π). Tire slip and loaded radius are ignored.
+ */
+import { FitmentInputError, requireNumber } from "./errors";
+import { type SetupGeometry, type SetupInput, setupGeometry } from "./geometry";
+import { MM_PER_IN } from "./units";
+
+/** Handbook constant of the RPM formula. */
+export const RPM_CONSTANT = 336.135;
+/** Common ring-and-pinion ratios (common practice, no source). */
+export const COMMON_AXLE_RATIOS: readonly number[] = Object.freeze([
+  2.73, 3.08, 3.21, 3.42, 3.55, 3.73, 3.92, 4.1, 4.3, 4.56, 4.88, 5.13, 5.29, 5.38, 5.71, 6.17, 6.5, 7.17,
+]);
+/** Default speeds of the speedometer and RPM tables, mph. */
+export const DEFAULT_SPEEDS_MPH: readonly number[] = Object.freeze([45, 55, 60, 65, 70, 75]);
+// Private unfrozen copies for the hot path: V8 reads elements of frozen arrays markedly slower.
+// They are never handed out, so nothing outside can change them.
+const RATIOS_HOT: readonly number[] = COMMON_AXLE_RATIOS.slice();
+const SPEEDS_HOT: readonly number[] = DEFAULT_SPEEDS_MPH.slice();
+/** Default axle ratio when none is given (a typical factory ratio; common practice, no source). */
+export const DEFAULT_AXLE_RATIO = 3.73;
+/** Default transmission ratio: top gear direct (1.0). */
+export const DEFAULT_TRANSMISSION_RATIO = 1.0;
+/** Default kingpin inclination: 0° (no vehicle value assumed). */
+export const DEFAULT_KPI_DEG = 0;
+
+/** Options of {@link compareSetups}. */
+export interface CompareOptions {
+  kingpinInclinationDeg?: number;
+  axleRatio?: number;
+  transmissionRatio?: number;
+  speedsMph?: readonly number[];
+  commonRatios?: readonly number[];
+}
+
+/** A setup given as input, or its already computed geometry. */
+export type SetupLike = SetupInput | SetupGeometry;
+
+/** Result of {@link compareSetups}. */
+export interface SetupComparison {
+  current: SetupGeometry;
+  planned: SetupGeometry;
+  diameterChangeMm: number;
+  groundClearanceChangeMm: number;
+  innerClearanceChangeMm: number;
+  outerPokeChangeMm: number;
+  scrubRadiusChangeMm: number;
+  trackWidthChangeMm: number;
+  speedometer: { ratio: number; rows: { indicatedMph: number; actualMph: number }[] };
+  gearing: {
+    axleRatio: number;
+    transmissionRatio: number;
+    effectiveRatio: number;
+    ratioToRestore: number;
+    suggestedRatio: number;
+    rpmAt: { mph: number; currentRpm: number; plannedRpm: number; regearedRpm: number }[];
+  };
+  kingpinInclinationDeg: number;
+}
+
+/**
+ * Engine speed at a road speed: RPM = mph · axle · transmission · 336.135 / D(in).
+ *
+ * @example
+ * engineRpm(50, 6.66, 1, 37.5); // ≈ 2985
+ */
+export function engineRpm(mph: number, axleRatio: number, transmissionRatio: number, tireDiameterIn: number): number {
+  requireNumber("mph", mph, 0, 250, "60", "mph");
+  requireNumber("axleRatio", axleRatio, 1, 10, "4.10");
+  requireNumber("transmissionRatio", transmissionRatio, 0.3, 10, "1.0");
+  requireNumber("tireDiameterIn", tireDiameterIn, 10, 80, "35", "in");
+  return (mph * axleRatio * transmissionRatio * RPM_CONSTANT) / tireDiameterIn;
+}
+
+function isGeometry(s: SetupLike): s is SetupGeometry {
+  return typeof (s as SetupGeometry).innerSwingMm === "number" && typeof (s as SetupGeometry).tire === "object";
+}
+
+function checkList(field: string, list: unknown, min: number, max: number, example: string): readonly number[] {
+  if (!Array.isArray(list) || list.length === 0 || list.length > 100) {
+    throw new FitmentInputError(field, `${field} must be a list of 1–100 numbers (e.g. ${example})`, list);
+  }
+  for (let i = 0; i < list.length; i++) requireNumber(`${field}[${i}]`, list[i], min, max, example);
+  return list as readonly number[];
+}
+
+const zero = (x: number): number => (x === 0 ? 0 : x);
+
+/**
+ * Compares a current and a planned setup (tire + wheel + optional spacer).
+ * Accepts raw inputs or precomputed {@link SetupGeometry} objects.
+ *
+ * @example
+ * const c = compareSetups(
+ *   { tire: "265/70R17", wheel: { diameterIn: 17, widthIn: 8, offsetMm: 25 } },
+ *   { tire: "35x12.50R17LT", wheel: { diameterIn: 17, widthIn: 9, offsetMm: -12 } },
+ *   { axleRatio: 3.73 },
+ * );
+ * c.diameterChangeMm;        // 86.2
+ * c.gearing.suggestedRatio;  // 4.1
+ */
+export function compareSetups(current: SetupLike, planned: SetupLike, options: CompareOptions = {}): SetupComparison {
+  const cur = isGeometry(current) ? current : setupGeometry(current);
+  const pla = isGeometry(planned) ? planned : setupGeometry(planned);
+  const kpi =
+    options.kingpinInclinationDeg === undefined
+      ? DEFAULT_KPI_DEG
+      : requireNumber("kingpinInclinationDeg", options.kingpinInclinationDeg, 0, 30, "8", "°");
+  const axle = options.axleRatio === undefined ? DEFAULT_AXLE_RATIO : requireNumber("axleRatio", options.axleRatio, 1, 10, "4.10");
+  const trans =
+    options.transmissionRatio === undefined
+      ? DEFAULT_TRANSMISSION_RATIO
+      : requireNumber("transmissionRatio", options.transmissionRatio, 0.3, 10, "1.0");
+  const speeds = options.speedsMph === undefined ? SPEEDS_HOT : checkList("speedsMph", options.speedsMph, 0, 250, "[55, 65]");
+  const ratios = options.commonRatios === undefined ? RATIOS_HOT : checkList("commonRatios", options.commonRatios, 1, 10, "[3.73, 4.10]");
+
+  const dCur = cur.overallDiameterMm;
+  const dPla = pla.overallDiameterMm;
+  const dD = dPla - dCur;
+  const shift = cur.effectiveOffsetMm - pla.effectiveOffsetMm;
+  const scrub = kpi === 0 ? shift : shift - (dD / 2) * Math.tan((kpi * Math.PI) / 180);
+  const ratio = dPla / dCur;
+
+  const speedRows: { indicatedMph: number; actualMph: number }[] = [];
+  const rpmRows: { mph: number; currentRpm: number; plannedRpm: number; regearedRpm: number }[] = [];
+  const restore = axle * ratio;
+  let suggested = ratios[0] as number;
+  let best = Math.abs(suggested - restore);
+  for (let i = 1; i < ratios.length; i++) {
+    const r = ratios[i] as number;
+    const d = Math.abs(r - restore);
+    if (d < best) {
+      best = d;
+      suggested = r;
+    }
+  }
+  const k = trans * RPM_CONSTANT * MM_PER_IN;
+  const kCur = (axle * k) / dCur;
+  const kPla = (axle * k) / dPla;
+  const kReg = (suggested * k) / dPla;
+  for (let i = 0; i < speeds.length; i++) {
+    const mph = speeds[i] as number;
+    speedRows.push({ indicatedMph: mph, actualMph: mph * ratio });
+    rpmRows.push({ mph, currentRpm: mph * kCur, plannedRpm: mph * kPla, regearedRpm: mph * kReg });
+  }
+  return {
+    current: cur,
+    planned: pla,
+    diameterChangeMm: zero(dD),
+    groundClearanceChangeMm: zero(dD / 2),
+    innerClearanceChangeMm: zero(cur.innerSwingMm - pla.innerSwingMm),
+    outerPokeChangeMm: zero(pla.outerSwingMm - cur.outerSwingMm),
+    scrubRadiusChangeMm: zero(scrub),
+    trackWidthChangeMm: zero(2 * shift),
+    speedometer: { ratio, rows: speedRows },
+    gearing: {
+      axleRatio: axle,
+      transmissionRatio: trans,
+      effectiveRatio: axle / ratio,
+      ratioToRestore: restore,
+      suggestedRatio: suggested,
+      rpmAt: rpmRows,
+    },
+    kingpinInclinationDeg: kpi,
+  };
+}

@@ -1,0 +1,87 @@
+/**
+ * Typed input errors for the fitment engine.
+ *
+ * Policy: every public function validates its input and throws a {@link FitmentInputError}
+ * (or a subclass) whose message says which field is wrong, why, and shows an accepted example.
+ * Nothing is clamped silently and no output is ever NaN or Infinity.
+ */
+
+/**
+ * Base class of every input error thrown by `lib/fitment`.
+ *
+ * @example
+ * try { offsetFromBackspacing({ widthIn: 0, backspacingIn: 4, measuredFrom: "bead-seat" }); }
+ * catch (e) { if (e instanceof FitmentInputError) console.log(e.field); } // "widthIn"
+ */
+export class FitmentInputError extends Error {
+  /** The input field (dotted path) that is wrong, e.g. `"wheel.widthIn"`. */
+  readonly field: string;
+  /** The offending value as received. */
+  readonly value: unknown;
+
+  constructor(field: string, message: string, value?: unknown) {
+    super(message);
+    this.name = "FitmentInputError";
+    this.field = field;
+    this.value = value;
+  }
+}
+
+/**
+ * Thrown by `parseTireSize` (and everything that accepts a tire size as text) when the text is
+ * not a tire size designation the engine understands.
+ *
+ * @example
+ * try { parseTireSize("265/7R17"); } catch (e) { console.log(e instanceof TireSizeError); } // true
+ */
+export class TireSizeError extends FitmentInputError {
+  constructor(message: string, value?: unknown, field = "tire") {
+    super(field, message, value);
+    this.name = "TireSizeError";
+  }
+}
+
+/** Formats a received value for an error message. */
+function show(value: unknown): string {
+  if (typeof value === "string") return JSON.stringify(value.length > 60 ? value.slice(0, 60) + "…" : value);
+  if (typeof value === "number") return String(value);
+  if (value === null) return "null";
+  return typeof value;
+}
+
+/**
+ * Checks that `value` is a finite number within `[min, max]`; returns it or throws a
+ * {@link FitmentInputError} naming the field, the accepted range and an example.
+ *
+ * @example
+ * requireNumber("wheel.widthIn", 9.5, 3, 20, "9.5"); // 9.5
+ * requireNumber("wheel.widthIn", 0, 3, 20, "9.5");   // throws FitmentInputError
+ */
+export function requireNumber(field: string, value: unknown, min: number, max: number, example: string, unit = ""): number {
+  const u = unit ? ` ${unit}` : "";
+  if (typeof value !== "number" || !Number.isFinite(value)) {
+    throw new FitmentInputError(field, `${field} must be a finite number${u}, got ${show(value)} (e.g. ${example})`, value);
+  }
+  if (value < min || value > max) {
+    throw new FitmentInputError(
+      field,
+      `${field} must be between ${min} and ${max}${u}, got ${value} (e.g. ${example})`,
+      value,
+    );
+  }
+  return value;
+}
+
+/**
+ * Like {@link requireNumber} but also requires an integer.
+ *
+ * @example
+ * requireInteger("boltCount", 8, 3, 64, "8"); // 8
+ */
+export function requireInteger(field: string, value: unknown, min: number, max: number, example: string): number {
+  requireNumber(field, value, min, max, example);
+  if (!Number.isInteger(value)) {
+    throw new FitmentInputError(field, `${field} must be a whole number, got ${show(value)} (e.g. ${example})`, value);
+  }
+  return value as number;
+}

@@ -1,0 +1,124 @@
+/**
+ * Hubface fitment engine — public entry point. Pure, deterministic, SI (mm) inside.
+ * See README.md in this folder for conventions, formulas and sources.
+ */
+export { FitmentInputError, TireSizeError } from "./errors";
+export {
+  MM_PER_IN,
+  MM_PER_MILE,
+  KM_PER_MILE,
+  STANDARD_GRAVITY,
+  inToMm,
+  mmToIn,
+  psiToKpa,
+  kpaToPsi,
+  ftLbToNm,
+  nmToFtLb,
+  convertPressure,
+  type PressureUnit,
+} from "./units";
+export {
+  LOAD_INDEX_KG,
+  MAX_LOAD_INDEX,
+  SPEED_SYMBOL_KMH,
+  loadIndexKg,
+  speedSymbolKmh,
+  isSpeedSymbol,
+} from "./loadSpeed";
+export {
+  LOAD_RANGES,
+  loadRangeInfo,
+  loadRangeFromPly,
+  plyRating,
+  isLoadRange,
+  type LoadRange,
+  type LoadRangeInfo,
+} from "./loadRange";
+export {
+  NUMERIC_ASPECT_RATIO,
+  parseTireSize,
+  formatTireSize,
+  toTireSize,
+  type TireSize,
+  type TireSystem,
+  type ServiceType,
+  type Construction,
+} from "./tireSize";
+export {
+  SECTION_WIDTH_K,
+  RIM_WIDTH_TOLERANCE_IN,
+  RIM_WIDTH_LIMITS_IN,
+  tireDimensions,
+  measuringRimWidthIn,
+  measuringRimFactor,
+  approvedRimWidthRangeIn,
+  sectionWidthOnRimMm,
+  type TireDimensions,
+} from "./dimensions";
+export {
+  DEFAULT_FLANGE_IN,
+  OFFSET_MARGIN_MM,
+  offsetFromBackspacing,
+  backspacingFromOffset,
+  checkOffsetMm,
+  checkWheelWidthIn,
+  type BackspacingReference,
+} from "./offset";
+export {
+  WHEEL_DIAMETER_LIMITS_IN,
+  SPACER_LIMITS_MM,
+  setupGeometry,
+  type Wheel,
+  type SetupInput,
+  type SetupGeometry,
+} from "./geometry";
+export {
+  RPM_CONSTANT,
+  COMMON_AXLE_RATIOS,
+  DEFAULT_SPEEDS_MPH,
+  DEFAULT_AXLE_RATIO,
+  DEFAULT_TRANSMISSION_RATIO,
+  DEFAULT_KPI_DEG,
+  compareSetups,
+  engineRpm,
+  type CompareOptions,
+  type SetupLike,
+  type SetupComparison,
+} from "./compare";
+export {
+  BOLT_COUNT_LIMITS,
+  DEFAULT_TORQUE_STAGES,
+  tighteningSequence,
+  torquePlan,
+  type TorquePass,
+  type TorquePlan,
+} from "./tightening";
+export { parseLength, formatLength, type LengthUnit } from "./length";
+export {
+  BOLT_PATTERN_TOLERANCE_MM,
+  parseBoltPattern,
+  formatBoltPattern,
+  toBoltPattern,
+  boltPatternsEquivalent,
+  type BoltPattern,
+} from "./boltPattern";
+export {
+  METRIC_ASPECT_BAND,
+  METRIC_DIAMETER_WINDOW_MM,
+  FLOTATION_DESIGNATIONS,
+  STANDARD_METRIC_SIZES,
+  STANDARD_FLOTATION_SIZES,
+  STANDARD_SIZES,
+  standardSizes,
+} from "./standardSizes";
+export { equivalentSizes, type EquivalentSize, type EquivalentOptions } from "./equivalents";
+export {
+  DEFAULT_WHEEL_WIDTHS_IN,
+  COMMON_OFFSETS_MM,
+  findFitments,
+  type FitmentConstraints,
+  type WheelOffer,
+  type FinderOptions,
+  type FitmentMatch,
+  type FinderResult,
+} from "./finder";

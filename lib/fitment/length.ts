@@ -1,0 +1,100 @@
+/**
+ * Lengths typed by people: fractions, decimals, inch marks, millimetres. Returns mm.
+ */
+import { FitmentInputError } from "./errors";
+import { MM_PER_IN } from "./units";
+
+/** Length units accepted at the edges. */
+export type LengthUnit = "in" | "mm";
+
+const LENGTH_RE =
+  /^([+-])?\s*(?:(\d+(?:\.\d+)?|\.\d+)(?:(?:\s+|-)(\d+)\/(\d+))?|(\d+)\/(\d+))\s*(mm|cm|in|inch|inches|"|''|”)?$/i;
+
+const EXAMPLE = 'e.g. 4-3/4, 4 7/8 in, 3.5", 120 mm or 2';
+
+/**
+ * Parses a length and returns millimetres. A bare number uses `defaultUnit`.
+ *
+ * @example
+ * parseLength("4-3/4", "in");  // 120.65
+ * parseLength("120 mm", "in"); // 120
+ * parseLength('3.5"', "mm");   // 88.9
+ */
+export function parseLength(text: string, defaultUnit: LengthUnit): number {
+  if (defaultUnit !== "in" && defaultUnit !== "mm") {
+    throw new FitmentInputError("defaultUnit", `defaultUnit must be "in" or "mm", got ${JSON.stringify(defaultUnit)}`, defaultUnit);
+  }
+  if (typeof text !== "string" || text.length > 40) {
+    throw new FitmentInputError("length", `length must be short text (${EXAMPLE})`, text);
+  }
+  const m = LENGTH_RE.exec(text.trim());
+  if (!m) throw new FitmentInputError("length", `${JSON.stringify(text)} is not a length (${EXAMPLE})`, text);
+  const [, sign, whole, num, den, onlyNum, onlyDen, unitRaw] = m;
+  let value: number;
+  if (whole !== undefined) {
+    value = Number(whole);
+    if (num !== undefined && den !== undefined) {
+      const n = Number(num);
+      const d = Number(den);
+      if (d === 0 || n >= d) {
+        throw new FitmentInputError("length", `${JSON.stringify(text)}: the fraction ${num}/${den} must be a proper fraction (${EXAMPLE})`, text);
+      }
+      value += n / d;
+    }
+  } else {
+    const d = Number(onlyDen);
+    if (d === 0) throw new FitmentInputError("length", `${JSON.stringify(text)}: division by zero (${EXAMPLE})`, text);
+    value = Number(onlyNum) / d;
+  }
+  if (!Number.isFinite(value) || value > 1e6) {
+    throw new FitmentInputError("length", `${JSON.stringify(text)} is too large (${EXAMPLE})`, text);
+  }
+  if (sign === "-") value = -value;
+  const unit = unitRaw === undefined ? defaultUnit : unitRaw.toLowerCase();
+  const mm = unit === "mm" ? value : unit === "cm" ? value * 10 : value * MM_PER_IN;
+  return mm === 0 ? 0 : mm;
+}
+
+function gcd(a: number, b: number): number {
+  while (b) [a, b] = [b, a % b];
+  return a;
+}
+
+/**
+ * Formats millimetres as inches with a fraction (`4-3/4 in`), decimal inches or millimetres.
+ *
+ * @example
+ * formatLength(120.65, { unit: "in", fraction: 8 });  // "4-3/4 in"
+ * formatLength(120.65, { unit: "in" });               // "4.75 in"
+ * formatLength(120.65, { unit: "mm" });               // "120.7 mm"
+ */
+export function formatLength(mm: number, options: { unit: LengthUnit; fraction?: 8 | 16; decimals?: number }): string {
+  if (typeof mm !== "number" || !Number.isFinite(mm)) {
+    throw new FitmentInputError("mm", `length must be a finite number of mm, got ${String(mm)} (e.g. 120.65)`, mm);
+  }
+  const { unit, fraction } = options;
+  if (unit !== "in" && unit !== "mm") throw new FitmentInputError("unit", `unit must be "in" or "mm", got ${JSON.stringify(unit)}`, unit);
+  if (fraction !== undefined && fraction !== 8 && fraction !== 16) {
+    throw new FitmentInputError("fraction", `fraction must be 8 or 16, got ${String(fraction)}`, fraction);
+  }
+  const decimals = options.decimals ?? (unit === "mm" ? 1 : 2);
+  if (!Number.isInteger(decimals) || decimals < 0 || decimals > 6) {
+    throw new FitmentInputError("decimals", `decimals must be a whole number 0–6, got ${String(decimals)}`, decimals);
+  }
+  if (unit === "mm") return `${trimZero(mm.toFixed(decimals))} mm`;
+  const inches = mm / MM_PER_IN;
+  if (fraction === undefined) return `${trimZero(inches.toFixed(decimals))} in`;
+  const steps = Math.round(Math.abs(inches) * fraction);
+  const sign = inches < 0 && steps > 0 ? "-" : "";
+  const whole = Math.floor(steps / fraction);
+  const rest = steps % fraction;
+  if (rest === 0) return `${sign}${whole} in`;
+  const g = gcd(rest, fraction);
+  const frac = `${rest / g}/${fraction / g}`;
+  return whole === 0 ? `${sign}${frac} in` : `${sign}${whole}-${frac} in`;
+}
+
+function trimZero(s: string): string {
+  const t = s.includes(".") ? s.replace(/0+$/, "").replace(/\.$/, "") : s;
+  return t === "-0" ? "0" : t;
+}

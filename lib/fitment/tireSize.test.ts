@@ -1,0 +1,181 @@
+import fc from "fast-check";
+import { describe, expect, it } from "vitest";
+import { TireSizeError } from "./errors";
+import { formatTireSize, parseTireSize } from "./tireSize";
+
+describe("parseTireSize — metric (ISO 4000-1 designation)", () => {
+  it("LT285/70R17 121/118Q: prefix, construction, dual load index, speed symbol", () => {
+    const t = parseTireSize("LT285/70R17 121/118Q");
+    expect(t).toMatchObject({
+      text: "LT285/70R17 121/118Q",
+      system: "metric",
+      service: "LT",
+      construction: "R",
+      sectionWidthMm: 285,
+      aspectRatio: 70,
+      rimDiameterIn: 17,
+      loadIndex: 121,
+      dualLoadIndex: 118,
+      speedSymbol: "Q",
+      loadRange: null,
+    });
+    // D = d + 2H (ISO 4000-1 / UN R30): 17 × 25.4 + 2 × 285 × 0.70 = 431.8 + 399 = 830.8 mm
+    expect(t.overallDiameterMm).toBeCloseTo(830.8, 9);
+  });
+
+  it("P225/75R15 102S and 205/55R16 91V", () => {
+    expect(parseTireSize("P225/75R15 102S")).toMatchObject({ service: "P", loadIndex: 102, speedSymbol: "S", dualLoadIndex: null });
+    expect(parseTireSize("205/55R16 91V")).toMatchObject({ service: null, loadIndex: 91, speedSymbol: "V" });
+  });
+
+  it("worked diameters D = d + 2H (ISO 4000-1 / ETRTO / UN R30)", () => {
+    expect(parseTireSize("205/55R16").overallDiameterMm).toBeCloseTo(631.9, 9);
+    expect(parseTireSize("265/70R17").overallDiameterMm).toBeCloseTo(802.8, 9);
+    expect(parseTireSize("315/70R17").overallDiameterMm).toBeCloseTo(872.8, 9);
+  });
+
+  it("case and spacing variants normalize to one text", () => {
+    for (const v of ["lt285/70r17 121/118q", "LT 285/70 R17 121/118Q", "  LT285 / 70 R 17   121/118Q ", "285/70R17LT 121/118Q"]) {
+      expect(parseTireSize(v).text).toBe("LT285/70R17 121/118Q");
+    }
+  });
+
+  it("constructions R, D, B, - and ZR", () => {
+    expect(parseTireSize("225/75D15").construction).toBe("D");
+    expect(parseTireSize("225/75B15").construction).toBe("B");
+    expect(parseTireSize("225/75-15").construction).toBe("-");
+    const zr = parseTireSize("255/35ZR18 94Y");
+    expect(zr).toMatchObject({ construction: "R", speedRatedConstruction: true, speedSymbol: "Y", text: "255/35ZR18 94Y" });
+    expect(parseTireSize("255/35ZR18 (94Y)")).toMatchObject({ serviceDescriptionBracketed: true, text: "255/35ZR18 (94Y)" }); // (Y): above 300 km/h (UN R30)
+    expect(() => parseTireSize("255/35ZR18 (94Y")).toThrow(TireSizeError);
+    expect(parseTireSize("T125/70D16").service).toBe("T");
+    expect(parseTireSize("ST225/75R15").service).toBe("ST");
+  });
+
+  it("load range and XL markings after the service description", () => {
+    expect(parseTireSize("LT285/70R17 121/118Q E").loadRange).toBe("E");
+    expect(parseTireSize("LT285/70R17 121/118Q LRE").loadRange).toBe("E");
+    expect(parseTireSize("LT285/70R17 121/118Q Load Range E").text).toBe("LT285/70R17 121/118Q LRE");
+    expect(parseTireSize("LT285/70R17 10PR").loadRange).toBe("E");
+    expect(parseTireSize("LT285/70R17 121/118Q 10 PLY").loadRange).toBe("E");
+    expect(parseTireSize("225/45R17 94W XL").loadMarking).toBe("XL");
+  });
+});
+
+describe("parseTireSize — flotation and numeric", () => {
+  it("37x12.50R17LT: D 37 in = 939.8 mm, section 12.50 in, implied aspect (37−17)/2/12.5 = 80", () => {
+    const t = parseTireSize("37x12.50R17LT");
+    expect(t).toMatchObject({ system: "flotation", service: "LT", construction: "R", rimDiameterIn: 17, aspectRatioImplied: true });
+    expect(t.overallDiameterMm).toBeCloseTo(939.8, 9); // 37 × 25.4 (NIST SP 811 inch)
+    expect(t.sectionWidthMm).toBeCloseTo(317.5, 9);
+    expect(t.aspectRatio).toBeCloseTo(80, 9);
+  });
+
+  it("35X12.50R15 and 35x12.5r15 normalize to 35x12.50R15", () => {
+    expect(parseTireSize("35X12.50R15").text).toBe("35x12.50R15");
+    expect(parseTireSize("35 x 12.5 r 15").text).toBe("35x12.50R15");
+    expect(parseTireSize("35X12.50R15").service).toBeNull();
+  });
+
+  it("numeric 7.50R16 and 7.50-16: section 7.50 in, nominal 92 series (from memory)", () => {
+    const r = parseTireSize("7.50R16");
+    expect(r).toMatchObject({ system: "numeric", construction: "R", rimDiameterIn: 16, aspectRatio: 92, aspectRatioImplied: true });
+    expect(r.sectionWidthMm).toBeCloseTo(190.5, 9);
+    expect(r.overallDiameterMm).toBeCloseTo(406.4 + 2 * 190.5 * 0.92, 9);
+    expect(parseTireSize("7.50-16").construction).toBe("-");
+    expect(parseTireSize("7.50r16lt").service).toBe("LT");
+  });
+});
+
+describe("parseTireSize — invalid input", () => {
+  const bad = ["", "abc", "265/70", "265/7R17", "265/70R", "265/70R17 999Q", "265/70R17 121X", "20x12.50R17", "265/70R40", "37x12.50R17LT extra words", "LT265/70R17LT"];
+  for (const text of bad) {
+    it(`rejects ${JSON.stringify(text)} with a TireSizeError that shows an accepted example`, () => {
+      expect(() => parseTireSize(text)).toThrow(TireSizeError);
+      expect(() => parseTireSize(text)).toThrow(/265\/70R17/);
+    });
+  }
+  it("TireSizeError is a subclass of Error", () => {
+    try {
+      parseTireSize("nope");
+      expect.unreachable();
+    } catch (e) {
+      expect(e).toBeInstanceOf(Error);
+      expect(e).toBeInstanceOf(TireSizeError);
+    }
+  });
+  it("non-string input throws TireSizeError too", () => {
+    expect(() => parseTireSize(undefined as unknown as string)).toThrow(TireSizeError);
+    expect(() => parseTireSize(42 as unknown as string)).toThrow(TireSizeError);
+  });
+});
+
+describe("parseTireSize — properties (fast-check)", () => {
+  it("throws nothing but TireSizeError on arbitrary strings", () => {
+    fc.assert(
+      fc.property(fc.string({ maxLength: 60 }), (s) => {
+        try {
+          parseTireSize(s);
+        } catch (e) {
+          if (!(e instanceof TireSizeError)) throw e;
+        }
+      }),
+      { numRuns: 3000 },
+    );
+  });
+
+  it("throws nothing but TireSizeError on strings made of tire-size characters", () => {
+    const chars = fc.constantFrom(..."0123456789/xXRrDdBbLTPSZ .-()QEHVWY".split(""));
+    fc.assert(
+      fc.property(fc.array(chars, { maxLength: 30 }).map((a) => a.join("")), (s) => {
+        try {
+          const t = parseTireSize(s);
+          expect(Number.isFinite(t.overallDiameterMm)).toBe(true);
+        } catch (e) {
+          if (!(e instanceof TireSizeError)) throw e;
+        }
+      }),
+      { numRuns: 3000 },
+    );
+  });
+
+  const metric = fc
+    .record({
+      prefix: fc.constantFrom("", "P", "LT", "ST", "T"),
+      width: fc.integer({ min: 10, max: 49 }).map((n) => n * 10 + 5),
+      aspect: fc.integer({ min: 4, max: 20 }).map((n) => n * 5),
+      cons: fc.constantFrom("R", "D", "B", "ZR"),
+      rim: fc.constantFrom(13, 14, 15, 16, 16.5, 17, 18, 19.5, 20, 22, 24),
+      li: fc.option(fc.integer({ min: 0, max: 150 })),
+      dual: fc.option(fc.integer({ min: 0, max: 150 })),
+      speed: fc.option(fc.constantFrom("A8", "B", "J", "Q", "R", "S", "T", "H", "V", "W", "Y")),
+      lr: fc.option(fc.constantFrom("C", "D", "E", "F")),
+      bracket: fc.boolean(),
+    })
+    .map((r) => {
+      const inner = `${r.li}${r.dual === null ? "" : `/${r.dual}`}${r.speed ?? ""}`;
+      const sd = r.li === null ? "" : ` ${r.bracket ? `(${inner})` : inner}`;
+      return `${r.prefix}${r.width}/${r.aspect}${r.cons}${r.rim}${sd}${r.lr === null ? "" : ` LR${r.lr}`}`;
+    });
+  const flotation = fc
+    .record({
+      d: fc.integer({ min: 28, max: 44 }),
+      s: fc.constantFrom(9.5, 10.5, 11.5, 12.5, 13.5, 14.5, 15.5),
+      rim: fc.constantFrom(15, 16, 17, 18, 20),
+      lt: fc.boolean(),
+    })
+    .filter((r) => ((r.d - r.rim) / 2 / r.s) * 100 >= 20 && ((r.d - r.rim) / 2 / r.s) * 100 <= 120)
+    .map((r) => `${r.d}x${r.s.toFixed(2)}R${r.rim}${r.lt ? "LT" : ""}`);
+
+  it("format/parse round-trips: parse(format(t)) equals t and format is the normalized text", () => {
+    fc.assert(
+      fc.property(fc.oneof(metric, flotation), (text) => {
+        const t = parseTireSize(text);
+        expect(formatTireSize(t)).toBe(t.text);
+        expect(parseTireSize(formatTireSize(t))).toEqual(t);
+        expect(parseTireSize(text.toLowerCase())).toEqual(t);
+      }),
+      { numRuns: 2000 },
+    );
+  });
+});

@@ -1,0 +1,315 @@
+/**
+ * Tire size designations: parsing and formatting.
+ *
+ * Three systems are understood (ISO 4000-1 / ETRTO / TRA designations):
+ * - metric: `[P|LT|ST|T]<width mm>/<aspect ratio><R|D|B|ZR|-><rim in>[LT] [service description]`,
+ *   e.g. `LT285/70R17 121/118Q`, `P225/75R15 102S`, `205/55R16 91V`, `255/35ZR18 94Y`;
+ * - flotation: `<overall diameter in>x<section width in><R|D|B|-><rim in>[LT]`, e.g. `37x12.50R17LT`;
+ * - numeric: `<section width in><R|D|B|-><rim in>`, e.g. `7.50R16`, `7.50-16`.
+ *
+ * After the size an optional service description (`121/118Q`: load index, dual load index, speed
+ * symbol), an optional `XL`/`SL`/`RF` marking and an optional load range (`LRE`, `Load Range E`,
+ * `E`, `10PR`) are accepted, in that order.
+ *
+ * Dimensions (mm): metric section height H = S·AR/100 and overall diameter D = d + 2H
+ * (ISO 4000-1 / ETRTO / UN R30). Flotation sizes state D and S in inches; their aspect ratio is
+ * implied, AR = (D − d)/2 / S × 100. Numeric sizes state S in inches; their aspect ratio is taken
+ * as the nominal 92 series (from memory; actual dimensions of numeric LT tires vary by maker).
+ */
+import { TireSizeError } from "./errors";
+import { LOAD_INDEX_KG, SPEED_SYMBOL_KMH } from "./loadSpeed";
+import { LOAD_RANGES, loadRangeFromPly, type LoadRange } from "./loadRange";
+import { MM_PER_IN } from "./units";
+
+/** Designation system of a tire size. */
+export type TireSystem = "metric" | "flotation" | "numeric";
+/** Service type prefix: passenger, light truck, special trailer, temporary spare. */
+export type ServiceType = "P" | "LT" | "ST" | "T";
+/** Construction code: radial, diagonal (bias), belted bias, or `-` (bias, numeric style). */
+export type Construction = "R" | "D" | "B" | "-";
+
+/** A parsed tire size. All lengths in mm, the rim diameter in inches (as marked). */
+export interface TireSize {
+  /** Normalized designation, e.g. `LT285/70R17 121/118Q`. */
+  readonly text: string;
+  readonly system: TireSystem;
+  readonly service: ServiceType | null;
+  readonly construction: Construction;
+  /** `ZR` in the size: construction R for speeds above 240 km/h. */
+  readonly speedRatedConstruction: boolean;
+  /** Nominal section width on the measuring rim, mm. */
+  readonly sectionWidthMm: number;
+  /** Aspect ratio H/S × 100; implied for flotation and numeric sizes. */
+  readonly aspectRatio: number;
+  /** True when the aspect ratio is not printed in the designation but derived. */
+  readonly aspectRatioImplied: boolean;
+  readonly rimDiameterIn: number;
+  /** Section height H, mm. */
+  readonly sidewallMm: number;
+  /** Overall (unloaded) diameter D = d + 2H, mm. */
+  readonly overallDiameterMm: number;
+  readonly loadIndex: number | null;
+  readonly dualLoadIndex: number | null;
+  readonly speedSymbol: string | null;
+  /** Service description in brackets, e.g. `(94Y)`: the tire is rated above the symbol's speed. */
+  readonly serviceDescriptionBracketed: boolean;
+  readonly loadRange: LoadRange | null;
+  /** `XL` (extra load), `SL` (standard load) or `RF` (reinforced) marking, when given. */
+  readonly loadMarking: "XL" | "SL" | "RF" | null;
+  /** Flotation only: overall diameter as designated, inches. */
+  readonly designatedDiameterIn: number | null;
+  /** Flotation and numeric: section width as designated, inches. */
+  readonly designatedSectionIn: number | null;
+}
+
+/** Nominal aspect ratio used for numeric sizes (from memory: numeric sizes are a ~92 series). */
+export const NUMERIC_ASPECT_RATIO = 92;
+
+const EXAMPLES =
+  "accepted forms: 265/70R17, LT285/70R17 121/118Q, P225/75R15 102S, 37x12.50R17LT, 7.50R16";
+
+const METRIC_RE = /^(P|LT|ST|T)?(\d{3})\/(\d{2,3})(ZR|R|D|B|-)(\d{2}(?:\.5)?)(LT)?$/;
+const FLOTATION_RE = /^(LT)?(\d{2}(?:\.\d)?)X(\d{1,2}(?:\.\d{1,2})?)(R|D|B|-)(\d{2}(?:\.5)?)(LT)?$/;
+const NUMERIC_RE = /^(LT|ST|T)?(\d{1,2}\.\d{2})(R|D|B|-)(\d{2}(?:\.5)?)(LT)?$/;
+const SERVICE_RE = /^(\()?(\d{1,3})(?:\/(\d{1,3}))?(A[1-8]|[B-HJ-NP-WY])?(\))?$/;
+
+function fail(text: string, why: string): never {
+  throw new TireSizeError(`Tire size ${JSON.stringify(text.length > 40 ? text.slice(0, 40) + "…" : text)}: ${why} (${EXAMPLES})`, text);
+}
+
+function checkRim(text: string, rim: number): void {
+  if (rim < 8 || rim > 30) fail(text, `rim diameter ${rim} in is outside 8–30 in`);
+}
+
+function checkLoadIndex(text: string, li: number): void {
+  if (li >= LOAD_INDEX_KG.length) fail(text, `load index ${li} is beyond the load index table (0–${LOAD_INDEX_KG.length - 1})`);
+}
+
+interface Tail {
+  loadIndex: number | null;
+  dualLoadIndex: number | null;
+  speedSymbol: string | null;
+  serviceDescriptionBracketed: boolean;
+  loadMarking: "XL" | "SL" | "RF" | null;
+  loadRange: LoadRange | null;
+}
+
+function parseTail(text: string, tokens: string[]): Tail {
+  const t: Tail = { loadIndex: null, dualLoadIndex: null, speedSymbol: null, serviceDescriptionBracketed: false, loadMarking: null, loadRange: null };
+  let i = 0;
+  const first = tokens[0];
+  const plyLike =
+    first !== undefined &&
+    (/^\d{1,2}(?:PR|PLY)$/.test(first) || (/^\d{1,2}$/.test(first) && (tokens[1] === "PR" || tokens[1] === "PLY")));
+  if (first !== undefined && !plyLike && /^\(?\d/.test(first)) {
+    const m = SERVICE_RE.exec(first);
+    if (!m) fail(text, `service description ${JSON.stringify(first)} is not load index[/dual] + speed symbol like 121/118Q`);
+    if ((m[1] === undefined) !== (m[5] === undefined)) fail(text, `unbalanced brackets in ${JSON.stringify(first)}`);
+    t.serviceDescriptionBracketed = m[1] !== undefined;
+    const li = Number(m[2]);
+    checkLoadIndex(text, li);
+    t.loadIndex = li;
+    if (m[3] !== undefined) {
+      const dual = Number(m[3]);
+      checkLoadIndex(text, dual);
+      t.dualLoadIndex = dual;
+    }
+    if (m[4] !== undefined) {
+      if (SPEED_SYMBOL_KMH[m[4]] === undefined) fail(text, `unknown speed symbol ${m[4]}`);
+      t.speedSymbol = m[4];
+    }
+    i = 1;
+  }
+  const tok = tokens[i];
+  if (tok === "XL" || tok === "SL" || tok === "RF") {
+    t.loadMarking = tok;
+    i++;
+  }
+  const rest = tokens.slice(i).join(" ");
+  if (rest !== "") {
+    const lr = /^(?:LR ?|LOAD RANGE |\()?([B-HJLMN])\)?$/.exec(rest);
+    const ply = /^(\d{1,2}) ?(?:PR|PLY)$/.exec(rest);
+    if (lr && lr[1] !== undefined) {
+      t.loadRange = lr[1] as LoadRange;
+    } else if (ply && ply[1] !== undefined) {
+      const n = Number(ply[1]);
+      if (n < 4 || n > 24 || n % 2 !== 0) fail(text, `ply rating ${n} is not an even number from 4 to 24`);
+      t.loadRange = loadRangeFromPly(n);
+    } else {
+      fail(text, `unexpected ${JSON.stringify(rest)} after the size; expected a service description, XL, or a load range such as LRE`);
+    }
+  }
+  if (t.loadRange !== null && !(LOAD_RANGES as readonly string[]).includes(t.loadRange)) {
+    fail(text, `unknown load range ${t.loadRange}`);
+  }
+  return t;
+}
+
+/** Splits the designation from the service description: the size has no inner spaces once normalized. */
+function splitSize(upper: string): { size: string; tail: string[] } {
+  // Join spaces inside the size itself ("LT 285 / 70 R 17") but keep the tail tokens apart.
+  // The size ends at the rim diameter (two digits, optional .5) plus an optional LT suffix.
+  const m = /^((?:P|LT|ST|T)?\s*[\d.]+\s*(?:\/\s*\d+|X\s*[\d.]+)?\s*(?:ZR|R|D|B|-)\s*\d{2}(?:\.5)?(?:\s*LT)?)(?=\s|\(|$)(.*)$/.exec(
+    upper,
+  );
+  if (!m || m[1] === undefined) return { size: upper.replace(/\s+/g, ""), tail: [] };
+  const tail = (m[2] ?? "").trim();
+  return { size: m[1].replace(/\s+/g, ""), tail: tail === "" ? [] : tail.split(/\s+/) };
+}
+
+function fixed2(n: number): string {
+  return n.toFixed(2);
+}
+
+/** Builds the normalized text of a size from its fields. */
+function buildText(s: Omit<TireSize, "text">): string {
+  let size: string;
+  const c = s.speedRatedConstruction ? "ZR" : s.construction;
+  if (s.system === "metric") {
+    size = `${s.service ?? ""}${Math.round(s.sectionWidthMm)}/${s.aspectRatio}${c}${s.rimDiameterIn}`;
+  } else if (s.system === "flotation") {
+    size = `${s.designatedDiameterIn}x${fixed2(s.designatedSectionIn ?? 0)}${c}${s.rimDiameterIn}${s.service === "LT" ? "LT" : ""}`;
+  } else {
+    size = `${s.service ?? ""}${fixed2(s.designatedSectionIn ?? 0)}${c}${s.rimDiameterIn}`;
+  }
+  const parts = [size];
+  if (s.loadIndex !== null) {
+    const sd = `${s.loadIndex}${s.dualLoadIndex !== null ? `/${s.dualLoadIndex}` : ""}${s.speedSymbol ?? ""}`;
+    parts.push(s.serviceDescriptionBracketed ? `(${sd})` : sd);
+  }
+  if (s.loadMarking !== null) parts.push(s.loadMarking);
+  if (s.loadRange !== null) parts.push(`LR${s.loadRange}`);
+  return parts.join(" ");
+}
+
+/**
+ * Parses a tire size designation (metric, flotation or numeric; case and spacing variants
+ * accepted). Throws {@link TireSizeError} for anything else — never another error type.
+ *
+ * @example
+ * const t = parseTireSize("lt285/70r17 121/118q");
+ * t.text;              // "LT285/70R17 121/118Q"
+ * t.overallDiameterMm; // 830.8
+ * parseTireSize("37x12.50R17LT").aspectRatio; // 80 (implied)
+ */
+export function parseTireSize(text: string): TireSize {
+  if (typeof text !== "string") {
+    throw new TireSizeError(`Tire size must be text, got ${text === null ? "null" : typeof text} (${EXAMPLES})`, text);
+  }
+  const upper = text.trim().toUpperCase().replace(/×/g, "X").replace(/\s+/g, " ");
+  if (upper === "") fail(text, "the text is empty");
+  if (upper.length > 80) fail(text, "the text is too long to be a tire size");
+  const { size, tail } = splitSize(upper);
+  const t = parseTail(text, tail);
+
+  let m: RegExpExecArray | null;
+  if ((m = METRIC_RE.exec(size))) {
+    const [, prefix, w, ar, cons, rim, suffix] = m;
+    if (prefix !== undefined && suffix !== undefined) fail(text, "service type given twice (prefix and LT suffix)");
+    const width = Number(w);
+    const aspect = Number(ar);
+    const rimIn = Number(rim);
+    if (width < 100 || width > 500) fail(text, `section width ${width} mm is outside 100–500 mm`);
+    if (aspect < 20 || aspect > 100) fail(text, `aspect ratio ${aspect} is outside 20–100`);
+    checkRim(text, rimIn);
+    const sidewall = (width * aspect) / 100;
+    return finish({
+      system: "metric",
+      service: ((prefix ?? suffix) as ServiceType | undefined) ?? null,
+      construction: cons === "ZR" ? "R" : (cons as Construction),
+      speedRatedConstruction: cons === "ZR",
+      sectionWidthMm: width,
+      aspectRatio: aspect,
+      aspectRatioImplied: false,
+      rimDiameterIn: rimIn,
+      sidewallMm: sidewall,
+      overallDiameterMm: rimIn * MM_PER_IN + 2 * sidewall,
+      designatedDiameterIn: null,
+      designatedSectionIn: null,
+      ...t,
+    });
+  }
+  if ((m = FLOTATION_RE.exec(size))) {
+    const [, prefix, d, s, cons, rim, suffix] = m;
+    if (prefix !== undefined && suffix !== undefined) fail(text, "LT given twice");
+    const dia = Number(d);
+    const sec = Number(s);
+    const rimIn = Number(rim);
+    checkRim(text, rimIn);
+    if (dia < 20 || dia > 66) fail(text, `overall diameter ${dia} in is outside 20–66 in`);
+    if (sec < 5 || sec > 25) fail(text, `section width ${sec} in is outside 5–25 in`);
+    const sidewall = ((dia - rimIn) * MM_PER_IN) / 2;
+    const aspect = (sidewall / (sec * MM_PER_IN)) * 100;
+    if (!(aspect >= 20 && aspect <= 120)) fail(text, `overall diameter ${dia} in and rim ${rimIn} in leave an implied aspect ratio of ${aspect.toFixed(0)}, outside 20–120`);
+    return finish({
+      system: "flotation",
+      service: prefix !== undefined || suffix !== undefined ? "LT" : null,
+      construction: cons as Construction,
+      speedRatedConstruction: false,
+      sectionWidthMm: sec * MM_PER_IN,
+      aspectRatio: aspect,
+      aspectRatioImplied: true,
+      rimDiameterIn: rimIn,
+      sidewallMm: sidewall,
+      overallDiameterMm: dia * MM_PER_IN,
+      designatedDiameterIn: dia,
+      designatedSectionIn: sec,
+      ...t,
+    });
+  }
+  if ((m = NUMERIC_RE.exec(size))) {
+    const [, prefix, s, cons, rim, suffix] = m;
+    if (prefix !== undefined && suffix !== undefined) fail(text, "service type given twice (prefix and LT suffix)");
+    const sec = Number(s);
+    const rimIn = Number(rim);
+    checkRim(text, rimIn);
+    if (sec < 4 || sec > 20) fail(text, `section width ${sec} in is outside 4–20 in`);
+    const sectionMm = sec * MM_PER_IN;
+    const sidewall = (sectionMm * NUMERIC_ASPECT_RATIO) / 100;
+    return finish({
+      system: "numeric",
+      service: ((prefix ?? suffix) as ServiceType | undefined) ?? null,
+      construction: cons as Construction,
+      speedRatedConstruction: false,
+      sectionWidthMm: sectionMm,
+      aspectRatio: NUMERIC_ASPECT_RATIO,
+      aspectRatioImplied: true,
+      rimDiameterIn: rimIn,
+      sidewallMm: sidewall,
+      overallDiameterMm: rimIn * MM_PER_IN + 2 * sidewall,
+      designatedDiameterIn: null,
+      designatedSectionIn: sec,
+      ...t,
+    });
+  }
+  return fail(text, "not a recognised tire size designation");
+}
+
+function finish(fields: Omit<TireSize, "text">): TireSize {
+  return Object.freeze({ text: buildText(fields), ...fields });
+}
+
+/**
+ * Formats a tire size as its normalized designation (the inverse of {@link parseTireSize}:
+ * `parseTireSize(formatTireSize(t))` equals `t`).
+ *
+ * @example
+ * formatTireSize(parseTireSize("35X12.5r15")); // "35x12.50R15"
+ * formatTireSize(parseTireSize("p225/75 r15 102s"), { serviceDescription: false }); // "P225/75R15"
+ */
+export function formatTireSize(size: TireSize, options: { serviceDescription?: boolean } = {}): string {
+  if (options.serviceDescription === false) {
+    return buildText({ ...size, loadIndex: null, dualLoadIndex: null, speedSymbol: null, serviceDescriptionBracketed: false, loadMarking: null, loadRange: null });
+  }
+  return buildText(size);
+}
+
+/**
+ * Returns `size` when it is already parsed, otherwise parses it.
+ *
+ * @example
+ * toTireSize("265/70R17").sectionWidthMm; // 265
+ */
+export function toTireSize(size: string | TireSize): TireSize {
+  return typeof size === "string" ? parseTireSize(size) : size;
+}

@@ -1,0 +1,105 @@
+import "server-only";
+import { randomUUID } from "node:crypto";
+import { NextResponse, type NextRequest } from "next/server";
+import { z } from "zod";
+import { isDatabaseUnavailable } from "@/lib/db";
+import { type Access, type Caller, currentCaller, requireCaller } from "@/lib/auth/session";
+import { HttpError } from "./errors";
+
+const DEFAULT_MAX_BYTES = 64 * 1024;
+
+interface Spec<B extends z.ZodType | undefined, Q extends z.ZodType | undefined, P extends z.ZodType | undefined> {
+  access: Access;
+  body?: B;
+  query?: Q;
+  params?: P;
+  maxBytes?: number;
+}
+
+type Out<T> = T extends z.ZodType ? z.infer<T> : undefined;
+
+export interface Ctx<B, Q, P, A extends Access> {
+  req: NextRequest;
+  caller: A extends "public" ? Caller | null : Caller;
+  body: B;
+  query: Q;
+  params: P;
+}
+
+/** Field errors in the shape the forms read: `{ field: ["message"] }`. */
+export function fieldErrorsOf(error: z.ZodError): Record<string, string[]> {
+  const out: Record<string, string[]> = {};
+  for (const issue of error.issues) {
+    const key = issue.path.length ? issue.path.join(".") : "_";
+    (out[key] ??= []).push(issue.message);
+  }
+  return out;
+}
+
+export function json(data: unknown, init?: number | ResponseInit) {
+  return NextResponse.json(data, typeof init === "number" ? { status: init } : init);
+}
+
+async function readJson(req: NextRequest, maxBytes: number): Promise<unknown> {
+  const declared = Number(req.headers.get("content-length") ?? "0");
+  if (declared > maxBytes) throw new HttpError(413, `The request body is larger than ${Math.round(maxBytes / 1024)} KB.`);
+  const text = await req.text();
+  if (Buffer.byteLength(text) > maxBytes) throw new HttpError(413, `The request body is larger than ${Math.round(maxBytes / 1024)} KB.`);
+  if (!text.trim()) return {};
+  try {
+    return JSON.parse(text);
+  } catch {
+    throw new HttpError(400, "The request body is not valid JSON.");
+  }
+}
+
+function parse<T extends z.ZodType>(schema: T, value: unknown, status: number): z.infer<T> {
+  const result = schema.safeParse(value);
+  if (!result.success) throw new HttpError(status, "Some fields need attention.", fieldErrorsOf(result.error));
+  return result.data;
+}
+
+/**
+ * Every route handler goes through here: session and role first (anonymous callers learn
+ * nothing about the input format), then body/query/params through zod, then the handler with
+ * the caller whose ids scope its queries. Errors become JSON with a status; unexpected ones
+ * are logged with a reference and never shown.
+ */
+export function route<
+  A extends Access,
+  B extends z.ZodType | undefined = undefined,
+  Q extends z.ZodType | undefined = undefined,
+  P extends z.ZodType | undefined = undefined,
+>(
+  spec: Spec<B, Q, P> & { access: A },
+  handler: (ctx: Ctx<Out<B>, Out<Q>, Out<P>, A>) => Promise<Response | unknown>,
+) {
+  return async (req: NextRequest, context: { params: Promise<Record<string, string | string[]>> }) => {
+    try {
+      const caller = spec.access === "public" ? await currentCaller().catch(() => null) : await requireCaller(spec.access);
+      const rawParams = context?.params ? await context.params : {};
+      const params = spec.params ? parse(spec.params, rawParams, 404) : undefined;
+      const query = spec.query ? parse(spec.query, Object.fromEntries(req.nextUrl.searchParams), 400) : undefined;
+      const hasBody = !["GET", "HEAD", "DELETE"].includes(req.method);
+      const body = spec.body && hasBody ? parse(spec.body, await readJson(req, spec.maxBytes ?? DEFAULT_MAX_BYTES), 422) : undefined;
+      const result = await handler({ req, caller, body, query, params } as Ctx<Out<B>, Out<Q>, Out<P>, A>);
+      if (result instanceof Response) return result;
+      return json(result ?? { ok: true });
+    } catch (error) {
+      return errorResponse(error);
+    }
+  };
+}
+
+export function errorResponse(error: unknown): Response {
+  if (error instanceof HttpError) {
+    return json({ error: error.message, ...(error.fieldErrors ? { fieldErrors: error.fieldErrors } : {}) }, error.status);
+  }
+  const ref = randomUUID().slice(0, 8);
+  if (isDatabaseUnavailable(error)) {
+    console.error(`[${ref}] database unavailable:`, (error as Error).message);
+    return json({ error: "The database is not reachable right now. Try again in a moment.", ref }, 503);
+  }
+  console.error(`[${ref}] unhandled error in route handler:`, error);
+  return json({ error: `Something went wrong on our side. Reference ${ref}.`, ref }, 500);
+}

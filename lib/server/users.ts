@@ -1,0 +1,73 @@
+import "server-only";
+import type { Knex } from "knex";
+import type { PublicUser, Role, UserRow } from "@/lib/db/types";
+
+const PUBLIC_COLUMNS = ["id", "email", "name", "role", "shop_id", "created_at", "updated_at"] as const;
+
+export async function findUserByEmail(db: Knex, email: string): Promise<UserRow | undefined> {
+  return db<UserRow>("users").whereRaw("lower(email) = lower(?)", [email.trim()]).first();
+}
+
+export async function findUserById(db: Knex, id: string): Promise<PublicUser | undefined> {
+  return (await db<UserRow>("users").select([...PUBLIC_COLUMNS]).where({ id }).first()) as PublicUser | undefined;
+}
+
+export class DuplicateEmailError extends Error {
+  constructor() {
+    super("An account with this e-mail address already exists.");
+  }
+}
+
+export async function createUser(
+  db: Knex,
+  input: { email: string; name: string; passwordHash: string; role?: Role; shopId?: string | null },
+): Promise<PublicUser> {
+  try {
+    const [row] = await db<UserRow>("users")
+      .insert({
+        email: input.email.trim(),
+        name: input.name.trim(),
+        password_hash: input.passwordHash,
+        role: input.role ?? "member",
+        shop_id: input.shopId ?? null,
+      })
+      .returning(PUBLIC_COLUMNS);
+    return row as PublicUser;
+  } catch (e) {
+    if ((e as { code?: string }).code === "23505") throw new DuplicateEmailError();
+    throw e;
+  }
+}
+
+export interface UserListItem extends PublicUser {
+  shop_name: string | null;
+}
+
+export async function listUsers(db: Knex, opts: { search?: string; limit?: number; offset?: number } = {}) {
+  const q = db("users as u")
+    .leftJoin("shops as s", "s.id", "u.shop_id")
+    .select("u.id", "u.email", "u.name", "u.role", "u.shop_id", "u.created_at", "u.updated_at", "s.name as shop_name")
+    .orderBy("u.created_at", "asc");
+  if (opts.search) {
+    const like = `%${opts.search.replace(/[%_\\]/g, (c) => "\\" + c)}%`;
+    q.where((w) => w.whereILike("u.email", like).orWhereILike("u.name", like));
+  }
+  return (await q.limit(opts.limit ?? 200).offset(opts.offset ?? 0)) as UserListItem[];
+}
+
+export async function setUserRole(db: Knex, id: string, role: Role, shopId: string | null) {
+  const shop = role === "shop_staff" || role === "shop_owner" ? shopId : null;
+  const [row] = await db<UserRow>("users")
+    .where({ id })
+    .update({ role, shop_id: shop, updated_at: db.fn.now() as unknown as Date })
+    .returning(PUBLIC_COLUMNS);
+  return row as PublicUser | undefined;
+}
+
+export async function setPassword(db: Knex, id: string, passwordHash: string) {
+  await db("users").where({ id }).update({ password_hash: passwordHash, updated_at: db.fn.now() });
+}
+
+export async function listShops(db: Knex) {
+  return db("shops").select("id", "name").orderBy("name");
+}

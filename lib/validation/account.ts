@@ -1,0 +1,50 @@
+import { z } from "zod";
+
+/** Shared by the forms (react-hook-form resolver) and the route handlers. */
+export const emailField = z
+  .string()
+  .trim()
+  .min(1, "Enter your e-mail address.")
+  .max(254, "That e-mail address is too long.")
+  .pipe(z.email("Enter an e-mail address like name@example.com."));
+
+export const passwordField = z
+  .string()
+  .min(10, "Use at least 10 characters.")
+  .max(200, "Use at most 200 characters.");
+
+export const signUpSchema = z.object({
+  name: z.string().trim().min(1, "Enter your name.").max(100, "Use at most 100 characters."),
+  email: emailField,
+  password: passwordField,
+});
+export type SignUpInput = z.infer<typeof signUpSchema>;
+
+export const signInSchema = z.object({
+  email: emailField,
+  password: z.string().min(1, "Enter your password.").max(200, "Use at most 200 characters."),
+});
+export type SignInInput = z.infer<typeof signInSchema>;
+
+export const forgotPasswordSchema = z.object({ email: emailField });
+export type ForgotPasswordInput = z.infer<typeof forgotPasswordSchema>;
+
+export const resetPasswordSchema = z
+  .object({
+    token: z.string().regex(/^[A-Za-z0-9_-]{43}$/, "This reset link is not valid. Ask for a new one."),
+    password: passwordField,
+    confirm: z.string(),
+  })
+  .refine((v) => v.password === v.confirm, { path: ["confirm"], message: "The two passwords differ." });
+export type ResetPasswordInput = z.infer<typeof resetPasswordSchema>;
+
+export const roleChangeSchema = z
+  .object({
+    role: z.enum(["member", "shop_staff", "shop_owner", "admin"]),
+    shopId: z.uuid("Pick a shop.").nullable().optional(),
+  })
+  .refine((v) => (v.role === "shop_staff" || v.role === "shop_owner" ? !!v.shopId : true), {
+    path: ["shopId"],
+    message: "Shop roles need a shop.",
+  });
+export type RoleChangeInput = z.infer<typeof roleChangeSchema>;

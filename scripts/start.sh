@@ -1,0 +1,67 @@
+#!/usr/bin/env bash
+# One command: install what is missing, start PostgreSQL, the local mail server and the app with
+# demo data at http://127.0.0.1:3000. Ctrl-C stops everything cleanly.
+source "$(dirname "$0")/lib.sh"
+
+PORT="${PORT:-3000}"
+PGDATA_DIR="$ROOT/.data/pg-demo"
+PGPORT_DEMO=55432
+PIDS=()
+
+cleanup() {
+  trap - EXIT INT TERM
+  log "stopping"
+  for pid in "${PIDS[@]}"; do kill "$pid" 2>/dev/null || true; done
+  for pid in "${PIDS[@]}"; do wait "$pid" 2>/dev/null || true; done
+  if [ -z "${EXTERNAL_DB:-}" ]; then pg_down "$PGDATA_DIR"; log "PostgreSQL stopped"; fi
+}
+trap cleanup EXIT INT TERM
+
+ensure_node_modules
+ensure_env_file
+
+if [ -n "${DATABASE_URL:-}" ]; then
+  EXTERNAL_DB=1
+  log "using DATABASE_URL from the environment"
+else
+  pg_up "$PGDATA_DIR" "$PGPORT_DEMO" hubface
+  export DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT_DEMO/hubface"
+fi
+
+export NEXTAUTH_URL="${NEXTAUTH_URL:-http://127.0.0.1:$PORT}"
+export APP_ORIGIN="${APP_ORIGIN:-$NEXTAUTH_URL}"
+export SMTP_PORT="${SMTP_PORT:-2525}" OUTBOX_PORT="${OUTBOX_PORT:-2526}"
+export SMTP_URL="${SMTP_URL:-smtp://127.0.0.1:$SMTP_PORT}"
+export OUTBOX_URL="${OUTBOX_URL:-http://127.0.0.1:$OUTBOX_PORT}"
+export OUTBOX_FILE="$ROOT/.data/outbox.json"
+mkdir -p .data
+
+log "migrating the database"
+npm run -s db:migrate >/dev/null
+log "loading demo data (kept when already there)"
+npm run -s db:seed >/dev/null
+
+tsx scripts/services/fake-smtp.ts & PIDS+=($!)
+
+if [ ! -f .next/BUILD_ID ] || [ -n "$(find app components lib proxy.ts next.config.mjs tailwind.config.ts package-lock.json -newer .next/BUILD_ID -print -quit 2>/dev/null)" ]; then
+  log "building the app (next build)"
+  next build >/dev/null
+fi
+
+node node_modules/next/dist/bin/next start -H 127.0.0.1 -p "$PORT" & PIDS+=($!)
+wait_for_http "http://127.0.0.1:$PORT/api/health" || { log "the app did not start"; exit 1; }
+
+cat <<INFO
+
+  Hubface is running at http://127.0.0.1:$PORT   (Ctrl-C stops it and PostgreSQL)
+
+  Demo accounts (password for all: hubface-demo-1)
+    member       juno@demo.hubface.test      an enthusiast with a saved garage
+    shop_staff   teo@demo.hubface.test       counter staff at Quarry Flats Tire & Fab
+    shop_owner   mara@demo.hubface.test      owner of Quarry Flats Tire & Fab
+    admin        admin@demo.hubface.test     sees users and the development outbox
+
+  Mail sent by the app lands in the outbox: sign in as admin → Outbox (/admin/outbox)
+
+INFO
+wait -n "${PIDS[@]}" || true

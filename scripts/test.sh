@@ -1,0 +1,78 @@
+#!/usr/bin/env bash
+# One command: install what is missing and run every test suite — lint, types, unit and
+# integration (Vitest against a throw-away PostgreSQL), then browser tests in Chromium against
+# `next start`. Ends with one line "N passed, N failed" summing every suite.
+source "$(dirname "$0")/lib.sh"
+set +e
+
+RESULTS="$ROOT/.data/test-results"
+PGDATA_DIR="$ROOT/.data/pg-test"
+PGPORT_TEST=55433
+APP_PORT=3100
+PIDS=()
+
+cleanup() {
+  trap - EXIT INT TERM
+  for pid in "${PIDS[@]}"; do kill "$pid" 2>/dev/null; done
+  for pid in "${PIDS[@]}"; do wait "$pid" 2>/dev/null; done
+  pg_down "$PGDATA_DIR"
+}
+trap cleanup EXIT INT TERM
+
+set -e
+ensure_node_modules
+ensure_postgres
+ensure_chromium
+set +e
+rm -rf "$RESULTS"; mkdir -p "$RESULTS"
+
+record() { # record NAME PASSED FAILED
+  echo "{\"suite\":\"$1\",\"passed\":$2,\"failed\":$3}" > "$RESULTS/$1.count.json"
+}
+check() { # check NAME command...: a whole command counted as one test
+  local name="$1"; shift
+  log "$name"
+  if "$@"; then record "$name" 1 0; else record "$name" 0 1; fi
+}
+
+# A throw-away cluster: fsync off is fine here, never for data anyone keeps.
+pg_up "$PGDATA_DIR" "$PGPORT_TEST" postgres "-c fsync=off -c synchronous_commit=off -c full_page_writes=off"
+PSQL=("$PGBIN/psql" -q -h 127.0.0.1 -p "$PGPORT_TEST" -U postgres -d postgres)
+for dbn in hubface_test hubface_e2e; do
+  "${PSQL[@]}" -c "drop database if exists $dbn with (force)" -c "create database $dbn" >/dev/null
+done
+export PGHOST=127.0.0.1 PGPORT_TEST
+export TEST_DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT_TEST/hubface_test"
+export E2E_DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT_TEST/hubface_e2e"
+export NEXTAUTH_SECRET="test-secret-$(node -e 'console.log(require("crypto").randomBytes(16).toString("hex"))')"
+
+check lint eslint . --max-warnings=0
+check typecheck tsc --noEmit
+
+log "unit and integration tests (Vitest)"
+DATABASE_URL="$TEST_DATABASE_URL" vitest run --project unit --project integration \
+  --reporter=default --reporter=json --outputFile.json="$RESULTS/vitest.json"
+
+log "building the app for browser tests"
+export DATABASE_URL="$E2E_DATABASE_URL"
+export SMTP_PORT=2625 OUTBOX_PORT=2626
+export SMTP_URL="smtp://127.0.0.1:2625" OUTBOX_URL="http://127.0.0.1:2626"
+export NEXTAUTH_URL="http://127.0.0.1:$APP_PORT" APP_ORIGIN="http://127.0.0.1:$APP_PORT"
+export E2E_BASE_URL="http://127.0.0.1:$APP_PORT"
+export PG_TEST_DATA_DIR="$PGDATA_DIR" PGBIN
+if next build > "$RESULTS/next-build.log" 2>&1; then
+  record build 1 0
+  npm run -s db:migrate >/dev/null && npm run -s db:seed >/dev/null
+  tsx scripts/services/fake-smtp.ts > "$RESULTS/fake-smtp.log" 2>&1 & PIDS+=($!)
+  node node_modules/next/dist/bin/next start -H 127.0.0.1 -p "$APP_PORT" > "$RESULTS/next-start.log" 2>&1 & PIDS+=($!)
+  if wait_for_http "$E2E_BASE_URL/api/health"; then
+    log "browser and HTTP tests (Chromium)"
+    vitest run --project browser --reporter=default --reporter=json --outputFile.json="$RESULTS/vitest-browser.json"
+  else
+    log "the app did not start; see $RESULTS/next-start.log"; record browser-start 0 1
+  fi
+else
+  cat "$RESULTS/next-build.log"; record build 0 1
+fi
+
+node scripts/sum-results.mjs "$RESULTS"

@@ -1,0 +1,96 @@
+import { NextRequest } from "next/server";
+import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
+import { rebuild, testDb } from "./support/db";
+
+// Mail goes nowhere here; the browser tests cover the real SMTP path.
+const sent = vi.hoisted(() => [] as { to: string; text: string }[]);
+vi.mock("@/lib/mail", () => ({
+  sendMail: async (m: { to: string; text: string }) => void sent.push(m),
+  appOrigin: () => "http://127.0.0.1:3000",
+}));
+
+const db = testDb();
+beforeAll(() => rebuild(db));
+afterAll(async () => {
+  await db.destroy();
+  const { db: appDb } = await import("@/lib/db");
+  await appDb.destroy();
+});
+
+const signup = (await import("@/app/api/account/signup/route")).POST;
+const forgot = (await import("@/app/api/account/password/forgot/route")).POST;
+const reset = (await import("@/app/api/account/password/reset/route")).POST;
+const ctx = { params: Promise.resolve({}) };
+
+function post(path: string, body: string | object, headers: Record<string, string> = {}) {
+  return new NextRequest(`http://127.0.0.1:3000${path}`, {
+    method: "POST",
+    body: typeof body === "string" ? body : JSON.stringify(body),
+    headers: { "content-type": "application/json", ...headers },
+  });
+}
+
+describe("sign-up route", () => {
+  it("creates an account (201) with a hashed password", async () => {
+    const res = await signup(post("/api/account/signup", { name: "Wren Ostrander", email: "wren@example.test", password: "correct horse battery" }), ctx);
+    expect(res.status).toBe(201);
+    const row = await db("users").where({ email: "wren@example.test" }).first();
+    expect(row.password_hash).toMatch(/^\$2[aby]\$/);
+    expect(row.role).toBe("member");
+  });
+
+  it("gives field errors for a bad e-mail and a short password, and writes nothing", async () => {
+    const before = await db("users").count<{ count: string }[]>();
+    const res = await signup(post("/api/account/signup", { name: "", email: "not-an-email", password: "short" }), ctx);
+    expect(res.status).toBe(422);
+    const body = await res.json();
+    expect(Object.keys(body.fieldErrors).sort()).toEqual(["email", "name", "password"]);
+    expect(body.fieldErrors.password[0]).toMatch(/10 characters/);
+    expect(await db("users").count()).toEqual(before);
+  });
+
+  it("refuses a duplicate e-mail with a field error on email", async () => {
+    const res = await signup(post("/api/account/signup", { name: "Again", email: "WREN@example.test", password: "another long password" }), ctx);
+    expect(res.status).toBe(422);
+    expect((await res.json()).fieldErrors.email[0]).toMatch(/already exists/);
+  });
+
+  it("answers 400 to malformed JSON and 413 to an oversized body — never 500", async () => {
+    expect((await signup(post("/api/account/signup", "{not json"), ctx)).status).toBe(400);
+    const huge = JSON.stringify({ name: "x".repeat(70 * 1024), email: "a@b.test", password: "long enough password" });
+    expect((await signup(post("/api/account/signup", huge), ctx)).status).toBe(413);
+  });
+});
+
+describe("password reset routes", () => {
+  it("mail a single-use link that changes the password", async () => {
+    sent.length = 0;
+    const res = await forgot(post("/api/account/password/forgot", { email: "wren@example.test" }), ctx);
+    expect(res.status).toBe(200);
+    expect(sent).toHaveLength(1);
+    const token = /token=([A-Za-z0-9_-]{43})/.exec(sent[0]!.text)?.[1];
+    expect(token).toBeDefined();
+    const before = (await db("users").where({ email: "wren@example.test" }).first()).password_hash;
+
+    const ok = await reset(post("/api/account/password/reset", { token, password: "a brand new secret", confirm: "a brand new secret" }), ctx);
+    expect(ok.status).toBe(200);
+    expect((await db("users").where({ email: "wren@example.test" }).first()).password_hash).not.toBe(before);
+
+    const again = await reset(post("/api/account/password/reset", { token, password: "a third secret!!", confirm: "a third secret!!" }), ctx);
+    expect(again.status).toBe(422);
+  });
+
+  it("answer the same whether or not the address has an account", async () => {
+    sent.length = 0;
+    const a = await (await forgot(post("/api/account/password/forgot", { email: "nobody@example.test" }), ctx)).json();
+    const b = await (await forgot(post("/api/account/password/forgot", { email: "wren@example.test" }), ctx)).json();
+    expect(a).toEqual(b);
+    expect(sent.map((m) => m.to)).toEqual(["wren@example.test"]);
+  });
+
+  it("refuse mismatched passwords with a field error", async () => {
+    const res = await reset(post("/api/account/password/reset", { token: "a".repeat(43), password: "one long password", confirm: "two long password" }), ctx);
+    expect(res.status).toBe(422);
+    expect((await res.json()).fieldErrors.confirm).toBeDefined();
+  });
+});

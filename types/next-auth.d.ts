@@ -1,0 +1,18 @@
+import type { Role } from "@/lib/db/types";
+import "next-auth";
+import "next-auth/jwt";
+
+declare module "next-auth" {
+  interface Session {
+    user?: { id: string; role: Role; shopId: string | null; name?: string | null; email?: string | null };
+  }
+}
+
+declare module "next-auth/jwt" {
+  interface JWT {
+    uid?: string;
+    role?: Role;
+    shopId?: string | null;
+    checkedAt?: number;
+  }
+}
