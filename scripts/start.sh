@@ -5,7 +5,7 @@ source "$(dirname "$0")/lib.sh"
 
 PORT="${PORT:-3000}"
 PGDATA_DIR="$ROOT/.data/pg-demo"
-PGPORT_DEMO=55432
+PGPORT_DEMO="${HUBFACE_PG_PORT:-55432}"
 PIDS=()
 
 cleanup() {

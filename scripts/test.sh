@@ -7,8 +7,10 @@ set +e
 
 RESULTS="$ROOT/.data/test-results"
 PGDATA_DIR="$ROOT/.data/pg-test"
-PGPORT_TEST=55433
-APP_PORT=3100
+PGPORT_TEST="${HUBFACE_TEST_PG_PORT:-55433}"
+APP_PORT="${HUBFACE_TEST_APP_PORT:-3100}"
+T_SMTP="${HUBFACE_TEST_SMTP_PORT:-2625}"
+T_OUTBOX="${HUBFACE_TEST_OUTBOX_PORT:-2626}"
 PIDS=()
 
 cleanup() {
@@ -55,8 +57,8 @@ DATABASE_URL="$TEST_DATABASE_URL" vitest run --project unit --project integratio
 
 log "building the app for browser tests"
 export DATABASE_URL="$E2E_DATABASE_URL"
-export SMTP_PORT=2625 OUTBOX_PORT=2626
-export SMTP_URL="smtp://127.0.0.1:2625" OUTBOX_URL="http://127.0.0.1:2626"
+export SMTP_PORT="$T_SMTP" OUTBOX_PORT="$T_OUTBOX"
+export SMTP_URL="smtp://127.0.0.1:$T_SMTP" OUTBOX_URL="http://127.0.0.1:$T_OUTBOX"
 export NEXTAUTH_URL="http://127.0.0.1:$APP_PORT" APP_ORIGIN="http://127.0.0.1:$APP_PORT"
 export E2E_BASE_URL="http://127.0.0.1:$APP_PORT"
 export PG_TEST_DATA_DIR="$PGDATA_DIR" PGBIN

@@ -1,0 +1,40 @@
+import { type MatrixCase, only, publicRoute, signedIn } from "./types";
+
+const MEMBER_ID = "a1000000-0000-4000-8000-000000000001";
+
+export const cases: MatrixCase[] = [
+  { route: "/api/health", method: "GET", path: "/api/health", expect: publicRoute(200) },
+  { route: "/api/me", method: "GET", path: "/api/me", expect: signedIn(200) },
+  {
+    route: "/api/account/signup",
+    method: "POST",
+    path: "/api/account/signup",
+    body: { name: "", email: "bad", password: "x" },
+    expect: publicRoute(422),
+    note: "public; invalid input gives field errors for everyone",
+  },
+  { route: "/api/account/password/forgot", method: "POST", path: "/api/account/password/forgot", body: { email: "nobody@example.test" }, expect: publicRoute(200) },
+  {
+    route: "/api/account/password/reset",
+    method: "POST",
+    path: "/api/account/password/reset",
+    body: { token: "x".repeat(43), password: "long enough pass", confirm: "long enough pass" },
+    expect: publicRoute(422),
+  },
+  { route: "/api/admin/users", method: "GET", path: "/api/admin/users", expect: only(["admin"]) },
+  {
+    route: "/api/admin/users/[id]",
+    method: "PATCH",
+    path: `/api/admin/users/${MEMBER_ID}`,
+    body: { role: "member" },
+    expect: only(["admin"]),
+  },
+  { route: "/api/admin/outbox", method: "GET", path: "/api/admin/outbox", expect: only(["admin"]) },
+];
+
+// next-auth's own handler: the session endpoint answers everyone; sign-out without its CSRF
+// token is refused with a redirect to the confirmation page, never performed.
+cases.push(
+  { route: "/api/auth/[...nextauth]", method: "GET", path: "/api/auth/session", expect: publicRoute(200) },
+  { route: "/api/auth/[...nextauth]", method: "POST", path: "/api/auth/signout", body: {}, expect: publicRoute(302), note: "no CSRF token" },
+);

@@ -1,0 +1,63 @@
+import { BASE } from "./browser";
+
+export const DEMO_PASSWORD = "hubface-demo-1";
+export const DEMO = {
+  member: "juno@demo.hubface.test",
+  shop_staff: "teo@demo.hubface.test",
+  shop_owner: "mara@demo.hubface.test",
+  admin: "admin@demo.hubface.test",
+} as const;
+export type DemoRole = keyof typeof DEMO;
+export type Who = "anonymous" | DemoRole;
+export const EVERYONE: Who[] = ["anonymous", "member", "shop_staff", "shop_owner", "admin"];
+
+/** Cookies as a browser would keep them, enough for next-auth's credential flow. */
+class Jar {
+  private cookies = new Map<string, string>();
+  take(res: Response) {
+    for (const c of res.headers.getSetCookie()) {
+      const [pair] = c.split(";");
+      const i = pair!.indexOf("=");
+      this.cookies.set(pair!.slice(0, i), pair!.slice(i + 1));
+    }
+  }
+  header() {
+    return [...this.cookies].map(([k, v]) => `${k}=${v}`).join("; ");
+  }
+}
+
+/** Signs in over HTTP exactly as the sign-in form does and returns the Cookie header. */
+export async function sessionCookie(email: string, password = DEMO_PASSWORD): Promise<string> {
+  const jar = new Jar();
+  const csrfRes = await fetch(`${BASE}/api/auth/csrf`);
+  jar.take(csrfRes);
+  const { csrfToken } = (await csrfRes.json()) as { csrfToken: string };
+  const res = await fetch(`${BASE}/api/auth/callback/credentials`, {
+    method: "POST",
+    redirect: "manual",
+    headers: { "Content-Type": "application/x-www-form-urlencoded", Cookie: jar.header() },
+    body: new URLSearchParams({ csrfToken, email, password, json: "true" }),
+  });
+  jar.take(res);
+  const cookie = jar.header();
+  if (!/session-token=/.test(cookie)) throw new Error(`sign-in as ${email} failed (${res.status} ${res.headers.get("location")})`);
+  return cookie;
+}
+
+const cache = new Map<Who, Promise<string>>();
+/** One session per demo role for the whole test file. */
+export function cookieFor(who: Who): Promise<string> {
+  if (who === "anonymous") return Promise.resolve("");
+  if (!cache.has(who)) cache.set(who, sessionCookie(DEMO[who]));
+  return cache.get(who)!;
+}
+
+export async function call(who: Who, method: string, path: string, body?: unknown): Promise<Response> {
+  const cookie = await cookieFor(who);
+  return fetch(`${BASE}${path}`, {
+    method,
+    redirect: "manual",
+    headers: { ...(cookie ? { Cookie: cookie } : {}), ...(body === undefined ? {} : { "Content-Type": "application/json" }) },
+    body: body === undefined ? undefined : typeof body === "string" ? body : JSON.stringify(body),
+  });
+}
