@@ -106,7 +106,9 @@ export function CrossSection({ result: r, prefs, className, id = "xsec" }: { res
     const t = Math.tan((kpi * Math.PI) / 180);
     const xg = -r.current.effectiveOffsetMm;
     const yTop = top + fontSize * 0.5;
-    axis = { x1: xg - (Rc - yTop) * t, y1: yTop, x2: xg + (bottom - Rc) * t, y2: bottom };
+    // Rounded: server and browser may differ in the last bit of tan (hydration must match).
+    const r1 = (v: number) => Math.round(v * 10) / 10;
+    axis = { x1: r1(xg - (Rc - yTop) * t), y1: r1(yTop), x2: r1(xg + (bottom - Rc) * t), y2: r1(bottom) };
   }
   const summary = `Current ${r.current.tireText} reaches ${len(r.current.innerSwingMm)} inboard and ${len(r.current.outerSwingMm)} outboard of the hub face; planned ${r.planned.tireText} reaches ${len(r.planned.innerSwingMm)} inboard and ${len(r.planned.outerSwingMm)} outboard, and stands ${len(Math.abs(groundGap))} ${groundGap >= 0 ? "lower" : "higher"} at the ground.`;
 
