@@ -210,7 +210,7 @@ export function SetupDetailTable({ result: r, prefs }: { result: ComparisonResul
   return (
     <section aria-labelledby="details-title">
       <h2 id="details-title" className="mb-2 text-lg font-semibold">Both setups in detail</h2>
-      <div className="overflow-x-auto rounded-lg ring-1 ring-basalt-100">
+      <div className="overflow-x-auto rounded-lg ring-1 ring-basalt-100" tabIndex={0} role="region" aria-label="Both setups in detail (scrolls sideways on narrow screens)">
         <table className="w-full min-w-[20rem] border-collapse bg-white text-sm tabular-nums">
           <thead>
             <tr className="bg-basalt-50 text-left">

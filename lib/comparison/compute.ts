@@ -27,7 +27,7 @@ import {
   type SetupComparison,
   type SetupGeometry,
 } from "@/lib/fitment";
-import { type ComparisonInput, type SetupInputValues, DEFAULT_FLANGE_ALLOWANCE_IN, positionOffsetMm } from "./schema";
+import { type ComparisonInput, type SetupInputValues, DEFAULT_FLANGE_ALLOWANCE_IN, positionOffsetMm } from "./model";
 
 /** Speedometer error that earns a warning, percent (common practice, no source). */
 export const SPEEDO_WARN_PCT = 3;

@@ -6,7 +6,7 @@
  */
 import { KM_PER_MILE, formatLength, inToMm, mmToIn, parseLength, parseTireSize } from "@/lib/fitment";
 import type { DisplayPrefs } from "./format";
-import { type ComparisonInput, type SetupInputValues, type BackspacingReferenceValue, DEFAULT_FLANGE_ALLOWANCE_IN, comparisonInputSchema } from "./schema";
+import { type ComparisonInput, type SetupInputValues, type BackspacingReferenceValue, DEFAULT_FLANGE_ALLOWANCE_IN, checkComparison } from "./model";
 
 export interface SetupDraft {
   tire: string;
@@ -210,9 +210,9 @@ export function readDraft(draft: Draft, prefs: DisplayPrefs): { input: Compariso
     delete errors["vehicle.axleRatio"];
     candidate.vehicle.axleRatio = Number(v.axle.split(":")[0]);
   }
-  const checked = comparisonInputSchema.safeParse(candidate);
-  if (!checked.success) {
-    for (const issue of checked.error.issues) {
+  const checked = checkComparison(candidate);
+  if (!checked.ok) {
+    for (const issue of checked.issues) {
       const key = issue.path.join(".");
       const field = key.startsWith("vehicle.cruiseSpeedsMph") ? "vehicle.cruiseSpeedsMph" : key;
       if (!(field in errors)) {
@@ -221,5 +221,5 @@ export function readDraft(draft: Draft, prefs: DisplayPrefs): { input: Compariso
     }
   }
   if (Object.keys(errors).length > 0) return { input: null, errors };
-  return { input: checked.success ? checked.data : null, errors };
+  return { input: checked.ok ? checked.value : null, errors };
 }

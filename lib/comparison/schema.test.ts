@@ -61,3 +61,19 @@ describe("comparison input schema", () => {
     );
   });
 });
+
+describe("zod adapter over checkComparison", () => {
+  it("returns the clean copy (unknown fields dropped, tire trimmed) and the same issues as model.ts", async () => {
+    const { checkComparison } = await import("./model");
+    const dirty = { ...DEFAULT_INPUT, extra: 1, planned: { ...DEFAULT_INPUT.planned, tire: "  37x12.50R17LT  ", note: "x" } };
+    const parsed = comparisonInputSchema.parse(dirty);
+    expect(parsed).toEqual({ ...DEFAULT_INPUT, planned: { ...DEFAULT_INPUT.planned, tire: "37x12.50R17LT" } });
+    const bad = { ...DEFAULT_INPUT, vehicle: { ...DEFAULT_INPUT.vehicle, cruiseSpeedsMph: [60, 400] } };
+    const z = comparisonInputSchema.safeParse(bad);
+    const m = checkComparison(bad);
+    expect(z.success).toBe(false);
+    expect(m.ok).toBe(false);
+    expect(z.error?.issues.map((i) => [i.path.join("."), i.message])).toEqual(m.ok ? [] : m.issues.map((i) => [i.path.join("."), i.message]));
+    expect(z.error?.issues[0]?.message).toBe("A cruise speed must be between 5 and 150 mph (e.g. 65).");
+  });
+});

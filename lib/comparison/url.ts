@@ -22,9 +22,9 @@ import {
   type Position,
   type SetupInputValues,
   type VehicleValues,
-  comparisonInputSchema,
+  checkComparison,
   positionOffsetMm,
-} from "./schema";
+} from "./model";
 
 /** What `decodeComparison` accepts: a query string (with or without `?`), URLSearchParams, or Next's searchParams object. */
 export type QueryLike = string | URLSearchParams | Record<string, string | string[] | undefined>;
@@ -202,7 +202,7 @@ export function decodeComparison(q: QueryLike, defaults: ComparisonInput = DEFAU
     planned: decodeSetup("p", p, defaults.planned, problems),
     vehicle: decodeVehicle(p, problems),
   };
-  const checked = comparisonInputSchema.safeParse(input);
-  if (!checked.success) return { input: defaults, problems: [...problems, "comparison"] };
-  return { input: checked.data, problems };
+  const checked = checkComparison(input);
+  if (!checked.ok) return { input: defaults, problems: [...problems, "comparison"] };
+  return { input: checked.value, problems };
 }

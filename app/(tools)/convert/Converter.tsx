@@ -60,7 +60,7 @@ function TireSizes() {
           Same rim diameter only
         </label>
       </div>
-      <div className="mt-2 min-h-64 overflow-x-auto">
+      <div className="mt-2 min-h-64 overflow-x-auto" tabIndex={0} role="region" aria-label="Equivalent sizes (scrolls sideways on narrow screens)">
         {size && (
           <table className="w-full min-w-[22rem] text-sm tabular-nums" data-testid="equivalents">
             <caption className="mb-1 text-left text-sm font-medium text-basalt-700">Nearest {target} sizes to {size.text}</caption>

@@ -80,8 +80,8 @@ export function SetupFields({
           name={id("mode")}
           value={draft.mode}
           options={[
-            { value: "offset", label: "Offset (mm)" },
-            { value: "backspacing", label: "Backspacing (in)" },
+            { value: "offset", label: "Offset" },
+            { value: "backspacing", label: "Backspacing" },
           ]}
           onChange={onModeChange}
         />

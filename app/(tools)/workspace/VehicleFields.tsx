@@ -3,7 +3,7 @@ import { Badge } from "@/components/ui/Badge";
 import { TextField } from "@/components/ui/TextField";
 import type { DraftErrors, VehicleDraft } from "@/lib/comparison/draft";
 import type { DisplayPrefs } from "@/lib/comparison/format";
-import { DEFAULT_VEHICLE } from "@/lib/comparison/schema";
+import { DEFAULT_VEHICLE } from "@/lib/comparison/model";
 
 /** Vehicle figures in a collapsible panel; each says when it is the default. */
 export function VehicleFields({

@@ -9,7 +9,7 @@ import { Button } from "@/components/ui/Button";
 import { computeComparison } from "@/lib/comparison/compute";
 import { type Draft, type DraftErrors, type SetupDraft, draftFromInput, followTire, inchText, readDraft, vehicleUnitFields } from "@/lib/comparison/draft";
 import type { DisplayPrefs } from "@/lib/comparison/format";
-import { type ComparisonInput, DEFAULT_INPUT } from "@/lib/comparison/schema";
+import { type ComparisonInput, DEFAULT_INPUT } from "@/lib/comparison/model";
 import { decodeComparison, encodeComparison } from "@/lib/comparison/url";
 import { SetupFields } from "./SetupFields";
 import { VehicleFields } from "./VehicleFields";
