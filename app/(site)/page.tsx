@@ -32,9 +32,17 @@ export default async function HomePage() {
         </div>
       </section>
       <section className="grid gap-4 md:grid-cols-3" aria-label="What Hubface does">
-        {JOBS.map((j) => (
+        {JOBS.map((j, i) => (
           <Card key={j.title}>
-            <h2 className="text-lg font-semibold">{j.title}</h2>
+            <h2 className="text-lg font-semibold">
+              {i === 0 ? (
+                <Link href="/workspace" className="underline decoration-ember-400 underline-offset-4 hover:text-ember-700">
+                  {j.title}
+                </Link>
+              ) : (
+                j.title
+              )}
+            </h2>
             <p className="mt-2 text-sm text-basalt-600">{j.body}</p>
           </Card>
         ))}

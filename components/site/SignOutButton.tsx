@@ -1,5 +1,4 @@
 "use client";
-import { signOut } from "next-auth/react";
 import { useState } from "react";
 import { Button } from "@/components/ui/Button";
 
@@ -12,7 +11,8 @@ export function SignOutButton() {
       pending={pending}
       onClick={() => {
         setPending(true);
-        void signOut({ callbackUrl: "/" });
+        // Loaded on click: the header is on every page, and most visitors never sign out.
+        void import("next-auth/react").then(({ signOut }) => signOut({ callbackUrl: "/" }));
       }}
     >
       Sign out

@@ -8,6 +8,9 @@ export interface NavItem {
 }
 
 export const NAV: NavItem[] = [
+  { href: "/workspace", label: "Workspace", roles: "all" },
+  { href: "/convert", label: "Converter", roles: "all" },
+  { href: "/beadlock", label: "Ring helper", roles: "all" },
   { href: "/account", label: "Account", roles: "signed-in" },
   { href: "/shop", label: "Shop", roles: ["shop_staff", "shop_owner"] },
   { href: "/admin/users", label: "Users", roles: ["admin"] },

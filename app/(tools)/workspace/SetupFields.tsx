@@ -1,0 +1,141 @@
+"use client";
+import { TextField } from "@/components/ui/TextField";
+import { cx } from "@/components/ui/cx";
+import { Segmented } from "@/components/comparison/Segmented";
+import type { SetupFigures } from "@/lib/comparison/compute";
+import type { DraftErrors, SetupDraft } from "@/lib/comparison/draft";
+import { type DisplayPrefs, formatInches, formatLen, formatNumber } from "@/lib/comparison/format";
+import { parseTireSize } from "@/lib/fitment";
+import { BackspacingDiagram } from "./BackspacingDiagram";
+
+type Side = "current" | "planned";
+
+function tireReading(text: string, prefs: DisplayPrefs): string | null {
+  try {
+    const t = parseTireSize(text);
+    return `Reads as ${t.text} · ${formatLen(t.overallDiameterMm, prefs, { decimals: 1 })} tall, ${formatLen(t.sectionWidthMm, prefs, { decimals: 1 })} wide`;
+  } catch {
+    return null;
+  }
+}
+
+/**
+ * The inputs of one setup. `onChange` gets the whole new draft; `onCommit` marks the end of an
+ * edit (blur, or a discrete choice) so the browser history gets one entry per edit.
+ */
+export function SetupFields({
+  side,
+  draft,
+  errors,
+  figures,
+  prefs,
+  onChange,
+  onTireChange,
+  onModeChange,
+  onCommit,
+}: {
+  side: Side;
+  draft: SetupDraft;
+  errors: DraftErrors;
+  figures: SetupFigures;
+  prefs: DisplayPrefs;
+  onChange: (next: SetupDraft, discrete?: boolean) => void;
+  onTireChange: (tire: string) => void;
+  onModeChange: (mode: SetupDraft["mode"]) => void;
+  onCommit: () => void;
+}) {
+  const e = (path: string) => errors[`${side}.${path}`];
+  const set = (patch: Partial<SetupDraft>, discrete = false) => onChange({ ...draft, ...patch }, discrete);
+  const title = side === "current" ? "Current setup" : "Planned setup";
+  const reading = e("tire") ? null : tireReading(draft.tire, prefs);
+  const id = (f: string) => `${side}-${f}`;
+  return (
+    <section
+      aria-labelledby={id("title")}
+      className={cx(
+        "rounded-card bg-white p-4 shadow-card ring-1 sm:p-5",
+        side === "current" ? "border-t-4 border-steel-500 ring-steel-100" : "border-t-4 border-dashed border-ember-500 ring-ember-100",
+      )}
+    >
+      <h2 id={id("title")} className={cx("mb-3 text-lg font-semibold", side === "current" ? "text-steel-800" : "text-ember-800")}>
+        {title}
+      </h2>
+      <div className="flex flex-col gap-3" onBlur={onCommit}>
+        <TextField
+          label="Tire size"
+          name={id("tire")}
+          value={draft.tire}
+          autoComplete="off"
+          spellCheck={false}
+          onChange={(ev) => onTireChange(ev.target.value)}
+          error={e("tire")}
+          hint={reading ?? "e.g. 265/70R17, LT285/70R17 121/118Q or 37x12.50R17LT"}
+        />
+        <div className="grid grid-cols-2 gap-3">
+          <TextField label="Wheel diameter (in)" name={id("diameter")} inputMode="decimal" value={draft.diameter} onChange={(ev) => set({ diameter: ev.target.value })} error={e("wheelDiameterIn")} />
+          <TextField label="Wheel width (in)" name={id("width")} inputMode="decimal" value={draft.width} onChange={(ev) => set({ width: ev.target.value })} error={e("wheelWidthIn")} hint={`suits ${figures.rimWidthMinIn}–${figures.rimWidthMaxIn} in`} />
+        </div>
+        <Segmented
+          legend="Wheel position given as"
+          name={id("mode")}
+          value={draft.mode}
+          options={[
+            { value: "offset", label: "Offset" },
+            { value: "backspacing", label: "Backspacing" },
+          ]}
+          onChange={onModeChange}
+        />
+        {draft.mode === "offset" ? (
+          <TextField
+            label="Offset (mm)"
+            name={id("offset")}
+            inputMode="text"
+            value={draft.offset}
+            onChange={(ev) => set({ offset: ev.target.value })}
+            error={e("position.offsetMm")}
+            hint={`Minus for a wheel that sits further out. Backspacing ${formatInches(figures.backspacingFlangeIn, prefs)} to the flange edge, ${formatInches(figures.backspacingBeadSeatIn, prefs)} to the bead seat.`}
+          />
+        ) : (
+          <div className="flex flex-col gap-3 rounded-lg bg-dune-50 p-3 ring-1 ring-dune-200">
+            <TextField
+              label="Backspacing (in)"
+              name={id("backspacing")}
+              inputMode="text"
+              value={draft.backspacing}
+              onChange={(ev) => set({ backspacing: ev.target.value })}
+              error={e("position.backspacingIn")}
+              hint={`Fractions work: 4-3/4, 4 3/4 or 4.75. Offset ${formatNumber(figures.offsetMm, 1, { signed: true })} mm.`}
+            />
+            <Segmented
+              legend="Measured to"
+              name={id("reference")}
+              value={draft.reference}
+              options={[
+                { value: "flange", label: "Flange edge" },
+                { value: "bead-seat", label: "Bead seat" },
+              ]}
+              onChange={(reference) => set({ reference }, true)}
+            />
+            <p className="text-xs text-basalt-600">
+              A tape across the back of the wheel reads to the flange edge; the bead seat is the flange allowance further in.
+            </p>
+            <div className="grid grid-cols-[1fr_auto] items-end gap-3">
+              <TextField label="Flange allowance (in)" name={id("flange")} inputMode="text" value={draft.flange} onChange={(ev) => set({ flange: ev.target.value })} error={e("position.flangeIn")} hint="usually 1/2" />
+              <BackspacingDiagram reference={draft.reference} />
+            </div>
+          </div>
+        )}
+        <TextField
+          label="Spacer (mm, optional)"
+          name={id("spacer")}
+          inputMode="text"
+          value={draft.spacer}
+          placeholder="none"
+          onChange={(ev) => set({ spacer: ev.target.value })}
+          error={e("spacerMm")}
+          hint={figures.spacerMm > 0 ? `Acts as offset ${formatNumber(figures.effectiveOffsetMm, 1, { signed: true })} mm` : "Leave empty for none; 1 in also works"}
+        />
+      </div>
+    </section>
+  );
+}

@@ -1,0 +1,93 @@
+"use client";
+import { Badge } from "@/components/ui/Badge";
+import { TextField } from "@/components/ui/TextField";
+import type { DraftErrors, VehicleDraft } from "@/lib/comparison/draft";
+import type { DisplayPrefs } from "@/lib/comparison/format";
+import { DEFAULT_VEHICLE } from "@/lib/comparison/model";
+
+/** Vehicle figures in a collapsible panel; each says when it is the default. */
+export function VehicleFields({
+  draft,
+  defaults,
+  errors,
+  prefs,
+  onChange,
+  onCommit,
+}: {
+  draft: VehicleDraft;
+  /** The default figures as text in the current units (to tell "default" from "entered"). */
+  defaults: VehicleDraft;
+  errors: DraftErrors;
+  prefs: DisplayPrefs;
+  onChange: (next: VehicleDraft) => void;
+  onCommit: () => void;
+}) {
+  const e = (path: string) => errors[`vehicle.${path}`];
+  const set = (patch: Partial<VehicleDraft>) => onChange({ ...draft, ...patch });
+  const speedUnit = prefs.units === "metric" ? "km/h" : "mph";
+  const isDefault = (k: "kpi" | "axle" | "top" | "cruise" | "fender") => draft[k].trim() === defaults[k].trim();
+  const tag = (k: "kpi" | "axle" | "top" | "cruise" | "fender") => (isDefault(k) ? " (default)" : "");
+  const count = (["kpi", "axle", "top", "cruise", "fender"] as const).filter((k) => !isDefault(k)).length;
+  const hasErrors = Object.keys(errors).some((k) => k.startsWith("vehicle."));
+  return (
+    <details className="group rounded-card bg-white shadow-card ring-1 ring-basalt-100" open={hasErrors || undefined}>
+      <summary className="flex cursor-pointer list-none items-center justify-between gap-3 rounded-card px-4 py-3 font-semibold sm:px-5">
+        <span>
+          Vehicle details <span className="font-normal text-basalt-500">— kingpin inclination, gearing, cruise speeds, fender line</span>
+        </span>
+        <span className="flex items-center gap-2">
+          {count === 0 ? <Badge>all defaults</Badge> : <Badge tone="ember">{count} entered</Badge>}
+          {hasErrors && <Badge tone="contact">check</Badge>}
+          <span aria-hidden className="transition-transform group-open:rotate-180">▾</span>
+        </span>
+      </summary>
+      <div className="grid gap-3 border-t border-basalt-100 px-4 py-4 sm:grid-cols-2 sm:px-5 lg:grid-cols-3" onBlur={onCommit}>
+        <TextField
+          label={`Kingpin inclination (°)${tag("kpi")}`}
+          name="vehicle-kpi"
+          inputMode="decimal"
+          placeholder="not set"
+          value={draft.kpi}
+          onChange={(ev) => set({ kpi: ev.target.value })}
+          error={e("kingpinInclinationDeg")}
+          hint="Default: not set (scrub then counts the wheel shift only). From the vehicle's alignment specifications."
+        />
+        <TextField
+          label={`Axle ratio${tag("axle")}`}
+          name="vehicle-axle"
+          inputMode="decimal"
+          value={draft.axle}
+          onChange={(ev) => set({ axle: ev.target.value })}
+          error={e("axleRatio")}
+          hint={`Default ${DEFAULT_VEHICLE.axleRatio.toFixed(2)}, a common factory ratio.`}
+        />
+        <TextField
+          label={`Top-gear ratio${tag("top")}`}
+          name="vehicle-top"
+          inputMode="decimal"
+          value={draft.top}
+          onChange={(ev) => set({ top: ev.target.value })}
+          error={e("transmissionRatio")}
+          hint={`Default ${DEFAULT_VEHICLE.transmissionRatio.toFixed(2)} (direct); an overdrive is below 1, e.g. 0.70.`}
+        />
+        <TextField
+          label={`Cruise speeds (${speedUnit})${tag("cruise")}`}
+          name="vehicle-cruise"
+          value={draft.cruise}
+          onChange={(ev) => set({ cruise: ev.target.value })}
+          error={e("cruiseSpeedsMph")}
+          hint={`Default ${defaults.cruise}; up to six, separated by commas.`}
+        />
+        <TextField
+          label={`Fender line from hub face (${prefs.units === "metric" ? "mm" : "in"})${tag("fender")}`}
+          name="vehicle-fender"
+          value={draft.fender}
+          placeholder="not measured"
+          onChange={(ev) => set({ fender: ev.target.value })}
+          error={e("fenderLineMm")}
+          hint="Optional. Drop a plumb line from the fender edge; measure out from the hub face to it."
+        />
+      </div>
+    </details>
+  );
+}

@@ -1,0 +1,95 @@
+// @vitest-environment jsdom
+import { cleanup, render, screen, within } from "@testing-library/react";
+import userEvent from "@testing-library/user-event";
+import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
+import { DEFAULT_INPUT } from "@/lib/comparison/schema";
+import { PREFS_STORAGE_KEY } from "@/lib/comparison/format";
+import { Workspace } from "./Workspace";
+
+// The charts load lazily through next/dynamic; they are not what these tests are about.
+vi.mock("@/components/comparison/LazyComparisonCharts", () => ({ LazyComparisonCharts: () => <div data-testid="charts-stub" /> }));
+
+const planned = () => within(screen.getByRole("region", { name: "Planned setup" }));
+const headline = (id: string) => screen.getByTestId(id).querySelector("dd")?.textContent;
+
+beforeEach(() => {
+  window.localStorage.clear();
+  window.history.replaceState(null, "", "/workspace");
+});
+afterEach(cleanup);
+
+describe("workspace inputs", () => {
+  it("takes backspacing with fractions and shows the offset it stands for (W/2 + offset, common practice, no source)", async () => {
+    const user = userEvent.setup();
+    render(<Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} />);
+    await user.click(planned().getByRole("radio", { name: "Backspacing" }));
+    const bs = planned().getByLabelText("Backspacing (in)");
+    // Switching keeps the same wheel: 9 in wide, −12 mm → 4.5 − 0.472 + 0.5 = 4.53 in to the flange edge.
+    expect(bs).toHaveProperty("value", "4.5276");
+    await user.clear(bs);
+    await user.type(bs, "4-5/8");
+    // 4-5/8 in to the flange, minus 1/2 in allowance = 4.125 in to the bead seat; offset (4.125 − 4.5) × 25.4 = −9.525 mm.
+    expect(planned().getByText(/Offset −9\.5 mm/)).toBeTruthy();
+    expect(window.location.search).toContain("pb=4.625&pr=flange");
+    expect(planned().getByRole("radio", { name: "Flange edge" })).toHaveProperty("checked", true);
+  });
+
+  it("changes the offset when the reference switches from the flange edge to the bead seat", async () => {
+    const user = userEvent.setup();
+    render(<Workspace initialInput={{ ...DEFAULT_INPUT, planned: { ...DEFAULT_INPUT.planned, position: { mode: "backspacing", backspacingIn: 4.625, reference: "flange", flangeIn: 0.5 } } }} initialProblems={[]} />);
+    expect(planned().getByText(/Offset −9\.5 mm/)).toBeTruthy();
+    const before = window.history.length;
+    await user.click(planned().getByRole("radio", { name: "Bead seat" }));
+    // The same 4-5/8 in now reaches the bead seat: offset (4.625 − 4.5) × 25.4 = +3.175 mm.
+    expect(planned().getByText(/Offset \+3\.2 mm/)).toBeTruthy();
+    expect(window.location.search).toContain("pr=bead");
+    // A discrete choice is its own history entry.
+    expect(window.history.length).toBe(before + 1);
+  });
+
+  it("applies one unit toggle everywhere and remembers it", async () => {
+    const user = userEvent.setup();
+    render(<Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} />);
+    // 939.8 − 802.8 = 137 mm = 5.39 in (1 in = 25.4 mm exactly).
+    expect(headline("change-diameter")).toBe("+5.39 in");
+    await user.click(screen.getByRole("radio", { name: "Metric" }));
+    expect(headline("change-diameter")).toBe("+137 mm");
+    expect(headline("change-speed")).toBe("113.0 km/h");
+    expect(screen.getByLabelText(/Cruise speeds \(km\/h\)/)).toHaveProperty("value", "97, 113");
+    expect(JSON.parse(window.localStorage.getItem(PREFS_STORAGE_KEY) ?? "{}")).toEqual({ units: "metric", lengths: "decimal" });
+    await user.click(screen.getByRole("radio", { name: "Inch" }));
+    await user.click(screen.getByRole("radio", { name: "Fractions" }));
+    // 5.394 in → nearest sixteenth 86/16 = 5-3/8 in.
+    expect(headline("change-diameter")).toBe("+5-3/8 in");
+    // Switching back and forth did not round the cruise speeds.
+    expect(screen.getByLabelText(/Cruise speeds \(mph\)/)).toHaveProperty("value", "60, 70");
+  });
+
+  it("shows an inline message with an accepted example and keeps the last complete results", async () => {
+    const user = userEvent.setup();
+    render(<Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} />);
+    const tire = planned().getByLabelText("Tire size");
+    await user.clear(tire);
+    await user.type(tire, "37x12");
+    expect(tire.getAttribute("aria-invalid")).toBe("true");
+    const describedBy = (tire.getAttribute("aria-describedby") ?? "").split(" ");
+    const message = describedBy.map((id) => document.getElementById(id)?.textContent ?? "").join(" ");
+    expect(message).toMatch(/accepted forms: 265\/70R17/);
+    expect(screen.getByTestId("results-status").textContent).toMatch(/last complete comparison: one field needs attention/);
+    expect(headline("change-diameter")).toBe("+5.39 in");
+    await user.type(tire, ".50R15LT");
+    // The wheel diameter followed the tire to 15 in.
+    expect(planned().getByLabelText("Wheel diameter (in)")).toHaveProperty("value", "15");
+    expect(tire.getAttribute("aria-invalid")).toBeNull();
+    expect(planned().getByText(/Reads as 37x12\.50R15LT/)).toBeTruthy();
+  });
+
+  it("names a wheel diameter that does not fit the tire", async () => {
+    const user = userEvent.setup();
+    render(<Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} />);
+    const d = planned().getByLabelText("Wheel diameter (in)");
+    await user.clear(d);
+    await user.type(d, "18");
+    expect(planned().getByText("A 17 in tire needs a 17 in wheel; this wheel is 18 in.")).toBeTruthy();
+  });
+});

@@ -1,0 +1,175 @@
+"use client";
+import { useCallback, useEffect, useMemo, useRef, useState } from "react";
+import { CrossSection } from "@/components/comparison/CrossSection";
+import { DisplayToggle } from "@/components/comparison/DisplayToggle";
+import { LazyComparisonCharts } from "@/components/comparison/LazyComparisonCharts";
+import { HeadlineChanges, SetupDetailTable, WarningList } from "@/components/comparison/ResultsPanel";
+import { useDisplayPrefs } from "@/components/comparison/useDisplayPrefs";
+import { Button } from "@/components/ui/Button";
+import { computeComparison } from "@/lib/comparison/compute";
+import { type Draft, type DraftErrors, type SetupDraft, draftFromInput, followTire, inchText, readDraft, vehicleUnitFields } from "@/lib/comparison/draft";
+import type { DisplayPrefs } from "@/lib/comparison/format";
+import { type ComparisonInput, DEFAULT_INPUT } from "@/lib/comparison/model";
+import { decodeComparison, encodeComparison } from "@/lib/comparison/url";
+import { SetupFields } from "./SetupFields";
+import { VehicleFields } from "./VehicleFields";
+
+interface State {
+  draft: Draft;
+  errors: DraftErrors;
+  /** The last complete, valid comparison: what the results show. */
+  good: ComparisonInput;
+  /** The display choice the draft's text was written for. */
+  prefs: DisplayPrefs;
+}
+
+const fromInput = (input: ComparisonInput, prefs: DisplayPrefs): State => ({ draft: draftFromInput(input, prefs), errors: {}, good: input, prefs });
+const sameprefs = (a: DisplayPrefs, b: DisplayPrefs) => a.units === b.units && a.lengths === b.lengths;
+const hasErrorsUnder = (errors: DraftErrors, prefix: string) => Object.keys(errors).some((k) => k.startsWith(prefix));
+
+/** Rewrites unit-dependent text for a new display choice where the text is valid. */
+function reformat(s: State, prefs: DisplayPrefs): State {
+  const fresh = draftFromInput(s.good, prefs);
+  const setup = (side: "current" | "planned"): SetupDraft =>
+    s.draft[side].mode === "backspacing" && !hasErrorsUnder(s.errors, `${side}.`) ? { ...s.draft[side], backspacing: fresh[side].backspacing, flange: fresh[side].flange } : s.draft[side];
+  const draft: Draft = {
+    current: setup("current"),
+    planned: setup("planned"),
+    vehicle: hasErrorsUnder(s.errors, "vehicle.") ? s.draft.vehicle : { ...s.draft.vehicle, ...vehicleUnitFields(s.good, prefs) },
+  };
+  const read = readDraft(draft, prefs);
+  return { draft, errors: read.errors, good: read.input ?? s.good, prefs };
+}
+
+export function Workspace({ initialInput, initialProblems }: { initialInput: ComparisonInput; initialProblems: string[] }) {
+  const [prefs, setPrefs] = useDisplayPrefs();
+  const [state, setState] = useState<State>(() => fromInput(initialInput, prefs));
+  const [linkNote, setLinkNote] = useState<string | null>(initialProblems.length > 0 ? `Some values in the link were not understood and use defaults: ${initialProblems.join(", ")}.` : null);
+  const [copied, setCopied] = useState<"idle" | "done" | "failed">("idle");
+  // An edit (typing in one field) is one history entry: the first change pushes, the rest replace.
+  const editOpen = useRef(false);
+
+  // The stored unit choice arrives after hydration: rewrite the text for it (render-time update).
+  let s = state;
+  if (!sameprefs(state.prefs, prefs)) {
+    s = reformat(state, prefs);
+    setState(s);
+  }
+
+  const writeUrl = useCallback((input: ComparisonInput, mode: "push" | "replace") => {
+    const q = `?${encodeComparison(input)}`;
+    if (q === window.location.search) return;
+    if (mode === "push") window.history.pushState(null, "", q);
+    else window.history.replaceState(window.history.state, "", q);
+  }, []);
+
+  const apply = useCallback(
+    (draft: Draft, discrete = false) => {
+      const read = readDraft(draft, prefs);
+      setState((prev) => ({ draft, errors: read.errors, good: read.input ?? prev.good, prefs }));
+      if (read.input) {
+        writeUrl(read.input, editOpen.current && !discrete ? "replace" : "push");
+        editOpen.current = !discrete;
+      }
+    },
+    [prefs, writeUrl],
+  );
+  const commit = useCallback(() => {
+    editOpen.current = false;
+  }, []);
+
+  useEffect(() => {
+    const onPop = () => {
+      editOpen.current = false;
+      const { input } = decodeComparison(window.location.search);
+      setState(fromInput(input, prefs));
+      setLinkNote(null);
+    };
+    window.addEventListener("popstate", onPop);
+    return () => window.removeEventListener("popstate", onPop);
+  }, [prefs]);
+
+  const result = useMemo(() => computeComparison(s.good), [s.good]);
+  const defaultsText = useMemo(() => draftFromInput(DEFAULT_INPUT, prefs).vehicle, [prefs]);
+  const errorCount = Object.keys(s.errors).length;
+
+  const setupProps = (side: "current" | "planned") => ({
+    side,
+    draft: s.draft[side],
+    errors: s.errors,
+    figures: result[side],
+    prefs,
+    onCommit: commit,
+    onChange: (next: SetupDraft, discrete?: boolean) => apply({ ...s.draft, [side]: next }, discrete),
+    onTireChange: (tire: string) => apply({ ...s.draft, [side]: followTire(s.draft[side], tire) }),
+    onModeChange: (mode: SetupDraft["mode"]) => {
+      // Switching keeps the same wheel: the other figure is filled in from the last valid one.
+      const f = result[side];
+      const d = s.draft[side];
+      const next: SetupDraft =
+        mode === "offset"
+          ? { ...d, mode, offset: String(Math.round(f.offsetMm * 100) / 100) }
+          : { ...d, mode, backspacing: inchText(d.reference === "flange" ? f.backspacingFlangeIn : f.backspacingBeadSeatIn, prefs), flange: d.flange.trim() === "" ? inchText(f.flangeAllowanceIn, prefs) : d.flange };
+      apply({ ...s.draft, [side]: next }, true);
+    },
+  });
+
+  const swap = () => apply({ ...s.draft, current: s.draft.planned, planned: s.draft.current }, true);
+  const copyLink = async () => {
+    try {
+      await navigator.clipboard.writeText(window.location.href);
+      setCopied("done");
+    } catch {
+      setCopied("failed");
+    }
+  };
+
+  return (
+    <div className="flex flex-col gap-6">
+      <div className="flex flex-wrap items-end justify-between gap-4">
+        <DisplayToggle prefs={prefs} onChange={setPrefs} />
+        <div className="flex flex-wrap items-center gap-2">
+          <Button variant="secondary" onClick={swap}>Swap current and planned</Button>
+          <Button variant="secondary" onClick={copyLink}>Copy link</Button>
+          <span role="status" className="min-w-[9rem] text-sm text-basalt-600">
+            {copied === "done" ? "Link copied." : copied === "failed" ? "Copy the address bar instead." : ""}
+          </span>
+        </div>
+      </div>
+      {linkNote && (
+        <p role="status" className="rounded-lg bg-tight-100 px-3 py-2 text-sm text-tight-800">
+          {linkNote}
+        </p>
+      )}
+      <div className="grid gap-4 md:grid-cols-2">
+        <SetupFields {...setupProps("current")} />
+        <SetupFields {...setupProps("planned")} />
+      </div>
+      <VehicleFields draft={s.draft.vehicle} defaults={defaultsText} errors={s.errors} prefs={prefs} onChange={(vehicle) => apply({ ...s.draft, vehicle })} onCommit={commit} />
+
+      <div aria-labelledby="results-title" role="region" className="flex flex-col gap-6">
+        <div className="flex min-h-10 flex-wrap items-center justify-between gap-2">
+          <h2 id="results-title" className="sr-only">Results</h2>
+          <p className={errorCount > 0 ? "rounded-lg bg-tight-100 px-3 py-2 text-sm text-tight-800" : "text-sm text-basalt-500"} data-testid="results-status">
+            {errorCount > 0
+              ? `Showing the last complete comparison: ${errorCount === 1 ? "one field needs" : `${errorCount} fields need`} attention above.`
+              : "Results follow your entries as you type."}
+          </p>
+        </div>
+        <HeadlineChanges result={result} prefs={prefs} />
+        <div className="grid items-start gap-6 lg:grid-cols-[3fr_2fr]">
+          <section aria-labelledby="drawing-title" className="rounded-card bg-white p-3 shadow-card ring-1 ring-basalt-100 sm:p-4">
+            <h2 id="drawing-title" className="mb-2 text-lg font-semibold">Side by side at the hub</h2>
+            <CrossSection result={result} prefs={prefs} />
+          </section>
+          <WarningList result={result} prefs={prefs} />
+        </div>
+        <section aria-labelledby="charts-title">
+          <h2 id="charts-title" className="mb-2 text-lg font-semibold">Charts</h2>
+          <LazyComparisonCharts result={result} prefs={prefs} />
+        </section>
+        <SetupDetailTable result={result} prefs={prefs} />
+      </div>
+    </div>
+  );
+}

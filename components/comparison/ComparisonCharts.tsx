@@ -1,0 +1,93 @@
+"use client";
+import { Bar, BarChart, CartesianGrid, Cell, Legend, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
+import type { ComparisonResult } from "@/lib/comparison/compute";
+import { type DisplayPrefs, formatNumber } from "@/lib/comparison/format";
+import { KM_PER_MILE, mmToIn } from "@/lib/fitment";
+import { CHART_HEIGHT_RESERVED } from "./chartSize";
+
+/**
+ * The comparison's charts (recharts): the changes as bars, indicated vs true speed, engine speed
+ * vs road speed for both setups. Read-only; load it through LazyComparisonCharts so recharts
+ * stays out of the page's first-load JavaScript.
+ */
+const STEEL = "#245a88";
+const EMBER = "#bd460f";
+const BASALT = "#56616f";
+export const CHART_HEIGHT = 240;
+
+function ChartFrame({ title, children, id }: { title: string; children: React.ReactNode; id: string }) {
+  return (
+    <figure className="min-w-0 rounded-lg bg-white p-3 ring-1 ring-basalt-100" aria-labelledby={id} style={{ height: CHART_HEIGHT_RESERVED }}>
+      <figcaption id={id} className="mb-1 truncate text-sm font-semibold text-basalt-800">
+        {title}
+      </figcaption>
+      <div style={{ height: CHART_HEIGHT }}>{children}</div>
+    </figure>
+  );
+}
+
+export default function ComparisonCharts({ result: r, prefs }: { result: ComparisonResult; prefs: DisplayPrefs }) {
+  const metric = prefs.units === "metric";
+  const lenUnit = metric ? "mm" : "in";
+  const len = (mm: number) => (metric ? Math.round(mm * 10) / 10 : Math.round(mmToIn(mm) * 100) / 100);
+  const speedUnit = metric ? "km/h" : "mph";
+  const spd = (mph: number) => (metric ? Math.round(mph * KM_PER_MILE * 10) / 10 : Math.round(mph * 10) / 10);
+  const changes = [
+    { name: "Diameter", value: len(r.changes.diameterMm) },
+    { name: "Ground clr.", value: len(r.changes.groundClearanceMm) },
+    { name: "Inner clr.", value: len(r.changes.innerClearanceMm) },
+    { name: "Poke", value: len(r.changes.outerPokeMm) },
+    { name: "Scrub", value: len(r.changes.scrubRadiusMm) },
+    { name: "Track", value: len(r.changes.trackWidthMm) },
+  ];
+  const speeds = r.speedometer.rows.map((x) => ({ indicated: spd(x.indicatedMph), true: spd(x.actualMph), shown: spd(x.indicatedMph) }));
+  const rpm = r.gearing.rows.map((x) => ({ speed: spd(x.mph), current: Math.round(x.currentRpm), planned: Math.round(x.plannedRpm), regeared: Math.round(x.regearedRpm) }));
+  const tick = { fontSize: 12, fill: "#434c58" };
+  return (
+    <div className="grid gap-3 md:grid-cols-3" data-testid="charts">
+      <ChartFrame id="chart-changes" title={`Changes, planned minus current (${lenUnit})`}>
+        <ResponsiveContainer width="100%" height="100%">
+          <BarChart data={changes} layout="vertical" margin={{ left: 8, right: 16, top: 4, bottom: 4 }}>
+            <CartesianGrid strokeDasharray="3 3" horizontal={false} />
+            <XAxis type="number" tick={tick} />
+            <YAxis type="category" dataKey="name" width={76} tick={tick} />
+            <ReferenceLine x={0} stroke={BASALT} />
+            <Tooltip formatter={(v) => `${formatNumber(Number(v), metric ? 1 : 2, { signed: true })} ${lenUnit}`} />
+            <Bar dataKey="value" name="Change" isAnimationActive={false}>
+              {changes.map((c) => (
+                <Cell key={c.name} fill={c.value >= 0 ? EMBER : STEEL} />
+              ))}
+            </Bar>
+          </BarChart>
+        </ResponsiveContainer>
+      </ChartFrame>
+      <ChartFrame id="chart-speed" title={`True speed vs speedometer (${speedUnit})`}>
+        <ResponsiveContainer width="100%" height="100%">
+          <LineChart data={speeds} margin={{ left: 0, right: 16, top: 4, bottom: 4 }}>
+            <CartesianGrid strokeDasharray="3 3" />
+            <XAxis dataKey="indicated" type="number" domain={["dataMin", "dataMax"]} tick={tick} />
+            <YAxis tick={tick} width={40} />
+            <Tooltip labelFormatter={(v) => `Speedometer shows ${v} ${speedUnit}`} />
+            <Legend wrapperStyle={{ fontSize: 12 }} />
+            <Line dataKey="shown" name="As shown (current tire)" stroke={STEEL} strokeWidth={2} dot={false} isAnimationActive={false} />
+            <Line dataKey="true" name="True (planned tire)" stroke={EMBER} strokeWidth={2} strokeDasharray="6 4" dot={false} isAnimationActive={false} />
+          </LineChart>
+        </ResponsiveContainer>
+      </ChartFrame>
+      <ChartFrame id="chart-rpm" title={`Engine speed vs road speed (rpm, ${speedUnit})`}>
+        <ResponsiveContainer width="100%" height="100%">
+          <LineChart data={rpm} margin={{ left: 0, right: 16, top: 4, bottom: 4 }}>
+            <CartesianGrid strokeDasharray="3 3" />
+            <XAxis dataKey="speed" type="number" domain={["dataMin", "dataMax"]} tick={tick} />
+            <YAxis tick={tick} width={44} />
+            <Tooltip labelFormatter={(v) => `${v} ${speedUnit}`} />
+            <Legend wrapperStyle={{ fontSize: 12 }} />
+            <Line dataKey="current" name="Current" stroke={STEEL} strokeWidth={2} dot={false} isAnimationActive={false} />
+            <Line dataKey="planned" name="Planned" stroke={EMBER} strokeWidth={2} strokeDasharray="6 4" dot={false} isAnimationActive={false} />
+            <Line dataKey="regeared" name={`Planned, ${r.gearing.suggestedRatio.toFixed(2)} gears`} stroke={BASALT} strokeWidth={1.5} strokeDasharray="2 3" dot={false} isAnimationActive={false} />
+          </LineChart>
+        </ResponsiveContainer>
+      </ChartFrame>
+    </div>
+  );
+}

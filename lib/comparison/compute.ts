@@ -1,0 +1,368 @@
+/**
+ * One function from a valid comparison input to everything the comparison screens show: per
+ * setup figures, the headline changes, the speedometer and engine-speed tables, and warnings.
+ * Every number comes from the engine (lib/fitment); this module only picks, pairs and judges.
+ *
+ * Warning thresholds (each a documented choice, see the constants below):
+ * - rim width: outside the engine's range suited to the section width (measuring rim ± 1 in,
+ *   common practice, no source);
+ * - poke: the tire's outer reach past the fender line the user measured (their figure);
+ * - scrub: an increase of more than 25 mm (1 in) (common practice, no source);
+ * - speedometer: an error beyond 3 % (common practice, no source);
+ * - regear: the ratio that restores the engine speed differs from the axle ratio by 5 % or more
+ *   and a different common ratio is nearer (common practice, no source).
+ */
+import convert from "convert-units";
+import {
+  KM_PER_MILE,
+  backspacingFromOffset,
+  compareSetups,
+  loadIndexKg,
+  loadRangeInfo,
+  parseTireSize,
+  plyRating,
+  setupGeometry,
+  speedSymbolKmh,
+  tireDimensions,
+  type SetupComparison,
+  type SetupGeometry,
+} from "@/lib/fitment";
+import { type ComparisonInput, type SetupInputValues, DEFAULT_FLANGE_ALLOWANCE_IN, positionOffsetMm } from "./model";
+
+/** Speedometer error that earns a warning, percent (common practice, no source). */
+export const SPEEDO_WARN_PCT = 3;
+/** Scrub radius increase that earns a warning, mm (1 in; common practice, no source). */
+export const SCRUB_WARN_MM = 25.4;
+/** Difference between the restoring ratio and the axle ratio that advises a regear, percent (common practice, no source). */
+export const REGEAR_WARN_PCT = 5;
+/** Indicated speed of the headline speedometer figure, mph. */
+export const HEADLINE_INDICATED_MPH = 60;
+/** Road speeds of the charts, mph (cruise speeds and the headline speed are added). */
+export const CHART_SPEEDS_MPH: readonly number[] = Object.freeze([10, 20, 30, 40, 50, 60, 70, 80]);
+
+/** Figures of one setup, as the detail table shows them. */
+export interface SetupFigures {
+  /** The tire size as typed (trimmed) and the engine's normalized designation. */
+  tireTyped: string;
+  tireText: string;
+  system: "metric" | "flotation" | "numeric";
+  wheelDiameterIn: number;
+  wheelWidthIn: number;
+  offsetMm: number;
+  spacerMm: number;
+  effectiveOffsetMm: number;
+  backspacingBeadSeatIn: number;
+  backspacingFlangeIn: number;
+  flangeAllowanceIn: number;
+  sectionWidthMm: number;
+  sidewallMm: number;
+  overallDiameterMm: number;
+  circumferenceMm: number;
+  revsPerMile: number;
+  revsPerKm: number;
+  rimWidthMm: number;
+  innerSwingMm: number;
+  outerSwingMm: number;
+  beadSeatInboardMm: number;
+  beadSeatOutboardMm: number;
+  measuringRimWidthIn: number;
+  rimWidthMinIn: number;
+  rimWidthMaxIn: number;
+  rimWidthSuitable: boolean;
+  load: { index: number; kg: number; lb: number; dualIndex: number | null; dualKg: number | null; dualLb: number | null } | null;
+  speed: { symbol: string; kmh: number; mph: number } | null;
+  loadRange: { letter: string; plyRating: number; maxPressurePsi: number | null; maxPressureKpa: number | null; source: string } | null;
+}
+
+export type WarningKind = "rim-width" | "poke" | "scrub" | "speedometer" | "regear" | "inner-reach" | "spacer";
+
+/** A warning the numbers call for, with its reason and where its threshold comes from. */
+export interface ComparisonWarning {
+  kind: WarningKind;
+  /** "caution" for things to act on, "note" for things to check. */
+  level: "caution" | "note";
+  /** Which setup it concerns, when only one. */
+  setup: "current" | "planned" | null;
+  /** Short statement; `{len}` stands for `lengthMm` in the reader's units (see format.ts `warningTitle`). */
+  title: string;
+  lengthMm: number | null;
+  why: string;
+  basis: string;
+}
+
+/** Everything the comparison screens show. */
+export interface ComparisonResult {
+  input: ComparisonInput;
+  current: SetupFigures;
+  planned: SetupFigures;
+  changes: {
+    diameterMm: number;
+    groundClearanceMm: number;
+    innerClearanceMm: number;
+    outerPokeMm: number;
+    scrubRadiusMm: number;
+    trackWidthMm: number;
+  };
+  speedometer: {
+    ratio: number;
+    errorPct: number;
+    headline: { indicatedMph: number; actualMph: number };
+    rows: { indicatedMph: number; actualMph: number }[];
+  };
+  gearing: {
+    axleRatio: number;
+    transmissionRatio: number;
+    effectiveRatio: number;
+    ratioToRestore: number;
+    suggestedRatio: number;
+    cruise: { mph: number; currentRpm: number; plannedRpm: number; regearedRpm: number }[];
+    rows: { mph: number; currentRpm: number; plannedRpm: number; regearedRpm: number }[];
+  };
+  /** The kingpin inclination entered, or null when none was (the engine then uses 0°). */
+  kingpinInclinationDeg: number | null;
+  fenderLineMm: number | null;
+  /** Tire reach past the fender line (planned, current), mm; null without a fender line. */
+  pokePastFenderMm: { current: number; planned: number } | null;
+  warnings: ComparisonWarning[];
+  /** The engine's raw comparison, for pictures that need more (geometry of both setups). */
+  engine: SetupComparison;
+}
+
+const kgToLb = (kg: number): number => convert(kg).from("kg").to("lb");
+/** The length placeholder of warning titles; `warningTitle` in format.ts fills it in the user's units. */
+export const LENGTH_TOKEN = "{len}";
+
+function figures(s: SetupInputValues, g: SetupGeometry): SetupFigures {
+  const t = g.tire;
+  const dims = tireDimensions(t, { rimWidthIn: s.wheelWidthIn });
+  const flange = s.position.mode === "backspacing" ? s.position.flangeIn : DEFAULT_FLANGE_ALLOWANCE_IN;
+  // Backspacing of the wheel itself (a spacer moves the wheel, not its backspacing).
+  const bsBead = backspacingFromOffset({ widthIn: s.wheelWidthIn, offsetMm: g.wheel.offsetMm, measuredFrom: "bead-seat" });
+  const bsFlange = backspacingFromOffset({ widthIn: s.wheelWidthIn, offsetMm: g.wheel.offsetMm, measuredFrom: "flange", flangeIn: flange });
+  const load =
+    t.loadIndex === null
+      ? null
+      : (() => {
+          const kg = loadIndexKg(t.loadIndex);
+          const dualKg = t.dualLoadIndex === null ? null : loadIndexKg(t.dualLoadIndex);
+          return { index: t.loadIndex, kg, lb: kgToLb(kg), dualIndex: t.dualLoadIndex, dualKg, dualLb: dualKg === null ? null : kgToLb(dualKg) };
+        })();
+  const speed = t.speedSymbol === null ? null : (() => {
+    const kmh = speedSymbolKmh(t.speedSymbol);
+    return { symbol: t.speedSymbol, kmh, mph: kmh / KM_PER_MILE };
+  })();
+  let loadRange: SetupFigures["loadRange"] = null;
+  if (t.loadRange !== null) {
+    if (t.system === "numeric") {
+      loadRange = { letter: t.loadRange, plyRating: plyRating(t.loadRange), maxPressurePsi: null, maxPressureKpa: null, source: "no figure held for numeric sizes" };
+    } else {
+      const info = loadRangeInfo(t.loadRange, t.system);
+      loadRange = { letter: info.loadRange, plyRating: info.plyRating, maxPressurePsi: info.maxPressurePsi, maxPressureKpa: info.maxPressureKpa, source: info.source };
+    }
+  }
+  return {
+    tireTyped: s.tire.trim(),
+    tireText: t.text,
+    system: t.system,
+    wheelDiameterIn: g.wheel.diameterIn,
+    wheelWidthIn: g.wheel.widthIn,
+    offsetMm: g.wheel.offsetMm,
+    spacerMm: g.spacerMm,
+    effectiveOffsetMm: g.effectiveOffsetMm,
+    backspacingBeadSeatIn: bsBead,
+    backspacingFlangeIn: bsFlange,
+    flangeAllowanceIn: flange,
+    sectionWidthMm: g.sectionWidthMm,
+    sidewallMm: g.sidewallMm,
+    overallDiameterMm: g.overallDiameterMm,
+    circumferenceMm: g.circumferenceMm,
+    revsPerMile: g.revsPerMile,
+    revsPerKm: dims.revsPerKm,
+    rimWidthMm: g.rimWidthMm,
+    innerSwingMm: g.innerSwingMm,
+    outerSwingMm: g.outerSwingMm,
+    beadSeatInboardMm: g.beadSeatInboardMm,
+    beadSeatOutboardMm: g.beadSeatOutboardMm,
+    measuringRimWidthIn: g.measuringRimWidthIn,
+    rimWidthMinIn: g.rimWidthMinIn,
+    rimWidthMaxIn: g.rimWidthMaxIn,
+    rimWidthSuitable: g.rimWidthSuitable,
+    load,
+    speed,
+    loadRange,
+  };
+}
+
+function geometryOf(s: SetupInputValues): SetupGeometry {
+  return setupGeometry({
+    tire: parseTireSize(s.tire),
+    wheel: { diameterIn: s.wheelDiameterIn, widthIn: s.wheelWidthIn, offsetMm: positionOffsetMm(s.position, s.wheelWidthIn) },
+    spacerMm: s.spacerMm,
+  });
+}
+
+function warningsOf(r: Omit<ComparisonResult, "warnings">): ComparisonWarning[] {
+  const out: ComparisonWarning[] = [];
+  for (const side of ["current", "planned"] as const) {
+    const f = r[side];
+    if (!f.rimWidthSuitable) {
+      const narrow = f.wheelWidthIn < f.rimWidthMinIn;
+      out.push({
+        kind: "rim-width",
+        level: side === "planned" ? "caution" : "note",
+        setup: side,
+        title: `${side === "planned" ? "Planned" : "Current"} wheel width ${f.wheelWidthIn} in is outside the usual ${f.rimWidthMinIn}–${f.rimWidthMaxIn} in for ${f.tireText}`,
+        lengthMm: null,
+        why: narrow
+          ? "On a rim that narrow the tread crowns and the sidewall rolls under load and in corners; the bead is pinched at an angle it was not made for. Check the tire maker's approved rim widths."
+          : "On a rim that wide the sidewall is stretched straight, the bead and rim edge are exposed to rocks, and the bead can unseat at low pressure. Check the tire maker's approved rim widths.",
+        basis: `Measuring rim ${f.measuringRimWidthIn} in ± 1 in (measuring rim factor from memory of the UN R30/ETRTO rule; the ± 1 in band is common practice, no source).`,
+      });
+    }
+  }
+  if (r.pokePastFenderMm !== null) {
+    for (const side of ["planned", "current"] as const) {
+      const past = r.pokePastFenderMm[side];
+      if (past > 0) {
+        out.push({
+          kind: "poke",
+          level: side === "planned" ? "caution" : "note",
+          setup: side,
+          title: `${side === "planned" ? "Planned" : "Current"} tire reaches ${LENGTH_TOKEN} past the fender line you entered`,
+          lengthMm: past,
+          why: "Tread outside the fender throws stones, mud and water at the body and at other road users, and many places require the tread to be covered. Check the rules where you drive; flares or a different offset bring it back in.",
+          basis: "Your fender-line measurement compared with the tire's outer reach from the hub face (the engine's outer swing).",
+        });
+      }
+    }
+  }
+  const scrub = r.changes.scrubRadiusMm;
+  if (scrub > SCRUB_WARN_MM) {
+    out.push({
+      kind: "scrub",
+      level: "caution",
+      setup: null,
+      title: `Scrub radius grows by ${LENGTH_TOKEN}`,
+      lengthMm: scrub,
+      why:
+        "The contact patch moves further from the steering axis: heavier steering, more kickback over bumps and under braking, and more load on wheel bearings, ball joints and the steering box." +
+        (r.kingpinInclinationDeg === null ? " Kingpin inclination is not entered, so this is the wheel-plane shift alone." : ""),
+      basis: `More than ${SCRUB_WARN_MM} mm (1 in) of increase (common practice, no source).`,
+    });
+  }
+  const err = r.speedometer.errorPct;
+  if (Math.abs(err) > SPEEDO_WARN_PCT) {
+    const h = r.speedometer.headline;
+    out.push({
+      kind: "speedometer",
+      level: "caution",
+      setup: null,
+      title: `Speedometer off by ${Math.abs(err).toFixed(1)} %: at an indicated ${h.indicatedMph} mph (${(h.indicatedMph * KM_PER_MILE).toFixed(0)} km/h) you do ${h.actualMph.toFixed(1)} mph (${(h.actualMph * KM_PER_MILE).toFixed(0)} km/h)`,
+      lengthMm: null,
+      why:
+        err > 0
+          ? "The taller tire covers more ground per turn than the speedometer was set for, so it reads low — you are faster than it shows — and the odometer under-counts. Recalibrate it for the new tire."
+          : "The shorter tire covers less ground per turn, so the speedometer reads high and the odometer over-counts. Recalibrate it for the new tire.",
+      basis: `More than ${SPEEDO_WARN_PCT} % (common practice, no source); the error is the ratio of overall diameters (unloaded).`,
+    });
+  }
+  const g = r.gearing;
+  const gap = (g.ratioToRestore / g.axleRatio - 1) * 100;
+  if (Math.abs(gap) >= REGEAR_WARN_PCT && g.suggestedRatio !== g.axleRatio) {
+    out.push({
+      kind: "regear",
+      level: "caution",
+      setup: null,
+      title: `Regear advised: ${g.suggestedRatio.toFixed(2)} comes closest to the engine speeds of ${g.axleRatio.toFixed(2)} on the current tire`,
+      lengthMm: null,
+      why:
+        gap > 0
+          ? `The taller tire acts like a ${g.effectiveRatio.toFixed(2)} axle: the engine turns slower at the same speed, pulls weaker in top gear and on grades, an automatic hunts between gears and runs hotter.`
+          : `The shorter tire acts like a ${g.effectiveRatio.toFixed(2)} axle: the engine turns faster at every road speed.`,
+      basis: `Restoring ratio ${g.ratioToRestore.toFixed(2)} is ${Math.abs(gap).toFixed(1)} % from the axle ratio; advised from ${REGEAR_WARN_PCT} % (common practice, no source). Suggested = nearest common ratio.`,
+    });
+  }
+  if (r.changes.innerClearanceMm < 0) {
+    out.push({
+      kind: "inner-reach",
+      level: "note",
+      setup: "planned",
+      title: `Planned tire reaches ${LENGTH_TOKEN} further inboard`,
+      lengthMm: -r.changes.innerClearanceMm,
+      why: "Check the room to the control arms, leaf springs, frame and sway bar at full lock and full droop and compression.",
+      basis: "Inner swing from the hub face, current minus planned (engine).",
+    });
+  }
+  for (const side of ["current", "planned"] as const) {
+    if (r[side].spacerMm > 0) {
+      out.push({
+        kind: "spacer",
+        level: "note",
+        setup: side,
+        title: `${side === "planned" ? "Planned" : "Current"} setup uses a ${LENGTH_TOKEN} spacer`,
+        lengthMm: r[side].spacerMm,
+        why: "Use hub-centric spacers rated for the vehicle, follow the spacer maker's fitting instructions and torque, and re-check the nuts after the first run. Spacers also add leverage on the wheel bearings.",
+        basis: "Common practice, no source; the spacer and wheel makers' instructions win.",
+      });
+    }
+  }
+  return out;
+}
+
+/**
+ * Computes every figure of a comparison from a valid input (see `comparisonInputSchema`).
+ * Throws FitmentInputError only when given an input the schema rejects.
+ *
+ * @example
+ * const r = computeComparison(DEFAULT_INPUT);
+ * r.changes.diameterMm; // 137 (37 in = 939.8 mm vs 802.8 mm)
+ */
+export function computeComparison(input: ComparisonInput): ComparisonResult {
+  const cur = geometryOf(input.current);
+  const pla = geometryOf(input.planned);
+  const v = input.vehicle;
+  const speeds = [...new Set([...CHART_SPEEDS_MPH, HEADLINE_INDICATED_MPH, ...v.cruiseSpeedsMph])].sort((a, b) => a - b);
+  const c = compareSetups(cur, pla, {
+    kingpinInclinationDeg: v.kingpinInclinationDeg ?? undefined,
+    axleRatio: v.axleRatio,
+    transmissionRatio: v.transmissionRatio,
+    speedsMph: speeds,
+  });
+  const headline = c.speedometer.rows.find((x) => x.indicatedMph === HEADLINE_INDICATED_MPH);
+  const chartSpeeds = new Set(CHART_SPEEDS_MPH);
+  const current = figures(input.current, cur);
+  const planned = figures(input.planned, pla);
+  const base: Omit<ComparisonResult, "warnings"> = {
+    input,
+    current,
+    planned,
+    changes: {
+      diameterMm: c.diameterChangeMm,
+      groundClearanceMm: c.groundClearanceChangeMm,
+      innerClearanceMm: c.innerClearanceChangeMm,
+      outerPokeMm: c.outerPokeChangeMm,
+      scrubRadiusMm: c.scrubRadiusChangeMm,
+      trackWidthMm: c.trackWidthChangeMm,
+    },
+    speedometer: {
+      ratio: c.speedometer.ratio,
+      errorPct: (c.speedometer.ratio - 1) * 100,
+      headline: headline ?? { indicatedMph: HEADLINE_INDICATED_MPH, actualMph: HEADLINE_INDICATED_MPH * c.speedometer.ratio },
+      rows: c.speedometer.rows.filter((x) => chartSpeeds.has(x.indicatedMph)),
+    },
+    gearing: {
+      axleRatio: c.gearing.axleRatio,
+      transmissionRatio: c.gearing.transmissionRatio,
+      effectiveRatio: c.gearing.effectiveRatio,
+      ratioToRestore: c.gearing.ratioToRestore,
+      suggestedRatio: c.gearing.suggestedRatio,
+      cruise: v.cruiseSpeedsMph.map((mph) => c.gearing.rpmAt.find((x) => x.mph === mph)).filter((x) => x !== undefined),
+      rows: c.gearing.rpmAt.filter((x) => chartSpeeds.has(x.mph)),
+    },
+    kingpinInclinationDeg: v.kingpinInclinationDeg,
+    fenderLineMm: v.fenderLineMm,
+    pokePastFenderMm: v.fenderLineMm === null ? null : { current: current.outerSwingMm - v.fenderLineMm, planned: planned.outerSwingMm - v.fenderLineMm },
+    engine: c,
+  };
+  return { ...base, warnings: warningsOf(base) };
+}

@@ -1,0 +1,58 @@
+import { describe, expect, it } from "vitest";
+import { computeComparison } from "./compute";
+import { DEFAULT_PREFS, type DisplayPrefs, MINUS, formatLen, formatLenOther, formatLoad, formatNumber, formatPressure, formatSpeed, formatSpeedRating, parsePrefs, warningTitle } from "./format";
+import { DEFAULT_INPUT } from "./schema";
+
+const inch: DisplayPrefs = { units: "imperial", lengths: "decimal" };
+const frac: DisplayPrefs = { units: "imperial", lengths: "fraction" };
+const metric: DisplayPrefs = { units: "metric", lengths: "decimal" };
+
+describe("display helpers", () => {
+  it("lengths: 120.65 mm = 4.75 in = 4-3/4 in (1 in = 25.4 mm exactly, NIST SP 811)", () => {
+    expect(formatLen(120.65, inch)).toBe("4.75 in");
+    expect(formatLen(120.65, frac)).toBe("4-3/4 in");
+    expect(formatLen(120.65, metric)).toBe("121 mm");
+    expect(formatLen(120.65, metric, { decimals: 1 })).toBe("120.7 mm");
+    expect(formatLenOther(120.65, inch)).toBe("121 mm");
+  });
+
+  it("signs: typographic minus, plus for gains, none for zero", () => {
+    expect(formatLen(-12, metric, { signed: true })).toBe(`${MINUS}12 mm`);
+    expect(formatLen(37, metric, { signed: true })).toBe("+37 mm");
+    expect(formatLen(0.2, metric, { signed: true })).toBe("0 mm");
+    // −12 mm = −0.472 in → nearest sixteenth −8/16 = −1/2 in.
+    expect(formatLen(-12, frac, { signed: true })).toBe(`${MINUS}1/2 in`);
+    expect(formatNumber(-0.001, 1)).toBe("0.0");
+    expect(formatNumber(2380.13, 0)).toBe("2,380");
+    expect(formatNumber(5, 1, { signed: true })).toBe("+5.0");
+  });
+
+  it("speeds: 60 mph = 96.56 km/h (1 mi = 1.609344 km exactly, NIST SP 811)", () => {
+    expect(formatSpeed(60, inch)).toBe("60.0 mph");
+    expect(formatSpeed(60, metric)).toBe("96.6 km/h");
+    expect(formatSpeedRating(160, 160 / 1.609344, inch)).toBe("99 mph (160 km/h)");
+  });
+
+  it("loads and pressures: 1 lb = 0.45359237 kg, 1 psi = 6.894757 kPa (NIST SP 811)", () => {
+    expect(formatLoad(1450, metric)).toBe("1,450 kg (3,197 lb)");
+    expect(formatLoad(1450, inch)).toBe("3,197 lb (1,450 kg)");
+    expect(formatPressure(50, inch)).toBe("50 psi (345 kPa)");
+    expect(formatPressure(80, metric)).toBe("552 kPa (80 psi)");
+  });
+
+  it("warning titles carry their length in the reader's units", () => {
+    const w = computeComparison(DEFAULT_INPUT).warnings.find((x) => x.kind === "scrub");
+    if (!w) throw new Error("expected a scrub warning");
+    expect(warningTitle(w, metric)).toBe("Scrub radius grows by 37 mm");
+    // 37 mm = 1.457 in → 1.46 in; sixteenths: 23.3/16 → 1-7/16 in.
+    expect(warningTitle(w, inch)).toBe("Scrub radius grows by 1.46 in");
+    expect(warningTitle(w, frac)).toBe("Scrub radius grows by 1-7/16 in");
+  });
+
+  it("reads stored preferences tolerantly", () => {
+    expect(parsePrefs(null)).toEqual(DEFAULT_PREFS);
+    expect(parsePrefs("{bad json")).toEqual(DEFAULT_PREFS);
+    expect(parsePrefs('{"units":"metric","lengths":"fraction"}')).toEqual({ units: "metric", lengths: "fraction" });
+    expect(parsePrefs('{"units":"furlongs"}')).toEqual(DEFAULT_PREFS);
+  });
+});

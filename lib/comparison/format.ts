@@ -1,0 +1,115 @@
+/**
+ * Display helpers for the comparison screens: one unit choice (inch or metric) and one length
+ * style (decimals or fractions) applied everywhere. Lengths go through the engine's
+ * `formatLength`; speed, pressure and mass conversions through the engine's units (and
+ * convert-units for pounds). Negative values use the typographic minus sign (U+2212).
+ */
+import convert from "convert-units";
+import { KM_PER_MILE, formatLength, inToMm, psiToKpa } from "@/lib/fitment";
+import { type ComparisonWarning, LENGTH_TOKEN } from "./compute";
+
+export type UnitSystem = "imperial" | "metric";
+export type LengthStyle = "decimal" | "fraction";
+
+export interface DisplayPrefs {
+  units: UnitSystem;
+  lengths: LengthStyle;
+}
+
+export const DEFAULT_PREFS: DisplayPrefs = { units: "imperial", lengths: "decimal" };
+/** The localStorage key the preference is remembered under. */
+export const PREFS_STORAGE_KEY = "hubface.display";
+
+export const MINUS = "\u2212";
+
+/** Reads stored preferences; anything not understood falls back to the defaults. */
+export function parsePrefs(raw: string | null | undefined): DisplayPrefs {
+  if (!raw) return DEFAULT_PREFS;
+  try {
+    const v = JSON.parse(raw) as Partial<Record<keyof DisplayPrefs, unknown>>;
+    return {
+      units: v.units === "metric" ? "metric" : "imperial",
+      lengths: v.lengths === "fraction" ? "fraction" : "decimal",
+    };
+  } catch {
+    return DEFAULT_PREFS;
+  }
+}
+
+function typographic(s: string): string {
+  return s.startsWith("-") ? MINUS + s.slice(1) : s;
+}
+
+function signed(s: string, value: number): string {
+  if (s.startsWith("-")) return MINUS + s.slice(1);
+  // A value that rounds to zero shows without sign.
+  return value > 0 && !/^0( |$)/.test(s) ? `+${s}` : s;
+}
+
+/**
+ * A length in the chosen units: inches as decimals (2 places) or sixteenths, or millimetres
+ * (whole mm unless `decimals` is given).
+ *
+ * @example
+ * formatLen(120.65, { units: "imperial", lengths: "fraction" }); // "4-3/4 in"
+ * formatLen(-12, { units: "metric", lengths: "decimal" }, { signed: true }); // "−12 mm"
+ */
+export function formatLen(mm: number, prefs: DisplayPrefs, opts: { signed?: boolean; decimals?: number } = {}): string {
+  const s =
+    prefs.units === "metric"
+      ? formatLength(mm, { unit: "mm", decimals: opts.decimals ?? 0 })
+      : formatLength(mm, { unit: "in", fraction: prefs.lengths === "fraction" ? 16 : undefined, decimals: opts.decimals ?? 2 });
+  return opts.signed ? signed(s, mm) : typographic(s);
+}
+
+/** A length in the other units, for a secondary line ("802.8 mm" under "31.61 in"). */
+export function formatLenOther(mm: number, prefs: DisplayPrefs, opts: { signed?: boolean } = {}): string {
+  const other: DisplayPrefs = { units: prefs.units === "metric" ? "imperial" : "metric", lengths: prefs.lengths };
+  return formatLen(mm, other, opts);
+}
+
+/** Inches as the trade gives them (wheel diameter and width, backspacing), decimals or fractions. */
+export function formatInches(inches: number, prefs: DisplayPrefs): string {
+  return formatLen(inToMm(inches), { units: "imperial", lengths: prefs.lengths });
+}
+
+/** A plain number with thousands separators and fixed decimals; typographic minus. */
+export function formatNumber(n: number, decimals = 0, opts: { signed?: boolean } = {}): string {
+  const s = new Intl.NumberFormat("en-US", { minimumFractionDigits: decimals, maximumFractionDigits: decimals }).format(n);
+  const zero = /^-?0(\.0+)?$/.test(s);
+  if (s.startsWith("-")) return zero ? s.slice(1) : MINUS + s.slice(1);
+  return opts.signed && n > 0 && !zero ? `+${s}` : s;
+}
+
+/**
+ * A road speed given in mph, in the chosen units.
+ *
+ * @example
+ * formatSpeed(60, { units: "metric", lengths: "decimal" }); // "96.6 km/h"
+ */
+export function formatSpeed(mph: number, prefs: DisplayPrefs, decimals = 1): string {
+  return prefs.units === "metric" ? `${formatNumber(mph * KM_PER_MILE, decimals)} km/h` : `${formatNumber(mph, decimals)} mph`;
+}
+
+/** A speed symbol's reference speed in both units, the chosen one first: "160 km/h (99 mph)". */
+export function formatSpeedRating(kmh: number, mph: number, prefs: DisplayPrefs): string {
+  return prefs.units === "metric" ? `${formatNumber(kmh)} km/h (${formatNumber(mph)} mph)` : `${formatNumber(mph)} mph (${formatNumber(kmh)} km/h)`;
+}
+
+/** A load in both units, the chosen one first: "1,450 kg (3,197 lb)". */
+export function formatLoad(kg: number, prefs: DisplayPrefs): string {
+  const lb = convert(kg).from("kg").to("lb");
+  return prefs.units === "metric" ? `${formatNumber(kg)} kg (${formatNumber(lb)} lb)` : `${formatNumber(lb)} lb (${formatNumber(kg)} kg)`;
+}
+
+/** A pressure given in psi, the chosen unit first: "50 psi (345 kPa)". */
+export function formatPressure(psi: number, prefs: DisplayPrefs): string {
+  const kpa = psiToKpa(psi);
+  return prefs.units === "metric" ? `${formatNumber(kpa)} kPa (${formatNumber(psi)} psi)` : `${formatNumber(psi)} psi (${formatNumber(kpa)} kPa)`;
+}
+
+/** A warning's title with its length in the chosen units. */
+export function warningTitle(w: ComparisonWarning, prefs: DisplayPrefs): string {
+  if (w.lengthMm === null) return w.title;
+  return w.title.replace(LENGTH_TOKEN, formatLen(Math.abs(w.lengthMm), prefs));
+}

@@ -1,0 +1,79 @@
+import fc from "fast-check";
+import { describe, expect, it } from "vitest";
+import { computeComparison } from "./compute";
+import { DEFAULT_INPUT, comparisonInputSchema, setupSchema } from "./schema";
+
+const issues = (v: unknown) => {
+  const r = setupSchema.safeParse(v);
+  return r.success ? {} : Object.fromEntries(r.error.issues.map((i) => [i.path.join("."), i.message]));
+};
+
+describe("comparison input schema", () => {
+  it("accepts the demo comparison", () => {
+    expect(comparisonInputSchema.safeParse(DEFAULT_INPUT).success).toBe(true);
+  });
+
+  it("passes the engine's tire-size message with accepted examples", () => {
+    expect(issues({ ...DEFAULT_INPUT.planned, tire: "37x12.5" }).tire).toMatch(/accepted forms: 265\/70R17/);
+    expect(issues({ ...DEFAULT_INPUT.planned, tire: "" }).tire).toBe("Enter a tire size (e.g. 265/70R17).");
+  });
+
+  it("needs the wheel diameter of the tire's rim", () => {
+    expect(issues({ ...DEFAULT_INPUT.planned, wheelDiameterIn: 18 }).wheelDiameterIn).toBe("A 17 in tire needs a 17 in wheel; this wheel is 18 in.");
+  });
+
+  it("bounds each number with a message and an example", () => {
+    expect(issues({ ...DEFAULT_INPUT.planned, wheelWidthIn: 2 })).toEqual({ wheelWidthIn: "The wheel width must be between 3 and 20 in (e.g. 9)." });
+    expect(issues({ ...DEFAULT_INPUT.planned, spacerMm: -5 }).spacerMm).toMatch(/between 0 and 100 mm/);
+    expect(issues({ ...DEFAULT_INPUT.planned, position: { mode: "backspacing", backspacingIn: 4, reference: "rim", flangeIn: 0.5 } })["position.reference"]).toMatch(/flange/);
+  });
+
+  it("rejects an offset that puts the mounting face outside the wheel (engine limit W/2 + 76.2 mm)", () => {
+    // 9 in wheel: limit 114.3 + 76.2 = 190.5 mm.
+    expect(issues({ ...DEFAULT_INPUT.planned, position: { mode: "offset", offsetMm: 195 } })["position.offsetMm"]).toMatch(/outside a 9 in wide wheel/);
+    expect(issues({ ...DEFAULT_INPUT.planned, position: { mode: "offset", offsetMm: 190 } })).toEqual({});
+  });
+
+  it("whatever passes the schema, computeComparison computes without throwing and without NaN (property)", () => {
+    const setup = fc.record({
+      tire: fc.constantFrom("265/70R17", "37x12.50R17LT", "LT285/70R17 121/118Q", "33x10.50R15LT", "7.50R16", "205/55R16 91V"),
+      wheelWidthIn: fc.double({ min: 3, max: 20, noNaN: true }),
+      offset: fc.double({ min: -200, max: 200, noNaN: true }),
+      spacerMm: fc.double({ min: 0, max: 100, noNaN: true }),
+    });
+    fc.assert(
+      fc.property(setup, setup, fc.option(fc.double({ min: 0, max: 30, noNaN: true })), (a, b, kpi) => {
+        const mk = (s: typeof a) => ({
+          tire: s.tire,
+          wheelDiameterIn: Number(/R(\d+)/.exec(s.tire)?.[1]),
+          wheelWidthIn: s.wheelWidthIn,
+          position: { mode: "offset" as const, offsetMm: s.offset },
+          spacerMm: s.spacerMm,
+        });
+        const input = { current: mk(a), planned: mk(b), vehicle: { ...DEFAULT_INPUT.vehicle, kingpinInclinationDeg: kpi } };
+        const parsed = comparisonInputSchema.safeParse(input);
+        if (!parsed.success) return;
+        const out = computeComparison(parsed.data);
+        const nums = JSON.stringify(out.changes) + JSON.stringify(out.gearing);
+        expect(nums).not.toMatch(/null|NaN/);
+      }),
+      { numRuns: 300 },
+    );
+  });
+});
+
+describe("zod adapter over checkComparison", () => {
+  it("returns the clean copy (unknown fields dropped, tire trimmed) and the same issues as model.ts", async () => {
+    const { checkComparison } = await import("./model");
+    const dirty = { ...DEFAULT_INPUT, extra: 1, planned: { ...DEFAULT_INPUT.planned, tire: "  37x12.50R17LT  ", note: "x" } };
+    const parsed = comparisonInputSchema.parse(dirty);
+    expect(parsed).toEqual({ ...DEFAULT_INPUT, planned: { ...DEFAULT_INPUT.planned, tire: "37x12.50R17LT" } });
+    const bad = { ...DEFAULT_INPUT, vehicle: { ...DEFAULT_INPUT.vehicle, cruiseSpeedsMph: [60, 400] } };
+    const z = comparisonInputSchema.safeParse(bad);
+    const m = checkComparison(bad);
+    expect(z.success).toBe(false);
+    expect(m.ok).toBe(false);
+    expect(z.error?.issues.map((i) => [i.path.join("."), i.message])).toEqual(m.ok ? [] : m.issues.map((i) => [i.path.join("."), i.message]));
+    expect(z.error?.issues[0]?.message).toBe("A cruise speed must be between 5 and 150 mph (e.g. 65).");
+  });
+});

@@ -1,0 +1,91 @@
+import fc from "fast-check";
+import { describe, expect, it } from "vitest";
+import { type ComparisonInput, DEFAULT_INPUT, comparisonInputSchema } from "./schema";
+import { decodeComparison, encodeComparison, hasComparisonParams } from "./url";
+
+describe("comparison query string", () => {
+  it("is compact and readable", () => {
+    expect(encodeComparison(DEFAULT_INPUT)).toBe("ct=265/70R17+113T&cd=17&cw=8&co=25&pt=37x12.50R17LT+124Q+LRD&pd=17&pw=9&po=-12");
+  });
+
+  it("round-trips backspacing, reference, flange allowance, spacer and every vehicle figure", () => {
+    const x: ComparisonInput = {
+      current: { ...DEFAULT_INPUT.current, spacerMm: 12.5 },
+      planned: { tire: "LT315/70R17 121/118Q", wheelDiameterIn: 17, wheelWidthIn: 8.5, position: { mode: "backspacing", backspacingIn: 4.75, reference: "bead-seat", flangeIn: 0.625 }, spacerMm: 0 },
+      vehicle: { kingpinInclinationDeg: 8.5, axleRatio: 4.1, transmissionRatio: 0.72, cruiseSpeedsMph: [55, 65, 75], fenderLineMm: 142 },
+    };
+    const q = encodeComparison(x);
+    expect(q).toContain("pb=4.75&pr=bead&pf=0.625");
+    expect(q).toContain("kpi=8.5&axle=4.1&top=0.72&cruise=55,65,75&fender=142");
+    expect(decodeComparison(q)).toEqual({ input: x, problems: [] });
+    expect(decodeComparison(`?${q}`).input).toEqual(x);
+    expect(decodeComparison(new URLSearchParams(q)).input).toEqual(x);
+  });
+
+  it("round-trips any valid input (property)", () => {
+    const four = (min: number, max: number) => fc.integer({ min: min * 10000, max: max * 10000 }).map((v) => v / 10000);
+    const position = fc.oneof(
+      four(-60, 60).map((offsetMm) => ({ mode: "offset" as const, offsetMm })),
+      fc.record({ mode: fc.constant("backspacing" as const), backspacingIn: four(3, 6), reference: fc.constantFrom("flange" as const, "bead-seat" as const), flangeIn: four(0, 2) }),
+    );
+    const setup = fc.record({
+      tire: fc.constantFrom("265/70R17", "37x12.50R17LT", "LT285/70R17 121/118Q", "285/75R17 LRE"),
+      wheelDiameterIn: fc.constant(17),
+      wheelWidthIn: four(7, 12),
+      position,
+      spacerMm: four(0, 100),
+    });
+    const vehicle = fc.record({
+      kingpinInclinationDeg: fc.option(four(0, 30)),
+      axleRatio: four(1, 10),
+      transmissionRatio: four(0.3, 10),
+      cruiseSpeedsMph: fc.array(four(5, 150), { minLength: 1, maxLength: 6 }),
+      fenderLineMm: fc.option(four(0, 500)),
+    });
+    fc.assert(
+      fc.property(setup, setup, vehicle, (current, planned, v) => {
+        const x = { current, planned, vehicle: v };
+        fc.pre(comparisonInputSchema.safeParse(x).success);
+        expect(decodeComparison(encodeComparison(x))).toEqual({ input: x, problems: [] });
+      }),
+      { numRuns: 300 },
+    );
+  });
+
+  it("falls back per parameter and names what it could not read", () => {
+    const { input, problems } = decodeComparison("ct=not-a-size&cw=abc&co=1e3&pt=35x12.50R15LT&pw=10&pb=3.75&pr=sideways&kpi=-4&axle=&cruise=60,x,70&fender=9999");
+    expect(input.current).toEqual(DEFAULT_INPUT.current);
+    // The wheel diameter follows the tire when missing; an unknown reference reads as "flange".
+    expect(input.planned).toEqual({ tire: "35x12.50R15LT", wheelDiameterIn: 15, wheelWidthIn: 10, position: { mode: "backspacing", backspacingIn: 3.75, reference: "flange", flangeIn: 0.5 }, spacerMm: 0 });
+    expect(input.vehicle).toEqual({ ...DEFAULT_INPUT.vehicle, cruiseSpeedsMph: [60, 70] });
+    expect(problems).toEqual(["current tire size", "current wheel width", "current offset", "planned backspacing reference", "kingpin inclination", "axle ratio", "fender line"]);
+  });
+
+  it("drops a wheel diameter that does not match the tire, and a position outside the wheel", () => {
+    const { input, problems } = decodeComparison("pt=33x10.50R15LT&pd=17&pw=8&po=190");
+    expect(input.planned.wheelDiameterIn).toBe(15);
+    // 8 in wheel: |offset| ≤ 101.6 + 76.2 = 177.8 mm, so 190 falls back to the demo's −12.
+    expect(input.planned.position).toEqual({ mode: "offset", offsetMm: -12 });
+    expect(problems).toEqual(["planned wheel diameter (does not match the tire)", "planned wheel position (outside the wheel)"]);
+  });
+
+  it("never throws and always returns a valid input, whatever the query (property)", () => {
+    const keys = fc.constantFrom("ct", "cd", "cw", "co", "cb", "cr", "cf", "cs", "pt", "pd", "pw", "po", "pb", "pr", "pf", "ps", "kpi", "axle", "top", "cruise", "fender", "zz");
+    const value = fc.oneof(fc.string(), fc.double().map(String), fc.constantFrom("17", "-12", "NaN", "Infinity", "1e400", "4-3/4", "%", "%%41", "bead", "265/70R17"));
+    fc.assert(
+      fc.property(fc.array(fc.tuple(keys, value), { maxLength: 12 }), fc.string(), (pairs, junk) => {
+        const q = pairs.map(([k, v]) => `${k}=${v}`).join("&") + junk;
+        const { input } = decodeComparison(q);
+        expect(comparisonInputSchema.safeParse(input).success).toBe(true);
+      }),
+      { numRuns: 500 },
+    );
+    expect(decodeComparison({ ct: ["265/75R17", "x"], junk: undefined }).input.current.tire).toBe("265/75R17");
+  });
+
+  it("tells a comparison link from a bare page", () => {
+    expect(hasComparisonParams("")).toBe(false);
+    expect(hasComparisonParams("utm=1")).toBe(false);
+    expect(hasComparisonParams("pt=35x12.50R17LT")).toBe(true);
+  });
+});
