@@ -9,17 +9,12 @@ import { randomUUID } from "node:crypto";
 import { existsSync, readFileSync, writeFileSync } from "node:fs";
 import { SMTPServer } from "smtp-server";
 import { simpleParser } from "mailparser";
+import type { OutboxMessage } from "../../lib/mail/outbox";
 
-interface Stored {
-  id: string;
-  receivedAt: string;
-  from: string;
-  to: string[];
-  subject: string;
-  text: string;
-  html: string | null;
-  attachments: { index: number; filename: string; contentType: string; size: number; base64: string }[];
-}
+// The outbox API serves what the app's outbox reader expects, plus the attachment bytes kept here.
+type Stored = Omit<OutboxMessage, "attachments"> & {
+  attachments: (OutboxMessage["attachments"][number] & { base64: string })[];
+};
 
 const smtpPort = Number(process.env.SMTP_PORT ?? 2525);
 const httpPort = Number(process.env.OUTBOX_PORT ?? 2526);
