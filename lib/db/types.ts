@@ -38,3 +38,29 @@ export interface SignInThrottleRow {
   window_started_at: Date;
   locked_until: Date | null;
 }
+
+/* ---- shop counter (shops settings, staff invitations, catalog, customers, quotes, payments) ---- */
+
+export interface ShopSettingsRow extends ShopRow {
+  address: string;
+  phone: string;
+  tax_rate_bp: number;
+  labour_rate_cents: number;
+  fabrication_rate_cents: number;
+  quote_validity_days: number;
+  deposit_pct: number;
+  currency: "USD";
+  updated_at: Date;
+}
+
+export interface StaffInviteRow {
+  id: string;
+  shop_id: string;
+  email: string;
+  token_hash: string;
+  invited_by: string | null;
+  expires_at: Date;
+  used_at: Date | null;
+  revoked_at: Date | null;
+  created_at: Date;
+}

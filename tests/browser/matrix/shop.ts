@@ -1,0 +1,23 @@
+import { type MatrixCase, only, publicRoute } from "./types";
+
+/** Ids from db/seeds/01_demo_accounts.ts and db/seeds/05_demo_shop.ts. */
+const NOBODY = "00000000-0000-4000-8000-000000000000";
+const SHOP = ["shop_staff", "shop_owner"] as const;
+const owner = (status: number, staffStatus = 403) => ({ ...only(["shop_owner"], status), shop_staff: staffStatus });
+
+export const cases: MatrixCase[] = [
+  { route: "/api/shop/settings", method: "GET", path: "/api/shop/settings", expect: only([...SHOP]) },
+  {
+    route: "/api/shop/settings",
+    method: "PUT",
+    path: "/api/shop/settings",
+    body: { name: "" },
+    expect: owner(422),
+    note: "invalid body: owners get field errors, staff a 403 before any parsing",
+  },
+  { route: "/api/shop/staff", method: "GET", path: "/api/shop/staff", expect: owner(200) },
+  { route: "/api/shop/staff", method: "POST", path: "/api/shop/staff", body: { email: "not-an-address" }, expect: owner(422) },
+  { route: "/api/shop/staff/[id]", method: "DELETE", path: `/api/shop/staff/${NOBODY}`, expect: owner(404), note: "no such staff member" },
+  { route: "/api/shop/staff/invites/[id]", method: "DELETE", path: `/api/shop/staff/invites/${NOBODY}`, expect: owner(404) },
+  { route: "/api/join", method: "POST", path: "/api/join", body: { token: "x".repeat(43), password: "whatever" }, expect: publicRoute(410) },
+];
