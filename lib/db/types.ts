@@ -64,3 +64,48 @@ export interface StaffInviteRow {
   revoked_at: Date | null;
   created_at: Date;
 }
+
+export const CATALOG_KINDS = ["tire", "wheel", "service"] as const;
+export type CatalogKind = (typeof CATALOG_KINDS)[number];
+export const SERVICE_TYPES = ["mount_balance", "beadlock_assembly", "valve_stem", "tpms", "alignment", "fender_trim", "disposal", "other"] as const;
+export type ServiceType = (typeof SERVICE_TYPES)[number];
+export const SERVICE_UNITS = ["per_wheel", "per_vehicle", "per_hour"] as const;
+export type ServiceUnit = (typeof SERVICE_UNITS)[number];
+
+export interface CatalogItemRow {
+  id: string;
+  shop_id: string;
+  kind: CatalogKind;
+  sku: string;
+  description: string;
+  price_cents: number;
+  qty_on_hand: number | null;
+  tire_size: string | null;
+  tire_rim_in: number | null;
+  tire_diameter_mm: number | null;
+  wheel_diameter_in: number | null;
+  wheel_width_in: number | null;
+  wheel_offset_mm: number | null;
+  wheel_backspacing_in: number | null;
+  wheel_backspacing_ref: "bead-seat" | "flange" | null;
+  bolt_pattern: string | null;
+  center_bore_mm: number | null;
+  beadlock: boolean;
+  service_type: ServiceType | null;
+  service_unit: ServiceUnit | null;
+  created_at: Date;
+  updated_at: Date;
+}
+
+export interface CatalogImportRow {
+  id: string;
+  shop_id: string;
+  created_by: string | null;
+  filename: string;
+  rows: unknown;
+  row_count: number;
+  error_count: number;
+  status: "staged" | "committed";
+  created_at: Date;
+  committed_at: Date | null;
+}

@@ -20,4 +20,9 @@ export const cases: MatrixCase[] = [
   { route: "/api/shop/staff/[id]", method: "DELETE", path: `/api/shop/staff/${NOBODY}`, expect: owner(404), note: "no such staff member" },
   { route: "/api/shop/staff/invites/[id]", method: "DELETE", path: `/api/shop/staff/invites/${NOBODY}`, expect: owner(404) },
   { route: "/api/join", method: "POST", path: "/api/join", body: { token: "x".repeat(43), password: "whatever" }, expect: publicRoute(410) },
+  { route: "/api/shop/catalog", method: "GET", path: "/api/shop/catalog?kind=tire&sort=price_cents&dir=desc&pageSize=5", expect: only([...SHOP]) },
+  { route: "/api/shop/catalog/import", method: "POST", path: "/api/shop/catalog/import", body: "sku;price\nA;1\n", expect: owner(422), note: "wrong headers" },
+  { route: "/api/shop/catalog/import/[id]", method: "POST", path: `/api/shop/catalog/import/${NOBODY}`, expect: owner(404) },
+  { route: "/api/shop/catalog/export", method: "GET", path: "/api/shop/catalog/export", expect: only([...SHOP]) },
+  { route: "/api/shop/catalog/template", method: "GET", path: "/api/shop/catalog/template", expect: only([...SHOP]) },
 ];
