@@ -109,3 +109,106 @@ export interface CatalogImportRow {
   created_at: Date;
   committed_at: Date | null;
 }
+
+export const QUOTE_STATUSES = ["draft", "sent", "accepted", "deposit_paid", "installed", "declined", "expired"] as const;
+export type QuoteStatus = (typeof QUOTE_STATUSES)[number];
+
+export interface CustomerRow {
+  id: string;
+  shop_id: string;
+  name: string;
+  phone: string;
+  phone_digits: string;
+  email: string;
+  created_at: Date;
+  updated_at: Date;
+}
+
+export interface VehicleRow {
+  id: string;
+  shop_id: string;
+  customer_id: string;
+  description: string;
+  bolt_pattern: string;
+  tire_size: string;
+  wheel_diameter_in: number;
+  wheel_width_in: number;
+  wheel_offset_mm: number;
+  axle_ratio: number | null;
+  created_at: Date;
+}
+
+export interface QuoteRow {
+  id: string;
+  shop_id: string;
+  number: number;
+  customer_id: string;
+  vehicle_id: string | null;
+  created_by: string | null;
+  status: QuoteStatus;
+  vehicle_description: string;
+  bolt_pattern: string;
+  current_tire: string;
+  current_wheel_diameter_in: number;
+  current_wheel_width_in: number;
+  current_wheel_offset_mm: number;
+  axle_ratio: number | null;
+  tire_item_id: string | null;
+  wheel_item_id: string | null;
+  wheel_qty: 4 | 5;
+  /** A FitmentSummary (lib/quotes/fitment.ts). */
+  fitment: unknown;
+  discount_cents: number;
+  tax_rate_bp: number;
+  deposit_pct: number;
+  subtotal_cents: number;
+  taxable_cents: number;
+  tax_cents: number;
+  total_cents: number;
+  deposit_cents: number;
+  notes: string;
+  public_token_hash: string | null;
+  valid_until: Date | null;
+  created_at: Date;
+  updated_at: Date;
+}
+
+export type QuoteLineKind = "tire" | "wheel" | "service" | "custom";
+
+export interface QuoteLineRow {
+  id: string;
+  quote_id: string;
+  position: number;
+  kind: QuoteLineKind;
+  catalog_item_id: string | null;
+  sku: string;
+  description: string;
+  quantity: number;
+  unit_price_cents: number;
+  discount_cents: number;
+  taxable: boolean;
+  line_total_cents: number;
+}
+
+export interface QuoteEventRow {
+  id: string;
+  quote_id: string;
+  from_status: QuoteStatus | null;
+  to_status: QuoteStatus;
+  actor_user_id: string | null;
+  actor: string;
+  note: string;
+  at: Date;
+}
+
+export interface PaymentRow {
+  id: string;
+  shop_id: string;
+  quote_id: string;
+  provider_session_id: string;
+  amount_cents: number;
+  currency: string;
+  status: "open" | "paid";
+  created_at: Date;
+  paid_at: Date | null;
+}

@@ -2,6 +2,9 @@ import { type MatrixCase, only, publicRoute } from "./types";
 
 /** Ids from db/seeds/01_demo_accounts.ts and db/seeds/05_demo_shop.ts. */
 const NOBODY = "00000000-0000-4000-8000-000000000000";
+const CUSTOMER = "c0000000-0000-4000-8000-000000000001";
+/** Written by the demo staff member, so staff and owner both see it. */
+const DRAFT = "d0000000-0000-4000-8000-000000000001";
 const SHOP = ["shop_staff", "shop_owner"] as const;
 const owner = (status: number, staffStatus = 403) => ({ ...only(["shop_owner"], status), shop_staff: staffStatus });
 
@@ -25,4 +28,15 @@ export const cases: MatrixCase[] = [
   { route: "/api/shop/catalog/import/[id]", method: "POST", path: `/api/shop/catalog/import/${NOBODY}`, expect: owner(404) },
   { route: "/api/shop/catalog/export", method: "GET", path: "/api/shop/catalog/export", expect: only([...SHOP]) },
   { route: "/api/shop/catalog/template", method: "GET", path: "/api/shop/catalog/template", expect: only([...SHOP]) },
+  { route: "/api/shop/customers", method: "GET", path: "/api/shop/customers?q=555-0160", expect: only([...SHOP]) },
+  { route: "/api/shop/customers", method: "POST", path: "/api/shop/customers", body: { name: "", phone: "", email: "" }, expect: only([...SHOP], 422) },
+  { route: "/api/shop/customers/[id]", method: "GET", path: `/api/shop/customers/${CUSTOMER}`, expect: only([...SHOP]) },
+  { route: "/api/shop/fitment/candidates", method: "POST", path: "/api/shop/fitment/candidates", body: { description: "x", boltPattern: "nope" }, expect: only([...SHOP], 422) },
+  { route: "/api/shop/quotes", method: "GET", path: "/api/shop/quotes", expect: only([...SHOP]) },
+  { route: "/api/shop/quotes", method: "POST", path: "/api/shop/quotes", body: { quantity: 6 }, expect: only([...SHOP], 422) },
+  { route: "/api/shop/quotes/[id]", method: "GET", path: `/api/shop/quotes/${DRAFT}`, expect: only([...SHOP]) },
+  { route: "/api/shop/quotes/[id]", method: "PUT", path: `/api/shop/quotes/${DRAFT}`, body: { lines: [{ kind: "custom", description: "x", quantity: -1, unitPriceCents: 100 }], discountCents: 0 }, expect: only([...SHOP], 422), note: "negative quantity" },
+  { route: "/api/shop/quotes/[id]/status", method: "POST", path: `/api/shop/quotes/${DRAFT}/status`, body: { to: "installed" }, expect: only([...SHOP], 409), note: "a draft cannot be installed" },
+  { route: "/api/shop/quotes/[id]/send", method: "POST", path: `/api/shop/quotes/${NOBODY}/send`, body: {}, expect: only([...SHOP], 404) },
+  { route: "/api/shop/quotes/[id]/pdf", method: "GET", path: `/api/shop/quotes/${DRAFT}/pdf`, expect: only([...SHOP]) },
 ];
