@@ -39,4 +39,6 @@ export const cases: MatrixCase[] = [
   { route: "/api/shop/quotes/[id]/status", method: "POST", path: `/api/shop/quotes/${DRAFT}/status`, body: { to: "installed" }, expect: only([...SHOP], 409), note: "a draft cannot be installed" },
   { route: "/api/shop/quotes/[id]/send", method: "POST", path: `/api/shop/quotes/${NOBODY}/send`, body: {}, expect: only([...SHOP], 404) },
   { route: "/api/shop/quotes/[id]/pdf", method: "GET", path: `/api/shop/quotes/${DRAFT}/pdf`, expect: only([...SHOP]) },
+  { route: "/api/payments/webhook", method: "POST", path: "/api/payments/webhook", body: { type: "checkout.session.completed" }, expect: publicRoute(400), note: "no signature" },
+  { route: "/api/q/[token]", method: "POST", path: `/api/q/${"A".repeat(43)}`, body: { action: "accept" }, expect: publicRoute(404), note: "unknown link" },
 ];

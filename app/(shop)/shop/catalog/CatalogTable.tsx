@@ -95,7 +95,7 @@ export function CatalogTable() {
   });
 
   return (
-    <Card className="overflow-x-auto">
+    <Card className="overflow-x-auto" tabIndex={0} role="region" aria-label="Catalog items">
       <div className="mb-4 flex flex-wrap items-end gap-3">
         <label className="flex flex-col gap-1 text-sm font-medium">
           Search SKU, description, size or bolt pattern

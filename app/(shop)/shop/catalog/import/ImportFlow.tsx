@@ -136,7 +136,7 @@ export function ImportFlow() {
             </p>
           </div>
           {phase.preview.errorCount > 0 && (
-            <div className="max-h-96 overflow-auto rounded-lg ring-1 ring-basalt-200">
+            <div className="max-h-96 overflow-auto rounded-lg ring-1 ring-basalt-200" tabIndex={0} role="region" aria-label="Rows with errors">
               <table className="w-full text-left text-sm">
                 <caption className="sr-only">Rows with errors</caption>
                 <thead className="sticky top-0 bg-basalt-50 text-xs uppercase tracking-wide text-basalt-600">

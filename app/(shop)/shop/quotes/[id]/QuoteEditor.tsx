@@ -165,7 +165,7 @@ export function QuoteEditor({ initial }: { initial: Detail }) {
       </div>
       <div className="grid gap-5 lg:grid-cols-[1.6fr_1fr]">
         <div className="flex flex-col gap-5">
-          <Card className="overflow-x-auto">
+          <Card className="overflow-x-auto" tabIndex={0} role="region" aria-label="Quote lines">
             <h2 className="text-lg font-semibold">Lines</h2>
             {!draft && <p className="text-sm text-basalt-600">Lines can be edited while the quote is a draft.</p>}
             <table className="mt-3 w-full min-w-[640px] text-left text-sm">
