@@ -118,7 +118,7 @@ export async function listQuotes(db: Knex, scope: QuoteScope, opts: { status?: Q
 type LineDraft = Omit<QuoteLineRow, "id" | "quote_id" | "position" | "line_total_cents">;
 
 /** The services the pick calls for, from the shop's own service items (names and prices the shop set). */
-export function suggestedServiceLines(services: CatalogItemRow[], wheel: CatalogItemRow, qty: number, fit: FitmentSummary): LineDraft[] {
+export function suggestedServiceLines(services: CatalogItemRow[], wheel: CatalogItemRow, qty: number, fit: FitmentSummary, fabricationRateCents = 0): LineDraft[] {
   const first = (t: ServiceType) => services.find((s) => s.service_type === t);
   const out: LineDraft[] = [];
   const add = (item: CatalogItemRow | undefined, quantity: number) => {
@@ -128,7 +128,12 @@ export function suggestedServiceLines(services: CatalogItemRow[], wheel: Catalog
   if (wheel.beadlock) add(first("beadlock_assembly"), qty);
   add(first("valve_stem") ?? first("tpms"), qty);
   if (fit.alignmentSuggested) add(first("alignment"), 1);
-  if (fit.warnings.some((w) => /further outboard/.test(w))) add(first("fender_trim"), 1);
+  if (fit.warnings.some((w) => /further outboard/.test(w))) {
+    const trim = first("fender_trim");
+    if (trim) add(trim, 1);
+    // No trimming item in the catalog: one hour at the shop's fabrication rate.
+    else if (fabricationRateCents > 0) out.push({ kind: "custom", catalog_item_id: null, sku: "", description: "Fender trimming labour (1 hour)", quantity: 1, unit_price_cents: fabricationRateCents, discount_cents: 0, taxable: false });
+  }
   add(first("disposal"), qty);
   return out;
 }
@@ -176,7 +181,7 @@ export interface CreateQuote {
 /** A new draft: the vehicle snapshot, the fitment summary from the engine, lines and server totals. */
 export async function createQuote(db: Knex, shopId: string, actor: Actor & { userId: string }, input: CreateQuote): Promise<string> {
   return db.transaction(async (trx) => {
-    const shop = await trx("shops").where({ id: shopId }).forUpdate().first("tax_rate_bp", "deposit_pct");
+    const shop = await trx("shops").where({ id: shopId }).forUpdate().first("tax_rate_bp", "deposit_pct", "fabrication_rate_cents");
     const customer = await trx("customers").where({ id: input.customerId, shop_id: shopId }).first("id");
     if (!customer) throw new HttpError(422, "Some fields need attention.", { customerId: ["That customer was not found."] });
     let vehicleId: string | null = input.vehicleId ?? null;
@@ -230,7 +235,7 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
     const lines: LineDraft[] = [
       { kind: "tire", catalog_item_id: tire.id, sku: tire.sku, description: tire.description, quantity: input.quantity, unit_price_cents: tire.price_cents, discount_cents: 0, taxable: true },
       { kind: "wheel", catalog_item_id: wheel.id, sku: wheel.sku, description: wheel.description, quantity: input.quantity, unit_price_cents: wheel.price_cents, discount_cents: 0, taxable: true },
-      ...suggestedServiceLines(services, wheel, input.quantity, fit),
+      ...suggestedServiceLines(services, wheel, input.quantity, fit, shop.fabrication_rate_cents),
     ];
     const totals = totalsOf(lines, 0, shop.tax_rate_bp, shop.deposit_pct);
     const [{ next }] = (await trx("quotes").where({ shop_id: shopId }).max<{ next: number | null }[]>({ next: "number" })) as [{ next: number | null }];

@@ -57,7 +57,7 @@ const toEdit = (l: J<QuoteLineRow>): EditLine => ({
   taxable: l.taxable,
 });
 
-export function QuoteEditor({ initial }: { initial: Detail }) {
+export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; labourRateCents: number }) {
   const qc = useQueryClient();
   const [detail, setDetail] = useState(initial);
   const q = detail.quote;
@@ -210,9 +210,9 @@ export function QuoteEditor({ initial }: { initial: Detail }) {
               <div className="mt-3 flex flex-wrap items-end gap-3">
                 <Button
                   variant="secondary"
-                  onClick={() => setLines((ls) => [...ls, { key: `new-${Date.now()}`, kind: "custom", catalogItemId: null, sku: "", description: "Labour", quantity: "1", unitPrice: "0.00", discount: "0", taxable: false }])}
+                  onClick={() => setLines((ls) => [...ls, { key: `new-${Date.now()}`, kind: "custom", catalogItemId: null, sku: "", description: "Labour (1 hour)", quantity: "1", unitPrice: formatCents(labourRateCents).replace(/,/g, ""), discount: "0", taxable: false }])}
                 >
-                  Add a line
+                  Add a labour line
                 </Button>
                 <label className="flex flex-col gap-1 text-sm font-medium">
                   Quote discount ($)

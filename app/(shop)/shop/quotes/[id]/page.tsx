@@ -4,6 +4,7 @@ import { requirePageCaller } from "@/lib/auth/session";
 import { db } from "@/lib/db";
 import { HttpError } from "@/lib/http/errors";
 import { getQuoteDetail, quoteScopeOf } from "@/lib/server/quotes";
+import { getShop } from "@/lib/server/shops";
 import { QuoteEditor } from "./QuoteEditor";
 
 export const metadata: Metadata = { title: "Quote" };
@@ -17,5 +18,6 @@ export default async function QuotePage({ params }: { params: Promise<{ id: stri
     throw e;
   });
   if (!detail) notFound();
-  return <QuoteEditor initial={JSON.parse(JSON.stringify(detail))} />;
+  const shop = await getShop(db, detail.quote.shop_id);
+  return <QuoteEditor initial={JSON.parse(JSON.stringify(detail))} labourRateCents={shop?.labour_rate_cents ?? 0} />;
 }
