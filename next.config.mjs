@@ -20,7 +20,7 @@ const csp = [
 const nextConfig = {
   reactStrictMode: true,
   poweredByHeader: false,
-  serverExternalPackages: ["knex", "pg", "nodemailer", "bcryptjs"],
+  serverExternalPackages: ["knex", "pg", "nodemailer", "bcryptjs", "pdfkit"],
   async headers() {
     return [
       {

@@ -76,6 +76,9 @@ ensure_env_file() {
     log "generating development secrets in .env.local"
     echo "NEXTAUTH_SECRET=$(node -e 'console.log(require("crypto").randomBytes(32).toString("base64url"))')" >> .env.local
   fi
+  if ! grep -q '^STRIPE_WEBHOOK_SECRET=' .env.local; then
+    echo "STRIPE_WEBHOOK_SECRET=whsec_$(node -e 'console.log(require("crypto").randomBytes(24).toString("hex"))')" >> .env.local
+  fi
   set -a; . ./.env.local; set +a
 }
 

@@ -34,6 +34,11 @@ export SMTP_PORT="${SMTP_PORT:-2525}" OUTBOX_PORT="${OUTBOX_PORT:-2526}"
 export SMTP_URL="${SMTP_URL:-smtp://127.0.0.1:$SMTP_PORT}"
 export OUTBOX_URL="${OUTBOX_URL:-http://127.0.0.1:$OUTBOX_PORT}"
 export OUTBOX_FILE="$ROOT/.data/outbox.json"
+# The payment SDK talks to the local fake provider (scripts/services/fake-pay.ts); the key is a test value.
+export FAKE_PAY_PORT="${FAKE_PAY_PORT:-2527}"
+export STRIPE_SECRET_KEY="${STRIPE_SECRET_KEY:-sk_test_hubface_local}"
+export STRIPE_API_HOST="${STRIPE_API_HOST:-127.0.0.1}" STRIPE_API_PORT="${STRIPE_API_PORT:-$FAKE_PAY_PORT}"
+export STRIPE_WEBHOOK_URL="${STRIPE_WEBHOOK_URL:-http://127.0.0.1:$PORT/api/payments/webhook}"
 mkdir -p .data
 
 log "migrating the database"
@@ -42,6 +47,7 @@ log "loading demo data (kept when already there)"
 npm run -s db:seed >/dev/null
 
 tsx scripts/services/fake-smtp.ts & PIDS+=($!)
+tsx scripts/services/fake-pay.ts & PIDS+=($!)
 
 if [ ! -f .next/BUILD_ID ] || [ -n "$(find app components lib proxy.ts next.config.mjs tailwind.config.ts package-lock.json -newer .next/BUILD_ID -print -quit 2>/dev/null)" ]; then
   log "building the app (next build)"
@@ -62,6 +68,7 @@ cat <<INFO
     admin        admin@demo.hubface.test     sees users and the development outbox
 
   Mail sent by the app lands in the outbox: sign in as admin → Outbox (/admin/outbox)
+  Deposits are paid on a local fake payment page (test card 4242 4242 4242 4242).
 
 INFO
 wait -n "${PIDS[@]}" || true

@@ -11,6 +11,7 @@ PGPORT_TEST="${HUBFACE_TEST_PG_PORT:-55433}"
 APP_PORT="${HUBFACE_TEST_APP_PORT:-3100}"
 T_SMTP="${HUBFACE_TEST_SMTP_PORT:-2625}"
 T_OUTBOX="${HUBFACE_TEST_OUTBOX_PORT:-2626}"
+T_PAY="${HUBFACE_TEST_PAY_PORT:-2627}"
 PIDS=()
 
 cleanup() {
@@ -61,11 +62,15 @@ export SMTP_PORT="$T_SMTP" OUTBOX_PORT="$T_OUTBOX"
 export SMTP_URL="smtp://127.0.0.1:$T_SMTP" OUTBOX_URL="http://127.0.0.1:$T_OUTBOX"
 export NEXTAUTH_URL="http://127.0.0.1:$APP_PORT" APP_ORIGIN="http://127.0.0.1:$APP_PORT"
 export E2E_BASE_URL="http://127.0.0.1:$APP_PORT"
+export FAKE_PAY_PORT="$T_PAY" STRIPE_SECRET_KEY="sk_test_hubface_e2e" STRIPE_API_HOST=127.0.0.1 STRIPE_API_PORT="$T_PAY"
+export STRIPE_WEBHOOK_SECRET="whsec_$(node -e 'console.log(require("crypto").randomBytes(24).toString("hex"))')"
+export STRIPE_WEBHOOK_URL="$E2E_BASE_URL/api/payments/webhook"
 export PG_TEST_DATA_DIR="$PGDATA_DIR" PGBIN
 if next build > "$RESULTS/next-build.log" 2>&1; then
   record build 1 0
   npm run -s db:migrate >/dev/null && npm run -s db:seed >/dev/null
   tsx scripts/services/fake-smtp.ts > "$RESULTS/fake-smtp.log" 2>&1 & PIDS+=($!)
+  tsx scripts/services/fake-pay.ts > "$RESULTS/fake-pay.log" 2>&1 & PIDS+=($!)
   node node_modules/next/dist/bin/next start -H 127.0.0.1 -p "$APP_PORT" > "$RESULTS/next-start.log" 2>&1 & PIDS+=($!)
   if wait_for_http "$E2E_BASE_URL/api/health"; then
     log "browser and HTTP tests (Chromium)"

@@ -38,3 +38,177 @@ export interface SignInThrottleRow {
   window_started_at: Date;
   locked_until: Date | null;
 }
+
+/* ---- shop counter (shops settings, staff invitations, catalog, customers, quotes, payments) ---- */
+
+export interface ShopSettingsRow extends ShopRow {
+  address: string;
+  phone: string;
+  tax_rate_bp: number;
+  labour_rate_cents: number;
+  fabrication_rate_cents: number;
+  quote_validity_days: number;
+  deposit_pct: number;
+  currency: "USD";
+  updated_at: Date;
+}
+
+export interface StaffInviteRow {
+  id: string;
+  shop_id: string;
+  email: string;
+  token_hash: string;
+  invited_by: string | null;
+  expires_at: Date;
+  used_at: Date | null;
+  revoked_at: Date | null;
+  created_at: Date;
+}
+
+export const CATALOG_KINDS = ["tire", "wheel", "service"] as const;
+export type CatalogKind = (typeof CATALOG_KINDS)[number];
+export const SERVICE_TYPES = ["mount_balance", "beadlock_assembly", "valve_stem", "tpms", "alignment", "fender_trim", "disposal", "other"] as const;
+export type ServiceType = (typeof SERVICE_TYPES)[number];
+export const SERVICE_UNITS = ["per_wheel", "per_vehicle", "per_hour"] as const;
+export type ServiceUnit = (typeof SERVICE_UNITS)[number];
+
+export interface CatalogItemRow {
+  id: string;
+  shop_id: string;
+  kind: CatalogKind;
+  sku: string;
+  description: string;
+  price_cents: number;
+  qty_on_hand: number | null;
+  tire_size: string | null;
+  tire_rim_in: number | null;
+  tire_diameter_mm: number | null;
+  wheel_diameter_in: number | null;
+  wheel_width_in: number | null;
+  wheel_offset_mm: number | null;
+  wheel_backspacing_in: number | null;
+  wheel_backspacing_ref: "bead-seat" | "flange" | null;
+  bolt_pattern: string | null;
+  center_bore_mm: number | null;
+  beadlock: boolean;
+  service_type: ServiceType | null;
+  service_unit: ServiceUnit | null;
+  created_at: Date;
+  updated_at: Date;
+}
+
+export interface CatalogImportRow {
+  id: string;
+  shop_id: string;
+  created_by: string | null;
+  filename: string;
+  rows: unknown;
+  row_count: number;
+  error_count: number;
+  status: "staged" | "committed";
+  created_at: Date;
+  committed_at: Date | null;
+}
+
+export const QUOTE_STATUSES = ["draft", "sent", "accepted", "deposit_paid", "installed", "declined", "expired"] as const;
+export type QuoteStatus = (typeof QUOTE_STATUSES)[number];
+
+export interface CustomerRow {
+  id: string;
+  shop_id: string;
+  name: string;
+  phone: string;
+  phone_digits: string;
+  email: string;
+  created_at: Date;
+  updated_at: Date;
+}
+
+export interface VehicleRow {
+  id: string;
+  shop_id: string;
+  customer_id: string;
+  description: string;
+  bolt_pattern: string;
+  tire_size: string;
+  wheel_diameter_in: number;
+  wheel_width_in: number;
+  wheel_offset_mm: number;
+  axle_ratio: number | null;
+  created_at: Date;
+}
+
+export interface QuoteRow {
+  id: string;
+  shop_id: string;
+  number: number;
+  customer_id: string;
+  vehicle_id: string | null;
+  created_by: string | null;
+  status: QuoteStatus;
+  vehicle_description: string;
+  bolt_pattern: string;
+  current_tire: string;
+  current_wheel_diameter_in: number;
+  current_wheel_width_in: number;
+  current_wheel_offset_mm: number;
+  axle_ratio: number | null;
+  tire_item_id: string | null;
+  wheel_item_id: string | null;
+  wheel_qty: 4 | 5;
+  /** A FitmentSummary (lib/quotes/fitment.ts). */
+  fitment: unknown;
+  discount_cents: number;
+  tax_rate_bp: number;
+  deposit_pct: number;
+  subtotal_cents: number;
+  taxable_cents: number;
+  tax_cents: number;
+  total_cents: number;
+  deposit_cents: number;
+  notes: string;
+  public_token_hash: string | null;
+  valid_until: Date | null;
+  created_at: Date;
+  updated_at: Date;
+}
+
+export type QuoteLineKind = "tire" | "wheel" | "service" | "custom";
+
+export interface QuoteLineRow {
+  id: string;
+  quote_id: string;
+  position: number;
+  kind: QuoteLineKind;
+  catalog_item_id: string | null;
+  sku: string;
+  description: string;
+  quantity: number;
+  unit_price_cents: number;
+  discount_cents: number;
+  taxable: boolean;
+  line_total_cents: number;
+}
+
+export interface QuoteEventRow {
+  id: string;
+  quote_id: string;
+  from_status: QuoteStatus | null;
+  to_status: QuoteStatus;
+  actor_user_id: string | null;
+  actor: string;
+  note: string;
+  at: Date;
+}
+
+export interface PaymentRow {
+  id: string;
+  shop_id: string;
+  quote_id: string;
+  provider_session_id: string;
+  amount_cents: number;
+  currency: string;
+  status: "open" | "paid";
+  created_at: Date;
+  paid_at: Date | null;
+}

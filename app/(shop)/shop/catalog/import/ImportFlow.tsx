@@ -1,0 +1,176 @@
+"use client";
+import { useQueryClient } from "@tanstack/react-query";
+import Link from "next/link";
+import { useRef, useState } from "react";
+import { Alert } from "@/components/ui/Alert";
+import { Button } from "@/components/ui/Button";
+import { Card } from "@/components/ui/Card";
+import { CSV_MAX_BYTES } from "@/lib/catalog/csv";
+
+interface Preview {
+  importId: string | null;
+  total: number;
+  valid: number;
+  newItems: number;
+  updatedItems: number;
+  errorCount: number;
+  errors: { row: number; column: string; message: string }[];
+}
+type Phase =
+  | { at: "pick" }
+  | { at: "uploading"; pct: number }
+  | { at: "preview"; preview: Preview; file: string }
+  | { at: "importing"; done: number; total: number }
+  | { at: "done"; imported: number };
+
+function upload(file: File, onProgress: (pct: number) => void): Promise<{ status: number; body: Record<string, unknown> }> {
+  return new Promise((resolve) => {
+    const xhr = new XMLHttpRequest();
+    xhr.open("POST", `/api/shop/catalog/import?filename=${encodeURIComponent(file.name)}`);
+    xhr.setRequestHeader("Content-Type", "text/csv");
+    xhr.upload.onprogress = (e) => e.lengthComputable && onProgress(Math.round((e.loaded / e.total) * 100));
+    xhr.onload = () => {
+      let body: Record<string, unknown> = {};
+      try {
+        body = JSON.parse(xhr.responseText) as Record<string, unknown>;
+      } catch {}
+      resolve({ status: xhr.status, body });
+    };
+    xhr.onerror = () => resolve({ status: 0, body: { error: "The upload failed. Check your connection and try again." } });
+    xhr.send(file);
+  });
+}
+
+function Progress({ label, value, max }: { label: string; value: number; max: number }) {
+  return (
+    <div className="flex flex-col gap-1">
+      <label htmlFor="import-progress" className="text-sm font-medium">{label}</label>
+      <progress id="import-progress" className="h-3 w-full accent-ember-600" value={value} max={max} />
+      <span className="text-xs text-basalt-600" aria-live="polite">{max ? Math.round((value / max) * 100) : 0} %</span>
+    </div>
+  );
+}
+
+export function ImportFlow() {
+  const qc = useQueryClient();
+  const input = useRef<HTMLInputElement>(null);
+  const [phase, setPhase] = useState<Phase>({ at: "pick" });
+  const [failure, setFailure] = useState<string | null>(null);
+
+  async function onPick(file: File | undefined) {
+    setFailure(null);
+    if (!file) return;
+    if (file.size > CSV_MAX_BYTES) {
+      setFailure(`The file is larger than ${CSV_MAX_BYTES / 1024 / 1024} MB. Split the catalog into smaller files.`);
+      return;
+    }
+    setPhase({ at: "uploading", pct: 0 });
+    const res = await upload(file, (pct) => setPhase({ at: "uploading", pct }));
+    if (res.status !== 200) {
+      setFailure(String(res.body.error ?? `The upload failed (${res.status}).`));
+      setPhase({ at: "pick" });
+      if (input.current) input.current.value = "";
+      return;
+    }
+    setPhase({ at: "preview", preview: res.body as unknown as Preview, file: file.name });
+  }
+
+  async function onConfirm(importId: string, total: number) {
+    setFailure(null);
+    setPhase({ at: "importing", done: 0, total });
+    const res = await fetch(`/api/shop/catalog/import/${importId}`, { method: "POST" }).catch(() => null);
+    if (!res?.ok || !res.body) {
+      const body = (await res?.json().catch(() => ({}))) as { error?: string } | undefined;
+      setFailure(body?.error ?? "The import could not start. Nothing was changed.");
+      setPhase({ at: "pick" });
+      return;
+    }
+    const reader = res.body.pipeThrough(new TextDecoderStream()).getReader();
+    let buf = "";
+    for (;;) {
+      const { done, value } = await reader.read();
+      if (done) break;
+      buf += value;
+      let nl: number;
+      while ((nl = buf.indexOf("\n")) >= 0) {
+        const msg = JSON.parse(buf.slice(0, nl)) as { done?: number; total?: number; imported?: number; error?: string };
+        buf = buf.slice(nl + 1);
+        if (msg.error) {
+          setFailure(msg.error);
+          setPhase({ at: "pick" });
+          return;
+        }
+        if (msg.imported !== undefined) {
+          setPhase({ at: "done", imported: msg.imported });
+          await qc.invalidateQueries({ queryKey: ["shop-catalog"] });
+        } else if (msg.done !== undefined) setPhase({ at: "importing", done: msg.done, total: msg.total ?? total });
+      }
+    }
+  }
+
+  return (
+    <Card className="flex flex-col gap-4">
+      <div aria-live="assertive">{failure && <Alert tone="error" title="Nothing was imported">{failure}</Alert>}</div>
+      {(phase.at === "pick" || phase.at === "uploading") && (
+        <div className="flex flex-col gap-1">
+          <label htmlFor="catalog-file" className="text-sm font-medium">Catalog CSV file</label>
+          <input
+            ref={input}
+            id="catalog-file"
+            type="file"
+            accept=".csv,text/csv"
+            disabled={phase.at === "uploading"}
+            onChange={(e) => void onPick(e.target.files?.[0])}
+            className="text-sm file:mr-3 file:rounded-lg file:border-0 file:bg-basalt-900 file:px-4 file:py-2 file:font-semibold file:text-white"
+          />
+        </div>
+      )}
+      {phase.at === "uploading" && <Progress label="Uploading and checking" value={phase.pct} max={100} />}
+      {phase.at === "preview" && (
+        <>
+          <div>
+            <h2 className="text-lg font-semibold">Preview of {phase.file}</h2>
+            <p className="mt-1 text-sm" data-testid="import-summary">
+              {phase.preview.total.toLocaleString("en-US")} rows read · {phase.preview.valid.toLocaleString("en-US")} ready ({phase.preview.newItems.toLocaleString("en-US")} new,{" "}
+              {phase.preview.updatedItems.toLocaleString("en-US")} updated) · {phase.preview.errorCount.toLocaleString("en-US")} with errors
+            </p>
+          </div>
+          {phase.preview.errorCount > 0 && (
+            <div className="max-h-96 overflow-auto rounded-lg ring-1 ring-basalt-200" tabIndex={0} role="region" aria-label="Rows with errors">
+              <table className="w-full text-left text-sm">
+                <caption className="sr-only">Rows with errors</caption>
+                <thead className="sticky top-0 bg-basalt-50 text-xs uppercase tracking-wide text-basalt-600">
+                  <tr><th className="px-3 py-2">Row</th><th className="px-3">Column</th><th className="px-3">Problem</th></tr>
+                </thead>
+                <tbody className="divide-y divide-basalt-100">
+                  {phase.preview.errors.map((e, i) => (
+                    <tr key={i} data-testid="import-error"><td className="px-3 py-1 tabular-nums">{e.row}</td><td className="px-3 font-mono text-xs">{e.column || "—"}</td><td className="px-3">{e.message}</td></tr>
+                  ))}
+                </tbody>
+              </table>
+              {phase.preview.errorCount > phase.preview.errors.length && (
+                <p className="p-3 text-sm text-basalt-600">… and {phase.preview.errorCount - phase.preview.errors.length} more.</p>
+              )}
+            </div>
+          )}
+          <div className="flex flex-wrap gap-2">
+            {phase.preview.importId ? (
+              <Button onClick={() => void onConfirm(phase.preview.importId!, phase.preview.valid)}>
+                Import {phase.preview.valid.toLocaleString("en-US")} rows{phase.preview.errorCount ? ` (skip ${phase.preview.errorCount} with errors)` : ""}
+              </Button>
+            ) : (
+              <Alert tone="warning">No row can be imported. Fix the file and upload it again.</Alert>
+            )}
+            <Button variant="secondary" onClick={() => setPhase({ at: "pick" })}>Choose another file</Button>
+          </div>
+        </>
+      )}
+      {phase.at === "importing" && <Progress label="Importing (one transaction: all rows or none)" value={phase.done} max={phase.total} />}
+      {phase.at === "done" && (
+        <Alert tone="success" title="Import finished">
+          {phase.imported.toLocaleString("en-US")} items imported. <Link className="underline" href="/shop/catalog">Back to the catalog</Link>
+        </Alert>
+      )}
+    </Card>
+  );
+}

@@ -1,0 +1,29 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { buttonClass } from "@/components/ui/Button";
+import { PageHeader } from "@/components/ui/PageHeader";
+import { requirePageCaller } from "@/lib/auth/session";
+import { CatalogTable } from "./CatalogTable";
+
+export const metadata: Metadata = { title: "Catalog" };
+
+export default async function CatalogPage() {
+  const caller = await requirePageCaller("/shop/catalog", ["shop_staff", "shop_owner"]);
+  const owner = caller.role === "shop_owner";
+  return (
+    <>
+      <PageHeader
+        title="Catalog"
+        lead="Tires, wheels and services with prices and stock. Quotes pick from here."
+        actions={
+          <div className="flex flex-wrap gap-2">
+            <a href="/api/shop/catalog/export" className={buttonClass("secondary")} download>Export CSV</a>
+            <a href="/api/shop/catalog/template" className={buttonClass("secondary")} download>CSV template</a>
+            {owner && <Link href="/shop/catalog/import" className={buttonClass("primary")}>Import CSV</Link>}
+          </div>
+        }
+      />
+      <CatalogTable />
+    </>
+  );
+}

@@ -1,0 +1,20 @@
+import type { ReactNode } from "react";
+import { currentCaller } from "@/lib/auth/session";
+import { ShopTabs, type Tab } from "./ShopTabs";
+
+export default async function ShopLayout({ children }: { children: ReactNode }) {
+  const caller = await currentCaller().catch(() => null);
+  const owner = caller?.role === "shop_owner";
+  const tabs: Tab[] = [
+    { href: "/shop", label: "Counter" },
+    { href: "/shop/quotes", label: "Quotes" },
+    { href: "/shop/catalog", label: "Catalog" },
+    ...(owner ? [{ href: "/shop/staff", label: "Staff" }, { href: "/shop/settings", label: "Settings" }] : []),
+  ];
+  return (
+    <>
+      {caller && (caller.role === "shop_staff" || owner) && <ShopTabs tabs={tabs} />}
+      {children}
+    </>
+  );
+}

@@ -1,0 +1,16 @@
+import type { Metadata } from "next";
+import { PageHeader } from "@/components/ui/PageHeader";
+import { requirePageCaller } from "@/lib/auth/session";
+import { QuoteBuilder } from "./QuoteBuilder";
+
+export const metadata: Metadata = { title: "New quote" };
+
+export default async function NewQuotePage() {
+  await requirePageCaller("/shop/quotes/new", ["shop_staff", "shop_owner"]);
+  return (
+    <>
+      <PageHeader title="New quote" lead="Find the customer, enter the vehicle as it is now, and pick a tire and wheel from the catalog." />
+      <QuoteBuilder />
+    </>
+  );
+}

@@ -1,0 +1,52 @@
+"use client";
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { useForm } from "react-hook-form";
+import { Alert } from "@/components/ui/Alert";
+import { Button } from "@/components/ui/Button";
+import { TextField } from "@/components/ui/TextField";
+import { api, applyFieldErrors } from "@/lib/client/api";
+import { type ShopSettings, type ShopSettingsInput, shopSettingsSchema } from "@/lib/validation/shop";
+
+const FIELDS = ["name", "address", "phone", "taxRate", "labourRate", "fabricationRate", "quoteValidityDays", "depositPct", "currency"] as const;
+
+export function SettingsForm({ initial }: { initial: Record<(typeof FIELDS)[number], string> }) {
+  const router = useRouter();
+  const [message, setMessage] = useState<{ tone: "success" | "error"; text: string } | null>(null);
+  const { register, handleSubmit, setError, formState, getValues } = useForm<ShopSettingsInput, unknown, ShopSettings>({
+    resolver: zodResolver(shopSettingsSchema),
+    defaultValues: initial as ShopSettingsInput,
+  });
+  const errors = formState.errors;
+  const onSubmit = handleSubmit(async () => {
+    setMessage(null);
+    // The text as typed goes to the server, which parses it with the same schema.
+    const body = getValues();
+    try {
+      await api("/api/shop/settings", { method: "PUT", body });
+      setMessage({ tone: "success", text: "Settings saved. New quotes use them from now on." });
+      router.refresh();
+    } catch (e) {
+      const rest = applyFieldErrors(e, setError, FIELDS);
+      if (rest) setMessage({ tone: "error", text: rest });
+    }
+  });
+  return (
+    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-3">
+      <div aria-live="polite">{message && <Alert tone={message.tone}>{message.text}</Alert>}</div>
+      <TextField label="Shop name" {...register("name")} error={errors.name?.message} />
+      <TextField label="Address" {...register("address")} error={errors.address?.message} hint="Printed in the quote header." />
+      <TextField label="Phone" type="tel" {...register("phone")} error={errors.phone?.message} />
+      <div className="grid gap-3 sm:grid-cols-2">
+        <TextField label="Sales tax rate (%)" inputMode="decimal" {...register("taxRate")} error={errors.taxRate?.message} hint="Applied to taxable lines, e.g. 8.25." />
+        <TextField label="Deposit (% of total)" inputMode="numeric" {...register("depositPct")} error={errors.depositPct?.message} />
+        <TextField label="Labour rate ($ per hour)" inputMode="decimal" {...register("labourRate")} error={errors.labourRate?.message} />
+        <TextField label="Fabrication rate ($ per hour)" inputMode="decimal" {...register("fabricationRate")} error={errors.fabricationRate?.message} hint="Fender trimming and other cutting work." />
+        <TextField label="Quote valid for (days)" inputMode="numeric" {...register("quoteValidityDays")} error={errors.quoteValidityDays?.message} />
+        <TextField label="Currency" readOnly {...register("currency")} error={errors.currency?.message} hint="Quotes and deposits are in US dollars." />
+      </div>
+      <Button type="submit" pending={formState.isSubmitting} className="self-start">Save settings</Button>
+    </form>
+  );
+}

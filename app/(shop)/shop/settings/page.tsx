@@ -1,0 +1,37 @@
+import type { Metadata } from "next";
+import { Card } from "@/components/ui/Card";
+import { PageHeader } from "@/components/ui/PageHeader";
+import { requirePageCaller } from "@/lib/auth/session";
+import { db } from "@/lib/db";
+import { formatBp, formatCents } from "@/lib/quotes/money";
+import { getShop, shopIdOf } from "@/lib/server/shops";
+import { notFound } from "next/navigation";
+import { SettingsForm } from "./SettingsForm";
+
+export const metadata: Metadata = { title: "Shop settings" };
+
+export default async function SettingsPage() {
+  const caller = await requirePageCaller("/shop/settings", ["shop_owner"]);
+  const shop = await getShop(db, shopIdOf(caller));
+  if (!shop) notFound();
+  return (
+    <>
+      <PageHeader title="Shop settings" lead="What every quote carries: your shop's header, tax, labour rates, how long a quote holds and the deposit asked." />
+      <Card className="max-w-2xl">
+        <SettingsForm
+          initial={{
+            name: shop.name,
+            address: shop.address,
+            phone: shop.phone,
+            taxRate: formatBp(shop.tax_rate_bp),
+            labourRate: formatCents(shop.labour_rate_cents).replace(/,/g, ""),
+            fabricationRate: formatCents(shop.fabrication_rate_cents).replace(/,/g, ""),
+            quoteValidityDays: String(shop.quote_validity_days),
+            depositPct: String(shop.deposit_pct),
+            currency: "USD",
+          }}
+        />
+      </Card>
+    </>
+  );
+}

@@ -1,0 +1,26 @@
+import type { Metadata } from "next";
+import { PageHeader } from "@/components/ui/PageHeader";
+import { requirePageCaller } from "@/lib/auth/session";
+import { db } from "@/lib/db";
+import { listOpenInvites, listTeam, shopIdOf } from "@/lib/server/shops";
+import { StaffPanel } from "./StaffPanel";
+
+export const metadata: Metadata = { title: "Staff" };
+
+export default async function StaffPage() {
+  const caller = await requirePageCaller("/shop/staff", ["shop_owner"]);
+  const shopId = shopIdOf(caller);
+  const [team, invites] = await Promise.all([listTeam(db, shopId), listOpenInvites(db, shopId)]);
+  return (
+    <>
+      <PageHeader title="Staff" lead="Invite counter staff by e-mail. The link works once and expires after three days." />
+      <StaffPanel
+        selfId={caller.userId}
+        initial={{
+          team: team.map((t) => ({ ...t })),
+          invites: invites.map((i) => ({ id: i.id, email: i.email, expires_at: new Date(i.expires_at).toISOString() })),
+        }}
+      />
+    </>
+  );
+}

@@ -1,0 +1,45 @@
+import { z } from "zod";
+import { db } from "@/lib/db";
+import { HttpError, notFound } from "@/lib/http/errors";
+import { route } from "@/lib/http/route";
+import { appOrigin } from "@/lib/mail";
+import { createDepositSession } from "@/lib/payments/provider";
+import { expireDue, findByToken, transition } from "@/lib/server/quotes";
+import { publicQuoteActionSchema } from "@/lib/validation/quotes";
+
+const params = z.object({ token: z.string().regex(/^[A-Za-z0-9_-]{43}$/) });
+const customer = { userId: null, label: "customer" };
+
+/** The customer's actions on their quote link: accept, decline, or pay the deposit. */
+export const POST = route({ access: "public", params, body: publicQuoteActionSchema }, async ({ params, body }) => {
+  await expireDue(db);
+  if (body.action === "accept" || body.action === "decline") {
+    await db.transaction(async (trx) => {
+      const quote = await findByToken(trx, params.token, true);
+      if (!quote) throw notFound("That quote");
+      await transition(trx, quote, body.action === "accept" ? "accepted" : "declined", customer);
+    });
+    return { ok: true };
+  }
+  const quote = await findByToken(db, params.token);
+  if (!quote) throw notFound("That quote");
+  if (quote.status !== "accepted") throw new HttpError(409, "Accept the quote before paying the deposit.");
+  if (quote.deposit_cents <= 0) throw new HttpError(409, "This quote asks no deposit.");
+  const [shop, cust] = await Promise.all([
+    db("shops").where({ id: quote.shop_id }).first("name"),
+    db("customers").where({ id: quote.customer_id, shop_id: quote.shop_id }).first("email"),
+  ]);
+  const link = `${appOrigin()}/q/${params.token}`;
+  const session = await createDepositSession({
+    quoteId: quote.id,
+    shopId: quote.shop_id,
+    quoteNumber: quote.number,
+    shopName: shop.name,
+    amountCents: quote.deposit_cents,
+    customerEmail: cust?.email ?? "",
+    successUrl: `${link}?paid=1`,
+    cancelUrl: link,
+  });
+  await db("payments").insert({ shop_id: quote.shop_id, quote_id: quote.id, provider_session_id: session.id, amount_cents: quote.deposit_cents, currency: "usd" });
+  return { url: session.url };
+});

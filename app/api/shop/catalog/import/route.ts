@@ -1,0 +1,33 @@
+import { z } from "zod";
+import { CSV_MAX_BYTES, decodeCsvBytes, parseCatalogCsv } from "@/lib/catalog/csv";
+import { db } from "@/lib/db";
+import { readCappedBytes } from "@/lib/http/body";
+import { HttpError } from "@/lib/http/errors";
+import { json, route } from "@/lib/http/route";
+import { stageImport } from "@/lib/server/catalog";
+import { SHOP_OWNER, shopIdOf } from "@/lib/server/shops";
+
+const MAX_ERRORS_SHOWN = 500;
+
+/**
+ * Step 1 of an import: the CSV file as the request body → a preview with a row-by-row report.
+ * Valid rows are staged (nothing touches the catalog until the owner confirms).
+ */
+export const POST = route({ access: SHOP_OWNER, query: z.object({ filename: z.string().max(200).optional() }) }, async ({ caller, req, query }) => {
+  const bytes = await readCappedBytes(req, CSV_MAX_BYTES);
+  const decoded = decodeCsvBytes(bytes);
+  if ("error" in decoded) throw new HttpError(422, decoded.error);
+  const report = parseCatalogCsv(decoded.text);
+  if (report.fileErrors.length) return json({ error: report.fileErrors.join(" "), fileErrors: report.fileErrors }, 422);
+  if (report.total === 0) throw new HttpError(422, "The file has a header row but no items.");
+  const staged = report.items.length ? await stageImport(db, shopIdOf(caller), caller.userId, query.filename ?? "", report) : null;
+  return {
+    importId: staged?.id ?? null,
+    total: report.total,
+    valid: report.items.length,
+    newItems: staged?.newItems ?? 0,
+    updatedItems: staged?.updatedItems ?? 0,
+    errorCount: report.errors.length,
+    errors: report.errors.slice(0, MAX_ERRORS_SHOWN),
+  };
+});

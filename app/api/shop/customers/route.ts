@@ -1,0 +1,21 @@
+import { db } from "@/lib/db";
+import { HttpError } from "@/lib/http/errors";
+import { route } from "@/lib/http/route";
+import { createCustomer, findDuplicateCustomer, searchCustomers } from "@/lib/server/customers";
+import { SHOP_ANY, shopIdOf } from "@/lib/server/shops";
+import { customerSchema, customerSearchSchema } from "@/lib/validation/quotes";
+
+/** Finds the shop's customers again by phone (digits), e-mail or name. */
+export const GET = route({ access: SHOP_ANY, query: customerSearchSchema }, async ({ caller, query }) => {
+  return { customers: await searchCustomers(db, shopIdOf(caller), query.q) };
+});
+
+export const POST = route({ access: SHOP_ANY, body: customerSchema }, async ({ caller, body }) => {
+  const shopId = shopIdOf(caller);
+  const dup = await findDuplicateCustomer(db, shopId, body);
+  if (dup) {
+    return Response.json({ error: `${dup.name} already has this phone number or e-mail. Pick the existing customer.`, existing: dup }, { status: 409 });
+  }
+  if (!body.phone && !body.email) throw new HttpError(422, "Enter a phone number or an e-mail address.");
+  return Response.json({ customer: await createCustomer(db, shopId, body) }, { status: 201 });
+});

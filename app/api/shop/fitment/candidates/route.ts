@@ -1,0 +1,30 @@
+import { db } from "@/lib/db";
+import type { CatalogItemRow } from "@/lib/db/types";
+import { route } from "@/lib/http/route";
+import { rankPicks } from "@/lib/quotes/fitment";
+import { SHOP_ANY, shopIdOf } from "@/lib/server/shops";
+import { resolveVehicle, vehicleSchema } from "@/lib/validation/quotes";
+
+const ITEM_COLUMNS = ["id", "sku", "description", "price_cents", "qty_on_hand", "tire_size", "wheel_diameter_in", "wheel_width_in", "wheel_offset_mm", "bolt_pattern", "beadlock"] as const;
+
+/** The catalog's tire × wheel pairs that mount on this vehicle, ranked by the engine's comparison. */
+export const POST = route({ access: SHOP_ANY, body: vehicleSchema }, async ({ caller, body }) => {
+  const shopId = shopIdOf(caller);
+  const v = resolveVehicle(body);
+  const wheels = (await db<CatalogItemRow>("catalog_items").where({ shop_id: shopId, kind: "wheel" }).select(ITEM_COLUMNS)) as CatalogItemRow[];
+  const diameters = [...new Set(wheels.map((w) => w.wheel_diameter_in!))];
+  const tires = (await db<CatalogItemRow>("catalog_items").where({ shop_id: shopId, kind: "tire" }).whereIn("tire_rim_in", diameters).select(ITEM_COLUMNS)) as CatalogItemRow[];
+  const ranked = rankPicks(
+    { boltPattern: v.boltPattern, tireSize: v.tireSize, wheel: v.wheel, axleRatio: v.axleRatio },
+    tires.map((t) => ({ id: t.id, size: t.tire_size! })),
+    wheels.map((w) => ({ id: w.id, diameterIn: w.wheel_diameter_in!, widthIn: w.wheel_width_in!, offsetMm: w.wheel_offset_mm!, boltPattern: w.bolt_pattern!, beadlock: w.beadlock })),
+    40,
+  );
+  const byId = new Map([...tires, ...wheels].map((i) => [i.id, i]));
+  return {
+    vehicle: v,
+    wheelsFitting: ranked.wheelsFitting,
+    pairs: ranked.pairs,
+    picks: ranked.picks.map((p) => ({ ...p, tire: byId.get(p.tireId), wheel: byId.get(p.wheelId) })),
+  };
+});

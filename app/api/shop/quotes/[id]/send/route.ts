@@ -1,0 +1,11 @@
+import { z } from "zod";
+import { db } from "@/lib/db";
+import { route } from "@/lib/http/route";
+import { quoteScopeOf } from "@/lib/server/quotes";
+import { sendQuote } from "@/lib/server/quoteSend";
+import { SHOP_ANY } from "@/lib/server/shops";
+
+/** Sends (or sends again) the quote: a new public link, the PDF attached, e-mailed to the customer. */
+export const POST = route({ access: SHOP_ANY, params: z.object({ id: z.uuid() }) }, async ({ caller, params }) => {
+  return sendQuote(db, quoteScopeOf(caller), params.id, { userId: caller.userId, label: caller.name || caller.email });
+});

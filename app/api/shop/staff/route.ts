@@ -1,0 +1,41 @@
+import { db } from "@/lib/db";
+import { HttpError } from "@/lib/http/errors";
+import { route } from "@/lib/http/route";
+import { appOrigin, sendMail } from "@/lib/mail";
+import { INVITE_TTL_HOURS, SHOP_OWNER, createInvite, getShop, listOpenInvites, listTeam, shopIdOf } from "@/lib/server/shops";
+import { staffInviteSchema } from "@/lib/validation/shop";
+
+export const GET = route({ access: SHOP_OWNER }, async ({ caller }) => {
+  const shopId = shopIdOf(caller);
+  const [team, invites] = await Promise.all([listTeam(db, shopId), listOpenInvites(db, shopId)]);
+  return { team, invites };
+});
+
+export const POST = route({ access: SHOP_OWNER, body: staffInviteSchema }, async ({ caller, body }) => {
+  const shopId = shopIdOf(caller);
+  const team = await listTeam(db, shopId);
+  if (team.some((m) => m.email.toLowerCase() === body.email.toLowerCase())) {
+    throw new HttpError(422, "Some fields need attention.", { email: ["This person is already on your team."] });
+  }
+  const shop = await getShop(db, shopId);
+  const { token, invite } = await createInvite(db, shopId, body.email, caller.userId);
+  const link = `${appOrigin()}/join/${token}`;
+  const shopName = shop?.name ?? "a shop";
+  await sendMail({
+    to: body.email,
+    subject: `${caller.name} invites you to ${shopName} on Hubface`,
+    text:
+      `Hello,\n\n${caller.name} invites you to work the counter of ${shopName} on Hubface.\n` +
+      `Open this link to join. It works once and expires in ${INVITE_TTL_HOURS} hours:\n\n${link}\n\n` +
+      "If you did not expect this, ignore this message.\n",
+    html:
+      `<p>Hello,</p><p>${esc(caller.name)} invites you to work the counter of ${esc(shopName)} on Hubface.</p>` +
+      `<p><a href="${link}">Join ${esc(shopName)}</a> — the link works once and expires in ${INVITE_TTL_HOURS} hours.</p>` +
+      "<p>If you did not expect this, ignore this message.</p>",
+  });
+  return Response.json({ invite }, { status: 201 });
+});
+
+function esc(s: string) {
+  return s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
+}

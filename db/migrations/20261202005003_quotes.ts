@@ -1,0 +1,131 @@
+import type { Knex } from "knex";
+
+/** Customers and their vehicles, quotes with lines and a status history, deposits and webhook receipts. */
+export async function up(knex: Knex): Promise<void> {
+  await knex.schema.createTable("customers", (t) => {
+    t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
+    t.uuid("shop_id").notNullable().references("id").inTable("shops").onDelete("CASCADE");
+    t.text("name").notNullable();
+    t.text("phone").notNullable().defaultTo("");
+    // Digits only, so "555-0142" and "(555) 0142" find the same customer.
+    t.text("phone_digits").notNullable().defaultTo("");
+    t.text("email").notNullable().defaultTo("");
+    t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    t.timestamp("updated_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    t.index(["shop_id", "phone_digits"]);
+  });
+  await knex.raw("create index customers_shop_email on customers (shop_id, lower(email))");
+
+  await knex.schema.createTable("vehicles", (t) => {
+    t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
+    t.uuid("shop_id").notNullable().references("id").inTable("shops").onDelete("CASCADE");
+    t.uuid("customer_id").notNullable().references("id").inTable("customers").onDelete("CASCADE");
+    t.text("description").notNullable();
+    t.text("bolt_pattern").notNullable();
+    t.text("tire_size").notNullable();
+    t.double("wheel_diameter_in").notNullable();
+    t.double("wheel_width_in").notNullable();
+    t.double("wheel_offset_mm").notNullable();
+    t.double("axle_ratio").nullable();
+    t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    t.index(["customer_id"]);
+  });
+
+  await knex.schema.createTable("quotes", (t) => {
+    t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
+    t.uuid("shop_id").notNullable().references("id").inTable("shops").onDelete("CASCADE");
+    t.integer("number").notNullable();
+    t.uuid("customer_id").notNullable().references("id").inTable("customers").onDelete("RESTRICT");
+    t.uuid("vehicle_id").nullable().references("id").inTable("vehicles").onDelete("SET NULL");
+    t.uuid("created_by").nullable().references("id").inTable("users").onDelete("SET NULL");
+    t.text("status").notNullable().defaultTo("draft");
+    // The vehicle as quoted (kept even if the saved vehicle changes later).
+    t.text("vehicle_description").notNullable();
+    t.text("bolt_pattern").notNullable();
+    t.text("current_tire").notNullable();
+    t.double("current_wheel_diameter_in").notNullable();
+    t.double("current_wheel_width_in").notNullable();
+    t.double("current_wheel_offset_mm").notNullable();
+    t.double("axle_ratio").nullable();
+    t.uuid("tire_item_id").nullable().references("id").inTable("catalog_items").onDelete("SET NULL");
+    t.uuid("wheel_item_id").nullable().references("id").inTable("catalog_items").onDelete("SET NULL");
+    t.integer("wheel_qty").notNullable();
+    t.jsonb("fitment").notNullable();
+    t.integer("discount_cents").notNullable().defaultTo(0);
+    t.integer("tax_rate_bp").notNullable();
+    t.integer("deposit_pct").notNullable();
+    t.integer("subtotal_cents").notNullable().defaultTo(0);
+    t.integer("taxable_cents").notNullable().defaultTo(0);
+    t.integer("tax_cents").notNullable().defaultTo(0);
+    t.integer("total_cents").notNullable().defaultTo(0);
+    t.integer("deposit_cents").notNullable().defaultTo(0);
+    t.text("notes").notNullable().defaultTo("");
+    t.text("public_token_hash").nullable().unique();
+    t.timestamp("valid_until", { useTz: true }).nullable();
+    t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    t.timestamp("updated_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    t.unique(["shop_id", "number"]);
+    t.index(["shop_id", "status"]);
+    t.check("status in ('draft','sent','accepted','deposit_paid','installed','declined','expired')", [], "quotes_status_known");
+    t.check("wheel_qty in (4, 5)", [], "quotes_wheel_qty");
+    t.check("discount_cents >= 0 and subtotal_cents >= 0 and tax_cents >= 0 and total_cents >= 0 and deposit_cents >= 0", [], "quotes_money_non_negative");
+  });
+
+  await knex.schema.createTable("quote_lines", (t) => {
+    t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
+    t.uuid("quote_id").notNullable().references("id").inTable("quotes").onDelete("CASCADE");
+    t.integer("position").notNullable();
+    t.text("kind").notNullable();
+    t.uuid("catalog_item_id").nullable().references("id").inTable("catalog_items").onDelete("SET NULL");
+    t.text("sku").notNullable().defaultTo("");
+    t.text("description").notNullable();
+    t.integer("quantity").notNullable();
+    t.integer("unit_price_cents").notNullable();
+    t.integer("discount_cents").notNullable().defaultTo(0);
+    t.boolean("taxable").notNullable().defaultTo(true);
+    t.integer("line_total_cents").notNullable();
+    t.index(["quote_id"]);
+    t.check("kind in ('tire','wheel','service','custom')", [], "quote_lines_kind_known");
+    t.check("quantity > 0 and unit_price_cents >= 0 and discount_cents >= 0 and line_total_cents >= 0", [], "quote_lines_amounts");
+  });
+
+  await knex.schema.createTable("quote_events", (t) => {
+    t.bigIncrements("id").primary();
+    t.uuid("quote_id").notNullable().references("id").inTable("quotes").onDelete("CASCADE");
+    t.text("from_status").nullable();
+    t.text("to_status").notNullable();
+    t.uuid("actor_user_id").nullable().references("id").inTable("users").onDelete("SET NULL");
+    // Who, in words: a staff member's name, "customer", "payment provider" or "system".
+    t.text("actor").notNullable();
+    t.text("note").notNullable().defaultTo("");
+    t.timestamp("at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    t.index(["quote_id"]);
+  });
+
+  await knex.schema.createTable("payments", (t) => {
+    t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
+    t.uuid("shop_id").notNullable().references("id").inTable("shops").onDelete("CASCADE");
+    t.uuid("quote_id").notNullable().references("id").inTable("quotes").onDelete("CASCADE");
+    t.text("provider_session_id").notNullable().unique();
+    t.integer("amount_cents").notNullable();
+    t.text("currency").notNullable().defaultTo("usd");
+    t.text("status").notNullable().defaultTo("open");
+    t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    t.timestamp("paid_at", { useTz: true }).nullable();
+    t.index(["quote_id"]);
+    t.check("status in ('open','paid')", [], "payments_status_known");
+  });
+
+  // Every verified webhook event handled once: a replay finds its id here and changes nothing.
+  await knex.schema.createTable("payment_webhook_events", (t) => {
+    t.text("event_id").primary();
+    t.text("type").notNullable();
+    t.uuid("quote_id").nullable();
+    t.text("outcome").notNullable();
+    t.timestamp("received_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+  });
+}
+
+export async function down(knex: Knex): Promise<void> {
+  for (const t of ["payment_webhook_events", "payments", "quote_events", "quote_lines", "quotes", "vehicles", "customers"]) await knex.schema.dropTable(t);
+}

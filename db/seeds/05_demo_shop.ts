@@ -1,0 +1,190 @@
+import { createHash, randomBytes } from "node:crypto";
+import type { Knex } from "knex";
+import { parseCatalogCsv } from "../../lib/catalog/csv";
+import { summarize } from "../../lib/quotes/fitment";
+import { computeTotals } from "../../lib/quotes/totals";
+import { DEMO_SHOP, DEMO_USERS } from "./01_demo_accounts";
+
+/**
+ * The demo shop's counter: settings, an invented catalog (no real brands — the product lines
+ * are made up), a few customers and quotes in different states. Idempotent: only adds what is
+ * missing, and leaves an owner's later changes alone.
+ */
+const TEO = DEMO_USERS[1].id;
+const MARA = DEMO_USERS[2].id;
+
+export const DEMO_CUSTOMERS = [
+  { id: "c0000000-0000-4000-8000-000000000001", name: "Ilse Varga-Pond", phone: "555-0160", email: "ilse@example.test" },
+  { id: "c0000000-0000-4000-8000-000000000002", name: "Rook Tamsin", phone: "555-0171", email: "rook@example.test" },
+  { id: "c0000000-0000-4000-8000-000000000003", name: "Hollis Pardee", phone: "555-0188", email: "" },
+] as const;
+
+export const DEMO_QUOTES = {
+  draft: "d0000000-0000-4000-8000-000000000001",
+  sent: "d0000000-0000-4000-8000-000000000002",
+  paid: "d0000000-0000-4000-8000-000000000003",
+  declined: "d0000000-0000-4000-8000-000000000004",
+  expired: "d0000000-0000-4000-8000-000000000005",
+} as const;
+
+const H = "kind,sku,description,price,qty_on_hand,tire_size,wheel_diameter_in,wheel_width_in,wheel_offset_mm,wheel_backspacing_in,backspacing_from,bolt_pattern,center_bore_mm,beadlock,service_type,service_unit";
+const CATALOG = [
+  H,
+  "tire,RB-AT-2857017,Ridgeback AT all-terrain LT285/70R17 load range E,312.00,16,LT285/70R17 121/118Q E,,,,,,,,,,",
+  "tire,RB-AT-3157017,Ridgeback AT all-terrain LT315/70R17 load range D,368.00,12,LT315/70R17 113/110Q D,,,,,,,,,,",
+  "tire,SC-MT-35125017,Scree Claw MT mud-terrain 35x12.50R17LT load range E,405.00,10,35x12.50R17LT 121Q E,,,,,,,,,,",
+  "tire,SC-MT-37125017,Scree Claw MT mud-terrain 37x12.50R17LT load range D,462.00,8,37x12.50R17LT 124Q D,,,,,,,,,,",
+  "tire,DL-HT-2657017,Dustline HT highway 265/70R17,214.00,20,265/70R17 115T,,,,,,,,,,",
+  "tire,SC-MT-35125020,Scree Claw MT mud-terrain 35x12.50R20LT load range E,448.00,6,35x12.50R20LT 121Q E,,,,,,,,,,",
+  "wheel,BS-1790-6550,Basin Steel 17x9 black steel -12 mm,139.00,24,,17,9,-12,,,6x5.5,108,no,,",
+  "wheel,BS-1780-6550,Basin Steel 17x8 black steel +10 mm,129.00,16,,17,8,10,,,6x5.5,108,no,,",
+  "wheel,CF-1790-6550,Cairn Forged 17x9 bronze 0 mm,289.00,8,,17,9,0,,,6x139.7,106.1,no,,",
+  "wheel,TB-1790-6550,Talus Beadlock 17x9 4.5 in backspacing,495.00,8,,17,9,,4.5,flange,6x5.5,108,yes,,",
+  "wheel,TB-1785-8650,Talus Beadlock 17x8.5 for 8-lug 0 mm,515.00,4,,17,8.5,0,,,8x6.5,125,yes,,",
+  "wheel,CF-2090-6550,Cairn Forged 20x9 bronze +18 mm,329.00,8,,20,9,18,,,6x5.5,106.1,no,,",
+  "wheel,BS-1780-5450,Basin Steel 17x8 for 5-lug +0 mm,119.00,8,,17,8,0,,,5x4.5,71.5,no,,",
+  "service,SV-MB,Mount and balance (per wheel),32.00,,,,,,,,,,,mount_balance,per_wheel",
+  "service,SV-BLA,Beadlock ring assembly and torque (per wheel),55.00,,,,,,,,,,,beadlock_assembly,per_wheel",
+  "service,SV-VS,Rubber valve stem (per wheel),6.00,,,,,,,,,,,valve_stem,per_wheel",
+  "service,SV-TPMS,TPMS sensor service (per wheel),18.00,,,,,,,,,,,tpms,per_wheel",
+  "service,SV-ALN,Four-wheel alignment,139.00,,,,,,,,,,,alignment,per_vehicle",
+  "service,SV-TRIM,Fender trimming labour (per hour),145.00,,,,,,,,,,,fender_trim,per_hour",
+  "service,SV-DISP,Tire disposal (per tire),5.00,,,,,,,,,,,disposal,per_wheel",
+].join("\n");
+
+const VEHICLE = { description: "Half-ton pickup, stock height", boltPattern: "6x5.5", tireSize: "265/70R17 115T", wheel: { diameterIn: 17, widthIn: 8, offsetMm: 25 }, axleRatio: 3.73 };
+
+export async function seed(knex: Knex): Promise<void> {
+  await knex("shops")
+    .where({ id: DEMO_SHOP.id, address: "" })
+    .update({
+      address: "1180 Slate Wash Road, Quarry Flats",
+      phone: "555-0142",
+      tax_rate_bp: 825,
+      labour_rate_cents: 12500,
+      fabrication_rate_cents: 14500,
+      quote_validity_days: 14,
+      deposit_pct: 25,
+      currency: "USD",
+    });
+
+  const report = parseCatalogCsv(CATALOG);
+  if (report.errors.length) throw new Error(`demo catalog: ${JSON.stringify(report.errors)}`);
+  await knex("catalog_items")
+    .insert(report.items.map(({ row: _row, ...i }) => ({ ...i, shop_id: DEMO_SHOP.id })))
+    .onConflict(["shop_id", "sku"])
+    .ignore();
+
+  for (const c of DEMO_CUSTOMERS) {
+    await knex("customers").insert({ ...c, shop_id: DEMO_SHOP.id, phone_digits: c.phone.replace(/\D/g, "") }).onConflict("id").ignore();
+  }
+  const vehicleId = "e0000000-0000-4000-8000-000000000001";
+  await knex("vehicles")
+    .insert({
+      id: vehicleId,
+      shop_id: DEMO_SHOP.id,
+      customer_id: DEMO_CUSTOMERS[0].id,
+      description: VEHICLE.description,
+      bolt_pattern: VEHICLE.boltPattern,
+      tire_size: VEHICLE.tireSize,
+      wheel_diameter_in: 17,
+      wheel_width_in: 8,
+      wheel_offset_mm: 25,
+      axle_ratio: 3.73,
+    })
+    .onConflict("id")
+    .ignore();
+
+  const bySku = async (sku: string) => knex("catalog_items").where({ shop_id: DEMO_SHOP.id, sku }).first();
+  const shop = await knex("shops").where({ id: DEMO_SHOP.id }).first();
+  const plans: { id: string; number: number; customer: number; tire: string; wheel: string; by: string; history: [string, string, string][]; daysAgo: number }[] = [
+    { id: DEMO_QUOTES.draft, number: 1001, customer: 0, tire: "SC-MT-35125017", wheel: "BS-1790-6550", by: TEO, history: [["draft", TEO, "Teo Marrow"]], daysAgo: 0 },
+    { id: DEMO_QUOTES.sent, number: 1002, customer: 1, tire: "RB-AT-3157017", wheel: "CF-1790-6550", by: TEO, history: [["draft", TEO, "Teo Marrow"], ["sent", TEO, "Teo Marrow"]], daysAgo: 2 },
+    {
+      id: DEMO_QUOTES.paid, number: 1003, customer: 0, tire: "SC-MT-37125017", wheel: "TB-1790-6550", by: MARA,
+      history: [["draft", MARA, "Mara Velkin"], ["sent", MARA, "Mara Velkin"], ["accepted", "", "customer"], ["deposit_paid", "", "payment provider"]], daysAgo: 5,
+    },
+    { id: DEMO_QUOTES.declined, number: 1004, customer: 2, tire: "RB-AT-2857017", wheel: "BS-1780-6550", by: TEO, history: [["draft", TEO, "Teo Marrow"], ["sent", TEO, "Teo Marrow"], ["declined", TEO, "Teo Marrow"]], daysAgo: 9 },
+    { id: DEMO_QUOTES.expired, number: 1005, customer: 1, tire: "RB-AT-2857017", wheel: "BS-1790-6550", by: MARA, history: [["draft", MARA, "Mara Velkin"], ["sent", MARA, "Mara Velkin"], ["expired", "", "system"]], daysAgo: 30 },
+  ];
+  for (const p of plans) {
+    if (await knex("quotes").where({ id: p.id }).first("id")) continue;
+    const tire = await bySku(p.tire);
+    const wheel = await bySku(p.wheel);
+    const fit = summarize(VEHICLE, tire.tire_size, { diameterIn: wheel.wheel_diameter_in, widthIn: wheel.wheel_width_in, offsetMm: wheel.wheel_offset_mm, beadlock: wheel.beadlock });
+    const svc = async (sku: string, qty: number) => {
+      const s = await bySku(sku);
+      return { kind: "service", catalog_item_id: s.id, sku, description: s.description, quantity: qty, unit_price_cents: s.price_cents, discount_cents: 0, taxable: false };
+    };
+    const lines = [
+      { kind: "tire", catalog_item_id: tire.id, sku: tire.sku, description: tire.description, quantity: 4, unit_price_cents: tire.price_cents, discount_cents: 0, taxable: true },
+      { kind: "wheel", catalog_item_id: wheel.id, sku: wheel.sku, description: wheel.description, quantity: 4, unit_price_cents: wheel.price_cents, discount_cents: 0, taxable: true },
+      await svc("SV-MB", 4),
+      ...(wheel.beadlock ? [await svc("SV-BLA", 4)] : []),
+      await svc("SV-VS", 4),
+      ...(fit.alignmentSuggested ? [await svc("SV-ALN", 1)] : []),
+      ...(fit.warnings.some((w) => /further outboard/.test(w)) ? [await svc("SV-TRIM", 1)] : []),
+      await svc("SV-DISP", 4),
+    ];
+    const t = computeTotals({
+      lines: lines.map((l) => ({ quantity: l.quantity, unitPriceCents: l.unit_price_cents, discountCents: l.discount_cents, taxable: l.taxable })),
+      discountCents: 0,
+      taxRateBp: shop.tax_rate_bp,
+      depositPct: shop.deposit_pct,
+    });
+    const status = p.history[p.history.length - 1]![0];
+    const created = knex.raw("now() - make_interval(days => ?)", [p.daysAgo]);
+    const sent = p.history.some((h) => h[0] === "sent");
+    await knex.transaction(async (trx) => {
+      await trx("quotes").insert({
+        id: p.id,
+        shop_id: DEMO_SHOP.id,
+        number: p.number,
+        customer_id: DEMO_CUSTOMERS[p.customer]!.id,
+        vehicle_id: p.customer === 0 ? vehicleId : null,
+        created_by: p.by,
+        status,
+        vehicle_description: VEHICLE.description,
+        bolt_pattern: VEHICLE.boltPattern,
+        current_tire: VEHICLE.tireSize,
+        current_wheel_diameter_in: 17,
+        current_wheel_width_in: 8,
+        current_wheel_offset_mm: 25,
+        axle_ratio: 3.73,
+        tire_item_id: tire.id,
+        wheel_item_id: wheel.id,
+        wheel_qty: 4,
+        fitment: JSON.stringify(fit),
+        tax_rate_bp: shop.tax_rate_bp,
+        deposit_pct: shop.deposit_pct,
+        subtotal_cents: t.subtotalCents,
+        taxable_cents: t.taxableCents,
+        tax_cents: t.taxCents,
+        total_cents: t.totalCents,
+        deposit_cents: t.depositCents,
+        // A link nobody knows: staff "send again" to get one into the outbox.
+        public_token_hash: sent ? createHash("sha256").update(randomBytes(32).toString("base64url")).digest("hex") : null,
+        valid_until: sent ? knex.raw("now() - make_interval(days => ?) + make_interval(days => ?)", [p.daysAgo, shop.quote_validity_days]) : null,
+        created_at: created,
+        updated_at: created,
+      });
+      await trx("quote_lines").insert(lines.map((l, i) => ({ ...l, quote_id: p.id, position: i + 1, line_total_cents: t.lines[i]!.netCents })));
+      let from: string | null = null;
+      for (const [to, uid, label] of p.history) {
+        await trx("quote_events").insert({ quote_id: p.id, from_status: from, to_status: to, actor_user_id: uid || null, actor: label, at: created });
+        from = to;
+      }
+      if (status === "deposit_paid") {
+        await trx("payments").insert({
+          shop_id: DEMO_SHOP.id,
+          quote_id: p.id,
+          provider_session_id: `cs_demo_${p.number}`,
+          amount_cents: t.depositCents,
+          currency: "usd",
+          status: "paid",
+          paid_at: created,
+        });
+      }
+    });
+  }
+}

@@ -1,0 +1,72 @@
+import { describe, expect, it } from "vitest";
+import { CSV_COLUMNS, CSV_TEMPLATE, catalogToCsv, decodeCsvBytes, parseCatalogCsv } from "./csv";
+
+const HEAD = CSV_COLUMNS.join(",");
+const row = (cells: Partial<Record<(typeof CSV_COLUMNS)[number], string>>) => CSV_COLUMNS.map((c) => cells[c] ?? "").join(",");
+
+describe("catalog CSV", () => {
+  it("reads the template: every kind, sizes through the engine", () => {
+    const r = parseCatalogCsv(CSV_TEMPLATE);
+    expect(r.fileErrors).toEqual([]);
+    expect(r.errors).toEqual([]);
+    expect(r.items.map((i) => i.kind)).toEqual(["tire", "wheel", "wheel", "service"]);
+    // 35x12.50R17LT: flotation, D as designated = 35 in = 889 mm (TRA flotation designation; 1 in = 25.4 mm, NIST SP 811).
+    expect(r.items[0]).toMatchObject({ tire_rim_in: 17, tire_diameter_mm: 889, price_cents: 38900, qty_on_hand: 8 });
+    // 4.5 in backspacing to the flange on a 9 in wheel: 4.0 in to the bead seat, offset (4.0 − 4.5) × 25.4 = −12.7 mm
+    // (BS = W/2 + offset, flange allowance 0.5 in: lib/fitment README, common practice, no source).
+    expect(r.items[2]).toMatchObject({ wheel_offset_mm: -12.7, wheel_backspacing_in: 4.5, wheel_backspacing_ref: "flange", beadlock: true, bolt_pattern: "6x139.7" });
+    expect(r.items[3]).toMatchObject({ service_type: "mount_balance", service_unit: "per_wheel", qty_on_hand: null });
+  });
+
+  it("round-trips through export", () => {
+    const a = parseCatalogCsv(CSV_TEMPLATE).items.map(({ row: _r, ...i }) => i);
+    const b = parseCatalogCsv(catalogToCsv(a)).items.map(({ row: _r, ...i }) => i);
+    expect(b).toEqual(a);
+  });
+
+  it("reports each bad row with its row number, column and message; good rows still pass", () => {
+    const text = [
+      HEAD,
+      row({ kind: "tire", sku: "T1", description: "Good tire", price: "199.99", qty_on_hand: "4", tire_size: "LT285/70R17" }),
+      row({ kind: "tire", sku: "T2", description: "Bad size", price: "150", qty_on_hand: "4", tire_size: "35 by 12" }),
+      row({ kind: "wheel", sku: "W1", description: "No pattern", price: "120", qty_on_hand: "2", wheel_diameter_in: "17", wheel_width_in: "9", wheel_offset_mm: "0" }),
+      row({ kind: "gizmo", sku: "G1", description: "Unknown", price: "1" }),
+      row({ kind: "service", sku: "S1", description: "Mount", price: "-3", service_type: "mount_balance" }),
+      row({ kind: "tire", sku: "t1", description: "Same SKU in other case", price: "10", qty_on_hand: "1", tire_size: "LT285/70R17" }),
+      row({ kind: "tire", sku: "T3", description: "Negative stock", price: "10", qty_on_hand: "-1", tire_size: "LT285/70R17" }),
+    ].join("\n");
+    const r = parseCatalogCsv(text);
+    expect(r.total).toBe(7);
+    expect(r.items.map((i) => i.sku)).toEqual(["T1"]);
+    const by = (n: number) => r.errors.filter((e) => e.row === n);
+    expect(by(3)).toEqual([expect.objectContaining({ column: "tire_size" })]);
+    expect(by(3)[0]!.message).toMatch(/35 by 12/);
+    expect(by(4)).toEqual([expect.objectContaining({ column: "bolt_pattern" })]);
+    expect(by(5)[0]).toMatchObject({ column: "kind" });
+    expect(by(6)[0]).toMatchObject({ column: "price" });
+    expect(by(7)[0]).toMatchObject({ column: "sku", message: expect.stringMatching(/also on row 2/) });
+    expect(by(8)[0]).toMatchObject({ column: "qty_on_hand" });
+  });
+
+  it("refuses wrong headers as a whole-file problem", () => {
+    const r = parseCatalogCsv("Item,Cost,Colour\nA,1,red\n");
+    expect(r.fileErrors.join(" ")).toMatch(/Unknown columns: "item", "cost", "colour"/);
+    expect(r.fileErrors.join(" ")).toMatch(/Missing columns: kind, sku, description, price/);
+    expect(r.items).toEqual([]);
+  });
+
+  it("refuses bytes that are not UTF-8 text", () => {
+    expect(decodeCsvBytes(new Uint8Array([0x6b, 0x69, 0x6e, 0x64, 0xff, 0xfe, 0x0a]))).toEqual({ error: expect.stringMatching(/not UTF-8/) });
+    expect(decodeCsvBytes(new Uint8Array([0x50, 0x4b, 0x03, 0x04, 0x00, 0x00]))).toEqual({ error: expect.stringMatching(/NUL bytes/) });
+    expect(decodeCsvBytes(new TextEncoder().encode("\uFEFFkind,sku"))).toEqual({ text: "kind,sku" });
+    expect(decodeCsvBytes(new Uint8Array())).toEqual({ error: "The file is empty." });
+  });
+
+  it("needs offset or backspacing on a wheel, never both, and the reference with backspacing", () => {
+    const base = { kind: "wheel", sku: "W", description: "d", price: "1", qty_on_hand: "1", wheel_diameter_in: "17", wheel_width_in: "9", bolt_pattern: "6x5.5" };
+    expect(parseCatalogCsv([HEAD, row({ ...base, wheel_offset_mm: "0", wheel_backspacing_in: "5" })].join("\n")).errors[0]).toMatchObject({ column: "wheel_offset_mm" });
+    expect(parseCatalogCsv([HEAD, row({ ...base, wheel_backspacing_in: "5" })].join("\n")).errors[0]).toMatchObject({ column: "backspacing_from" });
+    // 5 in to the bead seat on a 9 in wheel: offset = (5 − 4.5) × 25.4 = +12.7 mm (same formula as above).
+    expect(parseCatalogCsv([HEAD, row({ ...base, wheel_backspacing_in: "5", backspacing_from: "bead-seat" })].join("\n")).items[0]!.wheel_offset_mm).toBeCloseTo(12.7, 9);
+  });
+});

@@ -1,0 +1,313 @@
+/**
+ * The Hubface catalog CSV (format v1, documented in docs/catalog-csv.md): parsing with
+ * papaparse, row-by-row validation through the fitment engine, and export. Pure: no database.
+ */
+import Papa from "papaparse";
+import {
+  FitmentInputError,
+  checkOffsetMm,
+  checkWheelWidthIn,
+  offsetFromBackspacing,
+  parseBoltPattern,
+  parseTireSize,
+} from "@/lib/fitment";
+import { type CatalogItemRow, type CatalogKind, SERVICE_TYPES, SERVICE_UNITS, type ServiceType, type ServiceUnit } from "@/lib/db/types";
+import { formatCents, parseMoneyToCents } from "@/lib/quotes/money";
+
+/** Every column of the format, in the order export and the template write them. */
+export const CSV_COLUMNS = [
+  "kind",
+  "sku",
+  "description",
+  "price",
+  "qty_on_hand",
+  "tire_size",
+  "wheel_diameter_in",
+  "wheel_width_in",
+  "wheel_offset_mm",
+  "wheel_backspacing_in",
+  "backspacing_from",
+  "bolt_pattern",
+  "center_bore_mm",
+  "beadlock",
+  "service_type",
+  "service_unit",
+] as const;
+export type CsvColumn = (typeof CSV_COLUMNS)[number];
+export const REQUIRED_COLUMNS: readonly CsvColumn[] = ["kind", "sku", "description", "price"];
+
+/** Largest file accepted, bytes (a 10,000-row catalog is about 1.5 MB). */
+export const CSV_MAX_BYTES = 5 * 1024 * 1024;
+export const CSV_MAX_ROWS = 20_000;
+
+/** The default unit a service is priced in when the column is empty. */
+export const DEFAULT_SERVICE_UNIT: Record<ServiceType, ServiceUnit> = {
+  mount_balance: "per_wheel",
+  beadlock_assembly: "per_wheel",
+  valve_stem: "per_wheel",
+  tpms: "per_wheel",
+  alignment: "per_vehicle",
+  fender_trim: "per_hour",
+  disposal: "per_wheel",
+  other: "per_vehicle",
+};
+
+/** A validated row, ready to upsert (columns as stored, without ids and timestamps). */
+export type CatalogInput = Omit<CatalogItemRow, "id" | "shop_id" | "created_at" | "updated_at">;
+
+export interface RowError {
+  /** Line in the file: the header is row 1, the first item row 2. */
+  row: number;
+  column: string;
+  message: string;
+}
+
+export interface CsvReport {
+  /** Problems with the file as a whole (encoding, headers, size): nothing can be imported. */
+  fileErrors: string[];
+  items: (CatalogInput & { row: number })[];
+  errors: RowError[];
+  /** Item rows read (valid or not). */
+  total: number;
+}
+
+const SKU_RE = /^[A-Za-z0-9][A-Za-z0-9._/-]{0,63}$/;
+
+/**
+ * Bytes of an uploaded file → text, or a file error: it must be UTF-8 (a BOM is dropped) and
+ * must not contain NUL bytes (a binary file renamed to .csv).
+ */
+export function decodeCsvBytes(bytes: Uint8Array): { text: string } | { error: string } {
+  if (bytes.byteLength === 0) return { error: "The file is empty." };
+  if (bytes.byteLength > CSV_MAX_BYTES) return { error: `The file is larger than ${CSV_MAX_BYTES / 1024 / 1024} MB.` };
+  if (bytes.includes(0)) return { error: "This is not a text file (it contains NUL bytes). Export the catalog as CSV (UTF-8) and try again." };
+  try {
+    const text = new TextDecoder("utf-8", { fatal: true }).decode(bytes);
+    return { text: text.replace(/^\uFEFF/, "") };
+  } catch {
+    return { error: "The file is not UTF-8 text. Save it as “CSV UTF-8” and try again." };
+  }
+}
+
+/** Parses and validates catalog CSV text. File-level problems stop before any row is read. */
+export function parseCatalogCsv(text: string): CsvReport {
+  const report: CsvReport = { fileErrors: [], items: [], errors: [], total: 0 };
+  const parsed = Papa.parse<Record<string, string>>(text, {
+    header: true,
+    skipEmptyLines: "greedy",
+    transformHeader: (h) => h.trim().toLowerCase(),
+  });
+  const headers = parsed.meta.fields ?? [];
+  const unknown = headers.filter((h) => !(CSV_COLUMNS as readonly string[]).includes(h));
+  const missing = REQUIRED_COLUMNS.filter((c) => !headers.includes(c));
+  const dupHeaders = headers.filter((h, i) => headers.indexOf(h) !== i);
+  if (unknown.length) report.fileErrors.push(`Unknown column${unknown.length > 1 ? "s" : ""}: ${unknown.slice(0, 8).map((u) => JSON.stringify(u)).join(", ")}. The header row uses these names: ${CSV_COLUMNS.join(", ")}.`);
+  if (missing.length) report.fileErrors.push(`Missing column${missing.length > 1 ? "s" : ""}: ${missing.join(", ")}.`);
+  if (dupHeaders.length) report.fileErrors.push(`Column named twice: ${[...new Set(dupHeaders)].join(", ")}.`);
+  if (report.fileErrors.length) return report;
+  if (parsed.data.length > CSV_MAX_ROWS) {
+    report.fileErrors.push(`The file has ${parsed.data.length} rows; at most ${CSV_MAX_ROWS} are imported at once. Split it into several files.`);
+    return report;
+  }
+
+  // papaparse reports structural problems by data-row index.
+  const structural = new Map<number, string>();
+  for (const e of parsed.errors) if (e.row !== undefined && !structural.has(e.row)) structural.set(e.row, e.message);
+
+  const firstRowOfSku = new Map<string, number>();
+  parsed.data.forEach((raw, i) => {
+    // Row number in the file; papaparse's own cursor is not kept per row, so count from the header.
+    const row = i + 2;
+    report.total++;
+    const s = structural.get(i);
+    if (s) {
+      report.errors.push({ row, column: "", message: `The row could not be read: ${s}.` });
+      return;
+    }
+    const errs: RowError[] = [];
+    const item = validateRow(raw, row, errs);
+    if (item) {
+      const key = item.sku.toLowerCase();
+      const first = firstRowOfSku.get(key);
+      if (first !== undefined) errs.push({ row, column: "sku", message: `SKU ${item.sku} is also on row ${first}; each SKU appears once.` });
+      else firstRowOfSku.set(key, row);
+    }
+    if (errs.length || !item) report.errors.push(...errs);
+    else report.items.push({ ...item, row });
+  });
+  return report;
+}
+
+function validateRow(raw: Record<string, string>, row: number, errs: RowError[]): CatalogInput | null {
+  const v = (c: CsvColumn) => (raw[c] ?? "").trim();
+  const fail = (column: CsvColumn | "", message: string) => void errs.push({ row, column, message });
+  const before = errs.length;
+
+  const kindText = v("kind").toLowerCase();
+  const kind = (["tire", "wheel", "service"] as const).find((k) => k === kindText) as CatalogKind | undefined;
+  if (!kind) fail("kind", `Kind must be tire, wheel or service${kindText ? `, got “${v("kind")}”` : ""}.`);
+
+  const sku = v("sku");
+  if (!SKU_RE.test(sku)) fail("sku", sku ? "SKU uses letters, digits and . _ / - (at most 64 characters)." : "Enter a SKU.");
+
+  const description = v("description");
+  if (!description) fail("description", "Enter a description.");
+  else if (description.length > 200) fail("description", "Use at most 200 characters.");
+
+  const price = parseMoneyToCents(v("price"));
+  if (price === null || price < 0 || price > 100_000_000) fail("price", `Price must be dollars like 249.99 (0 to 1,000,000)${v("price") ? `, got “${v("price")}”` : ""}.`);
+
+  let qty: number | null = null;
+  const qtyText = v("qty_on_hand");
+  if (qtyText) {
+    if (!/^\d{1,7}$/.test(qtyText)) fail("qty_on_hand", `Quantity on hand must be a whole number 0 or more, got “${qtyText}”.`);
+    else qty = Number(qtyText);
+  } else if (kind === "tire" || kind === "wheel") qty = 0;
+
+  const item: CatalogInput = {
+    kind: kind ?? "service",
+    sku,
+    description,
+    price_cents: price ?? 0,
+    qty_on_hand: qty,
+    tire_size: null,
+    tire_rim_in: null,
+    tire_diameter_mm: null,
+    wheel_diameter_in: null,
+    wheel_width_in: null,
+    wheel_offset_mm: null,
+    wheel_backspacing_in: null,
+    wheel_backspacing_ref: null,
+    bolt_pattern: null,
+    center_bore_mm: null,
+    beadlock: false,
+    service_type: null,
+    service_unit: null,
+  };
+
+  if (kind === "tire") {
+    const text = v("tire_size");
+    if (!text) fail("tire_size", "Enter the tire size, e.g. 35x12.50R17LT or LT285/70R17.");
+    else {
+      try {
+        const size = parseTireSize(text);
+        item.tire_size = size.text;
+        item.tire_rim_in = size.rimDiameterIn;
+        item.tire_diameter_mm = size.overallDiameterMm;
+      } catch (e) {
+        fail("tire_size", e instanceof FitmentInputError ? e.message : "This tire size could not be read.");
+      }
+    }
+  }
+
+  if (kind === "wheel") {
+    const num = (c: CsvColumn, label: string, min: number, max: number, example: string): number | null => {
+      const t = v(c);
+      const n = t === "" ? NaN : Number(t);
+      if (!Number.isFinite(n) || n < min || n > max) {
+        fail(c, `${label} must be a number from ${min} to ${max} (e.g. ${example})${t ? `, got “${t}”` : ""}.`);
+        return null;
+      }
+      return n;
+    };
+    item.wheel_diameter_in = num("wheel_diameter_in", "Wheel diameter (in)", 8, 30, "17");
+    const widthText = v("wheel_width_in");
+    let width: number | null = null;
+    try {
+      width = checkWheelWidthIn(widthText === "" ? NaN : Number(widthText), "wheel_width_in");
+      item.wheel_width_in = width;
+    } catch (e) {
+      fail("wheel_width_in", e instanceof FitmentInputError ? e.message : "Enter the wheel width in inches.");
+    }
+    const offText = v("wheel_offset_mm");
+    const bsText = v("wheel_backspacing_in");
+    const ref = v("backspacing_from").toLowerCase();
+    if (offText && bsText) fail("wheel_offset_mm", "Give the offset or the backspacing, not both.");
+    else if (!offText && !bsText) fail("wheel_offset_mm", "Give the offset (mm) or the backspacing (in) with backspacing_from.");
+    else if (width !== null && offText) {
+      try {
+        item.wheel_offset_mm = checkOffsetMm(Number(offText), width, "wheel_offset_mm");
+      } catch (e) {
+        fail("wheel_offset_mm", e instanceof FitmentInputError ? e.message : "Enter the offset in mm.");
+      }
+    } else if (width !== null && bsText) {
+      if (ref !== "bead-seat" && ref !== "flange") fail("backspacing_from", "Say where the backspacing was measured to: bead-seat or flange.");
+      else {
+        try {
+          item.wheel_offset_mm = offsetFromBackspacing({ widthIn: width, backspacingIn: Number(bsText), measuredFrom: ref });
+          item.wheel_backspacing_in = Number(bsText);
+          item.wheel_backspacing_ref = ref;
+        } catch (e) {
+          fail("wheel_backspacing_in", e instanceof FitmentInputError ? e.message : "Enter the backspacing in inches.");
+        }
+      }
+    }
+    const bp = v("bolt_pattern");
+    if (!bp) fail("bolt_pattern", "Enter the bolt pattern, e.g. 6x5.5 or 8x165.1.");
+    else {
+      try {
+        item.bolt_pattern = parseBoltPattern(bp).text;
+      } catch (e) {
+        fail("bolt_pattern", e instanceof FitmentInputError ? e.message : "This bolt pattern could not be read.");
+      }
+    }
+    const bore = v("center_bore_mm");
+    if (bore) item.center_bore_mm = num("center_bore_mm", "Centre bore (mm)", 40, 200, "108");
+    const bl = v("beadlock").toLowerCase();
+    if (["yes", "y", "true", "1"].includes(bl)) item.beadlock = true;
+    else if (["", "no", "n", "false", "0"].includes(bl)) item.beadlock = false;
+    else fail("beadlock", `Beadlock must be yes or no, got “${v("beadlock")}”.`);
+  }
+
+  if (kind === "service") {
+    const type = v("service_type").toLowerCase() as ServiceType;
+    if (!(SERVICE_TYPES as readonly string[]).includes(type)) fail("service_type", `Service type must be one of ${SERVICE_TYPES.join(", ")}.`);
+    else {
+      item.service_type = type;
+      const unit = (v("service_unit").toLowerCase() || DEFAULT_SERVICE_UNIT[type]) as ServiceUnit;
+      if (!(SERVICE_UNITS as readonly string[]).includes(unit)) fail("service_unit", `Service unit must be one of ${SERVICE_UNITS.join(", ")}.`);
+      else item.service_unit = unit;
+    }
+  }
+
+  return errs.length > before ? null : item;
+}
+
+/** Catalog items → CSV text in the documented format (round-trips through parseCatalogCsv). */
+export function catalogToCsv(items: readonly CatalogInput[]): string {
+  const n = (x: number | null) => (x === null ? "" : String(Number(x.toFixed(3))));
+  return Papa.unparse(
+    {
+      fields: [...CSV_COLUMNS],
+      data: items.map((i) => [
+        i.kind,
+        i.sku,
+        i.description,
+        formatCents(i.price_cents).replace(/,/g, ""),
+        i.qty_on_hand ?? "",
+        i.tire_size ?? "",
+        n(i.wheel_diameter_in),
+        n(i.wheel_width_in),
+        i.kind === "wheel" && i.wheel_backspacing_in === null ? n(i.wheel_offset_mm) : "",
+        n(i.wheel_backspacing_in),
+        i.wheel_backspacing_ref ?? "",
+        i.bolt_pattern ?? "",
+        n(i.center_bore_mm),
+        i.kind === "wheel" ? (i.beadlock ? "yes" : "no") : "",
+        i.service_type ?? "",
+        i.service_unit ?? "",
+      ]),
+    },
+    { newline: "\r\n" },
+  );
+}
+
+/** The downloadable template: the header and one example row of each kind (invented products). */
+export const CSV_TEMPLATE = [
+  CSV_COLUMNS.join(","),
+  "tire,TR-EXAMPLE-35,Example all-terrain 35x12.50R17LT load range E,389.00,8,35x12.50R17LT 121Q E,,,,,,,,,,",
+  "wheel,WH-EXAMPLE-17,Example 17x9 steel wheel -12 mm,189.00,12,,17,9,-12,,,6x5.5,108,no,,",
+  "wheel,WH-EXAMPLE-BL,Example 17x9 beadlock 4.5 in backspacing,465.00,4,,17,9,,4.5,flange,6x139.7,108,yes,,",
+  "service,SV-MOUNT,Mount and balance,30.00,,,,,,,,,,,mount_balance,per_wheel",
+  "",
+].join("\r\n");

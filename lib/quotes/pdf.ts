@@ -1,0 +1,150 @@
+import "server-only";
+import PDFDocument from "pdfkit";
+import type { ShopSettingsRow } from "@/lib/db/types";
+import { mmToIn } from "@/lib/fitment";
+import { quoteCautions } from "./cautions";
+import type { FitmentSummary } from "./fitment";
+import { formatBp, formatUsd } from "./money";
+
+export interface PdfQuote {
+  number: number;
+  status: string;
+  created_at: Date | string;
+  valid_until: Date | string | null;
+  vehicle_description: string;
+  bolt_pattern: string;
+  fitment: unknown;
+  subtotal_cents: number;
+  discount_cents: number;
+  taxable_cents: number;
+  tax_cents: number;
+  tax_rate_bp: number;
+  total_cents: number;
+  deposit_cents: number;
+  deposit_pct: number;
+  notes: string;
+}
+export interface PdfInput {
+  shop: Pick<ShopSettingsRow, "name" | "address" | "phone">;
+  quote: PdfQuote;
+  customer: { name: string; phone: string; email: string };
+  lines: { sku: string; description: string; quantity: number; unit_price_cents: number; discount_cents: number; line_total_cents: number; taxable: boolean }[];
+  preparedBy: string | null;
+}
+
+/** The standard PDF fonts cover WinAnsi only: typographic signs become their plain forms. */
+const plain = (s: string) =>
+  s
+    .replace(/[−–—]/g, "-")
+    .replace(/→/g, "->")
+    .replace(/≈/g, "~")
+    .replace(/[“”]/g, '"')
+    .replace(/[‘’]/g, "'")
+    .replace(/…/g, "...")
+    .replace(/[^\x20-\x7E\xA0-\xFF\n]/g, "?");
+const signed = (x: number, d = 0) => `${x > 0 ? "+" : x < 0 ? "-" : "+/-"}${Math.abs(x).toFixed(d)}`;
+const mmIn = (mm: number) => `${signed(mm)} mm (${signed(mmToIn(mm), 1)} in)`;
+const date = (d: Date | string) => new Date(d).toLocaleDateString("en-US", { year: "numeric", month: "short", day: "numeric" });
+
+/** The quote as a PDF (US Letter), built with pdfkit's standard Helvetica: no font files fetched. */
+export function quotePdf(input: PdfInput): Promise<Buffer> {
+  const { shop, quote, customer, lines } = input;
+  const fit = quote.fitment as FitmentSummary;
+  const doc = new PDFDocument({ size: "LETTER", margin: 50, info: { Title: `Quote Q-${quote.number}`, Author: shop.name } });
+  const chunks: Buffer[] = [];
+  doc.on("data", (c: Buffer) => chunks.push(c));
+  const done = new Promise<Buffer>((resolve, reject) => {
+    doc.on("end", () => resolve(Buffer.concat(chunks)));
+    doc.on("error", reject);
+  });
+  const W = doc.page.width - 100;
+  const text = (s: string, opts?: PDFKit.Mixins.TextOptions) => doc.text(plain(s), opts);
+  const heading = (s: string) => {
+    doc.moveDown(0.8).font("Helvetica-Bold").fontSize(12);
+    text(s);
+    doc.font("Helvetica").fontSize(10).moveDown(0.2);
+  };
+
+  doc.font("Helvetica-Bold").fontSize(18);
+  text(shop.name);
+  doc.font("Helvetica").fontSize(10);
+  if (shop.address) text(shop.address);
+  if (shop.phone) text(`Phone ${shop.phone}`);
+  doc.moveDown(0.8).font("Helvetica-Bold").fontSize(14);
+  text(`Quote Q-${quote.number}`);
+  doc.font("Helvetica").fontSize(10);
+  text(`Date ${date(quote.created_at)}${quote.valid_until ? ` - valid until ${date(quote.valid_until)}` : ""}${input.preparedBy ? ` - prepared by ${input.preparedBy}` : ""}`);
+
+  heading("Customer");
+  text(customer.name);
+  text([customer.phone, customer.email].filter(Boolean).join(" - "));
+  heading("Vehicle");
+  text(`${quote.vehicle_description} - bolt pattern ${quote.bolt_pattern}`);
+  text(`Now: ${fit.current.tire} on ${fit.current.wheel}`);
+  text(`Planned: ${fit.planned.tire} on ${fit.planned.wheel}${fit.planned.beadlock ? " (beadlock)" : ""}`);
+
+  heading("Lines");
+  const cols = [0, 105, 335, 375, 440];
+  const row = (cells: string[], bold = false) => {
+    const y = doc.y;
+    doc.font(bold ? "Helvetica-Bold" : "Helvetica");
+    const widths = [103, 225, 38, 63, W - 440];
+    let h = 0;
+    cells.forEach((c, i) => {
+      const align = i >= 2 ? "right" : "left";
+      doc.text(plain(c), 50 + cols[i]!, y, { width: widths[i], align });
+      h = Math.max(h, doc.y - y);
+    });
+    doc.x = 50;
+    doc.y = y + h + 3;
+    if (doc.y > doc.page.height - 90) doc.addPage();
+  };
+  row(["SKU", "Description", "Qty", "Unit", "Amount"], true);
+  for (const l of lines) {
+    row([l.sku, `${l.description}${l.discount_cents ? ` (less ${formatUsd(l.discount_cents)})` : ""}${l.taxable ? "" : " *"}`, String(l.quantity), formatUsd(l.unit_price_cents), formatUsd(l.line_total_cents)]);
+  }
+  doc.moveDown(0.5);
+  const total = (label: string, value: string, bold = false) => {
+    doc.font(bold ? "Helvetica-Bold" : "Helvetica");
+    const y = doc.y;
+    doc.text(plain(label), 50 + 250, y, { width: 180, align: "right" });
+    doc.text(plain(value), 50 + 440, y, { width: W - 440, align: "right" });
+    doc.x = 50;
+  };
+  total("Subtotal", formatUsd(quote.subtotal_cents));
+  if (quote.discount_cents) total("Discount", `-${formatUsd(quote.discount_cents)}`);
+  total(`Tax ${formatBp(quote.tax_rate_bp)}% on ${formatUsd(quote.taxable_cents)}`, formatUsd(quote.tax_cents));
+  total("Total", formatUsd(quote.total_cents), true);
+  total(`Deposit (${quote.deposit_pct}%)`, formatUsd(quote.deposit_cents));
+  doc.font("Helvetica").fontSize(8).moveDown(0.3);
+  text("* not taxed", { width: W, align: "right" });
+  doc.fontSize(10);
+  if (quote.notes) {
+    heading("Notes");
+    text(quote.notes, { width: W });
+  }
+
+  heading("Fitment summary");
+  const facts: [string, string][] = [
+    ["Overall diameter", mmIn(fit.diameterChangeMm)],
+    ["Ground clearance under the axle", mmIn(fit.groundClearanceChangeMm)],
+    ["Poke (outer edge of the tire)", mmIn(fit.outerPokeChangeMm)],
+    ["Room inboard", mmIn(fit.innerClearanceChangeMm)],
+    ["Track width", mmIn(fit.trackWidthChangeMm)],
+    ["At 60 mph indicated", `${fit.actualMphAt60.toFixed(1)} mph actual`],
+  ];
+  if (fit.regear) facts.push(["Effective axle ratio", `${fit.regear.axleRatio.toFixed(2)} -> ${fit.regear.effectiveRatio.toFixed(2)}; regear to about ${fit.regear.suggestedRatio.toFixed(2)}`]);
+  for (const [k, v] of facts) text(`${k}: ${v}`);
+  if (fit.warnings.length) {
+    heading("Clearance warnings");
+    for (const w of fit.warnings) text(`- ${w}`, { width: W });
+  }
+  heading("Modifications required");
+  if (fit.modifications.length) for (const m of fit.modifications) text(`- ${m}`, { width: W });
+  else text("None expected from the numbers.");
+  heading("Cautions");
+  doc.fontSize(9);
+  for (const c of quoteCautions(fit)) text(`- ${c}`, { width: W });
+  doc.end();
+  return done;
+}

@@ -1,0 +1,26 @@
+import { describe, expect, it } from "vitest";
+import type { CatalogItemRow } from "@/lib/db/types";
+import { summarize } from "@/lib/quotes/fitment";
+import { suggestedServiceLines } from "@/lib/server/quotes";
+
+const svc = (sku: string, service_type: CatalogItemRow["service_type"], price_cents: number) =>
+  ({ id: sku, sku, description: sku, price_cents, kind: "service", service_type, service_unit: "per_wheel" }) as CatalogItemRow;
+const wheel = (beadlock: boolean) => ({ id: "w", kind: "wheel", beadlock }) as CatalogItemRow;
+const current = { boltPattern: "6x5.5", tireSize: "265/70R17", wheel: { diameterIn: 17, widthIn: 8, offsetMm: 25 } };
+
+describe("services suggested from the pick", () => {
+  const all = [svc("MB", "mount_balance", 3000), svc("BL", "beadlock_assembly", 4500), svc("VS", "valve_stem", 500), svc("AL", "alignment", 12900), svc("DP", "disposal", 400)];
+
+  it("same size, plain wheel: mount and balance, valve stems and disposal per wheel, no alignment", () => {
+    const fit = summarize(current, "265/70R17", { diameterIn: 17, widthIn: 8, offsetMm: 25, beadlock: false });
+    expect(suggestedServiceLines(all, wheel(false), 4, fit).map((l) => `${l.sku}×${l.quantity}`)).toEqual(["MB×4", "VS×4", "DP×4"]);
+  });
+
+  it("a beadlock wheel and a 70 mm taller tire: beadlock assembly per wheel and an alignment; trimming at the fabrication rate when the catalog has none", () => {
+    // 315/70R17 vs 265/70R17: +70 mm diameter (ISO 4000-1: D = d + 2H) — past the 25.4 mm alignment rule (common practice, no source).
+    const fit = summarize(current, "315/70R17", { diameterIn: 17, widthIn: 9, offsetMm: -12, beadlock: true });
+    const lines = suggestedServiceLines(all, wheel(true), 5, fit, 14500);
+    expect(lines.map((l) => `${l.sku || l.description}×${l.quantity}`)).toEqual(["MB×5", "BL×5", "VS×5", "AL×1", "Fender trimming labour (1 hour)×1", "DP×5"]);
+    expect(lines.find((l) => l.kind === "custom")?.unit_price_cents).toBe(14500);
+  });
+});
