@@ -30,8 +30,8 @@ export const DEMO_QUOTES = {
 const H = "kind,sku,description,price,qty_on_hand,tire_size,wheel_diameter_in,wheel_width_in,wheel_offset_mm,wheel_backspacing_in,backspacing_from,bolt_pattern,center_bore_mm,beadlock,service_type,service_unit";
 const CATALOG = [
   H,
-  "tire,RB-AT-2857017,Ridgeback AT all-terrain LT285/70R17 load range E,312.00,16,LT285/70R17 121/118Q E,,,,,,,,,,",
-  "tire,RB-AT-3157017,Ridgeback AT all-terrain LT315/70R17 load range D,368.00,12,LT315/70R17 113/110Q D,,,,,,,,,,",
+  "tire,HB-AT-2857017,Hogback AT all-terrain LT285/70R17 load range E,312.00,16,LT285/70R17 121/118Q E,,,,,,,,,,",
+  "tire,HB-AT-3157017,Hogback AT all-terrain LT315/70R17 load range D,368.00,12,LT315/70R17 113/110Q D,,,,,,,,,,",
   "tire,SC-MT-35125017,Scree Claw MT mud-terrain 35x12.50R17LT load range E,405.00,10,35x12.50R17LT 121Q E,,,,,,,,,,",
   "tire,SC-MT-37125017,Scree Claw MT mud-terrain 37x12.50R17LT load range D,462.00,8,37x12.50R17LT 124Q D,,,,,,,,,,",
   "tire,DL-HT-2657017,Dustline HT highway 265/70R17,214.00,20,265/70R17 115T,,,,,,,,,,",
@@ -99,13 +99,13 @@ export async function seed(knex: Knex): Promise<void> {
   const shop = await knex("shops").where({ id: DEMO_SHOP.id }).first();
   const plans: { id: string; number: number; customer: number; tire: string; wheel: string; by: string; history: [string, string, string][]; daysAgo: number }[] = [
     { id: DEMO_QUOTES.draft, number: 1001, customer: 0, tire: "SC-MT-35125017", wheel: "BS-1790-6550", by: TEO, history: [["draft", TEO, "Teo Marrow"]], daysAgo: 0 },
-    { id: DEMO_QUOTES.sent, number: 1002, customer: 1, tire: "RB-AT-3157017", wheel: "CF-1790-6550", by: TEO, history: [["draft", TEO, "Teo Marrow"], ["sent", TEO, "Teo Marrow"]], daysAgo: 2 },
+    { id: DEMO_QUOTES.sent, number: 1002, customer: 1, tire: "HB-AT-3157017", wheel: "CF-1790-6550", by: TEO, history: [["draft", TEO, "Teo Marrow"], ["sent", TEO, "Teo Marrow"]], daysAgo: 2 },
     {
       id: DEMO_QUOTES.paid, number: 1003, customer: 0, tire: "SC-MT-37125017", wheel: "TB-1790-6550", by: MARA,
       history: [["draft", MARA, "Mara Velkin"], ["sent", MARA, "Mara Velkin"], ["accepted", "", "customer"], ["deposit_paid", "", "payment provider"]], daysAgo: 5,
     },
-    { id: DEMO_QUOTES.declined, number: 1004, customer: 2, tire: "RB-AT-2857017", wheel: "BS-1780-6550", by: TEO, history: [["draft", TEO, "Teo Marrow"], ["sent", TEO, "Teo Marrow"], ["declined", TEO, "Teo Marrow"]], daysAgo: 9 },
-    { id: DEMO_QUOTES.expired, number: 1005, customer: 1, tire: "RB-AT-2857017", wheel: "BS-1790-6550", by: MARA, history: [["draft", MARA, "Mara Velkin"], ["sent", MARA, "Mara Velkin"], ["expired", "", "system"]], daysAgo: 30 },
+    { id: DEMO_QUOTES.declined, number: 1004, customer: 2, tire: "HB-AT-2857017", wheel: "BS-1780-6550", by: TEO, history: [["draft", TEO, "Teo Marrow"], ["sent", TEO, "Teo Marrow"], ["declined", TEO, "Teo Marrow"]], daysAgo: 9 },
+    { id: DEMO_QUOTES.expired, number: 1005, customer: 1, tire: "HB-AT-2857017", wheel: "BS-1790-6550", by: MARA, history: [["draft", MARA, "Mara Velkin"], ["sent", MARA, "Mara Velkin"], ["expired", "", "system"]], daysAgo: 30 },
   ];
   for (const p of plans) {
     if (await knex("quotes").where({ id: p.id }).first("id")) continue;
