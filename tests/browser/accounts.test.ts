@@ -115,7 +115,7 @@ describe("accounts in Chromium", () => {
     await page.getByLabel("New password", { exact: true }).fill("the third password");
     await page.getByLabel("Repeat the new password").fill("the third password");
     await page.getByRole("button", { name: "Change password" }).click();
-    await expect.poll(() => page.getByRole("alert").first().textContent()).toMatch(/expired or was already used/);
+    await expect.poll(() => page.locator("main [role=alert]").first().textContent()).toMatch(/expired or was already used/);
   });
 
   it("locks an account after repeated wrong passwords, with a clear message", async () => {
@@ -133,12 +133,12 @@ describe("accounts in Chromium", () => {
       await page.getByLabel("E-mail").fill(email);
       await page.getByLabel("Password").fill(`wrong password ${i}`);
       await page.getByRole("button", { name: "Sign in" }).click();
-      await expect.poll(() => page.getByRole("alert").first().textContent()).toMatch(i < 4 ? /do not match/ : /locked/);
+      await expect.poll(() => page.locator("main [role=alert]").first().textContent()).toMatch(i < 4 ? /do not match/ : /locked/);
     }
     // Even the right password is refused while locked.
     await page.getByLabel("Password").fill("the right password");
     await page.getByRole("button", { name: "Sign in" }).click();
-    await expect.poll(() => page.getByRole("alert").first().textContent()).toMatch(/locked for \d+ more minute/);
+    await expect.poll(() => page.locator("main [role=alert]").first().textContent()).toMatch(/locked for \d+ more minute/);
     await axeClean("sign-in-locked");
   });
 });
