@@ -8,6 +8,7 @@ export interface NavItem {
 }
 
 export const NAV: NavItem[] = [
+  { href: "/garage", label: "Garage", roles: ["member", "admin"] },
   { href: "/account", label: "Account", roles: "signed-in" },
   { href: "/shop", label: "Shop", roles: ["shop_staff", "shop_owner"] },
   { href: "/admin/users", label: "Users", roles: ["admin"] },

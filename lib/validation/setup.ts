@@ -70,9 +70,12 @@ export function lengthField(label: string, unit: "in" | "mm", bounds: Bounds, ex
     );
 }
 
-/** An optional length: empty text or null gives null. */
+/** An optional length: missing, empty text or null gives null. */
 export function optionalLengthField(label: string, unit: "in" | "mm", bounds: Bounds, example: string, out: "in" | "mm" = unit) {
-  return z.union([z.null(), z.literal(""), lengthField(label, unit, bounds, example, out)]).transform((v) => (v === "" ? null : v));
+  return z
+    .union([z.null(), z.literal(""), lengthField(label, unit, bounds, example, out)])
+    .optional()
+    .transform((v) => (v === "" || v === undefined ? null : v));
 }
 
 /** A plain number typed as text or given as a number. */
@@ -100,7 +103,8 @@ export function numberField(label: string, bounds: Bounds, example: string, opts
 export function optionalNumberField(label: string, bounds: Bounds, example: string, opts: { integer?: boolean; unit?: string } = {}) {
   return z
     .union([z.null(), z.literal(""), numberField(label, bounds, example, opts)])
-    .transform((v) => (v === "" ? null : v));
+    .optional()
+    .transform((v) => (v === "" || v === undefined ? null : v));
 }
 
 export const backspacingReferenceSchema = z.enum(["flange", "bead-seat"], {
@@ -187,16 +191,24 @@ export function toEngineSetup(s: SetupValues): SetupInput {
   };
 }
 
-/** Form text for a stored setup (numbers as text, the way the form holds them). */
+/**
+ * Form text for a stored setup (numbers as text, the way the form holds them). The position
+ * carries the fields of both modes so switching mode in a form starts from sensible values; the
+ * schema keeps only those of the chosen mode.
+ */
 export function setupToForm(s: SetupValues): SetupFormValues {
+  const position = {
+    mode: s.position.mode,
+    offsetMm: s.position.mode === "offset" ? String(s.position.offsetMm) : "",
+    backspacingIn: s.position.mode === "backspacing" ? String(s.position.backspacingIn) : "",
+    reference: s.position.mode === "backspacing" ? s.position.reference : "flange",
+    flangeIn: String(s.position.mode === "backspacing" ? s.position.flangeIn : DEFAULT_FLANGE_IN),
+  } as SetupFormValues["position"];
   return {
     tire: s.tire,
     wheelDiameterIn: String(s.wheelDiameterIn),
     wheelWidthIn: String(s.wheelWidthIn),
-    position:
-      s.position.mode === "offset"
-        ? { mode: "offset", offsetMm: String(s.position.offsetMm) }
-        : { mode: "backspacing", backspacingIn: String(s.position.backspacingIn), reference: s.position.reference, flangeIn: String(s.position.flangeIn) },
+    position,
     spacerMm: s.spacerMm ? String(s.spacerMm) : "",
   };
 }
@@ -208,6 +220,6 @@ export const EMPTY_SETUP_FORM: SetupFormValues = {
   tire: "",
   wheelDiameterIn: "",
   wheelWidthIn: "",
-  position: { mode: "offset", offsetMm: "" },
+  position: { mode: "offset", offsetMm: "", backspacingIn: "", reference: "flange", flangeIn: String(DEFAULT_FLANGE_IN) } as SetupFormValues["position"],
   spacerMm: "",
 };
