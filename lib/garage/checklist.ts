@@ -173,7 +173,7 @@ export function buildChecklist(input: { vehicle: Vehicle; clearances: VehicleCle
   items.push({
     id: "spare",
     group: "tires",
-    title: `Spare fits: a ${bothUnits(t.overallDiameterMm)} tire in the carrier or under the bed`,
+    title: `Spare fits: the planned ${bothUnits(t.overallDiameterMm)} tire in the carrier or spare mount`,
     detail: "Check the spare location, the carrier's load rating and that the spare can be lowered and lifted. On four-wheel drive, a spare of another diameter is for short distances only.",
   });
   const li = t.loadIndex;

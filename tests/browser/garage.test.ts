@@ -67,7 +67,7 @@ describe("the garage in Chromium", () => {
     await expect.poll(() => page.getByText("63.5 mm (2-1/2 in)").isVisible()).toBe(true);
   });
 
-  it("adds measured points; a distance without a unit is refused", async () => {
+  it("adds measured points (inches with a fraction from the unit choice, inches in the text)", async () => {
     await page.locator("#f-point-label").fill("Frame rail, full left lock");
     await page.locator("#f-point-direction").selectOption("inboard");
     await page.locator("#f-point-suspensionState").selectOption("full-lock");

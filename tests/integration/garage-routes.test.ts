@@ -330,3 +330,39 @@ describe("photo uploads", () => {
     expect(await db("vehicle_clearances").where({ vehicle_id: adaVehicle }).count()).toEqual([{ count: "0" }]);
   });
 });
+
+describe("install checklists", () => {
+  const checklist = () => import("@/app/api/vehicles/[id]/checklist/route");
+  const PLANNED = { tire: "35x12.50R17LT", wheelDiameterIn: 17, wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 }, spacerMm: 0 };
+  const Q = "pt=35x12.50R17LT&pd=17&pw=9&po=-12";
+
+  it("saves ticks per vehicle + planned setup, refuses unknown items, and is owner-scoped", async () => {
+    const { GET, PUT } = await checklist();
+    const { body } = await createAs("ada");
+    const id = body.vehicle.id as string;
+    as("ada");
+    const first = await (await GET(req("GET", `/api/vehicles/${id}/checklist?${Q}`), ctx({ id }))).json();
+    expect(first.ticked).toEqual([]);
+    expect(first.comparisonId).toBeNull();
+    expect(first.items.map((i: { id: string }) => i.id)).toEqual(expect.arrayContaining(["regear", "speedometer", "lug-torque", "lug-recheck", "beadlock"]));
+
+    const bad = await PUT(req("PUT", `/api/vehicles/${id}/checklist`, { planned: PLANNED, ticked: ["regear", "made-up"] }), ctx({ id }));
+    expect(bad.status).toBe(422);
+    expect((await bad.json()).fieldErrors.ticked[0]).toMatch(/made-up/);
+    expect(await db("install_checklists").count()).toEqual([{ count: "0" }]);
+
+    const ok = await PUT(req("PUT", `/api/vehicles/${id}/checklist`, { planned: PLANNED, ticked: ["regear", "alignment", "regear"] }), ctx({ id }));
+    expect(ok.status).toBe(200);
+    expect((await ok.json()).ticked).toEqual(["regear", "alignment"]);
+    const again = await (await GET(req("GET", `/api/vehicles/${id}/checklist?${Q}`), ctx({ id }))).json();
+    expect(again.ticked).toEqual(["regear", "alignment"]);
+    const other = await (await GET(req("GET", `/api/vehicles/${id}/checklist?pt=37x12.50R17LT&pd=17&pw=9&po=-12`), ctx({ id }))).json();
+    expect(other.ticked).toEqual([]);
+    expect((await GET(req("GET", `/api/vehicles/${id}/checklist`), ctx({ id }))).status).toBe(400);
+
+    as("bo");
+    expect((await GET(req("GET", `/api/vehicles/${id}/checklist?${Q}`), ctx({ id }))).status).toBe(404);
+    expect((await PUT(req("PUT", `/api/vehicles/${id}/checklist`, { planned: PLANNED, ticked: [] }), ctx({ id }))).status).toBe(404);
+    expect((await db("install_checklists").where({ vehicle_id: id }).first()).ticked).toEqual(["regear", "alignment"]);
+  });
+});

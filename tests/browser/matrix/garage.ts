@@ -53,6 +53,20 @@ export const cases: MatrixCase[] = [
     expect: garage(415, 404),
     note: "JSON instead of multipart; the admin is not the owner",
   },
+  {
+    route: "/api/vehicles/[id]/checklist",
+    method: "GET",
+    path: `/api/vehicles/${DEMO_VEHICLE}/checklist?pt=35x12.50R17LT&pd=17&pw=9&po=-12`,
+    expect: garage(200, 404),
+  },
+  {
+    route: "/api/vehicles/[id]/checklist",
+    method: "PUT",
+    path: `/api/vehicles/${DEMO_VEHICLE}/checklist`,
+    body: { planned: { ...SETUP, tire: "35x12.50R17LT", wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 } }, ticked: ["not-an-item"] },
+    expect: garage(422, 404),
+    note: "an item that is not on the list; the admin is not the owner",
+  },
   { route: "/api/photos/[id]", method: "GET", path: `/api/photos/${DEMO_PHOTO}?variant=thumb`, expect: garage(200, 200), note: "owner and admins see photos" },
   { route: "/api/photos/[id]", method: "DELETE", path: "/api/photos/d4000000-0000-4000-8000-0000000009ff", expect: garage(404, 404), note: "no such photo" },
 ];
