@@ -161,6 +161,24 @@ describe("the garage in Chromium", () => {
     expect(q.get("po")).toMatch(/^-?\d+$/);
   });
 
+  it("fits a 375 px phone screen: the vehicle page with a plan, and the finder, scroll only vertically", async () => {
+    const phone = await launch({ width: 375, height: 800 });
+    try {
+      const p = await phone.context.newPage();
+      await signInAs(p, DEMO.member, DEMO_PASSWORD);
+      await p.goto("/garage/d4000000-0000-4000-8000-000000000002?pt=33x12.50R15LT&pd=15&pw=8&pb=3.75&pr=flange");
+      await expect.poll(() => p.getByTestId("predictions").isVisible(), { timeout: 15000 }).toBe(true);
+      expect(await p.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(375);
+      await shot(p, "garage-375-vehicle");
+      expect(await seriousViolations(p)).toEqual([]);
+      await p.goto("/garage/d4000000-0000-4000-8000-000000000002/finder");
+      await expect.poll(() => p.getByTestId("finder-summary").isVisible(), { timeout: 20000 }).toBe(true);
+      expect(await p.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(375);
+    } finally {
+      await phone.close();
+    }
+  });
+
   it("keeps another member's vehicle out of reach (404 for the admin)", async () => {
     const other = await launch();
     try {

@@ -65,7 +65,7 @@ export function PlannedPanel({ detail, initialPlanned }: { detail: VehicleDetail
     <Card>
       <h2 className="text-lg font-semibold">Plan a setup</h2>
       <p className="mt-1 text-sm text-basalt-600">Enter the setup you are considering; every measured point is predicted as you type.</p>
-      <div className="mt-4 grid gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(0,1.3fr)]">
+      <div className="mt-4 grid grid-cols-[minmax(0,1fr)] gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(0,1.3fr)]">
         <div className="flex flex-col gap-3">
           <SetupFields form={form} name="planned" legend="Planned setup" tone="ember" />
           <TextField
@@ -76,7 +76,7 @@ export function PlannedPanel({ detail, initialPlanned }: { detail: VehicleDetail
             error={form.formState.errors.margin?.message}
           />
         </div>
-        <div className="flex flex-col gap-4" aria-live="polite">
+        <div className="flex min-w-0 flex-col gap-4" aria-live="polite">
           {!result ? (
             <Alert tone="info">Complete the planned setup to see the predictions.</Alert>
           ) : (
@@ -97,7 +97,7 @@ export function PlannedPanel({ detail, initialPlanned }: { detail: VehicleDetail
               {clearances.length === 0 ? (
                 <p className="text-sm text-basalt-700">Add measured points above to see what this setup would touch.</p>
               ) : (
-                <div className="overflow-x-auto">
+                <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Predicted clearances (scrolls sideways on narrow screens)">
                   <table className="w-full min-w-[560px] text-left text-sm" data-testid="predictions">
                     <caption className="sr-only">Predicted clearance at each measured point</caption>
                     <thead className="text-xs uppercase tracking-wide text-basalt-500">

@@ -71,7 +71,7 @@ export function VehicleView({ initial, initialPlanned }: { initial: VehicleDetai
       </div>
       {del.isError && <Alert tone="error">{(del.error as Error).message}</Alert>}
 
-      <div className="grid gap-6 lg:grid-cols-2">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-2">
         <Card>
           <h2 className="text-lg font-semibold">Details</h2>
           <dl className="mt-2">
@@ -166,7 +166,7 @@ function AddPoint({ vehicleId }: { vehicleId: string }) {
   const select = (name: "direction" | "suspensionState" | "unit", label: string, options: Record<string, string>) => (
     <div className="flex flex-col gap-1">
       <label htmlFor={`f-point-${name}`} className="text-sm font-medium text-basalt-800">{label}</label>
-      <select id={`f-point-${name}`} className="min-h-10 rounded-lg border border-basalt-300 bg-white px-3" {...register(name)} aria-describedby={`f-point-${name}-error`}>
+      <select id={`f-point-${name}`} className="min-h-10 w-full min-w-0 rounded-lg border border-basalt-300 bg-white px-3" {...register(name)} aria-describedby={`f-point-${name}-error`}>
         {Object.entries(options).map(([v, l]) => <option key={v} value={v}>{l}</option>)}
       </select>
       <p id={`f-point-${name}-error`} aria-live="polite" className="text-sm text-contact-600">{e[name]?.message}</p>
@@ -176,7 +176,7 @@ function AddPoint({ vehicleId }: { vehicleId: string }) {
     <form onSubmit={onSubmit} noValidate className="no-print mt-5 border-t border-basalt-100 pt-4">
       <h3 className="font-semibold">Add a measured point</h3>
       <div aria-live="assertive">{failure && <Alert tone="error" className="mt-2">{failure}</Alert>}</div>
-      <div className="mt-2 grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
+      <div className="mt-2 grid grid-cols-[minmax(0,1fr)] gap-3 sm:grid-cols-2 lg:grid-cols-3">
         <TextField id="f-point-label" label="Point" hint='e.g. "frame rail, full left lock"' {...register("label")} error={e.label?.message} />
         {select("direction", "Direction", CLEARANCE_DIRECTION_LABEL)}
         {select("suspensionState", "Suspension state", SUSPENSION_STATE_LABEL)}

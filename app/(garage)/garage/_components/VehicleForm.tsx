@@ -76,7 +76,7 @@ export function VehicleForm({ vehicle }: { vehicle: Vehicle | null }) {
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-6">
       <div aria-live="assertive">{failure && <Alert tone="error">{failure}</Alert>}</div>
-      <Card className="grid gap-3 sm:grid-cols-2">
+      <Card className="grid grid-cols-[minmax(0,1fr)] gap-3 sm:grid-cols-2">
         <h2 className="text-lg font-semibold sm:col-span-2">The vehicle</h2>
         <TextField label="Name" hint="Your own name for it, e.g. Gravel hauler" {...register("name")} error={e.name?.message} className="sm:col-span-2" />
         <TextField label="Year" inputMode="numeric" {...register("year")} error={e.year?.message} />

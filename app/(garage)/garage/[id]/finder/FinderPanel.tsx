@@ -100,7 +100,7 @@ export function FinderPanel({ vehicle, clearances }: { vehicle: Vehicle; clearan
         lead={`Tire sizes × wheel widths × offsets for ${vehicle.boltPattern}, ranked by the engine. The search runs in the background as you type.`}
         actions={<Link href={`/garage/${vehicle.id}`} className={buttonClass("secondary")}>Back to the vehicle</Link>}
       />
-      <div className="grid gap-6 lg:grid-cols-[20rem_minmax(0,1fr)]">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[20rem_minmax(0,1fr)]">
         <Card className="flex flex-col gap-3 self-start">
           <h2 className="text-lg font-semibold">Goals</h2>
           <TextField label="Target diameter (in)" hint="Optional, e.g. 35 or 890 mm; ranks nearest first" {...reg("targetDiameterMm")} error={e.targetDiameterMm?.message} />
