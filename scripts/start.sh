@@ -41,6 +41,16 @@ export STRIPE_API_HOST="${STRIPE_API_HOST:-127.0.0.1}" STRIPE_API_PORT="${STRIPE
 export STRIPE_WEBHOOK_URL="${STRIPE_WEBHOOK_URL:-http://127.0.0.1:$PORT/api/payments/webhook}"
 mkdir -p .data
 
+# Photo storage: a local S3-compatible fake (bucket created at start) unless S3_ENDPOINT is set.
+export S3_BUCKET="${S3_BUCKET:-hubface-photos}" S3_REGION="${S3_REGION:-us-east-1}"
+export S3_ACCESS_KEY_ID="${S3_ACCESS_KEY_ID:-S3RVER}" S3_SECRET_ACCESS_KEY="${S3_SECRET_ACCESS_KEY:-S3RVER}"
+if [ -z "${S3_ENDPOINT:-}" ]; then
+  export S3_PORT="${HUBFACE_S3_PORT:-4568}" S3_DIR="$ROOT/.data/s3-demo"
+  export S3_ENDPOINT="http://127.0.0.1:$S3_PORT"
+  tsx scripts/services/fake-s3.ts & PIDS+=($!)
+  wait_for_http "$S3_ENDPOINT/" || { log "the photo store did not start"; exit 1; }
+fi
+
 log "migrating the database"
 npm run -s db:migrate >/dev/null
 log "loading demo data (kept when already there)"

@@ -12,6 +12,7 @@ APP_PORT="${HUBFACE_TEST_APP_PORT:-3100}"
 T_SMTP="${HUBFACE_TEST_SMTP_PORT:-2625}"
 T_OUTBOX="${HUBFACE_TEST_OUTBOX_PORT:-2626}"
 T_PAY="${HUBFACE_TEST_PAY_PORT:-2627}"
+T_S3="${HUBFACE_TEST_S3_PORT:-4569}"
 PIDS=()
 
 cleanup() {
@@ -68,6 +69,11 @@ export STRIPE_WEBHOOK_URL="$E2E_BASE_URL/api/payments/webhook"
 export PG_TEST_DATA_DIR="$PGDATA_DIR" PGBIN
 if next build > "$RESULTS/next-build.log" 2>&1; then
   record build 1 0
+  export S3_PORT="$T_S3" S3_DIR="$ROOT/.data/s3-test" S3_RESET=1 S3_BUCKET=hubface-photos S3_REGION=us-east-1
+  export S3_ENDPOINT="http://127.0.0.1:$T_S3" S3_ACCESS_KEY_ID=S3RVER S3_SECRET_ACCESS_KEY=S3RVER
+  rm -rf "$S3_DIR"
+  tsx scripts/services/fake-s3.ts > "$RESULTS/fake-s3.log" 2>&1 & PIDS+=($!)
+  wait_for_http "$S3_ENDPOINT/" 20 || log "the photo store did not start; see $RESULTS/fake-s3.log"
   npm run -s db:migrate >/dev/null && npm run -s db:seed >/dev/null
   tsx scripts/services/fake-smtp.ts > "$RESULTS/fake-smtp.log" 2>&1 & PIDS+=($!)
   tsx scripts/services/fake-pay.ts > "$RESULTS/fake-pay.log" 2>&1 & PIDS+=($!)

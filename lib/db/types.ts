@@ -169,6 +169,32 @@ export interface QuoteRow {
   notes: string;
   public_token_hash: string | null;
   valid_until: Date | null;
+// --- garage ---------------------------------------------------------------------------------
+// Setups are stored as the output of lib/validation/setup.ts (SetupValues).
+
+export const FRONT_SUSPENSIONS = ["independent", "solid-axle"] as const;
+export type FrontSuspension = (typeof FRONT_SUSPENSIONS)[number];
+
+export interface VehicleRow {
+  id: string;
+  user_id: string;
+  name: string;
+  year: number | null;
+  make: string | null;
+  model: string | null;
+  trim: string | null;
+  front_suspension: FrontSuspension;
+  bolt_pattern: string;
+  bolt_pcd_mm: number;
+  bolt_count: number;
+  hub_bore_mm: number | null;
+  stock_setup: unknown;
+  current_setup: unknown;
+  lift_height_mm: number | null;
+  kingpin_inclination_deg: number | null;
+  axle_ratio: number | null;
+  transmission_ratio: number | null;
+  notes: string;
   created_at: Date;
   updated_at: Date;
 }
@@ -211,4 +237,39 @@ export interface PaymentRow {
   status: "open" | "paid";
   created_at: Date;
   paid_at: Date | null;
+export interface VehicleClearanceRow {
+  id: string;
+  vehicle_id: string;
+  label: string;
+  direction: "inboard" | "outboard" | "upward" | "fore-aft";
+  distance_mm: number;
+  distance_text: string;
+  suspension_state: "ride-height" | "full-stuff" | "full-lock";
+  measured_setup: unknown;
+  created_at: Date;
+}
+
+export interface VehiclePhotoRow {
+  id: string;
+  vehicle_id: string;
+  clearance_id: string | null;
+  object_key: string;
+  thumb_key: string;
+  content_type: "image/jpeg" | "image/png" | "image/webp";
+  width: number;
+  height: number;
+  bytes: number;
+  original_name: string;
+  created_at: Date;
+}
+
+export interface InstallChecklistRow {
+  id: string;
+  vehicle_id: string;
+  planned_key: string;
+  planned_setup: unknown;
+  comparison_id: string | null;
+  ticked: string[];
+  created_at: Date;
+  updated_at: Date;
 }

@@ -122,3 +122,19 @@ export {
   type FitmentMatch,
   type FinderResult,
 } from "./finder";
+export {
+  CLEARANCE_DIRECTIONS,
+  DEFAULT_CLEARANCE_MARGIN_MM,
+  CLEARANCE_MARGIN_LIMITS_MM,
+  CLEARANCE_DISTANCE_LIMITS_MM,
+  classifyClearance,
+  clearanceChangeMm,
+  predictClearance,
+  predictClearances,
+  clearanceLimits,
+  type ClearanceDirection,
+  type ClearanceStatus,
+  type MeasuredClearance,
+  type ClearancePrediction,
+  type ClearanceLimits,
+} from "./clearance";

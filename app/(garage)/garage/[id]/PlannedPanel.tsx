@@ -1,0 +1,160 @@
+"use client";
+import { zodResolver } from "@hookform/resolvers/zod";
+import Link from "next/link";
+import { useEffect, useMemo } from "react";
+import { useForm, useWatch } from "react-hook-form";
+import { z } from "zod";
+import { Alert } from "@/components/ui/Alert";
+import { Badge } from "@/components/ui/Badge";
+import { buttonClass } from "@/components/ui/Button";
+import { Card } from "@/components/ui/Card";
+import { TextField } from "@/components/ui/TextField";
+import { type ClearanceStatus, DEFAULT_CLEARANCE_MARGIN_MM, compareSetups, predictClearances } from "@/lib/fitment";
+import { bothUnits, signedMm } from "@/lib/garage/format";
+import { setupQuery, workspaceHref } from "@/lib/garage/links";
+import type { VehicleDetail } from "@/lib/garage/types";
+import { CLEARANCE_DIRECTION_LABEL, marginSchema } from "@/lib/validation/garage";
+import { type SetupFormValues, type SetupValues, setupSchema, setupToForm, toEngineSetup } from "@/lib/validation/setup";
+import { SetupFields } from "../_components/SetupFields";
+
+const plannedFormSchema = z.object({ planned: setupSchema, margin: marginSchema });
+type PlannedForm = { planned: SetupFormValues; margin: string };
+
+export const STATUS_TONE: Record<ClearanceStatus, "clear" | "tight" | "contact"> = { clear: "clear", tight: "tight", contact: "contact" };
+export const STATUS_LABEL: Record<ClearanceStatus, string> = { clear: "Clear", tight: "Tight", contact: "Contact" };
+
+/** A planned setup typed in, and what every measured point is predicted to become with it. */
+export function PlannedPanel({ detail, initialPlanned }: { detail: VehicleDetail; initialPlanned: SetupValues | null }) {
+  const { vehicle: v, clearances } = detail;
+  const form = useForm<PlannedForm>({
+    resolver: zodResolver(plannedFormSchema) as never,
+    mode: "onChange",
+    defaultValues: { planned: setupToForm(initialPlanned ?? v.currentSetup), margin: "1/2 in" },
+  });
+  const values = useWatch({ control: form.control }) as PlannedForm;
+  const planned = setupSchema.safeParse(values.planned);
+  const margin = marginSchema.safeParse(values.margin);
+  const plannedKey = planned.success ? setupQuery("p", planned.data) : null;
+
+  useEffect(() => {
+    void form.trigger();
+  }, [form]);
+  useEffect(() => {
+    if (plannedKey) window.history.replaceState(window.history.state, "", `?${plannedKey}`);
+  }, [plannedKey]);
+
+  const result = useMemo(() => {
+    if (!planned.success || !margin.success) return null;
+    const p = toEngineSetup(planned.data);
+    const cmp = compareSetups(toEngineSetup(v.currentSetup), p, {
+      kingpinInclinationDeg: v.kingpinInclinationDeg ?? undefined,
+      axleRatio: v.axleRatio ?? undefined,
+      transmissionRatio: v.transmissionRatio ?? undefined,
+    });
+    const predictions = predictClearances(
+      clearances.map((c) => ({ direction: c.direction, distanceMm: c.distanceMm, measuredWith: toEngineSetup(c.measuredSetup) })),
+      p,
+      { marginMm: margin.data },
+    );
+    return { cmp, predictions };
+    // plannedKey and the margin text stand for the parsed values
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [plannedKey, values.margin, clearances, v]);
+
+  return (
+    <Card>
+      <h2 className="text-lg font-semibold">Plan a setup</h2>
+      <p className="mt-1 text-sm text-basalt-600">Enter the setup you are considering; every measured point is predicted as you type.</p>
+      <div className="mt-4 grid grid-cols-[minmax(0,1fr)] gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(0,1.3fr)]">
+        <div className="flex flex-col gap-3">
+          <SetupFields form={form} name="planned" legend="Planned setup" tone="ember" />
+          <TextField
+            id="f-margin"
+            label="Safety margin"
+            hint={`Default 1/2 in (${DEFAULT_CLEARANCE_MARGIN_MM} mm) — common practice, no source. A point closer than this is tight.`}
+            {...form.register("margin")}
+            error={form.formState.errors.margin?.message}
+          />
+        </div>
+        <div className="flex min-w-0 flex-col gap-4" aria-live="polite">
+          {!result ? (
+            <Alert tone="info">Complete the planned setup to see the predictions.</Alert>
+          ) : (
+            <>
+              <dl className="grid grid-cols-2 gap-3 text-sm sm:grid-cols-4">
+                {[
+                  ["Diameter", signedMm(result.cmp.diameterChangeMm)],
+                  ["Radius (upward, at lock)", signedMm(result.cmp.groundClearanceChangeMm)],
+                  ["Inner clearance", signedMm(result.cmp.innerClearanceChangeMm)],
+                  ["Poke", signedMm(result.cmp.outerPokeChangeMm)],
+                ].map(([k, val]) => (
+                  <div key={k} className="rounded-lg bg-dune-100 p-2">
+                    <dt className="text-xs text-basalt-600">{k}</dt>
+                    <dd className="font-semibold">{val}</dd>
+                  </div>
+                ))}
+              </dl>
+              {clearances.length === 0 ? (
+                <p className="text-sm text-basalt-700">Add measured points above to see what this setup would touch.</p>
+              ) : (
+                <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Predicted clearances (scrolls sideways on narrow screens)">
+                  <table className="w-full min-w-[560px] text-left text-sm" data-testid="predictions">
+                    <caption className="sr-only">Predicted clearance at each measured point</caption>
+                    <thead className="text-xs uppercase tracking-wide text-basalt-500">
+                      <tr>
+                        <th className="py-2">Point</th>
+                        <th>Measured</th>
+                        <th>Change</th>
+                        <th>Predicted</th>
+                        <th>Status</th>
+                      </tr>
+                    </thead>
+                    <tbody className="divide-y divide-basalt-100">
+                      {result.predictions.map((p, i) => {
+                        const c = clearances[i]!;
+                        return (
+                          <tr key={c.id}>
+                            <td className="py-2 pr-2">
+                              <span className="font-medium">{c.label}</span>
+                              <span className="block text-xs text-basalt-500">{CLEARANCE_DIRECTION_LABEL[c.direction]}</span>
+                            </td>
+                            <td>{bothUnits(p.measuredMm)}</td>
+                            <td>{signedMm(p.changeMm)}</td>
+                            <td>{bothUnits(p.predictedMm)}</td>
+                            <td>
+                              <Badge tone={STATUS_TONE[p.status]}>{STATUS_LABEL[p.status]}</Badge>
+                              {p.shortfallMm > 0 && <span className="block text-xs text-basalt-600">needs {bothUnits(p.shortfallMm)}</span>}
+                            </td>
+                          </tr>
+                        );
+                      })}
+                    </tbody>
+                  </table>
+                </div>
+              )}
+              {planned.success && (
+                <div className="no-print flex flex-wrap gap-2">
+                  <Link href={workspaceHref(v.currentSetup, planned.data, v)} className={buttonClass("secondary")} data-testid="open-workspace">
+                    Open current vs planned in the workspace
+                  </Link>
+                  <Link href={`/garage/${v.id}/checklist?${plannedKey}`} className={buttonClass("primary")}>Install checklist</Link>
+                </div>
+              )}
+            </>
+          )}
+          <details className="rounded-lg bg-basalt-50 p-3 text-sm" open>
+            <summary className="cursor-pointer font-semibold">How the predictions are made</summary>
+            <ul className="mt-2 list-disc space-y-1 pl-5 text-basalt-700">
+              <li>Inboard points change by the inner clearance change: how far the tire reaches inboard of the hub face, measured setup vs planned.</li>
+              <li>Outboard points change by the poke change (the tire&apos;s reach outboard of the hub face).</li>
+              <li>Upward points and fore/aft points at full lock change by the radius change (half the diameter change), taken whole.</li>
+              <li>Each point is compared with the setup it was measured with. Suspension travel, bump stops, steering stops and ride height are assumed as they were when measured.</li>
+              <li>The section width on the planned rim follows the 0.4 mm per mm of rim width rule; real tires differ by make, tread and load — confirm by test-fitting and cycling the suspension before driving.</li>
+              <li>Contact = 0 mm or less, tight = less than the margin, clear = the margin or more.</li>
+            </ul>
+          </details>
+        </div>
+      </div>
+    </Card>
+  );
+}

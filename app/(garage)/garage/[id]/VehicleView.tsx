@@ -1,0 +1,190 @@
+"use client";
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import Link from "next/link";
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { useForm } from "react-hook-form";
+import { Alert } from "@/components/ui/Alert";
+import { Button, buttonClass } from "@/components/ui/Button";
+import { Card } from "@/components/ui/Card";
+import { TextField } from "@/components/ui/TextField";
+import { api, applyFieldErrors } from "@/lib/client/api";
+import { formatBoltPattern, formatLength, parseBoltPattern, setupGeometry } from "@/lib/fitment";
+import { bothUnits, setupLine } from "@/lib/garage/format";
+import type { VehicleDetail } from "@/lib/garage/types";
+import {
+  CLEARANCE_DIRECTION_LABEL,
+  type ClearanceFormValues,
+  type ClearanceValues,
+  FRONT_SUSPENSION_LABEL,
+  SUSPENSION_STATE_LABEL,
+  clearanceSchema,
+} from "@/lib/validation/garage";
+import { type SetupValues, toEngineSetup } from "@/lib/validation/setup";
+import { PhotoDrop } from "../_components/PhotoDrop";
+import { PlannedPanel } from "./PlannedPanel";
+
+export function VehicleView({ initial, initialPlanned }: { initial: VehicleDetail; initialPlanned: SetupValues | null }) {
+  const id = initial.vehicle.id;
+  const router = useRouter();
+  const qc = useQueryClient();
+  const q = useQuery({ queryKey: ["vehicle", id], queryFn: () => api<VehicleDetail>(`/api/vehicles/${id}`), initialData: initial });
+  const { vehicle: v, clearances, photos } = q.data;
+  const [confirming, setConfirming] = useState(false);
+  const del = useMutation({
+    mutationFn: () => api(`/api/vehicles/${id}`, { method: "DELETE" }),
+    onSuccess: async () => {
+      await qc.invalidateQueries({ queryKey: ["vehicles"] });
+      router.push("/garage");
+      router.refresh();
+    },
+  });
+  const current = setupGeometry(toEngineSetup(v.currentSetup));
+  const bp = parseBoltPattern(v.boltPattern);
+  const row = (k: string, val: string | null) => (
+    <div className="flex justify-between gap-3 border-b border-basalt-100 py-1.5 text-sm last:border-0">
+      <dt className="text-basalt-600">{k}</dt>
+      <dd className="text-right font-medium">{val ?? "—"}</dd>
+    </div>
+  );
+  return (
+    <div className="flex flex-col gap-6">
+      <div className="flex flex-wrap items-end justify-between gap-4">
+        <div>
+          <h1 className="text-3xl font-bold text-basalt-950">{v.name}</h1>
+          <p className="mt-1 text-basalt-600">{[v.year, v.make, v.model, v.trim].filter(Boolean).join(" ") || "No description"}</p>
+        </div>
+        <div className="no-print flex flex-wrap gap-2">
+          <Link href={`/garage/${id}/edit`} className={buttonClass("secondary")}>Edit</Link>
+          <Link href={`/garage/${id}/finder`} className={buttonClass("secondary")}>Fitment finder</Link>
+          {!confirming ? (
+            <Button variant="ghost" onClick={() => setConfirming(true)}>Delete vehicle</Button>
+          ) : (
+            <span className="flex items-center gap-2">
+              <span className="text-sm">Delete it with its points and photos?</span>
+              <Button variant="danger" pending={del.isPending} onClick={() => del.mutate()}>Yes, delete</Button>
+              <Button variant="ghost" onClick={() => setConfirming(false)}>Keep</Button>
+            </span>
+          )}
+        </div>
+      </div>
+      {del.isError && <Alert tone="error">{(del.error as Error).message}</Alert>}
+
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-2">
+        <Card>
+          <h2 className="text-lg font-semibold">Details</h2>
+          <dl className="mt-2">
+            {row("Front suspension", FRONT_SUSPENSION_LABEL[v.frontSuspension])}
+            {row("Bolt pattern", `${formatBoltPattern(bp, "in")} in = ${formatBoltPattern(bp, "mm")} mm`)}
+            {row("Hub bore", v.hubBoreMm === null ? null : formatLength(v.hubBoreMm, { unit: "mm" }))}
+            {row("Lift height", v.liftHeightMm === null ? null : bothUnits(v.liftHeightMm))}
+            {row("Kingpin inclination", v.kingpinInclinationDeg === null ? null : `${v.kingpinInclinationDeg}°`)}
+            {row("Axle ratio", v.axleRatio === null ? null : v.axleRatio.toFixed(2))}
+            {row("Top-gear ratio", v.transmissionRatio === null ? null : v.transmissionRatio.toFixed(2))}
+            {row("Stock setup", setupLine(v.stockSetup))}
+            {row("Current setup", setupLine(v.currentSetup))}
+            {row("Current tire diameter", bothUnits(current.overallDiameterMm))}
+            {row("Current reach inboard / outboard of the hub face", `${formatLength(current.innerSwingMm, { unit: "mm" })} / ${formatLength(current.outerSwingMm, { unit: "mm" })}`)}
+          </dl>
+          {v.notes && <p className="mt-3 whitespace-pre-line text-sm text-basalt-700">{v.notes}</p>}
+        </Card>
+        <Card>
+          <h2 className="text-lg font-semibold">Photos of the vehicle</h2>
+          <div className="mt-3">
+            <PhotoDrop vehicleId={id} label="the vehicle" photos={photos.filter((p) => p.clearanceId === null)} />
+          </div>
+        </Card>
+      </div>
+
+      <Card>
+        <h2 className="text-lg font-semibold">Measured clearances</h2>
+        <p className="mt-1 text-sm text-basalt-600">Gaps you measured from the tire to the nearest part, each with the setup fitted at the time.</p>
+        {clearances.length === 0 ? (
+          <p className="mt-3 text-sm text-basalt-700">No points yet. Measure the tightest spots (frame at full lock, fender at full stuff) and add them below.</p>
+        ) : (
+          <ul className="mt-4 flex flex-col gap-4" aria-label="Measured points">
+            {clearances.map((c) => (
+              <li key={c.id} className="rounded-lg border border-basalt-200 p-3" data-testid="clearance-point">
+                <div className="flex flex-wrap items-start justify-between gap-2">
+                  <div>
+                    <p className="font-semibold">{c.label}</p>
+                    <p className="text-sm text-basalt-600">
+                      {CLEARANCE_DIRECTION_LABEL[c.direction]} · {SUSPENSION_STATE_LABEL[c.suspensionState]} · {bothUnits(c.distanceMm)} (entered as {c.distanceText})
+                    </p>
+                    <p className="text-xs text-basalt-500">Measured with {setupLine(c.measuredSetup)}</p>
+                  </div>
+                  <DeletePoint vehicleId={id} clearanceId={c.id} label={c.label} />
+                </div>
+                <div className="mt-2">
+                  <PhotoDrop vehicleId={id} clearanceId={c.id} label={c.label} photos={photos.filter((p) => p.clearanceId === c.id)} />
+                </div>
+              </li>
+            ))}
+          </ul>
+        )}
+        <AddPoint vehicleId={id} />
+      </Card>
+
+      <PlannedPanel detail={q.data} initialPlanned={initialPlanned} />
+    </div>
+  );
+}
+
+function DeletePoint({ vehicleId, clearanceId, label }: { vehicleId: string; clearanceId: string; label: string }) {
+  const qc = useQueryClient();
+  const m = useMutation({
+    mutationFn: () => api(`/api/vehicles/${vehicleId}/clearances/${clearanceId}`, { method: "DELETE" }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: ["vehicle", vehicleId] }),
+  });
+  return (
+    <Button variant="ghost" className="no-print min-h-8 px-2 py-1 text-xs" pending={m.isPending} onClick={() => m.mutate()} aria-label={`Delete point ${label}`}>
+      Delete point
+    </Button>
+  );
+}
+
+function AddPoint({ vehicleId }: { vehicleId: string }) {
+  const qc = useQueryClient();
+  const [failure, setFailure] = useState<string | null>(null);
+  const form = useForm<ClearanceFormValues, unknown, ClearanceValues>({
+    resolver: zodResolver(clearanceSchema),
+    defaultValues: { label: "", direction: "inboard", distance: "", unit: "in", suspensionState: "ride-height" },
+  });
+  const { register, handleSubmit, formState, setError, reset, getValues } = form;
+  const e = formState.errors;
+  const onSubmit = handleSubmit(async () => {
+    setFailure(null);
+    try {
+      await api(`/api/vehicles/${vehicleId}/clearances`, { body: getValues() });
+      reset({ ...getValues(), label: "", distance: "" });
+      await qc.invalidateQueries({ queryKey: ["vehicle", vehicleId] });
+    } catch (err) {
+      setFailure(applyFieldErrors(err, setError, ["label", "direction", "distance", "unit", "suspensionState"]));
+    }
+  });
+  const select = (name: "direction" | "suspensionState" | "unit", label: string, options: Record<string, string>) => (
+    <div className="flex flex-col gap-1">
+      <label htmlFor={`f-point-${name}`} className="text-sm font-medium text-basalt-800">{label}</label>
+      <select id={`f-point-${name}`} className="min-h-10 w-full min-w-0 rounded-lg border border-basalt-300 bg-white px-3" {...register(name)} aria-describedby={`f-point-${name}-error`}>
+        {Object.entries(options).map(([v, l]) => <option key={v} value={v}>{l}</option>)}
+      </select>
+      <p id={`f-point-${name}-error`} aria-live="polite" className="text-sm text-contact-600">{e[name]?.message}</p>
+    </div>
+  );
+  return (
+    <form onSubmit={onSubmit} noValidate className="no-print mt-5 border-t border-basalt-100 pt-4">
+      <h3 className="font-semibold">Add a measured point</h3>
+      <div aria-live="assertive">{failure && <Alert tone="error" className="mt-2">{failure}</Alert>}</div>
+      <div className="mt-2 grid grid-cols-[minmax(0,1fr)] gap-3 sm:grid-cols-2 lg:grid-cols-3">
+        <TextField id="f-point-label" label="Point" hint='e.g. "frame rail, full left lock"' {...register("label")} error={e.label?.message} />
+        {select("direction", "Direction", CLEARANCE_DIRECTION_LABEL)}
+        {select("suspensionState", "Suspension state", SUSPENSION_STATE_LABEL)}
+        <TextField id="f-point-distance" label="Distance" hint="e.g. 1-1/2, 1.5 in or 38 mm" {...register("distance")} error={e.distance?.message} />
+        {select("unit", "Unit (when the distance has none)", { in: "inches", mm: "millimetres" })}
+      </div>
+      <p className="mt-1 text-xs text-basalt-500">Recorded as measured with the current setup.</p>
+      <Button type="submit" className="mt-3" pending={formState.isSubmitting}>Add point</Button>
+    </form>
+  );
+}

@@ -1,0 +1,34 @@
+import { z } from "zod";
+import { db } from "@/lib/db";
+import { notFound } from "@/lib/http/errors";
+import { route } from "@/lib/http/route";
+import { photoStore } from "@/lib/photos/s3";
+import { deletePhoto, findVisiblePhoto } from "@/lib/server/garage";
+import { GARAGE_ACCESS } from "@/lib/garage/access";
+
+const params = z.object({ id: z.uuid() });
+const query = z.object({ variant: z.enum(["full", "thumb"]).default("full") });
+
+/**
+ * The image bytes, for the owner (and admins) only. Clients name a photo by id; object keys never
+ * leave the server and are never taken from a request.
+ */
+export const GET = route({ access: GARAGE_ACCESS, params, query }, async ({ caller, params, query }) => {
+  const photo = await findVisiblePhoto(db, caller, params.id);
+  if (!photo) throw notFound("That photo");
+  const obj = await photoStore().get(query.variant === "thumb" ? photo.thumb_key : photo.object_key);
+  if (!obj) throw notFound("That photo");
+  return new Response(Buffer.from(obj.body), {
+    headers: {
+      "Content-Type": query.variant === "thumb" ? "image/webp" : photo.content_type,
+      "Cache-Control": "private, max-age=300",
+      "X-Content-Type-Options": "nosniff",
+      "Content-Disposition": "inline",
+    },
+  });
+});
+
+export const DELETE = route({ access: GARAGE_ACCESS, params }, async ({ caller, params }) => {
+  if (!(await deletePhoto(db, photoStore(), caller.userId, params.id))) throw notFound("That photo");
+  return { ok: true };
+});

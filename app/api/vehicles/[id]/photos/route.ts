@@ -1,0 +1,62 @@
+import { z } from "zod";
+import { db, isDatabaseUnavailable } from "@/lib/db";
+import { HttpError, notFound } from "@/lib/http/errors";
+import { json, route } from "@/lib/http/route";
+import { ImageRejected, MAX_PHOTO_BYTES, processImage, safeDisplayName } from "@/lib/photos/image";
+import { photoStore } from "@/lib/photos/s3";
+import { addPhoto, clearanceBelongs, findVehicle } from "@/lib/server/garage";
+import { GARAGE_ACCESS } from "@/lib/garage/access";
+
+const params = z.object({ id: z.uuid() });
+/** Room for the multipart boundaries and the other fields around a file at the limit. */
+const FORM_OVERHEAD = 64 * 1024;
+const tooBig = () => new HttpError(413, "That file is larger than 10 MB. Resize it or pick a smaller one.");
+
+/**
+ * Multipart upload: `file` (JPEG, PNG or WebP, ≤ 10 MB) and optionally `clearanceId`. The size
+ * is refused from Content-Length before anything is read; the type is taken from the bytes.
+ */
+export const POST = route({ access: GARAGE_ACCESS, params }, async ({ caller, params, req }) => {
+  const declared = Number(req.headers.get("content-length") ?? "0");
+  if (declared > MAX_PHOTO_BYTES + FORM_OVERHEAD) throw tooBig();
+  const vehicle = await findVehicle(db, caller.userId, params.id);
+  if (!vehicle) throw notFound("That vehicle");
+  if (!(req.headers.get("content-type") ?? "").toLowerCase().startsWith("multipart/form-data")) {
+    throw new HttpError(415, "Send the photo as multipart/form-data with a field named file.");
+  }
+  let form: FormData;
+  try {
+    form = await req.formData();
+  } catch {
+    throw new HttpError(400, "The upload could not be read as a form. Try again.");
+  }
+  const file = form.get("file");
+  if (!(file instanceof File)) throw new HttpError(422, "Choose a photo to upload.", { file: ["Choose a photo to upload."] });
+  if (file.size > MAX_PHOTO_BYTES) throw tooBig();
+  if (file.size === 0) throw new HttpError(422, "That file is empty.", { file: ["That file is empty."] });
+  const name = safeDisplayName(file.name);
+  if (name === null) {
+    throw new HttpError(422, "The file name must not contain folders, \"..\" or control characters.", { file: ["Rename the file without slashes or \"..\"."] });
+  }
+  const rawClearance = form.get("clearanceId");
+  let clearanceId: string | null = null;
+  if (typeof rawClearance === "string" && rawClearance !== "") {
+    if (!z.uuid().safeParse(rawClearance).success || !(await clearanceBelongs(db, vehicle.id, rawClearance))) throw notFound("That clearance point");
+    clearanceId = rawClearance;
+  }
+  let image;
+  try {
+    image = await processImage(Buffer.from(await file.arrayBuffer()));
+  } catch (e) {
+    if (e instanceof ImageRejected) throw new HttpError(415, e.message, { file: [e.message] });
+    throw e;
+  }
+  try {
+    const photo = await addPhoto(db, photoStore(), { vehicleId: vehicle.id, clearanceId, image, name });
+    return json({ photo }, 201);
+  } catch (e) {
+    if (e instanceof HttpError || isDatabaseUnavailable(e)) throw e;
+    console.error("photo upload: storing failed, nothing kept:", e);
+    throw new HttpError(503, "The photo store did not answer; nothing was saved. Try again in a moment.");
+  }
+});

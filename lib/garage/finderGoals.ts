@@ -1,0 +1,78 @@
+/**
+ * The finder's goals, as a form and the route to the engine's constraints. The bolt pattern
+ * comes from the vehicle; the inner limit from its measured inboard points (clearanceLimits).
+ */
+import { z } from "zod";
+import { type ClearanceLimits, type FitmentConstraints, DEFAULT_WHEEL_WIDTHS_IN, clearanceLimits, setupGeometry } from "@/lib/fitment";
+import type { VehicleClearance, Vehicle } from "@/lib/garage/types";
+import { marginSchema } from "@/lib/validation/garage";
+import { optionalLengthField, toEngineSetup } from "@/lib/validation/setup";
+
+const diameter = (label: string) => optionalLengthField(label, "in", { min: 300, max: 2000 }, "35 in", "mm");
+
+export const finderGoalsSchema = z
+  .object({
+    targetDiameterMm: diameter("the target diameter"),
+    minDiameterMm: diameter("the smallest diameter"),
+    maxDiameterMm: diameter("the largest diameter"),
+    wheelDiameters: z
+      .string()
+      .trim()
+      .max(60, "List at most a few wheel diameters (e.g. 17, 18).")
+      .transform((v, ctx) => {
+        if (!v) return null;
+        const parts = v.split(/[\s,;]+/).filter(Boolean);
+        const nums = parts.map(Number);
+        if (nums.some((n) => !Number.isFinite(n) || n < 8 || n > 30)) {
+          ctx.addIssue({ code: "custom", message: "List wheel diameters in inches between 8 and 30, e.g. 17, 18." });
+          return z.NEVER;
+        }
+        return [...new Set(nums)];
+      }),
+    maxPokeMm: optionalLengthField("the most extra poke", "mm", { min: -200, max: 300 }, "25 mm"),
+    useInnerLimit: z.boolean(),
+    minWidthIn: optionalLengthField("the narrowest rim", "in", { min: 3, max: 20 }, "8"),
+    maxWidthIn: optionalLengthField("the widest rim", "in", { min: 3, max: 20 }, "10"),
+    margin: marginSchema,
+  })
+  .superRefine((g, ctx) => {
+    if (g.minDiameterMm !== null && g.maxDiameterMm !== null && g.minDiameterMm > g.maxDiameterMm) {
+      ctx.addIssue({ code: "custom", path: ["maxDiameterMm"], message: "The largest diameter must not be below the smallest." });
+    }
+    if (g.minWidthIn !== null && g.maxWidthIn !== null && g.minWidthIn > g.maxWidthIn) {
+      ctx.addIssue({ code: "custom", path: ["maxWidthIn"], message: "The widest rim must not be narrower than the narrowest." });
+    }
+  });
+export type FinderGoalsForm = z.input<typeof finderGoalsSchema>;
+export type FinderGoals = z.output<typeof finderGoalsSchema>;
+
+export interface FinderPlan {
+  constraints: FitmentConstraints;
+  wheelWidthsIn: number[] | undefined;
+  limits: ClearanceLimits;
+  currentOuterSwingMm: number;
+}
+
+/** The engine's constraints for these goals on this vehicle. */
+export function finderPlan(goals: FinderGoals, vehicle: Vehicle, clearances: VehicleClearance[]): FinderPlan {
+  const current = setupGeometry(toEngineSetup(vehicle.currentSetup));
+  const limits = clearanceLimits(
+    clearances.map((c) => ({ direction: c.direction, distanceMm: c.distanceMm, measuredWith: toEngineSetup(c.measuredSetup) })),
+    { marginMm: goals.margin },
+  );
+  const constraints: FitmentConstraints = { boltPattern: vehicle.boltPattern };
+  if (goals.targetDiameterMm !== null) constraints.targetDiameterMm = goals.targetDiameterMm;
+  if (goals.minDiameterMm !== null) constraints.minDiameterMm = goals.minDiameterMm;
+  if (goals.maxDiameterMm !== null) constraints.maxDiameterMm = goals.maxDiameterMm;
+  if (goals.wheelDiameters) constraints.wheelDiametersIn = goals.wheelDiameters;
+  if (goals.maxPokeMm !== null) constraints.maxOuterSwingMm = Math.max(0, current.outerSwingMm + goals.maxPokeMm);
+  if (goals.useInnerLimit && limits.maxInnerSwingMm !== null) constraints.maxInnerSwingMm = Math.max(0, limits.maxInnerSwingMm);
+  let widths: number[] | undefined;
+  if (goals.minWidthIn !== null || goals.maxWidthIn !== null) {
+    const lo = goals.minWidthIn ?? 0;
+    const hi = goals.maxWidthIn ?? 99;
+    widths = DEFAULT_WHEEL_WIDTHS_IN.filter((w) => w >= lo - 1e-9 && w <= hi + 1e-9);
+    if (widths.length === 0) widths = [lo];
+  }
+  return { constraints, wheelWidthsIn: widths, limits, currentOuterSwingMm: current.outerSwingMm };
+}

@@ -1,0 +1,29 @@
+/** Display helpers for the garage: every number still comes from the engine. */
+import { formatLength, inToMm } from "@/lib/fitment";
+
+/** "38.1 mm (1-1/2 in)". */
+export function bothUnits(mm: number): string {
+  return `${formatLength(mm, { unit: "mm" })} (${formatLength(mm, { unit: "in", fraction: 16 })})`;
+}
+
+/** "+14.5 mm" / "−10 mm" with a sign, for changes. */
+export function signedMm(mm: number): string {
+  const t = formatLength(Math.abs(mm), { unit: "mm" });
+  if (Math.abs(mm) < 0.05) return "±0 mm";
+  return `${mm > 0 ? "+" : "−"}${t}`;
+}
+
+/** A short line for a setup, e.g. "265/70R17 on 17x8, offset +25 mm". */
+export function setupLine(s: {
+  tire: string;
+  wheelDiameterIn: number;
+  wheelWidthIn: number;
+  position: { mode: "offset"; offsetMm: number } | { mode: "backspacing"; backspacingIn: number; reference: "flange" | "bead-seat"; flangeIn: number };
+  spacerMm: number;
+}): string {
+  const pos =
+    s.position.mode === "offset"
+      ? `offset ${s.position.offsetMm > 0 ? "+" : ""}${s.position.offsetMm} mm`
+      : `${formatLength(inToMm(s.position.backspacingIn), { unit: "in", fraction: 16 })} backspacing to the ${s.position.reference === "flange" ? "flange edge" : "bead seat"}`;
+  return `${s.tire} on ${s.wheelDiameterIn}x${s.wheelWidthIn}, ${pos}${s.spacerMm ? `, ${s.spacerMm} mm spacer` : ""}`;
+}

@@ -1,0 +1,54 @@
+/** What the garage API returns (camelCase, ISO dates); shared by server and client. */
+import type { FrontSuspension } from "@/lib/db/types";
+import type { SetupValues } from "@/lib/validation/setup";
+
+export interface Vehicle {
+  id: string;
+  name: string;
+  year: number | null;
+  make: string | null;
+  model: string | null;
+  trim: string | null;
+  frontSuspension: FrontSuspension;
+  boltPattern: string;
+  hubBoreMm: number | null;
+  stockSetup: SetupValues;
+  currentSetup: SetupValues;
+  liftHeightMm: number | null;
+  kingpinInclinationDeg: number | null;
+  axleRatio: number | null;
+  transmissionRatio: number | null;
+  notes: string;
+  createdAt: string;
+  updatedAt: string;
+}
+
+export interface VehicleClearance {
+  id: string;
+  label: string;
+  direction: "inboard" | "outboard" | "upward" | "fore-aft";
+  distanceMm: number;
+  distanceText: string;
+  suspensionState: "ride-height" | "full-stuff" | "full-lock";
+  measuredSetup: SetupValues;
+  createdAt: string;
+}
+
+export interface VehiclePhoto {
+  id: string;
+  clearanceId: string | null;
+  contentType: string;
+  width: number;
+  height: number;
+  bytes: number;
+  name: string;
+  url: string;
+  thumbUrl: string;
+  createdAt: string;
+}
+
+export interface VehicleDetail {
+  vehicle: Vehicle;
+  clearances: VehicleClearance[];
+  photos: VehiclePhoto[];
+}

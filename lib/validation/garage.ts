@@ -1,0 +1,136 @@
+/**
+ * The garage: vehicles, measured clearances, checklists. Shared by the forms and the handlers.
+ */
+import { z } from "zod";
+import { CLEARANCE_DISTANCE_LIMITS_MM, CLEARANCE_MARGIN_LIMITS_MM, parseBoltPattern, parseLength } from "@/lib/fitment";
+import { FRONT_SUSPENSIONS } from "@/lib/db/types";
+import { numberField, optionalLengthField, optionalNumberField, setupSchema } from "./setup";
+
+const text = (label: string, max: number) =>
+  z
+    .string({ error: `Enter ${label}.` })
+    .trim()
+    .max(max, `Use at most ${max} characters for ${label}.`);
+const optionalText = (label: string, max: number) =>
+  z
+    .union([z.null(), text(label, max)])
+    .optional()
+    .transform((v) => (v ? v : null));
+
+export const FRONT_SUSPENSION_LABEL: Record<(typeof FRONT_SUSPENSIONS)[number], string> = {
+  independent: "Independent front suspension",
+  "solid-axle": "Solid front axle",
+};
+
+/** Bolt pattern text, checked by the engine; the output is the engine's normalized text. */
+export const boltPatternField = z
+  .string({ error: "Enter the bolt pattern (e.g. 6x5.5 or 6x139.7)." })
+  .trim()
+  .min(1, "Enter the bolt pattern (e.g. 6x5.5 or 6x139.7).")
+  .max(30, "That bolt pattern is too long (e.g. 6x5.5).")
+  .transform((v, ctx) => {
+    try {
+      return parseBoltPattern(v).text;
+    } catch (e) {
+      ctx.addIssue({ code: "custom", message: e instanceof Error ? e.message : "Not a bolt pattern (e.g. 6x5.5)." });
+      return z.NEVER;
+    }
+  });
+
+export const vehicleSchema = z.object({
+  name: text("a name", 80).min(1, "Give the vehicle a name (e.g. Gravel hauler)."),
+  year: optionalNumberField("the year", { min: 1900, max: 2100 }, "2009", { integer: true }),
+  make: optionalText("the make", 60),
+  model: optionalText("the model", 60),
+  trim: optionalText("the trim", 60),
+  frontSuspension: z.enum(FRONT_SUSPENSIONS, { error: "Choose independent front suspension or a solid front axle." }),
+  boltPattern: boltPatternField,
+  hubBoreMm: optionalLengthField("the hub bore", "mm", { min: 30, max: 250 }, "106.1"),
+  stockSetup: setupSchema,
+  currentSetup: setupSchema,
+  liftHeightMm: optionalLengthField("the lift height", "in", { min: 0, max: 500 }, "2-1/2 in", "mm"),
+  kingpinInclinationDeg: optionalNumberField("the kingpin inclination", { min: 0, max: 30 }, "8", { unit: "°" }),
+  axleRatio: optionalNumberField("the axle ratio", { min: 1, max: 10 }, "3.73"),
+  transmissionRatio: optionalNumberField("the top-gear ratio", { min: 0.3, max: 10 }, "0.72"),
+  notes: z
+    .union([z.null(), text("the notes", 4000)])
+    .optional()
+    .transform((v) => v ?? ""),
+});
+export type VehicleFormValues = z.input<typeof vehicleSchema>;
+export type VehicleValues = z.output<typeof vehicleSchema>;
+
+export const CLEARANCE_DIRECTION_LABEL = {
+  inboard: "Inboard (frame, control arm, spring)",
+  outboard: "Outboard (fender lip, flare)",
+  upward: "Upward (fender, liner)",
+  "fore-aft": "Fore/aft at full lock (bumper, body mount)",
+} as const;
+export const SUSPENSION_STATE_LABEL = { "ride-height": "Ride height", "full-stuff": "Full stuff (compressed)", "full-lock": "Full lock" } as const;
+
+const UNIT_AT_END = /(mm|cm|in|inch|inches|"|''|”)\s*$/i;
+
+/**
+ * A measured gap: text with its unit ("1-1/2 in", "38 mm"), or a bare number with `unit`.
+ * A bare number without a unit is refused — a gap in the wrong unit is worse than none.
+ */
+export const clearanceSchema = z
+  .object({
+    label: text("a label", 120).min(1, 'Name the point (e.g. "frame rail, full left lock").'),
+    direction: z.enum(["inboard", "outboard", "upward", "fore-aft"], { error: "Choose a direction: inboard, outboard, upward or fore/aft at full lock." }),
+    distance: z
+      .union([z.string(), z.number()], { error: "Enter the distance with its unit (e.g. 1-1/2 in or 38 mm)." })
+      .transform((v) => String(v).trim()),
+    unit: z.enum(["in", "mm"], { error: 'The unit must be "in" or "mm".' }).optional(),
+    suspensionState: z.enum(["ride-height", "full-stuff", "full-lock"], { error: "Choose the suspension state: ride height, full stuff or full lock." }),
+    /** The setup fitted when measured; the vehicle's current setup when left out. */
+    measuredSetup: setupSchema.optional(),
+  })
+  .transform((c, ctx) => {
+    if (!c.distance) {
+      ctx.addIssue({ code: "custom", path: ["distance"], message: "Enter the distance with its unit (e.g. 1-1/2 in or 38 mm)." });
+      return z.NEVER;
+    }
+    const hasUnit = UNIT_AT_END.test(c.distance);
+    if (!hasUnit && c.unit === undefined) {
+      ctx.addIssue({ code: "custom", path: ["distance"], message: `Say which unit ${c.distance} is in: write "${c.distance} in" or "${c.distance} mm".` });
+      return z.NEVER;
+    }
+    let mm: number;
+    try {
+      mm = parseLength(c.distance, c.unit ?? "mm");
+    } catch {
+      ctx.addIssue({ code: "custom", path: ["distance"], message: "The distance should look like 1-1/2 in, 1.5 in or 38 mm." });
+      return z.NEVER;
+    }
+    if (mm < CLEARANCE_DISTANCE_LIMITS_MM.min || mm > CLEARANCE_DISTANCE_LIMITS_MM.max) {
+      ctx.addIssue({ code: "custom", path: ["distance"], message: "The distance must be between 0 and 1000 mm (0 when it already touches)." });
+      return z.NEVER;
+    }
+    const shown = hasUnit ? c.distance : `${c.distance} ${c.unit}`;
+    return { label: c.label, direction: c.direction, suspensionState: c.suspensionState, distanceMm: mm, distanceText: shown, measuredSetup: c.measuredSetup };
+  });
+export type ClearanceFormValues = z.input<typeof clearanceSchema>;
+export type ClearanceValues = z.output<typeof clearanceSchema>;
+
+/** The margin a user sets for the predictions (text with unit or a number of mm). */
+export const marginSchema = z
+  .union([z.number(), z.string()])
+  .transform((v, ctx) => {
+    try {
+      return typeof v === "number" ? v : parseLength(v, "in");
+    } catch {
+      ctx.addIssue({ code: "custom", message: "The margin should look like 1/2 in or 12 mm." });
+      return z.NEVER;
+    }
+  })
+  .pipe(z.number().min(CLEARANCE_MARGIN_LIMITS_MM.min, "The margin cannot be negative.").max(CLEARANCE_MARGIN_LIMITS_MM.max, "Keep the margin at most 100 mm."));
+
+const itemId = z.string().regex(/^[a-z0-9:-]{1,80}$/, "Not a checklist item.");
+export const checklistUpdateSchema = z.object({
+  planned: setupSchema,
+  ticked: z.array(itemId).max(200, "Too many items."),
+});
+export type ChecklistUpdate = z.output<typeof checklistUpdateSchema>;
+
+export { numberField };

@@ -1,0 +1,200 @@
+import { randomBytes } from "node:crypto";
+import type { Page } from "playwright-core";
+import sharp from "sharp";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { launch, seriousViolations, shot, signInAs } from "./support/browser";
+import { DEMO, DEMO_PASSWORD } from "./support/http";
+
+let session: Awaited<ReturnType<typeof launch>>;
+let page: Page;
+let vehicleUrl = "";
+const stamp = Date.now().toString(36);
+
+beforeAll(async () => {
+  session = await launch();
+  page = await session.context.newPage();
+});
+afterAll(() => session.close());
+
+async function axeClean(name: string) {
+  await shot(page, name);
+  expect(await seriousViolations(page), `axe on ${page.url()}`).toEqual([]);
+}
+
+/** A noisy PNG (random pixels do not compress, so the upload takes a moment when throttled). */
+async function noisyPng(w: number, h: number): Promise<Buffer> {
+  return sharp(randomBytes(w * h * 3), { raw: { width: w, height: h, channels: 3 } }).png().toBuffer();
+}
+
+describe("the garage in Chromium", () => {
+  it("shows the demo garage with its photos to the member", async () => {
+    await signInAs(page, DEMO.member, DEMO_PASSWORD);
+    await page.getByRole("link", { name: "Garage" }).first().click();
+    await page.waitForURL(/\/garage$/);
+    await expect.poll(() => page.getByRole("link", { name: "Gravel Hauler" }).isVisible()).toBe(true);
+    await axeClean("garage-list");
+    await page.getByRole("link", { name: "Gravel Hauler" }).click();
+    await page.waitForURL(/\/garage\/d4000000-0000-4000-8000-000000000001/);
+    const thumb = page.getByTestId("photo-thumb").first();
+    await expect.poll(() => thumb.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth), { timeout: 15000 }).toBe(360);
+    await axeClean("garage-demo-vehicle");
+  });
+
+  it("creates a vehicle, refusing a bad bolt pattern first", async () => {
+    await page.goto("/garage/new");
+    await page.getByLabel("Name", { exact: true }).fill(`Dune Skiff ${stamp}`);
+    await page.getByLabel("Year").fill("2011");
+    await page.getByLabel("Model").fill("Mid-size pickup");
+    await page.getByLabel("Bolt pattern").fill("5x4.5x1");
+    await page.locator("#f-stockSetup-tire").fill("265/70R17");
+    await page.locator("#f-stockSetup-d").fill("17");
+    await page.locator("#f-stockSetup-w").fill("8");
+    await page.locator("#f-stockSetup-offset").fill("25");
+    await page.getByRole("button", { name: "Copy the stock setup here" }).click();
+    await page.getByLabel("Lift height (in)").fill("2-1/2");
+    await page.getByLabel("Axle ratio").fill("3.73");
+    await page.getByRole("button", { name: "Add vehicle" }).click();
+    await expect.poll(() => page.locator("#f-boltPattern-error").textContent()).toMatch(/not a bolt pattern/);
+    await axeClean("garage-new-errors");
+    await page.getByLabel("Bolt pattern").fill("5x4.5");
+    await expect.poll(() => page.locator("#f-boltPattern-hint").textContent()).toMatch(/5x4\.5 in = 5x114\.3 mm/);
+    await page.getByRole("button", { name: "Add vehicle" }).click();
+    await page.waitForURL(/\/garage\/[0-9a-f-]{36}$/);
+    vehicleUrl = new URL(page.url()).pathname;
+    await expect.poll(() => page.getByRole("heading", { level: 1 }).textContent()).toBe(`Dune Skiff ${stamp}`);
+    await expect.poll(() => page.getByText("5x4.5 in = 5x114.3 mm").isVisible()).toBe(true);
+    // 2-1/2 in = 63.5 mm exactly (NIST SP 811)
+    await expect.poll(() => page.getByText("63.5 mm (2-1/2 in)").isVisible()).toBe(true);
+  });
+
+  it("adds measured points (inches with a fraction from the unit choice, inches in the text)", async () => {
+    await page.locator("#f-point-label").fill("Frame rail, full left lock");
+    await page.locator("#f-point-direction").selectOption("inboard");
+    await page.locator("#f-point-suspensionState").selectOption("full-lock");
+    await page.locator("#f-point-distance").fill("1-1/4");
+    await page.getByRole("button", { name: "Add point" }).click();
+    await expect.poll(() => page.getByTestId("clearance-point").count()).toBe(1);
+    // 1-1/4 in = 31.75 mm, shown to 0.1 mm
+    await expect.poll(() => page.getByTestId("clearance-point").first().textContent()).toMatch(/31\.8 mm \(1-1\/4 in\)/);
+
+    await page.locator("#f-point-label").fill("Bumper corner, full right lock");
+    await page.locator("#f-point-direction").selectOption("fore-aft");
+    await page.locator("#f-point-distance").fill("3/4 in");
+    await page.getByRole("button", { name: "Add point" }).click();
+    await expect.poll(() => page.getByTestId("clearance-point").count()).toBe(2);
+    await axeClean("garage-vehicle-points");
+  });
+
+  it("uploads a photo by the file picker with a progress bar, then shows its thumbnail; a fake image is refused", async () => {
+    const cdp = await session.context.newCDPSession(page);
+    await cdp.send("Network.enable");
+    await cdp.send("Network.emulateNetworkConditions", { offline: false, latency: 20, downloadThroughput: -1, uploadThroughput: 300 * 1024 });
+    const png = await noisyPng(700, 500);
+    expect(png.length).toBeGreaterThan(800 * 1024);
+    const input = page.getByTestId("drop-vehicle").locator('input[type="file"]');
+    await input.setInputFiles({ name: "skiff.png", mimeType: "image/png", buffer: png });
+    await expect.poll(() => page.getByTestId("upload-progress").getAttribute("value"), { timeout: 15000 }).toMatch(/^[1-9]\d?$/);
+    await shot(page, "garage-upload-progress");
+    await cdp.send("Network.emulateNetworkConditions", { offline: false, latency: 0, downloadThroughput: -1, uploadThroughput: -1 });
+    await expect.poll(() => page.getByTestId("upload-message").first().textContent(), { timeout: 30000 }).toMatch(/skiff\.png uploaded/);
+    await expect.poll(() => page.getByAltText("Photo: skiff.png").evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth), { timeout: 15000 }).toBe(360);
+
+    await input.setInputFiles({ name: "not-really.png", mimeType: "image/png", buffer: Buffer.from("this is text, not a picture") });
+    await expect.poll(() => page.getByTestId("upload-message").first().textContent()).toMatch(/not a JPEG, PNG or WebP/);
+    await axeClean("garage-vehicle-photo");
+  });
+
+  it("predicts the points for a planned setup and flags a contact", async () => {
+    await page.locator("#f-planned-tire").fill("35x12.50R17LT");
+    await page.locator("#f-planned-w").fill("9");
+    await page.locator("#f-planned-offset").fill("-12");
+    const table = page.getByTestId("predictions");
+    await expect.poll(() => table.textContent()).toMatch(/Contact/);
+    // The bumper corner: 19.05 mm measured, radius +43.1 mm (D 889.0 vs 802.8 mm) → contact
+    await expect.poll(() => table.locator("tr", { hasText: "Bumper corner" }).textContent()).toMatch(/Contact/);
+    await expect.poll(() => page.url()).toMatch(/pt=35x12\.50R17LT/);
+    const href = await page.getByTestId("open-workspace").getAttribute("href");
+    expect(href).toMatch(/^\/workspace\?ct=265\/70R17&cd=17&cw=8&co=25&pt=35x12\.50R17LT&pd=17&pw=9&po=-12/);
+    await axeClean("garage-vehicle-plan");
+  });
+
+  it("opens the install checklist, ticks an item and keeps it after a reload", async () => {
+    await page.getByRole("link", { name: "Install checklist" }).click();
+    await page.waitForURL(/\/checklist\?/);
+    await expect.poll(() => page.getByText(/Contact at Bumper corner/).isVisible()).toBe(true);
+    await expect.poll(() => page.getByText(/star pattern: 1-3-5-2-4/).isVisible()).toBe(true);
+    await expect.poll(() => page.getByText(/re-check lug torque after the first 50–100 miles/i).isVisible()).toBe(true);
+    const box = page.locator('input[data-item="alignment"]');
+    await box.check();
+    await expect.poll(() => page.getByTestId("checklist-status").textContent()).toMatch(/^1 of \d+ done/);
+    await page.reload();
+    await expect.poll(() => page.locator('input[data-item="alignment"]').isChecked()).toBe(true);
+    await axeClean("garage-checklist");
+    await page.emulateMedia({ media: "print" });
+    await shot(page, "garage-checklist-print");
+    expect(await page.getByRole("button", { name: "Print the checklist" }).isVisible()).toBe(false);
+    await page.emulateMedia({ media: "screen" });
+  });
+
+  it("runs the finder in a worker, sorts and filters, and links a candidate to the workspace", async () => {
+    await page.goto(`${vehicleUrl}/finder`);
+    await page.getByLabel("Target diameter (in)").fill("33");
+    // Typing is never blocked: the field holds every keystroke while searches run.
+    await page.getByLabel("From (in)", { exact: true }).pressSequentially("31", { delay: 30 });
+    await page.getByLabel("To (in)", { exact: true }).pressSequentially("34-1/2", { delay: 30 });
+    expect(await page.getByLabel("To (in)", { exact: true }).inputValue()).toBe("34-1/2");
+    await expect.poll(() => page.getByTestId("finder-summary").textContent(), { timeout: 20000 }).toMatch(/fits among [\d,]+ combinations/);
+    const rows = page.getByTestId("finder-results").locator("tbody tr");
+    await expect.poll(() => rows.count()).toBeGreaterThan(3);
+    await page.getByRole("button", { name: /^Diameter/ }).click();
+    await expect.poll(() => page.locator("th", { hasText: "Diameter" }).getAttribute("aria-sort")).toBe("ascending");
+    await page.getByLabel("Filter by tire size or wheel").fill("17x9");
+    await expect.poll(async () => (await rows.allTextContents()).every((t) => t.includes("17x9"))).toBe(true);
+    await axeClean("garage-finder");
+    const href = (await page.getByTestId("candidate-workspace").first().getAttribute("href")) ?? "";
+    // The workspace page lives on another branch: the link's query is checked here instead.
+    const q = new URL(href, "http://x").searchParams;
+    expect(href.startsWith("/workspace?")).toBe(true);
+    expect(q.get("ct")).toBe("265/70R17");
+    expect(q.get("pd")).toBe("17");
+    expect(q.get("pw")).toBe("9");
+    expect(q.get("po")).toMatch(/^-?\d+$/);
+  });
+
+  it("fits a 375 px phone screen: the vehicle page with a plan, and the finder, scroll only vertically", async () => {
+    const phone = await launch({ width: 375, height: 800 });
+    try {
+      const p = await phone.context.newPage();
+      await signInAs(p, DEMO.member, DEMO_PASSWORD);
+      await p.goto("/garage/d4000000-0000-4000-8000-000000000002?pt=33x12.50R15LT&pd=15&pw=8&pb=3.75&pr=flange");
+      await expect.poll(() => p.getByTestId("predictions").isVisible(), { timeout: 15000 }).toBe(true);
+      expect(await p.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(375);
+      await shot(p, "garage-375-vehicle");
+      expect(await seriousViolations(p)).toEqual([]);
+      await p.goto("/garage/d4000000-0000-4000-8000-000000000002/finder");
+      await expect.poll(() => p.getByTestId("finder-summary").isVisible(), { timeout: 20000 }).toBe(true);
+      expect(await p.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(375);
+    } finally {
+      await phone.close();
+    }
+  });
+
+  it("keeps another member's vehicle out of reach (404 for the admin)", async () => {
+    const other = await launch();
+    try {
+      const p = await other.context.newPage();
+      await signInAs(p, DEMO.admin, DEMO_PASSWORD);
+      // The page streams behind its loading state, so the not-found page arrives with the shell's
+      // status; the API answers a real 404.
+      await p.goto(vehicleUrl);
+      await expect.poll(() => p.getByRole("heading", { name: "Nothing here" }).isVisible()).toBe(true);
+      expect(await p.getByText("Dune Skiff").count()).toBe(0);
+      const api = await p.goto(`/api${vehicleUrl.replace("/garage", "/vehicles")}`);
+      expect(api?.status()).toBe(404);
+      const photo = await p.goto("/api/photos/d4000000-0000-4000-8000-000000000201?variant=thumb");
+      expect(photo?.status()).toBe(200);
+    } finally {
+      await other.close();
+    }
+  });
+});

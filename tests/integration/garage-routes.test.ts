@@ -1,0 +1,368 @@
+import { mkdtempSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { ListObjectsV2Command } from "@aws-sdk/client-s3";
+import { NextRequest } from "next/server";
+import sharp from "sharp";
+import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
+import { startFakeS3 } from "@/scripts/services/fake-s3";
+import { makeS3Client, s3PhotoStore, setPhotoStore, type PhotoStore, type S3Settings } from "@/lib/photos/s3";
+import { rebuild, testDb } from "./support/db";
+
+const session = vi.hoisted(() => ({ current: null as unknown }));
+vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
+
+const db = testDb();
+const dir = mkdtempSync(join(tmpdir(), "hubface-s3-"));
+let s3: Awaited<ReturnType<typeof startFakeS3>>;
+let settings: S3Settings;
+let store: PhotoStore;
+
+const USERS = {
+  ada: { id: "b2000000-0000-4000-8000-000000000001", email: "ada@example.test", name: "Ada Quillfeather", role: "member" },
+  bo: { id: "b2000000-0000-4000-8000-000000000002", email: "bo@example.test", name: "Bo Tarrant", role: "member" },
+  root: { id: "b2000000-0000-4000-8000-000000000003", email: "root@example.test", name: "Rue Admin", role: "admin" },
+  staff: { id: "b2000000-0000-4000-8000-000000000004", email: "staff@example.test", name: "Sy Counter", role: "shop_staff" },
+} as const;
+type Who = keyof typeof USERS;
+const SHOP = "c3000000-0000-4000-8000-000000000001";
+
+function as(who: Who | null) {
+  const u = who ? USERS[who] : null;
+  session.current = u ? { user: { id: u.id, role: u.role, shopId: u.role === "shop_staff" ? SHOP : null, name: u.name, email: u.email } } : null;
+}
+
+beforeAll(async () => {
+  await rebuild(db);
+  await db("shops").insert({ id: SHOP, name: "Test Shop" });
+  for (const u of Object.values(USERS)) await db("users").insert({ ...u, password_hash: "x", shop_id: u.role === "shop_staff" ? SHOP : null });
+  s3 = await startFakeS3({ port: 0, bucket: "test-photos", directory: dir, reset: true });
+  settings = { endpoint: s3.endpoint, bucket: "test-photos", accessKeyId: "S3RVER", secretAccessKey: "S3RVER", region: "us-east-1" };
+  store = s3PhotoStore(settings);
+  setPhotoStore(store);
+});
+afterAll(async () => {
+  setPhotoStore(undefined);
+  await s3.close();
+  rmSync(dir, { recursive: true, force: true });
+  await db.destroy();
+  const { db: appDb } = await import("@/lib/db");
+  await appDb.destroy();
+});
+
+const vehicles = await import("@/app/api/vehicles/route");
+const vehicle = await import("@/app/api/vehicles/[id]/route");
+const clearances = await import("@/app/api/vehicles/[id]/clearances/route");
+const clearance = await import("@/app/api/vehicles/[id]/clearances/[clearanceId]/route");
+const uploads = await import("@/app/api/vehicles/[id]/photos/route");
+const photo = await import("@/app/api/photos/[id]/route");
+
+const ctx = (params: Record<string, string> = {}) => ({ params: Promise.resolve(params) });
+const URL0 = "http://127.0.0.1:3000";
+function req(method: string, path: string, body?: unknown, headers: Record<string, string> = {}) {
+  return new NextRequest(`${URL0}${path}`, {
+    method,
+    body: body === undefined ? undefined : body instanceof FormData ? body : JSON.stringify(body),
+    headers: body === undefined || body instanceof FormData ? headers : { "content-type": "application/json", ...headers },
+  });
+}
+
+async function objectKeys(): Promise<string[]> {
+  const r = await makeS3Client(settings).send(new ListObjectsV2Command({ Bucket: "test-photos" }));
+  return (r.Contents ?? []).map((o) => o.Key!).sort();
+}
+
+const SETUP = { tire: "265/70R17", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 }, spacerMm: 0 };
+const VEHICLE = {
+  name: "Gravel hauler",
+  year: 2009,
+  make: "Generic",
+  model: "Full-size pickup",
+  trim: null,
+  frontSuspension: "independent",
+  boltPattern: "6 on 5.5",
+  hubBoreMm: "106.1",
+  stockSetup: SETUP,
+  currentSetup: { ...SETUP, position: { mode: "backspacing", backspacingIn: "5-3/4", reference: "bead-seat", flangeIn: "1/2" } },
+  liftHeightMm: "2-1/2",
+  kingpinInclinationDeg: 8,
+  axleRatio: 3.73,
+  transmissionRatio: "0.69",
+  notes: "",
+};
+
+async function createAs(who: Who, body: unknown = VEHICLE) {
+  as(who);
+  const res = await vehicles.POST(req("POST", "/api/vehicles", body), ctx());
+  return { res, body: await res.json() };
+}
+
+async function pngWithGps(width = 120, height = 80): Promise<Buffer> {
+  return sharp({ create: { width, height, channels: 3, background: "#2f72a8" } })
+    .jpeg()
+    .withExif({ IFD0: { Artist: "Someone" }, IFD3: { GPSLatitudeRef: "N", GPSLatitude: "51/1 30/1 0/1" } })
+    .toBuffer();
+}
+
+function upload(vehicleId: string, bytes: Buffer | Uint8Array, name: string, extra: Record<string, string> = {}, headers: Record<string, string> = {}) {
+  const form = new FormData();
+  form.set("file", new File([new Uint8Array(bytes)], name, { type: "image/jpeg" }));
+  for (const [k, v] of Object.entries(extra)) form.set(k, v);
+  return uploads.POST(req("POST", `/api/vehicles/${vehicleId}/photos`, form, headers), ctx({ id: vehicleId }));
+}
+
+let adaVehicle: string;
+let adaClearance: string;
+let adaPhoto: string;
+
+describe("vehicles", () => {
+  it("creates a vehicle: bolt pattern normalized by the engine, fractions read as inches", async () => {
+    const { res, body } = await createAs("ada");
+    expect(res.status).toBe(201);
+    adaVehicle = body.vehicle.id;
+    expect(body.vehicle.boltPattern).toBe("6x5.5");
+    // 2-1/2 in = 63.5 mm exactly (1 in = 25.4 mm, NIST SP 811)
+    expect(body.vehicle.liftHeightMm).toBeCloseTo(63.5, 9);
+    expect(body.vehicle.currentSetup.position).toEqual({ mode: "backspacing", backspacingIn: 5.75, reference: "bead-seat", flangeIn: 0.5 });
+    const row = await db("vehicles").where({ id: adaVehicle }).first();
+    expect(row.bolt_pcd_mm).toBeCloseTo(139.7, 9);
+  });
+
+  it("refuses a bad bolt pattern and a tire that does not fit the wheel with field errors, storing nothing", async () => {
+    const before = await db("vehicles").count<{ count: string }[]>();
+    const { res, body } = await createAs("ada", { ...VEHICLE, boltPattern: "6x5.5x2", currentSetup: { ...SETUP, wheelDiameterIn: 18 } });
+    expect(res.status).toBe(422);
+    expect(body.fieldErrors.boltPattern[0]).toMatch(/not a bolt pattern/);
+    expect(body.fieldErrors["currentSetup.wheelDiameterIn"][0]).toMatch(/17 in tire needs a 17 in wheel/);
+    expect(await db("vehicles").count()).toEqual(before);
+  });
+
+  it("lists only the caller's vehicles", async () => {
+    await createAs("bo", { ...VEHICLE, name: "Bo's rig", boltPattern: "5x114.3" });
+    as("ada");
+    const ada = await (await vehicles.GET(req("GET", "/api/vehicles"), ctx())).json();
+    expect(ada.vehicles.map((v: { name: string }) => v.name)).toEqual(["Gravel hauler"]);
+  });
+
+  it("gives 404 — never 403 — for another member's vehicle, on every method", async () => {
+    as("bo");
+    expect((await vehicle.GET(req("GET", `/api/vehicles/${adaVehicle}`), ctx({ id: adaVehicle }))).status).toBe(404);
+    expect((await vehicle.PATCH(req("PATCH", `/api/vehicles/${adaVehicle}`, VEHICLE), ctx({ id: adaVehicle }))).status).toBe(404);
+    expect((await vehicle.DELETE(req("DELETE", `/api/vehicles/${adaVehicle}`), ctx({ id: adaVehicle }))).status).toBe(404);
+    const post = await clearances.POST(
+      req("POST", `/api/vehicles/${adaVehicle}/clearances`, { label: "x", direction: "upward", distance: "1 in", suspensionState: "ride-height" }),
+      ctx({ id: adaVehicle }),
+    );
+    expect(post.status).toBe(404);
+    expect((await db("vehicles").where({ id: adaVehicle }).first()).name).toBe("Gravel hauler");
+    expect(await db("vehicle_clearances").count()).toEqual([{ count: "0" }]);
+    // admins keep their own garage; they cannot open a member's vehicle
+    as("root");
+    expect((await vehicle.GET(req("GET", `/api/vehicles/${adaVehicle}`), ctx({ id: adaVehicle }))).status).toBe(404);
+    // shop accounts have no garage; anonymous callers must sign in
+    as("staff");
+    expect((await vehicles.GET(req("GET", "/api/vehicles"), ctx())).status).toBe(403);
+    as(null);
+    expect((await vehicles.GET(req("GET", "/api/vehicles"), ctx())).status).toBe(401);
+    as("ada");
+    expect((await vehicle.GET(req("GET", "/api/vehicles/not-a-uuid"), ctx({ id: "not-a-uuid" }))).status).toBe(404);
+  });
+
+  it("updates the owner's vehicle", async () => {
+    as("ada");
+    const res = await vehicle.PATCH(req("PATCH", `/api/vehicles/${adaVehicle}`, { ...VEHICLE, name: "Gravel hauler II", boltPattern: "6x139.7" }), ctx({ id: adaVehicle }));
+    expect(res.status).toBe(200);
+    expect((await res.json()).vehicle).toMatchObject({ name: "Gravel hauler II", boltPattern: "6x139.7" });
+  });
+});
+
+describe("measured clearances", () => {
+  const post = (body: unknown) => clearances.POST(req("POST", `/api/vehicles/${adaVehicle}/clearances`, body), ctx({ id: adaVehicle }));
+
+  it("refuses a distance with no unit, with a message, and stores nothing", async () => {
+    as("ada");
+    const res = await post({ label: "frame rail, full left lock", direction: "inboard", distance: "38", suspensionState: "full-lock" });
+    expect(res.status).toBe(422);
+    expect((await res.json()).fieldErrors.distance[0]).toMatch(/Say which unit 38 is in/);
+    expect(await db("vehicle_clearances").count()).toEqual([{ count: "0" }]);
+  });
+
+  it("stores inches with a fraction as mm (1-1/2 in = 38.1 mm), with the current setup as the measured setup", async () => {
+    as("ada");
+    const res = await post({ label: "frame rail, full left lock", direction: "inboard", distance: "1-1/2 in", suspensionState: "full-lock" });
+    expect(res.status).toBe(201);
+    const c = (await res.json()).clearance;
+    adaClearance = c.id;
+    expect(c.distanceMm).toBeCloseTo(38.1, 9);
+    expect(c.measuredSetup.position.mode).toBe("backspacing");
+    const mm = await post({ label: "fender lip", direction: "outboard", distance: 22, unit: "mm", suspensionState: "ride-height" });
+    expect((await mm.json()).clearance).toMatchObject({ distanceMm: 22, distanceText: "22 mm" });
+  });
+
+  it("refuses an unknown direction and a negative gap", async () => {
+    as("ada");
+    const res = await post({ label: "x", direction: "sideways", distance: "-3 mm", suspensionState: "ride-height" });
+    expect(res.status).toBe(422);
+    const body = await res.json();
+    expect(Object.keys(body.fieldErrors)).toContain("direction");
+  });
+});
+
+describe("photo uploads", () => {
+  it("stores a JPEG without its EXIF/GPS, with a thumbnail, visible to the owner and admins only", async () => {
+    const original = await pngWithGps(640, 400);
+    expect((await sharp(original).metadata()).exif).toBeDefined();
+    as("ada");
+    const res = await upload(adaVehicle, original, "driver side.jpg", { clearanceId: adaClearance });
+    expect(res.status).toBe(201);
+    const p = (await res.json()).photo;
+    adaPhoto = p.id;
+    expect(p).toMatchObject({ clearanceId: adaClearance, contentType: "image/jpeg", width: 640, height: 400, name: "driver side.jpg" });
+    expect(p.url).toBe(`/api/photos/${p.id}`);
+
+    const full = await photo.GET(req("GET", p.url), ctx({ id: p.id }));
+    expect(full.status).toBe(200);
+    expect(full.headers.get("content-type")).toBe("image/jpeg");
+    const bytes = Buffer.from(await full.arrayBuffer());
+    const meta = await sharp(bytes).metadata();
+    expect(meta.exif).toBeUndefined();
+    expect(bytes.includes(Buffer.from("Someone"))).toBe(false);
+    const thumb = await photo.GET(req("GET", `${p.url}?variant=thumb`), ctx({ id: p.id }));
+    expect(thumb.headers.get("content-type")).toBe("image/webp");
+    expect((await sharp(Buffer.from(await thumb.arrayBuffer())).metadata()).width).toBe(360);
+    expect(await objectKeys()).toHaveLength(2);
+
+    as("bo");
+    expect((await photo.GET(req("GET", p.url), ctx({ id: p.id }))).status).toBe(404);
+    expect((await photo.DELETE(req("DELETE", p.url), ctx({ id: p.id }))).status).toBe(404);
+    as("root");
+    expect((await photo.GET(req("GET", p.url), ctx({ id: p.id }))).status).toBe(200);
+    expect((await photo.DELETE(req("DELETE", p.url), ctx({ id: p.id }))).status).toBe(404);
+    as(null);
+    expect((await photo.GET(req("GET", p.url), ctx({ id: p.id }))).status).toBe(401);
+    expect(await objectKeys()).toHaveLength(2);
+  });
+
+  async function rejected(res: Response, status: number, message: RegExp) {
+    expect(res.status).toBe(status);
+    expect((await res.json()).error).toMatch(message);
+    expect(await db("vehicle_photos").count()).toEqual([{ count: "1" }]);
+    expect(await objectKeys()).toHaveLength(2);
+  }
+
+  it("refuses a file whose bytes are not an image, whatever its name says", async () => {
+    as("ada");
+    await rejected(await upload(adaVehicle, Buffer.from("GIF89a not what it claims"), "sneaky.jpg"), 415, /not a JPEG, PNG or WebP/);
+    await rejected(await upload(adaVehicle, Buffer.from([0xff, 0xd8, 0xff, 0x00, 1, 2, 3]), "broken.jpg"), 415, /could not be read/);
+  });
+
+  it("refuses an oversized file from its Content-Length before reading, and from its size", async () => {
+    as("ada");
+    const small = await pngWithGps();
+    await rejected(await upload(adaVehicle, small, "a.jpg", {}, { "content-length": String(11 * 1024 * 1024) }), 413, /larger than 10 MB/);
+    const big = Buffer.concat([small, Buffer.alloc(10 * 1024 * 1024 + 1 - small.length)]);
+    await rejected(await upload(adaVehicle, big, "big.jpg"), 413, /larger than 10 MB/);
+  });
+
+  it("refuses a path-traversal file name", async () => {
+    as("ada");
+    const img = await pngWithGps();
+    await rejected(await upload(adaVehicle, img, "../../etc/passwd.jpg"), 422, /must not contain folders/);
+    await rejected(await upload(adaVehicle, img, "..\\windows.jpg"), 422, /must not contain folders/);
+  });
+
+  it("refuses uploads to another member's vehicle or clearance point, and object keys as ids", async () => {
+    const img = await pngWithGps();
+    as("bo");
+    await rejected(await upload(adaVehicle, img, "x.jpg"), 404, /vehicle was not found/);
+    const bos = (await db("vehicles").where({ user_id: USERS.bo.id }).first()).id as string;
+    await rejected(await upload(bos, img, "x.jpg", { clearanceId: adaClearance }), 404, /clearance point was not found/);
+    const key = (await db("vehicle_photos").first()).object_key as string;
+    const enc = encodeURIComponent(key);
+    expect((await photo.GET(req("GET", `/api/photos/${enc}`), ctx({ id: key }))).status).toBe(404);
+    as("ada");
+    expect((await photo.GET(req("GET", `/api/photos/${enc}`), ctx({ id: key }))).status).toBe(404);
+  });
+
+  it("refuses a body that is not multipart, and a form without a file", async () => {
+    as("ada");
+    const json = await uploads.POST(req("POST", `/api/vehicles/${adaVehicle}/photos`, { file: "x" }), ctx({ id: adaVehicle }));
+    await rejected(json, 415, /multipart/);
+    const form = new FormData();
+    form.set("note", "nothing");
+    await rejected(await uploads.POST(req("POST", `/api/vehicles/${adaVehicle}/photos`, form), ctx({ id: adaVehicle })), 422, /Choose a photo/);
+  });
+
+  it("leaves nothing behind when the store fails halfway", async () => {
+    let puts = 0;
+    setPhotoStore({
+      ...store,
+      async put(key, body, type) {
+        if (++puts === 2) throw new Error("store went away");
+        return store.put(key, body, type);
+      },
+    });
+    try {
+      as("ada");
+      const res = await upload(adaVehicle, await pngWithGps(), "half.jpg");
+      expect(res.status).toBe(503);
+      expect((await res.json()).error).toMatch(/nothing was saved/);
+      expect(await db("vehicle_photos").count()).toEqual([{ count: "1" }]);
+      expect(await objectKeys()).toHaveLength(2);
+    } finally {
+      setPhotoStore(store);
+    }
+  });
+
+  it("deleting a clearance point deletes its photos' objects; deleting a vehicle deletes all of them", async () => {
+    as("ada");
+    const second = await upload(adaVehicle, await pngWithGps(), "whole truck.png");
+    expect(second.status).toBe(201);
+    expect(await objectKeys()).toHaveLength(4);
+    const del = await clearance.DELETE(req("DELETE", `/api/vehicles/${adaVehicle}/clearances/${adaClearance}`), ctx({ id: adaVehicle, clearanceId: adaClearance }));
+    expect(del.status).toBe(200);
+    expect(await db("vehicle_photos").where({ id: adaPhoto }).first()).toBeUndefined();
+    expect(await objectKeys()).toHaveLength(2);
+    const res = await vehicle.DELETE(req("DELETE", `/api/vehicles/${adaVehicle}`), ctx({ id: adaVehicle }));
+    expect(res.status).toBe(200);
+    expect(await objectKeys()).toEqual([]);
+    expect(await db("vehicle_photos").count()).toEqual([{ count: "0" }]);
+    expect(await db("vehicle_clearances").where({ vehicle_id: adaVehicle }).count()).toEqual([{ count: "0" }]);
+  });
+});
+
+describe("install checklists", () => {
+  const checklist = () => import("@/app/api/vehicles/[id]/checklist/route");
+  const PLANNED = { tire: "35x12.50R17LT", wheelDiameterIn: 17, wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 }, spacerMm: 0 };
+  const Q = "pt=35x12.50R17LT&pd=17&pw=9&po=-12";
+
+  it("saves ticks per vehicle + planned setup, refuses unknown items, and is owner-scoped", async () => {
+    const { GET, PUT } = await checklist();
+    const { body } = await createAs("ada");
+    const id = body.vehicle.id as string;
+    as("ada");
+    const first = await (await GET(req("GET", `/api/vehicles/${id}/checklist?${Q}`), ctx({ id }))).json();
+    expect(first.ticked).toEqual([]);
+    expect(first.comparisonId).toBeNull();
+    expect(first.items.map((i: { id: string }) => i.id)).toEqual(expect.arrayContaining(["regear", "speedometer", "lug-torque", "lug-recheck", "beadlock"]));
+
+    const bad = await PUT(req("PUT", `/api/vehicles/${id}/checklist`, { planned: PLANNED, ticked: ["regear", "made-up"] }), ctx({ id }));
+    expect(bad.status).toBe(422);
+    expect((await bad.json()).fieldErrors.ticked[0]).toMatch(/made-up/);
+    expect(await db("install_checklists").count()).toEqual([{ count: "0" }]);
+
+    const ok = await PUT(req("PUT", `/api/vehicles/${id}/checklist`, { planned: PLANNED, ticked: ["regear", "alignment", "regear"] }), ctx({ id }));
+    expect(ok.status).toBe(200);
+    expect((await ok.json()).ticked).toEqual(["regear", "alignment"]);
+    const again = await (await GET(req("GET", `/api/vehicles/${id}/checklist?${Q}`), ctx({ id }))).json();
+    expect(again.ticked).toEqual(["regear", "alignment"]);
+    const other = await (await GET(req("GET", `/api/vehicles/${id}/checklist?pt=37x12.50R17LT&pd=17&pw=9&po=-12`), ctx({ id }))).json();
+    expect(other.ticked).toEqual([]);
+    expect((await GET(req("GET", `/api/vehicles/${id}/checklist`), ctx({ id }))).status).toBe(400);
+
+    as("bo");
+    expect((await GET(req("GET", `/api/vehicles/${id}/checklist?${Q}`), ctx({ id }))).status).toBe(404);
+    expect((await PUT(req("PUT", `/api/vehicles/${id}/checklist`, { planned: PLANNED, ticked: [] }), ctx({ id }))).status).toBe(404);
+    expect((await db("install_checklists").where({ vehicle_id: id }).first()).ticked).toEqual(["regear", "alignment"]);
+  });
+});

@@ -1,0 +1,146 @@
+import { describe, expect, it } from "vitest";
+import { tighteningSequence } from "@/lib/fitment";
+import { buildChecklist } from "@/lib/garage/checklist";
+import { finderGoalsSchema, finderPlan } from "@/lib/garage/finderGoals";
+import { runFinderJob, type FinderReply } from "@/lib/garage/finderJob";
+import { setupFromQuery, setupQuery, workspaceHref } from "@/lib/garage/links";
+import type { Vehicle, VehicleClearance } from "@/lib/garage/types";
+import { clearanceSchema, vehicleSchema } from "@/lib/validation/garage";
+import { type SetupValues, setupSchema } from "@/lib/validation/setup";
+
+const CUR: SetupValues = { tire: "265/70R17", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 }, spacerMm: 0 };
+const PLAN: SetupValues = { tire: "35x12.50R17LT", wheelDiameterIn: 17, wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 }, spacerMm: 0 };
+
+const VEHICLE: Vehicle = {
+  id: "v1", name: "Test rig", year: 2010, make: null, model: null, trim: null, frontSuspension: "solid-axle", boltPattern: "6x5.5", hubBoreMm: 108,
+  stockSetup: CUR, currentSetup: CUR, liftHeightMm: null, kingpinInclinationDeg: null, axleRatio: 3.73, transmissionRatio: 1, notes: "",
+  createdAt: "", updatedAt: "",
+};
+const point = (id: string, direction: VehicleClearance["direction"], distanceMm: number): VehicleClearance => ({
+  id, label: id, direction, distanceMm, distanceText: `${distanceMm} mm`, suspensionState: "ride-height", measuredSetup: CUR, createdAt: "",
+});
+
+describe("setup schema (fractions through the engine's parseLength)", () => {
+  it("reads inch fractions and mm text into the engine's units", () => {
+    const s = setupSchema.parse({
+      tire: "265/70R17", wheelDiameterIn: "17", wheelWidthIn: "8-1/2",
+      position: { mode: "backspacing", backspacingIn: "4-3/4", reference: "flange", flangeIn: "1/2" }, spacerMm: "1 in",
+    });
+    expect(s.wheelWidthIn).toBe(8.5);
+    expect(s.position).toEqual({ mode: "backspacing", backspacingIn: 4.75, reference: "flange", flangeIn: 0.5 });
+    expect(s.spacerMm).toBe(25.4); // 1 in = 25.4 mm exactly (NIST SP 811)
+  });
+
+  it("refuses a wheel that does not match the tire and an offset outside the wheel", () => {
+    const r = setupSchema.safeParse({ ...CUR, wheelDiameterIn: 18, position: { mode: "offset", offsetMm: 190 } });
+    expect(r.success).toBe(false);
+    const paths = r.error!.issues.map((i) => i.path.join("."));
+    expect(paths).toEqual(expect.arrayContaining(["wheelDiameterIn"]));
+  });
+
+  it("normalizes the bolt pattern: 5x4.5 and 5x114.3 are one pattern", () => {
+    const a = vehicleSchema.parse({ name: "A", frontSuspension: "independent", boltPattern: "5 on 4.5", stockSetup: CUR, currentSetup: CUR });
+    expect(a.boltPattern).toBe("5x4.5");
+    expect(a.year).toBeNull();
+    expect(a.notes).toBe("");
+  });
+});
+
+describe("clearance input", () => {
+  it("needs a unit: in the text or given apart", () => {
+    const bare = clearanceSchema.safeParse({ label: "x", direction: "upward", distance: "38", suspensionState: "full-stuff" });
+    expect(bare.success).toBe(false);
+    expect(bare.error!.issues[0]!.message).toMatch(/Say which unit 38 is in/);
+    expect(clearanceSchema.parse({ label: "x", direction: "upward", distance: "1-1/2", unit: "in", suspensionState: "full-stuff" }).distanceMm).toBeCloseTo(38.1, 9);
+    expect(clearanceSchema.parse({ label: "x", direction: "upward", distance: "38 mm", unit: "in", suspensionState: "full-stuff" }).distanceMm).toBe(38);
+  });
+});
+
+describe("links in the workspace's query format", () => {
+  it("matches the workspace's own example encoding", () => {
+    const planned: SetupValues = { ...PLAN, tire: "37x12.50R17LT" };
+    expect(workspaceHref(CUR, planned, { kingpinInclinationDeg: null, axleRatio: 3.73, transmissionRatio: 1 })).toBe(
+      "/workspace?ct=265/70R17&cd=17&cw=8&co=25&pt=37x12.50R17LT&pd=17&pw=9&po=-12",
+    );
+    expect(workspaceHref(CUR, planned, { kingpinInclinationDeg: 8, axleRatio: 4.1, transmissionRatio: 0.7 })).toMatch(/&kpi=8&axle=4\.1&top=0\.7$/);
+  });
+
+  it("round-trips a backspacing setup with spacer", () => {
+    const s: SetupValues = { ...PLAN, position: { mode: "backspacing", backspacingIn: 4.5, reference: "bead-seat", flangeIn: 0.5 }, spacerMm: 12 };
+    const q = setupQuery("p", s);
+    expect(q).toBe("pt=35x12.50R17LT&pd=17&pw=9&pb=4.5&pr=bead&ps=12");
+    expect(setupFromQuery("p", new URLSearchParams(q))).toEqual(s);
+    expect(setupFromQuery("p", new URLSearchParams("pt=nonsense"))).toBeNull();
+  });
+});
+
+describe("finder goals → engine constraints", () => {
+  it("derives the inner limit from the inboard points: 157.5 + 30 − 12.7 = 174.8 mm", () => {
+    const goals = finderGoalsSchema.parse({
+      targetDiameterMm: "35", minDiameterMm: "33", maxDiameterMm: "35-1/2", wheelDiameters: "17, 18", maxPokeMm: "1 in",
+      useInnerLimit: true, minWidthIn: "8", maxWidthIn: "9-1/2", margin: "1/2 in",
+    });
+    const plan = finderPlan(goals, VEHICLE, [point("a", "inboard", 30), point("b", "inboard", 60)]);
+    expect(plan.constraints.maxInnerSwingMm).toBeCloseTo(174.8, 9);
+    expect(plan.constraints.maxOuterSwingMm).toBeCloseTo(107.5 + 25.4, 9);
+    expect(plan.constraints.targetDiameterMm).toBeCloseTo(889, 9);
+    expect(plan.constraints.maxDiameterMm).toBeCloseTo(901.7, 9);
+    expect(plan.constraints.wheelDiametersIn).toEqual([17, 18]);
+    expect(plan.constraints.boltPattern).toBe("6x5.5");
+    expect(plan.wheelWidthsIn).toEqual([8, 8.5, 9, 9.5]);
+  });
+
+  it("refuses reversed ranges", () => {
+    const r = finderGoalsSchema.safeParse({ targetDiameterMm: "", minDiameterMm: "35", maxDiameterMm: "33", wheelDiameters: "", maxPokeMm: "", useInnerLimit: false, minWidthIn: "", maxWidthIn: "", margin: "1/2 in" });
+    expect(r.success).toBe(false);
+  });
+
+  it("the worker job posts progress, then a result within the constraints", () => {
+    const replies: FinderReply[] = [];
+    runFinderJob({ id: 7, constraints: { boltPattern: "6x5.5", minDiameterMm: 850, maxDiameterMm: 900, maxInnerSwingMm: 175 }, limit: 10 }, (r) => replies.push(r));
+    const done = replies.at(-1)!;
+    expect(replies.filter((r) => r.type === "progress").length).toBeGreaterThan(10);
+    expect(done.type).toBe("done");
+    if (done.type !== "done") return;
+    expect(done.id).toBe(7);
+    expect(done.result.results).toHaveLength(10);
+    for (const m of done.result.results) {
+      expect(m.overallDiameterMm).toBeGreaterThanOrEqual(850);
+      expect(m.innerSwingMm).toBeLessThanOrEqual(175);
+    }
+    const bad: FinderReply[] = [];
+    runFinderJob({ id: 8, constraints: { minDiameterMm: 900, maxDiameterMm: 800 } }, (r) => bad.push(r));
+    expect(bad).toEqual([expect.objectContaining({ type: "error", id: 8 })]);
+  });
+});
+
+describe("install checklist", () => {
+  const list = buildChecklist({ vehicle: VEHICLE, clearances: [point("lock", "fore-aft", 25), point("rail", "inboard", 40)], planned: PLAN, marginMm: 12.7 });
+  const byId = (id: string) => list.items.find((i) => i.id === id);
+
+  it("asks for trimming where contact is predicted, by the shortfall", () => {
+    // 35 in = 889 mm tall vs 802.8 mm (ISO 4000-1: D = d + 2H): radius +43.1 mm; 25 − 43.1 = −18.1; shortfall 12.7 + 18.1 = 30.8 mm
+    const trim = byId("trim:lock")!;
+    expect(trim.title).toMatch(/^Contact at lock: gain at least 30\.8 mm/);
+    expect(byId("trim:rail")).toBeUndefined();
+    expect(byId("lift")!.title).toMatch(/30\.8 mm/);
+    expect(byId("lift")!.caution).toMatch(/qualified technician/);
+  });
+
+  it("suggests the regear and the speedometer factor from the engine", () => {
+    // ratio to restore = 3.73 × 889 / 802.8 = 4.13 → nearest common ratio 4.10; factor 889 / 802.8 = 1.107
+    expect(byId("regear")!.title).toBe("Regear from 3.73 to 4.10");
+    expect(byId("speedometer")!.title).toBe("Speedometer correction factor 1.107");
+    expect(byId("speedometer")!.detail).toMatch(/indicated 60 mph is 66\.4 mph/);
+  });
+
+  it("lists lug torque in a star pattern for 6 studs, the re-check, beadlock and pressure cautions", () => {
+    // each bolt is followed by the one most opposite it: on 6 studs bolt 1 is opposite bolt 4
+    expect(byId("lug-torque")!.title).toContain(`star pattern: ${tighteningSequence(6).join("-")}`);
+    expect(tighteningSequence(6).slice(0, 2)).toEqual([1, 4]);
+    expect(byId("lug-recheck")!.title).toMatch(/50–100 miles/);
+    expect(byId("beadlock")!.caution).toMatch(/cage or with a clip-on chuck/);
+    expect(byId("pressure")!.caution).toMatch(/standing clear/);
+    expect(list.items.map((i) => i.id)).toEqual(expect.arrayContaining(["alignment", "spare", "load", "hub-bore", "brakes", "cycle"]));
+  });
+});
