@@ -169,32 +169,6 @@ export interface QuoteRow {
   notes: string;
   public_token_hash: string | null;
   valid_until: Date | null;
-// --- garage ---------------------------------------------------------------------------------
-// Setups are stored as the output of lib/validation/setup.ts (SetupValues).
-
-export const FRONT_SUSPENSIONS = ["independent", "solid-axle"] as const;
-export type FrontSuspension = (typeof FRONT_SUSPENSIONS)[number];
-
-export interface VehicleRow {
-  id: string;
-  user_id: string;
-  name: string;
-  year: number | null;
-  make: string | null;
-  model: string | null;
-  trim: string | null;
-  front_suspension: FrontSuspension;
-  bolt_pattern: string;
-  bolt_pcd_mm: number;
-  bolt_count: number;
-  hub_bore_mm: number | null;
-  stock_setup: unknown;
-  current_setup: unknown;
-  lift_height_mm: number | null;
-  kingpin_inclination_deg: number | null;
-  axle_ratio: number | null;
-  transmission_ratio: number | null;
-  notes: string;
   created_at: Date;
   updated_at: Date;
 }
@@ -237,6 +211,38 @@ export interface PaymentRow {
   status: "open" | "paid";
   created_at: Date;
   paid_at: Date | null;
+}
+
+// --- garage ---------------------------------------------------------------------------------
+// Setups are stored as the output of lib/validation/setup.ts (SetupValues).
+
+export const FRONT_SUSPENSIONS = ["independent", "solid-axle"] as const;
+export type FrontSuspension = (typeof FRONT_SUSPENSIONS)[number];
+
+export interface VehicleRow {
+  id: string;
+  user_id: string;
+  name: string;
+  year: number | null;
+  make: string | null;
+  model: string | null;
+  trim: string | null;
+  front_suspension: FrontSuspension;
+  bolt_pattern: string;
+  bolt_pcd_mm: number;
+  bolt_count: number;
+  hub_bore_mm: number | null;
+  stock_setup: unknown;
+  current_setup: unknown;
+  lift_height_mm: number | null;
+  kingpin_inclination_deg: number | null;
+  axle_ratio: number | null;
+  transmission_ratio: number | null;
+  notes: string;
+  created_at: Date;
+  updated_at: Date;
+}
+
 export interface VehicleClearanceRow {
   id: string;
   vehicle_id: string;
