@@ -1,0 +1,144 @@
+import type { Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { launch, seriousViolations, shot, signInAs } from "./support/browser";
+import { DEMO, DEMO_PASSWORD } from "./support/http";
+import { waitForMail } from "./support/outbox";
+
+let session: Awaited<ReturnType<typeof launch>>;
+let page: Page;
+const stamp = Date.now().toString(36);
+
+beforeAll(async () => {
+  session = await launch();
+  page = await session.context.newPage();
+});
+afterAll(() => session.close());
+
+async function axeClean(name: string) {
+  await shot(page, name);
+  expect(await seriousViolations(page), `axe on ${page.url()}`).toEqual([]);
+}
+
+async function signOut() {
+  await page.getByRole("button", { name: "Sign out" }).click();
+  await page.waitForURL((u) => u.pathname === "/");
+  await expect.poll(() => page.getByRole("link", { name: "Sign in" }).first().isVisible()).toBe(true);
+}
+
+describe("accounts in Chromium", () => {
+  it("shows the start page to a visitor", async () => {
+    await page.goto("/");
+    await expect.poll(() => page.getByRole("heading", { level: 1 }).textContent()).toMatch(/bigger tires/);
+    await axeClean("start-page");
+  });
+
+  it("refuses a malformed sign-up with field messages, then creates the account", async () => {
+    await page.goto("/sign-up");
+    await page.getByLabel("Name").fill("Pell Ravensworth");
+    await page.getByLabel("E-mail").fill("not-an-address");
+    await page.getByLabel("Password").fill("short");
+    await page.getByRole("button", { name: "Create account" }).click();
+    await expect.poll(() => page.locator("#f-email-error").textContent()).toMatch(/e-mail address like/);
+    await expect.poll(() => page.locator("#f-password-error").textContent()).toMatch(/10 characters/);
+    await axeClean("sign-up-errors");
+
+    await page.getByLabel("E-mail").fill(DEMO.member);
+    await page.getByLabel("Password").fill("a long enough password");
+    await page.getByRole("button", { name: "Create account" }).click();
+    await expect.poll(() => page.locator("#f-email-error").textContent()).toMatch(/already exists/);
+
+    await page.getByLabel("E-mail").fill(`pell.${stamp}@example.test`);
+    await page.getByRole("button", { name: "Create account" }).click();
+    await page.waitForURL(/\/account/);
+    await expect.poll(() => page.getByRole("heading", { level: 1 }).textContent()).toBe("Hello, Pell Ravensworth");
+    await axeClean("account-new-member");
+    await signOut();
+  });
+
+  const roles = [
+    { role: "member", email: DEMO.member, sees: [], not: ["Users", "Shop"] },
+    { role: "shop_staff", email: DEMO.shop_staff, sees: ["Shop"], not: ["Users"] },
+    { role: "shop_owner", email: DEMO.shop_owner, sees: ["Shop"], not: ["Users"] },
+    { role: "admin", email: DEMO.admin, sees: ["Users", "Outbox"], not: ["Shop"] },
+  ] as const;
+
+  for (const r of roles) {
+    it(`signs in as the demo ${r.role} and sees what the role allows`, async () => {
+      await signInAs(page, r.email, DEMO_PASSWORD);
+      const nav = page.getByRole("navigation", { name: "Main" });
+      for (const link of r.sees) expect(await nav.getByRole("link", { name: link }).count(), link).toBe(1);
+      for (const link of r.not) expect(await nav.getByRole("link", { name: link }).count(), link).toBe(0);
+      await axeClean(`account-${r.role}`);
+      await page.goto("/admin/users");
+      if (r.role === "admin") {
+        await expect.poll(() => page.getByRole("heading", { level: 1 }).textContent()).toBe("Users and roles");
+      } else {
+        await page.waitForURL(/\/forbidden/);
+      }
+      await axeClean(`admin-users-as-${r.role}`);
+      await signOut();
+    });
+  }
+
+  it("resets a password through the link in the e-mail the fake SMTP server received", async () => {
+    const email = `reset.${stamp}@example.test`;
+    await page.goto("/sign-up");
+    await page.getByLabel("Name").fill("Ilse Carrow");
+    await page.getByLabel("E-mail").fill(email);
+    await page.getByLabel("Password").fill("the first password");
+    await page.getByRole("button", { name: "Create account" }).click();
+    await page.waitForURL(/\/account/);
+    await signOut();
+
+    await page.goto("/forgot-password");
+    await page.getByLabel("E-mail").fill(email);
+    await page.getByRole("button", { name: "Send the reset link" }).click();
+    await expect.poll(() => page.getByRole("status").first().textContent()).toMatch(/on its way/);
+    await axeClean("forgot-password-sent");
+
+    const mail = await waitForMail(email, /Reset your Hubface password/);
+    const link = /(http\S+reset-password\?token=[A-Za-z0-9_-]+)/.exec(mail.text)?.[1];
+    expect(link).toBeDefined();
+    await page.goto(link!);
+    await page.getByLabel("New password", { exact: true }).fill("the second password");
+    await page.getByLabel("Repeat the new password").fill("the second password");
+    await axeClean("reset-password");
+    await page.getByRole("button", { name: "Change password" }).click();
+    await page.waitForURL(/\/sign-in\?reset=1/);
+
+    await signInAs(page, email, "the second password");
+    await expect.poll(() => page.getByRole("heading", { level: 1 }).textContent()).toBe("Hello, Ilse Carrow");
+    await signOut();
+
+    // The link is single-use.
+    await page.goto(link!);
+    await page.getByLabel("New password", { exact: true }).fill("the third password");
+    await page.getByLabel("Repeat the new password").fill("the third password");
+    await page.getByRole("button", { name: "Change password" }).click();
+    await expect.poll(() => page.getByRole("alert").first().textContent()).toMatch(/expired or was already used/);
+  });
+
+  it("locks an account after repeated wrong passwords, with a clear message", async () => {
+    const email = `lock.${stamp}@example.test`;
+    await page.goto("/sign-up");
+    await page.getByLabel("Name").fill("Odo Fenwick");
+    await page.getByLabel("E-mail").fill(email);
+    await page.getByLabel("Password").fill("the right password");
+    await page.getByRole("button", { name: "Create account" }).click();
+    await page.waitForURL(/\/account/);
+    await signOut();
+
+    await page.goto("/sign-in");
+    for (let i = 0; i < 5; i++) {
+      await page.getByLabel("E-mail").fill(email);
+      await page.getByLabel("Password").fill(`wrong password ${i}`);
+      await page.getByRole("button", { name: "Sign in" }).click();
+      await expect.poll(() => page.getByRole("alert").first().textContent()).toMatch(i < 4 ? /do not match/ : /locked/);
+    }
+    // Even the right password is refused while locked.
+    await page.getByLabel("Password").fill("the right password");
+    await page.getByRole("button", { name: "Sign in" }).click();
+    await expect.poll(() => page.getByRole("alert").first().textContent()).toMatch(/locked for \d+ more minute/);
+    await axeClean("sign-in-locked");
+  });
+});
