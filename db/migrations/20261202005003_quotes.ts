@@ -16,7 +16,7 @@ export async function up(knex: Knex): Promise<void> {
   });
   await knex.raw("create index customers_shop_email on customers (shop_id, lower(email))");
 
-  await knex.schema.createTable("vehicles", (t) => {
+  await knex.schema.createTable("customer_vehicles", (t) => {
     t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
     t.uuid("shop_id").notNullable().references("id").inTable("shops").onDelete("CASCADE");
     t.uuid("customer_id").notNullable().references("id").inTable("customers").onDelete("CASCADE");
@@ -36,7 +36,7 @@ export async function up(knex: Knex): Promise<void> {
     t.uuid("shop_id").notNullable().references("id").inTable("shops").onDelete("CASCADE");
     t.integer("number").notNullable();
     t.uuid("customer_id").notNullable().references("id").inTable("customers").onDelete("RESTRICT");
-    t.uuid("vehicle_id").nullable().references("id").inTable("vehicles").onDelete("SET NULL");
+    t.uuid("vehicle_id").nullable().references("id").inTable("customer_vehicles").onDelete("SET NULL");
     t.uuid("created_by").nullable().references("id").inTable("users").onDelete("SET NULL");
     t.text("status").notNullable().defaultTo("draft");
     // The vehicle as quoted (kept even if the saved vehicle changes later).
@@ -127,5 +127,5 @@ export async function up(knex: Knex): Promise<void> {
 }
 
 export async function down(knex: Knex): Promise<void> {
-  for (const t of ["payment_webhook_events", "payments", "quote_events", "quote_lines", "quotes", "vehicles", "customers"]) await knex.schema.dropTable(t);
+  for (const t of ["payment_webhook_events", "payments", "quote_events", "quote_lines", "quotes", "customer_vehicles", "customers"]) await knex.schema.dropTable(t);
 }

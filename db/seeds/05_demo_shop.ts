@@ -79,7 +79,7 @@ export async function seed(knex: Knex): Promise<void> {
     await knex("customers").insert({ ...c, shop_id: DEMO_SHOP.id, phone_digits: c.phone.replace(/\D/g, "") }).onConflict("id").ignore();
   }
   const vehicleId = "e0000000-0000-4000-8000-000000000001";
-  await knex("vehicles")
+  await knex("customer_vehicles")
     .insert({
       id: vehicleId,
       shop_id: DEMO_SHOP.id,

@@ -124,7 +124,8 @@ export interface CustomerRow {
   updated_at: Date;
 }
 
-export interface VehicleRow {
+/** A customer's vehicle as the shop counter keeps it (table customer_vehicles). */
+export interface CustomerVehicleRow {
   id: string;
   shop_id: string;
   customer_id: string;
@@ -278,4 +279,34 @@ export interface InstallChecklistRow {
   ticked: string[];
   created_at: Date;
   updated_at: Date;
+}
+
+/** A saved comparison: the validated input (JSONB) and the key figures computed from it on the server. */
+export interface ComparisonRow {
+  id: string;
+  owner_id: string;
+  /** The garage vehicle it belongs to (foreign key added by 20261202006000). */
+  vehicle_id: string | null;
+  name: string;
+  input: unknown;
+  current_tire: string;
+  planned_tire: string;
+  diameter_change_mm: number;
+  ground_clearance_change_mm: number;
+  poke_change_mm: number;
+  scrub_change_mm: number;
+  speedometer_error_pct: number;
+  suggested_ratio: number;
+  warning_count: number;
+  created_at: Date;
+  updated_at: Date;
+}
+
+/** A public link to a comparison; revoked links keep their row so the slug stays dead. */
+export interface ComparisonShareRow {
+  id: string;
+  comparison_id: string;
+  slug: string;
+  created_at: Date;
+  revoked_at: Date | null;
 }

@@ -1,6 +1,6 @@
 import "server-only";
 import type { Knex } from "knex";
-import type { CustomerRow, VehicleRow } from "@/lib/db/types";
+import type { CustomerRow, CustomerVehicleRow } from "@/lib/db/types";
 import type { CustomerInput } from "@/lib/validation/quotes";
 
 export const phoneDigits = (phone: string) => phone.replace(/\D/g, "");
@@ -43,6 +43,6 @@ export async function getCustomer(db: Knex, shopId: string, id: string): Promise
   return db<CustomerRow>("customers").where({ id, shop_id: shopId }).first();
 }
 
-export async function listVehicles(db: Knex, shopId: string, customerId: string): Promise<VehicleRow[]> {
-  return db<VehicleRow>("vehicles").where({ shop_id: shopId, customer_id: customerId }).orderBy("created_at", "desc");
+export async function listVehicles(db: Knex, shopId: string, customerId: string): Promise<CustomerVehicleRow[]> {
+  return db<CustomerVehicleRow>("customer_vehicles").where({ shop_id: shopId, customer_id: customerId }).orderBy("created_at", "desc");
 }

@@ -187,7 +187,7 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
     let vehicleId: string | null = input.vehicleId ?? null;
     let v: ReturnType<typeof resolveVehicle>;
     if (input.vehicleId) {
-      const saved = await trx("vehicles").where({ id: input.vehicleId, shop_id: shopId, customer_id: input.customerId }).first();
+      const saved = await trx("customer_vehicles").where({ id: input.vehicleId, shop_id: shopId, customer_id: input.customerId }).first();
       if (!saved) throw new HttpError(422, "Some fields need attention.", { vehicleId: ["That vehicle was not found."] });
       v = {
         description: saved.description,
@@ -199,7 +199,7 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
     } else {
       v = resolveVehicle(input.vehicle!);
       if (input.saveVehicle) {
-        const [row] = await trx("vehicles")
+        const [row] = await trx("customer_vehicles")
           .insert({
             shop_id: shopId,
             customer_id: input.customerId,

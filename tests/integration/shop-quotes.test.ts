@@ -103,7 +103,7 @@ describe("quotes", () => {
     // Tax 3416.00 × 8.25 % = 281.82; total 4026.00 + 281.82 = 4307.82; deposit 25 % = 1076.955 → 1076.96.
     expect(d.quote).toMatchObject({ subtotal_cents: 402600, taxable_cents: 341600, tax_cents: 28182, total_cents: 430782, deposit_cents: 107696, status: "draft" });
     expect(d.events).toEqual([expect.objectContaining({ to_status: "draft", actor: "Sam Staff", actor_user_id: U.staffA.id })]);
-    const saved = await db("vehicles").where({ customer_id: customerId });
+    const saved = await db("customer_vehicles").where({ customer_id: customerId });
     expect(saved).toHaveLength(1);
   });
 

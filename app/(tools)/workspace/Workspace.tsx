@@ -1,5 +1,5 @@
 "use client";
-import { useCallback, useEffect, useMemo, useRef, useState } from "react";
+import { type ReactNode, useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { CrossSection } from "@/components/comparison/CrossSection";
 import { DisplayToggle } from "@/components/comparison/DisplayToggle";
 import { LazyComparisonCharts } from "@/components/comparison/LazyComparisonCharts";
@@ -11,6 +11,7 @@ import { type Draft, type DraftErrors, type SetupDraft, draftFromInput, followTi
 import type { DisplayPrefs } from "@/lib/comparison/format";
 import { type ComparisonInput, DEFAULT_INPUT } from "@/lib/comparison/model";
 import { decodeComparison, encodeComparison } from "@/lib/comparison/url";
+import { CurrentInputContext } from "./currentInput";
 import { SetupFields } from "./SetupFields";
 import { VehicleFields } from "./VehicleFields";
 
@@ -41,7 +42,8 @@ function reformat(s: State, prefs: DisplayPrefs): State {
   return { draft, errors: read.errors, good: read.input ?? s.good, prefs };
 }
 
-export function Workspace({ initialInput, initialProblems }: { initialInput: ComparisonInput; initialProblems: string[] }) {
+/** `saveSlot`: controls shown in the toolbar (the save control), reading the comparison through CurrentInputContext. */
+export function Workspace({ initialInput, initialProblems, saveSlot }: { initialInput: ComparisonInput; initialProblems: string[]; saveSlot?: ReactNode }) {
   const [prefs, setPrefs] = useDisplayPrefs();
   const [state, setState] = useState<State>(() => fromInput(initialInput, prefs));
   const [linkNote, setLinkNote] = useState<string | null>(initialProblems.length > 0 ? `Some values in the link were not understood and use defaults: ${initialProblems.join(", ")}.` : null);
@@ -125,6 +127,7 @@ export function Workspace({ initialInput, initialProblems }: { initialInput: Com
   };
 
   return (
+    <CurrentInputContext value={{ input: s.good, complete: errorCount === 0 }}>
     <div className="flex flex-col gap-6">
       <div className="flex flex-wrap items-end justify-between gap-4">
         <DisplayToggle prefs={prefs} onChange={setPrefs} />
@@ -136,6 +139,7 @@ export function Workspace({ initialInput, initialProblems }: { initialInput: Com
           </span>
         </div>
       </div>
+      {saveSlot}
       {linkNote && (
         <p role="status" className="rounded-lg bg-tight-100 px-3 py-2 text-sm text-tight-800">
           {linkNote}
@@ -171,5 +175,6 @@ export function Workspace({ initialInput, initialProblems }: { initialInput: Com
         <SetupDetailTable result={result} prefs={prefs} />
       </div>
     </div>
+    </CurrentInputContext>
   );
 }

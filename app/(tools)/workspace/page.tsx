@@ -1,6 +1,11 @@
 import type { Metadata } from "next";
+import { z } from "zod";
 import { PageHeader } from "@/components/ui/PageHeader";
+import { currentCaller } from "@/lib/auth/session";
 import { decodeComparison } from "@/lib/comparison/url";
+import { db } from "@/lib/db";
+import { getComparison } from "@/lib/server/comparisons";
+import { SaveComparison } from "./SaveComparison";
 import { Workspace } from "./Workspace";
 
 export const metadata: Metadata = {
@@ -8,15 +13,26 @@ export const metadata: Metadata = {
   description: "Your current wheel and tire setup beside the one you plan: diameter, clearance, poke, scrub, track, speedometer and engine speed, with a to-scale drawing.",
 };
 
+/** `saved=<id>`: the saved comparison this link was opened from (the caller's own; anything else is ignored). */
+async function openedFrom(userId: string | undefined, raw: string | string[] | undefined) {
+  const id = z.uuid().safeParse(Array.isArray(raw) ? raw[0] : raw);
+  if (!userId || !id.success) return null;
+  const c = await getComparison(db, userId, id.data).catch(() => undefined);
+  return c ? { id: c.id, name: c.name } : null;
+}
+
 export default async function WorkspacePage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
-  const { input, problems } = decodeComparison(await searchParams);
+  const sp = await searchParams;
+  const { input, problems } = decodeComparison(sp);
+  const caller = await currentCaller().catch(() => null);
+  const saved = await openedFrom(caller?.userId, sp.saved);
   return (
     <>
       <PageHeader
         title="Comparison workspace"
         lead="Enter what you run and what you plan. Every figure updates as you type, in your browser; the link in the address bar reproduces this comparison."
       />
-      <Workspace initialInput={input} initialProblems={problems} />
+      <Workspace initialInput={input} initialProblems={problems} saveSlot={<SaveComparison signedIn={caller !== null} saved={saved} />} />
     </>
   );
 }

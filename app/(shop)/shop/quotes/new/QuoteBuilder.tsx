@@ -10,7 +10,7 @@ import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { TextField } from "@/components/ui/TextField";
 import { ApiError, api, applyFieldErrors } from "@/lib/client/api";
-import type { CatalogItemRow, CustomerRow, VehicleRow } from "@/lib/db/types";
+import type { CatalogItemRow, CustomerRow, CustomerVehicleRow } from "@/lib/db/types";
 import { mmToIn } from "@/lib/fitment";
 import type { FitmentSummary } from "@/lib/quotes/fitment";
 import { formatUsd } from "@/lib/quotes/money";
@@ -231,7 +231,7 @@ function VehicleStep(props: {
 }) {
   const saved = useQuery({
     queryKey: ["shop-customer", props.customerId],
-    queryFn: () => api<{ vehicles: VehicleRow[] }>(`/api/shop/customers/${props.customerId}`).then((r) => r.vehicles),
+    queryFn: () => api<{ vehicles: CustomerVehicleRow[] }>(`/api/shop/customers/${props.customerId}`).then((r) => r.vehicles),
   });
   const { register, handleSubmit, setError, formState, control, reset } = useForm<VehicleInput, unknown, Vehicle>({
     resolver: zodResolver(vehicleSchema),
@@ -248,7 +248,7 @@ function VehicleStep(props: {
       setFailure(applyFieldErrors(err, setError, ["description", "boltPattern", "tireSize", "wheelDiameterIn", "wheelWidthIn", "offsetMm", "backspacingIn", "backspacingFrom", "axleRatio"]));
     }
   });
-  const applySaved = (v: VehicleRow) => {
+  const applySaved = (v: CustomerVehicleRow) => {
     reset({
       description: v.description,
       boltPattern: v.bolt_pattern,

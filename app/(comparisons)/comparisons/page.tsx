@@ -1,0 +1,29 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { buttonClass } from "@/components/ui/Button";
+import { PageHeader } from "@/components/ui/PageHeader";
+import { requirePageCaller } from "@/lib/auth/session";
+import { db } from "@/lib/db";
+import { listComparisons } from "@/lib/server/comparisons";
+import { ComparisonList } from "./ComparisonList";
+
+export const metadata: Metadata = { title: "My comparisons" };
+
+export default async function ComparisonsPage() {
+  const caller = await requirePageCaller("/comparisons");
+  const initial = await listComparisons(db, caller.userId, { sort: "updated" });
+  return (
+    <>
+      <PageHeader
+        title="My comparisons"
+        lead="The comparisons you saved from the workspace. Open one to keep working on it, or share a read-only link for a forum thread."
+        actions={
+          <Link href="/workspace" className={buttonClass("primary")}>
+            New comparison
+          </Link>
+        }
+      />
+      <ComparisonList initial={initial} />
+    </>
+  );
+}

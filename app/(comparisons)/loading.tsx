@@ -1,0 +1,5 @@
+import { PageLoading } from "@/components/feedback/PageLoading";
+
+export default function Loading() {
+  return <PageLoading />;
+}

@@ -1,0 +1,15 @@
+import "server-only";
+import { cache } from "react";
+import { db } from "@/lib/db";
+import { type SharedComparison, findSharedComparison } from "@/lib/server/comparisons";
+import { SHARE_SLUG_RE } from "@/lib/validation/comparisons";
+
+/**
+ * The one database read of a share view: generateMetadata and the page call this with the same
+ * slug and React's cache() makes it one query per render. A slug that cannot be one of ours is
+ * answered without asking the database.
+ */
+export const getSharedComparison = cache(async (slug: string): Promise<SharedComparison | undefined> => {
+  if (!SHARE_SLUG_RE.test(slug)) return undefined;
+  return findSharedComparison(db, slug);
+});

@@ -1,0 +1,129 @@
+import { readFile } from "node:fs/promises";
+import { join } from "node:path";
+import { ImageResponse } from "next/og";
+import type { ComparisonResult, SetupFigures } from "@/lib/comparison/compute";
+import { computeComparison } from "@/lib/comparison/compute";
+import { DEFAULT_PREFS, formatLen, formatLenOther, formatNumber, formatSpeed } from "@/lib/comparison/format";
+import { inToMm } from "@/lib/fitment";
+import { getSharedComparison } from "./data";
+
+/**
+ * The Open Graph image of a shared comparison: a simplified cross-section of both setups at
+ * the hub face (to scale, lower half) and the headline numbers. Fonts are shipped in the
+ * repository (app/fonts/og, WOFF from the @fontsource packages: satori reads WOFF/TTF, not
+ * WOFF2).
+ */
+export const alt = "Cross-section of the current and planned wheel and tire, with the headline changes";
+export const size = { width: 1200, height: 630 };
+export const contentType = "image/png";
+
+const STEEL = "#245a88";
+const EMBER = "#bd460f";
+const INK = "#181b21";
+const PAPER = "#fbf8f3";
+
+let fonts: Promise<{ name: string; data: Buffer; weight: 400 | 600 | 700; style: "normal" }[]> | undefined;
+function loadFonts() {
+  const dir = join(process.cwd(), "app/fonts/og");
+  return (fonts ??= Promise.all([
+    readFile(join(dir, "inter-latin-400-normal.woff")).then((data) => ({ name: "Inter", data, weight: 400 as const, style: "normal" as const })),
+    readFile(join(dir, "inter-latin-600-normal.woff")).then((data) => ({ name: "Inter", data, weight: 600 as const, style: "normal" as const })),
+    readFile(join(dir, "archivo-latin-700-normal.woff")).then((data) => ({ name: "Archivo", data, weight: 700 as const, style: "normal" as const })),
+  ]));
+}
+
+/** One setup as the drawing shows it: tire section between its swings, rim at its radius. */
+function tireShape(f: SetupFigures, sx: (x: number) => number, sy: (y: number) => number, colour: string, dashed: boolean) {
+  const rim = inToMm(f.wheelDiameterIn) / 2;
+  const R = f.overallDiameterMm / 2;
+  const x0 = sx(-f.innerSwingMm);
+  const x1 = sx(f.outerSwingMm);
+  const y0 = sy(rim);
+  const y1 = sy(R);
+  const round = Math.min((x1 - x0) / 4, (y1 - y0) / 3);
+  const dash = dashed ? "10 7" : undefined;
+  return (
+    <g>
+      <rect x={x0} y={y0} width={x1 - x0} height={y1 - y0} rx={round} fill={dashed ? "rgba(226,91,22,0.10)" : "rgba(47,114,168,0.14)"} stroke={colour} strokeWidth={4} strokeDasharray={dash} />
+      {/* rim barrel between the bead seats, and the wheel's centre line */}
+      <line x1={sx(-f.beadSeatInboardMm)} x2={sx(f.beadSeatOutboardMm)} y1={y0} y2={y0} stroke={colour} strokeWidth={6} strokeDasharray={dash} />
+      <line x1={sx(-f.effectiveOffsetMm)} x2={sx(-f.effectiveOffsetMm)} y1={y0 - 6} y2={y1} stroke={colour} strokeWidth={1.5} strokeDasharray="3 5" />
+    </g>
+  );
+}
+
+function Drawing({ r, width, height }: { r: ComparisonResult; width: number; height: number }) {
+  const inner = Math.max(r.current.innerSwingMm, r.planned.innerSwingMm);
+  const outer = Math.max(r.current.outerSwingMm, r.planned.outerSwingMm, r.fenderLineMm ?? 0);
+  const R = Math.max(r.current.overallDiameterMm, r.planned.overallDiameterMm) / 2;
+  const pad = 24;
+  const scale = Math.min((width - 2 * pad) / (inner + outer), (height - 2 * pad) / R);
+  const ox = pad + inner * scale + ((width - 2 * pad) - (inner + outer) * scale) / 2;
+  const sx = (x: number) => Math.round((ox + x * scale) * 10) / 10;
+  const sy = (y: number) => Math.round((pad + y * scale) * 10) / 10;
+  return (
+    <svg width={width} height={height} viewBox={`0 0 ${width} ${height}`}>
+      {tireShape(r.current, sx, sy, STEEL, false)}
+      {tireShape(r.planned, sx, sy, EMBER, true)}
+      <line x1={sx(0)} x2={sx(0)} y1={sy(0)} y2={height - 4} stroke={INK} strokeWidth={3} />
+      <line x1={0} x2={width} y1={sy(r.current.overallDiameterMm / 2)} y2={sy(r.current.overallDiameterMm / 2)} stroke={STEEL} strokeWidth={3} />
+      <line x1={0} x2={width} y1={sy(r.planned.overallDiameterMm / 2)} y2={sy(r.planned.overallDiameterMm / 2)} stroke={EMBER} strokeWidth={3} strokeDasharray="10 7" />
+      {r.fenderLineMm !== null && <line x1={sx(r.fenderLineMm)} x2={sx(r.fenderLineMm)} y1={sy(0)} y2={sy(R)} stroke="#7d1710" strokeWidth={2} strokeDasharray="4 5" />}
+    </svg>
+  );
+}
+
+function Stat({ label, value, sub }: { label: string; value: string; sub: string }) {
+  return (
+    <div style={{ display: "flex", flexDirection: "column", width: 250, marginBottom: 18 }}>
+      <div style={{ fontSize: 20, fontWeight: 600, color: "#56616f", textTransform: "uppercase", letterSpacing: 1 }}>{label}</div>
+      <div style={{ fontFamily: "Archivo", fontSize: 46, fontWeight: 700, color: INK }}>{value}</div>
+      <div style={{ fontSize: 20, color: "#434c58" }}>{sub}</div>
+    </div>
+  );
+}
+
+export default async function OpengraphImage({ params }: { params: Promise<{ slug: string }> }) {
+  const { slug } = await params;
+  const share = await getSharedComparison(slug);
+  if (!share) return new Response("Not found", { status: 404, headers: { "Cache-Control": "no-store" } });
+  const r = computeComparison(share.input);
+  const p = DEFAULT_PREFS;
+  const len = (mm: number) => formatLen(mm, p, { signed: true, decimals: 2 });
+  const h = r.speedometer.headline;
+  return new ImageResponse(
+    (
+      <div style={{ width: "100%", height: "100%", display: "flex", flexDirection: "column", background: PAPER, padding: "40px 56px", fontFamily: "Inter", color: INK }}>
+        <div style={{ display: "flex", justifyContent: "space-between", alignItems: "baseline" }}>
+          <div style={{ fontFamily: "Archivo", fontSize: 30, fontWeight: 700, color: EMBER }}>Hubface</div>
+          <div style={{ fontSize: 22, color: "#56616f" }}>shared comparison</div>
+        </div>
+        <div style={{ fontFamily: "Archivo", fontSize: 50, fontWeight: 700, marginTop: 6, lineClamp: 1, overflow: "hidden", whiteSpace: "nowrap", textOverflow: "ellipsis" }}>{share.name}</div>
+        <div style={{ display: "flex", fontSize: 26, marginTop: 4 }}>
+          <span style={{ color: STEEL, fontWeight: 600 }}>{r.current.tireText}</span>
+          <span style={{ margin: "0 14px", color: "#56616f" }}>to</span>
+          <span style={{ color: EMBER, fontWeight: 600 }}>{r.planned.tireText}</span>
+        </div>
+        <div style={{ display: "flex", flex: 1, marginTop: 24 }}>
+          <div style={{ display: "flex", flexDirection: "column", width: 560, height: 400, background: "#ffffff", borderRadius: 16 }}>
+            <Drawing r={r} width={560} height={356} />
+            <div style={{ display: "flex", fontSize: 18, color: "#434c58", padding: "0 20px", justifyContent: "space-between" }}>
+              <span style={{ color: STEEL }}>solid: current</span>
+              <span>to scale, from the hub face</span>
+              <span style={{ color: EMBER }}>dashed: planned</span>
+            </div>
+          </div>
+          <div style={{ display: "flex", flexWrap: "wrap", marginLeft: 44, width: 520, alignContent: "flex-start" }}>
+            <Stat label="Diameter" value={len(r.changes.diameterMm)} sub={formatLenOther(r.changes.diameterMm, p, { signed: true })} />
+            <Stat label="Poke" value={len(r.changes.outerPokeMm)} sub={formatLenOther(r.changes.outerPokeMm, p, { signed: true })} />
+            <Stat label="Ground clearance" value={len(r.changes.groundClearanceMm)} sub="under the axle" />
+            <Stat label={`At ${formatSpeed(h.indicatedMph, p, 0)} shown`} value={formatSpeed(h.actualMph, p)} sub={`speedometer ${formatNumber(r.speedometer.errorPct, 1, { signed: true })} %`} />
+            <Stat label="Suggested ratio" value={formatNumber(r.gearing.suggestedRatio, 2)} sub={`from ${formatNumber(r.gearing.axleRatio, 2)}`} />
+            <Stat label="Scrub radius" value={len(r.changes.scrubRadiusMm)} sub={r.kingpinInclinationDeg === null ? "wheel shift only" : `${formatNumber(r.kingpinInclinationDeg, 1)}° KPI`} />
+          </div>
+        </div>
+      </div>
+    ),
+    { ...size, fonts: await loadFonts(), headers: { "Cache-Control": "public, max-age=60, s-maxage=60" } },
+  );
+}

@@ -1,0 +1,154 @@
+"use client";
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import Link from "next/link";
+import { useState } from "react";
+import { useForm } from "react-hook-form";
+import { z } from "zod";
+import { Button, buttonClass } from "@/components/ui/Button";
+import { TextField } from "@/components/ui/TextField";
+import { ApiError, api, applyFieldErrors } from "@/lib/client/api";
+import type { ComparisonInput } from "@/lib/comparison/schema";
+import { encodeComparison } from "@/lib/comparison/url";
+import { type SavedComparison, comparisonNameSchema } from "@/lib/validation/comparisons";
+import { useCurrentInput } from "./currentInput";
+
+const nameForm = z.object({ name: comparisonNameSchema });
+type NameForm = z.infer<typeof nameForm>;
+
+/** A name to start from: "265/70R17 → 37x12.50R17LT". */
+function suggestedName(input: ComparisonInput): string {
+  const tire = (t: string) => t.trim().split(/\s+/)[0] ?? t;
+  return `${tire(input.current.tire)} → ${tire(input.planned.tire)}`.slice(0, 120);
+}
+
+function inputErrorText(error: unknown): string | null {
+  if (!(error instanceof ApiError)) return null;
+  const paths = Object.keys(error.body.fieldErrors ?? {}).filter((k) => k.startsWith("input"));
+  return paths.length ? `The server did not accept the comparison (${paths.join(", ")}). Check the fields above.` : null;
+}
+
+/**
+ * The workspace's save control. Anonymous visitors get a sign-in link that brings them back to
+ * this very comparison (it lives in the URL); members save it as new, or save changes to the
+ * saved comparison they opened.
+ */
+export function SaveComparison({ signedIn, saved: openedFrom }: { signedIn: boolean; saved: { id: string; name: string } | null }) {
+  const { input, complete } = useCurrentInput();
+  const qc = useQueryClient();
+  const [saved, setSaved] = useState(openedFrom);
+  const [formOpen, setFormOpen] = useState(false);
+  const [notice, setNotice] = useState<string | null>(null);
+  const form = useForm<NameForm>({ resolver: zodResolver(nameForm), defaultValues: { name: "" } });
+
+  const create = useMutation({
+    mutationFn: (name: string) => api<{ comparison: SavedComparison }>("/api/comparisons", { method: "POST", body: { name, input } }),
+    onSuccess: ({ comparison }) => {
+      setSaved({ id: comparison.id, name: comparison.name });
+      setFormOpen(false);
+      setNotice(`Saved as “${comparison.name}”.`);
+      void qc.invalidateQueries({ queryKey: ["comparisons"] });
+    },
+    onError: (error) => {
+      const rest = applyFieldErrors(error, form.setError, ["name"]);
+      setNotice(inputErrorText(error) ?? rest);
+    },
+  });
+  const update = useMutation({
+    mutationFn: (id: string) => api<{ comparison: SavedComparison }>(`/api/comparisons/${id}`, { method: "PATCH", body: { input } }),
+    onSuccess: ({ comparison }) => {
+      setNotice(`Changes saved to “${comparison.name}”.`);
+      void qc.invalidateQueries({ queryKey: ["comparisons"] });
+    },
+    onError: (error) => {
+      if (error instanceof ApiError && error.status === 404) {
+        setSaved(null);
+        setNotice("That saved comparison no longer exists. Save this one as new.");
+      } else setNotice(inputErrorText(error) ?? (error as Error).message);
+    },
+  });
+
+  if (!signedIn) {
+    const back = `/workspace?${encodeComparison(input)}`;
+    return (
+      <div className="flex flex-wrap items-center gap-3 rounded-lg bg-white px-4 py-3 ring-1 ring-basalt-100" data-testid="save-prompt">
+        <Link href={`/sign-in?callbackUrl=${encodeURIComponent(back)}`} className={buttonClass("secondary")}>
+          Sign in to save
+        </Link>
+        <p className="text-sm text-basalt-600">Signed-in members keep comparisons and share them. Until then this comparison lives in the link.</p>
+      </div>
+    );
+  }
+
+  const openForm = () => {
+    form.reset({ name: saved ? `${saved.name} (variant)`.slice(0, 120) : suggestedName(input) });
+    setNotice(null);
+    setFormOpen(true);
+  };
+
+  return (
+    <div className="flex flex-col gap-3 rounded-lg bg-white px-4 py-3 ring-1 ring-basalt-100" data-testid="save-control">
+      <div className="flex flex-wrap items-center gap-2">
+        {saved ? (
+          <>
+            <p className="mr-2 text-sm text-basalt-700">
+              Saved comparison: <strong className="font-semibold text-basalt-950">{saved.name}</strong>
+            </p>
+            <Button onClick={() => update.mutate(saved.id)} pending={update.isPending} disabled={!complete}>
+              Save changes
+            </Button>
+            <Button variant="secondary" onClick={openForm} disabled={!complete || formOpen}>
+              Save as new…
+            </Button>
+          </>
+        ) : (
+          <Button onClick={openForm} disabled={!complete || formOpen}>
+            Save comparison…
+          </Button>
+        )}
+        <Link href="/comparisons" className="ml-auto text-sm font-semibold text-ember-700 underline-offset-2 hover:underline">
+          My comparisons
+        </Link>
+      </div>
+      {!complete && <p className="text-sm text-tight-800">Fix the fields that need attention to save.</p>}
+      {formOpen && (
+        <form
+          noValidate
+          className="flex flex-wrap items-start gap-2"
+          onSubmit={form.handleSubmit((v) => {
+            setNotice(null);
+            create.mutate(v.name);
+          })}
+        >
+          <TextField
+            label="Name of the comparison"
+            className="min-w-[16rem] flex-1"
+            maxLength={120}
+            autoFocus
+            error={form.formState.errors.name?.message}
+            {...form.register("name")}
+          />
+          <div className="flex gap-2 pt-6">
+            <Button type="submit" pending={create.isPending}>
+              Save
+            </Button>
+            <Button type="button" variant="ghost" onClick={() => setFormOpen(false)}>
+              Cancel
+            </Button>
+          </div>
+        </form>
+      )}
+      <p role="status" aria-live="polite" className="min-h-0 text-sm text-basalt-700" data-testid="save-status">
+        {notice}
+        {notice && saved && !notice.startsWith("That saved") && (
+          <>
+            {" "}
+            <Link href="/comparisons" className="font-semibold text-ember-700 underline">
+              See all your comparisons
+            </Link>
+          </>
+        )}
+      </p>
+    </div>
+  );
+}

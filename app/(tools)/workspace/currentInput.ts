@@ -1,0 +1,20 @@
+"use client";
+import { createContext, useContext } from "react";
+import type { ComparisonInput } from "@/lib/comparison/schema";
+
+/**
+ * The workspace's current comparison for controls placed in its toolbar slot (the save
+ * control): the last complete input, and whether every field is valid right now.
+ */
+export interface CurrentInput {
+  input: ComparisonInput;
+  complete: boolean;
+}
+
+export const CurrentInputContext = createContext<CurrentInput | null>(null);
+
+export function useCurrentInput(): CurrentInput {
+  const v = useContext(CurrentInputContext);
+  if (!v) throw new Error("useCurrentInput outside the workspace");
+  return v;
+}
