@@ -4,6 +4,8 @@ import type { Knex } from "knex";
 import { keyFigureColumns } from "@/lib/comparison/keyFigures";
 import { type ComparisonInput, comparisonInputSchema } from "@/lib/comparison/schema";
 import type { ComparisonRow, ComparisonShareRow } from "@/lib/db/types";
+import { HttpError } from "@/lib/http/errors";
+import { findVehicle } from "./garage";
 import type { ComparisonFigures, ComparisonSort, SavedComparison } from "@/lib/validation/comparisons";
 
 /**
@@ -75,12 +77,21 @@ export async function getComparison(db: Knex, ownerId: string, id: string): Prom
   return row ? toSaved(row) : undefined;
 }
 
+/** A comparison may only be tied to one of the owner's own garage vehicles. */
+async function assertOwnVehicle(db: Knex, ownerId: string, vehicleId: string | null | undefined): Promise<void> {
+  if (!vehicleId) return;
+  if (!(await findVehicle(db, ownerId, vehicleId))) {
+    throw new HttpError(422, "Some fields need attention.", { vehicleId: ["That vehicle is not in your garage."] });
+  }
+}
+
 export async function createComparison(
   db: Knex,
   ownerId: string,
   data: { name: string; input: ComparisonInput; vehicleId?: string | null },
 ): Promise<SavedComparison> {
   const input = comparisonInputSchema.parse(data.input);
+  await assertOwnVehicle(db, ownerId, data.vehicleId);
   const [row] = await db<ComparisonRow>("comparisons")
     .insert({ owner_id: ownerId, name: data.name.trim(), input: JSON.stringify(input) as unknown, vehicle_id: data.vehicleId ?? null, ...keyFigureColumns(input) })
     .returning("*");
@@ -95,7 +106,10 @@ export async function updateComparison(
 ): Promise<SavedComparison | undefined> {
   const changes: Record<string, unknown> = { updated_at: db.fn.now() };
   if (patch.name !== undefined) changes.name = patch.name.trim();
-  if (patch.vehicleId !== undefined) changes.vehicle_id = patch.vehicleId;
+  if (patch.vehicleId !== undefined) {
+    await assertOwnVehicle(db, ownerId, patch.vehicleId);
+    changes.vehicle_id = patch.vehicleId;
+  }
   if (patch.input !== undefined) {
     const input = comparisonInputSchema.parse(patch.input);
     Object.assign(changes, { input: JSON.stringify(input), ...keyFigureColumns(input) });

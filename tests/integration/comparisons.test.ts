@@ -153,12 +153,17 @@ describe("saved comparisons API", () => {
     expect((await list.GET(req("GET", "/api/comparisons?sort=size"), noParams)).status).toBe(400);
   });
 
-  it("tie to a vehicle id (nullable, no garage yet)", async () => {
+  it("tie only to one of the owner's own garage vehicles", async () => {
     const vehicleId = "c3000000-0000-4000-8000-00000000000a";
+    const base = { bolt_pattern: "5x114.3", bolt_pcd_mm: 114.3, bolt_count: 5, front_suspension: "independent", stock_setup: "{}", current_setup: "{}" };
+    await db("vehicles").insert({ ...base, id: vehicleId, user_id: OWNER, name: "Wagon" });
     const c = await create("For the wagon", DEFAULT_INPUT, { vehicleId });
     expect((await db("comparisons").where({ id: c.id }).first()).vehicle_id).toBe(vehicleId);
     const res = await list.POST(req("POST", "/api/comparisons", { name: "Bad vehicle", input: DEFAULT_INPUT, vehicleId: "wagon" }), noParams);
     expect((await res.json()).fieldErrors.vehicleId).toBeDefined();
+    const unknown = await list.POST(req("POST", "/api/comparisons", { name: "Not mine", input: DEFAULT_INPUT, vehicleId: "c3000000-0000-4000-8000-00000000000b" }), noParams);
+    expect(unknown.status).toBe(422);
+    expect((await unknown.json()).fieldErrors.vehicleId[0]).toMatch(/not in your garage/);
   });
 });
 
