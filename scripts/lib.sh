@@ -53,6 +53,9 @@ pg_up() {
     chmod 700 "$dir"
     "${runas[@]}" "$PGBIN/initdb" -D "$dir" -U postgres --auth=trust -E UTF8 --locale=C.UTF-8 >/dev/null
   fi
+  if "$PGBIN/pg_isready" -q -h 127.0.0.1 -p "$port" && [ ! -f "$dir/postmaster.pid" ]; then
+    log "port $port already has a PostgreSQL that is not $dir's: stop it or pick another port"; return 1
+  fi
   if ! "$PGBIN/pg_isready" -q -h 127.0.0.1 -p "$port"; then
     "${runas[@]}" "$PGBIN/pg_ctl" -D "$dir" -l "$dir/server.log" -w -t 30 \
       -o "-c listen_addresses=127.0.0.1 -p $port -k '' $extra" start >/dev/null

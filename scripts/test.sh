@@ -40,7 +40,7 @@ check() { # check NAME command...: a whole command counted as one test
 }
 
 # A throw-away cluster: fsync off is fine here, never for data anyone keeps.
-pg_up "$PGDATA_DIR" "$PGPORT_TEST" postgres "-c fsync=off -c synchronous_commit=off -c full_page_writes=off"
+pg_up "$PGDATA_DIR" "$PGPORT_TEST" postgres "-c fsync=off -c synchronous_commit=off -c full_page_writes=off" || { record postgres 0 1; node scripts/sum-results.mjs "$RESULTS"; exit 1; }
 PSQL=("$PGBIN/psql" -q -h 127.0.0.1 -p "$PGPORT_TEST" -U postgres -d postgres)
 for dbn in hubface_test hubface_e2e; do
   "${PSQL[@]}" -c "drop database if exists $dbn with (force)" -c "create database $dbn" >/dev/null

@@ -145,34 +145,38 @@ export function newShareSlug(): string {
 }
 
 /**
+ * Inside a transaction: locks the owner's comparison and revokes its live link. Returns the
+ * revoked slug (null when none was live), or undefined when the comparison is not the owner's.
+ */
+async function revokeLive(trx: Knex.Transaction, ownerId: string, id: string): Promise<string | null | undefined> {
+  const row = await trx("comparisons").where({ id, owner_id: ownerId }).forUpdate().first("id");
+  if (!row) return undefined;
+  const [old] = await trx<ComparisonShareRow>("comparison_shares")
+    .where({ comparison_id: id })
+    .whereNull("revoked_at")
+    .update({ revoked_at: trx.fn.now() as unknown as Date })
+    .returning("slug");
+  return old?.slug ?? null;
+}
+
+/**
  * Makes a new public link; a live one is revoked first (its slug stays dead). Returns the new
  * slug and the one it replaced, or undefined when the comparison is not the owner's.
  */
 export async function createShare(db: Knex, ownerId: string, id: string): Promise<{ slug: string; createdAt: string; replaced: string | null } | undefined> {
   return db.transaction(async (trx) => {
-    const row = await trx("comparisons").where({ id, owner_id: ownerId }).forUpdate().first("id");
-    if (!row) return undefined;
-    const [old] = await trx<ComparisonShareRow>("comparison_shares")
-      .where({ comparison_id: id })
-      .whereNull("revoked_at")
-      .update({ revoked_at: trx.fn.now() as unknown as Date })
-      .returning("slug");
+    const replaced = await revokeLive(trx, ownerId, id);
+    if (replaced === undefined) return undefined;
     const [share] = await trx<ComparisonShareRow>("comparison_shares").insert({ comparison_id: id, slug: newShareSlug() }).returning(["slug", "created_at"]);
-    return { slug: share!.slug, createdAt: new Date(share!.created_at).toISOString(), replaced: old?.slug ?? null };
+    return { slug: share!.slug, createdAt: new Date(share!.created_at).toISOString(), replaced };
   });
 }
 
 /** Revokes the live link; returns its slug (null when there was none), or undefined when not the owner's. */
 export async function revokeShare(db: Knex, ownerId: string, id: string): Promise<{ revoked: string | null } | undefined> {
   return db.transaction(async (trx) => {
-    const row = await trx("comparisons").where({ id, owner_id: ownerId }).forUpdate().first("id");
-    if (!row) return undefined;
-    const [old] = await trx<ComparisonShareRow>("comparison_shares")
-      .where({ comparison_id: id })
-      .whereNull("revoked_at")
-      .update({ revoked_at: trx.fn.now() as unknown as Date })
-      .returning("slug");
-    return { revoked: old?.slug ?? null };
+    const revoked = await revokeLive(trx, ownerId, id);
+    return revoked === undefined ? undefined : { revoked };
   });
 }
 
