@@ -1,4 +1,5 @@
 import "server-only";
+import { STATUS_LABEL } from "@/lib/quotes/status";
 import { createHash, randomBytes } from "node:crypto";
 import type { Knex } from "knex";
 import type { CatalogItemRow, QuoteEventRow, QuoteLineRow, QuoteRow, QuoteStatus, ServiceType } from "@/lib/db/types";
@@ -36,15 +37,7 @@ const TRANSITIONS: Record<QuoteStatus, QuoteStatus[]> = {
   expired: [],
 };
 
-export const STATUS_LABEL: Record<QuoteStatus, string> = {
-  draft: "Draft",
-  sent: "Sent",
-  accepted: "Accepted",
-  deposit_paid: "Deposit paid",
-  installed: "Installed",
-  declined: "Declined",
-  expired: "Expired",
-};
+export { STATUS_LABEL };
 
 /** Moves a quote (locked by the caller's transaction) to `to`, recording who and when. */
 export async function transition(trx: Knex.Transaction, quote: Pick<QuoteRow, "id" | "status">, to: QuoteStatus, actor: Actor, note = "", extra: Partial<QuoteRow> = {}) {

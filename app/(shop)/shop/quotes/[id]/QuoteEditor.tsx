@@ -9,7 +9,8 @@ import { Button, buttonClass } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { api } from "@/lib/client/api";
-import type { QuoteEventRow, QuoteLineKind, QuoteLineRow, QuoteRow, QuoteStatus } from "@/lib/db/types";
+import { STATUS_LABEL } from "@/lib/quotes/status";
+import type { QuoteEventRow, QuoteLineKind, QuoteLineRow, QuoteRow } from "@/lib/db/types";
 import type { FitmentSummary } from "@/lib/quotes/fitment";
 import { formatBp, formatCents, formatUsd, parseMoneyToCents } from "@/lib/quotes/money";
 import { statusTone } from "../statusTone";
@@ -23,15 +24,6 @@ export interface Detail {
   createdByName: string | null;
 }
 
-const LABEL: Record<QuoteStatus, string> = {
-  draft: "Draft",
-  sent: "Sent",
-  accepted: "Accepted",
-  deposit_paid: "Deposit paid",
-  installed: "Installed",
-  declined: "Declined",
-  expired: "Expired",
-};
 
 interface EditLine {
   key: string;
@@ -123,7 +115,7 @@ export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; lab
     onMutate: () => setProblems([]),
     onSuccess: (d) => {
       accept(d);
-      setNotice(`Quote is now ${LABEL[d.quote.status].toLowerCase()}.`);
+      setNotice(`Quote is now ${STATUS_LABEL[d.quote.status].toLowerCase()}.`);
     },
     onError: (e) => setProblems([(e as Error).message]),
   });
@@ -137,8 +129,8 @@ export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; lab
         title={`Quote Q-${q.number}`}
         lead={
           <>
-            <Badge tone={statusTone(q.status)}>{LABEL[q.status]}</Badge>{" "}
-            <span data-testid="quote-status" className="sr-only">{LABEL[q.status]}</span>
+            <Badge tone={statusTone(q.status)}>{STATUS_LABEL[q.status]}</Badge>{" "}
+            <span data-testid="quote-status" className="sr-only">{STATUS_LABEL[q.status]}</span>
             {detail.customer.name} · {q.vehicle_description}
             {q.valid_until && ` · valid until ${new Date(q.valid_until).toLocaleDateString("en-US")}`}
           </>
@@ -250,7 +242,7 @@ export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; lab
             <ol className="mt-2 flex flex-col gap-1 text-sm" data-testid="quote-history">
               {detail.events.map((e) => (
                 <li key={e.id}>
-                  <span className="font-medium">{LABEL[e.to_status]}</span> — {e.actor}, {new Date(e.at).toLocaleString("en-US")}
+                  <span className="font-medium">{STATUS_LABEL[e.to_status]}</span> — {e.actor}, {new Date(e.at).toLocaleString("en-US")}
                   {e.note && <span className="text-basalt-600"> ({e.note})</span>}
                 </li>
               ))}
