@@ -82,13 +82,33 @@ function Dimension({ x1, x2, y, label, colour, dash, fontSize }: { x1: number; x
   );
 }
 
-export function CrossSection({ result: r, prefs, className, id = "xsec" }: { result: ComparisonResult; prefs: DisplayPrefs; className?: string; id?: string }) {
+/** Measured parts of a vehicle, mm from the hub face: the nearest inboard part and the fender lip. */
+export interface DrawnLimits {
+  innerMm: number | null;
+  outerMm: number | null;
+}
+
+export function CrossSection({
+  result: r,
+  prefs,
+  className,
+  id = "xsec",
+  limits,
+}: {
+  result: ComparisonResult;
+  prefs: DisplayPrefs;
+  className?: string;
+  id?: string;
+  limits?: DrawnLimits | null;
+}) {
   const cur: Shape = { f: r.current, colour: STEEL, fill: "rgb(47 114 168 / 0.14)" };
   const pla: Shape = { f: r.planned, colour: EMBER, dash: DASH, fill: "rgb(226 91 22 / 0.10)" };
   const Rc = r.current.overallDiameterMm / 2;
   const Rp = r.planned.overallDiameterMm / 2;
-  const maxIn = Math.max(r.current.innerSwingMm, r.planned.innerSwingMm, r.current.beadSeatInboardMm + 40, r.planned.beadSeatInboardMm + 40);
-  const maxOut = Math.max(r.current.outerSwingMm, r.planned.outerSwingMm, r.current.beadSeatOutboardMm + 40, r.planned.beadSeatOutboardMm + 40, r.fenderLineMm ?? 0);
+  const innerLimit = limits?.innerMm ?? null;
+  const outerLimit = limits?.outerMm ?? null;
+  const maxIn = Math.max(r.current.innerSwingMm, r.planned.innerSwingMm, r.current.beadSeatInboardMm + 40, r.planned.beadSeatInboardMm + 40, (innerLimit ?? 0) + 20);
+  const maxOut = Math.max(r.current.outerSwingMm, r.planned.outerSwingMm, r.current.beadSeatOutboardMm + 40, r.planned.beadSeatOutboardMm + 40, r.fenderLineMm ?? 0, (outerLimit ?? 0) + 20);
   const width = maxIn + maxOut + 120;
   const fontSize = Math.max(15, width / 30);
   const top = -(fontSize * 2 + 8) * 2 - fontSize * 1.5;
@@ -156,6 +176,18 @@ export function CrossSection({ result: r, prefs, className, id = "xsec" }: { res
             <text x={r.fenderLineMm - 4} y={fontSize * 1.2} textAnchor="end" fontSize={fontSize * 0.8} fill="#7d1710">fender</text>
           </g>
         )}
+        {innerLimit !== null && (
+          <g data-testid="inner-limit">
+            <line x1={-innerLimit} x2={-innerLimit} y1={0} y2={Math.max(Rc, Rp)} stroke="#7d1710" strokeWidth={2} strokeDasharray="6 3" />
+            <text x={-innerLimit + 4} y={fontSize * 2.4} fontSize={fontSize * 0.8} fill="#7d1710">inner limit</text>
+          </g>
+        )}
+        {outerLimit !== null && (
+          <g data-testid="fender-lip">
+            <line x1={outerLimit} x2={outerLimit} y1={0} y2={Math.max(Rc, Rp)} stroke="#7d1710" strokeWidth={2} strokeDasharray="6 3" />
+            <text x={outerLimit - 4} y={fontSize * 2.4} textAnchor="end" fontSize={fontSize * 0.8} fill="#7d1710">fender lip</text>
+          </g>
+        )}
         {axis && (
           <g>
             <line {...axis} stroke="#353c46" strokeWidth={1.5} strokeDasharray="14 4 3 4" />
@@ -165,7 +197,8 @@ export function CrossSection({ result: r, prefs, className, id = "xsec" }: { res
       </svg>
       <figcaption className="mt-1 text-xs text-basalt-500">
         To scale from the hub face (inboard left). Solid steel: current · dashed ember: planned. Tire profile and flange height are schematic
-        {kpi ? "; the steering axis is drawn through the current contact centre" : ""}.
+        {kpi ? "; the steering axis is drawn through the current contact centre" : ""}
+        {limits ? "; dark red dashes: the vehicle's measured inner limit and fender lip" : ""}.
       </figcaption>
     </figure>
   );

@@ -1,4 +1,6 @@
 import type { Knex } from "knex";
+import { keyFigureColumns } from "../../lib/comparison/keyFigures";
+import { comparisonInputSchema } from "../../lib/comparison/schema";
 import { parseBoltPattern, parseLength } from "../../lib/fitment";
 import { demoPointPicture, demoVehiclePicture } from "../../lib/photos/demoImages";
 import { extensionOf, processImage } from "../../lib/photos/image";
@@ -10,6 +12,7 @@ import { setupSchema } from "../../lib/validation/setup";
  * Only adds what is missing; photos whose objects are missing from the bucket are uploaded again.
  */
 const JUNO = "a1000000-0000-4000-8000-000000000001";
+const TIED_COMPARISON = "c4000000-0000-4000-8000-000000000010";
 const setup = (s: unknown) => setupSchema.parse(s);
 
 const VEHICLES = [
@@ -162,5 +165,15 @@ async function seedPhotos(knex: Knex) {
         .onConflict("id")
         .merge();
     }
+  }
+  // A saved comparison tied to the first vehicle: its install checklist opens from the list.
+  const hauler = VEHICLES[0]!;
+  if (!(await knex("comparisons").where({ id: TIED_COMPARISON }).first("id"))) {
+    const input = comparisonInputSchema.parse({
+      current: hauler.current,
+      planned: { tire: "35x12.50R17LT 121Q LRE", wheelDiameterIn: 17, wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 }, spacerMm: 0 },
+      vehicle: { kingpinInclinationDeg: hauler.kingpin_inclination_deg, axleRatio: hauler.axle_ratio, transmissionRatio: hauler.transmission_ratio, cruiseSpeedsMph: [60, 70], fenderLineMm: null },
+    });
+    await knex("comparisons").insert({ id: TIED_COMPARISON, owner_id: JUNO, name: "Gravel Hauler — 35s on 17x9", vehicle_id: hauler.id, input: JSON.stringify(input), ...keyFigureColumns(input) });
   }
 }

@@ -19,6 +19,7 @@ import {
   FitmentInputError,
   checkOffsetMm,
   offsetFromBackspacing,
+  type SetupInput,
   parseTireSize,
 } from "@/lib/fitment";
 
@@ -95,6 +96,21 @@ export const DEFAULT_INPUT: ComparisonInput = {
 export function positionOffsetMm(position: Position, wheelWidthIn: number): number {
   if (position.mode === "offset") return checkOffsetMm(position.offsetMm, wheelWidthIn, "offsetMm");
   return offsetFromBackspacing({ widthIn: wheelWidthIn, backspacingIn: position.backspacingIn, measuredFrom: position.reference, flangeIn: position.flangeIn });
+}
+
+/**
+ * The engine's input for a valid setup (the position turned into an offset).
+ *
+ * @example
+ * toEngineSetup({ tire: "265/70R17", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 }, spacerMm: 0 });
+ * // { tire: "265/70R17", wheel: { diameterIn: 17, widthIn: 8, offsetMm: 25 }, spacerMm: 0 }
+ */
+export function toEngineSetup(s: SetupInputValues): SetupInput {
+  return {
+    tire: s.tire,
+    wheel: { diameterIn: s.wheelDiameterIn, widthIn: s.wheelWidthIn, offsetMm: positionOffsetMm(s.position, s.wheelWidthIn) },
+    spacerMm: s.spacerMm,
+  };
 }
 
 /** One problem of an input: the dotted path of the field and a message with an example. */

@@ -40,6 +40,11 @@ function enc(v: string): string {
   return encodeURIComponent(v).replace(/%2F/gi, "/").replace(/%2C/gi, ",").replace(/%3A/gi, ":").replace(/%20/g, "+");
 }
 
+/** Query pairs as `key=value` text, values encoded as the comparison's URL does. */
+export function joinQuery(pairs: readonly (readonly [string, string])[]): string {
+  return pairs.map(([k, v]) => `${k}=${enc(v)}`).join("&");
+}
+
 function encodeSetup(prefix: "c" | "p", s: SetupInputValues, out: [string, string][]): void {
   out.push([`${prefix}t`, s.tire.trim()], [`${prefix}d`, urlNumber(s.wheelDiameterIn)], [`${prefix}w`, urlNumber(s.wheelWidthIn)]);
   if (s.position.mode === "offset") {
@@ -49,6 +54,20 @@ function encodeSetup(prefix: "c" | "p", s: SetupInputValues, out: [string, strin
     if (s.position.flangeIn !== DEFAULT_FLANGE_ALLOWANCE_IN) out.push([`${prefix}f`, urlNumber(s.position.flangeIn)]);
   }
   if (s.spacerMm !== 0) out.push([`${prefix}s`, urlNumber(s.spacerMm)]);
+}
+
+/**
+ * One setup as query parameters (without `?`), in the comparison's format: the garage pages
+ * carry a planned setup this way, so a garage link and a workspace link read alike.
+ *
+ * @example
+ * encodeSetupQuery("p", { tire: "35x12.50R17LT", wheelDiameterIn: 17, wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 }, spacerMm: 0 });
+ * // "pt=35x12.50R17LT&pd=17&pw=9&po=-12"
+ */
+export function encodeSetupQuery(prefix: "c" | "p", s: SetupInputValues): string {
+  const out: [string, string][] = [];
+  encodeSetup(prefix, s, out);
+  return joinQuery(out);
 }
 
 /**
@@ -67,10 +86,11 @@ export function encodeComparison(input: ComparisonInput): string {
   if (v.transmissionRatio !== DEFAULT_VEHICLE.transmissionRatio) out.push(["top", urlNumber(v.transmissionRatio)]);
   if (v.cruiseSpeedsMph.join(",") !== DEFAULT_VEHICLE.cruiseSpeedsMph.join(",")) out.push(["cruise", v.cruiseSpeedsMph.map(urlNumber).join(",")]);
   if (v.fenderLineMm !== null) out.push(["fender", urlNumber(v.fenderLineMm)]);
-  return out.map(([k, val]) => `${k}=${enc(val)}`).join("&");
+  return joinQuery(out);
 }
 
-function toParams(q: QueryLike): URLSearchParams {
+/** The query as URLSearchParams (Next's searchParams object: the first of repeated keys). */
+export function toParams(q: QueryLike): URLSearchParams {
   if (q instanceof URLSearchParams) return q;
   if (typeof q === "string") return new URLSearchParams(q.startsWith("?") ? q.slice(1) : q);
   const p = new URLSearchParams();

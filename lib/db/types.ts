@@ -239,6 +239,8 @@ export interface VehicleRow {
   kingpin_inclination_deg: number | null;
   axle_ratio: number | null;
   transmission_ratio: number | null;
+  /** Margin the measured points are classed against (default 1/2 in). */
+  clearance_margin_mm: number;
   notes: string;
   created_at: Date;
   updated_at: Date;

@@ -11,12 +11,12 @@ import {
   loadIndexKg,
   loadRangeInfo,
   parseBoltPattern,
-  predictClearances,
   tighteningSequence,
 } from "@/lib/fitment";
 import { bothUnits } from "@/lib/garage/format";
 import type { Vehicle, VehicleClearance } from "@/lib/garage/types";
 import { type SetupValues, toEngineSetup } from "@/lib/validation/setup";
+import { predictPoints } from "@/lib/garage/predict";
 
 export type ChecklistGroup = "fit" | "drivetrain" | "wheels" | "tires";
 export const GROUP_TITLE: Record<ChecklistGroup, string> = {
@@ -58,11 +58,7 @@ export function buildChecklist(input: { vehicle: Vehicle; clearances: VehicleCle
     speedsMph: [65],
   });
   const fromStock = compareSetups(toEngineSetup(v.stockSetup), pla, { speedsMph: [60] });
-  const preds = predictClearances(
-    clearances.map((c) => ({ direction: c.direction, distanceMm: c.distanceMm, measuredWith: toEngineSetup(c.measuredSetup) })),
-    pla,
-    { marginMm },
-  );
+  const preds = predictPoints(clearances, planned, marginMm);
   const predictions = clearances.map((clearance, i) => ({ clearance, prediction: preds[i]! }));
   const items: ChecklistItem[] = [];
 

@@ -3,10 +3,11 @@
  * comes from the vehicle; the inner limit from its measured inboard points (clearanceLimits).
  */
 import { z } from "zod";
-import { type ClearanceLimits, type FitmentConstraints, DEFAULT_WHEEL_WIDTHS_IN, clearanceLimits, setupGeometry } from "@/lib/fitment";
+import { type ClearanceLimits, type FitmentConstraints, DEFAULT_WHEEL_WIDTHS_IN, setupGeometry } from "@/lib/fitment";
 import type { VehicleClearance, Vehicle } from "@/lib/garage/types";
 import { marginSchema } from "@/lib/validation/garage";
 import { optionalLengthField, toEngineSetup } from "@/lib/validation/setup";
+import { measuredLimits } from "@/lib/garage/predict";
 
 const diameter = (label: string) => optionalLengthField(label, "in", { min: 300, max: 2000 }, "35 in", "mm");
 
@@ -56,10 +57,7 @@ export interface FinderPlan {
 /** The engine's constraints for these goals on this vehicle. */
 export function finderPlan(goals: FinderGoals, vehicle: Vehicle, clearances: VehicleClearance[]): FinderPlan {
   const current = setupGeometry(toEngineSetup(vehicle.currentSetup));
-  const limits = clearanceLimits(
-    clearances.map((c) => ({ direction: c.direction, distanceMm: c.distanceMm, measuredWith: toEngineSetup(c.measuredSetup) })),
-    { marginMm: goals.margin },
-  );
+  const limits = measuredLimits(clearances, goals.margin);
   const constraints: FitmentConstraints = { boltPattern: vehicle.boltPattern };
   if (goals.targetDiameterMm !== null) constraints.targetDiameterMm = goals.targetDiameterMm;
   if (goals.minDiameterMm !== null) constraints.minDiameterMm = goals.minDiameterMm;

@@ -1,5 +1,5 @@
 /** Display helpers for the garage: every number still comes from the engine. */
-import { formatLength, inToMm } from "@/lib/fitment";
+import { MM_PER_IN, formatLength, inToMm } from "@/lib/fitment";
 
 /** "38.1 mm (1-1/2 in)". */
 export function bothUnits(mm: number): string {
@@ -26,4 +26,10 @@ export function setupLine(s: {
       ? `offset ${s.position.offsetMm > 0 ? "+" : ""}${s.position.offsetMm} mm`
       : `${formatLength(inToMm(s.position.backspacingIn), { unit: "in", fraction: 16 })} backspacing to the ${s.position.reference === "flange" ? "flange edge" : "bead seat"}`;
   return `${s.tire} on ${s.wheelDiameterIn}x${s.wheelWidthIn}, ${pos}${s.spacerMm ? `, ${s.spacerMm} mm spacer` : ""}`;
+}
+
+/** A margin as form text: the inch fraction when it is one (12.7 → "1/2 in"), else mm ("15 mm"). */
+export function marginText(mm: number): string {
+  const sixteenths = (mm / MM_PER_IN) * 16;
+  return Math.abs(sixteenths - Math.round(sixteenths)) < 1e-6 ? formatLength(mm, { unit: "in", fraction: 16 }) : `${Math.round(mm * 100) / 100} mm`;
 }

@@ -18,6 +18,8 @@ export interface Vehicle {
   kingpinInclinationDeg: number | null;
   axleRatio: number | null;
   transmissionRatio: number | null;
+  /** The margin predictions are classed against, mm. */
+  clearanceMarginMm: number;
   notes: string;
   createdAt: string;
   updatedAt: string;
@@ -51,4 +53,16 @@ export interface VehicleDetail {
   vehicle: Vehicle;
   clearances: VehicleClearance[];
   photos: VehiclePhoto[];
+}
+
+/** A vehicle as the workspace's garage panel needs it: the figures and the measured points. */
+export interface WorkspaceVehicle {
+  id: string;
+  name: string;
+  currentSetup: SetupValues;
+  kingpinInclinationDeg: number | null;
+  axleRatio: number | null;
+  transmissionRatio: number | null;
+  clearanceMarginMm: number;
+  clearances: Pick<VehicleClearance, "id" | "label" | "direction" | "distanceMm" | "suspensionState" | "measuredSetup">[];
 }

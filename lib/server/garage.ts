@@ -7,7 +7,7 @@ import { type PhotoStore } from "@/lib/photos/s3";
 import { type ProcessedImage, extensionOf } from "@/lib/photos/image";
 import type { ClearanceValues, VehicleValues } from "@/lib/validation/garage";
 import type { SetupValues } from "@/lib/validation/setup";
-import type { Vehicle, VehicleClearance, VehicleDetail, VehiclePhoto } from "@/lib/garage/types";
+import type { Vehicle, VehicleClearance, VehicleDetail, VehiclePhoto, WorkspaceVehicle } from "@/lib/garage/types";
 
 // Every query here is scoped by the owner's user id; a vehicle of someone else is "not found".
 
@@ -28,6 +28,7 @@ export function vehicleDto(r: VehicleRow): Vehicle {
     kingpinInclinationDeg: r.kingpin_inclination_deg,
     axleRatio: r.axle_ratio,
     transmissionRatio: r.transmission_ratio,
+    clearanceMarginMm: r.clearance_margin_mm,
     notes: r.notes,
     createdAt: new Date(r.created_at).toISOString(),
     updatedAt: new Date(r.updated_at).toISOString(),
@@ -81,6 +82,7 @@ function columns(v: VehicleValues) {
     kingpin_inclination_deg: v.kingpinInclinationDeg,
     axle_ratio: v.axleRatio,
     transmission_ratio: v.transmissionRatio,
+    clearance_margin_mm: v.clearanceMarginMm,
     notes: v.notes,
   };
 }
@@ -88,6 +90,27 @@ function columns(v: VehicleValues) {
 export async function listVehicles(db: Knex, userId: string): Promise<Vehicle[]> {
   const rows = await db<VehicleRow>("vehicles").where({ user_id: userId }).orderBy("created_at", "asc").limit(200);
   return rows.map(vehicleDto);
+}
+
+/** The caller's vehicles with their measured points, for the workspace's garage panel (two queries). */
+export async function workspaceVehicles(db: Knex, userId: string): Promise<WorkspaceVehicle[]> {
+  const vehicles = await listVehicles(db, userId);
+  if (vehicles.length === 0) return [];
+  const points = await db<VehicleClearanceRow>("vehicle_clearances")
+    .whereIn("vehicle_id", vehicles.map((v) => v.id))
+    .orderBy("created_at", "asc");
+  return vehicles.map((v) => ({
+    id: v.id,
+    name: v.name,
+    currentSetup: v.currentSetup,
+    kingpinInclinationDeg: v.kingpinInclinationDeg,
+    axleRatio: v.axleRatio,
+    transmissionRatio: v.transmissionRatio,
+    clearanceMarginMm: v.clearanceMarginMm,
+    clearances: points
+      .filter((p) => p.vehicle_id === v.id)
+      .map((p) => ({ id: p.id, label: p.label, direction: p.direction, distanceMm: p.distance_mm, suspensionState: p.suspension_state, measuredSetup: p.measured_setup as SetupValues })),
+  }));
 }
 
 export async function findVehicle(db: Knex, userId: string, id: string): Promise<VehicleRow | undefined> {
@@ -232,17 +255,20 @@ export async function findChecklist(db: Knex, vehicleId: string, plannedKey: str
 
 export async function saveChecklist(
   db: Knex,
-  input: { vehicleId: string; plannedKey: string; planned: SetupValues; ticked: string[] },
+  input: { vehicleId: string; plannedKey: string; planned: SetupValues; comparisonId?: string | null; ticked: string[] },
 ): Promise<InstallChecklistRow> {
+  const ticked = JSON.stringify(input.ticked);
   const [row] = await db("install_checklists")
     .insert({
       vehicle_id: input.vehicleId,
       planned_key: input.plannedKey,
       planned_setup: JSON.stringify(input.planned),
-      ticked: JSON.stringify(input.ticked),
+      comparison_id: input.comparisonId ?? null,
+      ticked,
     })
     .onConflict(["vehicle_id", "planned_key"])
-    .merge({ ticked: JSON.stringify(input.ticked), updated_at: db.fn.now() })
+    // Opened from the vehicle page later, the checklist keeps the comparison it was made from.
+    .merge({ ticked, updated_at: db.fn.now(), comparison_id: db.raw("coalesce(excluded.comparison_id, install_checklists.comparison_id)") })
     .returning("*");
   return row as InstallChecklistRow;
 }

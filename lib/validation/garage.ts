@@ -2,8 +2,9 @@
  * The garage: vehicles, measured clearances, checklists. Shared by the forms and the handlers.
  */
 import { z } from "zod";
-import { CLEARANCE_DISTANCE_LIMITS_MM, CLEARANCE_MARGIN_LIMITS_MM, parseBoltPattern, parseLength } from "@/lib/fitment";
+import { CLEARANCE_DISTANCE_LIMITS_MM, CLEARANCE_MARGIN_LIMITS_MM, DEFAULT_CLEARANCE_MARGIN_MM, parseBoltPattern, parseLength } from "@/lib/fitment";
 import { FRONT_SUSPENSIONS } from "@/lib/db/types";
+import { CLEARANCE_DIRECTION_LABEL, SUSPENSION_STATE_LABEL } from "@/lib/garage/labels";
 import { numberField, optionalLengthField, optionalNumberField, setupSchema } from "./setup";
 
 const text = (label: string, max: number) =>
@@ -37,6 +38,25 @@ export const boltPatternField = z
     }
   });
 
+/** The margin a user sets for the predictions (text with unit — a bare number is inches — or a number of mm). */
+export const marginSchema = z
+  .union([z.number(), z.string()])
+  .transform((v, ctx) => {
+    try {
+      return typeof v === "number" ? v : parseLength(v, "in");
+    } catch {
+      ctx.addIssue({ code: "custom", message: "The margin should look like 1/2 in or 12 mm." });
+      return z.NEVER;
+    }
+  })
+  .pipe(z.number().min(CLEARANCE_MARGIN_LIMITS_MM.min, "The margin cannot be negative.").max(CLEARANCE_MARGIN_LIMITS_MM.max, "Keep the margin at most 100 mm."));
+
+/** The vehicle's margin: left empty, the common-practice default 1/2 in. */
+export const vehicleMarginSchema = z
+  .union([z.literal(""), z.null(), marginSchema])
+  .optional()
+  .transform((v) => (v === "" || v === null || v === undefined ? DEFAULT_CLEARANCE_MARGIN_MM : v));
+
 export const vehicleSchema = z.object({
   name: text("a name", 80).min(1, "Give the vehicle a name (e.g. Gravel hauler)."),
   year: optionalNumberField("the year", { min: 1900, max: 2100 }, "2009", { integer: true }),
@@ -52,6 +72,7 @@ export const vehicleSchema = z.object({
   kingpinInclinationDeg: optionalNumberField("the kingpin inclination", { min: 0, max: 30 }, "8", { unit: "°" }),
   axleRatio: optionalNumberField("the axle ratio", { min: 1, max: 10 }, "3.73"),
   transmissionRatio: optionalNumberField("the top-gear ratio", { min: 0.3, max: 10 }, "0.72"),
+  clearanceMarginMm: vehicleMarginSchema,
   notes: z
     .union([z.null(), text("the notes", 4000)])
     .optional()
@@ -60,13 +81,7 @@ export const vehicleSchema = z.object({
 export type VehicleFormValues = z.input<typeof vehicleSchema>;
 export type VehicleValues = z.output<typeof vehicleSchema>;
 
-export const CLEARANCE_DIRECTION_LABEL = {
-  inboard: "Inboard (frame, control arm, spring)",
-  outboard: "Outboard (fender lip, flare)",
-  upward: "Upward (fender, liner)",
-  "fore-aft": "Fore/aft at full lock (bumper, body mount)",
-} as const;
-export const SUSPENSION_STATE_LABEL = { "ride-height": "Ride height", "full-stuff": "Full stuff (compressed)", "full-lock": "Full lock" } as const;
+export { CLEARANCE_DIRECTION_LABEL, SUSPENSION_STATE_LABEL };
 
 const UNIT_AT_END = /(mm|cm|in|inch|inches|"|''|”)\s*$/i;
 
@@ -113,24 +128,21 @@ export const clearanceSchema = z
 export type ClearanceFormValues = z.input<typeof clearanceSchema>;
 export type ClearanceValues = z.output<typeof clearanceSchema>;
 
-/** The margin a user sets for the predictions (text with unit or a number of mm). */
-export const marginSchema = z
-  .union([z.number(), z.string()])
-  .transform((v, ctx) => {
-    try {
-      return typeof v === "number" ? v : parseLength(v, "in");
-    } catch {
-      ctx.addIssue({ code: "custom", message: "The margin should look like 1/2 in or 12 mm." });
-      return z.NEVER;
-    }
-  })
-  .pipe(z.number().min(CLEARANCE_MARGIN_LIMITS_MM.min, "The margin cannot be negative.").max(CLEARANCE_MARGIN_LIMITS_MM.max, "Keep the margin at most 100 mm."));
-
 const itemId = z.string().regex(/^[a-z0-9:-]{1,80}$/, "Not a checklist item.");
-export const checklistUpdateSchema = z.object({
-  planned: setupSchema,
-  ticked: z.array(itemId).max(200, "Too many items."),
-});
+/** A margin in mm as the checklist link carries it (`m=`); anything else is ignored. */
+export const marginMmParam = z.coerce.number().min(CLEARANCE_MARGIN_LIMITS_MM.min).max(CLEARANCE_MARGIN_LIMITS_MM.max).optional().catch(undefined);
+
+export const checklistUpdateSchema = z
+  .object({
+    planned: setupSchema.optional(),
+    comparisonId: z.uuid({ error: "That is not a comparison id." }).optional(),
+    marginMm: z.number({ error: "Give the margin in mm (e.g. 12.7)." }).min(CLEARANCE_MARGIN_LIMITS_MM.min).max(CLEARANCE_MARGIN_LIMITS_MM.max).optional(),
+    ticked: z.array(itemId).max(200, "Too many items."),
+  })
+  .refine((v) => v.planned !== undefined || v.comparisonId !== undefined, {
+    message: "Send the planned setup or the saved comparison the checklist is for.",
+    path: ["planned"],
+  });
 export type ChecklistUpdate = z.output<typeof checklistUpdateSchema>;
 
 export { numberField };

@@ -12,24 +12,23 @@
  * the wheel), so a value that passes never makes the engine throw.
  */
 import { z } from "zod";
+import { DEFAULT_FLANGE_ALLOWANCE_IN, LIMITS, positionOffsetMm as modelPositionOffsetMm, toEngineSetup } from "@/lib/comparison/model";
 import {
   DEFAULT_FLANGE_IN,
   FitmentInputError,
   MM_PER_IN,
-  type SetupInput,
-  checkOffsetMm,
-  offsetFromBackspacing,
   parseLength,
   parseTireSize,
 } from "@/lib/fitment";
 
+/** The comparison model's bounds: one set of limits for forms, handlers and the URL. */
 export const SETUP_LIMITS = {
-  wheelDiameterIn: { min: 8, max: 30 },
-  wheelWidthIn: { min: 3, max: 20 },
-  offsetMm: { min: -200, max: 200 },
-  backspacingIn: { min: 0, max: 20 },
-  flangeIn: { min: 0, max: 2 },
-  spacerMm: { min: 0, max: 100 },
+  wheelDiameterIn: LIMITS.wheelDiameterIn,
+  wheelWidthIn: LIMITS.wheelWidthIn,
+  offsetMm: LIMITS.offsetMm,
+  backspacingIn: LIMITS.backspacingIn,
+  flangeIn: LIMITS.flangeIn,
+  spacerMm: LIMITS.spacerMm,
 } as const;
 
 type Bounds = { min: number; max: number };
@@ -125,16 +124,8 @@ export const positionSchema = z.discriminatedUnion(
   { error: 'Give the wheel position as an offset (mode "offset") or a backspacing (mode "backspacing").' },
 );
 
-/** The offset (mm) a position stands for, through the engine; throws FitmentInputError outside the wheel. */
-export function positionOffsetMm(position: z.output<typeof positionSchema>, wheelWidthIn: number): number {
-  if (position.mode === "offset") return checkOffsetMm(position.offsetMm, wheelWidthIn, "offsetMm");
-  return offsetFromBackspacing({
-    widthIn: wheelWidthIn,
-    backspacingIn: position.backspacingIn,
-    measuredFrom: position.reference,
-    flangeIn: position.flangeIn,
-  });
-}
+/** The offset (mm) a position stands for (the comparison model's rule); throws FitmentInputError outside the wheel. */
+export const positionOffsetMm: (position: z.output<typeof positionSchema>, wheelWidthIn: number) => number = modelPositionOffsetMm;
 
 export const setupSchema = z
   .object({
@@ -182,14 +173,7 @@ export type SetupFormValues = z.input<typeof setupSchema>;
 export type SetupValues = z.output<typeof setupSchema>;
 export type PositionValues = z.output<typeof positionSchema>;
 
-/** The engine's input for a validated setup. */
-export function toEngineSetup(s: SetupValues): SetupInput {
-  return {
-    tire: s.tire,
-    wheel: { diameterIn: s.wheelDiameterIn, widthIn: s.wheelWidthIn, offsetMm: positionOffsetMm(s.position, s.wheelWidthIn) },
-    spacerMm: s.spacerMm,
-  };
-}
+export { toEngineSetup };
 
 /**
  * Form text for a stored setup (numbers as text, the way the form holds them). The position
@@ -213,7 +197,7 @@ export function setupToForm(s: SetupValues): SetupFormValues {
   };
 }
 
-export const DEFAULT_FLANGE_ALLOWANCE_IN = DEFAULT_FLANGE_IN;
+export { DEFAULT_FLANGE_ALLOWANCE_IN };
 
 /** A blank setup for new forms. */
 export const EMPTY_SETUP_FORM: SetupFormValues = {

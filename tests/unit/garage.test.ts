@@ -13,7 +13,7 @@ const PLAN: SetupValues = { tire: "35x12.50R17LT", wheelDiameterIn: 17, wheelWid
 
 const VEHICLE: Vehicle = {
   id: "v1", name: "Test rig", year: 2010, make: null, model: null, trim: null, frontSuspension: "solid-axle", boltPattern: "6x5.5", hubBoreMm: 108,
-  stockSetup: CUR, currentSetup: CUR, liftHeightMm: null, kingpinInclinationDeg: null, axleRatio: 3.73, transmissionRatio: 1, notes: "",
+  stockSetup: CUR, currentSetup: CUR, liftHeightMm: null, kingpinInclinationDeg: null, axleRatio: 3.73, transmissionRatio: 1, clearanceMarginMm: 12.7, notes: "",
   createdAt: "", updatedAt: "",
 };
 const point = (id: string, direction: VehicleClearance["direction"], distanceMm: number): VehicleClearance => ({

@@ -25,7 +25,7 @@ function useOrigin(): string {
 
 /** Opens the comparison in the workspace through the URL codec, remembering which saved one it is. */
 export function workspaceHref(c: SavedComparison): string {
-  return `/workspace?${encodeComparison(c.input)}&saved=${c.id}`;
+  return `/workspace?${encodeComparison(c.input)}&saved=${c.id}${c.vehicleId ? `&v=${c.vehicleId}` : ""}`;
 }
 
 function useDebounced<T>(value: T, ms: number): T {
@@ -180,6 +180,16 @@ function ComparisonItem({ c, prefs }: { c: SavedComparison; prefs: DisplayPrefs 
         <Link href={workspaceHref(c)} className={buttonClass("primary", "min-h-9 py-1.5")} aria-label={`Open ${c.name} in the workspace`}>
           Open in workspace
         </Link>
+        {c.vehicleId && (
+          <Link
+            href={`/garage/${c.vehicleId}/checklist?comparison=${c.id}`}
+            className={buttonClass("secondary", "min-h-9 py-1.5")}
+            aria-label={`Install checklist for ${c.name}`}
+            data-testid="comparison-checklist"
+          >
+            Install checklist
+          </Link>
+        )}
         {!renaming && (
           <Button variant="secondary" className="min-h-9 py-1.5" onClick={() => setRenaming(true)} aria-label={`Rename ${c.name}`}>
             Rename

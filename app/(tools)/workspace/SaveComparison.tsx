@@ -33,8 +33,10 @@ function inputErrorText(error: unknown): string | null {
  * this very comparison (it lives in the URL); members save it as new, or save changes to the
  * saved comparison they opened.
  */
-export function SaveComparison({ signedIn, saved: openedFrom }: { signedIn: boolean; saved: { id: string; name: string } | null }) {
-  const { input, complete } = useCurrentInput();
+export function SaveComparison({ signedIn, saved: openedFrom }: { signedIn: boolean; saved: { id: string; name: string; vehicleId: string | null } | null }) {
+  const { input, complete, vehicleId } = useCurrentInput();
+  // Members with a garage tie the comparison to the picked vehicle (or untie it); others send nothing.
+  const vehicleBody = vehicleId === undefined ? {} : { vehicleId };
   const qc = useQueryClient();
   const [saved, setSaved] = useState(openedFrom);
   const [formOpen, setFormOpen] = useState(false);
@@ -42,9 +44,12 @@ export function SaveComparison({ signedIn, saved: openedFrom }: { signedIn: bool
   const form = useForm<NameForm>({ resolver: zodResolver(nameForm), defaultValues: { name: "" } });
 
   const create = useMutation({
-    mutationFn: (name: string) => api<{ comparison: SavedComparison }>("/api/comparisons", { method: "POST", body: { name, input } }),
+    mutationFn: (name: string) => api<{ comparison: SavedComparison }>("/api/comparisons", { method: "POST", body: { name, input, ...vehicleBody } }),
     onSuccess: ({ comparison }) => {
-      setSaved({ id: comparison.id, name: comparison.name });
+      setSaved({ id: comparison.id, name: comparison.name, vehicleId: comparison.vehicleId });
+      // A reload keeps the saved comparison: the workspace carries `saved` through its edits.
+      const search = window.location.search.replace(/([?&])saved=[^&]*&?/, "$1").replace(/[?&]$/, "");
+      window.history.replaceState(window.history.state, "", `${search || "?"}${search ? "&" : ""}saved=${comparison.id}`);
       setFormOpen(false);
       setNotice(`Saved as “${comparison.name}”.`);
       void qc.invalidateQueries({ queryKey: ["comparisons"] });
@@ -55,8 +60,9 @@ export function SaveComparison({ signedIn, saved: openedFrom }: { signedIn: bool
     },
   });
   const update = useMutation({
-    mutationFn: (id: string) => api<{ comparison: SavedComparison }>(`/api/comparisons/${id}`, { method: "PATCH", body: { input } }),
+    mutationFn: (id: string) => api<{ comparison: SavedComparison }>(`/api/comparisons/${id}`, { method: "PATCH", body: { input, ...vehicleBody } }),
     onSuccess: ({ comparison }) => {
+      setSaved({ id: comparison.id, name: comparison.name, vehicleId: comparison.vehicleId });
       setNotice(`Changes saved to “${comparison.name}”.`);
       void qc.invalidateQueries({ queryKey: ["comparisons"] });
     },
@@ -105,6 +111,11 @@ export function SaveComparison({ signedIn, saved: openedFrom }: { signedIn: bool
           <Button onClick={openForm} disabled={!complete || formOpen}>
             Save comparison…
           </Button>
+        )}
+        {saved?.vehicleId && saved.vehicleId === vehicleId && (
+          <Link href={`/garage/${saved.vehicleId}/checklist?comparison=${saved.id}`} className="text-sm font-semibold text-ember-700 underline-offset-2 hover:underline" data-testid="saved-checklist">
+            Install checklist from this comparison
+          </Link>
         )}
         <Link href="/comparisons" className="ml-auto text-sm font-semibold text-ember-700 underline-offset-2 hover:underline">
           My comparisons

@@ -1,6 +1,7 @@
 "use client";
+import dynamic from "next/dynamic";
 import { type ReactNode, useCallback, useEffect, useMemo, useRef, useState } from "react";
-import { CrossSection } from "@/components/comparison/CrossSection";
+import { CrossSection, type DrawnLimits } from "@/components/comparison/CrossSection";
 import { DisplayToggle } from "@/components/comparison/DisplayToggle";
 import { LazyComparisonCharts } from "@/components/comparison/LazyComparisonCharts";
 import { HeadlineChanges, SetupDetailTable, WarningList } from "@/components/comparison/ResultsPanel";
@@ -11,9 +12,27 @@ import { type Draft, type DraftErrors, type SetupDraft, draftFromInput, followTi
 import type { DisplayPrefs } from "@/lib/comparison/format";
 import { type ComparisonInput, DEFAULT_INPUT } from "@/lib/comparison/model";
 import { decodeComparison, encodeComparison } from "@/lib/comparison/url";
+import type { WorkspaceVehicle } from "@/lib/garage/types";
 import { CurrentInputContext } from "./currentInput";
 import { SetupFields } from "./SetupFields";
 import { VehicleFields } from "./VehicleFields";
+
+// Only members with vehicles load the garage panel (and the prediction code with it).
+const GaragePanel = dynamic(() => import("./GaragePanel"), { ssr: false, loading: () => <div className="h-24 animate-pulse rounded-card bg-basalt-50" role="status" aria-label="Loading your garage" /> });
+
+/** Parameters the workspace keeps in its URL besides the comparison: the saved comparison and the vehicle. */
+const KEPT_PARAMS = ["saved", "v"] as const;
+
+function keptQuery(overrides: Partial<Record<(typeof KEPT_PARAMS)[number], string | null>> = {}): string {
+  const now = new URLSearchParams(window.location.search);
+  const out = new URLSearchParams();
+  for (const k of KEPT_PARAMS) {
+    const v = k in overrides ? overrides[k] : now.get(k);
+    if (v) out.set(k, v);
+  }
+  const q = out.toString();
+  return q ? `&${q}` : "";
+}
 
 interface State {
   draft: Draft;
@@ -43,11 +62,24 @@ function reformat(s: State, prefs: DisplayPrefs): State {
 }
 
 /** `saveSlot`: controls shown in the toolbar (the save control), reading the comparison through CurrentInputContext. */
-export function Workspace({ initialInput, initialProblems, saveSlot }: { initialInput: ComparisonInput; initialProblems: string[]; saveSlot?: ReactNode }) {
+export function Workspace({
+  initialInput,
+  initialProblems,
+  saveSlot,
+  garage,
+}: {
+  initialInput: ComparisonInput;
+  initialProblems: string[];
+  saveSlot?: ReactNode;
+  /** The signed-in member's vehicles (none for visitors and shop roles). */
+  garage?: { vehicles: WorkspaceVehicle[]; initialVehicleId: string | null } | null;
+}) {
   const [prefs, setPrefs] = useDisplayPrefs();
   const [state, setState] = useState<State>(() => fromInput(initialInput, prefs));
   const [linkNote, setLinkNote] = useState<string | null>(initialProblems.length > 0 ? `Some values in the link were not understood and use defaults: ${initialProblems.join(", ")}.` : null);
   const [copied, setCopied] = useState<"idle" | "done" | "failed">("idle");
+  const [vehicleId, setVehicleId] = useState<string | null>(garage?.initialVehicleId ?? null);
+  const [limits, setLimits] = useState<DrawnLimits | null>(null);
   // An edit (typing in one field) is one history entry: the first change pushes, the rest replace.
   const editOpen = useRef(false);
 
@@ -59,7 +91,7 @@ export function Workspace({ initialInput, initialProblems, saveSlot }: { initial
   }
 
   const writeUrl = useCallback((input: ComparisonInput, mode: "push" | "replace") => {
-    const q = `?${encodeComparison(input)}`;
+    const q = `?${encodeComparison(input)}${keptQuery()}`;
     if (q === window.location.search) return;
     if (mode === "push") window.history.pushState(null, "", q);
     else window.history.replaceState(window.history.state, "", q);
@@ -85,11 +117,31 @@ export function Workspace({ initialInput, initialProblems, saveSlot }: { initial
       editOpen.current = false;
       const { input } = decodeComparison(window.location.search);
       setState(fromInput(input, prefs));
+      const v = new URLSearchParams(window.location.search).get("v");
+      setVehicleId(garage?.vehicles.some((x) => x.id === v) ? v : null);
       setLinkNote(null);
     };
     window.addEventListener("popstate", onPop);
     return () => window.removeEventListener("popstate", onPop);
-  }, [prefs]);
+  }, [prefs, garage]);
+
+  const pickVehicle = useCallback((id: string | null) => {
+    setVehicleId(id);
+    window.history.replaceState(window.history.state, "", `?${window.location.search.slice(1).split("&").filter((kv) => kv && !KEPT_PARAMS.includes(kv.split("=")[0] as never)).join("&")}${keptQuery({ v: id })}`);
+  }, []);
+  const takeVehicle = (v: WorkspaceVehicle) => {
+    const next: ComparisonInput = {
+      ...s.good,
+      current: v.currentSetup,
+      vehicle: {
+        ...s.good.vehicle,
+        kingpinInclinationDeg: v.kingpinInclinationDeg,
+        axleRatio: v.axleRatio ?? DEFAULT_INPUT.vehicle.axleRatio,
+        transmissionRatio: v.transmissionRatio ?? DEFAULT_INPUT.vehicle.transmissionRatio,
+      },
+    };
+    apply(draftFromInput(next, prefs), true);
+  };
 
   const result = useMemo(() => computeComparison(s.good), [s.good]);
   const defaultsText = useMemo(() => draftFromInput(DEFAULT_INPUT, prefs).vehicle, [prefs]);
@@ -127,7 +179,7 @@ export function Workspace({ initialInput, initialProblems, saveSlot }: { initial
   };
 
   return (
-    <CurrentInputContext value={{ input: s.good, complete: errorCount === 0 }}>
+    <CurrentInputContext value={{ input: s.good, complete: errorCount === 0, vehicleId: garage ? vehicleId : undefined }}>
     <div className="flex flex-col gap-6">
       <div className="flex flex-wrap items-end justify-between gap-4">
         <DisplayToggle prefs={prefs} onChange={setPrefs} />
@@ -150,6 +202,9 @@ export function Workspace({ initialInput, initialProblems, saveSlot }: { initial
         <SetupFields {...setupProps("planned")} />
       </div>
       <VehicleFields draft={s.draft.vehicle} defaults={defaultsText} errors={s.errors} prefs={prefs} onChange={(vehicle) => apply({ ...s.draft, vehicle })} onCommit={commit} />
+      {garage && garage.vehicles.length > 0 && (
+        <GaragePanel vehicles={garage.vehicles} vehicleId={vehicleId} planned={s.good.planned} prefs={prefs} onPick={pickVehicle} onLimits={setLimits} onUseVehicle={takeVehicle} />
+      )}
 
       <div aria-labelledby="results-title" role="region" className="flex flex-col gap-6">
         <div className="flex min-h-10 flex-wrap items-center justify-between gap-2">
@@ -164,7 +219,7 @@ export function Workspace({ initialInput, initialProblems, saveSlot }: { initial
         <div className="grid items-start gap-6 lg:grid-cols-[3fr_2fr]">
           <section aria-labelledby="drawing-title" className="rounded-card bg-white p-3 shadow-card ring-1 ring-basalt-100 sm:p-4">
             <h2 id="drawing-title" className="mb-2 text-lg font-semibold">Side by side at the hub</h2>
-            <CrossSection result={result} prefs={prefs} />
+            <CrossSection result={result} prefs={prefs} limits={vehicleId ? limits : null} />
           </section>
           <WarningList result={result} prefs={prefs} />
         </div>

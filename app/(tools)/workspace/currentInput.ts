@@ -9,6 +9,8 @@ import type { ComparisonInput } from "@/lib/comparison/schema";
 export interface CurrentInput {
   input: ComparisonInput;
   complete: boolean;
+  /** The garage vehicle picked in the workspace (null: none); undefined where there is no garage (visitors, shop roles). */
+  vehicleId?: string | null;
 }
 
 export const CurrentInputContext = createContext<CurrentInput | null>(null);

@@ -1,10 +1,12 @@
 import type { Metadata } from "next";
 import { z } from "zod";
 import { PageHeader } from "@/components/ui/PageHeader";
-import { currentCaller } from "@/lib/auth/session";
 import { decodeComparison } from "@/lib/comparison/url";
 import { db } from "@/lib/db";
+import { admits, currentCaller } from "@/lib/auth/session";
+import { GARAGE_ACCESS } from "@/lib/garage/access";
 import { getComparison } from "@/lib/server/comparisons";
+import { workspaceVehicles } from "@/lib/server/garage";
 import { SaveComparison } from "./SaveComparison";
 import { Workspace } from "./Workspace";
 
@@ -18,7 +20,7 @@ async function openedFrom(userId: string | undefined, raw: string | string[] | u
   const id = z.uuid().safeParse(Array.isArray(raw) ? raw[0] : raw);
   if (!userId || !id.success) return null;
   const c = await getComparison(db, userId, id.data).catch(() => undefined);
-  return c ? { id: c.id, name: c.name } : null;
+  return c ? { id: c.id, name: c.name, vehicleId: c.vehicleId } : null;
 }
 
 export default async function WorkspacePage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
@@ -26,13 +28,17 @@ export default async function WorkspacePage({ searchParams }: { searchParams: Pr
   const { input, problems } = decodeComparison(sp);
   const caller = await currentCaller().catch(() => null);
   const saved = await openedFrom(caller?.userId, sp.saved);
+  // Members see their garage: `v` (or the saved comparison's vehicle) picks one of their own vehicles.
+  const vehicles = caller && admits(GARAGE_ACCESS, caller) ? await workspaceVehicles(db, caller.userId) : null;
+  const wanted = (Array.isArray(sp.v) ? sp.v[0] : sp.v) ?? saved?.vehicleId ?? null;
+  const garage = vehicles ? { vehicles, initialVehicleId: vehicles.some((v) => v.id === wanted) ? wanted : null } : null;
   return (
     <>
       <PageHeader
         title="Comparison workspace"
         lead="Enter what you run and what you plan. Every figure updates as you type, in your browser; the link in the address bar reproduces this comparison."
       />
-      <Workspace initialInput={input} initialProblems={problems} saveSlot={<SaveComparison signedIn={caller !== null} saved={saved} />} />
+      <Workspace initialInput={input} initialProblems={problems} garage={garage} saveSlot={<SaveComparison signedIn={caller !== null} saved={saved} />} />
     </>
   );
 }

@@ -9,19 +9,20 @@ import { Badge } from "@/components/ui/Badge";
 import { buttonClass } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { TextField } from "@/components/ui/TextField";
-import { type ClearanceStatus, DEFAULT_CLEARANCE_MARGIN_MM, compareSetups, predictClearances } from "@/lib/fitment";
-import { bothUnits, signedMm } from "@/lib/garage/format";
+import { DEFAULT_CLEARANCE_MARGIN_MM, compareSetups } from "@/lib/fitment";
+import { bothUnits, marginText, signedMm } from "@/lib/garage/format";
+import { urlNumber } from "@/lib/comparison/url";
 import { setupQuery, workspaceHref } from "@/lib/garage/links";
 import type { VehicleDetail } from "@/lib/garage/types";
-import { CLEARANCE_DIRECTION_LABEL, marginSchema } from "@/lib/validation/garage";
+import { CLEARANCE_DIRECTION_LABEL, CLEARANCE_STATUS_LABEL } from "@/lib/garage/labels";
+import { marginSchema } from "@/lib/validation/garage";
 import { type SetupFormValues, type SetupValues, setupSchema, setupToForm, toEngineSetup } from "@/lib/validation/setup";
 import { SetupFields } from "../_components/SetupFields";
+import { predictPoints } from "@/lib/garage/predict";
 
 const plannedFormSchema = z.object({ planned: setupSchema, margin: marginSchema });
 type PlannedForm = { planned: SetupFormValues; margin: string };
 
-export const STATUS_TONE: Record<ClearanceStatus, "clear" | "tight" | "contact"> = { clear: "clear", tight: "tight", contact: "contact" };
-export const STATUS_LABEL: Record<ClearanceStatus, string> = { clear: "Clear", tight: "Tight", contact: "Contact" };
 
 /** A planned setup typed in, and what every measured point is predicted to become with it. */
 export function PlannedPanel({ detail, initialPlanned }: { detail: VehicleDetail; initialPlanned: SetupValues | null }) {
@@ -29,7 +30,7 @@ export function PlannedPanel({ detail, initialPlanned }: { detail: VehicleDetail
   const form = useForm<PlannedForm>({
     resolver: zodResolver(plannedFormSchema) as never,
     mode: "onChange",
-    defaultValues: { planned: setupToForm(initialPlanned ?? v.currentSetup), margin: "1/2 in" },
+    defaultValues: { planned: setupToForm(initialPlanned ?? v.currentSetup), margin: marginText(v.clearanceMarginMm) },
   });
   const values = useWatch({ control: form.control }) as PlannedForm;
   const planned = setupSchema.safeParse(values.planned);
@@ -51,11 +52,7 @@ export function PlannedPanel({ detail, initialPlanned }: { detail: VehicleDetail
       axleRatio: v.axleRatio ?? undefined,
       transmissionRatio: v.transmissionRatio ?? undefined,
     });
-    const predictions = predictClearances(
-      clearances.map((c) => ({ direction: c.direction, distanceMm: c.distanceMm, measuredWith: toEngineSetup(c.measuredSetup) })),
-      p,
-      { marginMm: margin.data },
-    );
+    const predictions = predictPoints(clearances, planned.data, margin.data);
     return { cmp, predictions };
     // plannedKey and the margin text stand for the parsed values
     // eslint-disable-next-line react-hooks/exhaustive-deps
@@ -71,7 +68,7 @@ export function PlannedPanel({ detail, initialPlanned }: { detail: VehicleDetail
           <TextField
             id="f-margin"
             label="Safety margin"
-            hint={`Default 1/2 in (${DEFAULT_CLEARANCE_MARGIN_MM} mm) — common practice, no source. A point closer than this is tight.`}
+            hint={`This vehicle's margin is ${marginText(v.clearanceMarginMm)} (set it when editing the vehicle; 1/2 in = ${DEFAULT_CLEARANCE_MARGIN_MM} mm is the common-practice default, no source). Try another here; a point closer than this is tight.`}
             {...form.register("margin")}
             error={form.formState.errors.margin?.message}
           />
@@ -122,7 +119,7 @@ export function PlannedPanel({ detail, initialPlanned }: { detail: VehicleDetail
                             <td>{signedMm(p.changeMm)}</td>
                             <td>{bothUnits(p.predictedMm)}</td>
                             <td>
-                              <Badge tone={STATUS_TONE[p.status]}>{STATUS_LABEL[p.status]}</Badge>
+                              <Badge tone={p.status}>{CLEARANCE_STATUS_LABEL[p.status]}</Badge>
                               {p.shortfallMm > 0 && <span className="block text-xs text-basalt-600">needs {bothUnits(p.shortfallMm)}</span>}
                             </td>
                           </tr>
@@ -137,7 +134,7 @@ export function PlannedPanel({ detail, initialPlanned }: { detail: VehicleDetail
                   <Link href={workspaceHref(v.currentSetup, planned.data, v)} className={buttonClass("secondary")} data-testid="open-workspace">
                     Open current vs planned in the workspace
                   </Link>
-                  <Link href={`/garage/${v.id}/checklist?${plannedKey}`} className={buttonClass("primary")}>Install checklist</Link>
+                  <Link href={`/garage/${v.id}/checklist?${plannedKey}${margin.success && margin.data !== v.clearanceMarginMm ? `&m=${urlNumber(margin.data)}` : ""}`} className={buttonClass("primary")}>Install checklist</Link>
                 </div>
               )}
             </>

@@ -9,7 +9,8 @@ import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { TextField } from "@/components/ui/TextField";
 import { api, applyFieldErrors } from "@/lib/client/api";
-import { formatLength, parseBoltPattern, formatBoltPattern } from "@/lib/fitment";
+import { formatBoltPattern, formatLength, parseBoltPattern } from "@/lib/fitment";
+import { marginText } from "@/lib/garage/format";
 import type { Vehicle } from "@/lib/garage/types";
 import { FRONT_SUSPENSION_LABEL, type VehicleFormValues, type VehicleValues, vehicleSchema } from "@/lib/validation/garage";
 import { EMPTY_SETUP_FORM, setupToForm } from "@/lib/validation/setup";
@@ -17,14 +18,14 @@ import { SetupFields } from "./SetupFields";
 
 const FIELDS = [
   "name", "year", "make", "model", "trim", "frontSuspension", "boltPattern", "hubBoreMm", "liftHeightMm",
-  "kingpinInclinationDeg", "axleRatio", "transmissionRatio", "notes",
+  "kingpinInclinationDeg", "axleRatio", "transmissionRatio", "clearanceMarginMm", "notes",
 ] as const;
 
 function toForm(v: Vehicle | null): VehicleFormValues {
   if (!v) {
     return {
       name: "", year: "", make: "", model: "", trim: "", frontSuspension: "independent", boltPattern: "", hubBoreMm: "",
-      stockSetup: EMPTY_SETUP_FORM, currentSetup: EMPTY_SETUP_FORM, liftHeightMm: "", kingpinInclinationDeg: "", axleRatio: "", transmissionRatio: "", notes: "",
+      stockSetup: EMPTY_SETUP_FORM, currentSetup: EMPTY_SETUP_FORM, liftHeightMm: "", kingpinInclinationDeg: "", axleRatio: "", transmissionRatio: "", clearanceMarginMm: "1/2 in", notes: "",
     };
   }
   const n = (x: number | null) => (x === null ? "" : String(x));
@@ -33,6 +34,7 @@ function toForm(v: Vehicle | null): VehicleFormValues {
     boltPattern: v.boltPattern, hubBoreMm: n(v.hubBoreMm), stockSetup: setupToForm(v.stockSetup), currentSetup: setupToForm(v.currentSetup),
     liftHeightMm: v.liftHeightMm === null ? "" : formatLength(v.liftHeightMm, { unit: "in", fraction: 16 }),
     kingpinInclinationDeg: n(v.kingpinInclinationDeg), axleRatio: n(v.axleRatio), transmissionRatio: n(v.transmissionRatio), notes: v.notes,
+    clearanceMarginMm: marginText(v.clearanceMarginMm),
   };
 }
 
@@ -96,6 +98,12 @@ export function VehicleForm({ vehicle }: { vehicle: Vehicle | null }) {
         <TextField label="Kingpin inclination (°)" hint="Optional, from the maker's data, e.g. 8" {...register("kingpinInclinationDeg")} error={e.kingpinInclinationDeg?.message} />
         <TextField label="Axle ratio" hint="Optional, e.g. 3.73" {...register("axleRatio")} error={e.axleRatio?.message} />
         <TextField label="Top-gear ratio" hint="Optional, e.g. 0.72 (overdrive) or 1.00" {...register("transmissionRatio")} error={e.transmissionRatio?.message} />
+        <TextField
+          label="Clearance margin"
+          hint="The gap you want kept at every measured point; 1/2 in if left empty (common practice, no source). e.g. 3/4 in or 15 mm"
+          {...register("clearanceMarginMm")}
+          error={e.clearanceMarginMm?.message}
+        />
         <div className="flex flex-col gap-1 sm:col-span-2">
           <label htmlFor="f-notes" className="text-sm font-medium text-basalt-800">Notes</label>
           <textarea id="f-notes" rows={3} className="rounded-lg border border-basalt-300 bg-white px-3 py-2" {...register("notes")} aria-describedby="f-notes-error" />

@@ -8,10 +8,13 @@ import { api } from "@/lib/client/api";
 import { type ChecklistGroup, type ChecklistItem, GROUP_TITLE } from "@/lib/garage/checklist";
 import type { SetupValues } from "@/lib/validation/setup";
 
-export function ChecklistView({ vehicleId, planned, items, initialTicked }: { vehicleId: string; planned: SetupValues; items: ChecklistItem[]; initialTicked: string[] }) {
+/** What the checklist was built from, sent back with the ticks so the server rebuilds the same list. */
+export type ChecklistSourceBody = { planned: SetupValues; marginMm: number } | { comparisonId: string; marginMm: number };
+
+export function ChecklistView({ vehicleId, source, items, initialTicked }: { vehicleId: string; source: ChecklistSourceBody; items: ChecklistItem[]; initialTicked: string[] }) {
   const [ticked, setTicked] = useState<Set<string>>(new Set(initialTicked));
   const save = useMutation({
-    mutationFn: (next: string[]) => api<{ ticked: string[] }>(`/api/vehicles/${vehicleId}/checklist`, { method: "PUT", body: { planned, ticked: next } }),
+    mutationFn: (next: string[]) => api<{ ticked: string[] }>(`/api/vehicles/${vehicleId}/checklist`, { method: "PUT", body: { ...source, ticked: next } }),
   });
   const toggle = (id: string) => {
     const next = new Set(ticked);

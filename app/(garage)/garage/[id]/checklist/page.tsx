@@ -6,48 +6,71 @@ import { Alert } from "@/components/ui/Alert";
 import { buttonClass } from "@/components/ui/Button";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { requirePageCaller } from "@/lib/auth/session";
+import { encodeComparison } from "@/lib/comparison/url";
 import { db } from "@/lib/db";
-import { DEFAULT_CLEARANCE_MARGIN_MM } from "@/lib/fitment";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
-import { buildChecklist } from "@/lib/garage/checklist";
-import { setupLine } from "@/lib/garage/format";
+import { bothUnits, setupLine } from "@/lib/garage/format";
 import { setupFromQuery, setupQuery } from "@/lib/garage/links";
-import { findChecklist, vehicleDetail } from "@/lib/server/garage";
+import { checklistTicks, resolveChecklist } from "@/lib/server/checklists";
+import { marginMmParam } from "@/lib/validation/garage";
 import { ChecklistView } from "./ChecklistView";
 
 export const metadata: Metadata = { title: "Install checklist" };
+
+const first = (v: string | string[] | undefined) => (Array.isArray(v) ? v[0] : v);
 
 export default async function ChecklistPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const [{ id }, sp] = await Promise.all([params, searchParams]);
   const caller = await requirePageCaller(`/garage/${id}/checklist`, GARAGE_ACCESS);
   if (!z.uuid().safeParse(id).success) notFound();
-  const detail = await vehicleDetail(db, caller.userId, id);
-  if (!detail) notFound();
-  const planned = setupFromQuery("p", sp);
-  if (!planned) {
+  const rawComparison = first(sp.comparison);
+  const comparisonId = z.uuid().safeParse(rawComparison).data;
+  if (rawComparison !== undefined && !comparisonId) notFound();
+  const r = await resolveChecklist(db, caller.userId, id, { comparisonId, planned: setupFromQuery("p", sp), marginMm: marginMmParam.parse(first(sp.m)) });
+  if (!r.ok && r.reason !== "planned") notFound();
+  if (!r.ok) {
     return (
       <>
-        <PageHeader title={`Install checklist — ${detail.vehicle.name}`} />
+        <PageHeader title="Install checklist" />
         <Alert tone="info">
-          Plan a setup on the <Link className="underline" href={`/garage/${id}`}>vehicle page</Link> first; its checklist link opens this page for that setup.
+          Plan a setup on the <Link className="underline" href={`/garage/${id}`}>vehicle page</Link>, or open a saved comparison tied to this vehicle from{" "}
+          <Link className="underline" href="/comparisons">your comparisons</Link>; their checklist links open this page for that setup.
         </Alert>
       </>
     );
   }
-  const checklist = buildChecklist({ ...detail, planned, marginMm: DEFAULT_CLEARANCE_MARGIN_MM });
-  const row = await findChecklist(db, id, setupQuery("p", planned));
+  const { vehicle } = r.detail;
+  const ticked = await checklistTicks(db, r);
+  const marginNote = `Margin ${bothUnits(r.marginMm)}${r.marginMm === vehicle.clearanceMarginMm ? " (this vehicle's)" : " (tried instead of this vehicle's)"}.`;
+  const backHref = r.comparison
+    ? `/workspace?${encodeComparison(r.comparison.input)}&saved=${r.comparison.id}&v=${vehicle.id}`
+    : `/garage/${id}?${setupQuery("p", r.planned)}`;
+  const currentDiffers = r.comparison !== null && setupQuery("c", r.comparison.input.current) !== setupQuery("c", vehicle.currentSetup);
   return (
     <>
       <PageHeader
-        title={`Install checklist — ${detail.vehicle.name}`}
-        lead={`From ${setupLine(detail.vehicle.currentSetup)} to ${setupLine(planned)}. Margin 1/2 in (common practice).`}
+        title={`Install checklist — ${vehicle.name}`}
+        lead={`${r.comparison ? `From the saved comparison “${r.comparison.name}”: ` : ""}${setupLine(vehicle.currentSetup)} to ${setupLine(r.planned)}. ${marginNote}`}
         actions={
           <div className="no-print flex gap-2">
-            <Link href={`/garage/${id}?${setupQuery("p", planned)}`} className={buttonClass("secondary")}>Back to the plan</Link>
+            <Link href={backHref} className={buttonClass("secondary")}>
+              {r.comparison ? "Back to the comparison" : "Back to the plan"}
+            </Link>
           </div>
         }
       />
-      <ChecklistView vehicleId={id} planned={planned} items={checklist.items} initialTicked={row?.ticked ?? []} />
+      {currentDiffers && (
+        <Alert tone="info" className="mb-4">
+          The comparison starts from {setupLine(r.comparison!.input.current)}, but the vehicle&apos;s current setup is {setupLine(vehicle.currentSetup)}. The checklist works from the
+          vehicle&apos;s, the setup its points were measured against.
+        </Alert>
+      )}
+      <ChecklistView
+        vehicleId={id}
+        source={r.comparison ? { comparisonId: r.comparison.id, marginMm: r.marginMm } : { planned: r.planned, marginMm: r.marginMm }}
+        items={r.checklist.items}
+        initialTicked={ticked}
+      />
     </>
   );
 }

@@ -1,0 +1,159 @@
+"use client";
+import Link from "next/link";
+import { useEffect, useMemo } from "react";
+import { Badge } from "@/components/ui/Badge";
+import { Button } from "@/components/ui/Button";
+import { type DisplayPrefs, formatLen } from "@/lib/comparison/format";
+import type { SetupInputValues } from "@/lib/comparison/model";
+import { encodeSetupQuery } from "@/lib/comparison/url";
+import { CLEARANCE_DIRECTION_LABEL, CLEARANCE_STATUS_LABEL } from "@/lib/garage/labels";
+import { measuredLimits, predictPoints } from "@/lib/garage/predict";
+import type { WorkspaceVehicle } from "@/lib/garage/types";
+
+/** Where the picked vehicle's measured parts sit, mm from the hub face (drawn on the cross-section). */
+export interface VehicleLimits {
+  innerMm: number | null;
+  outerMm: number | null;
+}
+
+/**
+ * The signed-in member's garage inside the workspace: pick a vehicle and every measured point
+ * is predicted for the planned setup here (each against the setup it was measured with), and
+ * its inner limit and fender lip are drawn on the cross-section.
+ */
+export default function GaragePanel({
+  vehicles,
+  vehicleId,
+  planned,
+  prefs,
+  onPick,
+  onLimits,
+  onUseVehicle,
+}: {
+  vehicles: WorkspaceVehicle[];
+  vehicleId: string | null;
+  planned: SetupInputValues;
+  prefs: DisplayPrefs;
+  onPick: (id: string | null) => void;
+  onLimits: (limits: VehicleLimits | null) => void;
+  onUseVehicle: (v: WorkspaceVehicle) => void;
+}) {
+  const vehicle = vehicles.find((v) => v.id === vehicleId) ?? null;
+  const view = useMemo(() => {
+    if (!vehicle) return null;
+    const predictions = predictPoints(vehicle.clearances, planned, vehicle.clearanceMarginMm);
+    const limits = measuredLimits(vehicle.clearances);
+    return { predictions, limits };
+  }, [vehicle, planned]);
+
+  const innerMm = view?.limits.maxInnerSwingMm ?? null;
+  const outerMm = view?.limits.maxOuterSwingMm ?? null;
+  useEffect(() => {
+    onLimits(vehicle ? { innerMm, outerMm } : null);
+  }, [vehicle, innerMm, outerMm, onLimits]);
+
+  const len = (mm: number) => formatLen(mm, prefs, { decimals: prefs.units === "metric" ? 0 : 2 });
+  const contacts = view?.predictions.filter((p) => p.status === "contact").length ?? 0;
+  const tight = view?.predictions.filter((p) => p.status === "tight").length ?? 0;
+
+  return (
+    <section aria-labelledby="garage-title" className="rounded-card bg-white p-4 shadow-card ring-1 ring-basalt-100 sm:p-5" data-testid="garage-panel">
+      <div className="flex flex-wrap items-end justify-between gap-3">
+        <div>
+          <h2 id="garage-title" className="text-lg font-semibold">On a vehicle from your garage</h2>
+          <p className="text-sm text-basalt-600">Its measured points, predicted for the planned setup above.</p>
+        </div>
+        <div className="flex flex-col gap-1">
+          <label htmlFor="ws-vehicle" className="text-sm font-medium text-basalt-800">Vehicle</label>
+          <select
+            id="ws-vehicle"
+            className="min-h-10 min-w-[14rem] rounded-lg border border-basalt-300 bg-white px-3"
+            value={vehicleId ?? ""}
+            onChange={(e) => onPick(e.target.value || null)}
+          >
+            <option value="">None picked</option>
+            {vehicles.map((v) => (
+              <option key={v.id} value={v.id}>{v.name}</option>
+            ))}
+          </select>
+        </div>
+      </div>
+      {vehicle && view && (
+        <div className="mt-4 flex flex-col gap-3">
+          <div className="flex flex-wrap items-center gap-2">
+            <Button variant="secondary" onClick={() => onUseVehicle(vehicle)}>Use its current setup and figures</Button>
+            <Link href={`/garage/${vehicle.id}?${encodeSetupQuery("p", planned)}`} className="text-sm font-semibold text-ember-700 underline-offset-2 hover:underline">
+              Open the vehicle page
+            </Link>
+            <Link
+              href={`/garage/${vehicle.id}/checklist?${encodeSetupQuery("p", planned)}`}
+              className="text-sm font-semibold text-ember-700 underline-offset-2 hover:underline"
+            >
+              Install checklist for this plan
+            </Link>
+          </div>
+          {vehicle.clearances.length === 0 ? (
+            <p className="text-sm text-basalt-700">No measured points yet: add them on the vehicle page to see what this setup would touch.</p>
+          ) : (
+            <>
+              <p
+                role="status"
+                data-testid="garage-summary"
+                className={`rounded-lg px-3 py-2 text-sm ${contacts ? "bg-contact-100 text-contact-800" : tight ? "bg-tight-100 text-tight-800" : "bg-clear-100 text-clear-800"}`}
+              >
+                {contacts
+                  ? `${contacts} of ${vehicle.clearances.length} points predicted to touch.`
+                  : tight
+                    ? `${tight} of ${vehicle.clearances.length} points closer than the margin.`
+                    : `All ${vehicle.clearances.length} points keep the margin.`}{" "}
+                Margin {len(vehicle.clearanceMarginMm)} (this vehicle&apos;s).
+              </p>
+              <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Predicted clearances (scrolls sideways on narrow screens)">
+                <table className="w-full min-w-[520px] text-left text-sm" data-testid="workspace-predictions">
+                  <caption className="sr-only">Predicted clearance at each measured point of {vehicle.name}</caption>
+                  <thead className="text-xs uppercase tracking-wide text-basalt-500">
+                    <tr>
+                      <th className="py-2">Point</th>
+                      <th>Measured</th>
+                      <th>Change</th>
+                      <th>Predicted</th>
+                      <th>Status</th>
+                    </tr>
+                  </thead>
+                  <tbody className="divide-y divide-basalt-100 tabular-nums">
+                    {view.predictions.map((p, i) => {
+                      const c = vehicle.clearances[i]!;
+                      return (
+                        <tr key={c.id}>
+                          <td className="py-2 pr-2">
+                            <span className="font-medium">{c.label}</span>
+                            <span className="block text-xs text-basalt-500">{CLEARANCE_DIRECTION_LABEL[c.direction]}</span>
+                          </td>
+                          <td>{len(p.measuredMm)}</td>
+                          <td>{formatLen(p.changeMm, prefs, { signed: true, decimals: prefs.units === "metric" ? 0 : 2 })}</td>
+                          <td>{len(p.predictedMm)}</td>
+                          <td>
+                            <Badge tone={p.status}>{CLEARANCE_STATUS_LABEL[p.status]}</Badge>
+                            {p.shortfallMm > 0 && <span className="block text-xs text-basalt-600">needs {len(p.shortfallMm)}</span>}
+                          </td>
+                        </tr>
+                      );
+                    })}
+                  </tbody>
+                </table>
+              </div>
+              <p className="text-xs text-basalt-600">
+                {innerMm !== null && <>Inner limit (nearest inboard part) {len(innerMm)} from the hub face. </>}
+                {outerMm !== null && <>Fender lip (nearest outboard part) {len(outerMm)} from the hub face. </>}
+                Inboard points follow the inner clearance change, outboard points the poke change, upward and fore/aft points at lock the radius change — each
+                from the setup it was measured with, suspension and steering stops as they were. Predictions are a planning aid: test-fit and cycle the
+                suspension and steering lock before driving.
+              </p>
+            </>
+          )}
+        </div>
+      )}
+    </section>
+  );
+}
+
