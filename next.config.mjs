@@ -20,6 +20,10 @@ const csp = [
 const nextConfig = {
   reactStrictMode: true,
   poweredByHeader: false,
+  // Next hashes the whole HTML of every cached (static) page on every request to make an ETag;
+  // on the share page that was about a third of the server's time per view. Dynamic pages get
+  // no ETag anyway, and shared caches in front (CDN) validate on their own copy, so none is made.
+  generateEtags: false,
   serverExternalPackages: ["knex", "pg", "nodemailer", "bcryptjs", "pdfkit"],
   async headers() {
     return [
