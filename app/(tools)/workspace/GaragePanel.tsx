@@ -1,12 +1,11 @@
 "use client";
 import Link from "next/link";
 import { useEffect, useMemo } from "react";
-import { Badge } from "@/components/ui/Badge";
+import { PredictionTable } from "@/components/garage/PredictionTable";
 import { Button } from "@/components/ui/Button";
 import { type DisplayPrefs, formatLen } from "@/lib/comparison/format";
 import type { SetupInputValues } from "@/lib/comparison/model";
 import { encodeSetupQuery } from "@/lib/comparison/url";
-import { CLEARANCE_DIRECTION_LABEL, CLEARANCE_STATUS_LABEL } from "@/lib/garage/labels";
 import { measuredLimits, predictPoints } from "@/lib/garage/predict";
 import type { WorkspaceVehicle } from "@/lib/garage/types";
 
@@ -108,40 +107,14 @@ export default function GaragePanel({
                     : `All ${vehicle.clearances.length} points keep the margin.`}{" "}
                 Margin {len(vehicle.clearanceMarginMm)} (this vehicle&apos;s).
               </p>
-              <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Predicted clearances (scrolls sideways on narrow screens)">
-                <table className="w-full min-w-[520px] text-left text-sm" data-testid="workspace-predictions">
-                  <caption className="sr-only">Predicted clearance at each measured point of {vehicle.name}</caption>
-                  <thead className="text-xs uppercase tracking-wide text-basalt-500">
-                    <tr>
-                      <th className="py-2">Point</th>
-                      <th>Measured</th>
-                      <th>Change</th>
-                      <th>Predicted</th>
-                      <th>Status</th>
-                    </tr>
-                  </thead>
-                  <tbody className="divide-y divide-basalt-100 tabular-nums">
-                    {view.predictions.map((p, i) => {
-                      const c = vehicle.clearances[i]!;
-                      return (
-                        <tr key={c.id}>
-                          <td className="py-2 pr-2">
-                            <span className="font-medium">{c.label}</span>
-                            <span className="block text-xs text-basalt-500">{CLEARANCE_DIRECTION_LABEL[c.direction]}</span>
-                          </td>
-                          <td>{len(p.measuredMm)}</td>
-                          <td>{formatLen(p.changeMm, prefs, { signed: true, decimals: prefs.units === "metric" ? 0 : 2 })}</td>
-                          <td>{len(p.predictedMm)}</td>
-                          <td>
-                            <Badge tone={p.status}>{CLEARANCE_STATUS_LABEL[p.status]}</Badge>
-                            {p.shortfallMm > 0 && <span className="block text-xs text-basalt-600">needs {len(p.shortfallMm)}</span>}
-                          </td>
-                        </tr>
-                      );
-                    })}
-                  </tbody>
-                </table>
-              </div>
+              <PredictionTable
+                points={vehicle.clearances}
+                predictions={view.predictions}
+                len={len}
+                signed={(mm: number) => formatLen(mm, prefs, { signed: true, decimals: prefs.units === "metric" ? 0 : 2 })}
+                caption={`Predicted clearance at each measured point of ${vehicle.name}`}
+                testId="workspace-predictions"
+              />
               <p className="text-xs text-basalt-600">
                 {innerMm !== null && <>Inner limit (nearest inboard part) {len(innerMm)} from the hub face. </>}
                 {outerMm !== null && <>Fender lip (nearest outboard part) {len(outerMm)} from the hub face. </>}

@@ -11,7 +11,7 @@ import { ApiError, api, applyFieldErrors } from "@/lib/client/api";
 import type { ComparisonInput } from "@/lib/comparison/schema";
 import { encodeComparison } from "@/lib/comparison/url";
 import { type SavedComparison, comparisonNameSchema } from "@/lib/validation/comparisons";
-import { useCurrentInput } from "./currentInput";
+import { useCurrentInput, withParam } from "./currentInput";
 
 const nameForm = z.object({ name: comparisonNameSchema });
 type NameForm = z.infer<typeof nameForm>;
@@ -48,8 +48,7 @@ export function SaveComparison({ signedIn, saved: openedFrom }: { signedIn: bool
     onSuccess: ({ comparison }) => {
       setSaved({ id: comparison.id, name: comparison.name, vehicleId: comparison.vehicleId });
       // A reload keeps the saved comparison: the workspace carries `saved` through its edits.
-      const search = window.location.search.replace(/([?&])saved=[^&]*&?/, "$1").replace(/[?&]$/, "");
-      window.history.replaceState(window.history.state, "", `${search || "?"}${search ? "&" : ""}saved=${comparison.id}`);
+      window.history.replaceState(window.history.state, "", withParam(window.location.search, "saved", comparison.id));
       setFormOpen(false);
       setNotice(`Saved as “${comparison.name}”.`);
       void qc.invalidateQueries({ queryKey: ["comparisons"] });

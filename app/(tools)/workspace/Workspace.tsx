@@ -13,7 +13,7 @@ import type { DisplayPrefs } from "@/lib/comparison/format";
 import { type ComparisonInput, DEFAULT_INPUT } from "@/lib/comparison/model";
 import { decodeComparison, encodeComparison } from "@/lib/comparison/url";
 import type { WorkspaceVehicle } from "@/lib/garage/types";
-import { CurrentInputContext } from "./currentInput";
+import { CurrentInputContext, withParam } from "./currentInput";
 import { SetupFields } from "./SetupFields";
 import { VehicleFields } from "./VehicleFields";
 
@@ -23,11 +23,11 @@ const GaragePanel = dynamic(() => import("./GaragePanel"), { ssr: false, loading
 /** Parameters the workspace keeps in its URL besides the comparison: the saved comparison and the vehicle. */
 const KEPT_PARAMS = ["saved", "v"] as const;
 
-function keptQuery(overrides: Partial<Record<(typeof KEPT_PARAMS)[number], string | null>> = {}): string {
+function keptQuery(): string {
   const now = new URLSearchParams(window.location.search);
   const out = new URLSearchParams();
   for (const k of KEPT_PARAMS) {
-    const v = k in overrides ? overrides[k] : now.get(k);
+    const v = now.get(k);
     if (v) out.set(k, v);
   }
   const q = out.toString();
@@ -127,7 +127,7 @@ export function Workspace({
 
   const pickVehicle = useCallback((id: string | null) => {
     setVehicleId(id);
-    window.history.replaceState(window.history.state, "", `?${window.location.search.slice(1).split("&").filter((kv) => kv && !KEPT_PARAMS.includes(kv.split("=")[0] as never)).join("&")}${keptQuery({ v: id })}`);
+    window.history.replaceState(window.history.state, "", withParam(window.location.search, "v", id));
   }, []);
   const takeVehicle = (v: WorkspaceVehicle) => {
     const next: ComparisonInput = {

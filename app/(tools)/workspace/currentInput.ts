@@ -20,3 +20,13 @@ export function useCurrentInput(): CurrentInput {
   if (!v) throw new Error("useCurrentInput outside the workspace");
   return v;
 }
+
+/**
+ * `search` with one parameter set (or removed with null), the others kept as written — the
+ * comparison's own encoding stays readable (no re-encoding of `/` or `,`).
+ */
+export function withParam(search: string, key: string, value: string | null): string {
+  const kept = search.replace(/^\?/, "").split("&").filter((kv) => kv !== "" && kv.split("=")[0] !== key);
+  if (value) kept.push(`${key}=${encodeURIComponent(value)}`);
+  return `?${kept.join("&")}`;
+}

@@ -4,8 +4,8 @@ import Link from "next/link";
 import { useEffect, useMemo } from "react";
 import { useForm, useWatch } from "react-hook-form";
 import { z } from "zod";
+import { PredictionTable } from "@/components/garage/PredictionTable";
 import { Alert } from "@/components/ui/Alert";
-import { Badge } from "@/components/ui/Badge";
 import { buttonClass } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { TextField } from "@/components/ui/TextField";
@@ -14,7 +14,6 @@ import { bothUnits, marginText, signedMm } from "@/lib/garage/format";
 import { urlNumber } from "@/lib/comparison/url";
 import { setupQuery, workspaceHref } from "@/lib/garage/links";
 import type { VehicleDetail } from "@/lib/garage/types";
-import { CLEARANCE_DIRECTION_LABEL, CLEARANCE_STATUS_LABEL } from "@/lib/garage/labels";
 import { marginSchema } from "@/lib/validation/garage";
 import { type SetupFormValues, type SetupValues, setupSchema, setupToForm, toEngineSetup } from "@/lib/validation/setup";
 import { SetupFields } from "../_components/SetupFields";
@@ -94,40 +93,7 @@ export function PlannedPanel({ detail, initialPlanned }: { detail: VehicleDetail
               {clearances.length === 0 ? (
                 <p className="text-sm text-basalt-700">Add measured points above to see what this setup would touch.</p>
               ) : (
-                <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Predicted clearances (scrolls sideways on narrow screens)">
-                  <table className="w-full min-w-[560px] text-left text-sm" data-testid="predictions">
-                    <caption className="sr-only">Predicted clearance at each measured point</caption>
-                    <thead className="text-xs uppercase tracking-wide text-basalt-500">
-                      <tr>
-                        <th className="py-2">Point</th>
-                        <th>Measured</th>
-                        <th>Change</th>
-                        <th>Predicted</th>
-                        <th>Status</th>
-                      </tr>
-                    </thead>
-                    <tbody className="divide-y divide-basalt-100">
-                      {result.predictions.map((p, i) => {
-                        const c = clearances[i]!;
-                        return (
-                          <tr key={c.id}>
-                            <td className="py-2 pr-2">
-                              <span className="font-medium">{c.label}</span>
-                              <span className="block text-xs text-basalt-500">{CLEARANCE_DIRECTION_LABEL[c.direction]}</span>
-                            </td>
-                            <td>{bothUnits(p.measuredMm)}</td>
-                            <td>{signedMm(p.changeMm)}</td>
-                            <td>{bothUnits(p.predictedMm)}</td>
-                            <td>
-                              <Badge tone={p.status}>{CLEARANCE_STATUS_LABEL[p.status]}</Badge>
-                              {p.shortfallMm > 0 && <span className="block text-xs text-basalt-600">needs {bothUnits(p.shortfallMm)}</span>}
-                            </td>
-                          </tr>
-                        );
-                      })}
-                    </tbody>
-                  </table>
-                </div>
+                <PredictionTable points={clearances} predictions={result.predictions} len={bothUnits} signed={signedMm} caption="Predicted clearance at each measured point" testId="predictions" />
               )}
               {planned.success && (
                 <div className="no-print flex flex-wrap gap-2">
