@@ -75,7 +75,7 @@ describe("computeComparison — the demo comparison 265/70R17 on 17x8 +25 vs 37x
   });
 
   it("load index, speed symbol and load range (ISO 4000-1 tables; pressure from memory of TRA practice)", () => {
-    // ISO 4000-1: LI 113 = 1150 kg, LI 124 = 1600 kg; 1 lb = 0.45359237 kg (NIST), convert-units within 1e-6.
+    // ISO 4000-1: LI 113 = 1150 kg, LI 124 = 1600 kg; 1 lb = 0.45359237 kg exactly (NIST SP 811 B.8).
     expect(r.current.load?.kg).toBe(1150);
     expect(r.current.load?.lb).toBeCloseTo(1150 / 0.45359237, 1);
     expect(r.planned.load?.kg).toBe(1600);

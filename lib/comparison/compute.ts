@@ -12,11 +12,11 @@
  * - regear: the ratio that restores the engine speed differs from the axle ratio by 5 % or more
  *   and a different common ratio is nearer (common practice, no source).
  */
-import convert from "convert-units";
 import {
   KM_PER_MILE,
   backspacingFromOffset,
   compareSetups,
+  kgToLb,
   loadIndexKg,
   loadRangeInfo,
   parseTireSize,
@@ -128,7 +128,6 @@ export interface ComparisonResult {
   engine: SetupComparison;
 }
 
-const kgToLb = (kg: number): number => convert(kg).from("kg").to("lb");
 /** The length placeholder of warning titles; `warningTitle` in format.ts fills it in the user's units. */
 export const LENGTH_TOKEN = "{len}";
 

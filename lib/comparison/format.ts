@@ -1,11 +1,9 @@
 /**
  * Display helpers for the comparison screens: one unit choice (inch or metric) and one length
  * style (decimals or fractions) applied everywhere. Lengths go through the engine's
- * `formatLength`; speed, pressure and mass conversions through the engine's units (and
- * convert-units for pounds). Negative values use the typographic minus sign (U+2212).
+ * `formatLength`; speed, pressure and mass conversions through the engine's units. Negative values use the typographic minus sign (U+2212).
  */
-import convert from "convert-units";
-import { KM_PER_MILE, formatLength, inToMm, psiToKpa } from "@/lib/fitment";
+import { KM_PER_MILE, formatLength, inToMm, kgToLb, psiToKpa } from "@/lib/fitment";
 import { type ComparisonWarning, LENGTH_TOKEN } from "./compute";
 
 export type UnitSystem = "imperial" | "metric";
@@ -98,7 +96,7 @@ export function formatSpeedRating(kmh: number, mph: number, prefs: DisplayPrefs)
 
 /** A load in both units, the chosen one first: "1,450 kg (3,197 lb)". */
 export function formatLoad(kg: number, prefs: DisplayPrefs): string {
-  const lb = convert(kg).from("kg").to("lb");
+  const lb = kgToLb(kg);
   return prefs.units === "metric" ? `${formatNumber(kg)} kg (${formatNumber(lb)} lb)` : `${formatNumber(lb)} lb (${formatNumber(kg)} kg)`;
 }
 

@@ -14,9 +14,12 @@ export {
   kpaToPsi,
   ftLbToNm,
   nmToFtLb,
-  convertPressure,
-  type PressureUnit,
+  KG_PER_LB,
+  kgToLb,
+  lbToKg,
 } from "./units";
+// convertPressure (lib/fitment/pressure.ts) is imported from its own module, not from here: it
+// brings convert-units, which pages using only the engine should not download.
 export {
   LOAD_INDEX_KG,
   MAX_LOAD_INDEX,

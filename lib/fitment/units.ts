@@ -1,17 +1,15 @@
 /**
- * Unit conversions at the edges of the engine. Everything inside is SI (mm, kPa, N·m).
+ * Unit conversions at the edges of the engine. Everything inside is SI (mm, kPa, N·m, kg).
  *
- * - Length: the inch is defined as exactly 25.4 mm (NIST SP 811, appendix B.8; international
- *   yard and pound, 1959). convert-units 2.3.4 derives the inch through a rounded metre/foot
- *   anchor (1 m = 3.28084 ft) and returns 25.3999992 mm, which would break exact inch-metric
- *   equivalences such as 4.5 in = 114.3 mm; lengths therefore use the exact definition.
- * - Pressure (psi ⇄ kPa ⇄ bar): through convert-units (its psi factor 6.89476 kPa agrees with
- *   NIST SP 811's 6.894757 kPa to 5e-7 relative).
- * - Torque (ft·lbf ⇄ N·m): convert-units 2.3 has no torque measure, so 1 ft·lbf is built from
- *   convert-units' foot (m) × pound (kg) × standard gravity g_n = 9.80665 m/s² (exact, NIST SP 811);
- *   agrees with NIST's 1.355818 N·m to 1e-6 relative.
+ * The factors are the definitions of the international yard and pound (1959) and standard
+ * gravity, as NIST SP 811 (2008) appendix B.8 gives them: 1 in = 25.4 mm, 1 lb = 0.45359237 kg
+ * and g_n = 9.80665 m/s², all exact; the psi (lbf/in²) and the ft·lbf follow from them. The
+ * engine does not go through convert-units: its 2.3.4 anchors are rounded (1 m = 3.28084 ft gives
+ * 25.3999992 mm per inch, which would break exact equivalences such as 4.5 in = 114.3 mm), and it
+ * bundles every measure it knows (≈ 16 kB gzip) into each page that uses the engine. The
+ * converter page converts pressures through convert-units (lib/fitment/pressure.ts), and the
+ * tests hold these factors against both NIST and convert-units.
  */
-import convert from "convert-units";
 
 /** Millimetres per inch, exact by definition (NIST SP 811 B.8). */
 export const MM_PER_IN = 25.4;
@@ -22,11 +20,13 @@ export const KM_PER_MILE = 1.609344;
 /** Standard acceleration of gravity, m/s² (exact, NIST SP 811). */
 export const STANDARD_GRAVITY = 9.80665;
 
-/** Pressure units accepted by {@link convertPressure}. */
-export type PressureUnit = "psi" | "kPa" | "bar";
+/** Kilograms per pound (exact, NIST SP 811 B.8). */
+export const KG_PER_LB = 0.45359237;
 
-const PSI_TO_KPA = convert(1).from("psi").to("kPa");
-const FTLB_TO_NM = convert(1).from("ft").to("m") * convert(1).from("lb").to("kg") * STANDARD_GRAVITY;
+/** kPa per psi: one pound-force on a square inch (≈ 6.894757). */
+const PSI_TO_KPA = (KG_PER_LB * STANDARD_GRAVITY) / (MM_PER_IN / 1000) ** 2 / 1000;
+/** N·m per ft·lbf: one pound-force on a foot of 0.3048 m (≈ 1.355818). */
+const FTLB_TO_NM = 0.3048 * KG_PER_LB * STANDARD_GRAVITY;
 
 /**
  * Inches to millimetres (exact).
@@ -45,17 +45,8 @@ export function mmToIn(mm: number): number {
 }
 
 /**
- * Converts a pressure between psi, kPa and bar through convert-units.
- * @example convertPressure(50, "psi", "kPa"); // ≈ 344.7
- */
-export function convertPressure(value: number, from: PressureUnit, to: PressureUnit): number {
-  if (from === to) return value;
-  return convert(value).from(from).to(to);
-}
-
-/**
  * psi to kPa.
- * @example psiToKpa(1); // ≈ 6.89476
+ * @example psiToKpa(1); // ≈ 6.894757
  */
 export function psiToKpa(psi: number): number {
   return psi * PSI_TO_KPA;
@@ -83,4 +74,20 @@ export function ftLbToNm(ftLb: number): number {
  */
 export function nmToFtLb(nm: number): number {
   return nm / FTLB_TO_NM;
+}
+
+/**
+ * Kilograms to pounds (exact definition).
+ * @example kgToLb(0.45359237); // 1
+ */
+export function kgToLb(kg: number): number {
+  return kg / KG_PER_LB;
+}
+
+/**
+ * Pounds to kilograms (exact definition).
+ * @example lbToKg(1000); // 453.59237
+ */
+export function lbToKg(lb: number): number {
+  return lb * KG_PER_LB;
 }

@@ -8,6 +8,7 @@ import {
   type ClearancePrediction,
   compareSetups,
   formatLength,
+  kgToLb,
   loadIndexKg,
   loadRangeInfo,
   parseBoltPattern,
@@ -39,7 +40,6 @@ export interface Checklist {
   predictions: { clearance: VehicleClearance; prediction: ClearancePrediction }[];
 }
 
-const LB_PER_KG = 1 / 0.45359237; // 1 lb = 0.45359237 kg exactly (NIST SP 811)
 
 const DIRECTION_FIX: Record<VehicleClearance["direction"], string> = {
   inboard: "trim or relieve the part, or choose a wheel that sits further outboard (less backspacing)",
@@ -177,7 +177,7 @@ export function buildChecklist(input: { vehicle: Vehicle; clearances: VehicleCle
   items.push({
     id: "load",
     group: "tires",
-    title: kg === null ? "Load: check the load index against the axle ratings" : `Load: index ${li} = ${Math.round(kg)} kg (${Math.round(kg * LB_PER_KG)} lb) per tire`,
+    title: kg === null ? "Load: check the load index against the axle ratings" : `Load: index ${li} = ${Math.round(kg)} kg (${Math.round(kgToLb(kg))} lb) per tire`,
     detail: "Two tires must carry at least each axle's rating on the door placard (ISO 4000-1 load index table), with the pressure that goes with it.",
   });
   const range = t.loadRange === null || t.system === "numeric" ? null : loadRangeInfo(t.loadRange, t.system === "metric" ? "metric" : "flotation");

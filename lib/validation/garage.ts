@@ -53,9 +53,12 @@ export const marginSchema = z
 
 /** The vehicle's margin: left empty, the common-practice default 1/2 in. */
 export const vehicleMarginSchema = z
-  .union([z.literal(""), z.null(), marginSchema])
+  .union([z.number(), z.string(), z.null()])
   .optional()
-  .transform((v) => (v === "" || v === null || v === undefined ? DEFAULT_CLEARANCE_MARGIN_MM : v));
+  // Blank first, then one schema: a union of "" and the margin would report a bad margin as
+  // "Invalid input" instead of saying what a margin looks like.
+  .transform((v) => (v === null || v === undefined || (typeof v === "string" && v.trim() === "") ? DEFAULT_CLEARANCE_MARGIN_MM : v))
+  .pipe(marginSchema);
 
 export const vehicleSchema = z.object({
   name: text("a name", 80).min(1, "Give the vehicle a name (e.g. Gravel hauler)."),

@@ -152,13 +152,56 @@ describe("the garage in Chromium", () => {
     await expect.poll(async () => (await rows.allTextContents()).every((t) => t.includes("17x9"))).toBe(true);
     await axeClean("garage-finder");
     const href = (await page.getByTestId("candidate-workspace").first().getAttribute("href")) ?? "";
-    // The workspace page lives on another branch: the link's query is checked here instead.
     const q = new URL(href, "http://x").searchParams;
     expect(href.startsWith("/workspace?")).toBe(true);
     expect(q.get("ct")).toBe("265/70R17");
     expect(q.get("pd")).toBe("17");
     expect(q.get("pw")).toBe("9");
     expect(q.get("po")).toMatch(/^-?\d+$/);
+    expect(q.get("v")).toBe(vehicleUrl.split("/").pop());
+  });
+
+  it("opens the tallest candidate in the workspace with the vehicle picked, and sees the predicted contact flagged and drawn", async () => {
+    // Sorted tallest first: anything over 840.9 mm (33.1 in) closes the bumper corner's 19.05 mm
+    // (3/4 in) gap at lock, since the radius grows by half the diameter change from 802.8 mm.
+    await page.getByRole("button", { name: /^Diameter/ }).click();
+    await expect.poll(() => page.locator("th", { hasText: "Diameter" }).getAttribute("aria-sort")).toBe("descending");
+    const top = page.getByTestId("finder-results").locator("tbody tr").first();
+    await top.getByTestId("candidate-workspace").click();
+    await page.waitForURL(/\/workspace\?.*v=/);
+    const panel = page.getByTestId("garage-panel");
+    await expect.poll(() => panel.isVisible(), { timeout: 15000 }).toBe(true);
+    expect(await page.locator("#ws-vehicle option:checked").textContent()).toBe(`Dune Skiff ${stamp}`);
+    await expect.poll(() => page.getByTestId("garage-summary").textContent()).toMatch(/^[12] of 2 points predicted to touch\. Margin/);
+    const predictions = page.getByTestId("workspace-predictions");
+    await expect.poll(() => predictions.locator("tr", { hasText: "Bumper corner" }).textContent()).toMatch(/Contact/);
+    // The frame rail is the nearest inboard part: its line is drawn on the cross-section.
+    expect(await page.getByTestId("inner-limit").count()).toBe(1);
+    await axeClean("garage-workspace-candidate");
+  });
+
+  it("saves the comparison for the vehicle and opens its install checklist from the workspace and from the list", async () => {
+    const name = `Skiff plan ${stamp}`;
+    await page.getByRole("button", { name: "Save comparison…" }).click();
+    await page.getByLabel("Name of the comparison").fill(name);
+    await page.getByRole("button", { name: "Save", exact: true }).click();
+    await expect.poll(() => page.getByTestId("save-status").innerText()).toContain(`Saved as “${name}”`);
+    await expect.poll(() => page.url()).toMatch(/saved=[0-9a-f-]{36}/);
+    await page.getByTestId("saved-checklist").click();
+    await page.waitForURL(/\/checklist\?comparison=/);
+    await expect.poll(() => page.getByText(/From the saved comparison/).isVisible()).toBe(true);
+    await expect.poll(() => page.getByText(/Contact at Bumper corner/).isVisible()).toBe(true);
+    await page.locator('input[data-item="spare"]').check();
+    await expect.poll(() => page.getByTestId("checklist-status").textContent()).toMatch(/^1 of \d+ done/);
+    await axeClean("garage-checklist-from-comparison");
+
+    await page.goto("/comparisons");
+    await page.getByLabel("Search by name or tire size").fill(stamp);
+    const card = page.getByTestId("saved-comparison").filter({ has: page.getByRole("heading", { name }) });
+    await expect.poll(() => card.count()).toBe(1);
+    await card.getByTestId("comparison-checklist").click();
+    await page.waitForURL(/\/checklist\?comparison=/);
+    await expect.poll(() => page.locator('input[data-item="spare"]').isChecked()).toBe(true);
   });
 
   it("fits a 375 px phone screen: the vehicle page with a plan, and the finder, scroll only vertically", async () => {

@@ -365,4 +365,105 @@ describe("install checklists", () => {
     expect((await PUT(req("PUT", `/api/vehicles/${id}/checklist`, { planned: PLANNED, ticked: [] }), ctx({ id }))).status).toBe(404);
     expect((await db("install_checklists").where({ vehicle_id: id }).first()).ticked).toEqual(["regear", "alignment"]);
   });
+
+  it("builds the checklist from a saved comparison tied to the vehicle, and stores the link", async () => {
+    const { GET, PUT } = await checklist();
+    const comparisons = await import("@/app/api/comparisons/route");
+    const { DEFAULT_INPUT } = await import("@/lib/comparison/schema");
+    const { body: a } = await createAs("ada", { ...VEHICLE, name: "Comparison hauler" });
+    const { body: b } = await createAs("ada", { ...VEHICLE, name: "Second hauler" });
+    const { body: bos } = await createAs("bo", { ...VEHICLE, name: "Bo's other rig" });
+    const A = a.vehicle.id as string;
+    const saveFor = async (who: Who, vehicleId: string | null) => {
+      as(who);
+      const res = await comparisons.POST(req("POST", "/api/comparisons", { name: `35s for ${who}`, input: { ...DEFAULT_INPUT, planned: PLANNED }, vehicleId }), ctx());
+      expect(res.status).toBe(201);
+      return (await res.json()).comparison.id as string;
+    };
+    const tied = await saveFor("ada", A);
+    const tiedToB = await saveFor("ada", b.vehicle.id);
+    const untied = await saveFor("ada", null);
+    const bosOwn = await saveFor("bo", bos.vehicle.id);
+
+    as("ada");
+    const get = (query: string) => GET(req("GET", `/api/vehicles/${A}/checklist?${query}`), ctx({ id: A }));
+    const res = await get(`comparison=${tied}`);
+    expect(res.status).toBe(200);
+    const first = await res.json();
+    expect(first.comparisonId).toBe(tied);
+    expect(first.marginMm).toBeCloseTo(12.7, 9);
+    // A comparison of the caller's tied to another vehicle, one tied to none, another member's:
+    // none is this vehicle's checklist, and the answer does not say which case it was.
+    for (const id of [tiedToB, untied, bosOwn]) {
+      const r = await get(`comparison=${id}`);
+      expect(r.status).toBe(404);
+      expect((await r.json()).error).toMatch(/saved comparison/);
+    }
+    expect((await get("comparison=not-an-id")).status).toBe(400);
+
+    const put = await PUT(req("PUT", `/api/vehicles/${A}/checklist`, { comparisonId: tied, ticked: ["alignment"] }), ctx({ id: A }));
+    expect(put.status).toBe(200);
+    expect((await db("install_checklists").where({ vehicle_id: A }).first()).comparison_id).toBe(tied);
+    // The same planned setup opened from the vehicle page shows the same ticks.
+    expect((await (await get(Q)).json()).ticked).toEqual(["alignment"]);
+    const foreign = await PUT(req("PUT", `/api/vehicles/${A}/checklist`, { comparisonId: bosOwn, ticked: ["regear"] }), ctx({ id: A }));
+    expect(foreign.status).toBe(404);
+    expect((await db("install_checklists").where({ vehicle_id: A }).first()).ticked).toEqual(["alignment"]);
+
+    // Deleting the comparison keeps the checklist and its ticks, without the link (ON DELETE SET NULL).
+    await db("comparisons").where({ id: tied }).delete();
+    const row = await db("install_checklists").where({ vehicle_id: A }).first();
+    expect(row).toMatchObject({ comparison_id: null, ticked: ["alignment"] });
+  });
+
+  it("classes the points against the vehicle's margin, or the one tried with m", async () => {
+    const { GET } = await checklist();
+    const { body } = await createAs("ada", { ...VEHICLE, name: "Margin hauler" });
+    const id = body.vehicle.id as string;
+    as("ada");
+    const point = await clearances.POST(
+      req("POST", `/api/vehicles/${id}/clearances`, { label: "fender lip, full stuff", direction: "upward", distance: "3 in", suspensionState: "full-stuff" }),
+      ctx({ id }),
+    );
+    const pointId = (await point.json()).clearance.id as string;
+    const trims = async (query: string) => {
+      const r = await (await GET(req("GET", `/api/vehicles/${id}/checklist?${query}`), ctx({ id }))).json();
+      return { margin: r.marginMm as number, trims: (r.items as { id: string; title: string }[]).filter((i) => i.id.startsWith("trim:")) };
+    };
+    // 3 in = 76.2 mm measured; 265/70R17 → 35x12.50R17LT raises the tire's top by
+    // (889.0 − 802.8) / 2 = 43.1 mm (ETRTO/TRA size designations), leaving 33.1 mm.
+    expect(await trims(Q)).toEqual({ margin: 12.7, trims: [] });
+    const tried = await trims(`${Q}&m=40`);
+    expect(tried.margin).toBe(40);
+    expect(tried.trims).toEqual([expect.objectContaining({ id: `trim:${pointId}`, title: expect.stringMatching(/^Tight at fender lip, full stuff/) })]);
+    // An unusable m is ignored, not an error: the vehicle's margin applies.
+    expect((await trims(`${Q}&m=-5`)).margin).toBe(12.7);
+
+    const patch = await vehicle.PATCH(req("PATCH", `/api/vehicles/${id}`, { ...VEHICLE, name: "Margin hauler", clearanceMarginMm: "1-1/2 in" }), ctx({ id }));
+    expect(patch.status).toBe(200);
+    // 1-1/2 in = 38.1 mm (NIST SP 811)
+    expect((await patch.json()).vehicle.clearanceMarginMm).toBeCloseTo(38.1, 9);
+    const now = await trims(Q);
+    expect(now.margin).toBeCloseTo(38.1, 9);
+    expect(now.trims.map((t) => t.id)).toEqual([`trim:${pointId}`]);
+  });
+});
+
+describe("the vehicle's clearance margin", () => {
+  it("defaults to 1/2 in (12.7 mm, common practice) and refuses a margin it cannot read or keep", async () => {
+    const { res, body } = await createAs("ada", { ...VEHICLE, name: "Default margin" });
+    expect(res.status).toBe(201);
+    expect(body.vehicle.clearanceMarginMm).toBeCloseTo(12.7, 9);
+    const mm = await createAs("ada", { ...VEHICLE, name: "Metric margin", clearanceMarginMm: "20 mm" });
+    expect(mm.body.vehicle.clearanceMarginMm).toBe(20);
+    const before = await db("vehicles").count();
+    for (const bad of ["lots", "-1/4 in", "5 in"]) {
+      const r = await createAs("ada", { ...VEHICLE, name: "Bad margin", clearanceMarginMm: bad });
+      expect(r.res.status, bad).toBe(422);
+      expect(r.body.fieldErrors.clearanceMarginMm[0]).toMatch(/margin/);
+    }
+    expect(await db("vehicles").count()).toEqual(before);
+    const stored = await db("vehicles").where({ id: body.vehicle.id }).first();
+    expect(stored.clearance_margin_mm).toBeCloseTo(12.7, 9);
+  });
 });

@@ -5,7 +5,7 @@ import { finderGoalsSchema, finderPlan } from "@/lib/garage/finderGoals";
 import { runFinderJob, type FinderReply } from "@/lib/garage/finderJob";
 import { setupFromQuery, setupQuery, workspaceHref } from "@/lib/garage/links";
 import type { Vehicle, VehicleClearance } from "@/lib/garage/types";
-import { clearanceSchema, vehicleSchema } from "@/lib/validation/garage";
+import { clearanceSchema, vehicleMarginSchema, vehicleSchema } from "@/lib/validation/garage";
 import { type SetupValues, setupSchema } from "@/lib/validation/setup";
 
 const CUR: SetupValues = { tire: "265/70R17", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 }, spacerMm: 0 };
@@ -53,6 +53,25 @@ describe("clearance input", () => {
     expect(bare.error!.issues[0]!.message).toMatch(/Say which unit 38 is in/);
     expect(clearanceSchema.parse({ label: "x", direction: "upward", distance: "1-1/2", unit: "in", suspensionState: "full-stuff" }).distanceMm).toBeCloseTo(38.1, 9);
     expect(clearanceSchema.parse({ label: "x", direction: "upward", distance: "38 mm", unit: "in", suspensionState: "full-stuff" }).distanceMm).toBe(38);
+  });
+});
+
+describe("the vehicle's clearance margin", () => {
+  it("reads blank as the 1/2 in default (common practice, no source), fractions as inches (1 in = 25.4 mm, NIST SP 811)", () => {
+    expect(vehicleMarginSchema.parse("")).toBeCloseTo(12.7, 9);
+    expect(vehicleMarginSchema.parse("  ")).toBeCloseTo(12.7, 9);
+    expect(vehicleMarginSchema.parse(null)).toBeCloseTo(12.7, 9);
+    expect(vehicleMarginSchema.parse(undefined)).toBeCloseTo(12.7, 9);
+    expect(vehicleMarginSchema.parse("3/4")).toBeCloseTo(19.05, 9);
+    expect(vehicleMarginSchema.parse("15 mm")).toBe(15);
+    expect(vehicleMarginSchema.parse(20)).toBe(20);
+  });
+
+  it("says what a margin looks like when it cannot read one, and keeps it within 0–100 mm", () => {
+    const msg = (v: unknown) => vehicleMarginSchema.safeParse(v).error?.issues[0]?.message;
+    expect(msg("lots")).toBe("The margin should look like 1/2 in or 12 mm.");
+    expect(msg("-2 mm")).toBe("The margin cannot be negative.");
+    expect(msg("5 in")).toBe("Keep the margin at most 100 mm.");
   });
 });
 

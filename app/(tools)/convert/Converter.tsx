@@ -3,7 +3,8 @@ import { useState } from "react";
 import { Card } from "@/components/ui/Card";
 import { TextField } from "@/components/ui/TextField";
 import { formatNumber } from "@/lib/comparison/format";
-import { convertPressure, equivalentSizes, formatLength, ftLbToNm, mmToIn, nmToFtLb, parseLength, parseTireSize } from "@/lib/fitment";
+import { equivalentSizes, formatLength, ftLbToNm, mmToIn, nmToFtLb, parseLength, parseTireSize } from "@/lib/fitment";
+import { convertPressure } from "@/lib/fitment/pressure";
 import { LinkedFields, type LinkedUnit } from "./LinkedFields";
 
 const trim = (n: number, decimals: number) => String(Number(n.toFixed(decimals)));

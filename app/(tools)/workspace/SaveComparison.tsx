@@ -5,13 +5,12 @@ import Link from "next/link";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { z } from "zod";
-import { Button, buttonClass } from "@/components/ui/Button";
+import { Button } from "@/components/ui/Button";
 import { TextField } from "@/components/ui/TextField";
 import { ApiError, api, applyFieldErrors } from "@/lib/client/api";
 import type { ComparisonInput } from "@/lib/comparison/schema";
-import { encodeComparison } from "@/lib/comparison/url";
 import { type SavedComparison, comparisonNameSchema } from "@/lib/validation/comparisons";
-import { useCurrentInput, withParam } from "./currentInput";
+import { type OpenedComparison, useCurrentInput, withParam } from "./currentInput";
 
 const nameForm = z.object({ name: comparisonNameSchema });
 type NameForm = z.infer<typeof nameForm>;
@@ -29,11 +28,10 @@ function inputErrorText(error: unknown): string | null {
 }
 
 /**
- * The workspace's save control. Anonymous visitors get a sign-in link that brings them back to
- * this very comparison (it lives in the URL); members save it as new, or save changes to the
- * saved comparison they opened.
+ * The members' save control: save as new, or save changes to the saved comparison they opened.
+ * Loaded by SaveSlot only for members (it carries the form library and zod).
  */
-export function SaveComparison({ signedIn, saved: openedFrom }: { signedIn: boolean; saved: { id: string; name: string; vehicleId: string | null } | null }) {
+export function SaveComparison({ saved: openedFrom }: { saved: OpenedComparison | null }) {
   const { input, complete, vehicleId } = useCurrentInput();
   // Members with a garage tie the comparison to the picked vehicle (or untie it); others send nothing.
   const vehicleBody = vehicleId === undefined ? {} : { vehicleId };
@@ -72,18 +70,6 @@ export function SaveComparison({ signedIn, saved: openedFrom }: { signedIn: bool
       } else setNotice(inputErrorText(error) ?? (error as Error).message);
     },
   });
-
-  if (!signedIn) {
-    const back = `/workspace?${encodeComparison(input)}`;
-    return (
-      <div className="flex flex-wrap items-center gap-3 rounded-lg bg-white px-4 py-3 ring-1 ring-basalt-100" data-testid="save-prompt">
-        <Link href={`/sign-in?callbackUrl=${encodeURIComponent(back)}`} className={buttonClass("secondary")}>
-          Sign in to save
-        </Link>
-        <p className="text-sm text-basalt-600">Signed-in members keep comparisons and share them. Until then this comparison lives in the link.</p>
-      </div>
-    );
-  }
 
   const openForm = () => {
     form.reset({ name: saved ? `${saved.name} (variant)`.slice(0, 120) : suggestedName(input) });

@@ -13,6 +13,13 @@ export interface CurrentInput {
   vehicleId?: string | null;
 }
 
+/** The saved comparison the workspace was opened from. */
+export interface OpenedComparison {
+  id: string;
+  name: string;
+  vehicleId: string | null;
+}
+
 export const CurrentInputContext = createContext<CurrentInput | null>(null);
 
 export function useCurrentInput(): CurrentInput {

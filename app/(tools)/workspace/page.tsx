@@ -7,7 +7,7 @@ import { admits, currentCaller } from "@/lib/auth/session";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
 import { getComparison } from "@/lib/server/comparisons";
 import { workspaceVehicles } from "@/lib/server/garage";
-import { SaveComparison } from "./SaveComparison";
+import { SaveSlot } from "./SaveSlot";
 import { Workspace } from "./Workspace";
 
 export const metadata: Metadata = {
@@ -38,7 +38,7 @@ export default async function WorkspacePage({ searchParams }: { searchParams: Pr
         title="Comparison workspace"
         lead="Enter what you run and what you plan. Every figure updates as you type, in your browser; the link in the address bar reproduces this comparison."
       />
-      <Workspace initialInput={input} initialProblems={problems} garage={garage} saveSlot={<SaveComparison signedIn={caller !== null} saved={saved} />} />
+      <Workspace initialInput={input} initialProblems={problems} garage={garage} saveSlot={<SaveSlot signedIn={caller !== null} saved={saved} />} />
     </>
   );
 }
