@@ -1,24 +1,14 @@
 import { Card } from "@/components/ui/Card";
-import { mmToIn } from "@/lib/fitment";
 import { quoteCautions } from "@/lib/quotes/cautions";
-import type { FitmentSummary } from "@/lib/quotes/fitment";
-
-const signed = (x: number, d = 0) => `${x > 0 ? "+" : x < 0 ? "−" : "±"}${Math.abs(x).toFixed(d)}`;
-const mmIn = (mm: number) => `${signed(mm)} mm (${signed(mmToIn(mm), 1)} in)`;
+import { type FitmentSummary, fitmentChangeRows } from "@/lib/quotes/fitment";
 
 /** The key changes of a quoted fitment, the modifications it needs, and the cautions. */
 export function FitmentSummaryCard({ fit }: { fit: FitmentSummary }) {
   const rows: [string, string][] = [
     ["Now", `${fit.current.tire} on ${fit.current.wheel}`],
     ["Planned", `${fit.planned.tire} on ${fit.planned.wheel}${fit.planned.beadlock ? " (beadlock)" : ""}`],
-    ["Overall diameter", mmIn(fit.diameterChangeMm)],
-    ["Ground clearance under the axle", mmIn(fit.groundClearanceChangeMm)],
-    ["Poke (outer edge of the tire)", mmIn(fit.outerPokeChangeMm)],
-    ["Room inboard", mmIn(fit.innerClearanceChangeMm)],
-    ["Track width", mmIn(fit.trackWidthChangeMm)],
-    ["At 60 mph indicated", `${fit.actualMphAt60.toFixed(1)} mph actual`],
+    ...fitmentChangeRows(fit),
   ];
-  if (fit.regear) rows.push(["Effective axle ratio", `${fit.regear.axleRatio.toFixed(2)} → ${fit.regear.effectiveRatio.toFixed(2)}; regear to about ${fit.regear.suggestedRatio.toFixed(2)}`]);
   return (
     <Card>
       <h2 className="text-lg font-semibold">Fitment summary</h2>

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { rankPicks, summarize } from "./fitment";
+import { fitmentChangeRows, rankPicks, summarize } from "./fitment";
 
 const current = { boltPattern: "6x5.5", tireSize: "265/70R17", wheel: { diameterIn: 17, widthIn: 8, offsetMm: 25 } };
 
@@ -17,6 +17,18 @@ describe("counter fitment summary", () => {
     expect(s.modifications.some((m) => /lift or levelling/.test(m))).toBe(true);
     expect(s.alignmentSuggested).toBe(true);
     expect(s.planned.beadlock).toBe(true);
+  });
+
+  it("shows the changes as rows in mm and inches, signed, with the regear line (1 in = 25.4 mm, NIST SP 811)", () => {
+    const rows = fitmentChangeRows(summarize(current, "315/70R17", { diameterIn: 17, widthIn: 9, offsetMm: -12, beadlock: true }));
+    // +70 mm = +2.76 in, shown to 0.1 in
+    expect(rows[0]).toEqual(["Overall diameter", "+70 mm (+2.8 in)"]);
+    expect(rows[1]).toEqual(["Ground clearance under the axle", "+35 mm (+1.4 in)"]);
+    // 3.73 × 872.8 / 802.8 = 4.055 restores the ratio; 4.10 is the nearest common ratio (common practice, no source).
+    expect(rows.at(-1)).toEqual(["Effective axle ratio", "3.73 → 3.43; regear to about 4.10"]);
+    const same = fitmentChangeRows(summarize(current, "265/70R17", { diameterIn: 17, widthIn: 8, offsetMm: 25, beadlock: false }));
+    expect(same[0]).toEqual(["Overall diameter", "±0 mm (±0.0 in)"]);
+    expect(same.map(([k]) => k)).not.toContain("Effective axle ratio");
   });
 
   it("the same setup changes nothing and needs nothing", () => {

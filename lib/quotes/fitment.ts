@@ -117,6 +117,27 @@ function fromComparison(cmp: SetupComparison, cur: SetupGeometry, plan: SetupGeo
   };
 }
 
+const signed = (x: number, d = 0) => `${x > 0 ? "+" : x < 0 ? "−" : "±"}${Math.abs(x).toFixed(d)}`;
+const mmIn = (mm: number) => `${signed(mm)} mm (${signed(mmToIn(mm), 1)} in)`;
+
+/**
+ * The summary's changes as label/value rows, shared by the quote page and the PDF (which turns
+ * the typographic signs into plain ones for its standard font).
+ * @example fitmentChangeRows(summarize(current, "315/70R17", wheel))[0]; // ["Overall diameter", "+70 mm (+2.8 in)"] from 265/70R17
+ */
+export function fitmentChangeRows(fit: FitmentSummary): [string, string][] {
+  const rows: [string, string][] = [
+    ["Overall diameter", mmIn(fit.diameterChangeMm)],
+    ["Ground clearance under the axle", mmIn(fit.groundClearanceChangeMm)],
+    ["Poke (outer edge of the tire)", mmIn(fit.outerPokeChangeMm)],
+    ["Room inboard", mmIn(fit.innerClearanceChangeMm)],
+    ["Track width", mmIn(fit.trackWidthChangeMm)],
+    ["At 60 mph indicated", `${fit.actualMphAt60.toFixed(1)} mph actual`],
+  ];
+  if (fit.regear) rows.push(["Effective axle ratio", `${fit.regear.axleRatio.toFixed(2)} → ${fit.regear.effectiveRatio.toFixed(2)}; regear to about ${fit.regear.suggestedRatio.toFixed(2)}`]);
+  return rows;
+}
+
 export interface Pick {
   tireId: string;
   wheelId: string;

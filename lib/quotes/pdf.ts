@@ -1,9 +1,8 @@
 import "server-only";
 import PDFDocument from "pdfkit";
 import type { ShopSettingsRow } from "@/lib/db/types";
-import { mmToIn } from "@/lib/fitment";
 import { quoteCautions } from "./cautions";
-import type { FitmentSummary } from "./fitment";
+import { type FitmentSummary, fitmentChangeRows } from "./fitment";
 import { formatBp, formatUsd } from "./money";
 
 export interface PdfQuote {
@@ -42,8 +41,6 @@ const plain = (s: string) =>
     .replace(/[‘’]/g, "'")
     .replace(/…/g, "...")
     .replace(/[^\x20-\x7E\xA0-\xFF\n]/g, "?");
-const signed = (x: number, d = 0) => `${x > 0 ? "+" : x < 0 ? "-" : "+/-"}${Math.abs(x).toFixed(d)}`;
-const mmIn = (mm: number) => `${signed(mm)} mm (${signed(mmToIn(mm), 1)} in)`;
 const date = (d: Date | string) => new Date(d).toLocaleDateString("en-US", { year: "numeric", month: "short", day: "numeric" });
 
 /** The quote as a PDF (US Letter), built with pdfkit's standard Helvetica: no font files fetched. */
@@ -125,15 +122,7 @@ export function quotePdf(input: PdfInput): Promise<Buffer> {
   }
 
   heading("Fitment summary");
-  const facts: [string, string][] = [
-    ["Overall diameter", mmIn(fit.diameterChangeMm)],
-    ["Ground clearance under the axle", mmIn(fit.groundClearanceChangeMm)],
-    ["Poke (outer edge of the tire)", mmIn(fit.outerPokeChangeMm)],
-    ["Room inboard", mmIn(fit.innerClearanceChangeMm)],
-    ["Track width", mmIn(fit.trackWidthChangeMm)],
-    ["At 60 mph indicated", `${fit.actualMphAt60.toFixed(1)} mph actual`],
-  ];
-  if (fit.regear) facts.push(["Effective axle ratio", `${fit.regear.axleRatio.toFixed(2)} -> ${fit.regear.effectiveRatio.toFixed(2)}; regear to about ${fit.regear.suggestedRatio.toFixed(2)}`]);
+  const facts = fitmentChangeRows(fit);
   for (const [k, v] of facts) text(`${k}: ${v}`);
   if (fit.warnings.length) {
     heading("Clearance warnings");
