@@ -1,14 +1,15 @@
 /**
  * HTTP benchmark of the share page against GET /api/health, in the same run: `npm run bench:http`.
  *
- *   BENCH_URL       server to measure (default http://127.0.0.1:3000), e.g. a `next start`
+ *   BENCH_URL       server to measure (default http://127.0.0.1:3000): `npm start`, or scripts/serve.ts
  *   BENCH_SLUG      share slug to load; unset: signs in as the demo member and takes her live link
  *   BENCH_EMAIL / BENCH_PASSWORD   account for that lookup (default: the demo member)
  *   BENCH_CONNECTIONS (50), BENCH_DURATION seconds per target (20)
  *
  * Prints both throughputs, their ratio (share / health; target ≥ 0.5), the share page's p99
- * latency (target ≤ 100 ms) and error counts. A benchmark, never a test: it exits 0 whatever the
- * figures are (1 only when it cannot run at all).
+ * latency (target ≤ 100 ms) and error counts, and whether a repeated share view came from the
+ * server's micro-cache (scripts/serve.ts; HUBFACE_MICROCACHE=off on the server turns it off).
+ * A benchmark, never a test: it exits 0 whatever the figures are (1 only when it cannot run).
  */
 import autocannon, { type Result } from "autocannon";
 
@@ -60,12 +61,14 @@ const failures = (r: Result) => r.errors + r.timeouts + r.non2xx;
 async function main() {
   const slug = process.env.BENCH_SLUG ?? (await demoSlug());
   const sharePath = `/s/${slug}`;
-  for (const p of ["/api/health", sharePath]) {
+  let servedBy = "";
+  for (const p of ["/api/health", sharePath, sharePath]) {
     const res = await fetch(`${BASE}${p}`);
     if (res.status !== 200) throw new Error(`GET ${p} answered ${res.status} before the run`);
     await res.arrayBuffer();
+    if (p === sharePath) servedBy = res.headers.get("x-hubface-cache") === "hit" ? "the server's micro-cache (scripts/serve.ts)" : "Next (no micro-cache hit)";
   }
-  console.log(`bench:http ${BASE} — ${CONNECTIONS} connections, ${DURATION} s per target`);
+  console.log(`bench:http ${BASE} — ${CONNECTIONS} connections, ${DURATION} s per target; a repeated share view is answered by ${servedBy}`);
   const health = await run("/api/health");
   const share = await run(sharePath);
   const ratio = share.requests.average / health.requests.average;

@@ -64,7 +64,7 @@ if [ ! -f .next/BUILD_ID ] || [ -n "$(find app components lib proxy.ts next.conf
   next build >/dev/null
 fi
 
-node node_modules/next/dist/bin/next start -H 127.0.0.1 -p "$PORT" & PIDS+=($!)
+tsx scripts/serve.ts --hostname 127.0.0.1 --port "$PORT" & PIDS+=($!)
 wait_for_http "http://127.0.0.1:$PORT/api/health" || { log "the app did not start"; exit 1; }
 
 cat <<INFO

@@ -77,7 +77,7 @@ if next build > "$RESULTS/next-build.log" 2>&1; then
   npm run -s db:migrate >/dev/null && npm run -s db:seed >/dev/null
   tsx scripts/services/fake-smtp.ts > "$RESULTS/fake-smtp.log" 2>&1 & PIDS+=($!)
   tsx scripts/services/fake-pay.ts > "$RESULTS/fake-pay.log" 2>&1 & PIDS+=($!)
-  node node_modules/next/dist/bin/next start -H 127.0.0.1 -p "$APP_PORT" > "$RESULTS/next-start.log" 2>&1 & PIDS+=($!)
+  tsx scripts/serve.ts --hostname 127.0.0.1 --port "$APP_PORT" > "$RESULTS/next-start.log" 2>&1 & PIDS+=($!)
   if wait_for_http "$E2E_BASE_URL/api/health"; then
     log "browser and HTTP tests (Chromium)"
     vitest run --project browser --reporter=default --reporter=json --outputFile.json="$RESULTS/vitest-browser.json"

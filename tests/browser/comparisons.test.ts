@@ -138,11 +138,19 @@ describe("saved comparisons and share links in Chromium", () => {
       expect(post).toContain(shareUrl);
       await axeClean(r, "comparisons-share-forum-text");
 
-      // The owner revokes: the link is gone at once.
+      // Repeated views come from the server's micro-cache in front of Next (scripts/serve.ts)…
+      await (await fetch(shareUrl)).text();
+      const again = await fetch(shareUrl);
+      expect(again.status).toBe(200);
+      expect(again.headers.get("x-hubface-cache")).toBe("hit");
+      expect(await again.text()).toContain(RENAMED);
+
+      // …and still, when the owner revokes, the link is gone at once.
       await item(RENAMED).getByRole("button", { name: "Revoke link" }).click();
       await expect.poll(() => item(RENAMED).getByRole("button", { name: "Create share link" }).isVisible()).toBe(true);
       const gone = await r.goto(shareUrl);
       expect(gone?.status()).toBe(404);
+      expect((await fetch(shareUrl)).headers.get("x-hubface-cache")).toBeNull();
       await expect.poll(() => r.getByRole("heading", { level: 1 }).innerText()).toBe("This shared comparison is not available");
       expect(await r.getByText("70.2").count()).toBe(0);
       expect((await fetch(og!)).status).toBe(404);
