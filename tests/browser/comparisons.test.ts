@@ -144,6 +144,12 @@ describe("saved comparisons and share links in Chromium", () => {
       expect(again.status).toBe(200);
       expect(again.headers.get("x-hubface-cache")).toBe("hit");
       expect(await again.text()).toContain(RENAMED);
+      // A reader's reload gets the cached copy, and it is the same working page.
+      const reloaded = await r.reload();
+      expect(reloaded?.headers()["x-hubface-cache"]).toBe("hit");
+      await expect.poll(() => headlineText(r)).toBe(headline);
+      await expect.poll(() => r.getByTestId("charts").isVisible(), { timeout: 20000 }).toBe(true);
+      await axeClean(r, "comparisons-share-from-microcache");
 
       // …and still, when the owner revokes, the link is gone at once.
       await item(RENAMED).getByRole("button", { name: "Revoke link" }).click();
