@@ -1,6 +1,7 @@
 "use client";
 import Link from "next/link";
 import { useEffect, useMemo } from "react";
+import type { DrawnLimits } from "@/components/comparison/CrossSection";
 import { PredictionTable } from "@/components/garage/PredictionTable";
 import { Button } from "@/components/ui/Button";
 import { type DisplayPrefs, formatLen } from "@/lib/comparison/format";
@@ -8,12 +9,6 @@ import type { SetupInputValues } from "@/lib/comparison/model";
 import { encodeSetupQuery } from "@/lib/comparison/url";
 import { measuredLimits, predictPoints } from "@/lib/garage/predict";
 import type { WorkspaceVehicle } from "@/lib/garage/types";
-
-/** Where the picked vehicle's measured parts sit, mm from the hub face (drawn on the cross-section). */
-export interface VehicleLimits {
-  innerMm: number | null;
-  outerMm: number | null;
-}
 
 /**
  * The signed-in member's garage inside the workspace: pick a vehicle and every measured point
@@ -34,7 +29,7 @@ export default function GaragePanel({
   planned: SetupInputValues;
   prefs: DisplayPrefs;
   onPick: (id: string | null) => void;
-  onLimits: (limits: VehicleLimits | null) => void;
+  onLimits: (limits: DrawnLimits | null) => void;
   onUseVehicle: (v: WorkspaceVehicle) => void;
 }) {
   const vehicle = vehicles.find((v) => v.id === vehicleId) ?? null;
