@@ -33,6 +33,7 @@ interface Entry {
   headers: OutgoingHttpHeaders;
   body: Buffer;
   storedAt: number;
+  expiresAt: number;
 }
 
 // Hop-by-hop and per-response headers are not replayed.
@@ -88,8 +89,7 @@ export class Microcache {
   private fresh(key: string): Entry | null {
     const e = this.entries.get(key);
     if (!e) return null;
-    const ttl = Math.min((sMaxAgeSeconds(e.headers["cache-control"] as string) ?? 0) * 1000, this.opts.maxTtlMs);
-    if (this.now() - e.storedAt >= ttl) {
+    if (this.now() >= e.expiresAt) {
       this.entries.delete(key);
       return null;
     }
@@ -149,12 +149,15 @@ export class Microcache {
     res.once("finish", () => {
       if (overflow || res.statusCode !== 200 || this.purges !== purgesBefore) return;
       const headers = { ...sent, ...res.getHeaders() };
-      if (headers["set-cookie"] !== undefined || sMaxAgeSeconds(headers["cache-control"] as string) === null) return;
+      const sMaxAge = sMaxAgeSeconds(headers["cache-control"] as string);
+      if (headers["set-cookie"] !== undefined || sMaxAge === null) return;
       const kept: OutgoingHttpHeaders = {};
       for (const [k, v] of Object.entries(headers)) if (!DROPPED.has(k) && v !== undefined) kept[k] = v;
       const encoding = String(headers["content-encoding"] ?? "identity").toLowerCase();
       if (encoding !== "identity" && encoding !== "gzip") return;
-      this.entries.set(`${path} ${encoding}`, { status: 200, headers: kept, body: Buffer.concat(chunks), storedAt: this.now() });
+      const storedAt = this.now();
+      const expiresAt = storedAt + Math.min(sMaxAge * 1000, this.opts.maxTtlMs);
+      this.entries.set(`${path} ${encoding}`, { status: 200, headers: kept, body: Buffer.concat(chunks), storedAt, expiresAt });
     });
   }
 
