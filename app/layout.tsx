@@ -10,6 +10,15 @@ export const metadata: Metadata = {
   title: { default: "Hubface — wheel and tire fitment", template: "%s · Hubface" },
   description: "Compare the wheel and tire setup you run with the one you plan: diameter, offset, backspacing, clearance, scrub, speedometer and gearing.",
   metadataBase: new URL(process.env.APP_ORIGIN ?? "http://127.0.0.1:3000"),
+  // Files in public/, drawn by scripts/make-icons.mts from the Hubface mark.
+  manifest: "/manifest.webmanifest",
+  icons: {
+    icon: [
+      { url: "/favicon.ico", sizes: "16x16 32x32 48x48" },
+      { url: "/icon.svg", type: "image/svg+xml" },
+    ],
+    apple: "/icons/apple-touch-icon.png",
+  },
 };
 
 export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#181b21" };
