@@ -35,4 +35,13 @@ describe("security basics over HTTP", () => {
     const wrongShape = await call("anonymous", "POST", "/api/account/signup", [1, 2, 3]);
     expect(wrongShape.status).toBe(422);
   });
+
+  it("never carries a sign-in callbackUrl that a browser reads as another host (open redirect)", async () => {
+    for (const q of ["/%5Cevil.example/phish", "/%09/evil.example/phish", "%2F%2Fevil.example"]) {
+      const html = await (await fetch(`${BASE}/sign-in?callbackUrl=${q}`)).text();
+      expect(html, q).not.toContain("evil.example");
+    }
+    const kept = await (await fetch(`${BASE}/sign-in?callbackUrl=%2Fgarage%3Ftab%3Dphotos`)).text();
+    expect(kept).toContain("/garage?tab=photos");
+  });
 });

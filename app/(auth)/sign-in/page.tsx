@@ -1,13 +1,14 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { Card } from "@/components/ui/Card";
+import { safeLocalPath } from "@/lib/auth/redirect";
 import { SignInForm } from "./SignInForm";
 
 export const metadata: Metadata = { title: "Sign in" };
 
 export default async function SignInPage({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
   const sp = await searchParams;
-  const callbackUrl = sp.callbackUrl?.startsWith("/") && !sp.callbackUrl.startsWith("//") ? sp.callbackUrl : "/account";
+  const callbackUrl = safeLocalPath(sp.callbackUrl);
   return (
     <Card className="mx-auto max-w-md">
       <h1 className="text-2xl font-bold">Sign in</h1>
