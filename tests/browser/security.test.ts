@@ -44,4 +44,12 @@ describe("security basics over HTTP", () => {
     const kept = await (await fetch(`${BASE}/sign-in?callbackUrl=%2Fgarage%3Ftab%3Dphotos`)).text();
     expect(kept).toContain("/garage?tab=photos");
   });
+
+  it("answers a GET of the credentials callback with 405, not 500", async () => {
+    const res = await fetch(`${BASE}/api/auth/callback/credentials`, { redirect: "manual" });
+    expect(res.status).toBe(405);
+    expect(res.headers.get("allow")).toBe("POST");
+    // The rest of next-auth's GET routes are unchanged.
+    expect((await fetch(`${BASE}/api/auth/csrf`)).status).toBe(200);
+  });
 });
