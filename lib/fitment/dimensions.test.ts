@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { approvedRimWidthRangeIn, measuringRimWidthIn, sectionWidthOnRimMm, tireDimensions } from "./dimensions";
+import { approvedRimWidthRangeIn, formatNominalInchSize, measuringRimWidthIn, nominalSize, sectionWidthOnRimMm, tireDimensions } from "./dimensions";
 import { FitmentInputError, TireSizeError } from "./errors";
 import { parseTireSize } from "./tireSize";
 
@@ -56,5 +56,45 @@ describe("tireDimensions", () => {
     expect(() => tireDimensions("265/70R17", { rimWidthIn: 0 })).toThrow(/rimWidthIn/);
     expect(() => tireDimensions("265/70R17", { rimWidthIn: Number.NaN })).toThrow(/finite/);
     expect(() => tireDimensions("bogus")).toThrow(TireSizeError);
+  });
+});
+
+describe("nominalSize and formatNominalInchSize", () => {
+  it("285/75R16 = 32.83 × 11.22 in (ISO 4000-1 / ETRTO design formula: 16 × 25.4 + 2 × 285 × 0.75 = 833.9 mm)", () => {
+    const n = nominalSize("285/75R16");
+    expect(n.sidewallMm).toBeCloseTo(213.75, 9); // H = 285 × 75 / 100
+    expect(n.overallDiameterMm).toBeCloseTo(833.9, 9); // 406.4 + 427.5
+    expect(n.overallDiameterIn).toBeCloseTo(32.83, 2); // 833.9 / 25.4 = 32.8307 (NIST SP 811 inch)
+    expect(n.sectionWidthMm).toBe(285);
+    expect(n.sectionWidthIn).toBeCloseTo(11.22, 2); // 285 / 25.4 = 11.2205
+    expect(n.rimDiameterIn).toBe(16);
+    expect(formatNominalInchSize("285/75R16")).toBe("32.8 × 11.2 in on 16 in");
+  });
+
+  it("315/70R17 = 34.36 in tall (ISO 4000-1: 431.8 + 2 × 315 × 0.70 = 872.8 mm)", () => {
+    const n = nominalSize("LT315/70R17 121/118Q");
+    expect(n.overallDiameterMm).toBeCloseTo(872.8, 9);
+    expect(n.overallDiameterIn).toBeCloseTo(34.36, 2); // 872.8 / 25.4 = 34.362
+    expect(n.sectionWidthIn).toBeCloseTo(12.40, 2); // 315 / 25.4 = 12.402
+    expect(formatNominalInchSize("LT315/70R17 121/118Q")).toBe("34.4 × 12.4 in on 17 in");
+  });
+
+  it("flotation sizes state their nominal size (TRA): 37x12.50R17LT is 939.8 × 317.5 mm, sidewall (37 − 17)/2 in", () => {
+    const n = nominalSize("37x12.50R17LT");
+    expect(n.overallDiameterMm).toBeCloseTo(939.8, 9); // 37 × 25.4
+    expect(n.sectionWidthMm).toBeCloseTo(317.5, 9); // 12.5 × 25.4
+    expect(n.sidewallMm).toBeCloseTo(254, 9); // 10 in
+    expect(n.overallDiameterIn).toBeCloseTo(37, 9);
+    expect(n.sectionWidthIn).toBeCloseTo(12.5, 9);
+    expect(formatNominalInchSize("37x12.50R17LT")).toBe("37.0 × 12.5 in on 17 in");
+    expect(formatNominalInchSize("33x12.50R16.5LT")).toBe("33.0 × 12.5 in on 16.5 in");
+  });
+
+  it("decimals are chosen by the caller and checked", () => {
+    expect(formatNominalInchSize("285/75R16", { decimals: 2 })).toBe("32.83 × 11.22 in on 16 in");
+    // 315/80R17: 431.8 + 504 = 935.8 mm = 36.84 in; 315 mm = 12.40 in (ISO 4000-1 / ETRTO; NIST SP 811 inch).
+    expect(formatNominalInchSize("315/80R17", { rim: false })).toBe("36.8 × 12.4 in");
+    expect(() => formatNominalInchSize("285/75R16", { decimals: 7 })).toThrow(FitmentInputError);
+    expect(() => nominalSize("bogus")).toThrow(TireSizeError);
   });
 });

@@ -1,7 +1,14 @@
 /**
- * Tire dimensions: section width on a given rim, measuring rim, circumference, revolutions.
+ * Tire dimensions: nominal size in mm and inches, section width on a given rim, measuring rim,
+ * circumference, revolutions.
  *
  * Formulas and sources:
+ * - Nominal size of a metric designation W/AR R d (ISO 4000-1 / ETRTO design formula): section
+ *   width W mm, sidewall H = W × AR / 100, overall diameter D = d × 25.4 + 2H; in inches D / 25.4
+ *   and W / 25.4 (1 in = 25.4 mm exactly, NIST SP 811). 285/75R16: 406.4 + 2 × 213.75 = 833.9 mm
+ *   = 32.83 in tall, 285 mm = 11.22 in wide.
+ * - Nominal size of a flotation designation D x W R d (TRA): D and W as designated, in inches;
+ *   H = (D − d) / 2.
  * - D = d + 2H, H = S × AR / 100 (ISO 4000-1 / ETRTO / UN R30).
  * - Section width on another rim: S = S1 + K·(A − A1) with K = 0.4 (UN R30 §6.1.1.1), i.e. the
  *   section width moves 0.4 mm per mm of rim width change. The engine takes the nominal width S1
@@ -17,7 +24,7 @@
  * - Circumference = π·D (unloaded; a loaded tire rolls a few percent less), revs per mile =
  *   1 609 344 mm / circumference (1 mile = 1 609.344 m exactly, NIST SP 811).
  */
-import { requireNumber } from "./errors";
+import { requireInteger, requireNumber } from "./errors";
 import { type TireSize, toTireSize } from "./tireSize";
 import { MM_PER_IN, MM_PER_MILE } from "./units";
 
@@ -117,4 +124,53 @@ export function tireDimensions(size: string | TireSize, options: { rimWidthIn?: 
     measuringRimWidthIn: measuring,
     rimWidthIn: rim,
   };
+}
+
+/** Result of {@link nominalSize}: the design dimensions a designation stands for. */
+export interface NominalSize {
+  overallDiameterMm: number;
+  sectionWidthMm: number;
+  sidewallMm: number;
+  overallDiameterIn: number;
+  sectionWidthIn: number;
+  rimDiameterIn: number;
+}
+
+/**
+ * Nominal (design) dimensions of a size, in mm and inches — what the designation itself says,
+ * before any rim width or load: ISO 4000-1 / ETRTO for metric sizes, the stated inches for
+ * flotation sizes (TRA). See the module docs for the formulas.
+ *
+ * @example
+ * const n = nominalSize("285/75R16");
+ * n.overallDiameterMm; // 833.9
+ * n.overallDiameterIn; // 32.83
+ * n.sectionWidthIn;    // 11.22
+ */
+export function nominalSize(size: string | TireSize): NominalSize {
+  const t = toTireSize(size);
+  return {
+    overallDiameterMm: t.overallDiameterMm,
+    sectionWidthMm: t.sectionWidthMm,
+    sidewallMm: t.sidewallMm,
+    overallDiameterIn: t.overallDiameterMm / MM_PER_IN,
+    sectionWidthIn: t.sectionWidthMm / MM_PER_IN,
+    rimDiameterIn: t.rimDiameterIn,
+  };
+}
+
+/**
+ * The nominal size in inches as people compare sizes: overall diameter × section width on the
+ * rim diameter (left out with `rim: false`), each to `decimals` places (default 1, 0–3).
+ *
+ * @example
+ * formatNominalInchSize("285/75R16");       // "32.8 × 11.2 in on 16 in"
+ * formatNominalInchSize("33x12.50R16.5LT"); // "33.0 × 12.5 in on 16.5 in"
+ * formatNominalInchSize("315/80R17", { rim: false }); // "36.8 × 12.4 in"
+ */
+export function formatNominalInchSize(size: string | TireSize, options: { decimals?: number; rim?: boolean } = {}): string {
+  const decimals = options.decimals === undefined ? 1 : requireInteger("decimals", options.decimals, 0, 3, "1");
+  const n = nominalSize(size);
+  const text = `${n.overallDiameterIn.toFixed(decimals)} × ${n.sectionWidthIn.toFixed(decimals)} in`;
+  return options.rim === false ? text : `${text} on ${n.rimDiameterIn} in`;
 }

@@ -56,7 +56,10 @@ export {
   measuringRimFactor,
   approvedRimWidthRangeIn,
   sectionWidthOnRimMm,
+  nominalSize,
+  formatNominalInchSize,
   type TireDimensions,
+  type NominalSize,
 } from "./dimensions";
 export {
   DEFAULT_FLANGE_IN,
@@ -114,7 +117,14 @@ export {
   STANDARD_SIZES,
   standardSizes,
 } from "./standardSizes";
-export { equivalentSizes, type EquivalentSize, type EquivalentOptions } from "./equivalents";
+export {
+  equivalentSizes,
+  equivalentDistance,
+  EQUIVALENT_WEIGHTS,
+  type EquivalentSize,
+  type EquivalentOptions,
+  type EquivalentRim,
+} from "./equivalents";
 export {
   DEFAULT_WHEEL_WIDTHS_IN,
   COMMON_OFFSETS_MM,

@@ -25,3 +25,28 @@ describe("standard sizes (data)", () => {
     expect(standardSizes("flotation")).toBe(STANDARD_FLOTATION_SIZES);
   });
 });
+
+describe("standard sizes cover the usual truck rims", () => {
+  const on = (system: "metric" | "flotation", rim: number) => STANDARD_SIZES.filter((t) => t.system === system && t.rimDiameterIn === rim).map((t) => t.text);
+
+  it("LT flotation sizes on 15, 16, 16.5, 17, 18, 20 and 22 in rims (common practice, from memory; not checked against the TRA Year Book)", () => {
+    for (const rim of [15, 17, 18, 20, 22]) expect(on("flotation", rim).length, `${rim} in`).toBeGreaterThanOrEqual(4);
+    expect(on("flotation", 16)).toContain("31x10.50R16LT");
+    expect(on("flotation", 16.5)).toEqual(expect.arrayContaining(["33x12.50R16.5LT", "35x12.50R16.5LT"]));
+    expect(on("flotation", 15)).toEqual(expect.arrayContaining(["27x8.50R15LT", "31x10.50R15LT", "33x12.50R15LT", "35x12.50R15LT"]));
+  });
+
+  it("the common metric LT and P sizes on those rims (common practice, no source)", () => {
+    const metric = new Set(STANDARD_METRIC_SIZES.map((t) => t.text));
+    for (const s of [
+      "215/75R15", "225/75R15", "235/75R15",
+      "235/85R16", "245/75R16", "265/75R16", "285/75R16", "315/75R16",
+      "245/75R17", "265/70R17", "285/70R17", "315/70R17", "315/80R17",
+      "275/70R18", "295/70R18", "325/65R18",
+      "275/65R20", "295/60R20", "305/55R20", "325/60R20",
+      "285/45R22", "305/45R22", "325/50R22",
+    ]) {
+      expect(metric.has(s), s).toBe(true);
+    }
+  });
+});

@@ -6,7 +6,11 @@
  *   ratios 30–85 in steps of 5, rims 14–22 and 24 in; kept when the aspect ratio sits in a band
  *   that is usual for the rim diameter (see {@link METRIC_ASPECT_BAND}) and the overall diameter
  *   is 560–960 mm (common practice, no source);
- * - flotation: a list of common sizes from 30x9.50R15 to 42x15.50R24 (common practice, no source).
+ * - flotation: a list of common LT sizes on 15, 16, 16.5, 17, 18, 20, 22 and 24 in rims, from
+ *   27x8.50R15LT to 42x15.50R24LT (common practice, from memory; not checked against the TRA Year
+ *   Book). Flotation sizes on 16 in rims are few: the usual 33 and 35 in flotation sizes for
+ *   wheels of that class are on 16.5 in rims, a different bead seat diameter that needs its own
+ *   wheels. No 33 in flotation size on a 16 in rim is listed because none could be vouched for.
  */
 import { type TireSize, parseTireSize } from "./tireSize";
 
@@ -43,11 +47,14 @@ function metricDesignations(): string[] {
   return out;
 }
 
-/** Common flotation sizes (common practice, no source). */
+/** Common flotation sizes (common practice, from memory; see the module docs). */
 export const FLOTATION_DESIGNATIONS: readonly string[] = Object.freeze([
+  "27x8.50R15LT",
   "30x9.50R15LT",
   "31x10.50R15LT",
   "31x10.50R16LT",
+  "33x12.50R16.5LT",
+  "35x12.50R16.5LT",
   "32x11.50R15LT",
   "33x10.50R15LT",
   "33x12.50R15LT",
@@ -100,7 +107,7 @@ export const STANDARD_SIZES: readonly TireSize[] = Object.freeze([...STANDARD_ME
  * Standard sizes of one system, or all of them.
  *
  * @example
- * standardSizes("flotation").length; // 42
+ * standardSizes("flotation").length; // 45
  * standardSizes().some((t) => t.text === "265/70R17"); // true
  */
 export function standardSizes(system?: "metric" | "flotation"): readonly TireSize[] {

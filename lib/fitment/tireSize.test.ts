@@ -77,6 +77,46 @@ describe("parseTireSize — flotation and numeric", () => {
     expect(parseTireSize("35X12.50R15").service).toBeNull();
   });
 
+  it("× (U+00D7), X and the lookalikes people paste read as the flotation x and normalize to one text", () => {
+    // The designation is DxW R d (TRA flotation); what joins D and W is only a separator, so the
+    // multiplication sign a typeface or word processor puts there, upper-case X, the fullwidth
+    // forms an East Asian input method types (Unicode NFKC folds them, digits included), and the
+    // ✕/⨯ signs and the Cyrillic х that look the same all mean the same size (common practice, no source).
+    const variants = [
+      "37×12.50R17",
+      "37 × 12.50 R17",
+      "37X12.50R17",
+      "37ｘ12.50R17", // U+FF58 fullwidth x
+      "37Ｘ12.50R17", // U+FF38 fullwidth X
+      "３７ｘ１２．５０Ｒ１７", // fullwidth digits, full stop and R
+      "37✕12.50R17", // U+2715 multiplication x
+      "37⨯12.50R17", // U+2A2F vector or cross product
+      "37х12.50R17", // U+0445 Cyrillic small ha
+      "37Х12.50R17", // U+0425 Cyrillic capital ha
+      "37\u00a0x\u00a012.50R17", // no-break spaces from a pasted web page
+      "37 x 12.50 R17\u202f", // narrow no-break space at the end
+    ];
+    for (const v of variants) {
+      const t = parseTireSize(v);
+      expect(t.text, v).toBe("37x12.50R17");
+      expect(t.overallDiameterMm, v).toBeCloseTo(939.8, 9); // 37 × 25.4 mm (NIST SP 811 inch)
+    }
+    expect(parseTireSize("37×12.50R17LT 121Q LRE").text).toBe("37x12.50R17LT 121Q LRE");
+  });
+
+  it("fullwidth slash and lookalike dashes in metric and numeric sizes (NFKC, common practice, no source)", () => {
+    expect(parseTireSize("LT２８５／７５Ｒ１６").text).toBe("LT285/75R16");
+    expect(parseTireSize("285∕75R16").text).toBe("285/75R16"); // U+2215 division slash
+    expect(parseTireSize("7.50\u201116").text).toBe("7.50-16"); // U+2011 non-breaking hyphen
+    expect(parseTireSize("7.50\u201316").text).toBe("7.50-16"); // U+2013 en dash
+    expect(parseTireSize("7.50\u221216").text).toBe("7.50-16"); // U+2212 minus sign
+  });
+
+  it("a lookalike that is not a separator is still refused with the field's message", () => {
+    expect(() => parseTireSize("37÷12.50R17")).toThrow(TireSizeError);
+    expect(() => parseTireSize("37*12.50R17")).toThrow(/Tire size/);
+  });
+
   it("numeric 7.50R16 and 7.50-16: section 7.50 in, nominal 92 series (from memory)", () => {
     const r = parseTireSize("7.50R16");
     expect(r).toMatchObject({ system: "numeric", construction: "R", rimDiameterIn: 16, aspectRatio: 92, aspectRatioImplied: true });

@@ -157,6 +157,28 @@ function splitSize(upper: string): { size: string; tail: string[] } {
   return { size: m[1].replace(/\s+/g, ""), tail: tail === "" ? [] : tail.split(/\s+/) };
 }
 
+/** Multiplication signs and letters that look like the flotation `x` (after NFKC). */
+const X_LOOKALIKES = /[\u00D7\u2715\u2716\u2A2F\u0445\u0425]/g;
+/** Slashes other than `/` (after NFKC): division slash, fraction slash. */
+const SLASH_LOOKALIKES = /[\u2215\u2044]/g;
+/** Hyphens, dashes and the minus sign (after NFKC), for the bias `-` in `7.50-16`. */
+const DASH_LOOKALIKES = /[\u2010-\u2015\u2212\uFE63]/g;
+
+/**
+ * Folds what people type or paste for a designation to its ASCII characters: Unicode NFKC turns
+ * fullwidth letters, digits, `／` and `．` and the no-break spaces into ASCII, then the
+ * multiplication signs (`×` U+00D7, `✕`, `✖`, `⨯`) and the Cyrillic `х`/`Х` that look like the
+ * flotation `x` become `X`, other slashes `/` and dashes `-`. A typeface shows `37x12.50` as
+ * `37×12.50`, so that is what gets copied (common practice, no source).
+ *
+ * @example
+ * foldLookalikes("37×12.50R17"); // "37X12.50R17"
+ * foldLookalikes("２８５／７５Ｒ１６"); // "285/75R16"
+ */
+function foldLookalikes(text: string): string {
+  return text.normalize("NFKC").replace(X_LOOKALIKES, "X").replace(SLASH_LOOKALIKES, "/").replace(DASH_LOOKALIKES, "-");
+}
+
 function fixed2(n: number): string {
   return n.toFixed(2);
 }
@@ -183,20 +205,22 @@ function buildText(s: Omit<TireSize, "text">): string {
 }
 
 /**
- * Parses a tire size designation (metric, flotation or numeric; case and spacing variants
- * accepted). Throws {@link TireSizeError} for anything else — never another error type.
+ * Parses a tire size designation (metric, flotation or numeric; case and spacing variants, `×`
+ * or `X` for the flotation `x` and fullwidth or lookalike characters accepted, see
+ * {@link foldLookalikes}). Throws {@link TireSizeError} for anything else — never another error type.
  *
  * @example
  * const t = parseTireSize("lt285/70r17 121/118q");
  * t.text;              // "LT285/70R17 121/118Q"
  * t.overallDiameterMm; // 830.8
  * parseTireSize("37x12.50R17LT").aspectRatio; // 80 (implied)
+ * parseTireSize("37×12.50R17").text;          // "37x12.50R17"
  */
 export function parseTireSize(text: string): TireSize {
   if (typeof text !== "string") {
     throw new TireSizeError(`Tire size must be text, got ${text === null ? "null" : typeof text} (${EXAMPLES})`, text);
   }
-  const upper = text.trim().toUpperCase().replace(/×/g, "X").replace(/\s+/g, " ");
+  const upper = foldLookalikes(text).trim().toUpperCase().replace(/\s+/g, " ");
   if (upper === "") fail(text, "the text is empty");
   if (upper.length > 80) fail(text, "the text is too long to be a tire size");
   const { size, tail } = splitSize(upper);

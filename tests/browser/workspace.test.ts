@@ -133,6 +133,8 @@ describe("converter in Chromium", () => {
     await expect.poll(() => page.getByTestId("equivalents").locator("tbody tr").count()).toBeGreaterThan(0);
     // Engine README example: the nearest flotation size to 285/75R17 is 34x10.50R17LT.
     expect(await page.getByTestId("equivalents").locator("tbody tr th").first().textContent()).toBe("34x10.50R17LT");
+    // ISO 4000-1 / ETRTO: 431.8 + 2 × 285 × 0.75 = 859.3 mm = 33.83 in; 285 mm = 11.22 in (NIST SP 811 inch).
+    expect(await page.getByTestId("nominal").textContent()).toBe("285/75R17 ≈ 33.8 × 11.2 in on 17 in");
     await shot(page, "converter");
     expect(await seriousViolations(page)).toEqual([]);
     await page.close();
