@@ -13,6 +13,9 @@ declare module "next-auth/jwt" {
     uid?: string;
     role?: Role;
     shopId?: string | null;
-    checkedAt?: number;
+    /** This session's id: sign-out revokes it (lib/server/sessions.ts). */
+    sid?: string;
+    /** The user's session_version when the session was made: a raised version ends it. */
+    sv?: number;
   }
 }

@@ -1,16 +1,18 @@
 import "server-only";
+import { randomUUID } from "node:crypto";
 import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
 import { db } from "@/lib/db";
 import type { Role } from "@/lib/db/types";
 import { signInSchema } from "@/lib/validation/account";
-import { findUserByEmail, findUserById } from "@/lib/server/users";
+import { revokeSession, sessionState } from "@/lib/server/sessions";
+import { findUserByEmail } from "@/lib/server/users";
 import { verifyPassword } from "./password";
 import { THROTTLE, accountKey, addressKey, clearKey, lockState, recordFailure } from "./throttle";
 import { clientAddress } from "./clientAddress";
 
-/** How often a session's role and shop are re-read from PostgreSQL (seconds). */
-const ROLE_REFRESH_SECONDS = 60;
+/** How long a session lasts without signing in again (seconds). */
+const SESSION_MAX_AGE = 60 * 60 * 24 * 14;
 
 const lockedMessage = (minutes: number) =>
   `Too many failed sign-ins. This account is locked for ${minutes} more minute${minutes === 1 ? "" : "s"}; ` +
@@ -18,7 +20,7 @@ const lockedMessage = (minutes: number) =>
 
 export const authOptions: NextAuthOptions = {
   secret: process.env.NEXTAUTH_SECRET,
-  session: { strategy: "jwt", maxAge: 60 * 60 * 24 * 14 },
+  session: { strategy: "jwt", maxAge: SESSION_MAX_AGE },
   pages: { signIn: "/sign-in", error: "/sign-in" },
   useSecureCookies: process.env.NODE_ENV === "production" && (process.env.NEXTAUTH_URL ?? "").startsWith("https://"),
   providers: [
@@ -45,28 +47,30 @@ export const authOptions: NextAuthOptions = {
           throw new Error("That e-mail address and password do not match an account.");
         }
         await clearKey(db, keys[0]!);
-        return { id: user.id, email: user.email, name: user.name, role: user.role, shopId: user.shop_id };
+        return { id: user.id, email: user.email, name: user.name, role: user.role, shopId: user.shop_id, sessionVersion: user.session_version };
       },
     }),
   ],
   callbacks: {
     async jwt({ token, user }) {
-      const now = Math.floor(Date.now() / 1000);
       if (user) {
-        const u = user as unknown as { id: string; role: Role; shopId: string | null };
-        return { ...token, uid: u.id, role: u.role, shopId: u.shopId, checkedAt: now };
+        const u = user as unknown as { id: string; role: Role; shopId: string | null; sessionVersion: number };
+        return { ...token, uid: u.id, role: u.role, shopId: u.shopId, sid: randomUUID(), sv: u.sessionVersion };
       }
-      // Re-read role and shop now and then, so an admin's change reaches live sessions.
-      if (token.uid && (!token.checkedAt || now - token.checkedAt > ROLE_REFRESH_SECONDS)) {
-        try {
-          const fresh = await findUserById(db, token.uid);
-          if (!fresh) return { ...token, uid: undefined, role: undefined, shopId: null, checkedAt: now };
-          return { ...token, role: fresh.role, shopId: fresh.shop_id, name: fresh.name, checkedAt: now };
-        } catch {
-          return token; // database briefly unavailable: keep the last known role
-        }
+      if (!token.uid) return token;
+      // Every read of a session asks PostgreSQL (one primary-key lookup): a role change reaches
+      // the next request, and a sign-out, password change or reset, or "sign out everywhere"
+      // ends the session at once, even where someone kept a copy of the cookie.
+      let state;
+      try {
+        state = await sessionState(db, token.uid, token.sid);
+      } catch {
+        return token; // database briefly unavailable: keep the last known role (the request itself will get a 503)
       }
-      return token;
+      if (!state || state.revoked || state.sessionVersion !== (token.sv ?? 0)) {
+        return { ...token, uid: undefined, role: undefined, shopId: null, sid: undefined, sv: undefined };
+      }
+      return { ...token, role: state.role, shopId: state.shopId, name: state.name };
     },
     async session({ session, token }) {
       if (!token.uid) return { ...session, user: undefined } as unknown as typeof session;
@@ -77,6 +81,14 @@ export const authOptions: NextAuthOptions = {
         shopId: token.shopId ?? null,
       };
       return session;
+    },
+  },
+  events: {
+    // Signing out deletes the cookie in this browser; revoking the session id also ends any copy of it.
+    async signOut({ token }) {
+      if (!token?.uid || !token.sid) return;
+      const exp = typeof token.exp === "number" ? new Date(token.exp * 1000) : new Date(Date.now() + SESSION_MAX_AGE * 1000);
+      await revokeSession(db, token.uid, token.sid, exp).catch((e: unknown) => console.error("could not revoke a session at sign-out:", (e as Error).message));
     },
   },
 };

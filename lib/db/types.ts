@@ -17,11 +17,13 @@ export interface UserRow {
   password_hash: string;
   role: Role;
   shop_id: string | null;
+  /** Raised to end every session of the user at once (see lib/server/sessions.ts). */
+  session_version: number;
   created_at: Date;
   updated_at: Date;
 }
 
-export type PublicUser = Omit<UserRow, "password_hash">;
+export type PublicUser = Omit<UserRow, "password_hash" | "session_version">;
 
 export interface PasswordResetRow {
   id: string;

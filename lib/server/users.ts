@@ -59,13 +59,23 @@ export async function setUserRole(db: Knex, id: string, role: Role, shopId: stri
   const shop = role === "shop_staff" || role === "shop_owner" ? shopId : null;
   const [row] = await db<UserRow>("users")
     .where({ id })
-    .update({ role, shop_id: shop, updated_at: db.fn.now() as unknown as Date })
+    // A changed role or shop ends the user's live sessions (lib/server/sessions.ts): they sign in
+    // again and get what the new role allows, not what the old token said.
+    .update({
+      role,
+      shop_id: shop,
+      session_version: db.raw("session_version + (case when role is distinct from ? or shop_id is distinct from ? then 1 else 0 end)", [role, shop]) as unknown as number,
+      updated_at: db.fn.now() as unknown as Date,
+    })
     .returning(PUBLIC_COLUMNS);
   return row as PublicUser | undefined;
 }
 
+/** Sets a new password and ends every session made with the old one. */
 export async function setPassword(db: Knex, id: string, passwordHash: string) {
-  await db("users").where({ id }).update({ password_hash: passwordHash, updated_at: db.fn.now() });
+  await db("users")
+    .where({ id })
+    .update({ password_hash: passwordHash, session_version: db.raw("session_version + 1"), updated_at: db.fn.now() });
 }
 
 export async function listShops(db: Knex) {

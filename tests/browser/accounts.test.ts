@@ -1,7 +1,8 @@
 import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { launch, seriousViolations, shot, signInAs } from "./support/browser";
-import { DEMO, DEMO_PASSWORD } from "./support/http";
+import { BASE } from "./support/browser";
+import { DEMO, DEMO_PASSWORD, sessionCookie } from "./support/http";
 import { waitForMail } from "./support/outbox";
 
 let session: Awaited<ReturnType<typeof launch>>;
@@ -140,5 +141,44 @@ describe("accounts in Chromium", () => {
     await page.getByRole("button", { name: "Sign in" }).click();
     await expect.poll(() => page.locator("main [role=alert]").first().textContent()).toMatch(/locked for \d+ more minute/);
     await axeClean("sign-in-locked");
+  });
+
+  it("ends a copied session cookie at sign-out and everywhere at once from the account page", async () => {
+    const email = `sessions.${stamp}@example.test`;
+    const password = "sessions password one";
+    const created = await fetch(`${BASE}/api/account/signup`, { method: "POST", headers: { "Content-Type": "application/json" }, body: JSON.stringify({ name: "Wren Aldous", email, password }) });
+    expect(created.status).toBe(201);
+    const me = (cookie: string) => fetch(`${BASE}/api/me`, { headers: { Cookie: cookie } }).then((r) => r.status);
+
+    // Two sessions (a laptop and a phone); the laptop signs out the way the header's button does.
+    const laptop = await sessionCookie(email, password);
+    const phone = await sessionCookie(email, password);
+    const { csrfToken } = (await (await fetch(`${BASE}/api/auth/csrf`, { headers: { Cookie: laptop } })).json()) as { csrfToken: string };
+    const out = await fetch(`${BASE}/api/auth/signout`, {
+      method: "POST",
+      redirect: "manual",
+      headers: { "Content-Type": "application/x-www-form-urlencoded", Cookie: laptop },
+      body: new URLSearchParams({ csrfToken, json: "true" }),
+    });
+    expect(out.status).toBeLessThan(400);
+    expect(await me(laptop)).toBe(401); // a copy of the signed-out cookie no longer works
+    expect(await me(phone)).toBe(200);
+
+    // In Chromium: the account page's "Sign out everywhere" ends the phone's session too.
+    await signInAs(page, email, password);
+    await page.goto("/account");
+    await expect.poll(() => page.getByRole("heading", { name: "Sessions" }).isVisible()).toBe(true);
+    await page.setViewportSize({ width: 390, height: 844 });
+    await axeClean("account-sessions-390");
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+    await page.setViewportSize({ width: 1280, height: 900 });
+    page.once("dialog", (d) => void d.accept());
+    await page.getByRole("button", { name: "Sign out everywhere" }).click();
+    await page.waitForURL(/\/sign-in\?ended=1/);
+    await expect.poll(() => page.getByText("You were signed out on every device.").isVisible()).toBe(true);
+    await axeClean("signed-out-everywhere");
+    expect(await me(phone)).toBe(401);
+    // Signing in again works as before.
+    expect(await me(await sessionCookie(email, password))).toBe(200);
   });
 });

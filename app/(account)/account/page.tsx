@@ -4,6 +4,7 @@ import { Alert } from "@/components/ui/Alert";
 import { Badge } from "@/components/ui/Badge";
 import { Card } from "@/components/ui/Card";
 import { PageHeader } from "@/components/ui/PageHeader";
+import { SignOutEverywhereButton } from "@/components/site/SignOutEverywhereButton";
 import { requirePageCaller } from "@/lib/auth/session";
 import { db } from "@/lib/db";
 import type { Role } from "@/lib/db/types";
@@ -50,6 +51,16 @@ export default async function AccountPage({ searchParams }: { searchParams: Prom
             )}
             <li><Link className="text-ember-700 underline" href="/forgot-password">Change your password by e-mail</Link></li>
           </ul>
+        </Card>
+        <Card>
+          <h2 className="text-lg font-semibold">Sessions</h2>
+          <p className="mt-2 text-sm text-basalt-700">
+            Signed in on a shared computer, or lost a phone? This ends every session of your account at once, this one included.
+            Changing your password does the same.
+          </p>
+          <div className="mt-4">
+            <SignOutEverywhereButton />
+          </div>
         </Card>
       </div>
     </>

@@ -6,6 +6,14 @@ export const cases: MatrixCase[] = [
   { route: "/api/health", method: "GET", path: "/api/health", expect: publicRoute(200) },
   { route: "/api/me", method: "GET", path: "/api/me", expect: signedIn(200) },
   {
+    route: "/api/account/sessions/end-all",
+    method: "POST",
+    path: "/api/account/sessions/end-all",
+    body: {},
+    expect: signedIn(422),
+    note: "without the confirmation nothing ends (the real call is in accounts.test.ts: it would end the matrix's own sessions)",
+  },
+  {
     route: "/api/account/signup",
     method: "POST",
     path: "/api/account/signup",
