@@ -6,8 +6,12 @@ import { HttpError } from "./errors";
  * The raw request body, refused with 413 as soon as it passes `maxBytes` — by the declared
  * length before reading, or while streaming when no length was declared. Never buffers more.
  */
-export async function readCappedBytes(req: NextRequest, maxBytes: number): Promise<Uint8Array> {
-  const tooBig = () => new HttpError(413, `The file is larger than ${Math.round(maxBytes / 1024 / 1024)} MB. Split the catalog into smaller files.`);
+export async function readCappedBytes(
+  req: NextRequest,
+  maxBytes: number,
+  tooBigMessage = `The file is larger than ${Math.round(maxBytes / 1024 / 1024)} MB. Split the catalog into smaller files.`,
+): Promise<Uint8Array> {
+  const tooBig = () => new HttpError(413, tooBigMessage);
   const declared = Number(req.headers.get("content-length") ?? "0");
   if (declared > maxBytes) throw tooBig();
   if (!req.body) return new Uint8Array();

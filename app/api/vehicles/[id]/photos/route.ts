@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { db, isDatabaseUnavailable } from "@/lib/db";
+import { readCappedBytes } from "@/lib/http/body";
 import { HttpError, notFound } from "@/lib/http/errors";
 import { json, route } from "@/lib/http/route";
 import { ImageRejected, MAX_PHOTO_BYTES, processImage, safeDisplayName } from "@/lib/photos/image";
@@ -10,11 +11,13 @@ import { GARAGE_ACCESS } from "@/lib/garage/access";
 const params = z.object({ id: z.uuid() });
 /** Room for the multipart boundaries and the other fields around a file at the limit. */
 const FORM_OVERHEAD = 64 * 1024;
-const tooBig = () => new HttpError(413, "That file is larger than 10 MB. Resize it or pick a smaller one.");
+const TOO_BIG = "That file is larger than 10 MB. Resize it or pick a smaller one.";
+const tooBig = () => new HttpError(413, TOO_BIG);
 
 /**
  * Multipart upload: `file` (JPEG, PNG or WebP, ≤ 10 MB) and optionally `clearanceId`. The size
- * is refused from Content-Length before anything is read; the type is taken from the bytes.
+ * is refused from Content-Length before anything is read, and while reading when no length was
+ * declared; the type is taken from the bytes.
  */
 export const POST = route({ access: GARAGE_ACCESS, params }, async ({ caller, params, req }) => {
   const declared = Number(req.headers.get("content-length") ?? "0");
@@ -24,9 +27,12 @@ export const POST = route({ access: GARAGE_ACCESS, params }, async ({ caller, pa
   if (!(req.headers.get("content-type") ?? "").toLowerCase().startsWith("multipart/form-data")) {
     throw new HttpError(415, "Send the photo as multipart/form-data with a field named file.");
   }
+  // Read with a byte cap before parsing: a body sent without Content-Length (chunked) is cut
+  // off at the limit instead of being buffered whole by formData().
+  const bytes = await readCappedBytes(req, MAX_PHOTO_BYTES + FORM_OVERHEAD, TOO_BIG);
   let form: FormData;
   try {
-    form = await req.formData();
+    form = await new Response(bytes as BodyInit, { headers: { "content-type": req.headers.get("content-type")! } }).formData();
   } catch {
     throw new HttpError(400, "The upload could not be read as a form. Try again.");
   }
