@@ -4,7 +4,7 @@ import { afterEach, describe, expect, it } from "vitest";
 import { computeComparison } from "@/lib/comparison/compute";
 import type { DisplayPrefs } from "@/lib/comparison/format";
 import { DEFAULT_INPUT } from "@/lib/comparison/schema";
-import { HeadlineChanges, WarningList } from "./ResultsPanel";
+import { HeadlineChanges, SetupDetailTable, WarningList } from "./ResultsPanel";
 
 const inch: DisplayPrefs = { units: "imperial", lengths: "decimal" };
 const metric: DisplayPrefs = { units: "metric", lengths: "decimal" };
@@ -56,5 +56,27 @@ describe("speedometer warning", () => {
     expect(item?.querySelector("p")?.textContent).toBe(
       "Caution: Speedometer reads 14.6 % low: at an indicated 100 km/h you are actually going 117.1 km/h (actual speed is 17.1 % above the speedometer)",
     );
+  });
+});
+
+describe("spacer thickness under the unit toggle", () => {
+  const frac: DisplayPrefs = { units: "imperial", lengths: "fraction" };
+  const withSpacer = (spacerMm: number) => computeComparison({ ...DEFAULT_INPUT, planned: { ...DEFAULT_INPUT.planned, spacerMm } });
+  const wheelCell = () => screen.getByRole("row", { name: /^Wheel/ }).querySelectorAll("td")[1]?.textContent;
+  const spacerNote = () => within(screen.getByTestId("warnings")).getAllByRole("listitem").find((li) => li.getAttribute("data-kind") === "spacer")?.querySelector("p")?.textContent;
+
+  it("a 25 mm spacer is never shown as a 1 in one (25 mm = 0.984 in; 1 in = 25.4 mm exactly, NIST SP 811)", () => {
+    render(<><SetupDetailTable result={withSpacer(25)} prefs={frac} /><WarningList result={withSpacer(25)} prefs={frac} /></>);
+    expect(wheelCell()).toMatch(/\+ 0\.98 in \(25 mm\) spacer/);
+    expect(spacerNote()).toBe("Note: Planned setup uses a 0.98 in (25 mm) spacer");
+  });
+
+  it("a 1 in spacer (25.4 mm) is never shown as a 25 mm one", () => {
+    render(<><SetupDetailTable result={withSpacer(25.4)} prefs={metric} /><WarningList result={withSpacer(25.4)} prefs={metric} /></>);
+    expect(wheelCell()).toMatch(/\+ 25\.4 mm spacer/);
+    expect(spacerNote()).toBe("Note: Planned setup uses a 25.4 mm spacer");
+    cleanup();
+    render(<SetupDetailTable result={withSpacer(25.4)} prefs={frac} />);
+    expect(wheelCell()).toMatch(/\+ 1 in \(25\.4 mm\) spacer/);
   });
 });

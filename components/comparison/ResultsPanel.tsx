@@ -10,6 +10,7 @@ import {
   formatLenOther,
   formatLoad,
   formatNumber,
+  formatPartThickness,
   formatPressure,
   formatSpeedIn,
   formatSpeedRating,
@@ -147,7 +148,7 @@ export function SetupDetailTable({ result: r, prefs }: { result: ComparisonResul
       cell: (f) => (
         <>
           {f.wheelDiameterIn} × {f.wheelWidthIn} in, offset {formatNumber(f.offsetMm, 1, { signed: true })} mm
-          {f.spacerMm > 0 && <span className="block text-xs text-basalt-500">+ {formatLen(f.spacerMm, prefs)} spacer (acts as {formatNumber(f.effectiveOffsetMm, 1, { signed: true })} mm)</span>}
+          {f.spacerMm > 0 && <span className="block text-xs text-basalt-500">+ {formatPartThickness(f.spacerMm, prefs)} spacer (acts as {formatNumber(f.effectiveOffsetMm, 1, { signed: true })} mm)</span>}
         </>
       ),
     },

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { computeComparison } from "./compute";
-import { DEFAULT_PREFS, type DisplayPrefs, MINUS, formatLen, formatLenOther, formatLoad, formatNumber, formatEnteredSpeed, formatPressure, formatSpeedIn, formatSpeedRating, parsePrefs, warningTitle } from "./format";
+import { DEFAULT_PREFS, type DisplayPrefs, MINUS, formatLen, formatLenOther, formatLoad, formatNumber, formatEnteredSpeed, formatPartThickness, formatPressure, formatSpeedIn, formatSpeedRating, parsePrefs, warningTitle } from "./format";
 import { DEFAULT_INPUT } from "./schema";
 
 const inch: DisplayPrefs = { units: "imperial", lengths: "decimal" };
@@ -43,6 +43,15 @@ describe("display helpers", () => {
     expect(formatEnteredSpeed(65, metric)).toBe("104.6 km/h (65 mph)");
     expect(formatEnteredSpeed(62.5, inch)).toBe("62.5 mph");
     expect(formatSpeedRating(160, 160 / 1.609344, inch)).toBe("99 mph (160 km/h)");
+  });
+
+  it("part thickness as bought: a sixteenth only when exact (1 in = 25.4 mm exactly, NIST SP 811)", () => {
+    expect(formatPartThickness(12.7, frac)).toBe("1/2 in (12.7 mm)");
+    expect(formatPartThickness(6.35, frac)).toBe("1/4 in (6.35 mm)");
+    expect(formatPartThickness(12.7, inch)).toBe("0.5 in (12.7 mm)");
+    // 20 mm = 0.787 in: not 13/16 in (20.64 mm).
+    expect(formatPartThickness(20, frac)).toBe("0.79 in (20 mm)");
+    expect(formatPartThickness(20, metric)).toBe("20 mm");
   });
 
   it("loads and pressures: 1 lb = 0.45359237 kg, 1 psi = 6.894757 kPa (NIST SP 811)", () => {

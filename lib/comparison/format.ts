@@ -5,7 +5,7 @@
  * not converted here: the result carries them at round speeds of each unit (speedometer.ts).
  * Negative values use the typographic minus sign (U+2212).
  */
-import { KM_PER_MILE, formatLength, inToMm, kgToLb, psiToKpa } from "@/lib/fitment";
+import { KM_PER_MILE, MM_PER_IN, formatLength, inToMm, kgToLb, psiToKpa } from "@/lib/fitment";
 import { type ComparisonWarning, LENGTH_TOKEN } from "./compute";
 import { type SpeedSystem, type SpeedUnit, SPEED_UNIT, enteredSpeed } from "./speedometer";
 
@@ -69,6 +69,29 @@ export function formatLenOther(mm: number, prefs: DisplayPrefs, opts: { signed?:
   return formatLen(mm, other, opts);
 }
 
+/** Millimetres to a hundredth, without trailing zeros: 25 → "25", 25.4 → "25.4". */
+const isWhole = (x: number) => Math.abs(x - Math.round(x)) < 1e-9;
+const exactMm = (mm: number) => formatNumber(mm, isWhole(mm) ? 0 : isWhole(mm * 10) ? 1 : 2);
+
+/**
+ * A part's thickness as bought (a spacer): never rounded into another size. Millimetres show to
+ * the hundredth; inches show as a sixteenth only when the part is exactly one (1 in = 25.4 mm),
+ * otherwise to 0.01 in, with the millimetres beside them — so a 25 mm spacer never reads "1 in"
+ * and a 1 in spacer never reads "25 mm".
+ *
+ * @example
+ * formatPartThickness(25, { units: "imperial", lengths: "fraction" });  // "0.98 in (25 mm)"
+ * formatPartThickness(25.4, { units: "imperial", lengths: "fraction" }); // "1 in (25.4 mm)"
+ * formatPartThickness(25.4, { units: "metric", lengths: "decimal" });    // "25.4 mm"
+ */
+export function formatPartThickness(mm: number, prefs: DisplayPrefs): string {
+  if (prefs.units === "metric") return `${exactMm(mm)} mm`;
+  const sixteenths = (mm / MM_PER_IN) * 16;
+  const exactSixteenth = Math.abs(sixteenths - Math.round(sixteenths)) < 1e-6;
+  const inches = formatLength(mm, { unit: "in", fraction: exactSixteenth && prefs.lengths === "fraction" ? 16 : undefined, decimals: 2 });
+  return `${inches} (${exactMm(mm)} mm)`;
+}
+
 /** Inches as the trade gives them (wheel diameter and width, backspacing), decimals or fractions. */
 export function formatInches(inches: number, prefs: DisplayPrefs): string {
   return formatLen(inToMm(inches), { units: "imperial", lengths: prefs.lengths });
@@ -129,9 +152,10 @@ export function formatPressure(psi: number, prefs: DisplayPrefs): string {
   return prefs.units === "metric" ? `${formatNumber(kpa)} kPa (${formatNumber(psi)} psi)` : `${formatNumber(psi)} psi (${formatNumber(kpa)} kPa)`;
 }
 
-/** A warning's title in the chosen units: its speeds from the reader's system, its length converted. */
+/** A warning's title in the chosen units: its speeds from the reader's system, its length converted (a spacer's as bought). */
 export function warningTitle(w: ComparisonWarning, prefs: DisplayPrefs): string {
   const title = w.titleBySystem?.[prefs.units] ?? w.title;
   if (w.lengthMm === null) return title;
-  return title.replace(LENGTH_TOKEN, formatLen(Math.abs(w.lengthMm), prefs));
+  const len = w.kind === "spacer" ? formatPartThickness(w.lengthMm, prefs) : formatLen(Math.abs(w.lengthMm), prefs);
+  return title.replace(LENGTH_TOKEN, len);
 }

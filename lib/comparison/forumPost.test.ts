@@ -37,6 +37,11 @@ describe("forum post", () => {
     expect(m).not.toMatch(/96\.6 km\/h shown|\+17\.1 %/);
   });
 
+  it("gives a spacer its exact thickness: a 1 in spacer is 25.4 mm, not 25 mm (1 in = 25.4 mm exactly, NIST SP 811)", () => {
+    const x = computeComparison({ ...DEFAULT_INPUT, planned: { ...DEFAULT_INPUT.planned, spacerMm: 25.4 } });
+    expect(forumPost(x, DEFAULT_PREFS, { name: "x", url: "u" })).toContain("| 17x8 +25 mm | 17x9 −12 mm + 25.4 mm spacer |");
+  });
+
   it("lists the warnings the numbers call for", () => {
     expect(r.warnings.length).toBeGreaterThan(0);
     expect(text).toContain("Check before you buy:");

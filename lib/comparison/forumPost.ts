@@ -4,14 +4,15 @@
  * result and the display helpers, in the reader's units.
  */
 import type { ComparisonResult, SetupFigures } from "./compute";
-import { type DisplayPrefs, formatEnteredSpeed, formatLen, formatNumber, formatSpeedIn, warningTitle } from "./format";
+import { type DisplayPrefs, formatEnteredSpeed, formatLen, formatNumber, formatPartThickness, formatSpeedIn, warningTitle } from "./format";
 import { speedometerSentence } from "./speedometer";
 
 /** Pipes would break a table cell; line breaks would end the row. */
 const cell = (s: string) => s.replace(/\|/g, "/").replace(/\s*\n\s*/g, " ").trim();
 
 function wheel(f: SetupFigures): string {
-  const spacer = f.spacerMm > 0 ? ` + ${formatNumber(f.spacerMm, 0)} mm spacer` : "";
+  // The wheel columns are in mm whatever the reader's units; the spacer as bought (25.4 stays 25.4).
+  const spacer = f.spacerMm > 0 ? ` + ${formatPartThickness(f.spacerMm, { units: "metric", lengths: "decimal" })} spacer` : "";
   return `${formatNumber(f.wheelDiameterIn, 1).replace(/\.0$/, "")}x${formatNumber(f.wheelWidthIn, 1).replace(/\.0$/, "")} ${formatNumber(f.offsetMm, 0, { signed: true })} mm${spacer}`;
 }
 
