@@ -2,7 +2,8 @@
 import { Bar, BarChart, CartesianGrid, Cell, Legend, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import type { ComparisonResult } from "@/lib/comparison/compute";
 import { type DisplayPrefs, formatNumber } from "@/lib/comparison/format";
-import { KM_PER_MILE, mmToIn } from "@/lib/fitment";
+import { mmToIn } from "@/lib/fitment";
+import { speedCharts } from "./chartData";
 import { CHART_HEIGHT_RESERVED } from "./chartSize";
 
 /**
@@ -30,8 +31,7 @@ export default function ComparisonCharts({ result: r, prefs }: { result: Compari
   const metric = prefs.units === "metric";
   const lenUnit = metric ? "mm" : "in";
   const len = (mm: number) => (metric ? Math.round(mm * 10) / 10 : Math.round(mmToIn(mm) * 100) / 100);
-  const speedUnit = metric ? "km/h" : "mph";
-  const spd = (mph: number) => (metric ? Math.round(mph * KM_PER_MILE * 10) / 10 : Math.round(mph * 10) / 10);
+  const { unit: speedUnit, ticks, domain, speeds, rpm } = speedCharts(r, prefs);
   const changes = [
     { name: "Diameter", value: len(r.changes.diameterMm) },
     { name: "Ground clr.", value: len(r.changes.groundClearanceMm) },
@@ -40,8 +40,6 @@ export default function ComparisonCharts({ result: r, prefs }: { result: Compari
     { name: "Scrub", value: len(r.changes.scrubRadiusMm) },
     { name: "Track", value: len(r.changes.trackWidthMm) },
   ];
-  const speeds = r.speedometer.rows.map((x) => ({ indicated: spd(x.indicatedMph), true: spd(x.actualMph), shown: spd(x.indicatedMph) }));
-  const rpm = r.gearing.rows.map((x) => ({ speed: spd(x.mph), current: Math.round(x.currentRpm), planned: Math.round(x.plannedRpm), regeared: Math.round(x.regearedRpm) }));
   const tick = { fontSize: 12, fill: "#434c58" };
   return (
     <div className="grid gap-3 md:grid-cols-3" data-testid="charts">
@@ -65,7 +63,7 @@ export default function ComparisonCharts({ result: r, prefs }: { result: Compari
         <ResponsiveContainer width="100%" height="100%">
           <LineChart data={speeds} margin={{ left: 0, right: 16, top: 4, bottom: 4 }}>
             <CartesianGrid strokeDasharray="3 3" />
-            <XAxis dataKey="indicated" type="number" domain={["dataMin", "dataMax"]} tick={tick} />
+            <XAxis dataKey="indicated" type="number" domain={domain} ticks={ticks} tick={tick} />
             <YAxis tick={tick} width={40} />
             <Tooltip labelFormatter={(v) => `Speedometer shows ${v} ${speedUnit}`} />
             <Legend wrapperStyle={{ fontSize: 12 }} />
@@ -78,7 +76,7 @@ export default function ComparisonCharts({ result: r, prefs }: { result: Compari
         <ResponsiveContainer width="100%" height="100%">
           <LineChart data={rpm} margin={{ left: 0, right: 16, top: 4, bottom: 4 }}>
             <CartesianGrid strokeDasharray="3 3" />
-            <XAxis dataKey="speed" type="number" domain={["dataMin", "dataMax"]} tick={tick} />
+            <XAxis dataKey="speed" type="number" domain={domain} ticks={ticks} tick={tick} />
             <YAxis tick={tick} width={44} />
             <Tooltip labelFormatter={(v) => `${v} ${speedUnit}`} />
             <Legend wrapperStyle={{ fontSize: 12 }} />

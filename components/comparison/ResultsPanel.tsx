@@ -1,15 +1,18 @@
 import type { ReactNode } from "react";
 import { cx } from "@/components/ui/cx";
 import type { ComparisonResult, SetupFigures } from "@/lib/comparison/compute";
+import { speedometerSentence } from "@/lib/comparison/speedometer";
 import {
   type DisplayPrefs,
+  formatEnteredSpeed,
   formatInches,
   formatLen,
   formatLenOther,
   formatLoad,
   formatNumber,
+  formatPartThickness,
   formatPressure,
-  formatSpeed,
+  formatSpeedIn,
   formatSpeedRating,
   warningTitle,
 } from "@/lib/comparison/format";
@@ -46,7 +49,8 @@ export function HeadlineChanges({ result: r, prefs }: { result: ComparisonResult
   const len = (mm: number) => formatLen(mm, prefs, { signed: true, decimals: prefs.units === "metric" ? 1 : 2 });
   const other = (mm: number) => formatLenOther(mm, prefs, { signed: true });
   const cruise = r.gearing.cruise[0];
-  const h = r.speedometer.headline;
+  const speed = r.speedometer.bySystem[prefs.units];
+  const h = speed.headline;
   return (
     <section aria-labelledby="headline-title">
       <h2 id="headline-title" className="mb-2 text-lg font-semibold">What changes</h2>
@@ -64,14 +68,14 @@ export function HeadlineChanges({ result: r, prefs }: { result: ComparisonResult
         <Stat testId="change-track" label="Track width" value={len(c.trackWidthMm)} sub="per axle" />
         <Stat
           testId="change-speed"
-          label={`True speed at ${formatSpeed(h.indicatedMph, prefs, 0)} shown`}
-          value={formatSpeed(h.actualMph, prefs)}
-          sub={`speedometer ${formatNumber(r.speedometer.errorPct, 1, { signed: true })} %`}
+          label={`True speed at ${formatSpeedIn(h.indicated, speed.unit, 0)} shown`}
+          value={formatSpeedIn(h.actual, speed.unit)}
+          sub={speedometerSentence(r.speedometer.ratio)}
         />
         {cruise && (
           <Stat
             testId="change-rpm"
-            label={`RPM at ${formatSpeed(cruise.mph, prefs, 0)}`}
+            label={`RPM at ${formatEnteredSpeed(cruise.mph, prefs)}`}
             value={formatNumber(cruise.plannedRpm)}
             sub={`was ${formatNumber(cruise.currentRpm)} · ${formatNumber(((cruise.plannedRpm - cruise.currentRpm) / cruise.currentRpm) * 100, 1, { signed: true })} %`}
           />
@@ -86,7 +90,7 @@ export function HeadlineChanges({ result: r, prefs }: { result: ComparisonResult
           testId="change-rpm-regeared"
           label="RPM regeared"
           value={cruise ? formatNumber(cruise.regearedRpm) : "—"}
-          sub={cruise ? `at ${formatSpeed(cruise.mph, prefs, 0)} with ${formatNumber(r.gearing.suggestedRatio, 2)}` : undefined}
+          sub={cruise ? `at ${formatEnteredSpeed(cruise.mph, prefs)} with ${formatNumber(r.gearing.suggestedRatio, 2)}` : undefined}
         />
       </dl>
     </section>
@@ -144,7 +148,7 @@ export function SetupDetailTable({ result: r, prefs }: { result: ComparisonResul
       cell: (f) => (
         <>
           {f.wheelDiameterIn} × {f.wheelWidthIn} in, offset {formatNumber(f.offsetMm, 1, { signed: true })} mm
-          {f.spacerMm > 0 && <span className="block text-xs text-basalt-500">+ {formatLen(f.spacerMm, prefs)} spacer (acts as {formatNumber(f.effectiveOffsetMm, 1, { signed: true })} mm)</span>}
+          {f.spacerMm > 0 && <span className="block text-xs text-basalt-500">+ {formatPartThickness(f.spacerMm, prefs)} spacer (acts as {formatNumber(f.effectiveOffsetMm, 1, { signed: true })} mm)</span>}
         </>
       ),
     },

@@ -51,14 +51,17 @@ describe("computeComparison — the demo comparison 265/70R17 on 17x8 +25 vs 37x
   });
 
   it("speedometer: actual = indicated × D_planned / D_current (handbook ratio); 60 mph reads 70.24 mph", () => {
-    expect(r.speedometer.headline.indicatedMph).toBe(60);
-    expect(r.speedometer.headline.actualMph).toBeCloseTo((60 * 939.8) / 802.8, 9);
-    expect(r.speedometer.errorPct).toBeCloseTo((939.8 / 802.8 - 1) * 100, 9);
-    expect(r.speedometer.rows.map((x) => x.indicatedMph)).toEqual([10, 20, 30, 40, 50, 60, 70, 80]);
+    const mph = r.speedometer.bySystem.imperial;
+    expect(mph.unit).toBe("mph");
+    expect(mph.headline.indicated).toBe(60);
+    expect(mph.headline.actual).toBeCloseTo((60 * 939.8) / 802.8, 9);
+    expect(r.speedometer.trueAbovePct).toBeCloseTo((939.8 / 802.8 - 1) * 100, 9);
+    expect(mph.rows.map((x) => x.indicated)).toEqual([10, 20, 30, 40, 50, 60, 70, 80]);
   });
 
   it("engine speed: RPM = mph · axle · top gear · 336.135 / D(in) (handbook formula)", () => {
     const cur = r.gearing.cruise.find((x) => x.mph === 60);
+    expect(cur?.entered).toEqual({ value: 60, unit: "mph" });
     expect(cur?.currentRpm).toBeCloseTo((60 * 3.73 * 336.135) / (802.8 / 25.4), 6);
     expect(cur?.plannedRpm).toBeCloseTo((60 * 3.73 * 336.135) / 37, 6);
     expect(r.gearing.cruise.map((x) => x.mph)).toEqual([60, 70]);
@@ -124,7 +127,7 @@ describe("computeComparison — warning thresholds", () => {
   it(`speedometer beyond ${SPEEDO_WARN_PCT} %, regear from ${REGEAR_WARN_PCT} %: 265/75R17 (+3.3 %) earns the first only`, () => {
     // 265/75R17: D = 431.8 + 397.5 = 829.3 mm; 829.3 / 802.8 = 1.033 → 3.3 % (speedometer yes); regear no (< 5 %).
     const small = computeComparison(withPlanned({ tire: "265/75R17", wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 } }));
-    expect(small.speedometer.errorPct).toBeCloseTo((829.3 / 802.8 - 1) * 100, 6);
+    expect(small.speedometer.trueAbovePct).toBeCloseTo((829.3 / 802.8 - 1) * 100, 6);
     // Its 7.5 in measuring rim (265 × 0.70 / 25.4 = 7.30 → 7.5) makes it 2.54 mm wider on 8 in: it reaches 1.27 mm further in.
     expect(small.warnings.map((x) => x.kind)).toEqual(["speedometer", "inner-reach"]);
     expect(small.changes.innerClearanceMm).toBeCloseTo(-0.4 * 0.5 * 25.4 / 2, 6);
@@ -146,5 +149,94 @@ describe("computeComparison — warning thresholds", () => {
     expect(x.planned.offsetMm).toBeCloseTo(-31.75, 9);
     const bead = computeComparison(withPlanned({ tire: "35x12.50R17LT", wheelWidthIn: 9.5, position: { mode: "backspacing", backspacingIn: 3.5, reference: "bead-seat", flangeIn: 0.5 } }));
     expect(bead.planned.offsetMm).toBeCloseTo(-31.75, 9);
+  });
+});
+
+describe("computeComparison — reference speeds in the reader's own unit", () => {
+  // The demo: 265/70R17 (802.8 mm, ISO 4000-1: 431.8 + 2 × 0.70 × 265) against 37 in (939.8 mm).
+  const ratio = 939.8 / 802.8;
+
+  it("metric rows and headline are round km/h, generated in km/h, not converted from mph", () => {
+    const kmh = r.speedometer.bySystem.metric;
+    expect(kmh.unit).toBe("km/h");
+    expect(kmh.rows.map((x) => x.indicated)).toEqual([20, 30, 40, 50, 60, 70, 80, 90, 100, 110, 120]);
+    // Exactly the round figures (toBe, not toBeCloseTo): no 96.6 or 49.9 km/h rows.
+    for (const v of [50, 80, 100, 120]) expect(kmh.rows.some((x) => x.indicated === v)).toBe(true);
+    expect(kmh.headline.indicated).toBe(100);
+    // Actual = indicated × ratio in the same unit: 100 km/h × 1.17065 = 117.07 km/h.
+    expect(kmh.headline.actual).toBeCloseTo(117.0653, 4);
+    for (const row of kmh.rows) expect(row.actual).toBeCloseTo(row.indicated * ratio, 9);
+  });
+
+  it("imperial rows stay round mph (as before)", () => {
+    const mph = r.speedometer.bySystem.imperial;
+    expect(mph.rows.map((x) => x.indicated)).toEqual([10, 20, 30, 40, 50, 60, 70, 80]);
+    expect(mph.headline).toEqual({ indicated: 60, actual: 60 * ratio });
+  });
+
+  it("engine-speed rows at round km/h use the handbook formula at v / 1.609344 mph (NIST SP 811 mile)", () => {
+    const rows = r.gearing.bySystem.metric.rows;
+    expect(r.gearing.bySystem.metric.unit).toBe("km/h");
+    expect(rows.map((x) => x.speed)).toEqual([20, 30, 40, 50, 60, 70, 80, 90, 100, 110, 120]);
+    const at100 = rows.find((x) => x.speed === 100);
+    // RPM = mph · axle · top gear · 336.135 / D(in): 62.137 × 3.73 × 336.135 / 31.606 = 2464.9.
+    expect(at100?.currentRpm).toBeCloseTo(((100 / 1.609344) * 3.73 * 336.135) / (802.8 / 25.4), 6);
+    expect(at100?.currentRpm).toBeCloseTo(2464.9, 1);
+    expect(r.gearing.bySystem.imperial.rows.map((x) => x.speed)).toEqual([10, 20, 30, 40, 50, 60, 70, 80]);
+  });
+
+  it("worked example by hand: speed ∝ rolling circumference (v = revolutions × π·D; rolling without slip, handbook kinematics, from memory)", () => {
+    // The speedometer counts wheel revolutions calibrated to the current tire's circumference.
+    // Indicated 100 km/h on 265/70R17: 100 000 000 mm/h ÷ (π × 802.8 mm) = 39 650 rev/h.
+    // The 37 in tire covers π × 939.8 mm = 2952.5 mm a turn: 39 650 × 2952.5 mm = 117.07 km/h.
+    const revsPerHour = 100_000_000 / (Math.PI * 802.8);
+    expect(revsPerHour).toBeCloseTo(39_650, 0);
+    expect((revsPerHour * Math.PI * 939.8) / 1_000_000).toBeCloseTo(117.07, 2);
+    expect(r.speedometer.bySystem.metric.headline.actual).toBeCloseTo(117.07, 2);
+    // Two percentages from the one ratio r = 1.17065:
+    // actual is (r − 1) = 17.07 % above the indicated speed;
+    expect(r.speedometer.trueAbovePct).toBeCloseTo(17.07, 2);
+    // the speedometer shows 100 of 117.07, i.e. reads (1 − 1/r) = 137 / 939.8 = 14.58 % low.
+    expect(r.speedometer.readsLowPct).toBeCloseTo(14.58, 2);
+    expect(r.speedometer.readsLowPct).toBeCloseTo((137 / 939.8) * 100, 9);
+  });
+
+  it("cruise speeds show back as entered: km/h entries stored as mph / 1.609344 are recovered exactly", () => {
+    const x = computeComparison({ ...DEFAULT_INPUT, vehicle: { ...DEFAULT_INPUT.vehicle, cruiseSpeedsMph: [100 / 1.609344, 113 / 1.609344, 62.5] } });
+    expect(x.gearing.cruise.map((c) => c.entered)).toEqual([
+      { value: 100, unit: "km/h" },
+      { value: 113, unit: "km/h" },
+      { value: 62.5, unit: "mph" },
+    ]);
+    // A link carries mph to 4 decimals (62.1371): still 100 km/h as typed.
+    const fromLink = computeComparison({ ...DEFAULT_INPUT, vehicle: { ...DEFAULT_INPUT.vehicle, cruiseSpeedsMph: [62.1371, 70.215] } });
+    expect(fromLink.gearing.cruise.map((c) => c.entered)).toEqual([
+      { value: 100, unit: "km/h" },
+      { value: 113, unit: "km/h" },
+    ]);
+    // The engine speed is still the one at the stored speed.
+    expect(x.gearing.cruise[0]?.currentRpm).toBeCloseTo(((100 / 1.609344) * 3.73 * 336.135) / (802.8 / 25.4), 6);
+  });
+
+  it("the speedometer warning reads in the reader's unit and says which percentage is which", () => {
+    const w = r.warnings.find((x) => x.kind === "speedometer");
+    expect(w?.titleBySystem?.metric).toBe(
+      "Speedometer reads 14.6 % low: at an indicated 100 km/h you are actually going 117.1 km/h (actual speed is 17.1 % above the speedometer)",
+    );
+    expect(w?.titleBySystem?.imperial).toBe(
+      "Speedometer reads 14.6 % low: at an indicated 60 mph you are actually going 70.2 mph (actual speed is 17.1 % above the speedometer)",
+    );
+  });
+
+  it("a smaller tire: the speedometer reads high, actual speed below it", () => {
+    // 245/70R17 on the same wheel: D = 431.8 + 2 × 0.70 × 245 = 774.8 mm; r = 774.8 / 802.8 = 0.96512.
+    const s = computeComparison(withPlanned({ tire: "245/70R17", wheelWidthIn: 7.5, position: { mode: "offset", offsetMm: 25 } }));
+    expect(s.speedometer.ratio).toBeCloseTo(774.8 / 802.8, 9);
+    // actual 3.49 % below indicated; speedometer reads 28 / 774.8 = 3.61 % high (negative "low").
+    expect(s.speedometer.trueAbovePct).toBeCloseTo(-3.488, 3);
+    expect(s.speedometer.readsLowPct).toBeCloseTo(-3.614, 3);
+    expect(s.warnings.find((x) => x.kind === "speedometer")?.titleBySystem?.metric).toBe(
+      "Speedometer reads 3.6 % high: at an indicated 100 km/h you are actually going 96.5 km/h (actual speed is 3.5 % below the speedometer)",
+    );
   });
 });

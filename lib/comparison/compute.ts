@@ -2,13 +2,14 @@
  * One function from a valid comparison input to everything the comparison screens show: per
  * setup figures, the headline changes, the speedometer and engine-speed tables, and warnings.
  * Every number comes from the engine (lib/fitment); this module only picks, pairs and judges.
+ * Speed rows come once per unit system at round speeds of that unit (see speedometer.ts).
  *
  * Warning thresholds (each a documented choice, see the constants below):
  * - rim width: outside the engine's range suited to the section width (measuring rim ± 1 in,
  *   common practice, no source);
  * - poke: the tire's outer reach past the fender line the user measured (their figure);
  * - scrub: an increase of more than 25 mm (1 in) (common practice, no source);
- * - speedometer: an error beyond 3 % (common practice, no source);
+ * - speedometer: actual speed more than 3 % off the indicated one (common practice, no source);
  * - regear: the ratio that restores the engine speed differs from the axle ratio by 5 % or more
  *   and a different common ratio is nearer (common practice, no source).
  */
@@ -28,17 +29,48 @@ import {
   type SetupGeometry,
 } from "@/lib/fitment";
 import { type ComparisonInput, type SetupInputValues, DEFAULT_FLANGE_ALLOWANCE_IN, positionOffsetMm } from "./model";
+import {
+  type EnteredSpeed,
+  type SpeedSystem,
+  type SpeedUnit,
+  HEADLINE_SPEED,
+  REFERENCE_SPEEDS,
+  SPEED_UNIT,
+  enteredSpeed,
+  readingPhrase,
+  speedometerPercents,
+  toMph,
+  trueSpeedPhrase,
+} from "./speedometer";
 
-/** Speedometer error that earns a warning, percent (common practice, no source). */
+/** Actual speed off the indicated one by more than this earns a warning, percent (common practice, no source). */
 export const SPEEDO_WARN_PCT = 3;
 /** Scrub radius increase that earns a warning, mm (1 in; common practice, no source). */
 export const SCRUB_WARN_MM = 25.4;
 /** Difference between the restoring ratio and the axle ratio that advises a regear, percent (common practice, no source). */
 export const REGEAR_WARN_PCT = 5;
-/** Indicated speed of the headline speedometer figure, mph. */
-export const HEADLINE_INDICATED_MPH = 60;
-/** Road speeds of the charts, mph (cruise speeds and the headline speed are added). */
-export const CHART_SPEEDS_MPH: readonly number[] = Object.freeze([10, 20, 30, 40, 50, 60, 70, 80]);
+/** Indicated and actual speed, both in the unit of the system they belong to. */
+export interface SpeedRow {
+  indicated: number;
+  actual: number;
+}
+
+/** Engine speeds at a road speed given in the unit of the system it belongs to. */
+export interface RpmRow {
+  speed: number;
+  currentRpm: number;
+  plannedRpm: number;
+  regearedRpm: number;
+}
+
+/** Engine speeds at a cruise speed the user entered: stored mph and the figure as typed. */
+export interface CruiseRow {
+  mph: number;
+  entered: EnteredSpeed;
+  currentRpm: number;
+  plannedRpm: number;
+  regearedRpm: number;
+}
 
 /** Figures of one setup, as the detail table shows them. */
 export interface SetupFigures {
@@ -85,6 +117,8 @@ export interface ComparisonWarning {
   setup: "current" | "planned" | null;
   /** Short statement; `{len}` stands for `lengthMm` in the reader's units (see format.ts `warningTitle`). */
   title: string;
+  /** The statement per unit system, where it quotes speeds (format.ts `warningTitle` picks one); else null. */
+  titleBySystem: Record<SpeedSystem, string> | null;
   lengthMm: number | null;
   why: string;
   basis: string;
@@ -104,10 +138,14 @@ export interface ComparisonResult {
     trackWidthMm: number;
   };
   speedometer: {
+    /** D_planned / D_current: actual speed = indicated × ratio. */
     ratio: number;
-    errorPct: number;
-    headline: { indicatedMph: number; actualMph: number };
-    rows: { indicatedMph: number; actualMph: number }[];
+    /** How far actual speed is above the indicated speed, % of the indicated: (ratio − 1) × 100; negative = below. */
+    trueAbovePct: number;
+    /** How far the speedometer reads below actual speed, % of the actual: (1 − 1/ratio) × 100; negative = reads high. */
+    readsLowPct: number;
+    /** The headline speed and the chart rows, at round speeds of each unit system. */
+    bySystem: Record<SpeedSystem, { unit: SpeedUnit; headline: SpeedRow; rows: SpeedRow[] }>;
   };
   gearing: {
     axleRatio: number;
@@ -115,8 +153,9 @@ export interface ComparisonResult {
     effectiveRatio: number;
     ratioToRestore: number;
     suggestedRatio: number;
-    cruise: { mph: number; currentRpm: number; plannedRpm: number; regearedRpm: number }[];
-    rows: { mph: number; currentRpm: number; plannedRpm: number; regearedRpm: number }[];
+    cruise: CruiseRow[];
+    /** The chart rows, at round speeds of each unit system. */
+    bySystem: Record<SpeedSystem, { unit: SpeedUnit; rows: RpmRow[] }>;
   };
   /** The kingpin inclination entered, or null when none was (the engine then uses 0°). */
   kingpinInclinationDeg: number | null;
@@ -212,6 +251,7 @@ function warningsOf(r: Omit<ComparisonResult, "warnings">): ComparisonWarning[] 
         setup: side,
         title: `${side === "planned" ? "Planned" : "Current"} wheel width ${f.wheelWidthIn} in is outside the usual ${f.rimWidthMinIn}–${f.rimWidthMaxIn} in for ${f.tireText}`,
         lengthMm: null,
+        titleBySystem: null,
         why: narrow
           ? "On a rim that narrow the tread crowns and the sidewall rolls under load and in corners; the bead is pinched at an angle it was not made for. Check the tire maker's approved rim widths."
           : "On a rim that wide the sidewall is stretched straight, the bead and rim edge are exposed to rocks, and the bead can unseat at low pressure. Check the tire maker's approved rim widths.",
@@ -229,6 +269,7 @@ function warningsOf(r: Omit<ComparisonResult, "warnings">): ComparisonWarning[] 
           setup: side,
           title: `${side === "planned" ? "Planned" : "Current"} tire reaches ${LENGTH_TOKEN} past the fender line you entered`,
           lengthMm: past,
+          titleBySystem: null,
           why: "Tread outside the fender throws stones, mud and water at the body and at other road users, and many places require the tread to be covered. Check the rules where you drive; flares or a different offset bring it back in.",
           basis: "Your fender-line measurement compared with the tire's outer reach from the hub face (the engine's outer swing).",
         });
@@ -243,26 +284,33 @@ function warningsOf(r: Omit<ComparisonResult, "warnings">): ComparisonWarning[] 
       setup: null,
       title: `Scrub radius grows by ${LENGTH_TOKEN}`,
       lengthMm: scrub,
+      titleBySystem: null,
       why:
         "The contact patch moves further from the steering axis: heavier steering, more kickback over bumps and under braking, and more load on wheel bearings, ball joints and the steering box." +
         (r.kingpinInclinationDeg === null ? " Kingpin inclination is not entered, so this is the wheel-plane shift alone." : ""),
       basis: `More than ${SCRUB_WARN_MM} mm (1 in) of increase (common practice, no source).`,
     });
   }
-  const err = r.speedometer.errorPct;
+  const sp = r.speedometer;
+  const err = sp.trueAbovePct;
   if (Math.abs(err) > SPEEDO_WARN_PCT) {
-    const h = r.speedometer.headline;
+    const titleOf = (system: SpeedSystem) => {
+      const { unit, headline: h } = sp.bySystem[system];
+      return `Speedometer ${readingPhrase(sp.ratio)}: at an indicated ${h.indicated} ${unit} you are actually going ${h.actual.toFixed(1)} ${unit} (${trueSpeedPhrase(sp.ratio)})`;
+    };
+    const titleBySystem = { imperial: titleOf("imperial"), metric: titleOf("metric") };
     out.push({
       kind: "speedometer",
       level: "caution",
       setup: null,
-      title: `Speedometer off by ${Math.abs(err).toFixed(1)} %: at an indicated ${h.indicatedMph} mph (${(h.indicatedMph * KM_PER_MILE).toFixed(0)} km/h) you do ${h.actualMph.toFixed(1)} mph (${(h.actualMph * KM_PER_MILE).toFixed(0)} km/h)`,
+      title: titleBySystem.imperial,
+      titleBySystem,
       lengthMm: null,
       why:
         err > 0
           ? "The taller tire covers more ground per turn than the speedometer was set for, so it reads low — you are faster than it shows — and the odometer under-counts. Recalibrate it for the new tire."
           : "The shorter tire covers less ground per turn, so the speedometer reads high and the odometer over-counts. Recalibrate it for the new tire.",
-      basis: `More than ${SPEEDO_WARN_PCT} % (common practice, no source); the error is the ratio of overall diameters (unloaded).`,
+      basis: `Actual speed more than ${SPEEDO_WARN_PCT} % off the indicated one (common practice, no source); both percentages come from the ratio of overall diameters (unloaded).`,
     });
   }
   const g = r.gearing;
@@ -274,6 +322,7 @@ function warningsOf(r: Omit<ComparisonResult, "warnings">): ComparisonWarning[] 
       setup: null,
       title: `Regear advised: ${g.suggestedRatio.toFixed(2)} comes closest to the engine speeds of ${g.axleRatio.toFixed(2)} on the current tire`,
       lengthMm: null,
+      titleBySystem: null,
       why:
         gap > 0
           ? `The taller tire acts like a ${g.effectiveRatio.toFixed(2)} axle: the engine turns slower at the same speed, pulls weaker in top gear and on grades, an automatic hunts between gears and runs hotter.`
@@ -288,6 +337,7 @@ function warningsOf(r: Omit<ComparisonResult, "warnings">): ComparisonWarning[] 
       setup: "planned",
       title: `Planned tire reaches ${LENGTH_TOKEN} further inboard`,
       lengthMm: -r.changes.innerClearanceMm,
+      titleBySystem: null,
       why: "Check the room to the control arms, leaf springs, frame and sway bar at full lock and full droop and compression.",
       basis: "Inner swing from the hub face, current minus planned (engine).",
     });
@@ -300,6 +350,7 @@ function warningsOf(r: Omit<ComparisonResult, "warnings">): ComparisonWarning[] 
         setup: side,
         title: `${side === "planned" ? "Planned" : "Current"} setup uses a ${LENGTH_TOKEN} spacer`,
         lengthMm: r[side].spacerMm,
+        titleBySystem: null,
         why: "Use hub-centric spacers rated for the vehicle, follow the spacer maker's fitting instructions and torque, and re-check the nuts after the first run. Spacers also add leverage on the wheel bearings.",
         basis: "Common practice, no source; the spacer and wheel makers' instructions win.",
       });
@@ -320,15 +371,28 @@ export function computeComparison(input: ComparisonInput): ComparisonResult {
   const cur = geometryOf(input.current);
   const pla = geometryOf(input.planned);
   const v = input.vehicle;
-  const speeds = [...new Set([...CHART_SPEEDS_MPH, HEADLINE_INDICATED_MPH, ...v.cruiseSpeedsMph])].sort((a, b) => a - b);
+  // One engine call for every speed: the imperial rows, the metric rows (converted to mph for
+  // the engine only), then the cruise speeds as stored. Rows are read back by position.
+  const offset: Record<SpeedSystem, number> = { imperial: 0, metric: REFERENCE_SPEEDS.imperial.length };
+  const engineSpeeds = [...REFERENCE_SPEEDS.imperial.map((x) => toMph(x, "imperial")), ...REFERENCE_SPEEDS.metric.map((x) => toMph(x, "metric"))];
   const c = compareSetups(cur, pla, {
     kingpinInclinationDeg: v.kingpinInclinationDeg ?? undefined,
     axleRatio: v.axleRatio,
     transmissionRatio: v.transmissionRatio,
-    speedsMph: speeds,
+    speedsMph: [...engineSpeeds, ...v.cruiseSpeedsMph],
   });
-  const headline = c.speedometer.rows.find((x) => x.indicatedMph === HEADLINE_INDICATED_MPH);
-  const chartSpeeds = new Set(CHART_SPEEDS_MPH);
+  const ratio = c.speedometer.ratio;
+  const rpmAt = (i: number) => {
+    const e = c.gearing.rpmAt[i]!;
+    return { currentRpm: e.currentRpm, plannedRpm: e.plannedRpm, regearedRpm: e.regearedRpm };
+  };
+  const gearingOf = (system: SpeedSystem) => ({ unit: SPEED_UNIT[system], rows: REFERENCE_SPEEDS[system].map((speed, i) => ({ speed, ...rpmAt(offset[system] + i) })) });
+  // Actual = indicated × ratio in the same unit: nothing converted between the systems.
+  const speedOf = (system: SpeedSystem) => {
+    const h = HEADLINE_SPEED[system];
+    return { unit: SPEED_UNIT[system], headline: { indicated: h, actual: h * ratio }, rows: REFERENCE_SPEEDS[system].map((x) => ({ indicated: x, actual: x * ratio })) };
+  };
+  const cruise: CruiseRow[] = v.cruiseSpeedsMph.map((mph, i) => ({ mph, entered: enteredSpeed(mph), ...rpmAt(engineSpeeds.length + i) }));
   const current = figures(input.current, cur);
   const planned = figures(input.planned, pla);
   const base: Omit<ComparisonResult, "warnings"> = {
@@ -343,20 +407,15 @@ export function computeComparison(input: ComparisonInput): ComparisonResult {
       scrubRadiusMm: c.scrubRadiusChangeMm,
       trackWidthMm: c.trackWidthChangeMm,
     },
-    speedometer: {
-      ratio: c.speedometer.ratio,
-      errorPct: (c.speedometer.ratio - 1) * 100,
-      headline: headline ?? { indicatedMph: HEADLINE_INDICATED_MPH, actualMph: HEADLINE_INDICATED_MPH * c.speedometer.ratio },
-      rows: c.speedometer.rows.filter((x) => chartSpeeds.has(x.indicatedMph)),
-    },
+    speedometer: { ratio, ...speedometerPercents(ratio), bySystem: { imperial: speedOf("imperial"), metric: speedOf("metric") } },
     gearing: {
       axleRatio: c.gearing.axleRatio,
       transmissionRatio: c.gearing.transmissionRatio,
       effectiveRatio: c.gearing.effectiveRatio,
       ratioToRestore: c.gearing.ratioToRestore,
       suggestedRatio: c.gearing.suggestedRatio,
-      cruise: v.cruiseSpeedsMph.map((mph) => c.gearing.rpmAt.find((x) => x.mph === mph)).filter((x) => x !== undefined),
-      rows: c.gearing.rpmAt.filter((x) => chartSpeeds.has(x.mph)),
+      cruise,
+      bySystem: { imperial: gearingOf("imperial"), metric: gearingOf("metric") },
     },
     kingpinInclinationDeg: v.kingpinInclinationDeg,
     fenderLineMm: v.fenderLineMm,

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { computeComparison } from "./compute";
-import { DEFAULT_PREFS, type DisplayPrefs, MINUS, formatLen, formatLenOther, formatLoad, formatNumber, formatPressure, formatSpeed, formatSpeedRating, parsePrefs, warningTitle } from "./format";
+import { DEFAULT_PREFS, type DisplayPrefs, MINUS, formatLen, formatLenOther, formatLoad, formatNumber, formatEnteredSpeed, formatPartThickness, formatPressure, formatSpeedIn, formatSpeedRating, parsePrefs, warningTitle } from "./format";
 import { DEFAULT_INPUT } from "./schema";
 
 const inch: DisplayPrefs = { units: "imperial", lengths: "decimal" };
@@ -27,10 +27,31 @@ describe("display helpers", () => {
     expect(formatNumber(5, 1, { signed: true })).toBe("+5.0");
   });
 
-  it("speeds: 60 mph = 96.56 km/h (1 mi = 1.609344 km exactly, NIST SP 811)", () => {
-    expect(formatSpeed(60, inch)).toBe("60.0 mph");
-    expect(formatSpeed(60, metric)).toBe("96.6 km/h");
+  it("speeds in their own unit, never converted: 117.07 km/h → 117.1 km/h", () => {
+    expect(formatSpeedIn(117.0653, "km/h")).toBe("117.1 km/h");
+    expect(formatSpeedIn(60, "mph", 0)).toBe("60 mph");
+  });
+
+  it("cruise speeds show as entered; in the other unit converted to 0.1 with the entered figure beside (1 mi = 1.609344 km exactly, NIST SP 811)", () => {
+    // The workspace stores 100 km/h as 100 / 1.609344 = 62.137 mph.
+    expect(formatEnteredSpeed(100 / 1.609344, metric)).toBe("100 km/h");
+    expect(formatEnteredSpeed(100 / 1.609344, inch)).toBe("62.1 mph (100 km/h)");
+    // A link carries 4 decimals of mph: 62.1371 × 1.609344 = 99.99997 km/h, still 100 as typed.
+    expect(formatEnteredSpeed(62.1371, metric)).toBe("100 km/h");
+    expect(formatEnteredSpeed(65, inch)).toBe("65 mph");
+    // 65 × 1.609344 = 104.607 km/h.
+    expect(formatEnteredSpeed(65, metric)).toBe("104.6 km/h (65 mph)");
+    expect(formatEnteredSpeed(62.5, inch)).toBe("62.5 mph");
     expect(formatSpeedRating(160, 160 / 1.609344, inch)).toBe("99 mph (160 km/h)");
+  });
+
+  it("part thickness as bought: a sixteenth only when exact (1 in = 25.4 mm exactly, NIST SP 811)", () => {
+    expect(formatPartThickness(12.7, frac)).toBe("1/2 in (12.7 mm)");
+    expect(formatPartThickness(6.35, frac)).toBe("1/4 in (6.35 mm)");
+    expect(formatPartThickness(12.7, inch)).toBe("0.5 in (12.7 mm)");
+    // 20 mm = 0.787 in: not 13/16 in (20.64 mm).
+    expect(formatPartThickness(20, frac)).toBe("0.79 in (20 mm)");
+    expect(formatPartThickness(20, metric)).toBe("20 mm");
   });
 
   it("loads and pressures: 1 lb = 0.45359237 kg, 1 psi = 6.894757 kPa (NIST SP 811)", () => {

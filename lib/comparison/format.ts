@@ -1,12 +1,15 @@
 /**
  * Display helpers for the comparison screens: one unit choice (inch or metric) and one length
  * style (decimals or fractions) applied everywhere. Lengths go through the engine's
- * `formatLength`; speed, pressure and mass conversions through the engine's units. Negative values use the typographic minus sign (U+2212).
+ * `formatLength`; pressure and mass conversions through the engine's units. Reference speeds are
+ * not converted here: the result carries them at round speeds of each unit (speedometer.ts).
+ * Negative values use the typographic minus sign (U+2212).
  */
-import { KM_PER_MILE, formatLength, inToMm, kgToLb, psiToKpa } from "@/lib/fitment";
+import { KM_PER_MILE, MM_PER_IN, formatLength, inToMm, kgToLb, psiToKpa } from "@/lib/fitment";
 import { type ComparisonWarning, LENGTH_TOKEN } from "./compute";
+import { type SpeedSystem, type SpeedUnit, SPEED_UNIT, enteredSpeed } from "./speedometer";
 
-export type UnitSystem = "imperial" | "metric";
+export type UnitSystem = SpeedSystem;
 export type LengthStyle = "decimal" | "fraction";
 
 export interface DisplayPrefs {
@@ -66,6 +69,29 @@ export function formatLenOther(mm: number, prefs: DisplayPrefs, opts: { signed?:
   return formatLen(mm, other, opts);
 }
 
+/** Millimetres to a hundredth, without trailing zeros: 25 → "25", 25.4 → "25.4". */
+const isWhole = (x: number) => Math.abs(x - Math.round(x)) < 1e-9;
+const exactMm = (mm: number) => formatNumber(mm, isWhole(mm) ? 0 : isWhole(mm * 10) ? 1 : 2);
+
+/**
+ * A part's thickness as bought (a spacer): never rounded into another size. Millimetres show to
+ * the hundredth; inches show as a sixteenth only when the part is exactly one (1 in = 25.4 mm),
+ * otherwise to 0.01 in, with the millimetres beside them — so a 25 mm spacer never reads "1 in"
+ * and a 1 in spacer never reads "25 mm".
+ *
+ * @example
+ * formatPartThickness(25, { units: "imperial", lengths: "fraction" });  // "0.98 in (25 mm)"
+ * formatPartThickness(25.4, { units: "imperial", lengths: "fraction" }); // "1 in (25.4 mm)"
+ * formatPartThickness(25.4, { units: "metric", lengths: "decimal" });    // "25.4 mm"
+ */
+export function formatPartThickness(mm: number, prefs: DisplayPrefs): string {
+  if (prefs.units === "metric") return `${exactMm(mm)} mm`;
+  const sixteenths = (mm / MM_PER_IN) * 16;
+  const exactSixteenth = Math.abs(sixteenths - Math.round(sixteenths)) < 1e-6;
+  const inches = formatLength(mm, { unit: "in", fraction: exactSixteenth && prefs.lengths === "fraction" ? 16 : undefined, decimals: 2 });
+  return `${inches} (${exactMm(mm)} mm)`;
+}
+
 /** Inches as the trade gives them (wheel diameter and width, backspacing), decimals or fractions. */
 export function formatInches(inches: number, prefs: DisplayPrefs): string {
   return formatLen(inToMm(inches), { units: "imperial", lengths: prefs.lengths });
@@ -80,13 +106,33 @@ export function formatNumber(n: number, decimals = 0, opts: { signed?: boolean }
 }
 
 /**
- * A road speed given in mph, in the chosen units.
+ * A speed already in its unit (a row of the result's `bySystem`): never converted.
  *
  * @example
- * formatSpeed(60, { units: "metric", lengths: "decimal" }); // "96.6 km/h"
+ * formatSpeedIn(117.0653, "km/h"); // "117.1 km/h"
  */
-export function formatSpeed(mph: number, prefs: DisplayPrefs, decimals = 1): string {
-  return prefs.units === "metric" ? `${formatNumber(mph * KM_PER_MILE, decimals)} km/h` : `${formatNumber(mph, decimals)} mph`;
+export function formatSpeedIn(value: number, unit: SpeedUnit, decimals = 1): string {
+  return `${formatNumber(value, decimals)} ${unit}`;
+}
+
+/** Up to one decimal, none when whole: how people type speeds. */
+const asTyped = (x: number) => formatNumber(x, Number.isInteger(x) ? 0 : 1);
+
+/**
+ * A cruise speed (stored in mph) as the user entered it. In the entered unit it shows as typed
+ * (100 km/h, never 99.9); in the other unit converted to a tenth, with the entered figure beside
+ * it so the rounded conversion is never the only figure.
+ *
+ * @example
+ * formatEnteredSpeed(100 / 1.609344, { units: "metric", lengths: "decimal" });   // "100 km/h"
+ * formatEnteredSpeed(100 / 1.609344, { units: "imperial", lengths: "decimal" }); // "62.1 mph (100 km/h)"
+ */
+export function formatEnteredSpeed(mph: number, prefs: DisplayPrefs): string {
+  const e = enteredSpeed(mph);
+  const unit = SPEED_UNIT[prefs.units];
+  if (e.unit === unit) return `${asTyped(e.value)} ${unit}`;
+  const shown = unit === "km/h" ? mph * KM_PER_MILE : mph;
+  return `${formatNumber(shown, 1)} ${unit} (${asTyped(e.value)} ${e.unit})`;
 }
 
 /** A speed symbol's reference speed in both units, the chosen one first: "160 km/h (99 mph)". */
@@ -106,8 +152,10 @@ export function formatPressure(psi: number, prefs: DisplayPrefs): string {
   return prefs.units === "metric" ? `${formatNumber(kpa)} kPa (${formatNumber(psi)} psi)` : `${formatNumber(psi)} psi (${formatNumber(kpa)} kPa)`;
 }
 
-/** A warning's title with its length in the chosen units. */
+/** A warning's title in the chosen units: its speeds from the reader's system, its length converted (a spacer's as bought). */
 export function warningTitle(w: ComparisonWarning, prefs: DisplayPrefs): string {
-  if (w.lengthMm === null) return w.title;
-  return w.title.replace(LENGTH_TOKEN, formatLen(Math.abs(w.lengthMm), prefs));
+  const title = w.titleBySystem?.[prefs.units] ?? w.title;
+  if (w.lengthMm === null) return title;
+  const len = w.kind === "spacer" ? formatPartThickness(w.lengthMm, prefs) : formatLen(Math.abs(w.lengthMm), prefs);
+  return title.replace(LENGTH_TOKEN, len);
 }

@@ -4,13 +4,15 @@
  * result and the display helpers, in the reader's units.
  */
 import type { ComparisonResult, SetupFigures } from "./compute";
-import { type DisplayPrefs, formatLen, formatNumber, formatSpeed, warningTitle } from "./format";
+import { type DisplayPrefs, formatEnteredSpeed, formatLen, formatNumber, formatPartThickness, formatSpeedIn, warningTitle } from "./format";
+import { speedometerSentence } from "./speedometer";
 
 /** Pipes would break a table cell; line breaks would end the row. */
 const cell = (s: string) => s.replace(/\|/g, "/").replace(/\s*\n\s*/g, " ").trim();
 
 function wheel(f: SetupFigures): string {
-  const spacer = f.spacerMm > 0 ? ` + ${formatNumber(f.spacerMm, 0)} mm spacer` : "";
+  // The wheel columns are in mm whatever the reader's units; the spacer as bought (25.4 stays 25.4).
+  const spacer = f.spacerMm > 0 ? ` + ${formatPartThickness(f.spacerMm, { units: "metric", lengths: "decimal" })} spacer` : "";
   return `${formatNumber(f.wheelDiameterIn, 1).replace(/\.0$/, "")}x${formatNumber(f.wheelWidthIn, 1).replace(/\.0$/, "")} ${formatNumber(f.offsetMm, 0, { signed: true })} mm${spacer}`;
 }
 
@@ -24,7 +26,8 @@ export function forumPost(r: ComparisonResult, prefs: DisplayPrefs, opts: { name
   const c = r.current;
   const p = r.planned;
   const cruise = r.gearing.cruise[0];
-  const h = r.speedometer.headline;
+  const speed = r.speedometer.bySystem[prefs.units];
+  const h = speed.headline;
   const rows: [string, string, string, string][] = [
     ["Tire", c.tireText, p.tireText, ""],
     ["Wheel (dia x width, offset)", wheel(c), wheel(p), ""],
@@ -35,9 +38,15 @@ export function forumPost(r: ComparisonResult, prefs: DisplayPrefs, opts: { name
     ["Poke (outer reach)", `${len(c.outerSwingMm)} outboard`, `${len(p.outerSwingMm)} outboard`, len(r.changes.outerPokeMm, true)],
     ["Scrub radius", "", "", len(r.changes.scrubRadiusMm, true)],
     ["Track width", "", "", len(r.changes.trackWidthMm, true)],
-    [`True speed at ${formatSpeed(h.indicatedMph, prefs, 0)} shown`, formatSpeed(h.indicatedMph, prefs), formatSpeed(h.actualMph, prefs), `${formatNumber(r.speedometer.errorPct, 1, { signed: true })} %`],
+    [
+      `True speed at ${formatSpeedIn(h.indicated, speed.unit, 0)} shown`,
+      formatSpeedIn(h.indicated, speed.unit, 0),
+      formatSpeedIn(h.actual, speed.unit),
+      // Both percentages, each named: a bare "+17.1 %" reads as the speedometer's error.
+      speedometerSentence(r.speedometer.ratio),
+    ],
   ];
-  if (cruise) rows.push([`Engine rpm at ${formatSpeed(cruise.mph, prefs, 0)}`, formatNumber(cruise.currentRpm), formatNumber(cruise.plannedRpm), `${formatNumber(((cruise.plannedRpm - cruise.currentRpm) / cruise.currentRpm) * 100, 1, { signed: true })} %`]);
+  if (cruise) rows.push([`Engine rpm at ${formatEnteredSpeed(cruise.mph, prefs)}`, formatNumber(cruise.currentRpm), formatNumber(cruise.plannedRpm), `${formatNumber(((cruise.plannedRpm - cruise.currentRpm) / cruise.currentRpm) * 100, 1, { signed: true })} %`]);
   rows.push(["Axle ratio", formatNumber(r.gearing.axleRatio, 2), `suggested ${formatNumber(r.gearing.suggestedRatio, 2)}`, `${formatNumber(r.gearing.ratioToRestore, 2)} restores`]);
 
   const lines = [

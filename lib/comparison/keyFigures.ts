@@ -20,7 +20,9 @@ export function keyFigures(input: ComparisonInput): ComparisonFigures {
     groundClearanceChangeMm: r.changes.groundClearanceMm,
     pokeChangeMm: r.changes.outerPokeMm,
     scrubChangeMm: r.changes.scrubRadiusMm,
-    speedometerErrorPct: r.speedometer.errorPct,
+    // Stored as how far actual speed is above the indicated one, % of the indicated (r − 1);
+    // lists must say so (the speedometer itself reads (1 − 1/r) low: see speedometer.ts).
+    speedometerErrorPct: r.speedometer.trueAbovePct,
     suggestedRatio: r.gearing.suggestedRatio,
     warningCount: r.warnings.length,
   };

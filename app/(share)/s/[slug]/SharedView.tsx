@@ -8,7 +8,7 @@ import { HeadlineChanges, SetupDetailTable, WarningList } from "@/components/com
 import { useDisplayPrefs } from "@/components/comparison/useDisplayPrefs";
 import { buttonClass } from "@/components/ui/Button";
 import { computeComparison } from "@/lib/comparison/compute";
-import { type DisplayPrefs, formatLen, formatNumber, formatSpeed } from "@/lib/comparison/format";
+import { type DisplayPrefs, formatEnteredSpeed, formatLen, formatNumber } from "@/lib/comparison/format";
 import type { ComparisonInput } from "@/lib/comparison/schema";
 import { encodeComparison } from "@/lib/comparison/url";
 import { ForumPostButton } from "./ForumPostButton";
@@ -19,7 +19,7 @@ function VehicleSummary({ input, prefs }: { input: ComparisonInput; prefs: Displ
     ["Kingpin inclination", v.kingpinInclinationDeg === null ? "not entered" : `${formatNumber(v.kingpinInclinationDeg, 1)}°`],
     ["Axle ratio", formatNumber(v.axleRatio, 2)],
     ["Top-gear ratio", formatNumber(v.transmissionRatio, 2)],
-    ["Cruise speeds", v.cruiseSpeedsMph.map((s) => formatSpeed(s, prefs, 0)).join(", ")],
+    ["Cruise speeds", v.cruiseSpeedsMph.map((s) => formatEnteredSpeed(s, prefs)).join(", ")],
     ["Fender line", v.fenderLineMm === null ? "not entered" : `${formatLen(v.fenderLineMm, prefs)} out from the hub face`],
   ];
   return (

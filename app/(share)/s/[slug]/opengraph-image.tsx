@@ -3,7 +3,8 @@ import { join } from "node:path";
 import { ImageResponse } from "next/og";
 import type { ComparisonResult, SetupFigures } from "@/lib/comparison/compute";
 import { computeComparison } from "@/lib/comparison/compute";
-import { DEFAULT_PREFS, formatLen, formatLenOther, formatNumber, formatSpeed } from "@/lib/comparison/format";
+import { DEFAULT_PREFS, formatLen, formatLenOther, formatNumber, formatSpeedIn } from "@/lib/comparison/format";
+import { readingPhrase } from "@/lib/comparison/speedometer";
 import { inToMm } from "@/lib/fitment";
 import { getSharedComparison } from "./data";
 
@@ -90,7 +91,8 @@ export default async function OpengraphImage({ params }: { params: Promise<{ slu
   const r = computeComparison(share.input);
   const p = DEFAULT_PREFS;
   const len = (mm: number) => formatLen(mm, p, { signed: true, decimals: 2 });
-  const h = r.speedometer.headline;
+  const speed = r.speedometer.bySystem[p.units];
+  const h = speed.headline;
   return new ImageResponse(
     (
       <div style={{ width: "100%", height: "100%", display: "flex", flexDirection: "column", background: PAPER, padding: "40px 56px", fontFamily: "Inter", color: INK }}>
@@ -117,7 +119,7 @@ export default async function OpengraphImage({ params }: { params: Promise<{ slu
             <Stat label="Diameter" value={len(r.changes.diameterMm)} sub={formatLenOther(r.changes.diameterMm, p, { signed: true })} />
             <Stat label="Poke" value={len(r.changes.outerPokeMm)} sub={formatLenOther(r.changes.outerPokeMm, p, { signed: true })} />
             <Stat label="Ground clearance" value={len(r.changes.groundClearanceMm)} sub="under the axle" />
-            <Stat label={`At ${formatSpeed(h.indicatedMph, p, 0)} shown`} value={formatSpeed(h.actualMph, p)} sub={`speedometer ${formatNumber(r.speedometer.errorPct, 1, { signed: true })} %`} />
+            <Stat label={`At ${formatSpeedIn(h.indicated, speed.unit, 0)} shown`} value={formatSpeedIn(h.actual, speed.unit)} sub={`speedometer ${readingPhrase(r.speedometer.ratio)}`} />
             <Stat label="Suggested ratio" value={formatNumber(r.gearing.suggestedRatio, 2)} sub={`from ${formatNumber(r.gearing.axleRatio, 2)}`} />
             <Stat label="Scrub radius" value={len(r.changes.scrubRadiusMm)} sub={r.kingpinInclinationDeg === null ? "wheel shift only" : `${formatNumber(r.kingpinInclinationDeg, 1)}° KPI`} />
           </div>

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { computeComparison } from "@/lib/comparison/compute";
-import { DEFAULT_PREFS, formatLen, formatNumber, formatSpeed } from "@/lib/comparison/format";
+import { DEFAULT_PREFS, formatLen, formatNumber, formatSpeedIn } from "@/lib/comparison/format";
 import { getSharedComparison } from "./data";
 import { SharedView } from "./SharedView";
 
@@ -32,8 +32,9 @@ export async function generateMetadata({ params }: Props): Promise<Metadata> {
   if (!share) return { title: "Shared comparison not available", robots: { index: false } };
   const r = computeComparison(share.input);
   const p = DEFAULT_PREFS;
+  const speed = r.speedometer.bySystem[p.units];
   const title = `${share.name} — shared comparison`;
-  const description = `${r.current.tireText} → ${r.planned.tireText}: diameter ${formatLen(r.changes.diameterMm, p, { signed: true })}, poke ${formatLen(r.changes.outerPokeMm, p, { signed: true })}, ${formatSpeed(r.speedometer.headline.actualMph, p)} true at ${formatSpeed(r.speedometer.headline.indicatedMph, p, 0)} shown, suggested axle ratio ${formatNumber(r.gearing.suggestedRatio, 2)}.`;
+  const description = `${r.current.tireText} → ${r.planned.tireText}: diameter ${formatLen(r.changes.diameterMm, p, { signed: true })}, poke ${formatLen(r.changes.outerPokeMm, p, { signed: true })}, ${formatSpeedIn(speed.headline.actual, speed.unit)} true at ${formatSpeedIn(speed.headline.indicated, speed.unit, 0)} shown, suggested axle ratio ${formatNumber(r.gearing.suggestedRatio, 2)}.`;
   return {
     title,
     description,
