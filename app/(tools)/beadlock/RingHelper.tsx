@@ -1,19 +1,24 @@
 "use client";
 import { useState } from "react";
-import { Alert } from "@/components/ui/Alert";
 import { Card } from "@/components/ui/Card";
-import { TextField } from "@/components/ui/TextField";
-import { Segmented } from "@/components/comparison/Segmented";
-import { formatNumber } from "@/lib/comparison/format";
-import { BOLT_COUNT_LIMITS, FitmentInputError, tighteningSequence, torquePlan } from "@/lib/fitment";
+import { BOLT_COUNT_LIMITS, tighteningSequence, torquePlan, type TorquePlan } from "@/lib/fitment/tightening";
+import { PassTable } from "./PassTable";
+import { RingCautions } from "./RingCautions";
 import { RingDiagram } from "./RingDiagram";
+import { RingInputs } from "./RingInputs";
+import { TickOff } from "./TickOff";
+import { torquePair } from "./torqueText";
+import { useTickOff } from "./useTickOff";
+import { useTorqueEntry } from "./useTorqueEntry";
 
-const COMMON_COUNTS = [16, 24, 30, 32];
-
+/**
+ * The beadlock ring helper: bolt count and the maker's torque in, the crisscross order as a
+ * diagram, the torque passes in both units, a per-pass tick-off, and a one-page print sheet
+ * (diagram, passes with the order to tick by hand, cautions; the controls are not printed).
+ */
 export function RingHelper() {
   const [countText, setCountText] = useState("24");
-  const [torqueText, setTorqueText] = useState("");
-  const [unit, setUnit] = useState<"ftlb" | "nm">("ftlb");
+  const torque = useTorqueEntry();
 
   const count = /^\d{1,3}$/.test(countText.trim()) ? Number(countText.trim()) : NaN;
   let sequence: number[] | null = null;
@@ -21,66 +26,31 @@ export function RingHelper() {
   try {
     sequence = tighteningSequence(count);
   } catch {
-    countError = `Enter a whole number of bolts from ${BOLT_COUNT_LIMITS.min} to ${BOLT_COUNT_LIMITS.max} (e.g. 24).`;
+    countError = `Bolts on the ring: enter a whole number from ${BOLT_COUNT_LIMITS.min} to ${BOLT_COUNT_LIMITS.max} (e.g. 24).`;
   }
-  const torque = /^\s*(\d+(\.\d*)?|\.\d+)\s*$/.test(torqueText) ? Number(torqueText) : NaN;
-  let plan: ReturnType<typeof torquePlan> | null = null;
-  let torqueError: string | undefined;
-  if (torqueText.trim() !== "" && sequence) {
-    try {
-      plan = torquePlan(unit === "ftlb" ? { boltCount: count, torqueFtLb: torque } : { boltCount: count, torqueNm: torque });
-    } catch (e) {
-      torqueError = e instanceof FitmentInputError && Number.isFinite(torque)
-        ? `The figure must be between 1 and ${unit === "ftlb" ? "1500 ft·lb" : "2000 N·m"} — check the ring maker's instructions.`
-        : `Enter the ring maker's figure as a number, like ${unit === "ftlb" ? "17" : "23"}.`;
-    }
-  }
+  // torque.nm is already read and range-checked, naming the field; the plan cannot refuse it.
+  const plan: TorquePlan | null = sequence && torque.nm !== null ? torquePlan({ boltCount: sequence.length, torqueNm: torque.nm }) : null;
+  const tick = useTickOff(plan ? `${plan.boltCount}|${plan.torqueNm}` : null, sequence ?? [], plan?.passes.length ?? 0);
 
   return (
-    <div className="grid gap-5 lg:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
-      <div className="flex flex-col gap-5">
-        <Card>
-          <div className="flex flex-wrap items-end gap-4">
-            <TextField className="w-40" label="Bolts on the ring" name="ring-bolts" inputMode="numeric" value={countText} onChange={(e) => setCountText(e.target.value)} error={countError} hint={`Common: ${COMMON_COUNTS.join(", ")}`} />
-            <TextField className="w-44" label={`Maker's torque (${unit === "ftlb" ? "ft·lb" : "N·m"})`} name="ring-torque" inputMode="decimal" value={torqueText} placeholder="from the maker" onChange={(e) => setTorqueText(e.target.value)} error={torqueError} hint="Printed in the ring maker's instructions" />
-            <Segmented legend="Torque unit" name="ring-unit" value={unit} options={[{ value: "ftlb", label: "ft·lb" }, { value: "nm", label: "N·m" }]} onChange={setUnit} className="mb-6" />
-          </div>
-        </Card>
-        <Alert tone="warning" title="Before you start">
-          <ul className="mt-1 list-disc space-y-1 pl-5">
-            <li>Seat beads in a safety cage, or with a clip-on air chuck and an in-line gauge while you stand clear — never lean over a tire being inflated.</li>
-            <li>Never exceed the bead-seating pressure printed on the sidewall. If the bead will not seat at that pressure, deflate and find out why.</li>
-            <li>Re-check the ring bolts after the first run and after every time you air down, and at the intervals the maker gives.</li>
-            <li>Follow the wheel and ring maker&apos;s instructions: their bolt, torque, order and lubrication wins over anything here. When in doubt, have a tire shop do it.</li>
-          </ul>
-        </Alert>
-        <Card className="min-h-72">
-          <h2 className="text-lg font-semibold">Passes</h2>
+    // On paper: the diagram on the left, the summary and cautions beside it, the passes below (one page).
+    <div className="grid gap-5 lg:grid-cols-[minmax(0,1fr)_minmax(0,1fr)] print:grid-cols-[7cm_minmax(0,1fr)] print:gap-x-6 print:gap-y-3 print:[grid-template-areas:'d_s'_'d_c'_'p_p']">
+      {plan && (
+        <p data-testid="print-summary" className="hidden text-sm font-semibold print:block print:[grid-area:s]">
+          {`Beadlock ring, ${plan.boltCount} bolts — maker's torque ${torquePair(plan.torqueNm, torque.unit, true)}. Bolt 1 is the first clockwise from the valve stem.`}
+        </p>
+      )}
+      <div className="flex flex-col gap-5 print:contents">
+        <RingInputs countText={countText} onCountText={setCountText} countError={countError} torque={torque} />
+        <RingCautions className="print:[grid-area:c]" />
+        <Card className="min-h-72 print:min-h-0 print:p-0 print:shadow-none print:ring-0 print:[grid-area:p]">
+          <h2 className="text-lg font-semibold print:hidden">Passes</h2>
           {plan ? (
             <>
               <p className="mt-1 text-sm text-basalt-600">
                 Start bolts {plan.startBolts.join(", ")} by hand (one per quadrant), then go round in the order shown at each pass.
               </p>
-              <table className="mt-3 w-full text-sm tabular-nums" data-testid="torque-passes">
-                <thead>
-                  <tr className="border-b border-basalt-200 text-left">
-                    <th scope="col" className="py-1.5">Pass</th>
-                    <th scope="col" className="py-1.5 text-right">Share</th>
-                    <th scope="col" className="py-1.5 text-right">ft·lb</th>
-                    <th scope="col" className="py-1.5 text-right">N·m</th>
-                  </tr>
-                </thead>
-                <tbody>
-                  {plan.passes.map((p) => (
-                    <tr key={p.pass} className="border-b border-basalt-100">
-                      <th scope="row" className="py-1.5 text-left font-medium">{p.kind === "check" ? `${p.pass}: check every bolt` : `${p.pass}`}</th>
-                      <td className="py-1.5 text-right">{Math.round(p.fraction * 100)} %</td>
-                      <td className="py-1.5 text-right">{formatNumber(p.torqueFtLb, 1)}</td>
-                      <td className="py-1.5 text-right">{formatNumber(p.torqueNm, 1)}</td>
-                    </tr>
-                  ))}
-                </tbody>
-              </table>
+              <PassTable plan={plan} unit={torque.unit} />
               <p className="mt-2 text-xs text-basalt-500">Passes at 30, 60 and 100 % and a check pass are common practice (no source); the maker&apos;s steps win.</p>
             </>
           ) : (
@@ -88,17 +58,25 @@ export function RingHelper() {
           )}
         </Card>
       </div>
-      <Card className="flex flex-col items-center">
-        <h2 className="self-start text-lg font-semibold">Order</h2>
+      <Card className="flex flex-col items-center print:p-0 print:shadow-none print:ring-0 print:[grid-area:d]">
+        <h2 className="self-start text-lg font-semibold print:hidden">Order</h2>
         {sequence ? (
           <>
-            <RingDiagram sequence={sequence} />
-            <p className="mt-2 self-start text-sm text-basalt-700" data-testid="ring-order">
+            <RingDiagram sequence={sequence} done={plan ? tick.done : undefined} next={plan ? tick.next : null} onBoltClick={plan ? tick.toggle : undefined} />
+            <p className="mt-2 self-start text-sm text-basalt-700 print:text-xs" data-testid="ring-legend">
+              <span className="font-semibold">Big number:</span> the bolt, counted clockwise from the valve stem.{" "}
+              <span className="font-semibold">Small “step”:</span> its place in the tightening order.
+            </p>
+            {/* The passes table carries the order on paper, with a box per bolt. */}
+            <p className="mt-1 self-start text-sm text-basalt-700 print:hidden" data-testid="ring-order">
               <span className="font-semibold">Bolt order:</span> {sequence.join(" → ")}
             </p>
-            <p className="mt-1 self-start text-xs text-basalt-500">
-              Bolt 1 is the first clockwise from the valve stem. Each bolt is followed by the one opposite it (common practice, no source).
-            </p>
+            <p className="mt-1 self-start text-xs text-basalt-500">Each bolt is followed by the one opposite it (common practice, no source).</p>
+            {plan ? (
+              <TickOff plan={plan} unit={torque.unit} tick={tick} />
+            ) : (
+              <p className="no-print mt-3 self-start text-sm text-basalt-600">Enter the maker&apos;s torque to tick off the bolts pass by pass.</p>
+            )}
           </>
         ) : (
           <p className="min-h-96 text-sm text-basalt-600">Enter the bolt count to draw the ring.</p>
