@@ -94,10 +94,22 @@ export {
 export {
   BOLT_COUNT_LIMITS,
   DEFAULT_TORQUE_STAGES,
+  TORQUE_LIMITS_NM,
+  TORQUE_UNIT_SYMBOL,
+  formatTorqueEntry,
+  parseTorqueEntry,
+  requireTorqueNm,
+  switchTorqueUnit,
   tighteningSequence,
+  torqueEntryNm,
+  torqueFromNm,
+  torqueLimitsIn,
   torquePlan,
+  torqueToNm,
+  type TorqueEntry,
   type TorquePass,
   type TorquePlan,
+  type TorqueUnit,
 } from "./tightening";
 export { parseLength, formatLength, type LengthUnit } from "./length";
 export {

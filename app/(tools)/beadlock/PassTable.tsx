@@ -1,5 +1,5 @@
 import { formatNumber } from "@/lib/comparison/format";
-import type { TorquePlan, TorqueUnit } from "@/lib/fitment/tightening";
+import type { TorquePlan, TorqueUnit } from "@/lib/fitment";
 import { cx } from "@/components/ui/cx";
 
 /**

@@ -1,7 +1,7 @@
 "use client";
 import { useState } from "react";
 import { Card } from "@/components/ui/Card";
-import { BOLT_COUNT_LIMITS, tighteningSequence, torquePlan, type TorquePlan } from "@/lib/fitment/tightening";
+import { BOLT_COUNT_LIMITS, tighteningSequence, torquePlan, type TorquePlan } from "@/lib/fitment";
 import { PassTable } from "./PassTable";
 import { RingCautions } from "./RingCautions";
 import { RingDiagram } from "./RingDiagram";

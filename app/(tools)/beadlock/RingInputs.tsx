@@ -2,7 +2,7 @@ import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { TextField } from "@/components/ui/TextField";
 import { Segmented } from "@/components/comparison/Segmented";
-import { TORQUE_UNIT_SYMBOL, formatTorqueEntry, type TorqueUnit } from "@/lib/fitment/tightening";
+import { TORQUE_UNIT_SYMBOL, formatTorqueEntry, type TorqueUnit } from "@/lib/fitment";
 import { otherUnit } from "./torqueText";
 import type { TorqueField } from "./useTorqueEntry";
 

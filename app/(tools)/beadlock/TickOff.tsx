@@ -1,7 +1,7 @@
 import { Button } from "@/components/ui/Button";
 import { cx } from "@/components/ui/cx";
 import { Segmented } from "@/components/comparison/Segmented";
-import type { TorquePlan, TorqueUnit } from "@/lib/fitment/tightening";
+import type { TorquePlan, TorqueUnit } from "@/lib/fitment";
 import { torquePair } from "./torqueText";
 import type { TickOff as TickOffState } from "./useTickOff";
 

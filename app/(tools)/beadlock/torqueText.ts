@@ -1,5 +1,5 @@
 import { formatNumber } from "@/lib/comparison/format";
-import { TORQUE_UNIT_SYMBOL, torqueFromNm, type TorqueUnit } from "@/lib/fitment/tightening";
+import { TORQUE_UNIT_SYMBOL, torqueFromNm, type TorqueUnit } from "@/lib/fitment";
 
 export const otherUnit = (unit: TorqueUnit): TorqueUnit => (unit === "ftlb" ? "nm" : "ftlb");
 

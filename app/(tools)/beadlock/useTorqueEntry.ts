@@ -1,7 +1,7 @@
 "use client";
 import { useState } from "react";
 import { FitmentInputError } from "@/lib/fitment";
-import { TORQUE_UNIT_SYMBOL, requireTorqueNm, switchTorqueUnit, torqueEntryNm, type TorqueEntry, type TorqueUnit } from "@/lib/fitment/tightening";
+import { TORQUE_UNIT_SYMBOL, requireTorqueNm, switchTorqueUnit, torqueEntryNm, type TorqueEntry, type TorqueUnit } from "@/lib/fitment";
 
 /** The torque field's label in a unit; messages name the field by this same text. */
 export const torqueLabel = (unit: TorqueUnit): string => `Maker's torque (${TORQUE_UNIT_SYMBOL[unit]})`;
