@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { type MeasuredClearance, predictClearance } from "./clearance";
 import { FitmentInputError } from "./errors";
 import { findFitments } from "./finder";
 import { setupGeometry } from "./geometry";
@@ -78,5 +79,97 @@ describe("findFitments", () => {
     expect(() => findFitments({ boltPattern: "banana" })).toThrow(/bolt pattern/);
     expect(() => findFitments({}, { offsetsMm: [500] })).toThrow(/offsetsMm/);
     expect(() => findFitments({}, { wheelWidthsIn: [0] })).toThrow(/wheelWidthsIn\[0\]/);
+  });
+
+  describe("measured points (the same prediction as the vehicle page, lib/fitment/clearance.ts)", () => {
+    // A pickup on 265/70R17, 17x8 +25 (R = 401.4 mm, ISO 4000-1), with a bumper corner 3/4 in
+    // (19.05 mm) ahead of the tread at full lock and a frame rail 1-1/4 in (31.75 mm) inboard at
+    // full lock; margin 1/2 in = 12.7 mm (common practice, no source).
+    const CUR = { tire: "265/70R17", wheel: { diameterIn: 17, widthIn: 8, offsetMm: 25 } };
+    const points: MeasuredClearance[] = [
+      { label: "Frame rail, full left lock", direction: "inboard", state: "full-lock", distanceMm: 31.75, measuredWith: CUR },
+      { label: "Bumper corner, full right lock", direction: "fore-aft", state: "full-lock", distanceMm: 19.05, measuredWith: CUR },
+    ];
+    const goals = { boltPattern: "6x5.5", minDiameterMm: 787.4, maxDiameterMm: 876.3, wheelDiametersIn: [17], clearancePoints: points, clearanceMarginMm: 12.7 };
+
+    it("keeps only fitments that keep the margin at every point, by predictClearance itself", () => {
+      const r = findFitments(goals, { limit: 300 });
+      expect(r.results.length).toBeGreaterThan(0);
+      for (const m of r.results) {
+        for (const p of points) {
+          const pred = predictClearance(p, { tire: m.tire, wheel: m.wheel }, { marginMm: 12.7 });
+          expect(pred.status, `${m.tire.text} ${m.wheel.widthIn} ${m.wheel.offsetMm} at ${p.label}`).toBe("clear");
+        }
+        expect(m.tightestClearance).not.toBeNull();
+        expect(m.tightestClearance!.predictedMm).toBeGreaterThanOrEqual(12.7);
+      }
+      // Without the points the same goals find more, among them sizes that touch the bumper corner.
+      const loose = findFitments({ ...goals, clearancePoints: undefined }, { limit: 300 });
+      expect(loose.matched).toBeGreaterThan(r.matched);
+      expect(r.matched + r.excludedCount).toBe(loose.matched);
+    });
+
+    it("says which limit decided each excluded size, with the predicted gap and what it needs", () => {
+      const r = findFitments(goals, { limit: 10_000, excludedLimit: 20 });
+      expect(r.excluded.length).toBe(Math.min(20, r.excludedSizes));
+      expect(r.excluded.length).toBeGreaterThan(0);
+      const fitting = new Set(r.results.map((m) => m.tire.text));
+      for (const x of r.excluded) {
+        expect(fitting.has(x.tire.text), `${x.tire.text} is both found and excluded`).toBe(false);
+        const reason = x.reason;
+        expect(reason.kind).toBe("clearance");
+        if (reason.kind !== "clearance") continue;
+        const pred = predictClearance(points[reason.pointIndex]!, { tire: x.tire, wheel: x.wheel }, { marginMm: 12.7 });
+        expect(reason.label).toBe(points[reason.pointIndex]!.label);
+        expect(reason.predictedMm).toBeCloseTo(pred.predictedMm, 9);
+        expect(reason.shortfallMm).toBeCloseTo(pred.shortfallMm, 9);
+        expect(reason.status).toBe(pred.status);
+        // The deciding point is the one short by the most.
+        for (const p of points) {
+          expect(predictClearance(p, { tire: x.tire, wheel: x.wheel }, { marginMm: 12.7 }).shortfallMm).toBeLessThanOrEqual(reason.shortfallMm + 1e-9);
+        }
+      }
+      // 35x12.50R17LT (889 mm) on 17x9 −12: the outer corner's sweep at hub height grows from
+      // √(401.4² + 132.5²) = 422.703 to √(444.5² + 190.67²) = 483.669 mm: 19.05 − 60.965 = −41.915 mm,
+      // needs 12.7 + 41.915 = 54.615 mm (the frame rail needs 12.7 − (31.75 − 36.853) = 17.80 mm).
+      const wide = findFitments({ ...goals, maxDiameterMm: 900 }, { wheelWidthsIn: [9], offsetsMm: [-12], excludedLimit: 100 });
+      const x = wide.excluded.find((e) => e.tire.text === "35x12.50R17LT")!;
+      expect(x.reason).toMatchObject({ kind: "clearance", pointIndex: 1, status: "contact" });
+      expect(x.reason.kind === "clearance" && x.reason.shortfallMm).toBeCloseTo(54.615, 2);
+      expect(x.limitsFailed).toBe(2);
+    });
+
+    it("an excluded size is shown by its nearest miss: the wheel short by the least (dense check)", () => {
+      const widths = [8, 8.5, 9, 9.5];
+      const offsets = [-25, -12, 0, 12, 25, 44];
+      const r = findFitments(goals, { wheelWidthsIn: widths, offsetsMm: offsets, limit: 10_000, excludedLimit: 10_000 });
+      for (const x of r.excluded) {
+        let least = Infinity;
+        for (const widthIn of widths) {
+          for (const offsetMm of offsets) {
+            const wheel = { diameterIn: 17, widthIn, offsetMm };
+            const g = setupGeometry({ tire: x.tire, wheel });
+            if (!g.rimWidthSuitable) continue;
+            const short = Math.max(...points.map((p) => predictClearance(p, g, { marginMm: 12.7 }).shortfallMm));
+            expect(short, `${x.tire.text} on ${widthIn} ${offsetMm} fits but the size is listed as excluded`).toBeGreaterThan(0);
+            least = Math.min(least, short);
+          }
+        }
+        expect(x.reason.shortfallMm).toBeCloseTo(least, 9);
+      }
+    });
+
+    it("reports the poke limit as the deciding limit where it fails first", () => {
+      const r = findFitments({ boltPattern: "6x5.5", minDiameterMm: 800, maxDiameterMm: 806, maxOuterSwingMm: 120 }, { wheelWidthsIn: [8], offsetsMm: [0], excludedLimit: 100 });
+      // 265/70R17 on 17x8 0: outer reach 132.5 mm > 120 mm: 12.5 mm over.
+      const x = r.excluded.find((e) => e.tire.text === "265/70R17")!;
+      expect(x.reason).toMatchObject({ kind: "outer-swing", limitMm: 120 });
+      expect(x.reason.kind === "outer-swing" && x.reason.shortfallMm).toBeCloseTo(12.5, 9);
+    });
+
+    it("refuses a bad point naming the field", () => {
+      expect(() => findFitments({ clearancePoints: [{ ...points[0]!, distanceMm: -1 }] })).toThrow(/clearancePoints\[0\]\.distanceMm/);
+      expect(() => findFitments({ clearancePoints: points, clearanceMarginMm: -1 })).toThrow(/clearanceMarginMm/);
+    });
   });
 });

@@ -11,11 +11,33 @@
  * allowed wheel diameters, or whose diameter is out of range, is rejected with all its
  * combinations, which count as evaluated.
  *
+ * Goals narrow the space silently (diameter range, wheel diameters, designation systems, rim
+ * width suited to the section, section width, bolt pattern). **Limits** exclude a combination and
+ * say so: the inner and outer swing limits, and every measured clearance point, predicted by
+ * `predictPreparedMm` from clearance.ts — the same code the vehicle page's predictions run — and
+ * kept at the margin. For every tire size the limits remove entirely, the result carries its
+ * nearest miss (the combination short by the least) with the limit that decided it (the one
+ * short by the most) and how many limits it fails.
+ *
  * Ranking (lexicographic): 1. closeness of the overall diameter to the target (default: the
  * maximum diameter, else the minimum, else larger first); 2. rim width closest to the measuring
- * rim; 3. the larger of the smaller remaining swing margins; 4. enumeration order.
+ * rim; 3. the larger of the smallest remaining margins (swing limits and measured points);
+ * 4. enumeration order. Excluded sizes rank by 1, then their nearest miss's rim (2), shortfall, order.
  */
 import { type BoltPattern, boltPatternsEquivalent, toBoltPattern } from "./boltPattern";
+import {
+  type ClearanceBasis,
+  type ClearanceDirection,
+  type ClearanceEnvelope,
+  type MeasuredClearance,
+  type PreparedClearance,
+  type SuspensionState,
+  CLEARANCE_MARGIN_LIMITS_MM,
+  DEFAULT_CLEARANCE_MARGIN_MM,
+  classifyClearance,
+  predictPreparedMm,
+  prepareClearance,
+} from "./clearance";
 import { RIM_WIDTH_TOLERANCE_IN, SECTION_WIDTH_K, measuringRimWidthIn } from "./dimensions";
 import { FitmentInputError, requireInteger, requireNumber } from "./errors";
 import type { Wheel } from "./geometry";
@@ -46,6 +68,12 @@ export interface FitmentConstraints {
   systems?: readonly TireSystem[];
   /** Keep only rim widths suited to the section width (default true). */
   requireSuitableRim?: boolean;
+  /** Measured gaps on the vehicle: a combination must keep the margin at every one (clearance.ts). */
+  clearancePoints?: readonly MeasuredClearance[];
+  /** Margin kept at the measured points, mm (default 12.7 = 1/2 in). */
+  clearanceMarginMm?: number;
+  /** Steering axis at the wheel centre, mm inboard of the hub face, for full-lock points (see clearance.ts). */
+  steeringAxisInboardMm?: number;
 }
 
 /** A wheel offered for sale, when searching a list instead of generic widths × offsets. */
@@ -67,14 +95,16 @@ export interface FinderOptions {
   wheels?: readonly WheelOffer[];
   /** Most results returned (1–10 000, default 100). */
   limit?: number;
+  /** Most excluded sizes returned, best-ranked first (0–10 000, default 50). */
+  excludedLimit?: number;
   /** Called with combinations done so far and the total, about every 1 % and at the end. */
   onProgress?: (done: number, total: number) => void;
   /** Stop early when `aborted` turns true (e.g. an AbortSignal). */
   signal?: { readonly aborted: boolean };
 }
 
-/** One fitment found. */
-export interface FitmentMatch {
+/** A combination of the search, found or excluded. */
+export interface FitmentCandidate {
   tire: TireSize;
   wheel: Wheel;
   wheelId: string | null;
@@ -87,8 +117,44 @@ export interface FitmentMatch {
   /** Backspacing to the bead seat, inches. */
   backspacingIn: number;
   measuringRimWidthIn: number;
-  /** 1-based rank. */
+  /** 1-based rank (among the results, or among the exclusions). */
   rank: number;
+}
+
+/** One fitment found. */
+export interface FitmentMatch extends FitmentCandidate {
+  /** The measured point with the least predicted gap (null without points). */
+  tightestClearance: { pointIndex: number; label: string | null; predictedMm: number } | null;
+}
+
+/** The limit that decided an exclusion: the one short by the most. */
+export type ExclusionReason =
+  | {
+      kind: "inner-swing" | "outer-swing";
+      limitMm: number;
+      valueMm: number;
+      /** How far past the limit, mm. */
+      shortfallMm: number;
+    }
+  | {
+      kind: "clearance";
+      pointIndex: number;
+      label: string | null;
+      direction: ClearanceDirection;
+      state: SuspensionState;
+      basis: ClearanceBasis;
+      predictedMm: number;
+      marginMm: number;
+      status: "tight" | "contact";
+      /** Room to gain to get back to the margin, mm. */
+      shortfallMm: number;
+    };
+
+/** A tire size within the goals that the limits remove entirely: its nearest miss. */
+export interface FitmentExclusion extends FitmentCandidate {
+  reason: ExclusionReason;
+  /** How many limits it fails (the reason is the worst). */
+  limitsFailed: number;
 }
 
 /** Result of {@link findFitments}. */
@@ -99,6 +165,12 @@ export interface FinderResult {
   total: number;
   /** Combinations that met every constraint (before `limit`). */
   matched: number;
+  /** Sizes within the goals with no combination inside the limits, each by its nearest miss (up to `excludedLimit`). */
+  excluded: FitmentExclusion[];
+  /** How many sizes that is (before `excludedLimit`). */
+  excludedSizes: number;
+  /** Combinations within the goals that a limit excluded. */
+  excludedCount: number;
   aborted: boolean;
 }
 
@@ -125,12 +197,114 @@ interface Cand {
   wheel: number;
 }
 
-function better(a: Cand, b: Cand): boolean {
-  if (Math.abs(a.k1 - b.k1) > 1e-6) return a.k1 < b.k1;
-  if (a.k2 !== b.k2) return a.k2 < b.k2;
-  if (Math.abs(a.k3 - b.k3) > 1e-6) return a.k3 < b.k3;
-  return a.k4 < b.k4;
+/** Scratch result of {@link Limits.assess}, reused across combinations (no allocation in the loop). */
+interface Verdict {
+  failed: number;
+  /** Largest shortfall among failed limits, or −(least remaining margin) when none failed. */
+  worst: number;
+  /** 1 inner swing, 2 outer swing, 3 a point; 0 none. */
+  kind: number;
+  point: number;
+  gap: number;
+  /** Least predicted gap over the points and its index (−1 without points). */
+  tightGap: number;
+  tight: number;
 }
+
+/** The limits of a search, checked the same way in the loop and for the returned records. */
+class Limits {
+  readonly env: ClearanceEnvelope = { radiusMm: 0, innerSwingMm: 0, outerSwingMm: 0 };
+  readonly v: Verdict = { failed: 0, worst: 0, kind: 0, point: -1, gap: 0, tightGap: 0, tight: -1 };
+  constructor(
+    readonly maxInner: number | undefined,
+    readonly maxOuter: number | undefined,
+    readonly points: readonly PreparedClearance[],
+    readonly margin: number,
+  ) {}
+
+  assess(radius: number, inner: number, outer: number): Verdict {
+    const v = this.v;
+    v.failed = 0;
+    v.worst = -Infinity;
+    v.kind = 0;
+    v.point = -1;
+    v.tight = -1;
+    v.tightGap = Infinity;
+    let room = Infinity;
+    if (this.maxInner !== undefined) {
+      const over = inner - this.maxInner;
+      if (over > 0) this.fail(over, 1, -1, 0);
+      else room = Math.min(room, -over);
+    }
+    if (this.maxOuter !== undefined) {
+      const over = outer - this.maxOuter;
+      if (over > 0) this.fail(over, 2, -1, 0);
+      else room = Math.min(room, -over);
+    }
+    const pts = this.points;
+    if (pts.length > 0) {
+      const env = this.env;
+      env.radiusMm = radius;
+      env.innerSwingMm = inner;
+      env.outerSwingMm = outer;
+      for (let j = 0; j < pts.length; j++) {
+        const gap = predictPreparedMm(pts[j] as PreparedClearance, env);
+        if (gap < v.tightGap) {
+          v.tightGap = gap;
+          v.tight = j;
+        }
+        // The vehicle page's own classing: contact at ≤ 0, tight below the margin.
+        if (gap <= 0 || gap < this.margin) this.fail(this.margin - gap, 3, j, gap);
+        else room = Math.min(room, gap - this.margin);
+      }
+    }
+    if (v.failed === 0) v.worst = room === Infinity ? 0 : -room;
+    return v;
+  }
+
+  private fail(short: number, kind: number, point: number, gap: number): void {
+    const v = this.v;
+    v.failed++;
+    if (short > v.worst) {
+      v.worst = short;
+      v.kind = kind;
+      v.point = point;
+      v.gap = gap;
+    }
+  }
+
+  reason(v: Verdict, inner: number, outer: number): ExclusionReason {
+    if (v.kind === 3) {
+      const p = this.points[v.point] as PreparedClearance;
+      const status = classifyClearance(v.gap, this.margin);
+      return {
+        kind: "clearance",
+        pointIndex: v.point,
+        label: p.label,
+        direction: p.direction,
+        state: p.state,
+        basis: p.basis,
+        predictedMm: v.gap,
+        marginMm: this.margin,
+        status: status === "contact" ? "contact" : "tight",
+        shortfallMm: Math.max(0, this.margin - v.gap),
+      };
+    }
+    const innerKind = v.kind === 1;
+    const limitMm = (innerKind ? this.maxInner : this.maxOuter) as number;
+    const valueMm = innerKind ? inner : outer;
+    return { kind: innerKind ? "inner-swing" : "outer-swing", limitMm, valueMm, shortfallMm: valueMm - limitMm };
+  }
+}
+
+function ahead(k1: number, k2: number, k3: number, k4: number, b: Cand): boolean {
+  if (Math.abs(k1 - b.k1) > 1e-6) return k1 < b.k1;
+  if (k2 !== b.k2) return k2 < b.k2;
+  if (Math.abs(k3 - b.k3) > 1e-6) return k3 < b.k3;
+  return k4 < b.k4;
+}
+
+const better = (a: Cand, b: Cand): boolean => ahead(a.k1, a.k2, a.k3, a.k4, b);
 
 function numberList(field: string, list: unknown, min: number, max: number, example: string): readonly number[] {
   if (!Array.isArray(list) || list.length === 0 || list.length > 10_000) {
@@ -174,10 +348,26 @@ export function findFitments(constraints: FitmentConstraints = {}, options: Find
   }
   const requireRim = c.requireSuitableRim !== false;
   const pattern = c.boltPattern === undefined ? null : toBoltPattern(c.boltPattern);
+  const margin =
+    c.clearanceMarginMm === undefined
+      ? DEFAULT_CLEARANCE_MARGIN_MM
+      : requireNumber("clearanceMarginMm", c.clearanceMarginMm, CLEARANCE_MARGIN_LIMITS_MM.min, CLEARANCE_MARGIN_LIMITS_MM.max, "12.7", "mm");
+  const rawPoints = c.clearancePoints ?? [];
+  if (!Array.isArray(rawPoints) || rawPoints.length > 500) {
+    throw new FitmentInputError("clearancePoints", "clearancePoints must be a list of at most 500 measured clearances", rawPoints);
+  }
+  const axis = c.steeringAxisInboardMm === undefined ? {} : { steeringAxisInboardMm: c.steeringAxisInboardMm };
+  const limits = new Limits(
+    maxInner,
+    maxOuter,
+    rawPoints.map((pt, i) => prepareClearance(pt, axis, `clearancePoints[${i}]`)),
+    margin,
+  );
 
   const sizes = options.sizes ?? STANDARD_SIZES;
   if (!Array.isArray(sizes)) throw new FitmentInputError("sizes", "sizes must be a list of parsed tire sizes", sizes);
   const limit = options.limit === undefined ? 100 : requireInteger("limit", options.limit, 1, 10_000, "100");
+  const excludedLimit = options.excludedLimit === undefined ? 50 : requireInteger("excludedLimit", options.excludedLimit, 0, 10_000, "50");
   const wheels = options.wheels;
   let widths: readonly number[] = [];
   let offsets: readonly number[] = [];
@@ -211,27 +401,48 @@ export function findFitments(constraints: FitmentConstraints = {}, options: Find
   let nextReport = step;
 
   const top: Cand[] = [];
+  const out: Cand[] = [];
   let matched = 0;
+  let excludedCount = 0;
+  let excludedSizes = 0;
+  // The size being searched: did any combination fit, and its nearest miss so far.
+  let sizeFits = false;
+  let miss: Cand | null = null;
   let evaluated = 0;
   let seq = 0;
   let aborted = false;
 
-  const consider = (k1: number, k2: number, k3: number, size: number, width: number, offset: number, wheel: number): void => {
-    matched++;
-    const cand: Cand = { k1, k2, k3, k4: seq++, size, width, offset, wheel };
-    if (top.length === limit) {
-      const worst = top[top.length - 1] as Cand;
-      if (!better(cand, worst)) return;
-      top.pop();
+  const keep = (list: Cand[], max: number, k1: number, k2: number, k3: number, k4: number, size: number, width: number, offset: number, wheel: number): void => {
+    if (max === 0) return;
+    if (list.length === max) {
+      if (!ahead(k1, k2, k3, k4, list[list.length - 1] as Cand)) return;
+      list.pop();
     }
+    const cand: Cand = { k1, k2, k3, k4, size, width, offset, wheel };
     let lo = 0;
-    let hi = top.length;
+    let hi = list.length;
     while (lo < hi) {
       const mid = (lo + hi) >> 1;
-      if (better(top[mid] as Cand, cand)) lo = mid + 1;
+      if (better(list[mid] as Cand, cand)) lo = mid + 1;
       else hi = mid;
     }
-    top.splice(lo, 0, cand);
+    list.splice(lo, 0, cand);
+  };
+  // One combination within the goals: the limits decide whether it is a result or an exclusion.
+  const consider = (k1: number, k2: number, radius: number, inner: number, outer: number, size: number, width: number, offset: number, wheel: number): void => {
+    const v = limits.assess(radius, inner, outer);
+    const k4 = seq++;
+    if (v.failed === 0) {
+      matched++;
+      sizeFits = true;
+      keep(top, limit, k1, k2, v.worst, k4, size, width, offset, wheel);
+    } else {
+      excludedCount++;
+      // Nearest miss of the size: least shortfall, then rim closest to the measuring rim, then order.
+      if (!sizeFits && (miss === null || v.worst < miss.k3 - 1e-6 || (Math.abs(v.worst - miss.k3) <= 1e-6 && k2 < miss.k2))) {
+        miss = { k1, k2, k3: v.worst, k4, size, width, offset, wheel };
+      }
+    }
   };
 
   for (let si = 0; si < sizes.length; si++) {
@@ -241,6 +452,9 @@ export function findFitments(constraints: FitmentConstraints = {}, options: Find
     }
     const t = sizes[si] as TireSize;
     const D = t.overallDiameterMm;
+    const R = D / 2;
+    sizeFits = false;
+    miss = null;
     const ok =
       (systems === undefined || systems.includes(t.system)) &&
       (minD === undefined || D >= minD) &&
@@ -259,14 +473,7 @@ export function findFitments(constraints: FitmentConstraints = {}, options: Find
           const k2 = Math.abs(w - measuring);
           for (let oi = 0; oi < offsets.length; oi++) {
             const eff = (offsets[oi] as number) - spacer;
-            const inner = eff + half;
-            const outer = half - eff;
-            if (maxInner !== undefined && inner > maxInner) continue;
-            if (maxOuter !== undefined && outer > maxOuter) continue;
-            const m1 = maxInner === undefined ? Infinity : maxInner - inner;
-            const m2 = maxOuter === undefined ? Infinity : maxOuter - outer;
-            const m = Math.min(m1, m2);
-            consider(k1, k2, m === Infinity ? 0 : -m, si, wi, oi, -1);
+            consider(k1, k2, R, eff + half, half - eff, si, wi, oi, -1);
           }
         }
       } else {
@@ -278,14 +485,14 @@ export function findFitments(constraints: FitmentConstraints = {}, options: Find
           const half = (s1 + SECTION_WIDTH_K * (w - measuring) * MM_PER_IN) / 2;
           if (maxSection !== undefined && 2 * half > maxSection) continue;
           const eff = wh.offsetMm - spacer;
-          const inner = eff + half;
-          const outer = half - eff;
-          if (maxInner !== undefined && inner > maxInner) continue;
-          if (maxOuter !== undefined && outer > maxOuter) continue;
-          const m = Math.min(maxInner === undefined ? Infinity : maxInner - inner, maxOuter === undefined ? Infinity : maxOuter - outer);
-          consider(k1, Math.abs(w - measuring), m === Infinity ? 0 : -m, si, -1, -1, wi);
+          consider(k1, Math.abs(w - measuring), R, eff + half, half - eff, si, -1, -1, wi);
         }
       }
+    }
+    if (!sizeFits && miss !== null) {
+      const m: Cand = miss;
+      excludedSizes++;
+      keep(out, excludedLimit, m.k1, m.k2, m.k3, m.k4, m.size, m.width, m.offset, m.wheel);
     }
     evaluated += perSize;
     if (onProgress !== undefined && evaluated >= nextReport && evaluated < total) {
@@ -295,7 +502,7 @@ export function findFitments(constraints: FitmentConstraints = {}, options: Find
   }
   if (onProgress !== undefined && !aborted) onProgress(evaluated, total);
 
-  const results: FitmentMatch[] = top.map((cand, i) => {
+  const candidate = (cand: Cand, i: number): FitmentCandidate => {
     const t = sizes[cand.size] as TireSize;
     const offer = cand.wheel >= 0 ? (wheels?.[cand.wheel] as WheelOffer) : undefined;
     const wheel: Wheel =
@@ -319,6 +526,18 @@ export function findFitments(constraints: FitmentConstraints = {}, options: Find
       measuringRimWidthIn: measuring,
       rank: i + 1,
     };
+  };
+  // The records re-run the same limits on the same figures as the loop did.
+  const results: FitmentMatch[] = top.map((cand, i) => {
+    const m = candidate(cand, i);
+    const v = limits.assess(m.overallDiameterMm / 2, m.innerSwingMm, m.outerSwingMm);
+    const p = v.tight >= 0 ? (limits.points[v.tight] as PreparedClearance) : null;
+    return { ...m, tightestClearance: p === null ? null : { pointIndex: v.tight, label: p.label, predictedMm: v.tightGap } };
   });
-  return { results, evaluated, total, matched, aborted };
+  const excluded: FitmentExclusion[] = out.map((cand, i) => {
+    const m = candidate(cand, i);
+    const v = limits.assess(m.overallDiameterMm / 2, m.innerSwingMm, m.outerSwingMm);
+    return { ...m, reason: limits.reason(v, m.innerSwingMm, m.outerSwingMm), limitsFailed: v.failed };
+  });
+  return { results, evaluated, total, matched, excluded, excludedCount, excludedSizes, aborted };
 }

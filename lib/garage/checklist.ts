@@ -58,7 +58,7 @@ export function buildChecklist(input: { vehicle: Vehicle; clearances: VehicleCle
     speedsMph: [65],
   });
   const fromStock = compareSetups(toEngineSetup(v.stockSetup), pla, { speedsMph: [60] });
-  const preds = predictPoints(clearances, planned, marginMm);
+  const preds = predictPoints(clearances, planned, marginMm, v);
   const predictions = clearances.map((clearance, i) => ({ clearance, prediction: preds[i]! }));
   const items: ChecklistItem[] = [];
 
@@ -69,7 +69,7 @@ export function buildChecklist(input: { vehicle: Vehicle; clearances: VehicleCle
       id: `trim:${c.id}`,
       group: "fit",
       title: `${p.status === "contact" ? "Contact" : "Tight"} at ${c.label}: gain at least ${bothUnits(p.shortfallMm)}`,
-      detail: `Predicted ${bothUnits(p.predictedMm)} against a ${bothUnits(p.marginMm)} margin (measured ${bothUnits(p.measuredMm)} at ${c.suspensionState.replace("-", " ")}). To fix: ${DIRECTION_FIX[c.direction]}.`,
+      detail: `Predicted ${bothUnits(p.predictedMm)} against a ${bothUnits(p.marginMm)} margin (measured ${bothUnits(p.measuredMm)} at ${c.suspensionState.replace("-", " ")}). To fix: ${DIRECTION_FIX[c.direction]}${c.suspensionState === "full-lock" && c.direction !== "fore-aft" ? ", or limit steering travel with the stops" : ""}.`,
     });
   }
   const upShort = Math.max(0, ...predictions.filter((x) => x.clearance.direction === "upward" || x.clearance.direction === "fore-aft").map((x) => x.prediction.shortfallMm));

@@ -7,9 +7,12 @@ import { type FinderResult, type FitmentConstraints, findFitments } from "@/lib/
 
 export interface FinderJob {
   id: number;
+  /** With the vehicle's measured points (`clearancePoints`): every one is predicted per combination. */
   constraints: FitmentConstraints;
   wheelWidthsIn?: number[];
   limit?: number;
+  /** Most exclusions to return with their deciding limit (default 50). */
+  excludedLimit?: number;
 }
 
 export type FinderReply =
@@ -24,6 +27,7 @@ export function runFinderJob(job: FinderJob, post: (reply: FinderReply) => void,
     const result = findFitments(job.constraints, {
       wheelWidthsIn: job.wheelWidthsIn,
       limit: job.limit ?? 200,
+      excludedLimit: job.excludedLimit ?? 50,
       onProgress: (done, total) => post({ type: "progress", id: job.id, done, total }),
     });
     post({ type: "done", id: job.id, result, ms: now() - t0 });

@@ -110,8 +110,19 @@ describe("the garage in Chromium", () => {
     await page.locator("#f-planned-offset").fill("-12");
     const table = page.getByTestId("predictions");
     await expect.poll(() => table.textContent()).toMatch(/Contact/);
-    // The bumper corner: 19.05 mm measured, radius +43.1 mm (D 889.0 vs 802.8 mm) → contact
+    // Both points are at full lock; no KPI recorded, so the steering axis runs through the current
+    // tire's centre line, 25 mm inboard of the hub face (offset +25). 35x12.50R17LT on 17x9 −12
+    // (section 317.5 − 0.4 × 25.4 = 307.34 mm, UN R30): outer corner 165.67 + 25 = 190.67 mm from the
+    // axis, inner 141.67 − 25 = 116.67; 265/70R17 on 17x8 +25: both 132.5.
+    // Bumper corner: √(401.4² + 132.5²) = 422.703 → √(444.5² + 190.67²) = 483.669, 19.05 − 60.965 = −41.9 mm → contact.
     await expect.poll(() => table.locator("tr", { hasText: "Bumper corner" }).textContent()).toMatch(/Contact/);
+    // Frame rail: 422.703 → √(444.5² + 116.67²) = 459.556, 31.75 − 36.853 = −5.1 mm → contact (the inner
+    // reach alone, 15.8 mm more room, used to call it clear).
+    await expect.poll(() => table.locator("tr", { hasText: "Frame rail" }).textContent()).toMatch(/Contact/);
+    await expect.poll(() => table.locator("tr", { hasText: "Frame rail" }).textContent()).toMatch(/inner tread corner swinging about the steering axis/);
+    await expect.poll(() => page.getByTestId("prediction-note").textContent()).toMatch(/How this is predicted/);
+    await page.getByTestId("prediction-note").locator("summary").click();
+    await expect.poll(() => page.getByTestId("prediction-note").textContent()).toMatch(/25 mm inboard of the hub face/);
     await expect.poll(() => page.url()).toMatch(/pt=35x12\.50R17LT/);
     const href = await page.getByTestId("open-workspace").getAttribute("href");
     expect(href).toMatch(/^\/workspace\?ct=265\/70R17&cd=17&cw=8&co=25&pt=35x12\.50R17LT&pd=17&pw=9&po=-12/);
@@ -144,6 +155,18 @@ describe("the garage in Chromium", () => {
     await page.getByLabel("To (in)", { exact: true }).pressSequentially("34-1/2", { delay: 30 });
     expect(await page.getByLabel("To (in)", { exact: true }).inputValue()).toBe("34-1/2");
     await expect.poll(() => page.getByTestId("finder-summary").textContent(), { timeout: 20000 }).toMatch(/fits among [\d,]+ combinations/);
+    // Every measured point is applied (333 fits, best 200 shown, and 32 sizes excluded entirely when
+    // written); each excluded size is shown by its nearest miss and the limit that decided it.
+    await expect.poll(() => page.getByTestId("finder-summary").textContent()).toMatch(
+      /^[\d,]+ fits among [\d,]+ combinations in \d+ ms — the best 200 shown\. [\d,]+ more were excluded by the measured points or the poke limit, \d+ tire sizes entirely \(listed below\)\.$/,
+    );
+    // Nearest the 33 in target: 33x12.50R17LT (838.2 mm, R 419.1) on 17x9 +25, corners 153.67 mm from the
+    // axis: √(419.1² + 153.67²) = 446.38 vs 422.703 → 19.05 − 23.68 = −4.63 mm at the bumper corner,
+    // needing 12.7 + 4.63 = 17.3 mm (11/16 in); the frame rail keeps only 31.75 − 23.68 = 8.07 mm.
+    const excluded = page.getByTestId("finder-excluded").getByTestId("excluded-size");
+    await expect.poll(() => excluded.first().textContent()).toMatch(
+      /^33x12\.50R17LT.*17x9 \+25 mm.*Excluded: touches bumper corner, full right lock \(measured at full lock\) — needs 17\.3 mm \(11\/16 in\) more; 1 other limit fails too\./,
+    );
     const rows = page.getByTestId("finder-results").locator("tbody tr");
     await expect.poll(() => rows.count()).toBeGreaterThan(3);
     await page.getByRole("button", { name: /^Diameter/ }).click();
@@ -161,9 +184,11 @@ describe("the garage in Chromium", () => {
     expect(q.get("v")).toBe(vehicleUrl.split("/").pop());
   });
 
-  it("opens the tallest candidate in the workspace with the vehicle picked, and sees the predicted contact flagged and drawn", async () => {
-    // Sorted tallest first: anything over 840.9 mm (33.1 in) closes the bumper corner's 19.05 mm
-    // (3/4 in) gap at lock, since the radius grows by half the diameter change from 802.8 mm.
+  it("opens the tallest candidate in the workspace with the vehicle picked, and sees it keep the margin at both points", async () => {
+    // The finder now keeps only what the predictions keep at the margin. Tallest of the 17x9 rows:
+    // 265/70R17 (802.8 mm) on 17x9 +25: section 265 + 0.4 × 25.4 = 275.16 mm, both corners 137.58 mm
+    // from the axis: √(401.4² + 137.58²) = 424.323 vs 422.703 → bumper corner 19.05 − 1.62 = 17.43 mm,
+    // frame rail 31.75 − 1.62 = 30.13 mm: both clear of the 12.7 mm margin.
     await page.getByRole("button", { name: /^Diameter/ }).click();
     await expect.poll(() => page.locator("th", { hasText: "Diameter" }).getAttribute("aria-sort")).toBe("descending");
     const top = page.getByTestId("finder-results").locator("tbody tr").first();
@@ -172,9 +197,9 @@ describe("the garage in Chromium", () => {
     const panel = page.getByTestId("garage-panel");
     await expect.poll(() => panel.isVisible(), { timeout: 15000 }).toBe(true);
     expect(await page.locator("#ws-vehicle option:checked").textContent()).toBe(`Dune Skiff ${stamp}`);
-    await expect.poll(() => page.getByTestId("garage-summary").textContent()).toMatch(/^[12] of 2 points predicted to touch\. Margin/);
+    await expect.poll(() => page.getByTestId("garage-summary").textContent()).toMatch(/^All 2 points keep the margin\. Margin/);
     const predictions = page.getByTestId("workspace-predictions");
-    await expect.poll(() => predictions.locator("tr", { hasText: "Bumper corner" }).textContent()).toMatch(/Contact/);
+    await expect.poll(() => predictions.locator("tr", { hasText: "Bumper corner" }).textContent()).toMatch(/Clear/);
     // The frame rail is the nearest inboard part: its line is drawn on the cross-section.
     expect(await page.getByTestId("inner-limit").count()).toBe(1);
     await axeClean("garage-workspace-candidate");
@@ -190,7 +215,10 @@ describe("the garage in Chromium", () => {
     await page.getByTestId("saved-checklist").click();
     await page.waitForURL(/\/checklist\?comparison=/);
     await expect.poll(() => page.getByText(/From the saved comparison/).isVisible()).toBe(true);
-    await expect.poll(() => page.getByText(/Contact at Bumper corner/).isVisible()).toBe(true);
+    // The saved plan is the finder's candidate that keeps the margin (17.43 and 30.13 mm above):
+    // nothing to trim, the cycle-the-suspension check remains.
+    await expect.poll(() => page.locator('input[data-item="cycle"]').count()).toBe(1);
+    expect(await page.locator('input[data-item^="trim:"]').count()).toBe(0);
     await page.locator('input[data-item="spare"]').check();
     await expect.poll(() => page.getByTestId("checklist-status").textContent()).toMatch(/^1 of \d+ done/);
     await axeClean("garage-checklist-from-comparison");

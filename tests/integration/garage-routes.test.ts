@@ -416,6 +416,28 @@ describe("install checklists", () => {
     expect(row).toMatchObject({ comparison_id: null, ticked: ["alignment"] });
   });
 
+  it("predicts a full-lock point by the tread corner's sweep about the vehicle's steering axis", async () => {
+    const { GET } = await checklist();
+    const { body } = await createAs("ada", { ...VEHICLE, name: "Lock hauler" });
+    const id = body.vehicle.id as string;
+    as("ada");
+    const point = await clearances.POST(
+      req("POST", `/api/vehicles/${id}/clearances`, { label: "Frame rail", direction: "inboard", distance: "1-1/2 in", suspensionState: "full-lock" }),
+      ctx({ id }),
+    );
+    const pointId = (await point.json()).clearance.id as string;
+    const r = await (await GET(req("GET", `/api/vehicles/${id}/checklist?${Q}`), ctx({ id }))).json();
+    const trim = (r.items as { id: string; title: string; detail: string }[]).find((i) => i.id === `trim:${pointId}`);
+    // Current 265/70R17 on 17x8, 5-3/4 in backspacing to the bead seat: offset 5.75 − 4 = 1.75 in = 44.45 mm;
+    // inner reach 44.45 + 132.5 = 176.95 mm. Steering axis (KPI 8°, zero scrub assumed):
+    // 44.45 + 401.4 × tan 8° = 100.863 mm inboard of the hub face. Inner tread corner at hub height:
+    // √(401.4² + 76.087²) = 408.548 → 35x12.50R17LT on 17x9 −12 (inner 141.67): √(444.5² + 40.807²) = 446.369,
+    // +37.822 mm: 38.1 − 37.822 = 0.28 mm, tight, needing 12.7 − 0.28 = 12.42 mm. The inner reach alone
+    // (176.95 − 141.67 = 35.28 mm more room) called it clear; an axis at 0° KPI would leave 5.80 mm.
+    expect(trim?.title).toBe("Tight at Frame rail: gain at least 12.4 mm (1/2 in)");
+    expect(trim?.detail).toMatch(/^Predicted 0\.3 mm .*at full lock\)\. To fix: .*, or limit steering travel with the stops\.$/);
+  });
+
   it("classes the points against the vehicle's margin, or the one tried with m", async () => {
     const { GET } = await checklist();
     const { body } = await createAs("ada", { ...VEHICLE, name: "Margin hauler" });

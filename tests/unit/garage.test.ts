@@ -3,6 +3,8 @@ import { tighteningSequence } from "@/lib/fitment";
 import { buildChecklist } from "@/lib/garage/checklist";
 import { finderGoalsSchema, finderPlan } from "@/lib/garage/finderGoals";
 import { runFinderJob, type FinderReply } from "@/lib/garage/finderJob";
+import { exclusionText } from "@/lib/garage/finderText";
+import { predictPoints } from "@/lib/garage/predict";
 import { setupFromQuery, setupQuery, workspaceHref } from "@/lib/garage/links";
 import type { Vehicle, VehicleClearance } from "@/lib/garage/types";
 import { clearanceSchema, vehicleMarginSchema, vehicleSchema } from "@/lib/validation/garage";
@@ -94,23 +96,92 @@ describe("links in the workspace's query format", () => {
 });
 
 describe("finder goals → engine constraints", () => {
-  it("derives the inner limit from the inboard points: 157.5 + 30 − 12.7 = 174.8 mm", () => {
+  it("hands every measured point to the engine, with its state, label, the margin and the steering axis", () => {
     const goals = finderGoalsSchema.parse({
       targetDiameterMm: "35", minDiameterMm: "33", maxDiameterMm: "35-1/2", wheelDiameters: "17, 18", maxPokeMm: "1 in",
-      useInnerLimit: true, minWidthIn: "8", maxWidthIn: "9-1/2", margin: "1/2 in",
+      usePoints: true, minWidthIn: "8", maxWidthIn: "9-1/2", margin: "1/2 in",
     });
-    const plan = finderPlan(goals, VEHICLE, [point("a", "inboard", 30), point("b", "inboard", 60)]);
-    expect(plan.constraints.maxInnerSwingMm).toBeCloseTo(174.8, 9);
+    const lock = { ...point("b", "fore-aft", 19.05), suspensionState: "full-lock" as const };
+    const plan = finderPlan(goals, VEHICLE, [point("a", "inboard", 30), lock]);
+    expect(plan.constraints.clearancePoints).toEqual([
+      expect.objectContaining({ label: "a", direction: "inboard", state: "ride-height", distanceMm: 30 }),
+      expect.objectContaining({ label: "b", direction: "fore-aft", state: "full-lock", distanceMm: 19.05 }),
+    ]);
+    expect(plan.constraints.clearanceMarginMm).toBeCloseTo(12.7, 9);
+    // No KPI recorded, no scrub known: the axis through the current tire's centre line, offset +25 → 25 mm inboard.
+    expect(plan.constraints.steeringAxisInboardMm).toBe(25);
+    // The inner limit is no longer a separate rule: the inboard point is one of the predictions.
+    expect(plan.constraints.maxInnerSwingMm).toBeUndefined();
     expect(plan.constraints.maxOuterSwingMm).toBeCloseTo(107.5 + 25.4, 9);
     expect(plan.constraints.targetDiameterMm).toBeCloseTo(889, 9);
     expect(plan.constraints.maxDiameterMm).toBeCloseTo(901.7, 9);
     expect(plan.constraints.wheelDiametersIn).toEqual([17, 18]);
     expect(plan.constraints.boltPattern).toBe("6x5.5");
     expect(plan.wheelWidthsIn).toEqual([8, 8.5, 9, 9.5]);
+    const off = finderPlan({ ...goals, usePoints: false }, VEHICLE, [point("a", "inboard", 30)]);
+    expect(off.constraints.clearancePoints).toBeUndefined();
+  });
+
+  it("on the demo pickup, recommends nothing its own prediction says will rub, and says why the 37s are out", () => {
+    // The demo member's pickup (db/seeds/04_demo_garage.ts): LT285/70R17 on 17x8.5 +18, KPI 12°, its five points.
+    const cur: SetupValues = { tire: "LT285/70R17 121/118Q E", wheelDiameterIn: 17, wheelWidthIn: 8.5, position: { mode: "offset", offsetMm: 18 }, spacerMm: 0 };
+    const pickup: Vehicle = { ...VEHICLE, frontSuspension: "independent", currentSetup: cur, stockSetup: cur, kingpinInclinationDeg: 12 };
+    const at = (id: string, label: string, direction: VehicleClearance["direction"], distanceMm: number, suspensionState: VehicleClearance["suspensionState"]): VehicleClearance => ({
+      ...point(id, direction, distanceMm), label, suspensionState, measuredSetup: cur,
+    });
+    const points = [
+      at("1", "Frame rail, full left lock", "inboard", 31.75, "full-lock"),
+      at("2", "Upper control arm", "inboard", 22, "ride-height"),
+      at("3", "Front fender lip", "outboard", 25.4, "ride-height"),
+      at("4", "Inner fender liner", "upward", 50.8, "full-stuff"),
+      at("5", "Bumper corner, full right lock", "fore-aft", 38.1, "full-lock"),
+    ];
+    // The finder page's default goals.
+    const goals = finderGoalsSchema.parse({ targetDiameterMm: "", minDiameterMm: "", maxDiameterMm: "", wheelDiameters: "17", maxPokeMm: "1 in", usePoints: true, minWidthIn: "", maxWidthIn: "", margin: "1/2 in" });
+    const plan = finderPlan(goals, pickup, points);
+    const replies: FinderReply[] = [];
+    runFinderJob({ id: 1, constraints: plan.constraints, wheelWidthsIn: plan.wheelWidthsIn, limit: 200 }, (r) => replies.push(r));
+    const done = replies.at(-1)!;
+    if (done.type !== "done") throw new Error(`finder failed: ${JSON.stringify(done)}`);
+    const setupOf = (m: { tire: { text: string }; wheel: { widthIn: number; offsetMm: number } }): SetupValues => ({
+      tire: m.tire.text, wheelDiameterIn: 17, wheelWidthIn: m.wheel.widthIn, position: { mode: "offset", offsetMm: m.wheel.offsetMm }, spacerMm: 0,
+    });
+    expect(done.result.results.length).toBeGreaterThan(0);
+    for (const m of done.result.results) {
+      // The vehicle page's own predictions (lib/garage/predict.ts) for this candidate: all clear.
+      expect(predictPoints(points, setupOf(m), 12.7, pickup).map((p) => p.status)).not.toContain("contact");
+      expect(predictPoints(points, setupOf(m), 12.7, pickup).map((p) => p.status)).not.toContain("tight");
+    }
+    expect(done.result.results.some((m) => m.tire.text.startsWith("37x"))).toBe(false);
+    // Today's second result, 37x12.50R17LT on 17x9.5 +12, as the vehicle page predicts it. Steering
+    // axis 18 + 415.4 × tan 12° = 106.296 mm inboard of the hub face (zero scrub assumed).
+    //   Frame rail (inboard, full lock): inner tread corner √(415.4² + (160.5 − 106.296)²) = 418.922 →
+    //     √(469.9² + (168.21 − 106.296)²) = 473.961: 31.75 − 55.040 = −23.290 mm.
+    //   Upper control arm (inboard, ride height): reach +7.71, rise +54.5; worst at 45° over the
+    //     shoulder: 22 cos 45° − 7.71 = 7.846 mm.
+    //   Fender lip (outboard): reach +19.71, rise +54.5; at 45° the part is 25.4 cos 45° = 17.961 out,
+    //     inside the planned corner: −min(19.71 − 17.961, 54.5 − 17.961) = −1.749 mm.
+    //   Liner (upward, full stuff): 50.8 − (469.9 − 415.4) = −3.7 mm.
+    //   Bumper corner (fore/aft, full lock): outer corner √(415.4² + 230.796²) = 475.209 →
+    //     √(469.9² + 250.506²) = 532.503: 38.1 − 57.293 = −19.193 mm.
+    const old2: SetupValues = { tire: "37x12.50R17LT", wheelDiameterIn: 17, wheelWidthIn: 9.5, position: { mode: "offset", offsetMm: 12 }, spacerMm: 0 };
+    const pred = predictPoints(points, old2, 12.7, pickup);
+    expect(pred.map((p) => p.status)).toEqual(["contact", "tight", "contact", "contact", "contact"]);
+    [-23.29, 7.846, -1.749, -3.7, -19.193].forEach((mm, i) => expect(pred[i]!.predictedMm).toBeCloseTo(mm, 2));
+    // The size's nearest miss is 17x9 +6: inner corner √(469.9² + (159.67 − 106.296)²) = 472.922,
+    // 31.75 − (472.922 − 418.922) = −22.250 mm, needing 34.950 mm; the lip, liner and bumper fail too.
+    const x = done.result.excluded.find((e) => e.tire.text === "37x12.50R17LT")!;
+    expect(x).toBeDefined();
+    expect(x.wheel).toEqual({ diameterIn: 17, widthIn: 9, offsetMm: 6 });
+    expect(x.reason).toMatchObject({ kind: "clearance", label: "Frame rail, full left lock", state: "full-lock", status: "contact" });
+    expect(x.reason.kind === "clearance" && x.reason.predictedMm).toBeCloseTo(-22.25, 2);
+    expect(x.reason.shortfallMm).toBeCloseTo(34.95, 2);
+    expect(x.limitsFailed).toBe(4);
+    expect(exclusionText(x)).toBe("Excluded: touches frame rail, full left lock (measured at full lock) — needs 35 mm (1-3/8 in) more; 3 other limits fail too.");
   });
 
   it("refuses reversed ranges", () => {
-    const r = finderGoalsSchema.safeParse({ targetDiameterMm: "", minDiameterMm: "35", maxDiameterMm: "33", wheelDiameters: "", maxPokeMm: "", useInnerLimit: false, minWidthIn: "", maxWidthIn: "", margin: "1/2 in" });
+    const r = finderGoalsSchema.safeParse({ targetDiameterMm: "", minDiameterMm: "35", maxDiameterMm: "33", wheelDiameters: "", maxPokeMm: "", usePoints: false, minWidthIn: "", maxWidthIn: "", margin: "1/2 in" });
     expect(r.success).toBe(false);
   });
 

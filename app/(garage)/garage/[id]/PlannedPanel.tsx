@@ -17,7 +17,7 @@ import type { VehicleDetail } from "@/lib/garage/types";
 import { marginSchema } from "@/lib/validation/garage";
 import { type SetupFormValues, type SetupValues, setupSchema, setupToForm, toEngineSetup } from "@/lib/validation/setup";
 import { SetupFields } from "../_components/SetupFields";
-import { predictPoints } from "@/lib/garage/predict";
+import { predictPoints, steeringAxisOf } from "@/lib/garage/predict";
 
 const plannedFormSchema = z.object({ planned: setupSchema, margin: marginSchema });
 type PlannedForm = { planned: SetupFormValues; margin: string };
@@ -51,8 +51,8 @@ export function PlannedPanel({ detail, initialPlanned }: { detail: VehicleDetail
       axleRatio: v.axleRatio ?? undefined,
       transmissionRatio: v.transmissionRatio ?? undefined,
     });
-    const predictions = predictPoints(clearances, planned.data, margin.data);
-    return { cmp, predictions };
+    const predictions = predictPoints(clearances, planned.data, margin.data, v);
+    return { cmp, predictions, axis: steeringAxisOf(v) };
     // plannedKey and the margin text stand for the parsed values
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [plannedKey, values.margin, clearances, v]);
@@ -80,7 +80,7 @@ export function PlannedPanel({ detail, initialPlanned }: { detail: VehicleDetail
               <dl className="grid grid-cols-2 gap-3 text-sm sm:grid-cols-4">
                 {[
                   ["Diameter", signedMm(result.cmp.diameterChangeMm)],
-                  ["Radius (upward, at lock)", signedMm(result.cmp.groundClearanceChangeMm)],
+                  ["Radius (upward)", signedMm(result.cmp.groundClearanceChangeMm)],
                   ["Inner clearance", signedMm(result.cmp.innerClearanceChangeMm)],
                   ["Poke", signedMm(result.cmp.outerPokeChangeMm)],
                 ].map(([k, val]) => (
@@ -93,7 +93,15 @@ export function PlannedPanel({ detail, initialPlanned }: { detail: VehicleDetail
               {clearances.length === 0 ? (
                 <p className="text-sm text-basalt-700">Add measured points above to see what this setup would touch.</p>
               ) : (
-                <PredictionTable points={clearances} predictions={result.predictions} len={bothUnits} signed={signedMm} caption="Predicted clearance at each measured point" testId="predictions" />
+                <PredictionTable
+                  points={clearances}
+                  predictions={result.predictions}
+                  len={bothUnits}
+                  signed={signedMm}
+                  caption="Predicted clearance at each measured point"
+                  testId="predictions"
+                  axisInboardMm={result.axis}
+                />
               )}
               {planned.success && (
                 <div className="no-print flex flex-wrap gap-2">
@@ -105,17 +113,6 @@ export function PlannedPanel({ detail, initialPlanned }: { detail: VehicleDetail
               )}
             </>
           )}
-          <details className="rounded-lg bg-basalt-50 p-3 text-sm" open>
-            <summary className="cursor-pointer font-semibold">How the predictions are made</summary>
-            <ul className="mt-2 list-disc space-y-1 pl-5 text-basalt-700">
-              <li>Inboard points change by the inner clearance change: how far the tire reaches inboard of the hub face, measured setup vs planned.</li>
-              <li>Outboard points change by the poke change (the tire&apos;s reach outboard of the hub face).</li>
-              <li>Upward points and fore/aft points at full lock change by the radius change (half the diameter change), taken whole.</li>
-              <li>Each point is compared with the setup it was measured with. Suspension travel, bump stops, steering stops and ride height are assumed as they were when measured.</li>
-              <li>The section width on the planned rim follows the 0.4 mm per mm of rim width rule; real tires differ by make, tread and load — confirm by test-fitting and cycling the suspension before driving.</li>
-              <li>Contact = 0 mm or less, tight = less than the margin, clear = the margin or more.</li>
-            </ul>
-          </details>
         </div>
       </div>
     </Card>

@@ -23,22 +23,19 @@ import { type FinderGoalsForm, finderGoalsSchema, finderPlan } from "@/lib/garag
 import type { FinderJob, FinderReply } from "@/lib/garage/finderJob";
 import { setupQuery, workspaceHref } from "@/lib/garage/links";
 import type { Vehicle, VehicleClearance } from "@/lib/garage/types";
-import type { SetupValues } from "@/lib/validation/setup";
-
-function candidateSetup(m: FitmentMatch): SetupValues {
-  return { tire: m.tire.text, wheelDiameterIn: m.wheel.diameterIn, wheelWidthIn: m.wheel.widthIn, position: { mode: "offset", offsetMm: m.wheel.offsetMm }, spacerMm: 0 };
-}
+import { ExcludedList } from "./ExcludedList";
+import { candidateSetup } from "./candidate";
 
 const mm = (v: number) => formatLength(v, { unit: "mm" });
 
 export function FinderPanel({ vehicle, clearances }: { vehicle: Vehicle; clearances: VehicleClearance[] }) {
-  const hasInboard = clearances.some((c) => c.direction === "inboard");
+  const hasPoints = clearances.length > 0;
   const form = useForm<FinderGoalsForm>({
     resolver: zodResolver(finderGoalsSchema) as never,
     mode: "onChange",
     defaultValues: {
       targetDiameterMm: "", minDiameterMm: "", maxDiameterMm: "", wheelDiameters: String(vehicle.currentSetup.wheelDiameterIn),
-      maxPokeMm: "1 in", useInnerLimit: hasInboard, minWidthIn: "", maxWidthIn: "", margin: "1/2 in",
+      maxPokeMm: "1 in", usePoints: hasPoints, minWidthIn: "", maxWidthIn: "", margin: "1/2 in",
     },
   });
   const values = useWatch({ control: form.control }) as FinderGoalsForm;
@@ -82,7 +79,7 @@ export function FinderPanel({ vehicle, clearances }: { vehicle: Vehicle; clearan
         };
         worker.current = w;
       }
-      const job: FinderJob = { id: ++jobId.current, constraints: plan.constraints, wheelWidthsIn: plan.wheelWidthsIn, limit: 200 };
+      const job: FinderJob = { id: ++jobId.current, constraints: plan.constraints, wheelWidthsIn: plan.wheelWidthsIn, limit: 200, excludedLimit: 200 };
       setProgress({ done: 0, total: 1 });
       worker.current.postMessage(job);
     }, 250);
@@ -120,15 +117,15 @@ export function FinderPanel({ vehicle, clearances }: { vehicle: Vehicle; clearan
             error={e.maxPokeMm?.message}
           />
           <label className="flex items-start gap-2 text-sm">
-            <input type="checkbox" className="mt-1" {...reg("useInnerLimit")} disabled={!hasInboard} />
+            <input type="checkbox" className="mt-1" {...reg("usePoints")} disabled={!hasPoints} aria-describedby="f-usePoints-hint" />
             <span>
-              Keep the margin at the measured inboard points
-              <span className="block text-xs text-basalt-500">
-                {!hasInboard
-                  ? "No inboard points measured yet."
-                  : plan?.limits.maxInnerSwingMm != null
-                    ? `Inner limit: ${mm(plan.limits.maxInnerSwingMm)} inboard of the hub face (least of measured reach + gap − margin).`
-                    : ""}
+              Keep the margin at every measured point
+              <span id="f-usePoints-hint" className="block text-xs text-basalt-500">
+                {!hasPoints
+                  ? "No points measured yet."
+                  : `${clearances.length} point${clearances.length === 1 ? "" : "s"}, each predicted for every combination exactly as on the vehicle page${
+                      plan ? ` (full-lock points turn about a steering axis ${mm(plan.steeringAxisInboardMm)} inboard of the hub face)` : ""
+                    }.`}
               </span>
             </span>
           </label>
@@ -146,12 +143,17 @@ export function FinderPanel({ vehicle, clearances }: { vehicle: Vehicle; clearan
               <p className="text-sm text-basalt-700" data-testid="finder-summary">
                 {result.result.matched.toLocaleString("en-US")} fits among {result.result.evaluated.toLocaleString("en-US")} combinations in {result.ms.toFixed(0)} ms
                 {result.result.matched > result.result.results.length ? ` — the best ${result.result.results.length} shown` : ""}.
+                {result.result.excludedCount > 0 &&
+                  ` ${result.result.excludedCount.toLocaleString("en-US")} more were excluded by the measured points or the poke limit${
+                    result.result.excludedSizes > 0 ? `, ${result.result.excludedSizes} tire size${result.result.excludedSizes === 1 ? "" : "s"} entirely (listed below)` : ""
+                  }.`}
               </p>
             ) : null}
           </div>
           {failure && <Alert tone="error">{failure}</Alert>}
           {!plan && <Alert tone="info">Fix the highlighted goals to search.</Alert>}
           {result && <ResultsTable rows={result.result.results} vehicle={vehicle} />}
+          {result && result.result.excluded.length > 0 && <ExcludedList rows={result.result.excluded} total={result.result.excludedSizes} vehicle={vehicle} />}
         </div>
       </div>
     </>
@@ -171,6 +173,15 @@ function ResultsTable({ rows, vehicle }: { rows: FitmentMatch[]; vehicle: Vehicl
       { id: "backspacing", header: "Backspacing (bead seat)", accessorKey: "backspacingIn", cell: (c) => formatLength(inToMm(c.getValue<number>()), { unit: "in", fraction: 16 }) },
       { id: "inner", header: "Reach inboard", accessorKey: "innerSwingMm", cell: (c) => mm(c.getValue<number>()) },
       { id: "outer", header: "Reach outboard", accessorKey: "outerSwingMm", cell: (c) => mm(c.getValue<number>()) },
+      {
+        id: "tightest",
+        header: "Tightest point",
+        accessorFn: (m) => m.tightestClearance?.predictedMm ?? Infinity,
+        cell: (c) => {
+          const t = c.row.original.tightestClearance;
+          return t === null ? "—" : `${t.label ?? "point"}: ${mm(t.predictedMm)}`;
+        },
+      },
       {
         id: "open",
         header: "Compare",
@@ -244,7 +255,9 @@ function ResultsTable({ rows, vehicle }: { rows: FitmentMatch[]; vehicle: Vehicl
           ))}
         </tbody>
       </table>
-      {table.getRowModel().rows.length === 0 && <p className="mt-3 text-sm text-basalt-700">Nothing fits these goals. Widen the diameter range or allow more poke.</p>}
+      {table.getRowModel().rows.length === 0 && (
+        <p className="mt-3 text-sm text-basalt-700">Nothing fits these goals. Widen the diameter range or allow more poke; the sizes the measured points exclude are listed with what they need.</p>
+      )}
     </Card>
   );
 }
