@@ -38,3 +38,70 @@ describe("forum post", () => {
     expect(text).toMatch(/- Speedometer off by 17\.1 %/);
   });
 });
+
+const SHARE = "https://hubface.example/s/AbC";
+const IMAGE = "https://hubface.example/s/AbC/opengraph-image";
+const EVIL = "[url=https://evil.example]click[/url] [click](https://evil.example) ![x](https://evil.example/i.png) <a href=x>y</a> https://evil.example www.evil.example";
+
+describe("forum post in Markdown, with the drawing", () => {
+  const md = forumPost(r, DEFAULT_PREFS, { name: "Trail build", url: SHARE, imageUrl: IMAGE, format: "markdown" });
+
+  it("shows the drawing as an image that links to the shared page", () => {
+    expect(md).toContain(`[![Drawing: current and planned wheel and tire at the hub](${IMAGE})](${SHARE})`);
+  });
+
+  it("escapes a name so that no link, image, emphasis or HTML in it takes effect", () => {
+    const text = forumPost(r, DEFAULT_PREFS, { name: `${EVIL} **bold** _it_ \`code\``, url: SHARE, imageUrl: IMAGE, format: "markdown" });
+    // Every link and image target left in the post is ours (an escaped bracket is not a link).
+    const targets = [...text.matchAll(/(?<!\\)\]\(([^)]*)\)/g)].map((m) => m[1]);
+    expect(new Set(targets)).toEqual(new Set([IMAGE, SHARE]));
+    expect(text).not.toMatch(/(?<!\\)<a /);
+    // A bare address is not auto-linked (CommonMark §2.4: a backslash-escaped ":" breaks the scheme).
+    expect(text).not.toContain("https://evil.example");
+    expect(text).not.toContain("www.evil");
+    expect(text.split("\n")[0]).toBe(
+      "**\\[url=https\\://evil\\.example\\]click\\[/url\\] \\[click\\](https\\://evil\\.example) \\!\\[x\\](https\\://evil\\.example/i\\.png) \\<a href=x\\>y\\</a\\> https\\://evil\\.example www\\.evil\\.example \\*\\*bold\\*\\* \\_it\\_ \\`code\\`**",
+    );
+  });
+});
+
+describe("forum post in BBCode", () => {
+  const bb = forumPost(r, DEFAULT_PREFS, { name: "Trail | build", url: SHARE, imageUrl: IMAGE, format: "bbcode" });
+  const tags = (text: string) => [...text.matchAll(/\[(\/?)([a-z*]+)(?:=([^\]]*))?\]/gi)].map((m) => ({ close: m[1] === "/", name: m[2]!.toLowerCase(), arg: m[3] }));
+
+  it("uses only the widely supported tags, each one closed", () => {
+    const used = tags(bb);
+    for (const t of used) expect(["b", "i", "url", "img", "list", "*", "quote", "code"]).toContain(t.name);
+    for (const name of ["b", "i", "url", "img", "list", "code"]) {
+      expect(used.filter((t) => t.name === name && !t.close).length, name).toBe(used.filter((t) => t.name === name && t.close).length);
+    }
+    expect(bb.split("\n")[0]).toBe("[b]Trail | build[/b]");
+  });
+
+  it("shows the drawing linked to the shared page and names the link", () => {
+    expect(bb).toContain(`[url=${SHARE}][img]${IMAGE}[/img][/url]`);
+    expect(bb).toContain(`[url=${SHARE}]${SHARE}[/url]`);
+  });
+
+  it("sets the figures as an aligned table inside [code] with the same figures as the Markdown table", () => {
+    const block = bb.slice(bb.indexOf("[code]\n") + 7, bb.indexOf("\n[/code]")).split("\n");
+    const header = block[0]!;
+    expect(header).toMatch(/^ +Current +Planned +Change$/);
+    const cols = ["Current", "Planned", "Change"].map((h) => header.indexOf(h));
+    // Overall diameter: ISO 4000-1, 265/70R17 = 802.8 mm = 31.61 in; flotation 37 in; change +5.39 in (as in Markdown).
+    const line = block.find((l) => l.startsWith("Overall diameter"))!;
+    expect([line.slice(cols[0], cols[1]).trim(), line.slice(cols[1], cols[2]).trim(), line.slice(cols[2]).trim()]).toEqual(["31.61 in", "37 in", "+5.39 in"]);
+    for (const l of block.slice(1)) expect(l.length).toBeLessThanOrEqual(header.length + 20);
+    expect(bb).toMatch(/\[list\]\n(\[\*\].*\n)*\[\*\]Speedometer off by 17\.1 %.*\n(\[\*\].*\n)*\[\/list\]/);
+  });
+
+  it("keeps tags in a name from taking effect", () => {
+    const text = forumPost(r, DEFAULT_PREFS, { name: EVIL, url: SHARE, imageUrl: IMAGE, format: "bbcode" });
+    for (const t of tags(text)) {
+      expect(["b", "i", "url", "img", "list", "*", "code"]).toContain(t.name);
+      if (t.arg !== undefined) expect(t.arg).toBe(SHARE);
+    }
+    expect(text).not.toContain("https://evil.example");
+    expect(text).not.toContain("[/url] [click]");
+  });
+});
