@@ -4,7 +4,8 @@ import { NextResponse, type NextRequest } from "next/server";
 import { z } from "zod";
 import { isDatabaseUnavailable } from "@/lib/db";
 import { type Access, type Caller, currentCaller, requireCaller } from "@/lib/auth/session";
-import { HttpError } from "./errors";
+import { FitmentInputError } from "@/lib/fitment";
+import { HttpError, type IssueLike, fallbackMessage, fieldPlace, withRows } from "./errors";
 
 const DEFAULT_MAX_BYTES = 64 * 1024;
 
@@ -26,7 +27,11 @@ export interface Ctx<B, Q, P, A extends Access> {
   params: P;
 }
 
-/** Field errors in the shape the forms read: `{ field: ["message"] }`. */
+/**
+ * Field errors in the shape the forms read: `{ field: ["message"] }`. Parse with
+ * `{ error: humanIssue }` so issues the schema left without a message get one a person can
+ * read (lib/http/errors.ts) instead of the validator's own wording.
+ */
 export function fieldErrorsOf(error: z.ZodError): Record<string, string[]> {
   const out: Record<string, string[]> = {};
   for (const issue of error.issues) {
@@ -53,8 +58,11 @@ async function readJson(req: NextRequest, maxBytes: number): Promise<unknown> {
   }
 }
 
+/** The per-parse error map: used by zod only where the schema gave no message of its own. */
+export const humanIssue = (issue: unknown) => fallbackMessage(issue as IssueLike);
+
 function parse<T extends z.ZodType>(schema: T, value: unknown, status: number): z.infer<T> {
-  const result = schema.safeParse(value);
+  const result = schema.safeParse(value, { error: humanIssue });
   if (!result.success) throw new HttpError(status, "Some fields need attention.", fieldErrorsOf(result.error));
   return result.data;
 }
@@ -93,7 +101,13 @@ export function route<
 
 export function errorResponse(error: unknown): Response {
   if (error instanceof HttpError) {
-    return json({ error: error.message, ...(error.fieldErrors ? { fieldErrors: error.fieldErrors } : {}) }, error.status);
+    return json({ error: error.message, ...(error.fieldErrors ? { fieldErrors: withRows(error.fieldErrors) } : {}) }, error.status);
+  }
+  if (error instanceof FitmentInputError) {
+    // The engine refused a value the schemas let through: a 422 on that field, in words, not a 500.
+    const { row, field } = fieldPlace(error.field.split("."));
+    const message = `${row ? `${row}: c` : "C"}heck the ${field || "values entered"}: Hubface cannot work with it.`;
+    return json({ error: "Some fields need attention.", fieldErrors: { [error.field]: [message] } }, 422);
   }
   const ref = randomUUID().slice(0, 8);
   if (isDatabaseUnavailable(error)) {

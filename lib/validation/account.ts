@@ -1,20 +1,24 @@
 import { z } from "zod";
 
-/** Shared by the forms (react-hook-form resolver) and the route handlers. */
+/**
+ * Shared by the forms (react-hook-form resolver) and the route handlers. Every field has a
+ * message for every way it can be wrong, a wrong type included (`z.string(message)`), so the
+ * validator's own wording never reaches a person, on the page or from the API.
+ */
 export const emailField = z
-  .string()
+  .string({ error: "Enter your e-mail address." })
   .trim()
   .min(1, "Enter your e-mail address.")
   .max(254, "That e-mail address is too long.")
   .pipe(z.email("Enter an e-mail address like name@example.com."));
 
 export const passwordField = z
-  .string()
+  .string({ error: "Enter a password of at least 10 characters." })
   .min(10, "Use at least 10 characters.")
   .max(200, "Use at most 200 characters.");
 
 export const signUpSchema = z.object({
-  name: z.string().trim().min(1, "Enter your name.").max(100, "Use at most 100 characters."),
+  name: z.string({ error: "Enter your name." }).trim().min(1, "Enter your name.").max(100, "Use at most 100 characters."),
   email: emailField,
   password: passwordField,
 });
@@ -22,7 +26,7 @@ export type SignUpInput = z.infer<typeof signUpSchema>;
 
 export const signInSchema = z.object({
   email: emailField,
-  password: z.string().min(1, "Enter your password.").max(200, "Use at most 200 characters."),
+  password: z.string({ error: "Enter your password." }).min(1, "Enter your password.").max(200, "Use at most 200 characters."),
 });
 export type SignInInput = z.infer<typeof signInSchema>;
 
@@ -31,16 +35,16 @@ export type ForgotPasswordInput = z.infer<typeof forgotPasswordSchema>;
 
 export const resetPasswordSchema = z
   .object({
-    token: z.string().regex(/^[A-Za-z0-9_-]{43}$/, "This reset link is not valid. Ask for a new one."),
+    token: z.string({ error: "This reset link is not valid. Ask for a new one." }).regex(/^[A-Za-z0-9_-]{43}$/, "This reset link is not valid. Ask for a new one."),
     password: passwordField,
-    confirm: z.string(),
+    confirm: z.string({ error: "Type the new password again." }),
   })
   .refine((v) => v.password === v.confirm, { path: ["confirm"], message: "The two passwords differ." });
 export type ResetPasswordInput = z.infer<typeof resetPasswordSchema>;
 
 export const roleChangeSchema = z
   .object({
-    role: z.enum(["member", "shop_staff", "shop_owner", "admin"]),
+    role: z.enum(["member", "shop_staff", "shop_owner", "admin"], { error: "Choose a role: member, shop staff, shop owner or admin." }),
     shopId: z.uuid("Pick a shop.").nullable().optional(),
   })
   .refine((v) => (v.role === "shop_staff" || v.role === "shop_owner" ? !!v.shopId : true), {

@@ -1,18 +1,25 @@
-import { readFile } from "node:fs/promises";
-import { join } from "node:path";
+import type { ReactElement } from "react";
 import { ImageResponse } from "next/og";
 import type { ComparisonResult, SetupFigures } from "@/lib/comparison/compute";
 import { computeComparison } from "@/lib/comparison/compute";
 import { DEFAULT_PREFS, formatLen, formatLenOther, formatNumber, formatSpeedIn } from "@/lib/comparison/format";
 import { readingPhrase } from "@/lib/comparison/speedometer";
 import { inToMm } from "@/lib/fitment";
+import { type CoveredFont, fontsFor } from "./_og/fonts";
+import { drawableText } from "./_og/text";
 import { getSharedComparison } from "./data";
 
 /**
  * The Open Graph image of a shared comparison: a simplified cross-section of both setups at
- * the hub face (to scale, lower half) and the headline numbers. Fonts are shipped in the
- * repository (app/fonts/og, WOFF from the @fontsource packages: satori reads WOFF/TTF, not
- * WOFF2).
+ * the hub face (to scale, lower half) and the headline numbers.
+ *
+ * Fonts: the image is drawn only with fonts shipped with the app (_og/fonts.ts): Latin,
+ * Latin Extended, Vietnamese, Cyrillic, Greek, Hebrew and Arabic always; Noto Emoji and the
+ * Noto Sans SC/JP slices a name needs, read from their packages. The name is made drawable
+ * with exactly those fonts (_og/text.ts) because the renderer otherwise fetches missing
+ * glyphs from the network: an emoji made the whole image fail, CJK drew as boxes, and the
+ * request would send the unlisted comparison's name to a third party. If drawing still fails,
+ * the image is drawn again with a plain title rather than answering with an empty body.
  */
 export const alt = "Cross-section of the current and planned wheel and tire, with the headline changes";
 export const size = { width: 1200, height: 630 };
@@ -23,15 +30,8 @@ const EMBER = "#bd460f";
 const INK = "#181b21";
 const PAPER = "#fbf8f3";
 
-let fonts: Promise<{ name: string; data: Buffer; weight: 400 | 600 | 700; style: "normal" }[]> | undefined;
-function loadFonts() {
-  const dir = join(process.cwd(), "app/fonts/og");
-  return (fonts ??= Promise.all([
-    readFile(join(dir, "inter-latin-400-normal.woff")).then((data) => ({ name: "Inter", data, weight: 400 as const, style: "normal" as const })),
-    readFile(join(dir, "inter-latin-600-normal.woff")).then((data) => ({ name: "Inter", data, weight: 600 as const, style: "normal" as const })),
-    readFile(join(dir, "archivo-latin-700-normal.woff")).then((data) => ({ name: "Archivo", data, weight: 700 as const, style: "normal" as const })),
-  ]));
-}
+/** Used when a name cannot be drawn (mostly characters no shipped font has). */
+const PLAIN_TITLE = "Shared comparison";
 
 /** One setup as the drawing shows it: tire section between its swings, rim at its radius. */
 function tireShape(f: SetupFigures, sx: (x: number) => number, sy: (y: number) => number, colour: string, dashed: boolean) {
@@ -84,48 +84,66 @@ function Stat({ label, value, sub }: { label: string; value: string; sub: string
   );
 }
 
+function Card({ r, title }: { r: ComparisonResult; title: string }) {
+  const p = DEFAULT_PREFS;
+  const len = (mm: number) => formatLen(mm, p, { signed: true, decimals: 2 });
+  const speed = r.speedometer.bySystem[p.units];
+  const h = speed.headline;
+  return (
+    <div style={{ width: "100%", height: "100%", display: "flex", flexDirection: "column", background: PAPER, padding: "40px 56px", fontFamily: "Inter", color: INK }}>
+      <div style={{ display: "flex", justifyContent: "space-between", alignItems: "baseline" }}>
+        <div style={{ fontFamily: "Archivo", fontSize: 30, fontWeight: 700, color: EMBER }}>Hubface</div>
+        <div style={{ fontSize: 22, color: "#56616f" }}>shared comparison</div>
+      </div>
+      {/* A fixed line height: CJK and Arabic fonts have taller metrics and would push the figures down. */}
+      <div style={{ fontFamily: "Archivo", fontSize: 50, fontWeight: 700, lineHeight: 1.25, marginTop: 6, lineClamp: 1, overflow: "hidden", whiteSpace: "nowrap", textOverflow: "ellipsis" }}>{title}</div>
+      <div style={{ display: "flex", fontSize: 26, marginTop: 4 }}>
+        <span style={{ color: STEEL, fontWeight: 600 }}>{r.current.tireText}</span>
+        <span style={{ margin: "0 14px", color: "#56616f" }}>to</span>
+        <span style={{ color: EMBER, fontWeight: 600 }}>{r.planned.tireText}</span>
+      </div>
+      <div style={{ display: "flex", flex: 1, marginTop: 24 }}>
+        <div style={{ display: "flex", flexDirection: "column", width: 560, height: 400, background: "#ffffff", borderRadius: 16 }}>
+          <Drawing r={r} width={560} height={356} />
+          <div style={{ display: "flex", fontSize: 18, color: "#434c58", padding: "0 20px", justifyContent: "space-between" }}>
+            <span style={{ color: STEEL }}>solid: current</span>
+            <span>to scale, from the hub face</span>
+            <span style={{ color: EMBER }}>dashed: planned</span>
+          </div>
+        </div>
+        <div style={{ display: "flex", flexWrap: "wrap", marginLeft: 44, width: 520, alignContent: "flex-start" }}>
+          <Stat label="Diameter" value={len(r.changes.diameterMm)} sub={formatLenOther(r.changes.diameterMm, p, { signed: true })} />
+          <Stat label="Poke" value={len(r.changes.outerPokeMm)} sub={formatLenOther(r.changes.outerPokeMm, p, { signed: true })} />
+          <Stat label="Ground clearance" value={len(r.changes.groundClearanceMm)} sub="under the axle" />
+          <Stat label={`At ${formatSpeedIn(h.indicated, speed.unit, 0)} shown`} value={formatSpeedIn(h.actual, speed.unit)} sub={`speedometer ${readingPhrase(r.speedometer.ratio)}`} />
+          <Stat label="Suggested ratio" value={formatNumber(r.gearing.suggestedRatio, 2)} sub={`from ${formatNumber(r.gearing.axleRatio, 2)}`} />
+          <Stat label="Scrub radius" value={len(r.changes.scrubRadiusMm)} sub={r.kingpinInclinationDeg === null ? "wheel shift only" : `${formatNumber(r.kingpinInclinationDeg, 1)}° KPI`} />
+        </div>
+      </div>
+    </div>
+  );
+}
+
+async function png(element: ReactElement, fonts: CoveredFont[]): Promise<Buffer> {
+  const res = new ImageResponse(element, { ...size, fonts: fonts.map((f) => f.font) });
+  return Buffer.from(await res.arrayBuffer());
+}
+
 export default async function OpengraphImage({ params }: { params: Promise<{ slug: string }> }) {
   const { slug } = await params;
   const share = await getSharedComparison(slug);
   if (!share) return new Response("Not found", { status: 404, headers: { "Cache-Control": "no-store" } });
   const r = computeComparison(share.input);
-  const p = DEFAULT_PREFS;
-  const len = (mm: number) => formatLen(mm, p, { signed: true, decimals: 2 });
-  const speed = r.speedometer.bySystem[p.units];
-  const h = speed.headline;
-  return new ImageResponse(
-    (
-      <div style={{ width: "100%", height: "100%", display: "flex", flexDirection: "column", background: PAPER, padding: "40px 56px", fontFamily: "Inter", color: INK }}>
-        <div style={{ display: "flex", justifyContent: "space-between", alignItems: "baseline" }}>
-          <div style={{ fontFamily: "Archivo", fontSize: 30, fontWeight: 700, color: EMBER }}>Hubface</div>
-          <div style={{ fontSize: 22, color: "#56616f" }}>shared comparison</div>
-        </div>
-        <div style={{ fontFamily: "Archivo", fontSize: 50, fontWeight: 700, marginTop: 6, lineClamp: 1, overflow: "hidden", whiteSpace: "nowrap", textOverflow: "ellipsis" }}>{share.name}</div>
-        <div style={{ display: "flex", fontSize: 26, marginTop: 4 }}>
-          <span style={{ color: STEEL, fontWeight: 600 }}>{r.current.tireText}</span>
-          <span style={{ margin: "0 14px", color: "#56616f" }}>to</span>
-          <span style={{ color: EMBER, fontWeight: 600 }}>{r.planned.tireText}</span>
-        </div>
-        <div style={{ display: "flex", flex: 1, marginTop: 24 }}>
-          <div style={{ display: "flex", flexDirection: "column", width: 560, height: 400, background: "#ffffff", borderRadius: 16 }}>
-            <Drawing r={r} width={560} height={356} />
-            <div style={{ display: "flex", fontSize: 18, color: "#434c58", padding: "0 20px", justifyContent: "space-between" }}>
-              <span style={{ color: STEEL }}>solid: current</span>
-              <span>to scale, from the hub face</span>
-              <span style={{ color: EMBER }}>dashed: planned</span>
-            </div>
-          </div>
-          <div style={{ display: "flex", flexWrap: "wrap", marginLeft: 44, width: 520, alignContent: "flex-start" }}>
-            <Stat label="Diameter" value={len(r.changes.diameterMm)} sub={formatLenOther(r.changes.diameterMm, p, { signed: true })} />
-            <Stat label="Poke" value={len(r.changes.outerPokeMm)} sub={formatLenOther(r.changes.outerPokeMm, p, { signed: true })} />
-            <Stat label="Ground clearance" value={len(r.changes.groundClearanceMm)} sub="under the axle" />
-            <Stat label={`At ${formatSpeedIn(h.indicated, speed.unit, 0)} shown`} value={formatSpeedIn(h.actual, speed.unit)} sub={`speedometer ${readingPhrase(r.speedometer.ratio)}`} />
-            <Stat label="Suggested ratio" value={formatNumber(r.gearing.suggestedRatio, 2)} sub={`from ${formatNumber(r.gearing.axleRatio, 2)}`} />
-            <Stat label="Scrub radius" value={len(r.changes.scrubRadiusMm)} sub={r.kingpinInclinationDeg === null ? "wheel shift only" : `${formatNumber(r.kingpinInclinationDeg, 1)}° KPI`} />
-          </div>
-        </div>
-      </div>
-    ),
-    { ...size, fonts: await loadFonts(), headers: { "Cache-Control": "public, max-age=60, s-maxage=60" } },
-  );
+  const fonts = await fontsFor(share.name);
+  const name = drawableText(share.name, fonts, "Archivo", 700);
+  // Mostly question marks says less than a plain title; the page itself shows the real name.
+  const title = name.text && name.replaced * 2 <= name.graphemes ? name.text : PLAIN_TITLE;
+  let body: Buffer;
+  try {
+    body = await png(<Card r={r} title={title} />, fonts);
+  } catch (error) {
+    console.error(`share ${slug.slice(0, 4)}…: Open Graph image failed with its name, drawn with the plain title:`, error);
+    body = await png(<Card r={r} title={PLAIN_TITLE} />, fonts);
+  }
+  return new Response(new Uint8Array(body), { headers: { "Content-Type": contentType, "Cache-Control": "public, max-age=60, s-maxage=60" } });
 }

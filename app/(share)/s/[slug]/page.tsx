@@ -3,7 +3,9 @@ import { notFound } from "next/navigation";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { computeComparison } from "@/lib/comparison/compute";
 import { DEFAULT_PREFS, formatLen, formatNumber, formatSpeedIn } from "@/lib/comparison/format";
+import { appOrigin } from "@/lib/mail";
 import { getSharedComparison } from "./data";
+import { ShareOriginProvider } from "./ShareOrigin";
 import { SharedView } from "./SharedView";
 
 /**
@@ -63,7 +65,10 @@ export default async function SharedComparisonPage({ params }: Props) {
           </>
         }
       />
-      <SharedView name={share.name} slug={share.slug} input={share.input} />
+      {/* Copied links (forum post, drawing) use the public origin, not whatever address served the page. */}
+      <ShareOriginProvider origin={appOrigin()}>
+        <SharedView name={share.name} slug={share.slug} input={share.input} />
+      </ShareOriginProvider>
     </>
   );
 }
