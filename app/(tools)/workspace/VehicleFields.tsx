@@ -1,4 +1,5 @@
 "use client";
+import { useState } from "react";
 import { Badge } from "@/components/ui/Badge";
 import { TextField } from "@/components/ui/TextField";
 import type { DraftErrors, VehicleDraft } from "@/lib/comparison/draft";
@@ -29,8 +30,17 @@ export function VehicleFields({
   const tag = (k: "kpi" | "axle" | "top" | "cruise" | "fender") => (isDefault(k) ? " (default)" : "");
   const count = (["kpi", "axle", "top", "cruise", "fender"] as const).filter((k) => !isDefault(k)).length;
   const hasErrors = Object.keys(errors).some((k) => k.startsWith("vehicle."));
+  // Open or closed is the person's choice (the summary toggles it). An error appearing opens the
+  // panel so the message is seen; nothing closes it but the person: tying `open` to the errors
+  // closed the panel, and took the focus, the moment a retyped figure became valid again.
+  const [open, setOpen] = useState(hasErrors);
+  const [hadErrors, setHadErrors] = useState(hasErrors);
+  if (hasErrors !== hadErrors) {
+    setHadErrors(hasErrors);
+    if (hasErrors) setOpen(true);
+  }
   return (
-    <details className="group rounded-card bg-white shadow-card ring-1 ring-basalt-100" open={hasErrors || undefined}>
+    <details className="group rounded-card bg-white shadow-card ring-1 ring-basalt-100" open={open} onToggle={(ev) => setOpen(ev.currentTarget.open)}>
       <summary className="flex cursor-pointer list-none items-center justify-between gap-3 rounded-card px-4 py-3 font-semibold sm:px-5">
         <span>
           Vehicle details <span className="font-normal text-basalt-500">— kingpin inclination, gearing, cruise speeds, fender line</span>
