@@ -11,6 +11,8 @@ import type { SavedComparison } from "@/lib/validation/comparisons";
 import { SaveComparison } from "./SaveComparison";
 import { Workspace } from "./Workspace";
 
+// Typing through user-event in jsdom is slow on a shared machine; the default 5 s is too tight.
+vi.setConfig({ testTimeout: 20_000 });
 vi.mock("@/components/comparison/LazyComparisonCharts", () => ({ LazyComparisonCharts: () => <div data-testid="charts-stub" /> }));
 vi.mock("next/link", () => ({ default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => <a href={href} {...rest}>{children}</a> }));
 

@@ -4,9 +4,12 @@ import userEvent from "@testing-library/user-event";
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
 import { DEFAULT_INPUT } from "@/lib/comparison/schema";
 import { PREFS_STORAGE_KEY } from "@/lib/comparison/format";
+import { decodeComparison } from "@/lib/comparison/url";
 import { Workspace } from "./Workspace";
 
 // The charts load lazily through next/dynamic; they are not what these tests are about.
+// Typing through user-event in jsdom is slow on a shared machine; the default 5 s is too tight.
+vi.setConfig({ testTimeout: 20_000 });
 vi.mock("@/components/comparison/LazyComparisonCharts", () => ({ LazyComparisonCharts: () => <div data-testid="charts-stub" /> }));
 
 const planned = () => within(screen.getByRole("region", { name: "Planned setup" }));
@@ -91,6 +94,20 @@ describe("workspace inputs", () => {
     await user.clear(d);
     await user.type(d, "18");
     expect(planned().getByText("A 17 in tire needs a 17 in wheel; this wheel is 18 in.")).toBeTruthy();
+  });
+});
+
+describe("a link with values that cannot be used", () => {
+  it("says which values were replaced, as the fields are labelled, and with what", () => {
+    const { input, problems } = decodeComparison("po=190&pw=8&cruise=60,x,70&axle=12");
+    render(<Workspace initialInput={input} initialProblems={problems} />);
+    const items = within(screen.getByTestId("link-problems")).getAllByRole("listitem").map((li) => li.textContent);
+    expect(items).toEqual([
+      "Planned setup · Offset (mm): “190” puts the mounting face outside a 8 in wide wheel; using an offset of \u221212 mm.",
+      "Axle ratio: “12” is outside 1–10; using 3.73.",
+      "Cruise speeds (mph): “60,x,70” has entries left out (“x” is not a number); using 60, 70 mph.",
+    ]);
+    expect(planned().getByLabelText("Offset (mm)")).toHaveProperty("value", "-12");
   });
 });
 
