@@ -65,7 +65,7 @@ describe("comparison query string", () => {
       "Planned setup · Measured to: “sideways” is not flange or bead; using the flange edge.",
       "Kingpin inclination (°): “-4” is outside 0–30°; using none (not set).",
       "Axle ratio is empty; using 3.73.",
-      "Cruise speeds (mph): “60,x,70” has entries left out (“x” is not a number); using 60, 70 mph.",
+      "Cruise speeds: “60,x,70” has entries left out (“x” is not a number); using 60, 70 mph.",
       "Fender line from hub face: “9999” is outside 0–500 mm; using none (not measured).",
     ]);
   });
@@ -84,10 +84,10 @@ describe("comparison query string", () => {
   it("names every value it leaves out or replaces, as the workspace labels it, with what it uses instead", () => {
     const one = (q: string) => decodeComparison(q).problems.map((p) => ({ field: p.field, used: p.used }));
     // One bad speed among good ones, speeds out of range, more than six speeds.
-    expect(one("cruise=60,x,70")).toEqual([{ field: "Cruise speeds (mph)", used: "60, 70 mph" }]);
-    expect(one("cruise=65,200")).toEqual([{ field: "Cruise speeds (mph)", used: "65 mph" }]);
+    expect(one("cruise=60,x,70")).toEqual([{ field: "Cruise speeds", used: "60, 70 mph" }]);
+    expect(one("cruise=65,200")).toEqual([{ field: "Cruise speeds", used: "65 mph" }]);
     expect(decodeComparison("cruise=65,200").problems[0]?.reason).toMatch(/“200” is outside 5–150 mph/);
-    expect(one("cruise=10,20,30,40,50,60,70,80")).toEqual([{ field: "Cruise speeds (mph)", used: "10, 20, 30, 40, 50, 60 mph" }]);
+    expect(one("cruise=10,20,30,40,50,60,70,80")).toEqual([{ field: "Cruise speeds", used: "10, 20, 30, 40, 50, 60 mph" }]);
     // A bad backspacing beside a good offset; an offset beside a backspacing; a reference without a backspacing.
     expect(one("po=-12&pb=abc")).toEqual([{ field: "Planned setup · Backspacing (in)", used: "the link's offset, \u221212 mm" }]);
     expect(one("pb=4.5&po=10")).toEqual([{ field: "Planned setup · Offset (mm)", used: "the backspacing, 4.5 in" }]);

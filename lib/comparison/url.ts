@@ -15,6 +15,7 @@
  * and the value used instead, so a link never changes a figure without saying so.
  */
 import { parseTireSize } from "@/lib/fitment";
+import { SETUP_FIELD_LABEL, SIDE_LABEL, VEHICLE_FIELD_BASE } from "./fields";
 import {
   DEFAULT_FLANGE_ALLOWANCE_IN,
   DEFAULT_INPUT,
@@ -148,16 +149,16 @@ function readParam(raw: string, { min, max }: Bounds, unit: string): Read {
   return { value: v === 0 ? 0 : v };
 }
 
-/** The screen's labels of the setup fields (app/(tools)/workspace/SetupFields.tsx). */
+/** The setup parameters by the screen's labels (fields.ts). */
 const SETUP_LABEL = {
-  t: "Tire size",
-  d: "Wheel diameter (in)",
-  w: "Wheel width (in)",
-  o: "Offset (mm)",
-  b: "Backspacing (in)",
-  r: "Measured to",
-  f: "Flange allowance (in)",
-  s: "Spacer (mm, optional)",
+  t: SETUP_FIELD_LABEL.tire,
+  d: SETUP_FIELD_LABEL.wheelDiameterIn,
+  w: SETUP_FIELD_LABEL.wheelWidthIn,
+  o: SETUP_FIELD_LABEL["position.offsetMm"],
+  b: SETUP_FIELD_LABEL["position.backspacingIn"],
+  r: SETUP_FIELD_LABEL["position.reference"],
+  f: SETUP_FIELD_LABEL["position.flangeIn"],
+  s: SETUP_FIELD_LABEL.spacerMm,
 } as const;
 
 const positionText = (pos: Position): string =>
@@ -166,7 +167,7 @@ const positionText = (pos: Position): string =>
     : `a backspacing of ${shown(pos.backspacingIn)} in to the ${pos.reference === "flange" ? "flange edge" : "bead seat"}`;
 
 function decodeSetup(prefix: "c" | "p", p: URLSearchParams, fallback: SetupInputValues, problems: LinkProblem[]): SetupInputValues {
-  const side = prefix === "c" ? "Current setup" : "Planned setup";
+  const side = SIDE_LABEL[prefix === "c" ? "current" : "planned"];
   const get = (k: keyof typeof SETUP_LABEL) => p.get(`${prefix}${k}`);
   const note = (k: keyof typeof SETUP_LABEL, reason: string, used: string) => problems.push({ field: `${side} · ${SETUP_LABEL[k]}`, given: get(k) ?? "", reason, used });
   const num = (k: keyof typeof SETUP_LABEL, bounds: Bounds, unit: string, used: () => string): number | undefined => {
@@ -243,13 +244,17 @@ function decodeSetup(prefix: "c" | "p", p: URLSearchParams, fallback: SetupInput
   return { tire, wheelDiameterIn: diameter ?? rim, wheelWidthIn, position: position ?? fallbackPosition, spacerMm: spacer ?? 0 };
 }
 
-/** The screen's labels of the vehicle fields (app/(tools)/workspace/VehicleFields.tsx). */
+/**
+ * The vehicle parameters by the screen's labels; cruise speeds and the fender line without the
+ * unit, which follows the reader's display choice while the link holds mph and mm (the note
+ * says so with each value).
+ */
 const VEHICLE_LABEL = {
-  kpi: "Kingpin inclination (°)",
-  axle: "Axle ratio",
-  top: "Top-gear ratio",
-  cruise: "Cruise speeds (mph)",
-  fender: "Fender line from hub face",
+  kpi: VEHICLE_FIELD_BASE.kingpinInclinationDeg,
+  axle: VEHICLE_FIELD_BASE.axleRatio,
+  top: VEHICLE_FIELD_BASE.transmissionRatio,
+  cruise: VEHICLE_FIELD_BASE.cruiseSpeedsMph,
+  fender: VEHICLE_FIELD_BASE.fenderLineMm,
 } as const;
 
 function decodeVehicle(p: URLSearchParams, problems: LinkProblem[]): VehicleValues {

@@ -93,7 +93,7 @@ describe("workspace inputs", () => {
     const d = planned().getByLabelText("Wheel diameter (in)");
     await user.clear(d);
     await user.type(d, "18");
-    expect(planned().getByText("A 17 in tire needs a 17 in wheel; this wheel is 18 in.")).toBeTruthy();
+    expect(planned().getByText("Wheel diameter (in): a 17 in tire needs a 17 in wheel; this wheel is 18 in.")).toBeTruthy();
   });
 });
 
@@ -105,7 +105,7 @@ describe("a link with values that cannot be used", () => {
     expect(items).toEqual([
       "Planned setup · Offset (mm): “190” puts the mounting face outside a 8 in wide wheel; using an offset of \u221212 mm.",
       "Axle ratio: “12” is outside 1–10; using 3.73.",
-      "Cruise speeds (mph): “60,x,70” has entries left out (“x” is not a number); using 60, 70 mph.",
+      "Cruise speeds: “60,x,70” has entries left out (“x” is not a number); using 60, 70 mph.",
     ]);
     expect(planned().getByLabelText("Offset (mm)")).toHaveProperty("value", "-12");
   });
