@@ -8,7 +8,18 @@
  * states bounds in the field's unit.
  */
 import { KM_PER_MILE, MM_PER_IN, formatLength, inToMm, mmToIn, parseLength, parseTireSize } from "@/lib/fitment";
-import { SETUP_FIELD_LABEL, type SetupFieldPath, VEHICLE_FIELD_BASE, type VehicleFieldPath, boundText, fenderUnit, speedUnit, vehicleFieldLabel } from "./fields";
+import {
+  SETUP_FIELD_EXAMPLE as EX,
+  SETUP_FIELD_LABEL,
+  type SetupFieldPath,
+  VEHICLE_FIELD_BASE,
+  type VehicleFieldPath,
+  boundText,
+  fenderUnit,
+  lengthMessages,
+  speedUnit,
+  vehicleFieldLabel,
+} from "./fields";
 import type { DisplayPrefs } from "./format";
 import { type ComparisonInput, type SetupInputValues, type BackspacingReferenceValue, DEFAULT_FLANGE_ALLOWANCE_IN, LIMITS, checkComparison } from "./model";
 
@@ -129,22 +140,6 @@ const inBounds = (v: number, b: Bounds) => v >= b.min && v <= b.max;
 const lower = (s: string) => `${s[0]?.toLowerCase() ?? ""}${s.slice(1)}`;
 
 /**
- * Messages of a length field: each names the field as labelled, gives an example the field
- * accepts and states the bounds in the field's unit.
- */
-function lengthMessages(label: string, unit: "in" | "mm", example: string) {
-  return {
-    empty: `${label}: enter ${unit === "in" ? "inches" : "mm"}, e.g. ${example}.`,
-    unreadable:
-      unit === "in"
-        ? `${label}: not a length in inches, e.g. ${example}.`
-        : `${label}: not a length in mm, e.g. ${example}; inches need their unit (1 in).`,
-    fraction: (typed: string) => `${label}: “${typed.trim()}” is a fraction, which is read only in inches — write “${typed.trim()} in”, or mm as a decimal, e.g. ${example}.`,
-    bounds: (min: string, max: string) => `${label}: must be between ${min} and ${max} ${unit}, e.g. ${example}.`,
-  };
-}
-
-/**
  * A length field of the form. `unit`: the unit the field is labelled in (a bare number is
  * read in it; fractions only where it is inches); `bounds` in that unit. Returns the value in
  * that unit, or NaN after recording the message.
@@ -184,20 +179,20 @@ function readSetup(side: "current" | "planned", d: SetupDraft, errors: DraftErro
     return NaN;
   };
   const L = SETUP_FIELD_LABEL;
-  const diameter = lengthField(d.diameter, "in", LIMITS.wheelDiameterIn, L.wheelDiameterIn, "17", at("wheelDiameterIn"));
-  const width = lengthField(d.width, "in", LIMITS.wheelWidthIn, L.wheelWidthIn, "9 or 8-1/2", at("wheelWidthIn"));
+  const diameter = lengthField(d.diameter, "in", LIMITS.wheelDiameterIn, L.wheelDiameterIn, EX.wheelDiameterIn, at("wheelDiameterIn"));
+  const width = lengthField(d.width, "in", LIMITS.wheelWidthIn, L.wheelWidthIn, EX.wheelWidthIn, at("wheelWidthIn"));
   let position: unknown;
   if (d.mode === "offset") {
-    position = { mode: "offset", offsetMm: lengthField(d.offset, "mm", LIMITS.offsetMm, L["position.offsetMm"], "-12 or 25 (minus for a wheel that sits further out)", at("position.offsetMm")) };
+    position = { mode: "offset", offsetMm: lengthField(d.offset, "mm", LIMITS.offsetMm, L["position.offsetMm"], EX["position.offsetMm"], at("position.offsetMm")) };
   } else {
     position = {
       mode: "backspacing",
-      backspacingIn: lengthField(d.backspacing, "in", LIMITS.backspacingIn, L["position.backspacingIn"], "4-3/4, 4¾ or 4.75", at("position.backspacingIn")),
+      backspacingIn: lengthField(d.backspacing, "in", LIMITS.backspacingIn, L["position.backspacingIn"], EX["position.backspacingIn"], at("position.backspacingIn")),
       reference: d.reference,
-      flangeIn: lengthField(d.flange, "in", LIMITS.flangeIn, L["position.flangeIn"], "1/2 or 0.5", at("position.flangeIn")),
+      flangeIn: lengthField(d.flange, "in", LIMITS.flangeIn, L["position.flangeIn"], EX["position.flangeIn"], at("position.flangeIn")),
     };
   }
-  if (d.tire.trim() === "") at("tire")(`${L.tire}: enter a tire size, e.g. 265/70R17.`);
+  if (d.tire.trim() === "") at("tire")(`${L.tire}: enter a tire size, e.g. ${EX.tire}.`);
   else {
     try {
       parseTireSize(d.tire);
@@ -205,7 +200,7 @@ function readSetup(side: "current" | "planned", d: SetupDraft, errors: DraftErro
       at("tire")(`${L.tire}: ${e instanceof Error ? e.message : "not a tire size, e.g. 265/70R17."}`);
     }
   }
-  const spacer = d.spacer.trim() === "" ? 0 : lengthField(d.spacer, "mm", LIMITS.spacerMm, L.spacerMm, "25 (leave empty for none)", at("spacerMm"));
+  const spacer = d.spacer.trim() === "" ? 0 : lengthField(d.spacer, "mm", LIMITS.spacerMm, L.spacerMm, EX.spacerMm, at("spacerMm"));
   return { tire: d.tire, wheelDiameterIn: diameter, wheelWidthIn: width, position, spacerMm: spacer };
 }
 

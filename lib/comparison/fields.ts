@@ -61,3 +61,32 @@ export function boundText(v: number, side: "min" | "max", decimals: number): str
   const r = (side === "min" ? Math.ceil(v * f - 1e-9) : Math.floor(v * f + 1e-9)) / f;
   return String(r === 0 ? 0 : r);
 }
+
+/** Examples each setup field accepts (used in its messages and hints). */
+export const SETUP_FIELD_EXAMPLE = {
+  tire: "265/70R17",
+  wheelDiameterIn: "17",
+  wheelWidthIn: "9 or 8-1/2",
+  "position.offsetMm": "-12 or 25 (minus for a wheel that sits further out)",
+  "position.backspacingIn": "4-3/4, 4¾ or 4.75",
+  "position.flangeIn": "1/2 or 0.5",
+  spacerMm: "25 (leave empty for none)",
+} as const;
+
+/**
+ * The messages of a length field: each names the field as labelled (`label`), gives an example
+ * the field accepts and states bounds in the field's own unit. Shared by the workspace's form
+ * reading (draft.ts) and the zod fields of the garage forms and handlers (lib/validation/setup.ts).
+ *
+ * @example
+ * lengthMessages("Spacer (mm, optional)", "mm", "25").fraction("1-1/2");
+ * // "Spacer (mm, optional): “1-1/2” is a fraction, which is read only in inches — write “1-1/2 in”, or mm as a decimal, e.g. 25."
+ */
+export function lengthMessages(label: string, unit: "in" | "mm", example: string) {
+  return {
+    empty: `${label}: enter ${unit === "in" ? "inches" : "mm"}, e.g. ${example}.`,
+    unreadable: unit === "in" ? `${label}: not a length in inches, e.g. ${example}.` : `${label}: not a length in mm, e.g. ${example}; inches need their unit (1 in).`,
+    fraction: (typed: string) => `${label}: “${typed.trim()}” is a fraction, which is read only in inches — write “${typed.trim()} in”, or mm as a decimal, e.g. ${example}.`,
+    bounds: (min: string, max: string) => `${label}: must be between ${min} and ${max} ${unit}, e.g. ${example}.`,
+  };
+}
