@@ -1,12 +1,27 @@
 /**
  * What people type into the comparison form (text per field) ⇄ the validated comparison input.
- * Lengths are read with the engine's `parseLength`, so `4-3/4`, `4 3/4 in`, `4.75"` and
- * `120.65 mm` all work; a bare number takes the field's usual unit (offset and spacer mm,
- * wheel sizes and backspacing inches, the fender line the chosen display unit).
+ * Lengths are read with the engine's `parseLength`, so `4-3/4`, `4¾`, `4 3/4 in`, `4.75"` and
+ * `120.65 mm` all work; a bare number takes the unit the field's label states (offset and spacer
+ * mm, wheel sizes and backspacing inches, the fender line the chosen display unit), and a
+ * fraction is read only as inches: `1-1/2` in a mm field is refused with a message, not 1.5 mm.
+ * Every message names the field as labelled (fields.ts), gives an example the field accepts and
+ * states bounds in the field's unit.
  */
-import { KM_PER_MILE, formatLength, inToMm, mmToIn, parseLength, parseTireSize } from "@/lib/fitment";
+import { KM_PER_MILE, MM_PER_IN, formatLength, inToMm, mmToIn, parseLength, parseTireSize } from "@/lib/fitment";
+import {
+  SETUP_FIELD_EXAMPLE as EX,
+  SETUP_FIELD_LABEL,
+  type SetupFieldPath,
+  VEHICLE_FIELD_BASE,
+  type VehicleFieldPath,
+  boundText,
+  fenderUnit,
+  lengthMessages,
+  speedUnit,
+  vehicleFieldLabel,
+} from "./fields";
 import type { DisplayPrefs } from "./format";
-import { type ComparisonInput, type SetupInputValues, type BackspacingReferenceValue, DEFAULT_FLANGE_ALLOWANCE_IN, checkComparison } from "./model";
+import { type ComparisonInput, type SetupInputValues, type BackspacingReferenceValue, DEFAULT_FLANGE_ALLOWANCE_IN, LIMITS, checkComparison } from "./model";
 
 export interface SetupDraft {
   tire: string;
@@ -104,12 +119,39 @@ function readNumber(text: string, unitSuffix?: RegExp): number | null {
   return Number.isFinite(v) ? tidy(v) : null;
 }
 
-function readLength(text: string, unit: "in" | "mm"): number | null {
+/** A length in mm, or why not: "fraction" when a fraction was typed where mm is the unit. */
+function readLength(text: string, unit: "in" | "mm"): number | "fraction" | null {
+  const t = text.replace(/\u2212/g, "-");
   try {
-    return tidy(parseLength(text.replace(/\u2212/g, "-"), unit));
+    return tidy(parseLength(t, unit));
   } catch {
-    return null;
+    if (unit !== "mm") return null;
+    try {
+      parseLength(t, "in");
+      return "fraction";
+    } catch {
+      return null;
+    }
   }
+}
+
+type Bounds = { min: number; max: number };
+const inBounds = (v: number, b: Bounds) => v >= b.min && v <= b.max;
+const lower = (s: string) => `${s[0]?.toLowerCase() ?? ""}${s.slice(1)}`;
+
+/**
+ * A length field of the form. `unit`: the unit the field is labelled in (a bare number is
+ * read in it; fractions only where it is inches); `bounds` in that unit. Returns the value in
+ * that unit, or NaN after recording the message.
+ */
+function lengthField(text: string, unit: "in" | "mm", bounds: Bounds, label: string, example: string, fail: (m: string) => number): number {
+  const m = lengthMessages(label, unit, example);
+  if (text.trim() === "") return fail(m.empty);
+  const mm = readLength(text, unit);
+  if (mm === "fraction") return fail(m.fraction(text));
+  if (mm === null) return fail(m.unreadable);
+  const v = unit === "in" ? tidy(mmToIn(mm)) : mm;
+  return inBounds(v, bounds) ? v : fail(m.bounds(String(bounds.min), String(bounds.max)));
 }
 
 /**
@@ -132,43 +174,42 @@ export function followTire(d: SetupDraft, tire: string): SetupDraft {
 }
 
 function readSetup(side: "current" | "planned", d: SetupDraft, errors: DraftErrors): unknown {
-  const err = (path: string, message: string) => {
+  const at = (path: SetupFieldPath) => (message: string) => {
     errors[`${side}.${path}`] = message;
     return NaN;
   };
-  const inches = (text: string, path: string, what: string, example: string) => {
-    if (text.trim() === "") return err(path, `Enter the ${what} (e.g. ${example}).`);
-    const mm = readLength(text, "in");
-    return mm === null ? err(path, `Enter the ${what} in inches, like ${example}.`) : tidy(mmToIn(mm));
-  };
-  const diameter = inches(d.diameter, "wheelDiameterIn", "wheel diameter", "17");
-  const width = inches(d.width, "wheelWidthIn", "wheel width", "9 or 8-1/2");
+  const L = SETUP_FIELD_LABEL;
+  const diameter = lengthField(d.diameter, "in", LIMITS.wheelDiameterIn, L.wheelDiameterIn, EX.wheelDiameterIn, at("wheelDiameterIn"));
+  const width = lengthField(d.width, "in", LIMITS.wheelWidthIn, L.wheelWidthIn, EX.wheelWidthIn, at("wheelWidthIn"));
   let position: unknown;
   if (d.mode === "offset") {
-    const mm = d.offset.trim() === "" ? null : readLength(d.offset, "mm");
-    position = { mode: "offset", offsetMm: mm ?? err("position.offsetMm", "Enter the offset in mm, like -12 or 25 (a minus sign for negative).") };
+    position = { mode: "offset", offsetMm: lengthField(d.offset, "mm", LIMITS.offsetMm, L["position.offsetMm"], EX["position.offsetMm"], at("position.offsetMm")) };
   } else {
     position = {
       mode: "backspacing",
-      backspacingIn: inches(d.backspacing, "position.backspacingIn", "backspacing", "4-3/4, 4.75 or 4 3/4 in"),
+      backspacingIn: lengthField(d.backspacing, "in", LIMITS.backspacingIn, L["position.backspacingIn"], EX["position.backspacingIn"], at("position.backspacingIn")),
       reference: d.reference,
-      flangeIn: inches(d.flange, "position.flangeIn", "flange allowance", "1/2 or 0.5"),
+      flangeIn: lengthField(d.flange, "in", LIMITS.flangeIn, L["position.flangeIn"], EX["position.flangeIn"], at("position.flangeIn")),
     };
   }
-  if (d.tire.trim() === "") err("tire", "Enter a tire size (e.g. 265/70R17).");
+  if (d.tire.trim() === "") at("tire")(`${L.tire}: enter a tire size, e.g. ${EX.tire}.`);
   else {
     try {
       parseTireSize(d.tire);
     } catch (e) {
-      err("tire", e instanceof Error ? e.message : "Not a tire size (e.g. 265/70R17).");
+      at("tire")(`${L.tire}: ${e instanceof Error ? e.message : "not a tire size, e.g. 265/70R17."}`);
     }
   }
-  let spacer = 0;
-  if (d.spacer.trim() !== "") {
-    const mm = readLength(d.spacer, "mm");
-    spacer = mm ?? err("spacerMm", "Enter the spacer thickness in mm, like 25 (or 1 in); leave empty for none.");
-  }
+  const spacer = d.spacer.trim() === "" ? 0 : lengthField(d.spacer, "mm", LIMITS.spacerMm, L.spacerMm, EX.spacerMm, at("spacerMm"));
   return { tire: d.tire, wheelDiameterIn: diameter, wheelWidthIn: width, position, spacerMm: spacer };
+}
+
+/** The label of an input path ("planned.position.offsetMm"), for the model's cross-field messages. */
+function labelOf(key: string, prefs: DisplayPrefs): string | null {
+  const [head, ...rest] = key.split(".");
+  const path = rest.join(".");
+  if (head === "vehicle") return path in VEHICLE_FIELD_BASE ? vehicleFieldLabel(path as VehicleFieldPath, prefs) : null;
+  return path in SETUP_FIELD_LABEL ? SETUP_FIELD_LABEL[path as SetupFieldPath] : null;
 }
 
 /**
@@ -178,46 +219,72 @@ function readSetup(side: "current" | "planned", d: SetupDraft, errors: DraftErro
 export function readDraft(draft: Draft, prefs: DisplayPrefs): { input: ComparisonInput | null; errors: DraftErrors } {
   const errors: DraftErrors = {};
   const v = draft.vehicle;
-  const vErr = (path: string, message: string) => {
+  const at = (path: VehicleFieldPath) => (message: string) => {
     errors[`vehicle.${path}`] = message;
     return NaN;
   };
-  const kpi = v.kpi.trim() === "" ? null : (readNumber(v.kpi, /°|deg$/i) ?? vErr("kingpinInclinationDeg", "Enter the kingpin inclination in degrees, like 8, or leave it empty."));
-  const axle = readNumber(v.axle) ?? vErr("axleRatio", "Enter the axle ratio like 3.73 (or 3.73:1).");
-  const top = readNumber(v.top) ?? vErr("transmissionRatio", "Enter the top-gear ratio like 1.00 (direct) or 0.70 (overdrive).");
-  const speedUnit = prefs.units === "metric" ? "km/h" : "mph";
-  const parts = v.cruise.split(/[,;\s]+/).filter((p) => p !== "" && p.toLowerCase() !== speedUnit);
+  const label = (path: VehicleFieldPath) => vehicleFieldLabel(path, prefs);
+  /** A plain number (ratio, degrees) within bounds. */
+  const plainNumber = (text: string, path: VehicleFieldPath, b: Bounds, unit: string, unreadable: string, example: string, suffix?: RegExp): number => {
+    const n = readNumber(text, suffix);
+    if (n === null) return at(path)(`${label(path)}: ${unreadable}`);
+    return inBounds(n, b) ? n : at(path)(`${label(path)}: must be between ${b.min} and ${b.max}${unit}, e.g. ${example}.`);
+  };
+  const kpi = v.kpi.trim() === "" ? null : plainNumber(v.kpi, "kingpinInclinationDeg", LIMITS.kingpinInclinationDeg, "°", "enter degrees, e.g. 8, or leave it empty.", "8", /°|deg$/i);
+  // "3.73:1" is a common way to write a ratio.
+  const axleText = /^\s*\d+(\.\d+)?\s*:\s*1\s*$/.test(v.axle) ? (v.axle.split(":")[0] ?? "") : v.axle;
+  const axle = plainNumber(axleText, "axleRatio", LIMITS.axleRatio, "", "enter a ratio, e.g. 3.73 (or 3.73:1).", "3.73");
+  const top = plainNumber(v.top, "transmissionRatio", LIMITS.transmissionRatio, "", "enter a ratio, e.g. 1.00 (direct) or 0.70 (overdrive).", "1.00");
+
+  const sUnit = speedUnit(prefs);
+  const metric = prefs.units === "metric";
+  const speedExample = metric ? "100, 110" : "60, 70";
+  const parts = v.cruise.split(/[,;\s]+/).filter((p) => p !== "" && p.toLowerCase() !== sUnit);
   const speeds = parts.map((p) => readNumber(p));
   const exact = v.exact;
-  const cruise = exact && exact.cruise === v.cruise ? exact.cruiseMph :
-    parts.length === 0 || speeds.some((s) => s === null)
-      ? [vErr("cruiseSpeedsMph", `Enter one to six cruise speeds in ${speedUnit}, like ${prefs.units === "metric" ? "100, 110" : "60, 70"}.`)]
-      : speeds.map((s) => tidy(prefs.units === "metric" ? (s as number) / KM_PER_MILE : (s as number)));
+  let cruise: number[];
+  if (exact && exact.cruise === v.cruise) cruise = exact.cruiseMph;
+  else if (parts.length === 0 || speeds.some((x) => x === null)) cruise = [at("cruiseSpeedsMph")(`${label("cruiseSpeedsMph")}: enter one to six speeds in ${sUnit}, separated by commas, e.g. ${speedExample}.`)];
+  else if (parts.length > LIMITS.cruiseCount.max) cruise = [at("cruiseSpeedsMph")(`${label("cruiseSpeedsMph")}: enter at most six speeds, e.g. ${speedExample}.`)];
+  else {
+    cruise = speeds.map((x) => tidy(metric ? (x as number) / KM_PER_MILE : (x as number)));
+    if (!cruise.every((mph) => inBounds(mph, LIMITS.cruiseMph))) {
+      const min = metric ? boundText(LIMITS.cruiseMph.min * KM_PER_MILE, "min", 1) : String(LIMITS.cruiseMph.min);
+      const max = metric ? boundText(LIMITS.cruiseMph.max * KM_PER_MILE, "max", 1) : String(LIMITS.cruiseMph.max);
+      cruise = [at("cruiseSpeedsMph")(`${label("cruiseSpeedsMph")}: each speed must be between ${min} and ${max} ${sUnit}, e.g. ${speedExample}.`)];
+    }
+  }
+
   let fender: number | null = null;
   if (exact && exact.fender === v.fender) {
     fender = exact.fenderMm;
   } else if (v.fender.trim() !== "") {
-    const mm = readLength(v.fender, prefs.units === "metric" ? "mm" : "in");
-    fender = mm ?? vErr("fenderLineMm", `Enter the fender line distance like ${prefs.units === "metric" ? "140 (mm)" : "5-1/2 (in)"}, or leave it empty.`);
+    const unit = fenderUnit(prefs);
+    const example = unit === "mm" ? "140" : "5-1/2 or 5.5";
+    const b = LIMITS.fenderLineMm;
+    // Bounds in the unit the field is shown in (the limit itself is in mm).
+    const shown = unit === "mm" ? b : { min: b.min / MM_PER_IN, max: b.max / MM_PER_IN };
+    const value = lengthField(v.fender, unit, { min: -Infinity, max: Infinity }, label("fenderLineMm"), example, at("fenderLineMm"));
+    const mm = unit === "mm" ? value : tidy(inToMm(value));
+    if (Number.isNaN(value)) fender = NaN;
+    else if (inBounds(mm, b)) fender = mm;
+    else fender = at("fenderLineMm")(lengthMessages(label("fenderLineMm"), unit, example).bounds(boundText(shown.min, "min", 2), boundText(shown.max, "max", 2)));
   }
   const candidate = {
     current: readSetup("current", draft.current, errors),
     planned: readSetup("planned", draft.planned, errors),
     vehicle: { kingpinInclinationDeg: kpi, axleRatio: axle, transmissionRatio: top, cruiseSpeedsMph: cruise, fenderLineMm: fender },
   };
-  // "3.73:1" is a common way to write a ratio.
-  if (errors["vehicle.axleRatio"] && /^\s*\d+(\.\d+)?\s*:\s*1\s*$/.test(v.axle)) {
-    delete errors["vehicle.axleRatio"];
-    candidate.vehicle.axleRatio = Number(v.axle.split(":")[0]);
-  }
   const checked = checkComparison(candidate);
   if (!checked.ok) {
+    // Left: what only the whole input knows (the wheel diameter against the tire, a position
+    // outside the wheel), named by the field's label.
     for (const issue of checked.issues) {
       const key = issue.path.join(".");
       const field = key.startsWith("vehicle.cruiseSpeedsMph") ? "vehicle.cruiseSpeedsMph" : key;
-      if (!(field in errors)) {
-        errors[field] = field === "vehicle.cruiseSpeedsMph" && prefs.units === "metric" ? issue.message.replace(/(\d+) and (\d+) mph/, (_, a: string, b: string) => `${Math.round(Number(a) * KM_PER_MILE)} and ${Math.round(Number(b) * KM_PER_MILE)} km/h`) : issue.message;
-      }
+      if (field in errors) continue;
+      const name = labelOf(field, prefs);
+      errors[field] = name ? `${name}: ${lower(issue.message)}` : issue.message;
     }
   }
   if (Object.keys(errors).length > 0) return { input: null, errors };

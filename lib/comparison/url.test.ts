@@ -1,7 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { type ComparisonInput, DEFAULT_INPUT, comparisonInputSchema } from "./schema";
-import { decodeComparison, encodeComparison, hasComparisonParams } from "./url";
+import { decodeComparison, encodeComparison, hasComparisonParams, problemText } from "./url";
 
 describe("comparison query string", () => {
   it("is compact and readable", () => {
@@ -58,7 +58,16 @@ describe("comparison query string", () => {
     // The wheel diameter follows the tire when missing; an unknown reference reads as "flange".
     expect(input.planned).toEqual({ tire: "35x12.50R15LT", wheelDiameterIn: 15, wheelWidthIn: 10, position: { mode: "backspacing", backspacingIn: 3.75, reference: "flange", flangeIn: 0.5 }, spacerMm: 0 });
     expect(input.vehicle).toEqual({ ...DEFAULT_INPUT.vehicle, cruiseSpeedsMph: [60, 70] });
-    expect(problems).toEqual(["current tire size", "current wheel width", "current offset", "planned backspacing reference", "kingpin inclination", "axle ratio", "fender line"]);
+    expect(problems.map(problemText)).toEqual([
+      "Current setup · Tire size: “not-a-size” is not a tire size; using 265/70R17 113T.",
+      "Current setup · Wheel width (in): “abc” is not a number; using 8 in.",
+      "Current setup · Offset (mm): “1e3” is not a number; using an offset of 25 mm.",
+      "Planned setup · Measured to: “sideways” is not flange or bead; using the flange edge.",
+      "Kingpin inclination (°): “-4” is outside 0–30°; using none (not set).",
+      "Axle ratio is empty; using 3.73.",
+      "Cruise speeds: “60,x,70” has entries left out (“x” is not a number); using 60, 70 mph.",
+      "Fender line from hub face: “9999” is outside 0–500 mm; using none (not measured).",
+    ]);
   });
 
   it("drops a wheel diameter that does not match the tire, and a position outside the wheel", () => {
@@ -66,7 +75,36 @@ describe("comparison query string", () => {
     expect(input.planned.wheelDiameterIn).toBe(15);
     // 8 in wheel: |offset| ≤ 101.6 + 76.2 = 177.8 mm, so 190 falls back to the demo's −12.
     expect(input.planned.position).toEqual({ mode: "offset", offsetMm: -12 });
-    expect(problems).toEqual(["planned wheel diameter (does not match the tire)", "planned wheel position (outside the wheel)"]);
+    expect(problems.map(problemText)).toEqual([
+      "Planned setup · Wheel diameter (in): “17” does not match the 15 in tire; using 15 in.",
+      "Planned setup · Offset (mm): “190” puts the mounting face outside a 8 in wide wheel; using an offset of \u221212 mm.",
+    ]);
+  });
+
+  it("names every value it leaves out or replaces, as the workspace labels it, with what it uses instead", () => {
+    const one = (q: string) => decodeComparison(q).problems.map((p) => ({ field: p.field, used: p.used }));
+    // One bad speed among good ones, speeds out of range, more than six speeds.
+    expect(one("cruise=60,x,70")).toEqual([{ field: "Cruise speeds", used: "60, 70 mph" }]);
+    expect(one("cruise=65,200")).toEqual([{ field: "Cruise speeds", used: "65 mph" }]);
+    expect(decodeComparison("cruise=65,200").problems[0]?.reason).toMatch(/“200” is outside 5–150 mph/);
+    expect(one("cruise=10,20,30,40,50,60,70,80")).toEqual([{ field: "Cruise speeds", used: "10, 20, 30, 40, 50, 60 mph" }]);
+    // A bad backspacing beside a good offset; an offset beside a backspacing; a reference without a backspacing.
+    expect(one("po=-12&pb=abc")).toEqual([{ field: "Planned setup · Backspacing (in)", used: "the link's offset, \u221212 mm" }]);
+    expect(one("pb=4.5&po=10")).toEqual([{ field: "Planned setup · Offset (mm)", used: "the backspacing, 4.5 in" }]);
+    expect(one("pr=bead&po=-5")).toEqual([{ field: "Planned setup · Measured to", used: "an offset of \u22125 mm" }]);
+    expect(one("cb=4.5&cf=3")).toEqual([{ field: "Current setup · Flange allowance (in)", used: "0.5 in" }]);
+    // A tire size too long is refused whole, not cut to 80 characters.
+    const long = decodeComparison(`ct=${encodeURIComponent(`265/70R17 113T${" ".repeat(70)}X`)}`);
+    expect(long.input.current.tire).toBe("265/70R17 113T");
+    expect(long.problems.map(problemText)).toEqual([expect.stringMatching(/^Current setup · Tire size: .* is longer than 80 characters; using 265\/70R17 113T\.$/)]);
+    // Out of range numbers say the bounds in the link's unit.
+    expect(decodeComparison("pw=25&axle=12&ps=150").problems.map((p) => `${p.field} ${p.reason}`)).toEqual([
+      "Planned setup · Wheel width (in) is outside 3–20 in",
+      "Planned setup · Spacer (mm, optional) is outside 0–100 mm",
+      "Axle ratio is outside 1–10",
+    ]);
+    // A clean link has none.
+    expect(decodeComparison(encodeComparison(DEFAULT_INPUT)).problems).toEqual([]);
   });
 
   it("never throws and always returns a valid input, whatever the query (property)", () => {

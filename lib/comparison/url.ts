@@ -9,16 +9,20 @@
  * (mm, only when fitted). Vehicle: `kpi` (°), `axle`, `top` (top-gear ratio), `cruise` (mph,
  * comma-separated), `fender` (mm from the hub face). Figures equal to the defaults are left out.
  *
- * Decoding never throws: a parameter that is missing or not understood falls back to its
- * default (a wheel diameter to the tire's rim diameter) and is reported in `problems`.
+ * Decoding never throws: a parameter that is missing falls back to its default (a wheel diameter
+ * to the tire's rim diameter); one that is not understood, out of bounds, in conflict with another
+ * or left over does too, and is reported in `problems` with the field as the workspace labels it
+ * and the value used instead, so a link never changes a figure without saying so.
  */
 import { parseTireSize } from "@/lib/fitment";
+import { SETUP_FIELD_LABEL, SIDE_LABEL, VEHICLE_FIELD_BASE } from "./fields";
 import {
   DEFAULT_FLANGE_ALLOWANCE_IN,
   DEFAULT_INPUT,
   DEFAULT_VEHICLE,
   LIMITS,
   type ComparisonInput,
+  type BackspacingReferenceValue,
   type Position,
   type SetupInputValues,
   type VehicleValues,
@@ -101,56 +105,99 @@ export function toParams(q: QueryLike): URLSearchParams {
   return p;
 }
 
-/** A finite number within bounds, or undefined (also for empty, "1e999", "12abc", "0x10"). */
-function numParam(raw: string | null, { min, max }: { min: number; max: number }): number | undefined {
-  if (raw === null) return undefined;
-  const t = raw.trim();
-  if (!/^[+-]?(\d+(\.\d*)?|\.\d+)$/.test(t) || t.length > 20) return undefined;
-  const v = Number(t);
-  return Number.isFinite(v) && v >= min && v <= max ? (v === 0 ? 0 : v) : undefined;
+/**
+ * A value of the link that could not be used as given: the field as the workspace labels it,
+ * the text the link gave, why it was not used, and what the workspace uses instead.
+ */
+export interface LinkProblem {
+  /** As the screen labels it, e.g. "Planned setup · Offset (mm)". */
+  field: string;
+  /** The link's text ("" when the link left the value out). */
+  given: string;
+  /** Why it was not used, e.g. "is outside 8–30 in". */
+  reason: string;
+  /** What is used instead, in the link's unit, e.g. "−12 mm". */
+  used: string;
 }
 
-function decodeSetup(prefix: "c" | "p", p: URLSearchParams, fallback: SetupInputValues, problems: string[]): SetupInputValues {
-  const side = prefix === "c" ? "current" : "planned";
-  const note = (what: string) => problems.push(`${side} ${what}`);
-  const get = (k: string) => p.get(`${prefix}${k}`);
+/**
+ * One problem as a sentence.
+ *
+ * @example
+ * problemText({ field: "Axle ratio", given: "abc", reason: "is not a number", used: "3.73" });
+ * // "Axle ratio: “abc” is not a number; using 3.73."
+ * problemText({ field: "Axle ratio", given: "", reason: "is empty", used: "3.73" });
+ * // "Axle ratio is empty; using 3.73."
+ */
+export function problemText(p: LinkProblem): string {
+  return `${p.field}${p.given === "" ? "" : `: “${p.given}”`} ${p.reason}; using ${p.used}.`;
+}
+
+/** A number as the note shows it: the URL's precision, a typographic minus. */
+const shown = (v: number): string => urlNumber(v).replace(/^-/, "\u2212");
+
+type Bounds = { min: number; max: number };
+type Read = { value: number } | { reason: string };
+
+/** A finite number within bounds, or why not (also for empty, "1e999", "12abc", "0x10"). */
+function readParam(raw: string, { min, max }: Bounds, unit: string): Read {
+  const t = raw.trim();
+  if (t === "") return { reason: "is empty" };
+  if (!/^[+-]?(\d+(\.\d*)?|\.\d+)$/.test(t) || t.length > 20 || !Number.isFinite(Number(t))) return { reason: "is not a number" };
+  const v = Number(t);
+  if (v < min || v > max) return { reason: `is outside ${shown(min)}–${shown(max)}${unit}` };
+  return { value: v === 0 ? 0 : v };
+}
+
+/** The setup parameters by the screen's labels (fields.ts). */
+const SETUP_LABEL = {
+  t: SETUP_FIELD_LABEL.tire,
+  d: SETUP_FIELD_LABEL.wheelDiameterIn,
+  w: SETUP_FIELD_LABEL.wheelWidthIn,
+  o: SETUP_FIELD_LABEL["position.offsetMm"],
+  b: SETUP_FIELD_LABEL["position.backspacingIn"],
+  r: SETUP_FIELD_LABEL["position.reference"],
+  f: SETUP_FIELD_LABEL["position.flangeIn"],
+  s: SETUP_FIELD_LABEL.spacerMm,
+} as const;
+
+const positionText = (pos: Position): string =>
+  pos.mode === "offset"
+    ? `an offset of ${shown(pos.offsetMm)} mm`
+    : `a backspacing of ${shown(pos.backspacingIn)} in to the ${pos.reference === "flange" ? "flange edge" : "bead seat"}`;
+
+function decodeSetup(prefix: "c" | "p", p: URLSearchParams, fallback: SetupInputValues, problems: LinkProblem[]): SetupInputValues {
+  const side = SIDE_LABEL[prefix === "c" ? "current" : "planned"];
+  const get = (k: keyof typeof SETUP_LABEL) => p.get(`${prefix}${k}`);
+  const note = (k: keyof typeof SETUP_LABEL, reason: string, used: string) => problems.push({ field: `${side} · ${SETUP_LABEL[k]}`, given: get(k) ?? "", reason, used });
+  const num = (k: keyof typeof SETUP_LABEL, bounds: Bounds, unit: string, used: () => string): number | undefined => {
+    const raw = get(k);
+    if (raw === null) return undefined;
+    const r = readParam(raw, bounds, unit);
+    if ("value" in r) return r.value;
+    note(k, r.reason, used());
+    return undefined;
+  };
 
   let tire = fallback.tire;
   let rim = fallback.wheelDiameterIn;
   const rawTire = get("t");
   if (rawTire !== null) {
     try {
-      rim = parseTireSize(rawTire.slice(0, 80)).rimDiameterIn;
-      tire = rawTire.trim().slice(0, 80);
-    } catch {
-      note("tire size");
+      if (rawTire.trim().length > 80) throw new Error("too long");
+      rim = parseTireSize(rawTire).rimDiameterIn;
+      tire = rawTire.trim();
+    } catch (e) {
+      note("t", e instanceof Error && e.message === "too long" ? "is longer than 80 characters" : "is not a tire size", fallback.tire);
     }
   }
-  let diameter = numParam(get("d"), LIMITS.wheelDiameterIn);
-  if (get("d") !== null && diameter === undefined) note("wheel diameter");
+  let diameter = num("d", LIMITS.wheelDiameterIn, " in", () => `${shown(rim)} in (the tire's rim diameter)`);
   if (diameter !== undefined && diameter !== rim) {
-    note("wheel diameter (does not match the tire)");
+    note("d", `does not match the ${shown(rim)} in tire`, `${shown(rim)} in`);
     diameter = undefined;
   }
-  const width = numParam(get("w"), LIMITS.wheelWidthIn);
-  if (get("w") !== null && width === undefined) note("wheel width");
+  const width = num("w", LIMITS.wheelWidthIn, " in", () => `${shown(fallback.wheelWidthIn)} in`);
   const wheelWidthIn = width ?? fallback.wheelWidthIn;
-
-  let position: Position | undefined;
-  const bs = numParam(get("b"), LIMITS.backspacingIn);
-  const off = numParam(get("o"), LIMITS.offsetMm);
-  if (bs !== undefined) {
-    const r = get("r");
-    const reference = r === "bead" || r === "bead-seat" ? "bead-seat" : "flange";
-    if (r !== null && reference === "flange" && r !== "flange") note("backspacing reference");
-    const f = numParam(get("f"), LIMITS.flangeIn);
-    if (get("f") !== null && f === undefined) note("flange allowance");
-    position = { mode: "backspacing", backspacingIn: bs, reference, flangeIn: f ?? DEFAULT_FLANGE_ALLOWANCE_IN };
-  } else if (off !== undefined) {
-    position = { mode: "offset", offsetMm: off };
-  } else if (get("b") !== null || get("o") !== null) {
-    note(get("b") !== null ? "backspacing" : "offset");
-  }
   const fits = (pos: Position) => {
     try {
       positionOffsetMm(pos, wheelWidthIn);
@@ -159,39 +206,93 @@ function decodeSetup(prefix: "c" | "p", p: URLSearchParams, fallback: SetupInput
       return false;
     }
   };
+  const fallbackPosition: Position = fits(fallback.position) ? fallback.position : { mode: "offset", offsetMm: 0 };
+  const instead = () => positionText(fallbackPosition);
+
+  const rawB = get("b");
+  const rawO = get("o");
+  let position: Position | undefined;
+  // A valid backspacing wins over an offset; a bad backspacing falls to a valid offset.
+  const offsetOf = () => (rawO === null ? undefined : readParam(rawO, LIMITS.offsetMm, " mm"));
+  const bs = num("b", LIMITS.backspacingIn, " in", () => {
+    const o = offsetOf();
+    return o && "value" in o ? `the link's offset, ${shown(o.value)} mm` : instead();
+  });
+  if (bs !== undefined) {
+    const r = get("r");
+    let reference: BackspacingReferenceValue = "flange";
+    if (r === "bead" || r === "bead-seat") reference = "bead-seat";
+    else if (r !== null && r !== "flange") note("r", "is not flange or bead", "the flange edge");
+    const f = num("f", LIMITS.flangeIn, " in", () => `${shown(DEFAULT_FLANGE_ALLOWANCE_IN)} in`);
+    position = { mode: "backspacing", backspacingIn: bs, reference, flangeIn: f ?? DEFAULT_FLANGE_ALLOWANCE_IN };
+    if (rawO !== null) note("o", "is left out: the link also gives a backspacing", `the backspacing, ${shown(bs)} in`);
+  } else {
+    const off = num("o", LIMITS.offsetMm, " mm", instead);
+    if (off !== undefined) position = { mode: "offset", offsetMm: off };
+    // A reference or flange allowance means nothing without a backspacing.
+    for (const k of ["r", "f"] as const) if (get(k) !== null) note(k, rawB === null ? "is left out: the link gives no backspacing" : "is left out with the backspacing", position ? positionText(position) : instead());
+  }
   if (position !== undefined && !fits(position)) {
-    note("wheel position (outside the wheel)");
+    note(position.mode === "offset" ? "o" : "b", `puts the mounting face outside a ${shown(wheelWidthIn)} in wide wheel`, instead());
     position = undefined;
   }
-  if (position === undefined) position = fits(fallback.position) ? fallback.position : { mode: "offset", offsetMm: 0 };
+  if (position === undefined && rawB === null && rawO === null && fallbackPosition !== fallback.position) {
+    problems.push({ field: `${side} · ${SETUP_LABEL.o}`, given: "", reason: `is not in the link, and the default, ${positionText(fallback.position)}, does not fit a ${shown(wheelWidthIn)} in wide wheel`, used: instead() });
+  }
 
-  const spacer = numParam(get("s"), LIMITS.spacerMm);
-  if (get("s") !== null && spacer === undefined) note("spacer");
-  return { tire, wheelDiameterIn: diameter ?? rim, wheelWidthIn, position, spacerMm: spacer ?? 0 };
+  const spacer = num("s", LIMITS.spacerMm, " mm", () => "no spacer");
+  return { tire, wheelDiameterIn: diameter ?? rim, wheelWidthIn, position: position ?? fallbackPosition, spacerMm: spacer ?? 0 };
 }
 
-function decodeVehicle(p: URLSearchParams, problems: string[]): VehicleValues {
-  const pick = <T>(key: string, parsed: T | undefined, fallback: T, label: string): T => {
-    if (p.get(key) !== null && parsed === undefined) problems.push(label);
-    return parsed ?? fallback;
+/**
+ * The vehicle parameters by the screen's labels; cruise speeds and the fender line without the
+ * unit, which follows the reader's display choice while the link holds mph and mm (the note
+ * says so with each value).
+ */
+const VEHICLE_LABEL = {
+  kpi: VEHICLE_FIELD_BASE.kingpinInclinationDeg,
+  axle: VEHICLE_FIELD_BASE.axleRatio,
+  top: VEHICLE_FIELD_BASE.transmissionRatio,
+  cruise: VEHICLE_FIELD_BASE.cruiseSpeedsMph,
+  fender: VEHICLE_FIELD_BASE.fenderLineMm,
+} as const;
+
+function decodeVehicle(p: URLSearchParams, problems: LinkProblem[]): VehicleValues {
+  const num = <T>(key: keyof typeof VEHICLE_LABEL, bounds: Bounds, unit: string, fallback: T, used: string): number | T => {
+    const raw = p.get(key);
+    if (raw === null) return fallback;
+    const r = readParam(raw, bounds, unit);
+    if ("value" in r) return r.value;
+    problems.push({ field: VEHICLE_LABEL[key], given: raw, reason: r.reason, used });
+    return fallback;
   };
-  let cruise: number[] | undefined;
+  const d = DEFAULT_VEHICLE;
+  // In the order of the screen: the notes read top to bottom like the fields.
+  const kingpinInclinationDeg = num("kpi", LIMITS.kingpinInclinationDeg, "°", d.kingpinInclinationDeg, "none (not set)");
+  const axleRatio = num("axle", LIMITS.axleRatio, "", d.axleRatio, d.axleRatio.toFixed(2));
+  const transmissionRatio = num("top", LIMITS.transmissionRatio, "", d.transmissionRatio, d.transmissionRatio.toFixed(2));
+  let cruise = d.cruiseSpeedsMph;
   const rawCruise = p.get("cruise");
   if (rawCruise !== null) {
-    const list = rawCruise
-      .split(",")
-      .slice(0, 20)
-      .map((s) => numParam(s, LIMITS.cruiseMph))
-      .filter((v): v is number => v !== undefined)
-      .slice(0, LIMITS.cruiseCount.max);
-    cruise = list.length > 0 ? list : undefined;
+    const parts = rawCruise.split(",").slice(0, 20);
+    const kept: number[] = [];
+    const dropped: string[] = [];
+    for (const part of parts) {
+      const r = readParam(part, LIMITS.cruiseMph, " mph");
+      if ("value" in r) kept.push(r.value);
+      else dropped.push(`${part.trim() === "" ? "an empty entry" : `“${part.trim()}”`} ${r.reason}`);
+    }
+    const extra = kept.splice(LIMITS.cruiseCount.max);
+    if (rawCruise.split(",").length > parts.length || extra.length > 0) dropped.push(`only the first ${LIMITS.cruiseCount.max} speeds are used`);
+    cruise = kept.length > 0 ? kept : d.cruiseSpeedsMph;
+    if (dropped.length > 0) problems.push({ field: VEHICLE_LABEL.cruise, given: rawCruise, reason: `has entries left out (${dropped.join("; ")})`, used: `${cruise.map(shown).join(", ")} mph` });
   }
   return {
-    kingpinInclinationDeg: pick("kpi", numParam(p.get("kpi"), LIMITS.kingpinInclinationDeg), DEFAULT_VEHICLE.kingpinInclinationDeg, "kingpin inclination"),
-    axleRatio: pick("axle", numParam(p.get("axle"), LIMITS.axleRatio), DEFAULT_VEHICLE.axleRatio, "axle ratio"),
-    transmissionRatio: pick("top", numParam(p.get("top"), LIMITS.transmissionRatio), DEFAULT_VEHICLE.transmissionRatio, "top-gear ratio"),
-    cruiseSpeedsMph: pick("cruise", cruise, DEFAULT_VEHICLE.cruiseSpeedsMph, "cruise speeds"),
-    fenderLineMm: pick("fender", numParam(p.get("fender"), LIMITS.fenderLineMm), DEFAULT_VEHICLE.fenderLineMm, "fender line"),
+    kingpinInclinationDeg,
+    axleRatio,
+    transmissionRatio,
+    cruiseSpeedsMph: cruise,
+    fenderLineMm: num("fender", LIMITS.fenderLineMm, " mm", d.fenderLineMm, "none (not measured)"),
   };
 }
 
@@ -209,13 +310,14 @@ export function hasComparisonParams(q: QueryLike): boolean {
  * decodeComparison("ct=265/70R17&cw=8&co=25&pt=35x12.50R17LT&pw=9&pb=4.5&pr=flange").input.planned.position;
  * // { mode: "backspacing", backspacingIn: 4.5, reference: "flange", flangeIn: 0.5 }
  */
-export function decodeComparison(q: QueryLike, defaults: ComparisonInput = DEFAULT_INPUT): { input: ComparisonInput; problems: string[] } {
-  const problems: string[] = [];
+export function decodeComparison(q: QueryLike, defaults: ComparisonInput = DEFAULT_INPUT): { input: ComparisonInput; problems: LinkProblem[] } {
+  const problems: LinkProblem[] = [];
+  const whole = (reason: string): LinkProblem => ({ field: "The whole comparison", given: "", reason, used: "the demo comparison" });
   let p: URLSearchParams;
   try {
     p = toParams(q);
   } catch {
-    return { input: defaults, problems: ["query"] };
+    return { input: defaults, problems: [whole("could not be read from the link")] };
   }
   const input: ComparisonInput = {
     current: decodeSetup("c", p, defaults.current, problems),
@@ -223,6 +325,6 @@ export function decodeComparison(q: QueryLike, defaults: ComparisonInput = DEFAU
     vehicle: decodeVehicle(p, problems),
   };
   const checked = checkComparison(input);
-  if (!checked.ok) return { input: defaults, problems: [...problems, "comparison"] };
+  if (!checked.ok) return { input: defaults, problems: [...problems, whole(`does not hold together (${checked.issues.map((i) => i.message).join(" ")})`)] };
   return { input: checked.value, problems };
 }

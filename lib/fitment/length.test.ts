@@ -17,7 +17,30 @@ describe("parseLength (1 in = 25.4 mm exactly, NIST SP 811)", () => {
     expect(parseLength("12 cm", "in")).toBe(120);
   });
 
-  for (const bad of ["", "abc", "4-3/0", "4 5/4", "1/0", "4..5", "4 in mm", "4-", "mm", "1e5", "0x10", "4 3/4/5"]) {
+  it("reads the Unicode fractions people type or paste: ¾, 4¾, 4 ¾, 4-¾, 4 3⁄4 (fraction slash), 4³⁄₄", () => {
+    // Vulgar fraction characters and U+2044 FRACTION SLASH: the Unicode Standard, ch. 6 "Fractions".
+    for (const t of ["4¾", "4 ¾", "4-¾", "4 3⁄4", "4-3⁄4", "4³⁄₄", "4 ³⁄₄", "4¾ in", '4¾"']) {
+      expect(parseLength(t, "in"), t).toBeCloseTo(4.75 * 25.4, 12);
+    }
+    expect(parseLength("¾", "in")).toBeCloseTo(19.05, 12);
+    expect(parseLength("-1¼ in", "mm")).toBeCloseTo(-31.75, 12);
+    const eighths: [string, number][] = [["⅛", 1 / 8], ["⅜", 3 / 8], ["½", 1 / 2], ["⅝", 5 / 8], ["⅞", 7 / 8], ["¼", 1 / 4], ["⅓", 1 / 3], ["⅔", 2 / 3]];
+    for (const [c, v] of eighths) expect(parseLength(`2${c}`, "in"), c).toBeCloseTo((2 + v) * 25.4, 12);
+    expect(parseLength("1⁄2", "in")).toBeCloseTo(12.7, 12);
+  });
+
+  it("reads a fraction only as inches: 1-1/2 in a mm field is refused unless the text says in", () => {
+    expect(() => parseLength("1-1/2", "mm")).toThrow(/read only in inches: write "1-1\/2 in"/);
+    expect(() => parseLength("1½", "mm")).toThrow(FitmentInputError);
+    expect(() => parseLength("3/4", "mm")).toThrow(FitmentInputError);
+    expect(() => parseLength("1/2 mm", "in")).toThrow(/fractions are for inches/);
+    expect(() => parseLength("1-1/2 cm", "in")).toThrow(FitmentInputError);
+    expect(parseLength("1-1/2 in", "mm")).toBeCloseTo(38.1, 12);
+    expect(parseLength("1½ in", "mm")).toBeCloseTo(38.1, 12);
+    expect(parseLength("1.5", "mm")).toBe(1.5);
+  });
+
+  for (const bad of ["", "abc", "¾¾", "4¾/8", "4 ⁄ ", "4-3/0", "4 5/4", "1/0", "4..5", "4 in mm", "4-", "mm", "1e5", "0x10", "4 3/4/5"]) {
     it(`rejects ${JSON.stringify(bad)}`, () => {
       expect(() => parseLength(bad, "in")).toThrow(FitmentInputError);
     });

@@ -2,7 +2,8 @@
  * The garage: vehicles, measured clearances, checklists. Shared by the forms and the handlers.
  */
 import { z } from "zod";
-import { CLEARANCE_DISTANCE_LIMITS_MM, CLEARANCE_MARGIN_LIMITS_MM, DEFAULT_CLEARANCE_MARGIN_MM, parseBoltPattern, parseLength } from "@/lib/fitment";
+import { boundText } from "@/lib/comparison/fields";
+import { CLEARANCE_DISTANCE_LIMITS_MM, CLEARANCE_MARGIN_LIMITS_MM, DEFAULT_CLEARANCE_MARGIN_MM, MM_PER_IN, parseBoltPattern, parseLength } from "@/lib/fitment";
 import { FRONT_SUSPENSIONS } from "@/lib/db/types";
 import { CLEARANCE_DIRECTION_LABEL, SUSPENSION_STATE_LABEL } from "@/lib/garage/labels";
 import { numberField, optionalLengthField, optionalNumberField, setupSchema } from "./setup";
@@ -38,43 +39,67 @@ export const boltPatternField = z
     }
   });
 
-/** The margin a user sets for the predictions (text with unit — a bare number is inches — or a number of mm). */
-export const marginSchema = z
-  .union([z.number(), z.string()])
-  .transform((v, ctx) => {
-    try {
-      return typeof v === "number" ? v : parseLength(v, "in");
-    } catch {
-      ctx.addIssue({ code: "custom", message: "The margin should look like 1/2 in or 12 mm." });
-      return z.NEVER;
-    }
-  })
-  .pipe(z.number().min(CLEARANCE_MARGIN_LIMITS_MM.min, "The margin cannot be negative.").max(CLEARANCE_MARGIN_LIMITS_MM.max, "Keep the margin at most 100 mm."));
+const BARE_DECIMAL = /^[+-]?(\d+(\.\d*)?|\.\d+)$/;
 
-/** The vehicle's margin: left empty, the common-practice default 1/2 in. */
+/**
+ * A clearance margin, in a field whose label states no unit: text with its unit ("1/2 in",
+ * "12 mm"), a fraction (an inch notation: "3/4" is 3/4 in), 0, or a number of mm from an API
+ * caller. A bare decimal such as "12" is refused with a message rather than guessed.
+ */
+export function marginField(label: string) {
+  const example = "1/2 in or 12 mm";
+  return z
+    .union([z.number(), z.string()])
+    .transform((v, ctx) => {
+      if (typeof v === "number") return v;
+      const t = v.trim().replace(/\u2212/g, "-");
+      if (BARE_DECIMAL.test(t) && Number(t) !== 0) {
+        ctx.addIssue({ code: "custom", message: `${label}: say which unit ${t} is in, e.g. ${example}.` });
+        return z.NEVER;
+      }
+      try {
+        return parseLength(t, "in");
+      } catch {
+        ctx.addIssue({ code: "custom", message: `${label}: not a length, e.g. ${example}.` });
+        return z.NEVER;
+      }
+    })
+    .pipe(
+      z
+        .number()
+        .min(CLEARANCE_MARGIN_LIMITS_MM.min, `${label}: cannot be negative, e.g. ${example}.`)
+        .max(CLEARANCE_MARGIN_LIMITS_MM.max, `${label}: keep it at most ${CLEARANCE_MARGIN_LIMITS_MM.max} mm (${boundText(CLEARANCE_MARGIN_LIMITS_MM.max / MM_PER_IN, "max", 2)} in), e.g. ${example}.`),
+    );
+}
+
+/** The margin the garage pages' planned-setup and finder forms take (labelled "Margin"). */
+export const marginSchema = marginField("Margin");
+
+/** The vehicle's margin ("Clearance margin" on the vehicle form): left empty, the common-practice default 1/2 in. */
 export const vehicleMarginSchema = z
   .union([z.number(), z.string(), z.null()])
   .optional()
   // Blank first, then one schema: a union of "" and the margin would report a bad margin as
   // "Invalid input" instead of saying what a margin looks like.
   .transform((v) => (v === null || v === undefined || (typeof v === "string" && v.trim() === "") ? DEFAULT_CLEARANCE_MARGIN_MM : v))
-  .pipe(marginSchema);
+  .pipe(marginField("Clearance margin"));
 
 export const vehicleSchema = z.object({
   name: text("a name", 80).min(1, "Give the vehicle a name (e.g. Gravel hauler)."),
-  year: optionalNumberField("the year", { min: 1900, max: 2100 }, "2009", { integer: true }),
+  year: optionalNumberField("Year", { min: 1900, max: 2100 }, "2009", { integer: true }),
   make: optionalText("the make", 60),
   model: optionalText("the model", 60),
   trim: optionalText("the trim", 60),
   frontSuspension: z.enum(FRONT_SUSPENSIONS, { error: "Choose independent front suspension or a solid front axle." }),
   boltPattern: boltPatternField,
-  hubBoreMm: optionalLengthField("the hub bore", "mm", { min: 30, max: 250 }, "106.1"),
+  hubBoreMm: optionalLengthField("Hub bore (mm)", "mm", { min: 30, max: 250 }, "106.1"),
   stockSetup: setupSchema,
   currentSetup: setupSchema,
-  liftHeightMm: optionalLengthField("the lift height", "in", { min: 0, max: 500 }, "2-1/2 in", "mm"),
-  kingpinInclinationDeg: optionalNumberField("the kingpin inclination", { min: 0, max: 30 }, "8", { unit: "°" }),
-  axleRatio: optionalNumberField("the axle ratio", { min: 1, max: 10 }, "3.73"),
-  transmissionRatio: optionalNumberField("the top-gear ratio", { min: 0.3, max: 10 }, "0.72"),
+  // Typed in inches (the form's label says so), stored in mm; the bound is stated in inches.
+  liftHeightMm: optionalLengthField("Lift height (in)", "in", { min: 0, max: 500 }, "2-1/2 or 2.5", "mm"),
+  kingpinInclinationDeg: optionalNumberField("Kingpin inclination (°)", { min: 0, max: 30 }, "8", { unit: "°" }),
+  axleRatio: optionalNumberField("Axle ratio", { min: 1, max: 10 }, "3.73"),
+  transmissionRatio: optionalNumberField("Top-gear ratio", { min: 0.3, max: 10 }, "0.72"),
   clearanceMarginMm: vehicleMarginSchema,
   notes: z
     .union([z.null(), text("the notes", 4000)])

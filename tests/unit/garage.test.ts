@@ -48,6 +48,46 @@ describe("setup schema (fractions through the engine's parseLength)", () => {
   });
 });
 
+describe("units in the garage forms: a field reads the unit its label states", () => {
+  const issue = (r: { success: boolean; error?: { issues: { path: PropertyKey[]; message: string }[] } }, path: string) =>
+    r.error?.issues.find((i) => i.path.join(".") === path)?.message;
+
+  it("refuses a spacer of 1-1/2 (a fraction in a mm field) instead of 1.5 mm; 1-1/2 in is 38.1 mm (NIST SP 811)", () => {
+    const r = setupSchema.safeParse({ ...CUR, spacerMm: "1-1/2" });
+    expect(r.success).toBe(false);
+    expect(issue(r, "spacerMm")).toBe("Spacer (mm, optional): “1-1/2” is a fraction, which is read only in inches — write “1-1/2 in”, or mm as a decimal, e.g. 25 (leave empty for none).");
+    expect(setupSchema.parse({ ...CUR, spacerMm: "1-1/2 in" }).spacerMm).toBeCloseTo(38.1, 9);
+    expect(issue(setupSchema.safeParse({ ...CUR, position: { mode: "offset", offsetMm: "1/2" } }), "position.offsetMm")).toMatch(/^Offset \(mm\): “1\/2” is a fraction/);
+  });
+
+  it("reads Unicode fractions in inch fields", () => {
+    const s = setupSchema.parse({ ...CUR, wheelWidthIn: "8½", position: { mode: "backspacing", backspacingIn: "4¾", reference: "flange", flangeIn: "½" } });
+    expect(s.wheelWidthIn).toBe(8.5);
+    expect(s.position).toEqual({ mode: "backspacing", backspacingIn: 4.75, reference: "flange", flangeIn: 0.5 });
+  });
+
+  it("lift height: typed in inches, its bound stated in inches, its example accepted", () => {
+    const base = { name: "A", frontSuspension: "independent", boltPattern: "6x5.5", stockSetup: CUR, currentSetup: CUR };
+    const r = vehicleSchema.safeParse({ ...base, liftHeightMm: "25" });
+    // 500 mm / 25.4 = 19.685 in, stated inward as 19.68 in.
+    expect(issue(r, "liftHeightMm")).toBe("Lift height (in): must be between 0 and 19.68 in, e.g. 2-1/2 or 2.5.");
+    expect(vehicleSchema.parse({ ...base, liftHeightMm: "2-1/2" }).liftHeightMm).toBeCloseTo(63.5, 9);
+    expect(vehicleSchema.parse({ ...base, liftHeightMm: "2½" }).liftHeightMm).toBeCloseTo(63.5, 9);
+    expect(vehicleSchema.parse({ ...base, liftHeightMm: "2.5" }).liftHeightMm).toBeCloseTo(63.5, 9);
+    expect(issue(vehicleSchema.safeParse({ ...base, liftHeightMm: "lots" }), "liftHeightMm")).toBe("Lift height (in): not a length in inches, e.g. 2-1/2 or 2.5.");
+  });
+
+  it("names each field as the vehicle form labels it", () => {
+    const base = { name: "A", frontSuspension: "independent", boltPattern: "6x5.5", stockSetup: CUR, currentSetup: CUR };
+    const r = vehicleSchema.safeParse({ ...base, year: "1800", hubBoreMm: "3/4", axleRatio: "x", transmissionRatio: "20", kingpinInclinationDeg: "40" });
+    expect(issue(r, "year")).toBe("Year: must be between 1900 and 2100, e.g. 2009.");
+    expect(issue(r, "hubBoreMm")).toMatch(/^Hub bore \(mm\): “3\/4” is a fraction/);
+    expect(issue(r, "axleRatio")).toBe("Axle ratio: enter a number, e.g. 3.73.");
+    expect(issue(r, "transmissionRatio")).toBe("Top-gear ratio: must be between 0.3 and 10, e.g. 0.72.");
+    expect(issue(r, "kingpinInclinationDeg")).toBe("Kingpin inclination (°): must be between 0 and 30°, e.g. 8.");
+  });
+});
+
 describe("clearance input", () => {
   it("needs a unit: in the text or given apart", () => {
     const bare = clearanceSchema.safeParse({ label: "x", direction: "upward", distance: "38", suspensionState: "full-stuff" });
@@ -55,6 +95,8 @@ describe("clearance input", () => {
     expect(bare.error!.issues[0]!.message).toMatch(/Say which unit 38 is in/);
     expect(clearanceSchema.parse({ label: "x", direction: "upward", distance: "1-1/2", unit: "in", suspensionState: "full-stuff" }).distanceMm).toBeCloseTo(38.1, 9);
     expect(clearanceSchema.parse({ label: "x", direction: "upward", distance: "38 mm", unit: "in", suspensionState: "full-stuff" }).distanceMm).toBe(38);
+    // A fraction with mm as the unit is not 1.5 mm.
+    expect(clearanceSchema.safeParse({ label: "x", direction: "upward", distance: "1-1/2", unit: "mm", suspensionState: "full-stuff" }).success).toBe(false);
   });
 });
 
@@ -71,9 +113,21 @@ describe("the vehicle's clearance margin", () => {
 
   it("says what a margin looks like when it cannot read one, and keeps it within 0–100 mm", () => {
     const msg = (v: unknown) => vehicleMarginSchema.safeParse(v).error?.issues[0]?.message;
-    expect(msg("lots")).toBe("The margin should look like 1/2 in or 12 mm.");
-    expect(msg("-2 mm")).toBe("The margin cannot be negative.");
-    expect(msg("5 in")).toBe("Keep the margin at most 100 mm.");
+    expect(msg("lots")).toBe("Clearance margin: not a length, e.g. 1/2 in or 12 mm.");
+    expect(msg("-2 mm")).toBe("Clearance margin: cannot be negative, e.g. 1/2 in or 12 mm.");
+    // 100 mm / 25.4 = 3.937 in, stated inward as 3.93 in (NIST SP 811).
+    expect(msg("5 in")).toBe("Clearance margin: keep it at most 100 mm (3.93 in), e.g. 1/2 in or 12 mm.");
+  });
+
+  it("refuses a bare number in the margin (its label states no unit) instead of guessing inches", () => {
+    const msg = (v: unknown) => vehicleMarginSchema.safeParse(v).error?.issues[0]?.message;
+    expect(msg("12")).toBe("Clearance margin: say which unit 12 is in, e.g. 1/2 in or 12 mm.");
+    expect(msg("0.5")).toBe("Clearance margin: say which unit 0.5 is in, e.g. 1/2 in or 12 mm.");
+    expect(vehicleMarginSchema.parse("0")).toBe(0);
+    // A fraction is an inch notation: ¾ in = 19.05 mm.
+    expect(vehicleMarginSchema.parse("¾")).toBeCloseTo(19.05, 9);
+    expect(vehicleMarginSchema.parse("1/2 in")).toBeCloseTo(12.7, 9);
+    expect(vehicleMarginSchema.parse("12 mm")).toBe(12);
   });
 });
 

@@ -5,12 +5,15 @@ import Link from "next/link";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { z } from "zod";
+import { Badge } from "@/components/ui/Badge";
 import { Button } from "@/components/ui/Button";
 import { TextField } from "@/components/ui/TextField";
 import { ApiError, api, applyFieldErrors } from "@/lib/client/api";
 import type { ComparisonInput } from "@/lib/comparison/schema";
+import { encodeComparison } from "@/lib/comparison/url";
 import { type SavedComparison, comparisonNameSchema } from "@/lib/validation/comparisons";
 import { type OpenedComparison, useCurrentInput, withParam } from "./currentInput";
+import { useLeaveGuard } from "./useLeaveGuard";
 
 const nameForm = z.object({ name: comparisonNameSchema });
 type NameForm = z.infer<typeof nameForm>;
@@ -40,11 +43,17 @@ export function SaveComparison({ saved: openedFrom }: { saved: OpenedComparison 
   const [formOpen, setFormOpen] = useState(false);
   const [notice, setNotice] = useState<string | null>(null);
   const form = useForm<NameForm>({ resolver: zodResolver(nameForm), defaultValues: { name: "" } });
+  // Unsaved: a field is half-typed, or the comparison (or, with a garage, its vehicle) is not
+  // what was last saved. Compared through the URL form, which is what the saved link reproduces.
+  const dirty =
+    saved !== null &&
+    (!complete || encodeComparison(input) !== encodeComparison(saved.input) || (vehicleId !== undefined && vehicleId !== saved.vehicleId));
+  useLeaveGuard(dirty, saved ? `You have unsaved changes to “${saved.name}”. Leave without saving them?` : "");
 
   const create = useMutation({
     mutationFn: (name: string) => api<{ comparison: SavedComparison }>("/api/comparisons", { method: "POST", body: { name, input, ...vehicleBody } }),
     onSuccess: ({ comparison }) => {
-      setSaved({ id: comparison.id, name: comparison.name, vehicleId: comparison.vehicleId });
+      setSaved({ id: comparison.id, name: comparison.name, vehicleId: comparison.vehicleId, input: comparison.input });
       // A reload keeps the saved comparison: the workspace carries `saved` through its edits.
       window.history.replaceState(window.history.state, "", withParam(window.location.search, "saved", comparison.id));
       setFormOpen(false);
@@ -59,7 +68,7 @@ export function SaveComparison({ saved: openedFrom }: { saved: OpenedComparison 
   const update = useMutation({
     mutationFn: (id: string) => api<{ comparison: SavedComparison }>(`/api/comparisons/${id}`, { method: "PATCH", body: { input, ...vehicleBody } }),
     onSuccess: ({ comparison }) => {
-      setSaved({ id: comparison.id, name: comparison.name, vehicleId: comparison.vehicleId });
+      setSaved({ id: comparison.id, name: comparison.name, vehicleId: comparison.vehicleId, input: comparison.input });
       setNotice(`Changes saved to “${comparison.name}”.`);
       void qc.invalidateQueries({ queryKey: ["comparisons"] });
     },
@@ -85,6 +94,7 @@ export function SaveComparison({ saved: openedFrom }: { saved: OpenedComparison 
             <p className="mr-2 text-sm text-basalt-700">
               Saved comparison: <strong className="font-semibold text-basalt-950">{saved.name}</strong>
             </p>
+            <span data-testid="save-state">{dirty ? <Badge tone="tight">Unsaved changes</Badge> : <Badge tone="clear">All changes saved</Badge>}</span>
             <Button onClick={() => update.mutate(saved.id)} pending={update.isPending} disabled={!complete}>
               Save changes
             </Button>

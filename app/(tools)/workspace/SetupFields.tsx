@@ -4,6 +4,7 @@ import { cx } from "@/components/ui/cx";
 import { Segmented } from "@/components/comparison/Segmented";
 import type { SetupFigures } from "@/lib/comparison/compute";
 import type { DraftErrors, SetupDraft } from "@/lib/comparison/draft";
+import { SETUP_FIELD_LABEL as L } from "@/lib/comparison/fields";
 import { type DisplayPrefs, formatInches, formatLen, formatNumber } from "@/lib/comparison/format";
 import { parseTireSize } from "@/lib/fitment";
 import { BackspacingDiagram } from "./BackspacingDiagram";
@@ -62,7 +63,7 @@ export function SetupFields({
       </h2>
       <div className="flex flex-col gap-3" onBlur={onCommit}>
         <TextField
-          label="Tire size"
+          label={L.tire}
           name={id("tire")}
           value={draft.tire}
           autoComplete="off"
@@ -72,8 +73,8 @@ export function SetupFields({
           hint={reading ?? "e.g. 265/70R17, LT285/70R17 121/118Q or 37x12.50R17LT"}
         />
         <div className="grid grid-cols-2 gap-3">
-          <TextField label="Wheel diameter (in)" name={id("diameter")} inputMode="decimal" value={draft.diameter} onChange={(ev) => set({ diameter: ev.target.value })} error={e("wheelDiameterIn")} />
-          <TextField label="Wheel width (in)" name={id("width")} inputMode="decimal" value={draft.width} onChange={(ev) => set({ width: ev.target.value })} error={e("wheelWidthIn")} hint={`suits ${figures.rimWidthMinIn}–${figures.rimWidthMaxIn} in`} />
+          <TextField label={L.wheelDiameterIn} name={id("diameter")} inputMode="decimal" value={draft.diameter} onChange={(ev) => set({ diameter: ev.target.value })} error={e("wheelDiameterIn")} />
+          <TextField label={L.wheelWidthIn} name={id("width")} inputMode="decimal" value={draft.width} onChange={(ev) => set({ width: ev.target.value })} error={e("wheelWidthIn")} hint={`suits ${figures.rimWidthMinIn}–${figures.rimWidthMaxIn} in`} />
         </div>
         <Segmented
           legend="Wheel position given as"
@@ -87,7 +88,7 @@ export function SetupFields({
         />
         {draft.mode === "offset" ? (
           <TextField
-            label="Offset (mm)"
+            label={L["position.offsetMm"]}
             name={id("offset")}
             inputMode="text"
             value={draft.offset}
@@ -98,16 +99,16 @@ export function SetupFields({
         ) : (
           <div className="flex flex-col gap-3 rounded-lg bg-dune-50 p-3 ring-1 ring-dune-200">
             <TextField
-              label="Backspacing (in)"
+              label={L["position.backspacingIn"]}
               name={id("backspacing")}
               inputMode="text"
               value={draft.backspacing}
               onChange={(ev) => set({ backspacing: ev.target.value })}
               error={e("position.backspacingIn")}
-              hint={`Fractions work: 4-3/4, 4 3/4 or 4.75. Offset ${formatNumber(figures.offsetMm, 1, { signed: true })} mm.`}
+              hint={`Fractions work: 4-3/4, 4 3/4, 4¾ or 4.75. Offset ${formatNumber(figures.offsetMm, 1, { signed: true })} mm.`}
             />
             <Segmented
-              legend="Measured to"
+              legend={L["position.reference"]}
               name={id("reference")}
               value={draft.reference}
               options={[
@@ -120,20 +121,20 @@ export function SetupFields({
               A tape across the back of the wheel reads to the flange edge; the bead seat is the flange allowance further in.
             </p>
             <div className="grid grid-cols-[1fr_auto] items-end gap-3">
-              <TextField label="Flange allowance (in)" name={id("flange")} inputMode="text" value={draft.flange} onChange={(ev) => set({ flange: ev.target.value })} error={e("position.flangeIn")} hint="usually 1/2" />
+              <TextField label={L["position.flangeIn"]} name={id("flange")} inputMode="text" value={draft.flange} onChange={(ev) => set({ flange: ev.target.value })} error={e("position.flangeIn")} hint="usually 1/2" />
               <BackspacingDiagram reference={draft.reference} />
             </div>
           </div>
         )}
         <TextField
-          label="Spacer (mm, optional)"
+          label={L.spacerMm}
           name={id("spacer")}
           inputMode="text"
           value={draft.spacer}
           placeholder="none"
           onChange={(ev) => set({ spacer: ev.target.value })}
           error={e("spacerMm")}
-          hint={figures.spacerMm > 0 ? `Acts as offset ${formatNumber(figures.effectiveOffsetMm, 1, { signed: true })} mm` : "Leave empty for none; 1 in also works"}
+          hint={figures.spacerMm > 0 ? `Acts as offset ${formatNumber(figures.effectiveOffsetMm, 1, { signed: true })} mm` : "Leave empty for none. In mm; inches need their unit, e.g. 1 in"}
         />
       </div>
     </section>

@@ -1,8 +1,10 @@
 "use client";
+import { useState } from "react";
 import { Badge } from "@/components/ui/Badge";
 import { TextField } from "@/components/ui/TextField";
 import type { DraftErrors, VehicleDraft } from "@/lib/comparison/draft";
 import type { DisplayPrefs } from "@/lib/comparison/format";
+import { vehicleFieldLabel } from "@/lib/comparison/fields";
 import { DEFAULT_VEHICLE } from "@/lib/comparison/model";
 
 /** Vehicle figures in a collapsible panel; each says when it is the default. */
@@ -24,13 +26,22 @@ export function VehicleFields({
 }) {
   const e = (path: string) => errors[`vehicle.${path}`];
   const set = (patch: Partial<VehicleDraft>) => onChange({ ...draft, ...patch });
-  const speedUnit = prefs.units === "metric" ? "km/h" : "mph";
+  const label = (path: Parameters<typeof vehicleFieldLabel>[0]) => vehicleFieldLabel(path, prefs);
   const isDefault = (k: "kpi" | "axle" | "top" | "cruise" | "fender") => draft[k].trim() === defaults[k].trim();
   const tag = (k: "kpi" | "axle" | "top" | "cruise" | "fender") => (isDefault(k) ? " (default)" : "");
   const count = (["kpi", "axle", "top", "cruise", "fender"] as const).filter((k) => !isDefault(k)).length;
   const hasErrors = Object.keys(errors).some((k) => k.startsWith("vehicle."));
+  // Open or closed is the person's choice (the summary toggles it). An error appearing opens the
+  // panel so the message is seen; nothing closes it but the person: tying `open` to the errors
+  // closed the panel, and took the focus, the moment a retyped figure became valid again.
+  const [open, setOpen] = useState(hasErrors);
+  const [hadErrors, setHadErrors] = useState(hasErrors);
+  if (hasErrors !== hadErrors) {
+    setHadErrors(hasErrors);
+    if (hasErrors) setOpen(true);
+  }
   return (
-    <details className="group rounded-card bg-white shadow-card ring-1 ring-basalt-100" open={hasErrors || undefined}>
+    <details className="group rounded-card bg-white shadow-card ring-1 ring-basalt-100" open={open} onToggle={(ev) => setOpen(ev.currentTarget.open)}>
       <summary className="flex cursor-pointer list-none items-center justify-between gap-3 rounded-card px-4 py-3 font-semibold sm:px-5">
         <span>
           Vehicle details <span className="font-normal text-basalt-500">— kingpin inclination, gearing, cruise speeds, fender line</span>
@@ -43,7 +54,7 @@ export function VehicleFields({
       </summary>
       <div className="grid gap-3 border-t border-basalt-100 px-4 py-4 sm:grid-cols-2 sm:px-5 lg:grid-cols-3" onBlur={onCommit}>
         <TextField
-          label={`Kingpin inclination (°)${tag("kpi")}`}
+          label={`${label("kingpinInclinationDeg")}${tag("kpi")}`}
           name="vehicle-kpi"
           inputMode="decimal"
           placeholder="not set"
@@ -53,7 +64,7 @@ export function VehicleFields({
           hint="Default: not set (scrub then counts the wheel shift only). From the vehicle's alignment specifications."
         />
         <TextField
-          label={`Axle ratio${tag("axle")}`}
+          label={`${label("axleRatio")}${tag("axle")}`}
           name="vehicle-axle"
           inputMode="decimal"
           value={draft.axle}
@@ -62,7 +73,7 @@ export function VehicleFields({
           hint={`Default ${DEFAULT_VEHICLE.axleRatio.toFixed(2)}, a common factory ratio.`}
         />
         <TextField
-          label={`Top-gear ratio${tag("top")}`}
+          label={`${label("transmissionRatio")}${tag("top")}`}
           name="vehicle-top"
           inputMode="decimal"
           value={draft.top}
@@ -71,7 +82,7 @@ export function VehicleFields({
           hint={`Default ${DEFAULT_VEHICLE.transmissionRatio.toFixed(2)} (direct); an overdrive is below 1, e.g. 0.70.`}
         />
         <TextField
-          label={`Cruise speeds (${speedUnit})${tag("cruise")}`}
+          label={`${label("cruiseSpeedsMph")}${tag("cruise")}`}
           name="vehicle-cruise"
           value={draft.cruise}
           onChange={(ev) => set({ cruise: ev.target.value })}
@@ -79,13 +90,13 @@ export function VehicleFields({
           hint={`Default ${defaults.cruise}; up to six, separated by commas.`}
         />
         <TextField
-          label={`Fender line from hub face (${prefs.units === "metric" ? "mm" : "in"})${tag("fender")}`}
+          label={`${label("fenderLineMm")}${tag("fender")}`}
           name="vehicle-fender"
           value={draft.fender}
           placeholder="not measured"
           onChange={(ev) => set({ fender: ev.target.value })}
           error={e("fenderLineMm")}
-          hint="Optional. Drop a plumb line from the fender edge; measure out from the hub face to it."
+          hint={`Optional. Drop a plumb line from the fender edge; measure out from the hub face to it${prefs.units === "metric" ? ", in mm, e.g. 140" : ", in inches, e.g. 5-1/2 or 5.5"}.`}
         />
       </div>
     </details>

@@ -4,9 +4,12 @@ import userEvent from "@testing-library/user-event";
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
 import { DEFAULT_INPUT } from "@/lib/comparison/schema";
 import { PREFS_STORAGE_KEY } from "@/lib/comparison/format";
+import { decodeComparison } from "@/lib/comparison/url";
 import { Workspace } from "./Workspace";
 
 // The charts load lazily through next/dynamic; they are not what these tests are about.
+// Typing through user-event in jsdom is slow on a shared machine; the default 5 s is too tight.
+vi.setConfig({ testTimeout: 20_000 });
 vi.mock("@/components/comparison/LazyComparisonCharts", () => ({ LazyComparisonCharts: () => <div data-testid="charts-stub" /> }));
 
 const planned = () => within(screen.getByRole("region", { name: "Planned setup" }));
@@ -91,6 +94,77 @@ describe("workspace inputs", () => {
     const d = planned().getByLabelText("Wheel diameter (in)");
     await user.clear(d);
     await user.type(d, "18");
-    expect(planned().getByText("A 17 in tire needs a 17 in wheel; this wheel is 18 in.")).toBeTruthy();
+    expect(planned().getByText("Wheel diameter (in): a 17 in tire needs a 17 in wheel; this wheel is 18 in.")).toBeTruthy();
+  });
+});
+
+describe("a link with values that cannot be used", () => {
+  it("says which values were replaced, as the fields are labelled, and with what", () => {
+    const { input, problems } = decodeComparison("po=190&pw=8&cruise=60,x,70&axle=12");
+    render(<Workspace initialInput={input} initialProblems={problems} />);
+    const items = within(screen.getByTestId("link-problems")).getAllByRole("listitem").map((li) => li.textContent);
+    expect(items).toEqual([
+      "Planned setup · Offset (mm): “190” puts the mounting face outside a 8 in wide wheel; using an offset of \u221212 mm.",
+      "Axle ratio: “12” is outside 1–10; using 3.73.",
+      "Cruise speeds: “60,x,70” has entries left out (“x” is not a number); using 60, 70 mph.",
+    ]);
+    expect(planned().getByLabelText("Offset (mm)")).toHaveProperty("value", "-12");
+  });
+});
+
+describe("vehicle details panel", () => {
+  const panel = () => screen.getByText(/^Vehicle details/).closest("details") as HTMLDetailsElement;
+  const openPanel = async (user: ReturnType<typeof userEvent.setup>) => {
+    await user.click(screen.getByText(/^Vehicle details/));
+    expect(panel().open).toBe(true);
+  };
+  /** Select all, delete, then type one key at a time, checking after each key. */
+  const retype = async (user: ReturnType<typeof userEvent.setup>, field: HTMLElement, text: string) => {
+    await user.click(field);
+    await user.keyboard("{Control>}a{/Control}{Backspace}");
+    for (const ch of text) {
+      await user.keyboard(ch);
+      expect(panel().open, `panel open after typing "${ch}" of "${text}"`).toBe(true);
+      expect(document.activeElement, `focus kept after "${ch}" of "${text}"`).toBe(field);
+    }
+    expect(field).toHaveProperty("value", text);
+  };
+
+  it("stays open and keeps the focus while the axle ratio is retyped as 4.10", async () => {
+    const user = userEvent.setup();
+    render(<Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} />);
+    await openPanel(user);
+    await retype(user, screen.getByLabelText(/^Axle ratio/), "4.10");
+    // 265/70R17 = 802.8 mm, 37 in = 939.8 mm (ISO 4000-1; 1 in = 25.4 mm, NIST SP 811): restoring ratio
+    // 4.10 × 939.8 / 802.8 = 4.80, nearest common ratio 4.88 (with 4.00 it would be 4.68 → 4.56).
+    expect(headline("change-ratio")).toBe("4.88");
+    expect(window.location.search).toContain("axle=4.1");
+  });
+
+  it("stays open while cruise speeds, top gear and fender line are retyped", async () => {
+    const user = userEvent.setup();
+    render(<Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} />);
+    await openPanel(user);
+    await retype(user, screen.getByLabelText(/^Cruise speeds/), "55, 65");
+    expect(window.location.search).toContain("cruise=55,65");
+    await retype(user, screen.getByLabelText(/^Top-gear ratio/), "0.70");
+    expect(window.location.search).toContain("top=0.7");
+    await retype(user, screen.getByLabelText(/^Fender line/), "5-1/2");
+    // 5.5 in × 25.4 = 139.7 mm (NIST SP 811).
+    expect(window.location.search).toContain("fender=139.7");
+  });
+
+  it("opens by itself when a vehicle figure has an error, stays open once it is fixed, and closes when the person closes it", async () => {
+    const user = userEvent.setup();
+    render(<Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} />);
+    expect(panel().open).toBe(false);
+    const axle = screen.getByLabelText(/^Axle ratio/);
+    await user.clear(axle);
+    expect(panel().open).toBe(true);
+    await user.type(axle, "3.73");
+    expect(axle.getAttribute("aria-invalid")).toBeNull();
+    expect(panel().open).toBe(true);
+    await user.click(screen.getByText(/^Vehicle details/));
+    expect(panel().open).toBe(false);
   });
 });

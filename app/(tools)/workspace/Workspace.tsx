@@ -11,7 +11,7 @@ import { computeComparison } from "@/lib/comparison/compute";
 import { type Draft, type DraftErrors, type SetupDraft, draftFromInput, followTire, inchText, readDraft, vehicleUnitFields } from "@/lib/comparison/draft";
 import type { DisplayPrefs } from "@/lib/comparison/format";
 import { type ComparisonInput, DEFAULT_INPUT } from "@/lib/comparison/model";
-import { decodeComparison, encodeComparison } from "@/lib/comparison/url";
+import { type LinkProblem, decodeComparison, encodeComparison, problemText } from "@/lib/comparison/url";
 import type { WorkspaceVehicle } from "@/lib/garage/types";
 import { CurrentInputContext, withParam } from "./currentInput";
 import { SetupFields } from "./SetupFields";
@@ -69,14 +69,15 @@ export function Workspace({
   garage,
 }: {
   initialInput: ComparisonInput;
-  initialProblems: string[];
+  /** Values of the opening link that could not be used, each with what replaced it. */
+  initialProblems: LinkProblem[];
   saveSlot?: ReactNode;
   /** The signed-in member's vehicles (none for visitors and shop roles). */
   garage?: { vehicles: WorkspaceVehicle[]; initialVehicleId: string | null } | null;
 }) {
   const [prefs, setPrefs] = useDisplayPrefs();
   const [state, setState] = useState<State>(() => fromInput(initialInput, prefs));
-  const [linkNote, setLinkNote] = useState<string | null>(initialProblems.length > 0 ? `Some values in the link were not understood and use defaults: ${initialProblems.join(", ")}.` : null);
+  const [linkProblems, setLinkProblems] = useState(initialProblems);
   const [copied, setCopied] = useState<"idle" | "done" | "failed">("idle");
   const [vehicleId, setVehicleId] = useState<string | null>(garage?.initialVehicleId ?? null);
   const [limits, setLimits] = useState<DrawnLimits | null>(null);
@@ -119,7 +120,7 @@ export function Workspace({
       setState(fromInput(input, prefs));
       const v = new URLSearchParams(window.location.search).get("v");
       setVehicleId(garage?.vehicles.some((x) => x.id === v) ? v : null);
-      setLinkNote(null);
+      setLinkProblems([]);
     };
     window.addEventListener("popstate", onPop);
     return () => window.removeEventListener("popstate", onPop);
@@ -192,10 +193,15 @@ export function Workspace({
         </div>
       </div>
       {saveSlot}
-      {linkNote && (
-        <p role="status" className="rounded-lg bg-tight-100 px-3 py-2 text-sm text-tight-800">
-          {linkNote}
-        </p>
+      {linkProblems.length > 0 && (
+        <div role="status" className="rounded-lg bg-tight-100 px-3 py-2 text-sm text-tight-800" data-testid="link-problems">
+          <p className="font-semibold">Some values in the link could not be used and were replaced:</p>
+          <ul className="mt-1 list-disc pl-5">
+            {linkProblems.map((p) => (
+              <li key={`${p.field}:${p.given}`}>{problemText(p)}</li>
+            ))}
+          </ul>
+        </div>
       )}
       <div className="grid gap-4 md:grid-cols-2">
         <SetupFields {...setupProps("current")} />

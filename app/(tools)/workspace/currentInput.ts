@@ -13,11 +13,12 @@ export interface CurrentInput {
   vehicleId?: string | null;
 }
 
-/** The saved comparison the workspace was opened from. */
+/** The saved comparison the workspace was opened from, as it was saved (to tell unsaved edits). */
 export interface OpenedComparison {
   id: string;
   name: string;
   vehicleId: string | null;
+  input: ComparisonInput;
 }
 
 export const CurrentInputContext = createContext<CurrentInput | null>(null);

@@ -20,7 +20,7 @@ async function openedFrom(userId: string | undefined, raw: string | string[] | u
   const id = z.uuid().safeParse(Array.isArray(raw) ? raw[0] : raw);
   if (!userId || !id.success) return null;
   const c = await getComparison(db, userId, id.data).catch(() => undefined);
-  return c ? { id: c.id, name: c.name, vehicleId: c.vehicleId } : null;
+  return c ? { id: c.id, name: c.name, vehicleId: c.vehicleId, input: c.input } : null;
 }
 
 export default async function WorkspacePage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {

@@ -1,6 +1,7 @@
 "use client";
 import { type FieldValues, type Path, type UseFormReturn, get, useWatch } from "react-hook-form";
 import { TextField } from "@/components/ui/TextField";
+import { SETUP_FIELD_LABEL as L } from "@/lib/comparison/fields";
 
 /**
  * The inputs of one setup (tire, wheel, offset or backspacing with its reference, spacer),
@@ -17,9 +18,9 @@ export function SetupFields<T extends FieldValues>({ form, name, legend, tone = 
     <fieldset className={`rounded-card border p-4 ${tone === "ember" ? "border-ember-200 bg-ember-50/40" : "border-steel-200 bg-steel-50/40"}`}>
       <legend className="px-1 text-sm font-semibold text-basalt-900">{legend}</legend>
       <div className="grid gap-3 sm:grid-cols-2">
-        <TextField id={id("tire")} label="Tire size" hint="e.g. 265/70R17, LT285/75R16 or 35x12.50R17LT" {...register(p("tire"))} error={err("tire")} className="sm:col-span-2" />
-        <TextField id={id("d")} label="Wheel diameter (in)" inputMode="decimal" {...register(p("wheelDiameterIn"))} error={err("wheelDiameterIn")} />
-        <TextField id={id("w")} label="Wheel width (in)" hint="Fractions work: 8-1/2" {...register(p("wheelWidthIn"))} error={err("wheelWidthIn")} />
+        <TextField id={id("tire")} label={L.tire} hint="e.g. 265/70R17, LT285/75R16 or 35x12.50R17LT" {...register(p("tire"))} error={err("tire")} className="sm:col-span-2" />
+        <TextField id={id("d")} label={L.wheelDiameterIn} inputMode="decimal" {...register(p("wheelDiameterIn"))} error={err("wheelDiameterIn")} />
+        <TextField id={id("w")} label={L.wheelWidthIn} hint="Fractions work: 8-1/2 or 8½" {...register(p("wheelWidthIn"))} error={err("wheelWidthIn")} />
       </div>
       <div role="radiogroup" aria-label={`${legend}: how the wheel position is given`} className="mt-3 flex flex-wrap gap-4 text-sm">
         <label className="flex items-center gap-2">
@@ -31,16 +32,16 @@ export function SetupFields<T extends FieldValues>({ form, name, legend, tone = 
       </div>
       {mode === "backspacing" ? (
         <div className="mt-3 grid gap-3 sm:grid-cols-2">
-          <TextField id={id("bs")} label="Backspacing (in)" hint="e.g. 4-1/2 or 4.5" {...register(p("position.backspacingIn"))} error={err("position.backspacingIn")} />
+          <TextField id={id("bs")} label={L["position.backspacingIn"]} hint="e.g. 4-1/2, 4½ or 4.5" {...register(p("position.backspacingIn"))} error={err("position.backspacingIn")} />
           <TextField
             id={id("flange")}
-            label="Flange allowance (in)"
+            label={L["position.flangeIn"]}
             hint="The flange lip beyond the bead seat; 1/2 in is usual (common practice)."
             {...register(p("position.flangeIn"))}
             error={err("position.flangeIn")}
           />
           <div role="radiogroup" aria-label={`${legend}: backspacing measured to`} className="flex flex-col gap-1 text-sm sm:col-span-2">
-            <span className="font-medium text-basalt-800">Measured to</span>
+            <span className="font-medium text-basalt-800">{L["position.reference"]}</span>
             <label className="flex items-center gap-2">
               <input type="radio" value="flange" {...register(p("position.reference"))} /> the flange edge (a straightedge across the back of the wheel)
             </label>
@@ -56,11 +57,11 @@ export function SetupFields<T extends FieldValues>({ form, name, legend, tone = 
         </div>
       ) : (
         <div className="mt-3 grid gap-3 sm:grid-cols-2">
-          <TextField id={id("offset")} label="Offset (mm)" hint="Positive when the mounting face is outboard of the rim centre, e.g. -12" {...register(p("position.offsetMm"))} error={err("position.offsetMm")} />
+          <TextField id={id("offset")} label={L["position.offsetMm"]} hint="Positive when the mounting face is outboard of the rim centre, e.g. -12" {...register(p("position.offsetMm"))} error={err("position.offsetMm")} />
         </div>
       )}
       <div className="mt-3 grid gap-3 sm:grid-cols-2">
-        <TextField id={id("spacer")} label="Spacer (mm, optional)" hint="Leave empty for none." {...register(p("spacerMm"))} error={err("spacerMm")} />
+        <TextField id={id("spacer")} label={L.spacerMm} hint="Leave empty for none. In mm; inches need their unit, e.g. 1 in." {...register(p("spacerMm"))} error={err("spacerMm")} />
       </div>
     </fieldset>
   );

@@ -94,13 +94,13 @@ export function VehicleForm({ vehicle }: { vehicle: Vehicle | null }) {
         </div>
         <TextField label="Bolt pattern" hint={boltNote ?? "e.g. 6x5.5 or 6x139.7 — inch and mm forms of one pattern are the same"} {...register("boltPattern")} error={e.boltPattern?.message} />
         <TextField label="Hub bore (mm)" hint="Optional, e.g. 106.1" {...register("hubBoreMm")} error={e.hubBoreMm?.message} />
-        <TextField label="Lift height (in)" hint="Optional; fractions work, e.g. 2-1/2" {...register("liftHeightMm")} error={e.liftHeightMm?.message} />
+        <TextField label="Lift height (in)" hint="Optional, in inches; fractions work, e.g. 2-1/2, 2½ or 2.5" {...register("liftHeightMm")} error={e.liftHeightMm?.message} />
         <TextField label="Kingpin inclination (°)" hint="Optional, from the maker's data, e.g. 8" {...register("kingpinInclinationDeg")} error={e.kingpinInclinationDeg?.message} />
         <TextField label="Axle ratio" hint="Optional, e.g. 3.73" {...register("axleRatio")} error={e.axleRatio?.message} />
         <TextField label="Top-gear ratio" hint="Optional, e.g. 0.72 (overdrive) or 1.00" {...register("transmissionRatio")} error={e.transmissionRatio?.message} />
         <TextField
           label="Clearance margin"
-          hint="The gap you want kept at every measured point; 1/2 in if left empty (common practice, no source). e.g. 3/4 in or 15 mm"
+          hint="The gap you want kept at every measured point; 1/2 in if left empty (common practice, no source). Give the unit, e.g. 3/4 in or 15 mm"
           {...register("clearanceMarginMm")}
           error={e.clearanceMarginMm?.message}
         />
