@@ -402,7 +402,7 @@ describe("messages a person reads", () => {
     const { id } = await draftFor();
     const good = { kind: "custom", sku: "", description: "Labour", quantity: 1, unitPriceCents: 1000, discountCents: 0, taxable: false };
     const bodies: object[] = [
-      { lines: [{ ...good, catalogItemId: "" }], discountCents: 0, notes: "" },
+      { lines: [{ ...good, catalogItemId: 42 }], discountCents: 0, notes: "" },
       { lines: [{ ...good, catalogItemId: "not-a-uuid" }], discountCents: 0, notes: "" },
       { lines: [{ ...good, taxable: "yes" }], discountCents: 0, notes: "" },
       { lines: [{ ...good, kind: "gadget" }], discountCents: 0, notes: "" },
@@ -417,6 +417,8 @@ describe("messages a person reads", () => {
       const out = await res.json();
       for (const [k, v] of Object.entries(out.fieldErrors as Record<string, string[]>)) expect(v.join(" "), `${k} of ${JSON.stringify(b)}`).not.toMatch(RAW);
     }
+    // An empty catalog pick ("", as a cleared select sends it) is no catalog item, not a type error.
+    expect((await put(id, [{ ...good, catalogItemId: "" }])).status).toBe(200);
     const over = await put(id, [{ ...good, discountCents: 5000 }]);
     expect(over.status).toBe(422);
     expect(Object.keys((await over.json()).fieldErrors)).toEqual(["lines.0.discountCents"]);
