@@ -76,6 +76,17 @@ describe("fitment candidates", () => {
     expect(five.picks).toEqual([]);
   });
 
+  it("leave out wheels whose centre bore is smaller than the hub, and ask for rings where it is larger", async () => {
+    as(U.staffA);
+    // Both 6-lug template wheels have a 108 mm bore: too small for a 110 mm hub, larger than a 106.1 mm one.
+    const big = await (await candidates(req("POST", "/api/shop/fitment/candidates", { ...VEHICLE, hubBoreMm: 110 }), ctx())).json();
+    expect(big.wheelsFitting).toBe(0);
+    expect(big.picks).toEqual([]);
+    const small = await (await candidates(req("POST", "/api/shop/fitment/candidates", { ...VEHICLE, hubBoreMm: "106.1" }), ctx())).json();
+    expect(small.picks).toHaveLength(2);
+    expect(small.picks[0].summary.modifications.join(" ")).toMatch(/hub-centric rings \(108 mm outside, 106\.1 mm inside\)/);
+  });
+
   it("refuse an unreadable size with the engine's message on the field", async () => {
     as(U.staffA);
     const res = await candidates(req("POST", "/api/shop/fitment/candidates", { ...VEHICLE, tireSize: "big ones" }), ctx());
