@@ -191,7 +191,7 @@ function CustomerStep({ customer, onPick }: { customer: Customer | null; onPick:
           setSubmitted(search.trim());
         }}
       >
-        <TextField className="w-80" label="Phone, e-mail or name" name="customer-search" type="search" value={search} onChange={(e) => setSearch(e.target.value)} />
+        <TextField className="w-full sm:w-80" label="Phone, e-mail or name" name="customer-search" type="search" value={search} onChange={(e) => setSearch(e.target.value)} />
         <Button type="submit" variant="secondary" className="mb-5">Find</Button>
         <Button type="button" variant="ghost" className="mb-5" onClick={() => setAdding((a) => !a)}>New customer</Button>
       </form>
