@@ -154,7 +154,9 @@ export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; lab
           <Card className="min-w-0">
             <h2 className="text-lg font-semibold">Lines</h2>
             {!draft && <p className="text-sm text-basalt-600">Lines can be edited while the quote is a draft.</p>}
-            <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Quote lines (scrolls sideways on a narrow screen)">
+            {/* relative: the table's screen-reader-only labels are absolutely positioned; without a
+                containing block here they escape the scrolling region and widen the page. */}
+            <div className="relative overflow-x-auto" tabIndex={0} role="region" aria-label="Quote lines (scrolls sideways on a narrow screen)">
               <QuoteLinesTable
                 lines={form.lines}
                 saved={detail.lines}
