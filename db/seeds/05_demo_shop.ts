@@ -1,6 +1,7 @@
 import { createHash, randomBytes } from "node:crypto";
 import type { Knex } from "knex";
 import { parseCatalogCsv } from "../../lib/catalog/csv";
+import { buildQuoteDocument } from "../../lib/quotes/document";
 import { summarize } from "../../lib/quotes/fitment";
 import { computeTotals } from "../../lib/quotes/totals";
 import { DEMO_SHOP, DEMO_USERS } from "./01_demo_accounts";
@@ -52,7 +53,8 @@ const CATALOG = [
   "service,SV-DISP,Tire disposal (per tire),5.00,,,,,,,,,,,disposal,per_wheel",
 ].join("\n");
 
-const VEHICLE = { description: "Half-ton pickup, stock height", boltPattern: "6x5.5", tireSize: "265/70R17 115T", wheel: { diameterIn: 17, widthIn: 8, offsetMm: 25 }, axleRatio: 3.73 };
+// The hub bore is invented for the demo: the 106.1 mm wheels sit on it hub-centric, the 108 mm ones need rings.
+const VEHICLE = { description: "Half-ton pickup, stock height", boltPattern: "6x5.5", hubBoreMm: 106.1, tireSize: "265/70R17 115T", wheel: { diameterIn: 17, widthIn: 8, offsetMm: 25 }, axleRatio: 3.73 };
 
 export async function seed(knex: Knex): Promise<void> {
   await knex("shops")
@@ -91,6 +93,7 @@ export async function seed(knex: Knex): Promise<void> {
       wheel_width_in: 8,
       wheel_offset_mm: 25,
       axle_ratio: 3.73,
+      hub_bore_mm: VEHICLE.hubBoreMm,
     })
     .onConflict("id")
     .ignore();
@@ -114,11 +117,11 @@ export async function seed(knex: Knex): Promise<void> {
     const fit = summarize(VEHICLE, tire.tire_size, { diameterIn: wheel.wheel_diameter_in, widthIn: wheel.wheel_width_in, offsetMm: wheel.wheel_offset_mm, beadlock: wheel.beadlock });
     const svc = async (sku: string, qty: number) => {
       const s = await bySku(sku);
-      return { kind: "service", catalog_item_id: s.id, sku, description: s.description, quantity: qty, unit_price_cents: s.price_cents, discount_cents: 0, taxable: false };
+      return { kind: "service", unit: s.service_unit === "per_hour" ? "hour" : "each", catalog_item_id: s.id, sku, description: s.description, quantity: qty, unit_price_cents: s.price_cents, discount_cents: 0, taxable: false };
     };
     const lines = [
       { kind: "tire", catalog_item_id: tire.id, sku: tire.sku, description: tire.description, quantity: 4, unit_price_cents: tire.price_cents, discount_cents: 0, taxable: true },
-      { kind: "wheel", catalog_item_id: wheel.id, sku: wheel.sku, description: wheel.description, quantity: 4, unit_price_cents: wheel.price_cents, discount_cents: 0, taxable: true },
+      { kind: "wheel", catalog_item_id: wheel.id, sku: wheel.sku, description: wheel.description, quantity: 4, unit_price_cents: wheel.price_cents, discount_cents: 0, taxable: true, wheel_bolt_pattern: wheel.bolt_pattern, wheel_center_bore_mm: wheel.center_bore_mm },
       await svc("SV-MB", 4),
       ...(wheel.beadlock ? [await svc("SV-BLA", 4)] : []),
       await svc("SV-VS", 4),
@@ -151,6 +154,7 @@ export async function seed(knex: Knex): Promise<void> {
         current_wheel_width_in: 8,
         current_wheel_offset_mm: 25,
         axle_ratio: 3.73,
+        hub_bore_mm: VEHICLE.hubBoreMm,
         tire_item_id: tire.id,
         wheel_item_id: wheel.id,
         wheel_qty: 4,
@@ -173,6 +177,14 @@ export async function seed(knex: Knex): Promise<void> {
       for (const [to, uid, label] of p.history) {
         await trx("quote_events").insert({ quote_id: p.id, from_status: from, to_status: to, actor_user_id: uid || null, actor: label, at: created });
         from = to;
+      }
+      if (sent) {
+        // What the customer received, as the app stores it when a quote is sent.
+        const row = await trx("quotes").where({ id: p.id }).first();
+        const stored = await trx("quote_lines").where({ quote_id: p.id }).orderBy("position");
+        const author = DEMO_USERS.find((u) => u.id === p.by);
+        const document = buildQuoteDocument({ shop, quote: row, customer: DEMO_CUSTOMERS[p.customer]!, lines: stored, preparedBy: author?.name ?? null, sentAt: row.created_at });
+        await trx("quote_documents").insert({ quote_id: p.id, sent_by: p.by, sent_at: created, document: JSON.stringify(document) });
       }
       if (status === "deposit_paid") {
         await trx("payments").insert({

@@ -138,6 +138,8 @@ export interface CustomerVehicleRow {
   wheel_width_in: number;
   wheel_offset_mm: number;
   axle_ratio: number | null;
+  /** The hub's pilot diameter, when the counter measured or looked it up. */
+  hub_bore_mm: number | null;
   created_at: Date;
 }
 
@@ -156,6 +158,7 @@ export interface QuoteRow {
   current_wheel_width_in: number;
   current_wheel_offset_mm: number;
   axle_ratio: number | null;
+  hub_bore_mm: number | null;
   tire_item_id: string | null;
   wheel_item_id: string | null;
   wheel_qty: 4 | 5;
@@ -177,6 +180,8 @@ export interface QuoteRow {
 }
 
 export type QuoteLineKind = "tire" | "wheel" | "service" | "custom";
+/** "hour" lines may be fractional (hundredths of an hour); "each" lines are whole. */
+export type QuoteLineUnit = "each" | "hour";
 
 export interface QuoteLineRow {
   id: string;
@@ -186,11 +191,25 @@ export interface QuoteLineRow {
   catalog_item_id: string | null;
   sku: string;
   description: string;
+  /** numeric(8,2) in PostgreSQL (read as text by pg): converted to a number where lines are read. */
   quantity: number;
+  unit: QuoteLineUnit;
   unit_price_cents: number;
   discount_cents: number;
   taxable: boolean;
   line_total_cents: number;
+  /** Wheel lines: the wheel's bolt pattern and centre bore as quoted. */
+  wheel_bolt_pattern: string | null;
+  wheel_center_bore_mm: number | null;
+}
+
+/** A quote's document as sent (lib/quotes/document.ts), one row per sending. */
+export interface QuoteDocumentRow {
+  id: string;
+  quote_id: string;
+  sent_at: Date;
+  sent_by: string | null;
+  document: unknown;
 }
 
 export interface QuoteEventRow {

@@ -11,7 +11,8 @@
  *   (1/2 in) or more per side;
  * - regear: suggested when the effective axle ratio falls by 5 % or more.
  */
-import { FitmentInputError, boltPatternsEquivalent, compareSetups, mmToIn, parseTireSize, setupGeometry, type SetupComparison, type SetupGeometry } from "@/lib/fitment";
+import { FitmentInputError, compareSetups, mmToIn, parseTireSize, setupGeometry, type SetupComparison, type SetupGeometry } from "@/lib/fitment";
+import { checkWheelOnHub, hubRefusal } from "./hubFit";
 
 export const THRESHOLDS = Object.freeze({
   pokeMm: 25,
@@ -27,6 +28,8 @@ export interface CurrentSetup {
   tireSize: string;
   wheel: { diameterIn: number; widthIn: number; offsetMm: number };
   axleRatio?: number | null;
+  /** The hub's pilot diameter, when known: wheels with a smaller bore are left out. */
+  hubBoreMm?: number | null;
 }
 
 export interface WheelCandidate {
@@ -36,6 +39,7 @@ export interface WheelCandidate {
   offsetMm: number;
   boltPattern: string;
   beadlock: boolean;
+  centerBoreMm?: number | null;
 }
 
 export interface TireCandidate {
@@ -145,19 +149,20 @@ export interface Pick {
 }
 
 /**
- * Every tire × wheel pair that mounts (wheel bolt pattern equivalent to the vehicle's, wheel
- * diameter equal to the tire's rim), compared with the current setup and ranked: fewest
- * warnings first, then the larger diameter gain, then the smaller change in poke.
+ * Every tire × wheel pair that mounts (wheel bolt pattern equivalent to the vehicle's, centre
+ * bore not smaller than a known hub — lib/quotes/hubFit.ts —, wheel diameter equal to the
+ * tire's rim), compared with the current setup and ranked: fewest warnings first, then the
+ * larger diameter gain, then the smaller change in poke. A wheel that needs hub-centric rings
+ * says so among its modifications.
  */
 export function rankPicks(current: CurrentSetup, tires: readonly TireCandidate[], wheels: readonly WheelCandidate[], limit = 30): { picks: Pick[]; wheelsFitting: number; pairs: number } {
   const cur = setupGeometry({ tire: current.tireSize, wheel: current.wheel });
   const axle = current.axleRatio ?? undefined;
+  const hub = (w: WheelCandidate) => checkWheelOnHub({ boltPattern: current.boltPattern, hubBoreMm: current.hubBoreMm ?? null }, { boltPattern: w.boltPattern, centerBoreMm: w.centerBoreMm ?? null });
   const fitting = wheels.filter((w) => {
-    try {
-      return boltPatternsEquivalent(w.boltPattern, current.boltPattern);
-    } catch {
-      return false;
-    }
+    const f = hub(w);
+    // An unreadable drilling is a caution in the check; here only a known match is offered.
+    return hubRefusal(f) === null && f.some((x) => x.code === "bolt-pattern-matches");
   });
   const parsed = tires.flatMap((t) => {
     try {
@@ -173,7 +178,10 @@ export function rankPicks(current: CurrentSetup, tires: readonly TireCandidate[]
       try {
         const plan = setupGeometry({ tire: size, wheel: { diameterIn: w.diameterIn, widthIn: w.widthIn, offsetMm: w.offsetMm } });
         const cmp = compareSetups(cur, plan, axle ? { axleRatio: axle } : {});
-        picks.push({ tireId: t.id, wheelId: w.id, summary: fromComparison(cmp, cur, plan, w.beadlock, axle !== undefined) });
+        const summary = fromComparison(cmp, cur, plan, w.beadlock, axle !== undefined);
+        const rings = hub(w).find((f) => f.code === "needs-rings");
+        if (rings) summary.modifications.push(rings.message);
+        picks.push({ tireId: t.id, wheelId: w.id, summary });
       } catch (e) {
         if (!(e instanceof FitmentInputError)) throw e;
       }

@@ -1,35 +1,10 @@
 import "server-only";
 import PDFDocument from "pdfkit";
-import type { ShopSettingsRow } from "@/lib/db/types";
 import { quoteCautions } from "./cautions";
-import { type FitmentSummary, fitmentChangeRows } from "./fitment";
+import { type QuoteDocument, hubCautions } from "./document";
+import { fitmentChangeRows } from "./fitment";
 import { formatBp, formatUsd } from "./money";
-
-export interface PdfQuote {
-  number: number;
-  status: string;
-  created_at: Date | string;
-  valid_until: Date | string | null;
-  vehicle_description: string;
-  bolt_pattern: string;
-  fitment: unknown;
-  subtotal_cents: number;
-  discount_cents: number;
-  taxable_cents: number;
-  tax_cents: number;
-  tax_rate_bp: number;
-  total_cents: number;
-  deposit_cents: number;
-  deposit_pct: number;
-  notes: string;
-}
-export interface PdfInput {
-  shop: Pick<ShopSettingsRow, "name" | "address" | "phone">;
-  quote: PdfQuote;
-  customer: { name: string; phone: string; email: string };
-  lines: { sku: string; description: string; quantity: number; unit_price_cents: number; discount_cents: number; line_total_cents: number; taxable: boolean }[];
-  preparedBy: string | null;
-}
+import { formatQuantity } from "./quantity";
 
 /** The standard PDF fonts cover WinAnsi only: typographic signs become their plain forms. */
 const plain = (s: string) =>
@@ -43,11 +18,14 @@ const plain = (s: string) =>
     .replace(/[^\x20-\x7E\xA0-\xFF\n]/g, "?");
 const date = (d: Date | string) => new Date(d).toLocaleDateString("en-US", { year: "numeric", month: "short", day: "numeric" });
 
-/** The quote as a PDF (US Letter), built with pdfkit's standard Helvetica: no font files fetched. */
-export function quotePdf(input: PdfInput): Promise<Buffer> {
-  const { shop, quote, customer, lines } = input;
-  const fit = quote.fitment as FitmentSummary;
-  const doc = new PDFDocument({ size: "LETTER", margin: 50, info: { Title: `Quote Q-${quote.number}`, Author: shop.name } });
+/**
+ * The quote as a PDF (US Letter), built with pdfkit's standard Helvetica: no font files fetched.
+ * It prints a QuoteDocument only, so a sent quote prints from what was sent.
+ */
+export function quotePdf(d: QuoteDocument): Promise<Buffer> {
+  const { shop, customer, lines, totals: t } = d;
+  const fit = d.fitment;
+  const doc = new PDFDocument({ size: "LETTER", margin: 50, info: { Title: `Quote Q-${d.number}`, Author: shop.name } });
   const chunks: Buffer[] = [];
   doc.on("data", (c: Buffer) => chunks.push(c));
   const done = new Promise<Buffer>((resolve, reject) => {
@@ -68,15 +46,15 @@ export function quotePdf(input: PdfInput): Promise<Buffer> {
   if (shop.address) text(shop.address);
   if (shop.phone) text(`Phone ${shop.phone}`);
   doc.moveDown(0.8).font("Helvetica-Bold").fontSize(14);
-  text(`Quote Q-${quote.number}`);
+  text(`Quote Q-${d.number}`);
   doc.font("Helvetica").fontSize(10);
-  text(`Date ${date(quote.created_at)}${quote.valid_until ? ` - valid until ${date(quote.valid_until)}` : ""}${input.preparedBy ? ` - prepared by ${input.preparedBy}` : ""}`);
+  text(`Date ${date(d.sentAt ?? d.createdAt)}${d.validUntil ? ` - valid until ${date(d.validUntil)}` : ""}${d.preparedBy ? ` - prepared by ${d.preparedBy}` : ""}`);
 
   heading("Customer");
   text(customer.name);
   text([customer.phone, customer.email].filter(Boolean).join(" - "));
   heading("Vehicle");
-  text(`${quote.vehicle_description} - bolt pattern ${quote.bolt_pattern}`);
+  text(`${d.vehicle.description} - bolt pattern ${d.vehicle.boltPattern}${d.vehicle.hubBoreMm !== null ? ` - hub bore ${d.vehicle.hubBoreMm} mm` : ""}`);
   text(`Now: ${fit.current.tire} on ${fit.current.wheel}`);
   text(`Planned: ${fit.planned.tire} on ${fit.planned.wheel}${fit.planned.beadlock ? " (beadlock)" : ""}`);
 
@@ -98,7 +76,7 @@ export function quotePdf(input: PdfInput): Promise<Buffer> {
   };
   row(["SKU", "Description", "Qty", "Unit", "Amount"], true);
   for (const l of lines) {
-    row([l.sku, `${l.description}${l.discount_cents ? ` (less ${formatUsd(l.discount_cents)})` : ""}${l.taxable ? "" : " *"}`, String(l.quantity), formatUsd(l.unit_price_cents), formatUsd(l.line_total_cents)]);
+    row([l.sku, `${l.description}${l.discountCents ? ` (less ${formatUsd(l.discountCents)})` : ""}${l.taxable ? "" : " *"}`, formatQuantity(l.quantity, l.unit), formatUsd(l.unitPriceCents), formatUsd(l.lineTotalCents)]);
   }
   doc.moveDown(0.5);
   const total = (label: string, value: string, bold = false) => {
@@ -108,17 +86,18 @@ export function quotePdf(input: PdfInput): Promise<Buffer> {
     doc.text(plain(value), 50 + 440, y, { width: W - 440, align: "right" });
     doc.x = 50;
   };
-  total("Subtotal", formatUsd(quote.subtotal_cents));
-  if (quote.discount_cents) total("Discount", `-${formatUsd(quote.discount_cents)}`);
-  total(`Tax ${formatBp(quote.tax_rate_bp)}% on ${formatUsd(quote.taxable_cents)}`, formatUsd(quote.tax_cents));
-  total("Total", formatUsd(quote.total_cents), true);
-  total(`Deposit (${quote.deposit_pct}%)`, formatUsd(quote.deposit_cents));
+  total("Subtotal", formatUsd(t.subtotalCents));
+  if (t.discountCents) total("Discount", `-${formatUsd(t.discountCents)}`);
+  total(`Tax ${formatBp(t.taxRateBp)}% on ${formatUsd(t.taxableCents)}`, formatUsd(t.taxCents));
+  total("Total", formatUsd(t.totalCents), true);
+  total(`Deposit (${t.depositPct}%)`, formatUsd(t.depositCents));
+  total("Balance due after the deposit", formatUsd(t.balanceCents));
   doc.font("Helvetica").fontSize(8).moveDown(0.3);
   text("* not taxed", { width: W, align: "right" });
   doc.fontSize(10);
-  if (quote.notes) {
+  if (d.notes) {
     heading("Notes");
-    text(quote.notes, { width: W });
+    text(d.notes, { width: W });
   }
 
   heading("Fitment summary");
@@ -127,6 +106,11 @@ export function quotePdf(input: PdfInput): Promise<Buffer> {
   if (fit.warnings.length) {
     heading("Clearance warnings");
     for (const w of fit.warnings) text(`- ${w}`, { width: W });
+  }
+  const hub = hubCautions(d);
+  if (hub.length) {
+    heading("Wheel on the hub");
+    for (const h of hub) text(`- ${h}`, { width: W });
   }
   heading("Modifications required");
   if (fit.modifications.length) for (const m of fit.modifications) text(`- ${m}`, { width: W });

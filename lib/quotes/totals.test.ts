@@ -43,7 +43,7 @@ describe("quote totals in integer cents", () => {
 
   it("refuses negative quantities, negative prices and discounts larger than the amount", () => {
     expect(() => computeTotals({ lines: [line(-1, 100)], discountCents: 0, taxRateBp: 0, depositPct: 0 })).toThrow(/Quantity/);
-    expect(() => computeTotals({ lines: [line(1.5, 100)], discountCents: 0, taxRateBp: 0, depositPct: 0 })).toThrow(/Quantity/);
+    expect(() => computeTotals({ lines: [line(1.505, 100)], discountCents: 0, taxRateBp: 0, depositPct: 0 })).toThrow(/Quantity/);
     expect(() => computeTotals({ lines: [line(1, -100)], discountCents: 0, taxRateBp: 0, depositPct: 0 })).toThrow(/price/);
     expect(() => computeTotals({ lines: [line(1, 100, true, 101)], discountCents: 0, taxRateBp: 0, depositPct: 0 })).toThrow(/exceed/);
     expect(() => computeTotals({ lines: [line(1, 100)], discountCents: 101, taxRateBp: 0, depositPct: 0 })).toThrow(/exceed the subtotal/);
@@ -73,6 +73,27 @@ describe("quote totals in integer cents", () => {
           expect(Math.abs(t.taxCents - (t.taxableCents * bp) / 10000)).toBeLessThanOrEqual(0.5);
         },
       ),
+    );
+  });
+
+  it("hourly labour in part hours stays exact in cents; a fraction of a cent on a line rounds half up", () => {
+    // 1.5 h × 145.00 = 217.50; 0.25 h × 125.00 = 31.25 (arithmetic, exact).
+    const t = computeTotals({ lines: [line(1.5, 14500, false), line(0.25, 12500, false)], discountCents: 0, taxRateBp: 825, depositPct: 25 });
+    expect(t.lines.map((l) => l.grossCents)).toEqual([21750, 3125]);
+    // Total 248.75; deposit 25 % = 62.1875 → 62.19 (half up); balance 248.75 − 62.19 = 186.56.
+    expect(t).toMatchObject({ totalCents: 24875, depositCents: 6219, balanceCents: 18656 });
+    // 0.01 h × 9.99 = 0.0999 → 0.10; 0.5 h × 0.01 = 0.005 → 0.01 (exactly half goes up).
+    expect(computeTotals({ lines: [line(0.01, 999)], discountCents: 0, taxRateBp: 0, depositPct: 0 }).subtotalCents).toBe(10);
+    expect(computeTotals({ lines: [line(0.5, 1)], discountCents: 0, taxRateBp: 0, depositPct: 0 }).subtotalCents).toBe(1);
+    expect(() => computeTotals({ lines: [line(1.255, 100)], discountCents: 0, taxRateBp: 0, depositPct: 0 })).toThrow(/two decimals/);
+  });
+
+  it("deposit and balance always add up to the total", () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 0, max: 10_000_000 }), fc.integer({ min: 0, max: 100 }), (price, pct) => {
+        const t = computeTotals({ lines: [line(1, price)], discountCents: 0, taxRateBp: 825, depositPct: pct });
+        return t.depositCents + t.balanceCents === t.totalCents && t.balanceCents >= 0;
+      }),
     );
   });
 });

@@ -1,15 +1,20 @@
 /**
  * Quote totals in integer cents. Pure; the server is the only caller that stores the result.
  *
- * - line gross = quantity × unit price; line net = gross − line discount (never below 0);
+ * - line gross = quantity × unit price. Quantities are whole, or hundredths of an hour for
+ *   hourly labour, so gross = hundredths × price / 100; where that is not a whole cent it is
+ *   rounded half a cent up on the line (1.5 h × 145.00 = 217.50 exactly; 0.01 h × 9.99 → 0.10);
+ *   line net = gross − line discount (never below 0);
  * - subtotal = Σ line net; the quote discount (≤ subtotal) is spread over the lines in proportion
  *   to their net, the leftover cents going to the largest remainders (ties: earlier line), so the
  *   shares always add up to the discount exactly;
  * - tax = taxable base × rate, rounded once on the total, half a cent up
  *   (rounding on the invoice total rather than per line is common practice, no source — some
  *   jurisdictions round per line);
- * - total = subtotal − quote discount + tax; deposit = total × deposit % (half up).
+ * - total = subtotal − quote discount + tax; deposit = total × deposit % (half a cent up);
+ * - balance due after the deposit = total − deposit (so deposit + balance is the total, to the cent).
  */
+import { MAX_QUANTITY, toHundredths } from "./quantity";
 
 export interface TotalsLine {
   quantity: number;
@@ -36,6 +41,8 @@ export interface Totals {
   taxCents: number;
   totalCents: number;
   depositCents: number;
+  /** What the customer still owes once the deposit is paid. */
+  balanceCents: number;
 }
 
 export class TotalsError extends Error {
@@ -64,10 +71,13 @@ export function computeTotals(input: TotalsInput): Totals {
   if (!isCount(depositPct, 100)) throw new TotalsError("depositPct", "The deposit must be 0–100 %.");
   if (!isCount(discountCents, 1e11)) throw new TotalsError("discountCents", "The discount must be a whole number of cents, 0 or more.");
   const out = lines.map((l, i) => {
-    if (!Number.isSafeInteger(l.quantity) || l.quantity < 1 || l.quantity > 9999) throw new TotalsError(`lines.${i}.quantity`, "Quantity must be a whole number from 1 to 9999.");
+    const hundredths = Number.isFinite(l.quantity) ? toHundredths(l.quantity) : null;
+    if (hundredths === null || hundredths < 1 || l.quantity > MAX_QUANTITY) {
+      throw new TotalsError(`lines.${i}.quantity`, `Quantity must be more than 0 and at most ${MAX_QUANTITY}, with at most two decimals.`);
+    }
     if (!isCount(l.unitPriceCents, 1e9)) throw new TotalsError(`lines.${i}.unitPriceCents`, "The price must be a whole number of cents, 0 or more.");
     if (!isCount(l.discountCents, 1e11)) throw new TotalsError(`lines.${i}.discountCents`, "The discount must be a whole number of cents, 0 or more.");
-    const gross = l.quantity * l.unitPriceCents;
+    const gross = Number.isInteger(l.quantity) ? l.quantity * l.unitPriceCents : divRoundHalfUp(hundredths * l.unitPriceCents, 100);
     if (l.discountCents > gross) throw new TotalsError(`lines.${i}.discountCents`, "A line's discount cannot exceed the line's amount.");
     return { grossCents: gross, netCents: gross - l.discountCents, quoteDiscountShareCents: 0 };
   });
@@ -92,5 +102,5 @@ export function computeTotals(input: TotalsInput): Totals {
   const tax = divRoundHalfUp(taxable * taxRateBp, 10_000);
   const total = subtotal - discountCents + tax;
   const deposit = divRoundHalfUp(total * depositPct, 100);
-  return { lines: out, subtotalCents: subtotal, discountCents, taxableCents: taxable, taxCents: tax, totalCents: total, depositCents: deposit };
+  return { lines: out, subtotalCents: subtotal, discountCents, taxableCents: taxable, taxCents: tax, totalCents: total, depositCents: deposit, balanceCents: total - deposit };
 }

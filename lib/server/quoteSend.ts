@@ -1,39 +1,73 @@
 import "server-only";
 import type { Knex } from "knex";
+import type { QuoteRow } from "@/lib/db/types";
 import { appOrigin, sendMail } from "@/lib/mail";
+import { type QuoteDocument, buildQuoteDocument, hubCautions } from "@/lib/quotes/document";
 import { formatUsd } from "@/lib/quotes/money";
 import { quotePdf } from "@/lib/quotes/pdf";
-import { type QuoteDetail, type QuoteScope, type Actor, getQuoteDetail, markSent } from "./quotes";
+import { type QuoteDetail, type QuoteScope, type Actor, expireDue, findByToken, getQuoteDetail, latestSentDocument, markSent, readLines } from "./quotes";
 import { getShop } from "./shops";
 
-export async function renderQuotePdf(db: Knex, detail: QuoteDetail): Promise<Buffer> {
+/**
+ * The quote as a document: a draft from its live rows; any other quote as it was last sent
+ * (a quote sent before documents were stored falls back to its rows).
+ */
+export async function documentFor(db: Knex, detail: Pick<QuoteDetail, "quote" | "customer" | "lines" | "createdByName">): Promise<QuoteDocument> {
+  if (detail.quote.status !== "draft") {
+    const sent = await latestSentDocument(db, detail.quote.id);
+    if (sent) return sent;
+  }
   const shop = await getShop(db, detail.quote.shop_id);
-  return quotePdf({ shop: shop!, quote: detail.quote, customer: detail.customer, lines: detail.lines, preparedBy: detail.createdByName });
+  return buildQuoteDocument({ shop: shop!, quote: detail.quote, customer: detail.customer, lines: detail.lines, preparedBy: detail.createdByName, sentAt: null });
+}
+
+export async function renderQuotePdf(db: Knex, detail: QuoteDetail): Promise<Buffer> {
+  return quotePdf(await documentFor(db, detail));
+}
+
+/** What the customer's link shows: the live status and the document as sent. */
+export async function publicQuoteView(db: Knex, token: string): Promise<{ quote: QuoteRow; document: QuoteDocument } | undefined> {
+  await expireDue(db);
+  const quote = await findByToken(db, token);
+  if (!quote) return undefined;
+  const [customer, lines, author] = await Promise.all([
+    db("customers").where({ id: quote.customer_id, shop_id: quote.shop_id }).first("id", "name", "phone", "email"),
+    readLines(db, quote.id),
+    quote.created_by ? db("users").where({ id: quote.created_by }).first("name") : null,
+  ]);
+  return { quote, document: await documentFor(db, { quote, customer, lines, createdByName: author?.name ?? null }) };
 }
 
 const esc = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
 
-/** Marks the quote sent (fresh link) and e-mails the customer the PDF and the link. */
-export async function sendQuote(db: Knex, scope: QuoteScope, id: string, actor: Actor): Promise<QuoteDetail> {
-  const { token } = await markSent(db, scope, id, actor);
+/**
+ * Marks the quote sent (fresh link, document frozen as sent) and e-mails the customer the PDF and
+ * the link. `seenUpdatedAt`: the version the sender saw; a quote changed since is not sent.
+ */
+export async function sendQuote(db: Knex, scope: QuoteScope, id: string, actor: Actor, seenUpdatedAt?: string): Promise<QuoteDetail> {
+  const { token, document: d } = await markSent(db, scope, id, actor, seenUpdatedAt);
   const detail = await getQuoteDetail(db, scope, id);
-  const shop = await getShop(db, scope.shopId);
-  const pdf = await renderQuotePdf(db, detail);
-  const q = detail.quote;
+  const pdf = await quotePdf(d);
+  const t = d.totals;
   const link = `${appOrigin()}/q/${token}`;
-  const until = q.valid_until ? new Date(q.valid_until).toLocaleDateString("en-US", { year: "numeric", month: "long", day: "numeric" }) : "";
+  const until = d.validUntil ? new Date(d.validUntil).toLocaleDateString("en-US", { year: "numeric", month: "long", day: "numeric" }) : "";
+  const hub = hubCautions(d);
   await sendMail({
-    to: detail.customer.email,
-    subject: `Your quote Q-${q.number} from ${shop!.name}`,
+    to: d.customer.email,
+    subject: `Your quote Q-${d.number} from ${d.shop.name}`,
     text:
-      `Hello ${detail.customer.name},\n\nHere is your quote Q-${q.number} for ${q.vehicle_description}: total ${formatUsd(q.total_cents)}, ` +
-      `deposit ${formatUsd(q.deposit_cents)}. The PDF is attached.\n\nView it, accept it and pay the deposit here (valid until ${until}):\n${link}\n\n` +
-      `${shop!.name}${shop!.phone ? ` · ${shop!.phone}` : ""}\n`,
+      `Hello ${d.customer.name},\n\nHere is your quote Q-${d.number} for ${d.vehicle.description}: total ${formatUsd(t.totalCents)}, ` +
+      `deposit ${formatUsd(t.depositCents)}, balance due after the deposit ${formatUsd(t.balanceCents)}. The PDF is attached.\n\n` +
+      (hub.length ? `About the wheels on your hubs:\n${hub.map((h) => `- ${h}`).join("\n")}\n\n` : "") +
+      `View it, accept it and pay the deposit here (valid until ${until}):\n${link}\n\n` +
+      `${d.shop.name}${d.shop.phone ? ` · ${d.shop.phone}` : ""}\n`,
     html:
-      `<p>Hello ${esc(detail.customer.name)},</p><p>Here is your quote Q-${q.number} for ${esc(q.vehicle_description)}: total <strong>${formatUsd(q.total_cents)}</strong>, ` +
-      `deposit ${formatUsd(q.deposit_cents)}. The PDF is attached.</p><p><a href="${link}">View, accept and pay the deposit</a> (valid until ${until}).</p>` +
-      `<p>${esc(shop!.name)}${shop!.phone ? ` · ${esc(shop!.phone)}` : ""}</p>`,
-    attachments: [{ filename: `quote-Q-${q.number}.pdf`, content: pdf, contentType: "application/pdf" }],
+      `<p>Hello ${esc(d.customer.name)},</p><p>Here is your quote Q-${d.number} for ${esc(d.vehicle.description)}: total <strong>${formatUsd(t.totalCents)}</strong>, ` +
+      `deposit ${formatUsd(t.depositCents)}, balance due after the deposit ${formatUsd(t.balanceCents)}. The PDF is attached.</p>` +
+      (hub.length ? `<p>About the wheels on your hubs:</p><ul>${hub.map((h) => `<li>${esc(h)}</li>`).join("")}</ul>` : "") +
+      `<p><a href="${link}">View, accept and pay the deposit</a> (valid until ${until}).</p>` +
+      `<p>${esc(d.shop.name)}${d.shop.phone ? ` · ${esc(d.shop.phone)}` : ""}</p>`,
+    attachments: [{ filename: `quote-Q-${d.number}.pdf`, content: pdf, contentType: "application/pdf" }],
   });
   return detail;
 }

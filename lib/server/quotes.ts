@@ -2,10 +2,12 @@ import "server-only";
 import { STATUS_LABEL } from "@/lib/quotes/status";
 import { createHash, randomBytes } from "node:crypto";
 import type { Knex } from "knex";
-import type { CatalogItemRow, QuoteEventRow, QuoteLineRow, QuoteRow, QuoteStatus, ServiceType } from "@/lib/db/types";
-import { boltPatternsEquivalent } from "@/lib/fitment";
+import type { CatalogItemRow, QuoteEventRow, QuoteLineRow, QuoteLineUnit, QuoteRow, QuoteStatus, ServiceType } from "@/lib/db/types";
 import { HttpError, notFound } from "@/lib/http/errors";
+import { type HubCheck, type QuoteDocument, buildQuoteDocument, hubChecksOf } from "@/lib/quotes/document";
 import { type FitmentSummary, summarize } from "@/lib/quotes/fitment";
+import { checkWheelOnHub, hubRefusal } from "@/lib/quotes/hubFit";
+import { formatQuantity } from "@/lib/quotes/quantity";
 import { TotalsError, computeTotals } from "@/lib/quotes/totals";
 import { resolveVehicle, type Vehicle } from "@/lib/validation/quotes";
 
@@ -79,16 +81,24 @@ export interface QuoteDetail {
   events: QuoteEventRow[];
   customer: { id: string; name: string; phone: string; email: string };
   createdByName: string | null;
+  /** Each wheel line checked against the quoted vehicle's bolt pattern and hub bore. */
+  hubChecks: HubCheck[];
+}
+
+/** A quote's lines in order; pg reads numeric(8,2) as text, so the quantity is made a number here. */
+export async function readLines(db: Knex | Knex.Transaction, quoteId: string): Promise<QuoteLineRow[]> {
+  const rows = await db<QuoteLineRow>("quote_lines").where({ quote_id: quoteId }).orderBy("position");
+  return rows.map((l) => ({ ...l, quantity: Number(l.quantity) }));
 }
 
 export async function quoteDetail(db: Knex, quote: QuoteRow): Promise<QuoteDetail> {
   const [lines, events, customer, author] = await Promise.all([
-    db<QuoteLineRow>("quote_lines").where({ quote_id: quote.id }).orderBy("position"),
+    readLines(db, quote.id),
     db<QuoteEventRow>("quote_events").where({ quote_id: quote.id }).orderBy("id"),
     db("customers").where({ id: quote.customer_id, shop_id: quote.shop_id }).first("id", "name", "phone", "email"),
     quote.created_by ? db("users").where({ id: quote.created_by }).first("name") : null,
   ]);
-  return { quote, lines, events, customer, createdByName: author?.name ?? null };
+  return { quote, lines, events, customer, createdByName: author?.name ?? null, hubChecks: hubChecksOf(quote, lines) };
 }
 
 export async function getQuoteDetail(db: Knex, scope: QuoteScope, id: string): Promise<QuoteDetail> {
@@ -110,12 +120,25 @@ export async function listQuotes(db: Knex, scope: QuoteScope, opts: { status?: Q
 
 type LineDraft = Omit<QuoteLineRow, "id" | "quote_id" | "position" | "line_total_cents">;
 
+/** Hourly services may be quoted in part hours; everything else from the catalog is counted. */
+const unitOf = (item: Pick<CatalogItemRow, "kind" | "service_unit">): QuoteLineUnit => (item.kind === "service" && item.service_unit === "per_hour" ? "hour" : "each");
+
+/** What a line copies from its catalog item: the item's own kind and unit, and a wheel's drilling and bore. */
+function fromCatalog(item: CatalogItemRow): Pick<LineDraft, "kind" | "unit" | "wheel_bolt_pattern" | "wheel_center_bore_mm"> {
+  return {
+    kind: item.kind,
+    unit: unitOf(item),
+    wheel_bolt_pattern: item.kind === "wheel" ? item.bolt_pattern : null,
+    wheel_center_bore_mm: item.kind === "wheel" ? item.center_bore_mm : null,
+  };
+}
+
 /** The services the pick calls for, from the shop's own service items (names and prices the shop set). */
 export function suggestedServiceLines(services: CatalogItemRow[], wheel: CatalogItemRow, qty: number, fit: FitmentSummary, fabricationRateCents = 0): LineDraft[] {
   const first = (t: ServiceType) => services.find((s) => s.service_type === t);
   const out: LineDraft[] = [];
   const add = (item: CatalogItemRow | undefined, quantity: number) => {
-    if (item) out.push({ kind: "service", catalog_item_id: item.id, sku: item.sku, description: item.description, quantity, unit_price_cents: item.price_cents, discount_cents: 0, taxable: false });
+    if (item) out.push({ ...fromCatalog(item), catalog_item_id: item.id, sku: item.sku, description: item.description, quantity, unit_price_cents: item.price_cents, discount_cents: 0, taxable: false });
   };
   add(first("mount_balance"), qty);
   if (wheel.beadlock) add(first("beadlock_assembly"), qty);
@@ -125,7 +148,9 @@ export function suggestedServiceLines(services: CatalogItemRow[], wheel: Catalog
     const trim = first("fender_trim");
     if (trim) add(trim, 1);
     // No trimming item in the catalog: one hour at the shop's fabrication rate.
-    else if (fabricationRateCents > 0) out.push({ kind: "custom", catalog_item_id: null, sku: "", description: "Fender trimming labour (1 hour)", quantity: 1, unit_price_cents: fabricationRateCents, discount_cents: 0, taxable: false });
+    else if (fabricationRateCents > 0) {
+      out.push({ kind: "custom", unit: "hour", catalog_item_id: null, sku: "", description: "Fender trimming labour", quantity: 1, unit_price_cents: fabricationRateCents, discount_cents: 0, taxable: false, wheel_bolt_pattern: null, wheel_center_bore_mm: null });
+    }
   }
   add(first("disposal"), qty);
   return out;
@@ -140,7 +165,8 @@ function totalsOf(lines: LineDraft[], discountCents: number, taxRateBp: number, 
       depositPct,
     });
   } catch (e) {
-    if (e instanceof TotalsError) throw new HttpError(422, e.message, { [e.field.replace("Cents", "")]: [e.message] });
+    // The error's field is the request's own path (lines.3.discountCents), so the screen can name it.
+    if (e instanceof TotalsError) throw new HttpError(422, e.message, { [e.field]: [e.message] });
     throw e;
   }
 }
@@ -188,6 +214,7 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
         tireSize: saved.tire_size,
         wheel: { diameterIn: saved.wheel_diameter_in, widthIn: saved.wheel_width_in, offsetMm: saved.wheel_offset_mm },
         axleRatio: saved.axle_ratio,
+        hubBoreMm: saved.hub_bore_mm,
       };
     } else {
       v = resolveVehicle(input.vehicle!);
@@ -203,6 +230,7 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
             wheel_width_in: v.wheel.widthIn,
             wheel_offset_mm: v.wheel.offsetMm,
             axle_ratio: v.axleRatio,
+            hub_bore_mm: v.hubBoreMm,
           })
           .returning(["id"]);
         vehicleId = (row as { id: string }).id;
@@ -216,7 +244,8 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
     if (!wheel) fe.wheelItemId = ["That wheel is not in your catalog."];
     if (!tire || !wheel) throw new HttpError(422, "Some fields need attention.", fe);
     if (tire.tire_rim_in !== wheel.wheel_diameter_in) throw new HttpError(422, `${tire.tire_size} does not mount on a ${wheel.wheel_diameter_in} in wheel.`, { wheelItemId: ["Pick a wheel of the tire's rim diameter."] });
-    if (!boltPatternsEquivalent(wheel.bolt_pattern!, v.boltPattern)) throw new HttpError(422, `That wheel is drilled ${wheel.bolt_pattern}; the vehicle is ${v.boltPattern}.`, { wheelItemId: ["Pick a wheel with the vehicle's bolt pattern."] });
+    const refusal = hubRefusal(checkWheelOnHub({ boltPattern: v.boltPattern, hubBoreMm: v.hubBoreMm }, { boltPattern: wheel.bolt_pattern, centerBoreMm: wheel.center_bore_mm }));
+    if (refusal) throw new HttpError(422, refusal, { wheelItemId: [`${refusal} Pick another wheel.`] });
 
     const fit = summarize({ boltPattern: v.boltPattern, tireSize: v.tireSize, wheel: v.wheel, axleRatio: v.axleRatio }, tire.tire_size!, {
       diameterIn: wheel.wheel_diameter_in!,
@@ -226,8 +255,8 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
     });
     const services = await trx<CatalogItemRow>("catalog_items").where({ shop_id: shopId, kind: "service" }).orderBy("sku");
     const lines: LineDraft[] = [
-      { kind: "tire", catalog_item_id: tire.id, sku: tire.sku, description: tire.description, quantity: input.quantity, unit_price_cents: tire.price_cents, discount_cents: 0, taxable: true },
-      { kind: "wheel", catalog_item_id: wheel.id, sku: wheel.sku, description: wheel.description, quantity: input.quantity, unit_price_cents: wheel.price_cents, discount_cents: 0, taxable: true },
+      { ...fromCatalog(tire), catalog_item_id: tire.id, sku: tire.sku, description: tire.description, quantity: input.quantity, unit_price_cents: tire.price_cents, discount_cents: 0, taxable: true },
+      { ...fromCatalog(wheel), catalog_item_id: wheel.id, sku: wheel.sku, description: wheel.description, quantity: input.quantity, unit_price_cents: wheel.price_cents, discount_cents: 0, taxable: true },
       ...suggestedServiceLines(services, wheel, input.quantity, fit, shop.fabrication_rate_cents),
     ];
     const totals = totalsOf(lines, 0, shop.tax_rate_bp, shop.deposit_pct);
@@ -247,6 +276,7 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
         current_wheel_width_in: v.wheel.widthIn,
         current_wheel_offset_mm: v.wheel.offsetMm,
         axle_ratio: v.axleRatio,
+        hub_bore_mm: v.hubBoreMm,
         tire_item_id: tire.id,
         wheel_item_id: wheel.id,
         wheel_qty: input.quantity,
@@ -263,32 +293,48 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
 }
 
 export interface UpdateQuote {
-  lines: { kind: LineDraft["kind"]; catalogItemId?: string | null; sku: string; description: string; quantity: number; unitPriceCents: number; discountCents: number; taxable: boolean }[];
+  lines: { kind: LineDraft["kind"]; unit: QuoteLineUnit; catalogItemId?: string | null; sku: string; description: string; quantity: number; unitPriceCents: number; discountCents: number; taxable: boolean }[];
   discountCents: number;
   notes: string;
 }
 
-/** Replaces a draft's lines and discount; totals are recomputed here, never taken from the client. */
+/**
+ * Replaces a draft's lines and discount; totals are recomputed here, never taken from the client.
+ * Any item of the shop's catalog may be a line: its kind, unit, and a wheel's drilling and bore
+ * come from the catalog. A wheel that does not go on the quoted vehicle's hub is refused, and
+ * only hourly lines may be part hours. Problems are keyed by the line's path (lines.2.quantity).
+ */
 export async function updateDraft(db: Knex, scope: QuoteScope, id: string, input: UpdateQuote): Promise<void> {
   await db.transaction(async (trx) => {
     const quote = await findQuote(trx, scope, id, true);
     if (quote.status !== "draft") throw new HttpError(409, "Only a draft can be edited. Take the quote back to draft first.");
-    const ids = input.lines.map((l) => l.catalogItemId).filter((x): x is string => !!x);
-    if (ids.length) {
-      const found = await trx("catalog_items").where({ shop_id: scope.shopId }).whereIn("id", ids).pluck("id");
-      const missing = ids.findIndex((x) => !found.includes(x));
-      if (missing >= 0) throw new HttpError(422, "A line refers to an item that is not in your catalog.");
-    }
-    const lines: LineDraft[] = input.lines.map((l) => ({
-      kind: l.kind,
-      catalog_item_id: l.catalogItemId ?? null,
-      sku: l.sku,
-      description: l.description,
-      quantity: l.quantity,
-      unit_price_cents: l.unitPriceCents,
-      discount_cents: l.discountCents,
-      taxable: l.taxable,
-    }));
+    const ids = [...new Set(input.lines.map((l) => l.catalogItemId).filter((x): x is string => !!x))];
+    const items = new Map<string, CatalogItemRow>();
+    if (ids.length) for (const it of await trx<CatalogItemRow>("catalog_items").where({ shop_id: scope.shopId }).whereIn("id", ids)) items.set(it.id, it);
+    const fe: Record<string, string[]> = {};
+    const lines: LineDraft[] = input.lines.map((l, i) => {
+      const item = l.catalogItemId ? items.get(l.catalogItemId) : undefined;
+      if (l.catalogItemId && !item) fe[`lines.${i}.catalogItemId`] = ["That item is not in your catalog (any more): remove the line or add the item again."];
+      const own = item ? fromCatalog(item) : { kind: l.kind, unit: l.unit, wheel_bolt_pattern: null, wheel_center_bore_mm: null };
+      if (own.unit === "each" && !Number.isInteger(l.quantity)) {
+        fe[`lines.${i}.quantity`] = [`Count whole items: ${formatQuantity(l.quantity, "each")} is not a whole number (only hourly labour takes part hours).`];
+      }
+      if (item?.kind === "wheel") {
+        const refusal = hubRefusal(checkWheelOnHub({ boltPattern: quote.bolt_pattern, hubBoreMm: quote.hub_bore_mm }, { boltPattern: item.bolt_pattern, centerBoreMm: item.center_bore_mm }));
+        if (refusal) fe[`lines.${i}.catalogItemId`] = [refusal];
+      }
+      return {
+        ...own,
+        catalog_item_id: item?.id ?? null,
+        sku: item ? item.sku : l.sku,
+        description: l.description,
+        quantity: l.quantity,
+        unit_price_cents: l.unitPriceCents,
+        discount_cents: l.discountCents,
+        taxable: l.taxable,
+      };
+    });
+    if (Object.keys(fe).length) throw new HttpError(422, "Some lines need attention.", fe);
     const totals = totalsOf(lines, input.discountCents, quote.tax_rate_bp, quote.deposit_pct);
     await writeLines(trx, id, lines, totals);
     await trx("quotes").where({ id }).update({ notes: input.notes });
@@ -297,21 +343,40 @@ export async function updateDraft(db: Knex, scope: QuoteScope, id: string, input
 
 /**
  * Marks the quote sent with a fresh public token (256 bits; only its hash is stored) valid for
- * the shop's validity period. Returns the token for the e-mail link.
+ * the shop's validity period, and stores the document as sent (shop details, lines, totals) so
+ * the PDF and the customer's page keep showing it. `seenUpdatedAt`: the version the sender was
+ * looking at; if the quote changed since, nothing is sent (409). Returns the token for the link.
  */
-export async function markSent(db: Knex, scope: QuoteScope, id: string, actor: Actor): Promise<{ token: string; quote: QuoteRow }> {
+export async function markSent(db: Knex, scope: QuoteScope, id: string, actor: Actor, seenUpdatedAt?: string): Promise<{ token: string; document: QuoteDocument }> {
   const token = randomBytes(32).toString("base64url");
-  await db.transaction(async (trx) => {
+  const document = await db.transaction(async (trx) => {
     const quote = await findQuote(trx, scope, id, true);
-    const customer = await trx("customers").where({ id: quote.customer_id, shop_id: scope.shopId }).first("email");
+    if (seenUpdatedAt && new Date(quote.updated_at).getTime() !== new Date(seenUpdatedAt).getTime()) {
+      throw new HttpError(409, "This quote changed after you opened it (saved from another window or by a colleague). Reload it, check the lines, and send again.");
+    }
+    const customer = await trx("customers").where({ id: quote.customer_id, shop_id: scope.shopId }).first("name", "phone", "email");
     if (!customer?.email) throw new HttpError(422, "The customer has no e-mail address. Add one before sending.");
-    const shop = await trx("shops").where({ id: scope.shopId }).first("quote_validity_days");
+    const shop = await trx("shops").where({ id: scope.shopId }).first("name", "address", "phone", "quote_validity_days");
     await transition(trx, quote, "sent", actor, quote.status === "sent" ? "sent again" : "", {
       public_token_hash: sha256(token),
       valid_until: trx.raw("now() + make_interval(days => ?)", [shop.quote_validity_days]) as unknown as Date,
     });
+    const [now, lines, author] = await Promise.all([
+      findQuote(trx, scope, id),
+      readLines(trx, id),
+      quote.created_by ? trx("users").where({ id: quote.created_by }).first("name") : null,
+    ]);
+    const doc = buildQuoteDocument({ shop, quote: now, customer, lines, preparedBy: author?.name ?? null, sentAt: new Date() });
+    await trx("quote_documents").insert({ quote_id: id, sent_by: actor.userId, document: JSON.stringify(doc) });
+    return doc;
   });
-  return { token, quote: await findQuote(db, scope, id) };
+  return { token, document };
+}
+
+/** The document a customer has for a quote: the latest one sent, or null when none was. */
+export async function latestSentDocument(db: Knex | Knex.Transaction, quoteId: string): Promise<QuoteDocument | null> {
+  const row = await db("quote_documents").where({ quote_id: quoteId }).orderBy("id", "desc").first("document");
+  return row ? (row.document as QuoteDocument) : null;
 }
 
 /** Staff moves: back to draft (the link stops working), declined, installed. */

@@ -103,6 +103,8 @@ describe("the shop counter, end to end", () => {
     await c.goto(link!);
     await c.getByRole("heading", { name: /Quote Q-\d+ for Ilse Varga-Pond/ }).waitFor();
     expect(await c.getByTestId("public-deposit").textContent()).toBe(deposit);
+    // On a 390 px phone the customer's page never scrolls sideways (its lines become cards).
+    expect(await c.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
     await checkA11y(c, "public quote page");
     await shot(c, "shop-counter-public-quote");
     await c.getByRole("button", { name: "Accept the quote" }).click();
@@ -171,6 +173,28 @@ describe("the shop counter, end to end", () => {
       await page.locator("h1").first().waitFor();
       await checkA11y(page, path);
       await shot(page, `shop${path.replaceAll("/", "-")}`);
+    }
+  });
+
+  it("the staff quote page fits a 390 px phone: the lines scroll inside their own focusable region", async () => {
+    const phone = await launch({ width: 390, height: 844 });
+    try {
+      const page = await phone.context.newPage();
+      await signInAs(page, DEMO.shop_staff, DEMO_PASSWORD);
+      // The demo draft quote (db/seeds/05_demo_shop.ts, DEMO_QUOTES.draft).
+      await page.goto("/shop/quotes/d0000000-0000-4000-8000-000000000001");
+      await page.getByRole("heading", { name: /Quote Q-\d+/ }).waitFor();
+      expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+      const region = page.getByRole("region", { name: /Quote lines/ });
+      expect(await region.evaluate((el) => el.scrollWidth > el.clientWidth && el.tabIndex === 0)).toBe(true);
+      await checkA11y(page, "quote editor at 390 px");
+      await shot(page, "shop-quote-phone");
+      // An edit shows the unsaved state; the demo vehicle's 106.1 mm hub asks for rings under the 108 mm Basin Steel wheel.
+      await page.getByLabel("Notes for the customer").fill("Phone check");
+      await page.getByTestId("unsaved").waitFor();
+      expect(await page.getByTestId("hub-checks").textContent()).toMatch(/hub-centric rings/);
+    } finally {
+      await phone.close();
     }
   });
 });

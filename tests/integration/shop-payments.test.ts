@@ -24,6 +24,7 @@ const act = (await import("@/app/api/q/[token]/route")).POST;
 const quotes = await import("@/app/api/shop/quotes/route");
 const sendRoute = (await import("@/app/api/shop/quotes/[id]/send/route")).POST;
 const customers = await import("@/app/api/shop/customers/route");
+const { publicQuoteView } = await import("@/lib/server/quoteSend");
 
 /** Forwards the fake's webhook calls into the route handler, keeping what was delivered. */
 const delivered: { body: string; signature: string; status: number; answer: unknown }[] = [];
@@ -170,6 +171,28 @@ describe("deposit through the payment SDK and the fake provider", () => {
     await db("quotes").where({ id: fourth.id }).update({ valid_until: db.raw("now() - interval '1 second'") });
     expect((await action(fourth.token, "accept")).status).toBe(409);
     expect((await quoteRow(fourth.id)).status).toBe("expired");
+  });
+
+  it("takes the deposit under the shop name on the quote as sent, and the customer's page then shows the balance still due", async () => {
+    const q = await sentQuote();
+    await db("shops").where({ id: SHOP_A }).update({ name: "Renamed Rims" });
+    try {
+      await action(q.token, "accept");
+      const { url } = await (await action(q.token, "pay")).json();
+      const page = await (await fetch(url)).text();
+      expect(page).toContain("at Shop A");
+      expect(page).not.toContain("Renamed Rims");
+      const paid = await fetch(url, { method: "POST", body: new URLSearchParams({ card: "4242 4242 4242 4242", exp: "12/30", cvc: "123" }), redirect: "manual" });
+      expect(paid.status).toBe(303);
+      const row = await quoteRow(q.id);
+      expect(row.status).toBe("deposit_paid");
+      const view = await publicQuoteView(db, q.token);
+      // 4307.82 − 1076.96 = 3230.86 (the quote of shop-quotes.test.ts; deposit 25 % half a cent up).
+      expect(view!.document.totals).toMatchObject({ totalCents: 430782, depositCents: 107696, balanceCents: 323086 });
+      expect(view!.document.shop.name).toBe("Shop A");
+    } finally {
+      await db("shops").where({ id: SHOP_A }).update({ name: "Shop A" });
+    }
   });
 
   it("the fake refuses a wrong API key as the provider would", async () => {

@@ -76,6 +76,17 @@ describe("fitment candidates", () => {
     expect(five.picks).toEqual([]);
   });
 
+  it("leave out wheels whose centre bore is smaller than the hub, and ask for rings where it is larger", async () => {
+    as(U.staffA);
+    // Both 6-lug template wheels have a 108 mm bore: too small for a 110 mm hub, larger than a 106.1 mm one.
+    const big = await (await candidates(req("POST", "/api/shop/fitment/candidates", { ...VEHICLE, hubBoreMm: 110 }), ctx())).json();
+    expect(big.wheelsFitting).toBe(0);
+    expect(big.picks).toEqual([]);
+    const small = await (await candidates(req("POST", "/api/shop/fitment/candidates", { ...VEHICLE, hubBoreMm: "106.1" }), ctx())).json();
+    expect(small.picks).toHaveLength(2);
+    expect(small.picks[0].summary.modifications.join(" ")).toMatch(/hub-centric rings \(108 mm outside, 106\.1 mm inside\)/);
+  });
+
   it("refuse an unreadable size with the engine's message on the field", async () => {
     as(U.staffA);
     const res = await candidates(req("POST", "/api/shop/fitment/candidates", { ...VEHICLE, tireSize: "big ones" }), ctx());
@@ -213,5 +224,221 @@ describe("sending", () => {
     const res = await send(req("POST", `/api/shop/quotes/${id}/send`, {}), ctx({ id }));
     expect(res.status).toBe(422);
     expect((await db("quotes").where({ id }).first()).status).toBe("draft");
+  });
+});
+
+/* ---- every figure right: fractional hours, any catalog item, the wheel on the hub, balance, frozen documents ---- */
+
+const { publicQuoteView } = await import("@/lib/server/quoteSend");
+const money = (c: number) => "$" + (c / 100).toLocaleString("en-US", { minimumFractionDigits: 2 });
+/** Zod's own wording, which must never reach a person. */
+const RAW = /Invalid input|expected \w+, received|Too (big|small)|Invalid (UUID|option|string|number)|Required$/;
+
+async function draftFor(vehicle: object = VEHICLE, wheelSku = "WH-EXAMPLE-17") {
+  as(U.staffA);
+  const tire = await item(db, SHOP_A, "TR-EXAMPLE-35");
+  const wheel = await item(db, SHOP_A, wheelSku);
+  const res = await quotes.POST(req("POST", "/api/shop/quotes", { customerId, vehicle, tireItemId: tire.id, wheelItemId: wheel.id, quantity: 4 }), ctx());
+  return { res, id: res.status === 201 ? ((await res.json()).id as string) : "" };
+}
+const put = (id: string, lines: object[], discountCents = 0, extra: object = {}) =>
+  quoteById.PUT(req("PUT", `/api/shop/quotes/${id}`, { lines, discountCents, notes: "", ...extra }), ctx({ id }));
+const detailOf = async (id: string) => (await quoteById.GET(req("GET", `/api/shop/quotes/${id}`), ctx({ id }))).json();
+
+describe("labour in fractional hours", () => {
+  it("1.5 h of a per-hour service at 145.00 is 217.50 exactly, stored and shown as hours", async () => {
+    const { id } = await draftFor();
+    const trim = await item(db, SHOP_A, "SV-FT"); // fender trimming, per hour, 145.00
+    const res = await put(id, [{ kind: "service", catalogItemId: trim.id, sku: trim.sku, description: trim.description, quantity: 1.5, unitPriceCents: 14500, discountCents: 0, taxable: false }]);
+    expect(res.status).toBe(200);
+    const d = await res.json();
+    // Arithmetic: 1.5 × 145.00 = 217.50 (no rounding involved).
+    expect(d.lines[0]).toMatchObject({ quantity: 1.5, unit: "hour", line_total_cents: 21750 });
+    expect(d.quote).toMatchObject({ subtotal_cents: 21750, tax_cents: 0, total_cents: 21750 });
+    // Deposit 25 % of 217.50 = 54.375 → 54.38 (half a cent up); balance 217.50 − 54.38 = 163.12.
+    expect(d.quote.deposit_cents).toBe(5438);
+    const pdf = await pdfText(Buffer.from(await (await pdfRoute(req("GET", `/api/shop/quotes/${id}/pdf`), ctx({ id }))).arrayBuffer()));
+    expect(pdf).toContain("1.5 h");
+    expect(pdf).toContain("$217.50");
+  });
+
+  it("reads 1 1/2, 1½ and 1:30 as 1.5 h; refuses what is not exact in hundredths, and whole-item lines in fractions", async () => {
+    const { id } = await draftFor();
+    const trim = await item(db, SHOP_A, "SV-FT");
+    const line = (quantity: unknown) => ({ kind: "service", catalogItemId: trim.id, sku: trim.sku, description: trim.description, quantity, unitPriceCents: 14500, discountCents: 0, taxable: false });
+    for (const q of ["1 1/2", "1½", "1:30", "1.5 h"]) {
+      const res = await put(id, [line(q)]);
+      expect(res.status, q).toBe(200);
+      expect((await res.json()).lines[0].line_total_cents, q).toBe(21750);
+    }
+    // 1:20 is 1.333… h: not exact to the hundredth of an hour, so it is refused rather than rounded.
+    const third = await put(id, [line("1:20")]);
+    expect(third.status).toBe(422);
+    const msg = (await third.json()).fieldErrors["lines.0.quantity"][0] as string;
+    expect(msg).toMatch(/1\.33/);
+    // A tire is counted in whole tires.
+    const tire = await item(db, SHOP_A, "TR-EXAMPLE-35");
+    const half = await put(id, [{ kind: "tire", catalogItemId: tire.id, sku: tire.sku, description: tire.description, quantity: 1.5, unitPriceCents: 38900, discountCents: 0, taxable: true }]);
+    expect(half.status).toBe(422);
+    expect((await half.json()).fieldErrors["lines.0.quantity"][0]).toMatch(/whole/);
+    // A custom labour line in hours.
+    const labour = await put(id, [{ kind: "custom", unit: "hour", sku: "", description: "Labour", quantity: 0.25, unitPriceCents: 12500, discountCents: 0, taxable: false }]);
+    expect(labour.status).toBe(200);
+    // 0.25 × 125.00 = 31.25
+    expect((await labour.json()).lines[0]).toMatchObject({ quantity: 0.25, unit: "hour", line_total_cents: 3125 });
+  });
+});
+
+describe("any catalog item on a quote", () => {
+  it("takes a TPMS service and the catalog's own kind and unit, whatever the request says", async () => {
+    const [tpms] = await db("catalog_items")
+      .insert({ shop_id: SHOP_A, kind: "service", sku: "SV-TPMS-T", description: "TPMS sensor service", price_cents: 1800, service_type: "tpms", service_unit: "per_wheel" })
+      .returning("*");
+    const { id } = await draftFor();
+    const d0 = await detailOf(id);
+    const keep = d0.lines.map((l: Record<string, unknown>) => ({ kind: l.kind, unit: l.unit, catalogItemId: l.catalog_item_id, sku: l.sku, description: l.description, quantity: l.quantity, unitPriceCents: l.unit_price_cents, discountCents: l.discount_cents, taxable: l.taxable }));
+    const res = await put(id, [...keep, { kind: "custom", catalogItemId: tpms.id, sku: "", description: "TPMS sensor service", quantity: 4, unitPriceCents: 1800, discountCents: 0, taxable: false }]);
+    expect(res.status).toBe(200);
+    const last = (await res.json()).lines.at(-1);
+    expect(last).toMatchObject({ kind: "service", sku: "SV-TPMS-T", quantity: 4, line_total_cents: 7200 });
+  });
+});
+
+describe("the wheel on the vehicle's hub", () => {
+  it("refuses a wheel whose centre bore is smaller than the hub (106.1 mm bore on a 108 mm hub)", async () => {
+    await db("catalog_items").insert({ shop_id: SHOP_A, kind: "wheel", sku: "WH-T-1061", description: "Test 17x9 106.1 mm bore", price_cents: 28900, wheel_diameter_in: 17, wheel_width_in: 9, wheel_offset_mm: 0, bolt_pattern: "6x139.7", center_bore_mm: 106.1 });
+    const { res } = await draftFor({ ...VEHICLE, hubBoreMm: 108 }, "WH-T-1061");
+    expect(res.status).toBe(422);
+    const body = await res.json();
+    expect(body.fieldErrors.wheelItemId[0]).toMatch(/106\.1 mm.*108 mm/);
+    expect(JSON.stringify(body)).not.toMatch(RAW);
+  });
+
+  it("takes a larger bore but says hub-centric rings are needed, with their sizes", async () => {
+    await db("catalog_items").insert({ shop_id: SHOP_A, kind: "wheel", sku: "WH-T-110", description: "Test 17x9 110 mm bore", price_cents: 25900, wheel_diameter_in: 17, wheel_width_in: 9, wheel_offset_mm: 0, bolt_pattern: "6x5.5", center_bore_mm: 110.1 });
+    const { res, id } = await draftFor({ ...VEHICLE, hubBoreMm: 108 }, "WH-T-110");
+    expect(res.status).toBe(201);
+    const d = await detailOf(id);
+    expect(d.quote.hub_bore_mm).toBe(108);
+    const rings = d.hubChecks.flatMap((c: { findings: { code: string; message: string }[] }) => c.findings).find((f: { code: string }) => f.code === "needs-rings");
+    expect(rings.message).toMatch(/hub-centric rings/i);
+    expect(rings.message).toMatch(/110\.1 mm.*108 mm/);
+    const pdf = await pdfText(Buffer.from(await (await pdfRoute(req("GET", `/api/shop/quotes/${id}/pdf`), ctx({ id }))).arrayBuffer()));
+    expect(pdf).toMatch(/hub-centric rings/i);
+  });
+
+  it("refuses a wheel line of another bolt pattern, and takes 6x139.7 on a 6x5.5 vehicle (6 × 5.5 in × 25.4 = 139.7 mm, NIST SP 811)", async () => {
+    const [eight] = await db("catalog_items")
+      .insert({ shop_id: SHOP_A, kind: "wheel", sku: "WH-T-8L", description: "Test 8-lug", price_cents: 30000, wheel_diameter_in: 17, wheel_width_in: 9, wheel_offset_mm: 0, bolt_pattern: "8x6.5", center_bore_mm: 125 })
+      .returning("*");
+    const metric = await item(db, SHOP_A, "WH-EXAMPLE-BL"); // 6x139.7, 108 mm
+    const { id } = await draftFor({ ...VEHICLE, hubBoreMm: 108 });
+    const wheelLine = (w: { id: string; sku: string; description: string; price_cents: number }) => ({ kind: "wheel", catalogItemId: w.id, sku: w.sku, description: w.description, quantity: 4, unitPriceCents: w.price_cents, discountCents: 0, taxable: true });
+    const labour = { kind: "custom", sku: "", description: "Labour", quantity: 1, unitPriceCents: 100, discountCents: 0, taxable: false };
+    const bad = await put(id, [labour, labour, wheelLine(eight)]);
+    expect(bad.status).toBe(422);
+    const fe = (await bad.json()).fieldErrors;
+    expect(fe["lines.2.catalogItemId"][0]).toMatch(/8x6\.5.*6x5\.5/);
+    const ok = await put(id, [wheelLine(metric)]);
+    expect(ok.status).toBe(200);
+    const checks = (await ok.json()).hubChecks;
+    expect(checks[0].findings.map((f: { level: string }) => f.level)).not.toContain("refuse");
+  });
+});
+
+describe("balance due after the deposit", () => {
+  it("is on the PDF, the e-mail and the customer's page: total − deposit", async () => {
+    const { id } = await draftFor();
+    sent.length = 0;
+    const d = await (await send(req("POST", `/api/shop/quotes/${id}/send`, {}), ctx({ id }))).json();
+    const balance = d.quote.total_cents - d.quote.deposit_cents;
+    expect(balance).toBeGreaterThan(0);
+    expect(sent[0]!.text).toMatch(new RegExp(`balance.*\\${money(balance)}`, "i"));
+    const pdf = await pdfText(sent[0]!.attachments![0]!.content);
+    expect(pdf).toMatch(new RegExp(`Balance due after the deposit\\s*\\${money(balance)}`));
+    const token = /\/q\/([A-Za-z0-9_-]{43})/.exec(sent[0]!.text)![1]!;
+    const view = await publicQuoteView(db, token);
+    expect(view!.document.totals.balanceCents).toBe(balance);
+  });
+});
+
+describe("a sent quote is a frozen document", () => {
+  it("keeps the shop's name, address, phone and its lines as sent, though the shop renames itself later", async () => {
+    const { id } = await draftFor();
+    sent.length = 0;
+    await send(req("POST", `/api/shop/quotes/${id}/send`, {}), ctx({ id }));
+    const token = /\/q\/([A-Za-z0-9_-]{43})/.exec(sent[0]!.text)![1]!;
+    await db("shops").where({ id: SHOP_A }).update({ name: "Renamed Rims", address: "9 New Road", phone: "555-0999" });
+    try {
+      const pdf = await pdfText(Buffer.from(await (await pdfRoute(req("GET", `/api/shop/quotes/${id}/pdf`), ctx({ id }))).arrayBuffer()));
+      expect(pdf).toContain("Shop A");
+      expect(pdf).toContain("1 Test Lane");
+      expect(pdf).not.toContain("Renamed Rims");
+      const view = await publicQuoteView(db, token);
+      expect(view!.document.shop).toEqual({ name: "Shop A", address: "1 Test Lane", phone: "555-0100" });
+      // A catalog price change does not reach the sent lines either.
+      await db("catalog_items").where({ shop_id: SHOP_A, sku: "TR-EXAMPLE-35" }).update({ description: "Renamed tire" });
+      expect((await publicQuoteView(db, token))!.document.lines[0]!.description).not.toBe("Renamed tire");
+      // Back to draft the live shop is shown again; sending again freezes the new one.
+      await status(req("POST", `/api/shop/quotes/${id}/status`, { to: "draft" }), ctx({ id }));
+      sent.length = 0;
+      await send(req("POST", `/api/shop/quotes/${id}/send`, {}), ctx({ id }));
+      expect(await pdfText(sent[0]!.attachments![0]!.content)).toContain("Renamed Rims");
+      expect(await db("quote_documents").where({ quote_id: id })).toHaveLength(2);
+    } finally {
+      await db("shops").where({ id: SHOP_A }).update({ name: "Shop A", address: "1 Test Lane", phone: "555-0100" });
+      await db("catalog_items").where({ shop_id: SHOP_A, sku: "TR-EXAMPLE-35" }).update({ description: "Example all-terrain 35x12.50R17LT load range E" });
+    }
+  });
+});
+
+describe("sending what the screen shows", () => {
+  it("refuses to send when the quote changed after the version the sender saw (409, nothing sent)", async () => {
+    const { id } = await draftFor();
+    const seen = (await detailOf(id)).quote.updated_at;
+    await put(id, [{ kind: "custom", sku: "", description: "Changed in another tab", quantity: 1, unitPriceCents: 100, discountCents: 0, taxable: false }]);
+    sent.length = 0;
+    const res = await send(req("POST", `/api/shop/quotes/${id}/send`, { seenUpdatedAt: seen }), ctx({ id }));
+    expect(res.status).toBe(409);
+    expect((await res.json()).error).toMatch(/changed/i);
+    expect(sent).toHaveLength(0);
+    expect((await db("quotes").where({ id }).first()).status).toBe("draft");
+    const now = (await detailOf(id)).quote.updated_at;
+    expect((await send(req("POST", `/api/shop/quotes/${id}/send`, { seenUpdatedAt: now }), ctx({ id }))).status).toBe(200);
+  });
+});
+
+describe("messages a person reads", () => {
+  it("never carry zod's raw wording, and name totals problems by the line's own field", async () => {
+    const { id } = await draftFor();
+    const good = { kind: "custom", sku: "", description: "Labour", quantity: 1, unitPriceCents: 1000, discountCents: 0, taxable: false };
+    const bodies: object[] = [
+      { lines: [{ ...good, catalogItemId: 42 }], discountCents: 0, notes: "" },
+      { lines: [{ ...good, catalogItemId: "not-a-uuid" }], discountCents: 0, notes: "" },
+      { lines: [{ ...good, taxable: "yes" }], discountCents: 0, notes: "" },
+      { lines: [{ ...good, kind: "gadget" }], discountCents: 0, notes: "" },
+      { lines: [{ ...good, unitPriceCents: "12.50" }], discountCents: "x", notes: 5 },
+      { lines: [{ ...good, discountCents: null }], discountCents: 0 },
+      { lines: "none", discountCents: 0 },
+      { lines: [] },
+    ];
+    for (const b of bodies) {
+      const res = await quoteById.PUT(req("PUT", `/api/shop/quotes/${id}`, b), ctx({ id }));
+      expect(res.status, JSON.stringify(b)).toBe(422);
+      const out = await res.json();
+      for (const [k, v] of Object.entries(out.fieldErrors as Record<string, string[]>)) expect(v.join(" "), `${k} of ${JSON.stringify(b)}`).not.toMatch(RAW);
+    }
+    // An empty catalog pick ("", as a cleared select sends it) is no catalog item, not a type error.
+    expect((await put(id, [{ ...good, catalogItemId: "" }])).status).toBe(200);
+    const over = await put(id, [{ ...good, discountCents: 5000 }]);
+    expect(over.status).toBe(422);
+    expect(Object.keys((await over.json()).fieldErrors)).toEqual(["lines.0.discountCents"]);
+    for (const b of [{ to: "gone" }, {}]) {
+      const res = await status(req("POST", `/api/shop/quotes/${id}/status`, b), ctx({ id }));
+      expect(JSON.stringify(await res.json())).not.toMatch(RAW);
+    }
+    const create = await quotes.POST(req("POST", "/api/shop/quotes", { customerId, vehicleId: "x", saveVehicle: "yes", tireItemId: "", wheelItemId: 3, quantity: 4 }), ctx());
+    expect(create.status).toBe(422);
+    expect(JSON.stringify(await create.json())).not.toMatch(RAW);
   });
 });

@@ -20,7 +20,7 @@ describe("services suggested from the pick", () => {
     // 315/70R17 vs 265/70R17: +70 mm diameter (ISO 4000-1: D = d + 2H) — past the 25.4 mm alignment rule (common practice, no source).
     const fit = summarize(current, "315/70R17", { diameterIn: 17, widthIn: 9, offsetMm: -12, beadlock: true });
     const lines = suggestedServiceLines(all, wheel(true), 5, fit, 14500);
-    expect(lines.map((l) => `${l.sku || l.description}×${l.quantity}`)).toEqual(["MB×5", "BL×5", "VS×5", "AL×1", "Fender trimming labour (1 hour)×1", "DP×5"]);
+    expect(lines.map((l) => `${l.sku || l.description}×${l.quantity}`)).toEqual(["MB×5", "BL×5", "VS×5", "AL×1", "Fender trimming labour×1", "DP×5"]);
     expect(lines.find((l) => l.kind === "custom")?.unit_price_cents).toBe(14500);
   });
 });

@@ -4,7 +4,7 @@ import { HttpError, notFound } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
 import { appOrigin } from "@/lib/mail";
 import { createDepositSession } from "@/lib/payments/provider";
-import { expireDue, findByToken, transition } from "@/lib/server/quotes";
+import { expireDue, findByToken, latestSentDocument, transition } from "@/lib/server/quotes";
 import { publicQuoteActionSchema } from "@/lib/validation/quotes";
 
 const params = z.object({ token: z.string().regex(/^[A-Za-z0-9_-]{43}$/) });
@@ -25,7 +25,9 @@ export const POST = route({ access: "public", params, body: publicQuoteActionSch
   if (!quote) throw notFound("That quote");
   if (quote.status !== "accepted") throw new HttpError(409, "Accept the quote before paying the deposit.");
   if (quote.deposit_cents <= 0) throw new HttpError(409, "This quote asks no deposit.");
-  const [shop, cust] = await Promise.all([
+  // The shop's name as on the quote the customer received, even if the shop renamed itself since.
+  const [sent, shop, cust] = await Promise.all([
+    latestSentDocument(db, quote.id),
     db("shops").where({ id: quote.shop_id }).first("name"),
     db("customers").where({ id: quote.customer_id, shop_id: quote.shop_id }).first("email"),
   ]);
@@ -34,7 +36,7 @@ export const POST = route({ access: "public", params, body: publicQuoteActionSch
     quoteId: quote.id,
     shopId: quote.shop_id,
     quoteNumber: quote.number,
-    shopName: shop.name,
+    shopName: sent?.shop.name ?? shop.name,
     amountCents: quote.deposit_cents,
     customerEmail: cust?.email ?? "",
     successUrl: `${link}?paid=1`,

@@ -13,11 +13,12 @@ import { ApiError, api, applyFieldErrors } from "@/lib/client/api";
 import type { CatalogItemRow, CustomerRow, CustomerVehicleRow } from "@/lib/db/types";
 import { mmToIn } from "@/lib/fitment";
 import type { FitmentSummary } from "@/lib/quotes/fitment";
+import { describeFieldErrors } from "@/lib/quotes/fieldLabels";
 import { formatUsd } from "@/lib/quotes/money";
 import { type CustomerInput, type Vehicle, type VehicleInput, customerSchema, vehicleSchema } from "@/lib/validation/quotes";
 
 type Customer = Omit<CustomerRow, "created_at" | "updated_at">;
-type Item = Pick<CatalogItemRow, "id" | "sku" | "description" | "price_cents" | "qty_on_hand" | "tire_size" | "wheel_diameter_in" | "wheel_width_in" | "wheel_offset_mm" | "bolt_pattern" | "beadlock">;
+type Item = Pick<CatalogItemRow, "id" | "sku" | "description" | "price_cents" | "qty_on_hand" | "tire_size" | "wheel_diameter_in" | "wheel_width_in" | "wheel_offset_mm" | "bolt_pattern" | "center_bore_mm" | "beadlock">;
 interface Candidate {
   tireId: string;
   wheelId: string;
@@ -59,7 +60,8 @@ export function QuoteBuilder() {
       });
     },
     onSuccess: (r) => router.push(`/shop/quotes/${r.id}`),
-    onError: (e) => setFailure((e as Error).message),
+    // The server's field errors in the screen's words ("Wheel: …"), never its request paths.
+    onError: (e) => setFailure(e instanceof ApiError ? (describeFieldErrors(e.body.fieldErrors).join(" ") || e.message) : (e as Error).message),
   });
 
   return (
@@ -103,7 +105,7 @@ export function QuoteBuilder() {
                           <span>
                             <span className="font-medium">{p.wheel.description}</span>
                             <span className="block text-basalt-600">
-                              {s.planned.wheel} · {p.wheel.bolt_pattern} · {formatUsd(p.wheel.price_cents)} · {p.wheel.qty_on_hand ?? 0} on hand {p.wheel.beadlock && <Badge tone="ember">beadlock</Badge>}
+                              {s.planned.wheel} · {p.wheel.bolt_pattern}{p.wheel.center_bore_mm ? ` · bore ${p.wheel.center_bore_mm} mm` : ""} · {formatUsd(p.wheel.price_cents)} · {p.wheel.qty_on_hand ?? 0} on hand {p.wheel.beadlock && <Badge tone="ember">beadlock</Badge>}
                             </span>
                           </span>
                           <span className="text-basalt-800">
@@ -189,7 +191,7 @@ function CustomerStep({ customer, onPick }: { customer: Customer | null; onPick:
           setSubmitted(search.trim());
         }}
       >
-        <TextField className="w-80" label="Phone, e-mail or name" name="customer-search" type="search" value={search} onChange={(e) => setSearch(e.target.value)} />
+        <TextField className="w-full sm:w-80" label="Phone, e-mail or name" name="customer-search" type="search" value={search} onChange={(e) => setSearch(e.target.value)} />
         <Button type="submit" variant="secondary" className="mb-5">Find</Button>
         <Button type="button" variant="ghost" className="mb-5" onClick={() => setAdding((a) => !a)}>New customer</Button>
       </form>
@@ -235,7 +237,7 @@ function VehicleStep(props: {
   });
   const { register, handleSubmit, setError, formState, control, reset } = useForm<VehicleInput, unknown, Vehicle>({
     resolver: zodResolver(vehicleSchema),
-    defaultValues: { description: "", boltPattern: "", tireSize: "", wheelDiameterIn: "", wheelWidthIn: "", offsetMode: "offset", offsetMm: "", backspacingIn: "", backspacingFrom: "bead-seat", axleRatio: "" } as unknown as VehicleInput,
+    defaultValues: { description: "", boltPattern: "", hubBoreMm: "", tireSize: "", wheelDiameterIn: "", wheelWidthIn: "", offsetMode: "offset", offsetMm: "", backspacingIn: "", backspacingFrom: "bead-seat", axleRatio: "" } as unknown as VehicleInput,
   });
   const mode = useWatch({ control, name: "offsetMode" });
   const [failure, setFailure] = useState<string | null>(null);
@@ -245,13 +247,14 @@ function VehicleStep(props: {
     try {
       props.onCandidates(v, await api<Candidates>("/api/shop/fitment/candidates", { body: v }));
     } catch (err) {
-      setFailure(applyFieldErrors(err, setError, ["description", "boltPattern", "tireSize", "wheelDiameterIn", "wheelWidthIn", "offsetMm", "backspacingIn", "backspacingFrom", "axleRatio"]));
+      setFailure(applyFieldErrors(err, setError, ["description", "boltPattern", "hubBoreMm", "tireSize", "wheelDiameterIn", "wheelWidthIn", "offsetMm", "backspacingIn", "backspacingFrom", "axleRatio"]));
     }
   });
   const applySaved = (v: CustomerVehicleRow) => {
     reset({
       description: v.description,
       boltPattern: v.bolt_pattern,
+      hubBoreMm: v.hub_bore_mm === null ? "" : String(v.hub_bore_mm),
       tireSize: v.tire_size,
       wheelDiameterIn: String(v.wheel_diameter_in),
       wheelWidthIn: String(v.wheel_width_in),
@@ -281,6 +284,7 @@ function VehicleStep(props: {
         <div aria-live="assertive" className="sm:col-span-3">{failure && <Alert tone="error">{failure}</Alert>}</div>
         <TextField label="Vehicle" hint="e.g. 2016 half-ton pickup" {...register("description")} error={e.description?.message} />
         <TextField label="Bolt pattern" hint="e.g. 6x5.5 or 6x139.7" {...register("boltPattern")} error={e.boltPattern?.message} />
+        <TextField label="Hub bore (mm)" inputMode="decimal" hint="Optional; each wheel's centre bore is checked against it" {...register("hubBoreMm")} error={e.hubBoreMm?.message} />
         <TextField label="Current tire size" hint="e.g. 265/70R17" {...register("tireSize")} error={e.tireSize?.message} />
         <TextField label="Wheel diameter (in)" inputMode="decimal" {...register("wheelDiameterIn")} error={e.wheelDiameterIn?.message} />
         <TextField label="Wheel width (in)" inputMode="decimal" {...register("wheelWidthIn")} error={e.wheelWidthIn?.message} />

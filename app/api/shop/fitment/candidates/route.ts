@@ -5,9 +5,9 @@ import { rankPicks } from "@/lib/quotes/fitment";
 import { SHOP_ANY, shopIdOf } from "@/lib/server/shops";
 import { resolveVehicle, vehicleSchema } from "@/lib/validation/quotes";
 
-const ITEM_COLUMNS = ["id", "sku", "description", "price_cents", "qty_on_hand", "tire_size", "wheel_diameter_in", "wheel_width_in", "wheel_offset_mm", "bolt_pattern", "beadlock"] as const;
+const ITEM_COLUMNS = ["id", "sku", "description", "price_cents", "qty_on_hand", "tire_size", "wheel_diameter_in", "wheel_width_in", "wheel_offset_mm", "bolt_pattern", "center_bore_mm", "beadlock"] as const;
 
-/** The catalog's tire × wheel pairs that mount on this vehicle, ranked by the engine's comparison. */
+/** The catalog's tire × wheel pairs that mount on this vehicle (drilling and hub bore), ranked by the engine's comparison. */
 export const POST = route({ access: SHOP_ANY, body: vehicleSchema }, async ({ caller, body }) => {
   const shopId = shopIdOf(caller);
   const v = resolveVehicle(body);
@@ -15,9 +15,9 @@ export const POST = route({ access: SHOP_ANY, body: vehicleSchema }, async ({ ca
   const diameters = [...new Set(wheels.map((w) => w.wheel_diameter_in!))];
   const tires = (await db<CatalogItemRow>("catalog_items").where({ shop_id: shopId, kind: "tire" }).whereIn("tire_rim_in", diameters).select(ITEM_COLUMNS)) as CatalogItemRow[];
   const ranked = rankPicks(
-    { boltPattern: v.boltPattern, tireSize: v.tireSize, wheel: v.wheel, axleRatio: v.axleRatio },
+    { boltPattern: v.boltPattern, tireSize: v.tireSize, wheel: v.wheel, axleRatio: v.axleRatio, hubBoreMm: v.hubBoreMm },
     tires.map((t) => ({ id: t.id, size: t.tire_size! })),
-    wheels.map((w) => ({ id: w.id, diameterIn: w.wheel_diameter_in!, widthIn: w.wheel_width_in!, offsetMm: w.wheel_offset_mm!, boltPattern: w.bolt_pattern!, beadlock: w.beadlock })),
+    wheels.map((w) => ({ id: w.id, diameterIn: w.wheel_diameter_in!, widthIn: w.wheel_width_in!, offsetMm: w.wheel_offset_mm!, boltPattern: w.bolt_pattern!, beadlock: w.beadlock, centerBoreMm: w.center_bore_mm })),
     40,
   );
   const byId = new Map([...tires, ...wheels].map((i) => [i.id, i]));

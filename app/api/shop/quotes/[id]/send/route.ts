@@ -4,8 +4,12 @@ import { route } from "@/lib/http/route";
 import { quoteScopeOf } from "@/lib/server/quotes";
 import { sendQuote } from "@/lib/server/quoteSend";
 import { SHOP_ANY } from "@/lib/server/shops";
+import { sendQuoteSchema } from "@/lib/validation/quotes";
 
-/** Sends (or sends again) the quote: a new public link, the PDF attached, e-mailed to the customer. */
-export const POST = route({ access: SHOP_ANY, params: z.object({ id: z.uuid() }) }, async ({ caller, params }) => {
-  return sendQuote(db, quoteScopeOf(caller), params.id, { userId: caller.userId, label: caller.name || caller.email });
+/**
+ * Sends (or sends again) the quote: a new public link, the PDF attached, e-mailed to the
+ * customer. With `seenUpdatedAt` a quote changed since the sender loaded it is refused (409).
+ */
+export const POST = route({ access: SHOP_ANY, params: z.object({ id: z.uuid() }), body: sendQuoteSchema }, async ({ caller, params, body }) => {
+  return sendQuote(db, quoteScopeOf(caller), params.id, { userId: caller.userId, label: caller.name || caller.email }, body.seenUpdatedAt);
 });

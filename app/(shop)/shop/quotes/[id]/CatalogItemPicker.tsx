@@ -1,0 +1,87 @@
+"use client";
+import { useQuery } from "@tanstack/react-query";
+import { useState } from "react";
+import { Alert } from "@/components/ui/Alert";
+import { Button } from "@/components/ui/Button";
+import { api } from "@/lib/client/api";
+import type { CatalogItemRow, CatalogKind } from "@/lib/db/types";
+import { checkWheelOnHub, hubRefusal } from "@/lib/quotes/hubFit";
+import { formatUsd } from "@/lib/quotes/money";
+
+type Item = Omit<CatalogItemRow, "created_at" | "updated_at">;
+
+/**
+ * Finds any item of the shop's catalog (tires, wheels, every service) and adds it as a line.
+ * A wheel is checked against the quoted vehicle's hub first: one that does not go on says why
+ * and cannot be added; one that needs rings says so.
+ */
+export function CatalogItemPicker({ vehicle, onAdd }: { vehicle: { boltPattern: string; hubBoreMm: number | null }; onAdd: (item: Item) => void }) {
+  const [text, setText] = useState("");
+  const [kind, setKind] = useState<"" | CatalogKind>("");
+  const [asked, setAsked] = useState<{ q: string; kind: string } | null>(null);
+  const found = useQuery({
+    queryKey: ["quote-catalog-pick", asked],
+    queryFn: () => api<{ items: Item[]; total: number }>(`/api/shop/catalog?${new URLSearchParams({ q: asked!.q, kind: asked!.kind, pageSize: "10" })}`),
+    enabled: asked !== null,
+  });
+  return (
+    <div className="mt-4 border-t border-basalt-100 pt-3">
+      <form
+        className="flex flex-wrap items-end gap-2"
+        role="search"
+        aria-label="Add from the catalog"
+        onSubmit={(e) => {
+          e.preventDefault();
+          setAsked({ q: text.trim(), kind });
+        }}
+      >
+        <label className="flex min-w-48 flex-1 flex-col gap-1 text-sm font-medium">
+          Add from the catalog
+          <input type="search" className="rounded-lg border border-basalt-300 px-3 py-2" placeholder="SKU, description, size or bolt pattern" value={text} onChange={(e) => setText(e.target.value)} />
+        </label>
+        <label className="flex flex-col gap-1 text-sm font-medium">
+          Kind
+          <select className="min-h-10 rounded-lg border border-basalt-300 px-3" value={kind} onChange={(e) => setKind(e.target.value as "" | CatalogKind)}>
+            <option value="">All</option>
+            <option value="tire">Tires</option>
+            <option value="wheel">Wheels</option>
+            <option value="service">Services</option>
+          </select>
+        </label>
+        <Button type="submit" variant="secondary" pending={found.isFetching}>Find</Button>
+      </form>
+      <div aria-live="polite">
+        {found.isError && <Alert tone="error" className="mt-2">{(found.error as Error).message}</Alert>}
+        {found.data && found.data.items.length === 0 && <p className="mt-2 text-sm text-basalt-600">Nothing in the catalog matches.</p>}
+      </div>
+      {found.data && found.data.items.length > 0 && (
+        <ul className="mt-2 divide-y divide-basalt-100 text-sm" aria-label="Catalog items found">
+          {found.data.items.map((it) => {
+            const hub = it.kind === "wheel" ? checkWheelOnHub(vehicle, { boltPattern: it.bolt_pattern, centerBoreMm: it.center_bore_mm }) : [];
+            const refusal = hubRefusal(hub);
+            const rings = hub.find((f) => f.code === "needs-rings");
+            return (
+              <li key={it.id} className="flex flex-wrap items-center justify-between gap-2 py-2" data-testid="catalog-pick">
+                <span className="min-w-0 flex-1">
+                  <span className="font-medium">{it.description}</span>
+                  <span className="block text-basalt-600">
+                    {it.sku} · {formatUsd(it.price_cents)}
+                    {it.kind === "wheel" && ` · ${it.bolt_pattern}${it.center_bore_mm ? ` · bore ${it.center_bore_mm} mm` : ""}`}
+                    {it.service_unit === "per_hour" && " · per hour"}
+                  </span>
+                  {refusal && <span className="block text-contact-800">Does not fit: {refusal}</span>}
+                  {rings && <span className="block text-tight-800">Check: {rings.message}</span>}
+                </span>
+                {!refusal && (
+                  <Button variant="secondary" className="min-h-8 py-1" aria-label={`Add ${it.description}`} onClick={() => onAdd(it)}>
+                    Add
+                  </Button>
+                )}
+              </li>
+            );
+          })}
+        </ul>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,162 @@
+// @vitest-environment jsdom
+import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
+import { cleanup, render, screen, waitFor, within } from "@testing-library/react";
+import userEvent from "@testing-library/user-event";
+import type { ReactNode } from "react";
+import { afterEach, describe, expect, it, vi } from "vitest";
+import { summarize } from "@/lib/quotes/fitment";
+import { QuoteEditor } from "./QuoteEditor";
+import type { Detail } from "./types";
+
+vi.mock("next/link", () => ({ default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => <a href={href} {...rest}>{children}</a> }));
+afterEach(() => {
+  cleanup();
+  vi.unstubAllGlobals();
+  vi.restoreAllMocks();
+});
+
+const ID = "d0000000-0000-4000-8000-0000000000aa";
+const fit = summarize({ boltPattern: "6x5.5", tireSize: "265/70R17", wheel: { diameterIn: 17, widthIn: 8, offsetMm: 25 } }, "35x12.50R17LT", { diameterIn: 17, widthIn: 9, offsetMm: -12, beadlock: false });
+const line = (n: number, over: Partial<Detail["lines"][number]> = {}): Detail["lines"][number] => ({
+  id: `l000000${n}-0000-4000-8000-000000000000`, quote_id: ID, position: n, kind: "custom", unit: "each", catalog_item_id: null, sku: "", description: `Line ${n}`,
+  quantity: 1, unit_price_cents: 1000, discount_cents: 0, taxable: false, line_total_cents: 1000, wheel_bolt_pattern: null, wheel_center_bore_mm: null, ...over,
+});
+function detail(over: Partial<Detail["quote"]> = {}, lines = [line(1), line(2, { unit: "hour", description: "Labour", unit_price_cents: 12500, line_total_cents: 12500 })]): Detail {
+  return {
+    quote: {
+      id: ID, shop_id: "s", number: 1042, customer_id: "c", vehicle_id: null, created_by: null, status: "draft", vehicle_description: "Test pickup", bolt_pattern: "6x5.5",
+      current_tire: "265/70R17", current_wheel_diameter_in: 17, current_wheel_width_in: 8, current_wheel_offset_mm: 25, axle_ratio: null, hub_bore_mm: 108, tire_item_id: null,
+      wheel_item_id: null, wheel_qty: 4, fitment: fit, discount_cents: 0, tax_rate_bp: 825, deposit_pct: 25, subtotal_cents: 13500, taxable_cents: 0, tax_cents: 0,
+      total_cents: 13500, deposit_cents: 3375, notes: "", public_token_hash: null, valid_until: null, created_at: "2026-12-01T10:00:00.000Z", updated_at: "2026-12-01T10:00:00.123Z", ...over,
+    },
+    lines,
+    events: [],
+    customer: { id: "c", name: "Dace Holloway", phone: "555-0132", email: "dace@example.test" },
+    createdByName: "Sam Staff",
+    hubChecks: [],
+  };
+}
+
+type Call = { url: string; method: string; body: unknown };
+function server(answers: (c: Call) => { status: number; body: unknown }) {
+  const calls: Call[] = [];
+  vi.stubGlobal(
+    "fetch",
+    vi.fn(async (url: string, init?: RequestInit) => {
+      const c = { url, method: init?.method ?? "GET", body: init?.body ? JSON.parse(String(init.body)) : undefined };
+      calls.push(c);
+      const a = answers(c);
+      return new Response(JSON.stringify(a.body), { status: a.status });
+    }),
+  );
+  return calls;
+}
+const renderEditor = (d = detail()) =>
+  render(
+    <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
+      <QuoteEditor initial={d} labourRateCents={12500} />
+    </QueryClientProvider>,
+  );
+
+describe("the quote editor's unsaved changes", () => {
+  it("says so while lines differ from the saved ones, and warns before leaving the page", async () => {
+    server(() => ({ status: 500, body: {} }));
+    const user = userEvent.setup();
+    renderEditor();
+    expect(screen.queryByTestId("unsaved")).toBeNull();
+    const description = screen.getByLabelText("Description of line 1");
+    await user.type(description, " changed");
+    expect(screen.getByTestId("unsaved").textContent).toBe("Unsaved changes");
+    // Leaving: the browser's prompt on unload, a confirm on in-app links.
+    const unload = new Event("beforeunload", { cancelable: true });
+    window.dispatchEvent(unload);
+    expect(unload.defaultPrevented).toBe(true);
+    const confirm = vi.spyOn(window, "confirm").mockReturnValue(false);
+    const click = new MouseEvent("click", { bubbles: true, cancelable: true, button: 0 });
+    screen.getByRole("link", { name: "All quotes" }).dispatchEvent(click);
+    expect(confirm).toHaveBeenCalledWith(expect.stringMatching(/not saved/));
+    expect(click.defaultPrevented).toBe(true);
+    // Typed back to what is saved: nothing unsaved, no prompt.
+    await user.clear(description);
+    await user.type(description, "Line 1");
+    expect(screen.queryByTestId("unsaved")).toBeNull();
+    const again = new Event("beforeunload", { cancelable: true });
+    window.dispatchEvent(again);
+    expect(again.defaultPrevented).toBe(false);
+  });
+
+  it("Send saves the pending edits first, then sends the version it saved", async () => {
+    const saved = detail({ updated_at: "2026-12-01T10:05:00.456Z", subtotal_cents: 15000 }, [line(1, { quantity: 2, line_total_cents: 2000 }), line(2, { unit: "hour", description: "Labour", quantity: 1.5, unit_price_cents: 12500, line_total_cents: 18750 })]);
+    const calls = server((c) => (c.method === "PUT" ? { status: 200, body: saved } : { status: 200, body: { ...saved, quote: { ...saved.quote, status: "sent" } } }));
+    const user = userEvent.setup();
+    renderEditor();
+    await user.clear(screen.getByLabelText("Quantity of line 2 (hours)"));
+    await user.type(screen.getByLabelText("Quantity of line 2 (hours)"), "1 1/2");
+    await user.click(screen.getByRole("button", { name: /send to customer/i }));
+    await screen.findByText(/Sent to dace@example.test/);
+    expect(calls.map((c) => `${c.method} ${c.url}`)).toEqual([`PUT /api/shop/quotes/${ID}`, `POST /api/shop/quotes/${ID}/send`]);
+    expect((calls[0]!.body as { lines: { quantity: number }[] }).lines[1]!.quantity).toBe(1.5);
+    expect(calls[1]!.body).toEqual({ seenUpdatedAt: "2026-12-01T10:05:00.456Z" });
+  });
+
+  it("does not send when the edits cannot be saved, and names the field as the screen does", async () => {
+    const calls = server((c) =>
+      c.method === "PUT" ? { status: 422, body: { error: "Some lines need attention.", fieldErrors: { "lines.1.discountCents": ["A line's discount cannot exceed the line's amount."] } } } : { status: 200, body: {} },
+    );
+    const user = userEvent.setup();
+    renderEditor();
+    // 1:20 is not exact in hundredths of an hour: refused in the browser, nothing sent at all.
+    await user.clear(screen.getByLabelText("Quantity of line 2 (hours)"));
+    await user.type(screen.getByLabelText("Quantity of line 2 (hours)"), "1:20");
+    await user.click(screen.getByRole("button", { name: /send to customer/i }));
+    const alert = await screen.findByRole("alert");
+    expect(alert.textContent).toMatch(/Not sent/);
+    expect(alert.textContent).toContain("Line 2 — quantity: 1:20 is 1.333… h");
+    expect(calls).toHaveLength(0);
+    // The server's refusal: "Line 2 — discount", never "lines.1.discountCents".
+    await user.clear(screen.getByLabelText("Quantity of line 2 (hours)"));
+    await user.type(screen.getByLabelText("Quantity of line 2 (hours)"), "1");
+    await user.clear(screen.getByLabelText("Discount of line 2"));
+    await user.type(screen.getByLabelText("Discount of line 2"), "500");
+    await user.click(screen.getByRole("button", { name: /send to customer/i }));
+    await waitFor(() => expect(screen.getByRole("alert").textContent).toContain("Line 2 — discount: A line's discount cannot exceed the line's amount."));
+    expect(screen.getByRole("alert").textContent).not.toMatch(/lines\.1|Cents/);
+    expect(calls.map((c) => c.method)).toEqual(["PUT"]);
+    expect(screen.getByTestId("unsaved")).toBeTruthy();
+  });
+});
+
+describe("the quote editor's catalog and figures", () => {
+  const tpms = { id: "a0000000-0000-4000-8000-0000000000f1", kind: "service", sku: "SV-TPMS", description: "TPMS sensor service", price_cents: 1800, service_type: "tpms", service_unit: "per_wheel", bolt_pattern: null, center_bore_mm: null };
+  const narrow = { id: "a0000000-0000-4000-8000-0000000000f2", kind: "wheel", sku: "WH-1061", description: "Forged 17x9 106.1 bore", price_cents: 28900, bolt_pattern: "6x139.7", center_bore_mm: 106.1, service_unit: null };
+
+  it("adds any catalog item, a TPMS service included, as a line with the wheel count", async () => {
+    const calls = server((c) => (c.url.startsWith("/api/shop/catalog") ? { status: 200, body: { items: [tpms], total: 1 } } : { status: 500, body: {} }));
+    const user = userEvent.setup();
+    renderEditor();
+    await user.type(screen.getByRole("searchbox", { name: "Add from the catalog" }), "TPMS");
+    await user.click(within(screen.getByRole("search", { name: "Add from the catalog" })).getByRole("button", { name: "Find" }));
+    // Role queries over the whole editor are slow in jsdom: look inside the found row.
+    await user.click(within(await screen.findByTestId("catalog-pick")).getByRole("button", { name: "Add TPMS sensor service" }));
+    expect(calls[0]!.url).toMatch(/q=TPMS/);
+    expect(screen.getByLabelText("Description of line 3")).toHaveProperty("value", "TPMS sensor service");
+    expect(screen.getByLabelText("Quantity of line 3")).toHaveProperty("value", "4");
+    expect(screen.getByTestId("unsaved")).toBeTruthy();
+  });
+
+  it("flags a wheel whose bore is smaller than the vehicle's hub, and offers no Add for it", async () => {
+    server(() => ({ status: 200, body: { items: [narrow], total: 1 } }));
+    const user = userEvent.setup();
+    renderEditor();
+    await user.click(within(screen.getByRole("search", { name: "Add from the catalog" })).getByRole("button", { name: "Find" }));
+    const row = await screen.findByTestId("catalog-pick");
+    expect(row.textContent).toContain("Does not fit: The wheel's 106.1 mm centre bore is smaller than the vehicle's 108 mm hub");
+    expect(within(row).queryByRole("button")).toBeNull();
+  });
+
+  it("shows the balance due after the deposit: 135.00 − 33.75 = 101.25", () => {
+    server(() => ({ status: 500, body: {} }));
+    renderEditor();
+    expect(screen.getByTestId("quote-balance").textContent).toBe("$101.25");
+  });
+});
