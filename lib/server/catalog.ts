@@ -64,7 +64,8 @@ export async function stageImport(db: Knex, shopId: string, userId: string, file
       filename: filename.slice(0, 200),
       rows: JSON.stringify(report.items.map(({ row: _row, ...item }) => item)) as unknown as CatalogImportRow["rows"],
       row_count: report.items.length,
-      error_count: report.errors.length,
+      // Rows left out, not problems: a row with two problems is one row skipped.
+      error_count: report.skippedRows,
     })
     .returning(["id"]);
   return { id: (row as { id: string }).id, newItems: report.items.length - existing, updatedItems: existing };

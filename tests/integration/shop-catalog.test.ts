@@ -56,7 +56,7 @@ describe("catalog import", () => {
     const res = await upload(CSV_TEMPLATE);
     expect(res.status).toBe(200);
     const p = await res.json();
-    expect(p).toMatchObject({ total: 4, valid: 4, newItems: 4, updatedItems: 0, errorCount: 0 });
+    expect(p).toMatchObject({ total: 4, valid: 4, newItems: 4, updatedItems: 0, skippedRows: 0, problemCount: 0 });
     expect(await count()).toBe(0); // nothing until confirmed
     const c = await confirm(p.importId);
     expect(c.lines[0]).toEqual({ done: 0, total: 4 });
@@ -79,13 +79,28 @@ describe("catalog import", () => {
     as(ownerA);
     const text = [CSV_COLUMNS.join(","), "tire,MX-1,Good,100,4,LT285/70R17,,,,,,,,,,", "tire,MX-2,Bad size,100,4,not-a-size,,,,,,,,,,", "tire,MX-1,Dup,100,4,LT285/70R17,,,,,,,,,,"].join("\n");
     const p = await (await upload(text)).json();
-    expect(p).toMatchObject({ total: 3, valid: 1, errorCount: 2 });
+    expect(p).toMatchObject({ total: 3, valid: 1, skippedRows: 2, problemCount: 2 });
     expect(p.errors).toEqual([
       { row: 3, column: "tire_size", message: expect.stringMatching(/not-a-size/) },
       { row: 4, column: "sku", message: expect.stringMatching(/also on row 2/) },
     ]);
     await confirm(p.importId);
     expect(await db("catalog_items").where({ shop_id: SHOP_A }).whereLike("sku", "MX-%").pluck("sku")).toEqual(["MX-1"]);
+  });
+
+  it("numbers rows as the spreadsheet does and counts skipped rows, not messages", async () => {
+    as(ownerA);
+    const text = [
+      CSV_COLUMNS.join(","), // row 1
+      "tire,RN-1,Good,100,4,LT285/70R17,,,,,,,,,,", // 2
+      "", // 3: blank, keeps its number
+      "tire,RN-2,Two problems,ten,4,not-a-size,,,,,,,,,,", // 4: price and size
+      "tire,RN-3,Bad size,100,4,not-a-size,,,,,,,,,,", // 5
+    ].join("\r\n");
+    const p = await (await upload(text)).json();
+    expect(p).toMatchObject({ total: 3, valid: 1, skippedRows: 2, problemCount: 3 });
+    expect(p.errors.map((e: { row: number; column: string }) => [e.row, e.column])).toEqual([[4, "price"], [4, "tire_size"], [5, "tire_size"]]);
+    expect((await db("catalog_imports").where({ id: p.importId }).first()).error_count).toBe(2);
   });
 
   it("imports a 10,000-row file in one transaction, in seconds", async () => {
@@ -97,7 +112,7 @@ describe("catalog import", () => {
     const c = await confirm(p.importId);
     const t2 = performance.now();
     console.log(`10,000-row catalog CSV (${(text.length / 1024 / 1024).toFixed(2)} MB): preview ${(t1 - t0).toFixed(0)} ms, confirm ${(t2 - t1).toFixed(0)} ms, total ${(t2 - t0).toFixed(0)} ms`);
-    expect(p).toMatchObject({ total: 10_000, valid: 10_000, errorCount: 0 });
+    expect(p).toMatchObject({ total: 10_000, valid: 10_000, skippedRows: 0, problemCount: 0 });
     expect(c.last).toEqual({ imported: 10_000 });
     expect(c.lines.filter((l) => "done" in l)).toHaveLength(1 + 10_000 / 500);
     expect(await db("catalog_items").where({ shop_id: SHOP_A }).whereLike("sku", "BULK-%").count<{ c: string }[]>({ c: "*" })).toEqual([{ c: "10000" }]);
@@ -140,7 +155,7 @@ describe("catalog import", () => {
     const res = await preview(new NextRequest("http://127.0.0.1:3000/api/shop/catalog/import", { method: "POST", body: streamed, duplex: "half" } as unknown as ConstructorParameters<typeof NextRequest>[1]), ctx());
     expect(res.status).toBe(413);
     console.log(`50 MB upload refused in ${(performance.now() - t0).toFixed(0)} ms`);
-    expect(await db("catalog_imports").where({ shop_id: SHOP_A }).count<{ c: string }[]>({ c: "*" })).toEqual([{ c: "5" }]);
+    expect(await db("catalog_imports").where({ shop_id: SHOP_A }).count<{ c: string }[]>({ c: "*" })).toEqual([{ c: "6" }]);
   });
 });
 

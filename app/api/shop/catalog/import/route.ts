@@ -27,7 +27,9 @@ export const POST = route({ access: SHOP_OWNER, query: z.object({ filename: z.st
     valid: report.items.length,
     newItems: staged?.newItems ?? 0,
     updatedItems: staged?.updatedItems ?? 0,
-    errorCount: report.errors.length,
+    // Rows and problems are counted apart: one row can have several problems, and it is rows that are skipped.
+    skippedRows: report.skippedRows,
+    problemCount: report.errors.length,
     errors: report.errors.slice(0, MAX_ERRORS_SHOWN),
   };
 });
