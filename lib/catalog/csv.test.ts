@@ -93,6 +93,25 @@ describe("catalog CSV", () => {
     expect(unclosed.errors[0]!.message).not.toMatch(/Quoted field unterminated|malformed/);
   });
 
+  it("words every wheel problem for the person who made the file, naming the column", () => {
+    const base = { kind: "wheel", sku: "W", description: "d", price: "1", qty_on_hand: "1", wheel_diameter_in: "17", bolt_pattern: "6x5.5" };
+    const cases: [Partial<Record<(typeof CSV_COLUMNS)[number], string>>, string][] = [
+      [{ wheel_width_in: "", wheel_offset_mm: "0" }, "wheel_width_in"],
+      [{ wheel_width_in: "nine", wheel_offset_mm: "0" }, "wheel_width_in"],
+      [{ wheel_width_in: "40", wheel_offset_mm: "0" }, "wheel_width_in"],
+      [{ wheel_width_in: "9", wheel_offset_mm: "abc" }, "wheel_offset_mm"],
+      [{ wheel_width_in: "9", wheel_backspacing_in: "x", backspacing_from: "flange" }, "wheel_backspacing_in"],
+      [{ wheel_width_in: "9", wheel_backspacing_in: "25", backspacing_from: "flange" }, "wheel_backspacing_in"],
+    ];
+    for (const [cells, column] of cases) {
+      const r = parseCatalogCsv([HEAD, row({ ...base, ...cells })].join("\n"));
+      expect(r.errors, JSON.stringify(cells)).toEqual([expect.objectContaining({ column })]);
+      const { message } = r.errors[0]!;
+      expect(message, message).not.toMatch(/NaN|finite|backspacingIn|widthIn|offsetMm|measuredFrom/);
+      expect(message, message).toMatch(/Wheel width|Offset|Backspacing|wheel_width_in|wheel_offset_mm|wheel_backspacing_in/);
+    }
+  });
+
   it("refuses wrong headers as a whole-file problem", () => {
     const r = parseCatalogCsv("Item,Cost,Colour\nA,1,red\n");
     expect(r.fileErrors.join(" ")).toMatch(/Unknown columns: "item", "cost", "colour"/);

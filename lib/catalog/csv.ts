@@ -3,17 +3,11 @@
  * papaparse, row-by-row validation through the fitment engine, and export. Pure: no database.
  */
 import Papa from "papaparse";
-import {
-  FitmentInputError,
-  checkOffsetMm,
-  checkWheelWidthIn,
-  offsetFromBackspacing,
-  parseBoltPattern,
-  parseTireSize,
-} from "@/lib/fitment";
+import { FitmentInputError, parseTireSize } from "@/lib/fitment";
 import { type CatalogItemRow, type CatalogKind, SERVICE_TYPES, SERVICE_UNITS, type ServiceType, type ServiceUnit } from "@/lib/db/types";
 import { formatCents, parseMoneyToCents } from "@/lib/quotes/money";
 import { readCsvRecords } from "./records";
+import { readWheelCells } from "./wheelCells";
 
 /** Every column of the format, in the order export and the template write them. */
 export const CSV_COLUMNS = [
@@ -212,64 +206,7 @@ function validateRow(raw: Record<string, string>, at: Pick<RowError, "row" | "li
     }
   }
 
-  if (kind === "wheel") {
-    const num = (c: CsvColumn, label: string, min: number, max: number, example: string): number | null => {
-      const t = v(c);
-      const n = t === "" ? NaN : Number(t);
-      if (!Number.isFinite(n) || n < min || n > max) {
-        fail(c, `${label} must be a number from ${min} to ${max} (e.g. ${example})${t ? `, got “${t}”` : ""}.`);
-        return null;
-      }
-      return n;
-    };
-    item.wheel_diameter_in = num("wheel_diameter_in", "Wheel diameter (in)", 8, 30, "17");
-    const widthText = v("wheel_width_in");
-    let width: number | null = null;
-    try {
-      width = checkWheelWidthIn(widthText === "" ? NaN : Number(widthText), "wheel_width_in");
-      item.wheel_width_in = width;
-    } catch (e) {
-      fail("wheel_width_in", e instanceof FitmentInputError ? e.message : "Enter the wheel width in inches.");
-    }
-    const offText = v("wheel_offset_mm");
-    const bsText = v("wheel_backspacing_in");
-    const ref = v("backspacing_from").toLowerCase();
-    if (offText && bsText) fail("wheel_offset_mm", "Give the offset or the backspacing, not both.");
-    else if (!offText && !bsText) fail("wheel_offset_mm", "Give the offset (mm) or the backspacing (in) with backspacing_from.");
-    else if (width !== null && offText) {
-      try {
-        item.wheel_offset_mm = checkOffsetMm(Number(offText), width, "wheel_offset_mm");
-      } catch (e) {
-        fail("wheel_offset_mm", e instanceof FitmentInputError ? e.message : "Enter the offset in mm.");
-      }
-    } else if (width !== null && bsText) {
-      if (ref !== "bead-seat" && ref !== "flange") fail("backspacing_from", "Say where the backspacing was measured to: bead-seat or flange.");
-      else {
-        try {
-          item.wheel_offset_mm = offsetFromBackspacing({ widthIn: width, backspacingIn: Number(bsText), measuredFrom: ref });
-          item.wheel_backspacing_in = Number(bsText);
-          item.wheel_backspacing_ref = ref;
-        } catch (e) {
-          fail("wheel_backspacing_in", e instanceof FitmentInputError ? e.message : "Enter the backspacing in inches.");
-        }
-      }
-    }
-    const bp = v("bolt_pattern");
-    if (!bp) fail("bolt_pattern", "Enter the bolt pattern, e.g. 6x5.5 or 8x165.1.");
-    else {
-      try {
-        item.bolt_pattern = parseBoltPattern(bp).text;
-      } catch (e) {
-        fail("bolt_pattern", e instanceof FitmentInputError ? e.message : "This bolt pattern could not be read.");
-      }
-    }
-    const bore = v("center_bore_mm");
-    if (bore) item.center_bore_mm = num("center_bore_mm", "Centre bore (mm)", 40, 200, "108");
-    const bl = v("beadlock").toLowerCase();
-    if (["yes", "y", "true", "1"].includes(bl)) item.beadlock = true;
-    else if (["", "no", "n", "false", "0"].includes(bl)) item.beadlock = false;
-    else fail("beadlock", `Beadlock must be yes or no, got “${v("beadlock")}”.`);
-  }
+  if (kind === "wheel") readWheelCells(v, fail, item);
 
   if (kind === "service") {
     const type = v("service_type").toLowerCase() as ServiceType;
