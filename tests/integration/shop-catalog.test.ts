@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import { CSV_COLUMNS, CSV_TEMPLATE } from "@/lib/catalog/csv";
+import { CSV_COLUMNS, CSV_TEMPLATE, parseCatalogCsv } from "@/lib/catalog/csv";
 import { rebuild, testDb } from "./support/db";
 import { ctx, req, sessionOf } from "./support/requests";
 
@@ -195,5 +195,57 @@ describe("catalog access", () => {
     expect(csv.split("\r\n")[0]).toBe(CSV_COLUMNS.join(","));
     expect(csv).toContain("tire,TR-EXAMPLE-35,");
     expect(csv.split("\r\n")).toHaveLength(1 + 4 + 1 + 10_000);
+  });
+});
+
+describe("catalog search: what people type finds what is stored", () => {
+  const SHOP_C = "0c000000-0000-4000-8000-00000000000c";
+  const staffC = { id: "0c000000-0000-4000-8000-000000000002", role: "shop_staff", shop_id: SHOP_C };
+  beforeAll(async () => {
+    await db("shops").insert({ id: SHOP_C, name: "Shop C" });
+    await db("users").insert({ ...staffC, email: "c@example.test", name: "C", password_hash: "x" });
+    const csv = [
+      CSV_COLUMNS.join(","),
+      "tire,T-3712,Mud terrain 37 x 12.50 R17,450,4,37x12.50R17LT,,,,,,,,,,",
+      "tire,T-3512,All terrain,400,4,35x12.50R17LT,,,,,,,,,,",
+      "tire,T-28570,Highway,300,4,LT285/70R17,,,,,,,,,,",
+      "wheel,W-IN,Steel wheel,200,4,,17,9,-12,,,6x5.5,108,no,,",
+      "wheel,W-MM,Alloy wheel,220,4,,17,9,0,,,6x139.7,106,no,,",
+      "wheel,W-5,Five lug,180,4,,17,8,0,,,5x139.7,108,no,,",
+      "wheel,W-135,Six lug,180,4,,17,8,0,,,6x135,87,no,,",
+      "service,S-CAF,Équilibrage café 50%_off,30,,,,,,,,,,,other,",
+    ].join("\n");
+    const r = parseCatalogCsv(csv);
+    expect(r.errors).toEqual([]);
+    await db("catalog_items").insert(r.items.map(({ row: _r, ...i }) => ({ ...i, shop_id: SHOP_C })));
+  });
+  const skus = async (q: string) => {
+    as(staffC as typeof ownerA);
+    const res = await list(req("GET", `/api/shop/catalog?q=${encodeURIComponent(q)}&pageSize=50`), ctx());
+    expect(res.status).toBe(200);
+    return ((await res.json()).items as { sku: string }[]).map((i) => i.sku).sort();
+  };
+
+  it("finds a tire size however the × and the decimals are typed", async () => {
+    // The engine stores flotation sizes with two decimals: 37x12.50R17LT.
+    for (const q of ["37×12.50", "37x12.5", "37X12.50", "37 x 12.50", "37 × 12.5", "37x12.50R17", "37×12.5r17lt"]) {
+      expect(await skus(q), q).toEqual(["T-3712"]);
+    }
+    expect(await skus("12.50")).toEqual(["T-3512", "T-3712"]);
+    expect(await skus("285/70")).toEqual(["T-28570"]);
+  });
+
+  it("finds a bolt pattern by either spelling (6x5.5 = 6x139.7: 5.5 in × 25.4 mm/in, NIST SP 811)", async () => {
+    for (const q of ["6x139.7", "6x5.5", "6 × 5.5", "6 on 5.5", "6X139.70"]) expect(await skus(q), q).toEqual(["W-IN", "W-MM"]);
+    expect(await skus("5x139.7")).toEqual(["W-5"]);
+    expect(await skus("6x135")).toEqual(["W-135"]);
+  });
+
+  it("folds accents and takes % and _ as themselves", async () => {
+    expect(await skus("cafe")).toEqual(["S-CAF"]);
+    expect(await skus("EQUILIBRAGE")).toEqual(["S-CAF"]);
+    expect(await skus("50%_")).toEqual(["S-CAF"]);
+    expect(await skus("%")).toEqual(["S-CAF"]);
+    expect(await skus("_")).toEqual(["S-CAF"]);
   });
 });
