@@ -1,23 +1,33 @@
 import "server-only";
 import type { Knex } from "knex";
 import type { CustomerRow, CustomerVehicleRow } from "@/lib/db/types";
+import { containsPattern, searchKey } from "@/lib/search/normalize";
 import type { CustomerInput } from "@/lib/validation/quotes";
 
 export const phoneDigits = (phone: string) => phone.replace(/\D/g, "");
-const likeOf = (s: string) => `%${s.replace(/[%_\\]/g, (c) => "\\" + c)}%`;
 
-/** The shop's customers matching a phone number (by digits), an e-mail or a name. */
+/**
+ * The shop's customers matching a phone number (by digits), a name or the part of an e-mail
+ * address before the @ (through the stored search key: accents and Ł, Ø, ß … folded, so
+ * "lukasz" finds Łukasz), or a whole e-mail address when the search has an @. A domain alone
+ * finds nobody: every customer may share it.
+ */
 export async function searchCustomers(db: Knex, shopId: string, q: string): Promise<CustomerRow[]> {
-  const digits = phoneDigits(q);
-  return db<CustomerRow>("customers")
+  const text = q.trim();
+  const digits = phoneDigits(text);
+  const key = searchKey(text);
+  // Nothing left to look for (only accents, say): an empty condition would list everyone.
+  if (!key && digits.length < 4 && !text.includes("@")) return [];
+  const rows = await db<CustomerRow>("customers")
     .where({ shop_id: shopId })
     .andWhere((w) => {
-      if (digits.length >= 4) w.orWhereLike("phone_digits", likeOf(digits));
-      w.orWhereRaw("lower(email) = lower(?)", [q.trim()]).orWhereILike("name", likeOf(q.trim()));
-      if (q.includes("@")) w.orWhereILike("email", likeOf(q.trim()));
+      if (digits.length >= 4) w.orWhereLike("phone_digits", containsPattern(digits));
+      if (key) w.orWhereLike("search_key", containsPattern(key));
+      if (text.includes("@")) w.orWhereRaw("lower(email) like ?", [containsPattern(text.toLowerCase())]);
     })
     .orderBy("name")
     .limit(20);
+  return rows.map(({ search_key: _key, ...c }: CustomerRow & { search_key?: string }) => c);
 }
 
 /** An existing customer of this shop with the same phone digits or e-mail. */

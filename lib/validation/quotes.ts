@@ -13,7 +13,9 @@ export const customerSchema = z
   .refine((c) => c.phone.replace(/\D/g, "").length >= 7 || c.email !== "", { path: ["phone"], message: "Enter a phone number (7 digits or more) or an e-mail address." });
 export type CustomerInput = z.infer<typeof customerSchema>;
 
-export const customerSearchSchema = z.object({ q: z.string().trim().min(1, "Type a phone number, e-mail or name.").max(120) });
+export const customerSearchSchema = z.object({
+  q: z.string({ message: "Type a phone number, e-mail or name." }).trim().min(1, "Type a phone number, e-mail or name.").max(120, "Use at most 120 characters."),
+});
 
 /** Quick entry of the vehicle as it is now: bolt pattern and current setup. */
 export const vehicleSchema = z
