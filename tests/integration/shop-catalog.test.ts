@@ -187,6 +187,29 @@ describe("catalog access", () => {
     expect((await list(req("GET", "/api/shop/catalog?sort=password_hash"), ctx())).status).toBe(400);
   });
 
+  it("answers a bad search or filter with a message naming the control as the table labels it", async () => {
+    as(staffA);
+    const bad = async (query: string) => {
+      const res = await list(req("GET", `/api/shop/catalog?${query}`), ctx());
+      expect(res.status, query).toBe(400);
+      return (await res.json()).error as string;
+    };
+    expect(await bad(`q=${"a".repeat(101)}`)).toBe("Search SKU, description, size or bolt pattern: use at most 100 characters.");
+    expect(await bad("kind=gizmo")).toBe("Kind: pick tires, wheels or services.");
+    expect(await bad("pageSize=500")).toBe("Rows per page: use 1 to 200 rows per page.");
+    expect(await bad("sort=password_hash")).toMatch(/^Sort: /);
+  });
+
+  it("takes a long file name without refusing the upload (the record keeps its first 200 characters)", async () => {
+    as(ownerA);
+    const name = `${"catalog-".repeat(40)}.csv`;
+    const res = await preview(req("POST", `/api/shop/catalog/import?filename=${encodeURIComponent(name)}`, CSV_TEMPLATE, { "content-type": "text/csv" }), ctx());
+    expect(res.status).toBe(200);
+    const { importId } = await res.json();
+    expect((await db("catalog_imports").where({ id: importId }).first()).filename).toBe(name.slice(0, 200));
+    await db("catalog_imports").where({ id: importId }).del();
+  });
+
   it("exports what was imported in the documented format", async () => {
     as(staffA);
     const bytes = Buffer.from(await (await exportCsv(req("GET", "/api/shop/catalog/export"), ctx())).arrayBuffer());
