@@ -4,6 +4,7 @@ import type { CatalogImportRow, CatalogItemRow, CatalogKind } from "@/lib/db/typ
 import { boltPatternQuery, equivalentBoltPatterns } from "@/lib/catalog/boltPatternSearch";
 import type { CatalogInput, CsvReport } from "@/lib/catalog/csv";
 import { containsPattern, searchKey } from "@/lib/search/normalize";
+import { withoutSearchKey } from "./searchKeyColumn";
 
 export const CATALOG_SORTS = ["sku", "description", "price_cents", "qty_on_hand", "kind", "tire_diameter_mm", "updated_at"] as const;
 export type CatalogSort = (typeof CATALOG_SORTS)[number];
@@ -44,8 +45,7 @@ export async function listCatalog(db: Knex, shopId: string, q: CatalogQuery = {}
     .limit(pageSize)
     .offset((page - 1) * pageSize)
     .select("*");
-  // The search key is the database's own business.
-  return { items: items.map(({ search_key: _key, ...item }: CatalogItemRow & { search_key?: string }) => item), total: Number(count), page, pageSize };
+  return { items: items.map(withoutSearchKey), total: Number(count), page, pageSize };
 }
 
 /** The bolt patterns the shop's catalog holds, each once (a few dozen at most). */
@@ -54,12 +54,13 @@ async function storedBoltPatterns(db: Knex, shopId: string): Promise<string[]> {
 }
 
 export async function getCatalogItem(db: Knex, shopId: string, id: string): Promise<CatalogItemRow | undefined> {
-  return db<CatalogItemRow>("catalog_items").where({ id, shop_id: shopId }).first();
+  const row = await db<CatalogItemRow>("catalog_items").where({ id, shop_id: shopId }).first();
+  return row && withoutSearchKey(row);
 }
 
 /** Every item, for export, in SKU order. */
 export async function allCatalogItems(db: Knex, shopId: string): Promise<CatalogItemRow[]> {
-  return db<CatalogItemRow>("catalog_items").where({ shop_id: shopId }).orderBy([{ column: "kind" }, { column: "sku" }]);
+  return (await db<CatalogItemRow>("catalog_items").where({ shop_id: shopId }).orderBy([{ column: "kind" }, { column: "sku" }])).map(withoutSearchKey);
 }
 
 /** Keeps the validated rows of a previewed file until the owner confirms (or not). */

@@ -2,6 +2,7 @@ import "server-only";
 import type { Knex } from "knex";
 import type { CustomerRow, CustomerVehicleRow } from "@/lib/db/types";
 import { containsPattern, searchKey } from "@/lib/search/normalize";
+import { withoutSearchKey } from "./searchKeyColumn";
 import type { CustomerInput } from "@/lib/validation/quotes";
 
 export const phoneDigits = (phone: string) => phone.replace(/\D/g, "");
@@ -27,30 +28,32 @@ export async function searchCustomers(db: Knex, shopId: string, q: string): Prom
     })
     .orderBy("name")
     .limit(20);
-  return rows.map(({ search_key: _key, ...c }: CustomerRow & { search_key?: string }) => c);
+  return rows.map(withoutSearchKey);
 }
 
 /** An existing customer of this shop with the same phone digits or e-mail. */
 export async function findDuplicateCustomer(db: Knex, shopId: string, c: CustomerInput): Promise<CustomerRow | undefined> {
   const digits = phoneDigits(c.phone);
-  return db<CustomerRow>("customers")
+  const row = await db<CustomerRow>("customers")
     .where({ shop_id: shopId })
     .andWhere((w) => {
       if (digits.length >= 7) w.orWhere("phone_digits", digits);
       if (c.email) w.orWhereRaw("lower(email) = lower(?)", [c.email]);
     })
     .first();
+  return row && withoutSearchKey(row);
 }
 
 export async function createCustomer(db: Knex, shopId: string, c: CustomerInput): Promise<CustomerRow> {
   const [row] = await db<CustomerRow>("customers")
     .insert({ shop_id: shopId, name: c.name, phone: c.phone, phone_digits: phoneDigits(c.phone), email: c.email })
     .returning("*");
-  return row!;
+  return withoutSearchKey(row!);
 }
 
 export async function getCustomer(db: Knex, shopId: string, id: string): Promise<CustomerRow | undefined> {
-  return db<CustomerRow>("customers").where({ id, shop_id: shopId }).first();
+  const row = await db<CustomerRow>("customers").where({ id, shop_id: shopId }).first();
+  return row && withoutSearchKey(row);
 }
 
 export async function listVehicles(db: Knex, shopId: string, customerId: string): Promise<CustomerVehicleRow[]> {

@@ -184,6 +184,7 @@ describe("catalog access", () => {
     const prices = page.items.map((i: { price_cents: number }) => i.price_cents);
     expect([...prices].sort((a, b) => b - a)).toEqual(prices);
     expect(page.items.every((i: { kind: string }) => i.kind === "wheel")).toBe(true);
+    expect(Object.keys(page.items[0])).not.toContain("search_key"); // the stored search key stays in the database
     expect((await list(req("GET", "/api/shop/catalog?sort=password_hash"), ctx())).status).toBe(400);
   });
 

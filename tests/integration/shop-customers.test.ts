@@ -70,6 +70,20 @@ describe("finding a customer again", () => {
     expect(await names("\u0301")).toEqual([]); // a lone accent folds to nothing: nobody, not everybody
   });
 
+  it("keeps the stored search key to itself in every answer", async () => {
+    session.current = sessionOf(U.staffA);
+    const found = (await (await customers.GET(req("GET", "/api/shop/customers?q=lukasz"), ctx())).json()).customers;
+    expect(Object.keys(found[0])).not.toContain("search_key");
+    const made = await customers.POST(req("POST", "/api/shop/customers", { name: "Ånund Key", phone: "555 014 2010", email: "" }), ctx());
+    expect(Object.keys((await made.json()).customer)).not.toContain("search_key");
+    const dup = await customers.POST(req("POST", "/api/shop/customers", { name: "Ånund Again", phone: "555 014 2010", email: "" }), ctx());
+    expect(dup.status).toBe(409);
+    expect(Object.keys((await dup.json()).existing)).not.toContain("search_key");
+    const byId = await import("@/app/api/shop/customers/[id]/route");
+    const one = await (await byId.GET(req("GET", `/api/shop/customers/${found[0].id}`), ctx({ id: found[0].id }))).json();
+    expect(Object.keys(one.customer)).not.toContain("search_key");
+  });
+
   it("answers a search that is too long with a message naming the field as the screen does", async () => {
     const res = await customers.GET(req("GET", `/api/shop/customers?q=${"a".repeat(121)}`), ctx());
     expect(res.status).toBe(400);
