@@ -103,7 +103,8 @@ export function CatalogTable() {
           <input
             type="search"
             maxLength={100}
-            className="min-h-10 w-72 rounded-lg border border-basalt-300 px-3"
+            placeholder="e.g. 37x12.50, 6x139.7 or a SKU"
+            className="min-h-10 w-72 max-w-full rounded-lg border border-basalt-300 px-3 placeholder:text-basalt-500"
             value={search}
             onChange={(e) => {
               setSearch(e.target.value);
