@@ -62,7 +62,7 @@ export function foldDiacritics(text: string): string {
 }
 
 /**
- * The search key of a text (see the module comment); searchKeySql computes the same in SQL.
+ * The search key of a text (see the module comment); hubface_search_key() computes the same in SQL.
  *
  * @example
  * searchKey("37 × 12.50R17LT"); // "37x12.5r17lt"
