@@ -11,7 +11,7 @@ export const NAV: NavItem[] = [
   { href: "/workspace", label: "Workspace", roles: "all" },
   { href: "/convert", label: "Converter", roles: "all" },
   { href: "/beadlock", label: "Ring helper", roles: "all" },
-  { href: "/garage", label: "Garage", roles: ["member", "admin"] },
+  { href: "/garage", label: "Garage", roles: "signed-in" },
   { href: "/comparisons", label: "My comparisons", roles: "signed-in" },
   { href: "/account", label: "Account", roles: "signed-in" },
   { href: "/shop", label: "Shop", roles: ["shop_staff", "shop_owner"] },

@@ -48,6 +48,70 @@ describe("catalog CSV", () => {
     expect(by(8)[0]).toMatchObject({ column: "qty_on_hand" });
   });
 
+  it("numbers rows as the file shows them: blank lines keep their numbers, counts are rows", () => {
+    const lines = [
+      HEAD, // row 1
+      row({ kind: "tire", sku: "T1", description: "Good", price: "10", qty_on_hand: "1", tire_size: "LT285/70R17" }), // 2
+      "", // 3: a blank line
+      row({ kind: "tire", sku: "T2", description: "Bad size", price: "10", qty_on_hand: "1", tire_size: "35 by 12" }), // 4
+      ",,,,,,,,,,,,,,,", // 5: a row of empty cells, blank in a spreadsheet
+      row({ kind: "tire", sku: "T3", description: "Two problems", price: "ten", qty_on_hand: "1", tire_size: "35 by 12" }), // 6
+      "   ", // 7
+      row({ kind: "tire", sku: "T4", description: "Good", price: "10", qty_on_hand: "1", tire_size: "LT285/70R17" }), // 8
+      row({ kind: "tire", sku: "t1", description: "Same SKU", price: "10", qty_on_hand: "1", tire_size: "LT285/70R17" }), // 9
+    ];
+    for (const nl of ["\n", "\r\n"]) {
+      const r = parseCatalogCsv(lines.join(nl) + nl);
+      expect(r.total).toBe(5);
+      expect(r.items.map((i) => [i.sku, i.row])).toEqual([["T1", 2], ["T4", 8]]);
+      expect(r.errors.map((e) => [e.row, e.column])).toEqual([[4, "tire_size"], [6, "price"], [6, "tire_size"], [9, "sku"]]);
+      expect(r.errors[3]!.message).toMatch(/also on row 2/);
+      // Three rows are skipped; they carry four problems (row 6 counts once).
+      expect(r.skippedRows).toBe(3);
+      expect(r.errors).toHaveLength(4);
+    }
+  });
+
+  it("a quoted cell with a line break is one spreadsheet row; the report also names the text line", () => {
+    const text = [
+      HEAD,
+      row({ kind: "service", sku: "S1", description: '"Mount,\nand balance"', price: "30", service_type: "mount_balance" }), // row 2, lines 2–3
+      row({ kind: "service", sku: "S2", description: "Bad unit", price: "30", service_type: "mount_balance", service_unit: "per_day" }), // row 3, line 4
+    ].join("\n");
+    const r = parseCatalogCsv(text);
+    expect(r.items).toMatchObject([{ sku: "S1", row: 2, description: "Mount,\nand balance" }]);
+    expect(r.errors).toEqual([expect.objectContaining({ row: 3, line: 4, column: "service_unit" })]);
+  });
+
+  it("says in its own words why a row could not be read, with the row number", () => {
+    const text = [HEAD, row({ kind: "tire", sku: "T1", description: "Good", price: "10", qty_on_hand: "1", tire_size: "LT285/70R17" }), "tire,T2,Short row,10"].join("\n");
+    const r = parseCatalogCsv(text);
+    expect(r.errors).toEqual([{ row: 3, column: "", message: "This row has 4 cells; the header row has 16. Check for a missing or extra comma." }]);
+    const unclosed = parseCatalogCsv([HEAD, 'tire,T3,"Unclosed quote,10,1,LT285/70R17,,,,,,,,,,'].join("\n"));
+    expect(unclosed.errors[0]).toMatchObject({ row: 2, column: "" });
+    expect(unclosed.errors[0]!.message).toMatch(/quote/);
+    expect(unclosed.errors[0]!.message).not.toMatch(/Quoted field unterminated|malformed/);
+  });
+
+  it("words every wheel problem for the person who made the file, naming the column", () => {
+    const base = { kind: "wheel", sku: "W", description: "d", price: "1", qty_on_hand: "1", wheel_diameter_in: "17", bolt_pattern: "6x5.5" };
+    const cases: [Partial<Record<(typeof CSV_COLUMNS)[number], string>>, string][] = [
+      [{ wheel_width_in: "", wheel_offset_mm: "0" }, "wheel_width_in"],
+      [{ wheel_width_in: "nine", wheel_offset_mm: "0" }, "wheel_width_in"],
+      [{ wheel_width_in: "40", wheel_offset_mm: "0" }, "wheel_width_in"],
+      [{ wheel_width_in: "9", wheel_offset_mm: "abc" }, "wheel_offset_mm"],
+      [{ wheel_width_in: "9", wheel_backspacing_in: "x", backspacing_from: "flange" }, "wheel_backspacing_in"],
+      [{ wheel_width_in: "9", wheel_backspacing_in: "25", backspacing_from: "flange" }, "wheel_backspacing_in"],
+    ];
+    for (const [cells, column] of cases) {
+      const r = parseCatalogCsv([HEAD, row({ ...base, ...cells })].join("\n"));
+      expect(r.errors, JSON.stringify(cells)).toEqual([expect.objectContaining({ column })]);
+      const { message } = r.errors[0]!;
+      expect(message, message).not.toMatch(/NaN|finite|backspacingIn|widthIn|offsetMm|measuredFrom/);
+      expect(message, message).toMatch(/Wheel width|Offset|Backspacing|wheel_width_in|wheel_offset_mm|wheel_backspacing_in/);
+    }
+  });
+
   it("refuses wrong headers as a whole-file problem", () => {
     const r = parseCatalogCsv("Item,Cost,Colour\nA,1,red\n");
     expect(r.fileErrors.join(" ")).toMatch(/Unknown columns: "item", "cost", "colour"/);

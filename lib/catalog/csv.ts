@@ -3,16 +3,11 @@
  * papaparse, row-by-row validation through the fitment engine, and export. Pure: no database.
  */
 import Papa from "papaparse";
-import {
-  FitmentInputError,
-  checkOffsetMm,
-  checkWheelWidthIn,
-  offsetFromBackspacing,
-  parseBoltPattern,
-  parseTireSize,
-} from "@/lib/fitment";
+import { FitmentInputError, parseTireSize } from "@/lib/fitment";
 import { type CatalogItemRow, type CatalogKind, SERVICE_TYPES, SERVICE_UNITS, type ServiceType, type ServiceUnit } from "@/lib/db/types";
 import { formatCents, parseMoneyToCents } from "@/lib/quotes/money";
+import { readCsvRecords } from "./records";
+import { readWheelCells } from "./wheelCells";
 
 /** Every column of the format, in the order export and the template write them. */
 export const CSV_COLUMNS = [
@@ -56,8 +51,10 @@ export const DEFAULT_SERVICE_UNIT: Record<ServiceType, ServiceUnit> = {
 export type CatalogInput = Omit<CatalogItemRow, "id" | "shop_id" | "created_at" | "updated_at">;
 
 export interface RowError {
-  /** Line in the file: the header is row 1, the first item row 2. */
+  /** The row a spreadsheet shows: the header is row 1, blank rows keep their numbers. */
   row: number;
+  /** The text line where the row starts, given only when it differs from `row` (a cell above held a line break). */
+  line?: number;
   column: string;
   message: string;
 }
@@ -66,9 +63,12 @@ export interface CsvReport {
   /** Problems with the file as a whole (encoding, headers, size): nothing can be imported. */
   fileErrors: string[];
   items: (CatalogInput & { row: number })[];
+  /** Every problem found; a row can have several. */
   errors: RowError[];
-  /** Item rows read (valid or not). */
+  /** Item rows read (valid or not; blank rows are not items). */
   total: number;
+  /** Item rows left out because they have at least one problem. */
+  skippedRows: number;
 }
 
 const SKU_RE = /^[A-Za-z0-9][A-Za-z0-9._/-]{0,63}$/;
@@ -91,13 +91,15 @@ export function decodeCsvBytes(bytes: Uint8Array): { text: string } | { error: s
 
 /** Parses and validates catalog CSV text. File-level problems stop before any row is read. */
 export function parseCatalogCsv(text: string): CsvReport {
-  const report: CsvReport = { fileErrors: [], items: [], errors: [], total: 0 };
-  const parsed = Papa.parse<Record<string, string>>(text, {
-    header: true,
-    skipEmptyLines: "greedy",
-    transformHeader: (h) => h.trim().toLowerCase(),
-  });
-  const headers = parsed.meta.fields ?? [];
+  const report: CsvReport = { fileErrors: [], items: [], errors: [], total: 0, skippedRows: 0 };
+  const records = readCsvRecords(text);
+  const headerAt = records.findIndex((r) => !r.blank);
+  const header = records[headerAt];
+  if (header?.problem) {
+    report.fileErrors.push(`The header row (row ${header.row}) could not be read: ${header.problem}`);
+    return report;
+  }
+  const headers = (header?.cells ?? []).map((h) => h.trim().toLowerCase());
   const unknown = headers.filter((h) => !(CSV_COLUMNS as readonly string[]).includes(h));
   const missing = REQUIRED_COLUMNS.filter((c) => !headers.includes(c));
   const dupHeaders = headers.filter((h, i) => headers.indexOf(h) !== i);
@@ -105,42 +107,46 @@ export function parseCatalogCsv(text: string): CsvReport {
   if (missing.length) report.fileErrors.push(`Missing column${missing.length > 1 ? "s" : ""}: ${missing.join(", ")}.`);
   if (dupHeaders.length) report.fileErrors.push(`Column named twice: ${[...new Set(dupHeaders)].join(", ")}.`);
   if (report.fileErrors.length) return report;
-  if (parsed.data.length > CSV_MAX_ROWS) {
-    report.fileErrors.push(`The file has ${parsed.data.length} rows; at most ${CSV_MAX_ROWS} are imported at once. Split it into several files.`);
+  const rows = records.slice(headerAt + 1).filter((r) => !r.blank);
+  if (rows.length > CSV_MAX_ROWS) {
+    report.fileErrors.push(`The file has ${rows.length} rows; at most ${CSV_MAX_ROWS} are imported at once. Split it into several files.`);
     return report;
   }
 
-  // papaparse reports structural problems by data-row index.
-  const structural = new Map<number, string>();
-  for (const e of parsed.errors) if (e.row !== undefined && !structural.has(e.row)) structural.set(e.row, e.message);
-
   const firstRowOfSku = new Map<string, number>();
-  parsed.data.forEach((raw, i) => {
-    // Row number in the file; papaparse's own cursor is not kept per row, so count from the header.
-    const row = i + 2;
+  for (const rec of rows) {
+    const { row } = rec;
+    const at = rec.line === row ? { row } : { row, line: rec.line };
     report.total++;
-    const s = structural.get(i);
-    if (s) {
-      report.errors.push({ row, column: "", message: `The row could not be read: ${s}.` });
-      return;
-    }
     const errs: RowError[] = [];
-    const item = validateRow(raw, row, errs);
-    if (item) {
-      const key = item.sku.toLowerCase();
-      const first = firstRowOfSku.get(key);
-      if (first !== undefined) errs.push({ row, column: "sku", message: `SKU ${item.sku} is also on row ${first}; each SKU appears once.` });
-      else firstRowOfSku.set(key, row);
+    if (rec.problem) errs.push({ ...at, column: "", message: rec.problem });
+    else if (rec.cells.length !== headers.length) {
+      // A missing or extra comma shifts every cell after it into the wrong column: refuse the row rather than guess.
+      errs.push({ ...at, column: "", message: `This row has ${rec.cells.length} cells; the header row has ${headers.length}. Check for a missing or extra comma.` });
+    } else {
+      const raw = Object.fromEntries(headers.map((h, i) => [h, rec.cells[i] ?? ""]));
+      const item = validateRow(raw, at, errs);
+      if (item) {
+        const key = item.sku.toLowerCase();
+        const first = firstRowOfSku.get(key);
+        if (first !== undefined) errs.push({ ...at, column: "sku", message: `SKU ${item.sku} is also on row ${first}; each SKU appears once.` });
+        else {
+          firstRowOfSku.set(key, row);
+          report.items.push({ ...item, row });
+        }
+      }
     }
-    if (errs.length || !item) report.errors.push(...errs);
-    else report.items.push({ ...item, row });
-  });
+    if (errs.length) {
+      report.errors.push(...errs);
+      report.skippedRows++;
+    }
+  }
   return report;
 }
 
-function validateRow(raw: Record<string, string>, row: number, errs: RowError[]): CatalogInput | null {
+function validateRow(raw: Record<string, string>, at: Pick<RowError, "row" | "line">, errs: RowError[]): CatalogInput | null {
   const v = (c: CsvColumn) => (raw[c] ?? "").trim();
-  const fail = (column: CsvColumn | "", message: string) => void errs.push({ row, column, message });
+  const fail = (column: CsvColumn | "", message: string) => void errs.push({ ...at, column, message });
   const before = errs.length;
 
   const kindText = v("kind").toLowerCase();
@@ -200,64 +206,7 @@ function validateRow(raw: Record<string, string>, row: number, errs: RowError[])
     }
   }
 
-  if (kind === "wheel") {
-    const num = (c: CsvColumn, label: string, min: number, max: number, example: string): number | null => {
-      const t = v(c);
-      const n = t === "" ? NaN : Number(t);
-      if (!Number.isFinite(n) || n < min || n > max) {
-        fail(c, `${label} must be a number from ${min} to ${max} (e.g. ${example})${t ? `, got “${t}”` : ""}.`);
-        return null;
-      }
-      return n;
-    };
-    item.wheel_diameter_in = num("wheel_diameter_in", "Wheel diameter (in)", 8, 30, "17");
-    const widthText = v("wheel_width_in");
-    let width: number | null = null;
-    try {
-      width = checkWheelWidthIn(widthText === "" ? NaN : Number(widthText), "wheel_width_in");
-      item.wheel_width_in = width;
-    } catch (e) {
-      fail("wheel_width_in", e instanceof FitmentInputError ? e.message : "Enter the wheel width in inches.");
-    }
-    const offText = v("wheel_offset_mm");
-    const bsText = v("wheel_backspacing_in");
-    const ref = v("backspacing_from").toLowerCase();
-    if (offText && bsText) fail("wheel_offset_mm", "Give the offset or the backspacing, not both.");
-    else if (!offText && !bsText) fail("wheel_offset_mm", "Give the offset (mm) or the backspacing (in) with backspacing_from.");
-    else if (width !== null && offText) {
-      try {
-        item.wheel_offset_mm = checkOffsetMm(Number(offText), width, "wheel_offset_mm");
-      } catch (e) {
-        fail("wheel_offset_mm", e instanceof FitmentInputError ? e.message : "Enter the offset in mm.");
-      }
-    } else if (width !== null && bsText) {
-      if (ref !== "bead-seat" && ref !== "flange") fail("backspacing_from", "Say where the backspacing was measured to: bead-seat or flange.");
-      else {
-        try {
-          item.wheel_offset_mm = offsetFromBackspacing({ widthIn: width, backspacingIn: Number(bsText), measuredFrom: ref });
-          item.wheel_backspacing_in = Number(bsText);
-          item.wheel_backspacing_ref = ref;
-        } catch (e) {
-          fail("wheel_backspacing_in", e instanceof FitmentInputError ? e.message : "Enter the backspacing in inches.");
-        }
-      }
-    }
-    const bp = v("bolt_pattern");
-    if (!bp) fail("bolt_pattern", "Enter the bolt pattern, e.g. 6x5.5 or 8x165.1.");
-    else {
-      try {
-        item.bolt_pattern = parseBoltPattern(bp).text;
-      } catch (e) {
-        fail("bolt_pattern", e instanceof FitmentInputError ? e.message : "This bolt pattern could not be read.");
-      }
-    }
-    const bore = v("center_bore_mm");
-    if (bore) item.center_bore_mm = num("center_bore_mm", "Centre bore (mm)", 40, 200, "108");
-    const bl = v("beadlock").toLowerCase();
-    if (["yes", "y", "true", "1"].includes(bl)) item.beadlock = true;
-    else if (["", "no", "n", "false", "0"].includes(bl)) item.beadlock = false;
-    else fail("beadlock", `Beadlock must be yes or no, got “${v("beadlock")}”.`);
-  }
+  if (kind === "wheel") readWheelCells(v, fail, item);
 
   if (kind === "service") {
     const type = v("service_type").toLowerCase() as ServiceType;

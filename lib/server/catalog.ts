@@ -1,7 +1,10 @@
 import "server-only";
 import type { Knex } from "knex";
 import type { CatalogImportRow, CatalogItemRow, CatalogKind } from "@/lib/db/types";
+import { boltPatternQuery, equivalentBoltPatterns } from "@/lib/catalog/boltPatternSearch";
 import type { CatalogInput, CsvReport } from "@/lib/catalog/csv";
+import { containsPattern, searchKey } from "@/lib/search/normalize";
+import { withoutSearchKey } from "./searchKeyColumn";
 
 export const CATALOG_SORTS = ["sku", "description", "price_cents", "qty_on_hand", "kind", "tire_diameter_mm", "updated_at"] as const;
 export type CatalogSort = (typeof CATALOG_SORTS)[number];
@@ -15,17 +18,24 @@ export interface CatalogQuery {
   pageSize?: number;
 }
 
-const likeOf = (s: string) => `%${s.replace(/[%_\\]/g, (c) => "\\" + c)}%`;
-
-/** One page of the shop's catalog, filtered and sorted in PostgreSQL, with the total matched. */
+/**
+ * One page of the shop's catalog, filtered and sorted in PostgreSQL, with the total matched.
+ * The search looks for the query's search key (lib/search/normalize: × and x alike, 12.5 = 12.50,
+ * accents folded) in the stored key of SKU, description, tire size and bolt pattern, and finds a
+ * bolt pattern by either spelling (6x5.5 = 6x139.7).
+ */
 export async function listCatalog(db: Knex, shopId: string, q: CatalogQuery = {}) {
   const pageSize = Math.min(Math.max(q.pageSize ?? 25, 1), 200);
   const page = Math.max(q.page ?? 1, 1);
   const base = db<CatalogItemRow>("catalog_items").where({ shop_id: shopId });
   if (q.kind) base.andWhere({ kind: q.kind });
-  if (q.q?.trim()) {
-    const like = likeOf(q.q.trim());
-    base.andWhere((w) => w.whereILike("sku", like).orWhereILike("description", like).orWhereILike("tire_size", like).orWhereILike("bolt_pattern", like));
+  const text = q.q?.trim() ?? "";
+  if (text) {
+    const samePattern = boltPatternQuery(text) ? equivalentBoltPatterns(text, await storedBoltPatterns(db, shopId)) : [];
+    base.andWhere((w) => {
+      w.whereLike("search_key", containsPattern(searchKey(text)));
+      if (samePattern.length) w.orWhereIn("bolt_pattern", samePattern);
+    });
   }
   const [{ count }] = (await base.clone().count<{ count: string }[]>({ count: "*" })) as [{ count: string }];
   const sort = q.sort ?? "sku";
@@ -35,16 +45,22 @@ export async function listCatalog(db: Knex, shopId: string, q: CatalogQuery = {}
     .limit(pageSize)
     .offset((page - 1) * pageSize)
     .select("*");
-  return { items, total: Number(count), page, pageSize };
+  return { items: items.map(withoutSearchKey), total: Number(count), page, pageSize };
+}
+
+/** The bolt patterns the shop's catalog holds, each once (a few dozen at most). */
+async function storedBoltPatterns(db: Knex, shopId: string): Promise<string[]> {
+  return db("catalog_items").where({ shop_id: shopId }).whereNotNull("bolt_pattern").distinct("bolt_pattern").pluck("bolt_pattern");
 }
 
 export async function getCatalogItem(db: Knex, shopId: string, id: string): Promise<CatalogItemRow | undefined> {
-  return db<CatalogItemRow>("catalog_items").where({ id, shop_id: shopId }).first();
+  const row = await db<CatalogItemRow>("catalog_items").where({ id, shop_id: shopId }).first();
+  return row && withoutSearchKey(row);
 }
 
 /** Every item, for export, in SKU order. */
 export async function allCatalogItems(db: Knex, shopId: string): Promise<CatalogItemRow[]> {
-  return db<CatalogItemRow>("catalog_items").where({ shop_id: shopId }).orderBy([{ column: "kind" }, { column: "sku" }]);
+  return (await db<CatalogItemRow>("catalog_items").where({ shop_id: shopId }).orderBy([{ column: "kind" }, { column: "sku" }])).map(withoutSearchKey);
 }
 
 /** Keeps the validated rows of a previewed file until the owner confirms (or not). */
@@ -64,7 +80,8 @@ export async function stageImport(db: Knex, shopId: string, userId: string, file
       filename: filename.slice(0, 200),
       rows: JSON.stringify(report.items.map(({ row: _row, ...item }) => item)) as unknown as CatalogImportRow["rows"],
       row_count: report.items.length,
-      error_count: report.errors.length,
+      // Rows left out, not problems: a row with two problems is one row skipped.
+      error_count: report.skippedRows,
     })
     .returning(["id"]);
   return { id: (row as { id: string }).id, newItems: report.items.length - existing, updatedItems: existing };

@@ -1,46 +1,59 @@
 import "server-only";
 import type { Knex } from "knex";
 import type { CustomerRow, CustomerVehicleRow } from "@/lib/db/types";
+import { containsPattern, searchKey } from "@/lib/search/normalize";
+import { withoutSearchKey } from "./searchKeyColumn";
 import type { CustomerInput } from "@/lib/validation/quotes";
 
 export const phoneDigits = (phone: string) => phone.replace(/\D/g, "");
-const likeOf = (s: string) => `%${s.replace(/[%_\\]/g, (c) => "\\" + c)}%`;
 
-/** The shop's customers matching a phone number (by digits), an e-mail or a name. */
+/**
+ * The shop's customers matching a phone number (by digits), a name or the part of an e-mail
+ * address before the @ (through the stored search key: accents and Ł, Ø, ß … folded, so
+ * "lukasz" finds Łukasz), or a whole e-mail address when the search has an @. A domain alone
+ * finds nobody: every customer may share it.
+ */
 export async function searchCustomers(db: Knex, shopId: string, q: string): Promise<CustomerRow[]> {
-  const digits = phoneDigits(q);
-  return db<CustomerRow>("customers")
+  const text = q.trim();
+  const digits = phoneDigits(text);
+  const key = searchKey(text);
+  // Nothing left to look for (only accents, say): an empty condition would list everyone.
+  if (!key && digits.length < 4 && !text.includes("@")) return [];
+  const rows = await db<CustomerRow>("customers")
     .where({ shop_id: shopId })
     .andWhere((w) => {
-      if (digits.length >= 4) w.orWhereLike("phone_digits", likeOf(digits));
-      w.orWhereRaw("lower(email) = lower(?)", [q.trim()]).orWhereILike("name", likeOf(q.trim()));
-      if (q.includes("@")) w.orWhereILike("email", likeOf(q.trim()));
+      if (digits.length >= 4) w.orWhereLike("phone_digits", containsPattern(digits));
+      if (key) w.orWhereLike("search_key", containsPattern(key));
+      if (text.includes("@")) w.orWhereRaw("lower(email) like ?", [containsPattern(text.toLowerCase())]);
     })
     .orderBy("name")
     .limit(20);
+  return rows.map(withoutSearchKey);
 }
 
 /** An existing customer of this shop with the same phone digits or e-mail. */
 export async function findDuplicateCustomer(db: Knex, shopId: string, c: CustomerInput): Promise<CustomerRow | undefined> {
   const digits = phoneDigits(c.phone);
-  return db<CustomerRow>("customers")
+  const row = await db<CustomerRow>("customers")
     .where({ shop_id: shopId })
     .andWhere((w) => {
       if (digits.length >= 7) w.orWhere("phone_digits", digits);
       if (c.email) w.orWhereRaw("lower(email) = lower(?)", [c.email]);
     })
     .first();
+  return row && withoutSearchKey(row);
 }
 
 export async function createCustomer(db: Knex, shopId: string, c: CustomerInput): Promise<CustomerRow> {
   const [row] = await db<CustomerRow>("customers")
     .insert({ shop_id: shopId, name: c.name, phone: c.phone, phone_digits: phoneDigits(c.phone), email: c.email })
     .returning("*");
-  return row!;
+  return withoutSearchKey(row!);
 }
 
 export async function getCustomer(db: Knex, shopId: string, id: string): Promise<CustomerRow | undefined> {
-  return db<CustomerRow>("customers").where({ id, shop_id: shopId }).first();
+  const row = await db<CustomerRow>("customers").where({ id, shop_id: shopId }).first();
+  return row && withoutSearchKey(row);
 }
 
 export async function listVehicles(db: Knex, shopId: string, customerId: string): Promise<CustomerVehicleRow[]> {

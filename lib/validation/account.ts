@@ -44,7 +44,7 @@ export type ResetPasswordInput = z.infer<typeof resetPasswordSchema>;
 
 export const roleChangeSchema = z
   .object({
-    role: z.enum(["member", "shop_staff", "shop_owner", "admin"], { error: "Choose a role: member, shop staff, shop owner or admin." }),
+    role: z.enum(["member", "shop_staff", "shop_owner", "admin"], "Pick one of the roles in the list."),
     shopId: z.uuid("Pick a shop.").nullable().optional(),
   })
   .refine((v) => (v.role === "shop_staff" || v.role === "shop_owner" ? !!v.shopId : true), {

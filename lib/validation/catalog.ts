@@ -3,13 +3,23 @@ import { CATALOG_KINDS } from "@/lib/db/types";
 
 export const CATALOG_SORT_KEYS = ["sku", "description", "price_cents", "qty_on_hand", "kind", "tire_diameter_mm", "updated_at"] as const;
 
-/** The catalog table's server-side paging, sorting and filtering. */
+/** The catalog table's server-side paging, sorting and filtering; messages for the table's controls. */
 export const catalogQuerySchema = z.object({
-  kind: z.enum(CATALOG_KINDS).optional().or(z.literal("").transform(() => undefined)),
-  q: z.string().trim().max(100).optional(),
-  sort: z.enum(CATALOG_SORT_KEYS).optional(),
-  dir: z.enum(["asc", "desc"]).optional(),
-  page: z.coerce.number().int().min(1).max(100000).optional(),
-  pageSize: z.coerce.number().int().min(1).max(200).optional(),
+  kind: z.union([z.enum(CATALOG_KINDS), z.literal("").transform(() => undefined)], "Pick tires, wheels or services.").optional(),
+  q: z.string().trim().max(100, "Use at most 100 characters.").optional(),
+  sort: z.enum(CATALOG_SORT_KEYS, "Sort by one of the table's columns.").optional(),
+  dir: z.enum(["asc", "desc"], "Sort ascending or descending.").optional(),
+  page: z.coerce.number("Use a page number.").int("Use a whole page number.").min(1, "Pages start at 1.").max(100000, "Use a page number up to 100,000.").optional(),
+  pageSize: z.coerce.number("Use 1 to 200 rows per page.").int("Use 1 to 200 rows per page.").min(1, "Use 1 to 200 rows per page.").max(200, "Use 1 to 200 rows per page.").optional(),
 });
+
+/** What the catalog table calls each control, so a refused query names it (CatalogTable.tsx). */
+export const CATALOG_QUERY_LABELS = {
+  q: "Search SKU, description, size or bolt pattern",
+  kind: "Kind",
+  sort: "Sort",
+  dir: "Sort",
+  page: "Page",
+  pageSize: "Rows per page",
+} as const;
 export type CatalogQueryInput = z.infer<typeof catalogQuerySchema>;

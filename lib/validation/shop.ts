@@ -41,7 +41,10 @@ export const shopSettingsSchema = z.object({
 export type ShopSettingsInput = z.input<typeof shopSettingsSchema>;
 export type ShopSettings = z.output<typeof shopSettingsSchema>;
 
-export const staffInviteSchema = z.object({ email: emailField });
+/** The invited person's address: the shared e-mail rules, but asking for that person's address, not "your" own. */
+export const staffInviteSchema = z.object({
+  email: z.string().trim().min(1, "Enter the e-mail address of the person to invite.").pipe(emailField),
+});
 export type StaffInviteInput = z.infer<typeof staffInviteSchema>;
 
 export const joinShopSchema = z.object({

@@ -57,10 +57,11 @@ describe("accounts in Chromium", () => {
   });
 
   const roles = [
-    { role: "member", email: DEMO.member, sees: [], not: ["Users", "Shop"] },
-    { role: "shop_staff", email: DEMO.shop_staff, sees: ["Shop"], not: ["Users"] },
-    { role: "shop_owner", email: DEMO.shop_owner, sees: ["Shop"], not: ["Users"] },
-    { role: "admin", email: DEMO.admin, sees: ["Users", "Outbox"], not: ["Shop"] },
+    // Everyone signed in keeps a garage of their own, shop staff and owners too (lib/garage/access.ts).
+    { role: "member", email: DEMO.member, sees: ["Garage"], not: ["Users", "Shop"] },
+    { role: "shop_staff", email: DEMO.shop_staff, sees: ["Shop", "Garage"], not: ["Users"] },
+    { role: "shop_owner", email: DEMO.shop_owner, sees: ["Shop", "Garage"], not: ["Users"] },
+    { role: "admin", email: DEMO.admin, sees: ["Users", "Outbox", "Garage"], not: ["Shop"] },
   ] as const;
 
   for (const r of roles) {

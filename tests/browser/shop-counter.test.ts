@@ -149,11 +149,11 @@ describe("the shop counter, end to end", () => {
     );
     await page.setInputFiles("#catalog-file", file);
     await page.getByTestId("import-summary").waitFor();
-    expect(await page.getByTestId("import-summary").textContent()).toMatch(/3 rows read · 2 ready \(2 new, 0 updated\) · 1 with errors/);
+    expect(await page.getByTestId("import-summary").textContent()).toBe("3 rows read · 2 ready (2 new, 0 updated) · 1 row skipped, 1 problem");
     expect(await page.getByTestId("import-error").allTextContents()).toEqual([expect.stringMatching(/^3tire_size.*two-eighty-five/)]);
     await checkA11y(page, "import preview");
     await shot(page, "shop-catalog-import-preview");
-    await page.getByRole("button", { name: "Import 2 rows (skip 1 with errors)" }).click();
+    await page.getByRole("button", { name: "Import 2 rows (skip 1 with problems)" }).click();
     await page.getByText("2 items imported.").waitFor();
     await shot(page, "shop-catalog-import-done");
 

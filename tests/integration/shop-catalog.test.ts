@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import { CSV_COLUMNS, CSV_TEMPLATE } from "@/lib/catalog/csv";
+import { CSV_COLUMNS, CSV_TEMPLATE, parseCatalogCsv } from "@/lib/catalog/csv";
 import { rebuild, testDb } from "./support/db";
 import { ctx, req, sessionOf } from "./support/requests";
 
@@ -56,7 +56,7 @@ describe("catalog import", () => {
     const res = await upload(CSV_TEMPLATE);
     expect(res.status).toBe(200);
     const p = await res.json();
-    expect(p).toMatchObject({ total: 4, valid: 4, newItems: 4, updatedItems: 0, errorCount: 0 });
+    expect(p).toMatchObject({ total: 4, valid: 4, newItems: 4, updatedItems: 0, skippedRows: 0, problemCount: 0 });
     expect(await count()).toBe(0); // nothing until confirmed
     const c = await confirm(p.importId);
     expect(c.lines[0]).toEqual({ done: 0, total: 4 });
@@ -79,13 +79,28 @@ describe("catalog import", () => {
     as(ownerA);
     const text = [CSV_COLUMNS.join(","), "tire,MX-1,Good,100,4,LT285/70R17,,,,,,,,,,", "tire,MX-2,Bad size,100,4,not-a-size,,,,,,,,,,", "tire,MX-1,Dup,100,4,LT285/70R17,,,,,,,,,,"].join("\n");
     const p = await (await upload(text)).json();
-    expect(p).toMatchObject({ total: 3, valid: 1, errorCount: 2 });
+    expect(p).toMatchObject({ total: 3, valid: 1, skippedRows: 2, problemCount: 2 });
     expect(p.errors).toEqual([
       { row: 3, column: "tire_size", message: expect.stringMatching(/not-a-size/) },
       { row: 4, column: "sku", message: expect.stringMatching(/also on row 2/) },
     ]);
     await confirm(p.importId);
     expect(await db("catalog_items").where({ shop_id: SHOP_A }).whereLike("sku", "MX-%").pluck("sku")).toEqual(["MX-1"]);
+  });
+
+  it("numbers rows as the spreadsheet does and counts skipped rows, not messages", async () => {
+    as(ownerA);
+    const text = [
+      CSV_COLUMNS.join(","), // row 1
+      "tire,RN-1,Good,100,4,LT285/70R17,,,,,,,,,,", // 2
+      "", // 3: blank, keeps its number
+      "tire,RN-2,Two problems,ten,4,not-a-size,,,,,,,,,,", // 4: price and size
+      "tire,RN-3,Bad size,100,4,not-a-size,,,,,,,,,,", // 5
+    ].join("\r\n");
+    const p = await (await upload(text)).json();
+    expect(p).toMatchObject({ total: 3, valid: 1, skippedRows: 2, problemCount: 3 });
+    expect(p.errors.map((e: { row: number; column: string }) => [e.row, e.column])).toEqual([[4, "price"], [4, "tire_size"], [5, "tire_size"]]);
+    expect((await db("catalog_imports").where({ id: p.importId }).first()).error_count).toBe(2);
   });
 
   it("imports a 10,000-row file in one transaction, in seconds", async () => {
@@ -97,7 +112,7 @@ describe("catalog import", () => {
     const c = await confirm(p.importId);
     const t2 = performance.now();
     console.log(`10,000-row catalog CSV (${(text.length / 1024 / 1024).toFixed(2)} MB): preview ${(t1 - t0).toFixed(0)} ms, confirm ${(t2 - t1).toFixed(0)} ms, total ${(t2 - t0).toFixed(0)} ms`);
-    expect(p).toMatchObject({ total: 10_000, valid: 10_000, errorCount: 0 });
+    expect(p).toMatchObject({ total: 10_000, valid: 10_000, skippedRows: 0, problemCount: 0 });
     expect(c.last).toEqual({ imported: 10_000 });
     expect(c.lines.filter((l) => "done" in l)).toHaveLength(1 + 10_000 / 500);
     expect(await db("catalog_items").where({ shop_id: SHOP_A }).whereLike("sku", "BULK-%").count<{ c: string }[]>({ c: "*" })).toEqual([{ c: "10000" }]);
@@ -140,7 +155,7 @@ describe("catalog import", () => {
     const res = await preview(new NextRequest("http://127.0.0.1:3000/api/shop/catalog/import", { method: "POST", body: streamed, duplex: "half" } as unknown as ConstructorParameters<typeof NextRequest>[1]), ctx());
     expect(res.status).toBe(413);
     console.log(`50 MB upload refused in ${(performance.now() - t0).toFixed(0)} ms`);
-    expect(await db("catalog_imports").where({ shop_id: SHOP_A }).count<{ c: string }[]>({ c: "*" })).toEqual([{ c: "5" }]);
+    expect(await db("catalog_imports").where({ shop_id: SHOP_A }).count<{ c: string }[]>({ c: "*" })).toEqual([{ c: "6" }]);
   });
 });
 
@@ -169,7 +184,31 @@ describe("catalog access", () => {
     const prices = page.items.map((i: { price_cents: number }) => i.price_cents);
     expect([...prices].sort((a, b) => b - a)).toEqual(prices);
     expect(page.items.every((i: { kind: string }) => i.kind === "wheel")).toBe(true);
+    expect(Object.keys(page.items[0])).not.toContain("search_key"); // the stored search key stays in the database
     expect((await list(req("GET", "/api/shop/catalog?sort=password_hash"), ctx())).status).toBe(400);
+  });
+
+  it("answers a bad search or filter with a message naming the control as the table labels it", async () => {
+    as(staffA);
+    const bad = async (query: string) => {
+      const res = await list(req("GET", `/api/shop/catalog?${query}`), ctx());
+      expect(res.status, query).toBe(400);
+      return (await res.json()).error as string;
+    };
+    expect(await bad(`q=${"a".repeat(101)}`)).toBe("Search SKU, description, size or bolt pattern: use at most 100 characters.");
+    expect(await bad("kind=gizmo")).toBe("Kind: pick tires, wheels or services.");
+    expect(await bad("pageSize=500")).toBe("Rows per page: use 1 to 200 rows per page.");
+    expect(await bad("sort=password_hash")).toMatch(/^Sort: /);
+  });
+
+  it("takes a long file name without refusing the upload (the record keeps its first 200 characters)", async () => {
+    as(ownerA);
+    const name = `${"catalog-".repeat(40)}.csv`;
+    const res = await preview(req("POST", `/api/shop/catalog/import?filename=${encodeURIComponent(name)}`, CSV_TEMPLATE, { "content-type": "text/csv" }), ctx());
+    expect(res.status).toBe(200);
+    const { importId } = await res.json();
+    expect((await db("catalog_imports").where({ id: importId }).first()).filename).toBe(name.slice(0, 200));
+    await db("catalog_imports").where({ id: importId }).del();
   });
 
   it("exports what was imported in the documented format", async () => {
@@ -180,5 +219,57 @@ describe("catalog access", () => {
     expect(csv.split("\r\n")[0]).toBe(CSV_COLUMNS.join(","));
     expect(csv).toContain("tire,TR-EXAMPLE-35,");
     expect(csv.split("\r\n")).toHaveLength(1 + 4 + 1 + 10_000);
+  });
+});
+
+describe("catalog search: what people type finds what is stored", () => {
+  const SHOP_C = "0c000000-0000-4000-8000-00000000000c";
+  const staffC = { id: "0c000000-0000-4000-8000-000000000002", role: "shop_staff", shop_id: SHOP_C };
+  beforeAll(async () => {
+    await db("shops").insert({ id: SHOP_C, name: "Shop C" });
+    await db("users").insert({ ...staffC, email: "c@example.test", name: "C", password_hash: "x" });
+    const csv = [
+      CSV_COLUMNS.join(","),
+      "tire,T-3712,Mud terrain 37 x 12.50 R17,450,4,37x12.50R17LT,,,,,,,,,,",
+      "tire,T-3512,All terrain,400,4,35x12.50R17LT,,,,,,,,,,",
+      "tire,T-28570,Highway,300,4,LT285/70R17,,,,,,,,,,",
+      "wheel,W-IN,Steel wheel,200,4,,17,9,-12,,,6x5.5,108,no,,",
+      "wheel,W-MM,Alloy wheel,220,4,,17,9,0,,,6x139.7,106,no,,",
+      "wheel,W-5,Five lug,180,4,,17,8,0,,,5x139.7,108,no,,",
+      "wheel,W-135,Six lug,180,4,,17,8,0,,,6x135,87,no,,",
+      "service,S-CAF,Équilibrage café 50%_off,30,,,,,,,,,,,other,",
+    ].join("\n");
+    const r = parseCatalogCsv(csv);
+    expect(r.errors).toEqual([]);
+    await db("catalog_items").insert(r.items.map(({ row: _r, ...i }) => ({ ...i, shop_id: SHOP_C })));
+  });
+  const skus = async (q: string) => {
+    as(staffC as typeof ownerA);
+    const res = await list(req("GET", `/api/shop/catalog?q=${encodeURIComponent(q)}&pageSize=50`), ctx());
+    expect(res.status).toBe(200);
+    return ((await res.json()).items as { sku: string }[]).map((i) => i.sku).sort();
+  };
+
+  it("finds a tire size however the × and the decimals are typed", async () => {
+    // The engine stores flotation sizes with two decimals: 37x12.50R17LT.
+    for (const q of ["37×12.50", "37x12.5", "37X12.50", "37 x 12.50", "37 × 12.5", "37x12.50R17", "37×12.5r17lt"]) {
+      expect(await skus(q), q).toEqual(["T-3712"]);
+    }
+    expect(await skus("12.50")).toEqual(["T-3512", "T-3712"]);
+    expect(await skus("285/70")).toEqual(["T-28570"]);
+  });
+
+  it("finds a bolt pattern by either spelling (6x5.5 = 6x139.7: 5.5 in × 25.4 mm/in, NIST SP 811)", async () => {
+    for (const q of ["6x139.7", "6x5.5", "6 × 5.5", "6 on 5.5", "6X139.70"]) expect(await skus(q), q).toEqual(["W-IN", "W-MM"]);
+    expect(await skus("5x139.7")).toEqual(["W-5"]);
+    expect(await skus("6x135")).toEqual(["W-135"]);
+  });
+
+  it("folds accents and takes % and _ as themselves", async () => {
+    expect(await skus("cafe")).toEqual(["S-CAF"]);
+    expect(await skus("EQUILIBRAGE")).toEqual(["S-CAF"]);
+    expect(await skus("50%_")).toEqual(["S-CAF"]);
+    expect(await skus("%")).toEqual(["S-CAF"]);
+    expect(await skus("_")).toEqual(["S-CAF"]);
   });
 });

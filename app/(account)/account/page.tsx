@@ -7,23 +7,16 @@ import { PageHeader } from "@/components/ui/PageHeader";
 import { SignOutEverywhereButton } from "@/components/site/SignOutEverywhereButton";
 import { requirePageCaller } from "@/lib/auth/session";
 import { db } from "@/lib/db";
-import type { Role } from "@/lib/db/types";
 import { findUserById } from "@/lib/server/users";
+import { ROLE_SUMMARY } from "./roleSummary";
 
 export const metadata: Metadata = { title: "Your account" };
-
-const CAN: Record<Role, { title: string; items: string[] }> = {
-  member: { title: "Member", items: ["Compare setups and keep the comparisons you save", "Keep vehicles with their measured clearances", "Share a comparison by link"] },
-  shop_staff: { title: "Shop staff", items: ["Everything a member can do", "Read your shop's catalog", "Create and send quotes at the counter"] },
-  shop_owner: { title: "Shop owner", items: ["Everything shop staff can do", "Manage the shop's settings, catalog and staff", "See every quote of the shop"] },
-  admin: { title: "Admin", items: ["Everything a member can do", "List users and change their roles", "Read the development outbox"] },
-};
 
 export default async function AccountPage({ searchParams }: { searchParams: Promise<{ welcome?: string }> }) {
   const caller = await requirePageCaller("/account");
   const [user, sp] = await Promise.all([findUserById(db, caller.userId), searchParams]);
   const shop = caller.shopId ? await db("shops").where({ id: caller.shopId }).first("name") : null;
-  const can = CAN[caller.role];
+  const can = ROLE_SUMMARY[caller.role];
   return (
     <>
       <PageHeader title={`Hello, ${user?.name ?? caller.name}`} lead={user?.email} />

@@ -76,7 +76,7 @@ export function ComparisonList({ initial }: { initial: ListData }) {
         <DisplayToggle prefs={prefs} onChange={setPrefs} />
       </Card>
       {list.isError && <Alert tone="error">{(list.error as Error).message}</Alert>}
-      <p role="status" aria-live="polite" className="text-sm text-basalt-600" data-testid="list-status">
+      <p role="status" aria-live="polite" className="text-sm text-basalt-600 wrap-anywhere" data-testid="list-status">
         {list.isFetching && !list.isLoading ? "Updating…" : items.length === 0 ? (q ? `No saved comparison matches “${q}”.` : "") : `${items.length} saved comparison${items.length === 1 ? "" : "s"}${q ? ` matching “${q}”` : ""}.`}
       </p>
       {items.length === 0 && !q && !list.isLoading && (
@@ -145,7 +145,9 @@ function ComparisonItem({ c, prefs }: { c: SavedComparison; prefs: DisplayPrefs 
 
   const f = c.figures;
   return (
-    <li aria-labelledby={headingId} className="rounded-card bg-white p-4 shadow-card ring-1 ring-basalt-100 sm:p-5" data-testid="saved-comparison">
+    // wrap-anywhere is inherited: a name that is one long word (it shows in the heading, the status
+    // lines and the delete question) breaks where it must instead of widening the page.
+    <li aria-labelledby={headingId} className="rounded-card bg-white p-4 shadow-card ring-1 ring-basalt-100 wrap-anywhere sm:p-5" data-testid="saved-comparison">
       <div className="flex flex-wrap items-start justify-between gap-3">
         <div className="min-w-0 flex-1">
           {renaming ? (

@@ -9,7 +9,7 @@ import type { ComparisonInput } from "@/lib/comparison/schema";
 export interface CurrentInput {
   input: ComparisonInput;
   complete: boolean;
-  /** The garage vehicle picked in the workspace (null: none); undefined where there is no garage (visitors, shop roles). */
+  /** The garage vehicle picked in the workspace (null: none); undefined where there is no garage (visitors). */
   vehicleId?: string | null;
 }
 

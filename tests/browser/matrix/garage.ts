@@ -1,11 +1,13 @@
 import { call } from "../support/http";
 import type { MatrixCase } from "./types";
 
-// The garage belongs to members (admins keep their own); shop accounts get 403. Rows of the
-// demo member (db/seeds/04_demo_garage.ts) are "not found" for an admin — never 403.
+// Every signed-in person keeps a garage of their own (shop staff and owners too: lib/garage/access.ts).
+// Rows of the demo member (db/seeds/04_demo_garage.ts) are "not found" for everyone else — never
+// 403; only admins may look at a member's photos.
 const DEMO_VEHICLE = "d4000000-0000-4000-8000-000000000001";
 const DEMO_PHOTO = "d4000000-0000-4000-8000-000000000201";
-const garage = (status: number, admin = status) => ({ anonymous: 401, member: status, shop_staff: 403, shop_owner: 403, admin });
+/** `status` for the demo member, `others` for shop staff, shop owner and admin (`admin` when the admin differs). */
+const garage = (status: number, others = status, admin = others) => ({ anonymous: 401, member: status, shop_staff: others, shop_owner: others, admin });
 
 const SETUP = { tire: "265/70R17", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 }, spacerMm: 0 };
 const VEHICLE = {
@@ -51,7 +53,7 @@ export const cases: MatrixCase[] = [
     path: `/api/vehicles/${DEMO_VEHICLE}/photos`,
     body: { file: "not multipart" },
     expect: garage(415, 404),
-    note: "JSON instead of multipart; the admin is not the owner",
+    note: "JSON instead of multipart; only the member owns the vehicle",
   },
   {
     route: "/api/vehicles/[id]/checklist",
@@ -65,8 +67,8 @@ export const cases: MatrixCase[] = [
     path: `/api/vehicles/${DEMO_VEHICLE}/checklist`,
     body: { planned: { ...SETUP, tire: "35x12.50R17LT", wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 } }, ticked: ["not-an-item"] },
     expect: garage(422, 404),
-    note: "an item that is not on the list; the admin is not the owner",
+    note: "an item that is not on the list; only the member owns the vehicle",
   },
-  { route: "/api/photos/[id]", method: "GET", path: `/api/photos/${DEMO_PHOTO}?variant=thumb`, expect: garage(200, 200), note: "owner and admins see photos" },
+  { route: "/api/photos/[id]", method: "GET", path: `/api/photos/${DEMO_PHOTO}?variant=thumb`, expect: garage(200, 404, 200), note: "the owner and admins see photos" },
   { route: "/api/photos/[id]", method: "DELETE", path: "/api/photos/d4000000-0000-4000-8000-0000000009ff", expect: garage(404, 404), note: "no such photo" },
 ];

@@ -25,7 +25,8 @@ export default async function JoinPage({ params }: { params: Promise<{ token: st
       <h1 className="text-2xl font-bold">Join {invite.shop_name}</h1>
       <p className="mt-1 text-basalt-600">
         You were invited as counter staff with <strong>{invite.email}</strong>.{" "}
-        {hasAccount ? "This address already has a Hubface account: confirm with its password." : "Choose your name and a password."}
+        {hasAccount ? "This address already has a Hubface account: confirm with its password." : "Choose your name and a password."} As staff you can
+        also do everything a member can: your garage and saved comparisons stay yours, and the shop does not see them.
       </p>
       <JoinForm token={token} email={invite.email} hasAccount={hasAccount} />
     </Card>

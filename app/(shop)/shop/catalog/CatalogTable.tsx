@@ -9,6 +9,7 @@ import { Card } from "@/components/ui/Card";
 import { api } from "@/lib/client/api";
 import type { CatalogItemRow } from "@/lib/db/types";
 import { formatUsd } from "@/lib/quotes/money";
+import { CATALOG_QUERY_LABELS } from "@/lib/validation/catalog";
 
 type Item = Omit<CatalogItemRow, "created_at" | "updated_at"> & { updated_at: string };
 interface Page {
@@ -98,10 +99,12 @@ export function CatalogTable() {
     <Card className="overflow-x-auto" tabIndex={0} role="region" aria-label="Catalog items">
       <div className="mb-4 flex flex-wrap items-end gap-3">
         <label className="flex flex-col gap-1 text-sm font-medium">
-          Search SKU, description, size or bolt pattern
+          {CATALOG_QUERY_LABELS.q}
           <input
             type="search"
-            className="min-h-10 w-72 rounded-lg border border-basalt-300 px-3"
+            maxLength={100}
+            placeholder="e.g. 37x12.50, 6x139.7 or a SKU"
+            className="min-h-10 w-72 max-w-full rounded-lg border border-basalt-300 px-3 placeholder:text-basalt-500"
             value={search}
             onChange={(e) => {
               setSearch(e.target.value);
@@ -110,7 +113,7 @@ export function CatalogTable() {
           />
         </label>
         <label className="flex flex-col gap-1 text-sm font-medium">
-          Kind
+          {CATALOG_QUERY_LABELS.kind}
           <select
             className="min-h-10 rounded-lg border border-basalt-300 px-3"
             value={kind}
@@ -164,7 +167,7 @@ export function CatalogTable() {
         <span>Page {pagination.pageIndex + 1} of {Math.max(table.getPageCount(), 1)}</span>
         <Button variant="secondary" className="min-h-8 py-1" onClick={() => table.nextPage()} disabled={!table.getCanNextPage()}>Next</Button>
         <label className="ml-auto flex items-center gap-2">
-          Rows per page
+          {CATALOG_QUERY_LABELS.pageSize}
           <select className="rounded border border-basalt-300 px-2 py-1" value={pagination.pageSize} onChange={(e) => setPagination({ pageIndex: 0, pageSize: Number(e.target.value) })}>
             {[10, 25, 50, 100].map((n) => <option key={n} value={n}>{n}</option>)}
           </select>

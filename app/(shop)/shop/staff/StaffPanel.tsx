@@ -64,7 +64,7 @@ export function StaffPanel({ initial, selfId }: { initial: StaffData; selfId: st
                     className="min-h-8 py-1"
                     pending={remove.isPending && remove.variables === p.id}
                     onClick={() => {
-                      if (window.confirm(`Remove ${p.name} from the shop? The account stays, without shop access.`)) remove.mutate(p.id);
+                      if (window.confirm(`Remove ${p.name} from the shop? The account stays, with its own garage and comparisons, without shop access.`)) remove.mutate(p.id);
                     }}
                   >
                     Remove<span className="sr-only"> {p.name}</span>

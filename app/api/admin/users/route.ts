@@ -1,11 +1,12 @@
-import { z } from "zod";
 import { db } from "@/lib/db";
+import { parseLabelledQuery } from "@/lib/http/labelledQuery";
 import { route } from "@/lib/http/route";
 import { listUsers } from "@/lib/server/users";
+import { USERS_SEARCH_LABEL, adminUsersQuerySchema } from "@/lib/validation/adminUsers";
 
-const query = z.object({ q: z.string().trim().max(100).optional() });
-
-export const GET = route({ access: ["admin"], query }, async ({ query }) => {
+export const GET = route({ access: ["admin"] }, async ({ req }) => {
+  // The page shows only the message, beside its search box.
+  const query = parseLabelledQuery(adminUsersQuerySchema, req, { q: USERS_SEARCH_LABEL });
   const users = await listUsers(db, { search: query.q });
   return { users };
 });

@@ -1,12 +1,15 @@
 import { db } from "@/lib/db";
 import { HttpError } from "@/lib/http/errors";
+import { parseLabelledQuery } from "@/lib/http/labelledQuery";
 import { route } from "@/lib/http/route";
 import { createCustomer, findDuplicateCustomer, searchCustomers } from "@/lib/server/customers";
 import { SHOP_ANY, shopIdOf } from "@/lib/server/shops";
 import { customerSchema, customerSearchSchema } from "@/lib/validation/quotes";
 
 /** Finds the shop's customers again by phone (digits), e-mail or name. */
-export const GET = route({ access: SHOP_ANY, query: customerSearchSchema }, async ({ caller, query }) => {
+export const GET = route({ access: SHOP_ANY }, async ({ caller, req }) => {
+  // The quote builder shows only the message, under its search box labelled like this.
+  const query = parseLabelledQuery(customerSearchSchema, req, { q: "Phone, e-mail or name" });
   return { customers: await searchCustomers(db, shopIdOf(caller), query.q) };
 });
 

@@ -13,15 +13,18 @@ interface Preview {
   valid: number;
   newItems: number;
   updatedItems: number;
-  errorCount: number;
-  errors: { row: number; column: string; message: string }[];
+  /** Rows left out (a row with several problems counts once). */
+  skippedRows: number;
+  /** Problems found, the length of `errors` before it was cut at 500. */
+  problemCount: number;
+  errors: { row: number; line?: number; column: string; message: string }[];
 }
 type Phase =
   | { at: "pick" }
   | { at: "uploading"; pct: number }
   | { at: "preview"; preview: Preview; file: string }
   | { at: "importing"; done: number; total: number }
-  | { at: "done"; imported: number };
+  | { at: "done"; imported: number; skipped: number };
 
 function upload(file: File, onProgress: (pct: number) => void): Promise<{ status: number; body: Record<string, unknown> }> {
   return new Promise((resolve) => {
@@ -40,6 +43,9 @@ function upload(file: File, onProgress: (pct: number) => void): Promise<{ status
     xhr.send(file);
   });
 }
+
+/** "1 row", "9 rows": the preview counts rows and problems, never one for the other. */
+const count = (n: number, noun: string) => `${n.toLocaleString("en-US")} ${noun}${n === 1 ? "" : "s"}`;
 
 function Progress({ label, value, max }: { label: string; value: number; max: number }) {
   return (
@@ -75,7 +81,7 @@ export function ImportFlow() {
     setPhase({ at: "preview", preview: res.body as unknown as Preview, file: file.name });
   }
 
-  async function onConfirm(importId: string, total: number) {
+  async function onConfirm(importId: string, total: number, skipped: number) {
     setFailure(null);
     setPhase({ at: "importing", done: 0, total });
     const res = await fetch(`/api/shop/catalog/import/${importId}`, { method: "POST" }).catch(() => null);
@@ -101,7 +107,7 @@ export function ImportFlow() {
           return;
         }
         if (msg.imported !== undefined) {
-          setPhase({ at: "done", imported: msg.imported });
+          setPhase({ at: "done", imported: msg.imported, skipped });
           await qc.invalidateQueries({ queryKey: ["shop-catalog"] });
         } else if (msg.done !== undefined) setPhase({ at: "importing", done: msg.done, total: msg.total ?? total });
       }
@@ -131,32 +137,33 @@ export function ImportFlow() {
           <div>
             <h2 className="text-lg font-semibold">Preview of {phase.file}</h2>
             <p className="mt-1 text-sm" data-testid="import-summary">
-              {phase.preview.total.toLocaleString("en-US")} rows read · {phase.preview.valid.toLocaleString("en-US")} ready ({phase.preview.newItems.toLocaleString("en-US")} new,{" "}
-              {phase.preview.updatedItems.toLocaleString("en-US")} updated) · {phase.preview.errorCount.toLocaleString("en-US")} with errors
+              {count(phase.preview.total, "row")} read · {phase.preview.valid.toLocaleString("en-US")} ready ({phase.preview.newItems.toLocaleString("en-US")} new,{" "}
+              {phase.preview.updatedItems.toLocaleString("en-US")} updated)
+              {phase.preview.skippedRows > 0 && ` · ${count(phase.preview.skippedRows, "row")} skipped, ${count(phase.preview.problemCount, "problem")}`}
             </p>
           </div>
-          {phase.preview.errorCount > 0 && (
-            <div className="max-h-96 overflow-auto rounded-lg ring-1 ring-basalt-200" tabIndex={0} role="region" aria-label="Rows with errors">
+          {phase.preview.problemCount > 0 && (
+            <div className="max-h-96 overflow-auto rounded-lg ring-1 ring-basalt-200" tabIndex={0} role="region" aria-label="Problems by row">
               <table className="w-full text-left text-sm">
-                <caption className="sr-only">Rows with errors</caption>
+                <caption className="sr-only">Problems by row; row numbers as a spreadsheet shows them, the header being row 1</caption>
                 <thead className="sticky top-0 bg-basalt-50 text-xs uppercase tracking-wide text-basalt-600">
                   <tr><th className="px-3 py-2">Row</th><th className="px-3">Column</th><th className="px-3">Problem</th></tr>
                 </thead>
                 <tbody className="divide-y divide-basalt-100">
                   {phase.preview.errors.map((e, i) => (
-                    <tr key={i} data-testid="import-error"><td className="px-3 py-1 tabular-nums">{e.row}</td><td className="px-3 font-mono text-xs">{e.column || "—"}</td><td className="px-3">{e.message}</td></tr>
+                    <tr key={i} data-testid="import-error"><td className="whitespace-nowrap px-3 py-1 tabular-nums">{e.row}{e.line ? ` (line ${e.line})` : ""}</td><td className="px-3 font-mono text-xs">{e.column || "—"}</td><td className="px-3">{e.message}</td></tr>
                   ))}
                 </tbody>
               </table>
-              {phase.preview.errorCount > phase.preview.errors.length && (
-                <p className="p-3 text-sm text-basalt-600">… and {phase.preview.errorCount - phase.preview.errors.length} more.</p>
+              {phase.preview.problemCount > phase.preview.errors.length && (
+                <p className="p-3 text-sm text-basalt-600">… and {count(phase.preview.problemCount - phase.preview.errors.length, "more problem")}.</p>
               )}
             </div>
           )}
           <div className="flex flex-wrap gap-2">
             {phase.preview.importId ? (
-              <Button onClick={() => void onConfirm(phase.preview.importId!, phase.preview.valid)}>
-                Import {phase.preview.valid.toLocaleString("en-US")} rows{phase.preview.errorCount ? ` (skip ${phase.preview.errorCount} with errors)` : ""}
+              <Button onClick={() => void onConfirm(phase.preview.importId!, phase.preview.valid, phase.preview.skippedRows)}>
+                Import {count(phase.preview.valid, "row")}{phase.preview.skippedRows ? ` (skip ${phase.preview.skippedRows.toLocaleString("en-US")} with problems)` : ""}
               </Button>
             ) : (
               <Alert tone="warning">No row can be imported. Fix the file and upload it again.</Alert>
@@ -168,7 +175,7 @@ export function ImportFlow() {
       {phase.at === "importing" && <Progress label="Importing (one transaction: all rows or none)" value={phase.done} max={phase.total} />}
       {phase.at === "done" && (
         <Alert tone="success" title="Import finished">
-          {phase.imported.toLocaleString("en-US")} items imported. <Link className="underline" href="/shop/catalog">Back to the catalog</Link>
+          {phase.imported.toLocaleString("en-US")} items imported.{phase.skipped ? ` ${count(phase.skipped, "row")} with problems skipped.` : ""} <Link className="underline" href="/shop/catalog">Back to the catalog</Link>
         </Alert>
       )}
     </Card>

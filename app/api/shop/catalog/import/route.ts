@@ -8,12 +8,14 @@ import { stageImport } from "@/lib/server/catalog";
 import { SHOP_OWNER, shopIdOf } from "@/lib/server/shops";
 
 const MAX_ERRORS_SHOWN = 500;
+/** The picked file's name, kept for the import's record: a long one is cut, never a reason to refuse the upload. */
+const FILENAME = z.object({ filename: z.string().transform((f) => f.slice(0, 200)).optional() });
 
 /**
  * Step 1 of an import: the CSV file as the request body → a preview with a row-by-row report.
  * Valid rows are staged (nothing touches the catalog until the owner confirms).
  */
-export const POST = route({ access: SHOP_OWNER, query: z.object({ filename: z.string().max(200).optional() }) }, async ({ caller, req, query }) => {
+export const POST = route({ access: SHOP_OWNER, query: FILENAME }, async ({ caller, req, query }) => {
   const bytes = await readCappedBytes(req, CSV_MAX_BYTES);
   const decoded = decodeCsvBytes(bytes);
   if ("error" in decoded) throw new HttpError(422, decoded.error);
@@ -27,7 +29,9 @@ export const POST = route({ access: SHOP_OWNER, query: z.object({ filename: z.st
     valid: report.items.length,
     newItems: staged?.newItems ?? 0,
     updatedItems: staged?.updatedItems ?? 0,
-    errorCount: report.errors.length,
+    // Rows and problems are counted apart: one row can have several problems, and it is rows that are skipped.
+    skippedRows: report.skippedRows,
+    problemCount: report.errors.length,
     errors: report.errors.slice(0, MAX_ERRORS_SHOWN),
   };
 });
