@@ -14,7 +14,7 @@ describe("the editor's form", () => {
     expect(r.problems).toEqual([
       "Line 2 — quantity: Count whole items: 1.5 is not a whole number.",
       "Line 2 — description: Describe the line.",
-      "Line 2 — unit price: Enter the price in dollars, like 129.50.",
+      "Line 2 — unit price: Enter the unit price in dollars, like 129.50.",
       "Quote discount: Enter the quote discount in dollars (0 or more).",
     ]);
   });

@@ -95,7 +95,7 @@ export function bodyOf(form: EditForm): { body: QuoteBody; problems: [] } | { bo
     const unitPriceCents = parseMoneyToCents(l.unitPrice);
     const discountCents = parseMoneyToCents(l.discount.trim() || "0");
     if (!l.description.trim()) say(`lines.${i}.description`, "Describe the line.");
-    if (unitPriceCents === null || unitPriceCents < 0) say(`lines.${i}.unitPriceCents`, "Enter the price in dollars, like 129.50.");
+    if (unitPriceCents === null || unitPriceCents < 0) say(`lines.${i}.unitPriceCents`, "Enter the unit price in dollars, like 129.50.");
     if (discountCents === null || discountCents < 0) say(`lines.${i}.discountCents`, "Enter the discount in dollars (0 or more).");
     return { kind: l.kind, unit: l.unit, catalogItemId: l.catalogItemId, sku: l.sku, description: l.description, quantity, unitPriceCents: unitPriceCents ?? 0, discountCents: discountCents ?? 0, taxable: l.taxable };
   });

@@ -135,7 +135,7 @@ export const quoteLineSchema = z.object(
     sku: z.string({ error: "Enter the SKU as text." }).trim().max(64, "Use at most 64 characters.").default(""),
     description: z.string({ error: "Describe the line." }).trim().min(1, "Describe the line.").max(200, "Use at most 200 characters."),
     quantity: quantityField,
-    unitPriceCents: centsField("the price").max(100_000_000, "At most 1,000,000.00."),
+    unitPriceCents: centsField("the unit price").max(100_000_000, "The unit price is at most 1,000,000.00."),
     discountCents: centsField("the discount").default(0),
     taxable: z.boolean({ error: "Tick the box or not: taxed or not taxed." }).default(true),
   },
