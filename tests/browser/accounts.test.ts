@@ -21,7 +21,7 @@ async function axeClean(name: string) {
 }
 
 async function signOut() {
-  await page.getByRole("button", { name: "Sign out" }).click();
+  await page.getByRole("button", { name: "Sign out", exact: true }).click();
   await page.waitForURL((u) => u.pathname === "/");
   await expect.poll(() => page.getByRole("link", { name: "Sign in" }).first().isVisible()).toBe(true);
 }

@@ -170,7 +170,7 @@ describe("the garage in Chromium", () => {
     const rows = page.getByTestId("finder-results").locator("tbody tr");
     await expect.poll(() => rows.count()).toBeGreaterThan(3);
     await page.getByRole("button", { name: /^Diameter/ }).click();
-    await expect.poll(() => page.locator("th", { hasText: "Diameter" }).getAttribute("aria-sort")).toBe("ascending");
+    await expect.poll(() => page.getByTestId("finder-results").locator("th", { hasText: "Diameter" }).getAttribute("aria-sort")).toBe("ascending");
     await page.getByLabel("Filter by tire size or wheel").fill("17x9");
     await expect.poll(async () => (await rows.allTextContents()).every((t) => t.includes("17x9"))).toBe(true);
     await axeClean("garage-finder");
@@ -190,7 +190,7 @@ describe("the garage in Chromium", () => {
     // from the axis: √(401.4² + 137.58²) = 424.323 vs 422.703 → bumper corner 19.05 − 1.62 = 17.43 mm,
     // frame rail 31.75 − 1.62 = 30.13 mm: both clear of the 12.7 mm margin.
     await page.getByRole("button", { name: /^Diameter/ }).click();
-    await expect.poll(() => page.locator("th", { hasText: "Diameter" }).getAttribute("aria-sort")).toBe("descending");
+    await expect.poll(() => page.getByTestId("finder-results").locator("th", { hasText: "Diameter" }).getAttribute("aria-sort")).toBe("descending");
     const top = page.getByTestId("finder-results").locator("tbody tr").first();
     await top.getByTestId("candidate-workspace").click();
     await page.waitForURL(/\/workspace\?.*v=/);

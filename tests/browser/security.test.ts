@@ -37,12 +37,12 @@ describe("security basics over HTTP", () => {
   });
 
   it("never carries a sign-in callbackUrl that a browser reads as another host (open redirect)", async () => {
+    // The page hands the sign-in form the path to go to next (a prop in the page's flight data).
+    const target = async (q: string) => /\\"callbackUrl\\":\\"([^"\\]*)\\"/.exec(await (await fetch(`${BASE}/sign-in?callbackUrl=${q}`)).text())?.[1];
     for (const q of ["/%5Cevil.example/phish", "/%09/evil.example/phish", "%2F%2Fevil.example"]) {
-      const html = await (await fetch(`${BASE}/sign-in?callbackUrl=${q}`)).text();
-      expect(html, q).not.toContain("evil.example");
+      expect(await target(q), q).toBe("/account");
     }
-    const kept = await (await fetch(`${BASE}/sign-in?callbackUrl=%2Fgarage%3Ftab%3Dphotos`)).text();
-    expect(kept).toContain("/garage?tab=photos");
+    expect(await target("%2Fgarage%3Ftab%3Dphotos")).toBe("/garage?tab=photos");
   });
 
   it("answers a GET of the credentials callback with 405, not 500", async () => {
