@@ -9,6 +9,7 @@
 import { createServer } from "node:http";
 import { parseArgs } from "node:util";
 import next from "next";
+import { CLIENT_ADDRESS_HEADER, resolveClientAddress, trustClientAddressHeader, trustedProxies } from "@/lib/auth/clientAddress";
 import { Microcache, installSharedMicrocache } from "@/lib/http/microcache";
 
 const { values } = parseArgs({ options: { hostname: { type: "string", default: "127.0.0.1" }, port: { type: "string", default: process.env.PORT ?? "3000" } } });
@@ -24,7 +25,16 @@ await app.prepare();
 const cache = process.env.HUBFACE_MICROCACHE === "off" ? undefined : new Microcache({ paths: /^\/s\/[A-Za-z0-9_-]{16,64}$/ });
 installSharedMicrocache(cache);
 
+// Rate limits and sign-in backoff key on the client's address. Route handlers cannot see the
+// socket, so this server writes it into CLIENT_ADDRESS_HEADER (any copy the client sent is
+// dropped) from the socket peer, reading X-Forwarded-For only when that peer is one of
+// TRUSTED_PROXIES (addresses or CIDRs; unset = trust none, e.g. no load balancer in front).
+const proxies = trustedProxies();
+trustClientAddressHeader();
+
 const server = createServer((req, res) => {
+  const forwarded = req.headers["x-forwarded-for"];
+  req.headers[CLIENT_ADDRESS_HEADER] = resolveClientAddress(req.socket.remoteAddress, Array.isArray(forwarded) ? forwarded.join(",") : forwarded, proxies);
   if (cache?.serve(req, res)) return;
   cache?.capture(req, res);
   handle(req, res).catch((error: unknown) => {

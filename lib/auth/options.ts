@@ -8,15 +8,11 @@ import { signInSchema } from "@/lib/validation/account";
 import { revokeSession, sessionState } from "@/lib/server/sessions";
 import { findUserByEmail } from "@/lib/server/users";
 import { verifyPassword } from "./password";
-import { THROTTLE, accountKey, addressKey, clearKey, lockState, recordFailure } from "./throttle";
+import { checkAttempt, clearAttempts, recordFailure, waitMessage } from "./throttle";
 import { clientAddress } from "./clientAddress";
 
 /** How long a session lasts without signing in again (seconds). */
 const SESSION_MAX_AGE = 60 * 60 * 24 * 14;
-
-const lockedMessage = (minutes: number) =>
-  `Too many failed sign-ins. This account is locked for ${minutes} more minute${minutes === 1 ? "" : "s"}; ` +
-  "try again later or reset your password.";
 
 export const authOptions: NextAuthOptions = {
   secret: process.env.NEXTAUTH_SECRET,
@@ -31,22 +27,21 @@ export const authOptions: NextAuthOptions = {
         const parsed = signInSchema.safeParse(raw);
         if (!parsed.success) throw new Error("Enter your e-mail address and password.");
         const { email, password } = parsed.data;
-        const keys = [accountKey(email), addressKey(clientAddress(req?.headers))];
+        const attempt = { email, address: clientAddress(req?.headers) };
 
-        const lock = await lockState(db, keys);
-        if (lock.locked) throw new Error(lockedMessage(lock.minutesLeft));
+        // Backoff per (address, account), never a lock anyone could put on the account (lib/auth/throttle.ts).
+        const gate = await checkAttempt(db, attempt);
+        if (gate.waitMs > 0) throw new Error(waitMessage(gate.waitMs));
+        if (gate.delayMs > 0) await new Promise((r) => setTimeout(r, gate.delayMs));
 
         const user = await findUserByEmail(db, email);
         const ok = await verifyPassword(password, user?.password_hash);
         if (!ok || !user) {
-          const [acct, addr] = await Promise.all([
-            recordFailure(db, keys[0]!, THROTTLE.accountLimit),
-            recordFailure(db, keys[1]!, THROTTLE.addressLimit),
-          ]);
-          if (acct.locked_until || addr.locked_until) throw new Error(lockedMessage(THROTTLE.lockMinutes));
+          const waitMs = await recordFailure(db, attempt);
+          if (waitMs > 0) throw new Error(waitMessage(waitMs));
           throw new Error("That e-mail address and password do not match an account.");
         }
-        await clearKey(db, keys[0]!);
+        await clearAttempts(db, attempt);
         return { id: user.id, email: user.email, name: user.name, role: user.role, shopId: user.shop_id, sessionVersion: user.session_version };
       },
     }),

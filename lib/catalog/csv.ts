@@ -74,6 +74,33 @@ export interface CsvReport {
 const SKU_RE = /^[A-Za-z0-9][A-Za-z0-9._/-]{0,63}$/;
 
 /**
+ * Columns written as numbers by export. Their cells are never neutralized: a spreadsheet reads
+ * "-12" as the number −12 (a wheel's offset), not a formula, and export only ever writes plain
+ * decimal numbers there. Every other column is text and is neutralized.
+ */
+const NUMERIC_COLUMNS: ReadonlySet<CsvColumn> = new Set(["price", "qty_on_hand", "wheel_diameter_in", "wheel_width_in", "wheel_offset_mm", "wheel_backspacing_in", "center_bore_mm"]);
+
+/** A text cell a spreadsheet would run as a formula (=, +, -, @, tab, CR), behind any quotes neutralization added. */
+const FORMULA_START = /^'*[=+\-@\t\r]/;
+
+/**
+ * CSV injection defence for a text cell (OWASP "CSV Injection": prefix a single quote to a
+ * cell starting with = + - @ tab or CR). A cell that already starts with quotes before such a
+ * character gets one more, so import's unquoteTextCell gives back exactly what was stored.
+ *
+ * @example neutralizeTextCell("=HYPERLINK(\"x\")"); // "'=HYPERLINK(\"x\")"
+ * @example neutralizeTextCell("Mount and balance"); // unchanged
+ */
+export function neutralizeTextCell(value: string): string {
+  return FORMULA_START.test(value) ? `'${value}` : value;
+}
+
+/** The inverse of neutralizeTextCell, applied to text columns on import. */
+export function unquoteTextCell(value: string): string {
+  return FORMULA_START.test(value) && value.startsWith("'") ? value.slice(1) : value;
+}
+
+/**
  * Bytes of an uploaded file → text, or a file error: it must be UTF-8 (a BOM is dropped) and
  * must not contain NUL bytes (a binary file renamed to .csv).
  */
@@ -145,7 +172,7 @@ export function parseCatalogCsv(text: string): CsvReport {
 }
 
 function validateRow(raw: Record<string, string>, at: Pick<RowError, "row" | "line">, errs: RowError[]): CatalogInput | null {
-  const v = (c: CsvColumn) => (raw[c] ?? "").trim();
+  const v = (c: CsvColumn) => (NUMERIC_COLUMNS.has(c) ? (raw[c] ?? "") : unquoteTextCell(raw[c] ?? "")).trim();
   const fail = (column: CsvColumn | "", message: string) => void errs.push({ ...at, column, message });
   const before = errs.length;
 
@@ -222,13 +249,17 @@ function validateRow(raw: Record<string, string>, at: Pick<RowError, "row" | "li
   return errs.length > before ? null : item;
 }
 
-/** Catalog items → CSV text in the documented format (round-trips through parseCatalogCsv). */
+/**
+ * Catalog items → CSV text in the documented format (round-trips through parseCatalogCsv).
+ * Text cells that would start a formula are neutralized (neutralizeTextCell); numbers are not.
+ */
 export function catalogToCsv(items: readonly CatalogInput[]): string {
   const n = (x: number | null) => (x === null ? "" : String(Number(x.toFixed(3))));
+  const safe = (row: (string | number)[]) => row.map((cell, i) => (NUMERIC_COLUMNS.has(CSV_COLUMNS[i]!) ? cell : neutralizeTextCell(String(cell))));
   return Papa.unparse(
     {
       fields: [...CSV_COLUMNS],
-      data: items.map((i) => [
+      data: items.map((i) => safe([
         i.kind,
         i.sku,
         i.description,
@@ -245,7 +276,7 @@ export function catalogToCsv(items: readonly CatalogInput[]): string {
         i.kind === "wheel" ? (i.beadlock ? "yes" : "no") : "",
         i.service_type ?? "",
         i.service_unit ?? "",
-      ]),
+      ])),
     },
     { newline: "\r\n" },
   );

@@ -34,13 +34,6 @@ export interface PasswordResetRow {
   created_at: Date;
 }
 
-export interface SignInThrottleRow {
-  key: string;
-  failures: number;
-  window_started_at: Date;
-  locked_until: Date | null;
-}
-
 /* ---- shop counter (shops settings, staff invitations, catalog, customers, quotes, payments) ---- */
 
 export interface ShopSettingsRow extends ShopRow {

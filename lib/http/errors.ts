@@ -4,6 +4,8 @@ export class HttpError extends Error {
     public readonly status: number,
     message: string,
     public readonly fieldErrors?: Record<string, string[]>,
+    /** Extra response headers, e.g. Retry-After on a 429. */
+    public readonly headers?: Record<string, string>,
   ) {
     super(message);
   }

@@ -5,6 +5,9 @@ import { z } from "zod";
 import { isDatabaseUnavailable } from "@/lib/db";
 import { type Access, type Caller, currentCaller, requireCaller } from "@/lib/auth/session";
 import { FitmentInputError } from "@/lib/fitment";
+import { readCappedBytes } from "./body";
+import { assertNoNul } from "./nul";
+import { assertSameOrigin } from "./origin";
 import { HttpError, type IssueLike, fallbackMessage, fieldPlace, withRows } from "./errors";
 
 const DEFAULT_MAX_BYTES = 64 * 1024;
@@ -45,11 +48,29 @@ export function json(data: unknown, init?: number | ResponseInit) {
   return NextResponse.json(data, typeof init === "number" ? { status: init } : init);
 }
 
+const tooLarge = (maxBytes: number) => `The request body is larger than ${Math.round(maxBytes / 1024)} KB.`;
+
+/** `application/json`, with or without parameters such as `; charset=utf-8`. */
+const isJsonType = (contentType: string | null) => (contentType ?? "").split(";")[0]!.trim().toLowerCase() === "application/json";
+const NOT_JSON = "Send JSON with Content-Type: application/json.";
+
+/**
+ * The JSON body, read through readCappedBytes so a chunked body without Content-Length stops
+ * at the cap instead of being buffered whole. A body that says it is something else (a form or
+ * text/plain, which a page on another site can send without asking) is refused with 415; an
+ * empty body without a Content-Type reads as `{}`.
+ */
 async function readJson(req: NextRequest, maxBytes: number): Promise<unknown> {
-  const declared = Number(req.headers.get("content-length") ?? "0");
-  if (declared > maxBytes) throw new HttpError(413, `The request body is larger than ${Math.round(maxBytes / 1024)} KB.`);
-  const text = await req.text();
-  if (Buffer.byteLength(text) > maxBytes) throw new HttpError(413, `The request body is larger than ${Math.round(maxBytes / 1024)} KB.`);
+  const contentType = req.headers.get("content-type");
+  if (contentType !== null && !isJsonType(contentType)) throw new HttpError(415, NOT_JSON);
+  const bytes = await readCappedBytes(req, maxBytes, tooLarge(maxBytes));
+  if (bytes.byteLength > 0 && contentType === null) throw new HttpError(415, NOT_JSON);
+  let text: string;
+  try {
+    text = new TextDecoder("utf-8", { fatal: true }).decode(bytes);
+  } catch {
+    throw new HttpError(400, "The request body is not UTF-8 text.");
+  }
   if (!text.trim()) return {};
   try {
     return JSON.parse(text);
@@ -68,9 +89,11 @@ function parse<T extends z.ZodType>(schema: T, value: unknown, status: number): 
 }
 
 /**
- * Every route handler goes through here: session and role first (anonymous callers learn
- * nothing about the input format), then body/query/params through zod, then the handler with
- * the caller whose ids scope its queries. Errors become JSON with a status; unexpected ones
+ * Every route handler goes through here: a cross-site check on state-changing requests
+ * (lib/http/origin.ts), then session and role (anonymous callers learn nothing about the input
+ * format), then params/query/body — NUL characters refused with the field named, the JSON body
+ * read up to its cap and only as application/json — through zod, then the handler with the
+ * caller whose ids scope its queries. Errors become JSON with a status; unexpected ones
  * are logged with a reference and never shown.
  */
 export function route<
@@ -84,12 +107,18 @@ export function route<
 ) {
   return async (req: NextRequest, context: { params: Promise<Record<string, string | string[]>> }) => {
     try {
+      assertSameOrigin(req);
       const caller = spec.access === "public" ? await currentCaller().catch(() => null) : await requireCaller(spec.access);
       const rawParams = context?.params ? await context.params : {};
+      assertNoNul(rawParams, 400);
       const params = spec.params ? parse(spec.params, rawParams, 404) : undefined;
-      const query = spec.query ? parse(spec.query, Object.fromEntries(req.nextUrl.searchParams), 400) : undefined;
+      const rawQuery = Object.fromEntries(req.nextUrl.searchParams);
+      assertNoNul(rawQuery, 400);
+      const query = spec.query ? parse(spec.query, rawQuery, 400) : undefined;
       const hasBody = !["GET", "HEAD", "DELETE"].includes(req.method);
-      const body = spec.body && hasBody ? parse(spec.body, await readJson(req, spec.maxBytes ?? DEFAULT_MAX_BYTES), 422) : undefined;
+      const rawBody = spec.body && hasBody ? await readJson(req, spec.maxBytes ?? DEFAULT_MAX_BYTES) : undefined;
+      assertNoNul(rawBody, 422);
+      const body = spec.body && hasBody ? parse(spec.body, rawBody, 422) : undefined;
       const result = await handler({ req, caller, body, query, params } as Ctx<Out<B>, Out<Q>, Out<P>, A>);
       if (result instanceof Response) return result;
       return json(result ?? { ok: true });
@@ -101,7 +130,7 @@ export function route<
 
 export function errorResponse(error: unknown): Response {
   if (error instanceof HttpError) {
-    return json({ error: error.message, ...(error.fieldErrors ? { fieldErrors: withRows(error.fieldErrors) } : {}) }, error.status);
+    return json({ error: error.message, ...(error.fieldErrors ? { fieldErrors: withRows(error.fieldErrors) } : {}) }, { status: error.status, headers: error.headers });
   }
   if (error instanceof FitmentInputError) {
     // The engine refused a value the schemas let through: a 422 on that field, in words, not a 500.

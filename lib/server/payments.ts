@@ -1,6 +1,6 @@
 import "server-only";
 import type { Knex } from "knex";
-import type Stripe from "stripe";
+import type { PaymentEvent } from "@/lib/validation/payments";
 import type { PaymentRow, QuoteRow } from "@/lib/db/types";
 import { HttpError } from "@/lib/http/errors";
 import { transition } from "./quotes";
@@ -13,12 +13,13 @@ export type WebhookOutcome = "deposit_paid" | "duplicate" | "already_paid" | "pa
  * app never created, or an amount, currency or quote that does not match, is refused with a
  * 4xx and nothing is written.
  */
-export async function applyPaymentEvent(db: Knex, event: Stripe.Event): Promise<WebhookOutcome> {
+export async function applyPaymentEvent(db: Knex, event: PaymentEvent): Promise<WebhookOutcome> {
   if (event.type !== "checkout.session.completed") {
     await db("payment_webhook_events").insert({ event_id: event.id, type: event.type, outcome: "ignored" }).onConflict("event_id").ignore();
     return "ignored";
   }
-  const session = event.data.object as Stripe.Checkout.Session;
+  // The schema checked this type's session shape (lib/validation/payments.ts).
+  const session = (event as Extract<PaymentEvent, { type: "checkout.session.completed" }>).data.object;
   return db.transaction(async (trx) => {
     const first = await trx("payment_webhook_events").insert({ event_id: event.id, type: event.type, outcome: "pending" }).onConflict("event_id").ignore().returning("event_id");
     if (first.length === 0) return "duplicate";

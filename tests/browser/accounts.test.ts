@@ -120,7 +120,7 @@ describe("accounts in Chromium", () => {
     await expect.poll(() => page.locator("main [role=alert]").first().textContent()).toMatch(/expired or was already used/);
   });
 
-  it("locks an account after repeated wrong passwords, with a clear message", async () => {
+  it("makes this address wait after repeated wrong passwords, with a clear message", async () => {
     const email = `lock.${stamp}@example.test`;
     await page.goto("/sign-up");
     await page.getByLabel("Name").fill("Odo Fenwick");
@@ -135,12 +135,12 @@ describe("accounts in Chromium", () => {
       await page.getByLabel("E-mail").fill(email);
       await page.getByLabel("Password").fill(`wrong password ${i}`);
       await page.getByRole("button", { name: "Sign in" }).click();
-      await expect.poll(() => page.locator("main [role=alert]").first().textContent()).toMatch(i < 4 ? /do not match/ : /locked/);
+      await expect.poll(() => page.locator("main [role=alert]").first().textContent()).toMatch(i < 4 ? /do not match/ : /Wait 1 minute before trying again/);
     }
-    // Even the right password is refused while locked.
+    // Even the right password is refused from this address while it waits (other addresses are not held up).
     await page.getByLabel("Password").fill("the right password");
     await page.getByRole("button", { name: "Sign in" }).click();
-    await expect.poll(() => page.locator("main [role=alert]").first().textContent()).toMatch(/locked for \d+ more minute/);
+    await expect.poll(() => page.locator("main [role=alert]").first().textContent()).toMatch(/Wait \d+ (second|minute)s? before trying again, or reset your password/);
     await axeClean("sign-in-locked");
   });
 

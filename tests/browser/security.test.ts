@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { BASE } from "./support/browser";
-import { call } from "./support/http";
+import { call, cookieFor } from "./support/http";
 
 describe("security basics over HTTP", () => {
   it("sends the security headers on pages and API answers", async () => {
@@ -52,4 +52,36 @@ describe("security basics over HTTP", () => {
     // The rest of next-auth's GET routes are unchanged.
     expect((await fetch(`${BASE}/api/auth/csrf`)).status).toBe(200);
   });
+
+  it("refuses a state-changing request from another site (Origin) with 403, and a signed-in one without Origin", async () => {
+    const body = { name: "Cross Site", email: `cross.${Date.now()}@example.test`, password: "a long enough password" };
+    const foreign = await call("anonymous", "POST", "/api/account/signup", body, { Origin: "https://evil.example" });
+    expect(foreign.status).toBe(403);
+    expect((await foreign.json()).error).toMatch(/another site/);
+    const member = await cookieFor("member");
+    const bare = await fetch(`${BASE}/api/comparisons`, { method: "POST", headers: { Cookie: member, "Content-Type": "application/json" }, body: JSON.stringify({ name: "No origin" }) });
+    expect(bare.status).toBe(403);
+    // Reads are not checked: a link from elsewhere still opens.
+    expect((await fetch(`${BASE}/api/health`, { headers: { Origin: "https://evil.example" } })).status).toBe(200);
+  });
+
+  it("refuses a JSON route's body sent as text/plain (what a cross-site form can send) with 415", async () => {
+    const res = await fetch(`${BASE}/api/account/signup`, {
+      method: "POST",
+      headers: { Origin: new URL(BASE).origin, "Content-Type": "text/plain;charset=UTF-8" },
+      body: JSON.stringify({ name: "Plain", email: `plain.${Date.now()}@example.test`, password: "a long enough password" }),
+    });
+    expect(res.status).toBe(415);
+    expect((await res.json()).error).toBe("Send JSON with Content-Type: application/json.");
+  });
+
+  it("answers a NUL character in a field or search with a message naming it, not 500", async () => {
+    const body = await call("anonymous", "POST", "/api/account/signup", { name: "Nul\u0000", email: `nul.${Date.now()}@example.test`, password: "a long enough password" });
+    expect(body.status).toBe(422);
+    expect((await body.json()).fieldErrors.name[0]).toMatch(/NUL character/);
+    const search = await call("member", "GET", "/api/comparisons?q=a%00b");
+    expect(search.status).toBe(400);
+    expect((await search.json()).fieldErrors.q[0]).toMatch(/NUL character/);
+  });
 });
+

@@ -26,6 +26,7 @@ afterAll(async () => {
 
 const vehicles = await import("@/app/api/vehicles/route");
 const uploads = await import("@/app/api/vehicles/[id]/photos/route");
+const signup = await import("@/app/api/account/signup/route");
 const ctx = (params: Record<string, string> = {}) => ({ params: Promise.resolve(params) });
 
 const CHUNK = 64 * 1024;
@@ -75,5 +76,22 @@ describe("request bodies are cut off at their cap, not read whole", () => {
     // The reader may run one chunk past the cap (plus what the stream had queued), never the whole body.
     expect(pulled.bytes).toBeLessThan(MAX_PHOTO_BYTES + 64 * 1024 + 4 * CHUNK);
     expect(await db("vehicle_photos").count<{ count: string }[]>()).toEqual([{ count: "0" }]);
+  });
+
+  it("a chunked 200 MB JSON body to the anonymous sign-up route is refused with 413 after reading at most the 64 KB cap", async () => {
+    const { stream, pulled } = endlessBody(200 * 1024 * 1024, '{"name":"');
+    const res = await signup.POST(
+      new NextRequest("http://127.0.0.1:3000/api/account/signup", {
+        method: "POST",
+        headers: { "content-type": "application/json" },
+        body: stream,
+        duplex: "half",
+      } as ConstructorParameters<typeof NextRequest>[1]),
+      ctx(),
+    );
+    expect(res.status).toBe(413);
+    expect(((await res.json()) as { error: string }).error).toMatch(/larger than 64 KB/);
+    expect(pulled.bytes).toBeLessThan(64 * 1024 + 4 * CHUNK);
+    expect(await db("users").whereNot({ id: USER.id })).toHaveLength(0);
   });
 });

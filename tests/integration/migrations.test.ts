@@ -13,7 +13,7 @@ describe("migrations", () => {
   it("go all the way up, all the way down, and up again", async () => {
     await db.migrate.latest();
     const up = await tables();
-    expect(up).toEqual(expect.arrayContaining(["users", "shops", "password_resets", "sign_in_throttle"]));
+    expect(up).toEqual(expect.arrayContaining(["users", "shops", "password_resets", "rate_limits"]));
     await db.migrate.rollback(undefined, true);
     expect(await tables()).toEqual([]);
     await db.migrate.latest();

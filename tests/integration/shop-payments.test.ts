@@ -162,6 +162,26 @@ describe("deposit through the payment SDK and the fake provider", () => {
     expect((await quoteRow(second.id)).status).toBe("deposit_paid");
   });
 
+  it("a correctly signed event with a malformed body is a 400 with a message, nothing written", async () => {
+    const before = await db("payment_webhook_events").count<{ count: string }[]>();
+    const post = (body: string) =>
+      webhook(new NextRequest("http://127.0.0.1:3000/api/payments/webhook", { method: "POST", body, headers: { "stripe-signature": signPayload(body, SECRET) } }), ctx());
+    const malformed = [
+      { id: "evt_no_data", object: "event", type: "checkout.session.completed", data: null },
+      { id: "evt_no_object", object: "event", type: "checkout.session.completed", data: {} },
+      { id: "evt_amount_text", object: "event", type: "checkout.session.completed", data: { object: { id: "cs_x", amount_total: "lots", currency: "usd", payment_status: "paid", client_reference_id: null, metadata: {} } } },
+      { object: "event", type: "checkout.session.completed", data: { object: { id: "cs_x" } } },
+      { id: "evt_other_type_no_data", object: "event", type: "charge.refunded" },
+      [1, 2, 3],
+    ];
+    for (const event of malformed) {
+      const res = await post(JSON.stringify(event));
+      expect(res.status, JSON.stringify(event)).toBe(400);
+      expect((await res.json()).error).toMatch(/not in the form/);
+    }
+    expect(await db("payment_webhook_events").count<{ count: string }[]>()).toEqual(before);
+  });
+
   it("an unknown or expired link is 404; a declined quote cannot be accepted", async () => {
     expect((await action("A".repeat(43), "accept")).status).toBe(404);
     const third = await sentQuote();

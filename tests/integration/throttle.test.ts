@@ -1,47 +1,117 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { THROTTLE, accountKey, clearKey, lockState, recordFailure } from "@/lib/auth/throttle";
+import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
+import { CLIENT_ADDRESS_HEADER, clientAddress, resolveClientAddress, trustClientAddressHeader, trustedProxies } from "@/lib/auth/clientAddress";
+import { hashPassword } from "@/lib/auth/password";
+import { THROTTLE, backoffSec } from "@/lib/auth/throttle";
+import { settleAfterResponse } from "@/lib/server/afterResponse";
 import { rebuild, testDb } from "./support/db";
+import { ctx, req } from "./support/requests";
+
+/**
+ * Security review: the per-address limit keyed on X-Forwarded-For (anyone can rotate it), and
+ * five wrong passwords from anywhere locked the account for everyone for 15 minutes.
+ */
+vi.mock("@/lib/mail", () => ({ sendMail: async () => {}, appOrigin: () => "http://127.0.0.1:3000" }));
 
 const db = testDb();
-beforeAll(() => rebuild(db));
-afterAll(() => db.destroy());
+const { authOptions } = await import("@/lib/auth/options");
+const signup = (await import("@/app/api/account/signup/route")).POST;
+const forgot = (await import("@/app/api/account/password/forgot/route")).POST;
 
-describe("sign-in throttle (state in PostgreSQL)", () => {
-  it("locks an account after the limit of failures and says for how long", async () => {
-    const key = accountKey("Lock@Example.test");
-    expect(key).toBe("acct:lock@example.test");
-    for (let i = 1; i < THROTTLE.accountLimit; i++) {
-      const row = await recordFailure(db, key, THROTTLE.accountLimit);
-      expect(row.failures).toBe(i);
-      expect(row.locked_until).toBeNull();
+const EMAIL = "victim@example.test";
+const PASSWORD = "the right password";
+beforeAll(async () => {
+  await rebuild(db);
+  await db("users").insert({ email: EMAIL, name: "Vic Tim", password_hash: await hashPassword(PASSWORD), role: "member" });
+});
+afterAll(async () => {
+  await settleAfterResponse();
+  await db.destroy();
+  const { db: appDb } = await import("@/lib/db");
+  await appDb.destroy();
+});
+
+type Authorize = (c: Record<string, string>, r: { headers: Record<string, string> }) => Promise<unknown>;
+const authorize = (authOptions.providers[0] as unknown as { options: { authorize: Authorize } }).options.authorize;
+/** A sign-in as scripts/serve.ts hands it on: its own client-address header, plus whatever the client claimed. */
+const signIn = (password: string, address: string, forwardedFor?: string) =>
+  authorize({ email: EMAIL, password }, { headers: { [CLIENT_ADDRESS_HEADER]: address, ...(forwardedFor ? { "x-forwarded-for": forwardedFor } : {}) } }).then(
+    () => "ok",
+    (e: Error) => e.message,
+  );
+
+describe("the client address is never the client's own claim", () => {
+  it("ignores X-Forwarded-For unless the peer is a configured proxy (TRUSTED_PROXIES)", () => {
+    const none = trustedProxies("");
+    expect(resolveClientAddress("203.0.113.9", "1.2.3.4", none)).toBe("203.0.113.9");
+    expect(resolveClientAddress("::ffff:203.0.113.9", undefined, none)).toBe("203.0.113.9");
+    const lb = trustedProxies("10.0.0.0/8, 2001:db8::/32");
+    // The load balancer appended the real peer; the client's own entries to its left are not believed.
+    expect(resolveClientAddress("10.0.0.5", "1.2.3.4, 198.51.100.7", lb)).toBe("198.51.100.7");
+    expect(resolveClientAddress("10.0.0.5", "198.51.100.7, 10.0.0.9", lb)).toBe("198.51.100.7");
+    expect(resolveClientAddress("2001:db8::1", "not-an-ip", lb)).toBe("2001:db8::1");
+    expect(() => trustedProxies("10.0.0.0/eight")).toThrow(/TRUSTED_PROXIES/);
+  });
+
+  it("reads only the header our own server sets, and only once that server marked the process", () => {
+    const h = new Headers({ [CLIENT_ADDRESS_HEADER]: "198.51.100.7", "x-forwarded-for": "1.2.3.4" });
+    expect(clientAddress(h)).toBe("unknown"); // next dev / bare next start: no socket address to trust
+    trustClientAddressHeader();
+    expect(clientAddress(h)).toBe("198.51.100.7");
+    expect(clientAddress(new Headers({ "x-forwarded-for": "1.2.3.4" }))).toBe("unknown");
+  });
+});
+
+describe("sign-in backoff: per (address, account), never a lock on the account", () => {
+  it("rotating X-Forwarded-For does not reset the count for an address", async () => {
+    trustClientAddressHeader();
+    for (let i = 0; i < THROTTLE.freePerPair - 1; i++) expect(await signIn(`wrong ${i}`, "203.0.113.10", `10.9.9.${i}`)).toMatch(/do not match/);
+    expect(await signIn("wrong last", "203.0.113.10", "10.9.9.250")).toMatch(/Wait 1 minute before trying again/);
+    expect(await signIn(PASSWORD, "203.0.113.10", "10.9.9.251")).toMatch(/Wait 1 minute/);
+  });
+
+  it("the owner signs in from another address while the attacker's address waits", async () => {
+    expect(await signIn(PASSWORD, "198.51.100.20")).toBe("ok");
+  });
+
+  it("waits double with each further failure (1, 2, 4 … minutes, at most an hour)", async () => {
+    expect([1, 2, 3, 7, 20].map(backoffSec)).toEqual([60, 120, 240, 3600, 3600]);
+    await db("rate_limits").where("key", "like", "signin_pair_wait:%").update({ expire: Date.now() - 1 });
+    expect(await signIn("wrong again", "203.0.113.10")).toMatch(/Wait 2 minutes/);
+  });
+
+  it("slows, never locks, an account past the distributed-attack cap", async () => {
+    await db("rate_limits").where("key", "like", "signin_acct:%").update({ points: THROTTLE.accountSlowAfter, expire: Date.now() + 3_600_000 });
+    const t0 = performance.now();
+    expect(await signIn(PASSWORD, "198.51.100.21")).toBe("ok");
+    expect(performance.now() - t0).toBeGreaterThanOrEqual(THROTTLE.accountDelayMs - 50);
+  });
+});
+
+describe("rate limits answer 429 with Retry-After, keyed on the trusted address", () => {
+  it("sign-up: 20 an hour per address, whatever X-Forwarded-For says", async () => {
+    trustClientAddressHeader();
+    const statuses: number[] = [];
+    for (let i = 0; i < 21; i++) {
+      const res = await signup(
+        req("POST", "/api/account/signup", { name: "Many Accounts", email: `many${i}@example.test`, password: "a long enough password" }, { [CLIENT_ADDRESS_HEADER]: "192.0.2.50", "x-forwarded-for": `10.0.${i}.1` }),
+        ctx(),
+      );
+      statuses.push(res.status);
+      if (res.status === 429) {
+        expect(Number(res.headers.get("retry-after"))).toBeGreaterThan(0);
+        expect((await res.json()).error).toMatch(/^Too many sign-ups from your network\. Try again in \d+ minutes?\.$/);
+      }
     }
-    expect((await lockState(db, [key])).locked).toBe(false);
-    const last = await recordFailure(db, key, THROTTLE.accountLimit);
-    expect(last.locked_until).not.toBeNull();
-    const state = await lockState(db, [key, "addr:203.0.113.9"]);
-    expect(state.locked).toBe(true);
-    expect(state.minutesLeft).toBe(THROTTLE.lockMinutes);
+    expect(statuses).toEqual([...Array(20).fill(201), 429]);
+    expect(await db("users").where("email", "like", "many%")).toHaveLength(20);
+    // Another address is not affected.
+    const other = await signup(req("POST", "/api/account/signup", { name: "Other", email: "other@example.test", password: "a long enough password" }, { [CLIENT_ADDRESS_HEADER]: "192.0.2.51" }), ctx());
+    expect(other.status).toBe(201);
   });
 
-  it("counts concurrent failures exactly (one atomic upsert per failure)", async () => {
-    const key = "addr:198.51.100.7";
-    await Promise.all(Array.from({ length: 12 }, () => recordFailure(db, key, 100)));
-    expect((await db("sign_in_throttle").where({ key }).first()).failures).toBe(12);
-  });
-
-  it("starts a new window once the old one has passed", async () => {
-    const key = accountKey("window@example.test");
-    await recordFailure(db, key, 5);
-    await recordFailure(db, key, 5);
-    await db("sign_in_throttle").where({ key }).update({ window_started_at: db.raw("now() - interval '16 minutes'") });
-    expect((await recordFailure(db, key, 5)).failures).toBe(1);
-  });
-
-  it("is cleared by a successful sign-in", async () => {
-    const key = accountKey("clear@example.test");
-    await recordFailure(db, key, 1);
-    expect((await lockState(db, [key])).locked).toBe(true);
-    await clearKey(db, key);
-    expect((await lockState(db, [key])).locked).toBe(false);
+  it("forgot-password: 20 an hour per address", async () => {
+    const statuses: number[] = [];
+    for (let i = 0; i < 21; i++) statuses.push((await forgot(req("POST", "/api/account/password/forgot", { email: `x${i}@example.test` }, { [CLIENT_ADDRESS_HEADER]: "192.0.2.60" }), ctx())).status);
+    expect(statuses).toEqual([...Array(20).fill(200), 429]);
   });
 });

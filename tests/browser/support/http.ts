@@ -52,12 +52,18 @@ export function cookieFor(who: Who): Promise<string> {
   return cache.get(who)!;
 }
 
-export async function call(who: Who, method: string, path: string, body?: unknown): Promise<Response> {
+/** A call as the app's own pages make it: a browser sends Origin on every POST/PUT/PATCH/DELETE (lib/http/origin.ts). */
+export async function call(who: Who, method: string, path: string, body?: unknown, extraHeaders: Record<string, string> = {}): Promise<Response> {
   const cookie = await cookieFor(who);
   return fetch(`${BASE}${path}`, {
     method,
     redirect: "manual",
-    headers: { ...(cookie ? { Cookie: cookie } : {}), ...(body === undefined ? {} : { "Content-Type": "application/json" }) },
+    headers: {
+      ...(cookie ? { Cookie: cookie } : {}),
+      ...(method === "GET" || method === "HEAD" ? {} : { Origin: new URL(BASE).origin }),
+      ...(body === undefined ? {} : { "Content-Type": "application/json" }),
+      ...extraHeaders,
+    },
     body: body === undefined ? undefined : typeof body === "string" ? body : JSON.stringify(body),
   });
 }

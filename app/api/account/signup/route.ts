@@ -1,11 +1,21 @@
 import { db } from "@/lib/db";
+import { clientAddress } from "@/lib/auth/clientAddress";
 import { hashPassword } from "@/lib/auth/password";
 import { HttpError } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
+import { RATE_LIMITS } from "@/lib/server/limits";
+import { consumeOrRefuse } from "@/lib/server/rateLimit";
 import { DuplicateEmailError, createUser } from "@/lib/server/users";
 import { signUpSchema } from "@/lib/validation/account";
 
-export const POST = route({ access: "public", body: signUpSchema }, async ({ body }) => {
+/**
+ * Creates the account (the form then signs in). An address already in use is said so: sign-up
+ * signs in at once, so a neutral "check your e-mail" cannot be answered for a fresh address
+ * either. What limits discovery is the per-address rate limit (RATE_LIMITS.signUp) and that the
+ * password is hashed before the insert either way, so both answers take the same time.
+ */
+export const POST = route({ access: "public", body: signUpSchema }, async ({ req, body }) => {
+  await consumeOrRefuse(db, [{ spec: RATE_LIMITS.signUp, key: clientAddress(req.headers) }], "Too many sign-ups from your network.");
   try {
     const user = await createUser(db, { email: body.email, name: body.name, passwordHash: await hashPassword(body.password) });
     return Response.json({ id: user.id, email: user.email, name: user.name }, { status: 201 });

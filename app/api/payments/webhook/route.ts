@@ -2,13 +2,15 @@ import type Stripe from "stripe";
 import { db } from "@/lib/db";
 import { readCappedBytes } from "@/lib/http/body";
 import { HttpError } from "@/lib/http/errors";
-import { route } from "@/lib/http/route";
+import { fieldErrorsOf, humanIssue, route } from "@/lib/http/route";
 import { payments, webhookSecret } from "@/lib/payments/provider";
 import { applyPaymentEvent } from "@/lib/server/payments";
+import { paymentEventSchema } from "@/lib/validation/payments";
 
 /**
  * The payment provider's webhook. Nothing is trusted before the signature over the raw body
  * verifies (the provider's HMAC-SHA256 scheme, checked by the official SDK, 5-minute tolerance).
+ * A verified event that is not in the shape Hubface reads is refused with 400, nothing written.
  */
 export const POST = route({ access: "public" }, async ({ req }) => {
   const raw = Buffer.from(await readCappedBytes(req, 256 * 1024)).toString("utf8");
@@ -20,6 +22,8 @@ export const POST = route({ access: "public" }, async ({ req }) => {
   } catch {
     throw new HttpError(400, "The signature does not verify.");
   }
-  const outcome = await applyPaymentEvent(db, event);
+  const shape = paymentEventSchema.safeParse(event, { error: humanIssue });
+  if (!shape.success) throw new HttpError(400, "The event is not in the form Hubface reads.", fieldErrorsOf(shape.error));
+  const outcome = await applyPaymentEvent(db, shape.data);
   return { received: true, outcome };
 });

@@ -2,7 +2,10 @@ import { z } from "zod";
 import { db } from "@/lib/db";
 import { HttpError, notFound } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
+import { clientAddress } from "@/lib/auth/clientAddress";
 import { appOrigin } from "@/lib/mail";
+import { RATE_LIMITS } from "@/lib/server/limits";
+import { consumeOrRefuse } from "@/lib/server/rateLimit";
 import { createDepositSession } from "@/lib/payments/provider";
 import { expireDue, findByToken, latestSentDocument, transition } from "@/lib/server/quotes";
 import { publicQuoteActionSchema } from "@/lib/validation/quotes";
@@ -11,7 +14,17 @@ const params = z.object({ token: z.string().regex(/^[A-Za-z0-9_-]{43}$/) });
 const customer = { userId: null, label: "customer" };
 
 /** The customer's actions on their quote link: accept, decline, or pay the deposit. */
-export const POST = route({ access: "public", params, body: publicQuoteActionSchema }, async ({ params, body }) => {
+export const POST = route({ access: "public", params, body: publicQuoteActionSchema }, async ({ req, params, body }) => {
+  // Anyone with the link may act on it: a cap per link and per address keeps scripts from
+  // opening checkout sessions (each a provider call and a payments row) in a loop.
+  await consumeOrRefuse(
+    db,
+    [
+      { spec: RATE_LIMITS.quoteActionsPerLink, key: params.token },
+      { spec: RATE_LIMITS.quoteActionsPerAddress, key: clientAddress(req.headers) },
+    ],
+    "Too many actions on this quote.",
+  );
   await expireDue(db);
   if (body.action === "accept" || body.action === "decline") {
     await db.transaction(async (trx) => {

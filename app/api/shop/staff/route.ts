@@ -2,6 +2,8 @@ import { db } from "@/lib/db";
 import { HttpError } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
 import { appOrigin, sendMail } from "@/lib/mail";
+import { RATE_LIMITS } from "@/lib/server/limits";
+import { consumeOrRefuse } from "@/lib/server/rateLimit";
 import { INVITE_TTL_HOURS, SHOP_OWNER, createInvite, getShop, listOpenInvites, listTeam, shopIdOf } from "@/lib/server/shops";
 import { staffInviteSchema } from "@/lib/validation/shop";
 
@@ -13,6 +15,8 @@ export const GET = route({ access: SHOP_OWNER }, async ({ caller }) => {
 
 export const POST = route({ access: SHOP_OWNER, body: staffInviteSchema }, async ({ caller, body }) => {
   const shopId = shopIdOf(caller);
+  // Each invitation mails someone outside the shop: a cap keeps a taken-over account from spamming.
+  await consumeOrRefuse(db, [{ spec: RATE_LIMITS.staffInvites, key: shopId }], "Too many invitations sent from this shop.");
   const team = await listTeam(db, shopId);
   if (team.some((m) => m.email.toLowerCase() === body.email.toLowerCase())) {
     throw new HttpError(422, "Some fields need attention.", { email: ["This person is already on your team."] });

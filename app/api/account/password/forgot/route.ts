@@ -1,7 +1,11 @@
 import { db } from "@/lib/db";
+import { clientAddress } from "@/lib/auth/clientAddress";
 import { route } from "@/lib/http/route";
 import { appOrigin, sendMail } from "@/lib/mail";
+import { afterResponse } from "@/lib/server/afterResponse";
+import { RATE_LIMITS } from "@/lib/server/limits";
 import { RESET_TTL_MINUTES, issueResetToken } from "@/lib/server/passwordResets";
+import { consumeOrRefuse, consumeQuietly } from "@/lib/server/rateLimit";
 import { findUserByEmail } from "@/lib/server/users";
 import { forgotPasswordSchema } from "@/lib/validation/account";
 
@@ -9,10 +13,25 @@ const ANSWER = {
   message: "If an account uses that address, a reset link is on its way. It works once and expires in 30 minutes.",
 };
 
-export const POST = route({ access: "public", body: forgotPasswordSchema }, async ({ body }) => {
-  const user = await findUserByEmail(db, body.email);
-  // Same answer either way: the form must not reveal which addresses have accounts.
-  if (!user) return ANSWER;
+/**
+ * Same answer, in the same time, whether or not the address has an account: the answer goes
+ * out before the account is looked up; the lookup, the per-account mail limits and the mail
+ * run after it (lib/server/afterResponse.ts). Only the per-address limit answers 429, and it
+ * counts every request alike, so it tells nothing about accounts either.
+ */
+export const POST = route({ access: "public", body: forgotPasswordSchema }, async ({ req, body }) => {
+  await consumeOrRefuse(db, [{ spec: RATE_LIMITS.forgotPerAddress, key: clientAddress(req.headers) }], "Too many reset requests from your network.");
+  const email = body.email.trim().toLowerCase();
+  afterResponse("password reset mail", () => mailResetLink(email));
+  return ANSWER;
+});
+
+/** At most one mail per account every 2 minutes and 5 a day (a flood would bury the real one). */
+async function mailResetLink(email: string): Promise<void> {
+  if (!(await consumeQuietly(db, RATE_LIMITS.forgotMailSpacing, email))) return;
+  if (!(await consumeQuietly(db, RATE_LIMITS.forgotMailPerDay, email))) return;
+  const user = await findUserByEmail(db, email);
+  if (!user) return;
   const token = await issueResetToken(db, user.id);
   const link = `${appOrigin()}/reset-password?token=${token}`;
   await sendMail({
@@ -27,8 +46,7 @@ export const POST = route({ access: "public", body: forgotPasswordSchema }, asyn
       `<p><a href="${link}">Choose a new password</a> — the link works once and expires in ${RESET_TTL_MINUTES} minutes.</p>` +
       "<p>If you did not ask for this, ignore this message; your password stays as it is.</p>",
   });
-  return ANSWER;
-});
+}
 
 function escapeHtml(s: string) {
   return s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);

@@ -1,13 +1,14 @@
 import { db } from "@/lib/db";
 import { hashPassword } from "@/lib/auth/password";
-import { accountKey, clearKey } from "@/lib/auth/throttle";
+import { clientAddress } from "@/lib/auth/clientAddress";
+import { clearAttempts } from "@/lib/auth/throttle";
 import { HttpError } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
 import { consumeResetToken } from "@/lib/server/passwordResets";
 import { findUserById, setPassword } from "@/lib/server/users";
 import { resetPasswordSchema } from "@/lib/validation/account";
 
-export const POST = route({ access: "public", body: resetPasswordSchema }, async ({ body }) => {
+export const POST = route({ access: "public", body: resetPasswordSchema }, async ({ req, body }) => {
   const hash = await hashPassword(body.password);
   const email = await db.transaction(async (trx) => {
     const userId = await consumeResetToken(db, body.token, trx);
@@ -20,6 +21,7 @@ export const POST = route({ access: "public", body: resetPasswordSchema }, async
       token: ["This reset link has expired or was already used."],
     });
   }
-  await clearKey(db, accountKey(email)); // a reset lifts a lock-out on the account
+  // A reset proves the mailbox: the wait on this address for this account ends.
+  await clearAttempts(db, { email, address: clientAddress(req.headers) });
   return { message: "Your password was changed. Sign in with the new one." };
 });

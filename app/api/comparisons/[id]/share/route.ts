@@ -2,11 +2,15 @@ import { db } from "@/lib/db";
 import { notFound } from "@/lib/http/errors";
 import { json, route } from "@/lib/http/route";
 import { createShare, revokeShare } from "@/lib/server/comparisons";
+import { RATE_LIMITS } from "@/lib/server/limits";
+import { consumeOrRefuse } from "@/lib/server/rateLimit";
 import { dropCachedShare } from "@/lib/server/shareCache";
 import { comparisonIdParams } from "@/lib/validation/comparisons";
 
 /** Makes a new public link /s/<slug>; a live one is revoked (and stays dead). */
 export const POST = route({ access: "signed-in", params: comparisonIdParams }, async ({ caller, params }) => {
+  // Every new link is a public page (and its Open Graph image): a cap per user stops link farming.
+  await consumeOrRefuse(db, [{ spec: RATE_LIMITS.shareLinks, key: caller.userId }], "Too many new share links.");
   const share = await createShare(db, caller.userId, params.id);
   if (!share) throw notFound("That comparison");
   dropCachedShare(share.replaced);

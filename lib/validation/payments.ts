@@ -1,0 +1,23 @@
+import { z } from "zod";
+
+/**
+ * The parts of a provider event Hubface reads, checked after the signature verifies: a signed
+ * event is genuine, but a malformed one (a provider API change, a test tool) must be a 400 with
+ * a message and nothing written, not a crash. Other fields pass through unread.
+ */
+const eventBase = z.object({ id: z.string().min(1).max(255), type: z.string().min(1).max(255), data: z.object({ object: z.looseObject({}) }) });
+
+const checkoutSession = z.looseObject({
+  id: z.string().min(1).max(255),
+  amount_total: z.number().int().nullable(),
+  currency: z.string().nullable(),
+  payment_status: z.string(),
+  client_reference_id: z.string().nullable(),
+  metadata: z.record(z.string(), z.string()).nullable().optional(),
+});
+
+export const paymentEventSchema = z.union([
+  eventBase.extend({ type: z.literal("checkout.session.completed"), data: z.object({ object: checkoutSession }) }),
+  eventBase.extend({ type: z.string().refine((t) => t !== "checkout.session.completed") }),
+]);
+export type PaymentEvent = z.infer<typeof paymentEventSchema>;
