@@ -4,7 +4,7 @@ import { HttpError, notFound } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
 import { appOrigin } from "@/lib/mail";
 import { createDepositSession } from "@/lib/payments/provider";
-import { expireDue, findByToken, latestSentDocument, transition } from "@/lib/server/quotes";
+import { findByToken, latestSentDocument, transition } from "@/lib/server/quotes";
 import { publicQuoteActionSchema } from "@/lib/validation/quotes";
 
 const params = z.object({ token: z.string().regex(/^[A-Za-z0-9_-]{43}$/) });
@@ -12,7 +12,6 @@ const customer = { userId: null, label: "customer" };
 
 /** The customer's actions on their quote link: accept, decline, or pay the deposit. */
 export const POST = route({ access: "public", params, body: publicQuoteActionSchema }, async ({ params, body }) => {
-  await expireDue(db);
   if (body.action === "accept" || body.action === "decline") {
     await db.transaction(async (trx) => {
       const quote = await findByToken(trx, params.token, true);
