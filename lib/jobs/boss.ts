@@ -56,11 +56,13 @@ function create(opts: BossOptions): PgBoss {
     supervise,
     schedule: supervise,
     migrate: true,
-    // Failed jobs stay in the live table (where the admin page lists and retries them) for two
-    // weeks; completed ones are archived after an hour: a delivered mail's body is not kept around.
+    // A mail job holds its links (an invitation, a quote's public link) in clear, where the app
+    // otherwise stores only token hashes: a delivered mail is archived after an hour and deleted
+    // an hour later. Failed jobs stay in the live table, where the admin page lists and retries
+    // them, for two weeks.
     archiveCompletedAfterSeconds: 3600,
     archiveFailedAfterSeconds: 14 * 24 * 3600,
-    deleteAfterDays: 7,
+    deleteAfterSeconds: 3600,
   });
 }
 
