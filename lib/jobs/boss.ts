@@ -10,6 +10,7 @@
  */
 import PgBoss from "pg-boss";
 import { databaseUrl } from "@/lib/db/config";
+import { log } from "@/lib/log";
 
 export const JOB_SCHEMA = "pgboss";
 
@@ -74,7 +75,7 @@ export function getBoss(opts: BossOptions = {}): Promise<PgBoss> {
   g.hubfaceBoss ??= (async () => {
     const boss = create(opts);
     // Without a listener an error event would crash the process; a lost connection is retried by pg-boss.
-    boss.on("error", (error) => console.error(JSON.stringify({ level: 50, msg: "job queue error", err: { message: error.message } })));
+    boss.on("error", (error) => log().error({ err: { message: error.message, code: (error as { code?: string }).code } }, "job queue error"));
     await boss.start();
     for (const q of Object.values(QUEUES)) {
       const { name, ...policy } = q;
