@@ -24,7 +24,7 @@ const nextConfig = {
   // on the share page that was about a third of the server's time per view. Dynamic pages get
   // no ETag anyway, and shared caches in front (CDN) validate on their own copy, so none is made.
   generateEtags: false,
-  serverExternalPackages: ["knex", "pg", "nodemailer", "bcryptjs", "pdfkit"],
+  serverExternalPackages: ["knex", "pg", "nodemailer", "bcryptjs", "pdfkit", "pg-boss", "pino", "pino-pretty"],
   async headers() {
     return [
       {

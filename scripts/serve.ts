@@ -1,16 +1,27 @@
 /**
  * The production server: Next's request handler behind the share pages' micro-cache
- * (lib/http/microcache.ts). `npm start` and the browser tests run it:
+ * (lib/http/microcache.ts), one JSON log line per request, and the background job workers
+ * (lib/jobs: queued mail, the quote expiry schedule). `npm start` and the browser tests run it:
  *
  *   tsx scripts/serve.ts [--hostname 127.0.0.1] [--port 3000]
  *
  * Needs a `next build` first. HUBFACE_MICROCACHE=off serves through Next alone (for comparing).
+ * HUBFACE_JOBS=off leaves the job workers to another process (see README "Beyond one machine").
+ * SIGTERM/SIGINT: stop taking requests (readiness answers 503), finish those in flight, let
+ * running jobs finish, then exit.
  */
-import { createServer } from "node:http";
+import { createServer, type IncomingMessage } from "node:http";
+import { register } from "node:module";
 import { parseArgs } from "node:util";
 import next from "next";
+import { getToken } from "next-auth/jwt";
 import { CLIENT_ADDRESS_HEADER, resolveClientAddress, trustClientAddressHeader, trustedProxies } from "@/lib/auth/clientAddress";
 import { Microcache, installSharedMicrocache } from "@/lib/http/microcache";
+import { log } from "@/lib/log";
+import { withRequestLog } from "@/lib/log/request";
+
+// Before any app module that says `import "server-only"` is loaded (the job workers below).
+register("./hooks/server-only.mjs", import.meta.url);
 
 const { values } = parseArgs({ options: { hostname: { type: "string", default: "127.0.0.1" }, port: { type: "string", default: process.env.PORT ?? "3000" } } });
 const hostname = values.hostname!;
@@ -25,6 +36,29 @@ await app.prepare();
 const cache = process.env.HUBFACE_MICROCACHE === "off" ? undefined : new Microcache({ paths: /^\/s\/[A-Za-z0-9_-]{16,64}$/ });
 installSharedMicrocache(cache);
 
+const jobs = process.env.HUBFACE_JOBS === "off" ? undefined : await import("@/lib/jobs/workers");
+const boss = await import("@/lib/jobs/boss");
+if (jobs) {
+  // A database that is down at start must not keep the web server from starting: retry in the background.
+  const start = (): Promise<unknown> =>
+    jobs.startWorkers().catch((error: unknown) => {
+      log().error({ err: { message: (error as Error).message } }, "job workers did not start; trying again in 10 s");
+      return new Promise((r) => setTimeout(r, 10_000).unref()).then(start);
+    });
+  void start();
+}
+
+/** The signed-in user of a page request, read from the session cookie after the answer left (only for the log line). */
+async function userIdOf(req: IncomingMessage): Promise<string | undefined> {
+  if (!process.env.NEXTAUTH_SECRET || !/next-auth\.session-token/.test(req.headers.cookie ?? "")) return undefined;
+  try {
+    const token = await getToken({ req: req as Parameters<typeof getToken>[0]["req"], secret: process.env.NEXTAUTH_SECRET });
+    return typeof token?.uid === "string" ? token.uid : undefined;
+  } catch {
+    return undefined;
+  }
+}
+
 // Rate limits and sign-in backoff key on the client's address. Route handlers cannot see the
 // socket, so this server writes it into CLIENT_ADDRESS_HEADER (any copy the client sent is
 // dropped) from the socket peer, reading X-Forwarded-For only when that peer is one of
@@ -32,23 +66,36 @@ installSharedMicrocache(cache);
 const proxies = trustedProxies();
 trustClientAddressHeader();
 
-const server = createServer((req, res) => {
-  const forwarded = req.headers["x-forwarded-for"];
-  req.headers[CLIENT_ADDRESS_HEADER] = resolveClientAddress(req.socket.remoteAddress, Array.isArray(forwarded) ? forwarded.join(",") : forwarded, proxies);
-  if (cache?.serve(req, res)) return;
-  cache?.capture(req, res);
-  handle(req, res).catch((error: unknown) => {
-    console.error("request failed:", error);
-    if (!res.headersSent) res.writeHead(500, { "content-type": "text/plain" });
-    res.end("Something went wrong on our side.");
-  });
-});
+const server = createServer(
+  withRequestLog(
+    (req, res, ctx) => {
+      const forwarded = req.headers["x-forwarded-for"];
+      req.headers[CLIENT_ADDRESS_HEADER] = resolveClientAddress(req.socket.remoteAddress, Array.isArray(forwarded) ? forwarded.join(",") : forwarded, proxies);
+      if (cache?.serve(req, res)) return;
+      cache?.capture(req, res);
+      handle(req, res).catch((error: unknown) => {
+        log().error({ err: error }, "request failed outside Next's error handling");
+        if (!res.headersSent) res.writeHead(500, { "content-type": "text/plain; charset=utf-8" });
+        res.end(`Something went wrong on our side. Reference ${ctx.reqId}.`);
+      });
+    },
+    { userIdOf },
+  ),
+);
 server.keepAliveTimeout = 65_000;
-server.listen(port, hostname, () => console.log(`Hubface listening on http://${hostname}:${port}${cache ? " (share-page micro-cache on)" : ""}`));
+server.listen(port, hostname, () => log().info({ url: `http://${hostname}:${port}`, microcache: Boolean(cache), jobs: Boolean(jobs) }, "Hubface listening"));
 
+let stopping = false;
 for (const signal of ["SIGINT", "SIGTERM"] as const) {
-  process.once(signal, () => {
-    server.close(() => process.exit(0));
-    setTimeout(() => process.exit(0), 5000).unref();
+  process.once(signal, async () => {
+    if (stopping) return;
+    stopping = true;
+    (globalThis as unknown as { hubfaceStopping?: boolean }).hubfaceStopping = true;
+    log().info({ signal }, "stopping: finishing requests and jobs in progress");
+    setTimeout(() => process.exit(1), 25_000).unref();
+    await new Promise<void>((resolve) => server.close(() => resolve()));
+    await boss.stopBoss(15_000).catch((error: unknown) => log().error({ err: { message: (error as Error).message } }, "job queue did not stop cleanly"));
+    log().info("stopped");
+    process.exit(0);
   });
 }

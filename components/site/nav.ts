@@ -17,6 +17,7 @@ export const NAV: NavItem[] = [
   { href: "/shop", label: "Shop", roles: ["shop_staff", "shop_owner"] },
   { href: "/admin/users", label: "Users", roles: ["admin"] },
   { href: "/admin/outbox", label: "Outbox", roles: ["admin"] },
+  { href: "/admin/jobs", label: "Jobs", roles: ["admin"] },
 ];
 
 export function visibleNav(role: Role | null): NavItem[] {

@@ -1,5 +1,6 @@
 import "server-only";
 import knexFactory, { type Knex } from "knex";
+import { isDependencyUnavailable } from "@/lib/http/dependency";
 import { databaseUrl } from "./config";
 
 // One Knex instance per server process. Kept on globalThis so dev-mode reloads do not open a
@@ -27,6 +28,8 @@ export const db: Knex = globalForDb.hubfaceDb ?? (globalForDb.hubfaceDb = create
 export function isDatabaseUnavailable(error: unknown): boolean {
   const e = error as { code?: string; message?: string; name?: string } | null;
   if (!e) return false;
+  // The mail server or the photo store refused the connection: that is not the database.
+  if (isDependencyUnavailable(error)) return false;
   if (e.name === "KnexTimeoutError") return true;
   if (e.code && ["ECONNREFUSED", "ECONNRESET", "ETIMEDOUT", "57P01", "57P03", "08006", "08001", "08003"].includes(e.code)) return true;
   return /Connection terminated|connect ECONNREFUSED|timeout exceeded when trying to connect/i.test(e.message ?? "");

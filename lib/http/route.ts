@@ -3,6 +3,8 @@ import { randomUUID } from "node:crypto";
 import { NextResponse, type NextRequest } from "next/server";
 import { z } from "zod";
 import { isDatabaseUnavailable } from "@/lib/db";
+import { isDependencyUnavailable } from "@/lib/http/dependency";
+import { currentRequestId, log, noteUser } from "@/lib/log";
 import { type Access, type Caller, currentCaller, requireCaller } from "@/lib/auth/session";
 import { FitmentInputError } from "@/lib/fitment";
 import { readCappedBytes } from "./body";
@@ -109,6 +111,7 @@ export function route<
     try {
       assertSameOrigin(req);
       const caller = spec.access === "public" ? await currentCaller().catch(() => null) : await requireCaller(spec.access);
+      noteUser(caller?.userId);
       const rawParams = context?.params ? await context.params : {};
       assertNoNul(rawParams, 400);
       const params = spec.params ? parse(spec.params, rawParams, 404) : undefined;
@@ -138,11 +141,16 @@ export function errorResponse(error: unknown): Response {
     const message = `${row ? `${row}: c` : "C"}heck the ${field || "values entered"}: Hubface cannot work with it.`;
     return json({ error: "Some fields need attention.", fieldErrors: { [error.field]: [message] } }, 422);
   }
-  const ref = randomUUID().slice(0, 8);
+  // The request's id (scripts/serve.ts), so the reference a person reads finds every log line of the request.
+  const ref = currentRequestId() ?? randomUUID().slice(0, 8);
+  if (isDependencyUnavailable(error)) {
+    log().warn({ ref, dependency: error.dependency, err: { message: error.message } }, `${error.dependency} unavailable`);
+    return json({ error: error.publicMessage, ref }, 503);
+  }
   if (isDatabaseUnavailable(error)) {
-    console.error(`[${ref}] database unavailable:`, (error as Error).message);
+    log().error({ ref, err: { message: (error as Error).message } }, "database unavailable");
     return json({ error: "The database is not reachable right now. Try again in a moment.", ref }, 503);
   }
-  console.error(`[${ref}] unhandled error in route handler:`, error);
+  log().error({ ref, err: error }, "unhandled error in route handler");
   return json({ error: `Something went wrong on our side. Reference ${ref}.`, ref }, 500);
 }

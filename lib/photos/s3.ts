@@ -11,6 +11,7 @@ import {
   PutObjectCommand,
   S3Client,
 } from "@aws-sdk/client-s3";
+import { DependencyUnavailableError, isNetworkFailure } from "../http/dependency";
 
 export interface S3Settings {
   endpoint: string;
@@ -52,8 +53,20 @@ export interface PhotoStore {
   deleteMany(keys: readonly string[]): Promise<void>;
 }
 
-export function s3PhotoStore(settings: S3Settings = s3Settings(), client: S3Client = makeS3Client(settings)): PhotoStore {
+export function s3PhotoStore(settings: S3Settings = s3Settings(), s3: S3Client = makeS3Client(settings)): PhotoStore {
   const Bucket = settings.bucket;
+  // A store that does not answer (or answers 5xx) is reported as the photo store, not as the database.
+  const client = {
+    send: (async (command: Parameters<S3Client["send"]>[0]) => {
+      try {
+        return await s3.send(command);
+      } catch (e) {
+        const status = (e as { $metadata?: { httpStatusCode?: number } }).$metadata?.httpStatusCode;
+        if (isNetworkFailure(e) || (status !== undefined && status >= 500)) throw new DependencyUnavailableError("photo store", e);
+        throw e;
+      }
+    }) as S3Client["send"],
+  };
   return {
     async put(key, body, contentType) {
       await client.send(new PutObjectCommand({ Bucket, Key: key, Body: body, ContentType: contentType, ContentLength: body.length }));

@@ -1,11 +1,11 @@
 import "server-only";
 import type { Knex } from "knex";
 import type { QuoteRow } from "@/lib/db/types";
-import { appOrigin, sendMail } from "@/lib/mail";
+import { appOrigin, queueMail } from "@/lib/mail";
 import { type QuoteDocument, buildQuoteDocument, hubCautions } from "@/lib/quotes/document";
 import { formatUsd } from "@/lib/quotes/money";
 import { quotePdf } from "@/lib/quotes/pdf";
-import { type QuoteDetail, type QuoteScope, type Actor, expireDue, findByToken, getQuoteDetail, latestSentDocument, markSent, readLines } from "./quotes";
+import { type QuoteDetail, type QuoteScope, type Actor, findByToken, getQuoteDetail, latestSentDocument, markSent, readLines } from "./quotes";
 import { getShop } from "./shops";
 
 /**
@@ -27,7 +27,6 @@ export async function renderQuotePdf(db: Knex, detail: QuoteDetail): Promise<Buf
 
 /** What the customer's link shows: the live status and the document as sent. */
 export async function publicQuoteView(db: Knex, token: string): Promise<{ quote: QuoteRow; document: QuoteDocument } | undefined> {
-  await expireDue(db);
   const quote = await findByToken(db, token);
   if (!quote) return undefined;
   const [customer, lines, author] = await Promise.all([
@@ -42,7 +41,7 @@ const esc = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`)
 
 /**
  * Marks the quote sent (fresh link, document frozen as sent) and e-mails the customer the PDF and
- * the link. `seenUpdatedAt`: the version the sender saw; a quote changed since is not sent.
+ * the link (queued: a worker sends it, retrying while the mail server is away). `seenUpdatedAt`: the version the sender saw; a quote changed since is not sent.
  */
 export async function sendQuote(db: Knex, scope: QuoteScope, id: string, actor: Actor, seenUpdatedAt?: string): Promise<QuoteDetail> {
   const { token, document: d } = await markSent(db, scope, id, actor, seenUpdatedAt);
@@ -52,7 +51,7 @@ export async function sendQuote(db: Knex, scope: QuoteScope, id: string, actor: 
   const link = `${appOrigin()}/q/${token}`;
   const until = d.validUntil ? new Date(d.validUntil).toLocaleDateString("en-US", { year: "numeric", month: "long", day: "numeric" }) : "";
   const hub = hubCautions(d);
-  await sendMail({
+  await queueMail({
     to: d.customer.email,
     subject: `Your quote Q-${d.number} from ${d.shop.name}`,
     text:

@@ -50,10 +50,35 @@ export async function transition(trx: Knex.Transaction, quote: Pick<QuoteRow, "i
   await trx("quote_events").insert({ quote_id: quote.id, from_status: quote.status, to_status: to, actor_user_id: actor.userId, actor: actor.label, note });
 }
 
-/** Sent or accepted quotes past their validity become expired (recorded as done by the system). */
+/** Statuses that lapse when the validity date passes. */
+const LAPSING: readonly QuoteStatus[] = ["sent", "accepted"];
+
+/**
+ * The status a quote has now: a sent or accepted quote past its `valid_until` is expired even
+ * before the scheduled job (lib/jobs/workers.ts, every 15 minutes) has written that down, so
+ * no page or action ever treats it as still open. Computed, never written on a read.
+ */
+export function effectiveStatus(quote: Pick<QuoteRow, "status" | "valid_until">, now: Date = new Date()): QuoteStatus {
+  if (LAPSING.includes(quote.status) && quote.valid_until && new Date(quote.valid_until).getTime() < now.getTime()) return "expired";
+  return quote.status;
+}
+
+function withEffectiveStatus<T extends QuoteRow | undefined>(row: T): T {
+  if (!row) return row;
+  const status = effectiveStatus(row);
+  return status === row.status ? row : { ...row, status };
+}
+
+/** The same rule in SQL, for lists and filters. */
+const EFFECTIVE_STATUS_SQL = "case when quotes.status in ('sent', 'accepted') and quotes.valid_until < now() then 'expired' else quotes.status::text end";
+
+/**
+ * Writes the lapse down: sent or accepted quotes past their validity become expired, recorded
+ * as done by the system. Run by the scheduled job, not by page reads.
+ */
 export async function expireDue(db: Knex, shopId?: string): Promise<number> {
   return db.transaction(async (trx) => {
-    const q = trx("quotes").whereIn("status", ["sent", "accepted"]).andWhere("valid_until", "<", trx.fn.now()).forUpdate().select("id", "status");
+    const q = trx("quotes").whereIn("status", LAPSING).andWhere("valid_until", "<", trx.fn.now()).forUpdate().select("id", "status");
     if (shopId) q.andWhere({ shop_id: shopId });
     const due = (await q) as Pick<QuoteRow, "id" | "status">[];
     for (const d of due) await transition(trx, d, "expired", { userId: null, label: "system" }, "validity ended");
@@ -72,7 +97,7 @@ export async function findQuote(db: Knex | Knex.Transaction, scope: QuoteScope, 
   if (lock) q.forUpdate();
   const row = (await q) as QuoteRow | undefined;
   if (!row) throw notFound("That quote");
-  return row;
+  return withEffectiveStatus(row);
 }
 
 export interface QuoteDetail {
@@ -102,19 +127,17 @@ export async function quoteDetail(db: Knex, quote: QuoteRow): Promise<QuoteDetai
 }
 
 export async function getQuoteDetail(db: Knex, scope: QuoteScope, id: string): Promise<QuoteDetail> {
-  await expireDue(db, scope.shopId);
   return quoteDetail(db, await findQuote(db, scope, id));
 }
 
 export async function listQuotes(db: Knex, scope: QuoteScope, opts: { status?: QuoteStatus; limit?: number } = {}) {
-  await expireDue(db, scope.shopId);
   const q = scoped(db, scope)
     .join("customers as c", "c.id", "quotes.customer_id")
     .leftJoin("users as u", "u.id", "quotes.created_by")
     .orderBy("quotes.created_at", "desc")
     .limit(opts.limit ?? 200)
-    .select("quotes.id", "quotes.number", "quotes.status", "quotes.total_cents", "quotes.deposit_cents", "quotes.vehicle_description", "quotes.created_at", "quotes.valid_until", "c.name as customer_name", "u.name as created_by_name");
-  if (opts.status) q.andWhere("quotes.status", opts.status);
+    .select("quotes.id", "quotes.number", db.raw(`${EFFECTIVE_STATUS_SQL} as status`), "quotes.total_cents", "quotes.deposit_cents", "quotes.vehicle_description", "quotes.created_at", "quotes.valid_until", "c.name as customer_name", "u.name as created_by_name");
+  if (opts.status) q.andWhereRaw(`${EFFECTIVE_STATUS_SQL} = ?`, [opts.status]);
   return q;
 }
 
@@ -392,5 +415,5 @@ export async function findByToken(db: Knex | Knex.Transaction, token: string, lo
   if (!/^[A-Za-z0-9_-]{43}$/.test(token)) return undefined;
   const q = db<QuoteRow>("quotes").where({ public_token_hash: sha256(token) }).first();
   if (lock) q.forUpdate();
-  return q;
+  return withEffectiveStatus((await q) as QuoteRow | undefined);
 }

@@ -35,6 +35,11 @@ describe.skipIf(!PGBIN || !DATA)("when PostgreSQL goes away and comes back", () 
       const down = await fetch(`${BASE}/api/health`);
       expect(down.status).toBe(503);
       expect((await down.json()).message).toMatch(/not reachable/);
+      // A load balancer takes the server out (readiness names the database) but does not restart it (liveness).
+      const notReady = await fetch(`${BASE}/api/health/ready`);
+      expect(notReady.status).toBe(503);
+      expect((await notReady.json()).failed).toContain("database");
+      expect((await fetch(`${BASE}/api/health/live`)).status).toBe(200);
 
       await page.goto("/account");
       await expect.poll(() => page.getByRole("heading", { level: 1 }).textContent(), { timeout: 20000 }).toMatch(/can't reach its database/);
@@ -43,6 +48,8 @@ describe.skipIf(!PGBIN || !DATA)("when PostgreSQL goes away and comes back", () 
 
       startPg();
       await expect.poll(async () => (await fetch(`${BASE}/api/health`)).status, { timeout: 20000 }).toBe(200);
+      // The job queue's pool reconnects too.
+      await expect.poll(async () => (await fetch(`${BASE}/api/health/ready`)).status, { timeout: 20000 }).toBe(200);
       // The error page notices by itself and shows the account again.
       await expect.poll(() => page.getByRole("heading", { level: 1 }).textContent(), { timeout: 20000 }).toMatch(/^Hello, /);
       await shot(page, "database-back");

@@ -14,7 +14,7 @@ import { U, seedShops } from "./support/shopFixture";
 const session = vi.hoisted(() => ({ current: null as unknown }));
 vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
 vi.mock("next/cache", () => ({ revalidatePath: () => {} }));
-vi.mock("@/lib/mail", () => ({ sendMail: async () => {}, appOrigin: () => "http://127.0.0.1:3000" }));
+vi.mock("@/lib/mail", () => ({ sendMail: async () => {}, queueMail: async () => "job", appOrigin: () => "http://127.0.0.1:3000" }));
 
 const db = testDb();
 const MEMBER = { id: "d4000000-0000-4000-8000-000000000001", role: "member", shop_id: null, email: "human@example.test", name: "Ines Varro" };

@@ -6,7 +6,8 @@ import { SHOP_A, U, VEHICLE, item, seedShops } from "./support/shopFixture";
 const session = vi.hoisted(() => ({ current: null as unknown }));
 vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
 const sent = vi.hoisted(() => [] as { to: string; text: string; attachments?: { filename: string; content: Buffer }[] }[]);
-vi.mock("@/lib/mail", () => ({ sendMail: async (m: (typeof sent)[number]) => void sent.push(m), appOrigin: () => "http://127.0.0.1:3000" }));
+// The mail as it is queued (the queue itself: tests/integration/jobs.test.ts).
+vi.mock("@/lib/mail", () => ({ queueMail: async (m: (typeof sent)[number]) => void sent.push(m), appOrigin: () => "http://127.0.0.1:3000" }));
 
 const db = testDb();
 const as = (u: (typeof U)[keyof typeof U]) => void (session.current = sessionOf(u));

@@ -7,6 +7,8 @@ vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
 const sent = vi.hoisted(() => [] as { to: string; subject: string; text: string }[]);
 vi.mock("@/lib/mail", () => ({
   sendMail: async (m: { to: string; subject: string; text: string }) => void sent.push(m),
+  // The route's mail as it is queued (the queue itself: tests/integration/jobs.test.ts).
+  queueMail: async (m: { to: string; subject: string; text: string }) => void sent.push(m),
   appOrigin: () => "http://127.0.0.1:3000",
 }));
 

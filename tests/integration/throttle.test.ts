@@ -10,7 +10,7 @@ import { ctx, req } from "./support/requests";
  * Security review: the per-address limit keyed on X-Forwarded-For (anyone can rotate it), and
  * five wrong passwords from anywhere locked the account for everyone for 15 minutes.
  */
-vi.mock("@/lib/mail", () => ({ sendMail: async () => {}, appOrigin: () => "http://127.0.0.1:3000" }));
+vi.mock("@/lib/mail", () => ({ sendMail: async () => {}, queueMail: async () => "job-id", appOrigin: () => "http://127.0.0.1:3000" }));
 
 const db = testDb();
 const { authOptions } = await import("@/lib/auth/options");

@@ -40,6 +40,7 @@ export default async function AccountPage({ searchParams }: { searchParams: Prom
               <>
                 <li><Link className="text-ember-700 underline" href="/admin/users">Users and roles</Link></li>
                 <li><Link className="text-ember-700 underline" href="/admin/outbox">Development outbox</Link></li>
+                <li><Link className="text-ember-700 underline" href="/admin/jobs">Background jobs (failed mail and scheduled work)</Link></li>
               </>
             )}
             <li><Link className="text-ember-700 underline" href="/forgot-password">Change your password by e-mail</Link></li>

@@ -1,4 +1,5 @@
 import { db } from "@/lib/db";
+import { log } from "@/lib/log";
 
 export const dynamic = "force-dynamic";
 
@@ -10,7 +11,7 @@ export async function GET() {
     const ms = Math.round((performance.now() - started) * 100) / 100;
     return Response.json({ status: "ok", database: { status: "ok", roundTripMs: ms } }, { headers: { "Cache-Control": "no-store" } });
   } catch (error) {
-    console.error("health: database check failed:", (error as Error).message);
+    log().error({ err: { message: (error as Error).message } }, "health: database check failed");
     return Response.json(
       { status: "unavailable", database: { status: "down" }, message: "The database is not reachable. The app will recover by itself when it is back." },
       { status: 503, headers: { "Cache-Control": "no-store" } },

@@ -4,6 +4,8 @@ const MEMBER_ID = "a1000000-0000-4000-8000-000000000001";
 
 export const cases: MatrixCase[] = [
   { route: "/api/health", method: "GET", path: "/api/health", expect: publicRoute(200) },
+  { route: "/api/health/live", method: "GET", path: "/api/health/live", expect: publicRoute(200) },
+  { route: "/api/health/ready", method: "GET", path: "/api/health/ready", expect: publicRoute(200) },
   { route: "/api/me", method: "GET", path: "/api/me", expect: signedIn(200) },
   {
     route: "/api/account/sessions/end-all",
@@ -38,6 +40,15 @@ export const cases: MatrixCase[] = [
     expect: only(["admin"]),
   },
   { route: "/api/admin/outbox", method: "GET", path: "/api/admin/outbox", expect: only(["admin"]) },
+  { route: "/api/admin/jobs", method: "GET", path: "/api/admin/jobs", expect: only(["admin"]) },
+  {
+    route: "/api/admin/jobs/[id]/retry",
+    method: "POST",
+    path: "/api/admin/jobs/00000000-0000-4000-8000-00000000f00d/retry",
+    body: {},
+    expect: only(["admin"], 404),
+    note: "no such job: the admin gets 404, everyone else is refused before the lookup",
+  },
 ];
 
 // next-auth's own handler: the session endpoint answers everyone; sign-out without its CSRF

@@ -7,7 +7,7 @@ import { appOrigin } from "@/lib/mail";
 import { RATE_LIMITS } from "@/lib/server/limits";
 import { consumeOrRefuse } from "@/lib/server/rateLimit";
 import { createDepositSession } from "@/lib/payments/provider";
-import { expireDue, findByToken, latestSentDocument, transition } from "@/lib/server/quotes";
+import { findByToken, latestSentDocument, transition } from "@/lib/server/quotes";
 import { publicQuoteActionSchema } from "@/lib/validation/quotes";
 
 const params = z.object({ token: z.string().regex(/^[A-Za-z0-9_-]{43}$/) });
@@ -25,7 +25,6 @@ export const POST = route({ access: "public", params, body: publicQuoteActionSch
     ],
     "Too many actions on this quote.",
   );
-  await expireDue(db);
   if (body.action === "accept" || body.action === "decline") {
     await db.transaction(async (trx) => {
       const quote = await findByToken(trx, params.token, true);

@@ -1,7 +1,7 @@
 import { db } from "@/lib/db";
 import { HttpError } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
-import { appOrigin, sendMail } from "@/lib/mail";
+import { appOrigin, queueMail } from "@/lib/mail";
 import { RATE_LIMITS } from "@/lib/server/limits";
 import { consumeOrRefuse } from "@/lib/server/rateLimit";
 import { INVITE_TTL_HOURS, SHOP_OWNER, createInvite, getShop, listOpenInvites, listTeam, shopIdOf } from "@/lib/server/shops";
@@ -25,7 +25,7 @@ export const POST = route({ access: SHOP_OWNER, body: staffInviteSchema }, async
   const { token, invite } = await createInvite(db, shopId, body.email, caller.userId);
   const link = `${appOrigin()}/join/${token}`;
   const shopName = shop?.name ?? "a shop";
-  await sendMail({
+  await queueMail({
     to: body.email,
     subject: `${caller.name} invites you to ${shopName} on Hubface`,
     text:

@@ -1,7 +1,7 @@
 import { db } from "@/lib/db";
 import { clientAddress } from "@/lib/auth/clientAddress";
 import { route } from "@/lib/http/route";
-import { appOrigin, sendMail } from "@/lib/mail";
+import { appOrigin, queueMail } from "@/lib/mail";
 import { afterResponse } from "@/lib/server/afterResponse";
 import { RATE_LIMITS } from "@/lib/server/limits";
 import { RESET_TTL_MINUTES, issueResetToken } from "@/lib/server/passwordResets";
@@ -34,7 +34,7 @@ async function mailResetLink(email: string): Promise<void> {
   if (!user) return;
   const token = await issueResetToken(db, user.id);
   const link = `${appOrigin()}/reset-password?token=${token}`;
-  await sendMail({
+  await queueMail({
     to: user.email,
     subject: "Reset your Hubface password",
     text:
