@@ -43,6 +43,10 @@ export interface VehicleDraft {
   cruise: string;
   /** Fender line from the hub face, in the display unit; empty = not entered. */
   fender: string;
+  /** First-gear ratio; empty = not entered (no crawl ratio then). */
+  first: string;
+  /** Transfer-case low-range ratio; empty = not entered. */
+  low: string;
   /**
    * The exact values behind `cruise` and `fender` as last generated from an input: while the
    * text is unchanged these are read back, so switching units does not round 60 mph to 60.27.
@@ -104,6 +108,8 @@ export function draftFromInput(input: ComparisonInput, prefs: DisplayPrefs): Dra
       kpi: v.kingpinInclinationDeg === null ? "" : plain(v.kingpinInclinationDeg, 2),
       axle: plain(v.axleRatio, 3),
       top: plain(v.transmissionRatio, 3),
+      first: v.firstGearRatio === null ? "" : plain(v.firstGearRatio, 3),
+      low: v.transferLowRatio === null ? "" : plain(v.transferLowRatio, 3),
       ...vehicleUnitFields(input, prefs),
     },
   };
@@ -232,9 +238,11 @@ export function readDraft(draft: Draft, prefs: DisplayPrefs): { input: Compariso
   };
   const kpi = v.kpi.trim() === "" ? null : plainNumber(v.kpi, "kingpinInclinationDeg", LIMITS.kingpinInclinationDeg, "°", "enter degrees, e.g. 8, or leave it empty.", "8", /°|deg$/i);
   // "3.73:1" is a common way to write a ratio.
-  const axleText = /^\s*\d+(\.\d+)?\s*:\s*1\s*$/.test(v.axle) ? (v.axle.split(":")[0] ?? "") : v.axle;
-  const axle = plainNumber(axleText, "axleRatio", LIMITS.axleRatio, "", "enter a ratio, e.g. 3.73 (or 3.73:1).", "3.73");
+  const ratioText = (t: string) => (/^\s*\d+(\.\d+)?\s*:\s*1\s*$/.test(t) ? (t.split(":")[0] ?? "") : t);
+  const axle = plainNumber(ratioText(v.axle), "axleRatio", LIMITS.axleRatio, "", "enter a ratio, e.g. 3.73 (or 3.73:1).", "3.73");
   const top = plainNumber(v.top, "transmissionRatio", LIMITS.transmissionRatio, "", "enter a ratio, e.g. 1.00 (direct) or 0.70 (overdrive).", "1.00");
+  const first = v.first.trim() === "" ? null : plainNumber(ratioText(v.first), "firstGearRatio", LIMITS.firstGearRatio, "", "enter a ratio, e.g. 4.03 (or 4.03:1), or leave it empty.", "4.03");
+  const low = v.low.trim() === "" ? null : plainNumber(ratioText(v.low), "transferLowRatio", LIMITS.transferLowRatio, "", "enter a ratio, e.g. 2.72 (or 2.72:1), or leave it empty.", "2.72");
 
   const sUnit = speedUnit(prefs);
   const metric = prefs.units === "metric";
@@ -273,7 +281,7 @@ export function readDraft(draft: Draft, prefs: DisplayPrefs): { input: Compariso
   const candidate = {
     current: readSetup("current", draft.current, errors),
     planned: readSetup("planned", draft.planned, errors),
-    vehicle: { kingpinInclinationDeg: kpi, axleRatio: axle, transmissionRatio: top, cruiseSpeedsMph: cruise, fenderLineMm: fender },
+    vehicle: { kingpinInclinationDeg: kpi, axleRatio: axle, transmissionRatio: top, cruiseSpeedsMph: cruise, fenderLineMm: fender, firstGearRatio: first, transferLowRatio: low },
   };
   const checked = checkComparison(candidate);
   if (!checked.ok) {

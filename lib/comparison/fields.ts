@@ -27,6 +27,8 @@ export const VEHICLE_FIELD_BASE = {
   transmissionRatio: "Top-gear ratio",
   cruiseSpeedsMph: "Cruise speeds",
   fenderLineMm: "Fender line from hub face",
+  firstGearRatio: "First-gear ratio (optional)",
+  transferLowRatio: "Transfer-case low ratio (optional)",
 } as const;
 export type VehicleFieldPath = keyof typeof VEHICLE_FIELD_BASE;
 

@@ -154,6 +154,20 @@ describe("vehicle details panel", () => {
     expect(window.location.search).toContain("fender=139.7");
   });
 
+  it("takes first gear and transfer-case low and shows the crawl ratio beside the regear figures", async () => {
+    const user = userEvent.setup();
+    render(<Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} />);
+    await openPanel(user);
+    expect(screen.queryByTestId("change-crawl")).toBeNull();
+    await retype(user, screen.getByLabelText(/^First-gear ratio/), "4.03");
+    await retype(user, screen.getByLabelText(/^Transfer-case low ratio/), "2.72");
+    // Crawl = first × low × axle (common 4x4 handbook definition, common practice, no written source):
+    // 4.03 × 2.72 × 3.73 = 40.89:1; on the suggested 4.30, 47.13:1.
+    expect(headline("change-crawl")).toBe("40.89:1");
+    expect(headline("change-crawl-regeared")).toBe("47.13:1");
+    expect(window.location.search).toContain("first=4.03&low=2.72");
+  });
+
   it("opens by itself when a vehicle figure has an error, stays open once it is fixed, and closes when the person closes it", async () => {
     const user = userEvent.setup();
     render(<Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} />);
