@@ -51,7 +51,7 @@ export interface VehicleDraft {
    * The exact values behind `cruise` and `fender` as last generated from an input: while the
    * text is unchanged these are read back, so switching units does not round 60 mph to 60.27.
    */
-  exact?: { cruise: string; cruiseMph: number[]; fender: string; fenderMm: number | null };
+  exact?: { cruise: string | null; cruiseMph: number[]; fender: string | null; fenderMm: number | null };
 }
 
 export interface Draft {
@@ -96,6 +96,62 @@ export function vehicleUnitFields(input: ComparisonInput, prefs: DisplayPrefs): 
   const cruise = v.cruiseSpeedsMph.map((mph) => (prefs.units === "metric" ? plain(mph * KM_PER_MILE, 0) : plain(mph, 1))).join(", ");
   const fender = v.fenderLineMm === null ? "" : prefs.units === "metric" ? plain(v.fenderLineMm, 0) : inchText(mmToIn(v.fenderLineMm), prefs);
   return { cruise, fender, exact: { cruise, cruiseMph: v.cruiseSpeedsMph, fender, fenderMm: v.fenderLineMm } };
+}
+
+/**
+ * One field's own value: the field's text read alone, every other field taken from `good` (a
+ * valid input), so another field's error cannot hide or change it. null when the text does not
+ * read (its own error).
+ */
+function readAlone<T>(good: ComparisonInput, prefs: DisplayPrefs, put: (d: Draft) => void, pick: (input: ComparisonInput) => T): T | null {
+  const probe = draftFromInput(good, prefs);
+  put(probe);
+  const { input } = readDraft(probe, prefs);
+  return input ? pick(input) : null;
+}
+
+/**
+ * Rewrites the unit-bearing text of a draft for another display choice, field by field: a field
+ * whose own text reads under `from` is rewritten from its value under `to`, whatever the other
+ * fields hold (an axle ratio of "abc" must not leave 5-1/2 in relabelled as mm); a field whose
+ * text does not read keeps it, and when the unit changed it is listed in `unconverted`.
+ * `good` is the last valid input (it fills in the other fields while one is read).
+ *
+ * @example
+ * // Inch → metric with the axle ratio "abc": the fender line 5-1/2 in becomes 139.7 mm all the same
+ * // (shown to the mm; the exact 139.7 is kept behind the text).
+ * convertDraft(draft, good, { units: "imperial", lengths: "fraction" }, { units: "metric", lengths: "decimal" }).draft.vehicle.fender; // "140"
+ */
+export function convertDraft(draft: Draft, good: ComparisonInput, from: DisplayPrefs, to: DisplayPrefs): { draft: Draft; unconverted: VehicleFieldPath[] } {
+  const v = draft.vehicle;
+  const hasFender = v.fender.trim() !== "";
+  const cruiseMph = v.exact?.cruise === v.cruise ? v.exact.cruiseMph : readAlone(good, from, (d) => void (d.vehicle.cruise = v.cruise), (i) => i.vehicle.cruiseSpeedsMph);
+  const fenderMm = !hasFender ? null : v.exact?.fender === v.fender ? v.exact.fenderMm : readAlone(good, from, (d) => void (d.vehicle.fender = v.fender), (i) => i.vehicle.fenderLineMm);
+  const fenderRead = !hasFender || fenderMm !== null;
+  const fresh = vehicleUnitFields({ ...good, vehicle: { ...good.vehicle, cruiseSpeedsMph: cruiseMph ?? good.vehicle.cruiseSpeedsMph, fenderLineMm: fenderMm } }, to);
+  const vehicle: VehicleDraft = {
+    ...v,
+    cruise: cruiseMph === null ? v.cruise : fresh.cruise,
+    fender: fenderRead ? fresh.fender : v.fender,
+    // Only a text written here stands for an exact value; a kept text is read afresh.
+    exact: { cruise: cruiseMph === null ? null : fresh.cruise, cruiseMph: cruiseMph ?? [], fender: fenderRead ? fresh.fender : null, fenderMm },
+  };
+  const unconverted: VehicleFieldPath[] = [];
+  if (from.units !== to.units) {
+    if (cruiseMph === null) unconverted.push("cruiseSpeedsMph");
+    if (!fenderRead) unconverted.push("fenderLineMm");
+  }
+  // Backspacing and flange allowance stay inches whatever the choice; only their writing
+  // (decimal or sixteenths) follows it, for each text that reads as a length.
+  const inches = (text: string): string => {
+    const mm = readLength(text, "in");
+    return typeof mm === "number" ? inchText(tidy(mmToIn(mm)), to) : text;
+  };
+  const setup = (side: "current" | "planned"): SetupDraft => {
+    const d = draft[side];
+    return d.mode === "backspacing" ? { ...d, backspacing: inches(d.backspacing), flange: inches(d.flange) } : d;
+  };
+  return { draft: { current: setup("current"), planned: setup("planned"), vehicle }, unconverted };
 }
 
 /** The form text for a comparison input. */
