@@ -72,9 +72,6 @@ export function marginField(label: string) {
     );
 }
 
-/** The margin the garage pages' planned-setup and finder forms take (labelled "Margin"). */
-export const marginSchema = marginField("Margin");
-
 /** The vehicle's margin ("Clearance margin" on the vehicle form): left empty, the common-practice default 1/2 in. */
 export const vehicleMarginSchema = z
   .union([z.number(), z.string(), z.null()])
