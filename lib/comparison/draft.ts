@@ -12,10 +12,10 @@ import {
   SETUP_FIELD_EXAMPLE as EX,
   SETUP_FIELD_LABEL,
   type SetupFieldPath,
-  VEHICLE_FIELD_BASE,
   type VehicleFieldPath,
   boundText,
   fenderUnit,
+  inputFieldLabel,
   lengthMessages,
   speedUnit,
   vehicleFieldLabel,
@@ -266,14 +266,6 @@ function readSetup(side: "current" | "planned", d: SetupDraft, errors: DraftErro
   return { tire: d.tire, wheelDiameterIn: diameter, wheelWidthIn: width, position, spacerMm: spacer };
 }
 
-/** The label of an input path ("planned.position.offsetMm"), for the model's cross-field messages. */
-function labelOf(key: string, prefs: DisplayPrefs): string | null {
-  const [head, ...rest] = key.split(".");
-  const path = rest.join(".");
-  if (head === "vehicle") return path in VEHICLE_FIELD_BASE ? vehicleFieldLabel(path as VehicleFieldPath, prefs) : null;
-  return path in SETUP_FIELD_LABEL ? SETUP_FIELD_LABEL[path as SetupFieldPath] : null;
-}
-
 /**
  * Reads the form text into a comparison input. Returns the input when every field is valid
  * (schema included), otherwise null, and the error of each field in `errors`.
@@ -347,7 +339,7 @@ export function readDraft(draft: Draft, prefs: DisplayPrefs): { input: Compariso
       const key = issue.path.join(".");
       const field = key.startsWith("vehicle.cruiseSpeedsMph") ? "vehicle.cruiseSpeedsMph" : key;
       if (field in errors) continue;
-      const name = labelOf(field, prefs);
+      const name = inputFieldLabel(field, prefs);
       errors[field] = name ? `${name}: ${lower(issue.message)}` : issue.message;
     }
   }
