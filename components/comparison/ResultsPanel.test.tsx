@@ -19,6 +19,22 @@ afterEach(cleanup);
 // Speed ∝ rolling circumference (handbook): actual = indicated × r; the speedometer reads (1 − 1/r) low.
 const SENTENCE = "Actual speed is 17.1 % above the speedometer; the speedometer reads 14.6 % low.";
 
+describe("headline crawl ratio (first gear × transfer-case low × axle; common 4x4 handbook definition, common practice, no written source)", () => {
+  it("shows the crawl ratio on the current and the suggested axle ratio, and what the 37 in tire makes each act like", () => {
+    const input = { ...DEFAULT_INPUT, vehicle: { ...DEFAULT_INPUT.vehicle, firstGearRatio: 4.03, transferLowRatio: 2.72 } };
+    render(<HeadlineChanges result={computeComparison(input)} prefs={inch} />);
+    // 4.03 × 2.72 × 3.73 = 40.8868; × 802.8 / 939.8 (ISO 4000-1 diameters) = 34.9265, −14.6 %.
+    expect(stat("change-crawl")).toEqual({ label: "Crawl ratio", value: "40.89:1", sub: "4.03 × 2.72 × 3.73; planned tire: acts like 34.93:1 (−14.6 %)" });
+    // 4.03 × 2.72 × 4.30 = 47.1349; × 802.8 / 939.8 = 40.2638.
+    expect(stat("change-crawl-regeared")).toEqual({ label: "Crawl ratio regeared", value: "47.13:1", sub: "with 4.30; planned tire: acts like 40.26:1" });
+  });
+
+  it("is left out until both gear ratios are entered", () => {
+    render(<HeadlineChanges result={computeComparison(DEFAULT_INPUT)} prefs={inch} />);
+    expect(screen.queryByTestId("change-crawl")).toBeNull();
+  });
+});
+
 describe("headline speedometer figure", () => {
   it("metric readers get a round 100 km/h indicated and both percentages named", () => {
     render(<HeadlineChanges result={computeComparison(DEFAULT_INPUT)} prefs={metric} />);

@@ -70,6 +70,23 @@ describe("computeComparison — the demo comparison 265/70R17 on 17x8 +25 vs 37x
     expect(r.gearing.suggestedRatio).toBe(4.3);
   });
 
+  it("crawl ratio = first gear × transfer-case low × axle (common 4x4 handbook definition, common practice, no written source): 4.03 × 2.72 × 3.73 = 40.89:1", () => {
+    expect(r.gearing.crawl).toBeNull();
+    const c = computeComparison({ ...DEFAULT_INPUT, vehicle: { ...DEFAULT_INPUT.vehicle, firstGearRatio: 4.03, transferLowRatio: 2.72 } }).gearing.crawl;
+    // By hand: 4.03 × 2.72 = 10.9616; × 3.73 = 40.8868.
+    expect(c?.ratio).toBeCloseTo(40.8868, 4);
+    // The 37 in tire (939.8 mm) over the 265/70R17 (802.8 mm, ISO 4000-1) acts like 40.8868 × 802.8 / 939.8 = 34.9265:1, 14.6 % lower.
+    expect(c?.onPlannedTire).toBeCloseTo(34.9265, 3);
+    expect(c?.changePct).toBeCloseTo((802.8 / 939.8 - 1) * 100, 9);
+    // Regeared to the suggested 4.30 (see the engine-speed check above): 10.9616 × 4.30 = 47.1349;
+    // on the 37 in tire × 802.8 / 939.8 = 40.2637, back near the 40.89 of the current tire.
+    expect(r.gearing.suggestedRatio).toBe(4.3);
+    expect(c?.regeared).toBeCloseTo(47.1349, 3);
+    expect(c?.regearedOnPlannedTire).toBeCloseTo(40.2637, 3);
+    // Only one of the two gear ratios gives no crawl ratio.
+    expect(computeComparison({ ...DEFAULT_INPUT, vehicle: { ...DEFAULT_INPUT.vehicle, firstGearRatio: 4.03 } }).gearing.crawl).toBeNull();
+  });
+
   it("detail figures: circumference π·D, revs per mile 1 609 344 mm / C (NIST SP 811 mile), per km 10⁶ mm / C", () => {
     expect(r.current.circumferenceMm).toBeCloseTo(Math.PI * 802.8, 6);
     expect(r.current.revsPerMile).toBeCloseTo(1_609_344 / (Math.PI * 802.8), 6);

@@ -17,6 +17,8 @@ import {
   KM_PER_MILE,
   backspacingFromOffset,
   compareSetups,
+  crawlRatio,
+  effectiveCrawlRatio,
   kgToLb,
   loadIndexKg,
   loadRangeInfo,
@@ -70,6 +72,26 @@ export interface CruiseRow {
   currentRpm: number;
   plannedRpm: number;
   regearedRpm: number;
+}
+
+/**
+ * Crawl ratios (first gear × transfer-case low × axle), when both gear ratios are entered: on the
+ * current axle ratio and on the suggested one, each as it is and as the planned tire makes it act
+ * (× D_current / D_planned).
+ */
+export interface CrawlFigures {
+  firstGearRatio: number;
+  transferLowRatio: number;
+  /** With the current axle ratio, on the current tire. */
+  ratio: number;
+  /** With the current axle ratio, as the planned tire makes it act. */
+  onPlannedTire: number;
+  /** Change from `ratio` to `onPlannedTire`, percent; negative = the taller tire lowers it. */
+  changePct: number;
+  /** With the suggested (regeared) axle ratio. */
+  regeared: number;
+  /** With the suggested axle ratio, as the planned tire makes it act. */
+  regearedOnPlannedTire: number;
 }
 
 /** Figures of one setup, as the detail table shows them. */
@@ -153,6 +175,8 @@ export interface ComparisonResult {
     effectiveRatio: number;
     ratioToRestore: number;
     suggestedRatio: number;
+    /** null unless both the first-gear and the transfer-case low ratios are entered. */
+    crawl: CrawlFigures | null;
     cruise: CruiseRow[];
     /** The chart rows, at round speeds of each unit system. */
     bySystem: Record<SpeedSystem, { unit: SpeedUnit; rows: RpmRow[] }>;
@@ -228,6 +252,23 @@ function figures(s: SetupInputValues, g: SetupGeometry): SetupFigures {
     load,
     speed,
     loadRange,
+  };
+}
+
+function crawlOf(first: number | null, low: number | null, axle: number, suggested: number, dCurrentMm: number, dPlannedMm: number): CrawlFigures | null {
+  // Saved comparisons from before these fields existed carry neither (undefined): not entered.
+  if (first == null || low == null) return null;
+  const ratio = crawlRatio(first, low, axle);
+  const regeared = crawlRatio(first, low, suggested);
+  const onPlannedTire = effectiveCrawlRatio(ratio, dCurrentMm, dPlannedMm);
+  return {
+    firstGearRatio: first,
+    transferLowRatio: low,
+    ratio,
+    onPlannedTire,
+    changePct: (onPlannedTire / ratio - 1) * 100,
+    regeared,
+    regearedOnPlannedTire: effectiveCrawlRatio(regeared, dCurrentMm, dPlannedMm),
   };
 }
 
@@ -414,6 +455,7 @@ export function computeComparison(input: ComparisonInput): ComparisonResult {
       effectiveRatio: c.gearing.effectiveRatio,
       ratioToRestore: c.gearing.ratioToRestore,
       suggestedRatio: c.gearing.suggestedRatio,
+      crawl: crawlOf(v.firstGearRatio, v.transferLowRatio, c.gearing.axleRatio, c.gearing.suggestedRatio, current.overallDiameterMm, planned.overallDiameterMm),
       cruise,
       bySystem: { imperial: gearingOf("imperial"), metric: gearingOf("metric") },
     },

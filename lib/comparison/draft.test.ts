@@ -133,6 +133,14 @@ describe("units: a field reads its stated unit, fractions only as inches", () =>
     expect(vehicle({ fender: "600" }, metric).errors["vehicle.fenderLineMm"]).toBe("Fender line from hub face (mm): must be between 0 and 500 mm, e.g. 140.");
   });
 
+  it("first-gear and transfer-case low ratios are optional: empty is not entered, 4.03:1 reads as 4.03, and they show back as typed", () => {
+    expect(vehicle({}).input?.vehicle).toMatchObject({ firstGearRatio: null, transferLowRatio: null });
+    const r = vehicle({ first: "4.03:1", low: "2.72" });
+    expect(r.input?.vehicle).toMatchObject({ firstGearRatio: 4.03, transferLowRatio: 2.72 });
+    expect(draftFromInput(r.input!, inch).vehicle).toMatchObject({ first: "4.03", low: "2.72" });
+    expect(vehicle({ low: "two" }).errors["vehicle.transferLowRatio"]).toBe("Transfer-case low ratio (optional): enter a ratio, e.g. 2.72 (or 2.72:1), or leave it empty.");
+  });
+
   it("cruise speeds out of bounds are stated in the unit shown (5–150 mph = 8.1–241.4 km/h inward, 1 mi = 1.609344 km)", () => {
     expect(vehicle({ cruise: "55, 200" }).errors["vehicle.cruiseSpeedsMph"]).toBe("Cruise speeds (mph): each speed must be between 5 and 150 mph, e.g. 60, 70.");
     expect(vehicle({ cruise: "100, 300" }, metric).errors["vehicle.cruiseSpeedsMph"]).toBe("Cruise speeds (km/h): each speed must be between 8.1 and 241.4 km/h, e.g. 100, 110.");
@@ -151,6 +159,8 @@ describe("units: a field reads its stated unit, fractions only as inches", () =>
       { field: "vehicle.kingpinInclinationDeg", label: "Kingpin inclination (°)", bad: () => vehicle({ kpi: "45" }), good: () => vehicle({ kpi: "8" }) },
       { field: "vehicle.axleRatio", label: "Axle ratio", bad: () => vehicle({ axle: "" }), good: () => vehicle({ axle: "3.73" }) },
       { field: "vehicle.transmissionRatio", label: "Top-gear ratio", bad: () => vehicle({ top: "20" }), good: () => vehicle({ top: "1.00" }) },
+      { field: "vehicle.firstGearRatio", label: "First-gear ratio (optional)", bad: () => vehicle({ first: "first" }), good: () => vehicle({ first: "4.03:1" }) },
+      { field: "vehicle.transferLowRatio", label: "Transfer-case low ratio (optional)", bad: () => vehicle({ low: "0.5" }), good: () => vehicle({ low: "2.72" }) },
     ];
     for (const c of cases) {
       const message = c.bad().errors[c.field];

@@ -12,10 +12,10 @@ import {
   SETUP_FIELD_EXAMPLE as EX,
   SETUP_FIELD_LABEL,
   type SetupFieldPath,
-  VEHICLE_FIELD_BASE,
   type VehicleFieldPath,
   boundText,
   fenderUnit,
+  inputFieldLabel,
   lengthMessages,
   speedUnit,
   vehicleFieldLabel,
@@ -43,11 +43,15 @@ export interface VehicleDraft {
   cruise: string;
   /** Fender line from the hub face, in the display unit; empty = not entered. */
   fender: string;
+  /** First-gear ratio; empty = not entered (no crawl ratio then). */
+  first: string;
+  /** Transfer-case low-range ratio; empty = not entered. */
+  low: string;
   /**
    * The exact values behind `cruise` and `fender` as last generated from an input: while the
    * text is unchanged these are read back, so switching units does not round 60 mph to 60.27.
    */
-  exact?: { cruise: string; cruiseMph: number[]; fender: string; fenderMm: number | null };
+  exact?: { cruise: string | null; cruiseMph: number[]; fender: string | null; fenderMm: number | null };
 }
 
 export interface Draft {
@@ -94,6 +98,62 @@ export function vehicleUnitFields(input: ComparisonInput, prefs: DisplayPrefs): 
   return { cruise, fender, exact: { cruise, cruiseMph: v.cruiseSpeedsMph, fender, fenderMm: v.fenderLineMm } };
 }
 
+/**
+ * One field's own value: the field's text read alone, every other field taken from `good` (a
+ * valid input), so another field's error cannot hide or change it. null when the text does not
+ * read (its own error).
+ */
+function readAlone<T>(good: ComparisonInput, prefs: DisplayPrefs, put: (d: Draft) => void, pick: (input: ComparisonInput) => T): T | null {
+  const probe = draftFromInput(good, prefs);
+  put(probe);
+  const { input } = readDraft(probe, prefs);
+  return input ? pick(input) : null;
+}
+
+/**
+ * Rewrites the unit-bearing text of a draft for another display choice, field by field: a field
+ * whose own text reads under `from` is rewritten from its value under `to`, whatever the other
+ * fields hold (an axle ratio of "abc" must not leave 5-1/2 in relabelled as mm); a field whose
+ * text does not read keeps it, and when the unit changed it is listed in `unconverted`.
+ * `good` is the last valid input (it fills in the other fields while one is read).
+ *
+ * @example
+ * // Inch → metric with the axle ratio "abc": the fender line 5-1/2 in becomes 139.7 mm all the same
+ * // (shown to the mm; the exact 139.7 is kept behind the text).
+ * convertDraft(draft, good, { units: "imperial", lengths: "fraction" }, { units: "metric", lengths: "decimal" }).draft.vehicle.fender; // "140"
+ */
+export function convertDraft(draft: Draft, good: ComparisonInput, from: DisplayPrefs, to: DisplayPrefs): { draft: Draft; unconverted: VehicleFieldPath[] } {
+  const v = draft.vehicle;
+  const hasFender = v.fender.trim() !== "";
+  const cruiseMph = v.exact?.cruise === v.cruise ? v.exact.cruiseMph : readAlone(good, from, (d) => void (d.vehicle.cruise = v.cruise), (i) => i.vehicle.cruiseSpeedsMph);
+  const fenderMm = !hasFender ? null : v.exact?.fender === v.fender ? v.exact.fenderMm : readAlone(good, from, (d) => void (d.vehicle.fender = v.fender), (i) => i.vehicle.fenderLineMm);
+  const fenderRead = !hasFender || fenderMm !== null;
+  const fresh = vehicleUnitFields({ ...good, vehicle: { ...good.vehicle, cruiseSpeedsMph: cruiseMph ?? good.vehicle.cruiseSpeedsMph, fenderLineMm: fenderMm } }, to);
+  const vehicle: VehicleDraft = {
+    ...v,
+    cruise: cruiseMph === null ? v.cruise : fresh.cruise,
+    fender: fenderRead ? fresh.fender : v.fender,
+    // Only a text written here stands for an exact value; a kept text is read afresh.
+    exact: { cruise: cruiseMph === null ? null : fresh.cruise, cruiseMph: cruiseMph ?? [], fender: fenderRead ? fresh.fender : null, fenderMm },
+  };
+  const unconverted: VehicleFieldPath[] = [];
+  if (from.units !== to.units) {
+    if (cruiseMph === null) unconverted.push("cruiseSpeedsMph");
+    if (!fenderRead) unconverted.push("fenderLineMm");
+  }
+  // Backspacing and flange allowance stay inches whatever the choice; only their writing
+  // (decimal or sixteenths) follows it, for each text that reads as a length.
+  const inches = (text: string): string => {
+    const mm = readLength(text, "in");
+    return typeof mm === "number" ? inchText(tidy(mmToIn(mm)), to) : text;
+  };
+  const setup = (side: "current" | "planned"): SetupDraft => {
+    const d = draft[side];
+    return d.mode === "backspacing" ? { ...d, backspacing: inches(d.backspacing), flange: inches(d.flange) } : d;
+  };
+  return { draft: { current: setup("current"), planned: setup("planned"), vehicle }, unconverted };
+}
+
 /** The form text for a comparison input. */
 export function draftFromInput(input: ComparisonInput, prefs: DisplayPrefs): Draft {
   const v = input.vehicle;
@@ -104,6 +164,8 @@ export function draftFromInput(input: ComparisonInput, prefs: DisplayPrefs): Dra
       kpi: v.kingpinInclinationDeg === null ? "" : plain(v.kingpinInclinationDeg, 2),
       axle: plain(v.axleRatio, 3),
       top: plain(v.transmissionRatio, 3),
+      first: v.firstGearRatio === null ? "" : plain(v.firstGearRatio, 3),
+      low: v.transferLowRatio === null ? "" : plain(v.transferLowRatio, 3),
       ...vehicleUnitFields(input, prefs),
     },
   };
@@ -204,14 +266,6 @@ function readSetup(side: "current" | "planned", d: SetupDraft, errors: DraftErro
   return { tire: d.tire, wheelDiameterIn: diameter, wheelWidthIn: width, position, spacerMm: spacer };
 }
 
-/** The label of an input path ("planned.position.offsetMm"), for the model's cross-field messages. */
-function labelOf(key: string, prefs: DisplayPrefs): string | null {
-  const [head, ...rest] = key.split(".");
-  const path = rest.join(".");
-  if (head === "vehicle") return path in VEHICLE_FIELD_BASE ? vehicleFieldLabel(path as VehicleFieldPath, prefs) : null;
-  return path in SETUP_FIELD_LABEL ? SETUP_FIELD_LABEL[path as SetupFieldPath] : null;
-}
-
 /**
  * Reads the form text into a comparison input. Returns the input when every field is valid
  * (schema included), otherwise null, and the error of each field in `errors`.
@@ -232,9 +286,11 @@ export function readDraft(draft: Draft, prefs: DisplayPrefs): { input: Compariso
   };
   const kpi = v.kpi.trim() === "" ? null : plainNumber(v.kpi, "kingpinInclinationDeg", LIMITS.kingpinInclinationDeg, "°", "enter degrees, e.g. 8, or leave it empty.", "8", /°|deg$/i);
   // "3.73:1" is a common way to write a ratio.
-  const axleText = /^\s*\d+(\.\d+)?\s*:\s*1\s*$/.test(v.axle) ? (v.axle.split(":")[0] ?? "") : v.axle;
-  const axle = plainNumber(axleText, "axleRatio", LIMITS.axleRatio, "", "enter a ratio, e.g. 3.73 (or 3.73:1).", "3.73");
+  const ratioText = (t: string) => (/^\s*\d+(\.\d+)?\s*:\s*1\s*$/.test(t) ? (t.split(":")[0] ?? "") : t);
+  const axle = plainNumber(ratioText(v.axle), "axleRatio", LIMITS.axleRatio, "", "enter a ratio, e.g. 3.73 (or 3.73:1).", "3.73");
   const top = plainNumber(v.top, "transmissionRatio", LIMITS.transmissionRatio, "", "enter a ratio, e.g. 1.00 (direct) or 0.70 (overdrive).", "1.00");
+  const first = v.first.trim() === "" ? null : plainNumber(ratioText(v.first), "firstGearRatio", LIMITS.firstGearRatio, "", "enter a ratio, e.g. 4.03 (or 4.03:1), or leave it empty.", "4.03");
+  const low = v.low.trim() === "" ? null : plainNumber(ratioText(v.low), "transferLowRatio", LIMITS.transferLowRatio, "", "enter a ratio, e.g. 2.72 (or 2.72:1), or leave it empty.", "2.72");
 
   const sUnit = speedUnit(prefs);
   const metric = prefs.units === "metric";
@@ -273,7 +329,7 @@ export function readDraft(draft: Draft, prefs: DisplayPrefs): { input: Compariso
   const candidate = {
     current: readSetup("current", draft.current, errors),
     planned: readSetup("planned", draft.planned, errors),
-    vehicle: { kingpinInclinationDeg: kpi, axleRatio: axle, transmissionRatio: top, cruiseSpeedsMph: cruise, fenderLineMm: fender },
+    vehicle: { kingpinInclinationDeg: kpi, axleRatio: axle, transmissionRatio: top, cruiseSpeedsMph: cruise, fenderLineMm: fender, firstGearRatio: first, transferLowRatio: low },
   };
   const checked = checkComparison(candidate);
   if (!checked.ok) {
@@ -283,7 +339,7 @@ export function readDraft(draft: Draft, prefs: DisplayPrefs): { input: Compariso
       const key = issue.path.join(".");
       const field = key.startsWith("vehicle.cruiseSpeedsMph") ? "vehicle.cruiseSpeedsMph" : key;
       if (field in errors) continue;
-      const name = labelOf(field, prefs);
+      const name = inputFieldLabel(field, prefs);
       errors[field] = name ? `${name}: ${lower(issue.message)}` : issue.message;
     }
   }

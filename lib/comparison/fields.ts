@@ -27,6 +27,8 @@ export const VEHICLE_FIELD_BASE = {
   transmissionRatio: "Top-gear ratio",
   cruiseSpeedsMph: "Cruise speeds",
   fenderLineMm: "Fender line from hub face",
+  firstGearRatio: "First-gear ratio (optional)",
+  transferLowRatio: "Transfer-case low ratio (optional)",
 } as const;
 export type VehicleFieldPath = keyof typeof VEHICLE_FIELD_BASE;
 
@@ -46,6 +48,28 @@ export function vehicleFieldLabel(path: VehicleFieldPath, prefs: DisplayPrefs): 
   if (path === "cruiseSpeedsMph") return `${VEHICLE_FIELD_BASE.cruiseSpeedsMph} (${speedUnit(prefs)})`;
   if (path === "fenderLineMm") return `${VEHICLE_FIELD_BASE.fenderLineMm} (${fenderUnit(prefs)})`;
   return VEHICLE_FIELD_BASE[path];
+}
+
+/**
+ * The label of a comparison input path as the screen shows it, or null for a path that is no
+ * field. `withSide` puts the setup's panel in front, for a message shown away from the field.
+ *
+ * @example
+ * inputFieldLabel("planned.position.offsetMm", prefs); // "Offset (mm)"
+ * inputFieldLabel("current.wheelWidthIn", prefs, { withSide: true }); // "Current setup · Wheel width (in)"
+ * inputFieldLabel("vehicle.cruiseSpeedsMph.1", { units: "metric", lengths: "decimal" }); // "Cruise speeds (km/h)"
+ */
+export function inputFieldLabel(key: string, prefs: DisplayPrefs, opts: { withSide?: boolean } = {}): string | null {
+  const [head, ...rest] = key.split(".");
+  if (head === "vehicle") {
+    const field = rest[0] ?? "";
+    return field in VEHICLE_FIELD_BASE ? vehicleFieldLabel(field as VehicleFieldPath, prefs) : null;
+  }
+  if (head !== "current" && head !== "planned") return null;
+  const path = rest.join(".");
+  if (!(path in SETUP_FIELD_LABEL)) return null;
+  const label = SETUP_FIELD_LABEL[path as SetupFieldPath];
+  return opts.withSide ? `${SIDE_LABEL[head]} · ${label}` : label;
 }
 
 /**

@@ -45,6 +45,10 @@ export interface VehicleValues {
   cruiseSpeedsMph: number[];
   /** Fender line, measured outboard from the hub mounting face; null = not entered. */
   fenderLineMm: number | null;
+  /** First-gear ratio of the transmission, for the crawl ratio; null = not entered. */
+  firstGearRatio: number | null;
+  /** Transfer-case low-range ratio, for the crawl ratio; null = not entered. */
+  transferLowRatio: number | null;
 }
 
 export interface ComparisonInput {
@@ -67,6 +71,8 @@ export const LIMITS = {
   cruiseMph: { min: 5, max: 150 },
   cruiseCount: { min: 1, max: 6 },
   fenderLineMm: { min: 0, max: 500 },
+  firstGearRatio: { min: 1, max: 10 },
+  transferLowRatio: { min: 1, max: 10 },
 } as const;
 
 /** The engine's default flange allowance, inches. */
@@ -79,6 +85,8 @@ export const DEFAULT_VEHICLE: VehicleValues = {
   transmissionRatio: DEFAULT_TRANSMISSION_RATIO,
   cruiseSpeedsMph: [60, 70],
   fenderLineMm: null,
+  firstGearRatio: null,
+  transferLowRatio: null,
 };
 
 /** The demo comparison the workspace opens with (invented, realistic sizes). */
@@ -208,8 +216,11 @@ export function checkVehicle(v: unknown, path: Issue["path"] = []): Checked<Vehi
   else if (c.length > LIMITS.cruiseCount.max) issues.push({ path: [...path, "cruiseSpeedsMph"], message: "Enter at most six cruise speeds." });
   else c.forEach((s: unknown, i) => cruise.push(num(s, [...path, "cruiseSpeedsMph", i], "a cruise speed", LIMITS.cruiseMph, " mph", "65", issues)));
   const fender = v.fenderLineMm === null ? null : num(v.fenderLineMm, [...path, "fenderLineMm"], "the fender line distance", LIMITS.fenderLineMm, " mm", "140", issues);
+  // Missing (undefined) reads as not entered: comparisons saved before these fields existed load as they were.
+  const first = v.firstGearRatio === null || v.firstGearRatio === undefined ? null : num(v.firstGearRatio, [...path, "firstGearRatio"], "the first-gear ratio", LIMITS.firstGearRatio, "", "4.03", issues);
+  const low = v.transferLowRatio === null || v.transferLowRatio === undefined ? null : num(v.transferLowRatio, [...path, "transferLowRatio"], "the transfer-case low ratio", LIMITS.transferLowRatio, "", "2.72", issues);
   if (issues.length > 0) return { ok: false, issues };
-  return { ok: true, value: { kingpinInclinationDeg: kpi, axleRatio, transmissionRatio, cruiseSpeedsMph: cruise, fenderLineMm: fender } };
+  return { ok: true, value: { kingpinInclinationDeg: kpi, axleRatio, transmissionRatio, cruiseSpeedsMph: cruise, fenderLineMm: fender, firstGearRatio: first, transferLowRatio: low } };
 }
 
 /**

@@ -50,7 +50,7 @@ describe("comparison input schema", () => {
           position: { mode: "offset" as const, offsetMm: s.offset },
           spacerMm: s.spacerMm,
         });
-        const input = { current: mk(a), planned: mk(b), vehicle: { ...DEFAULT_INPUT.vehicle, kingpinInclinationDeg: kpi } };
+        const input = { current: mk(a), planned: mk(b), vehicle: { ...DEFAULT_INPUT.vehicle, kingpinInclinationDeg: kpi, firstGearRatio: 4.03, transferLowRatio: 2.72 } };
         const parsed = comparisonInputSchema.safeParse(input);
         if (!parsed.success) return;
         const out = computeComparison(parsed.data);
@@ -59,6 +59,23 @@ describe("comparison input schema", () => {
       }),
       { numRuns: 300 },
     );
+  });
+});
+
+describe("crawl-ratio inputs (first-gear and transfer-case low ratios)", () => {
+  it("an input saved before they existed loads with both as not entered", () => {
+    const { firstGearRatio: _f, transferLowRatio: _l, ...older } = DEFAULT_INPUT.vehicle;
+    const parsed = comparisonInputSchema.parse({ ...DEFAULT_INPUT, vehicle: older });
+    expect(parsed.vehicle).toEqual({ ...older, firstGearRatio: null, transferLowRatio: null });
+  });
+  it("keeps entered ratios and bounds them like the other ratios", () => {
+    const withGears = { ...DEFAULT_INPUT, vehicle: { ...DEFAULT_INPUT.vehicle, firstGearRatio: 4.03, transferLowRatio: 2.72 } };
+    expect(comparisonInputSchema.parse(withGears).vehicle).toMatchObject({ firstGearRatio: 4.03, transferLowRatio: 2.72 });
+    const bad = comparisonInputSchema.safeParse({ ...DEFAULT_INPUT, vehicle: { ...DEFAULT_INPUT.vehicle, firstGearRatio: 0.5, transferLowRatio: "low" } });
+    expect(bad.error?.issues.map((i) => [i.path.join("."), i.message])).toEqual([
+      ["vehicle.firstGearRatio", "The first-gear ratio must be between 1 and 10 (e.g. 4.03)."],
+      ["vehicle.transferLowRatio", "Enter the transfer-case low ratio as a number (e.g. 2.72)."],
+    ]);
   });
 });
 

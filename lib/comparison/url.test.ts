@@ -12,11 +12,11 @@ describe("comparison query string", () => {
     const x: ComparisonInput = {
       current: { ...DEFAULT_INPUT.current, spacerMm: 12.5 },
       planned: { tire: "LT315/70R17 121/118Q", wheelDiameterIn: 17, wheelWidthIn: 8.5, position: { mode: "backspacing", backspacingIn: 4.75, reference: "bead-seat", flangeIn: 0.625 }, spacerMm: 0 },
-      vehicle: { kingpinInclinationDeg: 8.5, axleRatio: 4.1, transmissionRatio: 0.72, cruiseSpeedsMph: [55, 65, 75], fenderLineMm: 142 },
+      vehicle: { kingpinInclinationDeg: 8.5, axleRatio: 4.1, transmissionRatio: 0.72, cruiseSpeedsMph: [55, 65, 75], fenderLineMm: 142, firstGearRatio: 4.03, transferLowRatio: 2.72 },
     };
     const q = encodeComparison(x);
     expect(q).toContain("pb=4.75&pr=bead&pf=0.625");
-    expect(q).toContain("kpi=8.5&axle=4.1&top=0.72&cruise=55,65,75&fender=142");
+    expect(q).toContain("kpi=8.5&axle=4.1&top=0.72&cruise=55,65,75&fender=142&first=4.03&low=2.72");
     expect(decodeComparison(q)).toEqual({ input: x, problems: [] });
     expect(decodeComparison(`?${q}`).input).toEqual(x);
     expect(decodeComparison(new URLSearchParams(q)).input).toEqual(x);
@@ -41,6 +41,8 @@ describe("comparison query string", () => {
       transmissionRatio: four(0.3, 10),
       cruiseSpeedsMph: fc.array(four(5, 150), { minLength: 1, maxLength: 6 }),
       fenderLineMm: fc.option(four(0, 500)),
+      firstGearRatio: fc.option(four(1, 10)),
+      transferLowRatio: fc.option(four(1, 10)),
     });
     fc.assert(
       fc.property(setup, setup, vehicle, (current, planned, v) => {
@@ -50,6 +52,13 @@ describe("comparison query string", () => {
       }),
       { numRuns: 300 },
     );
+  });
+
+  it("old links without the gear parameters still decode, with no crawl-ratio inputs; bad ones are named", () => {
+    const old = "ct=265/70R17&cd=17&cw=8&co=25&pt=37x12.50R17LT&pd=17&pw=9&po=-12&axle=4.1";
+    expect(decodeComparison(old)).toEqual({ input: { ...DEFAULT_INPUT, current: { ...DEFAULT_INPUT.current, tire: "265/70R17" }, planned: { ...DEFAULT_INPUT.planned, tire: "37x12.50R17LT" }, vehicle: { ...DEFAULT_INPUT.vehicle, axleRatio: 4.1, firstGearRatio: null, transferLowRatio: null } }, problems: [] });
+    expect(hasComparisonParams("first=4.03")).toBe(true);
+    expect(decodeComparison("first=4.03&low=12").problems.map(problemText)).toEqual(["Transfer-case low ratio (optional): “12” is outside 1–10; using none (not entered)."]);
   });
 
   it("falls back per parameter and names what it could not read", () => {

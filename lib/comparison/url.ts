@@ -7,7 +7,9 @@
  * wheel width (in), then either `o` offset (mm) or `b` backspacing (in) with `r` its reference
  * (`flange` | `bead`) and `f` the flange allowance (in, only when not the default), `s` spacer
  * (mm, only when fitted). Vehicle: `kpi` (°), `axle`, `top` (top-gear ratio), `cruise` (mph,
- * comma-separated), `fender` (mm from the hub face). Figures equal to the defaults are left out.
+ * comma-separated), `fender` (mm from the hub face), `first` (first-gear ratio) and `low`
+ * (transfer-case low ratio). Figures equal to the defaults are left out, so links made before a
+ * parameter existed still decode to what they meant.
  *
  * Decoding never throws: a parameter that is missing falls back to its default (a wheel diameter
  * to the tire's rim diameter); one that is not understood, out of bounds, in conflict with another
@@ -90,6 +92,8 @@ export function encodeComparison(input: ComparisonInput): string {
   if (v.transmissionRatio !== DEFAULT_VEHICLE.transmissionRatio) out.push(["top", urlNumber(v.transmissionRatio)]);
   if (v.cruiseSpeedsMph.join(",") !== DEFAULT_VEHICLE.cruiseSpeedsMph.join(",")) out.push(["cruise", v.cruiseSpeedsMph.map(urlNumber).join(",")]);
   if (v.fenderLineMm !== null) out.push(["fender", urlNumber(v.fenderLineMm)]);
+  if (v.firstGearRatio !== null) out.push(["first", urlNumber(v.firstGearRatio)]);
+  if (v.transferLowRatio !== null) out.push(["low", urlNumber(v.transferLowRatio)]);
   return joinQuery(out);
 }
 
@@ -255,6 +259,8 @@ const VEHICLE_LABEL = {
   top: VEHICLE_FIELD_BASE.transmissionRatio,
   cruise: VEHICLE_FIELD_BASE.cruiseSpeedsMph,
   fender: VEHICLE_FIELD_BASE.fenderLineMm,
+  first: VEHICLE_FIELD_BASE.firstGearRatio,
+  low: VEHICLE_FIELD_BASE.transferLowRatio,
 } as const;
 
 function decodeVehicle(p: URLSearchParams, problems: LinkProblem[]): VehicleValues {
@@ -293,13 +299,15 @@ function decodeVehicle(p: URLSearchParams, problems: LinkProblem[]): VehicleValu
     transmissionRatio,
     cruiseSpeedsMph: cruise,
     fenderLineMm: num("fender", LIMITS.fenderLineMm, " mm", d.fenderLineMm, "none (not measured)"),
+    firstGearRatio: num("first", LIMITS.firstGearRatio, "", d.firstGearRatio, "none (not entered)"),
+    transferLowRatio: num("low", LIMITS.transferLowRatio, "", d.transferLowRatio, "none (not entered)"),
   };
 }
 
 /** True when the query carries any comparison parameter (else the page opens the demo comparison). */
 export function hasComparisonParams(q: QueryLike): boolean {
   const p = toParams(q);
-  return [...p.keys()].some((k) => /^[cp][tdwobrfs]$/.test(k) || ["kpi", "axle", "top", "cruise", "fender"].includes(k));
+  return [...p.keys()].some((k) => /^[cp][tdwobrfs]$/.test(k) || ["kpi", "axle", "top", "cruise", "fender", "first", "low"].includes(k));
 }
 
 /**

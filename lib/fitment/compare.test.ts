@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { compareSetups, engineRpm, RPM_CONSTANT } from "./compare";
+import { compareSetups, crawlRatio, effectiveCrawlRatio, engineRpm, RPM_CONSTANT } from "./compare";
 import { FitmentInputError } from "./errors";
 import { setupGeometry, type SetupInput } from "./geometry";
 import { STANDARD_SIZES } from "./standardSizes";
@@ -20,6 +20,21 @@ describe("engine RPM (handbook formula RPM = mph · axle · trans · 336.135 / D
   });
   it("rejects impossible ratios", () => {
     expect(() => engineRpm(50, 0, 1, 35)).toThrow(/axleRatio/);
+  });
+});
+
+describe("crawl ratio (first gear × transfer-case low × axle; common 4x4 handbook definition, common practice, no written source)", () => {
+  it("worked example: 4.03 first, 2.72 low, 3.73 axle = 40.89:1 (by hand: 4.03 × 2.72 = 10.9616; × 3.73 = 40.8868)", () => {
+    expect(crawlRatio(4.03, 2.72, 3.73)).toBeCloseTo(40.8868, 4);
+  });
+  it("a taller tire lowers the effective crawl by D_current / D_planned: 265/70R17 (802.8 mm, ISO 4000-1) → 37 in (939.8 mm)", () => {
+    // 40.8868 × 802.8 / 939.8 = 34.9265 (by hand).
+    expect(effectiveCrawlRatio(40.8868, 802.8, 939.8)).toBeCloseTo(34.9265, 3);
+    expect(effectiveCrawlRatio(40, 800, 800)).toBe(40);
+  });
+  it("refuses impossible gear ratios by field", () => {
+    expect(() => crawlRatio(0, 2.72, 3.73)).toThrow(/firstGearRatio/);
+    expect(() => crawlRatio(4.03, Number.NaN, 3.73)).toThrow(/transferLowRatio/);
   });
 });
 

@@ -87,6 +87,37 @@ export function engineRpm(mph: number, axleRatio: number, transmissionRatio: num
   return (mph * axleRatio * transmissionRatio * RPM_CONSTANT) / tireDiameterIn;
 }
 
+/**
+ * Crawl ratio: the overall reduction from the engine to the wheels in first gear and low range,
+ * first gear × transfer-case low × axle ratio (the usual off-road handbook definition; common
+ * practice, no written source named). Higher crawls slower and climbs with less throttle.
+ *
+ * @example
+ * crawlRatio(4.03, 2.72, 3.73); // ≈ 40.89 (40.888…)
+ */
+export function crawlRatio(firstGearRatio: number, transferLowRatio: number, axleRatio: number): number {
+  requireNumber("firstGearRatio", firstGearRatio, 1, 10, "4.03");
+  requireNumber("transferLowRatio", transferLowRatio, 1, 10, "2.72");
+  requireNumber("axleRatio", axleRatio, 1, 10, "4.10");
+  return firstGearRatio * transferLowRatio * axleRatio;
+}
+
+/**
+ * The crawl ratio a taller (or shorter) tire makes the drivetrain act like: the wheel covers
+ * more ground per turn, so the reduction at the ground shrinks by the ratio of overall
+ * diameters, crawl × D_current / D_planned (same derivation as the effective axle ratio;
+ * common practice, no written source named).
+ *
+ * @example
+ * effectiveCrawlRatio(40.89, 802.8, 939.8); // ≈ 34.93 (a 265/70R17 → 37 in tire)
+ */
+export function effectiveCrawlRatio(crawl: number, currentDiameterMm: number, plannedDiameterMm: number): number {
+  requireNumber("crawl", crawl, 1, 1000, "40");
+  requireNumber("currentDiameterMm", currentDiameterMm, 250, 2000, "802.8", "mm");
+  requireNumber("plannedDiameterMm", plannedDiameterMm, 250, 2000, "939.8", "mm");
+  return (crawl * currentDiameterMm) / plannedDiameterMm;
+}
+
 function isGeometry(s: SetupLike): s is SetupGeometry {
   return typeof (s as SetupGeometry).innerSwingMm === "number" && typeof (s as SetupGeometry).tire === "object";
 }

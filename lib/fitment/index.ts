@@ -86,6 +86,8 @@ export {
   DEFAULT_TRANSMISSION_RATIO,
   DEFAULT_KPI_DEG,
   compareSetups,
+  crawlRatio,
+  effectiveCrawlRatio,
   engineRpm,
   type CompareOptions,
   type SetupLike,

@@ -7,43 +7,56 @@
 import { z } from "zod";
 import { type FitmentConstraints, DEFAULT_WHEEL_WIDTHS_IN, setupGeometry } from "@/lib/fitment";
 import type { VehicleClearance, Vehicle } from "@/lib/garage/types";
-import { marginSchema } from "@/lib/validation/garage";
+import { marginField } from "@/lib/validation/garage";
 import { optionalLengthField, toEngineSetup } from "@/lib/validation/setup";
 import { measuredPoints, steeringAxisOf } from "@/lib/garage/predict";
+
+/** The goal fields as the finder form labels them, for the form and for every message. */
+export const FINDER_LABEL = {
+  targetDiameterMm: "Target diameter (in)",
+  minDiameterMm: "From (in)",
+  maxDiameterMm: "To (in)",
+  wheelDiameters: "Wheel diameters (in)",
+  minWidthIn: "Rim width from (in)",
+  maxWidthIn: "Rim width to (in)",
+  maxPokeMm: "Most extra poke (mm)",
+  margin: "Margin",
+} as const;
+const L = FINDER_LABEL;
 
 const diameter = (label: string) => optionalLengthField(label, "in", { min: 300, max: 2000 }, "35 in", "mm");
 
 export const finderGoalsSchema = z
   .object({
-    targetDiameterMm: diameter("the target diameter"),
-    minDiameterMm: diameter("the smallest diameter"),
-    maxDiameterMm: diameter("the largest diameter"),
+    targetDiameterMm: diameter(L.targetDiameterMm),
+    minDiameterMm: diameter(L.minDiameterMm),
+    maxDiameterMm: diameter(L.maxDiameterMm),
     wheelDiameters: z
       .string()
       .trim()
-      .max(60, "List at most a few wheel diameters (e.g. 17, 18).")
+      .max(60, `${L.wheelDiameters}: list at most a few, e.g. 17, 18.`)
       .transform((v, ctx) => {
         if (!v) return null;
         const parts = v.split(/[\s,;]+/).filter(Boolean);
         const nums = parts.map(Number);
         if (nums.some((n) => !Number.isFinite(n) || n < 8 || n > 30)) {
-          ctx.addIssue({ code: "custom", message: "List wheel diameters in inches between 8 and 30, e.g. 17, 18." });
+          ctx.addIssue({ code: "custom", message: `${L.wheelDiameters}: list diameters between 8 and 30 in, e.g. 17, 18.` });
           return z.NEVER;
         }
         return [...new Set(nums)];
       }),
-    maxPokeMm: optionalLengthField("the most extra poke", "mm", { min: -200, max: 300 }, "25 mm"),
+    maxPokeMm: optionalLengthField(L.maxPokeMm, "mm", { min: -200, max: 300 }, "25 mm"),
     usePoints: z.boolean(),
-    minWidthIn: optionalLengthField("the narrowest rim", "in", { min: 3, max: 20 }, "8"),
-    maxWidthIn: optionalLengthField("the widest rim", "in", { min: 3, max: 20 }, "10"),
-    margin: marginSchema,
+    minWidthIn: optionalLengthField(L.minWidthIn, "in", { min: 3, max: 20 }, "8"),
+    maxWidthIn: optionalLengthField(L.maxWidthIn, "in", { min: 3, max: 20 }, "10"),
+    margin: marginField(L.margin),
   })
   .superRefine((g, ctx) => {
     if (g.minDiameterMm !== null && g.maxDiameterMm !== null && g.minDiameterMm > g.maxDiameterMm) {
-      ctx.addIssue({ code: "custom", path: ["maxDiameterMm"], message: "The largest diameter must not be below the smallest." });
+      ctx.addIssue({ code: "custom", path: ["maxDiameterMm"], message: `${L.maxDiameterMm}: must not be below ${L.minDiameterMm}, e.g. 33 to 35-1/2.` });
     }
     if (g.minWidthIn !== null && g.maxWidthIn !== null && g.minWidthIn > g.maxWidthIn) {
-      ctx.addIssue({ code: "custom", path: ["maxWidthIn"], message: "The widest rim must not be narrower than the narrowest." });
+      ctx.addIssue({ code: "custom", path: ["maxWidthIn"], message: `${L.maxWidthIn}: must not be narrower than ${L.minWidthIn}, e.g. 8 to 10.` });
     }
   });
 export type FinderGoalsForm = z.input<typeof finderGoalsSchema>;

@@ -2,7 +2,7 @@ import "server-only";
 import { randomBytes } from "node:crypto";
 import type { Knex } from "knex";
 import { keyFigureColumns } from "@/lib/comparison/keyFigures";
-import { type ComparisonInput, comparisonInputSchema } from "@/lib/comparison/schema";
+import { type ComparisonInput, checkComparison, comparisonInputSchema } from "@/lib/comparison/schema";
 import type { ComparisonRow, ComparisonShareRow } from "@/lib/db/types";
 import { HttpError } from "@/lib/http/errors";
 import { findVehicle } from "./garage";
@@ -30,11 +30,15 @@ function figuresOf(row: ComparisonRow): ComparisonFigures {
 }
 
 function toSaved(row: RowWithShare): SavedComparison {
+  // Read through the model: an input saved before a field existed gets it as not entered (the
+  // crawl-ratio gears), so every screen sees a whole input. One the rules no longer accept is
+  // passed on as stored, as before.
+  const checked = checkComparison(row.input);
   return {
     id: row.id,
     name: row.name,
     vehicleId: row.vehicle_id,
-    input: row.input as ComparisonInput,
+    input: checked.ok ? checked.value : (row.input as ComparisonInput),
     figures: figuresOf(row),
     share: row.share_slug ? { slug: row.share_slug, createdAt: new Date(row.share_created_at!).toISOString() } : null,
     createdAt: new Date(row.created_at).toISOString(),

@@ -72,9 +72,6 @@ export function marginField(label: string) {
     );
 }
 
-/** The margin the garage pages' planned-setup and finder forms take (labelled "Margin"). */
-export const marginSchema = marginField("Margin");
-
 /** The vehicle's margin ("Clearance margin" on the vehicle form): left empty, the common-practice default 1/2 in. */
 export const vehicleMarginSchema = z
   .union([z.number(), z.string(), z.null()])
@@ -111,7 +108,32 @@ export type VehicleValues = z.output<typeof vehicleSchema>;
 
 export { CLEARANCE_DIRECTION_LABEL, SUSPENSION_STATE_LABEL };
 
-const UNIT_AT_END = /(mm|cm|in|inch|inches|"|''|”)\s*$/i;
+/** A distance text that names its own unit ("38 mm", "1-1/2 in", '1.5"'). */
+export const UNIT_AT_END = /(mm|cm|in|inch|inches|"|''|”)\s*$/i;
+
+/**
+ * The distance text for another unit choice ("Unit (when the distance has none)"): a bare
+ * figure is converted (1 in = 25.4 mm, NIST SP 811), so switching the unit never relabels it; a
+ * text that names its own unit, or does not read, is left as it is.
+ *
+ * @example
+ * distanceForUnit("1.5", "in", "mm"); // "38.1"
+ * distanceForUnit("1-1/2", "in", "mm"); // "38.1"
+ * distanceForUnit("38 mm", "mm", "in"); // "38 mm"
+ */
+export function distanceForUnit(text: string, from: "in" | "mm", to: "in" | "mm"): string {
+  const t = text.trim().replace(/\u2212/g, "-");
+  if (from === to || t === "" || UNIT_AT_END.test(t)) return text;
+  let mm: number;
+  try {
+    mm = parseLength(t, from);
+  } catch {
+    return text;
+  }
+  // mm to the hundredth, inches to the ten-thousandth: both well inside what a tape reads.
+  const r = to === "mm" ? Math.round(mm * 100) / 100 : Math.round((mm / MM_PER_IN) * 10_000) / 10_000;
+  return String(r === 0 ? 0 : r);
+}
 
 /**
  * A measured gap: text with its unit ("1-1/2 in", "38 mm"), or a bare number with `unit`.

@@ -90,6 +90,16 @@ describe.each(VIEWPORTS)("typing into every workspace field at $name px (Chromiu
       await vehicleField(page, /^Kingpin inclination/, "8");
       await expect.poll(() => figureSub(page, "change-scrub").textContent()).toBe("with 8.0° KPI");
 
+      // Crawl ratio = first gear × transfer-case low × axle (common 4x4 handbook definition, common
+      // practice, no written source): 4.03 × 2.72 × 4.10 = 44.94:1; on the suggested 4.88, 53.49:1.
+      await vehicleField(page, /^First-gear ratio/, "4.03");
+      await vehicleField(page, /^Transfer-case low ratio/, "2.72");
+      await expect.poll(() => figure(page, "change-crawl").textContent()).toBe("44.94:1");
+      // The 37 in tire acts like 44.94 × 802.8 / 939.8 = 38.39:1.
+      expect(await figureSub(page, "change-crawl").textContent()).toContain("acts like 38.39:1");
+      expect(await figure(page, "change-crawl-regeared").textContent()).toBe("53.49:1");
+      await expect.poll(() => page.url()).toContain("first=4.03&low=2.72");
+
       // Fender line 5-1/2 in = 139.7 mm from the hub face; the drawing places it there (its units are mm).
       await vehicleField(page, /^Fender line from hub face \(in\)/, "5-1/2");
       await expect.poll(() => page.url()).toContain("fender=139.7");
@@ -136,6 +146,7 @@ describe.each(VIEWPORTS)("typing into every workspace field at $name px (Chromiu
       expect(await page.getByLabel(/^Axle ratio/).inputValue()).toBe("4.10");
       expect(await page.getByLabel(/^Cruise speeds/).inputValue()).toBe("55, 65");
       expect(await page.getByLabel(/^Top-gear ratio/).inputValue()).toBe("0.70");
+      expect(await page.getByLabel(/^First-gear ratio/).inputValue()).toBe("4.03");
       expect(await page.getByLabel(/^Fender line from hub face/).inputValue()).toBe("5-1/2");
       const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
       expect(overflow).toBeLessThanOrEqual(0);

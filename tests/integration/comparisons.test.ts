@@ -138,6 +138,21 @@ describe("saved comparisons API", () => {
     expect((await one.GET(req("GET", `/api/comparisons/${c.id}`), idParams(c.id))).status).toBe(404);
   });
 
+  it("round-trips the crawl-ratio inputs, and loads a comparison saved before they existed with both as not entered", async () => {
+    const input = { ...DEFAULT_INPUT, vehicle: { ...DEFAULT_INPUT.vehicle, firstGearRatio: 4.03, transferLowRatio: 2.72 } };
+    const c = await create("Crawler gears", input);
+    expect((await db("comparisons").where({ id: c.id }).first()).input.vehicle).toMatchObject({ firstGearRatio: 4.03, transferLowRatio: 2.72 });
+    const got = await (await one.GET(req("GET", `/api/comparisons/${c.id}`), idParams(c.id))).json();
+    expect(got.comparison.input).toEqual(input);
+    // A row written before the fields existed: its JSON has no firstGearRatio / transferLowRatio.
+    const { firstGearRatio: _f, transferLowRatio: _l, ...olderVehicle } = DEFAULT_INPUT.vehicle;
+    await db("comparisons").where({ id: c.id }).update({ input: JSON.stringify({ ...DEFAULT_INPUT, vehicle: olderVehicle }) });
+    const old = await (await one.GET(req("GET", `/api/comparisons/${c.id}`), idParams(c.id))).json();
+    expect(old.comparison.input).toEqual(DEFAULT_INPUT);
+    const listed = await (await list.GET(req("GET", "/api/comparisons"), noParams)).json();
+    expect(listed.comparisons.find((x: { id: string }) => x.id === c.id).input.vehicle).toMatchObject({ firstGearRatio: null, transferLowRatio: null });
+  });
+
   it("searches names and tire sizes and sorts", async () => {
     await db("comparisons").where({ owner_id: OWNER }).del();
     await create("Beta camp rig");

@@ -97,6 +97,13 @@ describe("the saved comparison list", () => {
     expect(server.fetchMock.mock.calls.some(([, i]) => i?.method === "PATCH")).toBe(false);
   });
 
+  it("says how the speedometer reads: 265/70R17 → 37 in reads 14.6 % low (1 − 802.8 / 939.8, ISO 4000-1 diameters), not “+17.1 %”", () => {
+    renderList();
+    const figure = screen.getByText("Speedometer").parentElement!;
+    expect(figure.querySelector("dd")?.textContent).toBe("reads 14.6 % low");
+    expect(figure.textContent).not.toMatch(/\+17\.1/);
+  });
+
   it("opens a saved comparison in the workspace through the URL codec", () => {
     expect(workspaceHref(saved)).toBe(`/workspace?ct=265/70R17+113T&cd=17&cw=8&co=25&pt=37x12.50R17LT+124Q+LRD&pd=17&pw=9&po=-12&saved=${saved.id}`);
   });

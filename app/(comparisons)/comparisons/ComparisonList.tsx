@@ -10,6 +10,7 @@ import { Button, buttonClass } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { api } from "@/lib/client/api";
 import { type DisplayPrefs, formatLen, formatNumber } from "@/lib/comparison/format";
+import { readingPhrase } from "@/lib/comparison/speedometer";
 import { encodeComparison } from "@/lib/comparison/url";
 import { COMPARISON_SORTS, COMPARISON_SORT_LABEL, type ComparisonSort, type SavedComparison, comparisonNameSchema } from "@/lib/validation/comparisons";
 
@@ -172,7 +173,8 @@ function ComparisonItem({ c, prefs }: { c: SavedComparison; prefs: DisplayPrefs 
         <Figure label="Diameter" value={len(f.diameterChangeMm)} />
         <Figure label="Poke" value={len(f.pokeChangeMm)} />
         <Figure label="Scrub" value={len(f.scrubChangeMm)} />
-        <Figure label="Speedometer" value={`${formatNumber(f.speedometerErrorPct, 1, { signed: true })} %`} />
+        {/* The stored figure is (r − 1) × 100, actual speed above the indicated; say how the speedometer reads instead. */}
+        <Figure label="Speedometer" value={readingPhrase(1 + f.speedometerErrorPct / 100)} />
         <Figure label="Suggested ratio" value={formatNumber(f.suggestedRatio, 2)} />
       </dl>
       <p className="mt-2 text-xs text-basalt-500">

@@ -53,3 +53,31 @@ describe("converter — tire sizes", () => {
     expect(screen.getByText(/^Tire size "285\/75R"/)).toBeTruthy();
   });
 });
+
+describe("converter — torque, pressure and length messages name the field as labelled", () => {
+  const typeInto = async (label: string, text: string) => {
+    const user = userEvent.setup();
+    const field = screen.getByLabelText(label);
+    await user.clear(field);
+    await user.type(field, text);
+    return field;
+  };
+
+  it("refuses a decimal comma in a torque, naming the field, and converts 18.5 ft·lb to 25.08 N·m (1 ft·lbf = 1.355818 N·m, NIST SP 811)", async () => {
+    render(<Converter />);
+    await typeInto("Torque (ft·lb)", "18,5");
+    expect(screen.getByText(/^Torque \(ft·lb\): "18,5" is ambiguous — a comma can mark decimals or thousands/)).toBeTruthy();
+    expect(screen.getByLabelText("Torque (N·m)")).toHaveProperty("value", "");
+    await typeInto("Torque (ft·lb)", "18.5");
+    // 18.5 × 1.355818 = 25.0826 N·m.
+    expect(screen.getByLabelText("Torque (N·m)")).toHaveProperty("value", "25.08");
+  });
+
+  it("names the pressure and length fields in their messages", async () => {
+    render(<Converter />);
+    await typeInto("Pressure (psi)", "lots");
+    expect(screen.getByText("Pressure (psi): enter a pressure like 35.")).toBeTruthy();
+    await typeInto("Millimetres", "wide");
+    expect(screen.getByText("Millimetres: enter a length like 120.65 (or 4-3/4 in).")).toBeTruthy();
+  });
+});

@@ -1,6 +1,6 @@
 "use client";
 import { Card } from "@/components/ui/Card";
-import { formatLength, ftLbToNm, mmToIn, nmToFtLb, parseLength } from "@/lib/fitment";
+import { TORQUE_UNIT_SYMBOL, type TorqueUnit, formatLength, mmToIn, parseLength, parseTorqueEntry, torqueFromNm, torqueToNm } from "@/lib/fitment";
 import { convertPressure } from "@/lib/fitment/pressure";
 import { LinkedFields, type LinkedUnit } from "./LinkedFields";
 import { TireSizeEquivalents } from "./TireSizeEquivalents";
@@ -12,29 +12,43 @@ const plainNumber = (text: string): number | null => {
 };
 
 const LENGTH: LinkedUnit[] = [
-  { key: "mm", label: "Millimetres", read: (t) => parseLength(t, "mm"), show: (mm) => trim(mm, 2), error: "Enter a length like 120.65 (or 4-3/4 in).", hint: "e.g. 120.65" },
+  { key: "mm", label: "Millimetres", read: (t) => parseLength(t, "mm"), show: (mm) => trim(mm, 2), error: "enter a length like 120.65 (or 4-3/4 in).", hint: "e.g. 120.65" },
   {
     key: "in",
     label: "Inches",
     read: (t) => parseLength(t, "in"),
     show: (mm) => trim(mmToIn(mm), 4),
     extra: (mm) => `≈ ${formatLength(mm, { unit: "in", fraction: 16 })} (nearest 1/16)`,
-    error: "Enter inches like 4-3/4, 4 3/4 or 4.75.",
+    error: "enter inches like 4-3/4, 4 3/4 or 4.75.",
     hint: "Fractions work: 4-3/4",
   },
-  { key: "cm", label: "Centimetres", read: (t) => parseLength(/[a-z"”]/i.test(t) ? t : `${t.trim()} cm`, "mm"), show: (mm) => trim(mm / 10, 3), error: "Enter a length like 12.07.", hint: "e.g. 12.07" },
+  { key: "cm", label: "Centimetres", read: (t) => parseLength(/[a-z"”]/i.test(t) ? t : `${t.trim()} cm`, "mm"), show: (mm) => trim(mm / 10, 3), error: "enter a length like 12.07.", hint: "e.g. 12.07" },
 ];
 
 const PRESSURE: LinkedUnit[] = [
-  { key: "psi", label: "psi", read: (t) => { const v = plainNumber(t); return v === null ? null : convertPressure(v, "psi", "kPa"); }, show: (k) => trim(convertPressure(k, "kPa", "psi"), 2), error: "Enter a pressure like 35.", hint: "e.g. 35" },
-  { key: "kpa", label: "kPa", read: plainNumber, show: (k) => trim(k, 1), error: "Enter a pressure like 241.", hint: "e.g. 241" },
-  { key: "bar", label: "bar", read: (t) => { const v = plainNumber(t); return v === null ? null : convertPressure(v, "bar", "kPa"); }, show: (k) => trim(convertPressure(k, "kPa", "bar"), 3), error: "Enter a pressure like 2.4.", hint: "e.g. 2.4" },
+  { key: "psi", label: "Pressure (psi)", read: (t) => { const v = plainNumber(t); return v === null ? null : convertPressure(v, "psi", "kPa"); }, show: (k) => trim(convertPressure(k, "kPa", "psi"), 2), error: "enter a pressure like 35.", hint: "e.g. 35" },
+  { key: "kpa", label: "Pressure (kPa)", read: plainNumber, show: (k) => trim(k, 1), error: "enter a pressure like 241.", hint: "e.g. 241" },
+  { key: "bar", label: "Pressure (bar)", read: (t) => { const v = plainNumber(t); return v === null ? null : convertPressure(v, "bar", "kPa"); }, show: (k) => trim(convertPressure(k, "kPa", "bar"), 3), error: "enter a pressure like 2.4.", hint: "e.g. 2.4" },
 ];
 
-const TORQUE: LinkedUnit[] = [
-  { key: "ftlb", label: "ft·lb", read: (t) => { const v = plainNumber(t); return v === null ? null : ftLbToNm(v); }, show: (nm) => trim(nmToFtLb(nm), 2), error: "Enter a torque like 100.", hint: "e.g. 100" },
-  { key: "nm", label: "N·m", read: plainNumber, show: (nm) => trim(nm, 2), error: "Enter a torque like 135.6.", hint: "e.g. 135.6" },
-];
+/**
+ * Torque goes through the engine's torque entry (the same reading as the tightening tools): a
+ * decimal comma, a range or the other unit's figure is refused with a message naming the field,
+ * never guessed at. 1 ft·lbf = 1.355818 N·m (NIST SP 811).
+ */
+const torqueUnit = (unit: TorqueUnit, example: string, decimals: number): LinkedUnit => {
+  const label = `Torque (${TORQUE_UNIT_SYMBOL[unit]})`;
+  return {
+    key: unit,
+    label,
+    read: (t) => torqueToNm(parseTorqueEntry(t, unit, label), unit),
+    show: (nm) => trim(torqueFromNm(nm, unit), decimals),
+    error: `enter a torque like ${example}.`,
+    readSaysWhy: true,
+    hint: `e.g. ${example}`,
+  };
+};
+const TORQUE: LinkedUnit[] = [torqueUnit("ftlb", "100", 2), torqueUnit("nm", "135.6", 2)];
 
 export function Converter() {
   return (

@@ -13,7 +13,10 @@ export interface LinkedUnit {
   /** Extra line under the field (e.g. the fraction of an inch). */
   extra?: (base: number) => string;
   hint?: string;
+  /** What to type, shown after the field's label when the text is not a value, e.g. "enter a length like 120.65." */
   error: string;
+  /** When `read` throws an Error, its message already names the field and says why: show it instead. */
+  readSaysWhy?: boolean;
 }
 
 /**
@@ -24,10 +27,12 @@ export function LinkedFields({ idPrefix, units, initial }: { idPrefix: string; u
   const [source, setSource] = useState(initial);
   const src = units.find((u) => u.key === source.key) ?? units[0];
   let base: number | null = null;
+  let why: string | null = null;
   try {
     base = src ? src.read(source.text) : null;
-  } catch {
+  } catch (e) {
     base = null;
+    if (src?.readSaysWhy && e instanceof Error) why = e.message;
   }
   if (base !== null && !Number.isFinite(base)) base = null;
   return (
@@ -35,7 +40,8 @@ export function LinkedFields({ idPrefix, units, initial }: { idPrefix: string; u
       {units.map((u) => {
         const isSource = u.key === source.key;
         const value = isSource ? source.text : base === null ? "" : u.show(base);
-        const error = isSource && source.text.trim() !== "" && base === null ? u.error : undefined;
+        // Every message names the field as labelled.
+        const error = isSource && source.text.trim() !== "" && base === null ? (why ?? `${u.label}: ${u.error}`) : undefined;
         const extra = base !== null && u.extra ? u.extra(base) : null;
         return (
           <div key={u.key}>

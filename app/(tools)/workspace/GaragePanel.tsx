@@ -7,7 +7,7 @@ import { Button } from "@/components/ui/Button";
 import { type DisplayPrefs, formatLen } from "@/lib/comparison/format";
 import type { SetupInputValues } from "@/lib/comparison/model";
 import { encodeSetupQuery } from "@/lib/comparison/url";
-import { measuredLimits, predictPoints } from "@/lib/garage/predict";
+import { measuredLimits, predictPoints, steeringAxisOf } from "@/lib/garage/predict";
 import type { WorkspaceVehicle } from "@/lib/garage/types";
 
 /**
@@ -35,9 +35,10 @@ export default function GaragePanel({
   const vehicle = vehicles.find((v) => v.id === vehicleId) ?? null;
   const view = useMemo(() => {
     if (!vehicle) return null;
-    const predictions = predictPoints(vehicle.clearances, planned, vehicle.clearanceMarginMm);
+    // The vehicle places the steering axis (its kingpin inclination), as on the vehicle page.
+    const predictions = predictPoints(vehicle.clearances, planned, vehicle.clearanceMarginMm, vehicle);
     const limits = measuredLimits(vehicle.clearances);
-    return { predictions, limits };
+    return { predictions, limits, axis: steeringAxisOf(vehicle) };
   }, [vehicle, planned]);
 
   const innerMm = view?.limits.maxInnerSwingMm ?? null;
@@ -109,14 +110,16 @@ export default function GaragePanel({
                 signed={(mm: number) => formatLen(mm, prefs, { signed: true, decimals: prefs.units === "metric" ? 0 : 2 })}
                 caption={`Predicted clearance at each measured point of ${vehicle.name}`}
                 testId="workspace-predictions"
+                axisInboardMm={view.axis}
               />
-              <p className="text-xs text-basalt-600">
-                {innerMm !== null && <>Inner limit (nearest inboard part) {len(innerMm)} from the hub face. </>}
-                {outerMm !== null && <>Fender lip (nearest outboard part) {len(outerMm)} from the hub face. </>}
-                Inboard points follow the inner clearance change, outboard points the poke change, upward and fore/aft points at lock the radius change — each
-                from the setup it was measured with, suspension and steering stops as they were. Predictions are a planning aid: test-fit and cycle the
-                suspension and steering lock before driving.
-              </p>
+              {(innerMm !== null || outerMm !== null) && (
+                // How the points are predicted is the table's own note (PredictionNote), the same as on the vehicle page.
+                <p className="text-xs text-basalt-600">
+                  {innerMm !== null && <>Inner limit (nearest inboard part) {len(innerMm)} from the hub face. </>}
+                  {outerMm !== null && <>Fender lip (nearest outboard part) {len(outerMm)} from the hub face. </>}
+                  Both are drawn in “Side by side at the hub” below.
+                </p>
+              )}
             </>
           )}
         </div>

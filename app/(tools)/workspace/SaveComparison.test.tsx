@@ -130,3 +130,22 @@ describe("a saved comparison with unsaved edits", () => {
     expect(unloadHeld()).toBe(false);
   });
 });
+
+describe("the server refusing a comparison", () => {
+  it("names the fields as the workspace labels them, never as input paths", async () => {
+    const user = userEvent.setup();
+    vi.stubGlobal(
+      "fetch",
+      vi.fn(async () => new Response(JSON.stringify({ error: "Some fields need attention.", fieldErrors: { "input.current.wheelWidthIn": ["x"], "input.vehicle.cruiseSpeedsMph.1": ["y"] } }), { status: 422 })),
+    );
+    renderOpened();
+    const offset = planned().getByLabelText("Offset (mm)");
+    await user.clear(offset);
+    await user.type(offset, "-25");
+    await user.click(control().getByRole("button", { name: "Save changes" }));
+    await waitFor(() => expect(screen.getByTestId("save-status").textContent).toContain("did not accept"));
+    const text = screen.getByTestId("save-status").textContent ?? "";
+    expect(text).toContain("The server did not accept the comparison: check Current setup · Wheel width (in), Cruise speeds (mph).");
+    expect(text).not.toMatch(/input\./);
+  });
+});

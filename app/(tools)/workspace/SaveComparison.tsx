@@ -9,6 +9,9 @@ import { Badge } from "@/components/ui/Badge";
 import { Button } from "@/components/ui/Button";
 import { TextField } from "@/components/ui/TextField";
 import { ApiError, api, applyFieldErrors } from "@/lib/client/api";
+import { useDisplayPrefs } from "@/components/comparison/useDisplayPrefs";
+import { inputFieldLabel } from "@/lib/comparison/fields";
+import type { DisplayPrefs } from "@/lib/comparison/format";
 import type { ComparisonInput } from "@/lib/comparison/schema";
 import { encodeComparison } from "@/lib/comparison/url";
 import { type SavedComparison, comparisonNameSchema } from "@/lib/validation/comparisons";
@@ -24,10 +27,13 @@ function suggestedName(input: ComparisonInput): string {
   return `${tire(input.current.tire)} → ${tire(input.planned.tire)}`.slice(0, 120);
 }
 
-function inputErrorText(error: unknown): string | null {
+/** The server's refusal of the input, naming the fields as the workspace labels them (never an input path). */
+function inputErrorText(error: unknown, prefs: DisplayPrefs): string | null {
   if (!(error instanceof ApiError)) return null;
-  const paths = Object.keys(error.body.fieldErrors ?? {}).filter((k) => k.startsWith("input"));
-  return paths.length ? `The server did not accept the comparison (${paths.join(", ")}). Check the fields above.` : null;
+  const paths = Object.keys(error.body.fieldErrors ?? {}).filter((k) => k === "input" || k.startsWith("input."));
+  if (paths.length === 0) return null;
+  const labels = [...new Set(paths.map((k) => inputFieldLabel(k.replace(/^input\.?/, ""), prefs, { withSide: true })).filter((l): l is string => l !== null))];
+  return labels.length ? `The server did not accept the comparison: check ${labels.join(", ")}.` : "The server did not accept the comparison. Check the fields above.";
 }
 
 /**
@@ -36,6 +42,7 @@ function inputErrorText(error: unknown): string | null {
  */
 export function SaveComparison({ saved: openedFrom }: { saved: OpenedComparison | null }) {
   const { input, complete, vehicleId } = useCurrentInput();
+  const [prefs] = useDisplayPrefs();
   // Members with a garage tie the comparison to the picked vehicle (or untie it); others send nothing.
   const vehicleBody = vehicleId === undefined ? {} : { vehicleId };
   const qc = useQueryClient();
@@ -62,7 +69,7 @@ export function SaveComparison({ saved: openedFrom }: { saved: OpenedComparison 
     },
     onError: (error) => {
       const rest = applyFieldErrors(error, form.setError, ["name"]);
-      setNotice(inputErrorText(error) ?? rest);
+      setNotice(inputErrorText(error, prefs) ?? rest);
     },
   });
   const update = useMutation({
@@ -76,7 +83,7 @@ export function SaveComparison({ saved: openedFrom }: { saved: OpenedComparison 
       if (error instanceof ApiError && error.status === 404) {
         setSaved(null);
         setNotice("That saved comparison no longer exists. Save this one as new.");
-      } else setNotice(inputErrorText(error) ?? (error as Error).message);
+      } else setNotice(inputErrorText(error, prefs) ?? (error as Error).message);
     },
   });
 

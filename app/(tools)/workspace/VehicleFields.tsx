@@ -7,6 +7,12 @@ import type { DisplayPrefs } from "@/lib/comparison/format";
 import { vehicleFieldLabel } from "@/lib/comparison/fields";
 import { DEFAULT_VEHICLE } from "@/lib/comparison/model";
 
+/** The two optional gear ratios that, with the axle ratio, give the crawl ratio. */
+const CRAWL_FIELDS = [
+  { key: "first", path: "firstGearRatio", hint: "The transmission's first gear, e.g. 4.03. With the low range it gives the crawl ratio." },
+  { key: "low", path: "transferLowRatio", hint: "The transfer case's low range, e.g. 2.72. Crawl ratio = first gear × low range × axle ratio." },
+] as const;
+
 /** Vehicle figures in a collapsible panel; each says when it is the default. */
 export function VehicleFields({
   draft,
@@ -27,9 +33,10 @@ export function VehicleFields({
   const e = (path: string) => errors[`vehicle.${path}`];
   const set = (patch: Partial<VehicleDraft>) => onChange({ ...draft, ...patch });
   const label = (path: Parameters<typeof vehicleFieldLabel>[0]) => vehicleFieldLabel(path, prefs);
-  const isDefault = (k: "kpi" | "axle" | "top" | "cruise" | "fender") => draft[k].trim() === defaults[k].trim();
-  const tag = (k: "kpi" | "axle" | "top" | "cruise" | "fender") => (isDefault(k) ? " (default)" : "");
-  const count = (["kpi", "axle", "top", "cruise", "fender"] as const).filter((k) => !isDefault(k)).length;
+  type Key = "kpi" | "axle" | "top" | "first" | "low" | "cruise" | "fender";
+  const isDefault = (k: Key) => draft[k].trim() === defaults[k].trim();
+  const tag = (k: Key) => (isDefault(k) ? " (default)" : "");
+  const count = (["kpi", "axle", "top", "first", "low", "cruise", "fender"] as const).filter((k) => !isDefault(k)).length;
   const hasErrors = Object.keys(errors).some((k) => k.startsWith("vehicle."));
   // Open or closed is the person's choice (the summary toggles it). An error appearing opens the
   // panel so the message is seen; nothing closes it but the person: tying `open` to the errors
@@ -44,7 +51,7 @@ export function VehicleFields({
     <details className="group rounded-card bg-white shadow-card ring-1 ring-basalt-100" open={open} onToggle={(ev) => setOpen(ev.currentTarget.open)}>
       <summary className="flex cursor-pointer list-none items-center justify-between gap-3 rounded-card px-4 py-3 font-semibold sm:px-5">
         <span>
-          Vehicle details <span className="font-normal text-basalt-500">— kingpin inclination, gearing, cruise speeds, fender line</span>
+          Vehicle details <span className="font-normal text-basalt-500">— kingpin inclination, gearing, crawl ratio, cruise speeds, fender line</span>
         </span>
         <span className="flex items-center gap-2">
           {count === 0 ? <Badge>all defaults</Badge> : <Badge tone="ember">{count} entered</Badge>}
@@ -81,6 +88,19 @@ export function VehicleFields({
           error={e("transmissionRatio")}
           hint={`Default ${DEFAULT_VEHICLE.transmissionRatio.toFixed(2)} (direct); an overdrive is below 1, e.g. 0.70.`}
         />
+        {CRAWL_FIELDS.map((f) => (
+          <TextField
+            key={f.key}
+            label={label(f.path)}
+            name={`vehicle-${f.key}`}
+            inputMode="decimal"
+            placeholder="not set"
+            value={draft[f.key]}
+            onChange={(ev) => set({ [f.key]: ev.target.value })}
+            error={e(f.path)}
+            hint={f.hint}
+          />
+        ))}
         <TextField
           label={`${label("cruiseSpeedsMph")}${tag("cruise")}`}
           name="vehicle-cruise"

@@ -154,6 +154,53 @@ describe("vehicle details panel", () => {
     expect(window.location.search).toContain("fender=139.7");
   });
 
+  it("takes first gear and transfer-case low and shows the crawl ratio beside the regear figures", async () => {
+    const user = userEvent.setup();
+    render(<Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} />);
+    await openPanel(user);
+    expect(screen.queryByTestId("change-crawl")).toBeNull();
+    await retype(user, screen.getByLabelText(/^First-gear ratio/), "4.03");
+    await retype(user, screen.getByLabelText(/^Transfer-case low ratio/), "2.72");
+    // Crawl = first × low × axle (common 4x4 handbook definition, common practice, no written source):
+    // 4.03 × 2.72 × 3.73 = 40.89:1; on the suggested 4.30, 47.13:1.
+    expect(headline("change-crawl")).toBe("40.89:1");
+    expect(headline("change-crawl-regeared")).toBe("47.13:1");
+    expect(window.location.search).toContain("first=4.03&low=2.72");
+  });
+
+  it("converts each unit-bearing field on a unit switch even while another field has an error", async () => {
+    const user = userEvent.setup();
+    render(<Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} />);
+    await openPanel(user);
+    await retype(user, screen.getByLabelText(/^Fender line/), "5-1/2");
+    await retype(user, screen.getByLabelText(/^Cruise speeds/), "55, 65");
+    await retype(user, screen.getByLabelText(/^Axle ratio/), "abc");
+    await user.click(screen.getByRole("radio", { name: "Metric" }));
+    // 5.5 in × 25.4 = 139.7 mm, shown to the mm; 55 and 65 mph × 1.609344 = 88.5 and 104.6 km/h, shown 89, 105 (NIST SP 811).
+    expect(screen.getByLabelText(/^Fender line from hub face \(mm\)/)).toHaveProperty("value", "140");
+    expect(screen.getByLabelText(/^Cruise speeds \(km\/h\)/)).toHaveProperty("value", "89, 105");
+    // The axle ratio keeps its text and its message.
+    const axle = screen.getByLabelText(/^Axle ratio/);
+    expect(axle).toHaveProperty("value", "abc");
+    expect(axle.getAttribute("aria-invalid")).toBe("true");
+    // Fixing it gives the converted figures, not 5.5 mm and 55 km/h; the stored speeds are still exactly 55 and 65 mph.
+    await retype(user, axle, "3.73");
+    expect(window.location.search).toContain("fender=139.7");
+    expect(window.location.search).toContain("cruise=55,65");
+  });
+
+  it("keeps an unreadable unit-bearing text on a unit switch and says the unit changed under it", async () => {
+    const user = userEvent.setup();
+    render(<Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} />);
+    await openPanel(user);
+    await retype(user, screen.getByLabelText(/^Fender line/), "far");
+    await user.click(screen.getByRole("radio", { name: "Metric" }));
+    const fender = screen.getByLabelText(/^Fender line from hub face \(mm\)/);
+    expect(fender).toHaveProperty("value", "far");
+    const message = (fender.getAttribute("aria-describedby") ?? "").split(" ").map((id) => document.getElementById(id)?.textContent ?? "").join(" ");
+    expect(message).toMatch(/Fender line from hub face \(mm\): not a length in mm.*The unit is now mm; this text was not converted\./);
+  });
+
   it("opens by itself when a vehicle figure has an error, stays open once it is fixed, and closes when the person closes it", async () => {
     const user = userEvent.setup();
     render(<Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} />);

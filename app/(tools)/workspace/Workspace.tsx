@@ -8,7 +8,8 @@ import { HeadlineChanges, SetupDetailTable, WarningList } from "@/components/com
 import { useDisplayPrefs } from "@/components/comparison/useDisplayPrefs";
 import { Button } from "@/components/ui/Button";
 import { computeComparison } from "@/lib/comparison/compute";
-import { type Draft, type DraftErrors, type SetupDraft, draftFromInput, followTire, inchText, readDraft, vehicleUnitFields } from "@/lib/comparison/draft";
+import { type Draft, type DraftErrors, type SetupDraft, convertDraft, draftFromInput, followTire, inchText, readDraft } from "@/lib/comparison/draft";
+import { fenderUnit, speedUnit, vehicleFieldLabel } from "@/lib/comparison/fields";
 import type { DisplayPrefs } from "@/lib/comparison/format";
 import { type ComparisonInput, DEFAULT_INPUT } from "@/lib/comparison/model";
 import { type LinkProblem, decodeComparison, encodeComparison, problemText } from "@/lib/comparison/url";
@@ -45,20 +46,24 @@ interface State {
 
 const fromInput = (input: ComparisonInput, prefs: DisplayPrefs): State => ({ draft: draftFromInput(input, prefs), errors: {}, good: input, prefs });
 const sameprefs = (a: DisplayPrefs, b: DisplayPrefs) => a.units === b.units && a.lengths === b.lengths;
-const hasErrorsUnder = (errors: DraftErrors, prefix: string) => Object.keys(errors).some((k) => k.startsWith(prefix));
 
-/** Rewrites unit-dependent text for a new display choice where the text is valid. */
+/**
+ * Rewrites unit-dependent text for a new display choice, each field from its own text: one that
+ * reads is converted whatever the other fields hold; one that does not keeps its text, and its
+ * message says the unit changed under it (never a figure silently relabelled).
+ */
 function reformat(s: State, prefs: DisplayPrefs): State {
-  const fresh = draftFromInput(s.good, prefs);
-  const setup = (side: "current" | "planned"): SetupDraft =>
-    s.draft[side].mode === "backspacing" && !hasErrorsUnder(s.errors, `${side}.`) ? { ...s.draft[side], backspacing: fresh[side].backspacing, flange: fresh[side].flange } : s.draft[side];
-  const draft: Draft = {
-    current: setup("current"),
-    planned: setup("planned"),
-    vehicle: hasErrorsUnder(s.errors, "vehicle.") ? s.draft.vehicle : { ...s.draft.vehicle, ...vehicleUnitFields(s.good, prefs) },
-  };
+  const { draft, unconverted } = convertDraft(s.draft, s.good, s.prefs, prefs);
   const read = readDraft(draft, prefs);
-  return { draft, errors: read.errors, good: read.input ?? s.good, prefs };
+  const errors = { ...read.errors };
+  for (const path of unconverted) {
+    const unit = path === "cruiseSpeedsMph" ? speedUnit(prefs) : fenderUnit(prefs);
+    const key = `vehicle.${path}`;
+    const note = `The unit is now ${unit}; this text was not converted.`;
+    errors[key] = errors[key] ? `${errors[key]} ${note}` : `${vehicleFieldLabel(path, prefs)}: “${path === "cruiseSpeedsMph" ? draft.vehicle.cruise : draft.vehicle.fender}” did not read in ${path === "cruiseSpeedsMph" ? speedUnit(s.prefs) : fenderUnit(s.prefs)}. ${note} Check it, then retype it.`;
+  }
+  const clean = Object.keys(errors).length === 0;
+  return { draft, errors, good: clean && read.input ? read.input : s.good, prefs };
 }
 
 /** `saveSlot`: controls shown in the toolbar (the save control), reading the comparison through CurrentInputContext. */

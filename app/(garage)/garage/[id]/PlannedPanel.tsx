@@ -14,11 +14,14 @@ import { bothUnits, marginText, signedMm } from "@/lib/garage/format";
 import { urlNumber } from "@/lib/comparison/url";
 import { setupQuery, workspaceHref } from "@/lib/garage/links";
 import type { VehicleDetail } from "@/lib/garage/types";
-import { marginSchema } from "@/lib/validation/garage";
+import { marginField } from "@/lib/validation/garage";
 import { type SetupFormValues, type SetupValues, setupSchema, setupToForm, toEngineSetup } from "@/lib/validation/setup";
 import { SetupFields } from "../_components/SetupFields";
 import { predictPoints, steeringAxisOf } from "@/lib/garage/predict";
 
+/** The margin as this panel labels it, so its messages name it so. */
+const MARGIN_LABEL = "Safety margin";
+const marginSchema = marginField(MARGIN_LABEL);
 const plannedFormSchema = z.object({ planned: setupSchema, margin: marginSchema });
 type PlannedForm = { planned: SetupFormValues; margin: string };
 
@@ -66,7 +69,7 @@ export function PlannedPanel({ detail, initialPlanned }: { detail: VehicleDetail
           <SetupFields form={form} name="planned" legend="Planned setup" tone="ember" />
           <TextField
             id="f-margin"
-            label="Safety margin"
+            label={MARGIN_LABEL}
             hint={`This vehicle's margin is ${marginText(v.clearanceMarginMm)} (set it when editing the vehicle; 1/2 in = ${DEFAULT_CLEARANCE_MARGIN_MM} mm is the common-practice default, no source). Try another here; a point closer than this is tight.`}
             {...form.register("margin")}
             error={form.formState.errors.margin?.message}

@@ -19,7 +19,7 @@ import { PageHeader } from "@/components/ui/PageHeader";
 import { TextField } from "@/components/ui/TextField";
 import { type FinderResult, type FitmentMatch, formatLength, inToMm } from "@/lib/fitment";
 import { bothUnits } from "@/lib/garage/format";
-import { type FinderGoalsForm, finderGoalsSchema, finderPlan } from "@/lib/garage/finderGoals";
+import { FINDER_LABEL, type FinderGoalsForm, finderGoalsSchema, finderPlan } from "@/lib/garage/finderGoals";
 import type { FinderJob, FinderReply } from "@/lib/garage/finderJob";
 import { setupQuery, workspaceHref } from "@/lib/garage/links";
 import type { Vehicle, VehicleClearance } from "@/lib/garage/types";
@@ -100,18 +100,18 @@ export function FinderPanel({ vehicle, clearances }: { vehicle: Vehicle; clearan
       <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[20rem_minmax(0,1fr)]">
         <Card className="flex flex-col gap-3 self-start">
           <h2 className="text-lg font-semibold">Goals</h2>
-          <TextField label="Target diameter (in)" hint="Optional, e.g. 35 or 890 mm; ranks nearest first" {...reg("targetDiameterMm")} error={e.targetDiameterMm?.message} />
+          <TextField label={FINDER_LABEL.targetDiameterMm} hint="Optional, e.g. 35 or 890 mm; ranks nearest first" {...reg("targetDiameterMm")} error={e.targetDiameterMm?.message} />
           <div className="grid grid-cols-2 gap-2">
-            <TextField label="From (in)" hint="e.g. 33" {...reg("minDiameterMm")} error={e.minDiameterMm?.message} />
-            <TextField label="To (in)" hint="e.g. 35-1/2" {...reg("maxDiameterMm")} error={e.maxDiameterMm?.message} />
+            <TextField label={FINDER_LABEL.minDiameterMm} hint="e.g. 33" {...reg("minDiameterMm")} error={e.minDiameterMm?.message} />
+            <TextField label={FINDER_LABEL.maxDiameterMm} hint="e.g. 35-1/2" {...reg("maxDiameterMm")} error={e.maxDiameterMm?.message} />
           </div>
-          <TextField label="Wheel diameters (in)" hint="e.g. 17, 18 — empty for any" {...reg("wheelDiameters")} error={e.wheelDiameters?.message} />
+          <TextField label={FINDER_LABEL.wheelDiameters} hint="e.g. 17, 18 — empty for any" {...reg("wheelDiameters")} error={e.wheelDiameters?.message} />
           <div className="grid grid-cols-2 gap-2">
-            <TextField label="Rim width from (in)" hint="e.g. 8" {...reg("minWidthIn")} error={e.minWidthIn?.message} />
-            <TextField label="Rim width to (in)" hint="e.g. 10" {...reg("maxWidthIn")} error={e.maxWidthIn?.message} />
+            <TextField label={FINDER_LABEL.minWidthIn} hint="e.g. 8" {...reg("minWidthIn")} error={e.minWidthIn?.message} />
+            <TextField label={FINDER_LABEL.maxWidthIn} hint="e.g. 10" {...reg("maxWidthIn")} error={e.maxWidthIn?.message} />
           </div>
           <TextField
-            label="Most extra poke (mm)"
+            label={FINDER_LABEL.maxPokeMm}
             hint={`Beyond the current setup's ${mm(plan?.currentOuterSwingMm ?? 0)} outboard reach; e.g. 25 or 1 in; empty for no limit`}
             {...reg("maxPokeMm")}
             error={e.maxPokeMm?.message}
@@ -129,7 +129,7 @@ export function FinderPanel({ vehicle, clearances }: { vehicle: Vehicle; clearan
               </span>
             </span>
           </label>
-          <TextField label="Margin" hint="Default 1/2 in — common practice, no source" {...reg("margin")} error={e.margin?.message} />
+          <TextField label={FINDER_LABEL.margin} hint="Default 1/2 in — common practice, no source" {...reg("margin")} error={e.margin?.message} />
           <p className="text-xs text-basalt-500">Bolt pattern from the vehicle: {vehicle.boltPattern}. Wheel diameter is the tire&apos;s rim diameter.</p>
         </Card>
         <div className="flex min-w-0 flex-col gap-3">
