@@ -1,4 +1,5 @@
 import "server-only";
+import { join } from "node:path";
 import PDFDocument from "pdfkit";
 import { quoteCautions } from "./cautions";
 import { type QuoteDocument, hubCautions } from "./document";
@@ -6,26 +7,33 @@ import { fitmentChangeRows } from "./fitment";
 import { formatBp, formatUsd } from "./money";
 import { formatQuantity } from "./quantity";
 
-/** The standard PDF fonts cover WinAnsi only: typographic signs become their plain forms. */
+/**
+ * Inter (SIL OFL 1.1, from the @expo-google-fonts/inter package), embedded as a subset: it covers
+ * Latin with Latin Extended A/B and Additional, Greek and Cyrillic, so "Łódź" prints as itself.
+ * (pdfkit's standard Helvetica covers WinAnsi only and printed "?ód?".) Read from node_modules
+ * at run time, as the server has it; pdfkit is a server external package, never bundled.
+ */
+const FONT_DIR = join(process.cwd(), "node_modules/@expo-google-fonts/inter");
+const REGULAR = join(FONT_DIR, "400Regular/Inter_400Regular.ttf");
+const BOLD = join(FONT_DIR, "700Bold/Inter_700Bold.ttf");
+
+/** Scripts the embedded font draws; anything else (e.g. CJK) prints as "?" rather than an empty box. */
 const plain = (s: string) =>
   s
-    .replace(/[−–—]/g, "-")
-    .replace(/→/g, "->")
     .replace(/≈/g, "~")
-    .replace(/[“”]/g, '"')
-    .replace(/[‘’]/g, "'")
-    .replace(/…/g, "...")
-    .replace(/[^\x20-\x7E\xA0-\xFF\n]/g, "?");
+    .replace(/[^\n\x20-\x7E\xA0-\u024F\u0370-\u03FF\u0400-\u04FF\u1E00-\u1EFF\u2010-\u2027\u2030-\u205E\u20AC\u2190-\u2193\u2212]/gu, "?");
 const date = (d: Date | string) => new Date(d).toLocaleDateString("en-US", { year: "numeric", month: "short", day: "numeric" });
 
 /**
- * The quote as a PDF (US Letter), built with pdfkit's standard Helvetica: no font files fetched.
+ * The quote as a PDF (US Letter), set in the embedded Inter (no font fetched from anywhere).
  * It prints a QuoteDocument only, so a sent quote prints from what was sent.
  */
 export function quotePdf(d: QuoteDocument): Promise<Buffer> {
   const { shop, customer, lines, totals: t } = d;
   const fit = d.fitment;
-  const doc = new PDFDocument({ size: "LETTER", margin: 50, info: { Title: `Quote Q-${d.number}`, Author: shop.name } });
+  const doc = new PDFDocument({ size: "LETTER", margin: 50, info: { Title: `Quote Q-${d.number}`, Author: shop.name }, font: REGULAR });
+  doc.registerFont("Body", REGULAR);
+  doc.registerFont("Body-Bold", BOLD);
   const chunks: Buffer[] = [];
   doc.on("data", (c: Buffer) => chunks.push(c));
   const done = new Promise<Buffer>((resolve, reject) => {
@@ -35,19 +43,19 @@ export function quotePdf(d: QuoteDocument): Promise<Buffer> {
   const W = doc.page.width - 100;
   const text = (s: string, opts?: PDFKit.Mixins.TextOptions) => doc.text(plain(s), opts);
   const heading = (s: string) => {
-    doc.moveDown(0.8).font("Helvetica-Bold").fontSize(12);
+    doc.moveDown(0.8).font("Body-Bold").fontSize(12);
     text(s);
-    doc.font("Helvetica").fontSize(10).moveDown(0.2);
+    doc.font("Body").fontSize(10).moveDown(0.2);
   };
 
-  doc.font("Helvetica-Bold").fontSize(18);
+  doc.font("Body-Bold").fontSize(18);
   text(shop.name);
-  doc.font("Helvetica").fontSize(10);
+  doc.font("Body").fontSize(10);
   if (shop.address) text(shop.address);
   if (shop.phone) text(`Phone ${shop.phone}`);
-  doc.moveDown(0.8).font("Helvetica-Bold").fontSize(14);
+  doc.moveDown(0.8).font("Body-Bold").fontSize(14);
   text(`Quote Q-${d.number}`);
-  doc.font("Helvetica").fontSize(10);
+  doc.font("Body").fontSize(10);
   text(`Date ${date(d.sentAt ?? d.createdAt)}${d.validUntil ? ` - valid until ${date(d.validUntil)}` : ""}${d.preparedBy ? ` - prepared by ${d.preparedBy}` : ""}`);
 
   heading("Customer");
@@ -62,7 +70,7 @@ export function quotePdf(d: QuoteDocument): Promise<Buffer> {
   const cols = [0, 105, 335, 375, 440];
   const row = (cells: string[], bold = false) => {
     const y = doc.y;
-    doc.font(bold ? "Helvetica-Bold" : "Helvetica");
+    doc.font(bold ? "Body-Bold" : "Body");
     const widths = [103, 225, 38, 63, W - 440];
     let h = 0;
     cells.forEach((c, i) => {
@@ -80,7 +88,7 @@ export function quotePdf(d: QuoteDocument): Promise<Buffer> {
   }
   doc.moveDown(0.5);
   const total = (label: string, value: string, bold = false) => {
-    doc.font(bold ? "Helvetica-Bold" : "Helvetica");
+    doc.font(bold ? "Body-Bold" : "Body");
     const y = doc.y;
     doc.text(plain(label), 50 + 250, y, { width: 180, align: "right" });
     doc.text(plain(value), 50 + 440, y, { width: W - 440, align: "right" });
@@ -92,7 +100,7 @@ export function quotePdf(d: QuoteDocument): Promise<Buffer> {
   total("Total", formatUsd(t.totalCents), true);
   total(`Deposit (${t.depositPct}%)`, formatUsd(t.depositCents));
   total("Balance due after the deposit", formatUsd(t.balanceCents));
-  doc.font("Helvetica").fontSize(8).moveDown(0.3);
+  doc.font("Body").fontSize(8).moveDown(0.3);
   text("* not taxed", { width: W, align: "right" });
   doc.fontSize(10);
   if (d.notes) {

@@ -443,3 +443,25 @@ describe("messages a person reads", () => {
     expect(JSON.stringify(await create.json())).not.toMatch(RAW);
   });
 });
+
+describe("the quote PDF prints every name", () => {
+  it("prints Latin Extended letters (Łódź, Żółć) from an embedded font instead of question marks", async () => {
+    as(U.staffA);
+    const tire = await item(db, SHOP_A, "TR-EXAMPLE-35");
+    const wheel = await item(db, SHOP_A, "WH-EXAMPLE-BL");
+    const cust = await (await customers.POST(req("POST", "/api/shop/customers", { name: "Łukasz Żółć", phone: "555 010 7788", email: "" }), ctx())).json();
+    const id = (await (await quotes.POST(req("POST", "/api/shop/quotes", { customerId: cust.customer.id, vehicle: VEHICLE, tireItemId: tire.id, wheelItemId: wheel.id, quantity: 4 }), ctx())).json()).id as string;
+    const before = (await db("shops").where({ id: SHOP_A }).first()).name as string;
+    await db("shops").where({ id: SHOP_A }).update({ name: "Terenówki Łódź", address: "ul. Piotrkowska 1, Łódź" });
+    try {
+      as(U.ownerA);
+      const res = await pdfRoute(req("GET", `/api/shop/quotes/${id}/pdf`), ctx({ id }));
+      expect(res.status).toBe(200);
+      const text = await pdfText(Buffer.from(await res.arrayBuffer()));
+      for (const s of ["Terenówki Łódź", "ul. Piotrkowska 1, Łódź", "Łukasz Żółć"]) expect(text).toContain(s);
+      expect(text).not.toMatch(/\?ód\?|\?ukasz/);
+    } finally {
+      await db("shops").where({ id: SHOP_A }).update({ name: before, address: "1 Test Lane" });
+    }
+  });
+});
