@@ -6,6 +6,7 @@
  *   tsx scripts/serve.ts [--hostname 127.0.0.1] [--port 3000]
  *
  * Needs a `next build` first. HUBFACE_MICROCACHE=off serves through Next alone (for comparing).
+ * Every server listens for share-page purges from the others (PostgreSQL NOTIFY, lib/http/sharePurge.ts).
  * HUBFACE_JOBS=off leaves the job workers to another process (see README "Beyond one machine").
  * SIGTERM/SIGINT: stop taking requests (readiness answers 503), finish those in flight, let
  * running jobs finish, then exit.
@@ -17,6 +18,8 @@ import next from "next";
 import { getToken } from "next-auth/jwt";
 import { CLIENT_ADDRESS_HEADER, resolveClientAddress, trustClientAddressHeader, trustedProxies } from "@/lib/auth/clientAddress";
 import { Microcache, installSharedMicrocache } from "@/lib/http/microcache";
+import { ownServerPurge, selfUrl, startSharePurgeListener } from "@/lib/http/sharePurge";
+import { databaseUrl } from "@/lib/db/config";
 import { log } from "@/lib/log";
 import { withRequestLog } from "@/lib/log/request";
 
@@ -85,6 +88,11 @@ const server = createServer(
 server.keepAliveTimeout = 65_000;
 server.listen(port, hostname, () => log().info({ url: `http://${hostname}:${port}`, microcache: Boolean(cache), jobs: Boolean(jobs) }, "Hubface listening"));
 
+// Revokes and edits on any app server reach this one's cached share pages through PostgreSQL
+// NOTIFY (lib/http/sharePurge.ts); the listener keeps reconnecting while the database is away.
+// It asks this server's own Next to drop a page, so it starts once the server is listening.
+const purges = startSharePurgeListener({ connectionString: databaseUrl(), ...ownServerPurge(selfUrl(hostname, port), cache) });
+
 let stopping = false;
 for (const signal of ["SIGINT", "SIGTERM"] as const) {
   process.once(signal, async () => {
@@ -94,6 +102,7 @@ for (const signal of ["SIGINT", "SIGTERM"] as const) {
     log().info({ signal }, "stopping: finishing requests and jobs in progress");
     setTimeout(() => process.exit(1), 25_000).unref();
     await new Promise<void>((resolve) => server.close(() => resolve()));
+    await purges.stop();
     await boss.stopBoss(15_000).catch((error: unknown) => log().error({ err: { message: (error as Error).message } }, "job queue did not stop cleanly"));
     log().info("stopped");
     process.exit(0);

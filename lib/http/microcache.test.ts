@@ -2,7 +2,7 @@ import { type IncomingMessage, type Server, type ServerResponse, createServer } 
 import type { AddressInfo } from "node:net";
 import { gzipSync } from "node:zlib";
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
-import { Microcache, installSharedMicrocache, purgeSharedMicrocache, sMaxAgeSeconds } from "./microcache";
+import { Microcache, clearSharedMicrocache, installSharedMicrocache, purgeSharedMicrocache, sMaxAgeSeconds } from "./microcache";
 
 // A stand-in for Next behind the cache: answers as the test says, counting what reaches it.
 // The rules checked here are HTTP caching's own (RFC 9111: s-maxage for shared caches, private /
@@ -154,5 +154,21 @@ describe("the share pages' micro-cache", () => {
     }
     // Without a server-installed cache (tests, next dev) purging does nothing and does not throw.
     expect(() => purgeSharedMicrocache("/s/abc")).not.toThrow();
+  });
+
+  it("drops every path at once after purges from other servers may have been missed", async () => {
+    installSharedMicrocache(cache);
+    try {
+      await (await get("/s/abc")).text();
+      await (await get("/s/other")).text();
+      expect((await get("/s/other")).headers.get("x-hubface-cache")).toBe("hit");
+      clearSharedMicrocache();
+      expect(cache.size).toBe(0);
+      expect((await get("/s/abc")).headers.get("x-hubface-cache")).toBeNull();
+      expect((await get("/s/other")).headers.get("x-hubface-cache")).toBeNull();
+    } finally {
+      installSharedMicrocache(undefined);
+    }
+    expect(() => clearSharedMicrocache()).not.toThrow();
   });
 });

@@ -171,6 +171,15 @@ export class Microcache {
     this.entries.delete(`${path} identity`);
   }
 
+  /**
+   * Drops every copy (after purges may have been missed, lib/http/sharePurge.ts).
+   * @example cache.clear();
+   */
+  clear(): void {
+    this.purges += 1;
+    this.entries.clear();
+  }
+
   /** How many copies are kept (for tests and diagnostics). */
   get size(): number {
     return this.entries.size;
@@ -194,4 +203,12 @@ export function installSharedMicrocache(cache: Microcache | undefined): void {
  */
 export function purgeSharedMicrocache(path: string): void {
   (globalThis as WithCache)[KEY]?.purge(path);
+}
+
+/**
+ * Drops every path from the process's micro-cache, if the server runs one.
+ * @example clearSharedMicrocache();
+ */
+export function clearSharedMicrocache(): void {
+  (globalThis as WithCache)[KEY]?.clear();
 }

@@ -15,8 +15,9 @@ import { SharedView } from "./SharedView";
  * front). It is the same for every reader, so it is rendered without the session
  * (`force-static`: the header shows the signed-out links here). When a link dies — revoked,
  * replaced, or its comparison deleted — or the comparison changes, the route handler drops
- * the cached page (lib/server/shareCache.ts) and the next request renders afresh: a revoked
- * link is a 404 on the next request. A shared cache in front (CDN) may keep a copy up to
+ * the cached page (lib/server/shareCache.ts; other app servers hear of it through PostgreSQL
+ * NOTIFY, lib/http/sharePurge.ts) and the next request renders afresh: a revoked link is a 404
+ * on the next request. A shared cache in front (CDN) may keep a copy up to
  * `revalidate` seconds; that bound is why it is short.
  */
 export const dynamic = "force-static";

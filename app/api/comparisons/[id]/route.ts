@@ -17,13 +17,13 @@ export const GET = route({ access: "signed-in", params: comparisonIdParams }, as
 export const PATCH = route({ access: "signed-in", params: comparisonIdParams, body: updateComparisonSchema }, async ({ caller, params, body }) => {
   const comparison = await updateComparison(db, caller.userId, params.id, body);
   if (!comparison) throw notFound(NOT_FOUND);
-  dropCachedShare(comparison.share?.slug);
+  await dropCachedShare(comparison.share?.slug);
   return { comparison };
 });
 
 export const DELETE = route({ access: "signed-in", params: comparisonIdParams }, async ({ caller, params }) => {
   const deleted = await deleteComparison(db, caller.userId, params.id);
   if (!deleted) throw notFound(NOT_FOUND);
-  dropCachedShare(deleted.liveSlug);
+  await dropCachedShare(deleted.liveSlug);
   return { ok: true };
 });

@@ -13,7 +13,7 @@ export const POST = route({ access: "signed-in", params: comparisonIdParams }, a
   await consumeOrRefuse(db, [{ spec: RATE_LIMITS.shareLinks, key: caller.userId }], "Too many new share links.");
   const share = await createShare(db, caller.userId, params.id);
   if (!share) throw notFound("That comparison");
-  dropCachedShare(share.replaced);
+  await dropCachedShare(share.replaced);
   return json({ share: { slug: share.slug, createdAt: share.createdAt, path: `/s/${share.slug}` }, replaced: share.replaced }, 201);
 });
 
@@ -21,6 +21,6 @@ export const POST = route({ access: "signed-in", params: comparisonIdParams }, a
 export const DELETE = route({ access: "signed-in", params: comparisonIdParams }, async ({ caller, params }) => {
   const result = await revokeShare(db, caller.userId, params.id);
   if (!result) throw notFound("That comparison");
-  dropCachedShare(result.revoked);
+  await dropCachedShare(result.revoked);
   return { revoked: result.revoked !== null };
 });
