@@ -10,6 +10,7 @@ import { checkWheelOnHub, hubRefusal } from "@/lib/quotes/hubFit";
 import { formatQuantity } from "@/lib/quotes/quantity";
 import { TotalsError, computeTotals } from "@/lib/quotes/totals";
 import { resolveVehicle, type Vehicle } from "@/lib/validation/quotes";
+import { bindAppDb } from "@/lib/db/bind";
 
 /** Whose quotes a caller sees: owners the whole shop's, staff the ones they wrote. */
 export interface QuoteScope {
@@ -387,6 +388,19 @@ export async function staffTransition(db: Knex, scope: QuoteScope, id: string, t
   });
 }
 
+/**
+ * The customer's answer on their link, in one transaction with the quote locked. False when the
+ * link names no quote (nothing is written then).
+ */
+export async function answerByToken(db: Knex, token: string, to: "accepted" | "declined", actor: Actor): Promise<boolean> {
+  return db.transaction(async (trx) => {
+    const quote = await findByToken(trx, token, true);
+    if (!quote) return false;
+    await transition(trx, quote, to, actor);
+    return true;
+  });
+}
+
 /** A quote by its public token (the customer's link), or undefined. */
 export async function findByToken(db: Knex | Knex.Transaction, token: string, lock = false): Promise<QuoteRow | undefined> {
   if (!/^[A-Za-z0-9_-]{43}$/.test(token)) return undefined;
@@ -394,3 +408,6 @@ export async function findByToken(db: Knex | Knex.Transaction, token: string, lo
   if (lock) q.forUpdate();
   return q;
 }
+
+/** These queries on the app's database handle, for pages and route handlers. */
+export const quoteQueries = bindAppDb({ answerByToken, createQuote, expireDue, findByToken, getQuoteDetail, latestSentDocument, listQuotes, staffTransition, updateDraft });

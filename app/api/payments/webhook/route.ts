@@ -1,10 +1,9 @@
 import type Stripe from "stripe";
-import { db } from "@/lib/db";
 import { readCappedBytes } from "@/lib/http/body";
 import { HttpError } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
 import { payments, webhookSecret } from "@/lib/payments/provider";
-import { applyPaymentEvent } from "@/lib/server/payments";
+import { paymentQueries } from "@/lib/server/payments";
 
 /**
  * The payment provider's webhook. Nothing is trusted before the signature over the raw body
@@ -20,6 +19,6 @@ export const POST = route({ access: "public" }, async ({ req }) => {
   } catch {
     throw new HttpError(400, "The signature does not verify.");
   }
-  const outcome = await applyPaymentEvent(db, event);
+  const outcome = await paymentQueries.applyPaymentEvent(event);
   return { received: true, outcome };
 });

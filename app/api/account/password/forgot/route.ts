@@ -1,8 +1,7 @@
-import { db } from "@/lib/db";
 import { route } from "@/lib/http/route";
 import { appOrigin, sendMail } from "@/lib/mail";
-import { RESET_TTL_MINUTES, issueResetToken } from "@/lib/server/passwordResets";
-import { findUserByEmail } from "@/lib/server/users";
+import { passwordResetQueries, RESET_TTL_MINUTES } from "@/lib/server/passwordResets";
+import { userQueries } from "@/lib/server/users";
 import { forgotPasswordSchema } from "@/lib/validation/account";
 
 const ANSWER = {
@@ -10,10 +9,10 @@ const ANSWER = {
 };
 
 export const POST = route({ access: "public", body: forgotPasswordSchema }, async ({ body }) => {
-  const user = await findUserByEmail(db, body.email);
+  const user = await userQueries.findUserByEmail(body.email);
   // Same answer either way: the form must not reveal which addresses have accounts.
   if (!user) return ANSWER;
-  const token = await issueResetToken(db, user.id);
+  const token = await passwordResetQueries.issueResetToken(user.id);
   const link = `${appOrigin()}/reset-password?token=${token}`;
   await sendMail({
     to: user.email,
