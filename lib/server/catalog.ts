@@ -54,12 +54,6 @@ async function storedBoltPatterns(db: Knex, shopId: string): Promise<string[]> {
   return db("catalog_items").where({ shop_id: shopId }).whereNotNull("bolt_pattern").distinct("bolt_pattern").pluck("bolt_pattern");
 }
 
-export async function getCatalogItem(db: Knex, shopId: string, id: string): Promise<CatalogItemRow | undefined> {
-  const row = await db<CatalogItemRow>("catalog_items").where({ id, shop_id: shopId }).first();
-  return row && withoutSearchKey(row);
-}
-
-/** Every item, for export, in SKU order. */
 const FITMENT_COLUMNS = ["id", "sku", "description", "price_cents", "qty_on_hand", "tire_size", "wheel_diameter_in", "wheel_width_in", "wheel_offset_mm", "bolt_pattern", "center_bore_mm", "beadlock"] as const;
 
 /** The shop's wheels, and its tires for those wheels' diameters: what the fitment finder ranks. */
@@ -70,6 +64,7 @@ export async function fitmentStock(db: Knex, shopId: string): Promise<{ wheels: 
   return { wheels, tires };
 }
 
+/** Every item, for export, in SKU order. */
 export async function allCatalogItems(db: Knex, shopId: string): Promise<CatalogItemRow[]> {
   return (await db<CatalogItemRow>("catalog_items").where({ shop_id: shopId }).orderBy([{ column: "kind" }, { column: "sku" }])).map(withoutSearchKey);
 }
