@@ -77,7 +77,8 @@ export async function findQuote(db: Knex | Knex.Transaction, scope: QuoteScope, 
 }
 
 export interface QuoteDetail {
-  quote: QuoteRow;
+  /** The quote without its link's token hash: the detail is what the shop's browser receives. */
+  quote: Omit<QuoteRow, "public_token_hash">;
   lines: QuoteLineRow[];
   events: QuoteEventRow[];
   customer: { id: string; name: string; phone: string; email: string };
@@ -99,7 +100,8 @@ export async function quoteDetail(db: Knex, quote: QuoteRow): Promise<QuoteDetai
     db("customers").where({ id: quote.customer_id, shop_id: quote.shop_id }).first("id", "name", "phone", "email"),
     quote.created_by ? db("users").where({ id: quote.created_by }).first("name") : null,
   ]);
-  return { quote, lines, events, customer, createdByName: author?.name ?? null, hubChecks: hubChecksOf(quote, lines) };
+  const { public_token_hash: _hidden, ...shown } = quote;
+  return { quote: shown, lines, events, customer, createdByName: author?.name ?? null, hubChecks: hubChecksOf(quote, lines) };
 }
 
 export async function getQuoteDetail(db: Knex, scope: QuoteScope, id: string): Promise<QuoteDetail> {
