@@ -1,6 +1,14 @@
 import next from "eslint-config-next";
 import coreWebVitals from "eslint-config-next/core-web-vitals";
 import typescript from "eslint-config-next/typescript";
+import { boundaries } from "./scripts/lint/boundaries.mjs";
+
+/** The database handle (and the helper that hands it out) stay inside query modules. */
+const DB_HANDLE = [
+  { name: "@/lib/db", importNames: ["db"], message: "Pages and route handlers call the feature's query module (lib/server/*Queries), never the database handle." },
+  { name: "@/lib/db/index", importNames: ["db"], message: "Pages and route handlers call the feature's query module (lib/server/*Queries), never the database handle." },
+  { name: "@/lib/db/bind", message: "Binding queries to the handle belongs in the query module, not in app/." },
+];
 
 const config = [
   { ignores: [".next/**", "node_modules/**", ".data/**", "next-env.d.ts", "tests/browser/screenshots/**"] },
@@ -11,6 +19,22 @@ const config = [
     rules: {
       "@typescript-eslint/no-unused-vars": ["error", { argsIgnorePattern: "^_", varsIgnorePattern: "^_", destructuredArrayIgnorePattern: "^_" }],
     },
+  },
+  // Layering (DEVELOPERS.md): engine → nothing of the app; app → no database handle;
+  // lib → no app or components; client components → no server-only module, no row type.
+  { plugins: { hubface: boundaries } },
+  { files: ["lib/fitment/**/*.{ts,tsx}"], rules: { "hubface/engine-self-contained": "error" } },
+  { files: ["app/**/*.{ts,tsx}"], rules: { "no-restricted-imports": ["error", { paths: DB_HANDLE }] } },
+  {
+    files: ["lib/**/*.{ts,tsx}"],
+    rules: { "no-restricted-imports": ["error", { patterns: [{ group: ["@/app/*", "@/components/*"], message: "lib/ is below app/ and components/: move the shared code into lib/." }] }] },
+  },
+  { files: ["app/**/*.{ts,tsx}", "components/**/*.{ts,tsx}", "lib/**/*.{ts,tsx}"], rules: { "hubface/client-no-server": "error" } },
+  // Known debt, shrinking: these shop screens still take catalog and customer rows from their
+  // API. Delete a line when its screen reads the API shape instead.
+  {
+    files: ["app/(shop)/shop/catalog/CatalogTable.tsx", "app/(shop)/shop/quotes/[[]id]/CatalogItemPicker.tsx", "app/(shop)/shop/quotes/new/QuoteBuilder.tsx"],
+    rules: { "hubface/client-no-server": ["error", { rowTypes: false }] },
   },
 ];
 export default config;

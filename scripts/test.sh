@@ -52,6 +52,8 @@ export NEXTAUTH_SECRET="test-secret-$(node -e 'console.log(require("crypto").ran
 
 check lint eslint . --max-warnings=0
 check typecheck tsc --noEmit
+# Dead exports (knip will replace this script once package changes are free).
+check exports tsx scripts/check-exports.mts
 
 log "unit and integration tests (Vitest)"
 DATABASE_URL="$TEST_DATABASE_URL" vitest run --project unit --project integration \

@@ -21,6 +21,7 @@ import {
  * Read-only results of a comparison: the headline changes, the warnings and the detail table.
  * Props are the computed result and the display choice, so the workspace, a share page and a
  * garage page render the same thing. No hooks: it renders on the server too.
+ * @public the pages compose its parts today; kept whole for the garage page (decide when that lands)
  */
 export function ResultsPanel({ result, prefs }: { result: ComparisonResult; prefs: DisplayPrefs }) {
   return (

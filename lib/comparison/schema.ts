@@ -5,7 +5,7 @@
  * these schemas only adapt them: same issues, same paths, same messages.
  */
 import { z } from "zod";
-import { type Checked, type ComparisonInput, type Issue, type SetupInputValues, type VehicleValues, checkComparison, checkSetup, checkVehicle } from "./model";
+import { type Checked, type ComparisonInput, type Issue, type SetupInputValues, checkComparison, checkSetup } from "./model";
 
 export * from "./model";
 
@@ -25,5 +25,4 @@ function adapt<T>(check: (v: unknown) => Checked<T>): z.ZodType<T> {
 
 export const comparisonInputSchema: z.ZodType<ComparisonInput> = adapt(checkComparison);
 export const setupSchema: z.ZodType<SetupInputValues> = adapt((v) => checkSetup(v));
-export const vehicleSchema: z.ZodType<VehicleValues> = adapt((v) => checkVehicle(v));
 export type { Issue };

@@ -2,7 +2,6 @@
 
 export const ROLES = ["member", "shop_staff", "shop_owner", "admin"] as const;
 export type Role = (typeof ROLES)[number];
-export const SHOP_ROLES: readonly Role[] = ["shop_staff", "shop_owner"];
 
 export interface ShopRow {
   id: string;
@@ -196,7 +195,7 @@ export interface QuoteLineRow {
   wheel_center_bore_mm: number | null;
 }
 
-/** A quote's document as sent (lib/quotes/document.ts), one row per sending. */
+/** A quote's document as sent (lib/quotes/document.ts), one row per sending. Kept with the other tables' rows though read as JSON only. @public */
 export interface QuoteDocumentRow {
   id: string;
   quote_id: string;

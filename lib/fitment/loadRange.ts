@@ -37,6 +37,7 @@ export interface LoadRangeInfo {
  *
  * @example
  * isLoadRange("E"); // true
+ * @public engine API (lib/fitment/index.ts), kept for callers that take a load range as text
  */
 export function isLoadRange(text: string): text is LoadRange {
   return (LOAD_RANGES as readonly string[]).includes(text);

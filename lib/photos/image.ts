@@ -8,7 +8,6 @@ import sharp, { type Metadata, type Sharp } from "sharp";
 export const MAX_PHOTO_BYTES = 10 * 1024 * 1024;
 export const THUMB_SIZE_PX = 360;
 export type PhotoType = "image/jpeg" | "image/png" | "image/webp";
-export const PHOTO_TYPES: readonly PhotoType[] = ["image/jpeg", "image/png", "image/webp"];
 const EXT: Record<PhotoType, string> = { "image/jpeg": "jpg", "image/png": "png", "image/webp": "webp" };
 export const extensionOf = (t: PhotoType) => EXT[t];
 

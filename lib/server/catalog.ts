@@ -5,6 +5,7 @@ import { boltPatternQuery, equivalentBoltPatterns } from "@/lib/catalog/boltPatt
 import type { CatalogInput, CsvReport } from "@/lib/catalog/csv";
 import { containsPattern, searchKey } from "@/lib/search/normalize";
 import { withoutSearchKey } from "./searchKeyColumn";
+import { bindAppDb } from "@/lib/db/bind";
 
 export const CATALOG_SORTS = ["sku", "description", "price_cents", "qty_on_hand", "kind", "tire_diameter_mm", "updated_at"] as const;
 export type CatalogSort = (typeof CATALOG_SORTS)[number];
@@ -53,9 +54,14 @@ async function storedBoltPatterns(db: Knex, shopId: string): Promise<string[]> {
   return db("catalog_items").where({ shop_id: shopId }).whereNotNull("bolt_pattern").distinct("bolt_pattern").pluck("bolt_pattern");
 }
 
-export async function getCatalogItem(db: Knex, shopId: string, id: string): Promise<CatalogItemRow | undefined> {
-  const row = await db<CatalogItemRow>("catalog_items").where({ id, shop_id: shopId }).first();
-  return row && withoutSearchKey(row);
+const FITMENT_COLUMNS = ["id", "sku", "description", "price_cents", "qty_on_hand", "tire_size", "wheel_diameter_in", "wheel_width_in", "wheel_offset_mm", "bolt_pattern", "center_bore_mm", "beadlock"] as const;
+
+/** The shop's wheels, and its tires for those wheels' diameters: what the fitment finder ranks. */
+export async function fitmentStock(db: Knex, shopId: string): Promise<{ wheels: CatalogItemRow[]; tires: CatalogItemRow[] }> {
+  const wheels = (await db<CatalogItemRow>("catalog_items").where({ shop_id: shopId, kind: "wheel" }).select(FITMENT_COLUMNS)) as CatalogItemRow[];
+  const diameters = [...new Set(wheels.map((w) => w.wheel_diameter_in!))];
+  const tires = (await db<CatalogItemRow>("catalog_items").where({ shop_id: shopId, kind: "tire" }).whereIn("tire_rim_in", diameters).select(FITMENT_COLUMNS)) as CatalogItemRow[];
+  return { wheels, tires };
 }
 
 /** Every item, for export, in SKU order. */
@@ -135,3 +141,6 @@ export async function commitImport(
     return { imported: rows.length };
   });
 }
+
+/** These queries on the app's database handle, for pages and route handlers. */
+export const catalogQueries = bindAppDb({ allCatalogItems, commitImport, findStagedImport, fitmentStock, listCatalog, stageImport });

@@ -7,6 +7,7 @@ import type { VehicleDetail } from "@/lib/garage/types";
 import type { SetupValues } from "@/lib/validation/setup";
 import { getComparison } from "./comparisons";
 import { findChecklist, saveChecklist, vehicleDetail } from "./garage";
+import { bindAppDb } from "@/lib/db/bind";
 
 /**
  * What an install checklist is built from: a vehicle of the caller's, and either a saved
@@ -59,3 +60,6 @@ export async function saveChecklistTicks(db: Knex, r: Extract<ResolvedChecklist,
   });
   return row.ticked;
 }
+
+/** These queries on the app's database handle, for pages and route handlers. */
+export const checklistQueries = bindAppDb({ checklistTicks, resolveChecklist, saveChecklistTicks });

@@ -7,6 +7,7 @@ import type { ComparisonRow, ComparisonShareRow } from "@/lib/db/types";
 import { HttpError } from "@/lib/http/errors";
 import { findVehicle } from "./garage";
 import type { ComparisonFigures, ComparisonSort, SavedComparison } from "@/lib/validation/comparisons";
+import { bindAppDb } from "@/lib/db/bind";
 
 /**
  * Saved comparisons and share links. Every function taking an `ownerId` scopes by it: another
@@ -213,3 +214,6 @@ export async function findSharedComparison(db: Knex, slug: string): Promise<Shar
   }
   return { slug: row.slug, name: row.name, input: parsed.data, sharedAt: new Date(row.shared_at).toISOString(), updatedAt: new Date(row.updated_at).toISOString() };
 }
+
+/** These queries on the app's database handle, for pages and route handlers. */
+export const comparisonQueries = bindAppDb({ createComparison, createShare, deleteComparison, duplicateComparison, findSharedComparison, getComparison, listComparisons, revokeShare, updateComparison });

@@ -4,6 +4,7 @@ import type { CustomerRow, CustomerVehicleRow } from "@/lib/db/types";
 import { containsPattern, searchKey } from "@/lib/search/normalize";
 import { withoutSearchKey } from "./searchKeyColumn";
 import type { CustomerInput } from "@/lib/validation/quotes";
+import { bindAppDb } from "@/lib/db/bind";
 
 export const phoneDigits = (phone: string) => phone.replace(/\D/g, "");
 
@@ -59,3 +60,6 @@ export async function getCustomer(db: Knex, shopId: string, id: string): Promise
 export async function listVehicles(db: Knex, shopId: string, customerId: string): Promise<CustomerVehicleRow[]> {
   return db<CustomerVehicleRow>("customer_vehicles").where({ shop_id: shopId, customer_id: customerId }).orderBy("created_at", "desc");
 }
+
+/** These queries on the app's database handle, for pages and route handlers. */
+export const customerQueries = bindAppDb({ createCustomer, findDuplicateCustomer, getCustomer, listVehicles, searchCustomers });

@@ -8,6 +8,7 @@ import { type ProcessedImage, extensionOf } from "@/lib/photos/image";
 import type { ClearanceValues, VehicleValues } from "@/lib/validation/garage";
 import type { SetupValues } from "@/lib/validation/setup";
 import type { Vehicle, VehicleClearance, VehicleDetail, VehiclePhoto, WorkspaceVehicle } from "@/lib/garage/types";
+import { bindAppDb } from "@/lib/db/bind";
 
 // Every query here is scoped by the owner's user id; a vehicle of someone else is "not found".
 
@@ -111,6 +112,12 @@ export async function workspaceVehicles(db: Knex, userId: string): Promise<Works
       .filter((p) => p.vehicle_id === v.id)
       .map((p) => ({ id: p.id, label: p.label, direction: p.direction, distanceMm: p.distance_mm, suspensionState: p.suspension_state, measuredSetup: p.measured_setup as SetupValues })),
   }));
+}
+
+/** How many clearance points each of these vehicles has (vehicles with none are absent). */
+export async function clearanceCounts(db: Knex, vehicleIds: string[]): Promise<Map<string, number>> {
+  const rows = await db("vehicle_clearances").whereIn("vehicle_id", vehicleIds).groupBy("vehicle_id").select("vehicle_id").count("* as n");
+  return new Map(rows.map((r) => [String(r.vehicle_id), Number(r.n)]));
 }
 
 export async function findVehicle(db: Knex, userId: string, id: string): Promise<VehicleRow | undefined> {
@@ -272,3 +279,6 @@ export async function saveChecklist(
     .returning("*");
   return row as InstallChecklistRow;
 }
+
+/** These queries on the app's database handle, for pages and route handlers. */
+export const garageQueries = bindAppDb({ addClearance, addPhoto, clearanceBelongs, clearanceCounts, createVehicle, deleteClearance, deletePhoto, deleteVehicle, findVehicle, findVisiblePhoto, listVehicles, updateVehicle, vehicleDetail, workspaceVehicles });

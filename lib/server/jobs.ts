@@ -1,24 +1,9 @@
 import "server-only";
 import type { Knex } from "knex";
 import { notFound } from "@/lib/http/errors";
+import { bindAppDb } from "@/lib/db/bind";
 import { JOB_SCHEMA, getBoss, isKnownQueue } from "@/lib/jobs/boss";
-
-/** A job that failed at least once, as the admin sees it: never its data (a mail's body, a link with a token). */
-export interface ProblemJob {
-  id: string;
-  queue: string;
-  state: "retry" | "failed";
-  /** The last error's message, cut to 300 characters. */
-  lastError: string | null;
-  /** Attempts made so far, and the most there will be. */
-  attempts: number;
-  maxAttempts: number;
-  createdAt: string;
-  /** When it failed for good (failed), or when its last attempt started (retry). */
-  lastAttemptAt: string | null;
-  /** When the next attempt may run (retry only). */
-  nextAttemptAt: string | null;
-}
+import type { ProblemJob } from "@/lib/jobs/problemJob";
 
 const ERROR_TEXT = "coalesce(output->>'message', output->'value'->>'message', output->>'value')";
 
@@ -71,3 +56,6 @@ export async function retryJob(db: Knex, id: string): Promise<void> {
   // pg-boss's retry leaves start_after as it was: bring it forward so the worker takes it at once.
   await db.withSchema(JOB_SCHEMA).from("job").where({ id, name: row.name }).update({ start_after: db.fn.now() });
 }
+
+/** These queries on the app's database handle, for the admin page and its routes. */
+export const jobQueries = bindAppDb({ listProblemJobs, retryJob });

@@ -2,6 +2,8 @@ import "server-only";
 import { createHash, randomBytes } from "node:crypto";
 import type { Knex } from "knex";
 import type { PasswordResetRow } from "@/lib/db/types";
+import { findUserById, setPassword } from "./users";
+import { bindAppDb } from "@/lib/db/bind";
 
 export const RESET_TTL_MINUTES = 30;
 
@@ -34,3 +36,19 @@ export async function consumeResetToken(db: Knex, token: string, trx?: Knex.Tran
     .returning(["user_id"])) as Pick<PasswordResetRow, "user_id">[];
   return row?.user_id ?? null;
 }
+
+/**
+ * Uses a reset token and sets the new password hash in one transaction. Returns the account's
+ * e-mail address, or null when the token is unknown, used or expired (nothing is changed then).
+ */
+export async function resetPassword(db: Knex, token: string, passwordHash: string): Promise<string | null> {
+  return db.transaction(async (trx) => {
+    const userId = await consumeResetToken(db, token, trx);
+    if (!userId) return null;
+    await setPassword(trx, userId, passwordHash);
+    return (await findUserById(trx, userId))?.email ?? null;
+  });
+}
+
+/** These queries on the app's database handle, for pages and route handlers. */
+export const passwordResetQueries = bindAppDb({ issueResetToken, resetPassword });

@@ -4,6 +4,7 @@ import type { PaymentEvent } from "@/lib/validation/payments";
 import type { PaymentRow, QuoteRow } from "@/lib/db/types";
 import { HttpError } from "@/lib/http/errors";
 import { transition } from "./quotes";
+import { bindAppDb } from "@/lib/db/bind";
 
 export type WebhookOutcome = "deposit_paid" | "duplicate" | "already_paid" | "paid_but_quote_not_accepted" | "ignored";
 
@@ -46,3 +47,20 @@ export async function applyPaymentEvent(db: Knex, event: PaymentEvent): Promise<
     return outcome;
   });
 }
+
+/** Who a deposit is between: the shop's current name and the customer's address ("" when none is on file). */
+export async function depositParties(db: Knex, quote: Pick<QuoteRow, "shop_id" | "customer_id">): Promise<{ shopName: string; customerEmail: string }> {
+  const [shop, customer] = await Promise.all([
+    db("shops").where({ id: quote.shop_id }).first("name"),
+    db("customers").where({ id: quote.customer_id, shop_id: quote.shop_id }).first("email"),
+  ]);
+  return { shopName: shop?.name ?? "", customerEmail: customer?.email ?? "" };
+}
+
+/** Records the provider's checkout session, so its webhook can be matched to the quote. */
+export async function recordDepositSession(db: Knex, quote: Pick<QuoteRow, "id" | "shop_id" | "deposit_cents">, sessionId: string): Promise<void> {
+  await db("payments").insert({ shop_id: quote.shop_id, quote_id: quote.id, provider_session_id: sessionId, amount_cents: quote.deposit_cents, currency: "usd" });
+}
+
+/** These queries on the app's database handle, for pages and route handlers. */
+export const paymentQueries = bindAppDb({ applyPaymentEvent, depositParties, recordDepositSession });

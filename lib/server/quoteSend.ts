@@ -7,6 +7,7 @@ import { formatUsd } from "@/lib/quotes/money";
 import { quotePdf } from "@/lib/quotes/pdf";
 import { type QuoteDetail, type QuoteScope, type Actor, findByToken, getQuoteDetail, latestSentDocument, markSent, readLines } from "./quotes";
 import { getShop } from "./shops";
+import { bindAppDb } from "@/lib/db/bind";
 
 /**
  * The quote as a document: a draft from its live rows; any other quote as it was last sent
@@ -70,3 +71,6 @@ export async function sendQuote(db: Knex, scope: QuoteScope, id: string, actor: 
   });
   return detail;
 }
+
+/** These queries on the app's database handle, for pages and route handlers. */
+export const quoteSendQueries = bindAppDb({ publicQuoteView, renderQuotePdf, sendQuote });

@@ -10,6 +10,7 @@ import { checkWheelOnHub, hubRefusal } from "@/lib/quotes/hubFit";
 import { formatQuantity } from "@/lib/quotes/quantity";
 import { TotalsError, computeTotals } from "@/lib/quotes/totals";
 import { resolveVehicle, type Vehicle } from "@/lib/validation/quotes";
+import { bindAppDb } from "@/lib/db/bind";
 
 /** Whose quotes a caller sees: owners the whole shop's, staff the ones they wrote. */
 export interface QuoteScope {
@@ -101,7 +102,8 @@ export async function findQuote(db: Knex | Knex.Transaction, scope: QuoteScope, 
 }
 
 export interface QuoteDetail {
-  quote: QuoteRow;
+  /** The quote without its link's token hash: the detail is what the shop's browser receives. */
+  quote: Omit<QuoteRow, "public_token_hash">;
   lines: QuoteLineRow[];
   events: QuoteEventRow[];
   customer: { id: string; name: string; phone: string; email: string };
@@ -123,7 +125,8 @@ export async function quoteDetail(db: Knex, quote: QuoteRow): Promise<QuoteDetai
     db("customers").where({ id: quote.customer_id, shop_id: quote.shop_id }).first("id", "name", "phone", "email"),
     quote.created_by ? db("users").where({ id: quote.created_by }).first("name") : null,
   ]);
-  return { quote, lines, events, customer, createdByName: author?.name ?? null, hubChecks: hubChecksOf(quote, lines) };
+  const { public_token_hash: _hidden, ...shown } = quote;
+  return { quote: shown, lines, events, customer, createdByName: author?.name ?? null, hubChecks: hubChecksOf(quote, lines) };
 }
 
 export async function getQuoteDetail(db: Knex, scope: QuoteScope, id: string): Promise<QuoteDetail> {
@@ -410,6 +413,19 @@ export async function staffTransition(db: Knex, scope: QuoteScope, id: string, t
   });
 }
 
+/**
+ * The customer's answer on their link, in one transaction with the quote locked. False when the
+ * link names no quote (nothing is written then).
+ */
+export async function answerByToken(db: Knex, token: string, to: "accepted" | "declined", actor: Actor): Promise<boolean> {
+  return db.transaction(async (trx) => {
+    const quote = await findByToken(trx, token, true);
+    if (!quote) return false;
+    await transition(trx, quote, to, actor);
+    return true;
+  });
+}
+
 /** A quote by its public token (the customer's link), or undefined. */
 export async function findByToken(db: Knex | Knex.Transaction, token: string, lock = false): Promise<QuoteRow | undefined> {
   if (!/^[A-Za-z0-9_-]{43}$/.test(token)) return undefined;
@@ -417,3 +433,6 @@ export async function findByToken(db: Knex | Knex.Transaction, token: string, lo
   if (lock) q.forUpdate();
   return withEffectiveStatus((await q) as QuoteRow | undefined);
 }
+
+/** These queries on the app's database handle, for pages and route handlers. */
+export const quoteQueries = bindAppDb({ answerByToken, createQuote, expireDue, findByToken, getQuoteDetail, latestSentDocument, listQuotes, staffTransition, updateDraft });

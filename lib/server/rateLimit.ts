@@ -2,6 +2,7 @@ import "server-only";
 import { createHash } from "node:crypto";
 import type { Knex } from "knex";
 import { RateLimiterPostgres, RateLimiterRes } from "rate-limiter-flexible";
+import { bindAppDb } from "@/lib/db/bind";
 import { HttpError } from "@/lib/http/errors";
 
 /**
@@ -88,3 +89,6 @@ export async function consumeQuietly(db: Knex, spec: LimitSpec, key: string): Pr
     throw e;
   }
 }
+
+/** The limits for route handlers, on the app's handle (handlers never hold it). */
+export const rateLimitQueries = bindAppDb({ consumeOrRefuse, consumeQuietly });

@@ -1,6 +1,7 @@
 import "server-only";
 import type { Knex } from "knex";
 import type { Role } from "@/lib/db/types";
+import { bindAppDb } from "@/lib/db/bind";
 
 /**
  * Ending sessions early. A session is a signed token the browser keeps for up to 14 days; the
@@ -41,3 +42,6 @@ export async function revokeSession(db: Knex, userId: string, sid: string, expir
 export async function endAllSessions(db: Knex, userId: string): Promise<void> {
   await db("users").where({ id: userId }).increment("session_version", 1);
 }
+
+/** These queries on the app's database handle, for pages and route handlers. */
+export const sessionQueries = bindAppDb({ endAllSessions });

@@ -2,7 +2,11 @@ import "server-only";
 import { createHash, randomBytes } from "node:crypto";
 import type { Knex } from "knex";
 import type { Role, ShopSettingsRow, StaffInviteRow } from "@/lib/db/types";
+import { hashPassword, verifyPassword } from "@/lib/auth/password";
+import { HttpError } from "@/lib/http/errors";
+import { passwordField } from "@/lib/validation/account";
 import type { ShopSettings } from "@/lib/validation/shop";
+import { bindAppDb } from "@/lib/db/bind";
 
 export const INVITE_TTL_HOURS = 72;
 const sha256 = (s: string) => createHash("sha256").update(s).digest("hex");
@@ -97,6 +101,43 @@ export async function findOpenInvite(db: Knex | Knex.Transaction, token: string,
   return (await q) as { id: string; shop_id: string; email: string; expires_at: Date; shop_name: string } | undefined;
 }
 
+const inviteGone = () => new HttpError(410, "This invitation has expired, was withdrawn or was already used. Ask the shop for a new one.");
+
+/**
+ * Accepts a staff invitation: the token is consumed in the same transaction that creates the
+ * account (or attaches the existing member account after its password is checked).
+ */
+export async function acceptInvite(db: Knex, input: { token: string; name?: string; password: string }) {
+  return db.transaction(async (trx) => {
+    const invite = await findOpenInvite(trx, input.token, true);
+    if (!invite) throw inviteGone();
+    const existing = await trx("users").whereRaw("lower(email) = lower(?)", [invite.email]).first("id", "role", "shop_id", "password_hash");
+    let userId: string;
+    if (existing) {
+      if (!(await verifyPassword(input.password, existing.password_hash))) {
+        throw new HttpError(422, "Some fields need attention.", { password: ["This address already has a Hubface account: enter its password."] });
+      }
+      if (existing.role !== "member") {
+        throw new HttpError(409, "This account already belongs to a shop or is an admin account; it cannot join another shop.");
+      }
+      await trx("users").where({ id: existing.id }).update({ role: "shop_staff", shop_id: invite.shop_id, updated_at: trx.fn.now() });
+      userId = existing.id;
+    } else {
+      const pw = passwordField.safeParse(input.password);
+      const fieldErrors: Record<string, string[]> = {};
+      if (!input.name) fieldErrors.name = ["Enter your name."];
+      if (!pw.success) fieldErrors.password = [pw.error.issues[0]?.message ?? "Choose a longer password."];
+      if (Object.keys(fieldErrors).length) throw new HttpError(422, "Some fields need attention.", fieldErrors);
+      const [row] = await trx("users")
+        .insert({ email: invite.email, name: input.name, password_hash: await hashPassword(input.password), role: "shop_staff", shop_id: invite.shop_id })
+        .returning(["id"]);
+      userId = (row as { id: string }).id;
+    }
+    await trx("staff_invites").where({ id: invite.id }).update({ used_at: trx.fn.now() });
+    return { userId, email: invite.email, shopName: invite.shop_name, created: !existing };
+  });
+}
+
 /**
  * Takes a staff member out of the shop: the account stays, as a member. Owners cannot be
  * removed here. Returns false when no such staff member is in this shop.
@@ -116,3 +157,6 @@ export function shopIdOf(caller: { shopId: string | null }): string {
 
 export const SHOP_ANY = ["shop_staff", "shop_owner"] as const;
 export const SHOP_OWNER = ["shop_owner"] as const;
+
+/** These queries on the app's database handle, for pages and route handlers. */
+export const shopQueries = bindAppDb({ acceptInvite, createInvite, findOpenInvite, getShop, listOpenInvites, listTeam, removeStaff, revokeInvite, updateShopSettings });

@@ -1,6 +1,7 @@
 import "server-only";
 import type { Knex } from "knex";
 import type { PublicUser, Role, UserRow } from "@/lib/db/types";
+import { bindAppDb } from "@/lib/db/bind";
 
 const PUBLIC_COLUMNS = ["id", "email", "name", "role", "shop_id", "created_at", "updated_at"] as const;
 
@@ -81,3 +82,6 @@ export async function setPassword(db: Knex, id: string, passwordHash: string) {
 export async function listShops(db: Knex) {
   return db("shops").select("id", "name").orderBy("name");
 }
+
+/** These queries on the app's database handle, for pages and route handlers. */
+export const userQueries = bindAppDb({ createUser, findUserByEmail, findUserById, listShops, listUsers, setUserRole });

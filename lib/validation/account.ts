@@ -51,4 +51,3 @@ export const roleChangeSchema = z
     path: ["shopId"],
     message: "Shop roles need a shop.",
   });
-export type RoleChangeInput = z.infer<typeof roleChangeSchema>;

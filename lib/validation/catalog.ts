@@ -22,4 +22,3 @@ export const CATALOG_QUERY_LABELS = {
   page: "Page",
   pageSize: "Rows per page",
 } as const;
-export type CatalogQueryInput = z.infer<typeof catalogQuerySchema>;

@@ -50,8 +50,6 @@ export const comparisonIdParams = z.object({ id: z.uuid() });
 /** A share slug as the app makes them: base64url of 18 random bytes (144 bits). */
 export const SHARE_SLUG_RE = /^[A-Za-z0-9_-]{24}$/;
 
-export type CreateComparisonBody = z.infer<typeof createComparisonSchema>;
-export type UpdateComparisonBody = z.infer<typeof updateComparisonSchema>;
 
 /** Key figures stored beside the input (computed on the server). */
 export interface ComparisonFigures {

@@ -193,6 +193,5 @@ export const checklistUpdateSchema = z
     message: "Send the planned setup or the saved comparison the checklist is for.",
     path: ["planned"],
   });
-export type ChecklistUpdate = z.output<typeof checklistUpdateSchema>;
 
 export { numberField };

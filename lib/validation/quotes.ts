@@ -105,7 +105,6 @@ export const createQuoteSchema = z
     { error: "Send the quote as a form." },
   )
   .refine((q) => !!q.vehicle !== !!q.vehicleId, { path: ["vehicle"], message: "Enter the vehicle or pick a saved one." });
-export type CreateQuoteInput = z.input<typeof createQuoteSchema>;
 
 export const QUOTE_LINE_KINDS = ["tire", "wheel", "service", "custom"] as const;
 export const QUOTE_LINE_UNITS = ["each", "hour"] as const;
@@ -141,7 +140,6 @@ export const quoteLineSchema = z.object(
   },
   { error: "Each line needs a description, quantity and price." },
 );
-export type QuoteLineInput = z.input<typeof quoteLineSchema>;
 
 export const updateQuoteSchema = z.object(
   {
@@ -151,7 +149,6 @@ export const updateQuoteSchema = z.object(
   },
   { error: "Send the lines, the quote discount and the notes." },
 );
-export type UpdateQuoteInput = z.input<typeof updateQuoteSchema>;
 
 /** Sending: the version of the quote the sender was looking at, so an unseen change is not sent. */
 export const sendQuoteSchema = z.object({ seenUpdatedAt: z.iso.datetime({ offset: true, error: "Reload the quote and send it again." }).optional() }, { error: "Reload the quote and send it again." });

@@ -189,7 +189,6 @@ export const setupSchema = z
 /** What the form holds (text allowed) and what comes out (numbers). */
 export type SetupFormValues = z.input<typeof setupSchema>;
 export type SetupValues = z.output<typeof setupSchema>;
-export type PositionValues = z.output<typeof positionSchema>;
 
 export { toEngineSetup };
 

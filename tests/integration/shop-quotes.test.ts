@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { rebuild, testDb } from "./support/db";
 import { ctx, req, sessionOf } from "./support/requests";
 import { SHOP_A, U, VEHICLE, item, seedShops } from "./support/shopFixture";
+import { internalKeys } from "./support/apiKeys";
 
 const session = vi.hoisted(() => ({ current: null as unknown }));
 vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
@@ -176,6 +177,7 @@ describe("sending", () => {
     expect(res.status).toBe(200);
     const d = await res.json();
     expect(d.quote.status).toBe("sent");
+    expect(internalKeys(d)).toEqual([]); // the link's token hash stays in the database
     expect(d.events.map((e: { to_status: string; actor: string }) => `${e.to_status}:${e.actor}`)).toEqual(["draft:Sam Staff", "sent:Sam Staff"]);
     expect(sent).toHaveLength(1);
     expect(sent[0]!.to).toBe("dace@example.test");

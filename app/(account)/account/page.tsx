@@ -6,16 +6,16 @@ import { Card } from "@/components/ui/Card";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { SignOutEverywhereButton } from "@/components/site/SignOutEverywhereButton";
 import { requirePageCaller } from "@/lib/auth/session";
-import { db } from "@/lib/db";
-import { findUserById } from "@/lib/server/users";
+import { shopQueries } from "@/lib/server/shops";
+import { userQueries } from "@/lib/server/users";
 import { ROLE_SUMMARY } from "./roleSummary";
 
 export const metadata: Metadata = { title: "Your account" };
 
 export default async function AccountPage({ searchParams }: { searchParams: Promise<{ welcome?: string }> }) {
   const caller = await requirePageCaller("/account");
-  const [user, sp] = await Promise.all([findUserById(db, caller.userId), searchParams]);
-  const shop = caller.shopId ? await db("shops").where({ id: caller.shopId }).first("name") : null;
+  const [user, sp] = await Promise.all([userQueries.findUserById(caller.userId), searchParams]);
+  const shop = caller.shopId ? await shopQueries.getShop(caller.shopId) : null;
   const can = ROLE_SUMMARY[caller.role];
   return (
     <>

@@ -3,15 +3,14 @@ import Link from "next/link";
 import { buttonClass } from "@/components/ui/Button";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { requirePageCaller } from "@/lib/auth/session";
-import { db } from "@/lib/db";
-import { listComparisons } from "@/lib/server/comparisons";
+import { comparisonQueries } from "@/lib/server/comparisons";
 import { ComparisonList } from "./ComparisonList";
 
 export const metadata: Metadata = { title: "My comparisons" };
 
 export default async function ComparisonsPage() {
   const caller = await requirePageCaller("/comparisons");
-  const initial = await listComparisons(db, caller.userId, { sort: "updated" });
+  const initial = await comparisonQueries.listComparisons(caller.userId, { sort: "updated" });
   return (
     <>
       <PageHeader

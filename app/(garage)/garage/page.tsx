@@ -5,11 +5,10 @@ import { buttonClass } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { requirePageCaller } from "@/lib/auth/session";
-import { db } from "@/lib/db";
 import { setupGeometry } from "@/lib/fitment";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
 import { bothUnits } from "@/lib/garage/format";
-import { listVehicles } from "@/lib/server/garage";
+import { garageQueries } from "@/lib/server/garage";
 import { FRONT_SUSPENSION_LABEL } from "@/lib/validation/garage";
 import { toEngineSetup } from "@/lib/validation/setup";
 
@@ -17,12 +16,8 @@ export const metadata: Metadata = { title: "Your garage" };
 
 export default async function GaragePage() {
   const caller = await requirePageCaller("/garage", GARAGE_ACCESS);
-  const vehicles = await listVehicles(db, caller.userId);
-  const counts = new Map<string, number>(
-    (await db("vehicle_clearances").whereIn("vehicle_id", vehicles.map((v) => v.id)).groupBy("vehicle_id").select("vehicle_id").count("* as n")).map(
-      (r) => [String(r.vehicle_id), Number(r.n)],
-    ),
-  );
+  const vehicles = await garageQueries.listVehicles(caller.userId);
+  const counts = await garageQueries.clearanceCounts(vehicles.map((v) => v.id));
   return (
     <>
       <PageHeader

@@ -5,8 +5,7 @@ import { buttonClass } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { requirePageCaller } from "@/lib/auth/session";
-import { db } from "@/lib/db";
-import { getShop, listTeam, shopIdOf } from "@/lib/server/shops";
+import { shopIdOf, shopQueries } from "@/lib/server/shops";
 
 export const metadata: Metadata = { title: "Your shop" };
 
@@ -14,7 +13,7 @@ export default async function ShopPage() {
   const caller = await requirePageCaller("/shop", ["shop_staff", "shop_owner"]);
   // Scoped by the session's shop id: nobody sees another shop's people.
   const shopId = shopIdOf(caller);
-  const [shop, people] = await Promise.all([getShop(db, shopId), listTeam(db, shopId)]);
+  const [shop, people] = await Promise.all([shopQueries.getShop(shopId), shopQueries.listTeam(shopId)]);
   return (
     <>
       <PageHeader

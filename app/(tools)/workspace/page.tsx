@@ -2,11 +2,10 @@ import type { Metadata } from "next";
 import { z } from "zod";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { decodeComparison } from "@/lib/comparison/url";
-import { db } from "@/lib/db";
 import { admits, currentCaller } from "@/lib/auth/session";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
-import { getComparison } from "@/lib/server/comparisons";
-import { workspaceVehicles } from "@/lib/server/garage";
+import { comparisonQueries } from "@/lib/server/comparisons";
+import { garageQueries } from "@/lib/server/garage";
 import { SaveSlot } from "./SaveSlot";
 import { Workspace } from "./Workspace";
 
@@ -19,7 +18,7 @@ export const metadata: Metadata = {
 async function openedFrom(userId: string | undefined, raw: string | string[] | undefined) {
   const id = z.uuid().safeParse(Array.isArray(raw) ? raw[0] : raw);
   if (!userId || !id.success) return null;
-  const c = await getComparison(db, userId, id.data).catch(() => undefined);
+  const c = await comparisonQueries.getComparison(userId, id.data).catch(() => undefined);
   return c ? { id: c.id, name: c.name, vehicleId: c.vehicleId, input: c.input } : null;
 }
 
@@ -29,7 +28,7 @@ export default async function WorkspacePage({ searchParams }: { searchParams: Pr
   const caller = await currentCaller().catch(() => null);
   const saved = await openedFrom(caller?.userId, sp.saved);
   // Members see their garage: `v` (or the saved comparison's vehicle) picks one of their own vehicles.
-  const vehicles = caller && admits(GARAGE_ACCESS, caller) ? await workspaceVehicles(db, caller.userId) : null;
+  const vehicles = caller && admits(GARAGE_ACCESS, caller) ? await garageQueries.workspaceVehicles(caller.userId) : null;
   const wanted = (Array.isArray(sp.v) ? sp.v[0] : sp.v) ?? saved?.vehicleId ?? null;
   const garage = vehicles ? { vehicles, initialVehicleId: vehicles.some((v) => v.id === wanted) ? wanted : null } : null;
   return (

@@ -1,16 +1,15 @@
-import { db } from "@/lib/db";
 import { json, route } from "@/lib/http/route";
-import { createComparison, listComparisons } from "@/lib/server/comparisons";
+import { comparisonQueries } from "@/lib/server/comparisons";
 import { createComparisonSchema, listComparisonsQuery } from "@/lib/validation/comparisons";
 
 /** The caller's saved comparisons, searched (name or tire size) and sorted. */
 export const GET = route({ access: "signed-in", query: listComparisonsQuery }, async ({ caller, query }) => {
-  const comparisons = await listComparisons(db, caller.userId, { q: query.q, sort: query.sort });
+  const comparisons = await comparisonQueries.listComparisons(caller.userId, { q: query.q, sort: query.sort });
   return json({ comparisons }, { headers: { "Cache-Control": "private, no-store" } });
 });
 
 /** Saves a comparison; its key figures are computed here from the validated input. */
 export const POST = route({ access: "signed-in", body: createComparisonSchema }, async ({ caller, body }) => {
-  const comparison = await createComparison(db, caller.userId, body);
+  const comparison = await comparisonQueries.createComparison(caller.userId, body);
   return json({ comparison }, 201);
 });

@@ -1,5 +1,5 @@
-import { db } from "@/lib/db";
 import { log } from "@/lib/log";
+import { healthQueries } from "@/lib/server/health";
 
 export const dynamic = "force-dynamic";
 
@@ -7,7 +7,7 @@ export const dynamic = "force-dynamic";
 export async function GET() {
   const started = performance.now();
   try {
-    await db.raw("select 1");
+    await healthQueries.pingDatabase();
     const ms = Math.round((performance.now() - started) * 100) / 100;
     return Response.json({ status: "ok", database: { status: "ok", roundTripMs: ms } }, { headers: { "Cache-Control": "no-store" } });
   } catch (error) {

@@ -1,8 +1,7 @@
 import type { Metadata } from "next";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { requirePageCaller } from "@/lib/auth/session";
-import { db } from "@/lib/db";
-import { listProblemJobs } from "@/lib/server/jobs";
+import { jobQueries } from "@/lib/server/jobs";
 import { JobsTable } from "./JobsTable";
 
 export const metadata: Metadata = { title: "Background jobs" };
@@ -10,7 +9,7 @@ export const dynamic = "force-dynamic";
 
 export default async function AdminJobsPage() {
   await requirePageCaller("/admin/jobs", ["admin"]);
-  const jobs = await listProblemJobs(db);
+  const jobs = await jobQueries.listProblemJobs();
   return (
     <>
       <PageHeader

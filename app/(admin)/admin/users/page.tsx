@@ -1,15 +1,14 @@
 import type { Metadata } from "next";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { requirePageCaller } from "@/lib/auth/session";
-import { db } from "@/lib/db";
-import { listShops, listUsers } from "@/lib/server/users";
+import { userQueries } from "@/lib/server/users";
 import { UsersTable, type UserItem } from "./UsersTable";
 
 export const metadata: Metadata = { title: "Users and roles" };
 
 export default async function AdminUsersPage() {
   const caller = await requirePageCaller("/admin/users", ["admin"]);
-  const [users, shops] = await Promise.all([listUsers(db), listShops(db)]);
+  const [users, shops] = await Promise.all([userQueries.listUsers(), userQueries.listShops()]);
   const initial: UserItem[] = users.map((u) => ({
     id: u.id, email: u.email, name: u.name, role: u.role, shop_id: u.shop_id, shop_name: u.shop_name,
     created_at: new Date(u.created_at).toISOString(),

@@ -2,10 +2,9 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { z } from "zod";
 import { requirePageCaller } from "@/lib/auth/session";
-import { db } from "@/lib/db";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
 import { setupFromQuery } from "@/lib/garage/links";
-import { vehicleDetail } from "@/lib/server/garage";
+import { garageQueries } from "@/lib/server/garage";
 import { VehicleView } from "./VehicleView";
 
 export const metadata: Metadata = { title: "Vehicle" };
@@ -14,7 +13,7 @@ export default async function VehiclePage({ params, searchParams }: { params: Pr
   const [{ id }, sp] = await Promise.all([params, searchParams]);
   const caller = await requirePageCaller(`/garage/${id}`, GARAGE_ACCESS);
   if (!z.uuid().safeParse(id).success) notFound();
-  const detail = await vehicleDetail(db, caller.userId, id);
+  const detail = await garageQueries.vehicleDetail(caller.userId, id);
   if (!detail) notFound();
   return <VehicleView initial={detail} initialPlanned={setupFromQuery("p", sp)} />;
 }

@@ -1,16 +1,15 @@
 import type { Metadata } from "next";
 import { Alert } from "@/components/ui/Alert";
 import { Card } from "@/components/ui/Card";
-import { db } from "@/lib/db";
-import { findOpenInvite } from "@/lib/server/shops";
-import { findUserByEmail } from "@/lib/server/users";
+import { shopQueries } from "@/lib/server/shops";
+import { userQueries } from "@/lib/server/users";
 import { JoinForm } from "./JoinForm";
 
 export const metadata: Metadata = { title: "Join a shop", robots: { index: false } };
 
 export default async function JoinPage({ params }: { params: Promise<{ token: string }> }) {
   const { token } = await params;
-  const invite = /^[A-Za-z0-9_-]{43}$/.test(token) ? await findOpenInvite(db, token) : undefined;
+  const invite = /^[A-Za-z0-9_-]{43}$/.test(token) ? await shopQueries.findOpenInvite(token) : undefined;
   if (!invite) {
     return (
       <Card className="mx-auto max-w-lg">
@@ -19,7 +18,7 @@ export default async function JoinPage({ params }: { params: Promise<{ token: st
       </Card>
     );
   }
-  const hasAccount = !!(await findUserByEmail(db, invite.email));
+  const hasAccount = !!(await userQueries.findUserByEmail(invite.email));
   return (
     <Card className="mx-auto max-w-lg">
       <h1 className="text-2xl font-bold">Join {invite.shop_name}</h1>

@@ -5,10 +5,9 @@ import { QuoteDocumentLines } from "@/components/quotes/QuoteDocumentLines";
 import { Alert } from "@/components/ui/Alert";
 import { Badge } from "@/components/ui/Badge";
 import { Card } from "@/components/ui/Card";
-import { db } from "@/lib/db";
 import { formatUsd } from "@/lib/quotes/money";
 import { STATUS_LABEL } from "@/lib/server/quotes";
-import { publicQuoteView } from "@/lib/server/quoteSend";
+import { quoteSendQueries } from "@/lib/server/quoteSend";
 import { PublicQuoteActions } from "./PublicQuoteActions";
 
 export const metadata: Metadata = { title: "Your quote", robots: { index: false } };
@@ -18,7 +17,7 @@ export const dynamic = "force-dynamic";
 export default async function PublicQuotePage({ params, searchParams }: { params: Promise<{ token: string }>; searchParams: Promise<{ paid?: string }> }) {
   const { token } = await params;
   const { paid } = await searchParams;
-  const view = await publicQuoteView(db, token);
+  const view = await quoteSendQueries.publicQuoteView(token);
   if (!view) {
     return (
       <Card className="mx-auto max-w-lg">

@@ -1,7 +1,6 @@
 import "server-only";
 import { cache } from "react";
-import { db } from "@/lib/db";
-import { type SharedComparison, findSharedComparison } from "@/lib/server/comparisons";
+import { comparisonQueries, type SharedComparison } from "@/lib/server/comparisons";
 import { SHARE_SLUG_RE } from "@/lib/validation/comparisons";
 
 /**
@@ -11,5 +10,5 @@ import { SHARE_SLUG_RE } from "@/lib/validation/comparisons";
  */
 export const getSharedComparison = cache(async (slug: string): Promise<SharedComparison | undefined> => {
   if (!SHARE_SLUG_RE.test(slug)) return undefined;
-  return findSharedComparison(db, slug);
+  return comparisonQueries.findSharedComparison(slug);
 });

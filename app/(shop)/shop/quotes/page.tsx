@@ -5,16 +5,15 @@ import { buttonClass } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { requirePageCaller } from "@/lib/auth/session";
-import { db } from "@/lib/db";
 import { formatUsd } from "@/lib/quotes/money";
-import { STATUS_LABEL, listQuotes, quoteScopeOf } from "@/lib/server/quotes";
+import { quoteQueries, quoteScopeOf, STATUS_LABEL } from "@/lib/server/quotes";
 import { statusTone } from "./statusTone";
 
 export const metadata: Metadata = { title: "Quotes" };
 
 export default async function QuotesPage() {
   const caller = await requirePageCaller("/shop/quotes", ["shop_staff", "shop_owner"]);
-  const quotes = await listQuotes(db, quoteScopeOf(caller));
+  const quotes = await quoteQueries.listQuotes(quoteScopeOf(caller));
   return (
     <>
       <PageHeader

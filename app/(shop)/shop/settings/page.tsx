@@ -2,9 +2,8 @@ import type { Metadata } from "next";
 import { Card } from "@/components/ui/Card";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { requirePageCaller } from "@/lib/auth/session";
-import { db } from "@/lib/db";
 import { formatBp, formatCents } from "@/lib/quotes/money";
-import { getShop, shopIdOf } from "@/lib/server/shops";
+import { shopIdOf, shopQueries } from "@/lib/server/shops";
 import { notFound } from "next/navigation";
 import { SettingsForm } from "./SettingsForm";
 
@@ -12,7 +11,7 @@ export const metadata: Metadata = { title: "Shop settings" };
 
 export default async function SettingsPage() {
   const caller = await requirePageCaller("/shop/settings", ["shop_owner"]);
-  const shop = await getShop(db, shopIdOf(caller));
+  const shop = await shopQueries.getShop(shopIdOf(caller));
   if (!shop) notFound();
   return (
     <>

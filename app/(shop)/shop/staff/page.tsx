@@ -1,8 +1,7 @@
 import type { Metadata } from "next";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { requirePageCaller } from "@/lib/auth/session";
-import { db } from "@/lib/db";
-import { listOpenInvites, listTeam, shopIdOf } from "@/lib/server/shops";
+import { shopIdOf, shopQueries } from "@/lib/server/shops";
 import { StaffPanel } from "./StaffPanel";
 
 export const metadata: Metadata = { title: "Staff" };
@@ -10,7 +9,7 @@ export const metadata: Metadata = { title: "Staff" };
 export default async function StaffPage() {
   const caller = await requirePageCaller("/shop/staff", ["shop_owner"]);
   const shopId = shopIdOf(caller);
-  const [team, invites] = await Promise.all([listTeam(db, shopId), listOpenInvites(db, shopId)]);
+  const [team, invites] = await Promise.all([shopQueries.listTeam(shopId), shopQueries.listOpenInvites(shopId)]);
   return (
     <>
       <PageHeader

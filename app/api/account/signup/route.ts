@@ -1,11 +1,10 @@
-import { db } from "@/lib/db";
 import { clientAddress } from "@/lib/auth/clientAddress";
 import { hashPassword } from "@/lib/auth/password";
 import { HttpError } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
 import { RATE_LIMITS } from "@/lib/server/limits";
-import { consumeOrRefuse } from "@/lib/server/rateLimit";
-import { DuplicateEmailError, createUser } from "@/lib/server/users";
+import { rateLimitQueries } from "@/lib/server/rateLimit";
+import { DuplicateEmailError, userQueries } from "@/lib/server/users";
 import { signUpSchema } from "@/lib/validation/account";
 
 /**
@@ -15,9 +14,9 @@ import { signUpSchema } from "@/lib/validation/account";
  * password is hashed before the insert either way, so both answers take the same time.
  */
 export const POST = route({ access: "public", body: signUpSchema }, async ({ req, body }) => {
-  await consumeOrRefuse(db, [{ spec: RATE_LIMITS.signUp, key: clientAddress(req.headers) }], "Too many sign-ups from your network.");
+  await rateLimitQueries.consumeOrRefuse([{ spec: RATE_LIMITS.signUp, key: clientAddress(req.headers) }], "Too many sign-ups from your network.");
   try {
-    const user = await createUser(db, { email: body.email, name: body.name, passwordHash: await hashPassword(body.password) });
+    const user = await userQueries.createUser({ email: body.email, name: body.name, passwordHash: await hashPassword(body.password) });
     return Response.json({ id: user.id, email: user.email, name: user.name }, { status: 201 });
   } catch (e) {
     if (e instanceof DuplicateEmailError) throw new HttpError(422, "Some fields need attention.", { email: [e.message] });

@@ -1,6 +1,5 @@
-import { db } from "@/lib/db";
 import { route } from "@/lib/http/route";
-import { listProblemJobs } from "@/lib/server/jobs";
+import { jobQueries } from "@/lib/server/jobs";
 
 /** Failed jobs and jobs waiting for a retry (queue, last error, attempts, times; never their data). */
-export const GET = route({ access: ["admin"] }, async () => ({ jobs: await listProblemJobs(db) }));
+export const GET = route({ access: ["admin"] }, async () => ({ jobs: await jobQueries.listProblemJobs() }));

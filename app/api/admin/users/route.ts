@@ -1,12 +1,11 @@
-import { db } from "@/lib/db";
 import { parseLabelledQuery } from "@/lib/http/labelledQuery";
 import { route } from "@/lib/http/route";
-import { listUsers } from "@/lib/server/users";
+import { userQueries } from "@/lib/server/users";
 import { USERS_SEARCH_LABEL, adminUsersQuerySchema } from "@/lib/validation/adminUsers";
 
 export const GET = route({ access: ["admin"] }, async ({ req }) => {
   // The page shows only the message, beside its search box.
   const query = parseLabelledQuery(adminUsersQuerySchema, req, { q: USERS_SEARCH_LABEL });
-  const users = await listUsers(db, { search: query.q });
+  const users = await userQueries.listUsers({ search: query.q });
   return { users };
 });

@@ -1,28 +1,27 @@
-import { db } from "@/lib/db";
 import { notFound } from "@/lib/http/errors";
 import { json, route } from "@/lib/http/route";
-import { deleteComparison, getComparison, updateComparison } from "@/lib/server/comparisons";
+import { comparisonQueries } from "@/lib/server/comparisons";
 import { dropCachedShare } from "@/lib/server/shareCache";
 import { comparisonIdParams, updateComparisonSchema } from "@/lib/validation/comparisons";
 
 const NOT_FOUND = "That comparison";
 
 export const GET = route({ access: "signed-in", params: comparisonIdParams }, async ({ caller, params }) => {
-  const comparison = await getComparison(db, caller.userId, params.id);
+  const comparison = await comparisonQueries.getComparison(caller.userId, params.id);
   if (!comparison) throw notFound(NOT_FOUND);
   return json({ comparison }, { headers: { "Cache-Control": "private, no-store" } });
 });
 
 /** Rename, change the setups (figures recomputed) or tie it to a vehicle. */
 export const PATCH = route({ access: "signed-in", params: comparisonIdParams, body: updateComparisonSchema }, async ({ caller, params, body }) => {
-  const comparison = await updateComparison(db, caller.userId, params.id, body);
+  const comparison = await comparisonQueries.updateComparison(caller.userId, params.id, body);
   if (!comparison) throw notFound(NOT_FOUND);
   await dropCachedShare(comparison.share?.slug);
   return { comparison };
 });
 
 export const DELETE = route({ access: "signed-in", params: comparisonIdParams }, async ({ caller, params }) => {
-  const deleted = await deleteComparison(db, caller.userId, params.id);
+  const deleted = await comparisonQueries.deleteComparison(caller.userId, params.id);
   if (!deleted) throw notFound(NOT_FOUND);
   await dropCachedShare(deleted.liveSlug);
   return { ok: true };

@@ -1,10 +1,9 @@
 import type Stripe from "stripe";
-import { db } from "@/lib/db";
 import { readCappedBytes } from "@/lib/http/body";
 import { HttpError } from "@/lib/http/errors";
 import { fieldErrorsOf, humanIssue, route } from "@/lib/http/route";
 import { payments, webhookSecret } from "@/lib/payments/provider";
-import { applyPaymentEvent } from "@/lib/server/payments";
+import { paymentQueries } from "@/lib/server/payments";
 import { paymentEventSchema } from "@/lib/validation/payments";
 
 /**
@@ -24,6 +23,6 @@ export const POST = route({ access: "public" }, async ({ req }) => {
   }
   const shape = paymentEventSchema.safeParse(event, { error: humanIssue });
   if (!shape.success) throw new HttpError(400, "The event is not in the form Hubface reads.", fieldErrorsOf(shape.error));
-  const outcome = await applyPaymentEvent(db, shape.data);
+  const outcome = await paymentQueries.applyPaymentEvent(shape.data);
   return { received: true, outcome };
 });

@@ -1,9 +1,8 @@
 import { z } from "zod";
-import { db } from "@/lib/db";
 import { notFound } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
 import { photoStore } from "@/lib/photos/s3";
-import { deletePhoto, findVisiblePhoto } from "@/lib/server/garage";
+import { garageQueries } from "@/lib/server/garage";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
 
 const params = z.object({ id: z.uuid() });
@@ -14,7 +13,7 @@ const query = z.object({ variant: z.enum(["full", "thumb"]).default("full") });
  * leave the server and are never taken from a request.
  */
 export const GET = route({ access: GARAGE_ACCESS, params, query }, async ({ caller, params, query }) => {
-  const photo = await findVisiblePhoto(db, caller, params.id);
+  const photo = await garageQueries.findVisiblePhoto(caller, params.id);
   if (!photo) throw notFound("That photo");
   const obj = await photoStore().get(query.variant === "thumb" ? photo.thumb_key : photo.object_key);
   if (!obj) throw notFound("That photo");
@@ -29,6 +28,6 @@ export const GET = route({ access: GARAGE_ACCESS, params, query }, async ({ call
 });
 
 export const DELETE = route({ access: GARAGE_ACCESS, params }, async ({ caller, params }) => {
-  if (!(await deletePhoto(db, photoStore(), caller.userId, params.id))) throw notFound("That photo");
+  if (!(await garageQueries.deletePhoto(photoStore(), caller.userId, params.id))) throw notFound("That photo");
   return { ok: true };
 });

@@ -1,8 +1,7 @@
-import { db } from "@/lib/db";
 import { HttpError } from "@/lib/http/errors";
 import { parseLabelledQuery } from "@/lib/http/labelledQuery";
 import { route } from "@/lib/http/route";
-import { createCustomer, findDuplicateCustomer, searchCustomers } from "@/lib/server/customers";
+import { customerQueries } from "@/lib/server/customers";
 import { SHOP_ANY, shopIdOf } from "@/lib/server/shops";
 import { customerSchema, customerSearchSchema } from "@/lib/validation/quotes";
 
@@ -10,15 +9,15 @@ import { customerSchema, customerSearchSchema } from "@/lib/validation/quotes";
 export const GET = route({ access: SHOP_ANY }, async ({ caller, req }) => {
   // The quote builder shows only the message, under its search box labelled like this.
   const query = parseLabelledQuery(customerSearchSchema, req, { q: "Phone, e-mail or name" });
-  return { customers: await searchCustomers(db, shopIdOf(caller), query.q) };
+  return { customers: await customerQueries.searchCustomers(shopIdOf(caller), query.q) };
 });
 
 export const POST = route({ access: SHOP_ANY, body: customerSchema }, async ({ caller, body }) => {
   const shopId = shopIdOf(caller);
-  const dup = await findDuplicateCustomer(db, shopId, body);
+  const dup = await customerQueries.findDuplicateCustomer(shopId, body);
   if (dup) {
     return Response.json({ error: `${dup.name} already has this phone number or e-mail. Pick the existing customer.`, existing: dup }, { status: 409 });
   }
   if (!body.phone && !body.email) throw new HttpError(422, "Enter a phone number or an e-mail address.");
-  return Response.json({ customer: await createCustomer(db, shopId, body) }, { status: 201 });
+  return Response.json({ customer: await customerQueries.createCustomer(shopId, body) }, { status: 201 });
 });

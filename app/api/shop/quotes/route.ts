@@ -1,17 +1,16 @@
 import { z } from "zod";
-import { db } from "@/lib/db";
 import { QUOTE_STATUSES } from "@/lib/db/types";
 import { route } from "@/lib/http/route";
-import { createQuote, listQuotes, quoteScopeOf } from "@/lib/server/quotes";
+import { quoteQueries, quoteScopeOf } from "@/lib/server/quotes";
 import { SHOP_ANY, shopIdOf } from "@/lib/server/shops";
 import { createQuoteSchema } from "@/lib/validation/quotes";
 
 /** Owners see the whole shop's quotes; staff the ones they wrote. */
 export const GET = route({ access: SHOP_ANY, query: z.object({ status: z.enum(QUOTE_STATUSES).optional() }) }, async ({ caller, query }) => {
-  return { quotes: await listQuotes(db, quoteScopeOf(caller), { status: query.status }) };
+  return { quotes: await quoteQueries.listQuotes(quoteScopeOf(caller), { status: query.status }) };
 });
 
 export const POST = route({ access: SHOP_ANY, body: createQuoteSchema }, async ({ caller, body }) => {
-  const id = await createQuote(db, shopIdOf(caller), { userId: caller.userId, label: caller.name || caller.email }, body);
+  const id = await quoteQueries.createQuote(shopIdOf(caller), { userId: caller.userId, label: caller.name || caller.email }, body);
   return Response.json({ id }, { status: 201 });
 });

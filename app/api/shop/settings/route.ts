@@ -1,18 +1,17 @@
-import { db } from "@/lib/db";
 import { notFound } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
-import { SHOP_ANY, SHOP_OWNER, getShop, shopIdOf, updateShopSettings } from "@/lib/server/shops";
+import { SHOP_ANY, SHOP_OWNER, shopIdOf, shopQueries } from "@/lib/server/shops";
 import { shopSettingsSchema } from "@/lib/validation/shop";
 
 export const GET = route({ access: SHOP_ANY }, async ({ caller }) => {
-  const shop = await getShop(db, shopIdOf(caller));
+  const shop = await shopQueries.getShop(shopIdOf(caller));
   if (!shop) throw notFound("Your shop");
   return { shop };
 });
 
 /** Owners only: staff read the settings but never change them. */
 export const PUT = route({ access: SHOP_OWNER, body: shopSettingsSchema }, async ({ caller, body }) => {
-  const shop = await updateShopSettings(db, shopIdOf(caller), body);
+  const shop = await shopQueries.updateShopSettings(shopIdOf(caller), body);
   if (!shop) throw notFound("Your shop");
   return { shop };
 });

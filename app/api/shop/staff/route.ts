@@ -1,28 +1,27 @@
-import { db } from "@/lib/db";
 import { HttpError } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
 import { appOrigin, queueMail } from "@/lib/mail";
 import { RATE_LIMITS } from "@/lib/server/limits";
-import { consumeOrRefuse } from "@/lib/server/rateLimit";
-import { INVITE_TTL_HOURS, SHOP_OWNER, createInvite, getShop, listOpenInvites, listTeam, shopIdOf } from "@/lib/server/shops";
+import { rateLimitQueries } from "@/lib/server/rateLimit";
+import { INVITE_TTL_HOURS, SHOP_OWNER, shopIdOf, shopQueries } from "@/lib/server/shops";
 import { staffInviteSchema } from "@/lib/validation/shop";
 
 export const GET = route({ access: SHOP_OWNER }, async ({ caller }) => {
   const shopId = shopIdOf(caller);
-  const [team, invites] = await Promise.all([listTeam(db, shopId), listOpenInvites(db, shopId)]);
+  const [team, invites] = await Promise.all([shopQueries.listTeam(shopId), shopQueries.listOpenInvites(shopId)]);
   return { team, invites };
 });
 
 export const POST = route({ access: SHOP_OWNER, body: staffInviteSchema }, async ({ caller, body }) => {
   const shopId = shopIdOf(caller);
   // Each invitation mails someone outside the shop: a cap keeps a taken-over account from spamming.
-  await consumeOrRefuse(db, [{ spec: RATE_LIMITS.staffInvites, key: shopId }], "Too many invitations sent from this shop.");
-  const team = await listTeam(db, shopId);
+  await rateLimitQueries.consumeOrRefuse([{ spec: RATE_LIMITS.staffInvites, key: shopId }], "Too many invitations sent from this shop.");
+  const team = await shopQueries.listTeam(shopId);
   if (team.some((m) => m.email.toLowerCase() === body.email.toLowerCase())) {
     throw new HttpError(422, "Some fields need attention.", { email: ["This person is already on your team."] });
   }
-  const shop = await getShop(db, shopId);
-  const { token, invite } = await createInvite(db, shopId, body.email, caller.userId);
+  const shop = await shopQueries.getShop(shopId);
+  const { token, invite } = await shopQueries.createInvite(shopId, body.email, caller.userId);
   const link = `${appOrigin()}/join/${token}`;
   const shopName = shop?.name ?? "a shop";
   await queueMail({

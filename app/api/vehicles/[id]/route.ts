@@ -1,27 +1,26 @@
 import { z } from "zod";
-import { db } from "@/lib/db";
 import { notFound } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
 import { photoStore } from "@/lib/photos/s3";
-import { deleteVehicle, updateVehicle, vehicleDetail } from "@/lib/server/garage";
+import { garageQueries } from "@/lib/server/garage";
 import { vehicleSchema } from "@/lib/validation/garage";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
 
 const params = z.object({ id: z.uuid() });
 
 export const GET = route({ access: GARAGE_ACCESS, params }, async ({ caller, params }) => {
-  const detail = await vehicleDetail(db, caller.userId, params.id);
+  const detail = await garageQueries.vehicleDetail(caller.userId, params.id);
   if (!detail) throw notFound("That vehicle");
   return detail;
 });
 
 export const PATCH = route({ access: GARAGE_ACCESS, params, body: vehicleSchema }, async ({ caller, params, body }) => {
-  const vehicle = await updateVehicle(db, caller.userId, params.id, body);
+  const vehicle = await garageQueries.updateVehicle(caller.userId, params.id, body);
   if (!vehicle) throw notFound("That vehicle");
   return { vehicle };
 });
 
 export const DELETE = route({ access: GARAGE_ACCESS, params }, async ({ caller, params }) => {
-  if (!(await deleteVehicle(db, photoStore(), caller.userId, params.id))) throw notFound("That vehicle");
+  if (!(await garageQueries.deleteVehicle(photoStore(), caller.userId, params.id))) throw notFound("That vehicle");
   return { ok: true };
 });

@@ -7,11 +7,10 @@ import { buttonClass } from "@/components/ui/Button";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { requirePageCaller } from "@/lib/auth/session";
 import { encodeComparison } from "@/lib/comparison/url";
-import { db } from "@/lib/db";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
 import { bothUnits, setupLine } from "@/lib/garage/format";
 import { setupFromQuery, setupQuery } from "@/lib/garage/links";
-import { checklistTicks, resolveChecklist } from "@/lib/server/checklists";
+import { checklistQueries } from "@/lib/server/checklists";
 import { marginMmParam } from "@/lib/validation/garage";
 import { ChecklistView } from "./ChecklistView";
 
@@ -26,7 +25,7 @@ export default async function ChecklistPage({ params, searchParams }: { params: 
   const rawComparison = first(sp.comparison);
   const comparisonId = z.uuid().safeParse(rawComparison).data;
   if (rawComparison !== undefined && !comparisonId) notFound();
-  const r = await resolveChecklist(db, caller.userId, id, { comparisonId, planned: setupFromQuery("p", sp), marginMm: marginMmParam.parse(first(sp.m)) });
+  const r = await checklistQueries.resolveChecklist(caller.userId, id, { comparisonId, planned: setupFromQuery("p", sp), marginMm: marginMmParam.parse(first(sp.m)) });
   if (!r.ok && r.reason !== "planned") notFound();
   if (!r.ok) {
     return (
@@ -40,7 +39,7 @@ export default async function ChecklistPage({ params, searchParams }: { params: 
     );
   }
   const { vehicle } = r.detail;
-  const ticked = await checklistTicks(db, r);
+  const ticked = await checklistQueries.checklistTicks(r);
   const marginNote = `Margin ${bothUnits(r.marginMm)}${r.marginMm === vehicle.clearanceMarginMm ? " (this vehicle's)" : " (tried instead of this vehicle's)"}.`;
   const backHref = r.comparison
     ? `/workspace?${encodeComparison(r.comparison.input)}&saved=${r.comparison.id}&v=${vehicle.id}`

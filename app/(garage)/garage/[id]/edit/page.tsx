@@ -3,9 +3,8 @@ import { notFound } from "next/navigation";
 import { z } from "zod";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { requirePageCaller } from "@/lib/auth/session";
-import { db } from "@/lib/db";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
-import { findVehicle, vehicleDto } from "@/lib/server/garage";
+import { garageQueries, vehicleDto } from "@/lib/server/garage";
 import { VehicleForm } from "../../_components/VehicleForm";
 
 export const metadata: Metadata = { title: "Edit vehicle" };
@@ -14,7 +13,7 @@ export default async function EditVehiclePage({ params }: { params: Promise<{ id
   const { id } = await params;
   const caller = await requirePageCaller(`/garage/${id}/edit`, GARAGE_ACCESS);
   if (!z.uuid().safeParse(id).success) notFound();
-  const row = await findVehicle(db, caller.userId, id);
+  const row = await garageQueries.findVehicle(caller.userId, id);
   if (!row) notFound();
   const vehicle = vehicleDto(row);
   return (

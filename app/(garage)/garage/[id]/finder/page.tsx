@@ -2,9 +2,8 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { z } from "zod";
 import { requirePageCaller } from "@/lib/auth/session";
-import { db } from "@/lib/db";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
-import { vehicleDetail } from "@/lib/server/garage";
+import { garageQueries } from "@/lib/server/garage";
 import { FinderPanel } from "./FinderPanel";
 
 export const metadata: Metadata = { title: "Fitment finder" };
@@ -13,7 +12,7 @@ export default async function FinderPage({ params }: { params: Promise<{ id: str
   const { id } = await params;
   const caller = await requirePageCaller(`/garage/${id}/finder`, GARAGE_ACCESS);
   if (!z.uuid().safeParse(id).success) notFound();
-  const detail = await vehicleDetail(db, caller.userId, id);
+  const detail = await garageQueries.vehicleDetail(caller.userId, id);
   if (!detail) notFound();
   return <FinderPanel vehicle={detail.vehicle} clearances={detail.clearances} />;
 }

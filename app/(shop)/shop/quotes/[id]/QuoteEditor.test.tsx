@@ -27,7 +27,7 @@ function detail(over: Partial<Detail["quote"]> = {}, lines = [line(1), line(2, {
       id: ID, shop_id: "s", number: 1042, customer_id: "c", vehicle_id: null, created_by: null, status: "draft", vehicle_description: "Test pickup", bolt_pattern: "6x5.5",
       current_tire: "265/70R17", current_wheel_diameter_in: 17, current_wheel_width_in: 8, current_wheel_offset_mm: 25, axle_ratio: null, hub_bore_mm: 108, tire_item_id: null,
       wheel_item_id: null, wheel_qty: 4, fitment: fit, discount_cents: 0, tax_rate_bp: 825, deposit_pct: 25, subtotal_cents: 13500, taxable_cents: 0, tax_cents: 0,
-      total_cents: 13500, deposit_cents: 3375, notes: "", public_token_hash: null, valid_until: null, created_at: "2026-12-01T10:00:00.000Z", updated_at: "2026-12-01T10:00:00.123Z", ...over,
+      total_cents: 13500, deposit_cents: 3375, notes: "", valid_until: null, created_at: "2026-12-01T10:00:00.000Z", updated_at: "2026-12-01T10:00:00.123Z", ...over,
     },
     lines,
     events: [],

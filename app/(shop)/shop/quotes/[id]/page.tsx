@@ -1,10 +1,9 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { requirePageCaller } from "@/lib/auth/session";
-import { db } from "@/lib/db";
 import { HttpError } from "@/lib/http/errors";
-import { getQuoteDetail, quoteScopeOf } from "@/lib/server/quotes";
-import { getShop } from "@/lib/server/shops";
+import { quoteQueries, quoteScopeOf } from "@/lib/server/quotes";
+import { shopQueries } from "@/lib/server/shops";
 import { QuoteEditor } from "./QuoteEditor";
 
 export const metadata: Metadata = { title: "Quote" };
@@ -13,11 +12,11 @@ export default async function QuotePage({ params }: { params: Promise<{ id: stri
   const { id } = await params;
   const caller = await requirePageCaller(`/shop/quotes/${id}`, ["shop_staff", "shop_owner"]);
   if (!/^[0-9a-f-]{36}$/i.test(id)) notFound();
-  const detail = await getQuoteDetail(db, quoteScopeOf(caller), id).catch((e) => {
+  const detail = await quoteQueries.getQuoteDetail(quoteScopeOf(caller), id).catch((e) => {
     if (e instanceof HttpError && e.status === 404) return null;
     throw e;
   });
   if (!detail) notFound();
-  const shop = await getShop(db, detail.quote.shop_id);
+  const shop = await shopQueries.getShop(detail.quote.shop_id);
   return <QuoteEditor initial={JSON.parse(JSON.stringify(detail))} labourRateCents={shop?.labour_rate_cents ?? 0} />;
 }

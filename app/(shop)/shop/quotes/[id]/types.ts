@@ -6,7 +6,7 @@ type J<T> = { [K in keyof T]: T[K] extends Date ? string : T[K] extends Date | n
 
 /** The quote detail the editor receives from the page and from every mutation. */
 export interface Detail {
-  quote: J<QuoteRow>;
+  quote: J<Omit<QuoteRow, "public_token_hash">>;
   lines: J<QuoteLineRow>[];
   events: J<QuoteEventRow>[];
   customer: { id: string; name: string; phone: string; email: string };

@@ -1,12 +1,11 @@
-import { db } from "@/lib/db";
 import { clientAddress } from "@/lib/auth/clientAddress";
 import { route } from "@/lib/http/route";
 import { appOrigin, queueMail } from "@/lib/mail";
 import { afterResponse } from "@/lib/server/afterResponse";
 import { RATE_LIMITS } from "@/lib/server/limits";
-import { RESET_TTL_MINUTES, issueResetToken } from "@/lib/server/passwordResets";
-import { consumeOrRefuse, consumeQuietly } from "@/lib/server/rateLimit";
-import { findUserByEmail } from "@/lib/server/users";
+import { RESET_TTL_MINUTES, passwordResetQueries } from "@/lib/server/passwordResets";
+import { rateLimitQueries } from "@/lib/server/rateLimit";
+import { userQueries } from "@/lib/server/users";
 import { forgotPasswordSchema } from "@/lib/validation/account";
 
 const ANSWER = {
@@ -20,7 +19,7 @@ const ANSWER = {
  * counts every request alike, so it tells nothing about accounts either.
  */
 export const POST = route({ access: "public", body: forgotPasswordSchema }, async ({ req, body }) => {
-  await consumeOrRefuse(db, [{ spec: RATE_LIMITS.forgotPerAddress, key: clientAddress(req.headers) }], "Too many reset requests from your network.");
+  await rateLimitQueries.consumeOrRefuse([{ spec: RATE_LIMITS.forgotPerAddress, key: clientAddress(req.headers) }], "Too many reset requests from your network.");
   const email = body.email.trim().toLowerCase();
   afterResponse("password reset mail", () => mailResetLink(email));
   return ANSWER;
@@ -28,11 +27,11 @@ export const POST = route({ access: "public", body: forgotPasswordSchema }, asyn
 
 /** At most one mail per account every 2 minutes and 5 a day (a flood would bury the real one). */
 async function mailResetLink(email: string): Promise<void> {
-  if (!(await consumeQuietly(db, RATE_LIMITS.forgotMailSpacing, email))) return;
-  if (!(await consumeQuietly(db, RATE_LIMITS.forgotMailPerDay, email))) return;
-  const user = await findUserByEmail(db, email);
+  if (!(await rateLimitQueries.consumeQuietly(RATE_LIMITS.forgotMailSpacing, email))) return;
+  if (!(await rateLimitQueries.consumeQuietly(RATE_LIMITS.forgotMailPerDay, email))) return;
+  const user = await userQueries.findUserByEmail(email);
   if (!user) return;
-  const token = await issueResetToken(db, user.id);
+  const token = await passwordResetQueries.issueResetToken(user.id);
   const link = `${appOrigin()}/reset-password?token=${token}`;
   await queueMail({
     to: user.email,

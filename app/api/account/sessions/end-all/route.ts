@@ -1,13 +1,12 @@
 import { z } from "zod";
-import { db } from "@/lib/db";
 import { route } from "@/lib/http/route";
-import { endAllSessions } from "@/lib/server/sessions";
+import { sessionQueries } from "@/lib/server/sessions";
 
 // The explicit confirmation keeps a stray or replayed empty POST from signing a person out everywhere.
 const body = z.object({ confirm: z.literal(true, { error: "Confirm that every session should end." }) });
 
 /** "Sign out everywhere": ends every session of the caller, on every device, this one included. */
 export const POST = route({ access: "signed-in", body }, async ({ caller }) => {
-  await endAllSessions(db, caller.userId);
+  await sessionQueries.endAllSessions(caller.userId);
   return { ok: true };
 });

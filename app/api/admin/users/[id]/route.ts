@@ -1,8 +1,8 @@
 import { z } from "zod";
-import { db } from "@/lib/db";
 import { HttpError, notFound } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
-import { findUserById, setUserRole } from "@/lib/server/users";
+import { shopQueries } from "@/lib/server/shops";
+import { userQueries } from "@/lib/server/users";
 import { roleChangeSchema } from "@/lib/validation/account";
 
 const params = z.object({ id: z.uuid() });
@@ -12,10 +12,10 @@ export const PATCH = route({ access: ["admin"], params, body: roleChangeSchema }
     throw new HttpError(422, "You cannot remove your own admin role.", { role: ["Ask another admin to change your role."] });
   }
   if (body.shopId) {
-    const shop = await db("shops").where({ id: body.shopId }).first();
+    const shop = await shopQueries.getShop(body.shopId);
     if (!shop) throw new HttpError(422, "Some fields need attention.", { shopId: ["That shop does not exist."] });
   }
-  if (!(await findUserById(db, params.id))) throw notFound("That user");
-  const user = await setUserRole(db, params.id, body.role, body.shopId ?? null);
+  if (!(await userQueries.findUserById(params.id))) throw notFound("That user");
+  const user = await userQueries.setUserRole(params.id, body.role, body.shopId ?? null);
   return { user };
 });

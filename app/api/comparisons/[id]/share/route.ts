@@ -1,17 +1,16 @@
-import { db } from "@/lib/db";
 import { notFound } from "@/lib/http/errors";
 import { json, route } from "@/lib/http/route";
-import { createShare, revokeShare } from "@/lib/server/comparisons";
+import { comparisonQueries } from "@/lib/server/comparisons";
 import { RATE_LIMITS } from "@/lib/server/limits";
-import { consumeOrRefuse } from "@/lib/server/rateLimit";
+import { rateLimitQueries } from "@/lib/server/rateLimit";
 import { dropCachedShare } from "@/lib/server/shareCache";
 import { comparisonIdParams } from "@/lib/validation/comparisons";
 
 /** Makes a new public link /s/<slug>; a live one is revoked (and stays dead). */
 export const POST = route({ access: "signed-in", params: comparisonIdParams }, async ({ caller, params }) => {
   // Every new link is a public page (and its Open Graph image): a cap per user stops link farming.
-  await consumeOrRefuse(db, [{ spec: RATE_LIMITS.shareLinks, key: caller.userId }], "Too many new share links.");
-  const share = await createShare(db, caller.userId, params.id);
+  await rateLimitQueries.consumeOrRefuse([{ spec: RATE_LIMITS.shareLinks, key: caller.userId }], "Too many new share links.");
+  const share = await comparisonQueries.createShare(caller.userId, params.id);
   if (!share) throw notFound("That comparison");
   await dropCachedShare(share.replaced);
   return json({ share: { slug: share.slug, createdAt: share.createdAt, path: `/s/${share.slug}` }, replaced: share.replaced }, 201);
@@ -19,7 +18,7 @@ export const POST = route({ access: "signed-in", params: comparisonIdParams }, a
 
 /** Revokes the live link: /s/<slug> answers 404 from then on. */
 export const DELETE = route({ access: "signed-in", params: comparisonIdParams }, async ({ caller, params }) => {
-  const result = await revokeShare(db, caller.userId, params.id);
+  const result = await comparisonQueries.revokeShare(caller.userId, params.id);
   if (!result) throw notFound("That comparison");
   await dropCachedShare(result.revoked);
   return { revoked: result.revoked !== null };

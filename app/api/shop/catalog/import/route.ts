@@ -1,10 +1,9 @@
 import { z } from "zod";
 import { CSV_MAX_BYTES, decodeCsvBytes, parseCatalogCsv } from "@/lib/catalog/csv";
-import { db } from "@/lib/db";
 import { readCappedBytes } from "@/lib/http/body";
 import { HttpError } from "@/lib/http/errors";
 import { json, route } from "@/lib/http/route";
-import { stageImport } from "@/lib/server/catalog";
+import { catalogQueries } from "@/lib/server/catalog";
 import { SHOP_OWNER, shopIdOf } from "@/lib/server/shops";
 
 const MAX_ERRORS_SHOWN = 500;
@@ -22,7 +21,7 @@ export const POST = route({ access: SHOP_OWNER, query: FILENAME }, async ({ call
   const report = parseCatalogCsv(decoded.text);
   if (report.fileErrors.length) return json({ error: report.fileErrors.join(" "), fileErrors: report.fileErrors }, 422);
   if (report.total === 0) throw new HttpError(422, "The file has a header row but no items.");
-  const staged = report.items.length ? await stageImport(db, shopIdOf(caller), caller.userId, query.filename ?? "", report) : null;
+  const staged = report.items.length ? await catalogQueries.stageImport(shopIdOf(caller), caller.userId, query.filename ?? "", report) : null;
   return {
     importId: staged?.id ?? null,
     total: report.total,

@@ -1,13 +1,12 @@
 import { z } from "zod";
-import { db } from "@/lib/db";
 import { notFound } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
-import { getCustomer, listVehicles } from "@/lib/server/customers";
+import { customerQueries } from "@/lib/server/customers";
 import { SHOP_ANY, shopIdOf } from "@/lib/server/shops";
 
 export const GET = route({ access: SHOP_ANY, params: z.object({ id: z.uuid() }) }, async ({ caller, params }) => {
   const shopId = shopIdOf(caller);
-  const customer = await getCustomer(db, shopId, params.id);
+  const customer = await customerQueries.getCustomer(shopId, params.id);
   if (!customer) throw notFound("That customer");
-  return { customer, vehicles: await listVehicles(db, shopId, customer.id) };
+  return { customer, vehicles: await customerQueries.listVehicles(shopId, customer.id) };
 });

@@ -1,19 +1,14 @@
-import { db } from "@/lib/db";
-import type { CatalogItemRow } from "@/lib/db/types";
 import { route } from "@/lib/http/route";
 import { rankPicks } from "@/lib/quotes/fitment";
+import { catalogQueries } from "@/lib/server/catalog";
 import { SHOP_ANY, shopIdOf } from "@/lib/server/shops";
 import { resolveVehicle, vehicleSchema } from "@/lib/validation/quotes";
-
-const ITEM_COLUMNS = ["id", "sku", "description", "price_cents", "qty_on_hand", "tire_size", "wheel_diameter_in", "wheel_width_in", "wheel_offset_mm", "bolt_pattern", "center_bore_mm", "beadlock"] as const;
 
 /** The catalog's tire × wheel pairs that mount on this vehicle (drilling and hub bore), ranked by the engine's comparison. */
 export const POST = route({ access: SHOP_ANY, body: vehicleSchema }, async ({ caller, body }) => {
   const shopId = shopIdOf(caller);
   const v = resolveVehicle(body);
-  const wheels = (await db<CatalogItemRow>("catalog_items").where({ shop_id: shopId, kind: "wheel" }).select(ITEM_COLUMNS)) as CatalogItemRow[];
-  const diameters = [...new Set(wheels.map((w) => w.wheel_diameter_in!))];
-  const tires = (await db<CatalogItemRow>("catalog_items").where({ shop_id: shopId, kind: "tire" }).whereIn("tire_rim_in", diameters).select(ITEM_COLUMNS)) as CatalogItemRow[];
+  const { wheels, tires } = await catalogQueries.fitmentStock(shopId);
   const ranked = rankPicks(
     { boltPattern: v.boltPattern, tireSize: v.tireSize, wheel: v.wheel, axleRatio: v.axleRatio, hubBoreMm: v.hubBoreMm },
     tires.map((t) => ({ id: t.id, size: t.tire_size! })),

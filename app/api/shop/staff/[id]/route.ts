@@ -1,12 +1,11 @@
 import { z } from "zod";
-import { db } from "@/lib/db";
 import { HttpError, notFound } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
-import { SHOP_OWNER, removeStaff, shopIdOf } from "@/lib/server/shops";
+import { SHOP_OWNER, shopIdOf, shopQueries } from "@/lib/server/shops";
 
 /** Removes a staff member from the caller's shop; the account stays as a member. */
 export const DELETE = route({ access: SHOP_OWNER, params: z.object({ id: z.uuid() }) }, async ({ caller, params }) => {
   if (params.id === caller.userId) throw new HttpError(422, "You cannot remove yourself from your own shop.");
-  if (!(await removeStaff(db, shopIdOf(caller), params.id))) throw notFound("That staff member");
+  if (!(await shopQueries.removeStaff(shopIdOf(caller), params.id))) throw notFound("That staff member");
   return { ok: true };
 });

@@ -1,10 +1,9 @@
 import { z } from "zod";
-import { db } from "@/lib/db";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
 import { setupFromQuery } from "@/lib/garage/links";
 import { HttpError, notFound } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
-import { type ResolvedChecklist, checklistTicks, resolveChecklist, saveChecklistTicks } from "@/lib/server/checklists";
+import { checklistQueries, type ResolvedChecklist } from "@/lib/server/checklists";
 import { checklistUpdateSchema, marginMmParam } from "@/lib/validation/garage";
 
 const params = z.object({ id: z.uuid() });
@@ -25,15 +24,15 @@ export const GET = route({ access: GARAGE_ACCESS, params }, async ({ caller, par
   const q = req.nextUrl.searchParams;
   const comparisonId = z.uuid().safeParse(q.get("comparison")).data;
   if (q.get("comparison") !== null && !comparisonId) throw new HttpError(400, "comparison must be a saved comparison's id.");
-  const r = resolved(await resolveChecklist(db, caller.userId, params.id, { comparisonId, planned: setupFromQuery("p", q), marginMm: marginMmParam.parse(q.get("m") ?? undefined) }));
-  return { items: r.checklist.items, ticked: await checklistTicks(db, r), marginMm: r.marginMm, comparisonId: r.comparison?.id ?? null };
+  const r = resolved(await checklistQueries.resolveChecklist(caller.userId, params.id, { comparisonId, planned: setupFromQuery("p", q), marginMm: marginMmParam.parse(q.get("m") ?? undefined) }));
+  return { items: r.checklist.items, ticked: await checklistQueries.checklistTicks(r), marginMm: r.marginMm, comparisonId: r.comparison?.id ?? null };
 });
 
 /** Saves which items are ticked. Ids must be items of this checklist. */
 export const PUT = route({ access: GARAGE_ACCESS, params, body: checklistUpdateSchema }, async ({ caller, params, body }) => {
-  const r = resolved(await resolveChecklist(db, caller.userId, params.id, body));
+  const r = resolved(await checklistQueries.resolveChecklist(caller.userId, params.id, body));
   const known = new Set(r.checklist.items.map((i) => i.id));
   const unknown = body.ticked.filter((t) => !known.has(t));
   if (unknown.length) throw new HttpError(422, "Some ticked items are not on this checklist.", { ticked: [`Not on this checklist: ${unknown.slice(0, 5).join(", ")}`] });
-  return { ticked: await saveChecklistTicks(db, r, body.ticked) };
+  return { ticked: await checklistQueries.saveChecklistTicks(r, body.ticked) };
 });

@@ -1,8 +1,7 @@
 import { z } from "zod";
-import { db } from "@/lib/db";
 import { notFound } from "@/lib/http/errors";
 import { json, route } from "@/lib/http/route";
-import { addClearance, findVehicle } from "@/lib/server/garage";
+import { garageQueries } from "@/lib/server/garage";
 import { clearanceSchema } from "@/lib/validation/garage";
 import type { SetupValues } from "@/lib/validation/setup";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
@@ -10,8 +9,8 @@ import { GARAGE_ACCESS } from "@/lib/garage/access";
 const params = z.object({ id: z.uuid() });
 
 export const POST = route({ access: GARAGE_ACCESS, params, body: clearanceSchema }, async ({ caller, params, body }) => {
-  const vehicle = await findVehicle(db, caller.userId, params.id);
+  const vehicle = await garageQueries.findVehicle(caller.userId, params.id);
   if (!vehicle) throw notFound("That vehicle");
-  const clearance = await addClearance(db, vehicle.id, body, body.measuredSetup ?? (vehicle.current_setup as SetupValues));
+  const clearance = await garageQueries.addClearance(vehicle.id, body, body.measuredSetup ?? (vehicle.current_setup as SetupValues));
   return json({ clearance }, 201);
 });

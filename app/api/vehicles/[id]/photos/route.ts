@@ -1,11 +1,11 @@
 import { z } from "zod";
-import { db, isDatabaseUnavailable } from "@/lib/db";
+import { isDatabaseUnavailable } from "@/lib/db";
 import { readCappedBytes } from "@/lib/http/body";
 import { HttpError, notFound } from "@/lib/http/errors";
 import { json, route } from "@/lib/http/route";
 import { ImageRejected, MAX_PHOTO_BYTES, processImage, safeDisplayName } from "@/lib/photos/image";
 import { photoStore } from "@/lib/photos/s3";
-import { addPhoto, clearanceBelongs, findVehicle } from "@/lib/server/garage";
+import { garageQueries } from "@/lib/server/garage";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
 
 const params = z.object({ id: z.uuid() });
@@ -22,7 +22,7 @@ const tooBig = () => new HttpError(413, TOO_BIG);
 export const POST = route({ access: GARAGE_ACCESS, params }, async ({ caller, params, req }) => {
   const declared = Number(req.headers.get("content-length") ?? "0");
   if (declared > MAX_PHOTO_BYTES + FORM_OVERHEAD) throw tooBig();
-  const vehicle = await findVehicle(db, caller.userId, params.id);
+  const vehicle = await garageQueries.findVehicle(caller.userId, params.id);
   if (!vehicle) throw notFound("That vehicle");
   if (!(req.headers.get("content-type") ?? "").toLowerCase().startsWith("multipart/form-data")) {
     throw new HttpError(415, "Send the photo as multipart/form-data with a field named file.");
@@ -47,7 +47,7 @@ export const POST = route({ access: GARAGE_ACCESS, params }, async ({ caller, pa
   const rawClearance = form.get("clearanceId");
   let clearanceId: string | null = null;
   if (typeof rawClearance === "string" && rawClearance !== "") {
-    if (!z.uuid().safeParse(rawClearance).success || !(await clearanceBelongs(db, vehicle.id, rawClearance))) throw notFound("That clearance point");
+    if (!z.uuid().safeParse(rawClearance).success || !(await garageQueries.clearanceBelongs(vehicle.id, rawClearance))) throw notFound("That clearance point");
     clearanceId = rawClearance;
   }
   let image;
@@ -58,7 +58,7 @@ export const POST = route({ access: GARAGE_ACCESS, params }, async ({ caller, pa
     throw e;
   }
   try {
-    const photo = await addPhoto(db, photoStore(), { vehicleId: vehicle.id, clearanceId, image, name });
+    const photo = await garageQueries.addPhoto(photoStore(), { vehicleId: vehicle.id, clearanceId, image, name });
     return json({ photo }, 201);
   } catch (e) {
     if (e instanceof HttpError || isDatabaseUnavailable(e)) throw e;

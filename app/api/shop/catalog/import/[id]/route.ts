@@ -1,8 +1,7 @@
 import { z } from "zod";
-import { db } from "@/lib/db";
 import { HttpError, notFound } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
-import { commitImport, findStagedImport } from "@/lib/server/catalog";
+import { catalogQueries } from "@/lib/server/catalog";
 import { SHOP_OWNER, shopIdOf } from "@/lib/server/shops";
 
 /**
@@ -11,7 +10,7 @@ import { SHOP_OWNER, shopIdOf } from "@/lib/server/shops";
  */
 export const POST = route({ access: SHOP_OWNER, params: z.object({ id: z.uuid() }) }, async ({ caller, params }) => {
   const shopId = shopIdOf(caller);
-  const staged = await findStagedImport(db, shopId, params.id);
+  const staged = await catalogQueries.findStagedImport(shopId, params.id);
   if (!staged) throw notFound("That import preview");
   if (staged.status !== "staged") throw new HttpError(409, "This import was already confirmed.");
   const enc = new TextEncoder();
@@ -19,7 +18,7 @@ export const POST = route({ access: SHOP_OWNER, params: z.object({ id: z.uuid() 
     async start(controller) {
       const line = (o: unknown) => controller.enqueue(enc.encode(JSON.stringify(o) + "\n"));
       try {
-        const result = await commitImport(db, shopId, params.id, (done, total) => line({ done, total }));
+        const result = await catalogQueries.commitImport(shopId, params.id, (done, total) => line({ done, total }));
         line(result ?? { error: "This import was already confirmed." });
       } catch (e) {
         console.error("catalog import failed, rolled back:", e);

@@ -1,8 +1,7 @@
 import { z } from "zod";
-import { db } from "@/lib/db";
 import { route } from "@/lib/http/route";
 import { quoteScopeOf } from "@/lib/server/quotes";
-import { sendQuote } from "@/lib/server/quoteSend";
+import { quoteSendQueries } from "@/lib/server/quoteSend";
 import { SHOP_ANY } from "@/lib/server/shops";
 import { sendQuoteSchema } from "@/lib/validation/quotes";
 
@@ -11,5 +10,5 @@ import { sendQuoteSchema } from "@/lib/validation/quotes";
  * customer. With `seenUpdatedAt` a quote changed since the sender loaded it is refused (409).
  */
 export const POST = route({ access: SHOP_ANY, params: z.object({ id: z.uuid() }), body: sendQuoteSchema }, async ({ caller, params, body }) => {
-  return sendQuote(db, quoteScopeOf(caller), params.id, { userId: caller.userId, label: caller.name || caller.email }, body.seenUpdatedAt);
+  return quoteSendQueries.sendQuote(quoteScopeOf(caller), params.id, { userId: caller.userId, label: caller.name || caller.email }, body.seenUpdatedAt);
 });

@@ -1,13 +1,12 @@
 import { z } from "zod";
-import { db } from "@/lib/db";
 import { route } from "@/lib/http/route";
-import { getQuoteDetail, quoteScopeOf, staffTransition } from "@/lib/server/quotes";
+import { quoteQueries, quoteScopeOf } from "@/lib/server/quotes";
 import { SHOP_ANY } from "@/lib/server/shops";
 import { quoteStatusSchema } from "@/lib/validation/quotes";
 
 /** Staff moves: back to draft, declined (the customer said no), installed (after the deposit). */
 export const POST = route({ access: SHOP_ANY, params: z.object({ id: z.uuid() }), body: quoteStatusSchema }, async ({ caller, params, body }) => {
   const scope = quoteScopeOf(caller);
-  await staffTransition(db, scope, params.id, body.to, { userId: caller.userId, label: caller.name || caller.email }, body.note);
-  return getQuoteDetail(db, scope, params.id);
+  await quoteQueries.staffTransition(scope, params.id, body.to, { userId: caller.userId, label: caller.name || caller.email }, body.note);
+  return quoteQueries.getQuoteDetail(scope, params.id);
 });
