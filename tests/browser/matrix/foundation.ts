@@ -6,6 +6,14 @@ export const cases: MatrixCase[] = [
   { route: "/api/health", method: "GET", path: "/api/health", expect: publicRoute(200) },
   { route: "/api/health/live", method: "GET", path: "/api/health/live", expect: publicRoute(200) },
   { route: "/api/health/ready", method: "GET", path: "/api/health/ready", expect: publicRoute(200) },
+  {
+    route: "/api/internal/share-purge",
+    method: "POST",
+    path: "/api/internal/share-purge",
+    body: "*",
+    expect: publicRoute(404),
+    note: "only the server itself, holding its per-process token, gets past the 404",
+  },
   { route: "/api/me", method: "GET", path: "/api/me", expect: signedIn(200) },
   {
     route: "/api/account/sessions/end-all",
