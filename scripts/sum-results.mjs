@@ -14,8 +14,9 @@ for (const f of readdirSync(dir).sort()) {
     rows.push(`${r.suite}: ${r.passed} passed, ${r.failed} failed`);
   } else if (f.startsWith("vitest") && f.endsWith(".json")) {
     const r = JSON.parse(readFileSync(p, "utf8"));
-    // A suite file that failed to load has no tests in it: count it as one failure.
-    const broken = (r.testResults ?? []).filter((t) => t.status === "failed" && (t.assertionResults ?? []).length === 0).length;
+    // A suite file that failed outside its tests (it did not load, or a beforeAll threw and its
+    // tests were skipped) has no failed test in it: count it as one failure.
+    const broken = (r.testResults ?? []).filter((t) => t.status === "failed" && !(t.assertionResults ?? []).some((a) => a.status === "failed")).length;
     passed += r.numPassedTests; failed += r.numFailedTests + broken;
     rows.push(`${f.replace(/\.json$/, "")}: ${r.numPassedTests} passed, ${r.numFailedTests + broken} failed, ${r.numPendingTests} skipped`);
   }

@@ -35,12 +35,14 @@ beforeAll(async () => {
   second.stdout!.on("data", (c: Buffer) => (output += c.toString()));
   second.stderr!.on("data", (c: Buffer) => (output += c.toString()));
   // Ready when it answers and its purge listener is in place (a NOTIFY sent before is not heard).
-  await expect
-    .poll(async () => (await fetch(`${B}/api/health/live`).then((r) => r.status).catch(() => 0)) === 200 && /share purge listener is listening/.test(output), {
-      timeout: 60_000,
-      interval: 250,
-    })
-    .toBe(true);
+  // (A plain loop: expect.poll only runs inside a test.)
+  const deadline = Date.now() + 60_000;
+  for (;;) {
+    const live = await fetch(`${B}/api/health/live`).then((r) => r.status).catch(() => 0);
+    if (live === 200 && /share purge listener is listening/.test(output)) break;
+    if (Date.now() > deadline) throw new Error(`the second server did not get ready in 60 s:\n${output.slice(-2000)}`);
+    await new Promise((r) => setTimeout(r, 250));
+  }
 });
 
 afterAll(async () => {
