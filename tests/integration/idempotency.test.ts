@@ -1,5 +1,5 @@
 import { createHash } from "node:crypto";
-import { mkdtempSync, rmSync } from "node:fs";
+import { mkdtempSync, readdirSync, rmSync, utimesSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { ListObjectsV2Command } from "@aws-sdk/client-s3";
@@ -8,7 +8,7 @@ import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { startFakeS3 } from "@/scripts/services/fake-s3";
 import { makeS3Client, s3PhotoStore, setPhotoStore, type PhotoStore, type S3Settings } from "@/lib/photos/s3";
 import { rebuild, testDb } from "./support/db";
-import { startTestBoss, stopBoss } from "./support/jobs";
+import { drainQueue, startTestBoss, stopBoss } from "./support/jobs";
 import { ctx, req } from "./support/requests";
 
 const session = vi.hoisted(() => ({ current: null as unknown }));
@@ -47,6 +47,7 @@ afterAll(async () => {
 const vehicles = await import("@/app/api/vehicles/route");
 const uploads = await import("@/app/api/vehicles/[id]/photos/route");
 const photo = await import("@/app/api/photos/[id]/route");
+const { QUEUES, getBoss } = await import("@/lib/jobs/boss");
 
 const SETUP = { tire: "265/70R17", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 }, spacerMm: 0 };
 const VEHICLE = {
@@ -146,10 +147,19 @@ async function objectKeys(): Promise<string[]> {
   return (r.Contents ?? []).map((o) => o.Key!).sort();
 }
 
+/** Backdates an object in the fake store (its LastModified is the file's mtime). */
+function age(key: string, minutes: number) {
+  const parts = key.split("/");
+  const folder = join(dir, BUCKET, ...parts.slice(0, -1));
+  const file = readdirSync(folder).find((f) => f === `${parts.at(-1)}._S3rver_object`);
+  if (!file) throw new Error(`no stored object for ${key}`);
+  const t = new Date(Date.now() - minutes * 60_000);
+  utimesSync(join(folder, file), t, t);
+}
+
 describe("photo uploads", () => {
   let vehicleId: string;
   let keptKeys: string[] = [];
-
 
   it("replays an upload sent again with the same key and bytes: one row, one pair of objects", async () => {
     as(ADA);
@@ -165,6 +175,21 @@ describe("photo uploads", () => {
     expect(await db("vehicle_photos").where({ vehicle_id: vehicleId }).count()).toEqual([{ count: "1" }]);
     keptKeys = await objectKeys();
     expect(keptKeys).toHaveLength(2);
+  });
+
+  it("the sweep job deletes an old object no row points to, keeps a fresh one and every object that has its row", async () => {
+    const image = await jpeg();
+    const oldOrphan = `vehicles/${vehicleId}/e1000000-0000-4000-8000-0000000000b1.jpg`;
+    const freshOrphan = `vehicles/${vehicleId}/e1000000-0000-4000-8000-0000000000b2.jpg`;
+    await store.put(oldOrphan, image, "image/jpeg");
+    await store.put(freshOrphan, image, "image/jpeg");
+    age(oldOrphan, 120);
+    for (const k of keptKeys) age(k, 120); // old, but the photo's row points to them
+    await (await getBoss()).send(QUEUES.photoSweep.name, {});
+    const run = await drainQueue(QUEUES.photoSweep.name);
+    expect(run.failed).toEqual([]);
+    expect(run.completed).toHaveLength(1);
+    expect(await objectKeys()).toEqual([...keptKeys, freshOrphan].sort());
   });
 
   it("deleting the photo still deletes its objects", async () => {
