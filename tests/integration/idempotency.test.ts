@@ -107,6 +107,16 @@ describe("Idempotency-Key on creates", () => {
     expect(await vehicleCount()).toBe(before + 1);
   });
 
+  it("treats a key past its 24 hours as new", async () => {
+    as(ADA);
+    const before = await vehicleCount();
+    await db("idempotency_keys").where({ user_id: ADA.id, key: "veh-1" }).update({ expires_at: db.raw("now() - interval '1 second'") });
+    const res = await createVehicle({ ...VEHICLE, name: "Next day truck" }, "veh-1");
+    expect(res.status).toBe(201);
+    expect(res.headers.get("idempotent-replayed")).toBeNull();
+    expect(await vehicleCount()).toBe(before + 1);
+  });
+
   it("keeps each caller's keys apart: another person's same key creates their own", async () => {
     as(BO);
     const res = await createVehicle(VEHICLE, "veh-1");
