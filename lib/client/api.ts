@@ -11,13 +11,28 @@ export class ApiError extends Error {
   }
 }
 
-/** fetch + JSON both ways; a non-2xx answer becomes an ApiError carrying the field errors. */
-export async function api<T>(url: string, init: { method?: string; body?: unknown } = {}): Promise<T> {
+/**
+ * A key for one user action that creates something: the create routes run a request with the
+ * same key at most once (lib/http/idempotency.ts), so a retry after a lost answer — the same
+ * key, the same body — gets the first answer back instead of a second copy.
+ */
+export const newIdempotencyKey = (): string => crypto.randomUUID();
+
+/**
+ * fetch + JSON both ways; a non-2xx answer becomes an ApiError carrying the field errors. Every
+ * POST carries an Idempotency-Key (`init.idempotencyKey` to reuse one on a retry of the same
+ * action); routes that create nothing ignore it.
+ */
+export async function api<T>(url: string, init: { method?: string; body?: unknown; idempotencyKey?: string } = {}): Promise<T> {
   let res: Response;
+  const method = init.method ?? (init.body === undefined ? "GET" : "POST");
+  const headers: Record<string, string> = {};
+  if (init.body !== undefined) headers["Content-Type"] = "application/json";
+  if (method === "POST") headers["Idempotency-Key"] = init.idempotencyKey ?? newIdempotencyKey();
   try {
     res = await fetch(url, {
-      method: init.method ?? (init.body === undefined ? "GET" : "POST"),
-      headers: init.body === undefined ? undefined : { "Content-Type": "application/json" },
+      method,
+      headers: Object.keys(headers).length ? headers : undefined,
       body: init.body === undefined ? undefined : JSON.stringify(init.body),
     });
   } catch {

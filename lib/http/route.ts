@@ -1,6 +1,6 @@
 import "server-only";
 import { randomUUID } from "node:crypto";
-import { NextResponse, type NextRequest } from "next/server";
+import { NextRequest, NextResponse } from "next/server";
 import { z } from "zod";
 import { isDatabaseUnavailable } from "@/lib/db";
 import { isDependencyUnavailable } from "@/lib/http/dependency";
@@ -8,6 +8,7 @@ import { currentRequestId, log, noteUser } from "@/lib/log";
 import { type Access, type Caller, currentCaller, requireCaller } from "@/lib/auth/session";
 import { FitmentInputError } from "@/lib/fitment";
 import { readCappedBytes } from "./body";
+import { bodyHash, idempotencyKeyOf, runOnce } from "./idempotency";
 import { assertNoNul } from "./nul";
 import { assertSameOrigin } from "./origin";
 import { HttpError, type IssueLike, fallbackMessage, fieldPlace, withRows } from "./errors";
@@ -20,6 +21,14 @@ interface Spec<B extends z.ZodType | undefined, Q extends z.ZodType | undefined,
   query?: Q;
   params?: P;
   maxBytes?: number;
+  /** The 413 message when a body passes maxBytes; the route's own wording (e.g. "That file is larger than 10 MB"). */
+  tooLarge?: string;
+  /**
+   * A create: an `Idempotency-Key` header makes a retry replay the first answer instead of
+   * creating again (lib/http/idempotency.ts). The key is checked with the input; the body it
+   * is tied to is the raw bytes, so a route that reads `req` itself (multipart) is covered too.
+   */
+  idempotent?: boolean;
 }
 
 type Out<T> = T extends z.ZodType ? z.infer<T> : undefined;
@@ -62,11 +71,15 @@ const NOT_JSON = "Send JSON with Content-Type: application/json.";
  * text/plain, which a page on another site can send without asking) is refused with 415; an
  * empty body without a Content-Type reads as `{}`.
  */
-async function readJson(req: NextRequest, maxBytes: number): Promise<unknown> {
+async function readJson(req: NextRequest, maxBytes: number, tooLargeMessage: string): Promise<{ value: unknown; bytes: Uint8Array }> {
   const contentType = req.headers.get("content-type");
   if (contentType !== null && !isJsonType(contentType)) throw new HttpError(415, NOT_JSON);
-  const bytes = await readCappedBytes(req, maxBytes, tooLarge(maxBytes));
+  const bytes = await readCappedBytes(req, maxBytes, tooLargeMessage);
   if (bytes.byteLength > 0 && contentType === null) throw new HttpError(415, NOT_JSON);
+  return { value: parseJson(bytes), bytes };
+}
+
+function parseJson(bytes: Uint8Array): unknown {
   let text: string;
   try {
     text = new TextDecoder("utf-8", { fatal: true }).decode(bytes);
@@ -112,6 +125,8 @@ export function route<
       assertSameOrigin(req);
       const caller = spec.access === "public" ? await currentCaller().catch(() => null) : await requireCaller(spec.access);
       noteUser(caller?.userId);
+      // Creates here are all signed-in; a key is scoped to its caller, so without one it is ignored.
+      const idemKey = spec.idempotent && caller ? idempotencyKeyOf(req) : null;
       const rawParams = context?.params ? await context.params : {};
       assertNoNul(rawParams, 400);
       const params = spec.params ? parse(spec.params, rawParams, 404) : undefined;
@@ -119,12 +134,27 @@ export function route<
       assertNoNul(rawQuery, 400);
       const query = spec.query ? parse(spec.query, rawQuery, 400) : undefined;
       const hasBody = !["GET", "HEAD", "DELETE"].includes(req.method);
-      const rawBody = spec.body && hasBody ? await readJson(req, spec.maxBytes ?? DEFAULT_MAX_BYTES) : undefined;
+      const maxBytes = spec.maxBytes ?? DEFAULT_MAX_BYTES;
+      const tooLargeMessage = spec.tooLarge ?? tooLarge(maxBytes);
+      const read = spec.body && hasBody ? await readJson(req, maxBytes, tooLargeMessage) : undefined;
+      const rawBody = read?.value;
       assertNoNul(rawBody, 422);
       const body = spec.body && hasBody ? parse(spec.body, rawBody, 422) : undefined;
-      const result = await handler({ req, caller, body, query, params } as Ctx<Out<B>, Out<Q>, Out<P>, A>);
-      if (result instanceof Response) return result;
-      return json(result ?? { ok: true });
+      let handlerReq = req;
+      let bytes = read?.bytes;
+      if (idemKey !== null && bytes === undefined) {
+        // The handler reads the body itself (multipart): read it here under the same cap to hash
+        // it, and hand the handler a request that carries the same bytes.
+        bytes = hasBody ? await readCappedBytes(req, maxBytes, tooLargeMessage) : new Uint8Array();
+        handlerReq = new NextRequest(req.url, { method: req.method, headers: req.headers, body: hasBody ? (bytes as BodyInit) : undefined });
+      }
+      const run = async () => {
+        const result = await handler({ req: handlerReq, caller, body, query, params } as Ctx<Out<B>, Out<Q>, Out<P>, A>);
+        return result instanceof Response ? result : json(result ?? { ok: true });
+      };
+      if (idemKey === null) return await run();
+      const scope = { userId: caller!.userId, route: `${req.method} ${req.nextUrl.pathname}`, key: idemKey };
+      return await runOnce(scope, bodyHash(bytes ?? new Uint8Array()), run);
     } catch (error) {
       return errorResponse(error);
     }

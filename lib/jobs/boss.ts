@@ -20,6 +20,10 @@ export const QUEUES = {
   mail: { name: "mail.send", retryLimit: 8, retryDelay: 30, retryBackoff: true, expireInMinutes: 5 },
   /** Marks sent/accepted quotes past their validity as expired; scheduled, retried a few times. */
   quoteExpiry: { name: "quotes.expire", retryLimit: 3, retryDelay: 60, retryBackoff: true, expireInMinutes: 5 },
+  /** Deletes photo objects left without a row by a crash (lib/photos/sweep.ts); the next run retries anyway. */
+  photoSweep: { name: "photos.sweep", retryLimit: 1, retryDelay: 60, retryBackoff: false, expireInMinutes: 10 },
+  /** Deletes Idempotency-Key records past their 24 hours. */
+  idempotencyPurge: { name: "idempotency.purge", retryLimit: 1, retryDelay: 60, retryBackoff: false, expireInMinutes: 5 },
 } as const;
 
 export type QueueName = (typeof QUEUES)[keyof typeof QUEUES]["name"];

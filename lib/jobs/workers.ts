@@ -7,11 +7,19 @@ import type PgBoss from "pg-boss";
 import { db } from "@/lib/db";
 import { log } from "@/lib/log";
 import { type QueuedMail, fromQueued, sendMail } from "@/lib/mail";
+import { photoStore } from "@/lib/photos/s3";
+import { sweepOrphanPhotos } from "@/lib/photos/sweep";
+import { purgeExpiredKeys } from "@/lib/server/idempotency";
 import { expireDue } from "@/lib/server/quotes";
 import { type BossOptions, type QueueName, QUEUES, getBoss, pollSeconds } from "./boss";
 
 /** Every 15 minutes. The read paths already show a quote past its date as expired; this writes it down. */
 export const QUOTE_EXPIRY_CRON = "*/15 * * * *";
+
+/** Every 10 minutes: an object a crash left without its row lives at most grace + 10 minutes. */
+export const PHOTO_SWEEP_CRON = "*/10 * * * *";
+/** Hourly, off the hour. */
+export const IDEMPOTENCY_PURGE_CRON = "17 * * * *";
 
 type Handler = (job: PgBoss.Job<object>) => Promise<unknown>;
 
@@ -26,6 +34,12 @@ export const handlers: Record<QueueName, Handler> = {
     if (expired) log().info({ job: { id: job.id, queue: job.name }, expired }, "quotes expired");
     return { expired };
   },
+  [QUEUES.photoSweep.name]: async (job) => {
+    const { scanned, deleted } = await sweepOrphanPhotos(db, photoStore());
+    if (deleted.length) log().info({ job: { id: job.id, queue: job.name }, scanned, deleted: deleted.length }, "orphan photo objects deleted");
+    return { scanned, deleted: deleted.length };
+  },
+  [QUEUES.idempotencyPurge.name]: async () => ({ purged: await purgeExpiredKeys(db) }),
 };
 
 /** Runs one job's handler, logging a failure (message only: job data may hold a mail's body). */
@@ -40,7 +54,7 @@ export async function runJob(job: PgBoss.Job<object>): Promise<unknown> {
 
 /**
  * Starts the boss with maintenance and the cron clock, a worker per queue polling every
- * {@link pollSeconds}, and the quote expiry schedule. Idempotent within a process.
+ * {@link pollSeconds}, and the schedules (quote expiry, photo sweep, idempotency purge). Idempotent within a process.
  */
 export async function startWorkers(opts: BossOptions = {}): Promise<PgBoss> {
   const g = globalThis as unknown as { hubfaceWorkers?: Promise<PgBoss> };
@@ -51,6 +65,8 @@ export async function startWorkers(opts: BossOptions = {}): Promise<PgBoss> {
       await boss.work<object>(name, { pollingIntervalSeconds, batchSize: 1 }, async ([job]) => (job ? runJob(job) : undefined));
     }
     await boss.schedule(QUEUES.quoteExpiry.name, QUOTE_EXPIRY_CRON, {}, { tz: "UTC" });
+    await boss.schedule(QUEUES.photoSweep.name, PHOTO_SWEEP_CRON, {}, { tz: "UTC" });
+    await boss.schedule(QUEUES.idempotencyPurge.name, IDEMPOTENCY_PURGE_CRON, {}, { tz: "UTC" });
     log().info({ queues: Object.keys(handlers), pollingIntervalSeconds }, "job workers started");
     return boss;
   })().catch((error: unknown) => {

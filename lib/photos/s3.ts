@@ -8,6 +8,7 @@ import {
   DeleteObjectsCommand,
   GetObjectCommand,
   HeadObjectCommand,
+  ListObjectsV2Command,
   PutObjectCommand,
   S3Client,
 } from "@aws-sdk/client-s3";
@@ -51,6 +52,13 @@ export interface PhotoStore {
   get(key: string): Promise<{ body: Uint8Array; contentType: string } | null>;
   exists(key: string): Promise<boolean>;
   deleteMany(keys: readonly string[]): Promise<void>;
+  /** Every object under `prefix`, a page (≤ 1000) at a time, with when it was last written. */
+  list(prefix: string): AsyncIterable<StoredObject[]>;
+}
+
+export interface StoredObject {
+  key: string;
+  lastModified: Date;
 }
 
 export function s3PhotoStore(settings: S3Settings = s3Settings(), s3: S3Client = makeS3Client(settings)): PhotoStore {
@@ -96,6 +104,15 @@ export function s3PhotoStore(settings: S3Settings = s3Settings(), s3: S3Client =
         if (chunk.length === 0) continue;
         await client.send(new DeleteObjectsCommand({ Bucket, Delete: { Objects: chunk.map((Key) => ({ Key })), Quiet: true } }));
       }
+    },
+    async *list(prefix) {
+      let ContinuationToken: string | undefined;
+      do {
+        const page = await client.send(new ListObjectsV2Command({ Bucket, Prefix: prefix, ContinuationToken, MaxKeys: 1000 }));
+        const objects = (page.Contents ?? []).filter((o) => o.Key && o.LastModified).map((o) => ({ key: o.Key!, lastModified: o.LastModified! }));
+        if (objects.length) yield objects;
+        ContinuationToken = page.IsTruncated ? page.NextContinuationToken : undefined;
+      } while (ContinuationToken);
     },
   };
 }

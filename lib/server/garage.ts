@@ -198,7 +198,9 @@ export async function clearanceBelongs(db: Knex, vehicleId: string, clearanceId:
 
 /**
  * Stores both objects, then the row. Keys are built from ids only. If anything fails, the
- * objects already written are removed again, so nothing is left half-written.
+ * objects already written are removed again, so nothing is left half-written. The order is the
+ * crash-safe one: a server killed in between leaves objects without a row (never a row without
+ * its image), and the queue's photo sweep (lib/photos/sweep.ts) deletes those.
  */
 export async function addPhoto(
   db: Knex,

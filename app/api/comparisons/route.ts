@@ -9,7 +9,7 @@ export const GET = route({ access: "signed-in", query: listComparisonsQuery }, a
 });
 
 /** Saves a comparison; its key figures are computed here from the validated input. */
-export const POST = route({ access: "signed-in", body: createComparisonSchema }, async ({ caller, body }) => {
+export const POST = route({ access: "signed-in", body: createComparisonSchema, idempotent: true }, async ({ caller, body }) => {
   const comparison = await comparisonQueries.createComparison(caller.userId, body);
   return json({ comparison }, 201);
 });

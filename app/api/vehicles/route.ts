@@ -6,7 +6,7 @@ import { vehicleSchema } from "@/lib/validation/garage";
 
 export const GET = route({ access: GARAGE_ACCESS }, async ({ caller }) => ({ vehicles: await garageQueries.listVehicles(caller.userId) }));
 
-export const POST = route({ access: GARAGE_ACCESS, body: vehicleSchema }, async ({ caller, body }) => {
+export const POST = route({ access: GARAGE_ACCESS, body: vehicleSchema, idempotent: true }, async ({ caller, body }) => {
   const vehicle = await garageQueries.createVehicle(caller.userId, body);
   return json({ vehicle }, 201);
 });

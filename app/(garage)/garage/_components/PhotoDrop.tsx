@@ -4,7 +4,7 @@ import Image from "next/image";
 import { useId, useRef, useState } from "react";
 import { Button } from "@/components/ui/Button";
 import { cx } from "@/components/ui/cx";
-import { api } from "@/lib/client/api";
+import { api, newIdempotencyKey } from "@/lib/client/api";
 import type { VehiclePhoto } from "@/lib/garage/types";
 
 const MAX = 10 * 1024 * 1024;
@@ -15,6 +15,7 @@ function send(url: string, file: File, clearanceId: string | null, onProgress: (
   return new Promise((resolve, reject) => {
     const xhr = new XMLHttpRequest();
     xhr.open("POST", url);
+    xhr.setRequestHeader("Idempotency-Key", newIdempotencyKey());
     xhr.responseType = "json";
     xhr.upload.onprogress = (e) => {
       if (e.lengthComputable) onProgress(Math.round((e.loaded / e.total) * 100));

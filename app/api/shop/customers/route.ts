@@ -12,7 +12,7 @@ export const GET = route({ access: SHOP_ANY }, async ({ caller, req }) => {
   return { customers: await customerQueries.searchCustomers(shopIdOf(caller), query.q) };
 });
 
-export const POST = route({ access: SHOP_ANY, body: customerSchema }, async ({ caller, body }) => {
+export const POST = route({ access: SHOP_ANY, body: customerSchema, idempotent: true }, async ({ caller, body }) => {
   const shopId = shopIdOf(caller);
   const dup = await customerQueries.findDuplicateCustomer(shopId, body);
   if (dup) {

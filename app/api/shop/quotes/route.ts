@@ -10,7 +10,7 @@ export const GET = route({ access: SHOP_ANY, query: z.object({ status: z.enum(QU
   return { quotes: await quoteQueries.listQuotes(quoteScopeOf(caller), { status: query.status }) };
 });
 
-export const POST = route({ access: SHOP_ANY, body: createQuoteSchema }, async ({ caller, body }) => {
+export const POST = route({ access: SHOP_ANY, body: createQuoteSchema, idempotent: true }, async ({ caller, body }) => {
   const id = await quoteQueries.createQuote(shopIdOf(caller), { userId: caller.userId, label: caller.name || caller.email }, body);
   return Response.json({ id }, { status: 201 });
 });

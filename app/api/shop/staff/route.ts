@@ -12,7 +12,7 @@ export const GET = route({ access: SHOP_OWNER }, async ({ caller }) => {
   return { team, invites };
 });
 
-export const POST = route({ access: SHOP_OWNER, body: staffInviteSchema }, async ({ caller, body }) => {
+export const POST = route({ access: SHOP_OWNER, body: staffInviteSchema, idempotent: true }, async ({ caller, body }) => {
   const shopId = shopIdOf(caller);
   // Each invitation mails someone outside the shop: a cap keeps a taken-over account from spamming.
   await rateLimitQueries.consumeOrRefuse([{ spec: RATE_LIMITS.staffInvites, key: shopId }], "Too many invitations sent from this shop.");

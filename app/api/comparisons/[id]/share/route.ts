@@ -7,7 +7,7 @@ import { dropCachedShare } from "@/lib/server/shareCache";
 import { comparisonIdParams } from "@/lib/validation/comparisons";
 
 /** Makes a new public link /s/<slug>; a live one is revoked (and stays dead). */
-export const POST = route({ access: "signed-in", params: comparisonIdParams }, async ({ caller, params }) => {
+export const POST = route({ access: "signed-in", params: comparisonIdParams, idempotent: true }, async ({ caller, params }) => {
   // Every new link is a public page (and its Open Graph image): a cap per user stops link farming.
   await rateLimitQueries.consumeOrRefuse([{ spec: RATE_LIMITS.shareLinks, key: caller.userId }], "Too many new share links.");
   const share = await comparisonQueries.createShare(caller.userId, params.id);

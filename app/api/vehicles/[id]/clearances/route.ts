@@ -8,7 +8,7 @@ import { GARAGE_ACCESS } from "@/lib/garage/access";
 
 const params = z.object({ id: z.uuid() });
 
-export const POST = route({ access: GARAGE_ACCESS, params, body: clearanceSchema }, async ({ caller, params, body }) => {
+export const POST = route({ access: GARAGE_ACCESS, params, body: clearanceSchema, idempotent: true }, async ({ caller, params, body }) => {
   const vehicle = await garageQueries.findVehicle(caller.userId, params.id);
   if (!vehicle) throw notFound("That vehicle");
   const clearance = await garageQueries.addClearance(vehicle.id, body, body.measuredSetup ?? (vehicle.current_setup as SetupValues));

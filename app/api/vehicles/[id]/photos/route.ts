@@ -19,7 +19,7 @@ const tooBig = () => new HttpError(413, TOO_BIG);
  * is refused from Content-Length before anything is read, and while reading when no length was
  * declared; the type is taken from the bytes.
  */
-export const POST = route({ access: GARAGE_ACCESS, params }, async ({ caller, params, req }) => {
+export const POST = route({ access: GARAGE_ACCESS, params, idempotent: true, maxBytes: MAX_PHOTO_BYTES + FORM_OVERHEAD, tooLarge: TOO_BIG }, async ({ caller, params, req }) => {
   const declared = Number(req.headers.get("content-length") ?? "0");
   if (declared > MAX_PHOTO_BYTES + FORM_OVERHEAD) throw tooBig();
   const vehicle = await garageQueries.findVehicle(caller.userId, params.id);

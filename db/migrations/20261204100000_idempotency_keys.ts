@@ -1,0 +1,34 @@
+import type { Knex } from "knex";
+
+/**
+ * Idempotency-Key records for the create routes (lib/http/idempotency.ts): one row per caller,
+ * route and key, reserved before the create runs and completed with its response after, so a
+ * retry of a create whose answer was lost replays that answer instead of creating again.
+ */
+export async function up(knex: Knex): Promise<void> {
+  await knex.schema.createTable("idempotency_keys", (t) => {
+    t.uuid("user_id").notNullable().references("id").inTable("users").onDelete("CASCADE");
+    // Method and path, e.g. "POST /api/vehicles/<id>/photos": the same key on another route is another request.
+    t.text("route").notNullable();
+    t.string("key", 200).notNullable();
+    // SHA-256 of the raw request body, hex.
+    t.string("request_hash", 64).notNullable();
+    t.text("state").notNullable().defaultTo("pending");
+    // Which attempt holds the reservation: a takeover after a crash gets a new one, so a late
+    // completion of the old attempt cannot overwrite the new one's.
+    t.uuid("attempt").notNullable();
+    t.integer("response_status").nullable();
+    t.text("response_type").nullable();
+    t.text("response_body").nullable();
+    t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    t.timestamp("locked_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    t.timestamp("expires_at", { useTz: true }).notNullable().defaultTo(knex.raw("now() + interval '24 hours'"));
+    t.primary(["user_id", "route", "key"]);
+    t.index(["expires_at"]);
+  });
+  await knex.raw("alter table idempotency_keys add constraint idempotency_keys_state check (state in ('pending', 'complete'))");
+}
+
+export async function down(knex: Knex): Promise<void> {
+  await knex.schema.dropTable("idempotency_keys");
+}
