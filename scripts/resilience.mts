@@ -454,6 +454,8 @@ async function main() {
     const list = (await (await call(A, reader, "GET", "/api/comparisons")).json()) as { comparisons: { share: { slug: string } | null }[] };
     const slug = list.comparisons.find((c) => c.share)?.share?.slug;
     if (!slug) throw new Error(`${READER} has no live share link in the demo seed`);
+    // One request per kind first, so the first measured seconds are not Next compiling its caches.
+    for (const path of [`/s/${slug}`, "/workspace", "/api/comparisons", "/api/health/ready"]) await (await fetch(`${A}${path}`, { headers: { Cookie: reader } })).arrayBuffer();
     console.log(`resilience: server A ${A}, PostgreSQL on ${PGPORT}; ${CONNECTIONS} connections × ${LOAD_SECONDS} s mixed load first`);
 
     const load = await phaseLoad(A, slug, reader, writer);
@@ -482,7 +484,7 @@ async function main() {
 
     out.push("", `Resilience — ${new Date().toISOString().slice(0, 16)}Z, production build, PostgreSQL 127.0.0.1:${PGPORT} (fsync on), ${CONNECTIONS} connections`);
     out.push(...mixTable(`1. Mixed load, ${LOAD_SECONDS} s`, load.results));
-    out.push(`  writes: ${load.acked} acknowledged (201), ${load.rows} rows → lost ${lost(load.acked, load.rows)}  (target ${TARGETS.lostWrites}: ${meets(lost(load.acked, load.rows) === 0)})`);
+    out.push(`  writes: ${load.acked} acknowledged (201), ${load.rows} rows → lost ${lost(load.acked, load.rows)}  (target ${TARGETS.lostWrites}: ${meets(lost(load.acked, load.rows) === 0)}); ${Math.max(0, load.rows - load.acked)} committed without an answer counted (in flight when the run ended)`);
     out.push(`  answers other than 2xx/4xx/503 or none: ${otherAnswers(sum(load.results.map((r) => r.classes)))}  (target ${TARGETS.otherAnswers}: ${meets(otherAnswers(sum(load.results.map((r) => r.classes))) === 0)})`);
     out.push("");
     out.push(...mixTable(`2. PostgreSQL stopped ${fmt(outage.outageMs / 1000, 1)} s in a 34 s run of the same load`, outage.results));
@@ -493,10 +495,10 @@ async function main() {
     out.push(
       `  recovery, PostgreSQL accepting connections → first 2xx on GET /api/comparisons, no restart: ${outage.recoveryMs === null ? "none within 20 s" : `${fmt(outage.recoveryMs)} ms`}  (target < ${TARGETS.recoveryMs} ms: ${meets(outage.recoveryMs !== null && outage.recoveryMs < TARGETS.recoveryMs)})`,
     );
-    out.push(`  writes: ${outage.acked} acknowledged, ${outage.rows} rows → lost ${lost(outage.acked, outage.rows)}  (target ${TARGETS.lostWrites}: ${meets(lost(outage.acked, outage.rows) === 0)}); ${Math.max(0, outage.rows - outage.acked)} rows committed without an answer reaching the client`);
+    out.push(`  writes: ${outage.acked} acknowledged, ${outage.rows} rows → lost ${lost(outage.acked, outage.rows)}  (target ${TARGETS.lostWrites}: ${meets(lost(outage.acked, outage.rows) === 0)}); ${Math.max(0, outage.rows - outage.acked)} committed without an answer counted (in flight when the run ended or PostgreSQL stopped)`);
     out.push("");
     out.push(`3. kill -9 of the server 5 s into writes (20 connections of comparison creates, 4 clients uploading photos)`);
-    out.push(`  comparison writes: ${kill.acked} acknowledged, ${kill.rows} rows → lost ${lost(kill.acked, kill.rows)}  (target ${TARGETS.lostWrites}: ${meets(lost(kill.acked, kill.rows) === 0)}); ${Math.max(0, kill.rows - kill.acked)} committed without an answer`);
+    out.push(`  comparison writes: ${kill.acked} acknowledged, ${kill.rows} rows → lost ${lost(kill.acked, kill.rows)}  (target ${TARGETS.lostWrites}: ${meets(lost(kill.acked, kill.rows) === 0)}); ${Math.max(0, kill.rows - kill.acked)} committed without an answer (in flight at the kill)`);
     out.push(`  photo uploads: ${kill.uploadsTried} sent, ${kill.ackedPhotos} acknowledged, acknowledged without a row: ${kill.lostPhotos}  (target ${TARGETS.lostWrites}: ${meets(kill.lostPhotos === 0)})`);
     out.push(`  photo-store objects without a row afterwards: ${kill.orphans.length}${kill.orphans.length ? ` (${kill.orphans.slice(0, 4).join(", ")}${kill.orphans.length > 4 ? ", …" : ""})` : ""}  (target ${TARGETS.orphans}: ${meets(kill.orphans.length === 0)})`);
     out.push("");

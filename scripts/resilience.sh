@@ -4,7 +4,7 @@
 # a PostgreSQL cluster in .data/resilience/pg (port 55470), the demo seed, the local fake
 # photo store / mail / payment services and the production server(s) on 3700 and 3701.
 # Needs a `next build`; made here when .next has none (RESILIENCE_BUILD=1 forces a new one).
-# Run time about 3 minutes on a 2-core machine after the build (README "Resilience").
+# Run time about 100–125 s on a 2-core machine after the build (README "Resilience").
 source "$(dirname "$0")/lib.sh"
 set +e
 
@@ -49,7 +49,6 @@ export STRIPE_WEBHOOK_SECRET="whsec_$(node -e 'console.log(require("crypto").ran
 export STRIPE_WEBHOOK_URL="$NEXTAUTH_URL/api/payments/webhook"
 export S3_PORT="$RS_S3" S3_DIR="$RS/s3" S3_BUCKET=hubface-photos S3_REGION=us-east-1
 export S3_ENDPOINT="http://127.0.0.1:$RS_S3" S3_ACCESS_KEY_ID=S3RVER S3_SECRET_ACCESS_KEY=S3RVER
-export LOG_LEVEL="${LOG_LEVEL:-warn}"
 
 # The build reads DATABASE_URL (configuration only; nothing is queried).
 if [ ! -f .next/BUILD_ID ] || [ "${RESILIENCE_BUILD:-}" = 1 ]; then
