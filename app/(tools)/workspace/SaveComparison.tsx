@@ -16,7 +16,7 @@ import type { ComparisonInput } from "@/lib/comparison/schema";
 import { encodeComparison } from "@/lib/comparison/url";
 import { type SavedComparison, comparisonNameSchema } from "@/lib/validation/comparisons";
 import { type OpenedComparison, useCurrentInput, withParam } from "./currentInput";
-import { useLeaveGuard } from "./useLeaveGuard";
+import { useLeaveGuard } from "@/components/feedback/useLeaveGuard";
 
 const nameForm = z.object({ name: comparisonNameSchema });
 type NameForm = z.infer<typeof nameForm>;

@@ -3,7 +3,7 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import Link from "next/link";
 import { useState } from "react";
 import { FitmentSummaryCard } from "@/components/quotes/FitmentSummaryCard";
-import { useLeaveGuard } from "@/components/quotes/useLeaveGuard";
+import { useLeaveGuard } from "@/components/feedback/useLeaveGuard";
 import { Alert } from "@/components/ui/Alert";
 import { Badge } from "@/components/ui/Badge";
 import { Button, buttonClass } from "@/components/ui/Button";

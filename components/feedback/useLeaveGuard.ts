@@ -14,6 +14,7 @@ function leavingLink(ev: MouseEvent): HTMLAnchorElement | null {
 }
 
 /**
+ * One guard for every screen with unsaved work (the workspace's saved comparison, the quote editor).
  * While `dirty`, leaving the page asks first: closing or reloading the tab through the browser's
  * own "leave site?" prompt (beforeunload), the site's links — client-side navigations that
  * beforeunload never sees — through a confirm naming what would be lost. The click listener runs
@@ -29,6 +30,7 @@ export function useLeaveGuard(dirty: boolean, message: string): void {
       ev.returnValue = "";
     };
     const onClick = (ev: MouseEvent) => {
+      // Next's Link skips navigation for a click whose default was prevented.
       if (leavingLink(ev) && !window.confirm(message)) ev.preventDefault();
     };
     window.addEventListener("beforeunload", onBeforeUnload);
