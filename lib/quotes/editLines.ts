@@ -3,7 +3,8 @@
  * problem named as the screen names the field ("Line 3 — quantity: …"). Pure, shared by the
  * editor and its tests. Also decides whether the form differs from what is saved.
  */
-import type { CatalogItemRow, QuoteLineKind, QuoteLineRow, QuoteLineUnit } from "@/lib/db/types";
+import type { CatalogItem } from "@/lib/catalog/api";
+import type { QuoteLineKind, QuoteLineRow, QuoteLineUnit } from "@/lib/db/types";
 import { fieldLabel } from "./fieldLabels";
 import { formatCents, parseMoneyToCents } from "./money";
 import { QuantityError, parseQuantity } from "./quantity";
@@ -110,9 +111,9 @@ let seq = 0;
 const newKey = () => `new-${Date.now()}-${++seq}`;
 
 /** A catalog item as a new line: its own price; items per wheel take the quote's wheel count. */
-export function lineFromCatalog(item: Pick<CatalogItemRow, "id" | "kind" | "sku" | "description" | "price_cents" | "service_unit">, wheelQty: number): EditLine {
-  const hourly = item.kind === "service" && item.service_unit === "per_hour";
-  const perWheel = item.kind !== "service" || item.service_unit === "per_wheel";
+export function lineFromCatalog(item: Pick<CatalogItem, "id" | "kind" | "sku" | "description" | "priceCents" | "serviceUnit">, wheelQty: number): EditLine {
+  const hourly = item.kind === "service" && item.serviceUnit === "per_hour";
+  const perWheel = item.kind !== "service" || item.serviceUnit === "per_wheel";
   return {
     key: newKey(),
     kind: item.kind,
@@ -121,7 +122,7 @@ export function lineFromCatalog(item: Pick<CatalogItemRow, "id" | "kind" | "sku"
     sku: item.sku,
     description: item.description,
     quantity: String(perWheel ? wheelQty : 1),
-    unitPrice: dollars(item.price_cents),
+    unitPrice: dollars(item.priceCents),
     discount: "0",
     // Parts are taxed, labour and services are not (as on a new quote).
     taxable: item.kind !== "service",
