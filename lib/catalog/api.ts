@@ -3,6 +3,8 @@
  * server and client. The shop id and the search key column stay on the server.
  */
 import type { CatalogItemRow, CatalogKind, ServiceType, ServiceUnit } from "@/lib/db/types";
+import type { Pick as FitmentPick } from "@/lib/quotes/fitment";
+import type { resolveVehicle } from "@/lib/validation/quotes";
 
 export interface CatalogItem {
   id: string;
@@ -81,4 +83,12 @@ export function catalogItemDto(r: CatalogItemRow): CatalogItem {
     createdAt: new Date(r.created_at).toISOString(),
     updatedAt: new Date(r.updated_at).toISOString(),
   };
+}
+
+/** POST /api/shop/fitment/candidates: the stocked tire × wheel pairs that mount, ranked, each with its two items. */
+export interface FitmentCandidates {
+  vehicle: ReturnType<typeof resolveVehicle>;
+  wheelsFitting: number;
+  pairs: number;
+  picks: (FitmentPick & { tire: StockItem; wheel: StockItem })[];
 }

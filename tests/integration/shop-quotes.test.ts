@@ -49,8 +49,11 @@ describe("customers", () => {
     as(U.staffA);
     const res = await customers.POST(req("POST", "/api/shop/customers", { name: "Dace Holloway", phone: "(555) 013-2277", email: "dace@example.test" }), ctx());
     expect(res.status).toBe(201);
-    customerId = (await res.json()).customer.id;
+    const made = await res.json();
+    expect(internalKeys(made)).toEqual([]);
+    customerId = made.customer.id;
     const byPhone = await (await customers.GET(req("GET", "/api/shop/customers?q=555-013-2277"), ctx())).json();
+    expect(internalKeys(byPhone)).toEqual([]);
     expect(byPhone.customers.map((c: { id: string }) => c.id)).toEqual([customerId]);
     const byMail = await (await customers.GET(req("GET", "/api/shop/customers?q=DACE@example.test"), ctx())).json();
     expect(byMail.customers).toHaveLength(1);
@@ -69,6 +72,8 @@ describe("fitment candidates", () => {
   it("offer only wheels of the vehicle's bolt pattern, ranked by the engine's comparison", async () => {
     as(U.staffA);
     const body = await (await candidates(req("POST", "/api/shop/fitment/candidates", VEHICLE), ctx())).json();
+    expect(internalKeys(body)).toEqual([]);
+    expect(body.picks[0].wheel).toMatchObject({ boltPattern: expect.stringMatching(/^6x/), centerBoreMm: 108 }); // camelCase on purpose: lib/catalog/api.ts
     // The template has two 6-lug wheels (6x5.5 and 6x139.7, equivalent) and one 17 in tire.
     expect(body.wheelsFitting).toBe(2);
     expect(body.picks).toHaveLength(2);
@@ -118,6 +123,9 @@ describe("quotes", () => {
     expect(d.events).toEqual([expect.objectContaining({ to_status: "draft", actor: "Sam Staff", actor_user_id: U.staffA.id })]);
     const saved = await db("customer_vehicles").where({ customer_id: customerId });
     expect(saved).toHaveLength(1);
+    const again = await (await customerById(req("GET", `/api/shop/customers/${customerId}`), ctx({ id: customerId }))).json();
+    expect(again.vehicles).toHaveLength(1);
+    expect(internalKeys(again)).toEqual([]);
   });
 
   it("edits recompute totals on the server; a negative quantity is refused and nothing changes", async () => {
