@@ -20,7 +20,7 @@ describe("the editor's form", () => {
   });
 
   it("is dirty only while it differs from what is saved", () => {
-    const saved = formOf({ lines: [{ id: "a", kind: "custom", unit: "hour", catalog_item_id: null, sku: "", description: "Labour", quantity: 1.5, unit_price_cents: 14500, discount_cents: 0, taxable: false }], quote: { discount_cents: 0, notes: "" } });
+    const saved = formOf({ lines: [{ id: "a", kind: "custom", unit: "hour", catalogItemId: null, sku: "", description: "Labour", quantity: 1.5, unitPriceCents: 14500, discountCents: 0, taxable: false }], quote: { discountCents: 0, notes: "" } });
     expect(saved.lines[0]!.quantity).toBe("1.5");
     expect(isDirty(saved, saved)).toBe(false);
     expect(isDirty({ ...saved, notes: "x" }, saved)).toBe(true);

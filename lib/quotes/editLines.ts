@@ -4,7 +4,8 @@
  * editor and its tests. Also decides whether the form differs from what is saved.
  */
 import type { CatalogItem } from "@/lib/catalog/api";
-import type { QuoteLineKind, QuoteLineRow, QuoteLineUnit } from "@/lib/db/types";
+import type { QuoteLineKind, QuoteLineUnit } from "@/lib/db/types";
+import type { QuoteLine } from "./api";
 import { fieldLabel } from "./fieldLabels";
 import { formatCents, parseMoneyToCents } from "./money";
 import { QuantityError, parseQuantity } from "./quantity";
@@ -28,7 +29,7 @@ export interface EditForm {
   notes: string;
 }
 
-type SavedLine = Pick<QuoteLineRow, "id" | "kind" | "unit" | "catalog_item_id" | "sku" | "description" | "quantity" | "unit_price_cents" | "discount_cents" | "taxable">;
+type SavedLine = Pick<QuoteLine, "id" | "kind" | "unit" | "catalogItemId" | "sku" | "description" | "quantity" | "unitPriceCents" | "discountCents" | "taxable">;
 
 const dollars = (cents: number) => formatCents(cents).replace(/,/g, "");
 
@@ -36,17 +37,17 @@ export const toEditLine = (l: SavedLine): EditLine => ({
   key: l.id,
   kind: l.kind,
   unit: l.unit,
-  catalogItemId: l.catalog_item_id,
+  catalogItemId: l.catalogItemId,
   sku: l.sku,
   description: l.description,
   quantity: String(Number(l.quantity)),
-  unitPrice: dollars(l.unit_price_cents),
-  discount: dollars(l.discount_cents),
+  unitPrice: dollars(l.unitPriceCents),
+  discount: dollars(l.discountCents),
   taxable: l.taxable,
 });
 
-export function formOf(saved: { lines: readonly SavedLine[]; quote: { discount_cents: number; notes: string } }): EditForm {
-  return { lines: saved.lines.map(toEditLine), discount: dollars(saved.quote.discount_cents), notes: saved.quote.notes };
+export function formOf(saved: { lines: readonly SavedLine[]; quote: { discountCents: number; notes: string } }): EditForm {
+  return { lines: saved.lines.map(toEditLine), discount: dollars(saved.quote.discountCents), notes: saved.quote.notes };
 }
 
 const comparable = (f: EditForm) => JSON.stringify({ ...f, lines: f.lines.map(({ key: _k, ...rest }) => rest) });
