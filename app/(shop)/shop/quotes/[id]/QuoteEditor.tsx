@@ -12,7 +12,6 @@ import { PageHeader } from "@/components/ui/PageHeader";
 import { ApiError, api } from "@/lib/client/api";
 import { type EditForm, type EditLine, bodyOf, formOf, isDirty, labourLine, lineFromCatalog, partsLine } from "@/lib/quotes/editLines";
 import { describeFieldErrors } from "@/lib/quotes/fieldLabels";
-import type { FitmentSummary } from "@/lib/quotes/fitment";
 import { STATUS_LABEL } from "@/lib/quotes/status";
 import { statusTone } from "../statusTone";
 import { CatalogItemPicker } from "./CatalogItemPicker";
@@ -106,7 +105,7 @@ export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; lab
     setNotice(null);
     setForm((cur) => ({ ...cur, lines: f(cur.lines) }));
   };
-  const fit = q.fitment as FitmentSummary;
+  const fit = q.fitment;
 
   return (
     <>
