@@ -30,11 +30,5 @@ const config = [
     rules: { "no-restricted-imports": ["error", { patterns: [{ group: ["@/app/*", "@/components/*"], message: "lib/ is below app/ and components/: move the shared code into lib/." }] }] },
   },
   { files: ["app/**/*.{ts,tsx}", "components/**/*.{ts,tsx}", "lib/**/*.{ts,tsx}"], rules: { "hubface/client-no-server": "error" } },
-  // Known debt, shrinking: these shop screens still take catalog and customer rows from their
-  // API. Delete a line when its screen reads the API shape instead.
-  {
-    files: ["app/(shop)/shop/catalog/CatalogTable.tsx", "app/(shop)/shop/quotes/[[]id]/CatalogItemPicker.tsx", "app/(shop)/shop/quotes/new/QuoteBuilder.tsx"],
-    rules: { "hubface/client-no-server": ["error", { rowTypes: false }] },
-  },
 ];
 export default config;

@@ -20,7 +20,7 @@ describe("the editor's form", () => {
   });
 
   it("is dirty only while it differs from what is saved", () => {
-    const saved = formOf({ lines: [{ id: "a", kind: "custom", unit: "hour", catalog_item_id: null, sku: "", description: "Labour", quantity: 1.5, unit_price_cents: 14500, discount_cents: 0, taxable: false }], quote: { discount_cents: 0, notes: "" } });
+    const saved = formOf({ lines: [{ id: "a", kind: "custom", unit: "hour", catalogItemId: null, sku: "", description: "Labour", quantity: 1.5, unitPriceCents: 14500, discountCents: 0, taxable: false }], quote: { discountCents: 0, notes: "" } });
     expect(saved.lines[0]!.quantity).toBe("1.5");
     expect(isDirty(saved, saved)).toBe(false);
     expect(isDirty({ ...saved, notes: "x" }, saved)).toBe(true);
@@ -28,8 +28,8 @@ describe("the editor's form", () => {
   });
 
   it("adds catalog items with the quote's wheel count when sold per wheel, one otherwise", () => {
-    expect(lineFromCatalog({ id: "t", kind: "service", sku: "TP", description: "TPMS", price_cents: 1800, service_unit: "per_wheel" }, 5)).toMatchObject({ quantity: "5", unit: "each", unitPrice: "18.00", taxable: false });
-    expect(lineFromCatalog({ id: "f", kind: "service", sku: "FT", description: "Trim", price_cents: 14500, service_unit: "per_hour" }, 4)).toMatchObject({ quantity: "1", unit: "hour" });
-    expect(lineFromCatalog({ id: "w", kind: "wheel", sku: "W", description: "Wheel", price_cents: 100, service_unit: null }, 4)).toMatchObject({ quantity: "4", kind: "wheel", taxable: true });
+    expect(lineFromCatalog({ id: "t", kind: "service", sku: "TP", description: "TPMS", priceCents: 1800, serviceUnit: "per_wheel" }, 5)).toMatchObject({ quantity: "5", unit: "each", unitPrice: "18.00", taxable: false });
+    expect(lineFromCatalog({ id: "f", kind: "service", sku: "FT", description: "Trim", priceCents: 14500, serviceUnit: "per_hour" }, 4)).toMatchObject({ quantity: "1", unit: "hour" });
+    expect(lineFromCatalog({ id: "w", kind: "wheel", sku: "W", description: "Wheel", priceCents: 100, serviceUnit: null }, 4)).toMatchObject({ quantity: "4", kind: "wheel", taxable: true });
   });
 });

@@ -3,7 +3,9 @@
  * problem named as the screen names the field ("Line 3 — quantity: …"). Pure, shared by the
  * editor and its tests. Also decides whether the form differs from what is saved.
  */
-import type { CatalogItemRow, QuoteLineKind, QuoteLineRow, QuoteLineUnit } from "@/lib/db/types";
+import type { CatalogItem } from "@/lib/catalog/api";
+import type { QuoteLineKind, QuoteLineUnit } from "@/lib/db/types";
+import type { QuoteLine } from "./api";
 import { fieldLabel } from "./fieldLabels";
 import { formatCents, parseMoneyToCents } from "./money";
 import { QuantityError, parseQuantity } from "./quantity";
@@ -27,7 +29,7 @@ export interface EditForm {
   notes: string;
 }
 
-type SavedLine = Pick<QuoteLineRow, "id" | "kind" | "unit" | "catalog_item_id" | "sku" | "description" | "quantity" | "unit_price_cents" | "discount_cents" | "taxable">;
+type SavedLine = Pick<QuoteLine, "id" | "kind" | "unit" | "catalogItemId" | "sku" | "description" | "quantity" | "unitPriceCents" | "discountCents" | "taxable">;
 
 const dollars = (cents: number) => formatCents(cents).replace(/,/g, "");
 
@@ -35,17 +37,17 @@ export const toEditLine = (l: SavedLine): EditLine => ({
   key: l.id,
   kind: l.kind,
   unit: l.unit,
-  catalogItemId: l.catalog_item_id,
+  catalogItemId: l.catalogItemId,
   sku: l.sku,
   description: l.description,
   quantity: String(Number(l.quantity)),
-  unitPrice: dollars(l.unit_price_cents),
-  discount: dollars(l.discount_cents),
+  unitPrice: dollars(l.unitPriceCents),
+  discount: dollars(l.discountCents),
   taxable: l.taxable,
 });
 
-export function formOf(saved: { lines: readonly SavedLine[]; quote: { discount_cents: number; notes: string } }): EditForm {
-  return { lines: saved.lines.map(toEditLine), discount: dollars(saved.quote.discount_cents), notes: saved.quote.notes };
+export function formOf(saved: { lines: readonly SavedLine[]; quote: { discountCents: number; notes: string } }): EditForm {
+  return { lines: saved.lines.map(toEditLine), discount: dollars(saved.quote.discountCents), notes: saved.quote.notes };
 }
 
 const comparable = (f: EditForm) => JSON.stringify({ ...f, lines: f.lines.map(({ key: _k, ...rest }) => rest) });
@@ -110,9 +112,9 @@ let seq = 0;
 const newKey = () => `new-${Date.now()}-${++seq}`;
 
 /** A catalog item as a new line: its own price; items per wheel take the quote's wheel count. */
-export function lineFromCatalog(item: Pick<CatalogItemRow, "id" | "kind" | "sku" | "description" | "price_cents" | "service_unit">, wheelQty: number): EditLine {
-  const hourly = item.kind === "service" && item.service_unit === "per_hour";
-  const perWheel = item.kind !== "service" || item.service_unit === "per_wheel";
+export function lineFromCatalog(item: Pick<CatalogItem, "id" | "kind" | "sku" | "description" | "priceCents" | "serviceUnit">, wheelQty: number): EditLine {
+  const hourly = item.kind === "service" && item.serviceUnit === "per_hour";
+  const perWheel = item.kind !== "service" || item.serviceUnit === "per_wheel";
   return {
     key: newKey(),
     kind: item.kind,
@@ -121,7 +123,7 @@ export function lineFromCatalog(item: Pick<CatalogItemRow, "id" | "kind" | "sku"
     sku: item.sku,
     description: item.description,
     quantity: String(perWheel ? wheelQty : 1),
-    unitPrice: dollars(item.price_cents),
+    unitPrice: dollars(item.priceCents),
     discount: "0",
     // Parts are taxed, labour and services are not (as on a new quote).
     taxable: item.kind !== "service",

@@ -1,6 +1,7 @@
 import "server-only";
 import type { Knex } from "knex";
 import type { CatalogImportRow, CatalogItemRow, CatalogKind } from "@/lib/db/types";
+import { type CatalogPage, catalogItemDto } from "@/lib/catalog/api";
 import { boltPatternQuery, equivalentBoltPatterns } from "@/lib/catalog/boltPatternSearch";
 import type { CatalogInput, CsvReport } from "@/lib/catalog/csv";
 import { containsPattern, searchKey } from "@/lib/search/normalize";
@@ -25,7 +26,7 @@ export interface CatalogQuery {
  * accents folded) in the stored key of SKU, description, tire size and bolt pattern, and finds a
  * bolt pattern by either spelling (6x5.5 = 6x139.7).
  */
-export async function listCatalog(db: Knex, shopId: string, q: CatalogQuery = {}) {
+export async function listCatalog(db: Knex, shopId: string, q: CatalogQuery = {}): Promise<CatalogPage> {
   const pageSize = Math.min(Math.max(q.pageSize ?? 25, 1), 200);
   const page = Math.max(q.page ?? 1, 1);
   const base = db<CatalogItemRow>("catalog_items").where({ shop_id: shopId });
@@ -46,7 +47,7 @@ export async function listCatalog(db: Knex, shopId: string, q: CatalogQuery = {}
     .limit(pageSize)
     .offset((page - 1) * pageSize)
     .select("*");
-  return { items: items.map(withoutSearchKey), total: Number(count), page, pageSize };
+  return { items: items.map(catalogItemDto), total: Number(count), page, pageSize };
 }
 
 /** The bolt patterns the shop's catalog holds, each once (a few dozen at most). */

@@ -1,8 +1,8 @@
 import "server-only";
 import type { Knex } from "knex";
 import type { CustomerRow, CustomerVehicleRow } from "@/lib/db/types";
+import { type Customer, type CustomerVehicle, customerDto, customerVehicleDto } from "@/lib/customers/api";
 import { containsPattern, searchKey } from "@/lib/search/normalize";
-import { withoutSearchKey } from "./searchKeyColumn";
 import type { CustomerInput } from "@/lib/validation/quotes";
 import { bindAppDb } from "@/lib/db/bind";
 
@@ -14,7 +14,7 @@ export const phoneDigits = (phone: string) => phone.replace(/\D/g, "");
  * "lukasz" finds Łukasz), or a whole e-mail address when the search has an @. A domain alone
  * finds nobody: every customer may share it.
  */
-export async function searchCustomers(db: Knex, shopId: string, q: string): Promise<CustomerRow[]> {
+export async function searchCustomers(db: Knex, shopId: string, q: string): Promise<Customer[]> {
   const text = q.trim();
   const digits = phoneDigits(text);
   const key = searchKey(text);
@@ -29,11 +29,11 @@ export async function searchCustomers(db: Knex, shopId: string, q: string): Prom
     })
     .orderBy("name")
     .limit(20);
-  return rows.map(withoutSearchKey);
+  return rows.map(customerDto);
 }
 
 /** An existing customer of this shop with the same phone digits or e-mail. */
-export async function findDuplicateCustomer(db: Knex, shopId: string, c: CustomerInput): Promise<CustomerRow | undefined> {
+export async function findDuplicateCustomer(db: Knex, shopId: string, c: CustomerInput): Promise<Customer | undefined> {
   const digits = phoneDigits(c.phone);
   const row = await db<CustomerRow>("customers")
     .where({ shop_id: shopId })
@@ -42,23 +42,23 @@ export async function findDuplicateCustomer(db: Knex, shopId: string, c: Custome
       if (c.email) w.orWhereRaw("lower(email) = lower(?)", [c.email]);
     })
     .first();
-  return row && withoutSearchKey(row);
+  return row && customerDto(row);
 }
 
-export async function createCustomer(db: Knex, shopId: string, c: CustomerInput): Promise<CustomerRow> {
+export async function createCustomer(db: Knex, shopId: string, c: CustomerInput): Promise<Customer> {
   const [row] = await db<CustomerRow>("customers")
     .insert({ shop_id: shopId, name: c.name, phone: c.phone, phone_digits: phoneDigits(c.phone), email: c.email })
     .returning("*");
-  return withoutSearchKey(row!);
+  return customerDto(row!);
 }
 
-export async function getCustomer(db: Knex, shopId: string, id: string): Promise<CustomerRow | undefined> {
+export async function getCustomer(db: Knex, shopId: string, id: string): Promise<Customer | undefined> {
   const row = await db<CustomerRow>("customers").where({ id, shop_id: shopId }).first();
-  return row && withoutSearchKey(row);
+  return row && customerDto(row);
 }
 
-export async function listVehicles(db: Knex, shopId: string, customerId: string): Promise<CustomerVehicleRow[]> {
-  return db<CustomerVehicleRow>("customer_vehicles").where({ shop_id: shopId, customer_id: customerId }).orderBy("created_at", "desc");
+export async function listVehicles(db: Knex, shopId: string, customerId: string): Promise<CustomerVehicle[]> {
+  return (await db<CustomerVehicleRow>("customer_vehicles").where({ shop_id: shopId, customer_id: customerId }).orderBy("created_at", "desc")).map(customerVehicleDto);
 }
 
 /** These queries on the app's database handle, for pages and route handlers. */

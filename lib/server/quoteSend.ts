@@ -5,7 +5,7 @@ import { appOrigin, queueMail } from "@/lib/mail";
 import { type QuoteDocument, buildQuoteDocument, hubCautions } from "@/lib/quotes/document";
 import { formatUsd } from "@/lib/quotes/money";
 import { quotePdf } from "@/lib/quotes/pdf";
-import { type QuoteDetail, type QuoteScope, type Actor, findByToken, getQuoteDetail, latestSentDocument, markSent, readLines } from "./quotes";
+import { type QuoteRecord, type QuoteScope, type Actor, findByToken, getQuoteDetail, latestSentDocument, markSent, readLines } from "./quotes";
 import { getShop } from "./shops";
 import { bindAppDb } from "@/lib/db/bind";
 
@@ -13,7 +13,7 @@ import { bindAppDb } from "@/lib/db/bind";
  * The quote as a document: a draft from its live rows; any other quote as it was last sent
  * (a quote sent before documents were stored falls back to its rows).
  */
-export async function documentFor(db: Knex, detail: Pick<QuoteDetail, "quote" | "customer" | "lines" | "createdByName">): Promise<QuoteDocument> {
+export async function documentFor(db: Knex, detail: Pick<QuoteRecord, "quote" | "customer" | "lines" | "createdByName">): Promise<QuoteDocument> {
   if (detail.quote.status !== "draft") {
     const sent = await latestSentDocument(db, detail.quote.id);
     if (sent) return sent;
@@ -22,7 +22,7 @@ export async function documentFor(db: Knex, detail: Pick<QuoteDetail, "quote" | 
   return buildQuoteDocument({ shop: shop!, quote: detail.quote, customer: detail.customer, lines: detail.lines, preparedBy: detail.createdByName, sentAt: null });
 }
 
-export async function renderQuotePdf(db: Knex, detail: QuoteDetail): Promise<Buffer> {
+export async function renderQuotePdf(db: Knex, detail: QuoteRecord): Promise<Buffer> {
   return quotePdf(await documentFor(db, detail));
 }
 
@@ -44,7 +44,7 @@ const esc = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`)
  * Marks the quote sent (fresh link, document frozen as sent) and e-mails the customer the PDF and
  * the link (queued: a worker sends it, retrying while the mail server is away). `seenUpdatedAt`: the version the sender saw; a quote changed since is not sent.
  */
-export async function sendQuote(db: Knex, scope: QuoteScope, id: string, actor: Actor, seenUpdatedAt?: string): Promise<QuoteDetail> {
+export async function sendQuote(db: Knex, scope: QuoteScope, id: string, actor: Actor, seenUpdatedAt?: string): Promise<QuoteRecord> {
   const { token, document: d } = await markSent(db, scope, id, actor, seenUpdatedAt);
   const detail = await getQuoteDetail(db, scope, id);
   const pdf = await quotePdf(d);

@@ -4,6 +4,7 @@ import { createHash, randomBytes } from "node:crypto";
 import type { Knex } from "knex";
 import type { CatalogItemRow, QuoteEventRow, QuoteLineRow, QuoteLineUnit, QuoteRow, QuoteStatus, ServiceType } from "@/lib/db/types";
 import { HttpError, notFound } from "@/lib/http/errors";
+import { type QuoteListItem, type QuoteListRow, quoteListItemDto } from "@/lib/quotes/api";
 import { type HubCheck, type QuoteDocument, buildQuoteDocument, hubChecksOf } from "@/lib/quotes/document";
 import { type FitmentSummary, summarize } from "@/lib/quotes/fitment";
 import { checkWheelOnHub, hubRefusal } from "@/lib/quotes/hubFit";
@@ -101,8 +102,9 @@ export async function findQuote(db: Knex | Knex.Transaction, scope: QuoteScope, 
   return withEffectiveStatus(row);
 }
 
-export interface QuoteDetail {
-  /** The quote without its link's token hash: the detail is what the shop's browser receives. */
+/** A quote with its lines, history and customer, as rows (lib/quotes/api.ts quoteDetailDto makes it the API shape). */
+export interface QuoteRecord {
+  /** The quote without its link's token hash. */
   quote: Omit<QuoteRow, "public_token_hash">;
   lines: QuoteLineRow[];
   events: QuoteEventRow[];
@@ -118,7 +120,7 @@ export async function readLines(db: Knex | Knex.Transaction, quoteId: string): P
   return rows.map((l) => ({ ...l, quantity: Number(l.quantity) }));
 }
 
-export async function quoteDetail(db: Knex, quote: QuoteRow): Promise<QuoteDetail> {
+export async function quoteDetail(db: Knex, quote: QuoteRow): Promise<QuoteRecord> {
   const [lines, events, customer, author] = await Promise.all([
     readLines(db, quote.id),
     db<QuoteEventRow>("quote_events").where({ quote_id: quote.id }).orderBy("id"),
@@ -129,11 +131,11 @@ export async function quoteDetail(db: Knex, quote: QuoteRow): Promise<QuoteDetai
   return { quote: shown, lines, events, customer, createdByName: author?.name ?? null, hubChecks: hubChecksOf(quote, lines) };
 }
 
-export async function getQuoteDetail(db: Knex, scope: QuoteScope, id: string): Promise<QuoteDetail> {
+export async function getQuoteDetail(db: Knex, scope: QuoteScope, id: string): Promise<QuoteRecord> {
   return quoteDetail(db, await findQuote(db, scope, id));
 }
 
-export async function listQuotes(db: Knex, scope: QuoteScope, opts: { status?: QuoteStatus; limit?: number } = {}) {
+export async function listQuotes(db: Knex, scope: QuoteScope, opts: { status?: QuoteStatus; limit?: number } = {}): Promise<QuoteListItem[]> {
   const q = scoped(db, scope)
     .join("customers as c", "c.id", "quotes.customer_id")
     .leftJoin("users as u", "u.id", "quotes.created_by")
@@ -141,7 +143,7 @@ export async function listQuotes(db: Knex, scope: QuoteScope, opts: { status?: Q
     .limit(opts.limit ?? 200)
     .select("quotes.id", "quotes.number", db.raw(`${EFFECTIVE_STATUS_SQL} as status`), "quotes.total_cents", "quotes.deposit_cents", "quotes.vehicle_description", "quotes.created_at", "quotes.valid_until", "c.name as customer_name", "u.name as created_by_name");
   if (opts.status) q.andWhereRaw(`${EFFECTIVE_STATUS_SQL} = ?`, [opts.status]);
-  return q;
+  return ((await q) as unknown as QuoteListRow[]).map(quoteListItemDto);
 }
 
 type LineDraft = Omit<QuoteLineRow, "id" | "quote_id" | "position" | "line_total_cents">;

@@ -1,7 +1,8 @@
 import "server-only";
 import { createHash, randomBytes } from "node:crypto";
 import type { Knex } from "knex";
-import type { Role, ShopSettingsRow, StaffInviteRow } from "@/lib/db/types";
+import type { ShopSettingsRow } from "@/lib/db/types";
+import { type StaffInvite, type TeamMember, staffInviteDto } from "@/lib/shop/api";
 import { hashPassword, verifyPassword } from "@/lib/auth/password";
 import { HttpError } from "@/lib/http/errors";
 import { passwordField } from "@/lib/validation/account";
@@ -34,32 +35,24 @@ export async function updateShopSettings(db: Knex, shopId: string, s: ShopSettin
   return row;
 }
 
-export interface TeamMember {
-  id: string;
-  name: string;
-  email: string;
-  role: Role;
-}
-
 export async function listTeam(db: Knex, shopId: string): Promise<TeamMember[]> {
   return db("users").where({ shop_id: shopId }).orderBy([{ column: "role", order: "desc" }, { column: "name" }]).select("id", "name", "email", "role");
 }
 
-export type InviteListItem = Pick<StaffInviteRow, "id" | "email" | "expires_at" | "created_at">;
-
 /** Invitations still usable (not used, revoked or expired). */
-export async function listOpenInvites(db: Knex, shopId: string): Promise<InviteListItem[]> {
-  return db("staff_invites")
+export async function listOpenInvites(db: Knex, shopId: string): Promise<StaffInvite[]> {
+  const rows = await db("staff_invites")
     .where({ shop_id: shopId })
     .whereNull("used_at")
     .whereNull("revoked_at")
     .andWhere("expires_at", ">", db.fn.now())
     .orderBy("created_at", "desc")
     .select("id", "email", "expires_at", "created_at");
+  return rows.map(staffInviteDto);
 }
 
 /** A new single-use invitation (256-bit URL-safe token; only its hash is kept). */
-export async function createInvite(db: Knex, shopId: string, email: string, invitedBy: string): Promise<{ token: string; invite: InviteListItem }> {
+export async function createInvite(db: Knex, shopId: string, email: string, invitedBy: string): Promise<{ token: string; invite: StaffInvite }> {
   const token = randomBytes(32).toString("base64url");
   const invite = await db.transaction(async (trx) => {
     // One open invitation per address: a new one replaces the old link.
@@ -78,7 +71,7 @@ export async function createInvite(db: Knex, shopId: string, email: string, invi
         expires_at: trx.raw("now() + make_interval(hours => ?)", [INVITE_TTL_HOURS]),
       })
       .returning(["id", "email", "expires_at", "created_at"]);
-    return row as InviteListItem;
+    return staffInviteDto(row);
   });
   return { token, invite };
 }

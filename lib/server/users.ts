@@ -2,6 +2,7 @@ import "server-only";
 import type { Knex } from "knex";
 import type { PublicUser, Role, UserRow } from "@/lib/db/types";
 import { bindAppDb } from "@/lib/db/bind";
+import { type AdminUser, adminUserDto } from "@/lib/users/api";
 
 const PUBLIC_COLUMNS = ["id", "email", "name", "role", "shop_id", "created_at", "updated_at"] as const;
 
@@ -40,11 +41,8 @@ export async function createUser(
   }
 }
 
-export interface UserListItem extends PublicUser {
-  shop_name: string | null;
-}
-
-export async function listUsers(db: Knex, opts: { search?: string; limit?: number; offset?: number } = {}) {
+/** Every account (or those whose e-mail or name matches), with its shop's name, oldest first. */
+export async function listUsers(db: Knex, opts: { search?: string; limit?: number; offset?: number } = {}): Promise<AdminUser[]> {
   const q = db("users as u")
     .leftJoin("shops as s", "s.id", "u.shop_id")
     .select("u.id", "u.email", "u.name", "u.role", "u.shop_id", "u.created_at", "u.updated_at", "s.name as shop_name")
@@ -53,7 +51,7 @@ export async function listUsers(db: Knex, opts: { search?: string; limit?: numbe
     const like = `%${opts.search.replace(/[%_\\]/g, (c) => "\\" + c)}%`;
     q.where((w) => w.whereILike("u.email", like).orWhereILike("u.name", like));
   }
-  return (await q.limit(opts.limit ?? 200).offset(opts.offset ?? 0)) as UserListItem[];
+  return ((await q.limit(opts.limit ?? 200).offset(opts.offset ?? 0)) as (PublicUser & { shop_name: string | null })[]).map(adminUserDto);
 }
 
 export async function setUserRole(db: Knex, id: string, role: Role, shopId: string | null) {

@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
+import { internalKeys } from "./support/apiKeys";
 import { rebuild, testDb } from "./support/db";
 import { ctx, req, sessionOf } from "./support/requests";
 
@@ -36,5 +37,22 @@ describe("admin users: refusals name the field as the page does", () => {
     expect((await unknown.json()).fieldErrors).toEqual({ role: ["Pick one of the roles in the list."] });
     const noShop = await patch({ role: "shop_staff", shopId: null });
     expect((await noShop.json()).fieldErrors).toEqual({ shopId: ["Shop roles need a shop."] });
+  });
+});
+
+describe("admin users: answers are the API shape", () => {
+  it("the list and a role change carry camelCase fields and ISO dates, never the password hash", async () => {
+    const shop = (await db("shops").insert({ name: "Admin Test Shop" }).returning("id"))[0].id as string;
+    const list = await (await users.GET(req("GET", "/api/admin/users?q=example"), ctx())).json();
+    expect(list.users.map((u: { email: string }) => u.email)).toEqual([ADMIN.email, MEMBER.email]);
+    expect(internalKeys(list)).toEqual([]);
+    const res = await user.PATCH(req("PATCH", `/api/admin/users/${MEMBER.id}`, { role: "shop_staff", shopId: shop }), ctx({ id: MEMBER.id }));
+    expect(res.status).toBe(200);
+    const changed = await res.json();
+    expect(internalKeys(changed)).toEqual([]);
+    // camelCase on purpose: lib/users/api.ts.
+    expect(changed.user).toMatchObject({ id: MEMBER.id, role: "shop_staff", shopId: shop, updatedAt: expect.stringMatching(/Z$/) });
+    const again = await (await users.GET(req("GET", "/api/admin/users?q=m%40example"), ctx())).json();
+    expect(again.users).toEqual([expect.objectContaining({ email: MEMBER.email, shopId: shop, shopName: "Admin Test Shop" })]);
   });
 });

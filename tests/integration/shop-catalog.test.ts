@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { CSV_COLUMNS, CSV_TEMPLATE, parseCatalogCsv } from "@/lib/catalog/csv";
+import { internalKeys } from "./support/apiKeys";
 import { rebuild, testDb } from "./support/db";
 import { ctx, req, sessionOf } from "./support/requests";
 
@@ -57,6 +58,7 @@ describe("catalog import", () => {
     expect(res.status).toBe(200);
     const p = await res.json();
     expect(p).toMatchObject({ total: 4, valid: 4, newItems: 4, updatedItems: 0, skippedRows: 0, problemCount: 0 });
+    expect(internalKeys(p)).toEqual([]);
     expect(await count()).toBe(0); // nothing until confirmed
     const c = await confirm(p.importId);
     expect(c.lines[0]).toEqual({ done: 0, total: 4 });
@@ -181,10 +183,11 @@ describe("catalog access", () => {
     const page = await (await list(req("GET", "/api/shop/catalog?kind=wheel&sort=price_cents&dir=desc&page=2&pageSize=10&q=BULK"), ctx())).json();
     expect(page.total).toBe(5000);
     expect(page.items).toHaveLength(10);
-    const prices = page.items.map((i: { price_cents: number }) => i.price_cents);
+    const prices = page.items.map((i: { priceCents: number }) => i.priceCents); // camelCase on purpose: the API shape, lib/catalog/api.ts
     expect([...prices].sort((a, b) => b - a)).toEqual(prices);
     expect(page.items.every((i: { kind: string }) => i.kind === "wheel")).toBe(true);
-    expect(Object.keys(page.items[0])).not.toContain("search_key"); // the stored search key stays in the database
+    expect(internalKeys(page)).toEqual([]); // the stored search key and the row's column names stay in the database
+    expect(page.items[0].updatedAt).toMatch(/^\d{4}-\d\d-\d\dT\d\d:\d\d:\d\d\.\d{3}Z$/);
     expect((await list(req("GET", "/api/shop/catalog?sort=password_hash"), ctx())).status).toBe(400);
   });
 

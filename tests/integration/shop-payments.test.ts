@@ -2,6 +2,7 @@ import { createServer } from "node:http";
 import { NextRequest } from "next/server";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { signPayload, startFakePay } from "@/scripts/services/fake-pay";
+import { internalKeys } from "./support/apiKeys";
 import { rebuild, testDb } from "./support/db";
 import { ctx, req, sessionOf } from "./support/requests";
 import { SHOP_A, U, VEHICLE, item, seedShops } from "./support/shopFixture";
@@ -81,7 +82,9 @@ describe("deposit through the payment SDK and the fake provider", () => {
   it("cannot pay before accepting; accepting is recorded as the customer's", async () => {
     first = await sentQuote();
     expect((await action(first.token, "pay")).status).toBe(409);
-    expect((await action(first.token, "accept")).status).toBe(200);
+    const accepted = await action(first.token, "accept");
+    expect(accepted.status).toBe(200);
+    expect(internalKeys(await accepted.json())).toEqual([]);
     const ev = await db("quote_events").where({ quote_id: first.id }).orderBy("id");
     expect(ev.at(-1)).toMatchObject({ from_status: "sent", to_status: "accepted", actor: "customer", actor_user_id: null });
   });
@@ -96,7 +99,9 @@ describe("deposit through the payment SDK and the fake provider", () => {
 
   it("paying on the hosted page sends a signed webhook; the SDK verifies it and the deposit is marked paid", async () => {
     const res = await action(first.token, "pay");
-    const { url } = await res.json();
+    const answer = await res.json();
+    expect(internalKeys(answer)).toEqual([]);
+    const { url } = answer;
     expect(url).toMatch(new RegExp(`^http://127\\.0\\.0\\.1:${pay.port}/pay/cs_test_`));
     const page = await fetch(url);
     expect(await page.text()).toContain("$1,076.96"); // the quote's deposit (see shop-quotes.test.ts for the arithmetic)

@@ -49,8 +49,11 @@ describe("customers", () => {
     as(U.staffA);
     const res = await customers.POST(req("POST", "/api/shop/customers", { name: "Dace Holloway", phone: "(555) 013-2277", email: "dace@example.test" }), ctx());
     expect(res.status).toBe(201);
-    customerId = (await res.json()).customer.id;
+    const made = await res.json();
+    expect(internalKeys(made)).toEqual([]);
+    customerId = made.customer.id;
     const byPhone = await (await customers.GET(req("GET", "/api/shop/customers?q=555-013-2277"), ctx())).json();
+    expect(internalKeys(byPhone)).toEqual([]);
     expect(byPhone.customers.map((c: { id: string }) => c.id)).toEqual([customerId]);
     const byMail = await (await customers.GET(req("GET", "/api/shop/customers?q=DACE@example.test"), ctx())).json();
     expect(byMail.customers).toHaveLength(1);
@@ -69,6 +72,8 @@ describe("fitment candidates", () => {
   it("offer only wheels of the vehicle's bolt pattern, ranked by the engine's comparison", async () => {
     as(U.staffA);
     const body = await (await candidates(req("POST", "/api/shop/fitment/candidates", VEHICLE), ctx())).json();
+    expect(internalKeys(body)).toEqual([]);
+    expect(body.picks[0].wheel).toMatchObject({ boltPattern: expect.stringMatching(/^6x/), centerBoreMm: 108 }); // camelCase on purpose: lib/catalog/api.ts
     // The template has two 6-lug wheels (6x5.5 and 6x139.7, equivalent) and one 17 in tire.
     expect(body.wheelsFitting).toBe(2);
     expect(body.picks).toHaveLength(2);
@@ -114,10 +119,15 @@ describe("quotes", () => {
     expect(d.quote.fitment.outerPokeChangeMm).toBeGreaterThan(25);
     // By hand: parts 4 × 389 + 4 × 465 = 3416.00 taxable; services 120 + 180 + 20 + 129 + 145 + 16 = 610.00 untaxed.
     // Tax 3416.00 × 8.25 % = 281.82; total 4026.00 + 281.82 = 4307.82; deposit 25 % = 1076.955 → 1076.96.
-    expect(d.quote).toMatchObject({ subtotal_cents: 402600, taxable_cents: 341600, tax_cents: 28182, total_cents: 430782, deposit_cents: 107696, status: "draft" });
-    expect(d.events).toEqual([expect.objectContaining({ to_status: "draft", actor: "Sam Staff", actor_user_id: U.staffA.id })]);
+    expect(d.quote).toMatchObject({ subtotalCents: 402600, taxableCents: 341600, taxCents: 28182, totalCents: 430782, depositCents: 107696, status: "draft" });
+    expect(d.events).toEqual([expect.objectContaining({ toStatus: "draft", actor: "Sam Staff", actorUserId: U.staffA.id })]);
+    expect(internalKeys(d)).toEqual([]);
+    expect(d.quote.createdAt).toMatch(/^\d{4}-\d\d-\d\dT\d\d:\d\d:\d\d\.\d{3}Z$/);
     const saved = await db("customer_vehicles").where({ customer_id: customerId });
     expect(saved).toHaveLength(1);
+    const again = await (await customerById(req("GET", `/api/shop/customers/${customerId}`), ctx({ id: customerId }))).json();
+    expect(again.vehicles).toHaveLength(1);
+    expect(internalKeys(again)).toEqual([]);
   });
 
   it("edits recompute totals on the server; a negative quantity is refused and nothing changes", async () => {
@@ -125,7 +135,9 @@ describe("quotes", () => {
     const line = { kind: "custom", sku: "", description: "Labour", quantity: 2, unitPriceCents: 6250, discountCents: 0, taxable: false };
     const ok = await quoteById.PUT(req("PUT", `/api/shop/quotes/${quoteId}`, { lines: [line], discountCents: 1000, notes: "" }), ctx({ id: quoteId }));
     expect(ok.status).toBe(200);
-    expect((await ok.json()).quote).toMatchObject({ subtotal_cents: 12500, discount_cents: 1000, tax_cents: 0, total_cents: 11500 });
+    const edited = await ok.json();
+    expect(internalKeys(edited)).toEqual([]);
+    expect(edited.quote).toMatchObject({ subtotalCents: 12500, discountCents: 1000, taxCents: 0, totalCents: 11500 });
     const bad = await quoteById.PUT(req("PUT", `/api/shop/quotes/${quoteId}`, { lines: [{ ...line, quantity: -4 }], discountCents: 0, notes: "" }), ctx({ id: quoteId }));
     expect(bad.status).toBe(422);
     expect((await bad.json()).fieldErrors["lines.0.quantity"]).toBeDefined();
@@ -145,7 +157,10 @@ describe("quotes", () => {
     }
     as(U.ownerA);
     expect((await quoteById.GET(req("GET", `/api/shop/quotes/${quoteId}`), ctx({ id: quoteId }))).status).toBe(200);
-    expect((await (await quotes.GET(req("GET", "/api/shop/quotes"), ctx())).json()).quotes).toHaveLength(1);
+    const list = await (await quotes.GET(req("GET", "/api/shop/quotes"), ctx())).json();
+    expect(list.quotes).toHaveLength(1);
+    expect(internalKeys(list)).toEqual([]);
+    expect(list.quotes[0]).toMatchObject({ customerName: "Dace Holloway", createdByName: "Sam Staff", totalCents: 11500 }); // camelCase on purpose: lib/quotes/api.ts
   });
 
   it("cannot use another shop's catalog items", async () => {
@@ -178,7 +193,7 @@ describe("sending", () => {
     const d = await res.json();
     expect(d.quote.status).toBe("sent");
     expect(internalKeys(d)).toEqual([]); // the link's token hash stays in the database
-    expect(d.events.map((e: { to_status: string; actor: string }) => `${e.to_status}:${e.actor}`)).toEqual(["draft:Sam Staff", "sent:Sam Staff"]);
+    expect(d.events.map((e: { toStatus: string; actor: string }) => `${e.toStatus}:${e.actor}`)).toEqual(["draft:Sam Staff", "sent:Sam Staff"]);
     expect(sent).toHaveLength(1);
     expect(sent[0]!.to).toBe("dace@example.test");
     const token = /\/q\/([A-Za-z0-9_-]{43})/.exec(sent[0]!.text)?.[1];
@@ -191,7 +206,7 @@ describe("sending", () => {
     expect(att.filename).toBe(`quote-Q-${d.quote.number}.pdf`);
     const text = await pdfText(att.content);
     const money = (c: number) => "$" + (c / 100).toLocaleString("en-US", { minimumFractionDigits: 2 });
-    for (const s of [`Quote Q-${d.quote.number}`, "Shop A", "Dace Holloway", "TR-EXAMPLE-35", money(d.quote.subtotal_cents), money(d.quote.tax_cents), money(d.quote.total_cents), money(d.quote.deposit_cents), "Bead seating", "Beadlock rings", "re-check"]) {
+    for (const s of [`Quote Q-${d.quote.number}`, "Shop A", "Dace Holloway", "TR-EXAMPLE-35", money(d.quote.subtotalCents), money(d.quote.taxCents), money(d.quote.totalCents), money(d.quote.depositCents), "Bead seating", "Beadlock rings", "re-check"]) {
       expect(text).toContain(s);
     }
     // 5 tires at 389.00 = 1,945.00 appears as a line amount.
@@ -215,6 +230,7 @@ describe("sending", () => {
     expect(edit.status).toBe(409);
     const back = await status(req("POST", `/api/shop/quotes/${sentId}/status`, { to: "draft" }), ctx({ id: sentId }));
     expect(back.status).toBe(200);
+    expect(internalKeys(await back.json())).toEqual([]);
     expect((await db("quotes").where({ id: sentId }).first()).public_token_hash).toBeNull();
   });
 
@@ -256,10 +272,10 @@ describe("labour in fractional hours", () => {
     expect(res.status).toBe(200);
     const d = await res.json();
     // Arithmetic: 1.5 × 145.00 = 217.50 (no rounding involved).
-    expect(d.lines[0]).toMatchObject({ quantity: 1.5, unit: "hour", line_total_cents: 21750 });
-    expect(d.quote).toMatchObject({ subtotal_cents: 21750, tax_cents: 0, total_cents: 21750 });
+    expect(d.lines[0]).toMatchObject({ quantity: 1.5, unit: "hour", lineTotalCents: 21750 });
+    expect(d.quote).toMatchObject({ subtotalCents: 21750, taxCents: 0, totalCents: 21750 });
     // Deposit 25 % of 217.50 = 54.375 → 54.38 (half a cent up); balance 217.50 − 54.38 = 163.12.
-    expect(d.quote.deposit_cents).toBe(5438);
+    expect(d.quote.depositCents).toBe(5438);
     const pdf = await pdfText(Buffer.from(await (await pdfRoute(req("GET", `/api/shop/quotes/${id}/pdf`), ctx({ id }))).arrayBuffer()));
     expect(pdf).toContain("1.5 h");
     expect(pdf).toContain("$217.50");
@@ -272,7 +288,7 @@ describe("labour in fractional hours", () => {
     for (const q of ["1 1/2", "1½", "1:30", "1.5 h"]) {
       const res = await put(id, [line(q)]);
       expect(res.status, q).toBe(200);
-      expect((await res.json()).lines[0].line_total_cents, q).toBe(21750);
+      expect((await res.json()).lines[0].lineTotalCents, q).toBe(21750);
     }
     // 1:20 is 1.333… h: not exact to the hundredth of an hour, so it is refused rather than rounded.
     const third = await put(id, [line("1:20")]);
@@ -288,7 +304,7 @@ describe("labour in fractional hours", () => {
     const labour = await put(id, [{ kind: "custom", unit: "hour", sku: "", description: "Labour", quantity: 0.25, unitPriceCents: 12500, discountCents: 0, taxable: false }]);
     expect(labour.status).toBe(200);
     // 0.25 × 125.00 = 31.25
-    expect((await labour.json()).lines[0]).toMatchObject({ quantity: 0.25, unit: "hour", line_total_cents: 3125 });
+    expect((await labour.json()).lines[0]).toMatchObject({ quantity: 0.25, unit: "hour", lineTotalCents: 3125 });
   });
 });
 
@@ -299,11 +315,11 @@ describe("any catalog item on a quote", () => {
       .returning("*");
     const { id } = await draftFor();
     const d0 = await detailOf(id);
-    const keep = d0.lines.map((l: Record<string, unknown>) => ({ kind: l.kind, unit: l.unit, catalogItemId: l.catalog_item_id, sku: l.sku, description: l.description, quantity: l.quantity, unitPriceCents: l.unit_price_cents, discountCents: l.discount_cents, taxable: l.taxable }));
+    const keep = d0.lines.map((l: Record<string, unknown>) => ({ kind: l.kind, unit: l.unit, catalogItemId: l.catalogItemId, sku: l.sku, description: l.description, quantity: l.quantity, unitPriceCents: l.unitPriceCents, discountCents: l.discountCents, taxable: l.taxable }));
     const res = await put(id, [...keep, { kind: "custom", catalogItemId: tpms.id, sku: "", description: "TPMS sensor service", quantity: 4, unitPriceCents: 1800, discountCents: 0, taxable: false }]);
     expect(res.status).toBe(200);
     const last = (await res.json()).lines.at(-1);
-    expect(last).toMatchObject({ kind: "service", sku: "SV-TPMS-T", quantity: 4, line_total_cents: 7200 });
+    expect(last).toMatchObject({ kind: "service", sku: "SV-TPMS-T", quantity: 4, lineTotalCents: 7200 });
   });
 });
 
@@ -322,7 +338,7 @@ describe("the wheel on the vehicle's hub", () => {
     const { res, id } = await draftFor({ ...VEHICLE, hubBoreMm: 108 }, "WH-T-110");
     expect(res.status).toBe(201);
     const d = await detailOf(id);
-    expect(d.quote.hub_bore_mm).toBe(108);
+    expect(d.quote.hubBoreMm).toBe(108);
     const rings = d.hubChecks.flatMap((c: { findings: { code: string; message: string }[] }) => c.findings).find((f: { code: string }) => f.code === "needs-rings");
     expect(rings.message).toMatch(/hub-centric rings/i);
     expect(rings.message).toMatch(/110\.1 mm.*108 mm/);
@@ -354,7 +370,7 @@ describe("balance due after the deposit", () => {
     const { id } = await draftFor();
     sent.length = 0;
     const d = await (await send(req("POST", `/api/shop/quotes/${id}/send`, {}), ctx({ id }))).json();
-    const balance = d.quote.total_cents - d.quote.deposit_cents;
+    const balance = d.quote.totalCents - d.quote.depositCents;
     expect(balance).toBeGreaterThan(0);
     expect(sent[0]!.text).toMatch(new RegExp(`balance.*\\${money(balance)}`, "i"));
     const pdf = await pdfText(sent[0]!.attachments![0]!.content);
@@ -398,7 +414,7 @@ describe("a sent quote is a frozen document", () => {
 describe("sending what the screen shows", () => {
   it("refuses to send when the quote changed after the version the sender saw (409, nothing sent)", async () => {
     const { id } = await draftFor();
-    const seen = (await detailOf(id)).quote.updated_at;
+    const seen = (await detailOf(id)).quote.updatedAt;
     await put(id, [{ kind: "custom", sku: "", description: "Changed in another tab", quantity: 1, unitPriceCents: 100, discountCents: 0, taxable: false }]);
     sent.length = 0;
     const res = await send(req("POST", `/api/shop/quotes/${id}/send`, { seenUpdatedAt: seen }), ctx({ id }));
@@ -406,7 +422,7 @@ describe("sending what the screen shows", () => {
     expect((await res.json()).error).toMatch(/changed/i);
     expect(sent).toHaveLength(0);
     expect((await db("quotes").where({ id }).first()).status).toBe("draft");
-    const now = (await detailOf(id)).quote.updated_at;
+    const now = (await detailOf(id)).quote.updatedAt;
     expect((await send(req("POST", `/api/shop/quotes/${id}/send`, { seenUpdatedAt: now }), ctx({ id }))).status).toBe(200);
   });
 });

@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
+import { internalKeys } from "./support/apiKeys";
 import { rebuild, testDb } from "./support/db";
 import { ctx, req, sessionOf } from "./support/requests";
 
@@ -59,6 +60,10 @@ describe("shop settings", () => {
     as(U.ownerA);
     const res = await settings.PUT(req("PUT", "/api/shop/settings", GOOD), ctx());
     expect(res.status).toBe(200);
+    const saved = await res.json();
+    expect(internalKeys(saved)).toEqual([]);
+    // camelCase on purpose: the API shape of lib/shop/api.ts.
+    expect(saved.shop).toMatchObject({ name: "Shop A Tire", taxRateBp: 825, labourRateCents: 12500, fabricationRateCents: 14250, quoteValidityDays: 10, depositPct: 30 });
     const row = await db("shops").where({ id: SHOP_A }).first();
     expect(row).toMatchObject({ name: "Shop A Tire", tax_rate_bp: 825, labour_rate_cents: 12500, fabrication_rate_cents: 14250, quote_validity_days: 10, deposit_pct: 30 });
   });
@@ -82,6 +87,7 @@ describe("shop settings", () => {
     as(U.ownerB);
     const body = await (await settings.GET(req("GET", "/api/shop/settings"), ctx())).json();
     expect(body.shop.id).toBe(SHOP_B);
+    expect(internalKeys(body)).toEqual([]);
   });
 });
 
@@ -92,6 +98,9 @@ describe("staff invitations", () => {
     sent.length = 0;
     const res = await staff.POST(req("POST", "/api/shop/staff", { email: "new-hire@example.test" }), ctx());
     expect(res.status).toBe(201);
+    const made = await res.json();
+    expect(internalKeys(made)).toEqual([]); // the invitation's token hash stays in the database
+    expect(made.invite).toMatchObject({ email: "new-hire@example.test", expiresAt: expect.stringMatching(/Z$/) });
     expect(sent).toHaveLength(1);
     token = /\/join\/([A-Za-z0-9_-]{43})/.exec(sent[0]!.text)?.[1] ?? "";
     expect(token).toHaveLength(43);
@@ -108,6 +117,7 @@ describe("staff invitations", () => {
     session.current = null;
     const res = await join(req("POST", "/api/join", { token, name: "New Hire", password: "a long enough pass" }), ctx());
     expect(res.status).toBe(200);
+    expect(internalKeys(await res.json())).toEqual([]);
     const user = await db("users").where({ email: "new-hire@example.test" }).first();
     expect(user).toMatchObject({ role: "shop_staff", shop_id: SHOP_A, name: "New Hire" });
     const again = await join(req("POST", "/api/join", { token, name: "Someone", password: "a long enough pass" }), ctx());
@@ -149,6 +159,8 @@ describe("staff invitations", () => {
     expect((await db("users").where({ id: U.staffA.id }).first()).shop_id).toBe(SHOP_A);
     const list = await (await staff.GET(req("GET", "/api/shop/staff"), ctx())).json();
     expect(list.invites.map((i: { email: string }) => i.email)).not.toContain("pending@example.test");
+    expect(list.team.length).toBeGreaterThan(0);
+    expect(internalKeys(list)).toEqual([]);
   });
 
   it("the owner removes a staff member: the account stays, as a member", async () => {

@@ -27,12 +27,12 @@ export function UserRow({ user, shops, self }: { user: UserItem; shops: { id: st
   const qc = useQueryClient();
   const noteId = useId();
   const [role, setRole] = useState<Role>(user.role);
-  const [shopId, setShopId] = useState<string>(user.shop_id ?? shops[0]?.id ?? "");
+  const [shopId, setShopId] = useState<string>(user.shopId ?? shops[0]?.id ?? "");
   const save = useMutation({
     mutationFn: () => api(`/api/admin/users/${user.id}`, { method: "PATCH", body: { role, shopId: isShopRole(role) ? shopId : null } }),
     onSuccess: () => qc.invalidateQueries({ queryKey: ["admin-users"] }),
   });
-  const changed = role !== user.role || (isShopRole(role) && shopId !== user.shop_id);
+  const changed = role !== user.role || (isShopRole(role) && shopId !== user.shopId);
   return (
     <tr className="max-md:flex max-md:flex-col max-md:gap-2 max-md:py-3">
       {/* A name or address that is one long word breaks anywhere rather than widening the page. */}

@@ -9,7 +9,7 @@ afterEach(() => {
   vi.unstubAllGlobals();
 });
 
-const person = (id: string, role: UserItem["role"], email: string): UserItem => ({ id, email, name: email.split("@")[0]!, role, shop_id: null, shop_name: null, created_at: "2026-12-01T00:00:00.000Z" });
+const person = (id: string, role: UserItem["role"], email: string): UserItem => ({ id, email, name: email.split("@")[0]!, role, shopId: null, shopName: null, createdAt: "2026-12-01T00:00:00.000Z", updatedAt: "2026-12-01T00:00:00.000Z" });
 const ME = person("ad000000-0000-4000-8000-000000000001", "admin", "me@example.test");
 const OTHER = person("ad000000-0000-4000-8000-000000000002", "member", "other@example.test");
 

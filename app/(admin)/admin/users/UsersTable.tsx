@@ -4,19 +4,12 @@ import { useState } from "react";
 import { Alert } from "@/components/ui/Alert";
 import { Card } from "@/components/ui/Card";
 import { api } from "@/lib/client/api";
-import type { Role } from "@/lib/db/types";
+import type { AdminUser } from "@/lib/users/api";
 import { USERS_SEARCH_LABEL } from "@/lib/validation/adminUsers";
 import { UserRow } from "./UserRow";
 
-export interface UserItem {
-  id: string;
-  email: string;
-  name: string;
-  role: Role;
-  shop_id: string | null;
-  shop_name: string | null;
-  created_at: string;
-}
+/** A row of the table: the API's AdminUser. */
+export type UserItem = AdminUser;
 
 /**
  * Every account with its role. From tablet width up a table; on a phone each account reflows

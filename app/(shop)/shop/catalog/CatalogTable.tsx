@@ -6,18 +6,11 @@ import { Alert } from "@/components/ui/Alert";
 import { Badge } from "@/components/ui/Badge";
 import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
+import type { CatalogItem, CatalogPage } from "@/lib/catalog/api";
 import { api } from "@/lib/client/api";
-import type { CatalogItemRow } from "@/lib/db/types";
 import { formatUsd } from "@/lib/quotes/money";
 import { CATALOG_QUERY_LABELS } from "@/lib/validation/catalog";
 
-type Item = Omit<CatalogItemRow, "created_at" | "updated_at"> & { updated_at: string };
-interface Page {
-  items: Item[];
-  total: number;
-  page: number;
-  pageSize: number;
-}
 
 const SERVICE_LABEL: Record<string, string> = {
   mount_balance: "Mount & balance",
@@ -31,13 +24,13 @@ const SERVICE_LABEL: Record<string, string> = {
 };
 const UNIT_LABEL: Record<string, string> = { per_wheel: "per wheel", per_vehicle: "per vehicle", per_hour: "per hour" };
 
-function details(i: Item): string {
-  if (i.kind === "tire") return i.tire_size ?? "";
+function details(i: CatalogItem): string {
+  if (i.kind === "tire") return i.tireSize ?? "";
   if (i.kind === "wheel") {
-    const off = i.wheel_backspacing_in !== null ? `${i.wheel_backspacing_in} in backspacing (${i.wheel_backspacing_ref})` : `${i.wheel_offset_mm} mm offset`;
-    return `${i.wheel_diameter_in}x${i.wheel_width_in} · ${off} · ${i.bolt_pattern}${i.center_bore_mm ? ` · bore ${i.center_bore_mm} mm` : ""}${i.beadlock ? " · beadlock" : ""}`;
+    const off = i.wheelBackspacingIn !== null ? `${i.wheelBackspacingIn} in backspacing (${i.wheelBackspacingRef})` : `${i.wheelOffsetMm} mm offset`;
+    return `${i.wheelDiameterIn}x${i.wheelWidthIn} · ${off} · ${i.boltPattern}${i.centerBoreMm ? ` · bore ${i.centerBoreMm} mm` : ""}${i.beadlock ? " · beadlock" : ""}`;
   }
-  return `${SERVICE_LABEL[i.service_type ?? "other"] ?? ""} · ${UNIT_LABEL[i.service_unit ?? ""] ?? ""}`;
+  return `${SERVICE_LABEL[i.serviceType ?? "other"] ?? ""} · ${UNIT_LABEL[i.serviceUnit ?? ""] ?? ""}`;
 }
 
 /** The catalog table: paging, sorting and filtering all happen on the server. */
@@ -61,18 +54,18 @@ export function CatalogTable() {
   });
   const data = useQuery({
     queryKey: ["shop-catalog", params.toString()],
-    queryFn: () => api<Page>(`/api/shop/catalog?${params}`),
+    queryFn: () => api<CatalogPage>(`/api/shop/catalog?${params}`),
     placeholderData: keepPreviousData,
   });
 
-  const columns = useMemo<ColumnDef<Item>[]>(
+  const columns = useMemo<ColumnDef<CatalogItem>[]>(
     () => [
       { id: "sku", accessorKey: "sku", header: "SKU" },
       { id: "kind", accessorKey: "kind", header: "Kind", cell: (c) => <Badge tone={c.row.original.kind === "tire" ? "steel" : c.row.original.kind === "wheel" ? "ember" : "neutral"}>{c.row.original.kind}</Badge> },
       { id: "description", accessorKey: "description", header: "Description" },
       { id: "tire_diameter_mm", header: "Size / details", cell: (c) => <span className="text-basalt-700">{details(c.row.original)}</span> },
-      { id: "price_cents", accessorKey: "price_cents", header: "Price", cell: (c) => <span className="tabular-nums">{formatUsd(c.row.original.price_cents)}</span> },
-      { id: "qty_on_hand", accessorKey: "qty_on_hand", header: "On hand", cell: (c) => <span className="tabular-nums">{c.row.original.qty_on_hand ?? "—"}</span> },
+      { id: "price_cents", accessorKey: "priceCents", header: "Price", cell: (c) => <span className="tabular-nums">{formatUsd(c.row.original.priceCents)}</span> },
+      { id: "qty_on_hand", accessorKey: "qtyOnHand", header: "On hand", cell: (c) => <span className="tabular-nums">{c.row.original.qtyOnHand ?? "—"}</span> },
     ],
     [],
   );

@@ -33,12 +33,12 @@ export default async function QuotesPage() {
               {quotes.map((q) => (
                 <tr key={q.id}>
                   <td className="py-2"><Link className="font-medium text-ember-700 underline" href={`/shop/quotes/${q.id}`}>Q-{q.number}</Link></td>
-                  <td>{q.customer_name}</td>
-                  <td>{q.vehicle_description}</td>
-                  <td><Badge tone={statusTone(q.status)}>{STATUS_LABEL[q.status as keyof typeof STATUS_LABEL]}</Badge></td>
-                  <td className="text-right tabular-nums">{formatUsd(q.total_cents)}</td>
-                  <td className="text-right tabular-nums">{formatUsd(q.deposit_cents)}</td>
-                  <td className="pl-3 text-basalt-600">{q.created_by_name ?? "—"}</td>
+                  <td>{q.customerName}</td>
+                  <td>{q.vehicleDescription}</td>
+                  <td><Badge tone={statusTone(q.status)}>{STATUS_LABEL[q.status]}</Badge></td>
+                  <td className="text-right tabular-nums">{formatUsd(q.totalCents)}</td>
+                  <td className="text-right tabular-nums">{formatUsd(q.depositCents)}</td>
+                  <td className="pl-3 text-basalt-600">{q.createdByName ?? "—"}</td>
                 </tr>
               ))}
             </tbody>

@@ -9,13 +9,9 @@ import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { TextField } from "@/components/ui/TextField";
 import { api, applyFieldErrors } from "@/lib/client/api";
-import type { Role } from "@/lib/db/types";
+import type { StaffData } from "@/lib/shop/api";
 import { type StaffInviteInput, staffInviteSchema } from "@/lib/validation/shop";
 
-interface StaffData {
-  team: { id: string; name: string; email: string; role: Role }[];
-  invites: { id: string; email: string; expires_at: string }[];
-}
 
 export function StaffPanel({ initial, selfId }: { initial: StaffData; selfId: string }) {
   const qc = useQueryClient();
@@ -92,7 +88,7 @@ export function StaffPanel({ initial, selfId }: { initial: StaffData; selfId: st
           <ul className="mt-2 divide-y divide-basalt-100 text-sm">
             {d.invites.map((i) => (
               <li key={i.id} className="flex flex-wrap items-center justify-between gap-2 py-2">
-                <span>{i.email} <span className="text-basalt-600">· expires {new Date(i.expires_at).toLocaleString("en-US")}</span></span>
+                <span>{i.email} <span className="text-basalt-600">· expires {new Date(i.expiresAt).toLocaleString("en-US")}</span></span>
                 <Button variant="ghost" className="min-h-8 py-1" onClick={() => revoke.mutate(i.id)}>Withdraw<span className="sr-only"> invitation for {i.email}</span></Button>
               </li>
             ))}

@@ -18,10 +18,7 @@ export default async function StaffPage() {
       />
       <StaffPanel
         selfId={caller.userId}
-        initial={{
-          team: team.map((t) => ({ ...t })),
-          invites: invites.map((i) => ({ id: i.id, email: i.email, expires_at: new Date(i.expires_at).toISOString() })),
-        }}
+        initial={{ team, invites }}
       />
     </>
   );

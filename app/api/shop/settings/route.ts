@@ -1,17 +1,18 @@
 import { notFound } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
+import { shopDto } from "@/lib/shop/api";
 import { SHOP_ANY, SHOP_OWNER, shopIdOf, shopQueries } from "@/lib/server/shops";
 import { shopSettingsSchema } from "@/lib/validation/shop";
 
 export const GET = route({ access: SHOP_ANY }, async ({ caller }) => {
   const shop = await shopQueries.getShop(shopIdOf(caller));
   if (!shop) throw notFound("Your shop");
-  return { shop };
+  return { shop: shopDto(shop) };
 });
 
 /** Owners only: staff read the settings but never change them. */
 export const PUT = route({ access: SHOP_OWNER, body: shopSettingsSchema }, async ({ caller, body }) => {
   const shop = await shopQueries.updateShopSettings(shopIdOf(caller), body);
   if (!shop) throw notFound("Your shop");
-  return { shop };
+  return { shop: shopDto(shop) };
 });

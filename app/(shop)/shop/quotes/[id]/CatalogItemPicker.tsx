@@ -4,24 +4,23 @@ import { useState } from "react";
 import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
 import { api } from "@/lib/client/api";
-import type { CatalogItemRow, CatalogKind } from "@/lib/db/types";
+import type { CatalogItem } from "@/lib/catalog/api";
+import type { CatalogKind } from "@/lib/db/types";
 import { checkWheelOnHub, hubRefusal } from "@/lib/quotes/hubFit";
 import { formatUsd } from "@/lib/quotes/money";
-
-type Item = Omit<CatalogItemRow, "created_at" | "updated_at">;
 
 /**
  * Finds any item of the shop's catalog (tires, wheels, every service) and adds it as a line.
  * A wheel is checked against the quoted vehicle's hub first: one that does not go on says why
  * and cannot be added; one that needs rings says so.
  */
-export function CatalogItemPicker({ vehicle, onAdd }: { vehicle: { boltPattern: string; hubBoreMm: number | null }; onAdd: (item: Item) => void }) {
+export function CatalogItemPicker({ vehicle, onAdd }: { vehicle: { boltPattern: string; hubBoreMm: number | null }; onAdd: (item: CatalogItem) => void }) {
   const [text, setText] = useState("");
   const [kind, setKind] = useState<"" | CatalogKind>("");
   const [asked, setAsked] = useState<{ q: string; kind: string } | null>(null);
   const found = useQuery({
     queryKey: ["quote-catalog-pick", asked],
-    queryFn: () => api<{ items: Item[]; total: number }>(`/api/shop/catalog?${new URLSearchParams({ q: asked!.q, kind: asked!.kind, pageSize: "10" })}`),
+    queryFn: () => api<{ items: CatalogItem[]; total: number }>(`/api/shop/catalog?${new URLSearchParams({ q: asked!.q, kind: asked!.kind, pageSize: "10" })}`),
     enabled: asked !== null,
   });
   return (
@@ -57,7 +56,7 @@ export function CatalogItemPicker({ vehicle, onAdd }: { vehicle: { boltPattern: 
       {found.data && found.data.items.length > 0 && (
         <ul className="mt-2 divide-y divide-basalt-100 text-sm" aria-label="Catalog items found">
           {found.data.items.map((it) => {
-            const hub = it.kind === "wheel" ? checkWheelOnHub(vehicle, { boltPattern: it.bolt_pattern, centerBoreMm: it.center_bore_mm }) : [];
+            const hub = it.kind === "wheel" ? checkWheelOnHub(vehicle, { boltPattern: it.boltPattern, centerBoreMm: it.centerBoreMm }) : [];
             const refusal = hubRefusal(hub);
             const rings = hub.find((f) => f.code === "needs-rings");
             return (
@@ -65,9 +64,9 @@ export function CatalogItemPicker({ vehicle, onAdd }: { vehicle: { boltPattern: 
                 <span className="min-w-0 flex-1">
                   <span className="font-medium">{it.description}</span>
                   <span className="block text-basalt-600">
-                    {it.sku} · {formatUsd(it.price_cents)}
-                    {it.kind === "wheel" && ` · ${it.bolt_pattern}${it.center_bore_mm ? ` · bore ${it.center_bore_mm} mm` : ""}`}
-                    {it.service_unit === "per_hour" && " · per hour"}
+                    {it.sku} · {formatUsd(it.priceCents)}
+                    {it.kind === "wheel" && ` · ${it.boltPattern}${it.centerBoreMm ? ` · bore ${it.centerBoreMm} mm` : ""}`}
+                    {it.serviceUnit === "per_hour" && " · per hour"}
                   </span>
                   {refusal && <span className="block text-contact-800">Does not fit: {refusal}</span>}
                   {rings && <span className="block text-tight-800">Check: {rings.message}</span>}

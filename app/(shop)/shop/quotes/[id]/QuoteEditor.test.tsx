@@ -6,7 +6,7 @@ import type { ReactNode } from "react";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { summarize } from "@/lib/quotes/fitment";
 import { QuoteEditor } from "./QuoteEditor";
-import type { Detail } from "./types";
+import type { QuoteDetail as Detail } from "@/lib/quotes/api";
 
 vi.mock("next/link", () => ({ default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => <a href={href} {...rest}>{children}</a> }));
 afterEach(() => {
@@ -18,16 +18,16 @@ afterEach(() => {
 const ID = "d0000000-0000-4000-8000-0000000000aa";
 const fit = summarize({ boltPattern: "6x5.5", tireSize: "265/70R17", wheel: { diameterIn: 17, widthIn: 8, offsetMm: 25 } }, "35x12.50R17LT", { diameterIn: 17, widthIn: 9, offsetMm: -12, beadlock: false });
 const line = (n: number, over: Partial<Detail["lines"][number]> = {}): Detail["lines"][number] => ({
-  id: `l000000${n}-0000-4000-8000-000000000000`, quote_id: ID, position: n, kind: "custom", unit: "each", catalog_item_id: null, sku: "", description: `Line ${n}`,
-  quantity: 1, unit_price_cents: 1000, discount_cents: 0, taxable: false, line_total_cents: 1000, wheel_bolt_pattern: null, wheel_center_bore_mm: null, ...over,
+  id: `l000000${n}-0000-4000-8000-000000000000`, position: n, kind: "custom", unit: "each", catalogItemId: null, sku: "", description: `Line ${n}`,
+  quantity: 1, unitPriceCents: 1000, discountCents: 0, taxable: false, lineTotalCents: 1000, wheelBoltPattern: null, wheelCenterBoreMm: null, ...over,
 });
-function detail(over: Partial<Detail["quote"]> = {}, lines = [line(1), line(2, { unit: "hour", description: "Labour", unit_price_cents: 12500, line_total_cents: 12500 })]): Detail {
+function detail(over: Partial<Detail["quote"]> = {}, lines = [line(1), line(2, { unit: "hour", description: "Labour", unitPriceCents: 12500, lineTotalCents: 12500 })]): Detail {
   return {
     quote: {
-      id: ID, shop_id: "s", number: 1042, customer_id: "c", vehicle_id: null, created_by: null, status: "draft", vehicle_description: "Test pickup", bolt_pattern: "6x5.5",
-      current_tire: "265/70R17", current_wheel_diameter_in: 17, current_wheel_width_in: 8, current_wheel_offset_mm: 25, axle_ratio: null, hub_bore_mm: 108, tire_item_id: null,
-      wheel_item_id: null, wheel_qty: 4, fitment: fit, discount_cents: 0, tax_rate_bp: 825, deposit_pct: 25, subtotal_cents: 13500, taxable_cents: 0, tax_cents: 0,
-      total_cents: 13500, deposit_cents: 3375, notes: "", valid_until: null, created_at: "2026-12-01T10:00:00.000Z", updated_at: "2026-12-01T10:00:00.123Z", ...over,
+      id: ID, number: 1042, customerId: "c", vehicleId: null, createdBy: null, status: "draft", vehicleDescription: "Test pickup", boltPattern: "6x5.5",
+      currentTire: "265/70R17", currentWheelDiameterIn: 17, currentWheelWidthIn: 8, currentWheelOffsetMm: 25, axleRatio: null, hubBoreMm: 108, tireItemId: null,
+      wheelItemId: null, wheelQty: 4, fitment: fit, discountCents: 0, taxRateBp: 825, depositPct: 25, subtotalCents: 13500, taxableCents: 0, taxCents: 0,
+      totalCents: 13500, depositCents: 3375, notes: "", validUntil: null, createdAt: "2026-12-01T10:00:00.000Z", updatedAt: "2026-12-01T10:00:00.123Z", ...over,
     },
     lines,
     events: [],
@@ -86,7 +86,7 @@ describe("the quote editor's unsaved changes", () => {
   });
 
   it("Send saves the pending edits first, then sends the version it saved", async () => {
-    const saved = detail({ updated_at: "2026-12-01T10:05:00.456Z", subtotal_cents: 15000 }, [line(1, { quantity: 2, line_total_cents: 2000 }), line(2, { unit: "hour", description: "Labour", quantity: 1.5, unit_price_cents: 12500, line_total_cents: 18750 })]);
+    const saved = detail({ updatedAt: "2026-12-01T10:05:00.456Z", subtotalCents: 15000 }, [line(1, { quantity: 2, lineTotalCents: 2000 }), line(2, { unit: "hour", description: "Labour", quantity: 1.5, unitPriceCents: 12500, lineTotalCents: 18750 })]);
     const calls = server((c) => (c.method === "PUT" ? { status: 200, body: saved } : { status: 200, body: { ...saved, quote: { ...saved.quote, status: "sent" } } }));
     const user = userEvent.setup();
     renderEditor();
@@ -127,8 +127,8 @@ describe("the quote editor's unsaved changes", () => {
 });
 
 describe("the quote editor's catalog and figures", () => {
-  const tpms = { id: "a0000000-0000-4000-8000-0000000000f1", kind: "service", sku: "SV-TPMS", description: "TPMS sensor service", price_cents: 1800, service_type: "tpms", service_unit: "per_wheel", bolt_pattern: null, center_bore_mm: null };
-  const narrow = { id: "a0000000-0000-4000-8000-0000000000f2", kind: "wheel", sku: "WH-1061", description: "Forged 17x9 106.1 bore", price_cents: 28900, bolt_pattern: "6x139.7", center_bore_mm: 106.1, service_unit: null };
+  const tpms = { id: "a0000000-0000-4000-8000-0000000000f1", kind: "service", sku: "SV-TPMS", description: "TPMS sensor service", priceCents: 1800, serviceType: "tpms", serviceUnit: "per_wheel", boltPattern: null, centerBoreMm: null };
+  const narrow = { id: "a0000000-0000-4000-8000-0000000000f2", kind: "wheel", sku: "WH-1061", description: "Forged 17x9 106.1 bore", priceCents: 28900, boltPattern: "6x139.7", centerBoreMm: 106.1, serviceUnit: null };
 
   it("adds any catalog item, a TPMS service included, as a line with the wheel count", async () => {
     const calls = server((c) => (c.url.startsWith("/api/shop/catalog") ? { status: 200, body: { items: [tpms], total: 1 } } : { status: 500, body: {} }));

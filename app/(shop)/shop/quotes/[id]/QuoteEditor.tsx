@@ -12,16 +12,14 @@ import { PageHeader } from "@/components/ui/PageHeader";
 import { ApiError, api } from "@/lib/client/api";
 import { type EditForm, type EditLine, bodyOf, formOf, isDirty, labourLine, lineFromCatalog, partsLine } from "@/lib/quotes/editLines";
 import { describeFieldErrors } from "@/lib/quotes/fieldLabels";
-import type { FitmentSummary } from "@/lib/quotes/fitment";
 import { STATUS_LABEL } from "@/lib/quotes/status";
 import { statusTone } from "../statusTone";
 import { CatalogItemPicker } from "./CatalogItemPicker";
 import { HubChecksCard } from "./HubChecksCard";
 import { QuoteLinesTable } from "./QuoteLinesTable";
 import { QuoteTotalsCard } from "./QuoteTotalsCard";
-import type { Detail } from "./types";
+import type { QuoteDetail as Detail } from "@/lib/quotes/api";
 
-export type { Detail } from "./types";
 
 const LEAVE = "This quote has changes that are not saved. Leave without saving them?";
 
@@ -73,10 +71,10 @@ export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; lab
   // also refuses a send when the quote changed after the version this screen last saw.
   const send = useMutation({
     mutationFn: async () => {
-      let seen = detail.quote.updated_at;
+      let seen = detail.quote.updatedAt;
       if (dirty) {
         try {
-          seen = (await saveNow()).quote.updated_at;
+          seen = (await saveNow()).quote.updatedAt;
         } catch (e) {
           throw new Problems(["Not sent: your changes could not be saved, so nothing went to the customer. Fix these and send again.", ...problemsOf(e)]);
         }
@@ -107,7 +105,7 @@ export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; lab
     setNotice(null);
     setForm((cur) => ({ ...cur, lines: f(cur.lines) }));
   };
-  const fit = q.fitment as FitmentSummary;
+  const fit = q.fitment;
 
   return (
     <>
@@ -122,8 +120,8 @@ export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; lab
                 <Badge tone="tight"><span data-testid="unsaved">Unsaved changes</span></Badge>{" "}
               </>
             )}
-            {detail.customer.name} · {q.vehicle_description}
-            {q.valid_until && ` · valid until ${new Date(q.valid_until).toLocaleDateString("en-US")}`}
+            {detail.customer.name} · {q.vehicleDescription}
+            {q.validUntil && ` · valid until ${new Date(q.validUntil).toLocaleDateString("en-US")}`}
           </>
         }
         actions={
@@ -182,9 +180,9 @@ export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; lab
                 </div>
                 <p className="mt-2 text-xs text-basalt-600">Hourly labour takes part hours: 1.5, 1 1/2, 1½ or 1:30 (to the hundredth of an hour).</p>
                 <CatalogItemPicker
-                  vehicle={{ boltPattern: q.bolt_pattern, hubBoreMm: q.hub_bore_mm }}
+                  vehicle={{ boltPattern: q.boltPattern, hubBoreMm: q.hubBoreMm }}
                   onAdd={(item) => {
-                    setLines((ls) => [...ls, lineFromCatalog(item, q.wheel_qty)]);
+                    setLines((ls) => [...ls, lineFromCatalog(item, q.wheelQty)]);
                     setNotice(`${item.description} added. Save the lines to keep it.`);
                   }}
                 />
@@ -197,8 +195,8 @@ export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; lab
           <QuoteTotalsCard quote={q} stale={dirty} />
           <HubChecksCard
             checks={detail.hubChecks}
-            hubBoreMm={q.hub_bore_mm}
-            boltPattern={q.bolt_pattern}
+            hubBoreMm={q.hubBoreMm}
+            boltPattern={q.boltPattern}
             haveLine={(d) => form.lines.some((l) => l.description === d)}
             onAddRings={draft ? (d, n) => setLines((ls) => [...ls, partsLine(d, n)]) : undefined}
           />
@@ -206,14 +204,14 @@ export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; lab
             <h2 className="text-lg font-semibold">Customer</h2>
             <p className="mt-1 break-words text-sm">{detail.customer.name}<br />{detail.customer.phone}<br />{detail.customer.email || <em>no e-mail — add one to send</em>}</p>
             <h2 className="mt-4 text-lg font-semibold">Vehicle</h2>
-            <p className="mt-1 text-sm">{q.vehicle_description}<br />Bolt pattern {q.bolt_pattern}{q.hub_bore_mm !== null && <>, hub bore {q.hub_bore_mm} mm</>}</p>
+            <p className="mt-1 text-sm">{q.vehicleDescription}<br />Bolt pattern {q.boltPattern}{q.hubBoreMm !== null && <>, hub bore {q.hubBoreMm} mm</>}</p>
           </Card>
           <Card>
             <h2 className="text-lg font-semibold">History</h2>
             <ol className="mt-2 flex flex-col gap-1 text-sm" data-testid="quote-history">
               {detail.events.map((e) => (
                 <li key={e.id}>
-                  <span className="font-medium">{STATUS_LABEL[e.to_status]}</span> — {e.actor}, {new Date(e.at).toLocaleString("en-US")}
+                  <span className="font-medium">{STATUS_LABEL[e.toStatus]}</span> — {e.actor}, {new Date(e.at).toLocaleString("en-US")}
                   {e.note && <span className="text-basalt-600"> ({e.note})</span>}
                 </li>
               ))}

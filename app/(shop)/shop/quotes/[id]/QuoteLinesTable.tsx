@@ -3,7 +3,7 @@ import { Button } from "@/components/ui/Button";
 import { type EditLine, lineUnchanged } from "@/lib/quotes/editLines";
 import { formatUsd } from "@/lib/quotes/money";
 import { formatQuantity } from "@/lib/quotes/quantity";
-import type { Detail } from "./types";
+import type { QuoteDetail as Detail } from "@/lib/quotes/api";
 
 const input = "w-full rounded border border-basalt-300 px-2 py-1";
 
@@ -53,7 +53,7 @@ export function QuoteLinesTable({ lines, saved, editable, onChange, onRemove }: 
               <td className="pr-2">
                 <input type="checkbox" aria-label={`Line ${n} is taxable`} className="size-4 accent-ember-600" disabled={!editable} checked={l.taxable} onChange={(e) => onChange(i, { taxable: e.target.checked })} />
               </td>
-              <td className="text-right tabular-nums">{s && lineUnchanged(l, saved) ? formatUsd(s.line_total_cents) : <span title="Save to compute">—</span>}</td>
+              <td className="text-right tabular-nums">{s && lineUnchanged(l, saved) ? formatUsd(s.lineTotalCents) : <span title="Save to compute">—</span>}</td>
               <td className="pl-2 text-right">
                 {editable && <Button variant="ghost" className="min-h-8 px-2 py-1" onClick={() => onRemove(i)}>✕<span className="sr-only">Remove line {n}</span></Button>}
               </td>

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { requirePageCaller } from "@/lib/auth/session";
 import { HttpError } from "@/lib/http/errors";
+import { quoteDetailDto } from "@/lib/quotes/api";
 import { quoteQueries, quoteScopeOf } from "@/lib/server/quotes";
 import { shopQueries } from "@/lib/server/shops";
 import { QuoteEditor } from "./QuoteEditor";
@@ -18,5 +19,5 @@ export default async function QuotePage({ params }: { params: Promise<{ id: stri
   });
   if (!detail) notFound();
   const shop = await shopQueries.getShop(detail.quote.shop_id);
-  return <QuoteEditor initial={JSON.parse(JSON.stringify(detail))} labourRateCents={shop?.labour_rate_cents ?? 0} />;
+  return <QuoteEditor initial={quoteDetailDto(detail)} labourRateCents={shop?.labour_rate_cents ?? 0} />;
 }

@@ -9,28 +9,14 @@ import { Badge } from "@/components/ui/Badge";
 import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { TextField } from "@/components/ui/TextField";
+import type { FitmentCandidates as Candidates } from "@/lib/catalog/api";
 import { ApiError, api, applyFieldErrors } from "@/lib/client/api";
-import type { CatalogItemRow, CustomerRow, CustomerVehicleRow } from "@/lib/db/types";
+import type { Customer, CustomerVehicle } from "@/lib/customers/api";
 import { mmToIn } from "@/lib/fitment";
-import type { FitmentSummary } from "@/lib/quotes/fitment";
 import { describeFieldErrors } from "@/lib/quotes/fieldLabels";
 import { formatUsd } from "@/lib/quotes/money";
 import { type CustomerInput, type Vehicle, type VehicleInput, customerSchema, vehicleSchema } from "@/lib/validation/quotes";
 
-type Customer = Omit<CustomerRow, "created_at" | "updated_at">;
-type Item = Pick<CatalogItemRow, "id" | "sku" | "description" | "price_cents" | "qty_on_hand" | "tire_size" | "wheel_diameter_in" | "wheel_width_in" | "wheel_offset_mm" | "bolt_pattern" | "center_bore_mm" | "beadlock">;
-interface Candidate {
-  tireId: string;
-  wheelId: string;
-  tire: Item;
-  wheel: Item;
-  summary: FitmentSummary;
-}
-interface Candidates {
-  wheelsFitting: number;
-  pairs: number;
-  picks: Candidate[];
-}
 
 const signed = (mm: number, digits = 0) => `${mm > 0 ? "+" : mm < 0 ? "−" : "±"}${Math.abs(mm).toFixed(digits)}`;
 const mmIn = (mm: number) => `${signed(mm)} mm (${signed(mmToIn(mm), 1)} in)`;
@@ -100,12 +86,12 @@ export function QuoteBuilder() {
                         <span className="grid flex-1 gap-2 text-sm md:grid-cols-[1.3fr_1.3fr_1fr]">
                           <span>
                             <span className="font-medium">{p.tire.description}</span>
-                            <span className="block text-basalt-600">{p.tire.tire_size} · {formatUsd(p.tire.price_cents)} · {p.tire.qty_on_hand ?? 0} on hand</span>
+                            <span className="block text-basalt-600">{p.tire.tireSize} · {formatUsd(p.tire.priceCents)} · {p.tire.qtyOnHand ?? 0} on hand</span>
                           </span>
                           <span>
                             <span className="font-medium">{p.wheel.description}</span>
                             <span className="block text-basalt-600">
-                              {s.planned.wheel} · {p.wheel.bolt_pattern}{p.wheel.center_bore_mm ? ` · bore ${p.wheel.center_bore_mm} mm` : ""} · {formatUsd(p.wheel.price_cents)} · {p.wheel.qty_on_hand ?? 0} on hand {p.wheel.beadlock && <Badge tone="ember">beadlock</Badge>}
+                              {s.planned.wheel} · {p.wheel.boltPattern}{p.wheel.centerBoreMm ? ` · bore ${p.wheel.centerBoreMm} mm` : ""} · {formatUsd(p.wheel.priceCents)} · {p.wheel.qtyOnHand ?? 0} on hand {p.wheel.beadlock && <Badge tone="ember">beadlock</Badge>}
                             </span>
                           </span>
                           <span className="text-basalt-800">
@@ -233,7 +219,7 @@ function VehicleStep(props: {
 }) {
   const saved = useQuery({
     queryKey: ["shop-customer", props.customerId],
-    queryFn: () => api<{ vehicles: CustomerVehicleRow[] }>(`/api/shop/customers/${props.customerId}`).then((r) => r.vehicles),
+    queryFn: () => api<{ vehicles: CustomerVehicle[] }>(`/api/shop/customers/${props.customerId}`).then((r) => r.vehicles),
   });
   const { register, handleSubmit, setError, formState, control, reset } = useForm<VehicleInput, unknown, Vehicle>({
     resolver: zodResolver(vehicleSchema),
@@ -250,19 +236,19 @@ function VehicleStep(props: {
       setFailure(applyFieldErrors(err, setError, ["description", "boltPattern", "hubBoreMm", "tireSize", "wheelDiameterIn", "wheelWidthIn", "offsetMm", "backspacingIn", "backspacingFrom", "axleRatio"]));
     }
   });
-  const applySaved = (v: CustomerVehicleRow) => {
+  const applySaved = (v: CustomerVehicle) => {
     reset({
       description: v.description,
-      boltPattern: v.bolt_pattern,
-      hubBoreMm: v.hub_bore_mm === null ? "" : String(v.hub_bore_mm),
-      tireSize: v.tire_size,
-      wheelDiameterIn: String(v.wheel_diameter_in),
-      wheelWidthIn: String(v.wheel_width_in),
+      boltPattern: v.boltPattern,
+      hubBoreMm: v.hubBoreMm === null ? "" : String(v.hubBoreMm),
+      tireSize: v.tireSize,
+      wheelDiameterIn: String(v.wheelDiameterIn),
+      wheelWidthIn: String(v.wheelWidthIn),
       offsetMode: "offset",
-      offsetMm: String(v.wheel_offset_mm),
+      offsetMm: String(v.wheelOffsetMm),
       backspacingIn: "",
       backspacingFrom: "bead-seat",
-      axleRatio: v.axle_ratio ? String(v.axle_ratio) : "",
+      axleRatio: v.axleRatio ? String(v.axleRatio) : "",
     } as unknown as VehicleInput);
     props.onSaved(v.id);
   };
@@ -275,7 +261,7 @@ function VehicleStep(props: {
           <span className="self-center text-basalt-600">Saved:</span>
           {saved.data.map((v) => (
             <Button key={v.id} variant={props.savedVehicle === v.id ? "primary" : "secondary"} className="min-h-8 py-1" onClick={() => applySaved(v)}>
-              {v.description} ({v.tire_size})
+              {v.description} ({v.tireSize})
             </Button>
           ))}
         </div>

@@ -3,6 +3,7 @@ import { HttpError, notFound } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
 import { shopQueries } from "@/lib/server/shops";
 import { userQueries } from "@/lib/server/users";
+import { userDto } from "@/lib/users/api";
 import { roleChangeSchema } from "@/lib/validation/account";
 
 const params = z.object({ id: z.uuid() });
@@ -17,5 +18,6 @@ export const PATCH = route({ access: ["admin"], params, body: roleChangeSchema }
   }
   if (!(await userQueries.findUserById(params.id))) throw notFound("That user");
   const user = await userQueries.setUserRole(params.id, body.role, body.shopId ?? null);
-  return { user };
+  if (!user) throw notFound("That user");
+  return { user: userDto(user) };
 });

@@ -1,3 +1,4 @@
+import { type FitmentCandidates, stockItemDto } from "@/lib/catalog/api";
 import { route } from "@/lib/http/route";
 import { rankPicks } from "@/lib/quotes/fitment";
 import { catalogQueries } from "@/lib/server/catalog";
@@ -5,7 +6,7 @@ import { SHOP_ANY, shopIdOf } from "@/lib/server/shops";
 import { resolveVehicle, vehicleSchema } from "@/lib/validation/quotes";
 
 /** The catalog's tire × wheel pairs that mount on this vehicle (drilling and hub bore), ranked by the engine's comparison. */
-export const POST = route({ access: SHOP_ANY, body: vehicleSchema }, async ({ caller, body }) => {
+export const POST = route({ access: SHOP_ANY, body: vehicleSchema }, async ({ caller, body }): Promise<FitmentCandidates> => {
   const shopId = shopIdOf(caller);
   const v = resolveVehicle(body);
   const { wheels, tires } = await catalogQueries.fitmentStock(shopId);
@@ -15,11 +16,11 @@ export const POST = route({ access: SHOP_ANY, body: vehicleSchema }, async ({ ca
     wheels.map((w) => ({ id: w.id, diameterIn: w.wheel_diameter_in!, widthIn: w.wheel_width_in!, offsetMm: w.wheel_offset_mm!, boltPattern: w.bolt_pattern!, beadlock: w.beadlock, centerBoreMm: w.center_bore_mm })),
     40,
   );
-  const byId = new Map([...tires, ...wheels].map((i) => [i.id, i]));
+  const byId = new Map([...tires, ...wheels].map((i) => [i.id, stockItemDto(i)]));
   return {
     vehicle: v,
     wheelsFitting: ranked.wheelsFitting,
     pairs: ranked.pairs,
-    picks: ranked.picks.map((p) => ({ ...p, tire: byId.get(p.tireId), wheel: byId.get(p.wheelId) })),
+    picks: ranked.picks.map((p) => ({ ...p, tire: byId.get(p.tireId)!, wheel: byId.get(p.wheelId)! })),
   };
 });

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { route } from "@/lib/http/route";
+import { quoteDetailDto } from "@/lib/quotes/api";
 import { quoteScopeOf } from "@/lib/server/quotes";
 import { quoteSendQueries } from "@/lib/server/quoteSend";
 import { SHOP_ANY } from "@/lib/server/shops";
@@ -10,5 +11,5 @@ import { sendQuoteSchema } from "@/lib/validation/quotes";
  * customer. With `seenUpdatedAt` a quote changed since the sender loaded it is refused (409).
  */
 export const POST = route({ access: SHOP_ANY, params: z.object({ id: z.uuid() }), body: sendQuoteSchema }, async ({ caller, params, body }) => {
-  return quoteSendQueries.sendQuote(quoteScopeOf(caller), params.id, { userId: caller.userId, label: caller.name || caller.email }, body.seenUpdatedAt);
+  return quoteDetailDto(await quoteSendQueries.sendQuote(quoteScopeOf(caller), params.id, { userId: caller.userId, label: caller.name || caller.email }, body.seenUpdatedAt));
 });
