@@ -6,6 +6,13 @@ import type { CatalogItemRow, CatalogKind, ServiceType, ServiceUnit } from "@/li
 import type { Pick as FitmentPick } from "@/lib/quotes/fitment";
 import type { resolveVehicle } from "@/lib/validation/quotes";
 
+/** The catalog's kinds as the kind filters list them (catalog page, the quote's catalog picker), in this order. */
+export const CATALOG_KIND_FILTERS: readonly { kind: CatalogKind; label: string }[] = [
+  { kind: "tire", label: "Tires" },
+  { kind: "wheel", label: "Wheels" },
+  { kind: "service", label: "Services" },
+];
+
 export interface CatalogItem {
   id: string;
   kind: CatalogKind;

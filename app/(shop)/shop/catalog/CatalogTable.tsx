@@ -6,7 +6,7 @@ import { Alert } from "@/components/ui/Alert";
 import { Badge } from "@/components/ui/Badge";
 import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
-import type { CatalogItem, CatalogPage } from "@/lib/catalog/api";
+import { CATALOG_KIND_FILTERS, type CatalogItem, type CatalogPage } from "@/lib/catalog/api";
 import { api } from "@/lib/client/api";
 import { formatUsd } from "@/lib/quotes/money";
 import { CATALOG_QUERY_LABELS } from "@/lib/validation/catalog";
@@ -116,9 +116,9 @@ export function CatalogTable() {
             }}
           >
             <option value="">All</option>
-            <option value="tire">Tires</option>
-            <option value="wheel">Wheels</option>
-            <option value="service">Services</option>
+            {CATALOG_KIND_FILTERS.map((k) => (
+              <option key={k.kind} value={k.kind}>{k.label}</option>
+            ))}
           </select>
         </label>
         <p className="ml-auto text-sm text-basalt-600" aria-live="polite">{data.isFetching ? "Loading…" : `${total.toLocaleString("en-US")} items`}</p>

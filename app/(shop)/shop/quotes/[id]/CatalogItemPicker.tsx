@@ -4,7 +4,7 @@ import { useState } from "react";
 import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
 import { api } from "@/lib/client/api";
-import type { CatalogItem } from "@/lib/catalog/api";
+import { CATALOG_KIND_FILTERS, type CatalogItem } from "@/lib/catalog/api";
 import type { CatalogKind } from "@/lib/db/types";
 import { checkWheelOnHub, hubRefusal } from "@/lib/quotes/hubFit";
 import { formatUsd } from "@/lib/quotes/money";
@@ -42,9 +42,9 @@ export function CatalogItemPicker({ vehicle, onAdd }: { vehicle: { boltPattern: 
           Kind
           <select className="min-h-10 rounded-lg border border-basalt-300 px-3" value={kind} onChange={(e) => setKind(e.target.value as "" | CatalogKind)}>
             <option value="">All</option>
-            <option value="tire">Tires</option>
-            <option value="wheel">Wheels</option>
-            <option value="service">Services</option>
+            {CATALOG_KIND_FILTERS.map((k) => (
+              <option key={k.kind} value={k.kind}>{k.label}</option>
+            ))}
           </select>
         </label>
         <Button type="submit" variant="secondary" pending={found.isFetching}>Find</Button>
