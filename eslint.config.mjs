@@ -5,9 +5,9 @@ import { boundaries } from "./scripts/lint/boundaries.mjs";
 
 /** The database handle (and the helper that hands it out) stay inside query modules. */
 const DB_HANDLE = [
-  { name: "@/lib/db", importNames: ["db"], message: "Pages and route handlers call the feature's query module (lib/server/*Queries), never the database handle." },
-  { name: "@/lib/db/index", importNames: ["db"], message: "Pages and route handlers call the feature's query module (lib/server/*Queries), never the database handle." },
-  { name: "@/lib/db/bind", message: "Binding queries to the handle belongs in the query module, not in app/." },
+  { name: "@/lib/platform/db", importNames: ["db"], message: "Pages and route handlers call the feature's query module (lib/<feature>/queries.ts, bound as *Queries), never the database handle." },
+  { name: "@/lib/platform/db/index", importNames: ["db"], message: "Pages and route handlers call the feature's query module (lib/<feature>/queries.ts, bound as *Queries), never the database handle." },
+  { name: "@/lib/platform/db/bind", message: "Binding queries to the handle belongs in the query module, not in app/." },
 ];
 
 const config = [
@@ -29,6 +29,6 @@ const config = [
     files: ["lib/**/*.{ts,tsx}"],
     rules: { "no-restricted-imports": ["error", { patterns: [{ group: ["@/app/*", "@/components/*"], message: "lib/ is below app/ and components/: move the shared code into lib/." }] }] },
   },
-  { files: ["app/**/*.{ts,tsx}", "components/**/*.{ts,tsx}", "lib/**/*.{ts,tsx}"], rules: { "hubface/client-no-server": "error" } },
+  { files: ["app/**/*.{ts,tsx}", "components/**/*.{ts,tsx}", "lib/**/*.{ts,tsx}"], rules: { "hubface/client-no-server": "error", "hubface/tables-in-queries": "error" } },
 ];
 export default config;

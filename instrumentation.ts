@@ -11,7 +11,7 @@ import type { Instrumentation } from "next";
 export async function register() {
   if (process.env.NEXT_RUNTIME === "nodejs") {
     if (process.env.NODE_ENV === "development" && process.env.HUBFACE_JOBS !== "off") {
-      const { startWorkers } = await import("@/lib/jobs/workers");
+      const { startWorkers } = await import("@/lib/platform/jobs/workers");
       await startWorkers().catch((error: unknown) => console.error("job workers did not start:", (error as Error).message));
     }
   }
@@ -24,7 +24,7 @@ export async function register() {
  */
 export const onRequestError: Instrumentation.onRequestError = async (error, request, context) => {
   if (process.env.NEXT_RUNTIME === "nodejs") {
-    const { log, redactUrl } = await import("@/lib/log");
+    const { log, redactUrl } = await import("@/lib/platform/log");
     const header = request.headers["x-request-id"];
     const err = error as Error & { digest?: string };
     log().error(

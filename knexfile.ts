@@ -1,5 +1,5 @@
 import type { Knex } from "knex";
-import { databaseUrl } from "./lib/db/config";
+import { databaseUrl } from "./lib/platform/db/config";
 
 // The knex CLI loads this through tsx (see package.json db:* scripts).
 const config: Knex.Config = {

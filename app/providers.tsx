@@ -1,7 +1,7 @@
 "use client";
 import { QueryClientProvider } from "@tanstack/react-query";
 import type { ReactNode } from "react";
-import { getQueryClient } from "@/lib/query/client";
+import { getQueryClient } from "@/lib/platform/query/client";
 
 export function Providers({ children }: { children: ReactNode }) {
   return <QueryClientProvider client={getQueryClient()}>{children}</QueryClientProvider>;

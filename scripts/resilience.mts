@@ -22,7 +22,7 @@ import { ListObjectsV2Command, S3Client } from "@aws-sdk/client-s3";
 import autocannon, { type Result } from "autocannon";
 import pg from "pg";
 import sharp from "sharp";
-import { DEFAULT_INPUT } from "@/lib/comparison/schema";
+import { DEFAULT_INPUT } from "@/lib/comparisons/schema";
 
 const env = (name: string): string => {
   const v = process.env[name];
@@ -425,7 +425,7 @@ async function phaseTwoServers(a: Server, b: Server) {
     await sleep(10);
   }
 
-  // Sign-ups from one address, alternating A and B: the limit is 20 an hour per address (lib/server/limits.ts).
+  // Sign-ups from one address, alternating A and B: the limit is 20 an hour per address (lib/platform/limits/limits.ts).
   const signUps: { server: "A" | "B"; status: number }[] = [];
   for (let i = 0; i < 24; i++) {
     const server = i % 2 === 0 ? "A" : "B";

@@ -1,12 +1,12 @@
 /**
  * The production server: Next's request handler behind the share pages' micro-cache
- * (lib/http/microcache.ts), one JSON log line per request, and the background job workers
- * (lib/jobs: queued mail, the quote expiry schedule). `npm start` and the browser tests run it:
+ * (lib/platform/http/microcache.ts), one JSON log line per request, and the background job workers
+ * (lib/platform/jobs: queued mail, the quote expiry schedule). `npm start` and the browser tests run it:
  *
  *   tsx scripts/serve.ts [--hostname 127.0.0.1] [--port 3000]
  *
  * Needs a `next build` first. HUBFACE_MICROCACHE=off serves through Next alone (for comparing).
- * Every server listens for share-page purges from the others (PostgreSQL NOTIFY, lib/http/sharePurge.ts).
+ * Every server listens for share-page purges from the others (PostgreSQL NOTIFY, lib/platform/http/sharePurge.ts).
  * HUBFACE_JOBS=off leaves the job workers to another process (see README "Beyond one machine").
  * SIGTERM/SIGINT: stop taking requests (readiness answers 503), finish those in flight, let
  * running jobs finish, then exit.
@@ -16,12 +16,12 @@ import { register } from "node:module";
 import { parseArgs } from "node:util";
 import next from "next";
 import { getToken } from "next-auth/jwt";
-import { CLIENT_ADDRESS_HEADER, resolveClientAddress, trustClientAddressHeader, trustedProxies } from "@/lib/auth/clientAddress";
-import { Microcache, installSharedMicrocache } from "@/lib/http/microcache";
-import { ownServerPurge, selfUrl, startSharePurgeListener } from "@/lib/http/sharePurge";
-import { databaseUrl } from "@/lib/db/config";
-import { log } from "@/lib/log";
-import { withRequestLog } from "@/lib/log/request";
+import { CLIENT_ADDRESS_HEADER, resolveClientAddress, trustClientAddressHeader, trustedProxies } from "@/lib/platform/auth/clientAddress";
+import { Microcache, installSharedMicrocache } from "@/lib/platform/http/microcache";
+import { ownServerPurge, selfUrl, startSharePurgeListener } from "@/lib/platform/http/sharePurge";
+import { databaseUrl } from "@/lib/platform/db/config";
+import { log } from "@/lib/platform/log";
+import { withRequestLog } from "@/lib/platform/log/request";
 
 // Before any app module that says `import "server-only"` is loaded (the job workers below).
 register("./hooks/server-only.mjs", import.meta.url);
@@ -39,8 +39,8 @@ await app.prepare();
 const cache = process.env.HUBFACE_MICROCACHE === "off" ? undefined : new Microcache({ paths: /^\/s\/[A-Za-z0-9_-]{16,64}$/ });
 installSharedMicrocache(cache);
 
-const jobs = process.env.HUBFACE_JOBS === "off" ? undefined : await import("@/lib/jobs/workers");
-const boss = await import("@/lib/jobs/boss");
+const jobs = process.env.HUBFACE_JOBS === "off" ? undefined : await import("@/lib/platform/jobs/workers");
+const boss = await import("@/lib/platform/jobs/boss");
 if (jobs) {
   // A database that is down at start must not keep the web server from starting: retry in the background.
   const start = (): Promise<unknown> =>
@@ -89,7 +89,7 @@ server.keepAliveTimeout = 65_000;
 server.listen(port, hostname, () => log().info({ url: `http://${hostname}:${port}`, microcache: Boolean(cache), jobs: Boolean(jobs) }, "Hubface listening"));
 
 // Revokes and edits on any app server reach this one's cached share pages through PostgreSQL
-// NOTIFY (lib/http/sharePurge.ts); the listener keeps reconnecting while the database is away.
+// NOTIFY (lib/platform/http/sharePurge.ts); the listener keeps reconnecting while the database is away.
 // It asks this server's own Next to drop a page, so it starts once the server is listening.
 const purges = startSharePurgeListener({ connectionString: databaseUrl(), ...ownServerPurge(selfUrl(hostname, port), cache) });
 

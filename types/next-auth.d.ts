@@ -1,4 +1,4 @@
-import type { Role } from "@/lib/db/types";
+import type { Role } from "@/lib/platform/db/types";
 import "next-auth";
 import "next-auth/jwt";
 
@@ -13,7 +13,7 @@ declare module "next-auth/jwt" {
     uid?: string;
     role?: Role;
     shopId?: string | null;
-    /** This session's id: sign-out revokes it (lib/server/sessions.ts). */
+    /** This session's id: sign-out revokes it (lib/accounts/sessionQueries.ts). */
     sid?: string;
     /** The user's session_version when the session was made: a raised version ends it. */
     sv?: number;

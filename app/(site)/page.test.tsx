@@ -4,7 +4,7 @@ import type { ReactNode } from "react";
 import { afterEach, describe, expect, it, vi } from "vitest";
 
 const caller = vi.hoisted(() => ({ current: null as unknown }));
-vi.mock("@/lib/auth/session", () => ({ currentCaller: async () => caller.current }));
+vi.mock("@/lib/platform/auth/session", () => ({ currentCaller: async () => caller.current }));
 vi.mock("next/link", () => ({ default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => <a href={href} {...rest}>{children}</a> }));
 
 const { default: HomePage } = await import("./page");

@@ -1,7 +1,7 @@
 import Link from "next/link";
 import { buttonClass } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
-import { currentCaller } from "@/lib/auth/session";
+import { currentCaller } from "@/lib/platform/auth/session";
 
 /** The tools anyone can use at once: no account, nothing to sign. */
 const FREE_TOOLS = [

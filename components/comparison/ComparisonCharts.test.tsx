@@ -3,9 +3,9 @@ import { cleanup, render, screen } from "@testing-library/react";
 import type { ReactElement } from "react";
 import { cloneElement } from "react";
 import { afterEach, describe, expect, it, vi } from "vitest";
-import { computeComparison } from "@/lib/comparison/compute";
-import type { DisplayPrefs } from "@/lib/comparison/format";
-import { DEFAULT_INPUT } from "@/lib/comparison/schema";
+import { computeComparison } from "@/lib/comparisons/compute";
+import type { DisplayPrefs } from "@/lib/comparisons/format";
+import { DEFAULT_INPUT } from "@/lib/comparisons/schema";
 import ComparisonCharts from "./ComparisonCharts";
 
 // jsdom lays nothing out, so the responsive wrapper would measure 0 × 0 and draw nothing:

@@ -1,7 +1,7 @@
 "use client";
 import { Bar, BarChart, CartesianGrid, Cell, Legend, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
-import type { ComparisonResult } from "@/lib/comparison/compute";
-import { type DisplayPrefs, formatNumber } from "@/lib/comparison/format";
+import type { ComparisonResult } from "@/lib/comparisons/compute";
+import { type DisplayPrefs, formatNumber } from "@/lib/comparisons/format";
 import { mmToIn } from "@/lib/fitment";
 import { speedCharts } from "./chartData";
 import { CHART_HEIGHT_RESERVED } from "./chartSize";

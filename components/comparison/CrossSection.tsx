@@ -1,5 +1,5 @@
-import type { ComparisonResult, SetupFigures } from "@/lib/comparison/compute";
-import { type DisplayPrefs, formatLen } from "@/lib/comparison/format";
+import type { ComparisonResult, SetupFigures } from "@/lib/comparisons/compute";
+import { type DisplayPrefs, formatLen } from "@/lib/comparisons/format";
 import { inToMm } from "@/lib/fitment";
 
 /**

@@ -1,5 +1,5 @@
 "use client";
-import type { DisplayPrefs } from "@/lib/comparison/format";
+import type { DisplayPrefs } from "@/lib/comparisons/format";
 import { Segmented } from "./Segmented";
 
 /** The one unit switch (inch / metric) and the length style (decimals / fractions). */

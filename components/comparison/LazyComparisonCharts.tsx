@@ -1,7 +1,7 @@
 "use client";
 import dynamic from "next/dynamic";
-import type { ComparisonResult } from "@/lib/comparison/compute";
-import type { DisplayPrefs } from "@/lib/comparison/format";
+import type { ComparisonResult } from "@/lib/comparisons/compute";
+import type { DisplayPrefs } from "@/lib/comparisons/format";
 import { CHART_HEIGHT_RESERVED } from "./chartSize";
 
 function ChartsPlaceholder() {

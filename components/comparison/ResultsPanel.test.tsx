@@ -1,9 +1,9 @@
 // @vitest-environment jsdom
 import { cleanup, render, screen, within } from "@testing-library/react";
 import { afterEach, describe, expect, it } from "vitest";
-import { computeComparison } from "@/lib/comparison/compute";
-import type { DisplayPrefs } from "@/lib/comparison/format";
-import { DEFAULT_INPUT } from "@/lib/comparison/schema";
+import { computeComparison } from "@/lib/comparisons/compute";
+import type { DisplayPrefs } from "@/lib/comparisons/format";
+import { DEFAULT_INPUT } from "@/lib/comparisons/schema";
 import { HeadlineChanges, SetupDetailTable, WarningList } from "./ResultsPanel";
 
 const inch: DisplayPrefs = { units: "imperial", lengths: "decimal" };

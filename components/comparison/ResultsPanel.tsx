@@ -1,7 +1,7 @@
 import type { ReactNode } from "react";
 import { cx } from "@/components/ui/cx";
-import type { ComparisonResult, SetupFigures } from "@/lib/comparison/compute";
-import { speedometerSentence } from "@/lib/comparison/speedometer";
+import type { ComparisonResult, SetupFigures } from "@/lib/comparisons/compute";
+import { speedometerSentence } from "@/lib/comparisons/speedometer";
 import {
   type DisplayPrefs,
   formatEnteredSpeed,
@@ -15,7 +15,7 @@ import {
   formatSpeedIn,
   formatSpeedRating,
   warningTitle,
-} from "@/lib/comparison/format";
+} from "@/lib/comparisons/format";
 
 /**
  * Read-only results of a comparison: the headline changes, the warnings and the detail table.

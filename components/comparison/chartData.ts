@@ -1,6 +1,6 @@
-import type { ComparisonResult } from "@/lib/comparison/compute";
-import type { DisplayPrefs } from "@/lib/comparison/format";
-import type { SpeedSystem } from "@/lib/comparison/speedometer";
+import type { ComparisonResult } from "@/lib/comparisons/compute";
+import type { DisplayPrefs } from "@/lib/comparisons/format";
+import type { SpeedSystem } from "@/lib/comparisons/speedometer";
 
 /**
  * Ticks of the speed axes, in the reader's unit: every 10 mph; every 20 km/h (ten ticks from

@@ -1,6 +1,6 @@
 "use client";
 import { useCallback, useSyncExternalStore } from "react";
-import { DEFAULT_PREFS, type DisplayPrefs, PREFS_STORAGE_KEY, parsePrefs } from "@/lib/comparison/format";
+import { DEFAULT_PREFS, type DisplayPrefs, PREFS_STORAGE_KEY, parsePrefs } from "@/lib/comparisons/format";
 
 /**
  * The reader's unit choice (inch/metric, decimals/fractions), remembered in localStorage and

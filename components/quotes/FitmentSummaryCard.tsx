@@ -1,6 +1,6 @@
 import { Card } from "@/components/ui/Card";
-import { quoteCautions } from "@/lib/quotes/cautions";
-import { type FitmentSummary, fitmentChangeRows } from "@/lib/quotes/fitment";
+import { quoteCautions } from "@/lib/shop/quotes/cautions";
+import { type FitmentSummary, fitmentChangeRows } from "@/lib/shop/quotes/fitment";
 
 /** The key changes of a quoted fitment, the modifications it needs, and the cautions. */
 export function FitmentSummaryCard({ fit }: { fit: FitmentSummary }) {

@@ -1,4 +1,4 @@
-import type { HubCheck } from "@/lib/quotes/document";
+import type { HubCheck } from "@/lib/shop/quotes/document";
 
 const TONE = { refuse: "text-contact-800", caution: "text-tight-800", ok: "text-basalt-700" } as const;
 const WORD = { refuse: "Does not fit", caution: "Check", ok: "Fits" } as const;

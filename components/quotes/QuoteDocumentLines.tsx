@@ -1,6 +1,6 @@
-import type { QuoteDocument } from "@/lib/quotes/document";
-import { formatBp, formatUsd } from "@/lib/quotes/money";
-import { formatQuantity } from "@/lib/quotes/quantity";
+import type { QuoteDocument } from "@/lib/shop/quotes/document";
+import { formatBp, formatUsd } from "@/lib/shop/quotes/money";
+import { formatQuantity } from "@/lib/shop/quotes/quantity";
 
 /**
  * A quote document's lines and totals for the customer: a table from 640 px up, and one card per

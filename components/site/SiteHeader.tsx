@@ -1,7 +1,7 @@
 import Link from "next/link";
 import { Logo } from "@/components/ui/Logo";
 import { buttonClass } from "@/components/ui/Button";
-import { currentCaller } from "@/lib/auth/session";
+import { currentCaller } from "@/lib/platform/auth/session";
 import { SignOutButton } from "./SignOutButton";
 import { visibleNav } from "./nav";
 

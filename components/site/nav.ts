@@ -1,4 +1,4 @@
-import type { Role } from "@/lib/db/types";
+import type { Role } from "@/lib/platform/db/types";
 
 export interface NavItem {
   href: string;

@@ -3,8 +3,8 @@ import type { Knex } from "knex";
 /**
  * Saved comparisons and their public share links.
  *
- * `input` is the comparison as validated by lib/comparison/schema.ts; the key figure columns
- * beside it are computed on the server (lib/comparison/compute.ts) every time the input is
+ * `input` is the comparison as validated by lib/comparisons/schema.ts; the key figure columns
+ * beside it are computed on the server (lib/comparisons/compute.ts) every time the input is
  * written, so lists can search and sort without opening the JSON.
  *
  * `vehicle_id` has no foreign key yet: the garage's vehicles table arrives in its own

@@ -19,7 +19,7 @@ export async function up(knex: Knex): Promise<void> {
     t.double("bolt_pcd_mm").notNullable();
     t.integer("bolt_count").notNullable();
     t.double("hub_bore_mm").nullable();
-    /** Validated setups (lib/validation/setup.ts), JSONB. */
+    /** Validated setups (lib/setup/schema.ts), JSONB. */
     t.jsonb("stock_setup").notNullable();
     t.jsonb("current_setup").notNullable();
     t.double("lift_height_mm").nullable();

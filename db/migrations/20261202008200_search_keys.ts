@@ -5,7 +5,7 @@ import type { Knex } from "knex";
  * LIKE over a stored column instead of folding every row on every keystroke (a 10,000-item
  * catalog: about 1 s folded per query, a few ms stored).
  *
- * hubface_search_key() is the SQL twin of searchKey() in lib/search/normalize.ts: same steps,
+ * hubface_search_key() is the SQL twin of searchKey() in lib/platform/search/normalize.ts: same steps,
  * same letter table. tests/integration/search-key.test.ts runs both over the same texts, so a
  * change to one without the other (and a migration re-creating this function) fails there.
  * Core PostgreSQL only (normalize() is in 13+): no extension to install. knex reads ? as a

@@ -1,7 +1,7 @@
 import type { Knex } from "knex";
 
 /**
- * Idempotency-Key records for the create routes (lib/http/idempotency.ts): one row per caller,
+ * Idempotency-Key records for the create routes (lib/platform/http/idempotency.ts): one row per caller,
  * route and key, reserved before the create runs and completed with its response after, so a
  * retry of a create whose answer was lost replays that answer instead of creating again.
  */

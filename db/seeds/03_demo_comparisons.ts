@@ -1,7 +1,7 @@
 import { randomBytes } from "node:crypto";
 import type { Knex } from "knex";
-import { keyFigureColumns } from "../../lib/comparison/keyFigures";
-import { type ComparisonInput, comparisonInputSchema } from "../../lib/comparison/schema";
+import { keyFigureColumns } from "../../lib/comparisons/keyFigures";
+import { type ComparisonInput, comparisonInputSchema } from "../../lib/comparisons/schema";
 
 /**
  * Saved comparisons for the demo member (invented builds). The third has a live share link

@@ -1,11 +1,11 @@
 import type { Knex } from "knex";
-import { keyFigureColumns } from "../../lib/comparison/keyFigures";
-import { comparisonInputSchema } from "../../lib/comparison/schema";
+import { keyFigureColumns } from "../../lib/comparisons/keyFigures";
+import { comparisonInputSchema } from "../../lib/comparisons/schema";
 import { parseBoltPattern, parseLength } from "../../lib/fitment";
-import { demoPointPicture, demoVehiclePicture } from "../../lib/photos/demoImages";
-import { extensionOf, processImage } from "../../lib/photos/image";
-import { s3PhotoStore } from "../../lib/photos/s3";
-import { setupSchema } from "../../lib/validation/setup";
+import { demoPointPicture, demoVehiclePicture } from "../../lib/garage/photos/demoImages";
+import { extensionOf, processImage } from "../../lib/garage/photos/image";
+import { s3PhotoStore } from "../../lib/garage/photos/s3";
+import { setupSchema } from "../../lib/setup/schema";
 
 /**
  * Demo garage of the demo member: two invented vehicles with measured points and drawn photos.

@@ -1,9 +1,9 @@
 import { createHash, randomBytes } from "node:crypto";
 import type { Knex } from "knex";
-import { parseCatalogCsv } from "../../lib/catalog/csv";
-import { buildQuoteDocument } from "../../lib/quotes/document";
-import { summarize } from "../../lib/quotes/fitment";
-import { computeTotals } from "../../lib/quotes/totals";
+import { parseCatalogCsv } from "../../lib/shop/catalog/csv";
+import { buildQuoteDocument } from "../../lib/shop/quotes/document";
+import { summarize } from "../../lib/shop/quotes/fitment";
+import { computeTotals } from "../../lib/shop/quotes/totals";
 import { DEMO_SHOP, DEMO_USERS } from "./01_demo_accounts";
 
 /**

@@ -16,7 +16,7 @@ import {
 } from "@/lib/fitment";
 import { bothUnits } from "@/lib/garage/format";
 import type { Vehicle, VehicleClearance } from "@/lib/garage/types";
-import { type SetupValues, toEngineSetup } from "@/lib/validation/setup";
+import { type SetupValues, toEngineSetup } from "@/lib/setup/schema";
 import { predictPoints } from "@/lib/garage/predict";
 
 export type ChecklistGroup = "fit" | "drivetrain" | "wheels" | "tires";

@@ -7,8 +7,8 @@
 import { z } from "zod";
 import { type FitmentConstraints, DEFAULT_WHEEL_WIDTHS_IN, setupGeometry } from "@/lib/fitment";
 import type { VehicleClearance, Vehicle } from "@/lib/garage/types";
-import { marginField } from "@/lib/validation/garage";
-import { optionalLengthField, toEngineSetup } from "@/lib/validation/setup";
+import { marginField } from "@/lib/garage/schema";
+import { optionalLengthField, toEngineSetup } from "@/lib/setup/schema";
 import { measuredPoints, steeringAxisOf } from "@/lib/garage/predict";
 
 /** The goal fields as the finder form labels them, for the form and for every message. */

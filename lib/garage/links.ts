@@ -1,11 +1,11 @@
 /**
- * Garage links in the comparison workspace's query format (lib/comparison/url.ts): the garage
+ * Garage links in the comparison workspace's query format (lib/comparisons/url.ts): the garage
  * pages carry a planned setup as `p*` parameters, and a workspace link also names the vehicle
  * (`v=<id>`) so the workspace shows that vehicle's predicted clearances.
  */
-import { DEFAULT_FLANGE_ALLOWANCE_IN, DEFAULT_VEHICLE } from "@/lib/comparison/model";
-import { type QueryLike, encodeComparison, encodeSetupQuery, toParams } from "@/lib/comparison/url";
-import { type SetupValues, setupSchema } from "@/lib/validation/setup";
+import { DEFAULT_FLANGE_ALLOWANCE_IN, DEFAULT_VEHICLE } from "@/lib/comparisons/model";
+import { type QueryLike, encodeComparison, encodeSetupQuery, toParams } from "@/lib/comparisons/url";
+import { type SetupValues, setupSchema } from "@/lib/setup/schema";
 
 /** The workspace's query parameter naming a garage vehicle. */
 export const VEHICLE_PARAM = "v";

@@ -11,7 +11,7 @@ import {
   predictClearances,
   steeringAxisInboardMm,
 } from "@/lib/fitment";
-import { type SetupInputValues, toEngineSetup } from "@/lib/comparison/model";
+import { type SetupInputValues, toEngineSetup } from "@/lib/comparisons/model";
 
 type Point = {
   direction: MeasuredClearance["direction"];

@@ -1,6 +1,6 @@
 /** What the garage API returns (camelCase, ISO dates); shared by server and client. */
-import type { FrontSuspension } from "@/lib/db/types";
-import type { SetupValues } from "@/lib/validation/setup";
+import type { FrontSuspension } from "@/lib/platform/db/types";
+import type { SetupValues } from "@/lib/setup/schema";
 
 export interface Vehicle {
   id: string;

@@ -2,7 +2,7 @@
  * What the shop's settings and staff API returns (camelCase, ISO dates) and the row → API
  * mappers; shared by server and client. Invitation token hashes stay on the server.
  */
-import type { Role, ShopSettingsRow, StaffInviteRow } from "@/lib/db/types";
+import type { Role, ShopSettingsRow, StaffInviteRow } from "@/lib/platform/db/types";
 
 /** The shop's settings: what every quote carries. */
 export interface Shop {

@@ -89,7 +89,7 @@ const clientNoServer = {
         context.report({ node, messageId: "server", data: { source } });
         return;
       }
-      if (rowTypes && target === path.join(ROOT, "lib/db/types.ts") && node.type === "ImportDeclaration") {
+      if (rowTypes && target === path.join(ROOT, "lib/platform/db/types.ts") && node.type === "ImportDeclaration") {
         for (const spec of node.specifiers) {
           const name = spec.type === "ImportSpecifier" ? (spec.imported.name ?? spec.imported.value) : "*";
           if (name === "*" || /Row$/.test(name)) context.report({ node: spec, messageId: "row", data: { name } });
@@ -99,4 +99,31 @@ const clientNoServer = {
   },
 };
 
-export const boundaries = { meta: { name: "hubface-boundaries" }, rules: { "engine-self-contained": engineSelfContained, "client-no-server": clientNoServer } };
+
+/**
+ * Only query modules touch tables: a call such as `db("quotes")` or `trx("users")` (a Knex handle
+ * called with a table name) belongs in a feature's `queries.ts` / `*Queries.ts`, or in the platform
+ * code that owns its own tables (lib/platform/**). Services and pages call those modules.
+ */
+const HANDLE_NAMES = new Set(["db", "trx", "tx", "knex"]);
+const tablesInQueries = {
+  meta: {
+    type: "problem",
+    messages: { table: 'Table "{{table}}" is read here: table access belongs in the feature\'s query module (queries.ts or *Queries.ts).' },
+    schema: [],
+  },
+  create(context) {
+    const file = path.relative(ROOT, context.filename ?? context.getFilename()).split(path.sep).join("/");
+    if (/(^|\/)(queries|[A-Za-z]+Queries)\.ts$/.test(file) || file.startsWith("lib/platform/") || /\.test\.tsx?$/.test(file)) return {};
+    return {
+      CallExpression(node) {
+        const [arg] = node.arguments;
+        if (node.callee.type === "Identifier" && HANDLE_NAMES.has(node.callee.name) && arg && arg.type === "Literal" && typeof arg.value === "string") {
+          context.report({ node, messageId: "table", data: { table: arg.value } });
+        }
+      },
+    };
+  },
+};
+
+export const boundaries = { meta: { name: "hubface-boundaries" }, rules: { "engine-self-contained": engineSelfContained, "client-no-server": clientNoServer, "tables-in-queries": tablesInQueries } };

@@ -9,7 +9,7 @@ import { randomUUID } from "node:crypto";
 import { existsSync, readFileSync, writeFileSync } from "node:fs";
 import { SMTPServer } from "smtp-server";
 import { simpleParser } from "mailparser";
-import type { OutboxMessage } from "../../lib/mail/outbox";
+import type { OutboxMessage } from "../../lib/platform/mail/outbox";
 
 // The outbox API serves what the app's outbox reader expects, plus the attachment bytes kept here.
 type Stored = Omit<OutboxMessage, "attachments"> & {

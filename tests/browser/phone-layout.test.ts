@@ -1,6 +1,6 @@
 import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { DEFAULT_INPUT } from "@/lib/comparison/schema";
+import { DEFAULT_INPUT } from "@/lib/comparisons/schema";
 import { launch, seriousViolations, shot, signInAs } from "./support/browser";
 import { DEMO, DEMO_PASSWORD, call } from "./support/http";
 

@@ -3,7 +3,7 @@ import { once } from "node:events";
 import { createServer } from "node:net";
 import { join } from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { DEFAULT_INPUT } from "@/lib/comparison/schema";
+import { DEFAULT_INPUT } from "@/lib/comparisons/schema";
 import { BASE } from "./support/browser";
 import { call, cookieFor } from "./support/http";
 

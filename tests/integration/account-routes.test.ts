@@ -1,11 +1,11 @@
 import { NextRequest } from "next/server";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import { settleAfterResponse } from "@/lib/server/afterResponse";
+import { settleAfterResponse } from "@/lib/platform/http/afterResponse";
 import { rebuild, testDb } from "./support/db";
 
 // Mail goes nowhere here; the browser tests cover the real SMTP path.
 const sent = vi.hoisted(() => [] as { to: string; text: string }[]);
-vi.mock("@/lib/mail", () => ({
+vi.mock("@/lib/platform/mail", () => ({
   // 50 ms like an SMTP round trip, so an answer that waits for the mail shows in its timing.
   // Reset mail goes through the job queue (retried there); stored here as the worker would send it.
   queueMail: async (m: { to: string; text: string }) => {
@@ -21,7 +21,7 @@ beforeAll(() => rebuild(db));
 afterAll(async () => {
   await settleAfterResponse();
   await db.destroy();
-  const { db: appDb } = await import("@/lib/db");
+  const { db: appDb } = await import("@/lib/platform/db");
   await appDb.destroy();
 });
 

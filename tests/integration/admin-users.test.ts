@@ -19,7 +19,7 @@ beforeAll(async () => {
 });
 afterAll(async () => {
   await db.destroy();
-  const { db: appDb } = await import("@/lib/db");
+  const { db: appDb } = await import("@/lib/platform/db");
   await appDb.destroy();
 });
 
@@ -50,7 +50,7 @@ describe("admin users: answers are the API shape", () => {
     expect(res.status).toBe(200);
     const changed = await res.json();
     expect(internalKeys(changed)).toEqual([]);
-    // camelCase on purpose: lib/users/api.ts.
+    // camelCase on purpose: lib/accounts/api.ts.
     expect(changed.user).toMatchObject({ id: MEMBER.id, role: "shop_staff", shopId: shop, updatedAt: expect.stringMatching(/Z$/) });
     const again = await (await users.GET(req("GET", "/api/admin/users?q=m%40example"), ctx())).json();
     expect(again.users).toEqual([expect.objectContaining({ email: MEMBER.email, shopId: shop, shopName: "Admin Test Shop" })]);

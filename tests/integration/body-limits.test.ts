@@ -1,6 +1,6 @@
 import { NextRequest } from "next/server";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import { MAX_PHOTO_BYTES } from "@/lib/photos/image";
+import { MAX_PHOTO_BYTES } from "@/lib/garage/photos/image";
 import { rebuild, testDb } from "./support/db";
 
 /**
@@ -20,7 +20,7 @@ beforeAll(async () => {
 });
 afterAll(async () => {
   await db.destroy();
-  const { db: appDb } = await import("@/lib/db");
+  const { db: appDb } = await import("@/lib/platform/db");
   await appDb.destroy();
 });
 

@@ -1,6 +1,6 @@
 import { NextRequest } from "next/server";
 import { afterAll, beforeAll, beforeEach, describe, expect, it, vi } from "vitest";
-import { DEFAULT_INPUT, type ComparisonInput } from "@/lib/comparison/schema";
+import { DEFAULT_INPUT, type ComparisonInput } from "@/lib/comparisons/schema";
 import { rebuild, testDb } from "./support/db";
 
 // The session is whoever the test says; revalidatePath is recorded (no Next server here).
@@ -25,7 +25,7 @@ beforeAll(async () => {
 });
 afterAll(async () => {
   await db.destroy();
-  const { db: appDb } = await import("@/lib/db");
+  const { db: appDb } = await import("@/lib/platform/db");
   await appDb.destroy();
 });
 beforeEach(() => {
@@ -37,8 +37,8 @@ const list = await import("@/app/api/comparisons/route");
 const one = await import("@/app/api/comparisons/[id]/route");
 const dup = (await import("@/app/api/comparisons/[id]/duplicate/route")).POST;
 const share = await import("@/app/api/comparisons/[id]/share/route");
-const { findSharedComparison } = await import("@/lib/server/comparisons");
-const { computeComparison } = await import("@/lib/comparison/compute");
+const { findSharedComparison } = await import("@/lib/comparisons/queries");
+const { computeComparison } = await import("@/lib/comparisons/compute");
 
 const noParams = { params: Promise.resolve({}) };
 const idParams = (id: string) => ({ params: Promise.resolve({ id }) });
@@ -198,7 +198,7 @@ describe("share links", () => {
   });
 
   it("slugs do not repeat (1000 draws)", async () => {
-    const { newShareSlug } = await import("@/lib/server/comparisons");
+    const { newShareSlug } = await import("@/lib/comparisons/queries");
     const seen = new Set(Array.from({ length: 1000 }, () => newShareSlug()));
     expect(seen.size).toBe(1000);
   });

@@ -6,7 +6,7 @@ import { NextRequest } from "next/server";
 import sharp from "sharp";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { startFakeS3 } from "@/scripts/services/fake-s3";
-import { makeS3Client, s3PhotoStore, setPhotoStore, type PhotoStore, type S3Settings } from "@/lib/photos/s3";
+import { makeS3Client, s3PhotoStore, setPhotoStore, type PhotoStore, type S3Settings } from "@/lib/garage/photos/s3";
 import { rebuild, testDb } from "./support/db";
 
 const session = vi.hoisted(() => ({ current: null as unknown }));
@@ -46,7 +46,7 @@ afterAll(async () => {
   await s3.close();
   rmSync(dir, { recursive: true, force: true });
   await db.destroy();
-  const { db: appDb } = await import("@/lib/db");
+  const { db: appDb } = await import("@/lib/platform/db");
   await appDb.destroy();
 });
 
@@ -373,7 +373,7 @@ describe("install checklists", () => {
   it("builds the checklist from a saved comparison tied to the vehicle, and stores the link", async () => {
     const { GET, PUT } = await checklist();
     const comparisons = await import("@/app/api/comparisons/route");
-    const { DEFAULT_INPUT } = await import("@/lib/comparison/schema");
+    const { DEFAULT_INPUT } = await import("@/lib/comparisons/schema");
     const { body: a } = await createAs("ada", { ...VEHICLE, name: "Comparison hauler" });
     const { body: b } = await createAs("ada", { ...VEHICLE, name: "Second hauler" });
     const { body: bos } = await createAs("bo", { ...VEHICLE, name: "Bo's other rig" });

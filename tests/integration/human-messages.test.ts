@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import { DEFAULT_INPUT } from "@/lib/comparison/schema";
+import { DEFAULT_INPUT } from "@/lib/comparisons/schema";
 import { rebuild, testDb } from "./support/db";
 import { ctx, req, sessionOf } from "./support/requests";
 import { U, seedShops } from "./support/shopFixture";
@@ -14,7 +14,7 @@ import { U, seedShops } from "./support/shopFixture";
 const session = vi.hoisted(() => ({ current: null as unknown }));
 vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
 vi.mock("next/cache", () => ({ revalidatePath: () => {} }));
-vi.mock("@/lib/mail", () => ({ sendMail: async () => {}, queueMail: async () => "job", appOrigin: () => "http://127.0.0.1:3000" }));
+vi.mock("@/lib/platform/mail", () => ({ sendMail: async () => {}, queueMail: async () => "job", appOrigin: () => "http://127.0.0.1:3000" }));
 
 const db = testDb();
 const MEMBER = { id: "d4000000-0000-4000-8000-000000000001", role: "member", shop_id: null, email: "human@example.test", name: "Ines Varro" };
@@ -25,7 +25,7 @@ beforeAll(async () => {
 });
 afterAll(async () => {
   await db.destroy();
-  const { db: appDb } = await import("@/lib/db");
+  const { db: appDb } = await import("@/lib/platform/db");
   await appDb.destroy();
 });
 

@@ -6,7 +6,7 @@ import { ListObjectsV2Command } from "@aws-sdk/client-s3";
 import sharp from "sharp";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { startFakeS3 } from "@/scripts/services/fake-s3";
-import { makeS3Client, s3PhotoStore, setPhotoStore, type PhotoStore, type S3Settings } from "@/lib/photos/s3";
+import { makeS3Client, s3PhotoStore, setPhotoStore, type PhotoStore, type S3Settings } from "@/lib/garage/photos/s3";
 import { rebuild, testDb } from "./support/db";
 import { drainQueue, startTestBoss, stopBoss } from "./support/jobs";
 import { ctx, req } from "./support/requests";
@@ -40,14 +40,14 @@ afterAll(async () => {
   await s3.close();
   rmSync(dir, { recursive: true, force: true });
   await db.destroy();
-  const { db: appDb } = await import("@/lib/db");
+  const { db: appDb } = await import("@/lib/platform/db");
   await appDb.destroy();
 });
 
 const vehicles = await import("@/app/api/vehicles/route");
 const uploads = await import("@/app/api/vehicles/[id]/photos/route");
 const photo = await import("@/app/api/photos/[id]/route");
-const { QUEUES, getBoss } = await import("@/lib/jobs/boss");
+const { QUEUES, getBoss } = await import("@/lib/platform/jobs/boss");
 
 const SETUP = { tire: "265/70R17", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 }, spacerMm: 0 };
 const VEHICLE = {

@@ -42,9 +42,9 @@ async function mailServerDown() {
   smtp = null;
 }
 
-const mail = await import("@/lib/mail");
-const { QUEUES, getBoss } = await import("@/lib/jobs/boss");
-const { getQuoteDetail, listQuotes, findByToken } = await import("@/lib/server/quotes");
+const mail = await import("@/lib/platform/mail");
+const { QUEUES, getBoss } = await import("@/lib/platform/jobs/boss");
+const { getQuoteDetail, listQuotes, findByToken } = await import("@/lib/shop/quotes/queries");
 const listRoute = (await import("@/app/api/admin/jobs/route")).GET;
 const retryRoute = (await import("@/app/api/admin/jobs/[id]/retry/route")).POST;
 
@@ -59,7 +59,7 @@ afterAll(async () => {
   await mailServerDown();
   await stopBoss();
   await db.destroy();
-  const { db: appDb } = await import("@/lib/db");
+  const { db: appDb } = await import("@/lib/platform/db");
   await appDb.destroy();
 });
 
@@ -217,7 +217,7 @@ describe("quote expiry", () => {
 
 describe("the workers", () => {
   it("schedule the expiry every 15 minutes and deliver queued mail within a couple of seconds", async () => {
-    const { startWorkers } = await import("@/lib/jobs/workers");
+    const { startWorkers } = await import("@/lib/platform/jobs/workers");
     const boss = await startWorkers({ pollingIntervalSeconds: 0.5 });
     const schedules = await boss.getSchedules();
     expect(schedules.find((s) => s.name === "quotes.expire")?.cron).toBe("*/15 * * * *");

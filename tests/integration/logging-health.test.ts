@@ -10,11 +10,11 @@ const session = vi.hoisted(() => ({ current: null as unknown }));
 vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
 
 const db = testDb();
-const logs = await import("@/lib/log");
-const { withRequestLog } = await import("@/lib/log/request");
-const { route, errorResponse } = await import("@/lib/http/route");
-const { DependencyUnavailableError } = await import("@/lib/http/dependency");
-const { db: appDb, isDatabaseUnavailable } = await import("@/lib/db");
+const logs = await import("@/lib/platform/log");
+const { withRequestLog } = await import("@/lib/platform/log/request");
+const { route, errorResponse } = await import("@/lib/platform/http/route");
+const { DependencyUnavailableError } = await import("@/lib/platform/http/dependency");
+const { db: appDb, isDatabaseUnavailable } = await import("@/lib/platform/db");
 const live = (await import("@/app/api/health/live/route")).GET;
 const ready = (await import("@/app/api/health/ready/route")).GET;
 
@@ -151,7 +151,7 @@ describe("outages are named for what is down", () => {
   it("a mail server that refuses the connection is reported as the mail server, not the database", async () => {
     process.env.SMTP_URL = `smtp://127.0.0.1:${await closedPort()}`;
     (globalThis as { hubfaceMail?: unknown }).hubfaceMail = undefined;
-    const { sendMail } = await import("@/lib/mail");
+    const { sendMail } = await import("@/lib/platform/mail");
     const error = await sendMail({ to: "a@example.test", subject: "s", text: "t" }).then(() => null, (e: unknown) => e);
     expect(isDatabaseUnavailable(error)).toBe(false);
     const res = errorResponse(error);
@@ -162,7 +162,7 @@ describe("outages are named for what is down", () => {
   });
 
   it("a photo store that does not answer is reported as the photo store", async () => {
-    const { s3PhotoStore, s3Settings } = await import("@/lib/photos/s3");
+    const { s3PhotoStore, s3Settings } = await import("@/lib/garage/photos/s3");
     const store = s3PhotoStore({ ...s3Settings({} as NodeJS.ProcessEnv), endpoint: `http://127.0.0.1:${await closedPort()}` });
     const error = await store.put("k", Buffer.from("x"), "image/jpeg").then(() => null, (e: unknown) => e);
     expect(error).toBeInstanceOf(DependencyUnavailableError);

@@ -11,7 +11,7 @@ import { U, seedShops } from "./support/shopFixture";
  */
 const session = vi.hoisted(() => ({ current: null as unknown }));
 vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
-vi.mock("@/lib/mail", () => ({ sendMail: async () => {}, appOrigin: () => "https://hubface.example" }));
+vi.mock("@/lib/platform/mail", () => ({ sendMail: async () => {}, appOrigin: () => "https://hubface.example" }));
 
 const db = testDb();
 beforeAll(async () => {
@@ -23,7 +23,7 @@ afterEach(() => void (session.current = null));
 afterAll(async () => {
   delete process.env.APP_ORIGIN;
   await db.destroy();
-  const { db: appDb } = await import("@/lib/db");
+  const { db: appDb } = await import("@/lib/platform/db");
   await appDb.destroy();
 });
 

@@ -1,9 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { FOLDED_LETTERS, searchKey } from "@/lib/search/normalize";
+import { FOLDED_LETTERS, searchKey } from "@/lib/platform/search/normalize";
 import { rebuild, testDb } from "./support/db";
 
 /**
- * The search key is computed twice, for the query in JavaScript (lib/search/normalize.ts) and for
+ * The search key is computed twice, for the query in JavaScript (lib/platform/search/normalize.ts) and for
  * the stored rows in PostgreSQL (hubface_search_key, from the migrations): a difference would
  * hide rows. Both are run here over the same texts.
  */

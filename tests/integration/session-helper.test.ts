@@ -8,8 +8,8 @@ vi.mock("next/navigation", () => ({
   },
 }));
 
-const { admits, requireCaller, requirePageCaller } = await import("@/lib/auth/session");
-const { HttpError } = await import("@/lib/http/errors");
+const { admits, requireCaller, requirePageCaller } = await import("@/lib/platform/auth/session");
+const { HttpError } = await import("@/lib/platform/http/errors");
 
 const as = (role: string, shopId: string | null = null) => ({ user: { id: "u1", role, shopId, name: "N", email: "n@example.test" } });
 

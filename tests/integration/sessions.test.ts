@@ -1,8 +1,8 @@
 import type { JWT } from "next-auth/jwt";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { authOptions } from "@/lib/auth/options";
-import { endAllSessions } from "@/lib/server/sessions";
-import { createUser, setPassword, setUserRole } from "@/lib/server/users";
+import { authOptions } from "@/lib/platform/auth/options";
+import { endAllSessions } from "@/lib/accounts/sessionQueries";
+import { createUser, setPassword, setUserRole } from "@/lib/accounts/queries";
 import { rebuild, testDb } from "./support/db";
 
 /**

@@ -1,6 +1,6 @@
 import sharp from "sharp";
 import { afterAll, afterEach, beforeAll, describe, expect, it, vi } from "vitest";
-import { DEFAULT_INPUT } from "@/lib/comparison/schema";
+import { DEFAULT_INPUT } from "@/lib/comparisons/schema";
 import { rebuild, testDb } from "./support/db";
 
 /**
@@ -12,7 +12,7 @@ import { rebuild, testDb } from "./support/db";
 const db = testDb();
 const OWNER = "c3000000-0000-4000-8000-000000000001";
 
-const { createComparison, createShare } = await import("@/lib/server/comparisons");
+const { createComparison, createShare } = await import("@/lib/comparisons/queries");
 const image = (await import("@/app/(share)/s/[slug]/opengraph-image")).default;
 
 let slug = "";
@@ -26,7 +26,7 @@ beforeAll(async () => {
 });
 afterAll(async () => {
   await db.destroy();
-  const { db: appDb } = await import("@/lib/db");
+  const { db: appDb } = await import("@/lib/platform/db");
   await appDb.destroy();
 });
 afterEach(() => vi.restoreAllMocks());

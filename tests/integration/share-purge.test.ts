@@ -8,10 +8,10 @@ import { testDb } from "./support/db";
 const revalidated = vi.hoisted(() => [] as string[]);
 vi.mock("next/cache", () => ({ revalidatePath: (p: string, type?: string) => void revalidated.push(type ? `${p} ${type}` : p) }));
 
-const { SHARE_PURGE_CHANNEL, LOCAL_PURGE_HEADER, localPurgeToken, ownServerPurge, selfUrl, startSharePurgeListener } = await import("@/lib/http/sharePurge");
-const { dropCachedShare } = await import("@/lib/server/shareCache");
+const { SHARE_PURGE_CHANNEL, LOCAL_PURGE_HEADER, localPurgeToken, ownServerPurge, selfUrl, startSharePurgeListener } = await import("@/lib/platform/http/sharePurge");
+const { dropCachedShare } = await import("@/lib/comparisons/shareCache");
 const purgeRoute = (await import("@/app/api/internal/share-purge/route")).POST;
-const { Microcache, installSharedMicrocache } = await import("@/lib/http/microcache");
+const { Microcache, installSharedMicrocache } = await import("@/lib/platform/http/microcache");
 
 const db = testDb();
 const url = process.env.DATABASE_URL!;
@@ -22,7 +22,7 @@ const listeners: { stop(): Promise<void> }[] = [];
 afterAll(async () => {
   await Promise.all(listeners.map((l) => l.stop()));
   await db.destroy();
-  const { db: appDb } = await import("@/lib/db");
+  const { db: appDb } = await import("@/lib/platform/db");
   await appDb.destroy();
 });
 beforeEach(() => {

@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import { CSV_COLUMNS, CSV_TEMPLATE, parseCatalogCsv } from "@/lib/catalog/csv";
+import { CSV_COLUMNS, CSV_TEMPLATE, parseCatalogCsv } from "@/lib/shop/catalog/csv";
 import { internalKeys } from "./support/apiKeys";
 import { rebuild, testDb } from "./support/db";
 import { ctx, req, sessionOf } from "./support/requests";
@@ -22,7 +22,7 @@ beforeAll(async () => {
 });
 afterAll(async () => {
   await db.destroy();
-  const { db: appDb } = await import("@/lib/db");
+  const { db: appDb } = await import("@/lib/platform/db");
   await appDb.destroy();
 });
 
@@ -183,7 +183,7 @@ describe("catalog access", () => {
     const page = await (await list(req("GET", "/api/shop/catalog?kind=wheel&sort=price_cents&dir=desc&page=2&pageSize=10&q=BULK"), ctx())).json();
     expect(page.total).toBe(5000);
     expect(page.items).toHaveLength(10);
-    const prices = page.items.map((i: { priceCents: number }) => i.priceCents); // camelCase on purpose: the API shape, lib/catalog/api.ts
+    const prices = page.items.map((i: { priceCents: number }) => i.priceCents); // camelCase on purpose: the API shape, lib/shop/catalog/api.ts
     expect([...prices].sort((a, b) => b - a)).toEqual(prices);
     expect(page.items.every((i: { kind: string }) => i.kind === "wheel")).toBe(true);
     expect(internalKeys(page)).toEqual([]); // the stored search key and the row's column names stay in the database

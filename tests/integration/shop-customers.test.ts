@@ -29,7 +29,7 @@ beforeAll(async () => {
 });
 afterAll(async () => {
   await db.destroy();
-  const { db: appDb } = await import("@/lib/db");
+  const { db: appDb } = await import("@/lib/platform/db");
   await appDb.destroy();
 });
 
@@ -79,7 +79,7 @@ describe("finding a customer again", () => {
     const made = await customers.POST(req("POST", "/api/shop/customers", { name: "Ånund Key", phone: "555 014 2010", email: "" }), ctx());
     const madeBody = await made.json();
     expect(internalKeys(madeBody)).toEqual([]);
-    // The API shape (lib/customers/api.ts): no shop id nor the digits kept for searching; ISO dates.
+    // The API shape (lib/shop/customers/api.ts): no shop id nor the digits kept for searching; ISO dates.
     expect(Object.keys(madeBody.customer).sort()).toEqual(["createdAt", "email", "id", "name", "phone", "updatedAt"]);
     const dup = await customers.POST(req("POST", "/api/shop/customers", { name: "Ånund Again", phone: "555 014 2010", email: "" }), ctx());
     expect(dup.status).toBe(409);

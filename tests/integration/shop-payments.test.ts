@@ -10,7 +10,7 @@ import { SHOP_A, U, VEHICLE, item, seedShops } from "./support/shopFixture";
 const session = vi.hoisted(() => ({ current: null as unknown }));
 vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
 const sent = vi.hoisted(() => [] as { to: string; text: string }[]);
-vi.mock("@/lib/mail", () => ({ queueMail: async (m: { to: string; text: string }) => void sent.push(m), appOrigin: () => "http://127.0.0.1:3000" }));
+vi.mock("@/lib/platform/mail", () => ({ queueMail: async (m: { to: string; text: string }) => void sent.push(m), appOrigin: () => "http://127.0.0.1:3000" }));
 
 const SECRET = "whsec_integration_test_secret";
 process.env.STRIPE_SECRET_KEY = "sk_test_integration";
@@ -25,7 +25,7 @@ const act = (await import("@/app/api/q/[token]/route")).POST;
 const quotes = await import("@/app/api/shop/quotes/route");
 const sendRoute = (await import("@/app/api/shop/quotes/[id]/send/route")).POST;
 const customers = await import("@/app/api/shop/customers/route");
-const { publicQuoteView } = await import("@/lib/server/quoteSend");
+const { publicQuoteView } = await import("@/lib/shop/quotes/send");
 
 /** Forwards the fake's webhook calls into the route handler, keeping what was delivered. */
 const delivered: { body: string; signature: string; status: number; answer: unknown }[] = [];
@@ -56,7 +56,7 @@ afterAll(async () => {
   await pay.close();
   await new Promise((r) => forwarder.close(r));
   await db.destroy();
-  const { db: appDb } = await import("@/lib/db");
+  const { db: appDb } = await import("@/lib/platform/db");
   await appDb.destroy();
 });
 

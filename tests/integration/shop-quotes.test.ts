@@ -8,7 +8,7 @@ const session = vi.hoisted(() => ({ current: null as unknown }));
 vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
 const sent = vi.hoisted(() => [] as { to: string; text: string; attachments?: { filename: string; content: Buffer }[] }[]);
 // The mail as it is queued (the queue itself: tests/integration/jobs.test.ts).
-vi.mock("@/lib/mail", () => ({ queueMail: async (m: (typeof sent)[number]) => void sent.push(m), appOrigin: () => "http://127.0.0.1:3000" }));
+vi.mock("@/lib/platform/mail", () => ({ queueMail: async (m: (typeof sent)[number]) => void sent.push(m), appOrigin: () => "http://127.0.0.1:3000" }));
 
 const db = testDb();
 const as = (u: (typeof U)[keyof typeof U]) => void (session.current = sessionOf(u));
@@ -18,7 +18,7 @@ beforeAll(async () => {
 });
 afterAll(async () => {
   await db.destroy();
-  const { db: appDb } = await import("@/lib/db");
+  const { db: appDb } = await import("@/lib/platform/db");
   await appDb.destroy();
 });
 
@@ -73,7 +73,7 @@ describe("fitment candidates", () => {
     as(U.staffA);
     const body = await (await candidates(req("POST", "/api/shop/fitment/candidates", VEHICLE), ctx())).json();
     expect(internalKeys(body)).toEqual([]);
-    expect(body.picks[0].wheel).toMatchObject({ boltPattern: expect.stringMatching(/^6x/), centerBoreMm: 108 }); // camelCase on purpose: lib/catalog/api.ts
+    expect(body.picks[0].wheel).toMatchObject({ boltPattern: expect.stringMatching(/^6x/), centerBoreMm: 108 }); // camelCase on purpose: lib/shop/catalog/api.ts
     // The template has two 6-lug wheels (6x5.5 and 6x139.7, equivalent) and one 17 in tire.
     expect(body.wheelsFitting).toBe(2);
     expect(body.picks).toHaveLength(2);
@@ -160,7 +160,7 @@ describe("quotes", () => {
     const list = await (await quotes.GET(req("GET", "/api/shop/quotes"), ctx())).json();
     expect(list.quotes).toHaveLength(1);
     expect(internalKeys(list)).toEqual([]);
-    expect(list.quotes[0]).toMatchObject({ customerName: "Dace Holloway", createdByName: "Sam Staff", totalCents: 11500 }); // camelCase on purpose: lib/quotes/api.ts
+    expect(list.quotes[0]).toMatchObject({ customerName: "Dace Holloway", createdByName: "Sam Staff", totalCents: 11500 }); // camelCase on purpose: lib/shop/quotes/api.ts
   });
 
   it("cannot use another shop's catalog items", async () => {
@@ -248,7 +248,7 @@ describe("sending", () => {
 
 /* ---- every figure right: fractional hours, any catalog item, the wheel on the hub, balance, frozen documents ---- */
 
-const { publicQuoteView } = await import("@/lib/server/quoteSend");
+const { publicQuoteView } = await import("@/lib/shop/quotes/send");
 const money = (c: number) => "$" + (c / 100).toLocaleString("en-US", { minimumFractionDigits: 2 });
 /** Zod's own wording, which must never reach a person. */
 const RAW = /Invalid input|expected \w+, received|Too (big|small)|Invalid (UUID|option|string|number)|Required$/;

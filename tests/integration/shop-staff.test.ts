@@ -6,7 +6,7 @@ import { ctx, req, sessionOf } from "./support/requests";
 const session = vi.hoisted(() => ({ current: null as unknown }));
 vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
 const sent = vi.hoisted(() => [] as { to: string; subject: string; text: string }[]);
-vi.mock("@/lib/mail", () => ({
+vi.mock("@/lib/platform/mail", () => ({
   sendMail: async (m: { to: string; subject: string; text: string }) => void sent.push(m),
   // The route's mail as it is queued (the queue itself: tests/integration/jobs.test.ts).
   queueMail: async (m: { to: string; subject: string; text: string }) => void sent.push(m),
@@ -27,13 +27,13 @@ const as = (u: (typeof U)[keyof typeof U]) => void (session.current = sessionOf(
 beforeAll(async () => {
   await rebuild(db);
   await db("shops").insert([{ id: SHOP_A, name: "Shop A" }, { id: SHOP_B, name: "Shop B" }]);
-  const { hashPassword } = await import("@/lib/auth/password");
+  const { hashPassword } = await import("@/lib/platform/auth/password");
   const hash = await hashPassword("member password 1");
   await db("users").insert(Object.values(U).map((u) => ({ ...u, name: u.email.split("@")[0], password_hash: hash })));
 });
 afterAll(async () => {
   await db.destroy();
-  const { db: appDb } = await import("@/lib/db");
+  const { db: appDb } = await import("@/lib/platform/db");
   await appDb.destroy();
 });
 

@@ -1,8 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import { CLIENT_ADDRESS_HEADER, clientAddress, resolveClientAddress, trustClientAddressHeader, trustedProxies } from "@/lib/auth/clientAddress";
-import { hashPassword } from "@/lib/auth/password";
-import { THROTTLE, backoffSec } from "@/lib/auth/throttle";
-import { settleAfterResponse } from "@/lib/server/afterResponse";
+import { CLIENT_ADDRESS_HEADER, clientAddress, resolveClientAddress, trustClientAddressHeader, trustedProxies } from "@/lib/platform/auth/clientAddress";
+import { hashPassword } from "@/lib/platform/auth/password";
+import { THROTTLE, backoffSec } from "@/lib/platform/auth/throttle";
+import { settleAfterResponse } from "@/lib/platform/http/afterResponse";
 import { rebuild, testDb } from "./support/db";
 import { ctx, req } from "./support/requests";
 
@@ -10,10 +10,10 @@ import { ctx, req } from "./support/requests";
  * Security review: the per-address limit keyed on X-Forwarded-For (anyone can rotate it), and
  * five wrong passwords from anywhere locked the account for everyone for 15 minutes.
  */
-vi.mock("@/lib/mail", () => ({ sendMail: async () => {}, queueMail: async () => "job-id", appOrigin: () => "http://127.0.0.1:3000" }));
+vi.mock("@/lib/platform/mail", () => ({ sendMail: async () => {}, queueMail: async () => "job-id", appOrigin: () => "http://127.0.0.1:3000" }));
 
 const db = testDb();
-const { authOptions } = await import("@/lib/auth/options");
+const { authOptions } = await import("@/lib/platform/auth/options");
 const signup = (await import("@/app/api/account/signup/route")).POST;
 const forgot = (await import("@/app/api/account/password/forgot/route")).POST;
 
@@ -26,7 +26,7 @@ beforeAll(async () => {
 afterAll(async () => {
   await settleAfterResponse();
   await db.destroy();
-  const { db: appDb } = await import("@/lib/db");
+  const { db: appDb } = await import("@/lib/platform/db");
   await appDb.destroy();
 });
 

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { DuplicateEmailError, createUser, findUserByEmail, setUserRole } from "@/lib/server/users";
-import { consumeResetToken, issueResetToken } from "@/lib/server/passwordResets";
+import { DuplicateEmailError, createUser, findUserByEmail, setUserRole } from "@/lib/accounts/queries";
+import { consumeResetToken, issueResetToken } from "@/lib/accounts/passwordResetQueries";
 import { rebuild, testDb } from "./support/db";
 
 const db = testDb();

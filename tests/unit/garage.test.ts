@@ -7,8 +7,8 @@ import { exclusionText } from "@/lib/garage/finderText";
 import { predictPoints } from "@/lib/garage/predict";
 import { setupFromQuery, setupQuery, workspaceHref } from "@/lib/garage/links";
 import type { Vehicle, VehicleClearance } from "@/lib/garage/types";
-import { clearanceSchema, vehicleMarginSchema, vehicleSchema } from "@/lib/validation/garage";
-import { type SetupValues, setupSchema } from "@/lib/validation/setup";
+import { clearanceSchema, vehicleMarginSchema, vehicleSchema } from "@/lib/garage/schema";
+import { type SetupValues, setupSchema } from "@/lib/setup/schema";
 
 const CUR: SetupValues = { tire: "265/70R17", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 }, spacerMm: 0 };
 const PLAN: SetupValues = { tire: "35x12.50R17LT", wheelDiameterIn: 17, wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 }, spacerMm: 0 };

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { ROLE_SUMMARY } from "@/app/(account)/account/roleSummary";
 import { visibleNav } from "@/components/site/nav";
-import { ROLES, type Role } from "@/lib/db/types";
+import { ROLES, type Role } from "@/lib/platform/db/types";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
 
 /**

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
-import type { CatalogItemRow } from "@/lib/db/types";
-import { summarize } from "@/lib/quotes/fitment";
-import { suggestedServiceLines } from "@/lib/server/quotes";
+import type { CatalogItemRow } from "@/lib/platform/db/types";
+import { summarize } from "@/lib/shop/quotes/fitment";
+import { suggestedServiceLines } from "@/lib/shop/quotes/queries";
 
 const svc = (sku: string, service_type: CatalogItemRow["service_type"], price_cents: number) =>
   ({ id: sku, sku, description: sku, price_cents, kind: "service", service_type, service_unit: "per_wheel" }) as CatalogItemRow;

@@ -5,9 +5,9 @@ import { Badge } from "@/components/ui/Badge";
 import { Card } from "@/components/ui/Card";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { SignOutEverywhereButton } from "@/components/site/SignOutEverywhereButton";
-import { requirePageCaller } from "@/lib/auth/session";
-import { shopQueries } from "@/lib/server/shops";
-import { userQueries } from "@/lib/server/users";
+import { requirePageCaller } from "@/lib/platform/auth/session";
+import { shopQueries } from "@/lib/shop/queries";
+import { userQueries } from "@/lib/accounts/queries";
 import { ROLE_SUMMARY } from "./roleSummary";
 
 export const metadata: Metadata = { title: "Your account" };

@@ -1,4 +1,4 @@
-import type { Role } from "@/lib/db/types";
+import type { Role } from "@/lib/platform/db/types";
 
 /**
  * What the account page tells each role it may do. The garage, the navigation and the role

@@ -5,8 +5,8 @@ import { useForm } from "react-hook-form";
 import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
 import { TextField } from "@/components/ui/TextField";
-import { api, applyFieldErrors } from "@/lib/client/api";
-import { type ForgotPasswordInput, forgotPasswordSchema } from "@/lib/validation/account";
+import { api, applyFieldErrors } from "@/lib/platform/client/api";
+import { type ForgotPasswordInput, forgotPasswordSchema } from "@/lib/accounts/schema";
 
 export function ForgotPasswordForm() {
   const [done, setDone] = useState<string | null>(null);

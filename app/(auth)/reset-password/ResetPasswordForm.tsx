@@ -7,8 +7,8 @@ import { useForm } from "react-hook-form";
 import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
 import { TextField } from "@/components/ui/TextField";
-import { api, applyFieldErrors } from "@/lib/client/api";
-import { type ResetPasswordInput, resetPasswordSchema } from "@/lib/validation/account";
+import { api, applyFieldErrors } from "@/lib/platform/client/api";
+import { type ResetPasswordInput, resetPasswordSchema } from "@/lib/accounts/schema";
 
 export function ResetPasswordForm({ token }: { token: string }) {
   const router = useRouter();

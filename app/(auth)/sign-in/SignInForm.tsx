@@ -7,7 +7,7 @@ import { useForm } from "react-hook-form";
 import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
 import { TextField } from "@/components/ui/TextField";
-import { type SignInInput, signInSchema } from "@/lib/validation/account";
+import { type SignInInput, signInSchema } from "@/lib/accounts/schema";
 
 export function SignInForm({ callbackUrl, notice }: { callbackUrl: string; notice?: string }) {
   const router = useRouter();

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { Card } from "@/components/ui/Card";
-import { safeLocalPath } from "@/lib/auth/redirect";
+import { safeLocalPath } from "@/lib/platform/auth/redirect";
 import { SignInForm } from "./SignInForm";
 
 export const metadata: Metadata = { title: "Sign in" };

@@ -4,9 +4,9 @@ import { cleanup, render, screen, waitFor } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import type { ReactNode } from "react";
 import { afterEach, describe, expect, it, vi } from "vitest";
-import { keyFigures } from "@/lib/comparison/keyFigures";
-import { DEFAULT_INPUT } from "@/lib/comparison/schema";
-import type { SavedComparison } from "@/lib/validation/comparisons";
+import { keyFigures } from "@/lib/comparisons/keyFigures";
+import { DEFAULT_INPUT } from "@/lib/comparisons/schema";
+import type { SavedComparison } from "@/lib/comparisons/savedSchema";
 import { ComparisonList, workspaceHref } from "./ComparisonList";
 
 vi.mock("next/link", () => ({ default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => <a href={href} {...rest}>{children}</a> }));

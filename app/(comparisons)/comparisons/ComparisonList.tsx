@@ -8,11 +8,11 @@ import { Alert } from "@/components/ui/Alert";
 import { Badge } from "@/components/ui/Badge";
 import { Button, buttonClass } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
-import { api } from "@/lib/client/api";
-import { type DisplayPrefs, formatLen, formatNumber } from "@/lib/comparison/format";
-import { readingPhrase } from "@/lib/comparison/speedometer";
-import { encodeComparison } from "@/lib/comparison/url";
-import { COMPARISON_SORTS, COMPARISON_SORT_LABEL, type ComparisonSort, type SavedComparison, comparisonNameSchema } from "@/lib/validation/comparisons";
+import { api } from "@/lib/platform/client/api";
+import { type DisplayPrefs, formatLen, formatNumber } from "@/lib/comparisons/format";
+import { readingPhrase } from "@/lib/comparisons/speedometer";
+import { encodeComparison } from "@/lib/comparisons/url";
+import { COMPARISON_SORTS, COMPARISON_SORT_LABEL, type ComparisonSort, type SavedComparison, comparisonNameSchema } from "@/lib/comparisons/savedSchema";
 
 type ListData = SavedComparison[];
 const LIST_KEY = ["comparisons"] as const;

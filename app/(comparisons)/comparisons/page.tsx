@@ -2,8 +2,8 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { buttonClass } from "@/components/ui/Button";
 import { PageHeader } from "@/components/ui/PageHeader";
-import { requirePageCaller } from "@/lib/auth/session";
-import { comparisonQueries } from "@/lib/server/comparisons";
+import { requirePageCaller } from "@/lib/platform/auth/session";
+import { comparisonQueries } from "@/lib/comparisons/queries";
 import { ComparisonList } from "./ComparisonList";
 
 export const metadata: Metadata = { title: "My comparisons" };

@@ -4,13 +4,13 @@ import { Badge } from "@/components/ui/Badge";
 import { buttonClass } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { PageHeader } from "@/components/ui/PageHeader";
-import { requirePageCaller } from "@/lib/auth/session";
+import { requirePageCaller } from "@/lib/platform/auth/session";
 import { setupGeometry } from "@/lib/fitment";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
 import { bothUnits } from "@/lib/garage/format";
-import { garageQueries } from "@/lib/server/garage";
-import { FRONT_SUSPENSION_LABEL } from "@/lib/validation/garage";
-import { toEngineSetup } from "@/lib/validation/setup";
+import { garageQueries } from "@/lib/garage/queries";
+import { FRONT_SUSPENSION_LABEL } from "@/lib/garage/schema";
+import { toEngineSetup } from "@/lib/setup/schema";
 
 export const metadata: Metadata = { title: "Your garage" };
 

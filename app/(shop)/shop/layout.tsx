@@ -1,5 +1,5 @@
 import type { ReactNode } from "react";
-import { currentCaller } from "@/lib/auth/session";
+import { currentCaller } from "@/lib/platform/auth/session";
 import { ShopTabs, type Tab } from "./ShopTabs";
 
 export default async function ShopLayout({ children }: { children: ReactNode }) {

@@ -4,8 +4,8 @@ import { Badge } from "@/components/ui/Badge";
 import { buttonClass } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { PageHeader } from "@/components/ui/PageHeader";
-import { requirePageCaller } from "@/lib/auth/session";
-import { shopIdOf, shopQueries } from "@/lib/server/shops";
+import { requirePageCaller } from "@/lib/platform/auth/session";
+import { shopIdOf, shopQueries } from "@/lib/shop/queries";
 
 export const metadata: Metadata = { title: "Your shop" };
 

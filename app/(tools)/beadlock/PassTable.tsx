@@ -1,4 +1,4 @@
-import { formatNumber } from "@/lib/comparison/format";
+import { formatNumber } from "@/lib/comparisons/format";
 import type { TorquePlan, TorqueUnit } from "@/lib/fitment";
 import { cx } from "@/components/ui/cx";
 

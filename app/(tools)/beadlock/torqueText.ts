@@ -1,4 +1,4 @@
-import { formatNumber } from "@/lib/comparison/format";
+import { formatNumber } from "@/lib/comparisons/format";
 import { TORQUE_UNIT_SYMBOL, torqueFromNm, type TorqueUnit } from "@/lib/fitment";
 
 export const otherUnit = (unit: TorqueUnit): TorqueUnit => (unit === "ftlb" ? "nm" : "ftlb");

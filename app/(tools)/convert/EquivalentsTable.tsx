@@ -1,4 +1,4 @@
-import { formatNumber } from "@/lib/comparison/format";
+import { formatNumber } from "@/lib/comparisons/format";
 import { type EquivalentSize, type TireSize, formatNominalInchSize, mmToIn } from "@/lib/fitment";
 
 /** A signed difference in mm with its percentage, e.g. "−4.0 mm (−0.4 %)". */

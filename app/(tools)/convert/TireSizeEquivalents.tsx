@@ -3,7 +3,7 @@ import { useState } from "react";
 import { Alert } from "@/components/ui/Alert";
 import { Card } from "@/components/ui/Card";
 import { TextField } from "@/components/ui/TextField";
-import { formatNumber } from "@/lib/comparison/format";
+import { formatNumber } from "@/lib/comparisons/format";
 import { type TireSize, equivalentSizes, formatNominalInchSize, parseTireSize } from "@/lib/fitment";
 import { EquivalentsTable } from "./EquivalentsTable";
 

@@ -1,4 +1,4 @@
-import type { BackspacingReferenceValue } from "@/lib/comparison/model";
+import type { BackspacingReferenceValue } from "@/lib/comparisons/model";
 
 /**
  * A small schematic of a wheel's inboard half: backspacing measured from the mounting face to the

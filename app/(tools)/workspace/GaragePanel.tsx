@@ -4,9 +4,9 @@ import { useEffect, useMemo } from "react";
 import type { DrawnLimits } from "@/components/comparison/CrossSection";
 import { PredictionTable } from "@/components/garage/PredictionTable";
 import { Button } from "@/components/ui/Button";
-import { type DisplayPrefs, formatLen } from "@/lib/comparison/format";
-import type { SetupInputValues } from "@/lib/comparison/model";
-import { encodeSetupQuery } from "@/lib/comparison/url";
+import { type DisplayPrefs, formatLen } from "@/lib/comparisons/format";
+import type { SetupInputValues } from "@/lib/comparisons/model";
+import { encodeSetupQuery } from "@/lib/comparisons/url";
 import { measuredLimits, predictPoints, steeringAxisOf } from "@/lib/garage/predict";
 import type { WorkspaceVehicle } from "@/lib/garage/types";
 

@@ -4,10 +4,10 @@ import { cleanup, render, screen, waitFor, within } from "@testing-library/react
 import userEvent from "@testing-library/user-event";
 import type { ReactNode } from "react";
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
-import { keyFigures } from "@/lib/comparison/keyFigures";
-import { type ComparisonInput, DEFAULT_INPUT } from "@/lib/comparison/schema";
-import { encodeComparison } from "@/lib/comparison/url";
-import type { SavedComparison } from "@/lib/validation/comparisons";
+import { keyFigures } from "@/lib/comparisons/keyFigures";
+import { type ComparisonInput, DEFAULT_INPUT } from "@/lib/comparisons/schema";
+import { encodeComparison } from "@/lib/comparisons/url";
+import type { SavedComparison } from "@/lib/comparisons/savedSchema";
 import { SaveComparison } from "./SaveComparison";
 import { Workspace } from "./Workspace";
 

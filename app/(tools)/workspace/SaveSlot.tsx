@@ -2,7 +2,7 @@
 import dynamic from "next/dynamic";
 import Link from "next/link";
 import { buttonClass } from "@/components/ui/Button";
-import { encodeComparison } from "@/lib/comparison/url";
+import { encodeComparison } from "@/lib/comparisons/url";
 import { type OpenedComparison, useCurrentInput } from "./currentInput";
 
 // The members' control carries react-hook-form and zod; visitors never download them, and the

@@ -2,10 +2,10 @@
 import { TextField } from "@/components/ui/TextField";
 import { cx } from "@/components/ui/cx";
 import { Segmented } from "@/components/comparison/Segmented";
-import type { SetupFigures } from "@/lib/comparison/compute";
-import type { DraftErrors, SetupDraft } from "@/lib/comparison/draft";
-import { SETUP_FIELD_LABEL as L } from "@/lib/comparison/fields";
-import { type DisplayPrefs, formatInches, formatLen, formatNumber } from "@/lib/comparison/format";
+import type { SetupFigures } from "@/lib/comparisons/compute";
+import type { DraftErrors, SetupDraft } from "@/lib/comparisons/draft";
+import { SETUP_FIELD_LABEL as L } from "@/lib/comparisons/fields";
+import { type DisplayPrefs, formatInches, formatLen, formatNumber } from "@/lib/comparisons/format";
 import { parseTireSize } from "@/lib/fitment";
 import { BackspacingDiagram } from "./BackspacingDiagram";
 

@@ -2,10 +2,10 @@
 import { useState } from "react";
 import { Badge } from "@/components/ui/Badge";
 import { TextField } from "@/components/ui/TextField";
-import type { DraftErrors, VehicleDraft } from "@/lib/comparison/draft";
-import type { DisplayPrefs } from "@/lib/comparison/format";
-import { vehicleFieldLabel } from "@/lib/comparison/fields";
-import { DEFAULT_VEHICLE } from "@/lib/comparison/model";
+import type { DraftErrors, VehicleDraft } from "@/lib/comparisons/draft";
+import type { DisplayPrefs } from "@/lib/comparisons/format";
+import { vehicleFieldLabel } from "@/lib/comparisons/fields";
+import { DEFAULT_VEHICLE } from "@/lib/comparisons/model";
 
 /** The two optional gear ratios that, with the axle ratio, give the crawl ratio. */
 const CRAWL_FIELDS = [

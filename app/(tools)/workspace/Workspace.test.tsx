@@ -2,9 +2,9 @@
 import { cleanup, render, screen, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
-import { DEFAULT_INPUT } from "@/lib/comparison/schema";
-import { PREFS_STORAGE_KEY } from "@/lib/comparison/format";
-import { decodeComparison } from "@/lib/comparison/url";
+import { DEFAULT_INPUT } from "@/lib/comparisons/schema";
+import { PREFS_STORAGE_KEY } from "@/lib/comparisons/format";
+import { decodeComparison } from "@/lib/comparisons/url";
 import { Workspace } from "./Workspace";
 
 // The charts load lazily through next/dynamic; they are not what these tests are about.

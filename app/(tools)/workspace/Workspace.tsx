@@ -7,12 +7,12 @@ import { LazyComparisonCharts } from "@/components/comparison/LazyComparisonChar
 import { HeadlineChanges, SetupDetailTable, WarningList } from "@/components/comparison/ResultsPanel";
 import { useDisplayPrefs } from "@/components/comparison/useDisplayPrefs";
 import { Button } from "@/components/ui/Button";
-import { computeComparison } from "@/lib/comparison/compute";
-import { type Draft, type DraftErrors, type SetupDraft, convertDraft, draftFromInput, followTire, inchText, readDraft } from "@/lib/comparison/draft";
-import { fenderUnit, speedUnit, vehicleFieldLabel } from "@/lib/comparison/fields";
-import type { DisplayPrefs } from "@/lib/comparison/format";
-import { type ComparisonInput, DEFAULT_INPUT } from "@/lib/comparison/model";
-import { type LinkProblem, decodeComparison, encodeComparison, problemText } from "@/lib/comparison/url";
+import { computeComparison } from "@/lib/comparisons/compute";
+import { type Draft, type DraftErrors, type SetupDraft, convertDraft, draftFromInput, followTire, inchText, readDraft } from "@/lib/comparisons/draft";
+import { fenderUnit, speedUnit, vehicleFieldLabel } from "@/lib/comparisons/fields";
+import type { DisplayPrefs } from "@/lib/comparisons/format";
+import { type ComparisonInput, DEFAULT_INPUT } from "@/lib/comparisons/model";
+import { type LinkProblem, decodeComparison, encodeComparison, problemText } from "@/lib/comparisons/url";
 import type { WorkspaceVehicle } from "@/lib/garage/types";
 import { CurrentInputContext, withParam } from "./currentInput";
 import { SetupFields } from "./SetupFields";

@@ -1,6 +1,6 @@
 "use client";
 import { createContext, useContext } from "react";
-import type { ComparisonInput } from "@/lib/comparison/schema";
+import type { ComparisonInput } from "@/lib/comparisons/schema";
 
 /**
  * The workspace's current comparison for controls placed in its toolbar slot (the save

@@ -1,11 +1,11 @@
 import type { Metadata } from "next";
 import { z } from "zod";
 import { PageHeader } from "@/components/ui/PageHeader";
-import { decodeComparison } from "@/lib/comparison/url";
-import { admits, currentCaller } from "@/lib/auth/session";
+import { decodeComparison } from "@/lib/comparisons/url";
+import { admits, currentCaller } from "@/lib/platform/auth/session";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
-import { comparisonQueries } from "@/lib/server/comparisons";
-import { garageQueries } from "@/lib/server/garage";
+import { comparisonQueries } from "@/lib/comparisons/queries";
+import { garageQueries } from "@/lib/garage/queries";
 import { SaveSlot } from "./SaveSlot";
 import { Workspace } from "./Workspace";
 

@@ -1,6 +1,6 @@
-import { json, route } from "@/lib/http/route";
-import { comparisonQueries } from "@/lib/server/comparisons";
-import { createComparisonSchema, listComparisonsQuery } from "@/lib/validation/comparisons";
+import { json, route } from "@/lib/platform/http/route";
+import { comparisonQueries } from "@/lib/comparisons/queries";
+import { createComparisonSchema, listComparisonsQuery } from "@/lib/comparisons/savedSchema";
 
 /** The caller's saved comparisons, searched (name or tire size) and sorted. */
 export const GET = route({ access: "signed-in", query: listComparisonsQuery }, async ({ caller, query }) => {

@@ -1,5 +1,5 @@
-import { log } from "@/lib/log";
-import { healthQueries } from "@/lib/server/health";
+import { log } from "@/lib/platform/log";
+import { healthQueries } from "@/lib/platform/health/health";
 
 export const dynamic = "force-dynamic";
 

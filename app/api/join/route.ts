@@ -1,6 +1,6 @@
-import { route } from "@/lib/http/route";
-import { shopQueries } from "@/lib/server/shops";
-import { joinShopSchema } from "@/lib/validation/shop";
+import { route } from "@/lib/platform/http/route";
+import { shopQueries } from "@/lib/shop/queries";
+import { joinShopSchema } from "@/lib/shop/schema";
 
 /**
  * Accepts a staff invitation: the token is consumed in the same transaction that creates the

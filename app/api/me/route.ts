@@ -1,4 +1,4 @@
-import { route } from "@/lib/http/route";
+import { route } from "@/lib/platform/http/route";
 
 export const GET = route({ access: "signed-in" }, async ({ caller }) => ({
   id: caller.userId,

@@ -1,7 +1,7 @@
 import { GARAGE_ACCESS } from "@/lib/garage/access";
-import { json, route } from "@/lib/http/route";
-import { garageQueries } from "@/lib/server/garage";
-import { vehicleSchema } from "@/lib/validation/garage";
+import { json, route } from "@/lib/platform/http/route";
+import { garageQueries } from "@/lib/garage/queries";
+import { vehicleSchema } from "@/lib/garage/schema";
 
 
 export const GET = route({ access: GARAGE_ACCESS }, async ({ caller }) => ({ vehicles: await garageQueries.listVehicles(caller.userId) }));

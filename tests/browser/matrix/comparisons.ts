@@ -1,4 +1,4 @@
-import { DEFAULT_INPUT } from "@/lib/comparison/schema";
+import { DEFAULT_INPUT } from "@/lib/comparisons/schema";
 import { call } from "../support/http";
 import type { MatrixCase } from "./types";
 

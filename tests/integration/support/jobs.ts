@@ -1,6 +1,6 @@
 import type PgBoss from "pg-boss";
-import { type QueueName, getBoss, stopBoss } from "@/lib/jobs/boss";
-import { runJob } from "@/lib/jobs/workers";
+import { type QueueName, getBoss, stopBoss } from "@/lib/platform/jobs/boss";
+import { runJob } from "@/lib/platform/jobs/workers";
 
 /**
  * The job queue on the test database (DATABASE_URL): started without background workers so a

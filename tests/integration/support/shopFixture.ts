@@ -1,5 +1,5 @@
 import type { Knex } from "knex";
-import { CSV_TEMPLATE, parseCatalogCsv } from "@/lib/catalog/csv";
+import { CSV_TEMPLATE, parseCatalogCsv } from "@/lib/shop/catalog/csv";
 
 export const SHOP_A = "0a000000-0000-4000-8000-00000000000a";
 export const SHOP_B = "0b000000-0000-4000-8000-00000000000b";

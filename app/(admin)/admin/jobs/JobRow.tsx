@@ -1,8 +1,8 @@
 "use client";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { Button } from "@/components/ui/Button";
-import { ApiError, api } from "@/lib/client/api";
-import type { ProblemJob } from "@/lib/jobs/problemJob";
+import { ApiError, api } from "@/lib/platform/client/api";
+import type { ProblemJob } from "@/lib/platform/jobs/problemJob";
 
 const QUEUE_LABEL: Record<string, string> = { "mail.send": "E-mail", "quotes.expire": "Quote expiry" };
 const when = (iso: string | null) => (iso ? `${new Date(iso).toLocaleString("en-US", { timeZone: "UTC" })} UTC` : "—");

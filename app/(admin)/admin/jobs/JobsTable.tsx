@@ -1,8 +1,8 @@
 "use client";
 import { useQuery } from "@tanstack/react-query";
 import { Alert } from "@/components/ui/Alert";
-import { api } from "@/lib/client/api";
-import type { ProblemJob } from "@/lib/jobs/problemJob";
+import { api } from "@/lib/platform/client/api";
+import type { ProblemJob } from "@/lib/platform/jobs/problemJob";
 import { JobRow } from "./JobRow";
 
 /** The list refreshes every 10 s, so a retried job is seen leaving it. */

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { PageHeader } from "@/components/ui/PageHeader";
-import { requirePageCaller } from "@/lib/auth/session";
-import { jobQueries } from "@/lib/server/jobs";
+import { requirePageCaller } from "@/lib/platform/auth/session";
+import { jobQueries } from "@/lib/platform/jobs/queries";
 import { JobsTable } from "./JobsTable";
 
 export const metadata: Metadata = { title: "Background jobs" };

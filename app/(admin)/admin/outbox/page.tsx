@@ -2,8 +2,8 @@ import type { Metadata } from "next";
 import { Alert } from "@/components/ui/Alert";
 import { Card } from "@/components/ui/Card";
 import { PageHeader } from "@/components/ui/PageHeader";
-import { requirePageCaller } from "@/lib/auth/session";
-import { type OutboxMessage, fetchOutbox, outboxUrl } from "@/lib/mail/outbox";
+import { requirePageCaller } from "@/lib/platform/auth/session";
+import { type OutboxMessage, fetchOutbox, outboxUrl } from "@/lib/platform/mail/outbox";
 
 export const metadata: Metadata = { title: "Development outbox" };
 export const dynamic = "force-dynamic";

@@ -2,9 +2,9 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useId, useState } from "react";
 import { Button } from "@/components/ui/Button";
-import { ApiError, api } from "@/lib/client/api";
-import { ROLES, type Role } from "@/lib/db/types";
-import { labelledMessage } from "@/lib/validation/labels";
+import { ApiError, api } from "@/lib/platform/client/api";
+import { ROLES, type Role } from "@/lib/platform/db/types";
+import { labelledMessage } from "@/lib/platform/validation/labels";
 import type { UserItem } from "./UsersTable";
 
 const ROLE_LABEL: Record<Role, string> = { member: "Member", shop_staff: "Shop staff", shop_owner: "Shop owner", admin: "Admin" };

@@ -3,9 +3,9 @@ import { useQuery } from "@tanstack/react-query";
 import { useState } from "react";
 import { Alert } from "@/components/ui/Alert";
 import { Card } from "@/components/ui/Card";
-import { api } from "@/lib/client/api";
-import type { AdminUser } from "@/lib/users/api";
-import { USERS_SEARCH_LABEL } from "@/lib/validation/adminUsers";
+import { api } from "@/lib/platform/client/api";
+import type { AdminUser } from "@/lib/accounts/api";
+import { USERS_SEARCH_LABEL } from "@/lib/accounts/adminSchema";
 import { UserRow } from "./UserRow";
 
 /** A row of the table: the API's AdminUser. */

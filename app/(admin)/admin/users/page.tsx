@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { PageHeader } from "@/components/ui/PageHeader";
-import { requirePageCaller } from "@/lib/auth/session";
-import { userQueries } from "@/lib/server/users";
+import { requirePageCaller } from "@/lib/platform/auth/session";
+import { userQueries } from "@/lib/accounts/queries";
 import { UsersTable } from "./UsersTable";
 
 export const metadata: Metadata = { title: "Users and roles" };

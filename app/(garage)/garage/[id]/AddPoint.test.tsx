@@ -3,7 +3,7 @@ import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
 import { cleanup, render, screen, waitFor } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { afterEach, describe, expect, it, vi } from "vitest";
-import { clearanceSchema } from "@/lib/validation/garage";
+import { clearanceSchema } from "@/lib/garage/schema";
 import { AddPoint } from "./AddPoint";
 
 vi.setConfig({ testTimeout: 20_000 });

@@ -6,8 +6,8 @@ import { useForm } from "react-hook-form";
 import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
 import { TextField } from "@/components/ui/TextField";
-import { api, applyFieldErrors } from "@/lib/client/api";
-import { CLEARANCE_DIRECTION_LABEL, type ClearanceFormValues, type ClearanceValues, SUSPENSION_STATE_LABEL, clearanceSchema, distanceForUnit } from "@/lib/validation/garage";
+import { api, applyFieldErrors } from "@/lib/platform/client/api";
+import { CLEARANCE_DIRECTION_LABEL, type ClearanceFormValues, type ClearanceValues, SUSPENSION_STATE_LABEL, clearanceSchema, distanceForUnit } from "@/lib/garage/schema";
 
 /**
  * The form that records a measured gap. The unit select applies to a distance typed without

@@ -3,7 +3,7 @@ import { cleanup, render, screen } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import type { ReactNode } from "react";
 import { afterEach, describe, expect, it, vi } from "vitest";
-import { DEFAULT_INPUT } from "@/lib/comparison/model";
+import { DEFAULT_INPUT } from "@/lib/comparisons/model";
 import type { VehicleDetail } from "@/lib/garage/types";
 import { PlannedPanel } from "./PlannedPanel";
 

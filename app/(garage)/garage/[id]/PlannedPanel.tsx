@@ -11,11 +11,11 @@ import { Card } from "@/components/ui/Card";
 import { TextField } from "@/components/ui/TextField";
 import { DEFAULT_CLEARANCE_MARGIN_MM, compareSetups } from "@/lib/fitment";
 import { bothUnits, marginText, signedMm } from "@/lib/garage/format";
-import { urlNumber } from "@/lib/comparison/url";
+import { urlNumber } from "@/lib/comparisons/url";
 import { setupQuery, workspaceHref } from "@/lib/garage/links";
 import type { VehicleDetail } from "@/lib/garage/types";
-import { marginField } from "@/lib/validation/garage";
-import { type SetupFormValues, type SetupValues, setupSchema, setupToForm, toEngineSetup } from "@/lib/validation/setup";
+import { marginField } from "@/lib/garage/schema";
+import { type SetupFormValues, type SetupValues, setupSchema, setupToForm, toEngineSetup } from "@/lib/setup/schema";
 import { SetupFields } from "../_components/SetupFields";
 import { predictPoints, steeringAxisOf } from "@/lib/garage/predict";
 

@@ -1,10 +1,10 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { z } from "zod";
-import { requirePageCaller } from "@/lib/auth/session";
+import { requirePageCaller } from "@/lib/platform/auth/session";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
 import { setupFromQuery } from "@/lib/garage/links";
-import { garageQueries } from "@/lib/server/garage";
+import { garageQueries } from "@/lib/garage/queries";
 import { VehicleView } from "./VehicleView";
 
 export const metadata: Metadata = { title: "Vehicle" };

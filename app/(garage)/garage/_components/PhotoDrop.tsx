@@ -4,7 +4,7 @@ import Image from "next/image";
 import { useId, useRef, useState } from "react";
 import { Button } from "@/components/ui/Button";
 import { cx } from "@/components/ui/cx";
-import { api, newIdempotencyKey } from "@/lib/client/api";
+import { api, newIdempotencyKey } from "@/lib/platform/client/api";
 import type { VehiclePhoto } from "@/lib/garage/types";
 
 const MAX = 10 * 1024 * 1024;

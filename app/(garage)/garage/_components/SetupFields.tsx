@@ -1,11 +1,11 @@
 "use client";
 import { type FieldValues, type Path, type UseFormReturn, get, useWatch } from "react-hook-form";
 import { TextField } from "@/components/ui/TextField";
-import { SETUP_FIELD_LABEL as L } from "@/lib/comparison/fields";
+import { SETUP_FIELD_LABEL as L } from "@/lib/comparisons/fields";
 
 /**
  * The inputs of one setup (tire, wheel, offset or backspacing with its reference, spacer),
- * registered under `name` in any form whose schema nests lib/validation/setup.ts there.
+ * registered under `name` in any form whose schema nests lib/setup/schema.ts there.
  */
 export function SetupFields<T extends FieldValues>({ form, name, legend, tone = "steel" }: { form: UseFormReturn<T>; name: string; legend: string; tone?: "steel" | "ember" }) {
   const { register, formState } = form;

@@ -8,12 +8,12 @@ import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { TextField } from "@/components/ui/TextField";
-import { api, applyFieldErrors } from "@/lib/client/api";
+import { api, applyFieldErrors } from "@/lib/platform/client/api";
 import { formatBoltPattern, formatLength, parseBoltPattern } from "@/lib/fitment";
 import { marginText } from "@/lib/garage/format";
 import type { Vehicle } from "@/lib/garage/types";
-import { FRONT_SUSPENSION_LABEL, type VehicleFormValues, type VehicleValues, vehicleSchema } from "@/lib/validation/garage";
-import { EMPTY_SETUP_FORM, setupToForm } from "@/lib/validation/setup";
+import { FRONT_SUSPENSION_LABEL, type VehicleFormValues, type VehicleValues, vehicleSchema } from "@/lib/garage/schema";
+import { EMPTY_SETUP_FORM, setupToForm } from "@/lib/setup/schema";
 import { SetupFields } from "./SetupFields";
 
 const FIELDS = [

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { PageHeader } from "@/components/ui/PageHeader";
-import { requirePageCaller } from "@/lib/auth/session";
+import { requirePageCaller } from "@/lib/platform/auth/session";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
 import { VehicleForm } from "../_components/VehicleForm";
 

@@ -7,8 +7,8 @@ import { useForm } from "react-hook-form";
 import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
 import { TextField } from "@/components/ui/TextField";
-import { api, applyFieldErrors } from "@/lib/client/api";
-import { type JoinShopInput, joinShopSchema } from "@/lib/validation/shop";
+import { api, applyFieldErrors } from "@/lib/platform/client/api";
+import { type JoinShopInput, joinShopSchema } from "@/lib/shop/schema";
 
 export function JoinForm({ token, email, hasAccount }: { token: string; email: string; hasAccount: boolean }) {
   const router = useRouter();

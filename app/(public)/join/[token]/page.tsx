@@ -1,8 +1,8 @@
 import type { Metadata } from "next";
 import { Alert } from "@/components/ui/Alert";
 import { Card } from "@/components/ui/Card";
-import { shopQueries } from "@/lib/server/shops";
-import { userQueries } from "@/lib/server/users";
+import { shopQueries } from "@/lib/shop/queries";
+import { userQueries } from "@/lib/accounts/queries";
 import { JoinForm } from "./JoinForm";
 
 export const metadata: Metadata = { title: "Join a shop", robots: { index: false } };

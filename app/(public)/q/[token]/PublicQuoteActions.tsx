@@ -4,8 +4,8 @@ import { useState } from "react";
 import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
-import { api } from "@/lib/client/api";
-import type { QuoteStatus } from "@/lib/db/types";
+import { api } from "@/lib/platform/client/api";
+import type { QuoteStatus } from "@/lib/platform/db/types";
 
 export function PublicQuoteActions({ token, status, deposit, balance }: { token: string; status: QuoteStatus; deposit: string; balance: string }) {
   const router = useRouter();

@@ -5,9 +5,9 @@ import { QuoteDocumentLines } from "@/components/quotes/QuoteDocumentLines";
 import { Alert } from "@/components/ui/Alert";
 import { Badge } from "@/components/ui/Badge";
 import { Card } from "@/components/ui/Card";
-import { formatUsd } from "@/lib/quotes/money";
-import { STATUS_LABEL } from "@/lib/server/quotes";
-import { quoteSendQueries } from "@/lib/server/quoteSend";
+import { formatUsd } from "@/lib/shop/quotes/money";
+import { STATUS_LABEL } from "@/lib/shop/quotes/queries";
+import { quoteSendQueries } from "@/lib/shop/quotes/send";
 import { PublicQuoteActions } from "./PublicQuoteActions";
 
 export const metadata: Metadata = { title: "Your quote", robots: { index: false } };

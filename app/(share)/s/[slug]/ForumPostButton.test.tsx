@@ -2,9 +2,9 @@
 import { cleanup, render, screen } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { afterEach, describe, expect, it, vi } from "vitest";
-import { computeComparison } from "@/lib/comparison/compute";
-import { DEFAULT_PREFS } from "@/lib/comparison/format";
-import { DEFAULT_INPUT } from "@/lib/comparison/schema";
+import { computeComparison } from "@/lib/comparisons/compute";
+import { DEFAULT_PREFS } from "@/lib/comparisons/format";
+import { DEFAULT_INPUT } from "@/lib/comparisons/schema";
 import { ForumPostButton } from "./ForumPostButton";
 import { ShareOriginProvider } from "./ShareOrigin";
 

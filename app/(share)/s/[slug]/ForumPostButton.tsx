@@ -2,9 +2,9 @@
 import { useId, useRef, useState, useSyncExternalStore } from "react";
 import { Segmented } from "@/components/comparison/Segmented";
 import { Button } from "@/components/ui/Button";
-import type { ComparisonResult } from "@/lib/comparison/compute";
-import type { DisplayPrefs } from "@/lib/comparison/format";
-import { FORUM_FORMAT_LABEL, type ForumFormat, forumPost } from "@/lib/comparison/forumPost";
+import type { ComparisonResult } from "@/lib/comparisons/compute";
+import type { DisplayPrefs } from "@/lib/comparisons/format";
+import { FORUM_FORMAT_LABEL, type ForumFormat, forumPost } from "@/lib/comparisons/forumPost";
 import { useShareOrigin } from "./ShareOrigin";
 
 const noSubscribe = () => () => {};

@@ -3,8 +3,8 @@ import { cleanup, render, screen } from "@testing-library/react";
 import type { ReactElement } from "react";
 import { cloneElement } from "react";
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
-import { PREFS_STORAGE_KEY } from "@/lib/comparison/format";
-import { DEFAULT_INPUT } from "@/lib/comparison/schema";
+import { PREFS_STORAGE_KEY } from "@/lib/comparisons/format";
+import { DEFAULT_INPUT } from "@/lib/comparisons/schema";
 import { SharedView } from "./SharedView";
 
 // The charts load through next/dynamic in the page; here they render at once, at a fixed size

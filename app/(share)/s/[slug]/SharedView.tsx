@@ -7,10 +7,10 @@ import { LazyComparisonCharts } from "@/components/comparison/LazyComparisonChar
 import { HeadlineChanges, SetupDetailTable, WarningList } from "@/components/comparison/ResultsPanel";
 import { useDisplayPrefs } from "@/components/comparison/useDisplayPrefs";
 import { buttonClass } from "@/components/ui/Button";
-import { computeComparison } from "@/lib/comparison/compute";
-import { type DisplayPrefs, formatEnteredSpeed, formatLen, formatNumber } from "@/lib/comparison/format";
-import type { ComparisonInput } from "@/lib/comparison/schema";
-import { encodeComparison } from "@/lib/comparison/url";
+import { computeComparison } from "@/lib/comparisons/compute";
+import { type DisplayPrefs, formatEnteredSpeed, formatLen, formatNumber } from "@/lib/comparisons/format";
+import type { ComparisonInput } from "@/lib/comparisons/schema";
+import { encodeComparison } from "@/lib/comparisons/url";
 import { ForumPostButton } from "./ForumPostButton";
 
 function VehicleSummary({ input, prefs }: { input: ComparisonInput; prefs: DisplayPrefs }) {

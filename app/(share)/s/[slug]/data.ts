@@ -1,7 +1,7 @@
 import "server-only";
 import { cache } from "react";
-import { comparisonQueries, type SharedComparison } from "@/lib/server/comparisons";
-import { SHARE_SLUG_RE } from "@/lib/validation/comparisons";
+import { comparisonQueries, type SharedComparison } from "@/lib/comparisons/queries";
+import { SHARE_SLUG_RE } from "@/lib/comparisons/savedSchema";
 
 /**
  * The one database read of a share view: generateMetadata and the page call this with the same

@@ -1,9 +1,9 @@
 import type { ReactElement } from "react";
 import { ImageResponse } from "next/og";
-import type { ComparisonResult, SetupFigures } from "@/lib/comparison/compute";
-import { computeComparison } from "@/lib/comparison/compute";
-import { DEFAULT_PREFS, formatLen, formatLenOther, formatNumber, formatSpeedIn } from "@/lib/comparison/format";
-import { readingPhrase } from "@/lib/comparison/speedometer";
+import type { ComparisonResult, SetupFigures } from "@/lib/comparisons/compute";
+import { computeComparison } from "@/lib/comparisons/compute";
+import { DEFAULT_PREFS, formatLen, formatLenOther, formatNumber, formatSpeedIn } from "@/lib/comparisons/format";
+import { readingPhrase } from "@/lib/comparisons/speedometer";
 import { inToMm } from "@/lib/fitment";
 import { type CoveredFont, fontsFor } from "./_og/fonts";
 import { drawableText } from "./_og/text";

@@ -1,9 +1,9 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { PageHeader } from "@/components/ui/PageHeader";
-import { computeComparison } from "@/lib/comparison/compute";
-import { DEFAULT_PREFS, formatLen, formatNumber, formatSpeedIn } from "@/lib/comparison/format";
-import { appOrigin } from "@/lib/mail";
+import { computeComparison } from "@/lib/comparisons/compute";
+import { DEFAULT_PREFS, formatLen, formatNumber, formatSpeedIn } from "@/lib/comparisons/format";
+import { appOrigin } from "@/lib/platform/mail";
 import { getSharedComparison } from "./data";
 import { ShareOriginProvider } from "./ShareOrigin";
 import { SharedView } from "./SharedView";
@@ -15,8 +15,8 @@ import { SharedView } from "./SharedView";
  * front). It is the same for every reader, so it is rendered without the session
  * (`force-static`: the header shows the signed-out links here). When a link dies — revoked,
  * replaced, or its comparison deleted — or the comparison changes, the route handler drops
- * the cached page (lib/server/shareCache.ts; other app servers hear of it through PostgreSQL
- * NOTIFY, lib/http/sharePurge.ts) and the next request renders afresh: a revoked link is a 404
+ * the cached page (lib/comparisons/shareCache.ts; other app servers hear of it through PostgreSQL
+ * NOTIFY, lib/platform/http/sharePurge.ts) and the next request renders afresh: a revoked link is a 404
  * on the next request. A shared cache in front (CDN) may keep a copy up to
  * `revalidate` seconds; that bound is why it is short.
  */

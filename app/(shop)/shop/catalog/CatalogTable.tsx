@@ -6,10 +6,10 @@ import { Alert } from "@/components/ui/Alert";
 import { Badge } from "@/components/ui/Badge";
 import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
-import { CATALOG_KIND_FILTERS, type CatalogItem, type CatalogPage } from "@/lib/catalog/api";
-import { api } from "@/lib/client/api";
-import { formatUsd } from "@/lib/quotes/money";
-import { CATALOG_QUERY_LABELS } from "@/lib/validation/catalog";
+import { CATALOG_KIND_FILTERS, type CatalogItem, type CatalogPage } from "@/lib/shop/catalog/api";
+import { api } from "@/lib/platform/client/api";
+import { formatUsd } from "@/lib/shop/quotes/money";
+import { CATALOG_QUERY_LABELS } from "@/lib/shop/catalog/schema";
 
 
 const SERVICE_LABEL: Record<string, string> = {

@@ -4,9 +4,9 @@ import { Badge } from "@/components/ui/Badge";
 import { buttonClass } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { PageHeader } from "@/components/ui/PageHeader";
-import { requirePageCaller } from "@/lib/auth/session";
-import { formatUsd } from "@/lib/quotes/money";
-import { quoteQueries, quoteScopeOf, STATUS_LABEL } from "@/lib/server/quotes";
+import { requirePageCaller } from "@/lib/platform/auth/session";
+import { formatUsd } from "@/lib/shop/quotes/money";
+import { quoteQueries, quoteScopeOf, STATUS_LABEL } from "@/lib/shop/quotes/queries";
 import { statusTone } from "./statusTone";
 
 export const metadata: Metadata = { title: "Quotes" };

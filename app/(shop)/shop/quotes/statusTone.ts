@@ -1,4 +1,4 @@
-import type { QuoteStatus } from "@/lib/db/types";
+import type { QuoteStatus } from "@/lib/platform/db/types";
 
 export function statusTone(s: QuoteStatus | string): "neutral" | "steel" | "ember" | "clear" | "contact" | "tight" {
   switch (s) {

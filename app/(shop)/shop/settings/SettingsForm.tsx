@@ -6,8 +6,8 @@ import { useForm } from "react-hook-form";
 import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
 import { TextField } from "@/components/ui/TextField";
-import { api, applyFieldErrors } from "@/lib/client/api";
-import { type ShopSettings, type ShopSettingsInput, shopSettingsSchema } from "@/lib/validation/shop";
+import { api, applyFieldErrors } from "@/lib/platform/client/api";
+import { type ShopSettings, type ShopSettingsInput, shopSettingsSchema } from "@/lib/shop/schema";
 
 const FIELDS = ["name", "address", "phone", "taxRate", "labourRate", "fabricationRate", "quoteValidityDays", "depositPct", "currency"] as const;
 

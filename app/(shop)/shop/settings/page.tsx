@@ -1,9 +1,9 @@
 import type { Metadata } from "next";
 import { Card } from "@/components/ui/Card";
 import { PageHeader } from "@/components/ui/PageHeader";
-import { requirePageCaller } from "@/lib/auth/session";
-import { formatBp, formatCents } from "@/lib/quotes/money";
-import { shopIdOf, shopQueries } from "@/lib/server/shops";
+import { requirePageCaller } from "@/lib/platform/auth/session";
+import { formatBp, formatCents } from "@/lib/shop/quotes/money";
+import { shopIdOf, shopQueries } from "@/lib/shop/queries";
 import { notFound } from "next/navigation";
 import { SettingsForm } from "./SettingsForm";
 

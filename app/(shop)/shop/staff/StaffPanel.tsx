@@ -8,9 +8,9 @@ import { Badge } from "@/components/ui/Badge";
 import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { TextField } from "@/components/ui/TextField";
-import { api, applyFieldErrors } from "@/lib/client/api";
+import { api, applyFieldErrors } from "@/lib/platform/client/api";
 import type { StaffData } from "@/lib/shop/api";
-import { type StaffInviteInput, staffInviteSchema } from "@/lib/validation/shop";
+import { type StaffInviteInput, staffInviteSchema } from "@/lib/shop/schema";
 
 
 export function StaffPanel({ initial, selfId }: { initial: StaffData; selfId: string }) {

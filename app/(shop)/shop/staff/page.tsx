@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { PageHeader } from "@/components/ui/PageHeader";
-import { requirePageCaller } from "@/lib/auth/session";
-import { shopIdOf, shopQueries } from "@/lib/server/shops";
+import { requirePageCaller } from "@/lib/platform/auth/session";
+import { shopIdOf, shopQueries } from "@/lib/shop/queries";
 import { StaffPanel } from "./StaffPanel";
 
 export const metadata: Metadata = { title: "Staff" };

@@ -1,11 +1,11 @@
-import { clientAddress } from "@/lib/auth/clientAddress";
-import { hashPassword } from "@/lib/auth/password";
-import { HttpError } from "@/lib/http/errors";
-import { route } from "@/lib/http/route";
-import { RATE_LIMITS } from "@/lib/server/limits";
-import { rateLimitQueries } from "@/lib/server/rateLimit";
-import { DuplicateEmailError, userQueries } from "@/lib/server/users";
-import { signUpSchema } from "@/lib/validation/account";
+import { clientAddress } from "@/lib/platform/auth/clientAddress";
+import { hashPassword } from "@/lib/platform/auth/password";
+import { HttpError } from "@/lib/platform/http/errors";
+import { route } from "@/lib/platform/http/route";
+import { RATE_LIMITS } from "@/lib/platform/limits/limits";
+import { rateLimitQueries } from "@/lib/platform/limits/rateLimit";
+import { DuplicateEmailError, userQueries } from "@/lib/accounts/queries";
+import { signUpSchema } from "@/lib/accounts/schema";
 
 /**
  * Creates the account (the form then signs in). An address already in use is said so: sign-up

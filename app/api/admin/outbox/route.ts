@@ -1,4 +1,4 @@
-import { route } from "@/lib/http/route";
-import { fetchOutbox } from "@/lib/mail/outbox";
+import { route } from "@/lib/platform/http/route";
+import { fetchOutbox } from "@/lib/platform/mail/outbox";
 
 export const GET = route({ access: ["admin"] }, async () => ({ messages: await fetchOutbox() }));

@@ -1,7 +1,7 @@
-import { parseLabelledQuery } from "@/lib/http/labelledQuery";
-import { route } from "@/lib/http/route";
-import { userQueries } from "@/lib/server/users";
-import { USERS_SEARCH_LABEL, adminUsersQuerySchema } from "@/lib/validation/adminUsers";
+import { parseLabelledQuery } from "@/lib/platform/http/labelledQuery";
+import { route } from "@/lib/platform/http/route";
+import { userQueries } from "@/lib/accounts/queries";
+import { USERS_SEARCH_LABEL, adminUsersQuerySchema } from "@/lib/accounts/adminSchema";
 
 export const GET = route({ access: ["admin"] }, async ({ req }) => {
   // The page shows only the message, beside its search box.

@@ -1,6 +1,6 @@
 import NextAuth from "next-auth";
 import { type NextRequest, NextResponse } from "next/server";
-import { authOptions } from "@/lib/auth/options";
+import { authOptions } from "@/lib/platform/auth/options";
 
 const handler = NextAuth(authOptions);
 

@@ -1,8 +1,8 @@
-import { notFound } from "@/lib/http/errors";
-import { json, route } from "@/lib/http/route";
-import { comparisonQueries } from "@/lib/server/comparisons";
-import { dropCachedShare } from "@/lib/server/shareCache";
-import { comparisonIdParams, updateComparisonSchema } from "@/lib/validation/comparisons";
+import { notFound } from "@/lib/platform/http/errors";
+import { json, route } from "@/lib/platform/http/route";
+import { comparisonQueries } from "@/lib/comparisons/queries";
+import { dropCachedShare } from "@/lib/comparisons/shareCache";
+import { comparisonIdParams, updateComparisonSchema } from "@/lib/comparisons/savedSchema";
 
 const NOT_FOUND = "That comparison";
 

@@ -1,4 +1,4 @@
-import { readiness } from "@/lib/server/readiness";
+import { readiness } from "@/lib/platform/health/readiness";
 
 export const dynamic = "force-dynamic";
 

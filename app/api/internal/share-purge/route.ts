@@ -1,11 +1,11 @@
 import { NextResponse, type NextRequest } from "next/server";
-import { isLocalPurgeToken, isShareSlug, LOCAL_PURGE_HEADER } from "@/lib/http/sharePurge";
-import { dropLocalCachedShare } from "@/lib/server/shareCache";
+import { isLocalPurgeToken, isShareSlug, LOCAL_PURGE_HEADER } from "@/lib/platform/http/sharePurge";
+import { dropLocalCachedShare } from "@/lib/comparisons/shareCache";
 
 /**
  * The server's own request (scripts/serve.ts) when another server changed a share page: Next's
  * page cache can only be revalidated inside a request, so the PostgreSQL listener asks its own
- * server here. Only a caller holding this process's token gets past the 404 (lib/http/sharePurge.ts).
+ * server here. Only a caller holding this process's token gets past the 404 (lib/platform/http/sharePurge.ts).
  * Body: the slug as text, or "*" for every share page.
  */
 export const dynamic = "force-dynamic";

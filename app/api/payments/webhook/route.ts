@@ -1,10 +1,10 @@
 import type Stripe from "stripe";
-import { readCappedBytes } from "@/lib/http/body";
-import { HttpError } from "@/lib/http/errors";
-import { fieldErrorsOf, humanIssue, route } from "@/lib/http/route";
-import { payments, webhookSecret } from "@/lib/payments/provider";
-import { paymentQueries } from "@/lib/server/payments";
-import { paymentEventSchema } from "@/lib/validation/payments";
+import { readCappedBytes } from "@/lib/platform/http/body";
+import { HttpError } from "@/lib/platform/http/errors";
+import { fieldErrorsOf, humanIssue, route } from "@/lib/platform/http/route";
+import { payments, webhookSecret } from "@/lib/shop/payments/provider";
+import { paymentQueries } from "@/lib/shop/payments/queries";
+import { paymentEventSchema } from "@/lib/shop/payments/schema";
 
 /**
  * The payment provider's webhook. Nothing is trusted before the signature over the raw body

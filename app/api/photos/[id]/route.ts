@@ -1,8 +1,8 @@
 import { z } from "zod";
-import { notFound } from "@/lib/http/errors";
-import { route } from "@/lib/http/route";
-import { photoStore } from "@/lib/photos/s3";
-import { garageQueries } from "@/lib/server/garage";
+import { notFound } from "@/lib/platform/http/errors";
+import { route } from "@/lib/platform/http/route";
+import { photoStore } from "@/lib/garage/photos/s3";
+import { garageQueries } from "@/lib/garage/queries";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
 
 const params = z.object({ id: z.uuid() });

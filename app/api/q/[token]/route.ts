@@ -1,14 +1,14 @@
 import { z } from "zod";
-import { HttpError, notFound } from "@/lib/http/errors";
-import { route } from "@/lib/http/route";
-import { clientAddress } from "@/lib/auth/clientAddress";
-import { appOrigin } from "@/lib/mail";
-import { createDepositSession } from "@/lib/payments/provider";
-import { RATE_LIMITS } from "@/lib/server/limits";
-import { paymentQueries } from "@/lib/server/payments";
-import { quoteQueries } from "@/lib/server/quotes";
-import { rateLimitQueries } from "@/lib/server/rateLimit";
-import { publicQuoteActionSchema } from "@/lib/validation/quotes";
+import { HttpError, notFound } from "@/lib/platform/http/errors";
+import { route } from "@/lib/platform/http/route";
+import { clientAddress } from "@/lib/platform/auth/clientAddress";
+import { appOrigin } from "@/lib/platform/mail";
+import { createDepositSession } from "@/lib/shop/payments/provider";
+import { RATE_LIMITS } from "@/lib/platform/limits/limits";
+import { paymentQueries } from "@/lib/shop/payments/queries";
+import { quoteQueries } from "@/lib/shop/quotes/queries";
+import { rateLimitQueries } from "@/lib/platform/limits/rateLimit";
+import { publicQuoteActionSchema } from "@/lib/shop/quotes/schema";
 
 const params = z.object({ token: z.string().regex(/^[A-Za-z0-9_-]{43}$/) });
 const customer = { userId: null, label: "customer" };

@@ -1,8 +1,8 @@
-import { parseLabelledQuery } from "@/lib/http/labelledQuery";
-import { route } from "@/lib/http/route";
-import { catalogQueries } from "@/lib/server/catalog";
-import { SHOP_ANY, shopIdOf } from "@/lib/server/shops";
-import { CATALOG_QUERY_LABELS, catalogQuerySchema } from "@/lib/validation/catalog";
+import { parseLabelledQuery } from "@/lib/platform/http/labelledQuery";
+import { route } from "@/lib/platform/http/route";
+import { catalogQueries } from "@/lib/shop/catalog/queries";
+import { SHOP_ANY, shopIdOf } from "@/lib/shop/queries";
+import { CATALOG_QUERY_LABELS, catalogQuerySchema } from "@/lib/shop/catalog/schema";
 
 /** One page of the caller's shop catalog: filtered, sorted and paged in the database. */
 export const GET = route({ access: SHOP_ANY }, async ({ caller, req }) => {

@@ -1,9 +1,9 @@
-import { HttpError } from "@/lib/http/errors";
-import { parseLabelledQuery } from "@/lib/http/labelledQuery";
-import { route } from "@/lib/http/route";
-import { customerQueries } from "@/lib/server/customers";
-import { SHOP_ANY, shopIdOf } from "@/lib/server/shops";
-import { customerSchema, customerSearchSchema } from "@/lib/validation/quotes";
+import { HttpError } from "@/lib/platform/http/errors";
+import { parseLabelledQuery } from "@/lib/platform/http/labelledQuery";
+import { route } from "@/lib/platform/http/route";
+import { customerQueries } from "@/lib/shop/customers/queries";
+import { SHOP_ANY, shopIdOf } from "@/lib/shop/queries";
+import { customerSchema, customerSearchSchema } from "@/lib/shop/quotes/schema";
 
 /** Finds the shop's customers again by phone (digits), e-mail or name. */
 export const GET = route({ access: SHOP_ANY }, async ({ caller, req }) => {

@@ -1,9 +1,9 @@
 import { z } from "zod";
-import { QUOTE_STATUSES } from "@/lib/db/types";
-import { route } from "@/lib/http/route";
-import { quoteQueries, quoteScopeOf } from "@/lib/server/quotes";
-import { SHOP_ANY, shopIdOf } from "@/lib/server/shops";
-import { createQuoteSchema } from "@/lib/validation/quotes";
+import { QUOTE_STATUSES } from "@/lib/platform/db/types";
+import { route } from "@/lib/platform/http/route";
+import { quoteQueries, quoteScopeOf } from "@/lib/shop/quotes/queries";
+import { SHOP_ANY, shopIdOf } from "@/lib/shop/queries";
+import { createQuoteSchema } from "@/lib/shop/quotes/schema";
 
 /** Owners see the whole shop's quotes; staff the ones they wrote. */
 export const GET = route({ access: SHOP_ANY, query: z.object({ status: z.enum(QUOTE_STATUSES).optional() }) }, async ({ caller, query }) => {

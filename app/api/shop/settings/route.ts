@@ -1,8 +1,8 @@
-import { notFound } from "@/lib/http/errors";
-import { route } from "@/lib/http/route";
+import { notFound } from "@/lib/platform/http/errors";
+import { route } from "@/lib/platform/http/route";
 import { shopDto } from "@/lib/shop/api";
-import { SHOP_ANY, SHOP_OWNER, shopIdOf, shopQueries } from "@/lib/server/shops";
-import { shopSettingsSchema } from "@/lib/validation/shop";
+import { SHOP_ANY, SHOP_OWNER, shopIdOf, shopQueries } from "@/lib/shop/queries";
+import { shopSettingsSchema } from "@/lib/shop/schema";
 
 export const GET = route({ access: SHOP_ANY }, async ({ caller }) => {
   const shop = await shopQueries.getShop(shopIdOf(caller));

@@ -1,10 +1,10 @@
-import { HttpError } from "@/lib/http/errors";
-import { route } from "@/lib/http/route";
-import { appOrigin, queueMail } from "@/lib/mail";
-import { RATE_LIMITS } from "@/lib/server/limits";
-import { rateLimitQueries } from "@/lib/server/rateLimit";
-import { INVITE_TTL_HOURS, SHOP_OWNER, shopIdOf, shopQueries } from "@/lib/server/shops";
-import { staffInviteSchema } from "@/lib/validation/shop";
+import { HttpError } from "@/lib/platform/http/errors";
+import { route } from "@/lib/platform/http/route";
+import { appOrigin, queueMail } from "@/lib/platform/mail";
+import { RATE_LIMITS } from "@/lib/platform/limits/limits";
+import { rateLimitQueries } from "@/lib/platform/limits/rateLimit";
+import { INVITE_TTL_HOURS, SHOP_OWNER, shopIdOf, shopQueries } from "@/lib/shop/queries";
+import { staffInviteSchema } from "@/lib/shop/schema";
 
 export const GET = route({ access: SHOP_OWNER }, async ({ caller }) => {
   const shopId = shopIdOf(caller);

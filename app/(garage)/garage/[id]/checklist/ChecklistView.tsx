@@ -4,9 +4,9 @@ import { useState } from "react";
 import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
-import { api } from "@/lib/client/api";
+import { api } from "@/lib/platform/client/api";
 import { type ChecklistGroup, type ChecklistItem, GROUP_TITLE } from "@/lib/garage/checklist";
-import type { SetupValues } from "@/lib/validation/setup";
+import type { SetupValues } from "@/lib/setup/schema";
 
 /** What the checklist was built from, sent back with the ticks so the server rebuilds the same list. */
 export type ChecklistSourceBody = { planned: SetupValues; marginMm: number } | { comparisonId: string; marginMm: number };

@@ -5,13 +5,13 @@ import { z } from "zod";
 import { Alert } from "@/components/ui/Alert";
 import { buttonClass } from "@/components/ui/Button";
 import { PageHeader } from "@/components/ui/PageHeader";
-import { requirePageCaller } from "@/lib/auth/session";
-import { encodeComparison } from "@/lib/comparison/url";
+import { requirePageCaller } from "@/lib/platform/auth/session";
+import { encodeComparison } from "@/lib/comparisons/url";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
 import { bothUnits, setupLine } from "@/lib/garage/format";
 import { setupFromQuery, setupQuery } from "@/lib/garage/links";
-import { checklistQueries } from "@/lib/server/checklists";
-import { marginMmParam } from "@/lib/validation/garage";
+import { checklistQueries } from "@/lib/garage/checklistQueries";
+import { marginMmParam } from "@/lib/garage/schema";
 import { ChecklistView } from "./ChecklistView";
 
 export const metadata: Metadata = { title: "Install checklist" };

@@ -2,9 +2,9 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { z } from "zod";
 import { PageHeader } from "@/components/ui/PageHeader";
-import { requirePageCaller } from "@/lib/auth/session";
+import { requirePageCaller } from "@/lib/platform/auth/session";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
-import { garageQueries, vehicleDto } from "@/lib/server/garage";
+import { garageQueries, vehicleDto } from "@/lib/garage/queries";
 import { VehicleForm } from "../../_components/VehicleForm";
 
 export const metadata: Metadata = { title: "Edit vehicle" };

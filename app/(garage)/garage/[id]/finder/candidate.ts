@@ -1,6 +1,6 @@
 /** A finder combination as a setup the vehicle page and the workspace open (offset given, no spacer). */
 import type { FitmentCandidate } from "@/lib/fitment";
-import type { SetupValues } from "@/lib/validation/setup";
+import type { SetupValues } from "@/lib/setup/schema";
 
 export function candidateSetup(m: Pick<FitmentCandidate, "tire" | "wheel">): SetupValues {
   return { tire: m.tire.text, wheelDiameterIn: m.wheel.diameterIn, wheelWidthIn: m.wheel.widthIn, position: { mode: "offset", offsetMm: m.wheel.offsetMm }, spacerMm: 0 };

@@ -1,9 +1,9 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { z } from "zod";
-import { requirePageCaller } from "@/lib/auth/session";
+import { requirePageCaller } from "@/lib/platform/auth/session";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
-import { garageQueries } from "@/lib/server/garage";
+import { garageQueries } from "@/lib/garage/queries";
 import { FinderPanel } from "./FinderPanel";
 
 export const metadata: Metadata = { title: "Fitment finder" };

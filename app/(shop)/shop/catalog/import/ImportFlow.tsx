@@ -5,7 +5,7 @@ import { useRef, useState } from "react";
 import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
-import { CSV_MAX_BYTES } from "@/lib/catalog/csv";
+import { CSV_MAX_BYTES } from "@/lib/shop/catalog/csv";
 
 interface Preview {
   importId: string | null;

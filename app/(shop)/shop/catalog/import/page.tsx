@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { PageHeader } from "@/components/ui/PageHeader";
-import { requirePageCaller } from "@/lib/auth/session";
-import { CSV_MAX_BYTES } from "@/lib/catalog/csv";
+import { requirePageCaller } from "@/lib/platform/auth/session";
+import { CSV_MAX_BYTES } from "@/lib/shop/catalog/csv";
 import { ImportFlow } from "./ImportFlow";
 
 export const metadata: Metadata = { title: "Import catalog" };

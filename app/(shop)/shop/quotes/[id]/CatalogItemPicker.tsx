@@ -3,11 +3,11 @@ import { useQuery } from "@tanstack/react-query";
 import { useState } from "react";
 import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
-import { api } from "@/lib/client/api";
-import { CATALOG_KIND_FILTERS, type CatalogItem } from "@/lib/catalog/api";
-import type { CatalogKind } from "@/lib/db/types";
-import { checkWheelOnHub, hubRefusal } from "@/lib/quotes/hubFit";
-import { formatUsd } from "@/lib/quotes/money";
+import { api } from "@/lib/platform/client/api";
+import { CATALOG_KIND_FILTERS, type CatalogItem } from "@/lib/shop/catalog/api";
+import type { CatalogKind } from "@/lib/platform/db/types";
+import { checkWheelOnHub, hubRefusal } from "@/lib/shop/quotes/hubFit";
+import { formatUsd } from "@/lib/shop/quotes/money";
 
 /**
  * Finds any item of the shop's catalog (tires, wheels, every service) and adds it as a line.

@@ -2,8 +2,8 @@
 import { HubChecksList } from "@/components/quotes/HubChecksList";
 import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
-import type { HubCheck } from "@/lib/quotes/document";
-import { ringLineDescription } from "@/lib/quotes/hubFit";
+import type { HubCheck } from "@/lib/shop/quotes/document";
+import { ringLineDescription } from "@/lib/shop/quotes/hubFit";
 
 /**
  * The saved wheel lines against the vehicle's bolt pattern and hub bore. Where a bore is larger

@@ -4,9 +4,9 @@ import { cleanup, render, screen, waitFor, within } from "@testing-library/react
 import userEvent from "@testing-library/user-event";
 import type { ReactNode } from "react";
 import { afterEach, describe, expect, it, vi } from "vitest";
-import { summarize } from "@/lib/quotes/fitment";
+import { summarize } from "@/lib/shop/quotes/fitment";
 import { QuoteEditor } from "./QuoteEditor";
-import type { QuoteDetail as Detail } from "@/lib/quotes/api";
+import type { QuoteDetail as Detail } from "@/lib/shop/quotes/api";
 
 vi.mock("next/link", () => ({ default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => <a href={href} {...rest}>{children}</a> }));
 afterEach(() => {

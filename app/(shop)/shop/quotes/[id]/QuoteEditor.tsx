@@ -9,16 +9,16 @@ import { Badge } from "@/components/ui/Badge";
 import { Button, buttonClass } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { PageHeader } from "@/components/ui/PageHeader";
-import { ApiError, api } from "@/lib/client/api";
-import { type EditForm, type EditLine, bodyOf, formOf, isDirty, labourLine, lineFromCatalog, partsLine } from "@/lib/quotes/editLines";
-import { describeFieldErrors } from "@/lib/quotes/fieldLabels";
-import { STATUS_LABEL } from "@/lib/quotes/status";
+import { ApiError, api } from "@/lib/platform/client/api";
+import { type EditForm, type EditLine, bodyOf, formOf, isDirty, labourLine, lineFromCatalog, partsLine } from "@/lib/shop/quotes/editLines";
+import { describeFieldErrors } from "@/lib/shop/quotes/fieldLabels";
+import { STATUS_LABEL } from "@/lib/shop/quotes/status";
 import { statusTone } from "../statusTone";
 import { CatalogItemPicker } from "./CatalogItemPicker";
 import { HubChecksCard } from "./HubChecksCard";
 import { QuoteLinesTable } from "./QuoteLinesTable";
 import { QuoteTotalsCard } from "./QuoteTotalsCard";
-import type { QuoteDetail as Detail } from "@/lib/quotes/api";
+import type { QuoteDetail as Detail } from "@/lib/shop/quotes/api";
 
 
 const LEAVE = "This quote has changes that are not saved. Leave without saving them?";

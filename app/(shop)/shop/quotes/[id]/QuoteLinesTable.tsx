@@ -1,9 +1,9 @@
 "use client";
 import { Button } from "@/components/ui/Button";
-import { type EditLine, lineUnchanged } from "@/lib/quotes/editLines";
-import { formatUsd } from "@/lib/quotes/money";
-import { formatQuantity } from "@/lib/quotes/quantity";
-import type { QuoteDetail as Detail } from "@/lib/quotes/api";
+import { type EditLine, lineUnchanged } from "@/lib/shop/quotes/editLines";
+import { formatUsd } from "@/lib/shop/quotes/money";
+import { formatQuantity } from "@/lib/shop/quotes/quantity";
+import type { QuoteDetail as Detail } from "@/lib/shop/quotes/api";
 
 const input = "w-full rounded border border-basalt-300 px-2 py-1";
 

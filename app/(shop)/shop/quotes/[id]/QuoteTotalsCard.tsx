@@ -1,6 +1,6 @@
 import { Card } from "@/components/ui/Card";
-import { formatBp, formatUsd } from "@/lib/quotes/money";
-import type { QuoteDetail as Detail } from "@/lib/quotes/api";
+import { formatBp, formatUsd } from "@/lib/shop/quotes/money";
+import type { QuoteDetail as Detail } from "@/lib/shop/quotes/api";
 
 /** The saved totals (computed by the server), the deposit and what is left to pay after it. */
 export function QuoteTotalsCard({ quote: q, stale }: { quote: Detail["quote"]; stale: boolean }) {

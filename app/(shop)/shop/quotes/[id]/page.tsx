@@ -1,10 +1,10 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
-import { requirePageCaller } from "@/lib/auth/session";
-import { HttpError } from "@/lib/http/errors";
-import { quoteDetailDto } from "@/lib/quotes/api";
-import { quoteQueries, quoteScopeOf } from "@/lib/server/quotes";
-import { shopQueries } from "@/lib/server/shops";
+import { requirePageCaller } from "@/lib/platform/auth/session";
+import { HttpError } from "@/lib/platform/http/errors";
+import { quoteDetailDto } from "@/lib/shop/quotes/api";
+import { quoteQueries, quoteScopeOf } from "@/lib/shop/quotes/queries";
+import { shopQueries } from "@/lib/shop/queries";
 import { QuoteEditor } from "./QuoteEditor";
 
 export const metadata: Metadata = { title: "Quote" };

@@ -9,13 +9,13 @@ import { Badge } from "@/components/ui/Badge";
 import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { TextField } from "@/components/ui/TextField";
-import type { FitmentCandidates as Candidates } from "@/lib/catalog/api";
-import { ApiError, api, applyFieldErrors } from "@/lib/client/api";
-import type { Customer, CustomerVehicle } from "@/lib/customers/api";
+import type { FitmentCandidates as Candidates } from "@/lib/shop/catalog/api";
+import { ApiError, api, applyFieldErrors } from "@/lib/platform/client/api";
+import type { Customer, CustomerVehicle } from "@/lib/shop/customers/api";
 import { mmToIn } from "@/lib/fitment";
-import { describeFieldErrors } from "@/lib/quotes/fieldLabels";
-import { formatUsd } from "@/lib/quotes/money";
-import { type CustomerInput, type Vehicle, type VehicleInput, customerSchema, vehicleSchema } from "@/lib/validation/quotes";
+import { describeFieldErrors } from "@/lib/shop/quotes/fieldLabels";
+import { formatUsd } from "@/lib/shop/quotes/money";
+import { type CustomerInput, type Vehicle, type VehicleInput, customerSchema, vehicleSchema } from "@/lib/shop/quotes/schema";
 
 
 const signed = (mm: number, digits = 0) => `${mm > 0 ? "+" : mm < 0 ? "−" : "±"}${Math.abs(mm).toFixed(digits)}`;

@@ -1,12 +1,12 @@
-import { clientAddress } from "@/lib/auth/clientAddress";
-import { route } from "@/lib/http/route";
-import { appOrigin, queueMail } from "@/lib/mail";
-import { afterResponse } from "@/lib/server/afterResponse";
-import { RATE_LIMITS } from "@/lib/server/limits";
-import { RESET_TTL_MINUTES, passwordResetQueries } from "@/lib/server/passwordResets";
-import { rateLimitQueries } from "@/lib/server/rateLimit";
-import { userQueries } from "@/lib/server/users";
-import { forgotPasswordSchema } from "@/lib/validation/account";
+import { clientAddress } from "@/lib/platform/auth/clientAddress";
+import { route } from "@/lib/platform/http/route";
+import { appOrigin, queueMail } from "@/lib/platform/mail";
+import { afterResponse } from "@/lib/platform/http/afterResponse";
+import { RATE_LIMITS } from "@/lib/platform/limits/limits";
+import { RESET_TTL_MINUTES, passwordResetQueries } from "@/lib/accounts/passwordResetQueries";
+import { rateLimitQueries } from "@/lib/platform/limits/rateLimit";
+import { userQueries } from "@/lib/accounts/queries";
+import { forgotPasswordSchema } from "@/lib/accounts/schema";
 
 const ANSWER = {
   message: "If an account uses that address, a reset link is on its way. It works once and expires in 30 minutes.",
@@ -15,7 +15,7 @@ const ANSWER = {
 /**
  * Same answer, in the same time, whether or not the address has an account: the answer goes
  * out before the account is looked up; the lookup, the per-account mail limits and the mail
- * run after it (lib/server/afterResponse.ts). Only the per-address limit answers 429, and it
+ * run after it (lib/platform/http/afterResponse.ts). Only the per-address limit answers 429, and it
  * counts every request alike, so it tells nothing about accounts either.
  */
 export const POST = route({ access: "public", body: forgotPasswordSchema }, async ({ req, body }) => {

@@ -1,10 +1,10 @@
-import { hashPassword } from "@/lib/auth/password";
-import { clientAddress } from "@/lib/auth/clientAddress";
-import { throttleQueries } from "@/lib/auth/throttleQueries";
-import { HttpError } from "@/lib/http/errors";
-import { route } from "@/lib/http/route";
-import { passwordResetQueries } from "@/lib/server/passwordResets";
-import { resetPasswordSchema } from "@/lib/validation/account";
+import { hashPassword } from "@/lib/platform/auth/password";
+import { clientAddress } from "@/lib/platform/auth/clientAddress";
+import { throttleQueries } from "@/lib/platform/auth/throttleQueries";
+import { HttpError } from "@/lib/platform/http/errors";
+import { route } from "@/lib/platform/http/route";
+import { passwordResetQueries } from "@/lib/accounts/passwordResetQueries";
+import { resetPasswordSchema } from "@/lib/accounts/schema";
 
 export const POST = route({ access: "public", body: resetPasswordSchema }, async ({ req, body }) => {
   const hash = await hashPassword(body.password);

@@ -1,6 +1,6 @@
 import { z } from "zod";
-import { route } from "@/lib/http/route";
-import { sessionQueries } from "@/lib/server/sessions";
+import { route } from "@/lib/platform/http/route";
+import { sessionQueries } from "@/lib/accounts/sessionQueries";
 
 // The explicit confirmation keeps a stray or replayed empty POST from signing a person out everywhere.
 const body = z.object({ confirm: z.literal(true, { error: "Confirm that every session should end." }) });

@@ -1,10 +1,10 @@
 import { z } from "zod";
-import { HttpError, notFound } from "@/lib/http/errors";
-import { route } from "@/lib/http/route";
-import { shopQueries } from "@/lib/server/shops";
-import { userQueries } from "@/lib/server/users";
-import { userDto } from "@/lib/users/api";
-import { roleChangeSchema } from "@/lib/validation/account";
+import { HttpError, notFound } from "@/lib/platform/http/errors";
+import { route } from "@/lib/platform/http/route";
+import { shopQueries } from "@/lib/shop/queries";
+import { userQueries } from "@/lib/accounts/queries";
+import { userDto } from "@/lib/accounts/api";
+import { roleChangeSchema } from "@/lib/accounts/schema";
 
 const params = z.object({ id: z.uuid() });
 

@@ -1,7 +1,7 @@
-import { notFound } from "@/lib/http/errors";
-import { json, route } from "@/lib/http/route";
-import { comparisonQueries } from "@/lib/server/comparisons";
-import { comparisonIdParams } from "@/lib/validation/comparisons";
+import { notFound } from "@/lib/platform/http/errors";
+import { json, route } from "@/lib/platform/http/route";
+import { comparisonQueries } from "@/lib/comparisons/queries";
+import { comparisonIdParams } from "@/lib/comparisons/savedSchema";
 
 /** A copy of one of the caller's comparisons, named "… (copy)", without a share link. */
 export const POST = route({ access: "signed-in", params: comparisonIdParams, idempotent: true }, async ({ caller, params }) => {

@@ -1,10 +1,10 @@
-import { notFound } from "@/lib/http/errors";
-import { json, route } from "@/lib/http/route";
-import { comparisonQueries } from "@/lib/server/comparisons";
-import { RATE_LIMITS } from "@/lib/server/limits";
-import { rateLimitQueries } from "@/lib/server/rateLimit";
-import { dropCachedShare } from "@/lib/server/shareCache";
-import { comparisonIdParams } from "@/lib/validation/comparisons";
+import { notFound } from "@/lib/platform/http/errors";
+import { json, route } from "@/lib/platform/http/route";
+import { comparisonQueries } from "@/lib/comparisons/queries";
+import { RATE_LIMITS } from "@/lib/platform/limits/limits";
+import { rateLimitQueries } from "@/lib/platform/limits/rateLimit";
+import { dropCachedShare } from "@/lib/comparisons/shareCache";
+import { comparisonIdParams } from "@/lib/comparisons/savedSchema";
 
 /** Makes a new public link /s/<slug>; a live one is revoked (and stays dead). */
 export const POST = route({ access: "signed-in", params: comparisonIdParams, idempotent: true }, async ({ caller, params }) => {

@@ -1,7 +1,7 @@
-import { catalogToCsv } from "@/lib/catalog/csv";
-import { route } from "@/lib/http/route";
-import { catalogQueries } from "@/lib/server/catalog";
-import { SHOP_ANY, shopIdOf } from "@/lib/server/shops";
+import { catalogToCsv } from "@/lib/shop/catalog/csv";
+import { route } from "@/lib/platform/http/route";
+import { catalogQueries } from "@/lib/shop/catalog/queries";
+import { SHOP_ANY, shopIdOf } from "@/lib/shop/queries";
 
 export const GET = route({ access: SHOP_ANY }, async ({ caller }) => {
   const csv = catalogToCsv(await catalogQueries.allCatalogItems(shopIdOf(caller)));

@@ -1,10 +1,10 @@
 import { z } from "zod";
-import { CSV_MAX_BYTES, decodeCsvBytes, parseCatalogCsv } from "@/lib/catalog/csv";
-import { readCappedBytes } from "@/lib/http/body";
-import { HttpError } from "@/lib/http/errors";
-import { json, route } from "@/lib/http/route";
-import { catalogQueries } from "@/lib/server/catalog";
-import { SHOP_OWNER, shopIdOf } from "@/lib/server/shops";
+import { CSV_MAX_BYTES, decodeCsvBytes, parseCatalogCsv } from "@/lib/shop/catalog/csv";
+import { readCappedBytes } from "@/lib/platform/http/body";
+import { HttpError } from "@/lib/platform/http/errors";
+import { json, route } from "@/lib/platform/http/route";
+import { catalogQueries } from "@/lib/shop/catalog/queries";
+import { SHOP_OWNER, shopIdOf } from "@/lib/shop/queries";
 
 const MAX_ERRORS_SHOWN = 500;
 /** The picked file's name, kept for the import's record: a long one is cut, never a reason to refuse the upload. */

@@ -1,6 +1,6 @@
-import { CSV_TEMPLATE } from "@/lib/catalog/csv";
-import { route } from "@/lib/http/route";
-import { SHOP_ANY } from "@/lib/server/shops";
+import { CSV_TEMPLATE } from "@/lib/shop/catalog/csv";
+import { route } from "@/lib/platform/http/route";
+import { SHOP_ANY } from "@/lib/shop/queries";
 
 export const GET = route({ access: SHOP_ANY }, async () => {
   return new Response("\uFEFF" + CSV_TEMPLATE, {

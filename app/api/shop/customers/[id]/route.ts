@@ -1,8 +1,8 @@
 import { z } from "zod";
-import { notFound } from "@/lib/http/errors";
-import { route } from "@/lib/http/route";
-import { customerQueries } from "@/lib/server/customers";
-import { SHOP_ANY, shopIdOf } from "@/lib/server/shops";
+import { notFound } from "@/lib/platform/http/errors";
+import { route } from "@/lib/platform/http/route";
+import { customerQueries } from "@/lib/shop/customers/queries";
+import { SHOP_ANY, shopIdOf } from "@/lib/shop/queries";
 
 export const GET = route({ access: SHOP_ANY, params: z.object({ id: z.uuid() }) }, async ({ caller, params }) => {
   const shopId = shopIdOf(caller);

@@ -1,9 +1,9 @@
-import { type FitmentCandidates, stockItemDto } from "@/lib/catalog/api";
-import { route } from "@/lib/http/route";
-import { rankPicks } from "@/lib/quotes/fitment";
-import { catalogQueries } from "@/lib/server/catalog";
-import { SHOP_ANY, shopIdOf } from "@/lib/server/shops";
-import { resolveVehicle, vehicleSchema } from "@/lib/validation/quotes";
+import { type FitmentCandidates, stockItemDto } from "@/lib/shop/catalog/api";
+import { route } from "@/lib/platform/http/route";
+import { rankPicks } from "@/lib/shop/quotes/fitment";
+import { catalogQueries } from "@/lib/shop/catalog/queries";
+import { SHOP_ANY, shopIdOf } from "@/lib/shop/queries";
+import { resolveVehicle, vehicleSchema } from "@/lib/shop/quotes/schema";
 
 /** The catalog's tire × wheel pairs that mount on this vehicle (drilling and hub bore), ranked by the engine's comparison. */
 export const POST = route({ access: SHOP_ANY, body: vehicleSchema }, async ({ caller, body }): Promise<FitmentCandidates> => {

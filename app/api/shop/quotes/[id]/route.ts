@@ -1,9 +1,9 @@
 import { z } from "zod";
-import { route } from "@/lib/http/route";
-import { quoteDetailDto } from "@/lib/quotes/api";
-import { quoteQueries, quoteScopeOf } from "@/lib/server/quotes";
-import { SHOP_ANY } from "@/lib/server/shops";
-import { updateQuoteSchema } from "@/lib/validation/quotes";
+import { route } from "@/lib/platform/http/route";
+import { quoteDetailDto } from "@/lib/shop/quotes/api";
+import { quoteQueries, quoteScopeOf } from "@/lib/shop/quotes/queries";
+import { SHOP_ANY } from "@/lib/shop/queries";
+import { updateQuoteSchema } from "@/lib/shop/quotes/schema";
 
 const params = z.object({ id: z.uuid() });
 

@@ -1,7 +1,7 @@
 import { z } from "zod";
-import { HttpError, notFound } from "@/lib/http/errors";
-import { route } from "@/lib/http/route";
-import { SHOP_OWNER, shopIdOf, shopQueries } from "@/lib/server/shops";
+import { HttpError, notFound } from "@/lib/platform/http/errors";
+import { route } from "@/lib/platform/http/route";
+import { SHOP_OWNER, shopIdOf, shopQueries } from "@/lib/shop/queries";
 
 /** Removes a staff member from the caller's shop; the account stays as a member. */
 export const DELETE = route({ access: SHOP_OWNER, params: z.object({ id: z.uuid() }) }, async ({ caller, params }) => {

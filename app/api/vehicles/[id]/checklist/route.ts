@@ -1,10 +1,10 @@
 import { z } from "zod";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
 import { setupFromQuery } from "@/lib/garage/links";
-import { HttpError, notFound } from "@/lib/http/errors";
-import { route } from "@/lib/http/route";
-import { checklistQueries, type ResolvedChecklist } from "@/lib/server/checklists";
-import { checklistUpdateSchema, marginMmParam } from "@/lib/validation/garage";
+import { HttpError, notFound } from "@/lib/platform/http/errors";
+import { route } from "@/lib/platform/http/route";
+import { checklistQueries, type ResolvedChecklist } from "@/lib/garage/checklistQueries";
+import { checklistUpdateSchema, marginMmParam } from "@/lib/garage/schema";
 
 const params = z.object({ id: z.uuid() });
 

@@ -1,9 +1,9 @@
 import { z } from "zod";
-import { notFound } from "@/lib/http/errors";
-import { json, route } from "@/lib/http/route";
-import { garageQueries } from "@/lib/server/garage";
-import { clearanceSchema } from "@/lib/validation/garage";
-import type { SetupValues } from "@/lib/validation/setup";
+import { notFound } from "@/lib/platform/http/errors";
+import { json, route } from "@/lib/platform/http/route";
+import { garageQueries } from "@/lib/garage/queries";
+import { clearanceSchema } from "@/lib/garage/schema";
+import type { SetupValues } from "@/lib/setup/schema";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
 
 const params = z.object({ id: z.uuid() });

@@ -1,11 +1,11 @@
 import { z } from "zod";
-import { isDatabaseUnavailable } from "@/lib/db";
-import { readCappedBytes } from "@/lib/http/body";
-import { HttpError, notFound } from "@/lib/http/errors";
-import { json, route } from "@/lib/http/route";
-import { ImageRejected, MAX_PHOTO_BYTES, processImage, safeDisplayName } from "@/lib/photos/image";
-import { photoStore } from "@/lib/photos/s3";
-import { garageQueries } from "@/lib/server/garage";
+import { isDatabaseUnavailable } from "@/lib/platform/db";
+import { readCappedBytes } from "@/lib/platform/http/body";
+import { HttpError, notFound } from "@/lib/platform/http/errors";
+import { json, route } from "@/lib/platform/http/route";
+import { ImageRejected, MAX_PHOTO_BYTES, processImage, safeDisplayName } from "@/lib/garage/photos/image";
+import { photoStore } from "@/lib/garage/photos/s3";
+import { garageQueries } from "@/lib/garage/queries";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
 
 const params = z.object({ id: z.uuid() });

@@ -1,8 +1,8 @@
 import { z } from "zod";
-import { HttpError, notFound } from "@/lib/http/errors";
-import { route } from "@/lib/http/route";
-import { catalogQueries } from "@/lib/server/catalog";
-import { SHOP_OWNER, shopIdOf } from "@/lib/server/shops";
+import { HttpError, notFound } from "@/lib/platform/http/errors";
+import { route } from "@/lib/platform/http/route";
+import { catalogQueries } from "@/lib/shop/catalog/queries";
+import { SHOP_OWNER, shopIdOf } from "@/lib/shop/queries";
 
 /**
  * Step 2: confirm a previewed import. Upserts by SKU in one transaction and streams progress

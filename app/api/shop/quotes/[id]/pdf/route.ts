@@ -1,8 +1,8 @@
 import { z } from "zod";
-import { route } from "@/lib/http/route";
-import { quoteQueries, quoteScopeOf } from "@/lib/server/quotes";
-import { quoteSendQueries } from "@/lib/server/quoteSend";
-import { SHOP_ANY } from "@/lib/server/shops";
+import { route } from "@/lib/platform/http/route";
+import { quoteQueries, quoteScopeOf } from "@/lib/shop/quotes/queries";
+import { quoteSendQueries } from "@/lib/shop/quotes/send";
+import { SHOP_ANY } from "@/lib/shop/queries";
 
 export const GET = route({ access: SHOP_ANY, params: z.object({ id: z.uuid() }) }, async ({ caller, params }) => {
   const detail = await quoteQueries.getQuoteDetail(quoteScopeOf(caller), params.id);

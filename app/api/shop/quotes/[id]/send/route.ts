@@ -1,10 +1,10 @@
 import { z } from "zod";
-import { route } from "@/lib/http/route";
-import { quoteDetailDto } from "@/lib/quotes/api";
-import { quoteScopeOf } from "@/lib/server/quotes";
-import { quoteSendQueries } from "@/lib/server/quoteSend";
-import { SHOP_ANY } from "@/lib/server/shops";
-import { sendQuoteSchema } from "@/lib/validation/quotes";
+import { route } from "@/lib/platform/http/route";
+import { quoteDetailDto } from "@/lib/shop/quotes/api";
+import { quoteScopeOf } from "@/lib/shop/quotes/queries";
+import { quoteSendQueries } from "@/lib/shop/quotes/send";
+import { SHOP_ANY } from "@/lib/shop/queries";
+import { sendQuoteSchema } from "@/lib/shop/quotes/schema";
 
 /**
  * Sends (or sends again) the quote: a new public link, the PDF attached, e-mailed to the

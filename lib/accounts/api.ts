@@ -1,0 +1,33 @@
+/**
+ * What the admin's users API returns (camelCase, ISO dates) and the row → API mappers; shared
+ * by server and client. Password hashes and session versions never leave the server.
+ */
+import type { PublicUser, Role } from "@/lib/platform/db/types";
+
+export interface User {
+  id: string;
+  email: string;
+  name: string;
+  role: Role;
+  shopId: string | null;
+  createdAt: string;
+  updatedAt: string;
+}
+
+/** A user as the admin's list shows it: with the name of their shop. */
+export interface AdminUser extends User {
+  shopName: string | null;
+}
+
+/**
+ * @example
+ * userDto({ id: "u", email: "a@example.test", name: "A", role: "member", shop_id: null, created_at, updated_at });
+ * // { id: "u", …, shopId: null, createdAt: "…Z", updatedAt: "…Z" }
+ */
+export function userDto(u: PublicUser): User {
+  return { id: u.id, email: u.email, name: u.name, role: u.role, shopId: u.shop_id, createdAt: new Date(u.created_at).toISOString(), updatedAt: new Date(u.updated_at).toISOString() };
+}
+
+export function adminUserDto(u: PublicUser & { shop_name: string | null }): AdminUser {
+  return { ...userDto(u), shopName: u.shop_name };
+}

@@ -1,0 +1,54 @@
+import "server-only";
+import { createHash, randomBytes } from "node:crypto";
+import type { Knex } from "knex";
+import type { PasswordResetRow } from "@/lib/platform/db/types";
+import { findUserById, setPassword } from "./queries";
+import { bindAppDb } from "@/lib/platform/db/bind";
+
+export const RESET_TTL_MINUTES = 30;
+
+const sha256 = (s: string) => createHash("sha256").update(s).digest("hex");
+
+/** A new single-use token (256 bits, URL-safe). Earlier unused tokens of the user are voided. */
+export async function issueResetToken(db: Knex, userId: string): Promise<string> {
+  const token = randomBytes(32).toString("base64url");
+  await db.transaction(async (trx) => {
+    await trx("password_resets").where({ user_id: userId }).whereNull("used_at").update({ used_at: trx.fn.now() });
+    await trx("password_resets").insert({
+      user_id: userId,
+      token_hash: sha256(token),
+      expires_at: trx.raw("now() + make_interval(mins => ?)", [RESET_TTL_MINUTES]),
+    });
+  });
+  return token;
+}
+
+/**
+ * Marks the token used and returns its user id, or null when the token is unknown, used or
+ * expired. The update is the check, so two simultaneous uses cannot both succeed.
+ */
+export async function consumeResetToken(db: Knex, token: string, trx?: Knex.Transaction): Promise<string | null> {
+  const [row] = (await (trx ?? db)("password_resets")
+    .where({ token_hash: sha256(token) })
+    .whereNull("used_at")
+    .andWhere("expires_at", ">", db.fn.now())
+    .update({ used_at: db.fn.now() })
+    .returning(["user_id"])) as Pick<PasswordResetRow, "user_id">[];
+  return row?.user_id ?? null;
+}
+
+/**
+ * Uses a reset token and sets the new password hash in one transaction. Returns the account's
+ * e-mail address, or null when the token is unknown, used or expired (nothing is changed then).
+ */
+export async function resetPassword(db: Knex, token: string, passwordHash: string): Promise<string | null> {
+  return db.transaction(async (trx) => {
+    const userId = await consumeResetToken(db, token, trx);
+    if (!userId) return null;
+    await setPassword(trx, userId, passwordHash);
+    return (await findUserById(trx, userId))?.email ?? null;
+  });
+}
+
+/** These queries on the app's database handle, for pages and route handlers. */
+export const passwordResetQueries = bindAppDb({ issueResetToken, resetPassword });

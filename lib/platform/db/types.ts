@@ -1,0 +1,327 @@
+/** Row types, one place for every table. Column names are snake_case as stored. */
+
+export const ROLES = ["member", "shop_staff", "shop_owner", "admin"] as const;
+export type Role = (typeof ROLES)[number];
+
+export interface ShopRow {
+  id: string;
+  name: string;
+  created_at: Date;
+}
+
+export interface UserRow {
+  id: string;
+  email: string;
+  name: string;
+  password_hash: string;
+  role: Role;
+  shop_id: string | null;
+  /** Raised to end every session of the user at once (see lib/accounts/sessionQueries.ts). */
+  session_version: number;
+  created_at: Date;
+  updated_at: Date;
+}
+
+export type PublicUser = Omit<UserRow, "password_hash" | "session_version">;
+
+export interface PasswordResetRow {
+  id: string;
+  user_id: string;
+  token_hash: string;
+  expires_at: Date;
+  used_at: Date | null;
+  created_at: Date;
+}
+
+/* ---- shop counter (shops settings, staff invitations, catalog, customers, quotes, payments) ---- */
+
+export interface ShopSettingsRow extends ShopRow {
+  address: string;
+  phone: string;
+  tax_rate_bp: number;
+  labour_rate_cents: number;
+  fabrication_rate_cents: number;
+  quote_validity_days: number;
+  deposit_pct: number;
+  currency: "USD";
+  updated_at: Date;
+}
+
+export interface StaffInviteRow {
+  id: string;
+  shop_id: string;
+  email: string;
+  token_hash: string;
+  invited_by: string | null;
+  expires_at: Date;
+  used_at: Date | null;
+  revoked_at: Date | null;
+  created_at: Date;
+}
+
+export const CATALOG_KINDS = ["tire", "wheel", "service"] as const;
+export type CatalogKind = (typeof CATALOG_KINDS)[number];
+export const SERVICE_TYPES = ["mount_balance", "beadlock_assembly", "valve_stem", "tpms", "alignment", "fender_trim", "disposal", "other"] as const;
+export type ServiceType = (typeof SERVICE_TYPES)[number];
+export const SERVICE_UNITS = ["per_wheel", "per_vehicle", "per_hour"] as const;
+export type ServiceUnit = (typeof SERVICE_UNITS)[number];
+
+export interface CatalogItemRow {
+  id: string;
+  shop_id: string;
+  kind: CatalogKind;
+  sku: string;
+  description: string;
+  price_cents: number;
+  qty_on_hand: number | null;
+  tire_size: string | null;
+  tire_rim_in: number | null;
+  tire_diameter_mm: number | null;
+  wheel_diameter_in: number | null;
+  wheel_width_in: number | null;
+  wheel_offset_mm: number | null;
+  wheel_backspacing_in: number | null;
+  wheel_backspacing_ref: "bead-seat" | "flange" | null;
+  bolt_pattern: string | null;
+  center_bore_mm: number | null;
+  beadlock: boolean;
+  service_type: ServiceType | null;
+  service_unit: ServiceUnit | null;
+  created_at: Date;
+  updated_at: Date;
+}
+
+export interface CatalogImportRow {
+  id: string;
+  shop_id: string;
+  created_by: string | null;
+  filename: string;
+  rows: unknown;
+  row_count: number;
+  error_count: number;
+  status: "staged" | "committed";
+  created_at: Date;
+  committed_at: Date | null;
+}
+
+export const QUOTE_STATUSES = ["draft", "sent", "accepted", "deposit_paid", "installed", "declined", "expired"] as const;
+export type QuoteStatus = (typeof QUOTE_STATUSES)[number];
+
+export interface CustomerRow {
+  id: string;
+  shop_id: string;
+  name: string;
+  phone: string;
+  phone_digits: string;
+  email: string;
+  created_at: Date;
+  updated_at: Date;
+}
+
+/** A customer's vehicle as the shop counter keeps it (table customer_vehicles). */
+export interface CustomerVehicleRow {
+  id: string;
+  shop_id: string;
+  customer_id: string;
+  description: string;
+  bolt_pattern: string;
+  tire_size: string;
+  wheel_diameter_in: number;
+  wheel_width_in: number;
+  wheel_offset_mm: number;
+  axle_ratio: number | null;
+  /** The hub's pilot diameter, when the counter measured or looked it up. */
+  hub_bore_mm: number | null;
+  created_at: Date;
+}
+
+export interface QuoteRow {
+  id: string;
+  shop_id: string;
+  number: number;
+  customer_id: string;
+  vehicle_id: string | null;
+  created_by: string | null;
+  status: QuoteStatus;
+  vehicle_description: string;
+  bolt_pattern: string;
+  current_tire: string;
+  current_wheel_diameter_in: number;
+  current_wheel_width_in: number;
+  current_wheel_offset_mm: number;
+  axle_ratio: number | null;
+  hub_bore_mm: number | null;
+  tire_item_id: string | null;
+  wheel_item_id: string | null;
+  wheel_qty: 4 | 5;
+  /** A FitmentSummary (lib/shop/quotes/fitment.ts). */
+  fitment: unknown;
+  discount_cents: number;
+  tax_rate_bp: number;
+  deposit_pct: number;
+  subtotal_cents: number;
+  taxable_cents: number;
+  tax_cents: number;
+  total_cents: number;
+  deposit_cents: number;
+  notes: string;
+  public_token_hash: string | null;
+  valid_until: Date | null;
+  created_at: Date;
+  updated_at: Date;
+}
+
+export type QuoteLineKind = "tire" | "wheel" | "service" | "custom";
+/** "hour" lines may be fractional (hundredths of an hour); "each" lines are whole. */
+export type QuoteLineUnit = "each" | "hour";
+
+export interface QuoteLineRow {
+  id: string;
+  quote_id: string;
+  position: number;
+  kind: QuoteLineKind;
+  catalog_item_id: string | null;
+  sku: string;
+  description: string;
+  /** numeric(8,2) in PostgreSQL (read as text by pg): converted to a number where lines are read. */
+  quantity: number;
+  unit: QuoteLineUnit;
+  unit_price_cents: number;
+  discount_cents: number;
+  taxable: boolean;
+  line_total_cents: number;
+  /** Wheel lines: the wheel's bolt pattern and centre bore as quoted. */
+  wheel_bolt_pattern: string | null;
+  wheel_center_bore_mm: number | null;
+}
+
+/** A quote's document as sent (lib/shop/quotes/document.ts), one row per sending. Kept with the other tables' rows though read as JSON only. @public */
+export interface QuoteDocumentRow {
+  id: string;
+  quote_id: string;
+  sent_at: Date;
+  sent_by: string | null;
+  document: unknown;
+}
+
+export interface QuoteEventRow {
+  id: string;
+  quote_id: string;
+  from_status: QuoteStatus | null;
+  to_status: QuoteStatus;
+  actor_user_id: string | null;
+  actor: string;
+  note: string;
+  at: Date;
+}
+
+export interface PaymentRow {
+  id: string;
+  shop_id: string;
+  quote_id: string;
+  provider_session_id: string;
+  amount_cents: number;
+  currency: string;
+  status: "open" | "paid";
+  created_at: Date;
+  paid_at: Date | null;
+}
+
+// --- garage ---------------------------------------------------------------------------------
+// Setups are stored as the output of lib/setup/schema.ts (SetupValues).
+
+export const FRONT_SUSPENSIONS = ["independent", "solid-axle"] as const;
+export type FrontSuspension = (typeof FRONT_SUSPENSIONS)[number];
+
+export interface VehicleRow {
+  id: string;
+  user_id: string;
+  name: string;
+  year: number | null;
+  make: string | null;
+  model: string | null;
+  trim: string | null;
+  front_suspension: FrontSuspension;
+  bolt_pattern: string;
+  bolt_pcd_mm: number;
+  bolt_count: number;
+  hub_bore_mm: number | null;
+  stock_setup: unknown;
+  current_setup: unknown;
+  lift_height_mm: number | null;
+  kingpin_inclination_deg: number | null;
+  axle_ratio: number | null;
+  transmission_ratio: number | null;
+  /** Margin the measured points are classed against (default 1/2 in). */
+  clearance_margin_mm: number;
+  notes: string;
+  created_at: Date;
+  updated_at: Date;
+}
+
+export interface VehicleClearanceRow {
+  id: string;
+  vehicle_id: string;
+  label: string;
+  direction: "inboard" | "outboard" | "upward" | "fore-aft";
+  distance_mm: number;
+  distance_text: string;
+  suspension_state: "ride-height" | "full-stuff" | "full-lock";
+  measured_setup: unknown;
+  created_at: Date;
+}
+
+export interface VehiclePhotoRow {
+  id: string;
+  vehicle_id: string;
+  clearance_id: string | null;
+  object_key: string;
+  thumb_key: string;
+  content_type: "image/jpeg" | "image/png" | "image/webp";
+  width: number;
+  height: number;
+  bytes: number;
+  original_name: string;
+  created_at: Date;
+}
+
+export interface InstallChecklistRow {
+  id: string;
+  vehicle_id: string;
+  planned_key: string;
+  planned_setup: unknown;
+  comparison_id: string | null;
+  ticked: string[];
+  created_at: Date;
+  updated_at: Date;
+}
+
+/** A saved comparison: the validated input (JSONB) and the key figures computed from it on the server. */
+export interface ComparisonRow {
+  id: string;
+  owner_id: string;
+  /** The garage vehicle it belongs to (foreign key added by 20261202006000). */
+  vehicle_id: string | null;
+  name: string;
+  input: unknown;
+  current_tire: string;
+  planned_tire: string;
+  diameter_change_mm: number;
+  ground_clearance_change_mm: number;
+  poke_change_mm: number;
+  scrub_change_mm: number;
+  speedometer_error_pct: number;
+  suggested_ratio: number;
+  warning_count: number;
+  created_at: Date;
+  updated_at: Date;
+}
+
+/** A public link to a comparison; revoked links keep their row so the slug stays dead. */
+export interface ComparisonShareRow {
+  id: string;
+  comparison_id: string;
+  slug: string;
+  created_at: Date;
+  revoked_at: Date | null;
+}

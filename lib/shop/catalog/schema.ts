@@ -1,0 +1,24 @@
+import { z } from "zod";
+import { CATALOG_KINDS } from "@/lib/platform/db/types";
+
+export const CATALOG_SORT_KEYS = ["sku", "description", "price_cents", "qty_on_hand", "kind", "tire_diameter_mm", "updated_at"] as const;
+
+/** The catalog table's server-side paging, sorting and filtering; messages for the table's controls. */
+export const catalogQuerySchema = z.object({
+  kind: z.union([z.enum(CATALOG_KINDS), z.literal("").transform(() => undefined)], "Pick tires, wheels or services.").optional(),
+  q: z.string().trim().max(100, "Use at most 100 characters.").optional(),
+  sort: z.enum(CATALOG_SORT_KEYS, "Sort by one of the table's columns.").optional(),
+  dir: z.enum(["asc", "desc"], "Sort ascending or descending.").optional(),
+  page: z.coerce.number("Use a page number.").int("Use a whole page number.").min(1, "Pages start at 1.").max(100000, "Use a page number up to 100,000.").optional(),
+  pageSize: z.coerce.number("Use 1 to 200 rows per page.").int("Use 1 to 200 rows per page.").min(1, "Use 1 to 200 rows per page.").max(200, "Use 1 to 200 rows per page.").optional(),
+});
+
+/** What the catalog table calls each control, so a refused query names it (CatalogTable.tsx). */
+export const CATALOG_QUERY_LABELS = {
+  q: "Search SKU, description, size or bolt pattern",
+  kind: "Kind",
+  sort: "Sort",
+  dir: "Sort",
+  page: "Page",
+  pageSize: "Rows per page",
+} as const;

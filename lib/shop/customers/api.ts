@@ -1,0 +1,54 @@
+/**
+ * What the customers API returns (camelCase, ISO dates) and the row → API mappers; shared by
+ * server and client. The shop id and the phone digits kept for searching stay on the server.
+ */
+import type { CustomerRow, CustomerVehicleRow } from "@/lib/platform/db/types";
+
+export interface Customer {
+  id: string;
+  name: string;
+  phone: string;
+  email: string;
+  createdAt: string;
+  updatedAt: string;
+}
+
+/** A customer's vehicle as the shop counter saved it. */
+export interface CustomerVehicle {
+  id: string;
+  customerId: string;
+  description: string;
+  boltPattern: string;
+  tireSize: string;
+  wheelDiameterIn: number;
+  wheelWidthIn: number;
+  wheelOffsetMm: number;
+  axleRatio: number | null;
+  hubBoreMm: number | null;
+  createdAt: string;
+}
+
+/**
+ * @example
+ * customerDto({ id: "c", shop_id: "s", name: "Ann", phone: "555 0100", phone_digits: "5550100", email: "", … });
+ * // { id: "c", name: "Ann", phone: "555 0100", email: "", createdAt: "…Z", updatedAt: "…Z" }
+ */
+export function customerDto(r: CustomerRow): Customer {
+  return { id: r.id, name: r.name, phone: r.phone, email: r.email, createdAt: new Date(r.created_at).toISOString(), updatedAt: new Date(r.updated_at).toISOString() };
+}
+
+export function customerVehicleDto(r: CustomerVehicleRow): CustomerVehicle {
+  return {
+    id: r.id,
+    customerId: r.customer_id,
+    description: r.description,
+    boltPattern: r.bolt_pattern,
+    tireSize: r.tire_size,
+    wheelDiameterIn: r.wheel_diameter_in,
+    wheelWidthIn: r.wheel_width_in,
+    wheelOffsetMm: r.wheel_offset_mm,
+    axleRatio: r.axle_ratio,
+    hubBoreMm: r.hub_bore_mm,
+    createdAt: new Date(r.created_at).toISOString(),
+  };
+}

@@ -1,0 +1,65 @@
+import "server-only";
+import type { Knex } from "knex";
+import type { CustomerRow, CustomerVehicleRow } from "@/lib/platform/db/types";
+import { type Customer, type CustomerVehicle, customerDto, customerVehicleDto } from "@/lib/shop/customers/api";
+import { containsPattern, searchKey } from "@/lib/platform/search/normalize";
+import type { CustomerInput } from "@/lib/shop/quotes/schema";
+import { bindAppDb } from "@/lib/platform/db/bind";
+
+export const phoneDigits = (phone: string) => phone.replace(/\D/g, "");
+
+/**
+ * The shop's customers matching a phone number (by digits), a name or the part of an e-mail
+ * address before the @ (through the stored search key: accents and Ł, Ø, ß … folded, so
+ * "lukasz" finds Łukasz), or a whole e-mail address when the search has an @. A domain alone
+ * finds nobody: every customer may share it.
+ */
+export async function searchCustomers(db: Knex, shopId: string, q: string): Promise<Customer[]> {
+  const text = q.trim();
+  const digits = phoneDigits(text);
+  const key = searchKey(text);
+  // Nothing left to look for (only accents, say): an empty condition would list everyone.
+  if (!key && digits.length < 4 && !text.includes("@")) return [];
+  const rows = await db<CustomerRow>("customers")
+    .where({ shop_id: shopId })
+    .andWhere((w) => {
+      if (digits.length >= 4) w.orWhereLike("phone_digits", containsPattern(digits));
+      if (key) w.orWhereLike("search_key", containsPattern(key));
+      if (text.includes("@")) w.orWhereRaw("lower(email) like ?", [containsPattern(text.toLowerCase())]);
+    })
+    .orderBy("name")
+    .limit(20);
+  return rows.map(customerDto);
+}
+
+/** An existing customer of this shop with the same phone digits or e-mail. */
+export async function findDuplicateCustomer(db: Knex, shopId: string, c: CustomerInput): Promise<Customer | undefined> {
+  const digits = phoneDigits(c.phone);
+  const row = await db<CustomerRow>("customers")
+    .where({ shop_id: shopId })
+    .andWhere((w) => {
+      if (digits.length >= 7) w.orWhere("phone_digits", digits);
+      if (c.email) w.orWhereRaw("lower(email) = lower(?)", [c.email]);
+    })
+    .first();
+  return row && customerDto(row);
+}
+
+export async function createCustomer(db: Knex, shopId: string, c: CustomerInput): Promise<Customer> {
+  const [row] = await db<CustomerRow>("customers")
+    .insert({ shop_id: shopId, name: c.name, phone: c.phone, phone_digits: phoneDigits(c.phone), email: c.email })
+    .returning("*");
+  return customerDto(row!);
+}
+
+export async function getCustomer(db: Knex, shopId: string, id: string): Promise<Customer | undefined> {
+  const row = await db<CustomerRow>("customers").where({ id, shop_id: shopId }).first();
+  return row && customerDto(row);
+}
+
+export async function listVehicles(db: Knex, shopId: string, customerId: string): Promise<CustomerVehicle[]> {
+  return (await db<CustomerVehicleRow>("customer_vehicles").where({ shop_id: shopId, customer_id: customerId }).orderBy("created_at", "desc")).map(customerVehicleDto);
+}
+
+/** These queries on the app's database handle, for pages and route handlers. */
+export const customerQueries = bindAppDb({ createCustomer, findDuplicateCustomer, getCustomer, listVehicles, searchCustomers });

@@ -1,0 +1,66 @@
+import "server-only";
+import type { Knex } from "knex";
+import type { PaymentEvent } from "@/lib/shop/payments/schema";
+import type { PaymentRow, QuoteRow } from "@/lib/platform/db/types";
+import { HttpError } from "@/lib/platform/http/errors";
+import { transition } from "../quotes/queries";
+import { bindAppDb } from "@/lib/platform/db/bind";
+
+export type WebhookOutcome = "deposit_paid" | "duplicate" | "already_paid" | "paid_but_quote_not_accepted" | "ignored";
+
+/**
+ * Applies one verified provider event. Idempotent: the event id is stored in the same
+ * transaction as its effect, so a replayed or duplicated event changes nothing. A session the
+ * app never created, or an amount, currency or quote that does not match, is refused with a
+ * 4xx and nothing is written.
+ */
+export async function applyPaymentEvent(db: Knex, event: PaymentEvent): Promise<WebhookOutcome> {
+  if (event.type !== "checkout.session.completed") {
+    await db("payment_webhook_events").insert({ event_id: event.id, type: event.type, outcome: "ignored" }).onConflict("event_id").ignore();
+    return "ignored";
+  }
+  // The schema checked this type's session shape (lib/shop/payments/schema.ts).
+  const session = (event as Extract<PaymentEvent, { type: "checkout.session.completed" }>).data.object;
+  return db.transaction(async (trx) => {
+    const first = await trx("payment_webhook_events").insert({ event_id: event.id, type: event.type, outcome: "pending" }).onConflict("event_id").ignore().returning("event_id");
+    if (first.length === 0) return "duplicate";
+    const payment = await trx<PaymentRow>("payments").where({ provider_session_id: session.id }).forUpdate().first();
+    if (!payment) throw new HttpError(400, "Unknown checkout session.");
+    const quote = await trx<QuoteRow>("quotes").where({ id: payment.quote_id, shop_id: payment.shop_id }).forUpdate().first();
+    if (!quote) throw new HttpError(400, "Unknown quote.");
+    if (session.metadata?.quote_id !== quote.id || session.client_reference_id !== quote.id) throw new HttpError(422, "The event names another quote than its session.");
+    if ((session.currency ?? "").toLowerCase() !== "usd") throw new HttpError(422, "Deposits are taken in USD.");
+    if (session.amount_total !== payment.amount_cents || payment.amount_cents !== quote.deposit_cents) {
+      throw new HttpError(422, `The paid amount ${session.amount_total} does not match the quote's deposit ${quote.deposit_cents}.`);
+    }
+    if (session.payment_status !== "paid") throw new HttpError(422, "The session is not paid.");
+    let outcome: WebhookOutcome;
+    if (payment.status === "paid") outcome = "already_paid";
+    else {
+      await trx("payments").where({ id: payment.id }).update({ status: "paid", paid_at: trx.fn.now() });
+      if (quote.status === "accepted") {
+        await transition(trx, quote, "deposit_paid", { userId: null, label: "payment provider" }, `checkout ${session.id}`);
+        outcome = "deposit_paid";
+      } else outcome = "paid_but_quote_not_accepted";
+    }
+    await trx("payment_webhook_events").where({ event_id: event.id }).update({ outcome, quote_id: quote.id });
+    return outcome;
+  });
+}
+
+/** Who a deposit is between: the shop's current name and the customer's address ("" when none is on file). */
+export async function depositParties(db: Knex, quote: Pick<QuoteRow, "shop_id" | "customer_id">): Promise<{ shopName: string; customerEmail: string }> {
+  const [shop, customer] = await Promise.all([
+    db("shops").where({ id: quote.shop_id }).first("name"),
+    db("customers").where({ id: quote.customer_id, shop_id: quote.shop_id }).first("email"),
+  ]);
+  return { shopName: shop?.name ?? "", customerEmail: customer?.email ?? "" };
+}
+
+/** Records the provider's checkout session, so its webhook can be matched to the quote. */
+export async function recordDepositSession(db: Knex, quote: Pick<QuoteRow, "id" | "shop_id" | "deposit_cents">, sessionId: string): Promise<void> {
+  await db("payments").insert({ shop_id: quote.shop_id, quote_id: quote.id, provider_session_id: sessionId, amount_cents: quote.deposit_cents, currency: "usd" });
+}
+
+/** These queries on the app's database handle, for pages and route handlers. */
+export const paymentQueries = bindAppDb({ applyPaymentEvent, depositParties, recordDepositSession });

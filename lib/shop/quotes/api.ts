@@ -1,0 +1,198 @@
+/**
+ * What the shop's quote API returns (camelCase, ISO dates) and the row → API mappers; shared by
+ * server and client. The shop id and the customer link's token hash stay on the server.
+ */
+import type { QuoteEventRow, QuoteLineKind, QuoteLineRow, QuoteLineUnit, QuoteRow, QuoteStatus } from "@/lib/platform/db/types";
+import type { HubCheck } from "./document";
+import type { FitmentSummary } from "./fitment";
+
+export interface Quote {
+  id: string;
+  number: number;
+  customerId: string;
+  vehicleId: string | null;
+  createdBy: string | null;
+  status: QuoteStatus;
+  vehicleDescription: string;
+  boltPattern: string;
+  currentTire: string;
+  currentWheelDiameterIn: number;
+  currentWheelWidthIn: number;
+  currentWheelOffsetMm: number;
+  axleRatio: number | null;
+  hubBoreMm: number | null;
+  tireItemId: string | null;
+  wheelItemId: string | null;
+  wheelQty: 4 | 5;
+  fitment: FitmentSummary;
+  discountCents: number;
+  taxRateBp: number;
+  depositPct: number;
+  subtotalCents: number;
+  taxableCents: number;
+  taxCents: number;
+  totalCents: number;
+  depositCents: number;
+  notes: string;
+  validUntil: string | null;
+  createdAt: string;
+  updatedAt: string;
+}
+
+export interface QuoteLine {
+  id: string;
+  position: number;
+  kind: QuoteLineKind;
+  catalogItemId: string | null;
+  sku: string;
+  description: string;
+  quantity: number;
+  unit: QuoteLineUnit;
+  unitPriceCents: number;
+  discountCents: number;
+  taxable: boolean;
+  lineTotalCents: number;
+  wheelBoltPattern: string | null;
+  wheelCenterBoreMm: number | null;
+}
+
+export interface QuoteEvent {
+  id: string;
+  fromStatus: QuoteStatus | null;
+  toStatus: QuoteStatus;
+  actorUserId: string | null;
+  actor: string;
+  note: string;
+  at: string;
+}
+
+/** The quote detail the editor receives from its page and from every mutation. */
+export interface QuoteDetail {
+  quote: Quote;
+  lines: QuoteLine[];
+  events: QuoteEvent[];
+  customer: { id: string; name: string; phone: string; email: string };
+  createdByName: string | null;
+  /** Each wheel line checked against the quoted vehicle's bolt pattern and hub bore. */
+  hubChecks: HubCheck[];
+}
+
+/** One row of the quotes list. */
+export interface QuoteListItem {
+  id: string;
+  number: number;
+  status: QuoteStatus;
+  totalCents: number;
+  depositCents: number;
+  vehicleDescription: string;
+  customerName: string;
+  createdByName: string | null;
+  validUntil: string | null;
+  createdAt: string;
+}
+
+const iso = (d: Date | string) => new Date(d).toISOString();
+const isoOrNull = (d: Date | string | null) => (d === null ? null : iso(d));
+
+/**
+ * @example
+ * quoteDto(row).totalCents === row.total_cents; // and no shop_id, no public_token_hash
+ */
+export function quoteDto(r: Omit<QuoteRow, "public_token_hash">): Quote {
+  return {
+    id: r.id,
+    number: r.number,
+    customerId: r.customer_id,
+    vehicleId: r.vehicle_id,
+    createdBy: r.created_by,
+    status: r.status,
+    vehicleDescription: r.vehicle_description,
+    boltPattern: r.bolt_pattern,
+    currentTire: r.current_tire,
+    currentWheelDiameterIn: r.current_wheel_diameter_in,
+    currentWheelWidthIn: r.current_wheel_width_in,
+    currentWheelOffsetMm: r.current_wheel_offset_mm,
+    axleRatio: r.axle_ratio,
+    hubBoreMm: r.hub_bore_mm,
+    tireItemId: r.tire_item_id,
+    wheelItemId: r.wheel_item_id,
+    wheelQty: r.wheel_qty,
+    fitment: r.fitment as FitmentSummary,
+    discountCents: r.discount_cents,
+    taxRateBp: r.tax_rate_bp,
+    depositPct: r.deposit_pct,
+    subtotalCents: r.subtotal_cents,
+    taxableCents: r.taxable_cents,
+    taxCents: r.tax_cents,
+    totalCents: r.total_cents,
+    depositCents: r.deposit_cents,
+    notes: r.notes,
+    validUntil: isoOrNull(r.valid_until),
+    createdAt: iso(r.created_at),
+    updatedAt: iso(r.updated_at),
+  };
+}
+
+export function quoteLineDto(l: QuoteLineRow): QuoteLine {
+  return {
+    id: l.id,
+    position: l.position,
+    kind: l.kind,
+    catalogItemId: l.catalog_item_id,
+    sku: l.sku,
+    description: l.description,
+    quantity: Number(l.quantity),
+    unit: l.unit,
+    unitPriceCents: l.unit_price_cents,
+    discountCents: l.discount_cents,
+    taxable: l.taxable,
+    lineTotalCents: l.line_total_cents,
+    wheelBoltPattern: l.wheel_bolt_pattern,
+    wheelCenterBoreMm: l.wheel_center_bore_mm,
+  };
+}
+
+export function quoteEventDto(e: QuoteEventRow): QuoteEvent {
+  return { id: String(e.id), fromStatus: e.from_status, toStatus: e.to_status, actorUserId: e.actor_user_id, actor: e.actor, note: e.note, at: iso(e.at) };
+}
+
+/** A quote's detail as read on the server (rows) → what the browser receives. */
+export function quoteDetailDto(d: { quote: Omit<QuoteRow, "public_token_hash">; lines: QuoteLineRow[]; events: QuoteEventRow[]; customer: QuoteDetail["customer"]; createdByName: string | null; hubChecks: HubCheck[] }): QuoteDetail {
+  return {
+    quote: quoteDto(d.quote),
+    lines: d.lines.map(quoteLineDto),
+    events: d.events.map(quoteEventDto),
+    customer: { id: d.customer.id, name: d.customer.name, phone: d.customer.phone, email: d.customer.email },
+    createdByName: d.createdByName,
+    hubChecks: d.hubChecks,
+  };
+}
+
+/** A row of listQuotes (quotes joined with the customer's and the author's names). */
+export interface QuoteListRow {
+  id: string;
+  number: number;
+  status: QuoteStatus;
+  total_cents: number;
+  deposit_cents: number;
+  vehicle_description: string;
+  created_at: Date;
+  valid_until: Date | null;
+  customer_name: string;
+  created_by_name: string | null;
+}
+
+export function quoteListItemDto(r: QuoteListRow): QuoteListItem {
+  return {
+    id: r.id,
+    number: r.number,
+    status: r.status,
+    totalCents: r.total_cents,
+    depositCents: r.deposit_cents,
+    vehicleDescription: r.vehicle_description,
+    customerName: r.customer_name,
+    createdByName: r.created_by_name,
+    validUntil: isoOrNull(r.valid_until),
+    createdAt: iso(r.created_at),
+  };
+}
