@@ -1,8 +1,20 @@
 "use client";
 import { useRouter } from "next/navigation";
-import { startTransition, useEffect, useState } from "react";
+import { startTransition, useEffect, useState, useSyncExternalStore } from "react";
 import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
+import { ERROR_REF_COOKIE, readErrorRef } from "@/lib/platform/log/errorRef";
+
+const seen = new WeakMap<Error, string | undefined>();
+const noSubscription = () => () => {};
+function requestIdFor(error: Error): string | undefined {
+  if (!seen.has(error)) {
+    const id = readErrorRef(document.cookie);
+    seen.set(error, id);
+    if (id) document.cookie = `${ERROR_REF_COOKIE}=; Path=/; Max-Age=0; SameSite=Lax`;
+  }
+  return seen.get(error);
+}
 
 /**
  * The friendly error shown by every area's error.tsx. While the cause is the database being
@@ -11,6 +23,10 @@ import { Card } from "@/components/ui/Card";
 export function RecoveringError({ error, reset, area }: { error: Error & { digest?: string }; reset: () => void; area: string }) {
   const router = useRouter();
   const [down, setDown] = useState<boolean | null>(null);
+  // A 5xx answer leaves its request id in a cookie (lib/platform/log/errorRef.ts): shown so the
+  // admin can find the log lines. Read once per error and cleared, so a later error does not show
+  // a stale id; the server render shows none (no cookie there), so hydration agrees.
+  const requestId = useSyncExternalStore(noSubscription, () => requestIdFor(error), () => undefined);
 
   useEffect(() => {
     let stopped = false;
@@ -40,7 +56,13 @@ export function RecoveringError({ error, reset, area }: { error: Error & { diges
           ? "Your work is not lost. This page will come back by itself as soon as the database answers again."
           : "Something went wrong while loading it. Try again; if it keeps happening, tell the site's admin."}
       </p>
-      {error.digest && <p className="mt-2 text-xs text-basalt-500">Reference {error.digest}</p>}
+      {(requestId || error.digest) && (
+        <p className="mt-2 text-xs text-basalt-500">
+          {requestId && <>Request id {requestId}</>}
+          {requestId && error.digest && " · "}
+          {error.digest && <>Reference {error.digest}</>}
+        </p>
+      )}
       <div className="mt-5 flex justify-center gap-3">
         <Button onClick={() => startTransition(() => { router.refresh(); reset(); })}>Try again</Button>
       </div>

@@ -83,8 +83,11 @@ describe("request logs", () => {
     expect(res.status).toBe(500);
     expect(res.headers.get("x-request-id")).toBe("lb-1234abcd");
     expect((await after("lb-1234abcd")).find((l) => l.msg === "request")).toMatchObject({ status: 500, level: 50, route: "/boom" });
+    // The error page (a client component) reads the id from this cookie; a 2xx answer sets none.
+    expect(res.headers.get("set-cookie")).toBe("hubface-error-ref=lb-1234abcd; Path=/; Max-Age=300; SameSite=Lax");
     const odd = await fetch(`${base}/`, { headers: { "x-request-id": "x".repeat(200) } });
     expect(odd.headers.get("x-request-id")).toMatch(/^[0-9a-f]{16}$/);
+    expect(odd.headers.get("set-cookie")).toBeNull();
   });
 
   it("a route handler's 500 body carries the request id as its reference, and the error line has it too", async () => {

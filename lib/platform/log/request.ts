@@ -3,7 +3,22 @@
  * Next's handler in it). Plain Node, no Next imports.
  */
 import type { IncomingMessage, ServerResponse } from "node:http";
+import { ERROR_REF_COOKIE } from "./errorRef";
 import { type RequestContext, log, redactUrl, requestContext, requestIdFrom } from "./index";
+
+/** Adds the request id cookie to an answer whose status is 5xx, whatever sets the status (writeHead, or the implicit head of the first write). */
+function stampErrorRef(res: ServerResponse, reqId: string) {
+  const writeHead = res.writeHead.bind(res) as (...args: unknown[]) => ServerResponse;
+  res.writeHead = ((...args: unknown[]) => {
+    const status = typeof args[0] === "number" ? args[0] : res.statusCode;
+    if (status >= 500 && !res.headersSent) {
+      const existing = res.getHeader("set-cookie");
+      const list = existing === undefined ? [] : Array.isArray(existing) ? existing : [String(existing)];
+      res.setHeader("set-cookie", [...list, `${ERROR_REF_COOKIE}=${reqId}; Path=/; Max-Age=300; SameSite=Lax`]);
+    }
+    return writeHead(...args);
+  }) as ServerResponse["writeHead"];
+}
 
 export interface RequestLogOptions {
   /** Finds the signed-in user when the handler did not note one (e.g. from the session cookie). Called after the answer left. */
@@ -23,6 +38,7 @@ export function withRequestLog(handler: (req: IncomingMessage, res: ServerRespon
     // Next and the route handlers read it from the request too (onRequestError gets headers, not our context).
     req.headers["x-request-id"] = ctx.reqId;
     res.setHeader("x-request-id", ctx.reqId);
+    stampErrorRef(res, ctx.reqId);
     res.once("close", () => {
       const durationMs = Math.round(Number(process.hrtime.bigint() - started) / 1e4) / 100;
       const route = redactUrl(req.url ?? "/").split("?")[0] ?? "/";
