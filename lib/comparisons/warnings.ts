@@ -9,7 +9,7 @@ import { type SpeedSystem, type SpeedUnit, readingPhrase, trueSpeedPhrase } from
 
 /** The kinds the workspace lists (outer reach, diameter, alignment, points and load it shows as figures). */
 const LISTED = ["rim-width", "poke", "scrub", "speedometer", "regear", "inner-reach", "spacer"] as const satisfies readonly FindingKind[];
-export type WarningKind = (typeof LISTED)[number];
+type WarningKind = (typeof LISTED)[number];
 
 /** A finding in the workspace's words, with its reason and where its threshold comes from. */
 export interface ComparisonWarning {
@@ -30,7 +30,7 @@ export interface ComparisonWarning {
 export const LENGTH_TOKEN = "{len}";
 
 /** What the words quote beyond the findings: the headline speeds and whether a kingpin inclination was entered. */
-export interface WarningSource {
+interface WarningSource {
   speedometer: { bySystem: Record<SpeedSystem, { unit: SpeedUnit; headline: { indicated: number; actual: number } }> };
   kingpinInclinationDeg: number | null;
 }

@@ -44,7 +44,7 @@ import {
 import type { Finding, FindingOf } from "./vocabulary";
 
 /** A measured point of the vehicle and the engine's prediction of it with the planned setup. */
-export interface PointPrediction {
+interface PointPrediction {
   id: string;
   label: string;
   prediction: ClearancePrediction;

@@ -33,7 +33,7 @@ export type FindingTone = "steel" | "tight";
 export const LEVEL_TONE: Readonly<Record<FindingLevel, FindingTone>> = Object.freeze({ note: "steel", caution: "tight" });
 
 /** The numbers behind each kind of finding (mm, in, %, ratios as the engine gives them). */
-export interface FindingFigures {
+interface FindingFigures {
   /** The wheel against the rim widths suited to the tire (the engine's measuring rim ± band). */
   "rim-width": { widthIn: number; minIn: number; maxIn: number; measuringRimIn: number; tire: string };
   /** The tire's outer reach past the fender line the user measured from the hub face. */

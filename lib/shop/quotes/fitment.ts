@@ -59,7 +59,7 @@ export interface FitmentSummary {
 }
 
 /** A summary just computed: its findings are there. */
-export type FitmentReading = FitmentSummary & { findings: Finding[] };
+type FitmentReading = FitmentSummary & { findings: Finding[] };
 
 const r1 = (x: number) => Math.round(x * 10) / 10;
 const inches = (mm: number) => `${r1(mmToIn(Math.abs(mm)))} in`;
