@@ -1,5 +1,6 @@
 import type { ReactNode } from "react";
 import { cx } from "@/components/ui/cx";
+import { type FindingTone, LEVEL_LABEL, LEVEL_TONE } from "@/lib/comparisons/assess/vocabulary";
 import type { ComparisonResult, SetupFigures } from "@/lib/comparisons/compute";
 import { speedometerSentence } from "@/lib/comparisons/speedometer";
 import {
@@ -125,6 +126,12 @@ function CrawlStats({ result: r }: { result: ComparisonResult }) {
   );
 }
 
+/** How a listed finding looks in each level's colour family (LEVEL_TONE). */
+const WARNING_TONE_CLASS: Record<FindingTone, string> = {
+  tight: "bg-tight-100 text-tight-800 ring-tight-600/30",
+  steel: "bg-steel-50 text-steel-800 ring-steel-200",
+};
+
 /** The warnings the numbers call for, each with its reason and the basis of its threshold. */
 export function WarningList({ result, prefs, className }: { result: ComparisonResult; prefs: DisplayPrefs; className?: string }) {
   return (
@@ -140,10 +147,10 @@ export function WarningList({ result, prefs, className }: { result: ComparisonRe
             <li
               key={`${w.kind}-${w.setup ?? "both"}`}
               data-kind={w.kind}
-              className={cx("rounded-lg px-3 py-2 text-sm ring-1 ring-inset", w.level === "caution" ? "bg-tight-100 text-tight-800 ring-tight-600/30" : "bg-steel-50 text-steel-800 ring-steel-200")}
+              className={cx("rounded-lg px-3 py-2 text-sm ring-1 ring-inset", WARNING_TONE_CLASS[LEVEL_TONE[w.level]])}
             >
               <p className="font-semibold">
-                <span className="sr-only">{w.level === "caution" ? "Caution: " : "Note: "}</span>
+                <span className="sr-only">{LEVEL_LABEL[w.level]}: </span>
                 {warningTitle(w, prefs)}
               </p>
               <p className="mt-0.5">{w.why}</p>

@@ -126,7 +126,7 @@ export async function seed(knex: Knex): Promise<void> {
       ...(wheel.beadlock ? [await svc("SV-BLA", 4)] : []),
       await svc("SV-VS", 4),
       ...(fit.alignmentSuggested ? [await svc("SV-ALN", 1)] : []),
-      ...(fit.warnings.some((w) => /further outboard/.test(w)) ? [await svc("SV-TRIM", 1)] : []),
+      ...(fit.findings.some((f) => f.kind === "outer-reach") ? [await svc("SV-TRIM", 1)] : []),
       await svc("SV-DISP", 4),
     ];
     const t = computeTotals({

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { computeComparison, REGEAR_WARN_PCT, SCRUB_WARN_MM, SPEEDO_WARN_PCT } from "./compute";
+import { REGEAR_WARN_PCT, SCRUB_WARN_MM, SPEEDO_WARN_PCT } from "./assess/thresholds";
+import { computeComparison } from "./compute";
 import { type ComparisonInput, DEFAULT_INPUT } from "./schema";
 
 const r = computeComparison(DEFAULT_INPUT);

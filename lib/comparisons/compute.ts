@@ -1,17 +1,10 @@
 /**
  * One function from a valid comparison input to everything the comparison screens show: per
  * setup figures, the headline changes, the speedometer and engine-speed tables, and warnings.
- * Every number comes from the engine (lib/fitment); this module only picks, pairs and judges.
+ * Every number comes from the engine (lib/fitment); this module only picks and pairs. Judging
+ * the change is assessChange's (assess/assessChange.ts, thresholds in assess/thresholds.ts); the
+ * workspace's words for its findings are in warnings.ts.
  * Speed rows come once per unit system at round speeds of that unit (see speedometer.ts).
- *
- * Warning thresholds (each a documented choice, see the constants below):
- * - rim width: outside the engine's range suited to the section width (measuring rim ± 1 in,
- *   common practice, no source);
- * - poke: the tire's outer reach past the fender line the user measured (their figure);
- * - scrub: an increase of more than 25 mm (1 in) (common practice, no source);
- * - speedometer: actual speed more than 3 % off the indicated one (common practice, no source);
- * - regear: the ratio that restores the engine speed differs from the axle ratio by 5 % or more
- *   and a different common ratio is nearer (common practice, no source).
  */
 import {
   KM_PER_MILE,
@@ -39,18 +32,12 @@ import {
   REFERENCE_SPEEDS,
   SPEED_UNIT,
   enteredSpeed,
-  readingPhrase,
   speedometerPercents,
   toMph,
-  trueSpeedPhrase,
 } from "./speedometer";
+import { assessChange } from "./assess/assessChange";
+import { type ComparisonWarning, workspaceWarnings } from "./warnings";
 
-/** Actual speed off the indicated one by more than this earns a warning, percent (common practice, no source). */
-export const SPEEDO_WARN_PCT = 3;
-/** Scrub radius increase that earns a warning, mm (1 in; common practice, no source). */
-export const SCRUB_WARN_MM = 25.4;
-/** Difference between the restoring ratio and the axle ratio that advises a regear, percent (common practice, no source). */
-export const REGEAR_WARN_PCT = 5;
 /** Indicated and actual speed, both in the unit of the system they belong to. */
 export interface SpeedRow {
   indicated: number;
@@ -128,24 +115,6 @@ export interface SetupFigures {
   loadRange: { letter: string; plyRating: number; maxPressurePsi: number | null; maxPressureKpa: number | null; source: string } | null;
 }
 
-export type WarningKind = "rim-width" | "poke" | "scrub" | "speedometer" | "regear" | "inner-reach" | "spacer";
-
-/** A warning the numbers call for, with its reason and where its threshold comes from. */
-export interface ComparisonWarning {
-  kind: WarningKind;
-  /** "caution" for things to act on, "note" for things to check. */
-  level: "caution" | "note";
-  /** Which setup it concerns, when only one. */
-  setup: "current" | "planned" | null;
-  /** Short statement; `{len}` stands for `lengthMm` in the reader's units (see format.ts `warningTitle`). */
-  title: string;
-  /** The statement per unit system, where it quotes speeds (format.ts `warningTitle` picks one); else null. */
-  titleBySystem: Record<SpeedSystem, string> | null;
-  lengthMm: number | null;
-  why: string;
-  basis: string;
-}
-
 /** Everything the comparison screens show. */
 export interface ComparisonResult {
   input: ComparisonInput;
@@ -190,9 +159,6 @@ export interface ComparisonResult {
   /** The engine's raw comparison, for pictures that need more (geometry of both setups). */
   engine: SetupComparison;
 }
-
-/** The length placeholder of warning titles; `warningTitle` in format.ts fills it in the user's units. */
-export const LENGTH_TOKEN = "{len}";
 
 function figures(s: SetupInputValues, g: SetupGeometry): SetupFigures {
   const t = g.tire;
@@ -280,126 +246,6 @@ function geometryOf(s: SetupInputValues): SetupGeometry {
   });
 }
 
-function warningsOf(r: Omit<ComparisonResult, "warnings">): ComparisonWarning[] {
-  const out: ComparisonWarning[] = [];
-  for (const side of ["current", "planned"] as const) {
-    const f = r[side];
-    if (!f.rimWidthSuitable) {
-      const narrow = f.wheelWidthIn < f.rimWidthMinIn;
-      out.push({
-        kind: "rim-width",
-        level: side === "planned" ? "caution" : "note",
-        setup: side,
-        title: `${side === "planned" ? "Planned" : "Current"} wheel width ${f.wheelWidthIn} in is outside the usual ${f.rimWidthMinIn}–${f.rimWidthMaxIn} in for ${f.tireText}`,
-        lengthMm: null,
-        titleBySystem: null,
-        why: narrow
-          ? "On a rim that narrow the tread crowns and the sidewall rolls under load and in corners; the bead is pinched at an angle it was not made for. Check the tire maker's approved rim widths."
-          : "On a rim that wide the sidewall is stretched straight, the bead and rim edge are exposed to rocks, and the bead can unseat at low pressure. Check the tire maker's approved rim widths.",
-        basis: `Measuring rim ${f.measuringRimWidthIn} in ± 1 in (measuring rim factor from memory of the UN R30/ETRTO rule; the ± 1 in band is common practice, no source).`,
-      });
-    }
-  }
-  if (r.pokePastFenderMm !== null) {
-    for (const side of ["planned", "current"] as const) {
-      const past = r.pokePastFenderMm[side];
-      if (past > 0) {
-        out.push({
-          kind: "poke",
-          level: side === "planned" ? "caution" : "note",
-          setup: side,
-          title: `${side === "planned" ? "Planned" : "Current"} tire reaches ${LENGTH_TOKEN} past the fender line you entered`,
-          lengthMm: past,
-          titleBySystem: null,
-          why: "Tread outside the fender throws stones, mud and water at the body and at other road users, and many places require the tread to be covered. Check the rules where you drive; flares or a different offset bring it back in.",
-          basis: "Your fender-line measurement compared with the tire's outer reach from the hub face (the engine's outer swing).",
-        });
-      }
-    }
-  }
-  const scrub = r.changes.scrubRadiusMm;
-  if (scrub > SCRUB_WARN_MM) {
-    out.push({
-      kind: "scrub",
-      level: "caution",
-      setup: null,
-      title: `Scrub radius grows by ${LENGTH_TOKEN}`,
-      lengthMm: scrub,
-      titleBySystem: null,
-      why:
-        "The contact patch moves further from the steering axis: heavier steering, more kickback over bumps and under braking, and more load on wheel bearings, ball joints and the steering box." +
-        (r.kingpinInclinationDeg === null ? " Kingpin inclination is not entered, so this is the wheel-plane shift alone." : ""),
-      basis: `More than ${SCRUB_WARN_MM} mm (1 in) of increase (common practice, no source).`,
-    });
-  }
-  const sp = r.speedometer;
-  const err = sp.trueAbovePct;
-  if (Math.abs(err) > SPEEDO_WARN_PCT) {
-    const titleOf = (system: SpeedSystem) => {
-      const { unit, headline: h } = sp.bySystem[system];
-      return `Speedometer ${readingPhrase(sp.ratio)}: at an indicated ${h.indicated} ${unit} you are actually going ${h.actual.toFixed(1)} ${unit} (${trueSpeedPhrase(sp.ratio)})`;
-    };
-    const titleBySystem = { imperial: titleOf("imperial"), metric: titleOf("metric") };
-    out.push({
-      kind: "speedometer",
-      level: "caution",
-      setup: null,
-      title: titleBySystem.imperial,
-      titleBySystem,
-      lengthMm: null,
-      why:
-        err > 0
-          ? "The taller tire covers more ground per turn than the speedometer was set for, so it reads low — you are faster than it shows — and the odometer under-counts. Recalibrate it for the new tire."
-          : "The shorter tire covers less ground per turn, so the speedometer reads high and the odometer over-counts. Recalibrate it for the new tire.",
-      basis: `Actual speed more than ${SPEEDO_WARN_PCT} % off the indicated one (common practice, no source); both percentages come from the ratio of overall diameters (unloaded).`,
-    });
-  }
-  const g = r.gearing;
-  const gap = (g.ratioToRestore / g.axleRatio - 1) * 100;
-  if (Math.abs(gap) >= REGEAR_WARN_PCT && g.suggestedRatio !== g.axleRatio) {
-    out.push({
-      kind: "regear",
-      level: "caution",
-      setup: null,
-      title: `Regear advised: ${g.suggestedRatio.toFixed(2)} comes closest to the engine speeds of ${g.axleRatio.toFixed(2)} on the current tire`,
-      lengthMm: null,
-      titleBySystem: null,
-      why:
-        gap > 0
-          ? `The taller tire acts like a ${g.effectiveRatio.toFixed(2)} axle: the engine turns slower at the same speed, pulls weaker in top gear and on grades, an automatic hunts between gears and runs hotter.`
-          : `The shorter tire acts like a ${g.effectiveRatio.toFixed(2)} axle: the engine turns faster at every road speed.`,
-      basis: `Restoring ratio ${g.ratioToRestore.toFixed(2)} is ${Math.abs(gap).toFixed(1)} % from the axle ratio; advised from ${REGEAR_WARN_PCT} % (common practice, no source). Suggested = nearest common ratio.`,
-    });
-  }
-  if (r.changes.innerClearanceMm < 0) {
-    out.push({
-      kind: "inner-reach",
-      level: "note",
-      setup: "planned",
-      title: `Planned tire reaches ${LENGTH_TOKEN} further inboard`,
-      lengthMm: -r.changes.innerClearanceMm,
-      titleBySystem: null,
-      why: "Check the room to the control arms, leaf springs, frame and sway bar at full lock and full droop and compression.",
-      basis: "Inner swing from the hub face, current minus planned (engine).",
-    });
-  }
-  for (const side of ["current", "planned"] as const) {
-    if (r[side].spacerMm > 0) {
-      out.push({
-        kind: "spacer",
-        level: "note",
-        setup: side,
-        title: `${side === "planned" ? "Planned" : "Current"} setup uses a ${LENGTH_TOKEN} spacer`,
-        lengthMm: r[side].spacerMm,
-        titleBySystem: null,
-        why: "Use hub-centric spacers rated for the vehicle, follow the spacer maker's fitting instructions and torque, and re-check the nuts after the first run. Spacers also add leverage on the wheel bearings.",
-        basis: "Common practice, no source; the spacer and wheel makers' instructions win.",
-      });
-    }
-  }
-  return out;
-}
-
 /**
  * Computes every figure of a comparison from a valid input (see `comparisonInputSchema`).
  * Throws FitmentInputError only when given an input the schema rejects.
@@ -464,5 +310,5 @@ export function computeComparison(input: ComparisonInput): ComparisonResult {
     pokePastFenderMm: v.fenderLineMm === null ? null : { current: current.outerSwingMm - v.fenderLineMm, planned: planned.outerSwingMm - v.fenderLineMm },
     engine: c,
   };
-  return { ...base, warnings: warningsOf(base) };
+  return { ...base, warnings: workspaceWarnings(assessChange(c, { fenderLineMm: v.fenderLineMm }), base) };
 }

@@ -6,7 +6,7 @@
  * Negative values use the typographic minus sign (U+2212).
  */
 import { KM_PER_MILE, MM_PER_IN, formatLength, inToMm, kgToLb, psiToKpa } from "@/lib/fitment";
-import { type ComparisonWarning, LENGTH_TOKEN } from "./compute";
+import { type ComparisonWarning, LENGTH_TOKEN } from "./warnings";
 import { type SpeedSystem, type SpeedUnit, SPEED_UNIT, enteredSpeed } from "./speedometer";
 
 export type UnitSystem = SpeedSystem;

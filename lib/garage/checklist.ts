@@ -1,19 +1,22 @@
 /**
  * The install checklist for a vehicle and a planned setup: the work the change implies, each
  * item with the engine's figures. Pure; the page renders it and the handler checks ticked ids
- * against it. Figures: predictions (lib/fitment/clearance.ts), gearing and speedometer
- * (compareSetups), crisscross order (tighteningSequence), load index and load range tables.
+ * against it. What the change calls for (points to trim, a regear, the load to check) comes from
+ * the findings of assessChange (lib/comparisons/assess); figures: predictions
+ * (lib/fitment/clearance.ts), speedometer (compareSetups), crisscross order (tighteningSequence).
  */
 import {
   type ClearancePrediction,
+  DEFAULT_AXLE_RATIO,
   compareSetups,
   formatLength,
   kgToLb,
-  loadIndexKg,
-  loadRangeInfo,
   parseBoltPattern,
   tighteningSequence,
 } from "@/lib/fitment";
+import { assessChange } from "@/lib/comparisons/assess/assessChange";
+import { REGEAR_WARN_PCT } from "@/lib/comparisons/assess/thresholds";
+import { findingsOf } from "@/lib/comparisons/assess/vocabulary";
 import { bothUnits } from "@/lib/garage/format";
 import type { Vehicle, VehicleClearance } from "@/lib/garage/types";
 import { type SetupValues, toEngineSetup } from "@/lib/setup/schema";
@@ -60,19 +63,20 @@ export function buildChecklist(input: { vehicle: Vehicle; clearances: VehicleCle
   const fromStock = compareSetups(toEngineSetup(v.stockSetup), pla, { speedsMph: [60] });
   const preds = predictPoints(clearances, planned, marginMm, v);
   const predictions = clearances.map((clearance, i) => ({ clearance, prediction: preds[i]! }));
+  const findings = assessChange(cmp, { points: predictions.map(({ clearance: c, prediction }) => ({ id: c.id, label: c.label, prediction })) });
   const items: ChecklistItem[] = [];
 
   // --- fit
-  for (const { clearance: c, prediction: p } of predictions) {
-    if (p.status === "clear") continue;
+  const points = findingsOf(findings, "clearance");
+  for (const { figures: p } of points) {
     items.push({
-      id: `trim:${c.id}`,
+      id: `trim:${p.pointId}`,
       group: "fit",
-      title: `${p.status === "contact" ? "Contact" : "Tight"} at ${c.label}: gain at least ${bothUnits(p.shortfallMm)}`,
-      detail: `Predicted ${bothUnits(p.predictedMm)} against a ${bothUnits(p.marginMm)} margin (measured ${bothUnits(p.measuredMm)} at ${c.suspensionState.replace("-", " ")}). To fix: ${DIRECTION_FIX[c.direction]}${c.suspensionState === "full-lock" && c.direction !== "fore-aft" ? ", or limit steering travel with the stops" : ""}.`,
+      title: `${p.status === "contact" ? "Contact" : "Tight"} at ${p.label}: gain at least ${bothUnits(p.shortfallMm)}`,
+      detail: `Predicted ${bothUnits(p.predictedMm)} against a ${bothUnits(p.marginMm)} margin (measured ${bothUnits(p.measuredMm)} at ${p.state.replace("-", " ")}). To fix: ${DIRECTION_FIX[p.direction]}${p.state === "full-lock" && p.direction !== "fore-aft" ? ", or limit steering travel with the stops" : ""}.`,
     });
   }
-  const upShort = Math.max(0, ...predictions.filter((x) => x.clearance.direction === "upward" || x.clearance.direction === "fore-aft").map((x) => x.prediction.shortfallMm));
+  const upShort = Math.max(0, ...points.filter((f) => f.figures.direction === "upward" || f.figures.direction === "fore-aft").map((f) => f.figures.shortfallMm));
   if (upShort > 0) {
     items.push({
       id: "lift",
@@ -93,12 +97,15 @@ export function buildChecklist(input: { vehicle: Vehicle; clearances: VehicleCle
   // --- drivetrain
   const g = cmp.gearing;
   const rpm = g.rpmAt[0];
-  if (g.suggestedRatio !== g.axleRatio) {
+  const [regear] = findingsOf(findings, "regear");
+  const assumed = v.axleRatio === null ? ` (No axle ratio is recorded for the vehicle; ${DEFAULT_AXLE_RATIO.toFixed(2)} was assumed.)` : "";
+  if (regear) {
+    const x = regear.figures;
     items.push({
       id: "regear",
       group: "drivetrain",
-      title: `Regear from ${g.axleRatio.toFixed(2)} to ${g.suggestedRatio.toFixed(2)}`,
-      detail: `Restoring today's engine speed needs ${g.ratioToRestore.toFixed(2)}; ${g.suggestedRatio.toFixed(2)} is the nearest common ratio.${rpm ? ` At 65 mph: ${Math.round(rpm.currentRpm)} rpm now, ${Math.round(rpm.plannedRpm)} rpm with the planned tire, ${Math.round(rpm.regearedRpm)} rpm regeared.` : ""}${v.axleRatio === null ? " (No axle ratio is recorded for the vehicle; 3.73 was assumed.)" : ""}`,
+      title: `Regear from ${x.axleRatio.toFixed(2)} to ${x.suggestedRatio.toFixed(2)}`,
+      detail: `Restoring today's engine speed needs ${x.ratioToRestore.toFixed(2)}; ${x.suggestedRatio.toFixed(2)} is the nearest common ratio.${rpm ? ` At 65 mph: ${Math.round(rpm.currentRpm)} rpm now, ${Math.round(rpm.plannedRpm)} rpm with the planned tire, ${Math.round(rpm.regearedRpm)} rpm regeared.` : ""}${assumed}`,
       caution: "Ring-and-pinion setup needs the maker's backlash and preload figures; it is specialist work.",
     });
   } else {
@@ -106,7 +113,10 @@ export function buildChecklist(input: { vehicle: Vehicle; clearances: VehicleCle
       id: "regear",
       group: "drivetrain",
       title: `Gearing: no regear suggested (stays ${g.axleRatio.toFixed(2)})`,
-      detail: `The ratio that restores engine speed is ${g.ratioToRestore.toFixed(2)}, nearest the current ${g.axleRatio.toFixed(2)}.`,
+      detail:
+        g.suggestedRatio === g.axleRatio
+          ? `The ratio that restores engine speed is ${g.ratioToRestore.toFixed(2)}, nearest the current ${g.axleRatio.toFixed(2)}.`
+          : `The ratio that restores engine speed is ${g.ratioToRestore.toFixed(2)}, less than ${REGEAR_WARN_PCT} % from the current ${g.axleRatio.toFixed(2)}: a regear is advised from ${REGEAR_WARN_PCT} % (common practice, no source).`,
     });
   }
   const sp = fromStock.speedometer;
@@ -165,30 +175,27 @@ export function buildChecklist(input: { vehicle: Vehicle; clearances: VehicleCle
   });
 
   // --- tires
-  const t = cmp.planned.tire;
   items.push({
     id: "spare",
     group: "tires",
-    title: `Spare fits: the planned ${bothUnits(t.overallDiameterMm)} tire in the carrier or spare mount`,
+    title: `Spare fits: the planned ${bothUnits(cmp.planned.overallDiameterMm)} tire in the carrier or spare mount`,
     detail: "Check the spare location, the carrier's load rating and that the spare can be lowered and lifted. On four-wheel drive, a spare of another diameter is for short distances only.",
   });
-  const li = t.loadIndex;
-  const kg = li === null ? null : loadIndexKg(li);
+  const l = findingsOf(findings, "load")[0]?.figures;
   items.push({
     id: "load",
     group: "tires",
-    title: kg === null ? "Load: check the load index against the axle ratings" : `Load: index ${li} = ${Math.round(kg)} kg (${Math.round(kgToLb(kg))} lb) per tire`,
+    title: !l || l.index === null || l.kg === null ? "Load: check the load index against the axle ratings" : `Load: index ${l.index} = ${Math.round(l.kg)} kg (${Math.round(kgToLb(l.kg))} lb) per tire`,
     detail: "Two tires must carry at least each axle's rating on the door placard (ISO 4000-1 load index table), with the pressure that goes with it.",
   });
-  const range = t.loadRange === null || t.system === "numeric" ? null : loadRangeInfo(t.loadRange, t.system === "metric" ? "metric" : "flotation");
   items.push({
     id: "pressure",
     group: "tires",
     title:
-      range?.maxPressurePsi != null
-        ? `Pressure: from the tire maker's load/inflation table, never above the sidewall maximum (load range ${range.loadRange}: ${range.maxPressurePsi} psi)`
+      l && l.maxPressurePsi !== null
+        ? `Pressure: from the tire maker's load/inflation table, never above the sidewall maximum (load range ${l.loadRange}: ${l.maxPressurePsi} psi)`
         : "Pressure: from the tire maker's load/inflation table, never above the sidewall maximum",
-    detail: `A bigger tire usually needs a different pressure from the placard's for the same load. ${range?.maxPressureKpa != null ? `${range.maxPressurePsi} psi = ${Math.round(range.maxPressureKpa)} kPa (from memory, TRA practice — the sidewall wins).` : ""}`.trim(),
+    detail: `A bigger tire usually needs a different pressure from the placard's for the same load. ${l && l.maxPressureKpa !== null ? `${l.maxPressurePsi} psi = ${Math.round(l.maxPressureKpa)} kPa (from memory, TRA practice — the sidewall wins).` : ""}`.trim(),
     caution: "Inflate a tire on the vehicle or in a cage, standing clear of the sidewall.",
   });
   return { items, predictions };

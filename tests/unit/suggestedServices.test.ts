@@ -23,4 +23,13 @@ describe("services suggested from the pick", () => {
     expect(lines.map((l) => `${l.sku || l.description}×${l.quantity}`)).toEqual(["MB×5", "BL×5", "VS×5", "AL×1", "Fender trimming labour×1", "DP×5"]);
     expect(lines.find((l) => l.kind === "custom")?.unit_price_cents).toBe(14500);
   });
+
+  it("fender trimming follows the outer-reach finding (more than 25 mm further outboard; common practice, no source), not the words of a warning", () => {
+    // 17x9 −12 against 17x8 +25: the wheel plane moves 37 mm outboard, past the 25 mm rule.
+    const wide = summarize(current, "315/70R17", { diameterIn: 17, widthIn: 9, offsetMm: -12, beadlock: false });
+    const trims = (fit: typeof wide) => suggestedServiceLines(all, wheel(false), 4, fit, 14500).some((l) => l.description === "Fender trimming labour");
+    expect(trims({ ...wide, warnings: [] })).toBe(true);
+    const same = summarize(current, "265/70R17", { diameterIn: 17, widthIn: 8, offsetMm: 25, beadlock: false });
+    expect(trims({ ...same, warnings: ["Reaches 30 mm (1.2 in) further outboard: check fender clearance."] })).toBe(false);
+  });
 });

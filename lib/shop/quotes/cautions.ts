@@ -1,10 +1,11 @@
+import { diameterChange } from "@/lib/comparisons/assess/assessChange";
 import type { FitmentSummary } from "./fitment";
 
 /**
  * The cautions every quote carries (printed on the PDF and shown on the quote pages). They point
  * to the makers and licensed practice; Hubface gives no torque or pressure figure of its own.
  */
-export function quoteCautions(fit: Pick<FitmentSummary, "planned" | "modifications" | "diameterChangeMm">): string[] {
+export function quoteCautions(fit: Pick<FitmentSummary, "planned" | "diameterChangeMm">): string[] {
   const out = [
     "Bead seating: inflate only in a restraining cage with a clip-on chuck and remote gauge, standing clear of the assembly; never exceed the tire maker's maximum bead-seating pressure.",
     "Wheel fasteners: tighten in a crisscross order to the vehicle maker's torque figure and re-check the torque after the first 50 to 100 miles (80 to 160 km).",
@@ -12,7 +13,8 @@ export function quoteCautions(fit: Pick<FitmentSummary, "planned" | "modificatio
   if (fit.planned.beadlock) {
     out.push("Beadlock rings: tighten the ring bolts in stages in a crisscross order to the wheel maker's figure and re-check them regularly; follow the maker's assembly instructions and local rules on beadlock use on public roads.");
   }
-  if (fit.modifications.some((m) => /lift|levelling/.test(m)) || Math.abs(fit.diameterChangeMm) > 50) {
+  // From the stored figure, so quotes kept before their findings were stored get it too.
+  if (diameterChange(fit.diameterChangeMm) !== null) {
     out.push("Lift and steering changes must be done to the lift maker's instructions and local vehicle codes; check brake lines, steering stops and clearance at full lock and full compression.");
   }
   out.push("All figures are computed from nominal sizes; actual tire dimensions vary by maker and model. The makers' data and a licensed technician's judgement take precedence.");

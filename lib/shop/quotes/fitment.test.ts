@@ -39,6 +39,17 @@ describe("counter fitment summary", () => {
     expect(s.regear).toBeNull();
   });
 
+  it("regear by the workspace's rule: the restoring ratio 5 % or more from the axle ratio, either way (common practice, no source)", () => {
+    // 295/70R17: D = 431.8 + 2 × 206.5 = 844.8 mm (ISO 4000-1); 844.8 / 802.8 = 1.0523: restoring 3.73 × 1.0523 = 3.925, 5.2 % above 3.73.
+    const taller = summarize(current, "295/70R17", { diameterIn: 17, widthIn: 9, offsetMm: 0, beadlock: false });
+    expect(taller.regear).toMatchObject({ axleRatio: 3.73, suggestedRatio: 3.92 });
+    expect(taller.regear?.effectiveRatio).toBeCloseTo((3.73 * 802.8) / 844.8, 9);
+    expect(taller.modifications).toContain("Regear from 3.73 to about 3.92 to restore the effective ratio (assuming a 3.73 axle; enter the vehicle's ratio).");
+    // 235/70R17 on a 4.10 axle: D = 431.8 + 2 × 164.5 = 760.8 mm; restoring 4.10 × 760.8 / 802.8 = 3.886, 5.2 % below: 3.92 is nearest.
+    const shorter = summarize({ ...current, axleRatio: 4.1 }, "235/70R17", { diameterIn: 17, widthIn: 7.5, offsetMm: 25, beadlock: false });
+    expect(shorter.regear?.suggestedRatio).toBe(3.92);
+  });
+
   it("ranks only wheels of an equivalent bolt pattern and tires of the wheel's diameter", () => {
     const wheels = [
       { id: "w-in", diameterIn: 17, widthIn: 8.5, offsetMm: 0, boltPattern: "6x139.7", beadlock: false }, // ≡ 6x5.5 (5.5 × 25.4 = 139.7)

@@ -1,27 +1,13 @@
 /**
- * The counter's reading of the engine's comparison: every number comes from
- * `compareSetups` / `setupGeometry` in lib/fitment; this module only decides which of those
- * numbers deserve a caution and how picks are ranked. Pure.
- *
- * Thresholds (common practice, no source — a shop's rule of thumb, shown as such):
- * - poke: tire reaching more than 25 mm further outboard → check fender clearance;
- * - inner clearance: more than 10 mm closer inboard → check control arms, frame, sway bar at full lock;
- * - height: more than 50 mm (about 2 in) taller → a lift or levelling is usually needed;
- * - alignment: diameter change of 25.4 mm (1 in) or more, or the wheel plane moving 12.7 mm
- *   (1/2 in) or more per side;
- * - regear: suggested when the effective axle ratio falls by 5 % or more.
+ * The counter's summary of a fitment: every number comes from `compareSetups` /
+ * `setupGeometry` in lib/fitment, every judgement from `assessChange`
+ * (lib/comparisons/assess, thresholds defined there once). This module words the findings the
+ * counter's way (warnings and modifications) and ranks the picks. Pure.
  */
-import { FitmentInputError, compareSetups, mmToIn, parseTireSize, setupGeometry, type SetupComparison, type SetupGeometry } from "@/lib/fitment";
+import { DEFAULT_AXLE_RATIO, FitmentInputError, compareSetups, mmToIn, parseTireSize, setupGeometry, type SetupComparison, type SetupGeometry } from "@/lib/fitment";
+import { assessChange } from "@/lib/comparisons/assess/assessChange";
+import { type Finding, type FindingKind, type FindingOf, findingsOf } from "@/lib/comparisons/assess/vocabulary";
 import { checkWheelOnHub, hubRefusal } from "./hubFit";
-
-export const THRESHOLDS = Object.freeze({
-  pokeMm: 25,
-  innerLossMm: 10,
-  heightGainMm: 50,
-  alignmentDiameterMm: 25.4,
-  alignmentShiftMm: 12.7,
-  regearDropFraction: 0.05,
-});
 
 export interface CurrentSetup {
   boltPattern: string;
@@ -64,14 +50,23 @@ export interface FitmentSummary {
   modifications: string[];
   /** Clearance warnings (the count ranks the picks). */
   warnings: string[];
+  /**
+   * The findings the warnings and modifications were worded from. Stored with the quote; quotes
+   * drafted before they were kept have none, so a reader of a stored summary that needs a
+   * judgement takes it from the figures above (see cautions.ts).
+   */
+  findings?: Finding[];
 }
+
+/** A summary just computed: its findings are there. */
+type FitmentReading = FitmentSummary & { findings: Finding[] };
 
 const r1 = (x: number) => Math.round(x * 10) / 10;
 const inches = (mm: number) => `${r1(mmToIn(Math.abs(mm)))} in`;
 const wheelText = (w: { diameterIn: number; widthIn: number; offsetMm: number }) => `${w.diameterIn}x${w.widthIn} ${w.offsetMm >= 0 ? "+" : ""}${r1(w.offsetMm)} mm`;
 
 /** Summary of the planned tire on the planned wheel against the current setup. */
-export function summarize(current: CurrentSetup, tire: string, wheel: Omit<WheelCandidate, "id" | "boltPattern"> & { boltPattern?: string }): FitmentSummary {
+export function summarize(current: CurrentSetup, tire: string, wheel: Omit<WheelCandidate, "id" | "boltPattern"> & { boltPattern?: string }): FitmentReading {
   const cur = setupGeometry({ tire: current.tireSize, wheel: current.wheel });
   const plan = setupGeometry({ tire, wheel: { diameterIn: wheel.diameterIn, widthIn: wheel.widthIn, offsetMm: wheel.offsetMm } });
   const axle = current.axleRatio ?? undefined;
@@ -79,30 +74,47 @@ export function summarize(current: CurrentSetup, tire: string, wheel: Omit<Wheel
   return fromComparison(cmp, cur, plan, wheel.beadlock, axle !== undefined);
 }
 
-function fromComparison(cmp: SetupComparison, cur: SetupGeometry, plan: SetupGeometry, beadlock: boolean, axleGiven: boolean): FitmentSummary {
-  const warnings: string[] = [];
-  const modifications: string[] = [];
-  if (cmp.outerPokeChangeMm > THRESHOLDS.pokeMm) {
-    warnings.push(`Reaches ${Math.round(cmp.outerPokeChangeMm)} mm (${inches(cmp.outerPokeChangeMm)}) further outboard: check fender clearance.`);
-    modifications.push("Fender trimming or flares may be needed for the extra poke.");
+/** A finding in the counter's words; null when the counter has nothing to say about it. */
+type Words<K extends FindingKind> = { [k in K]: (f: FindingOf<k>) => string | null };
+
+/**
+ * The clearance warnings, in this order: cautions about the planned wheel and tire (a note, or
+ * the current wheel's rim width, is not the counter's to warn about).
+ */
+const WARNINGS: Words<"outer-reach" | "inner-reach" | "rim-width" | "diameter"> = {
+  "outer-reach": ({ figures: x }) => `Reaches ${Math.round(x.changeMm)} mm (${inches(x.changeMm)}) further outboard: check fender clearance.`,
+  "inner-reach": ({ level, figures: x }) => (level === "caution" ? `${Math.round(x.reachMm)} mm closer inboard: check control arms, frame and sway bar at full lock.` : null),
+  "rim-width": ({ setup, figures: x }) => (setup === "planned" ? `Rim width ${x.widthIn} in is outside ${x.minIn}–${x.maxIn} in suited to ${x.tire}.` : null),
+  // A much shorter tire is left to the cautions (cautions.ts); the counter warns of a taller one.
+  diameter: ({ figures: x }) => (x.changeMm > 0 ? `${Math.round(x.changeMm)} mm (${inches(x.changeMm)}) taller: check clearance at full lock and full compression.` : null),
+};
+
+/** The modifications, in this order. */
+const modifications = (axleGiven: boolean): Words<"outer-reach" | "diameter" | "regear" | "speedometer" | "alignment"> => ({
+  "outer-reach": () => "Fender trimming or flares may be needed for the extra poke.",
+  diameter: ({ figures: x }) => (x.changeMm > 0 ? "A lift or levelling kit is usually needed for this much extra diameter; follow the lift maker's instructions." : null),
+  regear: ({ figures: x }) =>
+    `Regear from ${x.axleRatio.toFixed(2)} to about ${x.suggestedRatio.toFixed(2)} to restore the effective ratio${axleGiven ? "" : ` (assuming a ${DEFAULT_AXLE_RATIO.toFixed(2)} axle; enter the vehicle's ratio)`}.`,
+  speedometer: () => "Recalibrate the speedometer.",
+  alignment: () => "Wheel alignment after fitting.",
+});
+
+/** The findings `words` has words for, in the order of its keys. */
+function worded<K extends FindingKind>(findings: readonly Finding[], words: Words<K>): string[] {
+  const out: string[] = [];
+  for (const kind of Object.keys(words) as K[]) {
+    const say = words[kind] as (f: Finding) => string | null;
+    for (const f of findings) {
+      const text = f.kind === kind ? say(f) : null;
+      if (text !== null) out.push(text);
+    }
   }
-  if (cmp.innerClearanceChangeMm < -THRESHOLDS.innerLossMm) {
-    warnings.push(`${Math.round(-cmp.innerClearanceChangeMm)} mm closer inboard: check control arms, frame and sway bar at full lock.`);
-  }
-  if (!plan.rimWidthSuitable) {
-    warnings.push(`Rim width ${plan.wheel.widthIn} in is outside ${plan.rimWidthMinIn}–${plan.rimWidthMaxIn} in suited to ${plan.tire.text}.`);
-  }
-  if (cmp.diameterChangeMm > THRESHOLDS.heightGainMm) {
-    warnings.push(`${Math.round(cmp.diameterChangeMm)} mm (${inches(cmp.diameterChangeMm)}) taller: check clearance at full lock and full compression.`);
-    modifications.push("A lift or levelling kit is usually needed for this much extra diameter; follow the lift maker's instructions.");
-  }
-  const g = cmp.gearing;
-  const drop = 1 - g.effectiveRatio / g.axleRatio;
-  const regear = drop >= THRESHOLDS.regearDropFraction ? { axleRatio: g.axleRatio, effectiveRatio: g.effectiveRatio, suggestedRatio: g.suggestedRatio } : null;
-  if (regear) modifications.push(`Regear from ${g.axleRatio.toFixed(2)} to about ${g.suggestedRatio.toFixed(2)} to restore the effective ratio${axleGiven ? "" : " (assuming a 3.73 axle; enter the vehicle's ratio)"}.`);
-  if (Math.abs(cmp.speedometer.ratio - 1) >= 0.03) modifications.push("Recalibrate the speedometer.");
-  const alignmentSuggested = Math.abs(cmp.diameterChangeMm) >= THRESHOLDS.alignmentDiameterMm || Math.abs(cmp.trackWidthChangeMm / 2) >= THRESHOLDS.alignmentShiftMm;
-  if (alignmentSuggested) modifications.push("Wheel alignment after fitting.");
+  return out;
+}
+
+function fromComparison(cmp: SetupComparison, cur: SetupGeometry, plan: SetupGeometry, beadlock: boolean, axleGiven: boolean): FitmentReading {
+  const findings = assessChange(cmp, {});
+  const [regearFinding] = findingsOf(findings, "regear");
   const at60 = cmp.speedometer.rows.find((r) => r.indicatedMph === 60)?.actualMph ?? 60 * cmp.speedometer.ratio;
   return {
     current: { tire: cur.tire.text, wheel: wheelText(cur.wheel), overallDiameterMm: cur.overallDiameterMm },
@@ -114,10 +126,11 @@ function fromComparison(cmp: SetupComparison, cur: SetupGeometry, plan: SetupGeo
     trackWidthChangeMm: cmp.trackWidthChangeMm,
     scrubRadiusChangeMm: cmp.scrubRadiusChangeMm,
     actualMphAt60: at60,
-    regear,
-    alignmentSuggested,
-    modifications,
-    warnings,
+    regear: regearFinding ? { axleRatio: regearFinding.figures.axleRatio, effectiveRatio: regearFinding.figures.effectiveRatio, suggestedRatio: regearFinding.figures.suggestedRatio } : null,
+    alignmentSuggested: findings.some((f) => f.kind === "alignment"),
+    modifications: worded(findings, modifications(axleGiven)),
+    warnings: worded(findings, WARNINGS),
+    findings,
   };
 }
 
@@ -145,7 +158,7 @@ export function fitmentChangeRows(fit: FitmentSummary): [string, string][] {
 export interface Pick {
   tireId: string;
   wheelId: string;
-  summary: FitmentSummary;
+  summary: FitmentReading;
 }
 
 /**

@@ -177,7 +177,7 @@ export function suggestedServiceLines(services: CatalogItemRow[], wheel: Catalog
   if (wheel.beadlock) add(first("beadlock_assembly"), qty);
   add(first("valve_stem") ?? first("tpms"), qty);
   if (fit.alignmentSuggested) add(first("alignment"), 1);
-  if (fit.warnings.some((w) => /further outboard/.test(w))) {
+  if (fit.findings?.some((f) => f.kind === "outer-reach")) {
     const trim = first("fender_trim");
     if (trim) add(trim, 1);
     // No trimming item in the catalog: one hour at the shop's fabrication rate.
