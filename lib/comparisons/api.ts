@@ -53,7 +53,7 @@ export type ComparisonRowWithShare = ComparisonRow & { share_slug: string | null
 
 const iso = (d: Date | string) => new Date(d).toISOString();
 
-export function comparisonFiguresDto(row: ComparisonRow): ComparisonFigures {
+function comparisonFiguresDto(row: ComparisonRow): ComparisonFigures {
   return {
     currentTire: row.current_tire,
     plannedTire: row.planned_tire,

@@ -101,7 +101,7 @@ export const STAGED_IMPORT_TTL_MINUTES = 60;
 const ALREADY_CONFIRMED = "This import was already confirmed.";
 
 /** The shop's preview, if it is younger than STAGED_IMPORT_TTL_MINUTES (confirmed or not). */
-export async function findStagedImport(db: Knex, shopId: string, id: string) {
+async function findStagedImport(db: Knex, shopId: string, id: string) {
   return db<CatalogImportRow>("catalog_imports")
     .where({ id, shop_id: shopId })
     .andWhere("created_at", ">", db.raw("now() - make_interval(mins => ?)", [STAGED_IMPORT_TTL_MINUTES]))

@@ -34,7 +34,7 @@ export async function searchCustomers(db: Knex, shopId: string, q: string): Prom
 }
 
 /** An existing customer of this shop with the same phone digits or e-mail. */
-export async function findDuplicateCustomer(db: Knex, shopId: string, c: CustomerInput): Promise<Customer | undefined> {
+async function findDuplicateCustomer(db: Knex, shopId: string, c: CustomerInput): Promise<Customer | undefined> {
   const digits = phoneDigits(c.phone);
   const row = await db<CustomerRow>("customers")
     .where({ shop_id: shopId })
