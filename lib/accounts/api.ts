@@ -1,6 +1,7 @@
 /**
- * What the admin's users API returns (camelCase, ISO dates) and the row → API mappers; shared
- * by server and client. Password hashes and session versions never leave the server.
+ * What the account and admin users APIs return (camelCase, ISO dates) and the row → API
+ * mappers; shared by server and client. Password hashes and session versions never leave the
+ * server.
  */
 import type { PublicUser, Role } from "@/lib/platform/db/types";
 
@@ -26,6 +27,24 @@ export interface AdminUser extends User {
  */
 export function userDto(u: PublicUser): User {
   return { id: u.id, email: u.email, name: u.name, role: u.role, shopId: u.shop_id, createdAt: new Date(u.created_at).toISOString(), updatedAt: new Date(u.updated_at).toISOString() };
+}
+
+/** The signed-in person as /api/me answers: who the session says they are, no dates. */
+export interface Me {
+  id: string;
+  name: string;
+  email: string;
+  role: Role;
+  shopId: string | null;
+}
+
+/**
+ * @example
+ * meDto({ userId: "u", name: "A", email: "a@example.test", role: "member", shopId: null });
+ * // { id: "u", name: "A", email: "a@example.test", role: "member", shopId: null }
+ */
+export function meDto(caller: { userId: string; name: string; email: string; role: Role; shopId: string | null }): Me {
+  return { id: caller.userId, name: caller.name, email: caller.email, role: caller.role, shopId: caller.shopId };
 }
 
 export function adminUserDto(u: PublicUser & { shop_name: string | null }): AdminUser {

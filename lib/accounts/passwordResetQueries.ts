@@ -4,6 +4,7 @@ import type { Knex } from "knex";
 import type { PasswordResetRow } from "@/lib/platform/db/types";
 import { findUserById, setPassword } from "./queries";
 import { bindAppDb } from "@/lib/platform/db/bind";
+import { InvalidError } from "@/lib/platform/errors";
 
 export const RESET_TTL_MINUTES = 30;
 
@@ -39,15 +40,18 @@ export async function consumeResetToken(db: Knex, token: string, trx?: Knex.Tran
 
 /**
  * Uses a reset token and sets the new password hash in one transaction. Returns the account's
- * e-mail address, or null when the token is unknown, used or expired (nothing is changed then).
+ * e-mail address; an unknown, used or expired token is an InvalidError on `token` (nothing is
+ * changed then).
  */
-export async function resetPassword(db: Knex, token: string, passwordHash: string): Promise<string | null> {
-  return db.transaction(async (trx) => {
+export async function resetPassword(db: Knex, token: string, passwordHash: string): Promise<string> {
+  const email = await db.transaction(async (trx) => {
     const userId = await consumeResetToken(db, token, trx);
     if (!userId) return null;
     await setPassword(trx, userId, passwordHash);
     return (await findUserById(trx, userId))?.email ?? null;
   });
+  if (!email) throw new InvalidError("This reset link has expired or was already used. Ask for a new one.", { token: ["This reset link has expired or was already used."] });
+  return email;
 }
 
 /** These queries on the app's database handle, for pages and route handlers. */

@@ -3,6 +3,7 @@ import type { Knex } from "knex";
 import type { PublicUser, Role, UserRow } from "@/lib/platform/db/types";
 import { bindAppDb } from "@/lib/platform/db/bind";
 import { type AdminUser, adminUserDto } from "@/lib/accounts/api";
+import { InvalidError, NotFoundError, SOME_FIELDS } from "@/lib/platform/errors";
 
 const PUBLIC_COLUMNS = ["id", "email", "name", "role", "shop_id", "created_at", "updated_at"] as const;
 
@@ -14,9 +15,10 @@ export async function findUserById(db: Knex, id: string): Promise<PublicUser | u
   return (await db<UserRow>("users").select([...PUBLIC_COLUMNS]).where({ id }).first()) as PublicUser | undefined;
 }
 
-export class DuplicateEmailError extends Error {
+/** The address is taken: a field error on `email`, as the sign-up form shows it. */
+export class DuplicateEmailError extends InvalidError {
   constructor() {
-    super("An account with this e-mail address already exists.");
+    super(SOME_FIELDS, { email: ["An account with this e-mail address already exists."] });
   }
 }
 
@@ -54,7 +56,8 @@ export async function listUsers(db: Knex, opts: { search?: string; limit?: numbe
   return ((await q.limit(opts.limit ?? 200).offset(opts.offset ?? 0)) as (PublicUser & { shop_name: string | null })[]).map(adminUserDto);
 }
 
-export async function setUserRole(db: Knex, id: string, role: Role, shopId: string | null) {
+/** Sets the role (and shop); NotFoundError when there is no such user. */
+export async function setUserRole(db: Knex, id: string, role: Role, shopId: string | null): Promise<PublicUser> {
   const shop = role === "shop_staff" || role === "shop_owner" ? shopId : null;
   const [row] = await db<UserRow>("users")
     .where({ id })
@@ -67,7 +70,8 @@ export async function setUserRole(db: Knex, id: string, role: Role, shopId: stri
       updated_at: db.fn.now() as unknown as Date,
     })
     .returning(PUBLIC_COLUMNS);
-  return row as PublicUser | undefined;
+  if (!row) throw new NotFoundError("That user");
+  return row as PublicUser;
 }
 
 /** Sets a new password and ends every session made with the old one. */

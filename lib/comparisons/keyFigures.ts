@@ -3,7 +3,7 @@
  * stored beside the input (columns of `comparisons`). Pure: the server computes them on every
  * write; the demo seed uses the same function.
  */
-import type { ComparisonFigures } from "@/lib/comparisons/savedSchema";
+import type { ComparisonFigures } from "@/lib/comparisons/api";
 import { computeComparison } from "./compute";
 import type { ComparisonInput } from "./schema";
 

@@ -2,50 +2,29 @@ import "server-only";
 import { randomBytes } from "node:crypto";
 import type { Knex } from "knex";
 import { keyFigureColumns } from "@/lib/comparisons/keyFigures";
-import { type ComparisonInput, checkComparison, comparisonInputSchema } from "@/lib/comparisons/schema";
+import { type ComparisonInput, comparisonInputSchema } from "@/lib/comparisons/schema";
 import type { ComparisonRow, ComparisonShareRow } from "@/lib/platform/db/types";
-import { HttpError } from "@/lib/platform/http/errors";
+import { InvalidError, NotFoundError } from "@/lib/platform/errors";
 import { findVehicle } from "../garage/queries";
-import type { ComparisonFigures, ComparisonSort, SavedComparison } from "@/lib/comparisons/savedSchema";
+import type { ComparisonSort } from "@/lib/comparisons/savedSchema";
+import {
+  type ComparisonRowWithShare,
+  type ComparisonShare,
+  type SavedComparison,
+  type SharedComparison,
+  comparisonShareDto,
+  savedComparisonDto,
+  sharedComparisonDto,
+} from "@/lib/comparisons/api";
 import { bindAppDb } from "@/lib/platform/db/bind";
 
 /**
  * Saved comparisons and share links. Every function taking an `ownerId` scopes by it: another
- * owner's comparison is "not found" (undefined), never an error that tells it exists.
+ * owner's comparison is "not found" — `undefined` from find*, NotFoundError from the others
+ * (lib/platform/errors.ts) — never an error that tells it exists.
  */
 
-type RowWithShare = ComparisonRow & { share_slug: string | null; share_created_at: Date | null };
-
-function figuresOf(row: ComparisonRow): ComparisonFigures {
-  return {
-    currentTire: row.current_tire,
-    plannedTire: row.planned_tire,
-    diameterChangeMm: row.diameter_change_mm,
-    groundClearanceChangeMm: row.ground_clearance_change_mm,
-    pokeChangeMm: row.poke_change_mm,
-    scrubChangeMm: row.scrub_change_mm,
-    speedometerErrorPct: row.speedometer_error_pct,
-    suggestedRatio: row.suggested_ratio,
-    warningCount: row.warning_count,
-  };
-}
-
-function toSaved(row: RowWithShare): SavedComparison {
-  // Read through the model: an input saved before a field existed gets it as not entered (the
-  // crawl-ratio gears), so every screen sees a whole input. One the rules no longer accept is
-  // passed on as stored, as before.
-  const checked = checkComparison(row.input);
-  return {
-    id: row.id,
-    name: row.name,
-    vehicleId: row.vehicle_id,
-    input: checked.ok ? checked.value : (row.input as ComparisonInput),
-    figures: figuresOf(row),
-    share: row.share_slug ? { slug: row.share_slug, createdAt: new Date(row.share_created_at!).toISOString() } : null,
-    createdAt: new Date(row.created_at).toISOString(),
-    updatedAt: new Date(row.updated_at).toISOString(),
-  };
-}
+const NOT_FOUND = "That comparison";
 
 /** Comparisons with their live share link (one query). */
 function withShare(db: Knex) {
@@ -73,20 +52,28 @@ export async function listComparisons(db: Knex, ownerId: string, opts: { q?: str
     else q.orderBy(col, dir);
   }
   q.orderBy("c.id", "asc");
-  const rows = (await q.limit(opts.limit ?? 500)) as RowWithShare[];
-  return rows.map(toSaved);
+  const rows = (await q.limit(opts.limit ?? 500)) as ComparisonRowWithShare[];
+  return rows.map(savedComparisonDto);
 }
 
-export async function getComparison(db: Knex, ownerId: string, id: string): Promise<SavedComparison | undefined> {
-  const row = (await withShare(db).where({ "c.id": id, "c.owner_id": ownerId }).first()) as RowWithShare | undefined;
-  return row ? toSaved(row) : undefined;
+/** The owner's comparison, or undefined. */
+export async function findComparison(db: Knex, ownerId: string, id: string): Promise<SavedComparison | undefined> {
+  const row = (await withShare(db).where({ "c.id": id, "c.owner_id": ownerId }).first()) as ComparisonRowWithShare | undefined;
+  return row ? savedComparisonDto(row) : undefined;
+}
+
+/** The owner's comparison; NotFoundError when it is not theirs. */
+export async function getComparison(db: Knex, ownerId: string, id: string): Promise<SavedComparison> {
+  const comparison = await findComparison(db, ownerId, id);
+  if (!comparison) throw new NotFoundError(NOT_FOUND);
+  return comparison;
 }
 
 /** A comparison may only be tied to one of the owner's own garage vehicles. */
 async function assertOwnVehicle(db: Knex, ownerId: string, vehicleId: string | null | undefined): Promise<void> {
   if (!vehicleId) return;
   if (!(await findVehicle(db, ownerId, vehicleId))) {
-    throw new HttpError(422, "Some fields need attention.", { vehicleId: ["That vehicle is not in your garage."] });
+    throw InvalidError.fields({ vehicleId: ["That vehicle is not in your garage."] });
   }
 }
 
@@ -100,7 +87,7 @@ export async function createComparison(
   const [row] = await db<ComparisonRow>("comparisons")
     .insert({ owner_id: ownerId, name: data.name.trim(), input: JSON.stringify(input) as unknown, vehicle_id: data.vehicleId ?? null, ...keyFigureColumns(input) })
     .returning("*");
-  return toSaved({ ...(row as ComparisonRow), share_slug: null, share_created_at: null });
+  return savedComparisonDto({ ...(row as ComparisonRow), share_slug: null, share_created_at: null });
 }
 
 export async function updateComparison(
@@ -108,7 +95,7 @@ export async function updateComparison(
   ownerId: string,
   id: string,
   patch: { name?: string; input?: ComparisonInput; vehicleId?: string | null },
-): Promise<SavedComparison | undefined> {
+): Promise<SavedComparison> {
   const changes: Record<string, unknown> = { updated_at: db.fn.now() };
   if (patch.name !== undefined) changes.name = patch.name.trim();
   if (patch.vehicleId !== undefined) {
@@ -120,15 +107,15 @@ export async function updateComparison(
     Object.assign(changes, { input: JSON.stringify(input), ...keyFigureColumns(input) });
   }
   const n = await db("comparisons").where({ id, owner_id: ownerId }).update(changes);
-  if (n === 0) return undefined;
+  if (n === 0) throw new NotFoundError(NOT_FOUND);
   return getComparison(db, ownerId, id);
 }
 
-/** Deletes a comparison (and its share links); returns the slug that was live, if any, or undefined when not found. */
-export async function deleteComparison(db: Knex, ownerId: string, id: string): Promise<{ liveSlug: string | null } | undefined> {
+/** Deletes a comparison (and its share links); returns the slug that was live, if any. */
+export async function deleteComparison(db: Knex, ownerId: string, id: string): Promise<{ liveSlug: string | null }> {
   return db.transaction(async (trx) => {
     const row = await trx("comparisons").where({ id, owner_id: ownerId }).forUpdate().first("id");
-    if (!row) return undefined;
+    if (!row) throw new NotFoundError(NOT_FOUND);
     const live = await trx<ComparisonShareRow>("comparison_shares").where({ comparison_id: id }).whereNull("revoked_at").first("slug");
     await trx("comparisons").where({ id }).del();
     return { liveSlug: live?.slug ?? null };
@@ -136,9 +123,9 @@ export async function deleteComparison(db: Knex, ownerId: string, id: string): P
 }
 
 /** A copy named "<name> (copy)" without its share link. */
-export async function duplicateComparison(db: Knex, ownerId: string, id: string): Promise<SavedComparison | undefined> {
+export async function duplicateComparison(db: Knex, ownerId: string, id: string): Promise<SavedComparison> {
   const source = await db<ComparisonRow>("comparisons").where({ id, owner_id: ownerId }).first();
-  if (!source) return undefined;
+  if (!source) throw new NotFoundError(NOT_FOUND);
   const suffix = " (copy)";
   const name = source.name.length + suffix.length > 120 ? `${source.name.slice(0, 120 - suffix.length)}${suffix}` : `${source.name}${suffix}`;
   return createComparison(db, ownerId, { name, input: source.input as ComparisonInput, vehicleId: source.vehicle_id });
@@ -151,11 +138,11 @@ export function newShareSlug(): string {
 
 /**
  * Inside a transaction: locks the owner's comparison and revokes its live link. Returns the
- * revoked slug (null when none was live), or undefined when the comparison is not the owner's.
+ * revoked slug (null when none was live); NotFoundError when the comparison is not the owner's.
  */
-async function revokeLive(trx: Knex.Transaction, ownerId: string, id: string): Promise<string | null | undefined> {
+async function revokeLive(trx: Knex.Transaction, ownerId: string, id: string): Promise<string | null> {
   const row = await trx("comparisons").where({ id, owner_id: ownerId }).forUpdate().first("id");
-  if (!row) return undefined;
+  if (!row) throw new NotFoundError(NOT_FOUND);
   const [old] = await trx<ComparisonShareRow>("comparison_shares")
     .where({ comparison_id: id })
     .whereNull("revoked_at")
@@ -166,32 +153,19 @@ async function revokeLive(trx: Knex.Transaction, ownerId: string, id: string): P
 
 /**
  * Makes a new public link; a live one is revoked first (its slug stays dead). Returns the new
- * slug and the one it replaced, or undefined when the comparison is not the owner's.
+ * link and the slug it replaced; NotFoundError when the comparison is not the owner's.
  */
-export async function createShare(db: Knex, ownerId: string, id: string): Promise<{ slug: string; createdAt: string; replaced: string | null } | undefined> {
+export async function createShare(db: Knex, ownerId: string, id: string): Promise<ComparisonShare & { replaced: string | null }> {
   return db.transaction(async (trx) => {
     const replaced = await revokeLive(trx, ownerId, id);
-    if (replaced === undefined) return undefined;
     const [share] = await trx<ComparisonShareRow>("comparison_shares").insert({ comparison_id: id, slug: newShareSlug() }).returning(["slug", "created_at"]);
-    return { slug: share!.slug, createdAt: new Date(share!.created_at).toISOString(), replaced };
+    return { ...comparisonShareDto(share!), replaced };
   });
 }
 
-/** Revokes the live link; returns its slug (null when there was none), or undefined when not the owner's. */
-export async function revokeShare(db: Knex, ownerId: string, id: string): Promise<{ revoked: string | null } | undefined> {
-  return db.transaction(async (trx) => {
-    const revoked = await revokeLive(trx, ownerId, id);
-    return revoked === undefined ? undefined : { revoked };
-  });
-}
-
-/** What a public share page shows: no owner details beyond the comparison itself. */
-export interface SharedComparison {
-  slug: string;
-  name: string;
-  input: ComparisonInput;
-  sharedAt: string;
-  updatedAt: string;
+/** Revokes the live link; returns its slug (null when there was none); NotFoundError when not the owner's. */
+export async function revokeShare(db: Knex, ownerId: string, id: string): Promise<{ revoked: string | null }> {
+  return db.transaction(async (trx) => ({ revoked: await revokeLive(trx, ownerId, id) }));
 }
 
 /**
@@ -212,8 +186,8 @@ export async function findSharedComparison(db: Knex, slug: string): Promise<Shar
     console.error(`share ${slug.slice(0, 4)}…: stored comparison no longer passes the schema`);
     return undefined;
   }
-  return { slug: row.slug, name: row.name, input: parsed.data, sharedAt: new Date(row.shared_at).toISOString(), updatedAt: new Date(row.updated_at).toISOString() };
+  return sharedComparisonDto(row, parsed.data);
 }
 
 /** These queries on the app's database handle, for pages and route handlers. */
-export const comparisonQueries = bindAppDb({ createComparison, createShare, deleteComparison, duplicateComparison, findSharedComparison, getComparison, listComparisons, revokeShare, updateComparison });
+export const comparisonQueries = bindAppDb({ createComparison, createShare, deleteComparison, duplicateComparison, findComparison, findSharedComparison, getComparison, listComparisons, revokeShare, updateComparison });

@@ -49,30 +49,3 @@ export const comparisonIdParams = z.object({ id: z.uuid() });
 
 /** A share slug as the app makes them: base64url of 18 random bytes (144 bits). */
 export const SHARE_SLUG_RE = /^[A-Za-z0-9_-]{24}$/;
-
-
-/** Key figures stored beside the input (computed on the server). */
-export interface ComparisonFigures {
-  currentTire: string;
-  plannedTire: string;
-  diameterChangeMm: number;
-  groundClearanceChangeMm: number;
-  pokeChangeMm: number;
-  scrubChangeMm: number;
-  speedometerErrorPct: number;
-  suggestedRatio: number;
-  warningCount: number;
-}
-
-/** A saved comparison as the API returns it. */
-export interface SavedComparison {
-  id: string;
-  name: string;
-  vehicleId: string | null;
-  input: z.infer<typeof comparisonInputSchema>;
-  figures: ComparisonFigures;
-  /** The live share link, if any. */
-  share: { slug: string; createdAt: string } | null;
-  createdAt: string;
-  updatedAt: string;
-}

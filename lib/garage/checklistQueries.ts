@@ -5,9 +5,10 @@ import { type Checklist, buildChecklist } from "@/lib/garage/checklist";
 import { setupQuery } from "@/lib/garage/links";
 import type { VehicleDetail } from "@/lib/garage/types";
 import type { SetupValues } from "@/lib/setup/schema";
-import { getComparison } from "../comparisons/queries";
-import { findChecklist, saveChecklist, vehicleDetail } from "./queries";
+import { findComparison } from "../comparisons/queries";
+import { findChecklist, getVehicleDetail, saveChecklist } from "./queries";
 import { bindAppDb } from "@/lib/platform/db/bind";
+import { NotFoundError } from "@/lib/platform/errors";
 
 /**
  * What an install checklist is built from: a vehicle of the caller's, and either a saved
@@ -22,19 +23,33 @@ export interface ChecklistSource {
   marginMm?: number | null;
 }
 
-export type ResolvedChecklist =
-  | { ok: true; detail: VehicleDetail; planned: SetupValues; marginMm: number; comparison: { id: string; name: string; input: ComparisonInput } | null; checklist: Checklist }
-  | { ok: false; reason: "vehicle" | "comparison" | "planned" };
+export interface ResolvedChecklist {
+  ok: true;
+  detail: VehicleDetail;
+  planned: SetupValues;
+  marginMm: number;
+  comparison: { id: string; name: string; input: ComparisonInput } | null;
+  checklist: Checklist;
+}
 
-export async function resolveChecklist(db: Knex, userId: string, vehicleId: string, source: ChecklistSource): Promise<ResolvedChecklist> {
-  const detail = await vehicleDetail(db, userId, vehicleId);
-  if (!detail) return { ok: false, reason: "vehicle" };
+/** Neither a saved comparison nor a planned setup was given: there is no checklist to show yet. */
+export interface NoPlannedSetup {
+  ok: false;
+  reason: "planned";
+}
+
+/**
+ * The checklist for a source. NotFoundError when the vehicle is not the caller's, or the saved
+ * comparison is not theirs or is tied to another vehicle.
+ */
+export async function resolveChecklist(db: Knex, userId: string, vehicleId: string, source: ChecklistSource): Promise<ResolvedChecklist | NoPlannedSetup> {
+  const detail = await getVehicleDetail(db, userId, vehicleId);
   let planned = source.planned ?? null;
   let comparison: { id: string; name: string; input: ComparisonInput } | null = null;
   if (source.comparisonId) {
-    const c = await getComparison(db, userId, source.comparisonId);
+    const c = await findComparison(db, userId, source.comparisonId);
     // Someone else's comparison, or one of the caller's tied to another vehicle: not this checklist's.
-    if (!c || c.vehicleId !== vehicleId) return { ok: false, reason: "comparison" };
+    if (!c || c.vehicleId !== vehicleId) throw new NotFoundError("That saved comparison (for this vehicle)");
     comparison = { id: c.id, name: c.name, input: c.input };
     planned = c.input.planned;
   }
@@ -44,13 +59,13 @@ export async function resolveChecklist(db: Knex, userId: string, vehicleId: stri
 }
 
 /** The ticks saved for a resolved checklist. */
-export async function checklistTicks(db: Knex, r: Extract<ResolvedChecklist, { ok: true }>): Promise<string[]> {
+export async function checklistTicks(db: Knex, r: ResolvedChecklist): Promise<string[]> {
   const row = await findChecklist(db, r.detail.vehicle.id, setupQuery("p", r.planned));
   return row?.ticked ?? [];
 }
 
 /** Saves the ticks; ids must be items of this checklist (the handler reports the others). */
-export async function saveChecklistTicks(db: Knex, r: Extract<ResolvedChecklist, { ok: true }>, ticked: string[]): Promise<string[]> {
+export async function saveChecklistTicks(db: Knex, r: ResolvedChecklist, ticked: string[]): Promise<string[]> {
   const row = await saveChecklist(db, {
     vehicleId: r.detail.vehicle.id,
     plannedKey: setupQuery("p", r.planned),

@@ -9,8 +9,10 @@ import type { ClearanceValues, VehicleValues } from "@/lib/garage/schema";
 import type { SetupValues } from "@/lib/setup/schema";
 import type { Vehicle, VehicleClearance, VehicleDetail, VehiclePhoto, WorkspaceVehicle } from "@/lib/garage/types";
 import { bindAppDb } from "@/lib/platform/db/bind";
+import { NotFoundError } from "@/lib/platform/errors";
 
-// Every query here is scoped by the owner's user id; a vehicle of someone else is "not found".
+// Every query here is scoped by the owner's user id; a vehicle of someone else is "not found"
+// (find* returns undefined, the others throw NotFoundError: lib/platform/errors.ts).
 
 export function vehicleDto(r: VehicleRow): Vehicle {
   return {
@@ -124,9 +126,10 @@ export async function findVehicle(db: Knex, userId: string, id: string): Promise
   return db<VehicleRow>("vehicles").where({ id, user_id: userId }).first();
 }
 
-export async function vehicleDetail(db: Knex, userId: string, id: string): Promise<VehicleDetail | null> {
+/** The vehicle with its points and photos; NotFoundError when it is not the owner's. */
+export async function getVehicleDetail(db: Knex, userId: string, id: string): Promise<VehicleDetail> {
   const v = await findVehicle(db, userId, id);
-  if (!v) return null;
+  if (!v) throw new NotFoundError("That vehicle");
   const [clearances, photos] = await Promise.all([
     db<VehicleClearanceRow>("vehicle_clearances").where({ vehicle_id: id }).orderBy("created_at", "asc"),
     db<VehiclePhotoRow>("vehicle_photos").where({ vehicle_id: id }).orderBy("created_at", "asc"),
@@ -139,12 +142,13 @@ export async function createVehicle(db: Knex, userId: string, v: VehicleValues):
   return vehicleDto(row as VehicleRow);
 }
 
-export async function updateVehicle(db: Knex, userId: string, id: string, v: VehicleValues): Promise<Vehicle | null> {
+export async function updateVehicle(db: Knex, userId: string, id: string, v: VehicleValues): Promise<Vehicle> {
   const [row] = await db<VehicleRow>("vehicles")
     .where({ id, user_id: userId })
     .update({ ...columns(v), updated_at: db.fn.now() } as never)
     .returning("*");
-  return row ? vehicleDto(row as VehicleRow) : null;
+  if (!row) throw new NotFoundError("That vehicle");
+  return vehicleDto(row as VehicleRow);
 }
 
 /**
@@ -152,14 +156,13 @@ export async function updateVehicle(db: Knex, userId: string, id: string, v: Veh
  * commits only after the bucket confirmed the objects are gone, so a failure leaves both as
  * they were (apart from objects the store already removed, which it reports as an error).
  */
-export async function deleteVehicle(db: Knex, store: PhotoStore, userId: string, id: string): Promise<boolean> {
-  return db.transaction(async (trx) => {
+export async function deleteVehicle(db: Knex, store: PhotoStore, userId: string, id: string): Promise<void> {
+  await db.transaction(async (trx) => {
     const v = await trx<VehicleRow>("vehicles").where({ id, user_id: userId }).forUpdate().first("id");
-    if (!v) return false;
+    if (!v) throw new NotFoundError("That vehicle");
     const photos = await trx<VehiclePhotoRow>("vehicle_photos").where({ vehicle_id: id }).select("object_key", "thumb_key");
     await trx("vehicles").where({ id }).del();
     await store.deleteMany(photos.flatMap((p) => [p.object_key, p.thumb_key]));
-    return true;
   });
 }
 
@@ -178,17 +181,16 @@ export async function addClearance(db: Knex, vehicleId: string, c: ClearanceValu
   return clearanceDto(row as VehicleClearanceRow);
 }
 
-export async function deleteClearance(db: Knex, store: PhotoStore, userId: string, vehicleId: string, clearanceId: string): Promise<boolean> {
-  return db.transaction(async (trx) => {
+export async function deleteClearance(db: Knex, store: PhotoStore, userId: string, vehicleId: string, clearanceId: string): Promise<void> {
+  await db.transaction(async (trx) => {
     const c = await trx("vehicle_clearances as c")
       .join("vehicles as v", "v.id", "c.vehicle_id")
       .where({ "c.id": clearanceId, "c.vehicle_id": vehicleId, "v.user_id": userId })
       .first("c.id");
-    if (!c) return false;
+    if (!c) throw new NotFoundError("That clearance point");
     const photos = await trx<VehiclePhotoRow>("vehicle_photos").where({ clearance_id: clearanceId }).select("object_key", "thumb_key");
     await trx("vehicle_clearances").where({ id: clearanceId }).del();
     await store.deleteMany(photos.flatMap((p) => [p.object_key, p.thumb_key]));
-    return true;
   });
 }
 
@@ -238,29 +240,28 @@ export async function addPhoto(
   }
 }
 
-/** A photo the caller may see: its owner's, or any for an admin. */
 /** Of these object keys, the ones a photo row still names (as the photo or its thumbnail). */
 export async function referencedPhotoKeys(db: Knex, keys: string[]): Promise<Set<string>> {
   const rows = (await db("vehicle_photos").whereIn("object_key", keys).orWhereIn("thumb_key", keys).select("object_key", "thumb_key")) as { object_key: string; thumb_key: string }[];
   return new Set(rows.flatMap((r) => [r.object_key, r.thumb_key]));
 }
 
+/** A photo the caller may see: its owner's, or any for an admin. */
 export async function findVisiblePhoto(db: Knex, caller: { userId: string; role: Role }, photoId: string): Promise<VehiclePhotoRow | undefined> {
   const q = db("vehicle_photos as p").join("vehicles as v", "v.id", "p.vehicle_id").where("p.id", photoId).select("p.*");
   if (caller.role !== "admin") q.andWhere("v.user_id", caller.userId);
   return (await q.first()) as VehiclePhotoRow | undefined;
 }
 
-export async function deletePhoto(db: Knex, store: PhotoStore, userId: string, photoId: string): Promise<boolean> {
-  return db.transaction(async (trx) => {
+export async function deletePhoto(db: Knex, store: PhotoStore, userId: string, photoId: string): Promise<void> {
+  await db.transaction(async (trx) => {
     const p = (await trx("vehicle_photos as p")
       .join("vehicles as v", "v.id", "p.vehicle_id")
       .where({ "p.id": photoId, "v.user_id": userId })
       .first("p.id", "p.object_key", "p.thumb_key")) as Pick<VehiclePhotoRow, "id" | "object_key" | "thumb_key"> | undefined;
-    if (!p) return false;
+    if (!p) throw new NotFoundError("That photo");
     await trx("vehicle_photos").where({ id: p.id }).del();
     await store.deleteMany([p.object_key, p.thumb_key]);
-    return true;
   });
 }
 
@@ -289,4 +290,4 @@ export async function saveChecklist(
 }
 
 /** These queries on the app's database handle, for pages and route handlers. */
-export const garageQueries = bindAppDb({ addClearance, addPhoto, clearanceBelongs, clearanceCounts, createVehicle, deleteClearance, deletePhoto, deleteVehicle, findVehicle, findVisiblePhoto, listVehicles, updateVehicle, vehicleDetail, workspaceVehicles });
+export const garageQueries = bindAppDb({ addClearance, addPhoto, clearanceBelongs, clearanceCounts, createVehicle, deleteClearance, deletePhoto, deleteVehicle, findVehicle, findVisiblePhoto, getVehicleDetail, listVehicles, updateVehicle, workspaceVehicles });

@@ -4,7 +4,7 @@ import type { Knex } from "knex";
 import type { ShopSettingsRow } from "@/lib/platform/db/types";
 import { type StaffInvite, type TeamMember, staffInviteDto } from "@/lib/shop/api";
 import { hashPassword, verifyPassword } from "@/lib/platform/auth/password";
-import { HttpError } from "@/lib/platform/http/errors";
+import { ConflictError, GoneError, InvalidError, NotFoundError } from "@/lib/platform/errors";
 import { passwordField } from "@/lib/accounts/schema";
 import type { ShopSettings } from "@/lib/shop/schema";
 import { bindAppDb } from "@/lib/platform/db/bind";
@@ -12,11 +12,20 @@ import { bindAppDb } from "@/lib/platform/db/bind";
 export const INVITE_TTL_HOURS = 72;
 const sha256 = (s: string) => createHash("sha256").update(s).digest("hex");
 
-export async function getShop(db: Knex, shopId: string): Promise<ShopSettingsRow | undefined> {
+const SHOP_NOT_FOUND = "Your shop";
+
+export async function findShop(db: Knex, shopId: string): Promise<ShopSettingsRow | undefined> {
   return db<ShopSettingsRow>("shops").where({ id: shopId }).first();
 }
 
-export async function updateShopSettings(db: Knex, shopId: string, s: ShopSettings): Promise<ShopSettingsRow | undefined> {
+/** The shop with its settings; NotFoundError when there is no such shop. */
+export async function getShop(db: Knex, shopId: string): Promise<ShopSettingsRow> {
+  const shop = await findShop(db, shopId);
+  if (!shop) throw new NotFoundError(SHOP_NOT_FOUND);
+  return shop;
+}
+
+export async function updateShopSettings(db: Knex, shopId: string, s: ShopSettings): Promise<ShopSettingsRow> {
   const [row] = await db<ShopSettingsRow>("shops")
     .where({ id: shopId })
     .update({
@@ -32,6 +41,7 @@ export async function updateShopSettings(db: Knex, shopId: string, s: ShopSettin
       updated_at: db.fn.now() as unknown as Date,
     })
     .returning("*");
+  if (!row) throw new NotFoundError(SHOP_NOT_FOUND);
   return row;
 }
 
@@ -76,9 +86,10 @@ export async function createInvite(db: Knex, shopId: string, email: string, invi
   return { token, invite };
 }
 
-export async function revokeInvite(db: Knex, shopId: string, id: string): Promise<boolean> {
+/** Withdraws an open invitation of the shop; NotFoundError when there is none open by that id. */
+export async function revokeInvite(db: Knex, shopId: string, id: string): Promise<void> {
   const n = await db("staff_invites").where({ id, shop_id: shopId }).whereNull("used_at").whereNull("revoked_at").update({ revoked_at: db.fn.now() });
-  return n > 0;
+  if (n === 0) throw new NotFoundError("That invitation");
 }
 
 /** An open invitation by its token, with the shop's name; locked when a transaction is given. */
@@ -94,7 +105,7 @@ export async function findOpenInvite(db: Knex | Knex.Transaction, token: string,
   return (await q) as { id: string; shop_id: string; email: string; expires_at: Date; shop_name: string } | undefined;
 }
 
-const inviteGone = () => new HttpError(410, "This invitation has expired, was withdrawn or was already used. Ask the shop for a new one.");
+const inviteGone = () => new GoneError("This invitation has expired, was withdrawn or was already used. Ask the shop for a new one.");
 
 /**
  * Accepts a staff invitation: the token is consumed in the same transaction that creates the
@@ -108,10 +119,10 @@ export async function acceptInvite(db: Knex, input: { token: string; name?: stri
     let userId: string;
     if (existing) {
       if (!(await verifyPassword(input.password, existing.password_hash))) {
-        throw new HttpError(422, "Some fields need attention.", { password: ["This address already has a Hubface account: enter its password."] });
+        throw InvalidError.fields({ password: ["This address already has a Hubface account: enter its password."] });
       }
       if (existing.role !== "member") {
-        throw new HttpError(409, "This account already belongs to a shop or is an admin account; it cannot join another shop.");
+        throw new ConflictError("This account already belongs to a shop or is an admin account; it cannot join another shop.");
       }
       await trx("users").where({ id: existing.id }).update({ role: "shop_staff", shop_id: invite.shop_id, updated_at: trx.fn.now() });
       userId = existing.id;
@@ -120,7 +131,7 @@ export async function acceptInvite(db: Knex, input: { token: string; name?: stri
       const fieldErrors: Record<string, string[]> = {};
       if (!input.name) fieldErrors.name = ["Enter your name."];
       if (!pw.success) fieldErrors.password = [pw.error.issues[0]?.message ?? "Choose a longer password."];
-      if (Object.keys(fieldErrors).length) throw new HttpError(422, "Some fields need attention.", fieldErrors);
+      if (Object.keys(fieldErrors).length) throw InvalidError.fields(fieldErrors);
       const [row] = await trx("users")
         .insert({ email: invite.email, name: input.name, password_hash: await hashPassword(input.password), role: "shop_staff", shop_id: invite.shop_id })
         .returning(["id"]);
@@ -133,13 +144,13 @@ export async function acceptInvite(db: Knex, input: { token: string; name?: stri
 
 /**
  * Takes a staff member out of the shop: the account stays, as a member. Owners cannot be
- * removed here. Returns false when no such staff member is in this shop.
+ * removed here. NotFoundError when no such staff member is in this shop.
  */
-export async function removeStaff(db: Knex, shopId: string, userId: string): Promise<boolean> {
+export async function removeStaff(db: Knex, shopId: string, userId: string): Promise<void> {
   const n = await db("users")
     .where({ id: userId, shop_id: shopId, role: "shop_staff" })
     .update({ role: "member", shop_id: null, updated_at: db.fn.now() });
-  return n > 0;
+  if (n === 0) throw new NotFoundError("That staff member");
 }
 
 /** The shop every query of a shop route is scoped by (requireCaller already refused a shop role without one). */
@@ -152,4 +163,4 @@ export const SHOP_ANY = ["shop_staff", "shop_owner"] as const;
 export const SHOP_OWNER = ["shop_owner"] as const;
 
 /** These queries on the app's database handle, for pages and route handlers. */
-export const shopQueries = bindAppDb({ acceptInvite, createInvite, findOpenInvite, getShop, listOpenInvites, listTeam, removeStaff, revokeInvite, updateShopSettings });
+export const shopQueries = bindAppDb({ acceptInvite, createInvite, findOpenInvite, findShop, getShop, listOpenInvites, listTeam, removeStaff, revokeInvite, updateShopSettings });

@@ -1,6 +1,7 @@
 import { NextRequest } from "next/server";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { settleAfterResponse } from "@/lib/platform/http/afterResponse";
+import { internalKeys } from "./support/apiKeys";
 import { rebuild, testDb } from "./support/db";
 
 // Mail goes nowhere here; the browser tests cover the real SMTP path.
@@ -45,6 +46,17 @@ describe("sign-up route", () => {
     const row = await db("users").where({ email: "wren@example.test" }).first();
     expect(row.password_hash).toMatch(/^\$2[aby]\$/);
     expect(row.role).toBe("member");
+  });
+
+  it("answers the new account in API shape: no hash, no snake_case, ISO dates", async () => {
+    const res = await signup(post("/api/account/signup", { name: "Ines Marlow", email: "ines@example.test", password: "correct horse battery" }), ctx);
+    expect(res.status).toBe(201);
+    const body = await res.json();
+    expect(internalKeys(body)).toEqual([]);
+    const row = await db("users").where({ email: "ines@example.test" }).first();
+    // The keys the answer had before keep their values.
+    expect(body).toMatchObject({ id: row.id, email: "ines@example.test", name: "Ines Marlow" });
+    expect(body).toEqual({ id: row.id, email: "ines@example.test", name: "Ines Marlow", role: "member", shopId: null, createdAt: new Date(row.created_at).toISOString(), updatedAt: new Date(row.updated_at).toISOString() });
   });
 
   it("gives field errors for a bad e-mail and a short password, and writes nothing", async () => {

@@ -1,6 +1,7 @@
 import { NextRequest } from "next/server";
 import { afterAll, beforeAll, beforeEach, describe, expect, it, vi } from "vitest";
 import { DEFAULT_INPUT, type ComparisonInput } from "@/lib/comparisons/schema";
+import { internalKeys } from "./support/apiKeys";
 import { rebuild, testDb } from "./support/db";
 
 // The session is whoever the test says; revalidatePath is recorded (no Next server here).
@@ -37,6 +38,7 @@ const list = await import("@/app/api/comparisons/route");
 const one = await import("@/app/api/comparisons/[id]/route");
 const dup = (await import("@/app/api/comparisons/[id]/duplicate/route")).POST;
 const share = await import("@/app/api/comparisons/[id]/share/route");
+const me = (await import("@/app/api/me/route")).GET;
 const { findSharedComparison } = await import("@/lib/comparisons/queries");
 const { computeComparison } = await import("@/lib/comparisons/compute");
 
@@ -248,5 +250,50 @@ describe("share links", () => {
     await db("comparison_shares").insert({ comparison_id: c.id, slug: "A".repeat(24) });
     await expect(db("comparison_shares").insert({ comparison_id: c.id, slug: "B".repeat(24) })).rejects.toThrow(/comparison_shares_one_live/);
     await expect(db("comparison_shares").insert({ comparison_id: c.id, slug: "has space in it and is long", revoked_at: new Date() })).rejects.toThrow(/slug_urlsafe/);
+  });
+});
+
+describe("answers in API shape (camelCase, ISO dates, no owner id)", () => {
+  const ISO = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}\.\d{3}Z$/;
+
+  it("every comparisons route", async () => {
+    const created = await list.POST(req("POST", "/api/comparisons", { name: "Shape check", input: DEFAULT_INPUT }), noParams);
+    const body = await created.json();
+    expect(internalKeys(body)).toEqual([]);
+    const id = body.comparison.id as string;
+    expect(body.comparison.createdAt).toMatch(ISO);
+    expect(body.comparison).not.toHaveProperty("ownerId");
+    const answers = {
+      list: await (await list.GET(req("GET", "/api/comparisons"), noParams)).json(),
+      get: await (await one.GET(req("GET", `/api/comparisons/${id}`), idParams(id))).json(),
+      patch: await (await one.PATCH(req("PATCH", `/api/comparisons/${id}`, { name: "Shape check 2" }), idParams(id))).json(),
+      duplicate: await (await dup(req("POST", `/api/comparisons/${id}/duplicate`), idParams(id))).json(),
+      share: await (await share.POST(req("POST", `/api/comparisons/${id}/share`), idParams(id))).json(),
+      shareRow: await db("comparison_shares").where({ comparison_id: id }).whereNull("revoked_at").first(),
+      shared: await (await one.GET(req("GET", `/api/comparisons/${id}`), idParams(id))).json(),
+      revoke: await (await share.DELETE(req("DELETE", `/api/comparisons/${id}/share`), idParams(id))).json(),
+      delete: await (await one.DELETE(req("DELETE", `/api/comparisons/${id}`), idParams(id))).json(),
+    };
+    const { shareRow, ...answered } = answers;
+    for (const [route, answer] of Object.entries(answered)) expect(internalKeys(answer), route).toEqual([]);
+    expect(answers.share.share.createdAt).toMatch(ISO);
+    expect(answers.share.share.slug).toBe(shareRow.slug);
+    expect(answers.share.share.createdAt).toBe(new Date(shareRow.created_at).toISOString());
+    expect(answers.shared.comparison.share).toEqual({ slug: answers.share.share.slug, createdAt: answers.share.share.createdAt });
+  });
+
+  it("the public share lookup", async () => {
+    const c = await create("Shared shape");
+    const { share: s } = await (await share.POST(req("POST", `/api/comparisons/${c.id}/share`), idParams(c.id))).json();
+    const found = await findSharedComparison(db, s.slug);
+    expect(internalKeys(found)).toEqual([]);
+    expect(found!.sharedAt).toMatch(ISO);
+  });
+
+  it("/api/me: who the session says, nothing more", async () => {
+    const res = await me(req("GET", "/api/me"), noParams);
+    const body = await res.json();
+    expect(internalKeys(body)).toEqual([]);
+    expect(body).toEqual({ id: OWNER, name: "Tester", email: `${OWNER.slice(-2)}@example.test`, role: "member", shopId: null });
   });
 });

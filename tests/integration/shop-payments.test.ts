@@ -25,7 +25,7 @@ const act = (await import("@/app/api/q/[token]/route")).POST;
 const quotes = await import("@/app/api/shop/quotes/route");
 const sendRoute = (await import("@/app/api/shop/quotes/[id]/send/route")).POST;
 const customers = await import("@/app/api/shop/customers/route");
-const { publicQuoteView } = await import("@/lib/shop/quotes/send");
+const { findPublicQuoteView } = await import("@/lib/shop/quotes/send");
 
 /** Forwards the fake's webhook calls into the route handler, keeping what was delivered. */
 const delivered: { body: string; signature: string; status: number; answer: unknown }[] = [];
@@ -196,7 +196,7 @@ describe("deposit through the payment SDK and the fake provider", () => {
     await db("quotes").where({ id: fourth.id }).update({ valid_until: db.raw("now() - interval '1 second'") });
     expect((await action(fourth.token, "accept")).status).toBe(409);
     // Shown as expired at once; the row itself is written by the scheduled expiry job (tests/integration/jobs.test.ts).
-    expect((await publicQuoteView(db, fourth.token))!.quote.status).toBe("expired");
+    expect((await findPublicQuoteView(db, fourth.token))!.quote.status).toBe("expired");
     expect((await quoteRow(fourth.id)).status).toBe("sent");
   });
 
@@ -213,7 +213,7 @@ describe("deposit through the payment SDK and the fake provider", () => {
       expect(paid.status).toBe(303);
       const row = await quoteRow(q.id);
       expect(row.status).toBe("deposit_paid");
-      const view = await publicQuoteView(db, q.token);
+      const view = await findPublicQuoteView(db, q.token);
       // 4307.82 − 1076.96 = 3230.86 (the quote of shop-quotes.test.ts; deposit 25 % half a cent up).
       expect(view!.document.totals).toMatchObject({ totalCents: 430782, depositCents: 107696, balanceCents: 323086 });
       expect(view!.document.shop.name).toBe("Shop A");

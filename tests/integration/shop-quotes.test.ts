@@ -248,7 +248,7 @@ describe("sending", () => {
 
 /* ---- every figure right: fractional hours, any catalog item, the wheel on the hub, balance, frozen documents ---- */
 
-const { publicQuoteView } = await import("@/lib/shop/quotes/send");
+const { findPublicQuoteView } = await import("@/lib/shop/quotes/send");
 const money = (c: number) => "$" + (c / 100).toLocaleString("en-US", { minimumFractionDigits: 2 });
 /** Zod's own wording, which must never reach a person. */
 const RAW = /Invalid input|expected \w+, received|Too (big|small)|Invalid (UUID|option|string|number)|Required$/;
@@ -376,7 +376,7 @@ describe("balance due after the deposit", () => {
     const pdf = await pdfText(sent[0]!.attachments![0]!.content);
     expect(pdf).toMatch(new RegExp(`Balance due after the deposit\\s*\\${money(balance)}`));
     const token = /\/q\/([A-Za-z0-9_-]{43})/.exec(sent[0]!.text)![1]!;
-    const view = await publicQuoteView(db, token);
+    const view = await findPublicQuoteView(db, token);
     expect(view!.document.totals.balanceCents).toBe(balance);
   });
 });
@@ -393,11 +393,11 @@ describe("a sent quote is a frozen document", () => {
       expect(pdf).toContain("Shop A");
       expect(pdf).toContain("1 Test Lane");
       expect(pdf).not.toContain("Renamed Rims");
-      const view = await publicQuoteView(db, token);
+      const view = await findPublicQuoteView(db, token);
       expect(view!.document.shop).toEqual({ name: "Shop A", address: "1 Test Lane", phone: "555-0100" });
       // A catalog price change does not reach the sent lines either.
       await db("catalog_items").where({ shop_id: SHOP_A, sku: "TR-EXAMPLE-35" }).update({ description: "Renamed tire" });
-      expect((await publicQuoteView(db, token))!.document.lines[0]!.description).not.toBe("Renamed tire");
+      expect((await findPublicQuoteView(db, token))!.document.lines[0]!.description).not.toBe("Renamed tire");
       // Back to draft the live shop is shown again; sending again freezes the new one.
       await status(req("POST", `/api/shop/quotes/${id}/status`, { to: "draft" }), ctx({ id }));
       sent.length = 0;

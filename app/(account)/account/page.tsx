@@ -15,7 +15,7 @@ export const metadata: Metadata = { title: "Your account" };
 export default async function AccountPage({ searchParams }: { searchParams: Promise<{ welcome?: string }> }) {
   const caller = await requirePageCaller("/account");
   const [user, sp] = await Promise.all([userQueries.findUserById(caller.userId), searchParams]);
-  const shop = caller.shopId ? await shopQueries.getShop(caller.shopId) : null;
+  const shop = caller.shopId ? await shopQueries.findShop(caller.shopId) : null;
   const can = ROLE_SUMMARY[caller.role];
   return (
     <>

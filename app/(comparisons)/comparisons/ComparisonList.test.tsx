@@ -6,7 +6,7 @@ import type { ReactNode } from "react";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { keyFigures } from "@/lib/comparisons/keyFigures";
 import { DEFAULT_INPUT } from "@/lib/comparisons/schema";
-import type { SavedComparison } from "@/lib/comparisons/savedSchema";
+import type { SavedComparison } from "@/lib/comparisons/api";
 import { ComparisonList, workspaceHref } from "./ComparisonList";
 
 vi.mock("next/link", () => ({ default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => <a href={href} {...rest}>{children}</a> }));

@@ -12,7 +12,8 @@ import { api } from "@/lib/platform/client/api";
 import { type DisplayPrefs, formatLen, formatNumber } from "@/lib/comparisons/format";
 import { readingPhrase } from "@/lib/comparisons/speedometer";
 import { encodeComparison } from "@/lib/comparisons/url";
-import { COMPARISON_SORTS, COMPARISON_SORT_LABEL, type ComparisonSort, type SavedComparison, comparisonNameSchema } from "@/lib/comparisons/savedSchema";
+import type { ComparisonShare, SavedComparison } from "@/lib/comparisons/api";
+import { COMPARISON_SORTS, COMPARISON_SORT_LABEL, type ComparisonSort, comparisonNameSchema } from "@/lib/comparisons/savedSchema";
 
 type ListData = SavedComparison[];
 const LIST_KEY = ["comparisons"] as const;
@@ -283,7 +284,7 @@ function ShareControls({ c }: { c: SavedComparison }) {
   const inputId = useId();
   const done = () => qc.invalidateQueries({ queryKey: LIST_KEY });
   const create = useMutation({
-    mutationFn: () => api<{ share: { slug: string } }>(`/api/comparisons/${c.id}/share`, { method: "POST" }),
+    mutationFn: () => api<{ share: ComparisonShare }>(`/api/comparisons/${c.id}/share`, { method: "POST" }),
     onMutate: () => setError(null),
     onError: (e) => setError((e as Error).message),
     onSettled: done,

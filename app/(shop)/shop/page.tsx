@@ -13,7 +13,7 @@ export default async function ShopPage() {
   const caller = await requirePageCaller("/shop", ["shop_staff", "shop_owner"]);
   // Scoped by the session's shop id: nobody sees another shop's people.
   const shopId = shopIdOf(caller);
-  const [shop, people] = await Promise.all([shopQueries.getShop(shopId), shopQueries.listTeam(shopId)]);
+  const [shop, people] = await Promise.all([shopQueries.findShop(shopId), shopQueries.listTeam(shopId)]);
   return (
     <>
       <PageHeader

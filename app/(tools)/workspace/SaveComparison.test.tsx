@@ -7,7 +7,7 @@ import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
 import { keyFigures } from "@/lib/comparisons/keyFigures";
 import { type ComparisonInput, DEFAULT_INPUT } from "@/lib/comparisons/schema";
 import { encodeComparison } from "@/lib/comparisons/url";
-import type { SavedComparison } from "@/lib/comparisons/savedSchema";
+import type { SavedComparison } from "@/lib/comparisons/api";
 import { SaveComparison } from "./SaveComparison";
 import { Workspace } from "./Workspace";
 

@@ -14,7 +14,8 @@ import { inputFieldLabel } from "@/lib/comparisons/fields";
 import type { DisplayPrefs } from "@/lib/comparisons/format";
 import type { ComparisonInput } from "@/lib/comparisons/schema";
 import { encodeComparison } from "@/lib/comparisons/url";
-import { type SavedComparison, comparisonNameSchema } from "@/lib/comparisons/savedSchema";
+import type { SavedComparison } from "@/lib/comparisons/api";
+import { comparisonNameSchema } from "@/lib/comparisons/savedSchema";
 import { type OpenedComparison, useCurrentInput, withParam } from "./currentInput";
 import { useLeaveGuard } from "@/components/feedback/useLeaveGuard";
 

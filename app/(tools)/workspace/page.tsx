@@ -18,7 +18,7 @@ export const metadata: Metadata = {
 async function openedFrom(userId: string | undefined, raw: string | string[] | undefined) {
   const id = z.uuid().safeParse(Array.isArray(raw) ? raw[0] : raw);
   if (!userId || !id.success) return null;
-  const c = await comparisonQueries.getComparison(userId, id.data).catch(() => undefined);
+  const c = await comparisonQueries.findComparison(userId, id.data).catch(() => undefined);
   return c ? { id: c.id, name: c.name, vehicleId: c.vehicleId, input: c.input } : null;
 }
 

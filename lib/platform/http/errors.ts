@@ -1,4 +1,8 @@
-/** An error that route handlers turn into a JSON response with this status. */
+/**
+ * An error of the request itself (its body, its origin, its session, its rate) that route()
+ * turns into a JSON response with this status. What a feature refuses — a missing record, a
+ * conflict, a rule the input breaks — is a domain error instead (lib/platform/errors.ts).
+ */
 export class HttpError extends Error {
   constructor(
     public readonly status: number,
@@ -13,7 +17,6 @@ export class HttpError extends Error {
 
 export const unauthorized = () => new HttpError(401, "Sign in to do this.");
 export const forbidden = () => new HttpError(403, "Your account's role does not allow this.");
-export const notFound = (what = "That item") => new HttpError(404, `${what} was not found.`);
 
 /*
  * People never see a validator's own wording ("Invalid input: expected number, received

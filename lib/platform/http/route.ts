@@ -7,6 +7,7 @@ import { isDependencyUnavailable } from "@/lib/platform/http/dependency";
 import { currentRequestId, log, noteUser } from "@/lib/platform/log";
 import { type Access, type Caller, currentCaller, requireCaller } from "@/lib/platform/auth/session";
 import { FitmentInputError } from "@/lib/fitment";
+import { ConflictError, DomainError, GoneError, InvalidError, NotFoundError, SOME_FIELDS, UnknownReferenceError } from "@/lib/platform/errors";
 import { readCappedBytes } from "./body";
 import { bodyHash, idempotencyKeyOf, runOnce } from "./idempotency";
 import { assertNoNul } from "./nul";
@@ -99,7 +100,7 @@ export const humanIssue = (issue: unknown) => fallbackMessage(issue as IssueLike
 
 function parse<T extends z.ZodType>(schema: T, value: unknown, status: number): z.infer<T> {
   const result = schema.safeParse(value, { error: humanIssue });
-  if (!result.success) throw new HttpError(status, "Some fields need attention.", fieldErrorsOf(result.error));
+  if (!result.success) throw new HttpError(status, SOME_FIELDS, fieldErrorsOf(result.error));
   return result.data;
 }
 
@@ -161,15 +162,36 @@ export function route<
   };
 }
 
+/**
+ * The status of each domain error (lib/platform/errors.ts): this and pageGuard are the only
+ * places a domain error becomes HTTP. A kind missing here is a mistake, answered as a 500.
+ */
+function domainStatus(error: DomainError): number | null {
+  if (error instanceof NotFoundError) return 404;
+  if (error instanceof ConflictError) return 409;
+  if (error instanceof InvalidError) return 422;
+  if (error instanceof GoneError) return 410;
+  if (error instanceof UnknownReferenceError) return 400;
+  return null;
+}
+
+/** `{ error, fieldErrors? }`: messages about a row say which row, counted from 1. */
+const errorBody = (message: string, fieldErrors?: Record<string, string[]>) => ({ error: message, ...(fieldErrors ? { fieldErrors: withRows(fieldErrors) } : {}) });
+
 export function errorResponse(error: unknown): Response {
   if (error instanceof HttpError) {
-    return json({ error: error.message, ...(error.fieldErrors ? { fieldErrors: withRows(error.fieldErrors) } : {}) }, { status: error.status, headers: error.headers });
+    return json(errorBody(error.message, error.fieldErrors), { status: error.status, headers: error.headers });
+  }
+  const status = error instanceof DomainError ? domainStatus(error) : null;
+  if (error instanceof DomainError && status !== null) {
+    const fieldErrors = error instanceof InvalidError ? error.fieldErrors : undefined;
+    return json({ ...error.details, ...errorBody(error.message, fieldErrors) }, status);
   }
   if (error instanceof FitmentInputError) {
     // The engine refused a value the schemas let through: a 422 on that field, in words, not a 500.
     const { row, field } = fieldPlace(error.field.split("."));
     const message = `${row ? `${row}: c` : "C"}heck the ${field || "values entered"}: Hubface cannot work with it.`;
-    return json({ error: "Some fields need attention.", fieldErrors: { [error.field]: [message] } }, 422);
+    return json({ error: SOME_FIELDS, fieldErrors: { [error.field]: [message] } }, 422);
   }
   // The request's id (scripts/serve.ts), so the reference a person reads finds every log line of the request.
   const ref = currentRequestId() ?? randomUUID().slice(0, 8);

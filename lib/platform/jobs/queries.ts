@@ -1,6 +1,6 @@
 import "server-only";
 import type { Knex } from "knex";
-import { notFound } from "@/lib/platform/http/errors";
+import { NotFoundError } from "@/lib/platform/errors";
 import { bindAppDb } from "@/lib/platform/db/bind";
 import { JOB_SCHEMA, getBoss, isKnownQueue } from "@/lib/platform/jobs/boss";
 import type { ProblemJob } from "@/lib/platform/jobs/problemJob";
@@ -48,7 +48,7 @@ export async function listProblemJobs(db: Knex, limit = 200): Promise<ProblemJob
  */
 export async function retryJob(db: Knex, id: string): Promise<void> {
   const row = await db.withSchema(JOB_SCHEMA).from("job").where({ id }).whereIn("state", ["retry", "failed"]).first("name", "state");
-  if (!row || !isKnownQueue(row.name)) throw notFound("That job");
+  if (!row || !isKnownQueue(row.name)) throw new NotFoundError("That job");
   if (row.state === "failed") {
     const boss = await getBoss();
     await boss.retry(row.name, id);

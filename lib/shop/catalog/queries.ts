@@ -7,6 +7,7 @@ import type { CatalogInput, CsvReport } from "@/lib/shop/catalog/csv";
 import { containsPattern, searchKey } from "@/lib/platform/search/normalize";
 import { withoutSearchKey } from "../../platform/search/searchKeyColumn";
 import { bindAppDb } from "@/lib/platform/db/bind";
+import { ConflictError, NotFoundError } from "@/lib/platform/errors";
 
 export const CATALOG_SORTS = ["sku", "description", "price_cents", "qty_on_hand", "kind", "tire_diameter_mm", "updated_at"] as const;
 export type CatalogSort = (typeof CATALOG_SORTS)[number];
@@ -97,18 +98,29 @@ export async function stageImport(db: Knex, shopId: string, userId: string, file
 /** How long a preview may wait for confirmation. */
 export const STAGED_IMPORT_TTL_MINUTES = 60;
 
-export async function findStagedImport(db: Knex, shopId: string, id: string) {
+const ALREADY_CONFIRMED = "This import was already confirmed.";
+
+/** The shop's preview, if it is younger than STAGED_IMPORT_TTL_MINUTES (confirmed or not). */
+async function findStagedImport(db: Knex, shopId: string, id: string) {
   return db<CatalogImportRow>("catalog_imports")
     .where({ id, shop_id: shopId })
     .andWhere("created_at", ">", db.raw("now() - make_interval(mins => ?)", [STAGED_IMPORT_TTL_MINUTES]))
     .first("id", "status", "row_count");
 }
 
+/** A preview still waiting for confirmation: NotFoundError when missing or too old, ConflictError when already confirmed. */
+export async function getStagedImport(db: Knex, shopId: string, id: string) {
+  const staged = await findStagedImport(db, shopId, id);
+  if (!staged) throw new NotFoundError("That import preview");
+  if (staged.status !== "staged") throw new ConflictError(ALREADY_CONFIRMED);
+  return staged;
+}
+
 export const IMPORT_BATCH = 500;
 
 /**
  * Upserts a staged import by SKU in one transaction: every row or none. `onProgress` is called
- * after each batch. Returns null when the import is not (or no longer) staged — a second
+ * after each batch. ConflictError when the import is not (or no longer) staged — a second
  * confirmation waits on the row lock and then finds it committed.
  */
 export async function commitImport(
@@ -116,13 +128,13 @@ export async function commitImport(
   shopId: string,
   id: string,
   onProgress: (done: number, total: number) => void = () => {},
-): Promise<{ imported: number } | null> {
+): Promise<{ imported: number }> {
   return db.transaction(async (trx) => {
     const [staged] = (await trx("catalog_imports")
       .where({ id, shop_id: shopId, status: "staged" })
       .update({ status: "committed", committed_at: trx.fn.now() })
       .returning(["rows"])) as { rows: CatalogInput[] }[];
-    if (!staged) return null;
+    if (!staged) throw new ConflictError(ALREADY_CONFIRMED);
     const rows = staged.rows;
     onProgress(0, rows.length);
     for (let i = 0; i < rows.length; i += IMPORT_BATCH) {
@@ -144,4 +156,4 @@ export async function commitImport(
 }
 
 /** These queries on the app's database handle, for pages and route handlers. */
-export const catalogQueries = bindAppDb({ allCatalogItems, commitImport, findStagedImport, fitmentStock, listCatalog, stageImport });
+export const catalogQueries = bindAppDb({ allCatalogItems, commitImport, fitmentStock, getStagedImport, listCatalog, stageImport });

@@ -5,6 +5,7 @@ import { type Customer, type CustomerVehicle, customerDto, customerVehicleDto } 
 import { containsPattern, searchKey } from "@/lib/platform/search/normalize";
 import type { CustomerInput } from "@/lib/shop/quotes/schema";
 import { bindAppDb } from "@/lib/platform/db/bind";
+import { ConflictError, InvalidError, NotFoundError } from "@/lib/platform/errors";
 
 export const phoneDigits = (phone: string) => phone.replace(/\D/g, "");
 
@@ -33,7 +34,7 @@ export async function searchCustomers(db: Knex, shopId: string, q: string): Prom
 }
 
 /** An existing customer of this shop with the same phone digits or e-mail. */
-export async function findDuplicateCustomer(db: Knex, shopId: string, c: CustomerInput): Promise<Customer | undefined> {
+async function findDuplicateCustomer(db: Knex, shopId: string, c: CustomerInput): Promise<Customer | undefined> {
   const digits = phoneDigits(c.phone);
   const row = await db<CustomerRow>("customers")
     .where({ shop_id: shopId })
@@ -45,16 +46,25 @@ export async function findDuplicateCustomer(db: Knex, shopId: string, c: Custome
   return row && customerDto(row);
 }
 
+/**
+ * A new customer of the shop. One with the same phone digits or e-mail is a ConflictError that
+ * carries the existing customer (`existing`), so the counter can pick them instead.
+ */
 export async function createCustomer(db: Knex, shopId: string, c: CustomerInput): Promise<Customer> {
+  const existing = await findDuplicateCustomer(db, shopId, c);
+  if (existing) throw new ConflictError(`${existing.name} already has this phone number or e-mail. Pick the existing customer.`, { existing });
+  if (!c.phone && !c.email) throw new InvalidError("Enter a phone number or an e-mail address.");
   const [row] = await db<CustomerRow>("customers")
     .insert({ shop_id: shopId, name: c.name, phone: c.phone, phone_digits: phoneDigits(c.phone), email: c.email })
     .returning("*");
   return customerDto(row!);
 }
 
-export async function getCustomer(db: Knex, shopId: string, id: string): Promise<Customer | undefined> {
+/** The shop's customer; NotFoundError when it is not this shop's. */
+export async function getCustomer(db: Knex, shopId: string, id: string): Promise<Customer> {
   const row = await db<CustomerRow>("customers").where({ id, shop_id: shopId }).first();
-  return row && customerDto(row);
+  if (!row) throw new NotFoundError("That customer");
+  return customerDto(row);
 }
 
 export async function listVehicles(db: Knex, shopId: string, customerId: string): Promise<CustomerVehicle[]> {
@@ -62,4 +72,4 @@ export async function listVehicles(db: Knex, shopId: string, customerId: string)
 }
 
 /** These queries on the app's database handle, for pages and route handlers. */
-export const customerQueries = bindAppDb({ createCustomer, findDuplicateCustomer, getCustomer, listVehicles, searchCustomers });
+export const customerQueries = bindAppDb({ createCustomer, getCustomer, listVehicles, searchCustomers });

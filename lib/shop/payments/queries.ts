@@ -2,7 +2,7 @@ import "server-only";
 import type { Knex } from "knex";
 import type { PaymentEvent } from "@/lib/shop/payments/schema";
 import type { PaymentRow, QuoteRow } from "@/lib/platform/db/types";
-import { HttpError } from "@/lib/platform/http/errors";
+import { InvalidError, UnknownReferenceError } from "@/lib/platform/errors";
 import { transition } from "../quotes/queries";
 import { bindAppDb } from "@/lib/platform/db/bind";
 
@@ -11,8 +11,8 @@ export type WebhookOutcome = "deposit_paid" | "duplicate" | "already_paid" | "pa
 /**
  * Applies one verified provider event. Idempotent: the event id is stored in the same
  * transaction as its effect, so a replayed or duplicated event changes nothing. A session the
- * app never created, or an amount, currency or quote that does not match, is refused with a
- * 4xx and nothing is written.
+ * app never created is an UnknownReferenceError, an amount, currency or quote that does not
+ * match an InvalidError; nothing is written then.
  */
 export async function applyPaymentEvent(db: Knex, event: PaymentEvent): Promise<WebhookOutcome> {
   if (event.type !== "checkout.session.completed") {
@@ -25,15 +25,15 @@ export async function applyPaymentEvent(db: Knex, event: PaymentEvent): Promise<
     const first = await trx("payment_webhook_events").insert({ event_id: event.id, type: event.type, outcome: "pending" }).onConflict("event_id").ignore().returning("event_id");
     if (first.length === 0) return "duplicate";
     const payment = await trx<PaymentRow>("payments").where({ provider_session_id: session.id }).forUpdate().first();
-    if (!payment) throw new HttpError(400, "Unknown checkout session.");
+    if (!payment) throw new UnknownReferenceError("Unknown checkout session.");
     const quote = await trx<QuoteRow>("quotes").where({ id: payment.quote_id, shop_id: payment.shop_id }).forUpdate().first();
-    if (!quote) throw new HttpError(400, "Unknown quote.");
-    if (session.metadata?.quote_id !== quote.id || session.client_reference_id !== quote.id) throw new HttpError(422, "The event names another quote than its session.");
-    if ((session.currency ?? "").toLowerCase() !== "usd") throw new HttpError(422, "Deposits are taken in USD.");
+    if (!quote) throw new UnknownReferenceError("Unknown quote.");
+    if (session.metadata?.quote_id !== quote.id || session.client_reference_id !== quote.id) throw new InvalidError("The event names another quote than its session.");
+    if ((session.currency ?? "").toLowerCase() !== "usd") throw new InvalidError("Deposits are taken in USD.");
     if (session.amount_total !== payment.amount_cents || payment.amount_cents !== quote.deposit_cents) {
-      throw new HttpError(422, `The paid amount ${session.amount_total} does not match the quote's deposit ${quote.deposit_cents}.`);
+      throw new InvalidError(`The paid amount ${session.amount_total} does not match the quote's deposit ${quote.deposit_cents}.`);
     }
-    if (session.payment_status !== "paid") throw new HttpError(422, "The session is not paid.");
+    if (session.payment_status !== "paid") throw new InvalidError("The session is not paid.");
     let outcome: WebhookOutcome;
     if (payment.status === "paid") outcome = "already_paid";
     else {

@@ -3,7 +3,7 @@ import { STATUS_LABEL } from "@/lib/shop/quotes/status";
 import { createHash, randomBytes } from "node:crypto";
 import type { Knex } from "knex";
 import type { CatalogItemRow, QuoteEventRow, QuoteLineRow, QuoteLineUnit, QuoteRow, QuoteStatus, ServiceType } from "@/lib/platform/db/types";
-import { HttpError, notFound } from "@/lib/platform/http/errors";
+import { ConflictError, InvalidError, NotFoundError } from "@/lib/platform/errors";
 import { type QuoteListItem, type QuoteListRow, quoteListItemDto } from "@/lib/shop/quotes/api";
 import { type HubCheck, type QuoteDocument, buildQuoteDocument, hubChecksOf } from "@/lib/shop/quotes/document";
 import { type FitmentSummary, summarize } from "@/lib/shop/quotes/fitment";
@@ -30,7 +30,7 @@ export interface Actor {
 
 const sha256 = (s: string) => createHash("sha256").update(s).digest("hex");
 
-/** Allowed moves; anything else is a 409. */
+/** Allowed moves; anything else is a ConflictError. */
 const TRANSITIONS: Record<QuoteStatus, QuoteStatus[]> = {
   draft: ["sent"],
   sent: ["sent", "draft", "accepted", "declined", "expired"],
@@ -46,7 +46,7 @@ export { STATUS_LABEL };
 /** Moves a quote (locked by the caller's transaction) to `to`, recording who and when. */
 export async function transition(trx: Knex.Transaction, quote: Pick<QuoteRow, "id" | "status">, to: QuoteStatus, actor: Actor, note = "", extra: Partial<QuoteRow> = {}) {
   if (!TRANSITIONS[quote.status].includes(to)) {
-    throw new HttpError(409, `A quote that is ${STATUS_LABEL[quote.status].toLowerCase()} cannot become ${STATUS_LABEL[to].toLowerCase()}.`);
+    throw new ConflictError(`A quote that is ${STATUS_LABEL[quote.status].toLowerCase()} cannot become ${STATUS_LABEL[to].toLowerCase()}.`);
   }
   await trx("quotes").where({ id: quote.id }).update({ ...extra, status: to, updated_at: trx.fn.now() });
   await trx("quote_events").insert({ quote_id: quote.id, from_status: quote.status, to_status: to, actor_user_id: actor.userId, actor: actor.label, note });
@@ -94,11 +94,12 @@ function scoped(db: Knex | Knex.Transaction, scope: QuoteScope) {
   return q;
 }
 
-export async function findQuote(db: Knex | Knex.Transaction, scope: QuoteScope, id: string, lock = false): Promise<QuoteRow> {
+/** A quote in the caller's scope (locked when asked, inside a transaction); NotFoundError outside it. */
+export async function getQuote(db: Knex | Knex.Transaction, scope: QuoteScope, id: string, lock = false): Promise<QuoteRow> {
   const q = scoped(db, scope).andWhere("quotes.id", id).first();
   if (lock) q.forUpdate();
   const row = (await q) as QuoteRow | undefined;
-  if (!row) throw notFound("That quote");
+  if (!row) throw new NotFoundError("That quote");
   return withEffectiveStatus(row);
 }
 
@@ -137,7 +138,7 @@ export async function quoteDetail(db: Knex, quote: QuoteRow): Promise<QuoteRecor
 }
 
 export async function getQuoteDetail(db: Knex, scope: QuoteScope, id: string): Promise<QuoteRecord> {
-  return quoteDetail(db, await findQuote(db, scope, id));
+  return quoteDetail(db, await getQuote(db, scope, id));
 }
 
 export async function listQuotes(db: Knex, scope: QuoteScope, opts: { status?: QuoteStatus; limit?: number } = {}): Promise<QuoteListItem[]> {
@@ -199,7 +200,7 @@ function totalsOf(lines: LineDraft[], discountCents: number, taxRateBp: number, 
     });
   } catch (e) {
     // The error's field is the request's own path (lines.3.discountCents), so the screen can name it.
-    if (e instanceof TotalsError) throw new HttpError(422, e.message, { [e.field]: [e.message] });
+    if (e instanceof TotalsError) throw new InvalidError(e.message, { [e.field]: [e.message] });
     throw e;
   }
 }
@@ -235,12 +236,12 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
   return db.transaction(async (trx) => {
     const shop = await trx("shops").where({ id: shopId }).forUpdate().first("tax_rate_bp", "deposit_pct", "fabrication_rate_cents");
     const customer = await trx("customers").where({ id: input.customerId, shop_id: shopId }).first("id");
-    if (!customer) throw new HttpError(422, "Some fields need attention.", { customerId: ["That customer was not found."] });
+    if (!customer) throw InvalidError.fields({ customerId: ["That customer was not found."] });
     let vehicleId: string | null = input.vehicleId ?? null;
     let v: ReturnType<typeof resolveVehicle>;
     if (input.vehicleId) {
       const saved = await trx("customer_vehicles").where({ id: input.vehicleId, shop_id: shopId, customer_id: input.customerId }).first();
-      if (!saved) throw new HttpError(422, "Some fields need attention.", { vehicleId: ["That vehicle was not found."] });
+      if (!saved) throw InvalidError.fields({ vehicleId: ["That vehicle was not found."] });
       v = {
         description: saved.description,
         boltPattern: saved.bolt_pattern,
@@ -275,10 +276,10 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
     const fe: Record<string, string[]> = {};
     if (!tire) fe.tireItemId = ["That tire is not in your catalog."];
     if (!wheel) fe.wheelItemId = ["That wheel is not in your catalog."];
-    if (!tire || !wheel) throw new HttpError(422, "Some fields need attention.", fe);
-    if (tire.tire_rim_in !== wheel.wheel_diameter_in) throw new HttpError(422, `${tire.tire_size} does not mount on a ${wheel.wheel_diameter_in} in wheel.`, { wheelItemId: ["Pick a wheel of the tire's rim diameter."] });
+    if (!tire || !wheel) throw InvalidError.fields(fe);
+    if (tire.tire_rim_in !== wheel.wheel_diameter_in) throw new InvalidError(`${tire.tire_size} does not mount on a ${wheel.wheel_diameter_in} in wheel.`, { wheelItemId: ["Pick a wheel of the tire's rim diameter."] });
     const refusal = hubRefusal(checkWheelOnHub({ boltPattern: v.boltPattern, hubBoreMm: v.hubBoreMm }, { boltPattern: wheel.bolt_pattern, centerBoreMm: wheel.center_bore_mm }));
-    if (refusal) throw new HttpError(422, refusal, { wheelItemId: [`${refusal} Pick another wheel.`] });
+    if (refusal) throw new InvalidError(refusal, { wheelItemId: [`${refusal} Pick another wheel.`] });
 
     const fit = summarize({ boltPattern: v.boltPattern, tireSize: v.tireSize, wheel: v.wheel, axleRatio: v.axleRatio }, tire.tire_size!, {
       diameterIn: wheel.wheel_diameter_in!,
@@ -339,8 +340,8 @@ export interface UpdateQuote {
  */
 export async function updateDraft(db: Knex, scope: QuoteScope, id: string, input: UpdateQuote): Promise<void> {
   await db.transaction(async (trx) => {
-    const quote = await findQuote(trx, scope, id, true);
-    if (quote.status !== "draft") throw new HttpError(409, "Only a draft can be edited. Take the quote back to draft first.");
+    const quote = await getQuote(trx, scope, id, true);
+    if (quote.status !== "draft") throw new ConflictError("Only a draft can be edited. Take the quote back to draft first.");
     const ids = [...new Set(input.lines.map((l) => l.catalogItemId).filter((x): x is string => !!x))];
     const items = new Map<string, CatalogItemRow>();
     if (ids.length) for (const it of await trx<CatalogItemRow>("catalog_items").where({ shop_id: scope.shopId }).whereIn("id", ids)) items.set(it.id, it);
@@ -367,7 +368,7 @@ export async function updateDraft(db: Knex, scope: QuoteScope, id: string, input
         taxable: l.taxable,
       };
     });
-    if (Object.keys(fe).length) throw new HttpError(422, "Some lines need attention.", fe);
+    if (Object.keys(fe).length) throw new InvalidError("Some lines need attention.", fe);
     const totals = totalsOf(lines, input.discountCents, quote.tax_rate_bp, quote.deposit_pct);
     await writeLines(trx, id, lines, totals);
     await trx("quotes").where({ id }).update({ notes: input.notes });
@@ -383,19 +384,19 @@ export async function updateDraft(db: Knex, scope: QuoteScope, id: string, input
 export async function markSent(db: Knex, scope: QuoteScope, id: string, actor: Actor, seenUpdatedAt?: string): Promise<{ token: string; document: QuoteDocument }> {
   const token = randomBytes(32).toString("base64url");
   const document = await db.transaction(async (trx) => {
-    const quote = await findQuote(trx, scope, id, true);
+    const quote = await getQuote(trx, scope, id, true);
     if (seenUpdatedAt && new Date(quote.updated_at).getTime() !== new Date(seenUpdatedAt).getTime()) {
-      throw new HttpError(409, "This quote changed after you opened it (saved from another window or by a colleague). Reload it, check the lines, and send again.");
+      throw new ConflictError("This quote changed after you opened it (saved from another window or by a colleague). Reload it, check the lines, and send again.");
     }
     const customer = await trx("customers").where({ id: quote.customer_id, shop_id: scope.shopId }).first("name", "phone", "email");
-    if (!customer?.email) throw new HttpError(422, "The customer has no e-mail address. Add one before sending.");
+    if (!customer?.email) throw new InvalidError("The customer has no e-mail address. Add one before sending.");
     const shop = await trx("shops").where({ id: scope.shopId }).first("name", "address", "phone", "quote_validity_days");
     await transition(trx, quote, "sent", actor, quote.status === "sent" ? "sent again" : "", {
       public_token_hash: sha256(token),
       valid_until: trx.raw("now() + make_interval(days => ?)", [shop.quote_validity_days]) as unknown as Date,
     });
     const [now, lines, author] = await Promise.all([
-      findQuote(trx, scope, id),
+      getQuote(trx, scope, id),
       readLines(trx, id),
       quote.created_by ? trx("users").where({ id: quote.created_by }).first("name") : null,
     ]);
@@ -415,21 +416,20 @@ export async function latestSentDocument(db: Knex | Knex.Transaction, quoteId: s
 /** Staff moves: back to draft (the link stops working), declined, installed. */
 export async function staffTransition(db: Knex, scope: QuoteScope, id: string, to: "draft" | "declined" | "installed", actor: Actor, note = "") {
   await db.transaction(async (trx) => {
-    const quote = await findQuote(trx, scope, id, true);
+    const quote = await getQuote(trx, scope, id, true);
     await transition(trx, quote, to, actor, note, to === "draft" ? { public_token_hash: null } : {});
   });
 }
 
 /**
- * The customer's answer on their link, in one transaction with the quote locked. False when the
- * link names no quote (nothing is written then).
+ * The customer's answer on their link, in one transaction with the quote locked. NotFoundError
+ * when the link names no quote (nothing is written then).
  */
-export async function answerByToken(db: Knex, token: string, to: "accepted" | "declined", actor: Actor): Promise<boolean> {
-  return db.transaction(async (trx) => {
+export async function answerByToken(db: Knex, token: string, to: "accepted" | "declined", actor: Actor): Promise<void> {
+  await db.transaction(async (trx) => {
     const quote = await findByToken(trx, token, true);
-    if (!quote) return false;
+    if (!quote) throw new NotFoundError("That quote");
     await transition(trx, quote, to, actor);
-    return true;
   });
 }
 

@@ -27,7 +27,7 @@ export async function renderQuotePdf(db: Knex, detail: QuoteRecord): Promise<Buf
 }
 
 /** What the customer's link shows: the live status and the document as sent. */
-export async function publicQuoteView(db: Knex, token: string): Promise<{ quote: QuoteRow; document: QuoteDocument } | undefined> {
+export async function findPublicQuoteView(db: Knex, token: string): Promise<{ quote: QuoteRow; document: QuoteDocument } | undefined> {
   const quote = await findByToken(db, token);
   if (!quote) return undefined;
   return { quote, document: await documentFor(db, { quote, ...(await quoteParties(db, quote)) }) };
@@ -68,4 +68,4 @@ export async function sendQuote(db: Knex, scope: QuoteScope, id: string, actor: 
 }
 
 /** These queries on the app's database handle, for pages and route handlers. */
-export const quoteSendQueries = bindAppDb({ publicQuoteView, renderQuotePdf, sendQuote });
+export const quoteSendQueries = bindAppDb({ findPublicQuoteView, renderQuotePdf, sendQuote });

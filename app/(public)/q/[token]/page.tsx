@@ -17,7 +17,7 @@ export const dynamic = "force-dynamic";
 export default async function PublicQuotePage({ params, searchParams }: { params: Promise<{ token: string }>; searchParams: Promise<{ paid?: string }> }) {
   const { token } = await params;
   const { paid } = await searchParams;
-  const view = await quoteSendQueries.publicQuoteView(token);
+  const view = await quoteSendQueries.findPublicQuoteView(token);
   if (!view) {
     return (
       <Card className="mx-auto max-w-lg">

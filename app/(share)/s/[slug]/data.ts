@@ -1,6 +1,7 @@
 import "server-only";
 import { cache } from "react";
-import { comparisonQueries, type SharedComparison } from "@/lib/comparisons/queries";
+import type { SharedComparison } from "@/lib/comparisons/api";
+import { comparisonQueries } from "@/lib/comparisons/queries";
 import { SHARE_SLUG_RE } from "@/lib/comparisons/savedSchema";
 
 /**

@@ -1,9 +1,9 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { computeComparison } from "@/lib/comparisons/compute";
 import { DEFAULT_PREFS, formatLen, formatNumber, formatSpeedIn } from "@/lib/comparisons/format";
 import { appOrigin } from "@/lib/platform/mail";
+import { pageGuard } from "@/lib/platform/http/pageGuard";
 import { getSharedComparison } from "./data";
 import { ShareOriginProvider } from "./ShareOrigin";
 import { SharedView } from "./SharedView";
@@ -51,8 +51,7 @@ export async function generateMetadata({ params }: Props): Promise<Metadata> {
 
 export default async function SharedComparisonPage({ params }: Props) {
   const { slug } = await params;
-  const share = await getSharedComparison(slug);
-  if (!share) notFound();
+  const share = await pageGuard(getSharedComparison(slug));
   return (
     <>
       <PageHeader

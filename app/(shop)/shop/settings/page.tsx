@@ -2,17 +2,16 @@ import type { Metadata } from "next";
 import { Card } from "@/components/ui/Card";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { requirePageCaller } from "@/lib/platform/auth/session";
+import { pageGuard } from "@/lib/platform/http/pageGuard";
 import { formatBp, formatCents } from "@/lib/shop/quotes/money";
 import { shopIdOf, shopQueries } from "@/lib/shop/queries";
-import { notFound } from "next/navigation";
 import { SettingsForm } from "./SettingsForm";
 
 export const metadata: Metadata = { title: "Shop settings" };
 
 export default async function SettingsPage() {
   const caller = await requirePageCaller("/shop/settings", ["shop_owner"]);
-  const shop = await shopQueries.getShop(shopIdOf(caller));
-  if (!shop) notFound();
+  const shop = await pageGuard(shopQueries.getShop(shopIdOf(caller)));
   return (
     <>
       <PageHeader title="Shop settings" lead="What every quote carries: your shop's header, tax, labour rates, how long a quote holds and the deposit asked." />

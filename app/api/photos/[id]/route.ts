@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { notFound } from "@/lib/platform/http/errors";
+import { NotFoundError } from "@/lib/platform/errors";
 import { route } from "@/lib/platform/http/route";
 import { photoStore } from "@/lib/garage/photos/s3";
 import { garageQueries } from "@/lib/garage/queries";
@@ -14,9 +14,9 @@ const query = z.object({ variant: z.enum(["full", "thumb"]).default("full") });
  */
 export const GET = route({ access: GARAGE_ACCESS, params, query }, async ({ caller, params, query }) => {
   const photo = await garageQueries.findVisiblePhoto(caller, params.id);
-  if (!photo) throw notFound("That photo");
+  if (!photo) throw new NotFoundError("That photo");
   const obj = await photoStore().get(query.variant === "thumb" ? photo.thumb_key : photo.object_key);
-  if (!obj) throw notFound("That photo");
+  if (!obj) throw new NotFoundError("That photo");
   return new Response(Buffer.from(obj.body), {
     headers: {
       "Content-Type": query.variant === "thumb" ? "image/webp" : photo.content_type,
@@ -28,6 +28,6 @@ export const GET = route({ access: GARAGE_ACCESS, params, query }, async ({ call
 });
 
 export const DELETE = route({ access: GARAGE_ACCESS, params }, async ({ caller, params }) => {
-  if (!(await garageQueries.deletePhoto(photoStore(), caller.userId, params.id))) throw notFound("That photo");
+  await garageQueries.deletePhoto(photoStore(), caller.userId, params.id);
   return { ok: true };
 });

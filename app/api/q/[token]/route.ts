@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { HttpError, notFound } from "@/lib/platform/http/errors";
+import { ConflictError, NotFoundError } from "@/lib/platform/errors";
 import { route } from "@/lib/platform/http/route";
 import { clientAddress } from "@/lib/platform/auth/clientAddress";
 import { appOrigin } from "@/lib/platform/mail";
@@ -25,14 +25,13 @@ export const POST = route({ access: "public", params, body: publicQuoteActionSch
     "Too many actions on this quote.",
   );
   if (body.action === "accept" || body.action === "decline") {
-    const answered = await quoteQueries.answerByToken(params.token, body.action === "accept" ? "accepted" : "declined", customer);
-    if (!answered) throw notFound("That quote");
+    await quoteQueries.answerByToken(params.token, body.action === "accept" ? "accepted" : "declined", customer);
     return { ok: true };
   }
   const quote = await quoteQueries.findByToken(params.token);
-  if (!quote) throw notFound("That quote");
-  if (quote.status !== "accepted") throw new HttpError(409, "Accept the quote before paying the deposit.");
-  if (quote.deposit_cents <= 0) throw new HttpError(409, "This quote asks no deposit.");
+  if (!quote) throw new NotFoundError("That quote");
+  if (quote.status !== "accepted") throw new ConflictError("Accept the quote before paying the deposit.");
+  if (quote.deposit_cents <= 0) throw new ConflictError("This quote asks no deposit.");
   // The shop's name as on the quote the customer received, even if the shop renamed itself since.
   const [sent, parties] = await Promise.all([quoteQueries.latestSentDocument(quote.id), paymentQueries.depositParties(quote)]);
   const link = `${appOrigin()}/q/${params.token}`;

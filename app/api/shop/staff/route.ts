@@ -1,4 +1,4 @@
-import { HttpError } from "@/lib/platform/http/errors";
+import { InvalidError } from "@/lib/platform/errors";
 import { route } from "@/lib/platform/http/route";
 import { appOrigin, queueMail } from "@/lib/platform/mail";
 import { RATE_LIMITS } from "@/lib/platform/limits/limits";
@@ -18,9 +18,9 @@ export const POST = route({ access: SHOP_OWNER, body: staffInviteSchema, idempot
   await rateLimitQueries.consumeOrRefuse([{ spec: RATE_LIMITS.staffInvites, key: shopId }], "Too many invitations sent from this shop.");
   const team = await shopQueries.listTeam(shopId);
   if (team.some((m) => m.email.toLowerCase() === body.email.toLowerCase())) {
-    throw new HttpError(422, "Some fields need attention.", { email: ["This person is already on your team."] });
+    throw InvalidError.fields({ email: ["This person is already on your team."] });
   }
-  const shop = await shopQueries.getShop(shopId);
+  const shop = await shopQueries.findShop(shopId);
   const { token, invite } = await shopQueries.createInvite(shopId, body.email, caller.userId);
   const link = `${appOrigin()}/join/${token}`;
   const shopName = shop?.name ?? "a shop";

@@ -6,6 +6,7 @@ import { Alert } from "@/components/ui/Alert";
 import { buttonClass } from "@/components/ui/Button";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { requirePageCaller } from "@/lib/platform/auth/session";
+import { pageGuard } from "@/lib/platform/http/pageGuard";
 import { encodeComparison } from "@/lib/comparisons/url";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
 import { bothUnits, setupLine } from "@/lib/garage/format";
@@ -25,8 +26,7 @@ export default async function ChecklistPage({ params, searchParams }: { params: 
   const rawComparison = first(sp.comparison);
   const comparisonId = z.uuid().safeParse(rawComparison).data;
   if (rawComparison !== undefined && !comparisonId) notFound();
-  const r = await checklistQueries.resolveChecklist(caller.userId, id, { comparisonId, planned: setupFromQuery("p", sp), marginMm: marginMmParam.parse(first(sp.m)) });
-  if (!r.ok && r.reason !== "planned") notFound();
+  const r = await pageGuard(checklistQueries.resolveChecklist(caller.userId, id, { comparisonId, planned: setupFromQuery("p", sp), marginMm: marginMmParam.parse(first(sp.m)) }));
   if (!r.ok) {
     return (
       <>

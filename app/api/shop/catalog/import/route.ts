@@ -1,8 +1,8 @@
 import { z } from "zod";
 import { CSV_MAX_BYTES, decodeCsvBytes, parseCatalogCsv } from "@/lib/shop/catalog/csv";
 import { readCappedBytes } from "@/lib/platform/http/body";
-import { HttpError } from "@/lib/platform/http/errors";
-import { json, route } from "@/lib/platform/http/route";
+import { InvalidError } from "@/lib/platform/errors";
+import { route } from "@/lib/platform/http/route";
 import { catalogQueries } from "@/lib/shop/catalog/queries";
 import { SHOP_OWNER, shopIdOf } from "@/lib/shop/queries";
 
@@ -17,10 +17,10 @@ const FILENAME = z.object({ filename: z.string().transform((f) => f.slice(0, 200
 export const POST = route({ access: SHOP_OWNER, query: FILENAME }, async ({ caller, req, query }) => {
   const bytes = await readCappedBytes(req, CSV_MAX_BYTES);
   const decoded = decodeCsvBytes(bytes);
-  if ("error" in decoded) throw new HttpError(422, decoded.error);
+  if ("error" in decoded) throw new InvalidError(decoded.error);
   const report = parseCatalogCsv(decoded.text);
-  if (report.fileErrors.length) return json({ error: report.fileErrors.join(" "), fileErrors: report.fileErrors }, 422);
-  if (report.total === 0) throw new HttpError(422, "The file has a header row but no items.");
+  if (report.fileErrors.length) throw new InvalidError(report.fileErrors.join(" "), undefined, { fileErrors: report.fileErrors });
+  if (report.total === 0) throw new InvalidError("The file has a header row but no items.");
   const staged = report.items.length ? await catalogQueries.stageImport(shopIdOf(caller), caller.userId, query.filename ?? "", report) : null;
   return {
     importId: staged?.id ?? null,

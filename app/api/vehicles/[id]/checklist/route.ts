@@ -1,17 +1,17 @@
 import { z } from "zod";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
 import { setupFromQuery } from "@/lib/garage/links";
-import { HttpError, notFound } from "@/lib/platform/http/errors";
+import { InvalidError } from "@/lib/platform/errors";
+import { HttpError } from "@/lib/platform/http/errors";
 import { route } from "@/lib/platform/http/route";
-import { checklistQueries, type ResolvedChecklist } from "@/lib/garage/checklistQueries";
+import { type NoPlannedSetup, type ResolvedChecklist, checklistQueries } from "@/lib/garage/checklistQueries";
 import { checklistUpdateSchema, marginMmParam } from "@/lib/garage/schema";
 
 const params = z.object({ id: z.uuid() });
 
-function resolved(r: ResolvedChecklist): Extract<ResolvedChecklist, { ok: true }> {
+/** A missing vehicle or comparison is a NotFoundError from the query; no planned setup is a bad query (400). */
+function resolved(r: ResolvedChecklist | NoPlannedSetup): ResolvedChecklist {
   if (r.ok) return r;
-  if (r.reason === "vehicle") throw notFound("That vehicle");
-  if (r.reason === "comparison") throw notFound("That saved comparison (for this vehicle)");
   throw new HttpError(400, "Give the planned setup as pt, pd, pw and po (or pb and pr) query parameters, e.g. ?pt=35x12.50R17LT&pd=17&pw=9&po=-12, or a saved comparison as ?comparison=<id>.");
 }
 
@@ -33,6 +33,6 @@ export const PUT = route({ access: GARAGE_ACCESS, params, body: checklistUpdateS
   const r = resolved(await checklistQueries.resolveChecklist(caller.userId, params.id, body));
   const known = new Set(r.checklist.items.map((i) => i.id));
   const unknown = body.ticked.filter((t) => !known.has(t));
-  if (unknown.length) throw new HttpError(422, "Some ticked items are not on this checklist.", { ticked: [`Not on this checklist: ${unknown.slice(0, 5).join(", ")}`] });
+  if (unknown.length) throw new InvalidError("Some ticked items are not on this checklist.", { ticked: [`Not on this checklist: ${unknown.slice(0, 5).join(", ")}`] });
   return { ticked: await checklistQueries.saveChecklistTicks(r, body.ticked) };
 });

@@ -1,7 +1,8 @@
 import { z } from "zod";
 import { isDatabaseUnavailable } from "@/lib/platform/db";
 import { readCappedBytes } from "@/lib/platform/http/body";
-import { HttpError, notFound } from "@/lib/platform/http/errors";
+import { HttpError } from "@/lib/platform/http/errors";
+import { DomainError, InvalidError, NotFoundError } from "@/lib/platform/errors";
 import { json, route } from "@/lib/platform/http/route";
 import { ImageRejected, MAX_PHOTO_BYTES, processImage, safeDisplayName } from "@/lib/garage/photos/image";
 import { photoStore } from "@/lib/garage/photos/s3";
@@ -23,7 +24,7 @@ export const POST = route({ access: GARAGE_ACCESS, params, idempotent: true, max
   const declared = Number(req.headers.get("content-length") ?? "0");
   if (declared > MAX_PHOTO_BYTES + FORM_OVERHEAD) throw tooBig();
   const vehicle = await garageQueries.findVehicle(caller.userId, params.id);
-  if (!vehicle) throw notFound("That vehicle");
+  if (!vehicle) throw new NotFoundError("That vehicle");
   if (!(req.headers.get("content-type") ?? "").toLowerCase().startsWith("multipart/form-data")) {
     throw new HttpError(415, "Send the photo as multipart/form-data with a field named file.");
   }
@@ -37,17 +38,17 @@ export const POST = route({ access: GARAGE_ACCESS, params, idempotent: true, max
     throw new HttpError(400, "The upload could not be read as a form. Try again.");
   }
   const file = form.get("file");
-  if (!(file instanceof File)) throw new HttpError(422, "Choose a photo to upload.", { file: ["Choose a photo to upload."] });
+  if (!(file instanceof File)) throw new InvalidError("Choose a photo to upload.", { file: ["Choose a photo to upload."] });
   if (file.size > MAX_PHOTO_BYTES) throw tooBig();
-  if (file.size === 0) throw new HttpError(422, "That file is empty.", { file: ["That file is empty."] });
+  if (file.size === 0) throw new InvalidError("That file is empty.", { file: ["That file is empty."] });
   const name = safeDisplayName(file.name);
   if (name === null) {
-    throw new HttpError(422, "The file name must not contain folders, \"..\" or control characters.", { file: ["Rename the file without slashes or \"..\"."] });
+    throw new InvalidError("The file name must not contain folders, \"..\" or control characters.", { file: ["Rename the file without slashes or \"..\"."] });
   }
   const rawClearance = form.get("clearanceId");
   let clearanceId: string | null = null;
   if (typeof rawClearance === "string" && rawClearance !== "") {
-    if (!z.uuid().safeParse(rawClearance).success || !(await garageQueries.clearanceBelongs(vehicle.id, rawClearance))) throw notFound("That clearance point");
+    if (!z.uuid().safeParse(rawClearance).success || !(await garageQueries.clearanceBelongs(vehicle.id, rawClearance))) throw new NotFoundError("That clearance point");
     clearanceId = rawClearance;
   }
   let image;
@@ -61,7 +62,7 @@ export const POST = route({ access: GARAGE_ACCESS, params, idempotent: true, max
     const photo = await garageQueries.addPhoto(photoStore(), { vehicleId: vehicle.id, clearanceId, image, name });
     return json({ photo }, 201);
   } catch (e) {
-    if (e instanceof HttpError || isDatabaseUnavailable(e)) throw e;
+    if (e instanceof HttpError || e instanceof DomainError || isDatabaseUnavailable(e)) throw e;
     console.error("photo upload: storing failed, nothing kept:", e);
     throw new HttpError(503, "The photo store did not answer; nothing was saved. Try again in a moment.");
   }

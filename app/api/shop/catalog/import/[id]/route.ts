@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { HttpError, notFound } from "@/lib/platform/http/errors";
+import { ConflictError } from "@/lib/platform/errors";
 import { route } from "@/lib/platform/http/route";
 import { catalogQueries } from "@/lib/shop/catalog/queries";
 import { SHOP_OWNER, shopIdOf } from "@/lib/shop/queries";
@@ -10,19 +10,21 @@ import { SHOP_OWNER, shopIdOf } from "@/lib/shop/queries";
  */
 export const POST = route({ access: SHOP_OWNER, params: z.object({ id: z.uuid() }) }, async ({ caller, params }) => {
   const shopId = shopIdOf(caller);
-  const staged = await catalogQueries.findStagedImport(shopId, params.id);
-  if (!staged) throw notFound("That import preview");
-  if (staged.status !== "staged") throw new HttpError(409, "This import was already confirmed.");
+  // A missing preview is a 404, one already confirmed a 409 (domain errors, answered by route()).
+  await catalogQueries.getStagedImport(shopId, params.id);
   const enc = new TextEncoder();
   const stream = new ReadableStream<Uint8Array>({
     async start(controller) {
       const line = (o: unknown) => controller.enqueue(enc.encode(JSON.stringify(o) + "\n"));
       try {
-        const result = await catalogQueries.commitImport(shopId, params.id, (done, total) => line({ done, total }));
-        line(result ?? { error: "This import was already confirmed." });
+        line(await catalogQueries.commitImport(shopId, params.id, (done, total) => line({ done, total })));
       } catch (e) {
-        console.error("catalog import failed, rolled back:", e);
-        line({ error: "The import failed and nothing was changed. Try again." });
+        // The answer's status went out with the first line: a confirmation that lost the race says so here.
+        if (e instanceof ConflictError) line({ error: e.message });
+        else {
+          console.error("catalog import failed, rolled back:", e);
+          line({ error: "The import failed and nothing was changed. Try again." });
+        }
       }
       controller.close();
     },

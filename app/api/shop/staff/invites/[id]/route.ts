@@ -1,9 +1,8 @@
 import { z } from "zod";
-import { notFound } from "@/lib/platform/http/errors";
 import { route } from "@/lib/platform/http/route";
 import { SHOP_OWNER, shopIdOf, shopQueries } from "@/lib/shop/queries";
 
 export const DELETE = route({ access: SHOP_OWNER, params: z.object({ id: z.uuid() }) }, async ({ caller, params }) => {
-  if (!(await shopQueries.revokeInvite(shopIdOf(caller), params.id))) throw notFound("That invitation");
+  await shopQueries.revokeInvite(shopIdOf(caller), params.id);
   return { ok: true };
 });

@@ -1,5 +1,4 @@
 import { z } from "zod";
-import { notFound } from "@/lib/platform/http/errors";
 import { route } from "@/lib/platform/http/route";
 import { photoStore } from "@/lib/garage/photos/s3";
 import { garageQueries } from "@/lib/garage/queries";
@@ -8,6 +7,6 @@ import { GARAGE_ACCESS } from "@/lib/garage/access";
 const params = z.object({ id: z.uuid(), clearanceId: z.uuid() });
 
 export const DELETE = route({ access: GARAGE_ACCESS, params }, async ({ caller, params }) => {
-  if (!(await garageQueries.deleteClearance(photoStore(), caller.userId, params.id, params.clearanceId))) throw notFound("That clearance point");
+  await garageQueries.deleteClearance(photoStore(), caller.userId, params.id, params.clearanceId);
   return { ok: true };
 });
