@@ -46,7 +46,28 @@ export {
   type TireSystem,
   type ServiceType,
   type Construction,
+  type TireMarking,
 } from "./tireSize";
+export {
+  LOAD_PRESSURE_EXPONENT,
+  PASSENGER_ON_LIGHT_TRUCK_DIVISOR,
+  PASSENGER_REFERENCE_KPA,
+  PASSENGER_MAX_INFLATION_KPA,
+  ROAD_MINIMUM_KPA,
+  ROAD_MINIMUM_RATIO,
+  LOAD_PRESSURE_LIMITS,
+  loadAtPressure,
+  pressureForLoad,
+  loadPressureBasis,
+  type TireLoadClass,
+  type VehicleKind,
+  type LoadPressureOptions,
+  type LoadPressureSources,
+  type LoadPressureBasis,
+  type LoadAtPressure,
+  type PressureForLoad,
+} from "./loadPressure";
+export { equivalentPressure, type EquivalentPressureInput, type EquivalentPressure } from "./equivalentPressure";
 export {
   SECTION_WIDTH_K,
   RIM_WIDTH_TOLERANCE_IN,
