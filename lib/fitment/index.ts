@@ -69,6 +69,16 @@ export {
 } from "./loadPressure";
 export { equivalentPressure, type EquivalentPressureInput, type EquivalentPressure } from "./equivalentPressure";
 export {
+  TRAIL_ANGLE_LIMITS_MM,
+  approachAngleDeg,
+  departureAngleDeg,
+  breakoverAngleDeg,
+  raiseBodyPoint,
+  type CornerInput,
+  type BreakoverInput,
+  type RaiseInput,
+} from "./trailAngles";
+export {
   SECTION_WIDTH_K,
   RIM_WIDTH_TOLERANCE_IN,
   RIM_WIDTH_LIMITS_IN,
