@@ -116,6 +116,7 @@ export {
   DEFAULT_AXLE_RATIO,
   DEFAULT_TRANSMISSION_RATIO,
   DEFAULT_KPI_DEG,
+  CORNER_MASS_LIMITS_KG,
   compareSetups,
   crawlRatio,
   effectiveCrawlRatio,
@@ -123,6 +124,8 @@ export {
   type CompareOptions,
   type SetupLike,
   type SetupComparison,
+  type CornerMass,
+  type RotatingMassComparison,
 } from "./compare";
 export {
   BOLT_COUNT_LIMITS,
