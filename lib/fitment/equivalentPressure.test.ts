@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { FitmentInputError, TireSizeError } from "./errors";
+import { FitmentInputError, TireLimitError, TireSizeError } from "./errors";
 import { equivalentPressure } from "./equivalentPressure";
 import { ROAD_MINIMUM_RATIO, loadPressureBasis } from "./loadPressure";
 import { nonFinite } from "./testUtil";
@@ -71,7 +71,7 @@ describe("equivalentPressure (TRA load formulas; ISO 4000-1 load index; FMVSS 12
   it("refuses, naming the planned tire, when it cannot carry the load even at its maximum", () => {
     const run = () =>
       equivalentPressure({ current: "LT285/70R17 121/118Q LRE", currentPressureKpa: psiToKpa(80), planned: "P265/70R17 113S" });
-    expect(run).toThrow(FitmentInputError);
+    expect(run).toThrow(TireLimitError);
     expect(run).toThrow(/planned: P265\/70R17 113S carries at most 1150 kg .* less than the 1450 kg/);
     expect(fieldOf(run)).toBe("planned");
   });

@@ -12,7 +12,7 @@
  * load at its maximum is refused; a pressure below the planned tire's road minimum is flagged
  * and `pressureToSetKpa` is the minimum.
  */
-import { FitmentInputError } from "./errors";
+import { FitmentInputError, TireLimitError } from "./errors";
 import {
   type BasisFieldNames,
   type LoadAtPressure,
@@ -87,7 +87,7 @@ const PLANNED_FIELDS: BasisFieldNames = {
 
 /**
  * The pressure at which the planned tire carries what the current tire carries at the placard
- * pressure. Throws {@link FitmentInputError} with field `planned` when the planned tire cannot
+ * pressure. Throws {@link TireLimitError} with field `planned` when the planned tire cannot
  * carry that load even at its maximum, and naming the field for any missing or impossible figure.
  *
  * Sources: TRA load formulas (NHTSA, The Pneumatic Tire, 2006); ISO 4000-1 load index table;
@@ -120,10 +120,12 @@ export function equivalentPressure(input: EquivalentPressureInput): EquivalentPr
   const current = loadFromBasis(currentBasis, input.currentPressureKpa, "currentPressureKpa");
   const loadKg = current.loadKg;
   if (loadKg > plannedBasis.maxLoadKg) {
-    throw new FitmentInputError(
+    throw new TireLimitError(
       "planned",
       `planned: ${plannedBasis.tire.text} carries at most ${Math.round(plannedBasis.maxLoadKg)} kg at its maximum ${Math.round(kpaToPsi(plannedBasis.maxPressureKpa))} psi, less than the ${Math.round(loadKg)} kg ${currentBasis.tire.text} carries at the placard pressure — choose a tire with a higher load index or load range (e.g. LT285/70R17 121/118Q LRE)`,
-      plannedBasis.tire.text,
+      loadKg,
+      plannedBasis.maxLoadKg,
+      "kg",
     );
   }
   const planned = pressureFromBasis(plannedBasis, loadKg, "loadKg");

@@ -2,7 +2,7 @@
  * Hubface fitment engine — public entry point. Pure, deterministic, SI (mm) inside.
  * See README.md in this folder for conventions, formulas and sources.
  */
-export { FitmentInputError, TireSizeError } from "./errors";
+export { FitmentInputError, TireSizeError, TireLimitError, BodyPointError } from "./errors";
 export {
   MM_PER_IN,
   MM_PER_MILE,

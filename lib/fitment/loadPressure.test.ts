@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { FitmentInputError, TireSizeError } from "./errors";
+import { FitmentInputError, TireLimitError, TireSizeError } from "./errors";
 import { LOAD_PRESSURE_EXPONENT, ROAD_MINIMUM_RATIO, loadAtPressure, loadPressureBasis, pressureForLoad } from "./loadPressure";
 import { nonFinite } from "./testUtil";
 import { parseTireSize } from "./tireSize";
@@ -123,6 +123,13 @@ describe("limits: above the maximum is refused, below the minimum is flagged", (
   it("a load above the tire's maximum throws a FitmentInputError on loadKg that says why and gives an example", () => {
     expect(() => pressureForLoad("LT265/75R16 123/120S LRE", 1600)).toThrow(/loadKg 1600 kg is above the maximum load of LT265\/75R16 123\/120S LRE, 1550 kg.*e\.g\./);
     expect(fieldOf(() => pressureForLoad("LT265/75R16 123/120S LRE", 1600))).toBe("loadKg");
+    expect(() => pressureForLoad("LT265/75R16 123/120S LRE", 1600)).toThrow(TireLimitError);
+    try {
+      pressureForLoad("LT265/75R16 123/120S LRE", 1600);
+    } catch (e) {
+      expect(e).toMatchObject({ limit: 1550, unit: "kg", value: 1600 });
+    }
+    expect(() => pressureForLoad("LT265/75R16 123/120S LRE", -5)).not.toThrow(TireLimitError); // a typing error, not a limit
     expect(fieldOf(() => pressureForLoad("P215/75R15 100S", 750, { vehicle: "light-truck" }))).toBe("loadKg"); // 750 > 727.3
     expect(fieldOf(() => pressureForLoad("LT265/75R16 123/120S LRE", -5))).toBe("loadKg");
     expect(fieldOf(() => pressureForLoad("LT265/75R16 123/120S LRE", 0))).toBe("loadKg");
@@ -131,6 +138,7 @@ describe("limits: above the maximum is refused, below the minimum is flagged", (
 
   it("a pressure above the LT sidewall maximum is refused; a passenger tire may go above its reference up to its max press without gaining load", () => {
     expect(() => loadAtPressure("LT265/75R16 123/120S LRE", psiToKpa(85))).toThrow(/pressureKpa .* above the highest pressure/);
+    expect(() => loadAtPressure("LT265/75R16 123/120S LRE", psiToKpa(85))).toThrow(TireLimitError);
     const p = loadAtPressure("P215/75R15 100S", psiToKpa(44));
     expect(p.loadKg).toBe(800);
     expect(p.aboveMaxPressure).toBe(true);

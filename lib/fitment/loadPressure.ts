@@ -30,7 +30,7 @@
  *   and up, given sidewall figures) get the largest ratio of that table, 140/240 = 0.5833, of
  *   their Pmax (applied by proportion, no source). A maker's minimum, when given, wins.
  */
-import { FitmentInputError, TireSizeError, requireNumber } from "./errors";
+import { FitmentInputError, TireLimitError, TireSizeError, requireNumber } from "./errors";
 import { loadIndexKg } from "./loadSpeed";
 import { loadRangeInfo } from "./loadRange";
 import { type TireSize, toTireSize } from "./tireSize";
@@ -362,7 +362,7 @@ function baseNotes(b: LoadPressureBasis): string[] {
  * (light truck, flotation) or 0.5 (passenger). At or above Pmax the load is Lmax (a passenger
  * tire may be inflated above Pmax up to its sidewall "max press" — `aboveMaxPressure` — without
  * gaining load). A pressure below the road minimum is computed but flagged `belowMinimum`.
- * A pressure above the highest the tire allows throws {@link FitmentInputError} (`pressureKpa`).
+ * A pressure above the highest the tire allows throws {@link TireLimitError} (`pressureKpa`).
  *
  * Sources: TRA load formulas (NHTSA, The Pneumatic Tire, 2006); ISO 4000-1 load index table;
  * FMVSS 120 S5.1.2 (÷ 1.10 on a light truck); FMVSS 138 Table 1 (road minimum, from memory).
@@ -380,10 +380,12 @@ export function loadFromBasis(b: LoadPressureBasis, pressureKpa: number, field: 
   const L = LOAD_PRESSURE_LIMITS.pressureKpa;
   const p = requireNumber(field, pressureKpa, L.min, L.max, "240", "kPa");
   if (p > b.maxInflationKpa) {
-    throw new FitmentInputError(
+    throw new TireLimitError(
       field,
       `${field} ${kpaText(p)} is above the highest pressure ${b.tire.text} allows, ${kpaText(b.maxInflationKpa)}; never inflate above the sidewall maximum (e.g. ${round1(b.maxPressureKpa)})`,
       p,
+      b.maxInflationKpa,
+      "kPa",
     );
   }
   const above = p > b.maxPressureKpa;
@@ -412,7 +414,7 @@ export function loadFromBasis(b: LoadPressureBasis, pressureKpa: number, field: 
 
 /**
  * The cold inflation pressure at which one tire carries a load: P = Pmax · (L / Lmax)^(1/n).
- * A load above the tire's maximum throws {@link FitmentInputError} (`loadKg`). A pressure below
+ * A load above the tire's maximum throws {@link TireLimitError} (`loadKg`). A pressure below
  * the road minimum is returned flagged `belowMinimum`, with `pressureToSetKpa` = the minimum.
  *
  * Sources: TRA load formulas (NHTSA, The Pneumatic Tire, 2006); ISO 4000-1 load index table;
@@ -437,10 +439,12 @@ export function pressureFromBasis(b: LoadPressureBasis, loadKg: number, field: s
     throw new FitmentInputError(field, `${field} must be above 0 kg, got ${load} (e.g. 1000)`, load);
   }
   if (load > b.maxLoadKg) {
-    throw new FitmentInputError(
+    throw new TireLimitError(
       field,
       `${field} ${round1(load)} kg is above the maximum load of ${b.tire.text}, ${round1(b.maxLoadKg)} kg at ${kpaText(b.maxPressureKpa)}${b.sources.derating !== null ? " (÷ 1.10 on a light truck)" : ""}; choose a tire with a higher load index or load range (e.g. ${round1(b.maxLoadKg * 0.8)})`,
       load,
+      b.maxLoadKg,
+      "kg",
     );
   }
   const pressureKpa = b.maxPressureKpa * (load / b.maxLoadKg) ** (1 / b.exponent);

@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { FitmentInputError } from "./errors";
+import { BodyPointError, FitmentInputError } from "./errors";
 import { parseTireSize } from "./tireSize";
 import { approachAngleDeg, breakoverAngleDeg, departureAngleDeg, raiseBodyPoint } from "./trailAngles";
 
@@ -74,6 +74,9 @@ describe("approach and departure angle (SAE J1100 definition, from memory)", () 
 
   it("refuses a point inside the tire's circle and a point over the tire, naming the field", () => {
     expect(() => approachAngleDeg({ tireDiameterMm: 800, cornerHeightMm: 500, cornerOffsetMm: 300 })).toThrow(/inside the tire's circle/);
+    expect(() => approachAngleDeg({ tireDiameterMm: 800, cornerHeightMm: 500, cornerOffsetMm: 300 })).toThrow(BodyPointError);
+    // On the circle counts as inside: 800 mm tire, point 400 mm ahead at hub height touches it.
+    expect(() => approachAngleDeg({ tireDiameterMm: 800, cornerHeightMm: 400, cornerOffsetMm: 400 })).toThrow(BodyPointError);
     expect(fieldOf(() => approachAngleDeg({ tireDiameterMm: 800, cornerHeightMm: 500, cornerOffsetMm: 300 }))).toBe("cornerHeightMm");
     expect(fieldOf(() => approachAngleDeg({ tireDiameterMm: 800, cornerHeightMm: 900, cornerOffsetMm: 300 }))).toBe("cornerOffsetMm");
     expect(() => approachAngleDeg({ tireDiameterMm: 800, cornerHeightMm: 900, cornerOffsetMm: 300 })).toThrow(/sits over the tire/);
@@ -116,6 +119,7 @@ describe("ramp breakover angle (SAE J1100 definition, from memory)", () => {
 
   it("refuses a midpoint inside the tire's circle (short wheelbase, big tire)", () => {
     expect(fieldOf(() => breakoverAngleDeg({ tireDiameterMm: 2000, wheelbaseMm: 1000, clearanceMm: 900 }))).toBe("clearanceMm");
+    expect(() => breakoverAngleDeg({ tireDiameterMm: 2000, wheelbaseMm: 1000, clearanceMm: 900 })).toThrow(BodyPointError);
     expect(fieldOf(() => breakoverAngleDeg({ tireDiameterMm: 800, wheelbaseMm: 0, clearanceMm: 250 }))).toBe("wheelbaseMm");
     // Midway point far above the tires: the tangent lines would be vertical, nothing is limited — refused, not 180°.
     expect(() => breakoverAngleDeg({ tireDiameterMm: 1200, wheelbaseMm: 1000, clearanceMm: 2900 })).toThrow(/clearanceMm/);

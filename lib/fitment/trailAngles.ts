@@ -24,7 +24,7 @@
  * rises by the radius change ΔD/2, and with a lift by the lift's height: {@link raiseBodyPoint}.
  * A body point on or inside the tire's circle is an error (the tire would reach it).
  */
-import { FitmentInputError, requireNumber } from "./errors";
+import { BodyPointError, FitmentInputError, requireNumber } from "./errors";
 
 /** Accepted ranges, mm. */
 export const TRAIL_ANGLE_LIMITS_MM = Object.freeze({
@@ -78,10 +78,11 @@ function tangentAngle(r: number, d: number, h: number): number {
 
 function checkOutside(r: number, d: number, h: number, field: string, what: string): void {
   if (Math.hypot(d, h - r) <= r) {
-    throw new FitmentInputError(
+    throw new BodyPointError(
       field,
       `${what} (${Math.round(d)} mm from the axle, ${Math.round(h)} mm high) is inside the tire's circle of radius ${Math.round(r)} mm: the tire would reach it — check the measurement, or the tire does not fit (e.g. a point 900 mm ahead at 600 mm)`,
       h,
+      r,
     );
   }
 }
@@ -90,7 +91,7 @@ function checkOutside(r: number, d: number, h: number, field: string, what: stri
  * Approach angle (or departure angle, with the rear corner and rear tire), degrees, per SAE J1100:
  * the angle to the ground of the line tangent to the tire through the lowest point of the
  * overhang. θ = atan2(h − R, d) + asin(R / √(d² + (h − R)²)).
- * Throws {@link FitmentInputError} when the point is inside the tire's circle, or sits over the
+ * Throws {@link BodyPointError} when the point is inside the tire's circle, or sits over the
  * tire (θ > 90°: the tire meets any slope first, the point sets no angle).
  *
  * Sources: SAE J1100 (definitions, from memory); plane geometry of a tangent from a point to a circle.
@@ -109,10 +110,11 @@ export function approachAngleDeg(input: CornerInput): number {
   checkOutside(r, d, h, "cornerHeightMm", "the body point");
   const deg = tangentAngle(r, d, h) * DEG;
   if (deg > 90) {
-    throw new FitmentInputError(
+    throw new BodyPointError(
       "cornerOffsetMm",
       `the body point ${Math.round(d)} mm from the axle at ${Math.round(h)} mm sits over the tire, so it does not limit the angle: measure the lowest point of the overhang beyond the tire (e.g. 900 mm ahead at 600 mm)`,
       d,
+      r,
     );
   }
   return deg;
@@ -133,7 +135,7 @@ export function departureAngleDeg(input: CornerInput): number {
  * Ramp breakover angle, degrees, per SAE J1100 as spec sheets give it: the supplement of the
  * angle between the two lines tangent to the front and rear tires that meet at the lowest point
  * midway between the axles — 2 · θ(L/2, c) with θ as in {@link approachAngleDeg}. Larger is
- * better. Throws {@link FitmentInputError} when that point is inside a tire's circle.
+ * better. Throws {@link BodyPointError} when that point is inside a tire's circle.
  *
  * Sources: SAE J1100 (definition, from memory); plane geometry of a tangent from a point to a circle.
  *
@@ -151,10 +153,11 @@ export function breakoverAngleDeg(input: BreakoverInput): number {
   checkOutside(r, wheelbase / 2, c, "clearanceMm", "the lowest point midway");
   const deg = 2 * tangentAngle(r, wheelbase / 2, c) * DEG;
   if (deg >= 180) {
-    throw new FitmentInputError(
+    throw new BodyPointError(
       "clearanceMm",
       `clearanceMm ${Math.round(c)} mm puts the lowest point midway over the tires' reach (wheelbase ${Math.round(wheelbase)} mm): it does not limit breakover — check the measurement (e.g. 280)`,
       c,
+      r,
     );
   }
   return deg;
