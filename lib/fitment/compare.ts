@@ -26,7 +26,7 @@
  *   Equivalent translating mass I / R² (rolling without slip): what the spin adds to the mass the
  *   brakes and engine must slow and speed up.
  */
-import { FitmentInputError, requireNumber } from "./errors";
+import { FitmentInputError, requireNumber, requireObject } from "./errors";
 import { type SetupGeometry, type SetupInput, setupGeometry } from "./geometry";
 import { MM_PER_IN } from "./units";
 
@@ -178,10 +178,7 @@ const ROTATING_APPROXIMATION =
   "approximation, no source: tire a uniform annulus from the bead seat to the tread, I = ½·m·(r_b² + R²); wheel a thin ring at the bead seat, I = m·r_b² (an upper bound)";
 
 function cornerMass(field: string, value: unknown): CornerMass {
-  if (value === null || typeof value !== "object") {
-    throw new FitmentInputError(field, `${field} must be the masses of one wheel and one tire, e.g. { wheelKg: 20, tireKg: 36 }`, value);
-  }
-  const v = value as Partial<CornerMass>;
+  const v = requireObject(field, value as Partial<CornerMass>, "{ wheelKg: 20, tireKg: 36 } (one wheel and one tire)");
   const L = CORNER_MASS_LIMITS_KG;
   return {
     wheelKg: requireNumber(`${field}.wheelKg`, v.wheelKg, L.wheel.min, L.wheel.max, "20", "kg"),
@@ -198,9 +195,7 @@ function cornerInertia(m: CornerMass, g: SetupGeometry): number {
 
 function compareRotating(option: CompareOptions["rotatingMass"], cur: SetupGeometry, pla: SetupGeometry): RotatingMassComparison | null {
   if (option === undefined) return null;
-  if (option === null || typeof option !== "object") {
-    throw new FitmentInputError("rotatingMass", "rotatingMass must be { current: { wheelKg, tireKg }, planned: { wheelKg, tireKg } } (e.g. wheelKg 20, tireKg 36)", option);
-  }
+  requireObject("rotatingMass", option, "{ current: { wheelKg: 12, tireKg: 22 }, planned: { wheelKg: 20, tireKg: 36 } }");
   const mc = cornerMass("rotatingMass.current", option.current);
   const mp = cornerMass("rotatingMass.planned", option.planned);
   const ic = cornerInertia(mc, cur);

@@ -1,23 +1,13 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { FitmentInputError, TireLimitError, TireSizeError } from "./errors";
+import { TireLimitError, TireSizeError } from "./errors";
 import { equivalentPressure } from "./equivalentPressure";
 import { ROAD_MINIMUM_RATIO, loadPressureBasis } from "./loadPressure";
-import { nonFinite } from "./testUtil";
+import { errorField, nonFinite } from "./testUtil";
 import { psiToKpa } from "./units";
 
 // NIST SP 811 (2008) B.8: 1 psi = 6.894757 kPa.
 const PSI = 6.894757;
-
-function fieldOf(f: () => unknown): string {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof FitmentInputError) return e.field;
-    throw e;
-  }
-  throw new Error("did not throw");
-}
 
 describe("equivalentPressure (TRA load formulas; ISO 4000-1 load index; FMVSS 120 S5.1.2)", () => {
   it("P265/70R17 113S at its 35 psi placard on a light truck → LT285/70R17 121/118Q LRE: 1045.45 kg, 45.73 psi, set the LR E minimum 320 kPa", () => {
@@ -73,28 +63,28 @@ describe("equivalentPressure (TRA load formulas; ISO 4000-1 load index; FMVSS 12
       equivalentPressure({ current: "LT285/70R17 121/118Q LRE", currentPressureKpa: psiToKpa(80), planned: "P265/70R17 113S" });
     expect(run).toThrow(TireLimitError);
     expect(run).toThrow(/planned: P265\/70R17 113S carries at most 1150 kg .* less than the 1450 kg/);
-    expect(fieldOf(run)).toBe("planned");
+    expect(errorField(run)).toBe("planned");
   });
 
   it("names the field of every missing or impossible figure", () => {
-    expect(fieldOf(() => equivalentPressure({ current: "P265/70R17 113S", currentPressureKpa: 241, planned: "LT285/70R17 121/118Q" }))).toBe(
+    expect(errorField(() => equivalentPressure({ current: "P265/70R17 113S", currentPressureKpa: 241, planned: "LT285/70R17 121/118Q" }))).toBe(
       "plannedMaxPressureKpa",
     );
-    expect(fieldOf(() => equivalentPressure({ current: "LT285/70R17 121/118Q", currentPressureKpa: 241, planned: "LT285/70R17 121/118Q LRE" }))).toBe(
+    expect(errorField(() => equivalentPressure({ current: "LT285/70R17 121/118Q", currentPressureKpa: 241, planned: "LT285/70R17 121/118Q LRE" }))).toBe(
       "currentMaxPressureKpa",
     );
-    expect(fieldOf(() => equivalentPressure({ current: "P265/70R17 113S", currentPressureKpa: 600, planned: "LT285/70R17 121/118Q LRE" }))).toBe(
+    expect(errorField(() => equivalentPressure({ current: "P265/70R17 113S", currentPressureKpa: 600, planned: "LT285/70R17 121/118Q LRE" }))).toBe(
       "currentPressureKpa",
     );
-    expect(fieldOf(() => equivalentPressure({ current: "P265/70R17 113S", currentPressureKpa: Number.NaN, planned: "LT285/70R17 121/118Q LRE" }))).toBe(
+    expect(errorField(() => equivalentPressure({ current: "P265/70R17 113S", currentPressureKpa: Number.NaN, planned: "LT285/70R17 121/118Q LRE" }))).toBe(
       "currentPressureKpa",
     );
-    expect(fieldOf(() => equivalentPressure({ current: "P265/70R17", currentPressureKpa: 241, planned: "LT285/70R17 121/118Q LRE" }))).toBe(
+    expect(errorField(() => equivalentPressure({ current: "P265/70R17", currentPressureKpa: 241, planned: "LT285/70R17 121/118Q LRE" }))).toBe(
       "currentMaxLoadKg",
     );
     expect(() => equivalentPressure({ current: "P265/7R17", currentPressureKpa: 241, planned: "LT285/70R17 121/118Q LRE" })).toThrow(TireSizeError);
-    expect(fieldOf(() => equivalentPressure({ current: "P265/7R17", currentPressureKpa: 241, planned: "LT285/70R17 121/118Q LRE" }))).toBe("current");
-    expect(fieldOf(() => equivalentPressure(null as never))).toBe("input");
+    expect(errorField(() => equivalentPressure({ current: "P265/7R17", currentPressureKpa: 241, planned: "LT285/70R17 121/118Q LRE" }))).toBe("current");
+    expect(errorField(() => equivalentPressure(null as never))).toBe("input");
   });
 
   it("sidewall figures given override the engine's (LT size without load range)", () => {

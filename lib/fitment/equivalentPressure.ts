@@ -12,7 +12,7 @@
  * load at its maximum is refused; a pressure below the planned tire's road minimum is flagged
  * and `pressureToSetKpa` is the minimum.
  */
-import { FitmentInputError, TireLimitError } from "./errors";
+import { TireLimitError, requireObject } from "./errors";
 import {
   type BasisFieldNames,
   type LoadAtPressure,
@@ -103,13 +103,7 @@ const PLANNED_FIELDS: BasisFieldNames = {
  * r.pressureToSetKpa; // 320 (≈ 46.4 psi, FMVSS 138 Table 1)
  */
 export function equivalentPressure(input: EquivalentPressureInput): EquivalentPressure {
-  if (input === null || typeof input !== "object") {
-    throw new FitmentInputError(
-      "input",
-      'input must be an object such as { current: "P265/70R17 113S", currentPressureKpa: 241, planned: "LT285/70R17 121/118Q LRE" }',
-      input,
-    );
-  }
+  requireObject("input", input, '{ current: "P265/70R17 113S", currentPressureKpa: 241, planned: "LT285/70R17 121/118Q LRE" }');
   const vehicle = input.vehicle;
   const currentBasis = loadPressureBasis(input.current, { maxPressureKpa: input.currentMaxPressureKpa, maxLoadKg: input.currentMaxLoadKg, vehicle }, CURRENT_FIELDS);
   const plannedBasis = loadPressureBasis(

@@ -126,3 +126,18 @@ export function requireInteger(field: string, value: unknown, min: number, max: 
   }
   return value as number;
 }
+
+/**
+ * Checks that `value` is an object (the input of a function taking named fields); returns it or
+ * throws a {@link FitmentInputError} naming the field with an example of the expected shape.
+ *
+ * @example
+ * requireObject("input", { tireDiameterMm: 800 }, "{ tireDiameterMm: 800 }"); // the object
+ * requireObject("input", null, "{ tireDiameterMm: 800 }");                    // throws
+ */
+export function requireObject<T extends object>(field: string, value: T, example: string): T {
+  if (value === null || typeof value !== "object") {
+    throw new FitmentInputError(field, `${field} must be an object such as ${example}, got ${show(value)}`, value);
+  }
+  return value;
+}

@@ -2,7 +2,7 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { FitmentInputError, TireLimitError, TireSizeError } from "./errors";
 import { LOAD_PRESSURE_EXPONENT, ROAD_MINIMUM_RATIO, loadAtPressure, loadPressureBasis, pressureForLoad } from "./loadPressure";
-import { nonFinite } from "./testUtil";
+import { errorField, nonFinite } from "./testUtil";
 import { parseTireSize } from "./tireSize";
 import { psiToKpa } from "./units";
 
@@ -13,16 +13,6 @@ const PSI = 6.894757;
 const traLightTruck = (k: number, p: number, sd: number, dr: number): number => k * 0.425 * p ** 0.585 * sd ** 1.39 * (dr + sd);
 /** The TRA metric passenger form, L = K·P^0.5·Sd^1.39·(Dr + Sd) (TRA; NHTSA, The Pneumatic Tire, 2006). */
 const traPassenger = (k: number, p: number, sd: number, dr: number): number => k * p ** 0.5 * sd ** 1.39 * (dr + sd);
-
-function fieldOf(f: () => unknown): string {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof FitmentInputError) return e.field;
-    throw e;
-  }
-  throw new Error("did not throw");
-}
 
 describe("worked examples (TRA load formula; ISO 4000-1 load index; NIST SP 811 psi)", () => {
   it("LT265/75R16 123/120S load range E (80 psi, LI 123 = 1550 kg) carrying 1000 kg needs 80·(1000/1550)^(1/0.585) ≈ 37.82 psi", () => {
@@ -122,7 +112,7 @@ describe("passenger tire on a light truck, MPV or SUV: load ÷ 1.10 (FMVSS 120 S
 describe("limits: above the maximum is refused, below the minimum is flagged", () => {
   it("a load above the tire's maximum throws a FitmentInputError on loadKg that says why and gives an example", () => {
     expect(() => pressureForLoad("LT265/75R16 123/120S LRE", 1600)).toThrow(/loadKg 1600 kg is above the maximum load of LT265\/75R16 123\/120S LRE, 1550 kg.*e\.g\./);
-    expect(fieldOf(() => pressureForLoad("LT265/75R16 123/120S LRE", 1600))).toBe("loadKg");
+    expect(errorField(() => pressureForLoad("LT265/75R16 123/120S LRE", 1600))).toBe("loadKg");
     expect(() => pressureForLoad("LT265/75R16 123/120S LRE", 1600)).toThrow(TireLimitError);
     try {
       pressureForLoad("LT265/75R16 123/120S LRE", 1600);
@@ -130,10 +120,10 @@ describe("limits: above the maximum is refused, below the minimum is flagged", (
       expect(e).toMatchObject({ limit: 1550, unit: "kg", value: 1600 });
     }
     expect(() => pressureForLoad("LT265/75R16 123/120S LRE", -5)).not.toThrow(TireLimitError); // a typing error, not a limit
-    expect(fieldOf(() => pressureForLoad("P215/75R15 100S", 750, { vehicle: "light-truck" }))).toBe("loadKg"); // 750 > 727.3
-    expect(fieldOf(() => pressureForLoad("LT265/75R16 123/120S LRE", -5))).toBe("loadKg");
-    expect(fieldOf(() => pressureForLoad("LT265/75R16 123/120S LRE", 0))).toBe("loadKg");
-    expect(fieldOf(() => pressureForLoad("LT265/75R16 123/120S LRE", Number.NaN))).toBe("loadKg");
+    expect(errorField(() => pressureForLoad("P215/75R15 100S", 750, { vehicle: "light-truck" }))).toBe("loadKg"); // 750 > 727.3
+    expect(errorField(() => pressureForLoad("LT265/75R16 123/120S LRE", -5))).toBe("loadKg");
+    expect(errorField(() => pressureForLoad("LT265/75R16 123/120S LRE", 0))).toBe("loadKg");
+    expect(errorField(() => pressureForLoad("LT265/75R16 123/120S LRE", Number.NaN))).toBe("loadKg");
   });
 
   it("a pressure above the LT sidewall maximum is refused; a passenger tire may go above its reference up to its max press without gaining load", () => {
@@ -145,7 +135,7 @@ describe("limits: above the maximum is refused, below the minimum is flagged", (
     expect(() => loadAtPressure("P215/75R15 100S", psiToKpa(52))).toThrow(FitmentInputError); // above 350 kPa default (from memory)
     expect(loadAtPressure("P215/75R15 100S", 340, { maxInflationKpa: 350 }).loadKg).toBe(800);
     expect(() => loadAtPressure("P215/75R15 100S", 320, { maxInflationKpa: 300 })).toThrow(/above the highest pressure/);
-    expect(fieldOf(() => loadAtPressure("P215/75R15 100S", 320, { maxInflationKpa: 200 }))).toBe("maxInflationKpa");
+    expect(errorField(() => loadAtPressure("P215/75R15 100S", 320, { maxInflationKpa: 200 }))).toBe("maxInflationKpa");
   });
 
   it("a pressure below the road minimum is computed but flagged (FMVSS 138 Table 1: passenger 140 / XL 160 kPa, from memory)", () => {
@@ -170,7 +160,7 @@ describe("limits: above the maximum is refused, below the minimum is flagged", (
 describe("missing or impossible figures name the field and show an example", () => {
   it("an LT size without load range needs maxPressureKpa; without load index, maxLoadKg", () => {
     expect(() => loadAtPressure("LT285/70R17 121/118Q", 300)).toThrow(/maxPressureKpa: LT285\/70R17 121\/118Q has no load range.*e\.g\./);
-    expect(fieldOf(() => loadAtPressure("LT285/70R17 LRE", 300))).toBe("maxLoadKg");
+    expect(errorField(() => loadAtPressure("LT285/70R17 LRE", 300))).toBe("maxLoadKg");
     const given = loadAtPressure("LT285/70R17 121/118Q", 300, { maxPressureKpa: 551.6 });
     expect(given.sources.maxPressure).toMatch(/as given/);
     expect(given.minimumPressureKpa).toBeCloseTo(ROAD_MINIMUM_RATIO * 551.6, 9);
@@ -178,7 +168,7 @@ describe("missing or impossible figures name the field and show an example", () 
   });
 
   it("commercial C sizes: light-truck formula, single load index, sidewall pressure required (ETRTO C pressures not held)", () => {
-    expect(fieldOf(() => loadPressureBasis("235/65R16C 121/119R"))).toBe("maxPressureKpa");
+    expect(errorField(() => loadPressureBasis("235/65R16C 121/119R"))).toBe("maxPressureKpa");
     const b = loadPressureBasis("235/65R16C 121/119R", { maxPressureKpa: 475 });
     expect(b).toMatchObject({ tireClass: "light-truck", exponent: 0.585, maxLoadKg: 1450, maxPressureKpa: 475 }); // LI 121 single = 1450 kg (ISO 4000-1)
   });
@@ -191,12 +181,12 @@ describe("missing or impossible figures name the field and show an example", () 
 
   it("bad text, bad options and a bad vehicle throw typed errors", () => {
     expect(() => loadAtPressure("265/7R17", 200)).toThrow(TireSizeError);
-    expect(fieldOf(() => loadAtPressure("P215/75R15 100S", 200, { vehicle: "truck" as never }))).toBe("vehicle");
-    expect(fieldOf(() => loadAtPressure("P215/75R15 100S", 200, { maxLoadKg: -1 }))).toBe("maxLoadKg");
-    expect(fieldOf(() => loadAtPressure("P215/75R15 100S", 200, { maxPressureKpa: Number.POSITIVE_INFINITY }))).toBe("maxPressureKpa");
-    expect(fieldOf(() => loadAtPressure("P215/75R15 100S", 200, { minPressureKpa: 400 }))).toBe("minPressureKpa");
-    expect(fieldOf(() => loadAtPressure("P215/75R15 100S", Number.NaN))).toBe("pressureKpa");
-    expect(fieldOf(() => loadAtPressure("P215/75R15 100S", -1))).toBe("pressureKpa");
+    expect(errorField(() => loadAtPressure("P215/75R15 100S", 200, { vehicle: "truck" as never }))).toBe("vehicle");
+    expect(errorField(() => loadAtPressure("P215/75R15 100S", 200, { maxLoadKg: -1 }))).toBe("maxLoadKg");
+    expect(errorField(() => loadAtPressure("P215/75R15 100S", 200, { maxPressureKpa: Number.POSITIVE_INFINITY }))).toBe("maxPressureKpa");
+    expect(errorField(() => loadAtPressure("P215/75R15 100S", 200, { minPressureKpa: 400 }))).toBe("minPressureKpa");
+    expect(errorField(() => loadAtPressure("P215/75R15 100S", Number.NaN))).toBe("pressureKpa");
+    expect(errorField(() => loadAtPressure("P215/75R15 100S", -1))).toBe("pressureKpa");
   });
 
   it("accepts a parsed size as well as text", () => {

@@ -30,7 +30,7 @@
  *   and up, given sidewall figures) get the largest ratio of that table, 140/240 = 0.5833, of
  *   their Pmax (applied by proportion, no source). A maker's minimum, when given, wins.
  */
-import { FitmentInputError, TireLimitError, TireSizeError, requireNumber } from "./errors";
+import { FitmentInputError, TireLimitError, TireSizeError, requireNumber, requireObject } from "./errors";
 import { loadIndexKg } from "./loadSpeed";
 import { loadRangeInfo } from "./loadRange";
 import { type TireSize, toTireSize } from "./tireSize";
@@ -223,9 +223,7 @@ function optional(field: string, value: unknown, min: number, max: number, examp
  * b.maxPressureKpa; // ≈ 551.6 (80 psi, load range E)
  */
 export function loadPressureBasis(tire: string | TireSize, options: LoadPressureOptions = {}, fields: BasisFieldNames = DEFAULT_FIELDS): LoadPressureBasis {
-  if (options === null || typeof options !== "object") {
-    throw new FitmentInputError("options", `options must be an object such as { maxPressureKpa: 551.6, maxLoadKg: 1550 }`, options);
-  }
+  requireObject("options", options, "{ maxPressureKpa: 551.6, maxLoadKg: 1550 }");
   const t = readTire(tire, fields.tire);
   const tireClass = classOf(t, fields.tire);
   const exponent = LOAD_PRESSURE_EXPONENT[tireClass];

@@ -169,9 +169,9 @@ function setLoadRange(text: string, t: Tail, lr: LoadRange): void {
   t.loadRange = lr;
 }
 
-/** Reads the tokens after the size, in any order (see the module comment). */
-function parseTail(text: string, tokens: string[]): Tail {
-  const t: Tail = {
+/** Nothing after the size. */
+function emptyTail(): Tail {
+  return {
     loadIndex: null,
     dualLoadIndex: null,
     speedSymbol: null,
@@ -180,6 +180,11 @@ function parseTail(text: string, tokens: string[]): Tail {
     loadRange: null,
     markings: [],
   };
+}
+
+/** Reads the tokens after the size, in any order (see the module comment). */
+function parseTail(text: string, tokens: string[]): Tail {
+  const t = emptyTail();
   let rest = tokens.join(" ");
   let haveService = false;
   while (rest !== "") {
@@ -408,16 +413,7 @@ function finish(fields: Omit<TireSize, "text">): TireSize {
  */
 export function formatTireSize(size: TireSize, options: { serviceDescription?: boolean } = {}): string {
   if (options.serviceDescription === false) {
-    return buildText({
-      ...size,
-      loadIndex: null,
-      dualLoadIndex: null,
-      speedSymbol: null,
-      serviceDescriptionBracketed: false,
-      loadMarking: null,
-      loadRange: null,
-      markings: [],
-    });
+    return buildText({ ...size, ...emptyTail() });
   }
   return buildText(size);
 }

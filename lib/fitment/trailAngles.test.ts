@@ -1,18 +1,9 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { BodyPointError, FitmentInputError } from "./errors";
+import { errorField } from "./testUtil";
 import { parseTireSize } from "./tireSize";
 import { approachAngleDeg, breakoverAngleDeg, departureAngleDeg, raiseBodyPoint } from "./trailAngles";
-
-function fieldOf(f: () => unknown): string {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof FitmentInputError) return e.field;
-    throw e;
-  }
-  throw new Error("did not throw");
-}
 
 /**
  * Independent construction (no closed form): a ramp at slope θ laid against the tire touches it
@@ -77,13 +68,13 @@ describe("approach and departure angle (SAE J1100 definition, from memory)", () 
     expect(() => approachAngleDeg({ tireDiameterMm: 800, cornerHeightMm: 500, cornerOffsetMm: 300 })).toThrow(BodyPointError);
     // On the circle counts as inside: 800 mm tire, point 400 mm ahead at hub height touches it.
     expect(() => approachAngleDeg({ tireDiameterMm: 800, cornerHeightMm: 400, cornerOffsetMm: 400 })).toThrow(BodyPointError);
-    expect(fieldOf(() => approachAngleDeg({ tireDiameterMm: 800, cornerHeightMm: 500, cornerOffsetMm: 300 }))).toBe("cornerHeightMm");
-    expect(fieldOf(() => approachAngleDeg({ tireDiameterMm: 800, cornerHeightMm: 900, cornerOffsetMm: 300 }))).toBe("cornerOffsetMm");
+    expect(errorField(() => approachAngleDeg({ tireDiameterMm: 800, cornerHeightMm: 500, cornerOffsetMm: 300 }))).toBe("cornerHeightMm");
+    expect(errorField(() => approachAngleDeg({ tireDiameterMm: 800, cornerHeightMm: 900, cornerOffsetMm: 300 }))).toBe("cornerOffsetMm");
     expect(() => approachAngleDeg({ tireDiameterMm: 800, cornerHeightMm: 900, cornerOffsetMm: 300 })).toThrow(/sits over the tire/);
-    expect(fieldOf(() => approachAngleDeg({ tireDiameterMm: 800, cornerHeightMm: -1, cornerOffsetMm: 900 }))).toBe("cornerHeightMm");
-    expect(fieldOf(() => approachAngleDeg({ tireDiameterMm: Number.NaN, cornerHeightMm: 600, cornerOffsetMm: 900 }))).toBe("tireDiameterMm");
-    expect(fieldOf(() => approachAngleDeg({ tireDiameterMm: 800, cornerHeightMm: 600, cornerOffsetMm: 0 }))).toBe("cornerOffsetMm");
-    expect(fieldOf(() => approachAngleDeg(null as never))).toBe("input");
+    expect(errorField(() => approachAngleDeg({ tireDiameterMm: 800, cornerHeightMm: -1, cornerOffsetMm: 900 }))).toBe("cornerHeightMm");
+    expect(errorField(() => approachAngleDeg({ tireDiameterMm: Number.NaN, cornerHeightMm: 600, cornerOffsetMm: 900 }))).toBe("tireDiameterMm");
+    expect(errorField(() => approachAngleDeg({ tireDiameterMm: 800, cornerHeightMm: 600, cornerOffsetMm: 0 }))).toBe("cornerOffsetMm");
+    expect(errorField(() => approachAngleDeg(null as never))).toBe("input");
   });
 });
 
@@ -118,9 +109,9 @@ describe("ramp breakover angle (SAE J1100 definition, from memory)", () => {
   });
 
   it("refuses a midpoint inside the tire's circle (short wheelbase, big tire)", () => {
-    expect(fieldOf(() => breakoverAngleDeg({ tireDiameterMm: 2000, wheelbaseMm: 1000, clearanceMm: 900 }))).toBe("clearanceMm");
+    expect(errorField(() => breakoverAngleDeg({ tireDiameterMm: 2000, wheelbaseMm: 1000, clearanceMm: 900 }))).toBe("clearanceMm");
     expect(() => breakoverAngleDeg({ tireDiameterMm: 2000, wheelbaseMm: 1000, clearanceMm: 900 })).toThrow(BodyPointError);
-    expect(fieldOf(() => breakoverAngleDeg({ tireDiameterMm: 800, wheelbaseMm: 0, clearanceMm: 250 }))).toBe("wheelbaseMm");
+    expect(errorField(() => breakoverAngleDeg({ tireDiameterMm: 800, wheelbaseMm: 0, clearanceMm: 250 }))).toBe("wheelbaseMm");
     // Midway point far above the tires: the tangent lines would be vertical, nothing is limited — refused, not 180°.
     expect(() => breakoverAngleDeg({ tireDiameterMm: 1200, wheelbaseMm: 1000, clearanceMm: 2900 })).toThrow(/clearanceMm/);
   });
@@ -135,9 +126,9 @@ describe("raiseBodyPoint (the axle centre sits one radius above the ground; comm
   });
 
   it("refuses a point driven into the ground and bad numbers", () => {
-    expect(fieldOf(() => raiseBodyPoint({ heightMm: 100, currentTireDiameterMm: 900, plannedTireDiameterMm: 700, liftMm: -50 }))).toBe("liftMm");
-    expect(fieldOf(() => raiseBodyPoint({ heightMm: 600, currentTireDiameterMm: 800, plannedTireDiameterMm: 889, liftMm: 5000 }))).toBe("liftMm");
-    expect(fieldOf(() => raiseBodyPoint({ heightMm: 600, currentTireDiameterMm: 800, plannedTireDiameterMm: Number.NaN }))).toBe("plannedTireDiameterMm");
+    expect(errorField(() => raiseBodyPoint({ heightMm: 100, currentTireDiameterMm: 900, plannedTireDiameterMm: 700, liftMm: -50 }))).toBe("liftMm");
+    expect(errorField(() => raiseBodyPoint({ heightMm: 600, currentTireDiameterMm: 800, plannedTireDiameterMm: 889, liftMm: 5000 }))).toBe("liftMm");
+    expect(errorField(() => raiseBodyPoint({ heightMm: 600, currentTireDiameterMm: 800, plannedTireDiameterMm: Number.NaN }))).toBe("plannedTireDiameterMm");
   });
 });
 

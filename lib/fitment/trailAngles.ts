@@ -24,7 +24,7 @@
  * rises by the radius change ΔD/2, and with a lift by the lift's height: {@link raiseBodyPoint}.
  * A body point on or inside the tire's circle is an error (the tire would reach it).
  */
-import { BodyPointError, FitmentInputError, requireNumber } from "./errors";
+import { BodyPointError, FitmentInputError, requireNumber, requireObject } from "./errors";
 
 /** Accepted ranges, mm. */
 export const TRAIL_ANGLE_LIMITS_MM = Object.freeze({
@@ -100,9 +100,7 @@ function checkOutside(r: number, d: number, h: number, field: string, what: stri
  * approachAngleDeg({ tireDiameterMm: 800, cornerHeightMm: 600, cornerOffsetMm: 900 }); // ≈ 38.24
  */
 export function approachAngleDeg(input: CornerInput): number {
-  if (input === null || typeof input !== "object") {
-    throw new FitmentInputError("input", "input must be an object such as { tireDiameterMm: 800, cornerHeightMm: 600, cornerOffsetMm: 900 }", input);
-  }
+  requireObject("input", input, "{ tireDiameterMm: 800, cornerHeightMm: 600, cornerOffsetMm: 900 }");
   const L = TRAIL_ANGLE_LIMITS_MM;
   const r = requireNumber("tireDiameterMm", input.tireDiameterMm, L.tireDiameter.min, L.tireDiameter.max, "800", "mm") / 2;
   const h = requireNumber("cornerHeightMm", input.cornerHeightMm, L.height.min, L.height.max, "600", "mm");
@@ -143,9 +141,7 @@ export function departureAngleDeg(input: CornerInput): number {
  * breakoverAngleDeg({ tireDiameterMm: 838.2, wheelbaseMm: 2450, clearanceMm: 280 }); // ≈ 26.79 (a 33 in tire)
  */
 export function breakoverAngleDeg(input: BreakoverInput): number {
-  if (input === null || typeof input !== "object") {
-    throw new FitmentInputError("input", "input must be an object such as { tireDiameterMm: 838.2, wheelbaseMm: 2450, clearanceMm: 280 }", input);
-  }
+  requireObject("input", input, "{ tireDiameterMm: 838.2, wheelbaseMm: 2450, clearanceMm: 280 }");
   const L = TRAIL_ANGLE_LIMITS_MM;
   const r = requireNumber("tireDiameterMm", input.tireDiameterMm, L.tireDiameter.min, L.tireDiameter.max, "838.2", "mm") / 2;
   const wheelbase = requireNumber("wheelbaseMm", input.wheelbaseMm, L.wheelbase.min, L.wheelbase.max, "2450", "mm");
@@ -175,9 +171,7 @@ export function breakoverAngleDeg(input: BreakoverInput): number {
  * raiseBodyPoint({ heightMm: 600, currentTireDiameterMm: 800, plannedTireDiameterMm: 889, liftMm: 50 }); // 694.5
  */
 export function raiseBodyPoint(input: RaiseInput): number {
-  if (input === null || typeof input !== "object") {
-    throw new FitmentInputError("input", "input must be an object such as { heightMm: 600, currentTireDiameterMm: 800, plannedTireDiameterMm: 889, liftMm: 50 }", input);
-  }
+  requireObject("input", input, "{ heightMm: 600, currentTireDiameterMm: 800, plannedTireDiameterMm: 889, liftMm: 50 }");
   const L = TRAIL_ANGLE_LIMITS_MM;
   const h = requireNumber("heightMm", input.heightMm, L.height.min, L.height.max, "600", "mm");
   const dc = requireNumber("currentTireDiameterMm", input.currentTireDiameterMm, L.tireDiameter.min, L.tireDiameter.max, "800", "mm");
