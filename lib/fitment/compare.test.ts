@@ -93,6 +93,52 @@ describe("compareSetups", () => {
     expect(() => compareSetups(stock, lifted, { commonRatios: [Number.NaN] })).toThrow(/commonRatios\[0\]/);
   });
 
+  it("brakeTorqueRatio = planned ÷ current radius, the radius compare uses (half the nominal overall diameter): T = F·r (Newton, handbook), 889 / 802.8 = 1.10737", () => {
+    // D 265/70R17 = 802.8 mm (ISO 4000-1), 35x12.50R17LT = 889 mm (35 × 25.4, NIST SP 811 inch)
+    expect(c.brakeTorqueRatio).toBeCloseTo(1.10737, 5);
+    expect(c.brakeTorqueRatio).toBeCloseTo(889 / 802.8, 12);
+    expect(c.rotatingMass).toBeNull();
+  });
+
+  it("rotating mass per corner when wheel and tire masses are given: change in kg, inertia and its translating equivalent (approximation, no source: tire a uniform annulus bead seat → tread, wheel a thin ring at the bead seat)", () => {
+    const m = compareSetups(stock, lifted, { rotatingMass: { current: { wheelKg: 12, tireKg: 22 }, planned: { wheelKg: 20, tireKg: 36 } } }).rotatingMass;
+    expect(m).not.toBeNull();
+    if (m === null) return;
+    expect(m.currentKg).toBe(34);
+    expect(m.plannedKg).toBe(56);
+    expect(m.changeKg).toBe(22);
+    // Bead seat radius 17 × 25.4 / 2 = 215.9 mm; R = 401.4 mm and 444.5 mm.
+    // I_cur = ½·22·(0.2159² + 0.4014²) + 12·0.2159² = 2.28508 + 0.55935 = 2.84444 kg·m² (by hand)
+    // I_pla = ½·36·(0.2159² + 0.4445²) + 20·0.2159² = 4.39547 + 0.93226 = 5.32773 kg·m² (by hand)
+    expect(m.currentInertiaKgM2).toBeCloseTo(2.84444, 5);
+    expect(m.plannedInertiaKgM2).toBeCloseTo(5.32773, 5);
+    expect(m.inertiaRatio).toBeCloseTo(1.87304, 5);
+    // I / R²: the mass the spin adds to the vehicle's in braking and accelerating (rolling without slip; Newton)
+    expect(m.currentEquivalentMassKg).toBeCloseTo(2.84444 / 0.4014 ** 2, 3); // 17.654 kg
+    expect(m.plannedEquivalentMassKg).toBeCloseTo(5.32773 / 0.4445 ** 2, 3); // 26.965 kg
+    expect(m.approximation).toMatch(/approximation/);
+  });
+
+  it("the equivalent mass lies between all the mass as a thin ring at the bead seat and all of it at the tread (thin ring I = m·r², textbook)", () => {
+    const m = compareSetups(stock, lifted, { rotatingMass: { current: { wheelKg: 10, tireKg: 30 }, planned: { wheelKg: 10, tireKg: 30 } } }).rotatingMass;
+    const rb = (17 * 25.4) / 2000;
+    const R = 0.4014;
+    expect(m?.currentEquivalentMassKg).toBeCloseTo((0.5 * 30 * (rb ** 2 + R ** 2) + 10 * rb ** 2) / R ** 2, 9);
+    expect(m?.currentEquivalentMassKg).toBeGreaterThan(40 * (rb / R) ** 2);
+    expect(m?.currentEquivalentMassKg).toBeLessThan(40);
+    expect(m?.changeKg).toBe(0);
+  });
+
+  it("rotating masses partly given or impossible are refused naming the field", () => {
+    expect(() => compareSetups(stock, lifted, { rotatingMass: { current: { wheelKg: 12, tireKg: 22 } } as never })).toThrow(/rotatingMass\.planned/);
+    expect(() => compareSetups(stock, lifted, { rotatingMass: { current: { wheelKg: 12, tireKg: 22 }, planned: { wheelKg: 20, tireKg: -1 } } })).toThrow(
+      /rotatingMass\.planned\.tireKg/,
+    );
+    expect(() => compareSetups(stock, lifted, { rotatingMass: { current: { wheelKg: Number.NaN, tireKg: 22 }, planned: { wheelKg: 20, tireKg: 30 } } })).toThrow(
+      FitmentInputError,
+    );
+  });
+
   const setup = fc
     .record({
       size: fc.constantFrom(...STANDARD_SIZES),
@@ -121,6 +167,7 @@ describe("compareSetups", () => {
         for (const row of r.speedometer.rows) expect(row.actualMph).toBe(row.indicatedMph);
         for (const row of r.gearing.rpmAt) expect(row.plannedRpm).toBe(row.currentRpm);
         expect(r.gearing.ratioToRestore).toBe(o.axleRatio);
+        expect(r.brakeTorqueRatio).toBe(1);
       }),
       { numRuns: 1000 },
     );

@@ -15,8 +15,18 @@
  *   common ring-and-pinion ratios.
  * - engine speed RPM = mph · axle · transmission · 336.135 / D(in) (handbook formula;
  *   336.135 ≈ 63 360 in/mile ÷ 60 min/h ÷ π). Tire slip and loaded radius are ignored.
+ * - brake torque ratio = r_planned / r_current: the same stop needs the same force at the ground,
+ *   and torque = force × radius (Newton). The radius is the one used throughout this comparison,
+ *   half the nominal overall diameter (ISO 4000-1 D = d + 2H, or the flotation D); the loaded
+ *   radius and the extra torque to slow a heavier wheel are not in this ratio.
+ * - rotating mass per corner (when wheel and tire masses are given): the change in kg, and the
+ *   moment of inertia by an approximation (no source): the tire a uniform annulus from the bead
+ *   seat radius r_b = d/2 to the tread radius R, I = ½·m·(r_b² + R²); the wheel a thin ring at
+ *   r_b, I = m·r_b² (an upper bound: real wheels carry part of their mass in the centre).
+ *   Equivalent translating mass I / R² (rolling without slip): what the spin adds to the mass the
+ *   brakes and engine must slow and speed up.
  */
-import { FitmentInputError, requireNumber } from "./errors";
+import { FitmentInputError, requireNumber, requireObject } from "./errors";
 import { type SetupGeometry, type SetupInput, setupGeometry } from "./geometry";
 import { MM_PER_IN } from "./units";
 
@@ -39,6 +49,12 @@ export const DEFAULT_TRANSMISSION_RATIO = 1.0;
 /** Default kingpin inclination: 0° (no vehicle value assumed). */
 export const DEFAULT_KPI_DEG = 0;
 
+/** Mass of one wheel and one tire, kg. */
+export interface CornerMass {
+  wheelKg: number;
+  tireKg: number;
+}
+
 /** Options of {@link compareSetups}. */
 export interface CompareOptions {
   kingpinInclinationDeg?: number;
@@ -46,6 +62,28 @@ export interface CompareOptions {
   transmissionRatio?: number;
   speedsMph?: readonly number[];
   commonRatios?: readonly number[];
+  /** Wheel and tire masses of each setup; gives `rotatingMass` in the result. */
+  rotatingMass?: { current: CornerMass; planned: CornerMass };
+}
+
+/** Accepted masses of one wheel and one tire, kg. */
+export const CORNER_MASS_LIMITS_KG = Object.freeze({ wheel: { min: 0, max: 150 }, tire: { min: 1, max: 200 } });
+
+/** Change of rotating mass per corner (see the module comment for the approximation). */
+export interface RotatingMassComparison {
+  /** Wheel + tire, kg. */
+  currentKg: number;
+  plannedKg: number;
+  changeKg: number;
+  /** Moment of inertia about the axle, kg·m² (approximation). */
+  currentInertiaKgM2: number;
+  plannedInertiaKgM2: number;
+  inertiaRatio: number;
+  /** I / R²: mass the spin adds to the vehicle's when slowing or speeding up, kg. */
+  currentEquivalentMassKg: number;
+  plannedEquivalentMassKg: number;
+  /** How the inertia was estimated. */
+  approximation: string;
 }
 
 /** A setup given as input, or its already computed geometry. */
@@ -62,6 +100,10 @@ export interface SetupComparison {
   scrubRadiusChangeMm: number;
   trackWidthChangeMm: number;
   speedometer: { ratio: number; rows: { indicatedMph: number; actualMph: number }[] };
+  /** Brake torque the same stop needs with the planned tire ÷ with the current one (radius ratio). */
+  brakeTorqueRatio: number;
+  /** Null unless `options.rotatingMass` is given. */
+  rotatingMass: RotatingMassComparison | null;
   gearing: {
     axleRatio: number;
     transmissionRatio: number;
@@ -132,6 +174,49 @@ function checkList(field: string, list: unknown, min: number, max: number, examp
 
 const zero = (x: number): number => (x === 0 ? 0 : x);
 
+const ROTATING_APPROXIMATION =
+  "approximation, no source: tire a uniform annulus from the bead seat to the tread, I = ½·m·(r_b² + R²); wheel a thin ring at the bead seat, I = m·r_b² (an upper bound)";
+
+function cornerMass(field: string, value: unknown): CornerMass {
+  const v = requireObject(field, value as Partial<CornerMass>, "{ wheelKg: 20, tireKg: 36 } (one wheel and one tire)");
+  const L = CORNER_MASS_LIMITS_KG;
+  return {
+    wheelKg: requireNumber(`${field}.wheelKg`, v.wheelKg, L.wheel.min, L.wheel.max, "20", "kg"),
+    tireKg: requireNumber(`${field}.tireKg`, v.tireKg, L.tire.min, L.tire.max, "36", "kg"),
+  };
+}
+
+/** Moment of inertia of one wheel and tire, kg·m² (approximation: see the module comment). */
+function cornerInertia(m: CornerMass, g: SetupGeometry): number {
+  const rb = (g.tire.rimDiameterIn * MM_PER_IN) / 2000;
+  const R = g.overallRadiusMm / 1000;
+  return 0.5 * m.tireKg * (rb * rb + R * R) + m.wheelKg * rb * rb;
+}
+
+function compareRotating(option: CompareOptions["rotatingMass"], cur: SetupGeometry, pla: SetupGeometry): RotatingMassComparison | null {
+  if (option === undefined) return null;
+  requireObject("rotatingMass", option, "{ current: { wheelKg: 12, tireKg: 22 }, planned: { wheelKg: 20, tireKg: 36 } }");
+  const mc = cornerMass("rotatingMass.current", option.current);
+  const mp = cornerMass("rotatingMass.planned", option.planned);
+  const ic = cornerInertia(mc, cur);
+  const ip = cornerInertia(mp, pla);
+  const rc = cur.overallRadiusMm / 1000;
+  const rp = pla.overallRadiusMm / 1000;
+  const currentKg = mc.wheelKg + mc.tireKg;
+  const plannedKg = mp.wheelKg + mp.tireKg;
+  return {
+    currentKg,
+    plannedKg,
+    changeKg: zero(plannedKg - currentKg),
+    currentInertiaKgM2: ic,
+    plannedInertiaKgM2: ip,
+    inertiaRatio: ip / ic,
+    currentEquivalentMassKg: ic / (rc * rc),
+    plannedEquivalentMassKg: ip / (rp * rp),
+    approximation: ROTATING_APPROXIMATION,
+  };
+}
+
 /**
  * Compares a current and a planned setup (tire + wheel + optional spacer).
  * Accepts raw inputs or precomputed {@link SetupGeometry} objects.
@@ -144,6 +229,10 @@ const zero = (x: number): number => (x === 0 ? 0 : x);
  * );
  * c.diameterChangeMm;        // 86.2
  * c.gearing.suggestedRatio;  // 4.1
+ * c.brakeTorqueRatio;        // 889 / 802.8 ≈ 1.107
+ * // the same two setups with the mass of one wheel and one tire each:
+ * // { rotatingMass: { current: { wheelKg: 12, tireKg: 22 }, planned: { wheelKg: 20, tireKg: 36 } } }
+ * // → rotatingMass.changeKg 22, inertiaRatio ≈ 1.87
  */
 export function compareSetups(current: SetupLike, planned: SetupLike, options: CompareOptions = {}): SetupComparison {
   const cur = isGeometry(current) ? current : setupGeometry(current);
@@ -199,6 +288,8 @@ export function compareSetups(current: SetupLike, planned: SetupLike, options: C
     scrubRadiusChangeMm: zero(scrub),
     trackWidthChangeMm: zero(2 * shift),
     speedometer: { ratio, rows: speedRows },
+    brakeTorqueRatio: ratio,
+    rotatingMass: compareRotating(options.rotatingMass, cur, pla),
     gearing: {
       axleRatio: axle,
       transmissionRatio: trans,

@@ -41,6 +41,47 @@ export class TireSizeError extends FitmentInputError {
   }
 }
 
+/**
+ * Thrown when a figure is beyond what the tire allows rather than mistyped: a load above the
+ * tire's maximum (`unit` "kg") or a pressure above its sidewall maximum (`unit` "kPa"). The
+ * message says why and gives an accepted example; `limit` is the tire's figure.
+ *
+ * @example
+ * try { pressureForLoad("LT265/75R16 123/120S LRE", 1600); }
+ * catch (e) { if (e instanceof TireLimitError) console.log(e.limit, e.unit); } // 1550 "kg"
+ */
+export class TireLimitError extends FitmentInputError {
+  /** The tire's maximum the value exceeds. */
+  readonly limit: number;
+  readonly unit: "kg" | "kPa";
+
+  constructor(field: string, message: string, value: unknown, limit: number, unit: "kg" | "kPa") {
+    super(field, message, value);
+    this.name = "TireLimitError";
+    this.limit = limit;
+    this.unit = unit;
+  }
+}
+
+/**
+ * Thrown by the trail-angle functions when a body point is on or inside the tire's circle (the
+ * tire would reach it) or sits over the tire (it limits no angle). `tireRadiusMm` is the radius
+ * used.
+ *
+ * @example
+ * try { approachAngleDeg({ tireDiameterMm: 800, cornerHeightMm: 500, cornerOffsetMm: 300 }); }
+ * catch (e) { if (e instanceof BodyPointError) console.log(e.field); } // "cornerHeightMm"
+ */
+export class BodyPointError extends FitmentInputError {
+  readonly tireRadiusMm: number;
+
+  constructor(field: string, message: string, value: unknown, tireRadiusMm: number) {
+    super(field, message, value);
+    this.name = "BodyPointError";
+    this.tireRadiusMm = tireRadiusMm;
+  }
+}
+
 /** Formats a received value for an error message. */
 function show(value: unknown): string {
   if (typeof value === "string") return JSON.stringify(value.length > 60 ? value.slice(0, 60) + "…" : value);
@@ -84,4 +125,19 @@ export function requireInteger(field: string, value: unknown, min: number, max: 
     throw new FitmentInputError(field, `${field} must be a whole number, got ${show(value)} (e.g. ${example})`, value);
   }
   return value as number;
+}
+
+/**
+ * Checks that `value` is an object (the input of a function taking named fields); returns it or
+ * throws a {@link FitmentInputError} naming the field with an example of the expected shape.
+ *
+ * @example
+ * requireObject("input", { tireDiameterMm: 800 }, "{ tireDiameterMm: 800 }"); // the object
+ * requireObject("input", null, "{ tireDiameterMm: 800 }");                    // throws
+ */
+export function requireObject<T extends object>(field: string, value: T, example: string): T {
+  if (value === null || typeof value !== "object") {
+    throw new FitmentInputError(field, `${field} must be an object such as ${example}, got ${show(value)}`, value);
+  }
+  return value;
 }

@@ -2,7 +2,7 @@
  * Hubface fitment engine — public entry point. Pure, deterministic, SI (mm) inside.
  * See README.md in this folder for conventions, formulas and sources.
  */
-export { FitmentInputError, TireSizeError } from "./errors";
+export { FitmentInputError, TireSizeError, TireLimitError, BodyPointError } from "./errors";
 export {
   MM_PER_IN,
   MM_PER_MILE,
@@ -46,7 +46,38 @@ export {
   type TireSystem,
   type ServiceType,
   type Construction,
+  type TireMarking,
 } from "./tireSize";
+export {
+  LOAD_PRESSURE_EXPONENT,
+  PASSENGER_ON_LIGHT_TRUCK_DIVISOR,
+  PASSENGER_REFERENCE_KPA,
+  PASSENGER_MAX_INFLATION_KPA,
+  ROAD_MINIMUM_KPA,
+  ROAD_MINIMUM_RATIO,
+  LOAD_PRESSURE_LIMITS,
+  loadAtPressure,
+  pressureForLoad,
+  loadPressureBasis,
+  type TireLoadClass,
+  type VehicleKind,
+  type LoadPressureOptions,
+  type LoadPressureSources,
+  type LoadPressureBasis,
+  type LoadAtPressure,
+  type PressureForLoad,
+} from "./loadPressure";
+export { equivalentPressure, type EquivalentPressureInput, type EquivalentPressure } from "./equivalentPressure";
+export {
+  TRAIL_ANGLE_LIMITS_MM,
+  approachAngleDeg,
+  departureAngleDeg,
+  breakoverAngleDeg,
+  raiseBodyPoint,
+  type CornerInput,
+  type BreakoverInput,
+  type RaiseInput,
+} from "./trailAngles";
 export {
   SECTION_WIDTH_K,
   RIM_WIDTH_TOLERANCE_IN,
@@ -85,6 +116,7 @@ export {
   DEFAULT_AXLE_RATIO,
   DEFAULT_TRANSMISSION_RATIO,
   DEFAULT_KPI_DEG,
+  CORNER_MASS_LIMITS_KG,
   compareSetups,
   crawlRatio,
   effectiveCrawlRatio,
@@ -92,6 +124,8 @@ export {
   type CompareOptions,
   type SetupLike,
   type SetupComparison,
+  type CornerMass,
+  type RotatingMassComparison,
 } from "./compare";
 export {
   BOLT_COUNT_LIMITS,

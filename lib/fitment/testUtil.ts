@@ -1,3 +1,5 @@
+import { FitmentInputError } from "./errors";
+
 /**
  * Test helper (not exported from index): every number reachable in a value, with its path.
  * @example numbersIn({ a: [1, 2] }); // [{ path: "$.a[0]", value: 1 }, { path: "$.a[1]", value: 2 }]
@@ -17,4 +19,18 @@ export function numbersIn(value: unknown, path = "$", out: { path: string; value
  */
 export function nonFinite(value: unknown): string[] {
   return numbersIn(value).filter((n) => !Number.isFinite(n.value)).map((n) => n.path);
+}
+
+/**
+ * The `field` of the FitmentInputError `f` throws; fails when it throws anything else or nothing.
+ * @example errorField(() => loadIndexKg(-1)); // "loadIndex"
+ */
+export function errorField(f: () => unknown): string {
+  try {
+    f();
+  } catch (e) {
+    if (e instanceof FitmentInputError) return e.field;
+    throw e;
+  }
+  throw new Error("expected a FitmentInputError, nothing was thrown");
 }

@@ -1,6 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { TireSizeError } from "./errors";
+import { loadIndexKg } from "./loadSpeed";
 import { formatTireSize, parseTireSize } from "./tireSize";
 
 describe("parseTireSize — metric (ISO 4000-1 designation)", () => {
@@ -127,6 +128,107 @@ describe("parseTireSize — flotation and numeric", () => {
   });
 });
 
+describe("parseTireSize — what people copy from a sidewall", () => {
+  // The markings that follow the service description: mud-and-snow (M+S), the severe-snow
+  // pictogram (three-peak mountain snowflake), extra load / reinforced, run-flat, load range
+  // (UN R30 / ECE R117 markings and TRA load range letters; spellings people type are common
+  // practice, no source).
+  it("mud-and-snow: M+S, M/S, M&S, MS and 'mud and snow' all read as M+S", () => {
+    for (const v of ["M+S", "M/S", "M&S", "m+s", "MS", "Mud and Snow", "M + S"]) {
+      const t = parseTireSize(`LT285/70R17 121/118Q ${v}`);
+      expect(t.markings, v).toEqual(["M+S"]);
+      expect(t.text, v).toBe("LT285/70R17 121/118Q M+S");
+    }
+  });
+
+  it("severe-snow mark: 3PMSF, 3PMS, the words spelled out and the snowflake sign read as 3PMSF", () => {
+    for (const v of ["3PMSF", "3pms", "3 Peak Mountain Snowflake", "three-peak mountain snowflake", "Three Peak Mountain Snow Flake", "mountain snowflake", "severe snow", "\u2744"]) {
+      expect(parseTireSize(`265/70R17 115T ${v}`).markings, v).toEqual(["3PMSF"]);
+    }
+  });
+
+  it("extra load and reinforced spelled out read as XL and RF; standard load as SL", () => {
+    expect(parseTireSize("225/45R17 94W Extra Load").loadMarking).toBe("XL");
+    expect(parseTireSize("225/45R17 94W Reinforced").loadMarking).toBe("RF");
+    expect(parseTireSize("225/45R17 94W reinf").loadMarking).toBe("RF");
+    expect(parseTireSize("225/45R17 91W Standard Load").loadMarking).toBe("SL");
+    expect(parseTireSize("225/45R17 94W Extra Load").text).toBe("225/45R17 94W XL");
+  });
+
+  it("run-flat: RFT, run-flat, runflat, run flat, ROF and ZP read as RUN-FLAT", () => {
+    for (const v of ["RFT", "run-flat", "RunFlat", "run flat", "ROF", "ZP"]) {
+      const t = parseTireSize(`225/45R17 91W ${v}`);
+      expect(t.markings, v).toEqual(["RUN-FLAT"]);
+      expect(t.text, v).toBe("225/45R17 91W RUN-FLAT");
+    }
+  });
+
+  it("load range as LRE, LR E, LR-E, Load Range E, (E), E or 10PR, in any place after the size", () => {
+    for (const v of ["LRE", "LR E", "LR-E", "Load Range E", "(E)", "E", "10PR", "10 ply"]) {
+      expect(parseTireSize(`LT265/75R16 123/120S ${v}`).loadRange, v).toBe("E");
+      expect(parseTireSize(`LT265/75R16 ${v} 123/120S`).loadRange, v).toBe("E");
+    }
+    expect(parseTireSize("LT265/75R16 LRE 123/120S").text).toBe("LT265/75R16 123/120S LRE");
+  });
+
+  it("several markings in any order normalize to one text: service description, load marking, load range, then M+S, 3PMSF, RUN-FLAT", () => {
+    const a = parseTireSize("LT285/70R17 M+S 3PMSF 121/118Q Load Range E");
+    const b = parseTireSize("lt285/70r17 121/118q lre 3pmsf m/s");
+    expect(a.text).toBe("LT285/70R17 121/118Q LRE M+S 3PMSF");
+    expect(b).toEqual(a);
+    expect(a).toMatchObject({ loadIndex: 121, dualLoadIndex: 118, speedSymbol: "Q", loadRange: "E", markings: ["M+S", "3PMSF"] });
+    const xl = parseTireSize("245/45R19 102V XL RFT M+S");
+    expect(xl).toMatchObject({ loadMarking: "XL", markings: ["M+S", "RUN-FLAT"], text: "245/45R19 102V XL M+S RUN-FLAT" });
+  });
+
+  it("a repeated marking is read once; a contradicting one is refused with the accepted forms", () => {
+    expect(parseTireSize("265/70R17 115T M+S M/S").markings).toEqual(["M+S"]);
+    expect(() => parseTireSize("225/45R17 94W XL SL")).toThrow(TireSizeError);
+    expect(() => parseTireSize("LT285/70R17 LRE LRD")).toThrow(/load range given twice.*265\/70R17/);
+    expect(() => parseTireSize("LT285/70R17 121/118Q 121/118Q")).toThrow(/service description given twice/);
+    expect(() => parseTireSize("265/70R17 115T snow")).toThrow(/unexpected "SNOW".*M\+S/);
+  });
+
+  it("ETRTO commercial size with the C suffix and its dual load index: 235/65R16C 121/119R → single 121 (1450 kg), dual 119 (1360 kg) (ISO 4000-1 table)", () => {
+    const t = parseTireSize("235/65R16C 121/119R");
+    expect(t).toMatchObject({
+      system: "metric",
+      service: null,
+      commercial: true,
+      sectionWidthMm: 235,
+      aspectRatio: 65,
+      rimDiameterIn: 16,
+      loadIndex: 121,
+      dualLoadIndex: 119,
+      speedSymbol: "R",
+      text: "235/65R16C 121/119R",
+    });
+    // D = d + 2H (ISO 4000-1): 16 × 25.4 + 2 × 235 × 0.65 = 406.4 + 305.5 = 711.9 mm
+    expect(t.overallDiameterMm).toBeCloseTo(711.9, 9);
+    expect(loadIndexKg(t.loadIndex ?? -1)).toBe(1450); // single fitment (ISO 4000-1 table)
+    expect(loadIndexKg(t.dualLoadIndex ?? -1)).toBe(1360); // dual fitment (ISO 4000-1 table)
+    expect(parseTireSize("235/65 r16c 121/119r 8PR").loadRange).toBe("D");
+    expect(parseTireSize("7.50R16C 116/114N")).toMatchObject({ system: "numeric", commercial: true, text: "7.50R16C 116/114N" });
+    expect(parseTireSize("265/70R17").commercial).toBe(false);
+  });
+
+  it("a C after a space is still the load range C (as before); C with an LT or P prefix is refused", () => {
+    expect(parseTireSize("LT225/75R16 C")).toMatchObject({ commercial: false, loadRange: "C" });
+    expect(() => parseTireSize("LT235/65R16C")).toThrow(/service type given twice/);
+    expect(() => parseTireSize("P235/65R16C")).toThrow(TireSizeError);
+  });
+
+  it("flotation sizes typed without the decimal point: 35x1250R17 → 35x12.50R17, 33X1250R15LT → 33x12.50R15LT, 31x1050R15 → 31x10.50R15", () => {
+    expect(parseTireSize("35x1250R17").text).toBe("35x12.50R17");
+    expect(parseTireSize("33X1250R15LT").text).toBe("33x12.50R15LT");
+    expect(parseTireSize("31x1050R15 109Q LRC").text).toBe("31x10.50R15 109Q LRC");
+    expect(parseTireSize("37x1250r17lt")).toEqual(parseTireSize("37x12.50R17LT"));
+    // 12.50 in = 317.5 mm (NIST SP 811 inch)
+    expect(parseTireSize("35x1250R17").sectionWidthMm).toBeCloseTo(317.5, 9);
+    expect(() => parseTireSize("35x125R17")).toThrow(/section width 1.25 in/);
+  });
+});
+
 describe("parseTireSize — invalid input", () => {
   const bad = ["", "abc", "265/70", "265/7R17", "265/70R", "265/70R17 999Q", "265/70R17 121X", "20x12.50R17", "265/70R40", "37x12.50R17LT extra words", "LT265/70R17LT"];
   for (const text of bad) {
@@ -191,11 +293,15 @@ describe("parseTireSize — properties (fast-check)", () => {
       speed: fc.option(fc.constantFrom("A8", "B", "J", "Q", "R", "S", "T", "H", "V", "W", "Y")),
       lr: fc.option(fc.constantFrom("C", "D", "E", "F")),
       bracket: fc.boolean(),
+      commercial: fc.boolean(),
+      marks: fc.subarray(["M+S", "3PMSF", "RFT", "XL"]),
     })
     .map((r) => {
       const inner = `${r.li}${r.dual === null ? "" : `/${r.dual}`}${r.speed ?? ""}`;
       const sd = r.li === null ? "" : ` ${r.bracket ? `(${inner})` : inner}`;
-      return `${r.prefix}${r.width}/${r.aspect}${r.cons}${r.rim}${sd}${r.lr === null ? "" : ` LR${r.lr}`}`;
+      const c = r.commercial && r.prefix === "" ? "C" : "";
+      const marks = r.marks.length === 0 ? "" : ` ${r.marks.join(" ")}`;
+      return `${r.prefix}${r.width}/${r.aspect}${r.cons}${r.rim}${c}${sd}${r.lr === null ? "" : ` LR${r.lr}`}${marks}`;
     });
   const flotation = fc
     .record({

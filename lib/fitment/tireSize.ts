@@ -2,14 +2,21 @@
  * Tire size designations: parsing and formatting.
  *
  * Three systems are understood (ISO 4000-1 / ETRTO / TRA designations):
- * - metric: `[P|LT|ST|T]<width mm>/<aspect ratio><R|D|B|ZR|-><rim in>[LT] [service description]`,
- *   e.g. `LT285/70R17 121/118Q`, `P225/75R15 102S`, `205/55R16 91V`, `255/35ZR18 94Y`;
- * - flotation: `<overall diameter in>x<section width in><R|D|B|-><rim in>[LT]`, e.g. `37x12.50R17LT`;
- * - numeric: `<section width in><R|D|B|-><rim in>`, e.g. `7.50R16`, `7.50-16`.
+ * - metric: `[P|LT|ST|T]<width mm>/<aspect ratio><R|D|B|ZR|-><rim in>[LT|C] [service description]`,
+ *   e.g. `LT285/70R17 121/118Q`, `P225/75R15 102S`, `205/55R16 91V`, `255/35ZR18 94Y`, and the
+ *   ETRTO commercial (`C`) sizes with their single/dual load indexes, `235/65R16C 121/119R`;
+ * - flotation: `<overall diameter in>x<section width in><R|D|B|-><rim in>[LT]`, e.g. `37x12.50R17LT`,
+ *   also typed without the decimal point (`35x1250R17` → `35x12.50R17`);
+ * - numeric: `<section width in><R|D|B|-><rim in>[LT|C]`, e.g. `7.50R16`, `7.50-16`, `7.50R16C`.
  *
- * After the size an optional service description (`121/118Q`: load index, dual load index, speed
- * symbol), an optional `XL`/`SL`/`RF` marking and an optional load range (`LRE`, `Load Range E`,
- * `E`, `10PR`) are accepted, in that order.
+ * After the size come, in any order, what people copy from a sidewall: the service description
+ * (`121/118Q`: load index, dual load index, speed symbol), a load marking (`XL`/`Extra Load`,
+ * `RF`/`Reinforced`, `SL`/`Standard Load`), a load range (`LRE`, `LR E`, `Load Range E`, `(E)`,
+ * `E`, `10PR`, `10 ply`) and the markings mud-and-snow (`M+S`, `M/S`, `M&S`), severe snow
+ * (`3PMSF`, the three-peak mountain snowflake spelled out, `❄`) and run-flat (`RFT`, `run-flat`,
+ * `ROF`, `ZP`). The normalized text puts them in one order: service description, load marking,
+ * load range, then `M+S`, `3PMSF`, `RUN-FLAT`. A `C` glued to the rim diameter is the commercial
+ * suffix; a `C` after a space stays the load range C (as before).
  *
  * Dimensions (mm): metric section height H = S·AR/100 and overall diameter D = d + 2H
  * (ISO 4000-1 / ETRTO / UN R30). Flotation sizes state D and S in inches; their aspect ratio is
@@ -27,6 +34,13 @@ export type TireSystem = "metric" | "flotation" | "numeric";
 export type ServiceType = "P" | "LT" | "ST" | "T";
 /** Construction code: radial, diagonal (bias), belted bias, or `-` (bias, numeric style). */
 export type Construction = "R" | "D" | "B" | "-";
+/**
+ * A sidewall marking beyond the size, load and speed: mud-and-snow (`M+S`), the severe-snow
+ * pictogram (three-peak mountain snowflake, `3PMSF`) and run-flat (`RUN-FLAT`).
+ */
+export type TireMarking = "M+S" | "3PMSF" | "RUN-FLAT";
+/** Order of the markings in the normalized text. */
+const MARKING_ORDER: readonly TireMarking[] = ["M+S", "3PMSF", "RUN-FLAT"];
 
 /** A parsed tire size. All lengths in mm, the rim diameter in inches (as marked). */
 export interface TireSize {
@@ -34,6 +48,8 @@ export interface TireSize {
   readonly text: string;
   readonly system: TireSystem;
   readonly service: ServiceType | null;
+  /** ETRTO commercial size: the `C` suffix after the rim diameter (`235/65R16C`). */
+  readonly commercial: boolean;
   readonly construction: Construction;
   /** `ZR` in the size: construction R for speeds above 240 km/h. */
   readonly speedRatedConstruction: boolean;
@@ -56,6 +72,8 @@ export interface TireSize {
   readonly loadRange: LoadRange | null;
   /** `XL` (extra load), `SL` (standard load) or `RF` (reinforced) marking, when given. */
   readonly loadMarking: "XL" | "SL" | "RF" | null;
+  /** Other sidewall markings, in the order of {@link TireMarking}: `M+S`, `3PMSF`, `RUN-FLAT`. */
+  readonly markings: readonly TireMarking[];
   /** Flotation only: overall diameter as designated, inches. */
   readonly designatedDiameterIn: number | null;
   /** Flotation and numeric: section width as designated, inches. */
@@ -66,11 +84,12 @@ export interface TireSize {
 export const NUMERIC_ASPECT_RATIO = 92;
 
 const EXAMPLES =
-  "accepted forms: 265/70R17, LT285/70R17 121/118Q, P225/75R15 102S, 37x12.50R17LT, 7.50R16";
+  "accepted forms: 265/70R17, LT285/70R17 121/118Q LRE M+S, P225/75R15 102S, 235/65R16C 121/119R, 37x12.50R17LT, 7.50R16";
 
-const METRIC_RE = /^(P|LT|ST|T)?(\d{3})\/(\d{2,3})(ZR|R|D|B|-)(\d{2}(?:\.5)?)(LT)?$/;
-const FLOTATION_RE = /^(LT)?(\d{2}(?:\.\d)?)X(\d{1,2}(?:\.\d{1,2})?)(R|D|B|-)(\d{2}(?:\.5)?)(LT)?$/;
-const NUMERIC_RE = /^(LT|ST|T)?(\d{1,2}\.\d{2})(R|D|B|-)(\d{2}(?:\.5)?)(LT)?$/;
+const METRIC_RE = /^(P|LT|ST|T)?(\d{3})\/(\d{2,3})(ZR|R|D|B|-)(\d{2}(?:\.5)?)(LT|C)?$/;
+// The section may be typed without its decimal point: 1250 = 12.50 (3 or 4 digits, see below).
+const FLOTATION_RE = /^(LT)?(\d{2}(?:\.\d)?)X(\d{1,2}(?:\.\d{1,2})?|\d{3,4})(R|D|B|-)(\d{2}(?:\.5)?)(LT)?$/;
+const NUMERIC_RE = /^(LT|ST|T)?(\d{1,2}\.\d{2})(R|D|B|-)(\d{2}(?:\.5)?)(LT|C)?$/;
 const SERVICE_RE = /^(\()?(\d{1,3})(?:\/(\d{1,3}))?(A[1-8]|[B-HJ-NP-WY])?(\))?$/;
 
 function fail(text: string, why: string): never {
@@ -92,53 +111,115 @@ interface Tail {
   serviceDescriptionBracketed: boolean;
   loadMarking: "XL" | "SL" | "RF" | null;
   loadRange: LoadRange | null;
+  markings: TireMarking[];
 }
 
+/** What may follow the size, for the message when something else does. */
+const TAIL_FORMS =
+  "expected a service description (121/118Q), XL, RF, a load range (LRE, Load Range E, 10PR) or a marking (M+S, 3PMSF, RFT)";
+
+/**
+ * Phrases read after the size, each anchored at the start of what is left and ending at a space
+ * or the end. Spellings are what people type or copy (common practice, no source); the marks
+ * themselves are the sidewall markings of UN R30 / UN R117 (M+S, the severe-snow pictogram) and
+ * the trade's load markings (XL, RF) and load range letters (TRA).
+ */
+const LOAD_MARKING_RE = /^(XL|EXTRA ?-?LOAD|SL|STANDARD ?-?LOAD|RF|REINF\.?|REINFORCED)(?= |$)/;
+const LOAD_RANGE_RE = /^(?:LR ?-?|LOAD ?-?RANGE ?-?|\()?([B-HJLMN])\)?(?= |$)/;
+const PLY_RE = /^(\d{1,2}) ?(?:PR|PLY)(?= |$)/;
+const MARKING_RES: readonly [RegExp, TireMarking][] = [
+  [/^(?:M ?[+&/] ?S|M\.S\.|MS|MUD (?:AND|&|\+) SNOW)(?= |$)/, "M+S"],
+  [
+    /^(?:3PMSF|3PMS|(?:3|THREE) ?-?PEAK ?-?MOUNTAIN ?-?SNOW ?FLAKE|MOUNTAIN ?-?SNOW ?FLAKE|SEVERE ?-?SNOW|\u{1F3D4}? ?\u2744\uFE0F?)(?= |$)/u,
+    "3PMSF",
+  ],
+  [/^(?:RFT|RUN ?-?FLAT|ROF|ZP)(?= |$)/, "RUN-FLAT"],
+];
+
+/** The marking phrase at the start of `rest`, if any. */
+function matchMarking(rest: string): { mark: TireMarking; used: string } | null {
+  for (const [re, mark] of MARKING_RES) {
+    const m = re.exec(rest);
+    if (m) return { mark, used: m[0] };
+  }
+  return null;
+}
+
+function readServiceDescription(text: string, token: string, t: Tail): void {
+  const m = SERVICE_RE.exec(token);
+  if (!m) fail(text, `service description ${JSON.stringify(token)} is not load index[/dual] + speed symbol like 121/118Q`);
+  if ((m[1] === undefined) !== (m[5] === undefined)) fail(text, `unbalanced brackets in ${JSON.stringify(token)}`);
+  t.serviceDescriptionBracketed = m[1] !== undefined;
+  const li = Number(m[2]);
+  checkLoadIndex(text, li);
+  t.loadIndex = li;
+  if (m[3] !== undefined) {
+    const dual = Number(m[3]);
+    checkLoadIndex(text, dual);
+    t.dualLoadIndex = dual;
+  }
+  if (m[4] !== undefined) {
+    if (SPEED_SYMBOL_KMH[m[4]] === undefined) fail(text, `unknown speed symbol ${m[4]}`);
+    t.speedSymbol = m[4];
+  }
+}
+
+function setLoadRange(text: string, t: Tail, lr: LoadRange): void {
+  if (t.loadRange !== null && t.loadRange !== lr) fail(text, `load range given twice (${t.loadRange} and ${lr})`);
+  t.loadRange = lr;
+}
+
+/** Nothing after the size. */
+function emptyTail(): Tail {
+  return {
+    loadIndex: null,
+    dualLoadIndex: null,
+    speedSymbol: null,
+    serviceDescriptionBracketed: false,
+    loadMarking: null,
+    loadRange: null,
+    markings: [],
+  };
+}
+
+/** Reads the tokens after the size, in any order (see the module comment). */
 function parseTail(text: string, tokens: string[]): Tail {
-  const t: Tail = { loadIndex: null, dualLoadIndex: null, speedSymbol: null, serviceDescriptionBracketed: false, loadMarking: null, loadRange: null };
-  let i = 0;
-  const first = tokens[0];
-  const plyLike =
-    first !== undefined &&
-    (/^\d{1,2}(?:PR|PLY)$/.test(first) || (/^\d{1,2}$/.test(first) && (tokens[1] === "PR" || tokens[1] === "PLY")));
-  if (first !== undefined && !plyLike && /^\(?\d/.test(first)) {
-    const m = SERVICE_RE.exec(first);
-    if (!m) fail(text, `service description ${JSON.stringify(first)} is not load index[/dual] + speed symbol like 121/118Q`);
-    if ((m[1] === undefined) !== (m[5] === undefined)) fail(text, `unbalanced brackets in ${JSON.stringify(first)}`);
-    t.serviceDescriptionBracketed = m[1] !== undefined;
-    const li = Number(m[2]);
-    checkLoadIndex(text, li);
-    t.loadIndex = li;
-    if (m[3] !== undefined) {
-      const dual = Number(m[3]);
-      checkLoadIndex(text, dual);
-      t.dualLoadIndex = dual;
-    }
-    if (m[4] !== undefined) {
-      if (SPEED_SYMBOL_KMH[m[4]] === undefined) fail(text, `unknown speed symbol ${m[4]}`);
-      t.speedSymbol = m[4];
-    }
-    i = 1;
-  }
-  const tok = tokens[i];
-  if (tok === "XL" || tok === "SL" || tok === "RF") {
-    t.loadMarking = tok;
-    i++;
-  }
-  const rest = tokens.slice(i).join(" ");
-  if (rest !== "") {
-    const lr = /^(?:LR ?|LOAD RANGE |\()?([B-HJLMN])\)?$/.exec(rest);
-    const ply = /^(\d{1,2}) ?(?:PR|PLY)$/.exec(rest);
-    if (lr && lr[1] !== undefined) {
-      t.loadRange = lr[1] as LoadRange;
-    } else if (ply && ply[1] !== undefined) {
-      const n = Number(ply[1]);
+  const t = emptyTail();
+  let rest = tokens.join(" ");
+  let haveService = false;
+  while (rest !== "") {
+    let m: RegExpExecArray | null;
+    let used: string;
+    const marking = matchMarking(rest);
+    if ((m = PLY_RE.exec(rest))) {
+      const n = Number(m[1]);
       if (n < 4 || n > 24 || n % 2 !== 0) fail(text, `ply rating ${n} is not an even number from 4 to 24`);
-      t.loadRange = loadRangeFromPly(n);
+      setLoadRange(text, t, loadRangeFromPly(n));
+      used = m[0];
+    } else if (marking !== null) {
+      // Before the service description: "3PMSF" and "3 peak mountain snowflake" start with a digit.
+      if (!t.markings.includes(marking.mark)) t.markings.push(marking.mark);
+      used = marking.used;
+    } else if (/^\(?\d/.test(rest)) {
+      used = rest.split(" ", 1)[0] as string;
+      if (haveService) fail(text, `service description given twice (${JSON.stringify(used)})`);
+      readServiceDescription(text, used, t);
+      haveService = true;
+    } else if ((m = LOAD_MARKING_RE.exec(rest))) {
+      const word = m[1] as string;
+      const mark = word.startsWith("X") || word.startsWith("E") ? "XL" : word.startsWith("S") ? "SL" : "RF";
+      if (t.loadMarking !== null && t.loadMarking !== mark) fail(text, `load marking given twice (${t.loadMarking} and ${mark})`);
+      t.loadMarking = mark;
+      used = m[0];
+    } else if ((m = LOAD_RANGE_RE.exec(rest))) {
+      setLoadRange(text, t, m[1] as LoadRange);
+      used = m[0];
     } else {
-      fail(text, `unexpected ${JSON.stringify(rest)} after the size; expected a service description, XL, or a load range such as LRE`);
+      return fail(text, `unexpected ${JSON.stringify(rest.split(" ", 1)[0])} after the size; ${TAIL_FORMS}`);
     }
+    rest = rest.slice(used.length).trimStart();
   }
+  t.markings.sort((a, b) => MARKING_ORDER.indexOf(a) - MARKING_ORDER.indexOf(b));
   if (t.loadRange !== null && !(LOAD_RANGES as readonly string[]).includes(t.loadRange)) {
     fail(text, `unknown load range ${t.loadRange}`);
   }
@@ -148,8 +229,9 @@ function parseTail(text: string, tokens: string[]): Tail {
 /** Splits the designation from the service description: the size has no inner spaces once normalized. */
 function splitSize(upper: string): { size: string; tail: string[] } {
   // Join spaces inside the size itself ("LT 285 / 70 R 17") but keep the tail tokens apart.
-  // The size ends at the rim diameter (two digits, optional .5) plus an optional LT suffix.
-  const m = /^((?:P|LT|ST|T)?\s*[\d.]+\s*(?:\/\s*\d+|X\s*[\d.]+)?\s*(?:ZR|R|D|B|-)\s*\d{2}(?:\.5)?(?:\s*LT)?)(?=\s|\(|$)(.*)$/.exec(
+  // The size ends at the rim diameter (two digits, optional .5) plus an optional LT suffix or a
+  // commercial C glued to the rim diameter ("235/65R16C"; "R16 C" keeps C as the load range).
+  const m = /^((?:P|LT|ST|T)?\s*[\d.]+\s*(?:\/\s*\d+|X\s*[\d.]+)?\s*(?:ZR|R|D|B|-)\s*\d{2}(?:\.5)?(?:\s*LT|C)?)(?=\s|\(|$)(.*)$/.exec(
     upper,
   );
   if (!m || m[1] === undefined) return { size: upper.replace(/\s+/g, ""), tail: [] };
@@ -188,11 +270,11 @@ function buildText(s: Omit<TireSize, "text">): string {
   let size: string;
   const c = s.speedRatedConstruction ? "ZR" : s.construction;
   if (s.system === "metric") {
-    size = `${s.service ?? ""}${Math.round(s.sectionWidthMm)}/${s.aspectRatio}${c}${s.rimDiameterIn}`;
+    size = `${s.service ?? ""}${Math.round(s.sectionWidthMm)}/${s.aspectRatio}${c}${s.rimDiameterIn}${s.commercial ? "C" : ""}`;
   } else if (s.system === "flotation") {
     size = `${s.designatedDiameterIn}x${fixed2(s.designatedSectionIn ?? 0)}${c}${s.rimDiameterIn}${s.service === "LT" ? "LT" : ""}`;
   } else {
-    size = `${s.service ?? ""}${fixed2(s.designatedSectionIn ?? 0)}${c}${s.rimDiameterIn}`;
+    size = `${s.service ?? ""}${fixed2(s.designatedSectionIn ?? 0)}${c}${s.rimDiameterIn}${s.commercial ? "C" : ""}`;
   }
   const parts = [size];
   if (s.loadIndex !== null) {
@@ -201,6 +283,7 @@ function buildText(s: Omit<TireSize, "text">): string {
   }
   if (s.loadMarking !== null) parts.push(s.loadMarking);
   if (s.loadRange !== null) parts.push(`LR${s.loadRange}`);
+  parts.push(...s.markings);
   return parts.join(" ");
 }
 
@@ -215,6 +298,9 @@ function buildText(s: Omit<TireSize, "text">): string {
  * t.overallDiameterMm; // 830.8
  * parseTireSize("37x12.50R17LT").aspectRatio; // 80 (implied)
  * parseTireSize("37×12.50R17").text;          // "37x12.50R17"
+ * parseTireSize("33X1250R15LT").text;         // "33x12.50R15LT"
+ * parseTireSize("lt285/70r17 m/s 121/118q load range e 3pmsf").text; // "LT285/70R17 121/118Q LRE M+S 3PMSF"
+ * parseTireSize("235/65R16C 121/119R");       // commercial: true, loadIndex 121, dualLoadIndex 119
  */
 export function parseTireSize(text: string): TireSize {
   if (typeof text !== "string") {
@@ -229,7 +315,7 @@ export function parseTireSize(text: string): TireSize {
   let m: RegExpExecArray | null;
   if ((m = METRIC_RE.exec(size))) {
     const [, prefix, w, ar, cons, rim, suffix] = m;
-    if (prefix !== undefined && suffix !== undefined) fail(text, "service type given twice (prefix and LT suffix)");
+    if (prefix !== undefined && suffix !== undefined) fail(text, `service type given twice (${prefix} prefix and ${suffix} suffix)`);
     const width = Number(w);
     const aspect = Number(ar);
     const rimIn = Number(rim);
@@ -239,7 +325,8 @@ export function parseTireSize(text: string): TireSize {
     const sidewall = (width * aspect) / 100;
     return finish({
       system: "metric",
-      service: ((prefix ?? suffix) as ServiceType | undefined) ?? null,
+      service: suffix === "C" ? null : (((prefix ?? suffix) as ServiceType | undefined) ?? null),
+      commercial: suffix === "C",
       construction: cons === "ZR" ? "R" : (cons as Construction),
       speedRatedConstruction: cons === "ZR",
       sectionWidthMm: width,
@@ -257,7 +344,8 @@ export function parseTireSize(text: string): TireSize {
     const [, prefix, d, s, cons, rim, suffix] = m;
     if (prefix !== undefined && suffix !== undefined) fail(text, "LT given twice");
     const dia = Number(d);
-    const sec = Number(s);
+    // "1250" typed for "12.50": the decimal point goes before the last two digits (common practice, no source).
+    const sec = s !== undefined && !s.includes(".") && s.length >= 3 ? Number(s) / 100 : Number(s);
     const rimIn = Number(rim);
     checkRim(text, rimIn);
     if (dia < 20 || dia > 66) fail(text, `overall diameter ${dia} in is outside 20–66 in`);
@@ -268,6 +356,7 @@ export function parseTireSize(text: string): TireSize {
     return finish({
       system: "flotation",
       service: prefix !== undefined || suffix !== undefined ? "LT" : null,
+      commercial: false,
       construction: cons as Construction,
       speedRatedConstruction: false,
       sectionWidthMm: sec * MM_PER_IN,
@@ -283,7 +372,7 @@ export function parseTireSize(text: string): TireSize {
   }
   if ((m = NUMERIC_RE.exec(size))) {
     const [, prefix, s, cons, rim, suffix] = m;
-    if (prefix !== undefined && suffix !== undefined) fail(text, "service type given twice (prefix and LT suffix)");
+    if (prefix !== undefined && suffix !== undefined) fail(text, `service type given twice (${prefix} prefix and ${suffix} suffix)`);
     const sec = Number(s);
     const rimIn = Number(rim);
     checkRim(text, rimIn);
@@ -292,7 +381,8 @@ export function parseTireSize(text: string): TireSize {
     const sidewall = (sectionMm * NUMERIC_ASPECT_RATIO) / 100;
     return finish({
       system: "numeric",
-      service: ((prefix ?? suffix) as ServiceType | undefined) ?? null,
+      service: suffix === "C" ? null : (((prefix ?? suffix) as ServiceType | undefined) ?? null),
+      commercial: suffix === "C",
       construction: cons as Construction,
       speedRatedConstruction: false,
       sectionWidthMm: sectionMm,
@@ -310,7 +400,7 @@ export function parseTireSize(text: string): TireSize {
 }
 
 function finish(fields: Omit<TireSize, "text">): TireSize {
-  return Object.freeze({ text: buildText(fields), ...fields });
+  return Object.freeze({ text: buildText(fields), ...fields, markings: Object.freeze([...fields.markings]) });
 }
 
 /**
@@ -323,7 +413,7 @@ function finish(fields: Omit<TireSize, "text">): TireSize {
  */
 export function formatTireSize(size: TireSize, options: { serviceDescription?: boolean } = {}): string {
   if (options.serviceDescription === false) {
-    return buildText({ ...size, loadIndex: null, dualLoadIndex: null, speedSymbol: null, serviceDescriptionBracketed: false, loadMarking: null, loadRange: null });
+    return buildText({ ...size, ...emptyTail() });
   }
   return buildText(size);
 }
