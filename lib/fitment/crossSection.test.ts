@@ -152,6 +152,12 @@ describe("wheelSection: positions against the hand-worked figures and the engine
         expect(s.sidewallMm).toBeCloseTo(h.sidewall, 9);
         expect(s.beadSeat.lowerY - s.groundY).toBeCloseTo(h.sidewall, 9);
         expect(s.topY - s.beadSeat.upperY).toBeCloseTo(h.sidewall, 9);
+        // The casing's inside (schematic thickness) stays inside the tire, open at the rim.
+        const [cl, cu] = s.shapes.cavity.map(outlineExtents);
+        expect(cl!.minX).toBeCloseTo(h.tire[0] + SCHEMATIC.sidewallThicknessMm, 9);
+        expect(cl!.maxX).toBeCloseTo(h.tire[1] - SCHEMATIC.sidewallThicknessMm, 9);
+        expect(cl!.minY).toBeCloseTo(SCHEMATIC.treadThicknessMm, 9);
+        expect(cu!.maxY).toBeCloseTo(h.top - SCHEMATIC.treadThicknessMm, 9);
         // Widest at mid-sidewall (schematic share, from memory).
         expect(s.tire.widestLowerY).toBeCloseTo(h.sidewall * (1 - SCHEMATIC.widestAtShare), 9);
       });

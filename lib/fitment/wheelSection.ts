@@ -69,6 +69,9 @@ export const SCHEMATIC = Object.freeze({
   widestAtShare: 0.5,
   /** Tread width as a share of the section width (from memory: light-truck treads are about 0.8 of the section). */
   treadShare: 0.8,
+  /** Casing thickness drawn inside the tire: sidewall and under the tread (from memory: light-truck sidewalls about 10 mm, tread with belts about 25 mm). */
+  sidewallThicknessMm: 10,
+  treadThicknessMm: 25,
 });
 
 /** A point of the drawing, mm. */
@@ -117,6 +120,10 @@ export interface WheelSection {
   shapes: {
     /** The tire's section, below and above the axle. */
     tire: [Outline, Outline];
+    /** The air chamber inside the casing (open at the rim, which closes it), below and above: filled, not stroked. */
+    cavity: [Outline, Outline];
+    /** The casing's inner wall, from bead to bead (stroked). */
+    liner: [Outline, Outline];
     /** Barrel with both flanges, bead seats, humps and well, below and above the axle. */
     rim: [Outline, Outline];
     /** Disc from the pad to the barrel, below and above. */
@@ -217,6 +224,36 @@ function tireProfile(sec: { xbi: number; xbo: number; xin: number; xout: number;
 }
 
 /**
+ * The casing's inside: the outer profile moved in by the sidewall thickness at the sides and the
+ * tread thickness at the crown (schematic). Open from bead to bead; `closed` adds the rim line.
+ */
+function cavityProfile(sec: Parameters<typeof tireProfile>[0], closed: boolean): RCmd[] {
+  const S = SCHEMATIC;
+  const t = S.sidewallThicknessMm;
+  const { r, R, H, xc, tw } = sec;
+  const xin = sec.xin + t;
+  const xout = sec.xout - t;
+  const xbi = Math.min(sec.xbi + t, xc);
+  const xbo = Math.max(sec.xbo - t, xc);
+  const Rin = R - Math.min(S.treadThicknessMm, 0.3 * H);
+  const tip = r + Math.min(S.flangeHeightMm, 0.4 * H);
+  const wide = r + S.widestAtShare * H;
+  const ti = Math.max(xc - tw / 2 + t, xin);
+  const to = Math.min(xc + tw / 2 - t, xout);
+  const out: RCmd[] = [
+    { op: "M", x: xbi, r },
+    { op: "L", x: xbi, r: tip },
+    { op: "C", c: [xbi + 0.6 * (xin - xbi), tip + 0.1 * (wide - tip), xin, wide - 0.45 * (wide - tip)], x: xin, r: wide },
+    { op: "C", c: [xin, wide + 0.55 * (Rin - wide), ti - 0.35 * (ti - xin), Rin], x: ti, r: Rin },
+    { op: "L", x: to, r: Rin },
+    { op: "C", c: [to + 0.35 * (xout - to), Rin, xout, wide + 0.55 * (Rin - wide)], x: xout, r: wide },
+    { op: "C", c: [xout, wide - 0.45 * (wide - tip), xbo + 0.6 * (xout - xbo), tip + 0.1 * (wide - tip)], x: xbo, r: tip },
+    { op: "L", x: xbo, r },
+  ];
+  return closed ? [...out, { op: "Z" }] : out;
+}
+
+/**
  * One setup's cross-section in its own frame: hub face x = 0 (outboard +), ground y = 0.
  * Throws FitmentInputError for a flange allowance outside 0–2 in or an unknown reference
  * (offset.ts checks them).
@@ -244,6 +281,7 @@ export function wheelSection(g: SetupGeometry, choice: BackspacingChoice = {}): 
   const xin = -g.innerSwingMm;
   const xout = g.outerSwingMm;
   const tw = S.treadShare * g.sectionWidthMm;
+  const sec = { xbi, xbo, xin, xout, xc, r, R, H, tw };
   // The pad and bore shrink on small wheels so the disc still meets the barrel (schematic).
   const barrelIn = r - S.wellDepthMm - S.rimThicknessMm;
   const padR = Math.min(S.padRadiusMm, 0.8 * barrelIn);
@@ -284,7 +322,9 @@ export function wheelSection(g: SetupGeometry, choice: BackspacingChoice = {}): 
     spacer,
     backspacing: { reference, fromX: reference === "flange" ? xbi - f : xbi, toX: xm, valueMm: valueIn * MM_PER_IN, valueIn },
     shapes: {
-      tire: both(tireProfile({ xbi, xbo, xin, xout, xc, r, R, H, tw })),
+      tire: both(tireProfile(sec)),
+      cavity: both(cavityProfile(sec, true)),
+      liner: both(cavityProfile(sec, false)),
       rim: both(rimProfile(xbi, xbo, f, r)),
       disc: both([
         { op: "M", x: xm, r: padR },
@@ -321,6 +361,8 @@ export function movedSection(s: WheelSection, dy: number): WheelSection {
     tire: { ...s.tire, widestLowerY: s.tire.widestLowerY + dy, widestUpperY: s.tire.widestUpperY + dy },
     shapes: {
       tire: pair(s.shapes.tire),
+      cavity: pair(s.shapes.cavity),
+      liner: pair(s.shapes.liner),
       rim: pair(s.shapes.rim),
       disc: pair(s.shapes.disc),
       pad: pair(s.shapes.pad),
