@@ -80,7 +80,7 @@ export function CrossSection({
       </svg>
       <figcaption className="mt-1 text-xs text-basalt-600">
         To scale, seen from the front, inboard to the left. Current: solid lines, upright figures; planned: dashed lines, italic figures. Flange, bead seat, well, pad and
-        sidewall shapes are schematic; every position and dimension comes from the figures above.
+        sidewall shapes are schematic; every position and dimension is computed from the two setups&apos; figures.
         {model.steeringAxis ? " The steering axis is drawn through the current tire's contact centre (zero scrub assumed)." : ""}
         {model.parts.length > 0 ? " Measured parts are drawn at hub height (the garage keeps no height): a cross marks predicted contact, a triangle closer than the margin, a circle clear." : ""}
         {notDrawn > 0 ? ` ${notDrawn === 1 ? "One point lies" : `${notDrawn} points lie`} outside this section (fore/aft or at full lock): see the table of predictions.` : ""}

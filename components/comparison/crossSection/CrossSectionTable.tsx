@@ -1,5 +1,5 @@
 import type { ComparisonResult } from "@/lib/comparison/compute";
-import { type DisplayPrefs, formatPartThickness } from "@/lib/comparison/format";
+import { type DisplayPrefs, formatNumber, formatPartThickness } from "@/lib/comparison/format";
 import type { CrossSectionModel } from "@/lib/fitment/crossSection";
 import { len, offsetText, signedLen } from "./text";
 
@@ -82,7 +82,7 @@ export function CrossSectionTable({ id, r, model, prefs }: { id: string; r: Comp
             {model.steeringAxis && (
               <tr>
                 <th scope="row">Steering axis</th>
-                <td>{`${model.steeringAxis.deg}° kingpin inclination, through the current tire's contact centre (zero scrub assumed), ${len(Math.abs(model.steeringAxis.atAxle.x), prefs)} inboard of the hub face at axle height`}</td>
+                <td>{`${formatNumber(model.steeringAxis.deg, 1)}° kingpin inclination, through the current tire's contact centre (zero scrub assumed), ${len(Math.abs(model.steeringAxis.atAxle.x), prefs)} inboard of the hub face at axle height`}</td>
               </tr>
             )}
           </tbody>
