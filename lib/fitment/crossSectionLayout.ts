@@ -193,24 +193,20 @@ class Lanes {
     return x > lo + EPS && x < hi - EPS;
   }
 
-  /** Lines that would cross labels: this item's through the lanes below k, and the passing ones through its label. */
-  private crossings(ask: Ask, k: number, x: number): number {
-    let n = 0;
-    for (let j = 0; j < k; j++) for (const o of this.lanes[j]!) if (o.kind === "label") for (const t of ask.thin) if (Lanes.under(t, o.lo, o.hi)) n++;
-    for (const o of this.lanes[k] ?? []) if (o.kind === "thin" && Lanes.under(o.lo, x, x + ask.w)) n++;
-    for (const later of this.ahead) for (const t of later) if (Lanes.under(t, x, x + ask.w)) n += 0.5;
-    return n;
-  }
-
   /** Places an item (the next of those given as `ahead`, if any); returns its lane and where its label starts. */
   place(ask: Ask): { lane: number; at: number } {
     this.ahead = this.ahead.slice(1);
+    const future = this.ahead.flat().sort((a, b) => a - b);
     const maxStart = this.hi - ask.w;
     const [a0, a1] = ask.attach;
     const beside = ask.beside ?? this.beside;
     const near = (x: number) => x < a1 + beside + EPS && x + ask.w > a0 - beside - EPS;
     let best: { lane: number; at: number; cost: number; shift: number } | null = null;
+    // Crossings of this item's lines through the labels of the lanes below lane k: they only grow
+    // with k, so once they reach the best cost found no farther lane can do better.
+    let below = 0;
     for (let k = 0; k <= this.lanes.length; k++) {
+      if (best && below >= best.cost) break;
       const lane = this.lanes[k] ?? [];
       const starts = [
         ask.prefer,
@@ -224,12 +220,14 @@ class Lanes {
         const x = Math.min(Math.max(raw, this.lo), maxStart);
         if (!near(x)) continue;
         const own: Span[] = [{ kind: "label", lo: x, hi: x + ask.w }, ...(ask.line ? [{ kind: "line" as const, lo: ask.line[0], hi: ask.line[1] }] : [])];
-        if (!own.every((s) => lane.every((o) => !this.clash(s, o)))) continue;
-        const cost = this.crossings(ask, k, x);
+        if (!own.every((sp) => lane.every((o) => !this.clash(sp, o)))) continue;
+        // Lines passing through this lane under the label, and half for each line still to come under it.
+        const passing = lane.filter((o) => o.kind === "thin" && Lanes.under(o.lo, x, x + ask.w)).length;
+        const cost = below + passing + 0.5 * countBetween(future, x, x + ask.w);
         const shift = Math.abs(x - ask.prefer);
         if (!best || cost < best.cost || (cost === best.cost && k === best.lane && shift < best.shift - EPS)) best = { lane: k, at: x, cost, shift };
       }
-      if (best && best.cost === 0) break;
+      for (const o of lane) if (o.kind === "label") for (const t of ask.thin) if (Lanes.under(t, o.lo, o.hi)) below++;
     }
     // A fresh lane beyond the last always takes the item (its centred start is near its line), so `best` is set.
     const { lane: k, at } = best!;
@@ -239,6 +237,21 @@ class Lanes {
     for (let j = 0; j < k; j++) for (const x of ask.thin) this.lanes[j]!.push({ kind: "thin", lo: x, hi: x });
     return { lane: k, at };
   }
+}
+
+/** How many of the sorted values lie strictly between lo and hi (beyond EPS). */
+function countBetween(sorted: readonly number[], lo: number, hi: number): number {
+  const first = (v: number) => {
+    let a = 0;
+    let b = sorted.length;
+    while (a < b) {
+      const m = (a + b) >> 1;
+      if (sorted[m]! <= v) a = m + 1;
+      else b = m;
+    }
+    return a;
+  };
+  return Math.max(0, first(hi - EPS - EPS) - first(lo + EPS));
 }
 
 /** The stretch from a dimension line's end to its label, when the label lies beside the line. */

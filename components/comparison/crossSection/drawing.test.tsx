@@ -58,3 +58,23 @@ describe(`buildDrawing: no two labels overlap at ${DESIGN_WIDTH_PX} px`, () => {
     });
   }
 });
+
+describe("buildDrawing: many measured parts", () => {
+  it("names the six nearest to contact (contact first, then the smallest predicted gap) and marks all", () => {
+    const statuses = ["clear", "tight", "contact", "clear", "tight", "clear", "clear", "contact", "clear"] as const;
+    const parts = statuses.map((status, i) => ({
+      label: `P${i}`,
+      direction: (["inboard", "outboard", "upward"] as const)[i % 3]!,
+      state: "ride-height" as const,
+      distanceMm: 10 + i,
+      measuredWith: stock,
+      predictedMm: 50 - i,
+      status,
+    }));
+    const d = buildDrawing(computeComparison(DEFAULT_INPUT), { units: "metric", lengths: "decimal" }, { innerMm: null, outerMm: null, parts });
+    expect(d.model.parts.filter((p) => p.at)).toHaveLength(9);
+    // contact: P7 (43), P2 (48); tight: P4 (46), P1 (49); clear: P8 (42), P6 (44).
+    expect([...d.named].sort()).toEqual(["part-1", "part-2", "part-4", "part-6", "part-7", "part-8"]);
+    expect(d.layout.callouts.filter((c) => c.id.startsWith("part-")).map((c) => c.text).sort()).toEqual(["P1: tight", "P2: contact", "P4: tight", "P6: clear", "P7: contact", "P8: clear"]);
+  });
+});

@@ -19,6 +19,20 @@ import { anchorText, describe, dimensionText, legendText } from "./text";
  */
 export const DESIGN_WIDTH_PX = 343;
 export const FONT_PX = 12;
+/**
+ * Measured parts named on the picture, nearest to contact first; every part is still marked by
+ * its status shape, and all of them are in the data table and the prediction table.
+ */
+export const MAX_NAMED_PARTS = 6;
+
+const SEVERITY = { contact: 0, tight: 1, clear: 2 } as const;
+
+/** The ids of the parts to name: by status (contact, tight, clear), then by the smallest predicted gap. */
+export function namedParts(model: CrossSectionModel): Set<string> {
+  const drawn = model.parts.filter((p) => p.at);
+  drawn.sort((a, b) => SEVERITY[a.status] - SEVERITY[b.status] || a.predictedMm - b.predictedMm);
+  return new Set(drawn.slice(0, MAX_NAMED_PARTS).map((p) => p.id));
+}
 
 /** What of a garage vehicle the workspace passes to the drawing (all from the engine). */
 export interface DrawnLimits {
@@ -32,6 +46,8 @@ export interface DrawnLimits {
 
 export interface Drawing {
   model: CrossSectionModel;
+  /** Parts named on the picture (see {@link MAX_NAMED_PARTS}). */
+  named: Set<string>;
   layout: CrossSectionLayout;
   description: string;
 }
@@ -55,14 +71,15 @@ export function buildDrawing(r: ComparisonResult, prefs: DisplayPrefs, limits?: 
     },
     r.engine,
   );
+  const named = namedParts(model);
   const layout = layoutCrossSection(
     {
       extents: model.extents,
       dimensions: model.dimensions.map((d) => ({ id: d.id, axis: d.axis, band: d.band, from: d.from, to: d.to, ends: d.ends, text: dimensionText(d, prefs) })),
-      callouts: model.anchors.map((a) => ({ id: a.id, at: a.at, text: anchorText(a, model) })),
+      callouts: model.anchors.filter((a) => a.kind !== "part" || named.has(a.id)).map((a) => ({ id: a.id, at: a.at, text: anchorText(a, model) })),
       legend: (["current", "planned"] as const).map((side) => ({ id: `legend-${side}`, text: legendText(side, r) })),
     },
     { widthPx: DESIGN_WIDTH_PX, fontPx: FONT_PX },
   );
-  return { model, layout, description: describe(r, model, prefs) };
+  return { model, named, layout, description: describe(r, model, prefs) };
 }
