@@ -2,6 +2,7 @@
 import Link from "next/link";
 import { useEffect, useMemo } from "react";
 import type { DrawnLimits } from "@/components/comparison/CrossSection";
+import { drawnParts } from "@/components/comparison/crossSection/garageParts";
 import { PredictionTable } from "@/components/garage/PredictionTable";
 import { Button } from "@/components/ui/Button";
 import { type DisplayPrefs, formatLen } from "@/lib/comparisons/format";
@@ -13,7 +14,8 @@ import type { WorkspaceVehicle } from "@/lib/garage/types";
 /**
  * The signed-in member's garage inside the workspace: pick a vehicle and every measured point
  * is predicted for the planned setup here (each against the setup it was measured with), and
- * its inner limit and fender lip are drawn on the cross-section.
+ * its inner limit, fender lip and measured points (with their predicted status) are drawn on
+ * the cross-section.
  */
 export default function GaragePanel({
   vehicles,
@@ -38,14 +40,15 @@ export default function GaragePanel({
     // The vehicle places the steering axis (its kingpin inclination), as on the vehicle page.
     const predictions = predictPoints(vehicle.clearances, planned, vehicle.clearanceMarginMm, vehicle);
     const limits = measuredLimits(vehicle.clearances);
-    return { predictions, limits, axis: steeringAxisOf(vehicle) };
+    return { predictions, limits, axis: steeringAxisOf(vehicle), parts: drawnParts(vehicle.clearances, predictions) };
   }, [vehicle, planned]);
 
   const innerMm = view?.limits.maxInnerSwingMm ?? null;
   const outerMm = view?.limits.maxOuterSwingMm ?? null;
+  const parts = view?.parts;
   useEffect(() => {
-    onLimits(vehicle ? { innerMm, outerMm } : null);
-  }, [vehicle, innerMm, outerMm, onLimits]);
+    onLimits(vehicle ? { innerMm, outerMm, parts } : null);
+  }, [vehicle, innerMm, outerMm, parts, onLimits]);
 
   const len = (mm: number) => formatLen(mm, prefs, { decimals: prefs.units === "metric" ? 0 : 2 });
   const contacts = view?.predictions.filter((p) => p.status === "contact").length ?? 0;
