@@ -104,6 +104,17 @@ function aBay(kind: BayKind): string {
 const problem = (code: SlotProblemCode, text: string): { ok: false; problem: SlotProblem } => ({ ok: false, problem: { code, message: `${START_FIELD_LABEL}: ${text}` } });
 
 /**
+ * Why this job cannot be booked at any time (no bay work, or a kind of bay the shop lacks), or
+ * null when some start may do.
+ */
+export function cannotBook(ctx: Pick<SlotContext, "bays" | "segments">): SlotProblem | null {
+  if (totalOf(ctx.segments) <= 0) return problem("no_work", "this quote has no work that takes bay time, so there is nothing to book.").problem;
+  const lacking = missingKinds(ctx);
+  if (lacking.length) return problem("no_bay", `this work needs ${lacking.map(aBay).join(" and ")}, and the shop has none set up.`).problem;
+  return null;
+}
+
+/**
  * Whether the job can start at `start`, and in which bays. Every refusal names the field and
  * says why in the shop's own hours.
  *
@@ -113,9 +124,8 @@ const problem = (code: SlotProblemCode, text: string): { ok: false; problem: Slo
 export function checkStart(start: Date, ctx: SlotContext): { ok: true; slot: Slot } | { ok: false; problem: SlotProblem } {
   const { schedule } = ctx;
   const minutes = totalOf(ctx.segments);
-  if (minutes <= 0) return problem("no_work", "this quote has no work that takes bay time, so there is nothing to book.");
-  const lacking = missingKinds(ctx);
-  if (lacking.length) return problem("no_bay", `this work needs ${lacking.map(aBay).join(" and ")}, and the shop has none set up.`);
+  const cannot = cannotBook(ctx);
+  if (cannot) return { ok: false, problem: cannot };
   const t = start.getTime();
   if (!Number.isFinite(t) || t <= ctx.now.getTime()) return problem("past", "that time has already passed. Pick a time from now on.");
   const local = wallTime(start, schedule.timeZone);
@@ -158,7 +168,7 @@ export function freeSlots(ctx: SlotContext & { fromDate: string; days: number })
   const { schedule } = ctx;
   const minutes = totalOf(ctx.segments);
   const out: SlotDay[] = [];
-  if (minutes <= 0 || missingKinds(ctx).length) return out;
+  if (cannotBook(ctx)) return out;
   const last = addDays(wallTime(ctx.now, schedule.timeZone).date, ctx.horizonDays);
   for (let i = 0; i < ctx.days; i++) {
     const date = addDays(ctx.fromDate, i);

@@ -70,3 +70,6 @@ export const HAND_WRITTEN_HOURS_BAY: BayKind = "lift_bay";
 
 /** How the field that carries the chosen time reads on the screens, for messages that name it. */
 export const START_FIELD_LABEL = "Install time";
+
+/** The day-before reminder goes out from this hour on the shop's clock (not at midnight). */
+export const REMINDER_FROM_HOUR = 9;
