@@ -21,6 +21,7 @@ import {
   lengthLabel,
   slotDayOption,
 } from "./api";
+import { canBook } from "./bookable";
 import { type BookingMailKind, addressOf, bookingMail } from "./mail";
 import { type BaysSetupValues, type BookingRequest, openingHoursOf } from "./schema";
 import { type BayLite, type Held, type Schedule, type Slot, type SlotProblem, cannotBook, checkStart, freeSlots } from "./slots";
@@ -294,7 +295,7 @@ async function lockQuote(trx: Knex.Transaction, target: BookingTarget): Promise<
 
 /** Booking needs the deposit paid (or a quote accepted that asks none); nothing is written otherwise. */
 function assertBookable(quote: QuoteRow, by: BookingTarget["by"]): void {
-  if (quote.status === "deposit_paid" || (quote.status === "accepted" && quote.deposit_cents === 0)) return;
+  if (canBook(quote)) return;
   if (quote.status === "accepted") {
     throw new HttpError(409, by === "customer" ? "Pay the deposit before booking an install time." : "The deposit is not paid yet: book an install time once the customer has paid it.");
   }
