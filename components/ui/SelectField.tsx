@@ -1,5 +1,6 @@
 import type { Ref, SelectHTMLAttributes } from "react";
 import { cx } from "./cx";
+import { FieldMessages, fieldIds } from "./FieldMessages";
 
 interface Props extends SelectHTMLAttributes<HTMLSelectElement> {
   label: string;
@@ -14,9 +15,7 @@ interface Props extends SelectHTMLAttributes<HTMLSelectElement> {
 
 /** A labelled select whose hint and error are tied to it for screen readers, like TextField. */
 export function SelectField({ label, name, options, error, hint, hideLabel, id, className, ref, ...rest }: Props) {
-  const selectId = id ?? `f-${name}`;
-  const hintId = hint ? `${selectId}-hint` : undefined;
-  const errorId = `${selectId}-error`;
+  const { controlId: selectId, hintId, errorId, describedBy } = fieldIds(name, id, hint);
   return (
     <div className={cx("flex flex-col gap-1", className)}>
       <label htmlFor={selectId} className={hideLabel ? "sr-only" : "text-sm font-medium text-basalt-800"}>
@@ -27,7 +26,7 @@ export function SelectField({ label, name, options, error, hint, hideLabel, id, 
         name={name}
         ref={ref}
         aria-invalid={error ? true : undefined}
-        aria-describedby={[hintId, errorId].filter(Boolean).join(" ")}
+        aria-describedby={describedBy}
         className={cx("min-h-10 rounded-lg border bg-white px-3 py-2 text-base text-basalt-900 shadow-sm", error ? "border-contact-600" : "border-basalt-300 focus:border-ember-500")}
         {...rest}
       >
@@ -37,14 +36,7 @@ export function SelectField({ label, name, options, error, hint, hideLabel, id, 
           </option>
         ))}
       </select>
-      {hint && (
-        <p id={hintId} className="text-xs text-basalt-500">
-          {hint}
-        </p>
-      )}
-      <p id={errorId} aria-live="polite" className="min-h-0 text-sm text-contact-600">
-        {error}
-      </p>
+      <FieldMessages hintId={hintId} errorId={errorId} hint={hint} error={error} />
     </div>
   );
 }
