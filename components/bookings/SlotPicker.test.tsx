@@ -15,6 +15,7 @@ afterEach(() => {
 // Times are invented; Denver is UTC−7 in December (49 CFR §71.9): 15:00Z = 8:00 AM.
 const answer = (over: Partial<SlotsAnswer> = {}): SlotsAnswer => ({
   timeZone: "America/Denver",
+  today: "2026-12-10",
   minutes: 340,
   length: "5 h 40 min",
   segments: [

@@ -94,7 +94,7 @@ export function SlotPicker({ slotsUrl, actionLabel, onPick, idPrefix }: Props) {
         </p>
       </fieldset>
       <div className="flex flex-wrap gap-2">
-        <Button type="button" variant="secondary" disabled={!from || slots.isFetching} onClick={() => setFrom(first ? addDays(first, -7) : null)}>
+        <Button type="button" variant="secondary" disabled={!first || first <= data.today || slots.isFetching} onClick={() => setFrom(addDays(first!, -7) > data.today ? addDays(first!, -7) : null)}>
           Earlier days
         </Button>
         <Button type="button" variant="secondary" disabled={!first || slots.isFetching} onClick={() => setFrom(addDays(first!, 7))}>

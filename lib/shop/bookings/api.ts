@@ -104,6 +104,8 @@ export interface SlotDayOption {
 /** GET …/slots: the job's length and the free starts of the days asked for. */
 export interface SlotsAnswer {
   timeZone: string;
+  /** Today on the shop's clock: no earlier day is listed. */
+  today: string;
   minutes: number;
   /** "2 h 20 min". */
   length: string;

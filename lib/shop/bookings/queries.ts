@@ -257,6 +257,7 @@ export async function slotsForQuote(db: Db, quote: Pick<QuoteRow, "id" | "shop_i
   const booked = live ? bookingDto(live, (await bookedBays(db, [live.id])).get(live.id) ?? [], schedule.timeZone) : null;
   return {
     timeZone: schedule.timeZone,
+    today,
     minutes: work.minutes,
     length: lengthLabel(work.minutes),
     segments: work.segments,

@@ -9,7 +9,7 @@ const params = z.object({ id: z.uuid() });
 const actorOf = (caller: { userId: string; name: string; email: string }) => ({ userId: caller.userId, label: caller.name || caller.email });
 
 /** The counter books the install for a quote whose deposit is paid. */
-export const POST = route({ access: SHOP_ANY, params, body: bookingRequestSchema }, async ({ caller, params, body }) =>
+export const POST = route({ access: SHOP_ANY, params, body: bookingRequestSchema, idempotent: true }, async ({ caller, params, body }) =>
   json({ booking: await bookingQueries.bookInstall({ by: "staff", scope: quoteScopeOf(caller), quoteId: params.id }, body, actorOf(caller)) }, 201),
 );
 
