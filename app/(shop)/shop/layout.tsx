@@ -9,7 +9,8 @@ export default async function ShopLayout({ children }: { children: ReactNode }) 
     { href: "/shop", label: "Counter" },
     { href: "/shop/quotes", label: "Quotes" },
     { href: "/shop/catalog", label: "Catalog" },
-    ...(owner ? [{ href: "/shop/staff", label: "Staff" }, { href: "/shop/settings", label: "Settings" }] : []),
+    { href: "/shop/calendar", label: "Calendar" },
+    ...(owner ? [{ href: "/shop/staff", label: "Staff" }, { href: "/shop/bays", label: "Bays and hours" }, { href: "/shop/settings", label: "Settings" }] : []),
   ];
   return (
     <>

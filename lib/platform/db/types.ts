@@ -227,6 +227,80 @@ export interface PaymentRow {
   paid_at: Date | null;
 }
 
+/* ---- install bookings (lib/shop/bookings) ---- */
+
+export const BAY_KINDS = ["lift_bay", "alignment_rack", "fabrication_bay"] as const;
+export type BayKind = (typeof BAY_KINDS)[number];
+
+export interface ShopScheduleRow {
+  shop_id: string;
+  /** IANA time zone name; opening hours and closed days are wall-clock in it. */
+  time_zone: string;
+  slot_step_minutes: 15 | 30 | 60;
+  updated_at: Date;
+}
+
+export interface OpeningHoursRow {
+  shop_id: string;
+  /** ISO 8601: 1 = Monday … 7 = Sunday. */
+  weekday: number;
+  opens_minute: number;
+  closes_minute: number;
+}
+
+export interface ClosedDayRow {
+  shop_id: string;
+  /** A calendar date; read as "YYYY-MM-DD" (lib/shop/bookings/queries.ts asks pg for text). */
+  day: string;
+  note: string;
+}
+
+export interface BayRow {
+  id: string;
+  shop_id: string;
+  name: string;
+  kind: BayKind;
+  position: number;
+  archived_at: Date | null;
+  created_at: Date;
+}
+
+export interface ServiceTimeRow {
+  shop_id: string;
+  catalog_item_id: string;
+  minutes_per_unit: number;
+  bay_kind: BayKind;
+}
+
+export const BOOKING_STATUSES = ["booked", "cancelled"] as const;
+export type BookingStatus = (typeof BOOKING_STATUSES)[number];
+
+export interface BookingRow {
+  id: string;
+  shop_id: string;
+  quote_id: string;
+  status: BookingStatus;
+  starts_at: Date;
+  ends_at: Date;
+  sequence: number;
+  booked_by_user_id: string | null;
+  booked_by: string;
+  reminder_queued_at: Date | null;
+  cancelled_at: Date | null;
+  created_at: Date;
+  updated_at: Date;
+}
+
+/** A bay held by a booking; `during` is a tstzrange, read through lower()/upper() as starts_at/ends_at. */
+export interface BayReservationRow {
+  id: string;
+  booking_id: string;
+  shop_id: string;
+  bay_id: string;
+  starts_at: Date;
+  ends_at: Date;
+}
+
 // --- garage ---------------------------------------------------------------------------------
 // Setups are stored as the output of lib/setup/schema.ts (SetupValues).
 

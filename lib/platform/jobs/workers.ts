@@ -11,6 +11,7 @@ import { photoStore } from "@/lib/garage/photos/s3";
 import { sweepOrphanPhotos } from "@/lib/garage/photos/sweep";
 import { purgeExpiredKeys } from "@/lib/platform/http/idempotencyQueries";
 import { expireDue } from "@/lib/shop/quotes/queries";
+import { queueDueReminders } from "@/lib/shop/bookings/queries";
 import { type BossOptions, type QueueName, QUEUES, getBoss, pollSeconds } from "./boss";
 
 /** Every 15 minutes. The read paths already show a quote past its date as expired; this writes it down. */
@@ -20,6 +21,8 @@ export const QUOTE_EXPIRY_CRON = "*/15 * * * *";
 export const PHOTO_SWEEP_CRON = "*/10 * * * *";
 /** Hourly, off the hour. */
 export const IDEMPOTENCY_PURGE_CRON = "17 * * * *";
+/** Hourly: each shop's reminders go out in the first run after 9:00 on its own clock the day before. */
+export const BOOKING_REMINDER_CRON = "7 * * * *";
 
 type Handler = (job: PgBoss.Job<object>) => Promise<unknown>;
 
@@ -40,6 +43,11 @@ export const handlers: Record<QueueName, Handler> = {
     return { scanned, deleted: deleted.length };
   },
   [QUEUES.idempotencyPurge.name]: async () => ({ purged: await purgeExpiredKeys(db) }),
+  [QUEUES.bookingReminders.name]: async (job) => {
+    const queued = await queueDueReminders(db);
+    if (queued) log().info({ job: { id: job.id, queue: job.name }, queued }, "install reminders queued");
+    return { queued };
+  },
 };
 
 /** Runs one job's handler, logging a failure (message only: job data may hold a mail's body). */
@@ -54,7 +62,7 @@ export async function runJob(job: PgBoss.Job<object>): Promise<unknown> {
 
 /**
  * Starts the boss with maintenance and the cron clock, a worker per queue polling every
- * {@link pollSeconds}, and the schedules (quote expiry, photo sweep, idempotency purge). Idempotent within a process.
+ * {@link pollSeconds}, and the schedules (quote expiry, photo sweep, idempotency purge, install reminders). Idempotent within a process.
  */
 export async function startWorkers(opts: BossOptions = {}): Promise<PgBoss> {
   const g = globalThis as unknown as { hubfaceWorkers?: Promise<PgBoss> };
@@ -67,6 +75,7 @@ export async function startWorkers(opts: BossOptions = {}): Promise<PgBoss> {
     await boss.schedule(QUEUES.quoteExpiry.name, QUOTE_EXPIRY_CRON, {}, { tz: "UTC" });
     await boss.schedule(QUEUES.photoSweep.name, PHOTO_SWEEP_CRON, {}, { tz: "UTC" });
     await boss.schedule(QUEUES.idempotencyPurge.name, IDEMPOTENCY_PURGE_CRON, {}, { tz: "UTC" });
+    await boss.schedule(QUEUES.bookingReminders.name, BOOKING_REMINDER_CRON, {}, { tz: "UTC" });
     log().info({ queues: Object.keys(handlers), pollingIntervalSeconds }, "job workers started");
     return boss;
   })().catch((error: unknown) => {

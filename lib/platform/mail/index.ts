@@ -3,6 +3,9 @@ import nodemailer, { type Transporter } from "nodemailer";
 import { DependencyUnavailableError, isNetworkFailure } from "@/lib/platform/http/dependency";
 import { QUEUES, getBoss } from "@/lib/platform/jobs/boss";
 
+/** The sender of every mail ("Name <address>"); calendar files name its address as organizer. */
+export const mailFrom = (): string => process.env.MAIL_FROM ?? "Hubface <no-reply@hubface.test>";
+
 const globalForMail = globalThis as unknown as { hubfaceMail?: Transporter };
 
 function transport(): Transporter {
@@ -25,7 +28,7 @@ export interface OutgoingMail {
  */
 export async function sendMail(mail: OutgoingMail): Promise<void> {
   try {
-    await transport().sendMail({ from: process.env.MAIL_FROM ?? "Hubface <no-reply@hubface.test>", ...mail });
+    await transport().sendMail({ from: mailFrom(), ...mail });
   } catch (error) {
     throw isNetworkFailure(error) ? new DependencyUnavailableError("mail server", error) : error;
   }

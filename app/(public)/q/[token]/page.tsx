@@ -8,6 +8,9 @@ import { Card } from "@/components/ui/Card";
 import { formatUsd } from "@/lib/shop/quotes/money";
 import { STATUS_LABEL } from "@/lib/shop/quotes/queries";
 import { quoteSendQueries } from "@/lib/shop/quotes/send";
+import { canBook } from "@/lib/shop/bookings/bookable";
+import { bookingQueries } from "@/lib/shop/bookings/queries";
+import { InstallBooking } from "./InstallBooking";
 import { PublicQuoteActions } from "./PublicQuoteActions";
 
 export const metadata: Metadata = { title: "Your quote", robots: { index: false } };
@@ -29,6 +32,8 @@ export default async function PublicQuotePage({ params, searchParams }: { params
   const { quote, document: d } = view;
   const t = d.totals;
   const paidUp = quote.status === "deposit_paid" || quote.status === "installed";
+  const bookable = canBook(quote);
+  const booking = bookable ? await bookingQueries.liveBooking(quote) : null;
   return (
     <div className="mx-auto flex max-w-4xl flex-col gap-5">
       <header>
@@ -46,7 +51,7 @@ export default async function PublicQuotePage({ params, searchParams }: { params
       {paid && quote.status === "accepted" && <Alert tone="info">Payment received by the provider; waiting for its confirmation. Refresh in a moment.</Alert>}
       {quote.status === "deposit_paid" && (
         <Alert tone="success" title="Deposit paid">
-          Thank you. {d.shop.name} will call you to book the fitting. Still to pay at the fitting: <span data-testid="public-balance-after-paid">{formatUsd(t.balanceCents)}</span>.
+          Thank you. {booking ? "Your install time is below." : "Pick your install time below."} Still to pay at the fitting: <span data-testid="public-balance-after-paid">{formatUsd(t.balanceCents)}</span>.
         </Alert>
       )}
       {quote.status === "expired" && <Alert tone="warning">This quote has expired. Ask the shop for a new one.</Alert>}
@@ -55,6 +60,7 @@ export default async function PublicQuotePage({ params, searchParams }: { params
         <QuoteDocumentLines document={d} />
         {d.notes && <p className="mt-3 text-sm text-basalt-700">{d.notes}</p>}
       </Card>
+      {bookable && <InstallBooking token={token} booking={booking} shopName={d.shop.name} />}
       <PublicQuoteActions token={token} status={quote.status} deposit={formatUsd(t.depositCents)} balance={formatUsd(t.balanceCents)} />
       {d.hubChecks.some((c) => c.findings.some((f) => f.level !== "ok")) && (
         <Card>

@@ -5,6 +5,9 @@ import { pageGuard } from "@/lib/platform/http/pageGuard";
 import { quoteDetailDto } from "@/lib/shop/quotes/api";
 import { quoteQueries, quoteScopeOf } from "@/lib/shop/quotes/queries";
 import { shopQueries } from "@/lib/shop/queries";
+import { canBook } from "@/lib/shop/bookings/bookable";
+import { bookingQueries } from "@/lib/shop/bookings/queries";
+import { CounterBooking } from "./CounterBooking";
 import { QuoteEditor } from "./QuoteEditor";
 
 export const metadata: Metadata = { title: "Quote" };
@@ -15,5 +18,12 @@ export default async function QuotePage({ params }: { params: Promise<{ id: stri
   if (!/^[0-9a-f-]{36}$/i.test(id)) notFound();
   const detail = await pageGuard(quoteQueries.getQuoteDetail(quoteScopeOf(caller), id));
   const shop = await shopQueries.findShop(detail.quote.shop_id);
-  return <QuoteEditor initial={quoteDetailDto(detail)} labourRateCents={shop?.labour_rate_cents ?? 0} />;
+  const q = detail.quote;
+  const [booking, setup] = canBook(q) ? await Promise.all([bookingQueries.liveBooking(q), bookingQueries.getSetup(q.shop_id)]) : [null, null];
+  return (
+    <>
+      <QuoteEditor initial={quoteDetailDto(detail)} labourRateCents={shop?.labour_rate_cents ?? 0} />
+      {setup && <CounterBooking quoteId={q.id} initial={booking} bays={setup.bays} />}
+    </>
+  );
 }
