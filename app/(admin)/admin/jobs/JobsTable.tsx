@@ -2,13 +2,14 @@
 import { useQuery } from "@tanstack/react-query";
 import { Alert } from "@/components/ui/Alert";
 import { api } from "@/lib/platform/client/api";
+import { queryKeys } from "@/lib/platform/query/keys";
 import type { ProblemJob } from "@/lib/platform/jobs/problemJob";
 import { JobRow } from "./JobRow";
 
 /** The list refreshes every 10 s, so a retried job is seen leaving it. */
 export function JobsTable({ initial }: { initial: ProblemJob[] }) {
   const { data } = useQuery({
-    queryKey: ["admin-jobs"],
+    queryKey: queryKeys.admin.jobs.all,
     queryFn: () => api<{ jobs: ProblemJob[] }>("/api/admin/jobs").then((r) => r.jobs),
     initialData: initial,
     refetchInterval: 10_000,

@@ -3,6 +3,7 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useId, useState } from "react";
 import { Button } from "@/components/ui/Button";
 import { ApiError, api } from "@/lib/platform/client/api";
+import { queryKeys } from "@/lib/platform/query/keys";
 import { ROLES, type Role } from "@/lib/platform/db/types";
 import { labelledMessage } from "@/lib/platform/validation/labels";
 import type { UserItem } from "./UsersTable";
@@ -30,7 +31,7 @@ export function UserRow({ user, shops, self }: { user: UserItem; shops: { id: st
   const [shopId, setShopId] = useState<string>(user.shopId ?? shops[0]?.id ?? "");
   const save = useMutation({
     mutationFn: () => api(`/api/admin/users/${user.id}`, { method: "PATCH", body: { role, shopId: isShopRole(role) ? shopId : null } }),
-    onSuccess: () => qc.invalidateQueries({ queryKey: ["admin-users"] }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: queryKeys.admin.users.all }),
   });
   const changed = role !== user.role || (isShopRole(role) && shopId !== user.shopId);
   return (

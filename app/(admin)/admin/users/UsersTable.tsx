@@ -4,6 +4,7 @@ import { useState } from "react";
 import { Alert } from "@/components/ui/Alert";
 import { Card } from "@/components/ui/Card";
 import { api } from "@/lib/platform/client/api";
+import { queryKeys } from "@/lib/platform/query/keys";
 import type { AdminUser } from "@/lib/accounts/api";
 import { USERS_SEARCH_LABEL } from "@/lib/accounts/adminSchema";
 import { UserRow } from "./UserRow";
@@ -18,7 +19,7 @@ export type UserItem = AdminUser;
 export function UsersTable({ initial, shops, selfId }: { initial: UserItem[]; shops: { id: string; name: string }[]; selfId: string }) {
   const [search, setSearch] = useState("");
   const users = useQuery({
-    queryKey: ["admin-users", search],
+    queryKey: queryKeys.admin.users.list(search),
     queryFn: () => api<{ users: UserItem[] }>(`/api/admin/users?q=${encodeURIComponent(search)}`).then((r) => r.users),
     initialData: search ? undefined : initial,
   });

@@ -7,6 +7,7 @@ import { Alert } from "@/components/ui/Alert";
 import { Button, buttonClass } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { api } from "@/lib/platform/client/api";
+import { queryKeys } from "@/lib/platform/query/keys";
 import { formatBoltPattern, formatLength, parseBoltPattern, setupGeometry } from "@/lib/fitment";
 import { bothUnits, setupLine } from "@/lib/garage/format";
 import type { VehicleDetail } from "@/lib/garage/types";
@@ -19,14 +20,13 @@ import { PlannedPanel } from "./PlannedPanel";
 export function VehicleView({ initial, initialPlanned }: { initial: VehicleDetail; initialPlanned: SetupValues | null }) {
   const id = initial.vehicle.id;
   const router = useRouter();
-  const qc = useQueryClient();
-  const q = useQuery({ queryKey: ["vehicle", id], queryFn: () => api<VehicleDetail>(`/api/vehicles/${id}`), initialData: initial });
+  const q = useQuery({ queryKey: queryKeys.garage.vehicle(id), queryFn: () => api<VehicleDetail>(`/api/vehicles/${id}`), initialData: initial });
   const { vehicle: v, clearances, photos } = q.data;
   const [confirming, setConfirming] = useState(false);
   const del = useMutation({
     mutationFn: () => api(`/api/vehicles/${id}`, { method: "DELETE" }),
-    onSuccess: async () => {
-      await qc.invalidateQueries({ queryKey: ["vehicles"] });
+    // The garage list is rendered on the server: the refresh after the move shows it without the vehicle.
+    onSuccess: () => {
       router.push("/garage");
       router.refresh();
     },
@@ -126,7 +126,7 @@ function DeletePoint({ vehicleId, clearanceId, label }: { vehicleId: string; cle
   const qc = useQueryClient();
   const m = useMutation({
     mutationFn: () => api(`/api/vehicles/${vehicleId}/clearances/${clearanceId}`, { method: "DELETE" }),
-    onSuccess: () => qc.invalidateQueries({ queryKey: ["vehicle", vehicleId] }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: queryKeys.garage.vehicle(vehicleId) }),
   });
   return (
     <Button variant="ghost" className="no-print min-h-8 px-2 py-1 text-xs" pending={m.isPending} onClick={() => m.mutate()} aria-label={`Delete point ${label}`}>

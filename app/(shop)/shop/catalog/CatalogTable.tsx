@@ -8,6 +8,7 @@ import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { CATALOG_KIND_FILTERS, type CatalogItem, type CatalogPage } from "@/lib/shop/catalog/api";
 import { api } from "@/lib/platform/client/api";
+import { queryKeys } from "@/lib/platform/query/keys";
 import { formatUsd } from "@/lib/shop/quotes/money";
 import { CATALOG_QUERY_LABELS } from "@/lib/shop/catalog/schema";
 
@@ -53,7 +54,7 @@ export function CatalogTable() {
     ...(q ? { q } : {}),
   });
   const data = useQuery({
-    queryKey: ["shop-catalog", params.toString()],
+    queryKey: queryKeys.shop.catalog.page(params.toString()),
     queryFn: () => api<CatalogPage>(`/api/shop/catalog?${params}`),
     placeholderData: keepPreviousData,
   });

@@ -6,6 +6,7 @@ import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { CSV_MAX_BYTES } from "@/lib/shop/catalog/csv";
+import { queryKeys } from "@/lib/platform/query/keys";
 
 interface Preview {
   importId: string | null;
@@ -108,7 +109,7 @@ export function ImportFlow() {
         }
         if (msg.imported !== undefined) {
           setPhase({ at: "done", imported: msg.imported, skipped });
-          await qc.invalidateQueries({ queryKey: ["shop-catalog"] });
+          await qc.invalidateQueries({ queryKey: queryKeys.shop.catalog.all });
         } else if (msg.done !== undefined) setPhase({ at: "importing", done: msg.done, total: msg.total ?? total });
       }
     }

@@ -11,6 +11,7 @@ import { Card } from "@/components/ui/Card";
 import { TextField } from "@/components/ui/TextField";
 import type { FitmentCandidates as Candidates } from "@/lib/shop/catalog/api";
 import { ApiError, api, applyFieldErrors } from "@/lib/platform/client/api";
+import { queryKeys } from "@/lib/platform/query/keys";
 import type { Customer, CustomerVehicle } from "@/lib/shop/customers/api";
 import { mmToIn } from "@/lib/fitment";
 import { describeFieldErrors } from "@/lib/shop/quotes/fieldLabels";
@@ -133,7 +134,7 @@ function CustomerStep({ customer, onPick }: { customer: Customer | null; onPick:
   const [submitted, setSubmitted] = useState("");
   const [adding, setAdding] = useState(false);
   const found = useQuery({
-    queryKey: ["shop-customers", submitted],
+    queryKey: queryKeys.shop.customers.search(submitted),
     queryFn: () => api<{ customers: Customer[] }>(`/api/shop/customers?q=${encodeURIComponent(submitted)}`).then((r) => r.customers),
     enabled: submitted.length > 0,
   });
@@ -218,7 +219,7 @@ function VehicleStep(props: {
   onCandidates: (v: Vehicle, c: Candidates) => void;
 }) {
   const saved = useQuery({
-    queryKey: ["shop-customer", props.customerId],
+    queryKey: queryKeys.shop.customers.vehicles(props.customerId),
     queryFn: () => api<{ vehicles: CustomerVehicle[] }>(`/api/shop/customers/${props.customerId}`).then((r) => r.vehicles),
   });
   const { register, handleSubmit, setError, formState, control, reset } = useForm<VehicleInput, unknown, Vehicle>({
