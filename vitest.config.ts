@@ -20,7 +20,7 @@ export default defineConfig({
         extends: true,
         test: {
           name: "unit",
-          include: ["lib/**/*.test.ts", "tests/unit/**/*.test.{ts,tsx}", "components/**/*.test.tsx", "app/**/*.test.tsx"],
+          include: ["lib/**/*.test.ts", "tests/unit/**/*.test.{ts,tsx}", "components/**/*.test.{ts,tsx}", "app/**/*.test.tsx"],
           environment: "node",
         },
       },

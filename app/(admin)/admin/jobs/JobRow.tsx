@@ -15,7 +15,7 @@ export function JobRow({ job }: { job: ProblemJob }) {
     onSuccess: () => qc.invalidateQueries({ queryKey: queryKeys.admin.jobs.all }),
   });
   return (
-    <tr className="border-b border-basalt-100 align-top max-md:flex max-md:flex-col max-md:gap-1 max-md:py-3" data-testid="job-row">
+    <tr className="align-top max-md:flex max-md:flex-col max-md:gap-1 max-md:py-3" data-testid="job-row">
       <td className="py-2 pr-2 font-medium">
         {QUEUE_LABEL[job.queue] ?? job.queue}
         <span className="block font-mono text-xs text-basalt-500">{job.id}</span>

@@ -5,6 +5,7 @@ import { useRef, useState } from "react";
 import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
+import { Table, type TableColumn } from "@/components/ui/Table";
 import { CSV_MAX_BYTES } from "@/lib/shop/catalog/csv";
 import { queryKeys } from "@/lib/platform/query/keys";
 
@@ -44,6 +45,14 @@ function upload(file: File, onProgress: (pct: number) => void): Promise<{ status
     xhr.send(file);
   });
 }
+
+type ImportProblem = Preview["errors"][number];
+/** In the file's order: row by row, as the spreadsheet shows them. */
+const ERROR_COLUMNS: TableColumn<ImportProblem>[] = [
+  { id: "row", header: "Row", cell: (e) => `${e.row}${e.line ? ` (line ${e.line})` : ""}`, className: "whitespace-nowrap pl-3 tabular-nums" },
+  { id: "column", header: "Column", cell: (e) => <span className="font-mono text-xs">{e.column || "—"}</span> },
+  { id: "problem", header: "Problem", cell: (e) => e.message },
+];
 
 /** "1 row", "9 rows": the preview counts rows and problems, never one for the other. */
 const count = (n: number, noun: string) => `${n.toLocaleString("en-US")} ${noun}${n === 1 ? "" : "s"}`;
@@ -145,17 +154,14 @@ export function ImportFlow() {
           </div>
           {phase.preview.problemCount > 0 && (
             <div className="max-h-96 overflow-auto rounded-lg ring-1 ring-basalt-200" tabIndex={0} role="region" aria-label="Problems by row">
-              <table className="w-full text-left text-sm">
-                <caption className="sr-only">Problems by row; row numbers as a spreadsheet shows them, the header being row 1</caption>
-                <thead className="sticky top-0 bg-basalt-50 text-xs uppercase tracking-wide text-basalt-600">
-                  <tr><th className="px-3 py-2">Row</th><th className="px-3">Column</th><th className="px-3">Problem</th></tr>
-                </thead>
-                <tbody className="divide-y divide-basalt-100">
-                  {phase.preview.errors.map((e, i) => (
-                    <tr key={i} data-testid="import-error"><td className="whitespace-nowrap px-3 py-1 tabular-nums">{e.row}{e.line ? ` (line ${e.line})` : ""}</td><td className="px-3 font-mono text-xs">{e.column || "—"}</td><td className="px-3">{e.message}</td></tr>
-                  ))}
-                </tbody>
-              </table>
+              <Table
+                caption="Problems by row; row numbers as a spreadsheet shows them, the header being row 1"
+                headClassName="sticky top-0 bg-basalt-50"
+                columns={ERROR_COLUMNS}
+                rows={phase.preview.errors}
+                rowKey={(_e, i) => String(i)}
+                rowTestId="import-error"
+              />
               {phase.preview.problemCount > phase.preview.errors.length && (
                 <p className="p-3 text-sm text-basalt-600">… and {count(phase.preview.problemCount - phase.preview.errors.length, "more problem")}.</p>
               )}
