@@ -6,6 +6,7 @@ import { ApiError, api } from "@/lib/platform/client/api";
 import { queryKeys } from "@/lib/platform/query/keys";
 import { ROLES, type Role } from "@/lib/platform/db/types";
 import { labelledMessage } from "@/lib/platform/validation/labels";
+import { PhoneLabel } from "./PhoneLabel";
 import type { UserItem } from "./UsersTable";
 
 const ROLE_LABEL: Record<Role, string> = { member: "Member", shop_staff: "Shop staff", shop_owner: "Shop owner", admin: "Admin" };
@@ -17,11 +18,6 @@ const LABELS = { role: "Role", shopId: "Shop" };
 function refusal(e: unknown): string {
   if (!(e instanceof ApiError)) return "The change was not saved. Try again.";
   return labelledMessage(e.body.fieldErrors, LABELS) ?? e.message;
-}
-
-/** Shown before the control on a phone, where the table's header row is not. */
-function PhoneLabel({ children }: { children: string }) {
-  return <span aria-hidden className="mr-2 inline-block w-12 text-xs font-semibold uppercase tracking-wide text-basalt-500 md:hidden">{children}</span>;
 }
 
 export function UserRow({ user, shops, self }: { user: UserItem; shops: { id: string; name: string }[]; self: boolean }) {

@@ -1,5 +1,5 @@
 "use client";
-import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { useMutation, useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
@@ -15,6 +15,7 @@ import { CLEARANCE_DIRECTION_LABEL, FRONT_SUSPENSION_LABEL, SUSPENSION_STATE_LAB
 import { type SetupValues, toEngineSetup } from "@/lib/setup/schema";
 import { PhotoDrop } from "../_components/PhotoDrop";
 import { AddPoint } from "./AddPoint";
+import { DeletePoint } from "./DeletePoint";
 import { PlannedPanel } from "./PlannedPanel";
 
 export function VehicleView({ initial, initialPlanned }: { initial: VehicleDetail; initialPlanned: SetupValues | null }) {
@@ -119,18 +120,5 @@ export function VehicleView({ initial, initialPlanned }: { initial: VehicleDetai
 
       <PlannedPanel detail={q.data} initialPlanned={initialPlanned} />
     </div>
-  );
-}
-
-function DeletePoint({ vehicleId, clearanceId, label }: { vehicleId: string; clearanceId: string; label: string }) {
-  const qc = useQueryClient();
-  const m = useMutation({
-    mutationFn: () => api(`/api/vehicles/${vehicleId}/clearances/${clearanceId}`, { method: "DELETE" }),
-    onSuccess: () => qc.invalidateQueries({ queryKey: queryKeys.garage.vehicle(vehicleId) }),
-  });
-  return (
-    <Button variant="ghost" className="no-print min-h-8 px-2 py-1 text-xs" pending={m.isPending} onClick={() => m.mutate()} aria-label={`Delete point ${label}`}>
-      Delete point
-    </Button>
   );
 }

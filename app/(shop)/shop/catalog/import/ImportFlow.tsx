@@ -6,6 +6,7 @@ import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { Table, type TableColumn } from "@/components/ui/Table";
+import { ImportProgress } from "./ImportProgress";
 import { CSV_MAX_BYTES } from "@/lib/shop/catalog/csv";
 import { queryKeys } from "@/lib/platform/query/keys";
 
@@ -56,16 +57,6 @@ const ERROR_COLUMNS: TableColumn<ImportProblem>[] = [
 
 /** "1 row", "9 rows": the preview counts rows and problems, never one for the other. */
 const count = (n: number, noun: string) => `${n.toLocaleString("en-US")} ${noun}${n === 1 ? "" : "s"}`;
-
-function Progress({ label, value, max }: { label: string; value: number; max: number }) {
-  return (
-    <div className="flex flex-col gap-1">
-      <label htmlFor="import-progress" className="text-sm font-medium">{label}</label>
-      <progress id="import-progress" className="h-3 w-full accent-ember-600" value={value} max={max} />
-      <span className="text-xs text-basalt-600" aria-live="polite">{max ? Math.round((value / max) * 100) : 0} %</span>
-    </div>
-  );
-}
 
 export function ImportFlow() {
   const qc = useQueryClient();
@@ -141,7 +132,7 @@ export function ImportFlow() {
           />
         </div>
       )}
-      {phase.at === "uploading" && <Progress label="Uploading and checking" value={phase.pct} max={100} />}
+      {phase.at === "uploading" && <ImportProgress label="Uploading and checking" value={phase.pct} max={100} />}
       {phase.at === "preview" && (
         <>
           <div>
@@ -179,7 +170,7 @@ export function ImportFlow() {
           </div>
         </>
       )}
-      {phase.at === "importing" && <Progress label="Importing (one transaction: all rows or none)" value={phase.done} max={phase.total} />}
+      {phase.at === "importing" && <ImportProgress label="Importing (one transaction: all rows or none)" value={phase.done} max={phase.total} />}
       {phase.at === "done" && (
         <Alert tone="success" title="Import finished">
           {phase.imported.toLocaleString("en-US")} items imported.{phase.skipped ? ` ${count(phase.skipped, "row")} with problems skipped.` : ""} <Link className="underline" href="/shop/catalog">Back to the catalog</Link>
