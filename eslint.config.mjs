@@ -30,5 +30,12 @@ const config = [
     rules: { "no-restricted-imports": ["error", { patterns: [{ group: ["@/app/*", "@/components/*"], message: "lib/ is below app/ and components/: move the shared code into lib/." }] }] },
   },
   { files: ["app/**/*.{ts,tsx}", "components/**/*.{ts,tsx}", "lib/**/*.{ts,tsx}"], rules: { "hubface/client-no-server": "error", "hubface/tables-in-queries": "error" } },
+  // Query keys come from one factory, so a feature's keys nest and no invalidation names a key nothing reads.
+  {
+    files: ["app/**/*.{ts,tsx}", "components/**/*.{ts,tsx}"],
+    rules: {
+      "no-restricted-syntax": ["error", { selector: "Property[key.name='queryKey'] > ArrayExpression", message: "Build query keys with queryKeys from @/lib/platform/query/keys." }],
+    },
+  },
 ];
 export default config;

@@ -20,7 +20,9 @@ export default defineConfig({
         extends: true,
         test: {
           name: "unit",
-          include: ["lib/**/*.test.ts", "tests/unit/**/*.test.{ts,tsx}", "components/**/*.test.tsx", "app/**/*.test.tsx"],
+          // Pure tests sit beside their module (tests/ holds integration and browser tests, and the
+          // integration tests' own helpers, whose tests sit beside them and run here).
+          include: ["{app,components,lib,scripts}/**/*.test.{ts,tsx}", "tests/integration/support/**/*.test.ts"],
           environment: "node",
         },
       },
@@ -29,6 +31,7 @@ export default defineConfig({
         test: {
           name: "integration",
           include: ["tests/integration/**/*.test.ts"],
+          exclude: ["tests/integration/support/**"],
           environment: "node",
           fileParallelism: false,
           testTimeout: 30000,

@@ -7,6 +7,7 @@ import { ApiError, api } from "@/lib/platform/client/api";
 import type { SlotsAnswer } from "@/lib/shop/bookings/api";
 import { BAY_KIND_LABEL, START_FIELD_LABEL } from "@/lib/shop/bookings/vocabulary";
 import { addDays, formatDuration } from "@/lib/shop/bookings/zoned";
+import { queryKeys } from "@/lib/platform/query/keys";
 
 interface Props {
   /** GET endpoint answering SlotsAnswer (`?from=YYYY-MM-DD&days=7`). */
@@ -30,7 +31,7 @@ export function SlotPicker({ slotsUrl, actionLabel, onPick, idPrefix }: Props) {
   const [error, setError] = useState<string | null>(null);
   const [pending, setPending] = useState(false);
   const slots = useQuery({
-    queryKey: ["install-slots", slotsUrl, from],
+    queryKey: queryKeys.shop.slots.week(slotsUrl, from),
     queryFn: () => api<SlotsAnswer>(`${slotsUrl}?days=7${from ? `&from=${from}` : ""}`),
     placeholderData: keepPreviousData,
   });

@@ -1,7 +1,7 @@
-import { randomBytes } from "node:crypto";
 import type { Knex } from "knex";
 import { keyFigureColumns } from "../../lib/comparisons/keyFigures";
 import { type ComparisonInput, comparisonInputSchema } from "../../lib/comparisons/schema";
+import { randomToken } from "../../lib/platform/tokens";
 
 /**
  * Saved comparisons for the demo member (invented builds). The third has a live share link
@@ -53,7 +53,7 @@ export async function seed(knex: Knex): Promise<void> {
     }
     if (c.shared) {
       const everShared = await knex("comparison_shares").where({ comparison_id: c.id }).first("id");
-      if (!everShared) await knex("comparison_shares").insert({ comparison_id: c.id, slug: randomBytes(18).toString("base64url") });
+      if (!everShared) await knex("comparison_shares").insert({ comparison_id: c.id, slug: randomToken(18) });
     }
   }
 }

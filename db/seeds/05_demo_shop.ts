@@ -1,9 +1,9 @@
-import { createHash, randomBytes } from "node:crypto";
 import type { Knex } from "knex";
 import { parseCatalogCsv } from "../../lib/shop/catalog/csv";
 import { buildQuoteDocument } from "../../lib/shop/quotes/document";
 import { summarize } from "../../lib/shop/quotes/fitment";
 import { computeTotals } from "../../lib/shop/quotes/totals";
+import { hashToken, randomToken } from "../../lib/platform/tokens";
 import { DEMO_SHOP, DEMO_USERS } from "./01_demo_accounts";
 
 /**
@@ -167,7 +167,7 @@ export async function seed(knex: Knex): Promise<void> {
         total_cents: t.totalCents,
         deposit_cents: t.depositCents,
         // A link nobody knows: staff "send again" to get one into the outbox.
-        public_token_hash: sent ? createHash("sha256").update(randomBytes(32).toString("base64url")).digest("hex") : null,
+        public_token_hash: sent ? hashToken(randomToken()) : null,
         valid_until: sent ? knex.raw("now() - make_interval(days => ?) + make_interval(days => ?)", [p.daysAgo, shop.quote_validity_days]) : null,
         created_at: created,
         updated_at: created,

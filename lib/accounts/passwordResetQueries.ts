@@ -1,23 +1,21 @@
 import "server-only";
-import { createHash, randomBytes } from "node:crypto";
 import type { Knex } from "knex";
 import type { PasswordResetRow } from "@/lib/platform/db/types";
 import { findUserById, setPassword } from "./queries";
 import { bindAppDb } from "@/lib/platform/db/bind";
 import { InvalidError } from "@/lib/platform/errors";
+import { hashToken, randomToken } from "@/lib/platform/tokens";
 
 export const RESET_TTL_MINUTES = 30;
 
-const sha256 = (s: string) => createHash("sha256").update(s).digest("hex");
-
 /** A new single-use token (256 bits, URL-safe). Earlier unused tokens of the user are voided. */
 export async function issueResetToken(db: Knex, userId: string): Promise<string> {
-  const token = randomBytes(32).toString("base64url");
+  const token = randomToken();
   await db.transaction(async (trx) => {
     await trx("password_resets").where({ user_id: userId }).whereNull("used_at").update({ used_at: trx.fn.now() });
     await trx("password_resets").insert({
       user_id: userId,
-      token_hash: sha256(token),
+      token_hash: hashToken(token),
       expires_at: trx.raw("now() + make_interval(mins => ?)", [RESET_TTL_MINUTES]),
     });
   });
@@ -30,7 +28,7 @@ export async function issueResetToken(db: Knex, userId: string): Promise<string>
  */
 export async function consumeResetToken(db: Knex, token: string, trx?: Knex.Transaction): Promise<string | null> {
   const [row] = (await (trx ?? db)("password_resets")
-    .where({ token_hash: sha256(token) })
+    .where({ token_hash: hashToken(token) })
     .whereNull("used_at")
     .andWhere("expires_at", ">", db.fn.now())
     .update({ used_at: db.fn.now() })

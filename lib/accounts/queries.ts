@@ -2,6 +2,7 @@ import "server-only";
 import type { Knex } from "knex";
 import type { PublicUser, Role, UserRow } from "@/lib/platform/db/types";
 import { bindAppDb } from "@/lib/platform/db/bind";
+import { containsPattern } from "@/lib/platform/search/normalize";
 import { type AdminUser, adminUserDto } from "@/lib/accounts/api";
 import { InvalidError, NotFoundError, SOME_FIELDS } from "@/lib/platform/errors";
 
@@ -50,7 +51,7 @@ export async function listUsers(db: Knex, opts: { search?: string; limit?: numbe
     .select("u.id", "u.email", "u.name", "u.role", "u.shop_id", "u.created_at", "u.updated_at", "s.name as shop_name")
     .orderBy("u.created_at", "asc");
   if (opts.search) {
-    const like = `%${opts.search.replace(/[%_\\]/g, (c) => "\\" + c)}%`;
+    const like = containsPattern(opts.search);
     q.where((w) => w.whereILike("u.email", like).orWhereILike("u.name", like));
   }
   return ((await q.limit(opts.limit ?? 200).offset(opts.offset ?? 0)) as (PublicUser & { shop_name: string | null })[]).map(adminUserDto);

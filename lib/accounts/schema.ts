@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { LINK_TOKEN_RE } from "@/lib/platform/tokenFormat";
 
 /**
  * Shared by the forms (react-hook-form resolver) and the route handlers. Every field has a
@@ -35,7 +36,7 @@ export type ForgotPasswordInput = z.infer<typeof forgotPasswordSchema>;
 
 export const resetPasswordSchema = z
   .object({
-    token: z.string({ error: "This reset link is not valid. Ask for a new one." }).regex(/^[A-Za-z0-9_-]{43}$/, "This reset link is not valid. Ask for a new one."),
+    token: z.string({ error: "This reset link is not valid. Ask for a new one." }).regex(LINK_TOKEN_RE, "This reset link is not valid. Ask for a new one."),
     password: passwordField,
     confirm: z.string({ error: "Type the new password again." }),
   })

@@ -1,5 +1,4 @@
 import "server-only";
-import { randomBytes } from "node:crypto";
 import type { Knex } from "knex";
 import { keyFigureColumns } from "@/lib/comparisons/keyFigures";
 import { type ComparisonInput, comparisonInputSchema } from "@/lib/comparisons/schema";
@@ -17,6 +16,8 @@ import {
   sharedComparisonDto,
 } from "@/lib/comparisons/api";
 import { bindAppDb } from "@/lib/platform/db/bind";
+import { containsPattern } from "@/lib/platform/search/normalize";
+import { randomToken } from "@/lib/platform/tokens";
 
 /**
  * Saved comparisons and share links. Every function taking an `ownerId` scopes by it: another
@@ -44,7 +45,7 @@ export async function listComparisons(db: Knex, ownerId: string, opts: { q?: str
   const q = withShare(db).where("c.owner_id", ownerId);
   const search = opts.q?.trim();
   if (search) {
-    const like = `%${search.replace(/[%_\\]/g, (c) => "\\" + c)}%`;
+    const like = containsPattern(search);
     q.where((w) => w.whereILike("c.name", like).orWhereILike("c.current_tire", like).orWhereILike("c.planned_tire", like));
   }
   for (const [col, dir] of SORTS[opts.sort ?? "updated"]) {
@@ -133,7 +134,7 @@ export async function duplicateComparison(db: Knex, ownerId: string, id: string)
 
 /** 18 bytes from the operating system's CSPRNG: 144 bits, 24 URL-safe characters. */
 export function newShareSlug(): string {
-  return randomBytes(18).toString("base64url");
+  return randomToken(18);
 }
 
 /**

@@ -1,5 +1,4 @@
 import "server-only";
-import { createHash, randomBytes } from "node:crypto";
 import type { Knex } from "knex";
 import type { ShopSettingsRow } from "@/lib/platform/db/types";
 import { type StaffInvite, type TeamMember, staffInviteDto } from "@/lib/shop/api";
@@ -8,9 +7,9 @@ import { ConflictError, GoneError, InvalidError, NotFoundError } from "@/lib/pla
 import { passwordField } from "@/lib/accounts/schema";
 import type { ShopSettings } from "@/lib/shop/schema";
 import { bindAppDb } from "@/lib/platform/db/bind";
+import { hashToken, randomToken } from "@/lib/platform/tokens";
 
 export const INVITE_TTL_HOURS = 72;
-const sha256 = (s: string) => createHash("sha256").update(s).digest("hex");
 
 const SHOP_NOT_FOUND = "Your shop";
 
@@ -63,7 +62,7 @@ export async function listOpenInvites(db: Knex, shopId: string): Promise<StaffIn
 
 /** A new single-use invitation (256-bit URL-safe token; only its hash is kept). */
 export async function createInvite(db: Knex, shopId: string, email: string, invitedBy: string): Promise<{ token: string; invite: StaffInvite }> {
-  const token = randomBytes(32).toString("base64url");
+  const token = randomToken();
   const invite = await db.transaction(async (trx) => {
     // One open invitation per address: a new one replaces the old link.
     await trx("staff_invites")
@@ -76,7 +75,7 @@ export async function createInvite(db: Knex, shopId: string, email: string, invi
       .insert({
         shop_id: shopId,
         email: email.trim(),
-        token_hash: sha256(token),
+        token_hash: hashToken(token),
         invited_by: invitedBy,
         expires_at: trx.raw("now() + make_interval(hours => ?)", [INVITE_TTL_HOURS]),
       })
@@ -96,7 +95,7 @@ export async function revokeInvite(db: Knex, shopId: string, id: string): Promis
 export async function findOpenInvite(db: Knex | Knex.Transaction, token: string, lock = false) {
   const q = db("staff_invites as i")
     .join("shops as s", "s.id", "i.shop_id")
-    .where("i.token_hash", sha256(token))
+    .where("i.token_hash", hashToken(token))
     .whereNull("i.used_at")
     .whereNull("i.revoked_at")
     .andWhere("i.expires_at", ">", db.fn.now())

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { parseMoneyToCents, parsePercentToBp } from "@/lib/shop/quotes/money";
 import { emailField } from "../accounts/schema";
+import { LINK_TOKEN_RE } from "@/lib/platform/tokenFormat";
 
 /** Shared by the shop forms and route handlers. Money fields are typed in dollars, stored in cents. */
 export const moneyField = (label: string, max = 100_000_00) =>
@@ -48,7 +49,7 @@ export const staffInviteSchema = z.object({
 export type StaffInviteInput = z.infer<typeof staffInviteSchema>;
 
 export const joinShopSchema = z.object({
-  token: z.string().regex(/^[A-Za-z0-9_-]{43}$/, "This invitation link is not valid."),
+  token: z.string().regex(LINK_TOKEN_RE, "This invitation link is not valid."),
   name: z.string().trim().max(100, "Use at most 100 characters.").optional(),
   password: z.string().min(1, "Enter a password.").max(200, "Use at most 200 characters."),
 });

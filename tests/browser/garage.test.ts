@@ -169,6 +169,26 @@ describe("the garage in Chromium", () => {
     );
     const rows = page.getByTestId("finder-results").locator("tbody tr");
     await expect.poll(() => rows.count()).toBeGreaterThan(3);
+    // The best 200 come 25 a page, and at 1280 px every column shows, the links included: the
+    // table's box does not scroll sideways and the last link ends inside the window.
+    expect(await rows.count()).toBe(25);
+    expect(await page.getByTestId("finder-page-rows").textContent()).toBe("Rows 1–25 of 200");
+    const box = page.getByTestId("finder-results").locator("xpath=..");
+    expect(await box.evaluate((el) => el.scrollWidth - el.clientWidth)).toBeLessThanOrEqual(0);
+    const lastLink = await rows.first().getByRole("link", { name: "Predict" }).boundingBox();
+    expect(lastLink!.x + lastLink!.width).toBeLessThanOrEqual(1280);
+    const pages = page.getByRole("navigation", { name: "Pages of fitments" });
+    await pages.getByRole("button", { name: "Next" }).click();
+    await expect.poll(() => page.getByTestId("finder-page-rows").textContent()).toBe("Rows 26–50 of 200");
+    expect(await rows.first().locator("td").first().textContent()).toBe("26");
+    // Any figure sorts: by offset, the page's offsets never go down, and sorting starts at page 1.
+    await page.getByRole("button", { name: /^Offset/ }).click();
+    await expect.poll(() => page.getByTestId("finder-page-rows").textContent()).toBe("Rows 1–25 of 200");
+    const offsets = (await rows.locator("td:nth-child(5)").allTextContents()).map((t) => Number(t.replace(/[^\d.−-]/g, "").replace("−", "-")));
+    expect(offsets).toEqual([...offsets].sort((a, b) => a - b));
+    await page.getByRole("button", { name: /^Offset/ }).click();
+    await page.getByRole("button", { name: /^Offset/ }).click();
+    await expect.poll(() => page.getByTestId("finder-results").locator("th", { hasText: "Offset" }).getAttribute("aria-sort")).toBe(null);
     await page.getByRole("button", { name: /^Diameter/ }).click();
     await expect.poll(() => page.getByTestId("finder-results").locator("th", { hasText: "Diameter" }).getAttribute("aria-sort")).toBe("ascending");
     await page.getByLabel("Filter by tire size or wheel").fill("17x9");

@@ -2,7 +2,7 @@ import type { Role } from "@/lib/platform/db/types";
 
 /**
  * What the account page tells each role it may do. The garage, the navigation and the role
- * matrix follow these words (tests/unit/role-words-and-rules.test.ts holds them together).
+ * matrix follow these words (roleSummary.test.ts beside this file holds them together).
  */
 export const ROLE_SUMMARY: Record<Role, { title: string; items: string[] }> = {
   member: { title: "Member", items: ["Compare setups and keep the comparisons you save", "Keep vehicles with their measured clearances", "Share a comparison by link"] },

@@ -1,5 +1,5 @@
 "use client";
-import { type QueryKey, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import Link from "next/link";
 import { useEffect, useId, useState, useSyncExternalStore } from "react";
 import { DisplayToggle } from "@/components/comparison/DisplayToggle";
@@ -9,6 +9,7 @@ import { Badge } from "@/components/ui/Badge";
 import { Button, buttonClass } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { api } from "@/lib/platform/client/api";
+import { queryKeys } from "@/lib/platform/query/keys";
 import { type DisplayPrefs, formatLen, formatNumber } from "@/lib/comparisons/format";
 import { readingPhrase } from "@/lib/comparisons/speedometer";
 import { encodeComparison } from "@/lib/comparisons/url";
@@ -16,8 +17,6 @@ import type { ComparisonShare, SavedComparison } from "@/lib/comparisons/api";
 import { COMPARISON_SORTS, COMPARISON_SORT_LABEL, type ComparisonSort, comparisonNameSchema } from "@/lib/comparisons/savedSchema";
 
 type ListData = SavedComparison[];
-const LIST_KEY = ["comparisons"] as const;
-const listKey = (q: string, sort: ComparisonSort): QueryKey => [...LIST_KEY, { q, sort }];
 
 const noSubscribe = () => () => {};
 /** The page's origin in the browser ("" while rendering on the server). */
@@ -45,7 +44,7 @@ export function ComparisonList({ initial }: { initial: ListData }) {
   const [sort, setSort] = useState<ComparisonSort>("updated");
   const q = useDebounced(search.trim(), 250);
   const list = useQuery({
-    queryKey: listKey(q, sort),
+    queryKey: queryKeys.comparisons.list({ q, sort }),
     queryFn: () => api<{ comparisons: ListData }>(`/api/comparisons?q=${encodeURIComponent(q)}&sort=${sort}`).then((r) => r.comparisons),
     initialData: q === "" && sort === "updated" ? initial : undefined,
     placeholderData: (prev) => prev,
@@ -114,15 +113,15 @@ function ComparisonItem({ c, prefs }: { c: SavedComparison; prefs: DisplayPrefs 
   const [confirmDelete, setConfirmDelete] = useState(false);
   const [message, setMessage] = useState<{ tone: "error" | "ok"; text: string } | null>(null);
   const len = (mm: number) => formatLen(mm, prefs, { signed: true, decimals: prefs.units === "metric" ? 0 : 2 });
-  const done = () => qc.invalidateQueries({ queryKey: LIST_KEY });
+  const done = () => qc.invalidateQueries({ queryKey: queryKeys.comparisons.all });
 
   const rename = useMutation({
     mutationFn: (name: string) => api<{ comparison: SavedComparison }>(`/api/comparisons/${c.id}`, { method: "PATCH", body: { name } }),
     // Optimistic: every cached list shows the new name at once; rolled back if the server refuses.
     onMutate: async (name) => {
-      await qc.cancelQueries({ queryKey: LIST_KEY });
-      const before = qc.getQueriesData<ListData>({ queryKey: LIST_KEY });
-      qc.setQueriesData<ListData>({ queryKey: LIST_KEY }, (old) => old?.map((x) => (x.id === c.id ? { ...x, name: name.trim() } : x)));
+      await qc.cancelQueries({ queryKey: queryKeys.comparisons.lists });
+      const before = qc.getQueriesData<ListData>({ queryKey: queryKeys.comparisons.lists });
+      qc.setQueriesData<ListData>({ queryKey: queryKeys.comparisons.lists }, (old) => old?.map((x) => (x.id === c.id ? { ...x, name: name.trim() } : x)));
       setRenaming(false);
       setMessage(null);
       return { before };
@@ -282,7 +281,7 @@ function ShareControls({ c }: { c: SavedComparison }) {
   const [copied, setCopied] = useState<"idle" | "done" | "failed">("idle");
   const [error, setError] = useState<string | null>(null);
   const inputId = useId();
-  const done = () => qc.invalidateQueries({ queryKey: LIST_KEY });
+  const done = () => qc.invalidateQueries({ queryKey: queryKeys.comparisons.all });
   const create = useMutation({
     mutationFn: () => api<{ share: ComparisonShare }>(`/api/comparisons/${c.id}/share`, { method: "POST" }),
     onMutate: () => setError(null),

@@ -9,6 +9,7 @@ import { Badge } from "@/components/ui/Badge";
 import { Button } from "@/components/ui/Button";
 import { TextField } from "@/components/ui/TextField";
 import { ApiError, api, applyFieldErrors } from "@/lib/platform/client/api";
+import { queryKeys } from "@/lib/platform/query/keys";
 import { useDisplayPrefs } from "@/components/comparison/useDisplayPrefs";
 import { inputFieldLabel } from "@/lib/comparisons/fields";
 import type { DisplayPrefs } from "@/lib/comparisons/format";
@@ -66,7 +67,7 @@ export function SaveComparison({ saved: openedFrom }: { saved: OpenedComparison 
       window.history.replaceState(window.history.state, "", withParam(window.location.search, "saved", comparison.id));
       setFormOpen(false);
       setNotice(`Saved as “${comparison.name}”.`);
-      void qc.invalidateQueries({ queryKey: ["comparisons"] });
+      void qc.invalidateQueries({ queryKey: queryKeys.comparisons.all });
     },
     onError: (error) => {
       const rest = applyFieldErrors(error, form.setError, ["name"]);
@@ -78,7 +79,7 @@ export function SaveComparison({ saved: openedFrom }: { saved: OpenedComparison 
     onSuccess: ({ comparison }) => {
       setSaved({ id: comparison.id, name: comparison.name, vehicleId: comparison.vehicleId, input: comparison.input });
       setNotice(`Changes saved to “${comparison.name}”.`);
-      void qc.invalidateQueries({ queryKey: ["comparisons"] });
+      void qc.invalidateQueries({ queryKey: queryKeys.comparisons.all });
     },
     onError: (error) => {
       if (error instanceof ApiError && error.status === 404) {

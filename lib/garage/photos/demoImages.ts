@@ -3,8 +3,7 @@
  * sketch of a clearance point, each labelled "demo image". Nothing is taken from elsewhere.
  */
 import sharp from "sharp";
-
-const esc = (s: string) => s.replace(/[&<>"]/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;" })[c] ?? c);
+import { escapeHtml as esc } from "@/lib/platform/text";
 
 /** A side view: sky gradient, ground, a boxy body and two wheels; `lifted` raises the body. */
 export async function demoVehiclePicture(label: string, opts: { body: string; cab: "pickup" | "wagon"; lifted: number }): Promise<Buffer> {

@@ -11,9 +11,10 @@
  *
  * Plain Node (no Next imports): the server loads it outside Next's bundle.
  */
-import { randomBytes, timingSafeEqual } from "node:crypto";
+import { timingSafeEqual } from "node:crypto";
 import pg from "pg";
 import { log } from "@/lib/platform/log";
+import { randomToken } from "@/lib/platform/tokens";
 
 /** The NOTIFY channel (an identifier: lower case, no quoting needed). */
 export const SHARE_PURGE_CHANNEL = "hubface_share_purge";
@@ -155,7 +156,7 @@ export const LOCAL_PURGE_HEADER = "x-hubface-purge-token";
  * @example fetch(url, { headers: { [LOCAL_PURGE_HEADER]: localPurgeToken() } });
  */
 export function localPurgeToken(): string {
-  return ((globalThis as WithToken)[TOKEN] ??= randomBytes(32).toString("base64url"));
+  return ((globalThis as WithToken)[TOKEN] ??= randomToken());
 }
 
 /**

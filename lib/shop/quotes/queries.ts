@@ -1,6 +1,5 @@
 import "server-only";
 import { STATUS_LABEL } from "@/lib/shop/quotes/status";
-import { createHash, randomBytes } from "node:crypto";
 import type { Knex } from "knex";
 import type { CatalogItemRow, QuoteEventRow, QuoteLineRow, QuoteLineUnit, QuoteRow, QuoteStatus, ServiceType } from "@/lib/platform/db/types";
 import { ConflictError, InvalidError, NotFoundError } from "@/lib/platform/errors";
@@ -12,6 +11,8 @@ import { formatQuantity } from "@/lib/shop/quotes/quantity";
 import { TotalsError, computeTotals } from "@/lib/shop/quotes/totals";
 import { resolveVehicle, type Vehicle } from "@/lib/shop/quotes/schema";
 import { bindAppDb } from "@/lib/platform/db/bind";
+import { isLinkToken } from "@/lib/platform/tokenFormat";
+import { hashToken, randomToken } from "@/lib/platform/tokens";
 
 /** Whose quotes a caller sees: owners the whole shop's, staff the ones they wrote. */
 export interface QuoteScope {
@@ -27,8 +28,6 @@ export interface Actor {
   userId: string | null;
   label: string;
 }
-
-const sha256 = (s: string) => createHash("sha256").update(s).digest("hex");
 
 /** Allowed moves; anything else is a ConflictError. */
 const TRANSITIONS: Record<QuoteStatus, QuoteStatus[]> = {
@@ -382,7 +381,7 @@ export async function updateDraft(db: Knex, scope: QuoteScope, id: string, input
  * looking at; if the quote changed since, nothing is sent (409). Returns the token for the link.
  */
 export async function markSent(db: Knex, scope: QuoteScope, id: string, actor: Actor, seenUpdatedAt?: string): Promise<{ token: string; document: QuoteDocument }> {
-  const token = randomBytes(32).toString("base64url");
+  const token = randomToken();
   const document = await db.transaction(async (trx) => {
     const quote = await getQuote(trx, scope, id, true);
     if (seenUpdatedAt && new Date(quote.updated_at).getTime() !== new Date(seenUpdatedAt).getTime()) {
@@ -392,7 +391,7 @@ export async function markSent(db: Knex, scope: QuoteScope, id: string, actor: A
     if (!customer?.email) throw new InvalidError("The customer has no e-mail address. Add one before sending.");
     const shop = await trx("shops").where({ id: scope.shopId }).first("name", "address", "phone", "quote_validity_days");
     await transition(trx, quote, "sent", actor, quote.status === "sent" ? "sent again" : "", {
-      public_token_hash: sha256(token),
+      public_token_hash: hashToken(token),
       valid_until: trx.raw("now() + make_interval(days => ?)", [shop.quote_validity_days]) as unknown as Date,
     });
     const [now, lines, author] = await Promise.all([
@@ -435,8 +434,8 @@ export async function answerByToken(db: Knex, token: string, to: "accepted" | "d
 
 /** A quote by its public token (the customer's link), or undefined. */
 export async function findByToken(db: Knex | Knex.Transaction, token: string, lock = false): Promise<QuoteRow | undefined> {
-  if (!/^[A-Za-z0-9_-]{43}$/.test(token)) return undefined;
-  const q = db<QuoteRow>("quotes").where({ public_token_hash: sha256(token) }).first();
+  if (!isLinkToken(token)) return undefined;
+  const q = db<QuoteRow>("quotes").where({ public_token_hash: hashToken(token) }).first();
   if (lock) q.forUpdate();
   return withEffectiveStatus((await q) as QuoteRow | undefined);
 }

@@ -8,6 +8,7 @@ import { quotePdf } from "@/lib/shop/quotes/pdf";
 import { type QuoteRecord, type QuoteScope, type Actor, findByToken, getQuoteDetail, latestSentDocument, markSent, quoteParties } from "./queries";
 import { getShop } from "../queries";
 import { bindAppDb } from "@/lib/platform/db/bind";
+import { escapeHtml as esc } from "@/lib/platform/text";
 
 /**
  * The quote as a document: a draft from its live rows; any other quote as it was last sent
@@ -32,8 +33,6 @@ export async function findPublicQuoteView(db: Knex, token: string): Promise<{ qu
   if (!quote) return undefined;
   return { quote, document: await documentFor(db, { quote, ...(await quoteParties(db, quote)) }) };
 }
-
-const esc = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
 
 /**
  * Marks the quote sent (fresh link, document frozen as sent) and e-mails the customer the PDF and

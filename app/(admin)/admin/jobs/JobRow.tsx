@@ -2,6 +2,7 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { Button } from "@/components/ui/Button";
 import { ApiError, api } from "@/lib/platform/client/api";
+import { queryKeys } from "@/lib/platform/query/keys";
 import type { ProblemJob } from "@/lib/platform/jobs/problemJob";
 
 const QUEUE_LABEL: Record<string, string> = { "mail.send": "E-mail", "quotes.expire": "Quote expiry" };
@@ -11,10 +12,10 @@ export function JobRow({ job }: { job: ProblemJob }) {
   const qc = useQueryClient();
   const retry = useMutation({
     mutationFn: () => api(`/api/admin/jobs/${job.id}/retry`, { method: "POST", body: {} }),
-    onSuccess: () => qc.invalidateQueries({ queryKey: ["admin-jobs"] }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: queryKeys.admin.jobs.all }),
   });
   return (
-    <tr className="border-b border-basalt-100 align-top max-md:flex max-md:flex-col max-md:gap-1 max-md:py-3" data-testid="job-row">
+    <tr className="align-top max-md:flex max-md:flex-col max-md:gap-1 max-md:py-3" data-testid="job-row">
       <td className="py-2 pr-2 font-medium">
         {QUEUE_LABEL[job.queue] ?? job.queue}
         <span className="block font-mono text-xs text-basalt-500">{job.id}</span>

@@ -3,8 +3,10 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useId, useState } from "react";
 import { Button } from "@/components/ui/Button";
 import { ApiError, api } from "@/lib/platform/client/api";
+import { queryKeys } from "@/lib/platform/query/keys";
 import { ROLES, type Role } from "@/lib/platform/db/types";
 import { labelledMessage } from "@/lib/platform/validation/labels";
+import { PhoneLabel } from "./PhoneLabel";
 import type { UserItem } from "./UsersTable";
 
 const ROLE_LABEL: Record<Role, string> = { member: "Member", shop_staff: "Shop staff", shop_owner: "Shop owner", admin: "Admin" };
@@ -18,11 +20,6 @@ function refusal(e: unknown): string {
   return labelledMessage(e.body.fieldErrors, LABELS) ?? e.message;
 }
 
-/** Shown before the control on a phone, where the table's header row is not. */
-function PhoneLabel({ children }: { children: string }) {
-  return <span aria-hidden className="mr-2 inline-block w-12 text-xs font-semibold uppercase tracking-wide text-basalt-500 md:hidden">{children}</span>;
-}
-
 export function UserRow({ user, shops, self }: { user: UserItem; shops: { id: string; name: string }[]; self: boolean }) {
   const qc = useQueryClient();
   const noteId = useId();
@@ -30,7 +27,7 @@ export function UserRow({ user, shops, self }: { user: UserItem; shops: { id: st
   const [shopId, setShopId] = useState<string>(user.shopId ?? shops[0]?.id ?? "");
   const save = useMutation({
     mutationFn: () => api(`/api/admin/users/${user.id}`, { method: "PATCH", body: { role, shopId: isShopRole(role) ? shopId : null } }),
-    onSuccess: () => qc.invalidateQueries({ queryKey: ["admin-users"] }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: queryKeys.admin.users.all }),
   });
   const changed = role !== user.role || (isShopRole(role) && shopId !== user.shopId);
   return (

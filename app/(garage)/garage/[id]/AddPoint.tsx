@@ -7,6 +7,7 @@ import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
 import { TextField } from "@/components/ui/TextField";
 import { api, applyFieldErrors } from "@/lib/platform/client/api";
+import { queryKeys } from "@/lib/platform/query/keys";
 import { CLEARANCE_DIRECTION_LABEL, type ClearanceFormValues, type ClearanceValues, SUSPENSION_STATE_LABEL, clearanceSchema, distanceForUnit } from "@/lib/garage/schema";
 
 /**
@@ -29,7 +30,7 @@ export function AddPoint({ vehicleId }: { vehicleId: string }) {
     try {
       await api(`/api/vehicles/${vehicleId}/clearances`, { body: getValues() });
       reset({ ...getValues(), label: "", distance: "" });
-      await qc.invalidateQueries({ queryKey: ["vehicle", vehicleId] });
+      await qc.invalidateQueries({ queryKey: queryKeys.garage.vehicle(vehicleId) });
     } catch (err) {
       setFailure(applyFieldErrors(err, setError, ["label", "direction", "distance", "unit", "suspensionState"]));
     }

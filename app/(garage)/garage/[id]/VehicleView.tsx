@@ -1,5 +1,5 @@
 "use client";
-import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { useMutation, useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
@@ -7,6 +7,7 @@ import { Alert } from "@/components/ui/Alert";
 import { Button, buttonClass } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { api } from "@/lib/platform/client/api";
+import { queryKeys } from "@/lib/platform/query/keys";
 import { formatBoltPattern, formatLength, parseBoltPattern, setupGeometry } from "@/lib/fitment";
 import { bothUnits, setupLine } from "@/lib/garage/format";
 import type { VehicleDetail } from "@/lib/garage/types";
@@ -14,19 +15,19 @@ import { CLEARANCE_DIRECTION_LABEL, FRONT_SUSPENSION_LABEL, SUSPENSION_STATE_LAB
 import { type SetupValues, toEngineSetup } from "@/lib/setup/schema";
 import { PhotoDrop } from "../_components/PhotoDrop";
 import { AddPoint } from "./AddPoint";
+import { DeletePoint } from "./DeletePoint";
 import { PlannedPanel } from "./PlannedPanel";
 
 export function VehicleView({ initial, initialPlanned }: { initial: VehicleDetail; initialPlanned: SetupValues | null }) {
   const id = initial.vehicle.id;
   const router = useRouter();
-  const qc = useQueryClient();
-  const q = useQuery({ queryKey: ["vehicle", id], queryFn: () => api<VehicleDetail>(`/api/vehicles/${id}`), initialData: initial });
+  const q = useQuery({ queryKey: queryKeys.garage.vehicle(id), queryFn: () => api<VehicleDetail>(`/api/vehicles/${id}`), initialData: initial });
   const { vehicle: v, clearances, photos } = q.data;
   const [confirming, setConfirming] = useState(false);
   const del = useMutation({
     mutationFn: () => api(`/api/vehicles/${id}`, { method: "DELETE" }),
-    onSuccess: async () => {
-      await qc.invalidateQueries({ queryKey: ["vehicles"] });
+    // The garage list is rendered on the server: the refresh after the move shows it without the vehicle.
+    onSuccess: () => {
       router.push("/garage");
       router.refresh();
     },
@@ -119,18 +120,5 @@ export function VehicleView({ initial, initialPlanned }: { initial: VehicleDetai
 
       <PlannedPanel detail={q.data} initialPlanned={initialPlanned} />
     </div>
-  );
-}
-
-function DeletePoint({ vehicleId, clearanceId, label }: { vehicleId: string; clearanceId: string; label: string }) {
-  const qc = useQueryClient();
-  const m = useMutation({
-    mutationFn: () => api(`/api/vehicles/${vehicleId}/clearances/${clearanceId}`, { method: "DELETE" }),
-    onSuccess: () => qc.invalidateQueries({ queryKey: ["vehicle", vehicleId] }),
-  });
-  return (
-    <Button variant="ghost" className="no-print min-h-8 px-2 py-1 text-xs" pending={m.isPending} onClick={() => m.mutate()} aria-label={`Delete point ${label}`}>
-      Delete point
-    </Button>
   );
 }

@@ -5,6 +5,7 @@ import { useId, useRef, useState } from "react";
 import { Button } from "@/components/ui/Button";
 import { cx } from "@/components/ui/cx";
 import { api, newIdempotencyKey } from "@/lib/platform/client/api";
+import { queryKeys } from "@/lib/platform/query/keys";
 import type { VehiclePhoto } from "@/lib/garage/types";
 
 const MAX = 10 * 1024 * 1024;
@@ -53,7 +54,7 @@ export function PhotoDrop({ vehicleId, clearanceId = null, label, photos }: { ve
       try {
         await send(`/api/vehicles/${vehicleId}/photos`, file, clearanceId, (pct) => setProgress({ name: file.name, pct }));
         setMessage({ tone: "ok", text: `${file.name} uploaded.` });
-        await qc.invalidateQueries({ queryKey: ["vehicle", vehicleId] });
+        await qc.invalidateQueries({ queryKey: queryKeys.garage.vehicle(vehicleId) });
       } catch (e) {
         setMessage({ tone: "error", text: `${file.name}: ${(e as Error).message}` });
       } finally {
@@ -65,7 +66,7 @@ export function PhotoDrop({ vehicleId, clearanceId = null, label, photos }: { ve
   async function remove(p: VehiclePhoto) {
     try {
       await api(`/api/photos/${p.id}`, { method: "DELETE" });
-      await qc.invalidateQueries({ queryKey: ["vehicle", vehicleId] });
+      await qc.invalidateQueries({ queryKey: queryKeys.garage.vehicle(vehicleId) });
     } catch (e) {
       setMessage({ tone: "error", text: (e as Error).message });
     }

@@ -9,6 +9,7 @@ import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { TextField } from "@/components/ui/TextField";
 import { api, applyFieldErrors } from "@/lib/platform/client/api";
+import { queryKeys } from "@/lib/platform/query/keys";
 import { formatBoltPattern, formatLength, parseBoltPattern } from "@/lib/fitment";
 import { marginText } from "@/lib/garage/format";
 import type { Vehicle } from "@/lib/garage/types";
@@ -61,8 +62,7 @@ export function VehicleForm({ vehicle }: { vehicle: Vehicle | null }) {
       const res = vehicle
         ? await api<{ vehicle: Vehicle }>(`/api/vehicles/${vehicle.id}`, { method: "PATCH", body: values })
         : await api<{ vehicle: Vehicle }>("/api/vehicles", { body: values });
-      await qc.invalidateQueries({ queryKey: ["vehicles"] });
-      await qc.invalidateQueries({ queryKey: ["vehicle", res.vehicle.id] });
+      await qc.invalidateQueries({ queryKey: queryKeys.garage.vehicle(res.vehicle.id) });
       router.push(`/garage/${res.vehicle.id}`);
       router.refresh();
     } catch (err) {

@@ -3,13 +3,14 @@ import { Alert } from "@/components/ui/Alert";
 import { Card } from "@/components/ui/Card";
 import { shopQueries } from "@/lib/shop/queries";
 import { userQueries } from "@/lib/accounts/queries";
+import { isLinkToken } from "@/lib/platform/tokenFormat";
 import { JoinForm } from "./JoinForm";
 
 export const metadata: Metadata = { title: "Join a shop", robots: { index: false } };
 
 export default async function JoinPage({ params }: { params: Promise<{ token: string }> }) {
   const { token } = await params;
-  const invite = /^[A-Za-z0-9_-]{43}$/.test(token) ? await shopQueries.findOpenInvite(token) : undefined;
+  const invite = isLinkToken(token) ? await shopQueries.findOpenInvite(token) : undefined;
   if (!invite) {
     return (
       <Card className="mx-auto max-w-lg">

@@ -8,6 +8,7 @@ import { Alert } from "@/components/ui/Alert";
 import { Card } from "@/components/ui/Card";
 import { api } from "@/lib/platform/client/api";
 import type { Booking } from "@/lib/shop/bookings/api";
+import { queryKeys } from "@/lib/platform/query/keys";
 
 /** After the deposit: the customer picks the install time on their link, or sees the one booked. */
 export function InstallBooking({ token, booking, shopName }: { token: string; booking: Booking | null; shopName: string }) {
@@ -32,7 +33,7 @@ export function InstallBooking({ token, booking, shopName }: { token: string; bo
           onPick={async (start) => {
             const r = await api<{ booking: Booking }>(`/api/q/${token}/booking`, { body: { start } });
             setDone(r.booking);
-            await queryClient.invalidateQueries({ queryKey: ["install-slots"] });
+            await queryClient.invalidateQueries({ queryKey: queryKeys.shop.slots.all });
             router.refresh();
           }}
         />

@@ -9,13 +9,14 @@ import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { TextField } from "@/components/ui/TextField";
 import { api, applyFieldErrors } from "@/lib/platform/client/api";
+import { queryKeys } from "@/lib/platform/query/keys";
 import type { StaffData } from "@/lib/shop/api";
 import { type StaffInviteInput, staffInviteSchema } from "@/lib/shop/schema";
 
 
 export function StaffPanel({ initial, selfId }: { initial: StaffData; selfId: string }) {
   const qc = useQueryClient();
-  const data = useQuery({ queryKey: ["shop-staff"], queryFn: () => api<StaffData>("/api/shop/staff"), initialData: initial });
+  const data = useQuery({ queryKey: queryKeys.shop.staff.all, queryFn: () => api<StaffData>("/api/shop/staff"), initialData: initial });
   const [notice, setNotice] = useState<string | null>(null);
   const { register, handleSubmit, setError, reset, formState } = useForm<StaffInviteInput>({ resolver: zodResolver(staffInviteSchema) });
   const [failure, setFailure] = useState<string | null>(null);
@@ -27,18 +28,18 @@ export function StaffPanel({ initial, selfId }: { initial: StaffData; selfId: st
       await api("/api/shop/staff", { body: values });
       setNotice(`Invitation sent to ${values.email}.`);
       reset();
-      await qc.invalidateQueries({ queryKey: ["shop-staff"] });
+      await qc.invalidateQueries({ queryKey: queryKeys.shop.staff.all });
     } catch (e) {
       setFailure(applyFieldErrors(e, setError, ["email"]));
     }
   });
   const remove = useMutation({
     mutationFn: (id: string) => api(`/api/shop/staff/${id}`, { method: "DELETE" }),
-    onSuccess: () => qc.invalidateQueries({ queryKey: ["shop-staff"] }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: queryKeys.shop.staff.all }),
   });
   const revoke = useMutation({
     mutationFn: (id: string) => api(`/api/shop/staff/invites/${id}`, { method: "DELETE" }),
-    onSuccess: () => qc.invalidateQueries({ queryKey: ["shop-staff"] }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: queryKeys.shop.staff.all }),
   });
   const d = data.data;
   return (

@@ -9,8 +9,9 @@ import { paymentQueries } from "@/lib/shop/payments/queries";
 import { quoteQueries } from "@/lib/shop/quotes/queries";
 import { rateLimitQueries } from "@/lib/platform/limits/rateLimit";
 import { publicQuoteActionSchema } from "@/lib/shop/quotes/schema";
+import { LINK_TOKEN_RE } from "@/lib/platform/tokenFormat";
 
-const params = z.object({ token: z.string().regex(/^[A-Za-z0-9_-]{43}$/) });
+const params = z.object({ token: z.string().regex(LINK_TOKEN_RE) });
 const customer = { userId: null, label: "customer" };
 
 /** The customer's actions on their quote link: accept, decline, or pay the deposit. */

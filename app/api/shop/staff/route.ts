@@ -5,6 +5,7 @@ import { RATE_LIMITS } from "@/lib/platform/limits/limits";
 import { rateLimitQueries } from "@/lib/platform/limits/rateLimit";
 import { INVITE_TTL_HOURS, SHOP_OWNER, shopIdOf, shopQueries } from "@/lib/shop/queries";
 import { staffInviteSchema } from "@/lib/shop/schema";
+import { escapeHtml } from "@/lib/platform/text";
 
 export const GET = route({ access: SHOP_OWNER }, async ({ caller }) => {
   const shopId = shopIdOf(caller);
@@ -32,13 +33,9 @@ export const POST = route({ access: SHOP_OWNER, body: staffInviteSchema, idempot
       `Open this link to join. It works once and expires in ${INVITE_TTL_HOURS} hours:\n\n${link}\n\n` +
       "If you did not expect this, ignore this message.\n",
     html:
-      `<p>Hello,</p><p>${esc(caller.name)} invites you to work the counter of ${esc(shopName)} on Hubface.</p>` +
-      `<p><a href="${link}">Join ${esc(shopName)}</a> — the link works once and expires in ${INVITE_TTL_HOURS} hours.</p>` +
+      `<p>Hello,</p><p>${escapeHtml(caller.name)} invites you to work the counter of ${escapeHtml(shopName)} on Hubface.</p>` +
+      `<p><a href="${link}">Join ${escapeHtml(shopName)}</a> — the link works once and expires in ${INVITE_TTL_HOURS} hours.</p>` +
       "<p>If you did not expect this, ignore this message.</p>",
   });
   return Response.json({ invite }, { status: 201 });
 });
-
-function esc(s: string) {
-  return s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
-}

@@ -1,12 +1,36 @@
 "use client";
 import Link from "next/link";
 import { Card } from "@/components/ui/Card";
+import { Table, type TableColumn } from "@/components/ui/Table";
 import type { FitmentExclusion } from "@/lib/fitment";
 import { bothUnits } from "@/lib/garage/format";
 import { exclusionText } from "@/lib/garage/finderText";
 import { setupQuery } from "@/lib/garage/links";
 import type { Vehicle } from "@/lib/garage/types";
 import { candidateSetup } from "./candidate";
+
+/** In the finder's order (nearest the goals first), which is the point of the list: no header sorts. */
+function excludedColumns(vehicle: Vehicle): TableColumn<FitmentExclusion>[] {
+  return [
+    { id: "tire", header: "Tire size", cell: (x) => <span className="font-medium">{x.tire.text}</span> },
+    { id: "diameter", header: "Diameter", cell: (x) => bothUnits(x.overallDiameterMm) },
+    { id: "wheel", header: "Closest wheel", cell: (x) => `${x.wheel.diameterIn}x${x.wheel.widthIn} ${x.wheel.offsetMm > 0 ? "+" : ""}${x.wheel.offsetMm} mm` },
+    { id: "why", header: "Why", cell: (x) => exclusionText(x) },
+    {
+      id: "check",
+      header: "Check",
+      cell: (x) => (
+        <Link
+          className="text-ember-700 underline"
+          href={`/garage/${vehicle.id}?${setupQuery("p", candidateSetup(x))}`}
+          aria-label={`Predict ${x.tire.text} on ${x.wheel.diameterIn}x${x.wheel.widthIn} ${x.wheel.offsetMm} mm on the vehicle page`}
+        >
+          Predict
+        </Link>
+      ),
+    },
+  ];
+}
 
 /**
  * The tire sizes the measured points (or the poke limit) remove entirely, each by its nearest miss
@@ -20,40 +44,14 @@ export function ExcludedList({ rows, total, vehicle }: { rows: FitmentExclusion[
         Each size with no wheel that keeps the margin at every measured point, shown on the wheel that came closest.
         {total > rows.length ? ` The ${rows.length} nearest the goals of ${total}.` : ""}
       </p>
-      <table className="mt-3 w-full min-w-[640px] text-left text-sm">
-        <caption className="sr-only">Excluded tire sizes, nearest the goals first, with the limit that decided each</caption>
-        <thead className="text-xs uppercase tracking-wide text-basalt-500">
-          <tr>
-            <th className="py-2 pr-2">Tire size</th>
-            <th className="pr-2">Diameter</th>
-            <th className="pr-2">Closest wheel</th>
-            <th className="pr-2">Why</th>
-            <th>Check</th>
-          </tr>
-        </thead>
-        <tbody className="divide-y divide-basalt-100">
-          {rows.map((x) => (
-            <tr key={`${x.tire.text}|${x.wheel.widthIn}|${x.wheel.offsetMm}`} data-testid="excluded-size">
-              <td className="py-1.5 pr-2 font-medium">{x.tire.text}</td>
-              <td className="pr-2">{bothUnits(x.overallDiameterMm)}</td>
-              <td className="pr-2">
-                {x.wheel.diameterIn}x{x.wheel.widthIn} {x.wheel.offsetMm > 0 ? "+" : ""}
-                {x.wheel.offsetMm} mm
-              </td>
-              <td className="pr-2">{exclusionText(x)}</td>
-              <td>
-                <Link
-                  className="text-ember-700 underline"
-                  href={`/garage/${vehicle.id}?${setupQuery("p", candidateSetup(x))}`}
-                  aria-label={`Predict ${x.tire.text} on ${x.wheel.diameterIn}x${x.wheel.widthIn} ${x.wheel.offsetMm} mm on the vehicle page`}
-                >
-                  Predict
-                </Link>
-              </td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
+      <Table
+        caption="Excluded tire sizes, nearest the goals first, with the limit that decided each"
+        className="mt-3 min-w-[640px]"
+        columns={excludedColumns(vehicle)}
+        rows={rows}
+        rowKey={(x) => `${x.tire.text}|${x.wheel.widthIn}|${x.wheel.offsetMm}`}
+        rowTestId="excluded-size"
+      />
     </Card>
   );
 }

@@ -1,30 +1,19 @@
 "use client";
 import { zodResolver } from "@hookform/resolvers/zod";
-import {
-  type ColumnDef,
-  type SortingState,
-  flexRender,
-  getCoreRowModel,
-  getFilteredRowModel,
-  getSortedRowModel,
-  useReactTable,
-} from "@tanstack/react-table";
 import Link from "next/link";
-import { useEffect, useMemo, useRef, useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { useForm, useWatch } from "react-hook-form";
 import { Alert } from "@/components/ui/Alert";
 import { buttonClass } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { TextField } from "@/components/ui/TextField";
-import { type FinderResult, type FitmentMatch, formatLength, inToMm } from "@/lib/fitment";
-import { bothUnits } from "@/lib/garage/format";
+import { type FinderResult, formatLength } from "@/lib/fitment";
 import { FINDER_LABEL, type FinderGoalsForm, finderGoalsSchema, finderPlan } from "@/lib/garage/finderGoals";
 import type { FinderJob, FinderReply } from "@/lib/garage/finderJob";
-import { setupQuery, workspaceHref } from "@/lib/garage/links";
 import type { Vehicle, VehicleClearance } from "@/lib/garage/types";
 import { ExcludedList } from "./ExcludedList";
-import { candidateSetup } from "./candidate";
+import { FinderTable } from "./FinderTable";
 
 const mm = (v: number) => formatLength(v, { unit: "mm" });
 
@@ -97,39 +86,43 @@ export function FinderPanel({ vehicle, clearances }: { vehicle: Vehicle; clearan
         lead={`Tire sizes × wheel widths × offsets for ${vehicle.boltPattern}, ranked by the engine. The search runs in the background as you type.`}
         actions={<Link href={`/garage/${vehicle.id}`} className={buttonClass("secondary")}>Back to the vehicle</Link>}
       />
-      <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[20rem_minmax(0,1fr)]">
-        <Card className="flex flex-col gap-3 self-start">
+      {/* Goals above the results, never beside them: the results table then has the page's whole
+          width, and all its columns, links included, show at 1280 px without scrolling sideways. */}
+      <div className="flex flex-col gap-6">
+        <Card className="flex flex-col gap-3">
           <h2 className="text-lg font-semibold">Goals</h2>
-          <TextField label={FINDER_LABEL.targetDiameterMm} hint="Optional, e.g. 35 or 890 mm; ranks nearest first" {...reg("targetDiameterMm")} error={e.targetDiameterMm?.message} />
-          <div className="grid grid-cols-2 gap-2">
-            <TextField label={FINDER_LABEL.minDiameterMm} hint="e.g. 33" {...reg("minDiameterMm")} error={e.minDiameterMm?.message} />
-            <TextField label={FINDER_LABEL.maxDiameterMm} hint="e.g. 35-1/2" {...reg("maxDiameterMm")} error={e.maxDiameterMm?.message} />
-          </div>
-          <TextField label={FINDER_LABEL.wheelDiameters} hint="e.g. 17, 18 — empty for any" {...reg("wheelDiameters")} error={e.wheelDiameters?.message} />
-          <div className="grid grid-cols-2 gap-2">
-            <TextField label={FINDER_LABEL.minWidthIn} hint="e.g. 8" {...reg("minWidthIn")} error={e.minWidthIn?.message} />
-            <TextField label={FINDER_LABEL.maxWidthIn} hint="e.g. 10" {...reg("maxWidthIn")} error={e.maxWidthIn?.message} />
-          </div>
-          <TextField
-            label={FINDER_LABEL.maxPokeMm}
-            hint={`Beyond the current setup's ${mm(plan?.currentOuterSwingMm ?? 0)} outboard reach; e.g. 25 or 1 in; empty for no limit`}
-            {...reg("maxPokeMm")}
-            error={e.maxPokeMm?.message}
-          />
-          <label className="flex items-start gap-2 text-sm">
-            <input type="checkbox" className="mt-1" {...reg("usePoints")} disabled={!hasPoints} aria-describedby="f-usePoints-hint" />
-            <span>
-              Keep the margin at every measured point
-              <span id="f-usePoints-hint" className="block text-xs text-basalt-500">
-                {!hasPoints
-                  ? "No points measured yet."
-                  : `${clearances.length} point${clearances.length === 1 ? "" : "s"}, each predicted for every combination exactly as on the vehicle page${
-                      plan ? ` (full-lock points turn about a steering axis ${mm(plan.steeringAxisInboardMm)} inboard of the hub face)` : ""
-                    }.`}
+          <div className="grid items-start gap-x-4 gap-y-3 md:grid-cols-2 xl:grid-cols-3">
+            <TextField label={FINDER_LABEL.targetDiameterMm} hint="Optional, e.g. 35 or 890 mm; ranks nearest first" {...reg("targetDiameterMm")} error={e.targetDiameterMm?.message} />
+            <div className="grid grid-cols-2 gap-2">
+              <TextField label={FINDER_LABEL.minDiameterMm} hint="e.g. 33" {...reg("minDiameterMm")} error={e.minDiameterMm?.message} />
+              <TextField label={FINDER_LABEL.maxDiameterMm} hint="e.g. 35-1/2" {...reg("maxDiameterMm")} error={e.maxDiameterMm?.message} />
+            </div>
+            <TextField label={FINDER_LABEL.wheelDiameters} hint="e.g. 17, 18 — empty for any" {...reg("wheelDiameters")} error={e.wheelDiameters?.message} />
+            <div className="grid grid-cols-2 gap-2">
+              <TextField label={FINDER_LABEL.minWidthIn} hint="e.g. 8" {...reg("minWidthIn")} error={e.minWidthIn?.message} />
+              <TextField label={FINDER_LABEL.maxWidthIn} hint="e.g. 10" {...reg("maxWidthIn")} error={e.maxWidthIn?.message} />
+            </div>
+            <TextField
+              label={FINDER_LABEL.maxPokeMm}
+              hint={`Beyond the current setup's ${mm(plan?.currentOuterSwingMm ?? 0)} outboard reach; e.g. 25 or 1 in; empty for no limit`}
+              {...reg("maxPokeMm")}
+              error={e.maxPokeMm?.message}
+            />
+            <label className="flex items-start gap-2 text-sm">
+              <input type="checkbox" className="mt-1" {...reg("usePoints")} disabled={!hasPoints} aria-describedby="f-usePoints-hint" />
+              <span>
+                Keep the margin at every measured point
+                <span id="f-usePoints-hint" className="block text-xs text-basalt-500">
+                  {!hasPoints
+                    ? "No points measured yet."
+                    : `${clearances.length} point${clearances.length === 1 ? "" : "s"}, each predicted for every combination exactly as on the vehicle page${
+                        plan ? ` (full-lock points turn about a steering axis ${mm(plan.steeringAxisInboardMm)} inboard of the hub face)` : ""
+                      }.`}
+                </span>
               </span>
-            </span>
-          </label>
-          <TextField label={FINDER_LABEL.margin} hint="Default 1/2 in — common practice, no source" {...reg("margin")} error={e.margin?.message} />
+            </label>
+            <TextField label={FINDER_LABEL.margin} hint="Default 1/2 in — common practice, no source" {...reg("margin")} error={e.margin?.message} />
+          </div>
           <p className="text-xs text-basalt-500">Bolt pattern from the vehicle: {vehicle.boltPattern}. Wheel diameter is the tire&apos;s rim diameter.</p>
         </Card>
         <div className="flex min-w-0 flex-col gap-3">
@@ -152,112 +145,10 @@ export function FinderPanel({ vehicle, clearances }: { vehicle: Vehicle; clearan
           </div>
           {failure && <Alert tone="error">{failure}</Alert>}
           {!plan && <Alert tone="info">Fix the highlighted goals to search.</Alert>}
-          {result && <ResultsTable rows={result.result.results} vehicle={vehicle} />}
+          {result && <FinderTable rows={result.result.results} vehicle={vehicle} />}
           {result && result.result.excluded.length > 0 && <ExcludedList rows={result.result.excluded} total={result.result.excludedSizes} vehicle={vehicle} />}
         </div>
       </div>
     </>
-  );
-}
-
-function ResultsTable({ rows, vehicle }: { rows: FitmentMatch[]; vehicle: Vehicle }) {
-  const [sorting, setSorting] = useState<SortingState>([]);
-  const [filter, setFilter] = useState("");
-  const columns = useMemo<ColumnDef<FitmentMatch>[]>(
-    () => [
-      { id: "rank", header: "Rank", accessorKey: "rank" },
-      { id: "tire", header: "Tire size", accessorFn: (m) => m.tire.text },
-      { id: "diameter", header: "Diameter", accessorKey: "overallDiameterMm", cell: (c) => bothUnits(c.getValue<number>()) },
-      { id: "wheel", header: "Wheel", accessorFn: (m) => `${m.wheel.diameterIn}x${m.wheel.widthIn}`, sortingFn: (a, b) => a.original.wheel.widthIn - b.original.wheel.widthIn },
-      { id: "offset", header: "Offset", accessorFn: (m) => m.wheel.offsetMm, cell: (c) => `${c.getValue<number>() > 0 ? "+" : ""}${c.getValue<number>()} mm` },
-      { id: "backspacing", header: "Backspacing (bead seat)", accessorKey: "backspacingIn", cell: (c) => formatLength(inToMm(c.getValue<number>()), { unit: "in", fraction: 16 }) },
-      { id: "inner", header: "Reach inboard", accessorKey: "innerSwingMm", cell: (c) => mm(c.getValue<number>()) },
-      { id: "outer", header: "Reach outboard", accessorKey: "outerSwingMm", cell: (c) => mm(c.getValue<number>()) },
-      {
-        id: "tightest",
-        header: "Tightest point",
-        accessorFn: (m) => m.tightestClearance?.predictedMm ?? Infinity,
-        cell: (c) => {
-          const t = c.row.original.tightestClearance;
-          return t === null ? "—" : `${t.label ?? "point"}: ${mm(t.predictedMm)}`;
-        },
-      },
-      {
-        id: "open",
-        header: "Compare",
-        enableSorting: false,
-        cell: (c) => {
-          const s = candidateSetup(c.row.original);
-          return (
-            <span className="flex flex-col gap-1">
-              <Link className="text-ember-700 underline" href={workspaceHref(vehicle.currentSetup, s, vehicle)} data-testid="candidate-workspace">
-                Workspace
-              </Link>
-              <Link className="text-ember-700 underline" href={`/garage/${vehicle.id}?${setupQuery("p", s)}`}>
-                Predict
-              </Link>
-            </span>
-          );
-        },
-      },
-    ],
-    [vehicle],
-  );
-  // eslint-disable-next-line react-hooks/incompatible-library -- TanStack Table's instance is not memoizable; the component re-renders with it.
-  const table = useReactTable({
-    data: rows,
-    columns,
-    state: { sorting, globalFilter: filter },
-    onSortingChange: setSorting,
-    sortDescFirst: false,
-    onGlobalFilterChange: setFilter,
-    globalFilterFn: (row, _col, value: string) => row.original.tire.text.toLowerCase().includes(value.toLowerCase().trim()) || `${row.original.wheel.diameterIn}x${row.original.wheel.widthIn}`.includes(value.trim()),
-    getCoreRowModel: getCoreRowModel(),
-    getSortedRowModel: getSortedRowModel(),
-    getFilteredRowModel: getFilteredRowModel(),
-  });
-  return (
-    <Card className="overflow-x-auto">
-      <label className="mb-3 flex max-w-sm flex-col gap-1 text-sm font-medium">
-        Filter by tire size or wheel
-        <input type="search" className="min-h-10 rounded-lg border border-basalt-300 px-3" value={filter} onChange={(e) => setFilter(e.target.value)} placeholder="e.g. 35x or 17x9" />
-      </label>
-      <table className="w-full min-w-[760px] text-left text-sm" data-testid="finder-results">
-        <caption className="sr-only">Fitments found, best first; column headers sort</caption>
-        <thead className="text-xs uppercase tracking-wide text-basalt-500">
-          {table.getHeaderGroups().map((hg) => (
-            <tr key={hg.id}>
-              {hg.headers.map((h) => {
-                const sorted = h.column.getIsSorted();
-                return (
-                  <th key={h.id} className="py-2 pr-2" aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined}>
-                    {h.column.getCanSort() ? (
-                      <button type="button" className="uppercase tracking-wide hover:text-basalt-900" onClick={h.column.getToggleSortingHandler()}>
-                        {flexRender(h.column.columnDef.header, h.getContext())}
-                        {sorted === "asc" ? " ▲" : sorted === "desc" ? " ▼" : ""}
-                      </button>
-                    ) : (
-                      flexRender(h.column.columnDef.header, h.getContext())
-                    )}
-                  </th>
-                );
-              })}
-            </tr>
-          ))}
-        </thead>
-        <tbody className="divide-y divide-basalt-100">
-          {table.getRowModel().rows.map((r) => (
-            <tr key={r.id}>
-              {r.getVisibleCells().map((c) => (
-                <td key={c.id} className="py-1.5 pr-2">{flexRender(c.column.columnDef.cell, c.getContext())}</td>
-              ))}
-            </tr>
-          ))}
-        </tbody>
-      </table>
-      {table.getRowModel().rows.length === 0 && (
-        <p className="mt-3 text-sm text-basalt-700">Nothing fits these goals. Widen the diameter range or allow more poke; the sizes the measured points exclude are listed with what they need.</p>
-      )}
-    </Card>
   );
 }

@@ -5,7 +5,10 @@ import { useRef, useState } from "react";
 import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
+import { Table, type TableColumn } from "@/components/ui/Table";
+import { ImportProgress } from "./ImportProgress";
 import { CSV_MAX_BYTES } from "@/lib/shop/catalog/csv";
+import { queryKeys } from "@/lib/platform/query/keys";
 
 interface Preview {
   importId: string | null;
@@ -44,18 +47,16 @@ function upload(file: File, onProgress: (pct: number) => void): Promise<{ status
   });
 }
 
+type ImportProblem = Preview["errors"][number];
+/** In the file's order: row by row, as the spreadsheet shows them. */
+const ERROR_COLUMNS: TableColumn<ImportProblem>[] = [
+  { id: "row", header: "Row", cell: (e) => `${e.row}${e.line ? ` (line ${e.line})` : ""}`, className: "whitespace-nowrap pl-3 tabular-nums" },
+  { id: "column", header: "Column", cell: (e) => <span className="font-mono text-xs">{e.column || "—"}</span> },
+  { id: "problem", header: "Problem", cell: (e) => e.message },
+];
+
 /** "1 row", "9 rows": the preview counts rows and problems, never one for the other. */
 const count = (n: number, noun: string) => `${n.toLocaleString("en-US")} ${noun}${n === 1 ? "" : "s"}`;
-
-function Progress({ label, value, max }: { label: string; value: number; max: number }) {
-  return (
-    <div className="flex flex-col gap-1">
-      <label htmlFor="import-progress" className="text-sm font-medium">{label}</label>
-      <progress id="import-progress" className="h-3 w-full accent-ember-600" value={value} max={max} />
-      <span className="text-xs text-basalt-600" aria-live="polite">{max ? Math.round((value / max) * 100) : 0} %</span>
-    </div>
-  );
-}
 
 export function ImportFlow() {
   const qc = useQueryClient();
@@ -108,7 +109,7 @@ export function ImportFlow() {
         }
         if (msg.imported !== undefined) {
           setPhase({ at: "done", imported: msg.imported, skipped });
-          await qc.invalidateQueries({ queryKey: ["shop-catalog"] });
+          await qc.invalidateQueries({ queryKey: queryKeys.shop.catalog.all });
         } else if (msg.done !== undefined) setPhase({ at: "importing", done: msg.done, total: msg.total ?? total });
       }
     }
@@ -131,7 +132,7 @@ export function ImportFlow() {
           />
         </div>
       )}
-      {phase.at === "uploading" && <Progress label="Uploading and checking" value={phase.pct} max={100} />}
+      {phase.at === "uploading" && <ImportProgress label="Uploading and checking" value={phase.pct} max={100} />}
       {phase.at === "preview" && (
         <>
           <div>
@@ -144,17 +145,14 @@ export function ImportFlow() {
           </div>
           {phase.preview.problemCount > 0 && (
             <div className="max-h-96 overflow-auto rounded-lg ring-1 ring-basalt-200" tabIndex={0} role="region" aria-label="Problems by row">
-              <table className="w-full text-left text-sm">
-                <caption className="sr-only">Problems by row; row numbers as a spreadsheet shows them, the header being row 1</caption>
-                <thead className="sticky top-0 bg-basalt-50 text-xs uppercase tracking-wide text-basalt-600">
-                  <tr><th className="px-3 py-2">Row</th><th className="px-3">Column</th><th className="px-3">Problem</th></tr>
-                </thead>
-                <tbody className="divide-y divide-basalt-100">
-                  {phase.preview.errors.map((e, i) => (
-                    <tr key={i} data-testid="import-error"><td className="whitespace-nowrap px-3 py-1 tabular-nums">{e.row}{e.line ? ` (line ${e.line})` : ""}</td><td className="px-3 font-mono text-xs">{e.column || "—"}</td><td className="px-3">{e.message}</td></tr>
-                  ))}
-                </tbody>
-              </table>
+              <Table
+                caption="Problems by row; row numbers as a spreadsheet shows them, the header being row 1"
+                headClassName="sticky top-0 bg-basalt-50"
+                columns={ERROR_COLUMNS}
+                rows={phase.preview.errors}
+                rowKey={(_e, i) => String(i)}
+                rowTestId="import-error"
+              />
               {phase.preview.problemCount > phase.preview.errors.length && (
                 <p className="p-3 text-sm text-basalt-600">… and {count(phase.preview.problemCount - phase.preview.errors.length, "more problem")}.</p>
               )}
@@ -172,7 +170,7 @@ export function ImportFlow() {
           </div>
         </>
       )}
-      {phase.at === "importing" && <Progress label="Importing (one transaction: all rows or none)" value={phase.done} max={phase.total} />}
+      {phase.at === "importing" && <ImportProgress label="Importing (one transaction: all rows or none)" value={phase.done} max={phase.total} />}
       {phase.at === "done" && (
         <Alert tone="success" title="Import finished">
           {phase.imported.toLocaleString("en-US")} items imported.{phase.skipped ? ` ${count(phase.skipped, "row")} with problems skipped.` : ""} <Link className="underline" href="/shop/catalog">Back to the catalog</Link>

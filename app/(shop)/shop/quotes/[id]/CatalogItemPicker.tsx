@@ -4,6 +4,7 @@ import { useState } from "react";
 import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
 import { api } from "@/lib/platform/client/api";
+import { queryKeys } from "@/lib/platform/query/keys";
 import { CATALOG_KIND_FILTERS, type CatalogItem } from "@/lib/shop/catalog/api";
 import type { CatalogKind } from "@/lib/platform/db/types";
 import { checkWheelOnHub, hubRefusal } from "@/lib/shop/quotes/hubFit";
@@ -19,7 +20,7 @@ export function CatalogItemPicker({ vehicle, onAdd }: { vehicle: { boltPattern: 
   const [kind, setKind] = useState<"" | CatalogKind>("");
   const [asked, setAsked] = useState<{ q: string; kind: string } | null>(null);
   const found = useQuery({
-    queryKey: ["quote-catalog-pick", asked],
+    queryKey: queryKeys.shop.catalog.pick(asked),
     queryFn: () => api<{ items: CatalogItem[]; total: number }>(`/api/shop/catalog?${new URLSearchParams({ q: asked!.q, kind: asked!.kind, pageSize: "10" })}`),
     enabled: asked !== null,
   });

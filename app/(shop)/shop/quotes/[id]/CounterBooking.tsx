@@ -10,6 +10,7 @@ import { SelectField } from "@/components/ui/SelectField";
 import { api } from "@/lib/platform/client/api";
 import type { Bay, Booking } from "@/lib/shop/bookings/api";
 import { BAY_KIND_LABEL } from "@/lib/shop/bookings/vocabulary";
+import { queryKeys } from "@/lib/platform/query/keys";
 
 /** At the counter: book the install for a paid quote, or move or cancel its booking. */
 export function CounterBooking({ quoteId, initial, bays }: { quoteId: string; initial: Booking | null; bays: Bay[] }) {
@@ -24,7 +25,7 @@ export function CounterBooking({ quoteId, initial, bays }: { quoteId: string; in
     setBooking(b.status === "cancelled" ? null : b);
     setPicking(b.status === "cancelled");
     setMessage({ tone: "success", text });
-    await queryClient.invalidateQueries({ queryKey: ["install-slots"] });
+    await queryClient.invalidateQueries({ queryKey: queryKeys.shop.slots.all });
   };
   const cancel = async () => {
     if (!window.confirm("Cancel this install booking? The customer is e-mailed a cancellation for their calendar.")) return;

@@ -1,5 +1,5 @@
 "use client";
-import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { useMutation } from "@tanstack/react-query";
 import Link from "next/link";
 import { useState } from "react";
 import { FitmentSummaryCard } from "@/components/quotes/FitmentSummaryCard";
@@ -33,7 +33,6 @@ const problemsOf = (e: unknown): string[] =>
   e instanceof Problems ? e.list : e instanceof ApiError && e.body.fieldErrors ? describeFieldErrors(e.body.fieldErrors) : [(e as Error).message];
 
 export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; labourRateCents: number }) {
-  const qc = useQueryClient();
   const [detail, setDetail] = useState(initial);
   const q = detail.quote;
   const draft = q.status === "draft";
@@ -46,7 +45,6 @@ export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; lab
   const accept = (d: Detail) => {
     setDetail(d);
     setForm(formOf(d));
-    void qc.invalidateQueries({ queryKey: ["shop-quotes"] });
   };
 
   /** Saves the form; throws Problems (nothing sent to the server) or the server's ApiError. */

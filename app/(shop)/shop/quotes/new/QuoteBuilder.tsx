@@ -1,22 +1,20 @@
 "use client";
-import { zodResolver } from "@hookform/resolvers/zod";
-import { useMutation, useQuery } from "@tanstack/react-query";
+import { useMutation } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { useForm, useWatch } from "react-hook-form";
 import { Alert } from "@/components/ui/Alert";
 import { Badge } from "@/components/ui/Badge";
 import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
-import { TextField } from "@/components/ui/TextField";
 import type { FitmentCandidates as Candidates } from "@/lib/shop/catalog/api";
-import { ApiError, api, applyFieldErrors } from "@/lib/platform/client/api";
-import type { Customer, CustomerVehicle } from "@/lib/shop/customers/api";
+import { ApiError, api } from "@/lib/platform/client/api";
+import type { Customer } from "@/lib/shop/customers/api";
 import { mmToIn } from "@/lib/fitment";
 import { describeFieldErrors } from "@/lib/shop/quotes/fieldLabels";
 import { formatUsd } from "@/lib/shop/quotes/money";
-import { type CustomerInput, type Vehicle, type VehicleInput, customerSchema, vehicleSchema } from "@/lib/shop/quotes/schema";
-
+import type { Vehicle } from "@/lib/shop/quotes/schema";
+import { CustomerStep } from "./CustomerStep";
+import { VehicleStep } from "./VehicleStep";
 
 const signed = (mm: number, digits = 0) => `${mm > 0 ? "+" : mm < 0 ? "−" : "±"}${Math.abs(mm).toFixed(digits)}`;
 const mmIn = (mm: number) => `${signed(mm)} mm (${signed(mmToIn(mm), 1)} in)`;
@@ -125,182 +123,5 @@ export function QuoteBuilder() {
         </Card>
       )}
     </div>
-  );
-}
-
-function CustomerStep({ customer, onPick }: { customer: Customer | null; onPick: (c: Customer) => void }) {
-  const [search, setSearch] = useState("");
-  const [submitted, setSubmitted] = useState("");
-  const [adding, setAdding] = useState(false);
-  const found = useQuery({
-    queryKey: ["shop-customers", submitted],
-    queryFn: () => api<{ customers: Customer[] }>(`/api/shop/customers?q=${encodeURIComponent(submitted)}`).then((r) => r.customers),
-    enabled: submitted.length > 0,
-  });
-  const { register, handleSubmit, setError, formState } = useForm<CustomerInput>({ resolver: zodResolver(customerSchema), defaultValues: { name: "", phone: "", email: "" } });
-  const [failure, setFailure] = useState<string | null>(null);
-  const onCreate = handleSubmit(async (values) => {
-    setFailure(null);
-    try {
-      const r = await api<{ customer: Customer }>("/api/shop/customers", { body: values });
-      onPick(r.customer);
-      setAdding(false);
-    } catch (e) {
-      if (e instanceof ApiError && e.status === 409) {
-        const existing = (e.body as unknown as { existing?: Customer }).existing;
-        setFailure(e.message);
-        if (existing) setSubmitted(existing.phone || existing.email);
-        return;
-      }
-      setFailure(applyFieldErrors(e, setError, ["name", "phone", "email"]));
-    }
-  });
-
-  if (customer) {
-    return (
-      <Card className="flex flex-wrap items-center justify-between gap-3">
-        <div>
-          <h2 className="text-lg font-semibold">1. Customer</h2>
-          <p className="text-sm" data-testid="chosen-customer">{customer.name} · {customer.phone || "no phone"} · {customer.email || "no e-mail"}</p>
-        </div>
-        <Button variant="secondary" onClick={() => onPick(null as unknown as Customer)}>Change</Button>
-      </Card>
-    );
-  }
-  return (
-    <Card>
-      <h2 className="text-lg font-semibold">1. Customer</h2>
-      <form
-        className="mt-3 flex flex-wrap items-end gap-2"
-        onSubmit={(e) => {
-          e.preventDefault();
-          setSubmitted(search.trim());
-        }}
-      >
-        <TextField className="w-full sm:w-80" label="Phone, e-mail or name" name="customer-search" type="search" value={search} onChange={(e) => setSearch(e.target.value)} />
-        <Button type="submit" variant="secondary" className="mb-5">Find</Button>
-        <Button type="button" variant="ghost" className="mb-5" onClick={() => setAdding((a) => !a)}>New customer</Button>
-      </form>
-      {found.isError && <Alert tone="error">{(found.error as Error).message}</Alert>}
-      {found.data && (
-        found.data.length === 0 ? (
-          <p className="text-sm text-basalt-600" role="status">No customer matches “{submitted}”.</p>
-        ) : (
-          <ul className="divide-y divide-basalt-100 text-sm" aria-label="Matching customers">
-            {found.data.map((c) => (
-              <li key={c.id} className="flex flex-wrap items-center justify-between gap-2 py-2">
-                <span><span className="font-medium">{c.name}</span> <span className="text-basalt-600">{c.phone} {c.email}</span></span>
-                <Button variant="secondary" className="min-h-8 py-1" onClick={() => onPick(c)}>Use<span className="sr-only"> {c.name}</span></Button>
-              </li>
-            ))}
-          </ul>
-        )
-      )}
-      {adding && (
-        <form onSubmit={onCreate} noValidate className="mt-4 grid gap-3 border-t border-basalt-100 pt-4 sm:grid-cols-3">
-          <div aria-live="assertive" className="sm:col-span-3">{failure && <Alert tone="error">{failure}</Alert>}</div>
-          <TextField label="Name" {...register("name")} error={formState.errors.name?.message} />
-          <TextField label="Phone" type="tel" {...register("phone")} error={formState.errors.phone?.message} />
-          <TextField label="E-mail" type="email" {...register("email")} error={formState.errors.email?.message} />
-          <Button type="submit" pending={formState.isSubmitting} className="justify-self-start">Add customer</Button>
-        </form>
-      )}
-    </Card>
-  );
-}
-
-function VehicleStep(props: {
-  customerId: string;
-  savedVehicle: string | null;
-  onSaved: (id: string | null) => void;
-  saveVehicle: boolean;
-  onSaveVehicle: (b: boolean) => void;
-  onCandidates: (v: Vehicle, c: Candidates) => void;
-}) {
-  const saved = useQuery({
-    queryKey: ["shop-customer", props.customerId],
-    queryFn: () => api<{ vehicles: CustomerVehicle[] }>(`/api/shop/customers/${props.customerId}`).then((r) => r.vehicles),
-  });
-  const { register, handleSubmit, setError, formState, control, reset } = useForm<VehicleInput, unknown, Vehicle>({
-    resolver: zodResolver(vehicleSchema),
-    defaultValues: { description: "", boltPattern: "", hubBoreMm: "", tireSize: "", wheelDiameterIn: "", wheelWidthIn: "", offsetMode: "offset", offsetMm: "", backspacingIn: "", backspacingFrom: "bead-seat", axleRatio: "" } as unknown as VehicleInput,
-  });
-  const mode = useWatch({ control, name: "offsetMode" });
-  const [failure, setFailure] = useState<string | null>(null);
-  const e = formState.errors;
-  const onFind = handleSubmit(async (v) => {
-    setFailure(null);
-    try {
-      props.onCandidates(v, await api<Candidates>("/api/shop/fitment/candidates", { body: v }));
-    } catch (err) {
-      setFailure(applyFieldErrors(err, setError, ["description", "boltPattern", "hubBoreMm", "tireSize", "wheelDiameterIn", "wheelWidthIn", "offsetMm", "backspacingIn", "backspacingFrom", "axleRatio"]));
-    }
-  });
-  const applySaved = (v: CustomerVehicle) => {
-    reset({
-      description: v.description,
-      boltPattern: v.boltPattern,
-      hubBoreMm: v.hubBoreMm === null ? "" : String(v.hubBoreMm),
-      tireSize: v.tireSize,
-      wheelDiameterIn: String(v.wheelDiameterIn),
-      wheelWidthIn: String(v.wheelWidthIn),
-      offsetMode: "offset",
-      offsetMm: String(v.wheelOffsetMm),
-      backspacingIn: "",
-      backspacingFrom: "bead-seat",
-      axleRatio: v.axleRatio ? String(v.axleRatio) : "",
-    } as unknown as VehicleInput);
-    props.onSaved(v.id);
-  };
-  const edited = () => props.savedVehicle && props.onSaved(null);
-  return (
-    <Card>
-      <h2 className="text-lg font-semibold">2. Vehicle as it is now</h2>
-      {saved.data && saved.data.length > 0 && (
-        <div className="mt-2 flex flex-wrap gap-2 text-sm">
-          <span className="self-center text-basalt-600">Saved:</span>
-          {saved.data.map((v) => (
-            <Button key={v.id} variant={props.savedVehicle === v.id ? "primary" : "secondary"} className="min-h-8 py-1" onClick={() => applySaved(v)}>
-              {v.description} ({v.tireSize})
-            </Button>
-          ))}
-        </div>
-      )}
-      <form onSubmit={onFind} onChange={edited} noValidate className="mt-3 grid gap-3 sm:grid-cols-3">
-        <div aria-live="assertive" className="sm:col-span-3">{failure && <Alert tone="error">{failure}</Alert>}</div>
-        <TextField label="Vehicle" hint="e.g. 2016 half-ton pickup" {...register("description")} error={e.description?.message} />
-        <TextField label="Bolt pattern" hint="e.g. 6x5.5 or 6x139.7" {...register("boltPattern")} error={e.boltPattern?.message} />
-        <TextField label="Hub bore (mm)" inputMode="decimal" hint="Optional; each wheel's centre bore is checked against it" {...register("hubBoreMm")} error={e.hubBoreMm?.message} />
-        <TextField label="Current tire size" hint="e.g. 265/70R17" {...register("tireSize")} error={e.tireSize?.message} />
-        <TextField label="Wheel diameter (in)" inputMode="decimal" {...register("wheelDiameterIn")} error={e.wheelDiameterIn?.message} />
-        <TextField label="Wheel width (in)" inputMode="decimal" {...register("wheelWidthIn")} error={e.wheelWidthIn?.message} />
-        <fieldset className="flex flex-col gap-1 text-sm">
-          <legend className="font-medium text-basalt-800">Wheel position given as</legend>
-          <label className="flex items-center gap-2"><input type="radio" value="offset" className="accent-ember-600" {...register("offsetMode")} /> Offset (mm)</label>
-          <label className="flex items-center gap-2"><input type="radio" value="backspacing" className="accent-ember-600" {...register("offsetMode")} /> Backspacing (in)</label>
-        </fieldset>
-        {mode === "offset" ? (
-          <TextField label="Offset (mm)" inputMode="decimal" hint="+ when the mounting face is outboard of the centreline" {...register("offsetMm")} error={e.offsetMm?.message} />
-        ) : (
-          <>
-            <TextField label="Backspacing (in)" inputMode="decimal" {...register("backspacingIn")} error={e.backspacingIn?.message} />
-            <div className="flex flex-col gap-1">
-              <label htmlFor="f-backspacingFrom" className="text-sm font-medium text-basalt-800">Measured to</label>
-              <select id="f-backspacingFrom" className="min-h-10 rounded-lg border border-basalt-300 px-3" {...register("backspacingFrom")}>
-                <option value="bead-seat">Bead seat</option>
-                <option value="flange">Flange edge</option>
-              </select>
-              <p aria-live="polite" className="text-sm text-contact-600">{e.backspacingFrom?.message}</p>
-            </div>
-          </>
-        )}
-        <TextField label="Axle ratio (optional)" inputMode="decimal" hint="For the regear suggestion; 3.73 assumed if empty" {...register("axleRatio")} error={e.axleRatio?.message} />
-        <label className="flex items-center gap-2 self-center text-sm sm:col-span-3">
-          <input type="checkbox" className="size-4 accent-ember-600" checked={props.saveVehicle && !props.savedVehicle} disabled={!!props.savedVehicle} onChange={(ev) => props.onSaveVehicle(ev.target.checked)} />
-          Save this vehicle to the customer
-        </label>
-        <Button type="submit" pending={formState.isSubmitting} className="justify-self-start">Find fitments</Button>
-      </form>
-    </Card>
   );
 }

@@ -7,6 +7,7 @@ import { RESET_TTL_MINUTES, passwordResetQueries } from "@/lib/accounts/password
 import { rateLimitQueries } from "@/lib/platform/limits/rateLimit";
 import { userQueries } from "@/lib/accounts/queries";
 import { forgotPasswordSchema } from "@/lib/accounts/schema";
+import { escapeHtml } from "@/lib/platform/text";
 
 const ANSWER = {
   message: "If an account uses that address, a reset link is on its way. It works once and expires in 30 minutes.",
@@ -45,8 +46,4 @@ async function mailResetLink(email: string): Promise<void> {
       `<p><a href="${link}">Choose a new password</a> — the link works once and expires in ${RESET_TTL_MINUTES} minutes.</p>` +
       "<p>If you did not ask for this, ignore this message; your password stays as it is.</p>",
   });
-}
-
-function escapeHtml(s: string) {
-  return s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
 }

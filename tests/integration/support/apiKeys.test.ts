@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { internalKeys } from "../integration/support/apiKeys";
+import { internalKeys } from "./apiKeys";
 
 // Common practice, no source: the API answers camelCase with ISO date strings; this is the check the route tests lean on.
 describe("internalKeys", () => {

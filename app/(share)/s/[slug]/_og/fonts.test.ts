@@ -1,24 +1,11 @@
 import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
-import { codePointsOf } from "@/app/(share)/s/[slug]/_og/cmap";
-import { fontsFor, parseRanges } from "@/app/(share)/s/[slug]/_og/fonts";
-import { REPLACEMENT, drawableText, fallbackOrder, orderArabicRuns } from "@/app/(share)/s/[slug]/_og/text";
+import { fontsFor, parseRanges } from "./fonts";
+import { REPLACEMENT, drawableText, fallbackOrder } from "./text";
 
 const cp = (s: string) => s.codePointAt(0)!;
 
-describe("cmap reader", () => {
-  it("reads what a font draws, not the range its package declares", () => {
-    // The Latin subset of Archivo declares U+0000-00FF but draws no C0 controls; Ł (U+0141) is in Latin Extended.
-    const latin = codePointsOf(readFileSync("app/fonts/og/archivo-latin-700-normal.woff"));
-    expect(latin.has(cp("A"))).toBe(true);
-    expect(latin.has(cp("é"))).toBe(true);
-    expect(latin.has(0x07)).toBe(false);
-    expect(latin.has(cp("Ł"))).toBe(false);
-    expect(codePointsOf(readFileSync("app/fonts/og/archivo-latin-ext-700-normal.woff")).has(cp("Ł"))).toBe(true);
-    // Format 12 (beyond the BMP): the emoji font holds U+1F699 (recreational vehicle).
-    expect(codePointsOf(readFileSync("node_modules/@fontsource/noto-emoji/files/noto-emoji-emoji-700-normal.woff")).has(0x1f699)).toBe(true);
-  });
-
+describe("CSS unicode-range lists", () => {
   it("parses CSS unicode-range lists", () => {
     expect(parseRanges("U+4e00-4e0f, U+4e20,u+ff01")).toEqual([[0x4e00, 0x4e0f], [0x4e20, 0x4e20], [0xff01, 0xff01]]);
   });
@@ -86,14 +73,5 @@ describe("fonts for a name", () => {
     expect(drawableText(korean, await fontsFor(korean), "Archivo", 700)).toEqual({ text: `${REPLACEMENT.repeat(4)} ${REPLACEMENT.repeat(3)}`, replaced: 7, graphemes: 7 });
     const tricky = "Rig\u0007 \u202eevil\u202c name\u200b";
     expect(drawableText(tricky, await fontsFor(tricky), "Archivo", 700).text).toBe("Rig evil name");
-  });
-});
-
-describe("Arabic word order", () => {
-  it("reverses the words of each Arabic run and leaves everything else as typed", () => {
-    expect(orderArabicRuns("سيارة الدفع الرباعي")).toBe("الرباعي الدفع سيارة");
-    expect(orderArabicRuns("x سلام عليكم y")).toBe("x عليكم سلام y");
-    expect(orderArabicRuns("Trail build")).toBe("Trail build");
-    expect(orderArabicRuns("שלום עולם")).toBe("שלום עולם"); // Hebrew is drawn in reading order already
   });
 });
