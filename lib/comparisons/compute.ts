@@ -14,6 +14,7 @@
  *   and a different common ratio is nearer (common practice, no source).
  */
 import {
+  DEFAULT_FLANGE_IN,
   KM_PER_MILE,
   backspacingFromOffset,
   compareSetups,
@@ -22,7 +23,6 @@ import {
   kgToLb,
   loadIndexKg,
   loadRangeInfo,
-  parseTireSize,
   plyRating,
   setupGeometry,
   speedSymbolKmh,
@@ -30,7 +30,8 @@ import {
   type SetupComparison,
   type SetupGeometry,
 } from "@/lib/fitment";
-import { type ComparisonInput, type SetupInputValues, DEFAULT_FLANGE_ALLOWANCE_IN, positionOffsetMm } from "./model";
+import { type Setup, toEngineSetup } from "@/lib/setup/model";
+import type { ComparisonInput } from "./model";
 import {
   type EnteredSpeed,
   type SpeedSystem,
@@ -194,10 +195,10 @@ export interface ComparisonResult {
 /** The length placeholder of warning titles; `warningTitle` in format.ts fills it in the user's units. */
 export const LENGTH_TOKEN = "{len}";
 
-function figures(s: SetupInputValues, g: SetupGeometry): SetupFigures {
+function figures(s: Setup, g: SetupGeometry): SetupFigures {
   const t = g.tire;
   const dims = tireDimensions(t, { rimWidthIn: s.wheelWidthIn });
-  const flange = s.position.mode === "backspacing" ? s.position.flangeIn : DEFAULT_FLANGE_ALLOWANCE_IN;
+  const flange = s.position.mode === "backspacing" ? s.position.flangeIn : DEFAULT_FLANGE_IN;
   // Backspacing of the wheel itself (a spacer moves the wheel, not its backspacing).
   const bsBead = backspacingFromOffset({ widthIn: s.wheelWidthIn, offsetMm: g.wheel.offsetMm, measuredFrom: "bead-seat" });
   const bsFlange = backspacingFromOffset({ widthIn: s.wheelWidthIn, offsetMm: g.wheel.offsetMm, measuredFrom: "flange", flangeIn: flange });
@@ -272,12 +273,8 @@ function crawlOf(first: number | null, low: number | null, axle: number, suggest
   };
 }
 
-function geometryOf(s: SetupInputValues): SetupGeometry {
-  return setupGeometry({
-    tire: parseTireSize(s.tire),
-    wheel: { diameterIn: s.wheelDiameterIn, widthIn: s.wheelWidthIn, offsetMm: positionOffsetMm(s.position, s.wheelWidthIn) },
-    spacerMm: s.spacerMm,
-  });
+function geometryOf(s: Setup): SetupGeometry {
+  return setupGeometry(toEngineSetup(s));
 }
 
 function warningsOf(r: Omit<ComparisonResult, "warnings">): ComparisonWarning[] {

@@ -2,9 +2,9 @@ import "server-only";
 import type { Knex } from "knex";
 import type { ComparisonInput } from "@/lib/comparisons/schema";
 import { type Checklist, buildChecklist } from "@/lib/garage/checklist";
-import { setupQuery } from "@/lib/garage/links";
+import { setupQuery } from "@/lib/setup/url";
 import type { VehicleDetail } from "@/lib/garage/types";
-import type { SetupValues } from "@/lib/setup/schema";
+import type { Setup } from "@/lib/setup/model";
 import { getComparison } from "../comparisons/queries";
 import { findChecklist, saveChecklist, vehicleDetail } from "./queries";
 import { bindAppDb } from "@/lib/platform/db/bind";
@@ -18,12 +18,12 @@ import { bindAppDb } from "@/lib/platform/db/bind";
  */
 export interface ChecklistSource {
   comparisonId?: string | null;
-  planned?: SetupValues | null;
+  planned?: Setup | null;
   marginMm?: number | null;
 }
 
 export type ResolvedChecklist =
-  | { ok: true; detail: VehicleDetail; planned: SetupValues; marginMm: number; comparison: { id: string; name: string; input: ComparisonInput } | null; checklist: Checklist }
+  | { ok: true; detail: VehicleDetail; planned: Setup; marginMm: number; comparison: { id: string; name: string; input: ComparisonInput } | null; checklist: Checklist }
   | { ok: false; reason: "vehicle" | "comparison" | "planned" };
 
 export async function resolveChecklist(db: Knex, userId: string, vehicleId: string, source: ChecklistSource): Promise<ResolvedChecklist> {

@@ -8,7 +8,8 @@ import { z } from "zod";
 import { type FitmentConstraints, DEFAULT_WHEEL_WIDTHS_IN, setupGeometry } from "@/lib/fitment";
 import type { VehicleClearance, Vehicle } from "@/lib/garage/types";
 import { marginField } from "@/lib/garage/schema";
-import { optionalLengthField, toEngineSetup } from "@/lib/setup/schema";
+import { toEngineSetup } from "@/lib/setup/model";
+import { optionalLengthField } from "@/lib/setup/schema";
 import { measuredPoints, steeringAxisOf } from "@/lib/garage/predict";
 
 /** The goal fields as the finder form labels them, for the form and for every message. */

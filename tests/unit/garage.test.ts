@@ -5,13 +5,13 @@ import { finderGoalsSchema, finderPlan } from "@/lib/garage/finderGoals";
 import { runFinderJob, type FinderReply } from "@/lib/garage/finderJob";
 import { exclusionText } from "@/lib/garage/finderText";
 import { predictPoints } from "@/lib/garage/predict";
-import { setupFromQuery, setupQuery, workspaceHref } from "@/lib/garage/links";
+import { workspaceHref } from "@/lib/garage/links";
 import type { Vehicle, VehicleClearance } from "@/lib/garage/types";
-import { clearanceSchema, vehicleMarginSchema, vehicleSchema } from "@/lib/garage/schema";
-import { type SetupValues, setupSchema } from "@/lib/setup/schema";
+import { clearanceSchema, garageVehicleSchema, vehicleMarginSchema } from "@/lib/garage/schema";
+import type { Setup } from "@/lib/setup/model";
 
-const CUR: SetupValues = { tire: "265/70R17", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 }, spacerMm: 0 };
-const PLAN: SetupValues = { tire: "35x12.50R17LT", wheelDiameterIn: 17, wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 }, spacerMm: 0 };
+const CUR: Setup = { tire: "265/70R17", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 }, spacerMm: 0 };
+const PLAN: Setup = { tire: "35x12.50R17LT", wheelDiameterIn: 17, wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 }, spacerMm: 0 };
 
 const VEHICLE: Vehicle = {
   id: "v1", name: "Test rig", year: 2010, make: null, model: null, trim: null, frontSuspension: "solid-axle", boltPattern: "6x5.5", hubBoreMm: 108,
@@ -22,26 +22,9 @@ const point = (id: string, direction: VehicleClearance["direction"], distanceMm:
   id, label: id, direction, distanceMm, distanceText: `${distanceMm} mm`, suspensionState: "ride-height", measuredSetup: CUR, createdAt: "",
 });
 
-describe("setup schema (fractions through the engine's parseLength)", () => {
-  it("reads inch fractions and mm text into the engine's units", () => {
-    const s = setupSchema.parse({
-      tire: "265/70R17", wheelDiameterIn: "17", wheelWidthIn: "8-1/2",
-      position: { mode: "backspacing", backspacingIn: "4-3/4", reference: "flange", flangeIn: "1/2" }, spacerMm: "1 in",
-    });
-    expect(s.wheelWidthIn).toBe(8.5);
-    expect(s.position).toEqual({ mode: "backspacing", backspacingIn: 4.75, reference: "flange", flangeIn: 0.5 });
-    expect(s.spacerMm).toBe(25.4); // 1 in = 25.4 mm exactly (NIST SP 811)
-  });
-
-  it("refuses a wheel that does not match the tire and an offset outside the wheel", () => {
-    const r = setupSchema.safeParse({ ...CUR, wheelDiameterIn: 18, position: { mode: "offset", offsetMm: 190 } });
-    expect(r.success).toBe(false);
-    const paths = r.error!.issues.map((i) => i.path.join("."));
-    expect(paths).toEqual(expect.arrayContaining(["wheelDiameterIn"]));
-  });
-
+describe("garage vehicle schema", () => {
   it("normalizes the bolt pattern: 5x4.5 and 5x114.3 are one pattern", () => {
-    const a = vehicleSchema.parse({ name: "A", frontSuspension: "independent", boltPattern: "5 on 4.5", stockSetup: CUR, currentSetup: CUR });
+    const a = garageVehicleSchema.parse({ name: "A", frontSuspension: "independent", boltPattern: "5 on 4.5", stockSetup: CUR, currentSetup: CUR });
     expect(a.boltPattern).toBe("5x4.5");
     expect(a.year).toBeNull();
     expect(a.notes).toBe("");
@@ -52,34 +35,20 @@ describe("units in the garage forms: a field reads the unit its label states", (
   const issue = (r: { success: boolean; error?: { issues: { path: PropertyKey[]; message: string }[] } }, path: string) =>
     r.error?.issues.find((i) => i.path.join(".") === path)?.message;
 
-  it("refuses a spacer of 1-1/2 (a fraction in a mm field) instead of 1.5 mm; 1-1/2 in is 38.1 mm (NIST SP 811)", () => {
-    const r = setupSchema.safeParse({ ...CUR, spacerMm: "1-1/2" });
-    expect(r.success).toBe(false);
-    expect(issue(r, "spacerMm")).toBe("Spacer (mm, optional): “1-1/2” is a fraction, which is read only in inches — write “1-1/2 in”, or mm as a decimal, e.g. 25 (leave empty for none).");
-    expect(setupSchema.parse({ ...CUR, spacerMm: "1-1/2 in" }).spacerMm).toBeCloseTo(38.1, 9);
-    expect(issue(setupSchema.safeParse({ ...CUR, position: { mode: "offset", offsetMm: "1/2" } }), "position.offsetMm")).toMatch(/^Offset \(mm\): “1\/2” is a fraction/);
-  });
-
-  it("reads Unicode fractions in inch fields", () => {
-    const s = setupSchema.parse({ ...CUR, wheelWidthIn: "8½", position: { mode: "backspacing", backspacingIn: "4¾", reference: "flange", flangeIn: "½" } });
-    expect(s.wheelWidthIn).toBe(8.5);
-    expect(s.position).toEqual({ mode: "backspacing", backspacingIn: 4.75, reference: "flange", flangeIn: 0.5 });
-  });
-
   it("lift height: typed in inches, its bound stated in inches, its example accepted", () => {
     const base = { name: "A", frontSuspension: "independent", boltPattern: "6x5.5", stockSetup: CUR, currentSetup: CUR };
-    const r = vehicleSchema.safeParse({ ...base, liftHeightMm: "25" });
+    const r = garageVehicleSchema.safeParse({ ...base, liftHeightMm: "25" });
     // 500 mm / 25.4 = 19.685 in, stated inward as 19.68 in.
     expect(issue(r, "liftHeightMm")).toBe("Lift height (in): must be between 0 and 19.68 in, e.g. 2-1/2 or 2.5.");
-    expect(vehicleSchema.parse({ ...base, liftHeightMm: "2-1/2" }).liftHeightMm).toBeCloseTo(63.5, 9);
-    expect(vehicleSchema.parse({ ...base, liftHeightMm: "2½" }).liftHeightMm).toBeCloseTo(63.5, 9);
-    expect(vehicleSchema.parse({ ...base, liftHeightMm: "2.5" }).liftHeightMm).toBeCloseTo(63.5, 9);
-    expect(issue(vehicleSchema.safeParse({ ...base, liftHeightMm: "lots" }), "liftHeightMm")).toBe("Lift height (in): not a length in inches, e.g. 2-1/2 or 2.5.");
+    expect(garageVehicleSchema.parse({ ...base, liftHeightMm: "2-1/2" }).liftHeightMm).toBeCloseTo(63.5, 9);
+    expect(garageVehicleSchema.parse({ ...base, liftHeightMm: "2½" }).liftHeightMm).toBeCloseTo(63.5, 9);
+    expect(garageVehicleSchema.parse({ ...base, liftHeightMm: "2.5" }).liftHeightMm).toBeCloseTo(63.5, 9);
+    expect(issue(garageVehicleSchema.safeParse({ ...base, liftHeightMm: "lots" }), "liftHeightMm")).toBe("Lift height (in): not a length in inches, e.g. 2-1/2 or 2.5.");
   });
 
   it("names each field as the vehicle form labels it", () => {
     const base = { name: "A", frontSuspension: "independent", boltPattern: "6x5.5", stockSetup: CUR, currentSetup: CUR };
-    const r = vehicleSchema.safeParse({ ...base, year: "1800", hubBoreMm: "3/4", axleRatio: "x", transmissionRatio: "20", kingpinInclinationDeg: "40" });
+    const r = garageVehicleSchema.safeParse({ ...base, year: "1800", hubBoreMm: "3/4", axleRatio: "x", transmissionRatio: "20", kingpinInclinationDeg: "40" });
     expect(issue(r, "year")).toBe("Year: must be between 1900 and 2100, e.g. 2009.");
     expect(issue(r, "hubBoreMm")).toMatch(/^Hub bore \(mm\): “3\/4” is a fraction/);
     expect(issue(r, "axleRatio")).toBe("Axle ratio: enter a number, e.g. 3.73.");
@@ -133,19 +102,11 @@ describe("the vehicle's clearance margin", () => {
 
 describe("links in the workspace's query format", () => {
   it("matches the workspace's own example encoding", () => {
-    const planned: SetupValues = { ...PLAN, tire: "37x12.50R17LT" };
+    const planned: Setup = { ...PLAN, tire: "37x12.50R17LT" };
     expect(workspaceHref(CUR, planned, { kingpinInclinationDeg: null, axleRatio: 3.73, transmissionRatio: 1 })).toBe(
       "/workspace?ct=265/70R17&cd=17&cw=8&co=25&pt=37x12.50R17LT&pd=17&pw=9&po=-12",
     );
     expect(workspaceHref(CUR, planned, { kingpinInclinationDeg: 8, axleRatio: 4.1, transmissionRatio: 0.7 })).toMatch(/&kpi=8&axle=4\.1&top=0\.7$/);
-  });
-
-  it("round-trips a backspacing setup with spacer", () => {
-    const s: SetupValues = { ...PLAN, position: { mode: "backspacing", backspacingIn: 4.5, reference: "bead-seat", flangeIn: 0.5 }, spacerMm: 12 };
-    const q = setupQuery("p", s);
-    expect(q).toBe("pt=35x12.50R17LT&pd=17&pw=9&pb=4.5&pr=bead&ps=12");
-    expect(setupFromQuery("p", new URLSearchParams(q))).toEqual(s);
-    expect(setupFromQuery("p", new URLSearchParams("pt=nonsense"))).toBeNull();
   });
 });
 
@@ -178,7 +139,7 @@ describe("finder goals → engine constraints", () => {
 
   it("on the demo pickup, recommends nothing its own prediction says will rub, and says why the 37s are out", () => {
     // The demo member's pickup (db/seeds/04_demo_garage.ts): LT285/70R17 on 17x8.5 +18, KPI 12°, its five points.
-    const cur: SetupValues = { tire: "LT285/70R17 121/118Q E", wheelDiameterIn: 17, wheelWidthIn: 8.5, position: { mode: "offset", offsetMm: 18 }, spacerMm: 0 };
+    const cur: Setup = { tire: "LT285/70R17 121/118Q E", wheelDiameterIn: 17, wheelWidthIn: 8.5, position: { mode: "offset", offsetMm: 18 }, spacerMm: 0 };
     const pickup: Vehicle = { ...VEHICLE, frontSuspension: "independent", currentSetup: cur, stockSetup: cur, kingpinInclinationDeg: 12 };
     const at = (id: string, label: string, direction: VehicleClearance["direction"], distanceMm: number, suspensionState: VehicleClearance["suspensionState"]): VehicleClearance => ({
       ...point(id, direction, distanceMm), label, suspensionState, measuredSetup: cur,
@@ -197,7 +158,7 @@ describe("finder goals → engine constraints", () => {
     runFinderJob({ id: 1, constraints: plan.constraints, wheelWidthsIn: plan.wheelWidthsIn, limit: 200 }, (r) => replies.push(r));
     const done = replies.at(-1)!;
     if (done.type !== "done") throw new Error(`finder failed: ${JSON.stringify(done)}`);
-    const setupOf = (m: { tire: { text: string }; wheel: { widthIn: number; offsetMm: number } }): SetupValues => ({
+    const setupOf = (m: { tire: { text: string }; wheel: { widthIn: number; offsetMm: number } }): Setup => ({
       tire: m.tire.text, wheelDiameterIn: 17, wheelWidthIn: m.wheel.widthIn, position: { mode: "offset", offsetMm: m.wheel.offsetMm }, spacerMm: 0,
     });
     expect(done.result.results.length).toBeGreaterThan(0);
@@ -218,7 +179,7 @@ describe("finder goals → engine constraints", () => {
     //   Liner (upward, full stuff): 50.8 − (469.9 − 415.4) = −3.7 mm.
     //   Bumper corner (fore/aft, full lock): outer corner √(415.4² + 230.796²) = 475.209 →
     //     √(469.9² + 250.506²) = 532.503: 38.1 − 57.293 = −19.193 mm.
-    const old2: SetupValues = { tire: "37x12.50R17LT", wheelDiameterIn: 17, wheelWidthIn: 9.5, position: { mode: "offset", offsetMm: 12 }, spacerMm: 0 };
+    const old2: Setup = { tire: "37x12.50R17LT", wheelDiameterIn: 17, wheelWidthIn: 9.5, position: { mode: "offset", offsetMm: 12 }, spacerMm: 0 };
     const pred = predictPoints(points, old2, 12.7, pickup);
     expect(pred.map((p) => p.status)).toEqual(["contact", "tight", "contact", "contact", "contact"]);
     [-23.29, 7.846, -1.749, -3.7, -19.193].forEach((mm, i) => expect(pred[i]!.predictedMm).toBeCloseTo(mm, 2));

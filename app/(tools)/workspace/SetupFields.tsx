@@ -4,7 +4,7 @@ import { cx } from "@/components/ui/cx";
 import { Segmented } from "@/components/comparison/Segmented";
 import type { SetupFigures } from "@/lib/comparisons/compute";
 import type { DraftErrors, SetupDraft } from "@/lib/comparisons/draft";
-import { SETUP_FIELD_LABEL as L } from "@/lib/comparisons/fields";
+import { SETUP_FIELD_LABEL as L } from "@/lib/setup/fields";
 import { type DisplayPrefs, formatInches, formatLen, formatNumber } from "@/lib/comparisons/format";
 import { parseTireSize } from "@/lib/fitment";
 import { BackspacingDiagram } from "./BackspacingDiagram";

@@ -12,7 +12,8 @@ import { type Draft, type DraftErrors, type SetupDraft, convertDraft, draftFromI
 import { fenderUnit, speedUnit, vehicleFieldLabel } from "@/lib/comparisons/fields";
 import type { DisplayPrefs } from "@/lib/comparisons/format";
 import { type ComparisonInput, DEFAULT_INPUT } from "@/lib/comparisons/model";
-import { type LinkProblem, decodeComparison, encodeComparison, problemText } from "@/lib/comparisons/url";
+import { decodeComparison, encodeComparison } from "@/lib/comparisons/url";
+import { type LinkProblem, problemText } from "@/lib/setup/url";
 import type { WorkspaceVehicle } from "@/lib/garage/types";
 import { CurrentInputContext, withParam } from "./currentInput";
 import { SetupFields } from "./SetupFields";

@@ -228,7 +228,7 @@ export interface PaymentRow {
 }
 
 // --- garage ---------------------------------------------------------------------------------
-// Setups are stored as the output of lib/setup/schema.ts (SetupValues).
+// Setups are stored as the output of lib/setup/schema.ts (Setup).
 
 export const FRONT_SUSPENSIONS = ["independent", "solid-axle"] as const;
 export type FrontSuspension = (typeof FRONT_SUSPENSIONS)[number];

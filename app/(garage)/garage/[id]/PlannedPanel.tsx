@@ -11,11 +11,12 @@ import { Card } from "@/components/ui/Card";
 import { TextField } from "@/components/ui/TextField";
 import { DEFAULT_CLEARANCE_MARGIN_MM, compareSetups } from "@/lib/fitment";
 import { bothUnits, marginText, signedMm } from "@/lib/garage/format";
-import { urlNumber } from "@/lib/comparisons/url";
-import { setupQuery, workspaceHref } from "@/lib/garage/links";
+import { workspaceHref } from "@/lib/garage/links";
+import { setupQuery, urlNumber } from "@/lib/setup/url";
 import type { VehicleDetail } from "@/lib/garage/types";
 import { marginField } from "@/lib/garage/schema";
-import { type SetupFormValues, type SetupValues, setupSchema, setupToForm, toEngineSetup } from "@/lib/setup/schema";
+import { type Setup, type SetupForm, toEngineSetup } from "@/lib/setup/model";
+import { setupSchema, setupToForm } from "@/lib/setup/schema";
 import { SetupFields } from "../_components/SetupFields";
 import { predictPoints, steeringAxisOf } from "@/lib/garage/predict";
 
@@ -23,11 +24,11 @@ import { predictPoints, steeringAxisOf } from "@/lib/garage/predict";
 const MARGIN_LABEL = "Safety margin";
 const marginSchema = marginField(MARGIN_LABEL);
 const plannedFormSchema = z.object({ planned: setupSchema, margin: marginSchema });
-type PlannedForm = { planned: SetupFormValues; margin: string };
+type PlannedForm = { planned: SetupForm; margin: string };
 
 
 /** A planned setup typed in, and what every measured point is predicted to become with it. */
-export function PlannedPanel({ detail, initialPlanned }: { detail: VehicleDetail; initialPlanned: SetupValues | null }) {
+export function PlannedPanel({ detail, initialPlanned }: { detail: VehicleDetail; initialPlanned: Setup | null }) {
   const { vehicle: v, clearances } = detail;
   const form = useForm<PlannedForm>({
     resolver: zodResolver(plannedFormSchema) as never,

@@ -3,7 +3,7 @@ import { notFound } from "next/navigation";
 import { z } from "zod";
 import { requirePageCaller } from "@/lib/platform/auth/session";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
-import { setupFromQuery } from "@/lib/garage/links";
+import { setupFromQuery } from "@/lib/setup/url";
 import { garageQueries } from "@/lib/garage/queries";
 import { VehicleView } from "./VehicleView";
 

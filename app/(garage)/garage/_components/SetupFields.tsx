@@ -1,7 +1,7 @@
 "use client";
 import { type FieldValues, type Path, type UseFormReturn, get, useWatch } from "react-hook-form";
 import { TextField } from "@/components/ui/TextField";
-import { SETUP_FIELD_LABEL as L } from "@/lib/comparisons/fields";
+import { SETUP_FIELD_LABEL as L } from "@/lib/setup/fields";
 
 /**
  * The inputs of one setup (tire, wheel, offset or backspacing with its reference, spacer),

@@ -3,7 +3,7 @@ import { notFound } from "@/lib/platform/http/errors";
 import { route } from "@/lib/platform/http/route";
 import { photoStore } from "@/lib/garage/photos/s3";
 import { garageQueries } from "@/lib/garage/queries";
-import { vehicleSchema } from "@/lib/garage/schema";
+import { garageVehicleSchema } from "@/lib/garage/schema";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
 
 const params = z.object({ id: z.uuid() });
@@ -14,7 +14,7 @@ export const GET = route({ access: GARAGE_ACCESS, params }, async ({ caller, par
   return detail;
 });
 
-export const PATCH = route({ access: GARAGE_ACCESS, params, body: vehicleSchema }, async ({ caller, params, body }) => {
+export const PATCH = route({ access: GARAGE_ACCESS, params, body: garageVehicleSchema }, async ({ caller, params, body }) => {
   const vehicle = await garageQueries.updateVehicle(caller.userId, params.id, body);
   if (!vehicle) throw notFound("That vehicle");
   return { vehicle };

@@ -9,7 +9,7 @@ import { requirePageCaller } from "@/lib/platform/auth/session";
 import { encodeComparison } from "@/lib/comparisons/url";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
 import { bothUnits, setupLine } from "@/lib/garage/format";
-import { setupFromQuery, setupQuery } from "@/lib/garage/links";
+import { setupFromQuery, setupQuery } from "@/lib/setup/url";
 import { checklistQueries } from "@/lib/garage/checklistQueries";
 import { marginMmParam } from "@/lib/garage/schema";
 import { ChecklistView } from "./ChecklistView";

@@ -4,7 +4,7 @@ import { Card } from "@/components/ui/Card";
 import type { FitmentExclusion } from "@/lib/fitment";
 import { bothUnits } from "@/lib/garage/format";
 import { exclusionText } from "@/lib/garage/finderText";
-import { setupQuery } from "@/lib/garage/links";
+import { setupQuery } from "@/lib/setup/url";
 import type { Vehicle } from "@/lib/garage/types";
 import { candidateSetup } from "./candidate";
 

@@ -21,7 +21,8 @@ import { type FinderResult, type FitmentMatch, formatLength, inToMm } from "@/li
 import { bothUnits } from "@/lib/garage/format";
 import { FINDER_LABEL, type FinderGoalsForm, finderGoalsSchema, finderPlan } from "@/lib/garage/finderGoals";
 import type { FinderJob, FinderReply } from "@/lib/garage/finderJob";
-import { setupQuery, workspaceHref } from "@/lib/garage/links";
+import { workspaceHref } from "@/lib/garage/links";
+import { setupQuery } from "@/lib/setup/url";
 import type { Vehicle, VehicleClearance } from "@/lib/garage/types";
 import { ExcludedList } from "./ExcludedList";
 import { candidateSetup } from "./candidate";
