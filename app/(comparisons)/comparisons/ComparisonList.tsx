@@ -11,7 +11,7 @@ import { Card } from "@/components/ui/Card";
 import { api } from "@/lib/platform/client/api";
 import { type DisplayPrefs, formatLen, formatNumber } from "@/lib/comparisons/format";
 import { readingPhrase } from "@/lib/comparisons/speedometer";
-import { encodeComparison } from "@/lib/comparisons/url";
+import { workspaceUrl } from "@/lib/comparisons/url";
 import { COMPARISON_SORTS, COMPARISON_SORT_LABEL, type ComparisonSort, type SavedComparison, comparisonNameSchema } from "@/lib/comparisons/savedSchema";
 
 type ListData = SavedComparison[];
@@ -26,7 +26,7 @@ function useOrigin(): string {
 
 /** Opens the comparison in the workspace through the URL codec, remembering which saved one it is. */
 export function workspaceHref(c: SavedComparison): string {
-  return `/workspace?${encodeComparison(c.input)}&saved=${c.id}${c.vehicleId ? `&v=${c.vehicleId}` : ""}`;
+  return workspaceUrl({ input: c.input, savedId: c.id, vehicleId: c.vehicleId });
 }
 
 function useDebounced<T>(value: T, ms: number): T {
