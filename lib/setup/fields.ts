@@ -17,6 +17,14 @@ export const SETUP_FIELD_LABEL = {
 } as const;
 export type SetupFieldPath = keyof typeof SETUP_FIELD_LABEL;
 
+/**
+ * The form names of a setup's fields nested under `name`, for placing a server's field errors.
+ *
+ * @example
+ * setupFieldNames("currentSetup")[0]; // "currentSetup.tire"
+ */
+export const setupFieldNames = (name: string): string[] => Object.keys(SETUP_FIELD_LABEL).map((path) => `${name}.${path}`);
+
 /** Examples each setup field accepts (used in its messages and hints). */
 export const SETUP_FIELD_EXAMPLE = {
   tire: "265/70R17",

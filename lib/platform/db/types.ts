@@ -1,4 +1,5 @@
 /** Row types, one place for every table. Column names are snake_case as stored. */
+import type { BackspacingReference } from "@/lib/fitment";
 
 export const ROLES = ["member", "shop_staff", "shop_owner", "admin"] as const;
 export type Role = (typeof ROLES)[number];
@@ -81,7 +82,7 @@ export interface CatalogItemRow {
   wheel_width_in: number | null;
   wheel_offset_mm: number | null;
   wheel_backspacing_in: number | null;
-  wheel_backspacing_ref: "bead-seat" | "flange" | null;
+  wheel_backspacing_reference: BackspacingReference | null;
   bolt_pattern: string | null;
   center_bore_mm: number | null;
   beadlock: boolean;
@@ -125,10 +126,8 @@ export interface CustomerVehicleRow {
   customer_id: string;
   description: string;
   bolt_pattern: string;
-  tire_size: string;
-  wheel_diameter_in: number;
-  wheel_width_in: number;
-  wheel_offset_mm: number;
+  /** The setup it runs now, a lib/setup Setup (JSONB). */
+  current_setup: unknown;
   axle_ratio: number | null;
   /** The hub's pilot diameter, when the counter measured or looked it up. */
   hub_bore_mm: number | null;
@@ -145,10 +144,8 @@ export interface QuoteRow {
   status: QuoteStatus;
   vehicle_description: string;
   bolt_pattern: string;
-  current_tire: string;
-  current_wheel_diameter_in: number;
-  current_wheel_width_in: number;
-  current_wheel_offset_mm: number;
+  /** The vehicle's setup as quoted, a lib/setup Setup (JSONB). */
+  current_setup: unknown;
   axle_ratio: number | null;
   hub_bore_mm: number | null;
   tire_item_id: string | null;
@@ -228,7 +225,7 @@ export interface PaymentRow {
 }
 
 // --- garage ---------------------------------------------------------------------------------
-// Setups are stored as the output of lib/setup/schema.ts (Setup).
+// Setups are stored as lib/setup's Setup (the output of checkSetup).
 
 export const FRONT_SUSPENSIONS = ["independent", "solid-axle"] as const;
 export type FrontSuspension = (typeof FRONT_SUSPENSIONS)[number];

@@ -17,7 +17,7 @@ import type { VehicleDetail } from "@/lib/garage/types";
 import { marginField } from "@/lib/garage/schema";
 import { type Setup, type SetupForm, toEngineSetup } from "@/lib/setup/model";
 import { setupSchema, setupToForm } from "@/lib/setup/schema";
-import { SetupFields } from "../_components/SetupFields";
+import { SetupFields } from "@/components/setup/SetupFields";
 import { predictPoints, steeringAxisOf } from "@/lib/garage/predict";
 
 /** The margin as this panel labels it, so its messages name it so. */

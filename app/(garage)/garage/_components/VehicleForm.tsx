@@ -14,7 +14,7 @@ import { marginText } from "@/lib/garage/format";
 import type { Vehicle } from "@/lib/garage/types";
 import { FRONT_SUSPENSION_LABEL, type GarageVehicleForm, type GarageVehicleValues, garageVehicleSchema } from "@/lib/garage/schema";
 import { EMPTY_SETUP_FORM, setupToForm } from "@/lib/setup/schema";
-import { SetupFields } from "./SetupFields";
+import { SetupFields } from "@/components/setup/SetupFields";
 
 const FIELDS = [
   "name", "year", "make", "model", "trim", "frontSuspension", "boltPattern", "hubBoreMm", "liftHeightMm",

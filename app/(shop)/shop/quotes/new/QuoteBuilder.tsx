@@ -3,7 +3,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQuery } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { useForm, useWatch } from "react-hook-form";
+import { useForm } from "react-hook-form";
 import { Alert } from "@/components/ui/Alert";
 import { Badge } from "@/components/ui/Badge";
 import { Button } from "@/components/ui/Button";
@@ -15,7 +15,11 @@ import type { Customer, CustomerVehicle } from "@/lib/shop/customers/api";
 import { mmToIn } from "@/lib/fitment";
 import { describeFieldErrors } from "@/lib/shop/quotes/fieldLabels";
 import { formatUsd } from "@/lib/shop/quotes/money";
-import { type CustomerInput, type Vehicle, type VehicleInput, customerSchema, vehicleSchema } from "@/lib/shop/quotes/schema";
+import { type CustomerInput, customerSchema } from "@/lib/shop/quotes/schema";
+import { SetupFields } from "@/components/setup/SetupFields";
+import { setupFieldNames } from "@/lib/setup/fields";
+import { EMPTY_SETUP_FORM, setupToForm } from "@/lib/setup/schema";
+import { type CounterVehicle, type CounterVehicleForm, counterVehicleSchema } from "@/lib/shop/customers/schema";
 
 
 const signed = (mm: number, digits = 0) => `${mm > 0 ? "+" : mm < 0 ? "−" : "±"}${Math.abs(mm).toFixed(digits)}`;
@@ -25,7 +29,7 @@ export function QuoteBuilder() {
   const router = useRouter();
   const [customer, setCustomer] = useState<Customer | null>(null);
   const [savedVehicle, setSavedVehicle] = useState<string | null>(null);
-  const [vehicle, setVehicle] = useState<Vehicle | null>(null);
+  const [vehicle, setVehicle] = useState<CounterVehicle | null>(null);
   const [saveVehicle, setSaveVehicle] = useState(true);
   const [candidates, setCandidates] = useState<Candidates | null>(null);
   const [pick, setPick] = useState<string | null>(null);
@@ -215,17 +219,17 @@ function VehicleStep(props: {
   onSaved: (id: string | null) => void;
   saveVehicle: boolean;
   onSaveVehicle: (b: boolean) => void;
-  onCandidates: (v: Vehicle, c: Candidates) => void;
+  onCandidates: (v: CounterVehicle, c: Candidates) => void;
 }) {
   const saved = useQuery({
     queryKey: ["shop-customer", props.customerId],
     queryFn: () => api<{ vehicles: CustomerVehicle[] }>(`/api/shop/customers/${props.customerId}`).then((r) => r.vehicles),
   });
-  const { register, handleSubmit, setError, formState, control, reset } = useForm<VehicleInput, unknown, Vehicle>({
-    resolver: zodResolver(vehicleSchema),
-    defaultValues: { description: "", boltPattern: "", hubBoreMm: "", tireSize: "", wheelDiameterIn: "", wheelWidthIn: "", offsetMode: "offset", offsetMm: "", backspacingIn: "", backspacingFrom: "bead-seat", axleRatio: "" } as unknown as VehicleInput,
+  const form = useForm<CounterVehicleForm, unknown, CounterVehicle>({
+    resolver: zodResolver(counterVehicleSchema),
+    defaultValues: { description: "", boltPattern: "", hubBoreMm: "", currentSetup: EMPTY_SETUP_FORM, axleRatio: "" },
   });
-  const mode = useWatch({ control, name: "offsetMode" });
+  const { register, handleSubmit, setError, formState, reset } = form;
   const [failure, setFailure] = useState<string | null>(null);
   const e = formState.errors;
   const onFind = handleSubmit(async (v) => {
@@ -233,7 +237,7 @@ function VehicleStep(props: {
     try {
       props.onCandidates(v, await api<Candidates>("/api/shop/fitment/candidates", { body: v }));
     } catch (err) {
-      setFailure(applyFieldErrors(err, setError, ["description", "boltPattern", "hubBoreMm", "tireSize", "wheelDiameterIn", "wheelWidthIn", "offsetMm", "backspacingIn", "backspacingFrom", "axleRatio"]));
+      setFailure(applyFieldErrors(err, setError, ["description", "boltPattern", "hubBoreMm", ...setupFieldNames("currentSetup"), "axleRatio"]));
     }
   });
   const applySaved = (v: CustomerVehicle) => {
@@ -241,15 +245,9 @@ function VehicleStep(props: {
       description: v.description,
       boltPattern: v.boltPattern,
       hubBoreMm: v.hubBoreMm === null ? "" : String(v.hubBoreMm),
-      tireSize: v.tireSize,
-      wheelDiameterIn: String(v.wheelDiameterIn),
-      wheelWidthIn: String(v.wheelWidthIn),
-      offsetMode: "offset",
-      offsetMm: String(v.wheelOffsetMm),
-      backspacingIn: "",
-      backspacingFrom: "bead-seat",
+      currentSetup: setupToForm(v.currentSetup),
       axleRatio: v.axleRatio ? String(v.axleRatio) : "",
-    } as unknown as VehicleInput);
+    });
     props.onSaved(v.id);
   };
   const edited = () => props.savedVehicle && props.onSaved(null);
@@ -261,7 +259,7 @@ function VehicleStep(props: {
           <span className="self-center text-basalt-600">Saved:</span>
           {saved.data.map((v) => (
             <Button key={v.id} variant={props.savedVehicle === v.id ? "primary" : "secondary"} className="min-h-8 py-1" onClick={() => applySaved(v)}>
-              {v.description} ({v.tireSize})
+              {v.description} ({v.currentSetup.tire})
             </Button>
           ))}
         </div>
@@ -271,29 +269,9 @@ function VehicleStep(props: {
         <TextField label="Vehicle" hint="e.g. 2016 half-ton pickup" {...register("description")} error={e.description?.message} />
         <TextField label="Bolt pattern" hint="e.g. 6x5.5 or 6x139.7" {...register("boltPattern")} error={e.boltPattern?.message} />
         <TextField label="Hub bore (mm)" inputMode="decimal" hint="Optional; each wheel's centre bore is checked against it" {...register("hubBoreMm")} error={e.hubBoreMm?.message} />
-        <TextField label="Current tire size" hint="e.g. 265/70R17" {...register("tireSize")} error={e.tireSize?.message} />
-        <TextField label="Wheel diameter (in)" inputMode="decimal" {...register("wheelDiameterIn")} error={e.wheelDiameterIn?.message} />
-        <TextField label="Wheel width (in)" inputMode="decimal" {...register("wheelWidthIn")} error={e.wheelWidthIn?.message} />
-        <fieldset className="flex flex-col gap-1 text-sm">
-          <legend className="font-medium text-basalt-800">Wheel position given as</legend>
-          <label className="flex items-center gap-2"><input type="radio" value="offset" className="accent-ember-600" {...register("offsetMode")} /> Offset (mm)</label>
-          <label className="flex items-center gap-2"><input type="radio" value="backspacing" className="accent-ember-600" {...register("offsetMode")} /> Backspacing (in)</label>
-        </fieldset>
-        {mode === "offset" ? (
-          <TextField label="Offset (mm)" inputMode="decimal" hint="+ when the mounting face is outboard of the centreline" {...register("offsetMm")} error={e.offsetMm?.message} />
-        ) : (
-          <>
-            <TextField label="Backspacing (in)" inputMode="decimal" {...register("backspacingIn")} error={e.backspacingIn?.message} />
-            <div className="flex flex-col gap-1">
-              <label htmlFor="f-backspacingFrom" className="text-sm font-medium text-basalt-800">Measured to</label>
-              <select id="f-backspacingFrom" className="min-h-10 rounded-lg border border-basalt-300 px-3" {...register("backspacingFrom")}>
-                <option value="bead-seat">Bead seat</option>
-                <option value="flange">Flange edge</option>
-              </select>
-              <p aria-live="polite" className="text-sm text-contact-600">{e.backspacingFrom?.message}</p>
-            </div>
-          </>
-        )}
+        <div className="sm:col-span-3">
+          <SetupFields form={form} name="currentSetup" legend="Tires and wheels on it now" spacer={false} />
+        </div>
         <TextField label="Axle ratio (optional)" inputMode="decimal" hint="For the regear suggestion; 3.73 assumed if empty" {...register("axleRatio")} error={e.axleRatio?.message} />
         <label className="flex items-center gap-2 self-center text-sm sm:col-span-3">
           <input type="checkbox" className="size-4 accent-ember-600" checked={props.saveVehicle && !props.savedVehicle} disabled={!!props.savedVehicle} onChange={(ev) => props.onSaveVehicle(ev.target.checked)} />
