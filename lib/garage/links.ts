@@ -12,10 +12,10 @@ import type { Setup } from "@/lib/setup/model";
  * figures (KPI, axle ratio, top-gear ratio) when set and the vehicle itself when its id is given.
  *
  * @example
- * workspaceHref(current, planned, { id: "…", kingpinInclinationDeg: 8, axleRatio: 4.1, transmissionRatio: null });
+ * vehicleWorkspaceUrl(current, planned, { id: "…", kingpinInclinationDeg: 8, axleRatio: 4.1, transmissionRatio: null });
  * // "/workspace?ct=265/70R17&cd=17&cw=8&co=25&pt=…&kpi=8&axle=4.1&v=…"
  */
-export function workspaceHref(
+export function vehicleWorkspaceUrl(
   current: Setup,
   planned: Setup,
   vehicle: { id?: string; kingpinInclinationDeg: number | null; axleRatio: number | null; transmissionRatio: number | null },

@@ -5,7 +5,7 @@ import { finderGoalsSchema, finderPlan } from "@/lib/garage/finderGoals";
 import { runFinderJob, type FinderReply } from "@/lib/garage/finderJob";
 import { exclusionText } from "@/lib/garage/finderText";
 import { predictPoints } from "@/lib/garage/predict";
-import { workspaceHref } from "@/lib/garage/links";
+import { vehicleWorkspaceUrl } from "@/lib/garage/links";
 import type { Vehicle, VehicleClearance } from "@/lib/garage/types";
 import { clearanceSchema, garageVehicleSchema, vehicleMarginSchema } from "@/lib/garage/schema";
 import type { Setup } from "@/lib/setup/model";
@@ -103,10 +103,10 @@ describe("the vehicle's clearance margin", () => {
 describe("links in the workspace's query format", () => {
   it("matches the workspace's own example encoding", () => {
     const planned: Setup = { ...PLAN, tire: "37x12.50R17LT" };
-    expect(workspaceHref(CUR, planned, { kingpinInclinationDeg: null, axleRatio: 3.73, transmissionRatio: 1 })).toBe(
+    expect(vehicleWorkspaceUrl(CUR, planned, { kingpinInclinationDeg: null, axleRatio: 3.73, transmissionRatio: 1 })).toBe(
       "/workspace?ct=265/70R17&cd=17&cw=8&co=25&pt=37x12.50R17LT&pd=17&pw=9&po=-12",
     );
-    expect(workspaceHref(CUR, planned, { kingpinInclinationDeg: 8, axleRatio: 4.1, transmissionRatio: 0.7 })).toMatch(/&kpi=8&axle=4\.1&top=0\.7$/);
+    expect(vehicleWorkspaceUrl(CUR, planned, { kingpinInclinationDeg: 8, axleRatio: 4.1, transmissionRatio: 0.7 })).toMatch(/&kpi=8&axle=4\.1&top=0\.7$/);
   });
 });
 

@@ -11,7 +11,7 @@ import { Card } from "@/components/ui/Card";
 import { TextField } from "@/components/ui/TextField";
 import { DEFAULT_CLEARANCE_MARGIN_MM, compareSetups } from "@/lib/fitment";
 import { bothUnits, marginText, signedMm } from "@/lib/garage/format";
-import { workspaceHref } from "@/lib/garage/links";
+import { vehicleWorkspaceUrl } from "@/lib/garage/links";
 import { setupQuery, urlNumber } from "@/lib/setup/url";
 import type { VehicleDetail } from "@/lib/garage/types";
 import { marginField } from "@/lib/garage/schema";
@@ -109,7 +109,7 @@ export function PlannedPanel({ detail, initialPlanned }: { detail: VehicleDetail
               )}
               {planned.success && (
                 <div className="no-print flex flex-wrap gap-2">
-                  <Link href={workspaceHref(v.currentSetup, planned.data, v)} className={buttonClass("secondary")} data-testid="open-workspace">
+                  <Link href={vehicleWorkspaceUrl(v.currentSetup, planned.data, v)} className={buttonClass("secondary")} data-testid="open-workspace">
                     Open current vs planned in the workspace
                   </Link>
                   <Link href={`/garage/${v.id}/checklist?${plannedKey}${margin.success && margin.data !== v.clearanceMarginMm ? `&m=${urlNumber(margin.data)}` : ""}`} className={buttonClass("primary")}>Install checklist</Link>

@@ -21,7 +21,7 @@ import { type FinderResult, type FitmentMatch, formatLength, inToMm } from "@/li
 import { bothUnits } from "@/lib/garage/format";
 import { FINDER_LABEL, type FinderGoalsForm, finderGoalsSchema, finderPlan } from "@/lib/garage/finderGoals";
 import type { FinderJob, FinderReply } from "@/lib/garage/finderJob";
-import { workspaceHref } from "@/lib/garage/links";
+import { vehicleWorkspaceUrl } from "@/lib/garage/links";
 import { setupQuery } from "@/lib/setup/url";
 import type { Vehicle, VehicleClearance } from "@/lib/garage/types";
 import { ExcludedList } from "./ExcludedList";
@@ -191,7 +191,7 @@ function ResultsTable({ rows, vehicle }: { rows: FitmentMatch[]; vehicle: Vehicl
           const s = candidateSetup(c.row.original);
           return (
             <span className="flex flex-col gap-1">
-              <Link className="text-ember-700 underline" href={workspaceHref(vehicle.currentSetup, s, vehicle)} data-testid="candidate-workspace">
+              <Link className="text-ember-700 underline" href={vehicleWorkspaceUrl(vehicle.currentSetup, s, vehicle)} data-testid="candidate-workspace">
                 Workspace
               </Link>
               <Link className="text-ember-700 underline" href={`/garage/${vehicle.id}?${setupQuery("p", s)}`}>
