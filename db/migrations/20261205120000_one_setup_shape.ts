@@ -37,49 +37,44 @@ const renameStagedKey = (knex: Knex, from: string, to: string) =>
     [from, from, to, from],
   );
 
+type SetupColumns = [tire: string, diameter: string, width: string, offset: string];
+
+/** Moves a table's four setup columns into `current_setup`. */
+async function packColumns(knex: Knex, table: string, [tire, diameter, width, offset]: SetupColumns) {
+  await knex.schema.alterTable(table, (t) => t.jsonb("current_setup").nullable());
+  await knex.raw(`update ${table} set current_setup = ${SETUP_OF(tire, diameter, width, offset)}`);
+  await knex.raw(`alter table ${table} alter column current_setup set not null`);
+  await knex.schema.alterTable(table, (t) => t.dropColumns(tire, diameter, width, offset));
+}
+
 export async function up(knex: Knex): Promise<void> {
   await knex.raw("alter table catalog_items rename column wheel_backspacing_ref to wheel_backspacing_reference");
   await knex.raw("alter table catalog_items rename constraint catalog_backspacing_ref_known to catalog_backspacing_reference_known");
   await renameStagedKey(knex, "wheel_backspacing_ref", "wheel_backspacing_reference");
 
-  await knex.schema.alterTable("customer_vehicles", (t) => t.jsonb("current_setup").nullable());
-  await knex.raw(`update customer_vehicles set current_setup = ${SETUP_OF("tire_size", "wheel_diameter_in", "wheel_width_in", "wheel_offset_mm")}`);
-  await knex.raw("alter table customer_vehicles alter column current_setup set not null");
-  await knex.schema.alterTable("customer_vehicles", (t) => t.dropColumns("tire_size", "wheel_diameter_in", "wheel_width_in", "wheel_offset_mm"));
+  await packColumns(knex, "customer_vehicles", ["tire_size", "wheel_diameter_in", "wheel_width_in", "wheel_offset_mm"]);
+  await packColumns(knex, "quotes", ["current_tire", "current_wheel_diameter_in", "current_wheel_width_in", "current_wheel_offset_mm"]);
+}
 
-  await knex.schema.alterTable("quotes", (t) => t.jsonb("current_setup").nullable());
-  await knex.raw(`update quotes set current_setup = ${SETUP_OF("current_tire", "current_wheel_diameter_in", "current_wheel_width_in", "current_wheel_offset_mm")}`);
-  await knex.raw("alter table quotes alter column current_setup set not null");
-  await knex.schema.alterTable("quotes", (t) => t.dropColumns("current_tire", "current_wheel_diameter_in", "current_wheel_width_in", "current_wheel_offset_mm"));
+/** Puts the four columns of a setup back, filled from `current_setup`, and drops it. */
+async function restoreColumns(knex: Knex, table: string, [tire, diameter, width, offset]: SetupColumns) {
+  await knex.schema.alterTable(table, (t) => {
+    t.text(tire).nullable();
+    t.double(diameter).nullable();
+    t.double(width).nullable();
+    t.double(offset).nullable();
+  });
+  await knex.raw(
+    `update ${table} set ${tire} = current_setup->>'tire', ${diameter} = (current_setup->>'wheelDiameterIn')::double precision,
+       ${width} = (current_setup->>'wheelWidthIn')::double precision, ${offset} = ${OFFSET_OF("current_setup")}`,
+  );
+  for (const c of [tire, diameter, width, offset]) await knex.raw(`alter table ${table} alter column ${c} set not null`);
+  await knex.schema.alterTable(table, (t) => t.dropColumn("current_setup"));
 }
 
 export async function down(knex: Knex): Promise<void> {
-  await knex.schema.alterTable("quotes", (t) => {
-    t.text("current_tire").nullable();
-    t.double("current_wheel_diameter_in").nullable();
-    t.double("current_wheel_width_in").nullable();
-    t.double("current_wheel_offset_mm").nullable();
-  });
-  await knex.raw(
-    `update quotes set current_tire = current_setup->>'tire', current_wheel_diameter_in = (current_setup->>'wheelDiameterIn')::double precision,
-       current_wheel_width_in = (current_setup->>'wheelWidthIn')::double precision, current_wheel_offset_mm = ${OFFSET_OF("current_setup")}`,
-  );
-  for (const c of ["current_tire", "current_wheel_diameter_in", "current_wheel_width_in", "current_wheel_offset_mm"]) await knex.raw(`alter table quotes alter column ${c} set not null`);
-  await knex.schema.alterTable("quotes", (t) => t.dropColumn("current_setup"));
-
-  await knex.schema.alterTable("customer_vehicles", (t) => {
-    t.text("tire_size").nullable();
-    t.double("wheel_diameter_in").nullable();
-    t.double("wheel_width_in").nullable();
-    t.double("wheel_offset_mm").nullable();
-  });
-  await knex.raw(
-    `update customer_vehicles set tire_size = current_setup->>'tire', wheel_diameter_in = (current_setup->>'wheelDiameterIn')::double precision,
-       wheel_width_in = (current_setup->>'wheelWidthIn')::double precision, wheel_offset_mm = ${OFFSET_OF("current_setup")}`,
-  );
-  for (const c of ["tire_size", "wheel_diameter_in", "wheel_width_in", "wheel_offset_mm"]) await knex.raw(`alter table customer_vehicles alter column ${c} set not null`);
-  await knex.schema.alterTable("customer_vehicles", (t) => t.dropColumn("current_setup"));
-
+  await restoreColumns(knex, "quotes", ["current_tire", "current_wheel_diameter_in", "current_wheel_width_in", "current_wheel_offset_mm"]);
+  await restoreColumns(knex, "customer_vehicles", ["tire_size", "wheel_diameter_in", "wheel_width_in", "wheel_offset_mm"]);
   await renameStagedKey(knex, "wheel_backspacing_reference", "wheel_backspacing_ref");
   await knex.raw("alter table catalog_items rename constraint catalog_backspacing_reference_known to catalog_backspacing_ref_known");
   await knex.raw("alter table catalog_items rename column wheel_backspacing_reference to wheel_backspacing_ref");

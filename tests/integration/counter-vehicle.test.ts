@@ -22,11 +22,11 @@ afterAll(async () => {
   await appDb.destroy();
 });
 
-const customers = await import("@/app/api/shop/customers/route");
-const customerById = (await import("@/app/api/shop/customers/[id]/route")).GET;
 const candidates = (await import("@/app/api/shop/fitment/candidates/route")).POST;
 const quotes = await import("@/app/api/shop/quotes/route");
 const quoteById = await import("@/app/api/shop/quotes/[id]/route");
+const customers = await import("@/app/api/shop/customers/route");
+const customerById = (await import("@/app/api/shop/customers/[id]/route")).GET;
 
 /** Runs the migrations up to (not including) this change. */
 async function migrateToBefore(name: string) {
