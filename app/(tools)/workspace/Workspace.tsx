@@ -16,7 +16,7 @@ import { decodeComparison, workspaceParam, workspaceUrl } from "@/lib/comparison
 import { type LinkProblem, problemText } from "@/lib/setup/url";
 import type { WorkspaceVehicle } from "@/lib/garage/types";
 import { CurrentInputContext } from "./currentInput";
-import { SetupFields } from "./SetupFields";
+import { SetupDraftFields } from "./SetupDraftFields";
 import { VehicleFields } from "./VehicleFields";
 
 // Only members with vehicles load the garage panel (and the prediction code with it).
@@ -217,8 +217,8 @@ export function Workspace({
         </div>
       )}
       <div className="grid gap-4 md:grid-cols-2">
-        <SetupFields {...setupProps("current")} />
-        <SetupFields {...setupProps("planned")} />
+        <SetupDraftFields {...setupProps("current")} />
+        <SetupDraftFields {...setupProps("planned")} />
       </div>
       <VehicleFields draft={s.draft.vehicle} defaults={defaultsText} errors={s.errors} prefs={prefs} onChange={(vehicle) => apply({ ...s.draft, vehicle })} onCommit={commit} />
       {garage && garage.vehicles.length > 0 && (
