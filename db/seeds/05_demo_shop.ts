@@ -2,6 +2,8 @@ import type { Knex } from "knex";
 import { parseCatalogCsv } from "../../lib/shop/catalog/csv";
 import { buildQuoteDocument } from "../../lib/shop/quotes/document";
 import { summarize } from "../../lib/shop/quotes/fitment";
+import { counterVehicleForEngine } from "../../lib/shop/customers/schema";
+import type { Setup } from "../../lib/setup/model";
 import { computeTotals } from "../../lib/shop/quotes/totals";
 import { hashToken, randomToken } from "../../lib/platform/tokens";
 import { DEMO_SHOP, DEMO_USERS } from "./01_demo_accounts";
@@ -28,7 +30,7 @@ export const DEMO_QUOTES = {
   expired: "d0000000-0000-4000-8000-000000000005",
 } as const;
 
-const H = "kind,sku,description,price,qty_on_hand,tire_size,wheel_diameter_in,wheel_width_in,wheel_offset_mm,wheel_backspacing_in,backspacing_from,bolt_pattern,center_bore_mm,beadlock,service_type,service_unit";
+const H = "kind,sku,description,price,qty_on_hand,tire_size,wheel_diameter_in,wheel_width_in,wheel_offset_mm,wheel_backspacing_in,wheel_backspacing_reference,bolt_pattern,center_bore_mm,beadlock,service_type,service_unit";
 const CATALOG = [
   H,
   "tire,HB-AT-2857017,Hogback AT all-terrain LT285/70R17 load range E,312.00,16,LT285/70R17 121/118Q E,,,,,,,,,,",
@@ -54,7 +56,8 @@ const CATALOG = [
 ].join("\n");
 
 // The hub bore is invented for the demo: the 106.1 mm wheels sit on it hub-centric, the 108 mm ones need rings.
-const VEHICLE = { description: "Half-ton pickup, stock height", boltPattern: "6x5.5", hubBoreMm: 106.1, tireSize: "265/70R17 115T", wheel: { diameterIn: 17, widthIn: 8, offsetMm: 25 }, axleRatio: 3.73 };
+const CURRENT_SETUP: Setup = { tire: "265/70R17 115T", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 }, spacerMm: 0 };
+const VEHICLE = counterVehicleForEngine({ description: "Half-ton pickup, stock height", boltPattern: "6x5.5", hubBoreMm: 106.1, currentSetup: CURRENT_SETUP, axleRatio: 3.73 });
 
 export async function seed(knex: Knex): Promise<void> {
   await knex("shops")
@@ -88,11 +91,8 @@ export async function seed(knex: Knex): Promise<void> {
       customer_id: DEMO_CUSTOMERS[0].id,
       description: VEHICLE.description,
       bolt_pattern: VEHICLE.boltPattern,
-      tire_size: VEHICLE.tireSize,
-      wheel_diameter_in: 17,
-      wheel_width_in: 8,
-      wheel_offset_mm: 25,
-      axle_ratio: 3.73,
+      current_setup: JSON.stringify(CURRENT_SETUP),
+      axle_ratio: VEHICLE.axleRatio,
       hub_bore_mm: VEHICLE.hubBoreMm,
     })
     .onConflict("id")
@@ -149,11 +149,8 @@ export async function seed(knex: Knex): Promise<void> {
         status,
         vehicle_description: VEHICLE.description,
         bolt_pattern: VEHICLE.boltPattern,
-        current_tire: VEHICLE.tireSize,
-        current_wheel_diameter_in: 17,
-        current_wheel_width_in: 8,
-        current_wheel_offset_mm: 25,
-        axle_ratio: 3.73,
+        current_setup: JSON.stringify(CURRENT_SETUP),
+        axle_ratio: VEHICLE.axleRatio,
         hub_bore_mm: VEHICLE.hubBoreMm,
         tire_item_id: tire.id,
         wheel_item_id: wheel.id,

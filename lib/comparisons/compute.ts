@@ -7,6 +7,7 @@
  * Speed rows come once per unit system at round speeds of that unit (see speedometer.ts).
  */
 import {
+  DEFAULT_FLANGE_IN,
   KM_PER_MILE,
   backspacingFromOffset,
   compareSetups,
@@ -15,7 +16,6 @@ import {
   kgToLb,
   loadIndexKg,
   loadRangeInfo,
-  parseTireSize,
   plyRating,
   setupGeometry,
   speedSymbolKmh,
@@ -23,7 +23,8 @@ import {
   type SetupComparison,
   type SetupGeometry,
 } from "@/lib/fitment";
-import { type ComparisonInput, type SetupInputValues, DEFAULT_FLANGE_ALLOWANCE_IN, positionOffsetMm } from "./model";
+import { type Setup, toEngineSetup } from "@/lib/setup/model";
+import type { ComparisonInput } from "./model";
 import {
   type EnteredSpeed,
   type SpeedSystem,
@@ -160,10 +161,10 @@ export interface ComparisonResult {
   engine: SetupComparison;
 }
 
-function figures(s: SetupInputValues, g: SetupGeometry): SetupFigures {
+function figures(s: Setup, g: SetupGeometry): SetupFigures {
   const t = g.tire;
   const dims = tireDimensions(t, { rimWidthIn: s.wheelWidthIn });
-  const flange = s.position.mode === "backspacing" ? s.position.flangeIn : DEFAULT_FLANGE_ALLOWANCE_IN;
+  const flange = s.position.mode === "backspacing" ? s.position.flangeIn : DEFAULT_FLANGE_IN;
   // Backspacing of the wheel itself (a spacer moves the wheel, not its backspacing).
   const bsBead = backspacingFromOffset({ widthIn: s.wheelWidthIn, offsetMm: g.wheel.offsetMm, measuredFrom: "bead-seat" });
   const bsFlange = backspacingFromOffset({ widthIn: s.wheelWidthIn, offsetMm: g.wheel.offsetMm, measuredFrom: "flange", flangeIn: flange });
@@ -238,12 +239,8 @@ function crawlOf(first: number | null, low: number | null, axle: number, suggest
   };
 }
 
-function geometryOf(s: SetupInputValues): SetupGeometry {
-  return setupGeometry({
-    tire: parseTireSize(s.tire),
-    wheel: { diameterIn: s.wheelDiameterIn, widthIn: s.wheelWidthIn, offsetMm: positionOffsetMm(s.position, s.wheelWidthIn) },
-    spacerMm: s.spacerMm,
-  });
+function geometryOf(s: Setup): SetupGeometry {
+  return setupGeometry(toEngineSetup(s));
 }
 
 /**

@@ -1,27 +1,21 @@
 /**
  * What people type into the comparison form (text per field) ⇄ the validated comparison input.
- * Lengths are read with the engine's `parseLength`, so `4-3/4`, `4¾`, `4 3/4 in`, `4.75"` and
- * `120.65 mm` all work; a bare number takes the unit the field's label states (offset and spacer
- * mm, wheel sizes and backspacing inches, the fender line the chosen display unit), and a
- * fraction is read only as inches: `1-1/2` in a mm field is refused with a message, not 1.5 mm.
- * Every message names the field as labelled (fields.ts), gives an example the field accepts and
- * states bounds in the field's unit.
+ * Lengths are read by lib/setup's reader (the engine's `parseLength`), so `4-3/4`, `4¾`,
+ * `4 3/4 in`, `4.75"` and `120.65 mm` all work; a bare number takes the unit the field's label
+ * states (offset and spacer mm, wheel sizes and backspacing inches, the fender line the chosen
+ * display unit), and a fraction is read only as inches: `1-1/2` in a mm field is refused with a
+ * message, not 1.5 mm. Each setup is checked by `checkSetup` with its messages; the vehicle's
+ * messages name the field as labelled (fields.ts), give an example the field accepts and state
+ * bounds in the field's unit.
  */
-import { KM_PER_MILE, MM_PER_IN, formatLength, inToMm, mmToIn, parseLength, parseTireSize } from "@/lib/fitment";
-import {
-  SETUP_FIELD_EXAMPLE as EX,
-  SETUP_FIELD_LABEL,
-  type SetupFieldPath,
-  type VehicleFieldPath,
-  boundText,
-  fenderUnit,
-  inputFieldLabel,
-  lengthMessages,
-  speedUnit,
-  vehicleFieldLabel,
-} from "./fields";
+import { DEFAULT_FLANGE_IN, KM_PER_MILE, MM_PER_IN, formatLength, inToMm, mmToIn, parseTireSize } from "@/lib/fitment";
+import { checkSetup } from "@/lib/setup/check";
+import { boundText, lengthMessages } from "@/lib/setup/messages";
+import type { BackspacingReference, Setup, SetupForm } from "@/lib/setup/model";
+import { readLength, tidy } from "@/lib/setup/read";
+import { type VehicleFieldPath, fenderUnit, inputFieldLabel, speedUnit, vehicleFieldLabel } from "./fields";
 import type { DisplayPrefs } from "./format";
-import { type ComparisonInput, type SetupInputValues, type BackspacingReferenceValue, DEFAULT_FLANGE_ALLOWANCE_IN, LIMITS, checkComparison } from "./model";
+import { type ComparisonInput, VEHICLE_LIMITS, checkComparison } from "./model";
 
 export interface SetupDraft {
   tire: string;
@@ -30,7 +24,7 @@ export interface SetupDraft {
   mode: "offset" | "backspacing";
   offset: string;
   backspacing: string;
-  reference: BackspacingReferenceValue;
+  reference: BackspacingReference;
   flange: string;
   spacer: string;
 }
@@ -63,10 +57,6 @@ export interface Draft {
 /** Field errors keyed by the input path, e.g. `planned.position.backspacingIn`. */
 export type DraftErrors = Record<string, string>;
 
-const tidy = (v: number): number => {
-  const r = Math.round(v * 1e6) / 1e6;
-  return r === 0 ? 0 : r;
-};
 const plain = (v: number, decimals = 4): string => String(tidy(Number(v.toFixed(decimals))));
 
 /** Inches as typed text: "4.75" or "4-3/4" (sixteenths) without the unit. */
@@ -75,7 +65,7 @@ export function inchText(inches: number, prefs: DisplayPrefs): string {
   return plain(inches);
 }
 
-function setupDraft(s: SetupInputValues, prefs: DisplayPrefs): SetupDraft {
+function setupDraft(s: Setup, prefs: DisplayPrefs): SetupDraft {
   const p = s.position;
   return {
     tire: s.tire,
@@ -85,7 +75,7 @@ function setupDraft(s: SetupInputValues, prefs: DisplayPrefs): SetupDraft {
     offset: p.mode === "offset" ? plain(p.offsetMm, 2) : "",
     backspacing: p.mode === "backspacing" ? inchText(p.backspacingIn, prefs) : "",
     reference: p.mode === "backspacing" ? p.reference : "flange",
-    flange: inchText(p.mode === "backspacing" ? p.flangeIn : DEFAULT_FLANGE_ALLOWANCE_IN, prefs),
+    flange: inchText(p.mode === "backspacing" ? p.flangeIn : DEFAULT_FLANGE_IN, prefs),
     spacer: s.spacerMm === 0 ? "" : plain(s.spacerMm, 2),
   };
 }
@@ -181,22 +171,6 @@ function readNumber(text: string, unitSuffix?: RegExp): number | null {
   return Number.isFinite(v) ? tidy(v) : null;
 }
 
-/** A length in mm, or why not: "fraction" when a fraction was typed where mm is the unit. */
-function readLength(text: string, unit: "in" | "mm"): number | "fraction" | null {
-  const t = text.replace(/\u2212/g, "-");
-  try {
-    return tidy(parseLength(t, unit));
-  } catch {
-    if (unit !== "mm") return null;
-    try {
-      parseLength(t, "in");
-      return "fraction";
-    } catch {
-      return null;
-    }
-  }
-}
-
 type Bounds = { min: number; max: number };
 const inBounds = (v: number, b: Bounds) => v >= b.min && v <= b.max;
 const lower = (s: string) => `${s[0]?.toLowerCase() ?? ""}${s.slice(1)}`;
@@ -235,35 +209,26 @@ export function followTire(d: SetupDraft, tire: string): SetupDraft {
   return { ...d, tire, diameter: next !== null && followed ? String(next) : d.diameter };
 }
 
-function readSetup(side: "current" | "planned", d: SetupDraft, errors: DraftErrors): unknown {
-  const at = (path: SetupFieldPath) => (message: string) => {
-    errors[`${side}.${path}`] = message;
-    return NaN;
+/** A setup's text as lib/setup's form shape: only the fields of the chosen mode are read. */
+function setupForm(d: SetupDraft): SetupForm {
+  return {
+    tire: d.tire,
+    wheelDiameterIn: d.diameter,
+    wheelWidthIn: d.width,
+    position: d.mode === "offset" ? { mode: "offset", offsetMm: d.offset } : { mode: "backspacing", backspacingIn: d.backspacing, reference: d.reference, flangeIn: d.flange },
+    spacerMm: d.spacer,
   };
-  const L = SETUP_FIELD_LABEL;
-  const diameter = lengthField(d.diameter, "in", LIMITS.wheelDiameterIn, L.wheelDiameterIn, EX.wheelDiameterIn, at("wheelDiameterIn"));
-  const width = lengthField(d.width, "in", LIMITS.wheelWidthIn, L.wheelWidthIn, EX.wheelWidthIn, at("wheelWidthIn"));
-  let position: unknown;
-  if (d.mode === "offset") {
-    position = { mode: "offset", offsetMm: lengthField(d.offset, "mm", LIMITS.offsetMm, L["position.offsetMm"], EX["position.offsetMm"], at("position.offsetMm")) };
-  } else {
-    position = {
-      mode: "backspacing",
-      backspacingIn: lengthField(d.backspacing, "in", LIMITS.backspacingIn, L["position.backspacingIn"], EX["position.backspacingIn"], at("position.backspacingIn")),
-      reference: d.reference,
-      flangeIn: lengthField(d.flange, "in", LIMITS.flangeIn, L["position.flangeIn"], EX["position.flangeIn"], at("position.flangeIn")),
-    };
+}
+
+/** One setup's text through `checkSetup`: the setup, or null with each field's message in `errors`. */
+function readSetup(side: "current" | "planned", d: SetupDraft, errors: DraftErrors): Setup | null {
+  const r = checkSetup(setupForm(d), [side], { text: true });
+  if (r.ok) return r.value;
+  for (const i of r.issues) {
+    const key = i.path.join(".");
+    if (!(key in errors)) errors[key] = i.message;
   }
-  if (d.tire.trim() === "") at("tire")(`${L.tire}: enter a tire size, e.g. ${EX.tire}.`);
-  else {
-    try {
-      parseTireSize(d.tire);
-    } catch (e) {
-      at("tire")(`${L.tire}: ${e instanceof Error ? e.message : "not a tire size, e.g. 265/70R17."}`);
-    }
-  }
-  const spacer = d.spacer.trim() === "" ? 0 : lengthField(d.spacer, "mm", LIMITS.spacerMm, L.spacerMm, EX.spacerMm, at("spacerMm"));
-  return { tire: d.tire, wheelDiameterIn: diameter, wheelWidthIn: width, position, spacerMm: spacer };
+  return null;
 }
 
 /**
@@ -284,13 +249,13 @@ export function readDraft(draft: Draft, prefs: DisplayPrefs): { input: Compariso
     if (n === null) return at(path)(`${label(path)}: ${unreadable}`);
     return inBounds(n, b) ? n : at(path)(`${label(path)}: must be between ${b.min} and ${b.max}${unit}, e.g. ${example}.`);
   };
-  const kpi = v.kpi.trim() === "" ? null : plainNumber(v.kpi, "kingpinInclinationDeg", LIMITS.kingpinInclinationDeg, "°", "enter degrees, e.g. 8, or leave it empty.", "8", /°|deg$/i);
+  const kpi = v.kpi.trim() === "" ? null : plainNumber(v.kpi, "kingpinInclinationDeg", VEHICLE_LIMITS.kingpinInclinationDeg, "°", "enter degrees, e.g. 8, or leave it empty.", "8", /°|deg$/i);
   // "3.73:1" is a common way to write a ratio.
   const ratioText = (t: string) => (/^\s*\d+(\.\d+)?\s*:\s*1\s*$/.test(t) ? (t.split(":")[0] ?? "") : t);
-  const axle = plainNumber(ratioText(v.axle), "axleRatio", LIMITS.axleRatio, "", "enter a ratio, e.g. 3.73 (or 3.73:1).", "3.73");
-  const top = plainNumber(v.top, "transmissionRatio", LIMITS.transmissionRatio, "", "enter a ratio, e.g. 1.00 (direct) or 0.70 (overdrive).", "1.00");
-  const first = v.first.trim() === "" ? null : plainNumber(ratioText(v.first), "firstGearRatio", LIMITS.firstGearRatio, "", "enter a ratio, e.g. 4.03 (or 4.03:1), or leave it empty.", "4.03");
-  const low = v.low.trim() === "" ? null : plainNumber(ratioText(v.low), "transferLowRatio", LIMITS.transferLowRatio, "", "enter a ratio, e.g. 2.72 (or 2.72:1), or leave it empty.", "2.72");
+  const axle = plainNumber(ratioText(v.axle), "axleRatio", VEHICLE_LIMITS.axleRatio, "", "enter a ratio, e.g. 3.73 (or 3.73:1).", "3.73");
+  const top = plainNumber(v.top, "transmissionRatio", VEHICLE_LIMITS.transmissionRatio, "", "enter a ratio, e.g. 1.00 (direct) or 0.70 (overdrive).", "1.00");
+  const first = v.first.trim() === "" ? null : plainNumber(ratioText(v.first), "firstGearRatio", VEHICLE_LIMITS.firstGearRatio, "", "enter a ratio, e.g. 4.03 (or 4.03:1), or leave it empty.", "4.03");
+  const low = v.low.trim() === "" ? null : plainNumber(ratioText(v.low), "transferLowRatio", VEHICLE_LIMITS.transferLowRatio, "", "enter a ratio, e.g. 2.72 (or 2.72:1), or leave it empty.", "2.72");
 
   const sUnit = speedUnit(prefs);
   const metric = prefs.units === "metric";
@@ -301,12 +266,12 @@ export function readDraft(draft: Draft, prefs: DisplayPrefs): { input: Compariso
   let cruise: number[];
   if (exact && exact.cruise === v.cruise) cruise = exact.cruiseMph;
   else if (parts.length === 0 || speeds.some((x) => x === null)) cruise = [at("cruiseSpeedsMph")(`${label("cruiseSpeedsMph")}: enter one to six speeds in ${sUnit}, separated by commas, e.g. ${speedExample}.`)];
-  else if (parts.length > LIMITS.cruiseCount.max) cruise = [at("cruiseSpeedsMph")(`${label("cruiseSpeedsMph")}: enter at most six speeds, e.g. ${speedExample}.`)];
+  else if (parts.length > VEHICLE_LIMITS.cruiseCount.max) cruise = [at("cruiseSpeedsMph")(`${label("cruiseSpeedsMph")}: enter at most six speeds, e.g. ${speedExample}.`)];
   else {
     cruise = speeds.map((x) => tidy(metric ? (x as number) / KM_PER_MILE : (x as number)));
-    if (!cruise.every((mph) => inBounds(mph, LIMITS.cruiseMph))) {
-      const min = metric ? boundText(LIMITS.cruiseMph.min * KM_PER_MILE, "min", 1) : String(LIMITS.cruiseMph.min);
-      const max = metric ? boundText(LIMITS.cruiseMph.max * KM_PER_MILE, "max", 1) : String(LIMITS.cruiseMph.max);
+    if (!cruise.every((mph) => inBounds(mph, VEHICLE_LIMITS.cruiseMph))) {
+      const min = metric ? boundText(VEHICLE_LIMITS.cruiseMph.min * KM_PER_MILE, "min", 1) : String(VEHICLE_LIMITS.cruiseMph.min);
+      const max = metric ? boundText(VEHICLE_LIMITS.cruiseMph.max * KM_PER_MILE, "max", 1) : String(VEHICLE_LIMITS.cruiseMph.max);
       cruise = [at("cruiseSpeedsMph")(`${label("cruiseSpeedsMph")}: each speed must be between ${min} and ${max} ${sUnit}, e.g. ${speedExample}.`)];
     }
   }
@@ -317,7 +282,7 @@ export function readDraft(draft: Draft, prefs: DisplayPrefs): { input: Compariso
   } else if (v.fender.trim() !== "") {
     const unit = fenderUnit(prefs);
     const example = unit === "mm" ? "140" : "5-1/2 or 5.5";
-    const b = LIMITS.fenderLineMm;
+    const b = VEHICLE_LIMITS.fenderLineMm;
     // Bounds in the unit the field is shown in (the limit itself is in mm).
     const shown = unit === "mm" ? b : { min: b.min / MM_PER_IN, max: b.max / MM_PER_IN };
     const value = lengthField(v.fender, unit, { min: -Infinity, max: Infinity }, label("fenderLineMm"), example, at("fenderLineMm"));
@@ -326,17 +291,16 @@ export function readDraft(draft: Draft, prefs: DisplayPrefs): { input: Compariso
     else if (inBounds(mm, b)) fender = mm;
     else fender = at("fenderLineMm")(lengthMessages(label("fenderLineMm"), unit, example).bounds(boundText(shown.min, "min", 2), boundText(shown.max, "max", 2)));
   }
-  const candidate = {
-    current: readSetup("current", draft.current, errors),
-    planned: readSetup("planned", draft.planned, errors),
-    vehicle: { kingpinInclinationDeg: kpi, axleRatio: axle, transmissionRatio: top, cruiseSpeedsMph: cruise, fenderLineMm: fender, firstGearRatio: first, transferLowRatio: low },
-  };
-  const checked = checkComparison(candidate);
+  const current = readSetup("current", draft.current, errors);
+  const planned = readSetup("planned", draft.planned, errors);
+  const vehicle = { kingpinInclinationDeg: kpi, axleRatio: axle, transmissionRatio: top, cruiseSpeedsMph: cruise, fenderLineMm: fender, firstGearRatio: first, transferLowRatio: low };
+  const checked = checkComparison({ current, planned, vehicle });
   if (!checked.ok) {
-    // Left: what only the whole input knows (the wheel diameter against the tire, a position
-    // outside the wheel), named by the field's label.
+    // Left: what only the whole input knows, named by the field's label (the setups' own
+    // messages are in already).
     for (const issue of checked.issues) {
       const key = issue.path.join(".");
+      if (key.startsWith("current") || key.startsWith("planned")) continue;
       const field = key.startsWith("vehicle.cruiseSpeedsMph") ? "vehicle.cruiseSpeedsMph" : key;
       if (field in errors) continue;
       const name = inputFieldLabel(field, prefs);

@@ -1,7 +1,8 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { type ComparisonInput, DEFAULT_INPUT, comparisonInputSchema } from "./schema";
-import { decodeComparison, encodeComparison, hasComparisonParams, problemText } from "./url";
+import { problemText } from "@/lib/setup/url";
+import { decodeComparison, encodeComparison, hasComparisonParams } from "./url";
 
 describe("comparison query string", () => {
   it("is compact and readable", () => {
@@ -128,6 +129,24 @@ describe("comparison query string", () => {
       { numRuns: 500 },
     );
     expect(decodeComparison({ ct: ["265/75R17", "x"], junk: undefined }).input.current.tire).toBe("265/75R17");
+  });
+
+  it("reads backspacing and wheel sizes written with fractions, as the form takes them (4-1/2 = 4½ = 4.5 in)", () => {
+    const base = "ct=265/70R17&cd=17&cw=8&co=25&pt=35x12.50R17LT&pd=17";
+    for (const [w, b] of [["9", "4-1/2"], ["9", "4+1/2"], ["9", "4%C2%BD"], ["9", "4.5"], ["8-1/2+in", "4-1/2"]]) {
+      const { input, problems } = decodeComparison(`${base}&pw=${w}&pb=${b}&pr=flange`);
+      expect(problems, `${w} ${b}`).toEqual([]);
+      expect(input.planned.position).toEqual({ mode: "backspacing", backspacingIn: 4.5, reference: "flange", flangeIn: 0.5 });
+      expect(input.planned.wheelWidthIn).toBe(w === "9" ? 9 : 8.5);
+    }
+    // The link still writes decimals.
+    expect(encodeComparison(decodeComparison(`${base}&pw=9&pb=4-1/2&pr=flange`).input)).toContain("pb=4.5&pr=flange");
+  });
+
+  it("keeps reading the stored spelling bead-seat for the reference in old links", () => {
+    const { input, problems } = decodeComparison("pt=35x12.50R17LT&pd=17&pw=9&pb=4.5&pr=bead-seat");
+    expect(problems).toEqual([]);
+    expect(input.planned.position).toMatchObject({ reference: "bead-seat" });
   });
 
   it("tells a comparison link from a bare page", () => {

@@ -94,6 +94,7 @@ export {
 } from "./dimensions";
 export {
   DEFAULT_FLANGE_IN,
+  FLANGE_ALLOWANCE_LIMITS_IN,
   OFFSET_MARGIN_MM,
   offsetFromBackspacing,
   backspacingFromOffset,

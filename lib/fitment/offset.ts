@@ -22,6 +22,8 @@ export type BackspacingReference = "flange" | "bead-seat";
 
 /** Default flange allowance, inches (common practice, no source). */
 export const DEFAULT_FLANGE_IN = 0.5;
+/** Flange allowances accepted, inches (a flange lip beyond 2 in is a typing error; common practice, no source). */
+export const FLANGE_ALLOWANCE_LIMITS_IN = { min: 0, max: 2 } as const;
 /**
  * How far the mounting face may sit beyond either bead seat, mm (3 in; common practice, no
  * source). An offset beyond W/2 + this margin is rejected as a typing error.
@@ -61,7 +63,7 @@ export function checkOffsetMm(offsetMm: unknown, widthIn: number, field = "offse
 }
 
 function checkFlange(flangeIn: unknown): number {
-  return requireNumber("flangeIn", flangeIn, 0, 2, "0.5", "in");
+  return requireNumber("flangeIn", flangeIn, FLANGE_ALLOWANCE_LIMITS_IN.min, FLANGE_ALLOWANCE_LIMITS_IN.max, "0.5", "in");
 }
 
 function checkReference(measuredFrom: unknown): BackspacingReference {

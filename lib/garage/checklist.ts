@@ -19,7 +19,7 @@ import { REGEAR_WARN_PCT } from "@/lib/comparisons/assess/thresholds";
 import { findingsOf } from "@/lib/comparisons/assess/vocabulary";
 import { bothUnits } from "@/lib/garage/format";
 import type { Vehicle, VehicleClearance } from "@/lib/garage/types";
-import { type SetupValues, toEngineSetup } from "@/lib/setup/schema";
+import { type Setup, toEngineSetup } from "@/lib/setup/model";
 import { predictPoints } from "@/lib/garage/predict";
 
 export type ChecklistGroup = "fit" | "drivetrain" | "wheels" | "tires";
@@ -51,7 +51,7 @@ const DIRECTION_FIX: Record<VehicleClearance["direction"], string> = {
   "fore-aft": "trim the bumper or body mount, or limit steering travel with the stops",
 };
 
-export function buildChecklist(input: { vehicle: Vehicle; clearances: VehicleClearance[]; planned: SetupValues; marginMm: number }): Checklist {
+export function buildChecklist(input: { vehicle: Vehicle; clearances: VehicleClearance[]; planned: Setup; marginMm: number }): Checklist {
   const { vehicle: v, clearances, planned, marginMm } = input;
   const pla = toEngineSetup(planned);
   const cmp = compareSetups(toEngineSetup(v.currentSetup), pla, {

@@ -2,9 +2,9 @@ import "server-only";
 import type { Knex } from "knex";
 import type { ComparisonInput } from "@/lib/comparisons/schema";
 import { type Checklist, buildChecklist } from "@/lib/garage/checklist";
-import { setupQuery } from "@/lib/garage/links";
+import { setupQuery } from "@/lib/setup/url";
 import type { VehicleDetail } from "@/lib/garage/types";
-import type { SetupValues } from "@/lib/setup/schema";
+import type { Setup } from "@/lib/setup/model";
 import { findComparison } from "../comparisons/queries";
 import { findChecklist, getVehicleDetail, saveChecklist } from "./queries";
 import { bindAppDb } from "@/lib/platform/db/bind";
@@ -19,14 +19,14 @@ import { NotFoundError } from "@/lib/platform/errors";
  */
 export interface ChecklistSource {
   comparisonId?: string | null;
-  planned?: SetupValues | null;
+  planned?: Setup | null;
   marginMm?: number | null;
 }
 
 export interface ResolvedChecklist {
   ok: true;
   detail: VehicleDetail;
-  planned: SetupValues;
+  planned: Setup;
   marginMm: number;
   comparison: { id: string; name: string; input: ComparisonInput } | null;
   checklist: Checklist;

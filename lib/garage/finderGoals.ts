@@ -8,7 +8,8 @@ import { z } from "zod";
 import { type FitmentConstraints, DEFAULT_WHEEL_WIDTHS_IN, setupGeometry } from "@/lib/fitment";
 import type { VehicleClearance, Vehicle } from "@/lib/garage/types";
 import { marginField } from "@/lib/garage/schema";
-import { optionalLengthField, toEngineSetup } from "@/lib/setup/schema";
+import { SETUP_LIMITS, toEngineSetup } from "@/lib/setup/model";
+import { optionalLengthField } from "@/lib/setup/schema";
 import { measuredPoints, steeringAxisOf } from "@/lib/garage/predict";
 
 /** The goal fields as the finder form labels them, for the form and for every message. */
@@ -39,16 +40,17 @@ export const finderGoalsSchema = z
         if (!v) return null;
         const parts = v.split(/[\s,;]+/).filter(Boolean);
         const nums = parts.map(Number);
-        if (nums.some((n) => !Number.isFinite(n) || n < 8 || n > 30)) {
-          ctx.addIssue({ code: "custom", message: `${L.wheelDiameters}: list diameters between 8 and 30 in, e.g. 17, 18.` });
+        const d = SETUP_LIMITS.wheelDiameterIn;
+        if (nums.some((n) => !Number.isFinite(n) || n < d.min || n > d.max)) {
+          ctx.addIssue({ code: "custom", message: `${L.wheelDiameters}: list diameters between ${d.min} and ${d.max} in, e.g. 17, 18.` });
           return z.NEVER;
         }
         return [...new Set(nums)];
       }),
     maxPokeMm: optionalLengthField(L.maxPokeMm, "mm", { min: -200, max: 300 }, "25 mm"),
     usePoints: z.boolean(),
-    minWidthIn: optionalLengthField(L.minWidthIn, "in", { min: 3, max: 20 }, "8"),
-    maxWidthIn: optionalLengthField(L.maxWidthIn, "in", { min: 3, max: 20 }, "10"),
+    minWidthIn: optionalLengthField(L.minWidthIn, "in", SETUP_LIMITS.wheelWidthIn, "8"),
+    maxWidthIn: optionalLengthField(L.maxWidthIn, "in", SETUP_LIMITS.wheelWidthIn, "10"),
     margin: marginField(L.margin),
   })
   .superRefine((g, ctx) => {

@@ -1,5 +1,7 @@
 /** Display helpers for the garage: every number still comes from the engine. */
 import { MM_PER_IN, formatLength, inToMm } from "@/lib/fitment";
+import { BACKSPACING_REFERENCE_LABEL } from "@/lib/setup/fields";
+import type { Setup } from "@/lib/setup/model";
 
 /** "38.1 mm (1-1/2 in)". */
 export function bothUnits(mm: number): string {
@@ -14,17 +16,11 @@ export function signedMm(mm: number): string {
 }
 
 /** A short line for a setup, e.g. "265/70R17 on 17x8, offset +25 mm". */
-export function setupLine(s: {
-  tire: string;
-  wheelDiameterIn: number;
-  wheelWidthIn: number;
-  position: { mode: "offset"; offsetMm: number } | { mode: "backspacing"; backspacingIn: number; reference: "flange" | "bead-seat"; flangeIn: number };
-  spacerMm: number;
-}): string {
+export function setupLine(s: Setup): string {
   const pos =
     s.position.mode === "offset"
       ? `offset ${s.position.offsetMm > 0 ? "+" : ""}${s.position.offsetMm} mm`
-      : `${formatLength(inToMm(s.position.backspacingIn), { unit: "in", fraction: 16 })} backspacing to the ${s.position.reference === "flange" ? "flange edge" : "bead seat"}`;
+      : `${formatLength(inToMm(s.position.backspacingIn), { unit: "in", fraction: 16 })} backspacing to the ${BACKSPACING_REFERENCE_LABEL[s.position.reference]}`;
   return `${s.tire} on ${s.wheelDiameterIn}x${s.wheelWidthIn}, ${pos}${s.spacerMm ? `, ${s.spacerMm} mm spacer` : ""}`;
 }
 

@@ -11,19 +11,19 @@ import {
   predictClearances,
   steeringAxisInboardMm,
 } from "@/lib/fitment";
-import { type SetupInputValues, toEngineSetup } from "@/lib/comparisons/model";
+import { type Setup, toEngineSetup } from "@/lib/setup/model";
 
 type Point = {
   direction: MeasuredClearance["direction"];
   distanceMm: number;
-  measuredSetup: SetupInputValues;
+  measuredSetup: Setup;
   /** Where the suspension and steering were; missing = ride height. */
   suspensionState?: MeasuredClearance["state"];
   label?: string;
 };
 
 /** What the steering axis is placed from: the vehicle's current setup and kingpin inclination. */
-export type SteeringSource = { currentSetup: SetupInputValues; kingpinInclinationDeg: number | null };
+export type SteeringSource = { currentSetup: Setup; kingpinInclinationDeg: number | null };
 
 /**
  * The steering axis at the wheel centre, mm inboard of the hub face: through the current tire's
@@ -50,7 +50,7 @@ export function measuredPoints(points: readonly Point[]): MeasuredClearance[] {
  * points turn about its steering axis; without it, the axis runs through each point's measured
  * tire centre line at 0° kingpin inclination.
  */
-export function predictPoints(points: readonly Point[], planned: SetupInputValues, marginMm: number, vehicle?: SteeringSource): ClearancePrediction[] {
+export function predictPoints(points: readonly Point[], planned: Setup, marginMm: number, vehicle?: SteeringSource): ClearancePrediction[] {
   return predictClearances(measuredPoints(points), toEngineSetup(planned), {
     marginMm,
     ...(vehicle === undefined ? {} : { steeringAxisInboardMm: steeringAxisOf(vehicle) }),

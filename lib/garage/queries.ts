@@ -5,8 +5,8 @@ import { parseBoltPattern } from "@/lib/fitment";
 import type { InstallChecklistRow, Role, VehicleClearanceRow, VehiclePhotoRow, VehicleRow } from "@/lib/platform/db/types";
 import { type PhotoStore } from "@/lib/garage/photos/s3";
 import { type ProcessedImage, extensionOf } from "@/lib/garage/photos/image";
-import type { ClearanceValues, VehicleValues } from "@/lib/garage/schema";
-import type { SetupValues } from "@/lib/setup/schema";
+import type { ClearanceValues, GarageVehicleValues } from "@/lib/garage/schema";
+import type { Setup } from "@/lib/setup/model";
 import type { Vehicle, VehicleClearance, VehicleDetail, VehiclePhoto, WorkspaceVehicle } from "@/lib/garage/types";
 import { bindAppDb } from "@/lib/platform/db/bind";
 import { NotFoundError } from "@/lib/platform/errors";
@@ -25,8 +25,8 @@ export function vehicleDto(r: VehicleRow): Vehicle {
     frontSuspension: r.front_suspension,
     boltPattern: r.bolt_pattern,
     hubBoreMm: r.hub_bore_mm,
-    stockSetup: r.stock_setup as SetupValues,
-    currentSetup: r.current_setup as SetupValues,
+    stockSetup: r.stock_setup as Setup,
+    currentSetup: r.current_setup as Setup,
     liftHeightMm: r.lift_height_mm,
     kingpinInclinationDeg: r.kingpin_inclination_deg,
     axleRatio: r.axle_ratio,
@@ -46,7 +46,7 @@ export function clearanceDto(r: VehicleClearanceRow): VehicleClearance {
     distanceMm: r.distance_mm,
     distanceText: r.distance_text,
     suspensionState: r.suspension_state,
-    measuredSetup: r.measured_setup as SetupValues,
+    measuredSetup: r.measured_setup as Setup,
     createdAt: new Date(r.created_at).toISOString(),
   };
 }
@@ -66,7 +66,7 @@ export function photoDto(r: VehiclePhotoRow): VehiclePhoto {
   };
 }
 
-function columns(v: VehicleValues) {
+function columns(v: GarageVehicleValues) {
   const bp = parseBoltPattern(v.boltPattern);
   return {
     name: v.name,
@@ -112,7 +112,7 @@ export async function workspaceVehicles(db: Knex, userId: string): Promise<Works
     clearanceMarginMm: v.clearanceMarginMm,
     clearances: points
       .filter((p) => p.vehicle_id === v.id)
-      .map((p) => ({ id: p.id, label: p.label, direction: p.direction, distanceMm: p.distance_mm, suspensionState: p.suspension_state, measuredSetup: p.measured_setup as SetupValues })),
+      .map((p) => ({ id: p.id, label: p.label, direction: p.direction, distanceMm: p.distance_mm, suspensionState: p.suspension_state, measuredSetup: p.measured_setup as Setup })),
   }));
 }
 
@@ -137,12 +137,12 @@ export async function getVehicleDetail(db: Knex, userId: string, id: string): Pr
   return { vehicle: vehicleDto(v), clearances: clearances.map(clearanceDto), photos: photos.map(photoDto) };
 }
 
-export async function createVehicle(db: Knex, userId: string, v: VehicleValues): Promise<Vehicle> {
+export async function createVehicle(db: Knex, userId: string, v: GarageVehicleValues): Promise<Vehicle> {
   const [row] = await db<VehicleRow>("vehicles").insert({ user_id: userId, ...columns(v) } as never).returning("*");
   return vehicleDto(row as VehicleRow);
 }
 
-export async function updateVehicle(db: Knex, userId: string, id: string, v: VehicleValues): Promise<Vehicle> {
+export async function updateVehicle(db: Knex, userId: string, id: string, v: GarageVehicleValues): Promise<Vehicle> {
   const [row] = await db<VehicleRow>("vehicles")
     .where({ id, user_id: userId })
     .update({ ...columns(v), updated_at: db.fn.now() } as never)
@@ -166,7 +166,7 @@ export async function deleteVehicle(db: Knex, store: PhotoStore, userId: string,
   });
 }
 
-export async function addClearance(db: Knex, vehicleId: string, c: ClearanceValues, measuredSetup: SetupValues): Promise<VehicleClearance> {
+export async function addClearance(db: Knex, vehicleId: string, c: ClearanceValues, measuredSetup: Setup): Promise<VehicleClearance> {
   const [row] = await db<VehicleClearanceRow>("vehicle_clearances")
     .insert({
       vehicle_id: vehicleId,
@@ -271,7 +271,7 @@ export async function findChecklist(db: Knex, vehicleId: string, plannedKey: str
 
 export async function saveChecklist(
   db: Knex,
-  input: { vehicleId: string; plannedKey: string; planned: SetupValues; comparisonId?: string | null; ticked: string[] },
+  input: { vehicleId: string; plannedKey: string; planned: Setup; comparisonId?: string | null; ticked: string[] },
 ): Promise<InstallChecklistRow> {
   const ticked = JSON.stringify(input.ticked);
   const [row] = await db("install_checklists")

@@ -1,10 +1,10 @@
 import { describe, expect, it } from "vitest";
-import { clearanceSchema, vehicleMarginSchema, vehicleSchema } from "./schema";
+import { clearanceSchema, vehicleMarginSchema, garageVehicleSchema } from "./schema";
 import { CUR } from "./testUtil";
 
 describe("vehicle schema", () => {
   it("normalizes the bolt pattern: 5x4.5 and 5x114.3 are one pattern", () => {
-    const a = vehicleSchema.parse({ name: "A", frontSuspension: "independent", boltPattern: "5 on 4.5", stockSetup: CUR, currentSetup: CUR });
+    const a = garageVehicleSchema.parse({ name: "A", frontSuspension: "independent", boltPattern: "5 on 4.5", stockSetup: CUR, currentSetup: CUR });
     expect(a.boltPattern).toBe("5x4.5");
     expect(a.year).toBeNull();
     expect(a.notes).toBe("");
@@ -17,18 +17,18 @@ describe("units in the garage forms: a field reads the unit its label states", (
 
   it("lift height: typed in inches, its bound stated in inches, its example accepted", () => {
     const base = { name: "A", frontSuspension: "independent", boltPattern: "6x5.5", stockSetup: CUR, currentSetup: CUR };
-    const r = vehicleSchema.safeParse({ ...base, liftHeightMm: "25" });
+    const r = garageVehicleSchema.safeParse({ ...base, liftHeightMm: "25" });
     // 500 mm / 25.4 = 19.685 in, stated inward as 19.68 in.
     expect(issue(r, "liftHeightMm")).toBe("Lift height (in): must be between 0 and 19.68 in, e.g. 2-1/2 or 2.5.");
-    expect(vehicleSchema.parse({ ...base, liftHeightMm: "2-1/2" }).liftHeightMm).toBeCloseTo(63.5, 9);
-    expect(vehicleSchema.parse({ ...base, liftHeightMm: "2½" }).liftHeightMm).toBeCloseTo(63.5, 9);
-    expect(vehicleSchema.parse({ ...base, liftHeightMm: "2.5" }).liftHeightMm).toBeCloseTo(63.5, 9);
-    expect(issue(vehicleSchema.safeParse({ ...base, liftHeightMm: "lots" }), "liftHeightMm")).toBe("Lift height (in): not a length in inches, e.g. 2-1/2 or 2.5.");
+    expect(garageVehicleSchema.parse({ ...base, liftHeightMm: "2-1/2" }).liftHeightMm).toBeCloseTo(63.5, 9);
+    expect(garageVehicleSchema.parse({ ...base, liftHeightMm: "2½" }).liftHeightMm).toBeCloseTo(63.5, 9);
+    expect(garageVehicleSchema.parse({ ...base, liftHeightMm: "2.5" }).liftHeightMm).toBeCloseTo(63.5, 9);
+    expect(issue(garageVehicleSchema.safeParse({ ...base, liftHeightMm: "lots" }), "liftHeightMm")).toBe("Lift height (in): not a length in inches, e.g. 2-1/2 or 2.5.");
   });
 
   it("names each field as the vehicle form labels it", () => {
     const base = { name: "A", frontSuspension: "independent", boltPattern: "6x5.5", stockSetup: CUR, currentSetup: CUR };
-    const r = vehicleSchema.safeParse({ ...base, year: "1800", hubBoreMm: "3/4", axleRatio: "x", transmissionRatio: "20", kingpinInclinationDeg: "40" });
+    const r = garageVehicleSchema.safeParse({ ...base, year: "1800", hubBoreMm: "3/4", axleRatio: "x", transmissionRatio: "20", kingpinInclinationDeg: "40" });
     expect(issue(r, "year")).toBe("Year: must be between 1900 and 2100, e.g. 2009.");
     expect(issue(r, "hubBoreMm")).toMatch(/^Hub bore \(mm\): “3\/4” is a fraction/);
     expect(issue(r, "axleRatio")).toBe("Axle ratio: enter a number, e.g. 3.73.");

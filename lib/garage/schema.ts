@@ -2,11 +2,12 @@
  * The garage: vehicles, measured clearances, checklists. Shared by the forms and the handlers.
  */
 import { z } from "zod";
-import { boundText } from "@/lib/comparisons/fields";
+import { VEHICLE_LIMITS } from "@/lib/comparisons/model";
 import { CLEARANCE_DISTANCE_LIMITS_MM, CLEARANCE_MARGIN_LIMITS_MM, DEFAULT_CLEARANCE_MARGIN_MM, MM_PER_IN, parseBoltPattern, parseLength } from "@/lib/fitment";
 import { FRONT_SUSPENSIONS } from "@/lib/platform/db/types";
 import { CLEARANCE_DIRECTION_LABEL, SUSPENSION_STATE_LABEL } from "@/lib/garage/labels";
-import { numberField, optionalLengthField, optionalNumberField, setupSchema } from "../setup/schema";
+import { boundText } from "@/lib/setup/messages";
+import { numberField, optionalLengthField, optionalNumberField, setupSchema } from "@/lib/setup/schema";
 
 const text = (label: string, max: number) =>
   z
@@ -81,7 +82,8 @@ export const vehicleMarginSchema = z
   .transform((v) => (v === null || v === undefined || (typeof v === "string" && v.trim() === "") ? DEFAULT_CLEARANCE_MARGIN_MM : v))
   .pipe(marginField("Clearance margin"));
 
-export const vehicleSchema = z.object({
+/** A garage vehicle as its form and the vehicles API take it (the shop counter's is lib/shop/customers/schema.ts). */
+export const garageVehicleSchema = z.object({
   name: text("a name", 80).min(1, "Give the vehicle a name (e.g. Gravel hauler)."),
   year: optionalNumberField("Year", { min: 1900, max: 2100 }, "2009", { integer: true }),
   make: optionalText("the make", 60),
@@ -94,17 +96,17 @@ export const vehicleSchema = z.object({
   currentSetup: setupSchema,
   // Typed in inches (the form's label says so), stored in mm; the bound is stated in inches.
   liftHeightMm: optionalLengthField("Lift height (in)", "in", { min: 0, max: 500 }, "2-1/2 or 2.5", "mm"),
-  kingpinInclinationDeg: optionalNumberField("Kingpin inclination (°)", { min: 0, max: 30 }, "8", { unit: "°" }),
-  axleRatio: optionalNumberField("Axle ratio", { min: 1, max: 10 }, "3.73"),
-  transmissionRatio: optionalNumberField("Top-gear ratio", { min: 0.3, max: 10 }, "0.72"),
+  kingpinInclinationDeg: optionalNumberField("Kingpin inclination (°)", VEHICLE_LIMITS.kingpinInclinationDeg, "8", { unit: "°" }),
+  axleRatio: optionalNumberField("Axle ratio", VEHICLE_LIMITS.axleRatio, "3.73"),
+  transmissionRatio: optionalNumberField("Top-gear ratio", VEHICLE_LIMITS.transmissionRatio, "0.72"),
   clearanceMarginMm: vehicleMarginSchema,
   notes: z
     .union([z.null(), text("the notes", 4000)])
     .optional()
     .transform((v) => v ?? ""),
 });
-export type VehicleFormValues = z.input<typeof vehicleSchema>;
-export type VehicleValues = z.output<typeof vehicleSchema>;
+export type GarageVehicleForm = z.input<typeof garageVehicleSchema>;
+export type GarageVehicleValues = z.output<typeof garageVehicleSchema>;
 
 export { CLEARANCE_DIRECTION_LABEL, SUSPENSION_STATE_LABEL };
 

@@ -1,6 +1,6 @@
 /** What the garage API returns (camelCase, ISO dates); shared by server and client. */
 import type { FrontSuspension } from "@/lib/platform/db/types";
-import type { SetupValues } from "@/lib/setup/schema";
+import type { Setup } from "@/lib/setup/model";
 
 export interface Vehicle {
   id: string;
@@ -12,8 +12,8 @@ export interface Vehicle {
   frontSuspension: FrontSuspension;
   boltPattern: string;
   hubBoreMm: number | null;
-  stockSetup: SetupValues;
-  currentSetup: SetupValues;
+  stockSetup: Setup;
+  currentSetup: Setup;
   liftHeightMm: number | null;
   kingpinInclinationDeg: number | null;
   axleRatio: number | null;
@@ -32,7 +32,7 @@ export interface VehicleClearance {
   distanceMm: number;
   distanceText: string;
   suspensionState: "ride-height" | "full-stuff" | "full-lock";
-  measuredSetup: SetupValues;
+  measuredSetup: Setup;
   createdAt: string;
 }
 
@@ -59,7 +59,7 @@ export interface VehicleDetail {
 export interface WorkspaceVehicle {
   id: string;
   name: string;
-  currentSetup: SetupValues;
+  currentSetup: Setup;
   kingpinInclinationDeg: number | null;
   axleRatio: number | null;
   transmissionRatio: number | null;

@@ -1,7 +1,10 @@
 import { describe, expect, it } from "vitest";
-import { type SetupValues, setupSchema } from "./schema";
+import type { Setup } from "./model";
+import { EMPTY_SETUP_FORM, setupSchema, setupToForm } from "./schema";
 
-const CUR: SetupValues = { tire: "265/70R17", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 }, spacerMm: 0 };
+const CUR: Setup = { tire: "265/70R17", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 }, spacerMm: 0 };
+const issue = (r: { success: boolean; error?: { issues: { path: PropertyKey[]; message: string }[] } }, path: string) =>
+  r.error?.issues.find((i) => i.path.join(".") === path)?.message;
 
 describe("setup schema (fractions through the engine's parseLength)", () => {
   it("reads inch fractions and mm text into the engine's units", () => {
@@ -22,10 +25,7 @@ describe("setup schema (fractions through the engine's parseLength)", () => {
   });
 });
 
-describe("units in the garage forms: a field reads the unit its label states", () => {
-  const issue = (r: { success: boolean; error?: { issues: { path: PropertyKey[]; message: string }[] } }, path: string) =>
-    r.error?.issues.find((i) => i.path.join(".") === path)?.message;
-
+describe("units in the setup fields: a field reads the unit its label states", () => {
   it("refuses a spacer of 1-1/2 (a fraction in a mm field) instead of 1.5 mm; 1-1/2 in is 38.1 mm (NIST SP 811)", () => {
     const r = setupSchema.safeParse({ ...CUR, spacerMm: "1-1/2" });
     expect(r.success).toBe(false);
@@ -38,5 +38,19 @@ describe("units in the garage forms: a field reads the unit its label states", (
     const s = setupSchema.parse({ ...CUR, wheelWidthIn: "8½", position: { mode: "backspacing", backspacingIn: "4¾", reference: "flange", flangeIn: "½" } });
     expect(s.wheelWidthIn).toBe(8.5);
     expect(s.position).toEqual({ mode: "backspacing", backspacingIn: 4.75, reference: "flange", flangeIn: 0.5 });
+  });
+});
+
+describe("form text for a setup", () => {
+  it("reads back to the same setup, with an empty spacer as none", () => {
+    const bs: Setup = { ...CUR, position: { mode: "backspacing", backspacingIn: 4.75, reference: "bead-seat", flangeIn: 0.625 }, spacerMm: 12 };
+    expect(setupSchema.parse(setupToForm(bs))).toEqual(bs);
+    expect(setupSchema.parse(setupToForm(CUR))).toEqual(CUR);
+    expect(setupToForm(CUR).spacerMm).toBe("");
+  });
+
+  it("a blank form names each missing field", () => {
+    const r = setupSchema.safeParse(EMPTY_SETUP_FORM);
+    expect(Object.keys(Object.fromEntries((r.error?.issues ?? []).map((i) => [i.path.join("."), 1])))).toEqual(["tire", "wheelDiameterIn", "wheelWidthIn", "position.offsetMm"]);
   });
 });

@@ -169,8 +169,8 @@ describe("quote expiry", () => {
     await seedShops(db);
     const [cust] = await db("customers").insert({ shop_id: SHOP_A, name: "Cass Customer", email: "cass@example.test" }).returning("id");
     const base = {
-      shop_id: SHOP_A, customer_id: cust.id, created_by: U.ownerA.id, vehicle_description: "Test pickup", bolt_pattern: "6x5.5", current_tire: "265/70R17",
-      current_wheel_diameter_in: 17, current_wheel_width_in: 8, current_wheel_offset_mm: 25, wheel_qty: 4, fitment: JSON.stringify({}), tax_rate_bp: 825, deposit_pct: 25,
+      shop_id: SHOP_A, customer_id: cust.id, created_by: U.ownerA.id, vehicle_description: "Test pickup", bolt_pattern: "6x5.5",
+      current_setup: JSON.stringify({ tire: "265/70R17", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 }, spacerMm: 0 }), wheel_qty: 4, fitment: JSON.stringify({}), tax_rate_bp: 825, deposit_pct: 25,
     };
     const day = 24 * 3600 * 1000;
     const rows = await db("quotes").insert([

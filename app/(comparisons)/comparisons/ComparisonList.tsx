@@ -12,7 +12,7 @@ import { api } from "@/lib/platform/client/api";
 import { queryKeys } from "@/lib/platform/query/keys";
 import { type DisplayPrefs, formatLen, formatNumber } from "@/lib/comparisons/format";
 import { readingPhrase } from "@/lib/comparisons/speedometer";
-import { encodeComparison } from "@/lib/comparisons/url";
+import { workspaceUrl } from "@/lib/comparisons/url";
 import type { ComparisonShare, SavedComparison } from "@/lib/comparisons/api";
 import { COMPARISON_SORTS, COMPARISON_SORT_LABEL, type ComparisonSort, comparisonNameSchema } from "@/lib/comparisons/savedSchema";
 
@@ -26,7 +26,7 @@ function useOrigin(): string {
 
 /** Opens the comparison in the workspace through the URL codec, remembering which saved one it is. */
 export function workspaceHref(c: SavedComparison): string {
-  return `/workspace?${encodeComparison(c.input)}&saved=${c.id}${c.vehicleId ? `&v=${c.vehicleId}` : ""}`;
+  return workspaceUrl({ input: c.input, savedId: c.id, vehicleId: c.vehicleId });
 }
 
 function useDebounced<T>(value: T, ms: number): T {

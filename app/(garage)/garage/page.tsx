@@ -10,7 +10,7 @@ import { GARAGE_ACCESS } from "@/lib/garage/access";
 import { bothUnits } from "@/lib/garage/format";
 import { garageQueries } from "@/lib/garage/queries";
 import { FRONT_SUSPENSION_LABEL } from "@/lib/garage/schema";
-import { toEngineSetup } from "@/lib/setup/schema";
+import { toEngineSetup } from "@/lib/setup/model";
 
 export const metadata: Metadata = { title: "Your garage" };
 

@@ -1,10 +1,10 @@
-import type { BackspacingReferenceValue } from "@/lib/comparisons/model";
+import type { BackspacingReference } from "@/lib/setup/model";
 
 /**
  * A small schematic of a wheel's inboard half: backspacing measured from the mounting face to the
  * bead seat, or to the flange edge (the bead-seat figure plus the flange allowance).
  */
-export function BackspacingDiagram({ reference }: { reference: BackspacingReferenceValue }) {
+export function BackspacingDiagram({ reference }: { reference: BackspacingReference }) {
   const flange = reference === "flange";
   const on = "#bd460f";
   const off = "#a3acb8";

@@ -6,8 +6,8 @@ import { drawnParts } from "@/components/comparison/crossSection/garageParts";
 import { PredictionTable } from "@/components/garage/PredictionTable";
 import { Button } from "@/components/ui/Button";
 import { type DisplayPrefs, formatLen } from "@/lib/comparisons/format";
-import type { SetupInputValues } from "@/lib/comparisons/model";
-import { encodeSetupQuery } from "@/lib/comparisons/url";
+import type { Setup } from "@/lib/setup/model";
+import { setupQuery } from "@/lib/setup/url";
 import { measuredLimits, predictPoints, steeringAxisOf } from "@/lib/garage/predict";
 import type { WorkspaceVehicle } from "@/lib/garage/types";
 
@@ -28,7 +28,7 @@ export default function GaragePanel({
 }: {
   vehicles: WorkspaceVehicle[];
   vehicleId: string | null;
-  planned: SetupInputValues;
+  planned: Setup;
   prefs: DisplayPrefs;
   onPick: (id: string | null) => void;
   onLimits: (limits: DrawnLimits | null) => void;
@@ -80,11 +80,11 @@ export default function GaragePanel({
         <div className="mt-4 flex flex-col gap-3">
           <div className="flex flex-wrap items-center gap-2">
             <Button variant="secondary" onClick={() => onUseVehicle(vehicle)}>Use its current setup and figures</Button>
-            <Link href={`/garage/${vehicle.id}?${encodeSetupQuery("p", planned)}`} className="text-sm font-semibold text-ember-700 underline-offset-2 hover:underline">
+            <Link href={`/garage/${vehicle.id}?${setupQuery("p", planned)}`} className="text-sm font-semibold text-ember-700 underline-offset-2 hover:underline">
               Open the vehicle page
             </Link>
             <Link
-              href={`/garage/${vehicle.id}/checklist?${encodeSetupQuery("p", planned)}`}
+              href={`/garage/${vehicle.id}/checklist?${setupQuery("p", planned)}`}
               className="text-sm font-semibold text-ember-700 underline-offset-2 hover:underline"
             >
               Install checklist for this plan

@@ -34,15 +34,25 @@ function fakeServer() {
   return fetchMock;
 }
 
-function renderOpened() {
-  window.history.replaceState(null, "", `/workspace?${encodeComparison(DEFAULT_INPUT)}&saved=${ID}`);
+function renderWorkspace(saved: typeof opened | null) {
   const qc = new QueryClient({ defaultOptions: { queries: { retry: false } } });
   return render(
     <QueryClientProvider client={qc}>
-      <Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} saveSlot={<SaveComparison saved={opened} />} />
+      <Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} savedId={saved?.id ?? null} saveSlot={<SaveComparison saved={saved} />} />
     </QueryClientProvider>,
   );
 }
+
+function renderOpened() {
+  window.history.replaceState(null, "", `/workspace?${encodeComparison(DEFAULT_INPUT)}&saved=${ID}`);
+  return renderWorkspace(opened);
+}
+
+/**
+ * The address bar rewritten by someone else than the workspace, without `saved` (Next's router
+ * writes back the URL it knows of on its own history updates, and it is not told of every write).
+ */
+const addressBarRewritten = () => window.history.replaceState(null, "", `/workspace?${encodeComparison(DEFAULT_INPUT)}`);
 
 const planned = () => within(screen.getByRole("region", { name: "Planned setup" }));
 const control = () => within(screen.getByTestId("save-control"));
@@ -128,6 +138,37 @@ describe("a saved comparison with unsaved edits", () => {
     expect(JSON.parse(String(fetchMock.mock.calls[0]?.[1]?.body)).input.planned.position).toEqual({ mode: "offset", offsetMm: -25 });
     expect(control().queryByText("Unsaved changes")).toBeNull();
     expect(unloadHeld()).toBe(false);
+  });
+});
+
+describe("the saved comparison stays in the link", () => {
+  it("an edit keeps saved= whatever the address bar held before it", async () => {
+    const user = userEvent.setup();
+    renderOpened();
+    addressBarRewritten();
+    const offset = planned().getByLabelText("Offset (mm)");
+    await user.clear(offset);
+    await user.type(offset, "-25");
+    expect(window.location.search).toContain("po=-25");
+    expect(new URLSearchParams(window.location.search).get("saved")).toBe(ID);
+    // A discrete change (the mode switch) too.
+    await user.click(planned().getByRole("radio", { name: "Backspacing" }));
+    expect(new URLSearchParams(window.location.search).get("saved")).toBe(ID);
+  });
+
+  it("a comparison saved as new is named in the link, and stays there through the next edits", async () => {
+    const user = userEvent.setup();
+    fakeServer();
+    window.history.replaceState(null, "", "/workspace");
+    renderWorkspace(null);
+    await user.click(control().getByRole("button", { name: "Save comparison…" }));
+    await user.click(control().getByRole("button", { name: "Save" }));
+    await waitFor(() => expect(new URLSearchParams(window.location.search).get("saved")).toBe(ID));
+    addressBarRewritten();
+    const offset = planned().getByLabelText("Offset (mm)");
+    await user.clear(offset);
+    await user.type(offset, "-25");
+    expect(new URLSearchParams(window.location.search).get("saved")).toBe(ID);
   });
 });
 

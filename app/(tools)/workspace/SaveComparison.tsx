@@ -17,7 +17,7 @@ import type { ComparisonInput } from "@/lib/comparisons/schema";
 import { encodeComparison } from "@/lib/comparisons/url";
 import type { SavedComparison } from "@/lib/comparisons/api";
 import { comparisonNameSchema } from "@/lib/comparisons/savedSchema";
-import { type OpenedComparison, useCurrentInput, withParam } from "./currentInput";
+import { type OpenedComparison, useCurrentInput } from "./currentInput";
 import { useLeaveGuard } from "@/components/feedback/useLeaveGuard";
 
 const nameForm = z.object({ name: comparisonNameSchema });
@@ -43,7 +43,7 @@ function inputErrorText(error: unknown, prefs: DisplayPrefs): string | null {
  * Loaded by SaveSlot only for members (it carries the form library and zod).
  */
 export function SaveComparison({ saved: openedFrom }: { saved: OpenedComparison | null }) {
-  const { input, complete, vehicleId } = useCurrentInput();
+  const { input, complete, vehicleId, onSaved } = useCurrentInput();
   const [prefs] = useDisplayPrefs();
   // Members with a garage tie the comparison to the picked vehicle (or untie it); others send nothing.
   const vehicleBody = vehicleId === undefined ? {} : { vehicleId };
@@ -63,8 +63,8 @@ export function SaveComparison({ saved: openedFrom }: { saved: OpenedComparison 
     mutationFn: (name: string) => api<{ comparison: SavedComparison }>("/api/comparisons", { method: "POST", body: { name, input, ...vehicleBody } }),
     onSuccess: ({ comparison }) => {
       setSaved({ id: comparison.id, name: comparison.name, vehicleId: comparison.vehicleId, input: comparison.input });
-      // A reload keeps the saved comparison: the workspace carries `saved` through its edits.
-      window.history.replaceState(window.history.state, "", withParam(window.location.search, "saved", comparison.id));
+      // A reload keeps the saved comparison: the workspace names it in its link from now on.
+      onSaved(comparison.id);
       setFormOpen(false);
       setNotice(`Saved as “${comparison.name}”.`);
       void qc.invalidateQueries({ queryKey: queryKeys.comparisons.all });

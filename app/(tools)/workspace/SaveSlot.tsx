@@ -2,7 +2,7 @@
 import dynamic from "next/dynamic";
 import Link from "next/link";
 import { buttonClass } from "@/components/ui/Button";
-import { encodeComparison } from "@/lib/comparisons/url";
+import { workspaceUrl } from "@/lib/comparisons/url";
 import { type OpenedComparison, useCurrentInput } from "./currentInput";
 
 // The members' control carries react-hook-form and zod; visitors never download them, and the
@@ -23,7 +23,7 @@ const SaveComparison = dynamic(() => import("./SaveComparison").then((m) => m.Sa
 export function SaveSlot({ signedIn, saved }: { signedIn: boolean; saved: OpenedComparison | null }) {
   const { input } = useCurrentInput();
   if (signedIn) return <SaveComparison saved={saved} />;
-  const back = `/workspace?${encodeComparison(input)}`;
+  const back = workspaceUrl({ input });
   return (
     <div className="flex flex-wrap items-center gap-3 rounded-lg bg-white px-4 py-3 ring-1 ring-basalt-100" data-testid="save-prompt">
       <Link href={`/sign-in?callbackUrl=${encodeURIComponent(back)}`} className={buttonClass("secondary")}>

@@ -12,28 +12,15 @@ import { type Draft, type DraftErrors, type SetupDraft, convertDraft, draftFromI
 import { fenderUnit, speedUnit, vehicleFieldLabel } from "@/lib/comparisons/fields";
 import type { DisplayPrefs } from "@/lib/comparisons/format";
 import { type ComparisonInput, DEFAULT_INPUT } from "@/lib/comparisons/model";
-import { type LinkProblem, decodeComparison, encodeComparison, problemText } from "@/lib/comparisons/url";
+import { decodeComparison, workspaceParam, workspaceUrl } from "@/lib/comparisons/url";
+import { type LinkProblem, problemText } from "@/lib/setup/url";
 import type { WorkspaceVehicle } from "@/lib/garage/types";
-import { CurrentInputContext, withParam } from "./currentInput";
-import { SetupFields } from "./SetupFields";
+import { CurrentInputContext } from "./currentInput";
+import { SetupDraftFields } from "./SetupDraftFields";
 import { VehicleFields } from "./VehicleFields";
 
 // Only members with vehicles load the garage panel (and the prediction code with it).
 const GaragePanel = dynamic(() => import("./GaragePanel"), { ssr: false, loading: () => <div className="h-24 animate-pulse rounded-card bg-basalt-50" role="status" aria-label="Loading your garage" /> });
-
-/** Parameters the workspace keeps in its URL besides the comparison: the saved comparison and the vehicle. */
-const KEPT_PARAMS = ["saved", "v"] as const;
-
-function keptQuery(): string {
-  const now = new URLSearchParams(window.location.search);
-  const out = new URLSearchParams();
-  for (const k of KEPT_PARAMS) {
-    const v = now.get(k);
-    if (v) out.set(k, v);
-  }
-  const q = out.toString();
-  return q ? `&${q}` : "";
-}
 
 interface State {
   draft: Draft;
@@ -66,12 +53,18 @@ function reformat(s: State, prefs: DisplayPrefs): State {
   return { draft, errors, good: clean && read.input ? read.input : s.good, prefs };
 }
 
-/** `saveSlot`: controls shown in the toolbar (the save control), reading the comparison through CurrentInputContext. */
+/**
+ * `saveSlot`: controls shown in the toolbar (the save control), reading the comparison through
+ * CurrentInputContext. The workspace writes its own URL (workspaceUrl) from what it knows — the
+ * comparison, the saved comparison it belongs to, the garage vehicle picked — never from what the
+ * address bar happens to hold, so no write loses `saved` or `v`.
+ */
 export function Workspace({
   initialInput,
   initialProblems,
   saveSlot,
   garage,
+  savedId: openedId = null,
 }: {
   initialInput: ComparisonInput;
   /** Values of the opening link that could not be used, each with what replaced it. */
@@ -79,12 +72,15 @@ export function Workspace({
   saveSlot?: ReactNode;
   /** The signed-in member's vehicles (none for visitors and shop roles). */
   garage?: { vehicles: WorkspaceVehicle[]; initialVehicleId: string | null } | null;
+  /** The caller's saved comparison this workspace was opened from (null: none). */
+  savedId?: string | null;
 }) {
   const [prefs, setPrefs] = useDisplayPrefs();
   const [state, setState] = useState<State>(() => fromInput(initialInput, prefs));
   const [linkProblems, setLinkProblems] = useState(initialProblems);
   const [copied, setCopied] = useState<"idle" | "done" | "failed">("idle");
   const [vehicleId, setVehicleId] = useState<string | null>(garage?.initialVehicleId ?? null);
+  const [savedId, setSavedId] = useState<string | null>(openedId);
   const [limits, setLimits] = useState<DrawnLimits | null>(null);
   // An edit (typing in one field) is one history entry: the first change pushes, the rest replace.
   const editOpen = useRef(false);
@@ -96,11 +92,10 @@ export function Workspace({
     setState(s);
   }
 
-  const writeUrl = useCallback((input: ComparisonInput, mode: "push" | "replace") => {
-    const q = `?${encodeComparison(input)}${keptQuery()}`;
-    if (q === window.location.search) return;
-    if (mode === "push") window.history.pushState(null, "", q);
-    else window.history.replaceState(window.history.state, "", q);
+  const writeUrl = useCallback((url: string, mode: "push" | "replace") => {
+    if (url === `${window.location.pathname}${window.location.search}`) return;
+    if (mode === "push") window.history.pushState(null, "", url);
+    else window.history.replaceState(window.history.state, "", url);
   }, []);
 
   const apply = useCallback(
@@ -108,11 +103,11 @@ export function Workspace({
       const read = readDraft(draft, prefs);
       setState((prev) => ({ draft, errors: read.errors, good: read.input ?? prev.good, prefs }));
       if (read.input) {
-        writeUrl(read.input, editOpen.current && !discrete ? "replace" : "push");
+        writeUrl(workspaceUrl({ input: read.input, savedId, vehicleId }), editOpen.current && !discrete ? "replace" : "push");
         editOpen.current = !discrete;
       }
     },
-    [prefs, writeUrl],
+    [prefs, writeUrl, savedId, vehicleId],
   );
   const commit = useCallback(() => {
     editOpen.current = false;
@@ -123,7 +118,8 @@ export function Workspace({
       editOpen.current = false;
       const { input } = decodeComparison(window.location.search);
       setState(fromInput(input, prefs));
-      const v = new URLSearchParams(window.location.search).get("v");
+      // The saved comparison stays the one being worked on (the save control keeps it too).
+      const v = workspaceParam(window.location.search, "vehicle");
       setVehicleId(garage?.vehicles.some((x) => x.id === v) ? v : null);
       setLinkProblems([]);
     };
@@ -131,10 +127,22 @@ export function Workspace({
     return () => window.removeEventListener("popstate", onPop);
   }, [prefs, garage]);
 
-  const pickVehicle = useCallback((id: string | null) => {
-    setVehicleId(id);
-    window.history.replaceState(window.history.state, "", withParam(window.location.search, "v", id));
-  }, []);
+  const good = s.good;
+  const pickVehicle = useCallback(
+    (id: string | null) => {
+      setVehicleId(id);
+      writeUrl(workspaceUrl({ input: good, savedId, vehicleId: id }), "replace");
+    },
+    [good, savedId, writeUrl],
+  );
+  const onSaved = useCallback(
+    (id: string) => {
+      setSavedId(id);
+      // A reload keeps the saved comparison: every later write names it too.
+      writeUrl(workspaceUrl({ input: good, savedId: id, vehicleId }), "replace");
+    },
+    [good, vehicleId, writeUrl],
+  );
   const takeVehicle = (v: WorkspaceVehicle) => {
     const next: ComparisonInput = {
       ...s.good,
@@ -185,7 +193,7 @@ export function Workspace({
   };
 
   return (
-    <CurrentInputContext value={{ input: s.good, complete: errorCount === 0, vehicleId: garage ? vehicleId : undefined }}>
+    <CurrentInputContext value={{ input: s.good, complete: errorCount === 0, vehicleId: garage ? vehicleId : undefined, onSaved }}>
     <div className="flex flex-col gap-6">
       <div className="flex flex-wrap items-end justify-between gap-4">
         <DisplayToggle prefs={prefs} onChange={setPrefs} />
@@ -209,8 +217,8 @@ export function Workspace({
         </div>
       )}
       <div className="grid gap-4 md:grid-cols-2">
-        <SetupFields {...setupProps("current")} />
-        <SetupFields {...setupProps("planned")} />
+        <SetupDraftFields {...setupProps("current")} />
+        <SetupDraftFields {...setupProps("planned")} />
       </div>
       <VehicleFields draft={s.draft.vehicle} defaults={defaultsText} errors={s.errors} prefs={prefs} onChange={(vehicle) => apply({ ...s.draft, vehicle })} onCommit={commit} />
       {garage && garage.vehicles.length > 0 && (

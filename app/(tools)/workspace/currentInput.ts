@@ -11,6 +11,8 @@ export interface CurrentInput {
   complete: boolean;
   /** The garage vehicle picked in the workspace (null: none); undefined where there is no garage (visitors). */
   vehicleId?: string | null;
+  /** Tells the workspace the comparison was saved as `id`: its link names it from now on. */
+  onSaved: (id: string) => void;
 }
 
 /** The saved comparison the workspace was opened from, as it was saved (to tell unsaved edits). */
@@ -27,14 +29,4 @@ export function useCurrentInput(): CurrentInput {
   const v = useContext(CurrentInputContext);
   if (!v) throw new Error("useCurrentInput outside the workspace");
   return v;
-}
-
-/**
- * `search` with one parameter set (or removed with null), the others kept as written — the
- * comparison's own encoding stays readable (no re-encoding of `/` or `,`).
- */
-export function withParam(search: string, key: string, value: string | null): string {
-  const kept = search.replace(/^\?/, "").split("&").filter((kv) => kv !== "" && kv.split("=")[0] !== key);
-  if (value) kept.push(`${key}=${encodeURIComponent(value)}`);
-  return `?${kept.join("&")}`;
 }

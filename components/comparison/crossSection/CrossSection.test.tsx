@@ -4,7 +4,8 @@ import { renderToStaticMarkup } from "react-dom/server";
 import { afterEach, describe, expect, it } from "vitest";
 import { computeComparison } from "@/lib/comparisons/compute";
 import type { DisplayPrefs } from "@/lib/comparisons/format";
-import { type ComparisonInput, DEFAULT_INPUT, type SetupInputValues } from "@/lib/comparisons/model";
+import { type ComparisonInput, DEFAULT_INPUT } from "@/lib/comparisons/model";
+import type { Setup } from "@/lib/setup/model";
 import { CrossSection } from "./CrossSection";
 import type { DrawnLimits } from "./drawing";
 
@@ -22,10 +23,10 @@ const metric: DisplayPrefs = { units: "metric", lengths: "decimal" };
  * 6.52 in outboard; backspacing to the flange 4.5 − 12/25.4 + 0.5 = 4.53 in = 115 mm (offset.ts,
  * common practice, no source); ground clearance (889 − 802.8)/2 = +43.1 mm = +1.7 in.
  */
-const A: SetupInputValues = { tire: "35x12.50R17", wheelDiameterIn: 17, wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 }, spacerMm: 0 };
+const A: Setup = { tire: "35x12.50R17", wheelDiameterIn: 17, wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 }, spacerMm: 0 };
 /** 285/75R16 on 16x8 +0 on a 38 mm spacer: 38 mm = 1.496 in → "1.5 in (38 mm)" as bought. */
-const B: SetupInputValues = { tire: "285/75R16", wheelDiameterIn: 16, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 0 }, spacerMm: 38 };
-const withPlanned = (planned: SetupInputValues, vehicle: Partial<ComparisonInput["vehicle"]> = {}): ComparisonInput => ({ ...DEFAULT_INPUT, planned, vehicle: { ...DEFAULT_INPUT.vehicle, ...vehicle } });
+const B: Setup = { tire: "285/75R16", wheelDiameterIn: 16, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 0 }, spacerMm: 38 };
+const withPlanned = (planned: Setup, vehicle: Partial<ComparisonInput["vehicle"]> = {}): ComparisonInput => ({ ...DEFAULT_INPUT, planned, vehicle: { ...DEFAULT_INPUT.vehicle, ...vehicle } });
 
 const labels = () => [...document.querySelectorAll("[data-testid=cross-section] text")].map((t) => t.textContent ?? "");
 
@@ -100,7 +101,7 @@ describe("CrossSection", () => {
   });
 
   it("shows backspacing to the bead seat when it was entered so, without a flange allowance dimension", () => {
-    const planned: SetupInputValues = { ...A, position: { mode: "backspacing", backspacingIn: 4, reference: "bead-seat", flangeIn: 0.5 } };
+    const planned: Setup = { ...A, position: { mode: "backspacing", backspacingIn: 4, reference: "bead-seat", flangeIn: 0.5 } };
     render(<CrossSection result={computeComparison(withPlanned(planned))} prefs={inch} />);
     expect(labels()).toContain("backspacing 4 in (bead seat)");
     expect(document.querySelector("[data-dimension=planned-flange-allowance]")).toBeNull();

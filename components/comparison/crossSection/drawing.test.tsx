@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { computeComparison } from "@/lib/comparisons/compute";
 import type { DisplayPrefs } from "@/lib/comparisons/format";
-import { type ComparisonInput, DEFAULT_INPUT, type SetupInputValues } from "@/lib/comparisons/model";
+import { type ComparisonInput, DEFAULT_INPUT } from "@/lib/comparisons/model";
+import type { Setup } from "@/lib/setup/model";
 import { boxesOverlap } from "@/lib/fitment/crossSectionLayout";
 import { DESIGN_WIDTH_PX, type DrawnLimits, buildDrawing } from "./drawing";
 
@@ -11,9 +12,9 @@ import { DESIGN_WIDTH_PX, type DrawnLimits, buildDrawing } from "./drawing";
  * lib/fitment/crossSection.test.ts, each planned against the demo's 265/70R17 17x8 +25 and
  * against each other; one opened from a backspacing to the bead seat.
  */
-const A: SetupInputValues = { tire: "35x12.50R17", wheelDiameterIn: 17, wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 }, spacerMm: 0 };
-const B: SetupInputValues = { tire: "285/75R16", wheelDiameterIn: 16, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 0 }, spacerMm: 38 };
-const C: SetupInputValues = { tire: "33x12.50R15", wheelDiameterIn: 15, wheelWidthIn: 10, position: { mode: "backspacing", backspacingIn: 3.25, reference: "bead-seat", flangeIn: 0.5 }, spacerMm: 0 };
+const A: Setup = { tire: "35x12.50R17", wheelDiameterIn: 17, wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 }, spacerMm: 0 };
+const B: Setup = { tire: "285/75R16", wheelDiameterIn: 16, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 0 }, spacerMm: 38 };
+const C: Setup = { tire: "33x12.50R15", wheelDiameterIn: 15, wheelWidthIn: 10, position: { mode: "backspacing", backspacingIn: 3.25, reference: "bead-seat", flangeIn: 0.5 }, spacerMm: 0 };
 const PREFS: DisplayPrefs[] = [
   { units: "imperial", lengths: "decimal" },
   { units: "imperial", lengths: "fraction" },

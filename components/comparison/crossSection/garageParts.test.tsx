@@ -1,11 +1,11 @@
 import { describe, expect, it } from "vitest";
-import type { SetupInputValues } from "@/lib/comparisons/model";
+import type { Setup } from "@/lib/setup/model";
 import { predictPoints } from "@/lib/garage/predict";
 import { drawnParts } from "./garageParts";
 
 // 4.5 in of backspacing to the flange on an 8 in wheel: (4.5 − 0.5 − 4) × 25.4 = 0 mm offset (offset.ts, common practice, no source).
-const measured: SetupInputValues = { tire: "265/70R17", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "backspacing", backspacingIn: 4.5, reference: "flange", flangeIn: 0.5 }, spacerMm: 0 };
-const planned: SetupInputValues = { tire: "35x12.50R17", wheelDiameterIn: 17, wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 }, spacerMm: 0 };
+const measured: Setup = { tire: "265/70R17", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "backspacing", backspacingIn: 4.5, reference: "flange", flangeIn: 0.5 }, spacerMm: 0 };
+const planned: Setup = { tire: "35x12.50R17", wheelDiameterIn: 17, wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 }, spacerMm: 0 };
 
 describe("drawnParts", () => {
   it("pairs each measured point with its prediction, in order, with the setup as the engine takes it", () => {

@@ -3,7 +3,7 @@
  * measured with (as the engine takes it) and its prediction for the planned setup, in the same
  * order (lib/garage/predict.ts `predictPoints` returns them in the points' order).
  */
-import { type SetupInputValues, toEngineSetup } from "@/lib/comparisons/model";
+import { type Setup, toEngineSetup } from "@/lib/setup/model";
 import type { ClearancePrediction } from "@/lib/fitment";
 import type { PartInput } from "@/lib/fitment/crossSection";
 
@@ -12,7 +12,7 @@ export interface GaragePoint {
   direction: PartInput["direction"];
   distanceMm: number;
   suspensionState?: PartInput["state"];
-  measuredSetup: SetupInputValues;
+  measuredSetup: Setup;
 }
 
 /**

@@ -1,4 +1,5 @@
 /** Row types, one place for every table. Column names are snake_case as stored. */
+import type { BackspacingReference } from "@/lib/fitment";
 
 export const ROLES = ["member", "shop_staff", "shop_owner", "admin"] as const;
 export type Role = (typeof ROLES)[number];
@@ -81,7 +82,7 @@ export interface CatalogItemRow {
   wheel_width_in: number | null;
   wheel_offset_mm: number | null;
   wheel_backspacing_in: number | null;
-  wheel_backspacing_ref: "bead-seat" | "flange" | null;
+  wheel_backspacing_reference: BackspacingReference | null;
   bolt_pattern: string | null;
   center_bore_mm: number | null;
   beadlock: boolean;
@@ -125,10 +126,8 @@ export interface CustomerVehicleRow {
   customer_id: string;
   description: string;
   bolt_pattern: string;
-  tire_size: string;
-  wheel_diameter_in: number;
-  wheel_width_in: number;
-  wheel_offset_mm: number;
+  /** The setup it runs now, a lib/setup Setup (JSONB). */
+  current_setup: unknown;
   axle_ratio: number | null;
   /** The hub's pilot diameter, when the counter measured or looked it up. */
   hub_bore_mm: number | null;
@@ -145,10 +144,8 @@ export interface QuoteRow {
   status: QuoteStatus;
   vehicle_description: string;
   bolt_pattern: string;
-  current_tire: string;
-  current_wheel_diameter_in: number;
-  current_wheel_width_in: number;
-  current_wheel_offset_mm: number;
+  /** The vehicle's setup as quoted, a lib/setup Setup (JSONB). */
+  current_setup: unknown;
   axle_ratio: number | null;
   hub_bore_mm: number | null;
   tire_item_id: string | null;
@@ -232,6 +229,7 @@ export interface PaymentRow {
 export const BAY_KINDS = ["lift_bay", "alignment_rack", "fabrication_bay"] as const;
 export type BayKind = (typeof BAY_KINDS)[number];
 
+/** The table's row as stored; the booking queries read it through joins. @public */
 export interface ShopScheduleRow {
   shop_id: string;
   /** IANA time zone name; opening hours and closed days are wall-clock in it. */
@@ -240,6 +238,7 @@ export interface ShopScheduleRow {
   updated_at: Date;
 }
 
+/** The table's row as stored; the booking queries read it through joins. @public */
 export interface OpeningHoursRow {
   shop_id: string;
   /** ISO 8601: 1 = Monday … 7 = Sunday. */
@@ -248,6 +247,7 @@ export interface OpeningHoursRow {
   closes_minute: number;
 }
 
+/** The table's row as stored; the booking queries read it through joins. @public */
 export interface ClosedDayRow {
   shop_id: string;
   /** A calendar date; read as "YYYY-MM-DD" (lib/shop/bookings/queries.ts asks pg for text). */
@@ -292,6 +292,7 @@ export interface BookingRow {
 }
 
 /** A bay held by a booking; `during` is a tstzrange, read through lower()/upper() as starts_at/ends_at. */
+/** The table's row as stored; the booking queries read it through joins. @public */
 export interface BayReservationRow {
   id: string;
   booking_id: string;
@@ -302,7 +303,7 @@ export interface BayReservationRow {
 }
 
 // --- garage ---------------------------------------------------------------------------------
-// Setups are stored as the output of lib/setup/schema.ts (SetupValues).
+// Setups are stored as lib/setup's Setup (the output of checkSetup).
 
 export const FRONT_SUSPENSIONS = ["independent", "solid-axle"] as const;
 export type FrontSuspension = (typeof FRONT_SUSPENSIONS)[number];

@@ -3,7 +3,7 @@
  * route handlers. Messages name the field as the screen labels it.
  */
 import { z } from "zod";
-import { BAY_KINDS, type BayKind } from "@/lib/platform/db/types";
+import { BAY_KINDS } from "@/lib/platform/db/types";
 import { BAY_KIND_LABEL, MAX_SLOT_DAYS, SLOT_STEPS, START_FIELD_LABEL, WEEKDAY_LABEL } from "./vocabulary";
 import { hhmmToMinute, isTimeZone } from "./zoned";
 
@@ -119,4 +119,3 @@ export const calendarQuerySchema = z.object({
   days: z.coerce.number({ error: "Days: use 1 or 7." }).refine((n) => n === 1 || n === 7, "Days: use 1 or 7.").optional(),
 });
 
-export const isBayKind = (s: string): s is BayKind => (BAY_KINDS as readonly string[]).includes(s);

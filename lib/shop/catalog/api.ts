@@ -4,7 +4,8 @@
  */
 import type { CatalogItemRow, CatalogKind, ServiceType, ServiceUnit } from "@/lib/platform/db/types";
 import type { Pick as FitmentPick } from "@/lib/shop/quotes/fitment";
-import type { resolveVehicle } from "@/lib/shop/quotes/schema";
+import type { CounterVehicleForEngine } from "@/lib/shop/customers/schema";
+import type { BackspacingReference } from "@/lib/setup/model";
 
 /** The catalog's kinds as the kind filters list them (catalog page, the quote's catalog picker), in this order. */
 export const CATALOG_KIND_FILTERS: readonly { kind: CatalogKind; label: string }[] = [
@@ -27,7 +28,7 @@ export interface CatalogItem {
   wheelWidthIn: number | null;
   wheelOffsetMm: number | null;
   wheelBackspacingIn: number | null;
-  wheelBackspacingRef: "bead-seat" | "flange" | null;
+  wheelBackspacingReference: BackspacingReference | null;
   boltPattern: string | null;
   centerBoreMm: number | null;
   beadlock: boolean;
@@ -84,7 +85,7 @@ export function catalogItemDto(r: CatalogItemRow): CatalogItem {
     tireRimIn: r.tire_rim_in,
     tireDiameterMm: r.tire_diameter_mm,
     wheelBackspacingIn: r.wheel_backspacing_in,
-    wheelBackspacingRef: r.wheel_backspacing_ref,
+    wheelBackspacingReference: r.wheel_backspacing_reference,
     serviceType: r.service_type,
     serviceUnit: r.service_unit,
     createdAt: new Date(r.created_at).toISOString(),
@@ -94,7 +95,7 @@ export function catalogItemDto(r: CatalogItemRow): CatalogItem {
 
 /** POST /api/shop/fitment/candidates: the stocked tire × wheel pairs that mount, ranked, each with its two items. */
 export interface FitmentCandidates {
-  vehicle: ReturnType<typeof resolveVehicle>;
+  vehicle: CounterVehicleForEngine;
   wheelsFitting: number;
   pairs: number;
   picks: (FitmentPick & { tire: StockItem; wheel: StockItem })[];

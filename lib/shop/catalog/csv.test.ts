@@ -15,7 +15,7 @@ describe("catalog CSV", () => {
     expect(r.items[0]).toMatchObject({ tire_rim_in: 17, tire_diameter_mm: 889, price_cents: 38900, qty_on_hand: 8 });
     // 4.5 in backspacing to the flange on a 9 in wheel: 4.0 in to the bead seat, offset (4.0 − 4.5) × 25.4 = −12.7 mm
     // (BS = W/2 + offset, flange allowance 0.5 in: lib/fitment README, common practice, no source).
-    expect(r.items[2]).toMatchObject({ wheel_offset_mm: -12.7, wheel_backspacing_in: 4.5, wheel_backspacing_ref: "flange", beadlock: true, bolt_pattern: "6x139.7" });
+    expect(r.items[2]).toMatchObject({ wheel_offset_mm: -12.7, wheel_backspacing_in: 4.5, wheel_backspacing_reference: "flange", beadlock: true, bolt_pattern: "6x139.7" });
     expect(r.items[3]).toMatchObject({ service_type: "mount_balance", service_unit: "per_wheel", qty_on_hand: null });
   });
 
@@ -101,8 +101,8 @@ describe("catalog CSV", () => {
       [{ wheel_width_in: "nine", wheel_offset_mm: "0" }, "wheel_width_in"],
       [{ wheel_width_in: "40", wheel_offset_mm: "0" }, "wheel_width_in"],
       [{ wheel_width_in: "9", wheel_offset_mm: "abc" }, "wheel_offset_mm"],
-      [{ wheel_width_in: "9", wheel_backspacing_in: "x", backspacing_from: "flange" }, "wheel_backspacing_in"],
-      [{ wheel_width_in: "9", wheel_backspacing_in: "25", backspacing_from: "flange" }, "wheel_backspacing_in"],
+      [{ wheel_width_in: "9", wheel_backspacing_in: "x", wheel_backspacing_reference: "flange" }, "wheel_backspacing_in"],
+      [{ wheel_width_in: "9", wheel_backspacing_in: "25", wheel_backspacing_reference: "flange" }, "wheel_backspacing_in"],
     ];
     for (const [cells, column] of cases) {
       const r = parseCatalogCsv([HEAD, row({ ...base, ...cells })].join("\n"));
@@ -130,9 +130,26 @@ describe("catalog CSV", () => {
   it("needs offset or backspacing on a wheel, never both, and the reference with backspacing", () => {
     const base = { kind: "wheel", sku: "W", description: "d", price: "1", qty_on_hand: "1", wheel_diameter_in: "17", wheel_width_in: "9", bolt_pattern: "6x5.5" };
     expect(parseCatalogCsv([HEAD, row({ ...base, wheel_offset_mm: "0", wheel_backspacing_in: "5" })].join("\n")).errors[0]).toMatchObject({ column: "wheel_offset_mm" });
-    expect(parseCatalogCsv([HEAD, row({ ...base, wheel_backspacing_in: "5" })].join("\n")).errors[0]).toMatchObject({ column: "backspacing_from" });
+    expect(parseCatalogCsv([HEAD, row({ ...base, wheel_backspacing_in: "5" })].join("\n")).errors[0]).toMatchObject({ column: "wheel_backspacing_reference" });
     // 5 in to the bead seat on a 9 in wheel: offset = (5 − 4.5) × 25.4 = +12.7 mm (same formula as above).
-    expect(parseCatalogCsv([HEAD, row({ ...base, wheel_backspacing_in: "5", backspacing_from: "bead-seat" })].join("\n")).items[0]!.wheel_offset_mm).toBeCloseTo(12.7, 9);
+    expect(parseCatalogCsv([HEAD, row({ ...base, wheel_backspacing_in: "5", wheel_backspacing_reference: "bead-seat" })].join("\n")).items[0]!.wheel_offset_mm).toBeCloseTo(12.7, 9);
+  });
+
+  it("reads a file with the earlier header backspacing_from, and names that column in its problems", () => {
+    const old = HEAD.replace("wheel_backspacing_reference", "backspacing_from");
+    const base = { kind: "wheel", sku: "W", description: "d", price: "1", qty_on_hand: "1", wheel_diameter_in: "17", wheel_width_in: "9", bolt_pattern: "6x5.5", wheel_backspacing_in: "5" };
+    // Same cells, same places: only the header's name differs.
+    const good = parseCatalogCsv([old, row({ ...base, wheel_backspacing_reference: "bead-seat" })].join("\n"));
+    expect(good.fileErrors).toEqual([]);
+    // 5 in to the bead seat on a 9 in wheel: (5 − 4.5) × 25.4 = +12.7 mm (BS = W/2 + offset; 1 in = 25.4 mm, NIST SP 811).
+    expect(good.items[0]).toMatchObject({ wheel_backspacing_reference: "bead-seat", wheel_backspacing_in: 5 });
+    expect(good.items[0]!.wheel_offset_mm).toBeCloseTo(12.7, 9);
+    const bad = parseCatalogCsv([old, row({ ...base, wheel_backspacing_reference: "rim" })].join("\n"));
+    expect(bad.errors).toEqual([expect.objectContaining({ column: "backspacing_from", message: expect.stringMatching(/measured to/) })]);
+    // Both names at once is one column named twice.
+    expect(parseCatalogCsv(`${HEAD},backspacing_from\n`).fileErrors.join(" ")).toMatch(/Column named twice: wheel_backspacing_reference\. backspacing_from is the earlier name/);
+    // Export writes the one name.
+    expect(catalogToCsv(good.items.map(({ row: _r, ...i }) => i)).split("\r\n")[0]).toBe(HEAD);
   });
 });
 

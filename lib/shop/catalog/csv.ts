@@ -21,7 +21,7 @@ export const CSV_COLUMNS = [
   "wheel_width_in",
   "wheel_offset_mm",
   "wheel_backspacing_in",
-  "backspacing_from",
+  "wheel_backspacing_reference",
   "bolt_pattern",
   "center_bore_mm",
   "beadlock",
@@ -29,6 +29,12 @@ export const CSV_COLUMNS = [
   "service_unit",
 ] as const;
 export type CsvColumn = (typeof CSV_COLUMNS)[number];
+
+/**
+ * Header names of earlier files, still read: each stands for the column it was renamed to, and
+ * problems in it are reported under the name the file uses.
+ */
+export const OLD_CSV_HEADERS: Readonly<Record<string, CsvColumn>> = { backspacing_from: "wheel_backspacing_reference" };
 export const REQUIRED_COLUMNS: readonly CsvColumn[] = ["kind", "sku", "description", "price"];
 
 /** Largest file accepted, bytes (a 10,000-row catalog is about 1.5 MB). */
@@ -126,13 +132,20 @@ export function parseCatalogCsv(text: string): CsvReport {
     report.fileErrors.push(`The header row (row ${header.row}) could not be read: ${header.problem}`);
     return report;
   }
-  const headers = (header?.cells ?? []).map((h) => h.trim().toLowerCase());
+  const written = (header?.cells ?? []).map((h) => h.trim().toLowerCase());
+  const headers = written.map((h) => OLD_CSV_HEADERS[h] ?? h);
+  /** A column as this file names it. */
+  const asWritten = (c: string) => written[headers.indexOf(c)] ?? c;
   const unknown = headers.filter((h) => !(CSV_COLUMNS as readonly string[]).includes(h));
   const missing = REQUIRED_COLUMNS.filter((c) => !headers.includes(c));
   const dupHeaders = headers.filter((h, i) => headers.indexOf(h) !== i);
   if (unknown.length) report.fileErrors.push(`Unknown column${unknown.length > 1 ? "s" : ""}: ${unknown.slice(0, 8).map((u) => JSON.stringify(u)).join(", ")}. The header row uses these names: ${CSV_COLUMNS.join(", ")}.`);
   if (missing.length) report.fileErrors.push(`Missing column${missing.length > 1 ? "s" : ""}: ${missing.join(", ")}.`);
-  if (dupHeaders.length) report.fileErrors.push(`Column named twice: ${[...new Set(dupHeaders)].join(", ")}.`);
+  if (dupHeaders.length) {
+    const dups = [...new Set(dupHeaders)];
+    const renamed = written.filter((h) => OLD_CSV_HEADERS[h] && dups.includes(OLD_CSV_HEADERS[h]));
+    report.fileErrors.push(`Column named twice: ${dups.join(", ")}.${renamed.map((h) => ` ${h} is the earlier name of ${OLD_CSV_HEADERS[h]}.`).join("")}`);
+  }
   if (report.fileErrors.length) return report;
   const rows = records.slice(headerAt + 1).filter((r) => !r.blank);
   if (rows.length > CSV_MAX_ROWS) {
@@ -152,7 +165,7 @@ export function parseCatalogCsv(text: string): CsvReport {
       errs.push({ ...at, column: "", message: `This row has ${rec.cells.length} cells; the header row has ${headers.length}. Check for a missing or extra comma.` });
     } else {
       const raw = Object.fromEntries(headers.map((h, i) => [h, rec.cells[i] ?? ""]));
-      const item = validateRow(raw, at, errs);
+      const item = validateRow(raw, at, errs, asWritten);
       if (item) {
         const key = item.sku.toLowerCase();
         const first = firstRowOfSku.get(key);
@@ -171,9 +184,9 @@ export function parseCatalogCsv(text: string): CsvReport {
   return report;
 }
 
-function validateRow(raw: Record<string, string>, at: Pick<RowError, "row" | "line">, errs: RowError[]): CatalogInput | null {
+function validateRow(raw: Record<string, string>, at: Pick<RowError, "row" | "line">, errs: RowError[], asWritten: (c: string) => string): CatalogInput | null {
   const v = (c: CsvColumn) => (NUMERIC_COLUMNS.has(c) ? (raw[c] ?? "") : unquoteTextCell(raw[c] ?? "")).trim();
-  const fail = (column: CsvColumn | "", message: string) => void errs.push({ ...at, column, message });
+  const fail = (column: CsvColumn | "", message: string) => void errs.push({ ...at, column: asWritten(column), message });
   const before = errs.length;
 
   const kindText = v("kind").toLowerCase();
@@ -210,7 +223,7 @@ function validateRow(raw: Record<string, string>, at: Pick<RowError, "row" | "li
     wheel_width_in: null,
     wheel_offset_mm: null,
     wheel_backspacing_in: null,
-    wheel_backspacing_ref: null,
+    wheel_backspacing_reference: null,
     bolt_pattern: null,
     center_bore_mm: null,
     beadlock: false,
@@ -233,7 +246,7 @@ function validateRow(raw: Record<string, string>, at: Pick<RowError, "row" | "li
     }
   }
 
-  if (kind === "wheel") readWheelCells(v, fail, item);
+  if (kind === "wheel") readWheelCells(v, fail, item, asWritten);
 
   if (kind === "service") {
     const type = v("service_type").toLowerCase() as ServiceType;
@@ -270,7 +283,7 @@ export function catalogToCsv(items: readonly CatalogInput[]): string {
         n(i.wheel_width_in),
         i.kind === "wheel" && i.wheel_backspacing_in === null ? n(i.wheel_offset_mm) : "",
         n(i.wheel_backspacing_in),
-        i.wheel_backspacing_ref ?? "",
+        i.wheel_backspacing_reference ?? "",
         i.bolt_pattern ?? "",
         n(i.center_bore_mm),
         i.kind === "wheel" ? (i.beadlock ? "yes" : "no") : "",

@@ -144,7 +144,7 @@ export async function commitImport(
         .onConflict(["shop_id", "sku"])
         .merge([
           "kind", "description", "price_cents", "qty_on_hand", "tire_size", "tire_rim_in", "tire_diameter_mm", "wheel_diameter_in",
-          "wheel_width_in", "wheel_offset_mm", "wheel_backspacing_in", "wheel_backspacing_ref", "bolt_pattern", "center_bore_mm",
+          "wheel_width_in", "wheel_offset_mm", "wheel_backspacing_in", "wheel_backspacing_reference", "bolt_pattern", "center_bore_mm",
           "beadlock", "service_type", "service_unit", "updated_at",
         ]);
       onProgress(Math.min(i + IMPORT_BATCH, rows.length), rows.length);

@@ -3,11 +3,12 @@
  * words for the person who made the file (the engine's own messages name its internal fields).
  */
 import { FitmentInputError, checkOffsetMm, checkWheelWidthIn, offsetFromBackspacing, parseBoltPattern } from "@/lib/fitment";
+import { BACKSPACING_REFERENCES, type BackspacingReference } from "@/lib/setup/model";
 import type { CatalogInput, CsvColumn } from "./csv";
 
 type WheelFields = Pick<
   CatalogInput,
-  "wheel_diameter_in" | "wheel_width_in" | "wheel_offset_mm" | "wheel_backspacing_in" | "wheel_backspacing_ref" | "bolt_pattern" | "center_bore_mm" | "beadlock"
+  "wheel_diameter_in" | "wheel_width_in" | "wheel_offset_mm" | "wheel_backspacing_in" | "wheel_backspacing_reference" | "bolt_pattern" | "center_bore_mm" | "beadlock"
 >;
 
 /**
@@ -15,7 +16,7 @@ type WheelFields = Pick<
  * its column. The engine is told the field's name as people read it ("Wheel width", "Offset"),
  * so its range messages read as sentences about the cell.
  */
-export function readWheelCells(v: (c: CsvColumn) => string, fail: (column: CsvColumn, message: string) => void, item: WheelFields): void {
+export function readWheelCells(v: (c: CsvColumn) => string, fail: (column: CsvColumn, message: string) => void, item: WheelFields, asWritten: (c: CsvColumn) => string = (c) => c): void {
   /** A number cell: empty and non-numbers are refused here, the range is the caller's. */
   const number = (c: CsvColumn, label: string, example: string): number | null => {
     const t = v(c);
@@ -45,24 +46,26 @@ export function readWheelCells(v: (c: CsvColumn) => string, fail: (column: CsvCo
 
   const offText = v("wheel_offset_mm");
   const bsText = v("wheel_backspacing_in");
-  const ref = v("backspacing_from").toLowerCase();
+  const refColumn = asWritten("wheel_backspacing_reference");
+  const ref = v("wheel_backspacing_reference").toLowerCase();
   if (offText && bsText) fail("wheel_offset_mm", "Give the offset or the backspacing, not both.");
-  else if (!offText && !bsText) fail("wheel_offset_mm", "Give the offset (mm) or the backspacing (in) with backspacing_from.");
+  else if (!offText && !bsText) fail("wheel_offset_mm", `Give the offset (mm) or the backspacing (in) with ${refColumn}.`);
   else if (offText) {
     const offset = number("wheel_offset_mm", "Offset (mm)", "-12");
     if (offset !== null && width !== null) engine("wheel_offset_mm", () => (item.wheel_offset_mm = checkOffsetMm(offset, width!, "Offset")));
   } else {
     const bs = number("wheel_backspacing_in", "Backspacing (in)", "4.5");
-    if (ref !== "bead-seat" && ref !== "flange") fail("backspacing_from", "Say where the backspacing was measured to: bead-seat or flange.");
+    if (!(BACKSPACING_REFERENCES as readonly string[]).includes(ref)) fail("wheel_backspacing_reference", `Say where the backspacing was measured to: ${BACKSPACING_REFERENCES.join(" or ")}.`);
     else if (bs !== null && width !== null) {
       try {
-        item.wheel_offset_mm = offsetFromBackspacing({ widthIn: width, backspacingIn: bs, measuredFrom: ref });
+        const reference = ref as BackspacingReference;
+        item.wheel_offset_mm = offsetFromBackspacing({ widthIn: width, backspacingIn: bs, measuredFrom: reference });
         item.wheel_backspacing_in = bs;
-        item.wheel_backspacing_ref = ref;
+        item.wheel_backspacing_reference = reference;
       } catch (e) {
         if (!(e instanceof FitmentInputError)) throw e;
         // The engine refuses a backspacing that puts the mounting face past a bead seat (or outside −10…30 in).
-        fail("wheel_backspacing_in", `Backspacing ${bs} in, measured to the ${ref}, does not fit a ${width} in wide wheel. Check the number and backspacing_from.`);
+        fail("wheel_backspacing_in", `Backspacing ${bs} in, measured to the ${ref}, does not fit a ${width} in wide wheel. Check the number and ${refColumn}.`);
       }
     }
   }

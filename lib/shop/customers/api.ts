@@ -3,6 +3,7 @@
  * server and client. The shop id and the phone digits kept for searching stay on the server.
  */
 import type { CustomerRow, CustomerVehicleRow } from "@/lib/platform/db/types";
+import type { Setup } from "@/lib/setup/model";
 
 export interface Customer {
   id: string;
@@ -13,16 +14,14 @@ export interface Customer {
   updatedAt: string;
 }
 
-/** A customer's vehicle as the shop counter saved it. */
+/** A customer's vehicle as the shop counter saved it (lib/shop/customers/schema.ts). */
 export interface CustomerVehicle {
   id: string;
   customerId: string;
   description: string;
   boltPattern: string;
-  tireSize: string;
-  wheelDiameterIn: number;
-  wheelWidthIn: number;
-  wheelOffsetMm: number;
+  /** The setup it runs, as the workspace and the garage describe one. */
+  currentSetup: Setup;
   axleRatio: number | null;
   hubBoreMm: number | null;
   createdAt: string;
@@ -43,10 +42,7 @@ export function customerVehicleDto(r: CustomerVehicleRow): CustomerVehicle {
     customerId: r.customer_id,
     description: r.description,
     boltPattern: r.bolt_pattern,
-    tireSize: r.tire_size,
-    wheelDiameterIn: r.wheel_diameter_in,
-    wheelWidthIn: r.wheel_width_in,
-    wheelOffsetMm: r.wheel_offset_mm,
+    currentSetup: r.current_setup as Setup,
     axleRatio: r.axle_ratio,
     hubBoreMm: r.hub_bore_mm,
     createdAt: new Date(r.created_at).toISOString(),

@@ -3,6 +3,7 @@
  * server and client. The shop id and the customer link's token hash stay on the server.
  */
 import type { QuoteEventRow, QuoteLineKind, QuoteLineRow, QuoteLineUnit, QuoteRow, QuoteStatus } from "@/lib/platform/db/types";
+import type { Setup } from "@/lib/setup/model";
 import type { HubCheck } from "./document";
 import type { FitmentSummary } from "./fitment";
 
@@ -15,10 +16,8 @@ export interface Quote {
   status: QuoteStatus;
   vehicleDescription: string;
   boltPattern: string;
-  currentTire: string;
-  currentWheelDiameterIn: number;
-  currentWheelWidthIn: number;
-  currentWheelOffsetMm: number;
+  /** The vehicle's setup as quoted, as the workspace and the garage describe one. */
+  currentSetup: Setup;
   axleRatio: number | null;
   hubBoreMm: number | null;
   tireItemId: string | null;
@@ -108,10 +107,7 @@ export function quoteDto(r: Omit<QuoteRow, "public_token_hash">): Quote {
     status: r.status,
     vehicleDescription: r.vehicle_description,
     boltPattern: r.bolt_pattern,
-    currentTire: r.current_tire,
-    currentWheelDiameterIn: r.current_wheel_diameter_in,
-    currentWheelWidthIn: r.current_wheel_width_in,
-    currentWheelOffsetMm: r.current_wheel_offset_mm,
+    currentSetup: r.current_setup as Setup,
     axleRatio: r.axle_ratio,
     hubBoreMm: r.hub_bore_mm,
     tireItemId: r.tire_item_id,

@@ -3,6 +3,7 @@
  * (`lines.8.discountCents`, zero-based); the quote screens show "Line 9 — discount", so every
  * message is turned into the screen's own words before it is shown.
  */
+import { SETUP_FIELD_LABEL, type SetupFieldPath } from "@/lib/setup/fields";
 
 const LINE_FIELDS: Record<string, string> = {
   kind: "kind",
@@ -37,15 +38,19 @@ const VEHICLE_FIELDS: Record<string, string> = {
   description: "Vehicle",
   boltPattern: "Bolt pattern",
   hubBoreMm: "Hub bore (mm)",
-  tireSize: "Current tire size",
-  wheelDiameterIn: "Wheel diameter (in)",
-  wheelWidthIn: "Wheel width (in)",
-  offsetMode: "Wheel position given as",
-  offsetMm: "Offset (mm)",
-  backspacingIn: "Backspacing (in)",
-  backspacingFrom: "Measured to",
   axleRatio: "Axle ratio",
+  // The flat vehicle of older clients (lib/shop/customers/schema.ts reads it still).
+  tireSize: SETUP_FIELD_LABEL.tire,
+  wheelDiameterIn: SETUP_FIELD_LABEL.wheelDiameterIn,
+  wheelWidthIn: SETUP_FIELD_LABEL.wheelWidthIn,
+  offsetMode: "Wheel position given as",
+  offsetMm: SETUP_FIELD_LABEL["position.offsetMm"],
+  backspacingIn: SETUP_FIELD_LABEL["position.backspacingIn"],
+  backspacingFrom: SETUP_FIELD_LABEL["position.reference"],
 };
+
+/** A field of the vehicle's setup (`currentSetup.position.offsetMm`) as the setup's fields are labelled. */
+const setupFieldLabel = (path: string[]): string => SETUP_FIELD_LABEL[path.join(".") as SetupFieldPath] ?? "Tires and wheels on it now";
 
 /**
  * @example
@@ -59,6 +64,7 @@ export function fieldLabel(path: string): string {
     const f = parts[2];
     return f ? `Line ${n} — ${LINE_FIELDS[f] ?? f}` : `Line ${n}`;
   }
+  if (parts[0] === "vehicle" && parts[1] === "currentSetup") return setupFieldLabel(parts.slice(2));
   if (parts[0] === "vehicle" && parts[1]) return VEHICLE_FIELDS[parts[1]] ?? "Vehicle";
   return QUOTE_FIELDS[parts[0]!] ?? VEHICLE_FIELDS[parts[0]!] ?? "Quote";
 }
@@ -78,5 +84,6 @@ export function describeFieldErrors(fieldErrors: Record<string, string[]> | unde
   };
   return Object.entries(fieldErrors)
     .sort(([a], [b]) => order(a) - order(b))
-    .flatMap(([k, v]) => (v[0] ? [`${fieldLabel(k)}: ${v[0]}`] : []));
+    // A setup's messages name their field already ("Tire size: …"): not twice.
+    .flatMap(([k, v]) => (v[0] ? [v[0].startsWith(`${fieldLabel(k)}:`) ? v[0] : `${fieldLabel(k)}: ${v[0]}`] : []));
 }

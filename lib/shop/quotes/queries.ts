@@ -9,7 +9,8 @@ import { type FitmentSummary, summarize } from "@/lib/shop/quotes/fitment";
 import { checkWheelOnHub, hubRefusal } from "@/lib/shop/quotes/hubFit";
 import { formatQuantity } from "@/lib/shop/quotes/quantity";
 import { TotalsError, computeTotals } from "@/lib/shop/quotes/totals";
-import { resolveVehicle, type Vehicle } from "@/lib/shop/quotes/schema";
+import { type CounterVehicle, type CounterVehicleForEngine, counterVehicleForEngine } from "@/lib/shop/customers/schema";
+import type { Setup } from "@/lib/setup/model";
 import { bindAppDb } from "@/lib/platform/db/bind";
 import { isLinkToken } from "@/lib/platform/tokenFormat";
 import { hashToken, randomToken } from "@/lib/platform/tokens";
@@ -223,7 +224,7 @@ async function writeLines(trx: Knex.Transaction, quoteId: string, lines: LineDra
 export interface CreateQuote {
   customerId: string;
   vehicleId?: string;
-  vehicle?: Vehicle;
+  vehicle?: CounterVehicle;
   saveVehicle?: boolean;
   tireItemId: string;
   wheelItemId: string;
@@ -237,20 +238,13 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
     const customer = await trx("customers").where({ id: input.customerId, shop_id: shopId }).first("id");
     if (!customer) throw InvalidError.fields({ customerId: ["That customer was not found."] });
     let vehicleId: string | null = input.vehicleId ?? null;
-    let v: ReturnType<typeof resolveVehicle>;
+    let v: CounterVehicleForEngine;
     if (input.vehicleId) {
       const saved = await trx("customer_vehicles").where({ id: input.vehicleId, shop_id: shopId, customer_id: input.customerId }).first();
       if (!saved) throw InvalidError.fields({ vehicleId: ["That vehicle was not found."] });
-      v = {
-        description: saved.description,
-        boltPattern: saved.bolt_pattern,
-        tireSize: saved.tire_size,
-        wheel: { diameterIn: saved.wheel_diameter_in, widthIn: saved.wheel_width_in, offsetMm: saved.wheel_offset_mm },
-        axleRatio: saved.axle_ratio,
-        hubBoreMm: saved.hub_bore_mm,
-      };
+      v = counterVehicleForEngine({ description: saved.description, boltPattern: saved.bolt_pattern, hubBoreMm: saved.hub_bore_mm, axleRatio: saved.axle_ratio, currentSetup: saved.current_setup as Setup });
     } else {
-      v = resolveVehicle(input.vehicle!);
+      v = counterVehicleForEngine(input.vehicle!);
       if (input.saveVehicle) {
         const [row] = await trx("customer_vehicles")
           .insert({
@@ -258,10 +252,7 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
             customer_id: input.customerId,
             description: v.description,
             bolt_pattern: v.boltPattern,
-            tire_size: v.tireSize,
-            wheel_diameter_in: v.wheel.diameterIn,
-            wheel_width_in: v.wheel.widthIn,
-            wheel_offset_mm: v.wheel.offsetMm,
+            current_setup: JSON.stringify(v.currentSetup),
             axle_ratio: v.axleRatio,
             hub_bore_mm: v.hubBoreMm,
           })
@@ -304,10 +295,7 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
         status: "draft",
         vehicle_description: v.description,
         bolt_pattern: v.boltPattern,
-        current_tire: v.tireSize,
-        current_wheel_diameter_in: v.wheel.diameterIn,
-        current_wheel_width_in: v.wheel.widthIn,
-        current_wheel_offset_mm: v.wheel.offsetMm,
+        current_setup: JSON.stringify(v.currentSetup),
         axle_ratio: v.axleRatio,
         hub_bore_mm: v.hubBoreMm,
         tire_item_id: tire.id,

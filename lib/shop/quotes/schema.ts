@@ -1,10 +1,7 @@
 import { z } from "zod";
-import { FitmentInputError, checkOffsetMm, checkWheelWidthIn, offsetFromBackspacing, parseBoltPattern, parseTireSize } from "@/lib/fitment";
 import { QuantityError, parseQuantity } from "@/lib/shop/quotes/quantity";
 import { emailField } from "../../accounts/schema";
-import { optionalLengthField } from "../../setup/schema";
-
-const engineMessage = (e: unknown, fallback: string) => (e instanceof FitmentInputError ? e.message : fallback);
+import { counterVehicleSchema } from "@/lib/shop/customers/schema";
 
 export const customerSchema = z
   .object({
@@ -16,73 +13,6 @@ export const customerSchema = z
 export type CustomerInput = z.infer<typeof customerSchema>;
 
 export const customerSearchSchema = z.object({ q: z.string({ error: "Type a phone number, e-mail or name." }).trim().min(1, "Type a phone number, e-mail or name.").max(120, "Use at most 120 characters.") });
-
-/** Quick entry of the vehicle as it is now: bolt pattern and current setup. */
-export const vehicleSchema = z
-  .object({
-    description: z.string({ error: "Describe the vehicle, e.g. 2016 half-ton pickup." }).trim().min(1, "Describe the vehicle, e.g. 2016 half-ton pickup.").max(120, "Use at most 120 characters."),
-    boltPattern: z.string({ error: "Enter the bolt pattern, e.g. 6x5.5." }).trim().min(1, "Enter the bolt pattern, e.g. 6x5.5."),
-    // The hub's pilot diameter: the counter checks each wheel's centre bore against it.
-    hubBoreMm: optionalLengthField("the hub bore", "mm", { min: 30, max: 250 }, "108"),
-    tireSize: z.string({ error: "Enter the current tire size, e.g. 265/70R17." }).trim().min(1, "Enter the current tire size, e.g. 265/70R17."),
-    wheelDiameterIn: z.coerce.number({ message: "Enter the wheel diameter in inches." }).min(8, "8 to 30 in.").max(30, "8 to 30 in."),
-    wheelWidthIn: z.coerce.number({ message: "Enter the wheel width in inches." }),
-    offsetMode: z.enum(["offset", "backspacing"], { error: "Say whether the wheel position is an offset or a backspacing." }),
-    offsetMm: z.coerce.number({ message: "Enter the offset in mm." }).optional(),
-    backspacingIn: z.coerce.number({ message: "Enter the backspacing in inches." }).optional(),
-    backspacingFrom: z.enum(["bead-seat", "flange"], { error: "Say where the backspacing was measured to: bead seat or flange edge." }).optional(),
-    axleRatio: z
-      .union([z.literal("").transform(() => undefined), z.coerce.number().min(1).max(10)], { error: "Enter the axle ratio as a number from 1 to 10, e.g. 3.73, or leave it empty." })
-      .optional(),
-  })
-  .superRefine((v, ctx) => {
-    const issue = (path: string, message: string) => ctx.addIssue({ code: "custom", path: [path], message });
-    try {
-      parseBoltPattern(v.boltPattern);
-    } catch (e) {
-      issue("boltPattern", engineMessage(e, "Enter a bolt pattern like 6x5.5."));
-    }
-    try {
-      const t = parseTireSize(v.tireSize);
-      if (t.rimDiameterIn !== v.wheelDiameterIn) issue("wheelDiameterIn", `${t.text} mounts on a ${t.rimDiameterIn} in wheel.`);
-    } catch (e) {
-      issue("tireSize", engineMessage(e, "Enter a tire size like 265/70R17."));
-    }
-    try {
-      checkWheelWidthIn(v.wheelWidthIn, "wheelWidthIn");
-    } catch (e) {
-      issue("wheelWidthIn", engineMessage(e, "Enter the wheel width."));
-      return;
-    }
-    try {
-      if (v.offsetMode === "offset") {
-        if (v.offsetMm === undefined) issue("offsetMm", "Enter the offset in mm.");
-        else checkOffsetMm(v.offsetMm, v.wheelWidthIn, "offsetMm");
-      } else if (v.backspacingIn === undefined) issue("backspacingIn", "Enter the backspacing in inches.");
-      else if (!v.backspacingFrom) issue("backspacingFrom", "Say where the backspacing was measured to.");
-      else offsetFromBackspacing({ widthIn: v.wheelWidthIn, backspacingIn: v.backspacingIn, measuredFrom: v.backspacingFrom });
-    } catch (e) {
-      issue(v.offsetMode === "offset" ? "offsetMm" : "backspacingIn", engineMessage(e, "Check the offset."));
-    }
-  });
-export type VehicleInput = z.input<typeof vehicleSchema>;
-export type Vehicle = z.output<typeof vehicleSchema>;
-
-/** The vehicle in the engine's terms (the offset computed from backspacing when that was given). */
-export function resolveVehicle(v: Vehicle) {
-  const offsetMm =
-    v.offsetMode === "offset"
-      ? v.offsetMm!
-      : offsetFromBackspacing({ widthIn: v.wheelWidthIn, backspacingIn: v.backspacingIn!, measuredFrom: v.backspacingFrom! });
-  return {
-    description: v.description,
-    boltPattern: parseBoltPattern(v.boltPattern).text,
-    tireSize: parseTireSize(v.tireSize).text,
-    hubBoreMm: v.hubBoreMm ?? null,
-    wheel: { diameterIn: v.wheelDiameterIn, widthIn: v.wheelWidthIn, offsetMm },
-    axleRatio: v.axleRatio ?? null,
-  };
-}
 
 const uuidField = (message: string) => z.uuid({ error: message });
 const centsField = (what: string) =>
@@ -96,7 +26,7 @@ export const createQuoteSchema = z
     {
       customerId: uuidField("Pick a customer."),
       vehicleId: uuidField("Pick one of the customer's saved vehicles.").optional(),
-      vehicle: vehicleSchema.optional(),
+      vehicle: counterVehicleSchema.optional(),
       saveVehicle: z.boolean({ error: "Say whether to save the vehicle (tick the box or not)." }).optional(),
       tireItemId: uuidField("Pick a tire."),
       wheelItemId: uuidField("Pick a wheel."),

@@ -11,23 +11,24 @@ import { Card } from "@/components/ui/Card";
 import { TextField } from "@/components/ui/TextField";
 import { DEFAULT_CLEARANCE_MARGIN_MM, compareSetups } from "@/lib/fitment";
 import { bothUnits, marginText, signedMm } from "@/lib/garage/format";
-import { urlNumber } from "@/lib/comparisons/url";
-import { setupQuery, workspaceHref } from "@/lib/garage/links";
+import { vehicleWorkspaceUrl } from "@/lib/garage/links";
+import { setupQuery, urlNumber } from "@/lib/setup/url";
 import type { VehicleDetail } from "@/lib/garage/types";
 import { marginField } from "@/lib/garage/schema";
-import { type SetupFormValues, type SetupValues, setupSchema, setupToForm, toEngineSetup } from "@/lib/setup/schema";
-import { SetupFields } from "../_components/SetupFields";
+import { type Setup, type SetupForm, toEngineSetup } from "@/lib/setup/model";
+import { setupSchema, setupToForm } from "@/lib/setup/schema";
+import { SetupFields } from "@/components/setup/SetupFields";
 import { predictPoints, steeringAxisOf } from "@/lib/garage/predict";
 
 /** The margin as this panel labels it, so its messages name it so. */
 const MARGIN_LABEL = "Safety margin";
 const marginSchema = marginField(MARGIN_LABEL);
 const plannedFormSchema = z.object({ planned: setupSchema, margin: marginSchema });
-type PlannedForm = { planned: SetupFormValues; margin: string };
+type PlannedForm = { planned: SetupForm; margin: string };
 
 
 /** A planned setup typed in, and what every measured point is predicted to become with it. */
-export function PlannedPanel({ detail, initialPlanned }: { detail: VehicleDetail; initialPlanned: SetupValues | null }) {
+export function PlannedPanel({ detail, initialPlanned }: { detail: VehicleDetail; initialPlanned: Setup | null }) {
   const { vehicle: v, clearances } = detail;
   const form = useForm<PlannedForm>({
     resolver: zodResolver(plannedFormSchema) as never,
@@ -108,7 +109,7 @@ export function PlannedPanel({ detail, initialPlanned }: { detail: VehicleDetail
               )}
               {planned.success && (
                 <div className="no-print flex flex-wrap gap-2">
-                  <Link href={workspaceHref(v.currentSetup, planned.data, v)} className={buttonClass("secondary")} data-testid="open-workspace">
+                  <Link href={vehicleWorkspaceUrl(v.currentSetup, planned.data, v)} className={buttonClass("secondary")} data-testid="open-workspace">
                     Open current vs planned in the workspace
                   </Link>
                   <Link href={`/garage/${v.id}/checklist?${plannedKey}${margin.success && margin.data !== v.clearanceMarginMm ? `&m=${urlNumber(margin.data)}` : ""}`} className={buttonClass("primary")}>Install checklist</Link>

@@ -12,13 +12,13 @@ import { formatBoltPattern, formatLength, parseBoltPattern, setupGeometry } from
 import { bothUnits, setupLine } from "@/lib/garage/format";
 import type { VehicleDetail } from "@/lib/garage/types";
 import { CLEARANCE_DIRECTION_LABEL, FRONT_SUSPENSION_LABEL, SUSPENSION_STATE_LABEL } from "@/lib/garage/schema";
-import { type SetupValues, toEngineSetup } from "@/lib/setup/schema";
+import { type Setup, toEngineSetup } from "@/lib/setup/model";
 import { PhotoDrop } from "../_components/PhotoDrop";
 import { AddPoint } from "./AddPoint";
 import { DeletePoint } from "./DeletePoint";
 import { PlannedPanel } from "./PlannedPanel";
 
-export function VehicleView({ initial, initialPlanned }: { initial: VehicleDetail; initialPlanned: SetupValues | null }) {
+export function VehicleView({ initial, initialPlanned }: { initial: VehicleDetail; initialPlanned: Setup | null }) {
   const id = initial.vehicle.id;
   const router = useRouter();
   const q = useQuery({ queryKey: queryKeys.garage.vehicle(id), queryFn: () => api<VehicleDetail>(`/api/vehicles/${id}`), initialData: initial });

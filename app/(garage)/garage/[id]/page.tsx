@@ -4,7 +4,7 @@ import { z } from "zod";
 import { requirePageCaller } from "@/lib/platform/auth/session";
 import { pageGuard } from "@/lib/platform/http/pageGuard";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
-import { setupFromQuery } from "@/lib/garage/links";
+import { setupFromQuery } from "@/lib/setup/url";
 import { garageQueries } from "@/lib/garage/queries";
 import { VehicleView } from "./VehicleView";
 

@@ -13,16 +13,16 @@ import { queryKeys } from "@/lib/platform/query/keys";
 import { formatBoltPattern, formatLength, parseBoltPattern } from "@/lib/fitment";
 import { marginText } from "@/lib/garage/format";
 import type { Vehicle } from "@/lib/garage/types";
-import { FRONT_SUSPENSION_LABEL, type VehicleFormValues, type VehicleValues, vehicleSchema } from "@/lib/garage/schema";
+import { FRONT_SUSPENSION_LABEL, type GarageVehicleForm, type GarageVehicleValues, garageVehicleSchema } from "@/lib/garage/schema";
 import { EMPTY_SETUP_FORM, setupToForm } from "@/lib/setup/schema";
-import { SetupFields } from "./SetupFields";
+import { SetupFields } from "@/components/setup/SetupFields";
 
 const FIELDS = [
   "name", "year", "make", "model", "trim", "frontSuspension", "boltPattern", "hubBoreMm", "liftHeightMm",
   "kingpinInclinationDeg", "axleRatio", "transmissionRatio", "clearanceMarginMm", "notes",
 ] as const;
 
-function toForm(v: Vehicle | null): VehicleFormValues {
+function toForm(v: Vehicle | null): GarageVehicleForm {
   if (!v) {
     return {
       name: "", year: "", make: "", model: "", trim: "", frontSuspension: "independent", boltPattern: "", hubBoreMm: "",
@@ -44,7 +44,7 @@ export function VehicleForm({ vehicle }: { vehicle: Vehicle | null }) {
   const router = useRouter();
   const qc = useQueryClient();
   const [failure, setFailure] = useState<string | null>(null);
-  const form = useForm<VehicleFormValues, unknown, VehicleValues>({ resolver: zodResolver(vehicleSchema), defaultValues: toForm(vehicle), mode: "onBlur" });
+  const form = useForm<GarageVehicleForm, unknown, GarageVehicleValues>({ resolver: zodResolver(garageVehicleSchema), defaultValues: toForm(vehicle), mode: "onBlur" });
   const { register, handleSubmit, setError, formState, getValues, reset } = form;
   const e = formState.errors;
   const bolt = useWatch({ control: form.control, name: "boltPattern" });

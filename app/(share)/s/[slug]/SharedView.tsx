@@ -10,7 +10,7 @@ import { buttonClass } from "@/components/ui/Button";
 import { computeComparison } from "@/lib/comparisons/compute";
 import { type DisplayPrefs, formatEnteredSpeed, formatLen, formatNumber } from "@/lib/comparisons/format";
 import type { ComparisonInput } from "@/lib/comparisons/schema";
-import { encodeComparison } from "@/lib/comparisons/url";
+import { workspaceUrl } from "@/lib/comparisons/url";
 import { ForumPostButton } from "./ForumPostButton";
 
 function VehicleSummary({ input, prefs }: { input: ComparisonInput; prefs: DisplayPrefs }) {
@@ -49,7 +49,7 @@ export function SharedView({ name, slug, input }: { name: string; slug: string; 
         <DisplayToggle prefs={prefs} onChange={setPrefs} />
         <div className="flex flex-wrap items-center gap-2">
           <ForumPostButton result={result} prefs={prefs} name={name} path={`/s/${slug}`} />
-          <Link href={`/workspace?${encodeComparison(input)}`} className={buttonClass("secondary")}>
+          <Link href={workspaceUrl({ input })} className={buttonClass("secondary")}>
             Open a copy in the workspace
           </Link>
         </div>

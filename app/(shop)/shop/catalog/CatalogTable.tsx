@@ -29,7 +29,7 @@ const UNIT_LABEL: Record<string, string> = { per_wheel: "per wheel", per_vehicle
 function details(i: CatalogItem): string {
   if (i.kind === "tire") return i.tireSize ?? "";
   if (i.kind === "wheel") {
-    const off = i.wheelBackspacingIn !== null ? `${i.wheelBackspacingIn} in backspacing (${i.wheelBackspacingRef})` : `${i.wheelOffsetMm} mm offset`;
+    const off = i.wheelBackspacingIn !== null ? `${i.wheelBackspacingIn} in backspacing (${i.wheelBackspacingReference})` : `${i.wheelOffsetMm} mm offset`;
     return `${i.wheelDiameterIn}x${i.wheelWidthIn} · ${off} · ${i.boltPattern}${i.centerBoreMm ? ` · bore ${i.centerBoreMm} mm` : ""}${i.beadlock ? " · beadlock" : ""}`;
   }
   return `${SERVICE_LABEL[i.serviceType ?? "other"] ?? ""} · ${UNIT_LABEL[i.serviceUnit ?? ""] ?? ""}`;

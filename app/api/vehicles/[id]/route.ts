@@ -2,7 +2,7 @@ import { z } from "zod";
 import { route } from "@/lib/platform/http/route";
 import { photoStore } from "@/lib/garage/photos/s3";
 import { garageQueries } from "@/lib/garage/queries";
-import { vehicleSchema } from "@/lib/garage/schema";
+import { garageVehicleSchema } from "@/lib/garage/schema";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
 
 const params = z.object({ id: z.uuid() });
@@ -11,7 +11,7 @@ export const GET = route({ access: GARAGE_ACCESS, params }, async ({ caller, par
   return garageQueries.getVehicleDetail(caller.userId, params.id);
 });
 
-export const PATCH = route({ access: GARAGE_ACCESS, params, body: vehicleSchema }, async ({ caller, params, body }) => {
+export const PATCH = route({ access: GARAGE_ACCESS, params, body: garageVehicleSchema }, async ({ caller, params, body }) => {
   return { vehicle: await garageQueries.updateVehicle(caller.userId, params.id, body) };
 });
 

@@ -6,10 +6,10 @@ import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { api } from "@/lib/platform/client/api";
 import { type ChecklistGroup, type ChecklistItem, GROUP_TITLE } from "@/lib/garage/checklist";
-import type { SetupValues } from "@/lib/setup/schema";
+import type { Setup } from "@/lib/setup/model";
 
 /** What the checklist was built from, sent back with the ticks so the server rebuilds the same list. */
-export type ChecklistSourceBody = { planned: SetupValues; marginMm: number } | { comparisonId: string; marginMm: number };
+export type ChecklistSourceBody = { planned: Setup; marginMm: number } | { comparisonId: string; marginMm: number };
 
 export function ChecklistView({ vehicleId, source, items, initialTicked }: { vehicleId: string; source: ChecklistSourceBody; items: ChecklistItem[]; initialTicked: string[] }) {
   const [ticked, setTicked] = useState<Set<string>>(new Set(initialTicked));

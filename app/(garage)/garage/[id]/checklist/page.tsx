@@ -7,10 +7,10 @@ import { buttonClass } from "@/components/ui/Button";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { requirePageCaller } from "@/lib/platform/auth/session";
 import { pageGuard } from "@/lib/platform/http/pageGuard";
-import { encodeComparison } from "@/lib/comparisons/url";
+import { workspaceUrl } from "@/lib/comparisons/url";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
 import { bothUnits, setupLine } from "@/lib/garage/format";
-import { setupFromQuery, setupQuery } from "@/lib/garage/links";
+import { setupFromQuery, setupQuery } from "@/lib/setup/url";
 import { checklistQueries } from "@/lib/garage/checklistQueries";
 import { marginMmParam } from "@/lib/garage/schema";
 import { ChecklistView } from "./ChecklistView";
@@ -42,7 +42,7 @@ export default async function ChecklistPage({ params, searchParams }: { params: 
   const ticked = await checklistQueries.checklistTicks(r);
   const marginNote = `Margin ${bothUnits(r.marginMm)}${r.marginMm === vehicle.clearanceMarginMm ? " (this vehicle's)" : " (tried instead of this vehicle's)"}.`;
   const backHref = r.comparison
-    ? `/workspace?${encodeComparison(r.comparison.input)}&saved=${r.comparison.id}&v=${vehicle.id}`
+    ? workspaceUrl({ input: r.comparison.input, savedId: r.comparison.id, vehicleId: vehicle.id })
     : `/garage/${id}?${setupQuery("p", r.planned)}`;
   const currentDiffers = r.comparison !== null && setupQuery("c", r.comparison.input.current) !== setupQuery("c", vehicle.currentSetup);
   return (

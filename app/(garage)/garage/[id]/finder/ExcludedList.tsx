@@ -5,7 +5,7 @@ import { Table, type TableColumn } from "@/components/ui/Table";
 import type { FitmentExclusion } from "@/lib/fitment";
 import { bothUnits } from "@/lib/garage/format";
 import { exclusionText } from "@/lib/garage/finderText";
-import { setupQuery } from "@/lib/garage/links";
+import { setupQuery } from "@/lib/setup/url";
 import type { Vehicle } from "@/lib/garage/types";
 import { candidateSetup } from "./candidate";
 

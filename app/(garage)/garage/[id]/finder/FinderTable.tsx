@@ -9,7 +9,8 @@ import { useSortedRows } from "@/components/ui/useSortedRows";
 import { type FitmentMatch, formatLength, inToMm } from "@/lib/fitment";
 import { matchesFinderFilter } from "@/lib/garage/finderFilter";
 import { bothUnits } from "@/lib/garage/format";
-import { setupQuery, workspaceHref } from "@/lib/garage/links";
+import { vehicleWorkspaceUrl } from "@/lib/garage/links";
+import { setupQuery } from "@/lib/setup/url";
 import type { Vehicle } from "@/lib/garage/types";
 import { candidateSetup } from "./candidate";
 
@@ -46,7 +47,7 @@ function finderColumns(vehicle: Vehicle): TableColumn<FitmentMatch>[] {
         const s = candidateSetup(m);
         return (
           <span className="flex flex-col gap-1">
-            <Link className="text-ember-700 underline" href={workspaceHref(vehicle.currentSetup, s, vehicle)} data-testid="candidate-workspace">
+            <Link className="text-ember-700 underline" href={vehicleWorkspaceUrl(vehicle.currentSetup, s, vehicle)} data-testid="candidate-workspace">
               Workspace
             </Link>
             <Link className="text-ember-700 underline" href={`/garage/${vehicle.id}?${setupQuery("p", s)}`}>

@@ -25,7 +25,7 @@ function detail(over: Partial<Detail["quote"]> = {}, lines = [line(1), line(2, {
   return {
     quote: {
       id: ID, number: 1042, customerId: "c", vehicleId: null, createdBy: null, status: "draft", vehicleDescription: "Test pickup", boltPattern: "6x5.5",
-      currentTire: "265/70R17", currentWheelDiameterIn: 17, currentWheelWidthIn: 8, currentWheelOffsetMm: 25, axleRatio: null, hubBoreMm: 108, tireItemId: null,
+      currentSetup: { tire: "265/70R17", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 }, spacerMm: 0 }, axleRatio: null, hubBoreMm: 108, tireItemId: null,
       wheelItemId: null, wheelQty: 4, fitment: fit, discountCents: 0, taxRateBp: 825, depositPct: 25, subtotalCents: 13500, taxableCents: 0, taxCents: 0,
       totalCents: 13500, depositCents: 3375, notes: "", validUntil: null, createdAt: "2026-12-01T10:00:00.000Z", updatedAt: "2026-12-01T10:00:00.123Z", ...over,
     },

@@ -12,7 +12,7 @@ import type { Customer } from "@/lib/shop/customers/api";
 import { mmToIn } from "@/lib/fitment";
 import { describeFieldErrors } from "@/lib/shop/quotes/fieldLabels";
 import { formatUsd } from "@/lib/shop/quotes/money";
-import type { Vehicle } from "@/lib/shop/quotes/schema";
+import type { CounterVehicle } from "@/lib/shop/customers/schema";
 import { CustomerStep } from "./CustomerStep";
 import { VehicleStep } from "./VehicleStep";
 
@@ -23,7 +23,7 @@ export function QuoteBuilder() {
   const router = useRouter();
   const [customer, setCustomer] = useState<Customer | null>(null);
   const [savedVehicle, setSavedVehicle] = useState<string | null>(null);
-  const [vehicle, setVehicle] = useState<Vehicle | null>(null);
+  const [vehicle, setVehicle] = useState<CounterVehicle | null>(null);
   const [saveVehicle, setSaveVehicle] = useState(true);
   const [candidates, setCandidates] = useState<Candidates | null>(null);
   const [pick, setPick] = useState<string | null>(null);

@@ -2,16 +2,19 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useQuery } from "@tanstack/react-query";
 import { useState } from "react";
-import { useForm, useWatch } from "react-hook-form";
+import { useForm } from "react-hook-form";
+import { SetupFields } from "@/components/setup/SetupFields";
 import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { TextField } from "@/components/ui/TextField";
-import type { FitmentCandidates as Candidates } from "@/lib/shop/catalog/api";
 import { api, applyFieldErrors } from "@/lib/platform/client/api";
 import { queryKeys } from "@/lib/platform/query/keys";
+import { setupFieldNames } from "@/lib/setup/fields";
+import { EMPTY_SETUP_FORM, setupToForm } from "@/lib/setup/schema";
+import type { FitmentCandidates as Candidates } from "@/lib/shop/catalog/api";
 import type { CustomerVehicle } from "@/lib/shop/customers/api";
-import { type Vehicle, type VehicleInput, vehicleSchema } from "@/lib/shop/quotes/schema";
+import { type CounterVehicle, type CounterVehicleForm, counterVehicleSchema } from "@/lib/shop/customers/schema";
 
 /** Step 2 of a new quote: the vehicle as it is now (typed, or one the customer has saved), then the catalog's fits. */
 export function VehicleStep(props: {
@@ -20,17 +23,17 @@ export function VehicleStep(props: {
   onSaved: (id: string | null) => void;
   saveVehicle: boolean;
   onSaveVehicle: (b: boolean) => void;
-  onCandidates: (v: Vehicle, c: Candidates) => void;
+  onCandidates: (v: CounterVehicle, c: Candidates) => void;
 }) {
   const saved = useQuery({
     queryKey: queryKeys.shop.customers.vehicles(props.customerId),
     queryFn: () => api<{ vehicles: CustomerVehicle[] }>(`/api/shop/customers/${props.customerId}`).then((r) => r.vehicles),
   });
-  const { register, handleSubmit, setError, formState, control, reset } = useForm<VehicleInput, unknown, Vehicle>({
-    resolver: zodResolver(vehicleSchema),
-    defaultValues: { description: "", boltPattern: "", hubBoreMm: "", tireSize: "", wheelDiameterIn: "", wheelWidthIn: "", offsetMode: "offset", offsetMm: "", backspacingIn: "", backspacingFrom: "bead-seat", axleRatio: "" } as unknown as VehicleInput,
+  const form = useForm<CounterVehicleForm, unknown, CounterVehicle>({
+    resolver: zodResolver(counterVehicleSchema),
+    defaultValues: { description: "", boltPattern: "", hubBoreMm: "", currentSetup: EMPTY_SETUP_FORM, axleRatio: "" },
   });
-  const mode = useWatch({ control, name: "offsetMode" });
+  const { register, handleSubmit, setError, formState, reset } = form;
   const [failure, setFailure] = useState<string | null>(null);
   const e = formState.errors;
   const onFind = handleSubmit(async (v) => {
@@ -38,7 +41,7 @@ export function VehicleStep(props: {
     try {
       props.onCandidates(v, await api<Candidates>("/api/shop/fitment/candidates", { body: v }));
     } catch (err) {
-      setFailure(applyFieldErrors(err, setError, ["description", "boltPattern", "hubBoreMm", "tireSize", "wheelDiameterIn", "wheelWidthIn", "offsetMm", "backspacingIn", "backspacingFrom", "axleRatio"]));
+      setFailure(applyFieldErrors(err, setError, ["description", "boltPattern", "hubBoreMm", ...setupFieldNames("currentSetup"), "axleRatio"]));
     }
   });
   const applySaved = (v: CustomerVehicle) => {
@@ -46,15 +49,9 @@ export function VehicleStep(props: {
       description: v.description,
       boltPattern: v.boltPattern,
       hubBoreMm: v.hubBoreMm === null ? "" : String(v.hubBoreMm),
-      tireSize: v.tireSize,
-      wheelDiameterIn: String(v.wheelDiameterIn),
-      wheelWidthIn: String(v.wheelWidthIn),
-      offsetMode: "offset",
-      offsetMm: String(v.wheelOffsetMm),
-      backspacingIn: "",
-      backspacingFrom: "bead-seat",
+      currentSetup: setupToForm(v.currentSetup),
       axleRatio: v.axleRatio ? String(v.axleRatio) : "",
-    } as unknown as VehicleInput);
+    });
     props.onSaved(v.id);
   };
   const edited = () => props.savedVehicle && props.onSaved(null);
@@ -66,7 +63,7 @@ export function VehicleStep(props: {
           <span className="self-center text-basalt-600">Saved:</span>
           {saved.data.map((v) => (
             <Button key={v.id} variant={props.savedVehicle === v.id ? "primary" : "secondary"} className="min-h-8 py-1" onClick={() => applySaved(v)}>
-              {v.description} ({v.tireSize})
+              {v.description} ({v.currentSetup.tire})
             </Button>
           ))}
         </div>
@@ -76,29 +73,9 @@ export function VehicleStep(props: {
         <TextField label="Vehicle" hint="e.g. 2016 half-ton pickup" {...register("description")} error={e.description?.message} />
         <TextField label="Bolt pattern" hint="e.g. 6x5.5 or 6x139.7" {...register("boltPattern")} error={e.boltPattern?.message} />
         <TextField label="Hub bore (mm)" inputMode="decimal" hint="Optional; each wheel's centre bore is checked against it" {...register("hubBoreMm")} error={e.hubBoreMm?.message} />
-        <TextField label="Current tire size" hint="e.g. 265/70R17" {...register("tireSize")} error={e.tireSize?.message} />
-        <TextField label="Wheel diameter (in)" inputMode="decimal" {...register("wheelDiameterIn")} error={e.wheelDiameterIn?.message} />
-        <TextField label="Wheel width (in)" inputMode="decimal" {...register("wheelWidthIn")} error={e.wheelWidthIn?.message} />
-        <fieldset className="flex flex-col gap-1 text-sm">
-          <legend className="font-medium text-basalt-800">Wheel position given as</legend>
-          <label className="flex items-center gap-2"><input type="radio" value="offset" className="accent-ember-600" {...register("offsetMode")} /> Offset (mm)</label>
-          <label className="flex items-center gap-2"><input type="radio" value="backspacing" className="accent-ember-600" {...register("offsetMode")} /> Backspacing (in)</label>
-        </fieldset>
-        {mode === "offset" ? (
-          <TextField label="Offset (mm)" inputMode="decimal" hint="+ when the mounting face is outboard of the centreline" {...register("offsetMm")} error={e.offsetMm?.message} />
-        ) : (
-          <>
-            <TextField label="Backspacing (in)" inputMode="decimal" {...register("backspacingIn")} error={e.backspacingIn?.message} />
-            <div className="flex flex-col gap-1">
-              <label htmlFor="f-backspacingFrom" className="text-sm font-medium text-basalt-800">Measured to</label>
-              <select id="f-backspacingFrom" className="min-h-10 rounded-lg border border-basalt-300 px-3" {...register("backspacingFrom")}>
-                <option value="bead-seat">Bead seat</option>
-                <option value="flange">Flange edge</option>
-              </select>
-              <p aria-live="polite" className="text-sm text-contact-600">{e.backspacingFrom?.message}</p>
-            </div>
-          </>
-        )}
+        <div className="sm:col-span-3">
+          <SetupFields form={form} name="currentSetup" legend="Tires and wheels on it now" spacer={false} />
+        </div>
         <TextField label="Axle ratio (optional)" inputMode="decimal" hint="For the regear suggestion; 3.73 assumed if empty" {...register("axleRatio")} error={e.axleRatio?.message} />
         <label className="flex items-center gap-2 self-center text-sm sm:col-span-3">
           <input type="checkbox" className="size-4 accent-ember-600" checked={props.saveVehicle && !props.savedVehicle} disabled={!!props.savedVehicle} onChange={(ev) => props.onSaveVehicle(ev.target.checked)} />

@@ -3,12 +3,12 @@ import { route } from "@/lib/platform/http/route";
 import { rankPicks } from "@/lib/shop/quotes/fitment";
 import { catalogQueries } from "@/lib/shop/catalog/queries";
 import { SHOP_ANY, shopIdOf } from "@/lib/shop/queries";
-import { resolveVehicle, vehicleSchema } from "@/lib/shop/quotes/schema";
+import { counterVehicleForEngine, counterVehicleSchema } from "@/lib/shop/customers/schema";
 
 /** The catalog's tire × wheel pairs that mount on this vehicle (drilling and hub bore), ranked by the engine's comparison. */
-export const POST = route({ access: SHOP_ANY, body: vehicleSchema }, async ({ caller, body }): Promise<FitmentCandidates> => {
+export const POST = route({ access: SHOP_ANY, body: counterVehicleSchema }, async ({ caller, body }): Promise<FitmentCandidates> => {
   const shopId = shopIdOf(caller);
-  const v = resolveVehicle(body);
+  const v = counterVehicleForEngine(body);
   const { wheels, tires } = await catalogQueries.fitmentStock(shopId);
   const ranked = rankPicks(
     { boltPattern: v.boltPattern, tireSize: v.tireSize, wheel: v.wheel, axleRatio: v.axleRatio, hubBoreMm: v.hubBoreMm },

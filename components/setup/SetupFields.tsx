@@ -1,13 +1,27 @@
 "use client";
 import { type FieldValues, type Path, type UseFormReturn, get, useWatch } from "react-hook-form";
 import { TextField } from "@/components/ui/TextField";
-import { SETUP_FIELD_LABEL as L } from "@/lib/comparisons/fields";
+import { SETUP_FIELD_LABEL as L } from "@/lib/setup/fields";
 
 /**
  * The inputs of one setup (tire, wheel, offset or backspacing with its reference, spacer),
- * registered under `name` in any form whose schema nests lib/setup/schema.ts there.
+ * registered under `name` in any form whose schema nests lib/setup/schema.ts there: the garage's
+ * vehicle and planned-setup forms and the shop counter's vehicle. `spacer={false}` leaves the
+ * spacer out where the figures read none.
  */
-export function SetupFields<T extends FieldValues>({ form, name, legend, tone = "steel" }: { form: UseFormReturn<T>; name: string; legend: string; tone?: "steel" | "ember" }) {
+export function SetupFields<T extends FieldValues>({
+  form,
+  name,
+  legend,
+  tone = "steel",
+  spacer = true,
+}: {
+  form: UseFormReturn<T>;
+  name: string;
+  legend: string;
+  tone?: "steel" | "ember";
+  spacer?: boolean;
+}) {
   const { register, formState } = form;
   const p = (k: string) => `${name}.${k}` as Path<T>;
   const err = (k: string) => (get(formState.errors, `${name}.${k}`) as { message?: string } | undefined)?.message;
@@ -60,9 +74,11 @@ export function SetupFields<T extends FieldValues>({ form, name, legend, tone = 
           <TextField id={id("offset")} label={L["position.offsetMm"]} hint="Positive when the mounting face is outboard of the rim centre, e.g. -12" {...register(p("position.offsetMm"))} error={err("position.offsetMm")} />
         </div>
       )}
-      <div className="mt-3 grid gap-3 sm:grid-cols-2">
-        <TextField id={id("spacer")} label={L.spacerMm} hint="Leave empty for none. In mm; inches need their unit, e.g. 1 in." {...register(p("spacerMm"))} error={err("spacerMm")} />
-      </div>
+      {spacer && (
+        <div className="mt-3 grid gap-3 sm:grid-cols-2">
+          <TextField id={id("spacer")} label={L.spacerMm} hint="Leave empty for none. In mm; inches need their unit, e.g. 1 in." {...register(p("spacerMm"))} error={err("spacerMm")} />
+        </div>
+      )}
     </fieldset>
   );
 }

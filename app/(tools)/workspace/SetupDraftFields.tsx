@@ -4,7 +4,7 @@ import { cx } from "@/components/ui/cx";
 import { Segmented } from "@/components/comparison/Segmented";
 import type { SetupFigures } from "@/lib/comparisons/compute";
 import type { DraftErrors, SetupDraft } from "@/lib/comparisons/draft";
-import { SETUP_FIELD_LABEL as L } from "@/lib/comparisons/fields";
+import { SETUP_FIELD_LABEL as L } from "@/lib/setup/fields";
 import { type DisplayPrefs, formatInches, formatLen, formatNumber } from "@/lib/comparisons/format";
 import { parseTireSize } from "@/lib/fitment";
 import { BackspacingDiagram } from "./BackspacingDiagram";
@@ -21,10 +21,12 @@ function tireReading(text: string, prefs: DisplayPrefs): string | null {
 }
 
 /**
- * The inputs of one setup. `onChange` gets the whole new draft; `onCommit` marks the end of an
- * edit (blur, or a discrete choice) so the browser history gets one entry per edit.
+ * The workspace's inputs of one setup, on its form text (a lib/comparisons/draft SetupDraft, read
+ * as you type without a form library; the forms elsewhere use components/setup/SetupFields).
+ * `onChange` gets the whole new draft; `onCommit` marks the end of an edit (blur, or a discrete
+ * choice) so the browser history gets one entry per edit.
  */
-export function SetupFields({
+export function SetupDraftFields({
   side,
   draft,
   errors,
