@@ -8,7 +8,8 @@ import "./globals.css";
 
 export const metadata: Metadata = {
   title: { default: "Hubface — wheel and tire fitment", template: "%s · Hubface" },
-  description: "Compare the wheel and tire setup you run with the one you plan: diameter, offset, backspacing, clearance, scrub, speedometer and gearing.",
+  description:
+    "Compare the wheel and tire setup you run with the one you plan: diameter, offset, backspacing, clearance, scrub, speedometer and gearing.",
   metadataBase: new URL(process.env.APP_ORIGIN ?? "http://127.0.0.1:3000"),
   // Files in public/, drawn by scripts/make-icons.mts from the Hubface mark.
   manifest: "/manifest.webmanifest",
@@ -27,7 +28,10 @@ export default function RootLayout({ children }: { children: ReactNode }) {
   return (
     <html lang="en" className={`${bodyFont.variable} ${displayFont.variable}`}>
       <body className="flex min-h-screen flex-col">
-        <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-white focus:px-3 focus:py-2">
+        <a
+          href="#main"
+          className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-white focus:px-3 focus:py-2"
+        >
           Skip to content
         </a>
         <Providers>

@@ -7,7 +7,9 @@ export default function NotFound() {
     <Card className="mx-auto max-w-xl text-center">
       <h1 className="text-2xl font-bold">Nothing here</h1>
       <p className="mt-2 text-basalt-600">This page does not exist, or the link has been revoked.</p>
-      <Link href="/" className={buttonClass("secondary", "mt-5")}>Go to the start page</Link>
+      <Link href="/" className={buttonClass("secondary", "mt-5")}>
+        Go to the start page
+      </Link>
     </Card>
   );
 }

@@ -66,17 +66,26 @@ async function main() {
     const res = await fetch(`${BASE}${p}`);
     if (res.status !== 200) throw new Error(`GET ${p} answered ${res.status} before the run`);
     await res.arrayBuffer();
-    if (p === sharePath) servedBy = res.headers.get("x-hubface-cache") === "hit" ? "the server's micro-cache (scripts/serve.ts)" : "Next (no micro-cache hit)";
+    if (p === sharePath)
+      servedBy = res.headers.get("x-hubface-cache") === "hit" ? "the server's micro-cache (scripts/serve.ts)" : "Next (no micro-cache hit)";
   }
-  console.log(`bench:http ${BASE} — ${CONNECTIONS} connections, ${DURATION} s per target; a repeated share view is answered by ${servedBy}`);
+  console.log(
+    `bench:http ${BASE} — ${CONNECTIONS} connections, ${DURATION} s per target; a repeated share view is answered by ${servedBy}`,
+  );
   const health = await run("/api/health");
   const share = await run(sharePath);
   const ratio = share.requests.average / health.requests.average;
   const mark = (ok: boolean) => (ok ? "meets" : "MISSES");
-  console.log(`GET /api/health    ${fmt(health.requests.average, 1)} req/s  p99 ${fmt(health.latency.p99)} ms  errors ${failures(health)} (${health.errors} errors, ${health.timeouts} timeouts, ${health.non2xx} non-2xx)`);
-  console.log(`GET /s/<slug>      ${fmt(share.requests.average, 1)} req/s  p99 ${fmt(share.latency.p99)} ms  errors ${failures(share)} (${share.errors} errors, ${share.timeouts} timeouts, ${share.non2xx} non-2xx)`);
+  console.log(
+    `GET /api/health    ${fmt(health.requests.average, 1)} req/s  p99 ${fmt(health.latency.p99)} ms  errors ${failures(health)} (${health.errors} errors, ${health.timeouts} timeouts, ${health.non2xx} non-2xx)`,
+  );
+  console.log(
+    `GET /s/<slug>      ${fmt(share.requests.average, 1)} req/s  p99 ${fmt(share.latency.p99)} ms  errors ${failures(share)} (${share.errors} errors, ${share.timeouts} timeouts, ${share.non2xx} non-2xx)`,
+  );
   console.log(`ratio share/health ${fmt(ratio, 2)}  (target ≥ ${RATIO_TARGET}: ${mark(ratio >= RATIO_TARGET)})`);
-  console.log(`share p99          ${fmt(share.latency.p99)} ms  (target ≤ ${P99_TARGET_MS} ms: ${mark(share.latency.p99 <= P99_TARGET_MS)})`);
+  console.log(
+    `share p99          ${fmt(share.latency.p99)} ms  (target ≤ ${P99_TARGET_MS} ms: ${mark(share.latency.p99 <= P99_TARGET_MS)})`,
+  );
   console.log(`share errors       ${failures(share)}  (target 0: ${mark(failures(share) === 0)})`);
 }
 

@@ -14,10 +14,32 @@ const CHECKED = ["app/", "lib/", "components/"].map((d) => path.join(ROOT, d));
 const TEST_FILE = /\.test\.tsx?$|\/tests?\/|testUtil\.ts$/;
 /** Names Next.js (or the proxy) reads from a file by convention: used without an import. */
 const FRAMEWORK_NAMES = new Set([
-  "default", "metadata", "generateMetadata", "generateStaticParams", "generateImageMetadata", "viewport", "generateViewport",
-  "GET", "HEAD", "POST", "PUT", "PATCH", "DELETE", "OPTIONS",
-  "dynamic", "dynamicParams", "revalidate", "fetchCache", "runtime", "preferredRegion", "maxDuration",
-  "alt", "size", "contentType", "config", "proxy",
+  "default",
+  "metadata",
+  "generateMetadata",
+  "generateStaticParams",
+  "generateImageMetadata",
+  "viewport",
+  "generateViewport",
+  "GET",
+  "HEAD",
+  "POST",
+  "PUT",
+  "PATCH",
+  "DELETE",
+  "OPTIONS",
+  "dynamic",
+  "dynamicParams",
+  "revalidate",
+  "fetchCache",
+  "runtime",
+  "preferredRegion",
+  "maxDuration",
+  "alt",
+  "size",
+  "contentType",
+  "config",
+  "proxy",
 ]);
 
 function loadProgram(): ts.Program {
@@ -65,7 +87,11 @@ export function findDeadExports(program: ts.Program): string[] {
           if (clause?.name) markNamed(target, ["default"]);
           const bindings = clause?.namedBindings;
           if (bindings && ts.isNamespaceImport(bindings) && target) wholeModules.add(target);
-          if (bindings && ts.isNamedImports(bindings)) markNamed(target, bindings.elements.map((e) => (e.propertyName ?? e.name).text));
+          if (bindings && ts.isNamedImports(bindings))
+            markNamed(
+              target,
+              bindings.elements.map((e) => (e.propertyName ?? e.name).text),
+            );
         } else {
           // A re-export (`export { x } from`, `export * from`) is not a use by itself: the
           // hub's export aliases the original symbol, which the hub's importers mark.
@@ -79,7 +105,10 @@ export function findDeadExports(program: ts.Program): string[] {
         let parent = node.parent;
         while (parent && (ts.isAwaitExpression(parent) || ts.isParenthesizedExpression(parent))) parent = parent.parent;
         if (parent && ts.isVariableDeclaration(parent) && ts.isObjectBindingPattern(parent.name)) {
-          markNamed(target, parent.name.elements.map((e) => ((e.propertyName ?? e.name) as ts.Identifier).text));
+          markNamed(
+            target,
+            parent.name.elements.map((e) => ((e.propertyName ?? e.name) as ts.Identifier).text),
+          );
         } else if (target) wholeModules.add(target);
       }
       // import("…").Name in type positions
@@ -101,7 +130,9 @@ export function findDeadExports(program: ts.Program): string[] {
         const isDeclarationName = parent && (parent as ts.NamedDeclaration).name === node && !ts.isShorthandPropertyAssignment(parent);
         const isExportSpecifier = parent && ts.isExportSpecifier(parent);
         if (!isDeclarationName && !isExportSpecifier) {
-          const sym = ts.isShorthandPropertyAssignment(parent) ? checker.getShorthandAssignmentValueSymbol(parent) : checker.getSymbolAtLocation(node);
+          const sym = ts.isShorthandPropertyAssignment(parent)
+            ? checker.getShorthandAssignmentValueSymbol(parent)
+            : checker.getSymbolAtLocation(node);
           if (sym) seen.add(original(checker, sym));
         }
       }
@@ -136,7 +167,9 @@ export function findDeadExports(program: ts.Program): string[] {
 if (import.meta.url === `file://${process.argv[1]}`) {
   const dead = findDeadExports(loadProgram());
   if (dead.length) {
-    console.error(`${dead.length} exported name(s) that nothing imports (delete them, stop exporting them, or mark a deliberate one /** … @public */):`);
+    console.error(
+      `${dead.length} exported name(s) that nothing imports (delete them, stop exporting them, or mark a deliberate one /** … @public */):`,
+    );
     for (const d of dead) console.error("  " + d);
     process.exit(1);
   }

@@ -19,7 +19,11 @@ const mark = (pad = 0, background = "none") =>
   `<circle cx="24" cy="24" r="22" fill="#181b21"/><circle cx="24" cy="24" r="15.5" fill="none" stroke="#e25b16" stroke-width="3"/>` +
   `<circle cx="24" cy="24" r="5" fill="#fbf8f3"/>${studs}</svg>`;
 
-const png = (svg: string, size: number) => sharp(Buffer.from(svg), { density: 72 * Math.ceil(size / 48) * 2 }).resize(size, size).png().toBuffer();
+const png = (svg: string, size: number) =>
+  sharp(Buffer.from(svg), { density: 72 * Math.ceil(size / 48) * 2 })
+    .resize(size, size)
+    .png()
+    .toBuffer();
 
 /** An ICO file whose entries are PNG images (supported by every current browser). */
 function ico(images: { size: number; data: Buffer }[]): Buffer {

@@ -71,7 +71,8 @@ async function main() {
     const missing = [...first].filter((u) => !seen.has(u));
     const kb = (n: number) => (n / 1024).toFixed(1);
     const total = initial.reduce((a, s) => a + s.bytes, 0);
-    for (const s of initial.sort((a, b) => b.bytes - a.bytes)) console.log(`  ${kb(s.bytes).padStart(7)} kB  ${new URL(s.url).pathname}  (${s.how})`);
+    for (const s of initial.sort((a, b) => b.bytes - a.bytes))
+      console.log(`  ${kb(s.bytes).padStart(7)} kB  ${new URL(s.url).pathname}  (${s.how})`);
     if (missing.length) console.log(`  (${missing.length} script(s) named in the HTML were not fetched: ${missing.join(", ")})`);
     console.log(`  after interactive, not counted: ${later.length} script(s), ${kb(later.reduce((a, s) => a + s.bytes, 0))} kB gzip`);
     console.log(`workspace first-load JS: ${kb(total)} kB gzip`);

@@ -39,12 +39,14 @@ async function signIn(): Promise<string> {
     body: new URLSearchParams({ csrfToken, ...MEMBER, json: "true" }),
   });
   take(res);
-  if (![...jar.keys()].some((k) => k.includes("session-token"))) throw new Error(`sign-in as ${MEMBER.email} failed (${res.status}); is the demo data loaded?`);
+  if (![...jar.keys()].some((k) => k.includes("session-token")))
+    throw new Error(`sign-in as ${MEMBER.email} failed (${res.status}); is the demo data loaded?`);
   return header();
 }
 
 async function demoPaths(cookie: string): Promise<{ share?: string; vehicle?: string }> {
-  const get = async (path: string) => (await fetch(`${base}${path}`, { headers: { Cookie: cookie } })).json() as Promise<Record<string, unknown>>;
+  const get = async (path: string) =>
+    (await fetch(`${base}${path}`, { headers: { Cookie: cookie } })).json() as Promise<Record<string, unknown>>;
   const comparisons = ((await get("/api/comparisons")).comparisons ?? []) as { share: { slug: string } | null }[];
   const vehicles = ((await get("/api/vehicles")).vehicles ?? []) as { id: string }[];
   const slug = comparisons.find((c) => c.share)?.share?.slug;
@@ -64,7 +66,13 @@ interface Row {
 async function measure(port: number, path: string, cookie?: string): Promise<Row> {
   const result = await lighthouse(
     `${base}${path}`,
-    { port, output: "json", logLevel: "error", onlyCategories: ["performance", "accessibility"], extraHeaders: cookie ? { Cookie: cookie } : undefined },
+    {
+      port,
+      output: "json",
+      logLevel: "error",
+      onlyCategories: ["performance", "accessibility"],
+      extraHeaders: cookie ? { Cookie: cookie } : undefined,
+    },
     undefined,
   );
   if (!result) throw new Error(`Lighthouse returned nothing for ${path}`);
@@ -95,7 +103,16 @@ async function main() {
   ];
   const chrome = await chromeLauncher.launch({
     chromePath: process.env.CHROME_PATH ?? "/usr/bin/chromium",
-    chromeFlags: ["--headless=new", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+    chromeFlags: [
+      "--headless=new",
+      "--no-sandbox",
+      "--disable-gpu",
+      "--disable-quic",
+      "--no-first-run",
+      "--disable-background-networking",
+      "--disable-component-update",
+      "--disable-sync",
+    ],
   });
   const rows: Row[] = [];
   try {
@@ -103,7 +120,9 @@ async function main() {
   } finally {
     await chrome.kill();
   }
-  console.log("Lighthouse 12.2.3, mobile preset, simulated throttling — targets: performance ≥ 95, TBT ≤ 150 ms, CLS ≤ 0.05, LCP ≤ 2.0 s, accessibility 100");
+  console.log(
+    "Lighthouse 12.2.3, mobile preset, simulated throttling — targets: performance ≥ 95, TBT ≤ 150 ms, CLS ≤ 0.05, LCP ≤ 2.0 s, accessibility 100",
+  );
   console.log("page".padEnd(50) + "perf  a11y   TBT ms   CLS     LCP ms   FCP ms");
   for (const r of rows) {
     console.log(

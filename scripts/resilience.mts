@@ -81,7 +81,10 @@ async function waitReady(server: Server, timeoutMs = 90_000): Promise<void> {
   const since = Date.now();
   while (Date.now() - since < timeoutMs) {
     if (server.child.exitCode !== null) throw new Error(`server ${server.name} exited (${server.child.exitCode}); see ${server.log}`);
-    const status = await fetch(`http://127.0.0.1:${server.port}/api/health/ready`).then((r) => r.status, () => 0);
+    const status = await fetch(`http://127.0.0.1:${server.port}/api/health/ready`).then(
+      (r) => r.status,
+      () => 0,
+    );
     // Readiness alone is not enough on a second server: a NOTIFY sent before its purge listener is in place is not heard.
     if (status === 200 && /share purge listener is listening/.test(readFileSync(server.log, "utf8"))) return;
     await sleep(250);
@@ -104,7 +107,8 @@ function pgCtl(args: string[]): void {
   else execFileSync(cmd[0]!, cmd.slice(1), { stdio: "ignore" });
 }
 const pgStop = () => pgCtl(["-m", "fast", "-w", "stop"]);
-const pgStart = () => pgCtl(["-l", join(PGDATA, "server.log"), "-w", "-t", "30", "-o", `-c listen_addresses=127.0.0.1 -p ${PGPORT} -k ''`, "start"]);
+const pgStart = () =>
+  pgCtl(["-l", join(PGDATA, "server.log"), "-w", "-t", "30", "-o", `-c listen_addresses=127.0.0.1 -p ${PGPORT} -k ''`, "start"]);
 
 async function sql<T extends Record<string, unknown>>(text: string, values: unknown[] = []): Promise<T[]> {
   const client = new pg.Client({ connectionString: DATABASE_URL });
@@ -249,10 +253,17 @@ const fmt = (n: number, d = 0) => n.toLocaleString("en-US", { minimumFractionDig
 const pad = (s: string, n: number) => (s.length >= n ? s : s + " ".repeat(n - s.length));
 const lpad = (s: string, n: number) => (s.length >= n ? s : " ".repeat(n - s.length) + s);
 const meets = (ok: boolean) => (ok ? "meets" : "MISSES");
-const sum = (list: Classes[]): Classes => list.reduce((t, c) => ({ ok: t.ok + c.ok, c4: t.c4 + c.c4, c503: t.c503 + c.c503, other: t.other + c.other, errors: t.errors + c.errors }), noClasses());
+const sum = (list: Classes[]): Classes =>
+  list.reduce(
+    (t, c) => ({ ok: t.ok + c.ok, c4: t.c4 + c.c4, c503: t.c503 + c.c503, other: t.other + c.other, errors: t.errors + c.errors }),
+    noClasses(),
+  );
 
 function mixTable(title: string, results: StreamResult[]): string[] {
-  const lines = [title, `  ${pad("request", 32)}${lpad("conns", 6)}${lpad("req/s", 9)}${lpad("p50 ms", 8)}${lpad("p99 ms", 8)}${lpad("2xx", 8)}${lpad("4xx", 6)}${lpad("503", 6)}${lpad("other", 7)}${lpad("no answer", 11)}`];
+  const lines = [
+    title,
+    `  ${pad("request", 32)}${lpad("conns", 6)}${lpad("req/s", 9)}${lpad("p50 ms", 8)}${lpad("p99 ms", 8)}${lpad("2xx", 8)}${lpad("4xx", 6)}${lpad("503", 6)}${lpad("other", 7)}${lpad("no answer", 11)}`,
+  ];
   for (const r of results) {
     const c = r.classes;
     lines.push(
@@ -261,11 +272,14 @@ function mixTable(title: string, results: StreamResult[]): string[] {
   }
   const t = sum(results.map((r) => r.classes));
   const rps = results.reduce((s, r) => s + r.result.requests.average, 0);
-  lines.push(`  ${pad("all", 32)}${lpad(String(CONNECTIONS), 6)}${lpad(fmt(rps, 1), 9)}${lpad("", 16)}${lpad(String(t.ok), 8)}${lpad(String(t.c4), 6)}${lpad(String(t.c503), 6)}${lpad(String(t.other), 7)}${lpad(String(t.errors), 11)}`);
+  lines.push(
+    `  ${pad("all", 32)}${lpad(String(CONNECTIONS), 6)}${lpad(fmt(rps, 1), 9)}${lpad("", 16)}${lpad(String(t.ok), 8)}${lpad(String(t.c4), 6)}${lpad(String(t.c503), 6)}${lpad(String(t.other), 7)}${lpad(String(t.errors), 11)}`,
+  );
   return lines;
 }
 
-const countRows = async (name: string) => Number((await sql<{ n: string }>("select count(*) as n from comparisons where name = $1", [name]))[0]!.n);
+const countRows = async (name: string) =>
+  Number((await sql<{ n: string }>("select count(*) as n from comparisons where name = $1", [name]))[0]!.n);
 const writes = (results: StreamResult[]) => results.find((r) => r.stream.method === "POST")!.classes.ok;
 
 // ---------------------------------------------------------------- phases
@@ -347,7 +361,11 @@ async function phaseKill(server: Server, reader: string, writer: string) {
       const form = new FormData();
       form.set("file", new Blob([await photoBytes(w * 1000 + i)], { type: "image/jpeg" }), `rs-${RUN}-${w}-${i}.jpg`);
       try {
-        const res = await fetch(`${base}/api/vehicles/${vehicleId}/photos`, { method: "POST", headers: { Cookie: reader, Origin: ORIGIN }, body: form });
+        const res = await fetch(`${base}/api/vehicles/${vehicleId}/photos`, {
+          method: "POST",
+          headers: { Cookie: reader, Origin: ORIGIN },
+          body: form,
+        });
         if (res.status === 201) ackedPhotos.push(((await res.json()) as { photo: { id: string } }).photo.id);
         else await res.arrayBuffer();
       } catch {
@@ -368,7 +386,18 @@ async function phaseKill(server: Server, reader: string, writer: string) {
   const orphans = await orphanObjects();
   const swept = await runScheduledSweep(killedAt);
   const orphansAfterSweep = await orphanObjects();
-  return { writeResult, acked: writeResult.classes.ok, rows, ackedPhotos: ackedPhotos.length, uploadsTried, lostPhotos, orphans, swept, orphansAfterSweep, killedAt };
+  return {
+    writeResult,
+    acked: writeResult.classes.ok,
+    rows,
+    ackedPhotos: ackedPhotos.length,
+    uploadsTried,
+    lostPhotos,
+    orphans,
+    swept,
+    orphansAfterSweep,
+    killedAt,
+  };
 }
 
 /**
@@ -473,7 +502,8 @@ async function main() {
     const slug = list.comparisons.find((c) => c.share)?.share?.slug;
     if (!slug) throw new Error(`${READER} has no live share link in the demo seed`);
     // One request per kind first, so the first measured seconds are not Next compiling its caches.
-    for (const path of [`/s/${slug}`, "/workspace", "/api/comparisons", "/api/health/ready"]) await (await fetch(`${A}${path}`, { headers: { Cookie: reader } })).arrayBuffer();
+    for (const path of [`/s/${slug}`, "/workspace", "/api/comparisons", "/api/health/ready"])
+      await (await fetch(`${A}${path}`, { headers: { Cookie: reader } })).arrayBuffer();
     console.log(`resilience: server A ${A}, PostgreSQL on ${PGPORT}; ${CONNECTIONS} connections × ${LOAD_SECONDS} s mixed load first`);
 
     const load = await phaseLoad(A, slug, reader, writer);
@@ -500,29 +530,50 @@ async function main() {
     const byServer = (list: typeof two.signUps, s: "A" | "B") => list.filter((x) => x.server === s).length;
     const limitHolds = created.length === 20 && refused.length === two.signUps.length - 20;
 
-    out.push("", `Resilience — ${new Date().toISOString().slice(0, 16)}Z, production build, PostgreSQL 127.0.0.1:${PGPORT} (fsync on), ${CONNECTIONS} connections`);
+    out.push(
+      "",
+      `Resilience — ${new Date().toISOString().slice(0, 16)}Z, production build, PostgreSQL 127.0.0.1:${PGPORT} (fsync on), ${CONNECTIONS} connections`,
+    );
     out.push(...mixTable(`1. Mixed load, ${LOAD_SECONDS} s`, load.results));
-    out.push(`  writes: ${load.acked} acknowledged (201), ${load.rows} rows → lost ${lost(load.acked, load.rows)}  (target ${TARGETS.lostWrites}: ${meets(lost(load.acked, load.rows) === 0)}); ${Math.max(0, load.rows - load.acked)} committed without an answer counted (in flight when the run ended)`);
-    out.push(`  answers other than 2xx/4xx/503 or none: ${otherAnswers(sum(load.results.map((r) => r.classes)))}  (target ${TARGETS.otherAnswers}: ${meets(otherAnswers(sum(load.results.map((r) => r.classes))) === 0)})`);
+    out.push(
+      `  writes: ${load.acked} acknowledged (201), ${load.rows} rows → lost ${lost(load.acked, load.rows)}  (target ${TARGETS.lostWrites}: ${meets(lost(load.acked, load.rows) === 0)}); ${Math.max(0, load.rows - load.acked)} committed without an answer counted (in flight when the run ended)`,
+    );
+    out.push(
+      `  answers other than 2xx/4xx/503 or none: ${otherAnswers(sum(load.results.map((r) => r.classes)))}  (target ${TARGETS.otherAnswers}: ${meets(otherAnswers(sum(load.results.map((r) => r.classes))) === 0)})`,
+    );
     out.push("");
     out.push(...mixTable(`2. PostgreSQL stopped ${fmt(outage.outageMs / 1000, 1)} s in a 34 s run of the same load`, outage.results));
     out.push(
       `  from the stop to the first 2xx after (${fmt(outage.windowMs / 1000, 1)} s): 2xx ${outageWin.ok}, 4xx ${outageWin.c4}, 503 ${outageWin.c503}, other ${outageWin.other}, no answer ${outageWin.errors}`,
     );
-    out.push(`  answers other than 2xx/4xx/503 or none (whole run): ${otherAnswers(outageTotal)}  (target ${TARGETS.otherAnswers}: ${meets(otherAnswers(outageTotal) === 0)})`);
+    out.push(
+      `  answers other than 2xx/4xx/503 or none (whole run): ${otherAnswers(outageTotal)}  (target ${TARGETS.otherAnswers}: ${meets(otherAnswers(outageTotal) === 0)})`,
+    );
     out.push(
       `  recovery, PostgreSQL accepting connections → first 2xx on GET /api/comparisons, no restart: ${outage.recoveryMs === null ? "none within 20 s" : `${fmt(outage.recoveryMs)} ms`}  (target < ${TARGETS.recoveryMs} ms: ${meets(outage.recoveryMs !== null && outage.recoveryMs < TARGETS.recoveryMs)})`,
     );
-    out.push(`  writes: ${outage.acked} acknowledged, ${outage.rows} rows → lost ${lost(outage.acked, outage.rows)}  (target ${TARGETS.lostWrites}: ${meets(lost(outage.acked, outage.rows) === 0)}); ${Math.max(0, outage.rows - outage.acked)} committed without an answer counted (in flight when the run ended or PostgreSQL stopped)`);
+    out.push(
+      `  writes: ${outage.acked} acknowledged, ${outage.rows} rows → lost ${lost(outage.acked, outage.rows)}  (target ${TARGETS.lostWrites}: ${meets(lost(outage.acked, outage.rows) === 0)}); ${Math.max(0, outage.rows - outage.acked)} committed without an answer counted (in flight when the run ended or PostgreSQL stopped)`,
+    );
     out.push("");
     out.push(`3. kill -9 of the server 5 s into writes (20 connections of comparison creates, 4 clients uploading photos)`);
-    out.push(`  comparison writes: ${kill.acked} acknowledged, ${kill.rows} rows → lost ${lost(kill.acked, kill.rows)}  (target ${TARGETS.lostWrites}: ${meets(lost(kill.acked, kill.rows) === 0)}); ${Math.max(0, kill.rows - kill.acked)} committed without an answer (in flight at the kill)`);
-    out.push(`  photo uploads: ${kill.uploadsTried} sent, ${kill.ackedPhotos} acknowledged, acknowledged without a row: ${kill.lostPhotos}  (target ${TARGETS.lostWrites}: ${meets(kill.lostPhotos === 0)})`);
-    out.push(`  photo-store objects without a row right after the kill: ${kill.orphans.length}${kill.orphans.length ? ` (${kill.orphans.slice(0, 4).join(", ")}${kill.orphans.length > 4 ? ", …" : ""})` : ""}`);
-    out.push(`  after the scheduled sweep (photos.sweep, clock set ${ORPHAN_GRACE_LABEL} past the kill): ${kill.swept} deleted, ${kill.orphansAfterSweep.length} left  (target ${TARGETS.orphans}: ${meets(kill.orphansAfterSweep.length === 0)})`);
+    out.push(
+      `  comparison writes: ${kill.acked} acknowledged, ${kill.rows} rows → lost ${lost(kill.acked, kill.rows)}  (target ${TARGETS.lostWrites}: ${meets(lost(kill.acked, kill.rows) === 0)}); ${Math.max(0, kill.rows - kill.acked)} committed without an answer (in flight at the kill)`,
+    );
+    out.push(
+      `  photo uploads: ${kill.uploadsTried} sent, ${kill.ackedPhotos} acknowledged, acknowledged without a row: ${kill.lostPhotos}  (target ${TARGETS.lostWrites}: ${meets(kill.lostPhotos === 0)})`,
+    );
+    out.push(
+      `  photo-store objects without a row right after the kill: ${kill.orphans.length}${kill.orphans.length ? ` (${kill.orphans.slice(0, 4).join(", ")}${kill.orphans.length > 4 ? ", …" : ""})` : ""}`,
+    );
+    out.push(
+      `  after the scheduled sweep (photos.sweep, clock set ${ORPHAN_GRACE_LABEL} past the kill): ${kill.swept} deleted, ${kill.orphansAfterSweep.length} left  (target ${TARGETS.orphans}: ${meets(kill.orphansAfterSweep.length === 0)})`,
+    );
     out.push("");
     out.push("4. Two servers on one database (A restarted after the kill, B started beside it)");
-    out.push(`  session from A on B: GET /api/me ${two.sessionOnB} (without the cookie ${two.anonymousOnB})  (target 200 / 401: ${meets(two.sessionOnB === 200 && two.anonymousOnB === 401)})`);
+    out.push(
+      `  session from A on B: GET /api/me ${two.sessionOnB} (without the cookie ${two.anonymousOnB})  (target 200 / 401: ${meets(two.sessionOnB === 200 && two.anonymousOnB === 401)})`,
+    );
     out.push(
       `  revoke on A → 404 on B (page was in B's micro-cache: ${two.cachedOnB === "hit" ? "yes" : "no"}): ${two.revokeMs === null ? "still served after 10 s" : `${fmt(two.revokeMs)} ms`}  (target < ${TARGETS.revokeMs} ms: ${meets(two.revokeMs !== null && two.revokeMs < TARGETS.revokeMs)})`,
     );
@@ -539,7 +590,7 @@ async function main() {
 main().then(
   () => process.exit(0),
   (e: unknown) => {
-    console.error(`resilience suite could not run: ${e instanceof Error ? e.stack ?? e.message : String(e)}`);
+    console.error(`resilience suite could not run: ${e instanceof Error ? (e.stack ?? e.message) : String(e)}`);
     process.exit(1);
   },
 );

@@ -26,7 +26,9 @@ import { withRequestLog } from "@/lib/platform/log/request";
 // Before any app module that says `import "server-only"` is loaded (the job workers below).
 register("./hooks/server-only.mjs", import.meta.url);
 
-const { values } = parseArgs({ options: { hostname: { type: "string", default: "127.0.0.1" }, port: { type: "string", default: process.env.PORT ?? "3000" } } });
+const { values } = parseArgs({
+  options: { hostname: { type: "string", default: "127.0.0.1" }, port: { type: "string", default: process.env.PORT ?? "3000" } },
+});
 const hostname = values.hostname!;
 const port = Number(values.port);
 
@@ -73,7 +75,11 @@ const server = createServer(
   withRequestLog(
     (req, res, ctx) => {
       const forwarded = req.headers["x-forwarded-for"];
-      req.headers[CLIENT_ADDRESS_HEADER] = resolveClientAddress(req.socket.remoteAddress, Array.isArray(forwarded) ? forwarded.join(",") : forwarded, proxies);
+      req.headers[CLIENT_ADDRESS_HEADER] = resolveClientAddress(
+        req.socket.remoteAddress,
+        Array.isArray(forwarded) ? forwarded.join(",") : forwarded,
+        proxies,
+      );
       if (cache?.serve(req, res)) return;
       cache?.capture(req, res);
       handle(req, res).catch((error: unknown) => {
@@ -86,7 +92,9 @@ const server = createServer(
   ),
 );
 server.keepAliveTimeout = 65_000;
-server.listen(port, hostname, () => log().info({ url: `http://${hostname}:${port}`, microcache: Boolean(cache), jobs: Boolean(jobs) }, "Hubface listening"));
+server.listen(port, hostname, () =>
+  log().info({ url: `http://${hostname}:${port}`, microcache: Boolean(cache), jobs: Boolean(jobs) }, "Hubface listening"),
+);
 
 // Revokes and edits on any app server reach this one's cached share pages through PostgreSQL
 // NOTIFY (lib/platform/http/sharePurge.ts); the listener keeps reconnecting while the database is away.
@@ -103,7 +111,9 @@ for (const signal of ["SIGINT", "SIGTERM"] as const) {
     setTimeout(() => process.exit(1), 25_000).unref();
     await new Promise<void>((resolve) => server.close(() => resolve()));
     await purges.stop();
-    await boss.stopBoss(15_000).catch((error: unknown) => log().error({ err: { message: (error as Error).message } }, "job queue did not stop cleanly"));
+    await boss
+      .stopBoss(15_000)
+      .catch((error: unknown) => log().error({ err: { message: (error as Error).message } }, "job queue did not stop cleanly"));
     log().info("stopped");
     process.exit(0);
   });

@@ -50,6 +50,7 @@ export TEST_DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT_TEST/hubface_tes
 export E2E_DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT_TEST/hubface_e2e"
 export NEXTAUTH_SECRET="test-secret-$(node -e 'console.log(require("crypto").randomBytes(16).toString("hex"))')"
 
+check format prettier --check . --log-level warn
 check lint eslint . --max-warnings=0
 check typecheck tsc --noEmit
 # Dead exports (knip will replace this script once package changes are free).

@@ -5,7 +5,13 @@ import { afterEach, describe, expect, it, vi } from "vitest";
 
 const caller = vi.hoisted(() => ({ current: null as unknown }));
 vi.mock("@/lib/platform/auth/session", () => ({ currentCaller: async () => caller.current }));
-vi.mock("next/link", () => ({ default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => <a href={href} {...rest}>{children}</a> }));
+vi.mock("next/link", () => ({
+  default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => (
+    <a href={href} {...rest}>
+      {children}
+    </a>
+  ),
+}));
 
 const { default: HomePage } = await import("./page");
 
@@ -29,7 +35,10 @@ describe("home page", () => {
       [/converter/i, "/convert"],
       [/ring helper/i, "/beadlock"],
     ] as const) {
-      expect(screen.getAllByRole("link", { name }).some((a) => a.getAttribute("href") === href), String(name)).toBe(true);
+      expect(
+        screen.getAllByRole("link", { name }).some((a) => a.getAttribute("href") === href),
+        String(name),
+      ).toBe(true);
     }
   });
 
@@ -37,7 +46,11 @@ describe("home page", () => {
     render(await HomePage());
     const account = screen.getByRole("region", { name: /what an account adds/i });
     for (const word of [/sav(e|ing)/i, /shar(e|ing)/i, /garage/i]) expect(account.textContent).toMatch(word);
-    expect(within(account).getByRole("link", { name: /create a free account/i }).getAttribute("href")).toBe("/sign-up");
+    expect(
+      within(account)
+        .getByRole("link", { name: /create a free account/i })
+        .getAttribute("href"),
+    ).toBe("/sign-up");
   });
 
   it("points a signed-in member at their work instead of the sign-up form", async () => {

@@ -10,8 +10,16 @@ const FREE_TOOLS = [
     title: "Workspace",
     body: "Compare what you run with what you plan — tire size, wheel width, offset or backspacing, spacer — and see how diameter, clearance, poke, scrub, speedometer and engine speed change.",
   },
-  { href: "/convert", title: "Converter", body: "Tire sizes between inch and metric designations, and the lengths, pressures and torques of the trade." },
-  { href: "/beadlock", title: "Ring helper", body: "How many bolts hold a beadlock ring, the order to tighten them in and the passes to make, with the ring maker's figures." },
+  {
+    href: "/convert",
+    title: "Converter",
+    body: "Tire sizes between inch and metric designations, and the lengths, pressures and torques of the trade.",
+  },
+  {
+    href: "/beadlock",
+    title: "Ring helper",
+    body: "How many bolts hold a beadlock ring, the order to tighten them in and the passes to make, with the ring maker's figures.",
+  },
 ];
 
 /** What an account adds on top; the tools above never ask for one. */
@@ -29,8 +37,8 @@ export default async function HomePage() {
         <p className="text-sm font-semibold uppercase tracking-widest text-ember-300">Wheel and tire fitment</p>
         <h1 className="mt-2 max-w-3xl text-4xl font-bold">Fit bigger tires with the numbers in front of you.</h1>
         <p className="mt-4 max-w-2xl text-lg text-basalt-200">
-          Hubface turns a tire size and a wheel into the figures that decide whether a setup fits: how far the tire reaches
-          inboard and outboard of the hub face, how much taller it stands, what it does to the speedometer and to engine speed.
+          Hubface turns a tire size and a wheel into the figures that decide whether a setup fits: how far the tire reaches inboard and
+          outboard of the hub face, how much taller it stands, what it does to the speedometer and to engine speed.
         </p>
         <p className="mt-4 max-w-2xl text-lg font-semibold text-dune-50">
           The workspace, the converter and the ring helper are free, and you need no account to use them.

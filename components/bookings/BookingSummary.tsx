@@ -8,13 +8,15 @@ export function BookingSummary({ booking, showBays = false }: { booking: Booking
   return (
     <div className="flex flex-col gap-1 text-sm" data-testid="booking-summary">
       <p>
-        <Badge tone={BOOKING_STATUS_TONE[booking.status]}>{BOOKING_STATUS_LABEL[booking.status]}</Badge> <span data-testid="booking-when">{booking.when}</span>
+        <Badge tone={BOOKING_STATUS_TONE[booking.status]}>{BOOKING_STATUS_LABEL[booking.status]}</Badge>{" "}
+        <span data-testid="booking-when">{booking.when}</span>
       </p>
       {showBays && booking.bays.length > 0 && (
         <ul className="text-basalt-700">
           {booking.bays.map((b) => (
             <li key={`${b.bayId}-${b.startsAt}`}>
-              {formatClock(b.startsAt, booking.timeZone)}–{formatClock(b.endsAt, booking.timeZone)}: {b.bayName} ({BAY_KIND_LABEL[b.bayKind].toLowerCase()})
+              {formatClock(b.startsAt, booking.timeZone)}–{formatClock(b.endsAt, booking.timeZone)}: {b.bayName} (
+              {BAY_KIND_LABEL[b.bayKind].toLowerCase()})
             </li>
           ))}
         </ul>

@@ -76,7 +76,10 @@ describe("the install time picker", () => {
   it("shows the server's refusal beside the group (tied by aria-describedby) and reloads the starts", async () => {
     const urls = serve(answer());
     const onPick = vi.fn(async () => {
-      throw new ApiError(409, { error: "taken", fieldErrors: { start: ["Install time: that time was taken a moment ago by another booking. Pick another time."] } });
+      throw new ApiError(409, {
+        error: "taken",
+        fieldErrors: { start: ["Install time: that time was taken a moment ago by another booking. Pick another time."] },
+      });
     });
     renderPicker(onPick);
     await userEvent.click(await screen.findByRole("radio", { name: "8:00 AM, Monday, December 14, 2026" }));

@@ -54,7 +54,12 @@ export function SlotPicker({ slotsUrl, actionLabel, onPick, idPrefix }: Props) {
   };
   if (slots.isError) return <Alert tone="error">{(slots.error as Error).message}</Alert>;
   const data = slots.data;
-  if (!data) return <p className="text-sm text-basalt-600" aria-live="polite">Loading free times…</p>;
+  if (!data)
+    return (
+      <p className="text-sm text-basalt-600" aria-live="polite">
+        Loading free times…
+      </p>
+    );
   if (data.unavailable) return <Alert tone="warning">{data.unavailable}</Alert>;
   const first = data.days[0]?.date;
   const open = data.days.some((d) => d.slots.length > 0);
@@ -62,8 +67,9 @@ export function SlotPicker({ slotsUrl, actionLabel, onPick, idPrefix }: Props) {
     <div className="flex flex-col gap-3">
       <p className="text-sm text-basalt-700">
         The work keeps the truck about <strong>{data.length}</strong>
-        {data.segments.length > 1 && ` (${data.segments.map((s) => `${BAY_KIND_LABEL[s.bayKind].toLowerCase()} ${formatDuration(s.minutes)}`).join(", then ")})`}. Times are on the
-        shop&apos;s clock ({data.timeZone}).
+        {data.segments.length > 1 &&
+          ` (${data.segments.map((s) => `${BAY_KIND_LABEL[s.bayKind].toLowerCase()} ${formatDuration(s.minutes)}`).join(", then ")})`}
+        . Times are on the shop&apos;s clock ({data.timeZone}).
       </p>
       <fieldset aria-describedby={errorId} aria-invalid={error ? true : undefined} className="flex flex-col gap-3">
         <legend className="text-sm font-medium text-basalt-800">{START_FIELD_LABEL}</legend>
@@ -72,7 +78,9 @@ export function SlotPicker({ slotsUrl, actionLabel, onPick, idPrefix }: Props) {
           <div key={d.date} data-testid="slot-day">
             <p className="text-sm font-semibold">
               {d.label}
-              {d.closed && <span className="ml-2 font-normal text-basalt-500">{d.closed === "Closed" ? "closed" : `closed: ${d.closed}`}</span>}
+              {d.closed && (
+                <span className="ml-2 font-normal text-basalt-500">{d.closed === "Closed" ? "closed" : `closed: ${d.closed}`}</span>
+              )}
               {!d.closed && d.slots.length === 0 && <span className="ml-2 font-normal text-basalt-500">fully booked</span>}
             </p>
             <div className="mt-1 flex flex-wrap gap-2">
@@ -80,8 +88,20 @@ export function SlotPicker({ slotsUrl, actionLabel, onPick, idPrefix }: Props) {
                 const words = `${s.label}, ${d.label}`;
                 const id = `${idPrefix}-${s.start}`;
                 return (
-                  <label key={s.start} htmlFor={id} className="flex min-h-10 cursor-pointer items-center gap-2 rounded-lg px-3 py-2 text-sm ring-1 ring-inset ring-basalt-300 has-[:checked]:bg-basalt-900 has-[:checked]:text-white">
-                    <input id={id} type="radio" name={`${idPrefix}-start`} value={s.start} checked={chosen?.start === s.start} onChange={() => setChosen({ start: s.start, words })} className="sr-only" />
+                  <label
+                    key={s.start}
+                    htmlFor={id}
+                    className="flex min-h-10 cursor-pointer items-center gap-2 rounded-lg px-3 py-2 text-sm ring-1 ring-inset ring-basalt-300 has-[:checked]:bg-basalt-900 has-[:checked]:text-white"
+                  >
+                    <input
+                      id={id}
+                      type="radio"
+                      name={`${idPrefix}-start`}
+                      value={s.start}
+                      checked={chosen?.start === s.start}
+                      onChange={() => setChosen({ start: s.start, words })}
+                      className="sr-only"
+                    />
                     <span>{s.label}</span>
                     <span className="sr-only">, {d.label}</span>
                   </label>
@@ -95,7 +115,12 @@ export function SlotPicker({ slotsUrl, actionLabel, onPick, idPrefix }: Props) {
         </p>
       </fieldset>
       <div className="flex flex-wrap gap-2">
-        <Button type="button" variant="secondary" disabled={!first || first <= data.today || slots.isFetching} onClick={() => setFrom(addDays(first!, -7) > data.today ? addDays(first!, -7) : null)}>
+        <Button
+          type="button"
+          variant="secondary"
+          disabled={!first || first <= data.today || slots.isFetching}
+          onClick={() => setFrom(addDays(first!, -7) > data.today ? addDays(first!, -7) : null)}
+        >
           Earlier days
         </Button>
         <Button type="button" variant="secondary" disabled={!first || slots.isFetching} onClick={() => setFrom(addDays(first!, 7))}>

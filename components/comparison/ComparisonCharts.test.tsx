@@ -12,7 +12,11 @@ import ComparisonCharts from "./ComparisonCharts";
 // give the charts a fixed size instead.
 vi.mock("recharts", async (importOriginal) => {
   const actual = await importOriginal<typeof import("recharts")>();
-  return { ...actual, ResponsiveContainer: ({ children }: { children: ReactElement<{ width?: number; height?: number }> }) => cloneElement(children, { width: 480, height: 240 }) };
+  return {
+    ...actual,
+    ResponsiveContainer: ({ children }: { children: ReactElement<{ width?: number; height?: number }> }) =>
+      cloneElement(children, { width: 480, height: 240 }),
+  };
 });
 
 const inch: DisplayPrefs = { units: "imperial", lengths: "decimal" };

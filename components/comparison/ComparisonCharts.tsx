@@ -1,5 +1,18 @@
 "use client";
-import { Bar, BarChart, CartesianGrid, Cell, Legend, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
+import {
+  Bar,
+  BarChart,
+  CartesianGrid,
+  Cell,
+  Legend,
+  Line,
+  LineChart,
+  ReferenceLine,
+  ResponsiveContainer,
+  Tooltip,
+  XAxis,
+  YAxis,
+} from "recharts";
 import type { ComparisonResult } from "@/lib/comparisons/compute";
 import { type DisplayPrefs, formatNumber } from "@/lib/comparisons/format";
 import { mmToIn } from "@/lib/fitment";
@@ -18,7 +31,11 @@ export const CHART_HEIGHT = 240;
 
 function ChartFrame({ title, children, id }: { title: string; children: React.ReactNode; id: string }) {
   return (
-    <figure className="min-w-0 rounded-lg bg-white p-3 ring-1 ring-basalt-100" aria-labelledby={id} style={{ height: CHART_HEIGHT_RESERVED }}>
+    <figure
+      className="min-w-0 rounded-lg bg-white p-3 ring-1 ring-basalt-100"
+      aria-labelledby={id}
+      style={{ height: CHART_HEIGHT_RESERVED }}
+    >
       <figcaption id={id} className="mb-1 truncate text-sm font-semibold text-basalt-800">
         {title}
       </figcaption>
@@ -68,7 +85,15 @@ export default function ComparisonCharts({ result: r, prefs }: { result: Compari
             <Tooltip labelFormatter={(v) => `Speedometer shows ${v} ${speedUnit}`} />
             <Legend wrapperStyle={{ fontSize: 12 }} />
             <Line dataKey="shown" name="As shown (current tire)" stroke={STEEL} strokeWidth={2} dot={false} isAnimationActive={false} />
-            <Line dataKey="true" name="True (planned tire)" stroke={EMBER} strokeWidth={2} strokeDasharray="6 4" dot={false} isAnimationActive={false} />
+            <Line
+              dataKey="true"
+              name="True (planned tire)"
+              stroke={EMBER}
+              strokeWidth={2}
+              strokeDasharray="6 4"
+              dot={false}
+              isAnimationActive={false}
+            />
           </LineChart>
         </ResponsiveContainer>
       </ChartFrame>
@@ -81,8 +106,24 @@ export default function ComparisonCharts({ result: r, prefs }: { result: Compari
             <Tooltip labelFormatter={(v) => `${v} ${speedUnit}`} />
             <Legend wrapperStyle={{ fontSize: 12 }} />
             <Line dataKey="current" name="Current" stroke={STEEL} strokeWidth={2} dot={false} isAnimationActive={false} />
-            <Line dataKey="planned" name="Planned" stroke={EMBER} strokeWidth={2} strokeDasharray="6 4" dot={false} isAnimationActive={false} />
-            <Line dataKey="regeared" name={`Planned, ${r.gearing.suggestedRatio.toFixed(2)} gears`} stroke={BASALT} strokeWidth={1.5} strokeDasharray="2 3" dot={false} isAnimationActive={false} />
+            <Line
+              dataKey="planned"
+              name="Planned"
+              stroke={EMBER}
+              strokeWidth={2}
+              strokeDasharray="6 4"
+              dot={false}
+              isAnimationActive={false}
+            />
+            <Line
+              dataKey="regeared"
+              name={`Planned, ${r.gearing.suggestedRatio.toFixed(2)} gears`}
+              stroke={BASALT}
+              strokeWidth={1.5}
+              strokeDasharray="2 3"
+              dot={false}
+              isAnimationActive={false}
+            />
           </LineChart>
         </ResponsiveContainer>
       </ChartFrame>

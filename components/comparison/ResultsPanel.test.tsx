@@ -10,7 +10,11 @@ const inch: DisplayPrefs = { units: "imperial", lengths: "decimal" };
 const metric: DisplayPrefs = { units: "metric", lengths: "decimal" };
 const stat = (id: string) => {
   const el = screen.getByTestId(id);
-  return { label: el.querySelector("dt")?.textContent, value: el.querySelectorAll("dd")[0]?.textContent, sub: el.querySelectorAll("dd")[1]?.textContent };
+  return {
+    label: el.querySelector("dt")?.textContent,
+    value: el.querySelectorAll("dd")[0]?.textContent,
+    sub: el.querySelectorAll("dd")[1]?.textContent,
+  };
 };
 
 afterEach(cleanup);
@@ -24,9 +28,17 @@ describe("headline crawl ratio (first gear × transfer-case low × axle; common 
     const input = { ...DEFAULT_INPUT, vehicle: { ...DEFAULT_INPUT.vehicle, firstGearRatio: 4.03, transferLowRatio: 2.72 } };
     render(<HeadlineChanges result={computeComparison(input)} prefs={inch} />);
     // 4.03 × 2.72 × 3.73 = 40.8868; × 802.8 / 939.8 (ISO 4000-1 diameters) = 34.9265, −14.6 %.
-    expect(stat("change-crawl")).toEqual({ label: "Crawl ratio", value: "40.89:1", sub: "4.03 × 2.72 × 3.73; planned tire: acts like 34.93:1 (−14.6 %)" });
+    expect(stat("change-crawl")).toEqual({
+      label: "Crawl ratio",
+      value: "40.89:1",
+      sub: "4.03 × 2.72 × 3.73; planned tire: acts like 34.93:1 (−14.6 %)",
+    });
     // 4.03 × 2.72 × 4.30 = 47.1349; × 802.8 / 939.8 = 40.2638.
-    expect(stat("change-crawl-regeared")).toEqual({ label: "Crawl ratio regeared", value: "47.13:1", sub: "with 4.30; planned tire: acts like 40.26:1" });
+    expect(stat("change-crawl-regeared")).toEqual({
+      label: "Crawl ratio regeared",
+      value: "47.13:1",
+      sub: "with 4.30; planned tire: acts like 40.26:1",
+    });
   });
 
   it("is left out until both gear ratios are entered", () => {
@@ -68,7 +80,9 @@ describe("headline speedometer figure", () => {
 describe("speedometer warning", () => {
   it("reads in the reader's unit with both percentages named", () => {
     render(<WarningList result={computeComparison(DEFAULT_INPUT)} prefs={metric} />);
-    const item = within(screen.getByTestId("warnings")).getAllByRole("listitem").find((li) => li.getAttribute("data-kind") === "speedometer");
+    const item = within(screen.getByTestId("warnings"))
+      .getAllByRole("listitem")
+      .find((li) => li.getAttribute("data-kind") === "speedometer");
     expect(item?.querySelector("p")?.textContent).toBe(
       "Caution: Speedometer reads 14.6 % low: at an indicated 100 km/h you are actually going 117.1 km/h (actual speed is 17.1 % above the speedometer)",
     );
@@ -79,16 +93,30 @@ describe("spacer thickness under the unit toggle", () => {
   const frac: DisplayPrefs = { units: "imperial", lengths: "fraction" };
   const withSpacer = (spacerMm: number) => computeComparison({ ...DEFAULT_INPUT, planned: { ...DEFAULT_INPUT.planned, spacerMm } });
   const wheelCell = () => screen.getByRole("row", { name: /^Wheel/ }).querySelectorAll("td")[1]?.textContent;
-  const spacerNote = () => within(screen.getByTestId("warnings")).getAllByRole("listitem").find((li) => li.getAttribute("data-kind") === "spacer")?.querySelector("p")?.textContent;
+  const spacerNote = () =>
+    within(screen.getByTestId("warnings"))
+      .getAllByRole("listitem")
+      .find((li) => li.getAttribute("data-kind") === "spacer")
+      ?.querySelector("p")?.textContent;
 
   it("a 25 mm spacer is never shown as a 1 in one (25 mm = 0.984 in; 1 in = 25.4 mm exactly, NIST SP 811)", () => {
-    render(<><SetupDetailTable result={withSpacer(25)} prefs={frac} /><WarningList result={withSpacer(25)} prefs={frac} /></>);
+    render(
+      <>
+        <SetupDetailTable result={withSpacer(25)} prefs={frac} />
+        <WarningList result={withSpacer(25)} prefs={frac} />
+      </>,
+    );
     expect(wheelCell()).toMatch(/\+ 0\.98 in \(25 mm\) spacer/);
     expect(spacerNote()).toBe("Note: Planned setup uses a 0.98 in (25 mm) spacer");
   });
 
   it("a 1 in spacer (25.4 mm) is never shown as a 25 mm one", () => {
-    render(<><SetupDetailTable result={withSpacer(25.4)} prefs={metric} /><WarningList result={withSpacer(25.4)} prefs={metric} /></>);
+    render(
+      <>
+        <SetupDetailTable result={withSpacer(25.4)} prefs={metric} />
+        <WarningList result={withSpacer(25.4)} prefs={metric} />
+      </>,
+    );
     expect(wheelCell()).toMatch(/\+ 25\.4 mm spacer/);
     expect(spacerNote()).toBe("Note: Planned setup uses a 25.4 mm spacer");
     cleanup();

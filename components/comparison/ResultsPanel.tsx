@@ -55,17 +55,41 @@ export function HeadlineChanges({ result: r, prefs }: { result: ComparisonResult
   const h = speed.headline;
   return (
     <section aria-labelledby="headline-title">
-      <h2 id="headline-title" className="mb-2 text-lg font-semibold">What changes</h2>
+      <h2 id="headline-title" className="mb-2 text-lg font-semibold">
+        What changes
+      </h2>
       <dl className="grid grid-cols-2 gap-2 sm:grid-cols-3 lg:grid-cols-5">
-        <Stat testId="change-diameter" label="Overall diameter" value={len(c.diameterMm)} sub={`${formatLen(r.current.overallDiameterMm, prefs, { decimals: 1 })} → ${formatLen(r.planned.overallDiameterMm, prefs, { decimals: 1 })}`} />
-        <Stat testId="change-ground" label="Ground clearance" value={len(c.groundClearanceMm)} sub={`under the axle · ${other(c.groundClearanceMm)}`} />
-        <Stat testId="change-inner" label="Inner clearance" value={len(c.innerClearanceMm)} sub={direction(c.innerClearanceMm, "more room inboard", "less room inboard")} />
-        <Stat testId="change-poke" label="Poke" value={len(c.outerPokeMm)} sub={direction(c.outerPokeMm, "reaches further out", "tucks further in")} />
+        <Stat
+          testId="change-diameter"
+          label="Overall diameter"
+          value={len(c.diameterMm)}
+          sub={`${formatLen(r.current.overallDiameterMm, prefs, { decimals: 1 })} → ${formatLen(r.planned.overallDiameterMm, prefs, { decimals: 1 })}`}
+        />
+        <Stat
+          testId="change-ground"
+          label="Ground clearance"
+          value={len(c.groundClearanceMm)}
+          sub={`under the axle · ${other(c.groundClearanceMm)}`}
+        />
+        <Stat
+          testId="change-inner"
+          label="Inner clearance"
+          value={len(c.innerClearanceMm)}
+          sub={direction(c.innerClearanceMm, "more room inboard", "less room inboard")}
+        />
+        <Stat
+          testId="change-poke"
+          label="Poke"
+          value={len(c.outerPokeMm)}
+          sub={direction(c.outerPokeMm, "reaches further out", "tucks further in")}
+        />
         <Stat
           testId="change-scrub"
           label="Scrub radius"
           value={len(c.scrubRadiusMm)}
-          sub={r.kingpinInclinationDeg === null ? "KPI not entered: wheel shift only" : `with ${formatNumber(r.kingpinInclinationDeg, 1)}° KPI`}
+          sub={
+            r.kingpinInclinationDeg === null ? "KPI not entered: wheel shift only" : `with ${formatNumber(r.kingpinInclinationDeg, 1)}° KPI`
+          }
         />
         <Stat testId="change-track" label="Track width" value={len(c.trackWidthMm)} sub="per axle" />
         <Stat
@@ -137,10 +161,15 @@ export function WarningList({ result, prefs, className }: { result: ComparisonRe
   return (
     <section aria-labelledby="warnings-title" className={className}>
       <h2 id="warnings-title" className="mb-2 text-lg font-semibold">
-        Check before you buy <span className="text-sm font-normal text-basalt-500">({result.warnings.length === 0 ? "nothing flagged" : result.warnings.length})</span>
+        Check before you buy{" "}
+        <span className="text-sm font-normal text-basalt-500">
+          ({result.warnings.length === 0 ? "nothing flagged" : result.warnings.length})
+        </span>
       </h2>
       {result.warnings.length === 0 ? (
-        <p className="rounded-lg bg-clear-100 px-3 py-2 text-sm text-clear-800">None of the checks flags this change. Fit and clearance still depend on your vehicle: measure before you buy.</p>
+        <p className="rounded-lg bg-clear-100 px-3 py-2 text-sm text-clear-800">
+          None of the checks flags this change. Fit and clearance still depend on your vehicle: measure before you buy.
+        </p>
       ) : (
         <ul className="flex flex-col gap-2" data-testid="warnings">
           {result.warnings.map((w) => (
@@ -183,7 +212,11 @@ export function SetupDetailTable({ result: r, prefs }: { result: ComparisonResul
       cell: (f) => (
         <>
           {f.wheelDiameterIn} × {f.wheelWidthIn} in, offset {formatNumber(f.offsetMm, 1, { signed: true })} mm
-          {f.spacerMm > 0 && <span className="block text-xs text-basalt-500">+ {formatPartThickness(f.spacerMm, prefs)} spacer (acts as {formatNumber(f.effectiveOffsetMm, 1, { signed: true })} mm)</span>}
+          {f.spacerMm > 0 && (
+            <span className="block text-xs text-basalt-500">
+              + {formatPartThickness(f.spacerMm, prefs)} spacer (acts as {formatNumber(f.effectiveOffsetMm, 1, { signed: true })} mm)
+            </span>
+          )}
         </>
       ),
     },
@@ -193,7 +226,9 @@ export function SetupDetailTable({ result: r, prefs }: { result: ComparisonResul
       cell: (f) => (
         <>
           {formatInches(f.backspacingFlangeIn, prefs)} to the flange edge
-          <span className="block text-xs text-basalt-500">{formatInches(f.backspacingBeadSeatIn, prefs)} to the bead seat (allowance {formatInches(f.flangeAllowanceIn, prefs)})</span>
+          <span className="block text-xs text-basalt-500">
+            {formatInches(f.backspacingBeadSeatIn, prefs)} to the bead seat (allowance {formatInches(f.flangeAllowanceIn, prefs)})
+          </span>
         </>
       ),
     },
@@ -222,7 +257,11 @@ export function SetupDetailTable({ result: r, prefs }: { result: ComparisonResul
         f.load ? (
           <>
             {f.load.index}: {formatLoad(f.load.kg, prefs)}
-            {f.load.dualIndex !== null && f.load.dualKg !== null && <span className="block text-xs text-basalt-500">dual {f.load.dualIndex}: {formatLoad(f.load.dualKg, prefs)}</span>}
+            {f.load.dualIndex !== null && f.load.dualKg !== null && (
+              <span className="block text-xs text-basalt-500">
+                dual {f.load.dualIndex}: {formatLoad(f.load.dualKg, prefs)}
+              </span>
+            )}
           </>
         ) : (
           <span className="text-basalt-500">not in the size</span>
@@ -230,7 +269,12 @@ export function SetupDetailTable({ result: r, prefs }: { result: ComparisonResul
     },
     {
       label: "Speed symbol",
-      cell: (f) => (f.speed ? `${f.speed.symbol}: ${formatSpeedRating(f.speed.kmh, f.speed.mph, prefs)}` : <span className="text-basalt-500">not in the size</span>),
+      cell: (f) =>
+        f.speed ? (
+          `${f.speed.symbol}: ${formatSpeedRating(f.speed.kmh, f.speed.mph, prefs)}`
+        ) : (
+          <span className="text-basalt-500">not in the size</span>
+        ),
     },
     {
       label: "Load range",
@@ -238,8 +282,11 @@ export function SetupDetailTable({ result: r, prefs }: { result: ComparisonResul
       cell: (f) =>
         f.loadRange ? (
           <>
-            {f.loadRange.letter} ({f.loadRange.plyRating} ply){f.loadRange.maxPressurePsi !== null ? `: ${formatPressure(f.loadRange.maxPressurePsi, prefs)}` : ""}
-            <span className="block text-xs text-basalt-500">{f.loadRange.maxPressurePsi !== null ? "the sidewall marking wins" : f.loadRange.source}</span>
+            {f.loadRange.letter} ({f.loadRange.plyRating} ply)
+            {f.loadRange.maxPressurePsi !== null ? `: ${formatPressure(f.loadRange.maxPressurePsi, prefs)}` : ""}
+            <span className="block text-xs text-basalt-500">
+              {f.loadRange.maxPressurePsi !== null ? "the sidewall marking wins" : f.loadRange.source}
+            </span>
           </>
         ) : (
           <span className="text-basalt-500">not in the size</span>
@@ -248,14 +295,27 @@ export function SetupDetailTable({ result: r, prefs }: { result: ComparisonResul
   ];
   return (
     <section aria-labelledby="details-title">
-      <h2 id="details-title" className="mb-2 text-lg font-semibold">Both setups in detail</h2>
-      <div className="overflow-x-auto rounded-lg ring-1 ring-basalt-100" tabIndex={0} role="region" aria-label="Both setups in detail (scrolls sideways on narrow screens)">
+      <h2 id="details-title" className="mb-2 text-lg font-semibold">
+        Both setups in detail
+      </h2>
+      <div
+        className="overflow-x-auto rounded-lg ring-1 ring-basalt-100"
+        tabIndex={0}
+        role="region"
+        aria-label="Both setups in detail (scrolls sideways on narrow screens)"
+      >
         <table className="w-full min-w-[20rem] border-collapse bg-white text-sm tabular-nums">
           <thead>
             <tr className="bg-basalt-50 text-left">
-              <th scope="col" className="w-[34%] px-3 py-2 font-semibold">Figure</th>
-              <th scope="col" className="w-[33%] border-l-4 border-steel-500 px-3 py-2 font-semibold text-steel-800">Current</th>
-              <th scope="col" className="w-[33%] border-l-4 border-dashed border-ember-500 px-3 py-2 font-semibold text-ember-800">Planned</th>
+              <th scope="col" className="w-[34%] px-3 py-2 font-semibold">
+                Figure
+              </th>
+              <th scope="col" className="w-[33%] border-l-4 border-steel-500 px-3 py-2 font-semibold text-steel-800">
+                Current
+              </th>
+              <th scope="col" className="w-[33%] border-l-4 border-dashed border-ember-500 px-3 py-2 font-semibold text-ember-800">
+                Planned
+              </th>
             </tr>
           </thead>
           <tbody>
@@ -273,8 +333,8 @@ export function SetupDetailTable({ result: r, prefs }: { result: ComparisonResul
         </table>
       </div>
       <p className="mt-2 text-xs text-basalt-500">
-        Dimensions are nominal and unloaded (ISO 4000-1 / ETRTO designations); the maker&apos;s published figures win. Load range pressures are from memory of
-        TRA practice — go by the sidewall.
+        Dimensions are nominal and unloaded (ISO 4000-1 / ETRTO designations); the maker&apos;s published figures win. Load range pressures
+        are from memory of TRA practice — go by the sidewall.
       </p>
     </section>
   );

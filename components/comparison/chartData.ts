@@ -28,6 +28,11 @@ export function speedCharts(r: ComparisonResult, prefs: DisplayPrefs) {
     ticks: [...ticks],
     domain: [ticks[0]!, ticks[ticks.length - 1]!] as [number, number],
     speeds: sp.rows.map((x) => ({ indicated: x.indicated, true: Math.round(x.actual * 10) / 10, shown: x.indicated })),
-    rpm: rpmRows.map((x) => ({ speed: x.speed, current: Math.round(x.currentRpm), planned: Math.round(x.plannedRpm), regeared: Math.round(x.regearedRpm) })),
+    rpm: rpmRows.map((x) => ({
+      speed: x.speed,
+      current: Math.round(x.currentRpm),
+      planned: Math.round(x.plannedRpm),
+      regeared: Math.round(x.regearedRpm),
+    })),
   };
 }

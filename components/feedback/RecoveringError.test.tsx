@@ -6,7 +6,10 @@ import { RecoveringError } from "./RecoveringError";
 vi.mock("next/navigation", () => ({ useRouter: () => ({ refresh: () => {} }) }));
 
 beforeEach(() => {
-  vi.stubGlobal("fetch", vi.fn(async () => new Response("{}", { status: 200 })));
+  vi.stubGlobal(
+    "fetch",
+    vi.fn(async () => new Response("{}", { status: 200 })),
+  );
 });
 afterEach(() => {
   cleanup();

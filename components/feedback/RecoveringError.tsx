@@ -26,11 +26,19 @@ export function RecoveringError({ error, reset, area }: { error: Error & { diges
   // A 5xx answer leaves its request id in a cookie (lib/platform/log/errorRef.ts): shown so the
   // admin can find the log lines. Read once per error and cleared, so a later error does not show
   // a stale id; the server render shows none (no cookie there), so hydration agrees.
-  const requestId = useSyncExternalStore(noSubscription, () => requestIdFor(error), () => undefined);
+  const requestId = useSyncExternalStore(
+    noSubscription,
+    () => requestIdFor(error),
+    () => undefined,
+  );
 
   useEffect(() => {
     let stopped = false;
-    const retry = () => startTransition(() => { router.refresh(); reset(); });
+    const retry = () =>
+      startTransition(() => {
+        router.refresh();
+        reset();
+      });
     const check = async () => {
       try {
         const res = await fetch("/api/health", { cache: "no-store" });
@@ -45,7 +53,10 @@ export function RecoveringError({ error, reset, area }: { error: Error & { diges
     };
     void check();
     const timer = setInterval(check, 3000);
-    return () => { stopped = true; clearInterval(timer); };
+    return () => {
+      stopped = true;
+      clearInterval(timer);
+    };
   }, [down, reset, router]);
 
   return (
@@ -64,7 +75,16 @@ export function RecoveringError({ error, reset, area }: { error: Error & { diges
         </p>
       )}
       <div className="mt-5 flex justify-center gap-3">
-        <Button onClick={() => startTransition(() => { router.refresh(); reset(); })}>Try again</Button>
+        <Button
+          onClick={() =>
+            startTransition(() => {
+              router.refresh();
+              reset();
+            })
+          }
+        >
+          Try again
+        </Button>
       </div>
     </Card>
   );

@@ -23,17 +23,29 @@ export function FitmentSummaryCard({ fit }: { fit: FitmentSummary }) {
       {fit.warnings.length > 0 && (
         <>
           <h3 className="mt-4 text-sm font-semibold">Clearance warnings</h3>
-          <ul className="mt-1 list-disc pl-5 text-sm text-tight-800">{fit.warnings.map((w) => <li key={w}>{w}</li>)}</ul>
+          <ul className="mt-1 list-disc pl-5 text-sm text-tight-800">
+            {fit.warnings.map((w) => (
+              <li key={w}>{w}</li>
+            ))}
+          </ul>
         </>
       )}
       <h3 className="mt-4 text-sm font-semibold">Modifications required</h3>
       {fit.modifications.length ? (
-        <ul className="mt-1 list-disc pl-5 text-sm">{fit.modifications.map((m) => <li key={m}>{m}</li>)}</ul>
+        <ul className="mt-1 list-disc pl-5 text-sm">
+          {fit.modifications.map((m) => (
+            <li key={m}>{m}</li>
+          ))}
+        </ul>
       ) : (
         <p className="mt-1 text-sm text-basalt-600">None expected from the numbers.</p>
       )}
       <h3 className="mt-4 text-sm font-semibold">Cautions</h3>
-      <ul className="mt-1 list-disc pl-5 text-sm text-basalt-700">{quoteCautions(fit).map((c) => <li key={c}>{c}</li>)}</ul>
+      <ul className="mt-1 list-disc pl-5 text-sm text-basalt-700">
+        {quoteCautions(fit).map((c) => (
+          <li key={c}>{c}</li>
+        ))}
+      </ul>
     </Card>
   );
 }

@@ -10,7 +10,9 @@ export function HubChecksList({ checks }: { checks: readonly HubCheck[] }) {
     <ul className="mt-2 flex flex-col gap-2 text-sm" data-testid="hub-checks">
       {checks.map((c) => (
         <li key={c.line}>
-          <span className="font-medium">Line {c.line}: {c.description}</span>
+          <span className="font-medium">
+            Line {c.line}: {c.description}
+          </span>
           <ul className="mt-0.5 list-disc pl-5">
             {c.findings.map((f) => (
               <li key={f.code} className={TONE[f.level]}>

@@ -12,12 +12,20 @@ export function QuoteDocumentLines({ document: d }: { document: QuoteDocument })
     <>
       <table className="mt-3 hidden w-full text-left text-sm sm:table">
         <thead className="text-xs uppercase tracking-wide text-basalt-600">
-          <tr><th className="py-1">Item</th><th className="text-right">Qty</th><th className="text-right">Unit</th><th className="text-right">Amount</th></tr>
+          <tr>
+            <th className="py-1">Item</th>
+            <th className="text-right">Qty</th>
+            <th className="text-right">Unit</th>
+            <th className="text-right">Amount</th>
+          </tr>
         </thead>
         <tbody className="divide-y divide-basalt-100">
           {d.lines.map((l, i) => (
             <tr key={i}>
-              <td className="py-1">{l.description}{l.discountCents > 0 && <span className="text-basalt-600"> (less {formatUsd(l.discountCents)})</span>}</td>
+              <td className="py-1">
+                {l.description}
+                {l.discountCents > 0 && <span className="text-basalt-600"> (less {formatUsd(l.discountCents)})</span>}
+              </td>
               <td className="text-right tabular-nums">{formatQuantity(l.quantity, l.unit)}</td>
               <td className="text-right tabular-nums">{formatUsd(l.unitPriceCents)}</td>
               <td className="text-right tabular-nums">{formatUsd(l.lineTotalCents)}</td>
@@ -30,19 +38,36 @@ export function QuoteDocumentLines({ document: d }: { document: QuoteDocument })
           <li key={i} className="py-2">
             <span className="block font-medium">{l.description}</span>
             <span className="flex justify-between tabular-nums text-basalt-700">
-              <span>{formatQuantity(l.quantity, l.unit)} × {formatUsd(l.unitPriceCents)}{l.discountCents > 0 && ` less ${formatUsd(l.discountCents)}`}</span>
+              <span>
+                {formatQuantity(l.quantity, l.unit)} × {formatUsd(l.unitPriceCents)}
+                {l.discountCents > 0 && ` less ${formatUsd(l.discountCents)}`}
+              </span>
               <span className="font-medium text-basalt-950">{formatUsd(l.lineTotalCents)}</span>
             </span>
           </li>
         ))}
       </ul>
       <dl className="ml-auto mt-4 grid max-w-xs grid-cols-[1fr_auto] gap-x-4 gap-y-1 text-sm tabular-nums">
-        <dt>Subtotal</dt><dd className="text-right">{formatUsd(t.subtotalCents)}</dd>
-        {t.discountCents > 0 && (<><dt>Discount</dt><dd className="text-right">−{formatUsd(t.discountCents)}</dd></>)}
-        <dt>Tax ({formatBp(t.taxRateBp)} %)</dt><dd className="text-right">{formatUsd(t.taxCents)}</dd>
-        <dt className="font-semibold">Total</dt><dd className="text-right font-semibold">{formatUsd(t.totalCents)}</dd>
-        <dt>Deposit ({t.depositPct} %)</dt><dd className="text-right" data-testid="public-deposit">{formatUsd(t.depositCents)}</dd>
-        <dt>Balance due after the deposit</dt><dd className="text-right" data-testid="public-balance">{formatUsd(t.balanceCents)}</dd>
+        <dt>Subtotal</dt>
+        <dd className="text-right">{formatUsd(t.subtotalCents)}</dd>
+        {t.discountCents > 0 && (
+          <>
+            <dt>Discount</dt>
+            <dd className="text-right">−{formatUsd(t.discountCents)}</dd>
+          </>
+        )}
+        <dt>Tax ({formatBp(t.taxRateBp)} %)</dt>
+        <dd className="text-right">{formatUsd(t.taxCents)}</dd>
+        <dt className="font-semibold">Total</dt>
+        <dd className="text-right font-semibold">{formatUsd(t.totalCents)}</dd>
+        <dt>Deposit ({t.depositPct} %)</dt>
+        <dd className="text-right" data-testid="public-deposit">
+          {formatUsd(t.depositCents)}
+        </dd>
+        <dt>Balance due after the deposit</dt>
+        <dd className="text-right" data-testid="public-balance">
+          {formatUsd(t.balanceCents)}
+        </dd>
       </dl>
     </>
   );

@@ -29,12 +29,33 @@ export function SetupFields<T extends FieldValues>({
   const reference = useWatch({ control: form.control, name: p("position.reference") }) as string | undefined;
   const id = (k: string) => `f-${name}-${k}`.replace(/\./g, "-");
   return (
-    <fieldset className={`rounded-card border p-4 ${tone === "ember" ? "border-ember-200 bg-ember-50/40" : "border-steel-200 bg-steel-50/40"}`}>
+    <fieldset
+      className={`rounded-card border p-4 ${tone === "ember" ? "border-ember-200 bg-ember-50/40" : "border-steel-200 bg-steel-50/40"}`}
+    >
       <legend className="px-1 text-sm font-semibold text-basalt-900">{legend}</legend>
       <div className="grid gap-3 sm:grid-cols-2">
-        <TextField id={id("tire")} label={L.tire} hint="e.g. 265/70R17, LT285/75R16 or 35x12.50R17LT" {...register(p("tire"))} error={err("tire")} className="sm:col-span-2" />
-        <TextField id={id("d")} label={L.wheelDiameterIn} inputMode="decimal" {...register(p("wheelDiameterIn"))} error={err("wheelDiameterIn")} />
-        <TextField id={id("w")} label={L.wheelWidthIn} hint="Fractions work: 8-1/2 or 8½" {...register(p("wheelWidthIn"))} error={err("wheelWidthIn")} />
+        <TextField
+          id={id("tire")}
+          label={L.tire}
+          hint="e.g. 265/70R17, LT285/75R16 or 35x12.50R17LT"
+          {...register(p("tire"))}
+          error={err("tire")}
+          className="sm:col-span-2"
+        />
+        <TextField
+          id={id("d")}
+          label={L.wheelDiameterIn}
+          inputMode="decimal"
+          {...register(p("wheelDiameterIn"))}
+          error={err("wheelDiameterIn")}
+        />
+        <TextField
+          id={id("w")}
+          label={L.wheelWidthIn}
+          hint="Fractions work: 8-1/2 or 8½"
+          {...register(p("wheelWidthIn"))}
+          error={err("wheelWidthIn")}
+        />
       </div>
       <div role="radiogroup" aria-label={`${legend}: how the wheel position is given`} className="mt-3 flex flex-wrap gap-4 text-sm">
         <label className="flex items-center gap-2">
@@ -46,7 +67,13 @@ export function SetupFields<T extends FieldValues>({
       </div>
       {mode === "backspacing" ? (
         <div className="mt-3 grid gap-3 sm:grid-cols-2">
-          <TextField id={id("bs")} label={L["position.backspacingIn"]} hint="e.g. 4-1/2, 4½ or 4.5" {...register(p("position.backspacingIn"))} error={err("position.backspacingIn")} />
+          <TextField
+            id={id("bs")}
+            label={L["position.backspacingIn"]}
+            hint="e.g. 4-1/2, 4½ or 4.5"
+            {...register(p("position.backspacingIn"))}
+            error={err("position.backspacingIn")}
+          />
           <TextField
             id={id("flange")}
             label={L["position.flangeIn"]}
@@ -57,7 +84,8 @@ export function SetupFields<T extends FieldValues>({
           <div role="radiogroup" aria-label={`${legend}: backspacing measured to`} className="flex flex-col gap-1 text-sm sm:col-span-2">
             <span className="font-medium text-basalt-800">{L["position.reference"]}</span>
             <label className="flex items-center gap-2">
-              <input type="radio" value="flange" {...register(p("position.reference"))} /> the flange edge (a straightedge across the back of the wheel)
+              <input type="radio" value="flange" {...register(p("position.reference"))} /> the flange edge (a straightedge across the back
+              of the wheel)
             </label>
             <label className="flex items-center gap-2">
               <input type="radio" value="bead-seat" {...register(p("position.reference"))} /> the bead seat (where the tire bead sits)
@@ -71,12 +99,24 @@ export function SetupFields<T extends FieldValues>({
         </div>
       ) : (
         <div className="mt-3 grid gap-3 sm:grid-cols-2">
-          <TextField id={id("offset")} label={L["position.offsetMm"]} hint="Positive when the mounting face is outboard of the rim centre, e.g. -12" {...register(p("position.offsetMm"))} error={err("position.offsetMm")} />
+          <TextField
+            id={id("offset")}
+            label={L["position.offsetMm"]}
+            hint="Positive when the mounting face is outboard of the rim centre, e.g. -12"
+            {...register(p("position.offsetMm"))}
+            error={err("position.offsetMm")}
+          />
         </div>
       )}
       {spacer && (
         <div className="mt-3 grid gap-3 sm:grid-cols-2">
-          <TextField id={id("spacer")} label={L.spacerMm} hint="Leave empty for none. In mm; inches need their unit, e.g. 1 in." {...register(p("spacerMm"))} error={err("spacerMm")} />
+          <TextField
+            id={id("spacer")}
+            label={L.spacerMm}
+            hint="Leave empty for none. In mm; inches need their unit, e.g. 1 in."
+            {...register(p("spacerMm"))}
+            error={err("spacerMm")}
+          />
         </div>
       )}
     </fieldset>

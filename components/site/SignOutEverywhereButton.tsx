@@ -9,7 +9,11 @@ export function SignOutEverywhereButton() {
     if (!window.confirm("Sign out on every device, this one included?")) return;
     setState("pending");
     try {
-      const res = await fetch("/api/account/sessions/end-all", { method: "POST", headers: { "Content-Type": "application/json" }, body: JSON.stringify({ confirm: true }) });
+      const res = await fetch("/api/account/sessions/end-all", {
+        method: "POST",
+        headers: { "Content-Type": "application/json" },
+        body: JSON.stringify({ confirm: true }),
+      });
       if (!res.ok) throw new Error(String(res.status));
       const { signOut } = await import("next-auth/react");
       await signOut({ callbackUrl: "/sign-in?ended=1" });

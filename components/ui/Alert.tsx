@@ -10,9 +10,22 @@ const tones: Record<Tone, string> = {
 };
 
 /** A status message; errors are announced immediately, others politely. */
-export function Alert({ tone = "info", title, children, className }: { tone?: Tone; title?: string; children?: ReactNode; className?: string }) {
+export function Alert({
+  tone = "info",
+  title,
+  children,
+  className,
+}: {
+  tone?: Tone;
+  title?: string;
+  children?: ReactNode;
+  className?: string;
+}) {
   return (
-    <div role={tone === "error" ? "alert" : "status"} className={cx("rounded-lg px-4 py-3 text-sm ring-1 ring-inset", tones[tone], className)}>
+    <div
+      role={tone === "error" ? "alert" : "status"}
+      className={cx("rounded-lg px-4 py-3 text-sm ring-1 ring-inset", tones[tone], className)}
+    >
       {title && <p className="font-semibold">{title}</p>}
       {children}
     </div>

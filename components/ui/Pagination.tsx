@@ -7,7 +7,17 @@ import { Button } from "./Button";
  * @example
  * <Pagination label="Catalog pages" pageIndex={0} pageCount={4} onPage={setPage} />
  */
-export function Pagination({ label, pageIndex, pageCount, onPage }: { label: string; pageIndex: number; pageCount: number; onPage: (pageIndex: number) => void }) {
+export function Pagination({
+  label,
+  pageIndex,
+  pageCount,
+  onPage,
+}: {
+  label: string;
+  pageIndex: number;
+  pageCount: number;
+  onPage: (pageIndex: number) => void;
+}) {
   const last = Math.max(pageCount, 1) - 1;
   return (
     <nav aria-label={label} className="flex flex-wrap items-center gap-2 text-sm">

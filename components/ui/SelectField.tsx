@@ -27,7 +27,10 @@ export function SelectField({ label, name, options, error, hint, hideLabel, id, 
         ref={ref}
         aria-invalid={error ? true : undefined}
         aria-describedby={describedBy}
-        className={cx("min-h-10 rounded-lg border bg-white px-3 py-2 text-base text-basalt-900 shadow-sm", error ? "border-contact-600" : "border-basalt-300 focus:border-ember-500")}
+        className={cx(
+          "min-h-10 rounded-lg border bg-white px-3 py-2 text-base text-basalt-900 shadow-sm",
+          error ? "border-contact-600" : "border-basalt-300 focus:border-ember-500",
+        )}
         {...rest}
       >
         {options.map((o) => (

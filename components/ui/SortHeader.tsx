@@ -24,11 +24,16 @@ export function SortHeader({
       <button
         type="button"
         onClick={onSort}
-        className={cx("inline-flex items-center gap-1 rounded text-left font-semibold uppercase tracking-wide hover:text-basalt-900", align === "end" && "flex-row-reverse text-right")}
+        className={cx(
+          "inline-flex items-center gap-1 rounded text-left font-semibold uppercase tracking-wide hover:text-basalt-900",
+          align === "end" && "flex-row-reverse text-right",
+        )}
       >
         <span>{children}</span>
         {/* The arrow's room is kept when unsorted, so the header does not shift when clicked. */}
-        <span aria-hidden className="inline-block w-3 shrink-0 text-center">{direction === "asc" ? "▲" : direction === "desc" ? "▼" : ""}</span>
+        <span aria-hidden className="inline-block w-3 shrink-0 text-center">
+          {direction === "asc" ? "▲" : direction === "desc" ? "▼" : ""}
+        </span>
       </button>
     </th>
   );

@@ -22,7 +22,16 @@ const COLUMNS: TableColumn<Tire>[] = [
 /** A table sorted in the browser, as the pages using it are. */
 function Sorted() {
   const sorted = useSortedRows(TIRES, COLUMNS);
-  return <Table caption="Tires; column headers sort" columns={COLUMNS} rows={sorted.rows} rowKey={(t) => t.id} sort={sorted.sort} onSort={sorted.onSort} />;
+  return (
+    <Table
+      caption="Tires; column headers sort"
+      columns={COLUMNS}
+      rows={sorted.rows}
+      rowKey={(t) => t.id}
+      sort={sorted.sort}
+      onSort={sorted.onSort}
+    />
+  );
 }
 const bodyRows = () => within(screen.getAllByRole("rowgroup")[1]!).getAllByRole("row");
 const header = (name: string) => screen.getByRole("columnheader", { name: new RegExp(`^${name}`) });

@@ -28,7 +28,11 @@ describe("sortRows", () => {
   });
 
   it("keeps ties in their own order in both directions (the finder's rank stays the tie-break)", () => {
-    expect(sortRows(rows, (r) => r.d, true).slice(0, 2).map((r) => r.w)).toEqual(["17x10", "18x9"]);
+    expect(
+      sortRows(rows, (r) => r.d, true)
+        .slice(0, 2)
+        .map((r) => r.w),
+    ).toEqual(["17x10", "18x9"]);
   });
 
   it("orders text naturally, digits by value, letters without regard to case", () => {
@@ -38,7 +42,16 @@ describe("sortRows", () => {
   });
 
   it("treats NaN and Infinity as figures: NaN has none, Infinity sorts after every number", () => {
-    const r = sortRows([{ v: Infinity, n: 1 }, { v: NaN, n: 2 }, { v: 2, n: 3 }, { v: Infinity, n: 4 }], (x) => x.v, true);
+    const r = sortRows(
+      [
+        { v: Infinity, n: 1 },
+        { v: NaN, n: 2 },
+        { v: 2, n: 3 },
+        { v: Infinity, n: 4 },
+      ],
+      (x) => x.v,
+      true,
+    );
     expect(r.map((x) => x.n)).toEqual([1, 4, 3, 2]);
   });
 

@@ -35,7 +35,8 @@ export function sortRows<R>(rows: readonly R[], value: (row: R) => SortValue, de
     const aMissing = a.v === null || a.v === undefined || (typeof a.v === "number" && Number.isNaN(a.v));
     const bMissing = b.v === null || b.v === undefined || (typeof b.v === "number" && Number.isNaN(b.v));
     if (aMissing || bMissing) return aMissing === bMissing ? a.index - b.index : aMissing ? 1 : -1;
-    const c = typeof a.v === "number" && typeof b.v === "number" ? (a.v === b.v ? 0 : a.v - b.v) : collator.compare(String(a.v), String(b.v));
+    const c =
+      typeof a.v === "number" && typeof b.v === "number" ? (a.v === b.v ? 0 : a.v - b.v) : collator.compare(String(a.v), String(b.v));
     return c === 0 ? a.index - b.index : desc ? -c : c;
   });
   return keyed.map((k) => k.row);

@@ -11,7 +11,10 @@ import { type TableSort, nextSort, sortRows } from "./tableSort";
  * const sorted = useSortedRows(quotes, COLUMNS);
  * <Table columns={COLUMNS} {...sorted} rowKey={(q) => q.id} />  // rows, sort and onSort
  */
-export function useSortedRows<R>(rows: readonly R[], columns: readonly TableColumn<R>[]): { rows: readonly R[]; sort: TableSort; onSort: (columnId: string) => void } {
+export function useSortedRows<R>(
+  rows: readonly R[],
+  columns: readonly TableColumn<R>[],
+): { rows: readonly R[]; sort: TableSort; onSort: (columnId: string) => void } {
   const [sort, setSort] = useState<TableSort>(null);
   const by = columns.find((c) => c.id === sort?.id)?.sortValue;
   return {

@@ -17,11 +17,7 @@ export async function up(knex: Knex): Promise<void> {
     t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
     t.timestamp("updated_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
     t.check("role in ('member','shop_staff','shop_owner','admin')", [], "users_role_known");
-    t.check(
-      "(role in ('shop_staff','shop_owner')) = (shop_id is not null)",
-      [],
-      "users_shop_role_has_shop",
-    );
+    t.check("(role in ('shop_staff','shop_owner')) = (shop_id is not null)", [], "users_shop_role_has_shop");
   });
   // E-mail addresses compare case-insensitively; the column keeps what the user typed.
   await knex.raw("create unique index users_email_lower_unique on users (lower(email))");

@@ -39,6 +39,16 @@ export async function down(knex: Knex): Promise<void> {
   await knex.schema.dropTable("staff_invites");
   await knex.schema.alterTable("shops", (t) => {
     t.dropChecks(["shops_tax_rate_range", "shops_rates_range", "shops_validity_range", "shops_deposit_range", "shops_currency_usd"]);
-    t.dropColumns("address", "phone", "tax_rate_bp", "labour_rate_cents", "fabrication_rate_cents", "quote_validity_days", "deposit_pct", "currency", "updated_at");
+    t.dropColumns(
+      "address",
+      "phone",
+      "tax_rate_bp",
+      "labour_rate_cents",
+      "fabrication_rate_cents",
+      "quote_validity_days",
+      "deposit_pct",
+      "currency",
+      "updated_at",
+    );
   });
 }

@@ -32,7 +32,11 @@ export async function up(knex: Knex): Promise<void> {
     t.index(["shop_id", "kind"]);
     t.check("kind in ('tire','wheel','service')", [], "catalog_kind_known");
     t.check("price_cents >= 0 and (qty_on_hand is null or qty_on_hand >= 0)", [], "catalog_amounts_non_negative");
-    t.check("kind <> 'tire' or (tire_size is not null and tire_rim_in is not null and tire_diameter_mm is not null)", [], "catalog_tire_has_size");
+    t.check(
+      "kind <> 'tire' or (tire_size is not null and tire_rim_in is not null and tire_diameter_mm is not null)",
+      [],
+      "catalog_tire_has_size",
+    );
     t.check(
       "kind <> 'wheel' or (wheel_diameter_in is not null and wheel_width_in is not null and wheel_offset_mm is not null and bolt_pattern is not null)",
       [],

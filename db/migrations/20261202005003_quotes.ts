@@ -68,7 +68,11 @@ export async function up(knex: Knex): Promise<void> {
     t.index(["shop_id", "status"]);
     t.check("status in ('draft','sent','accepted','deposit_paid','installed','declined','expired')", [], "quotes_status_known");
     t.check("wheel_qty in (4, 5)", [], "quotes_wheel_qty");
-    t.check("discount_cents >= 0 and subtotal_cents >= 0 and tax_cents >= 0 and total_cents >= 0 and deposit_cents >= 0", [], "quotes_money_non_negative");
+    t.check(
+      "discount_cents >= 0 and subtotal_cents >= 0 and tax_cents >= 0 and total_cents >= 0 and deposit_cents >= 0",
+      [],
+      "quotes_money_non_negative",
+    );
   });
 
   await knex.schema.createTable("quote_lines", (t) => {
@@ -127,5 +131,6 @@ export async function up(knex: Knex): Promise<void> {
 }
 
 export async function down(knex: Knex): Promise<void> {
-  for (const t of ["payment_webhook_events", "payments", "quote_events", "quote_lines", "quotes", "customer_vehicles", "customers"]) await knex.schema.dropTable(t);
+  for (const t of ["payment_webhook_events", "payments", "quote_events", "quote_lines", "quotes", "customer_vehicles", "customers"])
+    await knex.schema.dropTable(t);
 }

@@ -8,7 +8,10 @@ export async function up(knex: Knex): Promise<void> {
     t.double("clearance_margin_mm").notNullable().defaultTo(12.7);
     t.check("clearance_margin_mm >= 0 and clearance_margin_mm <= 100", [], "vehicles_margin_range");
   });
-  await knex("install_checklists").whereNotNull("comparison_id").whereNotIn("comparison_id", knex("comparisons").select("id")).update({ comparison_id: null });
+  await knex("install_checklists")
+    .whereNotNull("comparison_id")
+    .whereNotIn("comparison_id", knex("comparisons").select("id"))
+    .update({ comparison_id: null });
   await knex.schema.alterTable("install_checklists", (t) => {
     t.foreign("comparison_id", "checklists_comparison_fk").references("id").inTable("comparisons").onDelete("SET NULL");
   });

@@ -100,11 +100,16 @@ export async function up(knex: Knex): Promise<void> {
     t.index(["booking_id"]);
   });
   await knex.raw("alter table bay_reservations add column during tstzrange not null");
-  await knex.raw("alter table bay_reservations add constraint bay_reservations_during_bounded check (not isempty(during) and not lower_inf(during) and not upper_inf(during))");
-  await knex.raw("alter table bay_reservations add constraint bay_reservations_no_overlap exclude using gist (bay_id with =, during with &&)");
+  await knex.raw(
+    "alter table bay_reservations add constraint bay_reservations_during_bounded check (not isempty(during) and not lower_inf(during) and not upper_inf(during))",
+  );
+  await knex.raw(
+    "alter table bay_reservations add constraint bay_reservations_no_overlap exclude using gist (bay_id with =, during with &&)",
+  );
 }
 
 export async function down(knex: Knex): Promise<void> {
-  for (const t of ["bay_reservations", "bookings", "service_times", "bays", "shop_closed_days", "shop_opening_hours", "shop_schedules"]) await knex.schema.dropTable(t);
+  for (const t of ["bay_reservations", "bookings", "service_times", "bays", "shop_closed_days", "shop_opening_hours", "shop_schedules"])
+    await knex.schema.dropTable(t);
   await knex.raw("drop extension if exists btree_gist");
 }

@@ -21,7 +21,9 @@ const SETUP_OF = (tire: string, diameter: string, width: string, offset: string)
  * 25.4 mm). A spacer cannot be put back into the old columns: it moves the wheel outboard, so
  * it is taken off the offset.
  */
-const OFFSET_OF = (col: string) => `(case when ${col}->'position'->>'mode' = 'offset' then (${col}->'position'->>'offsetMm')::double precision
+const OFFSET_OF = (
+  col: string,
+) => `(case when ${col}->'position'->>'mode' = 'offset' then (${col}->'position'->>'offsetMm')::double precision
   else ((${col}->'position'->>'backspacingIn')::double precision
         - case when ${col}->'position'->>'reference' = 'flange' then (${col}->'position'->>'flangeIn')::double precision else 0 end
         - (${col}->>'wheelWidthIn')::double precision / 2) * 25.4 end

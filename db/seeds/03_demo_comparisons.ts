@@ -16,8 +16,22 @@ export const DEMO_COMPARISONS: { id: string; name: string; input: ComparisonInpu
     shared: false,
     input: {
       current: { tire: "245/75R16 111S", wheelDiameterIn: 16, wheelWidthIn: 7, position: { mode: "offset", offsetMm: 31 }, spacerMm: 0 },
-      planned: { tire: "285/75R16LT 126/123Q LRE", wheelDiameterIn: 16, wheelWidthIn: 8, position: { mode: "backspacing", backspacingIn: 4.5, reference: "flange", flangeIn: 0.5 }, spacerMm: 0 },
-      vehicle: { kingpinInclinationDeg: 8, axleRatio: 3.73, transmissionRatio: 1, cruiseSpeedsMph: [60, 70], fenderLineMm: null, firstGearRatio: null, transferLowRatio: null },
+      planned: {
+        tire: "285/75R16LT 126/123Q LRE",
+        wheelDiameterIn: 16,
+        wheelWidthIn: 8,
+        position: { mode: "backspacing", backspacingIn: 4.5, reference: "flange", flangeIn: 0.5 },
+        spacerMm: 0,
+      },
+      vehicle: {
+        kingpinInclinationDeg: 8,
+        axleRatio: 3.73,
+        transmissionRatio: 1,
+        cruiseSpeedsMph: [60, 70],
+        fenderLineMm: null,
+        firstGearRatio: null,
+        transferLowRatio: null,
+      },
     },
   },
   {
@@ -25,9 +39,29 @@ export const DEMO_COMPARISONS: { id: string; name: string; input: ComparisonInpu
     name: "Camp trailer tow rig — 35s",
     shared: false,
     input: {
-      current: { tire: "LT275/70R18 125/122S LRE", wheelDiameterIn: 18, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 18 }, spacerMm: 0 },
-      planned: { tire: "35x12.50R18LT 123Q LRE", wheelDiameterIn: 18, wheelWidthIn: 9, position: { mode: "offset", offsetMm: 0 }, spacerMm: 0 },
-      vehicle: { kingpinInclinationDeg: null, axleRatio: 3.55, transmissionRatio: 0.69, cruiseSpeedsMph: [62, 70], fenderLineMm: 150, firstGearRatio: null, transferLowRatio: null },
+      current: {
+        tire: "LT275/70R18 125/122S LRE",
+        wheelDiameterIn: 18,
+        wheelWidthIn: 8,
+        position: { mode: "offset", offsetMm: 18 },
+        spacerMm: 0,
+      },
+      planned: {
+        tire: "35x12.50R18LT 123Q LRE",
+        wheelDiameterIn: 18,
+        wheelWidthIn: 9,
+        position: { mode: "offset", offsetMm: 0 },
+        spacerMm: 0,
+      },
+      vehicle: {
+        kingpinInclinationDeg: null,
+        axleRatio: 3.55,
+        transmissionRatio: 0.69,
+        cruiseSpeedsMph: [62, 70],
+        fenderLineMm: 150,
+        firstGearRatio: null,
+        transferLowRatio: null,
+      },
     },
   },
   {
@@ -36,8 +70,22 @@ export const DEMO_COMPARISONS: { id: string; name: string; input: ComparisonInpu
     shared: true,
     input: {
       current: { tire: "265/70R17 113T", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 }, spacerMm: 0 },
-      planned: { tire: "37x12.50R17LT 124Q LRD", wheelDiameterIn: 17, wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 }, spacerMm: 0 },
-      vehicle: { kingpinInclinationDeg: 9, axleRatio: 4.1, transmissionRatio: 1, cruiseSpeedsMph: [55, 65], fenderLineMm: 140, firstGearRatio: 3.59, transferLowRatio: 4 },
+      planned: {
+        tire: "37x12.50R17LT 124Q LRD",
+        wheelDiameterIn: 17,
+        wheelWidthIn: 9,
+        position: { mode: "offset", offsetMm: -12 },
+        spacerMm: 0,
+      },
+      vehicle: {
+        kingpinInclinationDeg: 9,
+        axleRatio: 4.1,
+        transmissionRatio: 1,
+        cruiseSpeedsMph: [55, 65],
+        fenderLineMm: 140,
+        firstGearRatio: 3.59,
+        transferLowRatio: 4,
+      },
     },
   },
 ];
@@ -49,7 +97,13 @@ export async function seed(knex: Knex): Promise<void> {
     const input = comparisonInputSchema.parse(c.input);
     const exists = await knex("comparisons").where({ id: c.id }).first("id");
     if (!exists) {
-      await knex("comparisons").insert({ id: c.id, owner_id: JUNO, name: c.name, input: JSON.stringify(input), ...keyFigureColumns(input) });
+      await knex("comparisons").insert({
+        id: c.id,
+        owner_id: JUNO,
+        name: c.name,
+        input: JSON.stringify(input),
+        ...keyFigureColumns(input),
+      });
     }
     if (c.shared) {
       const everShared = await knex("comparison_shares").where({ comparison_id: c.id }).first("id");

@@ -26,8 +26,20 @@ const VEHICLES = [
     front_suspension: "independent",
     bolt: "6x5.5",
     hub_bore_mm: 108,
-    stock: setup({ tire: "265/70R17 113T", wheelDiameterIn: 17, wheelWidthIn: 7.5, position: { mode: "offset", offsetMm: 44 }, spacerMm: 0 }),
-    current: setup({ tire: "LT285/70R17 121/118Q E", wheelDiameterIn: 17, wheelWidthIn: 8.5, position: { mode: "offset", offsetMm: 18 }, spacerMm: 0 }),
+    stock: setup({
+      tire: "265/70R17 113T",
+      wheelDiameterIn: 17,
+      wheelWidthIn: 7.5,
+      position: { mode: "offset", offsetMm: 44 },
+      spacerMm: 0,
+    }),
+    current: setup({
+      tire: "LT285/70R17 121/118Q E",
+      wheelDiameterIn: 17,
+      wheelWidthIn: 8.5,
+      position: { mode: "offset", offsetMm: 18 },
+      spacerMm: 0,
+    }),
     lift_height_mm: parseLength("2-1/2", "in"),
     kingpin_inclination_deg: 12,
     axle_ratio: 3.73,
@@ -133,7 +145,12 @@ async function seedPhotos(knex: Knex) {
   const store = s3PhotoStore();
   for (const [vi, v] of VEHICLES.entries()) {
     const wanted = [
-      { id: photoId(vi + 1, 1), clearance: null as string | null, name: `${v.name} side view.jpg`, make: () => demoVehiclePicture(`${v.name} — ${v.year} ${v.model.toLowerCase()}`, v.picture) },
+      {
+        id: photoId(vi + 1, 1),
+        clearance: null as string | null,
+        name: `${v.name} side view.jpg`,
+        make: () => demoVehiclePicture(`${v.name} — ${v.year} ${v.model.toLowerCase()}`, v.picture),
+      },
       ...v.points.slice(0, 2).map((p) => ({
         id: photoId(vi + 1, p.n + 1),
         clearance: pointId(vi + 1, p.n),
@@ -171,9 +188,28 @@ async function seedPhotos(knex: Knex) {
   if (!(await knex("comparisons").where({ id: TIED_COMPARISON }).first("id"))) {
     const input = comparisonInputSchema.parse({
       current: hauler.current,
-      planned: { tire: "35x12.50R17LT 121Q LRE", wheelDiameterIn: 17, wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 }, spacerMm: 0 },
-      vehicle: { kingpinInclinationDeg: hauler.kingpin_inclination_deg, axleRatio: hauler.axle_ratio, transmissionRatio: hauler.transmission_ratio, cruiseSpeedsMph: [60, 70], fenderLineMm: null },
+      planned: {
+        tire: "35x12.50R17LT 121Q LRE",
+        wheelDiameterIn: 17,
+        wheelWidthIn: 9,
+        position: { mode: "offset", offsetMm: -12 },
+        spacerMm: 0,
+      },
+      vehicle: {
+        kingpinInclinationDeg: hauler.kingpin_inclination_deg,
+        axleRatio: hauler.axle_ratio,
+        transmissionRatio: hauler.transmission_ratio,
+        cruiseSpeedsMph: [60, 70],
+        fenderLineMm: null,
+      },
     });
-    await knex("comparisons").insert({ id: TIED_COMPARISON, owner_id: JUNO, name: "Gravel Hauler — 35s on 17x9", vehicle_id: hauler.id, input: JSON.stringify(input), ...keyFigureColumns(input) });
+    await knex("comparisons").insert({
+      id: TIED_COMPARISON,
+      owner_id: JUNO,
+      name: "Gravel Hauler — 35s on 17x9",
+      vehicle_id: hauler.id,
+      input: JSON.stringify(input),
+      ...keyFigureColumns(input),
+    });
   }
 }

@@ -30,7 +30,8 @@ export const DEMO_QUOTES = {
   expired: "d0000000-0000-4000-8000-000000000005",
 } as const;
 
-const H = "kind,sku,description,price,qty_on_hand,tire_size,wheel_diameter_in,wheel_width_in,wheel_offset_mm,wheel_backspacing_in,wheel_backspacing_reference,bolt_pattern,center_bore_mm,beadlock,service_type,service_unit";
+const H =
+  "kind,sku,description,price,qty_on_hand,tire_size,wheel_diameter_in,wheel_width_in,wheel_offset_mm,wheel_backspacing_in,wheel_backspacing_reference,bolt_pattern,center_bore_mm,beadlock,service_type,service_unit";
 const CATALOG = [
   H,
   "tire,HB-AT-2857017,Hogback AT all-terrain LT285/70R17 load range E,312.00,16,LT285/70R17 121/118Q E,,,,,,,,,,",
@@ -56,22 +57,32 @@ const CATALOG = [
 ].join("\n");
 
 // The hub bore is invented for the demo: the 106.1 mm wheels sit on it hub-centric, the 108 mm ones need rings.
-const CURRENT_SETUP: Setup = { tire: "265/70R17 115T", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 }, spacerMm: 0 };
-const VEHICLE = counterVehicleForEngine({ description: "Half-ton pickup, stock height", boltPattern: "6x5.5", hubBoreMm: 106.1, currentSetup: CURRENT_SETUP, axleRatio: 3.73 });
+const CURRENT_SETUP: Setup = {
+  tire: "265/70R17 115T",
+  wheelDiameterIn: 17,
+  wheelWidthIn: 8,
+  position: { mode: "offset", offsetMm: 25 },
+  spacerMm: 0,
+};
+const VEHICLE = counterVehicleForEngine({
+  description: "Half-ton pickup, stock height",
+  boltPattern: "6x5.5",
+  hubBoreMm: 106.1,
+  currentSetup: CURRENT_SETUP,
+  axleRatio: 3.73,
+});
 
 export async function seed(knex: Knex): Promise<void> {
-  await knex("shops")
-    .where({ id: DEMO_SHOP.id, address: "" })
-    .update({
-      address: "1180 Slate Wash Road, Quarry Flats",
-      phone: "555-0142",
-      tax_rate_bp: 825,
-      labour_rate_cents: 12500,
-      fabrication_rate_cents: 14500,
-      quote_validity_days: 14,
-      deposit_pct: 25,
-      currency: "USD",
-    });
+  await knex("shops").where({ id: DEMO_SHOP.id, address: "" }).update({
+    address: "1180 Slate Wash Road, Quarry Flats",
+    phone: "555-0142",
+    tax_rate_bp: 825,
+    labour_rate_cents: 12500,
+    fabrication_rate_cents: 14500,
+    quote_validity_days: 14,
+    deposit_pct: 25,
+    currency: "USD",
+  });
 
   const report = parseCatalogCsv(CATALOG);
   if (report.errors.length) throw new Error(`demo catalog: ${JSON.stringify(report.errors)}`);
@@ -81,7 +92,10 @@ export async function seed(knex: Knex): Promise<void> {
     .ignore();
 
   for (const c of DEMO_CUSTOMERS) {
-    await knex("customers").insert({ ...c, shop_id: DEMO_SHOP.id, phone_digits: c.phone.replace(/\D/g, "") }).onConflict("id").ignore();
+    await knex("customers")
+      .insert({ ...c, shop_id: DEMO_SHOP.id, phone_digits: c.phone.replace(/\D/g, "") })
+      .onConflict("id")
+      .ignore();
   }
   const vehicleId = "e0000000-0000-4000-8000-000000000001";
   await knex("customer_vehicles")
@@ -100,28 +114,130 @@ export async function seed(knex: Knex): Promise<void> {
 
   const bySku = async (sku: string) => knex("catalog_items").where({ shop_id: DEMO_SHOP.id, sku }).first();
   const shop = await knex("shops").where({ id: DEMO_SHOP.id }).first();
-  const plans: { id: string; number: number; customer: number; tire: string; wheel: string; by: string; history: [string, string, string][]; daysAgo: number }[] = [
-    { id: DEMO_QUOTES.draft, number: 1001, customer: 0, tire: "SC-MT-35125017", wheel: "BS-1790-6550", by: TEO, history: [["draft", TEO, "Teo Marrow"]], daysAgo: 0 },
-    { id: DEMO_QUOTES.sent, number: 1002, customer: 1, tire: "HB-AT-3157017", wheel: "CF-1790-6550", by: TEO, history: [["draft", TEO, "Teo Marrow"], ["sent", TEO, "Teo Marrow"]], daysAgo: 2 },
+  const plans: {
+    id: string;
+    number: number;
+    customer: number;
+    tire: string;
+    wheel: string;
+    by: string;
+    history: [string, string, string][];
+    daysAgo: number;
+  }[] = [
     {
-      id: DEMO_QUOTES.paid, number: 1003, customer: 0, tire: "SC-MT-37125017", wheel: "TB-1790-6550", by: MARA,
-      history: [["draft", MARA, "Mara Velkin"], ["sent", MARA, "Mara Velkin"], ["accepted", "", "customer"], ["deposit_paid", "", "payment provider"]], daysAgo: 5,
+      id: DEMO_QUOTES.draft,
+      number: 1001,
+      customer: 0,
+      tire: "SC-MT-35125017",
+      wheel: "BS-1790-6550",
+      by: TEO,
+      history: [["draft", TEO, "Teo Marrow"]],
+      daysAgo: 0,
     },
-    { id: DEMO_QUOTES.declined, number: 1004, customer: 2, tire: "HB-AT-2857017", wheel: "BS-1780-6550", by: TEO, history: [["draft", TEO, "Teo Marrow"], ["sent", TEO, "Teo Marrow"], ["declined", TEO, "Teo Marrow"]], daysAgo: 9 },
-    { id: DEMO_QUOTES.expired, number: 1005, customer: 1, tire: "HB-AT-2857017", wheel: "BS-1790-6550", by: MARA, history: [["draft", MARA, "Mara Velkin"], ["sent", MARA, "Mara Velkin"], ["expired", "", "system"]], daysAgo: 30 },
+    {
+      id: DEMO_QUOTES.sent,
+      number: 1002,
+      customer: 1,
+      tire: "HB-AT-3157017",
+      wheel: "CF-1790-6550",
+      by: TEO,
+      history: [
+        ["draft", TEO, "Teo Marrow"],
+        ["sent", TEO, "Teo Marrow"],
+      ],
+      daysAgo: 2,
+    },
+    {
+      id: DEMO_QUOTES.paid,
+      number: 1003,
+      customer: 0,
+      tire: "SC-MT-37125017",
+      wheel: "TB-1790-6550",
+      by: MARA,
+      history: [
+        ["draft", MARA, "Mara Velkin"],
+        ["sent", MARA, "Mara Velkin"],
+        ["accepted", "", "customer"],
+        ["deposit_paid", "", "payment provider"],
+      ],
+      daysAgo: 5,
+    },
+    {
+      id: DEMO_QUOTES.declined,
+      number: 1004,
+      customer: 2,
+      tire: "HB-AT-2857017",
+      wheel: "BS-1780-6550",
+      by: TEO,
+      history: [
+        ["draft", TEO, "Teo Marrow"],
+        ["sent", TEO, "Teo Marrow"],
+        ["declined", TEO, "Teo Marrow"],
+      ],
+      daysAgo: 9,
+    },
+    {
+      id: DEMO_QUOTES.expired,
+      number: 1005,
+      customer: 1,
+      tire: "HB-AT-2857017",
+      wheel: "BS-1790-6550",
+      by: MARA,
+      history: [
+        ["draft", MARA, "Mara Velkin"],
+        ["sent", MARA, "Mara Velkin"],
+        ["expired", "", "system"],
+      ],
+      daysAgo: 30,
+    },
   ];
   for (const p of plans) {
     if (await knex("quotes").where({ id: p.id }).first("id")) continue;
     const tire = await bySku(p.tire);
     const wheel = await bySku(p.wheel);
-    const fit = summarize(VEHICLE, tire.tire_size, { diameterIn: wheel.wheel_diameter_in, widthIn: wheel.wheel_width_in, offsetMm: wheel.wheel_offset_mm, beadlock: wheel.beadlock });
+    const fit = summarize(VEHICLE, tire.tire_size, {
+      diameterIn: wheel.wheel_diameter_in,
+      widthIn: wheel.wheel_width_in,
+      offsetMm: wheel.wheel_offset_mm,
+      beadlock: wheel.beadlock,
+    });
     const svc = async (sku: string, qty: number) => {
       const s = await bySku(sku);
-      return { kind: "service", unit: s.service_unit === "per_hour" ? "hour" : "each", catalog_item_id: s.id, sku, description: s.description, quantity: qty, unit_price_cents: s.price_cents, discount_cents: 0, taxable: false };
+      return {
+        kind: "service",
+        unit: s.service_unit === "per_hour" ? "hour" : "each",
+        catalog_item_id: s.id,
+        sku,
+        description: s.description,
+        quantity: qty,
+        unit_price_cents: s.price_cents,
+        discount_cents: 0,
+        taxable: false,
+      };
     };
     const lines = [
-      { kind: "tire", catalog_item_id: tire.id, sku: tire.sku, description: tire.description, quantity: 4, unit_price_cents: tire.price_cents, discount_cents: 0, taxable: true },
-      { kind: "wheel", catalog_item_id: wheel.id, sku: wheel.sku, description: wheel.description, quantity: 4, unit_price_cents: wheel.price_cents, discount_cents: 0, taxable: true, wheel_bolt_pattern: wheel.bolt_pattern, wheel_center_bore_mm: wheel.center_bore_mm },
+      {
+        kind: "tire",
+        catalog_item_id: tire.id,
+        sku: tire.sku,
+        description: tire.description,
+        quantity: 4,
+        unit_price_cents: tire.price_cents,
+        discount_cents: 0,
+        taxable: true,
+      },
+      {
+        kind: "wheel",
+        catalog_item_id: wheel.id,
+        sku: wheel.sku,
+        description: wheel.description,
+        quantity: 4,
+        unit_price_cents: wheel.price_cents,
+        discount_cents: 0,
+        taxable: true,
+        wheel_bolt_pattern: wheel.bolt_pattern,
+        wheel_center_bore_mm: wheel.center_bore_mm,
+      },
       await svc("SV-MB", 4),
       ...(wheel.beadlock ? [await svc("SV-BLA", 4)] : []),
       await svc("SV-VS", 4),
@@ -130,7 +246,12 @@ export async function seed(knex: Knex): Promise<void> {
       await svc("SV-DISP", 4),
     ];
     const t = computeTotals({
-      lines: lines.map((l) => ({ quantity: l.quantity, unitPriceCents: l.unit_price_cents, discountCents: l.discount_cents, taxable: l.taxable })),
+      lines: lines.map((l) => ({
+        quantity: l.quantity,
+        unitPriceCents: l.unit_price_cents,
+        discountCents: l.discount_cents,
+        taxable: l.taxable,
+      })),
       discountCents: 0,
       taxRateBp: shop.tax_rate_bp,
       depositPct: shop.deposit_pct,
@@ -165,14 +286,25 @@ export async function seed(knex: Knex): Promise<void> {
         deposit_cents: t.depositCents,
         // A link nobody knows: staff "send again" to get one into the outbox.
         public_token_hash: sent ? hashToken(randomToken()) : null,
-        valid_until: sent ? knex.raw("now() - make_interval(days => ?) + make_interval(days => ?)", [p.daysAgo, shop.quote_validity_days]) : null,
+        valid_until: sent
+          ? knex.raw("now() - make_interval(days => ?) + make_interval(days => ?)", [p.daysAgo, shop.quote_validity_days])
+          : null,
         created_at: created,
         updated_at: created,
       });
-      await trx("quote_lines").insert(lines.map((l, i) => ({ ...l, quote_id: p.id, position: i + 1, line_total_cents: t.lines[i]!.netCents })));
+      await trx("quote_lines").insert(
+        lines.map((l, i) => ({ ...l, quote_id: p.id, position: i + 1, line_total_cents: t.lines[i]!.netCents })),
+      );
       let from: string | null = null;
       for (const [to, uid, label] of p.history) {
-        await trx("quote_events").insert({ quote_id: p.id, from_status: from, to_status: to, actor_user_id: uid || null, actor: label, at: created });
+        await trx("quote_events").insert({
+          quote_id: p.id,
+          from_status: from,
+          to_status: to,
+          actor_user_id: uid || null,
+          actor: label,
+          at: created,
+        });
         from = to;
       }
       if (sent) {
@@ -180,7 +312,14 @@ export async function seed(knex: Knex): Promise<void> {
         const row = await trx("quotes").where({ id: p.id }).first();
         const stored = await trx("quote_lines").where({ quote_id: p.id }).orderBy("position");
         const author = DEMO_USERS.find((u) => u.id === p.by);
-        const document = buildQuoteDocument({ shop, quote: row, customer: DEMO_CUSTOMERS[p.customer]!, lines: stored, preparedBy: author?.name ?? null, sentAt: row.created_at });
+        const document = buildQuoteDocument({
+          shop,
+          quote: row,
+          customer: DEMO_CUSTOMERS[p.customer]!,
+          lines: stored,
+          preparedBy: author?.name ?? null,
+          sentAt: row.created_at,
+        });
         await trx("quote_documents").insert({ quote_id: p.id, sent_by: p.by, sent_at: created, document: JSON.stringify(document) });
       }
       if (status === "deposit_paid") {

@@ -19,15 +19,22 @@ const BAYS = [
 /** Weekdays 7:30–17:30, Saturday mornings 8:00–12:00, Sunday closed (invented). */
 const week = {
   timeZone: DEFAULT_TIME_ZONE,
-  hours: [1, 2, 3, 4, 5].map((weekday) => ({ weekday, opens: 7 * 60 + 30, closes: 17 * 60 + 30 })).concat([{ weekday: 6, opens: 8 * 60, closes: 12 * 60 }]),
+  hours: [1, 2, 3, 4, 5]
+    .map((weekday) => ({ weekday, opens: 7 * 60 + 30, closes: 17 * 60 + 30 }))
+    .concat([{ weekday: 6, opens: 8 * 60, closes: 12 * 60 }]),
 };
 
 export async function seed(knex: Knex): Promise<void> {
   if (await knex("shop_schedules").where({ shop_id: DEMO_SHOP.id }).first("shop_id")) return;
   await knex.transaction(async (trx) => {
     await trx("shop_schedules").insert({ shop_id: DEMO_SHOP.id, time_zone: week.timeZone, slot_step_minutes: 30 });
-    await trx("shop_opening_hours").insert(week.hours.map((h) => ({ shop_id: DEMO_SHOP.id, weekday: h.weekday, opens_minute: h.opens, closes_minute: h.closes })));
-    await trx("bays").insert(BAYS.map((b) => ({ ...b, shop_id: DEMO_SHOP.id }))).onConflict("id").ignore();
+    await trx("shop_opening_hours").insert(
+      week.hours.map((h) => ({ shop_id: DEMO_SHOP.id, weekday: h.weekday, opens_minute: h.opens, closes_minute: h.closes })),
+    );
+    await trx("bays")
+      .insert(BAYS.map((b) => ({ ...b, shop_id: DEMO_SHOP.id })))
+      .onConflict("id")
+      .ignore();
 
     // The paid demo quote, booked at 9:00 on the second weekday from today, for as long as its services take by default.
     const quote = await trx("quotes").where({ id: DEMO_QUOTES.paid, status: "deposit_paid" }).first("id", "shop_id");
@@ -39,7 +46,13 @@ export async function seed(knex: Knex): Promise<void> {
     const work = workloadOf(
       lines.map((l) => {
         const d = l.item_kind === "service" ? defaultServiceTime(l.service_type, l.service_unit) : null;
-        return { kind: l.kind, unit: l.unit, quantity: Number(l.quantity), description: l.description, time: d ? { minutesPerUnit: d.minutes, bayKind: d.bayKind } : null };
+        return {
+          kind: l.kind,
+          unit: l.unit,
+          quantity: Number(l.quantity),
+          description: l.description,
+          time: d ? { minutesPerUnit: d.minutes, bayKind: d.bayKind } : null,
+        };
       }),
     );
     let day = addDays(wallTime(new Date(), week.timeZone).date, 2);
@@ -47,13 +60,25 @@ export async function seed(knex: Knex): Promise<void> {
     let t = zonedInstant(day, 9 * 60, week.timeZone).getTime();
     const start = new Date(t);
     const [booking] = await trx("bookings")
-      .insert({ shop_id: DEMO_SHOP.id, quote_id: quote.id, status: "booked", starts_at: start, ends_at: new Date(t + work.minutes * 60_000), booked_by: "Mara Velkin" })
+      .insert({
+        shop_id: DEMO_SHOP.id,
+        quote_id: quote.id,
+        status: "booked",
+        starts_at: start,
+        ends_at: new Date(t + work.minutes * 60_000),
+        booked_by: "Mara Velkin",
+      })
       .returning(["id"]);
     for (const seg of work.segments) {
       const bay = BAYS.find((b) => b.kind === seg.bayKind);
       if (!bay) continue;
       const end = t + seg.minutes * 60_000;
-      await trx("bay_reservations").insert({ booking_id: booking.id, shop_id: DEMO_SHOP.id, bay_id: bay.id, during: trx.raw("tstzrange(?, ?)", [new Date(t).toISOString(), new Date(end).toISOString()]) });
+      await trx("bay_reservations").insert({
+        booking_id: booking.id,
+        shop_id: DEMO_SHOP.id,
+        bay_id: bay.id,
+        during: trx.raw("tstzrange(?, ?)", [new Date(t).toISOString(), new Date(end).toISOString()]),
+      });
       t = end;
     }
   });

@@ -26,7 +26,15 @@ export interface AdminUser extends User {
  * // { id: "u", …, shopId: null, createdAt: "…Z", updatedAt: "…Z" }
  */
 export function userDto(u: PublicUser): User {
-  return { id: u.id, email: u.email, name: u.name, role: u.role, shopId: u.shop_id, createdAt: new Date(u.created_at).toISOString(), updatedAt: new Date(u.updated_at).toISOString() };
+  return {
+    id: u.id,
+    email: u.email,
+    name: u.name,
+    role: u.role,
+    shopId: u.shop_id,
+    createdAt: new Date(u.created_at).toISOString(),
+    updatedAt: new Date(u.updated_at).toISOString(),
+  };
 }
 
 /** The signed-in person as /api/me answers: who the session says they are, no dates. */

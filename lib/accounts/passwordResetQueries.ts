@@ -48,7 +48,10 @@ export async function resetPassword(db: Knex, token: string, passwordHash: strin
     await setPassword(trx, userId, passwordHash);
     return (await findUserById(trx, userId))?.email ?? null;
   });
-  if (!email) throw new InvalidError("This reset link has expired or was already used. Ask for a new one.", { token: ["This reset link has expired or was already used."] });
+  if (!email)
+    throw new InvalidError("This reset link has expired or was already used. Ask for a new one.", {
+      token: ["This reset link has expired or was already used."],
+    });
   return email;
 }
 

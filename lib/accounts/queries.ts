@@ -13,7 +13,10 @@ export async function findUserByEmail(db: Knex, email: string): Promise<UserRow 
 }
 
 export async function findUserById(db: Knex, id: string): Promise<PublicUser | undefined> {
-  return (await db<UserRow>("users").select([...PUBLIC_COLUMNS]).where({ id }).first()) as PublicUser | undefined;
+  return (await db<UserRow>("users")
+    .select([...PUBLIC_COLUMNS])
+    .where({ id })
+    .first()) as PublicUser | undefined;
 }
 
 /** The address is taken: a field error on `email`, as the sign-up form shows it. */
@@ -67,7 +70,10 @@ export async function setUserRole(db: Knex, id: string, role: Role, shopId: stri
     .update({
       role,
       shop_id: shop,
-      session_version: db.raw("session_version + (case when role is distinct from ? or shop_id is distinct from ? then 1 else 0 end)", [role, shop]) as unknown as number,
+      session_version: db.raw("session_version + (case when role is distinct from ? or shop_id is distinct from ? then 1 else 0 end)", [
+        role,
+        shop,
+      ]) as unknown as number,
       updated_at: db.fn.now() as unknown as Date,
     })
     .returning(PUBLIC_COLUMNS);

@@ -36,7 +36,9 @@ export type ForgotPasswordInput = z.infer<typeof forgotPasswordSchema>;
 
 export const resetPasswordSchema = z
   .object({
-    token: z.string({ error: "This reset link is not valid. Ask for a new one." }).regex(LINK_TOKEN_RE, "This reset link is not valid. Ask for a new one."),
+    token: z
+      .string({ error: "This reset link is not valid. Ask for a new one." })
+      .regex(LINK_TOKEN_RE, "This reset link is not valid. Ask for a new one."),
     password: passwordField,
     confirm: z.string({ error: "Type the new password again." }),
   })

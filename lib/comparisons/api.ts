@@ -95,6 +95,9 @@ export function comparisonShareDto(row: { slug: string; created_at: Date | strin
 }
 
 /** A live share's row (the input already read through the schema) as the share page shows it. */
-export function sharedComparisonDto(row: { slug: string; shared_at: Date | string; name: string; updated_at: Date | string }, input: ComparisonInput): SharedComparison {
+export function sharedComparisonDto(
+  row: { slug: string; shared_at: Date | string; name: string; updated_at: Date | string },
+  input: ComparisonInput,
+): SharedComparison {
   return { slug: row.slug, name: row.name, input, sharedAt: iso(row.shared_at), updatedAt: iso(row.updated_at) };
 }

@@ -73,7 +73,8 @@ describe("computeComparison — the demo comparison 265/70R17 on 17x8 +25 vs 37x
 
   it("crawl ratio = first gear × transfer-case low × axle (common 4x4 handbook definition, common practice, no written source): 4.03 × 2.72 × 3.73 = 40.89:1", () => {
     expect(r.gearing.crawl).toBeNull();
-    const c = computeComparison({ ...DEFAULT_INPUT, vehicle: { ...DEFAULT_INPUT.vehicle, firstGearRatio: 4.03, transferLowRatio: 2.72 } }).gearing.crawl;
+    const c = computeComparison({ ...DEFAULT_INPUT, vehicle: { ...DEFAULT_INPUT.vehicle, firstGearRatio: 4.03, transferLowRatio: 2.72 } })
+      .gearing.crawl;
     // By hand: 4.03 × 2.72 = 10.9616; × 3.73 = 40.8868.
     expect(c?.ratio).toBeCloseTo(40.8868, 4);
     // The 37 in tire (939.8 mm) over the 265/70R17 (802.8 mm, ISO 4000-1) acts like 40.8868 × 802.8 / 939.8 = 34.9265:1, 14.6 % lower.
@@ -138,8 +139,12 @@ describe("computeComparison — warning thresholds", () => {
 
   it(`scrub: warns above ${SCRUB_WARN_MM} mm, not at 20 mm`, () => {
     // offset 5 mm → shift 20 mm
-    expect(computeComparison(withPlanned({ position: { mode: "offset", offsetMm: 5 } })).warnings.some((x) => x.kind === "scrub")).toBe(false);
-    expect(computeComparison(withPlanned({ position: { mode: "offset", offsetMm: -1 } })).warnings.some((x) => x.kind === "scrub")).toBe(true);
+    expect(computeComparison(withPlanned({ position: { mode: "offset", offsetMm: 5 } })).warnings.some((x) => x.kind === "scrub")).toBe(
+      false,
+    );
+    expect(computeComparison(withPlanned({ position: { mode: "offset", offsetMm: -1 } })).warnings.some((x) => x.kind === "scrub")).toBe(
+      true,
+    );
   });
 
   it(`speedometer beyond ${SPEEDO_WARN_PCT} %, regear from ${REGEAR_WARN_PCT} %: 265/75R17 (+3.3 %) earns the first only`, () => {
@@ -148,7 +153,7 @@ describe("computeComparison — warning thresholds", () => {
     expect(small.speedometer.trueAbovePct).toBeCloseTo((829.3 / 802.8 - 1) * 100, 6);
     // Its 7.5 in measuring rim (265 × 0.70 / 25.4 = 7.30 → 7.5) makes it 2.54 mm wider on 8 in: it reaches 1.27 mm further in.
     expect(small.warnings.map((x) => x.kind)).toEqual(["speedometer", "inner-reach"]);
-    expect(small.changes.innerClearanceMm).toBeCloseTo(-0.4 * 0.5 * 25.4 / 2, 6);
+    expect(small.changes.innerClearanceMm).toBeCloseTo((-0.4 * 0.5 * 25.4) / 2, 6);
     const same = computeComparison(withPlanned({ tire: "265/70R17", wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 } }));
     expect(same.warnings).toEqual([]);
     expect(same.changes.diameterMm).toBe(0);
@@ -163,9 +168,21 @@ describe("computeComparison — warning thresholds", () => {
   });
 
   it("backspacing positions go through the engine (9.5 in wheel, 4 in to the flange = −31.75 mm; common practice, no source)", () => {
-    const x = computeComparison(withPlanned({ tire: "35x12.50R17LT", wheelWidthIn: 9.5, position: { mode: "backspacing", backspacingIn: 4, reference: "flange", flangeIn: 0.5 } }));
+    const x = computeComparison(
+      withPlanned({
+        tire: "35x12.50R17LT",
+        wheelWidthIn: 9.5,
+        position: { mode: "backspacing", backspacingIn: 4, reference: "flange", flangeIn: 0.5 },
+      }),
+    );
     expect(x.planned.offsetMm).toBeCloseTo(-31.75, 9);
-    const bead = computeComparison(withPlanned({ tire: "35x12.50R17LT", wheelWidthIn: 9.5, position: { mode: "backspacing", backspacingIn: 3.5, reference: "bead-seat", flangeIn: 0.5 } }));
+    const bead = computeComparison(
+      withPlanned({
+        tire: "35x12.50R17LT",
+        wheelWidthIn: 9.5,
+        position: { mode: "backspacing", backspacingIn: 3.5, reference: "bead-seat", flangeIn: 0.5 },
+      }),
+    );
     expect(bead.planned.offsetMm).toBeCloseTo(-31.75, 9);
   });
 });
@@ -220,7 +237,10 @@ describe("computeComparison — reference speeds in the reader's own unit", () =
   });
 
   it("cruise speeds show back as entered: km/h entries stored as mph / 1.609344 are recovered exactly", () => {
-    const x = computeComparison({ ...DEFAULT_INPUT, vehicle: { ...DEFAULT_INPUT.vehicle, cruiseSpeedsMph: [100 / 1.609344, 113 / 1.609344, 62.5] } });
+    const x = computeComparison({
+      ...DEFAULT_INPUT,
+      vehicle: { ...DEFAULT_INPUT.vehicle, cruiseSpeedsMph: [100 / 1.609344, 113 / 1.609344, 62.5] },
+    });
     expect(x.gearing.cruise.map((c) => c.entered)).toEqual([
       { value: 100, unit: "km/h" },
       { value: 113, unit: "km/h" },

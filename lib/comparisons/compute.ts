@@ -174,19 +174,41 @@ function figures(s: Setup, g: SetupGeometry): SetupFigures {
       : (() => {
           const kg = loadIndexKg(t.loadIndex);
           const dualKg = t.dualLoadIndex === null ? null : loadIndexKg(t.dualLoadIndex);
-          return { index: t.loadIndex, kg, lb: kgToLb(kg), dualIndex: t.dualLoadIndex, dualKg, dualLb: dualKg === null ? null : kgToLb(dualKg) };
+          return {
+            index: t.loadIndex,
+            kg,
+            lb: kgToLb(kg),
+            dualIndex: t.dualLoadIndex,
+            dualKg,
+            dualLb: dualKg === null ? null : kgToLb(dualKg),
+          };
         })();
-  const speed = t.speedSymbol === null ? null : (() => {
-    const kmh = speedSymbolKmh(t.speedSymbol);
-    return { symbol: t.speedSymbol, kmh, mph: kmh / KM_PER_MILE };
-  })();
+  const speed =
+    t.speedSymbol === null
+      ? null
+      : (() => {
+          const kmh = speedSymbolKmh(t.speedSymbol);
+          return { symbol: t.speedSymbol, kmh, mph: kmh / KM_PER_MILE };
+        })();
   let loadRange: SetupFigures["loadRange"] = null;
   if (t.loadRange !== null) {
     if (t.system === "numeric") {
-      loadRange = { letter: t.loadRange, plyRating: plyRating(t.loadRange), maxPressurePsi: null, maxPressureKpa: null, source: "no figure held for numeric sizes" };
+      loadRange = {
+        letter: t.loadRange,
+        plyRating: plyRating(t.loadRange),
+        maxPressurePsi: null,
+        maxPressureKpa: null,
+        source: "no figure held for numeric sizes",
+      };
     } else {
       const info = loadRangeInfo(t.loadRange, t.system);
-      loadRange = { letter: info.loadRange, plyRating: info.plyRating, maxPressurePsi: info.maxPressurePsi, maxPressureKpa: info.maxPressureKpa, source: info.source };
+      loadRange = {
+        letter: info.loadRange,
+        plyRating: info.plyRating,
+        maxPressurePsi: info.maxPressurePsi,
+        maxPressureKpa: info.maxPressureKpa,
+        source: info.source,
+      };
     }
   }
   return {
@@ -222,7 +244,14 @@ function figures(s: Setup, g: SetupGeometry): SetupFigures {
   };
 }
 
-function crawlOf(first: number | null, low: number | null, axle: number, suggested: number, dCurrentMm: number, dPlannedMm: number): CrawlFigures | null {
+function crawlOf(
+  first: number | null,
+  low: number | null,
+  axle: number,
+  suggested: number,
+  dCurrentMm: number,
+  dPlannedMm: number,
+): CrawlFigures | null {
   // Saved comparisons from before these fields existed carry neither (undefined): not entered.
   if (first == null || low == null) return null;
   const ratio = crawlRatio(first, low, axle);
@@ -258,7 +287,10 @@ export function computeComparison(input: ComparisonInput): ComparisonResult {
   // One engine call for every speed: the imperial rows, the metric rows (converted to mph for
   // the engine only), then the cruise speeds as stored. Rows are read back by position.
   const offset: Record<SpeedSystem, number> = { imperial: 0, metric: REFERENCE_SPEEDS.imperial.length };
-  const engineSpeeds = [...REFERENCE_SPEEDS.imperial.map((x) => toMph(x, "imperial")), ...REFERENCE_SPEEDS.metric.map((x) => toMph(x, "metric"))];
+  const engineSpeeds = [
+    ...REFERENCE_SPEEDS.imperial.map((x) => toMph(x, "imperial")),
+    ...REFERENCE_SPEEDS.metric.map((x) => toMph(x, "metric")),
+  ];
   const c = compareSetups(cur, pla, {
     kingpinInclinationDeg: v.kingpinInclinationDeg ?? undefined,
     axleRatio: v.axleRatio,
@@ -270,11 +302,18 @@ export function computeComparison(input: ComparisonInput): ComparisonResult {
     const e = c.gearing.rpmAt[i]!;
     return { currentRpm: e.currentRpm, plannedRpm: e.plannedRpm, regearedRpm: e.regearedRpm };
   };
-  const gearingOf = (system: SpeedSystem) => ({ unit: SPEED_UNIT[system], rows: REFERENCE_SPEEDS[system].map((speed, i) => ({ speed, ...rpmAt(offset[system] + i) })) });
+  const gearingOf = (system: SpeedSystem) => ({
+    unit: SPEED_UNIT[system],
+    rows: REFERENCE_SPEEDS[system].map((speed, i) => ({ speed, ...rpmAt(offset[system] + i) })),
+  });
   // Actual = indicated × ratio in the same unit: nothing converted between the systems.
   const speedOf = (system: SpeedSystem) => {
     const h = HEADLINE_SPEED[system];
-    return { unit: SPEED_UNIT[system], headline: { indicated: h, actual: h * ratio }, rows: REFERENCE_SPEEDS[system].map((x) => ({ indicated: x, actual: x * ratio })) };
+    return {
+      unit: SPEED_UNIT[system],
+      headline: { indicated: h, actual: h * ratio },
+      rows: REFERENCE_SPEEDS[system].map((x) => ({ indicated: x, actual: x * ratio })),
+    };
   };
   const cruise: CruiseRow[] = v.cruiseSpeedsMph.map((mph, i) => ({ mph, entered: enteredSpeed(mph), ...rpmAt(engineSpeeds.length + i) }));
   const current = figures(input.current, cur);
@@ -298,13 +337,21 @@ export function computeComparison(input: ComparisonInput): ComparisonResult {
       effectiveRatio: c.gearing.effectiveRatio,
       ratioToRestore: c.gearing.ratioToRestore,
       suggestedRatio: c.gearing.suggestedRatio,
-      crawl: crawlOf(v.firstGearRatio, v.transferLowRatio, c.gearing.axleRatio, c.gearing.suggestedRatio, current.overallDiameterMm, planned.overallDiameterMm),
+      crawl: crawlOf(
+        v.firstGearRatio,
+        v.transferLowRatio,
+        c.gearing.axleRatio,
+        c.gearing.suggestedRatio,
+        current.overallDiameterMm,
+        planned.overallDiameterMm,
+      ),
       cruise,
       bySystem: { imperial: gearingOf("imperial"), metric: gearingOf("metric") },
     },
     kingpinInclinationDeg: v.kingpinInclinationDeg,
     fenderLineMm: v.fenderLineMm,
-    pokePastFenderMm: v.fenderLineMm === null ? null : { current: current.outerSwingMm - v.fenderLineMm, planned: planned.outerSwingMm - v.fenderLineMm },
+    pokePastFenderMm:
+      v.fenderLineMm === null ? null : { current: current.outerSwingMm - v.fenderLineMm, planned: planned.outerSwingMm - v.fenderLineMm },
     engine: c,
   };
   return { ...base, warnings: workspaceWarnings(assessChange(c, { fenderLineMm: v.fenderLineMm }), base) };

@@ -24,7 +24,13 @@ describe("form text ⇄ comparison input", () => {
   });
 
   it("shows backspacing as sixteenths when fractions are chosen", () => {
-    const x = { ...DEFAULT_INPUT, planned: { ...DEFAULT_INPUT.planned, position: { mode: "backspacing" as const, backspacingIn: 4.8125, reference: "bead-seat" as const, flangeIn: 0.5 } } };
+    const x = {
+      ...DEFAULT_INPUT,
+      planned: {
+        ...DEFAULT_INPUT.planned,
+        position: { mode: "backspacing" as const, backspacingIn: 4.8125, reference: "bead-seat" as const, flangeIn: 0.5 },
+      },
+    };
     expect(draftFromInput(x, frac).planned).toMatchObject({ backspacing: "4-13/16", flange: "1/2", reference: "bead-seat" });
     expect(draftFromInput(x, inch).planned).toMatchObject({ backspacing: "4.8125", flange: "0.5" });
   });
@@ -47,7 +53,9 @@ describe("form text ⇄ comparison input", () => {
   it("passes the schema's messages on (wheel diameter vs tire)", () => {
     const d = base();
     d.planned = { ...d.planned, diameter: "18" };
-    expect(readDraft(d, inch).errors).toEqual({ "planned.wheelDiameterIn": "Wheel diameter (in): a 17 in tire needs a 17 in wheel; this wheel is 18 in." });
+    expect(readDraft(d, inch).errors).toEqual({
+      "planned.wheelDiameterIn": "Wheel diameter (in): a 17 in tire needs a 17 in wheel; this wheel is 18 in.",
+    });
   });
 
   it("metric units: cruise speeds in km/h (1 mi = 1.609344 km) and the fender line in mm", () => {
@@ -105,7 +113,9 @@ describe("units: a field reads its stated unit, fractions only as inches", () =>
   it("refuses a spacer of 1-1/2 (a fraction in a mm field) instead of reading 1.5 mm; 1-1/2 in is 38.1 mm", () => {
     const r = setup({ spacer: "1-1/2" });
     expect(r.input).toBeNull();
-    expect(r.errors["planned.spacerMm"]).toBe("Spacer (mm, optional): “1-1/2” is a fraction, which is read only in inches — write “1-1/2 in”, or mm as a decimal, e.g. 25 (leave empty for none).");
+    expect(r.errors["planned.spacerMm"]).toBe(
+      "Spacer (mm, optional): “1-1/2” is a fraction, which is read only in inches — write “1-1/2 in”, or mm as a decimal, e.g. 25 (leave empty for none).",
+    );
     // 1.5 in × 25.4 = 38.1 mm (NIST SP 811).
     expect(setup({ spacer: "1-1/2 in" }).input?.planned.spacerMm).toBeCloseTo(38.1, 9);
     expect(setup({ spacer: "1½ in" }).input?.planned.spacerMm).toBeCloseTo(38.1, 9);
@@ -118,7 +128,9 @@ describe("units: a field reads its stated unit, fractions only as inches", () =>
     expect(r.errors).toEqual({});
     expect(r.input?.planned.position).toEqual({ mode: "backspacing", backspacingIn: 4.75, reference: "flange", flangeIn: 0.5 });
     expect(r.input?.planned.wheelWidthIn).toBe(8.5);
-    expect(setup({ mode: "backspacing", backspacing: "4 3⁄4", reference: "flange", flange: "1/2" }).input?.planned.position).toMatchObject({ backspacingIn: 4.75 });
+    expect(setup({ mode: "backspacing", backspacing: "4 3⁄4", reference: "flange", flange: "1/2" }).input?.planned.position).toMatchObject({
+      backspacingIn: 4.75,
+    });
   });
 
   it("fender line in inches: bounds stated in inches with an example the field accepts (500 mm = 19.68 in, NIST SP 811)", () => {
@@ -129,8 +141,12 @@ describe("units: a field reads its stated unit, fractions only as inches", () =>
     expect(vehicle({ fender: "19.68" }).errors).toEqual({});
     // In mm: 140 is 140 mm; a fraction is refused; bounds in mm.
     expect(vehicle({ fender: "140" }, metric).input?.vehicle.fenderLineMm).toBe(140);
-    expect(vehicle({ fender: "5-1/2" }, metric).errors["vehicle.fenderLineMm"]).toMatch(/^Fender line from hub face \(mm\): “5-1\/2” is a fraction/);
-    expect(vehicle({ fender: "600" }, metric).errors["vehicle.fenderLineMm"]).toBe("Fender line from hub face (mm): must be between 0 and 500 mm, e.g. 140.");
+    expect(vehicle({ fender: "5-1/2" }, metric).errors["vehicle.fenderLineMm"]).toMatch(
+      /^Fender line from hub face \(mm\): “5-1\/2” is a fraction/,
+    );
+    expect(vehicle({ fender: "600" }, metric).errors["vehicle.fenderLineMm"]).toBe(
+      "Fender line from hub face (mm): must be between 0 and 500 mm, e.g. 140.",
+    );
   });
 
   it("first-gear and transfer-case low ratios are optional: empty is not entered, 4.03:1 reads as 4.03, and they show back as typed", () => {
@@ -138,29 +154,85 @@ describe("units: a field reads its stated unit, fractions only as inches", () =>
     const r = vehicle({ first: "4.03:1", low: "2.72" });
     expect(r.input?.vehicle).toMatchObject({ firstGearRatio: 4.03, transferLowRatio: 2.72 });
     expect(draftFromInput(r.input!, inch).vehicle).toMatchObject({ first: "4.03", low: "2.72" });
-    expect(vehicle({ low: "two" }).errors["vehicle.transferLowRatio"]).toBe("Transfer-case low ratio (optional): enter a ratio, e.g. 2.72 (or 2.72:1), or leave it empty.");
+    expect(vehicle({ low: "two" }).errors["vehicle.transferLowRatio"]).toBe(
+      "Transfer-case low ratio (optional): enter a ratio, e.g. 2.72 (or 2.72:1), or leave it empty.",
+    );
   });
 
   it("cruise speeds out of bounds are stated in the unit shown (5–150 mph = 8.1–241.4 km/h inward, 1 mi = 1.609344 km)", () => {
-    expect(vehicle({ cruise: "55, 200" }).errors["vehicle.cruiseSpeedsMph"]).toBe("Cruise speeds (mph): each speed must be between 5 and 150 mph, e.g. 60, 70.");
-    expect(vehicle({ cruise: "100, 300" }, metric).errors["vehicle.cruiseSpeedsMph"]).toBe("Cruise speeds (km/h): each speed must be between 8.1 and 241.4 km/h, e.g. 100, 110.");
+    expect(vehicle({ cruise: "55, 200" }).errors["vehicle.cruiseSpeedsMph"]).toBe(
+      "Cruise speeds (mph): each speed must be between 5 and 150 mph, e.g. 60, 70.",
+    );
+    expect(vehicle({ cruise: "100, 300" }, metric).errors["vehicle.cruiseSpeedsMph"]).toBe(
+      "Cruise speeds (km/h): each speed must be between 8.1 and 241.4 km/h, e.g. 100, 110.",
+    );
     expect(vehicle({ cruise: "8.1, 241.4" }, metric).errors).toEqual({});
     expect(vehicle({ cruise: "55, 65" }).input?.vehicle.cruiseSpeedsMph).toEqual([55, 65]);
   });
 
   it("every message names its field as labelled and gives an example the field accepts", () => {
     const cases: { field: string; bad: () => ReturnType<typeof readDraft>; label: string; good: () => ReturnType<typeof readDraft> }[] = [
-      { field: "planned.wheelDiameterIn", label: "Wheel diameter (in)", bad: () => setup({ diameter: "x" }), good: () => setup({ diameter: "17" }) },
-      { field: "planned.wheelWidthIn", label: "Wheel width (in)", bad: () => setup({ width: "40" }), good: () => setup({ width: "8-1/2" }) },
-      { field: "planned.position.offsetMm", label: "Offset (mm)", bad: () => setup({ offset: "300" }), good: () => setup({ offset: "-12" }) },
-      { field: "planned.position.backspacingIn", label: "Backspacing (in)", bad: () => setup({ mode: "backspacing", backspacing: "x", flange: "1/2" }), good: () => setup({ mode: "backspacing", backspacing: "4¾", flange: "1/2" }) },
-      { field: "planned.position.flangeIn", label: "Flange allowance (in)", bad: () => setup({ mode: "backspacing", backspacing: "4.75", flange: "3" }), good: () => setup({ mode: "backspacing", backspacing: "4.75", flange: "1/2" }) },
-      { field: "planned.spacerMm", label: "Spacer (mm, optional)", bad: () => setup({ spacer: "200" }), good: () => setup({ spacer: "25" }) },
-      { field: "vehicle.kingpinInclinationDeg", label: "Kingpin inclination (°)", bad: () => vehicle({ kpi: "45" }), good: () => vehicle({ kpi: "8" }) },
+      {
+        field: "planned.wheelDiameterIn",
+        label: "Wheel diameter (in)",
+        bad: () => setup({ diameter: "x" }),
+        good: () => setup({ diameter: "17" }),
+      },
+      {
+        field: "planned.wheelWidthIn",
+        label: "Wheel width (in)",
+        bad: () => setup({ width: "40" }),
+        good: () => setup({ width: "8-1/2" }),
+      },
+      {
+        field: "planned.position.offsetMm",
+        label: "Offset (mm)",
+        bad: () => setup({ offset: "300" }),
+        good: () => setup({ offset: "-12" }),
+      },
+      {
+        field: "planned.position.backspacingIn",
+        label: "Backspacing (in)",
+        bad: () => setup({ mode: "backspacing", backspacing: "x", flange: "1/2" }),
+        good: () => setup({ mode: "backspacing", backspacing: "4¾", flange: "1/2" }),
+      },
+      {
+        field: "planned.position.flangeIn",
+        label: "Flange allowance (in)",
+        bad: () => setup({ mode: "backspacing", backspacing: "4.75", flange: "3" }),
+        good: () => setup({ mode: "backspacing", backspacing: "4.75", flange: "1/2" }),
+      },
+      {
+        field: "planned.spacerMm",
+        label: "Spacer (mm, optional)",
+        bad: () => setup({ spacer: "200" }),
+        good: () => setup({ spacer: "25" }),
+      },
+      {
+        field: "vehicle.kingpinInclinationDeg",
+        label: "Kingpin inclination (°)",
+        bad: () => vehicle({ kpi: "45" }),
+        good: () => vehicle({ kpi: "8" }),
+      },
       { field: "vehicle.axleRatio", label: "Axle ratio", bad: () => vehicle({ axle: "" }), good: () => vehicle({ axle: "3.73" }) },
-      { field: "vehicle.transmissionRatio", label: "Top-gear ratio", bad: () => vehicle({ top: "20" }), good: () => vehicle({ top: "1.00" }) },
-      { field: "vehicle.firstGearRatio", label: "First-gear ratio (optional)", bad: () => vehicle({ first: "first" }), good: () => vehicle({ first: "4.03:1" }) },
-      { field: "vehicle.transferLowRatio", label: "Transfer-case low ratio (optional)", bad: () => vehicle({ low: "0.5" }), good: () => vehicle({ low: "2.72" }) },
+      {
+        field: "vehicle.transmissionRatio",
+        label: "Top-gear ratio",
+        bad: () => vehicle({ top: "20" }),
+        good: () => vehicle({ top: "1.00" }),
+      },
+      {
+        field: "vehicle.firstGearRatio",
+        label: "First-gear ratio (optional)",
+        bad: () => vehicle({ first: "first" }),
+        good: () => vehicle({ first: "4.03:1" }),
+      },
+      {
+        field: "vehicle.transferLowRatio",
+        label: "Transfer-case low ratio (optional)",
+        bad: () => vehicle({ low: "0.5" }),
+        good: () => vehicle({ low: "2.72" }),
+      },
     ];
     for (const c of cases) {
       const message = c.bad().errors[c.field];

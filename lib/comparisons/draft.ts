@@ -84,7 +84,8 @@ function setupDraft(s: Setup, prefs: DisplayPrefs): SetupDraft {
 export function vehicleUnitFields(input: ComparisonInput, prefs: DisplayPrefs): Pick<VehicleDraft, "cruise" | "fender" | "exact"> {
   const v = input.vehicle;
   const cruise = v.cruiseSpeedsMph.map((mph) => (prefs.units === "metric" ? plain(mph * KM_PER_MILE, 0) : plain(mph, 1))).join(", ");
-  const fender = v.fenderLineMm === null ? "" : prefs.units === "metric" ? plain(v.fenderLineMm, 0) : inchText(mmToIn(v.fenderLineMm), prefs);
+  const fender =
+    v.fenderLineMm === null ? "" : prefs.units === "metric" ? plain(v.fenderLineMm, 0) : inchText(mmToIn(v.fenderLineMm), prefs);
   return { cruise, fender, exact: { cruise, cruiseMph: v.cruiseSpeedsMph, fender, fenderMm: v.fenderLineMm } };
 }
 
@@ -112,19 +113,49 @@ function readAlone<T>(good: ComparisonInput, prefs: DisplayPrefs, put: (d: Draft
  * // (shown to the mm; the exact 139.7 is kept behind the text).
  * convertDraft(draft, good, { units: "imperial", lengths: "fraction" }, { units: "metric", lengths: "decimal" }).draft.vehicle.fender; // "140"
  */
-export function convertDraft(draft: Draft, good: ComparisonInput, from: DisplayPrefs, to: DisplayPrefs): { draft: Draft; unconverted: VehicleFieldPath[] } {
+export function convertDraft(
+  draft: Draft,
+  good: ComparisonInput,
+  from: DisplayPrefs,
+  to: DisplayPrefs,
+): { draft: Draft; unconverted: VehicleFieldPath[] } {
   const v = draft.vehicle;
   const hasFender = v.fender.trim() !== "";
-  const cruiseMph = v.exact?.cruise === v.cruise ? v.exact.cruiseMph : readAlone(good, from, (d) => void (d.vehicle.cruise = v.cruise), (i) => i.vehicle.cruiseSpeedsMph);
-  const fenderMm = !hasFender ? null : v.exact?.fender === v.fender ? v.exact.fenderMm : readAlone(good, from, (d) => void (d.vehicle.fender = v.fender), (i) => i.vehicle.fenderLineMm);
+  const cruiseMph =
+    v.exact?.cruise === v.cruise
+      ? v.exact.cruiseMph
+      : readAlone(
+          good,
+          from,
+          (d) => void (d.vehicle.cruise = v.cruise),
+          (i) => i.vehicle.cruiseSpeedsMph,
+        );
+  const fenderMm = !hasFender
+    ? null
+    : v.exact?.fender === v.fender
+      ? v.exact.fenderMm
+      : readAlone(
+          good,
+          from,
+          (d) => void (d.vehicle.fender = v.fender),
+          (i) => i.vehicle.fenderLineMm,
+        );
   const fenderRead = !hasFender || fenderMm !== null;
-  const fresh = vehicleUnitFields({ ...good, vehicle: { ...good.vehicle, cruiseSpeedsMph: cruiseMph ?? good.vehicle.cruiseSpeedsMph, fenderLineMm: fenderMm } }, to);
+  const fresh = vehicleUnitFields(
+    { ...good, vehicle: { ...good.vehicle, cruiseSpeedsMph: cruiseMph ?? good.vehicle.cruiseSpeedsMph, fenderLineMm: fenderMm } },
+    to,
+  );
   const vehicle: VehicleDraft = {
     ...v,
     cruise: cruiseMph === null ? v.cruise : fresh.cruise,
     fender: fenderRead ? fresh.fender : v.fender,
     // Only a text written here stands for an exact value; a kept text is read afresh.
-    exact: { cruise: cruiseMph === null ? null : fresh.cruise, cruiseMph: cruiseMph ?? [], fender: fenderRead ? fresh.fender : null, fenderMm },
+    exact: {
+      cruise: cruiseMph === null ? null : fresh.cruise,
+      cruiseMph: cruiseMph ?? [],
+      fender: fenderRead ? fresh.fender : null,
+      fenderMm,
+    },
   };
   const unconverted: VehicleFieldPath[] = [];
   if (from.units !== to.units) {
@@ -215,7 +246,10 @@ function setupForm(d: SetupDraft): SetupForm {
     tire: d.tire,
     wheelDiameterIn: d.diameter,
     wheelWidthIn: d.width,
-    position: d.mode === "offset" ? { mode: "offset", offsetMm: d.offset } : { mode: "backspacing", backspacingIn: d.backspacing, reference: d.reference, flangeIn: d.flange },
+    position:
+      d.mode === "offset"
+        ? { mode: "offset", offsetMm: d.offset }
+        : { mode: "backspacing", backspacingIn: d.backspacing, reference: d.reference, flangeIn: d.flange },
     spacerMm: d.spacer,
   };
 }
@@ -244,18 +278,64 @@ export function readDraft(draft: Draft, prefs: DisplayPrefs): { input: Compariso
   };
   const label = (path: VehicleFieldPath) => vehicleFieldLabel(path, prefs);
   /** A plain number (ratio, degrees) within bounds. */
-  const plainNumber = (text: string, path: VehicleFieldPath, b: Bounds, unit: string, unreadable: string, example: string, suffix?: RegExp): number => {
+  const plainNumber = (
+    text: string,
+    path: VehicleFieldPath,
+    b: Bounds,
+    unit: string,
+    unreadable: string,
+    example: string,
+    suffix?: RegExp,
+  ): number => {
     const n = readNumber(text, suffix);
     if (n === null) return at(path)(`${label(path)}: ${unreadable}`);
     return inBounds(n, b) ? n : at(path)(`${label(path)}: must be between ${b.min} and ${b.max}${unit}, e.g. ${example}.`);
   };
-  const kpi = v.kpi.trim() === "" ? null : plainNumber(v.kpi, "kingpinInclinationDeg", VEHICLE_LIMITS.kingpinInclinationDeg, "°", "enter degrees, e.g. 8, or leave it empty.", "8", /°|deg$/i);
+  const kpi =
+    v.kpi.trim() === ""
+      ? null
+      : plainNumber(
+          v.kpi,
+          "kingpinInclinationDeg",
+          VEHICLE_LIMITS.kingpinInclinationDeg,
+          "°",
+          "enter degrees, e.g. 8, or leave it empty.",
+          "8",
+          /°|deg$/i,
+        );
   // "3.73:1" is a common way to write a ratio.
   const ratioText = (t: string) => (/^\s*\d+(\.\d+)?\s*:\s*1\s*$/.test(t) ? (t.split(":")[0] ?? "") : t);
   const axle = plainNumber(ratioText(v.axle), "axleRatio", VEHICLE_LIMITS.axleRatio, "", "enter a ratio, e.g. 3.73 (or 3.73:1).", "3.73");
-  const top = plainNumber(v.top, "transmissionRatio", VEHICLE_LIMITS.transmissionRatio, "", "enter a ratio, e.g. 1.00 (direct) or 0.70 (overdrive).", "1.00");
-  const first = v.first.trim() === "" ? null : plainNumber(ratioText(v.first), "firstGearRatio", VEHICLE_LIMITS.firstGearRatio, "", "enter a ratio, e.g. 4.03 (or 4.03:1), or leave it empty.", "4.03");
-  const low = v.low.trim() === "" ? null : plainNumber(ratioText(v.low), "transferLowRatio", VEHICLE_LIMITS.transferLowRatio, "", "enter a ratio, e.g. 2.72 (or 2.72:1), or leave it empty.", "2.72");
+  const top = plainNumber(
+    v.top,
+    "transmissionRatio",
+    VEHICLE_LIMITS.transmissionRatio,
+    "",
+    "enter a ratio, e.g. 1.00 (direct) or 0.70 (overdrive).",
+    "1.00",
+  );
+  const first =
+    v.first.trim() === ""
+      ? null
+      : plainNumber(
+          ratioText(v.first),
+          "firstGearRatio",
+          VEHICLE_LIMITS.firstGearRatio,
+          "",
+          "enter a ratio, e.g. 4.03 (or 4.03:1), or leave it empty.",
+          "4.03",
+        );
+  const low =
+    v.low.trim() === ""
+      ? null
+      : plainNumber(
+          ratioText(v.low),
+          "transferLowRatio",
+          VEHICLE_LIMITS.transferLowRatio,
+          "",
+          "enter a ratio, e.g. 2.72 (or 2.72:1), or leave it empty.",
+          "2.72",
+        );
 
   const sUnit = speedUnit(prefs);
   const metric = prefs.units === "metric";
@@ -265,14 +345,20 @@ export function readDraft(draft: Draft, prefs: DisplayPrefs): { input: Compariso
   const exact = v.exact;
   let cruise: number[];
   if (exact && exact.cruise === v.cruise) cruise = exact.cruiseMph;
-  else if (parts.length === 0 || speeds.some((x) => x === null)) cruise = [at("cruiseSpeedsMph")(`${label("cruiseSpeedsMph")}: enter one to six speeds in ${sUnit}, separated by commas, e.g. ${speedExample}.`)];
-  else if (parts.length > VEHICLE_LIMITS.cruiseCount.max) cruise = [at("cruiseSpeedsMph")(`${label("cruiseSpeedsMph")}: enter at most six speeds, e.g. ${speedExample}.`)];
+  else if (parts.length === 0 || speeds.some((x) => x === null))
+    cruise = [
+      at("cruiseSpeedsMph")(`${label("cruiseSpeedsMph")}: enter one to six speeds in ${sUnit}, separated by commas, e.g. ${speedExample}.`),
+    ];
+  else if (parts.length > VEHICLE_LIMITS.cruiseCount.max)
+    cruise = [at("cruiseSpeedsMph")(`${label("cruiseSpeedsMph")}: enter at most six speeds, e.g. ${speedExample}.`)];
   else {
     cruise = speeds.map((x) => tidy(metric ? (x as number) / KM_PER_MILE : (x as number)));
     if (!cruise.every((mph) => inBounds(mph, VEHICLE_LIMITS.cruiseMph))) {
       const min = metric ? boundText(VEHICLE_LIMITS.cruiseMph.min * KM_PER_MILE, "min", 1) : String(VEHICLE_LIMITS.cruiseMph.min);
       const max = metric ? boundText(VEHICLE_LIMITS.cruiseMph.max * KM_PER_MILE, "max", 1) : String(VEHICLE_LIMITS.cruiseMph.max);
-      cruise = [at("cruiseSpeedsMph")(`${label("cruiseSpeedsMph")}: each speed must be between ${min} and ${max} ${sUnit}, e.g. ${speedExample}.`)];
+      cruise = [
+        at("cruiseSpeedsMph")(`${label("cruiseSpeedsMph")}: each speed must be between ${min} and ${max} ${sUnit}, e.g. ${speedExample}.`),
+      ];
     }
   }
 
@@ -289,11 +375,22 @@ export function readDraft(draft: Draft, prefs: DisplayPrefs): { input: Compariso
     const mm = unit === "mm" ? value : tidy(inToMm(value));
     if (Number.isNaN(value)) fender = NaN;
     else if (inBounds(mm, b)) fender = mm;
-    else fender = at("fenderLineMm")(lengthMessages(label("fenderLineMm"), unit, example).bounds(boundText(shown.min, "min", 2), boundText(shown.max, "max", 2)));
+    else
+      fender = at("fenderLineMm")(
+        lengthMessages(label("fenderLineMm"), unit, example).bounds(boundText(shown.min, "min", 2), boundText(shown.max, "max", 2)),
+      );
   }
   const current = readSetup("current", draft.current, errors);
   const planned = readSetup("planned", draft.planned, errors);
-  const vehicle = { kingpinInclinationDeg: kpi, axleRatio: axle, transmissionRatio: top, cruiseSpeedsMph: cruise, fenderLineMm: fender, firstGearRatio: first, transferLowRatio: low };
+  const vehicle = {
+    kingpinInclinationDeg: kpi,
+    axleRatio: axle,
+    transmissionRatio: top,
+    cruiseSpeedsMph: cruise,
+    fenderLineMm: fender,
+    firstGearRatio: first,
+    transferLowRatio: low,
+  };
   const checked = checkComparison({ current, planned, vehicle });
   if (!checked.ok) {
     // Left: what only the whole input knows, named by the field's label (the setups' own

@@ -1,6 +1,21 @@
 import { describe, expect, it } from "vitest";
 import { computeComparison } from "./compute";
-import { DEFAULT_PREFS, type DisplayPrefs, MINUS, formatLen, formatLenOther, formatLoad, formatNumber, formatEnteredSpeed, formatPartThickness, formatPressure, formatSpeedIn, formatSpeedRating, parsePrefs, warningTitle } from "./format";
+import {
+  DEFAULT_PREFS,
+  type DisplayPrefs,
+  MINUS,
+  formatLen,
+  formatLenOther,
+  formatLoad,
+  formatNumber,
+  formatEnteredSpeed,
+  formatPartThickness,
+  formatPressure,
+  formatSpeedIn,
+  formatSpeedRating,
+  parsePrefs,
+  warningTitle,
+} from "./format";
 import { DEFAULT_INPUT } from "./schema";
 
 const inch: DisplayPrefs = { units: "imperial", lengths: "decimal" };

@@ -137,7 +137,9 @@ export function formatEnteredSpeed(mph: number, prefs: DisplayPrefs): string {
 
 /** A speed symbol's reference speed in both units, the chosen one first: "160 km/h (99 mph)". */
 export function formatSpeedRating(kmh: number, mph: number, prefs: DisplayPrefs): string {
-  return prefs.units === "metric" ? `${formatNumber(kmh)} km/h (${formatNumber(mph)} mph)` : `${formatNumber(mph)} mph (${formatNumber(kmh)} km/h)`;
+  return prefs.units === "metric"
+    ? `${formatNumber(kmh)} km/h (${formatNumber(mph)} mph)`
+    : `${formatNumber(mph)} mph (${formatNumber(kmh)} km/h)`;
 }
 
 /** A load in both units, the chosen one first: "1,450 kg (3,197 lb)". */
@@ -149,7 +151,9 @@ export function formatLoad(kg: number, prefs: DisplayPrefs): string {
 /** A pressure given in psi, the chosen unit first: "50 psi (345 kPa)". */
 export function formatPressure(psi: number, prefs: DisplayPrefs): string {
   const kpa = psiToKpa(psi);
-  return prefs.units === "metric" ? `${formatNumber(kpa)} kPa (${formatNumber(psi)} psi)` : `${formatNumber(psi)} psi (${formatNumber(kpa)} kPa)`;
+  return prefs.units === "metric"
+    ? `${formatNumber(kpa)} kPa (${formatNumber(psi)} psi)`
+    : `${formatNumber(psi)} psi (${formatNumber(kpa)} kPa)`;
 }
 
 /** A warning's title in the chosen units: its speeds from the reader's system, its length converted (a spacer's as bought). */

@@ -7,7 +7,11 @@ import { DEFAULT_INPUT } from "./schema";
 const r = computeComparison(DEFAULT_INPUT);
 const text = forumPost(r, DEFAULT_PREFS, { name: "Trail | build", url: "https://hubface.example/s/AbC" });
 const rows = text.split("\n").filter((l) => l.startsWith("| ") && !l.startsWith("| |"));
-const row = (label: string) => rows.find((l) => l.startsWith(`| ${label}`))?.split(" | ").map((s) => s.replace(/^\| |\s*\|$/g, ""));
+const row = (label: string) =>
+  rows
+    .find((l) => l.startsWith(`| ${label}`))
+    ?.split(" | ")
+    .map((s) => s.replace(/^\| |\s*\|$/g, ""));
 
 describe("forum post", () => {
   it("is a Markdown table with four cells on every row and the link", () => {
@@ -46,13 +50,16 @@ describe("forum post", () => {
   it("lists the warnings the numbers call for", () => {
     expect(r.warnings.length).toBeGreaterThan(0);
     expect(text).toContain("Check before you buy:");
-    expect(text).toContain("- Speedometer reads 14.6 % low: at an indicated 60 mph you are actually going 70.2 mph (actual speed is 17.1 % above the speedometer)");
+    expect(text).toContain(
+      "- Speedometer reads 14.6 % low: at an indicated 60 mph you are actually going 70.2 mph (actual speed is 17.1 % above the speedometer)",
+    );
   });
 });
 
 const SHARE = "https://hubface.example/s/AbC";
 const IMAGE = "https://hubface.example/s/AbC/opengraph-image";
-const EVIL = "[url=https://evil.example]click[/url] [click](https://evil.example) ![x](https://evil.example/i.png) <a href=x>y</a> https://evil.example www.evil.example";
+const EVIL =
+  "[url=https://evil.example]click[/url] [click](https://evil.example) ![x](https://evil.example/i.png) <a href=x>y</a> https://evil.example www.evil.example";
 
 describe("forum post in Markdown, with the drawing", () => {
   const md = forumPost(r, DEFAULT_PREFS, { name: "Trail build", url: SHARE, imageUrl: IMAGE, format: "markdown" });
@@ -78,7 +85,8 @@ describe("forum post in Markdown, with the drawing", () => {
 
 describe("forum post in BBCode", () => {
   const bb = forumPost(r, DEFAULT_PREFS, { name: "Trail | build", url: SHARE, imageUrl: IMAGE, format: "bbcode" });
-  const tags = (text: string) => [...text.matchAll(/\[(\/?)([a-z*]+)(?:=([^\]]*))?\]/gi)].map((m) => ({ close: m[1] === "/", name: m[2]!.toLowerCase(), arg: m[3] }));
+  const tags = (text: string) =>
+    [...text.matchAll(/\[(\/?)([a-z*]+)(?:=([^\]]*))?\]/gi)].map((m) => ({ close: m[1] === "/", name: m[2]!.toLowerCase(), arg: m[3] }));
 
   it("uses only the widely supported tags, each one closed", () => {
     const used = tags(bb);
@@ -101,7 +109,11 @@ describe("forum post in BBCode", () => {
     const cols = ["Current", "Planned", "Change"].map((h) => header.indexOf(h));
     // Overall diameter: ISO 4000-1, 265/70R17 = 802.8 mm = 31.61 in; flotation 37 in; change +5.39 in (as in Markdown).
     const line = block.find((l) => l.startsWith("Overall diameter"))!;
-    expect([line.slice(cols[0], cols[1]).trim(), line.slice(cols[1], cols[2]).trim(), line.slice(cols[2]).trim()]).toEqual(["31.61 in", "37 in", "+5.39 in"]);
+    expect([line.slice(cols[0], cols[1]).trim(), line.slice(cols[1], cols[2]).trim(), line.slice(cols[2]).trim()]).toEqual([
+      "31.61 in",
+      "37 in",
+      "+5.39 in",
+    ]);
     // The last column is free text ("speedometer reads 14.6 % low"): a line may run past the header by that much.
     for (const l of block.slice(1)) expect(l.length).toBeLessThanOrEqual(header.length + 25);
     expect(bb).toMatch(/\[list\]\n(\[\*\].*\n)*\[\*\]Speedometer reads 14\.6 % low.*\n(\[\*\].*\n)*\[\/list\]/);

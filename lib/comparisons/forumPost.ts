@@ -17,7 +17,11 @@ export type ForumFormat = "markdown" | "bbcode";
 export const FORUM_FORMAT_LABEL: Record<ForumFormat, string> = { markdown: "Markdown", bbcode: "BBCode" };
 
 /** Pipes would break a table cell; line breaks would end the row. */
-const cell = (s: string) => s.replace(/\|/g, "/").replace(/\s*\n\s*/g, " ").trim();
+const cell = (s: string) =>
+  s
+    .replace(/\|/g, "/")
+    .replace(/\s*\n\s*/g, " ")
+    .trim();
 
 /**
  * Markdown: backslash-escape every character that could start emphasis, code, a link, an
@@ -37,7 +41,13 @@ export const escapeMarkdown = (s: string) =>
  * engines that auto-link addresses leave them alone. The text still reads the same.
  */
 export const escapeBbcode = (s: string) =>
-  s.replace(/\s*\n\s*/g, " ").trim().replace(/\[/g, "\uff3b").replace(/\]/g, "\uff3d").replace(/:(?=\/\/)/g, "\uff1a").replace(/\b(www)\./gi, "$1\uff0e");
+  s
+    .replace(/\s*\n\s*/g, " ")
+    .trim()
+    .replace(/\[/g, "\uff3b")
+    .replace(/\]/g, "\uff3d")
+    .replace(/:(?=\/\/)/g, "\uff1a")
+    .replace(/\b(www)\./gi, "$1\uff0e");
 
 const DRAWING_ALT = "Drawing: current and planned wheel and tire at the hub";
 const CAVEAT = "Nominal, unloaded figures; the tire and wheel makers' published figures win. Measure your own vehicle before you buy.";
@@ -76,15 +86,31 @@ function figureRows(r: ComparisonResult, prefs: DisplayPrefs): Row[] {
       `speedometer ${readingPhrase(r.speedometer.ratio)}`,
     ],
   ];
-  if (cruise) rows.push([`Engine rpm at ${formatEnteredSpeed(cruise.mph, prefs)}`, formatNumber(cruise.currentRpm), formatNumber(cruise.plannedRpm), `${formatNumber(((cruise.plannedRpm - cruise.currentRpm) / cruise.currentRpm) * 100, 1, { signed: true })} %`]);
-  rows.push(["Axle ratio", formatNumber(r.gearing.axleRatio, 2), `suggested ${formatNumber(r.gearing.suggestedRatio, 2)}`, `${formatNumber(r.gearing.ratioToRestore, 2)} restores`]);
+  if (cruise)
+    rows.push([
+      `Engine rpm at ${formatEnteredSpeed(cruise.mph, prefs)}`,
+      formatNumber(cruise.currentRpm),
+      formatNumber(cruise.plannedRpm),
+      `${formatNumber(((cruise.plannedRpm - cruise.currentRpm) / cruise.currentRpm) * 100, 1, { signed: true })} %`,
+    ]);
+  rows.push([
+    "Axle ratio",
+    formatNumber(r.gearing.axleRatio, 2),
+    `suggested ${formatNumber(r.gearing.suggestedRatio, 2)}`,
+    `${formatNumber(r.gearing.ratioToRestore, 2)} restores`,
+  ]);
   return rows;
 }
 
 function markdown(r: ComparisonResult, prefs: DisplayPrefs, rows: Row[], opts: ForumPostOptions): string {
   const lines = [`**${escapeMarkdown(opts.name)}**`, ""];
   if (opts.imageUrl) lines.push(`[![${DRAWING_ALT}](${opts.imageUrl})](${opts.url})`, "");
-  lines.push("| | Current | Planned | Change |", "|---|---|---|---|", ...rows.map((row) => `| ${row.map(escapeMarkdown).join(" | ")} |`), "");
+  lines.push(
+    "| | Current | Planned | Change |",
+    "|---|---|---|---|",
+    ...rows.map((row) => `| ${row.map(escapeMarkdown).join(" | ")} |`),
+    "",
+  );
   if (r.warnings.length > 0) {
     lines.push("Check before you buy:");
     for (const w of r.warnings) lines.push(`- ${escapeMarkdown(warningTitle(w, prefs))}`);
@@ -98,7 +124,12 @@ function markdown(r: ComparisonResult, prefs: DisplayPrefs, rows: Row[], opts: F
 function alignedTable(rows: Row[]): string[] {
   const all: Row[] = [["", "Current", "Planned", "Change"], ...rows.map((row) => row.map(escapeBbcode) as Row)];
   const widths = [0, 1, 2].map((i) => Math.max(...all.map((row) => [...row[i]!].length)));
-  return all.map((row) => row.map((v, i) => (i < 3 ? v + " ".repeat(widths[i]! - [...v].length + 2) : v)).join("").trimEnd());
+  return all.map((row) =>
+    row
+      .map((v, i) => (i < 3 ? v + " ".repeat(widths[i]! - [...v].length + 2) : v))
+      .join("")
+      .trimEnd(),
+  );
 }
 
 function bbcode(r: ComparisonResult, prefs: DisplayPrefs, rows: Row[], opts: ForumPostOptions): string {

@@ -41,7 +41,11 @@ const SORTS: Record<ComparisonSort, [string, "asc" | "desc"][]> = {
   diameter: [["c.diameter_change_mm", "desc"]],
 };
 
-export async function listComparisons(db: Knex, ownerId: string, opts: { q?: string; sort?: ComparisonSort; limit?: number } = {}): Promise<SavedComparison[]> {
+export async function listComparisons(
+  db: Knex,
+  ownerId: string,
+  opts: { q?: string; sort?: ComparisonSort; limit?: number } = {},
+): Promise<SavedComparison[]> {
   const q = withShare(db).where("c.owner_id", ownerId);
   const search = opts.q?.trim();
   if (search) {
@@ -86,7 +90,13 @@ export async function createComparison(
   const input = comparisonInputSchema.parse(data.input);
   await assertOwnVehicle(db, ownerId, data.vehicleId);
   const [row] = await db<ComparisonRow>("comparisons")
-    .insert({ owner_id: ownerId, name: data.name.trim(), input: JSON.stringify(input) as unknown, vehicle_id: data.vehicleId ?? null, ...keyFigureColumns(input) })
+    .insert({
+      owner_id: ownerId,
+      name: data.name.trim(),
+      input: JSON.stringify(input) as unknown,
+      vehicle_id: data.vehicleId ?? null,
+      ...keyFigureColumns(input),
+    })
     .returning("*");
   return savedComparisonDto({ ...(row as ComparisonRow), share_slug: null, share_created_at: null });
 }
@@ -128,7 +138,8 @@ export async function duplicateComparison(db: Knex, ownerId: string, id: string)
   const source = await db<ComparisonRow>("comparisons").where({ id, owner_id: ownerId }).first();
   if (!source) throw new NotFoundError(NOT_FOUND);
   const suffix = " (copy)";
-  const name = source.name.length + suffix.length > 120 ? `${source.name.slice(0, 120 - suffix.length)}${suffix}` : `${source.name}${suffix}`;
+  const name =
+    source.name.length + suffix.length > 120 ? `${source.name.slice(0, 120 - suffix.length)}${suffix}` : `${source.name}${suffix}`;
   return createComparison(db, ownerId, { name, input: source.input as ComparisonInput, vehicleId: source.vehicle_id });
 }
 
@@ -159,7 +170,9 @@ async function revokeLive(trx: Knex.Transaction, ownerId: string, id: string): P
 export async function createShare(db: Knex, ownerId: string, id: string): Promise<ComparisonShare & { replaced: string | null }> {
   return db.transaction(async (trx) => {
     const replaced = await revokeLive(trx, ownerId, id);
-    const [share] = await trx<ComparisonShareRow>("comparison_shares").insert({ comparison_id: id, slug: newShareSlug() }).returning(["slug", "created_at"]);
+    const [share] = await trx<ComparisonShareRow>("comparison_shares")
+      .insert({ comparison_id: id, slug: newShareSlug() })
+      .returning(["slug", "created_at"]);
     return { ...comparisonShareDto(share!), replaced };
   });
 }
@@ -179,8 +192,7 @@ export async function findSharedComparison(db: Knex, slug: string): Promise<Shar
     .where("s.slug", slug)
     .whereNull("s.revoked_at")
     .first("s.slug", "s.created_at as shared_at", "c.name", "c.input", "c.updated_at")) as
-    | { slug: string; shared_at: Date; name: string; input: unknown; updated_at: Date }
-    | undefined;
+    { slug: string; shared_at: Date; name: string; input: unknown; updated_at: Date } | undefined;
   if (!row) return undefined;
   const parsed = comparisonInputSchema.safeParse(row.input);
   if (!parsed.success) {
@@ -191,4 +203,15 @@ export async function findSharedComparison(db: Knex, slug: string): Promise<Shar
 }
 
 /** These queries on the app's database handle, for pages and route handlers. */
-export const comparisonQueries = bindAppDb({ createComparison, createShare, deleteComparison, duplicateComparison, findComparison, findSharedComparison, getComparison, listComparisons, revokeShare, updateComparison });
+export const comparisonQueries = bindAppDb({
+  createComparison,
+  createShare,
+  deleteComparison,
+  duplicateComparison,
+  findComparison,
+  findSharedComparison,
+  getComparison,
+  listComparisons,
+  revokeShare,
+  updateComparison,
+});

@@ -29,7 +29,10 @@ export const updateComparisonSchema = z
     input: comparisonInputSchema.optional(),
     vehicleId: vehicleIdSchema.optional(),
   })
-  .refine((v) => v.name !== undefined || v.input !== undefined || v.vehicleId !== undefined, { message: "Nothing to change: send a name, an input or a vehicle id.", path: ["_"] });
+  .refine((v) => v.name !== undefined || v.input !== undefined || v.vehicleId !== undefined, {
+    message: "Nothing to change: send a name, an input or a vehicle id.",
+    path: ["_"],
+  });
 
 export const COMPARISON_SORTS = ["updated", "name", "created", "diameter"] as const;
 export type ComparisonSort = (typeof COMPARISON_SORTS)[number];
@@ -42,7 +45,10 @@ export const COMPARISON_SORT_LABEL: Record<ComparisonSort, string> = {
 
 export const listComparisonsQuery = z.object({
   q: z.string().trim().max(100, "Search for at most 100 characters.").optional().default(""),
-  sort: z.enum(COMPARISON_SORTS, { error: `Sort by one of: ${COMPARISON_SORTS.join(", ")}.` }).optional().default("updated"),
+  sort: z
+    .enum(COMPARISON_SORTS, { error: `Sort by one of: ${COMPARISON_SORTS.join(", ")}.` })
+    .optional()
+    .default("updated"),
 });
 
 export const comparisonIdParams = z.object({ id: z.uuid() });

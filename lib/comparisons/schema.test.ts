@@ -24,7 +24,11 @@ describe("comparison input schema", () => {
           position: { mode: "offset" as const, offsetMm: s.offset },
           spacerMm: s.spacerMm,
         });
-        const input = { current: mk(a), planned: mk(b), vehicle: { ...DEFAULT_INPUT.vehicle, kingpinInclinationDeg: kpi, firstGearRatio: 4.03, transferLowRatio: 2.72 } };
+        const input = {
+          current: mk(a),
+          planned: mk(b),
+          vehicle: { ...DEFAULT_INPUT.vehicle, kingpinInclinationDeg: kpi, firstGearRatio: 4.03, transferLowRatio: 2.72 },
+        };
         const parsed = comparisonInputSchema.safeParse(input);
         if (!parsed.success) return;
         const out = computeComparison(parsed.data);
@@ -45,7 +49,10 @@ describe("crawl-ratio inputs (first-gear and transfer-case low ratios)", () => {
   it("keeps entered ratios and bounds them like the other ratios", () => {
     const withGears = { ...DEFAULT_INPUT, vehicle: { ...DEFAULT_INPUT.vehicle, firstGearRatio: 4.03, transferLowRatio: 2.72 } };
     expect(comparisonInputSchema.parse(withGears).vehicle).toMatchObject({ firstGearRatio: 4.03, transferLowRatio: 2.72 });
-    const bad = comparisonInputSchema.safeParse({ ...DEFAULT_INPUT, vehicle: { ...DEFAULT_INPUT.vehicle, firstGearRatio: 0.5, transferLowRatio: "low" } });
+    const bad = comparisonInputSchema.safeParse({
+      ...DEFAULT_INPUT,
+      vehicle: { ...DEFAULT_INPUT.vehicle, firstGearRatio: 0.5, transferLowRatio: "low" },
+    });
     expect(bad.error?.issues.map((i) => [i.path.join("."), i.message])).toEqual([
       ["vehicle.firstGearRatio", "The first-gear ratio must be between 1 and 10 (e.g. 4.03)."],
       ["vehicle.transferLowRatio", "Enter the transfer-case low ratio as a number (e.g. 2.72)."],
@@ -64,7 +71,9 @@ describe("zod adapter over checkComparison", () => {
     const m = checkComparison(bad);
     expect(z.success).toBe(false);
     expect(m.ok).toBe(false);
-    expect(z.error?.issues.map((i) => [i.path.join("."), i.message])).toEqual(m.ok ? [] : m.issues.map((i) => [i.path.join("."), i.message]));
+    expect(z.error?.issues.map((i) => [i.path.join("."), i.message])).toEqual(
+      m.ok ? [] : m.issues.map((i) => [i.path.join("."), i.message]),
+    );
     expect(z.error?.issues[0]?.message).toBe("A cruise speed must be between 5 and 150 mph (e.g. 65).");
   });
 });

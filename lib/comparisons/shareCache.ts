@@ -23,7 +23,10 @@ export async function dropCachedShare(slug: string | null | undefined): Promise<
     await db.raw("select pg_notify(?, ?)", [SHARE_PURGE_CHANNEL, slug]);
   } catch (error) {
     // The change itself is saved; other servers still drop their copy within the page's `revalidate`.
-    log().error({ err: { message: (error as Error).message }, channel: SHARE_PURGE_CHANNEL }, "could not tell the other servers to drop a share page");
+    log().error(
+      { err: { message: (error as Error).message }, channel: SHARE_PURGE_CHANNEL },
+      "could not tell the other servers to drop a share page",
+    );
   }
 }
 

@@ -12,8 +12,22 @@ describe("comparison query string", () => {
   it("round-trips backspacing, reference, flange allowance, spacer and every vehicle figure", () => {
     const x: ComparisonInput = {
       current: { ...DEFAULT_INPUT.current, spacerMm: 12.5 },
-      planned: { tire: "LT315/70R17 121/118Q", wheelDiameterIn: 17, wheelWidthIn: 8.5, position: { mode: "backspacing", backspacingIn: 4.75, reference: "bead-seat", flangeIn: 0.625 }, spacerMm: 0 },
-      vehicle: { kingpinInclinationDeg: 8.5, axleRatio: 4.1, transmissionRatio: 0.72, cruiseSpeedsMph: [55, 65, 75], fenderLineMm: 142, firstGearRatio: 4.03, transferLowRatio: 2.72 },
+      planned: {
+        tire: "LT315/70R17 121/118Q",
+        wheelDiameterIn: 17,
+        wheelWidthIn: 8.5,
+        position: { mode: "backspacing", backspacingIn: 4.75, reference: "bead-seat", flangeIn: 0.625 },
+        spacerMm: 0,
+      },
+      vehicle: {
+        kingpinInclinationDeg: 8.5,
+        axleRatio: 4.1,
+        transmissionRatio: 0.72,
+        cruiseSpeedsMph: [55, 65, 75],
+        fenderLineMm: 142,
+        firstGearRatio: 4.03,
+        transferLowRatio: 2.72,
+      },
     };
     const q = encodeComparison(x);
     expect(q).toContain("pb=4.75&pr=bead&pf=0.625");
@@ -27,7 +41,12 @@ describe("comparison query string", () => {
     const four = (min: number, max: number) => fc.integer({ min: min * 10000, max: max * 10000 }).map((v) => v / 10000);
     const position = fc.oneof(
       four(-60, 60).map((offsetMm) => ({ mode: "offset" as const, offsetMm })),
-      fc.record({ mode: fc.constant("backspacing" as const), backspacingIn: four(3, 6), reference: fc.constantFrom("flange" as const, "bead-seat" as const), flangeIn: four(0, 2) }),
+      fc.record({
+        mode: fc.constant("backspacing" as const),
+        backspacingIn: four(3, 6),
+        reference: fc.constantFrom("flange" as const, "bead-seat" as const),
+        flangeIn: four(0, 2),
+      }),
     );
     const setup = fc.record({
       tire: fc.constantFrom("265/70R17", "37x12.50R17LT", "LT285/70R17 121/118Q", "285/75R17 LRE"),
@@ -57,16 +76,34 @@ describe("comparison query string", () => {
 
   it("old links without the gear parameters still decode, with no crawl-ratio inputs; bad ones are named", () => {
     const old = "ct=265/70R17&cd=17&cw=8&co=25&pt=37x12.50R17LT&pd=17&pw=9&po=-12&axle=4.1";
-    expect(decodeComparison(old)).toEqual({ input: { ...DEFAULT_INPUT, current: { ...DEFAULT_INPUT.current, tire: "265/70R17" }, planned: { ...DEFAULT_INPUT.planned, tire: "37x12.50R17LT" }, vehicle: { ...DEFAULT_INPUT.vehicle, axleRatio: 4.1, firstGearRatio: null, transferLowRatio: null } }, problems: [] });
+    expect(decodeComparison(old)).toEqual({
+      input: {
+        ...DEFAULT_INPUT,
+        current: { ...DEFAULT_INPUT.current, tire: "265/70R17" },
+        planned: { ...DEFAULT_INPUT.planned, tire: "37x12.50R17LT" },
+        vehicle: { ...DEFAULT_INPUT.vehicle, axleRatio: 4.1, firstGearRatio: null, transferLowRatio: null },
+      },
+      problems: [],
+    });
     expect(hasComparisonParams("first=4.03")).toBe(true);
-    expect(decodeComparison("first=4.03&low=12").problems.map(problemText)).toEqual(["Transfer-case low ratio (optional): “12” is outside 1–10; using none (not entered)."]);
+    expect(decodeComparison("first=4.03&low=12").problems.map(problemText)).toEqual([
+      "Transfer-case low ratio (optional): “12” is outside 1–10; using none (not entered).",
+    ]);
   });
 
   it("falls back per parameter and names what it could not read", () => {
-    const { input, problems } = decodeComparison("ct=not-a-size&cw=abc&co=1e3&pt=35x12.50R15LT&pw=10&pb=3.75&pr=sideways&kpi=-4&axle=&cruise=60,x,70&fender=9999");
+    const { input, problems } = decodeComparison(
+      "ct=not-a-size&cw=abc&co=1e3&pt=35x12.50R15LT&pw=10&pb=3.75&pr=sideways&kpi=-4&axle=&cruise=60,x,70&fender=9999",
+    );
     expect(input.current).toEqual(DEFAULT_INPUT.current);
     // The wheel diameter follows the tire when missing; an unknown reference reads as "flange".
-    expect(input.planned).toEqual({ tire: "35x12.50R15LT", wheelDiameterIn: 15, wheelWidthIn: 10, position: { mode: "backspacing", backspacingIn: 3.75, reference: "flange", flangeIn: 0.5 }, spacerMm: 0 });
+    expect(input.planned).toEqual({
+      tire: "35x12.50R15LT",
+      wheelDiameterIn: 15,
+      wheelWidthIn: 10,
+      position: { mode: "backspacing", backspacingIn: 3.75, reference: "flange", flangeIn: 0.5 },
+      spacerMm: 0,
+    });
     expect(input.vehicle).toEqual({ ...DEFAULT_INPUT.vehicle, cruiseSpeedsMph: [60, 70] });
     expect(problems.map(problemText)).toEqual([
       "Current setup · Tire size: “not-a-size” is not a tire size; using 265/70R17 113T.",
@@ -106,7 +143,9 @@ describe("comparison query string", () => {
     // A tire size too long is refused whole, not cut to 80 characters.
     const long = decodeComparison(`ct=${encodeURIComponent(`265/70R17 113T${" ".repeat(70)}X`)}`);
     expect(long.input.current.tire).toBe("265/70R17 113T");
-    expect(long.problems.map(problemText)).toEqual([expect.stringMatching(/^Current setup · Tire size: .* is longer than 80 characters; using 265\/70R17 113T\.$/)]);
+    expect(long.problems.map(problemText)).toEqual([
+      expect.stringMatching(/^Current setup · Tire size: .* is longer than 80 characters; using 265\/70R17 113T\.$/),
+    ]);
     // Out of range numbers say the bounds in the link's unit.
     expect(decodeComparison("pw=25&axle=12&ps=150").problems.map((p) => `${p.field} ${p.reason}`)).toEqual([
       "Planned setup · Wheel width (in) is outside 3–20 in",
@@ -118,8 +157,35 @@ describe("comparison query string", () => {
   });
 
   it("never throws and always returns a valid input, whatever the query (property)", () => {
-    const keys = fc.constantFrom("ct", "cd", "cw", "co", "cb", "cr", "cf", "cs", "pt", "pd", "pw", "po", "pb", "pr", "pf", "ps", "kpi", "axle", "top", "cruise", "fender", "zz");
-    const value = fc.oneof(fc.string(), fc.double().map(String), fc.constantFrom("17", "-12", "NaN", "Infinity", "1e400", "4-3/4", "%", "%%41", "bead", "265/70R17"));
+    const keys = fc.constantFrom(
+      "ct",
+      "cd",
+      "cw",
+      "co",
+      "cb",
+      "cr",
+      "cf",
+      "cs",
+      "pt",
+      "pd",
+      "pw",
+      "po",
+      "pb",
+      "pr",
+      "pf",
+      "ps",
+      "kpi",
+      "axle",
+      "top",
+      "cruise",
+      "fender",
+      "zz",
+    );
+    const value = fc.oneof(
+      fc.string(),
+      fc.double().map(String),
+      fc.constantFrom("17", "-12", "NaN", "Infinity", "1e400", "4-3/4", "%", "%%41", "bead", "265/70R17"),
+    );
     fc.assert(
       fc.property(fc.array(fc.tuple(keys, value), { maxLength: 12 }), fc.string(), (pairs, junk) => {
         const q = pairs.map(([k, v]) => `${k}=${v}`).join("&") + junk;
@@ -133,7 +199,13 @@ describe("comparison query string", () => {
 
   it("reads backspacing and wheel sizes written with fractions, as the form takes them (4-1/2 = 4½ = 4.5 in)", () => {
     const base = "ct=265/70R17&cd=17&cw=8&co=25&pt=35x12.50R17LT&pd=17";
-    for (const [w, b] of [["9", "4-1/2"], ["9", "4+1/2"], ["9", "4%C2%BD"], ["9", "4.5"], ["8-1/2+in", "4-1/2"]]) {
+    for (const [w, b] of [
+      ["9", "4-1/2"],
+      ["9", "4+1/2"],
+      ["9", "4%C2%BD"],
+      ["9", "4.5"],
+      ["8-1/2+in", "4-1/2"],
+    ]) {
       const { input, problems } = decodeComparison(`${base}&pw=${w}&pb=${b}&pr=flange`);
       expect(problems, `${w} ${b}`).toEqual([]);
       expect(input.planned.position).toEqual({ mode: "backspacing", backspacingIn: 4.5, reference: "flange", flangeIn: 0.5 });

@@ -46,7 +46,8 @@ export function encodeComparison(input: ComparisonInput): string {
   if (v.kingpinInclinationDeg !== null) out.push(["kpi", urlNumber(v.kingpinInclinationDeg)]);
   if (v.axleRatio !== DEFAULT_VEHICLE.axleRatio) out.push(["axle", urlNumber(v.axleRatio)]);
   if (v.transmissionRatio !== DEFAULT_VEHICLE.transmissionRatio) out.push(["top", urlNumber(v.transmissionRatio)]);
-  if (v.cruiseSpeedsMph.join(",") !== DEFAULT_VEHICLE.cruiseSpeedsMph.join(",")) out.push(["cruise", v.cruiseSpeedsMph.map(urlNumber).join(",")]);
+  if (v.cruiseSpeedsMph.join(",") !== DEFAULT_VEHICLE.cruiseSpeedsMph.join(","))
+    out.push(["cruise", v.cruiseSpeedsMph.map(urlNumber).join(",")]);
   if (v.fenderLineMm !== null) out.push(["fender", urlNumber(v.fenderLineMm)]);
   if (v.firstGearRatio !== null) out.push(["first", urlNumber(v.firstGearRatio)]);
   if (v.transferLowRatio !== null) out.push(["low", urlNumber(v.transferLowRatio)]);
@@ -107,9 +108,16 @@ function decodeVehicle(p: URLSearchParams, problems: LinkProblem[]): VehicleValu
       else dropped.push(`${part.trim() === "" ? "an empty entry" : `“${part.trim()}”`} ${r.reason}`);
     }
     const extra = kept.splice(VEHICLE_LIMITS.cruiseCount.max);
-    if (rawCruise.split(",").length > parts.length || extra.length > 0) dropped.push(`only the first ${VEHICLE_LIMITS.cruiseCount.max} speeds are used`);
+    if (rawCruise.split(",").length > parts.length || extra.length > 0)
+      dropped.push(`only the first ${VEHICLE_LIMITS.cruiseCount.max} speeds are used`);
     cruise = kept.length > 0 ? kept : d.cruiseSpeedsMph;
-    if (dropped.length > 0) problems.push({ field: VEHICLE_LABEL.cruise, given: rawCruise, reason: `has entries left out (${dropped.join("; ")})`, used: `${cruise.map(shown).join(", ")} mph` });
+    if (dropped.length > 0)
+      problems.push({
+        field: VEHICLE_LABEL.cruise,
+        given: rawCruise,
+        reason: `has entries left out (${dropped.join("; ")})`,
+        used: `${cruise.map(shown).join(", ")} mph`,
+      });
   }
   return {
     kingpinInclinationDeg,
@@ -136,7 +144,10 @@ export function hasComparisonParams(q: QueryLike): boolean {
  * decodeComparison("ct=265/70R17&cw=8&co=25&pt=35x12.50R17LT&pw=9&pb=4.5&pr=flange").input.planned.position;
  * // { mode: "backspacing", backspacingIn: 4.5, reference: "flange", flangeIn: 0.5 }
  */
-export function decodeComparison(q: QueryLike, defaults: ComparisonInput = DEFAULT_INPUT): { input: ComparisonInput; problems: LinkProblem[] } {
+export function decodeComparison(
+  q: QueryLike,
+  defaults: ComparisonInput = DEFAULT_INPUT,
+): { input: ComparisonInput; problems: LinkProblem[] } {
   const problems: LinkProblem[] = [];
   const whole = (reason: string): LinkProblem => ({ field: "The whole comparison", given: "", reason, used: "the demo comparison" });
   let p: URLSearchParams;
@@ -151,7 +162,11 @@ export function decodeComparison(q: QueryLike, defaults: ComparisonInput = DEFAU
     vehicle: decodeVehicle(p, problems),
   };
   const checked = checkComparison(input);
-  if (!checked.ok) return { input: defaults, problems: [...problems, whole(`does not hold together (${checked.issues.map((i) => i.message).join(" ")})`)] };
+  if (!checked.ok)
+    return {
+      input: defaults,
+      problems: [...problems, whole(`does not hold together (${checked.issues.map((i) => i.message).join(" ")})`)],
+    };
   return { input: checked.value, problems };
 }
 
@@ -173,7 +188,15 @@ export const WORKSPACE_PARAM = {
  * // "/workspace?ct=265/70R17+113T&cd=17&cw=8&co=25&pt=37x12.50R17LT+124Q+LRD&pd=17&pw=9&po=-12&saved=c4…&v=d4…"
  * workspaceUrl({}); // "/workspace"
  */
-export function workspaceUrl({ input, savedId, vehicleId }: { input?: ComparisonInput | null; savedId?: string | null; vehicleId?: string | null }): string {
+export function workspaceUrl({
+  input,
+  savedId,
+  vehicleId,
+}: {
+  input?: ComparisonInput | null;
+  savedId?: string | null;
+  vehicleId?: string | null;
+}): string {
   const parts = [
     ...(input ? [encodeComparison(input)] : []),
     ...(savedId ? [`${WORKSPACE_PARAM.saved}=${encodeURIComponent(savedId)}`] : []),

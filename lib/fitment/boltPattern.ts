@@ -47,11 +47,14 @@ export function parseBoltPattern(text: string): BoltPattern {
   if (boltCount < 3 || boltCount > 10) {
     throw new FitmentInputError("boltPattern", `${JSON.stringify(text)}: bolt count ${boltCount} is outside 3–10 (${EXAMPLE})`, text);
   }
-  const unit: "in" | "mm" =
-    unitRaw === undefined ? (value < 30 ? "in" : "mm") : unitRaw.toLowerCase() === "mm" ? "mm" : "in";
+  const unit: "in" | "mm" = unitRaw === undefined ? (value < 30 ? "in" : "mm") : unitRaw.toLowerCase() === "mm" ? "mm" : "in";
   const pcdMm = unit === "in" ? value * MM_PER_IN : value;
   if (pcdMm < 80 || pcdMm > 350) {
-    throw new FitmentInputError("boltPattern", `${JSON.stringify(text)}: pitch circle ${value} ${unit} is outside 80–350 mm (${EXAMPLE})`, text);
+    throw new FitmentInputError(
+      "boltPattern",
+      `${JSON.stringify(text)}: pitch circle ${value} ${unit} is outside 80–350 mm (${EXAMPLE})`,
+      text,
+    );
   }
   return { boltCount, count: boltCount, pcdMm, pcdIn: pcdMm / MM_PER_IN, unit, text: `${boltCount}x${value}` };
 }

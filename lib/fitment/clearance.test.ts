@@ -83,7 +83,10 @@ describe("clearance predictions (worked example above; change rules common pract
   it("a spacer of 25 mm takes 25 mm from outboard points and gives 25 mm to inboard points beside the sidewall", () => {
     const spaced = { ...CUR, spacerMm: 25 };
     expect(predictClearance({ direction: "outboard", distanceMm: 40, measuredWith: CUR }, spaced).predictedMm).toBeCloseTo(15, 9);
-    expect(predictClearance({ direction: "inboard", distanceMm: 40, measuredWith: CUR, heightMm: 0 }, spaced).predictedMm).toBeCloseTo(65, 9);
+    expect(predictClearance({ direction: "inboard", distanceMm: 40, measuredWith: CUR, heightMm: 0 }, spaced).predictedMm).toBeCloseTo(
+      65,
+      9,
+    );
   });
 
   it("classes against the margin: ≤ 0 contact, below margin tight, at or above clear", () => {
@@ -121,7 +124,9 @@ describe("clearance predictions (worked example above; change rules common pract
   it("rejects a bad direction, a negative gap and a bad margin with FitmentInputError", () => {
     expect(() => predictClearance({ direction: "sideways" as never, distanceMm: 3, measuredWith: CUR }, PLA)).toThrow(FitmentInputError);
     expect(() => predictClearance({ direction: "upward", distanceMm: -1, measuredWith: CUR }, PLA)).toThrow(/distanceMm/);
-    expect(() => predictClearance({ direction: "upward", distanceMm: 3, measuredWith: CUR }, PLA, { marginMm: Number.NaN })).toThrow(/marginMm/);
+    expect(() => predictClearance({ direction: "upward", distanceMm: 3, measuredWith: CUR }, PLA, { marginMm: Number.NaN })).toThrow(
+      /marginMm/,
+    );
     expect(() => classifyClearance(Number.POSITIVE_INFINITY)).toThrow(FitmentInputError);
   });
 
@@ -210,7 +215,9 @@ describe("clearance geometry by direction and suspension state", () => {
     expect(steeringAxisInboardMm(g)).toBe(18);
     // Moving the axis inboard grows the outer corner's arm: at lock the same swap closes more.
     const near = predictClearance({ direction: "fore-aft", state: "full-lock", distanceMm: 38.1, measuredWith: CUR }, P35);
-    const far = predictClearance({ direction: "fore-aft", state: "full-lock", distanceMm: 38.1, measuredWith: CUR }, P35, { steeringAxisInboardMm: 120 });
+    const far = predictClearance({ direction: "fore-aft", state: "full-lock", distanceMm: 38.1, measuredWith: CUR }, P35, {
+      steeringAxisInboardMm: 120,
+    });
     // √(401.4² + 227.5²) = 461.384 → √(444.5² + 285.67²) = 528.376: +66.99 mm
     expect(far.changeMm).toBeCloseTo(-66.99, 1);
     expect(far.predictedMm).toBeLessThan(near.predictedMm);
@@ -225,7 +232,10 @@ describe("clearance geometry by direction and suspension state", () => {
     expect(p.predictedMm).toBeCloseTo(7.386, 2);
     expect(p.status).toBe("tight");
     expect(p.basis).toBe("shoulder");
-    expect(predictClearance({ direction: "inboard", distanceMm: 22, measuredWith: CUR, heightMm: 0 }, P35B).predictedMm).toBeCloseTo(13.83, 9);
+    expect(predictClearance({ direction: "inboard", distanceMm: 22, measuredWith: CUR, heightMm: 0 }, P35B).predictedMm).toBeCloseTo(
+      13.83,
+      9,
+    );
   });
 
   it("the fender lip takes the height gained: outboard 1 in, the corner moves 58.17 out and 43.1 up", () => {
@@ -245,7 +255,9 @@ describe("clearance geometry by direction and suspension state", () => {
   });
 
   it("fore/aft with the wheel straight: −ΔR along the radius, or the chord at a given height", () => {
-    expect(predictClearance({ direction: "fore-aft", state: "ride-height", distanceMm: 50, measuredWith: CUR }, P35).predictedMm).toBeCloseTo(50 - 43.1, 9);
+    expect(
+      predictClearance({ direction: "fore-aft", state: "ride-height", distanceMm: 50, measuredWith: CUR }, P35).predictedMm,
+    ).toBeCloseTo(50 - 43.1, 9);
     // 300 mm above the hub, measured level: 327.994 − 266.687 = 61.307 mm closer.
     const p = predictClearance({ direction: "fore-aft", state: "full-stuff", heightMm: 300, distanceMm: 50, measuredWith: CUR }, P35);
     expect(p.predictedMm).toBeCloseTo(50 - 61.307, 2);
@@ -264,10 +276,16 @@ describe("clearance geometry by direction and suspension state", () => {
   });
 
   it("refuses a height outside the measured tire and a bad state, naming the field", () => {
-    expect(() => predictClearance({ direction: "fore-aft", state: "full-lock", heightMm: 401.4, distanceMm: 10, measuredWith: CUR }, P35)).toThrow(/heightMm/);
+    expect(() =>
+      predictClearance({ direction: "fore-aft", state: "full-lock", heightMm: 401.4, distanceMm: 10, measuredWith: CUR }, P35),
+    ).toThrow(/heightMm/);
     expect(() => predictClearance({ direction: "outboard", heightMm: 440, distanceMm: 10, measuredWith: CUR }, P35)).toThrow(/heightMm/);
-    expect(() => predictClearance({ direction: "upward", state: "parked" as never, distanceMm: 10, measuredWith: CUR }, P35)).toThrow(/state/);
-    expect(() => predictClearance({ direction: "upward", distanceMm: 10, measuredWith: CUR }, P35, { steeringAxisInboardMm: Number.NaN })).toThrow(/steeringAxisInboardMm/);
+    expect(() => predictClearance({ direction: "upward", state: "parked" as never, distanceMm: 10, measuredWith: CUR }, P35)).toThrow(
+      /state/,
+    );
+    expect(() =>
+      predictClearance({ direction: "upward", distanceMm: 10, measuredWith: CUR }, P35, { steeringAxisInboardMm: Number.NaN }),
+    ).toThrow(/steeringAxisInboardMm/);
   });
 
   it("never returns NaN or Infinity for any direction, state and height (property)", () => {
@@ -297,19 +315,23 @@ describe("clearance geometry by direction and suspension state", () => {
     const sd = (y: number, z: number, a: number, b: number) =>
       y <= a && z <= b ? -Math.min(a - y, b - z) : Math.hypot(Math.max(0, y - a), Math.max(0, z - b));
     fc.assert(
-      fc.property(fc.double({ min: 0, max: 80, noNaN: true }), fc.double({ min: -60, max: 80, noNaN: true }), fc.double({ min: -60, max: 80, noNaN: true }), (g, a, b) => {
-        const p = prepareClearance({ direction: "outboard", distanceMm: g, measuredWith: CUR });
-        const got = predictPreparedMm(p, { radiusMm: 401.4 + b, innerSwingMm: 157.5, outerSwingMm: 107.5 + a });
-        let brute = g - a;
-        for (let k = 0; k <= 20000; k++) {
-          const phi = (k / 20000) * (Math.PI / 4);
-          brute = Math.min(brute, sd(g * Math.cos(phi), g * Math.sin(phi), a, b));
-        }
-        expect(got).toBeLessThanOrEqual(brute + 1e-9);
-        expect(got).toBeGreaterThanOrEqual(brute - 1e-3);
-      }),
+      fc.property(
+        fc.double({ min: 0, max: 80, noNaN: true }),
+        fc.double({ min: -60, max: 80, noNaN: true }),
+        fc.double({ min: -60, max: 80, noNaN: true }),
+        (g, a, b) => {
+          const p = prepareClearance({ direction: "outboard", distanceMm: g, measuredWith: CUR });
+          const got = predictPreparedMm(p, { radiusMm: 401.4 + b, innerSwingMm: 157.5, outerSwingMm: 107.5 + a });
+          let brute = g - a;
+          for (let k = 0; k <= 20000; k++) {
+            const phi = (k / 20000) * (Math.PI / 4);
+            brute = Math.min(brute, sd(g * Math.cos(phi), g * Math.sin(phi), a, b));
+          }
+          expect(got).toBeLessThanOrEqual(brute + 1e-9);
+          expect(got).toBeGreaterThanOrEqual(brute - 1e-3);
+        },
+      ),
       { numRuns: 300 },
     );
   });
 });
-

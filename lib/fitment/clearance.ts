@@ -79,7 +79,8 @@ export type ClearanceStatus = "clear" | "tight" | "contact";
  * beside the sidewall, the diagonal to the tread corner, the worst place on the shoulder, the
  * radial or level (chord) fore/aft gap, or a corner's sweep about the steering axis.
  */
-export type ClearanceBasis = "radius" | "reach" | "corner" | "shoulder" | "radial" | "chord" | "sweep-inner" | "sweep-outer" | "sweep-farthest";
+export type ClearanceBasis =
+  "radius" | "reach" | "corner" | "shoulder" | "radial" | "chord" | "sweep-inner" | "sweep-outer" | "sweep-farthest";
 /** Default margin, mm: 1/2 in (common practice, no source). */
 export const DEFAULT_CLEARANCE_MARGIN_MM = 12.7;
 /** Accepted margins, mm. */
@@ -177,7 +178,11 @@ function checkDirection(direction: unknown, field = "direction"): ClearanceDirec
 function checkState(state: unknown, field = "state"): SuspensionState {
   if (state === undefined) return "ride-height";
   if (!SUSPENSION_STATES.includes(state as SuspensionState)) {
-    throw new FitmentInputError(field, `${field} must be one of ${SUSPENSION_STATES.join(", ")}, got ${JSON.stringify(state)} (e.g. "full-lock")`, state);
+    throw new FitmentInputError(
+      field,
+      `${field} must be one of ${SUSPENSION_STATES.join(", ")}, got ${JSON.stringify(state)} (e.g. "full-lock")`,
+      state,
+    );
   }
   return state as SuspensionState;
 }
@@ -220,7 +225,10 @@ export function clearanceEnvelope(setup: SetupLike): ClearanceEnvelope {
  */
 export function steeringAxisInboardMm(setup: SetupLike, options: { kingpinInclinationDeg?: number; scrubRadiusMm?: number } = {}): number {
   const g = geometryOf(setup);
-  const kpi = options.kingpinInclinationDeg === undefined ? 0 : requireNumber("kingpinInclinationDeg", options.kingpinInclinationDeg, 0, 30, "8", "°");
+  const kpi =
+    options.kingpinInclinationDeg === undefined
+      ? 0
+      : requireNumber("kingpinInclinationDeg", options.kingpinInclinationDeg, 0, 30, "8", "°");
   const scrub =
     options.scrubRadiusMm === undefined
       ? 0
@@ -238,7 +246,11 @@ export function steeringAxisInboardMm(setup: SetupLike, options: { kingpinInclin
  */
 export function classifyClearance(predictedMm: number, marginMm: number = DEFAULT_CLEARANCE_MARGIN_MM): ClearanceStatus {
   if (typeof predictedMm !== "number" || !Number.isFinite(predictedMm)) {
-    throw new FitmentInputError("predictedMm", `predictedMm must be a finite number of mm, got ${String(predictedMm)} (e.g. 8)`, predictedMm);
+    throw new FitmentInputError(
+      "predictedMm",
+      `predictedMm must be a finite number of mm, got ${String(predictedMm)} (e.g. 8)`,
+      predictedMm,
+    );
   }
   const m = checkMargin(marginMm);
   if (predictedMm <= 0) return "contact";
@@ -288,14 +300,29 @@ function basisOf(direction: ClearanceDirection, state: SuspensionState, heightMm
  * prepareClearance({ direction: "fore-aft", state: "full-lock", distanceMm: 38.1, measuredWith: { tire: "265/70R17", wheel: { diameterIn: 17, widthIn: 8, offsetMm: 25 } } });
  * // { basis: "sweep-farthest", axisMm: 25, gapMm: 38.1, … }
  */
-export function prepareClearance(point: MeasuredClearance, options: { steeringAxisInboardMm?: number } = {}, field = ""): PreparedClearance {
+export function prepareClearance(
+  point: MeasuredClearance,
+  options: { steeringAxisInboardMm?: number } = {},
+  field = "",
+): PreparedClearance {
   const f = (name: string) => (field ? `${field}.${name}` : name);
   if (point === null || typeof point !== "object") {
-    throw new FitmentInputError(field || "point", 'point must be an object like { direction: "inboard", distanceMm: 30, measuredWith: {…} }', point);
+    throw new FitmentInputError(
+      field || "point",
+      'point must be an object like { direction: "inboard", distanceMm: 30, measuredWith: {…} }',
+      point,
+    );
   }
   const direction = checkDirection(point.direction, f("direction"));
   const state = checkState(point.state, f("state"));
-  const gap = requireNumber(f("distanceMm"), point.distanceMm, CLEARANCE_DISTANCE_LIMITS_MM.min, CLEARANCE_DISTANCE_LIMITS_MM.max, "30", "mm");
+  const gap = requireNumber(
+    f("distanceMm"),
+    point.distanceMm,
+    CLEARANCE_DISTANCE_LIMITS_MM.min,
+    CLEARANCE_DISTANCE_LIMITS_MM.max,
+    "30",
+    "mm",
+  );
   const g = geometryOf(point.measuredWith);
   const measured: ClearanceEnvelope = { radiusMm: g.overallRadiusMm, innerSwingMm: g.innerSwingMm, outerSwingMm: g.outerSwingMm };
   const height =
@@ -323,7 +350,14 @@ export function prepareClearance(point: MeasuredClearance, options: { steeringAx
   const axis =
     options.steeringAxisInboardMm === undefined
       ? g.effectiveOffsetMm
-      : requireNumber("steeringAxisInboardMm", options.steeringAxisInboardMm, STEERING_AXIS_LIMITS_MM.min, STEERING_AXIS_LIMITS_MM.max, "100", "mm");
+      : requireNumber(
+          "steeringAxisInboardMm",
+          options.steeringAxisInboardMm,
+          STEERING_AXIS_LIMITS_MM.min,
+          STEERING_AXIS_LIMITS_MM.max,
+          "100",
+          "mm",
+        );
   const basis = basisOf(direction, state, height, measured.radiusMm);
   const lock = basis === "sweep-inner" || basis === "sweep-outer" || basis === "sweep-farthest";
   return {
@@ -409,7 +443,9 @@ export function predictPreparedMm(p: PreparedClearance, planned: ClearanceEnvelo
       return zero(g - (planned.radiusMm - m.radiusMm));
     case "chord": {
       const ahead = halfLength(m.radiusMm, z) + g;
-      return zero(Math.abs(z) < planned.radiusMm ? ahead - halfLength(planned.radiusMm, z) : Math.sqrt(ahead * ahead + z * z) - planned.radiusMm);
+      return zero(
+        Math.abs(z) < planned.radiusMm ? ahead - halfLength(planned.radiusMm, z) : Math.sqrt(ahead * ahead + z * z) - planned.radiusMm,
+      );
     }
     case "sweep-inner":
     case "sweep-outer":
@@ -470,7 +506,11 @@ function predictionOf(p: PreparedClearance, planned: ClearanceEnvelope, margin: 
  * const planned = { tire: "315/70R17", wheel: { diameterIn: 17, widthIn: 9, offsetMm: -12 } };
  * predictClearances([{ direction: "upward", distanceMm: 40, measuredWith: cur }], planned).map((p) => p.status); // ["tight"] (40 − 35 = 5 mm)
  */
-export function predictClearances(points: readonly MeasuredClearance[], planned: SetupLike, options: ClearanceOptions = {}): ClearancePrediction[] {
+export function predictClearances(
+  points: readonly MeasuredClearance[],
+  planned: SetupLike,
+  options: ClearanceOptions = {},
+): ClearancePrediction[] {
   if (!Array.isArray(points) || points.length > 500) {
     throw new FitmentInputError("points", "points must be a list of at most 500 measured clearances", points);
   }

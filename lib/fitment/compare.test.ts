@@ -101,7 +101,9 @@ describe("compareSetups", () => {
   });
 
   it("rotating mass per corner when wheel and tire masses are given: change in kg, inertia and its translating equivalent (approximation, no source: tire a uniform annulus bead seat → tread, wheel a thin ring at the bead seat)", () => {
-    const m = compareSetups(stock, lifted, { rotatingMass: { current: { wheelKg: 12, tireKg: 22 }, planned: { wheelKg: 20, tireKg: 36 } } }).rotatingMass;
+    const m = compareSetups(stock, lifted, {
+      rotatingMass: { current: { wheelKg: 12, tireKg: 22 }, planned: { wheelKg: 20, tireKg: 36 } },
+    }).rotatingMass;
     expect(m).not.toBeNull();
     if (m === null) return;
     expect(m.currentKg).toBe(34);
@@ -120,7 +122,9 @@ describe("compareSetups", () => {
   });
 
   it("the equivalent mass lies between all the mass as a thin ring at the bead seat and all of it at the tread (thin ring I = m·r², textbook)", () => {
-    const m = compareSetups(stock, lifted, { rotatingMass: { current: { wheelKg: 10, tireKg: 30 }, planned: { wheelKg: 10, tireKg: 30 } } }).rotatingMass;
+    const m = compareSetups(stock, lifted, {
+      rotatingMass: { current: { wheelKg: 10, tireKg: 30 }, planned: { wheelKg: 10, tireKg: 30 } },
+    }).rotatingMass;
     const rb = (17 * 25.4) / 2000;
     const R = 0.4014;
     expect(m?.currentEquivalentMassKg).toBeCloseTo((0.5 * 30 * (rb ** 2 + R ** 2) + 10 * rb ** 2) / R ** 2, 9);
@@ -130,13 +134,17 @@ describe("compareSetups", () => {
   });
 
   it("rotating masses partly given or impossible are refused naming the field", () => {
-    expect(() => compareSetups(stock, lifted, { rotatingMass: { current: { wheelKg: 12, tireKg: 22 } } as never })).toThrow(/rotatingMass\.planned/);
-    expect(() => compareSetups(stock, lifted, { rotatingMass: { current: { wheelKg: 12, tireKg: 22 }, planned: { wheelKg: 20, tireKg: -1 } } })).toThrow(
-      /rotatingMass\.planned\.tireKg/,
+    expect(() => compareSetups(stock, lifted, { rotatingMass: { current: { wheelKg: 12, tireKg: 22 } } as never })).toThrow(
+      /rotatingMass\.planned/,
     );
-    expect(() => compareSetups(stock, lifted, { rotatingMass: { current: { wheelKg: Number.NaN, tireKg: 22 }, planned: { wheelKg: 20, tireKg: 30 } } })).toThrow(
-      FitmentInputError,
-    );
+    expect(() =>
+      compareSetups(stock, lifted, { rotatingMass: { current: { wheelKg: 12, tireKg: 22 }, planned: { wheelKg: 20, tireKg: -1 } } }),
+    ).toThrow(/rotatingMass\.planned\.tireKg/);
+    expect(() =>
+      compareSetups(stock, lifted, {
+        rotatingMass: { current: { wheelKg: Number.NaN, tireKg: 22 }, planned: { wheelKg: 20, tireKg: 30 } },
+      }),
+    ).toThrow(FitmentInputError);
   });
 
   const setup = fc
@@ -146,7 +154,11 @@ describe("compareSetups", () => {
       offsetMm: fc.double({ min: -100, max: 100, noNaN: true }),
       spacerMm: fc.double({ min: 0, max: 50, noNaN: true }),
     })
-    .map(({ size, widthIn, offsetMm, spacerMm }): SetupInput => ({ tire: size, wheel: { diameterIn: size.rimDiameterIn, widthIn, offsetMm }, spacerMm }));
+    .map(({ size, widthIn, offsetMm, spacerMm }): SetupInput => ({
+      tire: size,
+      wheel: { diameterIn: size.rimDiameterIn, widthIn, offsetMm },
+      spacerMm,
+    }));
   const opts = fc.record({
     kingpinInclinationDeg: fc.double({ min: 0, max: 20, noNaN: true }),
     axleRatio: fc.double({ min: 2.5, max: 7.5, noNaN: true }),

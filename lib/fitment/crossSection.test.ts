@@ -49,20 +49,47 @@ const HAND = [
   {
     name: "A 35x12.50R17 on 17x9 −12",
     g: A,
-    centre: 12, face: 0, bead: [-102.3, 126.3], flange: [-115, 139], tire: [-141.67, 165.67],
-    beadY: [228.6, 660.4], top: 889, sidewall: 228.6, bsFlangeIn: 4.5276, bsBeadIn: 4.0276, spacer: null,
+    centre: 12,
+    face: 0,
+    bead: [-102.3, 126.3],
+    flange: [-115, 139],
+    tire: [-141.67, 165.67],
+    beadY: [228.6, 660.4],
+    top: 889,
+    sidewall: 228.6,
+    bsFlangeIn: 4.5276,
+    bsBeadIn: 4.0276,
+    spacer: null,
   },
   {
     name: "B 285/75R16 on 16x8 +0 with a 38 mm spacer",
     g: B,
-    centre: 38, face: 38, bead: [-63.6, 139.6], flange: [-76.3, 152.3], tire: [-104.5, 180.5],
-    beadY: [213.75, 620.15], top: 833.9, sidewall: 213.75, bsFlangeIn: 4.5, bsBeadIn: 4.0, spacer: [0, 38],
+    centre: 38,
+    face: 38,
+    bead: [-63.6, 139.6],
+    flange: [-76.3, 152.3],
+    tire: [-104.5, 180.5],
+    beadY: [213.75, 620.15],
+    top: 833.9,
+    sidewall: 213.75,
+    bsFlangeIn: 4.5,
+    bsBeadIn: 4.0,
+    spacer: [0, 38],
   },
   {
     name: "C 33x12.50R15 on 15x10 −44",
     g: C,
-    centre: 44, face: 0, bead: [-83, 171], flange: [-95.7, 183.7], tire: [-114.75, 202.75],
-    beadY: [228.6, 609.6], top: 838.2, sidewall: 228.6, bsFlangeIn: 3.7677, bsBeadIn: 3.2677, spacer: null,
+    centre: 44,
+    face: 0,
+    bead: [-83, 171],
+    flange: [-95.7, 183.7],
+    tire: [-114.75, 202.75],
+    beadY: [228.6, 609.6],
+    top: 838.2,
+    sidewall: 228.6,
+    bsFlangeIn: 3.7677,
+    bsBeadIn: 3.2677,
+    spacer: null,
   },
 ] as const;
 
@@ -77,10 +104,12 @@ describe("wheelSection: positions against the hand-worked figures and the engine
         expect(s.mountingFaceX).toBeCloseTo(h.face, 9);
         // Offset = mounting face − centreline (offset.ts convention).
         expect(s.mountingFaceX - s.centrelineX).toBeCloseTo(h.g.wheel.offsetMm, 9);
-        expect(s.shapes.centreline).toEqual([
-          { x: s.centrelineX, y: 0 },
-          { x: s.centrelineX, y: h.top },
-        ].map((p) => ({ x: expect.closeTo(p.x, 9), y: expect.closeTo(p.y, 9) })));
+        expect(s.shapes.centreline).toEqual(
+          [
+            { x: s.centrelineX, y: 0 },
+            { x: s.centrelineX, y: h.top },
+          ].map((p) => ({ x: expect.closeTo(p.x, 9), y: expect.closeTo(p.y, 9) })),
+        );
       });
 
       it("bead seats at the engine's distances, at the rim radius below and above the axle", () => {
@@ -108,7 +137,9 @@ describe("wheelSection: positions against the hand-worked figures and the engine
 
       it("backspacing from the flange edge (default) and from the bead seat, as offset.ts gives it", () => {
         expect(s.backspacing.valueIn).toBeCloseTo(h.bsFlangeIn, 4);
-        expect(s.backspacing.valueIn).toBe(backspacingFromOffset({ widthIn: h.g.wheel.widthIn, offsetMm: h.g.wheel.offsetMm, measuredFrom: "flange" }));
+        expect(s.backspacing.valueIn).toBe(
+          backspacingFromOffset({ widthIn: h.g.wheel.widthIn, offsetMm: h.g.wheel.offsetMm, measuredFrom: "flange" }),
+        );
         expect(s.backspacing.toX - s.backspacing.fromX).toBeCloseTo(s.backspacing.valueMm, 9);
         expect(s.backspacing.fromX).toBeCloseTo(h.flange[0], 9);
         const bead = wheelSection(h.g, { reference: "bead-seat" });
@@ -259,13 +290,53 @@ describe("crossSection: two setups on one axle", () => {
         fenderLineMm: 139.7,
         parts: [
           // Inner swing 157.5 + 30 = 187.5 inboard, at hub height.
-          { label: "Control arm", direction: "inboard", state: "ride-height", distanceMm: 30, measuredWith: stock, predictedMm: 45.8, status: "clear" },
+          {
+            label: "Control arm",
+            direction: "inboard",
+            state: "ride-height",
+            distanceMm: 30,
+            measuredWith: stock,
+            predictedMm: 45.8,
+            status: "clear",
+          },
           // Outer swing 107.5 + 20 = 127.5 outboard.
-          { label: "Flare", direction: "outboard", state: "ride-height", distanceMm: 20, measuredWith: stock, predictedMm: -38.2, status: "contact" },
+          {
+            label: "Flare",
+            direction: "outboard",
+            state: "ride-height",
+            distanceMm: 20,
+            measuredWith: stock,
+            predictedMm: -38.2,
+            status: "contact",
+          },
           // Above the tread centre (x = −25): 401.4 (axle) + 401.4 (radius) + 40 = 842.8.
-          { label: "Liner", direction: "upward", state: "full-stuff", distanceMm: 40, measuredWith: stock, predictedMm: -3.1, status: "contact" },
-          { label: "Bumper", direction: "fore-aft", state: "ride-height", distanceMm: 50, measuredWith: stock, predictedMm: 6.9, status: "tight" },
-          { label: "Frame at lock", direction: "inboard", state: "full-lock", distanceMm: 25, measuredWith: stock, predictedMm: 10, status: "tight" },
+          {
+            label: "Liner",
+            direction: "upward",
+            state: "full-stuff",
+            distanceMm: 40,
+            measuredWith: stock,
+            predictedMm: -3.1,
+            status: "contact",
+          },
+          {
+            label: "Bumper",
+            direction: "fore-aft",
+            state: "ride-height",
+            distanceMm: 50,
+            measuredWith: stock,
+            predictedMm: 6.9,
+            status: "tight",
+          },
+          {
+            label: "Frame at lock",
+            direction: "inboard",
+            state: "full-lock",
+            distanceMm: 25,
+            measuredWith: stock,
+            predictedMm: 10,
+            status: "tight",
+          },
         ],
       },
     );
@@ -289,8 +360,12 @@ describe("crossSection: two setups on one axle", () => {
   });
 
   it("refuses a part without a known direction, naming the field", () => {
-    const bad = { direction: "sideways", state: "ride-height", distanceMm: 30, measuredWith: STOCK } as unknown as Parameters<typeof partPosition>[0];
+    const bad = { direction: "sideways", state: "ride-height", distanceMm: 30, measuredWith: STOCK } as unknown as Parameters<
+      typeof partPosition
+    >[0];
     expect(() => partPosition(bad, 400, "parts[2]")).toThrow(/parts\[2\]\.direction/);
-    expect(() => partPosition({ direction: "inboard", state: "ride-height", distanceMm: -1, measuredWith: STOCK }, 400)).toThrow(FitmentInputError);
+    expect(() => partPosition({ direction: "inboard", state: "ride-height", distanceMm: -1, measuredWith: STOCK }, 400)).toThrow(
+      FitmentInputError,
+    );
   });
 });

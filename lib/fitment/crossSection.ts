@@ -40,7 +40,8 @@ const zero = (v: number) => (v === 0 ? 0 : v);
 export type Side = "current" | "planned";
 
 /** What a dimension line measures. */
-export type DimensionKind = "reach-inboard" | "reach-outboard" | "backspacing" | "flange-allowance" | "offset" | "spacer" | "diameter" | "ground-change";
+export type DimensionKind =
+  "reach-inboard" | "reach-outboard" | "backspacing" | "flange-allowance" | "offset" | "spacer" | "diameter" | "ground-change";
 
 /**
  * A dimension line: along x (a lateral distance, drawn in a row above or below the drawing) or
@@ -142,10 +143,32 @@ export function partPosition(
   axleY: number,
   field = "part",
 ): { at: Pt | null; notDrawn: PlacedPart["notDrawn"] } {
-  if (p === null || typeof p !== "object") throw new FitmentInputError(field, `${field} must be an object like { direction: "inboard", state: "ride-height", distanceMm: 30, measuredWith: {…} }`, p);
-  if (!CLEARANCE_DIRECTIONS.includes(p.direction)) throw new FitmentInputError(`${field}.direction`, `${field}.direction must be one of ${CLEARANCE_DIRECTIONS.join(", ")} (e.g. "inboard")`, p.direction);
-  if (!SUSPENSION_STATES.includes(p.state)) throw new FitmentInputError(`${field}.state`, `${field}.state must be one of ${SUSPENSION_STATES.join(", ")} (e.g. "ride-height")`, p.state);
-  const gap = requireNumber(`${field}.distanceMm`, p.distanceMm, CLEARANCE_DISTANCE_LIMITS_MM.min, CLEARANCE_DISTANCE_LIMITS_MM.max, "30", "mm");
+  if (p === null || typeof p !== "object")
+    throw new FitmentInputError(
+      field,
+      `${field} must be an object like { direction: "inboard", state: "ride-height", distanceMm: 30, measuredWith: {…} }`,
+      p,
+    );
+  if (!CLEARANCE_DIRECTIONS.includes(p.direction))
+    throw new FitmentInputError(
+      `${field}.direction`,
+      `${field}.direction must be one of ${CLEARANCE_DIRECTIONS.join(", ")} (e.g. "inboard")`,
+      p.direction,
+    );
+  if (!SUSPENSION_STATES.includes(p.state))
+    throw new FitmentInputError(
+      `${field}.state`,
+      `${field}.state must be one of ${SUSPENSION_STATES.join(", ")} (e.g. "ride-height")`,
+      p.state,
+    );
+  const gap = requireNumber(
+    `${field}.distanceMm`,
+    p.distanceMm,
+    CLEARANCE_DISTANCE_LIMITS_MM.min,
+    CLEARANCE_DISTANCE_LIMITS_MM.max,
+    "30",
+    "mm",
+  );
   const axle = requireNumber("axleY", axleY, 0, 2000, "401.4", "mm");
   if (p.state === "full-lock") return { at: null, notDrawn: "full-lock" };
   if (p.direction === "fore-aft") return { at: null, notDrawn: "fore-aft" };
@@ -185,8 +208,30 @@ export function crossSection(
   ] as const) {
     const hubTop: Pt = { x: 0, y: axleY + s.pad.outerRadiusMm };
     dims.push(
-      { id: `${side}-reach-inboard`, kind: "reach-inboard", setup: side, axis: "x", band: "above", from: s.tire.innerX, to: 0, ends: [{ x: s.tire.innerX, y: s.tire.widestUpperY }, hubTop], valueMm: -s.tire.innerX, source: "geometry.ts setupGeometry: innerSwingMm" },
-      { id: `${side}-reach-outboard`, kind: "reach-outboard", setup: side, axis: "x", band: "above", from: 0, to: s.tire.outerX, ends: [hubTop, { x: s.tire.outerX, y: s.tire.widestUpperY }], valueMm: s.tire.outerX, source: "geometry.ts setupGeometry: outerSwingMm" },
+      {
+        id: `${side}-reach-inboard`,
+        kind: "reach-inboard",
+        setup: side,
+        axis: "x",
+        band: "above",
+        from: s.tire.innerX,
+        to: 0,
+        ends: [{ x: s.tire.innerX, y: s.tire.widestUpperY }, hubTop],
+        valueMm: -s.tire.innerX,
+        source: "geometry.ts setupGeometry: innerSwingMm",
+      },
+      {
+        id: `${side}-reach-outboard`,
+        kind: "reach-outboard",
+        setup: side,
+        axis: "x",
+        band: "above",
+        from: 0,
+        to: s.tire.outerX,
+        ends: [hubTop, { x: s.tire.outerX, y: s.tire.widestUpperY }],
+        valueMm: s.tire.outerX,
+        source: "geometry.ts setupGeometry: outerSwingMm",
+      },
     );
     const flangeTip = s.beadSeat.lowerY - s.flange.heightMm;
     const padLow: Pt = { x: s.mountingFaceX, y: axleY - s.pad.outerRadiusMm };
@@ -296,7 +341,17 @@ export function crossSection(
   if (vehicle.fenderLipMm != null) limits.push({ id: "fender-lip", x: lateral("fenderLipMm", vehicle.fenderLipMm) });
   if (vehicle.fenderLineMm != null) limits.push({ id: "fender-line", x: lateral("fenderLineMm", vehicle.fenderLineMm) });
 
-  const xs = [cur.tire.innerX, pla.tire.innerX, cur.flange.inboardX, pla.flange.inboardX, cur.tire.outerX, pla.tire.outerX, cur.flange.outboardX, pla.flange.outboardX, ...limits.map((l) => l.x)];
+  const xs = [
+    cur.tire.innerX,
+    pla.tire.innerX,
+    cur.flange.inboardX,
+    pla.flange.inboardX,
+    cur.tire.outerX,
+    pla.tire.outerX,
+    cur.flange.outboardX,
+    pla.flange.outboardX,
+    ...limits.map((l) => l.x),
+  ];
   const ys = [cur.groundY, pla.groundY, cur.topY, pla.topY];
   for (const p of parts) {
     if (p.at) {
@@ -313,7 +368,13 @@ export function crossSection(
     // Through the contact centre at the current ground (zero scrub), d inboard at the axle: x(y) = x0 + lean·y.
     const x0 = cur.centrelineX;
     const lean = (-d - x0) / axleY;
-    steeringAxis = { deg: kpi, ground: { x: x0, y: 0 }, atAxle: { x: zero(-d), y: axleY }, bottom: { x: x0 + lean * minY, y: minY }, top: { x: x0 + lean * maxY, y: maxY } };
+    steeringAxis = {
+      deg: kpi,
+      ground: { x: x0, y: 0 },
+      atAxle: { x: zero(-d), y: axleY },
+      bottom: { x: x0 + lean * minY, y: minY },
+      top: { x: x0 + lean * maxY, y: maxY },
+    };
     xs.push(steeringAxis.bottom.x, steeringAxis.top.x);
   }
   const extents = { minX: Math.min(...xs) - MARGIN_MM, maxX: Math.max(...xs) + MARGIN_MM, minY, maxY };
@@ -327,5 +388,16 @@ export function crossSection(
     ...parts.flatMap((p): Anchor[] => (p.at ? [{ id: p.id, kind: "part", setup: null, at: p.at }] : [])),
     ...(steeringAxis ? [{ id: "steering-axis", kind: "steering-axis", setup: null, at: steeringAxis.top } satisfies Anchor] : []),
   ];
-  return { current: cur, planned: pla, groundChangeMm: groundChange, axleY, dimensions: dims, anchors, limits, parts, steeringAxis, extents };
+  return {
+    current: cur,
+    planned: pla,
+    groundChangeMm: groundChange,
+    axleY,
+    dimensions: dims,
+    anchors,
+    limits,
+    parts,
+    steeringAxis,
+    extents,
+  };
 }

@@ -1,6 +1,15 @@
 import { describe, expect, it } from "vitest";
 import { type CrossSectionModel, crossSection } from "./crossSection";
-import { type Box, type CrossSectionLayout, type LayoutInput, BESIDE_EM, CHAR_EM, boxesOverlap, layoutCrossSection, textWidthEm } from "./crossSectionLayout";
+import {
+  type Box,
+  type CrossSectionLayout,
+  type LayoutInput,
+  BESIDE_EM,
+  CHAR_EM,
+  boxesOverlap,
+  layoutCrossSection,
+  textWidthEm,
+} from "./crossSectionLayout";
 import { FitmentInputError } from "./errors";
 import { type SetupGeometry, setupGeometry } from "./geometry";
 
@@ -42,12 +51,26 @@ function texts(m: CrossSectionModel): LayoutInput {
       from: d.from,
       to: d.to,
       ends: d.ends,
-      text: d.kind === "offset" ? "offset −44 mm" : d.kind === "spacer" ? "spacer 1-1/2 in" : d.kind === "ground-change" ? `ground +${len(d.valueMm)}` : `${WORD[d.kind]} ${len(d.valueMm)}`,
+      text:
+        d.kind === "offset"
+          ? "offset −44 mm"
+          : d.kind === "spacer"
+            ? "spacer 1-1/2 in"
+            : d.kind === "ground-change"
+              ? `ground +${len(d.valueMm)}`
+              : `${WORD[d.kind]} ${len(d.valueMm)}`,
     })),
     callouts: m.anchors.map((a) => ({
       id: a.id,
       at: a.at,
-      text: a.kind === "part" ? "Lower arm front: contact" : a.kind === "tire" ? who(a.setup) : a.kind === "steering-axis" ? "steering axis 12.5°" : a.kind.replace("-", " "),
+      text:
+        a.kind === "part"
+          ? "Lower arm front: contact"
+          : a.kind === "tire"
+            ? who(a.setup)
+            : a.kind === "steering-axis"
+              ? "steering axis 12.5°"
+              : a.kind.replace("-", " "),
     })),
     legend: [
       { id: "legend-current", text: "Current 265/70R17 113T" },
@@ -67,25 +90,53 @@ function model(cur: SetupGeometry, pla: SetupGeometry, withVehicle: boolean): Cr
           fenderLipMm: 160,
           fenderLineMm: 139.7,
           parts: [
-            { label: "Arm", direction: "inboard", state: "ride-height", distanceMm: 30, measuredWith: STOCK_INPUT, predictedMm: 1, status: "tight" },
-            { label: "Flare", direction: "outboard", state: "ride-height", distanceMm: 20, measuredWith: STOCK_INPUT, predictedMm: -3, status: "contact" },
-            { label: "Liner", direction: "upward", state: "ride-height", distanceMm: 40, measuredWith: STOCK_INPUT, predictedMm: -3, status: "contact" },
+            {
+              label: "Arm",
+              direction: "inboard",
+              state: "ride-height",
+              distanceMm: 30,
+              measuredWith: STOCK_INPUT,
+              predictedMm: 1,
+              status: "tight",
+            },
+            {
+              label: "Flare",
+              direction: "outboard",
+              state: "ride-height",
+              distanceMm: 20,
+              measuredWith: STOCK_INPUT,
+              predictedMm: -3,
+              status: "contact",
+            },
+            {
+              label: "Liner",
+              direction: "upward",
+              state: "ride-height",
+              distanceMm: 40,
+              measuredWith: STOCK_INPUT,
+              predictedMm: -3,
+              status: "contact",
+            },
           ],
         }
       : {},
   );
 }
 
-const vSegCrossesBox = (x: number, y0: number, y1: number, b: Box) => x > b.x && x < b.x + b.w && Math.max(y0, y1) > b.y && Math.min(y0, y1) < b.y + b.h;
-const hSegCrossesBox = (y: number, x0: number, x1: number, b: Box) => y > b.y && y < b.y + b.h && Math.max(x0, x1) > b.x && Math.min(x0, x1) < b.x + b.w;
+const vSegCrossesBox = (x: number, y0: number, y1: number, b: Box) =>
+  x > b.x && x < b.x + b.w && Math.max(y0, y1) > b.y && Math.min(y0, y1) < b.y + b.h;
+const hSegCrossesBox = (y: number, x0: number, x1: number, b: Box) =>
+  y > b.y && y < b.y + b.h && Math.max(x0, x1) > b.x && Math.min(x0, x1) < b.x + b.w;
 
 function problems(l: CrossSectionLayout): string[] {
   const out: string[] = [];
   const v = l.viewBox;
   for (let i = 0; i < l.labels.length; i++) {
     const a = l.labels[i]!;
-    if (a.box.x < v.x - 1e-9 || a.box.x + a.box.w > v.x + v.w + 1e-9 || a.box.y < v.y - 1e-9 || a.box.y + a.box.h > v.y + v.h + 1e-9) out.push(`${a.id} outside the view`);
-    for (let j = i + 1; j < l.labels.length; j++) if (boxesOverlap(a.box, l.labels[j]!.box)) out.push(`${a.id} overlaps ${l.labels[j]!.id}`);
+    if (a.box.x < v.x - 1e-9 || a.box.x + a.box.w > v.x + v.w + 1e-9 || a.box.y < v.y - 1e-9 || a.box.y + a.box.h > v.y + v.h + 1e-9)
+      out.push(`${a.id} outside the view`);
+    for (let j = i + 1; j < l.labels.length; j++)
+      if (boxesOverlap(a.box, l.labels[j]!.box)) out.push(`${a.id} overlaps ${l.labels[j]!.id}`);
   }
   // Extension lines and leaders never cross their own label. (Other items' lines may pass behind
   // a label where two setups put more of them under the text than there is room to avoid: the
@@ -96,7 +147,10 @@ function problems(l: CrossSectionLayout): string[] {
   ];
   for (const { id, seg } of lines) {
     for (const lab of l.labels.filter((x) => x.id === id)) {
-      const crosses = seg[0].x === seg[1].x ? vSegCrossesBox(seg[0].x, seg[0].y, seg[1].y, lab.box) : hSegCrossesBox(seg[0].y, seg[0].x, seg[1].x, lab.box);
+      const crosses =
+        seg[0].x === seg[1].x
+          ? vSegCrossesBox(seg[0].x, seg[0].y, seg[1].y, lab.box)
+          : hSegCrossesBox(seg[0].y, seg[0].x, seg[1].x, lab.box);
       if (crosses) out.push(`line of ${id} crosses label ${lab.id}`);
     }
   }
@@ -153,10 +207,31 @@ describe("layoutCrossSection: no two labels overlap", () => {
 
 describe("layoutCrossSection: greedy rows", () => {
   const base = { extents: { minX: -300, maxX: 300, minY: 0, maxY: 800 }, callouts: [], legend: [] };
-  const dim = (id: string, from: number, to: number, text: string) => ({ id, axis: "x" as const, band: "above" as const, from, to, ends: [{ x: from, y: 700 }, { x: to, y: 700 }] as [{ x: number; y: number }, { x: number; y: number }], text });
+  const dim = (id: string, from: number, to: number, text: string) => ({
+    id,
+    axis: "x" as const,
+    band: "above" as const,
+    from,
+    to,
+    ends: [
+      { x: from, y: 700 },
+      { x: to, y: 700 },
+    ] as [{ x: number; y: number }, { x: number; y: number }],
+    text,
+  });
 
   it("two short labels of a chain share the first row; a long one that would meet them goes up a row", () => {
-    const l = layoutCrossSection({ ...base, dimensions: [dim("in", -200, 0, "in 7 in"), dim("out", 0, 200, "out 7 in"), dim("wide", -150, 150, "a label long enough to meet both")] }, { widthPx: 600, fontPx: 12 });
+    const l = layoutCrossSection(
+      {
+        ...base,
+        dimensions: [
+          dim("in", -200, 0, "in 7 in"),
+          dim("out", 0, 200, "out 7 in"),
+          dim("wide", -150, 150, "a label long enough to meet both"),
+        ],
+      },
+      { widthPx: 600, fontPx: 12 },
+    );
     const y = Object.fromEntries(l.dimensions.map((d) => [d.id, d.line[0].y]));
     expect(y.in).toBe(y.out);
     expect(y.wide).toBeGreaterThan(y.in!);
@@ -166,7 +241,10 @@ describe("layoutCrossSection: greedy rows", () => {
   it("a short dimension's label moves beside its line, rather than over the extension line of a longer one placed after it", () => {
     // Drafting: smaller dimensions nearer the part, text beside a line too short to hold it.
     const wide = { ...base, extents: { minX: -600, maxX: 600, minY: 0, maxY: 800 } };
-    const l = layoutCrossSection({ ...wide, dimensions: [dim("big", -100, 0, "backspacing 4.53 in"), dim("small", -100, -87.3, "flange 0.50 in")] }, { widthPx: 600, fontPx: 12 });
+    const l = layoutCrossSection(
+      { ...wide, dimensions: [dim("big", -100, 0, "backspacing 4.53 in"), dim("small", -100, -87.3, "flange 0.50 in")] },
+      { widthPx: 600, fontPx: 12 },
+    );
     const small = l.dimensions.find((d) => d.id === "small")!;
     const big = l.dimensions.find((d) => d.id === "big")!;
     expect(small.line[0].y).toBeLessThan(big.line[0].y); // nearer the drawing
@@ -176,19 +254,34 @@ describe("layoutCrossSection: greedy rows", () => {
       { x: -100, y: small.line[0].y },
     ]);
     expect(big.run).toBeNull();
-    const crossings = l.dimensions.flatMap((d) => d.extensions.filter(([a, b]) => l.labels.some((x) => x.id !== d.id && vSegCrossesBox(a.x, a.y, b.y, x.box))).map(() => d.id));
+    const crossings = l.dimensions.flatMap((d) =>
+      d.extensions.filter(([a, b]) => l.labels.some((x) => x.id !== d.id && vSegCrossesBox(a.x, a.y, b.y, x.box))).map(() => d.id),
+    );
     expect(crossings).toEqual([]);
   });
 
   it("the legend reads from the top down when it wraps", () => {
-    const l = layoutCrossSection({ ...base, dimensions: [], legend: [{ id: "first", text: "Current 265/70R17 113T" }, { id: "second", text: "Planned 37x12.50R17LT 124Q LRD" }] }, { widthPx: 343, fontPx: 12 });
+    const l = layoutCrossSection(
+      {
+        ...base,
+        dimensions: [],
+        legend: [
+          { id: "first", text: "Current 265/70R17 113T" },
+          { id: "second", text: "Planned 37x12.50R17LT 124Q LRD" },
+        ],
+      },
+      { widthPx: 343, fontPx: 12 },
+    );
     const [a, b] = l.legend;
     expect(a!.label.y).toBeGreaterThan(b!.label.y);
     expect(a!.label.y + a!.label.h).toBeLessThanOrEqual(l.viewBox.y + l.viewBox.h + 1e-9);
   });
 
   it("a label wider than its line is centred on it, kept inside the view", () => {
-    const l = layoutCrossSection({ ...base, dimensions: [dim("edge", -300, -290, "a label at the very edge")] }, { widthPx: 343, fontPx: 12 });
+    const l = layoutCrossSection(
+      { ...base, dimensions: [dim("edge", -300, -290, "a label at the very edge")] },
+      { widthPx: 343, fontPx: 12 },
+    );
     expect(l.dimensions[0]!.label.x).toBe(-300);
     expect(l.dimensions[0]!.label.w).toBeCloseTo(textWidthEm("a label at the very edge") * l.fontMm, 9);
   });
@@ -202,7 +295,9 @@ describe("layoutCrossSection: greedy rows", () => {
 
   it("refuses a width that cannot hold a label, naming widthPx", () => {
     const long = "x".repeat(40);
-    expect(() => layoutCrossSection({ ...base, dimensions: [dim("d", 0, 10, long)] }, { widthPx: 200, fontPx: 12 })).toThrow(FitmentInputError);
+    expect(() => layoutCrossSection({ ...base, dimensions: [dim("d", 0, 10, long)] }, { widthPx: 200, fontPx: 12 })).toThrow(
+      FitmentInputError,
+    );
     expect(() => layoutCrossSection({ ...base, dimensions: [dim("d", 0, 10, long)] }, { widthPx: 200, fontPx: 12 })).toThrow(/widthPx/);
     expect(() => layoutCrossSection({ ...base, dimensions: [] }, { widthPx: 50, fontPx: 12 })).toThrow(/widthPx/);
   });

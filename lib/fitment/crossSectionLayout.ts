@@ -219,13 +219,17 @@ class Lanes {
       for (const raw of starts) {
         const x = Math.min(Math.max(raw, this.lo), maxStart);
         if (!near(x)) continue;
-        const own: Span[] = [{ kind: "label", lo: x, hi: x + ask.w }, ...(ask.line ? [{ kind: "line" as const, lo: ask.line[0], hi: ask.line[1] }] : [])];
+        const own: Span[] = [
+          { kind: "label", lo: x, hi: x + ask.w },
+          ...(ask.line ? [{ kind: "line" as const, lo: ask.line[0], hi: ask.line[1] }] : []),
+        ];
         if (!own.every((sp) => lane.every((o) => !this.clash(sp, o)))) continue;
         // Lines passing through this lane under the label, and half for each line still to come under it.
         const passing = lane.filter((o) => o.kind === "thin" && Lanes.under(o.lo, x, x + ask.w)).length;
         const cost = below + passing + 0.5 * countBetween(future, x, x + ask.w);
         const shift = Math.abs(x - ask.prefer);
-        if (!best || cost < best.cost || (cost === best.cost && k === best.lane && shift < best.shift - EPS)) best = { lane: k, at: x, cost, shift };
+        if (!best || cost < best.cost || (cost === best.cost && k === best.lane && shift < best.shift - EPS))
+          best = { lane: k, at: x, cost, shift };
       }
       for (const o of lane) if (o.kind === "label") for (const t of ask.thin) if (Lanes.under(t, o.lo, o.hi)) below++;
     }
@@ -280,7 +284,12 @@ export function layoutCrossSection(input: LayoutInput, options: { widthPx: numbe
   const fontPx = requireNumber("fontPx", options.fontPx, 6, 40, "12", "px");
   const ex = input.extents;
   const drawW = ex.maxX - ex.minX;
-  if (!(drawW > 0) || !(ex.maxY > ex.minY)) throw new FitmentInputError("extents", "extents must span a positive width and height (e.g. { minX: -200, maxX: 220, minY: 0, maxY: 900 })", ex);
+  if (!(drawW > 0) || !(ex.maxY > ex.minY))
+    throw new FitmentInputError(
+      "extents",
+      "extents must span a positive width and height (e.g. { minX: -200, maxX: 220, minY: 0, maxY: 900 })",
+      ex,
+    );
   const ydims = input.dimensions.filter((d) => d.axis === "y");
 
   // The columns at the right take em-sized room, and an em depends on the whole width: grow the
@@ -291,7 +300,12 @@ export function layoutCrossSection(input: LayoutInput, options: { widthPx: numbe
   let placedY: PlacedDimension[] = [];
   for (;;) {
     const share = columns > 0 ? (GAP_EM + columns * ROW_EM) * (fontPx / widthPx) : 0;
-    if (share >= 0.6) throw new FitmentInputError("widthPx", `widthPx ${widthPx} px is too narrow for the drawing's ${columns} height columns at ${fontPx} px text (e.g. 343)`, widthPx);
+    if (share >= 0.6)
+      throw new FitmentInputError(
+        "widthPx",
+        `widthPx ${widthPx} px is too narrow for the drawing's ${columns} height columns at ${fontPx} px text (e.g. 343)`,
+        widthPx,
+      );
     vbW = drawW / (1 - share);
     em = fontPx * (vbW / widthPx);
     const lanes = new Lanes(ex.minY, ex.maxY, PAD_EM * em, BESIDE_EM * em);
@@ -300,8 +314,15 @@ export function layoutCrossSection(input: LayoutInput, options: { widthPx: numbe
       const lo = Math.min(d.from, d.to);
       const hi = Math.max(d.from, d.to);
       const len = textWidthEm(d.text) * em;
-      if (len > ex.maxY - ex.minY) throw new FitmentInputError("dimensions", `dimensions: the label "${d.text}" is longer than the drawing is tall`, d.text);
-      const { lane: k, at: y0 } = lanes.place({ w: len, prefer: within((lo + hi) / 2, len, ex.minY, ex.maxY), attach: [lo, hi], line: [lo, hi], thin: d.ends.map((p) => p.y) });
+      if (len > ex.maxY - ex.minY)
+        throw new FitmentInputError("dimensions", `dimensions: the label "${d.text}" is longer than the drawing is tall`, d.text);
+      const { lane: k, at: y0 } = lanes.place({
+        w: len,
+        prefer: within((lo + hi) / 2, len, ex.minY, ex.maxY),
+        attach: [lo, hi],
+        line: [lo, hi],
+        thin: d.ends.map((p) => p.y),
+      });
       // Line on the column's left, label to its right: the extension lines, coming from the
       // drawing on the left, stop at the line and never cross their own label.
       const colX = left0 + k * ROW_EM * em;
@@ -327,7 +348,8 @@ export function layoutCrossSection(input: LayoutInput, options: { widthPx: numbe
   const x1 = ex.minX + vbW;
   const labelW = (text: string) => {
     const w = textWidthEm(text) * em;
-    if (w > vbW) throw new FitmentInputError("widthPx", `widthPx ${widthPx} px cannot hold the label "${text}" at ${fontPx} px text (e.g. 343)`, text);
+    if (w > vbW)
+      throw new FitmentInputError("widthPx", `widthPx ${widthPx} px cannot hold the label "${text}" at ${fontPx} px text (e.g. 343)`, text);
     return w;
   };
 
@@ -339,7 +361,8 @@ export function layoutCrossSection(input: LayoutInput, options: { widthPx: numbe
   // Above: the line low in its row and the label over it; below: the line high in its row and the
   // label under it. Either way the extension lines, coming from the drawing, stop at the line
   // (0.1 em past it, less than the 0.15 em to the label) and never cross their own label.
-  const rowLineY = (band: "above" | "below", k: number) => (band === "above" ? baseAbove + (k * ROW_EM + 0.3) * em : baseBelow - (k * ROW_EM + 0.3) * em);
+  const rowLineY = (band: "above" | "below", k: number) =>
+    band === "above" ? baseAbove + (k * ROW_EM + 0.3) * em : baseBelow - (k * ROW_EM + 0.3) * em;
   const span = (d: LayoutDimension) => Math.abs(d.to - d.from);
   const xdims = input.dimensions.filter((d) => d.axis === "x");
   type Item = { callout: LayoutCallout; dim?: undefined } | { dim: LayoutDimension; callout?: undefined };
@@ -353,17 +376,33 @@ export function layoutCrossSection(input: LayoutInput, options: { widthPx: numbe
   ];
   const placedX: PlacedDimension[] = [];
   const callouts: PlacedCallout[] = [];
-  const lanesOf: Record<"above" | "below", Lanes> = { above: new Lanes(x0, x1, PAD_EM * em, BESIDE_EM * em), below: new Lanes(x0, x1, PAD_EM * em, BESIDE_EM * em) };
+  const lanesOf: Record<"above" | "below", Lanes> = {
+    above: new Lanes(x0, x1, PAD_EM * em, BESIDE_EM * em),
+    below: new Lanes(x0, x1, PAD_EM * em, BESIDE_EM * em),
+  };
   for (const band of ["above", "below"] as const) {
     const items = bandItems(band);
-    const lanes = new Lanes(x0, x1, PAD_EM * em, BESIDE_EM * em, items.map((it) => (it.dim ? it.dim.ends.map((p) => p.x) : [it.callout.at.x])));
+    const lanes = new Lanes(
+      x0,
+      x1,
+      PAD_EM * em,
+      BESIDE_EM * em,
+      items.map((it) => (it.dim ? it.dim.ends.map((p) => p.x) : [it.callout.at.x])),
+    );
     lanesOf[band] = lanes;
     const up = band === "above";
     for (const it of items) {
       if (it.callout) {
         const c = it.callout;
         const w = labelW(c.text);
-        const { lane: k, at: lx } = lanes.place({ w, prefer: within(c.at.x, w, x0, x1), attach: [c.at.x, c.at.x], line: null, thin: [c.at.x], beside: 0 });
+        const { lane: k, at: lx } = lanes.place({
+          w,
+          prefer: within(c.at.x, w, x0, x1),
+          attach: [c.at.x, c.at.x],
+          line: null,
+          thin: [c.at.x],
+          beside: 0,
+        });
         const y = rowLineY("above", k) + 0.15 * em;
         callouts.push({ id: c.id, text: c.text, label: { x: lx, y, w, h: LABEL_EM * em }, leader: [c.at, { x: c.at.x, y }] });
         continue;
@@ -372,7 +411,13 @@ export function layoutCrossSection(input: LayoutInput, options: { widthPx: numbe
       const lo = Math.min(d.from, d.to);
       const hi = Math.max(d.from, d.to);
       const w = labelW(d.text);
-      const { lane: k, at: lx } = lanes.place({ w, prefer: within((lo + hi) / 2, w, x0, x1), attach: [lo, hi], line: [lo, hi], thin: d.ends.map((p) => p.x) });
+      const { lane: k, at: lx } = lanes.place({
+        w,
+        prefer: within((lo + hi) / 2, w, x0, x1),
+        attach: [lo, hi],
+        line: [lo, hi],
+        thin: d.ends.map((p) => p.x),
+      });
       const y = rowLineY(band, k);
       placedX.push({
         id: d.id,
@@ -402,7 +447,12 @@ export function layoutCrossSection(input: LayoutInput, options: { widthPx: numbe
   for (const item of input.legend) {
     const w = labelW(item.text);
     const need = (SWATCH_EM + 0.4) * em + w;
-    if (need > vbW) throw new FitmentInputError("widthPx", `widthPx ${widthPx} px cannot hold the legend "${item.text}" at ${fontPx} px text (e.g. 343)`, item.text);
+    if (need > vbW)
+      throw new FitmentInputError(
+        "widthPx",
+        `widthPx ${widthPx} px cannot hold the legend "${item.text}" at ${fontPx} px text (e.g. 343)`,
+        item.text,
+      );
     if (x > x0 && x + need > x1) {
       row += 1;
       x = x0;
@@ -434,5 +484,13 @@ export function layoutCrossSection(input: LayoutInput, options: { widthPx: numbe
     ...callouts.map((c) => ({ id: c.id, box: c.label })),
     ...legend.map((l) => ({ id: l.id, box: l.label })),
   ];
-  return { viewBox: { x: x0, y: bottom, w: vbW, h: top - bottom }, fontMm: em, mmPerPx: vbW / widthPx, dimensions, callouts, legend, labels };
+  return {
+    viewBox: { x: x0, y: bottom, w: vbW, h: top - bottom },
+    fontMm: em,
+    mmPerPx: vbW / widthPx,
+    dimensions,
+    callouts,
+    legend,
+    labels,
+  };
 }

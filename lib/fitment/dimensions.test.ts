@@ -1,5 +1,12 @@
 import { describe, expect, it } from "vitest";
-import { approvedRimWidthRangeIn, formatNominalInchSize, measuringRimWidthIn, nominalSize, sectionWidthOnRimMm, tireDimensions } from "./dimensions";
+import {
+  approvedRimWidthRangeIn,
+  formatNominalInchSize,
+  measuringRimWidthIn,
+  nominalSize,
+  sectionWidthOnRimMm,
+  tireDimensions,
+} from "./dimensions";
 import { FitmentInputError, TireSizeError } from "./errors";
 import { parseTireSize } from "./tireSize";
 
@@ -75,7 +82,7 @@ describe("nominalSize and formatNominalInchSize", () => {
     const n = nominalSize("LT315/70R17 121/118Q");
     expect(n.overallDiameterMm).toBeCloseTo(872.8, 9);
     expect(n.overallDiameterIn).toBeCloseTo(34.36, 2); // 872.8 / 25.4 = 34.362
-    expect(n.sectionWidthIn).toBeCloseTo(12.40, 2); // 315 / 25.4 = 12.402
+    expect(n.sectionWidthIn).toBeCloseTo(12.4, 2); // 315 / 25.4 = 12.402
     expect(formatNominalInchSize("LT315/70R17 121/118Q")).toBe("34.4 × 12.4 in on 17 in");
   });
 

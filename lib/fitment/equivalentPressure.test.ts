@@ -67,23 +67,31 @@ describe("equivalentPressure (TRA load formulas; ISO 4000-1 load index; FMVSS 12
   });
 
   it("names the field of every missing or impossible figure", () => {
-    expect(errorField(() => equivalentPressure({ current: "P265/70R17 113S", currentPressureKpa: 241, planned: "LT285/70R17 121/118Q" }))).toBe(
-      "plannedMaxPressureKpa",
+    expect(
+      errorField(() => equivalentPressure({ current: "P265/70R17 113S", currentPressureKpa: 241, planned: "LT285/70R17 121/118Q" })),
+    ).toBe("plannedMaxPressureKpa");
+    expect(
+      errorField(() =>
+        equivalentPressure({ current: "LT285/70R17 121/118Q", currentPressureKpa: 241, planned: "LT285/70R17 121/118Q LRE" }),
+      ),
+    ).toBe("currentMaxPressureKpa");
+    expect(
+      errorField(() => equivalentPressure({ current: "P265/70R17 113S", currentPressureKpa: 600, planned: "LT285/70R17 121/118Q LRE" })),
+    ).toBe("currentPressureKpa");
+    expect(
+      errorField(() =>
+        equivalentPressure({ current: "P265/70R17 113S", currentPressureKpa: Number.NaN, planned: "LT285/70R17 121/118Q LRE" }),
+      ),
+    ).toBe("currentPressureKpa");
+    expect(
+      errorField(() => equivalentPressure({ current: "P265/70R17", currentPressureKpa: 241, planned: "LT285/70R17 121/118Q LRE" })),
+    ).toBe("currentMaxLoadKg");
+    expect(() => equivalentPressure({ current: "P265/7R17", currentPressureKpa: 241, planned: "LT285/70R17 121/118Q LRE" })).toThrow(
+      TireSizeError,
     );
-    expect(errorField(() => equivalentPressure({ current: "LT285/70R17 121/118Q", currentPressureKpa: 241, planned: "LT285/70R17 121/118Q LRE" }))).toBe(
-      "currentMaxPressureKpa",
-    );
-    expect(errorField(() => equivalentPressure({ current: "P265/70R17 113S", currentPressureKpa: 600, planned: "LT285/70R17 121/118Q LRE" }))).toBe(
-      "currentPressureKpa",
-    );
-    expect(errorField(() => equivalentPressure({ current: "P265/70R17 113S", currentPressureKpa: Number.NaN, planned: "LT285/70R17 121/118Q LRE" }))).toBe(
-      "currentPressureKpa",
-    );
-    expect(errorField(() => equivalentPressure({ current: "P265/70R17", currentPressureKpa: 241, planned: "LT285/70R17 121/118Q LRE" }))).toBe(
-      "currentMaxLoadKg",
-    );
-    expect(() => equivalentPressure({ current: "P265/7R17", currentPressureKpa: 241, planned: "LT285/70R17 121/118Q LRE" })).toThrow(TireSizeError);
-    expect(errorField(() => equivalentPressure({ current: "P265/7R17", currentPressureKpa: 241, planned: "LT285/70R17 121/118Q LRE" }))).toBe("current");
+    expect(
+      errorField(() => equivalentPressure({ current: "P265/7R17", currentPressureKpa: 241, planned: "LT285/70R17 121/118Q LRE" })),
+    ).toBe("current");
     expect(errorField(() => equivalentPressure(null as never))).toBe("input");
   });
 
@@ -128,7 +136,12 @@ describe("properties (fast-check)", () => {
       fc.property(vehicle, fc.double({ min: 0.3, max: 1, noNaN: true }), fc.double({ min: 0.3, max: 1, noNaN: true }), (v, a, c) => {
         const ref = loadPressureBasis("P265/70R17 113S").maxPressureKpa;
         const run = (share: number) =>
-          equivalentPressure({ current: "P265/70R17 113S", currentPressureKpa: share * ref, planned: "LT285/70R17 121/118Q LRE", vehicle: v });
+          equivalentPressure({
+            current: "P265/70R17 113S",
+            currentPressureKpa: share * ref,
+            planned: "LT285/70R17 121/118Q LRE",
+            vehicle: v,
+          });
         const [lo, hi] = a < c ? [a, c] : [c, a];
         expect(run(lo).pressureKpa).toBeLessThanOrEqual(run(hi).pressureKpa);
         expect(nonFinite(run(a))).toEqual([]);

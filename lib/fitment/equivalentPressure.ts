@@ -105,10 +105,19 @@ const PLANNED_FIELDS: BasisFieldNames = {
 export function equivalentPressure(input: EquivalentPressureInput): EquivalentPressure {
   requireObject("input", input, '{ current: "P265/70R17 113S", currentPressureKpa: 241, planned: "LT285/70R17 121/118Q LRE" }');
   const vehicle = input.vehicle;
-  const currentBasis = loadPressureBasis(input.current, { maxPressureKpa: input.currentMaxPressureKpa, maxLoadKg: input.currentMaxLoadKg, vehicle }, CURRENT_FIELDS);
+  const currentBasis = loadPressureBasis(
+    input.current,
+    { maxPressureKpa: input.currentMaxPressureKpa, maxLoadKg: input.currentMaxLoadKg, vehicle },
+    CURRENT_FIELDS,
+  );
   const plannedBasis = loadPressureBasis(
     input.planned,
-    { maxPressureKpa: input.plannedMaxPressureKpa, maxLoadKg: input.plannedMaxLoadKg, minPressureKpa: input.plannedMinPressureKpa, vehicle },
+    {
+      maxPressureKpa: input.plannedMaxPressureKpa,
+      maxLoadKg: input.plannedMaxLoadKg,
+      minPressureKpa: input.plannedMinPressureKpa,
+      vehicle,
+    },
     PLANNED_FIELDS,
   );
   const current = loadFromBasis(currentBasis, input.currentPressureKpa, "currentPressureKpa");
@@ -124,7 +133,8 @@ export function equivalentPressure(input: EquivalentPressureInput): EquivalentPr
   }
   const planned = pressureFromBasis(plannedBasis, loadKg, "loadKg");
   const notes = [...planned.notes];
-  if (current.belowMinimum) notes.unshift("The placard pressure given is below the current tire's road minimum: check the figure on the door placard.");
+  if (current.belowMinimum)
+    notes.unshift("The placard pressure given is below the current tire's road minimum: check the figure on the door placard.");
   return {
     pressureKpa: planned.pressureKpa,
     pressurePsi: planned.pressurePsi,

@@ -20,10 +20,10 @@ describe("equivalentSizes — the two ranking cases", () => {
     expect(first?.diameterDeltaPct).toBeCloseTo((-4 / 939.8) * 100, 9); // −0.43 %
     expect(first?.widthDeltaMm).toBeCloseTo(-2.5, 9);
     expect(first?.widthDeltaPct).toBeCloseTo((-2.5 / 317.5) * 100, 9); // −0.79 %
-    expect(first?.distance).toBeCloseTo(2 * 0.42562 + 0.78740, 4); // 1.64
+    expect(first?.distance).toBeCloseTo(2 * 0.42562 + 0.7874, 4); // 1.64
     expect(first?.sameRim).toBe(true);
     // 325/80R17: 431.8 + 520 = 951.8 mm (+12.0, +1.28 %), 325 mm (+7.5, +2.36 %): 2 × 1.2769 + 2.3622 = 4.92.
-    expect(second?.distance).toBeCloseTo(2 * 1.27687 + 2.36220, 4);
+    expect(second?.distance).toBeCloseTo(2 * 1.27687 + 2.3622, 4);
     // 365/70R17: 431.8 + 511 = 942.8 mm (+3.0, +0.32 %) but 365 mm (+47.5, +14.96 %): 2 × 0.3192 + 14.9606 = 15.60.
     const wide = equivalentSizes("37x12.50R17LT", { system: "metric", limit: 50 }).find((e) => e.text === "365/70R17");
     expect(wide?.distance).toBeCloseTo(2 * 0.31922 + 14.96063, 4);
@@ -33,7 +33,14 @@ describe("equivalentSizes — the two ranking cases", () => {
   it("285/75R16 → inch: the 16 in size first, then closer sizes on other rims, several of them", () => {
     const eq = equivalentSizes("285/75R16");
     expect(eq).toHaveLength(6);
-    expect(eq.map((e) => e.text)).toEqual(["31x10.50R16LT", "33x10.50R15LT", "32x11.50R15LT", "33x12.50R16.5LT", "33x12.50R15LT", "33x12.50R17LT"]);
+    expect(eq.map((e) => e.text)).toEqual([
+      "31x10.50R16LT",
+      "33x10.50R15LT",
+      "32x11.50R15LT",
+      "33x12.50R16.5LT",
+      "33x12.50R15LT",
+      "33x12.50R17LT",
+    ]);
     const [same, nearest] = eq;
     // 285/75R16 = 406.4 + 427.5 = 833.9 mm, 285 mm. 31x10.50R16LT = 787.4 mm, 266.7 mm:
     // −46.5 mm (−5.58 %), −18.3 mm (−6.42 %): 2 × 5.5762 + 6.4211 = 17.57.
@@ -64,7 +71,7 @@ describe("equivalentSizes — the two ranking cases", () => {
 });
 
 describe("equivalentSizes — options and invariants", () => {
-  it("rim: \"same\" keeps only the rim diameter of the size, \"any\" ranks by distance alone", () => {
+  it('rim: "same" keeps only the rim diameter of the size, "any" ranks by distance alone', () => {
     expect(equivalentSizes("285/75R16", { rim: "same" }).map((e) => e.text)).toEqual(["31x10.50R16LT"]);
     const any = equivalentSizes("285/75R16", { rim: "any", limit: 3 });
     // 33x10.50R15LT 7.45, 32x11.50R15LT 7.55 (812.8 mm, −2.53 %; 292.1 mm, +2.49 %), then the 33x12.50s at 12.43.

@@ -104,11 +104,7 @@ export function requireNumber(field: string, value: unknown, min: number, max: n
     throw new FitmentInputError(field, `${field} must be a finite number${u}, got ${show(value)} (e.g. ${example})`, value);
   }
   if (value < min || value > max) {
-    throw new FitmentInputError(
-      field,
-      `${field} must be between ${min} and ${max}${u}, got ${value} (e.g. ${example})`,
-      value,
-    );
+    throw new FitmentInputError(field, `${field} must be between ${min} and ${max}${u}, got ${value} (e.g. ${example})`, value);
   }
   return value;
 }

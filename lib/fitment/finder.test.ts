@@ -68,7 +68,12 @@ describe("findFitments", () => {
     expect(calls.at(-1)).toEqual([r.total, r.total]);
     for (let i = 1; i < calls.length; i++) expect((calls[i] as [number, number])[0]).toBeGreaterThan((calls[i - 1] as [number, number])[0]);
     const signal = { aborted: false };
-    const a = findFitments(truck, { onProgress: (d) => { if (d > 0) signal.aborted = true; }, signal });
+    const a = findFitments(truck, {
+      onProgress: (d) => {
+        if (d > 0) signal.aborted = true;
+      },
+      signal,
+    });
     expect(a.aborted).toBe(true);
     expect(a.evaluated).toBeLessThan(a.total);
   });
@@ -90,7 +95,14 @@ describe("findFitments", () => {
       { label: "Frame rail, full left lock", direction: "inboard", state: "full-lock", distanceMm: 31.75, measuredWith: CUR },
       { label: "Bumper corner, full right lock", direction: "fore-aft", state: "full-lock", distanceMm: 19.05, measuredWith: CUR },
     ];
-    const goals = { boltPattern: "6x5.5", minDiameterMm: 787.4, maxDiameterMm: 876.3, wheelDiametersIn: [17], clearancePoints: points, clearanceMarginMm: 12.7 };
+    const goals = {
+      boltPattern: "6x5.5",
+      minDiameterMm: 787.4,
+      maxDiameterMm: 876.3,
+      wheelDiametersIn: [17],
+      clearancePoints: points,
+      clearanceMarginMm: 12.7,
+    };
 
     it("keeps only fitments that keep the margin at every point, by predictClearance itself", () => {
       const r = findFitments(goals, { limit: 300 });
@@ -126,7 +138,9 @@ describe("findFitments", () => {
         expect(reason.status).toBe(pred.status);
         // The deciding point is the one short by the most.
         for (const p of points) {
-          expect(predictClearance(p, { tire: x.tire, wheel: x.wheel }, { marginMm: 12.7 }).shortfallMm).toBeLessThanOrEqual(reason.shortfallMm + 1e-9);
+          expect(predictClearance(p, { tire: x.tire, wheel: x.wheel }, { marginMm: 12.7 }).shortfallMm).toBeLessThanOrEqual(
+            reason.shortfallMm + 1e-9,
+          );
         }
       }
       // 35x12.50R17LT (889 mm) on 17x9 −12: the outer corner's sweep at hub height grows from
@@ -160,7 +174,10 @@ describe("findFitments", () => {
     });
 
     it("reports the poke limit as the deciding limit where it fails first", () => {
-      const r = findFitments({ boltPattern: "6x5.5", minDiameterMm: 800, maxDiameterMm: 806, maxOuterSwingMm: 120 }, { wheelWidthsIn: [8], offsetsMm: [0], excludedLimit: 100 });
+      const r = findFitments(
+        { boltPattern: "6x5.5", minDiameterMm: 800, maxDiameterMm: 806, maxOuterSwingMm: 120 },
+        { wheelWidthsIn: [8], offsetsMm: [0], excludedLimit: 100 },
+      );
       // 265/70R17 on 17x8 0: outer reach 132.5 mm > 120 mm: 12.5 mm over.
       const x = r.excluded.find((e) => e.tire.text === "265/70R17")!;
       expect(x.reason).toMatchObject({ kind: "outer-swing", limitMm: 120 });

@@ -175,9 +175,7 @@ export interface FinderResult {
 }
 
 /** Default wheel widths, inches. */
-export const DEFAULT_WHEEL_WIDTHS_IN: readonly number[] = Object.freeze(
-  Array.from({ length: 14 }, (_, i) => 6 + i * 0.5),
-);
+export const DEFAULT_WHEEL_WIDTHS_IN: readonly number[] = Object.freeze(Array.from({ length: 14 }, (_, i) => 6 + i * 0.5));
 /** Common wheel offsets, mm (common practice, no source). */
 export const COMMON_OFFSETS_MM: readonly number[] = Object.freeze([
   -76, -63, -51, -44, -38, -32, -25, -18, -12, -6, 0, 6, 12, 18, 25, 30, 35, 40, 44, 50, 55, 60,
@@ -340,7 +338,8 @@ export function findFitments(constraints: FitmentConstraints = {}, options: Find
   const maxInner = optional("maxInnerSwingMm", c.maxInnerSwingMm, 0, 600, "170");
   const maxOuter = optional("maxOuterSwingMm", c.maxOuterSwingMm, 0, 600, "160");
   const maxSection = optional("maxSectionWidthMm", c.maxSectionWidthMm, 100, 700, "320");
-  const spacer = c.spacerMm === undefined ? 0 : requireNumber("spacerMm", c.spacerMm, SPACER_LIMITS_MM.min, SPACER_LIMITS_MM.max, "25", "mm");
+  const spacer =
+    c.spacerMm === undefined ? 0 : requireNumber("spacerMm", c.spacerMm, SPACER_LIMITS_MM.min, SPACER_LIMITS_MM.max, "25", "mm");
   const diameters = c.wheelDiametersIn === undefined ? undefined : numberList("wheelDiametersIn", c.wheelDiametersIn, 8, 30, "[17, 18]");
   const systems = c.systems;
   if (systems !== undefined && (!Array.isArray(systems) || systems.some((s) => s !== "metric" && s !== "flotation" && s !== "numeric"))) {
@@ -351,7 +350,14 @@ export function findFitments(constraints: FitmentConstraints = {}, options: Find
   const margin =
     c.clearanceMarginMm === undefined
       ? DEFAULT_CLEARANCE_MARGIN_MM
-      : requireNumber("clearanceMarginMm", c.clearanceMarginMm, CLEARANCE_MARGIN_LIMITS_MM.min, CLEARANCE_MARGIN_LIMITS_MM.max, "12.7", "mm");
+      : requireNumber(
+          "clearanceMarginMm",
+          c.clearanceMarginMm,
+          CLEARANCE_MARGIN_LIMITS_MM.min,
+          CLEARANCE_MARGIN_LIMITS_MM.max,
+          "12.7",
+          "mm",
+        );
   const rawPoints = c.clearancePoints ?? [];
   if (!Array.isArray(rawPoints) || rawPoints.length > 500) {
     throw new FitmentInputError("clearancePoints", "clearancePoints must be a list of at most 500 measured clearances", rawPoints);
@@ -373,7 +379,8 @@ export function findFitments(constraints: FitmentConstraints = {}, options: Find
   let offsets: readonly number[] = [];
   let wheelPatternOk: boolean[] = [];
   if (wheels !== undefined) {
-    if (!Array.isArray(wheels) || wheels.length > 100_000) throw new FitmentInputError("wheels", "wheels must be a list of wheel offers", wheels);
+    if (!Array.isArray(wheels) || wheels.length > 100_000)
+      throw new FitmentInputError("wheels", "wheels must be a list of wheel offers", wheels);
     wheelPatternOk = wheels.map((w, i) => {
       requireNumber(`wheels[${i}].diameterIn`, w.diameterIn, 8, 30, "17", "in");
       const width = requireNumber(`wheels[${i}].widthIn`, w.widthIn, 3, 20, "9", "in");
@@ -388,7 +395,11 @@ export function findFitments(constraints: FitmentConstraints = {}, options: Find
       const lim = (w * MM_PER_IN) / 2 + OFFSET_MARGIN_MM;
       for (const o of offsets) {
         if (Math.abs(o) > lim) {
-          throw new FitmentInputError("offsetsMm", `offset ${o} mm is beyond ${OFFSET_MARGIN_MM} mm past the bead seat of a ${w} in wheel (e.g. -12)`, o);
+          throw new FitmentInputError(
+            "offsetsMm",
+            `offset ${o} mm is beyond ${OFFSET_MARGIN_MM} mm past the bead seat of a ${w} in wheel (e.g. -12)`,
+            o,
+          );
         }
       }
     }
@@ -412,7 +423,18 @@ export function findFitments(constraints: FitmentConstraints = {}, options: Find
   let seq = 0;
   let aborted = false;
 
-  const keep = (list: Cand[], max: number, k1: number, k2: number, k3: number, k4: number, size: number, width: number, offset: number, wheel: number): void => {
+  const keep = (
+    list: Cand[],
+    max: number,
+    k1: number,
+    k2: number,
+    k3: number,
+    k4: number,
+    size: number,
+    width: number,
+    offset: number,
+    wheel: number,
+  ): void => {
     if (max === 0) return;
     if (list.length === max) {
       if (!ahead(k1, k2, k3, k4, list[list.length - 1] as Cand)) return;
@@ -429,7 +451,17 @@ export function findFitments(constraints: FitmentConstraints = {}, options: Find
     list.splice(lo, 0, cand);
   };
   // One combination within the goals: the limits decide whether it is a result or an exclusion.
-  const consider = (k1: number, k2: number, radius: number, inner: number, outer: number, size: number, width: number, offset: number, wheel: number): void => {
+  const consider = (
+    k1: number,
+    k2: number,
+    radius: number,
+    inner: number,
+    outer: number,
+    size: number,
+    width: number,
+    offset: number,
+    wheel: number,
+  ): void => {
     const v = limits.assess(radius, inner, outer);
     const k4 = seq++;
     if (v.failed === 0) {

@@ -57,12 +57,20 @@ describe("setupGeometry", () => {
 
   it("invalid wheels: errors say which field and why", () => {
     const tire = "265/70R17";
-    expect(() => setupGeometry({ tire, wheel: { diameterIn: 17, widthIn: 0, offsetMm: 0 } })).toThrow(/wheel\.widthIn must be between 3 and 20 in, got 0/);
-    expect(() => setupGeometry({ tire, wheel: { diameterIn: -17, widthIn: 8, offsetMm: 0 } })).toThrow(/wheel\.diameterIn must be between 8 and 30 in, got -17/);
-    expect(() => setupGeometry({ tire, wheel: { diameterIn: 17, widthIn: 8, offsetMm: 200 } })).toThrow(/wheel\.offsetMm 200 mm puts the mounting face/);
+    expect(() => setupGeometry({ tire, wheel: { diameterIn: 17, widthIn: 0, offsetMm: 0 } })).toThrow(
+      /wheel\.widthIn must be between 3 and 20 in, got 0/,
+    );
+    expect(() => setupGeometry({ tire, wheel: { diameterIn: -17, widthIn: 8, offsetMm: 0 } })).toThrow(
+      /wheel\.diameterIn must be between 8 and 30 in, got -17/,
+    );
+    expect(() => setupGeometry({ tire, wheel: { diameterIn: 17, widthIn: 8, offsetMm: 200 } })).toThrow(
+      /wheel\.offsetMm 200 mm puts the mounting face/,
+    );
     expect(() => setupGeometry({ tire, wheel: { diameterIn: 18, widthIn: 8, offsetMm: 0 } })).toThrow(/does not match the rim diameter 17/);
     expect(() => setupGeometry({ tire, wheel: { diameterIn: 17, widthIn: 8, offsetMm: 0 }, spacerMm: -5 })).toThrow(/spacerMm/);
-    expect(() => setupGeometry({ tire, wheel: { diameterIn: 17, widthIn: 8, offsetMm: Number.POSITIVE_INFINITY } })).toThrow(FitmentInputError);
+    expect(() => setupGeometry({ tire, wheel: { diameterIn: 17, widthIn: 8, offsetMm: Number.POSITIVE_INFINITY } })).toThrow(
+      FitmentInputError,
+    );
     try {
       setupGeometry({ tire, wheel: { diameterIn: 17, widthIn: 0, offsetMm: 0 } });
     } catch (e) {

@@ -78,14 +78,25 @@ export const SPACER_LIMITS_MM = { min: 0, max: 100 } as const;
  */
 export function setupGeometry(input: SetupInput): SetupGeometry {
   if (input === null || typeof input !== "object") {
-    throw new FitmentInputError("setup", "setup must be an object like { tire: \"265/70R17\", wheel: { diameterIn: 17, widthIn: 8, offsetMm: 25 } }", input);
+    throw new FitmentInputError(
+      "setup",
+      'setup must be an object like { tire: "265/70R17", wheel: { diameterIn: 17, widthIn: 8, offsetMm: 25 } }',
+      input,
+    );
   }
   const tire = toTireSize(input.tire);
   const wheel = input.wheel;
   if (wheel === null || typeof wheel !== "object") {
     throw new FitmentInputError("wheel", "wheel must be an object like { diameterIn: 17, widthIn: 8, offsetMm: 25 }", wheel);
   }
-  const diameterIn = requireNumber("wheel.diameterIn", wheel.diameterIn, WHEEL_DIAMETER_LIMITS_IN.min, WHEEL_DIAMETER_LIMITS_IN.max, "17", "in");
+  const diameterIn = requireNumber(
+    "wheel.diameterIn",
+    wheel.diameterIn,
+    WHEEL_DIAMETER_LIMITS_IN.min,
+    WHEEL_DIAMETER_LIMITS_IN.max,
+    "17",
+    "in",
+  );
   const widthIn = checkWheelWidthIn(wheel.widthIn, "wheel.widthIn");
   const offsetMm = checkOffsetMm(wheel.offsetMm, widthIn, "wheel.offsetMm");
   const spacerMm =

@@ -20,23 +20,8 @@ export {
 } from "./units";
 // convertPressure (lib/fitment/pressure.ts) is imported from its own module, not from here: it
 // brings convert-units, which pages using only the engine should not download.
-export {
-  LOAD_INDEX_KG,
-  MAX_LOAD_INDEX,
-  SPEED_SYMBOL_KMH,
-  loadIndexKg,
-  speedSymbolKmh,
-  isSpeedSymbol,
-} from "./loadSpeed";
-export {
-  LOAD_RANGES,
-  loadRangeInfo,
-  loadRangeFromPly,
-  plyRating,
-  isLoadRange,
-  type LoadRange,
-  type LoadRangeInfo,
-} from "./loadRange";
+export { LOAD_INDEX_KG, MAX_LOAD_INDEX, SPEED_SYMBOL_KMH, loadIndexKg, speedSymbolKmh, isSpeedSymbol } from "./loadSpeed";
+export { LOAD_RANGES, loadRangeInfo, loadRangeFromPly, plyRating, isLoadRange, type LoadRange, type LoadRangeInfo } from "./loadRange";
 export {
   NUMERIC_ASPECT_RATIO,
   parseTireSize,
@@ -102,14 +87,7 @@ export {
   checkWheelWidthIn,
   type BackspacingReference,
 } from "./offset";
-export {
-  WHEEL_DIAMETER_LIMITS_IN,
-  SPACER_LIMITS_MM,
-  setupGeometry,
-  type Wheel,
-  type SetupInput,
-  type SetupGeometry,
-} from "./geometry";
+export { WHEEL_DIAMETER_LIMITS_IN, SPACER_LIMITS_MM, setupGeometry, type Wheel, type SetupInput, type SetupGeometry } from "./geometry";
 export {
   RPM_CONSTANT,
   COMMON_AXLE_RATIOS,

@@ -24,7 +24,16 @@ describe("parseLength (1 in = 25.4 mm exactly, NIST SP 811)", () => {
     }
     expect(parseLength("¾", "in")).toBeCloseTo(19.05, 12);
     expect(parseLength("-1¼ in", "mm")).toBeCloseTo(-31.75, 12);
-    const eighths: [string, number][] = [["⅛", 1 / 8], ["⅜", 3 / 8], ["½", 1 / 2], ["⅝", 5 / 8], ["⅞", 7 / 8], ["¼", 1 / 4], ["⅓", 1 / 3], ["⅔", 2 / 3]];
+    const eighths: [string, number][] = [
+      ["⅛", 1 / 8],
+      ["⅜", 3 / 8],
+      ["½", 1 / 2],
+      ["⅝", 5 / 8],
+      ["⅞", 7 / 8],
+      ["¼", 1 / 4],
+      ["⅓", 1 / 3],
+      ["⅔", 2 / 3],
+    ];
     for (const [c, v] of eighths) expect(parseLength(`2${c}`, "in"), c).toBeCloseTo((2 + v) * 25.4, 12);
     expect(parseLength("1⁄2", "in")).toBeCloseTo(12.7, 12);
   });

@@ -13,15 +13,30 @@ import { MM_PER_IN } from "./units";
 /** Length units accepted at the edges. */
 export type LengthUnit = "in" | "mm";
 
-const LENGTH_RE =
-  /^([+-])?\s*(?:(\d+(?:\.\d+)?|\.\d+)(?:(?:\s+|-)(\d+)\/(\d+))?|(\d+)\/(\d+))\s*(mm|cm|in|inch|inches|"|''|”)?$/i;
+const LENGTH_RE = /^([+-])?\s*(?:(\d+(?:\.\d+)?|\.\d+)(?:(?:\s+|-)(\d+)\/(\d+))?|(\d+)\/(\d+))\s*(mm|cm|in|inch|inches|"|''|”)?$/i;
 
 const EXAMPLE = 'e.g. 4-3/4, 4 7/8 in, 3.5", 120 mm or 2';
 
 /** Unicode vulgar fractions (U+00BC–00BE, U+2150–215E) as ASCII `n/d`. */
 const VULGAR: Readonly<Record<string, string>> = {
-  "¼": "1/4", "½": "1/2", "¾": "3/4", "⅐": "1/7", "⅑": "1/9", "⅒": "1/10", "⅓": "1/3", "⅔": "2/3", "⅕": "1/5", "⅖": "2/5",
-  "⅗": "3/5", "⅘": "4/5", "⅙": "1/6", "⅚": "5/6", "⅛": "1/8", "⅜": "3/8", "⅝": "5/8", "⅞": "7/8",
+  "¼": "1/4",
+  "½": "1/2",
+  "¾": "3/4",
+  "⅐": "1/7",
+  "⅑": "1/9",
+  "⅒": "1/10",
+  "⅓": "1/3",
+  "⅔": "2/3",
+  "⅕": "1/5",
+  "⅖": "2/5",
+  "⅗": "3/5",
+  "⅘": "4/5",
+  "⅙": "1/6",
+  "⅚": "5/6",
+  "⅛": "1/8",
+  "⅜": "3/8",
+  "⅝": "5/8",
+  "⅞": "7/8",
 };
 const SUPER = "⁰¹²³⁴⁵⁶⁷⁸⁹";
 const SUB = "₀₁₂₃₄₅₆₇₈₉";
@@ -70,7 +85,11 @@ export function parseLength(text: string, defaultUnit: LengthUnit): number {
       const n = Number(num);
       const d = Number(den);
       if (d === 0 || n >= d) {
-        throw new FitmentInputError("length", `${JSON.stringify(text)}: the fraction ${num}/${den} must be a proper fraction (${EXAMPLE})`, text);
+        throw new FitmentInputError(
+          "length",
+          `${JSON.stringify(text)}: the fraction ${num}/${den} must be a proper fraction (${EXAMPLE})`,
+          text,
+        );
       }
       value += n / d;
     }

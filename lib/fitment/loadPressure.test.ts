@@ -111,7 +111,9 @@ describe("passenger tire on a light truck, MPV or SUV: load ÷ 1.10 (FMVSS 120 S
 
 describe("limits: above the maximum is refused, below the minimum is flagged", () => {
   it("a load above the tire's maximum throws a FitmentInputError on loadKg that says why and gives an example", () => {
-    expect(() => pressureForLoad("LT265/75R16 123/120S LRE", 1600)).toThrow(/loadKg 1600 kg is above the maximum load of LT265\/75R16 123\/120S LRE, 1550 kg.*e\.g\./);
+    expect(() => pressureForLoad("LT265/75R16 123/120S LRE", 1600)).toThrow(
+      /loadKg 1600 kg is above the maximum load of LT265\/75R16 123\/120S LRE, 1550 kg.*e\.g\./,
+    );
     expect(errorField(() => pressureForLoad("LT265/75R16 123/120S LRE", 1600))).toBe("loadKg");
     expect(() => pressureForLoad("LT265/75R16 123/120S LRE", 1600)).toThrow(TireLimitError);
     try {

@@ -188,14 +188,26 @@ function readTire(tire: unknown, field: string): TireSize {
 
 function classOf(t: TireSize, field: string): TireLoadClass {
   if (t.service === "T") {
-    throw new FitmentInputError(field, `${field}: ${t.text} is a temporary spare — inflate it to the pressure on its sidewall; it has no load–pressure schedule (e.g. LT265/75R16 123/120S LRE)`, t.text);
+    throw new FitmentInputError(
+      field,
+      `${field}: ${t.text} is a temporary spare — inflate it to the pressure on its sidewall; it has no load–pressure schedule (e.g. LT265/75R16 123/120S LRE)`,
+      t.text,
+    );
   }
   if (t.service === "ST") {
-    throw new FitmentInputError(field, `${field}: ${t.text} is a special trailer tire, for trailer axles only; give a vehicle tire (e.g. LT265/75R16 123/120S LRE)`, t.text);
+    throw new FitmentInputError(
+      field,
+      `${field}: ${t.text} is a special trailer tire, for trailer axles only; give a vehicle tire (e.g. LT265/75R16 123/120S LRE)`,
+      t.text,
+    );
   }
   if (t.service === "P") {
     if (t.loadRange !== null) {
-      throw new FitmentInputError(field, `${field}: ${t.text} is a passenger (P) size with a load range; P sizes carry SL or XL, load ranges belong to LT sizes (e.g. P265/70R17 113S XL or LT265/70R17 121/118S LRE)`, t.text);
+      throw new FitmentInputError(
+        field,
+        `${field}: ${t.text} is a passenger (P) size with a load range; P sizes carry SL or XL, load ranges belong to LT sizes (e.g. P265/70R17 113S XL or LT265/70R17 121/118S LRE)`,
+        t.text,
+      );
     }
     return "passenger";
   }
@@ -222,19 +234,34 @@ function optional(field: string, value: unknown, min: number, max: number, examp
  * b.maxLoadKg;      // 1550 (load index 123)
  * b.maxPressureKpa; // ≈ 551.6 (80 psi, load range E)
  */
-export function loadPressureBasis(tire: string | TireSize, options: LoadPressureOptions = {}, fields: BasisFieldNames = DEFAULT_FIELDS): LoadPressureBasis {
+export function loadPressureBasis(
+  tire: string | TireSize,
+  options: LoadPressureOptions = {},
+  fields: BasisFieldNames = DEFAULT_FIELDS,
+): LoadPressureBasis {
   requireObject("options", options, "{ maxPressureKpa: 551.6, maxLoadKg: 1550 }");
   const t = readTire(tire, fields.tire);
   const tireClass = classOf(t, fields.tire);
   const exponent = LOAD_PRESSURE_EXPONENT[tireClass];
   const vehicle = options.vehicle ?? "passenger-car";
   if (vehicle !== "passenger-car" && vehicle !== "light-truck") {
-    throw new FitmentInputError(fields.vehicle, `${fields.vehicle} must be "passenger-car" or "light-truck" (also MPV, SUV, van), got ${JSON.stringify(vehicle)} (e.g. "light-truck")`, vehicle);
+    throw new FitmentInputError(
+      fields.vehicle,
+      `${fields.vehicle} must be "passenger-car" or "light-truck" (also MPV, SUV, van), got ${JSON.stringify(vehicle)} (e.g. "light-truck")`,
+      vehicle,
+    );
   }
   const L = LOAD_PRESSURE_LIMITS;
   const givenLoad = optional(fields.maxLoadKg, options.maxLoadKg, L.maxLoadKg.min, L.maxLoadKg.max, "1550", "kg");
   const givenPressure = optional(fields.maxPressureKpa, options.maxPressureKpa, L.maxPressureKpa.min, L.maxPressureKpa.max, "551.6", "kPa");
-  const givenInflation = optional(fields.maxInflationKpa, options.maxInflationKpa, L.maxPressureKpa.min, L.maxPressureKpa.max, "300", "kPa");
+  const givenInflation = optional(
+    fields.maxInflationKpa,
+    options.maxInflationKpa,
+    L.maxPressureKpa.min,
+    L.maxPressureKpa.max,
+    "300",
+    "kPa",
+  );
   const givenMinimum = optional(fields.minPressureKpa, options.minPressureKpa, 0, L.maxPressureKpa.max, "240", "kPa");
 
   let rated: number;
@@ -266,12 +293,22 @@ export function loadPressureBasis(tire: string | TireSize, options: LoadPressure
       t.service === "P"
         ? `TRA P-metric ${extra ? "extra load 41" : "standard load 35"} psi (from memory)`
         : `ETRTO ${extra ? "extra load / reinforced 290" : "standard load 250"} kPa (from memory)`;
-  } else if (t.loadRange !== null && t.system !== "numeric" && !t.commercial && loadRangeInfo(t.loadRange, t.system).maxPressureKpa !== null) {
+  } else if (
+    t.loadRange !== null &&
+    t.system !== "numeric" &&
+    !t.commercial &&
+    loadRangeInfo(t.loadRange, t.system).maxPressureKpa !== null
+  ) {
     const info = loadRangeInfo(t.loadRange, t.system);
     maxPressure = info.maxPressureKpa as number;
     maxPressureSource = `load range ${info.loadRange}, ${t.system === "metric" ? "metric LT" : "flotation LT"}: ${info.maxPressurePsi} psi (${info.source})`;
   } else {
-    const why = t.loadRange === null ? "has no load range" : t.commercial ? "is a commercial (C) size" : `has load range ${t.loadRange}, for which no pressure is held`;
+    const why =
+      t.loadRange === null
+        ? "has no load range"
+        : t.commercial
+          ? "is a commercial (C) size"
+          : `has load range ${t.loadRange}, for which no pressure is held`;
     throw new FitmentInputError(
       fields.maxPressureKpa,
       `${fields.maxPressureKpa}: ${t.text} ${why} — give the load range (e.g. LT265/75R16 123/120S LRE) or the pressure the sidewall states its maximum load at (e.g. 551.6 kPa = 80 psi)`,
@@ -348,10 +385,15 @@ export function loadPressureBasis(tire: string | TireSize, options: LoadPressure
 function baseNotes(b: LoadPressureBasis): string[] {
   const notes: string[] = [];
   if (b.tireClass === "passenger" && b.vehicle === "passenger-car") {
-    notes.push('Passenger tire: on a light truck, MPV or SUV pass vehicle "light-truck" — its load rating is divided by 1.10 (FMVSS 120 S5.1.2).');
+    notes.push(
+      'Passenger tire: on a light truck, MPV or SUV pass vehicle "light-truck" — its load rating is divided by 1.10 (FMVSS 120 S5.1.2).',
+    );
   }
-  if (b.sources.derating !== null) notes.push(`Load rating ${b.ratedMaxLoadKg} kg ÷ 1.10 = ${round1(b.maxLoadKg)} kg on a light truck (FMVSS 120 S5.1.2).`);
-  notes.push("Cold pressures. The vehicle maker's placard and the tire maker's load tables take precedence; never exceed the sidewall maximum.");
+  if (b.sources.derating !== null)
+    notes.push(`Load rating ${b.ratedMaxLoadKg} kg ÷ 1.10 = ${round1(b.maxLoadKg)} kg on a light truck (FMVSS 120 S5.1.2).`);
+  notes.push(
+    "Cold pressures. The vehicle maker's placard and the tire maker's load tables take precedence; never exceed the sidewall maximum.",
+  );
   return notes;
 }
 
@@ -391,7 +433,9 @@ export function loadFromBasis(b: LoadPressureBasis, pressureKpa: number, field: 
   const belowMinimum = p < b.minimumPressureKpa;
   const notes = baseNotes(b);
   if (belowMinimum) {
-    notes.unshift(`Below the road minimum ${kpaText(b.minimumPressureKpa)} (${b.sources.minimum}): the load shown is the formula's, not one the standards allow on the road.`);
+    notes.unshift(
+      `Below the road minimum ${kpaText(b.minimumPressureKpa)} (${b.sources.minimum}): the load shown is the formula's, not one the standards allow on the road.`,
+    );
   }
   if (above) notes.unshift(`Above ${kpaText(b.maxPressureKpa)} the tire carries no more than its maximum load.`);
   return {

@@ -52,7 +52,11 @@ export function isLoadRange(text: string): text is LoadRange {
 export function plyRating(loadRange: string): number {
   const i = (LOAD_RANGES as readonly string[]).indexOf(typeof loadRange === "string" ? loadRange.toUpperCase() : "");
   if (i < 0) {
-    throw new FitmentInputError("loadRange", `load range must be one of ${LOAD_RANGES.join(", ")}, got ${JSON.stringify(loadRange)} (e.g. "E")`, loadRange);
+    throw new FitmentInputError(
+      "loadRange",
+      `load range must be one of ${LOAD_RANGES.join(", ")}, got ${JSON.stringify(loadRange)} (e.g. "E")`,
+      loadRange,
+    );
   }
   return 4 + 2 * i;
 }
@@ -91,7 +95,11 @@ export function loadRangeFromPly(ply: number): LoadRange {
   const i = (ply - 4) / 2;
   const lr = Number.isInteger(i) ? LOAD_RANGES[i] : undefined;
   if (lr === undefined) {
-    throw new FitmentInputError("plyRating", `ply rating must be an even number from 4 to 24, got ${String(ply)} (e.g. 10 for load range E)`, ply);
+    throw new FitmentInputError(
+      "plyRating",
+      `ply rating must be an even number from 4 to 24, got ${String(ply)} (e.g. 10 for load range E)`,
+      ply,
+    );
   }
   return lr;
 }

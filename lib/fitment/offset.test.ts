@@ -34,12 +34,14 @@ describe("offset ⇄ backspacing", () => {
   });
 
   it("invalid input names the field and why", () => {
-    expect(() => offsetFromBackspacing({ widthIn: 0, backspacingIn: 4, measuredFrom: "bead-seat" })).toThrow(/widthIn must be between 3 and 20/);
+    expect(() => offsetFromBackspacing({ widthIn: 0, backspacingIn: 4, measuredFrom: "bead-seat" })).toThrow(
+      /widthIn must be between 3 and 20/,
+    );
     expect(() => backspacingFromOffset({ widthIn: 9, offsetMm: 400, measuredFrom: "bead-seat" })).toThrow(/offsetMm 400 mm/);
     expect(() => offsetFromBackspacing({ widthIn: 9, backspacingIn: 25, measuredFrom: "bead-seat" })).toThrow(/backspacingIn/);
-    expect(() =>
-      offsetFromBackspacing({ widthIn: 9, backspacingIn: 4, measuredFrom: "hub" as unknown as "flange" }),
-    ).toThrow(/measuredFrom/);
+    expect(() => offsetFromBackspacing({ widthIn: 9, backspacingIn: 4, measuredFrom: "hub" as unknown as "flange" })).toThrow(
+      /measuredFrom/,
+    );
     try {
       offsetFromBackspacing({ widthIn: -9, backspacingIn: 4, measuredFrom: "bead-seat" });
       expect.unreachable();

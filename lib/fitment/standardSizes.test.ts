@@ -4,7 +4,20 @@ import { STANDARD_FLOTATION_SIZES, STANDARD_METRIC_SIZES, STANDARD_SIZES, standa
 describe("standard sizes (data)", () => {
   it("contains the sizes the rest of the engine relies on", () => {
     const texts = new Set(STANDARD_SIZES.map((t) => t.text));
-    for (const s of ["205/55R16", "265/70R17", "285/70R17", "315/70R17", "275/65R20", "31x10.50R15LT", "33x12.50R15LT", "35x12.50R17LT", "37x12.50R17LT", "37x13.50R22LT", "40x13.50R24LT", "42x14.50R20LT"]) {
+    for (const s of [
+      "205/55R16",
+      "265/70R17",
+      "285/70R17",
+      "315/70R17",
+      "275/65R20",
+      "31x10.50R15LT",
+      "33x12.50R15LT",
+      "35x12.50R17LT",
+      "37x12.50R17LT",
+      "37x13.50R22LT",
+      "40x13.50R24LT",
+      "42x14.50R20LT",
+    ]) {
       expect(texts.has(s)).toBe(true);
     }
   });
@@ -27,7 +40,8 @@ describe("standard sizes (data)", () => {
 });
 
 describe("standard sizes cover the usual truck rims", () => {
-  const on = (system: "metric" | "flotation", rim: number) => STANDARD_SIZES.filter((t) => t.system === system && t.rimDiameterIn === rim).map((t) => t.text);
+  const on = (system: "metric" | "flotation", rim: number) =>
+    STANDARD_SIZES.filter((t) => t.system === system && t.rimDiameterIn === rim).map((t) => t.text);
 
   it("LT flotation sizes on 15, 16, 16.5, 17, 18, 20 and 22 in rims (common practice, from memory; not checked against the TRA Year Book)", () => {
     for (const rim of [15, 17, 18, 20, 22]) expect(on("flotation", rim).length, `${rim} in`).toBeGreaterThanOrEqual(4);
@@ -39,12 +53,29 @@ describe("standard sizes cover the usual truck rims", () => {
   it("the common metric LT and P sizes on those rims (common practice, no source)", () => {
     const metric = new Set(STANDARD_METRIC_SIZES.map((t) => t.text));
     for (const s of [
-      "215/75R15", "225/75R15", "235/75R15",
-      "235/85R16", "245/75R16", "265/75R16", "285/75R16", "315/75R16",
-      "245/75R17", "265/70R17", "285/70R17", "315/70R17", "315/80R17",
-      "275/70R18", "295/70R18", "325/65R18",
-      "275/65R20", "295/60R20", "305/55R20", "325/60R20",
-      "285/45R22", "305/45R22", "325/50R22",
+      "215/75R15",
+      "225/75R15",
+      "235/75R15",
+      "235/85R16",
+      "245/75R16",
+      "265/75R16",
+      "285/75R16",
+      "315/75R16",
+      "245/75R17",
+      "265/70R17",
+      "285/70R17",
+      "315/70R17",
+      "315/80R17",
+      "275/70R18",
+      "295/70R18",
+      "325/65R18",
+      "275/65R20",
+      "295/60R20",
+      "305/55R20",
+      "325/60R20",
+      "285/45R22",
+      "305/45R22",
+      "325/50R22",
     ]) {
       expect(metric.has(s), s).toBe(true);
     }

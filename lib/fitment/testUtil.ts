@@ -18,7 +18,9 @@ export function numbersIn(value: unknown, path = "$", out: { path: string; value
  * @example nonFinite({ a: 1, b: NaN }); // ["$.b"]
  */
 export function nonFinite(value: unknown): string[] {
-  return numbersIn(value).filter((n) => !Number.isFinite(n.value)).map((n) => n.path);
+  return numbersIn(value)
+    .filter((n) => !Number.isFinite(n.value))
+    .map((n) => n.path);
 }
 
 /**

@@ -50,7 +50,8 @@ describe("tighteningSequence", () => {
       const firstFour = s.slice(0, 4);
       if (n % 4 === 0) expect(new Set(firstFour.map((b) => quadrant(b, n))).size).toBe(4);
       if (n >= 8) {
-        for (let i = 0; i < 4; i++) for (let j = 0; j < i; j++) expect(sep(firstFour[i] as number, firstFour[j] as number, n)).toBeGreaterThan(1.5 / n);
+        for (let i = 0; i < 4; i++)
+          for (let j = 0; j < i; j++) expect(sep(firstFour[i] as number, firstFour[j] as number, n)).toBeGreaterThan(1.5 / n);
       }
     });
   }
@@ -202,7 +203,9 @@ describe("torque range does not depend on the unit it is given in", () => {
   it("states the limits in the unit of the field, rounded inward (1–2000 N·m = 0.74–1475.1 ft·lb)", () => {
     expect(torqueLimitsIn("nm")).toEqual({ min: 1, max: 2000 });
     expect(torqueLimitsIn("ftlb")).toEqual({ min: 0.8, max: 1475.1 });
-    expect(() => requireTorqueNm(torqueToNm(1600, "ftlb"), "ftlb", FIELD_FTLB)).toThrow(/^Maker's torque \(ft·lb\) must be between 0\.8 and 1475\.1 ft·lb \(1 and 2000 N·m\), got 1600 ft·lb/);
+    expect(() => requireTorqueNm(torqueToNm(1600, "ftlb"), "ftlb", FIELD_FTLB)).toThrow(
+      /^Maker's torque \(ft·lb\) must be between 0\.8 and 1475\.1 ft·lb \(1 and 2000 N·m\), got 1600 ft·lb/,
+    );
     // 1475.1 × 1.355818 = 1999.967 N·m, just inside 2000 N·m
     expect(requireTorqueNm(torqueToNm(1475.1, "ftlb"), "ftlb", FIELD_FTLB)).toBeCloseTo(1999.967, 3);
     expect(() => requireTorqueNm(Number.NaN, "nm", FIELD_NM)).toThrow(/Maker's torque \(N·m\)/);

@@ -123,7 +123,11 @@ export function torquePlan(input: {
   finalCheck?: boolean;
 }): TorquePlan {
   if ((input.torqueNm === undefined) === (input.torqueFtLb === undefined)) {
-    throw new FitmentInputError("torqueNm", "give exactly one of torqueNm or torqueFtLb (e.g. { boltCount: 24, torqueFtLb: 17 })", input.torqueNm);
+    throw new FitmentInputError(
+      "torqueNm",
+      "give exactly one of torqueNm or torqueFtLb (e.g. { boltCount: 24, torqueFtLb: 17 })",
+      input.torqueNm,
+    );
   }
   // One range in N·m whichever unit the figure came in, so a unit switch never turns an accepted
   // figure into a refused one (the old 1–1500 ft·lb let through 2033 N·m that N·m refused).
@@ -152,7 +156,14 @@ export function torquePlan(input: {
     sequence: sequence.slice(),
   }));
   if (input.finalCheck !== false) {
-    passes.push({ pass: passes.length + 1, kind: "check", fraction: 1, torqueNm: nm, torqueFtLb: nmToFtLb(nm), sequence: sequence.slice() });
+    passes.push({
+      pass: passes.length + 1,
+      kind: "check",
+      fraction: 1,
+      torqueNm: nm,
+      torqueFtLb: nmToFtLb(nm),
+      sequence: sequence.slice(),
+    });
   }
   return {
     boltCount: sequence.length,
@@ -234,20 +245,49 @@ export function formatTorqueEntry(nm: number, unit: TorqueUnit): string {
 export function requireTorqueNm(nm: number, unit: TorqueUnit, field: string): number {
   const sym = TORQUE_UNIT_SYMBOL[unit];
   const { min, max } = torqueLimitsIn(unit);
-  const limits = unit === "nm" ? `${min} and ${max} N·m` : `${min} and ${max} ${sym} (${TORQUE_LIMITS_NM.min} and ${TORQUE_LIMITS_NM.max} N·m)`;
+  const limits =
+    unit === "nm" ? `${min} and ${max} N·m` : `${min} and ${max} ${sym} (${TORQUE_LIMITS_NM.min} and ${TORQUE_LIMITS_NM.max} N·m)`;
   const got = typeof nm === "number" && Number.isFinite(nm) ? `${formatTorqueEntry(nm, unit)} ${sym}` : String(nm);
   if (typeof nm !== "number" || !Number.isFinite(nm) || nm < TORQUE_LIMITS_NM.min || nm > TORQUE_LIMITS_NM.max) {
-    throw new FitmentInputError(field, `${field} must be between ${limits}, got ${got} — check the maker's figure (e.g. ${unit === "nm" ? "24.4" : "18"})`, nm);
+    throw new FitmentInputError(
+      field,
+      `${field} must be between ${limits}, got ${got} — check the maker's figure (e.g. ${unit === "nm" ? "24.4" : "18"})`,
+      nm,
+    );
   }
   return nm;
 }
 
 /** Unit words people write after a torque figure, squeezed (lower case, no spaces, dots, dashes or middle dots). */
 const UNIT_WORDS: Record<string, TorqueUnit | "inlb" | "kgfm"> = {
-  ftlb: "ftlb", ftlbs: "ftlb", ftlbf: "ftlb", lbft: "ftlb", lbsft: "ftlb", lbfft: "ftlb", footpound: "ftlb", footpounds: "ftlb", poundfeet: "ftlb", poundsfeet: "ftlb", poundfoot: "ftlb",
-  nm: "nm", newtonmetre: "nm", newtonmetres: "nm", newtonmeter: "nm", newtonmeters: "nm",
-  inlb: "inlb", inlbs: "inlb", inlbf: "inlb", lbin: "inlb", lbsin: "inlb", lbfin: "inlb", inchpound: "inlb", inchpounds: "inlb",
-  kgfm: "kgfm", kgm: "kgfm", mkg: "kgfm", kpm: "kgfm",
+  ftlb: "ftlb",
+  ftlbs: "ftlb",
+  ftlbf: "ftlb",
+  lbft: "ftlb",
+  lbsft: "ftlb",
+  lbfft: "ftlb",
+  footpound: "ftlb",
+  footpounds: "ftlb",
+  poundfeet: "ftlb",
+  poundsfeet: "ftlb",
+  poundfoot: "ftlb",
+  nm: "nm",
+  newtonmetre: "nm",
+  newtonmetres: "nm",
+  newtonmeter: "nm",
+  newtonmeters: "nm",
+  inlb: "inlb",
+  inlbs: "inlb",
+  inlbf: "inlb",
+  lbin: "inlb",
+  lbsin: "inlb",
+  lbfin: "inlb",
+  inchpound: "inlb",
+  inchpounds: "inlb",
+  kgfm: "kgfm",
+  kgm: "kgfm",
+  mkg: "kgfm",
+  kpm: "kgfm",
 };
 
 /**
@@ -265,7 +305,10 @@ const UNIT_WORDS: Record<string, TorqueUnit | "inlb" | "kgfm"> = {
 export function parseTorqueEntry(text: string, unit: TorqueUnit, field: string): number {
   const sym = TORQUE_UNIT_SYMBOL[unit];
   const example = unit === "nm" ? "24.4" : "18";
-  const t = String(text).trim().replace(/\u2212/g, "-").replace(/\s+/g, " ");
+  const t = String(text)
+    .trim()
+    .replace(/\u2212/g, "-")
+    .replace(/\s+/g, " ");
   const refuse = (why: string): never => {
     throw new FitmentInputError(field, `${field}: ${why}`, text);
   };
@@ -276,7 +319,9 @@ export function parseTorqueEntry(text: string, unit: TorqueUnit, field: string):
   }
   if (/^-/.test(t)) refuse(`${shown}: a torque cannot be negative (e.g. ${example})`);
   if (/^\+?[\d.]*,[\d.,]*/.test(t)) {
-    refuse(`${shown} is ambiguous — a comma can mark decimals or thousands; write decimals with a point and no thousands separator (e.g. ${example === "18" ? "17.5" : "24.4"})`);
+    refuse(
+      `${shown} is ambiguous — a comma can mark decimals or thousands; write decimals with a point and no thousands separator (e.g. ${example === "18" ? "17.5" : "24.4"})`,
+    );
   }
   const m = /^\+?(\d+(?:\.\d*)?|\.\d+)\s*([^\d]*)$/.exec(t);
   if (!m) refuse(`${shown} is not a number — enter the maker's figure like ${example}`);
@@ -285,10 +330,14 @@ export function parseTorqueEntry(text: string, unit: TorqueUnit, field: string):
   if (word !== "") {
     const named = UNIT_WORDS[word];
     if (named === undefined) refuse(`${shown} is not a number — enter the maker's figure like ${example}`);
-    if (named === "inlb") refuse(`${shown} is in inch-pounds; this field takes ${sym} (12 in·lb = 1 ft·lb) — convert it or choose the unit the maker uses`);
-    if (named === "kgfm") refuse(`${shown} is in kgf·m; this field takes ${sym} (1 kgf·m = 9.80665 N·m) — convert it or choose the unit the maker uses`);
+    if (named === "inlb")
+      refuse(`${shown} is in inch-pounds; this field takes ${sym} (12 in·lb = 1 ft·lb) — convert it or choose the unit the maker uses`);
+    if (named === "kgfm")
+      refuse(`${shown} is in kgf·m; this field takes ${sym} (1 kgf·m = 9.80665 N·m) — convert it or choose the unit the maker uses`);
     if (named !== unit) {
-      refuse(`${shown} is in ${TORQUE_UNIT_SYMBOL[named as TorqueUnit]} but the chosen unit is ${sym} — choose ${TORQUE_UNIT_SYMBOL[named as TorqueUnit]} above, or enter the figure in ${sym}`);
+      refuse(
+        `${shown} is in ${TORQUE_UNIT_SYMBOL[named as TorqueUnit]} but the chosen unit is ${sym} — choose ${TORQUE_UNIT_SYMBOL[named as TorqueUnit]} above, or enter the figure in ${sym}`,
+      );
     }
   }
   return Number(num);

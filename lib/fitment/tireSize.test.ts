@@ -142,7 +142,16 @@ describe("parseTireSize — what people copy from a sidewall", () => {
   });
 
   it("severe-snow mark: 3PMSF, 3PMS, the words spelled out and the snowflake sign read as 3PMSF", () => {
-    for (const v of ["3PMSF", "3pms", "3 Peak Mountain Snowflake", "three-peak mountain snowflake", "Three Peak Mountain Snow Flake", "mountain snowflake", "severe snow", "\u2744"]) {
+    for (const v of [
+      "3PMSF",
+      "3pms",
+      "3 Peak Mountain Snowflake",
+      "three-peak mountain snowflake",
+      "Three Peak Mountain Snow Flake",
+      "mountain snowflake",
+      "severe snow",
+      "\u2744",
+    ]) {
       expect(parseTireSize(`265/70R17 115T ${v}`).markings, v).toEqual(["3PMSF"]);
     }
   });
@@ -230,7 +239,19 @@ describe("parseTireSize — what people copy from a sidewall", () => {
 });
 
 describe("parseTireSize — invalid input", () => {
-  const bad = ["", "abc", "265/70", "265/7R17", "265/70R", "265/70R17 999Q", "265/70R17 121X", "20x12.50R17", "265/70R40", "37x12.50R17LT extra words", "LT265/70R17LT"];
+  const bad = [
+    "",
+    "abc",
+    "265/70",
+    "265/7R17",
+    "265/70R",
+    "265/70R17 999Q",
+    "265/70R17 121X",
+    "20x12.50R17",
+    "265/70R40",
+    "37x12.50R17LT extra words",
+    "LT265/70R17LT",
+  ];
   for (const text of bad) {
     it(`rejects ${JSON.stringify(text)} with a TireSizeError that shows an accepted example`, () => {
       expect(() => parseTireSize(text)).toThrow(TireSizeError);
@@ -269,14 +290,17 @@ describe("parseTireSize — properties (fast-check)", () => {
   it("throws nothing but TireSizeError on strings made of tire-size characters", () => {
     const chars = fc.constantFrom(..."0123456789/xXRrDdBbLTPSZ .-()QEHVWY".split(""));
     fc.assert(
-      fc.property(fc.array(chars, { maxLength: 30 }).map((a) => a.join("")), (s) => {
-        try {
-          const t = parseTireSize(s);
-          expect(Number.isFinite(t.overallDiameterMm)).toBe(true);
-        } catch (e) {
-          if (!(e instanceof TireSizeError)) throw e;
-        }
-      }),
+      fc.property(
+        fc.array(chars, { maxLength: 30 }).map((a) => a.join("")),
+        (s) => {
+          try {
+            const t = parseTireSize(s);
+            expect(Number.isFinite(t.overallDiameterMm)).toBe(true);
+          } catch (e) {
+            if (!(e instanceof TireSizeError)) throw e;
+          }
+        },
+      ),
       { numRuns: 3000 },
     );
   });

@@ -83,8 +83,7 @@ export interface TireSize {
 /** Nominal aspect ratio used for numeric sizes (from memory: numeric sizes are a ~92 series). */
 export const NUMERIC_ASPECT_RATIO = 92;
 
-const EXAMPLES =
-  "accepted forms: 265/70R17, LT285/70R17 121/118Q LRE M+S, P225/75R15 102S, 235/65R16C 121/119R, 37x12.50R17LT, 7.50R16";
+const EXAMPLES = "accepted forms: 265/70R17, LT285/70R17 121/118Q LRE M+S, P225/75R15 102S, 235/65R16C 121/119R, 37x12.50R17LT, 7.50R16";
 
 const METRIC_RE = /^(P|LT|ST|T)?(\d{3})\/(\d{2,3})(ZR|R|D|B|-)(\d{2}(?:\.5)?)(LT|C)?$/;
 // The section may be typed without its decimal point: 1250 = 12.50 (3 or 4 digits, see below).
@@ -352,7 +351,8 @@ export function parseTireSize(text: string): TireSize {
     if (sec < 5 || sec > 25) fail(text, `section width ${sec} in is outside 5–25 in`);
     const sidewall = ((dia - rimIn) * MM_PER_IN) / 2;
     const aspect = (sidewall / (sec * MM_PER_IN)) * 100;
-    if (!(aspect >= 20 && aspect <= 120)) fail(text, `overall diameter ${dia} in and rim ${rimIn} in leave an implied aspect ratio of ${aspect.toFixed(0)}, outside 20–120`);
+    if (!(aspect >= 20 && aspect <= 120))
+      fail(text, `overall diameter ${dia} in and rim ${rimIn} in leave an implied aspect ratio of ${aspect.toFixed(0)}, outside 20–120`);
     return finish({
       system: "flotation",
       service: prefix !== undefined || suffix !== undefined ? "LT" : null,

@@ -72,7 +72,9 @@ describe("approach and departure angle (SAE J1100 definition, from memory)", () 
     expect(errorField(() => approachAngleDeg({ tireDiameterMm: 800, cornerHeightMm: 900, cornerOffsetMm: 300 }))).toBe("cornerOffsetMm");
     expect(() => approachAngleDeg({ tireDiameterMm: 800, cornerHeightMm: 900, cornerOffsetMm: 300 })).toThrow(/sits over the tire/);
     expect(errorField(() => approachAngleDeg({ tireDiameterMm: 800, cornerHeightMm: -1, cornerOffsetMm: 900 }))).toBe("cornerHeightMm");
-    expect(errorField(() => approachAngleDeg({ tireDiameterMm: Number.NaN, cornerHeightMm: 600, cornerOffsetMm: 900 }))).toBe("tireDiameterMm");
+    expect(errorField(() => approachAngleDeg({ tireDiameterMm: Number.NaN, cornerHeightMm: 600, cornerOffsetMm: 900 }))).toBe(
+      "tireDiameterMm",
+    );
     expect(errorField(() => approachAngleDeg({ tireDiameterMm: 800, cornerHeightMm: 600, cornerOffsetMm: 0 }))).toBe("cornerOffsetMm");
     expect(errorField(() => approachAngleDeg(null as never))).toBe("input");
   });
@@ -126,9 +128,15 @@ describe("raiseBodyPoint (the axle centre sits one radius above the ground; comm
   });
 
   it("refuses a point driven into the ground and bad numbers", () => {
-    expect(errorField(() => raiseBodyPoint({ heightMm: 100, currentTireDiameterMm: 900, plannedTireDiameterMm: 700, liftMm: -50 }))).toBe("liftMm");
-    expect(errorField(() => raiseBodyPoint({ heightMm: 600, currentTireDiameterMm: 800, plannedTireDiameterMm: 889, liftMm: 5000 }))).toBe("liftMm");
-    expect(errorField(() => raiseBodyPoint({ heightMm: 600, currentTireDiameterMm: 800, plannedTireDiameterMm: Number.NaN }))).toBe("plannedTireDiameterMm");
+    expect(errorField(() => raiseBodyPoint({ heightMm: 100, currentTireDiameterMm: 900, plannedTireDiameterMm: 700, liftMm: -50 }))).toBe(
+      "liftMm",
+    );
+    expect(errorField(() => raiseBodyPoint({ heightMm: 600, currentTireDiameterMm: 800, plannedTireDiameterMm: 889, liftMm: 5000 }))).toBe(
+      "liftMm",
+    );
+    expect(errorField(() => raiseBodyPoint({ heightMm: 600, currentTireDiameterMm: 800, plannedTireDiameterMm: Number.NaN }))).toBe(
+      "plannedTireDiameterMm",
+    );
   });
 });
 

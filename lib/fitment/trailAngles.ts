@@ -179,7 +179,11 @@ export function raiseBodyPoint(input: RaiseInput): number {
   const lift = input.liftMm === undefined ? 0 : requireNumber("liftMm", input.liftMm, L.lift.min, L.lift.max, "50", "mm");
   const raised = h + (dp - dc) / 2 + lift;
   if (raised < L.height.min) {
-    throw new FitmentInputError("liftMm", `the point ends ${Math.round(raised)} mm above the ground with this tire and lift; it must stay above the ground (e.g. liftMm 0)`, lift);
+    throw new FitmentInputError(
+      "liftMm",
+      `the point ends ${Math.round(raised)} mm above the ground with this tire and lift; it must stay above the ground (e.g. liftMm 0)`,
+      lift,
+    );
   }
   return raised;
 }

@@ -147,7 +147,13 @@ function shifted(o: Outline, dy: number): Outline {
 }
 
 /** An outline given as (x, ρ) with ρ the distance from the axle, drawn below (−1) or above (+1) it. */
-function radial(axleY: number, side: 1 | -1, cmds: ReadonlyArray<{ op: "M" | "L"; x: number; r: number } | { op: "C"; c: [number, number, number, number]; x: number; r: number } | { op: "Z" }>): Outline {
+function radial(
+  axleY: number,
+  side: 1 | -1,
+  cmds: ReadonlyArray<
+    { op: "M" | "L"; x: number; r: number } | { op: "C"; c: [number, number, number, number]; x: number; r: number } | { op: "Z" }
+  >,
+): Outline {
   const at = (x: number, r: number): Pt => ({ x, y: axleY + side * r });
   return cmds.map((c) => {
     if (c.op === "Z") return { op: "Z" };
@@ -200,7 +206,17 @@ function rimProfile(xbi: number, xbo: number, f: number, r: number): RCmd[] {
   ];
 }
 
-function tireProfile(sec: { xbi: number; xbo: number; xin: number; xout: number; xc: number; r: number; R: number; H: number; tw: number }): RCmd[] {
+function tireProfile(sec: {
+  xbi: number;
+  xbo: number;
+  xin: number;
+  xout: number;
+  xc: number;
+  r: number;
+  R: number;
+  H: number;
+  tw: number;
+}): RCmd[] {
   const { xbi, xbo, xin, xout, xc, r, R, H, tw } = sec;
   const S = SCHEMATIC;
   // Leaves the rim at the flange tip (or lower on a very low profile), widest at mid-sidewall.
@@ -288,7 +304,11 @@ export function wheelSection(g: SetupGeometry, choice: BackspacingChoice = {}): 
   const boreR = Math.min(S.centreBoreRadiusMm, 0.6 * padR);
   const padT = S.padThicknessMm;
   const w = xbo - xbi;
-  const wellLo = xbi + Math.min(S.beadSeatWidthMm, w * S.beadSeatWidthMaxShare) + Math.min(S.humpWidthMm, w * S.humpWidthMaxShare) + Math.min(S.wellRampMm, w * S.wellRampMaxShare);
+  const wellLo =
+    xbi +
+    Math.min(S.beadSeatWidthMm, w * S.beadSeatWidthMaxShare) +
+    Math.min(S.humpWidthMm, w * S.humpWidthMaxShare) +
+    Math.min(S.wellRampMm, w * S.wellRampMaxShare);
   const wellHi = xbo - (wellLo - xbi);
   const half = S.discThicknessMm / 2;
   const joint = clamp(xm + padT / 2, Math.min(wellLo + half, (wellLo + wellHi) / 2), Math.max(wellHi - half, (wellLo + wellHi) / 2));
@@ -317,7 +337,13 @@ export function wheelSection(g: SetupGeometry, choice: BackspacingChoice = {}): 
     mountingFaceX: xm,
     beadSeat: { inboardX: xbi, outboardX: xbo, lowerY: R - r, upperY: R + r },
     flange: { inboardX: xbi - f, outboardX: xbo + f, allowanceMm: f, heightMm: S.flangeHeightMm },
-    tire: { innerX: xin, outerX: xout, widestLowerY: R - r - S.widestAtShare * H, widestUpperY: R + r + S.widestAtShare * H, treadHalfWidthMm: tw / 2 },
+    tire: {
+      innerX: xin,
+      outerX: xout,
+      widestLowerY: R - r - S.widestAtShare * H,
+      widestUpperY: R + r + S.widestAtShare * H,
+      treadHalfWidthMm: tw / 2,
+    },
     pad: { x0: xm, x1: xm + padT, innerRadiusMm: boreR, outerRadiusMm: padR },
     spacer,
     backspacing: { reference, fromX: reference === "flange" ? xbi - f : xbi, toX: xm, valueMm: valueIn * MM_PER_IN, valueIn },
@@ -407,6 +433,6 @@ export function outlineExtents(o: Outline): { minX: number; maxX: number; minY: 
     add(c.to);
     last = c.to;
   }
-  if (minX === Infinity) throw new FitmentInputError("outline", "outline has no points (e.g. [{ op: \"M\", to: { x: 0, y: 0 } }])", o);
+  if (minX === Infinity) throw new FitmentInputError("outline", 'outline has no points (e.g. [{ op: "M", to: { x: 0, y: 0 } }])', o);
   return { minX, maxX, minY, maxY };
 }

@@ -43,7 +43,6 @@ export interface Checklist {
   predictions: { clearance: VehicleClearance; prediction: ClearancePrediction }[];
 }
 
-
 const DIRECTION_FIX: Record<VehicleClearance["direction"], string> = {
   inboard: "trim or relieve the part, or choose a wheel that sits further outboard (less backspacing)",
   outboard: "trim the lip or fit wider flares, or choose a wheel that sits further inboard (more backspacing)",
@@ -63,7 +62,9 @@ export function buildChecklist(input: { vehicle: Vehicle; clearances: VehicleCle
   const fromStock = compareSetups(toEngineSetup(v.stockSetup), pla, { speedsMph: [60] });
   const preds = predictPoints(clearances, planned, marginMm, v);
   const predictions = clearances.map((clearance, i) => ({ clearance, prediction: preds[i]! }));
-  const findings = assessChange(cmp, { points: predictions.map(({ clearance: c, prediction }) => ({ id: c.id, label: c.label, prediction })) });
+  const findings = assessChange(cmp, {
+    points: predictions.map(({ clearance: c, prediction }) => ({ id: c.id, label: c.label, prediction })),
+  });
   const items: ChecklistItem[] = [];
 
   // --- fit
@@ -76,21 +77,26 @@ export function buildChecklist(input: { vehicle: Vehicle; clearances: VehicleCle
       detail: `Predicted ${bothUnits(p.predictedMm)} against a ${bothUnits(p.marginMm)} margin (measured ${bothUnits(p.measuredMm)} at ${p.state.replace("-", " ")}). To fix: ${DIRECTION_FIX[p.direction]}${p.state === "full-lock" && p.direction !== "fore-aft" ? ", or limit steering travel with the stops" : ""}.`,
     });
   }
-  const upShort = Math.max(0, ...points.filter((f) => f.figures.direction === "upward" || f.figures.direction === "fore-aft").map((f) => f.figures.shortfallMm));
+  const upShort = Math.max(
+    0,
+    ...points.filter((f) => f.figures.direction === "upward" || f.figures.direction === "fore-aft").map((f) => f.figures.shortfallMm),
+  );
   if (upShort > 0) {
     items.push({
       id: "lift",
       group: "fit",
       title: `Lift or trim: the upward and full-lock points need ${bothUnits(upShort)} more room`,
       detail: `The planned tire is ${bothUnits(Math.abs(cmp.diameterChangeMm))} ${cmp.diameterChangeMm >= 0 ? "taller" : "shorter"} (radius ${bothUnits(Math.abs(cmp.groundClearanceChangeMm))}).${v.liftHeightMm !== null ? ` Current lift: ${bothUnits(v.liftHeightMm)}.` : ""} Lift alone does not cure full-lock rub on a bumper or body mount.`,
-      caution: "Lift and steering changes alter handling and braking: follow the kit maker's instructions and local rules, and have steering and brake work done or checked by a qualified technician.",
+      caution:
+        "Lift and steering changes alter handling and braking: follow the kit maker's instructions and local rules, and have steering and brake work done or checked by a qualified technician.",
     });
   }
   items.push({
     id: "cycle",
     group: "fit",
     title: "Cycle the suspension and steering with the new tires before driving",
-    detail: "Full lock both ways at ride height, then with each wheel at full stuff (jack or ramp, vehicle supported), and check every measured point. Predictions assume the suspension moves as when measured.",
+    detail:
+      "Full lock both ways at ride height, then with each wheel at full stuff (jack or ramp, vehicle supported), and check every measured point. Predictions assume the suspension moves as when measured.",
     caution: "Never work under a vehicle held only by a jack: use rated stands on firm ground.",
   });
 
@@ -171,7 +177,8 @@ export function buildChecklist(input: { vehicle: Vehicle; clearances: VehicleCle
     group: "wheels",
     title: "If the wheels are beadlocks: ring bolts to the wheel maker's figure in crisscross order",
     detail: "Several passes, crisscross, to the wheel maker's figure; re-check ring bolts after the first run and after airing down.",
-    caution: "Seat beads in a cage or with a clip-on chuck while standing clear; never exceed the bead-seating pressure on the sidewall; follow the wheel maker's instructions.",
+    caution:
+      "Seat beads in a cage or with a clip-on chuck while standing clear; never exceed the bead-seating pressure on the sidewall; follow the wheel maker's instructions.",
   });
 
   // --- tires
@@ -179,14 +186,19 @@ export function buildChecklist(input: { vehicle: Vehicle; clearances: VehicleCle
     id: "spare",
     group: "tires",
     title: `Spare fits: the planned ${bothUnits(cmp.planned.overallDiameterMm)} tire in the carrier or spare mount`,
-    detail: "Check the spare location, the carrier's load rating and that the spare can be lowered and lifted. On four-wheel drive, a spare of another diameter is for short distances only.",
+    detail:
+      "Check the spare location, the carrier's load rating and that the spare can be lowered and lifted. On four-wheel drive, a spare of another diameter is for short distances only.",
   });
   const l = findingsOf(findings, "load")[0]?.figures;
   items.push({
     id: "load",
     group: "tires",
-    title: !l || l.index === null || l.kg === null ? "Load: check the load index against the axle ratings" : `Load: index ${l.index} = ${Math.round(l.kg)} kg (${Math.round(kgToLb(l.kg))} lb) per tire`,
-    detail: "Two tires must carry at least each axle's rating on the door placard (ISO 4000-1 load index table), with the pressure that goes with it.",
+    title:
+      !l || l.index === null || l.kg === null
+        ? "Load: check the load index against the axle ratings"
+        : `Load: index ${l.index} = ${Math.round(l.kg)} kg (${Math.round(kgToLb(l.kg))} lb) per tire`,
+    detail:
+      "Two tires must carry at least each axle's rating on the door placard (ISO 4000-1 load index table), with the pressure that goes with it.",
   });
   items.push({
     id: "pressure",
@@ -195,7 +207,8 @@ export function buildChecklist(input: { vehicle: Vehicle; clearances: VehicleCle
       l && l.maxPressurePsi !== null
         ? `Pressure: from the tire maker's load/inflation table, never above the sidewall maximum (load range ${l.loadRange}: ${l.maxPressurePsi} psi)`
         : "Pressure: from the tire maker's load/inflation table, never above the sidewall maximum",
-    detail: `A bigger tire usually needs a different pressure from the placard's for the same load. ${l && l.maxPressureKpa !== null ? `${l.maxPressurePsi} psi = ${Math.round(l.maxPressureKpa)} kPa (from memory, TRA practice — the sidewall wins).` : ""}`.trim(),
+    detail:
+      `A bigger tire usually needs a different pressure from the placard's for the same load. ${l && l.maxPressureKpa !== null ? `${l.maxPressurePsi} psi = ${Math.round(l.maxPressureKpa)} kPa (from memory, TRA practice — the sidewall wins).` : ""}`.trim(),
     caution: "Inflate a tire on the vehicle or in a cage, standing clear of the sidewall.",
   });
   return { items, predictions };

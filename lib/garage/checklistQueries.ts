@@ -42,7 +42,12 @@ export interface NoPlannedSetup {
  * The checklist for a source. NotFoundError when the vehicle is not the caller's, or the saved
  * comparison is not theirs or is tied to another vehicle.
  */
-export async function resolveChecklist(db: Knex, userId: string, vehicleId: string, source: ChecklistSource): Promise<ResolvedChecklist | NoPlannedSetup> {
+export async function resolveChecklist(
+  db: Knex,
+  userId: string,
+  vehicleId: string,
+  source: ChecklistSource,
+): Promise<ResolvedChecklist | NoPlannedSetup> {
   const detail = await getVehicleDetail(db, userId, vehicleId);
   let planned = source.planned ?? null;
   let comparison: { id: string; name: string; input: ComparisonInput } | null = null;

@@ -2,7 +2,10 @@ import { describe, expect, it } from "vitest";
 import { parseTireSize } from "@/lib/fitment";
 import { matchesFinderFilter } from "./finderFilter";
 
-const fit = (tire: string, diameterIn: number, widthIn: number) => ({ tire: parseTireSize(tire), wheel: { diameterIn, widthIn, offsetMm: 0 } });
+const fit = (tire: string, diameterIn: number, widthIn: number) => ({
+  tire: parseTireSize(tire),
+  wheel: { diameterIn, widthIn, offsetMm: 0 },
+});
 
 describe("matchesFinderFilter", () => {
   it("finds a tire size by any part of it, in any case", () => {

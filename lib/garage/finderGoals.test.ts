@@ -5,8 +5,15 @@ import { VEHICLE, point } from "./testUtil";
 describe("finder goals → engine constraints", () => {
   it("hands every measured point to the engine, with its state, label, the margin and the steering axis", () => {
     const goals = finderGoalsSchema.parse({
-      targetDiameterMm: "35", minDiameterMm: "33", maxDiameterMm: "35-1/2", wheelDiameters: "17, 18", maxPokeMm: "1 in",
-      usePoints: true, minWidthIn: "8", maxWidthIn: "9-1/2", margin: "1/2 in",
+      targetDiameterMm: "35",
+      minDiameterMm: "33",
+      maxDiameterMm: "35-1/2",
+      wheelDiameters: "17, 18",
+      maxPokeMm: "1 in",
+      usePoints: true,
+      minWidthIn: "8",
+      maxWidthIn: "9-1/2",
+      margin: "1/2 in",
     });
     const lock = { ...point("b", "fore-aft", 19.05), suspensionState: "full-lock" as const };
     const plan = finderPlan(goals, VEHICLE, [point("a", "inboard", 30), lock]);
@@ -30,19 +37,46 @@ describe("finder goals → engine constraints", () => {
   });
 
   it("names each goal field as the finder form labels it", () => {
-    const blank = { targetDiameterMm: "", minDiameterMm: "", maxDiameterMm: "", wheelDiameters: "", maxPokeMm: "", usePoints: false, minWidthIn: "", maxWidthIn: "", margin: "1/2 in" };
-    const messages = (patch: object) => Object.fromEntries((finderGoalsSchema.safeParse({ ...blank, ...patch }).error?.issues ?? []).map((i) => [i.path.join("."), i.message]));
+    const blank = {
+      targetDiameterMm: "",
+      minDiameterMm: "",
+      maxDiameterMm: "",
+      wheelDiameters: "",
+      maxPokeMm: "",
+      usePoints: false,
+      minWidthIn: "",
+      maxWidthIn: "",
+      margin: "1/2 in",
+    };
+    const messages = (patch: object) =>
+      Object.fromEntries(
+        (finderGoalsSchema.safeParse({ ...blank, ...patch }).error?.issues ?? []).map((i) => [i.path.join("."), i.message]),
+      );
     expect(messages({ targetDiameterMm: "huge" }).targetDiameterMm).toMatch(/^Target diameter \(in\): /);
     expect(messages({ minDiameterMm: "x" }).minDiameterMm).toMatch(/^From \(in\): /);
     expect(messages({ minWidthIn: "40" }).minWidthIn).toMatch(/^Rim width from \(in\): /);
     expect(messages({ maxPokeMm: "far" }).maxPokeMm).toMatch(/^Most extra poke \(mm\): /);
-    expect(messages({ wheelDiameters: "17, 99" }).wheelDiameters).toBe("Wheel diameters (in): list diameters between 8 and 30 in, e.g. 17, 18.");
+    expect(messages({ wheelDiameters: "17, 99" }).wheelDiameters).toBe(
+      "Wheel diameters (in): list diameters between 8 and 30 in, e.g. 17, 18.",
+    );
     expect(messages({ margin: "12" }).margin).toBe("Margin: say which unit 12 is in, e.g. 1/2 in or 12 mm.");
-    expect(messages({ minDiameterMm: "35", maxDiameterMm: "33" }).maxDiameterMm).toBe("To (in): must not be below From (in), e.g. 33 to 35-1/2.");
+    expect(messages({ minDiameterMm: "35", maxDiameterMm: "33" }).maxDiameterMm).toBe(
+      "To (in): must not be below From (in), e.g. 33 to 35-1/2.",
+    );
   });
 
   it("refuses reversed ranges", () => {
-    const r = finderGoalsSchema.safeParse({ targetDiameterMm: "", minDiameterMm: "35", maxDiameterMm: "33", wheelDiameters: "", maxPokeMm: "", usePoints: false, minWidthIn: "", maxWidthIn: "", margin: "1/2 in" });
+    const r = finderGoalsSchema.safeParse({
+      targetDiameterMm: "",
+      minDiameterMm: "35",
+      maxDiameterMm: "33",
+      wheelDiameters: "",
+      maxPokeMm: "",
+      usePoints: false,
+      minWidthIn: "",
+      maxWidthIn: "",
+      margin: "1/2 in",
+    });
     expect(r.success).toBe(false);
   });
 });

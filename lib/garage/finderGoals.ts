@@ -55,10 +55,18 @@ export const finderGoalsSchema = z
   })
   .superRefine((g, ctx) => {
     if (g.minDiameterMm !== null && g.maxDiameterMm !== null && g.minDiameterMm > g.maxDiameterMm) {
-      ctx.addIssue({ code: "custom", path: ["maxDiameterMm"], message: `${L.maxDiameterMm}: must not be below ${L.minDiameterMm}, e.g. 33 to 35-1/2.` });
+      ctx.addIssue({
+        code: "custom",
+        path: ["maxDiameterMm"],
+        message: `${L.maxDiameterMm}: must not be below ${L.minDiameterMm}, e.g. 33 to 35-1/2.`,
+      });
     }
     if (g.minWidthIn !== null && g.maxWidthIn !== null && g.minWidthIn > g.maxWidthIn) {
-      ctx.addIssue({ code: "custom", path: ["maxWidthIn"], message: `${L.maxWidthIn}: must not be narrower than ${L.minWidthIn}, e.g. 8 to 10.` });
+      ctx.addIssue({
+        code: "custom",
+        path: ["maxWidthIn"],
+        message: `${L.maxWidthIn}: must not be narrower than ${L.minWidthIn}, e.g. 8 to 10.`,
+      });
     }
   });
 export type FinderGoalsForm = z.input<typeof finderGoalsSchema>;

@@ -10,10 +10,25 @@ import type { Vehicle, VehicleClearance } from "./types";
 describe("finder goals → engine constraints", () => {
   it("on the demo pickup, recommends nothing its own prediction says will rub, and says why the 37s are out", () => {
     // The demo member's pickup (db/seeds/04_demo_garage.ts): LT285/70R17 on 17x8.5 +18, KPI 12°, its five points.
-    const cur: Setup = { tire: "LT285/70R17 121/118Q E", wheelDiameterIn: 17, wheelWidthIn: 8.5, position: { mode: "offset", offsetMm: 18 }, spacerMm: 0 };
+    const cur: Setup = {
+      tire: "LT285/70R17 121/118Q E",
+      wheelDiameterIn: 17,
+      wheelWidthIn: 8.5,
+      position: { mode: "offset", offsetMm: 18 },
+      spacerMm: 0,
+    };
     const pickup: Vehicle = { ...VEHICLE, frontSuspension: "independent", currentSetup: cur, stockSetup: cur, kingpinInclinationDeg: 12 };
-    const at = (id: string, label: string, direction: VehicleClearance["direction"], distanceMm: number, suspensionState: VehicleClearance["suspensionState"]): VehicleClearance => ({
-      ...point(id, direction, distanceMm), label, suspensionState, measuredSetup: cur,
+    const at = (
+      id: string,
+      label: string,
+      direction: VehicleClearance["direction"],
+      distanceMm: number,
+      suspensionState: VehicleClearance["suspensionState"],
+    ): VehicleClearance => ({
+      ...point(id, direction, distanceMm),
+      label,
+      suspensionState,
+      measuredSetup: cur,
     });
     const points = [
       at("1", "Frame rail, full left lock", "inboard", 31.75, "full-lock"),
@@ -23,14 +38,28 @@ describe("finder goals → engine constraints", () => {
       at("5", "Bumper corner, full right lock", "fore-aft", 38.1, "full-lock"),
     ];
     // The finder page's default goals.
-    const goals = finderGoalsSchema.parse({ targetDiameterMm: "", minDiameterMm: "", maxDiameterMm: "", wheelDiameters: "17", maxPokeMm: "1 in", usePoints: true, minWidthIn: "", maxWidthIn: "", margin: "1/2 in" });
+    const goals = finderGoalsSchema.parse({
+      targetDiameterMm: "",
+      minDiameterMm: "",
+      maxDiameterMm: "",
+      wheelDiameters: "17",
+      maxPokeMm: "1 in",
+      usePoints: true,
+      minWidthIn: "",
+      maxWidthIn: "",
+      margin: "1/2 in",
+    });
     const plan = finderPlan(goals, pickup, points);
     const replies: FinderReply[] = [];
     runFinderJob({ id: 1, constraints: plan.constraints, wheelWidthsIn: plan.wheelWidthsIn, limit: 200 }, (r) => replies.push(r));
     const done = replies.at(-1)!;
     if (done.type !== "done") throw new Error(`finder failed: ${JSON.stringify(done)}`);
     const setupOf = (m: { tire: { text: string }; wheel: { widthIn: number; offsetMm: number } }): Setup => ({
-      tire: m.tire.text, wheelDiameterIn: 17, wheelWidthIn: m.wheel.widthIn, position: { mode: "offset", offsetMm: m.wheel.offsetMm }, spacerMm: 0,
+      tire: m.tire.text,
+      wheelDiameterIn: 17,
+      wheelWidthIn: m.wheel.widthIn,
+      position: { mode: "offset", offsetMm: m.wheel.offsetMm },
+      spacerMm: 0,
     });
     expect(done.result.results.length).toBeGreaterThan(0);
     for (const m of done.result.results) {
@@ -50,7 +79,13 @@ describe("finder goals → engine constraints", () => {
     //   Liner (upward, full stuff): 50.8 − (469.9 − 415.4) = −3.7 mm.
     //   Bumper corner (fore/aft, full lock): outer corner √(415.4² + 230.796²) = 475.209 →
     //     √(469.9² + 250.506²) = 532.503: 38.1 − 57.293 = −19.193 mm.
-    const old2: Setup = { tire: "37x12.50R17LT", wheelDiameterIn: 17, wheelWidthIn: 9.5, position: { mode: "offset", offsetMm: 12 }, spacerMm: 0 };
+    const old2: Setup = {
+      tire: "37x12.50R17LT",
+      wheelDiameterIn: 17,
+      wheelWidthIn: 9.5,
+      position: { mode: "offset", offsetMm: 12 },
+      spacerMm: 0,
+    };
     const pred = predictPoints(points, old2, 12.7, pickup);
     expect(pred.map((p) => p.status)).toEqual(["contact", "tight", "contact", "contact", "contact"]);
     [-23.29, 7.846, -1.749, -3.7, -19.193].forEach((mm, i) => expect(pred[i]!.predictedMm).toBeCloseTo(mm, 2));
@@ -63,12 +98,17 @@ describe("finder goals → engine constraints", () => {
     expect(x.reason.kind === "clearance" && x.reason.predictedMm).toBeCloseTo(-22.25, 2);
     expect(x.reason.shortfallMm).toBeCloseTo(34.95, 2);
     expect(x.limitsFailed).toBe(4);
-    expect(exclusionText(x)).toBe("Excluded: touches frame rail, full left lock (measured at full lock) — needs 35 mm (1-3/8 in) more; 3 other limits fail too.");
+    expect(exclusionText(x)).toBe(
+      "Excluded: touches frame rail, full left lock (measured at full lock) — needs 35 mm (1-3/8 in) more; 3 other limits fail too.",
+    );
   });
 
   it("the worker job posts progress, then a result within the constraints", () => {
     const replies: FinderReply[] = [];
-    runFinderJob({ id: 7, constraints: { boltPattern: "6x5.5", minDiameterMm: 850, maxDiameterMm: 900, maxInnerSwingMm: 175 }, limit: 10 }, (r) => replies.push(r));
+    runFinderJob(
+      { id: 7, constraints: { boltPattern: "6x5.5", minDiameterMm: 850, maxDiameterMm: 900, maxInnerSwingMm: 175 }, limit: 10 },
+      (r) => replies.push(r),
+    );
     const done = replies.at(-1)!;
     expect(replies.filter((r) => r.type === "progress").length).toBeGreaterThan(10);
     expect(done.type).toBe("done");

@@ -27,5 +27,7 @@ export function setupLine(s: Setup): string {
 /** A margin as form text: the inch fraction when it is one (12.7 → "1/2 in"), else mm ("15 mm"). */
 export function marginText(mm: number): string {
   const sixteenths = (mm / MM_PER_IN) * 16;
-  return Math.abs(sixteenths - Math.round(sixteenths)) < 1e-6 ? formatLength(mm, { unit: "in", fraction: 16 }) : `${Math.round(mm * 100) / 100} mm`;
+  return Math.abs(sixteenths - Math.round(sixteenths)) < 1e-6
+    ? formatLength(mm, { unit: "in", fraction: 16 })
+    : `${Math.round(mm * 100) / 100} mm`;
 }

@@ -8,7 +8,11 @@ export const CLEARANCE_DIRECTION_LABEL = {
   "fore-aft": "Fore/aft at full lock (bumper, body mount)",
 } as const;
 
-export const SUSPENSION_STATE_LABEL = { "ride-height": "Ride height", "full-stuff": "Full stuff (compressed)", "full-lock": "Full lock" } as const;
+export const SUSPENSION_STATE_LABEL = {
+  "ride-height": "Ride height",
+  "full-stuff": "Full stuff (compressed)",
+  "full-lock": "Full lock",
+} as const;
 
 export const CLEARANCE_STATUS_LABEL: Record<ClearanceStatus, string> = { clear: "Clear", tight: "Tight", contact: "Contact" };
 

@@ -9,6 +9,8 @@ describe("links in the workspace's query format", () => {
     expect(vehicleWorkspaceUrl(CUR, planned, { kingpinInclinationDeg: null, axleRatio: 3.73, transmissionRatio: 1 })).toBe(
       "/workspace?ct=265/70R17&cd=17&cw=8&co=25&pt=37x12.50R17LT&pd=17&pw=9&po=-12",
     );
-    expect(vehicleWorkspaceUrl(CUR, planned, { kingpinInclinationDeg: 8, axleRatio: 4.1, transmissionRatio: 0.7 })).toMatch(/&kpi=8&axle=4\.1&top=0\.7$/);
+    expect(vehicleWorkspaceUrl(CUR, planned, { kingpinInclinationDeg: 8, axleRatio: 4.1, transmissionRatio: 0.7 })).toMatch(
+      /&kpi=8&axle=4\.1&top=0\.7$/,
+    );
   });
 });

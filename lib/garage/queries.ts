@@ -100,7 +100,10 @@ export async function workspaceVehicles(db: Knex, userId: string): Promise<Works
   const vehicles = await listVehicles(db, userId);
   if (vehicles.length === 0) return [];
   const points = await db<VehicleClearanceRow>("vehicle_clearances")
-    .whereIn("vehicle_id", vehicles.map((v) => v.id))
+    .whereIn(
+      "vehicle_id",
+      vehicles.map((v) => v.id),
+    )
     .orderBy("created_at", "asc");
   return vehicles.map((v) => ({
     id: v.id,
@@ -112,7 +115,14 @@ export async function workspaceVehicles(db: Knex, userId: string): Promise<Works
     clearanceMarginMm: v.clearanceMarginMm,
     clearances: points
       .filter((p) => p.vehicle_id === v.id)
-      .map((p) => ({ id: p.id, label: p.label, direction: p.direction, distanceMm: p.distance_mm, suspensionState: p.suspension_state, measuredSetup: p.measured_setup as Setup })),
+      .map((p) => ({
+        id: p.id,
+        label: p.label,
+        direction: p.direction,
+        distanceMm: p.distance_mm,
+        suspensionState: p.suspension_state,
+        measuredSetup: p.measured_setup as Setup,
+      })),
   }));
 }
 
@@ -138,7 +148,9 @@ export async function getVehicleDetail(db: Knex, userId: string, id: string): Pr
 }
 
 export async function createVehicle(db: Knex, userId: string, v: GarageVehicleValues): Promise<Vehicle> {
-  const [row] = await db<VehicleRow>("vehicles").insert({ user_id: userId, ...columns(v) } as never).returning("*");
+  const [row] = await db<VehicleRow>("vehicles")
+    .insert({ user_id: userId, ...columns(v) } as never)
+    .returning("*");
   return vehicleDto(row as VehicleRow);
 }
 
@@ -242,12 +254,19 @@ export async function addPhoto(
 
 /** Of these object keys, the ones a photo row still names (as the photo or its thumbnail). */
 export async function referencedPhotoKeys(db: Knex, keys: string[]): Promise<Set<string>> {
-  const rows = (await db("vehicle_photos").whereIn("object_key", keys).orWhereIn("thumb_key", keys).select("object_key", "thumb_key")) as { object_key: string; thumb_key: string }[];
+  const rows = (await db("vehicle_photos").whereIn("object_key", keys).orWhereIn("thumb_key", keys).select("object_key", "thumb_key")) as {
+    object_key: string;
+    thumb_key: string;
+  }[];
   return new Set(rows.flatMap((r) => [r.object_key, r.thumb_key]));
 }
 
 /** A photo the caller may see: its owner's, or any for an admin. */
-export async function findVisiblePhoto(db: Knex, caller: { userId: string; role: Role }, photoId: string): Promise<VehiclePhotoRow | undefined> {
+export async function findVisiblePhoto(
+  db: Knex,
+  caller: { userId: string; role: Role },
+  photoId: string,
+): Promise<VehiclePhotoRow | undefined> {
   const q = db("vehicle_photos as p").join("vehicles as v", "v.id", "p.vehicle_id").where("p.id", photoId).select("p.*");
   if (caller.role !== "admin") q.andWhere("v.user_id", caller.userId);
   return (await q.first()) as VehiclePhotoRow | undefined;
@@ -290,4 +309,19 @@ export async function saveChecklist(
 }
 
 /** These queries on the app's database handle, for pages and route handlers. */
-export const garageQueries = bindAppDb({ addClearance, addPhoto, clearanceBelongs, clearanceCounts, createVehicle, deleteClearance, deletePhoto, deleteVehicle, findVehicle, findVisiblePhoto, getVehicleDetail, listVehicles, updateVehicle, workspaceVehicles });
+export const garageQueries = bindAppDb({
+  addClearance,
+  addPhoto,
+  clearanceBelongs,
+  clearanceCounts,
+  createVehicle,
+  deleteClearance,
+  deletePhoto,
+  deleteVehicle,
+  findVehicle,
+  findVisiblePhoto,
+  getVehicleDetail,
+  listVehicles,
+  updateVehicle,
+  workspaceVehicles,
+});

@@ -4,7 +4,13 @@ import { CUR } from "./testUtil";
 
 describe("vehicle schema", () => {
   it("normalizes the bolt pattern: 5x4.5 and 5x114.3 are one pattern", () => {
-    const a = garageVehicleSchema.parse({ name: "A", frontSuspension: "independent", boltPattern: "5 on 4.5", stockSetup: CUR, currentSetup: CUR });
+    const a = garageVehicleSchema.parse({
+      name: "A",
+      frontSuspension: "independent",
+      boltPattern: "5 on 4.5",
+      stockSetup: CUR,
+      currentSetup: CUR,
+    });
     expect(a.boltPattern).toBe("5x4.5");
     expect(a.year).toBeNull();
     expect(a.notes).toBe("");
@@ -23,12 +29,21 @@ describe("units in the garage forms: a field reads the unit its label states", (
     expect(garageVehicleSchema.parse({ ...base, liftHeightMm: "2-1/2" }).liftHeightMm).toBeCloseTo(63.5, 9);
     expect(garageVehicleSchema.parse({ ...base, liftHeightMm: "2½" }).liftHeightMm).toBeCloseTo(63.5, 9);
     expect(garageVehicleSchema.parse({ ...base, liftHeightMm: "2.5" }).liftHeightMm).toBeCloseTo(63.5, 9);
-    expect(issue(garageVehicleSchema.safeParse({ ...base, liftHeightMm: "lots" }), "liftHeightMm")).toBe("Lift height (in): not a length in inches, e.g. 2-1/2 or 2.5.");
+    expect(issue(garageVehicleSchema.safeParse({ ...base, liftHeightMm: "lots" }), "liftHeightMm")).toBe(
+      "Lift height (in): not a length in inches, e.g. 2-1/2 or 2.5.",
+    );
   });
 
   it("names each field as the vehicle form labels it", () => {
     const base = { name: "A", frontSuspension: "independent", boltPattern: "6x5.5", stockSetup: CUR, currentSetup: CUR };
-    const r = garageVehicleSchema.safeParse({ ...base, year: "1800", hubBoreMm: "3/4", axleRatio: "x", transmissionRatio: "20", kingpinInclinationDeg: "40" });
+    const r = garageVehicleSchema.safeParse({
+      ...base,
+      year: "1800",
+      hubBoreMm: "3/4",
+      axleRatio: "x",
+      transmissionRatio: "20",
+      kingpinInclinationDeg: "40",
+    });
     expect(issue(r, "year")).toBe("Year: must be between 1900 and 2100, e.g. 2009.");
     expect(issue(r, "hubBoreMm")).toMatch(/^Hub bore \(mm\): “3\/4” is a fraction/);
     expect(issue(r, "axleRatio")).toBe("Axle ratio: enter a number, e.g. 3.73.");
@@ -42,10 +57,16 @@ describe("clearance input", () => {
     const bare = clearanceSchema.safeParse({ label: "x", direction: "upward", distance: "38", suspensionState: "full-stuff" });
     expect(bare.success).toBe(false);
     expect(bare.error!.issues[0]!.message).toMatch(/Say which unit 38 is in/);
-    expect(clearanceSchema.parse({ label: "x", direction: "upward", distance: "1-1/2", unit: "in", suspensionState: "full-stuff" }).distanceMm).toBeCloseTo(38.1, 9);
-    expect(clearanceSchema.parse({ label: "x", direction: "upward", distance: "38 mm", unit: "in", suspensionState: "full-stuff" }).distanceMm).toBe(38);
+    expect(
+      clearanceSchema.parse({ label: "x", direction: "upward", distance: "1-1/2", unit: "in", suspensionState: "full-stuff" }).distanceMm,
+    ).toBeCloseTo(38.1, 9);
+    expect(
+      clearanceSchema.parse({ label: "x", direction: "upward", distance: "38 mm", unit: "in", suspensionState: "full-stuff" }).distanceMm,
+    ).toBe(38);
     // A fraction with mm as the unit is not 1.5 mm.
-    expect(clearanceSchema.safeParse({ label: "x", direction: "upward", distance: "1-1/2", unit: "mm", suspensionState: "full-stuff" }).success).toBe(false);
+    expect(
+      clearanceSchema.safeParse({ label: "x", direction: "upward", distance: "1-1/2", unit: "mm", suspensionState: "full-stuff" }).success,
+    ).toBe(false);
   });
 });
 

@@ -3,7 +3,14 @@
  */
 import { z } from "zod";
 import { VEHICLE_LIMITS } from "@/lib/comparisons/model";
-import { CLEARANCE_DISTANCE_LIMITS_MM, CLEARANCE_MARGIN_LIMITS_MM, DEFAULT_CLEARANCE_MARGIN_MM, MM_PER_IN, parseBoltPattern, parseLength } from "@/lib/fitment";
+import {
+  CLEARANCE_DISTANCE_LIMITS_MM,
+  CLEARANCE_MARGIN_LIMITS_MM,
+  DEFAULT_CLEARANCE_MARGIN_MM,
+  MM_PER_IN,
+  parseBoltPattern,
+  parseLength,
+} from "@/lib/fitment";
 import { FRONT_SUSPENSIONS } from "@/lib/platform/db/types";
 import { CLEARANCE_DIRECTION_LABEL, SUSPENSION_STATE_LABEL } from "@/lib/garage/labels";
 import { boundText } from "@/lib/setup/messages";
@@ -69,7 +76,10 @@ export function marginField(label: string) {
       z
         .number()
         .min(CLEARANCE_MARGIN_LIMITS_MM.min, `${label}: cannot be negative, e.g. ${example}.`)
-        .max(CLEARANCE_MARGIN_LIMITS_MM.max, `${label}: keep it at most ${CLEARANCE_MARGIN_LIMITS_MM.max} mm (${boundText(CLEARANCE_MARGIN_LIMITS_MM.max / MM_PER_IN, "max", 2)} in), e.g. ${example}.`),
+        .max(
+          CLEARANCE_MARGIN_LIMITS_MM.max,
+          `${label}: keep it at most ${CLEARANCE_MARGIN_LIMITS_MM.max} mm (${boundText(CLEARANCE_MARGIN_LIMITS_MM.max / MM_PER_IN, "max", 2)} in), e.g. ${example}.`,
+        ),
     );
 }
 
@@ -144,12 +154,16 @@ export function distanceForUnit(text: string, from: "in" | "mm", to: "in" | "mm"
 export const clearanceSchema = z
   .object({
     label: text("a label", 120).min(1, 'Name the point (e.g. "frame rail, full left lock").'),
-    direction: z.enum(["inboard", "outboard", "upward", "fore-aft"], { error: "Choose a direction: inboard, outboard, upward or fore/aft at full lock." }),
+    direction: z.enum(["inboard", "outboard", "upward", "fore-aft"], {
+      error: "Choose a direction: inboard, outboard, upward or fore/aft at full lock.",
+    }),
     distance: z
       .union([z.string(), z.number()], { error: "Enter the distance with its unit (e.g. 1-1/2 in or 38 mm)." })
       .transform((v) => String(v).trim()),
     unit: z.enum(["in", "mm"], { error: 'The unit must be "in" or "mm".' }).optional(),
-    suspensionState: z.enum(["ride-height", "full-stuff", "full-lock"], { error: "Choose the suspension state: ride height, full stuff or full lock." }),
+    suspensionState: z.enum(["ride-height", "full-stuff", "full-lock"], {
+      error: "Choose the suspension state: ride height, full stuff or full lock.",
+    }),
     /** The setup fitted when measured; the vehicle's current setup when left out. */
     measuredSetup: setupSchema.optional(),
   })
@@ -160,7 +174,11 @@ export const clearanceSchema = z
     }
     const hasUnit = UNIT_AT_END.test(c.distance);
     if (!hasUnit && c.unit === undefined) {
-      ctx.addIssue({ code: "custom", path: ["distance"], message: `Say which unit ${c.distance} is in: write "${c.distance} in" or "${c.distance} mm".` });
+      ctx.addIssue({
+        code: "custom",
+        path: ["distance"],
+        message: `Say which unit ${c.distance} is in: write "${c.distance} in" or "${c.distance} mm".`,
+      });
       return z.NEVER;
     }
     let mm: number;
@@ -171,24 +189,44 @@ export const clearanceSchema = z
       return z.NEVER;
     }
     if (mm < CLEARANCE_DISTANCE_LIMITS_MM.min || mm > CLEARANCE_DISTANCE_LIMITS_MM.max) {
-      ctx.addIssue({ code: "custom", path: ["distance"], message: "The distance must be between 0 and 1000 mm (0 when it already touches)." });
+      ctx.addIssue({
+        code: "custom",
+        path: ["distance"],
+        message: "The distance must be between 0 and 1000 mm (0 when it already touches).",
+      });
       return z.NEVER;
     }
     const shown = hasUnit ? c.distance : `${c.distance} ${c.unit}`;
-    return { label: c.label, direction: c.direction, suspensionState: c.suspensionState, distanceMm: mm, distanceText: shown, measuredSetup: c.measuredSetup };
+    return {
+      label: c.label,
+      direction: c.direction,
+      suspensionState: c.suspensionState,
+      distanceMm: mm,
+      distanceText: shown,
+      measuredSetup: c.measuredSetup,
+    };
   });
 export type ClearanceFormValues = z.input<typeof clearanceSchema>;
 export type ClearanceValues = z.output<typeof clearanceSchema>;
 
 const itemId = z.string().regex(/^[a-z0-9:-]{1,80}$/, "Not a checklist item.");
 /** A margin in mm as the checklist link carries it (`m=`); anything else is ignored. */
-export const marginMmParam = z.coerce.number().min(CLEARANCE_MARGIN_LIMITS_MM.min).max(CLEARANCE_MARGIN_LIMITS_MM.max).optional().catch(undefined);
+export const marginMmParam = z.coerce
+  .number()
+  .min(CLEARANCE_MARGIN_LIMITS_MM.min)
+  .max(CLEARANCE_MARGIN_LIMITS_MM.max)
+  .optional()
+  .catch(undefined);
 
 export const checklistUpdateSchema = z
   .object({
     planned: setupSchema.optional(),
     comparisonId: z.uuid({ error: "That is not a comparison id." }).optional(),
-    marginMm: z.number({ error: "Give the margin in mm (e.g. 12.7)." }).min(CLEARANCE_MARGIN_LIMITS_MM.min).max(CLEARANCE_MARGIN_LIMITS_MM.max).optional(),
+    marginMm: z
+      .number({ error: "Give the margin in mm (e.g. 12.7)." })
+      .min(CLEARANCE_MARGIN_LIMITS_MM.min)
+      .max(CLEARANCE_MARGIN_LIMITS_MM.max)
+      .optional(),
     ticked: z.array(itemId).max(200, "Too many items."),
   })
   .refine((v) => v.planned !== undefined || v.comparisonId !== undefined, {

@@ -4,7 +4,13 @@ import { checkSetup } from "./check";
 import { SETUP_LIMITS, type Setup } from "./model";
 import { setupSchema } from "./schema";
 
-const PLANNED: Setup = { tire: "37x12.50R17LT 124Q LRD", wheelDiameterIn: 17, wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 }, spacerMm: 0 };
+const PLANNED: Setup = {
+  tire: "37x12.50R17LT 124Q LRD",
+  wheelDiameterIn: 17,
+  wheelWidthIn: 9,
+  position: { mode: "offset", offsetMm: -12 },
+  spacerMm: 0,
+};
 
 /** The messages of a setup given as numbers (a stored setup, the comparison API), by field path. */
 const issues = (v: unknown) => {
@@ -19,18 +25,26 @@ describe("checkSetup (moved from the comparison schema's tests)", () => {
   });
 
   it("needs the wheel diameter of the tire's rim", () => {
-    expect(issues({ ...PLANNED, wheelDiameterIn: 18 }).wheelDiameterIn).toBe("Wheel diameter (in): a 17 in tire needs a 17 in wheel; this wheel is 18 in.");
+    expect(issues({ ...PLANNED, wheelDiameterIn: 18 }).wheelDiameterIn).toBe(
+      "Wheel diameter (in): a 17 in tire needs a 17 in wheel; this wheel is 18 in.",
+    );
   });
 
   it("bounds each number with a message and an example", () => {
-    expect(issues({ ...PLANNED, wheelWidthIn: 2 })).toEqual({ wheelWidthIn: "Wheel width (in): must be between 3 and 20 in, e.g. 9 or 8-1/2." });
+    expect(issues({ ...PLANNED, wheelWidthIn: 2 })).toEqual({
+      wheelWidthIn: "Wheel width (in): must be between 3 and 20 in, e.g. 9 or 8-1/2.",
+    });
     expect(issues({ ...PLANNED, spacerMm: -5 }).spacerMm).toMatch(/between 0 and 100 mm/);
-    expect(issues({ ...PLANNED, position: { mode: "backspacing", backspacingIn: 4, reference: "rim", flangeIn: 0.5 } })["position.reference"]).toMatch(/flange/);
+    expect(
+      issues({ ...PLANNED, position: { mode: "backspacing", backspacingIn: 4, reference: "rim", flangeIn: 0.5 } })["position.reference"],
+    ).toMatch(/flange/);
   });
 
   it("rejects an offset that puts the mounting face outside the wheel (engine limit W/2 + 76.2 mm)", () => {
     // 9 in wheel: limit 114.3 + 76.2 = 190.5 mm (1 in = 25.4 mm, NIST SP 811; the 3 in margin is common practice, no source).
-    expect(issues({ ...PLANNED, position: { mode: "offset", offsetMm: 195 } })["position.offsetMm"]).toMatch(/outside a 9 in wide wheel \(at most ±190\.5 mm on this width\)/);
+    expect(issues({ ...PLANNED, position: { mode: "offset", offsetMm: 195 } })["position.offsetMm"]).toMatch(
+      /outside a 9 in wide wheel \(at most ±190\.5 mm on this width\)/,
+    );
     expect(issues({ ...PLANNED, position: { mode: "offset", offsetMm: 190 } })).toEqual({});
   });
 });
@@ -42,11 +56,26 @@ describe("one set of messages", () => {
       return r.success ? {} : Object.fromEntries(r.error.issues.map((i) => [i.path.join("."), i.message]));
     };
     const cases: [unknown, unknown][] = [
-      [{ ...PLANNED, wheelDiameterIn: 18 }, { ...PLANNED, wheelDiameterIn: "18" }],
-      [{ ...PLANNED, wheelWidthIn: 25 }, { ...PLANNED, wheelWidthIn: "25" }],
-      [{ ...PLANNED, position: { mode: "offset", offsetMm: 195 } }, { ...PLANNED, position: { mode: "offset", offsetMm: "195" } }],
-      [{ ...PLANNED, position: { mode: "backspacing", backspacingIn: 12.5, reference: "bead-seat", flangeIn: 0.5 } }, { ...PLANNED, position: { mode: "backspacing", backspacingIn: "12-1/2", reference: "bead-seat", flangeIn: "1/2" } }],
-      [{ ...PLANNED, tire: "" }, { ...PLANNED, tire: "  " }],
+      [
+        { ...PLANNED, wheelDiameterIn: 18 },
+        { ...PLANNED, wheelDiameterIn: "18" },
+      ],
+      [
+        { ...PLANNED, wheelWidthIn: 25 },
+        { ...PLANNED, wheelWidthIn: "25" },
+      ],
+      [
+        { ...PLANNED, position: { mode: "offset", offsetMm: 195 } },
+        { ...PLANNED, position: { mode: "offset", offsetMm: "195" } },
+      ],
+      [
+        { ...PLANNED, position: { mode: "backspacing", backspacingIn: 12.5, reference: "bead-seat", flangeIn: 0.5 } },
+        { ...PLANNED, position: { mode: "backspacing", backspacingIn: "12-1/2", reference: "bead-seat", flangeIn: "1/2" } },
+      ],
+      [
+        { ...PLANNED, tire: "" },
+        { ...PLANNED, tire: "  " },
+      ],
     ];
     for (const [numbers, typed] of cases) {
       expect(issues(numbers)).not.toEqual({});
@@ -57,9 +86,11 @@ describe("one set of messages", () => {
   it("a backspacing outside the wheel names the field, the reference and an example", () => {
     // 9 in wheel, 12.5 in to the bead seat: offset (12.5 − 4.5) × 25.4 = 203.2 mm, beyond the
     // 114.3 + 76.2 = 190.5 mm the engine allows (W/2 plus a 3 in margin; common practice, no source).
-    expect(issues({ ...PLANNED, position: { mode: "backspacing", backspacingIn: 12.5, reference: "bead-seat", flangeIn: 0.5 } })["position.backspacingIn"]).toBe(
-      "Backspacing (in): 12.5 in to the bead seat puts the mounting face outside a 9 in wide wheel, e.g. 4-3/4, 4¾ or 4.75.",
-    );
+    expect(
+      issues({ ...PLANNED, position: { mode: "backspacing", backspacingIn: 12.5, reference: "bead-seat", flangeIn: 0.5 } })[
+        "position.backspacingIn"
+      ],
+    ).toBe("Backspacing (in): 12.5 in to the bead seat puts the mounting face outside a 9 in wide wheel, e.g. 4-3/4, 4¾ or 4.75.");
   });
 
   it("numbers only where a setup is stored: text is refused there with the field's own words", () => {
@@ -68,7 +99,10 @@ describe("one set of messages", () => {
   });
 
   it("says what a setup is when it is none, with the path it was given at", () => {
-    expect(checkSetup("big", ["currentSetup"])).toEqual({ ok: false, issues: [{ path: ["currentSetup"], message: "Give a setup: tire, wheel diameter and width, position and spacer." }] });
+    expect(checkSetup("big", ["currentSetup"])).toEqual({
+      ok: false,
+      issues: [{ path: ["currentSetup"], message: "Give a setup: tire, wheel diameter and width, position and spacer." }],
+    });
   });
 });
 

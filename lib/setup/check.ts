@@ -8,7 +8,15 @@
 import { FitmentInputError, parseTireSize } from "@/lib/fitment";
 import { SETUP_FIELD_EXAMPLE as EX, SETUP_FIELD_LABEL as L, type SetupFieldPath } from "./fields";
 import { SETUP_MESSAGE, lengthMessages } from "./messages";
-import { BACKSPACING_REFERENCES, type BackspacingReference, type Position, SETUP_LIMITS, type Setup, TIRE_TEXT_MAX, positionOffsetMm } from "./model";
+import {
+  BACKSPACING_REFERENCES,
+  type BackspacingReference,
+  type Position,
+  SETUP_LIMITS,
+  type Setup,
+  TIRE_TEXT_MAX,
+  positionOffsetMm,
+} from "./model";
 import { readLengthValue } from "./read";
 
 /** One problem of an input: the path of the field and a message naming it, with an example. */
@@ -60,7 +68,13 @@ export function checkSetup(v: unknown, path: Issue["path"] = [], opts: CheckSetu
     const r = readLengthValue(raw, unit, opts.text === true);
     if ("value" in r && r.value >= bounds.min && r.value <= bounds.max) return r.value === 0 ? 0 : r.value;
     const message =
-      "value" in r ? m.bounds(String(bounds.min), String(bounds.max)) : r.problem === "fraction" ? m.fraction(String(raw)) : r.problem === "unreadable" ? m.unreadable : m.empty;
+      "value" in r
+        ? m.bounds(String(bounds.min), String(bounds.max))
+        : r.problem === "fraction"
+          ? m.fraction(String(raw))
+          : r.problem === "unreadable"
+            ? m.unreadable
+            : m.empty;
     issues.push({ path: at(field), message });
     return NaN;
   };
@@ -74,7 +88,8 @@ export function checkSetup(v: unknown, path: Issue["path"] = [], opts: CheckSetu
 
   let position: Position | null = null;
   const p = v.position;
-  if (!isObject(p) || (p.mode !== "offset" && p.mode !== "backspacing")) issues.push({ path: at("position"), message: SETUP_MESSAGE.positionMode });
+  if (!isObject(p) || (p.mode !== "offset" && p.mode !== "backspacing"))
+    issues.push({ path: at("position"), message: SETUP_MESSAGE.positionMode });
   else if (p.mode === "offset") {
     const offsetMm = length("position.offsetMm", p.offsetMm);
     if (!Number.isNaN(offsetMm)) position = { mode: "offset", offsetMm };
@@ -83,7 +98,8 @@ export function checkSetup(v: unknown, path: Issue["path"] = [], opts: CheckSetu
     const reference = (BACKSPACING_REFERENCES as readonly unknown[]).includes(p.reference) ? (p.reference as BackspacingReference) : null;
     if (reference === null) issues.push({ path: at("position.reference"), message: SETUP_MESSAGE.reference });
     const flangeIn = length("position.flangeIn", p.flangeIn);
-    if (!Number.isNaN(backspacingIn) && !Number.isNaN(flangeIn) && reference !== null) position = { mode: "backspacing", backspacingIn, reference, flangeIn };
+    if (!Number.isNaN(backspacingIn) && !Number.isNaN(flangeIn) && reference !== null)
+      position = { mode: "backspacing", backspacingIn, reference, flangeIn };
   }
   // Empty on a form: no spacer.
   const noSpacer = v.spacerMm === undefined || v.spacerMm === null || (typeof v.spacerMm === "string" && v.spacerMm.trim() === "");
@@ -95,9 +111,13 @@ export function checkSetup(v: unknown, path: Issue["path"] = [], opts: CheckSetu
     try {
       rim = parseTireSize(tire).rimDiameterIn;
     } catch (e) {
-      issues.push({ path: at("tire"), message: SETUP_MESSAGE.tireUnreadable(e instanceof Error ? e.message : `not a tire size, e.g. ${EX.tire}.`) });
+      issues.push({
+        path: at("tire"),
+        message: SETUP_MESSAGE.tireUnreadable(e instanceof Error ? e.message : `not a tire size, e.g. ${EX.tire}.`),
+      });
     }
-    if (rim !== null && !Number.isNaN(wheelDiameterIn) && wheelDiameterIn !== rim) issues.push({ path: at("wheelDiameterIn"), message: SETUP_MESSAGE.rimMismatch(rim, wheelDiameterIn) });
+    if (rim !== null && !Number.isNaN(wheelDiameterIn) && wheelDiameterIn !== rim)
+      issues.push({ path: at("wheelDiameterIn"), message: SETUP_MESSAGE.rimMismatch(rim, wheelDiameterIn) });
   }
   if (position !== null && !Number.isNaN(wheelWidthIn)) {
     try {
@@ -107,7 +127,10 @@ export function checkSetup(v: unknown, path: Issue["path"] = [], opts: CheckSetu
       issues.push(
         position.mode === "offset"
           ? { path: at("position.offsetMm"), message: SETUP_MESSAGE.offsetOutside(position.offsetMm, wheelWidthIn) }
-          : { path: at("position.backspacingIn"), message: SETUP_MESSAGE.backspacingOutside(position.backspacingIn, position.reference, wheelWidthIn) },
+          : {
+              path: at("position.backspacingIn"),
+              message: SETUP_MESSAGE.backspacingOutside(position.backspacingIn, position.reference, wheelWidthIn),
+            },
       );
     }
   }

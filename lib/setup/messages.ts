@@ -33,8 +33,12 @@ export function boundText(v: number, side: "min" | "max", decimals: number): str
 export function lengthMessages(label: string, unit: "in" | "mm", example: string) {
   return {
     empty: `${label}: enter ${unit === "in" ? "inches" : "mm"}, e.g. ${example}.`,
-    unreadable: unit === "in" ? `${label}: not a length in inches, e.g. ${example}.` : `${label}: not a length in mm, e.g. ${example}; inches need their unit (1 in).`,
-    fraction: (typed: string) => `${label}: “${typed.trim()}” is a fraction, which is read only in inches — write “${typed.trim()} in”, or mm as a decimal, e.g. ${example}.`,
+    unreadable:
+      unit === "in"
+        ? `${label}: not a length in inches, e.g. ${example}.`
+        : `${label}: not a length in mm, e.g. ${example}; inches need their unit (1 in).`,
+    fraction: (typed: string) =>
+      `${label}: “${typed.trim()}” is a fraction, which is read only in inches — write “${typed.trim()} in”, or mm as a decimal, e.g. ${example}.`,
     bounds: (min: string, max: string) => `${label}: must be between ${min} and ${max} ${unit}, e.g. ${example}.`,
   };
 }
@@ -48,7 +52,8 @@ export const SETUP_MESSAGE = {
   tireTooLong: `${L.tire}: too long for a tire size, e.g. ${EX.tire}.`,
   /** The engine's own message, which shows the accepted forms. */
   tireUnreadable: (engineMessage: string) => `${L.tire}: ${engineMessage}`,
-  rimMismatch: (rimIn: number, wheelIn: number) => `${L.wheelDiameterIn}: a ${rimIn} in tire needs a ${rimIn} in wheel; this wheel is ${wheelIn} in.`,
+  rimMismatch: (rimIn: number, wheelIn: number) =>
+    `${L.wheelDiameterIn}: a ${rimIn} in tire needs a ${rimIn} in wheel; this wheel is ${wheelIn} in.`,
   /** The offset a person may give a wheel of this width: W/2 + the engine's margin either way. */
   offsetOutside: (offsetMm: number, widthIn: number) =>
     `${L["position.offsetMm"]}: ${offsetMm} mm puts the mounting face outside a ${widthIn} in wide wheel (at most ±${boundText((widthIn * MM_PER_IN) / 2 + OFFSET_MARGIN_MM, "max", 1)} mm on this width), e.g. ${EX["position.offsetMm"]}.`,

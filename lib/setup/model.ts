@@ -26,8 +26,7 @@ export const BACKSPACING_REFERENCES = ["flange", "bead-seat"] as const satisfies
 
 /** Where the wheel sits: its offset, or its backspacing with what it was measured to. */
 export type Position =
-  | { mode: "offset"; offsetMm: number }
-  | { mode: "backspacing"; backspacingIn: number; reference: BackspacingReference; flangeIn: number };
+  { mode: "offset"; offsetMm: number } | { mode: "backspacing"; backspacingIn: number; reference: BackspacingReference; flangeIn: number };
 
 export interface Setup {
   /** The size as written on the sidewall, e.g. "265/70R17 113T". */
@@ -87,7 +86,12 @@ export const TIRE_TEXT_MAX = 80;
  */
 export function positionOffsetMm(position: Position, wheelWidthIn: number): number {
   if (position.mode === "offset") return checkOffsetMm(position.offsetMm, wheelWidthIn, "offsetMm");
-  return offsetFromBackspacing({ widthIn: wheelWidthIn, backspacingIn: position.backspacingIn, measuredFrom: position.reference, flangeIn: position.flangeIn });
+  return offsetFromBackspacing({
+    widthIn: wheelWidthIn,
+    backspacingIn: position.backspacingIn,
+    measuredFrom: position.reference,
+    flangeIn: position.flangeIn,
+  });
 }
 
 /**

@@ -82,7 +82,8 @@ type Bounds = { min: number; max: number };
  */
 export function lengthField(label: string, unit: "in" | "mm", bounds: Bounds, example: string, out: "in" | "mm" = unit) {
   const m = lengthMessages(label, unit, example);
-  const shown = (v: number, side: "min" | "max") => (unit === out ? String(v) : boundText(unit === "in" ? v / MM_PER_IN : v * MM_PER_IN, side, 2));
+  const shown = (v: number, side: "min" | "max") =>
+    unit === out ? String(v) : boundText(unit === "in" ? v / MM_PER_IN : v * MM_PER_IN, side, 2);
   return z
     .union([z.number(), z.string()], { error: m.empty })
     .transform((v, ctx) => {
@@ -137,7 +138,10 @@ export function numberField(label: string, bounds: Bounds, example: string, opts
         .number()
         .refine(Number.isFinite, unreadable)
         .refine((x) => !opts.integer || Number.isInteger(x), `${label}: enter a whole number, e.g. ${example}.`)
-        .refine((x) => x >= bounds.min && x <= bounds.max, `${label}: must be between ${bounds.min} and ${bounds.max}${opts.unit ?? ""}, e.g. ${example}.`),
+        .refine(
+          (x) => x >= bounds.min && x <= bounds.max,
+          `${label}: must be between ${bounds.min} and ${bounds.max}${opts.unit ?? ""}, e.g. ${example}.`,
+        ),
     );
 }
 

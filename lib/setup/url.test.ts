@@ -2,7 +2,13 @@ import { describe, expect, it } from "vitest";
 import type { Setup } from "./model";
 import { decodeSetupParams, type LinkProblem, problemText, setupFromQuery, setupQuery } from "./url";
 
-const PLAN: Setup = { tire: "35x12.50R17LT", wheelDiameterIn: 17, wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 }, spacerMm: 0 };
+const PLAN: Setup = {
+  tire: "35x12.50R17LT",
+  wheelDiameterIn: 17,
+  wheelWidthIn: 9,
+  position: { mode: "offset", offsetMm: -12 },
+  spacerMm: 0,
+};
 const BS: Setup = { ...PLAN, position: { mode: "backspacing", backspacingIn: 4.5, reference: "bead-seat", flangeIn: 0.5 }, spacerMm: 12 };
 
 describe("a setup in a link (moved from the garage's tests)", () => {
@@ -28,13 +34,20 @@ describe("lengths in a link read as a form reads them", () => {
     const problems: LinkProblem[] = [];
     const s = decodeSetupParams("p", new URLSearchParams("ps=1-1/2"), PLAN, "Planned setup", problems);
     expect(s.spacerMm).toBe(0);
-    expect(problems.map(problemText)).toEqual(["Planned setup · Spacer (mm, optional): “1-1/2” is a fraction, which is read only in inches (write 1-1/2 in); using no spacer."]);
+    expect(problems.map(problemText)).toEqual([
+      "Planned setup · Spacer (mm, optional): “1-1/2” is a fraction, which is read only in inches (write 1-1/2 in); using no spacer.",
+    ]);
   });
 
   it("reads the stored spelling of the bead-seat reference (bead-seat) as well as the link's (bead); anything else is no setup to the strict reader", () => {
     expect(setupFromQuery("p", "pt=35x12.50R17LT&pd=17&pw=9&pb=4.5&pr=bead-seat&ps=12")).toEqual(BS);
     expect(setupFromQuery("p", "pt=35x12.50R17LT&pd=17&pw=9&pb=4.5&pr=rim&ps=12")).toBeNull();
     // No reference: the flange edge, as the workspace reads it.
-    expect(setupFromQuery("p", "pt=35x12.50R17LT&pd=17&pw=9&pb=4.5")?.position).toEqual({ mode: "backspacing", backspacingIn: 4.5, reference: "flange", flangeIn: 0.5 });
+    expect(setupFromQuery("p", "pt=35x12.50R17LT&pd=17&pw=9&pb=4.5")?.position).toEqual({
+      mode: "backspacing",
+      backspacingIn: 4.5,
+      reference: "flange",
+      flangeIn: 0.5,
+    });
   });
 });

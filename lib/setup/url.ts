@@ -19,7 +19,15 @@
 import { DEFAULT_FLANGE_IN, parseTireSize } from "@/lib/fitment";
 import { checkSetup } from "./check";
 import { BACKSPACING_REFERENCE_LABEL, SETUP_FIELD_LABEL } from "./fields";
-import { type BackspacingReference, type Position, SETUP_LIMITS, type Setup, type SetupForm, TIRE_TEXT_MAX, positionOffsetMm } from "./model";
+import {
+  type BackspacingReference,
+  type Position,
+  SETUP_LIMITS,
+  type Setup,
+  type SetupForm,
+  TIRE_TEXT_MAX,
+  positionOffsetMm,
+} from "./model";
 import { readLengthValue } from "./read";
 
 /** Which setup a parameter belongs to. */
@@ -86,7 +94,11 @@ export function joinQuery(pairs: readonly (readonly [string, string])[]): string
 /** One setup's parameters, in order, appended to `out`. */
 export function setupParams(prefix: SetupPrefix, s: Setup, out: [string, string][]): void {
   const k = (key: ParamKey) => `${prefix}${SETUP_PARAM[key]}`;
-  out.push([k("tire"), s.tire.trim()], [k("wheelDiameterIn"), urlNumber(s.wheelDiameterIn)], [k("wheelWidthIn"), urlNumber(s.wheelWidthIn)]);
+  out.push(
+    [k("tire"), s.tire.trim()],
+    [k("wheelDiameterIn"), urlNumber(s.wheelDiameterIn)],
+    [k("wheelWidthIn"), urlNumber(s.wheelWidthIn)],
+  );
   if (s.position.mode === "offset") {
     out.push([k("offsetMm"), urlNumber(s.position.offsetMm)]);
   } else {
@@ -126,9 +138,24 @@ export function setupFromQuery(prefix: SetupPrefix, q: QueryLike): Setup | null 
   if (reference === null) return null;
   const position: SetupForm["position"] =
     get("backspacingIn") !== undefined
-      ? { mode: "backspacing", backspacingIn: get("backspacingIn"), reference: reference === "default" ? "flange" : reference, flangeIn: get("flangeIn") ?? String(DEFAULT_FLANGE_IN) }
+      ? {
+          mode: "backspacing",
+          backspacingIn: get("backspacingIn"),
+          reference: reference === "default" ? "flange" : reference,
+          flangeIn: get("flangeIn") ?? String(DEFAULT_FLANGE_IN),
+        }
       : { mode: "offset", offsetMm: get("offsetMm") ?? "" };
-  const r = checkSetup({ tire, wheelDiameterIn: get("wheelDiameterIn") ?? "", wheelWidthIn: get("wheelWidthIn") ?? "", position, spacerMm: get("spacerMm") ?? "" }, [], { text: true });
+  const r = checkSetup(
+    {
+      tire,
+      wheelDiameterIn: get("wheelDiameterIn") ?? "",
+      wheelWidthIn: get("wheelWidthIn") ?? "",
+      position,
+      spacerMm: get("spacerMm") ?? "",
+    },
+    [],
+    { text: true },
+  );
   return r.ok ? r.value : null;
 }
 
@@ -174,7 +201,10 @@ export const outsideReason = ({ min, max }: Bounds, unit: string) => `is outside
 function readLengthParam(raw: string, unit: "in" | "mm", bounds: Bounds): ParamRead {
   if (raw.trim() === "") return { reason: "is empty" };
   const r = readLengthValue(raw, unit, true);
-  if ("problem" in r) return { reason: r.problem === "fraction" ? `is a fraction, which is read only in inches (write ${raw.trim()} in)` : "is not a number" };
+  if ("problem" in r)
+    return {
+      reason: r.problem === "fraction" ? `is a fraction, which is read only in inches (write ${raw.trim()} in)` : "is not a number",
+    };
   if (r.value < bounds.min || r.value > bounds.max) return { reason: outsideReason(bounds, ` ${unit}`) };
   return { value: r.value === 0 ? 0 : r.value };
 }
@@ -192,7 +222,9 @@ const PARAM_LABEL: Record<ParamKey, string> = {
 };
 
 const positionText = (pos: Position): string =>
-  pos.mode === "offset" ? `an offset of ${shownNumber(pos.offsetMm)} mm` : `a backspacing of ${shownNumber(pos.backspacingIn)} in to the ${BACKSPACING_REFERENCE_LABEL[pos.reference]}`;
+  pos.mode === "offset"
+    ? `an offset of ${shownNumber(pos.offsetMm)} mm`
+    : `a backspacing of ${shownNumber(pos.backspacingIn)} in to the ${BACKSPACING_REFERENCE_LABEL[pos.reference]}`;
 
 /**
  * Reads one setup from a link, tolerantly: never throws, always returns a setup. A parameter
@@ -202,7 +234,8 @@ const positionText = (pos: Position): string =>
  */
 export function decodeSetupParams(prefix: SetupPrefix, p: URLSearchParams, fallback: Setup, side: string, problems: LinkProblem[]): Setup {
   const get = (k: ParamKey) => p.get(`${prefix}${SETUP_PARAM[k]}`);
-  const note = (k: ParamKey, reason: string, used: string) => problems.push({ field: `${side} · ${PARAM_LABEL[k]}`, given: get(k) ?? "", reason, used });
+  const note = (k: ParamKey, reason: string, used: string) =>
+    problems.push({ field: `${side} · ${PARAM_LABEL[k]}`, given: get(k) ?? "", reason, used });
   const length = (k: ParamKey, unit: "in" | "mm", bounds: Bounds, used: () => string): number | undefined => {
     const raw = get(k);
     if (raw === null) return undefined;
@@ -221,7 +254,11 @@ export function decodeSetupParams(prefix: SetupPrefix, p: URLSearchParams, fallb
       rim = parseTireSize(rawTire).rimDiameterIn;
       tire = rawTire.trim();
     } catch (e) {
-      note("tire", e instanceof Error && e.message === "too long" ? `is longer than ${TIRE_TEXT_MAX} characters` : "is not a tire size", fallback.tire);
+      note(
+        "tire",
+        e instanceof Error && e.message === "too long" ? `is longer than ${TIRE_TEXT_MAX} characters` : "is not a tire size",
+        fallback.tire,
+      );
     }
   }
   let diameter = length("wheelDiameterIn", "in", SETUP_LIMITS.wheelDiameterIn, () => `${shownNumber(rim)} in (the tire's rim diameter)`);
@@ -253,7 +290,12 @@ export function decodeSetupParams(prefix: SetupPrefix, p: URLSearchParams, fallb
   });
   if (bs !== undefined) {
     const read = readReferenceParam(get("reference"));
-    if (read === null) note("reference", `is not ${REFERENCE_PARAM_VALUE.flange} or ${REFERENCE_PARAM_VALUE["bead-seat"]}`, `the ${BACKSPACING_REFERENCE_LABEL.flange}`);
+    if (read === null)
+      note(
+        "reference",
+        `is not ${REFERENCE_PARAM_VALUE.flange} or ${REFERENCE_PARAM_VALUE["bead-seat"]}`,
+        `the ${BACKSPACING_REFERENCE_LABEL.flange}`,
+      );
     const reference: BackspacingReference = read === null || read === "default" ? "flange" : read;
     const f = length("flangeIn", "in", SETUP_LIMITS.flangeIn, () => `${shownNumber(DEFAULT_FLANGE_IN)} in`);
     position = { mode: "backspacing", backspacingIn: bs, reference, flangeIn: f ?? DEFAULT_FLANGE_IN };
@@ -263,15 +305,29 @@ export function decodeSetupParams(prefix: SetupPrefix, p: URLSearchParams, fallb
     if (off !== undefined) position = { mode: "offset", offsetMm: off };
     // A reference or flange allowance means nothing without a backspacing.
     for (const k of ["reference", "flangeIn"] as const) {
-      if (get(k) !== null) note(k, rawB === null ? "is left out: the link gives no backspacing" : "is left out with the backspacing", position ? positionText(position) : instead());
+      if (get(k) !== null)
+        note(
+          k,
+          rawB === null ? "is left out: the link gives no backspacing" : "is left out with the backspacing",
+          position ? positionText(position) : instead(),
+        );
     }
   }
   if (position !== undefined && !fits(position)) {
-    note(position.mode === "offset" ? "offsetMm" : "backspacingIn", `puts the mounting face outside a ${shownNumber(wheelWidthIn)} in wide wheel`, instead());
+    note(
+      position.mode === "offset" ? "offsetMm" : "backspacingIn",
+      `puts the mounting face outside a ${shownNumber(wheelWidthIn)} in wide wheel`,
+      instead(),
+    );
     position = undefined;
   }
   if (position === undefined && rawB === null && rawO === null && fallbackPosition !== fallback.position) {
-    problems.push({ field: `${side} · ${PARAM_LABEL.offsetMm}`, given: "", reason: `is not in the link, and the default, ${positionText(fallback.position)}, does not fit a ${shownNumber(wheelWidthIn)} in wide wheel`, used: instead() });
+    problems.push({
+      field: `${side} · ${PARAM_LABEL.offsetMm}`,
+      given: "",
+      reason: `is not in the link, and the default, ${positionText(fallback.position)}, does not fit a ${shownNumber(wheelWidthIn)} in wide wheel`,
+      used: instead(),
+    });
   }
 
   const spacer = length("spacerMm", "mm", SETUP_LIMITS.spacerMm, () => "no spacer");

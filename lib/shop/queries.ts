@@ -45,7 +45,10 @@ export async function updateShopSettings(db: Knex, shopId: string, s: ShopSettin
 }
 
 export async function listTeam(db: Knex, shopId: string): Promise<TeamMember[]> {
-  return db("users").where({ shop_id: shopId }).orderBy([{ column: "role", order: "desc" }, { column: "name" }]).select("id", "name", "email", "role");
+  return db("users")
+    .where({ shop_id: shopId })
+    .orderBy([{ column: "role", order: "desc" }, { column: "name" }])
+    .select("id", "name", "email", "role");
 }
 
 /** Invitations still usable (not used, revoked or expired). */
@@ -61,7 +64,12 @@ export async function listOpenInvites(db: Knex, shopId: string): Promise<StaffIn
 }
 
 /** A new single-use invitation (256-bit URL-safe token; only its hash is kept). */
-export async function createInvite(db: Knex, shopId: string, email: string, invitedBy: string): Promise<{ token: string; invite: StaffInvite }> {
+export async function createInvite(
+  db: Knex,
+  shopId: string,
+  email: string,
+  invitedBy: string,
+): Promise<{ token: string; invite: StaffInvite }> {
   const token = randomToken();
   const invite = await db.transaction(async (trx) => {
     // One open invitation per address: a new one replaces the old link.
@@ -87,7 +95,11 @@ export async function createInvite(db: Knex, shopId: string, email: string, invi
 
 /** Withdraws an open invitation of the shop; NotFoundError when there is none open by that id. */
 export async function revokeInvite(db: Knex, shopId: string, id: string): Promise<void> {
-  const n = await db("staff_invites").where({ id, shop_id: shopId }).whereNull("used_at").whereNull("revoked_at").update({ revoked_at: db.fn.now() });
+  const n = await db("staff_invites")
+    .where({ id, shop_id: shopId })
+    .whereNull("used_at")
+    .whereNull("revoked_at")
+    .update({ revoked_at: db.fn.now() });
   if (n === 0) throw new NotFoundError("That invitation");
 }
 
@@ -132,7 +144,13 @@ export async function acceptInvite(db: Knex, input: { token: string; name?: stri
       if (!pw.success) fieldErrors.password = [pw.error.issues[0]?.message ?? "Choose a longer password."];
       if (Object.keys(fieldErrors).length) throw InvalidError.fields(fieldErrors);
       const [row] = await trx("users")
-        .insert({ email: invite.email, name: input.name, password_hash: await hashPassword(input.password), role: "shop_staff", shop_id: invite.shop_id })
+        .insert({
+          email: invite.email,
+          name: input.name,
+          password_hash: await hashPassword(input.password),
+          role: "shop_staff",
+          shop_id: invite.shop_id,
+        })
         .returning(["id"]);
       userId = (row as { id: string }).id;
     }
@@ -162,4 +180,15 @@ export const SHOP_ANY = ["shop_staff", "shop_owner"] as const;
 export const SHOP_OWNER = ["shop_owner"] as const;
 
 /** These queries on the app's database handle, for pages and route handlers. */
-export const shopQueries = bindAppDb({ acceptInvite, createInvite, findOpenInvite, findShop, getShop, listOpenInvites, listTeam, removeStaff, revokeInvite, updateShopSettings });
+export const shopQueries = bindAppDb({
+  acceptInvite,
+  createInvite,
+  findOpenInvite,
+  findShop,
+  getShop,
+  listOpenInvites,
+  listTeam,
+  removeStaff,
+  revokeInvite,
+  updateShopSettings,
+});

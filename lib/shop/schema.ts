@@ -35,8 +35,16 @@ export const shopSettingsSchema = z.object({
     }),
   labourRate: moneyField("an hourly labour rate"),
   fabricationRate: moneyField("an hourly fabrication rate"),
-  quoteValidityDays: z.coerce.number({ message: "Enter a number of days." }).int("Use whole days.").min(1, "At least 1 day.").max(365, "At most 365 days."),
-  depositPct: z.coerce.number({ message: "Enter a percentage." }).int("Use a whole percentage.").min(0, "At least 0 %.").max(100, "At most 100 %."),
+  quoteValidityDays: z.coerce
+    .number({ message: "Enter a number of days." })
+    .int("Use whole days.")
+    .min(1, "At least 1 day.")
+    .max(365, "At most 365 days."),
+  depositPct: z.coerce
+    .number({ message: "Enter a percentage." })
+    .int("Use a whole percentage.")
+    .min(0, "At least 0 %.")
+    .max(100, "At most 100 %."),
   currency: z.literal("USD", "Quotes are in US dollars (USD)."),
 });
 export type ShopSettingsInput = z.input<typeof shopSettingsSchema>;

@@ -15,7 +15,8 @@ function findServerOnlyModules() {
     for (const entry of fs.readdirSync(dir, { withFileTypes: true })) {
       const full = path.join(dir, entry.name);
       if (entry.isDirectory()) walk(full);
-      else if (EXTENSIONS.includes(path.extname(entry.name)) && /^import\s+["']server-only["'];?\s*$/m.test(fs.readFileSync(full, "utf8"))) found.add(full);
+      else if (EXTENSIONS.includes(path.extname(entry.name)) && /^import\s+["']server-only["'];?\s*$/m.test(fs.readFileSync(full, "utf8")))
+        found.add(full);
     }
   };
   for (const dir of SOURCE_DIRS) if (fs.existsSync(path.join(ROOT, dir))) walk(path.join(ROOT, dir));
@@ -59,7 +60,11 @@ function isClientFile(program) {
 
 /** lib/fitment is the pure engine: packages and its own files only. */
 const engineSelfContained = {
-  meta: { type: "problem", schema: [], messages: { outside: "The engine (lib/fitment) imports only its own files and packages, not \"{{source}}\"." } },
+  meta: {
+    type: "problem",
+    schema: [],
+    messages: { outside: 'The engine (lib/fitment) imports only its own files and packages, not "{{source}}".' },
+  },
   create(context) {
     const engineDir = path.join(ROOT, "lib/fitment");
     return eachImport((node, source) => {
@@ -75,7 +80,7 @@ const clientNoServer = {
     type: "problem",
     schema: [{ type: "object", properties: { rowTypes: { type: "boolean" } }, additionalProperties: false }],
     messages: {
-      server: "A client component cannot import the server-only module \"{{source}}\": take the data from a page or an API route.",
+      server: 'A client component cannot import the server-only module "{{source}}": take the data from a page or an API route.',
       row: "A client component cannot import the database row type {{name}}: use the feature's API shape (camelCase, ISO dates).",
     },
   },
@@ -99,7 +104,6 @@ const clientNoServer = {
   },
 };
 
-
 /**
  * Only query modules touch tables: a call such as `db("quotes")` or `trx("users")` (a Knex handle
  * called with a table name) belongs in a feature's `queries.ts` / `*Queries.ts`, or in the platform
@@ -113,12 +117,21 @@ const tablesInQueries = {
     schema: [],
   },
   create(context) {
-    const file = path.relative(ROOT, context.filename ?? context.getFilename()).split(path.sep).join("/");
+    const file = path
+      .relative(ROOT, context.filename ?? context.getFilename())
+      .split(path.sep)
+      .join("/");
     if (/(^|\/)(queries|[A-Za-z]+Queries)\.ts$/.test(file) || file.startsWith("lib/platform/") || /\.test\.tsx?$/.test(file)) return {};
     return {
       CallExpression(node) {
         const [arg] = node.arguments;
-        if (node.callee.type === "Identifier" && HANDLE_NAMES.has(node.callee.name) && arg && arg.type === "Literal" && typeof arg.value === "string") {
+        if (
+          node.callee.type === "Identifier" &&
+          HANDLE_NAMES.has(node.callee.name) &&
+          arg &&
+          arg.type === "Literal" &&
+          typeof arg.value === "string"
+        ) {
           context.report({ node, messageId: "table", data: { table: arg.value } });
         }
       },
@@ -126,4 +139,7 @@ const tablesInQueries = {
   },
 };
 
-export const boundaries = { meta: { name: "hubface-boundaries" }, rules: { "engine-self-contained": engineSelfContained, "client-no-server": clientNoServer, "tables-in-queries": tablesInQueries } };
+export const boundaries = {
+  meta: { name: "hubface-boundaries" },
+  rules: { "engine-self-contained": engineSelfContained, "client-no-server": clientNoServer, "tables-in-queries": tablesInQueries },
+};

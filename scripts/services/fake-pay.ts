@@ -123,7 +123,9 @@ ${error ? `<p class="err" role="alert">${esc(error)}</p>` : ""}
 </main></body></html>`;
 }
 
-export function startFakePay(opts: FakePayOptions): Promise<{ server: Server; port: number; sessions: Map<string, Session>; close: () => Promise<void> }> {
+export function startFakePay(
+  opts: FakePayOptions,
+): Promise<{ server: Server; port: number; sessions: Map<string, Session>; close: () => Promise<void> }> {
   const sessions = new Map<string, Session>();
   const host = opts.host ?? "127.0.0.1";
   let base = "";
@@ -166,7 +168,10 @@ export function startFakePay(opts: FakePayOptions): Promise<{ server: Server; po
       res.writeHead(status, { "Content-Type": "application/json" });
       res.end(JSON.stringify(body));
     };
-    const fail = (status: number, message: string, param?: string) => json(status, { error: { type: status === 401 ? "authentication_error" : "invalid_request_error", message, ...(param ? { param } : {}) } });
+    const fail = (status: number, message: string, param?: string) =>
+      json(status, {
+        error: { type: status === 401 ? "authentication_error" : "invalid_request_error", message, ...(param ? { param } : {}) },
+      });
     if (req.headers.authorization !== `Bearer ${opts.secretKey}`) return fail(401, "Invalid API key provided.");
     if (req.method === "POST" && parts.join("/") === "v1/checkout/sessions") {
       const f = parseForm(await readBody(req)) as {
@@ -176,7 +181,10 @@ export function startFakePay(opts: FakePayOptions): Promise<{ server: Server; po
         client_reference_id?: string;
         customer_email?: string;
         metadata?: Record<string, string>;
-        line_items?: Record<string, { quantity?: string; price_data?: { currency?: string; unit_amount?: string; product_data?: { name?: string } } }>;
+        line_items?: Record<
+          string,
+          { quantity?: string; price_data?: { currency?: string; unit_amount?: string; product_data?: { name?: string } } }
+        >;
       };
       if (f.mode !== "payment") return fail(400, "Only mode=payment is supported here.", "mode");
       if (!f.success_url || !f.cancel_url) return fail(400, "success_url and cancel_url are required.", "success_url");
@@ -187,7 +195,8 @@ export function startFakePay(opts: FakePayOptions): Promise<{ server: Server; po
       for (const li of items) {
         const unit = Number(li.price_data?.unit_amount);
         const qty = Number(li.quantity ?? 1);
-        if (!Number.isInteger(unit) || unit < 1 || !Number.isInteger(qty) || qty < 1) return fail(400, "unit_amount and quantity must be positive integers.", "line_items");
+        if (!Number.isInteger(unit) || unit < 1 || !Number.isInteger(qty) || qty < 1)
+          return fail(400, "unit_amount and quantity must be positive integers.", "line_items");
         currency = (li.price_data?.currency ?? "").toLowerCase();
         amount += unit * qty;
       }

@@ -135,19 +135,27 @@ describe("accounts in Chromium", () => {
       await page.getByLabel("E-mail").fill(email);
       await page.getByLabel("Password").fill(`wrong password ${i}`);
       await page.getByRole("button", { name: "Sign in" }).click();
-      await expect.poll(() => page.locator("main [role=alert]").first().textContent()).toMatch(i < 4 ? /do not match/ : /Wait 1 minute before trying again/);
+      await expect
+        .poll(() => page.locator("main [role=alert]").first().textContent())
+        .toMatch(i < 4 ? /do not match/ : /Wait 1 minute before trying again/);
     }
     // Even the right password is refused from this address while it waits (other addresses are not held up).
     await page.getByLabel("Password").fill("the right password");
     await page.getByRole("button", { name: "Sign in" }).click();
-    await expect.poll(() => page.locator("main [role=alert]").first().textContent()).toMatch(/Wait \d+ (second|minute)s? before trying again, or reset your password/);
+    await expect
+      .poll(() => page.locator("main [role=alert]").first().textContent())
+      .toMatch(/Wait \d+ (second|minute)s? before trying again, or reset your password/);
     await axeClean("sign-in-locked");
   });
 
   it("ends a copied session cookie at sign-out and everywhere at once from the account page", async () => {
     const email = `sessions.${stamp}@example.test`;
     const password = "sessions password one";
-    const created = await fetch(`${BASE}/api/account/signup`, { method: "POST", headers: { "Content-Type": "application/json" }, body: JSON.stringify({ name: "Wren Aldous", email, password }) });
+    const created = await fetch(`${BASE}/api/account/signup`, {
+      method: "POST",
+      headers: { "Content-Type": "application/json" },
+      body: JSON.stringify({ name: "Wren Aldous", email, password }),
+    });
     expect(created.status).toBe(201);
     const me = (cookie: string) => fetch(`${BASE}/api/me`, { headers: { Cookie: cookie } }).then((r) => r.status);
 

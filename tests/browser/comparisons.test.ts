@@ -58,7 +58,9 @@ describe("saved comparisons and share links in Chromium", () => {
     await page.getByLabel("Password").fill(DEMO_PASSWORD);
     await page.getByRole("button", { name: "Sign in" }).click();
     await page.waitForURL((u) => u.pathname === "/workspace", { timeout: 20000 });
-    await expect.poll(() => setup(page, "Planned setup").getByRole("textbox", { name: "Tire size" }).inputValue()).toBe("285/75R16LT 126/123Q LRE");
+    await expect
+      .poll(() => setup(page, "Planned setup").getByRole("textbox", { name: "Tire size" }).inputValue())
+      .toBe("285/75R16LT 126/123Q LRE");
     await expect.poll(() => page.getByTestId("change-diameter").innerText()).toMatch(/\+2\.36 in/);
   });
 
@@ -86,7 +88,9 @@ describe("saved comparisons and share links in Chromium", () => {
     await expect.poll(() => item(NAME).innerText()).toContain("+2.36 in");
     await axeClean(page, "comparisons-list-search");
 
-    await item(NAME).getByRole("link", { name: `Open ${NAME} in the workspace` }).click();
+    await item(NAME)
+      .getByRole("link", { name: `Open ${NAME} in the workspace` })
+      .click();
     await page.waitForURL(/\/workspace\?.*saved=/);
     await expect.poll(() => headlineText(page)).toBe(headline);
     await expect.poll(() => page.getByTestId("save-control").innerText()).toContain(NAME);
@@ -94,7 +98,9 @@ describe("saved comparisons and share links in Chromium", () => {
 
     await page.goto("/comparisons");
     await page.getByLabel("Search by name or tire size").fill(stamp);
-    await item(NAME).getByRole("button", { name: `Rename ${NAME}` }).click();
+    await item(NAME)
+      .getByRole("button", { name: `Rename ${NAME}` })
+      .click();
     await page.getByLabel("New name").fill(RENAMED);
     await page.getByRole("button", { name: "Save name" }).click();
     await expect.poll(() => page.getByTestId("comparison-name").allInnerTexts()).toEqual([RENAMED]);
@@ -167,8 +173,12 @@ describe("saved comparisons and share links in Chromium", () => {
   });
 
   it("duplicates and deletes", async () => {
-    await item(RENAMED).getByRole("button", { name: `Duplicate ${RENAMED}` }).click();
-    await expect.poll(() => page.getByTestId("comparison-name").allInnerTexts()).toEqual(expect.arrayContaining([RENAMED, `${RENAMED} (copy)`]));
+    await item(RENAMED)
+      .getByRole("button", { name: `Duplicate ${RENAMED}` })
+      .click();
+    await expect
+      .poll(() => page.getByTestId("comparison-name").allInnerTexts())
+      .toEqual(expect.arrayContaining([RENAMED, `${RENAMED} (copy)`]));
     const copy = item(`${RENAMED} (copy)`);
     await copy.getByRole("button", { name: `Delete ${RENAMED} (copy)` }).click();
     await copy.getByRole("button", { name: "Delete", exact: true }).click();

@@ -16,10 +16,20 @@ import { SHOTS, launch, seriousViolations, shot } from "./support/browser";
  */
 const A: Setup = { tire: "35x12.50R17", wheelDiameterIn: 17, wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 }, spacerMm: 0 };
 const B: Setup = { tire: "285/75R16", wheelDiameterIn: 16, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 0 }, spacerMm: 38 };
-const C: Setup = { tire: "33x12.50R15", wheelDiameterIn: 15, wheelWidthIn: 10, position: { mode: "backspacing", backspacingIn: 3.25, reference: "bead-seat", flangeIn: 0.5 }, spacerMm: 0 };
+const C: Setup = {
+  tire: "33x12.50R15",
+  wheelDiameterIn: 15,
+  wheelWidthIn: 10,
+  position: { mode: "backspacing", backspacingIn: 3.25, reference: "bead-seat", flangeIn: 0.5 },
+  spacerMm: 0,
+};
 
 const CASES: [string, ComparisonInput, { units: "imperial" | "metric"; lengths: "decimal" | "fraction" }][] = [
-  ["stock-to-a", { ...DEFAULT_INPUT, planned: A, vehicle: { ...DEFAULT_INPUT.vehicle, kingpinInclinationDeg: 8, fenderLineMm: 139.7 } }, { units: "imperial", lengths: "decimal" }],
+  [
+    "stock-to-a",
+    { ...DEFAULT_INPUT, planned: A, vehicle: { ...DEFAULT_INPUT.vehicle, kingpinInclinationDeg: 8, fenderLineMm: 139.7 } },
+    { units: "imperial", lengths: "decimal" },
+  ],
   ["a-to-b-spacer", { ...DEFAULT_INPUT, current: A, planned: B }, { units: "metric", lengths: "decimal" }],
   ["b-to-c", { ...DEFAULT_INPUT, current: B, planned: C }, { units: "imperial", lengths: "fraction" }],
 ];
@@ -28,12 +38,15 @@ type Rect = { label: string; left: number; top: number; right: number; bottom: n
 
 /** Every text of the drawing with its rendered box (after the rotation of the height labels). */
 const labelRects = (page: Page): Promise<Rect[]> =>
-  page.getByTestId("cross-section").locator("text").evaluateAll((els) =>
-    els.map((el) => {
-      const r = el.getBoundingClientRect();
-      return { label: el.textContent ?? "", left: r.left, top: r.top, right: r.right, bottom: r.bottom };
-    }),
-  );
+  page
+    .getByTestId("cross-section")
+    .locator("text")
+    .evaluateAll((els) =>
+      els.map((el) => {
+        const r = el.getBoundingClientRect();
+        return { label: el.textContent ?? "", left: r.left, top: r.top, right: r.right, bottom: r.bottom };
+      }),
+    );
 
 /** Pairs of labels whose boxes share more than half a pixel each way (anti-aliasing). */
 function overlaps(rects: Rect[]): string[] {
@@ -43,7 +56,8 @@ function overlaps(rects: Rect[]): string[] {
     for (let j = i + 1; j < rects.length; j++) {
       const a = rects[i]!;
       const b = rects[j]!;
-      if (a.left < b.right - tol && b.left < a.right - tol && a.top < b.bottom - tol && b.top < a.bottom - tol) out.push(`“${a.label}” × “${b.label}”`);
+      if (a.left < b.right - tol && b.left < a.right - tol && a.top < b.bottom - tol && b.top < a.bottom - tol)
+        out.push(`“${a.label}” × “${b.label}”`);
     }
   }
   return out;
@@ -63,7 +77,10 @@ for (const width of [375, 1280]) {
         browser ??= await launch({ width, height: 900 });
         const page = await browser.context.newPage();
         try {
-          await page.addInitScript(([key, value]) => window.localStorage.setItem(key, value), [PREFS_STORAGE_KEY, JSON.stringify(prefs)] as const);
+          await page.addInitScript(([key, value]) => window.localStorage.setItem(key, value), [
+            PREFS_STORAGE_KEY,
+            JSON.stringify(prefs),
+          ] as const);
           await page.goto(`/workspace?${encodeComparison(input)}`, { waitUntil: "networkidle" });
           const svg = page.getByTestId("cross-section");
           await svg.scrollIntoViewIfNeeded();
@@ -73,13 +90,20 @@ for (const width of [375, 1280]) {
           expect(await svg.locator("[data-setup=planned]").count()).toBe(1);
           // The reader's units reach the labels (the stored choice is read after hydration).
           const unit = prefs.units === "metric" ? / mm$/ : / in$/;
-          await expect.poll(async () => (await svg.locator("[data-dimension=planned-reach-inboard] text").textContent()) ?? "").toMatch(unit);
+          await expect
+            .poll(async () => (await svg.locator("[data-dimension=planned-reach-inboard] text").textContent()) ?? "")
+            .toMatch(unit);
 
           const rects = await labelRects(page);
           expect(rects.length).toBeGreaterThan(15);
           expect(overlaps(rects)).toEqual([]);
           const box = (await svg.boundingBox())!;
-          const outside = rects.filter((r) => r.left < box.x - 0.5 || r.right > box.x + box.width + 0.5 || r.top < box.y - 0.5 || r.bottom > box.y + box.height + 0.5).map((r) => r.label);
+          const outside = rects
+            .filter(
+              (r) =>
+                r.left < box.x - 0.5 || r.right > box.x + box.width + 0.5 || r.top < box.y - 0.5 || r.bottom > box.y + box.height + 0.5,
+            )
+            .map((r) => r.label);
           expect(outside).toEqual([]);
           if (width === 375) expect(await pageWidth(page)).toBeLessThanOrEqual(width);
 

@@ -23,7 +23,9 @@ async function axeClean(name: string) {
 
 /** A noisy PNG (random pixels do not compress, so the upload takes a moment when throttled). */
 async function noisyPng(w: number, h: number): Promise<Buffer> {
-  return sharp(randomBytes(w * h * 3), { raw: { width: w, height: h, channels: 3 } }).png().toBuffer();
+  return sharp(randomBytes(w * h * 3), { raw: { width: w, height: h, channels: 3 } })
+    .png()
+    .toBuffer();
 }
 
 describe("the garage in Chromium", () => {
@@ -88,7 +90,12 @@ describe("the garage in Chromium", () => {
   it("uploads a photo by the file picker with a progress bar, then shows its thumbnail; a fake image is refused", async () => {
     const cdp = await session.context.newCDPSession(page);
     await cdp.send("Network.enable");
-    await cdp.send("Network.emulateNetworkConditions", { offline: false, latency: 20, downloadThroughput: -1, uploadThroughput: 300 * 1024 });
+    await cdp.send("Network.emulateNetworkConditions", {
+      offline: false,
+      latency: 20,
+      downloadThroughput: -1,
+      uploadThroughput: 300 * 1024,
+    });
     const png = await noisyPng(700, 500);
     expect(png.length).toBeGreaterThan(800 * 1024);
     const input = page.getByTestId("drop-vehicle").locator('input[type="file"]');
@@ -97,7 +104,11 @@ describe("the garage in Chromium", () => {
     await shot(page, "garage-upload-progress");
     await cdp.send("Network.emulateNetworkConditions", { offline: false, latency: 0, downloadThroughput: -1, uploadThroughput: -1 });
     await expect.poll(() => page.getByTestId("upload-message").first().textContent(), { timeout: 30000 }).toMatch(/skiff\.png uploaded/);
-    await expect.poll(() => page.getByAltText("Photo: skiff.png").evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth), { timeout: 15000 }).toBe(360);
+    await expect
+      .poll(() => page.getByAltText("Photo: skiff.png").evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth), {
+        timeout: 15000,
+      })
+      .toBe(360);
 
     await input.setInputFiles({ name: "not-really.png", mimeType: "image/png", buffer: Buffer.from("this is text, not a picture") });
     await expect.poll(() => page.getByTestId("upload-message").first().textContent()).toMatch(/not a JPEG, PNG or WebP/);
@@ -119,7 +130,9 @@ describe("the garage in Chromium", () => {
     // Frame rail: 422.703 → √(444.5² + 116.67²) = 459.556, 31.75 − 36.853 = −5.1 mm → contact (the inner
     // reach alone, 15.8 mm more room, used to call it clear).
     await expect.poll(() => table.locator("tr", { hasText: "Frame rail" }).textContent()).toMatch(/Contact/);
-    await expect.poll(() => table.locator("tr", { hasText: "Frame rail" }).textContent()).toMatch(/inner tread corner swinging about the steering axis/);
+    await expect
+      .poll(() => table.locator("tr", { hasText: "Frame rail" }).textContent())
+      .toMatch(/inner tread corner swinging about the steering axis/);
     await expect.poll(() => page.getByTestId("prediction-note").textContent()).toMatch(/How this is predicted/);
     await page.getByTestId("prediction-note").locator("summary").click();
     await expect.poll(() => page.getByTestId("prediction-note").textContent()).toMatch(/25 mm inboard of the hub face/);
@@ -157,16 +170,20 @@ describe("the garage in Chromium", () => {
     await expect.poll(() => page.getByTestId("finder-summary").textContent(), { timeout: 20000 }).toMatch(/fits among [\d,]+ combinations/);
     // Every measured point is applied (333 fits, best 200 shown, and 32 sizes excluded entirely when
     // written); each excluded size is shown by its nearest miss and the limit that decided it.
-    await expect.poll(() => page.getByTestId("finder-summary").textContent()).toMatch(
-      /^[\d,]+ fits among [\d,]+ combinations in \d+ ms — the best 200 shown\. [\d,]+ more were excluded by the measured points or the poke limit, \d+ tire sizes entirely \(listed below\)\.$/,
-    );
+    await expect
+      .poll(() => page.getByTestId("finder-summary").textContent())
+      .toMatch(
+        /^[\d,]+ fits among [\d,]+ combinations in \d+ ms — the best 200 shown\. [\d,]+ more were excluded by the measured points or the poke limit, \d+ tire sizes entirely \(listed below\)\.$/,
+      );
     // Nearest the 33 in target: 33x12.50R17LT (838.2 mm, R 419.1) on 17x9 +25, corners 153.67 mm from the
     // axis: √(419.1² + 153.67²) = 446.38 vs 422.703 → 19.05 − 23.68 = −4.63 mm at the bumper corner,
     // needing 12.7 + 4.63 = 17.3 mm (11/16 in); the frame rail keeps only 31.75 − 23.68 = 8.07 mm.
     const excluded = page.getByTestId("finder-excluded").getByTestId("excluded-size");
-    await expect.poll(() => excluded.first().textContent()).toMatch(
-      /^33x12\.50R17LT.*17x9 \+25 mm.*Excluded: touches bumper corner, full right lock \(measured at full lock\) — needs 17\.3 mm \(11\/16 in\) more; 1 other limit fails too\./,
-    );
+    await expect
+      .poll(() => excluded.first().textContent())
+      .toMatch(
+        /^33x12\.50R17LT.*17x9 \+25 mm.*Excluded: touches bumper corner, full right lock \(measured at full lock\) — needs 17\.3 mm \(11\/16 in\) more; 1 other limit fails too\./,
+      );
     const rows = page.getByTestId("finder-results").locator("tbody tr");
     await expect.poll(() => rows.count()).toBeGreaterThan(3);
     // The best 200 come 25 a page, and at 1280 px every column shows, the links included: the
@@ -184,13 +201,17 @@ describe("the garage in Chromium", () => {
     // Any figure sorts: by offset, the page's offsets never go down, and sorting starts at page 1.
     await page.getByRole("button", { name: /^Offset/ }).click();
     await expect.poll(() => page.getByTestId("finder-page-rows").textContent()).toBe("Rows 1–25 of 200");
-    const offsets = (await rows.locator("td:nth-child(5)").allTextContents()).map((t) => Number(t.replace(/[^\d.−-]/g, "").replace("−", "-")));
+    const offsets = (await rows.locator("td:nth-child(5)").allTextContents()).map((t) =>
+      Number(t.replace(/[^\d.−-]/g, "").replace("−", "-")),
+    );
     expect(offsets).toEqual([...offsets].sort((a, b) => a - b));
     await page.getByRole("button", { name: /^Offset/ }).click();
     await page.getByRole("button", { name: /^Offset/ }).click();
     await expect.poll(() => page.getByTestId("finder-results").locator("th", { hasText: "Offset" }).getAttribute("aria-sort")).toBe(null);
     await page.getByRole("button", { name: /^Diameter/ }).click();
-    await expect.poll(() => page.getByTestId("finder-results").locator("th", { hasText: "Diameter" }).getAttribute("aria-sort")).toBe("ascending");
+    await expect
+      .poll(() => page.getByTestId("finder-results").locator("th", { hasText: "Diameter" }).getAttribute("aria-sort"))
+      .toBe("ascending");
     await page.getByLabel("Filter by tire size or wheel").fill("17x9");
     await expect.poll(async () => (await rows.allTextContents()).every((t) => t.includes("17x9"))).toBe(true);
     await axeClean("garage-finder");
@@ -210,7 +231,9 @@ describe("the garage in Chromium", () => {
     // from the axis: √(401.4² + 137.58²) = 424.323 vs 422.703 → bumper corner 19.05 − 1.62 = 17.43 mm,
     // frame rail 31.75 − 1.62 = 30.13 mm: both clear of the 12.7 mm margin.
     await page.getByRole("button", { name: /^Diameter/ }).click();
-    await expect.poll(() => page.getByTestId("finder-results").locator("th", { hasText: "Diameter" }).getAttribute("aria-sort")).toBe("descending");
+    await expect
+      .poll(() => page.getByTestId("finder-results").locator("th", { hasText: "Diameter" }).getAttribute("aria-sort"))
+      .toBe("descending");
     const top = page.getByTestId("finder-results").locator("tbody tr").first();
     await top.getByTestId("candidate-workspace").click();
     await page.waitForURL(/\/workspace\?.*v=/);

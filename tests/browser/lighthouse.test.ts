@@ -9,7 +9,10 @@ import { BASE } from "./support/browser";
  */
 describe("Lighthouse on the pages a phone user opens first", () => {
   it("measures each page and prints its scores", async () => {
-    const { stdout } = await promisify(execFile)("npx", ["tsx", "scripts/measure-lighthouse.mts", BASE], { timeout: 600_000, maxBuffer: 4 * 1024 * 1024 });
+    const { stdout } = await promisify(execFile)("npx", ["tsx", "scripts/measure-lighthouse.mts", BASE], {
+      timeout: 600_000,
+      maxBuffer: 4 * 1024 * 1024,
+    });
     console.info(stdout);
     for (const page of ["/ ", "/workspace ", "/workspace?", "/s/", "/convert", "/beadlock", "/garage/"]) expect(stdout).toContain(page);
   }, 660_000);

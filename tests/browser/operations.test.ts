@@ -21,7 +21,11 @@ describe("operations", () => {
   it("a staff invitation is queued and reaches the mail server within seconds; the admin's jobs page lists no failure for it", async () => {
     const owner = await sessionCookie(DEMO.shop_owner);
     const email = `queued-${Date.now()}@example.test`;
-    const res = await fetch(`${BASE}/api/shop/staff`, { method: "POST", headers: { Cookie: owner, Origin: BASE, "Content-Type": "application/json" }, body: JSON.stringify({ email }) });
+    const res = await fetch(`${BASE}/api/shop/staff`, {
+      method: "POST",
+      headers: { Cookie: owner, Origin: BASE, "Content-Type": "application/json" },
+      body: JSON.stringify({ email }),
+    });
     expect(res.status).toBe(201);
     const started = Date.now();
     await waitForMail(email, /invites you/, 10000);

@@ -6,7 +6,9 @@ import { BASE, launch, shot } from "./support/browser";
 const PGBIN = process.env.PGBIN ?? "";
 const DATA = process.env.PG_TEST_DATA_DIR ?? "";
 const asPostgres = (args: string[]) =>
-  process.getuid?.() === 0 ? execFileSync("runuser", ["-u", "postgres", "--", ...args], { stdio: "ignore" }) : execFileSync(args[0]!, args.slice(1), { stdio: "ignore" });
+  process.getuid?.() === 0
+    ? execFileSync("runuser", ["-u", "postgres", "--", ...args], { stdio: "ignore" })
+    : execFileSync(args[0]!, args.slice(1), { stdio: "ignore" });
 const pgCtl = (...args: string[]) => asPostgres([`${PGBIN}/pg_ctl`, "-D", DATA, "-w", "-t", "30", ...args]);
 const port = new URL(process.env.E2E_DATABASE_URL ?? "postgres://x@127.0.0.1:55433/x").port;
 
@@ -15,7 +17,11 @@ function startPg() {
 }
 
 afterAll(() => {
-  try { startPg(); } catch { /* already running */ }
+  try {
+    startPg();
+  } catch {
+    /* already running */
+  }
 });
 
 describe.skipIf(!PGBIN || !DATA)("when PostgreSQL goes away and comes back", () => {
@@ -42,7 +48,9 @@ describe.skipIf(!PGBIN || !DATA)("when PostgreSQL goes away and comes back", () 
       expect((await fetch(`${BASE}/api/health/live`)).status).toBe(200);
 
       await page.goto("/account");
-      await expect.poll(() => page.getByRole("heading", { level: 1 }).textContent(), { timeout: 20000 }).toMatch(/can't reach its database/);
+      await expect
+        .poll(() => page.getByRole("heading", { level: 1 }).textContent(), { timeout: 20000 })
+        .toMatch(/can't reach its database/);
       await shot(page, "database-down");
       expect(await page.content()).not.toMatch(/at .*\.js:\d+|ECONNREFUSED|knex/i);
 

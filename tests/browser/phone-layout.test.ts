@@ -28,7 +28,9 @@ async function allInside(p: Page, selector: string): Promise<string[]> {
     (els, width) =>
       els.flatMap((el) => {
         const r = el.getBoundingClientRect();
-        return r.left < 0 || r.right > width ? [`${el.getAttribute("aria-label") ?? el.textContent}: ${Math.round(r.left)}–${Math.round(r.right)} px`] : [];
+        return r.left < 0 || r.right > width
+          ? [`${el.getAttribute("aria-label") ?? el.textContent}: ${Math.round(r.left)}–${Math.round(r.right)} px`]
+          : [];
       }),
     WIDTH,
   );
@@ -36,7 +38,11 @@ async function allInside(p: Page, selector: string): Promise<string[]> {
 
 describe("phone-width layouts in Chromium", () => {
   it("admin users: every row's role, shop and Save are on the screen, a one-word name included", async () => {
-    const signup = await call("anonymous", "POST", "/api/account/signup", { name: LONG, email: `longname.${stamp}@example.test`, password: "a long enough password" });
+    const signup = await call("anonymous", "POST", "/api/account/signup", {
+      name: LONG,
+      email: `longname.${stamp}@example.test`,
+      password: "a long enough password",
+    });
     expect(signup.status).toBe(201);
     await signInAs(page, DEMO.admin, DEMO_PASSWORD);
     await page.goto("/admin/users");
@@ -68,7 +74,9 @@ describe("phone-width layouts in Chromium", () => {
       expect(await pageWidth(page)).toBeLessThanOrEqual(WIDTH);
       await shot(page, "phone-comparisons-long-name");
     } finally {
-      const list = (await (await call("member", "GET", `/api/comparisons?q=${encodeURIComponent(stamp)}`)).json()) as { comparisons: { id: string }[] };
+      const list = (await (await call("member", "GET", `/api/comparisons?q=${encodeURIComponent(stamp)}`)).json()) as {
+        comparisons: { id: string }[];
+      };
       for (const c of [comparison, ...list.comparisons]) await call("member", "DELETE", `/api/comparisons/${c.id}`);
     }
   });

@@ -12,7 +12,11 @@ describe("public files", () => {
 
     const manifestRes = await fetch(`${BASE}/manifest.webmanifest`);
     expect(manifestRes.status).toBe(200);
-    const manifest = (await manifestRes.json()) as { name: string; start_url: string; icons: { src: string; sizes: string; purpose?: string }[] };
+    const manifest = (await manifestRes.json()) as {
+      name: string;
+      start_url: string;
+      icons: { src: string; sizes: string; purpose?: string }[];
+    };
     expect(manifest.name).toMatch(/Hubface/);
     expect(manifest.start_url).toBe("/");
     expect(manifest.icons.some((i) => i.sizes === "512x512" && i.purpose === "maskable")).toBe(true);

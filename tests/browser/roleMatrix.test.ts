@@ -21,7 +21,12 @@ function routesInApp(): { route: string; methods: string[] }[] {
         const methods = ["GET", "POST", "PUT", "PATCH", "DELETE"].filter((m) =>
           new RegExp(`export\\s+(const|async function|function)\\s+${m}\\b|as\\s+${m}\\b`).test(src),
         );
-        const route = "/" + relative("app", dir).split(sep).filter((s) => !/^\(.*\)$/.test(s)).join("/");
+        const route =
+          "/" +
+          relative("app", dir)
+            .split(sep)
+            .filter((s) => !/^\(.*\)$/.test(s))
+            .join("/");
         out.push({ route, methods });
       }
     }

@@ -17,7 +17,10 @@ describe("security basics over HTTP", () => {
   });
 
   it("treats a tampered session cookie as signed out (401, not 500)", async () => {
-    for (const cookie of ["next-auth.session-token=eyJhbGciOiJkaXIiLCJlbmMiOiJBMjU2R0NNIn0..garbage.garbage.garbage", "next-auth.session-token=%%%"]) {
+    for (const cookie of [
+      "next-auth.session-token=eyJhbGciOiJkaXIiLCJlbmMiOiJBMjU2R0NNIn0..garbage.garbage.garbage",
+      "next-auth.session-token=%%%",
+    ]) {
       const res = await fetch(`${BASE}/api/me`, { headers: { Cookie: cookie } });
       expect(res.status).toBe(401);
     }
@@ -38,7 +41,8 @@ describe("security basics over HTTP", () => {
 
   it("never carries a sign-in callbackUrl that a browser reads as another host (open redirect)", async () => {
     // The page hands the sign-in form the path to go to next (a prop in the page's flight data).
-    const target = async (q: string) => /\\"callbackUrl\\":\\"([^"\\]*)\\"/.exec(await (await fetch(`${BASE}/sign-in?callbackUrl=${q}`)).text())?.[1];
+    const target = async (q: string) =>
+      /\\"callbackUrl\\":\\"([^"\\]*)\\"/.exec(await (await fetch(`${BASE}/sign-in?callbackUrl=${q}`)).text())?.[1];
     for (const q of ["/%5Cevil.example/phish", "/%09/evil.example/phish", "%2F%2Fevil.example"]) {
       expect(await target(q), q).toBe("/account");
     }
@@ -59,7 +63,11 @@ describe("security basics over HTTP", () => {
     expect(foreign.status).toBe(403);
     expect((await foreign.json()).error).toMatch(/another site/);
     const member = await cookieFor("member");
-    const bare = await fetch(`${BASE}/api/comparisons`, { method: "POST", headers: { Cookie: member, "Content-Type": "application/json" }, body: JSON.stringify({ name: "No origin" }) });
+    const bare = await fetch(`${BASE}/api/comparisons`, {
+      method: "POST",
+      headers: { Cookie: member, "Content-Type": "application/json" },
+      body: JSON.stringify({ name: "No origin" }),
+    });
     expect(bare.status).toBe(403);
     // Reads are not checked: a link from elsewhere still opens.
     expect((await fetch(`${BASE}/api/health`, { headers: { Origin: "https://evil.example" } })).status).toBe(200);
@@ -76,7 +84,11 @@ describe("security basics over HTTP", () => {
   });
 
   it("answers a NUL character in a field or search with a message naming it, not 500", async () => {
-    const body = await call("anonymous", "POST", "/api/account/signup", { name: "Nul\u0000", email: `nul.${Date.now()}@example.test`, password: "a long enough password" });
+    const body = await call("anonymous", "POST", "/api/account/signup", {
+      name: "Nul\u0000",
+      email: `nul.${Date.now()}@example.test`,
+      password: "a long enough password",
+    });
     expect(body.status).toBe(422);
     expect((await body.json()).fieldErrors.name[0]).toMatch(/NUL character/);
     const search = await call("member", "GET", "/api/comparisons?q=a%00b");
@@ -84,4 +96,3 @@ describe("security basics over HTTP", () => {
     expect((await search.json()).fieldErrors.q[0]).toMatch(/NUL character/);
   });
 });
-

@@ -38,7 +38,9 @@ beforeAll(async () => {
   // (A plain loop: expect.poll only runs inside a test.)
   const deadline = Date.now() + 60_000;
   for (;;) {
-    const live = await fetch(`${B}/api/health/live`).then((r) => r.status).catch(() => 0);
+    const live = await fetch(`${B}/api/health/live`)
+      .then((r) => r.status)
+      .catch(() => 0);
     if (live === 200 && /share purge listener is listening/.test(output)) break;
     if (Date.now() > deadline) throw new Error(`the second server did not get ready in 60 s:\n${output.slice(-2000)}`);
     await new Promise((r) => setTimeout(r, 250));

@@ -42,9 +42,26 @@ describe("install booking", () => {
     const c = await call("shop_staff", "POST", "/api/shop/customers", { name: `Wren Booker ${run}`, phone: "", email });
     expect(c.status).toBe(201);
     const customerId = ((await c.json()) as { customer: { id: string } }).customer.id;
-    const find = async (sku: string) => ((await (await call("shop_staff", "GET", `/api/shop/catalog?q=${sku}`)).json()) as { items: { id: string; sku: string }[] }).items.find((i) => i.sku === sku)!.id;
-    const vehicle = { description: "Half-ton pickup", boltPattern: "6x5.5", tireSize: "265/70R17", wheelDiameterIn: 17, wheelWidthIn: 8, offsetMode: "offset", offsetMm: 25 };
-    const q = await call("shop_staff", "POST", "/api/shop/quotes", { customerId, vehicle, tireItemId: await find("SC-MT-35125017"), wheelItemId: await find("TB-1790-6550"), quantity: 4 });
+    const find = async (sku: string) =>
+      (
+        (await (await call("shop_staff", "GET", `/api/shop/catalog?q=${sku}`)).json()) as { items: { id: string; sku: string }[] }
+      ).items.find((i) => i.sku === sku)!.id;
+    const vehicle = {
+      description: "Half-ton pickup",
+      boltPattern: "6x5.5",
+      tireSize: "265/70R17",
+      wheelDiameterIn: 17,
+      wheelWidthIn: 8,
+      offsetMode: "offset",
+      offsetMm: 25,
+    };
+    const q = await call("shop_staff", "POST", "/api/shop/quotes", {
+      customerId,
+      vehicle,
+      tireItemId: await find("SC-MT-35125017"),
+      wheelItemId: await find("TB-1790-6550"),
+      quantity: 4,
+    });
     expect(q.status).toBe(201);
     const quoteId = ((await q.json()) as { id: string }).id;
     expect((await call("shop_staff", "POST", `/api/shop/quotes/${quoteId}/send`, {})).status).toBe(200);
@@ -88,7 +105,9 @@ describe("install booking", () => {
     expect(Number(booked.event.sequence)).toBe(0);
     const start = booked.event.start;
     const end = booked.event.end!;
-    expect(start.toLocaleTimeString("en-US", { timeZone: "America/Denver", hour: "numeric", minute: "2-digit" })).toBe(picked.split(",")[0]);
+    expect(start.toLocaleTimeString("en-US", { timeZone: "America/Denver", hour: "numeric", minute: "2-digit" })).toBe(
+      picked.split(",")[0],
+    );
     expect(end.getTime()).toBeGreaterThan(start.getTime());
 
     // Staff see it on the calendar's day, linked to the quote.

@@ -21,7 +21,9 @@ interface Message {
 }
 async function latestMailTo(address: string, since: number): Promise<Message> {
   for (let i = 0; i < 40; i++) {
-    const list = (await (await fetch(`${OUTBOX}/messages?to=${encodeURIComponent(address)}`)).json()) as (Message & { receivedAt: string })[];
+    const list = (await (await fetch(`${OUTBOX}/messages?to=${encodeURIComponent(address)}`)).json()) as (Message & {
+      receivedAt: string;
+    })[];
     const fresh = list.find((m) => new Date(m.receivedAt).getTime() >= since);
     if (fresh) return fresh;
     await new Promise((r) => setTimeout(r, 250));
@@ -74,7 +76,9 @@ describe("the shop counter, end to end", () => {
     await page.waitForURL(/\/shop\/quotes\/[0-9a-f-]{36}$/);
     const quoteUrl = page.url();
     await page.getByRole("heading", { name: /Quote Q-\d+/ }).waitFor();
-    const lines = await page.locator('input[aria-label^="Description of line"]').evaluateAll((els) => els.map((e) => (e as HTMLInputElement).value));
+    const lines = await page
+      .locator('input[aria-label^="Description of line"]')
+      .evaluateAll((els) => els.map((e) => (e as HTMLInputElement).value));
     expect(lines.some((l) => /Beadlock ring assembly/.test(l))).toBe(true); // suggested for a beadlock wheel
     expect(lines.some((l) => /Mount and balance/.test(l))).toBe(true);
     await checkA11y(page, "quote editor");
@@ -149,7 +153,9 @@ describe("the shop counter, end to end", () => {
     );
     await page.setInputFiles("#catalog-file", file);
     await page.getByTestId("import-summary").waitFor();
-    expect(await page.getByTestId("import-summary").textContent()).toBe("3 rows read · 2 ready (2 new, 0 updated) · 1 row skipped, 1 problem");
+    expect(await page.getByTestId("import-summary").textContent()).toBe(
+      "3 rows read · 2 ready (2 new, 0 updated) · 1 row skipped, 1 problem",
+    );
     expect(await page.getByTestId("import-error").allTextContents()).toEqual([expect.stringMatching(/^3tire_size.*two-eighty-five/)]);
     await checkA11y(page, "import preview");
     await shot(page, "shop-catalog-import-preview");

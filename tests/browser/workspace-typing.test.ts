@@ -118,19 +118,39 @@ describe.each(VIEWPORTS)("typing into every workspace field at $name px (Chromiu
 
       // Backspacing 4⅝ in to the flange edge on the 9 in wheel: (4.625 − 0.5 − 4.5) × 25.4 = −9.525 mm;
       // with the spacer −47.625 mm: track +2 × 72.625 = 145.25 mm = +5.72 in.
-      await planned(page).locator("label", { hasText: /^Backspacing$/ }).click();
+      await planned(page)
+        .locator("label", { hasText: /^Backspacing$/ })
+        .click();
       await retype(page, planned(page).getByLabel("Backspacing (in)", { exact: true }), "4⅝");
-      await expect.poll(() => planned(page).getByText(/Offset −9\.5 mm/).count()).toBe(1);
+      await expect
+        .poll(() =>
+          planned(page)
+            .getByText(/Offset −9\.5 mm/)
+            .count(),
+        )
+        .toBe(1);
       await expect.poll(() => figure(page, "change-track").textContent()).toBe("+5.72 in");
 
       // Flange allowance 5/8: (4.625 − 0.625 − 4.5) × 25.4 = −12.7 mm; track +2 × 75.8 = 151.6 mm = +5.97 in.
       await retype(page, planned(page).getByLabel("Flange allowance (in)", { exact: true }), "5/8");
-      await expect.poll(() => planned(page).getByText(/Offset −12\.7 mm/).count()).toBe(1);
+      await expect
+        .poll(() =>
+          planned(page)
+            .getByText(/Offset −12\.7 mm/)
+            .count(),
+        )
+        .toBe(1);
       await expect.poll(() => figure(page, "change-track").textContent()).toBe("+5.97 in");
 
       // Wheel width 10 in: (4.625 − 0.625 − 5) × 25.4 = −25.4 mm; track +2 × 88.5 = 177 mm = +6.97 in.
       await retype(page, planned(page).getByLabel("Wheel width (in)", { exact: true }), "10");
-      await expect.poll(() => planned(page).getByText(/Offset −25\.4 mm/).count()).toBe(1);
+      await expect
+        .poll(() =>
+          planned(page)
+            .getByText(/Offset −25\.4 mm/)
+            .count(),
+        )
+        .toBe(1);
       await expect.poll(() => figure(page, "change-track").textContent()).toBe("+6.97 in");
 
       // Planned tire 35x12.50R17LT: 889 − 802.8 = 86.2 mm = +3.39 in.

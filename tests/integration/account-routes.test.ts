@@ -41,7 +41,10 @@ function post(path: string, body: string | object, headers: Record<string, strin
 
 describe("sign-up route", () => {
   it("creates an account (201) with a hashed password", async () => {
-    const res = await signup(post("/api/account/signup", { name: "Wren Ostrander", email: "wren@example.test", password: "correct horse battery" }), ctx);
+    const res = await signup(
+      post("/api/account/signup", { name: "Wren Ostrander", email: "wren@example.test", password: "correct horse battery" }),
+      ctx,
+    );
     expect(res.status).toBe(201);
     const row = await db("users").where({ email: "wren@example.test" }).first();
     expect(row.password_hash).toMatch(/^\$2[aby]\$/);
@@ -49,14 +52,25 @@ describe("sign-up route", () => {
   });
 
   it("answers the new account in API shape: no hash, no snake_case, ISO dates", async () => {
-    const res = await signup(post("/api/account/signup", { name: "Ines Marlow", email: "ines@example.test", password: "correct horse battery" }), ctx);
+    const res = await signup(
+      post("/api/account/signup", { name: "Ines Marlow", email: "ines@example.test", password: "correct horse battery" }),
+      ctx,
+    );
     expect(res.status).toBe(201);
     const body = await res.json();
     expect(internalKeys(body)).toEqual([]);
     const row = await db("users").where({ email: "ines@example.test" }).first();
     // The keys the answer had before keep their values.
     expect(body).toMatchObject({ id: row.id, email: "ines@example.test", name: "Ines Marlow" });
-    expect(body).toEqual({ id: row.id, email: "ines@example.test", name: "Ines Marlow", role: "member", shopId: null, createdAt: new Date(row.created_at).toISOString(), updatedAt: new Date(row.updated_at).toISOString() });
+    expect(body).toEqual({
+      id: row.id,
+      email: "ines@example.test",
+      name: "Ines Marlow",
+      role: "member",
+      shopId: null,
+      createdAt: new Date(row.created_at).toISOString(),
+      updatedAt: new Date(row.updated_at).toISOString(),
+    });
   });
 
   it("gives field errors for a bad e-mail and a short password, and writes nothing", async () => {
@@ -70,7 +84,10 @@ describe("sign-up route", () => {
   });
 
   it("refuses a duplicate e-mail with a field error on email", async () => {
-    const res = await signup(post("/api/account/signup", { name: "Again", email: "WREN@example.test", password: "another long password" }), ctx);
+    const res = await signup(
+      post("/api/account/signup", { name: "Again", email: "WREN@example.test", password: "another long password" }),
+      ctx,
+    );
     expect(res.status).toBe(422);
     expect((await res.json()).fieldErrors.email[0]).toMatch(/already exists/);
   });
@@ -93,11 +110,17 @@ describe("password reset routes", () => {
     expect(token).toBeDefined();
     const before = (await db("users").where({ email: "wren@example.test" }).first()).password_hash;
 
-    const ok = await reset(post("/api/account/password/reset", { token, password: "a brand new secret", confirm: "a brand new secret" }), ctx);
+    const ok = await reset(
+      post("/api/account/password/reset", { token, password: "a brand new secret", confirm: "a brand new secret" }),
+      ctx,
+    );
     expect(ok.status).toBe(200);
     expect((await db("users").where({ email: "wren@example.test" }).first()).password_hash).not.toBe(before);
 
-    const again = await reset(post("/api/account/password/reset", { token, password: "a third secret!!", confirm: "a third secret!!" }), ctx);
+    const again = await reset(
+      post("/api/account/password/reset", { token, password: "a third secret!!", confirm: "a third secret!!" }),
+      ctx,
+    );
     expect(again.status).toBe(422);
   });
 
@@ -116,7 +139,10 @@ describe("password reset routes", () => {
     sent.length = 0;
     const answers = new Set<string>();
     for (let i = 0; i < 20; i++) {
-      const res = await forgot(post("/api/account/password/forgot", { email: "Wren@Example.test" }, { "x-forwarded-for": `10.1.${i}.1` }), ctx);
+      const res = await forgot(
+        post("/api/account/password/forgot", { email: "Wren@Example.test" }, { "x-forwarded-for": `10.1.${i}.1` }),
+        ctx,
+      );
       expect(res.status).toBe(200);
       answers.add(JSON.stringify(await res.json()));
     }
@@ -140,7 +166,8 @@ describe("password reset routes", () => {
     const holder = await db.transaction();
     try {
       await holder.raw("lock table users in access exclusive mode");
-      const within = <T,>(p: Promise<T>) => Promise.race([p, new Promise<never>((_, no) => setTimeout(() => no(new Error("the answer waited for the lookup")), 5000))]);
+      const within = <T>(p: Promise<T>) =>
+        Promise.race([p, new Promise<never>((_, no) => setTimeout(() => no(new Error("the answer waited for the lookup")), 5000))]);
       const a = await within(forgot(post("/api/account/password/forgot", { email: "wren@example.test" }), ctx));
       const b = await within(forgot(post("/api/account/password/forgot", { email: "nobody-here@example.test" }), ctx));
       expect([a.status, b.status]).toEqual([200, 200]);
@@ -152,7 +179,10 @@ describe("password reset routes", () => {
   });
 
   it("refuse mismatched passwords with a field error", async () => {
-    const res = await reset(post("/api/account/password/reset", { token: "a".repeat(43), password: "one long password", confirm: "two long password" }), ctx);
+    const res = await reset(
+      post("/api/account/password/reset", { token: "a".repeat(43), password: "one long password", confirm: "two long password" }),
+      ctx,
+    );
     expect(res.status).toBe(422);
     expect((await res.json()).fieldErrors.confirm).toBeDefined();
   });

@@ -46,7 +46,10 @@ describe("admin users: answers are the API shape", () => {
     const list = await (await users.GET(req("GET", "/api/admin/users?q=example"), ctx())).json();
     expect(list.users.map((u: { email: string }) => u.email)).toEqual([ADMIN.email, MEMBER.email]);
     expect(internalKeys(list)).toEqual([]);
-    const res = await user.PATCH(req("PATCH", `/api/admin/users/${MEMBER.id}`, { role: "shop_staff", shopId: shop }), ctx({ id: MEMBER.id }));
+    const res = await user.PATCH(
+      req("PATCH", `/api/admin/users/${MEMBER.id}`, { role: "shop_staff", shopId: shop }),
+      ctx({ id: MEMBER.id }),
+    );
     expect(res.status).toBe(200);
     const changed = await res.json();
     expect(internalKeys(changed)).toEqual([]);

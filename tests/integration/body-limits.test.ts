@@ -54,14 +54,23 @@ describe("request bodies are cut off at their cap, not read whole", () => {
       new NextRequest("http://127.0.0.1:3000/api/vehicles", {
         method: "POST",
         headers: { "content-type": "application/json" },
-        body: JSON.stringify({ name: "Upload test", frontSuspension: "independent", boltPattern: "6x139.7", stockSetup: setup, currentSetup: setup }),
+        body: JSON.stringify({
+          name: "Upload test",
+          frontSuspension: "independent",
+          boltPattern: "6x139.7",
+          stockSetup: setup,
+          currentSetup: setup,
+        }),
       }),
       ctx(),
     );
     expect(created.status).toBe(201);
     const { vehicle } = (await created.json()) as { vehicle: { id: string } };
 
-    const { stream, pulled } = endlessBody(300 * 1024 * 1024, "--b\r\nContent-Disposition: form-data; name=\"file\"; filename=\"big.jpg\"\r\nContent-Type: image/jpeg\r\n\r\n");
+    const { stream, pulled } = endlessBody(
+      300 * 1024 * 1024,
+      '--b\r\nContent-Disposition: form-data; name="file"; filename="big.jpg"\r\nContent-Type: image/jpeg\r\n\r\n',
+    );
     const res = await uploads.POST(
       new NextRequest(`http://127.0.0.1:3000/api/vehicles/${vehicle.id}/photos`, {
         method: "POST",

@@ -59,7 +59,11 @@ async function create(name: string, input: ComparisonInput = DEFAULT_INPUT, extr
 
 describe("saved comparisons API", () => {
   it("computes the key figures on the server and ignores figures sent by the client", async () => {
-    const c = await create("Trail build", DEFAULT_INPUT, { figures: { diameterChangeMm: 9999 }, diameter_change_mm: 9999, warning_count: 0 });
+    const c = await create("Trail build", DEFAULT_INPUT, {
+      figures: { diameterChangeMm: 9999 },
+      diameter_change_mm: 9999,
+      warning_count: 0,
+    });
     const row = await db("comparisons").where({ id: c.id }).first();
     // ISO 4000-1: overall diameter = rim diameter + 2 × section width × aspect ratio:
     // 265/70R17 → 431.8 + 2 × 265 × 0.70 = 802.8 mm. 37x12.50R17LT flotation: 37 in = 939.8 mm.
@@ -143,16 +147,24 @@ describe("saved comparisons API", () => {
   it("round-trips the crawl-ratio inputs, and loads a comparison saved before they existed with both as not entered", async () => {
     const input = { ...DEFAULT_INPUT, vehicle: { ...DEFAULT_INPUT.vehicle, firstGearRatio: 4.03, transferLowRatio: 2.72 } };
     const c = await create("Crawler gears", input);
-    expect((await db("comparisons").where({ id: c.id }).first()).input.vehicle).toMatchObject({ firstGearRatio: 4.03, transferLowRatio: 2.72 });
+    expect((await db("comparisons").where({ id: c.id }).first()).input.vehicle).toMatchObject({
+      firstGearRatio: 4.03,
+      transferLowRatio: 2.72,
+    });
     const got = await (await one.GET(req("GET", `/api/comparisons/${c.id}`), idParams(c.id))).json();
     expect(got.comparison.input).toEqual(input);
     // A row written before the fields existed: its JSON has no firstGearRatio / transferLowRatio.
     const { firstGearRatio: _f, transferLowRatio: _l, ...olderVehicle } = DEFAULT_INPUT.vehicle;
-    await db("comparisons").where({ id: c.id }).update({ input: JSON.stringify({ ...DEFAULT_INPUT, vehicle: olderVehicle }) });
+    await db("comparisons")
+      .where({ id: c.id })
+      .update({ input: JSON.stringify({ ...DEFAULT_INPUT, vehicle: olderVehicle }) });
     const old = await (await one.GET(req("GET", `/api/comparisons/${c.id}`), idParams(c.id))).json();
     expect(old.comparison.input).toEqual(DEFAULT_INPUT);
     const listed = await (await list.GET(req("GET", "/api/comparisons"), noParams)).json();
-    expect(listed.comparisons.find((x: { id: string }) => x.id === c.id).input.vehicle).toMatchObject({ firstGearRatio: null, transferLowRatio: null });
+    expect(listed.comparisons.find((x: { id: string }) => x.id === c.id).input.vehicle).toMatchObject({
+      firstGearRatio: null,
+      transferLowRatio: null,
+    });
   });
 
   it("searches names and tire sizes and sorts", async () => {
@@ -160,7 +172,10 @@ describe("saved comparisons API", () => {
     await create("Beta camp rig");
     await create("alpha daily", { ...DEFAULT_INPUT, planned: { ...DEFAULT_INPUT.planned, tire: "35x12.50R17LT" } });
     await create("Gamma 100%_off");
-    const get = async (qs: string) => ((await (await list.GET(req("GET", `/api/comparisons?${qs}`), noParams)).json()).comparisons as { name: string }[]).map((x) => x.name);
+    const get = async (qs: string) =>
+      ((await (await list.GET(req("GET", `/api/comparisons?${qs}`), noParams)).json()).comparisons as { name: string }[]).map(
+        (x) => x.name,
+      );
     expect(await get("sort=name")).toEqual(["alpha daily", "Beta camp rig", "Gamma 100%_off"]);
     expect(await get("sort=updated")).toEqual(["Gamma 100%_off", "alpha daily", "Beta camp rig"]);
     expect(await get("q=35x12")).toEqual(["alpha daily"]);
@@ -172,13 +187,26 @@ describe("saved comparisons API", () => {
 
   it("tie only to one of the owner's own garage vehicles", async () => {
     const vehicleId = "c3000000-0000-4000-8000-00000000000a";
-    const base = { bolt_pattern: "5x114.3", bolt_pcd_mm: 114.3, bolt_count: 5, front_suspension: "independent", stock_setup: "{}", current_setup: "{}" };
+    const base = {
+      bolt_pattern: "5x114.3",
+      bolt_pcd_mm: 114.3,
+      bolt_count: 5,
+      front_suspension: "independent",
+      stock_setup: "{}",
+      current_setup: "{}",
+    };
     await db("vehicles").insert({ ...base, id: vehicleId, user_id: OWNER, name: "Wagon" });
     const c = await create("For the wagon", DEFAULT_INPUT, { vehicleId });
     expect((await db("comparisons").where({ id: c.id }).first()).vehicle_id).toBe(vehicleId);
-    const res = await list.POST(req("POST", "/api/comparisons", { name: "Bad vehicle", input: DEFAULT_INPUT, vehicleId: "wagon" }), noParams);
+    const res = await list.POST(
+      req("POST", "/api/comparisons", { name: "Bad vehicle", input: DEFAULT_INPUT, vehicleId: "wagon" }),
+      noParams,
+    );
     expect((await res.json()).fieldErrors.vehicleId).toBeDefined();
-    const unknown = await list.POST(req("POST", "/api/comparisons", { name: "Not mine", input: DEFAULT_INPUT, vehicleId: "c3000000-0000-4000-8000-00000000000b" }), noParams);
+    const unknown = await list.POST(
+      req("POST", "/api/comparisons", { name: "Not mine", input: DEFAULT_INPUT, vehicleId: "c3000000-0000-4000-8000-00000000000b" }),
+      noParams,
+    );
     expect(unknown.status).toBe(422);
     expect((await unknown.json()).fieldErrors.vehicleId[0]).toMatch(/not in your garage/);
   });
@@ -248,8 +276,12 @@ describe("share links", () => {
   it("the database keeps one live link per comparison and URL-safe slugs only", async () => {
     const c = await create("Constraints");
     await db("comparison_shares").insert({ comparison_id: c.id, slug: "A".repeat(24) });
-    await expect(db("comparison_shares").insert({ comparison_id: c.id, slug: "B".repeat(24) })).rejects.toThrow(/comparison_shares_one_live/);
-    await expect(db("comparison_shares").insert({ comparison_id: c.id, slug: "has space in it and is long", revoked_at: new Date() })).rejects.toThrow(/slug_urlsafe/);
+    await expect(db("comparison_shares").insert({ comparison_id: c.id, slug: "B".repeat(24) })).rejects.toThrow(
+      /comparison_shares_one_live/,
+    );
+    await expect(
+      db("comparison_shares").insert({ comparison_id: c.id, slug: "has space in it and is long", revoked_at: new Date() }),
+    ).rejects.toThrow(/slug_urlsafe/);
   });
 });
 

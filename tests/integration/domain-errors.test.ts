@@ -34,9 +34,21 @@ describe("route() answers domain errors", () => {
   });
 
   it("ConflictError: 409, with what it carries beside the message", async () => {
-    expect(await answer(new ConflictError("This import was already confirmed."))).toEqual({ status: 409, body: { error: "This import was already confirmed." } });
-    const existing = { id: "c1", name: "Ann Brook", phone: "555 0100", email: "", createdAt: "2026-01-01T00:00:00.000Z", updatedAt: "2026-01-01T00:00:00.000Z" };
-    expect(await answer(new ConflictError("Ann Brook already has this phone number or e-mail. Pick the existing customer.", { existing }))).toEqual({
+    expect(await answer(new ConflictError("This import was already confirmed."))).toEqual({
+      status: 409,
+      body: { error: "This import was already confirmed." },
+    });
+    const existing = {
+      id: "c1",
+      name: "Ann Brook",
+      phone: "555 0100",
+      email: "",
+      createdAt: "2026-01-01T00:00:00.000Z",
+      updatedAt: "2026-01-01T00:00:00.000Z",
+    };
+    expect(
+      await answer(new ConflictError("Ann Brook already has this phone number or e-mail. Pick the existing customer.", { existing })),
+    ).toEqual({
       status: 409,
       body: { error: "Ann Brook already has this phone number or e-mail. Pick the existing customer.", existing },
     });
@@ -48,7 +60,10 @@ describe("route() answers domain errors", () => {
       body: { error: "Some fields need attention.", fieldErrors: { vehicleId: ["That vehicle is not in your garage."] } },
     });
     const lines = await answer(new InvalidError("Some lines need attention.", { "lines.2.quantity": ["Count whole items."] }));
-    expect(lines).toEqual({ status: 422, body: { error: "Some lines need attention.", fieldErrors: { "lines.2.quantity": ["Line 3: Count whole items."] } } });
+    expect(lines).toEqual({
+      status: 422,
+      body: { error: "Some lines need attention.", fieldErrors: { "lines.2.quantity": ["Line 3: Count whole items."] } },
+    });
     expect(await answer(new InvalidError("The customer has no e-mail address. Add one before sending."))).toEqual({
       status: 422,
       body: { error: "The customer has no e-mail address. Add one before sending." },
@@ -56,8 +71,14 @@ describe("route() answers domain errors", () => {
   });
 
   it("GoneError: 410; UnknownReferenceError: 400", async () => {
-    expect(await answer(new GoneError("This invitation has expired."))).toEqual({ status: 410, body: { error: "This invitation has expired." } });
-    expect(await answer(new UnknownReferenceError("Unknown checkout session."))).toEqual({ status: 400, body: { error: "Unknown checkout session." } });
+    expect(await answer(new GoneError("This invitation has expired."))).toEqual({
+      status: 410,
+      body: { error: "This invitation has expired." },
+    });
+    expect(await answer(new UnknownReferenceError("Unknown checkout session."))).toEqual({
+      status: 400,
+      body: { error: "Unknown checkout session." },
+    });
   });
 
   it("a kind of domain error route() has no status for is a 500 with a reference, its message never shown", async () => {

@@ -29,13 +29,16 @@ const SHOP = "c3000000-0000-4000-8000-000000000001";
 
 function as(who: Who | null) {
   const u = who ? USERS[who] : null;
-  session.current = u ? { user: { id: u.id, role: u.role, shopId: u.role === "shop_staff" ? SHOP : null, name: u.name, email: u.email } } : null;
+  session.current = u
+    ? { user: { id: u.id, role: u.role, shopId: u.role === "shop_staff" ? SHOP : null, name: u.name, email: u.email } }
+    : null;
 }
 
 beforeAll(async () => {
   await rebuild(db);
   await db("shops").insert({ id: SHOP, name: "Test Shop" });
-  for (const u of Object.values(USERS)) await db("users").insert({ ...u, password_hash: "x", shop_id: u.role === "shop_staff" ? SHOP : null });
+  for (const u of Object.values(USERS))
+    await db("users").insert({ ...u, password_hash: "x", shop_id: u.role === "shop_staff" ? SHOP : null });
   s3 = await startFakeS3({ port: 0, bucket: "test-photos", directory: dir, reset: true });
   settings = { endpoint: s3.endpoint, bucket: "test-photos", accessKeyId: "S3RVER", secretAccessKey: "S3RVER", region: "us-east-1" };
   store = s3PhotoStore(settings);
@@ -104,7 +107,13 @@ async function pngWithGps(width = 120, height = 80): Promise<Buffer> {
     .toBuffer();
 }
 
-function upload(vehicleId: string, bytes: Buffer | Uint8Array, name: string, extra: Record<string, string> = {}, headers: Record<string, string> = {}) {
+function upload(
+  vehicleId: string,
+  bytes: Buffer | Uint8Array,
+  name: string,
+  extra: Record<string, string> = {},
+  headers: Record<string, string> = {},
+) {
   const form = new FormData();
   form.set("file", new File([new Uint8Array(bytes)], name, { type: "image/jpeg" }));
   for (const [k, v] of Object.entries(extra)) form.set(k, v);
@@ -150,7 +159,12 @@ describe("vehicles", () => {
     expect((await vehicle.PATCH(req("PATCH", `/api/vehicles/${adaVehicle}`, VEHICLE), ctx({ id: adaVehicle }))).status).toBe(404);
     expect((await vehicle.DELETE(req("DELETE", `/api/vehicles/${adaVehicle}`), ctx({ id: adaVehicle }))).status).toBe(404);
     const post = await clearances.POST(
-      req("POST", `/api/vehicles/${adaVehicle}/clearances`, { label: "x", direction: "upward", distance: "1 in", suspensionState: "ride-height" }),
+      req("POST", `/api/vehicles/${adaVehicle}/clearances`, {
+        label: "x",
+        direction: "upward",
+        distance: "1 in",
+        suspensionState: "ride-height",
+      }),
       ctx({ id: adaVehicle }),
     );
     expect(post.status).toBe(404);
@@ -174,7 +188,10 @@ describe("vehicles", () => {
 
   it("updates the owner's vehicle", async () => {
     as("ada");
-    const res = await vehicle.PATCH(req("PATCH", `/api/vehicles/${adaVehicle}`, { ...VEHICLE, name: "Gravel hauler II", boltPattern: "6x139.7" }), ctx({ id: adaVehicle }));
+    const res = await vehicle.PATCH(
+      req("PATCH", `/api/vehicles/${adaVehicle}`, { ...VEHICLE, name: "Gravel hauler II", boltPattern: "6x139.7" }),
+      ctx({ id: adaVehicle }),
+    );
     expect(res.status).toBe(200);
     expect((await res.json()).vehicle).toMatchObject({ name: "Gravel hauler II", boltPattern: "6x139.7" });
   });
@@ -193,7 +210,12 @@ describe("measured clearances", () => {
 
   it("stores inches with a fraction as mm (1-1/2 in = 38.1 mm), with the current setup as the measured setup", async () => {
     as("ada");
-    const res = await post({ label: "frame rail, full left lock", direction: "inboard", distance: "1-1/2 in", suspensionState: "full-lock" });
+    const res = await post({
+      label: "frame rail, full left lock",
+      direction: "inboard",
+      distance: "1-1/2 in",
+      suspensionState: "full-lock",
+    });
     expect(res.status).toBe(201);
     const c = (await res.json()).clearance;
     adaClearance = c.id;
@@ -294,7 +316,11 @@ describe("photo uploads", () => {
     await rejected(json, 415, /multipart/);
     const form = new FormData();
     form.set("note", "nothing");
-    await rejected(await uploads.POST(req("POST", `/api/vehicles/${adaVehicle}/photos`, form), ctx({ id: adaVehicle })), 422, /Choose a photo/);
+    await rejected(
+      await uploads.POST(req("POST", `/api/vehicles/${adaVehicle}/photos`, form), ctx({ id: adaVehicle })),
+      422,
+      /Choose a photo/,
+    );
   });
 
   it("leaves nothing behind when the store fails halfway", async () => {
@@ -323,7 +349,10 @@ describe("photo uploads", () => {
     const second = await upload(adaVehicle, await pngWithGps(), "whole truck.png");
     expect(second.status).toBe(201);
     expect(await objectKeys()).toHaveLength(4);
-    const del = await clearance.DELETE(req("DELETE", `/api/vehicles/${adaVehicle}/clearances/${adaClearance}`), ctx({ id: adaVehicle, clearanceId: adaClearance }));
+    const del = await clearance.DELETE(
+      req("DELETE", `/api/vehicles/${adaVehicle}/clearances/${adaClearance}`),
+      ctx({ id: adaVehicle, clearanceId: adaClearance }),
+    );
     expect(del.status).toBe(200);
     expect(await db("vehicle_photos").where({ id: adaPhoto }).first()).toBeUndefined();
     expect(await objectKeys()).toHaveLength(2);
@@ -348,14 +377,19 @@ describe("install checklists", () => {
     const first = await (await GET(req("GET", `/api/vehicles/${id}/checklist?${Q}`), ctx({ id }))).json();
     expect(first.ticked).toEqual([]);
     expect(first.comparisonId).toBeNull();
-    expect(first.items.map((i: { id: string }) => i.id)).toEqual(expect.arrayContaining(["regear", "speedometer", "lug-torque", "lug-recheck", "beadlock"]));
+    expect(first.items.map((i: { id: string }) => i.id)).toEqual(
+      expect.arrayContaining(["regear", "speedometer", "lug-torque", "lug-recheck", "beadlock"]),
+    );
 
     const bad = await PUT(req("PUT", `/api/vehicles/${id}/checklist`, { planned: PLANNED, ticked: ["regear", "made-up"] }), ctx({ id }));
     expect(bad.status).toBe(422);
     expect((await bad.json()).fieldErrors.ticked[0]).toMatch(/made-up/);
     expect(await db("install_checklists").count()).toEqual([{ count: "0" }]);
 
-    const ok = await PUT(req("PUT", `/api/vehicles/${id}/checklist`, { planned: PLANNED, ticked: ["regear", "alignment", "regear"] }), ctx({ id }));
+    const ok = await PUT(
+      req("PUT", `/api/vehicles/${id}/checklist`, { planned: PLANNED, ticked: ["regear", "alignment", "regear"] }),
+      ctx({ id }),
+    );
     expect(ok.status).toBe(200);
     expect((await ok.json()).ticked).toEqual(["regear", "alignment"]);
     const again = await (await GET(req("GET", `/api/vehicles/${id}/checklist?${Q}`), ctx({ id }))).json();
@@ -380,7 +414,10 @@ describe("install checklists", () => {
     const A = a.vehicle.id as string;
     const saveFor = async (who: Who, vehicleId: string | null) => {
       as(who);
-      const res = await comparisons.POST(req("POST", "/api/comparisons", { name: `35s for ${who}`, input: { ...DEFAULT_INPUT, planned: PLANNED }, vehicleId }), ctx());
+      const res = await comparisons.POST(
+        req("POST", "/api/comparisons", { name: `35s for ${who}`, input: { ...DEFAULT_INPUT, planned: PLANNED }, vehicleId }),
+        ctx(),
+      );
       expect(res.status).toBe(201);
       return (await res.json()).comparison.id as string;
     };
@@ -426,7 +463,12 @@ describe("install checklists", () => {
     const id = body.vehicle.id as string;
     as("ada");
     const point = await clearances.POST(
-      req("POST", `/api/vehicles/${id}/clearances`, { label: "Frame rail", direction: "inboard", distance: "1-1/2 in", suspensionState: "full-lock" }),
+      req("POST", `/api/vehicles/${id}/clearances`, {
+        label: "Frame rail",
+        direction: "inboard",
+        distance: "1-1/2 in",
+        suspensionState: "full-lock",
+      }),
       ctx({ id }),
     );
     const pointId = (await point.json()).clearance.id as string;
@@ -448,7 +490,12 @@ describe("install checklists", () => {
     const id = body.vehicle.id as string;
     as("ada");
     const point = await clearances.POST(
-      req("POST", `/api/vehicles/${id}/clearances`, { label: "fender lip, full stuff", direction: "upward", distance: "3 in", suspensionState: "full-stuff" }),
+      req("POST", `/api/vehicles/${id}/clearances`, {
+        label: "fender lip, full stuff",
+        direction: "upward",
+        distance: "3 in",
+        suspensionState: "full-stuff",
+      }),
       ctx({ id }),
     );
     const pointId = (await point.json()).clearance.id as string;
@@ -461,11 +508,16 @@ describe("install checklists", () => {
     expect(await trims(Q)).toEqual({ margin: 12.7, trims: [] });
     const tried = await trims(`${Q}&m=40`);
     expect(tried.margin).toBe(40);
-    expect(tried.trims).toEqual([expect.objectContaining({ id: `trim:${pointId}`, title: expect.stringMatching(/^Tight at fender lip, full stuff/) })]);
+    expect(tried.trims).toEqual([
+      expect.objectContaining({ id: `trim:${pointId}`, title: expect.stringMatching(/^Tight at fender lip, full stuff/) }),
+    ]);
     // An unusable m is ignored, not an error: the vehicle's margin applies.
     expect((await trims(`${Q}&m=-5`)).margin).toBe(12.7);
 
-    const patch = await vehicle.PATCH(req("PATCH", `/api/vehicles/${id}`, { ...VEHICLE, name: "Margin hauler", clearanceMarginMm: "1-1/2 in" }), ctx({ id }));
+    const patch = await vehicle.PATCH(
+      req("PATCH", `/api/vehicles/${id}`, { ...VEHICLE, name: "Margin hauler", clearanceMarginMm: "1-1/2 in" }),
+      ctx({ id }),
+    );
     expect(patch.status).toBe(200);
     // 1-1/2 in = 38.1 mm (NIST SP 811)
     expect((await patch.json()).vehicle.clearanceMarginMm).toBeCloseTo(38.1, 9);

@@ -14,10 +14,20 @@ import { U, seedShops } from "./support/shopFixture";
 const session = vi.hoisted(() => ({ current: null as unknown }));
 vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
 vi.mock("next/cache", () => ({ revalidatePath: () => {} }));
-vi.mock("@/lib/platform/mail", () => ({ sendMail: async () => {}, queueMail: async () => "job", appOrigin: () => "http://127.0.0.1:3000" }));
+vi.mock("@/lib/platform/mail", () => ({
+  sendMail: async () => {},
+  queueMail: async () => "job",
+  appOrigin: () => "http://127.0.0.1:3000",
+}));
 
 const db = testDb();
-const MEMBER = { id: "d4000000-0000-4000-8000-000000000001", role: "member", shop_id: null, email: "human@example.test", name: "Ines Varro" };
+const MEMBER = {
+  id: "d4000000-0000-4000-8000-000000000001",
+  role: "member",
+  shop_id: null,
+  email: "human@example.test",
+  name: "Ines Varro",
+};
 beforeAll(async () => {
   await rebuild(db);
   await seedShops(db);
@@ -40,7 +50,8 @@ const quotes = await import("@/app/api/shop/quotes/route");
 const quoteById = await import("@/app/api/shop/quotes/[id]/route");
 
 /** What a validator says by itself (zod 4's English messages), and raw paths or identifiers. */
-const VALIDATOR_WORDING = /Invalid input|expected \w+, received|Too (small|big)|Invalid (option|UUID|string|email|format|element|key)|Unrecognized key|>=|<=/;
+const VALIDATOR_WORDING =
+  /Invalid input|expected \w+, received|Too (small|big)|Invalid (option|UUID|string|email|format|element|key)|Unrecognized key|>=|<=/;
 const RAW_PATH = /\b[A-Za-z]\w*\.\d+(\.\w+)?\b|\b[a-z]+[A-Z]\w*\b/;
 
 async function messagesOf(res: Response): Promise<{ status: number; error: string; fieldErrors: Record<string, string[]> }> {
@@ -58,7 +69,8 @@ function expectHuman({ error, fieldErrors }: { error: string; fieldErrors: Recor
   // A message about a row names it counted from 1 (key lines.8.x → "Line 9").
   for (const [key, messages] of Object.entries(fieldErrors)) {
     const index = key.split(".").find((s) => /^\d+$/.test(s));
-    if (index !== undefined) for (const m of messages) expect(m, `${key}: ${m}`).toMatch(new RegExp(`\\b[A-Za-z]+ ${Number(index) + 1}\\b`));
+    if (index !== undefined)
+      for (const m of messages) expect(m, `${key}: ${m}`).toMatch(new RegExp(`\\b[A-Za-z]+ ${Number(index) + 1}\\b`));
   }
 }
 
@@ -74,7 +86,9 @@ describe("messages from the API are for people", () => {
     expect(fp.status).toBe(422);
     expectHuman(fp);
 
-    const rp = await messagesOf(await reset(req("POST", "/api/account/password/reset", { token: 12, password: null, confirm: false }), ctx()));
+    const rp = await messagesOf(
+      await reset(req("POST", "/api/account/password/reset", { token: 12, password: null, confirm: false }), ctx()),
+    );
     expect(rp.status).toBe(422);
     expect(Object.keys(rp.fieldErrors).sort()).toEqual(["confirm", "password", "token"]);
     expectHuman(rp);
@@ -87,7 +101,11 @@ describe("messages from the API are for people", () => {
 
   it("a saved comparison with wrong-typed and missing values", async () => {
     session.current = sessionOf(MEMBER);
-    const input = { ...DEFAULT_INPUT, current: { ...DEFAULT_INPUT.current, wheelWidthIn: "8" }, vehicle: { ...DEFAULT_INPUT.vehicle, cruiseSpeedsMph: [55, "sixty"] } };
+    const input = {
+      ...DEFAULT_INPUT,
+      current: { ...DEFAULT_INPUT.current, wheelWidthIn: "8" },
+      vehicle: { ...DEFAULT_INPUT.vehicle, cruiseSpeedsMph: [55, "sixty"] },
+    };
     const res = await messagesOf(await comparisons(req("POST", "/api/comparisons", { name: 12, input, vehicleId: 3 }), ctx()));
     expect(res.status).toBe(422);
     expect(Object.keys(res.fieldErrors).length).toBeGreaterThan(1);
@@ -100,18 +118,30 @@ describe("messages from the API are for people", () => {
 
   it("a garage vehicle with wrong-typed values", async () => {
     session.current = sessionOf(MEMBER);
-    const res = await messagesOf(await vehicles(req("POST", "/api/vehicles", { name: 4, year: "last year", frontSuspension: 2, currentSetup: "big" }), ctx()));
+    const res = await messagesOf(
+      await vehicles(req("POST", "/api/vehicles", { name: 4, year: "last year", frontSuspension: 2, currentSetup: "big" }), ctx()),
+    );
     expect(res.status).toBe(422);
     expectHuman(res);
   });
 
   it("a quote whose ninth line is wrong-typed says “Line 9”", async () => {
     session.current = sessionOf(U.staffA);
-    const customer = await (await customers(req("POST", "/api/shop/customers", { name: "Rhea Calloway", phone: "555 010 4477", email: "" }), ctx())).json();
+    const customer = await (
+      await customers(req("POST", "/api/shop/customers", { name: "Rhea Calloway", phone: "555 010 4477", email: "" }), ctx())
+    ).json();
     const created = await quotes.POST(
       req("POST", "/api/shop/quotes", {
         customerId: customer.customer.id,
-        vehicle: { description: "Test pickup", boltPattern: "6x5.5", tireSize: "265/70R17", wheelDiameterIn: 17, wheelWidthIn: 8, offsetMode: "offset", offsetMm: 25 },
+        vehicle: {
+          description: "Test pickup",
+          boltPattern: "6x5.5",
+          tireSize: "265/70R17",
+          wheelDiameterIn: 17,
+          wheelWidthIn: 8,
+          offsetMode: "offset",
+          offsetMm: 25,
+        },
         tireItemId: (await db("catalog_items").where({ shop_id: U.staffA.shop_id, kind: "tire" }).first()).id,
         wheelItemId: (await db("catalog_items").where({ shop_id: U.staffA.shop_id, kind: "wheel" }).first()).id,
         quantity: 4,
@@ -123,15 +153,21 @@ describe("messages from the API are for people", () => {
     const line = { kind: "custom", sku: "", description: "Labour", quantity: 1, unitPriceCents: 1000, discountCents: 0, taxable: false };
     const lines = Array.from({ length: 9 }, () => ({ ...line }));
     lines[8] = { ...line, quantity: "two", unitPriceCents: "ten", discountCents: -5, taxable: "yes" } as never;
-    const res = await messagesOf(await quoteById.PUT(req("PUT", `/api/shop/quotes/${id}`, { lines, discountCents: "none", notes: 3 }), ctx({ id })));
+    const res = await messagesOf(
+      await quoteById.PUT(req("PUT", `/api/shop/quotes/${id}`, { lines, discountCents: "none", notes: 3 }), ctx({ id })),
+    );
     expect(res.status).toBe(422);
-    expect(Object.keys(res.fieldErrors)).toEqual(expect.arrayContaining(["lines.8.quantity", "lines.8.unitPriceCents", "lines.8.discountCents", "lines.8.taxable", "discountCents"]));
+    expect(Object.keys(res.fieldErrors)).toEqual(
+      expect.arrayContaining(["lines.8.quantity", "lines.8.unitPriceCents", "lines.8.discountCents", "lines.8.taxable", "discountCents"]),
+    );
     expectHuman(res);
     expect(res.fieldErrors["lines.8.unitPriceCents"]![0]).toMatch(/^Line 9: .*unit price/);
 
     // Totals the engine refuses after the schema passed: the discount of line 9 is more than its amount.
     lines[8] = { ...line, discountCents: 5000 };
-    const over = await messagesOf(await quoteById.PUT(req("PUT", `/api/shop/quotes/${id}`, { lines, discountCents: 0, notes: "" }), ctx({ id })));
+    const over = await messagesOf(
+      await quoteById.PUT(req("PUT", `/api/shop/quotes/${id}`, { lines, discountCents: 0, notes: "" }), ctx({ id })),
+    );
     expect(over.status).toBe(422);
     expectHuman(over);
   });

@@ -51,13 +51,27 @@ const { QUEUES, getBoss } = await import("@/lib/platform/jobs/boss");
 
 const SETUP = { tire: "265/70R17", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 }, spacerMm: 0 };
 const VEHICLE = {
-  name: "Gravel hauler", year: 2009, make: "Generic", model: "Full-size pickup", trim: null, frontSuspension: "independent",
-  boltPattern: "6 on 5.5", hubBoreMm: "106.1", stockSetup: SETUP, currentSetup: SETUP, liftHeightMm: "2-1/2",
-  kingpinInclinationDeg: 8, axleRatio: 3.73, transmissionRatio: "0.69", notes: "",
+  name: "Gravel hauler",
+  year: 2009,
+  make: "Generic",
+  model: "Full-size pickup",
+  trim: null,
+  frontSuspension: "independent",
+  boltPattern: "6 on 5.5",
+  hubBoreMm: "106.1",
+  stockSetup: SETUP,
+  currentSetup: SETUP,
+  liftHeightMm: "2-1/2",
+  kingpinInclinationDeg: 8,
+  axleRatio: 3.73,
+  transmissionRatio: "0.69",
+  notes: "",
 };
 
-const createVehicle = (body: unknown, key?: string) => vehicles.POST(req("POST", "/api/vehicles", body as object, key === undefined ? {} : { "idempotency-key": key }), ctx());
-const vehicleCount = async (userId = ADA.id) => Number((await db("vehicles").where({ user_id: userId }).count<{ count: string }[]>())[0]!.count);
+const createVehicle = (body: unknown, key?: string) =>
+  vehicles.POST(req("POST", "/api/vehicles", body as object, key === undefined ? {} : { "idempotency-key": key }), ctx());
+const vehicleCount = async (userId = ADA.id) =>
+  Number((await db("vehicles").where({ user_id: userId }).count<{ count: string }[]>())[0]!.count);
 
 describe("Idempotency-Key on creates", () => {
   it("replays a create sent again with the same key and body: the same id, one row, marked as a replay", async () => {
@@ -110,7 +124,9 @@ describe("Idempotency-Key on creates", () => {
   it("treats a key past its 24 hours as new", async () => {
     as(ADA);
     const before = await vehicleCount();
-    await db("idempotency_keys").where({ user_id: ADA.id, key: "veh-1" }).update({ expires_at: db.raw("now() - interval '1 second'") });
+    await db("idempotency_keys")
+      .where({ user_id: ADA.id, key: "veh-1" })
+      .update({ expires_at: db.raw("now() - interval '1 second'") });
     const res = await createVehicle({ ...VEHICLE, name: "Next day truck" }, "veh-1");
     expect(res.status).toBe(201);
     expect(res.headers.get("idempotent-replayed")).toBeNull();
@@ -127,12 +143,20 @@ describe("Idempotency-Key on creates", () => {
 
   it("answers 409 while a reservation is fresh, and takes over one left pending for over a minute (a server that died mid-create)", async () => {
     as(ADA);
-    await db("idempotency_keys").insert({ user_id: ADA.id, route: "POST /api/vehicles", key: "veh-crash", request_hash: createHash("sha256").update(JSON.stringify(VEHICLE)).digest("hex"), attempt: "e1000000-0000-4000-8000-0000000000aa" });
+    await db("idempotency_keys").insert({
+      user_id: ADA.id,
+      route: "POST /api/vehicles",
+      key: "veh-crash",
+      request_hash: createHash("sha256").update(JSON.stringify(VEHICLE)).digest("hex"),
+      attempt: "e1000000-0000-4000-8000-0000000000aa",
+    });
     const before = await vehicleCount();
     const busy = await createVehicle(VEHICLE, "veh-crash");
     expect(busy.status).toBe(409);
     expect((await busy.json()).error).toMatch(/still in progress/);
-    await db("idempotency_keys").where({ key: "veh-crash" }).update({ locked_at: db.raw("now() - interval '2 minutes'") });
+    await db("idempotency_keys")
+      .where({ key: "veh-crash" })
+      .update({ locked_at: db.raw("now() - interval '2 minutes'") });
     const taken = await createVehicle(VEHICLE, "veh-crash");
     expect(taken.status).toBe(201);
     expect(await vehicleCount()).toBe(before + 1);
@@ -141,7 +165,9 @@ describe("Idempotency-Key on creates", () => {
 });
 
 async function jpeg(): Promise<Buffer> {
-  return sharp({ create: { width: 96, height: 64, channels: 3, background: "#5a7d3c" } }).jpeg().toBuffer();
+  return sharp({ create: { width: 96, height: 64, channels: 3, background: "#5a7d3c" } })
+    .jpeg()
+    .toBuffer();
 }
 
 /** One multipart body, serialized once, so a retry sends the very same bytes (as a client replaying its request does). */
@@ -175,7 +201,11 @@ describe("photo uploads", () => {
     as(ADA);
     vehicleId = (await (await createVehicle({ ...VEHICLE, name: "Photo truck" })).json()).vehicle.id;
     const { body, type } = await multipart(await jpeg(), "door.jpg");
-    const send = () => uploads.POST(req("POST", `/api/vehicles/${vehicleId}/photos`, body, { "content-type": type, "idempotency-key": "photo-1" }), ctx({ id: vehicleId }));
+    const send = () =>
+      uploads.POST(
+        req("POST", `/api/vehicles/${vehicleId}/photos`, body, { "content-type": type, "idempotency-key": "photo-1" }),
+        ctx({ id: vehicleId }),
+      );
     const first = await send();
     expect(first.status).toBe(201);
     const second = await send();

@@ -13,7 +13,13 @@ vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
 
 const db = testDb();
 const ADMIN = { id: "ad000000-0000-4000-8000-000000000001", role: "admin", shop_id: null, email: "admin@example.test", name: "Ada Admin" };
-const MEMBER = { id: "ad000000-0000-4000-8000-000000000002", role: "member", shop_id: null, email: "member@example.test", name: "Mo Member" };
+const MEMBER = {
+  id: "ad000000-0000-4000-8000-000000000002",
+  role: "member",
+  shop_id: null,
+  email: "member@example.test",
+  name: "Mo Member",
+};
 
 /** A port nothing listens on yet: the mail server is "down" until a test starts one there. */
 async function freePort(): Promise<number> {
@@ -32,7 +38,10 @@ async function mailServerUp() {
     authOptional: true,
     disabledCommands: ["STARTTLS"],
     onData(stream, _s, done) {
-      simpleParser(stream).then((m) => { received.push(m); done(); }, done);
+      simpleParser(stream).then((m) => {
+        received.push(m);
+        done();
+      }, done);
     },
   });
   await new Promise<void>((r) => smtp!.listen(smtpPort, "127.0.0.1", r));
@@ -69,7 +78,12 @@ const secondsFromNow = (d: Date) => (new Date(d).getTime() - Date.now()) / 1000;
 describe("queued mail", () => {
   it("a mail queued while the mail server is down is retried with a growing pause, then delivered with its attachment intact", async () => {
     const pdf = Buffer.from("%PDF-1.4 quote body \u0000\u00ff binary bytes");
-    const id = await mail.queueMail({ to: "dana@example.test", subject: "Your quote Q-1001", text: "Secret link /q/abc", attachments: [{ filename: "quote-Q-1001.pdf", content: pdf, contentType: "application/pdf" }] });
+    const id = await mail.queueMail({
+      to: "dana@example.test",
+      subject: "Your quote Q-1001",
+      text: "Secret link /q/abc",
+      attachments: [{ filename: "quote-Q-1001.pdf", content: pdf, contentType: "application/pdf" }],
+    });
 
     const first = await drainQueue(QUEUES.mail.name);
     expect(first.failed.map((f) => f.id)).toEqual([id]);
@@ -106,7 +120,14 @@ describe("queued mail", () => {
 
   it("refuses attachments above the stated cap instead of storing a huge job", async () => {
     const big = Buffer.alloc(mail.MAX_QUEUED_ATTACHMENT_BYTES + 1);
-    await expect(mail.queueMail({ to: "x@example.test", subject: "big", text: "", attachments: [{ filename: "a.bin", content: big, contentType: "application/octet-stream" }] })).rejects.toThrow(/exceed the 2 MB/);
+    await expect(
+      mail.queueMail({
+        to: "x@example.test",
+        subject: "big",
+        text: "",
+        attachments: [{ filename: "a.bin", content: big, contentType: "application/octet-stream" }],
+      }),
+    ).rejects.toThrow(/exceed the 2 MB/);
   });
 });
 
@@ -115,7 +136,11 @@ describe("admin: failed jobs", () => {
   beforeAll(async () => {
     const boss = await getBoss();
     // One attempt only, so it fails for good at once.
-    failedId = (await boss.send(QUEUES.mail.name, mail.toQueued({ to: "erin@example.test", subject: "Join Shop A", text: "invite token http://x/join/TOPSECRET" }) as object, { retryLimit: 0 }))!;
+    failedId = (await boss.send(
+      QUEUES.mail.name,
+      mail.toQueued({ to: "erin@example.test", subject: "Join Shop A", text: "invite token http://x/join/TOPSECRET" }) as object,
+      { retryLimit: 0 },
+    ))!;
     const r = await drainQueue(QUEUES.mail.name);
     expect(r.failed.map((f) => f.id)).toContain(failedId);
     expect((await jobRow(failedId)).state).toBe("failed");
@@ -132,7 +157,20 @@ describe("admin: failed jobs", () => {
     expect(res.status).toBe(200);
     const text = await res.text();
     expect(text).not.toMatch(/erin@example\.test|Join Shop A|TOPSECRET|invite token/);
-    const job = (JSON.parse(text) as { jobs: { id: string; queue: string; state: string; lastError: string; attempts: number; maxAttempts: number; createdAt: string; lastAttemptAt: string }[] }).jobs.find((j) => j.id === failedId)!;
+    const job = (
+      JSON.parse(text) as {
+        jobs: {
+          id: string;
+          queue: string;
+          state: string;
+          lastError: string;
+          attempts: number;
+          maxAttempts: number;
+          createdAt: string;
+          lastAttemptAt: string;
+        }[];
+      }
+    ).jobs.find((j) => j.id === failedId)!;
     expect(job).toMatchObject({ queue: "mail.send", state: "failed", attempts: 1, maxAttempts: 1 });
     expect(job.lastError).toMatch(/mail server unavailable/);
     expect(Date.parse(job.createdAt)).toBeLessThanOrEqual(Date.parse(job.lastAttemptAt));
@@ -156,7 +194,9 @@ describe("admin: failed jobs", () => {
     expect(received.some((m) => m.subject === "Join Shop A")).toBe(true);
     await mailServerDown();
     // Delivered: it leaves the list; retrying it again is a 404.
-    expect(((await (await listRoute(req("GET", "/api/admin/jobs"), ctx())).json()) as { jobs: { id: string }[] }).jobs.map((j) => j.id)).not.toContain(failedId);
+    expect(
+      ((await (await listRoute(req("GET", "/api/admin/jobs"), ctx())).json()) as { jobs: { id: string }[] }).jobs.map((j) => j.id),
+    ).not.toContain(failedId);
     expect((await retryRoute(req("POST", `/api/admin/jobs/${failedId}/retry`, {}), ctx({ id: failedId }))).status).toBe(404);
   });
 });
@@ -169,16 +209,38 @@ describe("quote expiry", () => {
     await seedShops(db);
     const [cust] = await db("customers").insert({ shop_id: SHOP_A, name: "Cass Customer", email: "cass@example.test" }).returning("id");
     const base = {
-      shop_id: SHOP_A, customer_id: cust.id, created_by: U.ownerA.id, vehicle_description: "Test pickup", bolt_pattern: "6x5.5",
-      current_setup: JSON.stringify({ tire: "265/70R17", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 }, spacerMm: 0 }), wheel_qty: 4, fitment: JSON.stringify({}), tax_rate_bp: 825, deposit_pct: 25,
+      shop_id: SHOP_A,
+      customer_id: cust.id,
+      created_by: U.ownerA.id,
+      vehicle_description: "Test pickup",
+      bolt_pattern: "6x5.5",
+      current_setup: JSON.stringify({
+        tire: "265/70R17",
+        wheelDiameterIn: 17,
+        wheelWidthIn: 8,
+        position: { mode: "offset", offsetMm: 25 },
+        spacerMm: 0,
+      }),
+      wheel_qty: 4,
+      fitment: JSON.stringify({}),
+      tax_rate_bp: 825,
+      deposit_pct: 25,
     };
     const day = 24 * 3600 * 1000;
-    const rows = await db("quotes").insert([
-      { ...base, number: 1, status: "sent", valid_until: new Date(Date.now() - day), public_token_hash: createHash("sha256").update(TOKEN).digest("hex") },
-      { ...base, number: 2, status: "accepted", valid_until: new Date(Date.now() - 60_000) },
-      { ...base, number: 3, status: "sent", valid_until: new Date(Date.now() + day) },
-      { ...base, number: 4, status: "draft", valid_until: new Date(Date.now() - day) },
-    ]).returning("id");
+    const rows = await db("quotes")
+      .insert([
+        {
+          ...base,
+          number: 1,
+          status: "sent",
+          valid_until: new Date(Date.now() - day),
+          public_token_hash: createHash("sha256").update(TOKEN).digest("hex"),
+        },
+        { ...base, number: 2, status: "accepted", valid_until: new Date(Date.now() - 60_000) },
+        { ...base, number: 3, status: "sent", valid_until: new Date(Date.now() + day) },
+        { ...base, number: 4, status: "draft", valid_until: new Date(Date.now() - day) },
+      ])
+      .returning("id");
     [ids.due, ids.dueAccepted, ids.current, ids.draftOld] = rows.map((r: { id: string }) => r.id) as [string, string, string, string];
   });
 
@@ -189,8 +251,15 @@ describe("quote expiry", () => {
     expect((await getQuoteDetail(db, scope, ids.due)).quote.status).toBe("expired");
     expect((await findByToken(db, TOKEN))!.status).toBe("expired");
     const list = await listQuotes(db, scope);
-    expect(Object.fromEntries(list.map((q: { id: string; status: string }) => [q.id, q.status]))).toEqual({ [ids.due]: "expired", [ids.dueAccepted]: "expired", [ids.current]: "sent", [ids.draftOld]: "draft" });
-    expect((await listQuotes(db, scope, { status: "expired" })).map((q: { id: string }) => q.id).sort()).toEqual([ids.due, ids.dueAccepted].sort());
+    expect(Object.fromEntries(list.map((q: { id: string; status: string }) => [q.id, q.status]))).toEqual({
+      [ids.due]: "expired",
+      [ids.dueAccepted]: "expired",
+      [ids.current]: "sent",
+      [ids.draftOld]: "draft",
+    });
+    expect((await listQuotes(db, scope, { status: "expired" })).map((q: { id: string }) => q.id).sort()).toEqual(
+      [ids.due, ids.dueAccepted].sort(),
+    );
     expect((await listQuotes(db, scope, { status: "sent" })).map((q: { id: string }) => q.id)).toEqual([ids.current]);
     // Nothing written by the reads.
     expect(await stored()).toEqual({ [ids.due]: "sent", [ids.dueAccepted]: "accepted", [ids.current]: "sent", [ids.draftOld]: "draft" });
@@ -203,7 +272,10 @@ describe("quote expiry", () => {
     const r = await drainQueue(QUEUES.quoteExpiry.name);
     expect(r.completed).toHaveLength(1);
     expect(await stored()).toEqual({ [ids.due]: "expired", [ids.dueAccepted]: "expired", [ids.current]: "sent", [ids.draftOld]: "draft" });
-    const events = await db("quote_events as e").join("quotes as q", "q.id", "e.quote_id").orderBy("q.number").select("e.quote_id", "e.from_status", "e.to_status", "e.actor");
+    const events = await db("quote_events as e")
+      .join("quotes as q", "q.id", "e.quote_id")
+      .orderBy("q.number")
+      .select("e.quote_id", "e.from_status", "e.to_status", "e.actor");
     expect(events).toEqual([
       { quote_id: ids.due, from_status: "sent", to_status: "expired", actor: "system" },
       { quote_id: ids.dueAccepted, from_status: "accepted", to_status: "expired", actor: "system" },

@@ -20,7 +20,12 @@ const ready = (await import("@/app/api/health/ready/route")).GET;
 
 /** Every line the app logs during a test, parsed. */
 const lines: Record<string, unknown>[] = [];
-const sink = new Writable({ write(chunk, _e, done) { for (const l of String(chunk).split("\n")) if (l.trim()) lines.push(JSON.parse(l)); done(); } });
+const sink = new Writable({
+  write(chunk, _e, done) {
+    for (const l of String(chunk).split("\n")) if (l.trim()) lines.push(JSON.parse(l));
+    done();
+  },
+});
 const closedPort = async () => {
   const s = netServer();
   await new Promise<void>((r) => s.listen(0, "127.0.0.1", r));
@@ -64,7 +69,9 @@ describe("request logs", () => {
 
   it("one line per request: id, method, route with the token redacted, status, duration, user; the same id on every line and in the answer", async () => {
     const token = "Q".repeat(43);
-    const res = await fetch(`${base}/q/${token}?token=abc&page=2`, { headers: { cookie: "next-auth.session-token=SECRETCOOKIE", authorization: "Bearer SECRETBEARER" } });
+    const res = await fetch(`${base}/q/${token}?token=abc&page=2`, {
+      headers: { cookie: "next-auth.session-token=SECRETCOOKIE", authorization: "Bearer SECRETBEARER" },
+    });
     const id = res.headers.get("x-request-id")!;
     expect(id).toMatch(/^[0-9a-f]{16}$/);
     expect(((await res.json()) as { ref: string }).ref).toBe(id);
@@ -100,7 +107,9 @@ describe("request logs", () => {
     expect(body.ref).toBe("req0000abcd");
     expect(body.error).toContain("req0000abcd");
     expect(body.error).not.toContain("kaboom");
-    expect(lines.find((l) => l.reqId === "req0000abcd" && l.msg === "unhandled error in route handler")).toMatchObject({ err: { message: "kaboom in a handler" } });
+    expect(lines.find((l) => l.reqId === "req0000abcd" && l.msg === "unhandled error in route handler")).toMatchObject({
+      err: { message: "kaboom in a handler" },
+    });
   });
 
   it("redacts tokens in the URLs that carry them", () => {
@@ -114,7 +123,6 @@ describe("request logs", () => {
 });
 
 describe("health", () => {
-
   it("live answers 200 without touching anything", async () => {
     const raw = vi.spyOn(appDb, "raw");
     const res = live();
@@ -155,7 +163,10 @@ describe("outages are named for what is down", () => {
     process.env.SMTP_URL = `smtp://127.0.0.1:${await closedPort()}`;
     (globalThis as { hubfaceMail?: unknown }).hubfaceMail = undefined;
     const { sendMail } = await import("@/lib/platform/mail");
-    const error = await sendMail({ to: "a@example.test", subject: "s", text: "t" }).then(() => null, (e: unknown) => e);
+    const error = await sendMail({ to: "a@example.test", subject: "s", text: "t" }).then(
+      () => null,
+      (e: unknown) => e,
+    );
     expect(isDatabaseUnavailable(error)).toBe(false);
     const res = errorResponse(error);
     expect(res.status).toBe(503);
@@ -167,7 +178,10 @@ describe("outages are named for what is down", () => {
   it("a photo store that does not answer is reported as the photo store", async () => {
     const { s3PhotoStore, s3Settings } = await import("@/lib/garage/photos/s3");
     const store = s3PhotoStore({ ...s3Settings({} as NodeJS.ProcessEnv), endpoint: `http://127.0.0.1:${await closedPort()}` });
-    const error = await store.put("k", Buffer.from("x"), "image/jpeg").then(() => null, (e: unknown) => e);
+    const error = await store.put("k", Buffer.from("x"), "image/jpeg").then(
+      () => null,
+      (e: unknown) => e,
+    );
     expect(error).toBeInstanceOf(DependencyUnavailableError);
     expect(isDatabaseUnavailable(error)).toBe(false);
     expect(((await errorResponse(error).json()) as { error: string }).error).toMatch(/photo store is not reachable/);

@@ -25,6 +25,8 @@ describe("migrations", () => {
     await expect(
       db("users").insert({ email: "x@example.test", name: "X", password_hash: "h", role: "shop_staff", shop_id: null }),
     ).rejects.toThrow(/users_shop_role_has_shop/);
-    await expect(db("users").insert({ email: "y@example.test", name: "Y", password_hash: "h", role: "owner" })).rejects.toThrow(/users_role_known/);
+    await expect(db("users").insert({ email: "y@example.test", name: "Y", password_hash: "h", role: "owner" })).rejects.toThrow(
+      /users_role_known/,
+    );
   });
 });

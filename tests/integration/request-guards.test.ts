@@ -54,31 +54,69 @@ describe("requests from other sites (Origin)", () => {
       expect((await res.json()).error).toMatch(/another site/);
     }
     session.current = sessionOf(U.ownerA);
-    const res = await customers(post("/api/shop/customers", JSON.stringify({ name: "Cross Site" }), { "content-type": "application/json", origin: "https://evil.example", cookie: SESSION_COOKIE }), ctx());
+    const res = await customers(
+      post("/api/shop/customers", JSON.stringify({ name: "Cross Site" }), {
+        "content-type": "application/json",
+        origin: "https://evil.example",
+        cookie: SESSION_COOKIE,
+      }),
+      ctx(),
+    );
     expect(res.status).toBe(403);
     expect(await db("users").count()).toEqual(before);
     expect(await db("customers").where({ name: "Cross Site" })).toHaveLength(0);
   });
 
   it("takes APP_ORIGIN and the request's own host as same-site", async () => {
-    expect((await signup(post("/api/account/signup", account(), { "content-type": "application/json", origin: "https://hubface.example" }), ctx())).status).toBe(201);
-    expect((await signup(post("/api/account/signup", account(), { "content-type": "application/json", origin: "http://127.0.0.1:3000", host: "127.0.0.1:3000" }), ctx())).status).toBe(201);
+    expect(
+      (
+        await signup(
+          post("/api/account/signup", account(), { "content-type": "application/json", origin: "https://hubface.example" }),
+          ctx(),
+        )
+      ).status,
+    ).toBe(201);
+    expect(
+      (
+        await signup(
+          post("/api/account/signup", account(), {
+            "content-type": "application/json",
+            origin: "http://127.0.0.1:3000",
+            host: "127.0.0.1:3000",
+          }),
+          ctx(),
+        )
+      ).status,
+    ).toBe(201);
   });
 
   it("without Origin: a caller with no session cookie (curl, a script) may go on; with a session cookie it is refused", async () => {
     expect((await signup(post("/api/account/signup", account(), { "content-type": "application/json" }), ctx())).status).toBe(201);
     session.current = sessionOf(U.ownerA);
-    const refused = await customers(post("/api/shop/customers", JSON.stringify({ name: "No Origin" }), { "content-type": "application/json", cookie: SESSION_COOKIE }), ctx());
+    const refused = await customers(
+      post("/api/shop/customers", JSON.stringify({ name: "No Origin" }), { "content-type": "application/json", cookie: SESSION_COOKIE }),
+      ctx(),
+    );
     expect(refused.status).toBe(403);
     // A browser that leaves Origin out still says where the request came from.
-    const crossSite = await customers(post("/api/shop/customers", JSON.stringify({ name: "No Origin" }), { "content-type": "application/json", cookie: SESSION_COOKIE, "sec-fetch-site": "cross-site" }), ctx());
+    const crossSite = await customers(
+      post("/api/shop/customers", JSON.stringify({ name: "No Origin" }), {
+        "content-type": "application/json",
+        cookie: SESSION_COOKIE,
+        "sec-fetch-site": "cross-site",
+      }),
+      ctx(),
+    );
     expect(crossSite.status).toBe(403);
     expect(await db("customers").where({ name: "No Origin" })).toHaveLength(0);
   });
 
   it("leaves reads alone and keeps the payment webhook (no Origin, no cookie) reachable", async () => {
     session.current = sessionOf(U.ownerA);
-    const list = await comparisons.GET(new NextRequest("http://127.0.0.1:3000/api/comparisons", { headers: { origin: "https://evil.example", cookie: SESSION_COOKIE } }), ctx());
+    const list = await comparisons.GET(
+      new NextRequest("http://127.0.0.1:3000/api/comparisons", { headers: { origin: "https://evil.example", cookie: SESSION_COOKIE } }),
+      ctx(),
+    );
     expect(list.status).toBe(200);
     session.current = null;
     // Unsigned: refused by the signature check (400), not by the Origin check (403).
@@ -95,7 +133,9 @@ describe("bodies that are not declared JSON", () => {
       expect((await res.json()).error).toBe("Send JSON with Content-Type: application/json.");
     }
     session.current = sessionOf(U.ownerA);
-    expect((await comparisons.POST(post("/api/comparisons", comparison, { "content-type": "text/plain;charset=UTF-8" }), ctx())).status).toBe(415);
+    expect(
+      (await comparisons.POST(post("/api/comparisons", comparison, { "content-type": "text/plain;charset=UTF-8" }), ctx())).status,
+    ).toBe(415);
     expect(await db("users").where("email", "like", "guard%").count<{ count: string }[]>()).toEqual([{ count: "3" }]);
   });
 
@@ -108,16 +148,24 @@ describe("bodies that are not declared JSON", () => {
 describe("NUL characters", () => {
   const json = { "content-type": "application/json" };
   it("in a body field: 422 naming the field, on several routes, never 500", async () => {
-    const res = await signup(post("/api/account/signup", JSON.stringify({ name: "Nul\u0000Name", email: fresh(), password: "a long enough password" }), json), ctx());
+    const res = await signup(
+      post("/api/account/signup", JSON.stringify({ name: "Nul\u0000Name", email: fresh(), password: "a long enough password" }), json),
+      ctx(),
+    );
     expect(res.status).toBe(422);
-    expect((await res.json()).fieldErrors).toEqual({ name: ["The name contains a NUL character (\\0), which Hubface cannot store. Remove it and try again."] });
+    expect((await res.json()).fieldErrors).toEqual({
+      name: ["The name contains a NUL character (\\0), which Hubface cannot store. Remove it and try again."],
+    });
 
     session.current = sessionOf(U.ownerA);
     const cust = await customers(post("/api/shop/customers", JSON.stringify({ name: "Ok", notes: "a\u0000b" }), json), ctx());
     expect(cust.status).toBe(422);
     expect(Object.keys((await cust.json()).fieldErrors)).toEqual(["notes"]);
 
-    const veh = await vehicles(post("/api/vehicles", JSON.stringify({ name: "Truck\u0000", frontSuspension: "independent", boltPattern: "6x139.7" }), json), ctx());
+    const veh = await vehicles(
+      post("/api/vehicles", JSON.stringify({ name: "Truck\u0000", frontSuspension: "independent", boltPattern: "6x139.7" }), json),
+      ctx(),
+    );
     expect(veh.status).toBe(422);
     expect((await veh.json()).fieldErrors.name[0]).toMatch(/The name contains a NUL/);
 
@@ -133,7 +181,10 @@ describe("NUL characters", () => {
   });
 
   it("in a path part: 400 naming it", async () => {
-    const res = await quoteAction(post(`/api/q/x`, JSON.stringify({ action: "accept" }), json), ctx({ token: `${"A".repeat(21)}\u0000${"A".repeat(21)}` }));
+    const res = await quoteAction(
+      post(`/api/q/x`, JSON.stringify({ action: "accept" }), json),
+      ctx({ token: `${"A".repeat(21)}\u0000${"A".repeat(21)}` }),
+    );
     expect(res.status).toBe(400);
     expect((await res.json()).fieldErrors.token[0]).toMatch(/The token contains a NUL/);
   });

@@ -12,7 +12,10 @@ beforeAll(() => rebuild(db));
 afterAll(() => db.destroy());
 
 async function sqlKeys(texts: string[]): Promise<string[]> {
-  const rows = await db.raw<{ rows: { key: string }[] }>("select hubface_search_key(t.v) as key from unnest(?::text[]) with ordinality as t(v, n) order by t.n", [texts]);
+  const rows = await db.raw<{ rows: { key: string }[] }>(
+    "select hubface_search_key(t.v) as key from unnest(?::text[]) with ordinality as t(v, n) order by t.n",
+    [texts],
+  );
   return rows.rows.map((r) => r.key);
 }
 
@@ -39,7 +42,9 @@ function drawn(n: number): string[] {
   const pool = [..."0123456789.xX× \u00a0\tabcLTRé", ...Object.keys(FOLDED_LETTERS), "e\u0301", "0", "0", "."];
   let seed = 20261202;
   const next = () => (seed = (seed * 1103515245 + 12345) % 2 ** 31) / 2 ** 31;
-  return Array.from({ length: n }, () => Array.from({ length: 1 + Math.floor(next() * 14) }, () => pool[Math.floor(next() * pool.length)]).join(""));
+  return Array.from({ length: n }, () =>
+    Array.from({ length: 1 + Math.floor(next() * 14) }, () => pool[Math.floor(next() * pool.length)]).join(""),
+  );
 }
 
 describe("search key in JavaScript and in PostgreSQL", () => {

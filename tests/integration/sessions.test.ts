@@ -23,7 +23,10 @@ async function member(email: string) {
 /** What sign-in puts in a new session token. */
 async function signIn(u: { id: string }): Promise<JWT> {
   const row = await db("users").where({ id: u.id }).first();
-  return jwt({ token: { exp: Math.floor(Date.now() / 1000) + 3600 }, user: { id: row.id, role: row.role, shopId: row.shop_id, sessionVersion: row.session_version } });
+  return jwt({
+    token: { exp: Math.floor(Date.now() / 1000) + 3600 },
+    user: { id: row.id, role: row.role, shopId: row.shop_id, sessionVersion: row.session_version },
+  });
 }
 const alive = async (token: JWT) => Boolean((await jwt({ token })).uid);
 

@@ -8,7 +8,8 @@ import { testDb } from "./support/db";
 const revalidated = vi.hoisted(() => [] as string[]);
 vi.mock("next/cache", () => ({ revalidatePath: (p: string, type?: string) => void revalidated.push(type ? `${p} ${type}` : p) }));
 
-const { SHARE_PURGE_CHANNEL, LOCAL_PURGE_HEADER, localPurgeToken, ownServerPurge, selfUrl, startSharePurgeListener } = await import("@/lib/platform/http/sharePurge");
+const { SHARE_PURGE_CHANNEL, LOCAL_PURGE_HEADER, localPurgeToken, ownServerPurge, selfUrl, startSharePurgeListener } =
+  await import("@/lib/platform/http/sharePurge");
 const { dropCachedShare } = await import("@/lib/comparisons/shareCache");
 const purgeRoute = (await import("@/app/api/internal/share-purge/route")).POST;
 const { Microcache, installSharedMicrocache } = await import("@/lib/platform/http/microcache");
@@ -134,11 +135,15 @@ describe("a server's own purge (the listener's side)", () => {
   it("the purge route revalidates the page only for this process's token", async () => {
     const token = localPurgeToken();
     expect((await purgeRoute(req("POST", "/api/internal/share-purge", SLUG))).status).toBe(404);
-    expect((await purgeRoute(req("POST", "/api/internal/share-purge", SLUG, { [LOCAL_PURGE_HEADER]: `${token.slice(0, -1)}x` }))).status).toBe(404);
+    expect(
+      (await purgeRoute(req("POST", "/api/internal/share-purge", SLUG, { [LOCAL_PURGE_HEADER]: `${token.slice(0, -1)}x` }))).status,
+    ).toBe(404);
     expect(revalidated).toEqual([]);
     expect((await purgeRoute(req("POST", "/api/internal/share-purge", "../etc", { [LOCAL_PURGE_HEADER]: token }))).status).toBe(400);
     // Even the token holder cannot make it buffer a large body: cut off at 256 bytes.
-    expect((await purgeRoute(req("POST", "/api/internal/share-purge", "x".repeat(10_000), { [LOCAL_PURGE_HEADER]: token }))).status).toBe(413);
+    expect((await purgeRoute(req("POST", "/api/internal/share-purge", "x".repeat(10_000), { [LOCAL_PURGE_HEADER]: token }))).status).toBe(
+      413,
+    );
     expect((await purgeRoute(req("POST", "/api/internal/share-purge", SLUG, { [LOCAL_PURGE_HEADER]: token }))).status).toBe(204);
     expect(revalidated).toEqual([`/s/${SLUG}`, `/s/${SLUG} layout`]);
     revalidated.length = 0;

@@ -46,14 +46,22 @@ let bayB = "";
 /** A quote of shop A with its deposit paid (the payment itself is tested in shop-payments.test.ts), and its public token. */
 async function paidQuote(status: "deposit_paid" | "accepted" = "deposit_paid", email = `c${randomBytes(4).toString("hex")}@example.test`) {
   as(U.staffA);
-  const c = await customers.POST(req("POST", "/api/shop/customers", { name: "Booker", phone: `555 ${Math.floor(1000000 + Math.random() * 8999999)}`, email }), ctx());
+  const c = await customers.POST(
+    req("POST", "/api/shop/customers", { name: "Booker", phone: `555 ${Math.floor(1000000 + Math.random() * 8999999)}`, email }),
+    ctx(),
+  );
   const customerId = (await c.json()).customer.id;
   const tire = await item(db, SHOP_A, "TR-EXAMPLE-35");
   const wheel = await item(db, SHOP_A, "WH-EXAMPLE-BL");
-  const r = await quotes.POST(req("POST", "/api/shop/quotes", { customerId, vehicle: VEHICLE, tireItemId: tire.id, wheelItemId: wheel.id, quantity: 4 }), ctx());
+  const r = await quotes.POST(
+    req("POST", "/api/shop/quotes", { customerId, vehicle: VEHICLE, tireItemId: tire.id, wheelItemId: wheel.id, quantity: 4 }),
+    ctx(),
+  );
   const id = (await r.json()).id as string;
   const token = randomBytes(32).toString("base64url");
-  await db("quotes").where({ id }).update({ status, public_token_hash: sha256(token), valid_until: db.raw("now() + interval '30 days'") });
+  await db("quotes")
+    .where({ id })
+    .update({ status, public_token_hash: sha256(token), valid_until: db.raw("now() + interval '30 days'") });
   return { id, token, email };
 }
 
@@ -66,24 +74,39 @@ const counts = async () => ({
 /** Mail jobs queued so far, oldest first, with the calendar file parsed. */
 async function queuedMails() {
   const rows = await db.withSchema("pgboss").from("job").where({ name: "mail.send" }).orderBy("created_on").select("data");
-  return rows.map((r: { data: { to: string; subject: string; text: string; attachments?: { filename: string; contentType: string; contentBase64: string }[] } }) => {
-    const ics = r.data.attachments?.find((a) => a.filename.endsWith(".ics"));
-    const text = ics ? Buffer.from(ics.contentBase64, "base64").toString("utf8") : "";
-    const parsed = text ? ical.sync.parseICS(text) : {};
-    const event = Object.values(parsed).find((c) => c?.type === "VEVENT") as ical.VEvent | undefined;
-    return { ...r.data, ics: text, event, method: (parsed.vcalendar as unknown as { method?: string } | undefined)?.method };
-  });
+  return rows.map(
+    (r: {
+      data: { to: string; subject: string; text: string; attachments?: { filename: string; contentType: string; contentBase64: string }[] };
+    }) => {
+      const ics = r.data.attachments?.find((a) => a.filename.endsWith(".ics"));
+      const text = ics ? Buffer.from(ics.contentBase64, "base64").toString("utf8") : "";
+      const parsed = text ? ical.sync.parseICS(text) : {};
+      const event = Object.values(parsed).find((c) => c?.type === "VEVENT") as ical.VEvent | undefined;
+      return { ...r.data, ics: text, event, method: (parsed.vcalendar as unknown as { method?: string } | undefined)?.method };
+    },
+  );
 }
 
 const book = (token: string, start: string) => publicBook(req("POST", `/api/q/${token}/booking`, { start }), ctx({ token }));
-const staffBook = (id: string, body: object, method: "POST" | "PUT" = "POST") => counter[method](req(method, `/api/shop/quotes/${id}/booking`, body), ctx({ id }));
+const staffBook = (id: string, body: object, method: "POST" | "PUT" = "POST") =>
+  counter[method](req(method, `/api/shop/quotes/${id}/booking`, body), ctx({ id }));
 
 beforeAll(async () => {
   await rebuild(db);
   await seedShops(db);
   await startTestBoss();
   as(U.ownerB);
-  const b = await bays.PUT(req("PUT", "/api/shop/bays", { timeZone: TZ, slotStepMinutes: 30, weekdays: week, closedDays: [], bays: [{ name: "B lift", kind: "lift_bay" }], serviceTimes: [] }), ctx());
+  const b = await bays.PUT(
+    req("PUT", "/api/shop/bays", {
+      timeZone: TZ,
+      slotStepMinutes: 30,
+      weekdays: week,
+      closedDays: [],
+      bays: [{ name: "B lift", kind: "lift_bay" }],
+      serviceTimes: [],
+    }),
+    ctx(),
+  );
   expect(b.status).toBe(200);
   bayB = (await b.json()).setup.bays[0].id;
 });
@@ -116,7 +139,11 @@ describe("bays and hours (owner)", () => {
         { name: "Lift 1", kind: "lift_bay" },
         { name: "Rack", kind: "alignment_rack" },
       ],
-      serviceTimes: setup.serviceTimes.map((s: { catalogItemId: string; minutes: number; bayKind: string }) => ({ catalogItemId: s.catalogItemId, minutes: String(s.minutes), bayKind: s.bayKind })),
+      serviceTimes: setup.serviceTimes.map((s: { catalogItemId: string; minutes: number; bayKind: string }) => ({
+        catalogItemId: s.catalogItemId,
+        minutes: String(s.minutes),
+        bayKind: s.bayKind,
+      })),
     };
     const saved = await bays.PUT(req("PUT", "/api/shop/bays", body), ctx());
     expect(saved.status).toBe(200);
@@ -132,12 +159,38 @@ describe("bays and hours (owner)", () => {
     const before = await db("bays").where({ shop_id: SHOP_A }).orderBy("name");
     const base = (await (await bays.GET(req("GET", "/api/shop/bays"), ctx())).json()).setup;
     const tries: [object, string, RegExp][] = [
-      [{ ...base, weekdays: week.map((h) => (h.weekday === 1 ? { ...h, closes: "07:00" } : h)) }, "weekdays.0.closes", /^Weekday 1: Monday closes before it opens/],
+      [
+        { ...base, weekdays: week.map((h) => (h.weekday === 1 ? { ...h, closes: "07:00" } : h)) },
+        "weekdays.0.closes",
+        /^Weekday 1: Monday closes before it opens/,
+      ],
       [{ ...base, timeZone: "Mountain Time" }, "timeZone", /IANA name/],
-      [{ ...base, bays: [...base.bays, { id: bayB, name: "Borrowed", kind: "lift_bay" }] }, "bays.2.id", /^Bay 3: this bay is not one of your shop's bays/],
-      [{ ...base, serviceTimes: [{ catalogItemId: (await item(db, SHOP_B, "TR-EXAMPLE-35")).id, minutes: "10", bayKind: "lift_bay" }] }, "serviceTimes.0.catalogItemId", /^Service time 1: this is not a service in your catalog/],
-      [{ ...base, bays: [{ name: "Lift", kind: "lift_bay" }, { name: "lift", kind: "lift_bay" }] }, "bays.1.name", /^Bay 2: Two bays are called/],
-      [{ ...base, closedDays: [{ day: "2027-02-30", note: "" }] }, "closedDays.0.day", /^Closed day 1: Enter the closed date as a calendar date/],
+      [
+        { ...base, bays: [...base.bays, { id: bayB, name: "Borrowed", kind: "lift_bay" }] },
+        "bays.2.id",
+        /^Bay 3: this bay is not one of your shop's bays/,
+      ],
+      [
+        { ...base, serviceTimes: [{ catalogItemId: (await item(db, SHOP_B, "TR-EXAMPLE-35")).id, minutes: "10", bayKind: "lift_bay" }] },
+        "serviceTimes.0.catalogItemId",
+        /^Service time 1: this is not a service in your catalog/,
+      ],
+      [
+        {
+          ...base,
+          bays: [
+            { name: "Lift", kind: "lift_bay" },
+            { name: "lift", kind: "lift_bay" },
+          ],
+        },
+        "bays.1.name",
+        /^Bay 2: Two bays are called/,
+      ],
+      [
+        { ...base, closedDays: [{ day: "2027-02-30", note: "" }] },
+        "closedDays.0.day",
+        /^Closed day 1: Enter the closed date as a calendar date/,
+      ],
     ];
     for (const [body, field, message] of tries) {
       const r = await bays.PUT(req("PUT", "/api/shop/bays", body), ctx());
@@ -196,8 +249,14 @@ describe("booking an install", () => {
     const { booking } = await booked.json();
     expect(booking).toMatchObject({ status: "booked", startsAt: at(MONDAY, 8), bookedBy: "customer", sequence: 0 });
     expect(new Date(booking.endsAt).getTime() - new Date(booking.startsAt).getTime()).toBe(minutes * 60_000);
-    expect(booking.bays.map((b: { bayName: string }) => b.bayName)).toEqual(slots.segments.map((s: { bayKind: string }) => (s.bayKind === "lift_bay" ? "Lift 1" : "Rack")));
-    expect(await counts()).toEqual({ bookings: before.bookings + 1, reservations: before.reservations + slots.segments.length, mails: before.mails + 1 });
+    expect(booking.bays.map((b: { bayName: string }) => b.bayName)).toEqual(
+      slots.segments.map((s: { bayKind: string }) => (s.bayKind === "lift_bay" ? "Lift 1" : "Rack")),
+    );
+    expect(await counts()).toEqual({
+      bookings: before.bookings + 1,
+      reservations: before.reservations + slots.segments.length,
+      mails: before.mails + 1,
+    });
 
     const mail = (await queuedMails()).at(-1)!;
     expect(mail.to).toBe(first.email);
@@ -248,14 +307,23 @@ describe("booking an install", () => {
     expect(await counts()).toEqual(before);
     // Underneath, the database refuses a reservation that names a bay of another shop.
     const booking = await db("bookings").where({ quote_id: first.id, status: "booked" }).first();
-    await expect(db("bay_reservations").insert({ booking_id: booking.id, shop_id: SHOP_A, bay_id: bayB, during: db.raw("tstzrange(?, ?)", [at(TUESDAY, 8), at(TUESDAY, 9)]) })).rejects.toMatchObject({
+    await expect(
+      db("bay_reservations").insert({
+        booking_id: booking.id,
+        shop_id: SHOP_A,
+        bay_id: bayB,
+        during: db.raw("tstzrange(?, ?)", [at(TUESDAY, 8), at(TUESDAY, 9)]),
+      }),
+    ).rejects.toMatchObject({
       constraint: "bay_reservations_bay_of_shop",
     });
   });
 
   it("the counter moves the booking (same UID, SEQUENCE 1, reminder due again) and cancels it (METHOD:CANCEL, SEQUENCE 2), freeing the bay", async () => {
     as(U.staffA);
-    const slots = await (await counterSlots(req("GET", `/api/shop/quotes/${first.id}/booking/slots?from=${MONDAY}&days=1`), ctx({ id: first.id }))).json();
+    const slots = await (
+      await counterSlots(req("GET", `/api/shop/quotes/${first.id}/booking/slots?from=${MONDAY}&days=1`), ctx({ id: first.id }))
+    ).json();
     // Its own bay time counts as free while it is being moved: 08:00 is offered again.
     expect(slots.booking.startsAt).toBe(at(MONDAY, 8));
     expect(slots.days[0].slots[0].start).toBe(at(MONDAY, 8));
@@ -288,10 +356,21 @@ describe("booking an install", () => {
     expect((await staffBook(q.id, { start: at(TUESDAY, 11) })).status).toBe(201);
     as(U.ownerA);
     const setup = (await (await bays.GET(req("GET", "/api/shop/bays"), ctx())).json()).setup;
-    const removeLift = await bays.PUT(req("PUT", "/api/shop/bays", { ...setup, bays: setup.bays.filter((b: { name: string }) => b.name !== "Lift 1") }), ctx());
+    const removeLift = await bays.PUT(
+      req("PUT", "/api/shop/bays", { ...setup, bays: setup.bays.filter((b: { name: string }) => b.name !== "Lift 1") }),
+      ctx(),
+    );
     expect(removeLift.status).toBe(409);
-    expect((await removeLift.json()).error).toMatch(/^Lift 1 has 1 booking\(s\) from now on: move or cancel them before removing the bay\.$/);
-    const rekind = await bays.PUT(req("PUT", "/api/shop/bays", { ...setup, bays: setup.bays.map((b: { name: string }) => (b.name === "Lift 1" ? { ...b, kind: "fabrication_bay" } : b)) }), ctx());
+    expect((await removeLift.json()).error).toMatch(
+      /^Lift 1 has 1 booking\(s\) from now on: move or cancel them before removing the bay\.$/,
+    );
+    const rekind = await bays.PUT(
+      req("PUT", "/api/shop/bays", {
+        ...setup,
+        bays: setup.bays.map((b: { name: string }) => (b.name === "Lift 1" ? { ...b, kind: "fabrication_bay" } : b)),
+      }),
+      ctx(),
+    );
     expect(rekind.status).toBe(422);
     expect((await rekind.json()).fieldErrors["bays.0.kind"][0]).toMatch(/^Bay 1: Lift 1 has 1 booking/);
     expect(await db("bays").where({ shop_id: SHOP_A, name: "Lift 1" }).first()).toMatchObject({ kind: "lift_bay", archived_at: null });
@@ -315,7 +394,17 @@ describe("the last slot, taken twice at once", () => {
   it("PostgreSQL's exclusion constraint lets exactly one of two transactions hold the same bay time", async () => {
     const [lift] = await db("bays").where({ shop_id: SHOP_A, name: "Lift 1" });
     const q = await paidQuote();
-    const mk = (trx: typeof db) => trx("bookings").insert({ shop_id: SHOP_A, quote_id: q.id, status: "cancelled", starts_at: at(MONDAY, 15), ends_at: at(MONDAY, 16), booked_by: "test" }).returning("id");
+    const mk = (trx: typeof db) =>
+      trx("bookings")
+        .insert({
+          shop_id: SHOP_A,
+          quote_id: q.id,
+          status: "cancelled",
+          starts_at: at(MONDAY, 15),
+          ends_at: at(MONDAY, 16),
+          booked_by: "test",
+        })
+        .returning("id");
     const t1 = await db.transaction();
     const t2 = await db.transaction();
     try {
@@ -324,7 +413,12 @@ describe("the last slot, taken twice at once", () => {
       const during = db.raw("tstzrange(?, ?)", [at(MONDAY, 15), at(MONDAY, 16)]);
       await t1("bay_reservations").insert({ booking_id: b1.id, shop_id: SHOP_A, bay_id: lift.id, during });
       // The second waits on the first's uncommitted row, then fails once the first commits.
-      const second = t2("bay_reservations").insert({ booking_id: b2.id, shop_id: SHOP_A, bay_id: lift.id, during: db.raw("tstzrange(?, ?)", [at(MONDAY, 15, 30), at(MONDAY, 16, 30)]) });
+      const second = t2("bay_reservations").insert({
+        booking_id: b2.id,
+        shop_id: SHOP_A,
+        bay_id: lift.id,
+        during: db.raw("tstzrange(?, ?)", [at(MONDAY, 15, 30), at(MONDAY, 16, 30)]),
+      });
       const outcome = second.then(
         () => "inserted",
         (e: { code?: string; constraint?: string }) => `${e.code} ${e.constraint}`,
@@ -363,10 +457,29 @@ describe("the last slot, taken twice at once", () => {
     const q = await paidQuote();
     const before = await counts();
     const t0 = await db.transaction();
-    const [b0] = await t0("bookings").insert({ shop_id: SHOP_A, quote_id: blocker.id, status: "booked", starts_at: at(FRIDAY, 8), ends_at: at(FRIDAY, 9), booked_by: "test" }).returning("id");
-    await t0("bay_reservations").insert({ booking_id: b0.id, shop_id: SHOP_A, bay_id: lift.id, during: db.raw("tstzrange(?, ?)", [at(FRIDAY, 8), at(FRIDAY, 9)]) });
+    const [b0] = await t0("bookings")
+      .insert({
+        shop_id: SHOP_A,
+        quote_id: blocker.id,
+        status: "booked",
+        starts_at: at(FRIDAY, 8),
+        ends_at: at(FRIDAY, 9),
+        booked_by: "test",
+      })
+      .returning("id");
+    await t0("bay_reservations").insert({
+      booking_id: b0.id,
+      shop_id: SHOP_A,
+      bay_id: lift.id,
+      during: db.raw("tstzrange(?, ?)", [at(FRIDAY, 8), at(FRIDAY, 9)]),
+    });
     // The booking reads the bays as free (t0 has not committed), inserts, and waits on t0's row.
-    const pending = bookInstall(appDb, { by: "customer", token: q.token }, { start: at(FRIDAY, 8) }, { userId: null, label: "customer" }).then(
+    const pending = bookInstall(
+      appDb,
+      { by: "customer", token: q.token },
+      { start: at(FRIDAY, 8) },
+      { userId: null, label: "customer" },
+    ).then(
       () => 201,
       (e: { status?: number; fieldErrors?: Record<string, string[]> }) => ({ status: e.status, start: e.fieldErrors?.start?.[0] }),
     );

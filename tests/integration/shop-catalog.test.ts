@@ -17,8 +17,13 @@ const as = (u: typeof ownerA) => void (session.current = sessionOf(u));
 
 beforeAll(async () => {
   await rebuild(db);
-  await db("shops").insert([{ id: SHOP_A, name: "Shop A" }, { id: SHOP_B, name: "Shop B" }]);
-  await db("users").insert([ownerA, staffA, ownerB].map((u, i) => ({ ...u, email: `u${i}@example.test`, name: `U${i}`, password_hash: "x" })));
+  await db("shops").insert([
+    { id: SHOP_A, name: "Shop A" },
+    { id: SHOP_B, name: "Shop B" },
+  ]);
+  await db("users").insert(
+    [ownerA, staffA, ownerB].map((u, i) => ({ ...u, email: `u${i}@example.test`, name: `U${i}`, password_hash: "x" })),
+  );
 });
 afterAll(async () => {
   await db.destroy();
@@ -36,17 +41,27 @@ const upload = (body: string | Buffer, headers: Record<string, string> = {}) =>
 
 async function confirm(id: string) {
   const res = await commit(req("POST", `/api/shop/catalog/import/${id}`), ctx({ id }));
-  const lines = res.status === 200 ? (await res.text()).trim().split("\n").map((l) => JSON.parse(l)) : [await res.json()];
+  const lines =
+    res.status === 200
+      ? (await res.text())
+          .trim()
+          .split("\n")
+          .map((l) => JSON.parse(l))
+      : [await res.json()];
   return { status: res.status, lines, last: lines[lines.length - 1] };
 }
-const count = async (shop = SHOP_A) => Number((await db("catalog_items").where({ shop_id: shop }).count<{ c: string }[]>({ c: "*" }))[0]!.c);
+const count = async (shop = SHOP_A) =>
+  Number((await db("catalog_items").where({ shop_id: shop }).count<{ c: string }[]>({ c: "*" }))[0]!.c);
 
 function bigCsv(n: number, priceOf = (i: number) => `${100 + (i % 300)}.${String(i % 100).padStart(2, "0")}`) {
   const lines = [CSV_COLUMNS.join(",")];
   const sizes = ["LT285/70R17", "35x12.50R17LT", "LT315/70R17", "37x12.50R17LT", "265/70R17"];
   for (let i = 0; i < n; i++) {
     if (i % 2 === 0) lines.push(`tire,BULK-T${i},Bulk tire ${i},${priceOf(i)},${i % 40},${sizes[i % sizes.length]},,,,,,,,,,`);
-    else lines.push(`wheel,BULK-W${i},Bulk wheel ${i},${priceOf(i)},${i % 12},,17,${8 + (i % 3) * 0.5},${-24 + (i % 7) * 6},,,6x5.5,108,${i % 5 === 0 ? "yes" : "no"},,`);
+    else
+      lines.push(
+        `wheel,BULK-W${i},Bulk wheel ${i},${priceOf(i)},${i % 12},,17,${8 + (i % 3) * 0.5},${-24 + (i % 7) * 6},,,6x5.5,108,${i % 5 === 0 ? "yes" : "no"},,`,
+      );
   }
   return lines.join("\n");
 }
@@ -79,7 +94,12 @@ describe("catalog import", () => {
 
   it("a mixed file: row errors reported, only the valid rows are staged", async () => {
     as(ownerA);
-    const text = [CSV_COLUMNS.join(","), "tire,MX-1,Good,100,4,LT285/70R17,,,,,,,,,,", "tire,MX-2,Bad size,100,4,not-a-size,,,,,,,,,,", "tire,MX-1,Dup,100,4,LT285/70R17,,,,,,,,,,"].join("\n");
+    const text = [
+      CSV_COLUMNS.join(","),
+      "tire,MX-1,Good,100,4,LT285/70R17,,,,,,,,,,",
+      "tire,MX-2,Bad size,100,4,not-a-size,,,,,,,,,,",
+      "tire,MX-1,Dup,100,4,LT285/70R17,,,,,,,,,,",
+    ].join("\n");
     const p = await (await upload(text)).json();
     expect(p).toMatchObject({ total: 3, valid: 1, skippedRows: 2, problemCount: 2 });
     expect(p.errors).toEqual([
@@ -101,7 +121,11 @@ describe("catalog import", () => {
     ].join("\r\n");
     const p = await (await upload(text)).json();
     expect(p).toMatchObject({ total: 3, valid: 1, skippedRows: 2, problemCount: 3 });
-    expect(p.errors.map((e: { row: number; column: string }) => [e.row, e.column])).toEqual([[4, "price"], [4, "tire_size"], [5, "tire_size"]]);
+    expect(p.errors.map((e: { row: number; column: string }) => [e.row, e.column])).toEqual([
+      [4, "price"],
+      [4, "tire_size"],
+      [5, "tire_size"],
+    ]);
     expect((await db("catalog_imports").where({ id: p.importId }).first()).error_count).toBe(2);
   });
 
@@ -113,11 +137,15 @@ describe("catalog import", () => {
     const t1 = performance.now();
     const c = await confirm(p.importId);
     const t2 = performance.now();
-    console.log(`10,000-row catalog CSV (${(text.length / 1024 / 1024).toFixed(2)} MB): preview ${(t1 - t0).toFixed(0)} ms, confirm ${(t2 - t1).toFixed(0)} ms, total ${(t2 - t0).toFixed(0)} ms`);
+    console.log(
+      `10,000-row catalog CSV (${(text.length / 1024 / 1024).toFixed(2)} MB): preview ${(t1 - t0).toFixed(0)} ms, confirm ${(t2 - t1).toFixed(0)} ms, total ${(t2 - t0).toFixed(0)} ms`,
+    );
     expect(p).toMatchObject({ total: 10_000, valid: 10_000, skippedRows: 0, problemCount: 0 });
     expect(c.last).toEqual({ imported: 10_000 });
     expect(c.lines.filter((l) => "done" in l)).toHaveLength(1 + 10_000 / 500);
-    expect(await db("catalog_items").where({ shop_id: SHOP_A }).whereLike("sku", "BULK-%").count<{ c: string }[]>({ c: "*" })).toEqual([{ c: "10000" }]);
+    expect(await db("catalog_items").where({ shop_id: SHOP_A }).whereLike("sku", "BULK-%").count<{ c: string }[]>({ c: "*" })).toEqual([
+      { c: "10000" },
+    ]);
   });
 
   it("a failure part-way rolls the whole import back", async () => {
@@ -154,7 +182,14 @@ describe("catalog import", () => {
       },
     });
     const { NextRequest } = await import("next/server");
-    const res = await preview(new NextRequest("http://127.0.0.1:3000/api/shop/catalog/import", { method: "POST", body: streamed, duplex: "half" } as unknown as ConstructorParameters<typeof NextRequest>[1]), ctx());
+    const res = await preview(
+      new NextRequest("http://127.0.0.1:3000/api/shop/catalog/import", {
+        method: "POST",
+        body: streamed,
+        duplex: "half",
+      } as unknown as ConstructorParameters<typeof NextRequest>[1]),
+      ctx(),
+    );
     expect(res.status).toBe(413);
     console.log(`50 MB upload refused in ${(performance.now() - t0).toFixed(0)} ms`);
     expect(await db("catalog_imports").where({ shop_id: SHOP_A }).count<{ c: string }[]>({ c: "*" })).toEqual([{ c: "6" }]);
@@ -180,7 +215,9 @@ describe("catalog access", () => {
 
   it("pages, sorts and filters on the server", async () => {
     as(staffA);
-    const page = await (await list(req("GET", "/api/shop/catalog?kind=wheel&sort=price_cents&dir=desc&page=2&pageSize=10&q=BULK"), ctx())).json();
+    const page = await (
+      await list(req("GET", "/api/shop/catalog?kind=wheel&sort=price_cents&dir=desc&page=2&pageSize=10&q=BULK"), ctx())
+    ).json();
     expect(page.total).toBe(5000);
     expect(page.items).toHaveLength(10);
     const prices = page.items.map((i: { priceCents: number }) => i.priceCents); // camelCase on purpose: the API shape, lib/shop/catalog/api.ts
@@ -207,7 +244,10 @@ describe("catalog access", () => {
   it("takes a long file name without refusing the upload (the record keeps its first 200 characters)", async () => {
     as(ownerA);
     const name = `${"catalog-".repeat(40)}.csv`;
-    const res = await preview(req("POST", `/api/shop/catalog/import?filename=${encodeURIComponent(name)}`, CSV_TEMPLATE, { "content-type": "text/csv" }), ctx());
+    const res = await preview(
+      req("POST", `/api/shop/catalog/import?filename=${encodeURIComponent(name)}`, CSV_TEMPLATE, { "content-type": "text/csv" }),
+      ctx(),
+    );
     expect(res.status).toBe(200);
     const { importId } = await res.json();
     expect((await db("catalog_imports").where({ id: importId }).first()).filename).toBe(name.slice(0, 200));

@@ -15,7 +15,8 @@ beforeAll(async () => {
   await seedShops(db);
   session.current = sessionOf(U.staffA);
   // Invented people; names with letters Unicode decomposes (é, ë, ř) and letters it does not (Ł, Ø, ß, Æ).
-  const add = (name: string, phone: string, email: string) => customers.POST(req("POST", "/api/shop/customers", { name, phone, email }), ctx());
+  const add = (name: string, phone: string, email: string) =>
+    customers.POST(req("POST", "/api/shop/customers", { name, phone, email }), ctx());
   for (const r of await Promise.all([
     add("Łukasz Wróblewski", "555 014 2001", "lukasz.w@example.test"),
     add("Søren Æbelø", "555 014 2002", "sbaelo@example.test"),
@@ -25,7 +26,13 @@ beforeAll(async () => {
   ])) {
     expect(r.status).toBe(201);
   }
-  await db("customers").insert({ shop_id: SHOP_B, name: "Łukasz Other-Shop", phone: "5550142009", phone_digits: "5550142009", email: "lukasz.o@example.test" });
+  await db("customers").insert({
+    shop_id: SHOP_B,
+    name: "Łukasz Other-Shop",
+    phone: "5550142009",
+    phone_digits: "5550142009",
+    email: "lukasz.o@example.test",
+  });
 });
 afterAll(async () => {
   await db.destroy();

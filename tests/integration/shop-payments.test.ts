@@ -10,7 +10,10 @@ import { SHOP_A, U, VEHICLE, item, seedShops } from "./support/shopFixture";
 const session = vi.hoisted(() => ({ current: null as unknown }));
 vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
 const sent = vi.hoisted(() => [] as { to: string; text: string }[]);
-vi.mock("@/lib/platform/mail", () => ({ queueMail: async (m: { to: string; text: string }) => void sent.push(m), appOrigin: () => "http://127.0.0.1:3000" }));
+vi.mock("@/lib/platform/mail", () => ({
+  queueMail: async (m: { to: string; text: string }) => void sent.push(m),
+  appOrigin: () => "http://127.0.0.1:3000",
+}));
 
 const SECRET = "whsec_integration_test_secret";
 process.env.STRIPE_SECRET_KEY = "sk_test_integration";
@@ -35,7 +38,10 @@ const forwarder = createServer((r, res) => {
   r.on("end", async () => {
     const body = Buffer.concat(chunks).toString("utf8");
     const signature = String(r.headers["stripe-signature"] ?? "");
-    const out = await webhook(new NextRequest("http://127.0.0.1:3000/api/payments/webhook", { method: "POST", body, headers: { "stripe-signature": signature } }), ctx());
+    const out = await webhook(
+      new NextRequest("http://127.0.0.1:3000/api/payments/webhook", { method: "POST", body, headers: { "stripe-signature": signature } }),
+      ctx(),
+    );
     const answer = await out.json();
     delivered.push({ body, signature, status: out.status, answer });
     res.writeHead(out.status, { "Content-Type": "application/json" });
@@ -49,7 +55,12 @@ beforeAll(async () => {
   await seedShops(db);
   await new Promise<void>((r) => forwarder.listen(0, "127.0.0.1", () => r()));
   const fwd = forwarder.address() as { port: number };
-  pay = await startFakePay({ port: 0, secretKey: process.env.STRIPE_SECRET_KEY!, webhookSecret: SECRET, webhookUrl: `http://127.0.0.1:${fwd.port}/` });
+  pay = await startFakePay({
+    port: 0,
+    secretKey: process.env.STRIPE_SECRET_KEY!,
+    webhookSecret: SECRET,
+    webhookUrl: `http://127.0.0.1:${fwd.port}/`,
+  });
   process.env.STRIPE_API_PORT = String(pay.port);
 });
 afterAll(async () => {
@@ -63,11 +74,25 @@ afterAll(async () => {
 /** A sent quote of shop A and its public token. */
 async function sentQuote(tireSku = "TR-EXAMPLE-35", wheelSku = "WH-EXAMPLE-BL") {
   as(U.staffA);
-  const c = await customers.POST(req("POST", "/api/shop/customers", { name: "Payer", phone: `555 ${Math.floor(1000000 + Math.random() * 8999999)}`, email: `payer${Date.now()}@example.test` }), ctx());
+  const c = await customers.POST(
+    req("POST", "/api/shop/customers", {
+      name: "Payer",
+      phone: `555 ${Math.floor(1000000 + Math.random() * 8999999)}`,
+      email: `payer${Date.now()}@example.test`,
+    }),
+    ctx(),
+  );
   const customerId = (await c.json()).customer.id;
   const tire = await item(db, SHOP_A, tireSku);
   const wheel = await item(db, SHOP_A, wheelSku);
-  const id = (await (await quotes.POST(req("POST", "/api/shop/quotes", { customerId, vehicle: VEHICLE, tireItemId: tire.id, wheelItemId: wheel.id, quantity: 4 }), ctx())).json()).id as string;
+  const id = (
+    await (
+      await quotes.POST(
+        req("POST", "/api/shop/quotes", { customerId, vehicle: VEHICLE, tireItemId: tire.id, wheelItemId: wheel.id, quantity: 4 }),
+        ctx(),
+      )
+    ).json()
+  ).id as string;
   sent.length = 0;
   await sendRoute(req("POST", `/api/shop/quotes/${id}/send`, {}), ctx({ id }));
   const token = /\/q\/([A-Za-z0-9_-]{43})/.exec(sent[0]!.text)![1]!;
@@ -91,7 +116,11 @@ describe("deposit through the payment SDK and the fake provider", () => {
 
   it("a declined test card pays nothing and sends no webhook", async () => {
     const { url } = await (await action(first.token, "pay")).json();
-    const res = await fetch(url, { method: "POST", body: new URLSearchParams({ card: "4000 0000 0000 0002", exp: "12/30", cvc: "123" }), redirect: "manual" });
+    const res = await fetch(url, {
+      method: "POST",
+      body: new URLSearchParams({ card: "4000 0000 0000 0002", exp: "12/30", cvc: "123" }),
+      redirect: "manual",
+    });
     expect(res.status).toBe(402);
     expect(delivered).toHaveLength(0);
     expect((await quoteRow(first.id)).status).toBe("accepted");
@@ -105,7 +134,11 @@ describe("deposit through the payment SDK and the fake provider", () => {
     expect(url).toMatch(new RegExp(`^http://127\\.0\\.0\\.1:${pay.port}/pay/cs_test_`));
     const page = await fetch(url);
     expect(await page.text()).toContain("$1,076.96"); // the quote's deposit (see shop-quotes.test.ts for the arithmetic)
-    const paid = await fetch(url, { method: "POST", body: new URLSearchParams({ card: "4242 4242 4242 4242", exp: "12/30", cvc: "123" }), redirect: "manual" });
+    const paid = await fetch(url, {
+      method: "POST",
+      body: new URLSearchParams({ card: "4242 4242 4242 4242", exp: "12/30", cvc: "123" }),
+      redirect: "manual",
+    });
     expect(paid.status).toBe(303);
     expect(paid.headers.get("location")).toBe(`http://127.0.0.1:3000/q/${first.token}?paid=1`);
     expect(delivered).toHaveLength(1);
@@ -121,7 +154,10 @@ describe("deposit through the payment SDK and the fake provider", () => {
     const before = await db("quote_events").where({ quote_id: first.id }).count<{ c: string }[]>({ c: "*" });
     const { body, signature } = delivered[0]!;
     for (let i = 0; i < 3; i++) {
-      const res = await webhook(new NextRequest("http://127.0.0.1:3000/api/payments/webhook", { method: "POST", body, headers: { "stripe-signature": signature } }), ctx());
+      const res = await webhook(
+        new NextRequest("http://127.0.0.1:3000/api/payments/webhook", { method: "POST", body, headers: { "stripe-signature": signature } }),
+        ctx(),
+      );
       expect(res.status).toBe(200);
       expect((await res.json()).outcome).toBe("duplicate");
     }
@@ -140,10 +176,28 @@ describe("deposit through the payment SDK and the fake provider", () => {
         id: `evt_forged_${amount}_${quoteId.slice(0, 4)}`,
         object: "event",
         type: "checkout.session.completed",
-        data: { object: { id: sessionId, object: "checkout.session", amount_total: amount, currency: "usd", payment_status: "paid", status: "complete", client_reference_id: quoteId, metadata: { quote_id: quoteId } } },
+        data: {
+          object: {
+            id: sessionId,
+            object: "checkout.session",
+            amount_total: amount,
+            currency: "usd",
+            payment_status: "paid",
+            status: "complete",
+            client_reference_id: quoteId,
+            metadata: { quote_id: quoteId },
+          },
+        },
       });
     const post = (body: string, signature?: string) =>
-      webhook(new NextRequest("http://127.0.0.1:3000/api/payments/webhook", { method: "POST", body, headers: signature ? { "stripe-signature": signature } : {} }), ctx());
+      webhook(
+        new NextRequest("http://127.0.0.1:3000/api/payments/webhook", {
+          method: "POST",
+          body,
+          headers: signature ? { "stripe-signature": signature } : {},
+        }),
+        ctx(),
+      );
     const good = event(q.deposit_cents);
     expect((await post(good, signPayload(good, "whsec_someone_else"))).status).toBe(400);
     expect((await post(good.replace(String(q.deposit_cents), "1"), signPayload(good, SECRET))).status).toBe(400);
@@ -170,11 +224,25 @@ describe("deposit through the payment SDK and the fake provider", () => {
   it("a correctly signed event with a malformed body is a 400 with a message, nothing written", async () => {
     const before = await db("payment_webhook_events").count<{ count: string }[]>();
     const post = (body: string) =>
-      webhook(new NextRequest("http://127.0.0.1:3000/api/payments/webhook", { method: "POST", body, headers: { "stripe-signature": signPayload(body, SECRET) } }), ctx());
+      webhook(
+        new NextRequest("http://127.0.0.1:3000/api/payments/webhook", {
+          method: "POST",
+          body,
+          headers: { "stripe-signature": signPayload(body, SECRET) },
+        }),
+        ctx(),
+      );
     const malformed = [
       { id: "evt_no_data", object: "event", type: "checkout.session.completed", data: null },
       { id: "evt_no_object", object: "event", type: "checkout.session.completed", data: {} },
-      { id: "evt_amount_text", object: "event", type: "checkout.session.completed", data: { object: { id: "cs_x", amount_total: "lots", currency: "usd", payment_status: "paid", client_reference_id: null, metadata: {} } } },
+      {
+        id: "evt_amount_text",
+        object: "event",
+        type: "checkout.session.completed",
+        data: {
+          object: { id: "cs_x", amount_total: "lots", currency: "usd", payment_status: "paid", client_reference_id: null, metadata: {} },
+        },
+      },
       { object: "event", type: "checkout.session.completed", data: { object: { id: "cs_x" } } },
       { id: "evt_other_type_no_data", object: "event", type: "charge.refunded" },
       [1, 2, 3],
@@ -193,7 +261,9 @@ describe("deposit through the payment SDK and the fake provider", () => {
     expect((await action(third.token, "decline")).status).toBe(200);
     expect((await action(third.token, "accept")).status).toBe(409);
     const fourth = await sentQuote();
-    await db("quotes").where({ id: fourth.id }).update({ valid_until: db.raw("now() - interval '1 second'") });
+    await db("quotes")
+      .where({ id: fourth.id })
+      .update({ valid_until: db.raw("now() - interval '1 second'") });
     expect((await action(fourth.token, "accept")).status).toBe(409);
     // Shown as expired at once; the row itself is written by the scheduled expiry job (tests/integration/jobs.test.ts).
     expect((await findPublicQuoteView(db, fourth.token))!.quote.status).toBe("expired");
@@ -209,7 +279,11 @@ describe("deposit through the payment SDK and the fake provider", () => {
       const page = await (await fetch(url)).text();
       expect(page).toContain("at Shop A");
       expect(page).not.toContain("Renamed Rims");
-      const paid = await fetch(url, { method: "POST", body: new URLSearchParams({ card: "4242 4242 4242 4242", exp: "12/30", cvc: "123" }), redirect: "manual" });
+      const paid = await fetch(url, {
+        method: "POST",
+        body: new URLSearchParams({ card: "4242 4242 4242 4242", exp: "12/30", cvc: "123" }),
+        redirect: "manual",
+      });
       expect(paid.status).toBe(303);
       const row = await quoteRow(q.id);
       expect(row.status).toBe("deposit_paid");
@@ -223,7 +297,11 @@ describe("deposit through the payment SDK and the fake provider", () => {
   });
 
   it("the fake refuses a wrong API key as the provider would", async () => {
-    const res = await fetch(`http://127.0.0.1:${pay.port}/v1/checkout/sessions`, { method: "POST", headers: { Authorization: "Bearer sk_test_wrong" }, body: "mode=payment" });
+    const res = await fetch(`http://127.0.0.1:${pay.port}/v1/checkout/sessions`, {
+      method: "POST",
+      headers: { Authorization: "Bearer sk_test_wrong" },
+      body: "mode=payment",
+    });
     expect(res.status).toBe(401);
   });
 });

@@ -8,7 +8,10 @@ const session = vi.hoisted(() => ({ current: null as unknown }));
 vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
 const sent = vi.hoisted(() => [] as { to: string; text: string; attachments?: { filename: string; content: Buffer }[] }[]);
 // The mail as it is queued (the queue itself: tests/integration/jobs.test.ts).
-vi.mock("@/lib/platform/mail", () => ({ queueMail: async (m: (typeof sent)[number]) => void sent.push(m), appOrigin: () => "http://127.0.0.1:3000" }));
+vi.mock("@/lib/platform/mail", () => ({
+  queueMail: async (m: (typeof sent)[number]) => void sent.push(m),
+  appOrigin: () => "http://127.0.0.1:3000",
+}));
 
 const db = testDb();
 const as = (u: (typeof U)[keyof typeof U]) => void (session.current = sessionOf(u));
@@ -47,7 +50,10 @@ let quoteId = "";
 describe("customers", () => {
   it("are created once and found again by phone digits or e-mail", async () => {
     as(U.staffA);
-    const res = await customers.POST(req("POST", "/api/shop/customers", { name: "Dace Holloway", phone: "(555) 013-2277", email: "dace@example.test" }), ctx());
+    const res = await customers.POST(
+      req("POST", "/api/shop/customers", { name: "Dace Holloway", phone: "(555) 013-2277", email: "dace@example.test" }),
+      ctx(),
+    );
     expect(res.status).toBe(201);
     const made = await res.json();
     expect(internalKeys(made)).toEqual([]);
@@ -107,19 +113,43 @@ describe("quotes", () => {
     as(U.staffA);
     const tire = await item(db, SHOP_A, "TR-EXAMPLE-35");
     const wheel = await item(db, SHOP_A, "WH-EXAMPLE-BL");
-    const res = await quotes.POST(req("POST", "/api/shop/quotes", { customerId, vehicle: VEHICLE, saveVehicle: true, tireItemId: tire.id, wheelItemId: wheel.id, quantity: 4 }), ctx());
+    const res = await quotes.POST(
+      req("POST", "/api/shop/quotes", {
+        customerId,
+        vehicle: VEHICLE,
+        saveVehicle: true,
+        tireItemId: tire.id,
+        wheelItemId: wheel.id,
+        quantity: 4,
+      }),
+      ctx(),
+    );
     expect(res.status).toBe(201);
     quoteId = (await res.json()).id;
     const d = await (await quoteById.GET(req("GET", `/api/shop/quotes/${quoteId}`), ctx({ id: quoteId }))).json();
     expect(d.lines.map((l: { sku: string; quantity: number }) => `${l.sku}×${l.quantity}`)).toEqual([
-      "TR-EXAMPLE-35×4", "WH-EXAMPLE-BL×4", "SV-MB×4", "SV-BL×4", "SV-VS×4", "SV-AL×1", "SV-FT×1", "SV-DP×4",
+      "TR-EXAMPLE-35×4",
+      "WH-EXAMPLE-BL×4",
+      "SV-MB×4",
+      "SV-BL×4",
+      "SV-VS×4",
+      "SV-AL×1",
+      "SV-FT×1",
+      "SV-DP×4",
     ]);
     // The 35 in tire on the −12.7 mm beadlock reaches ≈ 59 mm further out than 265/70R17 on +25 mm, past the 25 mm
     // poke rule, so one hour of fender trimming is suggested too.
     expect(d.quote.fitment.outerPokeChangeMm).toBeGreaterThan(25);
     // By hand: parts 4 × 389 + 4 × 465 = 3416.00 taxable; services 120 + 180 + 20 + 129 + 145 + 16 = 610.00 untaxed.
     // Tax 3416.00 × 8.25 % = 281.82; total 4026.00 + 281.82 = 4307.82; deposit 25 % = 1076.955 → 1076.96.
-    expect(d.quote).toMatchObject({ subtotalCents: 402600, taxableCents: 341600, taxCents: 28182, totalCents: 430782, depositCents: 107696, status: "draft" });
+    expect(d.quote).toMatchObject({
+      subtotalCents: 402600,
+      taxableCents: 341600,
+      taxCents: 28182,
+      totalCents: 430782,
+      depositCents: 107696,
+      status: "draft",
+    });
     expect(d.events).toEqual([expect.objectContaining({ toStatus: "draft", actor: "Sam Staff", actorUserId: U.staffA.id })]);
     expect(internalKeys(d)).toEqual([]);
     expect(d.quote.createdAt).toMatch(/^\d{4}-\d\d-\d\dT\d\d:\d\d:\d\d\.\d{3}Z$/);
@@ -133,15 +163,24 @@ describe("quotes", () => {
   it("edits recompute totals on the server; a negative quantity is refused and nothing changes", async () => {
     as(U.staffA);
     const line = { kind: "custom", sku: "", description: "Labour", quantity: 2, unitPriceCents: 6250, discountCents: 0, taxable: false };
-    const ok = await quoteById.PUT(req("PUT", `/api/shop/quotes/${quoteId}`, { lines: [line], discountCents: 1000, notes: "" }), ctx({ id: quoteId }));
+    const ok = await quoteById.PUT(
+      req("PUT", `/api/shop/quotes/${quoteId}`, { lines: [line], discountCents: 1000, notes: "" }),
+      ctx({ id: quoteId }),
+    );
     expect(ok.status).toBe(200);
     const edited = await ok.json();
     expect(internalKeys(edited)).toEqual([]);
     expect(edited.quote).toMatchObject({ subtotalCents: 12500, discountCents: 1000, taxCents: 0, totalCents: 11500 });
-    const bad = await quoteById.PUT(req("PUT", `/api/shop/quotes/${quoteId}`, { lines: [{ ...line, quantity: -4 }], discountCents: 0, notes: "" }), ctx({ id: quoteId }));
+    const bad = await quoteById.PUT(
+      req("PUT", `/api/shop/quotes/${quoteId}`, { lines: [{ ...line, quantity: -4 }], discountCents: 0, notes: "" }),
+      ctx({ id: quoteId }),
+    );
     expect(bad.status).toBe(422);
     expect((await bad.json()).fieldErrors["lines.0.quantity"]).toBeDefined();
-    const tooMuch = await quoteById.PUT(req("PUT", `/api/shop/quotes/${quoteId}`, { lines: [line], discountCents: 99999, notes: "" }), ctx({ id: quoteId }));
+    const tooMuch = await quoteById.PUT(
+      req("PUT", `/api/shop/quotes/${quoteId}`, { lines: [line], discountCents: 99999, notes: "" }),
+      ctx({ id: quoteId }),
+    );
     expect(tooMuch.status).toBe(422);
     const row = await db("quotes").where({ id: quoteId }).first();
     expect(row).toMatchObject({ total_cents: 11500, discount_cents: 1000 });
@@ -152,7 +191,17 @@ describe("quotes", () => {
     for (const who of [U.staffB, U.ownerB, U.staffA2]) {
       as(who);
       expect((await quoteById.GET(req("GET", `/api/shop/quotes/${quoteId}`), ctx({ id: quoteId }))).status).toBe(404);
-      expect((await quoteById.PUT(req("PUT", `/api/shop/quotes/${quoteId}`, { lines: [{ kind: "custom", description: "x", quantity: 1, unitPriceCents: 1 }], discountCents: 0 }), ctx({ id: quoteId }))).status).toBe(404);
+      expect(
+        (
+          await quoteById.PUT(
+            req("PUT", `/api/shop/quotes/${quoteId}`, {
+              lines: [{ kind: "custom", description: "x", quantity: 1, unitPriceCents: 1 }],
+              discountCents: 0,
+            }),
+            ctx({ id: quoteId }),
+          )
+        ).status,
+      ).toBe(404);
       expect((await (await quotes.GET(req("GET", "/api/shop/quotes"), ctx())).json()).quotes).toEqual([]);
     }
     as(U.ownerA);
@@ -167,8 +216,19 @@ describe("quotes", () => {
     as(U.staffB);
     const mine = await item(db, SHOP_A, "TR-EXAMPLE-35");
     const wheel = await item(db, SHOP_A, "WH-EXAMPLE-17");
-    const other = await db("customers").insert({ shop_id: "0b000000-0000-4000-8000-00000000000b", name: "B customer", phone: "5550000000", phone_digits: "5550000000" }).returning("id");
-    const res = await quotes.POST(req("POST", "/api/shop/quotes", { customerId: other[0].id, vehicle: VEHICLE, tireItemId: mine.id, wheelItemId: wheel.id, quantity: 4 }), ctx());
+    const other = await db("customers")
+      .insert({ shop_id: "0b000000-0000-4000-8000-00000000000b", name: "B customer", phone: "5550000000", phone_digits: "5550000000" })
+      .returning("id");
+    const res = await quotes.POST(
+      req("POST", "/api/shop/quotes", {
+        customerId: other[0].id,
+        vehicle: VEHICLE,
+        tireItemId: mine.id,
+        wheelItemId: wheel.id,
+        quantity: 4,
+      }),
+      ctx(),
+    );
     expect(res.status).toBe(422);
     expect(await db("quotes").where({ shop_id: "0b000000-0000-4000-8000-00000000000b" })).toEqual([]);
   });
@@ -186,14 +246,24 @@ describe("sending", () => {
     as(U.staffA);
     const tire = await item(db, SHOP_A, "TR-EXAMPLE-35");
     const wheel = await item(db, SHOP_A, "WH-EXAMPLE-BL");
-    sentId = (await (await quotes.POST(req("POST", "/api/shop/quotes", { customerId, vehicle: VEHICLE, tireItemId: tire.id, wheelItemId: wheel.id, quantity: 5 }), ctx())).json()).id;
+    sentId = (
+      await (
+        await quotes.POST(
+          req("POST", "/api/shop/quotes", { customerId, vehicle: VEHICLE, tireItemId: tire.id, wheelItemId: wheel.id, quantity: 5 }),
+          ctx(),
+        )
+      ).json()
+    ).id;
     sent.length = 0;
     const res = await send(req("POST", `/api/shop/quotes/${sentId}/send`, {}), ctx({ id: sentId }));
     expect(res.status).toBe(200);
     const d = await res.json();
     expect(d.quote.status).toBe("sent");
     expect(internalKeys(d)).toEqual([]); // the link's token hash stays in the database
-    expect(d.events.map((e: { toStatus: string; actor: string }) => `${e.toStatus}:${e.actor}`)).toEqual(["draft:Sam Staff", "sent:Sam Staff"]);
+    expect(d.events.map((e: { toStatus: string; actor: string }) => `${e.toStatus}:${e.actor}`)).toEqual([
+      "draft:Sam Staff",
+      "sent:Sam Staff",
+    ]);
     expect(sent).toHaveLength(1);
     expect(sent[0]!.to).toBe("dace@example.test");
     const token = /\/q\/([A-Za-z0-9_-]{43})/.exec(sent[0]!.text)?.[1];
@@ -206,7 +276,19 @@ describe("sending", () => {
     expect(att.filename).toBe(`quote-Q-${d.quote.number}.pdf`);
     const text = await pdfText(att.content);
     const money = (c: number) => "$" + (c / 100).toLocaleString("en-US", { minimumFractionDigits: 2 });
-    for (const s of [`Quote Q-${d.quote.number}`, "Shop A", "Dace Holloway", "TR-EXAMPLE-35", money(d.quote.subtotalCents), money(d.quote.taxCents), money(d.quote.totalCents), money(d.quote.depositCents), "Bead seating", "Beadlock rings", "re-check"]) {
+    for (const s of [
+      `Quote Q-${d.quote.number}`,
+      "Shop A",
+      "Dace Holloway",
+      "TR-EXAMPLE-35",
+      money(d.quote.subtotalCents),
+      money(d.quote.taxCents),
+      money(d.quote.totalCents),
+      money(d.quote.depositCents),
+      "Bead seating",
+      "Beadlock rings",
+      "re-check",
+    ]) {
       expect(text).toContain(s);
     }
     // 5 tires at 389.00 = 1,945.00 appears as a line amount.
@@ -226,7 +308,13 @@ describe("sending", () => {
 
   it("a sent quote cannot be edited until taken back to draft, which voids the link", async () => {
     as(U.staffA);
-    const edit = await quoteById.PUT(req("PUT", `/api/shop/quotes/${sentId}`, { lines: [{ kind: "custom", description: "x", quantity: 1, unitPriceCents: 1 }], discountCents: 0 }), ctx({ id: sentId }));
+    const edit = await quoteById.PUT(
+      req("PUT", `/api/shop/quotes/${sentId}`, {
+        lines: [{ kind: "custom", description: "x", quantity: 1, unitPriceCents: 1 }],
+        discountCents: 0,
+      }),
+      ctx({ id: sentId }),
+    );
     expect(edit.status).toBe(409);
     const back = await status(req("POST", `/api/shop/quotes/${sentId}/status`, { to: "draft" }), ctx({ id: sentId }));
     expect(back.status).toBe(200);
@@ -236,10 +324,19 @@ describe("sending", () => {
 
   it("refuses to send without a customer e-mail", async () => {
     as(U.staffA);
-    const c = (await (await customers.POST(req("POST", "/api/shop/customers", { name: "No Mail", phone: "555 777 1212", email: "" }), ctx())).json()).customer;
+    const c = (
+      await (await customers.POST(req("POST", "/api/shop/customers", { name: "No Mail", phone: "555 777 1212", email: "" }), ctx())).json()
+    ).customer;
     const tire = await item(db, SHOP_A, "TR-EXAMPLE-35");
     const wheel = await item(db, SHOP_A, "WH-EXAMPLE-17");
-    const id = (await (await quotes.POST(req("POST", "/api/shop/quotes", { customerId: c.id, vehicle: VEHICLE, tireItemId: tire.id, wheelItemId: wheel.id, quantity: 4 }), ctx())).json()).id;
+    const id = (
+      await (
+        await quotes.POST(
+          req("POST", "/api/shop/quotes", { customerId: c.id, vehicle: VEHICLE, tireItemId: tire.id, wheelItemId: wheel.id, quantity: 4 }),
+          ctx(),
+        )
+      ).json()
+    ).id;
     const res = await send(req("POST", `/api/shop/quotes/${id}/send`, {}), ctx({ id }));
     expect(res.status).toBe(422);
     expect((await db("quotes").where({ id }).first()).status).toBe("draft");
@@ -257,7 +354,10 @@ async function draftFor(vehicle: object = VEHICLE, wheelSku = "WH-EXAMPLE-17") {
   as(U.staffA);
   const tire = await item(db, SHOP_A, "TR-EXAMPLE-35");
   const wheel = await item(db, SHOP_A, wheelSku);
-  const res = await quotes.POST(req("POST", "/api/shop/quotes", { customerId, vehicle, tireItemId: tire.id, wheelItemId: wheel.id, quantity: 4 }), ctx());
+  const res = await quotes.POST(
+    req("POST", "/api/shop/quotes", { customerId, vehicle, tireItemId: tire.id, wheelItemId: wheel.id, quantity: 4 }),
+    ctx(),
+  );
   return { res, id: res.status === 201 ? ((await res.json()).id as string) : "" };
 }
 const put = (id: string, lines: object[], discountCents = 0, extra: object = {}) =>
@@ -268,7 +368,18 @@ describe("labour in fractional hours", () => {
   it("1.5 h of a per-hour service at 145.00 is 217.50 exactly, stored and shown as hours", async () => {
     const { id } = await draftFor();
     const trim = await item(db, SHOP_A, "SV-FT"); // fender trimming, per hour, 145.00
-    const res = await put(id, [{ kind: "service", catalogItemId: trim.id, sku: trim.sku, description: trim.description, quantity: 1.5, unitPriceCents: 14500, discountCents: 0, taxable: false }]);
+    const res = await put(id, [
+      {
+        kind: "service",
+        catalogItemId: trim.id,
+        sku: trim.sku,
+        description: trim.description,
+        quantity: 1.5,
+        unitPriceCents: 14500,
+        discountCents: 0,
+        taxable: false,
+      },
+    ]);
     expect(res.status).toBe(200);
     const d = await res.json();
     // Arithmetic: 1.5 × 145.00 = 217.50 (no rounding involved).
@@ -284,7 +395,16 @@ describe("labour in fractional hours", () => {
   it("reads 1 1/2, 1½ and 1:30 as 1.5 h; refuses what is not exact in hundredths, and whole-item lines in fractions", async () => {
     const { id } = await draftFor();
     const trim = await item(db, SHOP_A, "SV-FT");
-    const line = (quantity: unknown) => ({ kind: "service", catalogItemId: trim.id, sku: trim.sku, description: trim.description, quantity, unitPriceCents: 14500, discountCents: 0, taxable: false });
+    const line = (quantity: unknown) => ({
+      kind: "service",
+      catalogItemId: trim.id,
+      sku: trim.sku,
+      description: trim.description,
+      quantity,
+      unitPriceCents: 14500,
+      discountCents: 0,
+      taxable: false,
+    });
     for (const q of ["1 1/2", "1½", "1:30", "1.5 h"]) {
       const res = await put(id, [line(q)]);
       expect(res.status, q).toBe(200);
@@ -297,11 +417,33 @@ describe("labour in fractional hours", () => {
     expect(msg).toMatch(/1\.33/);
     // A tire is counted in whole tires.
     const tire = await item(db, SHOP_A, "TR-EXAMPLE-35");
-    const half = await put(id, [{ kind: "tire", catalogItemId: tire.id, sku: tire.sku, description: tire.description, quantity: 1.5, unitPriceCents: 38900, discountCents: 0, taxable: true }]);
+    const half = await put(id, [
+      {
+        kind: "tire",
+        catalogItemId: tire.id,
+        sku: tire.sku,
+        description: tire.description,
+        quantity: 1.5,
+        unitPriceCents: 38900,
+        discountCents: 0,
+        taxable: true,
+      },
+    ]);
     expect(half.status).toBe(422);
     expect((await half.json()).fieldErrors["lines.0.quantity"][0]).toMatch(/whole/);
     // A custom labour line in hours.
-    const labour = await put(id, [{ kind: "custom", unit: "hour", sku: "", description: "Labour", quantity: 0.25, unitPriceCents: 12500, discountCents: 0, taxable: false }]);
+    const labour = await put(id, [
+      {
+        kind: "custom",
+        unit: "hour",
+        sku: "",
+        description: "Labour",
+        quantity: 0.25,
+        unitPriceCents: 12500,
+        discountCents: 0,
+        taxable: false,
+      },
+    ]);
     expect(labour.status).toBe(200);
     // 0.25 × 125.00 = 31.25
     expect((await labour.json()).lines[0]).toMatchObject({ quantity: 0.25, unit: "hour", lineTotalCents: 3125 });
@@ -311,12 +453,42 @@ describe("labour in fractional hours", () => {
 describe("any catalog item on a quote", () => {
   it("takes a TPMS service and the catalog's own kind and unit, whatever the request says", async () => {
     const [tpms] = await db("catalog_items")
-      .insert({ shop_id: SHOP_A, kind: "service", sku: "SV-TPMS-T", description: "TPMS sensor service", price_cents: 1800, service_type: "tpms", service_unit: "per_wheel" })
+      .insert({
+        shop_id: SHOP_A,
+        kind: "service",
+        sku: "SV-TPMS-T",
+        description: "TPMS sensor service",
+        price_cents: 1800,
+        service_type: "tpms",
+        service_unit: "per_wheel",
+      })
       .returning("*");
     const { id } = await draftFor();
     const d0 = await detailOf(id);
-    const keep = d0.lines.map((l: Record<string, unknown>) => ({ kind: l.kind, unit: l.unit, catalogItemId: l.catalogItemId, sku: l.sku, description: l.description, quantity: l.quantity, unitPriceCents: l.unitPriceCents, discountCents: l.discountCents, taxable: l.taxable }));
-    const res = await put(id, [...keep, { kind: "custom", catalogItemId: tpms.id, sku: "", description: "TPMS sensor service", quantity: 4, unitPriceCents: 1800, discountCents: 0, taxable: false }]);
+    const keep = d0.lines.map((l: Record<string, unknown>) => ({
+      kind: l.kind,
+      unit: l.unit,
+      catalogItemId: l.catalogItemId,
+      sku: l.sku,
+      description: l.description,
+      quantity: l.quantity,
+      unitPriceCents: l.unitPriceCents,
+      discountCents: l.discountCents,
+      taxable: l.taxable,
+    }));
+    const res = await put(id, [
+      ...keep,
+      {
+        kind: "custom",
+        catalogItemId: tpms.id,
+        sku: "",
+        description: "TPMS sensor service",
+        quantity: 4,
+        unitPriceCents: 1800,
+        discountCents: 0,
+        taxable: false,
+      },
+    ]);
     expect(res.status).toBe(200);
     const last = (await res.json()).lines.at(-1);
     expect(last).toMatchObject({ kind: "service", sku: "SV-TPMS-T", quantity: 4, lineTotalCents: 7200 });
@@ -325,7 +497,18 @@ describe("any catalog item on a quote", () => {
 
 describe("the wheel on the vehicle's hub", () => {
   it("refuses a wheel whose centre bore is smaller than the hub (106.1 mm bore on a 108 mm hub)", async () => {
-    await db("catalog_items").insert({ shop_id: SHOP_A, kind: "wheel", sku: "WH-T-1061", description: "Test 17x9 106.1 mm bore", price_cents: 28900, wheel_diameter_in: 17, wheel_width_in: 9, wheel_offset_mm: 0, bolt_pattern: "6x139.7", center_bore_mm: 106.1 });
+    await db("catalog_items").insert({
+      shop_id: SHOP_A,
+      kind: "wheel",
+      sku: "WH-T-1061",
+      description: "Test 17x9 106.1 mm bore",
+      price_cents: 28900,
+      wheel_diameter_in: 17,
+      wheel_width_in: 9,
+      wheel_offset_mm: 0,
+      bolt_pattern: "6x139.7",
+      center_bore_mm: 106.1,
+    });
     const { res } = await draftFor({ ...VEHICLE, hubBoreMm: 108 }, "WH-T-1061");
     expect(res.status).toBe(422);
     const body = await res.json();
@@ -334,12 +517,25 @@ describe("the wheel on the vehicle's hub", () => {
   });
 
   it("takes a larger bore but says hub-centric rings are needed, with their sizes", async () => {
-    await db("catalog_items").insert({ shop_id: SHOP_A, kind: "wheel", sku: "WH-T-110", description: "Test 17x9 110 mm bore", price_cents: 25900, wheel_diameter_in: 17, wheel_width_in: 9, wheel_offset_mm: 0, bolt_pattern: "6x5.5", center_bore_mm: 110.1 });
+    await db("catalog_items").insert({
+      shop_id: SHOP_A,
+      kind: "wheel",
+      sku: "WH-T-110",
+      description: "Test 17x9 110 mm bore",
+      price_cents: 25900,
+      wheel_diameter_in: 17,
+      wheel_width_in: 9,
+      wheel_offset_mm: 0,
+      bolt_pattern: "6x5.5",
+      center_bore_mm: 110.1,
+    });
     const { res, id } = await draftFor({ ...VEHICLE, hubBoreMm: 108 }, "WH-T-110");
     expect(res.status).toBe(201);
     const d = await detailOf(id);
     expect(d.quote.hubBoreMm).toBe(108);
-    const rings = d.hubChecks.flatMap((c: { findings: { code: string; message: string }[] }) => c.findings).find((f: { code: string }) => f.code === "needs-rings");
+    const rings = d.hubChecks
+      .flatMap((c: { findings: { code: string; message: string }[] }) => c.findings)
+      .find((f: { code: string }) => f.code === "needs-rings");
     expect(rings.message).toMatch(/hub-centric rings/i);
     expect(rings.message).toMatch(/110\.1 mm.*108 mm/);
     const pdf = await pdfText(Buffer.from(await (await pdfRoute(req("GET", `/api/shop/quotes/${id}/pdf`), ctx({ id }))).arrayBuffer()));
@@ -348,11 +544,31 @@ describe("the wheel on the vehicle's hub", () => {
 
   it("refuses a wheel line of another bolt pattern, and takes 6x139.7 on a 6x5.5 vehicle (6 × 5.5 in × 25.4 = 139.7 mm, NIST SP 811)", async () => {
     const [eight] = await db("catalog_items")
-      .insert({ shop_id: SHOP_A, kind: "wheel", sku: "WH-T-8L", description: "Test 8-lug", price_cents: 30000, wheel_diameter_in: 17, wheel_width_in: 9, wheel_offset_mm: 0, bolt_pattern: "8x6.5", center_bore_mm: 125 })
+      .insert({
+        shop_id: SHOP_A,
+        kind: "wheel",
+        sku: "WH-T-8L",
+        description: "Test 8-lug",
+        price_cents: 30000,
+        wheel_diameter_in: 17,
+        wheel_width_in: 9,
+        wheel_offset_mm: 0,
+        bolt_pattern: "8x6.5",
+        center_bore_mm: 125,
+      })
       .returning("*");
     const metric = await item(db, SHOP_A, "WH-EXAMPLE-BL"); // 6x139.7, 108 mm
     const { id } = await draftFor({ ...VEHICLE, hubBoreMm: 108 });
-    const wheelLine = (w: { id: string; sku: string; description: string; price_cents: number }) => ({ kind: "wheel", catalogItemId: w.id, sku: w.sku, description: w.description, quantity: 4, unitPriceCents: w.price_cents, discountCents: 0, taxable: true });
+    const wheelLine = (w: { id: string; sku: string; description: string; price_cents: number }) => ({
+      kind: "wheel",
+      catalogItemId: w.id,
+      sku: w.sku,
+      description: w.description,
+      quantity: 4,
+      unitPriceCents: w.price_cents,
+      discountCents: 0,
+      taxable: true,
+    });
     const labour = { kind: "custom", sku: "", description: "Labour", quantity: 1, unitPriceCents: 100, discountCents: 0, taxable: false };
     const bad = await put(id, [labour, labour, wheelLine(eight)]);
     expect(bad.status).toBe(422);
@@ -406,7 +622,9 @@ describe("a sent quote is a frozen document", () => {
       expect(await db("quote_documents").where({ quote_id: id })).toHaveLength(2);
     } finally {
       await db("shops").where({ id: SHOP_A }).update({ name: "Shop A", address: "1 Test Lane", phone: "555-0100" });
-      await db("catalog_items").where({ shop_id: SHOP_A, sku: "TR-EXAMPLE-35" }).update({ description: "Example all-terrain 35x12.50R17LT load range E" });
+      await db("catalog_items")
+        .where({ shop_id: SHOP_A, sku: "TR-EXAMPLE-35" })
+        .update({ description: "Example all-terrain 35x12.50R17LT load range E" });
     }
   });
 });
@@ -415,7 +633,17 @@ describe("sending what the screen shows", () => {
   it("refuses to send when the quote changed after the version the sender saw (409, nothing sent)", async () => {
     const { id } = await draftFor();
     const seen = (await detailOf(id)).quote.updatedAt;
-    await put(id, [{ kind: "custom", sku: "", description: "Changed in another tab", quantity: 1, unitPriceCents: 100, discountCents: 0, taxable: false }]);
+    await put(id, [
+      {
+        kind: "custom",
+        sku: "",
+        description: "Changed in another tab",
+        quantity: 1,
+        unitPriceCents: 100,
+        discountCents: 0,
+        taxable: false,
+      },
+    ]);
     sent.length = 0;
     const res = await send(req("POST", `/api/shop/quotes/${id}/send`, { seenUpdatedAt: seen }), ctx({ id }));
     expect(res.status).toBe(409);
@@ -445,7 +673,8 @@ describe("messages a person reads", () => {
       const res = await quoteById.PUT(req("PUT", `/api/shop/quotes/${id}`, b), ctx({ id }));
       expect(res.status, JSON.stringify(b)).toBe(422);
       const out = await res.json();
-      for (const [k, v] of Object.entries(out.fieldErrors as Record<string, string[]>)) expect(v.join(" "), `${k} of ${JSON.stringify(b)}`).not.toMatch(RAW);
+      for (const [k, v] of Object.entries(out.fieldErrors as Record<string, string[]>))
+        expect(v.join(" "), `${k} of ${JSON.stringify(b)}`).not.toMatch(RAW);
     }
     // An empty catalog pick ("", as a cleared select sends it) is no catalog item, not a type error.
     expect((await put(id, [{ ...good, catalogItemId: "" }])).status).toBe(200);
@@ -456,7 +685,10 @@ describe("messages a person reads", () => {
       const res = await status(req("POST", `/api/shop/quotes/${id}/status`, b), ctx({ id }));
       expect(JSON.stringify(await res.json())).not.toMatch(RAW);
     }
-    const create = await quotes.POST(req("POST", "/api/shop/quotes", { customerId, vehicleId: "x", saveVehicle: "yes", tireItemId: "", wheelItemId: 3, quantity: 4 }), ctx());
+    const create = await quotes.POST(
+      req("POST", "/api/shop/quotes", { customerId, vehicleId: "x", saveVehicle: "yes", tireItemId: "", wheelItemId: 3, quantity: 4 }),
+      ctx(),
+    );
     expect(create.status).toBe(422);
     expect(JSON.stringify(await create.json())).not.toMatch(RAW);
   });
@@ -467,8 +699,23 @@ describe("the quote PDF prints every name", () => {
     as(U.staffA);
     const tire = await item(db, SHOP_A, "TR-EXAMPLE-35");
     const wheel = await item(db, SHOP_A, "WH-EXAMPLE-BL");
-    const cust = await (await customers.POST(req("POST", "/api/shop/customers", { name: "Łukasz Żółć", phone: "555 010 7788", email: "" }), ctx())).json();
-    const id = (await (await quotes.POST(req("POST", "/api/shop/quotes", { customerId: cust.customer.id, vehicle: VEHICLE, tireItemId: tire.id, wheelItemId: wheel.id, quantity: 4 }), ctx())).json()).id as string;
+    const cust = await (
+      await customers.POST(req("POST", "/api/shop/customers", { name: "Łukasz Żółć", phone: "555 010 7788", email: "" }), ctx())
+    ).json();
+    const id = (
+      await (
+        await quotes.POST(
+          req("POST", "/api/shop/quotes", {
+            customerId: cust.customer.id,
+            vehicle: VEHICLE,
+            tireItemId: tire.id,
+            wheelItemId: wheel.id,
+            quantity: 4,
+          }),
+          ctx(),
+        )
+      ).json()
+    ).id as string;
     const before = (await db("shops").where({ id: SHOP_A }).first()).name as string;
     await db("shops").where({ id: SHOP_A }).update({ name: "Terenówki Łódź", address: "ul. Piotrkowska 1, Łódź" });
     try {

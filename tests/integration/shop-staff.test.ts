@@ -26,7 +26,10 @@ const as = (u: (typeof U)[keyof typeof U]) => void (session.current = sessionOf(
 
 beforeAll(async () => {
   await rebuild(db);
-  await db("shops").insert([{ id: SHOP_A, name: "Shop A" }, { id: SHOP_B, name: "Shop B" }]);
+  await db("shops").insert([
+    { id: SHOP_A, name: "Shop A" },
+    { id: SHOP_B, name: "Shop B" },
+  ]);
   const { hashPassword } = await import("@/lib/platform/auth/password");
   const hash = await hashPassword("member password 1");
   await db("users").insert(Object.values(U).map((u) => ({ ...u, name: u.email.split("@")[0], password_hash: hash })));
@@ -63,9 +66,23 @@ describe("shop settings", () => {
     const saved = await res.json();
     expect(internalKeys(saved)).toEqual([]);
     // camelCase on purpose: the API shape of lib/shop/api.ts.
-    expect(saved.shop).toMatchObject({ name: "Shop A Tire", taxRateBp: 825, labourRateCents: 12500, fabricationRateCents: 14250, quoteValidityDays: 10, depositPct: 30 });
+    expect(saved.shop).toMatchObject({
+      name: "Shop A Tire",
+      taxRateBp: 825,
+      labourRateCents: 12500,
+      fabricationRateCents: 14250,
+      quoteValidityDays: 10,
+      depositPct: 30,
+    });
     const row = await db("shops").where({ id: SHOP_A }).first();
-    expect(row).toMatchObject({ name: "Shop A Tire", tax_rate_bp: 825, labour_rate_cents: 12500, fabrication_rate_cents: 14250, quote_validity_days: 10, deposit_pct: 30 });
+    expect(row).toMatchObject({
+      name: "Shop A Tire",
+      tax_rate_bp: 825,
+      labour_rate_cents: 12500,
+      fabrication_rate_cents: 14250,
+      quote_validity_days: 10,
+      deposit_pct: 30,
+    });
   });
 
   it("staff read them but cannot change them (403, nothing written)", async () => {
@@ -129,7 +146,9 @@ describe("staff invitations", () => {
     sent.length = 0;
     await staff.POST(req("POST", "/api/shop/staff", { email: "late@example.test" }), ctx());
     const t = /\/join\/([A-Za-z0-9_-]{43})/.exec(sent[0]!.text)![1];
-    await db("staff_invites").where({ email: "late@example.test" }).update({ expires_at: db.raw("now() - interval '1 minute'") });
+    await db("staff_invites")
+      .where({ email: "late@example.test" })
+      .update({ expires_at: db.raw("now() - interval '1 minute'") });
     session.current = null;
     expect((await join(req("POST", "/api/join", { token: t, name: "Late", password: "a long enough pass" }), ctx())).status).toBe(410);
     expect(await db("users").where({ email: "late@example.test" }).first()).toBeUndefined();

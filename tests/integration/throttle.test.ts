@@ -1,5 +1,11 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import { CLIENT_ADDRESS_HEADER, clientAddress, resolveClientAddress, trustClientAddressHeader, trustedProxies } from "@/lib/platform/auth/clientAddress";
+import {
+  CLIENT_ADDRESS_HEADER,
+  clientAddress,
+  resolveClientAddress,
+  trustClientAddressHeader,
+  trustedProxies,
+} from "@/lib/platform/auth/clientAddress";
 import { hashPassword } from "@/lib/platform/auth/password";
 import { THROTTLE, backoffSec } from "@/lib/platform/auth/throttle";
 import { settleAfterResponse } from "@/lib/platform/http/afterResponse";
@@ -10,7 +16,11 @@ import { ctx, req } from "./support/requests";
  * Security review: the per-address limit keyed on X-Forwarded-For (anyone can rotate it), and
  * five wrong passwords from anywhere locked the account for everyone for 15 minutes.
  */
-vi.mock("@/lib/platform/mail", () => ({ sendMail: async () => {}, queueMail: async () => "job-id", appOrigin: () => "http://127.0.0.1:3000" }));
+vi.mock("@/lib/platform/mail", () => ({
+  sendMail: async () => {},
+  queueMail: async () => "job-id",
+  appOrigin: () => "http://127.0.0.1:3000",
+}));
 
 const db = testDb();
 const { authOptions } = await import("@/lib/platform/auth/options");
@@ -34,7 +44,10 @@ type Authorize = (c: Record<string, string>, r: { headers: Record<string, string
 const authorize = (authOptions.providers[0] as unknown as { options: { authorize: Authorize } }).options.authorize;
 /** A sign-in as scripts/serve.ts hands it on: its own client-address header, plus whatever the client claimed. */
 const signIn = (password: string, address: string, forwardedFor?: string) =>
-  authorize({ email: EMAIL, password }, { headers: { [CLIENT_ADDRESS_HEADER]: address, ...(forwardedFor ? { "x-forwarded-for": forwardedFor } : {}) } }).then(
+  authorize(
+    { email: EMAIL, password },
+    { headers: { [CLIENT_ADDRESS_HEADER]: address, ...(forwardedFor ? { "x-forwarded-for": forwardedFor } : {}) } },
+  ).then(
     () => "ok",
     (e: Error) => e.message,
   );
@@ -64,7 +77,8 @@ describe("the client address is never the client's own claim", () => {
 describe("sign-in backoff: per (address, account), never a lock on the account", () => {
   it("rotating X-Forwarded-For does not reset the count for an address", async () => {
     trustClientAddressHeader();
-    for (let i = 0; i < THROTTLE.freePerPair - 1; i++) expect(await signIn(`wrong ${i}`, "203.0.113.10", `10.9.9.${i}`)).toMatch(/do not match/);
+    for (let i = 0; i < THROTTLE.freePerPair - 1; i++)
+      expect(await signIn(`wrong ${i}`, "203.0.113.10", `10.9.9.${i}`)).toMatch(/do not match/);
     expect(await signIn("wrong last", "203.0.113.10", "10.9.9.250")).toMatch(/Wait 1 minute before trying again/);
     expect(await signIn(PASSWORD, "203.0.113.10", "10.9.9.251")).toMatch(/Wait 1 minute/);
   });
@@ -75,12 +89,16 @@ describe("sign-in backoff: per (address, account), never a lock on the account",
 
   it("waits double with each further failure (1, 2, 4 … minutes, at most an hour)", async () => {
     expect([1, 2, 3, 7, 20].map(backoffSec)).toEqual([60, 120, 240, 3600, 3600]);
-    await db("rate_limits").where("key", "like", "signin_pair_wait:%").update({ expire: Date.now() - 1 });
+    await db("rate_limits")
+      .where("key", "like", "signin_pair_wait:%")
+      .update({ expire: Date.now() - 1 });
     expect(await signIn("wrong again", "203.0.113.10")).toMatch(/Wait 2 minutes/);
   });
 
   it("slows, never locks, an account past the distributed-attack cap", async () => {
-    await db("rate_limits").where("key", "like", "signin_acct:%").update({ points: THROTTLE.accountSlowAfter, expire: Date.now() + 3_600_000 });
+    await db("rate_limits")
+      .where("key", "like", "signin_acct:%")
+      .update({ points: THROTTLE.accountSlowAfter, expire: Date.now() + 3_600_000 });
     const t0 = performance.now();
     expect(await signIn(PASSWORD, "198.51.100.21")).toBe("ok");
     expect(performance.now() - t0).toBeGreaterThanOrEqual(THROTTLE.accountDelayMs - 50);
@@ -93,7 +111,12 @@ describe("rate limits answer 429 with Retry-After, keyed on the trusted address"
     const statuses: number[] = [];
     for (let i = 0; i < 21; i++) {
       const res = await signup(
-        req("POST", "/api/account/signup", { name: "Many Accounts", email: `many${i}@example.test`, password: "a long enough password" }, { [CLIENT_ADDRESS_HEADER]: "192.0.2.50", "x-forwarded-for": `10.0.${i}.1` }),
+        req(
+          "POST",
+          "/api/account/signup",
+          { name: "Many Accounts", email: `many${i}@example.test`, password: "a long enough password" },
+          { [CLIENT_ADDRESS_HEADER]: "192.0.2.50", "x-forwarded-for": `10.0.${i}.1` },
+        ),
         ctx(),
       );
       statuses.push(res.status);
@@ -105,13 +128,29 @@ describe("rate limits answer 429 with Retry-After, keyed on the trusted address"
     expect(statuses).toEqual([...Array(20).fill(201), 429]);
     expect(await db("users").where("email", "like", "many%")).toHaveLength(20);
     // Another address is not affected.
-    const other = await signup(req("POST", "/api/account/signup", { name: "Other", email: "other@example.test", password: "a long enough password" }, { [CLIENT_ADDRESS_HEADER]: "192.0.2.51" }), ctx());
+    const other = await signup(
+      req(
+        "POST",
+        "/api/account/signup",
+        { name: "Other", email: "other@example.test", password: "a long enough password" },
+        { [CLIENT_ADDRESS_HEADER]: "192.0.2.51" },
+      ),
+      ctx(),
+    );
     expect(other.status).toBe(201);
   });
 
   it("forgot-password: 20 an hour per address", async () => {
     const statuses: number[] = [];
-    for (let i = 0; i < 21; i++) statuses.push((await forgot(req("POST", "/api/account/password/forgot", { email: `x${i}@example.test` }, { [CLIENT_ADDRESS_HEADER]: "192.0.2.60" }), ctx())).status);
+    for (let i = 0; i < 21; i++)
+      statuses.push(
+        (
+          await forgot(
+            req("POST", "/api/account/password/forgot", { email: `x${i}@example.test` }, { [CLIENT_ADDRESS_HEADER]: "192.0.2.60" }),
+            ctx(),
+          )
+        ).status,
+      );
     expect(statuses).toEqual([...Array(20).fill(200), 429]);
   });
 });

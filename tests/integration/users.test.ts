@@ -11,7 +11,9 @@ describe("users", () => {
   it("treats e-mail addresses case-insensitively and refuses duplicates", async () => {
     await createUser(db, { email: "Rowan@Example.test", name: "Rowan", passwordHash: "h" });
     expect((await findUserByEmail(db, "rowan@example.TEST"))?.name).toBe("Rowan");
-    await expect(createUser(db, { email: "ROWAN@example.test", name: "Other", passwordHash: "h" })).rejects.toBeInstanceOf(DuplicateEmailError);
+    await expect(createUser(db, { email: "ROWAN@example.test", name: "Other", passwordHash: "h" })).rejects.toBeInstanceOf(
+      DuplicateEmailError,
+    );
     expect(await db("users").whereRaw("lower(email) = 'rowan@example.test'").count<{ count: string }[]>()).toEqual([{ count: "1" }]);
   });
 
@@ -37,7 +39,9 @@ describe("password reset tokens", () => {
   it("expire", async () => {
     const u = await createUser(db, { email: "expired@example.test", name: "Late", passwordHash: "h" });
     const token = await issueResetToken(db, u.id);
-    await db("password_resets").where({ user_id: u.id }).update({ expires_at: db.raw("now() - interval '1 minute'") });
+    await db("password_resets")
+      .where({ user_id: u.id })
+      .update({ expires_at: db.raw("now() - interval '1 minute'") });
     expect(await consumeResetToken(db, token)).toBeNull();
   });
 

@@ -24,7 +24,14 @@ beforeAll(async () => {
     { id: OWNER.id, email: "owner-e1@example.test", name: "Olga Veer", password_hash: "x", role: "member" },
     { id: OTHER.id, email: "other-e2@example.test", name: "Per Strand", password_hash: "x", role: "member" },
   ]);
-  const base = { bolt_pattern: "5x114.3", bolt_pcd_mm: 114.3, bolt_count: 5, front_suspension: "independent", stock_setup: "{}", current_setup: "{}" };
+  const base = {
+    bolt_pattern: "5x114.3",
+    bolt_pcd_mm: 114.3,
+    bolt_count: 5,
+    front_suspension: "independent",
+    stock_setup: "{}",
+    current_setup: "{}",
+  };
   await db("vehicles").insert({ ...base, id: VEHICLE, user_id: OWNER.id, name: "Wagon" });
 });
 afterAll(async () => {

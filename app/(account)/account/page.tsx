@@ -20,7 +20,11 @@ export default async function AccountPage({ searchParams }: { searchParams: Prom
   return (
     <>
       <PageHeader title={`Hello, ${user?.name ?? caller.name}`} lead={user?.email} />
-      {sp.welcome && <Alert tone="success" className="mb-6">Your account is ready.</Alert>}
+      {sp.welcome && (
+        <Alert tone="success" className="mb-6">
+          Your account is ready.
+        </Alert>
+      )}
       <div className="grid gap-6 md:grid-cols-2">
         <Card>
           <h2 className="text-lg font-semibold">Your role</h2>
@@ -29,28 +33,52 @@ export default async function AccountPage({ searchParams }: { searchParams: Prom
             {shop && <span className="text-sm text-basalt-600">at {shop.name}</span>}
           </p>
           <ul className="mt-4 list-disc space-y-1 pl-5 text-sm text-basalt-700">
-            {can.items.map((i) => <li key={i}>{i}</li>)}
+            {can.items.map((i) => (
+              <li key={i}>{i}</li>
+            ))}
           </ul>
         </Card>
         <Card>
           <h2 className="text-lg font-semibold">Where to go</h2>
           <ul className="mt-3 space-y-2 text-sm">
-            {(caller.role === "shop_staff" || caller.role === "shop_owner") && <li><Link className="text-ember-700 underline" href="/shop">Your shop</Link></li>}
+            {(caller.role === "shop_staff" || caller.role === "shop_owner") && (
+              <li>
+                <Link className="text-ember-700 underline" href="/shop">
+                  Your shop
+                </Link>
+              </li>
+            )}
             {caller.role === "admin" && (
               <>
-                <li><Link className="text-ember-700 underline" href="/admin/users">Users and roles</Link></li>
-                <li><Link className="text-ember-700 underline" href="/admin/outbox">Development outbox</Link></li>
-                <li><Link className="text-ember-700 underline" href="/admin/jobs">Background jobs (failed mail and scheduled work)</Link></li>
+                <li>
+                  <Link className="text-ember-700 underline" href="/admin/users">
+                    Users and roles
+                  </Link>
+                </li>
+                <li>
+                  <Link className="text-ember-700 underline" href="/admin/outbox">
+                    Development outbox
+                  </Link>
+                </li>
+                <li>
+                  <Link className="text-ember-700 underline" href="/admin/jobs">
+                    Background jobs (failed mail and scheduled work)
+                  </Link>
+                </li>
               </>
             )}
-            <li><Link className="text-ember-700 underline" href="/forgot-password">Change your password by e-mail</Link></li>
+            <li>
+              <Link className="text-ember-700 underline" href="/forgot-password">
+                Change your password by e-mail
+              </Link>
+            </li>
           </ul>
         </Card>
         <Card>
           <h2 className="text-lg font-semibold">Sessions</h2>
           <p className="mt-2 text-sm text-basalt-700">
-            Signed in on a shared computer, or lost a phone? This ends every session of your account at once, this one included.
-            Changing your password does the same.
+            Signed in on a shared computer, or lost a phone? This ends every session of your account at once, this one included. Changing
+            your password does the same.
           </p>
           <div className="mt-4">
             <SignOutEverywhereButton />

@@ -18,7 +18,11 @@ function promisedMemberAbilities(role: Role, seen = new Set<Role>()): boolean {
   if (seen.has(role)) return false;
   seen.add(role);
   const first = ROLE_SUMMARY[role].items[0] ?? "";
-  const via = ROLES.find((r) => first.toLowerCase().startsWith(`everything ${ROLE_SUMMARY[r].title.toLowerCase()} can do`) || (r === "member" && /^everything a member can do/i.test(first)));
+  const via = ROLES.find(
+    (r) =>
+      first.toLowerCase().startsWith(`everything ${ROLE_SUMMARY[r].title.toLowerCase()} can do`) ||
+      (r === "member" && /^everything a member can do/i.test(first)),
+  );
   return via !== undefined && promisedMemberAbilities(via, seen);
 }
 
@@ -27,7 +31,10 @@ describe("role words and rules agree", () => {
     for (const role of ROLES) {
       const promised = promisedMemberAbilities(role);
       expect(garageAdmits(role), `${role}: garage admits`).toBe(promised);
-      expect(visibleNav(role).some((n) => n.href === "/garage"), `${role}: Garage link`).toBe(promised);
+      expect(
+        visibleNav(role).some((n) => n.href === "/garage"),
+        `${role}: Garage link`,
+      ).toBe(promised);
     }
   });
 

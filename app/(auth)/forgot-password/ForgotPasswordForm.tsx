@@ -30,7 +30,9 @@ export function ForgotPasswordForm() {
         {failure && <Alert tone="error">{failure}</Alert>}
       </div>
       <TextField label="E-mail" type="email" autoComplete="email" {...register("email")} error={formState.errors.email?.message} />
-      <Button type="submit" pending={formState.isSubmitting}>Send the reset link</Button>
+      <Button type="submit" pending={formState.isSubmitting}>
+        Send the reset link
+      </Button>
     </form>
   );
 }

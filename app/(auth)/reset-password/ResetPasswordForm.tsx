@@ -35,13 +35,32 @@ export function ResetPasswordForm({ token }: { token: string }) {
       <div aria-live="assertive">
         {(failure || tokenError) && (
           <Alert tone="error">
-            {failure ?? tokenError} <Link className="underline" href="/forgot-password">Ask for a new link</Link>.
+            {failure ?? tokenError}{" "}
+            <Link className="underline" href="/forgot-password">
+              Ask for a new link
+            </Link>
+            .
           </Alert>
         )}
       </div>
-      <TextField label="New password" type="password" autoComplete="new-password" hint="At least 10 characters." {...register("password")} error={formState.errors.password?.message} />
-      <TextField label="Repeat the new password" type="password" autoComplete="new-password" {...register("confirm")} error={formState.errors.confirm?.message} />
-      <Button type="submit" pending={formState.isSubmitting}>Change password</Button>
+      <TextField
+        label="New password"
+        type="password"
+        autoComplete="new-password"
+        hint="At least 10 characters."
+        {...register("password")}
+        error={formState.errors.password?.message}
+      />
+      <TextField
+        label="Repeat the new password"
+        type="password"
+        autoComplete="new-password"
+        {...register("confirm")}
+        error={formState.errors.confirm?.message}
+      />
+      <Button type="submit" pending={formState.isSubmitting}>
+        Change password
+      </Button>
     </form>
   );
 }

@@ -15,7 +15,11 @@ export default async function ResetPasswordPage({ searchParams }: { searchParams
         <ResetPasswordForm token={token} />
       ) : (
         <Alert tone="error" className="mt-4">
-          This page needs the link from the e-mail. <Link className="underline" href="/forgot-password">Ask for a new link</Link>.
+          This page needs the link from the e-mail.{" "}
+          <Link className="underline" href="/forgot-password">
+            Ask for a new link
+          </Link>
+          .
         </Alert>
       )}
     </Card>

@@ -30,8 +30,16 @@ export function SignInForm({ callbackUrl, notice }: { callbackUrl: string; notic
       {notice && <Alert tone="success">{notice}</Alert>}
       <div aria-live="assertive">{failure && <Alert tone="error">{failure}</Alert>}</div>
       <TextField label="E-mail" type="email" autoComplete="email" {...register("email")} error={formState.errors.email?.message} />
-      <TextField label="Password" type="password" autoComplete="current-password" {...register("password")} error={formState.errors.password?.message} />
-      <Button type="submit" pending={formState.isSubmitting}>Sign in</Button>
+      <TextField
+        label="Password"
+        type="password"
+        autoComplete="current-password"
+        {...register("password")}
+        error={formState.errors.password?.message}
+      />
+      <Button type="submit" pending={formState.isSubmitting}>
+        Sign in
+      </Button>
     </form>
   );
 }

@@ -41,7 +41,9 @@ export function SignUpForm() {
         {...register("password")}
         error={formState.errors.password?.message}
       />
-      <Button type="submit" pending={formState.isSubmitting}>Create account</Button>
+      <Button type="submit" pending={formState.isSubmitting}>
+        Create account
+      </Button>
     </form>
   );
 }

@@ -11,7 +11,9 @@ export default function SignUpPage() {
       <h1 className="text-2xl font-bold">Create your Hubface account</h1>
       <p className="mt-1 text-sm text-basalt-600">
         Save comparisons, keep your vehicles and their measured clearances. Already have one?{" "}
-        <Link className="font-medium text-ember-700 underline" href="/sign-in">Sign in</Link>
+        <Link className="font-medium text-ember-700 underline" href="/sign-in">
+          Sign in
+        </Link>
       </p>
       <SignUpForm />
     </Card>

@@ -9,7 +9,13 @@ import { DEFAULT_INPUT } from "@/lib/comparisons/schema";
 import type { SavedComparison } from "@/lib/comparisons/api";
 import { ComparisonList, workspaceHref } from "./ComparisonList";
 
-vi.mock("next/link", () => ({ default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => <a href={href} {...rest}>{children}</a> }));
+vi.mock("next/link", () => ({
+  default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => (
+    <a href={href} {...rest}>
+      {children}
+    </a>
+  ),
+}));
 
 const saved: SavedComparison = {
   id: "c4000000-0000-4000-8000-0000000000aa",
@@ -72,12 +78,17 @@ describe("the saved comparison list", () => {
     await rename("Quarry road, 37s");
     expect(screen.getByTestId("comparison-name").textContent).toBe("Quarry road, 37s"); // optimistic
     server.release();
-    await waitFor(() => expect(server.fetchMock.mock.calls.some(([u, i]) => i?.method === "GET" && String(u).startsWith("/api/comparisons?"))).toBe(true));
+    await waitFor(() =>
+      expect(server.fetchMock.mock.calls.some(([u, i]) => i?.method === "GET" && String(u).startsWith("/api/comparisons?"))).toBe(true),
+    );
     expect(screen.getByTestId("comparison-name").textContent).toBe("Quarry road, 37s");
   });
 
   it("rolls the name back and says why when the server refuses (before any refetch arrives)", async () => {
-    const server = fakeServer({ status: 422, body: { error: "Some fields need attention.", fieldErrors: { name: ["Keep the name to 120 characters."] } } }, true);
+    const server = fakeServer(
+      { status: 422, body: { error: "Some fields need attention.", fieldErrors: { name: ["Keep the name to 120 characters."] } } },
+      true,
+    );
     renderList();
     await rename("Renamed but refused");
     expect(screen.getByTestId("comparison-name").textContent).toBe("Renamed but refused");
@@ -105,6 +116,8 @@ describe("the saved comparison list", () => {
   });
 
   it("opens a saved comparison in the workspace through the URL codec", () => {
-    expect(workspaceHref(saved)).toBe(`/workspace?ct=265/70R17+113T&cd=17&cw=8&co=25&pt=37x12.50R17LT+124Q+LRD&pd=17&pw=9&po=-12&saved=${saved.id}`);
+    expect(workspaceHref(saved)).toBe(
+      `/workspace?ct=265/70R17+113T&cd=17&cw=8&co=25&pt=37x12.50R17LT+124Q+LRD&pd=17&pw=9&po=-12&saved=${saved.id}`,
+    );
   });
 });

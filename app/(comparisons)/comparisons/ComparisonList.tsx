@@ -21,7 +21,11 @@ type ListData = SavedComparison[];
 const noSubscribe = () => () => {};
 /** The page's origin in the browser ("" while rendering on the server). */
 function useOrigin(): string {
-  return useSyncExternalStore(noSubscribe, () => window.location.origin, () => "");
+  return useSyncExternalStore(
+    noSubscribe,
+    () => window.location.origin,
+    () => "",
+  );
 }
 
 /** Opens the comparison in the workspace through the URL codec, remembering which saved one it is. */
@@ -66,7 +70,11 @@ export function ComparisonList({ initial }: { initial: ListData }) {
         </label>
         <label className="flex flex-col gap-1 text-sm font-medium text-basalt-800">
           Sort
-          <select value={sort} onChange={(e) => setSort(e.target.value as ComparisonSort)} className="min-h-10 rounded-lg border border-basalt-300 bg-white px-3 text-base">
+          <select
+            value={sort}
+            onChange={(e) => setSort(e.target.value as ComparisonSort)}
+            className="min-h-10 rounded-lg border border-basalt-300 bg-white px-3 text-base"
+          >
             {COMPARISON_SORTS.map((s) => (
               <option key={s} value={s}>
                 {COMPARISON_SORT_LABEL[s]}
@@ -78,7 +86,13 @@ export function ComparisonList({ initial }: { initial: ListData }) {
       </Card>
       {list.isError && <Alert tone="error">{(list.error as Error).message}</Alert>}
       <p role="status" aria-live="polite" className="text-sm text-basalt-600 wrap-anywhere" data-testid="list-status">
-        {list.isFetching && !list.isLoading ? "Updating…" : items.length === 0 ? (q ? `No saved comparison matches “${q}”.` : "") : `${items.length} saved comparison${items.length === 1 ? "" : "s"}${q ? ` matching “${q}”` : ""}.`}
+        {list.isFetching && !list.isLoading
+          ? "Updating…"
+          : items.length === 0
+            ? q
+              ? `No saved comparison matches “${q}”.`
+              : ""
+            : `${items.length} saved comparison${items.length === 1 ? "" : "s"}${q ? ` matching “${q}”` : ""}.`}
       </p>
       {items.length === 0 && !q && !list.isLoading && (
         <Card className="text-center">
@@ -121,7 +135,9 @@ function ComparisonItem({ c, prefs }: { c: SavedComparison; prefs: DisplayPrefs 
     onMutate: async (name) => {
       await qc.cancelQueries({ queryKey: queryKeys.comparisons.lists });
       const before = qc.getQueriesData<ListData>({ queryKey: queryKeys.comparisons.lists });
-      qc.setQueriesData<ListData>({ queryKey: queryKeys.comparisons.lists }, (old) => old?.map((x) => (x.id === c.id ? { ...x, name: name.trim() } : x)));
+      qc.setQueriesData<ListData>({ queryKey: queryKeys.comparisons.lists }, (old) =>
+        old?.map((x) => (x.id === c.id ? { ...x, name: name.trim() } : x)),
+      );
       setRenaming(false);
       setMessage(null);
       return { before };
@@ -148,7 +164,11 @@ function ComparisonItem({ c, prefs }: { c: SavedComparison; prefs: DisplayPrefs 
   return (
     // wrap-anywhere is inherited: a name that is one long word (it shows in the heading, the status
     // lines and the delete question) breaks where it must instead of widening the page.
-    <li aria-labelledby={headingId} className="rounded-card bg-white p-4 shadow-card ring-1 ring-basalt-100 wrap-anywhere sm:p-5" data-testid="saved-comparison">
+    <li
+      aria-labelledby={headingId}
+      className="rounded-card bg-white p-4 shadow-card ring-1 ring-basalt-100 wrap-anywhere sm:p-5"
+      data-testid="saved-comparison"
+    >
       <div className="flex flex-wrap items-start justify-between gap-3">
         <div className="min-w-0 flex-1">
           {renaming ? (
@@ -178,7 +198,8 @@ function ComparisonItem({ c, prefs }: { c: SavedComparison; prefs: DisplayPrefs 
         <Figure label="Suggested ratio" value={formatNumber(f.suggestedRatio, 2)} />
       </dl>
       <p className="mt-2 text-xs text-basalt-500">
-        Changed <time dateTime={c.updatedAt}>{new Date(c.updatedAt).toLocaleString("en-US", { dateStyle: "medium", timeStyle: "short" })}</time>
+        Changed{" "}
+        <time dateTime={c.updatedAt}>{new Date(c.updatedAt).toLocaleString("en-US", { dateStyle: "medium", timeStyle: "short" })}</time>
       </p>
       <div className="mt-3 flex flex-wrap items-center gap-2 border-t border-basalt-100 pt-3">
         <Link href={workspaceHref(c)} className={buttonClass("primary", "min-h-9 py-1.5")} aria-label={`Open ${c.name} in the workspace`}>
@@ -199,7 +220,13 @@ function ComparisonItem({ c, prefs }: { c: SavedComparison; prefs: DisplayPrefs 
             Rename
           </Button>
         )}
-        <Button variant="secondary" className="min-h-9 py-1.5" pending={duplicate.isPending} onClick={() => duplicate.mutate()} aria-label={`Duplicate ${c.name}`}>
+        <Button
+          variant="secondary"
+          className="min-h-9 py-1.5"
+          pending={duplicate.isPending}
+          onClick={() => duplicate.mutate()}
+          aria-label={`Duplicate ${c.name}`}
+        >
           Duplicate
         </Button>
         {confirmDelete ? (
@@ -213,7 +240,12 @@ function ComparisonItem({ c, prefs }: { c: SavedComparison; prefs: DisplayPrefs 
             </Button>
           </span>
         ) : (
-          <Button variant="ghost" className="min-h-9 py-1.5 text-contact-800" onClick={() => setConfirmDelete(true)} aria-label={`Delete ${c.name}`}>
+          <Button
+            variant="ghost"
+            className="min-h-9 py-1.5 text-contact-800"
+            onClick={() => setConfirmDelete(true)}
+            aria-label={`Delete ${c.name}`}
+          >
             Delete…
           </Button>
         )}
@@ -313,7 +345,14 @@ function ShareControls({ c }: { c: SavedComparison }) {
             <label htmlFor={inputId} className="font-medium text-basalt-800">
               Public link (anyone with it can view, read-only)
             </label>
-            <input id={inputId} readOnly value={url} onFocus={(e) => e.currentTarget.select()} className="min-h-9 rounded-lg border border-basalt-300 bg-white px-3 font-mono text-sm" data-testid="share-url" />
+            <input
+              id={inputId}
+              readOnly
+              value={url}
+              onFocus={(e) => e.currentTarget.select()}
+              className="min-h-9 rounded-lg border border-basalt-300 bg-white px-3 font-mono text-sm"
+              data-testid="share-url"
+            />
           </div>
           <Button variant="secondary" className="min-h-9 py-1.5" onClick={copy}>
             Copy link
@@ -328,7 +367,11 @@ function ShareControls({ c }: { c: SavedComparison }) {
             Revoke link
           </Button>
           <span role="status" className="w-full text-xs text-basalt-600">
-            {copied === "done" ? "Link copied." : copied === "failed" ? "Copying was refused: the link is selected, press Ctrl+C (⌘C)." : "A new link or revoking makes the current one stop working at once."}
+            {copied === "done"
+              ? "Link copied."
+              : copied === "failed"
+                ? "Copying was refused: the link is selected, press Ctrl+C (⌘C)."
+                : "A new link or revoking makes the current one stop working at once."}
           </span>
         </div>
       ) : (

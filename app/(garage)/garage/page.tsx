@@ -23,7 +23,11 @@ export default async function GaragePage() {
       <PageHeader
         title="Your garage"
         lead="Your vehicles with the clearances you measured: plan a setup and see what it will touch before you buy."
-        actions={<Link href="/garage/new" className={buttonClass("primary")}>Add a vehicle</Link>}
+        actions={
+          <Link href="/garage/new" className={buttonClass("primary")}>
+            Add a vehicle
+          </Link>
+        }
       />
       {vehicles.length === 0 ? (
         <Card className="text-center">
@@ -37,15 +41,21 @@ export default async function GaragePage() {
               <li key={v.id}>
                 <Card className="h-full">
                   <h2 className="text-lg font-semibold">
-                    <Link href={`/garage/${v.id}`} className="text-ember-700 underline-offset-2 hover:underline">{v.name}</Link>
+                    <Link href={`/garage/${v.id}`} className="text-ember-700 underline-offset-2 hover:underline">
+                      {v.name}
+                    </Link>
                   </h2>
-                  <p className="text-sm text-basalt-600">{[v.year, v.make, v.model, v.trim].filter(Boolean).join(" ") || "No description"}</p>
+                  <p className="text-sm text-basalt-600">
+                    {[v.year, v.make, v.model, v.trim].filter(Boolean).join(" ") || "No description"}
+                  </p>
                   <p className="mt-2 flex flex-wrap gap-2">
                     <Badge tone="neutral">{FRONT_SUSPENSION_LABEL[v.frontSuspension]}</Badge>
                     <Badge tone="neutral">{v.boltPattern}</Badge>
                     <Badge tone="steel">{counts.get(v.id) ?? 0} measured points</Badge>
                   </p>
-                  <p className="mt-3 text-sm text-basalt-700">Now on {g.tire.text}, {bothUnits(g.overallDiameterMm)} tall</p>
+                  <p className="mt-3 text-sm text-basalt-700">
+                    Now on {g.tire.text}, {bothUnits(g.overallDiameterMm)} tall
+                  </p>
                 </Card>
               </li>
             );

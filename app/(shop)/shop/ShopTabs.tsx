@@ -19,7 +19,10 @@ export function ShopTabs({ tabs }: { tabs: Tab[] }) {
           key={t.href}
           href={t.href}
           aria-current={current(t.href) ? "page" : undefined}
-          className={cx("rounded-md px-3 py-2 font-medium", current(t.href) ? "bg-basalt-900 text-white" : "text-basalt-700 hover:bg-basalt-100")}
+          className={cx(
+            "rounded-md px-3 py-2 font-medium",
+            current(t.href) ? "bg-basalt-900 text-white" : "text-basalt-700 hover:bg-basalt-100",
+          )}
         >
           {t.label}
         </Link>

@@ -10,7 +10,13 @@ export default async function ShopLayout({ children }: { children: ReactNode }) 
     { href: "/shop/quotes", label: "Quotes" },
     { href: "/shop/catalog", label: "Catalog" },
     { href: "/shop/calendar", label: "Calendar" },
-    ...(owner ? [{ href: "/shop/staff", label: "Staff" }, { href: "/shop/bays", label: "Bays and hours" }, { href: "/shop/settings", label: "Settings" }] : []),
+    ...(owner
+      ? [
+          { href: "/shop/staff", label: "Staff" },
+          { href: "/shop/bays", label: "Bays and hours" },
+          { href: "/shop/settings", label: "Settings" },
+        ]
+      : []),
   ];
   return (
     <>

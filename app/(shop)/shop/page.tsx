@@ -19,7 +19,11 @@ export default async function ShopPage() {
       <PageHeader
         title={shop?.name ?? "Your shop"}
         lead="Quote a fitment for the customer at the counter, send it, and take the deposit."
-        actions={<Link href="/shop/quotes/new" className={buttonClass("primary")}>New quote</Link>}
+        actions={
+          <Link href="/shop/quotes/new" className={buttonClass("primary")}>
+            New quote
+          </Link>
+        }
       />
       <div className="grid gap-5 md:grid-cols-2">
         <Card>
@@ -39,9 +43,24 @@ export default async function ShopPage() {
         <Card>
           <h2 className="text-lg font-semibold">At the counter</h2>
           <ul className="mt-3 flex flex-col gap-2 text-sm">
-            <li><Link className="font-medium text-ember-700 underline" href="/shop/quotes/new">Start a quote</Link> — find the customer, enter the vehicle, pick tire and wheel.</li>
-            <li><Link className="font-medium text-ember-700 underline" href="/shop/quotes">Open quotes</Link> — drafts, sent, accepted and paid.</li>
-            <li><Link className="font-medium text-ember-700 underline" href="/shop/catalog">Catalog</Link> — tires, wheels and services with stock.</li>
+            <li>
+              <Link className="font-medium text-ember-700 underline" href="/shop/quotes/new">
+                Start a quote
+              </Link>{" "}
+              — find the customer, enter the vehicle, pick tire and wheel.
+            </li>
+            <li>
+              <Link className="font-medium text-ember-700 underline" href="/shop/quotes">
+                Open quotes
+              </Link>{" "}
+              — drafts, sent, accepted and paid.
+            </li>
+            <li>
+              <Link className="font-medium text-ember-700 underline" href="/shop/catalog">
+                Catalog
+              </Link>{" "}
+              — tires, wheels and services with stock.
+            </li>
           </ul>
         </Card>
       </div>

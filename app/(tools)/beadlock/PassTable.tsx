@@ -12,17 +12,29 @@ export function PassTable({ plan, unit }: { plan: TorquePlan; unit: TorqueUnit }
     <table className="mt-3 w-full text-sm tabular-nums" data-testid="torque-passes">
       <thead>
         <tr className="border-b border-basalt-200 text-left">
-          <th scope="col" className="py-1.5 print:py-1">Pass</th>
-          <th scope="col" className="py-1.5 print:py-1 pl-3 text-right">Share</th>
-          <th scope="col" className={cx("py-1.5 print:py-1 pl-3 text-right", strong("ftlb"))}>ft·lb</th>
-          <th scope="col" className={cx("py-1.5 print:py-1 pl-3 text-right", strong("nm"))}>N·m</th>
-          <th scope="col" className="hidden py-1.5 print:py-1 pl-4 print:table-cell">Order — tick each bolt as you go</th>
+          <th scope="col" className="py-1.5 print:py-1">
+            Pass
+          </th>
+          <th scope="col" className="py-1.5 print:py-1 pl-3 text-right">
+            Share
+          </th>
+          <th scope="col" className={cx("py-1.5 print:py-1 pl-3 text-right", strong("ftlb"))}>
+            ft·lb
+          </th>
+          <th scope="col" className={cx("py-1.5 print:py-1 pl-3 text-right", strong("nm"))}>
+            N·m
+          </th>
+          <th scope="col" className="hidden py-1.5 print:py-1 pl-4 print:table-cell">
+            Order — tick each bolt as you go
+          </th>
         </tr>
       </thead>
       <tbody>
         {plan.passes.map((p) => (
           <tr key={p.pass} className="break-inside-avoid border-b border-basalt-100 align-top">
-            <th scope="row" className="py-1.5 print:py-1 text-left font-medium">{p.kind === "check" ? `${p.pass}: check every bolt` : `${p.pass}`}</th>
+            <th scope="row" className="py-1.5 print:py-1 text-left font-medium">
+              {p.kind === "check" ? `${p.pass}: check every bolt` : `${p.pass}`}
+            </th>
             <td className="py-1.5 print:py-1 pl-3 text-right whitespace-nowrap">{Math.round(p.fraction * 100)} %</td>
             <td className={cx("py-1.5 print:py-1 pl-3 text-right", strong("ftlb"))}>{formatNumber(p.torqueFtLb, 1)}</td>
             <td className={cx("py-1.5 print:py-1 pl-3 text-right", strong("nm"))}>{formatNumber(p.torqueNm, 1)}</td>

@@ -63,7 +63,14 @@ export function RingDiagram({
           valve
         </text>
       </g>
-      <polyline points={joined.map((b) => `${pos(b).x.toFixed(1)},${pos(b).y.toFixed(1)}`).join(" ")} fill="none" stroke="#e25b16" strokeWidth={2} strokeDasharray="6 4" opacity={0.8} />
+      <polyline
+        points={joined.map((b) => `${pos(b).x.toFixed(1)},${pos(b).y.toFixed(1)}`).join(" ")}
+        fill="none"
+        stroke="#e25b16"
+        strokeWidth={2}
+        strokeDasharray="6 4"
+        opacity={0.8}
+      />
       {Array.from({ length: n }, (_, i) => i + 1).map((bolt) => {
         const p = pos(bolt);
         const l = pos(bolt, R + 52);
@@ -86,7 +93,15 @@ export function RingDiagram({
             className={onBoltClick ? "cursor-pointer" : undefined}
           >
             {isNext && <circle cx={p.x} cy={p.y} r={boltR + 5} fill="none" stroke={EMBER} strokeWidth={3} className="print:hidden" />}
-            <circle cx={p.x} cy={p.y} r={boltR} fill={fill} stroke={isDone ? DONE_LINE : INK} strokeWidth={isDone ? 2.5 : 1.5} className="print:fill-white print:stroke-basalt-900 print:stroke-[1.5]" />
+            <circle
+              cx={p.x}
+              cy={p.y}
+              r={boltR}
+              fill={fill}
+              stroke={isDone ? DONE_LINE : INK}
+              strokeWidth={isDone ? 2.5 : 1.5}
+              className="print:fill-white print:stroke-basalt-900 print:stroke-[1.5]"
+            />
             <text
               data-label="bolt"
               x={p.x}

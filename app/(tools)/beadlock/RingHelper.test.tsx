@@ -156,7 +156,11 @@ describe("beadlock tick-off", () => {
     expect(nextOnDiagram()).toBe("7");
 
     await user.click(tick().getByRole("button", { name: "Reset the tick-off" }));
-    expect(tick().getAllByRole("checkbox").every((c) => !(c as HTMLInputElement).checked)).toBe(true);
+    expect(
+      tick()
+        .getAllByRole("checkbox")
+        .every((c) => !(c as HTMLInputElement).checked),
+    ).toBe(true);
     expect(status()).toMatch(/next: bolt 1\b/);
   });
 
@@ -178,7 +182,11 @@ describe("beadlock tick-off", () => {
     expect(tick().getByRole("checkbox", { name: "Bolt 3, step 2" })).toHaveProperty("checked", true);
     // Going back to pass 1 shows its ticks untouched.
     await user.click(tick().getByRole("radio", { name: "Pass 1 (done)" }));
-    expect(tick().getAllByRole("checkbox").every((c) => (c as HTMLInputElement).checked)).toBe(true);
+    expect(
+      tick()
+        .getAllByRole("checkbox")
+        .every((c) => (c as HTMLInputElement).checked),
+    ).toBe(true);
   });
 
   it("clears the ticks when the ring changes (another bolt count or another real torque) and says so", async () => {

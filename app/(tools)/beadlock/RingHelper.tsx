@@ -51,7 +51,9 @@ export function RingHelper() {
                 Start bolts {plan.startBolts.join(", ")} by hand (one per quadrant), then go round in the order shown at each pass.
               </p>
               <PassTable plan={plan} unit={torque.unit} />
-              <p className="mt-2 text-xs text-basalt-500">Passes at 30, 60 and 100 % and a check pass are common practice (no source); the maker&apos;s steps win.</p>
+              <p className="mt-2 text-xs text-basalt-500">
+                Passes at 30, 60 and 100 % and a check pass are common practice (no source); the maker&apos;s steps win.
+              </p>
             </>
           ) : (
             <p className="mt-1 text-sm text-basalt-600">Enter the ring maker&apos;s torque figure to see the passes in ft·lb and N·m.</p>
@@ -62,7 +64,12 @@ export function RingHelper() {
         <h2 className="self-start text-lg font-semibold print:hidden">Order</h2>
         {sequence ? (
           <>
-            <RingDiagram sequence={sequence} done={plan ? tick.done : undefined} next={plan ? tick.next : null} onBoltClick={plan ? tick.toggle : undefined} />
+            <RingDiagram
+              sequence={sequence}
+              done={plan ? tick.done : undefined}
+              next={plan ? tick.next : null}
+              onBoltClick={plan ? tick.toggle : undefined}
+            />
             <p className="mt-2 self-start text-sm text-basalt-700 print:text-xs" data-testid="ring-legend">
               <span className="font-semibold">Big number:</span> the bolt, counted clockwise from the valve stem.{" "}
               <span className="font-semibold">Small “step”:</span> its place in the tightening order.
@@ -71,11 +78,15 @@ export function RingHelper() {
             <p className="mt-1 self-start text-sm text-basalt-700 print:hidden" data-testid="ring-order">
               <span className="font-semibold">Bolt order:</span> {sequence.join(" → ")}
             </p>
-            <p className="mt-1 self-start text-xs text-basalt-500">Each bolt is followed by the one opposite it (common practice, no source).</p>
+            <p className="mt-1 self-start text-xs text-basalt-500">
+              Each bolt is followed by the one opposite it (common practice, no source).
+            </p>
             {plan ? (
               <TickOff plan={plan} unit={torque.unit} tick={tick} />
             ) : (
-              <p className="no-print mt-3 self-start text-sm text-basalt-600">Enter the maker&apos;s torque to tick off the bolts pass by pass.</p>
+              <p className="no-print mt-3 self-start text-sm text-basalt-600">
+                Enter the maker&apos;s torque to tick off the bolts pass by pass.
+              </p>
             )}
           </>
         ) : (

@@ -21,13 +21,46 @@ export function RingInputs({
   torque: TorqueField;
 }) {
   const other = otherUnit(torque.unit);
-  const hint = torque.nm !== null ? `= ${formatTorqueEntry(torque.nm, other)} ${TORQUE_UNIT_SYMBOL[other]}` : "Printed in the ring maker's instructions";
+  const hint =
+    torque.nm !== null
+      ? `= ${formatTorqueEntry(torque.nm, other)} ${TORQUE_UNIT_SYMBOL[other]}`
+      : "Printed in the ring maker's instructions";
   return (
     <Card className="no-print">
       <div className="flex flex-wrap items-end gap-4">
-        <TextField className="w-40" label="Bolts on the ring" name="ring-bolts" inputMode="numeric" value={countText} onChange={(e) => onCountText(e.target.value)} error={countError} hint={`Common: ${COMMON_COUNTS.join(", ")}`} />
-        <TextField className="w-56" label={torque.label} name="ring-torque" inputMode="decimal" autoComplete="off" value={torque.text} placeholder="from the maker" onChange={(e) => torque.setText(e.target.value)} error={torque.error} hint={hint} />
-        <Segmented<TorqueUnit> legend="Torque unit" name="ring-unit" value={torque.unit} options={[{ value: "ftlb", label: "ft·lb" }, { value: "nm", label: "N·m" }]} onChange={torque.switchUnit} className="mb-6" />
+        <TextField
+          className="w-40"
+          label="Bolts on the ring"
+          name="ring-bolts"
+          inputMode="numeric"
+          value={countText}
+          onChange={(e) => onCountText(e.target.value)}
+          error={countError}
+          hint={`Common: ${COMMON_COUNTS.join(", ")}`}
+        />
+        <TextField
+          className="w-56"
+          label={torque.label}
+          name="ring-torque"
+          inputMode="decimal"
+          autoComplete="off"
+          value={torque.text}
+          placeholder="from the maker"
+          onChange={(e) => torque.setText(e.target.value)}
+          error={torque.error}
+          hint={hint}
+        />
+        <Segmented<TorqueUnit>
+          legend="Torque unit"
+          name="ring-unit"
+          value={torque.unit}
+          options={[
+            { value: "ftlb", label: "ft·lb" },
+            { value: "nm", label: "N·m" },
+          ]}
+          onChange={torque.switchUnit}
+          className="mb-6"
+        />
       </div>
       <Button type="button" variant="secondary" className="mt-1" onClick={() => window.print()}>
         Print this sheet

@@ -27,7 +27,9 @@ export function TickOff({ plan, unit, tick }: { plan: TorquePlan; unit: TorqueUn
   const sequence = pass?.sequence ?? [];
   return (
     <section aria-labelledby="tickoff-title" className="no-print mt-4 w-full border-t border-basalt-100 pt-4">
-      <h3 id="tickoff-title" className="text-base font-semibold">Tick off as you go</h3>
+      <h3 id="tickoff-title" className="text-base font-semibold">
+        Tick off as you go
+      </h3>
       <Segmented
         legend="Pass"
         name="tick-pass"
@@ -47,7 +49,10 @@ export function TickOff({ plan, unit, tick }: { plan: TorquePlan; unit: TorqueUn
           Reset the tick-off
         </Button>
       </div>
-      <ol className="mt-3 grid grid-cols-[repeat(auto-fill,minmax(6.5rem,1fr))] gap-1.5" aria-label={`Bolts in order, pass ${pass?.pass ?? ""}`}>
+      <ol
+        className="mt-3 grid grid-cols-[repeat(auto-fill,minmax(6.5rem,1fr))] gap-1.5"
+        aria-label={`Bolts in order, pass ${pass?.pass ?? ""}`}
+      >
         {sequence.map((bolt, i) => {
           const done = tick.done.has(bolt);
           const next = tick.next === bolt;
@@ -56,7 +61,11 @@ export function TickOff({ plan, unit, tick }: { plan: TorquePlan; unit: TorqueUn
               <label
                 className={cx(
                   "flex min-h-11 cursor-pointer items-center gap-2 rounded-lg px-2 py-1 ring-1 ring-inset has-[:focus-visible]:outline-2 has-[:focus-visible]:outline-ember-500",
-                  done ? "bg-clear-100 text-clear-800 ring-clear-600/40" : next ? "bg-ember-50 ring-2 ring-ember-600" : "bg-white ring-basalt-200",
+                  done
+                    ? "bg-clear-100 text-clear-800 ring-clear-600/40"
+                    : next
+                      ? "bg-ember-50 ring-2 ring-ember-600"
+                      : "bg-white ring-basalt-200",
                 )}
               >
                 <input type="checkbox" className="size-4 accent-clear-600" checked={done} onChange={() => tick.toggle(bolt)} />
@@ -67,7 +76,8 @@ export function TickOff({ plan, unit, tick }: { plan: TorquePlan; unit: TorqueUn
                     {/* The status line already says which bolt is next; this is for the eye. */}
                     {next && (
                       <span aria-hidden className="font-semibold uppercase text-ember-700">
-                        {" "}· next
+                        {" "}
+                        · next
                       </span>
                     )}
                   </span>

@@ -1,6 +1,15 @@
 "use client";
 import { Card } from "@/components/ui/Card";
-import { TORQUE_UNIT_SYMBOL, type TorqueUnit, formatLength, mmToIn, parseLength, parseTorqueEntry, torqueFromNm, torqueToNm } from "@/lib/fitment";
+import {
+  TORQUE_UNIT_SYMBOL,
+  type TorqueUnit,
+  formatLength,
+  mmToIn,
+  parseLength,
+  parseTorqueEntry,
+  torqueFromNm,
+  torqueToNm,
+} from "@/lib/fitment";
 import { convertPressure } from "@/lib/fitment/pressure";
 import { LinkedFields, type LinkedUnit } from "./LinkedFields";
 import { TireSizeEquivalents } from "./TireSizeEquivalents";
@@ -12,7 +21,14 @@ const plainNumber = (text: string): number | null => {
 };
 
 const LENGTH: LinkedUnit[] = [
-  { key: "mm", label: "Millimetres", read: (t) => parseLength(t, "mm"), show: (mm) => trim(mm, 2), error: "enter a length like 120.65 (or 4-3/4 in).", hint: "e.g. 120.65" },
+  {
+    key: "mm",
+    label: "Millimetres",
+    read: (t) => parseLength(t, "mm"),
+    show: (mm) => trim(mm, 2),
+    error: "enter a length like 120.65 (or 4-3/4 in).",
+    hint: "e.g. 120.65",
+  },
   {
     key: "in",
     label: "Inches",
@@ -22,13 +38,47 @@ const LENGTH: LinkedUnit[] = [
     error: "enter inches like 4-3/4, 4 3/4 or 4.75.",
     hint: "Fractions work: 4-3/4",
   },
-  { key: "cm", label: "Centimetres", read: (t) => parseLength(/[a-z"”]/i.test(t) ? t : `${t.trim()} cm`, "mm"), show: (mm) => trim(mm / 10, 3), error: "enter a length like 12.07.", hint: "e.g. 12.07" },
+  {
+    key: "cm",
+    label: "Centimetres",
+    read: (t) => parseLength(/[a-z"”]/i.test(t) ? t : `${t.trim()} cm`, "mm"),
+    show: (mm) => trim(mm / 10, 3),
+    error: "enter a length like 12.07.",
+    hint: "e.g. 12.07",
+  },
 ];
 
 const PRESSURE: LinkedUnit[] = [
-  { key: "psi", label: "Pressure (psi)", read: (t) => { const v = plainNumber(t); return v === null ? null : convertPressure(v, "psi", "kPa"); }, show: (k) => trim(convertPressure(k, "kPa", "psi"), 2), error: "enter a pressure like 35.", hint: "e.g. 35" },
-  { key: "kpa", label: "Pressure (kPa)", read: plainNumber, show: (k) => trim(k, 1), error: "enter a pressure like 241.", hint: "e.g. 241" },
-  { key: "bar", label: "Pressure (bar)", read: (t) => { const v = plainNumber(t); return v === null ? null : convertPressure(v, "bar", "kPa"); }, show: (k) => trim(convertPressure(k, "kPa", "bar"), 3), error: "enter a pressure like 2.4.", hint: "e.g. 2.4" },
+  {
+    key: "psi",
+    label: "Pressure (psi)",
+    read: (t) => {
+      const v = plainNumber(t);
+      return v === null ? null : convertPressure(v, "psi", "kPa");
+    },
+    show: (k) => trim(convertPressure(k, "kPa", "psi"), 2),
+    error: "enter a pressure like 35.",
+    hint: "e.g. 35",
+  },
+  {
+    key: "kpa",
+    label: "Pressure (kPa)",
+    read: plainNumber,
+    show: (k) => trim(k, 1),
+    error: "enter a pressure like 241.",
+    hint: "e.g. 241",
+  },
+  {
+    key: "bar",
+    label: "Pressure (bar)",
+    read: (t) => {
+      const v = plainNumber(t);
+      return v === null ? null : convertPressure(v, "bar", "kPa");
+    },
+    show: (k) => trim(convertPressure(k, "kPa", "bar"), 3),
+    error: "enter a pressure like 2.4.",
+    hint: "e.g. 2.4",
+  },
 ];
 
 /**
@@ -66,7 +116,9 @@ export function Converter() {
       <Card>
         <h2 className="mb-3 text-lg font-semibold">Torque</h2>
         <LinkedFields idPrefix="torque" units={TORQUE} initial={{ key: "ftlb", text: "100" }} />
-        <p className="mt-2 text-xs text-basalt-500">Lug nut and ring bolt figures come from the wheel or vehicle maker; this only converts them.</p>
+        <p className="mt-2 text-xs text-basalt-500">
+          Lug nut and ring bolt figures come from the wheel or vehicle maker; this only converts them.
+        </p>
       </Card>
     </div>
   );

@@ -11,15 +11,29 @@ const delta = (mm: number, pct: number) => `${formatNumber(mm, 1, { signed: true
 export function EquivalentsTable({ size, list, target }: { size: TireSize; list: readonly EquivalentSize[]; target: string }) {
   return (
     <table className="w-full min-w-[36rem] text-sm tabular-nums" data-testid="equivalents">
-      <caption className="mb-1 text-left text-sm font-medium text-basalt-700">Nearest {target} sizes to {size.text}</caption>
+      <caption className="mb-1 text-left text-sm font-medium text-basalt-700">
+        Nearest {target} sizes to {size.text}
+      </caption>
       <thead>
         <tr className="border-b border-basalt-200 text-left">
-          <th scope="col" className="py-1.5 pr-3">Size</th>
-          <th scope="col" className="py-1.5 pr-3">Rim</th>
-          <th scope="col" className="py-1.5 pr-3 text-right">Diameter</th>
-          <th scope="col" className="py-1.5 pr-3 text-right">Δ diameter</th>
-          <th scope="col" className="py-1.5 pr-3 text-right">Δ width</th>
-          <th scope="col" className="py-1.5 text-right">Distance</th>
+          <th scope="col" className="py-1.5 pr-3">
+            Size
+          </th>
+          <th scope="col" className="py-1.5 pr-3">
+            Rim
+          </th>
+          <th scope="col" className="py-1.5 pr-3 text-right">
+            Diameter
+          </th>
+          <th scope="col" className="py-1.5 pr-3 text-right">
+            Δ diameter
+          </th>
+          <th scope="col" className="py-1.5 pr-3 text-right">
+            Δ width
+          </th>
+          <th scope="col" className="py-1.5 text-right">
+            Distance
+          </th>
         </tr>
       </thead>
       <tbody>
@@ -27,7 +41,9 @@ export function EquivalentsTable({ size, list, target }: { size: TireSize; list:
           <tr key={e.text} className="border-b border-basalt-100 align-top">
             <th scope="row" className="py-1.5 pr-3 text-left font-semibold">
               {e.text}
-              {e.size.system === "metric" && <span className="block text-xs font-normal text-basalt-600">≈ {formatNominalInchSize(e.size, { rim: false })}</span>}
+              {e.size.system === "metric" && (
+                <span className="block text-xs font-normal text-basalt-600">≈ {formatNominalInchSize(e.size, { rim: false })}</span>
+              )}
             </th>
             <td className="py-1.5 pr-3">
               {e.size.rimDiameterIn} in
@@ -43,7 +59,9 @@ export function EquivalentsTable({ size, list, target }: { size: TireSize; list:
         ))}
         {list.length === 0 && (
           <tr>
-            <td colSpan={6} className="py-3 text-basalt-500">No standard size of the other system for this rim diameter; clear “same rim diameter only”.</td>
+            <td colSpan={6} className="py-3 text-basalt-500">
+              No standard size of the other system for this rim diameter; clear “same rim diameter only”.
+            </td>
           </tr>
         )}
       </tbody>

@@ -23,7 +23,15 @@ export interface LinkedUnit {
  * A group of fields showing one quantity in several units: the field typed in last is the
  * source, the others show the converted value.
  */
-export function LinkedFields({ idPrefix, units, initial }: { idPrefix: string; units: LinkedUnit[]; initial: { key: string; text: string } }) {
+export function LinkedFields({
+  idPrefix,
+  units,
+  initial,
+}: {
+  idPrefix: string;
+  units: LinkedUnit[];
+  initial: { key: string; text: string };
+}) {
   const [source, setSource] = useState(initial);
   const src = units.find((u) => u.key === source.key) ?? units[0];
   let base: number | null = null;

@@ -4,13 +4,17 @@ import { Converter } from "./Converter";
 
 export const metadata: Metadata = {
   title: "Converter",
-  description: "Tire sizes inch ⇄ metric with the nearest standard equivalents, lengths mm ⇄ in with fractions, pressure psi ⇄ kPa ⇄ bar, torque ft·lb ⇄ N·m.",
+  description:
+    "Tire sizes inch ⇄ metric with the nearest standard equivalents, lengths mm ⇄ in with fractions, pressure psi ⇄ kPa ⇄ bar, torque ft·lb ⇄ N·m.",
 };
 
 export default function ConvertPage() {
   return (
     <>
-      <PageHeader title="Converter" lead="Tire sizes between inch and metric designations, and the lengths, pressures and torques of the trade. Everything converts in your browser as you type." />
+      <PageHeader
+        title="Converter"
+        lead="Tire sizes between inch and metric designations, and the lengths, pressures and torques of the trade. Everything converts in your browser as you type."
+      />
       <Converter />
     </>
   );

@@ -9,14 +9,29 @@ export function BackspacingDiagram({ reference }: { reference: BackspacingRefere
   const on = "#bd460f";
   const off = "#a3acb8";
   return (
-    <svg viewBox="0 0 220 92" className="h-auto w-full max-w-[15rem]" role="img" aria-label={flange ? "Backspacing measured from the mounting face to the flange edge, which includes the flange allowance" : "Backspacing measured from the mounting face to the bead seat"}>
+    <svg
+      viewBox="0 0 220 92"
+      className="h-auto w-full max-w-[15rem]"
+      role="img"
+      aria-label={
+        flange
+          ? "Backspacing measured from the mounting face to the flange edge, which includes the flange allowance"
+          : "Backspacing measured from the mounting face to the bead seat"
+      }
+    >
       {/* rim profile: flange edge, bead seat, barrel, mounting face */}
       <path d="M 20 58 Q 20 36 44 36 L 200 36" fill="none" stroke="#353c46" strokeWidth="3" />
       <line x1="170" x2="170" y1="36" y2="86" stroke="#181b21" strokeWidth="3" />
-      <text x="174" y="84" fontSize="10" fill="#181b21">face</text>
+      <text x="174" y="84" fontSize="10" fill="#181b21">
+        face
+      </text>
       <line x1="44" x2="44" y1="30" y2="42" stroke="#353c46" strokeWidth="1.5" />
-      <text x="30" y="76" fontSize="10" fill="#353c46">flange</text>
-      <text x="46" y="50" fontSize="10" fill="#353c46">bead seat</text>
+      <text x="30" y="76" fontSize="10" fill="#353c46">
+        flange
+      </text>
+      <text x="46" y="50" fontSize="10" fill="#353c46">
+        bead seat
+      </text>
       {/* bead-seat measurement */}
       <g stroke={flange ? off : on} fill={flange ? off : on}>
         <line x1="44" x2="170" y1="22" y2="22" strokeWidth="2" strokeDasharray={flange ? "4 3" : undefined} />
@@ -28,8 +43,12 @@ export function BackspacingDiagram({ reference }: { reference: BackspacingRefere
         <path d="M 20 8 l 6 -4 v 8 z M 170 8 l -6 -4 v 8 z" stroke="none" />
       </g>
       <line x1="20" x2="20" y1="4" y2="58" stroke={off} strokeWidth="1" strokeDasharray="2 2" />
-      <text x="92" y="19" fontSize="9" fill={flange ? off : on}>to bead seat</text>
-      <text x="84" y="5.5" fontSize="9" fill={flange ? on : off}>to flange edge</text>
+      <text x="92" y="19" fontSize="9" fill={flange ? off : on}>
+        to bead seat
+      </text>
+      <text x="84" y="5.5" fontSize="9" fill={flange ? on : off}>
+        to flange edge
+      </text>
     </svg>
   );
 }

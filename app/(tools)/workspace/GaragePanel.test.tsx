@@ -10,29 +10,80 @@ import { predictPoints, steeringAxisOf } from "@/lib/garage/predict";
 import type { VehicleDetail, WorkspaceVehicle } from "@/lib/garage/types";
 import GaragePanel from "./GaragePanel";
 
-vi.mock("next/link", () => ({ default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => <a href={href} {...rest}>{children}</a> }));
+vi.mock("next/link", () => ({
+  default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => (
+    <a href={href} {...rest}>
+      {children}
+    </a>
+  ),
+}));
 afterEach(cleanup);
 
 // An invented vehicle with 9° of kingpin inclination recorded and one point measured at full lock.
 const metric: DisplayPrefs = { units: "metric", lengths: "decimal" };
 const current = DEFAULT_INPUT.current;
 const planned = DEFAULT_INPUT.planned;
-const point = { id: "p1", label: "sway bar end, full right lock", direction: "inboard" as const, distanceMm: 60, distanceText: "60 mm", suspensionState: "full-lock" as const, measuredSetup: current, createdAt: "2026-01-01T00:00:00.000Z" };
-const wsVehicle: WorkspaceVehicle = { id: "v1", name: "Quarry hauler", currentSetup: current, kingpinInclinationDeg: 9, axleRatio: 3.73, transmissionRatio: 1, clearanceMarginMm: 12.7, clearances: [point] };
+const point = {
+  id: "p1",
+  label: "sway bar end, full right lock",
+  direction: "inboard" as const,
+  distanceMm: 60,
+  distanceText: "60 mm",
+  suspensionState: "full-lock" as const,
+  measuredSetup: current,
+  createdAt: "2026-01-01T00:00:00.000Z",
+};
+const wsVehicle: WorkspaceVehicle = {
+  id: "v1",
+  name: "Quarry hauler",
+  currentSetup: current,
+  kingpinInclinationDeg: 9,
+  axleRatio: 3.73,
+  transmissionRatio: 1,
+  clearanceMarginMm: 12.7,
+  clearances: [point],
+};
 const detail: VehicleDetail = {
   vehicle: {
-    id: "v1", name: "Quarry hauler", year: null, make: null, model: null, trim: null, frontSuspension: "solid-axle", boltPattern: "6x139.7", hubBoreMm: null,
-    stockSetup: current, currentSetup: current, liftHeightMm: null, kingpinInclinationDeg: 9, axleRatio: 3.73, transmissionRatio: 1, clearanceMarginMm: 12.7, notes: "",
-    createdAt: "2026-01-01T00:00:00.000Z", updatedAt: "2026-01-01T00:00:00.000Z",
+    id: "v1",
+    name: "Quarry hauler",
+    year: null,
+    make: null,
+    model: null,
+    trim: null,
+    frontSuspension: "solid-axle",
+    boltPattern: "6x139.7",
+    hubBoreMm: null,
+    stockSetup: current,
+    currentSetup: current,
+    liftHeightMm: null,
+    kingpinInclinationDeg: 9,
+    axleRatio: 3.73,
+    transmissionRatio: 1,
+    clearanceMarginMm: 12.7,
+    notes: "",
+    createdAt: "2026-01-01T00:00:00.000Z",
+    updatedAt: "2026-01-01T00:00:00.000Z",
   },
   clearances: [point],
   photos: [],
 };
-const predictedCell = (testId: string) => within(screen.getByTestId(testId)).getAllByRole("row")[1]!.querySelectorAll("td")[3]!.textContent ?? "";
+const predictedCell = (testId: string) =>
+  within(screen.getByTestId(testId)).getAllByRole("row")[1]!.querySelectorAll("td")[3]!.textContent ?? "";
 
 describe("full-lock predictions: the workspace's garage panel and the vehicle page agree", () => {
   it("turn the point about the same steering axis, placed by the vehicle's kingpin inclination", () => {
-    render(<GaragePanel vehicles={[wsVehicle]} vehicleId="v1" planned={planned} prefs={metric} onPick={() => {}} onLimits={() => {}} onUseVehicle={() => {}} />);
+    render(
+      <GaragePanel
+        vehicles={[wsVehicle]}
+        vehicleId="v1"
+        planned={planned}
+        prefs={metric}
+        onPick={() => {}}
+        onLimits={() => {}}
+        onUseVehicle={() => {}}
+      />,
+    );
     render(<PlannedPanel detail={detail} initialPlanned={planned} />);
     // The engine's own figure with the vehicle's axis (lib/fitment/clearance.ts), to the mm.
     const expected = predictPoints([point], planned, 12.7, wsVehicle)[0]!.predictedMm;

@@ -55,14 +55,22 @@ export default function GaragePanel({
   const tight = view?.predictions.filter((p) => p.status === "tight").length ?? 0;
 
   return (
-    <section aria-labelledby="garage-title" className="rounded-card bg-white p-4 shadow-card ring-1 ring-basalt-100 sm:p-5" data-testid="garage-panel">
+    <section
+      aria-labelledby="garage-title"
+      className="rounded-card bg-white p-4 shadow-card ring-1 ring-basalt-100 sm:p-5"
+      data-testid="garage-panel"
+    >
       <div className="flex flex-wrap items-end justify-between gap-3">
         <div>
-          <h2 id="garage-title" className="text-lg font-semibold">On a vehicle from your garage</h2>
+          <h2 id="garage-title" className="text-lg font-semibold">
+            On a vehicle from your garage
+          </h2>
           <p className="text-sm text-basalt-600">Its measured points, predicted for the planned setup above.</p>
         </div>
         <div className="flex flex-col gap-1">
-          <label htmlFor="ws-vehicle" className="text-sm font-medium text-basalt-800">Vehicle</label>
+          <label htmlFor="ws-vehicle" className="text-sm font-medium text-basalt-800">
+            Vehicle
+          </label>
           <select
             id="ws-vehicle"
             className="min-h-10 min-w-[14rem] rounded-lg border border-basalt-300 bg-white px-3"
@@ -71,7 +79,9 @@ export default function GaragePanel({
           >
             <option value="">None picked</option>
             {vehicles.map((v) => (
-              <option key={v.id} value={v.id}>{v.name}</option>
+              <option key={v.id} value={v.id}>
+                {v.name}
+              </option>
             ))}
           </select>
         </div>
@@ -79,8 +89,13 @@ export default function GaragePanel({
       {vehicle && view && (
         <div className="mt-4 flex flex-col gap-3">
           <div className="flex flex-wrap items-center gap-2">
-            <Button variant="secondary" onClick={() => onUseVehicle(vehicle)}>Use its current setup and figures</Button>
-            <Link href={`/garage/${vehicle.id}?${setupQuery("p", planned)}`} className="text-sm font-semibold text-ember-700 underline-offset-2 hover:underline">
+            <Button variant="secondary" onClick={() => onUseVehicle(vehicle)}>
+              Use its current setup and figures
+            </Button>
+            <Link
+              href={`/garage/${vehicle.id}?${setupQuery("p", planned)}`}
+              className="text-sm font-semibold text-ember-700 underline-offset-2 hover:underline"
+            >
               Open the vehicle page
             </Link>
             <Link
@@ -91,7 +106,9 @@ export default function GaragePanel({
             </Link>
           </div>
           {vehicle.clearances.length === 0 ? (
-            <p className="text-sm text-basalt-700">No measured points yet: add them on the vehicle page to see what this setup would touch.</p>
+            <p className="text-sm text-basalt-700">
+              No measured points yet: add them on the vehicle page to see what this setup would touch.
+            </p>
           ) : (
             <>
               <p
@@ -130,4 +147,3 @@ export default function GaragePanel({
     </section>
   );
 }
-

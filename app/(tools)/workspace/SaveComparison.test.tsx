@@ -14,7 +14,13 @@ import { Workspace } from "./Workspace";
 // Typing through user-event in jsdom is slow on a shared machine; the default 5 s is too tight.
 vi.setConfig({ testTimeout: 20_000 });
 vi.mock("@/components/comparison/LazyComparisonCharts", () => ({ LazyComparisonCharts: () => <div data-testid="charts-stub" /> }));
-vi.mock("next/link", () => ({ default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => <a href={href} {...rest}>{children}</a> }));
+vi.mock("next/link", () => ({
+  default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => (
+    <a href={href} {...rest}>
+      {children}
+    </a>
+  ),
+}));
 
 const ID = "c4000000-0000-4000-8000-0000000000bb";
 const NAME = "Quarry road build";
@@ -25,8 +31,14 @@ function fakeServer() {
   const fetchMock = vi.fn(async (_url: string, init?: RequestInit) => {
     const body = JSON.parse(String(init?.body ?? "{}")) as { input: ComparisonInput };
     const comparison: SavedComparison = {
-      id: ID, name: NAME, vehicleId: null, input: body.input, figures: keyFigures(body.input), share: null,
-      createdAt: "2026-11-30T10:00:00.000Z", updatedAt: "2026-11-30T10:05:00.000Z",
+      id: ID,
+      name: NAME,
+      vehicleId: null,
+      input: body.input,
+      figures: keyFigures(body.input),
+      share: null,
+      createdAt: "2026-11-30T10:00:00.000Z",
+      updatedAt: "2026-11-30T10:05:00.000Z",
     };
     return new Response(JSON.stringify({ comparison }), { status: 200 });
   });
@@ -38,7 +50,12 @@ function renderWorkspace(saved: typeof opened | null) {
   const qc = new QueryClient({ defaultOptions: { queries: { retry: false } } });
   return render(
     <QueryClientProvider client={qc}>
-      <Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} savedId={saved?.id ?? null} saveSlot={<SaveComparison saved={saved} />} />
+      <Workspace
+        initialInput={DEFAULT_INPUT}
+        initialProblems={[]}
+        savedId={saved?.id ?? null}
+        saveSlot={<SaveComparison saved={saved} />}
+      />
     </QueryClientProvider>,
   );
 }
@@ -177,7 +194,16 @@ describe("the server refusing a comparison", () => {
     const user = userEvent.setup();
     vi.stubGlobal(
       "fetch",
-      vi.fn(async () => new Response(JSON.stringify({ error: "Some fields need attention.", fieldErrors: { "input.current.wheelWidthIn": ["x"], "input.vehicle.cruiseSpeedsMph.1": ["y"] } }), { status: 422 })),
+      vi.fn(
+        async () =>
+          new Response(
+            JSON.stringify({
+              error: "Some fields need attention.",
+              fieldErrors: { "input.current.wheelWidthIn": ["x"], "input.vehicle.cruiseSpeedsMph.1": ["y"] },
+            }),
+            { status: 422 },
+          ),
+      ),
     );
     renderOpened();
     const offset = planned().getByLabelText("Offset (mm)");

@@ -34,8 +34,14 @@ function inputErrorText(error: unknown, prefs: DisplayPrefs): string | null {
   if (!(error instanceof ApiError)) return null;
   const paths = Object.keys(error.body.fieldErrors ?? {}).filter((k) => k === "input" || k.startsWith("input."));
   if (paths.length === 0) return null;
-  const labels = [...new Set(paths.map((k) => inputFieldLabel(k.replace(/^input\.?/, ""), prefs, { withSide: true })).filter((l): l is string => l !== null))];
-  return labels.length ? `The server did not accept the comparison: check ${labels.join(", ")}.` : "The server did not accept the comparison. Check the fields above.";
+  const labels = [
+    ...new Set(
+      paths.map((k) => inputFieldLabel(k.replace(/^input\.?/, ""), prefs, { withSide: true })).filter((l): l is string => l !== null),
+    ),
+  ];
+  return labels.length
+    ? `The server did not accept the comparison: check ${labels.join(", ")}.`
+    : "The server did not accept the comparison. Check the fields above.";
 }
 
 /**
@@ -60,7 +66,8 @@ export function SaveComparison({ saved: openedFrom }: { saved: OpenedComparison 
   useLeaveGuard(dirty, saved ? `You have unsaved changes to “${saved.name}”. Leave without saving them?` : "");
 
   const create = useMutation({
-    mutationFn: (name: string) => api<{ comparison: SavedComparison }>("/api/comparisons", { method: "POST", body: { name, input, ...vehicleBody } }),
+    mutationFn: (name: string) =>
+      api<{ comparison: SavedComparison }>("/api/comparisons", { method: "POST", body: { name, input, ...vehicleBody } }),
     onSuccess: ({ comparison }) => {
       setSaved({ id: comparison.id, name: comparison.name, vehicleId: comparison.vehicleId, input: comparison.input });
       // A reload keeps the saved comparison: the workspace names it in its link from now on.
@@ -75,7 +82,8 @@ export function SaveComparison({ saved: openedFrom }: { saved: OpenedComparison 
     },
   });
   const update = useMutation({
-    mutationFn: (id: string) => api<{ comparison: SavedComparison }>(`/api/comparisons/${id}`, { method: "PATCH", body: { input, ...vehicleBody } }),
+    mutationFn: (id: string) =>
+      api<{ comparison: SavedComparison }>(`/api/comparisons/${id}`, { method: "PATCH", body: { input, ...vehicleBody } }),
     onSuccess: ({ comparison }) => {
       setSaved({ id: comparison.id, name: comparison.name, vehicleId: comparison.vehicleId, input: comparison.input });
       setNotice(`Changes saved to “${comparison.name}”.`);
@@ -103,7 +111,9 @@ export function SaveComparison({ saved: openedFrom }: { saved: OpenedComparison 
             <p className="mr-2 text-sm text-basalt-700">
               Saved comparison: <strong className="font-semibold text-basalt-950">{saved.name}</strong>
             </p>
-            <span data-testid="save-state">{dirty ? <Badge tone="tight">Unsaved changes</Badge> : <Badge tone="clear">All changes saved</Badge>}</span>
+            <span data-testid="save-state">
+              {dirty ? <Badge tone="tight">Unsaved changes</Badge> : <Badge tone="clear">All changes saved</Badge>}
+            </span>
             <Button onClick={() => update.mutate(saved.id)} pending={update.isPending} disabled={!complete}>
               Save changes
             </Button>
@@ -117,7 +127,11 @@ export function SaveComparison({ saved: openedFrom }: { saved: OpenedComparison 
           </Button>
         )}
         {saved?.vehicleId && saved.vehicleId === vehicleId && (
-          <Link href={`/garage/${saved.vehicleId}/checklist?comparison=${saved.id}`} className="text-sm font-semibold text-ember-700 underline-offset-2 hover:underline" data-testid="saved-checklist">
+          <Link
+            href={`/garage/${saved.vehicleId}/checklist?comparison=${saved.id}`}
+            className="text-sm font-semibold text-ember-700 underline-offset-2 hover:underline"
+            data-testid="saved-checklist"
+          >
             Install checklist from this comparison
           </Link>
         )}

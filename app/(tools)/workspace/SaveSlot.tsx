@@ -10,7 +10,10 @@ import { type OpenedComparison, useCurrentInput } from "./currentInput";
 const SaveComparison = dynamic(() => import("./SaveComparison").then((m) => m.SaveComparison), {
   ssr: false,
   loading: () => (
-    <div className="flex min-h-[3.75rem] items-center rounded-lg bg-white px-4 py-3 text-sm text-basalt-600 ring-1 ring-basalt-100" aria-busy="true">
+    <div
+      className="flex min-h-[3.75rem] items-center rounded-lg bg-white px-4 py-3 text-sm text-basalt-600 ring-1 ring-basalt-100"
+      aria-busy="true"
+    >
       Loading the save control…
     </div>
   ),
@@ -29,7 +32,9 @@ export function SaveSlot({ signedIn, saved }: { signedIn: boolean; saved: Opened
       <Link href={`/sign-in?callbackUrl=${encodeURIComponent(back)}`} className={buttonClass("secondary")}>
         Sign in to save
       </Link>
-      <p className="text-sm text-basalt-600">Signed-in members keep comparisons and share them. Until then this comparison lives in the link.</p>
+      <p className="text-sm text-basalt-600">
+        Signed-in members keep comparisons and share them. Until then this comparison lives in the link.
+      </p>
     </div>
   );
 }

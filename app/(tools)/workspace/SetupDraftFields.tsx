@@ -75,8 +75,23 @@ export function SetupDraftFields({
           hint={reading ?? "e.g. 265/70R17, LT285/70R17 121/118Q or 37x12.50R17LT"}
         />
         <div className="grid grid-cols-2 gap-3">
-          <TextField label={L.wheelDiameterIn} name={id("diameter")} inputMode="decimal" value={draft.diameter} onChange={(ev) => set({ diameter: ev.target.value })} error={e("wheelDiameterIn")} />
-          <TextField label={L.wheelWidthIn} name={id("width")} inputMode="decimal" value={draft.width} onChange={(ev) => set({ width: ev.target.value })} error={e("wheelWidthIn")} hint={`suits ${figures.rimWidthMinIn}–${figures.rimWidthMaxIn} in`} />
+          <TextField
+            label={L.wheelDiameterIn}
+            name={id("diameter")}
+            inputMode="decimal"
+            value={draft.diameter}
+            onChange={(ev) => set({ diameter: ev.target.value })}
+            error={e("wheelDiameterIn")}
+          />
+          <TextField
+            label={L.wheelWidthIn}
+            name={id("width")}
+            inputMode="decimal"
+            value={draft.width}
+            onChange={(ev) => set({ width: ev.target.value })}
+            error={e("wheelWidthIn")}
+            hint={`suits ${figures.rimWidthMinIn}–${figures.rimWidthMaxIn} in`}
+          />
         </div>
         <Segmented
           legend="Wheel position given as"
@@ -123,7 +138,15 @@ export function SetupDraftFields({
               A tape across the back of the wheel reads to the flange edge; the bead seat is the flange allowance further in.
             </p>
             <div className="grid grid-cols-[1fr_auto] items-end gap-3">
-              <TextField label={L["position.flangeIn"]} name={id("flange")} inputMode="text" value={draft.flange} onChange={(ev) => set({ flange: ev.target.value })} error={e("position.flangeIn")} hint="usually 1/2" />
+              <TextField
+                label={L["position.flangeIn"]}
+                name={id("flange")}
+                inputMode="text"
+                value={draft.flange}
+                onChange={(ev) => set({ flange: ev.target.value })}
+                error={e("position.flangeIn")}
+                hint="usually 1/2"
+              />
               <BackspacingDiagram reference={draft.reference} />
             </div>
           </div>
@@ -136,7 +159,11 @@ export function SetupDraftFields({
           placeholder="none"
           onChange={(ev) => set({ spacer: ev.target.value })}
           error={e("spacerMm")}
-          hint={figures.spacerMm > 0 ? `Acts as offset ${formatNumber(figures.effectiveOffsetMm, 1, { signed: true })} mm` : "Leave empty for none. In mm; inches need their unit, e.g. 1 in"}
+          hint={
+            figures.spacerMm > 0
+              ? `Acts as offset ${formatNumber(figures.effectiveOffsetMm, 1, { signed: true })} mm`
+              : "Leave empty for none. In mm; inches need their unit, e.g. 1 in"
+          }
         />
       </div>
     </section>

@@ -10,7 +10,11 @@ import { DEFAULT_VEHICLE } from "@/lib/comparisons/model";
 /** The two optional gear ratios that, with the axle ratio, give the crawl ratio. */
 const CRAWL_FIELDS = [
   { key: "first", path: "firstGearRatio", hint: "The transmission's first gear, e.g. 4.03. With the low range it gives the crawl ratio." },
-  { key: "low", path: "transferLowRatio", hint: "The transfer case's low range, e.g. 2.72. Crawl ratio = first gear × low range × axle ratio." },
+  {
+    key: "low",
+    path: "transferLowRatio",
+    hint: "The transfer case's low range, e.g. 2.72. Crawl ratio = first gear × low range × axle ratio.",
+  },
 ] as const;
 
 /** Vehicle figures in a collapsible panel; each says when it is the default. */
@@ -48,15 +52,22 @@ export function VehicleFields({
     if (hasErrors) setOpen(true);
   }
   return (
-    <details className="group rounded-card bg-white shadow-card ring-1 ring-basalt-100" open={open} onToggle={(ev) => setOpen(ev.currentTarget.open)}>
+    <details
+      className="group rounded-card bg-white shadow-card ring-1 ring-basalt-100"
+      open={open}
+      onToggle={(ev) => setOpen(ev.currentTarget.open)}
+    >
       <summary className="flex cursor-pointer list-none items-center justify-between gap-3 rounded-card px-4 py-3 font-semibold sm:px-5">
         <span>
-          Vehicle details <span className="font-normal text-basalt-500">— kingpin inclination, gearing, crawl ratio, cruise speeds, fender line</span>
+          Vehicle details{" "}
+          <span className="font-normal text-basalt-500">— kingpin inclination, gearing, crawl ratio, cruise speeds, fender line</span>
         </span>
         <span className="flex items-center gap-2">
           {count === 0 ? <Badge>all defaults</Badge> : <Badge tone="ember">{count} entered</Badge>}
           {hasErrors && <Badge tone="contact">check</Badge>}
-          <span aria-hidden className="transition-transform group-open:rotate-180">▾</span>
+          <span aria-hidden className="transition-transform group-open:rotate-180">
+            ▾
+          </span>
         </span>
       </summary>
       <div className="grid gap-3 border-t border-basalt-100 px-4 py-4 sm:grid-cols-2 sm:px-5 lg:grid-cols-3" onBlur={onCommit}>

@@ -39,7 +39,18 @@ describe("workspace inputs", () => {
 
   it("changes the offset when the reference switches from the flange edge to the bead seat", async () => {
     const user = userEvent.setup();
-    render(<Workspace initialInput={{ ...DEFAULT_INPUT, planned: { ...DEFAULT_INPUT.planned, position: { mode: "backspacing", backspacingIn: 4.625, reference: "flange", flangeIn: 0.5 } } }} initialProblems={[]} />);
+    render(
+      <Workspace
+        initialInput={{
+          ...DEFAULT_INPUT,
+          planned: {
+            ...DEFAULT_INPUT.planned,
+            position: { mode: "backspacing", backspacingIn: 4.625, reference: "flange", flangeIn: 0.5 },
+          },
+        }}
+        initialProblems={[]}
+      />,
+    );
     expect(planned().getByText(/Offset −9\.5 mm/)).toBeTruthy();
     const before = window.history.length;
     await user.click(planned().getByRole("radio", { name: "Bead seat" }));
@@ -102,7 +113,9 @@ describe("a link with values that cannot be used", () => {
   it("says which values were replaced, as the fields are labelled, and with what", () => {
     const { input, problems } = decodeComparison("po=190&pw=8&cruise=60,x,70&axle=12");
     render(<Workspace initialInput={input} initialProblems={problems} />);
-    const items = within(screen.getByTestId("link-problems")).getAllByRole("listitem").map((li) => li.textContent);
+    const items = within(screen.getByTestId("link-problems"))
+      .getAllByRole("listitem")
+      .map((li) => li.textContent);
     expect(items).toEqual([
       "Planned setup · Offset (mm): “190” puts the mounting face outside a 8 in wide wheel; using an offset of \u221212 mm.",
       "Axle ratio: “12” is outside 1–10; using 3.73.",
@@ -197,7 +210,10 @@ describe("vehicle details panel", () => {
     await user.click(screen.getByRole("radio", { name: "Metric" }));
     const fender = screen.getByLabelText(/^Fender line from hub face \(mm\)/);
     expect(fender).toHaveProperty("value", "far");
-    const message = (fender.getAttribute("aria-describedby") ?? "").split(" ").map((id) => document.getElementById(id)?.textContent ?? "").join(" ");
+    const message = (fender.getAttribute("aria-describedby") ?? "")
+      .split(" ")
+      .map((id) => document.getElementById(id)?.textContent ?? "")
+      .join(" ");
     expect(message).toMatch(/Fender line from hub face \(mm\): not a length in mm.*The unit is now mm; this text was not converted\./);
   });
 

@@ -8,7 +8,16 @@ import { HeadlineChanges, SetupDetailTable, WarningList } from "@/components/com
 import { useDisplayPrefs } from "@/components/comparison/useDisplayPrefs";
 import { Button } from "@/components/ui/Button";
 import { computeComparison } from "@/lib/comparisons/compute";
-import { type Draft, type DraftErrors, type SetupDraft, convertDraft, draftFromInput, followTire, inchText, readDraft } from "@/lib/comparisons/draft";
+import {
+  type Draft,
+  type DraftErrors,
+  type SetupDraft,
+  convertDraft,
+  draftFromInput,
+  followTire,
+  inchText,
+  readDraft,
+} from "@/lib/comparisons/draft";
 import { fenderUnit, speedUnit, vehicleFieldLabel } from "@/lib/comparisons/fields";
 import type { DisplayPrefs } from "@/lib/comparisons/format";
 import { type ComparisonInput, DEFAULT_INPUT } from "@/lib/comparisons/model";
@@ -20,7 +29,10 @@ import { SetupDraftFields } from "./SetupDraftFields";
 import { VehicleFields } from "./VehicleFields";
 
 // Only members with vehicles load the garage panel (and the prediction code with it).
-const GaragePanel = dynamic(() => import("./GaragePanel"), { ssr: false, loading: () => <div className="h-24 animate-pulse rounded-card bg-basalt-50" role="status" aria-label="Loading your garage" /> });
+const GaragePanel = dynamic(() => import("./GaragePanel"), {
+  ssr: false,
+  loading: () => <div className="h-24 animate-pulse rounded-card bg-basalt-50" role="status" aria-label="Loading your garage" />,
+});
 
 interface State {
   draft: Draft;
@@ -31,7 +43,12 @@ interface State {
   prefs: DisplayPrefs;
 }
 
-const fromInput = (input: ComparisonInput, prefs: DisplayPrefs): State => ({ draft: draftFromInput(input, prefs), errors: {}, good: input, prefs });
+const fromInput = (input: ComparisonInput, prefs: DisplayPrefs): State => ({
+  draft: draftFromInput(input, prefs),
+  errors: {},
+  good: input,
+  prefs,
+});
 const sameprefs = (a: DisplayPrefs, b: DisplayPrefs) => a.units === b.units && a.lengths === b.lengths;
 
 /**
@@ -47,7 +64,9 @@ function reformat(s: State, prefs: DisplayPrefs): State {
     const unit = path === "cruiseSpeedsMph" ? speedUnit(prefs) : fenderUnit(prefs);
     const key = `vehicle.${path}`;
     const note = `The unit is now ${unit}; this text was not converted.`;
-    errors[key] = errors[key] ? `${errors[key]} ${note}` : `${vehicleFieldLabel(path, prefs)}: “${path === "cruiseSpeedsMph" ? draft.vehicle.cruise : draft.vehicle.fender}” did not read in ${path === "cruiseSpeedsMph" ? speedUnit(s.prefs) : fenderUnit(s.prefs)}. ${note} Check it, then retype it.`;
+    errors[key] = errors[key]
+      ? `${errors[key]} ${note}`
+      : `${vehicleFieldLabel(path, prefs)}: “${path === "cruiseSpeedsMph" ? draft.vehicle.cruise : draft.vehicle.fender}” did not read in ${path === "cruiseSpeedsMph" ? speedUnit(s.prefs) : fenderUnit(s.prefs)}. ${note} Check it, then retype it.`;
   }
   const clean = Object.keys(errors).length === 0;
   return { draft, errors, good: clean && read.input ? read.input : s.good, prefs };
@@ -177,7 +196,12 @@ export function Workspace({
       const next: SetupDraft =
         mode === "offset"
           ? { ...d, mode, offset: String(Math.round(f.offsetMm * 100) / 100) }
-          : { ...d, mode, backspacing: inchText(d.reference === "flange" ? f.backspacingFlangeIn : f.backspacingBeadSeatIn, prefs), flange: d.flange.trim() === "" ? inchText(f.flangeAllowanceIn, prefs) : d.flange };
+          : {
+              ...d,
+              mode,
+              backspacing: inchText(d.reference === "flange" ? f.backspacingFlangeIn : f.backspacingBeadSeatIn, prefs),
+              flange: d.flange.trim() === "" ? inchText(f.flangeAllowanceIn, prefs) : d.flange,
+            };
       apply({ ...s.draft, [side]: next }, true);
     },
   });
@@ -194,61 +218,89 @@ export function Workspace({
 
   return (
     <CurrentInputContext value={{ input: s.good, complete: errorCount === 0, vehicleId: garage ? vehicleId : undefined, onSaved }}>
-    <div className="flex flex-col gap-6">
-      <div className="flex flex-wrap items-end justify-between gap-4">
-        <DisplayToggle prefs={prefs} onChange={setPrefs} />
-        <div className="flex flex-wrap items-center gap-2">
-          <Button variant="secondary" onClick={swap}>Swap current and planned</Button>
-          <Button variant="secondary" onClick={copyLink}>Copy link</Button>
-          <span role="status" className="min-w-[9rem] text-sm text-basalt-600">
-            {copied === "done" ? "Link copied." : copied === "failed" ? "Copy the address bar instead." : ""}
-          </span>
+      <div className="flex flex-col gap-6">
+        <div className="flex flex-wrap items-end justify-between gap-4">
+          <DisplayToggle prefs={prefs} onChange={setPrefs} />
+          <div className="flex flex-wrap items-center gap-2">
+            <Button variant="secondary" onClick={swap}>
+              Swap current and planned
+            </Button>
+            <Button variant="secondary" onClick={copyLink}>
+              Copy link
+            </Button>
+            <span role="status" className="min-w-[9rem] text-sm text-basalt-600">
+              {copied === "done" ? "Link copied." : copied === "failed" ? "Copy the address bar instead." : ""}
+            </span>
+          </div>
         </div>
-      </div>
-      {saveSlot}
-      {linkProblems.length > 0 && (
-        <div role="status" className="rounded-lg bg-tight-100 px-3 py-2 text-sm text-tight-800" data-testid="link-problems">
-          <p className="font-semibold">Some values in the link could not be used and were replaced:</p>
-          <ul className="mt-1 list-disc pl-5">
-            {linkProblems.map((p) => (
-              <li key={`${p.field}:${p.given}`}>{problemText(p)}</li>
-            ))}
-          </ul>
+        {saveSlot}
+        {linkProblems.length > 0 && (
+          <div role="status" className="rounded-lg bg-tight-100 px-3 py-2 text-sm text-tight-800" data-testid="link-problems">
+            <p className="font-semibold">Some values in the link could not be used and were replaced:</p>
+            <ul className="mt-1 list-disc pl-5">
+              {linkProblems.map((p) => (
+                <li key={`${p.field}:${p.given}`}>{problemText(p)}</li>
+              ))}
+            </ul>
+          </div>
+        )}
+        <div className="grid gap-4 md:grid-cols-2">
+          <SetupDraftFields {...setupProps("current")} />
+          <SetupDraftFields {...setupProps("planned")} />
         </div>
-      )}
-      <div className="grid gap-4 md:grid-cols-2">
-        <SetupDraftFields {...setupProps("current")} />
-        <SetupDraftFields {...setupProps("planned")} />
-      </div>
-      <VehicleFields draft={s.draft.vehicle} defaults={defaultsText} errors={s.errors} prefs={prefs} onChange={(vehicle) => apply({ ...s.draft, vehicle })} onCommit={commit} />
-      {garage && garage.vehicles.length > 0 && (
-        <GaragePanel vehicles={garage.vehicles} vehicleId={vehicleId} planned={s.good.planned} prefs={prefs} onPick={pickVehicle} onLimits={setLimits} onUseVehicle={takeVehicle} />
-      )}
+        <VehicleFields
+          draft={s.draft.vehicle}
+          defaults={defaultsText}
+          errors={s.errors}
+          prefs={prefs}
+          onChange={(vehicle) => apply({ ...s.draft, vehicle })}
+          onCommit={commit}
+        />
+        {garage && garage.vehicles.length > 0 && (
+          <GaragePanel
+            vehicles={garage.vehicles}
+            vehicleId={vehicleId}
+            planned={s.good.planned}
+            prefs={prefs}
+            onPick={pickVehicle}
+            onLimits={setLimits}
+            onUseVehicle={takeVehicle}
+          />
+        )}
 
-      <div aria-labelledby="results-title" role="region" className="flex flex-col gap-6">
-        <div className="flex min-h-10 flex-wrap items-center justify-between gap-2">
-          <h2 id="results-title" className="sr-only">Results</h2>
-          <p className={errorCount > 0 ? "rounded-lg bg-tight-100 px-3 py-2 text-sm text-tight-800" : "text-sm text-basalt-500"} data-testid="results-status">
-            {errorCount > 0
-              ? `Showing the last complete comparison: ${errorCount === 1 ? "one field needs" : `${errorCount} fields need`} attention above.`
-              : "Results follow your entries as you type."}
-          </p>
-        </div>
-        <HeadlineChanges result={result} prefs={prefs} />
-        <div className="grid items-start gap-6 lg:grid-cols-[3fr_2fr]">
-          <section aria-labelledby="drawing-title" className="rounded-card bg-white p-3 shadow-card ring-1 ring-basalt-100 sm:p-4">
-            <h2 id="drawing-title" className="mb-2 text-lg font-semibold">Side by side at the hub</h2>
-            <CrossSection result={result} prefs={prefs} limits={vehicleId ? limits : null} />
+        <div aria-labelledby="results-title" role="region" className="flex flex-col gap-6">
+          <div className="flex min-h-10 flex-wrap items-center justify-between gap-2">
+            <h2 id="results-title" className="sr-only">
+              Results
+            </h2>
+            <p
+              className={errorCount > 0 ? "rounded-lg bg-tight-100 px-3 py-2 text-sm text-tight-800" : "text-sm text-basalt-500"}
+              data-testid="results-status"
+            >
+              {errorCount > 0
+                ? `Showing the last complete comparison: ${errorCount === 1 ? "one field needs" : `${errorCount} fields need`} attention above.`
+                : "Results follow your entries as you type."}
+            </p>
+          </div>
+          <HeadlineChanges result={result} prefs={prefs} />
+          <div className="grid items-start gap-6 lg:grid-cols-[3fr_2fr]">
+            <section aria-labelledby="drawing-title" className="rounded-card bg-white p-3 shadow-card ring-1 ring-basalt-100 sm:p-4">
+              <h2 id="drawing-title" className="mb-2 text-lg font-semibold">
+                Side by side at the hub
+              </h2>
+              <CrossSection result={result} prefs={prefs} limits={vehicleId ? limits : null} />
+            </section>
+            <WarningList result={result} prefs={prefs} />
+          </div>
+          <section aria-labelledby="charts-title">
+            <h2 id="charts-title" className="mb-2 text-lg font-semibold">
+              Charts
+            </h2>
+            <LazyComparisonCharts result={result} prefs={prefs} />
           </section>
-          <WarningList result={result} prefs={prefs} />
+          <SetupDetailTable result={result} prefs={prefs} />
         </div>
-        <section aria-labelledby="charts-title">
-          <h2 id="charts-title" className="mb-2 text-lg font-semibold">Charts</h2>
-          <LazyComparisonCharts result={result} prefs={prefs} />
-        </section>
-        <SetupDetailTable result={result} prefs={prefs} />
       </div>
-    </div>
     </CurrentInputContext>
   );
 }

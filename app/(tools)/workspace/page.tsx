@@ -11,7 +11,8 @@ import { Workspace } from "./Workspace";
 
 export const metadata: Metadata = {
   title: "Comparison workspace",
-  description: "Your current wheel and tire setup beside the one you plan: diameter, clearance, poke, scrub, track, speedometer and engine speed, with a to-scale drawing.",
+  description:
+    "Your current wheel and tire setup beside the one you plan: diameter, clearance, poke, scrub, track, speedometer and engine speed, with a to-scale drawing.",
 };
 
 /** `saved=<id>`: the saved comparison this link was opened from (the caller's own; anything else is ignored). */
@@ -37,7 +38,13 @@ export default async function WorkspacePage({ searchParams }: { searchParams: Pr
         title="Comparison workspace"
         lead="Enter what you run and what you plan. Every figure updates as you type, in your browser; the link in the address bar reproduces this comparison."
       />
-      <Workspace initialInput={input} initialProblems={problems} garage={garage} savedId={saved?.id ?? null} saveSlot={<SaveSlot signedIn={caller !== null} saved={saved} />} />
+      <Workspace
+        initialInput={input}
+        initialProblems={problems}
+        garage={garage}
+        savedId={saved?.id ?? null}
+        saveSlot={<SaveSlot signedIn={caller !== null} saved={saved} />}
+      />
     </>
   );
 }

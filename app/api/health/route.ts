@@ -13,7 +13,11 @@ export async function GET() {
   } catch (error) {
     log().error({ err: { message: (error as Error).message } }, "health: database check failed");
     return Response.json(
-      { status: "unavailable", database: { status: "down" }, message: "The database is not reachable. The app will recover by itself when it is back." },
+      {
+        status: "unavailable",
+        database: { status: "down" },
+        message: "The database is not reachable. The app will recover by itself when it is back.",
+      },
       { status: 503, headers: { "Cache-Control": "no-store" } },
     );
   }

@@ -4,7 +4,19 @@ import { MUTED } from "./style";
 import { linePath, r2, sx, sy } from "./svg";
 
 /** A feature's name above the drawing, joined to the feature by a leader with a dot on it. */
-export function CalloutMark({ c, fill, mmPerPx, fontMm, bold = false }: { c: PlacedCallout; fill: string; mmPerPx: number; fontMm: number; bold?: boolean }) {
+export function CalloutMark({
+  c,
+  fill,
+  mmPerPx,
+  fontMm,
+  bold = false,
+}: {
+  c: PlacedCallout;
+  fill: string;
+  mmPerPx: number;
+  fontMm: number;
+  bold?: boolean;
+}) {
   return (
     <g data-callout={c.id}>
       <path d={linePath(c.leader[0], c.leader[1])} stroke={MUTED} strokeOpacity={0.6} strokeWidth={r2(0.75 * mmPerPx)} fill="none" />

@@ -26,7 +26,11 @@ const metric: DisplayPrefs = { units: "metric", lengths: "decimal" };
 const A: Setup = { tire: "35x12.50R17", wheelDiameterIn: 17, wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 }, spacerMm: 0 };
 /** 285/75R16 on 16x8 +0 on a 38 mm spacer: 38 mm = 1.496 in → "1.5 in (38 mm)" as bought. */
 const B: Setup = { tire: "285/75R16", wheelDiameterIn: 16, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 0 }, spacerMm: 38 };
-const withPlanned = (planned: Setup, vehicle: Partial<ComparisonInput["vehicle"]> = {}): ComparisonInput => ({ ...DEFAULT_INPUT, planned, vehicle: { ...DEFAULT_INPUT.vehicle, ...vehicle } });
+const withPlanned = (planned: Setup, vehicle: Partial<ComparisonInput["vehicle"]> = {}): ComparisonInput => ({
+  ...DEFAULT_INPUT,
+  planned,
+  vehicle: { ...DEFAULT_INPUT.vehicle, ...vehicle },
+});
 
 const labels = () => [...document.querySelectorAll("[data-testid=cross-section] text")].map((t) => t.textContent ?? "");
 
@@ -44,7 +48,9 @@ describe("CrossSection", () => {
     expect(pla.getAttribute("stroke-dasharray")).toMatch(/^\d/);
     expect(svg.querySelector("[data-ground=planned]")!.getAttribute("stroke-dasharray")).toMatch(/^\d/);
     // Words on the drawing: the legend with the tires, and a name on each tire.
-    expect(labels()).toEqual(expect.arrayContaining(["Current 265/70R17 113T", "Planned 35x12.50R17", "Current", "Planned", "hub face", "axle"]));
+    expect(labels()).toEqual(
+      expect.arrayContaining(["Current 265/70R17 113T", "Planned 35x12.50R17", "Current", "Planned", "hub face", "axle"]),
+    );
     const legend = [...svg.querySelectorAll("[data-legend] path")].map((p) => p.getAttribute("stroke-dasharray"));
     expect(legend[0]).toBeNull();
     expect(legend[1]).toMatch(/^\d/);
@@ -55,14 +61,21 @@ describe("CrossSection", () => {
     const img = screen.getByRole("img", { name: /Cross-section of both setups at the hub, to scale/ });
     const desc = document.getElementById(img.getAttribute("aria-labelledby")!.split(" ")[1]!)!;
     expect(desc.tagName.toLowerCase()).toBe("desc");
-    expect(desc.textContent).toContain("Planned: 35x12.50R17 on a 17 × 9 in wheel, offset −12 mm, backspacing 4.53 in to the flange edge; the tire reaches 5.58 in inboard and 6.52 in outboard of the hub face and is 35 in tall.");
+    expect(desc.textContent).toContain(
+      "Planned: 35x12.50R17 on a 17 × 9 in wheel, offset −12 mm, backspacing 4.53 in to the flange edge; the tire reaches 5.58 in inboard and 6.52 in outboard of the hub face and is 35 in tall.",
+    );
     expect(desc.textContent).toContain("The planned setup sits 1.7 in higher (ground clearance +1.7 in).");
   });
 
   it("offers the figures as a table for screen readers", () => {
     render(<CrossSection result={computeComparison(withPlanned(A))} prefs={metric} />);
     const table = within(screen.getByTestId("cross-section-table")).getByRole("table", { name: "Figures drawn in the cross-section" });
-    const row = (name: string) => [...within(table).getByRole("row", { name: new RegExp(`^${name}`) }).querySelectorAll("td")].map((c) => c.textContent);
+    const row = (name: string) =>
+      [
+        ...within(table)
+          .getByRole("row", { name: new RegExp(`^${name}`) })
+          .querySelectorAll("td"),
+      ].map((c) => c.textContent);
     expect(row("Reach inboard of the hub face")).toEqual(["158 mm", "142 mm"]);
     expect(row("Backspacing")).toEqual(["139 mm to the flange edge", "115 mm to the flange edge"]);
     expect(row("Offset")).toEqual(["+25 mm", "−12 mm"]);
@@ -74,14 +87,37 @@ describe("CrossSection", () => {
   it("labels the dimensions in inches, in sixteenths and in millimetres", () => {
     const r = computeComparison(withPlanned(A));
     render(<CrossSection result={r} prefs={inch} />);
-    expect(labels()).toEqual(expect.arrayContaining(["inboard 5.58 in", "outboard 6.52 in", "backspacing 4.53 in", "flange 0.5 in", "offset −12 mm", "offset +25 mm", "diameter 35 in", "diameter 31.61 in", "ground clearance +1.7 in"]));
+    expect(labels()).toEqual(
+      expect.arrayContaining([
+        "inboard 5.58 in",
+        "outboard 6.52 in",
+        "backspacing 4.53 in",
+        "flange 0.5 in",
+        "offset −12 mm",
+        "offset +25 mm",
+        "diameter 35 in",
+        "diameter 31.61 in",
+        "ground clearance +1.7 in",
+      ]),
+    );
     cleanup();
     render(<CrossSection result={r} prefs={frac} />);
     // 5.5776 in × 16 = 89.2 → 89/16 = 5-9/16 in; 4.5276 × 16 = 72.4 → 4-1/2 in.
     expect(labels()).toEqual(expect.arrayContaining(["inboard 5-9/16 in", "backspacing 4-1/2 in", "flange 1/2 in"]));
     cleanup();
     render(<CrossSection result={r} prefs={metric} />);
-    expect(labels()).toEqual(expect.arrayContaining(["inboard 142 mm", "outboard 166 mm", "backspacing 115 mm", "flange 13 mm", "offset −12 mm", "diameter 889 mm", "diameter 803 mm", "ground clearance +43 mm"]));
+    expect(labels()).toEqual(
+      expect.arrayContaining([
+        "inboard 142 mm",
+        "outboard 166 mm",
+        "backspacing 115 mm",
+        "flange 13 mm",
+        "offset −12 mm",
+        "diameter 889 mm",
+        "diameter 803 mm",
+        "ground clearance +43 mm",
+      ]),
+    );
   });
 
   it("draws a spacer between the hub face and the wheel, with its thickness as bought", () => {
@@ -114,9 +150,33 @@ describe("CrossSection", () => {
       innerMm: 187.5,
       outerMm: 127.5,
       parts: [
-        { label: "Frame rail", direction: "inboard", state: "ride-height", distanceMm: 30, measuredWith: stock, predictedMm: 45.83, status: "clear" },
-        { label: "Flare", direction: "outboard", state: "ride-height", distanceMm: 20, measuredWith: stock, predictedMm: -38.17, status: "contact" },
-        { label: "Bumper corner", direction: "fore-aft", state: "full-lock", distanceMm: 19.05, measuredWith: stock, predictedMm: 3, status: "tight" },
+        {
+          label: "Frame rail",
+          direction: "inboard",
+          state: "ride-height",
+          distanceMm: 30,
+          measuredWith: stock,
+          predictedMm: 45.83,
+          status: "clear",
+        },
+        {
+          label: "Flare",
+          direction: "outboard",
+          state: "ride-height",
+          distanceMm: 20,
+          measuredWith: stock,
+          predictedMm: -38.17,
+          status: "contact",
+        },
+        {
+          label: "Bumper corner",
+          direction: "fore-aft",
+          state: "full-lock",
+          distanceMm: 19.05,
+          measuredWith: stock,
+          predictedMm: 3,
+          status: "tight",
+        },
       ],
     };
     render(<CrossSection result={computeComparison(withPlanned(A))} prefs={metric} limits={limits} />);
@@ -127,7 +187,9 @@ describe("CrossSection", () => {
     expect(labels()).toEqual(expect.arrayContaining(["inner limit", "fender lip", "Frame rail: clear", "Flare: contact"]));
     expect(screen.getByText(/One point lies outside this section/)).toBeTruthy();
     const vehicle = within(screen.getByTestId("cross-section-table")).getByRole("table", { name: "Vehicle parts and lines drawn" });
-    expect(within(vehicle).getByRole("row", { name: /^Flare/ }).textContent).toContain("128 mm outboard of the hub face at hub height; −38 mm predicted with the planned setup, predicted contact");
+    expect(within(vehicle).getByRole("row", { name: /^Flare/ }).textContent).toContain(
+      "128 mm outboard of the hub face at hub height; −38 mm predicted with the planned setup, predicted contact",
+    );
     expect(within(vehicle).getByRole("row", { name: /^Bumper corner/ }).textContent).toContain("not in this section");
   });
 
@@ -148,7 +210,9 @@ describe("CrossSection", () => {
   it("renders on the server to the same markup every time (no browser API, hydration-safe numbers)", () => {
     const r = computeComparison(withPlanned(B, { kingpinInclinationDeg: 10.5 }));
     const a = renderToStaticMarkup(<CrossSection result={r} prefs={inch} />);
-    const b = renderToStaticMarkup(<CrossSection result={computeComparison(withPlanned(B, { kingpinInclinationDeg: 10.5 }))} prefs={inch} />);
+    const b = renderToStaticMarkup(
+      <CrossSection result={computeComparison(withPlanned(B, { kingpinInclinationDeg: 10.5 }))} prefs={inch} />,
+    );
     expect(a).toBe(b);
     expect(a).toContain('data-testid="cross-section"');
     // Coordinates are rounded to 0.01 mm.

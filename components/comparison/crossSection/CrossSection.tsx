@@ -42,8 +42,16 @@ export function CrossSection({
 }) {
   const { model, named, layout, description } = useMemo(() => buildDrawing(r, prefs, limits), [r, prefs, limits]);
   const { viewBox: v, mmPerPx, fontMm } = layout;
-  const sideOf = (dimId: string) => (dimId.startsWith("current-") ? SIDE_STYLE.current : dimId.startsWith("planned-") ? SIDE_STYLE.planned : null);
-  const calloutFill = (cid: string) => (cid === "tire-current" ? SIDE_STYLE.current.stroke : cid === "tire-planned" ? SIDE_STYLE.planned.stroke : cid.startsWith("part-") || cid === "inner-limit" || cid === "fender-lip" || cid === "fender-line" ? LIMIT : INK);
+  const sideOf = (dimId: string) =>
+    dimId.startsWith("current-") ? SIDE_STYLE.current : dimId.startsWith("planned-") ? SIDE_STYLE.planned : null;
+  const calloutFill = (cid: string) =>
+    cid === "tire-current"
+      ? SIDE_STYLE.current.stroke
+      : cid === "tire-planned"
+        ? SIDE_STYLE.planned.stroke
+        : cid.startsWith("part-") || cid === "inner-limit" || cid === "fender-lip" || cid === "fender-line"
+          ? LIMIT
+          : INK;
   const notDrawn = model.parts.filter((p) => !p.at).length;
   const unnamed = model.parts.filter((p) => p.at && !named.has(p.id)).length;
   return (
@@ -76,16 +84,29 @@ export function CrossSection({
           <CalloutMark key={c.id} c={c} fill={calloutFill(c.id)} mmPerPx={mmPerPx} fontMm={fontMm} bold={c.id.startsWith("tire-")} />
         ))}
         {layout.legend.map((item) => (
-          <LegendMark key={item.id} item={item} style={item.id === "legend-current" ? SIDE_STYLE.current : SIDE_STYLE.planned} mmPerPx={mmPerPx} fontMm={fontMm} />
+          <LegendMark
+            key={item.id}
+            item={item}
+            style={item.id === "legend-current" ? SIDE_STYLE.current : SIDE_STYLE.planned}
+            mmPerPx={mmPerPx}
+            fontMm={fontMm}
+          />
         ))}
       </svg>
       <figcaption className="mt-1 text-xs text-basalt-600">
-        To scale, seen from the front, inboard to the left. Current: solid lines, upright figures; planned: dashed lines, italic figures. Flange, bead seat, well, pad and
-        sidewall shapes are schematic; every position and dimension is computed from the two setups&apos; figures.
+        To scale, seen from the front, inboard to the left. Current: solid lines, upright figures; planned: dashed lines, italic figures.
+        Flange, bead seat, well, pad and sidewall shapes are schematic; every position and dimension is computed from the two setups&apos;
+        figures.
         {model.steeringAxis ? " The steering axis is drawn through the current tire's contact centre (zero scrub assumed)." : ""}
-        {model.parts.length > 0 ? " Measured parts are drawn at hub height (the garage keeps no height): a cross marks predicted contact, a triangle closer than the margin, a circle clear." : ""}
-        {unnamed > 0 ? ` The ${named.size} points nearest to contact are named; the other ${unnamed} are marked only (all are in the table of predictions).` : ""}
-        {notDrawn > 0 ? ` ${notDrawn === 1 ? "One point lies" : `${notDrawn} points lie`} outside this section (fore/aft or at full lock): see the table of predictions.` : ""}
+        {model.parts.length > 0
+          ? " Measured parts are drawn at hub height (the garage keeps no height): a cross marks predicted contact, a triangle closer than the margin, a circle clear."
+          : ""}
+        {unnamed > 0
+          ? ` The ${named.size} points nearest to contact are named; the other ${unnamed} are marked only (all are in the table of predictions).`
+          : ""}
+        {notDrawn > 0
+          ? ` ${notDrawn === 1 ? "One point lies" : `${notDrawn} points lie`} outside this section (fore/aft or at full lock): see the table of predictions.`
+          : ""}
       </figcaption>
       <CrossSectionTable id={id} r={r} model={model} prefs={prefs} />
     </figure>

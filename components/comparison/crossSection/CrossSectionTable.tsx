@@ -4,19 +4,36 @@ import type { CrossSectionModel } from "@/lib/fitment/crossSection";
 import { len, offsetText, signedLen } from "./text";
 
 const STATUS = { clear: "clear", tight: "closer than the margin", contact: "predicted contact" } as const;
-const NOT_DRAWN = { "fore-aft": "not in this section (ahead of or behind the tire)", "full-lock": "not in this section (measured at full lock)" } as const;
+const NOT_DRAWN = {
+  "fore-aft": "not in this section (ahead of or behind the tire)",
+  "full-lock": "not in this section (measured at full lock)",
+} as const;
 
 /**
  * The drawing's figures as tables, for screen readers (visually hidden; the picture itself is one
  * image with a title and a description). Same figures, same units as the labels.
  */
-export function CrossSectionTable({ id, r, model, prefs }: { id: string; r: ComparisonResult; model: CrossSectionModel; prefs: DisplayPrefs }) {
+export function CrossSectionTable({
+  id,
+  r,
+  model,
+  prefs,
+}: {
+  id: string;
+  r: ComparisonResult;
+  model: CrossSectionModel;
+  prefs: DisplayPrefs;
+}) {
   const sides = ["current", "planned"] as const;
   const rows: [string, (side: (typeof sides)[number]) => string][] = [
     ["Tire", (s) => r[s].tireText],
     ["Wheel", (s) => `${r[s].wheelDiameterIn} × ${r[s].wheelWidthIn} in`],
     ["Offset (rim centreline to mounting face)", (s) => offsetText(r[s].offsetMm)],
-    ["Backspacing", (s) => `${len(model[s].backspacing.valueMm, prefs)} to the ${model[s].backspacing.reference === "flange" ? "flange edge" : "bead seat"}`],
+    [
+      "Backspacing",
+      (s) =>
+        `${len(model[s].backspacing.valueMm, prefs)} to the ${model[s].backspacing.reference === "flange" ? "flange edge" : "bead seat"}`,
+    ],
     ["Flange allowance", (s) => len(model[s].flange.allowanceMm, prefs)],
     ["Spacer", (s) => (r[s].spacerMm > 0 ? formatPartThickness(r[s].spacerMm, prefs) : "none")],
     ["Section width on this rim", (s) => len(r[s].sectionWidthMm, prefs)],
@@ -26,7 +43,17 @@ export function CrossSectionTable({ id, r, model, prefs }: { id: string; r: Comp
     ["Reach outboard of the hub face", (s) => len(r[s].outerSwingMm, prefs)],
   ];
   const g = model.groundChangeMm;
-  const limits = model.limits.map((l) => [l.id === "inner-limit" ? "Inner limit (nearest inboard part)" : l.id === "fender-lip" ? "Fender lip (nearest outboard part)" : "Fender line (entered)", `${len(Math.abs(l.x), prefs)} ${l.x < 0 ? "inboard" : "outboard"} of the hub face`] as const);
+  const limits = model.limits.map(
+    (l) =>
+      [
+        l.id === "inner-limit"
+          ? "Inner limit (nearest inboard part)"
+          : l.id === "fender-lip"
+            ? "Fender lip (nearest outboard part)"
+            : "Fender line (entered)",
+        `${len(Math.abs(l.x), prefs)} ${l.x < 0 ? "inboard" : "outboard"} of the hub face`,
+      ] as const,
+  );
   return (
     <div className="sr-only" data-testid="cross-section-table">
       <table>

@@ -13,12 +13,31 @@ export function DatumLines({ model, mmPerPx }: { model: CrossSectionModel; mmPer
   const hub = Math.max(model.current.pad.outerRadiusMm, model.planned.pad.outerRadiusMm) + 15;
   return (
     <g fill="none">
-      <path d={linePath({ x: e.minX, y: model.axleY }, { x: e.maxX, y: model.axleY })} stroke={MUTED} strokeWidth={w(0.75)} strokeDasharray={`${w(12)} ${w(3)} ${w(2)} ${w(3)}`} />
-      <path data-testid="hub-face" d={linePath({ x: 0, y: model.axleY - hub }, { x: 0, y: model.axleY + hub })} stroke={INK} strokeWidth={w(2.5)} />
+      <path
+        d={linePath({ x: e.minX, y: model.axleY }, { x: e.maxX, y: model.axleY })}
+        stroke={MUTED}
+        strokeWidth={w(0.75)}
+        strokeDasharray={`${w(12)} ${w(3)} ${w(2)} ${w(3)}`}
+      />
+      <path
+        data-testid="hub-face"
+        d={linePath({ x: 0, y: model.axleY - hub }, { x: 0, y: model.axleY + hub })}
+        stroke={INK}
+        strokeWidth={w(2.5)}
+      />
       {(["current", "planned"] as const).map((side) => {
         const y = model[side].groundY;
         const st = SIDE_STYLE[side];
-        return <path key={side} data-ground={side} d={linePath({ x: e.minX, y }, { x: e.maxX, y })} stroke={st.stroke} strokeWidth={w(1.5)} strokeDasharray={dashOf(st.dashPx, mmPerPx)} />;
+        return (
+          <path
+            key={side}
+            data-ground={side}
+            d={linePath({ x: e.minX, y }, { x: e.maxX, y })}
+            stroke={st.stroke}
+            strokeWidth={w(1.5)}
+            strokeDasharray={dashOf(st.dashPx, mmPerPx)}
+          />
+        );
       })}
     </g>
   );

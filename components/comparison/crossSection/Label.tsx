@@ -7,7 +7,25 @@ import { r2, sx, sy } from "./svg";
  * under the text (drafting breaks a line at its text), so a crossing extension line never makes
  * a figure unreadable. `rotated`: read bottom to top (the heights at the right).
  */
-export function Label({ id, box, text, fontMm, fill, italic = false, rotated = false, bold = false }: { id: string; box: Box; text: string; fontMm: number; fill: string; italic?: boolean; rotated?: boolean; bold?: boolean }) {
+export function Label({
+  id,
+  box,
+  text,
+  fontMm,
+  fill,
+  italic = false,
+  rotated = false,
+  bold = false,
+}: {
+  id: string;
+  box: Box;
+  text: string;
+  fontMm: number;
+  fill: string;
+  italic?: boolean;
+  rotated?: boolean;
+  bold?: boolean;
+}) {
   // Baseline: the descent above the box's bottom (or its right side, turned), centred in the box.
   const inset = (DESCENT_EM + 0.02) * fontMm;
   const common = {

@@ -7,7 +7,15 @@ import { r2, sy } from "./svg";
  * measured parts, drawn where they are), or the fender line typed in the comparison. Its x is the
  * figure itself in mm, unrounded, so the line sits exactly at the number the reader entered.
  */
-export function LimitLine({ limit, model, mmPerPx }: { limit: CrossSectionModel["limits"][number]; model: CrossSectionModel; mmPerPx: number }) {
+export function LimitLine({
+  limit,
+  model,
+  mmPerPx,
+}: {
+  limit: CrossSectionModel["limits"][number];
+  model: CrossSectionModel;
+  mmPerPx: number;
+}) {
   const e = model.extents;
   const dash = limit.id === "fender-line" ? [3, 4] : [8, 3];
   return (

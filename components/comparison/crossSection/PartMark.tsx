@@ -23,7 +23,13 @@ export function PartMark({ p, mmPerPx }: { p: PlacedPart; mmPerPx: number }) {
     );
   }
   if (p.status === "tight") {
-    return <path d={`${linePath({ x: c.x, y: c.y + s }, { x: c.x + s, y: c.y - s }, { x: c.x - s, y: c.y - s })} Z`} fill="#ffffff" {...common} />;
+    return (
+      <path
+        d={`${linePath({ x: c.x, y: c.y + s }, { x: c.x + s, y: c.y - s }, { x: c.x - s, y: c.y - s })} Z`}
+        fill="#ffffff"
+        {...common}
+      />
+    );
   }
   return <circle cx={sx(c.x)} cy={sy(c.y)} r={r2(s * 0.8)} fill="#ffffff" {...common} />;
 }

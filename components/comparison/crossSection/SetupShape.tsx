@@ -29,7 +29,13 @@ export function SetupShape({ side, s, style, mmPerPx }: { side: Side; s: WheelSe
       {[...s.shapes.disc, ...s.shapes.pad, ...s.shapes.rim].map((o, i) => (
         <path key={`w${i}`} d={pathOf(o)} fill={WHEEL_FILL} strokeWidth={w(1.25)} />
       ))}
-      <path d={linePath(...s.shapes.centreline)} strokeWidth={w(0.75)} strokeDasharray={`${w(10)} ${w(3)} ${w(2)} ${w(3)}`} fill="none" data-centreline={side} />
+      <path
+        d={linePath(...s.shapes.centreline)}
+        strokeWidth={w(0.75)}
+        strokeDasharray={`${w(10)} ${w(3)} ${w(2)} ${w(3)}`}
+        fill="none"
+        data-centreline={side}
+      />
     </g>
   );
 }

@@ -9,5 +9,14 @@ import { linePath, r2 } from "./svg";
  */
 export function SteeringAxisMark({ axis, mmPerPx }: { axis: NonNullable<CrossSectionModel["steeringAxis"]>; mmPerPx: number }) {
   const w = (px: number) => r2(px * mmPerPx);
-  return <path data-testid="steering-axis" d={linePath(axis.bottom, axis.top)} stroke={INK} strokeWidth={w(1.25)} strokeDasharray={`${w(14)} ${w(4)} ${w(3)} ${w(4)}`} fill="none" />;
+  return (
+    <path
+      data-testid="steering-axis"
+      d={linePath(axis.bottom, axis.top)}
+      stroke={INK}
+      strokeWidth={w(1.25)}
+      strokeDasharray={`${w(14)} ${w(4)} ${w(3)} ${w(4)}`}
+      fill="none"
+    />
+  );
 }

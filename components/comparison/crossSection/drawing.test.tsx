@@ -14,7 +14,13 @@ import { DESIGN_WIDTH_PX, type DrawnLimits, buildDrawing } from "./drawing";
  */
 const A: Setup = { tire: "35x12.50R17", wheelDiameterIn: 17, wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 }, spacerMm: 0 };
 const B: Setup = { tire: "285/75R16", wheelDiameterIn: 16, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 0 }, spacerMm: 38 };
-const C: Setup = { tire: "33x12.50R15", wheelDiameterIn: 15, wheelWidthIn: 10, position: { mode: "backspacing", backspacingIn: 3.25, reference: "bead-seat", flangeIn: 0.5 }, spacerMm: 0 };
+const C: Setup = {
+  tire: "33x12.50R15",
+  wheelDiameterIn: 15,
+  wheelWidthIn: 10,
+  position: { mode: "backspacing", backspacingIn: 3.25, reference: "bead-seat", flangeIn: 0.5 },
+  spacerMm: 0,
+};
 const PREFS: DisplayPrefs[] = [
   { units: "imperial", lengths: "decimal" },
   { units: "imperial", lengths: "fraction" },
@@ -25,9 +31,33 @@ const GARAGE: DrawnLimits = {
   innerMm: 187.5,
   outerMm: 127.5,
   parts: [
-    { label: "Lower control arm, front bolt", direction: "inboard", state: "ride-height", distanceMm: 30, measuredWith: stock, predictedMm: 2, status: "tight" },
-    { label: "Flare", direction: "outboard", state: "full-stuff", distanceMm: 20, measuredWith: stock, predictedMm: -38, status: "contact" },
-    { label: "Inner fender liner", direction: "upward", state: "full-stuff", distanceMm: 60, measuredWith: stock, predictedMm: 17, status: "clear" },
+    {
+      label: "Lower control arm, front bolt",
+      direction: "inboard",
+      state: "ride-height",
+      distanceMm: 30,
+      measuredWith: stock,
+      predictedMm: 2,
+      status: "tight",
+    },
+    {
+      label: "Flare",
+      direction: "outboard",
+      state: "full-stuff",
+      distanceMm: 20,
+      measuredWith: stock,
+      predictedMm: -38,
+      status: "contact",
+    },
+    {
+      label: "Inner fender liner",
+      direction: "upward",
+      state: "full-stuff",
+      distanceMm: 60,
+      measuredWith: stock,
+      predictedMm: 17,
+      status: "clear",
+    },
   ],
 };
 
@@ -41,7 +71,16 @@ for (const [name, cur, pla] of [
   ["C → A", C, A],
 ] as const) {
   cases.push([name, { ...DEFAULT_INPUT, current: cur, planned: pla }, null]);
-  cases.push([`${name} with a vehicle, fender line and 12.5° KPI`, { ...DEFAULT_INPUT, current: cur, planned: pla, vehicle: { ...DEFAULT_INPUT.vehicle, kingpinInclinationDeg: 12.5, fenderLineMm: 139.7 } }, GARAGE]);
+  cases.push([
+    `${name} with a vehicle, fender line and 12.5° KPI`,
+    {
+      ...DEFAULT_INPUT,
+      current: cur,
+      planned: pla,
+      vehicle: { ...DEFAULT_INPUT.vehicle, kingpinInclinationDeg: 12.5, fenderLineMm: 139.7 },
+    },
+    GARAGE,
+  ]);
 }
 
 describe(`buildDrawing: no two labels overlap at ${DESIGN_WIDTH_PX} px`, () => {
@@ -52,7 +91,8 @@ describe(`buildDrawing: no two labels overlap at ${DESIGN_WIDTH_PX} px`, () => {
         const { layout } = buildDrawing(r, prefs, limits);
         const hits: string[] = [];
         const ls = layout.labels;
-        for (let i = 0; i < ls.length; i++) for (let j = i + 1; j < ls.length; j++) if (boxesOverlap(ls[i]!.box, ls[j]!.box)) hits.push(`${ls[i]!.id} × ${ls[j]!.id}`);
+        for (let i = 0; i < ls.length; i++)
+          for (let j = i + 1; j < ls.length; j++) if (boxesOverlap(ls[i]!.box, ls[j]!.box)) hits.push(`${ls[i]!.id} × ${ls[j]!.id}`);
         expect(hits, `${prefs.units}/${prefs.lengths}`).toEqual([]);
         expect(ls.length).toBeGreaterThanOrEqual(limits ? 22 : 16);
       }
@@ -72,10 +112,19 @@ describe("buildDrawing: many measured parts", () => {
       predictedMm: 50 - i,
       status,
     }));
-    const d = buildDrawing(computeComparison(DEFAULT_INPUT), { units: "metric", lengths: "decimal" }, { innerMm: null, outerMm: null, parts });
+    const d = buildDrawing(
+      computeComparison(DEFAULT_INPUT),
+      { units: "metric", lengths: "decimal" },
+      { innerMm: null, outerMm: null, parts },
+    );
     expect(d.model.parts.filter((p) => p.at)).toHaveLength(9);
     // contact: P7 (43), P2 (48); tight: P4 (46), P1 (49); clear: P8 (42), P6 (44).
     expect([...d.named].sort()).toEqual(["part-1", "part-2", "part-4", "part-6", "part-7", "part-8"]);
-    expect(d.layout.callouts.filter((c) => c.id.startsWith("part-")).map((c) => c.text).sort()).toEqual(["P1: tight", "P2: contact", "P4: tight", "P6: clear", "P7: contact", "P8: clear"]);
+    expect(
+      d.layout.callouts
+        .filter((c) => c.id.startsWith("part-"))
+        .map((c) => c.text)
+        .sort(),
+    ).toEqual(["P1: tight", "P2: contact", "P4: tight", "P6: clear", "P7: contact", "P8: clear"]);
   });
 });

@@ -55,7 +55,9 @@ export interface Drawing {
 /** How a setup's backspacing is shown: as entered, or to the flange edge (0.5 in allowance) when an offset was entered. */
 function choiceOf(r: ComparisonResult, side: Side): BackspacingChoice {
   const p = r.input[side].position;
-  return p.mode === "backspacing" ? { reference: p.reference, flangeIn: p.flangeIn } : { reference: "flange", flangeIn: r[side].flangeAllowanceIn };
+  return p.mode === "backspacing"
+    ? { reference: p.reference, flangeIn: p.flangeIn }
+    : { reference: "flange", flangeIn: r[side].flangeAllowanceIn };
 }
 
 export function buildDrawing(r: ComparisonResult, prefs: DisplayPrefs, limits?: DrawnLimits | null): Drawing {
@@ -75,8 +77,18 @@ export function buildDrawing(r: ComparisonResult, prefs: DisplayPrefs, limits?: 
   const layout = layoutCrossSection(
     {
       extents: model.extents,
-      dimensions: model.dimensions.map((d) => ({ id: d.id, axis: d.axis, band: d.band, from: d.from, to: d.to, ends: d.ends, text: dimensionText(d, prefs) })),
-      callouts: model.anchors.filter((a) => a.kind !== "part" || named.has(a.id)).map((a) => ({ id: a.id, at: a.at, text: anchorText(a, model) })),
+      dimensions: model.dimensions.map((d) => ({
+        id: d.id,
+        axis: d.axis,
+        band: d.band,
+        from: d.from,
+        to: d.to,
+        ends: d.ends,
+        text: dimensionText(d, prefs),
+      })),
+      callouts: model.anchors
+        .filter((a) => a.kind !== "part" || named.has(a.id))
+        .map((a) => ({ id: a.id, at: a.at, text: anchorText(a, model) })),
       legend: (["current", "planned"] as const).map((side) => ({ id: `legend-${side}`, text: legendText(side, r) })),
     },
     { widthPx: DESIGN_WIDTH_PX, fontPx: FONT_PX },

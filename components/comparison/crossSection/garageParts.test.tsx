@@ -4,18 +4,38 @@ import { predictPoints } from "@/lib/garage/predict";
 import { drawnParts } from "./garageParts";
 
 // 4.5 in of backspacing to the flange on an 8 in wheel: (4.5 − 0.5 − 4) × 25.4 = 0 mm offset (offset.ts, common practice, no source).
-const measured: Setup = { tire: "265/70R17", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "backspacing", backspacingIn: 4.5, reference: "flange", flangeIn: 0.5 }, spacerMm: 0 };
-const planned: Setup = { tire: "35x12.50R17", wheelDiameterIn: 17, wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 }, spacerMm: 0 };
+const measured: Setup = {
+  tire: "265/70R17",
+  wheelDiameterIn: 17,
+  wheelWidthIn: 8,
+  position: { mode: "backspacing", backspacingIn: 4.5, reference: "flange", flangeIn: 0.5 },
+  spacerMm: 0,
+};
+const planned: Setup = {
+  tire: "35x12.50R17",
+  wheelDiameterIn: 17,
+  wheelWidthIn: 9,
+  position: { mode: "offset", offsetMm: -12 },
+  spacerMm: 0,
+};
 
 describe("drawnParts", () => {
   it("pairs each measured point with its prediction, in order, with the setup as the engine takes it", () => {
     const points = [
-      { label: "Frame rail", direction: "inboard" as const, distanceMm: 31.75, suspensionState: "ride-height" as const, measuredSetup: measured },
+      {
+        label: "Frame rail",
+        direction: "inboard" as const,
+        distanceMm: 31.75,
+        suspensionState: "ride-height" as const,
+        measuredSetup: measured,
+      },
       { label: "Flare", direction: "outboard" as const, distanceMm: 20, measuredSetup: measured },
     ];
     const predictions = predictPoints(points, planned, 12.7);
     const parts = drawnParts(points, predictions);
-    expect(parts.map((p) => [p.label, p.state, p.status, p.predictedMm])).toEqual(predictions.map((p, i) => [points[i]!.label, "ride-height", p.status, p.predictedMm]));
+    expect(parts.map((p) => [p.label, p.state, p.status, p.predictedMm])).toEqual(
+      predictions.map((p, i) => [points[i]!.label, "ride-height", p.status, p.predictedMm]),
+    );
     expect(parts[0]!.measuredWith).toEqual({ tire: "265/70R17", wheel: { diameterIn: 17, widthIn: 8, offsetMm: 0 }, spacerMm: 0 });
   });
 

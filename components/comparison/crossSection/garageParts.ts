@@ -24,6 +24,16 @@ export function drawnParts(points: readonly GaragePoint[], predictions: readonly
   return points.flatMap((p, i) => {
     const pr = predictions[i];
     if (!pr) return [];
-    return [{ label: p.label, direction: p.direction, state: p.suspensionState ?? "ride-height", distanceMm: p.distanceMm, measuredWith: toEngineSetup(p.measuredSetup), predictedMm: pr.predictedMm, status: pr.status }];
+    return [
+      {
+        label: p.label,
+        direction: p.direction,
+        state: p.suspensionState ?? "ride-height",
+        distanceMm: p.distanceMm,
+        measuredWith: toEngineSetup(p.measuredSetup),
+        predictedMm: pr.predictedMm,
+        status: pr.status,
+      },
+    ];
   });
 }

@@ -26,4 +26,5 @@ export const WHEEL_FILL = "rgb(163 172 184 / 0.35)";
 export const STATUS_STROKE = { clear: "#1f7a44", tight: "#a86a00", contact: "#c0261b" } as const;
 
 /** A dash pattern in mm for a scale of `mmPerPx`. */
-export const dashOf = (px: number[] | null, mmPerPx: number) => (px ? px.map((v) => Math.round(v * mmPerPx * 100) / 100).join(" ") : undefined);
+export const dashOf = (px: number[] | null, mmPerPx: number) =>
+  px ? px.map((v) => Math.round(v * mmPerPx * 100) / 100).join(" ") : undefined;

@@ -86,6 +86,9 @@ export function describe(r: ComparisonResult, m: CrossSectionModel, prefs: Displ
     return `${SIDE_WORD[side]}: ${f.tireText} on a ${f.wheelDiameterIn} × ${f.wheelWidthIn} in wheel, offset ${offsetText(f.offsetMm)}, backspacing ${bs}${f.spacerMm > 0 ? `, on a ${formatPartThickness(f.spacerMm, prefs)} spacer` : ""}; the tire reaches ${len(f.innerSwingMm, prefs)} inboard and ${len(f.outerSwingMm, prefs)} outboard of the hub face and is ${len(f.overallDiameterMm, prefs)} tall.`;
   };
   const g = m.groundChangeMm;
-  const ground = g === 0 ? "Ground clearance is unchanged." : `The planned setup sits ${len(Math.abs(g), prefs)} ${g > 0 ? "higher" : "lower"} (ground clearance ${signedLen(g, prefs)}).`;
+  const ground =
+    g === 0
+      ? "Ground clearance is unchanged."
+      : `The planned setup sits ${len(Math.abs(g), prefs)} ${g > 0 ? "higher" : "lower"} (ground clearance ${signedLen(g, prefs)}).`;
   return `${one("current")} ${one("planned")} ${ground}`;
 }

@@ -17,9 +17,11 @@ const SAME: SetupInput = { tire: "265/70R17 113T", wheel: { diameterIn: 17, widt
 /** The same setup on both sides: nothing changes, so only the standing load note is found. */
 const BASE = compareSetups(SAME, SAME);
 const changed = (patch: Partial<SetupComparison>): SetupComparison => ({ ...BASE, ...patch });
-const gearing = (axleRatio: number, ratioToRestore: number, suggestedRatio: number) => changed({ gearing: { ...BASE.gearing, axleRatio, ratioToRestore, suggestedRatio } });
+const gearing = (axleRatio: number, ratioToRestore: number, suggestedRatio: number) =>
+  changed({ gearing: { ...BASE.gearing, axleRatio, ratioToRestore, suggestedRatio } });
 const withPlanned = (planned: Partial<SetupInput>) => compareSetups(SAME, { ...SAME, ...planned });
-const of = (kind: FindingKind, c: SetupComparison, context: AssessContext = {}): Finding[] => assessChange(c, context).filter((f) => f.kind === kind);
+const of = (kind: FindingKind, c: SetupComparison, context: AssessContext = {}): Finding[] =>
+  assessChange(c, context).filter((f) => f.kind === kind);
 
 /**
  * One case per kind: where the rule stops short of a finding, where it starts, and the source of
@@ -34,11 +36,27 @@ const CASES: Record<Exclude<FindingKind, "load">, Case> = {
   // Measuring rim of 265/70: 265 × 0.75 / 25.4 = 7.82 → 8 in (factor 0.75 for a 70 series, from
   // memory of the UN R30/ETRTO rule); ± 1 in (common practice, no source) gives 7–9 in. Rims come
   // in half inches.
-  "rim-width": { source: /common practice, no source/, none: () => of("rim-width", withPlanned({ wheel: { ...SAME.wheel, widthIn: 9 } })), found: () => of("rim-width", withPlanned({ wheel: { ...SAME.wheel, widthIn: 9.5 } })) },
+  "rim-width": {
+    source: /common practice, no source/,
+    none: () => of("rim-width", withPlanned({ wheel: { ...SAME.wheel, widthIn: 9 } })),
+    found: () => of("rim-width", withPlanned({ wheel: { ...SAME.wheel, widthIn: 9.5 } })),
+  },
   // Past the fender line the user measured (their figure): at the line is not past it.
-  poke: { source: /fender-line measurement/, none: () => of("poke", BASE, { fenderLineMm: BASE.planned.outerSwingMm }), found: () => of("poke", BASE, { fenderLineMm: BASE.planned.outerSwingMm - 0.1 }) },
-  "outer-reach": { source: /common practice, no source/, none: () => of("outer-reach", changed({ outerPokeChangeMm: OUTER_REACH_WARN_MM })), found: () => of("outer-reach", changed({ outerPokeChangeMm: OUTER_REACH_WARN_MM + 0.1 })) },
-  scrub: { source: /common practice, no source/, none: () => of("scrub", changed({ scrubRadiusChangeMm: SCRUB_WARN_MM })), found: () => of("scrub", changed({ scrubRadiusChangeMm: SCRUB_WARN_MM + 0.1 })) },
+  poke: {
+    source: /fender-line measurement/,
+    none: () => of("poke", BASE, { fenderLineMm: BASE.planned.outerSwingMm }),
+    found: () => of("poke", BASE, { fenderLineMm: BASE.planned.outerSwingMm - 0.1 }),
+  },
+  "outer-reach": {
+    source: /common practice, no source/,
+    none: () => of("outer-reach", changed({ outerPokeChangeMm: OUTER_REACH_WARN_MM })),
+    found: () => of("outer-reach", changed({ outerPokeChangeMm: OUTER_REACH_WARN_MM + 0.1 })),
+  },
+  scrub: {
+    source: /common practice, no source/,
+    none: () => of("scrub", changed({ scrubRadiusChangeMm: SCRUB_WARN_MM })),
+    found: () => of("scrub", changed({ scrubRadiusChangeMm: SCRUB_WARN_MM + 0.1 })),
+  },
   // 3 % itself has no exact binary value ((1.03 − 1) × 100 = 3.0000000000000027): either side of it.
   speedometer: {
     source: /common practice, no source/,
@@ -46,18 +64,56 @@ const CASES: Record<Exclude<FindingKind, "load">, Case> = {
     found: () => of("speedometer", changed({ speedometer: { ...BASE.speedometer, ratio: 1 + (SPEEDO_WARN_PCT + 0.01) / 100 } })),
   },
   // 4.20 restores a 4.00 axle: (4.2 / 4 − 1) × 100 = 5 %; 4.19 is 4.75 %.
-  regear: { source: /common practice, no source/, none: () => of("regear", gearing(4, 4.19, 4.1)), found: () => of("regear", gearing(4, 4.2, 4.1)) },
+  regear: {
+    source: /common practice, no source/,
+    none: () => of("regear", gearing(4, 4.19, 4.1)),
+    found: () => of("regear", gearing(4, 4.2, 4.1)),
+  },
   // Any reach further inboard is a note; the caution threshold has its own case below.
-  "inner-reach": { source: /engine/, none: () => of("inner-reach", changed({ innerClearanceChangeMm: 0 })), found: () => of("inner-reach", changed({ innerClearanceChangeMm: -0.1 })) },
-  diameter: { source: /common practice, no source/, none: () => of("diameter", changed({ diameterChangeMm: DIAMETER_CHANGE_WARN_MM })), found: () => of("diameter", changed({ diameterChangeMm: DIAMETER_CHANGE_WARN_MM + 0.1 })) },
-  alignment: { source: /common practice, no source/, none: () => of("alignment", changed({ diameterChangeMm: ALIGNMENT_DIAMETER_MM - 0.1 })), found: () => of("alignment", changed({ diameterChangeMm: ALIGNMENT_DIAMETER_MM })) },
-  spacer: { source: /common practice, no source/i, none: () => of("spacer", withPlanned({ spacerMm: 0 })), found: () => of("spacer", withPlanned({ spacerMm: 0.5 })) },
+  "inner-reach": {
+    source: /engine/,
+    none: () => of("inner-reach", changed({ innerClearanceChangeMm: 0 })),
+    found: () => of("inner-reach", changed({ innerClearanceChangeMm: -0.1 })),
+  },
+  diameter: {
+    source: /common practice, no source/,
+    none: () => of("diameter", changed({ diameterChangeMm: DIAMETER_CHANGE_WARN_MM })),
+    found: () => of("diameter", changed({ diameterChangeMm: DIAMETER_CHANGE_WARN_MM + 0.1 })),
+  },
+  alignment: {
+    source: /common practice, no source/,
+    none: () => of("alignment", changed({ diameterChangeMm: ALIGNMENT_DIAMETER_MM - 0.1 })),
+    found: () => of("alignment", changed({ diameterChangeMm: ALIGNMENT_DIAMETER_MM })),
+  },
+  spacer: {
+    source: /common practice, no source/i,
+    none: () => of("spacer", withPlanned({ spacerMm: 0 })),
+    found: () => of("spacer", withPlanned({ spacerMm: 0.5 })),
+  },
   // The vehicle's margin (its default 1/2 in = 12.7 mm is common practice, no source): an upward
   // gap measured with the same setup is predicted unchanged; at the margin it is clear.
   clearance: {
     source: /margin you set/,
-    none: () => of("clearance", BASE, { points: [{ id: "p", label: "Fender", prediction: predictClearance({ direction: "upward", distanceMm: 12.7, measuredWith: SAME }, SAME, { marginMm: 12.7 }) }] }),
-    found: () => of("clearance", BASE, { points: [{ id: "p", label: "Fender", prediction: predictClearance({ direction: "upward", distanceMm: 12.6, measuredWith: SAME }, SAME, { marginMm: 12.7 }) }] }),
+    none: () =>
+      of("clearance", BASE, {
+        points: [
+          {
+            id: "p",
+            label: "Fender",
+            prediction: predictClearance({ direction: "upward", distanceMm: 12.7, measuredWith: SAME }, SAME, { marginMm: 12.7 }),
+          },
+        ],
+      }),
+    found: () =>
+      of("clearance", BASE, {
+        points: [
+          {
+            id: "p",
+            label: "Fender",
+            prediction: predictClearance({ direction: "upward", distanceMm: 12.6, measuredWith: SAME }, SAME, { marginMm: 12.7 }),
+          },
+        ],
+      }),
   },
 };
 
@@ -84,14 +140,20 @@ describe("assessChange: levels and figures", () => {
   it("rim width: the planned wheel is a caution, the current one a note; 7–9 in for 265/70R17", () => {
     const both = compareSetups({ ...SAME, wheel: { ...SAME.wheel, widthIn: 6.5 } }, { ...SAME, wheel: { ...SAME.wheel, widthIn: 9.5 } });
     const found = findingsOf(assessChange(both, {}), "rim-width");
-    expect(found.map((f) => [f.setup, f.level])).toEqual([["current", "note"], ["planned", "caution"]]);
+    expect(found.map((f) => [f.setup, f.level])).toEqual([
+      ["current", "note"],
+      ["planned", "caution"],
+    ]);
     expect(found[0]!.figures).toMatchObject({ widthIn: 6.5, minIn: 7, maxIn: 9, measuringRimIn: 8 });
     expect(found[1]!.figures).toMatchObject({ widthIn: 9.5, minIn: 7, maxIn: 9, measuringRimIn: 8 });
   });
 
   it("poke: how far past the line, the planned tire first", () => {
     const found = findingsOf(assessChange(BASE, { fenderLineMm: BASE.planned.outerSwingMm - 10 }), "poke");
-    expect(found.map((f) => [f.setup, f.level])).toEqual([["planned", "caution"], ["current", "note"]]);
+    expect(found.map((f) => [f.setup, f.level])).toEqual([
+      ["planned", "caution"],
+      ["current", "note"],
+    ]);
     expect(found[0]!.figures.pastMm).toBeCloseTo(10, 9);
   });
 
@@ -135,7 +197,11 @@ describe("assessChange: levels and figures", () => {
   });
 
   it("clearance: tight below the margin is a note, contact at 0 mm a caution, with the point's figures", () => {
-    const point = (distanceMm: number) => ({ id: "p1", label: "Bump stop", prediction: predictClearance({ direction: "upward", distanceMm, measuredWith: SAME }, SAME, { marginMm: 12.7 }) });
+    const point = (distanceMm: number) => ({
+      id: "p1",
+      label: "Bump stop",
+      prediction: predictClearance({ direction: "upward", distanceMm, measuredWith: SAME }, SAME, { marginMm: 12.7 }),
+    });
     const [tight] = findingsOf(assessChange(BASE, { points: [point(5)] }), "clearance");
     expect(tight?.level).toBe("note");
     expect(tight?.figures).toMatchObject({ pointId: "p1", label: "Bump stop", status: "tight", predictedMm: 5, marginMm: 12.7 });

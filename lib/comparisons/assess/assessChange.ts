@@ -66,7 +66,13 @@ function rimWidth(g: SetupGeometry, side: Side): FindingOf<"rim-width"> | null {
     kind: "rim-width",
     level: side === "planned" ? "caution" : "note",
     setup: side,
-    figures: { widthIn: g.wheel.widthIn, minIn: g.rimWidthMinIn, maxIn: g.rimWidthMaxIn, measuringRimIn: g.measuringRimWidthIn, tire: g.tire.text },
+    figures: {
+      widthIn: g.wheel.widthIn,
+      minIn: g.rimWidthMinIn,
+      maxIn: g.rimWidthMaxIn,
+      measuringRimIn: g.measuringRimWidthIn,
+      tire: g.tire.text,
+    },
     basis: `Measuring rim ${g.measuringRimWidthIn} in ± ${RIM_WIDTH_TOLERANCE_IN} in (measuring rim factor from memory of the UN R30/ETRTO rule; the ± ${RIM_WIDTH_TOLERANCE_IN} in band is common practice, no source).`,
   };
 }
@@ -104,7 +110,13 @@ export function diameterChange(changeMm: number): FindingOf<"diameter"> | null {
 
 function spacer(g: SetupGeometry, side: Side): FindingOf<"spacer"> | null {
   if (!(g.spacerMm > 0)) return null;
-  return { kind: "spacer", level: "note", setup: side, figures: { spacerMm: g.spacerMm }, basis: "Common practice, no source; the spacer and wheel makers' instructions win." };
+  return {
+    kind: "spacer",
+    level: "note",
+    setup: side,
+    figures: { spacerMm: g.spacerMm },
+    basis: "Common practice, no source; the spacer and wheel makers' instructions win.",
+  };
 }
 
 function clearance(p: PointPrediction): FindingOf<"clearance"> | null {
@@ -125,7 +137,8 @@ function clearance(p: PointPrediction): FindingOf<"clearance"> | null {
       marginMm: x.marginMm,
       shortfallMm: x.shortfallMm,
     },
-    basis: "Your measurement carried to the planned setup by the engine (lib/fitment/clearance.ts), against the margin you set: contact at 0 mm or less, tight below the margin.",
+    basis:
+      "Your measurement carried to the planned setup by the engine (lib/fitment/clearance.ts), against the margin you set: contact at 0 mm or less, tight below the margin.",
   };
 }
 
@@ -143,7 +156,8 @@ function load(g: SetupGeometry): FindingOf<"load"> {
       maxPressurePsi: info?.maxPressurePsi ?? null,
       maxPressureKpa: info?.maxPressureKpa ?? null,
     },
-    basis: "Load index per tire from the ISO 4000-1 table; the load range's highest pressure from memory of TRA practice (the sidewall marking wins).",
+    basis:
+      "Load index per tire from the ISO 4000-1 table; the load range's highest pressure from memory of TRA practice (the sidewall marking wins).",
   };
 }
 
@@ -203,7 +217,13 @@ export function assessChange(c: SetupComparison, context: AssessContext): Findin
       kind: "regear",
       level: "caution",
       setup: null,
-      figures: { axleRatio: g.axleRatio, effectiveRatio: g.effectiveRatio, ratioToRestore: g.ratioToRestore, suggestedRatio: g.suggestedRatio, gapPct },
+      figures: {
+        axleRatio: g.axleRatio,
+        effectiveRatio: g.effectiveRatio,
+        ratioToRestore: g.ratioToRestore,
+        suggestedRatio: g.suggestedRatio,
+        gapPct,
+      },
       basis: `Restoring ratio ${g.ratioToRestore.toFixed(2)} is ${Math.abs(gapPct).toFixed(1)} % from the axle ratio; advised from ${REGEAR_WARN_PCT} % (common practice, no source). Suggested = nearest common ratio.`,
     });
   }

@@ -58,12 +58,17 @@ export async function processImage(bytes: Buffer): Promise<ProcessedImage> {
     throw new ImageRejected("That image could not be read; it may be damaged. Try saving it again as JPEG, PNG or WebP.");
   }
   const fmt = meta.format;
-  const matches = (type === "image/jpeg" && fmt === "jpeg") || (type === "image/png" && fmt === "png") || (type === "image/webp" && fmt === "webp");
+  const matches =
+    (type === "image/jpeg" && fmt === "jpeg") || (type === "image/png" && fmt === "png") || (type === "image/webp" && fmt === "webp");
   if (!matches) throw new ImageRejected("That file's contents do not match a JPEG, PNG or WebP image.");
   try {
     // sharp writes no metadata unless asked (withMetadata / keepExif): EXIF and GPS are dropped here.
     const encoded =
-      type === "image/jpeg" ? img.jpeg({ quality: 88, mozjpeg: true }) : type === "image/png" ? img.png({ compressionLevel: 8 }) : img.webp({ quality: 88 });
+      type === "image/jpeg"
+        ? img.jpeg({ quality: 88, mozjpeg: true })
+        : type === "image/png"
+          ? img.png({ compressionLevel: 8 })
+          : img.webp({ quality: 88 });
     const { data: full, info } = await encoded.toBuffer({ resolveWithObject: true });
     const thumb = await sharp(full).resize(THUMB_SIZE_PX, THUMB_SIZE_PX, { fit: "cover" }).webp({ quality: 80 }).toBuffer();
     return { type, full, thumb, width: info.width, height: info.height };

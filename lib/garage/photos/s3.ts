@@ -85,7 +85,11 @@ export function s3PhotoStore(settings: S3Settings = s3Settings(), s3: S3Client =
         if (!r.Body) return null;
         return { body: await r.Body.transformToByteArray(), contentType: r.ContentType ?? "application/octet-stream" };
       } catch (e) {
-        if ((e as { name?: string }).name === "NoSuchKey" || (e as { $metadata?: { httpStatusCode?: number } }).$metadata?.httpStatusCode === 404) return null;
+        if (
+          (e as { name?: string }).name === "NoSuchKey" ||
+          (e as { $metadata?: { httpStatusCode?: number } }).$metadata?.httpStatusCode === 404
+        )
+          return null;
         throw e;
       }
     },
@@ -109,7 +113,9 @@ export function s3PhotoStore(settings: S3Settings = s3Settings(), s3: S3Client =
       let ContinuationToken: string | undefined;
       do {
         const page = await client.send(new ListObjectsV2Command({ Bucket, Prefix: prefix, ContinuationToken, MaxKeys: 1000 }));
-        const objects = (page.Contents ?? []).filter((o) => o.Key && o.LastModified).map((o) => ({ key: o.Key!, lastModified: o.LastModified! }));
+        const objects = (page.Contents ?? [])
+          .filter((o) => o.Key && o.LastModified)
+          .map((o) => ({ key: o.Key!, lastModified: o.LastModified! }));
         if (objects.length) yield objects;
         ContinuationToken = page.IsTruncated ? page.NextContinuationToken : undefined;
       } while (ContinuationToken);

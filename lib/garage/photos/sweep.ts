@@ -22,7 +22,11 @@ export interface SweepResult {
   deleted: string[];
 }
 
-export async function sweepOrphanPhotos(db: Knex, store: PhotoStore, opts: { graceMinutes?: number; now?: Date } = {}): Promise<SweepResult> {
+export async function sweepOrphanPhotos(
+  db: Knex,
+  store: PhotoStore,
+  opts: { graceMinutes?: number; now?: Date } = {},
+): Promise<SweepResult> {
   const cutoff = (opts.now ?? new Date()).getTime() - (opts.graceMinutes ?? ORPHAN_GRACE_MINUTES) * 60_000;
   const result: SweepResult = { scanned: 0, deleted: [] };
   for await (const page of store.list(PHOTO_PREFIX)) {

@@ -17,7 +17,10 @@ export function trustClientAddressHeader(): void {
 
 /** "::ffff:203.0.113.9" → "203.0.113.9"; brackets and zone ids dropped. */
 function normalize(address: string): string {
-  const a = address.trim().replace(/^\[|\]$/g, "").replace(/%.*$/, "");
+  const a = address
+    .trim()
+    .replace(/^\[|\]$/g, "")
+    .replace(/%.*$/, "");
   const mapped = /^::ffff:(\d+\.\d+\.\d+\.\d+)$/i.exec(a);
   return mapped ? mapped[1]! : a.toLowerCase();
 }
@@ -34,7 +37,8 @@ export function trustedProxies(list: string | undefined = process.env.TRUSTED_PR
     const [addr, bits] = entry.split("/");
     const ip = normalize(addr ?? "");
     const family = isIP(ip);
-    if (!family || (bits !== undefined && !/^\d{1,3}$/.test(bits))) throw new Error(`TRUSTED_PROXIES: “${entry}” is not an IP address or CIDR range.`);
+    if (!family || (bits !== undefined && !/^\d{1,3}$/.test(bits)))
+      throw new Error(`TRUSTED_PROXIES: “${entry}” is not an IP address or CIDR range.`);
     const type = family === 6 ? "ipv6" : "ipv4";
     if (bits === undefined) block.addAddress(ip, type);
     else block.addSubnet(ip, Number(bits), type);

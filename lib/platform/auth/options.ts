@@ -42,7 +42,14 @@ export const authOptions: NextAuthOptions = {
           throw new Error("That e-mail address and password do not match an account.");
         }
         await clearAttempts(db, attempt);
-        return { id: user.id, email: user.email, name: user.name, role: user.role, shopId: user.shop_id, sessionVersion: user.session_version };
+        return {
+          id: user.id,
+          email: user.email,
+          name: user.name,
+          role: user.role,
+          shopId: user.shop_id,
+          sessionVersion: user.session_version,
+        };
       },
     }),
   ],
@@ -83,7 +90,9 @@ export const authOptions: NextAuthOptions = {
     async signOut({ token }) {
       if (!token?.uid || !token.sid) return;
       const exp = typeof token.exp === "number" ? new Date(token.exp * 1000) : new Date(Date.now() + SESSION_MAX_AGE * 1000);
-      await revokeSession(db, token.uid, token.sid, exp).catch((e: unknown) => console.error("could not revoke a session at sign-out:", (e as Error).message));
+      await revokeSession(db, token.uid, token.sid, exp).catch((e: unknown) =>
+        console.error("could not revoke a session at sign-out:", (e as Error).message),
+      );
     },
   },
 };

@@ -11,7 +11,16 @@ describe("safeLocalPath (the sign-in page's callbackUrl)", () => {
     // The security review's two findings, as the page receives them (already percent-decoded).
     expect(safeLocalPath("/\\evil.example/phish")).toBe("/account");
     expect(safeLocalPath("/\t/evil.example/phish")).toBe("/account");
-    for (const raw of ["//evil.example", "https://evil.example/", "/\n/evil.example", "/\r\n/evil.example", "\\\\evil.example", " /evil", "javascript:alert(1)", "/%2F%2Fevil.example"]) {
+    for (const raw of [
+      "//evil.example",
+      "https://evil.example/",
+      "/\n/evil.example",
+      "/\r\n/evil.example",
+      "\\\\evil.example",
+      " /evil",
+      "javascript:alert(1)",
+      "/%2F%2Fevil.example",
+    ]) {
       const out = safeLocalPath(raw);
       expect(new URL(out, "https://hubface.test").host, raw).toBe("hubface.test");
     }

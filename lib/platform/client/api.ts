@@ -6,7 +6,10 @@ export interface ApiFailure {
 }
 
 export class ApiError extends Error {
-  constructor(public readonly status: number, public readonly body: ApiFailure) {
+  constructor(
+    public readonly status: number,
+    public readonly body: ApiFailure,
+  ) {
     super(body.error);
   }
 }
@@ -39,12 +42,17 @@ export async function api<T>(url: string, init: { method?: string; body?: unknow
     throw new ApiError(0, { error: "Hubface could not be reached. Check your connection and try again." });
   }
   const data = (await res.json().catch(() => ({}))) as T & Partial<ApiFailure>;
-  if (!res.ok) throw new ApiError(res.status, { error: data.error ?? `The request failed (${res.status}).`, fieldErrors: data.fieldErrors });
+  if (!res.ok)
+    throw new ApiError(res.status, { error: data.error ?? `The request failed (${res.status}).`, fieldErrors: data.fieldErrors });
   return data;
 }
 
 /** Puts a server's field errors onto the matching form fields; returns what had no field. */
-export function applyFieldErrors<T extends FieldValues>(error: unknown, setError: UseFormSetError<T>, fields: readonly string[]): string | null {
+export function applyFieldErrors<T extends FieldValues>(
+  error: unknown,
+  setError: UseFormSetError<T>,
+  fields: readonly string[],
+): string | null {
   if (!(error instanceof ApiError)) return "Something went wrong. Try again.";
   let unplaced: string | null = null;
   for (const [key, messages] of Object.entries(error.body.fieldErrors ?? {})) {

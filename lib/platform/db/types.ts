@@ -62,7 +62,16 @@ export interface StaffInviteRow {
 
 export const CATALOG_KINDS = ["tire", "wheel", "service"] as const;
 export type CatalogKind = (typeof CATALOG_KINDS)[number];
-export const SERVICE_TYPES = ["mount_balance", "beadlock_assembly", "valve_stem", "tpms", "alignment", "fender_trim", "disposal", "other"] as const;
+export const SERVICE_TYPES = [
+  "mount_balance",
+  "beadlock_assembly",
+  "valve_stem",
+  "tpms",
+  "alignment",
+  "fender_trim",
+  "disposal",
+  "other",
+] as const;
 export type ServiceType = (typeof SERVICE_TYPES)[number];
 export const SERVICE_UNITS = ["per_wheel", "per_vehicle", "per_hour"] as const;
 export type ServiceUnit = (typeof SERVICE_UNITS)[number];

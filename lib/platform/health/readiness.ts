@@ -21,7 +21,12 @@ async function timed(what: string, fn: () => Promise<unknown>): Promise<CheckRes
   const started = performance.now();
   let timer: NodeJS.Timeout | undefined;
   try {
-    await Promise.race([fn(), new Promise((_, reject) => (timer = setTimeout(() => reject(new Error(`${what} did not answer within ${TIMEOUT_MS / 1000} s`)), TIMEOUT_MS)))]);
+    await Promise.race([
+      fn(),
+      new Promise(
+        (_, reject) => (timer = setTimeout(() => reject(new Error(`${what} did not answer within ${TIMEOUT_MS / 1000} s`)), TIMEOUT_MS)),
+      ),
+    ]);
     return { status: "ok", ms: Math.round((performance.now() - started) * 100) / 100 };
   } catch (error) {
     return { status: "down", ms: Math.round(performance.now() - started), message: (error as Error).message.split("\n")[0]!.slice(0, 200) };

@@ -17,7 +17,10 @@ export class DependencyUnavailableError extends Error {
   override readonly name = "DependencyUnavailableError";
   /** What the person is told. */
   readonly publicMessage: string;
-  constructor(readonly dependency: Dependency, cause: unknown) {
+  constructor(
+    readonly dependency: Dependency,
+    cause: unknown,
+  ) {
     super(`${dependency} unavailable: ${(cause as Error | null)?.message ?? String(cause)}`, { cause });
     this.publicMessage = MESSAGE[dependency];
   }
@@ -28,13 +31,29 @@ export function isDependencyUnavailable(error: unknown): error is DependencyUnav
   return (error as { name?: string } | null)?.name === "DependencyUnavailableError";
 }
 
-const NETWORK_CODES = new Set(["ECONNREFUSED", "ECONNRESET", "ETIMEDOUT", "ENOTFOUND", "EAI_AGAIN", "EHOSTUNREACH", "ENETUNREACH", "EPIPE", "ECONNECTION", "ESOCKET", "EDNS"]);
+const NETWORK_CODES = new Set([
+  "ECONNREFUSED",
+  "ECONNRESET",
+  "ETIMEDOUT",
+  "ENOTFOUND",
+  "EAI_AGAIN",
+  "EHOSTUNREACH",
+  "ENETUNREACH",
+  "EPIPE",
+  "ECONNECTION",
+  "ESOCKET",
+  "EDNS",
+]);
 
 /** True for an error that means the service could not be reached (no answer), rather than an answer refusing the request. */
 export function isNetworkFailure(error: unknown): boolean {
   const e = error as { code?: string; errno?: string; name?: string; message?: string; cause?: unknown } | null;
   if (!e) return false;
   if ((e.code && NETWORK_CODES.has(e.code)) || (e.errno && NETWORK_CODES.has(e.errno))) return true;
-  if (e.name === "TimeoutError" || /ECONNREFUSED|ECONNRESET|ETIMEDOUT|socket hang up|Greeting never received|Connection timeout/i.test(e.message ?? "")) return true;
+  if (
+    e.name === "TimeoutError" ||
+    /ECONNREFUSED|ECONNRESET|ETIMEDOUT|socket hang up|Greeting never received|Connection timeout/i.test(e.message ?? "")
+  )
+    return true;
   return e.cause !== undefined && e.cause !== error && isNetworkFailure(e.cause);
 }

@@ -4,7 +4,8 @@ import { forgotPasswordSchema, resetPasswordSchema, roleChangeSchema, signInSche
 import { fallbackMessage, fieldPlace, withRows } from "./errors";
 
 /** zod 4's own English wording, which must never reach a person. */
-const VALIDATOR_WORDING = /Invalid input|expected \w+, received|Too (small|big)|Invalid (option|UUID|string|email|format)|Unrecognized key|>=|<=/;
+const VALIDATOR_WORDING =
+  /Invalid input|expected \w+, received|Too (small|big)|Invalid (option|UUID|string|email|format)|Unrecognized key|>=|<=/;
 
 describe("field names in words", () => {
   it("says where a field sits, rows counted from 1", () => {
@@ -22,17 +23,35 @@ describe("fallback messages for what a schema left unsaid", () => {
 
   it("name the field in words and never echo the validator", () => {
     const cases: [Parameters<typeof fallbackMessage>[0], string][] = [
-      [{ code: "invalid_type", expected: "number", input: "x", path: ["lines", 8, "discountCents"] }, "Line 9: enter the discount as a number."],
+      [
+        { code: "invalid_type", expected: "number", input: "x", path: ["lines", 8, "discountCents"] },
+        "Line 9: enter the discount as a number.",
+      ],
       [{ code: "invalid_type", expected: "string", input: undefined, path: ["name"] }, "Enter the name."],
       [{ code: "invalid_type", expected: "null", input: "s", path: ["vehicleId"] }, "Leave the vehicle empty."],
       [{ code: "invalid_type", expected: "boolean", input: "yes", path: ["taxable"] }, "Choose yes or no for the taxable."],
-      [{ code: "too_small", origin: "number", minimum: 1, inclusive: true, input: 0, path: ["lines", 0, "quantity"] }, "Line 1: the quantity must be at least 1."],
+      [
+        { code: "too_small", origin: "number", minimum: 1, inclusive: true, input: 0, path: ["lines", 0, "quantity"] },
+        "Line 1: the quantity must be at least 1.",
+      ],
       [{ code: "too_small", origin: "string", minimum: 1, input: "", path: ["description"] }, "Enter the description."],
       [{ code: "too_big", origin: "string", maximum: 200, input: "…", path: ["notes"] }, "Use at most 200 characters for the notes."],
-      [{ code: "too_big", origin: "number", maximum: 100, inclusive: false, path: ["depositPct"] }, "The deposit (%) must be less than 100."],
-      [{ code: "invalid_format", format: "uuid", input: "x", path: ["customerId"] }, "The customer does not point to anything Hubface knows."],
-      [{ code: "invalid_format", format: "email", input: "x", path: ["email"] }, "Enter an e-mail address like name@example.com for the email."],
-      [{ code: "invalid_value", values: ["member", "shop_staff", "admin"], input: "x", path: ["role"] }, "Choose the role: member, shop staff or admin."],
+      [
+        { code: "too_big", origin: "number", maximum: 100, inclusive: false, path: ["depositPct"] },
+        "The deposit (%) must be less than 100.",
+      ],
+      [
+        { code: "invalid_format", format: "uuid", input: "x", path: ["customerId"] },
+        "The customer does not point to anything Hubface knows.",
+      ],
+      [
+        { code: "invalid_format", format: "email", input: "x", path: ["email"] },
+        "Enter an e-mail address like name@example.com for the email.",
+      ],
+      [
+        { code: "invalid_value", values: ["member", "shop_staff", "admin"], input: "x", path: ["role"] },
+        "Choose the role: member, shop staff or admin.",
+      ],
       [{ code: "unrecognized_keys", path: [] }, "The request has a field Hubface does not take; reload the page and try again."],
       [{ code: "custom", path: ["input", "current", "offsetMm"] }, "Check the current offset (mm)."],
     ];
@@ -47,7 +66,16 @@ describe("fallback messages for what a schema left unsaid", () => {
       kind: z.enum(["tire", "wheel"]),
       id: z.uuid(),
     });
-    const bad = { name: "", lines: [{ quantity: 1, taxable: true }, { quantity: 0.5, taxable: "no" }], vehicleId: "v", kind: "rim", id: "x" };
+    const bad = {
+      name: "",
+      lines: [
+        { quantity: 1, taxable: true },
+        { quantity: 0.5, taxable: "no" },
+      ],
+      vehicleId: "v",
+      kind: "rim",
+      id: "x",
+    };
     const plain = schema.safeParse(bad);
     expect(plain.error!.issues.some((i) => VALIDATOR_WORDING.test(i.message))).toBe(true); // what zod says by itself
     const human = schema.safeParse(bad, { error: (issue) => fallbackMessage(issue as never) });
@@ -63,7 +91,13 @@ describe("fallback messages for what a schema left unsaid", () => {
   });
 
   it("puts the row in front of a schema's own message about a row", () => {
-    expect(withRows({ "lines.8.discount": ["A line's discount cannot exceed the line's amount."], name: ["Enter a name."], "lines.2.sku": ["Line 3 needs a SKU."] })).toEqual({
+    expect(
+      withRows({
+        "lines.8.discount": ["A line's discount cannot exceed the line's amount."],
+        name: ["Enter a name."],
+        "lines.2.sku": ["Line 3 needs a SKU."],
+      }),
+    ).toEqual({
       "lines.8.discount": ["Line 9: A line's discount cannot exceed the line's amount."],
       name: ["Enter a name."],
       "lines.2.sku": ["Line 3 needs a SKU."],
@@ -77,8 +111,11 @@ describe("account forms", () => {
     for (const schema of [signUpSchema, signInSchema, forgotPasswordSchema, resetPasswordSchema, roleChangeSchema]) {
       const result = schema.safeParse(wrong);
       expect(result.success).toBe(false);
-      for (const issue of result.error!.issues) expect(issue.message, `${issue.path.join(".")}: ${issue.message}`).not.toMatch(VALIDATOR_WORDING);
+      for (const issue of result.error!.issues)
+        expect(issue.message, `${issue.path.join(".")}: ${issue.message}`).not.toMatch(VALIDATOR_WORDING);
     }
-    expect(resetPasswordSchema.safeParse({ token: "x".repeat(43), password: "long enough pw", confirm: undefined }).error!.issues[0]!.message).toBe("Type the new password again.");
+    expect(
+      resetPasswordSchema.safeParse({ token: "x".repeat(43), password: "long enough pw", confirm: undefined }).error!.issues[0]!.message,
+    ).toBe("Type the new password again.");
   });
 });

@@ -26,7 +26,25 @@ export const forbidden = () => new HttpError(403, "Your account's role does not 
  */
 
 /** Unit suffixes of the API's field names, as a person writes them ("" = say nothing). */
-const UNITS: Record<string, string> = { mm: "mm", in: "in", deg: "°", pct: "%", mph: "mph", kmh: "km/h", psi: "psi", kpa: "kPa", nm: "N·m", ftlb: "ft·lb", kg: "kg", lb: "lb", lbs: "lb", cents: "", bp: "", id: "", ids: "" };
+const UNITS: Record<string, string> = {
+  mm: "mm",
+  in: "in",
+  deg: "°",
+  pct: "%",
+  mph: "mph",
+  kmh: "km/h",
+  psi: "psi",
+  kpa: "kPa",
+  nm: "N·m",
+  ftlb: "ft·lb",
+  kg: "kg",
+  lb: "lb",
+  lbs: "lb",
+  cents: "",
+  bp: "",
+  id: "",
+  ids: "",
+};
 /** Envelopes that say nothing to a person. */
 const ENVELOPES = new Set(["input", "body", "query", "params", "data"]);
 
@@ -58,7 +76,9 @@ const capital = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
  * fieldPlace(["input", "planned", "wheelWidthIn"]); // { row: null, field: "planned wheel width (in)" }
  */
 export function fieldPlace(path: readonly PropertyKey[]): { row: string | null; field: string } {
-  const segs = path.filter((s): s is string | number => typeof s !== "symbol").map((s) => (typeof s === "string" && /^\d+$/.test(s) ? Number(s) : s));
+  const segs = path
+    .filter((s): s is string | number => typeof s !== "symbol")
+    .map((s) => (typeof s === "string" && /^\d+$/.test(s) ? Number(s) : s));
   const rows: string[] = [];
   let words: string[] = [];
   let unit: string | undefined;
@@ -109,7 +129,8 @@ function fallbackSentence(issue: IssueLike, field: string): string {
       if (issue.expected === "date") return `Enter ${f} as a date.`;
       return `${capital(f)} is missing or incomplete.`;
     case "too_small":
-      if (issue.origin === "string") return n(issue.minimum) === "1" ? `Enter ${f}.` : `Use at least ${n(issue.minimum)} characters for ${f}.`;
+      if (issue.origin === "string")
+        return n(issue.minimum) === "1" ? `Enter ${f}.` : `Use at least ${n(issue.minimum)} characters for ${f}.`;
       if (issue.origin === "array" || issue.origin === "set") return `Give at least ${n(issue.minimum)} for ${f}.`;
       return `${capital(f)} must be ${issue.inclusive === false ? "more than" : "at least"} ${n(issue.minimum)}.`;
     case "too_big":

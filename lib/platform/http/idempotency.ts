@@ -33,7 +33,8 @@ export const bodyHash = (bytes: Uint8Array) => createHash("sha256").update(bytes
 export async function runOnce(scope: KeyScope, hash: string, create: () => Promise<Response>): Promise<Response> {
   const claim = await idempotencyQueries.claimKey(scope, hash);
   if (claim.kind === "mismatch") throw new HttpError(422, `This ${IDEMPOTENCY_HEADER} was used for a different request.`);
-  if (claim.kind === "busy") throw new HttpError(409, `A request with this ${IDEMPOTENCY_HEADER} is still in progress. Try again in a moment.`);
+  if (claim.kind === "busy")
+    throw new HttpError(409, `A request with this ${IDEMPOTENCY_HEADER} is still in progress. Try again in a moment.`);
   if (claim.kind === "replay") {
     return new Response(claim.body, { status: claim.status, headers: { "Content-Type": claim.type, "Idempotent-Replayed": "true" } });
   }
@@ -47,7 +48,11 @@ export async function runOnce(scope: KeyScope, hash: string, create: () => Promi
   try {
     if (response.status >= 200 && response.status < 300) {
       const body = await response.clone().text();
-      await idempotencyQueries.completeKey(scope, claim.attempt, { status: response.status, type: response.headers.get("content-type") ?? "application/json", body });
+      await idempotencyQueries.completeKey(scope, claim.attempt, {
+        status: response.status,
+        type: response.headers.get("content-type") ?? "application/json",
+        body,
+      });
     } else {
       await idempotencyQueries.releaseKey(scope, claim.attempt);
     }

@@ -52,21 +52,39 @@ export async function claimKey(db: Knex, scope: KeyScope, hash: string): Promise
     const row = (await db("idempotency_keys")
       .where(where)
       .first(
-        "request_hash", "state", "attempt", "response_status", "response_type", "response_body",
+        "request_hash",
+        "state",
+        "attempt",
+        "response_status",
+        "response_type",
+        "response_body",
         db.raw("expires_at <= now() as expired"),
         db.raw(`state = 'pending' and locked_at <= now() - interval '${STALE_RESERVATION}' as stale`),
       )) as KeyRow | undefined;
     if (!row) continue; // deleted between the two statements (released or purged): insert again
     if (!row.expired) {
       if (row.request_hash !== hash) return { kind: "mismatch" };
-      if (row.state === "complete") return { kind: "replay", status: row.response_status!, type: row.response_type ?? "application/json", body: row.response_body ?? "" };
+      if (row.state === "complete")
+        return {
+          kind: "replay",
+          status: row.response_status!,
+          type: row.response_type ?? "application/json",
+          body: row.response_body ?? "",
+        };
       if (!row.stale) return { kind: "busy" };
     }
     const taken = await db("idempotency_keys")
       .where({ ...where, attempt: row.attempt })
       .update({
-        request_hash: hash, state: "pending", attempt, response_status: null, response_type: null, response_body: null,
-        created_at: db.fn.now(), locked_at: db.fn.now(), expires_at: db.raw("now() + interval '24 hours'"),
+        request_hash: hash,
+        state: "pending",
+        attempt,
+        response_status: null,
+        response_type: null,
+        response_body: null,
+        created_at: db.fn.now(),
+        locked_at: db.fn.now(),
+        expires_at: db.raw("now() + interval '24 hours'"),
       });
     if (taken) return { kind: "run", attempt };
     // Someone else changed it first: look again.
@@ -75,7 +93,12 @@ export async function claimKey(db: Knex, scope: KeyScope, hash: string): Promise
 }
 
 /** Stores the response of a finished create; a no-op when the reservation was taken over meanwhile. */
-export async function completeKey(db: Knex, scope: KeyScope, attempt: string, response: { status: number; type: string; body: string }): Promise<boolean> {
+export async function completeKey(
+  db: Knex,
+  scope: KeyScope,
+  attempt: string,
+  response: { status: number; type: string; body: string },
+): Promise<boolean> {
   const n = await db("idempotency_keys")
     .where({ user_id: scope.userId, route: scope.route, key: scope.key, attempt, state: "pending" })
     .update({ state: "complete", response_status: response.status, response_type: response.type, response_body: response.body });

@@ -17,7 +17,13 @@ let base = "";
 
 function app(_req: IncomingMessage, res: ServerResponse) {
   reached += 1;
-  const { status = 200, headers = { "cache-control": "s-maxage=60, stale-while-revalidate=600", "content-type": "text/html" }, body = "<p>shared page</p>", gzip = false, chunks = 1 } = answer;
+  const {
+    status = 200,
+    headers = { "cache-control": "s-maxage=60, stale-while-revalidate=600", "content-type": "text/html" },
+    body = "<p>shared page</p>",
+    gzip = false,
+    chunks = 1,
+  } = answer;
   const bytes = gzip ? gzipSync(body) : Buffer.from(body);
   res.writeHead(status, { ...headers, ...(gzip ? { "content-encoding": "gzip" } : {}) });
   // Next streams its HTML: write in pieces, then end.
@@ -43,7 +49,11 @@ beforeEach(() => {
   cache.purge("/s/other");
 });
 
-const get = (path: string, headers: Record<string, string | undefined> = {}, method = "GET") => fetch(`${base}${path}`, { headers: Object.fromEntries(Object.entries(headers).filter((kv): kv is [string, string] => kv[1] !== undefined)), method });
+const get = (path: string, headers: Record<string, string | undefined> = {}, method = "GET") =>
+  fetch(`${base}${path}`, {
+    headers: Object.fromEntries(Object.entries(headers).filter((kv): kv is [string, string] => kv[1] !== undefined)),
+    method,
+  });
 
 describe("the share pages' micro-cache", () => {
   it("reads s-maxage, and stores nothing marked private, no-store or no-cache (RFC 9111 §5.2.2)", () => {
@@ -100,7 +110,13 @@ describe("the share pages' micro-cache", () => {
   it("passes client navigations, server actions, queries, other paths and other methods to the app", async () => {
     await (await get("/s/abc")).text();
     reached = 0;
-    for (const h of [{ rsc: "1" }, { "next-router-prefetch": "1" }, { "next-action": "x" }, { authorization: "Bearer x" }, { range: "bytes=0-5" }]) {
+    for (const h of [
+      { rsc: "1" },
+      { "next-router-prefetch": "1" },
+      { "next-action": "x" },
+      { authorization: "Bearer x" },
+      { range: "bytes=0-5" },
+    ]) {
       expect((await get("/s/abc", h)).headers.get("x-hubface-cache"), JSON.stringify(h)).toBeNull();
     }
     expect((await get("/s/abc?_rsc=1")).headers.get("x-hubface-cache")).toBeNull();

@@ -39,7 +39,15 @@ interface Entry {
 // Hop-by-hop and per-response headers are not replayed.
 const DROPPED = new Set(["date", "connection", "keep-alive", "transfer-encoding", "content-length", "age"]);
 // Requests a page's HTML is not the answer to: client navigations (RSC), prefetches, actions.
-const BYPASS_HEADERS = ["rsc", "next-router-state-tree", "next-router-prefetch", "next-router-segment-prefetch", "next-action", "authorization", "range"];
+const BYPASS_HEADERS = [
+  "rsc",
+  "next-router-state-tree",
+  "next-router-prefetch",
+  "next-router-segment-prefetch",
+  "next-action",
+  "authorization",
+  "range",
+];
 
 /** The `s-maxage` of a Cache-Control value, in seconds, or null. */
 export function sMaxAgeSeconds(cacheControl: string | number | string[] | undefined): number | null {
@@ -72,7 +80,10 @@ export class Microcache {
   // is not kept.
   private purges = 0;
 
-  constructor(options: MicrocacheOptions, private readonly now: () => number = Date.now) {
+  constructor(
+    options: MicrocacheOptions,
+    private readonly now: () => number = Date.now,
+  ) {
     this.opts = { maxBytes: 32 * 1024 * 1024, maxEntryBytes: 1024 * 1024, maxTtlMs: 60_000, ...options };
     this.entries = new LRUCache<string, Entry>({ maxSize: this.opts.maxBytes, sizeCalculation: (e) => Math.max(1, e.body.length) });
   }
@@ -124,7 +135,11 @@ export class Microcache {
     let overflow = false;
     const keep = (chunk: unknown, encoding?: unknown) => {
       if (overflow || chunk === undefined || chunk === null || typeof chunk === "function") return;
-      const b = Buffer.isBuffer(chunk) ? chunk : chunk instanceof Uint8Array ? Buffer.from(chunk) : Buffer.from(String(chunk), typeof encoding === "string" ? (encoding as BufferEncoding) : "utf8");
+      const b = Buffer.isBuffer(chunk)
+        ? chunk
+        : chunk instanceof Uint8Array
+          ? Buffer.from(chunk)
+          : Buffer.from(String(chunk), typeof encoding === "string" ? (encoding as BufferEncoding) : "utf8");
       bytes += b.length;
       if (bytes > this.opts.maxEntryBytes) overflow = true;
       else chunks.push(b);

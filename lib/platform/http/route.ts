@@ -7,7 +7,15 @@ import { isDependencyUnavailable } from "@/lib/platform/http/dependency";
 import { currentRequestId, log, noteUser } from "@/lib/platform/log";
 import { type Access, type Caller, currentCaller, requireCaller } from "@/lib/platform/auth/session";
 import { FitmentInputError } from "@/lib/fitment";
-import { ConflictError, DomainError, GoneError, InvalidError, NotFoundError, SOME_FIELDS, UnknownReferenceError } from "@/lib/platform/errors";
+import {
+  ConflictError,
+  DomainError,
+  GoneError,
+  InvalidError,
+  NotFoundError,
+  SOME_FIELDS,
+  UnknownReferenceError,
+} from "@/lib/platform/errors";
 import { readCappedBytes } from "./body";
 import { bodyHash, idempotencyKeyOf, runOnce } from "./idempotency";
 import { assertNoNul } from "./nul";
@@ -117,10 +125,7 @@ export function route<
   B extends z.ZodType | undefined = undefined,
   Q extends z.ZodType | undefined = undefined,
   P extends z.ZodType | undefined = undefined,
->(
-  spec: Spec<B, Q, P> & { access: A },
-  handler: (ctx: Ctx<Out<B>, Out<Q>, Out<P>, A>) => Promise<Response | unknown>,
-) {
+>(spec: Spec<B, Q, P> & { access: A }, handler: (ctx: Ctx<Out<B>, Out<Q>, Out<P>, A>) => Promise<Response | unknown>) {
   return async (req: NextRequest, context: { params: Promise<Record<string, string | string[]>> }) => {
     try {
       assertSameOrigin(req);
@@ -147,7 +152,11 @@ export function route<
         // The handler reads the body itself (multipart): read it here under the same cap to hash
         // it, and hand the handler a request that carries the same bytes.
         bytes = hasBody ? await readCappedBytes(req, maxBytes, tooLargeMessage) : new Uint8Array();
-        handlerReq = new NextRequest(req.url, { method: req.method, headers: req.headers, body: hasBody ? (bytes as BodyInit) : undefined });
+        handlerReq = new NextRequest(req.url, {
+          method: req.method,
+          headers: req.headers,
+          body: hasBody ? (bytes as BodyInit) : undefined,
+        });
       }
       const run = async () => {
         const result = await handler({ req: handlerReq, caller, body, query, params } as Ctx<Out<B>, Out<Q>, Out<P>, A>);
@@ -176,7 +185,10 @@ function domainStatus(error: DomainError): number | null {
 }
 
 /** `{ error, fieldErrors? }`: messages about a row say which row, counted from 1. */
-const errorBody = (message: string, fieldErrors?: Record<string, string[]>) => ({ error: message, ...(fieldErrors ? { fieldErrors: withRows(fieldErrors) } : {}) });
+const errorBody = (message: string, fieldErrors?: Record<string, string[]>) => ({
+  error: message,
+  ...(fieldErrors ? { fieldErrors: withRows(fieldErrors) } : {}),
+});
 
 export function errorResponse(error: unknown): Response {
   if (error instanceof HttpError) {

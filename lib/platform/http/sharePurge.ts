@@ -73,7 +73,10 @@ export function startSharePurgeListener(options: SharePurgeListenerOptions): Sha
     if (stopped || retry) return;
     const wait = backoff;
     backoff = Math.min(backoff * 2, maxBackoff);
-    log().warn({ channel: SHARE_PURGE_CHANNEL, reason, retryInMs: wait }, "share purge listener lost its database connection; reconnecting");
+    log().warn(
+      { channel: SHARE_PURGE_CHANNEL, reason, retryInMs: wait },
+      "share purge listener lost its database connection; reconnecting",
+    );
     retry = setTimeout(() => {
       retry = null;
       void connect();
@@ -183,7 +186,10 @@ interface PurgeableCache {
  * micro-cache copy once more — a request that read Next's old page in between must not stay.
  * @example startSharePurgeListener({ connectionString, ...ownServerPurge("http://127.0.0.1:3000", cache) });
  */
-export function ownServerPurge(baseUrl: string, cache: PurgeableCache | undefined): Pick<SharePurgeListenerOptions, "onPurge" | "onReconnect"> {
+export function ownServerPurge(
+  baseUrl: string,
+  cache: PurgeableCache | undefined,
+): Pick<SharePurgeListenerOptions, "onPurge" | "onReconnect"> {
   const ask = async (body: string) => {
     const res = await fetch(`${baseUrl}/api/internal/share-purge`, {
       method: "POST",

@@ -81,7 +81,9 @@ export function getBoss(opts: BossOptions = {}): Promise<PgBoss> {
   g.hubfaceBoss ??= (async () => {
     const boss = create(opts);
     // Without a listener an error event would crash the process; a lost connection is retried by pg-boss.
-    boss.on("error", (error) => log().error({ err: { message: error.message, code: (error as { code?: string }).code } }, "job queue error"));
+    boss.on("error", (error) =>
+      log().error({ err: { message: error.message, code: (error as { code?: string }).code } }, "job queue error"),
+    );
     await boss.start();
     for (const q of Object.values(QUEUES)) {
       const { name, ...policy } = q;

@@ -36,7 +36,12 @@ export async function listProblemJobs(db: Knex, limit = 200): Promise<ProblemJob
     attempts: r.started_on ? r.retry_count + 1 : 0,
     maxAttempts: r.retry_limit + 1,
     createdAt: new Date(r.created_on).toISOString(),
-    lastAttemptAt: r.state === "failed" && r.completed_on ? new Date(r.completed_on).toISOString() : r.started_on ? new Date(r.started_on).toISOString() : null,
+    lastAttemptAt:
+      r.state === "failed" && r.completed_on
+        ? new Date(r.completed_on).toISOString()
+        : r.started_on
+          ? new Date(r.started_on).toISOString()
+          : null,
     nextAttemptAt: r.state === "retry" ? new Date(r.start_after).toISOString() : null,
   }));
 }

@@ -39,7 +39,8 @@ export const handlers: Record<QueueName, Handler> = {
   },
   [QUEUES.photoSweep.name]: async (job) => {
     const { scanned, deleted } = await sweepOrphanPhotos(db, photoStore());
-    if (deleted.length) log().info({ job: { id: job.id, queue: job.name }, scanned, deleted: deleted.length }, "orphan photo objects deleted");
+    if (deleted.length)
+      log().info({ job: { id: job.id, queue: job.name }, scanned, deleted: deleted.length }, "orphan photo objects deleted");
     return { scanned, deleted: deleted.length };
   },
   [QUEUES.idempotencyPurge.name]: async () => ({ purged: await purgeExpiredKeys(db) }),
@@ -55,7 +56,10 @@ export async function runJob(job: PgBoss.Job<object>): Promise<unknown> {
   try {
     return await handlers[job.name as QueueName](job);
   } catch (error) {
-    log().warn({ job: { id: job.id, queue: job.name }, err: { message: (error as Error).message, code: (error as { code?: string }).code } }, "job failed; pg-boss retries it while attempts remain");
+    log().warn(
+      { job: { id: job.id, queue: job.name }, err: { message: (error as Error).message, code: (error as { code?: string }).code } },
+      "job failed; pg-boss retries it while attempts remain",
+    );
     throw error;
   }
 }

@@ -31,7 +31,10 @@ export interface RequestLogOptions {
  * writes one line when the response ends: reqId, method, route (path with tokens redacted, no
  * query), status, durationMs, userId where known. 5xx lines are at error level.
  */
-export function withRequestLog(handler: (req: IncomingMessage, res: ServerResponse, ctx: RequestContext) => void, opts: RequestLogOptions = {}) {
+export function withRequestLog(
+  handler: (req: IncomingMessage, res: ServerResponse, ctx: RequestContext) => void,
+  opts: RequestLogOptions = {},
+) {
   return (req: IncomingMessage, res: ServerResponse) => {
     const started = process.hrtime.bigint();
     const ctx: RequestContext = { reqId: requestIdFrom(req.headers["x-request-id"]) };
@@ -42,8 +45,16 @@ export function withRequestLog(handler: (req: IncomingMessage, res: ServerRespon
     res.once("close", () => {
       const durationMs = Math.round(Number(process.hrtime.bigint() - started) / 1e4) / 100;
       const route = redactUrl(req.url ?? "/").split("?")[0] ?? "/";
-      const line = { reqId: ctx.reqId, method: req.method, route, status: res.statusCode, durationMs, ...(res.writableFinished ? {} : { aborted: true }) };
-      const write = (userId?: string) => log()[res.statusCode >= 500 ? "error" : "info"]({ ...line, ...(userId ? { userId } : {}) }, "request");
+      const line = {
+        reqId: ctx.reqId,
+        method: req.method,
+        route,
+        status: res.statusCode,
+        durationMs,
+        ...(res.writableFinished ? {} : { aborted: true }),
+      };
+      const write = (userId?: string) =>
+        log()[res.statusCode >= 500 ? "error" : "info"]({ ...line, ...(userId ? { userId } : {}) }, "request");
       if (ctx.userId || !opts.userIdOf || route.startsWith("/_next/")) write(ctx.userId);
       else void opts.userIdOf(req).then(write, () => write());
     });

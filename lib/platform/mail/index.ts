@@ -54,15 +54,39 @@ export interface QueuedMail {
 export function toQueued(mail: OutgoingMail): QueuedMail {
   const size = (mail.attachments ?? []).reduce((n, a) => n + a.content.length, 0);
   if (size > MAX_QUEUED_ATTACHMENT_BYTES) {
-    throw new Error(`Attachments of ${Math.round(size / 1024)} KB exceed the ${MAX_QUEUED_ATTACHMENT_BYTES / 1024 / 1024} MB a queued mail may carry.`);
+    throw new Error(
+      `Attachments of ${Math.round(size / 1024)} KB exceed the ${MAX_QUEUED_ATTACHMENT_BYTES / 1024 / 1024} MB a queued mail may carry.`,
+    );
   }
   const { attachments, ...rest } = mail;
-  return { ...rest, ...(attachments?.length ? { attachments: attachments.map((a) => ({ filename: a.filename, contentType: a.contentType, contentBase64: a.content.toString("base64") })) } : {}) };
+  return {
+    ...rest,
+    ...(attachments?.length
+      ? {
+          attachments: attachments.map((a) => ({
+            filename: a.filename,
+            contentType: a.contentType,
+            contentBase64: a.content.toString("base64"),
+          })),
+        }
+      : {}),
+  };
 }
 
 export function fromQueued(mail: QueuedMail): OutgoingMail {
   const { attachments, ...rest } = mail;
-  return { ...rest, ...(attachments?.length ? { attachments: attachments.map((a) => ({ filename: a.filename, contentType: a.contentType, content: Buffer.from(a.contentBase64, "base64") })) } : {}) };
+  return {
+    ...rest,
+    ...(attachments?.length
+      ? {
+          attachments: attachments.map((a) => ({
+            filename: a.filename,
+            contentType: a.contentType,
+            content: Buffer.from(a.contentBase64, "base64"),
+          })),
+        }
+      : {}),
+  };
 }
 
 /**

@@ -24,8 +24,32 @@
 
 /** Letters Unicode does not decompose into a base letter plus marks, both cases, and their plain spelling. */
 export const FOLDED_LETTERS: Readonly<Record<string, string>> = {
-  Ł: "l", ł: "l", Ø: "o", ø: "o", Đ: "d", đ: "d", Ð: "d", ð: "d", Ħ: "h", ħ: "h", ı: "i", Ŀ: "l", ŀ: "l", Ŧ: "t", ŧ: "t", ĸ: "k",
-  ß: "ss", ẞ: "ss", Æ: "ae", æ: "ae", Œ: "oe", œ: "oe", Þ: "th", þ: "th", ς: "σ", "×": "x",
+  Ł: "l",
+  ł: "l",
+  Ø: "o",
+  ø: "o",
+  Đ: "d",
+  đ: "d",
+  Ð: "d",
+  ð: "d",
+  Ħ: "h",
+  ħ: "h",
+  ı: "i",
+  Ŀ: "l",
+  ŀ: "l",
+  Ŧ: "t",
+  ŧ: "t",
+  ĸ: "k",
+  ß: "ss",
+  ẞ: "ss",
+  Æ: "ae",
+  æ: "ae",
+  Œ: "oe",
+  œ: "oe",
+  Þ: "th",
+  þ: "th",
+  ς: "σ",
+  "×": "x",
 };
 
 /** Combining marks left by NFD (diacritical marks and their supplements). */
@@ -58,7 +82,11 @@ const FOLD_RE = new RegExp(`[${Object.keys(FOLDED_LETTERS).join("")}]`, "gu");
  * foldDiacritics("Łukasz Ørsted-Straße"); // "lukasz orsted-strasse"
  */
 export function foldDiacritics(text: string): string {
-  return text.normalize("NFD").replace(MARKS_RE, "").toLowerCase().replace(FOLD_RE, (c) => FOLDED_LETTERS[c] ?? c);
+  return text
+    .normalize("NFD")
+    .replace(MARKS_RE, "")
+    .toLowerCase()
+    .replace(FOLD_RE, (c) => FOLDED_LETTERS[c] ?? c);
 }
 
 /**

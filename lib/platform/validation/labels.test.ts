@@ -5,7 +5,9 @@ describe("labelled field messages", () => {
   it("puts each labelled field's first message after its label", () => {
     expect(labelledMessage({ shopId: ["Pick a shop.", "Second."] }, { shopId: "Shop" })).toBe("Shop: pick a shop.");
     expect(labelledMessage({ sku: ["SKU T1 is taken."] }, { sku: "SKU" })).toBe("SKU: SKU T1 is taken.");
-    expect(labelledMessage({ role: ["Pick a role."], shopId: ["Pick a shop."] }, { role: "Role", shopId: "Shop" })).toBe("Role: pick a role. Shop: pick a shop.");
+    expect(labelledMessage({ role: ["Pick a role."], shopId: ["Pick a shop."] }, { role: "Role", shopId: "Shop" })).toBe(
+      "Role: pick a role. Shop: pick a shop.",
+    );
   });
 
   it("is null when no labelled field has a message, so the caller keeps its own words", () => {

@@ -116,10 +116,19 @@ export interface SlotsAnswer {
   booking: Booking | null;
 }
 
-export const slotOption = (s: Pick<Slot, "start" | "end">, timeZone: string): SlotOption => ({ start: iso(s.start), end: iso(s.end), label: formatClock(s.start, timeZone) });
+export const slotOption = (s: Pick<Slot, "start" | "end">, timeZone: string): SlotOption => ({
+  start: iso(s.start),
+  end: iso(s.end),
+  label: formatClock(s.start, timeZone),
+});
 
 export function slotDayOption(d: SlotDay, timeZone: string): SlotDayOption {
-  return { date: d.date, label: formatDay(d.date), ...(d.closed ? { closed: d.closed } : {}), slots: d.slots.map((s) => slotOption(s, timeZone)) };
+  return {
+    date: d.date,
+    label: formatDay(d.date),
+    ...(d.closed ? { closed: d.closed } : {}),
+    slots: d.slots.map((s) => slotOption(s, timeZone)),
+  };
 }
 
 export const lengthLabel = (minutes: number) => formatDuration(minutes);

@@ -34,14 +34,18 @@ export interface CalendarLayout {
 export function layoutCalendar(a: CalendarAnswer): CalendarLayout {
   const tz = a.timeZone;
   const open = Object.values(a.hours).filter((h): h is { opens: number; closes: number } => h !== null);
-  const stretches = a.bookings.flatMap((b) => b.bays.map((s) => ({ b, s, from: wallTime(new Date(s.startsAt), tz), to: wallTime(new Date(s.endsAt), tz) })));
+  const stretches = a.bookings.flatMap((b) =>
+    b.bays.map((s) => ({ b, s, from: wallTime(new Date(s.startsAt), tz), to: wallTime(new Date(s.endsAt), tz) })),
+  );
   // The shown hours: from the earliest opening to the latest closing, widened to any booking outside them.
   let first = Math.min(...open.map((h) => h.opens), ...stretches.map((x) => x.from.minute), 24 * 60);
   let last = Math.max(...open.map((h) => h.closes), ...stretches.map((x) => (x.to.date === x.from.date ? x.to.minute : 1440)), 0);
   if (first >= last) [first, last] = [8 * 60, 17 * 60];
   first = Math.floor(first / 60) * 60;
   last = Math.ceil(last / 60) * 60;
-  const columns = a.days.flatMap((date) => a.bays.map((bay) => ({ date, bayId: bay.id, bayName: bay.name, closed: a.hours[date] === null })));
+  const columns = a.days.flatMap((date) =>
+    a.bays.map((bay) => ({ date, bayId: bay.id, bayName: bay.name, closed: a.hours[date] === null })),
+  );
   const blocks: CalendarBlock[] = [];
   for (const { b, s, from, to } of stretches) {
     const column = columns.findIndex((c) => c.date === from.date && c.bayId === s.bayId);

@@ -38,7 +38,9 @@ describe("the booking's calendar file", () => {
   });
 
   it("a move keeps the UID and raises SEQUENCE; a cancel says METHOD:CANCEL and STATUS:CANCELLED", () => {
-    const moved = only(bookingCalendar({ ...entry, sequence: 1, start: new Date("2027-03-15T14:00:00Z"), end: new Date("2027-03-15T16:30:00Z") })).event;
+    const moved = only(
+      bookingCalendar({ ...entry, sequence: 1, start: new Date("2027-03-15T14:00:00Z"), end: new Date("2027-03-15T16:30:00Z") }),
+    ).event;
     expect(moved.uid).toBe(entry.uid);
     expect(Number(moved.sequence)).toBe(1);
     expect(moved.start.toISOString()).toBe("2027-03-15T14:00:00.000Z");

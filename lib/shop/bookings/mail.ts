@@ -69,7 +69,8 @@ export function bookingMail(f: BookingMailFacts): OutgoingMail {
   const minutes = Math.round((f.end.getTime() - f.start.getTime()) / 60_000);
   const when = `${formatInstant(f.start, f.timeZone)} – ${formatClock(f.end, f.timeZone)}`;
   const place = [f.shop.name, f.shop.address].filter(Boolean).join(", ");
-  const stay = f.kind === "cancelled" ? "" : `Plan on the truck staying ${formatDuration(minutes)}. Bring the lug lock key if your wheels have one.`;
+  const stay =
+    f.kind === "cancelled" ? "" : `Plan on the truck staying ${formatDuration(minutes)}. Bring the lug lock key if your wheels have one.`;
   const calendar = bookingCalendar({
     uid: bookingUid(f.bookingId, f.origin),
     sequence: f.sequence,
@@ -89,6 +90,12 @@ export function bookingMail(f: BookingMailFacts): OutgoingMail {
     subject: subjectOf(f, when),
     text: `Hello ${f.customer.name},\n\n${lead}\n\n${stay ? `${stay}\n\n` : ""}The calendar file is attached.\n\n${contact}\n`,
     html: `<p>Hello ${esc(f.customer.name)},</p><p>${esc(lead)}</p>${stay ? `<p>${esc(stay)}</p>` : ""}<p>The calendar file is attached.</p><p>${esc(contact)}</p>`,
-    attachments: [{ filename: `install-Q-${f.quoteNumber}.ics`, content: Buffer.from(calendar, "utf8"), contentType: `text/calendar; charset=utf-8; method=${f.kind === "cancelled" ? "CANCEL" : "REQUEST"}` }],
+    attachments: [
+      {
+        filename: `install-Q-${f.quoteNumber}.ics`,
+        content: Buffer.from(calendar, "utf8"),
+        contentType: `text/calendar; charset=utf-8; method=${f.kind === "cancelled" ? "CANCEL" : "REQUEST"}`,
+      },
+    ],
   };
 }

@@ -26,7 +26,15 @@ import { canBook } from "./bookable";
 import { type BookingMailKind, addressOf, bookingMail } from "./mail";
 import { type BaysSetupValues, type BookingRequest, openingHoursOf } from "./schema";
 import { type BayLite, type Held, type Schedule, type Slot, type SlotProblem, cannotBook, checkStart, freeSlots } from "./slots";
-import { BAY_KIND_LABEL, BOOKING_HORIZON_DAYS, DEFAULT_SLOT_STEP, DEFAULT_TIME_ZONE, REMINDER_FROM_HOUR, START_FIELD_LABEL, defaultServiceTime } from "./vocabulary";
+import {
+  BAY_KIND_LABEL,
+  BOOKING_HORIZON_DAYS,
+  DEFAULT_SLOT_STEP,
+  DEFAULT_TIME_ZONE,
+  REMINDER_FROM_HOUR,
+  START_FIELD_LABEL,
+  defaultServiceTime,
+} from "./vocabulary";
 import { type Workload, workloadOf } from "./workload";
 import { addDays, formatInstant, wallTime, weekdayOf, zonedInstant } from "./zoned";
 
@@ -42,14 +50,22 @@ export async function readSchedule(db: Db, shopId: string): Promise<Schedule> {
   return {
     timeZone: row?.time_zone ?? DEFAULT_TIME_ZONE,
     stepMinutes: row?.slot_step_minutes ?? DEFAULT_SLOT_STEP,
-    hours: Object.fromEntries(hours.map((h: { weekday: number; opens_minute: number; closes_minute: number }) => [h.weekday, { opens: h.opens_minute, closes: h.closes_minute }])),
+    hours: Object.fromEntries(
+      hours.map((h: { weekday: number; opens_minute: number; closes_minute: number }) => [
+        h.weekday,
+        { opens: h.opens_minute, closes: h.closes_minute },
+      ]),
+    ),
     closedDays: new Map(closed.map((c: { day: string; note: string }) => [c.day, c.note])),
   };
 }
 
 /** Bays that take work, in the owner's order (the order slots try them). */
 export async function activeBays(db: Db, shopId: string): Promise<BayRow[]> {
-  return db<BayRow>("bays").where({ shop_id: shopId }).whereNull("archived_at").orderBy([{ column: "position" }, { column: "name" }]);
+  return db<BayRow>("bays")
+    .where({ shop_id: shopId })
+    .whereNull("archived_at")
+    .orderBy([{ column: "position" }, { column: "name" }]);
 }
 
 /** The shop's catalog services with their bay time: the owner's, or the default for the service type and unit. */
@@ -60,7 +76,10 @@ export async function serviceTimes(db: Db, shopId: string): Promise<ServiceTime[
     })
     .where({ "c.shop_id": shopId, "c.kind": "service" })
     .orderBy("c.sku")
-    .select("c.id", "c.sku", "c.description", "c.service_type", "c.service_unit", "t.minutes_per_unit", "t.bay_kind")) as (Pick<CatalogItemRow, "id" | "sku" | "description" | "service_type" | "service_unit"> & {
+    .select("c.id", "c.sku", "c.description", "c.service_type", "c.service_unit", "t.minutes_per_unit", "t.bay_kind")) as (Pick<
+    CatalogItemRow,
+    "id" | "sku" | "description" | "service_type" | "service_unit"
+  > & {
     minutes_per_unit: number | null;
     bay_kind: BayKind | null;
   })[];
@@ -98,12 +117,17 @@ export async function getSetup(db: Knex, shopId: string): Promise<BaysSetup> {
   };
 }
 
-const invalid = (fieldErrors: Record<string, string[]>) => new HttpError(422, Object.values(fieldErrors)[0]?.[0] ?? "Some fields need attention.", fieldErrors);
+const invalid = (fieldErrors: Record<string, string[]>) =>
+  new HttpError(422, Object.values(fieldErrors)[0]?.[0] ?? "Some fields need attention.", fieldErrors);
 
 /** Bay time held from now on, per bay. */
 async function futureHolds(db: Db, bayIds: string[]): Promise<Map<string, number>> {
   if (!bayIds.length) return new Map();
-  const rows = await db("bay_reservations").whereIn("bay_id", bayIds).whereRaw("upper(during) > now()").groupBy("bay_id").select("bay_id", db.raw("count(*)::int as n"));
+  const rows = await db("bay_reservations")
+    .whereIn("bay_id", bayIds)
+    .whereRaw("upper(during) > now()")
+    .groupBy("bay_id")
+    .select("bay_id", db.raw("count(*)::int as n"));
   return new Map(rows.map((r: { bay_id: string; n: number }) => [r.bay_id, r.n]));
 }
 
@@ -120,25 +144,46 @@ export async function saveSetup(db: Knex, shopId: string, v: BaysSetupValues): P
     const byId = new Map(existing.map((b) => [b.id, b]));
     const fe: Record<string, string[]> = {};
     v.bays.forEach((b, i) => {
-      if (b.id && !byId.has(b.id)) fe[`bays.${i}.id`] = [`Bay ${i + 1}: this bay is not one of your shop's bays (any more). Reload the page.`];
+      if (b.id && !byId.has(b.id))
+        fe[`bays.${i}.id`] = [`Bay ${i + 1}: this bay is not one of your shop's bays (any more). Reload the page.`];
     });
     const services = new Set(
-      (await trx("catalog_items").where({ shop_id: shopId, kind: "service" }).whereIn("id", v.serviceTimes.map((s) => s.catalogItemId)).select("id")).map((r: { id: string }) => r.id),
+      (
+        await trx("catalog_items")
+          .where({ shop_id: shopId, kind: "service" })
+          .whereIn(
+            "id",
+            v.serviceTimes.map((s) => s.catalogItemId),
+          )
+          .select("id")
+      ).map((r: { id: string }) => r.id),
     );
     v.serviceTimes.forEach((s, i) => {
-      if (!services.has(s.catalogItemId)) fe[`serviceTimes.${i}.catalogItemId`] = [`Service time ${i + 1}: this is not a service in your catalog (any more). Reload the page.`];
+      if (!services.has(s.catalogItemId))
+        fe[`serviceTimes.${i}.catalogItemId`] = [
+          `Service time ${i + 1}: this is not a service in your catalog (any more). Reload the page.`,
+        ];
     });
     const kept = new Set(v.bays.map((b) => b.id).filter((id): id is string => !!id));
-    const holds = await futureHolds(trx, existing.map((b) => b.id));
+    const holds = await futureHolds(
+      trx,
+      existing.map((b) => b.id),
+    );
     v.bays.forEach((b, i) => {
       const was = b.id ? byId.get(b.id) : undefined;
-      if (was && was.kind !== b.kind && holds.get(was.id)) fe[`bays.${i}.kind`] = [`${was.name} has ${holds.get(was.id)} booking(s) from now on: move or cancel them before changing its kind.`];
+      if (was && was.kind !== b.kind && holds.get(was.id))
+        fe[`bays.${i}.kind`] = [
+          `${was.name} has ${holds.get(was.id)} booking(s) from now on: move or cancel them before changing its kind.`,
+        ];
     });
     if (Object.keys(fe).length) throw invalid(fe);
     const removed = existing.filter((b) => !kept.has(b.id));
     const busy = removed.filter((b) => holds.get(b.id));
     if (busy.length) {
-      throw new HttpError(409, `${busy.map((b) => `${b.name} has ${holds.get(b.id)} booking(s) from now on`).join("; ")}: move or cancel them before removing ${busy.length > 1 ? "those bays" : "the bay"}.`);
+      throw new HttpError(
+        409,
+        `${busy.map((b) => `${b.name} has ${holds.get(b.id)} booking(s) from now on`).join("; ")}: move or cancel them before removing ${busy.length > 1 ? "those bays" : "the bay"}.`,
+      );
     }
 
     await trx("shop_schedules")
@@ -147,13 +192,25 @@ export async function saveSetup(db: Knex, shopId: string, v: BaysSetupValues): P
       .merge();
     await trx("shop_opening_hours").where({ shop_id: shopId }).delete();
     const hours = openingHoursOf(v);
-    if (hours.length) await trx("shop_opening_hours").insert(hours.map((h) => ({ shop_id: shopId, weekday: h.weekday, opens_minute: h.opens, closes_minute: h.closes })));
+    if (hours.length)
+      await trx("shop_opening_hours").insert(
+        hours.map((h) => ({ shop_id: shopId, weekday: h.weekday, opens_minute: h.opens, closes_minute: h.closes })),
+      );
     await trx("shop_closed_days").where({ shop_id: shopId }).delete();
     if (v.closedDays.length) await trx("shop_closed_days").insert(v.closedDays.map((d) => ({ shop_id: shopId, day: d.day, note: d.note })));
 
-    if (removed.length) await trx("bays").whereIn("id", removed.map((b) => b.id)).update({ archived_at: trx.fn.now() });
+    if (removed.length)
+      await trx("bays")
+        .whereIn(
+          "id",
+          removed.map((b) => b.id),
+        )
+        .update({ archived_at: trx.fn.now() });
     // Names are unique among a shop's bays: park the kept ones on their ids first, so swapping two names is one save.
-    if (kept.size) await trx("bays").whereIn("id", [...kept]).update({ name: trx.raw("id::text") });
+    if (kept.size)
+      await trx("bays")
+        .whereIn("id", [...kept])
+        .update({ name: trx.raw("id::text") });
     for (const [i, b] of v.bays.entries()) {
       if (b.id) await trx("bays").where({ id: b.id, shop_id: shopId }).update({ name: b.name, kind: b.kind, position: i });
       else await trx("bays").insert({ shop_id: shopId, name: b.name, kind: b.kind, position: i });
@@ -161,7 +218,14 @@ export async function saveSetup(db: Knex, shopId: string, v: BaysSetupValues): P
 
     await trx("service_times").where({ shop_id: shopId }).delete();
     if (v.serviceTimes.length) {
-      await trx("service_times").insert(v.serviceTimes.map((s) => ({ shop_id: shopId, catalog_item_id: s.catalogItemId, minutes_per_unit: s.minutes, bay_kind: s.bayKind })));
+      await trx("service_times").insert(
+        v.serviceTimes.map((s) => ({
+          shop_id: shopId,
+          catalog_item_id: s.catalogItemId,
+          minutes_per_unit: s.minutes,
+          bay_kind: s.bayKind,
+        })),
+      );
     }
   });
   return getSetup(db, shopId);
@@ -180,15 +244,32 @@ export async function quoteWork(db: Db, quote: Pick<QuoteRow, "id" | "shop_id">)
         })
         .where({ "c.shop_id": quote.shop_id, "c.kind": "service" })
         .whereIn("c.id", ids)
-        .select("c.id", "c.service_type", "c.service_unit", "t.minutes_per_unit", "t.bay_kind")) as (Pick<CatalogItemRow, "id" | "service_type" | "service_unit"> & Partial<Pick<ServiceTimeRow, "minutes_per_unit" | "bay_kind">>)[])
+        .select("c.id", "c.service_type", "c.service_unit", "t.minutes_per_unit", "t.bay_kind")) as (Pick<
+        CatalogItemRow,
+        "id" | "service_type" | "service_unit"
+      > &
+        Partial<Pick<ServiceTimeRow, "minutes_per_unit" | "bay_kind">>)[])
     : [];
   const times = new Map(
     items.map((i) => {
       const d = defaultServiceTime(i.service_type, i.service_unit);
-      return [i.id, i.minutes_per_unit != null && i.bay_kind ? { minutesPerUnit: i.minutes_per_unit, bayKind: i.bay_kind } : { minutesPerUnit: d.minutes, bayKind: d.bayKind }];
+      return [
+        i.id,
+        i.minutes_per_unit != null && i.bay_kind
+          ? { minutesPerUnit: i.minutes_per_unit, bayKind: i.bay_kind }
+          : { minutesPerUnit: d.minutes, bayKind: d.bayKind },
+      ];
     }),
   );
-  return workloadOf(lines.map((l) => ({ kind: l.kind, unit: l.unit, quantity: l.quantity, description: l.description, time: l.catalog_item_id ? (times.get(l.catalog_item_id) ?? null) : null })));
+  return workloadOf(
+    lines.map((l) => ({
+      kind: l.kind,
+      unit: l.unit,
+      quantity: l.quantity,
+      description: l.description,
+      time: l.catalog_item_id ? (times.get(l.catalog_item_id) ?? null) : null,
+    })),
+  );
 }
 
 /** Bay time held by the shop's bookings between two instants, leaving out one booking (the one being moved). */
@@ -211,7 +292,14 @@ async function bookedBays(db: Db, bookingIds: string[]): Promise<Map<string, Boo
     .join("bays as b", "b.id", "r.bay_id")
     .whereIn("r.booking_id", bookingIds)
     .orderByRaw("lower(r.during)")
-    .select("r.booking_id", "r.bay_id", "b.name", "b.kind", db.raw("lower(r.during) as starts_at"), db.raw("upper(r.during) as ends_at"))) as {
+    .select(
+      "r.booking_id",
+      "r.bay_id",
+      "b.name",
+      "b.kind",
+      db.raw("lower(r.during) as starts_at"),
+      db.raw("upper(r.during) as ends_at"),
+    )) as {
     booking_id: string;
     bay_id: string;
     name: string;
@@ -221,7 +309,13 @@ async function bookedBays(db: Db, bookingIds: string[]): Promise<Map<string, Boo
   }[];
   for (const r of rows) {
     const list = out.get(r.booking_id) ?? [];
-    list.push({ bayId: r.bay_id, bayName: r.name, bayKind: r.kind, startsAt: new Date(r.starts_at).toISOString(), endsAt: new Date(r.ends_at).toISOString() });
+    list.push({
+      bayId: r.bay_id,
+      bayName: r.name,
+      bayKind: r.kind,
+      startsAt: new Date(r.starts_at).toISOString(),
+      endsAt: new Date(r.ends_at).toISOString(),
+    });
     out.set(r.booking_id, list);
   }
   return out;
@@ -246,13 +340,28 @@ export async function liveBooking(db: Db, quote: Pick<QuoteRow, "id" | "shop_id"
  * before today), with the job's length and the live booking (whose own bay time counts as free,
  * so the counter can move it to a neighbouring time).
  */
-export async function slotsForQuote(db: Db, quote: Pick<QuoteRow, "id" | "shop_id">, opts: { from?: string; days?: number; now?: Date } = {}): Promise<SlotsAnswer> {
+export async function slotsForQuote(
+  db: Db,
+  quote: Pick<QuoteRow, "id" | "shop_id">,
+  opts: { from?: string; days?: number; now?: Date } = {},
+): Promise<SlotsAnswer> {
   const now = opts.now ?? new Date();
-  const [schedule, bays, work, live] = await Promise.all([readSchedule(db, quote.shop_id), activeBays(db, quote.shop_id), quoteWork(db, quote), liveBookingRow(db, quote.id)]);
+  const [schedule, bays, work, live] = await Promise.all([
+    readSchedule(db, quote.shop_id),
+    activeBays(db, quote.shop_id),
+    quoteWork(db, quote),
+    liveBookingRow(db, quote.id),
+  ]);
   const today = wallTime(now, schedule.timeZone).date;
   const from = opts.from && opts.from > today ? opts.from : today;
   const days = opts.days ?? 7;
-  const held = await heldBetween(db, quote.shop_id, zonedInstant(from, 0, schedule.timeZone), zonedInstant(addDays(from, days), 0, schedule.timeZone), live?.id);
+  const held = await heldBetween(
+    db,
+    quote.shop_id,
+    zonedInstant(from, 0, schedule.timeZone),
+    zonedInstant(addDays(from, days), 0, schedule.timeZone),
+    live?.id,
+  );
   const ctx = { schedule, bays: bays.map(lite), held, segments: work.segments, now, horizonDays: BOOKING_HORIZON_DAYS };
   const cannot = cannotBook(ctx);
   const booked = live ? bookingDto(live, (await bookedBays(db, [live.id])).get(live.id) ?? [], schedule.timeZone) : null;
@@ -277,7 +386,12 @@ export async function slotsByToken(db: Knex, token: string, opts: { from?: strin
 }
 
 /** The counter's free starts for a quote in the caller's scope. */
-export async function slotsForStaff(db: Knex, scope: QuoteScope, quoteId: string, opts: { from?: string; days?: number; now?: Date } = {}): Promise<SlotsAnswer> {
+export async function slotsForStaff(
+  db: Knex,
+  scope: QuoteScope,
+  quoteId: string,
+  opts: { from?: string; days?: number; now?: Date } = {},
+): Promise<SlotsAnswer> {
   const quote = await getQuote(db, scope, quoteId);
   assertBookable(quote, "staff");
   return slotsForQuote(db, quote, opts);
@@ -299,9 +413,17 @@ async function lockQuote(trx: Knex.Transaction, target: BookingTarget): Promise<
 function assertBookable(quote: QuoteRow, by: BookingTarget["by"]): void {
   if (canBook(quote)) return;
   if (quote.status === "accepted") {
-    throw new HttpError(409, by === "customer" ? "Pay the deposit before booking an install time." : "The deposit is not paid yet: book an install time once the customer has paid it.");
+    throw new HttpError(
+      409,
+      by === "customer"
+        ? "Pay the deposit before booking an install time."
+        : "The deposit is not paid yet: book an install time once the customer has paid it.",
+    );
   }
-  throw new HttpError(409, `A quote that is ${STATUS_LABEL[quote.status].toLowerCase()} cannot be booked: only a quote with its deposit paid can.`);
+  throw new HttpError(
+    409,
+    `A quote that is ${STATUS_LABEL[quote.status].toLowerCase()} cannot be booked: only a quote with its deposit paid can.`,
+  );
 }
 
 function refusal(p: SlotProblem): HttpError {
@@ -332,14 +454,26 @@ async function place<T>(trx: Knex.Transaction, p: Placing, write: (sp: Knex.Tran
     const pinned = bays.find((b) => b.id === p.request.bayId);
     if (!pinned) throw invalid({ bayId: ["Bay: that is not one of your shop's bays."] });
     if (!work.segments.some((s) => s.bayKind === pinned.kind)) {
-      throw invalid({ bayId: [`Bay: this work needs no ${BAY_KIND_LABEL[pinned.kind].toLowerCase()}; pick a bay of the kind it needs, or leave the bay to the calendar.`] });
+      throw invalid({
+        bayId: [
+          `Bay: this work needs no ${BAY_KIND_LABEL[pinned.kind].toLowerCase()}; pick a bay of the kind it needs, or leave the bay to the calendar.`,
+        ],
+      });
     }
   }
   const start = new Date(p.request.start);
   const DAY = 86_400_000;
   for (let attempt = 1; ; attempt++) {
     const held = await heldBetween(trx, shopId, new Date(start.getTime() - DAY), new Date(start.getTime() + 2 * DAY), p.exceptBookingId);
-    const r = checkStart(start, { schedule, bays: bays.map(lite), held, segments: work.segments, now: p.now, horizonDays: BOOKING_HORIZON_DAYS, pinnedBayId: p.request.bayId });
+    const r = checkStart(start, {
+      schedule,
+      bays: bays.map(lite),
+      held,
+      segments: work.segments,
+      now: p.now,
+      horizonDays: BOOKING_HORIZON_DAYS,
+      pinnedBayId: p.request.bayId,
+    });
     if (!r.ok) throw refusal(r.problem);
     try {
       return await trx.transaction((sp) => write(sp, r.slot));
@@ -352,15 +486,29 @@ async function place<T>(trx: Knex.Transaction, p: Placing, write: (sp: Knex.Tran
 
 async function reserve(sp: Knex.Transaction, bookingId: string, shopId: string, slot: Slot): Promise<void> {
   await sp("bay_reservations").insert(
-    slot.placements.map((pl) => ({ booking_id: bookingId, shop_id: shopId, bay_id: pl.bayId, during: sp.raw("tstzrange(?, ?, '[)')", [pl.start.toISOString(), pl.end.toISOString()]) })),
+    slot.placements.map((pl) => ({
+      booking_id: bookingId,
+      shop_id: shopId,
+      bay_id: pl.bayId,
+      during: sp.raw("tstzrange(?, ?, '[)')", [pl.start.toISOString(), pl.end.toISOString()]),
+    })),
   );
 }
 
 /** Queues the booking's e-mail with its calendar file in the same transaction; a customer without an address gets none. */
-async function mailCustomer(trx: Knex.Transaction, quote: QuoteRow, booking: BookingRow, kind: BookingMailKind, previousStart?: Date): Promise<boolean> {
+async function mailCustomer(
+  trx: Knex.Transaction,
+  quote: QuoteRow,
+  booking: BookingRow,
+  kind: BookingMailKind,
+  previousStart?: Date,
+): Promise<boolean> {
   const customer = await trx("customers").where({ id: quote.customer_id, shop_id: quote.shop_id }).first("name", "email");
   if (!customer?.email) return false;
-  const [shop, schedule] = await Promise.all([trx("shops").where({ id: quote.shop_id }).first("name", "address", "phone"), readSchedule(trx, quote.shop_id)]);
+  const [shop, schedule] = await Promise.all([
+    trx("shops").where({ id: quote.shop_id }).first("name", "address", "phone"),
+    readSchedule(trx, quote.shop_id),
+  ]);
   await queueMailIn(
     trx,
     bookingMail({
@@ -392,18 +540,35 @@ async function answer(db: Db, row: BookingRow): Promise<Booking> {
  * yet, the start inside the shop's rules and its bays free — then the booking, its bay time and
  * the confirmation e-mail, all in one transaction.
  */
-export async function bookInstall(db: Knex, target: BookingTarget, request: BookingRequest, actor: Actor, now = new Date()): Promise<Booking> {
+export async function bookInstall(
+  db: Knex,
+  target: BookingTarget,
+  request: BookingRequest,
+  actor: Actor,
+  now = new Date(),
+): Promise<Booking> {
   return db.transaction(async (trx) => {
     const quote = await lockQuote(trx, target);
     assertBookable(quote, target.by);
     const live = await liveBookingRow(trx, quote.id);
     if (live) {
       const { timeZone } = await readSchedule(trx, quote.shop_id);
-      throw new HttpError(409, `This quote is already booked for ${formatInstant(live.starts_at, timeZone)}. ${target.by === "customer" ? "Call the shop to move it." : "Move that booking instead."}`);
+      throw new HttpError(
+        409,
+        `This quote is already booked for ${formatInstant(live.starts_at, timeZone)}. ${target.by === "customer" ? "Call the shop to move it." : "Move that booking instead."}`,
+      );
     }
     const row = await place(trx, { quote, request, now }, async (sp, slot) => {
       const [b] = (await sp("bookings")
-        .insert({ shop_id: quote.shop_id, quote_id: quote.id, status: "booked", starts_at: slot.start, ends_at: slot.end, booked_by_user_id: actor.userId, booked_by: actor.label })
+        .insert({
+          shop_id: quote.shop_id,
+          quote_id: quote.id,
+          status: "booked",
+          starts_at: slot.start,
+          ends_at: slot.end,
+          booked_by_user_id: actor.userId,
+          booked_by: actor.label,
+        })
         .returning("*")) as BookingRow[];
       await reserve(sp, b!.id, quote.shop_id, slot);
       return b!;
@@ -414,7 +579,14 @@ export async function bookInstall(db: Knex, target: BookingTarget, request: Book
 }
 
 /** Moves the quote's live booking (counter only): the same calendar entry with its SEQUENCE raised, and the reminder due again. */
-export async function moveInstall(db: Knex, scope: QuoteScope, quoteId: string, request: BookingRequest, _actor: Actor, now = new Date()): Promise<Booking> {
+export async function moveInstall(
+  db: Knex,
+  scope: QuoteScope,
+  quoteId: string,
+  request: BookingRequest,
+  _actor: Actor,
+  now = new Date(),
+): Promise<Booking> {
   return db.transaction(async (trx) => {
     const quote = await lockQuote(trx, { by: "staff", scope, quoteId });
     const live = await liveBookingRow(trx, quote.id, true);
@@ -424,7 +596,13 @@ export async function moveInstall(db: Knex, scope: QuoteScope, quoteId: string, 
       await sp("bay_reservations").where({ booking_id: live.id }).delete();
       const [b] = (await sp("bookings")
         .where({ id: live.id })
-        .update({ starts_at: slot.start, ends_at: slot.end, sequence: live.sequence + 1, reminder_queued_at: null, updated_at: sp.fn.now() })
+        .update({
+          starts_at: slot.start,
+          ends_at: slot.end,
+          sequence: live.sequence + 1,
+          reminder_queued_at: null,
+          updated_at: sp.fn.now(),
+        })
         .returning("*")) as BookingRow[];
       await reserve(sp, live.id, quote.shop_id, slot);
       return b!;
@@ -467,7 +645,11 @@ export async function queueDueReminders(db: Knex, now = new Date()): Promise<num
       .where("b.status", "booked")
       .whereNull("b.reminder_queued_at")
       .andWhere("b.starts_at", ">", now)
-      .whereRaw(`(b.starts_at at time zone ${zone})::date = (?::timestamptz at time zone ${zone})::date + 1`, [DEFAULT_TIME_ZONE, now.toISOString(), DEFAULT_TIME_ZONE])
+      .whereRaw(`(b.starts_at at time zone ${zone})::date = (?::timestamptz at time zone ${zone})::date + 1`, [
+        DEFAULT_TIME_ZONE,
+        now.toISOString(),
+        DEFAULT_TIME_ZONE,
+      ])
       .whereRaw(`extract(hour from ?::timestamptz at time zone ${zone}) >= ?`, [now.toISOString(), DEFAULT_TIME_ZONE, REMINDER_FROM_HOUR])
       .forUpdate("b")
       .skipLocked()
@@ -496,8 +678,15 @@ export async function calendar(db: Knex, shopId: string, opts: { from?: string; 
     .andWhere("b.starts_at", "<", end)
     .andWhere("b.ends_at", ">", start)
     .orderBy("b.starts_at")
-    .select("b.*", "q.number as quote_number", "q.vehicle_description", "c.name as customer_name")) as (BookingRow & { quote_number: number; vehicle_description: string; customer_name: string })[];
-  const held = await bookedBays(db, rows.map((r) => r.id));
+    .select("b.*", "q.number as quote_number", "q.vehicle_description", "c.name as customer_name")) as (BookingRow & {
+    quote_number: number;
+    vehicle_description: string;
+    customer_name: string;
+  })[];
+  const held = await bookedBays(
+    db,
+    rows.map((r) => r.id),
+  );
   const bays = await activeBays(db, shopId);
   // A bay archived after it was booked still shows its bookings.
   const extra = [...new Set([...held.values()].flat().map((h) => h.bayId))].filter((id) => !bays.some((b) => b.id === id));
@@ -520,4 +709,15 @@ export async function calendar(db: Knex, shopId: string, opts: { from?: string; 
 }
 
 /** These queries on the app's database handle, for pages and route handlers. */
-export const bookingQueries = bindAppDb({ bookInstall, calendar, cancelInstall, getSetup, liveBooking, moveInstall, queueDueReminders, saveSetup, slotsByToken, slotsForStaff });
+export const bookingQueries = bindAppDb({
+  bookInstall,
+  calendar,
+  cancelInstall,
+  getSetup,
+  liveBooking,
+  moveInstall,
+  queueDueReminders,
+  saveSetup,
+  slotsByToken,
+  slotsForStaff,
+});

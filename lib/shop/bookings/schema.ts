@@ -14,7 +14,8 @@ const isRealDate = (s: string) => {
   return !Number.isNaN(d.getTime()) && d.toISOString().slice(0, 10) === s;
 };
 
-const bayKindField = (what: string) => z.enum(BAY_KINDS, { error: `Pick the kind of bay for ${what}: ${BAY_KINDS.map((k) => BAY_KIND_LABEL[k].toLowerCase()).join(", ")}.` });
+const bayKindField = (what: string) =>
+  z.enum(BAY_KINDS, { error: `Pick the kind of bay for ${what}: ${BAY_KINDS.map((k) => BAY_KIND_LABEL[k].toLowerCase()).join(", ")}.` });
 
 const dayHours = z.object({
   weekday: z.number().int().min(1).max(7),
@@ -26,8 +27,14 @@ const dayHours = z.object({
 /** The bays-and-hours form: the text as typed; the output has minutes and numbers. */
 export const baysSetupSchema = z
   .object({
-    timeZone: z.string({ error: "Enter the shop's time zone." }).trim().min(1, "Enter the shop's time zone, e.g. America/Denver.").refine(isTimeZone, "Enter a time zone by its IANA name, e.g. America/Denver or America/Chicago."),
-    slotStepMinutes: z.coerce.number({ error: "Pick how often a start time is offered." }).refine((n) => (SLOT_STEPS as readonly number[]).includes(n), "Offer start times every 15, 30 or 60 minutes."),
+    timeZone: z
+      .string({ error: "Enter the shop's time zone." })
+      .trim()
+      .min(1, "Enter the shop's time zone, e.g. America/Denver.")
+      .refine(isTimeZone, "Enter a time zone by its IANA name, e.g. America/Denver or America/Chicago."),
+    slotStepMinutes: z.coerce
+      .number({ error: "Pick how often a start time is offered." })
+      .refine((n) => (SLOT_STEPS as readonly number[]).includes(n), "Offer start times every 15, 30 or 60 minutes."),
     weekdays: z.array(dayHours).length(7, "Give the hours of all seven weekdays."),
     closedDays: z
       .array(
@@ -50,7 +57,11 @@ export const baysSetupSchema = z
       .array(
         z.object({
           catalogItemId: z.uuid({ error: "Reload the page: this service is not known." }),
-          minutes: z.coerce.number({ error: "Enter the minutes as a number." }).int("Use whole minutes.").min(0, "Use 0 to 600 minutes.").max(600, "Use 0 to 600 minutes."),
+          minutes: z.coerce
+            .number({ error: "Enter the minutes as a number." })
+            .int("Use whole minutes.")
+            .min(0, "Use 0 to 600 minutes.")
+            .max(600, "Use 0 to 600 minutes."),
           bayKind: bayKindField("this service"),
         }),
       )
@@ -60,14 +71,26 @@ export const baysSetupSchema = z
     const seenWeekdays = new Set<number>();
     v.weekdays.forEach((h, i) => {
       const name = WEEKDAY_LABEL[h.weekday] ?? "That day";
-      if (seenWeekdays.has(h.weekday)) ctx.addIssue({ code: "custom", path: ["weekdays", i, "weekday"], message: `${name} is listed twice.` });
+      if (seenWeekdays.has(h.weekday))
+        ctx.addIssue({ code: "custom", path: ["weekdays", i, "weekday"], message: `${name} is listed twice.` });
       seenWeekdays.add(h.weekday);
       if (!h.open) return;
       const opens = hhmmToMinute(h.opens);
       const closes = hhmmToMinute(h.closes);
-      if (opens === null || opens >= 1440) ctx.addIssue({ code: "custom", path: ["weekdays", i, "opens"], message: `Enter ${name}'s opening time as HH:MM, e.g. 08:00.` });
-      if (closes === null) ctx.addIssue({ code: "custom", path: ["weekdays", i, "closes"], message: `Enter ${name}'s closing time as HH:MM, e.g. 17:00 (24:00 for midnight).` });
-      else if (opens !== null && closes <= opens) ctx.addIssue({ code: "custom", path: ["weekdays", i, "closes"], message: `${name} closes before it opens: enter a closing time after ${h.opens}.` });
+      if (opens === null || opens >= 1440)
+        ctx.addIssue({ code: "custom", path: ["weekdays", i, "opens"], message: `Enter ${name}'s opening time as HH:MM, e.g. 08:00.` });
+      if (closes === null)
+        ctx.addIssue({
+          code: "custom",
+          path: ["weekdays", i, "closes"],
+          message: `Enter ${name}'s closing time as HH:MM, e.g. 17:00 (24:00 for midnight).`,
+        });
+      else if (opens !== null && closes <= opens)
+        ctx.addIssue({
+          code: "custom",
+          path: ["weekdays", i, "closes"],
+          message: `${name} closes before it opens: enter a closing time after ${h.opens}.`,
+        });
     });
     const days = new Set<string>();
     v.closedDays.forEach((d, i) => {
@@ -77,12 +100,14 @@ export const baysSetupSchema = z
     const names = new Set<string>();
     v.bays.forEach((b, i) => {
       const key = b.name.toLowerCase();
-      if (names.has(key)) ctx.addIssue({ code: "custom", path: ["bays", i, "name"], message: `Two bays are called “${b.name}”: give each its own name.` });
+      if (names.has(key))
+        ctx.addIssue({ code: "custom", path: ["bays", i, "name"], message: `Two bays are called “${b.name}”: give each its own name.` });
       names.add(key);
     });
     const services = new Set<string>();
     v.serviceTimes.forEach((s, i) => {
-      if (services.has(s.catalogItemId)) ctx.addIssue({ code: "custom", path: ["serviceTimes", i, "catalogItemId"], message: "This service is listed twice." });
+      if (services.has(s.catalogItemId))
+        ctx.addIssue({ code: "custom", path: ["serviceTimes", i, "catalogItemId"], message: "This service is listed twice." });
       services.add(s.catalogItemId);
     });
   });
@@ -91,7 +116,9 @@ export type BaysSetupValues = z.output<typeof baysSetupSchema>;
 
 /** Opening hours as stored: minutes after local midnight, closed days left out. */
 export function openingHoursOf(v: BaysSetupValues): { weekday: number; opens: number; closes: number }[] {
-  return v.weekdays.filter((h) => h.open).map((h) => ({ weekday: h.weekday, opens: hhmmToMinute(h.opens)!, closes: hhmmToMinute(h.closes)! }));
+  return v.weekdays
+    .filter((h) => h.open)
+    .map((h) => ({ weekday: h.weekday, opens: hhmmToMinute(h.opens)!, closes: hhmmToMinute(h.closes)! }));
 }
 
 /** A start the customer or the counter picked; `bayId` pins the stretch of that bay's kind (counter only). */
@@ -110,12 +137,19 @@ export const publicBookingSchema = bookingRequestSchema.pick({ start: true });
 /** Which days of free slots to list: from a date in the shop's calendar, up to two weeks. */
 export const slotsQuerySchema = z.object({
   from: z.string().refine(isRealDate, "From: enter a date as YYYY-MM-DD.").optional(),
-  days: z.coerce.number({ error: `Days: use 1 to ${MAX_SLOT_DAYS}.` }).int(`Days: use 1 to ${MAX_SLOT_DAYS}.`).min(1, `Days: use 1 to ${MAX_SLOT_DAYS}.`).max(MAX_SLOT_DAYS, `Days: use 1 to ${MAX_SLOT_DAYS}.`).optional(),
+  days: z.coerce
+    .number({ error: `Days: use 1 to ${MAX_SLOT_DAYS}.` })
+    .int(`Days: use 1 to ${MAX_SLOT_DAYS}.`)
+    .min(1, `Days: use 1 to ${MAX_SLOT_DAYS}.`)
+    .max(MAX_SLOT_DAYS, `Days: use 1 to ${MAX_SLOT_DAYS}.`)
+    .optional(),
 });
 
 /** The staff calendar's range: a day or a week from a date. */
 export const calendarQuerySchema = z.object({
   from: z.string().refine(isRealDate, "From: enter a date as YYYY-MM-DD.").optional(),
-  days: z.coerce.number({ error: "Days: use 1 or 7." }).refine((n) => n === 1 || n === 7, "Days: use 1 or 7.").optional(),
+  days: z.coerce
+    .number({ error: "Days: use 1 or 7." })
+    .refine((n) => n === 1 || n === 7, "Days: use 1 or 7.")
+    .optional(),
 });
-

@@ -13,7 +13,14 @@ const H = (h: number, m = 0) => h * 60 + m;
 const week: Schedule = {
   timeZone: DENVER,
   stepMinutes: 30,
-  hours: { 1: { opens: H(8), closes: H(17) }, 2: { opens: H(8), closes: H(17) }, 3: { opens: H(8), closes: H(17) }, 4: { opens: H(8), closes: H(17) }, 5: { opens: H(8), closes: H(17) }, 6: { opens: H(9), closes: H(13) } },
+  hours: {
+    1: { opens: H(8), closes: H(17) },
+    2: { opens: H(8), closes: H(17) },
+    3: { opens: H(8), closes: H(17) },
+    4: { opens: H(8), closes: H(17) },
+    5: { opens: H(8), closes: H(17) },
+    6: { opens: H(9), closes: H(13) },
+  },
   closedDays: new Map([["2027-03-17", "Stock count"]]),
 };
 const bays: BayLite[] = [
@@ -24,7 +31,15 @@ const bays: BayLite[] = [
 /** Friday 2027-03-12, 05:00 in Denver. */
 const NOW = new Date("2027-03-12T12:00:00Z");
 const mountFour = [{ bayKind: "lift_bay" as const, minutes: 80 }];
-const ctx = (over: Partial<SlotContext> = {}): SlotContext => ({ schedule: week, bays, held: [], segments: mountFour, now: NOW, horizonDays: 60, ...over });
+const ctx = (over: Partial<SlotContext> = {}): SlotContext => ({
+  schedule: week,
+  bays,
+  held: [],
+  segments: mountFour,
+  now: NOW,
+  horizonDays: 60,
+  ...over,
+});
 const at = (iso: string) => new Date(iso);
 const held = (bayId: string, from: string, to: string): Held => ({ bayId, start: Date.parse(from), end: Date.parse(to) });
 
@@ -60,7 +75,9 @@ describe("free slots", () => {
   it("use the second lift while the first is held, and offer nothing when both are", () => {
     const one = [held("lift-a", "2027-03-15T14:00:00Z", "2027-03-15T15:20:00Z")];
     const [a] = freeSlots({ ...ctx({ held: one }), fromDate: "2027-03-15", days: 1 });
-    expect(a!.slots[0]!.placements).toEqual([{ bayId: "lift-b", bayKind: "lift_bay", start: at("2027-03-15T14:00:00Z"), end: at("2027-03-15T15:20:00Z") }]);
+    expect(a!.slots[0]!.placements).toEqual([
+      { bayId: "lift-b", bayKind: "lift_bay", start: at("2027-03-15T14:00:00Z"), end: at("2027-03-15T15:20:00Z") },
+    ]);
     const both = [...one, held("lift-b", "2027-03-15T14:00:00Z", "2027-03-15T16:00:00Z")];
     const [b] = freeSlots({ ...ctx({ held: both }), fromDate: "2027-03-15", days: 1 });
     // Held until 15:20 and 16:00 UTC: the first start is 15:30 UTC, on the first lift.
@@ -91,7 +108,11 @@ describe("free slots", () => {
     expect(spring!.slots).toHaveLength(45);
     expect(spring!.slots[0]!.start.toISOString()).toBe("2027-03-14T07:00:00.000Z"); // 00:00 MST
     expect(spring!.slots.at(-1)!.end.toISOString()).toBe("2027-03-15T06:00:00.000Z"); // 24:00 MDT
-    const [autumn] = freeSlots({ ...ctx({ schedule: allDay, segments: hourJob, now: new Date("2027-11-01T00:00:00Z") }), fromDate: "2027-11-07", days: 1 });
+    const [autumn] = freeSlots({
+      ...ctx({ schedule: allDay, segments: hourJob, now: new Date("2027-11-01T00:00:00Z") }),
+      fromDate: "2027-11-07",
+      days: 1,
+    });
     expect(autumn!.slots).toHaveLength(49);
   });
 });
@@ -111,7 +132,11 @@ describe("one chosen start", () => {
   it("refuses each bad start with a message that names the field and says why", () => {
     const cases: [string, string, RegExp][] = [
       ["2027-03-12T11:00:00Z", "past", /^Install time: that time has already passed/],
-      ["2027-03-15T22:00:00Z", "outside_hours", /^Install time: on Mondays the shop works 8:00 AM to 5:00 PM, and this work takes 1 h 20 min/],
+      [
+        "2027-03-15T22:00:00Z",
+        "outside_hours",
+        /^Install time: on Mondays the shop works 8:00 AM to 5:00 PM, and this work takes 1 h 20 min/,
+      ],
       ["2027-03-15T13:30:00Z", "outside_hours", /8:00 AM/],
       ["2027-03-17T15:00:00Z", "closed_day", /^Install time: the shop is closed on Wednesday, March 17, 2027 \(Stock count\)\.$/],
       ["2027-03-14T16:00:00Z", "closed_weekday", /^Install time: the shop is closed on Sundays\.$/],
@@ -129,13 +154,22 @@ describe("one chosen start", () => {
   });
 
   it("refuses a start where every bay of the kind is held, and one the shop has no bay for", () => {
-    const busy = [held("lift-a", "2027-03-15T14:30:00Z", "2027-03-15T15:00:00Z"), held("lift-b", "2027-03-15T15:00:00Z", "2027-03-15T15:10:00Z")];
+    const busy = [
+      held("lift-a", "2027-03-15T14:30:00Z", "2027-03-15T15:00:00Z"),
+      held("lift-b", "2027-03-15T15:00:00Z", "2027-03-15T15:10:00Z"),
+    ];
     const taken = checkStart(at("2027-03-15T14:00:00Z"), ctx({ held: busy }));
     expect(!taken.ok && taken.problem.code).toBe("taken");
     // Back to back is not an overlap: held until 15:20 and a start at 15:20 share no minute.
-    const edge = checkStart(at("2027-03-15T15:30:00Z"), ctx({ held: [held("lift-a", "2027-03-15T14:00:00Z", "2027-03-15T15:30:00Z")], bays: [bays[0]!] }));
+    const edge = checkStart(
+      at("2027-03-15T15:30:00Z"),
+      ctx({ held: [held("lift-a", "2027-03-15T14:00:00Z", "2027-03-15T15:30:00Z")], bays: [bays[0]!] }),
+    );
     expect(edge.ok).toBe(true);
-    const noRack = checkStart(at("2027-03-15T14:00:00Z"), ctx({ bays: [bays[0]!], segments: [{ bayKind: "alignment_rack", minutes: 60 }] }));
+    const noRack = checkStart(
+      at("2027-03-15T14:00:00Z"),
+      ctx({ bays: [bays[0]!], segments: [{ bayKind: "alignment_rack", minutes: 60 }] }),
+    );
     expect(!noRack.ok && noRack.problem.message).toBe("Install time: this work needs an alignment rack, and the shop has none set up.");
     const nothing = checkStart(at("2027-03-15T14:00:00Z"), ctx({ segments: [] }));
     expect(!nothing.ok && nothing.problem.code).toBe("no_work");

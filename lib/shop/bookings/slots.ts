@@ -60,7 +60,8 @@ export interface SlotContext {
   pinnedBayId?: string;
 }
 
-export type SlotProblemCode = "no_work" | "no_bay" | "past" | "too_far" | "closed_day" | "closed_weekday" | "outside_hours" | "off_step" | "taken";
+export type SlotProblemCode =
+  "no_work" | "no_bay" | "past" | "too_far" | "closed_day" | "closed_weekday" | "outside_hours" | "off_step" | "taken";
 
 export interface SlotProblem {
   code: SlotProblemCode;
@@ -101,14 +102,18 @@ function aBay(kind: BayKind): string {
   return `${/^[aeiou]/.test(words) ? "an" : "a"} ${words}`;
 }
 
-const problem = (code: SlotProblemCode, text: string): { ok: false; problem: SlotProblem } => ({ ok: false, problem: { code, message: `${START_FIELD_LABEL}: ${text}` } });
+const problem = (code: SlotProblemCode, text: string): { ok: false; problem: SlotProblem } => ({
+  ok: false,
+  problem: { code, message: `${START_FIELD_LABEL}: ${text}` },
+});
 
 /**
  * Why this job cannot be booked at any time (no bay work, or a kind of bay the shop lacks), or
  * null when some start may do.
  */
 export function cannotBook(ctx: Pick<SlotContext, "bays" | "segments">): SlotProblem | null {
-  if (totalOf(ctx.segments) <= 0) return problem("no_work", "this quote has no work that takes bay time, so there is nothing to book.").problem;
+  if (totalOf(ctx.segments) <= 0)
+    return problem("no_work", "this quote has no work that takes bay time, so there is nothing to book.").problem;
   const lacking = missingKinds(ctx);
   if (lacking.length) return problem("no_bay", `this work needs ${lacking.map(aBay).join(" and ")}, and the shop has none set up.`).problem;
   return null;
@@ -130,9 +135,14 @@ export function checkStart(start: Date, ctx: SlotContext): { ok: true; slot: Slo
   if (!Number.isFinite(t) || t <= ctx.now.getTime()) return problem("past", "that time has already passed. Pick a time from now on.");
   const local = wallTime(start, schedule.timeZone);
   const today = wallTime(ctx.now, schedule.timeZone).date;
-  if (local.date > addDays(today, ctx.horizonDays)) return problem("too_far", `bookings open ${ctx.horizonDays} days ahead; pick a day up to ${formatDay(addDays(today, ctx.horizonDays))}.`);
+  if (local.date > addDays(today, ctx.horizonDays))
+    return problem(
+      "too_far",
+      `bookings open ${ctx.horizonDays} days ahead; pick a day up to ${formatDay(addDays(today, ctx.horizonDays))}.`,
+    );
   const closedNote = schedule.closedDays.get(local.date);
-  if (closedNote !== undefined) return problem("closed_day", `the shop is closed on ${formatDay(local.date)}${closedNote ? ` (${closedNote})` : ""}.`);
+  if (closedNote !== undefined)
+    return problem("closed_day", `the shop is closed on ${formatDay(local.date)}${closedNote ? ` (${closedNote})` : ""}.`);
   const hours = schedule.hours[local.weekday];
   if (!hours) return problem("closed_weekday", `the shop is closed on ${WEEKDAY_LABEL[local.weekday]}s.`);
   const opens = zonedInstant(local.date, hours.opens, schedule.timeZone).getTime();
@@ -144,7 +154,8 @@ export function checkStart(start: Date, ctx: SlotContext): { ok: true; slot: Slo
       `on ${WEEKDAY_LABEL[local.weekday]}s the shop works ${formatMinute(hours.opens)} to ${formatMinute(hours.closes)}, and this work takes ${formatDuration(minutes)}: pick a start that ends by closing time.`,
     );
   }
-  if ((t - opens) % (schedule.stepMinutes * MINUTE) !== 0) return problem("off_step", `pick one of the offered times (every ${schedule.stepMinutes} minutes from opening).`);
+  if ((t - opens) % (schedule.stepMinutes * MINUTE) !== 0)
+    return problem("off_step", `pick one of the offered times (every ${schedule.stepMinutes} minutes from opening).`);
   const placements = placeAt(t, ctx);
   if (!placements) return problem("taken", "that time is already taken in the shop's bays. Pick another time.");
   return { ok: true, slot: { start: new Date(t), end: new Date(end), placements } };

@@ -24,7 +24,15 @@ export const BOOKING_STATUS_TONE: Record<BookingStatus, "steel" | "contact"> = {
 
 /** ISO 8601 weekdays, Monday first. */
 export const WEEKDAYS = [1, 2, 3, 4, 5, 6, 7] as const;
-export const WEEKDAY_LABEL: Record<number, string> = { 1: "Monday", 2: "Tuesday", 3: "Wednesday", 4: "Thursday", 5: "Friday", 6: "Saturday", 7: "Sunday" };
+export const WEEKDAY_LABEL: Record<number, string> = {
+  1: "Monday",
+  2: "Tuesday",
+  3: "Wednesday",
+  4: "Thursday",
+  5: "Friday",
+  6: "Saturday",
+  7: "Sunday",
+};
 
 /** What the shop's calendar is kept in until the owner picks another zone. */
 export const DEFAULT_TIME_ZONE = "America/Denver";

@@ -10,7 +10,13 @@ describe("a quote's bay time", () => {
       { kind: "service", unit: "each", quantity: 1, description: "Alignment", time: { minutesPerUnit: 60, bayKind: "alignment_rack" } },
       { kind: "service", unit: "each", quantity: 4, description: "Mount and balance", time: { minutesPerUnit: 20, bayKind: "lift_bay" } },
       { kind: "service", unit: "each", quantity: 4, description: "Beadlock assembly", time: { minutesPerUnit: 30, bayKind: "lift_bay" } },
-      { kind: "service", unit: "hour", quantity: 1.5, description: "Fender trimming", time: { minutesPerUnit: 60, bayKind: "fabrication_bay" } },
+      {
+        kind: "service",
+        unit: "hour",
+        quantity: 1.5,
+        description: "Fender trimming",
+        time: { minutesPerUnit: 60, bayKind: "fabrication_bay" },
+      },
       { kind: "service", unit: "each", quantity: 4, description: "Disposal", time: { minutesPerUnit: 0, bayKind: "lift_bay" } },
     ]);
     expect(w.segments).toEqual([

@@ -32,7 +32,8 @@ export interface Workload {
 function lineTime(line: WorkLine): { bayKind: BayKind; minutes: number } | null {
   if (line.time) return { bayKind: line.time.bayKind, minutes: line.quantity * line.time.minutesPerUnit };
   // Hourly labour written by hand, or a service whose catalog item is gone: the hours quoted.
-  if ((line.kind === "custom" || line.kind === "service") && line.unit === "hour") return { bayKind: HAND_WRITTEN_HOURS_BAY, minutes: line.quantity * 60 };
+  if ((line.kind === "custom" || line.kind === "service") && line.unit === "hour")
+    return { bayKind: HAND_WRITTEN_HOURS_BAY, minutes: line.quantity * 60 };
   // A counted service whose item is gone: one job of unknown kind, timed as "other" once.
   if (line.kind === "service") return { bayKind: SERVICE_TIME_DEFAULTS.other.bayKind, minutes: SERVICE_TIME_DEFAULTS.other.minutes };
   return null;
@@ -55,6 +56,9 @@ export function workloadOf(lines: readonly WorkLine[]): Workload {
     byKind.set(t.bayKind, (byKind.get(t.bayKind) ?? 0) + t.minutes);
   }
   // Whole minutes, rounded up: a part hour never shortens the time held.
-  const segments = BAY_KIND_SEQUENCE.filter((k) => byKind.has(k)).map((bayKind) => ({ bayKind, minutes: Math.ceil(byKind.get(bayKind)! - 1e-9) }));
+  const segments = BAY_KIND_SEQUENCE.filter((k) => byKind.has(k)).map((bayKind) => ({
+    bayKind,
+    minutes: Math.ceil(byKind.get(bayKind)! - 1e-9),
+  }));
   return { segments, minutes: segments.reduce((n, s) => n + s.minutes, 0), parts };
 }

@@ -9,7 +9,16 @@ const formats = new Map<string, Intl.DateTimeFormat>();
 function partsFormat(timeZone: string): Intl.DateTimeFormat {
   let f = formats.get(timeZone);
   if (!f) {
-    f = new Intl.DateTimeFormat("en-US", { timeZone, hourCycle: "h23", year: "numeric", month: "2-digit", day: "2-digit", hour: "2-digit", minute: "2-digit", second: "2-digit" });
+    f = new Intl.DateTimeFormat("en-US", {
+      timeZone,
+      hourCycle: "h23",
+      year: "numeric",
+      month: "2-digit",
+      day: "2-digit",
+      hour: "2-digit",
+      minute: "2-digit",
+      second: "2-digit",
+    });
     formats.set(timeZone, f);
   }
   return f;
@@ -121,7 +130,13 @@ export function zonedInstant(date: string, minute: number, timeZone: string): Da
 /** "Sunday, March 14, 2027" for a calendar date (no time zone involved). */
 export function formatDay(date: string): string {
   const [y, m, d] = date.split("-").map(Number) as [number, number, number];
-  return new Date(Date.UTC(y, m - 1, d, 12)).toLocaleDateString("en-US", { timeZone: "UTC", weekday: "long", year: "numeric", month: "long", day: "numeric" });
+  return new Date(Date.UTC(y, m - 1, d, 12)).toLocaleDateString("en-US", {
+    timeZone: "UTC",
+    weekday: "long",
+    year: "numeric",
+    month: "long",
+    day: "numeric",
+  });
 }
 
 /** "8:00 AM" for minutes after midnight. */
@@ -148,7 +163,16 @@ export function hhmmToMinute(text: string): number | null {
 
 /** "Tue, Mar 16, 2027, 9:00 AM MDT": an instant as the shop's clock shows it. */
 export function formatInstant(instant: Date | string, timeZone: string): string {
-  return new Date(instant).toLocaleString("en-US", { timeZone, weekday: "short", month: "short", day: "numeric", year: "numeric", hour: "numeric", minute: "2-digit", timeZoneName: "short" });
+  return new Date(instant).toLocaleString("en-US", {
+    timeZone,
+    weekday: "short",
+    month: "short",
+    day: "numeric",
+    year: "numeric",
+    hour: "numeric",
+    minute: "2-digit",
+    timeZoneName: "short",
+  });
 }
 
 /** "9:00 AM" in the zone. */

@@ -49,11 +49,33 @@ export interface CatalogPage {
 /** The columns the fitment finder reads of a stocked tire or wheel. */
 export type StockItem = Pick<
   CatalogItem,
-  "id" | "sku" | "description" | "priceCents" | "qtyOnHand" | "tireSize" | "wheelDiameterIn" | "wheelWidthIn" | "wheelOffsetMm" | "boltPattern" | "centerBoreMm" | "beadlock"
+  | "id"
+  | "sku"
+  | "description"
+  | "priceCents"
+  | "qtyOnHand"
+  | "tireSize"
+  | "wheelDiameterIn"
+  | "wheelWidthIn"
+  | "wheelOffsetMm"
+  | "boltPattern"
+  | "centerBoreMm"
+  | "beadlock"
 >;
 type StockRow = Pick<
   CatalogItemRow,
-  "id" | "sku" | "description" | "price_cents" | "qty_on_hand" | "tire_size" | "wheel_diameter_in" | "wheel_width_in" | "wheel_offset_mm" | "bolt_pattern" | "center_bore_mm" | "beadlock"
+  | "id"
+  | "sku"
+  | "description"
+  | "price_cents"
+  | "qty_on_hand"
+  | "tire_size"
+  | "wheel_diameter_in"
+  | "wheel_width_in"
+  | "wheel_offset_mm"
+  | "bolt_pattern"
+  | "center_bore_mm"
+  | "beadlock"
 >;
 
 /**

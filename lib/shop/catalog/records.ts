@@ -20,8 +20,8 @@ export interface CsvRecord {
 
 /** papaparse's error codes in plain words; its own messages are written for programmers. */
 const PROBLEM: Record<string, string> = {
-  MissingQuotes: "A quoted cell is never closed: a \" opens it and no \" ends it, so the rest of the file may have been read into this cell.",
-  InvalidQuotes: "A quote mark inside a quoted cell must be written twice (\"\").",
+  MissingQuotes: 'A quoted cell is never closed: a " opens it and no " ends it, so the rest of the file may have been read into this cell.',
+  InvalidQuotes: 'A quote mark inside a quoted cell must be written twice ("").',
 };
 
 const LINE_BREAK = /\r\n|\n|\r/g;
@@ -43,7 +43,9 @@ export function readCsvRecords(text: string): CsvRecord[] {
         row: records.length + 1,
         line,
         blank: cells.every((c) => c.trim() === ""),
-        ...(error ? { problem: PROBLEM[error.code] ?? "The cells of this row could not be told apart. Check its quote marks and commas." } : {}),
+        ...(error
+          ? { problem: PROBLEM[error.code] ?? "The cells of this row could not be told apart. Check its quote marks and commas." }
+          : {}),
       });
       const end = result.meta.cursor;
       line += (text.slice(start, end).match(LINE_BREAK) ?? []).length;

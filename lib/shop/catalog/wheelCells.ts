@@ -8,7 +8,14 @@ import type { CatalogInput, CsvColumn } from "./csv";
 
 type WheelFields = Pick<
   CatalogInput,
-  "wheel_diameter_in" | "wheel_width_in" | "wheel_offset_mm" | "wheel_backspacing_in" | "wheel_backspacing_reference" | "bolt_pattern" | "center_bore_mm" | "beadlock"
+  | "wheel_diameter_in"
+  | "wheel_width_in"
+  | "wheel_offset_mm"
+  | "wheel_backspacing_in"
+  | "wheel_backspacing_reference"
+  | "bolt_pattern"
+  | "center_bore_mm"
+  | "beadlock"
 >;
 
 /**
@@ -16,18 +23,23 @@ type WheelFields = Pick<
  * its column. The engine is told the field's name as people read it ("Wheel width", "Offset"),
  * so its range messages read as sentences about the cell.
  */
-export function readWheelCells(v: (c: CsvColumn) => string, fail: (column: CsvColumn, message: string) => void, item: WheelFields, asWritten: (c: CsvColumn) => string = (c) => c): void {
+export function readWheelCells(
+  v: (c: CsvColumn) => string,
+  fail: (column: CsvColumn, message: string) => void,
+  item: WheelFields,
+  asWritten: (c: CsvColumn) => string = (c) => c,
+): void {
   /** A number cell: empty and non-numbers are refused here, the range is the caller's. */
   const number = (c: CsvColumn, label: string, example: string): number | null => {
     const t = v(c);
-    if (t === "") return fail(c, `${label} is empty; enter a number, e.g. ${example}.`), null;
+    if (t === "") return (fail(c, `${label} is empty; enter a number, e.g. ${example}.`), null);
     const n = Number(t);
-    if (!Number.isFinite(n)) return fail(c, `${label} must be a number, e.g. ${example}; got “${t}”.`), null;
+    if (!Number.isFinite(n)) return (fail(c, `${label} must be a number, e.g. ${example}; got “${t}”.`), null);
     return n;
   };
   const ranged = (c: CsvColumn, label: string, min: number, max: number, example: string): number | null => {
     const n = number(c, label, example);
-    if (n !== null && (n < min || n > max)) return fail(c, `${label} must be from ${min} to ${max}, e.g. ${example}; got ${n}.`), null;
+    if (n !== null && (n < min || n > max)) return (fail(c, `${label} must be from ${min} to ${max}, e.g. ${example}; got ${n}.`), null);
     return n;
   };
   const engine = (c: CsvColumn, run: () => void) => {
@@ -52,10 +64,12 @@ export function readWheelCells(v: (c: CsvColumn) => string, fail: (column: CsvCo
   else if (!offText && !bsText) fail("wheel_offset_mm", `Give the offset (mm) or the backspacing (in) with ${refColumn}.`);
   else if (offText) {
     const offset = number("wheel_offset_mm", "Offset (mm)", "-12");
-    if (offset !== null && width !== null) engine("wheel_offset_mm", () => (item.wheel_offset_mm = checkOffsetMm(offset, width!, "Offset")));
+    if (offset !== null && width !== null)
+      engine("wheel_offset_mm", () => (item.wheel_offset_mm = checkOffsetMm(offset, width!, "Offset")));
   } else {
     const bs = number("wheel_backspacing_in", "Backspacing (in)", "4.5");
-    if (!(BACKSPACING_REFERENCES as readonly string[]).includes(ref)) fail("wheel_backspacing_reference", `Say where the backspacing was measured to: ${BACKSPACING_REFERENCES.join(" or ")}.`);
+    if (!(BACKSPACING_REFERENCES as readonly string[]).includes(ref))
+      fail("wheel_backspacing_reference", `Say where the backspacing was measured to: ${BACKSPACING_REFERENCES.join(" or ")}.`);
     else if (bs !== null && width !== null) {
       try {
         const reference = ref as BackspacingReference;
@@ -65,7 +79,10 @@ export function readWheelCells(v: (c: CsvColumn) => string, fail: (column: CsvCo
       } catch (e) {
         if (!(e instanceof FitmentInputError)) throw e;
         // The engine refuses a backspacing that puts the mounting face past a bead seat (or outside −10…30 in).
-        fail("wheel_backspacing_in", `Backspacing ${bs} in, measured to the ${ref}, does not fit a ${width} in wide wheel. Check the number and ${refColumn}.`);
+        fail(
+          "wheel_backspacing_in",
+          `Backspacing ${bs} in, measured to the ${ref}, does not fit a ${width} in wide wheel. Check the number and ${refColumn}.`,
+        );
       }
     }
   }

@@ -33,7 +33,14 @@ export interface CustomerVehicle {
  * // { id: "c", name: "Ann", phone: "555 0100", email: "", createdAt: "…Z", updatedAt: "…Z" }
  */
 export function customerDto(r: CustomerRow): Customer {
-  return { id: r.id, name: r.name, phone: r.phone, email: r.email, createdAt: new Date(r.created_at).toISOString(), updatedAt: new Date(r.updated_at).toISOString() };
+  return {
+    id: r.id,
+    name: r.name,
+    phone: r.phone,
+    email: r.email,
+    createdAt: new Date(r.created_at).toISOString(),
+    updatedAt: new Date(r.updated_at).toISOString(),
+  };
 }
 
 export function customerVehicleDto(r: CustomerVehicleRow): CustomerVehicle {

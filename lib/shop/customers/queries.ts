@@ -52,7 +52,8 @@ async function findDuplicateCustomer(db: Knex, shopId: string, c: CustomerInput)
  */
 export async function createCustomer(db: Knex, shopId: string, c: CustomerInput): Promise<Customer> {
   const existing = await findDuplicateCustomer(db, shopId, c);
-  if (existing) throw new ConflictError(`${existing.name} already has this phone number or e-mail. Pick the existing customer.`, { existing });
+  if (existing)
+    throw new ConflictError(`${existing.name} already has this phone number or e-mail. Pick the existing customer.`, { existing });
   if (!c.phone && !c.email) throw new InvalidError("Enter a phone number or an e-mail address.");
   const [row] = await db<CustomerRow>("customers")
     .insert({ shop_id: shopId, name: c.name, phone: c.phone, phone_digits: phoneDigits(c.phone), email: c.email })
@@ -68,7 +69,9 @@ export async function getCustomer(db: Knex, shopId: string, id: string): Promise
 }
 
 export async function listVehicles(db: Knex, shopId: string, customerId: string): Promise<CustomerVehicle[]> {
-  return (await db<CustomerVehicleRow>("customer_vehicles").where({ shop_id: shopId, customer_id: customerId }).orderBy("created_at", "desc")).map(customerVehicleDto);
+  return (
+    await db<CustomerVehicleRow>("customer_vehicles").where({ shop_id: shopId, customer_id: customerId }).orderBy("created_at", "desc")
+  ).map(customerVehicleDto);
 }
 
 /** These queries on the app's database handle, for pages and route handlers. */

@@ -15,7 +15,11 @@ import { optionalLengthField, setupSchema } from "@/lib/setup/schema";
 const engineMessage = (e: unknown, fallback: string) => (e instanceof FitmentInputError ? e.message : fallback);
 
 const counterVehicleFields = z.object({
-  description: z.string({ error: "Describe the vehicle, e.g. 2016 half-ton pickup." }).trim().min(1, "Describe the vehicle, e.g. 2016 half-ton pickup.").max(120, "Use at most 120 characters."),
+  description: z
+    .string({ error: "Describe the vehicle, e.g. 2016 half-ton pickup." })
+    .trim()
+    .min(1, "Describe the vehicle, e.g. 2016 half-ton pickup.")
+    .max(120, "Use at most 120 characters."),
   boltPattern: z
     .string({ error: "Enter the bolt pattern, e.g. 6x5.5." })
     .trim()
@@ -36,7 +40,9 @@ const counterVehicleFields = z.object({
     message: `${SETUP_FIELD_LABEL.spacerMm}: the counter compares wheels without a spacer; leave it empty and enter the wheel as it is.`,
   }),
   axleRatio: z
-    .union([z.literal("").transform(() => undefined), z.coerce.number().min(1).max(10)], { error: "Enter the axle ratio as a number from 1 to 10, e.g. 3.73, or leave it empty." })
+    .union([z.literal("").transform(() => undefined), z.coerce.number().min(1).max(10)], {
+      error: "Enter the axle ratio as a number from 1 to 10, e.g. 3.73, or leave it empty.",
+    })
     .optional(),
 });
 
@@ -59,11 +65,21 @@ const FLAT_FIELD = {
   backspacingFrom: "currentSetup.position.reference",
 } as const;
 
-const isFlat = (v: unknown): v is Record<string, unknown> => isObject(v) && !("currentSetup" in v) && Object.keys(FLAT_FIELD).some((k) => k in v);
+const isFlat = (v: unknown): v is Record<string, unknown> =>
+  isObject(v) && !("currentSetup" in v) && Object.keys(FLAT_FIELD).some((k) => k in v);
 
 function fromFlat(v: Record<string, unknown>): Record<string, unknown> {
   const { tireSize, wheelDiameterIn, wheelWidthIn, offsetMode, offsetMm, backspacingIn, backspacingFrom, ...rest } = v;
-  return { ...rest, currentSetup: { tire: tireSize, wheelDiameterIn, wheelWidthIn, position: { mode: offsetMode, offsetMm, backspacingIn, reference: backspacingFrom, flangeIn: DEFAULT_FLANGE_IN }, spacerMm: 0 } };
+  return {
+    ...rest,
+    currentSetup: {
+      tire: tireSize,
+      wheelDiameterIn,
+      wheelWidthIn,
+      position: { mode: offsetMode, offsetMm, backspacingIn, reference: backspacingFrom, flangeIn: DEFAULT_FLANGE_IN },
+      spacerMm: 0,
+    },
+  };
 }
 
 const flatPath = (path: PropertyKey[]): PropertyKey[] => {
@@ -76,15 +92,13 @@ const flatPath = (path: PropertyKey[]): PropertyKey[] => {
  * The counter's vehicle from a form or a request. The flat shape of older clients is read too
  * (its problems keyed by its own field names).
  */
-export const counterVehicleSchema = z
-  .unknown()
-  .transform((v, ctx) => {
-    const flat = isFlat(v);
-    const r = counterVehicleFields.safeParse(flat ? fromFlat(v) : v);
-    if (r.success) return r.data;
-    for (const i of r.error.issues) ctx.addIssue({ code: "custom", path: flat ? flatPath(i.path) : i.path, message: i.message });
-    return z.NEVER;
-  }) as unknown as z.ZodType<CounterVehicle, CounterVehicleForm>;
+export const counterVehicleSchema = z.unknown().transform((v, ctx) => {
+  const flat = isFlat(v);
+  const r = counterVehicleFields.safeParse(flat ? fromFlat(v) : v);
+  if (r.success) return r.data;
+  for (const i of r.error.issues) ctx.addIssue({ code: "custom", path: flat ? flatPath(i.path) : i.path, message: i.message });
+  return z.NEVER;
+}) as unknown as z.ZodType<CounterVehicle, CounterVehicleForm>;
 
 /** What the counter's comparison reads of a vehicle: its setup as the engine takes it. */
 export interface CounterVehicleForEngine {
@@ -109,7 +123,13 @@ export interface CounterVehicleForEngine {
  *   currentSetup: { tire: "265/70R17", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "backspacing", backspacingIn: 5.5, reference: "bead-seat", flangeIn: 0.5 }, spacerMm: 0 } }).wheel;
  * // { diameterIn: 17, widthIn: 8, offsetMm: 38.1 }   (5.5 − 8 / 2 = 1.5 in = 38.1 mm)
  */
-export function counterVehicleForEngine(v: { description: string; boltPattern: string; hubBoreMm?: number | null; axleRatio?: number | null; currentSetup: Setup }): CounterVehicleForEngine {
+export function counterVehicleForEngine(v: {
+  description: string;
+  boltPattern: string;
+  hubBoreMm?: number | null;
+  axleRatio?: number | null;
+  currentSetup: Setup;
+}): CounterVehicleForEngine {
   return {
     description: v.description,
     boltPattern: parseBoltPattern(v.boltPattern).text,

@@ -19,7 +19,8 @@ export function payments(): Stripe {
         ? {
             host,
             port: Number(process.env.STRIPE_API_PORT ?? 443),
-            protocol: (process.env.STRIPE_API_PROTOCOL ?? (host === "127.0.0.1" || host === "localhost" ? "http" : "https")) as "http" | "https",
+            protocol: (process.env.STRIPE_API_PROTOCOL ?? (host === "127.0.0.1" || host === "localhost" ? "http" : "https")) as
+              "http" | "https",
           }
         : {}),
       maxNetworkRetries: 1,
@@ -57,7 +58,11 @@ export async function createDepositSession(i: DepositSessionInput): Promise<{ id
     line_items: [
       {
         quantity: 1,
-        price_data: { currency: "usd", unit_amount: i.amountCents, product_data: { name: `Deposit for quote Q-${i.quoteNumber} at ${i.shopName}` } },
+        price_data: {
+          currency: "usd",
+          unit_amount: i.amountCents,
+          product_data: { name: `Deposit for quote Q-${i.quoteNumber} at ${i.shopName}` },
+        },
       },
     ],
     success_url: i.successUrl,

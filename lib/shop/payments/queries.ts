@@ -22,13 +22,18 @@ export async function applyPaymentEvent(db: Knex, event: PaymentEvent): Promise<
   // The schema checked this type's session shape (lib/shop/payments/schema.ts).
   const session = (event as Extract<PaymentEvent, { type: "checkout.session.completed" }>).data.object;
   return db.transaction(async (trx) => {
-    const first = await trx("payment_webhook_events").insert({ event_id: event.id, type: event.type, outcome: "pending" }).onConflict("event_id").ignore().returning("event_id");
+    const first = await trx("payment_webhook_events")
+      .insert({ event_id: event.id, type: event.type, outcome: "pending" })
+      .onConflict("event_id")
+      .ignore()
+      .returning("event_id");
     if (first.length === 0) return "duplicate";
     const payment = await trx<PaymentRow>("payments").where({ provider_session_id: session.id }).forUpdate().first();
     if (!payment) throw new UnknownReferenceError("Unknown checkout session.");
     const quote = await trx<QuoteRow>("quotes").where({ id: payment.quote_id, shop_id: payment.shop_id }).forUpdate().first();
     if (!quote) throw new UnknownReferenceError("Unknown quote.");
-    if (session.metadata?.quote_id !== quote.id || session.client_reference_id !== quote.id) throw new InvalidError("The event names another quote than its session.");
+    if (session.metadata?.quote_id !== quote.id || session.client_reference_id !== quote.id)
+      throw new InvalidError("The event names another quote than its session.");
     if ((session.currency ?? "").toLowerCase() !== "usd") throw new InvalidError("Deposits are taken in USD.");
     if (session.amount_total !== payment.amount_cents || payment.amount_cents !== quote.deposit_cents) {
       throw new InvalidError(`The paid amount ${session.amount_total} does not match the quote's deposit ${quote.deposit_cents}.`);
@@ -49,7 +54,10 @@ export async function applyPaymentEvent(db: Knex, event: PaymentEvent): Promise<
 }
 
 /** Who a deposit is between: the shop's current name and the customer's address ("" when none is on file). */
-export async function depositParties(db: Knex, quote: Pick<QuoteRow, "shop_id" | "customer_id">): Promise<{ shopName: string; customerEmail: string }> {
+export async function depositParties(
+  db: Knex,
+  quote: Pick<QuoteRow, "shop_id" | "customer_id">,
+): Promise<{ shopName: string; customerEmail: string }> {
   const [shop, customer] = await Promise.all([
     db("shops").where({ id: quote.shop_id }).first("name"),
     db("customers").where({ id: quote.customer_id, shop_id: quote.shop_id }).first("email"),
@@ -58,8 +66,18 @@ export async function depositParties(db: Knex, quote: Pick<QuoteRow, "shop_id" |
 }
 
 /** Records the provider's checkout session, so its webhook can be matched to the quote. */
-export async function recordDepositSession(db: Knex, quote: Pick<QuoteRow, "id" | "shop_id" | "deposit_cents">, sessionId: string): Promise<void> {
-  await db("payments").insert({ shop_id: quote.shop_id, quote_id: quote.id, provider_session_id: sessionId, amount_cents: quote.deposit_cents, currency: "usd" });
+export async function recordDepositSession(
+  db: Knex,
+  quote: Pick<QuoteRow, "id" | "shop_id" | "deposit_cents">,
+  sessionId: string,
+): Promise<void> {
+  await db("payments").insert({
+    shop_id: quote.shop_id,
+    quote_id: quote.id,
+    provider_session_id: sessionId,
+    amount_cents: quote.deposit_cents,
+    currency: "usd",
+  });
 }
 
 /** These queries on the app's database handle, for pages and route handlers. */

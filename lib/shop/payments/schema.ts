@@ -5,7 +5,11 @@ import { z } from "zod";
  * event is genuine, but a malformed one (a provider API change, a test tool) must be a 400 with
  * a message and nothing written, not a crash. Other fields pass through unread.
  */
-const eventBase = z.object({ id: z.string().min(1).max(255), type: z.string().min(1).max(255), data: z.object({ object: z.looseObject({}) }) });
+const eventBase = z.object({
+  id: z.string().min(1).max(255),
+  type: z.string().min(1).max(255),
+  data: z.object({ object: z.looseObject({}) }),
+});
 
 const checkoutSession = z.looseObject({
   id: z.string().min(1).max(255),

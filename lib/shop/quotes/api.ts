@@ -149,11 +149,26 @@ export function quoteLineDto(l: QuoteLineRow): QuoteLine {
 }
 
 export function quoteEventDto(e: QuoteEventRow): QuoteEvent {
-  return { id: String(e.id), fromStatus: e.from_status, toStatus: e.to_status, actorUserId: e.actor_user_id, actor: e.actor, note: e.note, at: iso(e.at) };
+  return {
+    id: String(e.id),
+    fromStatus: e.from_status,
+    toStatus: e.to_status,
+    actorUserId: e.actor_user_id,
+    actor: e.actor,
+    note: e.note,
+    at: iso(e.at),
+  };
 }
 
 /** A quote's detail as read on the server (rows) → what the browser receives. */
-export function quoteDetailDto(d: { quote: Omit<QuoteRow, "public_token_hash">; lines: QuoteLineRow[]; events: QuoteEventRow[]; customer: QuoteDetail["customer"]; createdByName: string | null; hubChecks: HubCheck[] }): QuoteDetail {
+export function quoteDetailDto(d: {
+  quote: Omit<QuoteRow, "public_token_hash">;
+  lines: QuoteLineRow[];
+  events: QuoteEventRow[];
+  customer: QuoteDetail["customer"];
+  createdByName: string | null;
+  hubChecks: HubCheck[];
+}): QuoteDetail {
   return {
     quote: quoteDto(d.quote),
     lines: d.lines.map(quoteLineDto),

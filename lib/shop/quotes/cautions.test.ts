@@ -16,7 +16,11 @@ describe("quote cautions", () => {
   });
 
   it("and not the words of a modification (a stored quote keeps its figures, not always its findings)", () => {
-    const worded = { ...fit, diameterChangeMm: 20, modifications: ["A lift or levelling kit is usually needed for this much extra diameter; follow the lift maker's instructions."] };
+    const worded = {
+      ...fit,
+      diameterChangeMm: 20,
+      modifications: ["A lift or levelling kit is usually needed for this much extra diameter; follow the lift maker's instructions."],
+    };
     expect(lift(worded)).toBe(false);
   });
 

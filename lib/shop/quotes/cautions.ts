@@ -11,12 +11,18 @@ export function quoteCautions(fit: Pick<FitmentSummary, "planned" | "diameterCha
     "Wheel fasteners: tighten in a crisscross order to the vehicle maker's torque figure and re-check the torque after the first 50 to 100 miles (80 to 160 km).",
   ];
   if (fit.planned.beadlock) {
-    out.push("Beadlock rings: tighten the ring bolts in stages in a crisscross order to the wheel maker's figure and re-check them regularly; follow the maker's assembly instructions and local rules on beadlock use on public roads.");
+    out.push(
+      "Beadlock rings: tighten the ring bolts in stages in a crisscross order to the wheel maker's figure and re-check them regularly; follow the maker's assembly instructions and local rules on beadlock use on public roads.",
+    );
   }
   // From the stored figure, so quotes kept before their findings were stored get it too.
   if (diameterChange(fit.diameterChangeMm) !== null) {
-    out.push("Lift and steering changes must be done to the lift maker's instructions and local vehicle codes; check brake lines, steering stops and clearance at full lock and full compression.");
+    out.push(
+      "Lift and steering changes must be done to the lift maker's instructions and local vehicle codes; check brake lines, steering stops and clearance at full lock and full compression.",
+    );
   }
-  out.push("All figures are computed from nominal sizes; actual tire dimensions vary by maker and model. The makers' data and a licensed technician's judgement take precedence.");
+  out.push(
+    "All figures are computed from nominal sizes; actual tire dimensions vary by maker and model. The makers' data and a licensed technician's judgement take precedence.",
+  );
   return out;
 }

@@ -100,7 +100,10 @@ export function hubChecksOf(quote: Pick<DocumentQuoteRow, "bolt_pattern" | "hub_
             line: i + 1,
             description: l.description,
             quantity: Number(l.quantity),
-            findings: checkWheelOnHub({ boltPattern: quote.bolt_pattern, hubBoreMm: quote.hub_bore_mm }, { boltPattern: l.wheel_bolt_pattern, centerBoreMm: l.wheel_center_bore_mm }),
+            findings: checkWheelOnHub(
+              { boltPattern: quote.bolt_pattern, hubBoreMm: quote.hub_bore_mm },
+              { boltPattern: l.wheel_bolt_pattern, centerBoreMm: l.wheel_center_bore_mm },
+            ),
           },
         ]
       : [],

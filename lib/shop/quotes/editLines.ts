@@ -29,7 +29,10 @@ export interface EditForm {
   notes: string;
 }
 
-type SavedLine = Pick<QuoteLine, "id" | "kind" | "unit" | "catalogItemId" | "sku" | "description" | "quantity" | "unitPriceCents" | "discountCents" | "taxable">;
+type SavedLine = Pick<
+  QuoteLine,
+  "id" | "kind" | "unit" | "catalogItemId" | "sku" | "description" | "quantity" | "unitPriceCents" | "discountCents" | "taxable"
+>;
 
 const dollars = (cents: number) => formatCents(cents).replace(/,/g, "");
 
@@ -99,7 +102,17 @@ export function bodyOf(form: EditForm): { body: QuoteBody; problems: [] } | { bo
     if (!l.description.trim()) say(`lines.${i}.description`, "Describe the line.");
     if (unitPriceCents === null || unitPriceCents < 0) say(`lines.${i}.unitPriceCents`, "Enter the unit price in dollars, like 129.50.");
     if (discountCents === null || discountCents < 0) say(`lines.${i}.discountCents`, "Enter the discount in dollars (0 or more).");
-    return { kind: l.kind, unit: l.unit, catalogItemId: l.catalogItemId, sku: l.sku, description: l.description, quantity, unitPriceCents: unitPriceCents ?? 0, discountCents: discountCents ?? 0, taxable: l.taxable };
+    return {
+      kind: l.kind,
+      unit: l.unit,
+      catalogItemId: l.catalogItemId,
+      sku: l.sku,
+      description: l.description,
+      quantity,
+      unitPriceCents: unitPriceCents ?? 0,
+      discountCents: discountCents ?? 0,
+      taxable: l.taxable,
+    };
   });
   if (lines.length === 0) say("lines", "A quote needs at least one line.");
   const discountCents = parseMoneyToCents(form.discount.trim() || "0");
@@ -112,7 +125,10 @@ let seq = 0;
 const newKey = () => `new-${Date.now()}-${++seq}`;
 
 /** A catalog item as a new line: its own price; items per wheel take the quote's wheel count. */
-export function lineFromCatalog(item: Pick<CatalogItem, "id" | "kind" | "sku" | "description" | "priceCents" | "serviceUnit">, wheelQty: number): EditLine {
+export function lineFromCatalog(
+  item: Pick<CatalogItem, "id" | "kind" | "sku" | "description" | "priceCents" | "serviceUnit">,
+  wheelQty: number,
+): EditLine {
   const hourly = item.kind === "service" && item.serviceUnit === "per_hour";
   const perWheel = item.kind !== "service" || item.serviceUnit === "per_wheel";
   return {
@@ -132,10 +148,32 @@ export function lineFromCatalog(item: Pick<CatalogItem, "id" | "kind" | "sku" | 
 
 /** An hour of labour at the shop's rate. */
 export function labourLine(rateCents: number): EditLine {
-  return { key: newKey(), kind: "custom", unit: "hour", catalogItemId: null, sku: "", description: "Labour", quantity: "1", unitPrice: dollars(rateCents), discount: "0", taxable: false };
+  return {
+    key: newKey(),
+    kind: "custom",
+    unit: "hour",
+    catalogItemId: null,
+    sku: "",
+    description: "Labour",
+    quantity: "1",
+    unitPrice: dollars(rateCents),
+    discount: "0",
+    taxable: false,
+  };
 }
 
 /** A custom parts line with no price yet: saving asks for one. */
 export function partsLine(description: string, quantity: number): EditLine {
-  return { key: newKey(), kind: "custom", unit: "each", catalogItemId: null, sku: "", description, quantity: String(quantity), unitPrice: "", discount: "0", taxable: true };
+  return {
+    key: newKey(),
+    kind: "custom",
+    unit: "each",
+    catalogItemId: null,
+    sku: "",
+    description,
+    quantity: String(quantity),
+    unitPrice: "",
+    discount: "0",
+    taxable: true,
+  };
 }

@@ -15,7 +15,11 @@ describe("field errors in the screen's words", () => {
 
   it("lists the messages in line order, quote fields first", () => {
     expect(
-      describeFieldErrors({ "lines.10.quantity": ["Enter a quantity."], "lines.8.discountCents": ["Too much."], discountCents: ["Cannot be negative."] }),
+      describeFieldErrors({
+        "lines.10.quantity": ["Enter a quantity."],
+        "lines.8.discountCents": ["Too much."],
+        discountCents: ["Cannot be negative."],
+      }),
     ).toEqual(["Quote discount: Cannot be negative.", "Line 9 — discount: Too much.", "Line 11 — quantity: Enter a quantity."]);
     expect(describeFieldErrors(undefined)).toEqual([]);
   });

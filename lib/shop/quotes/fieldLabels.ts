@@ -82,8 +82,10 @@ export function describeFieldErrors(fieldErrors: Record<string, string[]> | unde
     const m = /^lines\.(\d+)/.exec(k);
     return m ? Number(m[1]) : -1;
   };
-  return Object.entries(fieldErrors)
-    .sort(([a], [b]) => order(a) - order(b))
-    // A setup's messages name their field already ("Tire size: …"): not twice.
-    .flatMap(([k, v]) => (v[0] ? [v[0].startsWith(`${fieldLabel(k)}:`) ? v[0] : `${fieldLabel(k)}: ${v[0]}`] : []));
+  return (
+    Object.entries(fieldErrors)
+      .sort(([a], [b]) => order(a) - order(b))
+      // A setup's messages name their field already ("Tire size: …"): not twice.
+      .flatMap(([k, v]) => (v[0] ? [v[0].startsWith(`${fieldLabel(k)}:`) ? v[0] : `${fieldLabel(k)}: ${v[0]}`] : []))
+  );
 }

@@ -44,7 +44,9 @@ describe("counter fitment summary", () => {
     const taller = summarize(current, "295/70R17", { diameterIn: 17, widthIn: 9, offsetMm: 0, beadlock: false });
     expect(taller.regear).toMatchObject({ axleRatio: 3.73, suggestedRatio: 3.92 });
     expect(taller.regear?.effectiveRatio).toBeCloseTo((3.73 * 802.8) / 844.8, 9);
-    expect(taller.modifications).toContain("Regear from 3.73 to about 3.92 to restore the effective ratio (assuming a 3.73 axle; enter the vehicle's ratio).");
+    expect(taller.modifications).toContain(
+      "Regear from 3.73 to about 3.92 to restore the effective ratio (assuming a 3.73 axle; enter the vehicle's ratio).",
+    );
     // 235/70R17 on a 4.10 axle: D = 431.8 + 2 × 164.5 = 760.8 mm; restoring 4.10 × 760.8 / 802.8 = 3.886, 5.2 % below: 3.92 is nearest.
     const shorter = summarize({ ...current, axleRatio: 4.1 }, "235/70R17", { diameterIn: 17, widthIn: 7.5, offsetMm: 25, beadlock: false });
     expect(shorter.regear?.suggestedRatio).toBe(3.92);
@@ -68,7 +70,9 @@ describe("counter fitment summary", () => {
     // Ranked: fewer warnings first, then larger diameter gain.
     for (let i = 1; i < r.picks.length; i++) {
       const [a, b] = [r.picks[i - 1]!.summary, r.picks[i]!.summary];
-      expect(a.warnings.length < b.warnings.length || (a.warnings.length === b.warnings.length && a.diameterChangeMm >= b.diameterChangeMm)).toBe(true);
+      expect(
+        a.warnings.length < b.warnings.length || (a.warnings.length === b.warnings.length && a.diameterChangeMm >= b.diameterChangeMm),
+      ).toBe(true);
     }
   });
 });

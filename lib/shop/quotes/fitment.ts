@@ -4,7 +4,16 @@
  * (lib/comparisons/assess, thresholds defined there once). This module words the findings the
  * counter's way (warnings and modifications) and ranks the picks. Pure.
  */
-import { DEFAULT_AXLE_RATIO, FitmentInputError, compareSetups, mmToIn, parseTireSize, setupGeometry, type SetupComparison, type SetupGeometry } from "@/lib/fitment";
+import {
+  DEFAULT_AXLE_RATIO,
+  FitmentInputError,
+  compareSetups,
+  mmToIn,
+  parseTireSize,
+  setupGeometry,
+  type SetupComparison,
+  type SetupGeometry,
+} from "@/lib/fitment";
 import { assessChange } from "@/lib/comparisons/assess/assessChange";
 import { type Finding, type FindingKind, type FindingOf, findingsOf } from "@/lib/comparisons/assess/vocabulary";
 import { checkWheelOnHub, hubRefusal } from "./hubFit";
@@ -63,10 +72,15 @@ type FitmentReading = FitmentSummary & { findings: Finding[] };
 
 const r1 = (x: number) => Math.round(x * 10) / 10;
 const inches = (mm: number) => `${r1(mmToIn(Math.abs(mm)))} in`;
-const wheelText = (w: { diameterIn: number; widthIn: number; offsetMm: number }) => `${w.diameterIn}x${w.widthIn} ${w.offsetMm >= 0 ? "+" : ""}${r1(w.offsetMm)} mm`;
+const wheelText = (w: { diameterIn: number; widthIn: number; offsetMm: number }) =>
+  `${w.diameterIn}x${w.widthIn} ${w.offsetMm >= 0 ? "+" : ""}${r1(w.offsetMm)} mm`;
 
 /** Summary of the planned tire on the planned wheel against the current setup. */
-export function summarize(current: CurrentSetup, tire: string, wheel: Omit<WheelCandidate, "id" | "boltPattern"> & { boltPattern?: string }): FitmentReading {
+export function summarize(
+  current: CurrentSetup,
+  tire: string,
+  wheel: Omit<WheelCandidate, "id" | "boltPattern"> & { boltPattern?: string },
+): FitmentReading {
   const cur = setupGeometry({ tire: current.tireSize, wheel: current.wheel });
   const plan = setupGeometry({ tire, wheel: { diameterIn: wheel.diameterIn, widthIn: wheel.widthIn, offsetMm: wheel.offsetMm } });
   const axle = current.axleRatio ?? undefined;
@@ -82,17 +96,24 @@ type Words<K extends FindingKind> = { [k in K]: (f: FindingOf<k>) => string | nu
  * the current wheel's rim width, is not the counter's to warn about).
  */
 const WARNINGS: Words<"outer-reach" | "inner-reach" | "rim-width" | "diameter"> = {
-  "outer-reach": ({ figures: x }) => `Reaches ${Math.round(x.changeMm)} mm (${inches(x.changeMm)}) further outboard: check fender clearance.`,
-  "inner-reach": ({ level, figures: x }) => (level === "caution" ? `${Math.round(x.reachMm)} mm closer inboard: check control arms, frame and sway bar at full lock.` : null),
-  "rim-width": ({ setup, figures: x }) => (setup === "planned" ? `Rim width ${x.widthIn} in is outside ${x.minIn}–${x.maxIn} in suited to ${x.tire}.` : null),
+  "outer-reach": ({ figures: x }) =>
+    `Reaches ${Math.round(x.changeMm)} mm (${inches(x.changeMm)}) further outboard: check fender clearance.`,
+  "inner-reach": ({ level, figures: x }) =>
+    level === "caution" ? `${Math.round(x.reachMm)} mm closer inboard: check control arms, frame and sway bar at full lock.` : null,
+  "rim-width": ({ setup, figures: x }) =>
+    setup === "planned" ? `Rim width ${x.widthIn} in is outside ${x.minIn}–${x.maxIn} in suited to ${x.tire}.` : null,
   // A much shorter tire is left to the cautions (cautions.ts); the counter warns of a taller one.
-  diameter: ({ figures: x }) => (x.changeMm > 0 ? `${Math.round(x.changeMm)} mm (${inches(x.changeMm)}) taller: check clearance at full lock and full compression.` : null),
+  diameter: ({ figures: x }) =>
+    x.changeMm > 0
+      ? `${Math.round(x.changeMm)} mm (${inches(x.changeMm)}) taller: check clearance at full lock and full compression.`
+      : null,
 };
 
 /** The modifications, in this order. */
 const modifications = (axleGiven: boolean): Words<"outer-reach" | "diameter" | "regear" | "speedometer" | "alignment"> => ({
   "outer-reach": () => "Fender trimming or flares may be needed for the extra poke.",
-  diameter: ({ figures: x }) => (x.changeMm > 0 ? "A lift or levelling kit is usually needed for this much extra diameter; follow the lift maker's instructions." : null),
+  diameter: ({ figures: x }) =>
+    x.changeMm > 0 ? "A lift or levelling kit is usually needed for this much extra diameter; follow the lift maker's instructions." : null,
   regear: ({ figures: x }) =>
     `Regear from ${x.axleRatio.toFixed(2)} to about ${x.suggestedRatio.toFixed(2)} to restore the effective ratio${axleGiven ? "" : ` (assuming a ${DEFAULT_AXLE_RATIO.toFixed(2)} axle; enter the vehicle's ratio)`}.`,
   speedometer: () => "Recalibrate the speedometer.",
@@ -112,13 +133,25 @@ function worded<K extends FindingKind>(findings: readonly Finding[], words: Word
   return out;
 }
 
-function fromComparison(cmp: SetupComparison, cur: SetupGeometry, plan: SetupGeometry, beadlock: boolean, axleGiven: boolean): FitmentReading {
+function fromComparison(
+  cmp: SetupComparison,
+  cur: SetupGeometry,
+  plan: SetupGeometry,
+  beadlock: boolean,
+  axleGiven: boolean,
+): FitmentReading {
   const findings = assessChange(cmp, {});
   const [regearFinding] = findingsOf(findings, "regear");
   const at60 = cmp.speedometer.rows.find((r) => r.indicatedMph === 60)?.actualMph ?? 60 * cmp.speedometer.ratio;
   return {
     current: { tire: cur.tire.text, wheel: wheelText(cur.wheel), overallDiameterMm: cur.overallDiameterMm },
-    planned: { tire: plan.tire.text, wheel: wheelText(plan.wheel), overallDiameterMm: plan.overallDiameterMm, beadlock, rimWidthSuitable: plan.rimWidthSuitable },
+    planned: {
+      tire: plan.tire.text,
+      wheel: wheelText(plan.wheel),
+      overallDiameterMm: plan.overallDiameterMm,
+      beadlock,
+      rimWidthSuitable: plan.rimWidthSuitable,
+    },
     diameterChangeMm: cmp.diameterChangeMm,
     groundClearanceChangeMm: cmp.groundClearanceChangeMm,
     outerPokeChangeMm: cmp.outerPokeChangeMm,
@@ -126,7 +159,13 @@ function fromComparison(cmp: SetupComparison, cur: SetupGeometry, plan: SetupGeo
     trackWidthChangeMm: cmp.trackWidthChangeMm,
     scrubRadiusChangeMm: cmp.scrubRadiusChangeMm,
     actualMphAt60: at60,
-    regear: regearFinding ? { axleRatio: regearFinding.figures.axleRatio, effectiveRatio: regearFinding.figures.effectiveRatio, suggestedRatio: regearFinding.figures.suggestedRatio } : null,
+    regear: regearFinding
+      ? {
+          axleRatio: regearFinding.figures.axleRatio,
+          effectiveRatio: regearFinding.figures.effectiveRatio,
+          suggestedRatio: regearFinding.figures.suggestedRatio,
+        }
+      : null,
     alignmentSuggested: findings.some((f) => f.kind === "alignment"),
     modifications: worded(findings, modifications(axleGiven)),
     warnings: worded(findings, WARNINGS),
@@ -151,7 +190,11 @@ export function fitmentChangeRows(fit: FitmentSummary): [string, string][] {
     ["Track width", mmIn(fit.trackWidthChangeMm)],
     ["At 60 mph indicated", `${fit.actualMphAt60.toFixed(1)} mph actual`],
   ];
-  if (fit.regear) rows.push(["Effective axle ratio", `${fit.regear.axleRatio.toFixed(2)} → ${fit.regear.effectiveRatio.toFixed(2)}; regear to about ${fit.regear.suggestedRatio.toFixed(2)}`]);
+  if (fit.regear)
+    rows.push([
+      "Effective axle ratio",
+      `${fit.regear.axleRatio.toFixed(2)} → ${fit.regear.effectiveRatio.toFixed(2)}; regear to about ${fit.regear.suggestedRatio.toFixed(2)}`,
+    ]);
   return rows;
 }
 
@@ -168,10 +211,19 @@ export interface Pick {
  * larger diameter gain, then the smaller change in poke. A wheel that needs hub-centric rings
  * says so among its modifications.
  */
-export function rankPicks(current: CurrentSetup, tires: readonly TireCandidate[], wheels: readonly WheelCandidate[], limit = 30): { picks: Pick[]; wheelsFitting: number; pairs: number } {
+export function rankPicks(
+  current: CurrentSetup,
+  tires: readonly TireCandidate[],
+  wheels: readonly WheelCandidate[],
+  limit = 30,
+): { picks: Pick[]; wheelsFitting: number; pairs: number } {
   const cur = setupGeometry({ tire: current.tireSize, wheel: current.wheel });
   const axle = current.axleRatio ?? undefined;
-  const hub = (w: WheelCandidate) => checkWheelOnHub({ boltPattern: current.boltPattern, hubBoreMm: current.hubBoreMm ?? null }, { boltPattern: w.boltPattern, centerBoreMm: w.centerBoreMm ?? null });
+  const hub = (w: WheelCandidate) =>
+    checkWheelOnHub(
+      { boltPattern: current.boltPattern, hubBoreMm: current.hubBoreMm ?? null },
+      { boltPattern: w.boltPattern, centerBoreMm: w.centerBoreMm ?? null },
+    );
   const fitting = wheels.filter((w) => {
     const f = hub(w);
     // An unreadable drilling is a caution in the check; here only a known match is offered.

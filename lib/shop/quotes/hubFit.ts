@@ -18,7 +18,15 @@ import { boltPatternsEquivalent, parseBoltPattern } from "@/lib/fitment";
 /** Half the 0.1 mm step bores and hubs are listed in. */
 export const BORE_MATCH_TOLERANCE_MM = 0.05;
 
-export type HubFindingCode = "bolt-pattern-matches" | "bolt-pattern-differs" | "bolt-pattern-unknown" | "hub-centric" | "needs-rings" | "bore-too-small" | "hub-bore-unknown" | "bore-unknown";
+export type HubFindingCode =
+  | "bolt-pattern-matches"
+  | "bolt-pattern-differs"
+  | "bolt-pattern-unknown"
+  | "hub-centric"
+  | "needs-rings"
+  | "bore-too-small"
+  | "hub-bore-unknown"
+  | "bore-unknown";
 
 export interface HubFinding {
   /** refuse: the wheel does not go on; caution: it goes on with something done or checked; ok. */
@@ -48,7 +56,11 @@ const mm = (x: number) => `${Number(x.toFixed(1))} mm`;
 export function checkWheelOnHub(vehicle: HubSide, wheel: WheelSide): HubFinding[] {
   const out: HubFinding[] = [];
   if (!wheel.boltPattern) {
-    out.push({ level: "caution", code: "bolt-pattern-unknown", message: `The wheel's bolt pattern is not recorded: check it against the vehicle's ${vehicle.boltPattern} before fitting.` });
+    out.push({
+      level: "caution",
+      code: "bolt-pattern-unknown",
+      message: `The wheel's bolt pattern is not recorded: check it against the vehicle's ${vehicle.boltPattern} before fitting.`,
+    });
   } else {
     let same: boolean | null;
     try {
@@ -56,20 +68,51 @@ export function checkWheelOnHub(vehicle: HubSide, wheel: WheelSide): HubFinding[
     } catch {
       same = null;
     }
-    if (same === null) out.push({ level: "caution", code: "bolt-pattern-unknown", message: `The bolt patterns ${wheel.boltPattern} and ${vehicle.boltPattern} could not be compared: check the drilling by hand.` });
-    else if (same) out.push({ level: "ok", code: "bolt-pattern-matches", message: `Bolt pattern ${wheel.boltPattern} is the vehicle's ${vehicle.boltPattern}.` });
-    else out.push({ level: "refuse", code: "bolt-pattern-differs", message: `The wheel is drilled ${wheel.boltPattern}; the vehicle is ${vehicle.boltPattern}: it does not bolt on.` });
+    if (same === null)
+      out.push({
+        level: "caution",
+        code: "bolt-pattern-unknown",
+        message: `The bolt patterns ${wheel.boltPattern} and ${vehicle.boltPattern} could not be compared: check the drilling by hand.`,
+      });
+    else if (same)
+      out.push({
+        level: "ok",
+        code: "bolt-pattern-matches",
+        message: `Bolt pattern ${wheel.boltPattern} is the vehicle's ${vehicle.boltPattern}.`,
+      });
+    else
+      out.push({
+        level: "refuse",
+        code: "bolt-pattern-differs",
+        message: `The wheel is drilled ${wheel.boltPattern}; the vehicle is ${vehicle.boltPattern}: it does not bolt on.`,
+      });
   }
   const { hubBoreMm: hub } = vehicle;
   const bore = wheel.centerBoreMm;
   if (hub === null && bore === null) {
-    out.push({ level: "caution", code: "hub-bore-unknown", message: "Neither the hub bore nor the wheel's centre bore is recorded: measure both before fitting." });
+    out.push({
+      level: "caution",
+      code: "hub-bore-unknown",
+      message: "Neither the hub bore nor the wheel's centre bore is recorded: measure both before fitting.",
+    });
   } else if (hub === null) {
-    out.push({ level: "caution", code: "hub-bore-unknown", message: `The vehicle's hub bore is not recorded: measure the hub and check it against the wheel's ${mm(bore!)} centre bore before fitting.` });
+    out.push({
+      level: "caution",
+      code: "hub-bore-unknown",
+      message: `The vehicle's hub bore is not recorded: measure the hub and check it against the wheel's ${mm(bore!)} centre bore before fitting.`,
+    });
   } else if (bore === null) {
-    out.push({ level: "caution", code: "bore-unknown", message: `The wheel's centre bore is not in the catalog: check it against the ${mm(hub)} hub before fitting.` });
+    out.push({
+      level: "caution",
+      code: "bore-unknown",
+      message: `The wheel's centre bore is not in the catalog: check it against the ${mm(hub)} hub before fitting.`,
+    });
   } else if (bore < hub - BORE_MATCH_TOLERANCE_MM) {
-    out.push({ level: "refuse", code: "bore-too-small", message: `The wheel's ${mm(bore)} centre bore is smaller than the vehicle's ${mm(hub)} hub: it will not seat on this vehicle.` });
+    out.push({
+      level: "refuse",
+      code: "bore-too-small",
+      message: `The wheel's ${mm(bore)} centre bore is smaller than the vehicle's ${mm(hub)} hub: it will not seat on this vehicle.`,
+    });
   } else if (bore <= hub + BORE_MATCH_TOLERANCE_MM) {
     out.push({ level: "ok", code: "hub-centric", message: `Centre bore ${mm(bore)} fits the ${mm(hub)} hub (hub-centric).` });
   } else {

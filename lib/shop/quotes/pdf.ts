@@ -56,13 +56,17 @@ export function quotePdf(d: QuoteDocument): Promise<Buffer> {
   doc.moveDown(0.8).font("Body-Bold").fontSize(14);
   text(`Quote Q-${d.number}`);
   doc.font("Body").fontSize(10);
-  text(`Date ${date(d.sentAt ?? d.createdAt)}${d.validUntil ? ` - valid until ${date(d.validUntil)}` : ""}${d.preparedBy ? ` - prepared by ${d.preparedBy}` : ""}`);
+  text(
+    `Date ${date(d.sentAt ?? d.createdAt)}${d.validUntil ? ` - valid until ${date(d.validUntil)}` : ""}${d.preparedBy ? ` - prepared by ${d.preparedBy}` : ""}`,
+  );
 
   heading("Customer");
   text(customer.name);
   text([customer.phone, customer.email].filter(Boolean).join(" - "));
   heading("Vehicle");
-  text(`${d.vehicle.description} - bolt pattern ${d.vehicle.boltPattern}${d.vehicle.hubBoreMm !== null ? ` - hub bore ${d.vehicle.hubBoreMm} mm` : ""}`);
+  text(
+    `${d.vehicle.description} - bolt pattern ${d.vehicle.boltPattern}${d.vehicle.hubBoreMm !== null ? ` - hub bore ${d.vehicle.hubBoreMm} mm` : ""}`,
+  );
   text(`Now: ${fit.current.tire} on ${fit.current.wheel}`);
   text(`Planned: ${fit.planned.tire} on ${fit.planned.wheel}${fit.planned.beadlock ? " (beadlock)" : ""}`);
 
@@ -84,7 +88,13 @@ export function quotePdf(d: QuoteDocument): Promise<Buffer> {
   };
   row(["SKU", "Description", "Qty", "Unit", "Amount"], true);
   for (const l of lines) {
-    row([l.sku, `${l.description}${l.discountCents ? ` (less ${formatUsd(l.discountCents)})` : ""}${l.taxable ? "" : " *"}`, formatQuantity(l.quantity, l.unit), formatUsd(l.unitPriceCents), formatUsd(l.lineTotalCents)]);
+    row([
+      l.sku,
+      `${l.description}${l.discountCents ? ` (less ${formatUsd(l.discountCents)})` : ""}${l.taxable ? "" : " *"}`,
+      formatQuantity(l.quantity, l.unit),
+      formatUsd(l.unitPriceCents),
+      formatUsd(l.lineTotalCents),
+    ]);
   }
   doc.moveDown(0.5);
   const total = (label: string, value: string, bold = false) => {

@@ -4,7 +4,8 @@ import { formatQuantity, parseQuantity, toHundredths } from "./quantity";
 describe("quote line quantities", () => {
   it("reads an hour and a half however the counter types it", () => {
     // 1 h 30 min = 1.5 h; ½ = 0.5 (arithmetic).
-    for (const t of ["1.5", "1.50", "1 1/2", "1-1/2", "1½", "1:30", "90 min", "1.5 h", "1.5hr", "3/2"]) expect(parseQuantity(t, "hour"), t).toBe(1.5);
+    for (const t of ["1.5", "1.50", "1 1/2", "1-1/2", "1½", "1:30", "90 min", "1.5 h", "1.5hr", "3/2"])
+      expect(parseQuantity(t, "hour"), t).toBe(1.5);
     expect(parseQuantity("¾", "hour")).toBe(0.75);
     expect(parseQuantity(".25", "hour")).toBe(0.25);
     expect(parseQuantity("0:45", "hour")).toBe(0.75);
@@ -13,7 +14,9 @@ describe("quote line quantities", () => {
 
   it("refuses part hours that are not exact hundredths, naming the figures to type instead", () => {
     // 1:20 = 80/60 h = 1.333… h (arithmetic).
-    expect(() => parseQuantity("1:20", "hour")).toThrow("1:20 is 1.333… h, which is not exact to the hundredth of an hour: enter 1.33 or 1.34.");
+    expect(() => parseQuantity("1:20", "hour")).toThrow(
+      "1:20 is 1.333… h, which is not exact to the hundredth of an hour: enter 1.33 or 1.34.",
+    );
     expect(() => parseQuantity("1 1/3", "hour")).toThrow(/1\.333…/);
     // 1/8 = 0.125 exactly, still finer than a hundredth.
     expect(() => parseQuantity("⅛", "hour")).toThrow("⅛ is 0.125 h, which is not exact to the hundredth of an hour: enter 0.12 or 0.13.");

@@ -14,7 +14,23 @@ export const MAX_QUANTITY = 999;
 
 export class QuantityError extends Error {}
 
-const VULGAR: Record<string, [number, number]> = { "¼": [1, 4], "½": [1, 2], "¾": [3, 4], "⅓": [1, 3], "⅔": [2, 3], "⅕": [1, 5], "⅖": [2, 5], "⅗": [3, 5], "⅘": [4, 5], "⅙": [1, 6], "⅚": [5, 6], "⅛": [1, 8], "⅜": [3, 8], "⅝": [5, 8], "⅞": [7, 8] };
+const VULGAR: Record<string, [number, number]> = {
+  "¼": [1, 4],
+  "½": [1, 2],
+  "¾": [3, 4],
+  "⅓": [1, 3],
+  "⅔": [2, 3],
+  "⅕": [1, 5],
+  "⅖": [2, 5],
+  "⅗": [3, 5],
+  "⅘": [4, 5],
+  "⅙": [1, 6],
+  "⅚": [5, 6],
+  "⅛": [1, 8],
+  "⅜": [3, 8],
+  "⅝": [5, 8],
+  "⅞": [7, 8],
+};
 const HOURS_SUFFIX = /\s*(h|hr|hrs|hour|hours)\.?$/i;
 const MINUTES_SUFFIX = /\s*(m|min|mins|minutes)\.?$/i;
 
@@ -45,7 +61,8 @@ function readHours(text: string): [number, number] {
   if (m) {
     const n = Number(m[2]);
     const d = Number(m[3]);
-    if (d === 0 || (m[1] !== undefined && n >= d)) throw new QuantityError(`${text.trim()} is not a fraction of an hour; write e.g. 1 1/2 or 1.5.`);
+    if (d === 0 || (m[1] !== undefined && n >= d))
+      throw new QuantityError(`${text.trim()} is not a fraction of an hour; write e.g. 1 1/2 or 1.5.`);
     return [Number(m[1] ?? 0) * d + n, d];
   }
   m = /^(\d{0,4})(?:\.(\d{1,6}))?$/.exec(t);
@@ -74,7 +91,8 @@ export function parseQuantity(input: string | number, unit: QuoteLineUnit): numb
   const text = input.trim();
   if (unit === "each") {
     if (!/^\d{1,4}$/.test(text)) {
-      if (/^\d*[.,:/½¼¾]/.test(text) || /\d[.,:/½¼¾]/.test(text)) throw new QuantityError(`Count whole items: ${text} is not a whole number.`);
+      if (/^\d*[.,:/½¼¾]/.test(text) || /\d[.,:/½¼¾]/.test(text))
+        throw new QuantityError(`Count whole items: ${text} is not a whole number.`);
       throw new QuantityError("Enter a whole number, e.g. 4.");
     }
     return check(Number(text), unit, text);
@@ -83,7 +101,9 @@ export function parseQuantity(input: string | number, unit: QuoteLineUnit): numb
   const hundredths = (num * 100) / den;
   if (!Number.isInteger(hundredths)) {
     const down = Math.floor(hundredths) / 100;
-    throw new QuantityError(`${text} is ${approx(num, den)} h, which is not exact to the hundredth of an hour: enter ${down.toFixed(2)} or ${(down + 0.01).toFixed(2)}.`);
+    throw new QuantityError(
+      `${text} is ${approx(num, den)} h, which is not exact to the hundredth of an hour: enter ${down.toFixed(2)} or ${(down + 0.01).toFixed(2)}.`,
+    );
   }
   return check(hundredths / 100, unit, text);
 }
@@ -97,7 +117,8 @@ function approx(num: number, den: number): string {
 function check(q: number, unit: QuoteLineUnit, text: string): number {
   if (q <= 0) throw new QuantityError("The quantity must be more than 0.");
   if (q > MAX_QUANTITY) throw new QuantityError(`At most ${MAX_QUANTITY}.`);
-  if (unit === "each" && !Number.isInteger(q)) throw new QuantityError(`Count whole items: ${text} is not a whole number (only hourly labour takes part hours).`);
+  if (unit === "each" && !Number.isInteger(q))
+    throw new QuantityError(`Count whole items: ${text} is not a whole number (only hourly labour takes part hours).`);
   if (toHundredths(q) === null) throw new QuantityError(`Use at most two decimals (hundredths of an hour), e.g. 1.25.`);
   return q;
 }

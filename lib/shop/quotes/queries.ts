@@ -1,7 +1,15 @@
 import "server-only";
 import { STATUS_LABEL } from "@/lib/shop/quotes/status";
 import type { Knex } from "knex";
-import type { CatalogItemRow, QuoteEventRow, QuoteLineRow, QuoteLineUnit, QuoteRow, QuoteStatus, ServiceType } from "@/lib/platform/db/types";
+import type {
+  CatalogItemRow,
+  QuoteEventRow,
+  QuoteLineRow,
+  QuoteLineUnit,
+  QuoteRow,
+  QuoteStatus,
+  ServiceType,
+} from "@/lib/platform/db/types";
 import { ConflictError, InvalidError, NotFoundError } from "@/lib/platform/errors";
 import { type QuoteListItem, type QuoteListRow, quoteListItemDto } from "@/lib/shop/quotes/api";
 import { type HubCheck, type QuoteDocument, buildQuoteDocument, hubChecksOf } from "@/lib/shop/quotes/document";
@@ -44,12 +52,28 @@ const TRANSITIONS: Record<QuoteStatus, QuoteStatus[]> = {
 export { STATUS_LABEL };
 
 /** Moves a quote (locked by the caller's transaction) to `to`, recording who and when. */
-export async function transition(trx: Knex.Transaction, quote: Pick<QuoteRow, "id" | "status">, to: QuoteStatus, actor: Actor, note = "", extra: Partial<QuoteRow> = {}) {
+export async function transition(
+  trx: Knex.Transaction,
+  quote: Pick<QuoteRow, "id" | "status">,
+  to: QuoteStatus,
+  actor: Actor,
+  note = "",
+  extra: Partial<QuoteRow> = {},
+) {
   if (!TRANSITIONS[quote.status].includes(to)) {
     throw new ConflictError(`A quote that is ${STATUS_LABEL[quote.status].toLowerCase()} cannot become ${STATUS_LABEL[to].toLowerCase()}.`);
   }
-  await trx("quotes").where({ id: quote.id }).update({ ...extra, status: to, updated_at: trx.fn.now() });
-  await trx("quote_events").insert({ quote_id: quote.id, from_status: quote.status, to_status: to, actor_user_id: actor.userId, actor: actor.label, note });
+  await trx("quotes")
+    .where({ id: quote.id })
+    .update({ ...extra, status: to, updated_at: trx.fn.now() });
+  await trx("quote_events").insert({
+    quote_id: quote.id,
+    from_status: quote.status,
+    to_status: to,
+    actor_user_id: actor.userId,
+    actor: actor.label,
+    note,
+  });
 }
 
 /** Statuses that lapse when the validity date passes. */
@@ -72,7 +96,8 @@ function withEffectiveStatus<T extends QuoteRow | undefined>(row: T): T {
 }
 
 /** The same rule in SQL, for lists and filters. */
-const EFFECTIVE_STATUS_SQL = "case when quotes.status in ('sent', 'accepted') and quotes.valid_until < now() then 'expired' else quotes.status::text end";
+const EFFECTIVE_STATUS_SQL =
+  "case when quotes.status in ('sent', 'accepted') and quotes.valid_until < now() then 'expired' else quotes.status::text end";
 
 /**
  * Writes the lapse down: sent or accepted quotes past their validity become expired, recorded
@@ -132,7 +157,10 @@ export async function quoteParties(db: Knex, quote: QuoteRow): Promise<Pick<Quot
 }
 
 export async function quoteDetail(db: Knex, quote: QuoteRow): Promise<QuoteRecord> {
-  const [parties, events] = await Promise.all([quoteParties(db, quote), db<QuoteEventRow>("quote_events").where({ quote_id: quote.id }).orderBy("id")]);
+  const [parties, events] = await Promise.all([
+    quoteParties(db, quote),
+    db<QuoteEventRow>("quote_events").where({ quote_id: quote.id }).orderBy("id"),
+  ]);
   const { public_token_hash: _hidden, ...shown } = quote;
   return { quote: shown, events, ...parties, hubChecks: hubChecksOf(quote, parties.lines) };
 }
@@ -141,13 +169,28 @@ export async function getQuoteDetail(db: Knex, scope: QuoteScope, id: string): P
   return quoteDetail(db, await getQuote(db, scope, id));
 }
 
-export async function listQuotes(db: Knex, scope: QuoteScope, opts: { status?: QuoteStatus; limit?: number } = {}): Promise<QuoteListItem[]> {
+export async function listQuotes(
+  db: Knex,
+  scope: QuoteScope,
+  opts: { status?: QuoteStatus; limit?: number } = {},
+): Promise<QuoteListItem[]> {
   const q = scoped(db, scope)
     .join("customers as c", "c.id", "quotes.customer_id")
     .leftJoin("users as u", "u.id", "quotes.created_by")
     .orderBy("quotes.created_at", "desc")
     .limit(opts.limit ?? 200)
-    .select("quotes.id", "quotes.number", db.raw(`${EFFECTIVE_STATUS_SQL} as status`), "quotes.total_cents", "quotes.deposit_cents", "quotes.vehicle_description", "quotes.created_at", "quotes.valid_until", "c.name as customer_name", "u.name as created_by_name");
+    .select(
+      "quotes.id",
+      "quotes.number",
+      db.raw(`${EFFECTIVE_STATUS_SQL} as status`),
+      "quotes.total_cents",
+      "quotes.deposit_cents",
+      "quotes.vehicle_description",
+      "quotes.created_at",
+      "quotes.valid_until",
+      "c.name as customer_name",
+      "u.name as created_by_name",
+    );
   if (opts.status) q.andWhereRaw(`${EFFECTIVE_STATUS_SQL} = ?`, [opts.status]);
   return ((await q) as unknown as QuoteListRow[]).map(quoteListItemDto);
 }
@@ -155,7 +198,8 @@ export async function listQuotes(db: Knex, scope: QuoteScope, opts: { status?: Q
 type LineDraft = Omit<QuoteLineRow, "id" | "quote_id" | "position" | "line_total_cents">;
 
 /** Hourly services may be quoted in part hours; everything else from the catalog is counted. */
-const unitOf = (item: Pick<CatalogItemRow, "kind" | "service_unit">): QuoteLineUnit => (item.kind === "service" && item.service_unit === "per_hour" ? "hour" : "each");
+const unitOf = (item: Pick<CatalogItemRow, "kind" | "service_unit">): QuoteLineUnit =>
+  item.kind === "service" && item.service_unit === "per_hour" ? "hour" : "each";
 
 /** What a line copies from its catalog item: the item's own kind and unit, and a wheel's drilling and bore. */
 function fromCatalog(item: CatalogItemRow): Pick<LineDraft, "kind" | "unit" | "wheel_bolt_pattern" | "wheel_center_bore_mm"> {
@@ -168,11 +212,27 @@ function fromCatalog(item: CatalogItemRow): Pick<LineDraft, "kind" | "unit" | "w
 }
 
 /** The services the pick calls for, from the shop's own service items (names and prices the shop set). */
-export function suggestedServiceLines(services: CatalogItemRow[], wheel: CatalogItemRow, qty: number, fit: FitmentSummary, fabricationRateCents = 0): LineDraft[] {
+export function suggestedServiceLines(
+  services: CatalogItemRow[],
+  wheel: CatalogItemRow,
+  qty: number,
+  fit: FitmentSummary,
+  fabricationRateCents = 0,
+): LineDraft[] {
   const first = (t: ServiceType) => services.find((s) => s.service_type === t);
   const out: LineDraft[] = [];
   const add = (item: CatalogItemRow | undefined, quantity: number) => {
-    if (item) out.push({ ...fromCatalog(item), catalog_item_id: item.id, sku: item.sku, description: item.description, quantity, unit_price_cents: item.price_cents, discount_cents: 0, taxable: false });
+    if (item)
+      out.push({
+        ...fromCatalog(item),
+        catalog_item_id: item.id,
+        sku: item.sku,
+        description: item.description,
+        quantity,
+        unit_price_cents: item.price_cents,
+        discount_cents: 0,
+        taxable: false,
+      });
   };
   add(first("mount_balance"), qty);
   if (wheel.beadlock) add(first("beadlock_assembly"), qty);
@@ -183,7 +243,19 @@ export function suggestedServiceLines(services: CatalogItemRow[], wheel: Catalog
     if (trim) add(trim, 1);
     // No trimming item in the catalog: one hour at the shop's fabrication rate.
     else if (fabricationRateCents > 0) {
-      out.push({ kind: "custom", unit: "hour", catalog_item_id: null, sku: "", description: "Fender trimming labour", quantity: 1, unit_price_cents: fabricationRateCents, discount_cents: 0, taxable: false, wheel_bolt_pattern: null, wheel_center_bore_mm: null });
+      out.push({
+        kind: "custom",
+        unit: "hour",
+        catalog_item_id: null,
+        sku: "",
+        description: "Fender trimming labour",
+        quantity: 1,
+        unit_price_cents: fabricationRateCents,
+        discount_cents: 0,
+        taxable: false,
+        wheel_bolt_pattern: null,
+        wheel_center_bore_mm: null,
+      });
     }
   }
   add(first("disposal"), qty);
@@ -193,7 +265,12 @@ export function suggestedServiceLines(services: CatalogItemRow[], wheel: Catalog
 function totalsOf(lines: LineDraft[], discountCents: number, taxRateBp: number, depositPct: number) {
   try {
     return computeTotals({
-      lines: lines.map((l) => ({ quantity: l.quantity, unitPriceCents: l.unit_price_cents, discountCents: l.discount_cents, taxable: l.taxable })),
+      lines: lines.map((l) => ({
+        quantity: l.quantity,
+        unitPriceCents: l.unit_price_cents,
+        discountCents: l.discount_cents,
+        taxable: l.taxable,
+      })),
       discountCents,
       taxRateBp,
       depositPct,
@@ -208,7 +285,9 @@ function totalsOf(lines: LineDraft[], discountCents: number, taxRateBp: number, 
 async function writeLines(trx: Knex.Transaction, quoteId: string, lines: LineDraft[], totals: ReturnType<typeof computeTotals>) {
   await trx("quote_lines").where({ quote_id: quoteId }).delete();
   if (lines.length) {
-    await trx("quote_lines").insert(lines.map((l, i) => ({ ...l, quote_id: quoteId, position: i + 1, line_total_cents: totals.lines[i]!.netCents })));
+    await trx("quote_lines").insert(
+      lines.map((l, i) => ({ ...l, quote_id: quoteId, position: i + 1, line_total_cents: totals.lines[i]!.netCents })),
+    );
   }
   await trx("quotes").where({ id: quoteId }).update({
     subtotal_cents: totals.subtotalCents,
@@ -242,7 +321,13 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
     if (input.vehicleId) {
       const saved = await trx("customer_vehicles").where({ id: input.vehicleId, shop_id: shopId, customer_id: input.customerId }).first();
       if (!saved) throw InvalidError.fields({ vehicleId: ["That vehicle was not found."] });
-      v = counterVehicleForEngine({ description: saved.description, boltPattern: saved.bolt_pattern, hubBoreMm: saved.hub_bore_mm, axleRatio: saved.axle_ratio, currentSetup: saved.current_setup as Setup });
+      v = counterVehicleForEngine({
+        description: saved.description,
+        boltPattern: saved.bolt_pattern,
+        hubBoreMm: saved.hub_bore_mm,
+        axleRatio: saved.axle_ratio,
+        currentSetup: saved.current_setup as Setup,
+      });
     } else {
       v = counterVehicleForEngine(input.vehicle!);
       if (input.saveVehicle) {
@@ -260,15 +345,25 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
         vehicleId = (row as { id: string }).id;
       }
     }
-    const items = await trx<CatalogItemRow>("catalog_items").where({ shop_id: shopId }).whereIn("id", [input.tireItemId, input.wheelItemId]);
+    const items = await trx<CatalogItemRow>("catalog_items")
+      .where({ shop_id: shopId })
+      .whereIn("id", [input.tireItemId, input.wheelItemId]);
     const tire = items.find((i) => i.id === input.tireItemId && i.kind === "tire");
     const wheel = items.find((i) => i.id === input.wheelItemId && i.kind === "wheel");
     const fe: Record<string, string[]> = {};
     if (!tire) fe.tireItemId = ["That tire is not in your catalog."];
     if (!wheel) fe.wheelItemId = ["That wheel is not in your catalog."];
     if (!tire || !wheel) throw InvalidError.fields(fe);
-    if (tire.tire_rim_in !== wheel.wheel_diameter_in) throw new InvalidError(`${tire.tire_size} does not mount on a ${wheel.wheel_diameter_in} in wheel.`, { wheelItemId: ["Pick a wheel of the tire's rim diameter."] });
-    const refusal = hubRefusal(checkWheelOnHub({ boltPattern: v.boltPattern, hubBoreMm: v.hubBoreMm }, { boltPattern: wheel.bolt_pattern, centerBoreMm: wheel.center_bore_mm }));
+    if (tire.tire_rim_in !== wheel.wheel_diameter_in)
+      throw new InvalidError(`${tire.tire_size} does not mount on a ${wheel.wheel_diameter_in} in wheel.`, {
+        wheelItemId: ["Pick a wheel of the tire's rim diameter."],
+      });
+    const refusal = hubRefusal(
+      checkWheelOnHub(
+        { boltPattern: v.boltPattern, hubBoreMm: v.hubBoreMm },
+        { boltPattern: wheel.bolt_pattern, centerBoreMm: wheel.center_bore_mm },
+      ),
+    );
     if (refusal) throw new InvalidError(refusal, { wheelItemId: [`${refusal} Pick another wheel.`] });
 
     const fit = summarize({ boltPattern: v.boltPattern, tireSize: v.tireSize, wheel: v.wheel, axleRatio: v.axleRatio }, tire.tire_size!, {
@@ -279,12 +374,32 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
     });
     const services = await trx<CatalogItemRow>("catalog_items").where({ shop_id: shopId, kind: "service" }).orderBy("sku");
     const lines: LineDraft[] = [
-      { ...fromCatalog(tire), catalog_item_id: tire.id, sku: tire.sku, description: tire.description, quantity: input.quantity, unit_price_cents: tire.price_cents, discount_cents: 0, taxable: true },
-      { ...fromCatalog(wheel), catalog_item_id: wheel.id, sku: wheel.sku, description: wheel.description, quantity: input.quantity, unit_price_cents: wheel.price_cents, discount_cents: 0, taxable: true },
+      {
+        ...fromCatalog(tire),
+        catalog_item_id: tire.id,
+        sku: tire.sku,
+        description: tire.description,
+        quantity: input.quantity,
+        unit_price_cents: tire.price_cents,
+        discount_cents: 0,
+        taxable: true,
+      },
+      {
+        ...fromCatalog(wheel),
+        catalog_item_id: wheel.id,
+        sku: wheel.sku,
+        description: wheel.description,
+        quantity: input.quantity,
+        unit_price_cents: wheel.price_cents,
+        discount_cents: 0,
+        taxable: true,
+      },
       ...suggestedServiceLines(services, wheel, input.quantity, fit, shop.fabrication_rate_cents),
     ];
     const totals = totalsOf(lines, 0, shop.tax_rate_bp, shop.deposit_pct);
-    const [{ next }] = (await trx("quotes").where({ shop_id: shopId }).max<{ next: number | null }[]>({ next: "number" })) as [{ next: number | null }];
+    const [{ next }] = (await trx("quotes").where({ shop_id: shopId }).max<{ next: number | null }[]>({ next: "number" })) as [
+      { next: number | null },
+    ];
     const [row] = await trx("quotes")
       .insert({
         shop_id: shopId,
@@ -308,13 +423,30 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
       .returning(["id"]);
     const id = (row as { id: string }).id;
     await writeLines(trx, id, lines, totals);
-    await trx("quote_events").insert({ quote_id: id, from_status: null, to_status: "draft", actor_user_id: actor.userId, actor: actor.label, note: "created" });
+    await trx("quote_events").insert({
+      quote_id: id,
+      from_status: null,
+      to_status: "draft",
+      actor_user_id: actor.userId,
+      actor: actor.label,
+      note: "created",
+    });
     return id;
   });
 }
 
 export interface UpdateQuote {
-  lines: { kind: LineDraft["kind"]; unit: QuoteLineUnit; catalogItemId?: string | null; sku: string; description: string; quantity: number; unitPriceCents: number; discountCents: number; taxable: boolean }[];
+  lines: {
+    kind: LineDraft["kind"];
+    unit: QuoteLineUnit;
+    catalogItemId?: string | null;
+    sku: string;
+    description: string;
+    quantity: number;
+    unitPriceCents: number;
+    discountCents: number;
+    taxable: boolean;
+  }[];
   discountCents: number;
   notes: string;
 }
@@ -331,17 +463,26 @@ export async function updateDraft(db: Knex, scope: QuoteScope, id: string, input
     if (quote.status !== "draft") throw new ConflictError("Only a draft can be edited. Take the quote back to draft first.");
     const ids = [...new Set(input.lines.map((l) => l.catalogItemId).filter((x): x is string => !!x))];
     const items = new Map<string, CatalogItemRow>();
-    if (ids.length) for (const it of await trx<CatalogItemRow>("catalog_items").where({ shop_id: scope.shopId }).whereIn("id", ids)) items.set(it.id, it);
+    if (ids.length)
+      for (const it of await trx<CatalogItemRow>("catalog_items").where({ shop_id: scope.shopId }).whereIn("id", ids)) items.set(it.id, it);
     const fe: Record<string, string[]> = {};
     const lines: LineDraft[] = input.lines.map((l, i) => {
       const item = l.catalogItemId ? items.get(l.catalogItemId) : undefined;
-      if (l.catalogItemId && !item) fe[`lines.${i}.catalogItemId`] = ["That item is not in your catalog (any more): remove the line or add the item again."];
+      if (l.catalogItemId && !item)
+        fe[`lines.${i}.catalogItemId`] = ["That item is not in your catalog (any more): remove the line or add the item again."];
       const own = item ? fromCatalog(item) : { kind: l.kind, unit: l.unit, wheel_bolt_pattern: null, wheel_center_bore_mm: null };
       if (own.unit === "each" && !Number.isInteger(l.quantity)) {
-        fe[`lines.${i}.quantity`] = [`Count whole items: ${formatQuantity(l.quantity, "each")} is not a whole number (only hourly labour takes part hours).`];
+        fe[`lines.${i}.quantity`] = [
+          `Count whole items: ${formatQuantity(l.quantity, "each")} is not a whole number (only hourly labour takes part hours).`,
+        ];
       }
       if (item?.kind === "wheel") {
-        const refusal = hubRefusal(checkWheelOnHub({ boltPattern: quote.bolt_pattern, hubBoreMm: quote.hub_bore_mm }, { boltPattern: item.bolt_pattern, centerBoreMm: item.center_bore_mm }));
+        const refusal = hubRefusal(
+          checkWheelOnHub(
+            { boltPattern: quote.bolt_pattern, hubBoreMm: quote.hub_bore_mm },
+            { boltPattern: item.bolt_pattern, centerBoreMm: item.center_bore_mm },
+          ),
+        );
         if (refusal) fe[`lines.${i}.catalogItemId`] = [refusal];
       }
       return {
@@ -368,12 +509,20 @@ export async function updateDraft(db: Knex, scope: QuoteScope, id: string, input
  * the PDF and the customer's page keep showing it. `seenUpdatedAt`: the version the sender was
  * looking at; if the quote changed since, nothing is sent (409). Returns the token for the link.
  */
-export async function markSent(db: Knex, scope: QuoteScope, id: string, actor: Actor, seenUpdatedAt?: string): Promise<{ token: string; document: QuoteDocument }> {
+export async function markSent(
+  db: Knex,
+  scope: QuoteScope,
+  id: string,
+  actor: Actor,
+  seenUpdatedAt?: string,
+): Promise<{ token: string; document: QuoteDocument }> {
   const token = randomToken();
   const document = await db.transaction(async (trx) => {
     const quote = await getQuote(trx, scope, id, true);
     if (seenUpdatedAt && new Date(quote.updated_at).getTime() !== new Date(seenUpdatedAt).getTime()) {
-      throw new ConflictError("This quote changed after you opened it (saved from another window or by a colleague). Reload it, check the lines, and send again.");
+      throw new ConflictError(
+        "This quote changed after you opened it (saved from another window or by a colleague). Reload it, check the lines, and send again.",
+      );
     }
     const customer = await trx("customers").where({ id: quote.customer_id, shop_id: scope.shopId }).first("name", "phone", "email");
     if (!customer?.email) throw new InvalidError("The customer has no e-mail address. Add one before sending.");
@@ -401,7 +550,14 @@ export async function latestSentDocument(db: Knex | Knex.Transaction, quoteId: s
 }
 
 /** Staff moves: back to draft (the link stops working), declined, installed. */
-export async function staffTransition(db: Knex, scope: QuoteScope, id: string, to: "draft" | "declined" | "installed", actor: Actor, note = "") {
+export async function staffTransition(
+  db: Knex,
+  scope: QuoteScope,
+  id: string,
+  to: "draft" | "declined" | "installed",
+  actor: Actor,
+  note = "",
+) {
   await db.transaction(async (trx) => {
     const quote = await getQuote(trx, scope, id, true);
     await transition(trx, quote, to, actor, note, to === "draft" ? { public_token_hash: null } : {});
@@ -423,10 +579,22 @@ export async function answerByToken(db: Knex, token: string, to: "accepted" | "d
 /** A quote by its public token (the customer's link), or undefined. */
 export async function findByToken(db: Knex | Knex.Transaction, token: string, lock = false): Promise<QuoteRow | undefined> {
   if (!isLinkToken(token)) return undefined;
-  const q = db<QuoteRow>("quotes").where({ public_token_hash: hashToken(token) }).first();
+  const q = db<QuoteRow>("quotes")
+    .where({ public_token_hash: hashToken(token) })
+    .first();
   if (lock) q.forUpdate();
   return withEffectiveStatus((await q) as QuoteRow | undefined);
 }
 
 /** These queries on the app's database handle, for pages and route handlers. */
-export const quoteQueries = bindAppDb({ answerByToken, createQuote, expireDue, findByToken, getQuoteDetail, latestSentDocument, listQuotes, staffTransition, updateDraft });
+export const quoteQueries = bindAppDb({
+  answerByToken,
+  createQuote,
+  expireDue,
+  findByToken,
+  getQuoteDetail,
+  latestSentDocument,
+  listQuotes,
+  staffTransition,
+  updateDraft,
+});

@@ -5,14 +5,31 @@ import { counterVehicleSchema } from "@/lib/shop/customers/schema";
 
 export const customerSchema = z
   .object({
-    name: z.string({ error: "Enter the customer's name." }).trim().min(1, "Enter the customer's name.").max(120, "Use at most 120 characters."),
-    phone: z.string({ error: "Enter the phone number as text." }).trim().max(40, "Use at most 40 characters.").regex(/^[0-9+()\-.\s]*$/, "Use digits, spaces and + ( ) - . only."),
+    name: z
+      .string({ error: "Enter the customer's name." })
+      .trim()
+      .min(1, "Enter the customer's name.")
+      .max(120, "Use at most 120 characters."),
+    phone: z
+      .string({ error: "Enter the phone number as text." })
+      .trim()
+      .max(40, "Use at most 40 characters.")
+      .regex(/^[0-9+()\-.\s]*$/, "Use digits, spaces and + ( ) - . only."),
     email: z.union([z.literal(""), emailField]),
   })
-  .refine((c) => c.phone.replace(/\D/g, "").length >= 7 || c.email !== "", { path: ["phone"], message: "Enter a phone number (7 digits or more) or an e-mail address." });
+  .refine((c) => c.phone.replace(/\D/g, "").length >= 7 || c.email !== "", {
+    path: ["phone"],
+    message: "Enter a phone number (7 digits or more) or an e-mail address.",
+  });
 export type CustomerInput = z.infer<typeof customerSchema>;
 
-export const customerSearchSchema = z.object({ q: z.string({ error: "Type a phone number, e-mail or name." }).trim().min(1, "Type a phone number, e-mail or name.").max(120, "Use at most 120 characters.") });
+export const customerSearchSchema = z.object({
+  q: z
+    .string({ error: "Type a phone number, e-mail or name." })
+    .trim()
+    .min(1, "Type a phone number, e-mail or name.")
+    .max(120, "Use at most 120 characters."),
+});
 
 const uuidField = (message: string) => z.uuid({ error: message });
 const centsField = (what: string) =>
@@ -44,16 +61,14 @@ export const QUOTE_LINE_UNITS = ["each", "hour"] as const;
  * can take. Whether the line may be a part hour is the server's call: it knows from the catalog
  * which items are sold by the hour (lib/shop/quotes/queries.ts).
  */
-const quantityField = z
-  .union([z.number(), z.string()], { error: "Enter a quantity, e.g. 4, or 1.5 for hours." })
-  .transform((v, ctx) => {
-    try {
-      return parseQuantity(v, "hour");
-    } catch (e) {
-      ctx.addIssue({ code: "custom", message: e instanceof QuantityError ? e.message : "Enter a quantity, e.g. 4, or 1.5 for hours." });
-      return z.NEVER;
-    }
-  });
+const quantityField = z.union([z.number(), z.string()], { error: "Enter a quantity, e.g. 4, or 1.5 for hours." }).transform((v, ctx) => {
+  try {
+    return parseQuantity(v, "hour");
+  } catch (e) {
+    ctx.addIssue({ code: "custom", message: e instanceof QuantityError ? e.message : "Enter a quantity, e.g. 4, or 1.5 for hours." });
+    return z.NEVER;
+  }
+});
 
 export const quoteLineSchema = z.object(
   {
@@ -73,7 +88,10 @@ export const quoteLineSchema = z.object(
 
 export const updateQuoteSchema = z.object(
   {
-    lines: z.array(quoteLineSchema, { error: "A quote needs at least one line." }).min(1, "A quote needs at least one line.").max(60, "At most 60 lines."),
+    lines: z
+      .array(quoteLineSchema, { error: "A quote needs at least one line." })
+      .min(1, "A quote needs at least one line.")
+      .max(60, "At most 60 lines."),
     discountCents: centsField("the quote discount"),
     notes: z.string({ error: "Enter the notes as text." }).max(2000, "Use at most 2000 characters.").default(""),
   },
@@ -81,7 +99,10 @@ export const updateQuoteSchema = z.object(
 );
 
 /** Sending: the version of the quote the sender was looking at, so an unseen change is not sent. */
-export const sendQuoteSchema = z.object({ seenUpdatedAt: z.iso.datetime({ offset: true, error: "Reload the quote and send it again." }).optional() }, { error: "Reload the quote and send it again." });
+export const sendQuoteSchema = z.object(
+  { seenUpdatedAt: z.iso.datetime({ offset: true, error: "Reload the quote and send it again." }).optional() },
+  { error: "Reload the quote and send it again." },
+);
 
 export const quoteStatusSchema = z.object(
   {
@@ -91,4 +112,7 @@ export const quoteStatusSchema = z.object(
   { error: "Pick back to draft, declined or installed." },
 );
 
-export const publicQuoteActionSchema = z.object({ action: z.enum(["accept", "decline", "pay"], { error: "Choose accept, decline or pay." }) }, { error: "Choose accept, decline or pay." });
+export const publicQuoteActionSchema = z.object(
+  { action: z.enum(["accept", "decline", "pay"], { error: "Choose accept, decline or pay." }) },
+  { error: "Choose accept, decline or pay." },
+);

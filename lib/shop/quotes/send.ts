@@ -5,7 +5,16 @@ import { appOrigin, queueMail } from "@/lib/platform/mail";
 import { type QuoteDocument, buildQuoteDocument, hubCautions } from "@/lib/shop/quotes/document";
 import { formatUsd } from "@/lib/shop/quotes/money";
 import { quotePdf } from "@/lib/shop/quotes/pdf";
-import { type QuoteRecord, type QuoteScope, type Actor, findByToken, getQuoteDetail, latestSentDocument, markSent, quoteParties } from "./queries";
+import {
+  type QuoteRecord,
+  type QuoteScope,
+  type Actor,
+  findByToken,
+  getQuoteDetail,
+  latestSentDocument,
+  markSent,
+  quoteParties,
+} from "./queries";
 import { getShop } from "../queries";
 import { bindAppDb } from "@/lib/platform/db/bind";
 import { escapeHtml as esc } from "@/lib/platform/text";
@@ -14,13 +23,23 @@ import { escapeHtml as esc } from "@/lib/platform/text";
  * The quote as a document: a draft from its live rows; any other quote as it was last sent
  * (a quote sent before documents were stored falls back to its rows).
  */
-export async function documentFor(db: Knex, detail: Pick<QuoteRecord, "quote" | "customer" | "lines" | "createdByName">): Promise<QuoteDocument> {
+export async function documentFor(
+  db: Knex,
+  detail: Pick<QuoteRecord, "quote" | "customer" | "lines" | "createdByName">,
+): Promise<QuoteDocument> {
   if (detail.quote.status !== "draft") {
     const sent = await latestSentDocument(db, detail.quote.id);
     if (sent) return sent;
   }
   const shop = await getShop(db, detail.quote.shop_id);
-  return buildQuoteDocument({ shop: shop!, quote: detail.quote, customer: detail.customer, lines: detail.lines, preparedBy: detail.createdByName, sentAt: null });
+  return buildQuoteDocument({
+    shop: shop!,
+    quote: detail.quote,
+    customer: detail.customer,
+    lines: detail.lines,
+    preparedBy: detail.createdByName,
+    sentAt: null,
+  });
 }
 
 export async function renderQuotePdf(db: Knex, detail: QuoteRecord): Promise<Buffer> {

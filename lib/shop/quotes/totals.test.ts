@@ -2,7 +2,12 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { computeTotals, divRoundHalfUp } from "./totals";
 
-const line = (quantity: number, unitPriceCents: number, taxable = true, discountCents = 0) => ({ quantity, unitPriceCents, discountCents, taxable });
+const line = (quantity: number, unitPriceCents: number, taxable = true, discountCents = 0) => ({
+  quantity,
+  unitPriceCents,
+  discountCents,
+  taxable,
+});
 
 describe("quote totals in integer cents", () => {
   it("worked example: four tires and four wheels at 8.25 %", () => {
@@ -14,7 +19,9 @@ describe("quote totals in integer cents", () => {
 
   it("rounds tax once on the total, half a cent up", () => {
     // 3 × 0.10 at 8.25 %: 0.30 × 0.0825 = 0.02475 → 0.02 (below half). Per line it would be 3 × round(0.00825) = 3 × 0.01 = 0.03.
-    expect(computeTotals({ lines: [line(1, 10), line(1, 10), line(1, 10)], discountCents: 0, taxRateBp: 825, depositPct: 0 }).taxCents).toBe(2);
+    expect(
+      computeTotals({ lines: [line(1, 10), line(1, 10), line(1, 10)], discountCents: 0, taxRateBp: 825, depositPct: 0 }).taxCents,
+    ).toBe(2);
     // 1.00 × 6.5 % = 0.065 → 0.07 (exactly half goes up); 1.00 × 6.49 % = 0.0649 → 0.06.
     expect(computeTotals({ lines: [line(1, 100)], discountCents: 0, taxRateBp: 650, depositPct: 0 }).taxCents).toBe(7);
     expect(computeTotals({ lines: [line(1, 100)], discountCents: 0, taxRateBp: 649, depositPct: 0 }).taxCents).toBe(6);
@@ -58,7 +65,14 @@ describe("quote totals in integer cents", () => {
   it("always: whole cents, shares add up, total = subtotal − discount + tax (property)", () => {
     fc.assert(
       fc.property(
-        fc.array(fc.record({ quantity: fc.integer({ min: 1, max: 8 }), unitPriceCents: fc.integer({ min: 0, max: 200000 }), taxable: fc.boolean() }), { minLength: 1, maxLength: 12 }),
+        fc.array(
+          fc.record({
+            quantity: fc.integer({ min: 1, max: 8 }),
+            unitPriceCents: fc.integer({ min: 0, max: 200000 }),
+            taxable: fc.boolean(),
+          }),
+          { minLength: 1, maxLength: 12 },
+        ),
         fc.integer({ min: 0, max: 3000 }),
         fc.integer({ min: 0, max: 100 }),
         fc.double({ min: 0, max: 1, noNaN: true }),
@@ -78,7 +92,12 @@ describe("quote totals in integer cents", () => {
 
   it("hourly labour in part hours stays exact in cents; a fraction of a cent on a line rounds half up", () => {
     // 1.5 h × 145.00 = 217.50; 0.25 h × 125.00 = 31.25 (arithmetic, exact).
-    const t = computeTotals({ lines: [line(1.5, 14500, false), line(0.25, 12500, false)], discountCents: 0, taxRateBp: 825, depositPct: 25 });
+    const t = computeTotals({
+      lines: [line(1.5, 14500, false), line(0.25, 12500, false)],
+      discountCents: 0,
+      taxRateBp: 825,
+      depositPct: 25,
+    });
     expect(t.lines.map((l) => l.grossCents)).toEqual([21750, 3125]);
     // Total 248.75; deposit 25 % = 62.1875 → 62.19 (half up); balance 248.75 − 62.19 = 186.56.
     expect(t).toMatchObject({ totalCents: 24875, depositCents: 6219, balanceCents: 18656 });

@@ -75,8 +75,10 @@ export function computeTotals(input: TotalsInput): Totals {
     if (hundredths === null || hundredths < 1 || l.quantity > MAX_QUANTITY) {
       throw new TotalsError(`lines.${i}.quantity`, `Quantity must be more than 0 and at most ${MAX_QUANTITY}, with at most two decimals.`);
     }
-    if (!isCount(l.unitPriceCents, 1e9)) throw new TotalsError(`lines.${i}.unitPriceCents`, "The price must be a whole number of cents, 0 or more.");
-    if (!isCount(l.discountCents, 1e11)) throw new TotalsError(`lines.${i}.discountCents`, "The discount must be a whole number of cents, 0 or more.");
+    if (!isCount(l.unitPriceCents, 1e9))
+      throw new TotalsError(`lines.${i}.unitPriceCents`, "The price must be a whole number of cents, 0 or more.");
+    if (!isCount(l.discountCents, 1e11))
+      throw new TotalsError(`lines.${i}.discountCents`, "The discount must be a whole number of cents, 0 or more.");
     const gross = Number.isInteger(l.quantity) ? l.quantity * l.unitPriceCents : divRoundHalfUp(hundredths * l.unitPriceCents, 100);
     if (l.discountCents > gross) throw new TotalsError(`lines.${i}.discountCents`, "A line's discount cannot exceed the line's amount.");
     return { grossCents: gross, netCents: gross - l.discountCents, quoteDiscountShareCents: 0 };
@@ -102,5 +104,14 @@ export function computeTotals(input: TotalsInput): Totals {
   const tax = divRoundHalfUp(taxable * taxRateBp, 10_000);
   const total = subtotal - discountCents + tax;
   const deposit = divRoundHalfUp(total * depositPct, 100);
-  return { lines: out, subtotalCents: subtotal, discountCents, taxableCents: taxable, taxCents: tax, totalCents: total, depositCents: deposit, balanceCents: total - deposit };
+  return {
+    lines: out,
+    subtotalCents: subtotal,
+    discountCents,
+    taxableCents: taxable,
+    taxCents: tax,
+    totalCents: total,
+    depositCents: deposit,
+    balanceCents: total - deposit,
+  };
 }

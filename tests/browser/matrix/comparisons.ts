@@ -19,7 +19,12 @@ const adminOnly = (status: number) => ({ anonymous: 401, member: 404, shop_staff
 const memberOnly = (status: number) => ({ anonymous: 401, member: status, shop_staff: 404, shop_owner: 404, admin: 404 });
 
 export const cases: MatrixCase[] = [
-  { route: "/api/comparisons", method: "GET", path: "/api/comparisons?q=rock&sort=name", expect: { anonymous: 401, member: 200, shop_staff: 200, shop_owner: 200, admin: 200 } },
+  {
+    route: "/api/comparisons",
+    method: "GET",
+    path: "/api/comparisons?q=rock&sort=name",
+    expect: { anonymous: 401, member: 200, shop_staff: 200, shop_owner: 200, admin: 200 },
+  },
   {
     route: "/api/comparisons",
     method: "POST",
@@ -28,7 +33,13 @@ export const cases: MatrixCase[] = [
     expect: { anonymous: 401, member: 422, shop_staff: 422, shop_owner: 422, admin: 422 },
     note: "invalid body: field errors, nothing saved",
   },
-  { route: "/api/comparisons/[id]", method: "GET", path: `/api/comparisons/${JUNO_COMPARISON}`, expect: memberOnly(200), note: "the demo member's comparison" },
+  {
+    route: "/api/comparisons/[id]",
+    method: "GET",
+    path: `/api/comparisons/${JUNO_COMPARISON}`,
+    expect: memberOnly(200),
+    note: "the demo member's comparison",
+  },
   { route: "/api/comparisons/[id]", method: "GET", path: `/api/comparisons/${STRANGER}`, expect: memberOnly(404), note: "unknown id" },
   {
     route: "/api/comparisons/[id]",
@@ -37,9 +48,35 @@ export const cases: MatrixCase[] = [
     body: { name: "Role matrix renamed" },
     expect: adminOnly(200),
   },
-  { route: "/api/comparisons/[id]", method: "DELETE", path: async () => `/api/comparisons/${await adminComparison()}`, expect: adminOnly(200) },
-  { route: "/api/comparisons/[id]/duplicate", method: "POST", path: async () => `/api/comparisons/${await adminComparison()}/duplicate`, expect: adminOnly(201) },
-  { route: "/api/comparisons/[id]/share", method: "POST", path: async () => `/api/comparisons/${await adminComparison()}/share`, expect: adminOnly(201) },
-  { route: "/api/comparisons/[id]/share", method: "DELETE", path: async () => `/api/comparisons/${await adminComparison()}/share`, expect: adminOnly(200) },
-  { route: "/s/[slug]", method: "GET", path: "/s/AAAAAAAAAAAAAAAAAAAAAAAA", expect: { anonymous: 404, member: 404, shop_staff: 404, shop_owner: 404, admin: 404 }, note: "page: unknown slug" },
+  {
+    route: "/api/comparisons/[id]",
+    method: "DELETE",
+    path: async () => `/api/comparisons/${await adminComparison()}`,
+    expect: adminOnly(200),
+  },
+  {
+    route: "/api/comparisons/[id]/duplicate",
+    method: "POST",
+    path: async () => `/api/comparisons/${await adminComparison()}/duplicate`,
+    expect: adminOnly(201),
+  },
+  {
+    route: "/api/comparisons/[id]/share",
+    method: "POST",
+    path: async () => `/api/comparisons/${await adminComparison()}/share`,
+    expect: adminOnly(201),
+  },
+  {
+    route: "/api/comparisons/[id]/share",
+    method: "DELETE",
+    path: async () => `/api/comparisons/${await adminComparison()}/share`,
+    expect: adminOnly(200),
+  },
+  {
+    route: "/s/[slug]",
+    method: "GET",
+    path: "/s/AAAAAAAAAAAAAAAAAAAAAAAA",
+    expect: { anonymous: 404, member: 404, shop_staff: 404, shop_owner: 404, admin: 404 },
+    note: "page: unknown slug",
+  },
 ];

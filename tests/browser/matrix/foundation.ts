@@ -31,7 +31,13 @@ export const cases: MatrixCase[] = [
     expect: publicRoute(422),
     note: "public; invalid input gives field errors for everyone",
   },
-  { route: "/api/account/password/forgot", method: "POST", path: "/api/account/password/forgot", body: { email: "nobody@example.test" }, expect: publicRoute(200) },
+  {
+    route: "/api/account/password/forgot",
+    method: "POST",
+    path: "/api/account/password/forgot",
+    body: { email: "nobody@example.test" },
+    expect: publicRoute(200),
+  },
   {
     route: "/api/account/password/reset",
     method: "POST",
@@ -63,5 +69,12 @@ export const cases: MatrixCase[] = [
 // token is refused with a redirect to the confirmation page, never performed.
 cases.push(
   { route: "/api/auth/[...nextauth]", method: "GET", path: "/api/auth/session", expect: publicRoute(200) },
-  { route: "/api/auth/[...nextauth]", method: "POST", path: "/api/auth/signout", body: {}, expect: publicRoute(302), note: "no CSRF token" },
+  {
+    route: "/api/auth/[...nextauth]",
+    method: "POST",
+    path: "/api/auth/signout",
+    body: {},
+    expect: publicRoute(302),
+    note: "no CSRF token",
+  },
 );

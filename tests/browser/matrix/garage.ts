@@ -7,7 +7,13 @@ import type { MatrixCase } from "./types";
 const DEMO_VEHICLE = "d4000000-0000-4000-8000-000000000001";
 const DEMO_PHOTO = "d4000000-0000-4000-8000-000000000201";
 /** `status` for the demo member, `others` for shop staff, shop owner and admin (`admin` when the admin differs). */
-const garage = (status: number, others = status, admin = others) => ({ anonymous: 401, member: status, shop_staff: others, shop_owner: others, admin });
+const garage = (status: number, others = status, admin = others) => ({
+  anonymous: 401,
+  member: status,
+  shop_staff: others,
+  shop_owner: others,
+  admin,
+});
 
 const SETUP = { tire: "265/70R17", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 }, spacerMm: 0 };
 const VEHICLE = {
@@ -27,17 +33,48 @@ async function scratchVehicle(): Promise<string> {
 
 async function scratchClearance(): Promise<string> {
   const id = await scratchVehicle();
-  const res = await call("member", "POST", `/api/vehicles/${id}/clearances`, { label: "frame rail", direction: "inboard", distance: "1 in", suspensionState: "ride-height" });
+  const res = await call("member", "POST", `/api/vehicles/${id}/clearances`, {
+    label: "frame rail",
+    direction: "inboard",
+    distance: "1 in",
+    suspensionState: "ride-height",
+  });
   const c = ((await res.json()) as { clearance: { id: string } }).clearance.id;
   return `/api/vehicles/${id}/clearances/${c}`;
 }
 
 export const cases: MatrixCase[] = [
   { route: "/api/vehicles", method: "GET", path: "/api/vehicles", expect: garage(200) },
-  { route: "/api/vehicles", method: "POST", path: "/api/vehicles", body: { ...VEHICLE, boltPattern: "nope" }, expect: garage(422), note: "invalid input" },
-  { route: "/api/vehicles/[id]", method: "GET", path: `/api/vehicles/${DEMO_VEHICLE}`, expect: garage(200, 404), note: "the member's vehicle" },
-  { route: "/api/vehicles/[id]", method: "PATCH", path: `/api/vehicles/${DEMO_VEHICLE}`, body: { ...VEHICLE, name: "" }, expect: garage(422, 422), note: "invalid body refused before the lookup" },
-  { route: "/api/vehicles/[id]", method: "DELETE", path: async () => `/api/vehicles/${await scratchVehicle()}`, expect: garage(200, 404), note: "member deletes first, then it is gone" },
+  {
+    route: "/api/vehicles",
+    method: "POST",
+    path: "/api/vehicles",
+    body: { ...VEHICLE, boltPattern: "nope" },
+    expect: garage(422),
+    note: "invalid input",
+  },
+  {
+    route: "/api/vehicles/[id]",
+    method: "GET",
+    path: `/api/vehicles/${DEMO_VEHICLE}`,
+    expect: garage(200, 404),
+    note: "the member's vehicle",
+  },
+  {
+    route: "/api/vehicles/[id]",
+    method: "PATCH",
+    path: `/api/vehicles/${DEMO_VEHICLE}`,
+    body: { ...VEHICLE, name: "" },
+    expect: garage(422, 422),
+    note: "invalid body refused before the lookup",
+  },
+  {
+    route: "/api/vehicles/[id]",
+    method: "DELETE",
+    path: async () => `/api/vehicles/${await scratchVehicle()}`,
+    expect: garage(200, 404),
+    note: "member deletes first, then it is gone",
+  },
   {
     route: "/api/vehicles/[id]/clearances",
     method: "POST",
@@ -65,10 +102,25 @@ export const cases: MatrixCase[] = [
     route: "/api/vehicles/[id]/checklist",
     method: "PUT",
     path: `/api/vehicles/${DEMO_VEHICLE}/checklist`,
-    body: { planned: { ...SETUP, tire: "35x12.50R17LT", wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 } }, ticked: ["not-an-item"] },
+    body: {
+      planned: { ...SETUP, tire: "35x12.50R17LT", wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 } },
+      ticked: ["not-an-item"],
+    },
     expect: garage(422, 404),
     note: "an item that is not on the list; only the member owns the vehicle",
   },
-  { route: "/api/photos/[id]", method: "GET", path: `/api/photos/${DEMO_PHOTO}?variant=thumb`, expect: garage(200, 404, 200), note: "the owner and admins see photos" },
-  { route: "/api/photos/[id]", method: "DELETE", path: "/api/photos/d4000000-0000-4000-8000-0000000009ff", expect: garage(404, 404), note: "no such photo" },
+  {
+    route: "/api/photos/[id]",
+    method: "GET",
+    path: `/api/photos/${DEMO_PHOTO}?variant=thumb`,
+    expect: garage(200, 404, 200),
+    note: "the owner and admins see photos",
+  },
+  {
+    route: "/api/photos/[id]",
+    method: "DELETE",
+    path: "/api/photos/d4000000-0000-4000-8000-0000000009ff",
+    expect: garage(404, 404),
+    note: "no such photo",
+  },
 ];

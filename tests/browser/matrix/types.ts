@@ -18,8 +18,20 @@ export interface MatrixCase {
 }
 
 /** The usual shapes. */
-export const publicRoute = (status = 200): Record<Who, number> => ({ anonymous: status, member: status, shop_staff: status, shop_owner: status, admin: status });
-export const signedIn = (status = 200): Record<Who, number> => ({ anonymous: 401, member: status, shop_staff: status, shop_owner: status, admin: status });
+export const publicRoute = (status = 200): Record<Who, number> => ({
+  anonymous: status,
+  member: status,
+  shop_staff: status,
+  shop_owner: status,
+  admin: status,
+});
+export const signedIn = (status = 200): Record<Who, number> => ({
+  anonymous: 401,
+  member: status,
+  shop_staff: status,
+  shop_owner: status,
+  admin: status,
+});
 export const only = (roles: Exclude<Who, "anonymous">[], status = 200): Record<Who, number> => ({
   anonymous: 401,
   member: roles.includes("member") ? status : 403,

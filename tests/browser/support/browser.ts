@@ -15,7 +15,15 @@ export async function launch(viewport = { width: 1280, height: 900 }): Promise<{
     headless: true,
     viewport,
     baseURL: BASE,
-    args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+    args: [
+      "--no-sandbox",
+      "--disable-gpu",
+      "--disable-quic",
+      "--no-first-run",
+      "--disable-background-networking",
+      "--disable-component-update",
+      "--disable-sync",
+    ],
   });
   return {
     context,
@@ -38,7 +46,13 @@ export async function seriousViolations(page: Page): Promise<string[]> {
   const result = await new AxeBuilder({ page }).analyze();
   return result.violations
     .filter((v) => v.impact === "serious" || v.impact === "critical")
-    .map((v) => `${v.id} (${v.impact}): ${v.help} — ${v.nodes.slice(0, 3).map((n) => n.target.join(" ")).join(", ")}`);
+    .map(
+      (v) =>
+        `${v.id} (${v.impact}): ${v.help} — ${v.nodes
+          .slice(0, 3)
+          .map((n) => n.target.join(" "))
+          .join(", ")}`,
+    );
 }
 
 export async function signInAs(page: Page, email: string, password: string): Promise<void> {

@@ -53,7 +53,13 @@ export function cookieFor(who: Who): Promise<string> {
 }
 
 /** A call as the app's own pages make it: a browser sends Origin on every POST/PUT/PATCH/DELETE (lib/platform/http/origin.ts). */
-export async function call(who: Who, method: string, path: string, body?: unknown, extraHeaders: Record<string, string> = {}): Promise<Response> {
+export async function call(
+  who: Who,
+  method: string,
+  path: string,
+  body?: unknown,
+  extraHeaders: Record<string, string> = {},
+): Promise<Response> {
   const cookie = await cookieFor(who);
   return fetch(`${BASE}${path}`, {
     method,

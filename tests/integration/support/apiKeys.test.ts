@@ -5,7 +5,12 @@ import { internalKeys } from "./apiKeys";
 describe("internalKeys", () => {
   it("finds hashes, search keys, snake_case keys and Date objects at any depth", () => {
     const answer = { quote: { id: "q", public_token_hash: "x", createdAt: new Date(0) }, items: [{ searchKey: "a", price_cents: 1 }] };
-    expect(internalKeys(answer)).toEqual(["quote.public_token_hash", "quote.createdAt (Date)", "items[0].searchKey", "items[0].price_cents (snake_case)"]);
+    expect(internalKeys(answer)).toEqual([
+      "quote.public_token_hash",
+      "quote.createdAt (Date)",
+      "items[0].searchKey",
+      "items[0].price_cents (snake_case)",
+    ]);
   });
 
   it("passes the API's own shape", () => {

@@ -4,11 +4,41 @@ import { CSV_TEMPLATE, parseCatalogCsv } from "@/lib/shop/catalog/csv";
 export const SHOP_A = "0a000000-0000-4000-8000-00000000000a";
 export const SHOP_B = "0b000000-0000-4000-8000-00000000000b";
 export const U = {
-  ownerA: { id: "0a000000-0000-4000-8000-000000000001", role: "shop_owner", shop_id: SHOP_A, email: "owner-a@example.test", name: "Olive Owner" },
-  staffA: { id: "0a000000-0000-4000-8000-000000000002", role: "shop_staff", shop_id: SHOP_A, email: "staff-a@example.test", name: "Sam Staff" },
-  staffA2: { id: "0a000000-0000-4000-8000-000000000003", role: "shop_staff", shop_id: SHOP_A, email: "staff-a2@example.test", name: "Second Staff" },
-  ownerB: { id: "0b000000-0000-4000-8000-000000000001", role: "shop_owner", shop_id: SHOP_B, email: "owner-b@example.test", name: "Other Owner" },
-  staffB: { id: "0b000000-0000-4000-8000-000000000002", role: "shop_staff", shop_id: SHOP_B, email: "staff-b@example.test", name: "Other Staff" },
+  ownerA: {
+    id: "0a000000-0000-4000-8000-000000000001",
+    role: "shop_owner",
+    shop_id: SHOP_A,
+    email: "owner-a@example.test",
+    name: "Olive Owner",
+  },
+  staffA: {
+    id: "0a000000-0000-4000-8000-000000000002",
+    role: "shop_staff",
+    shop_id: SHOP_A,
+    email: "staff-a@example.test",
+    name: "Sam Staff",
+  },
+  staffA2: {
+    id: "0a000000-0000-4000-8000-000000000003",
+    role: "shop_staff",
+    shop_id: SHOP_A,
+    email: "staff-a2@example.test",
+    name: "Second Staff",
+  },
+  ownerB: {
+    id: "0b000000-0000-4000-8000-000000000001",
+    role: "shop_owner",
+    shop_id: SHOP_B,
+    email: "owner-b@example.test",
+    name: "Other Owner",
+  },
+  staffB: {
+    id: "0b000000-0000-4000-8000-000000000002",
+    role: "shop_staff",
+    shop_id: SHOP_B,
+    email: "staff-b@example.test",
+    name: "Other Staff",
+  },
 } as const;
 
 const SERVICES = [

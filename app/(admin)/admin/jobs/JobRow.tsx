@@ -22,11 +22,17 @@ export function JobRow({ job }: { job: ProblemJob }) {
       </td>
       <td className="pr-2">{job.state === "failed" ? "Failed" : `Waiting for retry (next ${when(job.nextAttemptAt)})`}</td>
       <td className="pr-2 wrap-anywhere">{job.lastError ?? "—"}</td>
-      <td className="pr-2">{job.attempts} of {job.maxAttempts}</td>
+      <td className="pr-2">
+        {job.attempts} of {job.maxAttempts}
+      </td>
       <td className="pr-2">{when(job.createdAt)}</td>
       <td className="pr-2">{when(job.lastAttemptAt)}</td>
       <td className="py-2">
-        <Button onClick={() => retry.mutate()} disabled={retry.isPending || retry.isSuccess} aria-describedby={retry.isError ? `${job.id}-err` : undefined}>
+        <Button
+          onClick={() => retry.mutate()}
+          disabled={retry.isPending || retry.isSuccess}
+          aria-describedby={retry.isError ? `${job.id}-err` : undefined}
+        >
           {retry.isSuccess ? "Queued" : "Retry now"}
         </Button>
         <span id={`${job.id}-err`} aria-live="polite" className="block text-xs text-red-700">

@@ -48,20 +48,46 @@ export function UserRow({ user, shops, self }: { user: UserItem; shops: { id: st
           value={role}
           onChange={(e) => setRole(e.target.value as Role)}
         >
-          {ROLES.map((r) => <option key={r} value={r}>{ROLE_LABEL[r]}</option>)}
+          {ROLES.map((r) => (
+            <option key={r} value={r}>
+              {ROLE_LABEL[r]}
+            </option>
+          ))}
         </select>
-        {self && <span id={noteId} className="block text-xs text-basalt-600">Another admin changes your own role.</span>}
+        {self && (
+          <span id={noteId} className="block text-xs text-basalt-600">
+            Another admin changes your own role.
+          </span>
+        )}
       </td>
       <td className="pr-2">
         <PhoneLabel>Shop</PhoneLabel>
         {isShopRole(role) ? (
-          <select aria-label={`Shop of ${user.email}`} className="max-w-full rounded border border-basalt-300 px-2 py-1" value={shopId} onChange={(e) => setShopId(e.target.value)}>
-            {shops.map((s) => <option key={s.id} value={s.id}>{s.name}</option>)}
+          <select
+            aria-label={`Shop of ${user.email}`}
+            className="max-w-full rounded border border-basalt-300 px-2 py-1"
+            value={shopId}
+            onChange={(e) => setShopId(e.target.value)}
+          >
+            {shops.map((s) => (
+              <option key={s.id} value={s.id}>
+                {s.name}
+              </option>
+            ))}
           </select>
-        ) : <span className="text-basalt-500">—</span>}
+        ) : (
+          <span className="text-basalt-500">—</span>
+        )}
       </td>
       <td className="py-1 text-right max-md:text-left">
-        <Button variant="secondary" className="min-h-8 py-1" aria-label={`Save ${user.email}`} disabled={!changed} pending={save.isPending} onClick={() => save.mutate()}>
+        <Button
+          variant="secondary"
+          className="min-h-8 py-1"
+          aria-label={`Save ${user.email}`}
+          disabled={!changed}
+          pending={save.isPending}
+          onClick={() => save.mutate()}
+        >
           Save
         </Button>
         <span aria-live="polite" className="block text-xs">

@@ -41,7 +41,13 @@ export function UsersTable({ initial, shops, selfId }: { initial: UserItem[]; sh
     <Card>
       <label className="mb-4 flex max-w-sm flex-col gap-1 text-sm font-medium">
         {USERS_SEARCH_LABEL}
-        <input className="min-h-10 rounded-lg border border-basalt-300 px-3" value={search} onChange={(e) => setSearch(e.target.value)} type="search" maxLength={100} />
+        <input
+          className="min-h-10 rounded-lg border border-basalt-300 px-3"
+          value={search}
+          onChange={(e) => setSearch(e.target.value)}
+          type="search"
+          maxLength={100}
+        />
       </label>
       {users.isError && <Alert tone="error">{(users.error as Error).message}</Alert>}
       {/* On a phone each account reflows into a block with its own labels, so the header row goes. */}

@@ -8,7 +8,14 @@ import { Button } from "@/components/ui/Button";
 import { TextField } from "@/components/ui/TextField";
 import { api, applyFieldErrors } from "@/lib/platform/client/api";
 import { queryKeys } from "@/lib/platform/query/keys";
-import { CLEARANCE_DIRECTION_LABEL, type ClearanceFormValues, type ClearanceValues, SUSPENSION_STATE_LABEL, clearanceSchema, distanceForUnit } from "@/lib/garage/schema";
+import {
+  CLEARANCE_DIRECTION_LABEL,
+  type ClearanceFormValues,
+  type ClearanceValues,
+  SUSPENSION_STATE_LABEL,
+  clearanceSchema,
+  distanceForUnit,
+} from "@/lib/garage/schema";
 
 /**
  * The form that records a measured gap. The unit select applies to a distance typed without
@@ -45,31 +52,59 @@ export function AddPoint({ vehicleId }: { vehicleId: string }) {
   };
   const select = (name: "direction" | "suspensionState" | "unit", label: string, options: Record<string, string>) => (
     <div className="flex flex-col gap-1">
-      <label htmlFor={`f-point-${name}`} className="text-sm font-medium text-basalt-800">{label}</label>
+      <label htmlFor={`f-point-${name}`} className="text-sm font-medium text-basalt-800">
+        {label}
+      </label>
       <select
         id={`f-point-${name}`}
         className="min-h-10 w-full min-w-0 rounded-lg border border-basalt-300 bg-white px-3"
         {...(name === "unit" ? { ...unitField, onChange: switchUnit } : register(name))}
         aria-describedby={`f-point-${name}-error`}
       >
-        {Object.entries(options).map(([v, l]) => <option key={v} value={v}>{l}</option>)}
+        {Object.entries(options).map(([v, l]) => (
+          <option key={v} value={v}>
+            {l}
+          </option>
+        ))}
       </select>
-      <p id={`f-point-${name}-error`} aria-live="polite" className="text-sm text-contact-600">{e[name]?.message}</p>
+      <p id={`f-point-${name}-error`} aria-live="polite" className="text-sm text-contact-600">
+        {e[name]?.message}
+      </p>
     </div>
   );
   return (
     <form onSubmit={onSubmit} noValidate className="no-print mt-5 border-t border-basalt-100 pt-4">
       <h3 className="font-semibold">Add a measured point</h3>
-      <div aria-live="assertive">{failure && <Alert tone="error" className="mt-2">{failure}</Alert>}</div>
+      <div aria-live="assertive">
+        {failure && (
+          <Alert tone="error" className="mt-2">
+            {failure}
+          </Alert>
+        )}
+      </div>
       <div className="mt-2 grid grid-cols-[minmax(0,1fr)] gap-3 sm:grid-cols-2 lg:grid-cols-3">
-        <TextField id="f-point-label" label="Point" hint='e.g. "frame rail, full left lock"' {...register("label")} error={e.label?.message} />
+        <TextField
+          id="f-point-label"
+          label="Point"
+          hint='e.g. "frame rail, full left lock"'
+          {...register("label")}
+          error={e.label?.message}
+        />
         {select("direction", "Direction", CLEARANCE_DIRECTION_LABEL)}
         {select("suspensionState", "Suspension state", SUSPENSION_STATE_LABEL)}
-        <TextField id="f-point-distance" label="Distance" hint="e.g. 1-1/2, 1.5 in or 38 mm" {...register("distance")} error={e.distance?.message} />
+        <TextField
+          id="f-point-distance"
+          label="Distance"
+          hint="e.g. 1-1/2, 1.5 in or 38 mm"
+          {...register("distance")}
+          error={e.distance?.message}
+        />
         {select("unit", "Unit (when the distance has none)", { in: "inches", mm: "millimetres" })}
       </div>
       <p className="mt-1 text-xs text-basalt-500">Recorded as measured with the current setup.</p>
-      <Button type="submit" className="mt-3" pending={formState.isSubmitting}>Add point</Button>
+      <Button type="submit" className="mt-3" pending={formState.isSubmitting}>
+        Add point
+      </Button>
     </form>
   );
 }

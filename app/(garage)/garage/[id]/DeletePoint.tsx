@@ -12,7 +12,13 @@ export function DeletePoint({ vehicleId, clearanceId, label }: { vehicleId: stri
     onSuccess: () => qc.invalidateQueries({ queryKey: queryKeys.garage.vehicle(vehicleId) }),
   });
   return (
-    <Button variant="ghost" className="no-print min-h-8 px-2 py-1 text-xs" pending={m.isPending} onClick={() => m.mutate()} aria-label={`Delete point ${label}`}>
+    <Button
+      variant="ghost"
+      className="no-print min-h-8 px-2 py-1 text-xs"
+      pending={m.isPending}
+      onClick={() => m.mutate()}
+      aria-label={`Delete point ${label}`}
+    >
       Delete point
     </Button>
   );

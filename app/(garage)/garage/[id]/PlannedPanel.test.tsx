@@ -8,15 +8,37 @@ import type { VehicleDetail } from "@/lib/garage/types";
 import { PlannedPanel } from "./PlannedPanel";
 
 vi.setConfig({ testTimeout: 20_000 });
-vi.mock("next/link", () => ({ default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => <a href={href} {...rest}>{children}</a> }));
+vi.mock("next/link", () => ({
+  default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => (
+    <a href={href} {...rest}>
+      {children}
+    </a>
+  ),
+}));
 afterEach(cleanup);
 
 const setup = DEFAULT_INPUT.current;
 const detail: VehicleDetail = {
   vehicle: {
-    id: "v1", name: "Quarry hauler", year: null, make: null, model: null, trim: null, frontSuspension: "solid-axle", boltPattern: "6x139.7", hubBoreMm: null,
-    stockSetup: setup, currentSetup: setup, liftHeightMm: null, kingpinInclinationDeg: null, axleRatio: 3.73, transmissionRatio: 1, clearanceMarginMm: 12.7, notes: "",
-    createdAt: "2026-01-01T00:00:00.000Z", updatedAt: "2026-01-01T00:00:00.000Z",
+    id: "v1",
+    name: "Quarry hauler",
+    year: null,
+    make: null,
+    model: null,
+    trim: null,
+    frontSuspension: "solid-axle",
+    boltPattern: "6x139.7",
+    hubBoreMm: null,
+    stockSetup: setup,
+    currentSetup: setup,
+    liftHeightMm: null,
+    kingpinInclinationDeg: null,
+    axleRatio: 3.73,
+    transmissionRatio: 1,
+    clearanceMarginMm: 12.7,
+    notes: "",
+    createdAt: "2026-01-01T00:00:00.000Z",
+    updatedAt: "2026-01-01T00:00:00.000Z",
   },
   clearances: [],
   photos: [],

@@ -26,7 +26,6 @@ const marginSchema = marginField(MARGIN_LABEL);
 const plannedFormSchema = z.object({ planned: setupSchema, margin: marginSchema });
 type PlannedForm = { planned: SetupForm; margin: string };
 
-
 /** A planned setup typed in, and what every measured point is predicted to become with it. */
 export function PlannedPanel({ detail, initialPlanned }: { detail: VehicleDetail; initialPlanned: Setup | null }) {
   const { vehicle: v, clearances } = detail;
@@ -109,10 +108,19 @@ export function PlannedPanel({ detail, initialPlanned }: { detail: VehicleDetail
               )}
               {planned.success && (
                 <div className="no-print flex flex-wrap gap-2">
-                  <Link href={vehicleWorkspaceUrl(v.currentSetup, planned.data, v)} className={buttonClass("secondary")} data-testid="open-workspace">
+                  <Link
+                    href={vehicleWorkspaceUrl(v.currentSetup, planned.data, v)}
+                    className={buttonClass("secondary")}
+                    data-testid="open-workspace"
+                  >
                     Open current vs planned in the workspace
                   </Link>
-                  <Link href={`/garage/${v.id}/checklist?${plannedKey}${margin.success && margin.data !== v.clearanceMarginMm ? `&m=${urlNumber(margin.data)}` : ""}`} className={buttonClass("primary")}>Install checklist</Link>
+                  <Link
+                    href={`/garage/${v.id}/checklist?${plannedKey}${margin.success && margin.data !== v.clearanceMarginMm ? `&m=${urlNumber(margin.data)}` : ""}`}
+                    className={buttonClass("primary")}
+                  >
+                    Install checklist
+                  </Link>
                 </div>
               )}
             </>

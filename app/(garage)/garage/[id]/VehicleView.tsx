@@ -21,7 +21,11 @@ import { PlannedPanel } from "./PlannedPanel";
 export function VehicleView({ initial, initialPlanned }: { initial: VehicleDetail; initialPlanned: Setup | null }) {
   const id = initial.vehicle.id;
   const router = useRouter();
-  const q = useQuery({ queryKey: queryKeys.garage.vehicle(id), queryFn: () => api<VehicleDetail>(`/api/vehicles/${id}`), initialData: initial });
+  const q = useQuery({
+    queryKey: queryKeys.garage.vehicle(id),
+    queryFn: () => api<VehicleDetail>(`/api/vehicles/${id}`),
+    initialData: initial,
+  });
   const { vehicle: v, clearances, photos } = q.data;
   const [confirming, setConfirming] = useState(false);
   const del = useMutation({
@@ -48,15 +52,25 @@ export function VehicleView({ initial, initialPlanned }: { initial: VehicleDetai
           <p className="mt-1 text-basalt-600">{[v.year, v.make, v.model, v.trim].filter(Boolean).join(" ") || "No description"}</p>
         </div>
         <div className="no-print flex flex-wrap gap-2">
-          <Link href={`/garage/${id}/edit`} className={buttonClass("secondary")}>Edit</Link>
-          <Link href={`/garage/${id}/finder`} className={buttonClass("secondary")}>Fitment finder</Link>
+          <Link href={`/garage/${id}/edit`} className={buttonClass("secondary")}>
+            Edit
+          </Link>
+          <Link href={`/garage/${id}/finder`} className={buttonClass("secondary")}>
+            Fitment finder
+          </Link>
           {!confirming ? (
-            <Button variant="ghost" onClick={() => setConfirming(true)}>Delete vehicle</Button>
+            <Button variant="ghost" onClick={() => setConfirming(true)}>
+              Delete vehicle
+            </Button>
           ) : (
             <span className="flex items-center gap-2">
               <span className="text-sm">Delete it with its points and photos?</span>
-              <Button variant="danger" pending={del.isPending} onClick={() => del.mutate()}>Yes, delete</Button>
-              <Button variant="ghost" onClick={() => setConfirming(false)}>Keep</Button>
+              <Button variant="danger" pending={del.isPending} onClick={() => del.mutate()}>
+                Yes, delete
+              </Button>
+              <Button variant="ghost" onClick={() => setConfirming(false)}>
+                Keep
+              </Button>
             </span>
           )}
         </div>
@@ -77,7 +91,10 @@ export function VehicleView({ initial, initialPlanned }: { initial: VehicleDetai
             {row("Stock setup", setupLine(v.stockSetup))}
             {row("Current setup", setupLine(v.currentSetup))}
             {row("Current tire diameter", bothUnits(current.overallDiameterMm))}
-            {row("Current reach inboard / outboard of the hub face", `${formatLength(current.innerSwingMm, { unit: "mm" })} / ${formatLength(current.outerSwingMm, { unit: "mm" })}`)}
+            {row(
+              "Current reach inboard / outboard of the hub face",
+              `${formatLength(current.innerSwingMm, { unit: "mm" })} / ${formatLength(current.outerSwingMm, { unit: "mm" })}`,
+            )}
           </dl>
           {v.notes && <p className="mt-3 whitespace-pre-line text-sm text-basalt-700">{v.notes}</p>}
         </Card>
@@ -91,9 +108,13 @@ export function VehicleView({ initial, initialPlanned }: { initial: VehicleDetai
 
       <Card>
         <h2 className="text-lg font-semibold">Measured clearances</h2>
-        <p className="mt-1 text-sm text-basalt-600">Gaps you measured from the tire to the nearest part, each with the setup fitted at the time.</p>
+        <p className="mt-1 text-sm text-basalt-600">
+          Gaps you measured from the tire to the nearest part, each with the setup fitted at the time.
+        </p>
         {clearances.length === 0 ? (
-          <p className="mt-3 text-sm text-basalt-700">No points yet. Measure the tightest spots (frame at full lock, fender at full stuff) and add them below.</p>
+          <p className="mt-3 text-sm text-basalt-700">
+            No points yet. Measure the tightest spots (frame at full lock, fender at full stuff) and add them below.
+          </p>
         ) : (
           <ul className="mt-4 flex flex-col gap-4" aria-label="Measured points">
             {clearances.map((c) => (
@@ -102,7 +123,8 @@ export function VehicleView({ initial, initialPlanned }: { initial: VehicleDetai
                   <div>
                     <p className="font-semibold">{c.label}</p>
                     <p className="text-sm text-basalt-600">
-                      {CLEARANCE_DIRECTION_LABEL[c.direction]} · {SUSPENSION_STATE_LABEL[c.suspensionState]} · {bothUnits(c.distanceMm)} (entered as {c.distanceText})
+                      {CLEARANCE_DIRECTION_LABEL[c.direction]} · {SUSPENSION_STATE_LABEL[c.suspensionState]} · {bothUnits(c.distanceMm)}{" "}
+                      (entered as {c.distanceText})
                     </p>
                     <p className="text-xs text-basalt-500">Measured with {setupLine(c.measuredSetup)}</p>
                   </div>

@@ -10,7 +10,13 @@ import { VehicleView } from "./VehicleView";
 
 export const metadata: Metadata = { title: "Vehicle" };
 
-export default async function VehiclePage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+export default async function VehiclePage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ id: string }>;
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}) {
   const [{ id }, sp] = await Promise.all([params, searchParams]);
   const caller = await requirePageCaller(`/garage/${id}`, GARAGE_ACCESS);
   if (!z.uuid().safeParse(id).success) notFound();

@@ -35,7 +35,17 @@ function send(url: string, file: File, clearanceId: string | null, onProgress: (
 }
 
 /** Drag-and-drop (or pick) photos for a vehicle or one of its clearance points. */
-export function PhotoDrop({ vehicleId, clearanceId = null, label, photos }: { vehicleId: string; clearanceId?: string | null; label: string; photos: VehiclePhoto[] }) {
+export function PhotoDrop({
+  vehicleId,
+  clearanceId = null,
+  label,
+  photos,
+}: {
+  vehicleId: string;
+  clearanceId?: string | null;
+  label: string;
+  photos: VehiclePhoto[];
+}) {
   const qc = useQueryClient();
   const inputId = useId();
   const input = useRef<HTMLInputElement>(null);
@@ -79,9 +89,23 @@ export function PhotoDrop({ vehicleId, clearanceId = null, label, photos }: { ve
           {photos.map((p) => (
             <li key={p.id} className="flex flex-col items-start gap-1">
               <a href={p.url} target="_blank" rel="noreferrer" className="block overflow-hidden rounded-lg ring-1 ring-basalt-200">
-                <Image src={p.thumbUrl} alt={`Photo: ${p.name}`} width={120} height={120} unoptimized className="size-[120px] object-cover" data-testid="photo-thumb" />
+                <Image
+                  src={p.thumbUrl}
+                  alt={`Photo: ${p.name}`}
+                  width={120}
+                  height={120}
+                  unoptimized
+                  className="size-[120px] object-cover"
+                  data-testid="photo-thumb"
+                />
               </a>
-              <Button type="button" variant="ghost" className="min-h-8 px-2 py-1 text-xs" onClick={() => remove(p)} aria-label={`Delete photo ${p.name}`}>
+              <Button
+                type="button"
+                variant="ghost"
+                className="min-h-8 px-2 py-1 text-xs"
+                onClick={() => remove(p)}
+                aria-label={`Delete photo ${p.name}`}
+              >
                 Delete
               </Button>
             </li>
@@ -106,7 +130,10 @@ export function PhotoDrop({ vehicleId, clearanceId = null, label, photos }: { ve
         data-testid={`drop-${clearanceId ?? "vehicle"}`}
       >
         <p className="text-basalt-700">Drop a photo here, or</p>
-        <label htmlFor={inputId} className="cursor-pointer rounded-lg bg-white px-3 py-1.5 font-semibold text-basalt-900 ring-1 ring-inset ring-basalt-300 hover:bg-basalt-50 focus-within:outline-2 focus-within:outline-ember-500">
+        <label
+          htmlFor={inputId}
+          className="cursor-pointer rounded-lg bg-white px-3 py-1.5 font-semibold text-basalt-900 ring-1 ring-inset ring-basalt-300 hover:bg-basalt-50 focus-within:outline-2 focus-within:outline-ember-500"
+        >
           Choose a photo for {label}
         </label>
         <input
@@ -123,11 +150,23 @@ export function PhotoDrop({ vehicleId, clearanceId = null, label, photos }: { ve
         <p className="text-xs text-basalt-500">JPEG, PNG or WebP, up to 10 MB. Location data is removed.</p>
         {progress && (
           <div className="w-full max-w-xs">
-            <progress className="h-2 w-full accent-ember-600" max={100} value={progress.pct} aria-label={`Uploading ${progress.name}`} data-testid="upload-progress" />
-            <p className="text-xs text-basalt-600">Uploading {progress.name}: {progress.pct}%</p>
+            <progress
+              className="h-2 w-full accent-ember-600"
+              max={100}
+              value={progress.pct}
+              aria-label={`Uploading ${progress.name}`}
+              data-testid="upload-progress"
+            />
+            <p className="text-xs text-basalt-600">
+              Uploading {progress.name}: {progress.pct}%
+            </p>
           </div>
         )}
-        <p aria-live="polite" className={cx("text-sm", message?.tone === "error" ? "text-contact-600" : "text-clear-800")} data-testid="upload-message">
+        <p
+          aria-live="polite"
+          className={cx("text-sm", message?.tone === "error" ? "text-contact-600" : "text-clear-800")}
+          data-testid="upload-message"
+        >
           {message?.text}
         </p>
       </div>

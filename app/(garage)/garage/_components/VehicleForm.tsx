@@ -18,23 +18,60 @@ import { EMPTY_SETUP_FORM, setupToForm } from "@/lib/setup/schema";
 import { SetupFields } from "@/components/setup/SetupFields";
 
 const FIELDS = [
-  "name", "year", "make", "model", "trim", "frontSuspension", "boltPattern", "hubBoreMm", "liftHeightMm",
-  "kingpinInclinationDeg", "axleRatio", "transmissionRatio", "clearanceMarginMm", "notes",
+  "name",
+  "year",
+  "make",
+  "model",
+  "trim",
+  "frontSuspension",
+  "boltPattern",
+  "hubBoreMm",
+  "liftHeightMm",
+  "kingpinInclinationDeg",
+  "axleRatio",
+  "transmissionRatio",
+  "clearanceMarginMm",
+  "notes",
 ] as const;
 
 function toForm(v: Vehicle | null): GarageVehicleForm {
   if (!v) {
     return {
-      name: "", year: "", make: "", model: "", trim: "", frontSuspension: "independent", boltPattern: "", hubBoreMm: "",
-      stockSetup: EMPTY_SETUP_FORM, currentSetup: EMPTY_SETUP_FORM, liftHeightMm: "", kingpinInclinationDeg: "", axleRatio: "", transmissionRatio: "", clearanceMarginMm: "1/2 in", notes: "",
+      name: "",
+      year: "",
+      make: "",
+      model: "",
+      trim: "",
+      frontSuspension: "independent",
+      boltPattern: "",
+      hubBoreMm: "",
+      stockSetup: EMPTY_SETUP_FORM,
+      currentSetup: EMPTY_SETUP_FORM,
+      liftHeightMm: "",
+      kingpinInclinationDeg: "",
+      axleRatio: "",
+      transmissionRatio: "",
+      clearanceMarginMm: "1/2 in",
+      notes: "",
     };
   }
   const n = (x: number | null) => (x === null ? "" : String(x));
   return {
-    name: v.name, year: n(v.year), make: v.make ?? "", model: v.model ?? "", trim: v.trim ?? "", frontSuspension: v.frontSuspension,
-    boltPattern: v.boltPattern, hubBoreMm: n(v.hubBoreMm), stockSetup: setupToForm(v.stockSetup), currentSetup: setupToForm(v.currentSetup),
+    name: v.name,
+    year: n(v.year),
+    make: v.make ?? "",
+    model: v.model ?? "",
+    trim: v.trim ?? "",
+    frontSuspension: v.frontSuspension,
+    boltPattern: v.boltPattern,
+    hubBoreMm: n(v.hubBoreMm),
+    stockSetup: setupToForm(v.stockSetup),
+    currentSetup: setupToForm(v.currentSetup),
     liftHeightMm: v.liftHeightMm === null ? "" : formatLength(v.liftHeightMm, { unit: "in", fraction: 16 }),
-    kingpinInclinationDeg: n(v.kingpinInclinationDeg), axleRatio: n(v.axleRatio), transmissionRatio: n(v.transmissionRatio), notes: v.notes,
+    kingpinInclinationDeg: n(v.kingpinInclinationDeg),
+    axleRatio: n(v.axleRatio),
+    transmissionRatio: n(v.transmissionRatio),
+    notes: v.notes,
     clearanceMarginMm: marginText(v.clearanceMarginMm),
   };
 }
@@ -44,7 +81,11 @@ export function VehicleForm({ vehicle }: { vehicle: Vehicle | null }) {
   const router = useRouter();
   const qc = useQueryClient();
   const [failure, setFailure] = useState<string | null>(null);
-  const form = useForm<GarageVehicleForm, unknown, GarageVehicleValues>({ resolver: zodResolver(garageVehicleSchema), defaultValues: toForm(vehicle), mode: "onBlur" });
+  const form = useForm<GarageVehicleForm, unknown, GarageVehicleValues>({
+    resolver: zodResolver(garageVehicleSchema),
+    defaultValues: toForm(vehicle),
+    mode: "onBlur",
+  });
   const { register, handleSubmit, setError, formState, getValues, reset } = form;
   const e = formState.errors;
   const bolt = useWatch({ control: form.control, name: "boltPattern" });
@@ -80,24 +121,63 @@ export function VehicleForm({ vehicle }: { vehicle: Vehicle | null }) {
       <div aria-live="assertive">{failure && <Alert tone="error">{failure}</Alert>}</div>
       <Card className="grid grid-cols-[minmax(0,1fr)] gap-3 sm:grid-cols-2">
         <h2 className="text-lg font-semibold sm:col-span-2">The vehicle</h2>
-        <TextField label="Name" hint="Your own name for it, e.g. Gravel hauler" {...register("name")} error={e.name?.message} className="sm:col-span-2" />
+        <TextField
+          label="Name"
+          hint="Your own name for it, e.g. Gravel hauler"
+          {...register("name")}
+          error={e.name?.message}
+          className="sm:col-span-2"
+        />
         <TextField label="Year" inputMode="numeric" {...register("year")} error={e.year?.message} />
         <TextField label="Make" hint="Free text" {...register("make")} error={e.make?.message} />
         <TextField label="Model" hint="Free text" {...register("model")} error={e.model?.message} />
         <TextField label="Trim" hint="Free text" {...register("trim")} error={e.trim?.message} />
         <div className="flex flex-col gap-1">
-          <label htmlFor="f-frontSuspension" className="text-sm font-medium text-basalt-800">Front suspension</label>
-          <select id="f-frontSuspension" className="min-h-10 rounded-lg border border-basalt-300 bg-white px-3" {...register("frontSuspension")} aria-describedby="f-frontSuspension-error">
-            {Object.entries(FRONT_SUSPENSION_LABEL).map(([v, l]) => <option key={v} value={v}>{l}</option>)}
+          <label htmlFor="f-frontSuspension" className="text-sm font-medium text-basalt-800">
+            Front suspension
+          </label>
+          <select
+            id="f-frontSuspension"
+            className="min-h-10 rounded-lg border border-basalt-300 bg-white px-3"
+            {...register("frontSuspension")}
+            aria-describedby="f-frontSuspension-error"
+          >
+            {Object.entries(FRONT_SUSPENSION_LABEL).map(([v, l]) => (
+              <option key={v} value={v}>
+                {l}
+              </option>
+            ))}
           </select>
-          <p id="f-frontSuspension-error" aria-live="polite" className="text-sm text-contact-600">{e.frontSuspension?.message}</p>
+          <p id="f-frontSuspension-error" aria-live="polite" className="text-sm text-contact-600">
+            {e.frontSuspension?.message}
+          </p>
         </div>
-        <TextField label="Bolt pattern" hint={boltNote ?? "e.g. 6x5.5 or 6x139.7 — inch and mm forms of one pattern are the same"} {...register("boltPattern")} error={e.boltPattern?.message} />
+        <TextField
+          label="Bolt pattern"
+          hint={boltNote ?? "e.g. 6x5.5 or 6x139.7 — inch and mm forms of one pattern are the same"}
+          {...register("boltPattern")}
+          error={e.boltPattern?.message}
+        />
         <TextField label="Hub bore (mm)" hint="Optional, e.g. 106.1" {...register("hubBoreMm")} error={e.hubBoreMm?.message} />
-        <TextField label="Lift height (in)" hint="Optional, in inches; fractions work, e.g. 2-1/2, 2½ or 2.5" {...register("liftHeightMm")} error={e.liftHeightMm?.message} />
-        <TextField label="Kingpin inclination (°)" hint="Optional, from the maker's data, e.g. 8" {...register("kingpinInclinationDeg")} error={e.kingpinInclinationDeg?.message} />
+        <TextField
+          label="Lift height (in)"
+          hint="Optional, in inches; fractions work, e.g. 2-1/2, 2½ or 2.5"
+          {...register("liftHeightMm")}
+          error={e.liftHeightMm?.message}
+        />
+        <TextField
+          label="Kingpin inclination (°)"
+          hint="Optional, from the maker's data, e.g. 8"
+          {...register("kingpinInclinationDeg")}
+          error={e.kingpinInclinationDeg?.message}
+        />
         <TextField label="Axle ratio" hint="Optional, e.g. 3.73" {...register("axleRatio")} error={e.axleRatio?.message} />
-        <TextField label="Top-gear ratio" hint="Optional, e.g. 0.72 (overdrive) or 1.00" {...register("transmissionRatio")} error={e.transmissionRatio?.message} />
+        <TextField
+          label="Top-gear ratio"
+          hint="Optional, e.g. 0.72 (overdrive) or 1.00"
+          {...register("transmissionRatio")}
+          error={e.transmissionRatio?.message}
+        />
         <TextField
           label="Clearance margin"
           hint="The gap you want kept at every measured point; 1/2 in if left empty (common practice, no source). Give the unit, e.g. 3/4 in or 15 mm"
@@ -105,21 +185,37 @@ export function VehicleForm({ vehicle }: { vehicle: Vehicle | null }) {
           error={e.clearanceMarginMm?.message}
         />
         <div className="flex flex-col gap-1 sm:col-span-2">
-          <label htmlFor="f-notes" className="text-sm font-medium text-basalt-800">Notes</label>
-          <textarea id="f-notes" rows={3} className="rounded-lg border border-basalt-300 bg-white px-3 py-2" {...register("notes")} aria-describedby="f-notes-error" />
-          <p id="f-notes-error" aria-live="polite" className="text-sm text-contact-600">{e.notes?.message}</p>
+          <label htmlFor="f-notes" className="text-sm font-medium text-basalt-800">
+            Notes
+          </label>
+          <textarea
+            id="f-notes"
+            rows={3}
+            className="rounded-lg border border-basalt-300 bg-white px-3 py-2"
+            {...register("notes")}
+            aria-describedby="f-notes-error"
+          />
+          <p id="f-notes-error" aria-live="polite" className="text-sm text-contact-600">
+            {e.notes?.message}
+          </p>
         </div>
       </Card>
       <div className="grid gap-4 lg:grid-cols-2">
         <SetupFields form={form} name="stockSetup" legend="Stock setup (as it left the factory)" />
         <div className="flex flex-col gap-2">
           <SetupFields form={form} name="currentSetup" legend="Current setup (fitted now)" />
-          <Button type="button" variant="ghost" onClick={copyStock} className="self-start">Copy the stock setup here</Button>
+          <Button type="button" variant="ghost" onClick={copyStock} className="self-start">
+            Copy the stock setup here
+          </Button>
         </div>
       </div>
       <div className="flex gap-3">
-        <Button type="submit" pending={formState.isSubmitting}>{vehicle ? "Save changes" : "Add vehicle"}</Button>
-        <Button type="button" variant="secondary" onClick={() => router.back()}>Cancel</Button>
+        <Button type="submit" pending={formState.isSubmitting}>
+          {vehicle ? "Save changes" : "Add vehicle"}
+        </Button>
+        <Button type="button" variant="secondary" onClick={() => router.back()}>
+          Cancel
+        </Button>
       </div>
     </form>
   );

@@ -10,7 +10,10 @@ export default async function NewVehiclePage() {
   await requirePageCaller("/garage/new", GARAGE_ACCESS);
   return (
     <>
-      <PageHeader title="Add a vehicle" lead="Its stock and current setups are the starting point for predictions, the finder and the checklist." />
+      <PageHeader
+        title="Add a vehicle"
+        lead="Its stock and current setups are the starting point for predictions, the finder and the checklist."
+      />
       <VehicleForm vehicle={null} />
     </>
   );

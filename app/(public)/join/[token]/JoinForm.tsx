@@ -13,7 +13,10 @@ import { type JoinShopInput, joinShopSchema } from "@/lib/shop/schema";
 export function JoinForm({ token, email, hasAccount }: { token: string; email: string; hasAccount: boolean }) {
   const router = useRouter();
   const [failure, setFailure] = useState<string | null>(null);
-  const { register, handleSubmit, setError, formState } = useForm<JoinShopInput>({ resolver: zodResolver(joinShopSchema), defaultValues: { token } });
+  const { register, handleSubmit, setError, formState } = useForm<JoinShopInput>({
+    resolver: zodResolver(joinShopSchema),
+    defaultValues: { token },
+  });
   const onSubmit = handleSubmit(async (values) => {
     setFailure(null);
     try {
@@ -39,7 +42,9 @@ export function JoinForm({ token, email, hasAccount }: { token: string; email: s
         {...register("password")}
         error={formState.errors.password?.message}
       />
-      <Button type="submit" pending={formState.isSubmitting}>Join the shop</Button>
+      <Button type="submit" pending={formState.isSubmitting}>
+        Join the shop
+      </Button>
     </form>
   );
 }

@@ -15,7 +15,9 @@ export default async function JoinPage({ params }: { params: Promise<{ token: st
     return (
       <Card className="mx-auto max-w-lg">
         <h1 className="text-2xl font-bold">Invitation not usable</h1>
-        <Alert tone="warning" className="mt-3">This invitation has expired, was withdrawn or was already used. Ask the shop owner for a new one.</Alert>
+        <Alert tone="warning" className="mt-3">
+          This invitation has expired, was withdrawn or was already used. Ask the shop owner for a new one.
+        </Alert>
       </Card>
     );
   }
@@ -25,8 +27,8 @@ export default async function JoinPage({ params }: { params: Promise<{ token: st
       <h1 className="text-2xl font-bold">Join {invite.shop_name}</h1>
       <p className="mt-1 text-basalt-600">
         You were invited as counter staff with <strong>{invite.email}</strong>.{" "}
-        {hasAccount ? "This address already has a Hubface account: confirm with its password." : "Choose your name and a password."} As staff you can
-        also do everything a member can: your garage and saved comparisons stay yours, and the shop does not see them.
+        {hasAccount ? "This address already has a Hubface account: confirm with its password." : "Choose your name and a password."} As
+        staff you can also do everything a member can: your garage and saved comparisons stay yours, and the shop does not see them.
       </p>
       <JoinForm token={token} email={invite.email} hasAccount={hasAccount} />
     </Card>

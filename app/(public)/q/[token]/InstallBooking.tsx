@@ -21,7 +21,9 @@ export function InstallBooking({ token, booking, shopName }: { token: string; bo
       <h2 className="text-lg font-semibold">Install time</h2>
       {shown ? (
         <>
-          <div aria-live="polite">{done && <Alert tone="success">Booked. A confirmation with a calendar file is on its way to your e-mail.</Alert>}</div>
+          <div aria-live="polite">
+            {done && <Alert tone="success">Booked. A confirmation with a calendar file is on its way to your e-mail.</Alert>}
+          </div>
           <BookingSummary booking={shown} />
           <p className="text-sm text-basalt-600">To move or cancel it, call {shopName}.</p>
         </>

@@ -7,7 +7,17 @@ import { Card } from "@/components/ui/Card";
 import { api } from "@/lib/platform/client/api";
 import type { QuoteStatus } from "@/lib/platform/db/types";
 
-export function PublicQuoteActions({ token, status, deposit, balance }: { token: string; status: QuoteStatus; deposit: string; balance: string }) {
+export function PublicQuoteActions({
+  token,
+  status,
+  deposit,
+  balance,
+}: {
+  token: string;
+  status: QuoteStatus;
+  deposit: string;
+  balance: string;
+}) {
   const router = useRouter();
   const [busy, setBusy] = useState<string | null>(null);
   const [failure, setFailure] = useState<string | null>(null);
@@ -33,16 +43,33 @@ export function PublicQuoteActions({ token, status, deposit, balance }: { token:
       <div aria-live="assertive">{failure && <Alert tone="error">{failure}</Alert>}</div>
       {status === "sent" ? (
         <>
-          <p>If the quote suits you, accept it; you then pay the deposit of {deposit} to book the work, and the balance of {balance} at the fitting.</p>
+          <p>
+            If the quote suits you, accept it; you then pay the deposit of {deposit} to book the work, and the balance of {balance} at the
+            fitting.
+          </p>
           <div className="flex flex-wrap gap-2">
-            <Button pending={busy === "accept"} onClick={() => void run("accept")}>Accept the quote</Button>
-            <Button variant="secondary" pending={busy === "decline"} onClick={() => { if (window.confirm("Decline this quote?")) void run("decline"); }}>Decline</Button>
+            <Button pending={busy === "accept"} onClick={() => void run("accept")}>
+              Accept the quote
+            </Button>
+            <Button
+              variant="secondary"
+              pending={busy === "decline"}
+              onClick={() => {
+                if (window.confirm("Decline this quote?")) void run("decline");
+              }}
+            >
+              Decline
+            </Button>
           </div>
         </>
       ) : (
         <>
-          <p>You accepted this quote. Pay the deposit of {deposit} to book the work; the balance of {balance} is due at the fitting.</p>
-          <Button className="self-start" pending={busy === "pay"} onClick={() => void run("pay")}>Pay the {deposit} deposit</Button>
+          <p>
+            You accepted this quote. Pay the deposit of {deposit} to book the work; the balance of {balance} is due at the fitting.
+          </p>
+          <Button className="self-start" pending={busy === "pay"} onClick={() => void run("pay")}>
+            Pay the {deposit} deposit
+          </Button>
         </>
       )}
     </Card>

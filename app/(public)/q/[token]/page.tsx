@@ -17,7 +17,13 @@ export const metadata: Metadata = { title: "Your quote", robots: { index: false 
 export const dynamic = "force-dynamic";
 
 /** The customer's link: the quote as it was sent to them, with its live status. */
-export default async function PublicQuotePage({ params, searchParams }: { params: Promise<{ token: string }>; searchParams: Promise<{ paid?: string }> }) {
+export default async function PublicQuotePage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ token: string }>;
+  searchParams: Promise<{ paid?: string }>;
+}) {
   const { token } = await params;
   const { paid } = await searchParams;
   const view = await quoteSendQueries.findPublicQuoteView(token);
@@ -25,7 +31,9 @@ export default async function PublicQuotePage({ params, searchParams }: { params
     return (
       <Card className="mx-auto max-w-lg">
         <h1 className="text-2xl font-bold">Quote not available</h1>
-        <Alert tone="warning" className="mt-3">This link is not valid or has been replaced by a newer one. Ask the shop to send the quote again.</Alert>
+        <Alert tone="warning" className="mt-3">
+          This link is not valid or has been replaced by a newer one. Ask the shop to send the quote again.
+        </Alert>
       </Card>
     );
   }
@@ -38,20 +46,27 @@ export default async function PublicQuotePage({ params, searchParams }: { params
     <div className="mx-auto flex max-w-4xl flex-col gap-5">
       <header>
         <p className="text-sm font-semibold uppercase tracking-wide text-basalt-600">{d.shop.name}</p>
-        <h1 className="text-3xl font-bold">Quote Q-{d.number} for {d.customer.name}</h1>
+        <h1 className="text-3xl font-bold">
+          Quote Q-{d.number} for {d.customer.name}
+        </h1>
         <p className="mt-1 text-basalt-700">
           <Badge tone={paidUp ? "clear" : quote.status === "expired" || quote.status === "declined" ? "contact" : "steel"}>
             <span data-testid="public-status">{STATUS_LABEL[quote.status]}</span>
           </Badge>{" "}
           {d.vehicle.description}
-          {d.validUntil && quote.status !== "expired" && ` · valid until ${new Date(d.validUntil).toLocaleDateString("en-US", { year: "numeric", month: "long", day: "numeric" })}`}
+          {d.validUntil &&
+            quote.status !== "expired" &&
+            ` · valid until ${new Date(d.validUntil).toLocaleDateString("en-US", { year: "numeric", month: "long", day: "numeric" })}`}
         </p>
         <p className="text-sm text-basalt-600">{[d.shop.address, d.shop.phone].filter(Boolean).join(" · ")}</p>
       </header>
-      {paid && quote.status === "accepted" && <Alert tone="info">Payment received by the provider; waiting for its confirmation. Refresh in a moment.</Alert>}
+      {paid && quote.status === "accepted" && (
+        <Alert tone="info">Payment received by the provider; waiting for its confirmation. Refresh in a moment.</Alert>
+      )}
       {quote.status === "deposit_paid" && (
         <Alert tone="success" title="Deposit paid">
-          Thank you. {booking ? "Your install time is below." : "Pick your install time below."} Still to pay at the fitting: <span data-testid="public-balance-after-paid">{formatUsd(t.balanceCents)}</span>.
+          Thank you. {booking ? "Your install time is below." : "Pick your install time below."} Still to pay at the fitting:{" "}
+          <span data-testid="public-balance-after-paid">{formatUsd(t.balanceCents)}</span>.
         </Alert>
       )}
       {quote.status === "expired" && <Alert tone="warning">This quote has expired. Ask the shop for a new one.</Alert>}

@@ -15,9 +15,23 @@ const FORMATS: ForumFormat[] = ["markdown", "bbcode"];
  * the link, in Markdown or BBCode. Uses the clipboard where the browser allows it; otherwise
  * (or on request) the text appears selected in a box to copy by hand.
  */
-export function ForumPostButton({ result, prefs, name, path }: { result: ComparisonResult; prefs: DisplayPrefs; name: string; path: string }) {
+export function ForumPostButton({
+  result,
+  prefs,
+  name,
+  path,
+}: {
+  result: ComparisonResult;
+  prefs: DisplayPrefs;
+  name: string;
+  path: string;
+}) {
   const configured = useShareOrigin();
-  const browser = useSyncExternalStore(noSubscribe, () => window.location.origin, () => "");
+  const browser = useSyncExternalStore(
+    noSubscribe,
+    () => window.location.origin,
+    () => "",
+  );
   const origin = configured || browser;
   const [format, setFormat] = useState<ForumFormat>("markdown");
   const [state, setState] = useState<"idle" | "copied" | "manual">("idle");
@@ -52,7 +66,12 @@ export function ForumPostButton({ result, prefs, name, path }: { result: Compari
           }}
         />
         <Button onClick={copy}>Copy as forum post</Button>
-        <Button variant="ghost" onClick={() => setState(state === "manual" ? "idle" : "manual")} aria-expanded={state === "manual"} aria-controls={boxId}>
+        <Button
+          variant="ghost"
+          onClick={() => setState(state === "manual" ? "idle" : "manual")}
+          aria-expanded={state === "manual"}
+          aria-controls={boxId}
+        >
           {state === "manual" ? "Hide text" : "Show text"}
         </Button>
       </div>

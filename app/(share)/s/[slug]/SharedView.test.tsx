@@ -15,12 +15,18 @@ vi.mock("@/components/comparison/LazyComparisonCharts", async () => {
 });
 vi.mock("recharts", async (importOriginal) => {
   const actual = await importOriginal<typeof import("recharts")>();
-  return { ...actual, ResponsiveContainer: ({ children }: { children: ReactElement<{ width?: number; height?: number }> }) => cloneElement(children, { width: 480, height: 240 }) };
+  return {
+    ...actual,
+    ResponsiveContainer: ({ children }: { children: ReactElement<{ width?: number; height?: number }> }) =>
+      cloneElement(children, { width: 480, height: 240 }),
+  };
 });
 
 const stat = (id: string) => [...screen.getByTestId(id).querySelectorAll("dt, dd")].map((n) => n.textContent);
 const xTicks = (name: RegExp) =>
-  [...screen.getByRole("figure", { name }).querySelectorAll(".recharts-xAxis-tick-labels .recharts-cartesian-axis-tick-value")].map((t) => t.textContent);
+  [...screen.getByRole("figure", { name }).querySelectorAll(".recharts-xAxis-tick-labels .recharts-cartesian-axis-tick-value")].map(
+    (t) => t.textContent,
+  );
 
 beforeEach(() => window.localStorage.clear());
 afterEach(cleanup);
@@ -50,7 +56,9 @@ describe("shared page in the reader's units", () => {
     render(<SharedView name="Trail build" slug="AbC" input={input} />);
     expect(stat("change-speed").slice(0, 2)).toEqual(["True speed at 60 mph shown", "70.2 mph"]);
     // 100 km/h = 62.137 mph, 113 km/h = 70.215 mph (1 mi = 1.609344 km exactly, NIST SP 811).
-    expect(screen.getByRole("region", { name: "Vehicle figures used" }).textContent).toContain("Cruise speeds62.1 mph (100 km/h), 70.2 mph (113 km/h)");
+    expect(screen.getByRole("region", { name: "Vehicle figures used" }).textContent).toContain(
+      "Cruise speeds62.1 mph (100 km/h), 70.2 mph (113 km/h)",
+    );
     expect(xTicks(/True speed vs speedometer/)).toEqual(["10", "20", "30", "40", "50", "60", "70", "80"]);
   });
 });

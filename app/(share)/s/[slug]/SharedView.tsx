@@ -73,8 +73,9 @@ export function SharedView({ name, slug, input }: { name: string; slug: string; 
       </section>
       <SetupDetailTable result={result} prefs={prefs} />
       <p className="rounded-lg bg-tight-100 px-4 py-3 text-sm text-tight-800">
-        Bigger tires and different offsets change braking, steering effort and the load on wheel bearings, ball joints and steering parts. Lift and steering work, wheel
-        fitting and torque follow the vehicle, wheel and tire makers&apos; instructions and local rules; have a qualified shop check the result.
+        Bigger tires and different offsets change braking, steering effort and the load on wheel bearings, ball joints and steering parts.
+        Lift and steering work, wheel fitting and torque follow the vehicle, wheel and tire makers&apos; instructions and local rules; have
+        a qualified shop check the result.
       </p>
     </div>
   );

@@ -45,10 +45,36 @@ function tireShape(f: SetupFigures, sx: (x: number) => number, sy: (y: number) =
   const dash = dashed ? "10 7" : undefined;
   return (
     <g>
-      <rect x={x0} y={y0} width={x1 - x0} height={y1 - y0} rx={round} fill={dashed ? "rgba(226,91,22,0.10)" : "rgba(47,114,168,0.14)"} stroke={colour} strokeWidth={4} strokeDasharray={dash} />
+      <rect
+        x={x0}
+        y={y0}
+        width={x1 - x0}
+        height={y1 - y0}
+        rx={round}
+        fill={dashed ? "rgba(226,91,22,0.10)" : "rgba(47,114,168,0.14)"}
+        stroke={colour}
+        strokeWidth={4}
+        strokeDasharray={dash}
+      />
       {/* rim barrel between the bead seats, and the wheel's centre line */}
-      <line x1={sx(-f.beadSeatInboardMm)} x2={sx(f.beadSeatOutboardMm)} y1={y0} y2={y0} stroke={colour} strokeWidth={6} strokeDasharray={dash} />
-      <line x1={sx(-f.effectiveOffsetMm)} x2={sx(-f.effectiveOffsetMm)} y1={y0 - 6} y2={y1} stroke={colour} strokeWidth={1.5} strokeDasharray="3 5" />
+      <line
+        x1={sx(-f.beadSeatInboardMm)}
+        x2={sx(f.beadSeatOutboardMm)}
+        y1={y0}
+        y2={y0}
+        stroke={colour}
+        strokeWidth={6}
+        strokeDasharray={dash}
+      />
+      <line
+        x1={sx(-f.effectiveOffsetMm)}
+        x2={sx(-f.effectiveOffsetMm)}
+        y1={y0 - 6}
+        y2={y1}
+        stroke={colour}
+        strokeWidth={1.5}
+        strokeDasharray="3 5"
+      />
     </g>
   );
 }
@@ -59,7 +85,7 @@ function Drawing({ r, width, height }: { r: ComparisonResult; width: number; hei
   const R = Math.max(r.current.overallDiameterMm, r.planned.overallDiameterMm) / 2;
   const pad = 24;
   const scale = Math.min((width - 2 * pad) / (inner + outer), (height - 2 * pad) / R);
-  const ox = pad + inner * scale + ((width - 2 * pad) - (inner + outer) * scale) / 2;
+  const ox = pad + inner * scale + (width - 2 * pad - (inner + outer) * scale) / 2;
   const sx = (x: number) => Math.round((ox + x * scale) * 10) / 10;
   const sy = (y: number) => Math.round((pad + y * scale) * 10) / 10;
   return (
@@ -67,9 +93,34 @@ function Drawing({ r, width, height }: { r: ComparisonResult; width: number; hei
       {tireShape(r.current, sx, sy, STEEL, false)}
       {tireShape(r.planned, sx, sy, EMBER, true)}
       <line x1={sx(0)} x2={sx(0)} y1={sy(0)} y2={height - 4} stroke={INK} strokeWidth={3} />
-      <line x1={0} x2={width} y1={sy(r.current.overallDiameterMm / 2)} y2={sy(r.current.overallDiameterMm / 2)} stroke={STEEL} strokeWidth={3} />
-      <line x1={0} x2={width} y1={sy(r.planned.overallDiameterMm / 2)} y2={sy(r.planned.overallDiameterMm / 2)} stroke={EMBER} strokeWidth={3} strokeDasharray="10 7" />
-      {r.fenderLineMm !== null && <line x1={sx(r.fenderLineMm)} x2={sx(r.fenderLineMm)} y1={sy(0)} y2={sy(R)} stroke="#7d1710" strokeWidth={2} strokeDasharray="4 5" />}
+      <line
+        x1={0}
+        x2={width}
+        y1={sy(r.current.overallDiameterMm / 2)}
+        y2={sy(r.current.overallDiameterMm / 2)}
+        stroke={STEEL}
+        strokeWidth={3}
+      />
+      <line
+        x1={0}
+        x2={width}
+        y1={sy(r.planned.overallDiameterMm / 2)}
+        y2={sy(r.planned.overallDiameterMm / 2)}
+        stroke={EMBER}
+        strokeWidth={3}
+        strokeDasharray="10 7"
+      />
+      {r.fenderLineMm !== null && (
+        <line
+          x1={sx(r.fenderLineMm)}
+          x2={sx(r.fenderLineMm)}
+          y1={sy(0)}
+          y2={sy(R)}
+          stroke="#7d1710"
+          strokeWidth={2}
+          strokeDasharray="4 5"
+        />
+      )}
     </svg>
   );
 }
@@ -90,13 +141,38 @@ function Card({ r, title }: { r: ComparisonResult; title: string }) {
   const speed = r.speedometer.bySystem[p.units];
   const h = speed.headline;
   return (
-    <div style={{ width: "100%", height: "100%", display: "flex", flexDirection: "column", background: PAPER, padding: "40px 56px", fontFamily: "Inter", color: INK }}>
+    <div
+      style={{
+        width: "100%",
+        height: "100%",
+        display: "flex",
+        flexDirection: "column",
+        background: PAPER,
+        padding: "40px 56px",
+        fontFamily: "Inter",
+        color: INK,
+      }}
+    >
       <div style={{ display: "flex", justifyContent: "space-between", alignItems: "baseline" }}>
         <div style={{ fontFamily: "Archivo", fontSize: 30, fontWeight: 700, color: EMBER }}>Hubface</div>
         <div style={{ fontSize: 22, color: "#56616f" }}>shared comparison</div>
       </div>
       {/* A fixed line height: CJK and Arabic fonts have taller metrics and would push the figures down. */}
-      <div style={{ fontFamily: "Archivo", fontSize: 50, fontWeight: 700, lineHeight: 1.25, marginTop: 6, lineClamp: 1, overflow: "hidden", whiteSpace: "nowrap", textOverflow: "ellipsis" }}>{title}</div>
+      <div
+        style={{
+          fontFamily: "Archivo",
+          fontSize: 50,
+          fontWeight: 700,
+          lineHeight: 1.25,
+          marginTop: 6,
+          lineClamp: 1,
+          overflow: "hidden",
+          whiteSpace: "nowrap",
+          textOverflow: "ellipsis",
+        }}
+      >
+        {title}
+      </div>
       <div style={{ display: "flex", fontSize: 26, marginTop: 4 }}>
         <span style={{ color: STEEL, fontWeight: 600 }}>{r.current.tireText}</span>
         <span style={{ margin: "0 14px", color: "#56616f" }}>to</span>
@@ -115,9 +191,21 @@ function Card({ r, title }: { r: ComparisonResult; title: string }) {
           <Stat label="Diameter" value={len(r.changes.diameterMm)} sub={formatLenOther(r.changes.diameterMm, p, { signed: true })} />
           <Stat label="Poke" value={len(r.changes.outerPokeMm)} sub={formatLenOther(r.changes.outerPokeMm, p, { signed: true })} />
           <Stat label="Ground clearance" value={len(r.changes.groundClearanceMm)} sub="under the axle" />
-          <Stat label={`At ${formatSpeedIn(h.indicated, speed.unit, 0)} shown`} value={formatSpeedIn(h.actual, speed.unit)} sub={`speedometer ${readingPhrase(r.speedometer.ratio)}`} />
-          <Stat label="Suggested ratio" value={formatNumber(r.gearing.suggestedRatio, 2)} sub={`from ${formatNumber(r.gearing.axleRatio, 2)}`} />
-          <Stat label="Scrub radius" value={len(r.changes.scrubRadiusMm)} sub={r.kingpinInclinationDeg === null ? "wheel shift only" : `${formatNumber(r.kingpinInclinationDeg, 1)}° KPI`} />
+          <Stat
+            label={`At ${formatSpeedIn(h.indicated, speed.unit, 0)} shown`}
+            value={formatSpeedIn(h.actual, speed.unit)}
+            sub={`speedometer ${readingPhrase(r.speedometer.ratio)}`}
+          />
+          <Stat
+            label="Suggested ratio"
+            value={formatNumber(r.gearing.suggestedRatio, 2)}
+            sub={`from ${formatNumber(r.gearing.axleRatio, 2)}`}
+          />
+          <Stat
+            label="Scrub radius"
+            value={len(r.changes.scrubRadiusMm)}
+            sub={r.kingpinInclinationDeg === null ? "wheel shift only" : `${formatNumber(r.kingpinInclinationDeg, 1)}° KPI`}
+          />
         </div>
       </div>
     </div>
@@ -145,5 +233,7 @@ export default async function OpengraphImage({ params }: { params: Promise<{ slu
     console.error(`share ${slug.slice(0, 4)}…: Open Graph image failed with its name, drawn with the plain title:`, error);
     body = await png(<Card r={r} title={PLAIN_TITLE} />, fonts);
   }
-  return new Response(new Uint8Array(body), { headers: { "Content-Type": contentType, "Cache-Control": "public, max-age=60, s-maxage=60" } });
+  return new Response(new Uint8Array(body), {
+    headers: { "Content-Type": contentType, "Cache-Control": "public, max-age=60, s-maxage=60" },
+  });
 }

@@ -60,7 +60,11 @@ export default async function SharedComparisonPage({ params }: Props) {
           <>
             A shared comparison, read-only. Figures are nominal and unloaded, computed from the sizes entered.{" "}
             <span className="text-basalt-500">
-              Updated <time dateTime={share.updatedAt}>{new Date(share.updatedAt).toLocaleDateString("en-US", { dateStyle: "medium", timeZone: "UTC" })}</time>.
+              Updated{" "}
+              <time dateTime={share.updatedAt}>
+                {new Date(share.updatedAt).toLocaleDateString("en-US", { dateStyle: "medium", timeZone: "UTC" })}
+              </time>
+              .
             </span>
           </>
         }

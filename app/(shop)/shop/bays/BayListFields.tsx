@@ -17,9 +17,12 @@ export function BayListFields() {
   return (
     <Card>
       <h2 className="text-lg font-semibold">Bays</h2>
-      <p className="text-sm text-basalt-600">A job takes one bay of each kind its work needs, one after the other: fabrication bay, then lift bay, then alignment rack.</p>
+      <p className="text-sm text-basalt-600">
+        A job takes one bay of each kind its work needs, one after the other: fabrication bay, then lift bay, then alignment rack.
+      </p>
       <Alert tone="warning" className="mt-2">
-        Lifting a truck is the lift maker&apos;s and your local code&apos;s business: list only bays whose lift is rated for the trucks you book into it.
+        Lifting a truck is the lift maker&apos;s and your local code&apos;s business: list only bays whose lift is rated for the trucks you
+        book into it.
       </Alert>
       {fields.length === 0 && <p className="mt-2 text-sm text-basalt-600">No bays yet: customers cannot book until you add one.</p>}
       <ul className="mt-3 flex flex-col gap-2">
@@ -28,7 +31,12 @@ export function BayListFields() {
           return (
             <li key={f.id} className="grid items-start gap-2 sm:grid-cols-[1fr_14rem_auto]">
               <input type="hidden" {...register(`bays.${i}.id`)} />
-              <TextField label={`Bay ${i + 1} name`} {...register(`bays.${i}.name`)} error={err?.name?.message ?? err?.id?.message} placeholder="e.g. Lift 1" />
+              <TextField
+                label={`Bay ${i + 1} name`}
+                {...register(`bays.${i}.name`)}
+                error={err?.name?.message ?? err?.id?.message}
+                placeholder="e.g. Lift 1"
+              />
               <SelectField label={`Bay ${i + 1} kind`} options={KIND_OPTIONS} {...register(`bays.${i}.kind`)} error={err?.kind?.message} />
               <Button type="button" variant="ghost" className="sm:mt-6" onClick={() => remove(i)} aria-label={`Remove bay ${i + 1}`}>
                 Remove

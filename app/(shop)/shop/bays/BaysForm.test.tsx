@@ -17,7 +17,18 @@ const setup: BaysSetup = {
   weekdays: [1, 2, 3, 4, 5, 6, 7].map((weekday) => ({ weekday, open: weekday <= 5, opens: "08:00", closes: "17:00" })),
   closedDays: [],
   bays: [{ id: "b0000000-0000-4000-8000-000000000001", name: "Lift 1", kind: "lift_bay" }],
-  serviceTimes: [{ catalogItemId: "c0000000-0000-4000-8000-000000000001", sku: "SV-MB", description: "Mount and balance", serviceType: "mount_balance", unit: "per_wheel", minutes: 20, bayKind: "lift_bay", isDefault: true }],
+  serviceTimes: [
+    {
+      catalogItemId: "c0000000-0000-4000-8000-000000000001",
+      sku: "SV-MB",
+      description: "Mount and balance",
+      serviceType: "mount_balance",
+      unit: "per_wheel",
+      minutes: 20,
+      bayKind: "lift_bay",
+      isDefault: true,
+    },
+  ],
 };
 
 function server(status: number, body: unknown) {
@@ -47,7 +58,10 @@ describe("the bays-and-hours form", () => {
   });
 
   it("sends the whole form as typed, adds a bay, and puts the server's field errors beside their fields", async () => {
-    const calls = server(422, { error: "Some fields need attention.", fieldErrors: { "bays.1.name": ["Bay 2: Two bays are called “Lift 1”: give each its own name."] } });
+    const calls = server(422, {
+      error: "Some fields need attention.",
+      fieldErrors: { "bays.1.name": ["Bay 2: Two bays are called “Lift 1”: give each its own name."] },
+    });
     render(<BaysForm initial={setup} />);
     await userEvent.click(screen.getByRole("button", { name: "Add a bay" }));
     await userEvent.type(screen.getByLabelText("Bay 2 name"), "Rack");
@@ -55,7 +69,12 @@ describe("the bays-and-hours form", () => {
     await userEvent.click(screen.getByRole("button", { name: "Save bays and hours" }));
     await waitFor(() => expect(calls).toHaveLength(1));
     expect(calls[0]!.method).toBe("PUT");
-    expect(calls[0]!.body).toMatchObject({ timeZone: "America/Denver", slotStepMinutes: "30", bays: [{ name: "Lift 1" }, { id: "", name: "Rack", kind: "alignment_rack" }], serviceTimes: [{ minutes: "20", bayKind: "lift_bay" }] });
+    expect(calls[0]!.body).toMatchObject({
+      timeZone: "America/Denver",
+      slotStepMinutes: "30",
+      bays: [{ name: "Lift 1" }, { id: "", name: "Rack", kind: "alignment_rack" }],
+      serviceTimes: [{ minutes: "20", bayKind: "lift_bay" }],
+    });
     expect(await screen.findByText("Bay 2: Two bays are called “Lift 1”: give each its own name.")).toBeTruthy();
   });
 });

@@ -42,7 +42,10 @@ function fieldKeys(v: BaysSetupInput): string[] {
 export function BaysForm({ initial }: { initial: BaysSetup }) {
   const router = useRouter();
   const [message, setMessage] = useState<{ tone: "success" | "error"; text: string } | null>(null);
-  const form = useForm<BaysSetupInput, unknown, BaysSetupValues>({ resolver: zodResolver(baysSetupSchema), defaultValues: formValuesOf(initial) });
+  const form = useForm<BaysSetupInput, unknown, BaysSetupValues>({
+    resolver: zodResolver(baysSetupSchema),
+    defaultValues: formValuesOf(initial),
+  });
   const onSubmit = form.handleSubmit(async () => {
     setMessage(null);
     // The text as typed goes to the server, which parses it with the same schema.
@@ -50,7 +53,10 @@ export function BaysForm({ initial }: { initial: BaysSetup }) {
     try {
       const { setup } = await api<{ setup: BaysSetup }>("/api/shop/bays", { method: "PUT", body });
       form.reset(formValuesOf(setup));
-      setMessage({ tone: "success", text: "Saved. New bookings follow these hours, bays and times; bookings already made keep their times." });
+      setMessage({
+        tone: "success",
+        text: "Saved. New bookings follow these hours, bays and times; bookings already made keep their times.",
+      });
       router.refresh();
     } catch (e) {
       const rest = applyFieldErrors(e, form.setError, fieldKeys(body));
@@ -68,7 +74,9 @@ export function BaysForm({ initial }: { initial: BaysSetup }) {
         <ServiceTimeFields services={initial.serviceTimes} />
         <div aria-live="polite">
           {message && <Alert tone={message.tone}>{message.text}</Alert>}
-          {!message && invalid && form.formState.isSubmitted && <Alert tone="error">Some fields need attention: see the messages beside them.</Alert>}
+          {!message && invalid && form.formState.isSubmitted && (
+            <Alert tone="error">Some fields need attention: see the messages beside them.</Alert>
+          )}
         </div>
         <Button type="submit" pending={form.formState.isSubmitting} className="self-start">
           Save bays and hours

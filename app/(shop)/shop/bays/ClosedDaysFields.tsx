@@ -19,7 +19,12 @@ export function ClosedDaysFields() {
           return (
             <li key={f.id} className="grid items-start gap-2 sm:grid-cols-[12rem_1fr_auto]">
               <TextField label={`Closed day ${i + 1}`} type="date" {...register(`closedDays.${i}.day`)} error={err?.day?.message} />
-              <TextField label={`Why closed (day ${i + 1})`} {...register(`closedDays.${i}.note`)} error={err?.note?.message} placeholder="e.g. Holiday" />
+              <TextField
+                label={`Why closed (day ${i + 1})`}
+                {...register(`closedDays.${i}.note`)}
+                error={err?.note?.message}
+                placeholder="e.g. Holiday"
+              />
               <Button type="button" variant="ghost" className="sm:mt-6" onClick={() => remove(i)} aria-label={`Remove closed day ${i + 1}`}>
                 Remove
               </Button>

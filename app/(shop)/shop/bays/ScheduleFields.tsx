@@ -7,7 +7,15 @@ import type { BaysSetupInput } from "@/lib/shop/bookings/schema";
 import { SLOT_STEPS } from "@/lib/shop/bookings/vocabulary";
 
 /** A few zones a shop in the US is likely in; any IANA name is accepted. */
-const ZONES = ["America/New_York", "America/Chicago", "America/Denver", "America/Phoenix", "America/Los_Angeles", "America/Anchorage", "Pacific/Honolulu"];
+const ZONES = [
+  "America/New_York",
+  "America/Chicago",
+  "America/Denver",
+  "America/Phoenix",
+  "America/Los_Angeles",
+  "America/Anchorage",
+  "Pacific/Honolulu",
+];
 
 export function ScheduleFields() {
   const { register, formState } = useFormContext<BaysSetupInput>();

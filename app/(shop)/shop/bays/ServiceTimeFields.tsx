@@ -16,8 +16,8 @@ export function ServiceTimeFields({ services }: { services: ServiceTime[] }) {
     <Card>
       <h2 className="text-lg font-semibold">Service times</h2>
       <p className="text-sm text-basalt-600">
-        A booking is as long as its quote&apos;s services: minutes per wheel, per vehicle, or per hour quoted. Times not set yet show a rule of thumb (common practice, no
-        source): replace them with your own.
+        A booking is as long as its quote&apos;s services: minutes per wheel, per vehicle, or per hour quoted. Times not set yet show a rule
+        of thumb (common practice, no source): replace them with your own.
       </p>
       {services.length === 0 && <p className="mt-2 text-sm text-basalt-600">Your catalog has no services yet.</p>}
       <ul className="mt-3 flex flex-col gap-3">
@@ -31,8 +31,18 @@ export function ServiceTimeFields({ services }: { services: ServiceTime[] }) {
                 {s.isDefault && <span className="ml-1 text-xs text-tight-800">rule of thumb</span>}
               </p>
               <input type="hidden" {...register(`serviceTimes.${i}.catalogItemId`)} />
-              <TextField label={`${s.description}: minutes per ${per}`} inputMode="numeric" {...register(`serviceTimes.${i}.minutes`)} error={err?.minutes?.message ?? err?.catalogItemId?.message} />
-              <SelectField label={`${s.description}: bay`} options={KIND_OPTIONS} {...register(`serviceTimes.${i}.bayKind`)} error={err?.bayKind?.message} />
+              <TextField
+                label={`${s.description}: minutes per ${per}`}
+                inputMode="numeric"
+                {...register(`serviceTimes.${i}.minutes`)}
+                error={err?.minutes?.message ?? err?.catalogItemId?.message}
+              />
+              <SelectField
+                label={`${s.description}: bay`}
+                options={KIND_OPTIONS}
+                {...register(`serviceTimes.${i}.bayKind`)}
+                error={err?.bayKind?.message}
+              />
             </li>
           );
         })}

@@ -23,8 +23,20 @@ export function WeekdayHoursFields() {
                 <input type="checkbox" {...register(`weekdays.${i}.open`)} className="size-4" />
                 Open on {name}
               </label>
-              <TextField label={`${name} opens`} type="time" disabled={!d.open} {...register(`weekdays.${i}.opens`)} error={err?.opens?.message} />
-              <TextField label={`${name} closes`} type="time" disabled={!d.open} {...register(`weekdays.${i}.closes`)} error={err?.closes?.message} />
+              <TextField
+                label={`${name} opens`}
+                type="time"
+                disabled={!d.open}
+                {...register(`weekdays.${i}.opens`)}
+                error={err?.opens?.message}
+              />
+              <TextField
+                label={`${name} closes`}
+                type="time"
+                disabled={!d.open}
+                {...register(`weekdays.${i}.closes`)}
+                error={err?.closes?.message}
+              />
             </li>
           );
         })}

@@ -13,7 +13,10 @@ export default async function BaysPage() {
   const setup = await bookingQueries.getSetup(shopIdOf(caller));
   return (
     <>
-      <PageHeader title="Bays and hours" lead="When customers may book an install, in which bays, and how long each service keeps a truck there." />
+      <PageHeader
+        title="Bays and hours"
+        lead="When customers may book an install, in which bays, and how long each service keeps a truck there."
+      />
       <div className="max-w-4xl">
         <BaysForm initial={setup} />
       </div>

@@ -5,7 +5,13 @@ import { afterEach, describe, expect, it, vi } from "vitest";
 import type { CalendarAnswer } from "@/lib/shop/bookings/api";
 import { CalendarGrid } from "./CalendarGrid";
 
-vi.mock("next/link", () => ({ default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => <a href={href} {...rest}>{children}</a> }));
+vi.mock("next/link", () => ({
+  default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => (
+    <a href={href} {...rest}>
+      {children}
+    </a>
+  ),
+}));
 afterEach(cleanup);
 
 // Denver is UTC−7 in December (49 CFR §71.9): 15:00Z is 8:00 AM on the shop's clock. The booking is invented.
@@ -32,7 +38,9 @@ const data: CalendarAnswer = {
       quoteNumber: 1003,
       customerName: "Ilse Varga-Pond",
       vehicleDescription: "Half-ton pickup",
-      bays: [{ bayId: "lift", bayName: "Lift 1", bayKind: "lift_bay", startsAt: "2026-12-14T15:00:00.000Z", endsAt: "2026-12-14T16:20:00.000Z" }],
+      bays: [
+        { bayId: "lift", bayName: "Lift 1", bayKind: "lift_bay", startsAt: "2026-12-14T15:00:00.000Z", endsAt: "2026-12-14T16:20:00.000Z" },
+      ],
     },
   ],
 };

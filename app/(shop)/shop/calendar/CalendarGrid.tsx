@@ -11,34 +11,61 @@ import { formatDay, formatMinute } from "@/lib/shop/bookings/zoned";
 export function CalendarGrid({ data }: { data: CalendarAnswer }) {
   const l = layoutCalendar(data);
   const perDay = Math.max(1, data.bays.length);
-  if (!data.bays.length) return <p className="text-sm text-basalt-600">No bays are set up yet: the owner adds them under Bays and hours.</p>;
+  if (!data.bays.length)
+    return <p className="text-sm text-basalt-600">No bays are set up yet: the owner adds them under Bays and hours.</p>;
   return (
-    <div role="region" aria-label="Bookings by bay" tabIndex={0} className="overflow-x-auto rounded-card bg-white p-3 shadow-card ring-1 ring-basalt-100">
+    <div
+      role="region"
+      aria-label="Bookings by bay"
+      tabIndex={0}
+      className="overflow-x-auto rounded-card bg-white p-3 shadow-card ring-1 ring-basalt-100"
+    >
       <div
         className="grid text-xs"
-        style={{ gridTemplateColumns: `4rem repeat(${l.columns.length}, minmax(7.5rem, 1fr))`, gridTemplateRows: `auto auto repeat(${l.rows}, 1.1rem)` }}
+        style={{
+          gridTemplateColumns: `4rem repeat(${l.columns.length}, minmax(7.5rem, 1fr))`,
+          gridTemplateRows: `auto auto repeat(${l.rows}, 1.1rem)`,
+        }}
         data-testid="calendar-grid"
       >
         {data.days.map((date, d) => (
-          <div key={date} className="border-b border-basalt-200 px-1 pb-1 text-sm font-semibold" style={{ gridColumn: `${2 + d * perDay} / span ${perDay}`, gridRow: 1 }}>
+          <div
+            key={date}
+            className="border-b border-basalt-200 px-1 pb-1 text-sm font-semibold"
+            style={{ gridColumn: `${2 + d * perDay} / span ${perDay}`, gridRow: 1 }}
+          >
             {formatDay(date)}
             {data.hours[date] === null && <span className="ml-1 font-normal text-basalt-500">closed</span>}
           </div>
         ))}
         {l.columns.map((c, i) => (
-          <div key={`${c.date}-${c.bayId}`} className="truncate px-1 py-1 font-medium text-basalt-700" style={{ gridColumn: i + 2, gridRow: 2 }}>
+          <div
+            key={`${c.date}-${c.bayId}`}
+            className="truncate px-1 py-1 font-medium text-basalt-700"
+            style={{ gridColumn: i + 2, gridRow: 2 }}
+          >
             {c.bayName}
           </div>
         ))}
         {Array.from({ length: l.rows }, (_, r) =>
           r % (60 / ROW_MINUTES) === 0 ? (
-            <div key={`t${r}`} aria-hidden className="border-t border-basalt-200 pr-1 text-right text-basalt-500" style={{ gridColumn: 1, gridRow: `${r + 3} / span ${60 / ROW_MINUTES}` }}>
+            <div
+              key={`t${r}`}
+              aria-hidden
+              className="border-t border-basalt-200 pr-1 text-right text-basalt-500"
+              style={{ gridColumn: 1, gridRow: `${r + 3} / span ${60 / ROW_MINUTES}` }}
+            >
               {formatMinute(l.firstMinute + r * ROW_MINUTES)}
             </div>
           ) : null,
         )}
         {l.columns.map((c, i) => (
-          <div key={`bg-${c.date}-${c.bayId}`} aria-hidden className={c.closed ? "border-l border-basalt-100 bg-basalt-100" : "border-l border-basalt-100"} style={{ gridColumn: i + 2, gridRow: `3 / span ${l.rows}` }} />
+          <div
+            key={`bg-${c.date}-${c.bayId}`}
+            aria-hidden
+            className={c.closed ? "border-l border-basalt-100 bg-basalt-100" : "border-l border-basalt-100"}
+            style={{ gridColumn: i + 2, gridRow: `3 / span ${l.rows}` }}
+          />
         ))}
         {l.blocks.map((b) => (
           <Link

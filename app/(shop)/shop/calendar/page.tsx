@@ -35,14 +35,20 @@ export default async function CalendarPage({ searchParams }: { searchParams: Pro
             <Link className={buttonClass("secondary")} href={link(addDays(data.from, days))}>
               {days === 1 ? "Next day" : "Next week"}
             </Link>
-            <Link className={buttonClass("ghost")} href={link(data.from, days === 1 ? 7 : 1)} aria-label={days === 1 ? "Show the week" : "Show one day"}>
+            <Link
+              className={buttonClass("ghost")}
+              href={link(data.from, days === 1 ? 7 : 1)}
+              aria-label={days === 1 ? "Show the week" : "Show one day"}
+            >
               {days === 1 ? "Week" : "Day"}
             </Link>
           </nav>
         }
       />
       <CalendarGrid data={data} />
-      <p className="mt-3 text-sm text-basalt-600">{data.bookings.length === 0 ? "No bookings in these days." : `${data.bookings.length} booking(s) in these days.`}</p>
+      <p className="mt-3 text-sm text-basalt-600">
+        {data.bookings.length === 0 ? "No bookings in these days." : `${data.bookings.length} booking(s) in these days.`}
+      </p>
     </>
   );
 }

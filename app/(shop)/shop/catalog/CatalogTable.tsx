@@ -13,7 +13,6 @@ import { queryKeys } from "@/lib/platform/query/keys";
 import { formatUsd } from "@/lib/shop/quotes/money";
 import { CATALOG_QUERY_LABELS } from "@/lib/shop/catalog/schema";
 
-
 const SERVICE_LABEL: Record<string, string> = {
   mount_balance: "Mount & balance",
   beadlock_assembly: "Beadlock assembly",
@@ -29,7 +28,10 @@ const UNIT_LABEL: Record<string, string> = { per_wheel: "per wheel", per_vehicle
 function details(i: CatalogItem): string {
   if (i.kind === "tire") return i.tireSize ?? "";
   if (i.kind === "wheel") {
-    const off = i.wheelBackspacingIn !== null ? `${i.wheelBackspacingIn} in backspacing (${i.wheelBackspacingReference})` : `${i.wheelOffsetMm} mm offset`;
+    const off =
+      i.wheelBackspacingIn !== null
+        ? `${i.wheelBackspacingIn} in backspacing (${i.wheelBackspacingReference})`
+        : `${i.wheelOffsetMm} mm offset`;
     return `${i.wheelDiameterIn}x${i.wheelWidthIn} · ${off} · ${i.boltPattern}${i.centerBoreMm ? ` · bore ${i.centerBoreMm} mm` : ""}${i.beadlock ? " · beadlock" : ""}`;
   }
   return `${SERVICE_LABEL[i.serviceType ?? "other"] ?? ""} · ${UNIT_LABEL[i.serviceUnit ?? ""] ?? ""}`;
@@ -38,7 +40,12 @@ function details(i: CatalogItem): string {
 /** The columns; each sortable column's id is the server's sort key for it. */
 const COLUMNS: TableColumn<CatalogItem>[] = [
   { id: "sku", header: "SKU", cell: (i) => i.sku, sortable: true },
-  { id: "kind", header: "Kind", cell: (i) => <Badge tone={i.kind === "tire" ? "steel" : i.kind === "wheel" ? "ember" : "neutral"}>{i.kind}</Badge>, sortable: true },
+  {
+    id: "kind",
+    header: "Kind",
+    cell: (i) => <Badge tone={i.kind === "tire" ? "steel" : i.kind === "wheel" ? "ember" : "neutral"}>{i.kind}</Badge>,
+    sortable: true,
+  },
   { id: "description", header: "Description", cell: (i) => i.description, sortable: true },
   { id: "tire_diameter_mm", header: "Size / details", cell: (i) => <span className="text-basalt-700">{details(i)}</span>, sortable: true },
   { id: "price_cents", header: "Price", cell: (i) => formatUsd(i.priceCents), sortable: true, align: "end" },
@@ -103,11 +110,15 @@ export function CatalogTable() {
           >
             <option value="">All</option>
             {CATALOG_KIND_FILTERS.map((k) => (
-              <option key={k.kind} value={k.kind}>{k.label}</option>
+              <option key={k.kind} value={k.kind}>
+                {k.label}
+              </option>
             ))}
           </select>
         </label>
-        <p className="ml-auto text-sm text-basalt-600" aria-live="polite">{data.isFetching ? "Loading…" : `${total.toLocaleString("en-US")} items`}</p>
+        <p className="ml-auto text-sm text-basalt-600" aria-live="polite">
+          {data.isFetching ? "Loading…" : `${total.toLocaleString("en-US")} items`}
+        </p>
       </div>
       {data.isError && <Alert tone="error">{(data.error as Error).message}</Alert>}
       <Table
@@ -125,11 +136,24 @@ export function CatalogTable() {
         empty={!data.isLoading && total === 0 ? "Nothing matches." : undefined}
       />
       <div className="mt-4 flex flex-wrap items-center gap-2 text-sm">
-        <Pagination label="Catalog pages" pageIndex={pagination.pageIndex} pageCount={pageCount} onPage={(pageIndex) => setPagination((p) => ({ ...p, pageIndex }))} />
+        <Pagination
+          label="Catalog pages"
+          pageIndex={pagination.pageIndex}
+          pageCount={pageCount}
+          onPage={(pageIndex) => setPagination((p) => ({ ...p, pageIndex }))}
+        />
         <label className="ml-auto flex items-center gap-2">
           {CATALOG_QUERY_LABELS.pageSize}
-          <select className="rounded border border-basalt-300 px-2 py-1" value={pagination.pageSize} onChange={(e) => setPagination({ pageIndex: 0, pageSize: Number(e.target.value) })}>
-            {[10, 25, 50, 100].map((n) => <option key={n} value={n}>{n}</option>)}
+          <select
+            className="rounded border border-basalt-300 px-2 py-1"
+            value={pagination.pageSize}
+            onChange={(e) => setPagination({ pageIndex: 0, pageSize: Number(e.target.value) })}
+          >
+            {[10, 25, 50, 100].map((n) => (
+              <option key={n} value={n}>
+                {n}
+              </option>
+            ))}
           </select>
         </label>
       </div>

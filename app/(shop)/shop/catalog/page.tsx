@@ -17,9 +17,17 @@ export default async function CatalogPage() {
         lead="Tires, wheels and services with prices and stock. Quotes pick from here."
         actions={
           <div className="flex flex-wrap gap-2">
-            <a href="/api/shop/catalog/export" className={buttonClass("secondary")} download>Export CSV</a>
-            <a href="/api/shop/catalog/template" className={buttonClass("secondary")} download>CSV template</a>
-            {owner && <Link href="/shop/catalog/import" className={buttonClass("primary")}>Import CSV</Link>}
+            <a href="/api/shop/catalog/export" className={buttonClass("secondary")} download>
+              Export CSV
+            </a>
+            <a href="/api/shop/catalog/template" className={buttonClass("secondary")} download>
+              CSV template
+            </a>
+            {owner && (
+              <Link href="/shop/catalog/import" className={buttonClass("primary")}>
+                Import CSV
+              </Link>
+            )}
           </div>
         }
       />

@@ -17,14 +17,14 @@ export default async function QuotesPage() {
       <PageHeader
         title="Quotes"
         lead={caller.role === "shop_owner" ? "Every quote of the shop." : "The quotes you wrote."}
-        actions={<Link href="/shop/quotes/new" className={buttonClass("primary")}>New quote</Link>}
+        actions={
+          <Link href="/shop/quotes/new" className={buttonClass("primary")}>
+            New quote
+          </Link>
+        }
       />
       <Card className="overflow-x-auto" tabIndex={0} role="region" aria-label="Quotes">
-        {quotes.length === 0 ? (
-          <p className="text-basalt-600">No quotes yet.</p>
-        ) : (
-          <QuotesTable quotes={quotes} />
-        )}
+        {quotes.length === 0 ? <p className="text-basalt-600">No quotes yet.</p> : <QuotesTable quotes={quotes} />}
       </Card>
     </>
   );

@@ -9,7 +9,17 @@ import { TextField } from "@/components/ui/TextField";
 import { api, applyFieldErrors } from "@/lib/platform/client/api";
 import { type ShopSettings, type ShopSettingsInput, shopSettingsSchema } from "@/lib/shop/schema";
 
-const FIELDS = ["name", "address", "phone", "taxRate", "labourRate", "fabricationRate", "quoteValidityDays", "depositPct", "currency"] as const;
+const FIELDS = [
+  "name",
+  "address",
+  "phone",
+  "taxRate",
+  "labourRate",
+  "fabricationRate",
+  "quoteValidityDays",
+  "depositPct",
+  "currency",
+] as const;
 
 export function SettingsForm({ initial }: { initial: Record<(typeof FIELDS)[number], string> }) {
   const router = useRouter();
@@ -39,14 +49,39 @@ export function SettingsForm({ initial }: { initial: Record<(typeof FIELDS)[numb
       <TextField label="Address" {...register("address")} error={errors.address?.message} hint="Printed in the quote header." />
       <TextField label="Phone" type="tel" {...register("phone")} error={errors.phone?.message} />
       <div className="grid gap-3 sm:grid-cols-2">
-        <TextField label="Sales tax rate (%)" inputMode="decimal" {...register("taxRate")} error={errors.taxRate?.message} hint="Applied to taxable lines, e.g. 8.25." />
+        <TextField
+          label="Sales tax rate (%)"
+          inputMode="decimal"
+          {...register("taxRate")}
+          error={errors.taxRate?.message}
+          hint="Applied to taxable lines, e.g. 8.25."
+        />
         <TextField label="Deposit (% of total)" inputMode="numeric" {...register("depositPct")} error={errors.depositPct?.message} />
         <TextField label="Labour rate ($ per hour)" inputMode="decimal" {...register("labourRate")} error={errors.labourRate?.message} />
-        <TextField label="Fabrication rate ($ per hour)" inputMode="decimal" {...register("fabricationRate")} error={errors.fabricationRate?.message} hint="Fender trimming and other cutting work." />
-        <TextField label="Quote valid for (days)" inputMode="numeric" {...register("quoteValidityDays")} error={errors.quoteValidityDays?.message} />
-        <TextField label="Currency" readOnly {...register("currency")} error={errors.currency?.message} hint="Quotes and deposits are in US dollars." />
+        <TextField
+          label="Fabrication rate ($ per hour)"
+          inputMode="decimal"
+          {...register("fabricationRate")}
+          error={errors.fabricationRate?.message}
+          hint="Fender trimming and other cutting work."
+        />
+        <TextField
+          label="Quote valid for (days)"
+          inputMode="numeric"
+          {...register("quoteValidityDays")}
+          error={errors.quoteValidityDays?.message}
+        />
+        <TextField
+          label="Currency"
+          readOnly
+          {...register("currency")}
+          error={errors.currency?.message}
+          hint="Quotes and deposits are in US dollars."
+        />
       </div>
-      <Button type="submit" pending={formState.isSubmitting} className="self-start">Save settings</Button>
+      <Button type="submit" pending={formState.isSubmitting} className="self-start">
+        Save settings
+      </Button>
     </form>
   );
 }

@@ -14,7 +14,10 @@ export default async function SettingsPage() {
   const shop = await pageGuard(shopQueries.getShop(shopIdOf(caller)));
   return (
     <>
-      <PageHeader title="Shop settings" lead="What every quote carries: your shop's header, tax, labour rates, how long a quote holds and the deposit asked." />
+      <PageHeader
+        title="Shop settings"
+        lead="What every quote carries: your shop's header, tax, labour rates, how long a quote holds and the deposit asked."
+      />
       <Card className="max-w-2xl">
         <SettingsForm
           initial={{

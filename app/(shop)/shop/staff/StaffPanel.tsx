@@ -13,7 +13,6 @@ import { queryKeys } from "@/lib/platform/query/keys";
 import type { StaffData } from "@/lib/shop/api";
 import { type StaffInviteInput, staffInviteSchema } from "@/lib/shop/schema";
 
-
 export function StaffPanel({ initial, selfId }: { initial: StaffData; selfId: string }) {
   const qc = useQueryClient();
   const data = useQuery({ queryKey: queryKeys.shop.staff.all, queryFn: () => api<StaffData>("/api/shop/staff"), initialData: initial });
@@ -46,7 +45,11 @@ export function StaffPanel({ initial, selfId }: { initial: StaffData; selfId: st
     <div className="grid gap-5 md:grid-cols-2">
       <Card>
         <h2 className="text-lg font-semibold">Team</h2>
-        {(remove.isError || revoke.isError) && <Alert tone="error" className="mt-2">{((remove.error ?? revoke.error) as Error).message}</Alert>}
+        {(remove.isError || revoke.isError) && (
+          <Alert tone="error" className="mt-2">
+            {((remove.error ?? revoke.error) as Error).message}
+          </Alert>
+        )}
         <ul className="mt-3 divide-y divide-basalt-100">
           {d.team.map((p) => (
             <li key={p.id} className="flex flex-wrap items-center justify-between gap-2 py-2 text-sm">
@@ -61,7 +64,12 @@ export function StaffPanel({ initial, selfId }: { initial: StaffData; selfId: st
                     className="min-h-8 py-1"
                     pending={remove.isPending && remove.variables === p.id}
                     onClick={() => {
-                      if (window.confirm(`Remove ${p.name} from the shop? The account stays, with its own garage and comparisons, without shop access.`)) remove.mutate(p.id);
+                      if (
+                        window.confirm(
+                          `Remove ${p.name} from the shop? The account stays, with its own garage and comparisons, without shop access.`,
+                        )
+                      )
+                        remove.mutate(p.id);
                     }}
                   >
                     Remove<span className="sr-only"> {p.name}</span>
@@ -80,7 +88,9 @@ export function StaffPanel({ initial, selfId }: { initial: StaffData; selfId: st
             {notice && <Alert tone="success">{notice}</Alert>}
           </div>
           <TextField label="E-mail of the person to invite" type="email" {...register("email")} error={formState.errors.email?.message} />
-          <Button type="submit" pending={formState.isSubmitting} className="self-start">Send invitation</Button>
+          <Button type="submit" pending={formState.isSubmitting} className="self-start">
+            Send invitation
+          </Button>
         </form>
         <h3 className="mt-6 text-sm font-semibold uppercase tracking-wide text-basalt-600">Open invitations</h3>
         {d.invites.length === 0 ? (
@@ -89,8 +99,12 @@ export function StaffPanel({ initial, selfId }: { initial: StaffData; selfId: st
           <ul className="mt-2 divide-y divide-basalt-100 text-sm">
             {d.invites.map((i) => (
               <li key={i.id} className="flex flex-wrap items-center justify-between gap-2 py-2">
-                <span>{i.email} <span className="text-basalt-600">· expires {new Date(i.expiresAt).toLocaleString("en-US")}</span></span>
-                <Button variant="ghost" className="min-h-8 py-1" onClick={() => revoke.mutate(i.id)}>Withdraw<span className="sr-only"> invitation for {i.email}</span></Button>
+                <span>
+                  {i.email} <span className="text-basalt-600">· expires {new Date(i.expiresAt).toLocaleString("en-US")}</span>
+                </span>
+                <Button variant="ghost" className="min-h-8 py-1" onClick={() => revoke.mutate(i.id)}>
+                  Withdraw<span className="sr-only"> invitation for {i.email}</span>
+                </Button>
               </li>
             ))}
           </ul>

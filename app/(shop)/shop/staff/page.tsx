@@ -16,10 +16,7 @@ export default async function StaffPage() {
         title="Staff"
         lead="Invite counter staff by e-mail. The link works once and expires after three days. Staff can do everything a member can: the garage and saved comparisons they keep are their own, the shop does not see them, and they keep them if they leave the shop."
       />
-      <StaffPanel
-        selfId={caller.userId}
-        initial={{ team, invites }}
-      />
+      <StaffPanel selfId={caller.userId} initial={{ team, invites }} />
     </>
   );
 }

@@ -15,7 +15,10 @@ import { signUpSchema } from "@/lib/accounts/schema";
  * address is a DuplicateEmailError: a field error on `email` (422).
  */
 export const POST = route({ access: "public", body: signUpSchema }, async ({ req, body }) => {
-  await rateLimitQueries.consumeOrRefuse([{ spec: RATE_LIMITS.signUp, key: clientAddress(req.headers) }], "Too many sign-ups from your network.");
+  await rateLimitQueries.consumeOrRefuse(
+    [{ spec: RATE_LIMITS.signUp, key: clientAddress(req.headers) }],
+    "Too many sign-ups from your network.",
+  );
   const user = await userQueries.createUser({ email: body.email, name: body.name, passwordHash: await hashPassword(body.password) });
   return Response.json(userDto(user), { status: 201 });
 });

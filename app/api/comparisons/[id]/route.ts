@@ -11,11 +11,14 @@ export const GET = route({ access: "signed-in", params: comparisonIdParams }, as
 });
 
 /** Rename, change the setups (figures recomputed) or tie it to a vehicle. */
-export const PATCH = route({ access: "signed-in", params: comparisonIdParams, body: updateComparisonSchema }, async ({ caller, params, body }) => {
-  const comparison = await comparisonQueries.updateComparison(caller.userId, params.id, body);
-  await dropCachedShare(comparison.share?.slug);
-  return { comparison };
-});
+export const PATCH = route(
+  { access: "signed-in", params: comparisonIdParams, body: updateComparisonSchema },
+  async ({ caller, params, body }) => {
+    const comparison = await comparisonQueries.updateComparison(caller.userId, params.id, body);
+    await dropCachedShare(comparison.share?.slug);
+    return { comparison };
+  },
+);
 
 export const DELETE = route({ access: "signed-in", params: comparisonIdParams }, async ({ caller, params }) => {
   const deleted = await comparisonQueries.deleteComparison(caller.userId, params.id);

@@ -16,7 +16,9 @@ export async function GET() {
         failed,
         stopping: r.stopping,
         checks: r.checks,
-        message: r.stopping ? "This server is shutting down." : `Not ready: ${failed.map((f) => (f === "database" ? "the database is not reachable" : "the job queue is not reachable")).join("; ")}.`,
+        message: r.stopping
+          ? "This server is shutting down."
+          : `Not ready: ${failed.map((f) => (f === "database" ? "the database is not reachable" : "the job queue is not reachable")).join("; ")}.`,
       };
   return Response.json(body, { status: r.ready ? 200 : 503, headers: { "Cache-Control": "no-store" } });
 }

@@ -7,4 +7,6 @@ import { SHOP_ANY, SHOP_OWNER, shopIdOf } from "@/lib/shop/queries";
 export const GET = route({ access: SHOP_ANY }, async ({ caller }) => ({ setup: await bookingQueries.getSetup(shopIdOf(caller)) }));
 
 /** Owners only: the whole bays-and-hours form in one save. */
-export const PUT = route({ access: SHOP_OWNER, body: baysSetupSchema }, async ({ caller, body }) => ({ setup: await bookingQueries.saveSetup(shopIdOf(caller), body) }));
+export const PUT = route({ access: SHOP_OWNER, body: baysSetupSchema }, async ({ caller, body }) => ({
+  setup: await bookingQueries.saveSetup(shopIdOf(caller), body),
+}));

@@ -4,4 +4,6 @@ import { calendarQuerySchema } from "@/lib/shop/bookings/schema";
 import { SHOP_ANY, shopIdOf } from "@/lib/shop/queries";
 
 /** The staff calendar: a day or a week of the shop's bookings per bay. */
-export const GET = route({ access: SHOP_ANY, query: calendarQuerySchema }, async ({ caller, query }) => bookingQueries.calendar(shopIdOf(caller), { from: query.from, days: query.days ?? 7 }));
+export const GET = route({ access: SHOP_ANY, query: calendarQuerySchema }, async ({ caller, query }) =>
+  bookingQueries.calendar(shopIdOf(caller), { from: query.from, days: query.days ?? 7 }),
+);

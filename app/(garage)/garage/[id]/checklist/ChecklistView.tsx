@@ -11,10 +11,21 @@ import type { Setup } from "@/lib/setup/model";
 /** What the checklist was built from, sent back with the ticks so the server rebuilds the same list. */
 export type ChecklistSourceBody = { planned: Setup; marginMm: number } | { comparisonId: string; marginMm: number };
 
-export function ChecklistView({ vehicleId, source, items, initialTicked }: { vehicleId: string; source: ChecklistSourceBody; items: ChecklistItem[]; initialTicked: string[] }) {
+export function ChecklistView({
+  vehicleId,
+  source,
+  items,
+  initialTicked,
+}: {
+  vehicleId: string;
+  source: ChecklistSourceBody;
+  items: ChecklistItem[];
+  initialTicked: string[];
+}) {
   const [ticked, setTicked] = useState<Set<string>>(new Set(initialTicked));
   const save = useMutation({
-    mutationFn: (next: string[]) => api<{ ticked: string[] }>(`/api/vehicles/${vehicleId}/checklist`, { method: "PUT", body: { ...source, ticked: next } }),
+    mutationFn: (next: string[]) =>
+      api<{ ticked: string[] }>(`/api/vehicles/${vehicleId}/checklist`, { method: "PUT", body: { ...source, ticked: next } }),
   });
   const toggle = (id: string) => {
     const next = new Set(ticked);
@@ -27,11 +38,14 @@ export function ChecklistView({ vehicleId, source, items, initialTicked }: { veh
   return (
     <div className="flex flex-col gap-5">
       <Alert tone="warning" title="Before you start">
-        This list is a planning aid built from your measurements. The vehicle maker&apos;s, wheel maker&apos;s and tire maker&apos;s instructions, local rules and
-        licensed practice come first; have steering, suspension and brake work done or checked by a qualified technician.
+        This list is a planning aid built from your measurements. The vehicle maker&apos;s, wheel maker&apos;s and tire maker&apos;s
+        instructions, local rules and licensed practice come first; have steering, suspension and brake work done or checked by a qualified
+        technician.
       </Alert>
       <div className="no-print flex flex-wrap items-center gap-3">
-        <Button type="button" onClick={() => window.print()}>Print the checklist</Button>
+        <Button type="button" onClick={() => window.print()}>
+          Print the checklist
+        </Button>
         <span className="text-sm text-basalt-600" aria-live="polite" data-testid="checklist-status">
           {save.isPending ? "Saving…" : save.isError ? "Not saved — try again." : `${ticked.size} of ${items.length} done`}
         </span>
@@ -46,7 +60,13 @@ export function ChecklistView({ vehicleId, source, items, initialTicked }: { veh
               {list.map((i) => (
                 <li key={i.id} className="break-inside-avoid">
                   <label className="flex items-start gap-3">
-                    <input type="checkbox" className="mt-1 size-4" checked={ticked.has(i.id)} onChange={() => toggle(i.id)} data-item={i.id} />
+                    <input
+                      type="checkbox"
+                      className="mt-1 size-4"
+                      checked={ticked.has(i.id)}
+                      onChange={() => toggle(i.id)}
+                      data-item={i.id}
+                    />
                     <span>
                       <span className={`font-medium ${ticked.has(i.id) ? "text-basalt-500 line-through" : ""}`}>{i.title}</span>
                       <span className="block text-sm text-basalt-700">{i.detail}</span>

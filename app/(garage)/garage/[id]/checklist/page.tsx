@@ -19,21 +19,40 @@ export const metadata: Metadata = { title: "Install checklist" };
 
 const first = (v: string | string[] | undefined) => (Array.isArray(v) ? v[0] : v);
 
-export default async function ChecklistPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+export default async function ChecklistPage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ id: string }>;
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}) {
   const [{ id }, sp] = await Promise.all([params, searchParams]);
   const caller = await requirePageCaller(`/garage/${id}/checklist`, GARAGE_ACCESS);
   if (!z.uuid().safeParse(id).success) notFound();
   const rawComparison = first(sp.comparison);
   const comparisonId = z.uuid().safeParse(rawComparison).data;
   if (rawComparison !== undefined && !comparisonId) notFound();
-  const r = await pageGuard(checklistQueries.resolveChecklist(caller.userId, id, { comparisonId, planned: setupFromQuery("p", sp), marginMm: marginMmParam.parse(first(sp.m)) }));
+  const r = await pageGuard(
+    checklistQueries.resolveChecklist(caller.userId, id, {
+      comparisonId,
+      planned: setupFromQuery("p", sp),
+      marginMm: marginMmParam.parse(first(sp.m)),
+    }),
+  );
   if (!r.ok) {
     return (
       <>
         <PageHeader title="Install checklist" />
         <Alert tone="info">
-          Plan a setup on the <Link className="underline" href={`/garage/${id}`}>vehicle page</Link>, or open a saved comparison tied to this vehicle from{" "}
-          <Link className="underline" href="/comparisons">your comparisons</Link>; their checklist links open this page for that setup.
+          Plan a setup on the{" "}
+          <Link className="underline" href={`/garage/${id}`}>
+            vehicle page
+          </Link>
+          , or open a saved comparison tied to this vehicle from{" "}
+          <Link className="underline" href="/comparisons">
+            your comparisons
+          </Link>
+          ; their checklist links open this page for that setup.
         </Alert>
       </>
     );
@@ -60,8 +79,8 @@ export default async function ChecklistPage({ params, searchParams }: { params: 
       />
       {currentDiffers && (
         <Alert tone="info" className="mb-4">
-          The comparison starts from {setupLine(r.comparison!.input.current)}, but the vehicle&apos;s current setup is {setupLine(vehicle.currentSetup)}. The checklist works from the
-          vehicle&apos;s, the setup its points were measured against.
+          The comparison starts from {setupLine(r.comparison!.input.current)}, but the vehicle&apos;s current setup is{" "}
+          {setupLine(vehicle.currentSetup)}. The checklist works from the vehicle&apos;s, the setup its points were measured against.
         </Alert>
       )}
       <ChecklistView

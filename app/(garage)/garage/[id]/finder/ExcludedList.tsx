@@ -14,7 +14,11 @@ function excludedColumns(vehicle: Vehicle): TableColumn<FitmentExclusion>[] {
   return [
     { id: "tire", header: "Tire size", cell: (x) => <span className="font-medium">{x.tire.text}</span> },
     { id: "diameter", header: "Diameter", cell: (x) => bothUnits(x.overallDiameterMm) },
-    { id: "wheel", header: "Closest wheel", cell: (x) => `${x.wheel.diameterIn}x${x.wheel.widthIn} ${x.wheel.offsetMm > 0 ? "+" : ""}${x.wheel.offsetMm} mm` },
+    {
+      id: "wheel",
+      header: "Closest wheel",
+      cell: (x) => `${x.wheel.diameterIn}x${x.wheel.widthIn} ${x.wheel.offsetMm > 0 ? "+" : ""}${x.wheel.offsetMm} mm`,
+    },
     { id: "why", header: "Why", cell: (x) => exclusionText(x) },
     {
       id: "check",

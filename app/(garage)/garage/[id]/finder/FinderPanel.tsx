@@ -23,8 +23,15 @@ export function FinderPanel({ vehicle, clearances }: { vehicle: Vehicle; clearan
     resolver: zodResolver(finderGoalsSchema) as never,
     mode: "onChange",
     defaultValues: {
-      targetDiameterMm: "", minDiameterMm: "", maxDiameterMm: "", wheelDiameters: String(vehicle.currentSetup.wheelDiameterIn),
-      maxPokeMm: "1 in", usePoints: hasPoints, minWidthIn: "", maxWidthIn: "", margin: "1/2 in",
+      targetDiameterMm: "",
+      minDiameterMm: "",
+      maxDiameterMm: "",
+      wheelDiameters: String(vehicle.currentSetup.wheelDiameterIn),
+      maxPokeMm: "1 in",
+      usePoints: hasPoints,
+      minWidthIn: "",
+      maxWidthIn: "",
+      margin: "1/2 in",
     },
   });
   const values = useWatch({ control: form.control }) as FinderGoalsForm;
@@ -68,7 +75,13 @@ export function FinderPanel({ vehicle, clearances }: { vehicle: Vehicle; clearan
         };
         worker.current = w;
       }
-      const job: FinderJob = { id: ++jobId.current, constraints: plan.constraints, wheelWidthsIn: plan.wheelWidthsIn, limit: 200, excludedLimit: 200 };
+      const job: FinderJob = {
+        id: ++jobId.current,
+        constraints: plan.constraints,
+        wheelWidthsIn: plan.wheelWidthsIn,
+        limit: 200,
+        excludedLimit: 200,
+      };
       setProgress({ done: 0, total: 1 });
       worker.current.postMessage(job);
     }, 250);
@@ -84,7 +97,11 @@ export function FinderPanel({ vehicle, clearances }: { vehicle: Vehicle; clearan
       <PageHeader
         title={`Fitment finder — ${vehicle.name}`}
         lead={`Tire sizes × wheel widths × offsets for ${vehicle.boltPattern}, ranked by the engine. The search runs in the background as you type.`}
-        actions={<Link href={`/garage/${vehicle.id}`} className={buttonClass("secondary")}>Back to the vehicle</Link>}
+        actions={
+          <Link href={`/garage/${vehicle.id}`} className={buttonClass("secondary")}>
+            Back to the vehicle
+          </Link>
+        }
       />
       {/* Goals above the results, never beside them: the results table then has the page's whole
           width, and all its columns, links included, show at 1280 px without scrolling sideways. */}
@@ -92,12 +109,22 @@ export function FinderPanel({ vehicle, clearances }: { vehicle: Vehicle; clearan
         <Card className="flex flex-col gap-3">
           <h2 className="text-lg font-semibold">Goals</h2>
           <div className="grid items-start gap-x-4 gap-y-3 md:grid-cols-2 xl:grid-cols-3">
-            <TextField label={FINDER_LABEL.targetDiameterMm} hint="Optional, e.g. 35 or 890 mm; ranks nearest first" {...reg("targetDiameterMm")} error={e.targetDiameterMm?.message} />
+            <TextField
+              label={FINDER_LABEL.targetDiameterMm}
+              hint="Optional, e.g. 35 or 890 mm; ranks nearest first"
+              {...reg("targetDiameterMm")}
+              error={e.targetDiameterMm?.message}
+            />
             <div className="grid grid-cols-2 gap-2">
               <TextField label={FINDER_LABEL.minDiameterMm} hint="e.g. 33" {...reg("minDiameterMm")} error={e.minDiameterMm?.message} />
               <TextField label={FINDER_LABEL.maxDiameterMm} hint="e.g. 35-1/2" {...reg("maxDiameterMm")} error={e.maxDiameterMm?.message} />
             </div>
-            <TextField label={FINDER_LABEL.wheelDiameters} hint="e.g. 17, 18 — empty for any" {...reg("wheelDiameters")} error={e.wheelDiameters?.message} />
+            <TextField
+              label={FINDER_LABEL.wheelDiameters}
+              hint="e.g. 17, 18 — empty for any"
+              {...reg("wheelDiameters")}
+              error={e.wheelDiameters?.message}
+            />
             <div className="grid grid-cols-2 gap-2">
               <TextField label={FINDER_LABEL.minWidthIn} hint="e.g. 8" {...reg("minWidthIn")} error={e.minWidthIn?.message} />
               <TextField label={FINDER_LABEL.maxWidthIn} hint="e.g. 10" {...reg("maxWidthIn")} error={e.maxWidthIn?.message} />
@@ -116,29 +143,47 @@ export function FinderPanel({ vehicle, clearances }: { vehicle: Vehicle; clearan
                   {!hasPoints
                     ? "No points measured yet."
                     : `${clearances.length} point${clearances.length === 1 ? "" : "s"}, each predicted for every combination exactly as on the vehicle page${
-                        plan ? ` (full-lock points turn about a steering axis ${mm(plan.steeringAxisInboardMm)} inboard of the hub face)` : ""
+                        plan
+                          ? ` (full-lock points turn about a steering axis ${mm(plan.steeringAxisInboardMm)} inboard of the hub face)`
+                          : ""
                       }.`}
                 </span>
               </span>
             </label>
-            <TextField label={FINDER_LABEL.margin} hint="Default 1/2 in — common practice, no source" {...reg("margin")} error={e.margin?.message} />
+            <TextField
+              label={FINDER_LABEL.margin}
+              hint="Default 1/2 in — common practice, no source"
+              {...reg("margin")}
+              error={e.margin?.message}
+            />
           </div>
-          <p className="text-xs text-basalt-500">Bolt pattern from the vehicle: {vehicle.boltPattern}. Wheel diameter is the tire&apos;s rim diameter.</p>
+          <p className="text-xs text-basalt-500">
+            Bolt pattern from the vehicle: {vehicle.boltPattern}. Wheel diameter is the tire&apos;s rim diameter.
+          </p>
         </Card>
         <div className="flex min-w-0 flex-col gap-3">
           <div aria-live="polite" className="min-h-12">
             {progress ? (
               <div>
-                <progress className="h-2 w-full accent-ember-600" max={progress.total} value={progress.done} aria-label="Search progress" data-testid="finder-progress" />
+                <progress
+                  className="h-2 w-full accent-ember-600"
+                  max={progress.total}
+                  value={progress.done}
+                  aria-label="Search progress"
+                  data-testid="finder-progress"
+                />
                 <p className="text-sm text-basalt-600">Searching… {Math.round((progress.done / progress.total) * 100)}%</p>
               </div>
             ) : result ? (
               <p className="text-sm text-basalt-700" data-testid="finder-summary">
-                {result.result.matched.toLocaleString("en-US")} fits among {result.result.evaluated.toLocaleString("en-US")} combinations in {result.ms.toFixed(0)} ms
+                {result.result.matched.toLocaleString("en-US")} fits among {result.result.evaluated.toLocaleString("en-US")} combinations in{" "}
+                {result.ms.toFixed(0)} ms
                 {result.result.matched > result.result.results.length ? ` — the best ${result.result.results.length} shown` : ""}.
                 {result.result.excludedCount > 0 &&
                   ` ${result.result.excludedCount.toLocaleString("en-US")} more were excluded by the measured points or the poke limit${
-                    result.result.excludedSizes > 0 ? `, ${result.result.excludedSizes} tire size${result.result.excludedSizes === 1 ? "" : "s"} entirely (listed below)` : ""
+                    result.result.excludedSizes > 0
+                      ? `, ${result.result.excludedSizes} tire size${result.result.excludedSizes === 1 ? "" : "s"} entirely (listed below)`
+                      : ""
                   }.`}
               </p>
             ) : null}
@@ -146,7 +191,9 @@ export function FinderPanel({ vehicle, clearances }: { vehicle: Vehicle; clearan
           {failure && <Alert tone="error">{failure}</Alert>}
           {!plan && <Alert tone="info">Fix the highlighted goals to search.</Alert>}
           {result && <FinderTable rows={result.result.results} vehicle={vehicle} />}
-          {result && result.result.excluded.length > 0 && <ExcludedList rows={result.result.excluded} total={result.result.excludedSizes} vehicle={vehicle} />}
+          {result && result.result.excluded.length > 0 && (
+            <ExcludedList rows={result.result.excluded} total={result.result.excludedSizes} vehicle={vehicle} />
+          )}
         </div>
       </div>
     </>

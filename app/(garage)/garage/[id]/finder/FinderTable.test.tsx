@@ -9,14 +9,36 @@ import type { Vehicle } from "@/lib/garage/types";
 import { FinderTable } from "./FinderTable";
 
 vi.setConfig({ testTimeout: 30_000 });
-vi.mock("next/link", () => ({ default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => <a href={href} {...rest}>{children}</a> }));
+vi.mock("next/link", () => ({
+  default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => (
+    <a href={href} {...rest}>
+      {children}
+    </a>
+  ),
+}));
 afterEach(cleanup);
 
 const setup = DEFAULT_INPUT.current;
 const vehicle: Vehicle = {
-  id: "v1", name: "Quarry hauler", year: null, make: null, model: null, trim: null, frontSuspension: "solid-axle", boltPattern: "6x139.7", hubBoreMm: null,
-  stockSetup: setup, currentSetup: setup, liftHeightMm: null, kingpinInclinationDeg: null, axleRatio: 3.73, transmissionRatio: 1, clearanceMarginMm: 12.7, notes: "",
-  createdAt: "2026-01-01T00:00:00.000Z", updatedAt: "2026-01-01T00:00:00.000Z",
+  id: "v1",
+  name: "Quarry hauler",
+  year: null,
+  make: null,
+  model: null,
+  trim: null,
+  frontSuspension: "solid-axle",
+  boltPattern: "6x139.7",
+  hubBoreMm: null,
+  stockSetup: setup,
+  currentSetup: setup,
+  liftHeightMm: null,
+  kingpinInclinationDeg: null,
+  axleRatio: 3.73,
+  transmissionRatio: 1,
+  clearanceMarginMm: 12.7,
+  notes: "",
+  createdAt: "2026-01-01T00:00:00.000Z",
+  updatedAt: "2026-01-01T00:00:00.000Z",
 };
 
 const TIRES = ["33x12.50R17LT", "35x12.50R17LT", "285/70R17"].map((t) => parseTireSize(t));
@@ -28,8 +50,18 @@ const ROWS: FitmentMatch[] = Array.from({ length: 60 }, (_, i) => {
   const tire = TIRES[i % 3]!;
   const offsetMm = ((i * 37) % 60) - 24;
   return {
-    tire, wheel: { diameterIn: 17, widthIn: 8 + (i % 3), offsetMm }, wheelId: null, boltPattern: null, sectionWidthMm: tire.sectionWidthMm,
-    overallDiameterMm: 800 + i, effectiveOffsetMm: offsetMm, innerSwingMm: 100 + i, outerSwingMm: 150 - i, backspacingIn: 5, measuringRimWidthIn: 9, rank: i + 1,
+    tire,
+    wheel: { diameterIn: 17, widthIn: 8 + (i % 3), offsetMm },
+    wheelId: null,
+    boltPattern: null,
+    sectionWidthMm: tire.sectionWidthMm,
+    overallDiameterMm: 800 + i,
+    effectiveOffsetMm: offsetMm,
+    innerSwingMm: 100 + i,
+    outerSwingMm: 150 - i,
+    backspacingIn: 5,
+    measuringRimWidthIn: 9,
+    rank: i + 1,
     tightestClearance: i % 4 === 0 ? null : { pointIndex: 0, label: "Frame rail", predictedMm: 30 - i / 2 },
   };
 });
@@ -63,7 +95,17 @@ describe("the finder's results table", () => {
     const offsets = column(4).map((t) => Number(t.replace(" mm", "")));
     expect(offsets.slice(0, 3)).toEqual([-24, -23, -22]);
     expect(offsets).toEqual([...offsets].sort((a, b) => a - b));
-    const sortable = ["Rank", "Tire size", "Diameter", "Wheel", "Offset", "Backspacing (bead seat)", "Reach inboard", "Reach outboard", "Tightest point"];
+    const sortable = [
+      "Rank",
+      "Tire size",
+      "Diameter",
+      "Wheel",
+      "Offset",
+      "Backspacing (bead seat)",
+      "Reach inboard",
+      "Reach outboard",
+      "Tightest point",
+    ];
     for (const name of sortable) expect(screen.getByRole("button", { name })).toBeTruthy();
     expect(within(screen.getByRole("columnheader", { name: "Compare" })).queryByRole("button")).toBeNull();
   });

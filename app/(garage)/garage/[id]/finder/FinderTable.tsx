@@ -24,12 +24,36 @@ const wheelText = (m: FitmentMatch) => `${m.wheel.diameterIn}x${m.wheel.widthIn}
 function finderColumns(vehicle: Vehicle): TableColumn<FitmentMatch>[] {
   return [
     { id: "rank", header: "Rank", sortable: true, sortValue: (m) => m.rank, cell: (m) => m.rank, align: "end" },
-    { id: "tire", header: "Tire size", sortable: true, sortValue: (m) => m.tire.text, cell: (m) => <span className="whitespace-nowrap font-medium">{m.tire.text}</span> },
-    { id: "diameter", header: "Diameter", sortable: true, sortValue: (m) => m.overallDiameterMm, cell: (m) => bothUnits(m.overallDiameterMm) },
+    {
+      id: "tire",
+      header: "Tire size",
+      sortable: true,
+      sortValue: (m) => m.tire.text,
+      cell: (m) => <span className="whitespace-nowrap font-medium">{m.tire.text}</span>,
+    },
+    {
+      id: "diameter",
+      header: "Diameter",
+      sortable: true,
+      sortValue: (m) => m.overallDiameterMm,
+      cell: (m) => bothUnits(m.overallDiameterMm),
+    },
     // Rim diameter first, then width: 17x9 before 17x10 before 18x8.
     { id: "wheel", header: "Wheel", sortable: true, sortValue: (m) => m.wheel.diameterIn * 1000 + m.wheel.widthIn, cell: wheelText },
-    { id: "offset", header: "Offset", sortable: true, sortValue: (m) => m.wheel.offsetMm, cell: (m) => <span className="whitespace-nowrap">{`${m.wheel.offsetMm > 0 ? "+" : ""}${m.wheel.offsetMm} mm`}</span> },
-    { id: "backspacing", header: "Backspacing (bead seat)", sortable: true, sortValue: (m) => m.backspacingIn, cell: (m) => formatLength(inToMm(m.backspacingIn), { unit: "in", fraction: 16 }) },
+    {
+      id: "offset",
+      header: "Offset",
+      sortable: true,
+      sortValue: (m) => m.wheel.offsetMm,
+      cell: (m) => <span className="whitespace-nowrap">{`${m.wheel.offsetMm > 0 ? "+" : ""}${m.wheel.offsetMm} mm`}</span>,
+    },
+    {
+      id: "backspacing",
+      header: "Backspacing (bead seat)",
+      sortable: true,
+      sortValue: (m) => m.backspacingIn,
+      cell: (m) => formatLength(inToMm(m.backspacingIn), { unit: "in", fraction: 16 }),
+    },
     { id: "inner", header: "Reach inboard", sortable: true, sortValue: (m) => m.innerSwingMm, cell: (m) => mm(m.innerSwingMm) },
     { id: "outer", header: "Reach outboard", sortable: true, sortValue: (m) => m.outerSwingMm, cell: (m) => mm(m.outerSwingMm) },
     {
@@ -47,7 +71,11 @@ function finderColumns(vehicle: Vehicle): TableColumn<FitmentMatch>[] {
         const s = candidateSetup(m);
         return (
           <span className="flex flex-col gap-1">
-            <Link className="text-ember-700 underline" href={vehicleWorkspaceUrl(vehicle.currentSetup, s, vehicle)} data-testid="candidate-workspace">
+            <Link
+              className="text-ember-700 underline"
+              href={vehicleWorkspaceUrl(vehicle.currentSetup, s, vehicle)}
+              data-testid="candidate-workspace"
+            >
               Workspace
             </Link>
             <Link className="text-ember-700 underline" href={`/garage/${vehicle.id}?${setupQuery("p", s)}`}>
@@ -106,7 +134,10 @@ export function FinderTable({ rows, vehicle }: { rows: FitmentMatch[]; vehicle: 
         }}
       />
       {rows.length === 0 ? (
-        <p className="text-sm text-basalt-700">Nothing fits these goals. Widen the diameter range or allow more poke; the sizes the measured points exclude are listed with what they need.</p>
+        <p className="text-sm text-basalt-700">
+          Nothing fits these goals. Widen the diameter range or allow more poke; the sizes the measured points exclude are listed with what
+          they need.
+        </p>
       ) : sorted.rows.length === 0 ? (
         <p className="text-sm text-basalt-700">No fit matches “{filter.trim()}”.</p>
       ) : (

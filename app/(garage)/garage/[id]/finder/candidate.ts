@@ -3,5 +3,11 @@ import type { FitmentCandidate } from "@/lib/fitment";
 import type { Setup } from "@/lib/setup/model";
 
 export function candidateSetup(m: Pick<FitmentCandidate, "tire" | "wheel">): Setup {
-  return { tire: m.tire.text, wheelDiameterIn: m.wheel.diameterIn, wheelWidthIn: m.wheel.widthIn, position: { mode: "offset", offsetMm: m.wheel.offsetMm }, spacerMm: 0 };
+  return {
+    tire: m.tire.text,
+    wheelDiameterIn: m.wheel.diameterIn,
+    wheelWidthIn: m.wheel.widthIn,
+    position: { mode: "offset", offsetMm: m.wheel.offsetMm },
+    spacerMm: 0,
+  };
 }

@@ -14,6 +14,8 @@ describe("cmap reader", () => {
     expect(latin.has(cp("Ł"))).toBe(false);
     expect(codePointsOf(readFileSync("app/fonts/og/archivo-latin-ext-700-normal.woff")).has(cp("Ł"))).toBe(true);
     // Format 12 (beyond the BMP): the emoji font holds U+1F699 (recreational vehicle).
-    expect(codePointsOf(readFileSync("node_modules/@fontsource/noto-emoji/files/noto-emoji-emoji-700-normal.woff")).has(0x1f699)).toBe(true);
+    expect(codePointsOf(readFileSync("node_modules/@fontsource/noto-emoji/files/noto-emoji-emoji-700-normal.woff")).has(0x1f699)).toBe(
+      true,
+    );
   });
 });

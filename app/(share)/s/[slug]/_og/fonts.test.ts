@@ -7,7 +7,11 @@ const cp = (s: string) => s.codePointAt(0)!;
 
 describe("CSS unicode-range lists", () => {
   it("parses CSS unicode-range lists", () => {
-    expect(parseRanges("U+4e00-4e0f, U+4e20,u+ff01")).toEqual([[0x4e00, 0x4e0f], [0x4e20, 0x4e20], [0xff01, 0xff01]]);
+    expect(parseRanges("U+4e00-4e0f, U+4e20,u+ff01")).toEqual([
+      [0x4e00, 0x4e0f],
+      [0x4e20, 0x4e20],
+      [0xff01, 0xff01],
+    ]);
   });
 });
 
@@ -70,7 +74,11 @@ describe("fonts for a name", () => {
   it("replaces what no shipped font draws with a readable mark, and drops invisible controls", async () => {
     // Korean: Noto Sans SC/JP declare a few Hangul code points in their slice lists but draw none of these.
     const korean = "오프로드 타이어";
-    expect(drawableText(korean, await fontsFor(korean), "Archivo", 700)).toEqual({ text: `${REPLACEMENT.repeat(4)} ${REPLACEMENT.repeat(3)}`, replaced: 7, graphemes: 7 });
+    expect(drawableText(korean, await fontsFor(korean), "Archivo", 700)).toEqual({
+      text: `${REPLACEMENT.repeat(4)} ${REPLACEMENT.repeat(3)}`,
+      replaced: 7,
+      graphemes: 7,
+    });
     const tricky = "Rig\u0007 \u202eevil\u202c name\u200b";
     expect(drawableText(tricky, await fontsFor(tricky), "Archivo", 700).text).toBe("Rig evil name");
   });

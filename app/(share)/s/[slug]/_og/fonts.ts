@@ -76,7 +76,9 @@ function load(path: string, name: string, weight: OgFont["weight"]): Promise<Cov
 let always: Promise<CoveredFont[]> | undefined;
 function alwaysFonts(): Promise<CoveredFont[]> {
   const dir = join(process.cwd(), "app/fonts/og");
-  return (always ??= Promise.all(ALWAYS.map(([file, name, weight]) => load(join(dir, file), name, weight))).then((list) => list.filter((f) => f !== null)));
+  return (always ??= Promise.all(ALWAYS.map(([file, name, weight]) => load(join(dir, file), name, weight))).then((list) =>
+    list.filter((f) => f !== null),
+  ));
 }
 
 type Ranges = [number, number][];
@@ -145,7 +147,9 @@ export async function fontsFor(text: string): Promise<CoveredFont[]> {
       if ([...missing].some((cp) => inRanges(cp, ranges))) wanted.add(slice);
     }
     const loaded = await Promise.all(
-      [...wanted].map((slice) => load(join(PACKAGES, CJK[key].pkg, "files", `${CJK[key].pkg}-${slice}-700-normal.woff`), `${CJK[key].name} ${slice}`, 700)),
+      [...wanted].map((slice) =>
+        load(join(PACKAGES, CJK[key].pkg, "files", `${CJK[key].pkg}-${slice}-700-normal.woff`), `${CJK[key].name} ${slice}`, 700),
+      ),
     );
     for (const f of loaded) {
       if (!f) continue;

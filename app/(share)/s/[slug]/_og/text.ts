@@ -53,7 +53,7 @@ export function orderArabicRuns(text: string): string {
   const tokens = text.split(/(\s+)/);
   const arabic = (k: number) => k < tokens.length && ARABIC.test(tokens[k] ?? "");
   const out: string[] = [];
-  for (let i = 0; i < tokens.length; ) {
+  for (let i = 0; i < tokens.length;) {
     if (!arabic(i)) {
       out.push(tokens[i++] ?? "");
       continue;
@@ -77,12 +77,19 @@ export function orderArabicRuns(text: string): string {
  * @example
  * drawableText("Łódź 🚙", fonts, "Archivo", 700); // { text: "Łódź 🚙", replaced: 0, graphemes: 6 }
  */
-export function drawableText(text: string, fonts: CoveredFont[], family: string, weight: number): { text: string; replaced: number; graphemes: number } {
+export function drawableText(
+  text: string,
+  fonts: CoveredFont[],
+  family: string,
+  weight: number,
+): { text: string; replaced: number; graphemes: number } {
   const ordered = fallbackOrder(fonts, family, weight);
   let replaced = 0;
   let graphemes = 0;
   let out = "";
-  for (const { segment } of new Intl.Segmenter(undefined, { granularity: "grapheme" }).segment(text.normalize("NFC").replace(SKIN_TONE, "").replace(CONTROLS, ""))) {
+  for (const { segment } of new Intl.Segmenter(undefined, { granularity: "grapheme" }).segment(
+    text.normalize("NFC").replace(SKIN_TONE, "").replace(CONTROLS, ""),
+  )) {
     if (/^\s+$/u.test(segment)) {
       out += " ";
       continue;

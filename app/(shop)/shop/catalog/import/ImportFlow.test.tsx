@@ -5,7 +5,13 @@ import type { ReactNode } from "react";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { ImportFlow } from "./ImportFlow";
 
-vi.mock("next/link", () => ({ default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => <a href={href} {...rest}>{children}</a> }));
+vi.mock("next/link", () => ({
+  default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => (
+    <a href={href} {...rest}>
+      {children}
+    </a>
+  ),
+}));
 
 afterEach(() => {
   cleanup();
@@ -35,7 +41,9 @@ async function pickFile() {
       <ImportFlow />
     </QueryClientProvider>,
   );
-  fireEvent.change(screen.getByLabelText("Catalog CSV file"), { target: { files: [new File(["x"], "catalog.csv", { type: "text/csv" })] } });
+  fireEvent.change(screen.getByLabelText("Catalog CSV file"), {
+    target: { files: [new File(["x"], "catalog.csv", { type: "text/csv" })] },
+  });
   return screen.findByTestId("import-summary");
 }
 
@@ -62,7 +70,16 @@ describe("catalog import preview", () => {
   });
 
   it("says one row and one problem in the singular", async () => {
-    answerUploadWith({ importId: "0a000000-0000-4000-8000-0000000000fe", total: 2, valid: 1, newItems: 1, updatedItems: 0, skippedRows: 1, problemCount: 1, errors: [{ row: 3, column: "sku", message: "Enter a SKU." }] });
+    answerUploadWith({
+      importId: "0a000000-0000-4000-8000-0000000000fe",
+      total: 2,
+      valid: 1,
+      newItems: 1,
+      updatedItems: 0,
+      skippedRows: 1,
+      problemCount: 1,
+      errors: [{ row: 3, column: "sku", message: "Enter a SKU." }],
+    });
     const summary = await pickFile();
     expect(summary.textContent).toBe("2 rows read · 1 ready (1 new, 0 updated) · 1 row skipped, 1 problem");
     expect(screen.getByRole("button", { name: "Import 1 row (skip 1 with problems)" })).toBeTruthy();

@@ -50,7 +50,12 @@ function upload(file: File, onProgress: (pct: number) => void): Promise<{ status
 type ImportProblem = Preview["errors"][number];
 /** In the file's order: row by row, as the spreadsheet shows them. */
 const ERROR_COLUMNS: TableColumn<ImportProblem>[] = [
-  { id: "row", header: "Row", cell: (e) => `${e.row}${e.line ? ` (line ${e.line})` : ""}`, className: "whitespace-nowrap pl-3 tabular-nums" },
+  {
+    id: "row",
+    header: "Row",
+    cell: (e) => `${e.row}${e.line ? ` (line ${e.line})` : ""}`,
+    className: "whitespace-nowrap pl-3 tabular-nums",
+  },
   { id: "column", header: "Column", cell: (e) => <span className="font-mono text-xs">{e.column || "—"}</span> },
   { id: "problem", header: "Problem", cell: (e) => e.message },
 ];
@@ -117,10 +122,18 @@ export function ImportFlow() {
 
   return (
     <Card className="flex flex-col gap-4">
-      <div aria-live="assertive">{failure && <Alert tone="error" title="Nothing was imported">{failure}</Alert>}</div>
+      <div aria-live="assertive">
+        {failure && (
+          <Alert tone="error" title="Nothing was imported">
+            {failure}
+          </Alert>
+        )}
+      </div>
       {(phase.at === "pick" || phase.at === "uploading") && (
         <div className="flex flex-col gap-1">
-          <label htmlFor="catalog-file" className="text-sm font-medium">Catalog CSV file</label>
+          <label htmlFor="catalog-file" className="text-sm font-medium">
+            Catalog CSV file
+          </label>
           <input
             ref={input}
             id="catalog-file"
@@ -138,13 +151,19 @@ export function ImportFlow() {
           <div>
             <h2 className="text-lg font-semibold">Preview of {phase.file}</h2>
             <p className="mt-1 text-sm" data-testid="import-summary">
-              {count(phase.preview.total, "row")} read · {phase.preview.valid.toLocaleString("en-US")} ready ({phase.preview.newItems.toLocaleString("en-US")} new,{" "}
-              {phase.preview.updatedItems.toLocaleString("en-US")} updated)
-              {phase.preview.skippedRows > 0 && ` · ${count(phase.preview.skippedRows, "row")} skipped, ${count(phase.preview.problemCount, "problem")}`}
+              {count(phase.preview.total, "row")} read · {phase.preview.valid.toLocaleString("en-US")} ready (
+              {phase.preview.newItems.toLocaleString("en-US")} new, {phase.preview.updatedItems.toLocaleString("en-US")} updated)
+              {phase.preview.skippedRows > 0 &&
+                ` · ${count(phase.preview.skippedRows, "row")} skipped, ${count(phase.preview.problemCount, "problem")}`}
             </p>
           </div>
           {phase.preview.problemCount > 0 && (
-            <div className="max-h-96 overflow-auto rounded-lg ring-1 ring-basalt-200" tabIndex={0} role="region" aria-label="Problems by row">
+            <div
+              className="max-h-96 overflow-auto rounded-lg ring-1 ring-basalt-200"
+              tabIndex={0}
+              role="region"
+              aria-label="Problems by row"
+            >
               <Table
                 caption="Problems by row; row numbers as a spreadsheet shows them, the header being row 1"
                 headClassName="sticky top-0 bg-basalt-50"
@@ -154,26 +173,37 @@ export function ImportFlow() {
                 rowTestId="import-error"
               />
               {phase.preview.problemCount > phase.preview.errors.length && (
-                <p className="p-3 text-sm text-basalt-600">… and {count(phase.preview.problemCount - phase.preview.errors.length, "more problem")}.</p>
+                <p className="p-3 text-sm text-basalt-600">
+                  … and {count(phase.preview.problemCount - phase.preview.errors.length, "more problem")}.
+                </p>
               )}
             </div>
           )}
           <div className="flex flex-wrap gap-2">
             {phase.preview.importId ? (
               <Button onClick={() => void onConfirm(phase.preview.importId!, phase.preview.valid, phase.preview.skippedRows)}>
-                Import {count(phase.preview.valid, "row")}{phase.preview.skippedRows ? ` (skip ${phase.preview.skippedRows.toLocaleString("en-US")} with problems)` : ""}
+                Import {count(phase.preview.valid, "row")}
+                {phase.preview.skippedRows ? ` (skip ${phase.preview.skippedRows.toLocaleString("en-US")} with problems)` : ""}
               </Button>
             ) : (
               <Alert tone="warning">No row can be imported. Fix the file and upload it again.</Alert>
             )}
-            <Button variant="secondary" onClick={() => setPhase({ at: "pick" })}>Choose another file</Button>
+            <Button variant="secondary" onClick={() => setPhase({ at: "pick" })}>
+              Choose another file
+            </Button>
           </div>
         </>
       )}
-      {phase.at === "importing" && <ImportProgress label="Importing (one transaction: all rows or none)" value={phase.done} max={phase.total} />}
+      {phase.at === "importing" && (
+        <ImportProgress label="Importing (one transaction: all rows or none)" value={phase.done} max={phase.total} />
+      )}
       {phase.at === "done" && (
         <Alert tone="success" title="Import finished">
-          {phase.imported.toLocaleString("en-US")} items imported.{phase.skipped ? ` ${count(phase.skipped, "row")} with problems skipped.` : ""} <Link className="underline" href="/shop/catalog">Back to the catalog</Link>
+          {phase.imported.toLocaleString("en-US")} items imported.
+          {phase.skipped ? ` ${count(phase.skipped, "row")} with problems skipped.` : ""}{" "}
+          <Link className="underline" href="/shop/catalog">
+            Back to the catalog
+          </Link>
         </Alert>
       )}
     </Card>

@@ -16,7 +16,10 @@ export default async function ImportPage() {
           <>
             Upload a CSV in the Hubface catalog format (UTF-8, at most {CSV_MAX_BYTES / 1024 / 1024} MB). You see a row-by-row report first;
             nothing changes until you confirm. Items are matched by SKU: existing ones are updated, new ones added.{" "}
-            <a className="text-ember-700 underline" href="/api/shop/catalog/template" download>Download the template</a>.
+            <a className="text-ember-700 underline" href="/api/shop/catalog/template" download>
+              Download the template
+            </a>
+            .
           </>
         }
       />

@@ -15,13 +15,22 @@ import { formatUsd } from "@/lib/shop/quotes/money";
  * A wheel is checked against the quoted vehicle's hub first: one that does not go on says why
  * and cannot be added; one that needs rings says so.
  */
-export function CatalogItemPicker({ vehicle, onAdd }: { vehicle: { boltPattern: string; hubBoreMm: number | null }; onAdd: (item: CatalogItem) => void }) {
+export function CatalogItemPicker({
+  vehicle,
+  onAdd,
+}: {
+  vehicle: { boltPattern: string; hubBoreMm: number | null };
+  onAdd: (item: CatalogItem) => void;
+}) {
   const [text, setText] = useState("");
   const [kind, setKind] = useState<"" | CatalogKind>("");
   const [asked, setAsked] = useState<{ q: string; kind: string } | null>(null);
   const found = useQuery({
     queryKey: queryKeys.shop.catalog.pick(asked),
-    queryFn: () => api<{ items: CatalogItem[]; total: number }>(`/api/shop/catalog?${new URLSearchParams({ q: asked!.q, kind: asked!.kind, pageSize: "10" })}`),
+    queryFn: () =>
+      api<{ items: CatalogItem[]; total: number }>(
+        `/api/shop/catalog?${new URLSearchParams({ q: asked!.q, kind: asked!.kind, pageSize: "10" })}`,
+      ),
     enabled: asked !== null,
   });
   return (
@@ -37,21 +46,39 @@ export function CatalogItemPicker({ vehicle, onAdd }: { vehicle: { boltPattern: 
       >
         <label className="flex min-w-48 flex-1 flex-col gap-1 text-sm font-medium">
           Add from the catalog
-          <input type="search" className="rounded-lg border border-basalt-300 px-3 py-2" placeholder="SKU, description, size or bolt pattern" value={text} onChange={(e) => setText(e.target.value)} />
+          <input
+            type="search"
+            className="rounded-lg border border-basalt-300 px-3 py-2"
+            placeholder="SKU, description, size or bolt pattern"
+            value={text}
+            onChange={(e) => setText(e.target.value)}
+          />
         </label>
         <label className="flex flex-col gap-1 text-sm font-medium">
           Kind
-          <select className="min-h-10 rounded-lg border border-basalt-300 px-3" value={kind} onChange={(e) => setKind(e.target.value as "" | CatalogKind)}>
+          <select
+            className="min-h-10 rounded-lg border border-basalt-300 px-3"
+            value={kind}
+            onChange={(e) => setKind(e.target.value as "" | CatalogKind)}
+          >
             <option value="">All</option>
             {CATALOG_KIND_FILTERS.map((k) => (
-              <option key={k.kind} value={k.kind}>{k.label}</option>
+              <option key={k.kind} value={k.kind}>
+                {k.label}
+              </option>
             ))}
           </select>
         </label>
-        <Button type="submit" variant="secondary" pending={found.isFetching}>Find</Button>
+        <Button type="submit" variant="secondary" pending={found.isFetching}>
+          Find
+        </Button>
       </form>
       <div aria-live="polite">
-        {found.isError && <Alert tone="error" className="mt-2">{(found.error as Error).message}</Alert>}
+        {found.isError && (
+          <Alert tone="error" className="mt-2">
+            {(found.error as Error).message}
+          </Alert>
+        )}
         {found.data && found.data.items.length === 0 && <p className="mt-2 text-sm text-basalt-600">Nothing in the catalog matches.</p>}
       </div>
       {found.data && found.data.items.length > 0 && (

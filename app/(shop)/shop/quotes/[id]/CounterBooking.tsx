@@ -63,7 +63,10 @@ export function CounterBooking({ quoteId, initial, bays }: { quoteId: string; in
               className="max-w-sm"
               value={bayId}
               onChange={(e) => setBayId(e.target.value)}
-              options={[{ value: "", label: "Any free bay" }, ...bays.map((b) => ({ value: b.id, label: `${b.name} (${BAY_KIND_LABEL[b.kind].toLowerCase()})` }))]}
+              options={[
+                { value: "", label: "Any free bay" },
+                ...bays.map((b) => ({ value: b.id, label: `${b.name} (${BAY_KIND_LABEL[b.kind].toLowerCase()})` })),
+              ]}
               hint="The list shows times with any free bay; a chosen bay must be free at the time picked."
             />
           )}
@@ -73,8 +76,15 @@ export function CounterBooking({ quoteId, initial, bays }: { quoteId: string; in
             actionLabel={(words) => (booking ? `Move to ${words}` : `Book ${words}`)}
             onPick={async (start) => {
               const body = { start, ...(bayId ? { bayId } : {}) };
-              const r = booking ? await api<{ booking: Booking }>(url, { method: "PUT", body }) : await api<{ booking: Booking }>(url, { body });
-              await after(r.booking, booking ? "Moved; the customer is e-mailed the updated calendar entry." : "Booked; the customer is e-mailed a confirmation with a calendar file.");
+              const r = booking
+                ? await api<{ booking: Booking }>(url, { method: "PUT", body })
+                : await api<{ booking: Booking }>(url, { body });
+              await after(
+                r.booking,
+                booking
+                  ? "Moved; the customer is e-mailed the updated calendar entry."
+                  : "Booked; the customer is e-mailed a confirmation with a calendar file.",
+              );
             }}
           />
           {booking && (

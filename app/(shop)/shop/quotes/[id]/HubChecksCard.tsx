@@ -9,12 +9,28 @@ import { ringLineDescription } from "@/lib/shop/quotes/hubFit";
  * The saved wheel lines against the vehicle's bolt pattern and hub bore. Where a bore is larger
  * than the hub, the counter can add a line for the hub-centric rings (price to be entered).
  */
-export function HubChecksCard({ checks, hubBoreMm, boltPattern, haveLine, onAddRings }: { checks: HubCheck[]; hubBoreMm: number | null; boltPattern: string; haveLine: (description: string) => boolean; onAddRings?: (description: string, quantity: number) => void }) {
-  const rings = checks.flatMap((c) => c.findings.flatMap((f) => (f.rings ? [{ description: ringLineDescription(f.rings), quantity: c.quantity }] : [])));
+export function HubChecksCard({
+  checks,
+  hubBoreMm,
+  boltPattern,
+  haveLine,
+  onAddRings,
+}: {
+  checks: HubCheck[];
+  hubBoreMm: number | null;
+  boltPattern: string;
+  haveLine: (description: string) => boolean;
+  onAddRings?: (description: string, quantity: number) => void;
+}) {
+  const rings = checks.flatMap((c) =>
+    c.findings.flatMap((f) => (f.rings ? [{ description: ringLineDescription(f.rings), quantity: c.quantity }] : [])),
+  );
   return (
     <Card>
       <h2 className="text-lg font-semibold">Wheel on the hub</h2>
-      <p className="mt-1 text-sm text-basalt-600">Vehicle: bolt pattern {boltPattern}, hub bore {hubBoreMm === null ? "not recorded" : `${hubBoreMm} mm`}.</p>
+      <p className="mt-1 text-sm text-basalt-600">
+        Vehicle: bolt pattern {boltPattern}, hub bore {hubBoreMm === null ? "not recorded" : `${hubBoreMm} mm`}.
+      </p>
       <HubChecksList checks={checks} />
       {onAddRings &&
         rings

@@ -8,7 +8,13 @@ import { summarize } from "@/lib/shop/quotes/fitment";
 import { QuoteEditor } from "./QuoteEditor";
 import type { QuoteDetail as Detail } from "@/lib/shop/quotes/api";
 
-vi.mock("next/link", () => ({ default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => <a href={href} {...rest}>{children}</a> }));
+vi.mock("next/link", () => ({
+  default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => (
+    <a href={href} {...rest}>
+      {children}
+    </a>
+  ),
+}));
 afterEach(() => {
   cleanup();
   vi.unstubAllGlobals();
@@ -16,18 +22,62 @@ afterEach(() => {
 });
 
 const ID = "d0000000-0000-4000-8000-0000000000aa";
-const fit = summarize({ boltPattern: "6x5.5", tireSize: "265/70R17", wheel: { diameterIn: 17, widthIn: 8, offsetMm: 25 } }, "35x12.50R17LT", { diameterIn: 17, widthIn: 9, offsetMm: -12, beadlock: false });
+const fit = summarize(
+  { boltPattern: "6x5.5", tireSize: "265/70R17", wheel: { diameterIn: 17, widthIn: 8, offsetMm: 25 } },
+  "35x12.50R17LT",
+  { diameterIn: 17, widthIn: 9, offsetMm: -12, beadlock: false },
+);
 const line = (n: number, over: Partial<Detail["lines"][number]> = {}): Detail["lines"][number] => ({
-  id: `l000000${n}-0000-4000-8000-000000000000`, position: n, kind: "custom", unit: "each", catalogItemId: null, sku: "", description: `Line ${n}`,
-  quantity: 1, unitPriceCents: 1000, discountCents: 0, taxable: false, lineTotalCents: 1000, wheelBoltPattern: null, wheelCenterBoreMm: null, ...over,
+  id: `l000000${n}-0000-4000-8000-000000000000`,
+  position: n,
+  kind: "custom",
+  unit: "each",
+  catalogItemId: null,
+  sku: "",
+  description: `Line ${n}`,
+  quantity: 1,
+  unitPriceCents: 1000,
+  discountCents: 0,
+  taxable: false,
+  lineTotalCents: 1000,
+  wheelBoltPattern: null,
+  wheelCenterBoreMm: null,
+  ...over,
 });
-function detail(over: Partial<Detail["quote"]> = {}, lines = [line(1), line(2, { unit: "hour", description: "Labour", unitPriceCents: 12500, lineTotalCents: 12500 })]): Detail {
+function detail(
+  over: Partial<Detail["quote"]> = {},
+  lines = [line(1), line(2, { unit: "hour", description: "Labour", unitPriceCents: 12500, lineTotalCents: 12500 })],
+): Detail {
   return {
     quote: {
-      id: ID, number: 1042, customerId: "c", vehicleId: null, createdBy: null, status: "draft", vehicleDescription: "Test pickup", boltPattern: "6x5.5",
-      currentSetup: { tire: "265/70R17", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 }, spacerMm: 0 }, axleRatio: null, hubBoreMm: 108, tireItemId: null,
-      wheelItemId: null, wheelQty: 4, fitment: fit, discountCents: 0, taxRateBp: 825, depositPct: 25, subtotalCents: 13500, taxableCents: 0, taxCents: 0,
-      totalCents: 13500, depositCents: 3375, notes: "", validUntil: null, createdAt: "2026-12-01T10:00:00.000Z", updatedAt: "2026-12-01T10:00:00.123Z", ...over,
+      id: ID,
+      number: 1042,
+      customerId: "c",
+      vehicleId: null,
+      createdBy: null,
+      status: "draft",
+      vehicleDescription: "Test pickup",
+      boltPattern: "6x5.5",
+      currentSetup: { tire: "265/70R17", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 }, spacerMm: 0 },
+      axleRatio: null,
+      hubBoreMm: 108,
+      tireItemId: null,
+      wheelItemId: null,
+      wheelQty: 4,
+      fitment: fit,
+      discountCents: 0,
+      taxRateBp: 825,
+      depositPct: 25,
+      subtotalCents: 13500,
+      taxableCents: 0,
+      taxCents: 0,
+      totalCents: 13500,
+      depositCents: 3375,
+      notes: "",
+      validUntil: null,
+      createdAt: "2026-12-01T10:00:00.000Z",
+      updatedAt: "2026-12-01T10:00:00.123Z",
+      ...over,
     },
     lines,
     events: [],
@@ -86,8 +136,13 @@ describe("the quote editor's unsaved changes", () => {
   });
 
   it("Send saves the pending edits first, then sends the version it saved", async () => {
-    const saved = detail({ updatedAt: "2026-12-01T10:05:00.456Z", subtotalCents: 15000 }, [line(1, { quantity: 2, lineTotalCents: 2000 }), line(2, { unit: "hour", description: "Labour", quantity: 1.5, unitPriceCents: 12500, lineTotalCents: 18750 })]);
-    const calls = server((c) => (c.method === "PUT" ? { status: 200, body: saved } : { status: 200, body: { ...saved, quote: { ...saved.quote, status: "sent" } } }));
+    const saved = detail({ updatedAt: "2026-12-01T10:05:00.456Z", subtotalCents: 15000 }, [
+      line(1, { quantity: 2, lineTotalCents: 2000 }),
+      line(2, { unit: "hour", description: "Labour", quantity: 1.5, unitPriceCents: 12500, lineTotalCents: 18750 }),
+    ]);
+    const calls = server((c) =>
+      c.method === "PUT" ? { status: 200, body: saved } : { status: 200, body: { ...saved, quote: { ...saved.quote, status: "sent" } } },
+    );
     const user = userEvent.setup();
     renderEditor();
     await user.clear(screen.getByLabelText("Quantity of line 2 (hours)"));
@@ -101,7 +156,15 @@ describe("the quote editor's unsaved changes", () => {
 
   it("does not send when the edits cannot be saved, and names the field as the screen does", async () => {
     const calls = server((c) =>
-      c.method === "PUT" ? { status: 422, body: { error: "Some lines need attention.", fieldErrors: { "lines.1.discountCents": ["A line's discount cannot exceed the line's amount."] } } } : { status: 200, body: {} },
+      c.method === "PUT"
+        ? {
+            status: 422,
+            body: {
+              error: "Some lines need attention.",
+              fieldErrors: { "lines.1.discountCents": ["A line's discount cannot exceed the line's amount."] },
+            },
+          }
+        : { status: 200, body: {} },
     );
     const user = userEvent.setup();
     renderEditor();
@@ -119,7 +182,9 @@ describe("the quote editor's unsaved changes", () => {
     await user.clear(screen.getByLabelText("Discount of line 2"));
     await user.type(screen.getByLabelText("Discount of line 2"), "500");
     await user.click(screen.getByRole("button", { name: /send to customer/i }));
-    await waitFor(() => expect(screen.getByRole("alert").textContent).toContain("Line 2 — discount: A line's discount cannot exceed the line's amount."));
+    await waitFor(() =>
+      expect(screen.getByRole("alert").textContent).toContain("Line 2 — discount: A line's discount cannot exceed the line's amount."),
+    );
     expect(screen.getByRole("alert").textContent).not.toMatch(/lines\.1|Cents/);
     expect(calls.map((c) => c.method)).toEqual(["PUT"]);
     expect(screen.getByTestId("unsaved")).toBeTruthy();
@@ -127,11 +192,32 @@ describe("the quote editor's unsaved changes", () => {
 });
 
 describe("the quote editor's catalog and figures", () => {
-  const tpms = { id: "a0000000-0000-4000-8000-0000000000f1", kind: "service", sku: "SV-TPMS", description: "TPMS sensor service", priceCents: 1800, serviceType: "tpms", serviceUnit: "per_wheel", boltPattern: null, centerBoreMm: null };
-  const narrow = { id: "a0000000-0000-4000-8000-0000000000f2", kind: "wheel", sku: "WH-1061", description: "Forged 17x9 106.1 bore", priceCents: 28900, boltPattern: "6x139.7", centerBoreMm: 106.1, serviceUnit: null };
+  const tpms = {
+    id: "a0000000-0000-4000-8000-0000000000f1",
+    kind: "service",
+    sku: "SV-TPMS",
+    description: "TPMS sensor service",
+    priceCents: 1800,
+    serviceType: "tpms",
+    serviceUnit: "per_wheel",
+    boltPattern: null,
+    centerBoreMm: null,
+  };
+  const narrow = {
+    id: "a0000000-0000-4000-8000-0000000000f2",
+    kind: "wheel",
+    sku: "WH-1061",
+    description: "Forged 17x9 106.1 bore",
+    priceCents: 28900,
+    boltPattern: "6x139.7",
+    centerBoreMm: 106.1,
+    serviceUnit: null,
+  };
 
   it("adds any catalog item, a TPMS service included, as a line with the wheel count", async () => {
-    const calls = server((c) => (c.url.startsWith("/api/shop/catalog") ? { status: 200, body: { items: [tpms], total: 1 } } : { status: 500, body: {} }));
+    const calls = server((c) =>
+      c.url.startsWith("/api/shop/catalog") ? { status: 200, body: { items: [tpms], total: 1 } } : { status: 500, body: {} },
+    );
     const user = userEvent.setup();
     renderEditor();
     await user.type(screen.getByRole("searchbox", { name: "Add from the catalog" }), "TPMS");

@@ -20,7 +20,6 @@ import { QuoteLinesTable } from "./QuoteLinesTable";
 import { QuoteTotalsCard } from "./QuoteTotalsCard";
 import type { QuoteDetail as Detail } from "@/lib/shop/quotes/api";
 
-
 const LEAVE = "This quote has changes that are not saved. Leave without saving them?";
 
 /** Problems from the browser's own checks or the server, in the screen's words. */
@@ -30,7 +29,11 @@ class Problems extends Error {
   }
 }
 const problemsOf = (e: unknown): string[] =>
-  e instanceof Problems ? e.list : e instanceof ApiError && e.body.fieldErrors ? describeFieldErrors(e.body.fieldErrors) : [(e as Error).message];
+  e instanceof Problems
+    ? e.list
+    : e instanceof ApiError && e.body.fieldErrors
+      ? describeFieldErrors(e.body.fieldErrors)
+      : [(e as Error).message];
 
 export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; labourRateCents: number }) {
   const [detail, setDetail] = useState(initial);
@@ -74,7 +77,10 @@ export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; lab
         try {
           seen = (await saveNow()).quote.updatedAt;
         } catch (e) {
-          throw new Problems(["Not sent: your changes could not be saved, so nothing went to the customer. Fix these and send again.", ...problemsOf(e)]);
+          throw new Problems([
+            "Not sent: your changes could not be saved, so nothing went to the customer. Fix these and send again.",
+            ...problemsOf(e),
+          ]);
         }
       }
       return api<Detail>(`/api/shop/quotes/${q.id}/send`, { body: { seenUpdatedAt: seen } });
@@ -112,10 +118,14 @@ export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; lab
         lead={
           <>
             <Badge tone={statusTone(q.status)}>{STATUS_LABEL[q.status]}</Badge>{" "}
-            <span data-testid="quote-status" className="sr-only">{STATUS_LABEL[q.status]}</span>
+            <span data-testid="quote-status" className="sr-only">
+              {STATUS_LABEL[q.status]}
+            </span>
             {dirty && (
               <>
-                <Badge tone="tight"><span data-testid="unsaved">Unsaved changes</span></Badge>{" "}
+                <Badge tone="tight">
+                  <span data-testid="unsaved">Unsaved changes</span>
+                </Badge>{" "}
               </>
             )}
             {detail.customer.name} · {q.vehicleDescription}
@@ -124,15 +134,29 @@ export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; lab
         }
         actions={
           <div className="flex flex-wrap gap-2">
-            <a className={buttonClass("secondary")} href={`/api/shop/quotes/${q.id}/pdf`}>PDF{dirty && <span className="sr-only"> (saved version)</span>}</a>
+            <a className={buttonClass("secondary")} href={`/api/shop/quotes/${q.id}/pdf`}>
+              PDF{dirty && <span className="sr-only"> (saved version)</span>}
+            </a>
             {(q.status === "draft" || q.status === "sent") && (
               <Button pending={send.isPending} disabled={save.isPending} onClick={() => send.mutate()}>
                 {q.status === "sent" ? "Send again" : dirty ? "Save and send to customer" : "Send to customer"}
               </Button>
             )}
-            {q.status === "sent" && <Button variant="secondary" pending={move.isPending} onClick={() => move.mutate("draft")}>Back to draft</Button>}
-            {(q.status === "sent" || q.status === "accepted") && <Button variant="secondary" pending={move.isPending} onClick={() => move.mutate("declined")}>Mark declined</Button>}
-            {q.status === "deposit_paid" && <Button pending={move.isPending} onClick={() => move.mutate("installed")}>Mark installed</Button>}
+            {q.status === "sent" && (
+              <Button variant="secondary" pending={move.isPending} onClick={() => move.mutate("draft")}>
+                Back to draft
+              </Button>
+            )}
+            {(q.status === "sent" || q.status === "accepted") && (
+              <Button variant="secondary" pending={move.isPending} onClick={() => move.mutate("declined")}>
+                Mark declined
+              </Button>
+            )}
+            {q.status === "deposit_paid" && (
+              <Button pending={move.isPending} onClick={() => move.mutate("installed")}>
+                Mark installed
+              </Button>
+            )}
           </div>
         }
       />
@@ -140,7 +164,11 @@ export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; lab
         {notice && <Alert tone="success">{notice}</Alert>}
         {problems && (
           <Alert tone="error" title={problems.title}>
-            <ul className="list-disc pl-5">{problems.list.map((p) => <li key={p}>{p}</li>)}</ul>
+            <ul className="list-disc pl-5">
+              {problems.list.map((p) => (
+                <li key={p}>{p}</li>
+              ))}
+            </ul>
           </Alert>
         )}
       </div>
@@ -152,7 +180,12 @@ export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; lab
             {!draft && <p className="text-sm text-basalt-600">Lines can be edited while the quote is a draft.</p>}
             {/* relative: the table's screen-reader-only labels are absolutely positioned; without a
                 containing block here they escape the scrolling region and widen the page. */}
-            <div className="relative overflow-x-auto" tabIndex={0} role="region" aria-label="Quote lines (scrolls sideways on a narrow screen)">
+            <div
+              className="relative overflow-x-auto"
+              tabIndex={0}
+              role="region"
+              aria-label="Quote lines (scrolls sideways on a narrow screen)"
+            >
               <QuoteLinesTable
                 lines={form.lines}
                 saved={detail.lines}
@@ -164,19 +197,36 @@ export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; lab
             {draft && (
               <>
                 <div className="mt-3 flex flex-wrap items-end gap-3">
-                  <Button variant="secondary" onClick={() => setLines((ls) => [...ls, labourLine(labourRateCents)])}>Add a labour line</Button>
+                  <Button variant="secondary" onClick={() => setLines((ls) => [...ls, labourLine(labourRateCents)])}>
+                    Add a labour line
+                  </Button>
                   <label className="flex flex-col gap-1 text-sm font-medium">
                     Quote discount ($)
-                    <input inputMode="decimal" className="w-28 rounded-lg border border-basalt-300 px-3 py-2" value={form.discount} onChange={(e) => setForm((f) => ({ ...f, discount: e.target.value }))} />
+                    <input
+                      inputMode="decimal"
+                      className="w-28 rounded-lg border border-basalt-300 px-3 py-2"
+                      value={form.discount}
+                      onChange={(e) => setForm((f) => ({ ...f, discount: e.target.value }))}
+                    />
                   </label>
                   <label className="flex min-w-0 flex-1 basis-56 flex-col gap-1 text-sm font-medium">
                     Notes for the customer
-                    <input className="rounded-lg border border-basalt-300 px-3 py-2" value={form.notes} onChange={(e) => setForm((f) => ({ ...f, notes: e.target.value }))} />
+                    <input
+                      className="rounded-lg border border-basalt-300 px-3 py-2"
+                      value={form.notes}
+                      onChange={(e) => setForm((f) => ({ ...f, notes: e.target.value }))}
+                    />
                   </label>
-                  <Button pending={save.isPending} disabled={send.isPending} onClick={() => save.mutate()}>Save lines</Button>
-                  <span role="status" className="text-sm text-basalt-600">{dirty ? "Unsaved changes" : "All changes saved"}</span>
+                  <Button pending={save.isPending} disabled={send.isPending} onClick={() => save.mutate()}>
+                    Save lines
+                  </Button>
+                  <span role="status" className="text-sm text-basalt-600">
+                    {dirty ? "Unsaved changes" : "All changes saved"}
+                  </span>
                 </div>
-                <p className="mt-2 text-xs text-basalt-600">Hourly labour takes part hours: 1.5, 1 1/2, 1½ or 1:30 (to the hundredth of an hour).</p>
+                <p className="mt-2 text-xs text-basalt-600">
+                  Hourly labour takes part hours: 1.5, 1 1/2, 1½ or 1:30 (to the hundredth of an hour).
+                </p>
                 <CatalogItemPicker
                   vehicle={{ boltPattern: q.boltPattern, hubBoreMm: q.hubBoreMm }}
                   onAdd={(item) => {
@@ -200,9 +250,20 @@ export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; lab
           />
           <Card>
             <h2 className="text-lg font-semibold">Customer</h2>
-            <p className="mt-1 break-words text-sm">{detail.customer.name}<br />{detail.customer.phone}<br />{detail.customer.email || <em>no e-mail — add one to send</em>}</p>
+            <p className="mt-1 break-words text-sm">
+              {detail.customer.name}
+              <br />
+              {detail.customer.phone}
+              <br />
+              {detail.customer.email || <em>no e-mail — add one to send</em>}
+            </p>
             <h2 className="mt-4 text-lg font-semibold">Vehicle</h2>
-            <p className="mt-1 text-sm">{q.vehicleDescription}<br />Bolt pattern {q.boltPattern}{q.hubBoreMm !== null && <>, hub bore {q.hubBoreMm} mm</>}</p>
+            <p className="mt-1 text-sm">
+              {q.vehicleDescription}
+              <br />
+              Bolt pattern {q.boltPattern}
+              {q.hubBoreMm !== null && <>, hub bore {q.hubBoreMm} mm</>}
+            </p>
           </Card>
           <Card>
             <h2 className="text-lg font-semibold">History</h2>
@@ -214,7 +275,9 @@ export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; lab
                 </li>
               ))}
             </ol>
-            <Link href="/shop/quotes" className="mt-3 inline-block text-sm text-ember-700 underline">All quotes</Link>
+            <Link href="/shop/quotes" className="mt-3 inline-block text-sm text-ember-700 underline">
+              All quotes
+            </Link>
           </Card>
         </div>
       </div>

@@ -13,14 +13,35 @@ const input = "w-full rounded border border-basalt-300 px-2 py-1";
  * table keeps its width and scrolls inside its focusable region (QuoteEditor) on a narrow screen
  * instead of widening the page.
  */
-export function QuoteLinesTable({ lines, saved, editable, onChange, onRemove }: { lines: EditLine[]; saved: Detail["lines"]; editable: boolean; onChange: (i: number, patch: Partial<EditLine>) => void; onRemove: (i: number) => void }) {
+export function QuoteLinesTable({
+  lines,
+  saved,
+  editable,
+  onChange,
+  onRemove,
+}: {
+  lines: EditLine[];
+  saved: Detail["lines"];
+  editable: boolean;
+  onChange: (i: number, patch: Partial<EditLine>) => void;
+  onRemove: (i: number) => void;
+}) {
   const columns: TableColumn<EditLine>[] = [
     {
       id: "description",
       header: "Description",
       cell: (l, i) => (
         <>
-          {editable ? <input aria-label={`Description of line ${i + 1}`} className={input} value={l.description} onChange={(e) => onChange(i, { description: e.target.value })} /> : l.description}
+          {editable ? (
+            <input
+              aria-label={`Description of line ${i + 1}`}
+              className={input}
+              value={l.description}
+              onChange={(e) => onChange(i, { description: e.target.value })}
+            />
+          ) : (
+            l.description
+          )}
           {l.sku && <span className="block text-xs text-basalt-600">{l.sku}</span>}
         </>
       ),
@@ -39,7 +60,11 @@ export function QuoteLinesTable({ lines, saved, editable, onChange, onRemove }: 
               value={l.quantity}
               onChange={(e) => onChange(i, { quantity: e.target.value })}
             />
-            {hours && <span aria-hidden className="text-basalt-600">h</span>}
+            {hours && (
+              <span aria-hidden className="text-basalt-600">
+                h
+              </span>
+            )}
           </span>
         ) : (
           formatQuantity(Number(l.quantity), l.unit)
@@ -50,18 +75,47 @@ export function QuoteLinesTable({ lines, saved, editable, onChange, onRemove }: 
       id: "unitPrice",
       header: "Unit $",
       cell: (l, i) =>
-        editable ? <input aria-label={`Unit price of line ${i + 1}`} inputMode="decimal" className="w-24 rounded border border-basalt-300 px-2 py-1" value={l.unitPrice} onChange={(e) => onChange(i, { unitPrice: e.target.value })} /> : l.unitPrice,
+        editable ? (
+          <input
+            aria-label={`Unit price of line ${i + 1}`}
+            inputMode="decimal"
+            className="w-24 rounded border border-basalt-300 px-2 py-1"
+            value={l.unitPrice}
+            onChange={(e) => onChange(i, { unitPrice: e.target.value })}
+          />
+        ) : (
+          l.unitPrice
+        ),
     },
     {
       id: "discount",
       header: "Discount $",
       cell: (l, i) =>
-        editable ? <input aria-label={`Discount of line ${i + 1}`} inputMode="decimal" className="w-20 rounded border border-basalt-300 px-2 py-1" value={l.discount} onChange={(e) => onChange(i, { discount: e.target.value })} /> : l.discount,
+        editable ? (
+          <input
+            aria-label={`Discount of line ${i + 1}`}
+            inputMode="decimal"
+            className="w-20 rounded border border-basalt-300 px-2 py-1"
+            value={l.discount}
+            onChange={(e) => onChange(i, { discount: e.target.value })}
+          />
+        ) : (
+          l.discount
+        ),
     },
     {
       id: "taxable",
       header: "Tax",
-      cell: (l, i) => <input type="checkbox" aria-label={`Line ${i + 1} is taxable`} className="size-4 accent-ember-600" disabled={!editable} checked={l.taxable} onChange={(e) => onChange(i, { taxable: e.target.checked })} />,
+      cell: (l, i) => (
+        <input
+          type="checkbox"
+          aria-label={`Line ${i + 1} is taxable`}
+          className="size-4 accent-ember-600"
+          disabled={!editable}
+          checked={l.taxable}
+          onChange={(e) => onChange(i, { taxable: e.target.checked })}
+        />
+      ),
     },
     {
       id: "amount",

@@ -19,7 +19,9 @@ export default async function QuotePage({ params }: { params: Promise<{ id: stri
   const detail = await pageGuard(quoteQueries.getQuoteDetail(quoteScopeOf(caller), id));
   const shop = await shopQueries.findShop(detail.quote.shop_id);
   const q = detail.quote;
-  const [booking, setup] = canBook(q) ? await Promise.all([bookingQueries.liveBooking(q), bookingQueries.getSetup(q.shop_id)]) : [null, null];
+  const [booking, setup] = canBook(q)
+    ? await Promise.all([bookingQueries.liveBooking(q), bookingQueries.getSetup(q.shop_id)])
+    : [null, null];
   return (
     <>
       <QuoteEditor initial={quoteDetailDto(detail)} labourRateCents={shop?.labour_rate_cents ?? 0} />

@@ -45,12 +45,20 @@ export function QuoteBuilder() {
     },
     onSuccess: (r) => router.push(`/shop/quotes/${r.id}`),
     // The server's field errors in the screen's words ("Wheel: …"), never its request paths.
-    onError: (e) => setFailure(e instanceof ApiError ? (describeFieldErrors(e.body.fieldErrors).join(" ") || e.message) : (e as Error).message),
+    onError: (e) =>
+      setFailure(e instanceof ApiError ? describeFieldErrors(e.body.fieldErrors).join(" ") || e.message : (e as Error).message),
   });
 
   return (
     <div className="flex flex-col gap-5">
-      <CustomerStep customer={customer} onPick={(c) => { setCustomer(c); setSavedVehicle(null); setCandidates(null); }} />
+      <CustomerStep
+        customer={customer}
+        onPick={(c) => {
+          setCustomer(c);
+          setSavedVehicle(null);
+          setCandidates(null);
+        }}
+      />
       {customer && (
         <VehicleStep
           customerId={customer.id}
@@ -58,18 +66,24 @@ export function QuoteBuilder() {
           onSaved={setSavedVehicle}
           saveVehicle={saveVehicle}
           onSaveVehicle={setSaveVehicle}
-          onCandidates={(v, c) => { setVehicle(v); setCandidates(c); setPick(null); }}
+          onCandidates={(v, c) => {
+            setVehicle(v);
+            setCandidates(c);
+            setPick(null);
+          }}
         />
       )}
       {candidates && (
         <Card>
           <h2 className="text-lg font-semibold">3. Pick a tire and wheel</h2>
           <p className="mt-1 text-sm text-basalt-600">
-            {candidates.wheelsFitting} wheels in the catalog fit the bolt pattern; {candidates.pairs} tire and wheel pairs mount. Ranked by the comparison with the
-            current setup: fewest clearance warnings first, then the larger diameter gain.
+            {candidates.wheelsFitting} wheels in the catalog fit the bolt pattern; {candidates.pairs} tire and wheel pairs mount. Ranked by
+            the comparison with the current setup: fewest clearance warnings first, then the larger diameter gain.
           </p>
           {candidates.picks.length === 0 ? (
-            <Alert tone="warning" className="mt-3">Nothing in the catalog mounts on this bolt pattern. Check the pattern, or add wheels to the catalog.</Alert>
+            <Alert tone="warning" className="mt-3">
+              Nothing in the catalog mounts on this bolt pattern. Check the pattern, or add wheels to the catalog.
+            </Alert>
           ) : (
             <fieldset className="mt-3">
               <legend className="sr-only">Tire and wheel</legend>
@@ -80,28 +94,44 @@ export function QuoteBuilder() {
                   return (
                     <li key={key} className="py-3">
                       <label className="flex cursor-pointer gap-3">
-                        <input type="radio" name="pick" className="mt-1 size-4 accent-ember-600" checked={pick === key} onChange={() => setPick(key)} />
+                        <input
+                          type="radio"
+                          name="pick"
+                          className="mt-1 size-4 accent-ember-600"
+                          checked={pick === key}
+                          onChange={() => setPick(key)}
+                        />
                         <span className="grid flex-1 gap-2 text-sm md:grid-cols-[1.3fr_1.3fr_1fr]">
                           <span>
                             <span className="font-medium">{p.tire.description}</span>
-                            <span className="block text-basalt-600">{p.tire.tireSize} · {formatUsd(p.tire.priceCents)} · {p.tire.qtyOnHand ?? 0} on hand</span>
+                            <span className="block text-basalt-600">
+                              {p.tire.tireSize} · {formatUsd(p.tire.priceCents)} · {p.tire.qtyOnHand ?? 0} on hand
+                            </span>
                           </span>
                           <span>
                             <span className="font-medium">{p.wheel.description}</span>
                             <span className="block text-basalt-600">
-                              {s.planned.wheel} · {p.wheel.boltPattern}{p.wheel.centerBoreMm ? ` · bore ${p.wheel.centerBoreMm} mm` : ""} · {formatUsd(p.wheel.priceCents)} · {p.wheel.qtyOnHand ?? 0} on hand {p.wheel.beadlock && <Badge tone="ember">beadlock</Badge>}
+                              {s.planned.wheel} · {p.wheel.boltPattern}
+                              {p.wheel.centerBoreMm ? ` · bore ${p.wheel.centerBoreMm} mm` : ""} · {formatUsd(p.wheel.priceCents)} ·{" "}
+                              {p.wheel.qtyOnHand ?? 0} on hand {p.wheel.beadlock && <Badge tone="ember">beadlock</Badge>}
                             </span>
                           </span>
                           <span className="text-basalt-800">
                             <span className="block">Diameter {mmIn(s.diameterChangeMm)}</span>
                             <span className="block">Poke {mmIn(s.outerPokeChangeMm)}</span>
                             <span className="block">Inner room {mmIn(s.innerClearanceChangeMm)}</span>
-                            {s.regear && <span className="block">Regear: {s.regear.axleRatio.toFixed(2)} → {s.regear.suggestedRatio.toFixed(2)}</span>}
+                            {s.regear && (
+                              <span className="block">
+                                Regear: {s.regear.axleRatio.toFixed(2)} → {s.regear.suggestedRatio.toFixed(2)}
+                              </span>
+                            )}
                           </span>
                           {s.warnings.length > 0 && (
                             <span className="md:col-span-3">
                               {s.warnings.map((w) => (
-                                <span key={w} className="mr-2 mt-1 inline-block rounded bg-tight-100 px-2 py-0.5 text-xs text-tight-800">{w}</span>
+                                <span key={w} className="mr-2 mt-1 inline-block rounded bg-tight-100 px-2 py-0.5 text-xs text-tight-800">
+                                  {w}
+                                </span>
                               ))}
                             </span>
                           )}
@@ -115,11 +145,28 @@ export function QuoteBuilder() {
           )}
           <fieldset className="mt-4 flex flex-wrap items-center gap-4 text-sm">
             <legend className="mb-1 font-medium">Quantity</legend>
-            <label className="flex items-center gap-2"><input type="radio" name="qty" className="accent-ember-600" checked={quantity === 4} onChange={() => setQuantity(4)} /> 4</label>
-            <label className="flex items-center gap-2"><input type="radio" name="qty" className="accent-ember-600" checked={quantity === 5} onChange={() => setQuantity(5)} /> 5 (with a matching spare)</label>
+            <label className="flex items-center gap-2">
+              <input type="radio" name="qty" className="accent-ember-600" checked={quantity === 4} onChange={() => setQuantity(4)} /> 4
+            </label>
+            <label className="flex items-center gap-2">
+              <input type="radio" name="qty" className="accent-ember-600" checked={quantity === 5} onChange={() => setQuantity(5)} /> 5
+              (with a matching spare)
+            </label>
           </fieldset>
-          <div aria-live="assertive" className="mt-3">{failure && <Alert tone="error">{failure}</Alert>}</div>
-          <Button className="mt-3" disabled={!pick} pending={create.isPending} onClick={() => { setFailure(null); create.mutate(); }}>Create draft quote</Button>
+          <div aria-live="assertive" className="mt-3">
+            {failure && <Alert tone="error">{failure}</Alert>}
+          </div>
+          <Button
+            className="mt-3"
+            disabled={!pick}
+            pending={create.isPending}
+            onClick={() => {
+              setFailure(null);
+              create.mutate();
+            }}
+          >
+            Create draft quote
+          </Button>
         </Card>
       )}
     </div>

@@ -41,7 +41,9 @@ export function VehicleStep(props: {
     try {
       props.onCandidates(v, await api<Candidates>("/api/shop/fitment/candidates", { body: v }));
     } catch (err) {
-      setFailure(applyFieldErrors(err, setError, ["description", "boltPattern", "hubBoreMm", ...setupFieldNames("currentSetup"), "axleRatio"]));
+      setFailure(
+        applyFieldErrors(err, setError, ["description", "boltPattern", "hubBoreMm", ...setupFieldNames("currentSetup"), "axleRatio"]),
+      );
     }
   });
   const applySaved = (v: CustomerVehicle) => {
@@ -62,26 +64,53 @@ export function VehicleStep(props: {
         <div className="mt-2 flex flex-wrap gap-2 text-sm">
           <span className="self-center text-basalt-600">Saved:</span>
           {saved.data.map((v) => (
-            <Button key={v.id} variant={props.savedVehicle === v.id ? "primary" : "secondary"} className="min-h-8 py-1" onClick={() => applySaved(v)}>
+            <Button
+              key={v.id}
+              variant={props.savedVehicle === v.id ? "primary" : "secondary"}
+              className="min-h-8 py-1"
+              onClick={() => applySaved(v)}
+            >
               {v.description} ({v.currentSetup.tire})
             </Button>
           ))}
         </div>
       )}
       <form onSubmit={onFind} onChange={edited} noValidate className="mt-3 grid gap-3 sm:grid-cols-3">
-        <div aria-live="assertive" className="sm:col-span-3">{failure && <Alert tone="error">{failure}</Alert>}</div>
+        <div aria-live="assertive" className="sm:col-span-3">
+          {failure && <Alert tone="error">{failure}</Alert>}
+        </div>
         <TextField label="Vehicle" hint="e.g. 2016 half-ton pickup" {...register("description")} error={e.description?.message} />
         <TextField label="Bolt pattern" hint="e.g. 6x5.5 or 6x139.7" {...register("boltPattern")} error={e.boltPattern?.message} />
-        <TextField label="Hub bore (mm)" inputMode="decimal" hint="Optional; each wheel's centre bore is checked against it" {...register("hubBoreMm")} error={e.hubBoreMm?.message} />
+        <TextField
+          label="Hub bore (mm)"
+          inputMode="decimal"
+          hint="Optional; each wheel's centre bore is checked against it"
+          {...register("hubBoreMm")}
+          error={e.hubBoreMm?.message}
+        />
         <div className="sm:col-span-3">
           <SetupFields form={form} name="currentSetup" legend="Tires and wheels on it now" spacer={false} />
         </div>
-        <TextField label="Axle ratio (optional)" inputMode="decimal" hint="For the regear suggestion; 3.73 assumed if empty" {...register("axleRatio")} error={e.axleRatio?.message} />
+        <TextField
+          label="Axle ratio (optional)"
+          inputMode="decimal"
+          hint="For the regear suggestion; 3.73 assumed if empty"
+          {...register("axleRatio")}
+          error={e.axleRatio?.message}
+        />
         <label className="flex items-center gap-2 self-center text-sm sm:col-span-3">
-          <input type="checkbox" className="size-4 accent-ember-600" checked={props.saveVehicle && !props.savedVehicle} disabled={!!props.savedVehicle} onChange={(ev) => props.onSaveVehicle(ev.target.checked)} />
+          <input
+            type="checkbox"
+            className="size-4 accent-ember-600"
+            checked={props.saveVehicle && !props.savedVehicle}
+            disabled={!!props.savedVehicle}
+            onChange={(ev) => props.onSaveVehicle(ev.target.checked)}
+          />
           Save this vehicle to the customer
         </label>
-        <Button type="submit" pending={formState.isSubmitting} className="justify-self-start">Find fitments</Button>
+        <Button type="submit" pending={formState.isSubmitting} className="justify-self-start">
+          Find fitments
+        </Button>
       </form>
     </Card>
   );

@@ -20,7 +20,10 @@ const ANSWER = {
  * counts every request alike, so it tells nothing about accounts either.
  */
 export const POST = route({ access: "public", body: forgotPasswordSchema }, async ({ req, body }) => {
-  await rateLimitQueries.consumeOrRefuse([{ spec: RATE_LIMITS.forgotPerAddress, key: clientAddress(req.headers) }], "Too many reset requests from your network.");
+  await rateLimitQueries.consumeOrRefuse(
+    [{ spec: RATE_LIMITS.forgotPerAddress, key: clientAddress(req.headers) }],
+    "Too many reset requests from your network.",
+  );
   const email = body.email.trim().toLowerCase();
   afterResponse("password reset mail", () => mailResetLink(email));
   return ANSWER;

@@ -6,6 +6,10 @@ import { SHOP_ANY, shopIdOf } from "@/lib/shop/queries";
 export const GET = route({ access: SHOP_ANY }, async ({ caller }) => {
   const csv = catalogToCsv(await catalogQueries.allCatalogItems(shopIdOf(caller)));
   return new Response("\uFEFF" + csv, {
-    headers: { "Content-Type": "text/csv; charset=utf-8", "Content-Disposition": 'attachment; filename="catalog.csv"', "Cache-Control": "no-store" },
+    headers: {
+      "Content-Type": "text/csv; charset=utf-8",
+      "Content-Disposition": 'attachment; filename="catalog.csv"',
+      "Cache-Control": "no-store",
+    },
   });
 });

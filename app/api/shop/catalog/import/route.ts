@@ -8,7 +8,12 @@ import { SHOP_OWNER, shopIdOf } from "@/lib/shop/queries";
 
 const MAX_ERRORS_SHOWN = 500;
 /** The picked file's name, kept for the import's record: a long one is cut, never a reason to refuse the upload. */
-const FILENAME = z.object({ filename: z.string().transform((f) => f.slice(0, 200)).optional() });
+const FILENAME = z.object({
+  filename: z
+    .string()
+    .transform((f) => f.slice(0, 200))
+    .optional(),
+});
 
 /**
  * Step 1 of an import: the CSV file as the request body → a preview with a row-by-row report.
@@ -21,7 +26,9 @@ export const POST = route({ access: SHOP_OWNER, query: FILENAME }, async ({ call
   const report = parseCatalogCsv(decoded.text);
   if (report.fileErrors.length) throw new InvalidError(report.fileErrors.join(" "), undefined, { fileErrors: report.fileErrors });
   if (report.total === 0) throw new InvalidError("The file has a header row but no items.");
-  const staged = report.items.length ? await catalogQueries.stageImport(shopIdOf(caller), caller.userId, query.filename ?? "", report) : null;
+  const staged = report.items.length
+    ? await catalogQueries.stageImport(shopIdOf(caller), caller.userId, query.filename ?? "", report)
+    : null;
   return {
     importId: staged?.id ?? null,
     total: report.total,

@@ -13,7 +13,15 @@ export const POST = route({ access: SHOP_ANY, body: counterVehicleSchema }, asyn
   const ranked = rankPicks(
     { boltPattern: v.boltPattern, tireSize: v.tireSize, wheel: v.wheel, axleRatio: v.axleRatio, hubBoreMm: v.hubBoreMm },
     tires.map((t) => ({ id: t.id, size: t.tire_size! })),
-    wheels.map((w) => ({ id: w.id, diameterIn: w.wheel_diameter_in!, widthIn: w.wheel_width_in!, offsetMm: w.wheel_offset_mm!, boltPattern: w.bolt_pattern!, beadlock: w.beadlock, centerBoreMm: w.center_bore_mm })),
+    wheels.map((w) => ({
+      id: w.id,
+      diameterIn: w.wheel_diameter_in!,
+      widthIn: w.wheel_width_in!,
+      offsetMm: w.wheel_offset_mm!,
+      boltPattern: w.bolt_pattern!,
+      beadlock: w.beadlock,
+      centerBoreMm: w.center_bore_mm,
+    })),
     40,
   );
   const byId = new Map([...tires, ...wheels].map((i) => [i.id, stockItemDto(i)]));

@@ -6,11 +6,17 @@ import { SHOP_ANY } from "@/lib/shop/queries";
 import { quoteScopeOf } from "@/lib/shop/quotes/queries";
 
 const params = z.object({ id: z.uuid() });
-const actorOf = (caller: { userId: string; name: string; email: string }) => ({ userId: caller.userId, label: caller.name || caller.email });
+const actorOf = (caller: { userId: string; name: string; email: string }) => ({
+  userId: caller.userId,
+  label: caller.name || caller.email,
+});
 
 /** The counter books the install for a quote whose deposit is paid. */
 export const POST = route({ access: SHOP_ANY, params, body: bookingRequestSchema, idempotent: true }, async ({ caller, params, body }) =>
-  json({ booking: await bookingQueries.bookInstall({ by: "staff", scope: quoteScopeOf(caller), quoteId: params.id }, body, actorOf(caller)) }, 201),
+  json(
+    { booking: await bookingQueries.bookInstall({ by: "staff", scope: quoteScopeOf(caller), quoteId: params.id }, body, actorOf(caller)) },
+    201,
+  ),
 );
 
 /** Moves the live booking to another start (and bay); the customer gets the updated calendar entry. */
@@ -19,4 +25,6 @@ export const PUT = route({ access: SHOP_ANY, params, body: bookingRequestSchema 
 }));
 
 /** Cancels the live booking; the customer's calendar entry is withdrawn. */
-export const DELETE = route({ access: SHOP_ANY, params }, async ({ caller, params }) => ({ booking: await bookingQueries.cancelInstall(quoteScopeOf(caller), params.id, actorOf(caller)) }));
+export const DELETE = route({ access: SHOP_ANY, params }, async ({ caller, params }) => ({
+  booking: await bookingQueries.cancelInstall(quoteScopeOf(caller), params.id, actorOf(caller)),
+}));

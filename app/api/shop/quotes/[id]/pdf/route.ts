@@ -8,6 +8,10 @@ export const GET = route({ access: SHOP_ANY, params: z.object({ id: z.uuid() }) 
   const detail = await quoteQueries.getQuoteDetail(quoteScopeOf(caller), params.id);
   const pdf = await quoteSendQueries.renderQuotePdf(detail);
   return new Response(new Uint8Array(pdf), {
-    headers: { "Content-Type": "application/pdf", "Content-Disposition": `inline; filename="quote-Q-${detail.quote.number}.pdf"`, "Cache-Control": "no-store" },
+    headers: {
+      "Content-Type": "application/pdf",
+      "Content-Disposition": `inline; filename="quote-Q-${detail.quote.number}.pdf"`,
+      "Cache-Control": "no-store",
+    },
   });
 });
