@@ -25,6 +25,7 @@ import { decodeComparison, workspaceParam, workspaceUrl } from "@/lib/comparison
 import { type LinkProblem, problemText } from "@/lib/setup/url";
 import type { WorkspaceVehicle } from "@/lib/garage/types";
 import { CurrentInputContext } from "./currentInput";
+import { LoadPressurePanel } from "./LoadPressurePanel";
 import { SetupDraftFields } from "./SetupDraftFields";
 import { VehicleFields } from "./VehicleFields";
 
@@ -300,6 +301,7 @@ export function Workspace({
           </section>
           <SetupDetailTable result={result} prefs={prefs} />
         </div>
+        <LoadPressurePanel currentTire={s.good.current.tire} plannedTire={s.good.planned.tire} prefs={prefs} />
       </div>
     </CurrentInputContext>
   );
