@@ -144,7 +144,7 @@ export function readMeasure(entry: MeasureEntry, spec: MeasureSpec, prefs: Displ
 /** The text a value (kPa, kg, mm) is written with in a display choice, without the unit. */
 export function measureText(value: number, q: Quantity, prefs: DisplayPrefs): string {
   const unit = measureUnit(q, prefs);
-  if (unit === "in") return inchText(tidy(mmToIn(value)), prefs);
+  if (unit === "in" && prefs.lengths === "fraction") return inchText(tidy(mmToIn(value)), prefs);
   return plain(toUnit[unit](value), DECIMALS[unit]);
 }
 

@@ -26,6 +26,7 @@ import { type LinkProblem, problemText } from "@/lib/setup/url";
 import type { WorkspaceVehicle } from "@/lib/garage/types";
 import { CurrentInputContext } from "./currentInput";
 import { LoadPressurePanel } from "./LoadPressurePanel";
+import { TrailAnglesPanel } from "./TrailAnglesPanel";
 import { SetupDraftFields } from "./SetupDraftFields";
 import { VehicleFields } from "./VehicleFields";
 
@@ -302,6 +303,7 @@ export function Workspace({
           <SetupDetailTable result={result} prefs={prefs} />
         </div>
         <LoadPressurePanel currentTire={s.good.current.tire} plannedTire={s.good.planned.tire} prefs={prefs} />
+        <TrailAnglesPanel result={result} prefs={prefs} />
       </div>
     </CurrentInputContext>
   );
