@@ -25,6 +25,8 @@ import { decodeComparison, workspaceParam, workspaceUrl } from "@/lib/comparison
 import { type LinkProblem, problemText } from "@/lib/setup/url";
 import type { WorkspaceVehicle } from "@/lib/garage/types";
 import { CurrentInputContext } from "./currentInput";
+import { LoadPressurePanel } from "./LoadPressurePanel";
+import { TrailAnglesPanel } from "./TrailAnglesPanel";
 import { SetupDraftFields } from "./SetupDraftFields";
 import { VehicleFields } from "./VehicleFields";
 
@@ -300,6 +302,8 @@ export function Workspace({
           </section>
           <SetupDetailTable result={result} prefs={prefs} />
         </div>
+        <LoadPressurePanel currentTire={s.good.current.tire} plannedTire={s.good.planned.tire} prefs={prefs} />
+        <TrailAnglesPanel result={result} prefs={prefs} />
       </div>
     </CurrentInputContext>
   );

@@ -1,0 +1,193 @@
+"use client";
+import { useMemo, useState } from "react";
+import { Segmented } from "@/components/comparison/Segmented";
+import { TextField } from "@/components/ui/TextField";
+import type { DisplayPrefs } from "@/lib/comparisons/format";
+import { LOAD_FIELD_BOUNDS, type LoadErrors, type LoadField, type LoadLabels, planLoad } from "@/lib/comparisons/loadPlan";
+import { type MeasureSpec, measureUnit, readMeasure } from "@/lib/comparisons/measureEntry";
+import type { VehicleKind } from "@/lib/fitment";
+import { AiredDownGuidance } from "./AiredDownGuidance";
+import { LazyLoadPressureChart } from "./LazyLoadPressureChart";
+import { LoadPressureFigures } from "./LoadPressureFigures";
+import { useMeasureEntries } from "./useMeasureEntries";
+
+const QUANTITIES = {
+  placardFront: "pressure",
+  placardRear: "pressure",
+  frontAxle: "load",
+  rearAxle: "load",
+  plannedMaxLoad: "load",
+  plannedMaxPressure: "pressure",
+} as const;
+type MeasureKey = keyof typeof QUANTITIES;
+
+const B = LOAD_FIELD_BOUNDS;
+const SPEC: Record<MeasureKey, MeasureSpec> = {
+  placardFront: { quantity: "pressure", ...B.pressureKpa, example: { imperial: "35", metric: "240" } },
+  placardRear: { quantity: "pressure", ...B.pressureKpa, example: { imperial: "35", metric: "240" } },
+  frontAxle: { quantity: "load", ...B.axleKg, example: { imperial: "3100", metric: "1400" } },
+  rearAxle: { quantity: "load", ...B.axleKg, example: { imperial: "2900", metric: "1300" } },
+  plannedMaxLoad: { quantity: "load", ...B.maxLoadKg, example: { imperial: "3525", metric: "1600" } },
+  plannedMaxPressure: { quantity: "pressure", ...B.maxPressureKpa, example: { imperial: "50", metric: "345" } },
+};
+const OPTIONAL: ReadonlySet<MeasureKey> = new Set(["plannedMaxLoad", "plannedMaxPressure"]);
+
+/** The panel's labels for a display choice; messages name each field by this same text. */
+export function loadLabels(prefs: DisplayPrefs): LoadLabels {
+  const p = measureUnit("pressure", prefs);
+  const l = measureUnit("load", prefs);
+  return {
+    placardTire: "Placard tire size",
+    placardFront: `Placard pressure, front (${p})`,
+    placardRear: `Placard pressure, rear (${p})`,
+    frontAxle: `Front axle load (${l})`,
+    rearAxle: `Rear axle load (${l})`,
+    plannedTire: "Planned tire",
+    plannedMaxLoad: `Planned tire's maximum load, sidewall (${l}, optional)`,
+    plannedMaxPressure: `Planned tire's maximum pressure, sidewall (${p}, optional)`,
+  };
+}
+
+const HINT: Record<MeasureKey, string> = {
+  placardFront: "Cold pressure on the door placard for the front tires.",
+  placardRear: "Cold pressure on the door placard for the rear tires.",
+  frontAxle: "From a scale ticket (loaded as you drive), or the placard's front axle rating (GAWR).",
+  rearAxle: "From a scale ticket, or the placard's rear axle rating (GAWR).",
+  plannedMaxLoad: "Only if the size has no load index: “max load … at …” on the sidewall.",
+  plannedMaxPressure: "Only if the size has no load range: the pressure of “max load … at …”.",
+};
+
+/**
+ * Load and pressure for the planned tire: the vehicle's placard and axle loads in, the pressure to
+ * set per axle out, with the chart and the cautions. Computes in the browser; the figures' units
+ * follow the workspace's toggle and are converted, never relabelled, when it switches.
+ */
+export function LoadPressurePanel({ currentTire, plannedTire, prefs }: { currentTire: string; plannedTire: string; prefs: DisplayPrefs }) {
+  const { entries, set, note } = useMeasureEntries(QUANTITIES, prefs);
+  // The placard size follows the current setup's tire until it is typed over.
+  const [placardTire, setPlacardTire] = useState<string | null>(null);
+  const [vehicle, setVehicle] = useState<VehicleKind>("light-truck");
+  const labels = loadLabels(prefs);
+  const placard = placardTire ?? currentTire;
+
+  const { plan, errors } = useMemo(() => {
+    const labels = loadLabels(prefs);
+    const errs: LoadErrors = {};
+    const values: Partial<Record<MeasureKey, number>> = {};
+    for (const k of Object.keys(QUANTITIES) as MeasureKey[]) {
+      const r = readMeasure(entries[k], SPEC[k], prefs, labels[k]);
+      if ("error" in r) errs[k] = r.error;
+      else if ("value" in r) values[k] = r.value;
+      else if (!OPTIONAL.has(k)) errs[k] = `${labels[k]}: enter it, e.g. ${SPEC[k].example[prefs.units]}.`;
+    }
+    if (placard.trim() === "") errs.placardTire = `${labels.placardTire}: enter the size on the door placard, e.g. P265/70R17 113S.`;
+    const touched = (Object.keys(QUANTITIES) as MeasureKey[]).some((k) => entries[k].text.trim() !== "");
+    if (!touched) return { plan: null, errors: {} as LoadErrors };
+    if (Object.keys(errs).length > 0) return { plan: null, errors: errs };
+    return planLoad(
+      {
+        placardTire: placard,
+        plannedTire,
+        vehicle,
+        placardFrontKpa: values.placardFront!,
+        placardRearKpa: values.placardRear!,
+        frontAxleKg: values.frontAxle!,
+        rearAxleKg: values.rearAxle!,
+        plannedMaxLoadKg: values.plannedMaxLoad,
+        plannedMaxPressureKpa: values.plannedMaxPressure,
+      },
+      labels,
+    );
+  }, [entries, prefs, placard, plannedTire, vehicle]);
+
+  const message = (k: LoadField) => {
+    const n = k in QUANTITIES ? note(k as MeasureKey) : undefined;
+    const e = errors[k];
+    return e && n ? `${e} ${n}` : (e ?? n);
+  };
+  const measureField = (k: MeasureKey) => (
+    <TextField
+      key={k}
+      label={labels[k]}
+      name={`load-${k}`}
+      inputMode="decimal"
+      autoComplete="off"
+      value={entries[k].text}
+      onChange={(ev) => set(k, ev.target.value)}
+      error={message(k)}
+      hint={HINT[k]}
+    />
+  );
+  const fieldErrors = (Object.keys(errors) as LoadField[]).length;
+
+  return (
+    <section
+      aria-labelledby="load-title"
+      className="flex flex-col gap-4 rounded-card bg-white p-4 shadow-card ring-1 ring-basalt-100 sm:p-5"
+    >
+      <div>
+        <h2 id="load-title" className="text-lg font-semibold">
+          Load and pressure
+        </h2>
+        <p className="text-sm text-basalt-700">
+          A bigger or different tire carries the same load at another pressure. Enter the door placard and the axle loads; the planned
+          tire&apos;s pressure follows. The vehicle&apos;s placard, the tire maker&apos;s load tables and the wheel maker&apos;s limits take
+          precedence over any figure here; never exceed the pressure on the sidewall or the wheel.
+        </p>
+      </div>
+      <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
+        <TextField
+          label={labels.placardTire}
+          name="load-placardTire"
+          autoComplete="off"
+          value={placard}
+          onChange={(ev) => setPlacardTire(ev.target.value)}
+          error={message("placardTire")}
+          hint="As printed on the placard, with its load index (e.g. P265/70R17 113S). Starts as your current tire."
+        />
+        {measureField("placardFront")}
+        {measureField("placardRear")}
+        {measureField("frontAxle")}
+        {measureField("rearAxle")}
+        <Segmented<VehicleKind>
+          legend="Vehicle"
+          name="load-vehicle"
+          value={vehicle}
+          options={[
+            { value: "light-truck", label: "Truck, SUV, van" },
+            { value: "passenger-car", label: "Car" },
+          ]}
+          onChange={setVehicle}
+        />
+      </div>
+      <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
+        <div className="flex flex-col gap-1 text-sm">
+          <span className="font-medium text-basalt-800">{labels.plannedTire}</span>
+          <span data-testid="load-planned-tire">{plannedTire}</span>
+          {errors.plannedTire && (
+            <p className="text-sm text-contact-700" role="alert">
+              {errors.plannedTire}
+            </p>
+          )}
+        </div>
+        {measureField("plannedMaxLoad")}
+        {measureField("plannedMaxPressure")}
+      </div>
+      <div aria-live="polite" className="flex flex-col gap-4">
+        {plan ? (
+          <>
+            <LoadPressureFigures plan={plan} prefs={prefs} />
+            <LazyLoadPressureChart plan={plan} prefs={prefs} />
+          </>
+        ) : (
+          <p className="text-sm text-basalt-600" data-testid="load-status">
+            {fieldErrors > 0
+              ? "Nothing is computed until every field above reads: see the messages beside them."
+              : "Enter the placard pressures and the axle loads to see the planned tire's pressure."}
+          </p>
+        )}
+      </div>
+      <AiredDownGuidance />
+    </section>
+  );
+}
