@@ -35,7 +35,6 @@ export interface MeasureEntry {
   exact: { text: string; value: number } | null;
 }
 
-export const emptyEntry: MeasureEntry = { text: "", exact: null };
 /** An entry typed by the person (no exact value behind it). */
 export const typed = (text: string): MeasureEntry => ({ text, exact: null });
 
