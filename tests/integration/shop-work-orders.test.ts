@@ -1,7 +1,7 @@
 import { createHash, randomBytes } from "node:crypto";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { rebuild, testDb } from "./support/db";
-import { startTestBoss, stopBoss } from "./support/jobs";
+import { drainQueue, startTestBoss, stopBoss } from "./support/jobs";
 import { ctx, req, sessionOf } from "./support/requests";
 import { SHOP_A, U, VEHICLE, item, seedShops } from "./support/shopFixture";
 
@@ -21,6 +21,9 @@ const move = (await import("@/app/api/shop/work-orders/[id]/status/route")).POST
 const { bookInstall, slotsForQuote } = await import("@/lib/shop/bookings/queries");
 const { requiredSteps } = await import("@/lib/shop/workOrders/api");
 const { db: appDb } = await import("@/lib/platform/db");
+const rechecks = await import("@/app/api/shop/rechecks/route");
+const { queueDueRechecks } = await import("@/lib/shop/workOrders/queries");
+const { QUEUES, getBoss } = await import("@/lib/platform/jobs/boss");
 
 const sha256 = (s: string) => createHash("sha256").update(s).digest("hex");
 const week = [1, 2, 3, 4, 5, 6, 7].map((weekday) => ({ weekday, open: true, opens: "07:00", closes: "19:00" }));
@@ -283,5 +286,83 @@ describe("signing off and the status", () => {
     expect((await late.json()).error).toBe("This work order is done: Left front: balance weights can no longer be signed.");
     expect(await stepRows()).toBe(after);
     expect((await moveTo(id, "in_bay")).status).toBe(409);
+  });
+});
+
+describe("the re-check reminder", () => {
+  const DAY = 86_400_000;
+  const recheckMails = async () =>
+    (await db.withSchema("pgboss").from("job").where({ name: "mail.send" }).select("data")).filter((r: { data: { subject: string } }) =>
+      /re-check/.test(r.data.subject),
+    ) as { data: { to: string; subject: string; text: string } }[];
+
+  /** A work order of shop A taken from booked to done by staff A, every step signed. */
+  async function doneWorkOrder() {
+    const quoteId = await bookedQuote();
+    as(U.staffA);
+    const { id } = await (await openFor(quoteId)).json();
+    await moveTo(id, "in_bay");
+    const w = (await (await read(req("GET", `/api/shop/work-orders/${id}`), ctx({ id }))).json()).workOrder;
+    for (const s of requiredSteps(w)) expect((await signAs(id, bodyFor(s.position, s.step))).status).toBe(200);
+    const done = (await (await moveTo(id, "done")).json()).workOrder;
+    const email = (await db("quotes as q").join("customers as c", "c.id", "q.customer_id").where("q.id", quoteId).first("c.email")).email;
+    return { id, quoteId, doneAt: new Date(done.doneAt), dueAt: new Date(done.recheckDueAt), email };
+  }
+
+  it("the owner sets the days (staff cannot; bad input names the field; nothing changes)", async () => {
+    as(U.staffA);
+    expect((await (await rechecks.GET(req("GET", "/api/shop/rechecks"), ctx())).json()).days).toBe(7);
+    expect((await rechecks.PUT(req("PUT", "/api/shop/rechecks", { days: 10 }), ctx())).status).toBe(403);
+    as(U.ownerA);
+    const bad = await rechecks.PUT(req("PUT", "/api/shop/rechecks", { days: "0" }), ctx());
+    expect(bad.status).toBe(422);
+    expect((await bad.json()).fieldErrors.days[0]).toBe("Re-check after (days): use 1 to 90.");
+    expect((await db("shops").where({ id: SHOP_A }).first()).recheck_after_days).toBe(7);
+    const r = await rechecks.PUT(req("PUT", "/api/shop/rechecks", { days: "10" }), ctx());
+    expect(r.status).toBe(200);
+    expect((await r.json()).days).toBe(10);
+  });
+
+  it("mails the customer once when the clock reaches the date, through the queue; the counter lists the job as due", async () => {
+    const w = await doneWorkOrder();
+    expect(w.dueAt.getTime() - w.doneAt.getTime()).toBe(10 * DAY);
+    // A day early: not this one (the earlier job of this file, due after 7 days, goes out here).
+    await queueDueRechecks(appDb, new Date(w.dueAt.getTime() - DAY));
+    expect((await db("work_orders").where({ id: w.id }).first()).recheck_queued_at).toBeNull();
+    expect((await recheckMails()).filter((m) => m.data.to === w.email)).toHaveLength(0);
+    as(U.staffA);
+    const early = (await (await rechecks.GET(req("GET", "/api/shop/rechecks"), ctx())).json()).due;
+    expect(early.some((d: { workOrderId: string }) => d.workOrderId === w.id)).toBe(false);
+
+    // The clock moved forward past the date; the hourly job runs through the workers' own handler.
+    vi.useFakeTimers({ toFake: ["Date"] });
+    try {
+      vi.setSystemTime(new Date(w.dueAt.getTime() + 3_600_000));
+      await (await getBoss()).send(QUEUES.recheckReminders.name, {});
+      expect(await drainQueue(QUEUES.recheckReminders.name)).toEqual({ completed: [expect.any(String)], failed: [] });
+      const mails = await recheckMails();
+      const mine = mails.filter((m) => m.data.to === w.email);
+      expect(mine).toHaveLength(1);
+      expect(mine[0]!.data.subject).toBe("Time for your lug and ring re-check at Shop A");
+      expect(mine[0]!.data.text).toMatch(/Call Shop A on 555-0100 to book a short slot\./);
+      expect(mine[0]!.data.text).toMatch(/first 50–100 miles/);
+
+      // Again, and from a second run: never twice.
+      await (await getBoss()).send(QUEUES.recheckReminders.name, {});
+      await drainQueue(QUEUES.recheckReminders.name);
+      expect(await queueDueRechecks(appDb)).toBe(0);
+      expect((await recheckMails()).filter((m) => m.data.to === w.email)).toHaveLength(1);
+
+      as(U.staffA);
+      const due = (await (await rechecks.GET(req("GET", "/api/shop/rechecks"), ctx())).json()).due;
+      const row = due.find((d: { workOrderId: string }) => d.workOrderId === w.id);
+      expect(row).toMatchObject({ quoteId: w.quoteId, customerName: "Bay Customer", remindedAt: expect.any(String) });
+      // Another shop's counter does not see it.
+      as(U.staffB);
+      const other = (await (await rechecks.GET(req("GET", "/api/shop/rechecks"), ctx())).json()).due;
+      expect(other).toEqual([]);
+    } finally {
+      vi.useRealTimers();
+    }
   });
 });

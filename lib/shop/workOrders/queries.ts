@@ -8,7 +8,9 @@ import { canBook } from "@/lib/shop/bookings/bookable";
 import { readSchedule } from "@/lib/shop/bookings/queries";
 import { formatClock, formatInstant } from "@/lib/shop/bookings/zoned";
 import { type Actor, readLines, transition } from "@/lib/shop/quotes/queries";
-import { type WorkOrder, requiredSteps, unsignedSteps, workOrderDto } from "./api";
+import { queueMailIn } from "@/lib/platform/mail/transactional";
+import { type RecheckDue, type WorkOrder, requiredSteps, unsignedSteps, workOrderDto } from "./api";
+import { recheckMail } from "./recheckMail";
 import type { SignedStep } from "./schema";
 import { POSITION_LABEL, STEP_LABEL, WORK_ORDER_STATUS_LABEL } from "./vocabulary";
 
@@ -189,5 +191,136 @@ export async function moveWorkOrder(
   });
 }
 
+/* ---------------------------------------------------------------- the re-check after the first miles */
+
+/** The owner's number of days between the work done and the re-check. */
+export async function recheckDays(db: Db, shopId: string): Promise<number> {
+  const row = await db("shops").where({ id: shopId }).first("recheck_after_days");
+  if (!row) throw new NotFoundError("That shop");
+  return row.recheck_after_days as number;
+}
+
+/** Sets the shop's number of days; work orders already done keep the date they were given. */
+export async function setRecheckDays(db: Knex, shopId: string, days: number): Promise<number> {
+  const n = await db("shops").where({ id: shopId }).update({ recheck_after_days: days, updated_at: db.fn.now() });
+  if (!n) throw new NotFoundError("That shop");
+  return days;
+}
+
+/** How long a work order stays on the counter's list after its re-check date. */
+export const RECHECK_LIST_DAYS = 30;
+
+/** The counter's "due for re-check" list: jobs whose re-check date has come, up to RECHECK_LIST_DAYS ago, oldest first. */
+export async function dueForRecheck(db: Db, shopId: string, now = new Date()): Promise<RecheckDue[]> {
+  const rows = (await db("work_orders as w")
+    .join("quotes as q", "q.id", "w.quote_id")
+    .join("customers as c", "c.id", "q.customer_id")
+    .where({ "w.shop_id": shopId, "w.status": "done" })
+    .andWhere("w.recheck_due_at", "<=", now)
+    .andWhere("w.recheck_due_at", ">", new Date(now.getTime() - RECHECK_LIST_DAYS * 86_400_000))
+    .orderBy("w.recheck_due_at")
+    .select(
+      "w.id",
+      "w.quote_id",
+      "w.done_at",
+      "w.recheck_due_at",
+      "w.recheck_queued_at",
+      "q.number",
+      "q.vehicle_description",
+      "c.name",
+      "c.phone",
+    )) as {
+    id: string;
+    quote_id: string;
+    done_at: Date;
+    recheck_due_at: Date;
+    recheck_queued_at: Date | null;
+    number: number;
+    vehicle_description: string;
+    name: string;
+    phone: string;
+  }[];
+  return rows.map((r) => ({
+    workOrderId: r.id,
+    quoteId: r.quote_id,
+    quoteNumber: r.number,
+    customerName: r.name,
+    customerPhone: r.phone,
+    vehicleDescription: r.vehicle_description,
+    doneAt: new Date(r.done_at).toISOString(),
+    recheckDueAt: new Date(r.recheck_due_at).toISOString(),
+    remindedAt: r.recheck_queued_at ? new Date(r.recheck_queued_at).toISOString() : null,
+  }));
+}
+
+/**
+ * The re-check mails due: every done work order whose date has come and whose mail was not
+ * queued. Each is marked in the transaction that queues its mail, rows taken with SKIP LOCKED,
+ * so two workers or a retried job never mail twice; a customer without an address is marked
+ * too (the counter's list shows who to call). Returns how many mails were queued.
+ */
+export async function queueDueRechecks(db: Knex, now = new Date()): Promise<number> {
+  return db.transaction(async (trx) => {
+    const due = (await trx("work_orders as w")
+      .join("quotes as q", "q.id", "w.quote_id")
+      .join("customers as c", "c.id", "q.customer_id")
+      .join("shops as s", "s.id", "w.shop_id")
+      .where("w.status", "done")
+      .whereNull("w.recheck_queued_at")
+      .andWhere("w.recheck_due_at", "<=", now)
+      .forUpdate("w")
+      .skipLocked()
+      .select(
+        "w.id",
+        "w.beadlock",
+        "q.number",
+        "q.vehicle_description",
+        "c.name as customer_name",
+        "c.email",
+        "s.name as shop_name",
+        "s.address",
+        "s.phone",
+      )) as {
+      id: string;
+      beadlock: boolean;
+      number: number;
+      vehicle_description: string;
+      customer_name: string;
+      email: string | null;
+      shop_name: string;
+      address: string;
+      phone: string;
+    }[];
+    let queued = 0;
+    for (const d of due) {
+      if (d.email) {
+        await queueMailIn(
+          trx,
+          recheckMail({
+            customer: { name: d.customer_name, email: d.email },
+            shop: { name: d.shop_name, address: d.address, phone: d.phone },
+            quoteNumber: d.number,
+            vehicle: d.vehicle_description,
+            beadlock: d.beadlock,
+          }),
+        );
+        queued++;
+      }
+      await trx("work_orders").where({ id: d.id }).update({ recheck_queued_at: now });
+    }
+    return queued;
+  });
+}
+
 /** These queries on the app's database handle, for pages and route handlers. */
-export const workOrderQueries = bindAppDb({ findWorkOrderIdOfQuote, getWorkOrder, moveWorkOrder, openWorkOrder, signStep });
+export const workOrderQueries = bindAppDb({
+  dueForRecheck,
+  findWorkOrderIdOfQuote,
+  getWorkOrder,
+  moveWorkOrder,
+  openWorkOrder,
+  queueDueRechecks,
+  recheckDays,
+  setRecheckDays,
+  signStep,
+});

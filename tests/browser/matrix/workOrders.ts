@@ -32,4 +32,13 @@ export const cases: MatrixCase[] = [
     expect: only([...SHOP], 404),
     note: "no such work order",
   },
+  { route: "/api/shop/rechecks", method: "GET", path: "/api/shop/rechecks", expect: only([...SHOP]) },
+  {
+    route: "/api/shop/rechecks",
+    method: "PUT",
+    path: "/api/shop/rechecks",
+    body: { days: 0 },
+    expect: { ...only(["shop_owner"], 422), shop_staff: 403 },
+    note: "invalid body: owners get field errors, staff a 403 before any parsing",
+  },
 ];
