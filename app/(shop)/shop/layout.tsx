@@ -10,6 +10,7 @@ export default async function ShopLayout({ children }: { children: ReactNode }) 
     { href: "/shop/quotes", label: "Quotes" },
     { href: "/shop/catalog", label: "Catalog" },
     { href: "/shop/calendar", label: "Calendar" },
+    { href: "/shop/rechecks", label: "Re-checks" },
     ...(owner
       ? [
           { href: "/shop/staff", label: "Staff" },

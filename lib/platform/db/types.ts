@@ -45,6 +45,8 @@ export interface ShopSettingsRow extends ShopRow {
   quote_validity_days: number;
   deposit_pct: number;
   currency: "USD";
+  /** Days after a job is done that the customer is asked back for the lug and ring re-check. */
+  recheck_after_days: number;
   updated_at: Date;
 }
 
@@ -298,6 +300,48 @@ export interface BookingRow {
   cancelled_at: Date | null;
   created_at: Date;
   updated_at: Date;
+}
+
+export const WORK_ORDER_STATUSES = ["booked", "in_bay", "done"] as const;
+export type WorkOrderStatus = (typeof WORK_ORDER_STATUSES)[number];
+export const WHEEL_POSITIONS = ["LF", "RF", "LR", "RR", "spare"] as const;
+export type WheelPosition = (typeof WHEEL_POSITIONS)[number];
+/** A step's place on the sheet: a wheel, or the vehicle as a whole (alignment, trimming). */
+export type StepPosition = WheelPosition | "vehicle";
+
+export interface WorkOrderRow {
+  id: string;
+  shop_id: string;
+  quote_id: string;
+  status: WorkOrderStatus;
+  tire_description: string;
+  wheel_description: string;
+  spare: boolean;
+  beadlock: boolean;
+  alignment: boolean;
+  trimming: boolean;
+  lug_count: number;
+  started_at: Date | null;
+  started_by: string | null;
+  done_at: Date | null;
+  done_by: string | null;
+  recheck_due_at: Date | null;
+  recheck_queued_at: Date | null;
+  created_at: Date;
+  updated_at: Date;
+}
+
+export interface WorkOrderStepRow {
+  id: string;
+  work_order_id: string;
+  shop_id: string;
+  position: StepPosition;
+  step: string;
+  /** What was recorded, as lib/shop/workOrders/schema.ts stores it (JSONB). */
+  data: unknown;
+  signed_by_user_id: string | null;
+  signed_by: string;
+  signed_at: Date;
 }
 
 /** A bay held by a booking; `during` is a tstzrange, read through lower()/upper() as starts_at/ends_at. */

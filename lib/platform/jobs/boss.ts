@@ -24,6 +24,8 @@ export const QUEUES = {
   photoSweep: { name: "photos.sweep", retryLimit: 1, retryDelay: 60, retryBackoff: false, expireInMinutes: 10 },
   /** Queues the day-before install reminders (lib/shop/bookings/queries.ts); each booking is marked as it is queued, so a retry reminds no one twice. */
   bookingReminders: { name: "bookings.remind", retryLimit: 3, retryDelay: 60, retryBackoff: true, expireInMinutes: 5 },
+  /** Queues the re-check mails after the first miles (lib/shop/workOrders/queries.ts); each work order is marked as it is queued. */
+  recheckReminders: { name: "workorders.recheck", retryLimit: 3, retryDelay: 60, retryBackoff: true, expireInMinutes: 5 },
   /** Deletes Idempotency-Key records past their 24 hours. */
   idempotencyPurge: { name: "idempotency.purge", retryLimit: 1, retryDelay: 60, retryBackoff: false, expireInMinutes: 5 },
 } as const;

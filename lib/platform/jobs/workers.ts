@@ -12,6 +12,7 @@ import { sweepOrphanPhotos } from "@/lib/garage/photos/sweep";
 import { purgeExpiredKeys } from "@/lib/platform/http/idempotencyQueries";
 import { expireDue } from "@/lib/shop/quotes/queries";
 import { queueDueReminders } from "@/lib/shop/bookings/queries";
+import { queueDueRechecks } from "@/lib/shop/workOrders/queries";
 import { type BossOptions, type QueueName, QUEUES, getBoss, pollSeconds } from "./boss";
 
 /** Every 15 minutes. The read paths already show a quote past its date as expired; this writes it down. */
@@ -23,6 +24,8 @@ export const PHOTO_SWEEP_CRON = "*/10 * * * *";
 export const IDEMPOTENCY_PURGE_CRON = "17 * * * *";
 /** Hourly: each shop's reminders go out in the first run after 9:00 on its own clock the day before. */
 export const BOOKING_REMINDER_CRON = "7 * * * *";
+/** Hourly: a re-check mail leaves within the hour its date comes. */
+export const RECHECK_REMINDER_CRON = "37 * * * *";
 
 type Handler = (job: PgBoss.Job<object>) => Promise<unknown>;
 
@@ -49,6 +52,11 @@ export const handlers: Record<QueueName, Handler> = {
     if (queued) log().info({ job: { id: job.id, queue: job.name }, queued }, "install reminders queued");
     return { queued };
   },
+  [QUEUES.recheckReminders.name]: async (job) => {
+    const queued = await queueDueRechecks(db);
+    if (queued) log().info({ job: { id: job.id, queue: job.name }, queued }, "re-check reminders queued");
+    return { queued };
+  },
 };
 
 /** Runs one job's handler, logging a failure (message only: job data may hold a mail's body). */
@@ -66,7 +74,7 @@ export async function runJob(job: PgBoss.Job<object>): Promise<unknown> {
 
 /**
  * Starts the boss with maintenance and the cron clock, a worker per queue polling every
- * {@link pollSeconds}, and the schedules (quote expiry, photo sweep, idempotency purge, install reminders). Idempotent within a process.
+ * {@link pollSeconds}, and the schedules (quote expiry, photo sweep, idempotency purge, install and re-check reminders). Idempotent within a process.
  */
 export async function startWorkers(opts: BossOptions = {}): Promise<PgBoss> {
   const g = globalThis as unknown as { hubfaceWorkers?: Promise<PgBoss> };
@@ -80,6 +88,7 @@ export async function startWorkers(opts: BossOptions = {}): Promise<PgBoss> {
     await boss.schedule(QUEUES.photoSweep.name, PHOTO_SWEEP_CRON, {}, { tz: "UTC" });
     await boss.schedule(QUEUES.idempotencyPurge.name, IDEMPOTENCY_PURGE_CRON, {}, { tz: "UTC" });
     await boss.schedule(QUEUES.bookingReminders.name, BOOKING_REMINDER_CRON, {}, { tz: "UTC" });
+    await boss.schedule(QUEUES.recheckReminders.name, RECHECK_REMINDER_CRON, {}, { tz: "UTC" });
     log().info({ queues: Object.keys(handlers), pollingIntervalSeconds }, "job workers started");
     return boss;
   })().catch((error: unknown) => {

@@ -7,7 +7,9 @@ import { quoteQueries, quoteScopeOf } from "@/lib/shop/quotes/queries";
 import { shopQueries } from "@/lib/shop/queries";
 import { canBook } from "@/lib/shop/bookings/bookable";
 import { bookingQueries } from "@/lib/shop/bookings/queries";
+import { workOrderQueries } from "@/lib/shop/workOrders/queries";
 import { CounterBooking } from "./CounterBooking";
+import { OpenWorkOrder } from "./OpenWorkOrder";
 import { QuoteEditor } from "./QuoteEditor";
 
 export const metadata: Metadata = { title: "Quote" };
@@ -22,10 +24,12 @@ export default async function QuotePage({ params }: { params: Promise<{ id: stri
   const [booking, setup] = canBook(q)
     ? await Promise.all([bookingQueries.liveBooking(q), bookingQueries.getSetup(q.shop_id)])
     : [null, null];
+  const workOrderId = (await workOrderQueries.findWorkOrderIdOfQuote(q.shop_id, q.id)) ?? null;
   return (
     <>
       <QuoteEditor initial={quoteDetailDto(detail)} labourRateCents={shop?.labour_rate_cents ?? 0} />
       {setup && <CounterBooking quoteId={q.id} initial={booking} bays={setup.bays} />}
+      {(booking || workOrderId) && <OpenWorkOrder quoteId={q.id} workOrderId={workOrderId} />}
     </>
   );
 }

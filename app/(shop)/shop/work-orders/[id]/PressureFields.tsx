@@ -1,0 +1,50 @@
+"use client";
+import type { UseFormReturn } from "react-hook-form";
+import { SelectField } from "@/components/ui/SelectField";
+import { TextField } from "@/components/ui/TextField";
+import { kpaToPsi, psiToKpa } from "@/lib/fitment";
+import { pressureFieldLabel, readDecimal } from "@/lib/shop/workOrders/schema";
+import { FIELD_LABEL, type PressureEntryUnit } from "@/lib/shop/workOrders/vocabulary";
+import { type StepValues, errorAt } from "./stepForm";
+
+/** The cold pressure set, in psi or kPa; switching the unit converts the figure (NIST SP 811 B.8) instead of relabelling it. */
+export function PressureFields({ form, idPrefix }: { form: UseFormReturn<StepValues>; idPrefix: string }) {
+  const unit = form.watch("pressureUnit") as PressureEntryUnit;
+  const onUnit = (to: PressureEntryUnit) => {
+    const text = form.getValues("pressure") as string;
+    if (text.trim() !== "") {
+      const n = readDecimal(text, pressureFieldLabel(unit), 0, 10_000);
+      // A figure that cannot be read keeps its unit: relabelling it would claim a reading nobody took.
+      if (typeof n === "string")
+        return form.setError("pressure", { type: "unit", message: `${n} The unit stays ${unit} until it reads as one number.` });
+      form.setValue("pressure", to === "kPa" ? String(Math.round(psiToKpa(n))) : String(Math.round(kpaToPsi(n) * 10) / 10));
+    }
+    form.setValue("pressureUnit", to);
+  };
+  return (
+    <div className="flex flex-wrap items-end gap-3">
+      <TextField
+        id={`${idPrefix}-pressure`}
+        className="w-48"
+        label={pressureFieldLabel(unit)}
+        inputMode="decimal"
+        autoComplete="off"
+        hint="Cold, to the figure for this tire and load (door placard or the tire maker's load table)"
+        error={errorAt(form.formState.errors, "pressure")}
+        {...form.register("pressure")}
+      />
+      <SelectField
+        id={`${idPrefix}-pressureUnit`}
+        className="w-28"
+        label={FIELD_LABEL.pressureUnit}
+        name="pressureUnit"
+        value={unit}
+        onChange={(e) => onUnit(e.target.value as PressureEntryUnit)}
+        options={[
+          { value: "psi", label: "psi" },
+          { value: "kPa", label: "kPa" },
+        ]}
+      />
+    </div>
+  );
+}

@@ -1,0 +1,63 @@
+"use client";
+import { useState } from "react";
+import { Button } from "@/components/ui/Button";
+import type { StepPosition } from "@/lib/platform/db/types";
+import type { SignedOff, WorkOrder } from "@/lib/shop/workOrders/api";
+import { signedText } from "@/lib/shop/workOrders/signedText";
+import { MATCH_MOUNT_NOTE, LUG_NOTE, STEP_LABEL, type StepKind } from "@/lib/shop/workOrders/vocabulary";
+import { StepForm } from "./StepForm";
+
+const NOTES: Partial<Record<StepKind, string>> = { match_mount: MATCH_MOUNT_NOTE, lug_torque: LUG_NOTE };
+
+/** One step: what was recorded and who signed it when, or the form to sign it (in the bay only). */
+export function StepCard({
+  workOrder,
+  position,
+  step,
+  signed,
+  onSigned,
+}: {
+  workOrder: WorkOrder;
+  position: StepPosition;
+  step: StepKind;
+  signed: SignedOff | null;
+  onSigned: (w: WorkOrder) => void;
+}) {
+  const [editing, setEditing] = useState(false);
+  const canSign = workOrder.status === "in_bay";
+  const id = `${position}-${step}`;
+  return (
+    <li className="flex flex-col gap-2 border-t border-basalt-200 pt-3 first:border-0 first:pt-0" aria-labelledby={`${id}-title`}>
+      <div className="flex flex-wrap items-baseline justify-between gap-2">
+        <h3 id={`${id}-title`} className="font-semibold">
+          {STEP_LABEL[step]}
+        </h3>
+        {signed ? (
+          <span className="text-sm text-clear-800" data-testid={`${id}-signed`}>
+            ✓ Signed by {signed.signedBy}, {new Date(signed.signedAt).toLocaleString()}
+          </span>
+        ) : (
+          <span className="hidden text-sm print:inline">Signed: ____________ Date/time: ________</span>
+        )}
+      </div>
+      {NOTES[step] && <p className="text-xs text-basalt-600">{NOTES[step]}</p>}
+      {signed && <p className="text-sm text-basalt-800">{signedText(signed)}</p>}
+      {canSign && (!signed || editing) && (
+        <StepForm
+          workOrder={workOrder}
+          position={position}
+          step={step}
+          onSigned={(w) => {
+            setEditing(false);
+            onSigned(w);
+          }}
+        />
+      )}
+      {canSign && signed && !editing && (
+        <Button type="button" variant="secondary" className="self-start print:hidden" onClick={() => setEditing(true)}>
+          Correct and sign again
+        </Button>
+      )}
+    </li>
+  );
+}

@@ -1,0 +1,76 @@
+import type { Knex } from "knex";
+
+/**
+ * Work orders: one per booked quote, the sheet the technician works through in the bay. Each
+ * step of each wheel position (and of the vehicle) is one row, signed by the person who did it.
+ * The steps a work order has are fixed when it is made (from the quote: a spare, beadlock
+ * wheels, an alignment, trimming), so "done" can be checked against them.
+ *
+ * The re-check after the first miles: the shop's number of days on `shops`, the due date and
+ * the mark that its reminder was queued on the work order (set in the transaction that queues
+ * the mail, so none goes out twice).
+ */
+export async function up(knex: Knex): Promise<void> {
+  await knex.schema.alterTable("shops", (t) => {
+    t.integer("recheck_after_days").notNullable().defaultTo(7);
+    t.check("recheck_after_days between 1 and 90", [], "shops_recheck_days_range");
+  });
+
+  await knex.schema.createTable("work_orders", (t) => {
+    t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
+    t.uuid("shop_id").notNullable().references("id").inTable("shops").onDelete("CASCADE");
+    t.uuid("quote_id").notNullable().unique().references("id").inTable("quotes").onDelete("CASCADE");
+    t.text("status").notNullable().defaultTo("booked");
+    // What the sheet covers, fixed from the quote when the work order is made.
+    t.text("tire_description").notNullable().defaultTo("");
+    t.text("wheel_description").notNullable().defaultTo("");
+    t.boolean("spare").notNullable().defaultTo(false);
+    t.boolean("beadlock").notNullable().defaultTo(false);
+    t.boolean("alignment").notNullable().defaultTo(false);
+    t.boolean("trimming").notNullable().defaultTo(false);
+    // Lug nuts per wheel, from the quote's bolt pattern (the star pattern's size).
+    t.integer("lug_count").notNullable();
+    t.timestamp("started_at", { useTz: true }).nullable();
+    t.text("started_by").nullable();
+    t.timestamp("done_at", { useTz: true }).nullable();
+    t.text("done_by").nullable();
+    t.timestamp("recheck_due_at", { useTz: true }).nullable();
+    t.timestamp("recheck_queued_at", { useTz: true }).nullable();
+    t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    t.timestamp("updated_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    t.unique(["id", "shop_id"]);
+    t.index(["shop_id", "status"]);
+    t.check("status in ('booked','in_bay','done')", [], "work_orders_status_known");
+    t.check("lug_count between 3 and 12", [], "work_orders_lug_count_range");
+    t.check("(status = 'done') = (done_at is not null)", [], "work_orders_done_when_done");
+  });
+
+  await knex.schema.createTable("work_order_steps", (t) => {
+    t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
+    t.uuid("work_order_id").notNullable();
+    t.uuid("shop_id").notNullable();
+    // A step of another shop's work order cannot be written even by a query that forgets the scope.
+    t.foreign(["work_order_id", "shop_id"], "work_order_steps_of_shop")
+      .references(["id", "shop_id"])
+      .inTable("work_orders")
+      .onDelete("CASCADE");
+    t.text("position").notNullable();
+    t.text("step").notNullable();
+    // What was recorded (validated by lib/shop/workOrders/schema.ts; torque in N·m, pressure in kPa).
+    t.jsonb("data").notNullable().defaultTo("{}");
+    t.uuid("signed_by_user_id").nullable().references("id").inTable("users").onDelete("SET NULL");
+    t.text("signed_by").notNullable();
+    t.timestamp("signed_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    t.unique(["work_order_id", "position", "step"]);
+    t.check("position in ('LF','RF','LR','RR','spare','vehicle')", [], "work_order_steps_position_known");
+  });
+}
+
+export async function down(knex: Knex): Promise<void> {
+  await knex.schema.dropTable("work_order_steps");
+  await knex.schema.dropTable("work_orders");
+  await knex.schema.alterTable("shops", (t) => {
+    t.dropChecks(["shops_recheck_days_range"]);
+    t.dropColumn("recheck_after_days");
+  });
+}

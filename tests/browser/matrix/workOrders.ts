@@ -1,0 +1,44 @@
+import { type MatrixCase, only } from "./types";
+
+/** The demo draft quote (db/seeds/05_demo_shop.ts): in the demo shop, not booked. */
+const DRAFT = "d0000000-0000-4000-8000-000000000001";
+/** No work order has this id. */
+const UNKNOWN = "e0000000-0000-4000-8000-00000000dead";
+const SHOP = ["shop_staff", "shop_owner"] as const;
+
+export const cases: MatrixCase[] = [
+  {
+    route: "/api/shop/work-orders",
+    method: "POST",
+    path: "/api/shop/work-orders",
+    body: { quoteId: DRAFT },
+    expect: only([...SHOP], 409),
+    note: "a draft is not booked",
+  },
+  { route: "/api/shop/work-orders/[id]", method: "GET", path: `/api/shop/work-orders/${UNKNOWN}`, expect: only([...SHOP], 404) },
+  {
+    route: "/api/shop/work-orders/[id]/steps",
+    method: "PUT",
+    path: `/api/shop/work-orders/${UNKNOWN}/steps`,
+    body: { step: "fitted", position: "LF", dotCode: "9999", tire: "t", wheel: "w" },
+    expect: only([...SHOP], 422),
+    note: "week 99 does not exist: refused before any lookup",
+  },
+  {
+    route: "/api/shop/work-orders/[id]/status",
+    method: "POST",
+    path: `/api/shop/work-orders/${UNKNOWN}/status`,
+    body: { to: "in_bay" },
+    expect: only([...SHOP], 404),
+    note: "no such work order",
+  },
+  { route: "/api/shop/rechecks", method: "GET", path: "/api/shop/rechecks", expect: only([...SHOP]) },
+  {
+    route: "/api/shop/rechecks",
+    method: "PUT",
+    path: "/api/shop/rechecks",
+    body: { days: 0 },
+    expect: { ...only(["shop_owner"], 422), shop_staff: 403 },
+    note: "invalid body: owners get field errors, staff a 403 before any parsing",
+  },
+];

@@ -1,0 +1,103 @@
+import type { Locator } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { launch, seriousViolations, shot, signInAs } from "./support/browser";
+import { DEMO, DEMO_PASSWORD, call } from "./support/http";
+
+/*
+ * The technician in the bay, on a phone (390 px): opens the work order of the demo shop's booked
+ * quote (db/seeds/05_demo_shop.ts Q-1003, booked by db/seeds/06_demo_bookings.ts), starts it,
+ * signs every step with figures typed as a technician would, and marks it done.
+ */
+const PAID_QUOTE = "d0000000-0000-4000-8000-000000000003";
+
+let phone: Awaited<ReturnType<typeof launch>>;
+beforeAll(async () => {
+  phone = await launch({ width: 390, height: 844 });
+});
+afterAll(async () => {
+  await phone?.close();
+});
+
+/** Fills one step's form the way a technician would; the form's label says which step. */
+async function fill(form: Locator, step: string) {
+  switch (step) {
+    case "fitted":
+      await form.getByLabel("DOT date code").fill("2325");
+      return;
+    case "match_mount":
+      await form.getByLabel("Marks lined up").selectOption("uniformity_to_low_point");
+      return;
+    case "beadlock":
+      await form.getByLabel("Bolts on the ring").fill("24");
+      await form.getByLabel("Maker's torque (ft·lb)").fill("17");
+      expect(await form.getByTestId("torque-plan").textContent()).toContain("17 ft·lb (23 N·m)");
+      await form.getByLabel("All passes done in the order shown").check();
+      return;
+    case "bead_seat":
+      await form.getByLabel("Beads seated following the cautions above").check();
+      return;
+    case "pressure":
+      await form.getByLabel("Cold pressure set (psi)").fill("35");
+      return;
+    case "balance":
+      await form.getByLabel("Inner plane weight (g)").fill("42.5");
+      await form.getByLabel("Outer plane weight (g)").fill("0");
+      return;
+    case "lug_torque":
+      // Typed in ft·lb, switched to N·m: the figure is converted, not relabelled (NIST SP 811 B.9: 140 ft·lbf = 189.8 N·m).
+      await form.getByLabel("Maker's torque (ft·lb)").fill("140");
+      await form.getByLabel("Torque unit").selectOption("nm");
+      expect(await form.getByLabel("Maker's torque (N·m)").inputValue()).toBe("189.8");
+      await form.getByLabel("All passes done in the order shown").check();
+      return;
+    case "alignment":
+      for (const when of ["Before", "After"]) {
+        const set = form.getByRole("group", { name: when });
+        await set.getByLabel("Camber left (°)").fill("-0.25");
+        await set.getByLabel("Camber right (°)").fill("-0.5");
+        await set.getByLabel("Caster left (°)").fill("3.5");
+        await set.getByLabel("Caster right (°)").fill("3.75");
+        await set.getByLabel("Total toe (°)").fill("0.1");
+      }
+      return;
+    case "trimming":
+      await form.getByLabel("Trimming done").check();
+      return;
+  }
+}
+
+describe("work order in the bay", () => {
+  it("the technician opens the work order at 390 px, signs each step and marks it done", async () => {
+    const opened = await call("shop_staff", "POST", "/api/shop/work-orders", { quoteId: PAID_QUOTE });
+    expect(opened.status).toBe(201);
+    const { id } = (await opened.json()) as { id: string };
+
+    const page = await phone.context.newPage();
+    await signInAs(page, DEMO.shop_staff, DEMO_PASSWORD);
+    await page.goto(`/shop/work-orders/${id}`);
+    expect(await page.getByRole("heading", { level: 1 }).textContent()).toContain("Work order · Q-1003");
+    // Nothing scrolls sideways on the phone.
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+    await page.getByRole("button", { name: "Start: the truck is in the bay" }).click();
+    await page.getByText("In the bay", { exact: true }).waitFor();
+    expect(await seriousViolations(page), "work order in the bay").toEqual([]);
+    await shot(page, "work-order-phone");
+
+    // Each signed step replaces its form with the signature, so the first form left is always the next one.
+    for (let guard = 0; guard < 40; guard++) {
+      const form = page.locator('form[aria-label^="Sign off"]').first();
+      if ((await form.count()) === 0) break;
+      const [, position, step] = /^Sign off (\S+) (\S+)$/.exec((await form.getAttribute("aria-label"))!)!;
+      await fill(form, step!);
+      await form.getByRole("button", { name: "Sign off" }).click();
+      await page.getByTestId(`${position}-${step}-signed`).waitFor();
+      expect(await page.getByTestId(`${position}-${step}-signed`).textContent()).toContain("Signed by Teo Marrow");
+    }
+    expect(await page.locator('form[aria-label^="Sign off"]').count()).toBe(0);
+    await page.getByRole("button", { name: "Mark the work order done" }).click();
+    await page.getByText("Done", { exact: true }).waitFor();
+    await shot(page, "work-order-done-phone");
+    const w = (await (await call("shop_staff", "GET", `/api/shop/work-orders/${id}`)).json()) as { workOrder: { status: string } };
+    expect(w.workOrder.status).toBe("done");
+  });
+});
