@@ -193,7 +193,6 @@ export const signStepSchema = z.discriminatedUnion(
   [fitted, matchMount, beadlock, beadSeat, pressure, balance, lugTorque, alignment, trimming],
   { error: "Step: reload the sheet; that step is not known." },
 );
-export type SignStepInput = z.input<typeof signStepSchema>;
 export type SignedStep = z.output<typeof signStepSchema>;
 
 /** Making the work order for a booked quote. */

@@ -99,7 +99,9 @@ export const FIELD_LABEL = {
 /**
  * Days after the work is done that the customer is asked back to have lug nuts and ring bolts
  * re-checked: the usual advice is after the first 50–100 miles (common practice, no source);
- * a week is this app's stand-in for those miles until the shop sets its own number.
+ * a week is this app's stand-in for those miles until the shop sets its own number. The column
+ * default of shops.recheck_after_days (migration 20261206090000_work_orders) holds the same 7.
+ * @public
  */
 export const DEFAULT_RECHECK_DAYS = 7;
 export const RECHECK_DAYS_LIMITS = { min: 1, max: 90 } as const;
