@@ -30,6 +30,7 @@ export function CrossSectionSvg({
   style,
   width,
   height,
+  frame,
 }: {
   drawing: Drawing;
   id: string;
@@ -39,9 +40,12 @@ export function CrossSectionSvg({
   style?: CSSProperties;
   width?: number;
   height?: number;
+  /** The part of the drawing shown, in the engine's frame (mm, y up); the whole laid-out drawing when left out. */
+  frame?: { x: number; y: number; w: number; h: number };
 }) {
   const { model, layout, description } = drawing;
-  const { viewBox: v, mmPerPx, fontMm } = layout;
+  const { mmPerPx, fontMm } = layout;
+  const v = frame ?? layout.viewBox;
   const sideOf = (dimId: string) =>
     dimId.startsWith("current-") ? SIDE_STYLE.current : dimId.startsWith("planned-") ? SIDE_STYLE.planned : null;
   const calloutFill = (cid: string) =>
