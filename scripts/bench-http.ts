@@ -1,13 +1,15 @@
 /**
- * HTTP benchmark of the share page against GET /api/health, in the same run: `npm run bench:http`.
+ * HTTP benchmark of the share page and a visitor's /workspace against GET /api/health, in the same
+ * run: `npm run bench:http`.
  *
  *   BENCH_URL       server to measure (default http://127.0.0.1:3000): `npm start`, or scripts/serve.ts
  *   BENCH_SLUG      share slug to load; unset: signs in as the demo member and takes her live link
  *   BENCH_EMAIL / BENCH_PASSWORD   account for that lookup (default: the demo member)
  *   BENCH_CONNECTIONS (50), BENCH_DURATION seconds per target (20)
  *
- * Prints both throughputs, their ratio (share / health; target ≥ 0.5), the share page's p99
- * latency (target ≤ 100 ms) and error counts, and whether a repeated share view came from the
+ * Prints the throughputs, each page's ratio to the health route (target ≥ 0.5), the share page's
+ * p99 latency (target ≤ 100 ms), the visitor's workspace's (no cookie, no query: the prerendered
+ * page, proxy.ts; target ≤ 150 ms) and error counts, and whether a repeated share view came from the
  * server's micro-cache (scripts/serve.ts; HUBFACE_MICROCACHE=off on the server turns it off).
  * A benchmark, never a test: it exits 0 whatever the figures are (1 only when it cannot run).
  */
@@ -18,6 +20,8 @@ const CONNECTIONS = Number(process.env.BENCH_CONNECTIONS ?? 50);
 const DURATION = Number(process.env.BENCH_DURATION ?? 20);
 const RATIO_TARGET = 0.5;
 const P99_TARGET_MS = 100;
+const WORKSPACE_P99_TARGET_MS = 150;
+const WORKSPACE_PATH = "/workspace";
 
 /** Cookies from a response, for next-auth's credential sign-in. */
 function cookiesOf(res: Response, jar: Map<string, string>) {
@@ -62,7 +66,7 @@ async function main() {
   const slug = process.env.BENCH_SLUG ?? (await demoSlug());
   const sharePath = `/s/${slug}`;
   let servedBy = "";
-  for (const p of ["/api/health", sharePath, sharePath]) {
+  for (const p of ["/api/health", sharePath, sharePath, WORKSPACE_PATH]) {
     const res = await fetch(`${BASE}${p}`);
     if (res.status !== 200) throw new Error(`GET ${p} answered ${res.status} before the run`);
     await res.arrayBuffer();
@@ -74,7 +78,9 @@ async function main() {
   );
   const health = await run("/api/health");
   const share = await run(sharePath);
+  const workspace = await run(WORKSPACE_PATH);
   const ratio = share.requests.average / health.requests.average;
+  const workspaceRatio = workspace.requests.average / health.requests.average;
   const mark = (ok: boolean) => (ok ? "meets" : "MISSES");
   console.log(
     `GET /api/health    ${fmt(health.requests.average, 1)} req/s  p99 ${fmt(health.latency.p99)} ms  errors ${failures(health)} (${health.errors} errors, ${health.timeouts} timeouts, ${health.non2xx} non-2xx)`,
@@ -87,6 +93,14 @@ async function main() {
     `share p99          ${fmt(share.latency.p99)} ms  (target ≤ ${P99_TARGET_MS} ms: ${mark(share.latency.p99 <= P99_TARGET_MS)})`,
   );
   console.log(`share errors       ${failures(share)}  (target 0: ${mark(failures(share) === 0)})`);
+  console.log(
+    `GET /workspace     ${fmt(workspace.requests.average, 1)} req/s  p99 ${fmt(workspace.latency.p99)} ms  errors ${failures(workspace)} (${workspace.errors} errors, ${workspace.timeouts} timeouts, ${workspace.non2xx} non-2xx)`,
+  );
+  console.log(`ratio workspace/health ${fmt(workspaceRatio, 2)}  (target ≥ ${RATIO_TARGET}: ${mark(workspaceRatio >= RATIO_TARGET)})`);
+  console.log(
+    `workspace p99      ${fmt(workspace.latency.p99)} ms  (target ≤ ${WORKSPACE_P99_TARGET_MS} ms: ${mark(workspace.latency.p99 <= WORKSPACE_P99_TARGET_MS)})`,
+  );
+  console.log(`workspace errors   ${failures(workspace)}  (target 0: ${mark(failures(workspace) === 0)})`);
 }
 
 main().catch((e: unknown) => {

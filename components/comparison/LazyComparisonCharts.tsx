@@ -1,8 +1,10 @@
 "use client";
 import dynamic from "next/dynamic";
+import { useRef } from "react";
 import type { ComparisonResult } from "@/lib/comparisons/compute";
 import type { DisplayPrefs } from "@/lib/comparisons/format";
 import { CHART_HEIGHT_RESERVED } from "./chartSize";
+import { useVisibleAndIdle } from "./useVisibleAndIdle";
 
 function ChartsPlaceholder() {
   return (
@@ -16,7 +18,14 @@ function ChartsPlaceholder() {
 
 const Charts = dynamic(() => import("./ComparisonCharts"), { ssr: false, loading: ChartsPlaceholder });
 
-/** The charts, loaded after the page (recharts is not in the first-load JavaScript); space is reserved meanwhile. */
+/**
+ * The charts, loaded only when they come near the viewport and the browser is idle: recharts is
+ * neither in the first-load JavaScript nor parsed and drawn while the page is becoming
+ * interactive (it was most of the workspace's blocking time). The placeholder has the charts'
+ * exact height (chartSize.ts), so nothing moves when they arrive.
+ */
 export function LazyComparisonCharts({ result, prefs }: { result: ComparisonResult; prefs: DisplayPrefs }) {
-  return <Charts result={result} prefs={prefs} />;
+  const box = useRef<HTMLDivElement>(null);
+  const ready = useVisibleAndIdle(box);
+  return <div ref={box}>{ready ? <Charts result={result} prefs={prefs} /> : <ChartsPlaceholder />}</div>;
 }

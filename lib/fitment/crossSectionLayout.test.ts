@@ -25,7 +25,7 @@ const STOCK = setupGeometry({ tire: "265/70R17", wheel: { diameterIn: 17, widthI
 const STOCK_INPUT = { tire: "265/70R17", wheel: { diameterIn: 17, widthIn: 8, offsetMm: 25 } };
 
 /**
- * Labels as long as the workspace writes them (components/comparison/crossSection/text.ts): the
+ * Labels as long as the workspace writes them (lib/comparisons/crossSection/text.ts): the
  * kind of figure and its value in sixteenths of an inch, the longest style; the setup is told by
  * the line style and the legend, not repeated on every figure.
  */

@@ -1,4 +1,6 @@
 import sharp from "sharp";
+import { mkdirSync, writeFileSync } from "node:fs";
+import { join } from "node:path";
 import { afterAll, afterEach, beforeAll, describe, expect, it, vi } from "vitest";
 import { DEFAULT_INPUT } from "@/lib/comparisons/schema";
 import { rebuild, testDb } from "./support/db";
@@ -72,6 +74,28 @@ describe("share Open Graph image", () => {
   it.each(NAMES)("is a valid PNG, drawn without the network, for a name in %s", async (_label, name) => {
     const { res, png } = await render(name);
     await expectValidPng(res, png);
+  });
+
+  it("draws the share page's cross-section, wheels and all, in the left panel (left in test-results/ to look at)", async () => {
+    const { png } = await render("Trail build");
+    mkdirSync(join(process.cwd(), "test-results", "share-og"), { recursive: true });
+    writeFileSync(join(process.cwd(), "test-results", "share-og", "image.png"), png);
+    // The panel: x 56–616, y about 190–590 at 1200 × 630.
+    const { data, info } = await sharp(png)
+      .extract({ left: 56, top: 190, width: 560, height: 400 })
+      .raw()
+      .toBuffer({ resolveWithObject: true });
+    const near = (rgb: [number, number, number], tol: number) => {
+      let n = 0;
+      for (let i = 0; i < data.length; i += info.channels)
+        if (Math.abs(data[i]! - rgb[0]) <= tol && Math.abs(data[i + 1]! - rgb[1]) <= tol && Math.abs(data[i + 2]! - rgb[2]) <= tol) n++;
+      return n;
+    };
+    // Both setups' strokes (steel #245a88, ember #bd460f) and the wheel's grey fill
+    // (rgb 163 172 184 at 35 % over white = 223 226 230): the wheel is drawn, not only the tires.
+    expect(near([0x24, 0x5a, 0x88], 30)).toBeGreaterThan(200);
+    expect(near([0xbd, 0x46, 0x0f], 30)).toBeGreaterThan(200);
+    expect(near([223, 226, 230], 4)).toBeGreaterThan(200);
   });
 
   it("answers 404 for a slug that is not live", async () => {

@@ -7,13 +7,10 @@ import { GARAGE_ACCESS } from "@/lib/garage/access";
 import { comparisonQueries } from "@/lib/comparisons/queries";
 import { garageQueries } from "@/lib/garage/queries";
 import { SaveSlot } from "./SaveSlot";
+import { WORKSPACE_LEAD, WORKSPACE_METADATA } from "./pageText";
 import { Workspace } from "./Workspace";
 
-export const metadata: Metadata = {
-  title: "Comparison workspace",
-  description:
-    "Your current wheel and tire setup beside the one you plan: diameter, clearance, poke, scrub, track, speedometer and engine speed, with a to-scale drawing.",
-};
+export const metadata: Metadata = WORKSPACE_METADATA;
 
 /** `saved=<id>`: the saved comparison this link was opened from (the caller's own; anything else is ignored). */
 async function openedFrom(userId: string | undefined, raw: string | null) {
@@ -23,6 +20,10 @@ async function openedFrom(userId: string | undefined, raw: string | null) {
   return c ? { id: c.id, name: c.name, vehicleId: c.vehicleId, input: c.input } : null;
 }
 
+/**
+ * The workspace rendered for the request: members (their garage, their saved comparison) and
+ * links carrying a comparison. A visitor's bare /workspace is the prerendered ./visitor page (proxy.ts).
+ */
 export default async function WorkspacePage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const sp = await searchParams;
   const { input, problems } = decodeComparison(sp);
@@ -34,10 +35,7 @@ export default async function WorkspacePage({ searchParams }: { searchParams: Pr
   const garage = vehicles ? { vehicles, initialVehicleId: vehicles.some((v) => v.id === wanted) ? wanted : null } : null;
   return (
     <>
-      <PageHeader
-        title="Comparison workspace"
-        lead="Enter what you run and what you plan. Every figure updates as you type, in your browser; the link in the address bar reproduces this comparison."
-      />
+      <PageHeader title="Comparison workspace" lead={WORKSPACE_LEAD} />
       <Workspace
         initialInput={input}
         initialProblems={problems}

@@ -7,7 +7,7 @@ import type { DisplayPrefs } from "@/lib/comparisons/format";
 import { type ComparisonInput, DEFAULT_INPUT } from "@/lib/comparisons/model";
 import type { Setup } from "@/lib/setup/model";
 import { CrossSection } from "./CrossSection";
-import type { DrawnLimits } from "./drawing";
+import type { DrawnLimits } from "@/lib/comparisons/crossSection/drawing";
 
 afterEach(cleanup);
 

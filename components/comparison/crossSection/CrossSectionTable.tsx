@@ -1,7 +1,7 @@
 import type { ComparisonResult } from "@/lib/comparisons/compute";
 import { type DisplayPrefs, formatNumber, formatPartThickness } from "@/lib/comparisons/format";
 import type { CrossSectionModel } from "@/lib/fitment/crossSection";
-import { len, offsetText, signedLen } from "./text";
+import { len, offsetText, signedLen } from "@/lib/comparisons/crossSection/text";
 
 const STATUS = { clear: "clear", tight: "closer than the margin", contact: "predicted contact" } as const;
 const NOT_DRAWN = {

@@ -16,6 +16,7 @@ import {
 } from "@/lib/fitment";
 import { assessChange } from "@/lib/comparisons/assess/assessChange";
 import { type Finding, type FindingKind, type FindingOf, findingsOf } from "@/lib/comparisons/assess/vocabulary";
+import type { Setup } from "@/lib/setup/model";
 import { checkWheelOnHub, hubRefusal } from "./hubFit";
 
 export interface CurrentSetup {
@@ -65,10 +66,24 @@ export interface FitmentSummary {
    * judgement takes it from the figures above (see cautions.ts).
    */
   findings?: Finding[];
+  /**
+   * The two setups the figures were computed from, for the drawing (quote PDF). Summaries stored
+   * before it was kept have none: the drawing then reads the wheel texts above (drawing.ts).
+   */
+  setups?: { current: Setup; planned: Setup };
 }
 
-/** A summary just computed: its findings are there. */
-type FitmentReading = FitmentSummary & { findings: Finding[] };
+/** A summary just computed: its findings and setups are there. */
+type FitmentReading = FitmentSummary & { findings: Finding[]; setups: { current: Setup; planned: Setup } };
+
+/** A setup as the engine computed it: the offset it used (spacer apart) and the spacer. */
+const setupOf = (g: SetupGeometry): Setup => ({
+  tire: g.tire.text,
+  wheelDiameterIn: g.wheel.diameterIn,
+  wheelWidthIn: g.wheel.widthIn,
+  position: { mode: "offset", offsetMm: g.wheel.offsetMm },
+  spacerMm: g.spacerMm,
+});
 
 const r1 = (x: number) => Math.round(x * 10) / 10;
 const inches = (mm: number) => `${r1(mmToIn(Math.abs(mm)))} in`;
@@ -170,6 +185,7 @@ function fromComparison(
     modifications: worded(findings, modifications(axleGiven)),
     warnings: worded(findings, WARNINGS),
     findings,
+    setups: { current: setupOf(cur), planned: setupOf(plan) },
   };
 }
 

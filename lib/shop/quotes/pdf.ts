@@ -1,8 +1,10 @@
 import "server-only";
 import { join } from "node:path";
 import PDFDocument from "pdfkit";
+import SVGtoPDF from "svg-to-pdfkit";
 import { quoteCautions } from "./cautions";
 import { type QuoteDocument, hubCautions } from "./document";
+import { type QuoteDrawing, quoteDrawing } from "./drawing";
 import { fitmentChangeRows } from "./fitment";
 import { formatBp, formatUsd } from "./money";
 import { formatQuantity } from "./quantity";
@@ -16,17 +18,59 @@ import { formatQuantity } from "./quantity";
 const FONT_DIR = join(process.cwd(), "node_modules/@expo-google-fonts/inter");
 const REGULAR = join(FONT_DIR, "400Regular/Inter_400Regular.ttf");
 const BOLD = join(FONT_DIR, "700Bold/Inter_700Bold.ttf");
+const ITALIC = join(FONT_DIR, "400Regular_Italic/Inter_400Regular_Italic.ttf");
+const BOLD_ITALIC = join(FONT_DIR, "700Bold_Italic/Inter_700Bold_Italic.ttf");
 
 /** Scripts the embedded font draws; anything else (e.g. CJK) prints as "?" rather than an empty box. */
 const plain = (s: string) =>
   s
     .replace(/≈/g, "~")
     .replace(/[^\n\x20-\x7E\xA0-\u024F\u0370-\u03FF\u0400-\u04FF\u1E00-\u1EFF\u2010-\u2027\u2030-\u205E\u20AC\u2190-\u2193\u2212]/gu, "?");
+/**
+ * A colour the PDF's SVG reader does not parse itself: CSS's space-separated `rgb(r g b / a)`,
+ * which the drawing uses for its translucent fills.
+ */
+function cssColour(parsed: SVGtoPDF.Color | undefined, raw?: string): SVGtoPDF.Color | undefined {
+  if (parsed) return parsed;
+  const m = /^rgba?\(\s*(\d+)\s+(\d+)\s+(\d+)\s*(?:\/\s*([\d.]+)\s*)?\)$/i.exec(raw?.trim() ?? "");
+  return m ? [[Number(m[1]), Number(m[2]), Number(m[3])], m[4] === undefined ? 1 : Number(m[4])] : undefined;
+}
+
+/**
+ * The cross-section on a page of its own (it is tall: the whole tire, ground to top), as large
+ * as the page allows, with the key to its line styles. Drawn with the embedded Inter.
+ */
+function drawingPage(doc: PDFKit.PDFDocument, drawing: QuoteDrawing, text: (s: string, o?: PDFKit.Mixins.TextOptions) => void) {
+  doc.addPage();
+  doc.font("Body-Bold").fontSize(12);
+  text("Side by side at the hub");
+  doc.font("Body").fontSize(9);
+  text(
+    "To scale, seen from the front, inboard to the left. Current: solid lines, upright figures; planned (the quoted wheel and tire): dashed lines, italic figures. " +
+      "Flange, bead seat, pad and sidewall shapes are schematic; every position and dimension is computed from the two setups' figures.",
+    { width: doc.page.width - 100 },
+  );
+  doc.moveDown(0.5);
+  const top = doc.y;
+  const height = doc.page.height - 50 - top;
+  const width = Math.min(doc.page.width - 100, height * drawing.aspect);
+  const x = (doc.page.width - width) / 2;
+  SVGtoPDF(doc as unknown as Parameters<typeof SVGtoPDF>[0], drawing.svg, x, top, {
+    width,
+    height: width / drawing.aspect,
+    fontCallback: (_family, bold, italic) => (bold ? (italic ? "Body-BoldItalic" : "Body-Bold") : italic ? "Body-Italic" : "Body"),
+    colorCallback: cssColour as unknown as SVGtoPDF.Options["colorCallback"],
+    // The quote still goes out; the warning says what of the drawing the reader could not draw.
+    warningCallback: (w) => console.warn(`quote drawing: ${w}`),
+  });
+}
+
 const date = (d: Date | string) => new Date(d).toLocaleDateString("en-US", { year: "numeric", month: "short", day: "numeric" });
 
 /**
  * The quote as a PDF (US Letter), set in the embedded Inter (no font fetched from anywhere).
- * It prints a QuoteDocument only, so a sent quote prints from what was sent.
+ * It prints a QuoteDocument only, so a sent quote prints from what was sent; the last page is the
+ * cross-section of the current and quoted setups (drawing.tsx), when the summary's setups read.
  */
 export function quotePdf(d: QuoteDocument): Promise<Buffer> {
   const { shop, customer, lines, totals: t } = d;
@@ -34,6 +78,8 @@ export function quotePdf(d: QuoteDocument): Promise<Buffer> {
   const doc = new PDFDocument({ size: "LETTER", margin: 50, info: { Title: `Quote Q-${d.number}`, Author: shop.name }, font: REGULAR });
   doc.registerFont("Body", REGULAR);
   doc.registerFont("Body-Bold", BOLD);
+  doc.registerFont("Body-Italic", ITALIC);
+  doc.registerFont("Body-BoldItalic", BOLD_ITALIC);
   const chunks: Buffer[] = [];
   doc.on("data", (c: Buffer) => chunks.push(c));
   const done = new Promise<Buffer>((resolve, reject) => {
@@ -136,6 +182,8 @@ export function quotePdf(d: QuoteDocument): Promise<Buffer> {
   heading("Cautions");
   doc.fontSize(9);
   for (const c of quoteCautions(fit)) text(`- ${c}`, { width: W });
+  const drawing = quoteDrawing(fit);
+  if (drawing) drawingPage(doc, drawing, text);
   doc.end();
   return done;
 }

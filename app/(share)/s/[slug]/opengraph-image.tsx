@@ -1,17 +1,19 @@
 import type { ReactElement } from "react";
 import { ImageResponse } from "next/og";
-import type { ComparisonResult, SetupFigures } from "@/lib/comparisons/compute";
+import type { ComparisonResult } from "@/lib/comparisons/compute";
 import { computeComparison } from "@/lib/comparisons/compute";
 import { DEFAULT_PREFS, formatLen, formatLenOther, formatNumber, formatSpeedIn } from "@/lib/comparisons/format";
 import { readingPhrase } from "@/lib/comparisons/speedometer";
-import { inToMm } from "@/lib/fitment";
+import { CrossSectionSvg } from "@/lib/comparisons/crossSection/CrossSectionSvg";
+import { buildDrawing } from "@/lib/comparisons/crossSection/drawing";
+import { svgMarkup } from "@/lib/comparisons/crossSection/markup";
 import { type CoveredFont, fontsFor } from "./_og/fonts";
 import { drawableText } from "./_og/text";
 import { getSharedComparison } from "./data";
 
 /**
- * The Open Graph image of a shared comparison: a simplified cross-section of both setups at
- * the hub face (to scale, lower half) and the headline numbers.
+ * The Open Graph image of a shared comparison: the share page's cross-section of both setups
+ * at the hub face (to scale, lower half, without its words) and the headline numbers.
  *
  * Fonts: the image is drawn only with fonts shipped with the app (_og/fonts.ts): Latin,
  * Latin Extended, Vietnamese, Cyrillic, Greek, Hebrew and Arabic always; Noto Emoji and the
@@ -33,96 +35,26 @@ const PAPER = "#fbf8f3";
 /** Used when a name cannot be drawn (mostly characters no shipped font has). */
 const PLAIN_TITLE = "Shared comparison";
 
-/** One setup as the drawing shows it: tire section between its swings, rim at its radius. */
-function tireShape(f: SetupFigures, sx: (x: number) => number, sy: (y: number) => number, colour: string, dashed: boolean) {
-  const rim = inToMm(f.wheelDiameterIn) / 2;
-  const R = f.overallDiameterMm / 2;
-  const x0 = sx(-f.innerSwingMm);
-  const x1 = sx(f.outerSwingMm);
-  const y0 = sy(rim);
-  const y1 = sy(R);
-  const round = Math.min((x1 - x0) / 4, (y1 - y0) / 3);
-  const dash = dashed ? "10 7" : undefined;
-  return (
-    <g>
-      <rect
-        x={x0}
-        y={y0}
-        width={x1 - x0}
-        height={y1 - y0}
-        rx={round}
-        fill={dashed ? "rgba(226,91,22,0.10)" : "rgba(47,114,168,0.14)"}
-        stroke={colour}
-        strokeWidth={4}
-        strokeDasharray={dash}
-      />
-      {/* rim barrel between the bead seats, and the wheel's centre line */}
-      <line
-        x1={sx(-f.beadSeatInboardMm)}
-        x2={sx(f.beadSeatOutboardMm)}
-        y1={y0}
-        y2={y0}
-        stroke={colour}
-        strokeWidth={6}
-        strokeDasharray={dash}
-      />
-      <line
-        x1={sx(-f.effectiveOffsetMm)}
-        x2={sx(-f.effectiveOffsetMm)}
-        y1={y0 - 6}
-        y2={y1}
-        stroke={colour}
-        strokeWidth={1.5}
-        strokeDasharray="3 5"
-      />
-    </g>
-  );
-}
-
+/**
+ * The workspace's drawing (CrossSectionSvg), below the axle only and without words: the image's
+ * renderer draws SVG text with no font of ours, and the card beside it carries the figures. It is
+ * handed over as an SVG image, which the renderer draws whole (paths, dashes, translucent fills).
+ */
 function Drawing({ r, width, height }: { r: ComparisonResult; width: number; height: number }) {
-  const inner = Math.max(r.current.innerSwingMm, r.planned.innerSwingMm);
-  const outer = Math.max(r.current.outerSwingMm, r.planned.outerSwingMm, r.fenderLineMm ?? 0);
-  const R = Math.max(r.current.overallDiameterMm, r.planned.overallDiameterMm) / 2;
-  const pad = 24;
-  const scale = Math.min((width - 2 * pad) / (inner + outer), (height - 2 * pad) / R);
-  const ox = pad + inner * scale + (width - 2 * pad - (inner + outer) * scale) / 2;
-  const sx = (x: number) => Math.round((ox + x * scale) * 10) / 10;
-  const sy = (y: number) => Math.round((pad + y * scale) * 10) / 10;
-  return (
-    <svg width={width} height={height} viewBox={`0 0 ${width} ${height}`}>
-      {tireShape(r.current, sx, sy, STEEL, false)}
-      {tireShape(r.planned, sx, sy, EMBER, true)}
-      <line x1={sx(0)} x2={sx(0)} y1={sy(0)} y2={height - 4} stroke={INK} strokeWidth={3} />
-      <line
-        x1={0}
-        x2={width}
-        y1={sy(r.current.overallDiameterMm / 2)}
-        y2={sy(r.current.overallDiameterMm / 2)}
-        stroke={STEEL}
-        strokeWidth={3}
-      />
-      <line
-        x1={0}
-        x2={width}
-        y1={sy(r.planned.overallDiameterMm / 2)}
-        y2={sy(r.planned.overallDiameterMm / 2)}
-        stroke={EMBER}
-        strokeWidth={3}
-        strokeDasharray="10 7"
-      />
-      {r.fenderLineMm !== null && (
-        <line
-          x1={sx(r.fenderLineMm)}
-          x2={sx(r.fenderLineMm)}
-          y1={sy(0)}
-          y2={sy(R)}
-          stroke="#7d1710"
-          strokeWidth={2}
-          strokeDasharray="4 5"
-        />
-      )}
-    </svg>
-  );
+  const drawing = buildDrawing(r, DEFAULT_PREFS);
+  const { model } = drawing;
+  const e = model.extents;
+  // From below the lower ground to a little above the axle: the lower half of both setups,
+  // widened or heightened to the panel's proportions (the renderer stretches an image to its box).
+  const bottom = e.minY - 10;
+  const h0 = model.axleY + 40 - bottom;
+  const w0 = e.maxX - e.minX;
+  const aspect = width / height;
+  const w = Math.max(w0, h0 * aspect);
+  const h = w / aspect;
+  const frame = { x: e.minX - (w - w0) / 2, y: bottom, w, h };
+  const svg = svgMarkup(<CrossSectionSvg drawing={drawing} id="og" labels={false} width={width} height={height} frame={frame} />);
+  return <img alt="" width={width} height={height} src={`data:image/svg+xml;base64,${Buffer.from(svg).toString("base64")}`} />;
 }
 
 function Stat({ label, value, sub }: { label: string; value: string; sub: string }) {
