@@ -1,6 +1,6 @@
 import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { BASE, launch, seriousViolations, shot } from "./support/browser";
+import { BASE, chartsShown, launch, seriousViolations, shot } from "./support/browser";
 import { DEMO, DEMO_PASSWORD } from "./support/http";
 
 /**
@@ -126,7 +126,7 @@ describe("saved comparisons and share links in Chromium", () => {
       await expect.poll(() => r.getByRole("heading", { level: 1 }).innerText()).toBe(RENAMED);
       await expect.poll(() => headlineText(r)).toBe(headline);
       await expect.poll(() => r.getByTestId("cross-section").isVisible()).toBe(true);
-      await expect.poll(() => r.getByTestId("charts").isVisible(), { timeout: 20000 }).toBe(true);
+      await chartsShown(r);
       expect(await r.getByRole("link", { name: "Sign in" }).count()).toBeGreaterThan(0); // no account here
       // Open Graph: title and an image that is a PNG.
       expect(await r.locator('meta[property="og:title"]').getAttribute("content")).toBe(`${RENAMED} — shared comparison`);
@@ -154,7 +154,7 @@ describe("saved comparisons and share links in Chromium", () => {
       const reloaded = await r.reload();
       expect(reloaded?.headers()["x-hubface-cache"]).toBe("hit");
       await expect.poll(() => headlineText(r)).toBe(headline);
-      await expect.poll(() => r.getByTestId("charts").isVisible(), { timeout: 20000 }).toBe(true);
+      await chartsShown(r);
       await axeClean(r, "comparisons-share-from-microcache");
 
       // …and still, when the owner revokes, the link is gone at once.

@@ -152,7 +152,8 @@ describe("install booking", () => {
       await signInAs(o, DEMO.shop_owner, DEMO_PASSWORD);
       await o.goto("/shop/bays");
       await o.getByRole("heading", { name: "Bays and hours" }).waitFor();
-      expect(await o.getByLabel("Bay 1 name").inputValue()).toBe("Lift 1");
+      // The form fills its fields when it hydrates (react-hook-form sets them on mount).
+      await expect.poll(() => o.getByLabel("Bay 1 name").inputValue(), { timeout: 20000 }).toBe("Lift 1");
       await checkA11y(o, "/shop/bays");
       await shot(o, "booking-bays-and-hours");
       // A closing time before the opening time is refused beside the field, before anything is sent.

@@ -1,6 +1,6 @@
 import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launch, seriousViolations, shot } from "./support/browser";
+import { chartsShown, launch, seriousViolations, shot } from "./support/browser";
 
 let browser: Awaited<ReturnType<typeof launch>>;
 beforeAll(async () => {
@@ -39,7 +39,7 @@ describe("comparison workspace in Chromium", () => {
     // Speedometer: 60 × 889 / 802.8 = 66.44 mph (ratio of diameters, handbook).
     expect(await figure(page, "change-speed").textContent()).toBe("66.4 mph");
     await expect.poll(() => page.getByTestId("cross-section").isVisible()).toBe(true);
-    await expect.poll(() => page.getByTestId("charts").isVisible(), { timeout: 20000 }).toBe(true);
+    await chartsShown(page);
     expect(await page.getByTestId("warnings").locator("[data-kind=speedometer]").count()).toBe(1);
     link = page.url();
     expect(link).toContain("pt=35x12.50R17LT");
@@ -97,7 +97,7 @@ describe("comparison workspace in Chromium", () => {
     try {
       const page = await phone.context.newPage();
       await page.goto(`${link}&kpi=8&fender=150`, { waitUntil: "networkidle" });
-      await expect.poll(() => page.getByTestId("charts").isVisible(), { timeout: 20000 }).toBe(true);
+      await chartsShown(page);
       const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
       expect(overflow).toBeLessThanOrEqual(0);
       await shot(page, "workspace-375");

@@ -38,7 +38,7 @@ export function LoadPressureFigures({ plan, prefs }: { plan: LoadPlan; prefs: Di
   const p = plan.planned;
   return (
     <div className="flex flex-col gap-3">
-      <div className="overflow-x-auto">
+      <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Cold pressures per axle (scrolls sideways on narrow screens)">
         <table className="w-full min-w-[36rem] text-sm">
           <caption className="mb-1 text-left text-sm text-basalt-700">
             Cold pressures for {p.text}, carrying what {plan.placard.text} carries at the placard pressure

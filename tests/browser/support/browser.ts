@@ -62,3 +62,13 @@ export async function signInAs(page: Page, email: string, password: string): Pro
   await page.getByRole("button", { name: "Sign in" }).click();
   await page.waitForURL((u) => !u.pathname.startsWith("/sign-in"), { timeout: 20000 });
 }
+
+/**
+ * The comparison charts load when they come near the viewport (LazyComparisonCharts): scroll to
+ * their placeholder as a reader does, then wait for them.
+ */
+export async function chartsShown(page: Page): Promise<void> {
+  const placeholder = page.getByRole("status", { name: "Loading charts" });
+  if (await placeholder.count()) await placeholder.first().scrollIntoViewIfNeeded();
+  await page.getByTestId("charts").first().waitFor({ state: "visible", timeout: 20000 });
+}
