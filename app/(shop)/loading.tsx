@@ -1,5 +1,0 @@
-import { PageLoading } from "@/components/feedback/PageLoading";
-
-export default function Loading() {
-  return <PageLoading />;
-}
