@@ -4,7 +4,7 @@ import { z } from "zod";
 import { admits, currentCaller } from "@/lib/platform/auth/session";
 import { pageGuard } from "@/lib/platform/http/pageGuard";
 import { quoteQueries, quoteScopeOf } from "@/lib/shop/quotes/queries";
-import { SHOP_DESK_ACCESS } from "@/lib/shop/access";
+import { SHOP_ANY } from "@/lib/shop/queries";
 
 /**
  * A quote that is missing or another shop's answers HTTP 404, checked here above this segment's
@@ -14,7 +14,7 @@ import { SHOP_DESK_ACCESS } from "@/lib/shop/access";
 export default async function QuoteLayout({ children, params }: { children: ReactNode; params: Promise<{ id: string }> }) {
   const { id } = await params;
   const caller = await currentCaller();
-  if (caller && admits(SHOP_DESK_ACCESS, caller)) {
+  if (caller && admits(SHOP_ANY, caller)) {
     if (!z.uuid().safeParse(id).success) notFound();
     await pageGuard(quoteQueries.getQuoteDetail(quoteScopeOf(caller), id));
   }
