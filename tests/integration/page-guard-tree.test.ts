@@ -23,7 +23,7 @@ describe("the item pages' guards run before anything streams", () => {
         if (existsSync(path)) expect(readFileSync(path, "utf8"), `${dir}/${file}`).not.toMatch(/<Suspense\b/);
       }
     }
-    expect(readFileSync(join(process.cwd(), segment, "layout.tsx"), "utf8")).toMatch(/pageGuard\(/);
+    expect(readFileSync(join(process.cwd(), segment, "layout.tsx"), "utf8")).toMatch(/guardLayout\(/);
     expect(existsSync(join(process.cwd(), segment, "loading.tsx"))).toBe(true);
   });
 });

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { CATALOG_KINDS } from "@/lib/platform/db/types";
+import { pagingFields } from "@/lib/platform/validation/paging";
 
 export const CATALOG_SORT_KEYS = ["sku", "description", "price_cents", "qty_on_hand", "kind", "tire_diameter_mm", "updated_at"] as const;
 
@@ -9,18 +10,7 @@ export const catalogQuerySchema = z.object({
   q: z.string().trim().max(100, "Use at most 100 characters.").optional(),
   sort: z.enum(CATALOG_SORT_KEYS, "Sort by one of the table's columns.").optional(),
   dir: z.enum(["asc", "desc"], "Sort ascending or descending.").optional(),
-  page: z.coerce
-    .number("Use a page number.")
-    .int("Use a whole page number.")
-    .min(1, "Pages start at 1.")
-    .max(100000, "Use a page number up to 100,000.")
-    .optional(),
-  pageSize: z.coerce
-    .number("Use 1 to 200 rows per page.")
-    .int("Use 1 to 200 rows per page.")
-    .min(1, "Use 1 to 200 rows per page.")
-    .max(200, "Use 1 to 200 rows per page.")
-    .optional(),
+  ...pagingFields(200),
 });
 
 /** What the catalog table calls each control, so a refused query names it (CatalogTable.tsx). */

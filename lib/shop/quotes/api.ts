@@ -85,9 +85,18 @@ export interface QuoteListItem {
   depositCents: number;
   vehicleDescription: string;
   customerName: string;
+  customerPhone: string;
   createdByName: string | null;
   validUntil: string | null;
   createdAt: string;
+}
+
+/** One page of the quotes list and how many quotes match in all. */
+export interface QuotePage {
+  quotes: QuoteListItem[];
+  total: number;
+  page: number;
+  pageSize: number;
 }
 
 const iso = (d: Date | string) => new Date(d).toISOString();
@@ -190,6 +199,7 @@ export interface QuoteListRow {
   created_at: Date;
   valid_until: Date | null;
   customer_name: string;
+  customer_phone: string;
   created_by_name: string | null;
 }
 
@@ -202,6 +212,7 @@ export function quoteListItemDto(r: QuoteListRow): QuoteListItem {
     depositCents: r.deposit_cents,
     vehicleDescription: r.vehicle_description,
     customerName: r.customer_name,
+    customerPhone: r.customer_phone,
     createdByName: r.created_by_name,
     validUntil: isoOrNull(r.valid_until),
     createdAt: iso(r.created_at),

@@ -11,7 +11,10 @@ import type {
   ServiceType,
 } from "@/lib/platform/db/types";
 import { ConflictError, InvalidError, NotFoundError } from "@/lib/platform/errors";
-import { type QuoteListItem, type QuoteListRow, quoteListItemDto } from "@/lib/shop/quotes/api";
+import { type QuoteListItem, type QuoteListRow, type QuotePage, quoteListItemDto } from "@/lib/shop/quotes/api";
+import { QUOTE_EXPORT_MAX, QUOTE_PAGE_SIZE, type QuoteListQuery, type QuoteSort } from "@/lib/shop/quotes/listQuery";
+import { containsPattern, searchKey } from "@/lib/platform/search/normalize";
+import { phoneDigits } from "@/lib/shop/customers/queries";
 import { type HubCheck, type QuoteDocument, buildQuoteDocument, hubChecksOf } from "@/lib/shop/quotes/document";
 import { type FitmentSummary, summarize } from "@/lib/shop/quotes/fitment";
 import { checkWheelOnHub, hubRefusal } from "@/lib/shop/quotes/hubFit";
@@ -169,16 +172,11 @@ export async function getQuoteDetail(db: Knex, scope: QuoteScope, id: string): P
   return quoteDetail(db, await getQuote(db, scope, id));
 }
 
-export async function listQuotes(
-  db: Knex,
-  scope: QuoteScope,
-  opts: { status?: QuoteStatus; limit?: number } = {},
-): Promise<QuoteListItem[]> {
-  const q = scoped(db, scope)
+/** The caller's quotes with the customer's and the author's names, as the list and the export read them. */
+function listRows(db: Knex, scope: QuoteScope) {
+  return scoped(db, scope)
     .join("customers as c", "c.id", "quotes.customer_id")
     .leftJoin("users as u", "u.id", "quotes.created_by")
-    .orderBy("quotes.created_at", "desc")
-    .limit(opts.limit ?? 200)
     .select(
       "quotes.id",
       "quotes.number",
@@ -189,10 +187,74 @@ export async function listQuotes(
       "quotes.created_at",
       "quotes.valid_until",
       "c.name as customer_name",
+      "c.phone as customer_phone",
       "u.name as created_by_name",
     );
+}
+
+export async function listQuotes(
+  db: Knex,
+  scope: QuoteScope,
+  opts: { status?: QuoteStatus; limit?: number } = {},
+): Promise<QuoteListItem[]> {
+  const q = listRows(db, scope)
+    .orderBy("quotes.created_at", "desc")
+    .limit(opts.limit ?? 200);
   if (opts.status) q.andWhereRaw(`${EFFECTIVE_STATUS_SQL} = ?`, [opts.status]);
   return ((await q) as unknown as QuoteListRow[]).map(quoteListItemDto);
+}
+
+/** Each order of the list in SQL; the quote number last, so rows with equal keys keep one order across pages. */
+const SORT_SQL: Record<QuoteSort, string> = {
+  newest: "quotes.created_at desc",
+  oldest: "quotes.created_at asc",
+  number: "quotes.number desc",
+  customer: "lower(c.name) asc",
+  total: "quotes.total_cents desc",
+  validUntil: "quotes.valid_until asc nulls last",
+};
+
+/**
+ * The list narrowed to a search and a status. The search finds a quote by its number ("1042",
+ * "Q-1042"), the customer's name or the part of their e-mail before the @ (accents folded, as the
+ * customer search does), a phone number by its digits (four or more), a whole e-mail address, or
+ * words of the vehicle's description.
+ */
+function matching(db: Knex, scope: QuoteScope, query: Pick<QuoteListQuery, "q" | "status" | "sort">) {
+  const q = listRows(db, scope).orderByRaw(`${SORT_SQL[query.sort]}, quotes.number desc`);
+  if (query.status) q.andWhereRaw(`${EFFECTIVE_STATUS_SQL} = ?`, [query.status]);
+  const text = query.q?.trim() ?? "";
+  if (!text) return q;
+  const number = /^q?-?\s*(\d{1,9})$/i.exec(text)?.[1];
+  const digits = phoneDigits(text);
+  const key = searchKey(text);
+  // Nothing left to look for (only accents or punctuation): nothing matches, rather than everything.
+  if (!number && digits.length < 4 && !key && !text.includes("@")) return q.andWhereRaw("false");
+  return q.andWhere((w) => {
+    if (number) w.orWhere("quotes.number", Number(number));
+    if (digits.length >= 4) w.orWhereLike("c.phone_digits", containsPattern(digits));
+    if (key) {
+      w.orWhereLike("c.search_key", containsPattern(key));
+      w.orWhereRaw("hubface_search_key(quotes.vehicle_description) like ?", [containsPattern(key)]);
+    }
+    if (text.includes("@")) w.orWhereRaw("lower(c.email) like ?", [containsPattern(text.toLowerCase())]);
+  });
+}
+
+/** One page of the list for the list's search, status and order, with the number of matches. */
+export async function pageQuotes(db: Knex, scope: QuoteScope, query: QuoteListQuery): Promise<QuotePage> {
+  const page = query.page ?? 1;
+  const pageSize = query.pageSize ?? QUOTE_PAGE_SIZE;
+  const base = matching(db, scope, query);
+  const [counted] = await base.clone().clearSelect().clearOrder().count({ n: "*" });
+  const rows = (await base.limit(pageSize).offset((page - 1) * pageSize)) as unknown as QuoteListRow[];
+  return { quotes: rows.map(quoteListItemDto), total: Number(counted?.n ?? 0), page, pageSize };
+}
+
+/** Every match of the list's search, status and order, for the CSV export (at most QUOTE_EXPORT_MAX). */
+export async function exportQuotes(db: Knex, scope: QuoteScope, query: QuoteListQuery): Promise<QuoteListItem[]> {
+  const rows = (await matching(db, scope, query).limit(QUOTE_EXPORT_MAX)) as unknown as QuoteListRow[];
+  return rows.map(quoteListItemDto);
 }
 
 type LineDraft = Omit<QuoteLineRow, "id" | "quote_id" | "position" | "line_total_cents">;
@@ -591,10 +653,12 @@ export const quoteQueries = bindAppDb({
   answerByToken,
   createQuote,
   expireDue,
+  exportQuotes,
   findByToken,
   getQuoteDetail,
   latestSentDocument,
   listQuotes,
+  pageQuotes,
   staffTransition,
   updateDraft,
 });

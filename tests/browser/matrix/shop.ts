@@ -63,6 +63,7 @@ export const cases: MatrixCase[] = [
     expect: only([...SHOP], 422),
   },
   { route: "/api/shop/quotes", method: "GET", path: "/api/shop/quotes", expect: only([...SHOP]) },
+  { route: "/api/shop/quotes/export", method: "GET", path: "/api/shop/quotes/export?q=Q-1", expect: only([...SHOP]) },
   { route: "/api/shop/quotes", method: "POST", path: "/api/shop/quotes", body: { quantity: 6 }, expect: only([...SHOP], 422) },
   { route: "/api/shop/quotes/[id]", method: "GET", path: `/api/shop/quotes/${DRAFT}`, expect: only([...SHOP]) },
   {
