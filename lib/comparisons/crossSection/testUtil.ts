@@ -4,22 +4,19 @@
  */
 import type { Setup } from "@/lib/setup/model";
 
+/** A setup placed by its offset, as the workspace holds it. */
+const byOffset = (tire: string, wheelDiameterIn: number, wheelWidthIn: number, offsetMm: number, spacerMm = 0): Setup => ({
+  tire,
+  wheelDiameterIn,
+  wheelWidthIn,
+  position: { mode: "offset", offsetMm },
+  spacerMm,
+});
+
 /** 35x12.50R17 on 17x9, offset −12 mm. */
-export const SETUP_A: Setup = {
-  tire: "35x12.50R17",
-  wheelDiameterIn: 17,
-  wheelWidthIn: 9,
-  position: { mode: "offset", offsetMm: -12 },
-  spacerMm: 0,
-};
+export const SETUP_A = byOffset("35x12.50R17", 17, 9, -12);
 /** 285/75R16 on 16x8, offset 0, on a 38 mm spacer. */
-export const SETUP_B: Setup = {
-  tire: "285/75R16",
-  wheelDiameterIn: 16,
-  wheelWidthIn: 8,
-  position: { mode: "offset", offsetMm: 0 },
-  spacerMm: 38,
-};
+export const SETUP_B = byOffset("285/75R16", 16, 8, 0, 38);
 /**
  * 33x12.50R15 on 15x10, entered as 3.25 in of backspacing to the bead seat:
  * (3.25 − 5) × 25.4 = −44.45 mm offset (offset.ts, common practice, no source).
