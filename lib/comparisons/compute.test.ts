@@ -168,21 +168,17 @@ describe("computeComparison — warning thresholds", () => {
   });
 
   it("backspacing positions go through the engine (9.5 in wheel, 4 in to the flange = −31.75 mm; common practice, no source)", () => {
-    const x = computeComparison(
-      withPlanned({
-        tire: "35x12.50R17LT",
-        wheelWidthIn: 9.5,
-        position: { mode: "backspacing", backspacingIn: 4, reference: "flange", flangeIn: 0.5 },
-      }),
-    );
+    const on95 = (backspacingIn: number, reference: "flange" | "bead-seat") =>
+      computeComparison(
+        withPlanned({
+          tire: "35x12.50R17LT",
+          wheelWidthIn: 9.5,
+          position: { mode: "backspacing", backspacingIn, reference, flangeIn: 0.5 },
+        }),
+      );
+    const x = on95(4, "flange");
     expect(x.planned.offsetMm).toBeCloseTo(-31.75, 9);
-    const bead = computeComparison(
-      withPlanned({
-        tire: "35x12.50R17LT",
-        wheelWidthIn: 9.5,
-        position: { mode: "backspacing", backspacingIn: 3.5, reference: "bead-seat", flangeIn: 0.5 },
-      }),
-    );
+    const bead = on95(3.5, "bead-seat");
     expect(bead.planned.offsetMm).toBeCloseTo(-31.75, 9);
   });
 });

@@ -22,6 +22,7 @@ import {
   tireDimensions,
   type SetupComparison,
   type SetupGeometry,
+  type TireDimensions,
 } from "@/lib/fitment";
 import { type Setup, toEngineSetup } from "@/lib/setup/model";
 import type { ComparisonInput } from "./model";
@@ -82,8 +83,11 @@ export interface CrawlFigures {
   regearedOnPlannedTire: number;
 }
 
-/** Figures of one setup, as the detail table shows them. */
-export interface SetupFigures {
+/**
+ * Figures of one setup, as the detail table shows them; the tire's own dimensions (section width
+ * to revolutions per km, and the measuring rim) are the engine's, for the rim the setup has.
+ */
+export interface SetupFigures extends Omit<TireDimensions, "rimWidthIn"> {
   /** The tire size as typed (trimmed) and the engine's normalized designation. */
   tireTyped: string;
   tireText: string;
@@ -96,18 +100,11 @@ export interface SetupFigures {
   backspacingBeadSeatIn: number;
   backspacingFlangeIn: number;
   flangeAllowanceIn: number;
-  sectionWidthMm: number;
-  sidewallMm: number;
-  overallDiameterMm: number;
-  circumferenceMm: number;
-  revsPerMile: number;
-  revsPerKm: number;
   rimWidthMm: number;
   innerSwingMm: number;
   outerSwingMm: number;
   beadSeatInboardMm: number;
   beadSeatOutboardMm: number;
-  measuringRimWidthIn: number;
   rimWidthMinIn: number;
   rimWidthMaxIn: number;
   rimWidthSuitable: boolean;
@@ -139,12 +136,8 @@ export interface ComparisonResult {
     /** The headline speed and the chart rows, at round speeds of each unit system. */
     bySystem: Record<SpeedSystem, { unit: SpeedUnit; headline: SpeedRow; rows: SpeedRow[] }>;
   };
-  gearing: {
-    axleRatio: number;
-    transmissionRatio: number;
-    effectiveRatio: number;
-    ratioToRestore: number;
-    suggestedRatio: number;
+  /** The engine's ratios (its per-speed rows are regrouped below). */
+  gearing: Omit<SetupComparison["gearing"], "rpmAt"> & {
     /** null unless both the first-gear and the transfer-case low ratios are entered. */
     crawl: CrawlFigures | null;
     cruise: CruiseRow[];

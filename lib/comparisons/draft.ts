@@ -314,28 +314,20 @@ export function readDraft(draft: Draft, prefs: DisplayPrefs): { input: Compariso
     "enter a ratio, e.g. 1.00 (direct) or 0.70 (overdrive).",
     "1.00",
   );
-  const first =
-    v.first.trim() === ""
+  /** A ratio that may be left empty (then null: not entered). */
+  const optionalRatio = (text: string, path: "firstGearRatio" | "transferLowRatio", example: string): number | null =>
+    text.trim() === ""
       ? null
       : plainNumber(
-          ratioText(v.first),
-          "firstGearRatio",
-          VEHICLE_LIMITS.firstGearRatio,
+          ratioText(text),
+          path,
+          VEHICLE_LIMITS[path],
           "",
-          "enter a ratio, e.g. 4.03 (or 4.03:1), or leave it empty.",
-          "4.03",
+          `enter a ratio, e.g. ${example} (or ${example}:1), or leave it empty.`,
+          example,
         );
-  const low =
-    v.low.trim() === ""
-      ? null
-      : plainNumber(
-          ratioText(v.low),
-          "transferLowRatio",
-          VEHICLE_LIMITS.transferLowRatio,
-          "",
-          "enter a ratio, e.g. 2.72 (or 2.72:1), or leave it empty.",
-          "2.72",
-        );
+  const first = optionalRatio(v.first, "firstGearRatio", "4.03");
+  const low = optionalRatio(v.low, "transferLowRatio", "2.72");
 
   const sUnit = speedUnit(prefs);
   const metric = prefs.units === "metric";

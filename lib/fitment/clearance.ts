@@ -164,27 +164,25 @@ export interface PreparedClearance {
   measuredSweepMm: number;
 }
 
-function checkDirection(direction: unknown, field = "direction"): ClearanceDirection {
-  if (!CLEARANCE_DIRECTIONS.includes(direction as ClearanceDirection)) {
+/** One of a fixed list of words, else FitmentInputError naming the field, the list and an example. */
+function checkChoice<T extends string>(choices: readonly T[], value: unknown, field: string, example: T): T {
+  if (!choices.includes(value as T)) {
     throw new FitmentInputError(
       field,
-      `${field} must be one of ${CLEARANCE_DIRECTIONS.join(", ")}, got ${JSON.stringify(direction)} (e.g. "inboard")`,
-      direction,
+      `${field} must be one of ${choices.join(", ")}, got ${JSON.stringify(value)} (e.g. "${example}")`,
+      value,
     );
   }
-  return direction as ClearanceDirection;
+  return value as T;
+}
+
+function checkDirection(direction: unknown, field = "direction"): ClearanceDirection {
+  return checkChoice(CLEARANCE_DIRECTIONS, direction, field, "inboard");
 }
 
 function checkState(state: unknown, field = "state"): SuspensionState {
   if (state === undefined) return "ride-height";
-  if (!SUSPENSION_STATES.includes(state as SuspensionState)) {
-    throw new FitmentInputError(
-      field,
-      `${field} must be one of ${SUSPENSION_STATES.join(", ")}, got ${JSON.stringify(state)} (e.g. "full-lock")`,
-      state,
-    );
-  }
-  return state as SuspensionState;
+  return checkChoice(SUSPENSION_STATES, state, field, "full-lock");
 }
 
 function checkMargin(marginMm: unknown, field = "marginMm"): number {

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { compareSetups } from "./compare";
 import { crossSection, partPosition } from "./crossSection";
+import { stockPart } from "./crossSectionTestUtil";
 import { FitmentInputError } from "./errors";
 import { setupGeometry } from "./geometry";
 import { backspacingFromOffset } from "./offset";
@@ -280,7 +281,6 @@ describe("crossSection: two setups on one axle", () => {
   });
 
   it("vehicle limits and measured parts sit where the measurements put them", () => {
-    const stock = { tire: "265/70R17", wheel: { diameterIn: 17, widthIn: 8, offsetMm: 25 } };
     const m = crossSection(
       { geometry: STOCK },
       { geometry: A },
@@ -290,53 +290,13 @@ describe("crossSection: two setups on one axle", () => {
         fenderLineMm: 139.7,
         parts: [
           // Inner swing 157.5 + 30 = 187.5 inboard, at hub height.
-          {
-            label: "Control arm",
-            direction: "inboard",
-            state: "ride-height",
-            distanceMm: 30,
-            measuredWith: stock,
-            predictedMm: 45.8,
-            status: "clear",
-          },
+          stockPart("Control arm", "inboard", "ride-height", 30, 45.8, "clear"),
           // Outer swing 107.5 + 20 = 127.5 outboard.
-          {
-            label: "Flare",
-            direction: "outboard",
-            state: "ride-height",
-            distanceMm: 20,
-            measuredWith: stock,
-            predictedMm: -38.2,
-            status: "contact",
-          },
+          stockPart("Flare", "outboard", "ride-height", 20, -38.2, "contact"),
           // Above the tread centre (x = −25): 401.4 (axle) + 401.4 (radius) + 40 = 842.8.
-          {
-            label: "Liner",
-            direction: "upward",
-            state: "full-stuff",
-            distanceMm: 40,
-            measuredWith: stock,
-            predictedMm: -3.1,
-            status: "contact",
-          },
-          {
-            label: "Bumper",
-            direction: "fore-aft",
-            state: "ride-height",
-            distanceMm: 50,
-            measuredWith: stock,
-            predictedMm: 6.9,
-            status: "tight",
-          },
-          {
-            label: "Frame at lock",
-            direction: "inboard",
-            state: "full-lock",
-            distanceMm: 25,
-            measuredWith: stock,
-            predictedMm: 10,
-            status: "tight",
-          },
+          stockPart("Liner", "upward", "full-stuff", 40, -3.1, "contact"),
+          stockPart("Bumper", "fore-aft", "ride-height", 50, 6.9, "tight"),
+          stockPart("Frame at lock", "inboard", "full-lock", 25, 10, "tight"),
         ],
       },
     );

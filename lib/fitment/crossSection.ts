@@ -30,6 +30,7 @@ import {
   clearanceEnvelope,
   steeringAxisInboardMm,
 } from "./clearance";
+import type { DimensionLine } from "./crossSectionLayout";
 import { FitmentInputError, requireNumber } from "./errors";
 import type { SetupGeometry, SetupInput } from "./geometry";
 import type { BackspacingReference } from "./offset";
@@ -49,15 +50,9 @@ export type DimensionKind =
  * axis; `ends` are the features the extension lines start from; `valueMm` is the engine's figure
  * (signed for the offset and the ground change), equal to |to − from| (tested).
  */
-export interface Dimension {
-  id: string;
+export interface Dimension extends DimensionLine {
   kind: DimensionKind;
   setup: Side | null;
-  axis: "x" | "y";
-  band: "above" | "below" | "right";
-  from: number;
-  to: number;
-  ends: [Pt, Pt];
   valueMm: number;
   /** For backspacing: where it is measured to. */
   reference?: BackspacingReference;
@@ -177,6 +172,20 @@ export function partPosition(
   if (p.direction === "outboard") return { at: { x: e.outerSwingMm + gap, y: axle }, notDrawn: null };
   // The tread's centre: half-way between the reaches (= the rim centreline).
   return { at: { x: zero((e.outerSwingMm - e.innerSwingMm) / 2), y: axle + e.radiusMm + gap }, notDrawn: null };
+}
+
+/** A height drawn in the column right of the drawing, its extension lines level from x to the line. */
+function heightLine(x: number, from: number, to: number): Pick<Dimension, "axis" | "band" | "from" | "to" | "ends"> {
+  return {
+    axis: "y",
+    band: "right",
+    from,
+    to,
+    ends: [
+      { x, y: from },
+      { x, y: to },
+    ],
+  };
 }
 
 /**
@@ -299,14 +308,7 @@ export function crossSection(
       id: `${side}-diameter`,
       kind: "diameter",
       setup: side,
-      axis: "y",
-      band: "right",
-      from: s.groundY,
-      to: s.topY,
-      ends: [
-        { x: treadEnd, y: s.groundY },
-        { x: treadEnd, y: s.topY },
-      ],
+      ...heightLine(treadEnd, s.groundY, s.topY),
       valueMm: s.overallDiameterMm,
       source: "geometry.ts setupGeometry: overallDiameterMm (ISO 4000-1 D = d + 2H)",
     });
@@ -318,14 +320,7 @@ export function crossSection(
       id: "ground-change",
       kind: "ground-change",
       setup: null,
-      axis: "y",
-      band: "right",
-      from: pla.groundY,
-      to: cur.groundY,
-      ends: [
-        { x: xr, y: pla.groundY },
-        { x: xr, y: cur.groundY },
-      ],
+      ...heightLine(xr, pla.groundY, cur.groundY),
       valueMm: groundChange,
       source: "compare.ts compareSetups: groundClearanceChangeMm (ΔD/2)",
     });

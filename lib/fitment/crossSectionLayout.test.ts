@@ -7,6 +7,7 @@ import {
   BESIDE_EM,
   CHAR_EM,
   boxesOverlap,
+  labelledDimension,
   layoutCrossSection,
   textWidthEm,
 } from "./crossSectionLayout";
@@ -44,14 +45,9 @@ const WORD: Record<string, string> = {
 function texts(m: CrossSectionModel): LayoutInput {
   return {
     extents: m.extents,
-    dimensions: m.dimensions.map((d) => ({
-      id: d.id,
-      axis: d.axis,
-      band: d.band,
-      from: d.from,
-      to: d.to,
-      ends: d.ends,
-      text:
+    dimensions: m.dimensions.map((d) =>
+      labelledDimension(
+        d,
         d.kind === "offset"
           ? "offset −44 mm"
           : d.kind === "spacer"
@@ -59,7 +55,8 @@ function texts(m: CrossSectionModel): LayoutInput {
             : d.kind === "ground-change"
               ? `ground +${len(d.valueMm)}`
               : `${WORD[d.kind]} ${len(d.valueMm)}`,
-    })),
+      ),
+    ),
     callouts: m.anchors.map((a) => ({
       id: a.id,
       at: a.at,

@@ -41,14 +41,32 @@ export interface Box {
   h: number;
 }
 
-export interface LayoutDimension {
+/**
+ * Where a dimension line runs: along x (a row above or below the drawing) or along y (a column
+ * right of it), from `from` to `to` on that axis, with extension lines from the features `ends`.
+ */
+export interface DimensionLine {
   id: string;
   axis: "x" | "y";
   band: "above" | "below" | "right";
   from: number;
   to: number;
   ends: [Pt, Pt];
+}
+
+export interface LayoutDimension extends DimensionLine {
   text: string;
+}
+
+/**
+ * A dimension line with its label, for the layout: only the line's own fields are taken (the
+ * layout needs no more of crossSection.ts's figures, kinds or sources).
+ *
+ * @example
+ * labelledDimension({ id: "d", axis: "x", band: "above", from: 0, to: 10, ends: [{ x: 0, y: 0 }, { x: 10, y: 0 }] }, "10 mm").text; // "10 mm"
+ */
+export function labelledDimension(d: DimensionLine, text: string): LayoutDimension {
+  return { id: d.id, axis: d.axis, band: d.band, from: d.from, to: d.to, ends: d.ends, text };
 }
 
 export interface LayoutCallout {

@@ -77,6 +77,21 @@ function checkReference(measuredFrom: unknown): BackspacingReference {
   return measuredFrom;
 }
 
+/** What both conversions are told about the wheel: its width and where its backspacing is measured to. */
+interface WheelBasis {
+  widthIn: number;
+  measuredFrom: BackspacingReference;
+  flangeIn?: number;
+}
+
+/** Checks the wheel's width, then the reference, then the flange allowance (default 0.5 in), in that order. */
+function checkBasis(input: WheelBasis): { width: number; ref: BackspacingReference; flange: number } {
+  const width = checkWheelWidthIn(input.widthIn);
+  const ref = checkReference(input.measuredFrom);
+  const flange = checkFlange(input.flangeIn ?? DEFAULT_FLANGE_IN);
+  return { width, ref, flange };
+}
+
 /**
  * Offset (mm) from backspacing (inches).
  *
@@ -84,15 +99,8 @@ function checkReference(measuredFrom: unknown): BackspacingReference {
  * offsetFromBackspacing({ widthIn: 9.5, backspacingIn: 3.5, measuredFrom: "bead-seat" }); // -31.75
  * offsetFromBackspacing({ widthIn: 9.5, backspacingIn: 4, measuredFrom: "flange" });      // -31.75
  */
-export function offsetFromBackspacing(input: {
-  widthIn: number;
-  backspacingIn: number;
-  measuredFrom: BackspacingReference;
-  flangeIn?: number;
-}): number {
-  const width = checkWheelWidthIn(input.widthIn);
-  const ref = checkReference(input.measuredFrom);
-  const flange = checkFlange(input.flangeIn ?? DEFAULT_FLANGE_IN);
+export function offsetFromBackspacing(input: WheelBasis & { backspacingIn: number }): number {
+  const { width, ref, flange } = checkBasis(input);
   const bs = requireNumber("backspacingIn", input.backspacingIn, -10, 30, "4.5", "in");
   const beadSeatBs = ref === "flange" ? bs - flange : bs;
   const offset = (beadSeatBs - width / 2) * MM_PER_IN;
@@ -113,15 +121,8 @@ export function offsetFromBackspacing(input: {
  * backspacingFromOffset({ widthIn: 9.5, offsetMm: -31.75, measuredFrom: "bead-seat" }); // 3.5
  * backspacingFromOffset({ widthIn: 9.5, offsetMm: -31.75, measuredFrom: "flange" });    // 4
  */
-export function backspacingFromOffset(input: {
-  widthIn: number;
-  offsetMm: number;
-  measuredFrom: BackspacingReference;
-  flangeIn?: number;
-}): number {
-  const width = checkWheelWidthIn(input.widthIn);
-  const ref = checkReference(input.measuredFrom);
-  const flange = checkFlange(input.flangeIn ?? DEFAULT_FLANGE_IN);
+export function backspacingFromOffset(input: WheelBasis & { offsetMm: number }): number {
+  const { width, ref, flange } = checkBasis(input);
   const offset = checkOffsetMm(input.offsetMm, width);
   return width / 2 + offset / MM_PER_IN + (ref === "flange" ? flange : 0);
 }

@@ -206,6 +206,38 @@ function rimProfile(xbi: number, xbo: number, f: number, r: number): RCmd[] {
   ];
 }
 
+/** Where one sidewall-and-crown outline runs: beads, widest points, tread edges and crown radius. */
+interface OutlinePoints {
+  xbi: number;
+  xbo: number;
+  xin: number;
+  xout: number;
+  ti: number;
+  to: number;
+  r: number;
+  tip: number;
+  wide: number;
+  crown: number;
+}
+
+/**
+ * The open bead-to-bead outline both the casing's outside and its inside follow (schematic):
+ * up from the bead to the flange tip, out to the widest point, over the shoulder to the crown.
+ */
+function sectionOutline(p: OutlinePoints): RCmd[] {
+  const { xbi, xbo, xin, xout, ti, to, r, tip, wide, crown } = p;
+  return [
+    { op: "M", x: xbi, r },
+    { op: "L", x: xbi, r: tip },
+    { op: "C", c: [xbi + 0.6 * (xin - xbi), tip + 0.1 * (wide - tip), xin, wide - 0.45 * (wide - tip)], x: xin, r: wide },
+    { op: "C", c: [xin, wide + 0.55 * (crown - wide), ti - 0.35 * (ti - xin), crown], x: ti, r: crown },
+    { op: "L", x: to, r: crown },
+    { op: "C", c: [to + 0.35 * (xout - to), crown, xout, wide + 0.55 * (crown - wide)], x: xout, r: wide },
+    { op: "C", c: [xout, wide - 0.45 * (wide - tip), xbo + 0.6 * (xout - xbo), tip + 0.1 * (wide - tip)], x: xbo, r: tip },
+    { op: "L", x: xbo, r },
+  ];
+}
+
 function tireProfile(sec: {
   xbi: number;
   xbo: number;
@@ -226,17 +258,7 @@ function tireProfile(sec: {
   const to = xc + tw / 2;
   // Every control point lies within [xin, xout] × [r, R], so the curve stays inside the engine's
   // reach and diameter, and touches them where the tangent is vertical (widest) or level (tread).
-  return [
-    { op: "M", x: xbi, r },
-    { op: "L", x: xbi, r: tip },
-    { op: "C", c: [xbi + 0.6 * (xin - xbi), tip + 0.1 * (wide - tip), xin, wide - 0.45 * (wide - tip)], x: xin, r: wide },
-    { op: "C", c: [xin, wide + 0.55 * (R - wide), ti - 0.35 * (ti - xin), R], x: ti, r: R },
-    { op: "L", x: to, r: R },
-    { op: "C", c: [to + 0.35 * (xout - to), R, xout, wide + 0.55 * (R - wide)], x: xout, r: wide },
-    { op: "C", c: [xout, wide - 0.45 * (wide - tip), xbo + 0.6 * (xout - xbo), tip + 0.1 * (wide - tip)], x: xbo, r: tip },
-    { op: "L", x: xbo, r },
-    { op: "Z" },
-  ];
+  return [...sectionOutline({ xbi, xbo, xin, xout, ti, to, r, tip, wide, crown: R }), { op: "Z" }];
 }
 
 /**
@@ -256,16 +278,7 @@ function cavityProfile(sec: Parameters<typeof tireProfile>[0], closed: boolean):
   const wide = r + S.widestAtShare * H;
   const ti = Math.max(xc - tw / 2 + t, xin);
   const to = Math.min(xc + tw / 2 - t, xout);
-  const out: RCmd[] = [
-    { op: "M", x: xbi, r },
-    { op: "L", x: xbi, r: tip },
-    { op: "C", c: [xbi + 0.6 * (xin - xbi), tip + 0.1 * (wide - tip), xin, wide - 0.45 * (wide - tip)], x: xin, r: wide },
-    { op: "C", c: [xin, wide + 0.55 * (Rin - wide), ti - 0.35 * (ti - xin), Rin], x: ti, r: Rin },
-    { op: "L", x: to, r: Rin },
-    { op: "C", c: [to + 0.35 * (xout - to), Rin, xout, wide + 0.55 * (Rin - wide)], x: xout, r: wide },
-    { op: "C", c: [xout, wide - 0.45 * (wide - tip), xbo + 0.6 * (xout - xbo), tip + 0.1 * (wide - tip)], x: xbo, r: tip },
-    { op: "L", x: xbo, r },
-  ];
+  const out = sectionOutline({ xbi, xbo, xin, xout, ti, to, r, tip, wide, crown: Rin });
   return closed ? [...out, { op: "Z" }] : out;
 }
 

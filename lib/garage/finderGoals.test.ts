@@ -2,6 +2,19 @@ import { describe, expect, it } from "vitest";
 import { finderGoalsSchema, finderPlan } from "./finderGoals";
 import { VEHICLE, point } from "./testUtil";
 
+/** The finder form as it opens: every goal empty, points not used, the default margin. */
+const BLANK = {
+  targetDiameterMm: "",
+  minDiameterMm: "",
+  maxDiameterMm: "",
+  wheelDiameters: "",
+  maxPokeMm: "",
+  usePoints: false,
+  minWidthIn: "",
+  maxWidthIn: "",
+  margin: "1/2 in",
+};
+
 describe("finder goals → engine constraints", () => {
   it("hands every measured point to the engine, with its state, label, the margin and the steering axis", () => {
     const goals = finderGoalsSchema.parse({
@@ -37,20 +50,9 @@ describe("finder goals → engine constraints", () => {
   });
 
   it("names each goal field as the finder form labels it", () => {
-    const blank = {
-      targetDiameterMm: "",
-      minDiameterMm: "",
-      maxDiameterMm: "",
-      wheelDiameters: "",
-      maxPokeMm: "",
-      usePoints: false,
-      minWidthIn: "",
-      maxWidthIn: "",
-      margin: "1/2 in",
-    };
     const messages = (patch: object) =>
       Object.fromEntries(
-        (finderGoalsSchema.safeParse({ ...blank, ...patch }).error?.issues ?? []).map((i) => [i.path.join("."), i.message]),
+        (finderGoalsSchema.safeParse({ ...BLANK, ...patch }).error?.issues ?? []).map((i) => [i.path.join("."), i.message]),
       );
     expect(messages({ targetDiameterMm: "huge" }).targetDiameterMm).toMatch(/^Target diameter \(in\): /);
     expect(messages({ minDiameterMm: "x" }).minDiameterMm).toMatch(/^From \(in\): /);
@@ -66,17 +68,7 @@ describe("finder goals → engine constraints", () => {
   });
 
   it("refuses reversed ranges", () => {
-    const r = finderGoalsSchema.safeParse({
-      targetDiameterMm: "",
-      minDiameterMm: "35",
-      maxDiameterMm: "33",
-      wheelDiameters: "",
-      maxPokeMm: "",
-      usePoints: false,
-      minWidthIn: "",
-      maxWidthIn: "",
-      margin: "1/2 in",
-    });
+    const r = finderGoalsSchema.safeParse({ ...BLANK, minDiameterMm: "35", maxDiameterMm: "33" });
     expect(r.success).toBe(false);
   });
 });

@@ -1,7 +1,7 @@
 import type { Page } from "playwright-core";
 import { afterAll, describe, expect, it } from "vitest";
 import { type ComparisonInput, DEFAULT_INPUT } from "@/lib/comparisons/model";
-import type { Setup } from "@/lib/setup/model";
+import { SETUP_A, SETUP_B, SETUP_C } from "@/lib/comparisons/crossSection/testUtil";
 import { encodeComparison } from "@/lib/comparisons/url";
 import { PREFS_STORAGE_KEY } from "@/lib/comparisons/format";
 import { SHOTS, launch, seriousViolations, shot } from "./support/browser";
@@ -14,15 +14,7 @@ import { SHOTS, launch, seriousViolations, shot } from "./support/browser";
  * 16x8 +0 with a 38 mm spacer, 33x12.50R15 on 15x10 −44 (entered as 3.25 in of backspacing to the
  * bead seat: (3.25 − 5) × 25.4 = −44.45 mm). Screenshots go to tests/browser/screenshots/.
  */
-const A: Setup = { tire: "35x12.50R17", wheelDiameterIn: 17, wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 }, spacerMm: 0 };
-const B: Setup = { tire: "285/75R16", wheelDiameterIn: 16, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 0 }, spacerMm: 38 };
-const C: Setup = {
-  tire: "33x12.50R15",
-  wheelDiameterIn: 15,
-  wheelWidthIn: 10,
-  position: { mode: "backspacing", backspacingIn: 3.25, reference: "bead-seat", flangeIn: 0.5 },
-  spacerMm: 0,
-};
+const [A, B, C] = [SETUP_A, SETUP_B, SETUP_C];
 
 const CASES: [string, ComparisonInput, { units: "imperial" | "metric"; lengths: "decimal" | "fraction" }][] = [
   [

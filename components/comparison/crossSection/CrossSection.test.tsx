@@ -6,6 +6,8 @@ import { computeComparison } from "@/lib/comparisons/compute";
 import type { DisplayPrefs } from "@/lib/comparisons/format";
 import { type ComparisonInput, DEFAULT_INPUT } from "@/lib/comparisons/model";
 import type { Setup } from "@/lib/setup/model";
+import { stockPart } from "@/lib/fitment/crossSectionTestUtil";
+import { SETUP_A, SETUP_B } from "@/lib/comparisons/crossSection/testUtil";
 import { CrossSection } from "./CrossSection";
 import type { DrawnLimits } from "@/lib/comparisons/crossSection/drawing";
 
@@ -23,9 +25,9 @@ const metric: DisplayPrefs = { units: "metric", lengths: "decimal" };
  * 6.52 in outboard; backspacing to the flange 4.5 − 12/25.4 + 0.5 = 4.53 in = 115 mm (offset.ts,
  * common practice, no source); ground clearance (889 − 802.8)/2 = +43.1 mm = +1.7 in.
  */
-const A: Setup = { tire: "35x12.50R17", wheelDiameterIn: 17, wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 }, spacerMm: 0 };
+const A = SETUP_A;
 /** 285/75R16 on 16x8 +0 on a 38 mm spacer: 38 mm = 1.496 in → "1.5 in (38 mm)" as bought. */
-const B: Setup = { tire: "285/75R16", wheelDiameterIn: 16, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 0 }, spacerMm: 38 };
+const B = SETUP_B;
 const withPlanned = (planned: Setup, vehicle: Partial<ComparisonInput["vehicle"]> = {}): ComparisonInput => ({
   ...DEFAULT_INPUT,
   planned,
@@ -145,38 +147,13 @@ describe("CrossSection", () => {
   });
 
   it("with a garage vehicle: its inner limit and fender lip where they are, parts marked by predicted status", () => {
-    const stock = { tire: "265/70R17", wheel: { diameterIn: 17, widthIn: 8, offsetMm: 25 } };
     const limits: DrawnLimits = {
       innerMm: 187.5,
       outerMm: 127.5,
       parts: [
-        {
-          label: "Frame rail",
-          direction: "inboard",
-          state: "ride-height",
-          distanceMm: 30,
-          measuredWith: stock,
-          predictedMm: 45.83,
-          status: "clear",
-        },
-        {
-          label: "Flare",
-          direction: "outboard",
-          state: "ride-height",
-          distanceMm: 20,
-          measuredWith: stock,
-          predictedMm: -38.17,
-          status: "contact",
-        },
-        {
-          label: "Bumper corner",
-          direction: "fore-aft",
-          state: "full-lock",
-          distanceMm: 19.05,
-          measuredWith: stock,
-          predictedMm: 3,
-          status: "tight",
-        },
+        stockPart("Frame rail", "inboard", "ride-height", 30, 45.83, "clear"),
+        stockPart("Flare", "outboard", "ride-height", 20, -38.17, "contact"),
+        stockPart("Bumper corner", "fore-aft", "full-lock", 19.05, 3, "tight"),
       ],
     };
     render(<CrossSection result={computeComparison(withPlanned(A))} prefs={metric} limits={limits} />);

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import type { Setup } from "@/lib/setup/model";
 import { predictPoints } from "@/lib/garage/predict";
+import { SETUP_A } from "@/lib/comparisons/crossSection/testUtil";
 import { drawnParts } from "./garageParts";
 
 // 4.5 in of backspacing to the flange on an 8 in wheel: (4.5 − 0.5 − 4) × 25.4 = 0 mm offset (offset.ts, common practice, no source).
@@ -11,13 +12,8 @@ const measured: Setup = {
   position: { mode: "backspacing", backspacingIn: 4.5, reference: "flange", flangeIn: 0.5 },
   spacerMm: 0,
 };
-const planned: Setup = {
-  tire: "35x12.50R17",
-  wheelDiameterIn: 17,
-  wheelWidthIn: 9,
-  position: { mode: "offset", offsetMm: -12 },
-  spacerMm: 0,
-};
+/** 35x12.50R17 on 17x9 −12 (lib/fitment/crossSection.test.ts). */
+const planned = SETUP_A;
 
 describe("drawnParts", () => {
   it("pairs each measured point with its prediction, in order, with the setup as the engine takes it", () => {

@@ -1,17 +1,21 @@
 import { describe, expect, it } from "vitest";
 import { type SetupComparison, type SetupInput, compareSetups, predictClearance } from "@/lib/fitment";
 import { type AssessContext, assessChange, diameterChange } from "./assessChange";
-import {
-  ALIGNMENT_DIAMETER_MM,
-  ALIGNMENT_SHIFT_MM,
-  DIAMETER_CHANGE_WARN_MM,
-  INNER_REACH_WARN_MM,
-  OUTER_REACH_WARN_MM,
-  REGEAR_WARN_PCT,
-  SCRUB_WARN_MM,
-  SPEEDO_WARN_PCT,
-} from "./thresholds";
 import { FINDING_KINDS, type Finding, type FindingKind, LEVEL_LABEL, LEVEL_TONE, findingsOf } from "./vocabulary";
+
+/*
+ * The thresholds each finding should start at, written here from the rules of thumb themselves
+ * (every one common practice, no source), not read from thresholds.ts: a threshold moved there
+ * without its rule fails here.
+ */
+const SPEEDO_WARN_PCT = 3; // actual speed more than 3 % off the indicated one
+const SCRUB_WARN_MM = 25.4; // scrub radius growing by more than 1 in = 25.4 mm
+const REGEAR_WARN_PCT = 5; // restoring ratio 5 % or more from the axle ratio
+const OUTER_REACH_WARN_MM = 25; // more than 25 mm further outboard
+const INNER_REACH_WARN_MM = 10; // more than 10 mm further inboard: a caution, not only a note
+const DIAMETER_CHANGE_WARN_MM = 50; // diameter changing by more than about 2 in (50 mm)
+const ALIGNMENT_DIAMETER_MM = 25.4; // diameter changing by 1 in = 25.4 mm or more: align
+const ALIGNMENT_SHIFT_MM = 12.7; // wheel plane moving 1/2 in = 12.7 mm or more per side: align
 
 const SAME: SetupInput = { tire: "265/70R17 113T", wheel: { diameterIn: 17, widthIn: 8, offsetMm: 25 } };
 /** The same setup on both sides: nothing changes, so only the standing load note is found. */

@@ -41,7 +41,7 @@ import {
   SCRUB_WARN_MM,
   SPEEDO_WARN_PCT,
 } from "./thresholds";
-import type { Finding, FindingOf } from "./vocabulary";
+import type { Finding, FindingKind, FindingOf } from "./vocabulary";
 
 /** A measured point of the vehicle and the engine's prediction of it with the planned setup. */
 interface PointPrediction {
@@ -59,6 +59,11 @@ export interface AssessContext {
 }
 
 type Side = "current" | "planned";
+
+/** A caution about the change as a whole, not one setup: a figure past its threshold. */
+function changeCaution<K extends FindingKind>(kind: K, figures: FindingOf<K>["figures"], basis: string): FindingOf<K> {
+  return { kind, level: "caution", setup: null, figures, basis } as FindingOf<K>;
+}
 
 function rimWidth(g: SetupGeometry, side: Side): FindingOf<"rim-width"> | null {
   if (g.rimWidthSuitable) return null;
@@ -99,13 +104,11 @@ function poke(g: SetupGeometry, side: Side, fenderLineMm: number): FindingOf<"po
  */
 export function diameterChange(changeMm: number): FindingOf<"diameter"> | null {
   if (!(Math.abs(changeMm) > DIAMETER_CHANGE_WARN_MM)) return null;
-  return {
-    kind: "diameter",
-    level: "caution",
-    setup: null,
-    figures: { changeMm },
-    basis: `Overall diameter changing by more than ${DIAMETER_CHANGE_WARN_MM} mm (about 2 in) usually involves a lift or levelling (common practice, no source).`,
-  };
+  return changeCaution(
+    "diameter",
+    { changeMm },
+    `Overall diameter changing by more than ${DIAMETER_CHANGE_WARN_MM} mm (about 2 in) usually involves a lift or levelling (common practice, no source).`,
+  );
 }
 
 function spacer(g: SetupGeometry, side: Side): FindingOf<"spacer"> | null {
@@ -179,53 +182,53 @@ export function assessChange(c: SetupComparison, context: AssessContext): Findin
   if (fender !== null && fender !== undefined) out.push(poke(c.planned, "planned", fender), poke(c.current, "current", fender));
 
   if (c.outerPokeChangeMm > OUTER_REACH_WARN_MM) {
-    out.push({
-      kind: "outer-reach",
-      level: "caution",
-      setup: null,
-      figures: { changeMm: c.outerPokeChangeMm },
-      basis: `More than ${OUTER_REACH_WARN_MM} mm further outboard than the current tire (common practice, no source).`,
-    });
+    out.push(
+      changeCaution(
+        "outer-reach",
+        { changeMm: c.outerPokeChangeMm },
+        `More than ${OUTER_REACH_WARN_MM} mm further outboard than the current tire (common practice, no source).`,
+      ),
+    );
   }
 
   if (c.scrubRadiusChangeMm > SCRUB_WARN_MM) {
-    out.push({
-      kind: "scrub",
-      level: "caution",
-      setup: null,
-      figures: { changeMm: c.scrubRadiusChangeMm },
-      basis: `More than ${SCRUB_WARN_MM} mm (1 in) of increase (common practice, no source).`,
-    });
+    out.push(
+      changeCaution(
+        "scrub",
+        { changeMm: c.scrubRadiusChangeMm },
+        `More than ${SCRUB_WARN_MM} mm (1 in) of increase (common practice, no source).`,
+      ),
+    );
   }
 
   const ratio = c.speedometer.ratio;
   const trueAbovePct = (ratio - 1) * 100;
   if (Math.abs(trueAbovePct) > SPEEDO_WARN_PCT) {
-    out.push({
-      kind: "speedometer",
-      level: "caution",
-      setup: null,
-      figures: { ratio, trueAbovePct },
-      basis: `Actual speed more than ${SPEEDO_WARN_PCT} % off the indicated one (common practice, no source); both percentages come from the ratio of overall diameters (unloaded).`,
-    });
+    out.push(
+      changeCaution(
+        "speedometer",
+        { ratio, trueAbovePct },
+        `Actual speed more than ${SPEEDO_WARN_PCT} % off the indicated one (common practice, no source); both percentages come from the ratio of overall diameters (unloaded).`,
+      ),
+    );
   }
 
   const g = c.gearing;
   const gapPct = (g.ratioToRestore / g.axleRatio - 1) * 100;
   if (Math.abs(gapPct) >= REGEAR_WARN_PCT && g.suggestedRatio !== g.axleRatio) {
-    out.push({
-      kind: "regear",
-      level: "caution",
-      setup: null,
-      figures: {
-        axleRatio: g.axleRatio,
-        effectiveRatio: g.effectiveRatio,
-        ratioToRestore: g.ratioToRestore,
-        suggestedRatio: g.suggestedRatio,
-        gapPct,
-      },
-      basis: `Restoring ratio ${g.ratioToRestore.toFixed(2)} is ${Math.abs(gapPct).toFixed(1)} % from the axle ratio; advised from ${REGEAR_WARN_PCT} % (common practice, no source). Suggested = nearest common ratio.`,
-    });
+    out.push(
+      changeCaution(
+        "regear",
+        {
+          axleRatio: g.axleRatio,
+          effectiveRatio: g.effectiveRatio,
+          ratioToRestore: g.ratioToRestore,
+          suggestedRatio: g.suggestedRatio,
+          gapPct,
+        },
+        `Restoring ratio ${g.ratioToRestore.toFixed(2)} is ${Math.abs(gapPct).toFixed(1)} % from the axle ratio; advised from ${REGEAR_WARN_PCT} % (common practice, no source). Suggested = nearest common ratio.`,
+      ),
+    );
   }
 
   const reachMm = -c.innerClearanceChangeMm;

@@ -2,8 +2,9 @@ import { describe, expect, it } from "vitest";
 import { computeComparison } from "@/lib/comparisons/compute";
 import type { DisplayPrefs } from "@/lib/comparisons/format";
 import { type ComparisonInput, DEFAULT_INPUT } from "@/lib/comparisons/model";
-import type { Setup } from "@/lib/setup/model";
+import { SETUP_A, SETUP_B, SETUP_C } from "./testUtil";
 import { boxesOverlap } from "@/lib/fitment/crossSectionLayout";
+import { stockPart } from "@/lib/fitment/crossSectionTestUtil";
 import { DESIGN_WIDTH_PX, type DrawnLimits, buildDrawing } from "./drawing";
 
 /*
@@ -12,52 +13,19 @@ import { DESIGN_WIDTH_PX, type DrawnLimits, buildDrawing } from "./drawing";
  * lib/fitment/crossSection.test.ts, each planned against the demo's 265/70R17 17x8 +25 and
  * against each other; one opened from a backspacing to the bead seat.
  */
-const A: Setup = { tire: "35x12.50R17", wheelDiameterIn: 17, wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 }, spacerMm: 0 };
-const B: Setup = { tire: "285/75R16", wheelDiameterIn: 16, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 0 }, spacerMm: 38 };
-const C: Setup = {
-  tire: "33x12.50R15",
-  wheelDiameterIn: 15,
-  wheelWidthIn: 10,
-  position: { mode: "backspacing", backspacingIn: 3.25, reference: "bead-seat", flangeIn: 0.5 },
-  spacerMm: 0,
-};
+const [A, B, C] = [SETUP_A, SETUP_B, SETUP_C];
 const PREFS: DisplayPrefs[] = [
   { units: "imperial", lengths: "decimal" },
   { units: "imperial", lengths: "fraction" },
   { units: "metric", lengths: "decimal" },
 ];
-const stock = { tire: "265/70R17", wheel: { diameterIn: 17, widthIn: 8, offsetMm: 25 } };
 const GARAGE: DrawnLimits = {
   innerMm: 187.5,
   outerMm: 127.5,
   parts: [
-    {
-      label: "Lower control arm, front bolt",
-      direction: "inboard",
-      state: "ride-height",
-      distanceMm: 30,
-      measuredWith: stock,
-      predictedMm: 2,
-      status: "tight",
-    },
-    {
-      label: "Flare",
-      direction: "outboard",
-      state: "full-stuff",
-      distanceMm: 20,
-      measuredWith: stock,
-      predictedMm: -38,
-      status: "contact",
-    },
-    {
-      label: "Inner fender liner",
-      direction: "upward",
-      state: "full-stuff",
-      distanceMm: 60,
-      measuredWith: stock,
-      predictedMm: 17,
-      status: "clear",
-    },
+    stockPart("Lower control arm, front bolt", "inboard", "ride-height", 30, 2, "tight"),
+    stockPart("Flare", "outboard", "full-stuff", 20, -38, "contact"),
+    stockPart("Inner fender liner", "upward", "full-stuff", 60, 17, "clear"),
   ],
 };
 
@@ -103,15 +71,9 @@ describe(`buildDrawing: no two labels overlap at ${DESIGN_WIDTH_PX} px`, () => {
 describe("buildDrawing: many measured parts", () => {
   it("names the six nearest to contact (contact first, then the smallest predicted gap) and marks all", () => {
     const statuses = ["clear", "tight", "contact", "clear", "tight", "clear", "clear", "contact", "clear"] as const;
-    const parts = statuses.map((status, i) => ({
-      label: `P${i}`,
-      direction: (["inboard", "outboard", "upward"] as const)[i % 3]!,
-      state: "ride-height" as const,
-      distanceMm: 10 + i,
-      measuredWith: stock,
-      predictedMm: 50 - i,
-      status,
-    }));
+    const parts = statuses.map((status, i) =>
+      stockPart(`P${i}`, (["inboard", "outboard", "upward"] as const)[i % 3]!, "ride-height", 10 + i, 50 - i, status),
+    );
     const d = buildDrawing(
       computeComparison(DEFAULT_INPUT),
       { units: "metric", lengths: "decimal" },

@@ -7,7 +7,7 @@
 import type { ComparisonResult } from "@/lib/comparisons/compute";
 import type { DisplayPrefs } from "@/lib/comparisons/format";
 import { type CrossSectionModel, type PartInput, type Side, crossSection } from "@/lib/fitment/crossSection";
-import { type CrossSectionLayout, layoutCrossSection } from "@/lib/fitment/crossSectionLayout";
+import { type CrossSectionLayout, labelledDimension, layoutCrossSection } from "@/lib/fitment/crossSectionLayout";
 import type { BackspacingChoice } from "@/lib/fitment/wheelSection";
 import { anchorText, describe, dimensionText, legendText } from "./text";
 
@@ -77,15 +77,7 @@ export function buildDrawing(r: ComparisonResult, prefs: DisplayPrefs, limits?: 
   const layout = layoutCrossSection(
     {
       extents: model.extents,
-      dimensions: model.dimensions.map((d) => ({
-        id: d.id,
-        axis: d.axis,
-        band: d.band,
-        from: d.from,
-        to: d.to,
-        ends: d.ends,
-        text: dimensionText(d, prefs),
-      })),
+      dimensions: model.dimensions.map((d) => labelledDimension(d, dimensionText(d, prefs))),
       callouts: model.anchors
         .filter((a) => a.kind !== "part" || named.has(a.id))
         .map((a) => ({ id: a.id, at: a.at, text: anchorText(a, model) })),

@@ -4,6 +4,16 @@ import { CSV_COLUMNS, CSV_TEMPLATE, catalogToCsv, decodeCsvBytes, parseCatalogCs
 
 const HEAD = CSV_COLUMNS.join(",");
 const row = (cells: Partial<Record<(typeof CSV_COLUMNS)[number], string>>) => CSV_COLUMNS.map((c) => cells[c] ?? "").join(",");
+/** A wheel row with every cell the wheel checks below do not vary (width and position are the cases'). */
+const WHEEL = {
+  kind: "wheel",
+  sku: "W",
+  description: "d",
+  price: "1",
+  qty_on_hand: "1",
+  wheel_diameter_in: "17",
+  bolt_pattern: "6x5.5",
+};
 
 describe("catalog CSV", () => {
   it("reads the template: every kind, sizes through the engine", () => {
@@ -124,15 +134,7 @@ describe("catalog CSV", () => {
   });
 
   it("words every wheel problem for the person who made the file, naming the column", () => {
-    const base = {
-      kind: "wheel",
-      sku: "W",
-      description: "d",
-      price: "1",
-      qty_on_hand: "1",
-      wheel_diameter_in: "17",
-      bolt_pattern: "6x5.5",
-    };
+    const base = WHEEL;
     const cases: [Partial<Record<(typeof CSV_COLUMNS)[number], string>>, string][] = [
       [{ wheel_width_in: "", wheel_offset_mm: "0" }, "wheel_width_in"],
       [{ wheel_width_in: "nine", wheel_offset_mm: "0" }, "wheel_width_in"],
@@ -167,16 +169,7 @@ describe("catalog CSV", () => {
   });
 
   it("needs offset or backspacing on a wheel, never both, and the reference with backspacing", () => {
-    const base = {
-      kind: "wheel",
-      sku: "W",
-      description: "d",
-      price: "1",
-      qty_on_hand: "1",
-      wheel_diameter_in: "17",
-      wheel_width_in: "9",
-      bolt_pattern: "6x5.5",
-    };
+    const base = { ...WHEEL, wheel_width_in: "9" };
     expect(parseCatalogCsv([HEAD, row({ ...base, wheel_offset_mm: "0", wheel_backspacing_in: "5" })].join("\n")).errors[0]).toMatchObject({
       column: "wheel_offset_mm",
     });
@@ -192,17 +185,7 @@ describe("catalog CSV", () => {
 
   it("reads a file with the earlier header backspacing_from, and names that column in its problems", () => {
     const old = HEAD.replace("wheel_backspacing_reference", "backspacing_from");
-    const base = {
-      kind: "wheel",
-      sku: "W",
-      description: "d",
-      price: "1",
-      qty_on_hand: "1",
-      wheel_diameter_in: "17",
-      wheel_width_in: "9",
-      bolt_pattern: "6x5.5",
-      wheel_backspacing_in: "5",
-    };
+    const base = { ...WHEEL, wheel_width_in: "9", wheel_backspacing_in: "5" };
     // Same cells, same places: only the header's name differs.
     const good = parseCatalogCsv([old, row({ ...base, wheel_backspacing_reference: "bead-seat" })].join("\n"));
     expect(good.fileErrors).toEqual([]);

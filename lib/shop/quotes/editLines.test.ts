@@ -13,24 +13,24 @@ const hour: EditLine = {
   discount: "",
   taxable: false,
 };
+/** The same line as the request body holds it: 1 1/2 h → 1.5; $145 → 14 500 cents. */
+const hourInCents = {
+  kind: "custom",
+  unit: "hour",
+  catalogItemId: null,
+  sku: "",
+  description: "Labour",
+  quantity: 1.5,
+  unitPriceCents: 14500,
+  discountCents: 0,
+  taxable: false,
+} as const;
 
 describe("the editor's form", () => {
   it("becomes the request body in cents and hours (1 1/2 h → 1.5; 145 → 14500 cents)", () => {
     const r = bodyOf({ lines: [hour], discount: "", notes: "n" });
     expect(r.body).toEqual({
-      lines: [
-        {
-          kind: "custom",
-          unit: "hour",
-          catalogItemId: null,
-          sku: "",
-          description: "Labour",
-          quantity: 1.5,
-          unitPriceCents: 14500,
-          discountCents: 0,
-          taxable: false,
-        },
-      ],
+      lines: [hourInCents],
       discountCents: 0,
       notes: "n",
     });
@@ -52,20 +52,7 @@ describe("the editor's form", () => {
 
   it("is dirty only while it differs from what is saved", () => {
     const saved = formOf({
-      lines: [
-        {
-          id: "a",
-          kind: "custom",
-          unit: "hour",
-          catalogItemId: null,
-          sku: "",
-          description: "Labour",
-          quantity: 1.5,
-          unitPriceCents: 14500,
-          discountCents: 0,
-          taxable: false,
-        },
-      ],
+      lines: [{ id: "a", ...hourInCents }],
       quote: { discountCents: 0, notes: "" },
     });
     expect(saved.lines[0]!.quantity).toBe("1.5");
