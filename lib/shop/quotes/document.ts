@@ -5,6 +5,7 @@
  * (a renamed shop, a repriced catalog). Pure.
  */
 import type { QuoteLineKind, QuoteLineUnit } from "@/lib/platform/db/types";
+import { iso } from "@/lib/platform/http/isoDates";
 import type { FitmentSummary } from "./fitment";
 import { type HubFinding, checkWheelOnHub } from "./hubFit";
 
@@ -88,8 +89,6 @@ export interface DocumentLineRow {
   wheel_bolt_pattern: string | null;
   wheel_center_bore_mm: number | null;
 }
-
-const iso = (d: Date | string) => new Date(d).toISOString();
 
 /** The hub checks of a quote's wheel lines against the quoted vehicle. */
 export function hubChecksOf(quote: Pick<DocumentQuoteRow, "bolt_pattern" | "hub_bore_mm">, lines: readonly DocumentLineRow[]): HubCheck[] {
