@@ -5,7 +5,7 @@
 import type { QuoteEventRow, QuoteLineRow, QuoteRow, QuoteStatus } from "@/lib/platform/db/types";
 import { iso, isoOrNull } from "@/lib/platform/http/isoDates";
 import type { Setup } from "@/lib/setup/model";
-import type { HubCheck, QuoteDocumentLine } from "./document";
+import { type HubCheck, type QuoteDocumentLine, documentLineDto } from "./document";
 import type { FitmentSummary } from "./fitment";
 
 export interface Quote {
@@ -123,16 +123,8 @@ export function quoteLineDto(l: QuoteLineRow): QuoteLine {
   return {
     id: l.id,
     position: l.position,
-    kind: l.kind,
+    ...documentLineDto(l),
     catalogItemId: l.catalog_item_id,
-    sku: l.sku,
-    description: l.description,
-    quantity: Number(l.quantity),
-    unit: l.unit,
-    unitPriceCents: l.unit_price_cents,
-    discountCents: l.discount_cents,
-    taxable: l.taxable,
-    lineTotalCents: l.line_total_cents,
     wheelBoltPattern: l.wheel_bolt_pattern,
     wheelCenterBoreMm: l.wheel_center_bore_mm,
   };
