@@ -1,21 +1,21 @@
 import type { Knex } from "knex";
+import { createdAt, optionalRef, timestamps, uuidId } from "../lib/columns";
 
 export async function up(knex: Knex): Promise<void> {
   await knex.schema.createTable("shops", (t) => {
-    t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
+    uuidId(t, knex);
     t.text("name").notNullable();
-    t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    createdAt(t, knex);
   });
 
   await knex.schema.createTable("users", (t) => {
-    t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
+    uuidId(t, knex);
     t.text("email").notNullable();
     t.text("name").notNullable();
     t.text("password_hash").notNullable();
     t.text("role").notNullable().defaultTo("member");
-    t.uuid("shop_id").nullable().references("id").inTable("shops").onDelete("SET NULL");
-    t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
-    t.timestamp("updated_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    optionalRef(t, "shop_id", "shops");
+    timestamps(t, knex);
     t.check("role in ('member','shop_staff','shop_owner','admin')", [], "users_role_known");
     t.check("(role in ('shop_staff','shop_owner')) = (shop_id is not null)", [], "users_shop_role_has_shop");
   });

@@ -1,4 +1,5 @@
 import type { Knex } from "knex";
+import { createdAt, instant, requiredRef, timestamps, uuidId } from "../lib/columns";
 
 /**
  * Saved comparisons and their public share links.
@@ -12,8 +13,8 @@ import type { Knex } from "knex";
  */
 export async function up(knex: Knex): Promise<void> {
   await knex.schema.createTable("comparisons", (t) => {
-    t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
-    t.uuid("owner_id").notNullable().references("id").inTable("users").onDelete("CASCADE");
+    uuidId(t, knex);
+    requiredRef(t, "owner_id", "users");
     t.uuid("vehicle_id").nullable();
     t.text("name").notNullable();
     t.jsonb("input").notNullable();
@@ -26,8 +27,7 @@ export async function up(knex: Knex): Promise<void> {
     t.double("speedometer_error_pct").notNullable();
     t.double("suggested_ratio").notNullable();
     t.integer("warning_count").notNullable();
-    t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
-    t.timestamp("updated_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    timestamps(t, knex);
     t.check("char_length(name) between 1 and 120", [], "comparisons_name_length");
     t.check("jsonb_typeof(input) = 'object'", [], "comparisons_input_object");
   });
@@ -36,11 +36,11 @@ export async function up(knex: Knex): Promise<void> {
 
   // One row per link ever made: a revoked slug stays here (revoked_at set) and can never be reused.
   await knex.schema.createTable("comparison_shares", (t) => {
-    t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
-    t.uuid("comparison_id").notNullable().references("id").inTable("comparisons").onDelete("CASCADE");
+    uuidId(t, knex);
+    requiredRef(t, "comparison_id", "comparisons");
     t.text("slug").notNullable().unique();
-    t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
-    t.timestamp("revoked_at", { useTz: true }).nullable();
+    createdAt(t, knex);
+    instant(t, "revoked_at").nullable();
     t.check("slug ~ '^[A-Za-z0-9_-]{22,64}$'", [], "comparison_shares_slug_urlsafe");
   });
   // At most one live link per comparison.

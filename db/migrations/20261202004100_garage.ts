@@ -1,4 +1,5 @@
 import type { Knex } from "knex";
+import { createdAt, optionalRef, requiredRef, timestamps, uuidId } from "../lib/columns";
 
 /**
  * The garage: a member's vehicles, the clearances measured on them, photos (objects in the
@@ -6,8 +7,8 @@ import type { Knex } from "knex";
  */
 export async function up(knex: Knex): Promise<void> {
   await knex.schema.createTable("vehicles", (t) => {
-    t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
-    t.uuid("user_id").notNullable().references("id").inTable("users").onDelete("CASCADE");
+    uuidId(t, knex);
+    requiredRef(t, "user_id", "users");
     t.text("name").notNullable();
     t.integer("year").nullable();
     t.text("make").nullable();
@@ -27,15 +28,14 @@ export async function up(knex: Knex): Promise<void> {
     t.double("axle_ratio").nullable();
     t.double("transmission_ratio").nullable();
     t.text("notes").notNullable().defaultTo("");
-    t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
-    t.timestamp("updated_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    timestamps(t, knex);
     t.check("front_suspension in ('independent','solid-axle')", [], "vehicles_front_suspension_known");
     t.index(["user_id", "created_at"], "vehicles_user_created");
   });
 
   await knex.schema.createTable("vehicle_clearances", (t) => {
-    t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
-    t.uuid("vehicle_id").notNullable().references("id").inTable("vehicles").onDelete("CASCADE");
+    uuidId(t, knex);
+    requiredRef(t, "vehicle_id", "vehicles");
     t.text("label").notNullable();
     t.text("direction").notNullable();
     t.double("distance_mm").notNullable();
@@ -43,7 +43,7 @@ export async function up(knex: Knex): Promise<void> {
     t.text("distance_text").notNullable();
     t.text("suspension_state").notNullable();
     t.jsonb("measured_setup").notNullable();
-    t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    createdAt(t, knex);
     t.check("direction in ('inboard','outboard','upward','fore-aft')", [], "clearances_direction_known");
     t.check("suspension_state in ('ride-height','full-stuff','full-lock')", [], "clearances_state_known");
     t.check("distance_mm >= 0", [], "clearances_distance_not_negative");
@@ -51,9 +51,9 @@ export async function up(knex: Knex): Promise<void> {
   });
 
   await knex.schema.createTable("vehicle_photos", (t) => {
-    t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
-    t.uuid("vehicle_id").notNullable().references("id").inTable("vehicles").onDelete("CASCADE");
-    t.uuid("clearance_id").nullable().references("id").inTable("vehicle_clearances").onDelete("CASCADE");
+    uuidId(t, knex);
+    requiredRef(t, "vehicle_id", "vehicles");
+    optionalRef(t, "clearance_id", "vehicle_clearances", "CASCADE");
     /** Object keys are built from ids only, never from a file name. */
     t.text("object_key").notNullable().unique();
     t.text("thumb_key").notNullable().unique();
@@ -62,22 +62,21 @@ export async function up(knex: Knex): Promise<void> {
     t.integer("height").notNullable();
     t.integer("bytes").notNullable();
     t.text("original_name").notNullable();
-    t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    createdAt(t, knex);
     t.check("content_type in ('image/jpeg','image/png','image/webp')", [], "photos_type_known");
     t.index(["vehicle_id"], "photos_vehicle");
   });
 
   await knex.schema.createTable("install_checklists", (t) => {
-    t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
-    t.uuid("vehicle_id").notNullable().references("id").inTable("vehicles").onDelete("CASCADE");
+    uuidId(t, knex);
+    requiredRef(t, "vehicle_id", "vehicles");
     /** Canonical text of the planned setup (the query-string form), one checklist per plan. */
     t.text("planned_key").notNullable();
     t.jsonb("planned_setup").notNullable();
     /** A saved comparison this checklist belongs to; attached once saved comparisons exist. */
     t.uuid("comparison_id").nullable();
     t.jsonb("ticked").notNullable().defaultTo("[]");
-    t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
-    t.timestamp("updated_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    timestamps(t, knex);
     t.unique(["vehicle_id", "planned_key"], { indexName: "checklists_vehicle_plan_unique" });
     t.index(["comparison_id"], "checklists_comparison");
   });

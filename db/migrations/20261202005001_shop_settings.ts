@@ -1,4 +1,5 @@
 import type { Knex } from "knex";
+import { createdAt, instant, optionalRef, requiredRef, uuidId } from "../lib/columns";
 
 /** Shop settings the counter needs, and single-use staff invitations. */
 export async function up(knex: Knex): Promise<void> {
@@ -12,7 +13,7 @@ export async function up(knex: Knex): Promise<void> {
     t.integer("quote_validity_days").notNullable().defaultTo(14);
     t.integer("deposit_pct").notNullable().defaultTo(25);
     t.text("currency").notNullable().defaultTo("USD");
-    t.timestamp("updated_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    instant(t, "updated_at").notNullable().defaultTo(knex.fn.now());
     t.check("tax_rate_bp between 0 and 3000", [], "shops_tax_rate_range");
     t.check("labour_rate_cents between 0 and 10000000 and fabrication_rate_cents between 0 and 10000000", [], "shops_rates_range");
     t.check("quote_validity_days between 1 and 365", [], "shops_validity_range");
@@ -21,16 +22,16 @@ export async function up(knex: Knex): Promise<void> {
   });
 
   await knex.schema.createTable("staff_invites", (t) => {
-    t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
-    t.uuid("shop_id").notNullable().references("id").inTable("shops").onDelete("CASCADE");
+    uuidId(t, knex);
+    requiredRef(t, "shop_id", "shops");
     t.text("email").notNullable();
     // Only a SHA-256 of the token is stored.
     t.text("token_hash").notNullable().unique();
-    t.uuid("invited_by").nullable().references("id").inTable("users").onDelete("SET NULL");
-    t.timestamp("expires_at", { useTz: true }).notNullable();
-    t.timestamp("used_at", { useTz: true }).nullable();
-    t.timestamp("revoked_at", { useTz: true }).nullable();
-    t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    optionalRef(t, "invited_by", "users");
+    instant(t, "expires_at").notNullable();
+    instant(t, "used_at").nullable();
+    instant(t, "revoked_at").nullable();
+    createdAt(t, knex);
     t.index(["shop_id"]);
   });
 }

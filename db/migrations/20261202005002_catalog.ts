@@ -1,10 +1,11 @@
 import type { Knex } from "knex";
+import { createdAt, instant, optionalRef, requiredRef, timestamps, uuidId } from "../lib/columns";
 
 /** A shop's catalog (tires, wheels, services) and staged CSV imports awaiting confirmation. */
 export async function up(knex: Knex): Promise<void> {
   await knex.schema.createTable("catalog_items", (t) => {
-    t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
-    t.uuid("shop_id").notNullable().references("id").inTable("shops").onDelete("CASCADE");
+    uuidId(t, knex);
+    requiredRef(t, "shop_id", "shops");
     t.text("kind").notNullable();
     t.text("sku").notNullable();
     t.text("description").notNullable();
@@ -26,8 +27,7 @@ export async function up(knex: Knex): Promise<void> {
     // Services.
     t.text("service_type").nullable();
     t.text("service_unit").nullable();
-    t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
-    t.timestamp("updated_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    timestamps(t, knex);
     t.unique(["shop_id", "sku"]);
     t.index(["shop_id", "kind"]);
     t.check("kind in ('tire','wheel','service')", [], "catalog_kind_known");
@@ -51,16 +51,16 @@ export async function up(knex: Knex): Promise<void> {
   });
 
   await knex.schema.createTable("catalog_imports", (t) => {
-    t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
-    t.uuid("shop_id").notNullable().references("id").inTable("shops").onDelete("CASCADE");
-    t.uuid("created_by").nullable().references("id").inTable("users").onDelete("SET NULL");
+    uuidId(t, knex);
+    requiredRef(t, "shop_id", "shops");
+    optionalRef(t, "created_by", "users");
     t.text("filename").notNullable().defaultTo("");
     t.jsonb("rows").notNullable();
     t.integer("row_count").notNullable();
     t.integer("error_count").notNullable();
     t.text("status").notNullable().defaultTo("staged");
-    t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
-    t.timestamp("committed_at", { useTz: true }).nullable();
+    createdAt(t, knex);
+    instant(t, "committed_at").nullable();
     t.check("status in ('staged','committed')", [], "catalog_imports_status_known");
     t.index(["shop_id"]);
   });

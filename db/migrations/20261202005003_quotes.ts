@@ -1,25 +1,25 @@
 import type { Knex } from "knex";
+import { createdAt, instant, optionalRef, requiredRef, timestamps, uuidId } from "../lib/columns";
 
 /** Customers and their vehicles, quotes with lines and a status history, deposits and webhook receipts. */
 export async function up(knex: Knex): Promise<void> {
   await knex.schema.createTable("customers", (t) => {
-    t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
-    t.uuid("shop_id").notNullable().references("id").inTable("shops").onDelete("CASCADE");
+    uuidId(t, knex);
+    requiredRef(t, "shop_id", "shops");
     t.text("name").notNullable();
     t.text("phone").notNullable().defaultTo("");
     // Digits only, so "555-0142" and "(555) 0142" find the same customer.
     t.text("phone_digits").notNullable().defaultTo("");
     t.text("email").notNullable().defaultTo("");
-    t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
-    t.timestamp("updated_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    timestamps(t, knex);
     t.index(["shop_id", "phone_digits"]);
   });
   await knex.raw("create index customers_shop_email on customers (shop_id, lower(email))");
 
   await knex.schema.createTable("customer_vehicles", (t) => {
-    t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
-    t.uuid("shop_id").notNullable().references("id").inTable("shops").onDelete("CASCADE");
-    t.uuid("customer_id").notNullable().references("id").inTable("customers").onDelete("CASCADE");
+    uuidId(t, knex);
+    requiredRef(t, "shop_id", "shops");
+    requiredRef(t, "customer_id", "customers");
     t.text("description").notNullable();
     t.text("bolt_pattern").notNullable();
     t.text("tire_size").notNullable();
@@ -27,17 +27,17 @@ export async function up(knex: Knex): Promise<void> {
     t.double("wheel_width_in").notNullable();
     t.double("wheel_offset_mm").notNullable();
     t.double("axle_ratio").nullable();
-    t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    createdAt(t, knex);
     t.index(["customer_id"]);
   });
 
   await knex.schema.createTable("quotes", (t) => {
-    t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
-    t.uuid("shop_id").notNullable().references("id").inTable("shops").onDelete("CASCADE");
+    uuidId(t, knex);
+    requiredRef(t, "shop_id", "shops");
     t.integer("number").notNullable();
-    t.uuid("customer_id").notNullable().references("id").inTable("customers").onDelete("RESTRICT");
-    t.uuid("vehicle_id").nullable().references("id").inTable("customer_vehicles").onDelete("SET NULL");
-    t.uuid("created_by").nullable().references("id").inTable("users").onDelete("SET NULL");
+    requiredRef(t, "customer_id", "customers", "RESTRICT");
+    optionalRef(t, "vehicle_id", "customer_vehicles");
+    optionalRef(t, "created_by", "users");
     t.text("status").notNullable().defaultTo("draft");
     // The vehicle as quoted (kept even if the saved vehicle changes later).
     t.text("vehicle_description").notNullable();
@@ -47,8 +47,8 @@ export async function up(knex: Knex): Promise<void> {
     t.double("current_wheel_width_in").notNullable();
     t.double("current_wheel_offset_mm").notNullable();
     t.double("axle_ratio").nullable();
-    t.uuid("tire_item_id").nullable().references("id").inTable("catalog_items").onDelete("SET NULL");
-    t.uuid("wheel_item_id").nullable().references("id").inTable("catalog_items").onDelete("SET NULL");
+    optionalRef(t, "tire_item_id", "catalog_items");
+    optionalRef(t, "wheel_item_id", "catalog_items");
     t.integer("wheel_qty").notNullable();
     t.jsonb("fitment").notNullable();
     t.integer("discount_cents").notNullable().defaultTo(0);
@@ -61,9 +61,8 @@ export async function up(knex: Knex): Promise<void> {
     t.integer("deposit_cents").notNullable().defaultTo(0);
     t.text("notes").notNullable().defaultTo("");
     t.text("public_token_hash").nullable().unique();
-    t.timestamp("valid_until", { useTz: true }).nullable();
-    t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
-    t.timestamp("updated_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    instant(t, "valid_until").nullable();
+    timestamps(t, knex);
     t.unique(["shop_id", "number"]);
     t.index(["shop_id", "status"]);
     t.check("status in ('draft','sent','accepted','deposit_paid','installed','declined','expired')", [], "quotes_status_known");
@@ -76,11 +75,11 @@ export async function up(knex: Knex): Promise<void> {
   });
 
   await knex.schema.createTable("quote_lines", (t) => {
-    t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
-    t.uuid("quote_id").notNullable().references("id").inTable("quotes").onDelete("CASCADE");
+    uuidId(t, knex);
+    requiredRef(t, "quote_id", "quotes");
     t.integer("position").notNullable();
     t.text("kind").notNullable();
-    t.uuid("catalog_item_id").nullable().references("id").inTable("catalog_items").onDelete("SET NULL");
+    optionalRef(t, "catalog_item_id", "catalog_items");
     t.text("sku").notNullable().defaultTo("");
     t.text("description").notNullable();
     t.integer("quantity").notNullable();
@@ -95,27 +94,27 @@ export async function up(knex: Knex): Promise<void> {
 
   await knex.schema.createTable("quote_events", (t) => {
     t.bigIncrements("id").primary();
-    t.uuid("quote_id").notNullable().references("id").inTable("quotes").onDelete("CASCADE");
+    requiredRef(t, "quote_id", "quotes");
     t.text("from_status").nullable();
     t.text("to_status").notNullable();
-    t.uuid("actor_user_id").nullable().references("id").inTable("users").onDelete("SET NULL");
+    optionalRef(t, "actor_user_id", "users");
     // Who, in words: a staff member's name, "customer", "payment provider" or "system".
     t.text("actor").notNullable();
     t.text("note").notNullable().defaultTo("");
-    t.timestamp("at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    instant(t, "at").notNullable().defaultTo(knex.fn.now());
     t.index(["quote_id"]);
   });
 
   await knex.schema.createTable("payments", (t) => {
-    t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
-    t.uuid("shop_id").notNullable().references("id").inTable("shops").onDelete("CASCADE");
-    t.uuid("quote_id").notNullable().references("id").inTable("quotes").onDelete("CASCADE");
+    uuidId(t, knex);
+    requiredRef(t, "shop_id", "shops");
+    requiredRef(t, "quote_id", "quotes");
     t.text("provider_session_id").notNullable().unique();
     t.integer("amount_cents").notNullable();
     t.text("currency").notNullable().defaultTo("usd");
     t.text("status").notNullable().defaultTo("open");
-    t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
-    t.timestamp("paid_at", { useTz: true }).nullable();
+    createdAt(t, knex);
+    instant(t, "paid_at").nullable();
     t.index(["quote_id"]);
     t.check("status in ('open','paid')", [], "payments_status_known");
   });
@@ -126,7 +125,7 @@ export async function up(knex: Knex): Promise<void> {
     t.text("type").notNullable();
     t.uuid("quote_id").nullable();
     t.text("outcome").notNullable();
-    t.timestamp("received_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    instant(t, "received_at").notNullable().defaultTo(knex.fn.now());
   });
 }
 

@@ -1,4 +1,5 @@
 import type { Knex } from "knex";
+import { createdAt, instant, requiredRef } from "../lib/columns";
 
 /**
  * Idempotency-Key records for the create routes (lib/platform/http/idempotency.ts): one row per caller,
@@ -7,7 +8,7 @@ import type { Knex } from "knex";
  */
 export async function up(knex: Knex): Promise<void> {
   await knex.schema.createTable("idempotency_keys", (t) => {
-    t.uuid("user_id").notNullable().references("id").inTable("users").onDelete("CASCADE");
+    requiredRef(t, "user_id", "users");
     // Method and path, e.g. "POST /api/vehicles/<id>/photos": the same key on another route is another request.
     t.text("route").notNullable();
     t.string("key", 200).notNullable();
@@ -20,9 +21,9 @@ export async function up(knex: Knex): Promise<void> {
     t.integer("response_status").nullable();
     t.text("response_type").nullable();
     t.text("response_body").nullable();
-    t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
-    t.timestamp("locked_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
-    t.timestamp("expires_at", { useTz: true }).notNullable().defaultTo(knex.raw("now() + interval '24 hours'"));
+    createdAt(t, knex);
+    instant(t, "locked_at").notNullable().defaultTo(knex.fn.now());
+    instant(t, "expires_at").notNullable().defaultTo(knex.raw("now() + interval '24 hours'"));
     t.primary(["user_id", "route", "key"]);
     t.index(["expires_at"]);
   });

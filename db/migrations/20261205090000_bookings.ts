@@ -1,4 +1,5 @@
 import type { Knex } from "knex";
+import { createdAt, instant, optionalRef, requiredRef, timestamps, uuidId } from "../lib/columns";
 
 /**
  * Install bookings: the shop's week (time zone, opening hours per weekday, closed dates), its
@@ -19,12 +20,12 @@ export async function up(knex: Knex): Promise<void> {
     t.text("time_zone").notNullable().defaultTo("America/Denver");
     // Offered start times fall on this grid from the opening time.
     t.integer("slot_step_minutes").notNullable().defaultTo(30);
-    t.timestamp("updated_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    instant(t, "updated_at").notNullable().defaultTo(knex.fn.now());
     t.check("slot_step_minutes in (15, 30, 60)", [], "shop_schedules_step_known");
   });
 
   await knex.schema.createTable("shop_opening_hours", (t) => {
-    t.uuid("shop_id").notNullable().references("id").inTable("shops").onDelete("CASCADE");
+    requiredRef(t, "shop_id", "shops");
     // ISO 8601 weekday: 1 = Monday … 7 = Sunday. A weekday without a row is closed.
     t.smallint("weekday").notNullable();
     // Minutes after local midnight.
@@ -36,21 +37,21 @@ export async function up(knex: Knex): Promise<void> {
   });
 
   await knex.schema.createTable("shop_closed_days", (t) => {
-    t.uuid("shop_id").notNullable().references("id").inTable("shops").onDelete("CASCADE");
+    requiredRef(t, "shop_id", "shops");
     t.date("day").notNullable();
     t.text("note").notNullable().defaultTo("");
     t.primary(["shop_id", "day"]);
   });
 
   await knex.schema.createTable("bays", (t) => {
-    t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
-    t.uuid("shop_id").notNullable().references("id").inTable("shops").onDelete("CASCADE");
+    uuidId(t, knex);
+    requiredRef(t, "shop_id", "shops");
     t.text("name").notNullable();
     t.text("kind").notNullable();
     t.integer("position").notNullable().defaultTo(0);
     // Removed bays stay so past bookings keep their bay; they take no new work.
-    t.timestamp("archived_at", { useTz: true }).nullable();
-    t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    instant(t, "archived_at").nullable();
+    createdAt(t, knex);
     // The target of the reservations' (bay, shop) key: a reservation can only name a bay of its own shop.
     t.unique(["id", "shop_id"]);
     t.check("kind in ('lift_bay','alignment_rack','fabrication_bay')", [], "bays_kind_known");
@@ -58,8 +59,8 @@ export async function up(knex: Knex): Promise<void> {
   await knex.raw("create unique index bays_shop_name_active on bays (shop_id, lower(name)) where archived_at is null");
 
   await knex.schema.createTable("service_times", (t) => {
-    t.uuid("shop_id").notNullable().references("id").inTable("shops").onDelete("CASCADE");
-    t.uuid("catalog_item_id").notNullable().references("id").inTable("catalog_items").onDelete("CASCADE");
+    requiredRef(t, "shop_id", "shops");
+    requiredRef(t, "catalog_item_id", "catalog_items");
     // Per unit the catalog sells the service in (a wheel, the vehicle, a quoted hour).
     t.integer("minutes_per_unit").notNullable();
     t.text("bay_kind").notNullable();
@@ -69,21 +70,20 @@ export async function up(knex: Knex): Promise<void> {
   });
 
   await knex.schema.createTable("bookings", (t) => {
-    t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
-    t.uuid("shop_id").notNullable().references("id").inTable("shops").onDelete("CASCADE");
-    t.uuid("quote_id").notNullable().references("id").inTable("quotes").onDelete("CASCADE");
+    uuidId(t, knex);
+    requiredRef(t, "shop_id", "shops");
+    requiredRef(t, "quote_id", "quotes");
     t.text("status").notNullable().defaultTo("booked");
-    t.timestamp("starts_at", { useTz: true }).notNullable();
-    t.timestamp("ends_at", { useTz: true }).notNullable();
+    instant(t, "starts_at").notNullable();
+    instant(t, "ends_at").notNullable();
     // The calendar entry's SEQUENCE (RFC 5545 §3.8.7.4): raised on every move and on cancelling.
     t.integer("sequence").notNullable().defaultTo(0);
-    t.uuid("booked_by_user_id").nullable().references("id").inTable("users").onDelete("SET NULL");
+    optionalRef(t, "booked_by_user_id", "users");
     // Who, in words: a staff member's name or "customer".
     t.text("booked_by").notNullable();
-    t.timestamp("reminder_queued_at", { useTz: true }).nullable();
-    t.timestamp("cancelled_at", { useTz: true }).nullable();
-    t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
-    t.timestamp("updated_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    instant(t, "reminder_queued_at").nullable();
+    instant(t, "cancelled_at").nullable();
+    timestamps(t, knex);
     t.index(["shop_id", "starts_at"]);
     t.check("status in ('booked','cancelled')", [], "bookings_status_known");
     t.check("starts_at < ends_at", [], "bookings_order");
@@ -92,8 +92,8 @@ export async function up(knex: Knex): Promise<void> {
   await knex.raw("create unique index bookings_one_live_per_quote on bookings (quote_id) where status <> 'cancelled'");
 
   await knex.schema.createTable("bay_reservations", (t) => {
-    t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
-    t.uuid("booking_id").notNullable().references("id").inTable("bookings").onDelete("CASCADE");
+    uuidId(t, knex);
+    requiredRef(t, "booking_id", "bookings");
     t.uuid("shop_id").notNullable();
     t.uuid("bay_id").notNullable();
     t.foreign(["bay_id", "shop_id"], "bay_reservations_bay_of_shop").references(["id", "shop_id"]).inTable("bays");

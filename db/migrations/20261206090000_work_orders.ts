@@ -1,4 +1,5 @@
 import type { Knex } from "knex";
+import { instant, optionalRef, requiredRef, timestamps, uuidId } from "../lib/columns";
 
 /**
  * Work orders: one per booked quote, the sheet the technician works through in the bay. Each
@@ -17,8 +18,8 @@ export async function up(knex: Knex): Promise<void> {
   });
 
   await knex.schema.createTable("work_orders", (t) => {
-    t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
-    t.uuid("shop_id").notNullable().references("id").inTable("shops").onDelete("CASCADE");
+    uuidId(t, knex);
+    requiredRef(t, "shop_id", "shops");
     t.uuid("quote_id").notNullable().unique().references("id").inTable("quotes").onDelete("CASCADE");
     t.text("status").notNullable().defaultTo("booked");
     // What the sheet covers, fixed from the quote when the work order is made.
@@ -30,14 +31,13 @@ export async function up(knex: Knex): Promise<void> {
     t.boolean("trimming").notNullable().defaultTo(false);
     // Lug nuts per wheel, from the quote's bolt pattern (the star pattern's size).
     t.integer("lug_count").notNullable();
-    t.timestamp("started_at", { useTz: true }).nullable();
+    instant(t, "started_at").nullable();
     t.text("started_by").nullable();
-    t.timestamp("done_at", { useTz: true }).nullable();
+    instant(t, "done_at").nullable();
     t.text("done_by").nullable();
-    t.timestamp("recheck_due_at", { useTz: true }).nullable();
-    t.timestamp("recheck_queued_at", { useTz: true }).nullable();
-    t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
-    t.timestamp("updated_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    instant(t, "recheck_due_at").nullable();
+    instant(t, "recheck_queued_at").nullable();
+    timestamps(t, knex);
     t.unique(["id", "shop_id"]);
     t.index(["shop_id", "status"]);
     t.check("status in ('booked','in_bay','done')", [], "work_orders_status_known");
@@ -46,7 +46,7 @@ export async function up(knex: Knex): Promise<void> {
   });
 
   await knex.schema.createTable("work_order_steps", (t) => {
-    t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
+    uuidId(t, knex);
     t.uuid("work_order_id").notNullable();
     t.uuid("shop_id").notNullable();
     // A step of another shop's work order cannot be written even by a query that forgets the scope.
@@ -58,9 +58,9 @@ export async function up(knex: Knex): Promise<void> {
     t.text("step").notNullable();
     // What was recorded (validated by lib/shop/workOrders/schema.ts; torque in N·m, pressure in kPa).
     t.jsonb("data").notNullable().defaultTo("{}");
-    t.uuid("signed_by_user_id").nullable().references("id").inTable("users").onDelete("SET NULL");
+    optionalRef(t, "signed_by_user_id", "users");
     t.text("signed_by").notNullable();
-    t.timestamp("signed_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
+    instant(t, "signed_at").notNullable().defaultTo(knex.fn.now());
     t.unique(["work_order_id", "position", "step"]);
     t.check("position in ('LF','RF','LR','RR','spare','vehicle')", [], "work_order_steps_position_known");
   });

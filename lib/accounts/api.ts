@@ -4,6 +4,7 @@
  * server.
  */
 import type { PublicUser, Role } from "@/lib/platform/db/types";
+import { rowTimes } from "@/lib/platform/http/isoDates";
 
 export interface User {
   id: string;
@@ -32,8 +33,7 @@ export function userDto(u: PublicUser): User {
     name: u.name,
     role: u.role,
     shopId: u.shop_id,
-    createdAt: new Date(u.created_at).toISOString(),
-    updatedAt: new Date(u.updated_at).toISOString(),
+    ...rowTimes(u),
   };
 }
 

@@ -7,16 +7,19 @@ import { predictPoints } from "./predict";
 import { VEHICLE, point } from "./testUtil";
 import type { Vehicle, VehicleClearance } from "./types";
 
+/** A setup on a 17 in wheel placed by its offset, no spacer: every setup this test builds. */
+const on17 = (tire: string, wheelWidthIn: number, offsetMm: number): Setup => ({
+  tire,
+  wheelDiameterIn: 17,
+  wheelWidthIn,
+  position: { mode: "offset", offsetMm },
+  spacerMm: 0,
+});
+
 describe("finder goals → engine constraints", () => {
   it("on the demo pickup, recommends nothing its own prediction says will rub, and says why the 37s are out", () => {
     // The demo member's pickup (db/seeds/04_demo_garage.ts): LT285/70R17 on 17x8.5 +18, KPI 12°, its five points.
-    const cur: Setup = {
-      tire: "LT285/70R17 121/118Q E",
-      wheelDiameterIn: 17,
-      wheelWidthIn: 8.5,
-      position: { mode: "offset", offsetMm: 18 },
-      spacerMm: 0,
-    };
+    const cur = on17("LT285/70R17 121/118Q E", 8.5, 18);
     const pickup: Vehicle = { ...VEHICLE, frontSuspension: "independent", currentSetup: cur, stockSetup: cur, kingpinInclinationDeg: 12 };
     const at = (
       id: string,
@@ -54,13 +57,8 @@ describe("finder goals → engine constraints", () => {
     runFinderJob({ id: 1, constraints: plan.constraints, wheelWidthsIn: plan.wheelWidthsIn, limit: 200 }, (r) => replies.push(r));
     const done = replies.at(-1)!;
     if (done.type !== "done") throw new Error(`finder failed: ${JSON.stringify(done)}`);
-    const setupOf = (m: { tire: { text: string }; wheel: { widthIn: number; offsetMm: number } }): Setup => ({
-      tire: m.tire.text,
-      wheelDiameterIn: 17,
-      wheelWidthIn: m.wheel.widthIn,
-      position: { mode: "offset", offsetMm: m.wheel.offsetMm },
-      spacerMm: 0,
-    });
+    const setupOf = (m: { tire: { text: string }; wheel: { widthIn: number; offsetMm: number } }) =>
+      on17(m.tire.text, m.wheel.widthIn, m.wheel.offsetMm);
     expect(done.result.results.length).toBeGreaterThan(0);
     for (const m of done.result.results) {
       // The vehicle page's own predictions (lib/garage/predict.ts) for this candidate: all clear.
@@ -79,13 +77,7 @@ describe("finder goals → engine constraints", () => {
     //   Liner (upward, full stuff): 50.8 − (469.9 − 415.4) = −3.7 mm.
     //   Bumper corner (fore/aft, full lock): outer corner √(415.4² + 230.796²) = 475.209 →
     //     √(469.9² + 250.506²) = 532.503: 38.1 − 57.293 = −19.193 mm.
-    const old2: Setup = {
-      tire: "37x12.50R17LT",
-      wheelDiameterIn: 17,
-      wheelWidthIn: 9.5,
-      position: { mode: "offset", offsetMm: 12 },
-      spacerMm: 0,
-    };
+    const old2 = on17("37x12.50R17LT", 9.5, 12);
     const pred = predictPoints(points, old2, 12.7, pickup);
     expect(pred.map((p) => p.status)).toEqual(["contact", "tight", "contact", "contact", "contact"]);
     [-23.29, 7.846, -1.749, -3.7, -19.193].forEach((mm, i) => expect(pred[i]!.predictedMm).toBeCloseTo(mm, 2));

@@ -10,6 +10,7 @@ import type { Setup } from "@/lib/setup/model";
 import type { Vehicle, VehicleClearance, VehicleDetail, VehiclePhoto, WorkspaceVehicle } from "@/lib/garage/types";
 import { bindAppDb } from "@/lib/platform/db/bind";
 import { NotFoundError } from "@/lib/platform/errors";
+import { iso, rowTimes } from "@/lib/platform/http/isoDates";
 
 // Every query here is scoped by the owner's user id; a vehicle of someone else is "not found"
 // (find* returns undefined, the others throw NotFoundError: lib/platform/errors.ts).
@@ -33,8 +34,7 @@ export function vehicleDto(r: VehicleRow): Vehicle {
     transmissionRatio: r.transmission_ratio,
     clearanceMarginMm: r.clearance_margin_mm,
     notes: r.notes,
-    createdAt: new Date(r.created_at).toISOString(),
-    updatedAt: new Date(r.updated_at).toISOString(),
+    ...rowTimes(r),
   };
 }
 
@@ -47,7 +47,7 @@ export function clearanceDto(r: VehicleClearanceRow): VehicleClearance {
     distanceText: r.distance_text,
     suspensionState: r.suspension_state,
     measuredSetup: r.measured_setup as Setup,
-    createdAt: new Date(r.created_at).toISOString(),
+    createdAt: iso(r.created_at),
   };
 }
 
@@ -62,7 +62,7 @@ export function photoDto(r: VehiclePhotoRow): VehiclePhoto {
     name: r.original_name,
     url: `/api/photos/${r.id}`,
     thumbUrl: `/api/photos/${r.id}?variant=thumb`,
-    createdAt: new Date(r.created_at).toISOString(),
+    createdAt: iso(r.created_at),
   };
 }
 

@@ -1,4 +1,5 @@
 /** What the garage API returns (camelCase, ISO dates); shared by server and client. */
+import type { ClearanceDirection, SuspensionState } from "@/lib/fitment";
 import type { FrontSuspension } from "@/lib/platform/db/types";
 import type { Setup } from "@/lib/setup/model";
 
@@ -28,10 +29,10 @@ export interface Vehicle {
 export interface VehicleClearance {
   id: string;
   label: string;
-  direction: "inboard" | "outboard" | "upward" | "fore-aft";
+  direction: ClearanceDirection;
   distanceMm: number;
   distanceText: string;
-  suspensionState: "ride-height" | "full-stuff" | "full-lock";
+  suspensionState: SuspensionState;
   measuredSetup: Setup;
   createdAt: string;
 }

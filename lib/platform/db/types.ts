@@ -1,5 +1,5 @@
 /** Row types, one place for every table. Column names are snake_case as stored. */
-import type { BackspacingReference } from "@/lib/fitment";
+import type { BackspacingReference, ClearanceDirection, SuspensionState } from "@/lib/fitment";
 
 export const ROLES = ["member", "shop_staff", "shop_owner", "admin"] as const;
 export type Role = (typeof ROLES)[number];
@@ -391,10 +391,10 @@ export interface VehicleClearanceRow {
   id: string;
   vehicle_id: string;
   label: string;
-  direction: "inboard" | "outboard" | "upward" | "fore-aft";
+  direction: ClearanceDirection;
   distance_mm: number;
   distance_text: string;
-  suspension_state: "ride-height" | "full-stuff" | "full-lock";
+  suspension_state: SuspensionState;
   measured_setup: unknown;
   created_at: Date;
 }

@@ -51,6 +51,15 @@ export interface QueuedMail {
   attachments?: { filename: string; contentBase64: string; contentType: string }[];
 }
 
+/** The mail with each attachment converted; a mail without attachments gets no `attachments` key at all. */
+function withAttachments<M extends { attachments?: unknown[] }, B>(
+  mail: M,
+  convert: (a: NonNullable<M["attachments"]>[number]) => B,
+): Omit<M, "attachments"> & { attachments?: B[] } {
+  const { attachments, ...rest } = mail;
+  return { ...rest, ...(attachments?.length ? { attachments: attachments.map(convert) } : {}) };
+}
+
 export function toQueued(mail: OutgoingMail): QueuedMail {
   const size = (mail.attachments ?? []).reduce((n, a) => n + a.content.length, 0);
   if (size > MAX_QUEUED_ATTACHMENT_BYTES) {
@@ -58,35 +67,15 @@ export function toQueued(mail: OutgoingMail): QueuedMail {
       `Attachments of ${Math.round(size / 1024)} KB exceed the ${MAX_QUEUED_ATTACHMENT_BYTES / 1024 / 1024} MB a queued mail may carry.`,
     );
   }
-  const { attachments, ...rest } = mail;
-  return {
-    ...rest,
-    ...(attachments?.length
-      ? {
-          attachments: attachments.map((a) => ({
-            filename: a.filename,
-            contentType: a.contentType,
-            contentBase64: a.content.toString("base64"),
-          })),
-        }
-      : {}),
-  };
+  return withAttachments(mail, (a) => ({ filename: a.filename, contentType: a.contentType, contentBase64: a.content.toString("base64") }));
 }
 
 export function fromQueued(mail: QueuedMail): OutgoingMail {
-  const { attachments, ...rest } = mail;
-  return {
-    ...rest,
-    ...(attachments?.length
-      ? {
-          attachments: attachments.map((a) => ({
-            filename: a.filename,
-            contentType: a.contentType,
-            content: Buffer.from(a.contentBase64, "base64"),
-          })),
-        }
-      : {}),
-  };
+  return withAttachments(mail, (a) => ({
+    filename: a.filename,
+    contentType: a.contentType,
+    content: Buffer.from(a.contentBase64, "base64"),
+  }));
 }
 
 /**

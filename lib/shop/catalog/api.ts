@@ -3,6 +3,7 @@
  * server and client. The shop id and the search key column stay on the server.
  */
 import type { CatalogItemRow, CatalogKind, ServiceType, ServiceUnit } from "@/lib/platform/db/types";
+import { rowTimes } from "@/lib/platform/http/isoDates";
 import type { Pick as FitmentPick } from "@/lib/shop/quotes/fitment";
 import type { CounterVehicleForEngine } from "@/lib/shop/customers/schema";
 import type { BackspacingReference } from "@/lib/setup/model";
@@ -110,8 +111,7 @@ export function catalogItemDto(r: CatalogItemRow): CatalogItem {
     wheelBackspacingReference: r.wheel_backspacing_reference,
     serviceType: r.service_type,
     serviceUnit: r.service_unit,
-    createdAt: new Date(r.created_at).toISOString(),
-    updatedAt: new Date(r.updated_at).toISOString(),
+    ...rowTimes(r),
   };
 }
 

@@ -3,6 +3,7 @@
  * server and client. The shop id and the phone digits kept for searching stay on the server.
  */
 import type { CustomerRow, CustomerVehicleRow } from "@/lib/platform/db/types";
+import { iso, rowTimes } from "@/lib/platform/http/isoDates";
 import type { Setup } from "@/lib/setup/model";
 
 export interface Customer {
@@ -38,8 +39,7 @@ export function customerDto(r: CustomerRow): Customer {
     name: r.name,
     phone: r.phone,
     email: r.email,
-    createdAt: new Date(r.created_at).toISOString(),
-    updatedAt: new Date(r.updated_at).toISOString(),
+    ...rowTimes(r),
   };
 }
 
@@ -52,6 +52,6 @@ export function customerVehicleDto(r: CustomerVehicleRow): CustomerVehicle {
     currentSetup: r.current_setup as Setup,
     axleRatio: r.axle_ratio,
     hubBoreMm: r.hub_bore_mm,
-    createdAt: new Date(r.created_at).toISOString(),
+    createdAt: iso(r.created_at),
   };
 }

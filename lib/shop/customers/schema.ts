@@ -11,26 +11,19 @@ import { isObject } from "@/lib/setup/check";
 import { SETUP_FIELD_LABEL } from "@/lib/setup/fields";
 import { type Setup, type SetupForm, toEngineSetup } from "@/lib/setup/model";
 import { optionalLengthField, setupSchema } from "@/lib/setup/schema";
+import { requiredText } from "@/lib/platform/validation/requiredText";
 
 const engineMessage = (e: unknown, fallback: string) => (e instanceof FitmentInputError ? e.message : fallback);
 
 const counterVehicleFields = z.object({
-  description: z
-    .string({ error: "Describe the vehicle, e.g. 2016 half-ton pickup." })
-    .trim()
-    .min(1, "Describe the vehicle, e.g. 2016 half-ton pickup.")
-    .max(120, "Use at most 120 characters."),
-  boltPattern: z
-    .string({ error: "Enter the bolt pattern, e.g. 6x5.5." })
-    .trim()
-    .min(1, "Enter the bolt pattern, e.g. 6x5.5.")
-    .superRefine((v, ctx) => {
-      try {
-        parseBoltPattern(v);
-      } catch (e) {
-        ctx.addIssue({ code: "custom", message: engineMessage(e, "Enter a bolt pattern like 6x5.5.") });
-      }
-    }),
+  description: requiredText("Describe the vehicle, e.g. 2016 half-ton pickup.").max(120, "Use at most 120 characters."),
+  boltPattern: requiredText("Enter the bolt pattern, e.g. 6x5.5.").superRefine((v, ctx) => {
+    try {
+      parseBoltPattern(v);
+    } catch (e) {
+      ctx.addIssue({ code: "custom", message: engineMessage(e, "Enter a bolt pattern like 6x5.5.") });
+    }
+  }),
   // The hub's pilot diameter: the counter checks each wheel's centre bore against it.
   hubBoreMm: optionalLengthField("Hub bore (mm)", "mm", { min: 30, max: 250 }, "108"),
   // The quote's fitment summary compares wheels on the hub face; it reads no spacer yet, so a

@@ -2,9 +2,10 @@
  * What the shop's quote API returns (camelCase, ISO dates) and the row → API mappers; shared by
  * server and client. The shop id and the customer link's token hash stay on the server.
  */
-import type { QuoteEventRow, QuoteLineKind, QuoteLineRow, QuoteLineUnit, QuoteRow, QuoteStatus } from "@/lib/platform/db/types";
+import type { QuoteEventRow, QuoteLineRow, QuoteRow, QuoteStatus } from "@/lib/platform/db/types";
+import { iso, isoOrNull } from "@/lib/platform/http/isoDates";
 import type { Setup } from "@/lib/setup/model";
-import type { HubCheck } from "./document";
+import { type HubCheck, type QuoteDocumentLine, documentLineDto } from "./document";
 import type { FitmentSummary } from "./fitment";
 
 export interface Quote {
@@ -38,19 +39,11 @@ export interface Quote {
   updatedAt: string;
 }
 
-export interface QuoteLine {
+/** A line as the editor and the counter read it: the document's line plus what ties it to the catalog. */
+export interface QuoteLine extends QuoteDocumentLine {
   id: string;
   position: number;
-  kind: QuoteLineKind;
   catalogItemId: string | null;
-  sku: string;
-  description: string;
-  quantity: number;
-  unit: QuoteLineUnit;
-  unitPriceCents: number;
-  discountCents: number;
-  taxable: boolean;
-  lineTotalCents: number;
   wheelBoltPattern: string | null;
   wheelCenterBoreMm: number | null;
 }
@@ -99,9 +92,6 @@ export interface QuotePage {
   pageSize: number;
 }
 
-const iso = (d: Date | string) => new Date(d).toISOString();
-const isoOrNull = (d: Date | string | null) => (d === null ? null : iso(d));
-
 /**
  * @example
  * quoteDto(row).totalCents === row.total_cents; // and no shop_id, no public_token_hash
@@ -142,16 +132,8 @@ export function quoteLineDto(l: QuoteLineRow): QuoteLine {
   return {
     id: l.id,
     position: l.position,
-    kind: l.kind,
+    ...documentLineDto(l),
     catalogItemId: l.catalog_item_id,
-    sku: l.sku,
-    description: l.description,
-    quantity: Number(l.quantity),
-    unit: l.unit,
-    unitPriceCents: l.unit_price_cents,
-    discountCents: l.discount_cents,
-    taxable: l.taxable,
-    lineTotalCents: l.line_total_cents,
     wheelBoltPattern: l.wheel_bolt_pattern,
     wheelCenterBoreMm: l.wheel_center_bore_mm,
   };

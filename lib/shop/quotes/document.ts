@@ -5,6 +5,7 @@
  * (a renamed shop, a repriced catalog). Pure.
  */
 import type { QuoteLineKind, QuoteLineUnit } from "@/lib/platform/db/types";
+import { iso } from "@/lib/platform/http/isoDates";
 import type { FitmentSummary } from "./fitment";
 import { type HubFinding, checkWheelOnHub } from "./hubFit";
 
@@ -89,7 +90,20 @@ export interface DocumentLineRow {
   wheel_center_bore_mm: number | null;
 }
 
-const iso = (d: Date | string) => new Date(d).toISOString();
+/** A line as the document shows it (numeric quantity: pg hands numeric columns over as text). */
+export function documentLineDto(l: DocumentLineRow): QuoteDocumentLine {
+  return {
+    kind: l.kind,
+    sku: l.sku,
+    description: l.description,
+    quantity: Number(l.quantity),
+    unit: l.unit,
+    unitPriceCents: l.unit_price_cents,
+    discountCents: l.discount_cents,
+    lineTotalCents: l.line_total_cents,
+    taxable: l.taxable,
+  };
+}
 
 /** The hub checks of a quote's wheel lines against the quoted vehicle. */
 export function hubChecksOf(quote: Pick<DocumentQuoteRow, "bolt_pattern" | "hub_bore_mm">, lines: readonly DocumentLineRow[]): HubCheck[] {
@@ -134,17 +148,7 @@ export function buildQuoteDocument(input: {
     customer: { name: customer.name, phone: customer.phone, email: customer.email },
     vehicle: { description: q.vehicle_description, boltPattern: q.bolt_pattern, hubBoreMm: q.hub_bore_mm },
     fitment: q.fitment as FitmentSummary,
-    lines: lines.map((l) => ({
-      kind: l.kind,
-      sku: l.sku,
-      description: l.description,
-      quantity: Number(l.quantity),
-      unit: l.unit,
-      unitPriceCents: l.unit_price_cents,
-      discountCents: l.discount_cents,
-      lineTotalCents: l.line_total_cents,
-      taxable: l.taxable,
-    })),
+    lines: lines.map(documentLineDto),
     totals: {
       subtotalCents: q.subtotal_cents,
       discountCents: q.discount_cents,

@@ -1,6 +1,7 @@
 import "server-only";
 import { STATUS_LABEL } from "@/lib/shop/quotes/status";
 import type { Knex } from "knex";
+import type { z } from "zod";
 import type {
   CatalogItemRow,
   QuoteEventRow,
@@ -19,6 +20,7 @@ import { type HubCheck, type QuoteDocument, buildQuoteDocument, hubChecksOf } fr
 import { type FitmentSummary, summarize } from "@/lib/shop/quotes/fitment";
 import { checkWheelOnHub, hubRefusal } from "@/lib/shop/quotes/hubFit";
 import { formatQuantity } from "@/lib/shop/quotes/quantity";
+import type { updateQuoteSchema } from "@/lib/shop/quotes/schema";
 import { TotalsError, computeTotals } from "@/lib/shop/quotes/totals";
 import { type CounterVehicle, type CounterVehicleForEngine, counterVehicleForEngine } from "@/lib/shop/customers/schema";
 import type { Setup } from "@/lib/setup/model";
@@ -497,21 +499,8 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
   });
 }
 
-export interface UpdateQuote {
-  lines: {
-    kind: LineDraft["kind"];
-    unit: QuoteLineUnit;
-    catalogItemId?: string | null;
-    sku: string;
-    description: string;
-    quantity: number;
-    unitPriceCents: number;
-    discountCents: number;
-    taxable: boolean;
-  }[];
-  discountCents: number;
-  notes: string;
-}
+/** A draft's new lines, discount and notes, as the route's schema reads them (quantities already numbers). */
+export type UpdateQuote = z.output<typeof updateQuoteSchema>;
 
 /**
  * Replaces a draft's lines and discount; totals are recomputed here, never taken from the client.

@@ -2,14 +2,11 @@ import { z } from "zod";
 import { QuantityError, parseQuantity } from "@/lib/shop/quotes/quantity";
 import { emailField } from "../../accounts/schema";
 import { counterVehicleSchema } from "@/lib/shop/customers/schema";
+import { requiredText } from "@/lib/platform/validation/requiredText";
 
 export const customerSchema = z
   .object({
-    name: z
-      .string({ error: "Enter the customer's name." })
-      .trim()
-      .min(1, "Enter the customer's name.")
-      .max(120, "Use at most 120 characters."),
+    name: requiredText("Enter the customer's name.").max(120, "Use at most 120 characters."),
     phone: z
       .string({ error: "Enter the phone number as text." })
       .trim()
@@ -24,11 +21,7 @@ export const customerSchema = z
 export type CustomerInput = z.infer<typeof customerSchema>;
 
 export const customerSearchSchema = z.object({
-  q: z
-    .string({ error: "Type a phone number, e-mail or name." })
-    .trim()
-    .min(1, "Type a phone number, e-mail or name.")
-    .max(120, "Use at most 120 characters."),
+  q: requiredText("Type a phone number, e-mail or name.").max(120, "Use at most 120 characters."),
 });
 
 const uuidField = (message: string) => z.uuid({ error: message });

@@ -4,6 +4,7 @@ import { parseBoltPattern } from "@/lib/fitment";
 import type { CatalogItemRow, QuoteRow, WorkOrderRow, WorkOrderStatus, WorkOrderStepRow } from "@/lib/platform/db/types";
 import { bindAppDb } from "@/lib/platform/db/bind";
 import { ConflictError, InvalidError, NotFoundError } from "@/lib/platform/errors";
+import { iso, isoOrNull } from "@/lib/platform/http/isoDates";
 import { canBook } from "@/lib/shop/bookings/bookable";
 import { readSchedule } from "@/lib/shop/bookings/queries";
 import { formatClock, formatInstant } from "@/lib/shop/bookings/zoned";
@@ -247,9 +248,9 @@ export async function dueForRecheck(db: Db, shopId: string, now = new Date()): P
     customerName: r.name,
     customerPhone: r.phone,
     vehicleDescription: r.vehicle_description,
-    doneAt: new Date(r.done_at).toISOString(),
-    recheckDueAt: new Date(r.recheck_due_at).toISOString(),
-    remindedAt: r.recheck_queued_at ? new Date(r.recheck_queued_at).toISOString() : null,
+    doneAt: iso(r.done_at),
+    recheckDueAt: iso(r.recheck_due_at),
+    remindedAt: isoOrNull(r.recheck_queued_at),
   }));
 }
 
