@@ -1,4 +1,4 @@
-# Shared by scripts/start.sh and scripts/test.sh. Sourced, not run.
+# Shared by scripts/start.sh, scripts/test.sh and scripts/resilience.sh. Sourced, not run.
 set -euo pipefail
 ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
 cd "$ROOT"
@@ -92,4 +92,49 @@ wait_for_http() {
     sleep 0.5
   done
   return 1
+}
+
+random_hex() { node -e "console.log(require('crypto').randomBytes($1).toString('hex'))"; }
+
+# stop_on_exit DATA_DIR: when the script ends or is interrupted, stop every background process it
+# recorded (`cmd & PIDS+=($!)`), then the throw-away PostgreSQL cluster in DATA_DIR.
+PIDS=()
+stop_on_exit() {
+  STOP_PGDATA="$1"
+  trap stop_everything EXIT INT TERM
+}
+stop_everything() {
+  trap - EXIT INT TERM
+  for pid in "${PIDS[@]}"; do kill "$pid" 2>/dev/null; done
+  for pid in "${PIDS[@]}"; do wait "$pid" 2>/dev/null; done
+  pg_down "$STOP_PGDATA"
+}
+
+# fresh_database PORT NAME...: each database dropped (its connections closed) and created empty;
+# fails when any of them could not be.
+fresh_database() {
+  local port="$1" name failed=0; shift
+  for name in "$@"; do
+    "$PGBIN/psql" -q -h 127.0.0.1 -p "$port" -U postgres -d postgres \
+      -c "drop database if exists $name with (force)" -c "create database $name" >/dev/null || failed=1
+  done
+  return "$failed"
+}
+
+# fake_mail_and_pay_env APP_URL SMTP_PORT OUTBOX_PORT PAY_PORT STRIPE_KEY: the app at APP_URL sends
+# mail to the local fake SMTP server and pays through the local fake provider (scripts/services),
+# with a webhook secret made for this run.
+fake_mail_and_pay_env() {
+  local app="$1" smtp="$2" outbox="$3" pay="$4"
+  export NEXTAUTH_URL="$app" APP_ORIGIN="$app"
+  export SMTP_PORT="$smtp" OUTBOX_PORT="$outbox" SMTP_URL="smtp://127.0.0.1:$smtp" OUTBOX_URL="http://127.0.0.1:$outbox"
+  export FAKE_PAY_PORT="$pay" STRIPE_SECRET_KEY="$5" STRIPE_API_HOST=127.0.0.1 STRIPE_API_PORT="$pay"
+  STRIPE_WEBHOOK_SECRET="whsec_$(random_hex 24)"
+  export STRIPE_WEBHOOK_SECRET STRIPE_WEBHOOK_URL="$app/api/payments/webhook"
+}
+
+# fake_photo_store_env S3_PORT S3_DIR: photos go to the local S3 fake (scripts/services/fake-s3.ts).
+fake_photo_store_env() {
+  export S3_PORT="$1" S3_DIR="$2" S3_BUCKET=hubface-photos S3_REGION=us-east-1
+  export S3_ENDPOINT="http://127.0.0.1:$1" S3_ACCESS_KEY_ID=S3RVER S3_SECRET_ACCESS_KEY=S3RVER
 }

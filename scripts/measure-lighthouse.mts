@@ -12,36 +12,20 @@
  */
 import * as chromeLauncher from "chrome-launcher";
 import lighthouse from "lighthouse";
+import { CHROMIUM_FLAGS } from "./chromium";
+import { signInOverHttp } from "./http-session";
 
 const base = (process.argv[2] ?? process.env.BASE_URL ?? "http://127.0.0.1:3000").replace(/\/$/, "");
 const MEMBER = { email: "juno@demo.hubface.test", password: "hubface-demo-1" };
 /** A comparison in the URL, as a shared workspace link carries it (the codec reads these names). */
 const WITH_COMPARISON = "/workspace?ct=285%2F75R16&cd=16&cw=8&co=0&pt=35x12.50R17LT&pd=17&pw=9&po=-12";
 
-/** Cookie jar just big enough for next-auth's CSRF and credentials round trip. */
 async function signIn(): Promise<string> {
-  const jar = new Map<string, string>();
-  const take = (res: Response) => {
-    for (const c of res.headers.getSetCookie()) {
-      const [pair] = c.split(";");
-      const at = pair!.indexOf("=");
-      jar.set(pair!.slice(0, at), pair!.slice(at + 1));
-    }
-  };
-  const header = () => [...jar].map(([k, v]) => `${k}=${v}`).join("; ");
-  const csrfRes = await fetch(`${base}/api/auth/csrf`);
-  take(csrfRes);
-  const { csrfToken } = (await csrfRes.json()) as { csrfToken: string };
-  const res = await fetch(`${base}/api/auth/callback/credentials`, {
-    method: "POST",
-    redirect: "manual",
-    headers: { "Content-Type": "application/x-www-form-urlencoded", Cookie: header(), Origin: base },
-    body: new URLSearchParams({ csrfToken, ...MEMBER, json: "true" }),
-  });
-  take(res);
-  if (![...jar.keys()].some((k) => k.includes("session-token")))
-    throw new Error(`sign-in as ${MEMBER.email} failed (${res.status}); is the demo data loaded?`);
-  return header();
+  try {
+    return await signInOverHttp(base, MEMBER.email, MEMBER.password, { Origin: base });
+  } catch (e) {
+    throw new Error(`${(e as Error).message}; is the demo data loaded?`);
+  }
 }
 
 async function demoPaths(cookie: string): Promise<{ share?: string; vehicle?: string }> {
@@ -103,16 +87,7 @@ async function main() {
   ];
   const chrome = await chromeLauncher.launch({
     chromePath: process.env.CHROME_PATH ?? "/usr/bin/chromium",
-    chromeFlags: [
-      "--headless=new",
-      "--no-sandbox",
-      "--disable-gpu",
-      "--disable-quic",
-      "--no-first-run",
-      "--disable-background-networking",
-      "--disable-component-update",
-      "--disable-sync",
-    ],
+    chromeFlags: ["--headless=new", ...CHROMIUM_FLAGS],
   });
   const rows: Row[] = [];
   try {

@@ -24,6 +24,7 @@ import pg from "pg";
 import sharp from "sharp";
 import { register } from "node:module";
 import { DEFAULT_INPUT } from "@/lib/comparisons/schema";
+import { signInOverHttp } from "./http-session";
 
 const env = (name: string): string => {
   const v = process.env[name];
@@ -122,30 +123,8 @@ async function sql<T extends Record<string, unknown>>(text: string, values: unkn
 
 // ---------------------------------------------------------------- HTTP helpers
 
-/** Signs in over HTTP as the sign-in form does (tests/browser/support/http.ts sessionCookie); returns the Cookie header. */
-async function sessionCookie(base: string, email: string): Promise<string> {
-  const jar = new Map<string, string>();
-  const take = (res: Response) => {
-    for (const c of res.headers.getSetCookie()) {
-      const pair = c.split(";")[0] ?? "";
-      const i = pair.indexOf("=");
-      jar.set(pair.slice(0, i), pair.slice(i + 1));
-    }
-  };
-  const header = () => [...jar].map(([k, v]) => `${k}=${v}`).join("; ");
-  const csrf = await fetch(`${base}/api/auth/csrf`);
-  take(csrf);
-  const { csrfToken } = (await csrf.json()) as { csrfToken: string };
-  const res = await fetch(`${base}/api/auth/callback/credentials`, {
-    method: "POST",
-    redirect: "manual",
-    headers: { "Content-Type": "application/x-www-form-urlencoded", Cookie: header() },
-    body: new URLSearchParams({ csrfToken, email, password: DEMO_PASSWORD, json: "true" }),
-  });
-  take(res);
-  if (!/session-token=/.test(header())) throw new Error(`signing in as ${email} on ${base} failed (${res.status})`);
-  return header();
-}
+/** A demo account's session on the server at `base` (scripts/http-session.ts); the Cookie header. */
+const sessionCookie = (base: string, email: string) => signInOverHttp(base, email, DEMO_PASSWORD);
 
 async function call(base: string, cookie: string, method: string, path: string, body?: unknown): Promise<Response> {
   return fetch(`${base}${path}`, {

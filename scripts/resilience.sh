@@ -14,15 +14,7 @@ export RS_PGPORT="${HUBFACE_RS_PG_PORT:-55470}"
 export RS_PORT_A="${HUBFACE_RS_PORT_A:-3700}" RS_PORT_B="${HUBFACE_RS_PORT_B:-3701}"
 RS_S3="${HUBFACE_RS_S3_PORT:-3710}" RS_SMTP="${HUBFACE_RS_SMTP_PORT:-3711}" RS_OUTBOX="${HUBFACE_RS_OUTBOX_PORT:-3712}" RS_PAY="${HUBFACE_RS_PAY_PORT:-3713}"
 export RS_LOGS="$RS/logs"
-PIDS=()
-
-cleanup() {
-  trap - EXIT INT TERM
-  for pid in "${PIDS[@]}"; do kill "$pid" 2>/dev/null; done
-  for pid in "${PIDS[@]}"; do wait "$pid" 2>/dev/null; done
-  pg_down "$RS_PGDATA"
-}
-trap cleanup EXIT INT TERM
+stop_on_exit "$RS_PGDATA"
 
 fail() { log "resilience suite could not run: $*"; exit 1; }
 
@@ -36,19 +28,13 @@ rm -rf "$RS_LOGS" "$RS/s3"; mkdir -p "$RS_LOGS"
 # A throw-away cluster with the durability settings a real one keeps (fsync on): lost writes
 # are what this suite looks for.
 pg_up "$RS_PGDATA" "$RS_PGPORT" postgres || fail "PostgreSQL did not start"
-"$PGBIN/psql" -q -h 127.0.0.1 -p "$RS_PGPORT" -U postgres -d postgres \
-  -c "drop database if exists hubface_resilience with (force)" -c "create database hubface_resilience" >/dev/null || fail "could not create the database"
+fresh_database "$RS_PGPORT" hubface_resilience || fail "could not create the database"
 
 export DATABASE_URL="postgres://postgres@127.0.0.1:$RS_PGPORT/hubface_resilience"
-export NEXTAUTH_SECRET="resilience-$(node -e 'console.log(require("crypto").randomBytes(16).toString("hex"))')"
+export NEXTAUTH_SECRET="resilience-$(random_hex 16)"
 # One public origin for both servers, as behind one load balancer.
-export NEXTAUTH_URL="http://127.0.0.1:$RS_PORT_A" APP_ORIGIN="http://127.0.0.1:$RS_PORT_A"
-export SMTP_PORT="$RS_SMTP" OUTBOX_PORT="$RS_OUTBOX" SMTP_URL="smtp://127.0.0.1:$RS_SMTP" OUTBOX_URL="http://127.0.0.1:$RS_OUTBOX"
-export FAKE_PAY_PORT="$RS_PAY" STRIPE_SECRET_KEY="sk_test_hubface_resilience" STRIPE_API_HOST=127.0.0.1 STRIPE_API_PORT="$RS_PAY"
-export STRIPE_WEBHOOK_SECRET="whsec_$(node -e 'console.log(require("crypto").randomBytes(24).toString("hex"))')"
-export STRIPE_WEBHOOK_URL="$NEXTAUTH_URL/api/payments/webhook"
-export S3_PORT="$RS_S3" S3_DIR="$RS/s3" S3_BUCKET=hubface-photos S3_REGION=us-east-1
-export S3_ENDPOINT="http://127.0.0.1:$RS_S3" S3_ACCESS_KEY_ID=S3RVER S3_SECRET_ACCESS_KEY=S3RVER
+fake_mail_and_pay_env "http://127.0.0.1:$RS_PORT_A" "$RS_SMTP" "$RS_OUTBOX" "$RS_PAY" sk_test_hubface_resilience
+fake_photo_store_env "$RS_S3" "$RS/s3"
 
 # The build reads DATABASE_URL (configuration only; nothing is queried).
 if [ ! -f .next/BUILD_ID ] || [ "${RESILIENCE_BUILD:-}" = 1 ]; then

@@ -13,15 +13,7 @@ T_SMTP="${HUBFACE_TEST_SMTP_PORT:-2625}"
 T_OUTBOX="${HUBFACE_TEST_OUTBOX_PORT:-2626}"
 T_PAY="${HUBFACE_TEST_PAY_PORT:-2627}"
 T_S3="${HUBFACE_TEST_S3_PORT:-4569}"
-PIDS=()
-
-cleanup() {
-  trap - EXIT INT TERM
-  for pid in "${PIDS[@]}"; do kill "$pid" 2>/dev/null; done
-  for pid in "${PIDS[@]}"; do wait "$pid" 2>/dev/null; done
-  pg_down "$PGDATA_DIR"
-}
-trap cleanup EXIT INT TERM
+stop_on_exit "$PGDATA_DIR"
 
 set -e
 ensure_node_modules
@@ -41,14 +33,11 @@ check() { # check NAME command...: a whole command counted as one test
 
 # A throw-away cluster: fsync off is fine here, never for data anyone keeps.
 pg_up "$PGDATA_DIR" "$PGPORT_TEST" postgres "-c fsync=off -c synchronous_commit=off -c full_page_writes=off" || { record postgres 0 1; node scripts/sum-results.mjs "$RESULTS"; exit 1; }
-PSQL=("$PGBIN/psql" -q -h 127.0.0.1 -p "$PGPORT_TEST" -U postgres -d postgres)
-for dbn in hubface_test hubface_e2e; do
-  "${PSQL[@]}" -c "drop database if exists $dbn with (force)" -c "create database $dbn" >/dev/null
-done
+fresh_database "$PGPORT_TEST" hubface_test hubface_e2e
 export PGHOST=127.0.0.1 PGPORT_TEST
 export TEST_DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT_TEST/hubface_test"
 export E2E_DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT_TEST/hubface_e2e"
-export NEXTAUTH_SECRET="test-secret-$(node -e 'console.log(require("crypto").randomBytes(16).toString("hex"))')"
+export NEXTAUTH_SECRET="test-secret-$(random_hex 16)"
 
 check format prettier --check . --log-level warn
 check lint eslint . --max-warnings=0
@@ -62,18 +51,13 @@ DATABASE_URL="$TEST_DATABASE_URL" vitest run --project unit --project integratio
 
 log "building the app for browser tests"
 export DATABASE_URL="$E2E_DATABASE_URL"
-export SMTP_PORT="$T_SMTP" OUTBOX_PORT="$T_OUTBOX"
-export SMTP_URL="smtp://127.0.0.1:$T_SMTP" OUTBOX_URL="http://127.0.0.1:$T_OUTBOX"
-export NEXTAUTH_URL="http://127.0.0.1:$APP_PORT" APP_ORIGIN="http://127.0.0.1:$APP_PORT"
 export E2E_BASE_URL="http://127.0.0.1:$APP_PORT"
-export FAKE_PAY_PORT="$T_PAY" STRIPE_SECRET_KEY="sk_test_hubface_e2e" STRIPE_API_HOST=127.0.0.1 STRIPE_API_PORT="$T_PAY"
-export STRIPE_WEBHOOK_SECRET="whsec_$(node -e 'console.log(require("crypto").randomBytes(24).toString("hex"))')"
-export STRIPE_WEBHOOK_URL="$E2E_BASE_URL/api/payments/webhook"
+fake_mail_and_pay_env "$E2E_BASE_URL" "$T_SMTP" "$T_OUTBOX" "$T_PAY" sk_test_hubface_e2e
 export PG_TEST_DATA_DIR="$PGDATA_DIR" PGBIN
 if next build > "$RESULTS/next-build.log" 2>&1; then
   record build 1 0
-  export S3_PORT="$T_S3" S3_DIR="$ROOT/.data/s3-test" S3_RESET=1 S3_BUCKET=hubface-photos S3_REGION=us-east-1
-  export S3_ENDPOINT="http://127.0.0.1:$T_S3" S3_ACCESS_KEY_ID=S3RVER S3_SECRET_ACCESS_KEY=S3RVER
+  fake_photo_store_env "$T_S3" "$ROOT/.data/s3-test"
+  export S3_RESET=1
   rm -rf "$S3_DIR"
   tsx scripts/services/fake-s3.ts > "$RESULTS/fake-s3.log" 2>&1 & PIDS+=($!)
   wait_for_http "$S3_ENDPOINT/" 20 || log "the photo store did not start; see $RESULTS/fake-s3.log"

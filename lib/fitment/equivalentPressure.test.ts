@@ -9,14 +9,12 @@ import { psiToKpa } from "./units";
 // NIST SP 811 (2008) B.8: 1 psi = 6.894757 kPa.
 const PSI = 6.894757;
 
+/** A light truck on its P-metric tire at the 35 psi placard pressure (invented example). */
+const TRUCK_AT_PLACARD = { current: "P265/70R17 113S", currentPressureKpa: psiToKpa(35), vehicle: "light-truck" } as const;
+
 describe("equivalentPressure (TRA load formulas; ISO 4000-1 load index; FMVSS 120 S5.1.2)", () => {
   it("P265/70R17 113S at its 35 psi placard on a light truck → LT285/70R17 121/118Q LRE: 1045.45 kg, 45.73 psi, set the LR E minimum 320 kPa", () => {
-    const r = equivalentPressure({
-      current: "P265/70R17 113S",
-      currentPressureKpa: psiToKpa(35),
-      planned: "LT285/70R17 121/118Q LRE",
-      vehicle: "light-truck",
-    });
+    const r = equivalentPressure({ ...TRUCK_AT_PLACARD, planned: "LT285/70R17 121/118Q LRE" });
     // LI 113 = 1150 kg (ISO 4000-1) ÷ 1.10 (FMVSS 120 S5.1.2) = 1045.4545 kg at the TRA 35 psi reference (from memory)
     expect(r.loadKg).toBeCloseTo(1045.4545, 3);
     // LI 121 = 1450 kg at 80 psi (LR E, from memory): 80 × (1045.4545/1450)^(1/0.585) = 45.7349 psi (by hand)
@@ -29,12 +27,7 @@ describe("equivalentPressure (TRA load formulas; ISO 4000-1 load index; FMVSS 12
   });
 
   it("the same truck on 37x12.50R17LT 124Q load range D (50 psi, LI 124 = 1600 kg): 24.16 psi by the formula, 29.17 psi to set (minimum by proportion, no source)", () => {
-    const r = equivalentPressure({
-      current: "P265/70R17 113S",
-      currentPressureKpa: psiToKpa(35),
-      planned: "37x12.50R17LT 124Q LRD",
-      vehicle: "light-truck",
-    });
+    const r = equivalentPressure({ ...TRUCK_AT_PLACARD, planned: "37x12.50R17LT 124Q LRD" });
     // 50 × (1045.4545/1600)^(1/0.585) = 24.1572 psi (by hand)
     expect(r.pressurePsi).toBeCloseTo(24.1572, 3);
     expect(r.belowMinimum).toBe(true);
@@ -96,13 +89,7 @@ describe("equivalentPressure (TRA load formulas; ISO 4000-1 load index; FMVSS 12
   });
 
   it("sidewall figures given override the engine's (LT size without load range)", () => {
-    const r = equivalentPressure({
-      current: "P265/70R17 113S",
-      currentPressureKpa: psiToKpa(35),
-      planned: "LT285/70R17 121/118Q",
-      plannedMaxPressureKpa: psiToKpa(80),
-      vehicle: "light-truck",
-    });
+    const r = equivalentPressure({ ...TRUCK_AT_PLACARD, planned: "LT285/70R17 121/118Q", plannedMaxPressureKpa: psiToKpa(80) });
     expect(r.pressurePsi).toBeCloseTo(45.7349, 3);
     expect(r.planned.sources.maxPressure).toMatch(/as given/);
   });

@@ -1,6 +1,6 @@
 import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launch, seriousViolations, shot, signInAs } from "./support/browser";
+import { expectAxeClean, launch, signInAs, signUpAs } from "./support/browser";
 import { BASE } from "./support/browser";
 import { DEMO, DEMO_PASSWORD, sessionCookie } from "./support/http";
 import { waitForMail } from "./support/outbox";
@@ -15,10 +15,7 @@ beforeAll(async () => {
 });
 afterAll(() => session.close());
 
-async function axeClean(name: string) {
-  await shot(page, name);
-  expect(await seriousViolations(page), `axe on ${page.url()}`).toEqual([]);
-}
+const axeClean = (name: string) => expectAxeClean(page, name);
 
 async function signOut() {
   await page.getByRole("button", { name: "Sign out", exact: true }).click();
@@ -84,12 +81,7 @@ describe("accounts in Chromium", () => {
 
   it("resets a password through the link in the e-mail the fake SMTP server received", async () => {
     const email = `reset.${stamp}@example.test`;
-    await page.goto("/sign-up");
-    await page.getByLabel("Name").fill("Ilse Carrow");
-    await page.getByLabel("E-mail").fill(email);
-    await page.getByLabel("Password").fill("the first password");
-    await page.getByRole("button", { name: "Create account" }).click();
-    await page.waitForURL(/\/account/);
+    await signUpAs(page, "Ilse Carrow", email, "the first password");
     await signOut();
 
     await page.goto("/forgot-password");
@@ -122,12 +114,7 @@ describe("accounts in Chromium", () => {
 
   it("makes this address wait after repeated wrong passwords, with a clear message", async () => {
     const email = `lock.${stamp}@example.test`;
-    await page.goto("/sign-up");
-    await page.getByLabel("Name").fill("Odo Fenwick");
-    await page.getByLabel("E-mail").fill(email);
-    await page.getByLabel("Password").fill("the right password");
-    await page.getByRole("button", { name: "Create account" }).click();
-    await page.waitForURL(/\/account/);
+    await signUpAs(page, "Odo Fenwick", email, "the right password");
     await signOut();
 
     await page.goto("/sign-in");

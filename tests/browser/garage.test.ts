@@ -2,7 +2,7 @@ import { randomBytes } from "node:crypto";
 import type { Page } from "playwright-core";
 import sharp from "sharp";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launch, seriousViolations, shot, signInAs } from "./support/browser";
+import { expectAxeClean, launch, seriousViolations, shot, signInAs, withBrowserPage } from "./support/browser";
 import { DEMO, DEMO_PASSWORD } from "./support/http";
 
 let session: Awaited<ReturnType<typeof launch>>;
@@ -16,10 +16,7 @@ beforeAll(async () => {
 });
 afterAll(() => session.close());
 
-async function axeClean(name: string) {
-  await shot(page, name);
-  expect(await seriousViolations(page), `axe on ${page.url()}`).toEqual([]);
-}
+const axeClean = (name: string) => expectAxeClean(page, name);
 
 /** A noisy PNG (random pixels do not compress, so the upload takes a moment when throttled). */
 async function noisyPng(w: number, h: number): Promise<Buffer> {
@@ -276,9 +273,7 @@ describe("the garage in Chromium", () => {
   });
 
   it("fits a 375 px phone screen: the vehicle page with a plan, and the finder, scroll only vertically", async () => {
-    const phone = await launch({ width: 375, height: 800 });
-    try {
-      const p = await phone.context.newPage();
+    await withBrowserPage({ width: 375, height: 800 }, async (p) => {
       await signInAs(p, DEMO.member, DEMO_PASSWORD);
       await p.goto("/garage/d4000000-0000-4000-8000-000000000002?pt=33x12.50R15LT&pd=15&pw=8&pb=3.75&pr=flange");
       await expect.poll(() => p.getByTestId("predictions").isVisible(), { timeout: 15000 }).toBe(true);
@@ -288,9 +283,7 @@ describe("the garage in Chromium", () => {
       await p.goto("/garage/d4000000-0000-4000-8000-000000000002/finder");
       await expect.poll(() => p.getByTestId("finder-summary").isVisible(), { timeout: 20000 }).toBe(true);
       expect(await p.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(375);
-    } finally {
-      await phone.close();
-    }
+    });
   });
 
   it("keeps another member's vehicle out of reach (404 for the admin)", async () => {

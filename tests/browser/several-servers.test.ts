@@ -1,23 +1,15 @@
 import { type ChildProcess, spawn } from "node:child_process";
 import { once } from "node:events";
-import { createServer } from "node:net";
 import { join } from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { DEFAULT_INPUT } from "@/lib/comparisons/schema";
 import { BASE } from "./support/browser";
 import { call, cookieFor } from "./support/http";
+import { freePort } from "../integration/support/ports";
 
 // Two app servers on one PostgreSQL, as behind a load balancer: the first is the one
 // scripts/test.sh started (BASE); this file starts a second from the same build with the same
 // environment (DATABASE_URL, NEXTAUTH_SECRET, … are exported in that shell and inherited here).
-
-async function freePort(): Promise<number> {
-  const s = createServer();
-  await new Promise<void>((r) => s.listen(0, "127.0.0.1", r));
-  const port = (s.address() as { port: number }).port;
-  await new Promise((r) => s.close(r));
-  return port;
-}
 
 let second: ChildProcess | null = null;
 let B = "";

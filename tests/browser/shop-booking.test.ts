@@ -1,9 +1,10 @@
 import ical from "node-ical";
 import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launch, seriousViolations, shot, signInAs } from "./support/browser";
+import { launch, payWithTestCard, seriousViolations, shot, signInAs } from "./support/browser";
 import { DEMO, DEMO_PASSWORD, call } from "./support/http";
 import { attachment, waitForMail } from "./support/outbox";
+import { VEHICLE } from "../integration/support/shopFixture";
 
 /*
  * The install booking, end to end against the seeded demo shop (db/seeds/06_demo_bookings.ts:
@@ -46,15 +47,8 @@ describe("install booking", () => {
       (
         (await (await call("shop_staff", "GET", `/api/shop/catalog?q=${sku}`)).json()) as { items: { id: string; sku: string }[] }
       ).items.find((i) => i.sku === sku)!.id;
-    const vehicle = {
-      description: "Half-ton pickup",
-      boltPattern: "6x5.5",
-      tireSize: "265/70R17",
-      wheelDiameterIn: 17,
-      wheelWidthIn: 8,
-      offsetMode: "offset",
-      offsetMm: 25,
-    };
+    // The integration tests' counter vehicle (6x5.5, 265/70R17 on 17x8 +25), under its own name.
+    const vehicle = { ...VEHICLE, description: "Half-ton pickup" };
     const q = await call("shop_staff", "POST", "/api/shop/quotes", {
       customerId,
       vehicle,
@@ -73,12 +67,7 @@ describe("install booking", () => {
     await page.getByRole("button", { name: "Accept the quote" }).click();
     await page.getByRole("button", { name: /Pay the .* deposit/ }).click();
     await page.waitForURL(/\/pay\/cs_test_/);
-    await page.getByLabel("Card number").fill("4242 4242 4242 4242");
-    await page.getByLabel("Expiry (MM/YY)").fill("12/30");
-    await page.getByLabel("CVC").fill("123");
-    await page.getByLabel("Name on card").fill("Wren Booker");
-    await page.getByRole("button", { name: /^Pay / }).click();
-    await page.waitForURL(/\/q\/[A-Za-z0-9_-]{43}\?paid=1/);
+    await payWithTestCard(page, "Wren Booker");
     expect(await page.getByTestId("public-status").textContent()).toBe("Deposit paid");
 
     // The free starts of the week, on the shop's clock; pick the first and book it.

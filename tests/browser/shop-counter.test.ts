@@ -3,7 +3,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launch, seriousViolations, shot, signInAs } from "./support/browser";
+import { launch, payWithTestCard, seriousViolations, shot, signInAs, withBrowserPage } from "./support/browser";
 import { DEMO, DEMO_PASSWORD } from "./support/http";
 
 const OUTBOX = process.env.OUTBOX_URL ?? "http://127.0.0.1:2526";
@@ -117,12 +117,7 @@ describe("the shop counter, end to end", () => {
     expect(await c.getByTestId("pay-amount").textContent()).toBe(deposit);
     await checkA11y(c, "fake pay page");
     await shot(c, "shop-counter-pay-page");
-    await c.getByLabel("Card number").fill("4242 4242 4242 4242");
-    await c.getByLabel("Expiry (MM/YY)").fill("12/30");
-    await c.getByLabel("CVC").fill("123");
-    await c.getByLabel("Name on card").fill("Ilse Varga-Pond");
-    await c.getByRole("button", { name: /^Pay / }).click();
-    await c.waitForURL(/\/q\/[A-Za-z0-9_-]{43}\?paid=1/);
+    await payWithTestCard(c, "Ilse Varga-Pond");
     expect(await c.getByTestId("public-status").textContent()).toBe("Deposit paid");
     await checkA11y(c, "public quote page, paid");
     await shot(c, "shop-counter-public-paid");
@@ -183,9 +178,7 @@ describe("the shop counter, end to end", () => {
   });
 
   it("the staff quote page fits a 390 px phone: the lines scroll inside their own focusable region", async () => {
-    const phone = await launch({ width: 390, height: 844 });
-    try {
-      const page = await phone.context.newPage();
+    await withBrowserPage({ width: 390, height: 844 }, async (page) => {
       await signInAs(page, DEMO.shop_staff, DEMO_PASSWORD);
       // The demo draft quote (db/seeds/05_demo_shop.ts, DEMO_QUOTES.draft).
       await page.goto("/shop/quotes/d0000000-0000-4000-8000-000000000001");
@@ -199,8 +192,6 @@ describe("the shop counter, end to end", () => {
       await page.getByLabel("Notes for the customer").fill("Phone check");
       await page.getByTestId("unsaved").waitFor();
       expect(await page.getByTestId("hub-checks").textContent()).toMatch(/hub-centric rings/);
-    } finally {
-      await phone.close();
-    }
+    });
   });
 });

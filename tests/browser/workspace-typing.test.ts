@@ -33,6 +33,12 @@ const figureSub = (page: Page, id: string) => page.getByTestId(id).locator("dd")
 const vehicleSummary = (page: Page) => page.locator("summary", { hasText: /^Vehicle details/ });
 const vehiclePanel = (page: Page) => page.locator("details", { has: vehicleSummary(page) });
 
+/** The planned side shows the offset `offset` once and the track change figure reads `track`. */
+async function expectOffsetAndTrack(page: Page, offset: RegExp, track: string): Promise<void> {
+  await expect.poll(() => planned(page).getByText(offset).count()).toBe(1);
+  await expect.poll(() => figure(page, "change-track").textContent()).toBe(track);
+}
+
 /** Click, select all, delete, then type one key at a time; the text must stay as typed and keep the focus. */
 async function retype(page: Page, field: Locator, text: string): Promise<void> {
   await field.click();
@@ -122,36 +128,15 @@ describe.each(VIEWPORTS)("typing into every workspace field at $name px (Chromiu
         .locator("label", { hasText: /^Backspacing$/ })
         .click();
       await retype(page, planned(page).getByLabel("Backspacing (in)", { exact: true }), "4⅝");
-      await expect
-        .poll(() =>
-          planned(page)
-            .getByText(/Offset −9\.5 mm/)
-            .count(),
-        )
-        .toBe(1);
-      await expect.poll(() => figure(page, "change-track").textContent()).toBe("+5.72 in");
+      await expectOffsetAndTrack(page, /Offset −9\.5 mm/, "+5.72 in");
 
       // Flange allowance 5/8: (4.625 − 0.625 − 4.5) × 25.4 = −12.7 mm; track +2 × 75.8 = 151.6 mm = +5.97 in.
       await retype(page, planned(page).getByLabel("Flange allowance (in)", { exact: true }), "5/8");
-      await expect
-        .poll(() =>
-          planned(page)
-            .getByText(/Offset −12\.7 mm/)
-            .count(),
-        )
-        .toBe(1);
-      await expect.poll(() => figure(page, "change-track").textContent()).toBe("+5.97 in");
+      await expectOffsetAndTrack(page, /Offset −12\.7 mm/, "+5.97 in");
 
       // Wheel width 10 in: (4.625 − 0.625 − 5) × 25.4 = −25.4 mm; track +2 × 88.5 = 177 mm = +6.97 in.
       await retype(page, planned(page).getByLabel("Wheel width (in)", { exact: true }), "10");
-      await expect
-        .poll(() =>
-          planned(page)
-            .getByText(/Offset −25\.4 mm/)
-            .count(),
-        )
-        .toBe(1);
-      await expect.poll(() => figure(page, "change-track").textContent()).toBe("+6.97 in");
+      await expectOffsetAndTrack(page, /Offset −25\.4 mm/, "+6.97 in");
 
       // Planned tire 35x12.50R17LT: 889 − 802.8 = 86.2 mm = +3.39 in.
       await retype(page, planned(page).getByLabel("Tire size", { exact: true }), "35x12.50R17LT");

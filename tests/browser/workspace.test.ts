@@ -1,6 +1,6 @@
 import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { chartsShown, launch, seriousViolations, shot } from "./support/browser";
+import { chartsShown, launch, seriousViolations, shot, withBrowserPage } from "./support/browser";
 
 let browser: Awaited<ReturnType<typeof launch>>;
 beforeAll(async () => {
@@ -93,18 +93,14 @@ describe("comparison workspace in Chromium", () => {
   });
 
   it("works at 375 px", async () => {
-    const phone = await launch({ width: 375, height: 812 });
-    try {
-      const page = await phone.context.newPage();
+    await withBrowserPage({ width: 375, height: 812 }, async (page) => {
       await page.goto(`${link}&kpi=8&fender=150`, { waitUntil: "networkidle" });
       await chartsShown(page);
       const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
       expect(overflow).toBeLessThanOrEqual(0);
       await shot(page, "workspace-375");
       expect(await seriousViolations(page)).toEqual([]);
-    } finally {
-      await phone.close();
-    }
+    });
   });
 });
 

@@ -2,7 +2,7 @@ import { NextRequest } from "next/server";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { settleAfterResponse } from "@/lib/platform/http/afterResponse";
 import { internalKeys } from "./support/apiKeys";
-import { rebuild, testDb } from "./support/db";
+import { closeDatabases, rebuild, testDb } from "./support/db";
 
 // Mail goes nowhere here; the browser tests cover the real SMTP path.
 const sent = vi.hoisted(() => [] as { to: string; text: string }[]);
@@ -21,9 +21,7 @@ const db = testDb();
 beforeAll(() => rebuild(db));
 afterAll(async () => {
   await settleAfterResponse();
-  await db.destroy();
-  const { db: appDb } = await import("@/lib/platform/db");
-  await appDb.destroy();
+  await closeDatabases(db);
 });
 
 const signup = (await import("@/app/api/account/signup/route")).POST;

@@ -1,7 +1,8 @@
 import { NextRequest } from "next/server";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { MAX_PHOTO_BYTES } from "@/lib/garage/photos/image";
-import { rebuild, testDb } from "./support/db";
+import { closeDatabases, rebuild, testDb } from "./support/db";
+import { ctx } from "./support/requests";
 
 /**
  * Security review: a body sent without Content-Length (chunked) was read whole before the size
@@ -18,16 +19,11 @@ beforeAll(async () => {
   await db("users").insert({ ...USER, password_hash: "x" });
   session.current = { user: { id: USER.id, role: "member", shopId: null, name: USER.name, email: USER.email } };
 });
-afterAll(async () => {
-  await db.destroy();
-  const { db: appDb } = await import("@/lib/platform/db");
-  await appDb.destroy();
-});
+afterAll(() => closeDatabases(db));
 
 const vehicles = await import("@/app/api/vehicles/route");
 const uploads = await import("@/app/api/vehicles/[id]/photos/route");
 const signup = await import("@/app/api/account/signup/route");
-const ctx = (params: Record<string, string> = {}) => ({ params: Promise.resolve(params) });
 
 const CHUNK = 64 * 1024;
 /** A chunked body of `total` bytes (no Content-Length), counting the bytes the reader pulled. */

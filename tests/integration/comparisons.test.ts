@@ -1,8 +1,9 @@
-import { NextRequest } from "next/server";
 import { afterAll, beforeAll, beforeEach, describe, expect, it, vi } from "vitest";
 import { DEFAULT_INPUT, type ComparisonInput } from "@/lib/comparisons/schema";
 import { internalKeys } from "./support/apiKeys";
-import { rebuild, testDb } from "./support/db";
+import { closeDatabases, rebuild, testDb } from "./support/db";
+import { insertVehicleRow } from "./support/garageFixture";
+import { req } from "./support/requests";
 
 // The session is whoever the test says; revalidatePath is recorded (no Next server here).
 const session = vi.hoisted(() => ({ current: null as unknown }));
@@ -24,11 +25,7 @@ beforeAll(async () => {
     { id: OTHER, email: "other@example.test", name: "Piet Lorne", password_hash: "x", role: "member" },
   ]);
 });
-afterAll(async () => {
-  await db.destroy();
-  const { db: appDb } = await import("@/lib/platform/db");
-  await appDb.destroy();
-});
+afterAll(() => closeDatabases(db));
 beforeEach(() => {
   as(OWNER);
   revalidated.length = 0;
@@ -44,13 +41,6 @@ const { computeComparison } = await import("@/lib/comparisons/compute");
 
 const noParams = { params: Promise.resolve({}) };
 const idParams = (id: string) => ({ params: Promise.resolve({ id }) });
-function req(method: string, path: string, body?: unknown) {
-  return new NextRequest(`http://127.0.0.1:3000${path}`, {
-    method,
-    body: body === undefined ? undefined : typeof body === "string" ? body : JSON.stringify(body),
-    headers: body === undefined ? {} : { "content-type": "application/json" },
-  });
-}
 async function create(name: string, input: ComparisonInput = DEFAULT_INPUT, extra: object = {}) {
   const res = await list.POST(req("POST", "/api/comparisons", { name, input, ...extra }), noParams);
   expect(res.status).toBe(201);
@@ -187,15 +177,7 @@ describe("saved comparisons API", () => {
 
   it("tie only to one of the owner's own garage vehicles", async () => {
     const vehicleId = "c3000000-0000-4000-8000-00000000000a";
-    const base = {
-      bolt_pattern: "5x114.3",
-      bolt_pcd_mm: 114.3,
-      bolt_count: 5,
-      front_suspension: "independent",
-      stock_setup: "{}",
-      current_setup: "{}",
-    };
-    await db("vehicles").insert({ ...base, id: vehicleId, user_id: OWNER, name: "Wagon" });
+    await insertVehicleRow(db, { id: vehicleId, user_id: OWNER, name: "Wagon" });
     const c = await create("For the wagon", DEFAULT_INPUT, { vehicleId });
     expect((await db("comparisons").where({ id: c.id }).first()).vehicle_id).toBe(vehicleId);
     const res = await list.POST(

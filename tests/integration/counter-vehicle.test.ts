@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import { rebuild, testDb } from "./support/db";
+import { closeDatabases, rebuild, testDb } from "./support/db";
 import { ctx, req, sessionOf } from "./support/requests";
-import { SHOP_A, U, VEHICLE, item, seedShops } from "./support/shopFixture";
+import { SHOP_A, U, VEHICLE, quoteRequest, seedShops } from "./support/shopFixture";
 import { internalKeys } from "./support/apiKeys";
 import { CSV_TEMPLATE, parseCatalogCsv } from "@/lib/shop/catalog/csv";
 
@@ -16,11 +16,7 @@ vi.mock("@/lib/platform/mail", () => ({ queueMail: async () => {}, appOrigin: ()
 
 const db = testDb();
 const MIGRATION = "20261205120000_one_setup_shape.ts";
-afterAll(async () => {
-  await db.destroy();
-  const { db: appDb } = await import("@/lib/platform/db");
-  await appDb.destroy();
-});
+afterAll(() => closeDatabases(db));
 
 const candidates = (await import("@/app/api/shop/fitment/candidates/route")).POST;
 const quotes = await import("@/app/api/shop/quotes/route");
@@ -152,16 +148,8 @@ describe("the migration to one setup shape", () => {
       }),
     ]);
     expect(internalKeys(res)).toEqual([]);
-    const tire = await item(db, SHOP_A, "TR-EXAMPLE-35");
-    const wheel = await item(db, SHOP_A, "WH-EXAMPLE-17");
     const made = await quotes.POST(
-      req("POST", "/api/shop/quotes", {
-        customerId: CUSTOMER,
-        vehicleId: VEHICLE_ID,
-        tireItemId: tire.id,
-        wheelItemId: wheel.id,
-        quantity: 4,
-      }),
+      req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId: CUSTOMER, vehicleId: VEHICLE_ID }, "WH-EXAMPLE-17")),
       ctx(),
     );
     expect(made.status).toBe(201);
@@ -226,17 +214,8 @@ describe("a vehicle entered at the counter", () => {
   });
 
   it("is saved as entered: the backspacing, what it was measured to and the flange allowance", async () => {
-    const tire = await item(db, SHOP_A, "TR-EXAMPLE-35");
-    const wheel = await item(db, SHOP_A, "WH-EXAMPLE-17");
     const res = await quotes.POST(
-      req("POST", "/api/shop/quotes", {
-        customerId,
-        vehicle: BACKSPACING,
-        saveVehicle: true,
-        tireItemId: tire.id,
-        wheelItemId: wheel.id,
-        quantity: 4,
-      }),
+      req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId, vehicle: BACKSPACING, saveVehicle: true }, "WH-EXAMPLE-17")),
       ctx(),
     );
     expect(res.status).toBe(201);

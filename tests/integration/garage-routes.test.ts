@@ -1,22 +1,16 @@
-import { mkdtempSync, rmSync } from "node:fs";
-import { tmpdir } from "node:os";
-import { join } from "node:path";
-import { ListObjectsV2Command } from "@aws-sdk/client-s3";
-import { NextRequest } from "next/server";
 import sharp from "sharp";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import { startFakeS3 } from "@/scripts/services/fake-s3";
-import { makeS3Client, s3PhotoStore, setPhotoStore, type PhotoStore, type S3Settings } from "@/lib/garage/photos/s3";
-import { rebuild, testDb } from "./support/db";
+import { setPhotoStore } from "@/lib/garage/photos/s3";
+import { closeDatabases, rebuild, testDb } from "./support/db";
+import { SETUP, VEHICLE as STOCK_VEHICLE } from "./support/garageFixture";
+import { startTestPhotoStore, type TestPhotoStore } from "./support/photoStore";
+import { ctx, req } from "./support/requests";
 
 const session = vi.hoisted(() => ({ current: null as unknown }));
 vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
 
 const db = testDb();
-const dir = mkdtempSync(join(tmpdir(), "hubface-s3-"));
-let s3: Awaited<ReturnType<typeof startFakeS3>>;
-let settings: S3Settings;
-let store: PhotoStore;
+let photos: TestPhotoStore;
 
 const USERS = {
   ada: { id: "b2000000-0000-4000-8000-000000000001", email: "ada@example.test", name: "Ada Quillfeather", role: "member" },
@@ -39,18 +33,11 @@ beforeAll(async () => {
   await db("shops").insert({ id: SHOP, name: "Test Shop" });
   for (const u of Object.values(USERS))
     await db("users").insert({ ...u, password_hash: "x", shop_id: u.role === "shop_staff" ? SHOP : null });
-  s3 = await startFakeS3({ port: 0, bucket: "test-photos", directory: dir, reset: true });
-  settings = { endpoint: s3.endpoint, bucket: "test-photos", accessKeyId: "S3RVER", secretAccessKey: "S3RVER", region: "us-east-1" };
-  store = s3PhotoStore(settings);
-  setPhotoStore(store);
+  photos = await startTestPhotoStore("test-photos");
 });
 afterAll(async () => {
-  setPhotoStore(undefined);
-  await s3.close();
-  rmSync(dir, { recursive: true, force: true });
-  await db.destroy();
-  const { db: appDb } = await import("@/lib/platform/db");
-  await appDb.destroy();
+  await photos.close();
+  await closeDatabases(db);
 });
 
 const vehicles = await import("@/app/api/vehicles/route");
@@ -60,41 +47,13 @@ const clearance = await import("@/app/api/vehicles/[id]/clearances/[clearanceId]
 const uploads = await import("@/app/api/vehicles/[id]/photos/route");
 const photo = await import("@/app/api/photos/[id]/route");
 
-const ctx = (params: Record<string, string> = {}) => ({ params: Promise.resolve(params) });
-const URL0 = "http://127.0.0.1:3000";
-function req(method: string, path: string, body?: unknown, headers: Record<string, string> = {}) {
-  return new NextRequest(`${URL0}${path}`, {
-    method,
-    body: body === undefined ? undefined : body instanceof FormData ? body : JSON.stringify(body),
-    headers: body === undefined || body instanceof FormData ? headers : { "content-type": "application/json", ...headers },
-  });
-}
-
-async function objectKeys(): Promise<string[]> {
-  const r = await makeS3Client(settings).send(new ListObjectsV2Command({ Bucket: "test-photos" }));
-  return (r.Contents ?? []).map((o) => o.Key!).sort();
-}
-
-const SETUP = { tire: "265/70R17", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 }, spacerMm: 0 };
+// Moved off stock: 5-3/4 in backspacing to the bead seat, 1/2 in flange.
 const VEHICLE = {
-  name: "Gravel hauler",
-  year: 2009,
-  make: "Generic",
-  model: "Full-size pickup",
-  trim: null,
-  frontSuspension: "independent",
-  boltPattern: "6 on 5.5",
-  hubBoreMm: "106.1",
-  stockSetup: SETUP,
+  ...STOCK_VEHICLE,
   currentSetup: { ...SETUP, position: { mode: "backspacing", backspacingIn: "5-3/4", reference: "bead-seat", flangeIn: "1/2" } },
-  liftHeightMm: "2-1/2",
-  kingpinInclinationDeg: 8,
-  axleRatio: 3.73,
-  transmissionRatio: "0.69",
-  notes: "",
 };
 
-async function createAs(who: Who, body: unknown = VEHICLE) {
+async function createAs(who: Who, body: object = VEHICLE) {
   as(who);
   const res = await vehicles.POST(req("POST", "/api/vehicles", body), ctx());
   return { res, body: await res.json() };
@@ -198,7 +157,7 @@ describe("vehicles", () => {
 });
 
 describe("measured clearances", () => {
-  const post = (body: unknown) => clearances.POST(req("POST", `/api/vehicles/${adaVehicle}/clearances`, body), ctx({ id: adaVehicle }));
+  const post = (body: object) => clearances.POST(req("POST", `/api/vehicles/${adaVehicle}/clearances`, body), ctx({ id: adaVehicle }));
 
   it("refuses a distance with no unit, with a message, and stores nothing", async () => {
     as("ada");
@@ -256,7 +215,7 @@ describe("photo uploads", () => {
     const thumb = await photo.GET(req("GET", `${p.url}?variant=thumb`), ctx({ id: p.id }));
     expect(thumb.headers.get("content-type")).toBe("image/webp");
     expect((await sharp(Buffer.from(await thumb.arrayBuffer())).metadata()).width).toBe(360);
-    expect(await objectKeys()).toHaveLength(2);
+    expect(await photos.objectKeys()).toHaveLength(2);
 
     as("bo");
     expect((await photo.GET(req("GET", p.url), ctx({ id: p.id }))).status).toBe(404);
@@ -266,14 +225,14 @@ describe("photo uploads", () => {
     expect((await photo.DELETE(req("DELETE", p.url), ctx({ id: p.id }))).status).toBe(404);
     as(null);
     expect((await photo.GET(req("GET", p.url), ctx({ id: p.id }))).status).toBe(401);
-    expect(await objectKeys()).toHaveLength(2);
+    expect(await photos.objectKeys()).toHaveLength(2);
   });
 
   async function rejected(res: Response, status: number, message: RegExp) {
     expect(res.status).toBe(status);
     expect((await res.json()).error).toMatch(message);
     expect(await db("vehicle_photos").count()).toEqual([{ count: "1" }]);
-    expect(await objectKeys()).toHaveLength(2);
+    expect(await photos.objectKeys()).toHaveLength(2);
   }
 
   it("refuses a file whose bytes are not an image, whatever its name says", async () => {
@@ -326,10 +285,10 @@ describe("photo uploads", () => {
   it("leaves nothing behind when the store fails halfway", async () => {
     let puts = 0;
     setPhotoStore({
-      ...store,
+      ...photos.store,
       async put(key, body, type) {
         if (++puts === 2) throw new Error("store went away");
-        return store.put(key, body, type);
+        return photos.store.put(key, body, type);
       },
     });
     try {
@@ -338,9 +297,9 @@ describe("photo uploads", () => {
       expect(res.status).toBe(503);
       expect((await res.json()).error).toMatch(/nothing was saved/);
       expect(await db("vehicle_photos").count()).toEqual([{ count: "1" }]);
-      expect(await objectKeys()).toHaveLength(2);
+      expect(await photos.objectKeys()).toHaveLength(2);
     } finally {
-      setPhotoStore(store);
+      setPhotoStore(photos.store);
     }
   });
 
@@ -348,17 +307,17 @@ describe("photo uploads", () => {
     as("ada");
     const second = await upload(adaVehicle, await pngWithGps(), "whole truck.png");
     expect(second.status).toBe(201);
-    expect(await objectKeys()).toHaveLength(4);
+    expect(await photos.objectKeys()).toHaveLength(4);
     const del = await clearance.DELETE(
       req("DELETE", `/api/vehicles/${adaVehicle}/clearances/${adaClearance}`),
       ctx({ id: adaVehicle, clearanceId: adaClearance }),
     );
     expect(del.status).toBe(200);
     expect(await db("vehicle_photos").where({ id: adaPhoto }).first()).toBeUndefined();
-    expect(await objectKeys()).toHaveLength(2);
+    expect(await photos.objectKeys()).toHaveLength(2);
     const res = await vehicle.DELETE(req("DELETE", `/api/vehicles/${adaVehicle}`), ctx({ id: adaVehicle }));
     expect(res.status).toBe(200);
-    expect(await objectKeys()).toEqual([]);
+    expect(await photos.objectKeys()).toEqual([]);
     expect(await db("vehicle_photos").count()).toEqual([{ count: "0" }]);
     expect(await db("vehicle_clearances").where({ vehicle_id: adaVehicle }).count()).toEqual([{ count: "0" }]);
   });
@@ -368,6 +327,15 @@ describe("install checklists", () => {
   const checklist = () => import("@/app/api/vehicles/[id]/checklist/route");
   const PLANNED = { tire: "35x12.50R17LT", wheelDiameterIn: 17, wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 }, spacerMm: 0 };
   const Q = "pt=35x12.50R17LT&pd=17&pw=9&po=-12";
+
+  /** A vehicle of Ada's (signed in as her after) with one clearance point measured on it. */
+  async function vehicleWithPoint(name: string, point: object) {
+    const { body } = await createAs("ada", { ...VEHICLE, name });
+    const id = body.vehicle.id as string;
+    as("ada");
+    const res = await clearances.POST(req("POST", `/api/vehicles/${id}/clearances`, point), ctx({ id }));
+    return { id, pointId: (await res.json()).clearance.id as string };
+  }
 
   it("saves ticks per vehicle + planned setup, refuses unknown items, and is owner-scoped", async () => {
     const { GET, PUT } = await checklist();
@@ -459,19 +427,12 @@ describe("install checklists", () => {
 
   it("predicts a full-lock point by the tread corner's sweep about the vehicle's steering axis", async () => {
     const { GET } = await checklist();
-    const { body } = await createAs("ada", { ...VEHICLE, name: "Lock hauler" });
-    const id = body.vehicle.id as string;
-    as("ada");
-    const point = await clearances.POST(
-      req("POST", `/api/vehicles/${id}/clearances`, {
-        label: "Frame rail",
-        direction: "inboard",
-        distance: "1-1/2 in",
-        suspensionState: "full-lock",
-      }),
-      ctx({ id }),
-    );
-    const pointId = (await point.json()).clearance.id as string;
+    const { id, pointId } = await vehicleWithPoint("Lock hauler", {
+      label: "Frame rail",
+      direction: "inboard",
+      distance: "1-1/2 in",
+      suspensionState: "full-lock",
+    });
     const r = await (await GET(req("GET", `/api/vehicles/${id}/checklist?${Q}`), ctx({ id }))).json();
     const trim = (r.items as { id: string; title: string; detail: string }[]).find((i) => i.id === `trim:${pointId}`);
     // Current 265/70R17 on 17x8, 5-3/4 in backspacing to the bead seat: offset 5.75 − 4 = 1.75 in = 44.45 mm;
@@ -486,19 +447,12 @@ describe("install checklists", () => {
 
   it("classes the points against the vehicle's margin, or the one tried with m", async () => {
     const { GET } = await checklist();
-    const { body } = await createAs("ada", { ...VEHICLE, name: "Margin hauler" });
-    const id = body.vehicle.id as string;
-    as("ada");
-    const point = await clearances.POST(
-      req("POST", `/api/vehicles/${id}/clearances`, {
-        label: "fender lip, full stuff",
-        direction: "upward",
-        distance: "3 in",
-        suspensionState: "full-stuff",
-      }),
-      ctx({ id }),
-    );
-    const pointId = (await point.json()).clearance.id as string;
+    const { id, pointId } = await vehicleWithPoint("Margin hauler", {
+      label: "fender lip, full stuff",
+      direction: "upward",
+      distance: "3 in",
+      suspensionState: "full-stuff",
+    });
     const trims = async (query: string) => {
       const r = await (await GET(req("GET", `/api/vehicles/${id}/checklist?${query}`), ctx({ id }))).json();
       return { margin: r.marginMm as number, trims: (r.items as { id: string; title: string }[]).filter((i) => i.id.startsWith("trim:")) };

@@ -1,8 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { DEFAULT_INPUT } from "@/lib/comparisons/schema";
-import { rebuild, testDb } from "./support/db";
+import { closeDatabases, rebuild, testDb } from "./support/db";
 import { ctx, req, sessionOf } from "./support/requests";
-import { U, seedShops } from "./support/shopFixture";
+import { U, VEHICLE, seedShops } from "./support/shopFixture";
 
 /**
  * Wrong-typed values sent straight to the API (a stale form, a script, a hand-edited request):
@@ -33,11 +33,7 @@ beforeAll(async () => {
   await seedShops(db);
   await db("users").insert({ ...MEMBER, password_hash: "x" });
 });
-afterAll(async () => {
-  await db.destroy();
-  const { db: appDb } = await import("@/lib/platform/db");
-  await appDb.destroy();
-});
+afterAll(() => closeDatabases(db));
 
 const signup = (await import("@/app/api/account/signup/route")).POST;
 const forgot = (await import("@/app/api/account/password/forgot/route")).POST;
@@ -133,15 +129,7 @@ describe("messages from the API are for people", () => {
     const created = await quotes.POST(
       req("POST", "/api/shop/quotes", {
         customerId: customer.customer.id,
-        vehicle: {
-          description: "Test pickup",
-          boltPattern: "6x5.5",
-          tireSize: "265/70R17",
-          wheelDiameterIn: 17,
-          wheelWidthIn: 8,
-          offsetMode: "offset",
-          offsetMm: 25,
-        },
+        vehicle: VEHICLE,
         tireItemId: (await db("catalog_items").where({ shop_id: U.staffA.shop_id, kind: "tire" }).first()).id,
         wheelItemId: (await db("catalog_items").where({ shop_id: U.staffA.shop_id, kind: "wheel" }).first()).id,
         quantity: 4,

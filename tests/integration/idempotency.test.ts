@@ -1,25 +1,19 @@
 import { createHash } from "node:crypto";
-import { mkdtempSync, readdirSync, rmSync, utimesSync } from "node:fs";
-import { tmpdir } from "node:os";
+import { readdirSync, utimesSync } from "node:fs";
 import { join } from "node:path";
-import { ListObjectsV2Command } from "@aws-sdk/client-s3";
 import sharp from "sharp";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import { startFakeS3 } from "@/scripts/services/fake-s3";
-import { makeS3Client, s3PhotoStore, setPhotoStore, type PhotoStore, type S3Settings } from "@/lib/garage/photos/s3";
-import { rebuild, testDb } from "./support/db";
+import { closeDatabases, rebuild, testDb } from "./support/db";
+import { VEHICLE } from "./support/garageFixture";
 import { drainQueue, startTestBoss, stopBoss } from "./support/jobs";
+import { startTestPhotoStore, type TestPhotoStore } from "./support/photoStore";
 import { ctx, req } from "./support/requests";
 
 const session = vi.hoisted(() => ({ current: null as unknown }));
 vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
 
 const db = testDb();
-const dir = mkdtempSync(join(tmpdir(), "hubface-idem-s3-"));
-const BUCKET = "idem-photos";
-let s3: Awaited<ReturnType<typeof startFakeS3>>;
-let settings: S3Settings;
-let store: PhotoStore;
+let photos: TestPhotoStore;
 
 const ADA = { id: "e1000000-0000-4000-8000-000000000001", email: "ada@example.test", name: "Ada Quillfeather", role: "member" };
 const BO = { id: "e1000000-0000-4000-8000-000000000002", email: "bo@example.test", name: "Bo Tarrant", role: "member" };
@@ -28,45 +22,19 @@ const as = (u: typeof ADA) => (session.current = { user: { id: u.id, role: u.rol
 beforeAll(async () => {
   await rebuild(db);
   await db("users").insert([ADA, BO].map((u) => ({ ...u, password_hash: "x" })));
-  s3 = await startFakeS3({ port: 0, bucket: BUCKET, directory: dir, reset: true });
-  settings = { endpoint: s3.endpoint, bucket: BUCKET, accessKeyId: "S3RVER", secretAccessKey: "S3RVER", region: "us-east-1" };
-  store = s3PhotoStore(settings);
-  setPhotoStore(store);
+  photos = await startTestPhotoStore("idem-photos");
   await startTestBoss();
 });
 afterAll(async () => {
   await stopBoss();
-  setPhotoStore(undefined);
-  await s3.close();
-  rmSync(dir, { recursive: true, force: true });
-  await db.destroy();
-  const { db: appDb } = await import("@/lib/platform/db");
-  await appDb.destroy();
+  await photos.close();
+  await closeDatabases(db);
 });
 
 const vehicles = await import("@/app/api/vehicles/route");
 const uploads = await import("@/app/api/vehicles/[id]/photos/route");
 const photo = await import("@/app/api/photos/[id]/route");
 const { QUEUES, getBoss } = await import("@/lib/platform/jobs/boss");
-
-const SETUP = { tire: "265/70R17", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 }, spacerMm: 0 };
-const VEHICLE = {
-  name: "Gravel hauler",
-  year: 2009,
-  make: "Generic",
-  model: "Full-size pickup",
-  trim: null,
-  frontSuspension: "independent",
-  boltPattern: "6 on 5.5",
-  hubBoreMm: "106.1",
-  stockSetup: SETUP,
-  currentSetup: SETUP,
-  liftHeightMm: "2-1/2",
-  kingpinInclinationDeg: 8,
-  axleRatio: 3.73,
-  transmissionRatio: "0.69",
-  notes: "",
-};
 
 const createVehicle = (body: unknown, key?: string) =>
   vehicles.POST(req("POST", "/api/vehicles", body as object, key === undefined ? {} : { "idempotency-key": key }), ctx());
@@ -178,15 +146,10 @@ async function multipart(bytes: Buffer, name: string): Promise<{ body: Buffer; t
   return { body: Buffer.from(await r.arrayBuffer()), type: r.headers.get("content-type")! };
 }
 
-async function objectKeys(): Promise<string[]> {
-  const r = await makeS3Client(settings).send(new ListObjectsV2Command({ Bucket: BUCKET }));
-  return (r.Contents ?? []).map((o) => o.Key!).sort();
-}
-
 /** Backdates an object in the fake store (its LastModified is the file's mtime). */
 function age(key: string, minutes: number) {
   const parts = key.split("/");
-  const folder = join(dir, BUCKET, ...parts.slice(0, -1));
+  const folder = join(photos.dir, photos.bucket, ...parts.slice(0, -1));
   const file = readdirSync(folder).find((f) => f === `${parts.at(-1)}._S3rver_object`);
   if (!file) throw new Error(`no stored object for ${key}`);
   const t = new Date(Date.now() - minutes * 60_000);
@@ -213,7 +176,7 @@ describe("photo uploads", () => {
     expect(second.headers.get("idempotent-replayed")).toBe("true");
     expect((await second.json()).photo.id).toBe((await first.json()).photo.id);
     expect(await db("vehicle_photos").where({ vehicle_id: vehicleId }).count()).toEqual([{ count: "1" }]);
-    keptKeys = await objectKeys();
+    keptKeys = await photos.objectKeys();
     expect(keptKeys).toHaveLength(2);
   });
 
@@ -221,15 +184,15 @@ describe("photo uploads", () => {
     const image = await jpeg();
     const oldOrphan = `vehicles/${vehicleId}/e1000000-0000-4000-8000-0000000000b1.jpg`;
     const freshOrphan = `vehicles/${vehicleId}/e1000000-0000-4000-8000-0000000000b2.jpg`;
-    await store.put(oldOrphan, image, "image/jpeg");
-    await store.put(freshOrphan, image, "image/jpeg");
+    await photos.store.put(oldOrphan, image, "image/jpeg");
+    await photos.store.put(freshOrphan, image, "image/jpeg");
     age(oldOrphan, 120);
     for (const k of keptKeys) age(k, 120); // old, but the photo's row points to them
     await (await getBoss()).send(QUEUES.photoSweep.name, {});
     const run = await drainQueue(QUEUES.photoSweep.name);
     expect(run.failed).toEqual([]);
     expect(run.completed).toHaveLength(1);
-    expect(await objectKeys()).toEqual([...keptKeys, freshOrphan].sort());
+    expect(await photos.objectKeys()).toEqual([...keptKeys, freshOrphan].sort());
   });
 
   it("deleting the photo still deletes its objects", async () => {
@@ -237,6 +200,6 @@ describe("photo uploads", () => {
     const id = (await db("vehicle_photos").where({ vehicle_id: vehicleId }).first("id")).id as string;
     const res = await photo.DELETE(req("DELETE", `/api/photos/${id}`), ctx({ id }));
     expect(res.status).toBeLessThan(300);
-    expect((await objectKeys()).filter((k) => keptKeys.includes(k))).toEqual([]);
+    expect((await photos.objectKeys()).filter((k) => keptKeys.includes(k))).toEqual([]);
   });
 });

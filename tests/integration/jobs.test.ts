@@ -1,10 +1,10 @@
 import { createHash } from "node:crypto";
-import { createServer as netServer } from "node:net";
 import { SMTPServer } from "smtp-server";
 import { simpleParser, type ParsedMail } from "mailparser";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import { rebuild, testDb } from "./support/db";
+import { closeDatabases, rebuild, testDb } from "./support/db";
 import { drainQueue, startTestBoss, stopBoss } from "./support/jobs";
+import { freePort } from "./support/ports";
 import { ctx, req, sessionOf } from "./support/requests";
 import { SHOP_A, U, seedShops } from "./support/shopFixture";
 
@@ -20,15 +20,6 @@ const MEMBER = {
   email: "member@example.test",
   name: "Mo Member",
 };
-
-/** A port nothing listens on yet: the mail server is "down" until a test starts one there. */
-async function freePort(): Promise<number> {
-  const s = netServer();
-  await new Promise<void>((r) => s.listen(0, "127.0.0.1", r));
-  const port = (s.address() as { port: number }).port;
-  await new Promise((r) => s.close(r));
-  return port;
-}
 
 const received: ParsedMail[] = [];
 let smtp: SMTPServer | null = null;
@@ -59,6 +50,7 @@ const retryRoute = (await import("@/app/api/admin/jobs/[id]/retry/route")).POST;
 
 beforeAll(async () => {
   await rebuild(db);
+  // Nothing listens there yet: the mail server is "down" until a test starts one on this port.
   smtpPort = await freePort();
   process.env.SMTP_URL = `smtp://127.0.0.1:${smtpPort}`;
   await db("users").insert([ADMIN, MEMBER].map((u) => ({ ...u, password_hash: "x" })));
@@ -67,9 +59,7 @@ beforeAll(async () => {
 afterAll(async () => {
   await mailServerDown();
   await stopBoss();
-  await db.destroy();
-  const { db: appDb } = await import("@/lib/platform/db");
-  await appDb.destroy();
+  await closeDatabases(db);
 });
 
 const jobRow = (id: string) => db.withSchema("pgboss").from("job").where({ id }).first();

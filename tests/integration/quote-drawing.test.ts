@@ -1,9 +1,9 @@
 import { mkdirSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import { rebuild, testDb } from "./support/db";
+import { closeDatabases, rebuild, testDb } from "./support/db";
 import { ctx, req, sessionOf } from "./support/requests";
-import { SHOP_A, U, VEHICLE, item, seedShops } from "./support/shopFixture";
+import { U, VEHICLE, quoteRequest, seedShops } from "./support/shopFixture";
 
 const session = vi.hoisted(() => ({ current: null as unknown }));
 vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
@@ -15,11 +15,7 @@ beforeAll(async () => {
   await seedShops(db);
   session.current = sessionOf(U.staffA);
 });
-afterAll(async () => {
-  await db.destroy();
-  const { db: appDb } = await import("@/lib/platform/db");
-  await appDb.destroy();
-});
+afterAll(() => closeDatabases(db));
 
 const customers = await import("@/app/api/shop/customers/route");
 const quotes = await import("@/app/api/shop/quotes/route");
@@ -50,16 +46,8 @@ describe("the quote PDF draws the current and the quoted setup at the hub", () =
     );
     const c = await cres.json();
     expect(cres.status, JSON.stringify(c)).toBe(201);
-    const tire = await item(db, SHOP_A, "TR-EXAMPLE-35");
-    const wheel = await item(db, SHOP_A, "WH-EXAMPLE-BL");
     const made = await quotes.POST(
-      req("POST", "/api/shop/quotes", {
-        customerId: c.customer.id,
-        vehicle: VEHICLE,
-        tireItemId: tire.id,
-        wheelItemId: wheel.id,
-        quantity: 4,
-      }),
+      req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId: c.customer.id, vehicle: VEHICLE })),
       ctx(),
     );
     expect(made.status).toBe(201);

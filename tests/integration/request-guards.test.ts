@@ -1,6 +1,6 @@
 import { NextRequest } from "next/server";
 import { afterAll, afterEach, beforeAll, describe, expect, it, vi } from "vitest";
-import { rebuild, testDb } from "./support/db";
+import { closeDatabases, rebuild, testDb } from "./support/db";
 import { ctx, sessionOf } from "./support/requests";
 import { U, seedShops } from "./support/shopFixture";
 
@@ -22,9 +22,7 @@ beforeAll(async () => {
 afterEach(() => void (session.current = null));
 afterAll(async () => {
   delete process.env.APP_ORIGIN;
-  await db.destroy();
-  const { db: appDb } = await import("@/lib/platform/db");
-  await appDb.destroy();
+  await closeDatabases(db);
 });
 
 const signup = (await import("@/app/api/account/signup/route")).POST;

@@ -1,10 +1,10 @@
 import { createHash, randomBytes } from "node:crypto";
 import ical from "node-ical";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import { rebuild, testDb } from "./support/db";
+import { closeDatabases, rebuild, testDb } from "./support/db";
 import { drainQueue, startTestBoss, stopBoss } from "./support/jobs";
 import { ctx, req, sessionOf } from "./support/requests";
-import { SHOP_A, SHOP_B, U, VEHICLE, item, seedShops } from "./support/shopFixture";
+import { SHOP_A, SHOP_B, U, VEHICLE, item, quoteRequest, seedShops } from "./support/shopFixture";
 
 const session = vi.hoisted(() => ({ current: null as unknown }));
 vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
@@ -51,12 +51,7 @@ async function paidQuote(status: "deposit_paid" | "accepted" = "deposit_paid", e
     ctx(),
   );
   const customerId = (await c.json()).customer.id;
-  const tire = await item(db, SHOP_A, "TR-EXAMPLE-35");
-  const wheel = await item(db, SHOP_A, "WH-EXAMPLE-BL");
-  const r = await quotes.POST(
-    req("POST", "/api/shop/quotes", { customerId, vehicle: VEHICLE, tireItemId: tire.id, wheelItemId: wheel.id, quantity: 4 }),
-    ctx(),
-  );
+  const r = await quotes.POST(req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId, vehicle: VEHICLE })), ctx());
   const id = (await r.json()).id as string;
   const token = randomBytes(32).toString("base64url");
   await db("quotes")
@@ -112,8 +107,7 @@ beforeAll(async () => {
 });
 afterAll(async () => {
   await stopBoss();
-  await db.destroy();
-  await appDb.destroy();
+  await closeDatabases(db);
 });
 
 describe("bays and hours (owner)", () => {

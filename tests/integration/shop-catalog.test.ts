@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { CSV_COLUMNS, CSV_TEMPLATE, parseCatalogCsv } from "@/lib/shop/catalog/csv";
 import { internalKeys } from "./support/apiKeys";
-import { rebuild, testDb } from "./support/db";
+import { closeDatabases, rebuild, testDb } from "./support/db";
 import { ctx, req, sessionOf } from "./support/requests";
 
 const session = vi.hoisted(() => ({ current: null as unknown }));
@@ -25,11 +25,7 @@ beforeAll(async () => {
     [ownerA, staffA, ownerB].map((u, i) => ({ ...u, email: `u${i}@example.test`, name: `U${i}`, password_hash: "x" })),
   );
 });
-afterAll(async () => {
-  await db.destroy();
-  const { db: appDb } = await import("@/lib/platform/db");
-  await appDb.destroy();
-});
+afterAll(() => closeDatabases(db));
 
 const preview = (await import("@/app/api/shop/catalog/import/route")).POST;
 const commit = (await import("@/app/api/shop/catalog/import/[id]/route")).POST;

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { internalKeys } from "./support/apiKeys";
-import { rebuild, testDb } from "./support/db";
+import { closeDatabases, rebuild, testDb } from "./support/db";
 import { ctx, req, sessionOf } from "./support/requests";
 import { SHOP_B, U, seedShops } from "./support/shopFixture";
 
@@ -34,11 +34,7 @@ beforeAll(async () => {
     email: "lukasz.o@example.test",
   });
 });
-afterAll(async () => {
-  await db.destroy();
-  const { db: appDb } = await import("@/lib/platform/db");
-  await appDb.destroy();
-});
+afterAll(() => closeDatabases(db));
 
 async function names(q: string): Promise<string[]> {
   session.current = sessionOf(U.staffA);

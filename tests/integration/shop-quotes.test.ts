@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import { rebuild, testDb } from "./support/db";
+import { closeDatabases, rebuild, testDb } from "./support/db";
 import { ctx, req, sessionOf } from "./support/requests";
-import { SHOP_A, U, VEHICLE, item, seedShops } from "./support/shopFixture";
+import { SHOP_A, U, VEHICLE, item, quoteRequest, seedShops } from "./support/shopFixture";
 import { internalKeys } from "./support/apiKeys";
 
 const session = vi.hoisted(() => ({ current: null as unknown }));
@@ -19,11 +19,7 @@ beforeAll(async () => {
   await rebuild(db);
   await seedShops(db);
 });
-afterAll(async () => {
-  await db.destroy();
-  const { db: appDb } = await import("@/lib/platform/db");
-  await appDb.destroy();
-});
+afterAll(() => closeDatabases(db));
 
 const customers = await import("@/app/api/shop/customers/route");
 const customerById = (await import("@/app/api/shop/customers/[id]/route")).GET;
@@ -111,17 +107,8 @@ describe("fitment candidates", () => {
 describe("quotes", () => {
   it("a draft gets tire, wheel and the suggested services, totals computed on the server", async () => {
     as(U.staffA);
-    const tire = await item(db, SHOP_A, "TR-EXAMPLE-35");
-    const wheel = await item(db, SHOP_A, "WH-EXAMPLE-BL");
     const res = await quotes.POST(
-      req("POST", "/api/shop/quotes", {
-        customerId,
-        vehicle: VEHICLE,
-        saveVehicle: true,
-        tireItemId: tire.id,
-        wheelItemId: wheel.id,
-        quantity: 4,
-      }),
+      req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId, vehicle: VEHICLE, saveVehicle: true })),
       ctx(),
     );
     expect(res.status).toBe(201);
@@ -214,19 +201,12 @@ describe("quotes", () => {
 
   it("cannot use another shop's catalog items", async () => {
     as(U.staffB);
-    const mine = await item(db, SHOP_A, "TR-EXAMPLE-35");
-    const wheel = await item(db, SHOP_A, "WH-EXAMPLE-17");
     const other = await db("customers")
       .insert({ shop_id: "0b000000-0000-4000-8000-00000000000b", name: "B customer", phone: "5550000000", phone_digits: "5550000000" })
       .returning("id");
+    // Shop A's tire and wheel, asked for by shop B's staff.
     const res = await quotes.POST(
-      req("POST", "/api/shop/quotes", {
-        customerId: other[0].id,
-        vehicle: VEHICLE,
-        tireItemId: mine.id,
-        wheelItemId: wheel.id,
-        quantity: 4,
-      }),
+      req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId: other[0].id, vehicle: VEHICLE }, "WH-EXAMPLE-17")),
       ctx(),
     );
     expect(res.status).toBe(422);
@@ -244,14 +224,9 @@ describe("sending", () => {
   let sentId = "";
   it("mails the customer a PDF with the quote's numbers and an unguessable link; the quote becomes sent", async () => {
     as(U.staffA);
-    const tire = await item(db, SHOP_A, "TR-EXAMPLE-35");
-    const wheel = await item(db, SHOP_A, "WH-EXAMPLE-BL");
     sentId = (
       await (
-        await quotes.POST(
-          req("POST", "/api/shop/quotes", { customerId, vehicle: VEHICLE, tireItemId: tire.id, wheelItemId: wheel.id, quantity: 5 }),
-          ctx(),
-        )
+        await quotes.POST(req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId, vehicle: VEHICLE, quantity: 5 })), ctx())
       ).json()
     ).id;
     sent.length = 0;
@@ -327,12 +302,10 @@ describe("sending", () => {
     const c = (
       await (await customers.POST(req("POST", "/api/shop/customers", { name: "No Mail", phone: "555 777 1212", email: "" }), ctx())).json()
     ).customer;
-    const tire = await item(db, SHOP_A, "TR-EXAMPLE-35");
-    const wheel = await item(db, SHOP_A, "WH-EXAMPLE-17");
     const id = (
       await (
         await quotes.POST(
-          req("POST", "/api/shop/quotes", { customerId: c.id, vehicle: VEHICLE, tireItemId: tire.id, wheelItemId: wheel.id, quantity: 4 }),
+          req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId: c.id, vehicle: VEHICLE }, "WH-EXAMPLE-17")),
           ctx(),
         )
       ).json()
@@ -352,13 +325,15 @@ const RAW = /Invalid input|expected \w+, received|Too (big|small)|Invalid (UUID|
 
 async function draftFor(vehicle: object = VEHICLE, wheelSku = "WH-EXAMPLE-17") {
   as(U.staffA);
-  const tire = await item(db, SHOP_A, "TR-EXAMPLE-35");
-  const wheel = await item(db, SHOP_A, wheelSku);
-  const res = await quotes.POST(
-    req("POST", "/api/shop/quotes", { customerId, vehicle, tireItemId: tire.id, wheelItemId: wheel.id, quantity: 4 }),
-    ctx(),
-  );
+  const res = await quotes.POST(req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId, vehicle }, wheelSku)), ctx());
   return { res, id: res.status === 201 ? ((await res.json()).id as string) : "" };
+}
+/** A 17x9 wheel at 0 mm offset added to shop A's catalog; the row as stored. */
+async function addWheel(w: { sku: string; description: string; price_cents: number; bolt_pattern: string; center_bore_mm: number }) {
+  const [row] = await db("catalog_items")
+    .insert({ shop_id: SHOP_A, kind: "wheel", wheel_diameter_in: 17, wheel_width_in: 9, wheel_offset_mm: 0, ...w })
+    .returning("*");
+  return row;
 }
 const put = (id: string, lines: object[], discountCents = 0, extra: object = {}) =>
   quoteById.PUT(req("PUT", `/api/shop/quotes/${id}`, { lines, discountCents, notes: "", ...extra }), ctx({ id }));
@@ -497,15 +472,10 @@ describe("any catalog item on a quote", () => {
 
 describe("the wheel on the vehicle's hub", () => {
   it("refuses a wheel whose centre bore is smaller than the hub (106.1 mm bore on a 108 mm hub)", async () => {
-    await db("catalog_items").insert({
-      shop_id: SHOP_A,
-      kind: "wheel",
+    await addWheel({
       sku: "WH-T-1061",
       description: "Test 17x9 106.1 mm bore",
       price_cents: 28900,
-      wheel_diameter_in: 17,
-      wheel_width_in: 9,
-      wheel_offset_mm: 0,
       bolt_pattern: "6x139.7",
       center_bore_mm: 106.1,
     });
@@ -517,15 +487,10 @@ describe("the wheel on the vehicle's hub", () => {
   });
 
   it("takes a larger bore but says hub-centric rings are needed, with their sizes", async () => {
-    await db("catalog_items").insert({
-      shop_id: SHOP_A,
-      kind: "wheel",
+    await addWheel({
       sku: "WH-T-110",
       description: "Test 17x9 110 mm bore",
       price_cents: 25900,
-      wheel_diameter_in: 17,
-      wheel_width_in: 9,
-      wheel_offset_mm: 0,
       bolt_pattern: "6x5.5",
       center_bore_mm: 110.1,
     });
@@ -543,20 +508,13 @@ describe("the wheel on the vehicle's hub", () => {
   });
 
   it("refuses a wheel line of another bolt pattern, and takes 6x139.7 on a 6x5.5 vehicle (6 × 5.5 in × 25.4 = 139.7 mm, NIST SP 811)", async () => {
-    const [eight] = await db("catalog_items")
-      .insert({
-        shop_id: SHOP_A,
-        kind: "wheel",
-        sku: "WH-T-8L",
-        description: "Test 8-lug",
-        price_cents: 30000,
-        wheel_diameter_in: 17,
-        wheel_width_in: 9,
-        wheel_offset_mm: 0,
-        bolt_pattern: "8x6.5",
-        center_bore_mm: 125,
-      })
-      .returning("*");
+    const eight = await addWheel({
+      sku: "WH-T-8L",
+      description: "Test 8-lug",
+      price_cents: 30000,
+      bolt_pattern: "8x6.5",
+      center_bore_mm: 125,
+    });
     const metric = await item(db, SHOP_A, "WH-EXAMPLE-BL"); // 6x139.7, 108 mm
     const { id } = await draftFor({ ...VEHICLE, hubBoreMm: 108 });
     const wheelLine = (w: { id: string; sku: string; description: string; price_cents: number }) => ({
@@ -697,21 +655,13 @@ describe("messages a person reads", () => {
 describe("the quote PDF prints every name", () => {
   it("prints Latin Extended letters (Łódź, Żółć) from an embedded font instead of question marks", async () => {
     as(U.staffA);
-    const tire = await item(db, SHOP_A, "TR-EXAMPLE-35");
-    const wheel = await item(db, SHOP_A, "WH-EXAMPLE-BL");
     const cust = await (
       await customers.POST(req("POST", "/api/shop/customers", { name: "Łukasz Żółć", phone: "555 010 7788", email: "" }), ctx())
     ).json();
     const id = (
       await (
         await quotes.POST(
-          req("POST", "/api/shop/quotes", {
-            customerId: cust.customer.id,
-            vehicle: VEHICLE,
-            tireItemId: tire.id,
-            wheelItemId: wheel.id,
-            quantity: 4,
-          }),
+          req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId: cust.customer.id, vehicle: VEHICLE })),
           ctx(),
         )
       ).json()

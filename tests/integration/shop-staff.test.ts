@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { internalKeys } from "./support/apiKeys";
-import { rebuild, testDb } from "./support/db";
+import { closeDatabases, rebuild, testDb } from "./support/db";
 import { ctx, req, sessionOf } from "./support/requests";
 
 const session = vi.hoisted(() => ({ current: null as unknown }));
@@ -34,11 +34,7 @@ beforeAll(async () => {
   const hash = await hashPassword("member password 1");
   await db("users").insert(Object.values(U).map((u) => ({ ...u, name: u.email.split("@")[0], password_hash: hash })));
 });
-afterAll(async () => {
-  await db.destroy();
-  const { db: appDb } = await import("@/lib/platform/db");
-  await appDb.destroy();
-});
+afterAll(() => closeDatabases(db));
 
 const settings = await import("@/app/api/shop/settings/route");
 const staff = await import("@/app/api/shop/staff/route");

@@ -1,9 +1,9 @@
 import { createHash, randomBytes } from "node:crypto";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import { rebuild, testDb } from "./support/db";
+import { closeDatabases, rebuild, testDb } from "./support/db";
 import { drainQueue, startTestBoss, stopBoss } from "./support/jobs";
 import { ctx, req, sessionOf } from "./support/requests";
-import { SHOP_A, U, VEHICLE, item, seedShops } from "./support/shopFixture";
+import { SHOP_A, U, VEHICLE, quoteRequest, seedShops } from "./support/shopFixture";
 
 const session = vi.hoisted(() => ({ current: null as unknown }));
 vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
@@ -40,12 +40,7 @@ async function bookedQuote(book = true) {
     ctx(),
   );
   const customerId = (await c.json()).customer.id;
-  const tire = await item(db, SHOP_A, "TR-EXAMPLE-35");
-  const wheel = await item(db, SHOP_A, "WH-EXAMPLE-BL");
-  const r = await quotes.POST(
-    req("POST", "/api/shop/quotes", { customerId, vehicle: VEHICLE, tireItemId: tire.id, wheelItemId: wheel.id, quantity: 4 }),
-    ctx(),
-  );
+  const r = await quotes.POST(req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId, vehicle: VEHICLE })), ctx());
   const id = (await r.json()).id as string;
   await db("quotes")
     .where({ id })
@@ -120,8 +115,7 @@ beforeAll(async () => {
 });
 afterAll(async () => {
   await stopBoss();
-  await db.destroy();
-  await appDb.destroy();
+  await closeDatabases(db);
 });
 
 describe("opening the work order", () => {

@@ -1,7 +1,8 @@
 import { existsSync, readFileSync } from "node:fs";
 import { join } from "node:path";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import { rebuild, testDb } from "./support/db";
+import { closeDatabases, rebuild, testDb } from "./support/db";
+import { insertVehicleRow } from "./support/garageFixture";
 import { sessionOf } from "./support/requests";
 
 // A vehicle page for a vehicle that is missing or someone else's must answer HTTP 404. Next
@@ -24,21 +25,9 @@ beforeAll(async () => {
     { id: OWNER.id, email: "owner-e1@example.test", name: "Olga Veer", password_hash: "x", role: "member" },
     { id: OTHER.id, email: "other-e2@example.test", name: "Per Strand", password_hash: "x", role: "member" },
   ]);
-  const base = {
-    bolt_pattern: "5x114.3",
-    bolt_pcd_mm: 114.3,
-    bolt_count: 5,
-    front_suspension: "independent",
-    stock_setup: "{}",
-    current_setup: "{}",
-  };
-  await db("vehicles").insert({ ...base, id: VEHICLE, user_id: OWNER.id, name: "Wagon" });
+  await insertVehicleRow(db, { id: VEHICLE, user_id: OWNER.id, name: "Wagon" });
 });
-afterAll(async () => {
-  await db.destroy();
-  const { db: appDb } = await import("@/lib/platform/db");
-  await appDb.destroy();
-});
+afterAll(() => closeDatabases(db));
 
 const SEGMENT = join(process.cwd(), "app/(garage)/garage/[id]");
 const VehicleLayout = (await import("@/app/(garage)/garage/[id]/layout")).default;

@@ -3,6 +3,8 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import AxeBuilder from "@axe-core/playwright";
 import { type BrowserContext, type Page, chromium } from "playwright-core";
+import { expect } from "vitest";
+import { CHROMIUM_FLAGS } from "@/scripts/chromium";
 
 export const BASE = process.env.E2E_BASE_URL ?? "http://127.0.0.1:3000";
 export const SHOTS = join(process.cwd(), "tests/browser/screenshots");
@@ -15,15 +17,7 @@ export async function launch(viewport = { width: 1280, height: 900 }): Promise<{
     headless: true,
     viewport,
     baseURL: BASE,
-    args: [
-      "--no-sandbox",
-      "--disable-gpu",
-      "--disable-quic",
-      "--no-first-run",
-      "--disable-background-networking",
-      "--disable-component-update",
-      "--disable-sync",
-    ],
+    args: CHROMIUM_FLAGS,
   });
   return {
     context,
@@ -32,6 +26,16 @@ export async function launch(viewport = { width: 1280, height: 900 }): Promise<{
       rmSync(dir, { recursive: true, force: true });
     },
   };
+}
+
+/** Runs `run` on a page of a Chromium of its own at `viewport` (a phone, say), closed whatever happens. */
+export async function withBrowserPage(viewport: { width: number; height: number }, run: (page: Page) => Promise<void>): Promise<void> {
+  const browser = await launch(viewport);
+  try {
+    await run(await browser.context.newPage());
+  } finally {
+    await browser.close();
+  }
 }
 
 export async function shot(page: Page, name: string): Promise<string> {
@@ -53,6 +57,35 @@ export async function seriousViolations(page: Page): Promise<string[]> {
           .map((n) => n.target.join(" "))
           .join(", ")}`,
     );
+}
+
+/** A screenshot of the page under `name`, then no serious or critical axe violation on it. */
+export async function expectAxeClean(page: Page, name: string): Promise<void> {
+  await shot(page, name);
+  expect(await seriousViolations(page), `axe on ${page.url()}`).toEqual([]);
+}
+
+/** Creates a member account through the sign-up form and waits for their account page. */
+export async function signUpAs(page: Page, name: string, email: string, password: string): Promise<void> {
+  await page.goto("/sign-up");
+  await page.getByLabel("Name").fill(name);
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Password").fill(password);
+  await page.getByRole("button", { name: "Create account" }).click();
+  await page.waitForURL(/\/account/);
+}
+
+/**
+ * Pays on the fake payment provider's page with the card it takes (scripts/services/fake-pay.ts) and waits for the
+ * public quote page it returns to.
+ */
+export async function payWithTestCard(page: Page, nameOnCard: string): Promise<void> {
+  await page.getByLabel("Card number").fill("4242 4242 4242 4242");
+  await page.getByLabel("Expiry (MM/YY)").fill("12/30");
+  await page.getByLabel("CVC").fill("123");
+  await page.getByLabel("Name on card").fill(nameOnCard);
+  await page.getByRole("button", { name: /^Pay / }).click();
+  await page.waitForURL(/\/q\/[A-Za-z0-9_-]{43}\?paid=1/);
 }
 
 export async function signInAs(page: Page, email: string, password: string): Promise<void> {

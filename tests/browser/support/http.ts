@@ -1,3 +1,4 @@
+import { signInOverHttp } from "@/scripts/http-session";
 import { BASE } from "./browser";
 
 export const DEMO_PASSWORD = "hubface-demo-1";
@@ -11,37 +12,9 @@ export type DemoRole = keyof typeof DEMO;
 export type Who = "anonymous" | DemoRole;
 export const EVERYONE: Who[] = ["anonymous", "member", "shop_staff", "shop_owner", "admin"];
 
-/** Cookies as a browser would keep them, enough for next-auth's credential flow. */
-class Jar {
-  private cookies = new Map<string, string>();
-  take(res: Response) {
-    for (const c of res.headers.getSetCookie()) {
-      const [pair] = c.split(";");
-      const i = pair!.indexOf("=");
-      this.cookies.set(pair!.slice(0, i), pair!.slice(i + 1));
-    }
-  }
-  header() {
-    return [...this.cookies].map(([k, v]) => `${k}=${v}`).join("; ");
-  }
-}
-
 /** Signs in over HTTP exactly as the sign-in form does and returns the Cookie header. */
-export async function sessionCookie(email: string, password = DEMO_PASSWORD): Promise<string> {
-  const jar = new Jar();
-  const csrfRes = await fetch(`${BASE}/api/auth/csrf`);
-  jar.take(csrfRes);
-  const { csrfToken } = (await csrfRes.json()) as { csrfToken: string };
-  const res = await fetch(`${BASE}/api/auth/callback/credentials`, {
-    method: "POST",
-    redirect: "manual",
-    headers: { "Content-Type": "application/x-www-form-urlencoded", Cookie: jar.header() },
-    body: new URLSearchParams({ csrfToken, email, password, json: "true" }),
-  });
-  jar.take(res);
-  const cookie = jar.header();
-  if (!/session-token=/.test(cookie)) throw new Error(`sign-in as ${email} failed (${res.status} ${res.headers.get("location")})`);
-  return cookie;
+export function sessionCookie(email: string, password = DEMO_PASSWORD): Promise<string> {
+  return signInOverHttp(BASE, email, password);
 }
 
 const cache = new Map<Who, Promise<string>>();

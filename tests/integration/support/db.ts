@@ -11,3 +11,13 @@ export async function rebuild(db: Knex): Promise<void> {
   await db.migrate.rollback(undefined, true);
   await db.migrate.latest();
 }
+
+/**
+ * Closes the test's Knex and the app's own pool (lib/platform/db, opened by the routes a test
+ * calls), so the test file can end. Call last in afterAll.
+ */
+export async function closeDatabases(db: Knex): Promise<void> {
+  await db.destroy();
+  const { db: appDb } = await import("@/lib/platform/db");
+  await appDb.destroy();
+}

@@ -1,8 +1,11 @@
 import { NextRequest } from "next/server";
 
-/** Route handler inputs as Next builds them. */
+/**
+ * Route handler inputs as Next builds them. An object goes as JSON; a string or Buffer as it is;
+ * FormData as multipart (its boundary header set by the request itself).
+ */
 export function req(method: string, path: string, body?: string | object | Buffer, headers: Record<string, string> = {}): NextRequest {
-  const isRaw = typeof body === "string" || Buffer.isBuffer(body);
+  const isRaw = typeof body === "string" || Buffer.isBuffer(body) || body instanceof FormData;
   return new NextRequest(`http://127.0.0.1:3000${path}`, {
     method,
     body: body === undefined ? undefined : isRaw ? (body as BodyInit) : JSON.stringify(body),

@@ -67,6 +67,17 @@ export async function seedShops(db: Knex) {
 
 export const item = (db: Knex, shop: string, sku: string) => db("catalog_items").where({ shop_id: shop, sku }).first();
 
+/**
+ * The body of a POST /api/shop/quotes for a set of four from shop A's catalog: the tire and wheel
+ * looked up by SKU (the 35-inch template tire on the beadlock template wheel unless told), then
+ * `fields` (customerId and the vehicle at least; a field there wins, e.g. `quantity: 5`).
+ */
+export async function quoteRequest(db: Knex, fields: { customerId: string } & Record<string, unknown>, wheelSku = "WH-EXAMPLE-BL") {
+  const tire = await item(db, SHOP_A, "TR-EXAMPLE-35");
+  const wheel = await item(db, SHOP_A, wheelSku);
+  return { tireItemId: tire.id as string, wheelItemId: wheel.id as string, quantity: 4, ...fields };
+}
+
 export const VEHICLE = {
   description: "Test pickup",
   boltPattern: "6x5.5",
