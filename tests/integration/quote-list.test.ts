@@ -1,6 +1,6 @@
 import Papa from "papaparse";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import { rebuild, testDb } from "./support/db";
+import { closeDatabases, rebuild, testDb } from "./support/db";
 import { ctx, req, sessionOf } from "./support/requests";
 import { SHOP_A, U, VEHICLE, item, seedShops } from "./support/shopFixture";
 
@@ -62,11 +62,7 @@ beforeAll(async () => {
     .where({ number: numbers["Ines Ferreira"] })
     .update({ status: "sent", valid_until: db.raw("now() + interval '7 days'") });
 });
-afterAll(async () => {
-  await db.destroy();
-  const { db: appDb } = await import("@/lib/platform/db");
-  await appDb.destroy();
-});
+afterAll(() => closeDatabases(db));
 
 /** The list as the owner (every quote of the shop) or the staff member (their own) reads it. */
 async function list(search: string, who: typeof U.ownerA | typeof U.staffA = U.ownerA) {

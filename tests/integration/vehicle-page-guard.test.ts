@@ -1,5 +1,3 @@
-import { existsSync, readFileSync } from "node:fs";
-import { join } from "node:path";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { closeDatabases, rebuild, testDb } from "./support/db";
 import { insertVehicleRow } from "./support/garageFixture";
@@ -9,7 +7,7 @@ import { sessionOf } from "./support/requests";
 // sends the status with the page shell: a notFound() raised below a loading.tsx (a Suspense
 // boundary) comes after the shell went out with 200. So the check sits in the vehicle's layout,
 // with no loading boundary above it. The browser suite fetches the pages over HTTP
-// (tests/browser/page-status.test.ts); here the layout runs on its own and the tree is checked.
+// (tests/browser/page-status.test.ts); here the layout runs on its own (the tree: page-guard-tree.test.ts).
 const session = vi.hoisted(() => ({ current: null as unknown }));
 vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
 
@@ -29,7 +27,6 @@ beforeAll(async () => {
 });
 afterAll(() => closeDatabases(db));
 
-const SEGMENT = join(process.cwd(), "app/(garage)/garage/[id]");
 const VehicleLayout = (await import("@/app/(garage)/garage/[id]/layout")).default;
 const render = (id: string) => VehicleLayout({ children: "the page", params: Promise.resolve({ id }) });
 /** "404" when Next's notFound() was raised, "rendered" when the children come back. */
@@ -59,20 +56,5 @@ describe("the vehicle pages' guard", () => {
   it("leaves an anonymous visitor to the page, which sends them to sign-in and back", async () => {
     session.current = null;
     expect(await outcome(VEHICLE)).toBe("rendered");
-  });
-
-  it("runs before anything streams: no loading boundary between the root and the vehicle's layout", () => {
-    // Next wraps a segment's children in <Suspense fallback={loading}> from the folder of each loading.tsx down.
-    const above = ["app", "app/(garage)", "app/(garage)/garage"];
-    for (const dir of above) {
-      expect(existsSync(join(process.cwd(), dir, "loading.tsx")), `${dir}/loading.tsx`).toBe(false);
-      for (const file of ["layout.tsx", "template.tsx"]) {
-        const path = join(process.cwd(), dir, file);
-        if (existsSync(path)) expect(readFileSync(path, "utf8"), `${dir}/${file}`).not.toMatch(/<Suspense\b/);
-      }
-    }
-    expect(existsSync(join(SEGMENT, "layout.tsx"))).toBe(true);
-    // The pages below still show their loading state, after the guard.
-    expect(existsSync(join(SEGMENT, "loading.tsx"))).toBe(true);
   });
 });
