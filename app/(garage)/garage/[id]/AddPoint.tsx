@@ -3,8 +3,8 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useQueryClient } from "@tanstack/react-query";
 import { type ChangeEvent, useState } from "react";
 import { useForm } from "react-hook-form";
-import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
+import { FailureRegion } from "@/components/ui/FailureRegion";
 import { TextField } from "@/components/ui/TextField";
 import { fieldBinder } from "@/components/ui/fieldProps";
 import { api, applyFieldErrors } from "@/lib/platform/client/api";
@@ -77,13 +77,7 @@ export function AddPoint({ vehicleId }: { vehicleId: string }) {
   return (
     <form onSubmit={onSubmit} noValidate className="no-print mt-5 border-t border-basalt-100 pt-4">
       <h3 className="font-semibold">Add a measured point</h3>
-      <div aria-live="assertive">
-        {failure && (
-          <Alert tone="error" className="mt-2">
-            {failure}
-          </Alert>
-        )}
-      </div>
+      <FailureRegion message={failure} alertClassName="mt-2" />
       <div className="mt-2 grid grid-cols-[minmax(0,1fr)] gap-3 sm:grid-cols-2 lg:grid-cols-3">
         <TextField id="f-point-label" label="Point" hint='e.g. "frame rail, full left lock"' {...field("label")} />
         {select("direction", "Direction", CLEARANCE_DIRECTION_LABEL)}

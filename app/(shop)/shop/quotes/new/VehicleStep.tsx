@@ -4,8 +4,8 @@ import { useQuery } from "@tanstack/react-query";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { SetupFields } from "@/components/setup/SetupFields";
-import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
+import { FailureRegion } from "@/components/ui/FailureRegion";
 import { Card } from "@/components/ui/Card";
 import { TextField } from "@/components/ui/TextField";
 import { fieldBinder } from "@/components/ui/fieldProps";
@@ -77,9 +77,7 @@ export function VehicleStep(props: {
         </div>
       )}
       <form onSubmit={onFind} onChange={edited} noValidate className="mt-3 grid gap-3 sm:grid-cols-3">
-        <div aria-live="assertive" className="sm:col-span-3">
-          {failure && <Alert tone="error">{failure}</Alert>}
-        </div>
+        <FailureRegion message={failure} className="sm:col-span-3" />
         <TextField label="Vehicle" hint="e.g. 2016 half-ton pickup" {...field("description")} />
         <TextField label="Bolt pattern" hint="e.g. 6x5.5 or 6x139.7" {...field("boltPattern")} />
         <TextField
