@@ -1,9 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { tighteningSequence } from "@/lib/fitment";
-import type { Setup } from "@/lib/setup/model";
 import { buildChecklist } from "./checklist";
-import { PLAN, VEHICLE, point } from "./testUtil";
-import type { Vehicle } from "./types";
+import { CUR, PLAN, VEHICLE, point, vehicleWith } from "./testUtil";
 
 describe("install checklist", () => {
   const list = buildChecklist({
@@ -41,28 +39,7 @@ describe("install checklist", () => {
   });
 });
 
-const CUR: Setup = { tire: "265/70R17", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 }, spacerMm: 0 };
-const RIG: Vehicle = {
-  id: "v1",
-  name: "Rig",
-  year: null,
-  make: null,
-  model: null,
-  trim: null,
-  frontSuspension: "independent",
-  boltPattern: "6x5.5",
-  hubBoreMm: null,
-  stockSetup: CUR,
-  currentSetup: CUR,
-  liftHeightMm: null,
-  kingpinInclinationDeg: null,
-  axleRatio: 3.73,
-  transmissionRatio: 1,
-  clearanceMarginMm: 12.7,
-  notes: "",
-  createdAt: "",
-  updatedAt: "",
-};
+const RIG = vehicleWith({ name: "Rig", frontSuspension: "independent" });
 const regearItem = (tire: string) =>
   buildChecklist({ vehicle: RIG, clearances: [], planned: { ...CUR, tire }, marginMm: 12.7 }).items.find((i) => i.id === "regear")!;
 

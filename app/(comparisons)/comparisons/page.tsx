@@ -1,6 +1,5 @@
 import type { Metadata } from "next";
-import Link from "next/link";
-import { buttonClass } from "@/components/ui/Button";
+import { LinkButton } from "@/components/ui/LinkButton";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { requirePageCaller } from "@/lib/platform/auth/session";
 import { comparisonQueries } from "@/lib/comparisons/queries";
@@ -16,11 +15,7 @@ export default async function ComparisonsPage() {
       <PageHeader
         title="My comparisons"
         lead="The comparisons you saved from the workspace. Open one to keep working on it, or share a read-only link for a forum thread."
-        actions={
-          <Link href="/workspace" className={buttonClass("primary")}>
-            New comparison
-          </Link>
-        }
+        actions={<LinkButton href="/workspace">New comparison</LinkButton>}
       />
       <ComparisonList initial={initial} />
     </>

@@ -1,8 +1,8 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { Badge } from "@/components/ui/Badge";
-import { buttonClass } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
+import { LinkButton } from "@/components/ui/LinkButton";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { requirePageCaller } from "@/lib/platform/auth/session";
 import { setupGeometry } from "@/lib/fitment";
@@ -23,11 +23,7 @@ export default async function GaragePage() {
       <PageHeader
         title="Your garage"
         lead="Your vehicles with the clearances you measured: plan a setup and see what it will touch before you buy."
-        actions={
-          <Link href="/garage/new" className={buttonClass("primary")}>
-            Add a vehicle
-          </Link>
-        }
+        actions={<LinkButton href="/garage/new">Add a vehicle</LinkButton>}
       />
       {vehicles.length === 0 ? (
         <Card className="text-center">

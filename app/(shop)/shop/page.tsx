@@ -1,8 +1,8 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { Badge } from "@/components/ui/Badge";
-import { buttonClass } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
+import { LinkButton } from "@/components/ui/LinkButton";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { requirePageCaller } from "@/lib/platform/auth/session";
 import { shopIdOf, shopQueries } from "@/lib/shop/queries";
@@ -19,11 +19,7 @@ export default async function ShopPage() {
       <PageHeader
         title={shop?.name ?? "Your shop"}
         lead="Quote a fitment for the customer at the counter, send it, and take the deposit."
-        actions={
-          <Link href="/shop/quotes/new" className={buttonClass("primary")}>
-            New quote
-          </Link>
-        }
+        actions={<LinkButton href="/shop/quotes/new">New quote</LinkButton>}
       />
       <div className="grid gap-5 md:grid-cols-2">
         <Card>

@@ -1,38 +1,28 @@
 // @vitest-environment jsdom
 import { cleanup, render, screen, within } from "@testing-library/react";
-import type { ReactNode } from "react";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { PlannedPanel } from "@/app/(garage)/garage/[id]/PlannedPanel";
 import { type DisplayPrefs, formatLen } from "@/lib/comparisons/format";
 import { DEFAULT_INPUT } from "@/lib/comparisons/model";
 import { formatLength } from "@/lib/fitment";
 import { predictPoints, steeringAxisOf } from "@/lib/garage/predict";
-import type { VehicleDetail, WorkspaceVehicle } from "@/lib/garage/types";
+import { HAULER, detailOf, point } from "@/lib/garage/testUtil";
+import type { WorkspaceVehicle } from "@/lib/garage/types";
 import GaragePanel from "./GaragePanel";
 
-vi.mock("next/link", () => ({
-  default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => (
-    <a href={href} {...rest}>
-      {children}
-    </a>
-  ),
-}));
+vi.mock("next/link", () => import("@/tests/support/nextLink"));
 afterEach(cleanup);
 
 // An invented vehicle with 9° of kingpin inclination recorded and one point measured at full lock.
 const metric: DisplayPrefs = { units: "metric", lengths: "decimal" };
 const current = DEFAULT_INPUT.current;
 const planned = DEFAULT_INPUT.planned;
-const point = {
-  id: "p1",
+const swayBar = point("p1", "inboard", 60, {
   label: "sway bar end, full right lock",
-  direction: "inboard" as const,
-  distanceMm: 60,
-  distanceText: "60 mm",
-  suspensionState: "full-lock" as const,
+  suspensionState: "full-lock",
   measuredSetup: current,
   createdAt: "2026-01-01T00:00:00.000Z",
-};
+});
 const wsVehicle: WorkspaceVehicle = {
   id: "v1",
   name: "Quarry hauler",
@@ -41,33 +31,9 @@ const wsVehicle: WorkspaceVehicle = {
   axleRatio: 3.73,
   transmissionRatio: 1,
   clearanceMarginMm: 12.7,
-  clearances: [point],
+  clearances: [swayBar],
 };
-const detail: VehicleDetail = {
-  vehicle: {
-    id: "v1",
-    name: "Quarry hauler",
-    year: null,
-    make: null,
-    model: null,
-    trim: null,
-    frontSuspension: "solid-axle",
-    boltPattern: "6x139.7",
-    hubBoreMm: null,
-    stockSetup: current,
-    currentSetup: current,
-    liftHeightMm: null,
-    kingpinInclinationDeg: 9,
-    axleRatio: 3.73,
-    transmissionRatio: 1,
-    clearanceMarginMm: 12.7,
-    notes: "",
-    createdAt: "2026-01-01T00:00:00.000Z",
-    updatedAt: "2026-01-01T00:00:00.000Z",
-  },
-  clearances: [point],
-  photos: [],
-};
+const detail = detailOf({ ...HAULER, kingpinInclinationDeg: 9 }, [swayBar]);
 const predictedCell = (testId: string) =>
   within(screen.getByTestId(testId)).getAllByRole("row")[1]!.querySelectorAll("td")[3]!.textContent ?? "";
 
@@ -86,8 +52,8 @@ describe("full-lock predictions: the workspace's garage panel and the vehicle pa
     );
     render(<PlannedPanel detail={detail} initialPlanned={planned} />);
     // The engine's own figure with the vehicle's axis (lib/fitment/clearance.ts), to the mm.
-    const expected = predictPoints([point], planned, 12.7, wsVehicle)[0]!.predictedMm;
-    const withoutAxis = predictPoints([point], planned, 12.7)[0]!.predictedMm;
+    const expected = predictPoints([swayBar], planned, 12.7, wsVehicle)[0]!.predictedMm;
+    const withoutAxis = predictPoints([swayBar], planned, 12.7)[0]!.predictedMm;
     expect(Math.abs(expected - withoutAxis)).toBeGreaterThan(1);
     expect(predictedCell("workspace-predictions")).toBe(formatLen(expected, metric, { decimals: 0 }));
     expect(predictedCell("predictions").startsWith(formatLength(expected, { unit: "mm" }))).toBe(true);

@@ -1,44 +1,18 @@
 import { describe, expect, it } from "vitest";
-import type { CalendarAnswer } from "./api";
+import { calendarWith, liftStretch } from "./calendarFixture";
 import { layoutCalendar } from "./calendarLayout";
 
 // Grid arithmetic only (quarter-hour rows); the times are invented. Denver is UTC−7 in December (49 CFR §71.9).
-const answer: CalendarAnswer = {
-  timeZone: "America/Denver",
-  from: "2026-12-14",
-  days: ["2026-12-14", "2026-12-15"],
-  hours: { "2026-12-14": { opens: 480, closes: 1020 }, "2026-12-15": null },
-  bays: [
-    { id: "lift", name: "Lift 1", kind: "lift_bay" },
-    { id: "rack", name: "Rack", kind: "alignment_rack" },
-  ],
-  bookings: [
-    {
-      id: "b1",
-      quoteId: "q1",
-      status: "booked",
-      startsAt: "2026-12-14T15:00:00.000Z",
-      endsAt: "2026-12-14T20:40:00.000Z",
-      when: "",
-      timeZone: "America/Denver",
-      sequence: 0,
-      bookedBy: "customer",
-      quoteNumber: 1003,
-      customerName: "Ilse Varga-Pond",
-      vehicleDescription: "Half-ton pickup",
-      bays: [
-        { bayId: "lift", bayName: "Lift 1", bayKind: "lift_bay", startsAt: "2026-12-14T15:00:00.000Z", endsAt: "2026-12-14T19:40:00.000Z" },
-        {
-          bayId: "rack",
-          bayName: "Rack",
-          bayKind: "alignment_rack",
-          startsAt: "2026-12-14T19:40:00.000Z",
-          endsAt: "2026-12-14T20:40:00.000Z",
-        },
-      ],
-    },
-  ],
-};
+const answer = calendarWith("2026-12-14T20:40:00.000Z", [
+  liftStretch("2026-12-14T19:40:00.000Z"),
+  {
+    bayId: "rack",
+    bayName: "Rack",
+    bayKind: "alignment_rack",
+    startsAt: "2026-12-14T19:40:00.000Z",
+    endsAt: "2026-12-14T20:40:00.000Z",
+  },
+]);
 
 describe("the staff calendar's grid", () => {
   it("puts each bay stretch in its day-and-bay column, in quarter-hour rows from the first opening hour", () => {

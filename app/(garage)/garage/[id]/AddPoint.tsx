@@ -3,9 +3,10 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useQueryClient } from "@tanstack/react-query";
 import { type ChangeEvent, useState } from "react";
 import { useForm } from "react-hook-form";
-import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
+import { FailureRegion } from "@/components/ui/FailureRegion";
 import { TextField } from "@/components/ui/TextField";
+import { fieldBinder } from "@/components/ui/fieldProps";
 import { api, applyFieldErrors } from "@/lib/platform/client/api";
 import { queryKeys } from "@/lib/platform/query/keys";
 import {
@@ -32,6 +33,7 @@ export function AddPoint({ vehicleId }: { vehicleId: string }) {
   const { register, handleSubmit, formState, setError, reset, getValues, setValue } = form;
   const unitField = register("unit");
   const e = formState.errors;
+  const field = fieldBinder(form);
   const onSubmit = handleSubmit(async () => {
     setFailure(null);
     try {
@@ -75,30 +77,12 @@ export function AddPoint({ vehicleId }: { vehicleId: string }) {
   return (
     <form onSubmit={onSubmit} noValidate className="no-print mt-5 border-t border-basalt-100 pt-4">
       <h3 className="font-semibold">Add a measured point</h3>
-      <div aria-live="assertive">
-        {failure && (
-          <Alert tone="error" className="mt-2">
-            {failure}
-          </Alert>
-        )}
-      </div>
+      <FailureRegion message={failure} alertClassName="mt-2" />
       <div className="mt-2 grid grid-cols-[minmax(0,1fr)] gap-3 sm:grid-cols-2 lg:grid-cols-3">
-        <TextField
-          id="f-point-label"
-          label="Point"
-          hint='e.g. "frame rail, full left lock"'
-          {...register("label")}
-          error={e.label?.message}
-        />
+        <TextField id="f-point-label" label="Point" hint='e.g. "frame rail, full left lock"' {...field("label")} />
         {select("direction", "Direction", CLEARANCE_DIRECTION_LABEL)}
         {select("suspensionState", "Suspension state", SUSPENSION_STATE_LABEL)}
-        <TextField
-          id="f-point-distance"
-          label="Distance"
-          hint="e.g. 1-1/2, 1.5 in or 38 mm"
-          {...register("distance")}
-          error={e.distance?.message}
-        />
+        <TextField id="f-point-distance" label="Distance" hint="e.g. 1-1/2, 1.5 in or 38 mm" {...field("distance")} />
         {select("unit", "Unit (when the distance has none)", { in: "inches", mm: "millimetres" })}
       </div>
       <p className="mt-1 text-xs text-basalt-500">Recorded as measured with the current setup.</p>

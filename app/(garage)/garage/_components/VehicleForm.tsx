@@ -7,7 +7,9 @@ import { useForm, useWatch } from "react-hook-form";
 import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
+import { SelectField } from "@/components/ui/SelectField";
 import { TextField } from "@/components/ui/TextField";
+import { fieldBinder } from "@/components/ui/fieldProps";
 import { api, applyFieldErrors } from "@/lib/platform/client/api";
 import { queryKeys } from "@/lib/platform/query/keys";
 import { formatBoltPattern, formatLength, parseBoltPattern } from "@/lib/fitment";
@@ -88,6 +90,7 @@ export function VehicleForm({ vehicle }: { vehicle: Vehicle | null }) {
   });
   const { register, handleSubmit, setError, formState, getValues, reset } = form;
   const e = formState.errors;
+  const field = fieldBinder(form);
   const bolt = useWatch({ control: form.control, name: "boltPattern" });
   let boltNote: string | undefined;
   try {
@@ -121,68 +124,30 @@ export function VehicleForm({ vehicle }: { vehicle: Vehicle | null }) {
       <div aria-live="assertive">{failure && <Alert tone="error">{failure}</Alert>}</div>
       <Card className="grid grid-cols-[minmax(0,1fr)] gap-3 sm:grid-cols-2">
         <h2 className="text-lg font-semibold sm:col-span-2">The vehicle</h2>
-        <TextField
-          label="Name"
-          hint="Your own name for it, e.g. Gravel hauler"
-          {...register("name")}
-          error={e.name?.message}
-          className="sm:col-span-2"
+        <TextField label="Name" hint="Your own name for it, e.g. Gravel hauler" {...field("name")} className="sm:col-span-2" />
+        <TextField label="Year" inputMode="numeric" {...field("year")} />
+        <TextField label="Make" hint="Free text" {...field("make")} />
+        <TextField label="Model" hint="Free text" {...field("model")} />
+        <TextField label="Trim" hint="Free text" {...field("trim")} />
+        <SelectField
+          label="Front suspension"
+          options={Object.entries(FRONT_SUSPENSION_LABEL).map(([value, label]) => ({ value, label }))}
+          {...field("frontSuspension")}
         />
-        <TextField label="Year" inputMode="numeric" {...register("year")} error={e.year?.message} />
-        <TextField label="Make" hint="Free text" {...register("make")} error={e.make?.message} />
-        <TextField label="Model" hint="Free text" {...register("model")} error={e.model?.message} />
-        <TextField label="Trim" hint="Free text" {...register("trim")} error={e.trim?.message} />
-        <div className="flex flex-col gap-1">
-          <label htmlFor="f-frontSuspension" className="text-sm font-medium text-basalt-800">
-            Front suspension
-          </label>
-          <select
-            id="f-frontSuspension"
-            className="min-h-10 rounded-lg border border-basalt-300 bg-white px-3"
-            {...register("frontSuspension")}
-            aria-describedby="f-frontSuspension-error"
-          >
-            {Object.entries(FRONT_SUSPENSION_LABEL).map(([v, l]) => (
-              <option key={v} value={v}>
-                {l}
-              </option>
-            ))}
-          </select>
-          <p id="f-frontSuspension-error" aria-live="polite" className="text-sm text-contact-600">
-            {e.frontSuspension?.message}
-          </p>
-        </div>
         <TextField
           label="Bolt pattern"
           hint={boltNote ?? "e.g. 6x5.5 or 6x139.7 — inch and mm forms of one pattern are the same"}
-          {...register("boltPattern")}
-          error={e.boltPattern?.message}
+          {...field("boltPattern")}
         />
-        <TextField label="Hub bore (mm)" hint="Optional, e.g. 106.1" {...register("hubBoreMm")} error={e.hubBoreMm?.message} />
-        <TextField
-          label="Lift height (in)"
-          hint="Optional, in inches; fractions work, e.g. 2-1/2, 2½ or 2.5"
-          {...register("liftHeightMm")}
-          error={e.liftHeightMm?.message}
-        />
-        <TextField
-          label="Kingpin inclination (°)"
-          hint="Optional, from the maker's data, e.g. 8"
-          {...register("kingpinInclinationDeg")}
-          error={e.kingpinInclinationDeg?.message}
-        />
-        <TextField label="Axle ratio" hint="Optional, e.g. 3.73" {...register("axleRatio")} error={e.axleRatio?.message} />
-        <TextField
-          label="Top-gear ratio"
-          hint="Optional, e.g. 0.72 (overdrive) or 1.00"
-          {...register("transmissionRatio")}
-          error={e.transmissionRatio?.message}
-        />
+        <TextField label="Hub bore (mm)" hint="Optional, e.g. 106.1" {...field("hubBoreMm")} />
+        <TextField label="Lift height (in)" hint="Optional, in inches; fractions work, e.g. 2-1/2, 2½ or 2.5" {...field("liftHeightMm")} />
+        <TextField label="Kingpin inclination (°)" hint="Optional, from the maker's data, e.g. 8" {...field("kingpinInclinationDeg")} />
+        <TextField label="Axle ratio" hint="Optional, e.g. 3.73" {...field("axleRatio")} />
+        <TextField label="Top-gear ratio" hint="Optional, e.g. 0.72 (overdrive) or 1.00" {...field("transmissionRatio")} />
         <TextField
           label="Clearance margin"
           hint="The gap you want kept at every measured point; 1/2 in if left empty (common practice, no source). Give the unit, e.g. 3/4 in or 15 mm"
-          {...register("clearanceMarginMm")}
-          error={e.clearanceMarginMm?.message}
+          {...field("clearanceMarginMm")}
         />
         <div className="flex flex-col gap-1 sm:col-span-2">
           <label htmlFor="f-notes" className="text-sm font-medium text-basalt-800">

@@ -3,6 +3,7 @@ import { useFormContext } from "react-hook-form";
 import { Card } from "@/components/ui/Card";
 import { SelectField } from "@/components/ui/SelectField";
 import { TextField } from "@/components/ui/TextField";
+import { fieldBinder } from "@/components/ui/fieldProps";
 import type { BaysSetupInput } from "@/lib/shop/bookings/schema";
 import { SLOT_STEPS } from "@/lib/shop/bookings/vocabulary";
 
@@ -18,8 +19,7 @@ const ZONES = [
 ];
 
 export function ScheduleFields() {
-  const { register, formState } = useFormContext<BaysSetupInput>();
-  const errors = formState.errors;
+  const field = fieldBinder(useFormContext<BaysSetupInput>());
   return (
     <Card>
       <h2 className="text-lg font-semibold">Clock</h2>
@@ -28,8 +28,7 @@ export function ScheduleFields() {
           label="Time zone"
           list="bays-time-zones"
           autoComplete="off"
-          {...register("timeZone")}
-          error={errors.timeZone?.message}
+          {...field("timeZone")}
           hint="Opening hours, closed days and every booking are on this clock, e.g. America/Denver."
         />
         <datalist id="bays-time-zones">
@@ -40,8 +39,7 @@ export function ScheduleFields() {
         <SelectField
           label="Offer start times every"
           options={SLOT_STEPS.map((s) => ({ value: String(s), label: `${s} minutes` }))}
-          {...register("slotStepMinutes")}
-          error={errors.slotStepMinutes?.message}
+          {...field("slotStepMinutes")}
           hint="Counted from the opening time."
         />
       </div>

@@ -1,49 +1,14 @@
 // @vitest-environment jsdom
 import { cleanup, render, screen } from "@testing-library/react";
-import type { ReactNode } from "react";
 import { afterEach, describe, expect, it, vi } from "vitest";
-import type { CalendarAnswer } from "@/lib/shop/bookings/api";
+import { calendarWith, liftStretch } from "@/lib/shop/bookings/calendarFixture";
 import { CalendarGrid } from "./CalendarGrid";
 
-vi.mock("next/link", () => ({
-  default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => (
-    <a href={href} {...rest}>
-      {children}
-    </a>
-  ),
-}));
+vi.mock("next/link", () => import("@/tests/support/nextLink"));
 afterEach(cleanup);
 
 // Denver is UTC−7 in December (49 CFR §71.9): 15:00Z is 8:00 AM on the shop's clock. The booking is invented.
-const data: CalendarAnswer = {
-  timeZone: "America/Denver",
-  from: "2026-12-14",
-  days: ["2026-12-14", "2026-12-15"],
-  hours: { "2026-12-14": { opens: 480, closes: 1020 }, "2026-12-15": null },
-  bays: [
-    { id: "lift", name: "Lift 1", kind: "lift_bay" },
-    { id: "rack", name: "Rack", kind: "alignment_rack" },
-  ],
-  bookings: [
-    {
-      id: "b1",
-      quoteId: "q1",
-      status: "booked",
-      startsAt: "2026-12-14T15:00:00.000Z",
-      endsAt: "2026-12-14T16:20:00.000Z",
-      when: "",
-      timeZone: "America/Denver",
-      sequence: 0,
-      bookedBy: "customer",
-      quoteNumber: 1003,
-      customerName: "Ilse Varga-Pond",
-      vehicleDescription: "Half-ton pickup",
-      bays: [
-        { bayId: "lift", bayName: "Lift 1", bayKind: "lift_bay", startsAt: "2026-12-14T15:00:00.000Z", endsAt: "2026-12-14T16:20:00.000Z" },
-      ],
-    },
-  ],
-};
+const data = calendarWith("2026-12-14T16:20:00.000Z", [liftStretch("2026-12-14T16:20:00.000Z")]);
 
 describe("the staff calendar", () => {
   it("shows each day's bays, marks a closed day, and links each booking to its quote with its time and bay in words", () => {

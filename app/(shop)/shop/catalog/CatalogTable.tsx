@@ -1,13 +1,15 @@
 "use client";
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import { useEffect, useState } from "react";
+import { CatalogKindSelect } from "@/components/catalog/CatalogKindSelect";
 import { Alert } from "@/components/ui/Alert";
 import { Badge } from "@/components/ui/Badge";
 import { Card } from "@/components/ui/Card";
 import { Pagination } from "@/components/ui/Pagination";
 import { Table, type TableColumn } from "@/components/ui/Table";
 import { type TableSort, nextSort } from "@/components/ui/tableSort";
-import { CATALOG_KIND_FILTERS, type CatalogItem, type CatalogPage } from "@/lib/shop/catalog/api";
+import type { CatalogItem, CatalogPage } from "@/lib/shop/catalog/api";
+import type { CatalogKind } from "@/lib/platform/db/types";
 import { api } from "@/lib/platform/client/api";
 import { queryKeys } from "@/lib/platform/query/keys";
 import { formatUsd } from "@/lib/shop/quotes/money";
@@ -57,7 +59,7 @@ export function CatalogTable() {
   // The server always orders the rows, so the header flips between the two directions.
   const [sort, setSort] = useState<NonNullable<TableSort>>({ id: "sku", desc: false });
   const [pagination, setPagination] = useState({ pageIndex: 0, pageSize: 25 });
-  const [kind, setKind] = useState("");
+  const [kind, setKind] = useState<"" | CatalogKind>("");
   const [search, setSearch] = useState("");
   const [q, setQ] = useState("");
   useEffect(() => {
@@ -98,24 +100,13 @@ export function CatalogTable() {
             }}
           />
         </label>
-        <label className="flex flex-col gap-1 text-sm font-medium">
-          {CATALOG_QUERY_LABELS.kind}
-          <select
-            className="min-h-10 rounded-lg border border-basalt-300 px-3"
-            value={kind}
-            onChange={(e) => {
-              setKind(e.target.value);
-              setPagination((p) => ({ ...p, pageIndex: 0 }));
-            }}
-          >
-            <option value="">All</option>
-            {CATALOG_KIND_FILTERS.map((k) => (
-              <option key={k.kind} value={k.kind}>
-                {k.label}
-              </option>
-            ))}
-          </select>
-        </label>
+        <CatalogKindSelect
+          value={kind}
+          onChange={(k) => {
+            setKind(k);
+            setPagination((p) => ({ ...p, pageIndex: 0 }));
+          }}
+        />
         <p className="ml-auto text-sm text-basalt-600" aria-live="polite">
           {data.isFetching ? "Loading…" : `${total.toLocaleString("en-US")} items`}
         </p>

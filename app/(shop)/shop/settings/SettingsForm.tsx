@@ -6,6 +6,7 @@ import { useForm } from "react-hook-form";
 import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
 import { TextField } from "@/components/ui/TextField";
+import { fieldBinder } from "@/components/ui/fieldProps";
 import { api, applyFieldErrors } from "@/lib/platform/client/api";
 import { type ShopSettings, type ShopSettingsInput, shopSettingsSchema } from "@/lib/shop/schema";
 
@@ -24,11 +25,12 @@ const FIELDS = [
 export function SettingsForm({ initial }: { initial: Record<(typeof FIELDS)[number], string> }) {
   const router = useRouter();
   const [message, setMessage] = useState<{ tone: "success" | "error"; text: string } | null>(null);
-  const { register, handleSubmit, setError, formState, getValues } = useForm<ShopSettingsInput, unknown, ShopSettings>({
+  const form = useForm<ShopSettingsInput, unknown, ShopSettings>({
     resolver: zodResolver(shopSettingsSchema),
     defaultValues: initial as ShopSettingsInput,
   });
-  const errors = formState.errors;
+  const { handleSubmit, setError, formState, getValues } = form;
+  const field = fieldBinder(form);
   const onSubmit = handleSubmit(async () => {
     setMessage(null);
     // The text as typed goes to the server, which parses it with the same schema.
@@ -45,39 +47,21 @@ export function SettingsForm({ initial }: { initial: Record<(typeof FIELDS)[numb
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-3">
       <div aria-live="polite">{message && <Alert tone={message.tone}>{message.text}</Alert>}</div>
-      <TextField label="Shop name" {...register("name")} error={errors.name?.message} />
-      <TextField label="Address" {...register("address")} error={errors.address?.message} hint="Printed in the quote header." />
-      <TextField label="Phone" type="tel" {...register("phone")} error={errors.phone?.message} />
+      <TextField label="Shop name" {...field("name")} />
+      <TextField label="Address" {...field("address")} hint="Printed in the quote header." />
+      <TextField label="Phone" type="tel" {...field("phone")} />
       <div className="grid gap-3 sm:grid-cols-2">
-        <TextField
-          label="Sales tax rate (%)"
-          inputMode="decimal"
-          {...register("taxRate")}
-          error={errors.taxRate?.message}
-          hint="Applied to taxable lines, e.g. 8.25."
-        />
-        <TextField label="Deposit (% of total)" inputMode="numeric" {...register("depositPct")} error={errors.depositPct?.message} />
-        <TextField label="Labour rate ($ per hour)" inputMode="decimal" {...register("labourRate")} error={errors.labourRate?.message} />
+        <TextField label="Sales tax rate (%)" inputMode="decimal" {...field("taxRate")} hint="Applied to taxable lines, e.g. 8.25." />
+        <TextField label="Deposit (% of total)" inputMode="numeric" {...field("depositPct")} />
+        <TextField label="Labour rate ($ per hour)" inputMode="decimal" {...field("labourRate")} />
         <TextField
           label="Fabrication rate ($ per hour)"
           inputMode="decimal"
-          {...register("fabricationRate")}
-          error={errors.fabricationRate?.message}
+          {...field("fabricationRate")}
           hint="Fender trimming and other cutting work."
         />
-        <TextField
-          label="Quote valid for (days)"
-          inputMode="numeric"
-          {...register("quoteValidityDays")}
-          error={errors.quoteValidityDays?.message}
-        />
-        <TextField
-          label="Currency"
-          readOnly
-          {...register("currency")}
-          error={errors.currency?.message}
-          hint="Quotes and deposits are in US dollars."
-        />
+        <TextField label="Quote valid for (days)" inputMode="numeric" {...field("quoteValidityDays")} />
+        <TextField label="Currency" readOnly {...field("currency")} hint="Quotes and deposits are in US dollars." />
       </div>
       <Button type="submit" pending={formState.isSubmitting} className="self-start">
         Save settings

@@ -3,32 +3,24 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { z } from "zod";
 import { Alert } from "@/components/ui/Alert";
-import { buttonClass } from "@/components/ui/Button";
+import { LinkButton } from "@/components/ui/LinkButton";
 import { PageHeader } from "@/components/ui/PageHeader";
-import { requirePageCaller } from "@/lib/platform/auth/session";
 import { pageGuard } from "@/lib/platform/http/pageGuard";
 import { workspaceUrl } from "@/lib/comparisons/url";
-import { GARAGE_ACCESS } from "@/lib/garage/access";
 import { bothUnits, setupLine } from "@/lib/garage/format";
 import { setupFromQuery, setupQuery } from "@/lib/setup/url";
 import { checklistQueries } from "@/lib/garage/checklistQueries";
 import { marginMmParam } from "@/lib/garage/schema";
+import { type VehiclePageProps, vehiclePageCaller } from "../vehiclePage";
 import { ChecklistView } from "./ChecklistView";
 
 export const metadata: Metadata = { title: "Install checklist" };
 
 const first = (v: string | string[] | undefined) => (Array.isArray(v) ? v[0] : v);
 
-export default async function ChecklistPage({
-  params,
-  searchParams,
-}: {
-  params: Promise<{ id: string }>;
-  searchParams: Promise<Record<string, string | string[] | undefined>>;
-}) {
+export default async function ChecklistPage({ params, searchParams }: VehiclePageProps) {
   const [{ id }, sp] = await Promise.all([params, searchParams]);
-  const caller = await requirePageCaller(`/garage/${id}/checklist`, GARAGE_ACCESS);
-  if (!z.uuid().safeParse(id).success) notFound();
+  const caller = await vehiclePageCaller(id, "/checklist");
   const rawComparison = first(sp.comparison);
   const comparisonId = z.uuid().safeParse(rawComparison).data;
   if (rawComparison !== undefined && !comparisonId) notFound();
@@ -71,9 +63,9 @@ export default async function ChecklistPage({
         lead={`${r.comparison ? `From the saved comparison “${r.comparison.name}”: ` : ""}${setupLine(vehicle.currentSetup)} to ${setupLine(r.planned)}. ${marginNote}`}
         actions={
           <div className="no-print flex gap-2">
-            <Link href={backHref} className={buttonClass("secondary")}>
+            <LinkButton href={backHref} variant="secondary">
               {r.comparison ? "Back to the comparison" : "Back to the plan"}
-            </Link>
+            </LinkButton>
           </div>
         }
       />

@@ -1,13 +1,13 @@
 "use client";
 import { zodResolver } from "@hookform/resolvers/zod";
-import Link from "next/link";
 import { useEffect, useRef, useState } from "react";
 import { useForm, useWatch } from "react-hook-form";
 import { Alert } from "@/components/ui/Alert";
-import { buttonClass } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
+import { LinkButton } from "@/components/ui/LinkButton";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { TextField } from "@/components/ui/TextField";
+import { fieldBinder } from "@/components/ui/fieldProps";
 import { type FinderResult, formatLength } from "@/lib/fitment";
 import { FINDER_LABEL, type FinderGoalsForm, finderGoalsSchema, finderPlan } from "@/lib/garage/finderGoals";
 import type { FinderJob, FinderReply } from "@/lib/garage/finderJob";
@@ -90,7 +90,7 @@ export function FinderPanel({ vehicle, clearances }: { vehicle: Vehicle; clearan
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [planKey]);
 
-  const e = form.formState.errors;
+  const field = fieldBinder(form);
   const reg = form.register;
   return (
     <>
@@ -98,9 +98,9 @@ export function FinderPanel({ vehicle, clearances }: { vehicle: Vehicle; clearan
         title={`Fitment finder — ${vehicle.name}`}
         lead={`Tire sizes × wheel widths × offsets for ${vehicle.boltPattern}, ranked by the engine. The search runs in the background as you type.`}
         actions={
-          <Link href={`/garage/${vehicle.id}`} className={buttonClass("secondary")}>
+          <LinkButton href={`/garage/${vehicle.id}`} variant="secondary">
             Back to the vehicle
-          </Link>
+          </LinkButton>
         }
       />
       {/* Goals above the results, never beside them: the results table then has the page's whole
@@ -112,28 +112,21 @@ export function FinderPanel({ vehicle, clearances }: { vehicle: Vehicle; clearan
             <TextField
               label={FINDER_LABEL.targetDiameterMm}
               hint="Optional, e.g. 35 or 890 mm; ranks nearest first"
-              {...reg("targetDiameterMm")}
-              error={e.targetDiameterMm?.message}
+              {...field("targetDiameterMm")}
             />
             <div className="grid grid-cols-2 gap-2">
-              <TextField label={FINDER_LABEL.minDiameterMm} hint="e.g. 33" {...reg("minDiameterMm")} error={e.minDiameterMm?.message} />
-              <TextField label={FINDER_LABEL.maxDiameterMm} hint="e.g. 35-1/2" {...reg("maxDiameterMm")} error={e.maxDiameterMm?.message} />
+              <TextField label={FINDER_LABEL.minDiameterMm} hint="e.g. 33" {...field("minDiameterMm")} />
+              <TextField label={FINDER_LABEL.maxDiameterMm} hint="e.g. 35-1/2" {...field("maxDiameterMm")} />
             </div>
-            <TextField
-              label={FINDER_LABEL.wheelDiameters}
-              hint="e.g. 17, 18 — empty for any"
-              {...reg("wheelDiameters")}
-              error={e.wheelDiameters?.message}
-            />
+            <TextField label={FINDER_LABEL.wheelDiameters} hint="e.g. 17, 18 — empty for any" {...field("wheelDiameters")} />
             <div className="grid grid-cols-2 gap-2">
-              <TextField label={FINDER_LABEL.minWidthIn} hint="e.g. 8" {...reg("minWidthIn")} error={e.minWidthIn?.message} />
-              <TextField label={FINDER_LABEL.maxWidthIn} hint="e.g. 10" {...reg("maxWidthIn")} error={e.maxWidthIn?.message} />
+              <TextField label={FINDER_LABEL.minWidthIn} hint="e.g. 8" {...field("minWidthIn")} />
+              <TextField label={FINDER_LABEL.maxWidthIn} hint="e.g. 10" {...field("maxWidthIn")} />
             </div>
             <TextField
               label={FINDER_LABEL.maxPokeMm}
               hint={`Beyond the current setup's ${mm(plan?.currentOuterSwingMm ?? 0)} outboard reach; e.g. 25 or 1 in; empty for no limit`}
-              {...reg("maxPokeMm")}
-              error={e.maxPokeMm?.message}
+              {...field("maxPokeMm")}
             />
             <label className="flex items-start gap-2 text-sm">
               <input type="checkbox" className="mt-1" {...reg("usePoints")} disabled={!hasPoints} aria-describedby="f-usePoints-hint" />
@@ -150,12 +143,7 @@ export function FinderPanel({ vehicle, clearances }: { vehicle: Vehicle; clearan
                 </span>
               </span>
             </label>
-            <TextField
-              label={FINDER_LABEL.margin}
-              hint="Default 1/2 in — common practice, no source"
-              {...reg("margin")}
-              error={e.margin?.message}
-            />
+            <TextField label={FINDER_LABEL.margin} hint="Default 1/2 in — common practice, no source" {...field("margin")} />
           </div>
           <p className="text-xs text-basalt-500">
             Bolt pattern from the vehicle: {vehicle.boltPattern}. Wheel diameter is the tire&apos;s rim diameter.

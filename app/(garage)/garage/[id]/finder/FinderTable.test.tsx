@@ -1,45 +1,14 @@
 // @vitest-environment jsdom
 import { cleanup, render, screen, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
-import type { ReactNode } from "react";
 import { afterEach, describe, expect, it, vi } from "vitest";
-import { DEFAULT_INPUT } from "@/lib/comparisons/model";
 import { type FitmentMatch, parseTireSize } from "@/lib/fitment";
-import type { Vehicle } from "@/lib/garage/types";
+import { HAULER } from "@/lib/garage/testUtil";
 import { FinderTable } from "./FinderTable";
 
 vi.setConfig({ testTimeout: 30_000 });
-vi.mock("next/link", () => ({
-  default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => (
-    <a href={href} {...rest}>
-      {children}
-    </a>
-  ),
-}));
+vi.mock("next/link", () => import("@/tests/support/nextLink"));
 afterEach(cleanup);
-
-const setup = DEFAULT_INPUT.current;
-const vehicle: Vehicle = {
-  id: "v1",
-  name: "Quarry hauler",
-  year: null,
-  make: null,
-  model: null,
-  trim: null,
-  frontSuspension: "solid-axle",
-  boltPattern: "6x139.7",
-  hubBoreMm: null,
-  stockSetup: setup,
-  currentSetup: setup,
-  liftHeightMm: null,
-  kingpinInclinationDeg: null,
-  axleRatio: 3.73,
-  transmissionRatio: 1,
-  clearanceMarginMm: 12.7,
-  notes: "",
-  createdAt: "2026-01-01T00:00:00.000Z",
-  updatedAt: "2026-01-01T00:00:00.000Z",
-};
 
 const TIRES = ["33x12.50R17LT", "35x12.50R17LT", "285/70R17"].map((t) => parseTireSize(t));
 /**
@@ -73,7 +42,7 @@ const column = (n: number) => bodyRows().map((r) => within(r).getAllByRole("cell
 describe("the finder's results table", () => {
   it("shows 25 fits a page, in the engine's rank, and pages through the rest", async () => {
     const user = userEvent.setup();
-    render(<FinderTable rows={ROWS} vehicle={vehicle} />);
+    render(<FinderTable rows={ROWS} vehicle={HAULER} />);
     expect(firstCells()).toEqual(Array.from({ length: 25 }, (_, i) => String(i + 1)));
     expect(screen.getByTestId("finder-page-rows").textContent).toBe("Rows 1–25 of 60");
     const pages = screen.getByRole("navigation", { name: "Pages of fitments" });
@@ -88,7 +57,7 @@ describe("the finder's results table", () => {
 
   it("sorts every figure column over all fits, not only the page shown, and starts again at page 1", async () => {
     const user = userEvent.setup();
-    render(<FinderTable rows={ROWS} vehicle={vehicle} />);
+    render(<FinderTable rows={ROWS} vehicle={HAULER} />);
     await user.click(screen.getByRole("button", { name: "Next" }));
     await user.click(screen.getByRole("button", { name: "Offset" }));
     expect(screen.getByTestId("finder-page-rows").textContent).toBe("Rows 1–25 of 60");
@@ -112,7 +81,7 @@ describe("the finder's results table", () => {
 
   it("puts fits without a measured point last by tightest point, whichever way", async () => {
     const user = userEvent.setup();
-    render(<FinderTable rows={ROWS} vehicle={vehicle} />);
+    render(<FinderTable rows={ROWS} vehicle={HAULER} />);
     const tightest = screen.getByRole("button", { name: "Tightest point" });
     await user.click(tightest);
     await user.click(tightest);
@@ -124,7 +93,7 @@ describe("the finder's results table", () => {
 
   it("filters by wheel, counts what is left, and says so when nothing matches", async () => {
     const user = userEvent.setup();
-    render(<FinderTable rows={ROWS} vehicle={vehicle} />);
+    render(<FinderTable rows={ROWS} vehicle={HAULER} />);
     await user.click(screen.getByRole("button", { name: "Next" }));
     const filter = screen.getByLabelText("Filter by tire size or wheel");
     await user.type(filter, "17x9");
@@ -137,10 +106,10 @@ describe("the finder's results table", () => {
 
   it("starts a new search's fits at their first page", async () => {
     const user = userEvent.setup();
-    const { rerender } = render(<FinderTable rows={ROWS} vehicle={vehicle} />);
+    const { rerender } = render(<FinderTable rows={ROWS} vehicle={HAULER} />);
     await user.click(screen.getByRole("button", { name: "Next" }));
     expect(firstCells()[0]).toBe("26");
-    rerender(<FinderTable rows={ROWS.slice(0, 40)} vehicle={vehicle} />);
+    rerender(<FinderTable rows={ROWS.slice(0, 40)} vehicle={HAULER} />);
     expect(firstCells()[0]).toBe("1");
     expect(screen.getByTestId("finder-page-rows").textContent).toBe("Rows 1–25 of 40");
   });

@@ -4,6 +4,7 @@ import Link from "next/link";
 import { useRef, useState } from "react";
 import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
+import { FailureRegion } from "@/components/ui/FailureRegion";
 import { Card } from "@/components/ui/Card";
 import { Table, type TableColumn } from "@/components/ui/Table";
 import { ImportProgress } from "./ImportProgress";
@@ -122,13 +123,7 @@ export function ImportFlow() {
 
   return (
     <Card className="flex flex-col gap-4">
-      <div aria-live="assertive">
-        {failure && (
-          <Alert tone="error" title="Nothing was imported">
-            {failure}
-          </Alert>
-        )}
-      </div>
+      <FailureRegion message={failure} title="Nothing was imported" />
       {(phase.at === "pick" || phase.at === "uploading") && (
         <div className="flex flex-col gap-1">
           <label htmlFor="catalog-file" className="text-sm font-medium">

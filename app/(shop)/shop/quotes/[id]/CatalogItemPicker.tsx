@@ -1,11 +1,12 @@
 "use client";
 import { useQuery } from "@tanstack/react-query";
 import { useState } from "react";
+import { CatalogKindSelect } from "@/components/catalog/CatalogKindSelect";
 import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
 import { api } from "@/lib/platform/client/api";
 import { queryKeys } from "@/lib/platform/query/keys";
-import { CATALOG_KIND_FILTERS, type CatalogItem } from "@/lib/shop/catalog/api";
+import type { CatalogItem } from "@/lib/shop/catalog/api";
 import type { CatalogKind } from "@/lib/platform/db/types";
 import { checkWheelOnHub, hubRefusal } from "@/lib/shop/quotes/hubFit";
 import { formatUsd } from "@/lib/shop/quotes/money";
@@ -54,21 +55,7 @@ export function CatalogItemPicker({
             onChange={(e) => setText(e.target.value)}
           />
         </label>
-        <label className="flex flex-col gap-1 text-sm font-medium">
-          Kind
-          <select
-            className="min-h-10 rounded-lg border border-basalt-300 px-3"
-            value={kind}
-            onChange={(e) => setKind(e.target.value as "" | CatalogKind)}
-          >
-            <option value="">All</option>
-            {CATALOG_KIND_FILTERS.map((k) => (
-              <option key={k.kind} value={k.kind}>
-                {k.label}
-              </option>
-            ))}
-          </select>
-        </label>
+        <CatalogKindSelect value={kind} onChange={setKind} />
         <Button type="submit" variant="secondary" pending={found.isFetching}>
           Find
         </Button>

@@ -26,6 +26,19 @@ export function QuoteLinesTable({
   onChange: (i: number, patch: Partial<EditLine>) => void;
   onRemove: (i: number) => void;
 }) {
+  /** A line's dollar figure: typed while a draft (as the shop writes it), the text as saved otherwise. */
+  const dollarsCell = (l: EditLine, i: number, key: "unitPrice" | "discount", what: string, width: "w-24" | "w-20") =>
+    editable ? (
+      <input
+        aria-label={`${what} of line ${i + 1}`}
+        inputMode="decimal"
+        className={`${width} rounded border border-basalt-300 px-2 py-1`}
+        value={l[key]}
+        onChange={(e) => onChange(i, key === "unitPrice" ? { unitPrice: e.target.value } : { discount: e.target.value })}
+      />
+    ) : (
+      l[key]
+    );
   const columns: TableColumn<EditLine>[] = [
     {
       id: "description",
@@ -71,38 +84,8 @@ export function QuoteLinesTable({
         );
       },
     },
-    {
-      id: "unitPrice",
-      header: "Unit $",
-      cell: (l, i) =>
-        editable ? (
-          <input
-            aria-label={`Unit price of line ${i + 1}`}
-            inputMode="decimal"
-            className="w-24 rounded border border-basalt-300 px-2 py-1"
-            value={l.unitPrice}
-            onChange={(e) => onChange(i, { unitPrice: e.target.value })}
-          />
-        ) : (
-          l.unitPrice
-        ),
-    },
-    {
-      id: "discount",
-      header: "Discount $",
-      cell: (l, i) =>
-        editable ? (
-          <input
-            aria-label={`Discount of line ${i + 1}`}
-            inputMode="decimal"
-            className="w-20 rounded border border-basalt-300 px-2 py-1"
-            value={l.discount}
-            onChange={(e) => onChange(i, { discount: e.target.value })}
-          />
-        ) : (
-          l.discount
-        ),
-    },
+    { id: "unitPrice", header: "Unit $", cell: (l, i) => dollarsCell(l, i, "unitPrice", "Unit price", "w-24") },
+    { id: "discount", header: "Discount $", cell: (l, i) => dollarsCell(l, i, "discount", "Discount", "w-20") },
     {
       id: "taxable",
       header: "Tax",

@@ -4,10 +4,11 @@ import { useQuery } from "@tanstack/react-query";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { SetupFields } from "@/components/setup/SetupFields";
-import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
+import { FailureRegion } from "@/components/ui/FailureRegion";
 import { Card } from "@/components/ui/Card";
 import { TextField } from "@/components/ui/TextField";
+import { fieldBinder } from "@/components/ui/fieldProps";
 import { api, applyFieldErrors } from "@/lib/platform/client/api";
 import { queryKeys } from "@/lib/platform/query/keys";
 import { setupFieldNames } from "@/lib/setup/fields";
@@ -33,9 +34,9 @@ export function VehicleStep(props: {
     resolver: zodResolver(counterVehicleSchema),
     defaultValues: { description: "", boltPattern: "", hubBoreMm: "", currentSetup: EMPTY_SETUP_FORM, axleRatio: "" },
   });
-  const { register, handleSubmit, setError, formState, reset } = form;
+  const { handleSubmit, setError, formState, reset } = form;
   const [failure, setFailure] = useState<string | null>(null);
-  const e = formState.errors;
+  const field = fieldBinder(form);
   const onFind = handleSubmit(async (v) => {
     setFailure(null);
     try {
@@ -76,17 +77,14 @@ export function VehicleStep(props: {
         </div>
       )}
       <form onSubmit={onFind} onChange={edited} noValidate className="mt-3 grid gap-3 sm:grid-cols-3">
-        <div aria-live="assertive" className="sm:col-span-3">
-          {failure && <Alert tone="error">{failure}</Alert>}
-        </div>
-        <TextField label="Vehicle" hint="e.g. 2016 half-ton pickup" {...register("description")} error={e.description?.message} />
-        <TextField label="Bolt pattern" hint="e.g. 6x5.5 or 6x139.7" {...register("boltPattern")} error={e.boltPattern?.message} />
+        <FailureRegion message={failure} className="sm:col-span-3" />
+        <TextField label="Vehicle" hint="e.g. 2016 half-ton pickup" {...field("description")} />
+        <TextField label="Bolt pattern" hint="e.g. 6x5.5 or 6x139.7" {...field("boltPattern")} />
         <TextField
           label="Hub bore (mm)"
           inputMode="decimal"
           hint="Optional; each wheel's centre bore is checked against it"
-          {...register("hubBoreMm")}
-          error={e.hubBoreMm?.message}
+          {...field("hubBoreMm")}
         />
         <div className="sm:col-span-3">
           <SetupFields form={form} name="currentSetup" legend="Tires and wheels on it now" spacer={false} />
@@ -95,8 +93,7 @@ export function VehicleStep(props: {
           label="Axle ratio (optional)"
           inputMode="decimal"
           hint="For the regear suggestion; 3.73 assumed if empty"
-          {...register("axleRatio")}
-          error={e.axleRatio?.message}
+          {...field("axleRatio")}
         />
         <label className="flex items-center gap-2 self-center text-sm sm:col-span-3">
           <input
