@@ -5,6 +5,7 @@
  */
 import type { PublicUser, Role } from "@/lib/platform/db/types";
 import { rowTimes } from "@/lib/platform/http/isoDates";
+import { SIGN_UP_TTL_HOURS } from "./signUpMails";
 
 export interface User {
   id: string;
@@ -34,6 +35,29 @@ export function userDto(u: PublicUser): User {
     role: u.role,
     shopId: u.shop_id,
     ...rowTimes(u),
+  };
+}
+
+/** What the sign-up route answers, the same for a new address and one that has an account. */
+export interface SignUpAnswer {
+  email: string;
+  title: string;
+  message: string;
+}
+
+/**
+ * @example
+ * signUpAnswer(" ada@example.test ");
+ * // { email: "ada@example.test", title: "Check your e-mail to finish signing up", message: "We sent a message to ada@example.test. …" }
+ */
+export function signUpAnswer(email: string): SignUpAnswer {
+  const address = email.trim();
+  return {
+    email: address,
+    title: "Check your e-mail to finish signing up",
+    message:
+      `We sent a message to ${address}. Open the link in it within ${SIGN_UP_TTL_HOURS} hours. ` +
+      "If nothing arrives within a few minutes, look in the spam folder, or sign up again a little later.",
   };
 }
 

@@ -25,6 +25,18 @@ export const signUpSchema = z.object({
 });
 export type SignUpInput = z.infer<typeof signUpSchema>;
 
+/** The confirmation page of a sign-up: the link's token and the password chosen on the sign-up form. */
+export const confirmSignUpSchema = z.object({
+  token: z
+    .string({ error: "This sign-up link is not valid. Sign up again." })
+    .regex(LINK_TOKEN_RE, "This sign-up link is not valid. Sign up again."),
+  password: z
+    .string({ error: "Enter the password you chose when signing up." })
+    .min(1, "Enter the password you chose when signing up.")
+    .max(200, "Use at most 200 characters."),
+});
+export type ConfirmSignUpInput = z.infer<typeof confirmSignUpSchema>;
+
 export const signInSchema = z.object({
   email: emailField,
   password: z.string({ error: "Enter your password." }).min(1, "Enter your password.").max(200, "Use at most 200 characters."),

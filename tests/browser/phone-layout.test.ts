@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { DEFAULT_INPUT } from "@/lib/comparisons/schema";
 import { launch, seriousViolations, shot, signInAs } from "./support/browser";
 import { DEMO, DEMO_PASSWORD, call } from "./support/http";
+import { createAccount } from "./support/signUp";
 
 /**
  * Phone width (390 px): the admin users table and the saved-comparisons list stay inside the
@@ -38,11 +39,7 @@ async function allInside(p: Page, selector: string): Promise<string[]> {
 
 describe("phone-width layouts in Chromium", () => {
   it("admin users: every row's role, shop and Save are on the screen, a one-word name included", async () => {
-    const signup = await call("anonymous", "POST", "/api/account/signup", {
-      name: LONG,
-      email: `longname.${stamp}@example.test`,
-      password: "a long enough password",
-    });
+    const signup = await createAccount(LONG, `longname.${stamp}@example.test`, "a long enough password");
     expect(signup.status).toBe(201);
     await signInAs(page, DEMO.admin, DEMO_PASSWORD);
     await page.goto("/admin/users");

@@ -16,6 +16,13 @@ vi.mock("@/lib/platform/mail", () => ({
   },
   appOrigin: () => "http://127.0.0.1:3000",
 }));
+// Sign-up mail is queued in the sign-up's transaction; stored here too.
+vi.mock("@/lib/platform/mail/transactional", () => ({
+  queueMailIn: async (_trx: unknown, m: { to: string; text: string }) => {
+    sent.push(m);
+    return "job-id";
+  },
+}));
 
 const db = testDb();
 beforeAll(() => rebuild(db));
@@ -27,6 +34,7 @@ afterAll(async () => {
 const signup = (await import("@/app/api/account/signup/route")).POST;
 const forgot = (await import("@/app/api/account/password/forgot/route")).POST;
 const reset = (await import("@/app/api/account/password/reset/route")).POST;
+const confirm = (await import("@/app/api/account/signup/confirm/route")).POST;
 const ctx = { params: Promise.resolve({}) };
 
 function post(path: string, body: string | object, headers: Record<string, string> = {}) {
@@ -38,11 +46,14 @@ function post(path: string, body: string | object, headers: Record<string, strin
 }
 
 describe("sign-up route", () => {
-  it("creates an account (201) with a hashed password", async () => {
-    const res = await signup(
+  it("creates an account (201) from the mailed link, with a hashed password", async () => {
+    sent.length = 0;
+    await signup(
       post("/api/account/signup", { name: "Wren Ostrander", email: "wren@example.test", password: "correct horse battery" }),
       ctx,
     );
+    const token = /token=([A-Za-z0-9_-]{43})/.exec(sent[0]!.text)?.[1];
+    const res = await confirm(post("/api/account/signup/confirm", { token, password: "correct horse battery" }), ctx);
     expect(res.status).toBe(201);
     const row = await db("users").where({ email: "wren@example.test" }).first();
     expect(row.password_hash).toMatch(/^\$2[aby]\$/);
@@ -50,10 +61,10 @@ describe("sign-up route", () => {
   });
 
   it("answers the new account in API shape: no hash, no snake_case, ISO dates", async () => {
-    const res = await signup(
-      post("/api/account/signup", { name: "Ines Marlow", email: "ines@example.test", password: "correct horse battery" }),
-      ctx,
-    );
+    sent.length = 0;
+    await signup(post("/api/account/signup", { name: "Ines Marlow", email: "ines@example.test", password: "correct horse battery" }), ctx);
+    const token = /token=([A-Za-z0-9_-]{43})/.exec(sent[0]!.text)?.[1];
+    const res = await confirm(post("/api/account/signup/confirm", { token, password: "correct horse battery" }), ctx);
     expect(res.status).toBe(201);
     const body = await res.json();
     expect(internalKeys(body)).toEqual([]);
@@ -81,13 +92,15 @@ describe("sign-up route", () => {
     expect(await db("users").count()).toEqual(before);
   });
 
-  it("refuses a duplicate e-mail with a field error on email", async () => {
+  it("answers a taken e-mail as a new one and leaves the account as it was", async () => {
+    const before = await db("users").where({ email: "wren@example.test" }).first();
     const res = await signup(
       post("/api/account/signup", { name: "Again", email: "WREN@example.test", password: "another long password" }),
       ctx,
     );
-    expect(res.status).toBe(422);
-    expect((await res.json()).fieldErrors.email[0]).toMatch(/already exists/);
+    expect(res.status).toBe(202);
+    expect((await res.json()).title).toBe("Check your e-mail to finish signing up");
+    expect(await db("users").where({ email: "wren@example.test" }).first()).toEqual(before);
   });
 
   it("answers 400 to malformed JSON and 413 to an oversized body — never 500", async () => {

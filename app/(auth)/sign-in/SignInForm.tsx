@@ -4,10 +4,10 @@ import { signIn } from "next-auth/react";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
-import { Alert } from "@/components/ui/Alert";
-import { Button } from "@/components/ui/Button";
 import { TextField } from "@/components/ui/TextField";
 import { type SignInInput, signInSchema } from "@/lib/accounts/schema";
+import { AuthForm } from "../AuthForm";
+import { PasswordField } from "../PasswordField";
 
 export function SignInForm({ callbackUrl, notice }: { callbackUrl: string; notice?: string }) {
   const router = useRouter();
@@ -26,20 +26,9 @@ export function SignInForm({ callbackUrl, notice }: { callbackUrl: string; notic
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="mt-5 flex flex-col gap-3">
-      {notice && <Alert tone="success">{notice}</Alert>}
-      <div aria-live="assertive">{failure && <Alert tone="error">{failure}</Alert>}</div>
+    <AuthForm onSubmit={onSubmit} failure={failure} pending={formState.isSubmitting} submit="Sign in" notice={notice}>
       <TextField label="E-mail" type="email" autoComplete="email" {...register("email")} error={formState.errors.email?.message} />
-      <TextField
-        label="Password"
-        type="password"
-        autoComplete="current-password"
-        {...register("password")}
-        error={formState.errors.password?.message}
-      />
-      <Button type="submit" pending={formState.isSubmitting}>
-        Sign in
-      </Button>
-    </form>
+      <PasswordField {...register("password")} error={formState.errors.password?.message} />
+    </AuthForm>
   );
 }

@@ -25,7 +25,9 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
             ? "Your password was changed. Sign in with the new one."
             : sp.ended === "1"
               ? "You were signed out on every device. Sign in again here."
-              : undefined
+              : sp.confirmed === "1"
+                ? "Your account is ready. Sign in with the password you chose."
+                : undefined
         }
       />
       <p className="mt-4 text-sm">

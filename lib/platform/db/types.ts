@@ -34,6 +34,17 @@ export interface PasswordResetRow {
   created_at: Date;
 }
 
+/** A sign-up waiting for its e-mail confirmation (lib/accounts/signUpQueries.ts). */
+export interface PendingSignUpRow {
+  id: string;
+  email: string;
+  name: string;
+  password_hash: string;
+  token_hash: string;
+  created_at: Date;
+  expires_at: Date;
+}
+
 /* ---- shop counter (shops settings, staff invitations, catalog, customers, quotes, payments) ---- */
 
 export interface ShopSettingsRow extends ShopRow {

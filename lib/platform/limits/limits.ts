@@ -12,11 +12,19 @@ const DAY = 24 * HOUR;
 export const RATE_LIMITS = {
   /** Sign-ups per client address. */
   signUp: { name: "signup_addr", points: 20, durationSec: HOUR },
+  /** Sign-up confirmations per client address (each checks a password against a pending sign-up). */
+  signUpConfirm: { name: "signup_confirm_addr", points: 20, durationSec: HOUR },
   /** Reset requests per client address (any account, existing or not): over it → 429. */
   forgotPerAddress: { name: "forgot_addr", points: 20, durationSec: HOUR },
   /** Reset mails per account: over either → the same answer, no mail (nothing to discover). */
   forgotMailSpacing: { name: "forgot_acct_2min", points: 1, durationSec: 2 * MIN },
   forgotMailPerDay: { name: "forgot_acct_day", points: 5, durationSec: DAY },
+  /**
+   * Sign-up mails (a confirmation link, or the notice to an address that has an account) per
+   * address: the same rule with their own count, so a sign-up does not hold back a reset mail.
+   */
+  signUpMailSpacing: { name: "signup_mail_2min", points: 1, durationSec: 2 * MIN },
+  signUpMailPerDay: { name: "signup_mail_day", points: 5, durationSec: DAY },
   /** Staff invitations (each sends a mail) per shop. */
   staffInvites: { name: "invite_shop", points: 20, durationSec: HOUR },
   /** Public quote actions per link and per client address (paying opens a checkout session). */

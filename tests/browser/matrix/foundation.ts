@@ -32,6 +32,14 @@ export const cases: MatrixCase[] = [
     note: "public; invalid input gives field errors for everyone",
   },
   {
+    route: "/api/account/signup/confirm",
+    method: "POST",
+    path: "/api/account/signup/confirm",
+    body: { token: "x".repeat(43), password: "long enough pass" },
+    expect: publicRoute(422),
+    note: "public; an unknown link is a field error on token for everyone",
+  },
+  {
     route: "/api/account/password/forgot",
     method: "POST",
     path: "/api/account/password/forgot",

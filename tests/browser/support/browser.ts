@@ -65,16 +65,6 @@ export async function expectAxeClean(page: Page, name: string): Promise<void> {
   expect(await seriousViolations(page), `axe on ${page.url()}`).toEqual([]);
 }
 
-/** Creates a member account through the sign-up form and waits for their account page. */
-export async function signUpAs(page: Page, name: string, email: string, password: string): Promise<void> {
-  await page.goto("/sign-up");
-  await page.getByLabel("Name").fill(name);
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password").fill(password);
-  await page.getByRole("button", { name: "Create account" }).click();
-  await page.waitForURL(/\/account/);
-}
-
 /**
  * Pays on the fake payment provider's page with the card it takes (scripts/services/fake-pay.ts) and waits for the
  * public quote page it returns to.

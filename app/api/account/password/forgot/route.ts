@@ -5,6 +5,7 @@ import { afterResponse } from "@/lib/platform/http/afterResponse";
 import { RATE_LIMITS } from "@/lib/platform/limits/limits";
 import { RESET_TTL_MINUTES, passwordResetQueries } from "@/lib/accounts/passwordResetQueries";
 import { rateLimitQueries } from "@/lib/platform/limits/rateLimit";
+import { withinAccountMailLimits } from "@/lib/accounts/mailLimits";
 import { userQueries } from "@/lib/accounts/queries";
 import { forgotPasswordSchema } from "@/lib/accounts/schema";
 import { escapeHtml } from "@/lib/platform/text";
@@ -29,10 +30,9 @@ export const POST = route({ access: "public", body: forgotPasswordSchema }, asyn
   return ANSWER;
 });
 
-/** At most one mail per account every 2 minutes and 5 a day (a flood would bury the real one). */
+/** At most one account mail per address every 2 minutes and 5 a day (a flood would bury the real one). */
 async function mailResetLink(email: string): Promise<void> {
-  if (!(await rateLimitQueries.consumeQuietly(RATE_LIMITS.forgotMailSpacing, email))) return;
-  if (!(await rateLimitQueries.consumeQuietly(RATE_LIMITS.forgotMailPerDay, email))) return;
+  if (!(await withinAccountMailLimits("reset", email))) return;
   const user = await userQueries.findUserByEmail(email);
   if (!user) return;
   const token = await passwordResetQueries.issueResetToken(user.id);
