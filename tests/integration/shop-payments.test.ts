@@ -10,7 +10,9 @@ import { SHOP_A, U, VEHICLE, item, seedShops } from "./support/shopFixture";
 const session = vi.hoisted(() => ({ current: null as unknown }));
 vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
 const sent = vi.hoisted(() => [] as { to: string; text: string }[]);
-vi.mock("@/lib/platform/mail", () => ({
+// Receipts are queued in the webhook's transaction (queueMailIn), through the real module's toQueued.
+vi.mock("@/lib/platform/mail", async (original) => ({
+  ...(await original<object>()),
   queueMail: async (m: { to: string; text: string }) => void sent.push(m),
   appOrigin: () => "http://127.0.0.1:3000",
 }));
@@ -65,6 +67,7 @@ beforeAll(async () => {
 });
 afterAll(async () => {
   await pay.close();
+  await (await import("./support/jobs")).stopBoss();
   await new Promise((r) => forwarder.close(r));
   await db.destroy();
   const { db: appDb } = await import("@/lib/platform/db");
