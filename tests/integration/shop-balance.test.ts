@@ -1,12 +1,11 @@
-import { createServer } from "node:http";
 import { randomBytes } from "node:crypto";
-import { NextRequest } from "next/server";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { signPayload, startFakePay } from "@/scripts/services/fake-pay";
 import { rebuild, testDb } from "./support/db";
 import { startTestBoss, stopBoss } from "./support/jobs";
 import { ctx, req, sessionOf } from "./support/requests";
 import { SHOP_A, U, VEHICLE, item, seedShops } from "./support/shopFixture";
+import { postWebhook as post, startWebhookForwarder } from "./support/webhookForwarder";
 import { bodyFor } from "./support/workOrderSteps";
 
 /*
@@ -44,27 +43,8 @@ const { bookInstall, cancelInstall, slotsForQuote } = await import("@/lib/shop/b
 const { requiredSteps } = await import("@/lib/shop/workOrders/api");
 const { db: appDb } = await import("@/lib/platform/db");
 
-/** The fake's webhooks go through the route handler; what each answered is kept. */
-const delivered: { body: string; signature: string; status: number; answer: { outcome?: string; error?: string } }[] = [];
-const postWebhook = async (body: string, signature: string) => {
-  const out = await webhook(
-    new NextRequest("http://127.0.0.1:3000/api/payments/webhook", { method: "POST", body, headers: { "stripe-signature": signature } }),
-    ctx(),
-  );
-  return { status: out.status, answer: await out.json() };
-};
-const forwarder = createServer((r, res) => {
-  const chunks: Buffer[] = [];
-  r.on("data", (c: Buffer) => chunks.push(c));
-  r.on("end", async () => {
-    const body = Buffer.concat(chunks).toString("utf8");
-    const signature = String(r.headers["stripe-signature"] ?? "");
-    const { status, answer } = await postWebhook(body, signature);
-    delivered.push({ body, signature, status, answer });
-    res.writeHead(status, { "Content-Type": "application/json" });
-    res.end(JSON.stringify(answer));
-  });
-});
+let forwarder: Awaited<ReturnType<typeof startWebhookForwarder>>;
+const postWebhook = (body: string, signature: string) => post(webhook, body, signature);
 let pay: Awaited<ReturnType<typeof startFakePay>>;
 
 /** Every mail job queued so far, oldest first. */
@@ -82,14 +62,14 @@ async function until(check: () => boolean, what: string) {
 
 /** Pays a checkout page of the fake with the test card that pays; waits for its webhook. */
 async function payOnPage(url: string) {
-  const before = delivered.length;
+  const before = forwarder.delivered.length;
   const res = await fetch(url, {
     method: "POST",
     body: new URLSearchParams({ card: "4242 4242 4242 4242", exp: "12/30", cvc: "123" }),
     redirect: "manual",
   });
   expect(res.status).toBe(303);
-  await until(() => delivered.length > before, "the payment webhook");
+  await until(() => forwarder.delivered.length > before, "the payment webhook");
   return res.headers.get("location");
 }
 
@@ -168,18 +148,13 @@ beforeAll(async () => {
       bay_kind: s.service_type === "alignment" ? "alignment_rack" : "lift_bay",
     })),
   );
-  await new Promise<void>((r) => forwarder.listen(0, "127.0.0.1", () => r()));
-  pay = await startFakePay({
-    port: 0,
-    secretKey: process.env.STRIPE_SECRET_KEY!,
-    webhookSecret: SECRET,
-    webhookUrl: `http://127.0.0.1:${(forwarder.address() as { port: number }).port}/`,
-  });
+  forwarder = await startWebhookForwarder(webhook);
+  pay = await startFakePay({ port: 0, secretKey: process.env.STRIPE_SECRET_KEY!, webhookSecret: SECRET, webhookUrl: forwarder.url });
   process.env.STRIPE_API_PORT = String(pay.port);
 });
 afterAll(async () => {
   await pay.close();
-  await new Promise((r) => forwarder.close(r));
+  await forwarder.close();
   await stopBoss();
   await db.destroy();
   await appDb.destroy();
@@ -250,7 +225,7 @@ describe("completion mail and the balance through the payment SDK", () => {
     expect(await (await fetch(second.url)).text()).toContain("$3,230.86");
     const back = await payOnPage(second.url);
     expect(back).toBe(`http://127.0.0.1:3000/q/${link}?paid=balance`);
-    expect(delivered.at(-1)).toMatchObject({ status: 200, answer: { outcome: "balance_paid" } });
+    expect(forwarder.delivered.at(-1)).toMatchObject({ status: 200, answer: { outcome: "balance_paid" } });
     const receipt = (await mailsTo(q.email)).at(-1)!;
     expect(receipt.subject).toMatch(/^Receipt: \$3,230\.86 balance for quote Q-\d+ at Shop A$/);
     expect(receipt.text).toContain("Your invoice is paid in full.");
@@ -260,7 +235,7 @@ describe("completion mail and the balance through the payment SDK", () => {
   });
 
   it("a replayed balance webhook changes nothing", async () => {
-    const last = delivered.at(-1)!;
+    const last = forwarder.delivered.at(-1)!;
     const mailsBefore = (await mails()).length;
     for (let i = 0; i < 2; i++)
       expect(await postWebhook(last.body, last.signature)).toMatchObject({ status: 200, answer: { outcome: "duplicate" } });
@@ -362,20 +337,20 @@ describe("refunding a deposit on a cancelled booking", () => {
 
   it("the owner refunds part through the SDK; the provider's signed webhook marks it succeeded; a replay changes nothing", async () => {
     as(U.ownerA);
-    const before = delivered.length;
+    const before = forwarder.delivered.length;
     const r = await refund(q.id, { amount: "400.00" });
     expect(r.status).toBe(202);
     const pending = (await r.json()).payments;
     expect(pending.refunds).toEqual([expect.objectContaining({ amountCents: 40000, requestedBy: "Olive Owner" })]);
     expect(pending.invoice.refundableCents).toBe(107696 - 40000);
-    await until(() => delivered.length > before, "the refund webhook");
-    expect(delivered.at(-1)).toMatchObject({ status: 200, answer: { outcome: "refund_succeeded" } });
+    await until(() => forwarder.delivered.length > before, "the refund webhook");
+    expect(forwarder.delivered.at(-1)).toMatchObject({ status: 200, answer: { outcome: "refund_succeeded" } });
     const row = await db("payment_refunds").where({ quote_id: q.id }).first();
     expect(row).toMatchObject({ status: "succeeded", amount_cents: 40000, requested_by_user_id: U.ownerA.id });
     expect(row.provider_refund_id).toMatch(/^re_/);
     expect((await mailsTo(q.email)).at(-1)!.subject).toMatch(/^Refund: \$400\.00 of your deposit for quote Q-\d+ at Shop A$/);
     const mailsBefore = (await mails()).length;
-    const last = delivered.at(-1)!;
+    const last = forwarder.delivered.at(-1)!;
     expect(await postWebhook(last.body, last.signature)).toMatchObject({ status: 200, answer: { outcome: "duplicate" } });
     expect((await mails()).length).toBe(mailsBefore);
   });
@@ -383,9 +358,9 @@ describe("refunding a deposit on a cancelled booking", () => {
   it("the rest can be refunded, then no more: 1,076.96 − 400.00 = 676.96", async () => {
     as(U.ownerA);
     expect((await refund(q.id, { amount: "676.97" })).status).toBe(422);
-    const before = delivered.length;
+    const before = forwarder.delivered.length;
     expect((await refund(q.id, { amount: "676.96" })).status).toBe(202);
-    await until(() => delivered.length > before, "the refund webhook");
+    await until(() => forwarder.delivered.length > before, "the refund webhook");
     const r = await refund(q.id, { amount: "0.01" });
     expect(r.status).toBe(409);
     expect((await r.json()).error).toBe("The deposit has been refunded in full.");
@@ -437,7 +412,10 @@ describe("refunding a deposit on a cancelled booking", () => {
       body: new URLSearchParams({ payment_intent: payment.provider_payment_intent }),
     });
     expect(res.status).toBe(200);
-    await until(() => delivered.at(-1)?.answer.error !== undefined || delivered.at(-1)?.status !== 200, "the outside refund's webhook");
+    await until(
+      () => forwarder.delivered.at(-1)?.answer.error !== undefined || forwarder.delivered.at(-1)?.status !== 200,
+      "the outside refund's webhook",
+    );
     const rows = await count("payment_refunds");
     as(U.ownerA);
     const r = await refund(other.id, { amount: "10.00" });

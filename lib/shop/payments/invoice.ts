@@ -68,3 +68,14 @@ export function overLimit(amountCents: number, limitCents: number, label: string
   if (amountCents <= limitCents) return null;
   return `${label}: ${formatUsd(amountCents)} is more than ${what}, ${formatUsd(limitCents)}.`;
 }
+
+/** The invoice in lines: total − deposit paid = balance due, and what is still to pay. */
+export function invoiceLines(i: InvoiceFigures): string[] {
+  return [
+    `Quote total: ${formatUsd(i.totalCents)}`,
+    `Deposit paid: −${formatUsd(i.depositPaidCents)}`,
+    `Balance due: ${formatUsd(i.balanceDueCents)}`,
+    ...(i.balancePaidCents > 0 ? [`Paid since: −${formatUsd(i.balancePaidCents)}`] : []),
+    i.paid ? "Status: Paid" : `Still to pay: ${formatUsd(i.outstandingCents)}`,
+  ];
+}

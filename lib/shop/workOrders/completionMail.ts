@@ -8,7 +8,7 @@
 import type { OutgoingMail } from "@/lib/platform/mail";
 import { escapeHtml } from "@/lib/platform/text";
 import { formatInstant } from "@/lib/shop/bookings/zoned";
-import type { InvoiceFigures } from "@/lib/shop/payments/invoice";
+import { type InvoiceFigures, invoiceLines } from "@/lib/shop/payments/invoice";
 import { formatUsd } from "@/lib/shop/quotes/money";
 import { type WorkOrder, requiredSteps } from "./api";
 import { signedText } from "./signedText";
@@ -52,17 +52,6 @@ export interface CompletionFacts {
   invoice: InvoiceFigures;
   /** The customer's quote page, where the balance is paid. */
   payUrl: string;
-}
-
-/** The invoice in lines: total − deposit paid = balance due, and what is still to pay. */
-export function invoiceLines(i: InvoiceFigures): string[] {
-  return [
-    `Quote total: ${formatUsd(i.totalCents)}`,
-    `Deposit paid: −${formatUsd(i.depositPaidCents)}`,
-    `Balance due: ${formatUsd(i.balanceDueCents)}`,
-    ...(i.balancePaidCents > 0 ? [`Paid since: −${formatUsd(i.balancePaidCents)}`] : []),
-    i.paid ? "Status: Paid" : `Still to pay: ${formatUsd(i.outstandingCents)}`,
-  ];
 }
 
 const dayOf = (d: Date, timeZone: string) =>
