@@ -27,8 +27,6 @@ export const counterPaymentSchema = z.object({
   amount: moneyField(PAYMENT_FIELD_LABEL.amount),
   method: z.enum(COUNTER_METHODS, { error: `${PAYMENT_FIELD_LABEL.method}: pick cash or card.` }),
 });
-export type CounterPaymentInput = z.input<typeof counterPaymentSchema>;
 
 /** A refund of the deposit through the provider (owner only). */
 export const refundSchema = z.object({ amount: moneyField(PAYMENT_FIELD_LABEL.refundAmount) });
-export type RefundInput = z.input<typeof refundSchema>;
