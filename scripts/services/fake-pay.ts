@@ -4,6 +4,10 @@
  *   GET  /pay/:id                the hosted pay page with a test card form
  *   POST /pay/:id                pay: marks the session paid, sends a signed `checkout.session.completed`
  *                                event to the webhook URL, then sends the browser to the success URL
+ *   POST /v1/checkout/sessions/:id/expire   expire an unpaid session (its page then takes no payment)
+ *   POST /v1/refunds             refund part or all of a paid session's payment (`payment_intent`, `amount`);
+ *                                answers the refund as pending, then sends a signed `refund.updated` event
+ *                                with the refund's status "succeeded"
  * The webhook is signed the way the provider documents (header `Stripe-Signature: t=…,v1=…`,
  * v1 = HMAC-SHA256 of "t.payload" with the endpoint secret), so the SDK's constructEvent verifies it.
  *
@@ -21,8 +25,10 @@ interface Session {
   amount_subtotal: number;
   currency: string;
   mode: string;
-  status: "open" | "complete";
+  status: "open" | "complete" | "expired";
   payment_status: "unpaid" | "paid";
+  /** Set when paid: what a refund names. */
+  payment_intent: string | null;
   client_reference_id: string | null;
   customer_email: string | null;
   metadata: Record<string, string>;
@@ -32,6 +38,17 @@ interface Session {
   created: number;
   livemode: false;
   description: string;
+}
+
+interface Refund {
+  id: string;
+  object: "refund";
+  amount: number;
+  currency: string;
+  payment_intent: string;
+  metadata: Record<string, string>;
+  status: "pending" | "succeeded";
+  created: number;
 }
 
 export interface FakePayOptions {
@@ -130,17 +147,18 @@ export function startFakePay(
   const host = opts.host ?? "127.0.0.1";
   let base = "";
 
-  const deliver = async (s: Session): Promise<boolean> => {
+  const refunds = new Map<string, Refund>();
+  const deliver = async (type: string, object: object): Promise<boolean> => {
     const event = {
       id: `evt_${randomBytes(12).toString("hex")}`,
       object: "event",
       api_version: "2025-01-01",
       created: Math.floor(Date.now() / 1000),
-      type: "checkout.session.completed",
+      type,
       livemode: false,
       pending_webhooks: 1,
       request: { id: null, idempotency_key: null },
-      data: { object: s },
+      data: { object },
     };
     const payload = JSON.stringify(event);
     for (let attempt = 0; attempt < 4; attempt++) {
@@ -211,6 +229,7 @@ export function startFakePay(
         mode: "payment",
         status: "open",
         payment_status: "unpaid",
+        payment_intent: null,
         client_reference_id: f.client_reference_id ?? null,
         customer_email: f.customer_email ?? null,
         metadata: f.metadata ?? {},
@@ -223,6 +242,44 @@ export function startFakePay(
       };
       sessions.set(id, s);
       return json(200, s);
+    }
+    if (req.method === "POST" && parts.length === 5 && parts[1] === "checkout" && parts[2] === "sessions" && parts[4] === "expire") {
+      const s = sessions.get(parts[3]!);
+      if (!s) return fail(404, `No such checkout.session: '${parts[3]}'`);
+      if (s.status !== "open") return fail(400, `Only open checkout sessions can be expired; this one is ${s.status}.`);
+      s.status = "expired";
+      return json(200, s);
+    }
+    if (req.method === "POST" && parts.join("/") === "v1/refunds") {
+      const f = parseForm(await readBody(req)) as { payment_intent?: string; amount?: string; metadata?: Record<string, string> };
+      const paid = [...sessions.values()].find((x) => x.payment_intent && x.payment_intent === f.payment_intent);
+      if (!paid) return fail(404, `No such payment_intent: '${f.payment_intent ?? ""}'`, "payment_intent");
+      const refunded = [...refunds.values()].filter((r) => r.payment_intent === paid.payment_intent).reduce((n, r) => n + r.amount, 0);
+      const amount = f.amount === undefined ? paid.amount_total - refunded : Number(f.amount);
+      if (!Number.isInteger(amount) || amount < 1) return fail(400, "amount must be a positive integer.", "amount");
+      if (amount > paid.amount_total - refunded)
+        return fail(
+          400,
+          `Refund amount (${amount}) is greater than unrefunded amount on the payment (${paid.amount_total - refunded}).`,
+          "amount",
+        );
+      const refund: Refund = {
+        id: `re_${randomBytes(12).toString("hex")}`,
+        object: "refund",
+        amount,
+        currency: paid.currency,
+        payment_intent: paid.payment_intent!,
+        metadata: f.metadata ?? {},
+        status: "pending",
+        created: Math.floor(Date.now() / 1000),
+      };
+      refunds.set(refund.id, refund);
+      // The provider settles a refund after answering; the webhook tells the app it succeeded.
+      setTimeout(() => {
+        refund.status = "succeeded";
+        void deliver("refund.updated", { ...refund });
+      }, 20);
+      return json(200, refund);
     }
     return fail(404, `Unrecognized request URL (${req.method} /${parts.join("/")}).`);
   };
@@ -239,6 +296,11 @@ export function startFakePay(
       if (parts[0] === "pay" && parts[1]) {
         const s = sessions.get(parts[1]);
         if (!s) return html(404, "<!doctype html><html lang=en><title>Not found</title><p>No such checkout session.</p></html>");
+        if (s.status === "expired")
+          return html(
+            410,
+            "<!doctype html><html lang=en><title>Expired</title><p>This checkout has expired. Go back and start again.</p></html>",
+          );
         if (req.method === "GET") {
           if (s.status === "complete") {
             res.writeHead(303, { Location: s.success_url });
@@ -256,7 +318,8 @@ export function startFakePay(
           if (s.status !== "complete") {
             s.status = "complete";
             s.payment_status = "paid";
-            await deliver(s);
+            s.payment_intent = `pi_${randomBytes(12).toString("hex")}`;
+            await deliver("checkout.session.completed", s);
           }
           res.writeHead(303, { Location: s.success_url });
           return res.end();

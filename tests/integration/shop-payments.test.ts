@@ -1,4 +1,3 @@
-import { createServer } from "node:http";
 import { NextRequest } from "next/server";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { signPayload, startFakePay } from "@/scripts/services/fake-pay";
@@ -6,11 +5,14 @@ import { internalKeys } from "./support/apiKeys";
 import { rebuild, testDb } from "./support/db";
 import { ctx, req, sessionOf } from "./support/requests";
 import { SHOP_A, U, VEHICLE, item, seedShops } from "./support/shopFixture";
+import { startWebhookForwarder } from "./support/webhookForwarder";
 
 const session = vi.hoisted(() => ({ current: null as unknown }));
 vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
 const sent = vi.hoisted(() => [] as { to: string; text: string }[]);
-vi.mock("@/lib/platform/mail", () => ({
+// Receipts are queued in the webhook's transaction (queueMailIn), through the real module's toQueued.
+vi.mock("@/lib/platform/mail", async (original) => ({
+  ...(await original<object>()),
   queueMail: async (m: { to: string; text: string }) => void sent.push(m),
   appOrigin: () => "http://127.0.0.1:3000",
 }));
@@ -30,42 +32,26 @@ const sendRoute = (await import("@/app/api/shop/quotes/[id]/send/route")).POST;
 const customers = await import("@/app/api/shop/customers/route");
 const { findPublicQuoteView } = await import("@/lib/shop/quotes/send");
 
-/** Forwards the fake's webhook calls into the route handler, keeping what was delivered. */
-const delivered: { body: string; signature: string; status: number; answer: unknown }[] = [];
-const forwarder = createServer((r, res) => {
-  const chunks: Buffer[] = [];
-  r.on("data", (c: Buffer) => chunks.push(c));
-  r.on("end", async () => {
-    const body = Buffer.concat(chunks).toString("utf8");
-    const signature = String(r.headers["stripe-signature"] ?? "");
-    const out = await webhook(
-      new NextRequest("http://127.0.0.1:3000/api/payments/webhook", { method: "POST", body, headers: { "stripe-signature": signature } }),
-      ctx(),
-    );
-    const answer = await out.json();
-    delivered.push({ body, signature, status: out.status, answer });
-    res.writeHead(out.status, { "Content-Type": "application/json" });
-    res.end(JSON.stringify(answer));
-  });
-});
+let forwarder: Awaited<ReturnType<typeof startWebhookForwarder>>;
+const delivered = () => forwarder.delivered;
 let pay: Awaited<ReturnType<typeof startFakePay>>;
 
 beforeAll(async () => {
   await rebuild(db);
   await seedShops(db);
-  await new Promise<void>((r) => forwarder.listen(0, "127.0.0.1", () => r()));
-  const fwd = forwarder.address() as { port: number };
+  forwarder = await startWebhookForwarder(webhook);
   pay = await startFakePay({
     port: 0,
     secretKey: process.env.STRIPE_SECRET_KEY!,
     webhookSecret: SECRET,
-    webhookUrl: `http://127.0.0.1:${fwd.port}/`,
+    webhookUrl: forwarder.url,
   });
   process.env.STRIPE_API_PORT = String(pay.port);
 });
 afterAll(async () => {
   await pay.close();
-  await new Promise((r) => forwarder.close(r));
+  await (await import("./support/jobs")).stopBoss();
+  await forwarder.close();
   await db.destroy();
   const { db: appDb } = await import("@/lib/platform/db");
   await appDb.destroy();
@@ -122,7 +108,7 @@ describe("deposit through the payment SDK and the fake provider", () => {
       redirect: "manual",
     });
     expect(res.status).toBe(402);
-    expect(delivered).toHaveLength(0);
+    expect(delivered()).toHaveLength(0);
     expect((await quoteRow(first.id)).status).toBe("accepted");
   });
 
@@ -141,8 +127,8 @@ describe("deposit through the payment SDK and the fake provider", () => {
     });
     expect(paid.status).toBe(303);
     expect(paid.headers.get("location")).toBe(`http://127.0.0.1:3000/q/${first.token}?paid=1`);
-    expect(delivered).toHaveLength(1);
-    expect(delivered[0]).toMatchObject({ status: 200, answer: { outcome: "deposit_paid" } });
+    expect(delivered()).toHaveLength(1);
+    expect(delivered()[0]).toMatchObject({ status: 200, answer: { outcome: "deposit_paid" } });
     const q = await quoteRow(first.id);
     expect(q.status).toBe("deposit_paid");
     const ev = await db("quote_events").where({ quote_id: first.id }).orderBy("id");
@@ -152,7 +138,7 @@ describe("deposit through the payment SDK and the fake provider", () => {
 
   it("a replayed event changes nothing", async () => {
     const before = await db("quote_events").where({ quote_id: first.id }).count<{ c: string }[]>({ c: "*" });
-    const { body, signature } = delivered[0]!;
+    const { body, signature } = delivered()[0]!;
     for (let i = 0; i < 3; i++) {
       const res = await webhook(
         new NextRequest("http://127.0.0.1:3000/api/payments/webhook", { method: "POST", body, headers: { "stripe-signature": signature } }),

@@ -234,16 +234,44 @@ export interface QuoteEventRow {
   at: Date;
 }
 
+export const PAYMENT_KINDS = ["deposit", "balance"] as const;
+export type PaymentKind = (typeof PAYMENT_KINDS)[number];
+/** How a payment was taken: the provider's hosted page, or at the counter. */
+export const PAYMENT_METHODS = ["provider", "cash", "card"] as const;
+export type PaymentMethod = (typeof PAYMENT_METHODS)[number];
+
 export interface PaymentRow {
   id: string;
   shop_id: string;
   quote_id: string;
-  provider_session_id: string;
+  /** The provider's checkout session; null for a payment taken at the counter. */
+  provider_session_id: string | null;
+  /** The provider's payment, named by its refunds; set when its webhook arrives. */
+  provider_payment_intent: string | null;
+  kind: PaymentKind;
+  method: PaymentMethod;
   amount_cents: number;
   currency: string;
-  status: "open" | "paid";
+  /** "expired": a provider session replaced before it was paid. */
+  status: "open" | "paid" | "expired";
+  recorded_by_user_id: string | null;
+  recorded_by: string;
   created_at: Date;
   paid_at: Date | null;
+}
+
+export interface PaymentRefundRow {
+  id: string;
+  shop_id: string;
+  quote_id: string;
+  payment_id: string;
+  provider_refund_id: string | null;
+  amount_cents: number;
+  status: "pending" | "succeeded";
+  requested_by_user_id: string | null;
+  requested_by: string;
+  created_at: Date;
+  succeeded_at: Date | null;
 }
 
 /* ---- install bookings (lib/shop/bookings) ---- */

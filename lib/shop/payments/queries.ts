@@ -5,22 +5,31 @@ import type { PaymentRow, QuoteRow } from "@/lib/platform/db/types";
 import { InvalidError, UnknownReferenceError } from "@/lib/platform/errors";
 import { transition } from "../quotes/queries";
 import { bindAppDb } from "@/lib/platform/db/bind";
+import { markRefundSucceeded, markSessionPaid } from "./ledgerQueries";
 
-export type WebhookOutcome = "deposit_paid" | "duplicate" | "already_paid" | "paid_but_quote_not_accepted" | "ignored";
+export type WebhookOutcome =
+  | "deposit_paid"
+  | "balance_paid"
+  | "refund_succeeded"
+  | "already_refunded"
+  | "duplicate"
+  | "already_paid"
+  | "paid_but_quote_not_accepted"
+  | "ignored";
+
+type CheckoutSession = Extract<PaymentEvent, { type: "checkout.session.completed" }>["data"]["object"];
 
 /**
  * Applies one verified provider event. Idempotent: the event id is stored in the same
- * transaction as its effect, so a replayed or duplicated event changes nothing. A session the
- * app never created is an UnknownReferenceError, an amount, currency or quote that does not
- * match an InvalidError; nothing is written then.
+ * transaction as its effect, so a replayed or duplicated event changes nothing. A session or
+ * refund the app never created is an UnknownReferenceError, an amount, currency or quote that
+ * does not match an InvalidError; nothing is written then.
  */
 export async function applyPaymentEvent(db: Knex, event: PaymentEvent): Promise<WebhookOutcome> {
-  if (event.type !== "checkout.session.completed") {
+  if (event.type !== "checkout.session.completed" && event.type !== "refund.updated") {
     await db("payment_webhook_events").insert({ event_id: event.id, type: event.type, outcome: "ignored" }).onConflict("event_id").ignore();
     return "ignored";
   }
-  // The schema checked this type's session shape (lib/shop/payments/schema.ts).
-  const session = (event as Extract<PaymentEvent, { type: "checkout.session.completed" }>).data.object;
   return db.transaction(async (trx) => {
     const first = await trx("payment_webhook_events")
       .insert({ event_id: event.id, type: event.type, outcome: "pending" })
@@ -28,29 +37,38 @@ export async function applyPaymentEvent(db: Knex, event: PaymentEvent): Promise<
       .ignore()
       .returning("event_id");
     if (first.length === 0) return "duplicate";
-    const payment = await trx<PaymentRow>("payments").where({ provider_session_id: session.id }).forUpdate().first();
-    if (!payment) throw new UnknownReferenceError("Unknown checkout session.");
-    const quote = await trx<QuoteRow>("quotes").where({ id: payment.quote_id, shop_id: payment.shop_id }).forUpdate().first();
-    if (!quote) throw new UnknownReferenceError("Unknown quote.");
-    if (session.metadata?.quote_id !== quote.id || session.client_reference_id !== quote.id)
-      throw new InvalidError("The event names another quote than its session.");
-    if ((session.currency ?? "").toLowerCase() !== "usd") throw new InvalidError("Deposits are taken in USD.");
-    if (session.amount_total !== payment.amount_cents || payment.amount_cents !== quote.deposit_cents) {
-      throw new InvalidError(`The paid amount ${session.amount_total} does not match the quote's deposit ${quote.deposit_cents}.`);
-    }
-    if (session.payment_status !== "paid") throw new InvalidError("The session is not paid.");
-    let outcome: WebhookOutcome;
-    if (payment.status === "paid") outcome = "already_paid";
-    else {
-      await trx("payments").where({ id: payment.id }).update({ status: "paid", paid_at: trx.fn.now() });
-      if (quote.status === "accepted") {
-        await transition(trx, quote, "deposit_paid", { userId: null, label: "payment provider" }, `checkout ${session.id}`);
-        outcome = "deposit_paid";
-      } else outcome = "paid_but_quote_not_accepted";
-    }
-    await trx("payment_webhook_events").where({ event_id: event.id }).update({ outcome, quote_id: quote.id });
+    // The schema checked each type's object shape (lib/shop/payments/schema.ts).
+    const { outcome, quoteId } =
+      event.type === "refund.updated"
+        ? await markRefundSucceeded(trx, (event as Extract<PaymentEvent, { type: "refund.updated" }>).data.object)
+        : await applyCheckout(trx, (event as Extract<PaymentEvent, { type: "checkout.session.completed" }>).data.object);
+    await trx("payment_webhook_events").where({ event_id: event.id }).update({ outcome, quote_id: quoteId });
     return outcome;
   });
+}
+
+/** A completed checkout session: the deposit (which moves an accepted quote on) or the balance. */
+async function applyCheckout(trx: Knex.Transaction, session: CheckoutSession): Promise<{ outcome: WebhookOutcome; quoteId: string }> {
+  const payment = await trx<PaymentRow>("payments").where({ provider_session_id: session.id }).forUpdate().first();
+  if (!payment) throw new UnknownReferenceError("Unknown checkout session.");
+  const quote = await trx<QuoteRow>("quotes").where({ id: payment.quote_id, shop_id: payment.shop_id }).forUpdate().first();
+  if (!quote) throw new UnknownReferenceError("Unknown quote.");
+  if (session.metadata?.quote_id !== quote.id || session.client_reference_id !== quote.id)
+    throw new InvalidError("The event names another quote than its session.");
+  if ((session.currency ?? "").toLowerCase() !== "usd") throw new InvalidError("Payments are taken in USD.");
+  if (payment.kind === "balance") {
+    if (session.amount_total !== payment.amount_cents) {
+      throw new InvalidError(`The paid amount ${session.amount_total} does not match the balance asked, ${payment.amount_cents}.`);
+    }
+  } else if (session.amount_total !== payment.amount_cents || payment.amount_cents !== quote.deposit_cents) {
+    throw new InvalidError(`The paid amount ${session.amount_total} does not match the quote's deposit ${quote.deposit_cents}.`);
+  }
+  if (session.payment_status !== "paid") throw new InvalidError("The session is not paid.");
+  if ((await markSessionPaid(trx, payment, quote, session)) === "already_paid") return { outcome: "already_paid", quoteId: quote.id };
+  if (payment.kind === "balance") return { outcome: "balance_paid", quoteId: quote.id };
+  if (quote.status !== "accepted") return { outcome: "paid_but_quote_not_accepted", quoteId: quote.id };
+  await transition(trx, quote, "deposit_paid", { userId: null, label: "payment provider" }, `checkout ${session.id}`);
+  return { outcome: "deposit_paid", quoteId: quote.id };
 }
 
 /** Who a deposit is between: the shop's current name and the customer's address ("" when none is on file). */

@@ -18,10 +18,24 @@ const checkoutSession = z.looseObject({
   payment_status: z.string(),
   client_reference_id: z.string().nullable(),
   metadata: z.record(z.string(), z.string()).nullable().optional(),
+  payment_intent: z.string().nullable().optional(),
 });
+
+/** A refund as the provider reports it; `metadata.refund_id` names the app's own refund row. */
+const refund = z.looseObject({
+  id: z.string().min(1).max(255),
+  amount: z.number().int(),
+  currency: z.string(),
+  status: z.string(),
+  payment_intent: z.string().nullable(),
+  metadata: z.record(z.string(), z.string()).nullable().optional(),
+});
+
+const READ_TYPES = ["checkout.session.completed", "refund.updated"];
 
 export const paymentEventSchema = z.union([
   eventBase.extend({ type: z.literal("checkout.session.completed"), data: z.object({ object: checkoutSession }) }),
-  eventBase.extend({ type: z.string().refine((t) => t !== "checkout.session.completed") }),
+  eventBase.extend({ type: z.literal("refund.updated"), data: z.object({ object: refund }) }),
+  eventBase.extend({ type: z.string().refine((t) => !READ_TYPES.includes(t)) }),
 ]);
 export type PaymentEvent = z.infer<typeof paymentEventSchema>;

@@ -11,6 +11,7 @@ import { formatClock, formatInstant } from "@/lib/shop/bookings/zoned";
 import { type Actor, readLines, transition } from "@/lib/shop/quotes/queries";
 import { queueMailIn } from "@/lib/platform/mail/transactional";
 import { type RecheckDue, type WorkOrder, requiredSteps, unsignedSteps, workOrderDto } from "./api";
+import { queueCompletionMail } from "./completionQueries";
 import { recheckMail } from "./recheckMail";
 import type { SignedStep } from "./schema";
 import { POSITION_LABEL, STEP_LABEL, WORK_ORDER_STATUS_LABEL } from "./vocabulary";
@@ -149,8 +150,8 @@ export async function signStep(db: Knex, shopId: string, id: string, signed: Sig
 }
 
 /**
- * booked → in the bay → done. Done needs every step signed; it marks the quote installed and sets
- * the re-check date from the shop's number of days.
+ * booked → in the bay → done. Done needs every step signed; it marks the quote installed, sets
+ * the re-check date from the shop's number of days and queues the completion mail with the invoice.
  */
 export async function moveWorkOrder(
   db: Knex,
@@ -181,6 +182,7 @@ export async function moveWorkOrder(
       await trx("work_orders")
         .where({ id })
         .update({ status: "done", done_at: now, done_by: actor.label, recheck_due_at: due, updated_at: trx.fn.now() });
+      await queueCompletionMail(trx, shopId, id);
     } else if (from === to) {
       throw new ConflictError(`The work order is already “${WORK_ORDER_STATUS_LABEL[to]}”.`);
     } else {

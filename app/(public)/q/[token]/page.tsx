@@ -12,6 +12,8 @@ import { canBook } from "@/lib/shop/bookings/bookable";
 import { bookingQueries } from "@/lib/shop/bookings/queries";
 import { InstallBooking } from "./InstallBooking";
 import { PublicQuoteActions } from "./PublicQuoteActions";
+import { BalancePanel } from "./BalancePanel";
+import { ledgerQueries } from "@/lib/shop/payments/ledgerQueries";
 
 export const metadata: Metadata = { title: "Your quote", robots: { index: false } };
 export const dynamic = "force-dynamic";
@@ -42,6 +44,7 @@ export default async function PublicQuotePage({
   const paidUp = quote.status === "deposit_paid" || quote.status === "installed";
   const bookable = canBook(quote);
   const booking = bookable ? await bookingQueries.liveBooking(quote) : null;
+  const payments = await ledgerQueries.publicPayments(token);
   return (
     <div className="mx-auto flex max-w-4xl flex-col gap-5">
       <header>
@@ -75,6 +78,9 @@ export default async function PublicQuotePage({
         <QuoteDocumentLines document={d} />
         {d.notes && <p className="mt-3 text-sm text-basalt-700">{d.notes}</p>}
       </Card>
+      {(payments.invoiceOpen || payments.payments.length > 0) && (
+        <BalancePanel token={token} payments={payments} justPaid={paid === "balance"} />
+      )}
       {bookable && <InstallBooking token={token} booking={booking} shopName={d.shop.name} />}
       <PublicQuoteActions token={token} status={quote.status} deposit={formatUsd(t.depositCents)} balance={formatUsd(t.balanceCents)} />
       {d.hubChecks.some((c) => c.findings.some((f) => f.level !== "ok")) && (

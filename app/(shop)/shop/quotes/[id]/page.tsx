@@ -10,6 +10,8 @@ import { bookingQueries } from "@/lib/shop/bookings/queries";
 import { workOrderQueries } from "@/lib/shop/workOrders/queries";
 import { CounterBooking } from "./CounterBooking";
 import { OpenWorkOrder } from "./OpenWorkOrder";
+import { PaymentsCard } from "./PaymentsCard";
+import { ledgerQueries } from "@/lib/shop/payments/ledgerQueries";
 import { QuoteEditor } from "./QuoteEditor";
 
 export const metadata: Metadata = { title: "Quote" };
@@ -25,11 +27,15 @@ export default async function QuotePage({ params }: { params: Promise<{ id: stri
     ? await Promise.all([bookingQueries.liveBooking(q), bookingQueries.getSetup(q.shop_id)])
     : [null, null];
   const workOrderId = (await workOrderQueries.findWorkOrderIdOfQuote(q.shop_id, q.id)) ?? null;
+  const payments = await ledgerQueries.quotePayments(quoteScopeOf(caller), q.id);
   return (
     <>
       <QuoteEditor initial={quoteDetailDto(detail)} labourRateCents={shop?.labour_rate_cents ?? 0} />
       {setup && <CounterBooking quoteId={q.id} initial={booking} bays={setup.bays} />}
       {(booking || workOrderId) && <OpenWorkOrder quoteId={q.id} workOrderId={workOrderId} />}
+      {(payments.payments.length > 0 || payments.invoiceOpen) && (
+        <PaymentsCard quoteId={q.id} payments={payments} owner={caller.role === "shop_owner"} />
+      )}
     </>
   );
 }

@@ -1,0 +1,56 @@
+// @vitest-environment jsdom
+import { cleanup, render, screen, waitFor } from "@testing-library/react";
+import userEvent from "@testing-library/user-event";
+import { afterEach, describe, expect, it, vi } from "vitest";
+import { invoiceFigures } from "@/lib/shop/payments/invoice";
+import { BalancePanel } from "./BalancePanel";
+
+afterEach(() => {
+  cleanup();
+  vi.unstubAllGlobals();
+});
+
+const TOKEN = "A".repeat(43);
+const deposit = { kind: "deposit" as const, status: "paid" as const, amountCents: 107696 };
+const entry = {
+  id: "p1",
+  kind: "deposit" as const,
+  method: "provider" as const,
+  amountCents: 107696,
+  paidAt: "2027-03-01T17:00:00Z",
+  recordedBy: "",
+};
+
+describe("BalancePanel", () => {
+  it("offers the balance still owed (4,307.82 − 1,076.96 = 3,230.86) and sends the customer to the provider's page", async () => {
+    const fetch = vi.fn(async () => new Response(JSON.stringify({ url: "http://127.0.0.1:2527/pay/cs_test_x" }), { status: 200 }));
+    vi.stubGlobal("fetch", fetch);
+    const assign = vi.fn();
+    vi.stubGlobal("location", { ...window.location, assign });
+    const payments = {
+      invoice: invoiceFigures(430782, [deposit], []),
+      invoiceOpen: true,
+      refundBlocked: null,
+      payments: [entry],
+      refunds: [],
+    };
+    render(<BalancePanel token={TOKEN} payments={payments} justPaid={false} />);
+    await userEvent.click(screen.getByRole("button", { name: "Pay the $3,230.86 balance" }));
+    await waitFor(() => expect(assign).toHaveBeenCalledWith("http://127.0.0.1:2527/pay/cs_test_x"));
+    expect((fetch.mock.calls[0] as unknown as [string])[0]).toBe(`/api/q/${TOKEN}/balance`);
+  });
+
+  it("a paid invoice says Paid and offers no payment", () => {
+    const invoice = invoiceFigures(430782, [deposit, { kind: "balance", status: "paid", amountCents: 323086 }], []);
+    render(
+      <BalancePanel
+        token={TOKEN}
+        payments={{ invoice, invoiceOpen: true, refundBlocked: null, payments: [entry], refunds: [] }}
+        justPaid
+      />,
+    );
+    expect(screen.getByTestId("invoice-status").textContent).toBe("Paid");
+    expect(screen.queryByRole("button")).toBeNull();
+    expect(screen.queryByText(/waiting for its confirmation/)).toBeNull();
+  });
+});

@@ -1,0 +1,428 @@
+import { randomBytes } from "node:crypto";
+import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
+import { signPayload, startFakePay } from "@/scripts/services/fake-pay";
+import { rebuild, testDb } from "./support/db";
+import { startTestBoss, stopBoss } from "./support/jobs";
+import { ctx, req, sessionOf } from "./support/requests";
+import { SHOP_A, U, VEHICLE, item, seedShops } from "./support/shopFixture";
+import { postWebhook as post, startWebhookForwarder } from "./support/webhookForwarder";
+import { bodyFor } from "./support/workOrderSteps";
+
+/*
+ * Completion and the balance: the completion mail with the invoice, the balance paid through the
+ * payment SDK and its signed webhook or at the counter, receipts, and refunds of a deposit on a
+ * cancelled booking. Figures: the quote of shop-quotes.test.ts (4 × the 35" tire and the beadlock
+ * wheel with services, 8.25 % tax): total 4,307.82, 25 % deposit 1,076.96 (half a cent up),
+ * balance 4,307.82 − 1,076.96 = 3,230.86 — worked by hand in integer cents.
+ */
+
+const session = vi.hoisted(() => ({ current: null as unknown }));
+vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
+
+const SECRET = "whsec_balance_test_secret";
+process.env.STRIPE_SECRET_KEY = "sk_test_balance";
+process.env.STRIPE_WEBHOOK_SECRET = SECRET;
+process.env.STRIPE_API_HOST = "127.0.0.1";
+process.env.APP_ORIGIN = "http://127.0.0.1:3000";
+
+const db = testDb();
+const as = (u: (typeof U)[keyof typeof U] | null) => void (session.current = u ? sessionOf(u) : null);
+
+const webhook = (await import("@/app/api/payments/webhook/route")).POST;
+const act = (await import("@/app/api/q/[token]/route")).POST;
+const balance = await import("@/app/api/q/[token]/balance/route");
+const counter = await import("@/app/api/shop/quotes/[id]/payments/route");
+const refunds = (await import("@/app/api/shop/quotes/[id]/refunds/route")).POST;
+const quotes = await import("@/app/api/shop/quotes/route");
+const sendRoute = (await import("@/app/api/shop/quotes/[id]/send/route")).POST;
+const customers = await import("@/app/api/shop/customers/route");
+const openOrder = (await import("@/app/api/shop/work-orders/route")).POST;
+const sign = (await import("@/app/api/shop/work-orders/[id]/steps/route")).PUT;
+const move = (await import("@/app/api/shop/work-orders/[id]/status/route")).POST;
+const { bookInstall, cancelInstall, slotsForQuote } = await import("@/lib/shop/bookings/queries");
+const { requiredSteps } = await import("@/lib/shop/workOrders/api");
+const { db: appDb } = await import("@/lib/platform/db");
+
+let forwarder: Awaited<ReturnType<typeof startWebhookForwarder>>;
+const postWebhook = (body: string, signature: string) => post(webhook, body, signature);
+let pay: Awaited<ReturnType<typeof startFakePay>>;
+
+/** Every mail job queued so far, oldest first. */
+async function mails(): Promise<{ to: string; subject: string; text: string }[]> {
+  const rows = await db.withSchema("pgboss").from("job").where({ name: "mail.send" }).orderBy("created_on").select("data");
+  return rows.map((r: { data: { to: string; subject: string; text: string } }) => r.data);
+}
+const mailsTo = async (to: string) => (await mails()).filter((m) => m.to === to);
+const linkIn = (text: string) => /\/q\/([A-Za-z0-9_-]{43})/.exec(text)![1]!;
+
+async function until(check: () => boolean, what: string) {
+  for (let i = 0; i < 100 && !check(); i++) await new Promise((r) => setTimeout(r, 20));
+  if (!check()) throw new Error(`timed out waiting for ${what}`);
+}
+
+/** Pays a checkout page of the fake with the test card that pays; waits for its webhook. */
+async function payOnPage(url: string) {
+  const before = forwarder.delivered.length;
+  const res = await fetch(url, {
+    method: "POST",
+    body: new URLSearchParams({ card: "4242 4242 4242 4242", exp: "12/30", cvc: "123" }),
+    redirect: "manual",
+  });
+  expect(res.status).toBe(303);
+  await until(() => forwarder.delivered.length > before, "the payment webhook");
+  return res.headers.get("location");
+}
+
+/** A quote of shop A, sent, accepted and its deposit paid on the fake's page; its customer's address and link. */
+async function depositPaidQuote() {
+  as(U.staffA);
+  const email = `b${randomBytes(4).toString("hex")}@example.test`;
+  const c = await customers.POST(
+    req("POST", "/api/shop/customers", { name: "Balance Customer", phone: `555 ${Math.floor(1000000 + Math.random() * 8999999)}`, email }),
+    ctx(),
+  );
+  const customerId = (await c.json()).customer.id;
+  const tire = await item(db, SHOP_A, "TR-EXAMPLE-35");
+  const wheel = await item(db, SHOP_A, "WH-EXAMPLE-BL");
+  const q = await quotes.POST(
+    req("POST", "/api/shop/quotes", { customerId, vehicle: VEHICLE, tireItemId: tire.id, wheelItemId: wheel.id, quantity: 4 }),
+    ctx(),
+  );
+  const id = (await q.json()).id as string;
+  expect((await sendRoute(req("POST", `/api/shop/quotes/${id}/send`, {}), ctx({ id }))).status).toBe(200);
+  const token = linkIn((await mailsTo(email)).at(-1)!.text);
+  as(null);
+  const action = (a: string) => act(req("POST", `/api/q/${token}`, { action: a }), ctx({ token }));
+  expect((await action("accept")).status).toBe(200);
+  await payOnPage((await (await action("pay")).json()).url);
+  expect((await db("quotes").where({ id }).first()).status).toBe("deposit_paid");
+  return { id, email, token };
+}
+
+async function book(id: string) {
+  const quote = await db("quotes").where({ id }).first();
+  const slots = await slotsForQuote(db, quote, { days: 14 });
+  const start = slots.days.flatMap((d) => d.slots)[0]!.start;
+  await bookInstall(db, { by: "staff", scope: { shopId: SHOP_A }, quoteId: id }, { start }, { userId: U.staffA.id, label: "Sam Staff" });
+}
+
+/** Books the install, opens the work order, signs every step and marks it done. */
+async function completed(id: string) {
+  await book(id);
+  as(U.staffA);
+  const orderId = (await (await openOrder(req("POST", "/api/shop/work-orders", { quoteId: id }), ctx())).json()).id as string;
+  const moveTo = (to: string) => move(req("POST", `/api/shop/work-orders/${orderId}/status`, { to }), ctx({ id: orderId }));
+  expect((await moveTo("in_bay")).status).toBe(200);
+  const order = await db("work_orders").where({ id: orderId }).first();
+  for (const s of requiredSteps(order)) {
+    const r = await sign(req("PUT", `/api/shop/work-orders/${orderId}/steps`, bodyFor(s.position, s.step)), ctx({ id: orderId }));
+    expect(r.status, `${s.position} ${s.step}`).toBe(200);
+  }
+  expect((await moveTo("done")).status).toBe(200);
+  return orderId;
+}
+
+const counterPay = (id: string, body: object) => counter.POST(req("POST", `/api/shop/quotes/${id}/payments`, body), ctx({ id }));
+const refund = (id: string, body: object) => refunds(req("POST", `/api/shop/quotes/${id}/refunds`, body), ctx({ id }));
+const count = async (table: string) => Number((await db(table).count({ n: "*" }))[0]!.n);
+
+beforeAll(async () => {
+  await rebuild(db);
+  await seedShops(db);
+  await startTestBoss();
+  // Open every day, all day, in one zone; two bays; every service 5 minutes in the bay of its kind.
+  await db("shop_schedules").insert({ shop_id: SHOP_A, time_zone: "America/Denver" });
+  await db("shop_opening_hours").insert(
+    [1, 2, 3, 4, 5, 6, 7].map((weekday) => ({ shop_id: SHOP_A, weekday, opens_minute: 0, closes_minute: 1440 })),
+  );
+  await db("bays").insert([
+    { shop_id: SHOP_A, name: "Lift 1", kind: "lift_bay" },
+    { shop_id: SHOP_A, name: "Rack", kind: "alignment_rack" },
+  ]);
+  const services = await db("catalog_items").where({ shop_id: SHOP_A, kind: "service" }).select("id", "service_type");
+  await db("service_times").insert(
+    services.map((s: { id: string; service_type: string }) => ({
+      shop_id: SHOP_A,
+      catalog_item_id: s.id,
+      minutes_per_unit: 5,
+      bay_kind: s.service_type === "alignment" ? "alignment_rack" : "lift_bay",
+    })),
+  );
+  forwarder = await startWebhookForwarder(webhook);
+  pay = await startFakePay({ port: 0, secretKey: process.env.STRIPE_SECRET_KEY!, webhookSecret: SECRET, webhookUrl: forwarder.url });
+  process.env.STRIPE_API_PORT = String(pay.port);
+});
+afterAll(async () => {
+  await pay.close();
+  await forwarder.close();
+  await stopBoss();
+  await db.destroy();
+  await appDb.destroy();
+});
+
+describe("completion mail and the balance through the payment SDK", () => {
+  let q: { id: string; email: string; token: string };
+  let link: string;
+
+  it("the deposit gets a receipt", async () => {
+    q = await depositPaidQuote();
+    const receipt = (await mailsTo(q.email)).at(-1)!;
+    expect(receipt.subject).toBe(
+      "Receipt: $1,076.96 deposit for quote Q-" + (await db("quotes").where({ id: q.id }).first()).number + " at Shop A",
+    );
+  });
+
+  it("before the work is done, no balance can be paid online or at the counter; nothing written", async () => {
+    as(null);
+    const r = await balance.POST(req("POST", `/api/q/${q.token}/balance`, {}), ctx({ token: q.token }));
+    expect(r.status).toBe(409);
+    expect((await r.json()).error).toBe("The balance is due once the work order is done.");
+    as(U.staffA);
+    expect((await counterPay(q.id, { amount: "10.00", method: "cash" })).status).toBe(409);
+    expect(await db("payments").where({ quote_id: q.id, kind: "balance" })).toHaveLength(0);
+  });
+
+  it("marking the work order done queues the completion mail: work per wheel, re-check advice, invoice figures and a pay link", async () => {
+    await completed(q.id);
+    const done = (await mailsTo(q.email)).filter((m) => m.subject.startsWith("Done:"));
+    expect(done).toHaveLength(1);
+    const mail = done[0]!;
+    expect(mail.subject).toMatch(/^Done: your wheels and tires at Shop A \(quote Q-\d+\)$/);
+    // total − deposit = balance: 4,307.82 − 1,076.96 = 3,230.86
+    expect(mail.text).toContain("Quote total: $4,307.82");
+    expect(mail.text).toContain("Deposit paid: −$1,076.96");
+    expect(mail.text).toContain("Balance due: $3,230.86");
+    expect(mail.text).toContain("Still to pay: $3,230.86");
+    for (const heading of ["Left front", "Right front", "Left rear", "Right rear"]) expect(mail.text).toContain(`\n\n${heading}\n- `);
+    // 35 psi × 6.894757 kPa/psi = 241.3 kPa (NIST SP 811, B.8); 190 N·m ÷ 1.355818 = 140.1 ft·lb (NIST SP 811, B.8).
+    expect(mail.text).toContain("Cold pressure set: Set cold to 35 psi (241 kPa) (signed by Sam Staff)");
+    expect(mail.text).toContain("Lug nuts torqued: Lug nuts to 190 N·m (140.1 ft·lb) in the star order, all passes (signed by Sam Staff)");
+    expect(mail.text).toContain("re-checked after the first 50–100 miles");
+    link = linkIn(mail.text);
+    expect(mail.text).toContain(`Pay the balance of $3,230.86 here: http://127.0.0.1:3000/q/${link}`);
+    // The mail's link is the quote's link now; the earlier one is replaced.
+    as(null);
+    expect((await balance.GET(req("GET", `/api/q/${q.token}/balance`), ctx({ token: q.token }))).status).toBe(404);
+    const view = await (await balance.GET(req("GET", `/api/q/${link}/balance`), ctx({ token: link }))).json();
+    expect(view.payments.invoice).toMatchObject({ totalCents: 430782, depositPaidCents: 107696, balanceDueCents: 323086, paid: false });
+    expect(view.payments.payments).toEqual([
+      expect.objectContaining({
+        kind: "deposit",
+        method: "provider",
+        amountCents: 107696,
+        recordedBy: "",
+        paidAt: expect.stringMatching(/Z$/),
+      }),
+    ]);
+  });
+
+  it("the balance is paid on the provider's page; the signed webhook marks it paid and queues a receipt; the invoice shows Paid", async () => {
+    as(null);
+    const first = await (await balance.POST(req("POST", `/api/q/${link}/balance`, {}), ctx({ token: link }))).json();
+    // Opening again expires the first page: only one can take the money.
+    const second = await (await balance.POST(req("POST", `/api/q/${link}/balance`, {}), ctx({ token: link }))).json();
+    expect((await fetch(first.url)).status).toBe(410);
+    expect(await (await fetch(second.url)).text()).toContain("$3,230.86");
+    const back = await payOnPage(second.url);
+    expect(back).toBe(`http://127.0.0.1:3000/q/${link}?paid=balance`);
+    expect(forwarder.delivered.at(-1)).toMatchObject({ status: 200, answer: { outcome: "balance_paid" } });
+    const receipt = (await mailsTo(q.email)).at(-1)!;
+    expect(receipt.subject).toMatch(/^Receipt: \$3,230\.86 balance for quote Q-\d+ at Shop A$/);
+    expect(receipt.text).toContain("Your invoice is paid in full.");
+    const view = await (await balance.GET(req("GET", `/api/q/${link}/balance`), ctx({ token: link }))).json();
+    expect(view.payments.invoice).toMatchObject({ balancePaidCents: 323086, outstandingCents: 0, paid: true });
+    expect(view.payments.payments.map((p: { kind: string }) => p.kind)).toEqual(["deposit", "balance"]);
+  });
+
+  it("a replayed balance webhook changes nothing", async () => {
+    const last = forwarder.delivered.at(-1)!;
+    const mailsBefore = (await mails()).length;
+    for (let i = 0; i < 2; i++)
+      expect(await postWebhook(last.body, last.signature)).toMatchObject({ status: 200, answer: { outcome: "duplicate" } });
+    expect((await mails()).length).toBe(mailsBefore);
+    expect(await db("payments").where({ quote_id: q.id, status: "paid" })).toHaveLength(2);
+  });
+
+  it("a paid invoice cannot be paid twice: online or at the counter; nothing written", async () => {
+    as(null);
+    const r = await balance.POST(req("POST", `/api/q/${link}/balance`, {}), ctx({ token: link }));
+    expect(r.status).toBe(409);
+    expect((await r.json()).error).toBe("This invoice is already paid.");
+    as(U.staffA);
+    const c = await counterPay(q.id, { amount: "1.00", method: "cash" });
+    expect(c.status).toBe(409);
+    expect(await db("payments").where({ quote_id: q.id })).toHaveLength(3); // the deposit and two balance sessions (one expired), no more
+  });
+});
+
+describe("the balance at the counter", () => {
+  let q: { id: string; email: string; token: string };
+
+  it("staff record cash then card (amount, method, who, when); each gets a receipt; over-payment refused", async () => {
+    q = await depositPaidQuote();
+    await completed(q.id);
+    as(U.staffA);
+    const bad = await counterPay(q.id, { amount: "12.5.0", method: "cash" });
+    expect(bad.status).toBe(422);
+    expect((await bad.json()).fieldErrors.amount[0]).toBe('Amount ($): "12.5.0" is not an amount in dollars and cents, e.g. 250.00.');
+    const noMethod = await counterPay(q.id, { amount: "10.00", method: "cheque" });
+    expect((await noMethod.json()).fieldErrors.method[0]).toBe("Paid by: pick cash or card.");
+    const over = await counterPay(q.id, { amount: "3,230.87", method: "card" });
+    expect(over.status).toBe(422);
+    expect((await over.json()).fieldErrors.amount[0]).toBe("Amount ($): $3,230.87 is more than the balance outstanding, $3,230.86.");
+    expect(await db("payments").where({ quote_id: q.id, kind: "balance" })).toHaveLength(0);
+
+    const cash = await counterPay(q.id, { amount: "1,000.00", method: "cash" });
+    expect(cash.status).toBe(201);
+    expect((await cash.json()).payments.invoice).toMatchObject({ balancePaidCents: 100000, outstandingCents: 223086, paid: false });
+    expect((await mailsTo(q.email)).at(-1)!.text).toContain("Still to pay: $2,230.86.");
+    as(U.ownerA);
+    const card = await counterPay(q.id, { amount: "2230.86", method: "card" });
+    expect(card.status).toBe(201);
+    const answer = (await card.json()).payments;
+    expect(answer.invoice).toMatchObject({ outstandingCents: 0, paid: true });
+    expect(answer.payments.slice(1)).toEqual([
+      expect.objectContaining({ kind: "balance", method: "cash", amountCents: 100000, recordedBy: "Sam Staff" }),
+      expect.objectContaining({ kind: "balance", method: "card", amountCents: 223086, recordedBy: "Olive Owner" }),
+    ]);
+    const receipt = (await mailsTo(q.email)).at(-1)!;
+    expect(receipt.text).toContain("Paid: Balance, card at the counter.");
+    expect(receipt.text).toContain("Your invoice is paid in full.");
+    const row = await db("payments").where({ quote_id: q.id, method: "card" }).first();
+    expect(row).toMatchObject({ recorded_by_user_id: U.ownerA.id, status: "paid", provider_session_id: null });
+    expect(row.paid_at).toBeInstanceOf(Date);
+    expect((await counterPay(q.id, { amount: "0.01", method: "cash" })).status).toBe(409);
+  });
+
+  it("another shop's staff cannot see or record payments on the quote (404, nothing written)", async () => {
+    as(U.staffB);
+    expect((await counter.GET(req("GET", `/api/shop/quotes/${q.id}/payments`), ctx({ id: q.id }))).status).toBe(404);
+    as(U.ownerB);
+    expect((await counterPay(q.id, { amount: "1.00", method: "cash" })).status).toBe(404);
+    expect(await db("payments").where({ quote_id: q.id })).toHaveLength(3);
+  });
+});
+
+describe("refunding a deposit on a cancelled booking", () => {
+  let q: { id: string; email: string; token: string };
+
+  it("is refused while the install is booked, and for staff who are not the owner, or another shop; nothing written", async () => {
+    q = await depositPaidQuote();
+    await book(q.id);
+    as(U.ownerA);
+    const booked = await refund(q.id, { amount: "100.00" });
+    expect(booked.status).toBe(409);
+    expect((await booked.json()).error).toBe("Cancel the install booking first: a deposit is refunded once its booking is cancelled.");
+    await cancelInstall(db, { shopId: SHOP_A }, q.id, { userId: U.staffA.id, label: "Sam Staff" });
+    as(U.staffA);
+    const staff = await refund(q.id, { amount: "100.00" });
+    expect(staff.status).toBe(403);
+    as(U.ownerB);
+    const other = await refund(q.id, { amount: "100.00" });
+    expect(other.status).toBe(404);
+    expect((await other.json()).error).toBe("That quote was not found.");
+    expect(await count("payment_refunds")).toBe(0);
+  });
+
+  it("a refund larger than what was paid is refused with the field named; nothing written", async () => {
+    as(U.ownerA);
+    const r = await refund(q.id, { amount: "1076.97" });
+    expect(r.status).toBe(422);
+    expect((await r.json()).fieldErrors.amount[0]).toBe(
+      "Refund amount ($): $1,076.97 is more than the deposit paid and not yet refunded, $1,076.96.",
+    );
+    expect((await refund(q.id, { amount: "0" })).status).toBe(422);
+    expect(await count("payment_refunds")).toBe(0);
+  });
+
+  it("the owner refunds part through the SDK; the provider's signed webhook marks it succeeded; a replay changes nothing", async () => {
+    as(U.ownerA);
+    const before = forwarder.delivered.length;
+    const r = await refund(q.id, { amount: "400.00" });
+    expect(r.status).toBe(202);
+    const pending = (await r.json()).payments;
+    expect(pending.refunds).toEqual([expect.objectContaining({ amountCents: 40000, requestedBy: "Olive Owner" })]);
+    expect(pending.invoice.refundableCents).toBe(107696 - 40000);
+    await until(() => forwarder.delivered.length > before, "the refund webhook");
+    expect(forwarder.delivered.at(-1)).toMatchObject({ status: 200, answer: { outcome: "refund_succeeded" } });
+    const row = await db("payment_refunds").where({ quote_id: q.id }).first();
+    expect(row).toMatchObject({ status: "succeeded", amount_cents: 40000, requested_by_user_id: U.ownerA.id });
+    expect(row.provider_refund_id).toMatch(/^re_/);
+    expect((await mailsTo(q.email)).at(-1)!.subject).toMatch(/^Refund: \$400\.00 of your deposit for quote Q-\d+ at Shop A$/);
+    const mailsBefore = (await mails()).length;
+    const last = forwarder.delivered.at(-1)!;
+    expect(await postWebhook(last.body, last.signature)).toMatchObject({ status: 200, answer: { outcome: "duplicate" } });
+    expect((await mails()).length).toBe(mailsBefore);
+  });
+
+  it("the rest can be refunded, then no more: 1,076.96 − 400.00 = 676.96", async () => {
+    as(U.ownerA);
+    expect((await refund(q.id, { amount: "676.97" })).status).toBe(422);
+    const before = forwarder.delivered.length;
+    expect((await refund(q.id, { amount: "676.96" })).status).toBe(202);
+    await until(() => forwarder.delivered.length > before, "the refund webhook");
+    const r = await refund(q.id, { amount: "0.01" });
+    expect(r.status).toBe(409);
+    expect((await r.json()).error).toBe("The deposit has been refunded in full.");
+    const view = await (await counter.GET(req("GET", `/api/shop/quotes/${q.id}/payments`), ctx({ id: q.id }))).json();
+    expect(view.payments.invoice).toMatchObject({ refundedCents: 107696, refundableCents: 0 });
+  });
+
+  it("a forged or mismatched refund event is refused; nothing written", async () => {
+    const row = await db("payment_refunds").where({ quote_id: q.id }).orderBy("created_at").first();
+    const payment = await db("payments").where({ id: row.payment_id }).first();
+    const event = (over: object) =>
+      JSON.stringify({
+        id: `evt_forged_${randomBytes(4).toString("hex")}`,
+        object: "event",
+        type: "refund.updated",
+        data: {
+          object: {
+            id: row.provider_refund_id,
+            object: "refund",
+            amount: row.amount_cents,
+            currency: "usd",
+            status: "succeeded",
+            payment_intent: payment.provider_payment_intent,
+            metadata: { refund_id: row.id },
+            ...over,
+          },
+        },
+      });
+    const eventsBefore = await count("payment_webhook_events");
+    const unsigned = event({});
+    expect((await postWebhook(unsigned, signPayload(unsigned, "whsec_someone_else"))).status).toBe(400);
+    const bigger = event({ amount: row.amount_cents + 1 });
+    expect((await postWebhook(bigger, signPayload(bigger, SECRET))).status).toBe(422);
+    const unknown = event({ id: "re_unknown", metadata: { refund_id: "0a000000-0000-4000-8000-0000000000ff" } });
+    expect((await postWebhook(unknown, signPayload(unknown, SECRET))).status).toBe(400);
+    expect(await count("payment_webhook_events")).toBe(eventsBefore);
+  });
+
+  it("the provider refuses a refund above what it holds; the app removes its row (nothing left written)", async () => {
+    // The app's own check normally stops this first; the provider's refusal is the second guard.
+    const other = await depositPaidQuote();
+    await book(other.id);
+    await cancelInstall(db, { shopId: SHOP_A }, other.id, { userId: U.staffA.id, label: "Sam Staff" });
+    const payment = await db("payments").where({ quote_id: other.id, kind: "deposit", status: "paid" }).first();
+    // The provider has already refunded it in full outside the app (e.g. from its dashboard).
+    const res = await fetch(`http://127.0.0.1:${pay.port}/v1/refunds`, {
+      method: "POST",
+      headers: { Authorization: `Bearer ${process.env.STRIPE_SECRET_KEY}` },
+      body: new URLSearchParams({ payment_intent: payment.provider_payment_intent }),
+    });
+    expect(res.status).toBe(200);
+    await until(
+      () => forwarder.delivered.at(-1)?.answer.error !== undefined || forwarder.delivered.at(-1)?.status !== 200,
+      "the outside refund's webhook",
+    );
+    const rows = await count("payment_refunds");
+    as(U.ownerA);
+    const r = await refund(other.id, { amount: "10.00" });
+    expect(r.status).toBe(409);
+    expect((await r.json()).error).toMatch(
+      /^The payment provider refused the refund: Refund amount \(1000\) is greater than unrefunded amount/,
+    );
+    expect(await count("payment_refunds")).toBe(rows);
+  });
+});
