@@ -1,5 +1,6 @@
 import type { ReactNode } from "react";
 import { cx } from "./cx";
+import { EmptyRow } from "./EmptyRow";
 
 /** One column of a figures table: its header and how a row fills its cell. */
 export interface FigureColumn<R> {
@@ -20,10 +21,12 @@ export interface FigureColumn<R> {
 /**
  * The looks a figures table comes in. `ruled`: a rule under the header and under every row.
  * `quiet`: small capitals headers and a rule above each row. `banded`: a shaded header band and
- * padded cells, for two setups side by side in a frame.
+ * padded cells, for two setups side by side in a frame. `bare`: none (a table for screen readers only).
  */
 const LOOKS = {
   ruled: {
+    table: "w-full text-sm",
+    caption: "mb-1 text-left text-sm text-basalt-700",
     headRow: "border-b border-basalt-200 text-left",
     head: "py-1.5 pr-3 last:pr-0",
     row: "border-b border-basalt-100 align-top",
@@ -31,13 +34,19 @@ const LOOKS = {
     rowHeader: "font-semibold",
   },
   quiet: {
+    table: "w-full text-sm",
+    caption: "mb-1 text-left text-sm text-basalt-700",
     headRow: "text-left text-xs uppercase tracking-wide text-basalt-600",
     head: "pb-1 pr-3 last:pr-0",
     row: "border-t border-basalt-100 align-top",
     cell: "py-2 pr-3 last:pr-0",
     rowHeader: "font-semibold",
   },
+  /** No look of its own: figures for screen readers only, inside a visually hidden block. */
+  bare: { table: "", caption: "", headRow: "", head: "", row: "", cell: "", rowHeader: "" },
   banded: {
+    table: "w-full text-sm",
+    caption: "mb-1 text-left text-sm text-basalt-700",
     headRow: "bg-basalt-50 text-left",
     head: "px-3 py-2 font-semibold",
     row: "border-t border-basalt-100 align-top",
@@ -73,6 +82,8 @@ export function FigureTable<R>({
   className,
   testId,
   scrollRegion,
+  id,
+  footRows,
 }: {
   columns: readonly FigureColumn<R>[];
   rows: readonly R[];
@@ -91,16 +102,19 @@ export function FigureTable<R>({
   testId?: string;
   /** Wraps the table in a focusable region named `label` that scrolls sideways. */
   scrollRegion?: { label: string; className?: string };
+  id?: string;
+  /** Rows drawn after the listed ones (e.g. a figure whose one cell spans both setups). */
+  footRows?: ReactNode;
 }) {
   const l = LOOKS[look];
   const align = (c: FigureColumn<R>) => c.align === "end" && "text-right";
   const table = (
-    <table className={cx("w-full text-sm", className)} data-testid={testId}>
-      {caption && <caption className="mb-1 text-left text-sm text-basalt-700">{caption}</caption>}
+    <table id={id} className={cx(l.table, className) || undefined} data-testid={testId}>
+      {caption && <caption className={l.caption || undefined}>{caption}</caption>}
       <thead>
-        <tr className={l.headRow}>
+        <tr className={l.headRow || undefined}>
           {columns.map((c) => (
-            <th key={c.id} scope="col" className={cx(l.head, cellClassName, align(c), c.className, c.headerClassName)}>
+            <th key={c.id} scope="col" className={cx(l.head, cellClassName, align(c), c.className, c.headerClassName) || undefined}>
               {c.header}
             </th>
           ))}
@@ -108,9 +122,12 @@ export function FigureTable<R>({
       </thead>
       <tbody>
         {rows.map((row) => (
-          <tr key={rowKey(row)} className={l.row} data-testid={rowTestId?.(row)}>
+          <tr key={rowKey(row)} className={l.row || undefined} data-testid={rowTestId?.(row)}>
             {columns.map((c, i) => {
-              const props = { className: cx(l.cell, cellClassName, align(c), c.className), "data-testid": c.cellTestId?.(row) };
+              const props = {
+                className: cx(l.cell, cellClassName, align(c), c.className) || undefined,
+                "data-testid": c.cellTestId?.(row),
+              };
               return i === 0 ? (
                 <th key={c.id} scope="row" {...props} className={cx(props.className, "text-left", rowHeaderClassName ?? l.rowHeader)}>
                   {c.cell(row)}
@@ -124,12 +141,11 @@ export function FigureTable<R>({
           </tr>
         ))}
         {rows.length === 0 && empty && (
-          <tr>
-            <td colSpan={columns.length} className="py-3 text-basalt-500">
-              {empty}
-            </td>
-          </tr>
+          <EmptyRow colSpan={columns.length} className="py-3 text-basalt-500">
+            {empty}
+          </EmptyRow>
         )}
+        {footRows}
       </tbody>
     </table>
   );

@@ -1,3 +1,4 @@
+import { BulletList } from "@/components/ui/BulletList";
 import { type FigureColumn, FigureTable } from "@/components/ui/FigureTable";
 import { type DisplayPrefs, formatLoad } from "@/lib/comparisons/format";
 import type { AxlePlan, LoadPlan, PressureReason } from "@/lib/comparisons/loadPlan";
@@ -69,11 +70,7 @@ export function LoadPressureFigures({ plan, prefs }: { plan: LoadPlan; prefs: Di
           and do not load past the vehicle&apos;s axle ratings.
         </p>
       )}
-      <ul className="list-disc pl-5 text-xs text-basalt-600">
-        {plan.notes.map((n) => (
-          <li key={n}>{n}</li>
-        ))}
-      </ul>
+      <BulletList items={plan.notes} className="text-xs text-basalt-600" />
     </div>
   );
 }
