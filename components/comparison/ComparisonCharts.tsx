@@ -36,7 +36,8 @@ export default function ComparisonCharts({ result: r, prefs }: { result: Compari
   const metric = prefs.units === "metric";
   const lenUnit = metric ? "mm" : "in";
   const len = (mm: number) => (metric ? Math.round(mm * 10) / 10 : Math.round(mmToIn(mm) * 100) / 100);
-  const { unit: speedUnit, ticks, domain, speeds, rpm } = speedCharts(r, prefs);
+  const { speeds, rpm, ...axis } = speedCharts(r, prefs);
+  const speedUnit = axis.unit;
   const changes = [
     { name: "Diameter", value: len(r.changes.diameterMm) },
     { name: "Ground clr.", value: len(r.changes.groundClearanceMm) },
@@ -68,10 +69,9 @@ export default function ComparisonCharts({ result: r, prefs }: { result: Compari
         <SpeedLineChart
           data={speeds}
           xKey="indicated"
-          ticks={ticks}
-          domain={domain}
+          axis={axis}
           yWidth={40}
-          tooltipLabel={(v) => `Speedometer shows ${v} ${speedUnit}`}
+          tooltipPrefix="Speedometer shows"
           series={[
             { key: "shown", name: "As shown (current tire)", stroke: STEEL },
             { key: "true", name: "True (planned tire)", stroke: EMBER, dash: "6 4" },
@@ -82,10 +82,8 @@ export default function ComparisonCharts({ result: r, prefs }: { result: Compari
         <SpeedLineChart
           data={rpm}
           xKey="speed"
-          ticks={ticks}
-          domain={domain}
+          axis={axis}
           yWidth={44}
-          tooltipLabel={(v) => `${v} ${speedUnit}`}
           series={[
             { key: "current", name: "Current", stroke: STEEL },
             { key: "planned", name: "Planned", stroke: EMBER, dash: "6 4" },

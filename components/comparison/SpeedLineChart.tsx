@@ -13,38 +13,44 @@ export interface SpeedSeries {
 
 const TICK = { fontSize: 12, fill: "#434c58" };
 
+/** The speed axis: its unit and its fixed round ticks (chartData: speedCharts). */
+export interface SpeedAxis {
+  unit: string;
+  ticks: number[];
+  domain: [number, number];
+}
+
 /**
  * A line chart over road speed, on the fixed round ticks of the reader's unit (see chartData:
  * speedCharts): the speedometer chart and the engine speed chart.
  *
  * @example
- * <SpeedLineChart data={rpm} xKey="speed" ticks={ticks} domain={domain} yWidth={44} tooltipLabel={(v) => `${v} mph`}
+ * <SpeedLineChart data={rpm} xKey="speed" axis={{ unit: "mph", ticks: [10, 20], domain: [10, 20] }} yWidth={44}
  *   series={[{ key: "current", name: "Current", stroke: "#245a88" }]} />
  */
 export function SpeedLineChart({
   data,
   xKey,
-  ticks,
-  domain,
+  axis,
   yWidth,
-  tooltipLabel,
+  tooltipPrefix,
   series,
 }: {
   data: object[];
   xKey: string;
-  ticks: number[];
-  domain: [number, number];
+  axis: SpeedAxis;
   yWidth: number;
-  tooltipLabel: (value: unknown) => string;
+  /** Said before the speed in the tooltip, e.g. "Speedometer shows". */
+  tooltipPrefix?: string;
   series: readonly SpeedSeries[];
 }) {
   return (
     <ResponsiveContainer width="100%" height="100%">
       <LineChart data={data} margin={{ left: 0, right: 16, top: 4, bottom: 4 }}>
         <CartesianGrid strokeDasharray="3 3" />
-        <XAxis dataKey={xKey} type="number" domain={domain} ticks={ticks} tick={TICK} />
+        <XAxis dataKey={xKey} type="number" domain={axis.domain} ticks={axis.ticks} tick={TICK} />
         <YAxis tick={TICK} width={yWidth} />
-        <Tooltip labelFormatter={tooltipLabel} />
+        <Tooltip labelFormatter={(v) => `${tooltipPrefix ? `${tooltipPrefix} ` : ""}${v} ${axis.unit}`} />
         <Legend wrapperStyle={{ fontSize: 12 }} />
         {series.map((s) => (
           <Line

@@ -1,5 +1,6 @@
 import type { Ref, SelectHTMLAttributes } from "react";
 import { FieldFrame } from "./FieldFrame";
+import { SelectOptions } from "./SelectOptions";
 
 interface Props extends SelectHTMLAttributes<HTMLSelectElement> {
   label: string;
@@ -18,11 +19,7 @@ export function SelectField({ label, name, options, error, hint, hideLabel, id, 
     <FieldFrame label={label} name={name} id={id} hint={hint} error={error} hideLabel={hideLabel} className={className}>
       {(control) => (
         <select {...control} name={name} ref={ref} {...rest}>
-          {options.map((o) => (
-            <option key={o.value} value={o.value}>
-              {o.label}
-            </option>
-          ))}
+          <SelectOptions options={options} />
         </select>
       )}
     </FieldFrame>
