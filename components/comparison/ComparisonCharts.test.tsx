@@ -1,7 +1,5 @@
 // @vitest-environment jsdom
 import { cleanup, render, screen } from "@testing-library/react";
-import type { ReactElement } from "react";
-import { cloneElement } from "react";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { computeComparison } from "@/lib/comparisons/compute";
 import type { DisplayPrefs } from "@/lib/comparisons/format";
@@ -10,14 +8,7 @@ import ComparisonCharts from "./ComparisonCharts";
 
 // jsdom lays nothing out, so the responsive wrapper would measure 0 × 0 and draw nothing:
 // give the charts a fixed size instead.
-vi.mock("recharts", async (importOriginal) => {
-  const actual = await importOriginal<typeof import("recharts")>();
-  return {
-    ...actual,
-    ResponsiveContainer: ({ children }: { children: ReactElement<{ width?: number; height?: number }> }) =>
-      cloneElement(children, { width: 480, height: 240 }),
-  };
-});
+vi.mock("recharts", async (importOriginal) => (await import("@/components/comparison/chartsTestUtil")).fixedSizeRecharts(importOriginal));
 
 const inch: DisplayPrefs = { units: "imperial", lengths: "decimal" };
 const metric: DisplayPrefs = { units: "metric", lengths: "decimal" };

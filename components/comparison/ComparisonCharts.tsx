@@ -1,23 +1,11 @@
 "use client";
-import {
-  Bar,
-  BarChart,
-  CartesianGrid,
-  Cell,
-  Legend,
-  Line,
-  LineChart,
-  ReferenceLine,
-  ResponsiveContainer,
-  Tooltip,
-  XAxis,
-  YAxis,
-} from "recharts";
+import { Bar, BarChart, CartesianGrid, Cell, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import type { ComparisonResult } from "@/lib/comparisons/compute";
 import { type DisplayPrefs, formatNumber } from "@/lib/comparisons/format";
 import { mmToIn } from "@/lib/fitment";
 import { speedCharts } from "./chartData";
 import { CHART_HEIGHT_RESERVED } from "./chartSize";
+import { SpeedLineChart } from "./SpeedLineChart";
 
 /**
  * The comparison's charts (recharts): the changes as bars, indicated vs true speed, engine speed
@@ -48,7 +36,8 @@ export default function ComparisonCharts({ result: r, prefs }: { result: Compari
   const metric = prefs.units === "metric";
   const lenUnit = metric ? "mm" : "in";
   const len = (mm: number) => (metric ? Math.round(mm * 10) / 10 : Math.round(mmToIn(mm) * 100) / 100);
-  const { unit: speedUnit, ticks, domain, speeds, rpm } = speedCharts(r, prefs);
+  const { speeds, rpm, ...axis } = speedCharts(r, prefs);
+  const speedUnit = axis.unit;
   const changes = [
     { name: "Diameter", value: len(r.changes.diameterMm) },
     { name: "Ground clr.", value: len(r.changes.groundClearanceMm) },
@@ -77,55 +66,30 @@ export default function ComparisonCharts({ result: r, prefs }: { result: Compari
         </ResponsiveContainer>
       </ChartFrame>
       <ChartFrame id="chart-speed" title={`True speed vs speedometer (${speedUnit})`}>
-        <ResponsiveContainer width="100%" height="100%">
-          <LineChart data={speeds} margin={{ left: 0, right: 16, top: 4, bottom: 4 }}>
-            <CartesianGrid strokeDasharray="3 3" />
-            <XAxis dataKey="indicated" type="number" domain={domain} ticks={ticks} tick={tick} />
-            <YAxis tick={tick} width={40} />
-            <Tooltip labelFormatter={(v) => `Speedometer shows ${v} ${speedUnit}`} />
-            <Legend wrapperStyle={{ fontSize: 12 }} />
-            <Line dataKey="shown" name="As shown (current tire)" stroke={STEEL} strokeWidth={2} dot={false} isAnimationActive={false} />
-            <Line
-              dataKey="true"
-              name="True (planned tire)"
-              stroke={EMBER}
-              strokeWidth={2}
-              strokeDasharray="6 4"
-              dot={false}
-              isAnimationActive={false}
-            />
-          </LineChart>
-        </ResponsiveContainer>
+        <SpeedLineChart
+          data={speeds}
+          xKey="indicated"
+          axis={axis}
+          yWidth={40}
+          tooltipPrefix="Speedometer shows"
+          series={[
+            { key: "shown", name: "As shown (current tire)", stroke: STEEL },
+            { key: "true", name: "True (planned tire)", stroke: EMBER, dash: "6 4" },
+          ]}
+        />
       </ChartFrame>
       <ChartFrame id="chart-rpm" title={`Engine speed vs road speed (rpm, ${speedUnit})`}>
-        <ResponsiveContainer width="100%" height="100%">
-          <LineChart data={rpm} margin={{ left: 0, right: 16, top: 4, bottom: 4 }}>
-            <CartesianGrid strokeDasharray="3 3" />
-            <XAxis dataKey="speed" type="number" domain={domain} ticks={ticks} tick={tick} />
-            <YAxis tick={tick} width={44} />
-            <Tooltip labelFormatter={(v) => `${v} ${speedUnit}`} />
-            <Legend wrapperStyle={{ fontSize: 12 }} />
-            <Line dataKey="current" name="Current" stroke={STEEL} strokeWidth={2} dot={false} isAnimationActive={false} />
-            <Line
-              dataKey="planned"
-              name="Planned"
-              stroke={EMBER}
-              strokeWidth={2}
-              strokeDasharray="6 4"
-              dot={false}
-              isAnimationActive={false}
-            />
-            <Line
-              dataKey="regeared"
-              name={`Planned, ${r.gearing.suggestedRatio.toFixed(2)} gears`}
-              stroke={BASALT}
-              strokeWidth={1.5}
-              strokeDasharray="2 3"
-              dot={false}
-              isAnimationActive={false}
-            />
-          </LineChart>
-        </ResponsiveContainer>
+        <SpeedLineChart
+          data={rpm}
+          xKey="speed"
+          axis={axis}
+          yWidth={44}
+          series={[
+            { key: "current", name: "Current", stroke: STEEL },
+            { key: "planned", name: "Planned", stroke: EMBER, dash: "6 4" },
+            { key: "regeared", name: `Planned, ${r.gearing.suggestedRatio.toFixed(2)} gears`, stroke: BASALT, width: 1.5, dash: "2 3" },
+          ]}
+        />
       </ChartFrame>
     </div>
   );

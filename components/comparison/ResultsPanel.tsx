@@ -1,5 +1,6 @@
 import type { ReactNode } from "react";
 import { cx } from "@/components/ui/cx";
+import { type FigureColumn, FigureTable } from "@/components/ui/FigureTable";
 import { type FindingTone, LEVEL_LABEL, LEVEL_TONE } from "@/lib/comparisons/assess/vocabulary";
 import type { ComparisonResult, SetupFigures } from "@/lib/comparisons/compute";
 import { speedometerSentence } from "@/lib/comparisons/speedometer";
@@ -203,6 +204,33 @@ function lenPair(mm: number, prefs: DisplayPrefs, decimals?: number) {
 
 type Row = { label: string; hint?: string; cell: (f: SetupFigures) => ReactNode };
 
+/** One row per figure, the current setup beside the planned one. */
+const detailColumns = (r: ComparisonResult): FigureColumn<Row>[] => [
+  {
+    id: "figure",
+    header: "Figure",
+    headerClassName: "w-[34%]",
+    cell: (row) => (
+      <>
+        {row.label}
+        {row.hint && <span className="block text-xs font-normal text-basalt-500">{row.hint}</span>}
+      </>
+    ),
+  },
+  {
+    id: "current",
+    header: "Current",
+    headerClassName: "w-[33%] border-l-4 border-steel-500 text-steel-800",
+    cell: (row) => row.cell(r.current),
+  },
+  {
+    id: "planned",
+    header: "Planned",
+    headerClassName: "w-[33%] border-l-4 border-dashed border-ember-500 text-ember-800",
+    cell: (row) => row.cell(r.planned),
+  },
+];
+
 /** Every figure of both setups, side by side. */
 export function SetupDetailTable({ result: r, prefs }: { result: ComparisonResult; prefs: DisplayPrefs }) {
   const rows: Row[] = [
@@ -298,40 +326,17 @@ export function SetupDetailTable({ result: r, prefs }: { result: ComparisonResul
       <h2 id="details-title" className="mb-2 text-lg font-semibold">
         Both setups in detail
       </h2>
-      <div
-        className="overflow-x-auto rounded-lg ring-1 ring-basalt-100"
-        tabIndex={0}
-        role="region"
-        aria-label="Both setups in detail (scrolls sideways on narrow screens)"
-      >
-        <table className="w-full min-w-[20rem] border-collapse bg-white text-sm tabular-nums">
-          <thead>
-            <tr className="bg-basalt-50 text-left">
-              <th scope="col" className="w-[34%] px-3 py-2 font-semibold">
-                Figure
-              </th>
-              <th scope="col" className="w-[33%] border-l-4 border-steel-500 px-3 py-2 font-semibold text-steel-800">
-                Current
-              </th>
-              <th scope="col" className="w-[33%] border-l-4 border-dashed border-ember-500 px-3 py-2 font-semibold text-ember-800">
-                Planned
-              </th>
-            </tr>
-          </thead>
-          <tbody>
-            {rows.map((row) => (
-              <tr key={row.label} className="border-t border-basalt-100 align-top">
-                <th scope="row" className="px-3 py-2 text-left font-medium text-basalt-700">
-                  {row.label}
-                  {row.hint && <span className="block text-xs font-normal text-basalt-500">{row.hint}</span>}
-                </th>
-                <td className="px-3 py-2">{row.cell(r.current)}</td>
-                <td className="px-3 py-2">{row.cell(r.planned)}</td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
+      <FigureTable
+        look="banded"
+        columns={detailColumns(r)}
+        rows={rows}
+        rowKey={(row) => row.label}
+        className="min-w-[20rem] border-collapse bg-white tabular-nums"
+        scrollRegion={{
+          label: "Both setups in detail (scrolls sideways on narrow screens)",
+          className: "rounded-lg ring-1 ring-basalt-100",
+        }}
+      />
       <p className="mt-2 text-xs text-basalt-500">
         Dimensions are nominal and unloaded (ISO 4000-1 / ETRTO designations); the maker&apos;s published figures win. Load range pressures
         are from memory of TRA practice — go by the sidewall.

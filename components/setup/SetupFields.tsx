@@ -1,4 +1,5 @@
 "use client";
+import type { ComponentProps } from "react";
 import { type FieldValues, type Path, type UseFormReturn, get, useWatch } from "react-hook-form";
 import { TextField } from "@/components/ui/TextField";
 import { SETUP_FIELD_LABEL as L } from "@/lib/setup/fields";
@@ -28,34 +29,21 @@ export function SetupFields<T extends FieldValues>({
   const mode = useWatch({ control: form.control, name: p("position.mode") }) as string | undefined;
   const reference = useWatch({ control: form.control, name: p("position.reference") }) as string | undefined;
   const id = (k: string) => `f-${name}-${k}`.replace(/\./g, "-");
+  /** A registered figure: its label and message go by its field path, its id by a short name. */
+  const field = (
+    path: keyof typeof L,
+    short: string,
+    extra: Pick<ComponentProps<typeof TextField>, "inputMode" | "hint" | "className"> = {},
+  ) => <TextField id={id(short)} label={L[path]} {...extra} {...register(p(path))} error={err(path)} />;
   return (
     <fieldset
       className={`rounded-card border p-4 ${tone === "ember" ? "border-ember-200 bg-ember-50/40" : "border-steel-200 bg-steel-50/40"}`}
     >
       <legend className="px-1 text-sm font-semibold text-basalt-900">{legend}</legend>
       <div className="grid gap-3 sm:grid-cols-2">
-        <TextField
-          id={id("tire")}
-          label={L.tire}
-          hint="e.g. 265/70R17, LT285/75R16 or 35x12.50R17LT"
-          {...register(p("tire"))}
-          error={err("tire")}
-          className="sm:col-span-2"
-        />
-        <TextField
-          id={id("d")}
-          label={L.wheelDiameterIn}
-          inputMode="decimal"
-          {...register(p("wheelDiameterIn"))}
-          error={err("wheelDiameterIn")}
-        />
-        <TextField
-          id={id("w")}
-          label={L.wheelWidthIn}
-          hint="Fractions work: 8-1/2 or 8½"
-          {...register(p("wheelWidthIn"))}
-          error={err("wheelWidthIn")}
-        />
+        {field("tire", "tire", { hint: "e.g. 265/70R17, LT285/75R16 or 35x12.50R17LT", className: "sm:col-span-2" })}
+        {field("wheelDiameterIn", "d", { inputMode: "decimal" })}
+        {field("wheelWidthIn", "w", { hint: "Fractions work: 8-1/2 or 8½" })}
       </div>
       <div role="radiogroup" aria-label={`${legend}: how the wheel position is given`} className="mt-3 flex flex-wrap gap-4 text-sm">
         <label className="flex items-center gap-2">
@@ -67,20 +55,8 @@ export function SetupFields<T extends FieldValues>({
       </div>
       {mode === "backspacing" ? (
         <div className="mt-3 grid gap-3 sm:grid-cols-2">
-          <TextField
-            id={id("bs")}
-            label={L["position.backspacingIn"]}
-            hint="e.g. 4-1/2, 4½ or 4.5"
-            {...register(p("position.backspacingIn"))}
-            error={err("position.backspacingIn")}
-          />
-          <TextField
-            id={id("flange")}
-            label={L["position.flangeIn"]}
-            hint="The flange lip beyond the bead seat; 1/2 in is usual (common practice)."
-            {...register(p("position.flangeIn"))}
-            error={err("position.flangeIn")}
-          />
+          {field("position.backspacingIn", "bs", { hint: "e.g. 4-1/2, 4½ or 4.5" })}
+          {field("position.flangeIn", "flange", { hint: "The flange lip beyond the bead seat; 1/2 in is usual (common practice)." })}
           <div role="radiogroup" aria-label={`${legend}: backspacing measured to`} className="flex flex-col gap-1 text-sm sm:col-span-2">
             <span className="font-medium text-basalt-800">{L["position.reference"]}</span>
             <label className="flex items-center gap-2">
@@ -99,24 +75,12 @@ export function SetupFields<T extends FieldValues>({
         </div>
       ) : (
         <div className="mt-3 grid gap-3 sm:grid-cols-2">
-          <TextField
-            id={id("offset")}
-            label={L["position.offsetMm"]}
-            hint="Positive when the mounting face is outboard of the rim centre, e.g. -12"
-            {...register(p("position.offsetMm"))}
-            error={err("position.offsetMm")}
-          />
+          {field("position.offsetMm", "offset", { hint: "Positive when the mounting face is outboard of the rim centre, e.g. -12" })}
         </div>
       )}
       {spacer && (
         <div className="mt-3 grid gap-3 sm:grid-cols-2">
-          <TextField
-            id={id("spacer")}
-            label={L.spacerMm}
-            hint="Leave empty for none. In mm; inches need their unit, e.g. 1 in."
-            {...register(p("spacerMm"))}
-            error={err("spacerMm")}
-          />
+          {field("spacerMm", "spacer", { hint: "Leave empty for none. In mm; inches need their unit, e.g. 1 in." })}
         </div>
       )}
     </fieldset>

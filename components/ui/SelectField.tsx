@@ -1,6 +1,6 @@
 import type { Ref, SelectHTMLAttributes } from "react";
-import { cx } from "./cx";
-import { FieldMessages, fieldIds } from "./FieldMessages";
+import { FieldFrame } from "./FieldFrame";
+import { SelectOptions } from "./SelectOptions";
 
 interface Props extends SelectHTMLAttributes<HTMLSelectElement> {
   label: string;
@@ -15,31 +15,13 @@ interface Props extends SelectHTMLAttributes<HTMLSelectElement> {
 
 /** A labelled select whose hint and error are tied to it for screen readers, like TextField. */
 export function SelectField({ label, name, options, error, hint, hideLabel, id, className, ref, ...rest }: Props) {
-  const { controlId: selectId, hintId, errorId, describedBy } = fieldIds(name, id, hint);
   return (
-    <div className={cx("flex flex-col gap-1", className)}>
-      <label htmlFor={selectId} className={hideLabel ? "sr-only" : "text-sm font-medium text-basalt-800"}>
-        {label}
-      </label>
-      <select
-        id={selectId}
-        name={name}
-        ref={ref}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={describedBy}
-        className={cx(
-          "min-h-10 rounded-lg border bg-white px-3 py-2 text-base text-basalt-900 shadow-sm",
-          error ? "border-contact-600" : "border-basalt-300 focus:border-ember-500",
-        )}
-        {...rest}
-      >
-        {options.map((o) => (
-          <option key={o.value} value={o.value}>
-            {o.label}
-          </option>
-        ))}
-      </select>
-      <FieldMessages hintId={hintId} errorId={errorId} hint={hint} error={error} />
-    </div>
+    <FieldFrame label={label} name={name} id={id} hint={hint} error={error} hideLabel={hideLabel} className={className}>
+      {(control) => (
+        <select {...control} name={name} ref={ref} {...rest}>
+          <SelectOptions options={options} />
+        </select>
+      )}
+    </FieldFrame>
   );
 }

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { Alert } from "@/components/ui/Alert";
 import { Badge } from "@/components/ui/Badge";
+import { BulletList } from "@/components/ui/BulletList";
 import { Card } from "@/components/ui/Card";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { SignOutEverywhereButton } from "@/components/site/SignOutEverywhereButton";
@@ -32,11 +33,7 @@ export default async function AccountPage({ searchParams }: { searchParams: Prom
             <Badge tone="ember">{can.title}</Badge>
             {shop && <span className="text-sm text-basalt-600">at {shop.name}</span>}
           </p>
-          <ul className="mt-4 list-disc space-y-1 pl-5 text-sm text-basalt-700">
-            {can.items.map((i) => (
-              <li key={i}>{i}</li>
-            ))}
-          </ul>
+          <BulletList items={can.items} className="mt-4 space-y-1 text-sm text-basalt-700" />
         </Card>
         <Card>
           <h2 className="text-lg font-semibold">Where to go</h2>

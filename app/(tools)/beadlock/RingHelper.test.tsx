@@ -9,6 +9,19 @@ afterEach(cleanup);
 // user-event drives every key and click through the DOM; on a busy shared machine that is slow.
 vi.setConfig({ testTimeout: 20_000 });
 
+/** The helper on its first screen, with a user to drive it. */
+const renderHelper = () => {
+  const user = userEvent.setup();
+  render(<RingHelper />);
+  return user;
+};
+/** Clears the bolt count and types `text` in its place; gives the field. */
+const retypeBoltCount = async (user: ReturnType<typeof userEvent.setup>, text: string) => {
+  const count = screen.getByLabelText("Bolts on the ring");
+  await user.clear(count);
+  await user.type(count, text);
+  return count;
+};
 const torqueField = () => screen.getByLabelText(/^Maker's torque/) as HTMLInputElement;
 /** The passes table as [pass, share, ft·lb, N·m] text per row. */
 const passRows = () =>
@@ -35,8 +48,7 @@ const PASSES_18_FTLB = [
 
 describe("beadlock ring helper: torque unit switch", () => {
   it("converts 18 ft·lb to 24.4 N·m on switching (NIST SP 811: 1 ft·lbf = 1.355818 N·m) and every pass keeps its real torque", async () => {
-    const user = userEvent.setup();
-    render(<RingHelper />);
+    const user = renderHelper();
     await user.type(torqueField(), "18");
     expect(passRows()).toEqual(PASSES_18_FTLB);
     await user.click(screen.getByRole("radio", { name: "N·m" }));
@@ -53,8 +65,7 @@ describe("beadlock ring helper: torque unit switch", () => {
   }, 20_000);
 
   it("reads a figure typed after the switch in the unit shown", async () => {
-    const user = userEvent.setup();
-    render(<RingHelper />);
+    const user = renderHelper();
     await user.click(screen.getByRole("radio", { name: "N·m" }));
     await user.type(torqueField(), "23");
     // 23 N·m ÷ 1.355818 = 16.96 ft·lb (NIST SP 811 B.9)
@@ -73,8 +84,7 @@ describe("beadlock ring helper: torque unit switch", () => {
   ];
   for (const [text, why] of refused) {
     it(`refuses ${JSON.stringify(text)} with a message naming "Maker's torque (ft·lb)" and shows no passes`, async () => {
-      const user = userEvent.setup();
-      render(<RingHelper />);
+      const user = renderHelper();
       await user.type(torqueField(), text);
       expect(torqueField().getAttribute("aria-invalid")).toBe("true");
       expect(describedText(torqueField())).toMatch(/Maker's torque \(ft·lb\)/);
@@ -84,8 +94,7 @@ describe("beadlock ring helper: torque unit switch", () => {
   }
 
   it("keeps the unit when the entry cannot be read, rather than relabelling a figure it cannot convert", async () => {
-    const user = userEvent.setup();
-    render(<RingHelper />);
+    const user = renderHelper();
     await user.type(torqueField(), "16-18");
     await user.click(screen.getByRole("radio", { name: "N·m" }));
     expect(screen.getByRole("radio", { name: "ft·lb" })).toHaveProperty("checked", true);
@@ -95,11 +104,8 @@ describe("beadlock ring helper: torque unit switch", () => {
   });
 
   it("names the bolt count field in its message", async () => {
-    const user = userEvent.setup();
-    render(<RingHelper />);
-    const count = screen.getByLabelText("Bolts on the ring");
-    await user.clear(count);
-    await user.type(count, "2");
+    const user = renderHelper();
+    const count = await retypeBoltCount(user, "2");
     expect(describedText(count)).toMatch(/^.*Bolts on the ring: enter a whole number from 3 to 64/);
   });
 });
@@ -165,11 +171,8 @@ describe("beadlock tick-off", () => {
   });
 
   it("moves on to the next pass when one is complete and marks it done", async () => {
-    const user = userEvent.setup();
-    render(<RingHelper />);
-    const count = screen.getByLabelText("Bolts on the ring");
-    await user.clear(count);
-    await user.type(count, "4");
+    const user = renderHelper();
+    await retypeBoltCount(user, "4");
     await user.type(torqueField(), "18");
     // 4 bolts: 1, 3, 2, 4 (common practice, no source)
     for (const bolt of [1, 3, 2, 4]) await user.click(tick().getByRole("button", { name: `Mark bolt ${bolt} done` }));
@@ -190,8 +193,7 @@ describe("beadlock tick-off", () => {
   });
 
   it("clears the ticks when the ring changes (another bolt count or another real torque) and says so", async () => {
-    const user = userEvent.setup();
-    render(<RingHelper />);
+    const user = renderHelper();
     await user.type(torqueField(), "18");
     await user.click(tick().getByRole("button", { name: "Mark bolt 1 done" }));
     await user.type(torqueField(), "0");

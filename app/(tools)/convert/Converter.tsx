@@ -10,7 +10,7 @@ import {
   torqueFromNm,
   torqueToNm,
 } from "@/lib/fitment";
-import { convertPressure } from "@/lib/fitment/pressure";
+import { type PressureUnit, convertPressure } from "@/lib/fitment/pressure";
 import { LinkedFields, type LinkedUnit } from "./LinkedFields";
 import { TireSizeEquivalents } from "./TireSizeEquivalents";
 
@@ -48,37 +48,23 @@ const LENGTH: LinkedUnit[] = [
   },
 ];
 
+/** A pressure field in one unit; the fields share the figure in kPa. */
+const pressureUnit = (key: string, unit: PressureUnit, decimals: number, example: string): LinkedUnit => ({
+  key,
+  label: `Pressure (${unit})`,
+  read: (t) => {
+    const v = plainNumber(t);
+    return v === null ? null : convertPressure(v, unit, "kPa");
+  },
+  show: (k) => trim(convertPressure(k, "kPa", unit), decimals),
+  error: `enter a pressure like ${example}.`,
+  hint: `e.g. ${example}`,
+});
+
 const PRESSURE: LinkedUnit[] = [
-  {
-    key: "psi",
-    label: "Pressure (psi)",
-    read: (t) => {
-      const v = plainNumber(t);
-      return v === null ? null : convertPressure(v, "psi", "kPa");
-    },
-    show: (k) => trim(convertPressure(k, "kPa", "psi"), 2),
-    error: "enter a pressure like 35.",
-    hint: "e.g. 35",
-  },
-  {
-    key: "kpa",
-    label: "Pressure (kPa)",
-    read: plainNumber,
-    show: (k) => trim(k, 1),
-    error: "enter a pressure like 241.",
-    hint: "e.g. 241",
-  },
-  {
-    key: "bar",
-    label: "Pressure (bar)",
-    read: (t) => {
-      const v = plainNumber(t);
-      return v === null ? null : convertPressure(v, "bar", "kPa");
-    },
-    show: (k) => trim(convertPressure(k, "kPa", "bar"), 3),
-    error: "enter a pressure like 2.4.",
-    hint: "e.g. 2.4",
-  },
+  pressureUnit("psi", "psi", 2, "35"),
+  pressureUnit("kpa", "kPa", 1, "241"),
+  pressureUnit("bar", "bar", 3, "2.4"),
 ];
 
 /**

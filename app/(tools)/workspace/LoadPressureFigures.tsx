@@ -1,3 +1,5 @@
+import { BulletList } from "@/components/ui/BulletList";
+import { type FigureColumn, FigureTable } from "@/components/ui/FigureTable";
 import { type DisplayPrefs, formatLoad } from "@/lib/comparisons/format";
 import type { AxlePlan, LoadPlan, PressureReason } from "@/lib/comparisons/loadPlan";
 import { pressureText } from "@/lib/comparisons/pressureText";
@@ -8,67 +10,53 @@ const REASON: Record<PressureReason, string> = {
   "road minimum": "the road minimum for this tire",
 };
 
-function AxleRow({ a, prefs }: { a: AxlePlan; prefs: DisplayPrefs }) {
-  const name = a.axle === "front" ? "Front" : "Rear";
-  return (
-    <tr className="border-t border-basalt-100 align-top" data-testid={`load-${a.axle}`}>
-      <th scope="row" className="py-2 pr-3 text-left font-semibold">
-        {name}
-      </th>
-      <td className="py-2 pr-3">
+/** The columns per axle; the pressures and loads follow the display choice. */
+const columns = (prefs: DisplayPrefs): FigureColumn<AxlePlan>[] => [
+  { id: "axle", header: "Axle", cell: (a) => (a.axle === "front" ? "Front" : "Rear") },
+  {
+    id: "set",
+    header: "Pressure to set",
+    cell: (a) => (
+      <>
         <span className="font-semibold" data-testid={`set-${a.axle}`}>
           {pressureText(a.pressureToSetKpa, prefs)}
         </span>
         <span className="block text-xs text-basalt-600">set by {REASON[a.decidedBy]}</span>
-      </td>
-      <td className="py-2 pr-3" data-testid={`equivalent-${a.axle}`}>
+      </>
+    ),
+  },
+  {
+    id: "equivalent",
+    header: "Equivalent pressure",
+    cellTestId: (a) => `equivalent-${a.axle}`,
+    cell: (a) => (
+      <>
         {pressureText(a.equivalentKpa, prefs)}
         {a.equivalentKpa < a.minimumKpa && (
           <span className="block text-xs text-tight-800">below the road minimum {pressureText(a.minimumKpa, prefs)}</span>
         )}
-      </td>
-      <td className="py-2 pr-3">{formatLoad(a.tireLoadKg, prefs)}</td>
-      <td className="py-2">{formatLoad(a.reserveKg, prefs)}</td>
-    </tr>
-  );
-}
+      </>
+    ),
+  },
+  { id: "load", header: "Load per tire", cell: (a) => formatLoad(a.tireLoadKg, prefs) },
+  { id: "reserve", header: "Reserve at that pressure", cell: (a) => formatLoad(a.reserveKg, prefs) },
+];
 
 /** Per axle: the pressure to set, the equivalent pressure, the load per tire and the reserve. */
 export function LoadPressureFigures({ plan, prefs }: { plan: LoadPlan; prefs: DisplayPrefs }) {
   const p = plan.planned;
   return (
     <div className="flex flex-col gap-3">
-      <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Cold pressures per axle (scrolls sideways on narrow screens)">
-        <table className="w-full min-w-[36rem] text-sm">
-          <caption className="mb-1 text-left text-sm text-basalt-700">
-            Cold pressures for {p.text}, carrying what {plan.placard.text} carries at the placard pressure
-          </caption>
-          <thead>
-            <tr className="text-left text-xs uppercase tracking-wide text-basalt-600">
-              <th scope="col" className="pb-1 pr-3">
-                Axle
-              </th>
-              <th scope="col" className="pb-1 pr-3">
-                Pressure to set
-              </th>
-              <th scope="col" className="pb-1 pr-3">
-                Equivalent pressure
-              </th>
-              <th scope="col" className="pb-1 pr-3">
-                Load per tire
-              </th>
-              <th scope="col" className="pb-1">
-                Reserve at that pressure
-              </th>
-            </tr>
-          </thead>
-          <tbody>
-            {plan.axles.map((a) => (
-              <AxleRow key={a.axle} a={a} prefs={prefs} />
-            ))}
-          </tbody>
-        </table>
-      </div>
+      <FigureTable
+        look="quiet"
+        columns={columns(prefs)}
+        rows={plan.axles}
+        rowKey={(a) => a.axle}
+        rowTestId={(a) => `load-${a.axle}`}
+        caption={`Cold pressures for ${p.text}, carrying what ${plan.placard.text} carries at the placard pressure`}
+        className="min-w-[36rem]"
+        scrollRegion={{ label: "Cold pressures per axle (scrolls sideways on narrow screens)" }}
+      />
       <p className="text-sm" data-testid="sidewall-max">
         Maximum on the sidewall: {formatLoad(p.maxLoadKg, prefs)} at {pressureText(p.maxPressureKpa, prefs)}{" "}
         <span className="text-basalt-600">
@@ -82,11 +70,7 @@ export function LoadPressureFigures({ plan, prefs }: { plan: LoadPlan; prefs: Di
           and do not load past the vehicle&apos;s axle ratings.
         </p>
       )}
-      <ul className="list-disc pl-5 text-xs text-basalt-600">
-        {plan.notes.map((n) => (
-          <li key={n}>{n}</li>
-        ))}
-      </ul>
+      <BulletList items={plan.notes} className="text-xs text-basalt-600" />
     </div>
   );
 }

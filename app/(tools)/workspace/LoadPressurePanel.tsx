@@ -9,6 +9,7 @@ import type { VehicleKind } from "@/lib/fitment";
 import { AiredDownGuidance } from "./AiredDownGuidance";
 import { LazyLoadPressureChart } from "./LazyLoadPressureChart";
 import { LoadPressureFigures } from "./LoadPressureFigures";
+import { measureFields } from "./measureFields";
 import { useMeasureEntries } from "./useMeasureEntries";
 
 const QUANTITIES = {
@@ -100,24 +101,7 @@ export function LoadPressurePanel({ currentTire, plannedTire, prefs }: { current
     );
   }, [entries, prefs, placard, plannedTire, vehicle]);
 
-  const message = (k: LoadField) => {
-    const n = k in QUANTITIES ? note(k as MeasureKey) : undefined;
-    const e = errors[k];
-    return e && n ? `${e} ${n}` : (e ?? n);
-  };
-  const measureField = (k: MeasureKey) => (
-    <TextField
-      key={k}
-      label={labels[k]}
-      name={`load-${k}`}
-      inputMode="decimal"
-      autoComplete="off"
-      value={entries[k].text}
-      onChange={(ev) => set(k, ev.target.value)}
-      error={message(k)}
-      hint={HINT[k]}
-    />
-  );
+  const measureField = measureFields({ prefix: "load", labels, hints: HINT, entries, set, errors, note });
   const fieldErrors = (Object.keys(errors) as LoadField[]).length;
 
   return (
@@ -142,7 +126,7 @@ export function LoadPressurePanel({ currentTire, plannedTire, prefs }: { current
           autoComplete="off"
           value={placard}
           onChange={(ev) => setPlacardTire(ev.target.value)}
-          error={message("placardTire")}
+          error={errors.placardTire}
           hint="As printed on the placard, with its load index (e.g. P265/70R17 113S). Starts as your current tire."
         />
         {measureField("placardFront")}

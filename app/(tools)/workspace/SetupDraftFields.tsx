@@ -1,4 +1,5 @@
 "use client";
+import type { ComponentProps } from "react";
 import { TextField } from "@/components/ui/TextField";
 import { cx } from "@/components/ui/cx";
 import { Segmented } from "@/components/comparison/Segmented";
@@ -10,6 +11,7 @@ import { parseTireSize } from "@/lib/fitment";
 import { BackspacingDiagram } from "./BackspacingDiagram";
 
 type Side = "current" | "planned";
+type DraftText = "diameter" | "width" | "offset" | "backspacing" | "flange" | "spacer";
 
 function tireReading(text: string, prefs: DisplayPrefs): string | null {
   try {
@@ -52,6 +54,14 @@ export function SetupDraftFields({
   const title = side === "current" ? "Current setup" : "Planned setup";
   const reading = e("tire") ? null : tireReading(draft.tire, prefs);
   const id = (f: string) => `${side}-${f}`;
+  /** A text figure of the draft: its label and message go by its field path. */
+  const field = (
+    k: DraftText,
+    path: keyof typeof L,
+    extra: Pick<ComponentProps<typeof TextField>, "inputMode" | "hint" | "placeholder">,
+  ) => (
+    <TextField label={L[path]} name={id(k)} value={draft[k]} onChange={(ev) => set({ [k]: ev.target.value })} error={e(path)} {...extra} />
+  );
   return (
     <section
       aria-labelledby={id("title")}
@@ -75,23 +85,8 @@ export function SetupDraftFields({
           hint={reading ?? "e.g. 265/70R17, LT285/70R17 121/118Q or 37x12.50R17LT"}
         />
         <div className="grid grid-cols-2 gap-3">
-          <TextField
-            label={L.wheelDiameterIn}
-            name={id("diameter")}
-            inputMode="decimal"
-            value={draft.diameter}
-            onChange={(ev) => set({ diameter: ev.target.value })}
-            error={e("wheelDiameterIn")}
-          />
-          <TextField
-            label={L.wheelWidthIn}
-            name={id("width")}
-            inputMode="decimal"
-            value={draft.width}
-            onChange={(ev) => set({ width: ev.target.value })}
-            error={e("wheelWidthIn")}
-            hint={`suits ${figures.rimWidthMinIn}–${figures.rimWidthMaxIn} in`}
-          />
+          {field("diameter", "wheelDiameterIn", { inputMode: "decimal" })}
+          {field("width", "wheelWidthIn", { inputMode: "decimal", hint: `suits ${figures.rimWidthMinIn}–${figures.rimWidthMaxIn} in` })}
         </div>
         <Segmented
           legend="Wheel position given as"
@@ -104,26 +99,16 @@ export function SetupDraftFields({
           onChange={onModeChange}
         />
         {draft.mode === "offset" ? (
-          <TextField
-            label={L["position.offsetMm"]}
-            name={id("offset")}
-            inputMode="text"
-            value={draft.offset}
-            onChange={(ev) => set({ offset: ev.target.value })}
-            error={e("position.offsetMm")}
-            hint={`Minus for a wheel that sits further out. Backspacing ${formatInches(figures.backspacingFlangeIn, prefs)} to the flange edge, ${formatInches(figures.backspacingBeadSeatIn, prefs)} to the bead seat.`}
-          />
+          field("offset", "position.offsetMm", {
+            inputMode: "text",
+            hint: `Minus for a wheel that sits further out. Backspacing ${formatInches(figures.backspacingFlangeIn, prefs)} to the flange edge, ${formatInches(figures.backspacingBeadSeatIn, prefs)} to the bead seat.`,
+          })
         ) : (
           <div className="flex flex-col gap-3 rounded-lg bg-dune-50 p-3 ring-1 ring-dune-200">
-            <TextField
-              label={L["position.backspacingIn"]}
-              name={id("backspacing")}
-              inputMode="text"
-              value={draft.backspacing}
-              onChange={(ev) => set({ backspacing: ev.target.value })}
-              error={e("position.backspacingIn")}
-              hint={`Fractions work: 4-3/4, 4 3/4, 4¾ or 4.75. Offset ${formatNumber(figures.offsetMm, 1, { signed: true })} mm.`}
-            />
+            {field("backspacing", "position.backspacingIn", {
+              inputMode: "text",
+              hint: `Fractions work: 4-3/4, 4 3/4, 4¾ or 4.75. Offset ${formatNumber(figures.offsetMm, 1, { signed: true })} mm.`,
+            })}
             <Segmented
               legend={L["position.reference"]}
               name={id("reference")}
@@ -138,33 +123,19 @@ export function SetupDraftFields({
               A tape across the back of the wheel reads to the flange edge; the bead seat is the flange allowance further in.
             </p>
             <div className="grid grid-cols-[1fr_auto] items-end gap-3">
-              <TextField
-                label={L["position.flangeIn"]}
-                name={id("flange")}
-                inputMode="text"
-                value={draft.flange}
-                onChange={(ev) => set({ flange: ev.target.value })}
-                error={e("position.flangeIn")}
-                hint="usually 1/2"
-              />
+              {field("flange", "position.flangeIn", { inputMode: "text", hint: "usually 1/2" })}
               <BackspacingDiagram reference={draft.reference} />
             </div>
           </div>
         )}
-        <TextField
-          label={L.spacerMm}
-          name={id("spacer")}
-          inputMode="text"
-          value={draft.spacer}
-          placeholder="none"
-          onChange={(ev) => set({ spacer: ev.target.value })}
-          error={e("spacerMm")}
-          hint={
+        {field("spacer", "spacerMm", {
+          inputMode: "text",
+          placeholder: "none",
+          hint:
             figures.spacerMm > 0
               ? `Acts as offset ${formatNumber(figures.effectiveOffsetMm, 1, { signed: true })} mm`
-              : "Leave empty for none. In mm; inches need their unit, e.g. 1 in"
-          }
-        />
+              : "Leave empty for none. In mm; inches need their unit, e.g. 1 in",
+        })}
       </div>
     </section>
   );

@@ -1,11 +1,12 @@
 "use client";
 import { useMemo } from "react";
-import { TextField } from "@/components/ui/TextField";
+import { type FigureColumn, FigureTable } from "@/components/ui/FigureTable";
 import type { ComparisonResult } from "@/lib/comparisons/compute";
 import { type DisplayPrefs, formatNumber } from "@/lib/comparisons/format";
 import { type MeasureSpec, measureUnit, readMeasure } from "@/lib/comparisons/measureEntry";
 import { type TrailAngle, type TrailField, type TrailLabels, planTrail } from "@/lib/comparisons/trailPlan";
 import { TRAIL_ANGLE_LIMITS_MM } from "@/lib/fitment";
+import { measureFields } from "./measureFields";
 import { useMeasureEntries } from "./useMeasureEntries";
 
 const FIELDS: TrailField[] = ["frontHeight", "frontAhead", "rearHeight", "rearBehind", "wheelbase", "midHeight", "lift"];
@@ -36,6 +37,12 @@ const HINT: Partial<Record<TrailField, string>> = {
   lift: "Raises every body point measured here; leave empty for none.",
 };
 const NAME: Record<TrailAngle["kind"], string> = { approach: "Approach", departure: "Departure", breakover: "Ramp breakover" };
+const ANGLE_COLUMNS: FigureColumn<TrailAngle>[] = [
+  { id: "angle", header: "Angle", cell: (a) => NAME[a.kind] },
+  { id: "current", header: "Current", cell: (a) => `${formatNumber(a.currentDeg, 1)}°` },
+  { id: "planned", header: "Planned", cell: (a) => `${formatNumber(a.plannedDeg, 1)}°` },
+  { id: "change", header: "Change", cell: (a) => `${formatNumber(a.plannedDeg - a.currentDeg, 1, { signed: true })}°` },
+];
 
 /** Labels for a display choice; messages name each field by this same text. */
 export function trailLabels(prefs: DisplayPrefs): TrailLabels {
@@ -81,7 +88,7 @@ export function TrailAnglesPanel({ result, prefs }: { result: ComparisonResult; 
   }, [entries, prefs, currentDiameterMm, plannedDiameterMm]);
 
   const ratio = result.engine.brakeTorqueRatio;
-  const message = (k: TrailField) => [errors[k], note(k)].filter(Boolean).join(" ") || undefined;
+  const field = measureFields({ prefix: "trail", labels, hints: HINT, entries, set, errors, note });
   return (
     <section
       aria-labelledby="trail-title"
@@ -97,53 +104,17 @@ export function TrailAnglesPanel({ result, prefs }: { result: ComparisonResult; 
           alignment checked.
         </p>
       </div>
-      <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
-        {FIELDS.map((k) => (
-          <TextField
-            key={k}
-            label={labels[k]}
-            name={`trail-${k}`}
-            inputMode="decimal"
-            autoComplete="off"
-            value={entries[k].text}
-            onChange={(ev) => set(k, ev.target.value)}
-            error={message(k)}
-            hint={HINT[k]}
-          />
-        ))}
-      </div>
+      <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">{FIELDS.map(field)}</div>
       <div aria-live="polite">
         {angles.length > 0 ? (
-          <table className="w-full text-sm" data-testid="trail-angles">
-            <thead>
-              <tr className="text-left text-xs uppercase tracking-wide text-basalt-600">
-                <th scope="col" className="pb-1 pr-3">
-                  Angle
-                </th>
-                <th scope="col" className="pb-1 pr-3">
-                  Current
-                </th>
-                <th scope="col" className="pb-1 pr-3">
-                  Planned
-                </th>
-                <th scope="col" className="pb-1">
-                  Change
-                </th>
-              </tr>
-            </thead>
-            <tbody>
-              {angles.map((a) => (
-                <tr key={a.kind} className="border-t border-basalt-100" data-testid={`angle-${a.kind}`}>
-                  <th scope="row" className="py-2 pr-3 text-left font-semibold">
-                    {NAME[a.kind]}
-                  </th>
-                  <td className="py-2 pr-3">{formatNumber(a.currentDeg, 1)}°</td>
-                  <td className="py-2 pr-3">{formatNumber(a.plannedDeg, 1)}°</td>
-                  <td className="py-2">{formatNumber(a.plannedDeg - a.currentDeg, 1, { signed: true })}°</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
+          <FigureTable
+            look="quiet"
+            columns={ANGLE_COLUMNS}
+            rows={angles}
+            rowKey={(a) => a.kind}
+            rowTestId={(a) => `angle-${a.kind}`}
+            testId="trail-angles"
+          />
         ) : (
           <p className="text-sm text-basalt-600">Enter a body point and its distance from the axle to see its angle.</p>
         )}

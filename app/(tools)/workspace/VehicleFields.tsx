@@ -7,15 +7,66 @@ import type { DisplayPrefs } from "@/lib/comparisons/format";
 import { vehicleFieldLabel } from "@/lib/comparisons/fields";
 import { DEFAULT_VEHICLE } from "@/lib/comparisons/model";
 
-/** The two optional gear ratios that, with the axle ratio, give the crawl ratio. */
-const CRAWL_FIELDS = [
-  { key: "first", path: "firstGearRatio", hint: "The transmission's first gear, e.g. 4.03. With the low range it gives the crawl ratio." },
+type Key = "kpi" | "axle" | "top" | "first" | "low" | "cruise" | "fender";
+
+/** One figure of the panel: the draft's key, the field path its label and errors go by, its hint. */
+interface VehicleField {
+  key: Key;
+  path: Parameters<typeof vehicleFieldLabel>[0];
+  hint: string;
+  decimal?: boolean;
+  placeholder?: string;
+  /** The label says " (default)" while the figure is the default. */
+  tagged?: boolean;
+}
+
+/** The panel's figures in order; the two optional gear ratios give, with the axle ratio, the crawl ratio. */
+const vehicleFields = (defaults: VehicleDraft, prefs: DisplayPrefs): VehicleField[] => [
+  {
+    key: "kpi",
+    path: "kingpinInclinationDeg",
+    decimal: true,
+    placeholder: "not set",
+    tagged: true,
+    hint: "Default: not set (scrub then counts the wheel shift only). From the vehicle's alignment specifications.",
+  },
+  {
+    key: "axle",
+    path: "axleRatio",
+    decimal: true,
+    tagged: true,
+    hint: `Default ${DEFAULT_VEHICLE.axleRatio.toFixed(2)}, a common factory ratio.`,
+  },
+  {
+    key: "top",
+    path: "transmissionRatio",
+    decimal: true,
+    tagged: true,
+    hint: `Default ${DEFAULT_VEHICLE.transmissionRatio.toFixed(2)} (direct); an overdrive is below 1, e.g. 0.70.`,
+  },
+  {
+    key: "first",
+    path: "firstGearRatio",
+    decimal: true,
+    placeholder: "not set",
+    hint: "The transmission's first gear, e.g. 4.03. With the low range it gives the crawl ratio.",
+  },
   {
     key: "low",
     path: "transferLowRatio",
+    decimal: true,
+    placeholder: "not set",
     hint: "The transfer case's low range, e.g. 2.72. Crawl ratio = first gear × low range × axle ratio.",
   },
-] as const;
+  { key: "cruise", path: "cruiseSpeedsMph", tagged: true, hint: `Default ${defaults.cruise}; up to six, separated by commas.` },
+  {
+    key: "fender",
+    path: "fenderLineMm",
+    placeholder: "not measured",
+    tagged: true,
+    hint: `Optional. Drop a plumb line from the fender edge; measure out from the hub face to it${prefs.units === "metric" ? ", in mm, e.g. 140" : ", in inches, e.g. 5-1/2 or 5.5"}.`,
+  },
+];
 
 /** Vehicle figures in a collapsible panel; each says when it is the default. */
 export function VehicleFields({
@@ -37,10 +88,10 @@ export function VehicleFields({
   const e = (path: string) => errors[`vehicle.${path}`];
   const set = (patch: Partial<VehicleDraft>) => onChange({ ...draft, ...patch });
   const label = (path: Parameters<typeof vehicleFieldLabel>[0]) => vehicleFieldLabel(path, prefs);
-  type Key = "kpi" | "axle" | "top" | "first" | "low" | "cruise" | "fender";
   const isDefault = (k: Key) => draft[k].trim() === defaults[k].trim();
   const tag = (k: Key) => (isDefault(k) ? " (default)" : "");
-  const count = (["kpi", "axle", "top", "first", "low", "cruise", "fender"] as const).filter((k) => !isDefault(k)).length;
+  const fields = vehicleFields(defaults, prefs);
+  const count = fields.filter((f) => !isDefault(f.key)).length;
   const hasErrors = Object.keys(errors).some((k) => k.startsWith("vehicle."));
   // Open or closed is the person's choice (the summary toggles it). An error appearing opens the
   // panel so the message is seen; nothing closes it but the person: tying `open` to the errors
@@ -71,64 +122,19 @@ export function VehicleFields({
         </span>
       </summary>
       <div className="grid gap-3 border-t border-basalt-100 px-4 py-4 sm:grid-cols-2 sm:px-5 lg:grid-cols-3" onBlur={onCommit}>
-        <TextField
-          label={`${label("kingpinInclinationDeg")}${tag("kpi")}`}
-          name="vehicle-kpi"
-          inputMode="decimal"
-          placeholder="not set"
-          value={draft.kpi}
-          onChange={(ev) => set({ kpi: ev.target.value })}
-          error={e("kingpinInclinationDeg")}
-          hint="Default: not set (scrub then counts the wheel shift only). From the vehicle's alignment specifications."
-        />
-        <TextField
-          label={`${label("axleRatio")}${tag("axle")}`}
-          name="vehicle-axle"
-          inputMode="decimal"
-          value={draft.axle}
-          onChange={(ev) => set({ axle: ev.target.value })}
-          error={e("axleRatio")}
-          hint={`Default ${DEFAULT_VEHICLE.axleRatio.toFixed(2)}, a common factory ratio.`}
-        />
-        <TextField
-          label={`${label("transmissionRatio")}${tag("top")}`}
-          name="vehicle-top"
-          inputMode="decimal"
-          value={draft.top}
-          onChange={(ev) => set({ top: ev.target.value })}
-          error={e("transmissionRatio")}
-          hint={`Default ${DEFAULT_VEHICLE.transmissionRatio.toFixed(2)} (direct); an overdrive is below 1, e.g. 0.70.`}
-        />
-        {CRAWL_FIELDS.map((f) => (
+        {fields.map((f) => (
           <TextField
             key={f.key}
-            label={label(f.path)}
+            label={`${label(f.path)}${f.tagged ? tag(f.key) : ""}`}
             name={`vehicle-${f.key}`}
-            inputMode="decimal"
-            placeholder="not set"
+            inputMode={f.decimal ? "decimal" : undefined}
+            placeholder={f.placeholder}
             value={draft[f.key]}
             onChange={(ev) => set({ [f.key]: ev.target.value })}
             error={e(f.path)}
             hint={f.hint}
           />
         ))}
-        <TextField
-          label={`${label("cruiseSpeedsMph")}${tag("cruise")}`}
-          name="vehicle-cruise"
-          value={draft.cruise}
-          onChange={(ev) => set({ cruise: ev.target.value })}
-          error={e("cruiseSpeedsMph")}
-          hint={`Default ${defaults.cruise}; up to six, separated by commas.`}
-        />
-        <TextField
-          label={`${label("fenderLineMm")}${tag("fender")}`}
-          name="vehicle-fender"
-          value={draft.fender}
-          placeholder="not measured"
-          onChange={(ev) => set({ fender: ev.target.value })}
-          error={e("fenderLineMm")}
-          hint={`Optional. Drop a plumb line from the fender edge; measure out from the hub face to it${prefs.units === "metric" ? ", in mm, e.g. 140" : ", in inches, e.g. 5-1/2 or 5.5"}.`}
-        />
       </div>
     </details>
   );

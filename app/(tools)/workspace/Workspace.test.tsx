@@ -15,6 +15,13 @@ vi.mock("@/components/comparison/LazyComparisonCharts", () => ({ LazyComparisonC
 const planned = () => within(screen.getByRole("region", { name: "Planned setup" }));
 const headline = (id: string) => screen.getByTestId(id).querySelector("dd")?.textContent;
 
+/** The workspace on the default comparison, with a user to drive it. */
+const renderDefault = () => {
+  const user = userEvent.setup();
+  render(<Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} />);
+  return user;
+};
+
 beforeEach(() => {
   window.localStorage.clear();
   window.history.replaceState(null, "", "/workspace");
@@ -23,8 +30,7 @@ afterEach(cleanup);
 
 describe("workspace inputs", () => {
   it("takes backspacing with fractions and shows the offset it stands for (W/2 + offset, common practice, no source)", async () => {
-    const user = userEvent.setup();
-    render(<Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} />);
+    const user = renderDefault();
     await user.click(planned().getByRole("radio", { name: "Backspacing" }));
     const bs = planned().getByLabelText("Backspacing (in)");
     // Switching keeps the same wheel: 9 in wide, −12 mm → 4.5 − 0.472 + 0.5 = 4.53 in to the flange edge.
@@ -62,8 +68,7 @@ describe("workspace inputs", () => {
   });
 
   it("applies one unit toggle everywhere and remembers it", async () => {
-    const user = userEvent.setup();
-    render(<Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} />);
+    const user = renderDefault();
     // 939.8 − 802.8 = 137 mm = 5.39 in (1 in = 25.4 mm exactly).
     expect(headline("change-diameter")).toBe("+5.39 in");
     await user.click(screen.getByRole("radio", { name: "Metric" }));
@@ -81,8 +86,7 @@ describe("workspace inputs", () => {
   });
 
   it("shows an inline message with an accepted example and keeps the last complete results", async () => {
-    const user = userEvent.setup();
-    render(<Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} />);
+    const user = renderDefault();
     const tire = planned().getByLabelText("Tire size");
     await user.clear(tire);
     await user.type(tire, "37x12");
@@ -100,8 +104,7 @@ describe("workspace inputs", () => {
   });
 
   it("names a wheel diameter that does not fit the tire", async () => {
-    const user = userEvent.setup();
-    render(<Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} />);
+    const user = renderDefault();
     const d = planned().getByLabelText("Wheel diameter (in)");
     await user.clear(d);
     await user.type(d, "18");
@@ -131,6 +134,11 @@ describe("vehicle details panel", () => {
     await user.click(screen.getByText(/^Vehicle details/));
     expect(panel().open).toBe(true);
   };
+  const renderWithPanelOpen = async () => {
+    const user = renderDefault();
+    await openPanel(user);
+    return user;
+  };
   /** Select all, delete, then type one key at a time, checking after each key. */
   const retype = async (user: ReturnType<typeof userEvent.setup>, field: HTMLElement, text: string) => {
     await user.click(field);
@@ -144,9 +152,7 @@ describe("vehicle details panel", () => {
   };
 
   it("stays open and keeps the focus while the axle ratio is retyped as 4.10", async () => {
-    const user = userEvent.setup();
-    render(<Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} />);
-    await openPanel(user);
+    const user = await renderWithPanelOpen();
     await retype(user, screen.getByLabelText(/^Axle ratio/), "4.10");
     // 265/70R17 = 802.8 mm, 37 in = 939.8 mm (ISO 4000-1; 1 in = 25.4 mm, NIST SP 811): restoring ratio
     // 4.10 × 939.8 / 802.8 = 4.80, nearest common ratio 4.88 (with 4.00 it would be 4.68 → 4.56).
@@ -155,9 +161,7 @@ describe("vehicle details panel", () => {
   });
 
   it("stays open while cruise speeds, top gear and fender line are retyped", async () => {
-    const user = userEvent.setup();
-    render(<Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} />);
-    await openPanel(user);
+    const user = await renderWithPanelOpen();
     await retype(user, screen.getByLabelText(/^Cruise speeds/), "55, 65");
     expect(window.location.search).toContain("cruise=55,65");
     await retype(user, screen.getByLabelText(/^Top-gear ratio/), "0.70");
@@ -168,9 +172,7 @@ describe("vehicle details panel", () => {
   });
 
   it("takes first gear and transfer-case low and shows the crawl ratio beside the regear figures", async () => {
-    const user = userEvent.setup();
-    render(<Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} />);
-    await openPanel(user);
+    const user = await renderWithPanelOpen();
     expect(screen.queryByTestId("change-crawl")).toBeNull();
     await retype(user, screen.getByLabelText(/^First-gear ratio/), "4.03");
     await retype(user, screen.getByLabelText(/^Transfer-case low ratio/), "2.72");
@@ -182,9 +184,7 @@ describe("vehicle details panel", () => {
   });
 
   it("converts each unit-bearing field on a unit switch even while another field has an error", async () => {
-    const user = userEvent.setup();
-    render(<Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} />);
-    await openPanel(user);
+    const user = await renderWithPanelOpen();
     await retype(user, screen.getByLabelText(/^Fender line/), "5-1/2");
     await retype(user, screen.getByLabelText(/^Cruise speeds/), "55, 65");
     await retype(user, screen.getByLabelText(/^Axle ratio/), "abc");
@@ -203,9 +203,7 @@ describe("vehicle details panel", () => {
   });
 
   it("keeps an unreadable unit-bearing text on a unit switch and says the unit changed under it", async () => {
-    const user = userEvent.setup();
-    render(<Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} />);
-    await openPanel(user);
+    const user = await renderWithPanelOpen();
     await retype(user, screen.getByLabelText(/^Fender line/), "far");
     await user.click(screen.getByRole("radio", { name: "Metric" }));
     const fender = screen.getByLabelText(/^Fender line from hub face \(mm\)/);
@@ -218,8 +216,7 @@ describe("vehicle details panel", () => {
   });
 
   it("opens by itself when a vehicle figure has an error, stays open once it is fixed, and closes when the person closes it", async () => {
-    const user = userEvent.setup();
-    render(<Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} />);
+    const user = renderDefault();
     expect(panel().open).toBe(false);
     const axle = screen.getByLabelText(/^Axle ratio/);
     await user.clear(axle);

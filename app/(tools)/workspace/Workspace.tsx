@@ -1,10 +1,11 @@
 "use client";
 import dynamic from "next/dynamic";
 import { type ReactNode, useCallback, useEffect, useMemo, useRef, useState } from "react";
-import { CrossSection, type DrawnLimits } from "@/components/comparison/CrossSection";
+import { ChartsSection } from "@/components/comparison/ChartsSection";
+import type { DrawnLimits } from "@/components/comparison/CrossSection";
 import { DisplayToggle } from "@/components/comparison/DisplayToggle";
-import { LazyComparisonCharts } from "@/components/comparison/LazyComparisonCharts";
-import { HeadlineChanges, SetupDetailTable, WarningList } from "@/components/comparison/ResultsPanel";
+import { DrawingAndWarnings } from "@/components/comparison/DrawingAndWarnings";
+import { HeadlineChanges, SetupDetailTable } from "@/components/comparison/ResultsPanel";
 import { useDisplayPrefs } from "@/components/comparison/useDisplayPrefs";
 import { Button } from "@/components/ui/Button";
 import { computeComparison } from "@/lib/comparisons/compute";
@@ -285,21 +286,8 @@ export function Workspace({
             </p>
           </div>
           <HeadlineChanges result={result} prefs={prefs} />
-          <div className="grid items-start gap-6 lg:grid-cols-[3fr_2fr]">
-            <section aria-labelledby="drawing-title" className="rounded-card bg-white p-3 shadow-card ring-1 ring-basalt-100 sm:p-4">
-              <h2 id="drawing-title" className="mb-2 text-lg font-semibold">
-                Side by side at the hub
-              </h2>
-              <CrossSection result={result} prefs={prefs} limits={vehicleId ? limits : null} />
-            </section>
-            <WarningList result={result} prefs={prefs} />
-          </div>
-          <section aria-labelledby="charts-title">
-            <h2 id="charts-title" className="mb-2 text-lg font-semibold">
-              Charts
-            </h2>
-            <LazyComparisonCharts result={result} prefs={prefs} />
-          </section>
+          <DrawingAndWarnings result={result} prefs={prefs} limits={vehicleId ? limits : null} />
+          <ChartsSection result={result} prefs={prefs} />
           <SetupDetailTable result={result} prefs={prefs} />
         </div>
         <LoadPressurePanel currentTire={s.good.current.tire} plannedTire={s.good.planned.tire} prefs={prefs} />

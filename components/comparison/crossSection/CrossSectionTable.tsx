@@ -1,3 +1,4 @@
+import { type FigureColumn, FigureTable } from "@/components/ui/FigureTable";
 import type { ComparisonResult } from "@/lib/comparisons/compute";
 import { type DisplayPrefs, formatNumber, formatPartThickness } from "@/lib/comparisons/format";
 import type { CrossSectionModel } from "@/lib/fitment/crossSection";
@@ -8,6 +9,20 @@ const NOT_DRAWN = {
   "fore-aft": "not in this section (ahead of or behind the tire)",
   "full-lock": "not in this section (measured at full lock)",
 } as const;
+
+/** A row of the vehicle table: the part or line, and where it is. */
+type Place = { key: string; label: string; where: string };
+const PLACE_COLUMNS: FigureColumn<Place>[] = [
+  { id: "part", header: "Part or line", cell: (p) => p.label },
+  { id: "where", header: "Where", cell: (p) => p.where },
+];
+/** A row of the figures table: the figure, and its text for either setup. */
+type FigureRow = [string, (side: "current" | "planned") => string];
+const FIGURE_COLUMNS: FigureColumn<FigureRow>[] = [
+  { id: "figure", header: "Figure", cell: ([label]) => label },
+  { id: "current", header: "Current", cell: ([, value]) => value("current") },
+  { id: "planned", header: "Planned", cell: ([, value]) => value("planned") },
+];
 
 /**
  * The drawing's figures as tables, for screen readers (visually hidden; the picture itself is one
@@ -24,8 +39,7 @@ export function CrossSectionTable({
   model: CrossSectionModel;
   prefs: DisplayPrefs;
 }) {
-  const sides = ["current", "planned"] as const;
-  const rows: [string, (side: (typeof sides)[number]) => string][] = [
+  const rows: FigureRow[] = [
     ["Tire", (s) => r[s].tireText],
     ["Wheel", (s) => `${r[s].wheelDiameterIn} × ${r[s].wheelWidthIn} in`],
     ["Offset (rim centreline to mounting face)", (s) => offsetText(r[s].offsetMm)],
@@ -43,77 +57,57 @@ export function CrossSectionTable({
     ["Reach outboard of the hub face", (s) => len(r[s].outerSwingMm, prefs)],
   ];
   const g = model.groundChangeMm;
-  const limits = model.limits.map(
-    (l) =>
-      [
-        l.id === "inner-limit"
-          ? "Inner limit (nearest inboard part)"
-          : l.id === "fender-lip"
-            ? "Fender lip (nearest outboard part)"
-            : "Fender line (entered)",
-        `${len(Math.abs(l.x), prefs)} ${l.x < 0 ? "inboard" : "outboard"} of the hub face`,
-      ] as const,
-  );
+  const limits = model.limits.map((l): Place => {
+    const label =
+      l.id === "inner-limit"
+        ? "Inner limit (nearest inboard part)"
+        : l.id === "fender-lip"
+          ? "Fender lip (nearest outboard part)"
+          : "Fender line (entered)";
+    return { key: label, label, where: `${len(Math.abs(l.x), prefs)} ${l.x < 0 ? "inboard" : "outboard"} of the hub face` };
+  });
+  const parts = model.parts.map((p): Place => ({
+    key: p.id,
+    label: p.label,
+    where: p.at
+      ? `${p.direction === "upward" ? `${len(p.distanceMm, prefs)} above the tread it was measured with` : `${len(Math.abs(p.at.x), prefs)} ${p.at.x < 0 ? "inboard" : "outboard"} of the hub face at hub height`}; ${len(p.predictedMm, prefs)} predicted with the planned setup, ${STATUS[p.status]}`
+      : `${NOT_DRAWN[p.notDrawn!]}; ${len(p.predictedMm, prefs)} predicted with the planned setup, ${STATUS[p.status]}`,
+  }));
+  const axis = model.steeringAxis;
+  const steering: Place[] = axis
+    ? [
+        {
+          key: "steering-axis",
+          label: "Steering axis",
+          where: `${formatNumber(axis.deg, 1)}° kingpin inclination, through the current tire's contact centre (zero scrub assumed), ${len(Math.abs(axis.atAxle.x), prefs)} inboard of the hub face at axle height`,
+        },
+      ]
+    : [];
+  const places = [...limits, ...parts, ...steering];
   return (
     <div className="sr-only" data-testid="cross-section-table">
-      <table>
-        <caption>Figures drawn in the cross-section</caption>
-        <thead>
-          <tr>
-            <th scope="col">Figure</th>
-            <th scope="col">Current</th>
-            <th scope="col">Planned</th>
-          </tr>
-        </thead>
-        <tbody>
-          {rows.map(([label, value]) => (
-            <tr key={label}>
-              <th scope="row">{label}</th>
-              {sides.map((s) => (
-                <td key={s}>{value(s)}</td>
-              ))}
-            </tr>
-          ))}
+      <FigureTable
+        look="bare"
+        caption="Figures drawn in the cross-section"
+        columns={FIGURE_COLUMNS}
+        rows={rows}
+        rowKey={([label]) => label}
+        footRows={
           <tr>
             <th scope="row">Ground clearance change</th>
             <td colSpan={2}>{g === 0 ? "none" : `${signedLen(g, prefs)} (the planned setup sits ${g > 0 ? "higher" : "lower"})`}</td>
           </tr>
-        </tbody>
-      </table>
-      {(limits.length > 0 || model.parts.length > 0 || model.steeringAxis) && (
-        <table id={`${id}-vehicle`}>
-          <caption>Vehicle parts and lines drawn</caption>
-          <thead>
-            <tr>
-              <th scope="col">Part or line</th>
-              <th scope="col">Where</th>
-            </tr>
-          </thead>
-          <tbody>
-            {limits.map(([label, where]) => (
-              <tr key={label}>
-                <th scope="row">{label}</th>
-                <td>{where}</td>
-              </tr>
-            ))}
-            {model.parts.map((p) => (
-              <tr key={p.id}>
-                <th scope="row">{p.label}</th>
-                <td>
-                  {p.at
-                    ? `${p.direction === "upward" ? `${len(p.distanceMm, prefs)} above the tread it was measured with` : `${len(Math.abs(p.at.x), prefs)} ${p.at.x < 0 ? "inboard" : "outboard"} of the hub face at hub height`}; ${len(p.predictedMm, prefs)} predicted with the planned setup, ${STATUS[p.status]}`
-                    : `${NOT_DRAWN[p.notDrawn!]}; ${len(p.predictedMm, prefs)} predicted with the planned setup, ${STATUS[p.status]}`}
-                </td>
-              </tr>
-            ))}
-            {model.steeringAxis && (
-              <tr>
-                <th scope="row">Steering axis</th>
-                <td>{`${formatNumber(model.steeringAxis.deg, 1)}° kingpin inclination, through the current tire's contact centre (zero scrub assumed), ${len(Math.abs(model.steeringAxis.atAxle.x), prefs)} inboard of the hub face at axle height`}</td>
-              </tr>
-            )}
-          </tbody>
-        </table>
+        }
+      />
+      {places.length > 0 && (
+        <FigureTable
+          look="bare"
+          id={`${id}-vehicle`}
+          caption="Vehicle parts and lines drawn"
+          columns={PLACE_COLUMNS}
+          rows={places}
+          rowKey={(p) => p.key}
+        />
       )}
     </div>
   );

@@ -1,7 +1,5 @@
 // @vitest-environment jsdom
 import { cleanup, render, screen } from "@testing-library/react";
-import type { ReactElement } from "react";
-import { cloneElement } from "react";
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
 import { PREFS_STORAGE_KEY } from "@/lib/comparisons/format";
 import { DEFAULT_INPUT } from "@/lib/comparisons/schema";
@@ -13,14 +11,7 @@ vi.mock("@/components/comparison/LazyComparisonCharts", async () => {
   const { default: ComparisonCharts } = await import("@/components/comparison/ComparisonCharts");
   return { LazyComparisonCharts: ComparisonCharts };
 });
-vi.mock("recharts", async (importOriginal) => {
-  const actual = await importOriginal<typeof import("recharts")>();
-  return {
-    ...actual,
-    ResponsiveContainer: ({ children }: { children: ReactElement<{ width?: number; height?: number }> }) =>
-      cloneElement(children, { width: 480, height: 240 }),
-  };
-});
+vi.mock("recharts", async (importOriginal) => (await import("@/components/comparison/chartsTestUtil")).fixedSizeRecharts(importOriginal));
 
 const stat = (id: string) => [...screen.getByTestId(id).querySelectorAll("dt, dd")].map((n) => n.textContent);
 const xTicks = (name: RegExp) =>

@@ -1,10 +1,10 @@
 "use client";
 import Link from "next/link";
 import { useMemo } from "react";
-import { CrossSection } from "@/components/comparison/CrossSection";
+import { ChartsSection } from "@/components/comparison/ChartsSection";
 import { DisplayToggle } from "@/components/comparison/DisplayToggle";
-import { LazyComparisonCharts } from "@/components/comparison/LazyComparisonCharts";
-import { HeadlineChanges, SetupDetailTable, WarningList } from "@/components/comparison/ResultsPanel";
+import { DrawingAndWarnings } from "@/components/comparison/DrawingAndWarnings";
+import { HeadlineChanges, SetupDetailTable } from "@/components/comparison/ResultsPanel";
 import { useDisplayPrefs } from "@/components/comparison/useDisplayPrefs";
 import { buttonClass } from "@/components/ui/Button";
 import { computeComparison } from "@/lib/comparisons/compute";
@@ -55,22 +55,9 @@ export function SharedView({ name, slug, input }: { name: string; slug: string; 
         </div>
       </div>
       <HeadlineChanges result={result} prefs={prefs} />
-      <div className="grid items-start gap-6 lg:grid-cols-[3fr_2fr]">
-        <section aria-labelledby="drawing-title" className="rounded-card bg-white p-3 shadow-card ring-1 ring-basalt-100 sm:p-4">
-          <h2 id="drawing-title" className="mb-2 text-lg font-semibold">
-            Side by side at the hub
-          </h2>
-          <CrossSection result={result} prefs={prefs} />
-        </section>
-        <WarningList result={result} prefs={prefs} />
-      </div>
+      <DrawingAndWarnings result={result} prefs={prefs} />
       <VehicleSummary input={input} prefs={prefs} />
-      <section aria-labelledby="charts-title">
-        <h2 id="charts-title" className="mb-2 text-lg font-semibold">
-          Charts
-        </h2>
-        <LazyComparisonCharts result={result} prefs={prefs} />
-      </section>
+      <ChartsSection result={result} prefs={prefs} />
       <SetupDetailTable result={result} prefs={prefs} />
       <p className="rounded-lg bg-tight-100 px-4 py-3 text-sm text-tight-800">
         Bigger tires and different offsets change braking, steering effort and the load on wheel bearings, ball joints and steering parts.
