@@ -1,25 +1,15 @@
 "use client";
 import { useMemo } from "react";
-import { TextField } from "@/components/ui/TextField";
+import { MeasureField } from "@/components/comparison/MeasureField";
 import type { ComparisonResult } from "@/lib/comparisons/compute";
 import { type DisplayPrefs, formatNumber } from "@/lib/comparisons/format";
-import { type MeasureSpec, measureUnit, readMeasure } from "@/lib/comparisons/measureEntry";
-import { type TrailAngle, type TrailField, type TrailLabels, planTrail } from "@/lib/comparisons/trailPlan";
-import { TRAIL_ANGLE_LIMITS_MM } from "@/lib/fitment";
+import { measureUnit, readMeasure } from "@/lib/comparisons/measureEntry";
+import { TRAIL_SPEC, type TrailAngle, type TrailField, type TrailLabels, planTrail } from "@/lib/comparisons/trailPlan";
 import { useMeasureEntries } from "./useMeasureEntries";
 
 const FIELDS: TrailField[] = ["frontHeight", "frontAhead", "rearHeight", "rearBehind", "wheelbase", "midHeight", "lift"];
 const QUANTITIES = Object.fromEntries(FIELDS.map((k) => [k, "length"])) as Record<TrailField, "length">;
-const L = TRAIL_ANGLE_LIMITS_MM;
-const SPEC: Record<TrailField, MeasureSpec> = {
-  frontHeight: { quantity: "length", ...L.height, example: { imperial: "24", metric: "600" } },
-  frontAhead: { quantity: "length", ...L.offset, example: { imperial: "35", metric: "900" } },
-  rearHeight: { quantity: "length", ...L.height, example: { imperial: "26", metric: "650" } },
-  rearBehind: { quantity: "length", ...L.offset, example: { imperial: "40", metric: "1000" } },
-  wheelbase: { quantity: "length", ...L.wheelbase, example: { imperial: "118", metric: "3000" } },
-  midHeight: { quantity: "length", ...L.height, example: { imperial: "11", metric: "280" } },
-  lift: { quantity: "length", ...L.lift, example: { imperial: "2.5", metric: "65" } },
-};
+const SPEC = TRAIL_SPEC;
 const BASE: Record<TrailField, string> = {
   frontHeight: "Front corner height",
   frontAhead: "Front corner ahead of the front axle",
@@ -99,14 +89,12 @@ export function TrailAnglesPanel({ result, prefs }: { result: ComparisonResult; 
       </div>
       <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
         {FIELDS.map((k) => (
-          <TextField
+          <MeasureField
             key={k}
             label={labels[k]}
             name={`trail-${k}`}
-            inputMode="decimal"
-            autoComplete="off"
-            value={entries[k].text}
-            onChange={(ev) => set(k, ev.target.value)}
+            entry={entries[k]}
+            onText={(t) => set(k, t)}
             error={message(k)}
             hint={HINT[k]}
           />

@@ -16,6 +16,7 @@ import { type Setup, toEngineSetup } from "@/lib/setup/model";
 import { PhotoDrop } from "../_components/PhotoDrop";
 import { AddPoint } from "./AddPoint";
 import { DeletePoint } from "./DeletePoint";
+import { LoadProfileCard } from "./LoadProfileCard";
 import { PlannedPanel } from "./PlannedPanel";
 
 export function VehicleView({ initial, initialPlanned }: { initial: VehicleDetail; initialPlanned: Setup | null }) {
@@ -139,6 +140,8 @@ export function VehicleView({ initial, initialPlanned }: { initial: VehicleDetai
         )}
         <AddPoint vehicleId={id} />
       </Card>
+
+      <LoadProfileCard vehicle={v} />
 
       <PlannedPanel detail={q.data} initialPlanned={initialPlanned} />
     </div>
