@@ -38,6 +38,13 @@ export interface TrailAngle {
   plannedDeg: number;
 }
 
+/** The angles' names on every screen. */
+export const TRAIL_ANGLE_NAME: Readonly<Record<TrailAngle["kind"], string>> = {
+  approach: "Approach",
+  departure: "Departure",
+  breakover: "Ramp breakover",
+};
+
 const ENGINE_FIELD: Record<string, "height" | "offset" | "lift"> = {
   cornerHeightMm: "height",
   cornerOffsetMm: "offset",

@@ -9,7 +9,7 @@ import { measureUnit, readMeasure } from "@/lib/comparisons/measureEntry";
 import type { VehicleKind } from "@/lib/fitment";
 import { AiredDownGuidance } from "./AiredDownGuidance";
 import { LazyLoadPressureChart } from "./LazyLoadPressureChart";
-import { LoadPressureFigures } from "./LoadPressureFigures";
+import { LoadPressureFigures } from "@/components/comparison/LoadPressureFigures";
 import { useMeasureEntries } from "./useMeasureEntries";
 
 const QUANTITIES = {

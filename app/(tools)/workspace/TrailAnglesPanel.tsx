@@ -1,10 +1,11 @@
 "use client";
 import { useMemo } from "react";
 import { MeasureField } from "@/components/comparison/MeasureField";
+import { TrailAngleTable } from "@/components/comparison/TrailAngleTable";
 import type { ComparisonResult } from "@/lib/comparisons/compute";
 import { type DisplayPrefs, formatNumber } from "@/lib/comparisons/format";
 import { measureUnit, readMeasure } from "@/lib/comparisons/measureEntry";
-import { TRAIL_SPEC, type TrailAngle, type TrailField, type TrailLabels, planTrail } from "@/lib/comparisons/trailPlan";
+import { TRAIL_SPEC, type TrailField, type TrailLabels, planTrail } from "@/lib/comparisons/trailPlan";
 import { useMeasureEntries } from "./useMeasureEntries";
 
 const FIELDS: TrailField[] = ["frontHeight", "frontAhead", "rearHeight", "rearBehind", "wheelbase", "midHeight", "lift"];
@@ -25,7 +26,6 @@ const HINT: Partial<Record<TrailField, string>> = {
   midHeight: "The lowest point of the underbody halfway between the axles (frame, skid plate), from the ground.",
   lift: "Raises every body point measured here; leave empty for none.",
 };
-const NAME: Record<TrailAngle["kind"], string> = { approach: "Approach", departure: "Departure", breakover: "Ramp breakover" };
 
 /** Labels for a display choice; messages name each field by this same text. */
 export function trailLabels(prefs: DisplayPrefs): TrailLabels {
@@ -102,36 +102,7 @@ export function TrailAnglesPanel({ result, prefs }: { result: ComparisonResult; 
       </div>
       <div aria-live="polite">
         {angles.length > 0 ? (
-          <table className="w-full text-sm" data-testid="trail-angles">
-            <thead>
-              <tr className="text-left text-xs uppercase tracking-wide text-basalt-600">
-                <th scope="col" className="pb-1 pr-3">
-                  Angle
-                </th>
-                <th scope="col" className="pb-1 pr-3">
-                  Current
-                </th>
-                <th scope="col" className="pb-1 pr-3">
-                  Planned
-                </th>
-                <th scope="col" className="pb-1">
-                  Change
-                </th>
-              </tr>
-            </thead>
-            <tbody>
-              {angles.map((a) => (
-                <tr key={a.kind} className="border-t border-basalt-100" data-testid={`angle-${a.kind}`}>
-                  <th scope="row" className="py-2 pr-3 text-left font-semibold">
-                    {NAME[a.kind]}
-                  </th>
-                  <td className="py-2 pr-3">{formatNumber(a.currentDeg, 1)}°</td>
-                  <td className="py-2 pr-3">{formatNumber(a.plannedDeg, 1)}°</td>
-                  <td className="py-2">{formatNumber(a.plannedDeg - a.currentDeg, 1, { signed: true })}°</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
+          <TrailAngleTable angles={angles} />
         ) : (
           <p className="text-sm text-basalt-600">Enter a body point and its distance from the axle to see its angle.</p>
         )}

@@ -1,25 +1,14 @@
 "use client";
-import { useQuery } from "@tanstack/react-query";
 import { useMemo } from "react";
 import { DisplayToggle } from "@/components/comparison/DisplayToggle";
 import { useDisplayPrefs } from "@/components/comparison/useDisplayPrefs";
 import { Card } from "@/components/ui/Card";
-import type { LoadProfile } from "@/lib/garage/loadProfile";
 import type { Vehicle } from "@/lib/garage/types";
 import { setupGeometry } from "@/lib/fitment";
-import { api } from "@/lib/platform/client/api";
-import { queryKeys } from "@/lib/platform/query/keys";
 import { toEngineSetup } from "@/lib/setup/model";
 import { BodyPointsDrawing } from "./BodyPointsDrawing";
 import { LoadProfileForm } from "./LoadProfileForm";
-
-/** The vehicle's load profile as the page reads it (shared with the planned panel through the query cache). */
-export function useLoadProfile(vehicleId: string) {
-  return useQuery({
-    queryKey: queryKeys.garage.loadProfile(vehicleId),
-    queryFn: () => api<{ profile: LoadProfile | null }>(`/api/vehicles/${vehicleId}/load`),
-  });
-}
+import { useLoadProfile } from "./useLoadProfile";
 
 /** Placard, scale weights and body points of a garage vehicle, with the drawing of where to measure. */
 export function LoadProfileCard({ vehicle }: { vehicle: Vehicle }) {

@@ -18,6 +18,7 @@ import { AddPoint } from "./AddPoint";
 import { DeletePoint } from "./DeletePoint";
 import { LoadProfileCard } from "./LoadProfileCard";
 import { PlannedPanel } from "./PlannedPanel";
+import { useLoadProfile } from "./useLoadProfile";
 
 export function VehicleView({ initial, initialPlanned }: { initial: VehicleDetail; initialPlanned: Setup | null }) {
   const id = initial.vehicle.id;
@@ -28,6 +29,7 @@ export function VehicleView({ initial, initialPlanned }: { initial: VehicleDetai
     initialData: initial,
   });
   const { vehicle: v, clearances, photos } = q.data;
+  const loadProfile = useLoadProfile(id).data?.profile ?? null;
   const [confirming, setConfirming] = useState(false);
   const del = useMutation({
     mutationFn: () => api(`/api/vehicles/${id}`, { method: "DELETE" }),
@@ -143,7 +145,7 @@ export function VehicleView({ initial, initialPlanned }: { initial: VehicleDetai
 
       <LoadProfileCard vehicle={v} />
 
-      <PlannedPanel detail={q.data} initialPlanned={initialPlanned} />
+      <PlannedPanel detail={q.data} initialPlanned={initialPlanned} loadProfile={loadProfile} />
     </div>
   );
 }

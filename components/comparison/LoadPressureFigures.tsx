@@ -1,6 +1,7 @@
 import { type DisplayPrefs, formatLoad } from "@/lib/comparisons/format";
 import type { AxlePlan, LoadPlan, PressureReason } from "@/lib/comparisons/loadPlan";
 import { pressureText } from "@/lib/comparisons/pressureText";
+import { ColumnHeads } from "./ColumnHeads";
 
 const REASON: Record<PressureReason, string> = {
   placard: "the placard load (equivalent pressure)",
@@ -44,23 +45,7 @@ export function LoadPressureFigures({ plan, prefs }: { plan: LoadPlan; prefs: Di
             Cold pressures for {p.text}, carrying what {plan.placard.text} carries at the placard pressure
           </caption>
           <thead>
-            <tr className="text-left text-xs uppercase tracking-wide text-basalt-600">
-              <th scope="col" className="pb-1 pr-3">
-                Axle
-              </th>
-              <th scope="col" className="pb-1 pr-3">
-                Pressure to set
-              </th>
-              <th scope="col" className="pb-1 pr-3">
-                Equivalent pressure
-              </th>
-              <th scope="col" className="pb-1 pr-3">
-                Load per tire
-              </th>
-              <th scope="col" className="pb-1">
-                Reserve at that pressure
-              </th>
-            </tr>
+            <ColumnHeads names={["Axle", "Pressure to set", "Equivalent pressure", "Load per tire", "Reserve at that pressure"]} />
           </thead>
           <tbody>
             {plan.axles.map((a) => (
