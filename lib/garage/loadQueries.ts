@@ -101,4 +101,22 @@ export async function loadProfilesOf(db: Knex, vehicleIds: string[]): Promise<Ma
   return new Map(rows.map((r) => [r.vehicle_id, loadProfileDto(r)]));
 }
 
-export const loadQueries = bindAppDb({ deleteLoadProfile, getLoadProfile, loadProfilesOf, saveLoadProfile });
+/**
+ * The stored profile and current setup of the vehicle a shared comparison belongs to (same
+ * owner), for the share page's pressure and angle figures; undefined when the link is not live or
+ * the comparison has no vehicle with a profile. Only figures derived from it reach the page.
+ */
+export async function sharedVehicleLoad(db: Knex, slug: string): Promise<{ profile: LoadProfile; currentSetup: Setup } | undefined> {
+  const row = (await db("comparison_shares as s")
+    .join("comparisons as c", "c.id", "s.comparison_id")
+    .join("vehicles as v", function () {
+      this.on("v.id", "=", "c.vehicle_id").andOn("v.user_id", "=", "c.owner_id");
+    })
+    .join("vehicle_load_profiles as p", "p.vehicle_id", "v.id")
+    .where("s.slug", slug)
+    .whereNull("s.revoked_at")
+    .first("p.*", "v.current_setup")) as (VehicleLoadProfileRow & { current_setup: unknown }) | undefined;
+  return row ? { profile: loadProfileDto(row), currentSetup: row.current_setup as Setup } : undefined;
+}
+
+export const loadQueries = bindAppDb({ deleteLoadProfile, getLoadProfile, loadProfilesOf, saveLoadProfile, sharedVehicleLoad });

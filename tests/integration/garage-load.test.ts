@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { psiToKpa } from "@/lib/fitment";
+import { DEFAULT_INPUT } from "@/lib/comparisons/model";
 import { DEMO_PROFILE } from "@/lib/garage/loadTestUtil";
 import { rebuild, testDb } from "./support/db";
 import { ctx, req } from "./support/requests";
@@ -21,6 +22,9 @@ function as(who: Who | null) {
 const vehicles = await import("@/app/api/vehicles/route");
 const vehicle = await import("@/app/api/vehicles/[id]/route");
 const load = await import("@/app/api/vehicles/[id]/load/route");
+const comparisons = await import("@/app/api/comparisons/route");
+const share = await import("@/app/api/comparisons/[id]/share/route");
+const { sharedLoadTrail } = await import("@/app/(share)/s/[slug]/loadTrail");
 
 const SETUP = { tire: "265/70R17 113T", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 }, spacerMm: 0 };
 const PROFILE = DEMO_PROFILE;
@@ -122,6 +126,25 @@ describe("vehicle load profile", () => {
     const res = await put({ ...PROFILE, wheelbaseMm: "114 in" });
     expect(res.status).toBe(422);
     expect((await res.json()).fieldErrors.wheelbaseMm[0]).toBe("wheelbaseMm: a number in mm or null.");
+  });
+
+  it("gives a shared comparison of the vehicle the pressure to set and the angle changes, nothing of the profile itself", async () => {
+    as("ada");
+    const made = await comparisons.POST(req("POST", "/api/comparisons", { name: "Big tires", input: DEFAULT_INPUT, vehicleId: id }), ctx());
+    expect(made.status).toBe(201);
+    const cid = (await made.json()).comparison.id;
+    const shared = await share.POST(req("POST", `/api/comparisons/${cid}/share`), ctx({ id: cid }));
+    const { slug } = (await shared.json()).share;
+    const f = await sharedLoadTrail(slug, DEFAULT_INPUT.planned);
+    // 37x12.50R17LT LRD: the flotation road minimum 0.5833 × 50 psi = 29.2 psi = 201.1 kPa (above the equivalent pressure).
+    expect(f?.load?.plan?.axles.map((a) => a.pressureToSetKpa)).toEqual([expect.closeTo(201.1, 0), expect.closeTo(201.1, 0)]);
+    expect(f?.angles.map((a) => a.kind)).toEqual(["approach", "departure", "breakover"]);
+    expect(f?.angles.every((a) => a.plannedDeg > a.currentDeg)).toBe(true);
+    expect(JSON.stringify(f)).not.toContain("frontCornerHeightMm");
+    const unlinked = await comparisons.POST(req("POST", "/api/comparisons", { name: "No vehicle", input: DEFAULT_INPUT }), ctx());
+    const uid = (await unlinked.json()).comparison.id;
+    const s2 = (await (await share.POST(req("POST", `/api/comparisons/${uid}/share`), ctx({ id: uid }))).json()).share;
+    expect(await sharedLoadTrail(s2.slug, DEFAULT_INPUT.planned)).toBeNull();
   });
 
   it("is another owner's 404, and anonymous callers are refused first", async () => {

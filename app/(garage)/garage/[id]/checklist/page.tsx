@@ -14,6 +14,9 @@ import { setupFromQuery, setupQuery } from "@/lib/setup/url";
 import { checklistQueries } from "@/lib/garage/checklistQueries";
 import { marginMmParam } from "@/lib/garage/schema";
 import { ChecklistView } from "./ChecklistView";
+import { Card } from "@/components/ui/Card";
+import { loadQueries } from "@/lib/garage/loadQueries";
+import { PlannedLoadTrail } from "../PlannedLoadTrail";
 
 export const metadata: Metadata = { title: "Install checklist" };
 
@@ -58,7 +61,7 @@ export default async function ChecklistPage({
     );
   }
   const { vehicle } = r.detail;
-  const ticked = await checklistQueries.checklistTicks(r);
+  const [ticked, loadProfile] = await Promise.all([checklistQueries.checklistTicks(r), loadQueries.getLoadProfile(caller.userId, id)]);
   const marginNote = `Margin ${bothUnits(r.marginMm)}${r.marginMm === vehicle.clearanceMarginMm ? " (this vehicle's)" : " (tried instead of this vehicle's)"}.`;
   const backHref = r.comparison
     ? workspaceUrl({ input: r.comparison.input, savedId: r.comparison.id, vehicleId: vehicle.id })
@@ -83,6 +86,10 @@ export default async function ChecklistPage({
           {setupLine(vehicle.currentSetup)}. The checklist works from the vehicle&apos;s, the setup its points were measured against.
         </Alert>
       )}
+      <Card className="mb-5 print:shadow-none print:ring-0">
+        <h2 className="text-lg font-semibold">Cold pressure and trail angles</h2>
+        <PlannedLoadTrail vehicle={vehicle} planned={r.planned} profile={loadProfile} />
+      </Card>
       <ChecklistView
         vehicleId={id}
         source={r.comparison ? { comparisonId: r.comparison.id, marginMm: r.marginMm } : { planned: r.planned, marginMm: r.marginMm }}
