@@ -21,7 +21,7 @@ const PLANNED: Setup = {
 describe("the vehicle page's pressure to set and angle changes", () => {
   it("shows the pressure per axle with the caution and the angles, in both unit systems", async () => {
     const user = userEvent.setup();
-    render(<PlannedLoadTrail vehicle={VEHICLE} planned={PLANNED} profile={DEMO_PROFILE} />);
+    render(<PlannedLoadTrail vehicle={VEHICLE} planned={PLANNED} profile={DEMO_PROFILE} toggle />);
     // Flotation load range D: road minimum 0.5833 × 50 psi = 29.2 psi = 201 kPa (1 psi = 6.894757 kPa, NIST SP 811).
     expect(screen.getByTestId("set-front").textContent).toBe("29.2 psi (201 kPa, 2.01 bar)");
     expect(screen.getByText(/never inflate above the maximum on the sidewall or the wheel/)).toBeTruthy();

@@ -88,7 +88,7 @@ export default async function ChecklistPage({
       )}
       <Card className="mb-5 print:shadow-none print:ring-0">
         <h2 className="text-lg font-semibold">Cold pressure and trail angles</h2>
-        <PlannedLoadTrail vehicle={vehicle} planned={r.planned} profile={loadProfile} />
+        <PlannedLoadTrail vehicle={vehicle} planned={r.planned} profile={loadProfile} toggle />
       </Card>
       <ChecklistView
         vehicleId={id}
