@@ -23,6 +23,7 @@ import {
   loadPressureBasis,
   pressureForLoad,
 } from "@/lib/fitment";
+import type { MeasureSpec } from "./measureEntry";
 
 export type LoadField =
   "placardTire" | "placardFront" | "placardRear" | "frontAxle" | "rearAxle" | "plannedTire" | "plannedMaxLoad" | "plannedMaxPressure";
@@ -254,3 +255,24 @@ export const LOAD_FIELD_BOUNDS = Object.freeze({
   maxLoadKg: LOAD_PRESSURE_LIMITS.maxLoadKg,
   maxPressureKpa: LOAD_PRESSURE_LIMITS.maxPressureKpa,
 });
+
+const pressureSpec = (bounds: { min: number; max: number }, imperial: string, metric: string): MeasureSpec => ({
+  quantity: "pressure",
+  ...bounds,
+  example: { imperial, metric },
+});
+const loadSpec = (bounds: { min: number; max: number }, imperial: string, metric: string): MeasureSpec => ({
+  quantity: "load",
+  ...bounds,
+  example: { imperial, metric },
+});
+
+/** The load panel's typed figures with their bounds and examples (also the garage's placard form). */
+export const LOAD_SPEC = {
+  placardFront: pressureSpec(LOAD_FIELD_BOUNDS.pressureKpa, "35", "240"),
+  placardRear: pressureSpec(LOAD_FIELD_BOUNDS.pressureKpa, "35", "240"),
+  frontAxle: loadSpec(LOAD_FIELD_BOUNDS.axleKg, "3100", "1400"),
+  rearAxle: loadSpec(LOAD_FIELD_BOUNDS.axleKg, "2900", "1300"),
+  plannedMaxLoad: loadSpec(LOAD_FIELD_BOUNDS.maxLoadKg, "3525", "1600"),
+  plannedMaxPressure: pressureSpec(LOAD_FIELD_BOUNDS.maxPressureKpa, "50", "345"),
+} as const;

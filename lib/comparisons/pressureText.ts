@@ -23,3 +23,10 @@ export function pressureText(kpa: number, prefs: DisplayPrefs): string {
 export const loadIn = (kg: number, prefs: DisplayPrefs): number => (prefs.units === "metric" ? kg : kgToLb(kg));
 /** A pressure (kPa) in the chosen unit only (psi or kPa), for chart axes and tooltips. */
 export const pressureIn = (kpa: number, prefs: DisplayPrefs): number => (prefs.units === "metric" ? kpa : kpaToPsi(kpa));
+
+/**
+ * The caution beside every pressure someone may inflate by (workspace, garage, share page,
+ * quote, checklist, work order): the makers' figures win, the sidewall maximum is never passed.
+ */
+export const PRESSURE_CAUTION =
+  "Set cold, before driving. The vehicle's placard, the tire maker's load tables and the wheel maker's limits take precedence over any figure here; never inflate above the maximum on the sidewall or the wheel.";

@@ -5,7 +5,15 @@
  * Each angle stands alone: a body point the engine refuses puts its message beside that field and
  * leaves only that angle out.
  */
-import { FitmentInputError, approachAngleDeg, breakoverAngleDeg, departureAngleDeg, raiseBodyPoint } from "@/lib/fitment";
+import {
+  FitmentInputError,
+  TRAIL_ANGLE_LIMITS_MM,
+  approachAngleDeg,
+  breakoverAngleDeg,
+  departureAngleDeg,
+  raiseBodyPoint,
+} from "@/lib/fitment";
+import type { MeasureSpec } from "./measureEntry";
 
 export type TrailField = "frontHeight" | "frontAhead" | "rearHeight" | "rearBehind" | "wheelbase" | "midHeight" | "lift";
 export type TrailLabels = Record<TrailField, string>;
@@ -29,6 +37,13 @@ export interface TrailAngle {
   currentDeg: number;
   plannedDeg: number;
 }
+
+/** The angles' names on every screen. */
+export const TRAIL_ANGLE_NAME: Readonly<Record<TrailAngle["kind"], string>> = {
+  approach: "Approach",
+  departure: "Departure",
+  breakover: "Ramp breakover",
+};
 
 const ENGINE_FIELD: Record<string, "height" | "offset" | "lift"> = {
   cornerHeightMm: "height",
@@ -92,3 +107,15 @@ export function planTrail(input: TrailInput, labels: TrailLabels): { angles: Tra
     );
   return { angles, errors };
 }
+
+const L = TRAIL_ANGLE_LIMITS_MM;
+/** The trail fields with their bounds (the engine's) and examples (also the garage's body-point form). */
+export const TRAIL_SPEC: Readonly<Record<TrailField, MeasureSpec>> = {
+  frontHeight: { quantity: "length", ...L.height, example: { imperial: "24", metric: "600" } },
+  frontAhead: { quantity: "length", ...L.offset, example: { imperial: "35", metric: "900" } },
+  rearHeight: { quantity: "length", ...L.height, example: { imperial: "26", metric: "650" } },
+  rearBehind: { quantity: "length", ...L.offset, example: { imperial: "40", metric: "1000" } },
+  wheelbase: { quantity: "length", ...L.wheelbase, example: { imperial: "118", metric: "3000" } },
+  midHeight: { quantity: "length", ...L.height, example: { imperial: "11", metric: "280" } },
+  lift: { quantity: "length", ...L.lift, example: { imperial: "2.5", metric: "65" } },
+};

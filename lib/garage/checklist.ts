@@ -21,6 +21,30 @@ import { bothUnits } from "@/lib/garage/format";
 import type { Vehicle, VehicleClearance } from "@/lib/garage/types";
 import { type Setup, toEngineSetup } from "@/lib/setup/model";
 import { predictPoints } from "@/lib/garage/predict";
+import { type SetupFigures, setupFigures } from "@/lib/garage/loadFigures";
+import type { LoadProfile } from "@/lib/garage/loadProfile";
+import { PRESSURE_CAUTION, pressureText } from "@/lib/comparisons/pressureText";
+import { TRAIL_ANGLE_NAME } from "@/lib/comparisons/trailPlan";
+
+const PSI_FIRST = { units: "imperial", lengths: "decimal" } as const;
+
+/** "front 29.2 psi (201 kPa, 2.01 bar), rear …", or null without a computed plan. */
+function pressureToSetText(f: SetupFigures | null): string | null {
+  const plan = f?.load?.plan;
+  return plan ? plan.axles.map((a) => `${a.axle} ${pressureText(a.pressureToSetKpa, PSI_FIRST)}`).join(", ") : null;
+}
+
+/** "approach 43.0° → 48.2° (+5.2°), …", or null without body points. */
+function anglesText(f: SetupFigures | null): string | null {
+  if (!f || f.angles.length === 0) return null;
+  const d = (x: number) => `${x.toFixed(1)}°`;
+  return f.angles
+    .map(
+      (a) =>
+        `${TRAIL_ANGLE_NAME[a.kind].toLowerCase()} ${d(a.currentDeg)} → ${d(a.plannedDeg)} (${a.plannedDeg >= a.currentDeg ? "+" : "−"}${d(Math.abs(a.plannedDeg - a.currentDeg))})`,
+    )
+    .join(", ");
+}
 
 export type ChecklistGroup = "fit" | "drivetrain" | "wheels" | "tires";
 export const GROUP_TITLE: Record<ChecklistGroup, string> = {
@@ -50,7 +74,14 @@ const DIRECTION_FIX: Record<VehicleClearance["direction"], string> = {
   "fore-aft": "trim the bumper or body mount, or limit steering travel with the stops",
 };
 
-export function buildChecklist(input: { vehicle: Vehicle; clearances: VehicleClearance[]; planned: Setup; marginMm: number }): Checklist {
+export function buildChecklist(input: {
+  vehicle: Vehicle;
+  clearances: VehicleClearance[];
+  planned: Setup;
+  marginMm: number;
+  /** The vehicle's stored placard, axle weights and body points, when it keeps them. */
+  loadProfile?: LoadProfile | null;
+}): Checklist {
   const { vehicle: v, clearances, planned, marginMm } = input;
   const pla = toEngineSetup(planned);
   const cmp = compareSetups(toEngineSetup(v.currentSetup), pla, {
@@ -211,5 +242,22 @@ export function buildChecklist(input: { vehicle: Vehicle; clearances: VehicleCle
       `A bigger tire usually needs a different pressure from the placard's for the same load. ${l && l.maxPressureKpa !== null ? `${l.maxPressurePsi} psi = ${Math.round(l.maxPressureKpa)} kPa (from memory, TRA practice — the sidewall wins).` : ""}`.trim(),
     caution: "Inflate a tire on the vehicle or in a cage, standing clear of the sidewall.",
   });
+  const figures = input.loadProfile ? setupFigures(input.loadProfile, v.currentSetup, planned, "imperial") : null;
+  const pressureItem = items.find((i) => i.id === "pressure")!;
+  const set = pressureToSetText(figures);
+  if (set) {
+    pressureItem.title = `Pressure: set cold to ${set}`;
+    pressureItem.detail = `${pressureItem.detail} From the vehicle's placard and ${figures!.load!.from}: the equivalent pressure, never below the road minimum. ${PRESSURE_CAUTION}`;
+  }
+  const angles = anglesText(figures);
+  if (angles) {
+    items.push({
+      id: "trail-angles",
+      group: "fit",
+      title: `Trail angles: ${angles}`,
+      detail:
+        "From the body points measured with the current tires, raised by the radius change (SAE J1100 definitions). Re-measure after fitting; check bumpers, air dam and skid plates.",
+    });
+  }
   return { items, predictions };
 }

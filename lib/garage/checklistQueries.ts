@@ -2,6 +2,7 @@ import "server-only";
 import type { Knex } from "knex";
 import type { ComparisonInput } from "@/lib/comparisons/schema";
 import { type Checklist, buildChecklist } from "@/lib/garage/checklist";
+import { loadProfilesOf } from "@/lib/garage/loadQueries";
 import { setupQuery } from "@/lib/setup/url";
 import type { VehicleDetail } from "@/lib/garage/types";
 import type { Setup } from "@/lib/setup/model";
@@ -60,7 +61,8 @@ export async function resolveChecklist(
   }
   if (!planned) return { ok: false, reason: "planned" };
   const marginMm = source.marginMm ?? detail.vehicle.clearanceMarginMm;
-  return { ok: true, detail, planned, marginMm, comparison, checklist: buildChecklist({ ...detail, planned, marginMm }) };
+  const loadProfile = (await loadProfilesOf(db, [vehicleId])).get(vehicleId) ?? null;
+  return { ok: true, detail, planned, marginMm, comparison, checklist: buildChecklist({ ...detail, planned, marginMm, loadProfile }) };
 }
 
 /** The ticks saved for a resolved checklist. */

@@ -261,6 +261,7 @@ describe("sending", () => {
       money(d.quote.totalCents),
       money(d.quote.depositCents),
       "Bead seating",
+      "Cold pressure",
       "Beadlock rings",
       "re-check",
     ]) {

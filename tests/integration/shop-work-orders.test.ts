@@ -194,6 +194,12 @@ describe("signing off and the status", () => {
         "pressure",
         /^Cold pressure set \(psi\): use 10 to 120, got 350\.$/,
       ],
+      // Above the quoted 35x12.50R17LT load range E's 65 psi (flotation LT, the engine's table): refused, nothing signed.
+      [
+        { ...bodyFor("LF", "pressure"), pressure: "80", pressureUnit: "psi" },
+        "pressure",
+        /^Cold pressure set \(psi\): 80 psi \(552 kPa\) is above the highest pressure 35x12\.50R17LT 121Q LRE allows, 65 psi \(448 kPa\)/,
+      ],
       [{ ...bodyFor("LF", "balance"), innerGrams: "" }, "innerGrams", /^Inner plane weight \(g\): enter a number\.$/],
     ];
     for (const [body, field, message] of cases) {

@@ -1,15 +1,15 @@
 "use client";
 import { useMemo, useState } from "react";
-import { Segmented } from "@/components/comparison/Segmented";
+import { VehicleKindChoice } from "@/components/comparison/VehicleKindChoice";
 import { TextField } from "@/components/ui/TextField";
 import type { DisplayPrefs } from "@/lib/comparisons/format";
-import { LOAD_FIELD_BOUNDS, type LoadErrors, type LoadField, type LoadLabels, planLoad } from "@/lib/comparisons/loadPlan";
-import { type MeasureSpec, measureUnit, readMeasure } from "@/lib/comparisons/measureEntry";
+import { LOAD_SPEC, type LoadErrors, type LoadField, type LoadLabels, planLoad } from "@/lib/comparisons/loadPlan";
+import { measureUnit, readMeasure } from "@/lib/comparisons/measureEntry";
 import type { VehicleKind } from "@/lib/fitment";
 import { AiredDownGuidance } from "./AiredDownGuidance";
 import { LazyLoadPressureChart } from "./LazyLoadPressureChart";
-import { LoadPressureFigures } from "./LoadPressureFigures";
-import { measureFields } from "./measureFields";
+import { LoadPressureFigures } from "@/components/comparison/LoadPressureFigures";
+import { measureFields } from "@/components/comparison/measureFields";
 import { useMeasureEntries } from "./useMeasureEntries";
 
 const QUANTITIES = {
@@ -22,15 +22,7 @@ const QUANTITIES = {
 } as const;
 type MeasureKey = keyof typeof QUANTITIES;
 
-const B = LOAD_FIELD_BOUNDS;
-const SPEC: Record<MeasureKey, MeasureSpec> = {
-  placardFront: { quantity: "pressure", ...B.pressureKpa, example: { imperial: "35", metric: "240" } },
-  placardRear: { quantity: "pressure", ...B.pressureKpa, example: { imperial: "35", metric: "240" } },
-  frontAxle: { quantity: "load", ...B.axleKg, example: { imperial: "3100", metric: "1400" } },
-  rearAxle: { quantity: "load", ...B.axleKg, example: { imperial: "2900", metric: "1300" } },
-  plannedMaxLoad: { quantity: "load", ...B.maxLoadKg, example: { imperial: "3525", metric: "1600" } },
-  plannedMaxPressure: { quantity: "pressure", ...B.maxPressureKpa, example: { imperial: "50", metric: "345" } },
-};
+const SPEC = LOAD_SPEC;
 const OPTIONAL: ReadonlySet<MeasureKey> = new Set(["plannedMaxLoad", "plannedMaxPressure"]);
 
 /** The panel's labels for a display choice; messages name each field by this same text. */
@@ -133,16 +125,7 @@ export function LoadPressurePanel({ currentTire, plannedTire, prefs }: { current
         {measureField("placardRear")}
         {measureField("frontAxle")}
         {measureField("rearAxle")}
-        <Segmented<VehicleKind>
-          legend="Vehicle"
-          name="load-vehicle"
-          value={vehicle}
-          options={[
-            { value: "light-truck", label: "Truck, SUV, van" },
-            { value: "passenger-car", label: "Car" },
-          ]}
-          onChange={setVehicle}
-        />
+        <VehicleKindChoice name="load-vehicle" value={vehicle} onChange={setVehicle} />
       </div>
       <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
         <div className="flex flex-col gap-1 text-sm">

@@ -1,26 +1,16 @@
 "use client";
 import { useMemo } from "react";
-import { type FigureColumn, FigureTable } from "@/components/ui/FigureTable";
+import { TrailAngleTable } from "@/components/comparison/TrailAngleTable";
+import { measureFields } from "@/components/comparison/measureFields";
 import type { ComparisonResult } from "@/lib/comparisons/compute";
 import { type DisplayPrefs, formatNumber } from "@/lib/comparisons/format";
-import { type MeasureSpec, measureUnit, readMeasure } from "@/lib/comparisons/measureEntry";
-import { type TrailAngle, type TrailField, type TrailLabels, planTrail } from "@/lib/comparisons/trailPlan";
-import { TRAIL_ANGLE_LIMITS_MM } from "@/lib/fitment";
-import { measureFields } from "./measureFields";
+import { measureUnit, readMeasure } from "@/lib/comparisons/measureEntry";
+import { TRAIL_SPEC, type TrailField, type TrailLabels, planTrail } from "@/lib/comparisons/trailPlan";
 import { useMeasureEntries } from "./useMeasureEntries";
 
 const FIELDS: TrailField[] = ["frontHeight", "frontAhead", "rearHeight", "rearBehind", "wheelbase", "midHeight", "lift"];
 const QUANTITIES = Object.fromEntries(FIELDS.map((k) => [k, "length"])) as Record<TrailField, "length">;
-const L = TRAIL_ANGLE_LIMITS_MM;
-const SPEC: Record<TrailField, MeasureSpec> = {
-  frontHeight: { quantity: "length", ...L.height, example: { imperial: "24", metric: "600" } },
-  frontAhead: { quantity: "length", ...L.offset, example: { imperial: "35", metric: "900" } },
-  rearHeight: { quantity: "length", ...L.height, example: { imperial: "26", metric: "650" } },
-  rearBehind: { quantity: "length", ...L.offset, example: { imperial: "40", metric: "1000" } },
-  wheelbase: { quantity: "length", ...L.wheelbase, example: { imperial: "118", metric: "3000" } },
-  midHeight: { quantity: "length", ...L.height, example: { imperial: "11", metric: "280" } },
-  lift: { quantity: "length", ...L.lift, example: { imperial: "2.5", metric: "65" } },
-};
+const SPEC = TRAIL_SPEC;
 const BASE: Record<TrailField, string> = {
   frontHeight: "Front corner height",
   frontAhead: "Front corner ahead of the front axle",
@@ -36,13 +26,6 @@ const HINT: Partial<Record<TrailField, string>> = {
   midHeight: "The lowest point of the underbody halfway between the axles (frame, skid plate), from the ground.",
   lift: "Raises every body point measured here; leave empty for none.",
 };
-const NAME: Record<TrailAngle["kind"], string> = { approach: "Approach", departure: "Departure", breakover: "Ramp breakover" };
-const ANGLE_COLUMNS: FigureColumn<TrailAngle>[] = [
-  { id: "angle", header: "Angle", cell: (a) => NAME[a.kind] },
-  { id: "current", header: "Current", cell: (a) => `${formatNumber(a.currentDeg, 1)}°` },
-  { id: "planned", header: "Planned", cell: (a) => `${formatNumber(a.plannedDeg, 1)}°` },
-  { id: "change", header: "Change", cell: (a) => `${formatNumber(a.plannedDeg - a.currentDeg, 1, { signed: true })}°` },
-];
 
 /** Labels for a display choice; messages name each field by this same text. */
 export function trailLabels(prefs: DisplayPrefs): TrailLabels {
@@ -107,14 +90,7 @@ export function TrailAnglesPanel({ result, prefs }: { result: ComparisonResult; 
       <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">{FIELDS.map(field)}</div>
       <div aria-live="polite">
         {angles.length > 0 ? (
-          <FigureTable
-            look="quiet"
-            columns={ANGLE_COLUMNS}
-            rows={angles}
-            rowKey={(a) => a.kind}
-            rowTestId={(a) => `angle-${a.kind}`}
-            testId="trail-angles"
-          />
+          <TrailAngleTable angles={angles} />
         ) : (
           <p className="text-sm text-basalt-600">Enter a body point and its distance from the axle to see its angle.</p>
         )}

@@ -1,7 +1,7 @@
 "use client";
 import { useState } from "react";
 import type { DisplayPrefs } from "@/lib/comparisons/format";
-import { type MeasureEntry, type Quantity, convertEntry, measureUnit, typed } from "@/lib/comparisons/measureEntry";
+import { type MeasureEntry, type Quantity, convertEntry, entryFromValue, measureUnit, typed } from "@/lib/comparisons/measureEntry";
 
 interface EntriesState<K extends string> {
   entries: Record<K, MeasureEntry>;
@@ -17,12 +17,20 @@ const same = (a: DisplayPrefs, b: DisplayPrefs) => a.units === b.units && a.leng
  * The figures of a panel whose units follow the display choice. When the choice changes each
  * figure is converted (lib/comparisons/measureEntry: convertEntry) at render time, the way the
  * workspace rewrites its own fields, so no figure is ever shown relabelled in another unit.
- * `note(key)` is the message for a field whose text could not be converted.
+ * `note(key)` is the message for a field whose text could not be converted. `initial` fills
+ * fields from stored values (kPa, kg, mm), written in the current choice (the garage's forms).
  */
-export function useMeasureEntries<K extends string>(quantities: Record<K, Quantity>, prefs: DisplayPrefs) {
+export function useMeasureEntries<K extends string>(
+  quantities: Record<K, Quantity>,
+  prefs: DisplayPrefs,
+  initial?: Partial<Record<K, number | null>>,
+) {
   const [state, setState] = useState<EntriesState<K>>(() => {
     const entries = {} as Record<K, MeasureEntry>;
-    for (const k of Object.keys(quantities) as K[]) entries[k] = typed("");
+    for (const k of Object.keys(quantities) as K[]) {
+      const v = initial?.[k];
+      entries[k] = v === undefined || v === null ? typed("") : entryFromValue(v, quantities[k], prefs);
+    }
     return { entries, prefs, unconverted: {} };
   });
   let s = state;

@@ -426,6 +426,27 @@ export interface VehicleRow {
   updated_at: Date;
 }
 
+/** A vehicle's placard, scale weights and body points (db/migrations/20261208090000); SI throughout. */
+export interface VehicleLoadProfileRow {
+  vehicle_id: string;
+  units: "imperial" | "metric";
+  vehicle_kind: "light-truck" | "passenger-car";
+  placard_tire: string | null;
+  placard_front_kpa: number | null;
+  placard_rear_kpa: number | null;
+  front_gawr_kg: number | null;
+  rear_gawr_kg: number | null;
+  front_axle_kg: number | null;
+  rear_axle_kg: number | null;
+  front_corner_height_mm: number | null;
+  front_corner_ahead_mm: number | null;
+  rear_corner_height_mm: number | null;
+  rear_corner_behind_mm: number | null;
+  mid_height_mm: number | null;
+  wheelbase_mm: number | null;
+  updated_at: Date;
+}
+
 export interface VehicleClearanceRow {
   id: string;
   vehicle_id: string;

@@ -32,6 +32,8 @@ export const queryKeys = {
     all: garage,
     /** One vehicle with its points and photos. */
     vehicle: (id: string) => [...garage, "vehicle", id] as const,
+    /** One vehicle's placard, scale weights and body points. */
+    loadProfile: (id: string) => [...garage, "vehicle", id, "load"] as const,
   },
   shop: {
     all: shop,

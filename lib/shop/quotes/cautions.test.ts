@@ -26,6 +26,18 @@ describe("quote cautions", () => {
 
   it("a 315/70R17 (+70 mm, ISO 4000-1: D = d + 2H) on a beadlock wheel: bead seating, fasteners, beadlock rings, lift, nominal figures", () => {
     const big = summarize(current, "315/70R17", { diameterIn: 17, widthIn: 9, offsetMm: -12, beadlock: true });
-    expect(quoteCautions(big).map((c) => c.split(":")[0]!.split(" ")[0])).toEqual(["Bead", "Wheel", "Beadlock", "Lift", "All"]);
+    expect(quoteCautions(big).map((c) => c.split(":")[0]!.split(" ")[0])).toEqual(["Bead", "Wheel", "Cold", "Beadlock", "Lift", "All"]);
+  });
+
+  it("bounds the cold pressure by the quoted tire's limits, and defers to the placard and the tire maker", () => {
+    // Flotation load range E: 65 psi (the engine's table, from memory); road minimum 58.3 % of it
+    // = 37.9 psi (FMVSS 138 Table 1 ratio by proportion); 1 psi = 6.894757 kPa (NIST SP 811).
+    const lt = summarize(current, "35x12.50R17LT 121Q E", { diameterIn: 17, widthIn: 9, offsetMm: -12, beadlock: false });
+    const c = quoteCautions(lt).find((x) => x.startsWith("Cold pressure"))!;
+    expect(c).toContain("35x12.50R17LT 121Q LRE allows at most 65 psi (448 kPa); road minimum 37.9 psi (261 kPa).");
+    expect(c).toMatch(/door placard and the tire maker's load table/);
+    expect(c).toMatch(/Never inflate above the maximum on the sidewall or the wheel\.$/);
+    // A size without its load index says no limit: the caution stays, without figures.
+    expect(quoteCautions(fit).find((x) => x.startsWith("Cold pressure"))).not.toMatch(/allows at most/);
   });
 });

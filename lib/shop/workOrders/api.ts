@@ -3,6 +3,7 @@
  * by server and browser.
  */
 import type { StepPosition, WorkOrderRow, WorkOrderStatus, WorkOrderStepRow } from "@/lib/platform/db/types";
+import { type TirePressureLimits, tirePressureLimits } from "./pressureLimit";
 import { type StepKind, positionsFor, stepsFor } from "./vocabulary";
 
 const iso = (d: Date | string | null) => (d === null ? null : new Date(d).toISOString());
@@ -38,6 +39,8 @@ export interface WorkOrder {
   recheckDueAt: string | null;
   /** The booked install, on the shop's clock, e.g. "Mon, Mar 15, 2027, 9:00 AM MDT – 11:30 AM". */
   bookedFor: string | null;
+  /** The quoted tire's highest pressure and road minimum, when its size says them (pressureLimit.ts). */
+  pressureLimits: TirePressureLimits | null;
   steps: SignedOff[];
 }
 
@@ -51,7 +54,7 @@ export const signedOffDto = (r: WorkOrderStepRow): SignedOff => ({
 
 export function workOrderDto(
   r: WorkOrderRow,
-  quote: { number: number; customerName: string; vehicleDescription: string; boltPattern: string },
+  quote: { number: number; customerName: string; vehicleDescription: string; boltPattern: string; plannedTire?: string | null },
   steps: WorkOrderStepRow[],
   bookedFor: string | null,
 ): WorkOrder {
@@ -76,6 +79,7 @@ export function workOrderDto(
     doneBy: r.done_by,
     recheckDueAt: iso(r.recheck_due_at),
     bookedFor,
+    pressureLimits: tirePressureLimits(quote.plannedTire),
     steps: steps.map(signedOffDto),
   };
 }

@@ -13,8 +13,15 @@ import { queueMailIn } from "@/lib/platform/mail/transactional";
 import { type RecheckDue, type WorkOrder, requiredSteps, unsignedSteps, workOrderDto } from "./api";
 import { queueCompletionMail } from "./completionQueries";
 import { recheckMail } from "./recheckMail";
-import type { SignedStep } from "./schema";
-import { POSITION_LABEL, STEP_LABEL, WORK_ORDER_STATUS_LABEL } from "./vocabulary";
+import { aboveMaximum, tirePressureLimits } from "./pressureLimit";
+import { type SignedStep, pressureFieldLabel } from "./schema";
+import { POSITION_LABEL, type PressureEntryUnit, STEP_LABEL, WORK_ORDER_STATUS_LABEL } from "./vocabulary";
+
+/** The planned tire of a quote's stored fitment summary (lib/shop/quotes/fitment.ts), when it has one. */
+function plannedTireOf(fitment: unknown): string | null {
+  const tire = (fitment as { planned?: { tire?: unknown } } | null)?.planned?.tire;
+  return typeof tire === "string" ? tire : null;
+}
 
 type Db = Knex | Knex.Transaction;
 
@@ -84,10 +91,11 @@ export async function getWorkOrder(db: Db, shopId: string, id: string): Promise<
   const quote = (await db("quotes as q")
     .join("customers as c", "c.id", "q.customer_id")
     .where({ "q.id": row.quote_id })
-    .first("q.number", "q.vehicle_description", "q.bolt_pattern", "c.name as customer_name")) as {
+    .first("q.number", "q.vehicle_description", "q.bolt_pattern", "q.fitment", "c.name as customer_name")) as {
     number: number;
     vehicle_description: string;
     bolt_pattern: string;
+    fitment: unknown;
     customer_name: string;
   };
   const steps = (await db<WorkOrderStepRow>("work_order_steps").where({ work_order_id: id }).orderBy("signed_at")) as WorkOrderStepRow[];
@@ -101,6 +109,7 @@ export async function getWorkOrder(db: Db, shopId: string, id: string): Promise<
       customerName: quote.customer_name,
       vehicleDescription: quote.vehicle_description,
       boltPattern: quote.bolt_pattern,
+      plannedTire: plannedTireOf(quote.fitment),
     },
     steps,
     bookedFor,
@@ -130,6 +139,13 @@ export async function signStep(db: Knex, shopId: string, id: string, signed: Sig
     }
     if (!requiredSteps(row).some((s) => s.position === signed.position && s.step === signed.step)) {
       throw InvalidError.fields({ position: [`${what} is not on this work order.`] });
+    }
+    if (signed.step === "pressure") {
+      // Never recorded above what the quoted tire allows: nothing is signed, the field says why.
+      const q = (await trx("quotes").where({ id: row.quote_id }).first("fitment")) as { fitment: unknown } | undefined;
+      const d = signed.data as { pressureKpa: number; unit: PressureEntryUnit };
+      const refused = aboveMaximum(d.pressureKpa, d.unit, tirePressureLimits(plannedTireOf(q?.fitment)), pressureFieldLabel(d.unit));
+      if (refused) throw InvalidError.fields({ pressure: [refused] });
     }
     await trx("work_order_steps")
       .insert({

@@ -19,6 +19,8 @@ import { type Setup, type SetupForm, toEngineSetup } from "@/lib/setup/model";
 import { setupSchema, setupToForm } from "@/lib/setup/schema";
 import { SetupFields } from "@/components/setup/SetupFields";
 import { predictPoints, steeringAxisOf } from "@/lib/garage/predict";
+import type { LoadProfile } from "@/lib/garage/loadProfile";
+import { PlannedLoadTrail } from "./PlannedLoadTrail";
 
 /** The margin as this panel labels it, so its messages name it so. */
 const MARGIN_LABEL = "Safety margin";
@@ -27,7 +29,15 @@ const plannedFormSchema = z.object({ planned: setupSchema, margin: marginSchema 
 type PlannedForm = { planned: SetupForm; margin: string };
 
 /** A planned setup typed in, and what every measured point is predicted to become with it. */
-export function PlannedPanel({ detail, initialPlanned }: { detail: VehicleDetail; initialPlanned: Setup | null }) {
+export function PlannedPanel({
+  detail,
+  initialPlanned,
+  loadProfile,
+}: {
+  detail: VehicleDetail;
+  initialPlanned: Setup | null;
+  loadProfile?: LoadProfile | null;
+}) {
   const { vehicle: v, clearances } = detail;
   const form = useForm<PlannedForm>({
     resolver: zodResolver(plannedFormSchema) as never,
@@ -106,6 +116,7 @@ export function PlannedPanel({ detail, initialPlanned }: { detail: VehicleDetail
                   axisInboardMm={result.axis}
                 />
               )}
+              {planned.success && <PlannedLoadTrail vehicle={v} planned={planned.data} profile={loadProfile ?? null} />}
               {planned.success && (
                 <div className="no-print flex flex-wrap gap-2">
                   <Link

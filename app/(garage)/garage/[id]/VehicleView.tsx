@@ -16,7 +16,9 @@ import { type Setup, toEngineSetup } from "@/lib/setup/model";
 import { PhotoDrop } from "../_components/PhotoDrop";
 import { AddPoint } from "./AddPoint";
 import { DeletePoint } from "./DeletePoint";
+import { LoadProfileCard } from "./LoadProfileCard";
 import { PlannedPanel } from "./PlannedPanel";
+import { useLoadProfile } from "./useLoadProfile";
 
 export function VehicleView({ initial, initialPlanned }: { initial: VehicleDetail; initialPlanned: Setup | null }) {
   const id = initial.vehicle.id;
@@ -27,6 +29,7 @@ export function VehicleView({ initial, initialPlanned }: { initial: VehicleDetai
     initialData: initial,
   });
   const { vehicle: v, clearances, photos } = q.data;
+  const loadProfile = useLoadProfile(id).data?.profile ?? null;
   const [confirming, setConfirming] = useState(false);
   const del = useMutation({
     mutationFn: () => api(`/api/vehicles/${id}`, { method: "DELETE" }),
@@ -140,7 +143,9 @@ export function VehicleView({ initial, initialPlanned }: { initial: VehicleDetai
         <AddPoint vehicleId={id} />
       </Card>
 
-      <PlannedPanel detail={q.data} initialPlanned={initialPlanned} />
+      <LoadProfileCard vehicle={v} />
+
+      <PlannedPanel detail={q.data} initialPlanned={initialPlanned} loadProfile={loadProfile} />
     </div>
   );
 }

@@ -12,6 +12,8 @@ import { type DisplayPrefs, formatEnteredSpeed, formatLen, formatNumber } from "
 import type { ComparisonInput } from "@/lib/comparisons/schema";
 import { workspaceUrl } from "@/lib/comparisons/url";
 import { ForumPostButton } from "./ForumPostButton";
+import { SharedLoadTrail } from "./SharedLoadTrail";
+import type { SetupFigures } from "@/lib/garage/loadFigures";
 
 function VehicleSummary({ input, prefs }: { input: ComparisonInput; prefs: DisplayPrefs }) {
   const v = input.vehicle;
@@ -40,7 +42,18 @@ function VehicleSummary({ input, prefs }: { input: ComparisonInput; prefs: Displ
 }
 
 /** The whole comparison, read-only, in the reader's units (remembered like in the workspace). */
-export function SharedView({ name, slug, input }: { name: string; slug: string; input: ComparisonInput }) {
+export function SharedView({
+  name,
+  slug,
+  input,
+  loadTrail = null,
+}: {
+  name: string;
+  slug: string;
+  input: ComparisonInput;
+  /** The vehicle's pressure to set and angle changes, when it keeps a load profile (./loadTrail.ts). */
+  loadTrail?: SetupFigures | null;
+}) {
   const [prefs, setPrefs] = useDisplayPrefs();
   const result = useMemo(() => computeComparison(input), [input]);
   return (
@@ -57,6 +70,7 @@ export function SharedView({ name, slug, input }: { name: string; slug: string; 
       <HeadlineChanges result={result} prefs={prefs} />
       <DrawingAndWarnings result={result} prefs={prefs} />
       <VehicleSummary input={input} prefs={prefs} />
+      {loadTrail && <SharedLoadTrail figures={loadTrail} prefs={prefs} />}
       <ChartsSection result={result} prefs={prefs} />
       <SetupDetailTable result={result} prefs={prefs} />
       <p className="rounded-lg bg-tight-100 px-4 py-3 text-sm text-tight-800">

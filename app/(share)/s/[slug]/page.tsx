@@ -7,6 +7,7 @@ import { pageGuard } from "@/lib/platform/http/pageGuard";
 import { getSharedComparison } from "./data";
 import { ShareOriginProvider } from "./ShareOrigin";
 import { SharedView } from "./SharedView";
+import { sharedLoadTrail } from "./loadTrail";
 
 /**
  * The public, read-only page of a shared comparison.
@@ -52,6 +53,7 @@ export async function generateMetadata({ params }: Props): Promise<Metadata> {
 export default async function SharedComparisonPage({ params }: Props) {
   const { slug } = await params;
   const share = await pageGuard(getSharedComparison(slug));
+  const loadTrail = await sharedLoadTrail(share.slug, share.input.planned);
   return (
     <>
       <PageHeader
@@ -71,7 +73,7 @@ export default async function SharedComparisonPage({ params }: Props) {
       />
       {/* Copied links (forum post, drawing) use the public origin, not whatever address served the page. */}
       <ShareOriginProvider origin={appOrigin()}>
-        <SharedView name={share.name} slug={share.slug} input={share.input} />
+        <SharedView name={share.name} slug={share.slug} input={share.input} loadTrail={loadTrail} />
       </ShareOriginProvider>
     </>
   );

@@ -13,6 +13,9 @@ import { checklistQueries } from "@/lib/garage/checklistQueries";
 import { marginMmParam } from "@/lib/garage/schema";
 import { type VehiclePageProps, vehiclePageCaller } from "../vehiclePage";
 import { ChecklistView } from "./ChecklistView";
+import { Card } from "@/components/ui/Card";
+import { loadQueries } from "@/lib/garage/loadQueries";
+import { PlannedLoadTrail } from "../PlannedLoadTrail";
 
 export const metadata: Metadata = { title: "Install checklist" };
 
@@ -50,7 +53,7 @@ export default async function ChecklistPage({ params, searchParams }: VehiclePag
     );
   }
   const { vehicle } = r.detail;
-  const ticked = await checklistQueries.checklistTicks(r);
+  const [ticked, loadProfile] = await Promise.all([checklistQueries.checklistTicks(r), loadQueries.getLoadProfile(caller.userId, id)]);
   const marginNote = `Margin ${bothUnits(r.marginMm)}${r.marginMm === vehicle.clearanceMarginMm ? " (this vehicle's)" : " (tried instead of this vehicle's)"}.`;
   const backHref = r.comparison
     ? workspaceUrl({ input: r.comparison.input, savedId: r.comparison.id, vehicleId: vehicle.id })
@@ -75,6 +78,10 @@ export default async function ChecklistPage({ params, searchParams }: VehiclePag
           {setupLine(vehicle.currentSetup)}. The checklist works from the vehicle&apos;s, the setup its points were measured against.
         </Alert>
       )}
+      <Card className="mb-5 print:shadow-none print:ring-0">
+        <h2 className="text-lg font-semibold">Cold pressure and trail angles</h2>
+        <PlannedLoadTrail vehicle={vehicle} planned={r.planned} profile={loadProfile} toggle />
+      </Card>
       <ChecklistView
         vehicleId={id}
         source={r.comparison ? { comparisonId: r.comparison.id, marginMm: r.marginMm } : { planned: r.planned, marginMm: r.marginMm }}

@@ -14,11 +14,13 @@ import type { FinderJob, FinderReply } from "@/lib/garage/finderJob";
 import type { Vehicle, VehicleClearance } from "@/lib/garage/types";
 import { ExcludedList } from "./ExcludedList";
 import { FinderTable } from "./FinderTable";
+import { useFinderLoad } from "./useFinderLoad";
 
 const mm = (v: number) => formatLength(v, { unit: "mm" });
 
 export function FinderPanel({ vehicle, clearances }: { vehicle: Vehicle; clearances: VehicleClearance[] }) {
   const hasPoints = clearances.length > 0;
+  const load = useFinderLoad(vehicle);
   const form = useForm<FinderGoalsForm>({
     resolver: zodResolver(finderGoalsSchema) as never,
     mode: "onChange",
@@ -178,7 +180,8 @@ export function FinderPanel({ vehicle, clearances }: { vehicle: Vehicle; clearan
           </div>
           {failure && <Alert tone="error">{failure}</Alert>}
           {!plan && <Alert tone="info">Fix the highlighted goals to search.</Alert>}
-          {result && <FinderTable rows={result.result.results} vehicle={vehicle} />}
+          {result && <FinderTable rows={result.result.results} vehicle={vehicle} extraColumns={load.columns} />}
+          {result && load.note}
           {result && result.result.excluded.length > 0 && (
             <ExcludedList rows={result.result.excluded} total={result.result.excludedSizes} vehicle={vehicle} />
           )}

@@ -92,7 +92,16 @@ function finderColumns(vehicle: Vehicle): TableColumn<FitmentMatch>[] {
  * The finder's fits: filtered by tire size or wheel, sorted by any figure (the engine's rank when
  * no header is chosen), 25 a page. Each new search starts again at its first page.
  */
-export function FinderTable({ rows, vehicle }: { rows: FitmentMatch[]; vehicle: Vehicle }) {
+export function FinderTable({
+  rows,
+  vehicle,
+  extraColumns = [],
+}: {
+  rows: FitmentMatch[];
+  vehicle: Vehicle;
+  /** Columns shown before the links (the pressure and angle columns, finder/loadColumns.tsx). */
+  extraColumns?: TableColumn<FitmentMatch>[];
+}) {
   const [filter, setFilter] = useState("");
   const [page, setPage] = useState(0);
   const [shownRows, setShownRows] = useState(rows);
@@ -100,7 +109,8 @@ export function FinderTable({ rows, vehicle }: { rows: FitmentMatch[]; vehicle: 
     setShownRows(rows);
     setPage(0);
   }
-  const columns = finderColumns(vehicle);
+  const base = finderColumns(vehicle);
+  const columns = [...base.slice(0, -1), ...extraColumns, ...base.slice(-1)];
   const filtered = rows.filter((m) => matchesFinderFilter(m, filter));
   const sorted = useSortedRows(filtered, columns);
   const shown = pageOf(sorted.rows, page, FINDER_PAGE_SIZE);

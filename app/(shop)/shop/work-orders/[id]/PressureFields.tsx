@@ -5,10 +5,22 @@ import { TextField } from "@/components/ui/TextField";
 import { kpaToPsi, psiToKpa } from "@/lib/fitment";
 import { pressureFieldLabel, readDecimal } from "@/lib/shop/workOrders/schema";
 import { FIELD_LABEL, type PressureEntryUnit } from "@/lib/shop/workOrders/vocabulary";
+import type { TirePressureLimits } from "@/lib/shop/workOrders/pressureLimit";
+import { pressureWords } from "@/lib/shop/workOrders/signedText";
+import { PRESSURE_CAUTION } from "@/lib/comparisons/pressureText";
 import { type StepValues, errorAt } from "./stepForm";
 
 /** The cold pressure set, in psi or kPa; switching the unit converts the figure (NIST SP 811 B.8) instead of relabelling it. */
-export function PressureFields({ form, idPrefix }: { form: UseFormReturn<StepValues>; idPrefix: string }) {
+export function PressureFields({
+  form,
+  idPrefix,
+  limits = null,
+}: {
+  form: UseFormReturn<StepValues>;
+  idPrefix: string;
+  /** The quoted tire's highest pressure and road minimum, shown beside the field (the server refuses above it). */
+  limits?: TirePressureLimits | null;
+}) {
   const unit = form.watch("pressureUnit") as PressureEntryUnit;
   const onUnit = (to: PressureEntryUnit) => {
     const text = form.getValues("pressure") as string;
@@ -29,7 +41,11 @@ export function PressureFields({ form, idPrefix }: { form: UseFormReturn<StepVal
         label={pressureFieldLabel(unit)}
         inputMode="decimal"
         autoComplete="off"
-        hint="Cold, to the figure for this tire and load (door placard or the tire maker's load table)"
+        hint={`Cold, to the figure for this tire and load (door placard or the tire maker's load table).${
+          limits
+            ? ` ${limits.tire}: at most ${pressureWords(limits.maxKpa, unit)}, road minimum ${pressureWords(limits.minimumKpa, unit)}.`
+            : ""
+        } ${PRESSURE_CAUTION}`}
         error={errorAt(form.formState.errors, "pressure")}
         {...form.register("pressure")}
       />

@@ -3,6 +3,7 @@ import type { UseFormReturn } from "react-hook-form";
 import { SelectField } from "@/components/ui/SelectField";
 import { TextField } from "@/components/ui/TextField";
 import { FIELD_LABEL, MATCH_MOUNT_LABEL, MATCH_MOUNT_METHODS, type StepKind } from "@/lib/shop/workOrders/vocabulary";
+import type { TirePressureLimits } from "@/lib/shop/workOrders/pressureLimit";
 import { CheckField } from "./CheckField";
 import { PressureFields } from "./PressureFields";
 import { type StepValues, errorAt } from "./stepForm";
@@ -16,11 +17,13 @@ export function StepFields({
   step,
   idPrefix,
   lugCount,
+  pressureLimits = null,
 }: {
   form: UseFormReturn<StepValues>;
   step: StepKind;
   idPrefix: string;
   lugCount: number;
+  pressureLimits?: TirePressureLimits | null;
 }) {
   const err = (path: string) => errorAt(form.formState.errors, path);
   const text = (
@@ -80,7 +83,7 @@ export function StepFields({
     case "bead_seat":
       return check("acknowledged", FIELD_LABEL.acknowledged);
     case "pressure":
-      return <PressureFields form={form} idPrefix={idPrefix} />;
+      return <PressureFields form={form} idPrefix={idPrefix} limits={pressureLimits} />;
     case "balance":
       return (
         <div className="flex flex-wrap gap-3">

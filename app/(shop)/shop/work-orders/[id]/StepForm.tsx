@@ -51,7 +51,13 @@ export function StepForm({
       noValidate
       aria-label={`Sign off ${position} ${step}`}
     >
-      <StepFields form={form} step={step} idPrefix={`${position}-${step}`} lugCount={workOrder.lugCount} />
+      <StepFields
+        form={form}
+        step={step}
+        idPrefix={`${position}-${step}`}
+        lugCount={workOrder.lugCount}
+        pressureLimits={workOrder.pressureLimits}
+      />
       <div aria-live="assertive">{failure && <Alert tone="error">{failure}</Alert>}</div>
       <Button type="submit" className="self-start" pending={form.formState.isSubmitting}>
         Sign off

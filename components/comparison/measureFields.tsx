@@ -1,11 +1,11 @@
-import { TextField } from "@/components/ui/TextField";
 import type { MeasureEntry } from "@/lib/comparisons/measureEntry";
+import { MeasureField } from "./MeasureField";
 
 /**
  * The number fields of a panel whose figures follow the display choice (see useMeasureEntries):
  * returns a builder that draws the field for one key with its label, its hint, and as its message
  * the field's error followed by the note of a text left unconverted by a unit switch, both tied to
- * the input by aria-describedby (TextField).
+ * the input by aria-describedby (MeasureField).
  *
  * @example
  * const field = measureFields({ prefix: "trail", labels, hints: HINT, entries, set, errors, note });
@@ -32,14 +32,12 @@ export function measureFields<K extends string>({
   return function measureField(k: K) {
     const message = [errors[k], note(k)].filter(Boolean).join(" ") || undefined;
     return (
-      <TextField
+      <MeasureField
         key={k}
         label={labels[k]}
         name={`${prefix}-${k}`}
-        inputMode="decimal"
-        autoComplete="off"
-        value={entries[k].text}
-        onChange={(ev) => set(k, ev.target.value)}
+        entry={entries[k]}
+        onText={(text) => set(k, text)}
         error={message}
         hint={hints[k]}
       />

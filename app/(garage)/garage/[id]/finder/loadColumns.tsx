@@ -1,0 +1,84 @@
+import type { TableColumn } from "@/components/ui/Table";
+import { type DisplayPrefs, formatNumber } from "@/lib/comparisons/format";
+import { pressureText } from "@/lib/comparisons/pressureText";
+import { TRAIL_ANGLE_NAME, type TrailAngle } from "@/lib/comparisons/trailPlan";
+import type { FitmentMatch } from "@/lib/fitment";
+import { type SetupFigures, setupFigures } from "@/lib/garage/loadFigures";
+import type { LoadProfile } from "@/lib/garage/loadProfile";
+import type { Vehicle } from "@/lib/garage/types";
+import { candidateSetup } from "./candidate";
+
+const KINDS: TrailAngle["kind"][] = ["approach", "departure", "breakover"];
+
+/**
+ * The finder's pressure and angle columns for a vehicle with a stored load profile: per fit, the
+ * cold pressure to set (front / rear, every unit) and each angle with the planned tires and its
+ * change. Each sorts, so the fits can be ranked by them. Figures are computed once per fit.
+ *
+ * @example
+ * loadColumns(profile, vehicle, prefs).map((c) => c.id); // ["pressure", "approach", "departure", "breakover"]
+ */
+export function loadColumns(profile: LoadProfile | null, vehicle: Vehicle, prefs: DisplayPrefs): TableColumn<FitmentMatch>[] {
+  if (!profile) return [];
+  const cache = new WeakMap<FitmentMatch, SetupFigures>();
+  const figuresOf = (m: FitmentMatch) => {
+    let f = cache.get(m);
+    if (!f) {
+      f = setupFigures(profile, vehicle.currentSetup, candidateSetup(m), prefs.units);
+      cache.set(m, f);
+    }
+    return f;
+  };
+  const columns: TableColumn<FitmentMatch>[] = [];
+  if (profile.placardTire) {
+    columns.push({
+      id: "pressure",
+      header: "Pressure to set (front / rear)",
+      sortable: true,
+      // The higher axle's pressure; a fit that cannot carry the load has none and sorts last.
+      sortValue: (m) => {
+        const plan = figuresOf(m).load?.plan;
+        return plan ? Math.max(...plan.axles.map((a) => a.pressureToSetKpa)) : null;
+      },
+      cell: (m) => {
+        const load = figuresOf(m).load;
+        if (!load) return "—";
+        if (!load.plan) return <span className="text-contact-700">cannot carry the placard or axle load</span>;
+        return (
+          <span className="flex flex-col text-xs" data-testid="finder-pressure">
+            {load.plan.axles.map((a) => (
+              <span key={a.axle} className="whitespace-nowrap">
+                {a.axle === "front" ? "F" : "R"} {pressureText(a.pressureToSetKpa, prefs)}
+              </span>
+            ))}
+          </span>
+        );
+      },
+    });
+  }
+  const angleOf = (m: FitmentMatch, kind: TrailAngle["kind"]) => figuresOf(m).angles.find((a) => a.kind === kind);
+  const measured: Record<TrailAngle["kind"], boolean> = {
+    approach: profile.frontCornerHeightMm !== null,
+    departure: profile.rearCornerHeightMm !== null,
+    breakover: profile.midHeightMm !== null,
+  };
+  for (const kind of KINDS.filter((k) => measured[k])) {
+    columns.push({
+      id: kind,
+      header: `${TRAIL_ANGLE_NAME[kind]} (change)`,
+      sortable: true,
+      sortValue: (m) => angleOf(m, kind)?.plannedDeg ?? null,
+      cell: (m) => {
+        const a = angleOf(m, kind);
+        return a ? (
+          <span className="whitespace-nowrap">
+            {formatNumber(a.plannedDeg, 1)}° ({formatNumber(a.plannedDeg - a.currentDeg, 1, { signed: true })}°)
+          </span>
+        ) : (
+          "—"
+        );
+      },
+    });
+  }
+  return columns;
+}
