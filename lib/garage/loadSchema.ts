@@ -28,4 +28,3 @@ export const loadProfileSchema = z.object({
     .transform((v) => (v ? v : null)),
   ...(Object.fromEntries(MEASURE_KEYS.map((k) => [k, figure(k)])) as Record<MeasureKey, ReturnType<typeof figure>>),
 });
-export type LoadProfileBody = z.output<typeof loadProfileSchema>;
