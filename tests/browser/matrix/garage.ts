@@ -76,6 +76,28 @@ export const cases: MatrixCase[] = [
     note: "member deletes first, then it is gone",
   },
   {
+    route: "/api/vehicles/[id]/load",
+    method: "GET",
+    path: `/api/vehicles/${DEMO_VEHICLE}/load`,
+    expect: garage(200, 404),
+    note: "the member's vehicle's placard and body points",
+  },
+  {
+    route: "/api/vehicles/[id]/load",
+    method: "PUT",
+    path: `/api/vehicles/${DEMO_VEHICLE}/load`,
+    body: { units: "metric", frontAxleKg: "heavy" },
+    expect: garage(422, 422),
+    note: "invalid body refused before the lookup",
+  },
+  {
+    route: "/api/vehicles/[id]/load",
+    method: "DELETE",
+    path: async () => `/api/vehicles/${await scratchVehicle()}/load`,
+    expect: garage(200, 404),
+    note: "a scratch vehicle of the member's",
+  },
+  {
     route: "/api/vehicles/[id]/clearances",
     method: "POST",
     path: `/api/vehicles/${DEMO_VEHICLE}/clearances`,
