@@ -22,6 +22,7 @@ import {
   lengthLabel,
   slotDayOption,
 } from "./api";
+import { assertDepositHeld } from "@/lib/shop/payments/depositQueries";
 import { canBook } from "./bookable";
 import { type BookingMailKind, addressOf, bookingMail } from "./mail";
 import { type BaysSetupValues, type BookingRequest, openingHoursOf } from "./schema";
@@ -382,6 +383,7 @@ export async function slotsByToken(db: Knex, token: string, opts: { from?: strin
   const quote = await findByToken(db, token);
   if (!quote) throw new NotFoundError("That quote");
   assertBookable(quote, "customer");
+  await assertDepositHeld(db, quote);
   return slotsForQuote(db, quote, opts);
 }
 
@@ -394,6 +396,7 @@ export async function slotsForStaff(
 ): Promise<SlotsAnswer> {
   const quote = await getQuote(db, scope, quoteId);
   assertBookable(quote, "staff");
+  await assertDepositHeld(db, quote);
   return slotsForQuote(db, quote, opts);
 }
 
@@ -550,6 +553,7 @@ export async function bookInstall(
   return db.transaction(async (trx) => {
     const quote = await lockQuote(trx, target);
     assertBookable(quote, target.by);
+    await assertDepositHeld(trx, quote);
     const live = await liveBookingRow(trx, quote.id);
     if (live) {
       const { timeZone } = await readSchedule(trx, quote.shop_id);
