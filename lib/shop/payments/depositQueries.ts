@@ -2,12 +2,12 @@ import "server-only";
 import type { Knex } from "knex";
 import type { QuoteRow } from "@/lib/platform/db/types";
 import { ConflictError } from "@/lib/platform/errors";
+import { DEPOSIT_REFUNDED, depositGivenBack } from "./depositBack";
 
 /**
- * Whether the quote's paid deposit has been given back in full: the refunds asked of the provider
- * (confirmed by its webhook, or still on their way — refunds.status pending) add up to every paid
- * deposit. A quote with no deposit paid has nothing refunded. Read from the ledger rather than
- * from the quote's status, because refunds may come in parts and only the sum says "all of it".
+ * Whether the quote's paid deposit has been given back in full (depositBack.ts), summed from the
+ * ledger in one read. Read from the ledger rather than from the quote's status, because refunds
+ * may come in parts and only the sum says "all of it".
  */
 export async function depositRefundedInFull(db: Knex | Knex.Transaction, quoteId: string): Promise<boolean> {
   const row = (await db
@@ -16,12 +16,8 @@ export async function depositRefundedInFull(db: Knex | Knex.Transaction, quoteId
       db("payment_refunds").where({ quote_id: quoteId }).sum("amount_cents").as("refunded"),
     )
     .first()) as { paid: string | null; refunded: string | null };
-  const paid = Number(row.paid ?? 0);
-  return paid > 0 && Number(row.refunded ?? 0) >= paid;
+  return depositGivenBack(Number(row.paid ?? 0), Number(row.refunded ?? 0));
 }
-
-export const DEPOSIT_REFUNDED =
-  "The deposit on this quote has been refunded in full, so it can no longer be booked. A new quote is needed to book again.";
 
 /**
  * Booking stands on the deposit the shop holds: once it is refunded in full, the quote cannot be
