@@ -9,7 +9,10 @@ export function OverviewSection({ id, title, lead, children }: { id: string; tit
         {title}
       </h2>
       <p className="text-sm text-basalt-600">{lead}</p>
-      <div className="mt-3 overflow-x-auto">{children}</div>
+      {/* Focusable, so a keyboard can scroll it too (axe: scrollable-region-focusable). */}
+      <div className="mt-3 overflow-x-auto" tabIndex={0} role="region" aria-label={`${title} (scrolls sideways on narrow screens)`}>
+        {children}
+      </div>
     </Card>
   );
 }
