@@ -173,3 +173,37 @@ describe("install bookings", () => {
     expect(await db("bookings").where({ quote_id: q.id })).toEqual([]);
   });
 });
+
+describe("the shop's own notice address", () => {
+  it("set in the shop's settings, it receives the notices instead of the owners; a bad one is refused naming the field", async () => {
+    const { updateShopSettings, getShop } = await import("@/lib/shop/queries");
+    const { shopSettingsSchema } = await import("@/lib/shop/schema");
+    const shop = await getShop(db, SHOP_A);
+    const form = {
+      name: shop.name,
+      address: shop.address,
+      phone: shop.phone,
+      taxRate: "8.25",
+      labourRate: "0",
+      fabricationRate: "0",
+      quoteValidityDays: "14",
+      depositPct: "25",
+      currency: "USD",
+    };
+    const bad = shopSettingsSchema.safeParse({ ...form, noticeEmail: "front desk" });
+    expect(bad.success).toBe(false);
+    expect(bad.error!.issues.map((i) => [i.path.join("."), i.message])).toEqual([
+      ["noticeEmail", "Enter an e-mail address like name@example.com, or leave it empty."],
+    ]);
+    await updateShopSettings(db, SHOP_A, shopSettingsSchema.parse({ ...form, noticeEmail: " desk@shop-a.example.test " }));
+    const q = await sentQuote(db, "Nia Notice");
+    await answerByToken(db, q.token, "accepted", CUSTOMER);
+    const last = (await queuedMails(db)).at(-1)!;
+    expect(last.to).toBe("desk@shop-a.example.test");
+    expect(last.subject).toMatch(/^Accepted: quote Q-\d+ by Nia Notice$/);
+    // Cleared again (the form left empty): back to the owners.
+    await updateShopSettings(db, SHOP_A, shopSettingsSchema.parse({ ...form, noticeEmail: "" }));
+    const other = await sentQuote(db, "Ola Owners");
+    expect(await newNotices(() => answerByToken(db, other.token, "accepted", CUSTOMER))).toHaveLength(1);
+  });
+});

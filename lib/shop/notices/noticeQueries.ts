@@ -6,11 +6,10 @@ import { queueMailIn } from "@/lib/platform/mail/transactional";
 import { DEFAULT_TIME_ZONE } from "@/lib/shop/bookings/vocabulary";
 import { type ShopNoticeEvent, shopNoticeMail } from "./mail";
 
-/**
- * Who hears of the shop's news: its owners' addresses. (Shop settings hold no address of the
- * shop's own; when they gain one, it goes here first.)
- */
+/** Who hears of the shop's news: the address in the shop's settings, or else its owners' addresses. */
 async function shopRecipients(trx: Knex.Transaction, shopId: string): Promise<string[]> {
+  const set = (await trx("shops").where({ id: shopId }).first("notice_email")) as { notice_email: string } | undefined;
+  if (set?.notice_email) return [set.notice_email];
   const owners = (await trx("users").where({ shop_id: shopId, role: "shop_owner" }).orderBy("email").select("email")) as {
     email: string;
   }[];
