@@ -16,6 +16,7 @@ export interface Shop {
   quoteValidityDays: number;
   depositPct: number;
   currency: "USD";
+  noticeEmail: string;
   createdAt: string;
   updatedAt: string;
 }
@@ -59,6 +60,7 @@ export function shopDto(r: ShopSettingsRow): Shop {
     quoteValidityDays: r.quote_validity_days,
     depositPct: r.deposit_pct,
     currency: r.currency,
+    noticeEmail: r.notice_email,
     createdAt: iso(r.created_at),
     updatedAt: iso(r.updated_at),
   };

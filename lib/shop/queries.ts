@@ -37,6 +37,7 @@ export async function updateShopSettings(db: Knex, shopId: string, s: ShopSettin
       quote_validity_days: s.quoteValidityDays,
       deposit_pct: s.depositPct,
       currency: s.currency,
+      notice_email: s.noticeEmail,
       updated_at: db.fn.now() as unknown as Date,
     })
     .returning("*");

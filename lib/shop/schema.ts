@@ -18,6 +18,14 @@ export const moneyField = (label: string, max = 100_000_00) =>
       return c;
     });
 
+/** Where the shop's notices go: an address, or empty for the owners' own (a form left without it clears it). */
+const noticeEmailField = z
+  .string()
+  .trim()
+  .max(254, "That e-mail address is too long.")
+  .pipe(z.union([z.literal(""), z.email("Enter an e-mail address like name@example.com, or leave it empty.")]))
+  .default("");
+
 export const shopSettingsSchema = z.object({
   name: z.string().trim().min(1, "Enter the shop's name.").max(120, "Use at most 120 characters."),
   address: z.string().trim().max(300, "Use at most 300 characters."),
@@ -46,6 +54,7 @@ export const shopSettingsSchema = z.object({
     .min(0, "At least 0 %.")
     .max(100, "At most 100 %."),
   currency: z.literal("USD", "Quotes are in US dollars (USD)."),
+  noticeEmail: noticeEmailField,
 });
 export type ShopSettingsInput = z.input<typeof shopSettingsSchema>;
 export type ShopSettings = z.output<typeof shopSettingsSchema>;

@@ -4,6 +4,7 @@ import { signPayload, startFakePay } from "@/scripts/services/fake-pay";
 import { rebuild, testDb } from "./support/db";
 import { startTestBoss, stopBoss } from "./support/jobs";
 import { ctx, req, sessionOf } from "./support/requests";
+import { openAllDay } from "./support/quoteJourney";
 import { SHOP_A, U, VEHICLE, item, seedShops } from "./support/shopFixture";
 import { postWebhook as post, startWebhookForwarder } from "./support/webhookForwarder";
 import { bodyFor } from "./support/workOrderSteps";
@@ -130,24 +131,7 @@ beforeAll(async () => {
   await rebuild(db);
   await seedShops(db);
   await startTestBoss();
-  // Open every day, all day, in one zone; two bays; every service 5 minutes in the bay of its kind.
-  await db("shop_schedules").insert({ shop_id: SHOP_A, time_zone: "America/Denver" });
-  await db("shop_opening_hours").insert(
-    [1, 2, 3, 4, 5, 6, 7].map((weekday) => ({ shop_id: SHOP_A, weekday, opens_minute: 0, closes_minute: 1440 })),
-  );
-  await db("bays").insert([
-    { shop_id: SHOP_A, name: "Lift 1", kind: "lift_bay" },
-    { shop_id: SHOP_A, name: "Rack", kind: "alignment_rack" },
-  ]);
-  const services = await db("catalog_items").where({ shop_id: SHOP_A, kind: "service" }).select("id", "service_type");
-  await db("service_times").insert(
-    services.map((s: { id: string; service_type: string }) => ({
-      shop_id: SHOP_A,
-      catalog_item_id: s.id,
-      minutes_per_unit: 5,
-      bay_kind: s.service_type === "alignment" ? "alignment_rack" : "lift_bay",
-    })),
-  );
+  await openAllDay(db);
   forwarder = await startWebhookForwarder(webhook);
   pay = await startFakePay({ port: 0, secretKey: process.env.STRIPE_SECRET_KEY!, webhookSecret: SECRET, webhookUrl: forwarder.url });
   process.env.STRIPE_API_PORT = String(pay.port);

@@ -13,6 +13,7 @@ export default async function ShopLayout({ children }: { children: ReactNode }) 
     { href: "/shop/rechecks", label: "Re-checks" },
     ...(owner
       ? [
+          { href: "/shop/overview", label: "Overview" },
           { href: "/shop/staff", label: "Staff" },
           { href: "/shop/bays", label: "Bays and hours" },
           { href: "/shop/settings", label: "Settings" },

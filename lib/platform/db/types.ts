@@ -58,6 +58,8 @@ export interface ShopSettingsRow extends ShopRow {
   currency: "USD";
   /** Days after a job is done that the customer is asked back for the lug and ring re-check. */
   recheck_after_days: number;
+  /** Where the shop's notices go; "" for its owners' addresses. */
+  notice_email: string;
   updated_at: Date;
 }
 

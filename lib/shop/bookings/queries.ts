@@ -22,6 +22,8 @@ import {
   lengthLabel,
   slotDayOption,
 } from "./api";
+import { queueShopNotice } from "@/lib/shop/notices/noticeQueries";
+import { assertDepositHeld } from "@/lib/shop/payments/depositQueries";
 import { canBook } from "./bookable";
 import { type BookingMailKind, addressOf, bookingMail } from "./mail";
 import { type BaysSetupValues, type BookingRequest, openingHoursOf } from "./schema";
@@ -382,6 +384,7 @@ export async function slotsByToken(db: Knex, token: string, opts: { from?: strin
   const quote = await findByToken(db, token);
   if (!quote) throw new NotFoundError("That quote");
   assertBookable(quote, "customer");
+  await assertDepositHeld(db, quote);
   return slotsForQuote(db, quote, opts);
 }
 
@@ -394,6 +397,7 @@ export async function slotsForStaff(
 ): Promise<SlotsAnswer> {
   const quote = await getQuote(db, scope, quoteId);
   assertBookable(quote, "staff");
+  await assertDepositHeld(db, quote);
   return slotsForQuote(db, quote, opts);
 }
 
@@ -550,6 +554,7 @@ export async function bookInstall(
   return db.transaction(async (trx) => {
     const quote = await lockQuote(trx, target);
     assertBookable(quote, target.by);
+    await assertDepositHeld(trx, quote);
     const live = await liveBookingRow(trx, quote.id);
     if (live) {
       const { timeZone } = await readSchedule(trx, quote.shop_id);
@@ -574,6 +579,7 @@ export async function bookInstall(
       return b!;
     });
     await mailCustomer(trx, quote, row, "confirmed");
+    await queueShopNotice(trx, quote, { kind: "booked", start: row.starts_at, end: row.ends_at, by: actor.label });
     return answer(trx, row);
   });
 }
@@ -584,7 +590,7 @@ export async function moveInstall(
   scope: QuoteScope,
   quoteId: string,
   request: BookingRequest,
-  _actor: Actor,
+  actor: Actor,
   now = new Date(),
 ): Promise<Booking> {
   return db.transaction(async (trx) => {
@@ -608,12 +614,19 @@ export async function moveInstall(
       return b!;
     });
     await mailCustomer(trx, quote, row, "moved", new Date(live.starts_at));
+    await queueShopNotice(trx, quote, {
+      kind: "moved",
+      start: row.starts_at,
+      end: row.ends_at,
+      by: actor.label,
+      previousStart: live.starts_at,
+    });
     return answer(trx, row);
   });
 }
 
 /** Cancels the quote's live booking (counter only): its bay time is freed and the customer's calendar entry withdrawn. */
-export async function cancelInstall(db: Knex, scope: QuoteScope, quoteId: string, _actor: Actor): Promise<Booking> {
+export async function cancelInstall(db: Knex, scope: QuoteScope, quoteId: string, actor: Actor): Promise<Booking> {
   return db.transaction(async (trx) => {
     const quote = await lockQuote(trx, { by: "staff", scope, quoteId });
     const live = await liveBookingRow(trx, quote.id, true);
@@ -626,6 +639,7 @@ export async function cancelInstall(db: Knex, scope: QuoteScope, quoteId: string
       .update({ status: "cancelled", cancelled_at: trx.fn.now(), sequence: live.sequence + 1, updated_at: trx.fn.now() })
       .returning("*")) as BookingRow[];
     await mailCustomer(trx, quote, row!, "cancelled");
+    await queueShopNotice(trx, quote, { kind: "cancelled", start: row!.starts_at, end: row!.ends_at, by: actor.label });
     const { timeZone } = await readSchedule(trx, quote.shop_id);
     return bookingDto(row!, held, timeZone);
   });

@@ -127,16 +127,15 @@ export function zonedInstant(date: string, minute: number, timeZone: string): Da
   return new Date(Math.max(first, second));
 }
 
-/** "Sunday, March 14, 2027" for a calendar date (no time zone involved). */
-export function formatDay(date: string): string {
+/** "Sunday, March 14, 2027" for a calendar date (no time zone involved); "short": "Sun, Mar 14". */
+export function formatDay(date: string, style: "long" | "short" = "long"): string {
   const [y, m, d] = date.split("-").map(Number) as [number, number, number];
-  return new Date(Date.UTC(y, m - 1, d, 12)).toLocaleDateString("en-US", {
-    timeZone: "UTC",
-    weekday: "long",
-    year: "numeric",
-    month: "long",
-    day: "numeric",
-  });
+  return new Date(Date.UTC(y, m - 1, d, 12)).toLocaleDateString(
+    "en-US",
+    style === "long"
+      ? { timeZone: "UTC", weekday: "long", year: "numeric", month: "long", day: "numeric" }
+      : { timeZone: "UTC", weekday: "short", month: "short", day: "numeric" },
+  );
 }
 
 /** "8:00 AM" for minutes after midnight. */

@@ -7,6 +7,7 @@ import { log } from "@/lib/platform/log";
 import { appOrigin } from "@/lib/platform/mail";
 import { queueMailIn } from "@/lib/platform/mail/transactional";
 import { readSchedule } from "@/lib/shop/bookings/queries";
+import { queueShopNotice } from "@/lib/shop/notices/noticeQueries";
 import { type Actor, type QuoteScope, findByToken, getQuote } from "@/lib/shop/quotes/queries";
 import { type QuotePayments, paymentEntryDto, refundEntryDto } from "./api";
 import type { CounterMethod } from "./labels";
@@ -225,6 +226,7 @@ export async function markSessionPaid(
     payment.amount_cents,
     payment.kind === "balance" ? figures.outstandingCents : null,
   );
+  await queueShopNotice(trx, quote, { kind: "paid", payment: payment.kind, amountCents: payment.amount_cents });
   return "paid";
 }
 

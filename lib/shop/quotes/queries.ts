@@ -25,6 +25,7 @@ import { TotalsError, computeTotals } from "@/lib/shop/quotes/totals";
 import { type CounterVehicle, type CounterVehicleForEngine, counterVehicleForEngine } from "@/lib/shop/customers/schema";
 import type { Setup } from "@/lib/setup/model";
 import { bindAppDb } from "@/lib/platform/db/bind";
+import { queueShopNotice } from "@/lib/shop/notices/noticeQueries";
 import { isLinkToken } from "@/lib/platform/tokenFormat";
 import { hashToken, randomToken } from "@/lib/platform/tokens";
 
@@ -624,6 +625,7 @@ export async function answerByToken(db: Knex, token: string, to: "accepted" | "d
     const quote = await findByToken(trx, token, true);
     if (!quote) throw new NotFoundError("That quote");
     await transition(trx, quote, to, actor);
+    if (to === "accepted") await queueShopNotice(trx, quote, { kind: "accepted" });
   });
 }
 

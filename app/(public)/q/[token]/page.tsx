@@ -14,6 +14,7 @@ import { InstallBooking } from "./InstallBooking";
 import { PublicQuoteActions } from "./PublicQuoteActions";
 import { BalancePanel } from "./BalancePanel";
 import { ledgerQueries } from "@/lib/shop/payments/ledgerQueries";
+import { DEPOSIT_REFUNDED, invoiceDepositGivenBack } from "@/lib/shop/payments/depositBack";
 
 export const metadata: Metadata = { title: "Your quote", robots: { index: false } };
 export const dynamic = "force-dynamic";
@@ -42,9 +43,10 @@ export default async function PublicQuotePage({
   const { quote, document: d } = view;
   const t = d.totals;
   const paidUp = quote.status === "deposit_paid" || quote.status === "installed";
-  const bookable = canBook(quote);
-  const booking = bookable ? await bookingQueries.liveBooking(quote) : null;
   const payments = await ledgerQueries.publicPayments(token);
+  const givenBack = invoiceDepositGivenBack(payments.invoice);
+  const bookable = canBook(quote) && !givenBack;
+  const booking = bookable ? await bookingQueries.liveBooking(quote) : null;
   return (
     <div className="mx-auto flex max-w-4xl flex-col gap-5">
       <header>
@@ -66,7 +68,8 @@ export default async function PublicQuotePage({
       {paid && quote.status === "accepted" && (
         <Alert tone="info">Payment received by the provider; waiting for its confirmation. Refresh in a moment.</Alert>
       )}
-      {quote.status === "deposit_paid" && (
+      {givenBack && quote.status === "deposit_paid" && <Alert tone="info">{DEPOSIT_REFUNDED}</Alert>}
+      {quote.status === "deposit_paid" && !givenBack && (
         <Alert tone="success" title="Deposit paid">
           Thank you. {booking ? "Your install time is below." : "Pick your install time below."} Still to pay at the fitting:{" "}
           <span data-testid="public-balance-after-paid">{formatUsd(t.balanceCents)}</span>.

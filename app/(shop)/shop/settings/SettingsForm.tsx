@@ -20,6 +20,7 @@ const FIELDS = [
   "quoteValidityDays",
   "depositPct",
   "currency",
+  "noticeEmail",
 ] as const;
 
 export function SettingsForm({ initial }: { initial: Record<(typeof FIELDS)[number], string> }) {
@@ -50,6 +51,12 @@ export function SettingsForm({ initial }: { initial: Record<(typeof FIELDS)[numb
       <TextField label="Shop name" {...field("name")} />
       <TextField label="Address" {...field("address")} hint="Printed in the quote header." />
       <TextField label="Phone" type="tel" {...field("phone")} />
+      <TextField
+        label="E-mail for shop notices"
+        type="email"
+        {...field("noticeEmail")}
+        hint="Where we tell the shop that a customer accepted, paid or booked. Leave it empty to use the owners' addresses."
+      />
       <div className="grid gap-3 sm:grid-cols-2">
         <TextField label="Sales tax rate (%)" inputMode="decimal" {...field("taxRate")} hint="Applied to taxable lines, e.g. 8.25." />
         <TextField label="Deposit (% of total)" inputMode="numeric" {...field("depositPct")} />

@@ -30,6 +30,7 @@ export default async function SettingsPage() {
             quoteValidityDays: String(shop.quote_validity_days),
             depositPct: String(shop.deposit_pct),
             currency: "USD",
+            noticeEmail: shop.notice_email,
           }}
         />
       </Card>

@@ -12,6 +12,8 @@ import { CounterBooking } from "./CounterBooking";
 import { OpenWorkOrder } from "./OpenWorkOrder";
 import { PaymentsCard } from "./PaymentsCard";
 import { ledgerQueries } from "@/lib/shop/payments/ledgerQueries";
+import { DEPOSIT_REFUNDED, invoiceDepositGivenBack } from "@/lib/shop/payments/depositBack";
+import { Alert } from "@/components/ui/Alert";
 import { QuoteEditor } from "./QuoteEditor";
 
 export const metadata: Metadata = { title: "Quote" };
@@ -23,14 +25,19 @@ export default async function QuotePage({ params }: { params: Promise<{ id: stri
   const detail = await pageGuard(quoteQueries.getQuoteDetail(quoteScopeOf(caller), id));
   const shop = await shopQueries.findShop(detail.quote.shop_id);
   const q = detail.quote;
-  const [booking, setup] = canBook(q)
-    ? await Promise.all([bookingQueries.liveBooking(q), bookingQueries.getSetup(q.shop_id)])
-    : [null, null];
-  const workOrderId = (await workOrderQueries.findWorkOrderIdOfQuote(q.shop_id, q.id)) ?? null;
   const payments = await ledgerQueries.quotePayments(quoteScopeOf(caller), q.id);
+  const givenBack = invoiceDepositGivenBack(payments.invoice);
+  const [booking, setup] =
+    canBook(q) && !givenBack ? await Promise.all([bookingQueries.liveBooking(q), bookingQueries.getSetup(q.shop_id)]) : [null, null];
+  const workOrderId = (await workOrderQueries.findWorkOrderIdOfQuote(q.shop_id, q.id)) ?? null;
   return (
     <>
       <QuoteEditor initial={quoteDetailDto(detail)} labourRateCents={shop?.labour_rate_cents ?? 0} />
+      {givenBack && q.status === "deposit_paid" && (
+        <Alert tone="info" className="mt-5">
+          {DEPOSIT_REFUNDED}
+        </Alert>
+      )}
       {setup && <CounterBooking quoteId={q.id} initial={booking} bays={setup.bays} />}
       {(booking || workOrderId) && <OpenWorkOrder quoteId={q.id} workOrderId={workOrderId} />}
       {(payments.payments.length > 0 || payments.invoiceOpen) && (
