@@ -28,7 +28,7 @@ const day = { ...week, days: ["2026-12-14"], hours: { "2026-12-14": week.hours["
 const TAKEN = "That time was just taken: pick another one.";
 
 /** Answers the move route with a refusal (once `held` resolves) and the slots route with one free start; records what was sent. */
-function serveRefusal(held: Promise<void> = Promise.resolve()) {
+function serveRefusal(held: Promise<void> = Promise.resolve(), refuse = true) {
   const sent: { url: string; method: string; body?: unknown }[] = [];
   const slots: SlotsAnswer = {
     timeZone: "America/Denver",
@@ -52,7 +52,10 @@ function serveRefusal(held: Promise<void> = Promise.resolve()) {
       sent.push({ url, method: init?.method ?? "GET", body: init?.body ? JSON.parse(String(init.body)) : undefined });
       if (url.includes("/slots")) return new Response(JSON.stringify(slots), { status: 200 });
       if (init?.method === "PUT") await held;
-      if (init?.method === "PUT") return new Response(JSON.stringify({ error: TAKEN, fieldErrors: { start: [TAKEN] } }), { status: 409 });
+      if (init?.method === "PUT")
+        return refuse
+          ? new Response(JSON.stringify({ error: TAKEN, fieldErrors: { start: [TAKEN] } }), { status: 409 })
+          : new Response(JSON.stringify({ booking: day.bookings[0] }), { status: 200 });
       return new Response(JSON.stringify(day), { status: 200 });
     }),
   );
@@ -113,6 +116,34 @@ describe("the staff calendar", () => {
     });
     // Nothing moved on the calendar.
     expect(booking().style.top).toBe("0%");
+  });
+
+  it("after a move, says so and reloads the calendar from the server", async () => {
+    const sent = serveRefusal(Promise.resolve(), false);
+    const user = userEvent.setup();
+    renderCalendar();
+    await user.click(booking());
+    const panel = screen.getByRole("region", { name: "Selected booking" });
+    await user.click(within(panel).getByRole("button", { name: "Move…" }));
+    await user.click(await within(panel).findByText("10:00 AM"));
+    await user.click(within(panel).getByRole("button", { name: /^Move to 10:00 AM/ }));
+    await screen.findByText("Moved; the customer is e-mailed the updated calendar entry.");
+    await waitFor(() => expect(sent.filter((r) => r.url.startsWith("/api/shop/bookings?"))).toHaveLength(1));
+    expect(sent.find((r) => r.url.startsWith("/api/shop/bookings?"))!.url).toBe("/api/shop/bookings?from=2026-12-14&days=1");
+  });
+
+  it("opens on today's day view on a narrow screen when the link named no range", async () => {
+    const sent = serveRefusal();
+    vi.stubGlobal("matchMedia", (q: string) => ({ matches: q === "(max-width: 639px)", addEventListener() {}, removeEventListener() {} }));
+    const weekAnswer = {
+      ...week,
+      from: "2026-12-13",
+      days: ["2026-12-13", "2026-12-14", "2026-12-15", "2026-12-16", "2026-12-17", "2026-12-18", "2026-12-19"],
+    };
+    const { container } = render(<BayCalendar initial={weekAnswer} today="2026-12-14" askedDays={false} />, { wrapper: wrap });
+    expect(screen.getByRole("button", { name: "Show the week" })).toBeTruthy();
+    await waitFor(() => expect(container.querySelectorAll(".rbc-time-content .rbc-day-slot")).toHaveLength(2));
+    expect(sent.map((r) => r.url)).toEqual(["/api/shop/bookings?from=2026-12-14&days=1"]);
   });
 
   it("says what to do when the shop has no bays", () => {
