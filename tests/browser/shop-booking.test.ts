@@ -1,5 +1,5 @@
 import ical from "node-ical";
-import type { Page } from "playwright-core";
+import type { Locator, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { launch, payWithTestCard, seriousViolations, shot, signInAs } from "./support/browser";
 import { DEMO, DEMO_PASSWORD, call } from "./support/http";
@@ -24,6 +24,22 @@ async function calendarOf(to: string, subject: RegExp) {
   const parsed = ical.sync.parseICS((await attachment(mail.id, mail.attachments[i]!.index)).toString("utf8"));
   const event = Object.values(parsed).find((c) => c?.type === "VEVENT") as ical.VEvent;
   return { mail, event, method: (parsed.vcalendar as unknown as { method?: string }).method };
+}
+
+/** In a booking panel's free-time list (a week later first, if asked): picks the first free start and moves there. */
+async function moveToFirstFree(panel: Locator, { laterDays }: { laterDays: boolean }) {
+  if (laterDays) {
+    // The list keeps the shown week until the next one arrives: wait for its first day to change.
+    const firstDay = panel.getByTestId("slot-day").first();
+    await firstDay.waitFor();
+    const shown = await firstDay.textContent();
+    await panel.getByRole("button", { name: "Later days" }).click();
+    await expect.poll(() => firstDay.textContent(), { timeout: 15000 }).not.toBe(shown);
+  }
+  const slot = panel.locator("label:has(input[type=radio])").first();
+  await slot.waitFor();
+  await slot.click();
+  await panel.getByRole("button", { name: /^Move to / }).click();
 }
 
 let staff: Awaited<ReturnType<typeof launch>>;
@@ -140,11 +156,7 @@ describe("install booking", () => {
     const picked2 = s.getByRole("region", { name: "Selected booking" });
     expect(await picked2.getByRole("link", { name: /^Open quote Q-/ }).getAttribute("href")).toBe(`/shop/quotes/${quoteId}`);
     await picked2.getByRole("button", { name: "Move…" }).click();
-    await picked2.getByRole("button", { name: "Later days" }).click();
-    const later = picked2.locator("label:has(input[type=radio])").first();
-    await later.waitFor();
-    await later.click();
-    await picked2.getByRole("button", { name: /^Move to / }).click();
+    await moveToFirstFree(picked2, { laterDays: true });
     await s.getByText("Moved; the customer is e-mailed the updated calendar entry.").waitFor();
     await checkA11y(s, "/shop/calendar, booking moved");
     await shot(s, "booking-calendar-moved");
@@ -173,10 +185,7 @@ describe("install booking", () => {
     await s.goto(`/shop/quotes/${quoteId}`);
     const panel = s.getByRole("region", { name: "Install booking" });
     await panel.getByRole("button", { name: "Move to another time" }).click();
-    const again = panel.locator("label:has(input[type=radio])").first();
-    await again.waitFor();
-    await again.click();
-    await panel.getByRole("button", { name: /^Move to / }).click();
+    await moveToFirstFree(panel, { laterDays: false });
     await panel.getByText("Moved; the customer is e-mailed the updated calendar entry.").waitFor();
     await checkA11y(s, "quote page, booking moved");
     await shot(s, "booking-counter-moved");
