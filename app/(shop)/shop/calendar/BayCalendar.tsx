@@ -97,7 +97,6 @@ export function BayCalendar({ initial, today, askedDays }: { initial: CalendarAn
         <Button
           type="button"
           variant="ghost"
-          aria-pressed={range.days === 1}
           onClick={() =>
             go(
               range.days === 1
