@@ -1,5 +1,5 @@
 import ical from "node-ical";
-import type { Page } from "playwright-core";
+import type { Locator, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { launch, payWithTestCard, seriousViolations, shot, signInAs } from "./support/browser";
 import { DEMO, DEMO_PASSWORD, call } from "./support/http";
@@ -26,6 +26,22 @@ async function calendarOf(to: string, subject: RegExp) {
   return { mail, event, method: (parsed.vcalendar as unknown as { method?: string }).method };
 }
 
+/** In a booking panel's free-time list (a week later first, if asked): picks the first free start and moves there. */
+async function moveToFirstFree(panel: Locator, { laterDays }: { laterDays: boolean }) {
+  if (laterDays) {
+    // The list keeps the shown week until the next one arrives: wait for its first day to change.
+    const firstDay = panel.getByTestId("slot-day").first();
+    await firstDay.waitFor();
+    const shown = await firstDay.textContent();
+    await panel.getByRole("button", { name: "Later days" }).click();
+    await expect.poll(() => firstDay.textContent(), { timeout: 15000 }).not.toBe(shown);
+  }
+  const slot = panel.locator("label:has(input[type=radio])").first();
+  await slot.waitFor();
+  await slot.click();
+  await panel.getByRole("button", { name: /^Move to / }).click();
+}
+
 let staff: Awaited<ReturnType<typeof launch>>;
 let customer: Awaited<ReturnType<typeof launch>>;
 beforeAll(async () => {
@@ -36,7 +52,7 @@ afterAll(async () => {
 });
 
 describe("install booking", () => {
-  it("the customer pays the deposit and books a slot; the mail's calendar file reads back; staff see it in the calendar and move it", async () => {
+  it("the customer pays the deposit and books a slot; the mail's calendar file reads back; staff see it in the calendar, a refused drag snaps back, and they move it", async () => {
     const run = Date.now().toString(36);
     const email = `booker-${run}@example.test`;
     // A quote for a new customer, written over the API as the counter does, then sent.
@@ -99,36 +115,82 @@ describe("install booking", () => {
     );
     expect(end.getTime()).toBeGreaterThan(start.getTime());
 
-    // Staff see it on the calendar's day, linked to the quote.
+    // Staff see it on the calendar's day (react-big-calendar), in a bay's column, named with the quote, customer and vehicle.
     const s = await staff.context.newPage();
     await signInAs(s, DEMO.shop_staff, DEMO_PASSWORD);
     const day = start.toLocaleDateString("en-CA", { timeZone: "America/Denver" });
     await s.goto(`/shop/calendar?from=${day}&days=1`);
-    const block = s.getByTestId("calendar-booking").filter({ hasText: `Wren Booker ${run}` });
-    expect(await block.count()).toBeGreaterThan(0);
-    expect(await block.first().getAttribute("href")).toBe(`/shop/quotes/${quoteId}`);
+    const block = s.getByRole("button", { name: new RegExp(`Wren Booker ${run}`) });
+    await block.first().waitFor();
+    expect(await block.first().textContent()).toContain("Half-ton pickup");
+    expect(await block.first().textContent()).toContain(picked.split(",")[0]!); // its start on the shop's clock
     await checkA11y(s, "/shop/calendar (day)");
     await shot(s, "booking-calendar-day");
-    await s.goto(`/shop/calendar?from=${day}&days=7`);
-    await shot(s, "booking-calendar-week");
 
-    // …and move it from the quote's page: the customer gets the same calendar entry, SEQUENCE 1.
-    await block.first().click();
-    await s.waitForURL(new RegExp(`/shop/quotes/${quoteId}$`));
-    const panel = s.getByRole("region", { name: "Install booking" });
-    await panel.getByRole("button", { name: "Move to another time" }).click();
-    await panel.getByRole("button", { name: "Later days" }).click();
-    const later = panel.locator("label:has(input[type=radio])").first();
-    await later.waitFor();
-    await later.click();
-    await panel.getByRole("button", { name: /^Move to / }).click();
-    await panel.getByText("Moved; the customer is e-mailed the updated calendar entry.").waitFor();
-    await checkA11y(s, "quote page, booking moved");
-    await shot(s, "booking-counter-moved");
+    // The week: a column per bay and day, Sunday first. Dragging the booking onto that Sunday (the demo shop is closed
+    // on weekends) is refused by the server: the message is announced and the booking snaps back to its column.
+    await s.goto(`/shop/calendar?from=${day}&days=7`);
+    await block.first().waitFor();
+    await checkA11y(s, "/shop/calendar (week)");
+    await shot(s, "booking-calendar-week");
+    const columnOf = () =>
+      block.first().evaluate((el) => [...document.querySelectorAll(".rbc-time-content .rbc-day-slot")].findIndex((c) => c.contains(el)));
+    const before = await columnOf();
+    expect(before).toBeGreaterThanOrEqual(0);
+    const sunday = s.locator(".rbc-time-content .rbc-day-slot").nth(before - (before % 7));
+    // The week scrolls sideways inside its region: bring that bay's Sunday to the left edge, its weekday stays in view.
+    await sunday.evaluate((el) => el.scrollIntoView({ block: "nearest", inline: "start" }));
+    await block.first().evaluate((el) => el.scrollIntoView({ block: "center", inline: "nearest" }));
+    const from = (await block.first().boundingBox())!;
+    const to = (await sunday.boundingBox())!;
+    await s.mouse.move(from.x + from.width / 2, from.y + 8);
+    await s.mouse.down();
+    await s.mouse.move(to.x + to.width / 2, from.y + 8, { steps: 12 });
+    await s.mouse.up();
+    await s.getByText(/^Not moved: /).waitFor();
+    expect(await columnOf()).toBe(before);
+
+    // From the keyboard: the booking is picked with Enter; the panel links to its quote and offers Move… with the free starts.
+    await block.first().focus();
+    await s.keyboard.press("Enter");
+    const picked2 = s.getByRole("region", { name: "Selected booking" });
+    expect(await picked2.getByRole("link", { name: /^Open quote Q-/ }).getAttribute("href")).toBe(`/shop/quotes/${quoteId}`);
+    await picked2.getByRole("button", { name: "Move…" }).click();
+    await moveToFirstFree(picked2, { laterDays: true });
+    await s.getByText("Moved; the customer is e-mailed the updated calendar entry.").waitFor();
+    await checkA11y(s, "/shop/calendar, booking moved");
+    await shot(s, "booking-calendar-moved");
+    // The customer gets the same calendar entry, SEQUENCE 1.
     const moved = await calendarOf(email, /^Moved: your install/);
     expect(moved.event.uid).toBe(booked.event.uid);
     expect(Number(moved.event.sequence)).toBe(1);
     expect(moved.event.start.getTime()).toBeGreaterThan(start.getTime());
+
+    // On a phone the calendar opens on one day, its bays scrolling sideways inside their own region, not the page.
+    const phone = await launch({ width: 390, height: 844 });
+    try {
+      const p = await phone.context.newPage();
+      await signInAs(p, DEMO.shop_staff, DEMO_PASSWORD);
+      await p.goto("/shop/calendar");
+      await p.getByRole("button", { name: "Show the week" }).waitFor();
+      expect(await p.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+      expect(await p.getByRole("region", { name: "Bookings by bay" }).getAttribute("tabindex")).toBe("0");
+      await checkA11y(p, "/shop/calendar at 390 px");
+      await shot(p, "booking-calendar-phone");
+    } finally {
+      await phone.close();
+    }
+
+    // The quote page's own move form still works: SEQUENCE 2.
+    await s.goto(`/shop/quotes/${quoteId}`);
+    const panel = s.getByRole("region", { name: "Install booking" });
+    await panel.getByRole("button", { name: "Move to another time" }).click();
+    await moveToFirstFree(panel, { laterDays: false });
+    await panel.getByText("Moved; the customer is e-mailed the updated calendar entry.").waitFor();
+    await checkA11y(s, "quote page, booking moved");
+    await shot(s, "booking-counter-moved");
+    // The newest "Moved" mail is read until the second one has been sent by the job queue.
+    await expect.poll(async () => Number((await calendarOf(email, /^Moved: your install/)).event.sequence), { timeout: 20000 }).toBe(2);
   });
 
   it("the owner's Bays and hours page passes the accessibility check; staff are sent away from it", async () => {

@@ -51,6 +51,11 @@ export const queryKeys = {
       vehicles: (customerId: string) => [...customers, customerId, "vehicles"] as const,
     },
     staff: { all: [...shop, "staff"] as const },
+    /** The staff calendar: one day or one week of bookings per bay. */
+    calendar: {
+      all: [...shop, "calendar"] as const,
+      range: (from: string, days: number) => [...shop, "calendar", from, days] as const,
+    },
     /** Free install starts (the customer's link and the counter read the same answer shape). */
     slots: {
       all: [...shop, "slots"] as const,

@@ -1,5 +1,5 @@
 /**
- * Test helper (the calendar's layout and grid tests): an invented two-day, two-bay calendar with one
+ * Test helper (the staff calendar's event and component tests): an invented two-day, two-bay calendar with one
  * booking starting 15:00Z, 8:00 AM in Denver (UTC−7 in December, 49 CFR §71.9); the second day is closed.
  * @example calendarWith("2026-12-14T16:20:00.000Z", [liftStretch("2026-12-14T16:20:00.000Z")]);
  */
