@@ -30,7 +30,8 @@ export interface CatalogQuery {
 export async function listCatalog(db: Knex, shopId: string, q: CatalogQuery = {}): Promise<CatalogPage> {
   const pageSize = Math.min(Math.max(q.pageSize ?? 25, 1), 200);
   const page = Math.max(q.page ?? 1, 1);
-  const base = db<CatalogItemRow>("catalog_items").where({ shop_id: shopId });
+  // Archived items leave the lists and pickers (quote lines keep their own copy).
+  const base = db<CatalogItemRow>("catalog_items").where({ shop_id: shopId }).whereNull("archived_at");
   if (q.kind) base.andWhere({ kind: q.kind });
   const text = q.q?.trim() ?? "";
   if (text) {
@@ -78,11 +79,13 @@ const FITMENT_COLUMNS = [
 export async function fitmentStock(db: Knex, shopId: string): Promise<{ wheels: CatalogItemRow[]; tires: CatalogItemRow[] }> {
   const wheels = (await db<CatalogItemRow>("catalog_items")
     .where({ shop_id: shopId, kind: "wheel" })
+    .whereNull("archived_at")
     .select(FITMENT_COLUMNS)) as CatalogItemRow[];
   const diameters = [...new Set(wheels.map((w) => w.wheel_diameter_in!))];
   const tires = (await db<CatalogItemRow>("catalog_items")
     .where({ shop_id: shopId, kind: "tire" })
     .whereIn("tire_rim_in", diameters)
+    .whereNull("archived_at")
     .select(FITMENT_COLUMNS)) as CatalogItemRow[];
   return { wheels, tires };
 }
