@@ -27,6 +27,8 @@ const { bookInstall, slotsForQuote } = await import("@/lib/shop/bookings/queries
 const { requiredSteps } = await import("@/lib/shop/workOrders/api");
 const { expireDue } = await import("@/lib/shop/quotes/queries");
 const { countLowStock } = await import("@/lib/shop/catalog/itemQueries");
+const { commitImport, stageImport } = await import("@/lib/shop/catalog/queries");
+const { CSV_COLUMNS, parseCatalogCsv } = await import("@/lib/shop/catalog/csv");
 
 const TIRE = "TR-EXAMPLE-35";
 const WHEEL = "WH-EXAMPLE-BL";
@@ -357,6 +359,20 @@ describe("the single-item editor", () => {
     expect(r.status).toBe(422);
     expect((await r.json()).fieldErrors.wheelItemId).toEqual(["That wheel is not in your catalog."]);
     await archive(req("PUT", `/api/shop/catalog/${wheel.id}/archived`, { archived: false }), ctx({ id: wheel.id }));
+  });
+});
+
+describe("a CSV import", () => {
+  it("cannot put fewer on hand than accepted quotes hold: refused naming the SKU, nothing imported", async () => {
+    const tire = await item(db, SHOP_A, TIRE);
+    expect(tire.qty_reserved).toBeGreaterThan(0);
+    const csv = [CSV_COLUMNS.slice(0, 6).join(","), `tire,${TIRE},${tire.description},389.00,1,35x12.50R17LT`].join("\n");
+    const staged = await stageImport(db, SHOP_A, U.ownerA.id, "short.csv", parseCatalogCsv(csv));
+    await expect(commitImport(db, SHOP_A, staged.id)).rejects.toThrow(
+      `Accepted quotes hold more than the file puts on hand: ${TIRE} (${tire.qty_reserved} held, file says 1). Nothing was imported.`,
+    );
+    expect(await item(db, SHOP_A, TIRE)).toEqual(tire);
+    expect((await db("catalog_imports").where({ id: staged.id }).first()).status).toBe("staged");
   });
 });
 

@@ -8,6 +8,7 @@ import { containsPattern, searchKey } from "@/lib/platform/search/normalize";
 import { withoutSearchKey } from "../../platform/search/searchKeyColumn";
 import { bindAppDb } from "@/lib/platform/db/bind";
 import { ConflictError, NotFoundError } from "@/lib/platform/errors";
+import { assertOnHandCoversHeld } from "@/lib/shop/catalog/stockQueries";
 
 export const CATALOG_SORTS = ["sku", "description", "price_cents", "qty_on_hand", "kind", "tire_diameter_mm", "updated_at"] as const;
 export type CatalogSort = (typeof CATALOG_SORTS)[number];
@@ -166,6 +167,7 @@ export async function commitImport(
       .returning(["rows"])) as { rows: CatalogInput[] }[];
     if (!staged) throw new ConflictError(ALREADY_CONFIRMED);
     const rows = staged.rows;
+    await assertOnHandCoversHeld(trx, shopId, rows);
     onProgress(0, rows.length);
     for (let i = 0; i < rows.length; i += IMPORT_BATCH) {
       const batch = rows.slice(i, i + IMPORT_BATCH).map((r) => ({ ...r, shop_id: shopId, updated_at: trx.fn.now() }));

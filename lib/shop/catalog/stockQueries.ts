@@ -111,6 +111,32 @@ export async function closeReservations(
   return [...perItem.values()].reduce((a, b) => a + b, 0);
 }
 
+/**
+ * Refuses new counts on hand under what accepted quotes hold (a CSV import), naming each SKU;
+ * locks the held items until the caller's transaction ends, so no acceptance slips in between.
+ */
+export async function assertOnHandCoversHeld(
+  trx: Knex.Transaction,
+  shopId: string,
+  counts: readonly { sku: string; qty_on_hand: number | null }[],
+): Promise<void> {
+  const held = (await trx("catalog_items")
+    .where({ shop_id: shopId })
+    .andWhere("qty_reserved", ">", 0)
+    .orderBy("id")
+    .forUpdate()
+    .select("sku", "qty_reserved")) as { sku: string; qty_reserved: number }[];
+  const bySku = new Map(counts.map((c) => [c.sku, c.qty_on_hand]));
+  const short = held.filter((h) => bySku.has(h.sku) && (bySku.get(h.sku) ?? -1) < h.qty_reserved);
+  if (short.length)
+    throw new ConflictError(
+      `Accepted quotes hold more than the file puts on hand: ${short
+        .slice(0, 5)
+        .map((h) => `${h.sku} (${h.qty_reserved} held, file says ${bySku.get(h.sku) ?? "not counted"})`)
+        .join("; ")}${short.length > 5 ? ` and ${short.length - 5} more` : ""}. Nothing was imported.`,
+    );
+}
+
 /** What a quote's new status does to the stock it holds; called by the quote's own transition. */
 export async function stockFollowsQuote(trx: Knex.Transaction, quoteId: string, to: QuoteStatus): Promise<void> {
   if (to === "accepted") await reserveForQuote(trx, quoteId);
