@@ -67,6 +67,13 @@ export const catalogItemSchema = catalogItemInputSchema.transform((v, ctx): Cata
   return { item: item!, lowStockAt };
 });
 
+/** The editor's fields for a new item: a tire, everything else blank. */
+export const EMPTY_CATALOG_ITEM: CatalogItemFormValues = {
+  ...(Object.fromEntries([...Object.keys(CATALOG_ITEM_FIELDS), "lowStockAt"].map((f) => [f, ""])) as CatalogItemFormValues),
+  kind: "tire",
+  lowStockAt: "4",
+};
+
 /** An item as the editor's fields show it (the inverse of catalogItemSchema for a stored item). */
 export function catalogItemFormValues(i: CatalogItem): CatalogItemFormValues {
   const n = (x: number | null) => (x === null ? "" : String(x));
