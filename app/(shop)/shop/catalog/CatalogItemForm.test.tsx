@@ -3,25 +3,20 @@ import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
 import { cleanup, render, screen, waitFor } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { afterEach, describe, expect, it, vi } from "vitest";
+import { answerFetch } from "@/tests/support/fetchAnswer";
+import { router } from "@/tests/support/navigation";
 import { EMPTY_CATALOG_ITEM } from "@/lib/shop/catalog/itemSchema";
 import { CatalogItemForm } from "./CatalogItemForm";
 
-const refresh = vi.fn();
-const push = vi.fn();
-vi.mock("next/navigation", () => ({ useRouter: () => ({ refresh, push }) }));
+vi.mock("next/navigation", () => import("@/tests/support/navigation"));
+const { refresh, push } = router;
 afterEach(() => {
   cleanup();
   vi.unstubAllGlobals();
-  refresh.mockReset();
-  push.mockReset();
+  vi.clearAllMocks();
 });
 
 const ITEM = "c1000000-0000-4000-8000-0000000000aa";
-function answer(status: number, body: unknown) {
-  const fetch = vi.fn(async () => new Response(JSON.stringify(body), { status, headers: { "Content-Type": "application/json" } }));
-  vi.stubGlobal("fetch", fetch);
-  return fetch;
-}
 const renderForm = (props: Parameters<typeof CatalogItemForm>[0]) =>
   render(
     <QueryClientProvider client={new QueryClient()}>
@@ -31,7 +26,7 @@ const renderForm = (props: Parameters<typeof CatalogItemForm>[0]) =>
 
 describe("CatalogItemForm", () => {
   it("checks a new tire with the CSV's messages before sending, each tied to its field", async () => {
-    const fetch = answer(201, {});
+    const fetch = answerFetch(201, {});
     renderForm({ initial: EMPTY_CATALOG_ITEM });
     await userEvent.type(screen.getByLabelText("Price ($)"), "12,50");
     await userEvent.click(screen.getByRole("button", { name: "Add item" }));
@@ -60,7 +55,7 @@ describe("CatalogItemForm", () => {
 
   it("sends an edit as typed and puts the server's refusal on the on-hand field", async () => {
     const message = "Accepted quotes hold 4 of this item: on hand cannot be less than 4 until their work is done or they lapse.";
-    const fetch = answer(422, { error: "Some fields need attention.", fieldErrors: { qtyOnHand: [message] } });
+    const fetch = answerFetch(422, { error: "Some fields need attention.", fieldErrors: { qtyOnHand: [message] } });
     renderForm({
       itemId: ITEM,
       initial: {
@@ -74,7 +69,7 @@ describe("CatalogItemForm", () => {
     });
     await userEvent.click(screen.getByRole("button", { name: "Save item" }));
     expect(await screen.findByText(message)).toBeTruthy();
-    const [url, init] = fetch.mock.calls[0] as unknown as [string, RequestInit];
+    const [url, init] = fetch.mock.calls[0]!;
     expect(url).toBe(`/api/shop/catalog/${ITEM}`);
     expect(init.method).toBe("PUT");
     expect(JSON.parse(String(init.body))).toMatchObject({ sku: "TR-1", qtyOnHand: "2", tireSize: "35x12.50R17LT", lowStockAt: "4" });
@@ -82,7 +77,7 @@ describe("CatalogItemForm", () => {
   });
 
   it("opens the new item's page once it is added", async () => {
-    answer(201, { item: { id: ITEM, sku: "TR-1" } });
+    answerFetch(201, { item: { id: ITEM, sku: "TR-1" } });
     renderForm({
       initial: { ...EMPTY_CATALOG_ITEM, sku: "TR-1", description: "Invented tire", price: "300", tireSize: "35x12.50R17LT" },
     });
