@@ -102,7 +102,8 @@ describe("the migration to one setup shape", () => {
       row_count: 2,
       error_count: 0,
     });
-    await db.migrate.up();
+    // That migration, then the ones after it: the app's queries below read today's columns.
+    await db.migrate.latest();
     // The rest of the shop (people and the template catalog), in today's columns.
     await db("users").insert(
       Object.values(U)

@@ -5,7 +5,12 @@ import { describe, expect, it } from "vitest";
 // Next sends a page's status with its shell: a notFound() raised below a loading.tsx (a Suspense
 // boundary) comes after the shell went out with 200. The item pages therefore check their record in
 // a layout with no loading boundary between the root and it; their own loading state sits below.
-const GUARDED = ["app/(garage)/garage/[id]", "app/(shop)/shop/quotes/[id]", "app/(shop)/shop/work-orders/[id]"];
+const GUARDED = [
+  "app/(garage)/garage/[id]",
+  "app/(shop)/shop/quotes/[id]",
+  "app/(shop)/shop/work-orders/[id]",
+  "app/(shop)/shop/catalog/[id]",
+];
 
 /** The folders from app/ down to a segment's parent, e.g. app, app/(shop), app/(shop)/shop, app/(shop)/shop/quotes. */
 const foldersAbove = (segment: string) =>

@@ -1,10 +1,11 @@
 import { createHash, randomBytes } from "node:crypto";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import { closeDatabases, rebuild, testDb } from "./support/db";
-import { drainQueue, startTestBoss, stopBoss } from "./support/jobs";
+import { testDb } from "./support/db";
+import { drainQueue } from "./support/jobs";
 import { ctx, req, sessionOf } from "./support/requests";
-import { SHOP_A, U, VEHICLE, quoteRequest, seedShops } from "./support/shopFixture";
+import { SHOP_A, U, VEHICLE, quoteRequest } from "./support/shopFixture";
 import { bodyFor } from "./support/workOrderSteps";
+import { setUpBookableShops, tearDownBookableShops } from "./support/openShop";
 
 const session = vi.hoisted(() => ({ current: null as unknown }));
 vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
@@ -12,7 +13,6 @@ vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
 const db = testDb();
 const as = (u: (typeof U)[keyof typeof U] | null) => void (session.current = u ? sessionOf(u) : null);
 
-const bays = await import("@/app/api/shop/bays/route");
 const quotes = await import("@/app/api/shop/quotes/route");
 const customers = await import("@/app/api/shop/customers/route");
 const open = (await import("@/app/api/shop/work-orders/route")).POST;
@@ -27,7 +27,6 @@ const { queueDueRechecks } = await import("@/lib/shop/workOrders/queries");
 const { QUEUES, getBoss } = await import("@/lib/platform/jobs/boss");
 
 const sha256 = (s: string) => createHash("sha256").update(s).digest("hex");
-const week = [1, 2, 3, 4, 5, 6, 7].map((weekday) => ({ weekday, open: true, opens: "07:00", closes: "19:00" }));
 
 /** A quote of shop A with its deposit paid and, unless told, its install booked at the first free start. */
 async function bookedQuote(book = true) {
@@ -64,35 +63,8 @@ const signAs = (id: string, body: object) => sign(req("PUT", `/api/shop/work-ord
 const moveTo = (id: string, to: string) => move(req("POST", `/api/shop/work-orders/${id}/status`, { to }), ctx({ id }));
 const stepRows = async () => Number((await db("work_order_steps").count({ n: "*" }))[0]!.n);
 
-beforeAll(async () => {
-  await rebuild(db);
-  await seedShops(db);
-  await startTestBoss();
-  as(U.ownerA);
-  const setup = (await (await bays.GET(req("GET", "/api/shop/bays"), ctx())).json()).setup;
-  const r = await bays.PUT(
-    req("PUT", "/api/shop/bays", {
-      ...setup,
-      timeZone: "America/Denver",
-      weekdays: week,
-      bays: [
-        { name: "Lift 1", kind: "lift_bay" },
-        { name: "Rack", kind: "alignment_rack" },
-      ],
-      serviceTimes: setup.serviceTimes.map((s: { catalogItemId: string; bayKind: string }) => ({
-        catalogItemId: s.catalogItemId,
-        minutes: "5",
-        bayKind: s.bayKind,
-      })),
-    }),
-    ctx(),
-  );
-  expect(r.status).toBe(200);
-});
-afterAll(async () => {
-  await stopBoss();
-  await closeDatabases(db);
-});
+beforeAll(() => setUpBookableShops(db));
+afterAll(() => tearDownBookableShops(db));
 
 describe("opening the work order", () => {
   it("is made from a booked quote, once; an unbooked quote is refused and nothing is written", async () => {

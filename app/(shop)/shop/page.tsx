@@ -6,6 +6,8 @@ import { LinkButton } from "@/components/ui/LinkButton";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { requirePageCaller } from "@/lib/platform/auth/session";
 import { shopIdOf, shopQueries } from "@/lib/shop/queries";
+import { catalogItemQueries } from "@/lib/shop/catalog/itemQueries";
+import { LowStockNote } from "@/components/catalog/LowStockNote";
 
 export const metadata: Metadata = { title: "Your shop" };
 
@@ -13,7 +15,11 @@ export default async function ShopPage() {
   const caller = await requirePageCaller("/shop", ["shop_staff", "shop_owner"]);
   // Scoped by the session's shop id: nobody sees another shop's people.
   const shopId = shopIdOf(caller);
-  const [shop, people] = await Promise.all([shopQueries.findShop(shopId), shopQueries.listTeam(shopId)]);
+  const [shop, people, lowStock] = await Promise.all([
+    shopQueries.findShop(shopId),
+    shopQueries.listTeam(shopId),
+    catalogItemQueries.countLowStock(shopId),
+  ]);
   return (
     <>
       <PageHeader
@@ -56,6 +62,7 @@ export default async function ShopPage() {
                 Catalog
               </Link>{" "}
               — tires, wheels and services with stock.
+              <LowStockNote count={lowStock} />
             </li>
           </ul>
         </Card>

@@ -112,8 +112,28 @@ export interface CatalogItemRow {
   beadlock: boolean;
   service_type: ServiceType | null;
   service_unit: ServiceUnit | null;
+  /** Units held by open stock reservations (db/migrations/20261208090000_stock_reservations.ts). */
+  qty_reserved: number;
+  /** Available count at or under which the counter shows "low stock"; null = never. */
+  low_stock_at: number | null;
+  archived_at: Date | null;
   created_at: Date;
   updated_at: Date;
+}
+
+export type StockReservationStatus = "reserved" | "consumed" | "released";
+
+/** Units of one quote line held for the quote from its acceptance until the work is done or the quote lapses. */
+export interface StockReservationRow {
+  id: string;
+  shop_id: string;
+  quote_id: string;
+  quote_line_id: string;
+  catalog_item_id: string;
+  quantity: number;
+  status: StockReservationStatus;
+  created_at: Date;
+  closed_at: Date | null;
 }
 
 export interface CatalogImportRow {

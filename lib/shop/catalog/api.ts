@@ -3,7 +3,8 @@
  * server and client. The shop id and the search key column stay on the server.
  */
 import type { CatalogItemRow, CatalogKind, ServiceType, ServiceUnit } from "@/lib/platform/db/types";
-import { rowTimes } from "@/lib/platform/http/isoDates";
+import { isoOrNull, rowTimes } from "@/lib/platform/http/isoDates";
+import { stockLevel } from "@/lib/shop/catalog/stock";
 import type { Pick as FitmentPick } from "@/lib/shop/quotes/fitment";
 import type { CounterVehicleForEngine } from "@/lib/shop/customers/schema";
 import type { BackspacingReference } from "@/lib/setup/model";
@@ -35,6 +36,13 @@ export interface CatalogItem {
   beadlock: boolean;
   serviceType: ServiceType | null;
   serviceUnit: ServiceUnit | null;
+  /** Units accepted quotes hold (lib/shop/catalog/stockQueries.ts). */
+  qtyReserved: number;
+  /** On hand less held; null when the item is not counted. */
+  qtyAvailable: number | null;
+  lowStockAt: number | null;
+  lowStock: boolean;
+  archivedAt: string | null;
   createdAt: string;
   updatedAt: string;
 }
@@ -100,6 +108,12 @@ export function stockItemDto(r: StockRow): StockItem {
   };
 }
 
+/** The stock fields of a row, read through stockLevel. */
+function stockOf(r: Pick<CatalogItemRow, "qty_on_hand" | "qty_reserved" | "low_stock_at">) {
+  const level = stockLevel({ qtyOnHand: r.qty_on_hand, qtyReserved: r.qty_reserved, lowStockAt: r.low_stock_at });
+  return { qtyReserved: r.qty_reserved, qtyAvailable: level.available, lowStockAt: r.low_stock_at, lowStock: level.low };
+}
+
 /** A catalog row (with or without its search key) as the API sends it. */
 export function catalogItemDto(r: CatalogItemRow): CatalogItem {
   return {
@@ -111,6 +125,8 @@ export function catalogItemDto(r: CatalogItemRow): CatalogItem {
     wheelBackspacingReference: r.wheel_backspacing_reference,
     serviceType: r.service_type,
     serviceUnit: r.service_unit,
+    ...stockOf(r),
+    archivedAt: isoOrNull(r.archived_at),
     ...rowTimes(r),
   };
 }

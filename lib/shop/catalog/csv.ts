@@ -61,7 +61,11 @@ export const DEFAULT_SERVICE_UNIT: Record<ServiceType, ServiceUnit> = {
 };
 
 /** A validated row, ready to upsert (columns as stored, without ids and timestamps). */
-export type CatalogInput = Omit<CatalogItemRow, "id" | "shop_id" | "created_at" | "updated_at">;
+/** Stock held by quotes, the low-stock mark and archiving are kept by the app, never by a file. */
+export type CatalogInput = Omit<
+  CatalogItemRow,
+  "id" | "shop_id" | "created_at" | "updated_at" | "qty_reserved" | "low_stock_at" | "archived_at"
+>;
 
 export interface RowError {
   /** The row a spreadsheet shows: the header is row 1, blank rows keep their numbers. */
@@ -211,6 +215,23 @@ export function parseCatalogCsv(text: string): CsvReport {
     }
   }
   return report;
+}
+
+/**
+ * One item's cells (named by CSV column, as text) checked by the same rules and messages as a
+ * file's row: the single-item editor uses it so an item reads the same whichever way it came in.
+ * `labelOf` names a column the way the caller's screen does, in messages and in `errors[].label`.
+ *
+ * @example
+ * validateCatalogCells({ kind: "service", sku: "SV-X", description: "Valve stem", price: "5", service_type: "valve_stem" }).item?.service_unit; // "per_wheel"
+ */
+export function validateCatalogCells(
+  cells: Partial<Record<CsvColumn, string>>,
+  labelOf: (c: CsvColumn) => string = (c) => c,
+): { item: CatalogInput | null; errors: { label: string; message: string }[] } {
+  const errs: RowError[] = [];
+  const item = validateRow(cells as Record<string, string>, { row: 1 }, errs, (c) => labelOf(c as CsvColumn));
+  return { item, errors: errs.map((e) => ({ label: e.column, message: e.message })) };
 }
 
 function validateRow(

@@ -8,6 +8,7 @@ import { containsPattern, searchKey } from "@/lib/platform/search/normalize";
 import { withoutSearchKey } from "../../platform/search/searchKeyColumn";
 import { bindAppDb } from "@/lib/platform/db/bind";
 import { ConflictError, NotFoundError } from "@/lib/platform/errors";
+import { assertOnHandCoversHeld } from "@/lib/shop/catalog/stockQueries";
 
 export const CATALOG_SORTS = ["sku", "description", "price_cents", "qty_on_hand", "kind", "tire_diameter_mm", "updated_at"] as const;
 export type CatalogSort = (typeof CATALOG_SORTS)[number];
@@ -30,7 +31,8 @@ export interface CatalogQuery {
 export async function listCatalog(db: Knex, shopId: string, q: CatalogQuery = {}): Promise<CatalogPage> {
   const pageSize = Math.min(Math.max(q.pageSize ?? 25, 1), 200);
   const page = Math.max(q.page ?? 1, 1);
-  const base = db<CatalogItemRow>("catalog_items").where({ shop_id: shopId });
+  // Archived items leave the lists and pickers (quote lines keep their own copy).
+  const base = db<CatalogItemRow>("catalog_items").where({ shop_id: shopId }).whereNull("archived_at");
   if (q.kind) base.andWhere({ kind: q.kind });
   const text = q.q?.trim() ?? "";
   if (text) {
@@ -78,11 +80,13 @@ const FITMENT_COLUMNS = [
 export async function fitmentStock(db: Knex, shopId: string): Promise<{ wheels: CatalogItemRow[]; tires: CatalogItemRow[] }> {
   const wheels = (await db<CatalogItemRow>("catalog_items")
     .where({ shop_id: shopId, kind: "wheel" })
+    .whereNull("archived_at")
     .select(FITMENT_COLUMNS)) as CatalogItemRow[];
   const diameters = [...new Set(wheels.map((w) => w.wheel_diameter_in!))];
   const tires = (await db<CatalogItemRow>("catalog_items")
     .where({ shop_id: shopId, kind: "tire" })
     .whereIn("tire_rim_in", diameters)
+    .whereNull("archived_at")
     .select(FITMENT_COLUMNS)) as CatalogItemRow[];
   return { wheels, tires };
 }
@@ -163,6 +167,7 @@ export async function commitImport(
       .returning(["rows"])) as { rows: CatalogInput[] }[];
     if (!staged) throw new ConflictError(ALREADY_CONFIRMED);
     const rows = staged.rows;
+    await assertOnHandCoversHeld(trx, shopId, rows);
     onProgress(0, rows.length);
     for (let i = 0; i < rows.length; i += IMPORT_BATCH) {
       const batch = rows.slice(i, i + IMPORT_BATCH).map((r) => ({ ...r, shop_id: shopId, updated_at: trx.fn.now() }));

@@ -26,6 +26,7 @@ import { type CounterVehicle, type CounterVehicleForEngine, counterVehicleForEng
 import type { Setup } from "@/lib/setup/model";
 import { bindAppDb } from "@/lib/platform/db/bind";
 import { queueShopNotice } from "@/lib/shop/notices/noticeQueries";
+import { stockFollowsQuote } from "@/lib/shop/catalog/stockQueries";
 import { isLinkToken } from "@/lib/platform/tokenFormat";
 import { hashToken, randomToken } from "@/lib/platform/tokens";
 
@@ -72,6 +73,7 @@ export async function transition(
   await trx("quotes")
     .where({ id: quote.id })
     .update({ ...extra, status: to, updated_at: trx.fn.now() });
+  await stockFollowsQuote(trx, quote.id, to);
   await trx("quote_events").insert({
     quote_id: quote.id,
     from_status: quote.status,
@@ -412,6 +414,7 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
     }
     const items = await trx<CatalogItemRow>("catalog_items")
       .where({ shop_id: shopId })
+      .whereNull("archived_at")
       .whereIn("id", [input.tireItemId, input.wheelItemId]);
     const tire = items.find((i) => i.id === input.tireItemId && i.kind === "tire");
     const wheel = items.find((i) => i.id === input.wheelItemId && i.kind === "wheel");
@@ -437,7 +440,10 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
       offsetMm: wheel.wheel_offset_mm!,
       beadlock: wheel.beadlock,
     });
-    const services = await trx<CatalogItemRow>("catalog_items").where({ shop_id: shopId, kind: "service" }).orderBy("sku");
+    const services = await trx<CatalogItemRow>("catalog_items")
+      .where({ shop_id: shopId, kind: "service" })
+      .whereNull("archived_at")
+      .orderBy("sku");
     const lines: LineDraft[] = [
       {
         ...fromCatalog(tire),

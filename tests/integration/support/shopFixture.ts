@@ -60,7 +60,11 @@ export async function seedShops(db: Knex) {
   const csv = CSV_TEMPLATE.replace(/\r\nservice,SV-MOUNT[^\r]*/, "") + SERVICES.join("\r\n");
   const r = parseCatalogCsv(csv);
   if (r.errors.length || r.fileErrors.length) throw new Error(JSON.stringify(r.errors.concat(r.fileErrors as never)));
-  await db("catalog_items").insert(r.items.map(({ row: _r, ...i }) => ({ ...i, shop_id: SHOP_A })));
+  // Plenty on the shelf: accepting a quote holds its tires and wheels, and the tests accept many
+  // quotes of the same items (shop-stock.test.ts sets the counts it checks).
+  await db("catalog_items").insert(
+    r.items.map(({ row: _r, ...i }) => ({ ...i, qty_on_hand: i.qty_on_hand === null ? null : 1000, shop_id: SHOP_A })),
+  );
   // Shop B has a catalog of its own, never offered to shop A.
   await db("catalog_items").insert(r.items.slice(0, 3).map(({ row: _r, ...i }) => ({ ...i, shop_id: SHOP_B })));
 }

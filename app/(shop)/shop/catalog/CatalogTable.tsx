@@ -1,7 +1,9 @@
 "use client";
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import { useEffect, useState } from "react";
+import Link from "next/link";
 import { CatalogKindSelect } from "@/components/catalog/CatalogKindSelect";
+import { StockLevel } from "@/components/catalog/StockLevel";
 import { Alert } from "@/components/ui/Alert";
 import { Badge } from "@/components/ui/Badge";
 import { Card } from "@/components/ui/Card";
@@ -14,18 +16,7 @@ import { api } from "@/lib/platform/client/api";
 import { queryKeys } from "@/lib/platform/query/keys";
 import { formatUsd } from "@/lib/shop/quotes/money";
 import { CATALOG_QUERY_LABELS } from "@/lib/shop/catalog/schema";
-
-const SERVICE_LABEL: Record<string, string> = {
-  mount_balance: "Mount & balance",
-  beadlock_assembly: "Beadlock assembly",
-  valve_stem: "Valve stems",
-  tpms: "TPMS",
-  alignment: "Alignment",
-  fender_trim: "Fender trimming",
-  disposal: "Disposal",
-  other: "Other",
-};
-const UNIT_LABEL: Record<string, string> = { per_wheel: "per wheel", per_vehicle: "per vehicle", per_hour: "per hour" };
+import { SERVICE_LABEL, UNIT_LABEL } from "@/lib/shop/catalog/labels";
 
 function details(i: CatalogItem): string {
   if (i.kind === "tire") return i.tireSize ?? "";
@@ -36,26 +27,48 @@ function details(i: CatalogItem): string {
         : `${i.wheelOffsetMm} mm offset`;
     return `${i.wheelDiameterIn}x${i.wheelWidthIn} · ${off} · ${i.boltPattern}${i.centerBoreMm ? ` · bore ${i.centerBoreMm} mm` : ""}${i.beadlock ? " · beadlock" : ""}`;
   }
-  return `${SERVICE_LABEL[i.serviceType ?? "other"] ?? ""} · ${UNIT_LABEL[i.serviceUnit ?? ""] ?? ""}`;
+  return `${SERVICE_LABEL[i.serviceType ?? "other"]} · ${i.serviceUnit ? UNIT_LABEL[i.serviceUnit] : ""}`;
 }
 
-/** The columns; each sortable column's id is the server's sort key for it. */
-const COLUMNS: TableColumn<CatalogItem>[] = [
-  { id: "sku", header: "SKU", cell: (i) => i.sku, sortable: true },
-  {
-    id: "kind",
-    header: "Kind",
-    cell: (i) => <Badge tone={i.kind === "tire" ? "steel" : i.kind === "wheel" ? "ember" : "neutral"}>{i.kind}</Badge>,
-    sortable: true,
-  },
-  { id: "description", header: "Description", cell: (i) => i.description, sortable: true },
-  { id: "tire_diameter_mm", header: "Size / details", cell: (i) => <span className="text-basalt-700">{details(i)}</span>, sortable: true },
-  { id: "price_cents", header: "Price", cell: (i) => formatUsd(i.priceCents), sortable: true, align: "end" },
-  { id: "qty_on_hand", header: "On hand", cell: (i) => i.qtyOnHand ?? "—", sortable: true, align: "end" },
-];
+/** The columns; each sortable column's id is the server's sort key for it. Owners get an edit link per row. */
+function columns(canEdit: boolean): TableColumn<CatalogItem>[] {
+  return [
+    { id: "sku", header: "SKU", cell: (i) => i.sku, sortable: true },
+    {
+      id: "kind",
+      header: "Kind",
+      cell: (i) => <Badge tone={i.kind === "tire" ? "steel" : i.kind === "wheel" ? "ember" : "neutral"}>{i.kind}</Badge>,
+      sortable: true,
+    },
+    { id: "description", header: "Description", cell: (i) => i.description, sortable: true },
+    {
+      id: "tire_diameter_mm",
+      header: "Size / details",
+      cell: (i) => <span className="text-basalt-700">{details(i)}</span>,
+      sortable: true,
+    },
+    { id: "price_cents", header: "Price", cell: (i) => formatUsd(i.priceCents), sortable: true, align: "end" },
+    { id: "qty_on_hand", header: "On hand", cell: (i) => i.qtyOnHand ?? "—", sortable: true, align: "end" },
+    { id: "held", header: "Held by quotes", cell: (i) => (i.qtyOnHand === null ? "—" : i.qtyReserved), align: "end" },
+    { id: "available", header: "Available", cell: (i) => <StockLevel item={i} />, align: "end" },
+    ...(canEdit
+      ? [
+          {
+            id: "edit",
+            header: <span className="sr-only">Edit</span>,
+            cell: (i: CatalogItem) => (
+              <Link className="text-ember-700 underline" href={`/shop/catalog/${i.id}`} aria-label={`Edit ${i.sku}`}>
+                Edit
+              </Link>
+            ),
+          },
+        ]
+      : []),
+  ];
+}
 
 /** The catalog table: paging, sorting and filtering all happen on the server. */
-export function CatalogTable() {
+export function CatalogTable({ canEdit = false }: { canEdit?: boolean }) {
   // The server always orders the rows, so the header flips between the two directions.
   const [sort, setSort] = useState<NonNullable<TableSort>>({ id: "sku", desc: false });
   const [pagination, setPagination] = useState({ pageIndex: 0, pageSize: 25 });
@@ -114,8 +127,8 @@ export function CatalogTable() {
       {data.isError && <Alert tone="error">{(data.error as Error).message}</Alert>}
       <Table
         caption="Catalog items; column headers sort"
-        className="min-w-[760px]"
-        columns={COLUMNS}
+        className="min-w-[960px]"
+        columns={columns(canEdit)}
         rows={data.data?.items ?? []}
         rowKey={(i) => i.id}
         rowTestId="catalog-row"

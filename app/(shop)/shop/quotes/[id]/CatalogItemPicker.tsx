@@ -2,6 +2,7 @@
 import { useQuery } from "@tanstack/react-query";
 import { useState } from "react";
 import { CatalogKindSelect } from "@/components/catalog/CatalogKindSelect";
+import { StockLevel } from "@/components/catalog/StockLevel";
 import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
 import { api } from "@/lib/platform/client/api";
@@ -83,6 +84,11 @@ export function CatalogItemPicker({
                     {it.kind === "wheel" && ` · ${it.boltPattern}${it.centerBoreMm ? ` · bore ${it.centerBoreMm} mm` : ""}`}
                     {it.serviceUnit === "per_hour" && " · per hour"}
                   </span>
+                  {it.kind !== "service" && (
+                    <span className="block text-basalt-700">
+                      <StockLevel item={it} />
+                    </span>
+                  )}
                   {refusal && <span className="block text-contact-800">Does not fit: {refusal}</span>}
                   {rings && <span className="block text-tight-800">Check: {rings.message}</span>}
                 </span>

@@ -1,9 +1,9 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import { buttonClass } from "@/components/ui/Button";
+import { LinkButton } from "@/components/ui/LinkButton";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { requirePageCaller } from "@/lib/platform/auth/session";
-import { CatalogTable } from "./CatalogTable";
+import { CatalogTable } from "../CatalogTable";
 
 export const metadata: Metadata = { title: "Catalog" };
 
@@ -14,7 +14,7 @@ export default async function CatalogPage() {
     <>
       <PageHeader
         title="Catalog"
-        lead="Tires, wheels and services with prices and stock. Quotes pick from here."
+        lead="Tires, wheels and services with prices and stock. Accepted quotes hold their tires and wheels until the work is done; quotes pick from here."
         actions={
           <div className="flex flex-wrap gap-2">
             <a href="/api/shop/catalog/export" className={buttonClass("secondary")} download>
@@ -24,14 +24,17 @@ export default async function CatalogPage() {
               CSV template
             </a>
             {owner && (
-              <Link href="/shop/catalog/import" className={buttonClass("primary")}>
-                Import CSV
-              </Link>
+              <>
+                <LinkButton href="/shop/catalog/import" variant="secondary">
+                  Import CSV
+                </LinkButton>
+                <LinkButton href="/shop/catalog/new">Add an item</LinkButton>
+              </>
             )}
           </div>
         }
       />
-      <CatalogTable />
+      <CatalogTable canEdit={owner} />
     </>
   );
 }
