@@ -28,7 +28,6 @@ export const CATALOG_ITEM_FIELDS = {
   serviceUnit: { column: "service_unit", label: "Priced" },
 } as const satisfies Record<string, { column: CsvColumn; label: string }>;
 
-export type CatalogItemField = keyof typeof CATALOG_ITEM_FIELDS | "lowStockAt";
 export const LOW_STOCK_LABEL = "Low stock at";
 
 const FIELD_OF_LABEL = new Map(Object.entries(CATALOG_ITEM_FIELDS).map(([field, f]) => [f.label as string, field]));
