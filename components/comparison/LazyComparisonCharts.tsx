@@ -4,7 +4,7 @@ import { useRef } from "react";
 import type { ComparisonResult } from "@/lib/comparisons/compute";
 import type { DisplayPrefs } from "@/lib/comparisons/format";
 import { CHART_HEIGHT_RESERVED } from "./chartSize";
-import { useVisibleAndIdle } from "./useVisibleAndIdle";
+import { useVisibleAndIdle } from "@/components/ui/useVisibleAndIdle";
 
 function ChartsPlaceholder() {
   return (

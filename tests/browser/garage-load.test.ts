@@ -1,7 +1,10 @@
 import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launch, seriousViolations, shot, signInAs } from "./support/browser";
+import { launch, panelsShown, seriousViolations, shot, signInAs } from "./support/browser";
 import { DEMO, DEMO_PASSWORD } from "./support/http";
+
+/** The vehicle page's panels below the fold, mounted when scrolled near (MountWhenNear). */
+const VEHICLE_PANELS = ["Loading placard, axle weights and body points", "Loading plan a setup"];
 
 // An invented truck: door placard P265/70R17 113S at 35 psi front and rear, weighed at 3,086 lb
 // front and 2,646 lb rear, body points measured on its 265/70R17 tires; planned 37x12.50R17LT
@@ -48,6 +51,7 @@ describe("a garage vehicle's placard, axle weights and body points", () => {
 
   it("stores the placard and body points and shows the pressure to set and the angle changes in inches", async () => {
     await page.goto(`/garage/${vehicleId}?${PLANNED}`);
+    await panelsShown(page, ...VEHICLE_PANELS);
     await units("Inch");
     await expect.poll(() => page.getByTestId("body-points-drawing").isVisible()).toBe(true);
     const fill: Record<string, string> = {
@@ -93,6 +97,7 @@ describe("a garage vehicle's placard, axle weights and body points", () => {
     await expect.poll(() => page.getByTestId("set-front").textContent()).toBe("201 kPa (2.01 bar, 29.2 psi)");
     expect(await page.getByTestId("angle-approach").textContent()).toBe(approach);
     await page.reload();
+    await panelsShown(page, ...VEHICLE_PANELS);
     await expect.poll(() => page.getByLabel("Wheelbase (mm)").inputValue()).toBe("2997.2");
     await expect.poll(() => page.getByTestId("set-front").textContent()).toBe("201 kPa (2.01 bar, 29.2 psi)");
     await page.getByTestId("setup-load-trail").scrollIntoViewIfNeeded();
@@ -111,6 +116,7 @@ describe("a garage vehicle's placard, axle weights and body points", () => {
     await expect.poll(() => page.getByText("Nothing was saved: see the messages beside the fields.").isVisible()).toBe(true);
     await shot(page, "garage-load-refused");
     await page.reload();
+    await panelsShown(page, ...VEHICLE_PANELS);
     await expect.poll(() => page.getByLabel("Front axle weight, scale ticket (kg)").inputValue()).toBe("1399.8");
   });
 

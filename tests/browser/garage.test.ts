@@ -2,7 +2,7 @@ import { randomBytes } from "node:crypto";
 import type { Page } from "playwright-core";
 import sharp from "sharp";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { expectAxeClean, launch, seriousViolations, shot, signInAs, withBrowserPage } from "./support/browser";
+import { expectAxeClean, launch, panelsShown, seriousViolations, shot, signInAs, withBrowserPage } from "./support/browser";
 import { DEMO, DEMO_PASSWORD } from "./support/http";
 
 let session: Awaited<ReturnType<typeof launch>>;
@@ -113,6 +113,7 @@ describe("the garage in Chromium", () => {
   });
 
   it("predicts the points for a planned setup and flags a contact", async () => {
+    await panelsShown(page, "Loading plan a setup");
     await page.locator("#f-planned-tire").fill("35x12.50R17LT");
     await page.locator("#f-planned-w").fill("9");
     await page.locator("#f-planned-offset").fill("-12");
@@ -276,6 +277,7 @@ describe("the garage in Chromium", () => {
     await withBrowserPage({ width: 375, height: 800 }, async (p) => {
       await signInAs(p, DEMO.member, DEMO_PASSWORD);
       await p.goto("/garage/d4000000-0000-4000-8000-000000000002?pt=33x12.50R15LT&pd=15&pw=8&pb=3.75&pr=flange");
+      await panelsShown(p, "Loading plan a setup");
       await expect.poll(() => p.getByTestId("predictions").isVisible(), { timeout: 15000 }).toBe(true);
       expect(await p.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(375);
       await shot(p, "garage-375-vehicle");

@@ -1,6 +1,6 @@
 import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launch, seriousViolations, shot } from "./support/browser";
+import { launch, panelsShown, seriousViolations, shot } from "./support/browser";
 
 // A vehicle whose door placard reads P265/70R17 113S at 35 psi front and rear, weighed at
 // 3,086 lb front and 2,646 lb rear (an invented scale ticket), fitting 37x12.50R17LT 124Q LRD.
@@ -25,6 +25,7 @@ for (const width of [1280, 390]) {
 
     it("shows the pressure to set, the equivalent pressure, the chart and the angle changes in both unit systems", async () => {
       await page.goto(QUERY);
+      await panelsShown(page, "Loading load and pressure", "Loading trail angles");
       await units("Inch");
       await page.getByLabel("Placard tire size").fill("P265/70R17 113S");
       await page.getByLabel("Placard pressure, front (psi)").fill("35");

@@ -5,9 +5,11 @@ import { ChartsSection } from "@/components/comparison/ChartsSection";
 import type { DrawnLimits } from "@/components/comparison/CrossSection";
 import { DisplayToggle } from "@/components/comparison/DisplayToggle";
 import { DrawingAndWarnings } from "@/components/comparison/DrawingAndWarnings";
-import { HeadlineChanges, SetupDetailTable } from "@/components/comparison/ResultsPanel";
+import { HeadlineChanges } from "@/components/comparison/ResultsPanel";
+import { LazySetupDetailTable } from "@/components/comparison/LazySetupDetailTable";
 import { useDisplayPrefs } from "@/components/comparison/useDisplayPrefs";
 import { Button } from "@/components/ui/Button";
+import { MountWhenNear } from "@/components/ui/MountWhenNear";
 import { computeComparison } from "@/lib/comparisons/compute";
 import {
   type Draft,
@@ -26,10 +28,12 @@ import { decodeComparison, workspaceParam, workspaceUrl } from "@/lib/comparison
 import { type LinkProblem, problemText } from "@/lib/setup/url";
 import type { WorkspaceVehicle } from "@/lib/garage/types";
 import { CurrentInputContext } from "./currentInput";
-import { LoadPressurePanel } from "./LoadPressurePanel";
-import { TrailAnglesPanel } from "./TrailAnglesPanel";
 import { SetupDraftFields } from "./SetupDraftFields";
 import { VehicleFields } from "./VehicleFields";
+
+// Below the fold on every screen: their code loads when they are scrolled near (MountWhenNear below).
+const LoadPressurePanel = dynamic(() => import("./LoadPressurePanel").then((m) => m.LoadPressurePanel), { ssr: false });
+const TrailAnglesPanel = dynamic(() => import("./TrailAnglesPanel").then((m) => m.TrailAnglesPanel), { ssr: false });
 
 // Only members with vehicles load the garage panel (and the prediction code with it).
 const GaragePanel = dynamic(() => import("./GaragePanel"), {
@@ -288,10 +292,15 @@ export function Workspace({
           <HeadlineChanges result={result} prefs={prefs} />
           <DrawingAndWarnings result={result} prefs={prefs} limits={vehicleId ? limits : null} />
           <ChartsSection result={result} prefs={prefs} />
-          <SetupDetailTable result={result} prefs={prefs} />
+          <LazySetupDetailTable result={result} prefs={prefs} />
         </div>
-        <LoadPressurePanel currentTire={s.good.current.tire} plannedTire={s.good.planned.tire} prefs={prefs} />
-        <TrailAnglesPanel result={result} prefs={prefs} />
+        {/* Mounted when scrolled near, so hydration on a phone skips them; reserves a little under their heights at 375–1280 px. */}
+        <MountWhenNear label="Loading load and pressure" reserve="min-h-[78rem] sm:min-h-[54rem] lg:min-h-[42rem]">
+          <LoadPressurePanel currentTire={s.good.current.tire} plannedTire={s.good.planned.tire} prefs={prefs} />
+        </MountWhenNear>
+        <MountWhenNear label="Loading trail angles" reserve="min-h-[58rem] sm:min-h-[40rem] lg:min-h-[35rem]">
+          <TrailAnglesPanel result={result} prefs={prefs} />
+        </MountWhenNear>
       </div>
     </CurrentInputContext>
   );

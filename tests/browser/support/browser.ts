@@ -87,6 +87,18 @@ export async function signInAs(page: Page, email: string, password: string): Pro
 }
 
 /**
+ * Panels below the fold mount when they come near the viewport (MountWhenNear), as the charts do:
+ * scroll to each placeholder named in `labels` as a reader does, then wait for the panel in its place.
+ */
+export async function panelsShown(page: Page, ...labels: string[]): Promise<void> {
+  for (const label of labels) {
+    const placeholder = page.getByRole("status", { name: label, exact: true });
+    if (await placeholder.count()) await placeholder.scrollIntoViewIfNeeded();
+    await placeholder.waitFor({ state: "detached", timeout: 20000 });
+  }
+}
+
+/**
  * The comparison charts load when they come near the viewport (LazyComparisonCharts): scroll to
  * their placeholder as a reader does, then wait for them.
  */

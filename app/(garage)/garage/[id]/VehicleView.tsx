@@ -2,10 +2,12 @@
 import { useMutation, useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
+import dynamic from "next/dynamic";
 import { useState } from "react";
 import { Alert } from "@/components/ui/Alert";
 import { Button, buttonClass } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
+import { MountWhenNear } from "@/components/ui/MountWhenNear";
 import { api } from "@/lib/platform/client/api";
 import { queryKeys } from "@/lib/platform/query/keys";
 import { formatBoltPattern, formatLength, parseBoltPattern, setupGeometry } from "@/lib/fitment";
@@ -16,9 +18,11 @@ import { type Setup, toEngineSetup } from "@/lib/setup/model";
 import { PhotoDrop } from "../_components/PhotoDrop";
 import { AddPoint } from "./AddPoint";
 import { DeletePoint } from "./DeletePoint";
-import { LoadProfileCard } from "./LoadProfileCard";
-import { PlannedPanel } from "./PlannedPanel";
 import { useLoadProfile } from "./useLoadProfile";
+
+// Below the fold on a phone: their code (forms, zod schemas, the predictions) loads when scrolled near.
+const LoadProfileCard = dynamic(() => import("./LoadProfileCard").then((m) => m.LoadProfileCard), { ssr: false });
+const PlannedPanel = dynamic(() => import("./PlannedPanel").then((m) => m.PlannedPanel), { ssr: false });
 
 export function VehicleView({ initial, initialPlanned }: { initial: VehicleDetail; initialPlanned: Setup | null }) {
   const id = initial.vehicle.id;
@@ -143,9 +147,15 @@ export function VehicleView({ initial, initialPlanned }: { initial: VehicleDetai
         <AddPoint vehicleId={id} />
       </Card>
 
-      <LoadProfileCard vehicle={v} />
+      {/* Below the fold on a phone: mounted when scrolled near, so hydrating the page skips their forms. Reserves are
+          under their heights at 375–1280 px (the plan grows with the measured points). */}
+      <MountWhenNear label="Loading placard, axle weights and body points" reserve="min-h-[120rem] sm:min-h-[80rem] lg:min-h-[60rem]">
+        <LoadProfileCard vehicle={v} />
+      </MountWhenNear>
 
-      <PlannedPanel detail={q.data} initialPlanned={initialPlanned} loadProfile={loadProfile} />
+      <MountWhenNear label="Loading plan a setup" reserve="min-h-[64rem] sm:min-h-[60rem] lg:min-h-[40rem]">
+        <PlannedPanel detail={q.data} initialPlanned={initialPlanned} loadProfile={loadProfile} />
+      </MountWhenNear>
     </div>
   );
 }

@@ -4,7 +4,8 @@ import { useMemo } from "react";
 import { ChartsSection } from "@/components/comparison/ChartsSection";
 import { DisplayToggle } from "@/components/comparison/DisplayToggle";
 import { DrawingAndWarnings } from "@/components/comparison/DrawingAndWarnings";
-import { HeadlineChanges, SetupDetailTable } from "@/components/comparison/ResultsPanel";
+import { HeadlineChanges } from "@/components/comparison/ResultsPanel";
+import { LazySetupDetailTable } from "@/components/comparison/LazySetupDetailTable";
 import { useDisplayPrefs } from "@/components/comparison/useDisplayPrefs";
 import { buttonClass } from "@/components/ui/Button";
 import { computeComparison } from "@/lib/comparisons/compute";
@@ -72,7 +73,7 @@ export function SharedView({
       <VehicleSummary input={input} prefs={prefs} />
       {loadTrail && <SharedLoadTrail figures={loadTrail} prefs={prefs} />}
       <ChartsSection result={result} prefs={prefs} />
-      <SetupDetailTable result={result} prefs={prefs} />
+      <LazySetupDetailTable result={result} prefs={prefs} />
       <p className="rounded-lg bg-tight-100 px-4 py-3 text-sm text-tight-800">
         Bigger tires and different offsets change braking, steering effort and the load on wheel bearings, ball joints and steering parts.
         Lift and steering work, wheel fitting and torque follow the vehicle, wheel and tire makers&apos; instructions and local rules; have
