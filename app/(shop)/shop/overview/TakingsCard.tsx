@@ -1,7 +1,7 @@
 "use client";
 import dynamic from "next/dynamic";
 import { useRef } from "react";
-import { useVisibleAndIdle } from "@/components/comparison/useVisibleAndIdle";
+import { useVisibleAndIdle } from "@/components/ui/useVisibleAndIdle";
 import { Table } from "@/components/ui/Table";
 import { OverviewSection } from "./OverviewSection";
 import { type TakingsDay, shortDay } from "@/lib/shop/overview";
