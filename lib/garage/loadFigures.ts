@@ -12,7 +12,13 @@ import { type Setup, toEngineSetup } from "@/lib/setup/model";
 
 export interface SetupFigures {
   /** null: no placard or no axle loads stored. */
-  load: { plan: LoadPlan | null; messages: string[]; from: "scale ticket" | "axle ratings (GAWR)" } | null;
+  load: {
+    plan: LoadPlan | null;
+    messages: string[];
+    /** The planned tire itself was refused (typically: its size names no load index), not the load it must carry. */
+    tireRefused: boolean;
+    from: "scale ticket" | "axle ratings (GAWR)";
+  } | null;
   /** Angles with the current and the planned tires; empty when no body point is stored. */
   angles: TrailAngle[];
   /** Messages of angles that could not be computed (a body point the planned tire would reach). */
@@ -66,7 +72,13 @@ export function setupFigures(profile: LoadProfile, current: Setup, planned: Setu
         plannedMaxPressure: "Planned tire",
       },
     );
-    load = { plan, messages: Object.values(errors as LoadErrors).filter((m): m is string => Boolean(m)), from: loads.from };
+    const errs = errors as LoadErrors;
+    load = {
+      plan,
+      messages: Object.values(errs).filter((m): m is string => Boolean(m)),
+      tireRefused: Boolean(errs.plannedTire),
+      from: loads.from,
+    };
   }
   const d = (s: Setup) => setupGeometry(toEngineSetup(s)).overallDiameterMm;
   const trail = planTrail(

@@ -93,7 +93,8 @@ export async function signInAs(page: Page, email: string, password: string): Pro
 export async function panelsShown(page: Page, ...labels: string[]): Promise<void> {
   for (const label of labels) {
     const placeholder = page.getByRole("status", { name: label, exact: true });
-    if (await placeholder.count()) await placeholder.scrollIntoViewIfNeeded();
+    // The panel may mount between the count and the scroll (it was near already): then there is nothing to scroll to.
+    if (await placeholder.count()) await placeholder.scrollIntoViewIfNeeded({ timeout: 5000 }).catch(() => undefined);
     await placeholder.waitFor({ state: "detached", timeout: 20000 });
   }
 }

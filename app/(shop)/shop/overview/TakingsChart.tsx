@@ -24,7 +24,7 @@ export default function TakingsChart({ days }: { days: TakingsDay[] }) {
   return (
     <div style={{ height: TAKINGS_CHART_HEIGHT }} aria-hidden="true" data-testid="takings-chart">
       <ResponsiveContainer width="100%" height="100%">
-        <BarChart data={data} margin={{ left: 8, right: 8, top: 4, bottom: 4 }}>
+        <BarChart data={data} margin={{ left: 8, right: 8, top: 4, bottom: 4 }} accessibilityLayer={false}>
           <CartesianGrid strokeDasharray="3 3" vertical={false} />
           <XAxis dataKey="day" tick={tick} interval="preserveStartEnd" />
           <YAxis tick={tick} width={64} tickFormatter={(v) => formatUsd(Math.round(Number(v) * 100)).replace(/\.00$/, "")} />

@@ -40,4 +40,12 @@ describe("the finder's pressure and angle columns", () => {
     expect(screen.getByTestId("finder-pressure").textContent).toContain("F 201 kPa (2.01 bar, 29.2 psi)");
     expect(pressure(METRIC).sortValue!(FITS[1]!)).toBeCloseTo(0.5833 * 344.7379, 0);
   });
+
+  it("say a fit's size names no load index instead of claiming it cannot carry the load (the finder's sizes carry none)", () => {
+    const pressure = loadColumns(DEMO_PROFILE, VEHICLE, IMPERIAL).find((c) => c.id === "pressure")!;
+    render(<>{pressure.cell!(fit("285/70R17"), 0)}</>);
+    expect(screen.getByText("load index not known").getAttribute("title")).toMatch(/has no load index/);
+    expect(screen.queryByText(/cannot carry/)).toBeNull();
+    expect(pressure.sortValue!(fit("285/70R17"))).toBeNull();
+  });
 });

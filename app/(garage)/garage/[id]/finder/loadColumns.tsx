@@ -43,6 +43,14 @@ export function loadColumns(profile: LoadProfile | null, vehicle: Vehicle, prefs
       cell: (m) => {
         const load = figuresOf(m).load;
         if (!load) return "—";
+        if (!load.plan && load.tireRefused) {
+          // The finder's sizes carry no service description: without a load index there is no pressure to compute.
+          return (
+            <span className="text-basalt-600" title={load.messages[0]}>
+              load index not known
+            </span>
+          );
+        }
         if (!load.plan) return <span className="text-contact-700">cannot carry the placard or axle load</span>;
         return (
           <span className="flex flex-col text-xs" data-testid="finder-pressure">
