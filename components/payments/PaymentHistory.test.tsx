@@ -3,18 +3,12 @@ import { cleanup, render, screen, within } from "@testing-library/react";
 import { afterEach, describe, expect, it } from "vitest";
 import { invoiceFigures } from "@/lib/shop/payments/invoice";
 import { PaymentHistory } from "./PaymentHistory";
+import { PAID_DEPOSIT } from "./paymentsTestUtil";
 
 afterEach(cleanup);
 
 // 4,307.82 − 1,076.96 = 3,230.86 (the quote of tests/integration/shop-quotes.test.ts, worked by hand).
-const deposit = {
-  id: "p1",
-  kind: "deposit" as const,
-  method: "provider" as const,
-  amountCents: 107696,
-  paidAt: "2027-03-01T17:00:00Z",
-  recordedBy: "",
-};
+const deposit = PAID_DEPOSIT;
 
 describe("PaymentHistory", () => {
   it("shows the invoice with what is still to pay, and the deposit in the history", () => {

@@ -4,7 +4,7 @@ import { type ComparisonInput, DEFAULT_INPUT } from "@/lib/comparisons/model";
 import { SETUP_A, SETUP_B, SETUP_C } from "@/lib/comparisons/crossSection/testUtil";
 import { encodeComparison } from "@/lib/comparisons/url";
 import { PREFS_STORAGE_KEY } from "@/lib/comparisons/format";
-import { SHOTS, launch, seriousViolations, shot } from "./support/browser";
+import { launch, pageWidth, seriousViolations, shot, SHOTS } from "./support/browser";
 
 /*
  * The workspace's cross-section as Chromium lays it out, on a 375 px phone and at 1280 px: no two
@@ -54,8 +54,6 @@ function overlaps(rects: Rect[]): string[] {
   }
   return out;
 }
-
-const pageWidth = (p: Page) => p.evaluate(() => Math.max(document.documentElement.scrollWidth, document.body.scrollWidth));
 
 for (const width of [375, 1280]) {
   describe(`cross-section at ${width} px`, () => {

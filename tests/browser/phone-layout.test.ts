@@ -1,7 +1,7 @@
 import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { DEFAULT_INPUT } from "@/lib/comparisons/schema";
-import { launch, seriousViolations, shot, signInAs } from "./support/browser";
+import { launch, pageWidth, seriousViolations, shot, signInAs } from "./support/browser";
 import { DEMO, DEMO_PASSWORD, call } from "./support/http";
 import { createAccount } from "./support/signUp";
 
@@ -22,7 +22,6 @@ beforeAll(async () => {
 afterAll(() => phone.close());
 
 /** How wide the page really is: wider than the screen means sideways scrolling or clipped controls. */
-const pageWidth = (p: Page) => p.evaluate(() => Math.max(document.documentElement.scrollWidth, document.body.scrollWidth));
 
 async function allInside(p: Page, selector: string): Promise<string[]> {
   return p.locator(selector).evaluateAll(

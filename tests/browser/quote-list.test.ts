@@ -1,6 +1,5 @@
-import type { Page } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { expectAxeClean, launch, signInAs } from "./support/browser";
+import { describe, expect, it } from "vitest";
+import { expectAxeClean, filePage, pageWidth, signInAs } from "./support/browser";
 import { DEMO, DEMO_PASSWORD, call } from "./support/http";
 
 /*
@@ -8,21 +7,11 @@ import { DEMO, DEMO_PASSWORD, call } from "./support/http";
  * searched by a quote number typed as printed, filtered by status, the address keeps the search,
  * the export downloads the same search; at 1280 and 390 px, with no serious axe finding.
  */
-let browser: Awaited<ReturnType<typeof launch>>;
-let page: Page;
-
-beforeAll(async () => {
-  browser = await launch({ width: 1280, height: 900 });
-  page = await browser.context.newPage();
-});
-afterAll(async () => {
-  await browser?.close();
-});
-
-const pageWidth = (p: Page) => p.evaluate(() => Math.max(document.documentElement.scrollWidth, document.body.scrollWidth));
+const session = filePage();
 
 describe("the quotes list", () => {
   it("finds a quote by its printed number and by status, keeps the search in the address, at 1280 and 390 px", async () => {
+    const page = session.page();
     await signInAs(page, DEMO.shop_owner, DEMO_PASSWORD);
     await page.goto("/shop/quotes");
     await page.getByRole("heading", { level: 1, name: "Quotes" }).waitFor();
@@ -59,6 +48,7 @@ describe("the quotes list", () => {
   });
 
   it("names the control when the address holds a value the form could not send", async () => {
+    const page = session.page();
     await page.setViewportSize({ width: 1280, height: 900 });
     await page.goto("/shop/quotes?status=paid");
     await page.getByText("Pick one of the statuses in the list.").waitFor();

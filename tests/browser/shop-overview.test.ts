@@ -1,6 +1,5 @@
-import type { Page } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { expectAxeClean, launch, signInAs } from "./support/browser";
+import { describe, expect, it } from "vitest";
+import { expectAxeClean, filePage, pageWidth, signInAs } from "./support/browser";
 import { DEMO, DEMO_PASSWORD } from "./support/http";
 
 /*
@@ -9,21 +8,11 @@ import { DEMO, DEMO_PASSWORD } from "./support/http";
  * finding; the takings chart arrives when scrolled to and its figures are in the table beside it.
  * Staff are not shown the tab and cannot open the page.
  */
-let browser: Awaited<ReturnType<typeof launch>>;
-let page: Page;
-
-beforeAll(async () => {
-  browser = await launch({ width: 1280, height: 900 });
-  page = await browser.context.newPage();
-});
-afterAll(async () => {
-  await browser?.close();
-});
-
-const pageWidth = (p: Page) => p.evaluate(() => Math.max(document.documentElement.scrollWidth, document.body.scrollWidth));
+const session = filePage();
 
 describe("the owner's overview", () => {
   it("the owner opens it from the shop's tabs and reads the week, the deposits and the takings at 1280 and 390 px", async () => {
+    const page = session.page();
     await signInAs(page, DEMO.shop_owner, DEMO_PASSWORD);
     await page.goto("/shop");
     await page.getByRole("navigation", { name: "Shop" }).getByRole("link", { name: "Overview" }).click();
@@ -45,10 +34,11 @@ describe("the owner's overview", () => {
     await page.getByRole("heading", { level: 1, name: "Overview" }).waitFor();
     expect(await pageWidth(page)).toBeLessThanOrEqual(390);
     await expectAxeClean(page, "shop-overview-390");
-    await browser.context.clearCookies();
+    await session.context().clearCookies();
   });
 
   it("staff see no Overview tab and cannot open the page", async () => {
+    const page = session.page();
     await page.setViewportSize({ width: 1280, height: 900 });
     await signInAs(page, DEMO.shop_staff, DEMO_PASSWORD);
     await page.goto("/shop");
@@ -56,6 +46,6 @@ describe("the owner's overview", () => {
     await page.goto("/shop/overview");
     // requirePageCaller sends a signed-in caller without the role to the forbidden page (in the browser once the shell streamed).
     await page.waitForURL(/\/forbidden/);
-    await browser.context.clearCookies();
+    await session.context().clearCookies();
   });
 });

@@ -3,7 +3,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import AxeBuilder from "@axe-core/playwright";
 import { type BrowserContext, type Page, chromium } from "playwright-core";
-import { expect } from "vitest";
+import { afterAll, beforeAll, expect } from "vitest";
 import { CHROMIUM_FLAGS } from "@/scripts/chromium";
 
 export const BASE = process.env.E2E_BASE_URL ?? "http://127.0.0.1:3000";
@@ -37,6 +37,33 @@ export async function withBrowserPage(viewport: { width: number; height: number 
     await browser.close();
   }
 }
+
+/**
+ * One browser page for a whole test file, opened before its tests and closed after them.
+ *
+ * @example
+ * const session = filePage(); // at the top of the file
+ * it("…", async () => { const page = session.page(); … });
+ */
+export function filePage(viewport = { width: 1280, height: 900 }): { page: () => Page; context: () => BrowserContext } {
+  let browser: Awaited<ReturnType<typeof launch>> | undefined;
+  let page: Page | undefined;
+  beforeAll(async () => {
+    browser = await launch(viewport);
+    page = await browser.context.newPage();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+  const opened = () => {
+    if (!browser || !page) throw new Error("filePage(): the page opens in beforeAll");
+    return { page, context: browser.context };
+  };
+  return { page: () => opened().page, context: () => opened().context };
+}
+
+/** The page's full width in CSS pixels: wider than the viewport means it scrolls sideways. */
+export const pageWidth = (p: Page) => p.evaluate(() => Math.max(document.documentElement.scrollWidth, document.body.scrollWidth));
 
 export async function shot(page: Page, name: string): Promise<string> {
   mkdirSync(SHOTS, { recursive: true });

@@ -3,6 +3,7 @@ import { cleanup, render, screen, waitFor } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { invoiceFigures } from "@/lib/shop/payments/invoice";
+import { PAID_DEPOSIT } from "@/components/payments/paymentsTestUtil";
 import { BalancePanel } from "./BalancePanel";
 
 afterEach(() => {
@@ -12,14 +13,7 @@ afterEach(() => {
 
 const TOKEN = "A".repeat(43);
 const deposit = { kind: "deposit" as const, status: "paid" as const, amountCents: 107696 };
-const entry = {
-  id: "p1",
-  kind: "deposit" as const,
-  method: "provider" as const,
-  amountCents: 107696,
-  paidAt: "2027-03-01T17:00:00Z",
-  recordedBy: "",
-};
+const entry = PAID_DEPOSIT;
 
 describe("BalancePanel", () => {
   it("offers the balance still owed (4,307.82 − 1,076.96 = 3,230.86) and sends the customer to the provider's page", async () => {

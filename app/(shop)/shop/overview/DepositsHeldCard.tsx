@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { QuoteNumberLink } from "@/components/quotes/QuoteNumberLink";
 import { Table } from "@/components/ui/Table";
 import { OverviewSection } from "./OverviewSection";
 import { formatInstant } from "@/lib/shop/bookings/zoned";
@@ -31,11 +31,7 @@ export function DepositsHeldCard({ deposits, timeZone }: { deposits: { items: De
           {
             id: "quote",
             header: "Quote",
-            cell: (d) => (
-              <Link className="font-medium text-ember-700 underline" href={`/shop/quotes/${d.quoteId}`}>
-                Q-{d.quoteNumber}
-              </Link>
-            ),
+            cell: (d) => <QuoteNumberLink id={d.quoteId} number={d.quoteNumber} />,
           },
           { id: "customer", header: "Customer", cell: (d) => d.customerName },
           { id: "vehicle", header: "Vehicle", cell: (d) => d.vehicle },

@@ -1,4 +1,5 @@
 import Link from "next/link";
+import { QuoteNumberLink } from "@/components/quotes/QuoteNumberLink";
 import { Badge } from "@/components/ui/Badge";
 import { Table, type TableColumn } from "@/components/ui/Table";
 import type { QuoteListItem } from "@/lib/shop/quotes/api";
@@ -10,11 +11,7 @@ const COLUMNS: TableColumn<QuoteListItem>[] = [
   {
     id: "number",
     header: "Quote",
-    cell: (q) => (
-      <Link className="font-medium text-ember-700 underline" href={`/shop/quotes/${q.id}`}>
-        Q-{q.number}
-      </Link>
-    ),
+    cell: (q) => <QuoteNumberLink id={q.id} number={q.number} />,
   },
   {
     id: "customer",
