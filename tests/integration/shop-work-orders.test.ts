@@ -292,7 +292,8 @@ describe("the re-check reminder", () => {
       const mine = mails.filter((m) => m.data.to === w.email);
       expect(mine).toHaveLength(1);
       expect(mine[0]!.data.subject).toBe("Time for your lug and ring re-check at Shop A");
-      expect(mine[0]!.data.text).toMatch(/Call Shop A on 555-0100 to book a short slot\./);
+      expect(mine[0]!.data.text).toMatch(/Or call Shop A on 555-0100\./);
+      expect(mine[0]!.data.text).toMatch(/\/recheck\/[A-Za-z0-9_-]{43}\n/);
       expect(mine[0]!.data.text).toMatch(/first 50–100 miles/);
 
       // Again, and from a second run: never twice.

@@ -346,11 +346,15 @@ export interface ServiceTimeRow {
 
 export const BOOKING_STATUSES = ["booked", "cancelled"] as const;
 export type BookingStatus = (typeof BOOKING_STATUSES)[number];
+/** What a booking is for: the install of a quote, or the lug and ring re-check after it. */
+export const BOOKING_KINDS = ["install", "recheck"] as const;
+export type BookingKind = (typeof BOOKING_KINDS)[number];
 
 export interface BookingRow {
   id: string;
   shop_id: string;
   quote_id: string;
+  kind: BookingKind;
   status: BookingStatus;
   starts_at: Date;
   ends_at: Date;
@@ -388,6 +392,8 @@ export interface WorkOrderRow {
   done_by: string | null;
   recheck_due_at: Date | null;
   recheck_queued_at: Date | null;
+  recheck_link_hash: string | null;
+  recheck_link_expires_at: Date | null;
   created_at: Date;
   updated_at: Date;
 }

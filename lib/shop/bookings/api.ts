@@ -2,7 +2,7 @@
  * What the booking routes answer (camelCase, ISO instants) and the row → API mappers, shared by
  * server and browser. Times carry the shop's zone so every screen shows the shop's clock.
  */
-import type { BayKind, BayRow, BookingRow, BookingStatus, ServiceType, ServiceUnit } from "@/lib/platform/db/types";
+import type { BayKind, BayRow, BookingKind, BookingRow, BookingStatus, ServiceType, ServiceUnit } from "@/lib/platform/db/types";
 import type { Slot, SlotDay } from "./slots";
 import type { Segment } from "./workload";
 import { formatClock, formatDay, formatDuration, formatInstant, minuteToHhmm } from "./zoned";
@@ -60,6 +60,8 @@ export interface BookedBay {
 export interface Booking {
   id: string;
   quoteId: string;
+  /** An install, or the re-check after it (booked on the re-check e-mail's link). */
+  kind: BookingKind;
   status: BookingStatus;
   startsAt: string;
   endsAt: string;
@@ -75,6 +77,7 @@ export function bookingDto(r: BookingRow, bays: BookedBay[], timeZone: string): 
   return {
     id: r.id,
     quoteId: r.quote_id,
+    kind: r.kind,
     status: r.status,
     startsAt: iso(r.starts_at),
     endsAt: iso(r.ends_at),

@@ -30,6 +30,7 @@ export const calendarWith = (endsAt: string, bays: BayStretch[]): CalendarAnswer
     {
       id: "b1",
       quoteId: "q1",
+      kind: "install",
       status: "booked",
       startsAt: "2026-12-14T15:00:00.000Z",
       endsAt,

@@ -3,6 +3,7 @@
  * the calendar file (ics.ts) that keeps the customer's calendar in step. Pure composition: the
  * queries queue what this returns in their own transaction.
  */
+import type { BookingKind } from "@/lib/platform/db/types";
 import type { OutgoingMail } from "@/lib/platform/mail";
 import { bookingCalendar, bookingUid } from "./ics";
 import { formatClock, formatDuration, formatInstant } from "./zoned";
@@ -11,6 +12,8 @@ export type BookingMailKind = "confirmed" | "moved" | "cancelled" | "reminder";
 
 export interface BookingMailFacts {
   kind: BookingMailKind;
+  /** What the booking is for; an install when left out. */
+  job?: BookingKind;
   bookingId: string;
   sequence: number;
   start: Date;
@@ -28,6 +31,14 @@ export interface BookingMailFacts {
   previousStart?: Date;
 }
 
+/** How each kind of booking is named in the mail, the calendar entry and the file. */
+const JOB_WORDS: Record<BookingKind, { word: string; title: string; file: string }> = {
+  install: { word: "install", title: "Tire and wheel install", file: "install" },
+  recheck: { word: "lug and ring re-check", title: "Lug and ring re-check", file: "recheck" },
+};
+
+const wordsOf = (f: BookingMailFacts) => JOB_WORDS[f.job ?? "install"];
+
 const esc = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
 
 /** The address part of "Name <address>", or the text itself. */
@@ -38,26 +49,26 @@ export function addressOf(from: string): string {
 function subjectOf(f: BookingMailFacts, when: string): string {
   switch (f.kind) {
     case "confirmed":
-      return `Booked: your install at ${f.shop.name}, ${when}`;
+      return `Booked: your ${wordsOf(f).word} at ${f.shop.name}, ${when}`;
     case "moved":
-      return `Moved: your install at ${f.shop.name} is now ${when}`;
+      return `Moved: your ${wordsOf(f).word} at ${f.shop.name} is now ${when}`;
     case "cancelled":
-      return `Cancelled: your install at ${f.shop.name}, ${when}`;
+      return `Cancelled: your ${wordsOf(f).word} at ${f.shop.name}, ${when}`;
     case "reminder":
-      return `Reminder: your install at ${f.shop.name} tomorrow, ${formatClock(f.start, f.timeZone)}`;
+      return `Reminder: your ${wordsOf(f).word} at ${f.shop.name} tomorrow, ${formatClock(f.start, f.timeZone)}`;
   }
 }
 
 function leadOf(f: BookingMailFacts, when: string): string {
   switch (f.kind) {
     case "confirmed":
-      return `your install for quote Q-${f.quoteNumber} (${f.vehicle}) is booked for ${when}.`;
+      return `your ${wordsOf(f).word} for quote Q-${f.quoteNumber} (${f.vehicle}) is booked for ${when}.`;
     case "moved":
-      return `your install for quote Q-${f.quoteNumber} (${f.vehicle}) has moved${f.previousStart ? ` from ${formatInstant(f.previousStart, f.timeZone)}` : ""} to ${when}.`;
+      return `your ${wordsOf(f).word} for quote Q-${f.quoteNumber} (${f.vehicle}) has moved${f.previousStart ? ` from ${formatInstant(f.previousStart, f.timeZone)}` : ""} to ${when}.`;
     case "cancelled":
-      return `your install for quote Q-${f.quoteNumber} (${f.vehicle}) on ${when} is cancelled. Call the shop to book another time.`;
+      return `your ${wordsOf(f).word} for quote Q-${f.quoteNumber} (${f.vehicle}) on ${when} is cancelled. Call the shop to book another time.`;
     case "reminder":
-      return `a reminder that your install for quote Q-${f.quoteNumber} (${f.vehicle}) is tomorrow, ${when}.`;
+      return `a reminder that your ${wordsOf(f).word} for quote Q-${f.quoteNumber} (${f.vehicle}) is tomorrow, ${when}.`;
   }
 }
 
@@ -77,7 +88,7 @@ export function bookingMail(f: BookingMailFacts): OutgoingMail {
     cancelled: f.kind === "cancelled",
     start: f.start,
     end: f.end,
-    title: `Tire and wheel install, ${f.shop.name} (Q-${f.quoteNumber})`,
+    title: `${wordsOf(f).title}, ${f.shop.name} (Q-${f.quoteNumber})`,
     location: place,
     description: `Quote Q-${f.quoteNumber}: ${f.vehicle}.${stay ? ` ${stay}` : ""}${f.shop.phone ? ` Shop phone: ${f.shop.phone}.` : ""}`,
     organizer: { name: f.shop.name, email: f.organizerEmail },
@@ -92,7 +103,7 @@ export function bookingMail(f: BookingMailFacts): OutgoingMail {
     html: `<p>Hello ${esc(f.customer.name)},</p><p>${esc(lead)}</p>${stay ? `<p>${esc(stay)}</p>` : ""}<p>The calendar file is attached.</p><p>${esc(contact)}</p>`,
     attachments: [
       {
-        filename: `install-Q-${f.quoteNumber}.ics`,
+        filename: `${wordsOf(f).file}-Q-${f.quoteNumber}.ics`,
         content: Buffer.from(calendar, "utf8"),
         contentType: `text/calendar; charset=utf-8; method=${f.kind === "cancelled" ? "CANCEL" : "REQUEST"}`,
       },

@@ -324,7 +324,7 @@ async function bookedBays(db: Db, bookingIds: string[]): Promise<Map<string, Boo
 }
 
 async function liveBookingRow(db: Db, quoteId: string, lock = false): Promise<BookingRow | undefined> {
-  const q = db<BookingRow>("bookings").where({ quote_id: quoteId, status: "booked" }).first();
+  const q = db<BookingRow>("bookings").where({ quote_id: quoteId, kind: "install", status: "booked" }).first();
   if (lock) q.forUpdate();
   return (await q) as BookingRow | undefined;
 }
@@ -347,24 +347,36 @@ export async function slotsForQuote(
   quote: Pick<QuoteRow, "id" | "shop_id">,
   opts: { from?: string; days?: number; now?: Date } = {},
 ): Promise<SlotsAnswer> {
+  const [work, live] = await Promise.all([quoteWork(db, quote), liveBookingRow(db, quote.id)]);
+  return slotsForWork(db, quote.shop_id, work, live, opts);
+}
+
+/**
+ * The free starts for a job of known stretches (a quote's work, or the short re-check) in the
+ * shop, with `live` (whose own bay time counts as free) as the booking shown; `horizonDays`
+ * caps how far ahead a start may lie.
+ */
+export async function slotsForWork(
+  db: Db,
+  shopId: string,
+  work: Pick<Workload, "segments" | "minutes">,
+  live: BookingRow | undefined,
+  opts: { from?: string; days?: number; now?: Date },
+  horizonDays: number = BOOKING_HORIZON_DAYS,
+): Promise<SlotsAnswer> {
   const now = opts.now ?? new Date();
-  const [schedule, bays, work, live] = await Promise.all([
-    readSchedule(db, quote.shop_id),
-    activeBays(db, quote.shop_id),
-    quoteWork(db, quote),
-    liveBookingRow(db, quote.id),
-  ]);
+  const [schedule, bays] = await Promise.all([readSchedule(db, shopId), activeBays(db, shopId)]);
   const today = wallTime(now, schedule.timeZone).date;
   const from = opts.from && opts.from > today ? opts.from : today;
   const days = opts.days ?? 7;
   const held = await heldBetween(
     db,
-    quote.shop_id,
+    shopId,
     zonedInstant(from, 0, schedule.timeZone),
     zonedInstant(addDays(from, days), 0, schedule.timeZone),
     live?.id,
   );
-  const ctx = { schedule, bays: bays.map(lite), held, segments: work.segments, now, horizonDays: BOOKING_HORIZON_DAYS };
+  const ctx = { schedule, bays: bays.map(lite), held, segments: work.segments, now, horizonDays };
   const cannot = cannotBook(ctx);
   const booked = live ? bookingDto(live, (await bookedBays(db, [live.id])).get(live.id) ?? [], schedule.timeZone) : null;
   return {
@@ -443,6 +455,10 @@ interface Placing {
   now: Date;
   /** The booking being moved: its own bay time counts as free. */
   exceptBookingId?: string;
+  /** The job's stretches when it is not the quote's install work (the re-check). */
+  segments?: Workload["segments"];
+  /** How far ahead a start may lie; the install's horizon when left out. */
+  horizonDays?: number;
 }
 
 /**
@@ -451,9 +467,13 @@ interface Placing {
  * transaction took it after we read), the check runs again on what is now committed — another
  * bay of the kind may still be free — up to three times; then the answer is a 409.
  */
-async function place<T>(trx: Knex.Transaction, p: Placing, write: (sp: Knex.Transaction, slot: Slot) => Promise<T>): Promise<T> {
+export async function place<T>(trx: Knex.Transaction, p: Placing, write: (sp: Knex.Transaction, slot: Slot) => Promise<T>): Promise<T> {
   const shopId = p.quote.shop_id;
-  const [schedule, bays, work] = await Promise.all([readSchedule(trx, shopId), activeBays(trx, shopId), quoteWork(trx, p.quote)]);
+  const [schedule, bays, work] = await Promise.all([
+    readSchedule(trx, shopId),
+    activeBays(trx, shopId),
+    p.segments ? { segments: p.segments } : quoteWork(trx, p.quote),
+  ]);
   if (p.request.bayId) {
     const pinned = bays.find((b) => b.id === p.request.bayId);
     if (!pinned) throw invalid({ bayId: ["Bay: that is not one of your shop's bays."] });
@@ -475,7 +495,7 @@ async function place<T>(trx: Knex.Transaction, p: Placing, write: (sp: Knex.Tran
       held,
       segments: work.segments,
       now: p.now,
-      horizonDays: BOOKING_HORIZON_DAYS,
+      horizonDays: p.horizonDays ?? BOOKING_HORIZON_DAYS,
       pinnedBayId: p.request.bayId,
     });
     if (!r.ok) throw refusal(r.problem);
@@ -488,7 +508,7 @@ async function place<T>(trx: Knex.Transaction, p: Placing, write: (sp: Knex.Tran
   }
 }
 
-async function reserve(sp: Knex.Transaction, bookingId: string, shopId: string, slot: Slot): Promise<void> {
+export async function reserve(sp: Knex.Transaction, bookingId: string, shopId: string, slot: Slot): Promise<void> {
   await sp("bay_reservations").insert(
     slot.placements.map((pl) => ({
       booking_id: bookingId,
@@ -500,7 +520,7 @@ async function reserve(sp: Knex.Transaction, bookingId: string, shopId: string, 
 }
 
 /** Queues the booking's e-mail with its calendar file in the same transaction; a customer without an address gets none. */
-async function mailCustomer(
+export async function mailCustomer(
   trx: Knex.Transaction,
   quote: QuoteRow,
   booking: BookingRow,
@@ -517,6 +537,7 @@ async function mailCustomer(
     trx,
     bookingMail({
       kind,
+      job: booking.kind,
       bookingId: booking.id,
       sequence: booking.sequence,
       start: new Date(booking.starts_at),
@@ -534,7 +555,7 @@ async function mailCustomer(
   return true;
 }
 
-async function answer(db: Db, row: BookingRow): Promise<Booking> {
+export async function answer(db: Db, row: BookingRow): Promise<Booking> {
   const [schedule, bays] = await Promise.all([readSchedule(db, row.shop_id), bookedBays(db, [row.id])]);
   return bookingDto(row, bays.get(row.id) ?? [], schedule.timeZone);
 }

@@ -9,10 +9,13 @@ import { canBook } from "@/lib/shop/bookings/bookable";
 import { readSchedule } from "@/lib/shop/bookings/queries";
 import { formatClock, formatInstant } from "@/lib/shop/bookings/zoned";
 import { type Actor, readLines, transition } from "@/lib/shop/quotes/queries";
+import { appOrigin } from "@/lib/platform/mail";
 import { queueMailIn } from "@/lib/platform/mail/transactional";
+import { hashToken, randomToken } from "@/lib/platform/tokens";
 import { type RecheckDue, type WorkOrder, requiredSteps, unsignedSteps, workOrderDto } from "./api";
 import { queueCompletionMail } from "./completionQueries";
 import { recheckMail } from "./recheckMail";
+import { recheckLinkExpiry, recheckUrl } from "./recheckLink";
 import { aboveMaximum, tirePressureLimits } from "./pressureLimit";
 import { type SignedStep, pressureFieldLabel } from "./schema";
 import { POSITION_LABEL, type PressureEntryUnit, STEP_LABEL, WORK_ORDER_STATUS_LABEL } from "./vocabulary";
@@ -99,7 +102,7 @@ export async function getWorkOrder(db: Db, shopId: string, id: string): Promise<
     customer_name: string;
   };
   const steps = (await db<WorkOrderStepRow>("work_order_steps").where({ work_order_id: id }).orderBy("signed_at")) as WorkOrderStepRow[];
-  const booking = await db("bookings").where({ quote_id: row.quote_id, status: "booked" }).first("starts_at", "ends_at");
+  const booking = await db("bookings").where({ quote_id: row.quote_id, kind: "install", status: "booked" }).first("starts_at", "ends_at");
   const { timeZone } = await readSchedule(db, shopId);
   const bookedFor = booking ? `${formatInstant(booking.starts_at, timeZone)} – ${formatClock(booking.ends_at, timeZone)}` : null;
   return workOrderDto(
@@ -313,6 +316,11 @@ export async function queueDueRechecks(db: Knex, now = new Date()): Promise<numb
     let queued = 0;
     for (const d of due) {
       if (d.email) {
+        // The booking link's token goes in the mail only; the work order keeps its hash.
+        const token = randomToken();
+        await trx("work_orders")
+          .where({ id: d.id })
+          .update({ recheck_link_hash: hashToken(token), recheck_link_expires_at: recheckLinkExpiry(now) });
         await queueMailIn(
           trx,
           recheckMail({
@@ -321,6 +329,7 @@ export async function queueDueRechecks(db: Knex, now = new Date()): Promise<numb
             quoteNumber: d.number,
             vehicle: d.vehicle_description,
             beadlock: d.beadlock,
+            bookUrl: recheckUrl(appOrigin(), token),
           }),
         );
         queued++;

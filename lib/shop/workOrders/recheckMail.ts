@@ -5,6 +5,7 @@
  */
 import type { OutgoingMail } from "@/lib/platform/mail";
 import { escapeHtml } from "@/lib/platform/text";
+import { RECHECK_BOOKING_DAYS, RECHECK_LINK_DAYS, RECHECK_SLOT } from "./recheckLink";
 import { RECHECK_NOTE } from "./vocabulary";
 
 export interface RecheckFacts {
@@ -13,24 +14,25 @@ export interface RecheckFacts {
   quoteNumber: number;
   vehicle: string;
   beadlock: boolean;
+  /** The customer's page to book the short re-check slot (recheckLink.ts). */
+  bookUrl: string;
 }
 
 /**
  * @example
- * recheckMail({ customer: { name: "Ada", email: "a@x.test" }, shop, quoteNumber: 1003, vehicle: "Pickup", beadlock: true }).subject;
+ * recheckMail({ customer: { name: "Ada", email: "a@x.test" }, shop, quoteNumber: 1003, vehicle: "Pickup", beadlock: true, bookUrl }).subject;
  * // "Time for your lug and ring re-check at Shop A"
  */
 export function recheckMail(f: RecheckFacts): OutgoingMail {
   const what = f.beadlock ? "lug nuts and beadlock ring bolts" : "lug nuts";
   const lead = `your new wheels and tires (quote Q-${f.quoteNumber}, ${f.vehicle}) have had time to settle: it is time to have the ${what} re-checked to the maker's torque. It takes a few minutes.`;
-  const book = f.shop.phone
-    ? `Call ${f.shop.name} on ${f.shop.phone} to book a short slot.`
-    : `Contact ${f.shop.name} to book a short slot.`;
+  const book = `Book a ${RECHECK_SLOT.minutes}-minute slot in the next ${RECHECK_BOOKING_DAYS} days here (the link works for ${RECHECK_LINK_DAYS} days):`;
+  const call = f.shop.phone ? `Or call ${f.shop.name} on ${f.shop.phone}.` : `Or contact ${f.shop.name}.`;
   const contact = [f.shop.name, f.shop.address, f.shop.phone].filter(Boolean).join(" · ");
   return {
     to: f.customer.email,
     subject: `Time for your ${f.beadlock ? "lug and ring" : "lug"} re-check at ${f.shop.name}`,
-    text: `Hello ${f.customer.name},\n\n${lead}\n\n${book}\n\n${RECHECK_NOTE}\n\n${contact}\n`,
-    html: `<p>Hello ${escapeHtml(f.customer.name)},</p><p>${escapeHtml(lead)}</p><p>${escapeHtml(book)}</p><p>${escapeHtml(RECHECK_NOTE)}</p><p>${escapeHtml(contact)}</p>`,
+    text: `Hello ${f.customer.name},\n\n${lead}\n\n${book}\n${f.bookUrl}\n\n${call}\n\n${RECHECK_NOTE}\n\n${contact}\n`,
+    html: `<p>Hello ${escapeHtml(f.customer.name)},</p><p>${escapeHtml(lead)}</p><p>${escapeHtml(book)} <a href="${escapeHtml(f.bookUrl)}">${escapeHtml(f.bookUrl)}</a></p><p>${escapeHtml(call)}</p><p>${escapeHtml(RECHECK_NOTE)}</p><p>${escapeHtml(contact)}</p>`,
   };
 }

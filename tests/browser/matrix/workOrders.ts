@@ -1,10 +1,12 @@
-import { type MatrixCase, only } from "./types";
+import { type MatrixCase, only, publicRoute } from "./types";
 
 /** The demo draft quote (db/seeds/05_demo_shop.ts): in the demo shop, not booked. */
 const DRAFT = "d0000000-0000-4000-8000-000000000001";
 /** No work order has this id. */
 const UNKNOWN = "e0000000-0000-4000-8000-00000000dead";
 const SHOP = ["shop_staff", "shop_owner"] as const;
+/** No re-check e-mail carried this link. */
+const UNKNOWN_LINK = "A".repeat(43);
 
 export const cases: MatrixCase[] = [
   {
@@ -41,4 +43,18 @@ export const cases: MatrixCase[] = [
     expect: { ...only(["shop_owner"], 422), shop_staff: 403 },
     note: "invalid body: owners get field errors, staff a 403 before any parsing",
   },
+  // The re-check e-mail's link: both routes look the link up before anything else.
+  ...(
+    [
+      ["slots", "GET", undefined],
+      ["booking", "POST", { start: "2030-01-07T15:00:00Z" }],
+    ] as const
+  ).map(([leaf, method, body]) => ({
+    route: `/api/recheck/[token]/${leaf}`,
+    method,
+    path: `/api/recheck/${UNKNOWN_LINK}/${leaf}`,
+    ...(body ? { body } : {}),
+    expect: publicRoute(404),
+    note: "unknown re-check link",
+  })),
 ];

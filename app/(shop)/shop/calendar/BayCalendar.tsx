@@ -141,7 +141,8 @@ export function BayCalendar({ initial, today, askedDays }: { initial: CalendarAn
               step={15}
               timeslots={4}
               resizable={false}
-              draggableAccessor={() => !move.pending}
+              // A re-check is booked by the customer on their link; the counter's move route moves installs only.
+              draggableAccessor={(e) => !move.pending && e.booking.kind === "install"}
               onEventDrop={({ event, start, resourceId, isAllDay }) =>
                 void move.drop(event, new Date(start), resourceId === undefined ? undefined : String(resourceId), isAllDay)
               }

@@ -27,15 +27,18 @@ export function SelectedBooking({
   return (
     <Card className="mt-4 flex flex-col gap-3" role="region" aria-label="Selected booking">
       <h2 className="text-lg font-semibold">
-        Q-{booking.quoteNumber} · {booking.customerName}
+        {booking.kind === "recheck" && "Lug and ring re-check · "}Q-{booking.quoteNumber} · {booking.customerName}
       </h2>
       <p className="text-sm text-basalt-700">Vehicle: {booking.vehicleDescription}</p>
       <BookingSummary booking={booking} showBays />
+      {booking.kind === "recheck" && (
+        <p className="text-sm text-basalt-600">Booked by the customer on the re-check link; call them to change it.</p>
+      )}
       <div className="flex flex-wrap gap-2">
         <Link className={buttonClass("primary")} href={`/shop/quotes/${booking.quoteId}`}>
           Open quote Q-{booking.quoteNumber}
         </Link>
-        {!picking && (
+        {!picking && booking.kind === "install" && (
           <Button type="button" variant="secondary" onClick={() => setPicking(true)}>
             Move…
           </Button>

@@ -65,7 +65,7 @@ export function bayEvents(a: CalendarAnswer): BayEvent[] {
   return a.bookings.flatMap((b) =>
     b.bays.map((s) => ({
       id: `${b.id}-${s.bayId}-${s.startsAt}`,
-      title: `Q-${b.quoteNumber} · ${b.customerName} · ${b.vehicleDescription}`,
+      title: `${b.kind === "recheck" ? "Re-check · " : ""}Q-${b.quoteNumber} · ${b.customerName} · ${b.vehicleDescription}`,
       start: floating(s.startsAt, a.timeZone),
       end: floating(s.endsAt, a.timeZone),
       resourceId: s.bayId,
