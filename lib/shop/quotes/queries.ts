@@ -22,6 +22,7 @@ import { checkWheelOnHub, hubRefusal } from "@/lib/shop/quotes/hubFit";
 import { formatQuantity } from "@/lib/shop/quotes/quantity";
 import type { updateQuoteSchema } from "@/lib/shop/quotes/schema";
 import { TotalsError, computeTotals } from "@/lib/shop/quotes/totals";
+import { quotePressure } from "@/lib/shop/customers/counterPlacard";
 import { type CounterVehicle, type CounterVehicleForEngine, counterVehicleForEngine } from "@/lib/shop/customers/schema";
 import type { Setup } from "@/lib/setup/model";
 import { bindAppDb } from "@/lib/platform/db/bind";
@@ -440,6 +441,7 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
       offsetMm: wheel.wheel_offset_mm!,
       beadlock: wheel.beadlock,
     });
+    if (v.placard) fit.pressure = quotePressure(v.placard, v.currentSetup, fit.setups.planned);
     const services = await trx<CatalogItemRow>("catalog_items")
       .where({ shop_id: shopId, kind: "service" })
       .whereNull("archived_at")
