@@ -1,13 +1,14 @@
 import { describe, expect, it, vi } from "vitest";
 import { psiToKpa } from "@/lib/fitment";
 import { ctx, req } from "./support/requests";
-import { VEHICLE, quoteRequest } from "./support/shopFixture";
+import { depositPaidQuote, firstFreeStart, STAFF_A } from "./support/quoteJourney";
+import { SHOP_A, VEHICLE, quoteRequest } from "./support/shopFixture";
 import { staffAtCounter } from "./support/staffAtCounter";
 
 // Staff of shop A at the counter; drafts send no mail.
 const session = vi.hoisted(() => ({ current: null as unknown }));
 vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
-const db = staffAtCounter(session);
+const db = staffAtCounter(session, { bookable: true });
 const customers = await import("@/app/api/shop/customers/route");
 const quotes = await import("@/app/api/shop/quotes/route");
 const quote = await import("@/app/api/shop/quotes/[id]/route");
@@ -88,5 +89,24 @@ describe("a quote for a counter vehicle with its door placard gives the cold pre
     const key = Object.keys(body.fieldErrors).find((k) => k.endsWith("placardFrontKpa"));
     expect(body.fieldErrors[key!][0]).toMatch(/^Placard cold pressure, front \(psi\):/);
     expect(await db("quotes").count<{ count: string }[]>({ count: "*" })).toEqual(before);
+  });
+
+  it("the work order's pressure step gives the pressure to set per axle; without a placard, only the tire's limits", async () => {
+    const { bookInstall } = await import("@/lib/shop/bookings/queries");
+    const { getWorkOrder, openWorkOrder } = await import("@/lib/shop/workOrders/queries");
+    const orderOf = async (vehicle: object, name: string) => {
+      const q = await depositPaidQuote(db, name, vehicle);
+      await bookInstall(db, { by: "staff", scope: { shopId: SHOP_A }, quoteId: q.id }, { start: await firstFreeStart(db, q.id) }, STAFF_A);
+      return getWorkOrder(db, SHOP_A, await openWorkOrder(db, SHOP_A, q.id));
+    };
+    const withPlacard = await orderOf({ ...VEHICLE, placard: PLACARD }, "Ida Bay");
+    // As on the quote: the LRE flotation road minimum 0.5833 × 65 psi (the engine's FMVSS 138 proportion).
+    expect(withPlacard.pressureLimits?.toSet?.map((a) => [a.axle, Math.round(a.kpa)])).toEqual([
+      ["front", 261],
+      ["rear", 261],
+    ]);
+    const without = await orderOf(VEHICLE, "Ida Bay Two");
+    expect(without.pressureLimits?.toSet).toBeUndefined();
+    expect(without.pressureLimits?.maxKpa).toBeCloseTo(psiToKpa(65), 0);
   });
 });

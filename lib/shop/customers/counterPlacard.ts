@@ -11,11 +11,12 @@
  * the road minimum, highest wins).
  */
 import { z } from "zod";
-import { kpaToPsi, type VehicleKind } from "@/lib/fitment";
+import type { VehicleKind } from "@/lib/fitment";
 import { setupFigures } from "@/lib/garage/loadFigures";
 import { type CurrentTire, type LoadProfile, type Units, checkLoadProfile, emptyProfile } from "@/lib/garage/loadProfile";
 import type { Setup } from "@/lib/setup/model";
-import { tirePressureLimits } from "@/lib/shop/workOrders/pressureLimit";
+import { tirePressureLimits, toSetWords } from "@/lib/shop/workOrders/pressureLimit";
+import { pressureWords } from "@/lib/shop/workOrders/signedText";
 
 /** The placard figures a counter vehicle keeps (SI). */
 export const PLACARD_KEYS = ["placardFrontKpa", "placardRearKpa", "frontGawrKg", "rearGawrKg", "frontAxleKg", "rearAxleKg"] as const;
@@ -103,7 +104,7 @@ export type QuotePressure =
     }
   | { placardTire: string; missing: string };
 
-const psi = (kpa: number) => `${Math.round(kpaToPsi(kpa) * 10) / 10} psi (${Math.round(kpa)} kPa)`;
+const psi = (kpa: number) => pressureWords(kpa, "psi");
 
 /**
  * The cold pressure to set per axle for the quoted tire, from the counter vehicle's placard.
@@ -141,8 +142,7 @@ export function quotePressure(placard: CounterPlacard, current: Setup, planned: 
 }
 
 /** The pressures to set, axle by axle: "front 28 psi (193 kPa), rear 28 psi (193 kPa)". */
-export const axlePressureWords = (p: Extract<QuotePressure, { axles: unknown }>) =>
-  p.axles.map((a) => `${a.axle} ${psi(a.kpa)}`).join(", ");
+export const axlePressureWords = (p: Extract<QuotePressure, { axles: unknown }>) => toSetWords(p.axles, "psi");
 
 /**
  * The pressure to set in words (the quote's caution, its PDF and the work order's hint).
