@@ -109,4 +109,21 @@ describe("a quote for a counter vehicle with its door placard gives the cold pre
     expect(without.pressureLimits?.toSet).toBeUndefined();
     expect(without.pressureLimits?.maxKpa).toBeCloseTo(psiToKpa(65), 0);
   });
+
+  it("a saved vehicle keeps its placard: a later quote for it gives the same pressure to set", async () => {
+    const cres = await customers.POST(req("POST", "/api/shop/customers", { name: "Ida Saved", phone: "(555) 010-7799", email: "" }), ctx());
+    const customerId = (await cres.json()).customer.id as string;
+    const first = await quotes.POST(
+      req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId, vehicle: { ...VEHICLE, placard: PLACARD }, saveVehicle: true })),
+      ctx(),
+    );
+    expect(first.status).toBe(201);
+    const saved = await db("customer_vehicles").where({ customer_id: customerId }).first();
+    expect(saved.load_placard).toMatchObject({ placardTire: "265/70R17 113T", frontAxleKg: 1430, units: "imperial" });
+    const again = await quotes.POST(req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId, vehicleId: saved.id })), ctx());
+    const { id } = await again.json();
+    expect(again.status).toBe(201);
+    const detail = await (await quote.GET(req("GET", `/api/shop/quotes/${id}`), ctx({ id }))).json();
+    expect(detail.quote.fitment.pressure.axles.map((a: { kpa: number }) => Math.round(a.kpa))).toEqual([261, 261]);
+  });
 });
