@@ -1,21 +1,15 @@
 import { mkdirSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
-import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import { closeDatabases, rebuild, testDb } from "./support/db";
-import { ctx, req, sessionOf } from "./support/requests";
-import { U, VEHICLE, quoteRequest, seedShops } from "./support/shopFixture";
+import { describe, expect, it, vi } from "vitest";
+import { ctx, req } from "./support/requests";
+import { VEHICLE, quoteRequest } from "./support/shopFixture";
+import { staffAtCounter } from "./support/staffAtCounter";
 
 const session = vi.hoisted(() => ({ current: null as unknown }));
 vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
 vi.mock("@/lib/platform/mail", () => ({ queueMail: async () => {}, appOrigin: () => "http://127.0.0.1:3000" }));
 
-const db = testDb();
-beforeAll(async () => {
-  await rebuild(db);
-  await seedShops(db);
-  session.current = sessionOf(U.staffA);
-});
-afterAll(() => closeDatabases(db));
+const db = staffAtCounter(session);
 
 const customers = await import("@/app/api/shop/customers/route");
 const quotes = await import("@/app/api/shop/quotes/route");

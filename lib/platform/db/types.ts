@@ -175,6 +175,8 @@ export interface CustomerVehicleRow {
   axle_ratio: number | null;
   /** The hub's pilot diameter, when the counter measured or looked it up. */
   hub_bore_mm: number | null;
+  /** The door placard and axle loads, a lib/shop/customers/counterPlacard CounterPlacard (JSONB), or null. */
+  load_placard: unknown;
   created_at: Date;
 }
 

@@ -5,6 +5,7 @@
 import type { CustomerRow, CustomerVehicleRow } from "@/lib/platform/db/types";
 import { iso, rowTimes } from "@/lib/platform/http/isoDates";
 import type { Setup } from "@/lib/setup/model";
+import type { CounterPlacard } from "./counterPlacard";
 
 export interface Customer {
   id: string;
@@ -25,6 +26,8 @@ export interface CustomerVehicle {
   currentSetup: Setup;
   axleRatio: number | null;
   hubBoreMm: number | null;
+  /** The door placard and axle loads, when the counter took them (SI). */
+  placard: CounterPlacard | null;
   createdAt: string;
 }
 
@@ -52,6 +55,7 @@ export function customerVehicleDto(r: CustomerVehicleRow): CustomerVehicle {
     currentSetup: r.current_setup as Setup,
     axleRatio: r.axle_ratio,
     hubBoreMm: r.hub_bore_mm,
+    placard: (r.load_placard ?? null) as CounterPlacard | null,
     createdAt: iso(r.created_at),
   };
 }

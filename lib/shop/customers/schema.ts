@@ -6,12 +6,13 @@
  * lib/garage/schema.ts's garageVehicleSchema.)
  */
 import { z } from "zod";
-import { DEFAULT_FLANGE_IN, FitmentInputError, parseBoltPattern, parseTireSize } from "@/lib/fitment";
+import { DEFAULT_FLANGE_IN, FitmentInputError, parseBoltPattern, parseTireSize, setupGeometry } from "@/lib/fitment";
 import { isObject } from "@/lib/setup/check";
 import { SETUP_FIELD_LABEL } from "@/lib/setup/fields";
 import { type Setup, type SetupForm, toEngineSetup } from "@/lib/setup/model";
 import { optionalLengthField, setupSchema } from "@/lib/setup/schema";
 import { requiredText } from "@/lib/platform/validation/requiredText";
+import { type CounterPlacard, placardSchema } from "./counterPlacard";
 
 const engineMessage = (e: unknown, fallback: string) => (e instanceof FitmentInputError ? e.message : fallback);
 
@@ -39,9 +40,12 @@ const counterVehicleFields = z.object({
     .optional(),
 });
 
-/** The form's values: text as typed, the setup as lib/setup's form shape. */
-export type CounterVehicleForm = Omit<z.input<typeof counterVehicleFields>, "currentSetup"> & { currentSetup: SetupForm };
-export type CounterVehicle = z.output<typeof counterVehicleFields>;
+/** The form's values: text as typed, the setup as lib/setup's form shape; the placard already read into SI (counterPlacard.ts). */
+export type CounterVehicleForm = Omit<z.input<typeof counterVehicleFields>, "currentSetup"> & {
+  currentSetup: SetupForm;
+  placard?: unknown;
+};
+export type CounterVehicle = z.output<typeof counterVehicleFields> & { placard?: CounterPlacard | null };
 
 /**
  * The flat vehicle the counter took before its setup was lib/setup's (`tireSize`, `offsetMode`,
@@ -88,7 +92,16 @@ const flatPath = (path: PropertyKey[]): PropertyKey[] => {
 export const counterVehicleSchema = z.unknown().transform((v, ctx) => {
   const flat = isFlat(v);
   const r = counterVehicleFields.safeParse(flat ? fromFlat(v) : v);
-  if (r.success) return r.data;
+  if (r.success) {
+    const raw = isObject(v) ? v.placard : undefined;
+    if (raw === undefined || raw === null) return r.data;
+    // The placard's checks need the current tire (the garage's checks take one); the setup read above.
+    const s = r.data.currentSetup;
+    const p = placardSchema(() => ({ text: s.tire, diameterMm: setupGeometry(toEngineSetup(s)).overallDiameterMm })).safeParse(raw);
+    if (p.success) return { ...r.data, placard: p.data };
+    for (const i of p.error.issues) ctx.addIssue({ code: "custom", path: ["placard", ...i.path], message: i.message });
+    return z.NEVER;
+  }
   for (const i of r.error.issues) ctx.addIssue({ code: "custom", path: flat ? flatPath(i.path) : i.path, message: i.message });
   return z.NEVER;
 }) as unknown as z.ZodType<CounterVehicle, CounterVehicleForm>;
@@ -105,6 +118,8 @@ export interface CounterVehicleForEngine {
   tireSize: string;
   /** The wheel on the hub: the position as an offset. */
   wheel: { diameterIn: number; widthIn: number; offsetMm: number };
+  /** The door placard (and axle loads) when the counter took them. */
+  placard: CounterPlacard | null;
 }
 
 /**
@@ -122,6 +137,7 @@ export function counterVehicleForEngine(v: {
   hubBoreMm?: number | null;
   axleRatio?: number | null;
   currentSetup: Setup;
+  placard?: CounterPlacard | null;
 }): CounterVehicleForEngine {
   return {
     description: v.description,
@@ -131,5 +147,6 @@ export function counterVehicleForEngine(v: {
     currentSetup: v.currentSetup,
     tireSize: parseTireSize(v.currentSetup.tire).text,
     wheel: toEngineSetup(v.currentSetup).wheel,
+    placard: v.placard ?? null,
   };
 }

@@ -1,4 +1,6 @@
 import { describe, expect, it } from "vitest";
+import { quotePressure } from "@/lib/shop/customers/counterPlacard";
+import { COUNTER_PLACARD } from "@/lib/shop/customers/placardTestUtil";
 import { quoteCautions } from "./cautions";
 import { summarize } from "./fitment";
 
@@ -39,5 +41,23 @@ describe("quote cautions", () => {
     expect(c).toMatch(/Never inflate above the maximum on the sidewall or the wheel\.$/);
     // A size without its load index says no limit: the caution stays, without figures.
     expect(quoteCautions(fit).find((x) => x.startsWith("Cold pressure"))).not.toMatch(/allows at most/);
+  });
+
+  it("with the counter's placard, gives the pressure to set per axle instead; without axle figures or a load index, says why", () => {
+    const placard = COUNTER_PLACARD;
+    const setups = {
+      current: { ...fit.setups.current, tire: "265/70R17 113T" },
+      planned: { ...fit.setups.planned, tire: "285/70R17 117T" },
+    };
+    // 250 kPa × (L113 / L117)² at 35 psi: 193 kPa = 28 psi (TRA passenger load formula, NHTSA "The Pneumatic Tire", 2006;
+    // worked in lib/shop/customers/counterPlacard.test.ts).
+    const pressure = quotePressure(placard, setups.current, setups.planned);
+    const c = quoteCautions({ ...fit, pressure }).find((x) => x.startsWith("Cold pressure"))!;
+    expect(c).toMatch(/^Cold pressure to set for 285\/70R17 117T: front 28 psi \(193 kPa\), rear 28 psi \(193 kPa\)/);
+    expect(c).toMatch(/Never inflate above the sidewall maximum/);
+    const noLoads = quotePressure({ ...placard, frontAxleKg: null, rearAxleKg: null }, setups.current, setups.planned);
+    const d = quoteCautions({ ...fit, pressure: noLoads }).find((x) => x.startsWith("Cold pressure"))!;
+    expect(d).toMatch(/door placard and the tire maker's load table/);
+    expect(d).toMatch(/Enter the axle weights \(scale ticket\) or the axle ratings \(GAWR\)/);
   });
 });

@@ -1,18 +1,22 @@
 import { diameterChange } from "@/lib/comparisons/assess/assessChange";
 import { tirePressureLimits } from "@/lib/shop/workOrders/pressureLimit";
 import { pressureWords } from "@/lib/shop/workOrders/signedText";
+import { pressureToSetText } from "@/lib/shop/customers/counterPlacard";
 import type { FitmentSummary } from "./fitment";
 
 /**
- * The cold-pressure caution: a counter vehicle keeps no door placard, so the quote gives no
- * pressure to set; it bounds it by the quoted tire's limits (the engine's), when the size says them.
+ * The cold-pressure caution: with the door placard the counter took, the pressure to set per axle;
+ * without it, no pressure to set, only the quoted tire's limits (the engine's) when the size says them.
  */
-function pressureCaution(tire: string): string {
+function pressureCaution(tire: string, pressure: FitmentSummary["pressure"]): string {
+  // With the placard (and axle loads) the counter took, the pressure to set itself.
+  if (pressure && !("missing" in pressure)) return pressureToSetText(pressure);
   const l = tirePressureLimits(tire);
   const bounds = l
     ? ` ${l.tire} allows at most ${pressureWords(l.maxKpa, "psi")}; road minimum ${pressureWords(l.minimumKpa, "psi")}.`
     : "";
-  return `Cold pressure: set it for the vehicle's axle loads from the door placard and the tire maker's load table (a bigger or different tire carries the same load at another pressure), not from the sidewall figure.${bounds} Never inflate above the maximum on the sidewall or the wheel.`;
+  const missing = pressure ? ` ${pressure.missing}` : "";
+  return `Cold pressure: set it for the vehicle's axle loads from the door placard and the tire maker's load table (a bigger or different tire carries the same load at another pressure), not from the sidewall figure.${bounds} Never inflate above the maximum on the sidewall or the wheel.${missing}`;
 }
 
 /**
@@ -20,11 +24,11 @@ function pressureCaution(tire: string): string {
  * to the makers and licensed practice; Hubface gives no torque figure of its own, and for pressure
  * only the quoted tire's limits.
  */
-export function quoteCautions(fit: Pick<FitmentSummary, "planned" | "diameterChangeMm">): string[] {
+export function quoteCautions(fit: Pick<FitmentSummary, "planned" | "diameterChangeMm" | "pressure">): string[] {
   const out = [
     "Bead seating: inflate only in a restraining cage with a clip-on chuck and remote gauge, standing clear of the assembly; never exceed the tire maker's maximum bead-seating pressure.",
     "Wheel fasteners: tighten in a crisscross order to the vehicle maker's torque figure and re-check the torque after the first 50 to 100 miles (80 to 160 km).",
-    pressureCaution(fit.planned.tire),
+    pressureCaution(fit.planned.tire, fit.pressure),
   ];
   if (fit.planned.beadlock) {
     out.push(

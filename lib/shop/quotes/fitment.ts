@@ -16,6 +16,7 @@ import {
 } from "@/lib/fitment";
 import { assessChange } from "@/lib/comparisons/assess/assessChange";
 import { type Finding, type FindingKind, type FindingOf, findingsOf } from "@/lib/comparisons/assess/vocabulary";
+import { type QuotePressure, axlePressureWords } from "@/lib/shop/customers/counterPlacard";
 import type { Setup } from "@/lib/setup/model";
 import { checkWheelOnHub, hubRefusal } from "./hubFit";
 
@@ -71,6 +72,8 @@ export interface FitmentSummary {
    * before it was kept have none: the drawing then reads the wheel texts above (drawing.ts).
    */
   setups?: { current: Setup; planned: Setup };
+  /** The cold pressure to set per axle, when the counter took the vehicle's door placard (lib/shop/customers/counterPlacard.ts). */
+  pressure?: QuotePressure;
 }
 
 /** A summary just computed: its findings and setups are there. */
@@ -211,6 +214,8 @@ export function fitmentChangeRows(fit: FitmentSummary): [string, string][] {
       "Effective axle ratio",
       `${fit.regear.axleRatio.toFixed(2)} → ${fit.regear.effectiveRatio.toFixed(2)}; regear to about ${fit.regear.suggestedRatio.toFixed(2)}`,
     ]);
+  // Only with the placard the counter took; its caution (cautions.ts) says how it was found and its limits.
+  if (fit.pressure && "axles" in fit.pressure) rows.push(["Cold pressure to set", axlePressureWords(fit.pressure)]);
   return rows;
 }
 

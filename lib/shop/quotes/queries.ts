@@ -22,6 +22,7 @@ import { checkWheelOnHub, hubRefusal } from "@/lib/shop/quotes/hubFit";
 import { formatQuantity } from "@/lib/shop/quotes/quantity";
 import type { updateQuoteSchema } from "@/lib/shop/quotes/schema";
 import { TotalsError, computeTotals } from "@/lib/shop/quotes/totals";
+import { type CounterPlacard, quotePressure } from "@/lib/shop/customers/counterPlacard";
 import { type CounterVehicle, type CounterVehicleForEngine, counterVehicleForEngine } from "@/lib/shop/customers/schema";
 import type { Setup } from "@/lib/setup/model";
 import { bindAppDb } from "@/lib/platform/db/bind";
@@ -394,6 +395,7 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
         hubBoreMm: saved.hub_bore_mm,
         axleRatio: saved.axle_ratio,
         currentSetup: saved.current_setup as Setup,
+        placard: saved.load_placard as CounterPlacard | null,
       });
     } else {
       v = counterVehicleForEngine(input.vehicle!);
@@ -407,6 +409,7 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
             current_setup: JSON.stringify(v.currentSetup),
             axle_ratio: v.axleRatio,
             hub_bore_mm: v.hubBoreMm,
+            load_placard: v.placard ? JSON.stringify(v.placard) : null,
           })
           .returning(["id"]);
         vehicleId = (row as { id: string }).id;
@@ -440,6 +443,7 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
       offsetMm: wheel.wheel_offset_mm!,
       beadlock: wheel.beadlock,
     });
+    if (v.placard) fit.pressure = quotePressure(v.placard, v.currentSetup, fit.setups.planned);
     const services = await trx<CatalogItemRow>("catalog_items")
       .where({ shop_id: shopId, kind: "service" })
       .whereNull("archived_at")

@@ -3,7 +3,8 @@
  * by server and browser.
  */
 import type { StepPosition, WorkOrderRow, WorkOrderStatus, WorkOrderStepRow } from "@/lib/platform/db/types";
-import { type TirePressureLimits, tirePressureLimits } from "./pressureLimit";
+import type { QuotePressure } from "@/lib/shop/customers/counterPlacard";
+import { type TirePressureLimits, tirePressureLimits, withPressureToSet } from "./pressureLimit";
 import { type StepKind, positionsFor, stepsFor } from "./vocabulary";
 
 const iso = (d: Date | string | null) => (d === null ? null : new Date(d).toISOString());
@@ -54,7 +55,14 @@ export const signedOffDto = (r: WorkOrderStepRow): SignedOff => ({
 
 export function workOrderDto(
   r: WorkOrderRow,
-  quote: { number: number; customerName: string; vehicleDescription: string; boltPattern: string; plannedTire?: string | null },
+  quote: {
+    number: number;
+    customerName: string;
+    vehicleDescription: string;
+    boltPattern: string;
+    plannedTire?: string | null;
+    pressure?: QuotePressure | null;
+  },
   steps: WorkOrderStepRow[],
   bookedFor: string | null,
 ): WorkOrder {
@@ -79,7 +87,7 @@ export function workOrderDto(
     doneBy: r.done_by,
     recheckDueAt: iso(r.recheck_due_at),
     bookedFor,
-    pressureLimits: tirePressureLimits(quote.plannedTire),
+    pressureLimits: withPressureToSet(tirePressureLimits(quote.plannedTire), quote.pressure ?? null),
     steps: steps.map(signedOffDto),
   };
 }

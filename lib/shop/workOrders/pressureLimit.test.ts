@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { psiToKpa } from "@/lib/fitment";
-import { aboveMaximum, tirePressureLimits } from "./pressureLimit";
+import { aboveMaximum, tirePressureLimits, toSetWords, withPressureToSet } from "./pressureLimit";
 
 describe("the quoted tire's pressure limits", () => {
   it("reads the load range's maximum and the road minimum", () => {
@@ -27,5 +27,28 @@ describe("the quoted tire's pressure limits", () => {
     );
     expect(aboveMaximum(400, "kPa", l, "Cold pressure (kPa)")).toMatch(/^Cold pressure \(kPa\): 400 kPa \(58(\.0)? psi\) is above/);
     expect(aboveMaximum(900, "kPa", null, "Cold pressure (kPa)")).toBeNull();
+  });
+
+  it("carries the quote's pressures to set per axle, in the sheet's unit; without them the limits alone", () => {
+    const l = tirePressureLimits("37x12.50R17LT 124Q LRD");
+    const toSet = [
+      { axle: "front" as const, kpa: psiToKpa(29.2), decidedBy: "road minimum" as const },
+      { axle: "rear" as const, kpa: psiToKpa(30), decidedBy: "placard" as const },
+    ];
+    const quoted = {
+      placardTire: "265/70R17 113T",
+      placardFrontKpa: 241,
+      placardRearKpa: 241,
+      from: "scale ticket" as const,
+      tire: "37x12.50R17LT 124Q LRD",
+      axles: toSet,
+      maxKpa: l!.maxKpa,
+    };
+    expect(withPressureToSet(l, quoted)?.toSet).toEqual(toSet);
+    expect(withPressureToSet(l, { placardTire: "265/70R17 113T", missing: "…" })).toBe(l);
+    expect(withPressureToSet(l, null)).toBe(l);
+    // 1 psi = 6.894757 kPa (NIST SP 811).
+    expect(toSetWords(toSet, "psi")).toBe("front 29.2 psi (201 kPa), rear 30 psi (207 kPa)");
+    expect(toSetWords(toSet, "kPa")).toBe("front 201 kPa (29.2 psi), rear 207 kPa (30 psi)");
   });
 });

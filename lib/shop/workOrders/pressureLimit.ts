@@ -6,6 +6,7 @@
  * it. A recorded pressure above the maximum is refused.
  */
 import { FitmentInputError, loadPressureBasis } from "@/lib/fitment";
+import type { AxlePressure, QuotePressure } from "@/lib/shop/customers/counterPlacard";
 import { pressureWords } from "./signedText";
 
 export interface TirePressureLimits {
@@ -14,6 +15,8 @@ export interface TirePressureLimits {
   minimumKpa: number;
   maxSource: string;
   minimumSource: string;
+  /** The cold pressure to set per axle, when the quote was drawn up with the vehicle's door placard (counterPlacard.ts). */
+  toSet?: AxlePressure[];
 }
 
 /**
@@ -39,6 +42,23 @@ export function tirePressureLimits(tire: string | null | undefined): TirePressur
     throw e;
   }
 }
+
+/**
+ * The limits with the pressures to set per axle the quote computed from the door placard; without
+ * them (no placard, or none computed) the limits alone, as before.
+ *
+ * @example
+ * withPressureToSet(tirePressureLimits("35x12.50R17LT 121Q E"), quote.fitment.pressure)?.toSet;
+ * // [{ axle: "front", kpa: 261.4, decidedBy: "road minimum" }, { axle: "rear", … }]
+ */
+export function withPressureToSet(limits: TirePressureLimits | null, pressure: QuotePressure | null): TirePressureLimits | null {
+  if (!limits || !pressure || !("axles" in pressure)) return limits;
+  return { ...limits, toSet: pressure.axles };
+}
+
+/** The pressures to set in the sheet's unit: "front 37.9 psi (261 kPa), rear 37.9 psi (261 kPa)". */
+export const toSetWords = (toSet: readonly AxlePressure[], unit: "psi" | "kPa") =>
+  toSet.map((a) => `${a.axle} ${pressureWords(a.kpa, unit)}`).join(", ");
 
 /**
  * The refusal of a recorded pressure above the tire's maximum, in the unit it was entered in with

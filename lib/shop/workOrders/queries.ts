@@ -14,6 +14,7 @@ import { queueMailIn } from "@/lib/platform/mail/transactional";
 import { hashToken, randomToken } from "@/lib/platform/tokens";
 import { type RecheckDue, type WorkOrder, requiredSteps, unsignedSteps, workOrderDto } from "./api";
 import { queueCompletionMail } from "./completionQueries";
+import type { FitmentSummary } from "@/lib/shop/quotes/fitment";
 import { recheckMail } from "./recheckMail";
 import { recheckLinkExpiry, recheckUrl } from "./recheckLink";
 import { aboveMaximum, tirePressureLimits } from "./pressureLimit";
@@ -25,6 +26,9 @@ function plannedTireOf(fitment: unknown): string | null {
   const tire = (fitment as { planned?: { tire?: unknown } } | null)?.planned?.tire;
   return typeof tire === "string" ? tire : null;
 }
+
+/** The pressures to set of a quote's stored fitment summary, when it was drawn up with the door placard. */
+const pressureToSetOf = (fitment: unknown) => (fitment as Pick<FitmentSummary, "pressure"> | null)?.pressure ?? null;
 
 type Db = Knex | Knex.Transaction;
 
@@ -113,6 +117,7 @@ export async function getWorkOrder(db: Db, shopId: string, id: string): Promise<
       vehicleDescription: quote.vehicle_description,
       boltPattern: quote.bolt_pattern,
       plannedTire: plannedTireOf(quote.fitment),
+      pressure: pressureToSetOf(quote.fitment),
     },
     steps,
     bookedFor,

@@ -37,13 +37,17 @@ export async function openAllDay(db: Knex, timeZone = "America/Denver"): Promise
 }
 
 /** A new customer and a quote for them, written and sent by shop A's staff; its id and the customer's link token. */
-export async function sentQuote(db: Knex, name = "Journey Customer"): Promise<{ id: string; token: string; email: string }> {
+export async function sentQuote(
+  db: Knex,
+  name = "Journey Customer",
+  vehicle: object = VEHICLE,
+): Promise<{ id: string; token: string; email: string }> {
   const { createCustomer } = await import("@/lib/shop/customers/queries");
   const { createQuote, markSent } = await import("@/lib/shop/quotes/queries");
   const { createQuoteSchema } = await import("@/lib/shop/quotes/schema");
   const email = `j${unique()}@example.test`;
   const customer = await createCustomer(db, SHOP_A, { name, phone: "", email });
-  const request = createQuoteSchema.parse(await quoteRequest(db, { customerId: customer.id, vehicle: VEHICLE }));
+  const request = createQuoteSchema.parse(await quoteRequest(db, { customerId: customer.id, vehicle }));
   const id = await createQuote(db, SHOP_A, STAFF_A, request);
   const { token } = await markSent(db, { shopId: SHOP_A }, id, STAFF_A);
   return { id, token, email };
@@ -73,10 +77,10 @@ export async function depositEvent(db: Knex, quoteId: string) {
 }
 
 /** A sent quote accepted on its link and its deposit paid through the provider's event. */
-export async function depositPaidQuote(db: Knex, name?: string) {
+export async function depositPaidQuote(db: Knex, name?: string, vehicle?: object) {
   const { answerByToken } = await import("@/lib/shop/quotes/queries");
   const { applyPaymentEvent } = await import("@/lib/shop/payments/queries");
-  const q = await sentQuote(db, name);
+  const q = await sentQuote(db, name, vehicle);
   await answerByToken(db, q.token, "accepted", { userId: null, label: "customer" });
   await applyPaymentEvent(db, await depositEvent(db, q.id));
   return q;

@@ -2,7 +2,7 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useQuery } from "@tanstack/react-query";
 import { useState } from "react";
-import { useForm } from "react-hook-form";
+import { useForm, useWatch } from "react-hook-form";
 import { SetupFields } from "@/components/setup/SetupFields";
 import { Button } from "@/components/ui/Button";
 import { FailureRegion } from "@/components/ui/FailureRegion";
@@ -12,10 +12,12 @@ import { fieldBinder } from "@/components/ui/fieldProps";
 import { api, applyFieldErrors } from "@/lib/platform/client/api";
 import { queryKeys } from "@/lib/platform/query/keys";
 import { setupFieldNames } from "@/lib/setup/fields";
-import { EMPTY_SETUP_FORM, setupToForm } from "@/lib/setup/schema";
+import { EMPTY_SETUP_FORM, setupSchema, setupToForm } from "@/lib/setup/schema";
 import type { FitmentCandidates as Candidates } from "@/lib/shop/catalog/api";
 import type { CustomerVehicle } from "@/lib/shop/customers/api";
 import { type CounterVehicle, type CounterVehicleForm, counterVehicleSchema } from "@/lib/shop/customers/schema";
+import { CounterPlacardFields } from "./CounterPlacardFields";
+import { useCounterPlacard } from "./useCounterPlacard";
 
 /** Step 2 of a new quote: the vehicle as it is now (typed, or one the customer has saved), then the catalog's fits. */
 export function VehicleStep(props: {
@@ -37,16 +39,28 @@ export function VehicleStep(props: {
   const { handleSubmit, setError, formState, reset } = form;
   const [failure, setFailure] = useState<string | null>(null);
   const field = fieldBinder(form);
-  const onFind = handleSubmit(async (v) => {
-    setFailure(null);
+  const setupRead = setupSchema.safeParse(useWatch({ control: form.control, name: "currentSetup" }));
+  const placard = useCounterPlacard(setupRead.success ? setupRead.data : null);
+  const onFind = (ev: React.FormEvent) => {
+    // The placard is read into SI by its own fields (kept apart: their unit follows the inch/metric choice).
+    const p = placard.value();
+    form.setValue("placard", p ?? null);
+    return handleSubmit(async (v) => {
+      setFailure(null);
+      if (p === undefined) return setFailure("See the messages beside the placard's fields.");
+      await find(v);
+    })(ev);
+  };
+  const find = async (v: CounterVehicle) => {
     try {
       props.onCandidates(v, await api<Candidates>("/api/shop/fitment/candidates", { body: v }));
     } catch (err) {
+      placard.fromServer(err);
       setFailure(
         applyFieldErrors(err, setError, ["description", "boltPattern", "hubBoreMm", ...setupFieldNames("currentSetup"), "axleRatio"]),
       );
     }
-  });
+  };
   const applySaved = (v: CustomerVehicle) => {
     reset({
       description: v.description,
@@ -88,6 +102,9 @@ export function VehicleStep(props: {
         />
         <div className="sm:col-span-3">
           <SetupFields form={form} name="currentSetup" legend="Tires and wheels on it now" spacer={false} />
+        </div>
+        <div className="sm:col-span-3">
+          <CounterPlacardFields placard={placard} />
         </div>
         <TextField
           label="Axle ratio (optional)"

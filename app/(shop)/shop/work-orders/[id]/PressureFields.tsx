@@ -5,7 +5,7 @@ import { TextField } from "@/components/ui/TextField";
 import { kpaToPsi, psiToKpa } from "@/lib/fitment";
 import { pressureFieldLabel, readDecimal } from "@/lib/shop/workOrders/schema";
 import { FIELD_LABEL, type PressureEntryUnit } from "@/lib/shop/workOrders/vocabulary";
-import type { TirePressureLimits } from "@/lib/shop/workOrders/pressureLimit";
+import { type TirePressureLimits, toSetWords } from "@/lib/shop/workOrders/pressureLimit";
 import { pressureWords } from "@/lib/shop/workOrders/signedText";
 import { PRESSURE_CAUTION } from "@/lib/comparisons/pressureText";
 import { type StepValues, errorAt } from "./stepForm";
@@ -41,7 +41,9 @@ export function PressureFields({
         label={pressureFieldLabel(unit)}
         inputMode="decimal"
         autoComplete="off"
-        hint={`Cold, to the figure for this tire and load (door placard or the tire maker's load table).${
+        hint={`${
+          limits?.toSet ? `Cold pressure to set (from the door placard on the quote): ${toSetWords(limits.toSet, unit)}. ` : ""
+        }Cold, to the figure for this tire and load (door placard or the tire maker's load table).${
           limits
             ? ` ${limits.tire}: at most ${pressureWords(limits.maxKpa, unit)}, road minimum ${pressureWords(limits.minimumKpa, unit)}.`
             : ""

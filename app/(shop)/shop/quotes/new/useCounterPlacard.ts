@@ -1,0 +1,66 @@
+"use client";
+import { useMemo, useState } from "react";
+import { useDisplayPrefs } from "@/components/comparison/useDisplayPrefs";
+import { setupGeometry } from "@/lib/fitment";
+import { type MeasureKey, PROFILE_QUANTITIES, type ProfileErrors, type ProfileField } from "@/lib/garage/loadProfile";
+import { readProfileForm } from "@/lib/garage/loadProfileForm";
+import { ApiError } from "@/lib/platform/client/api";
+import { PLACARD_KEYS } from "@/lib/shop/customers/counterPlacard";
+import { type Setup, toEngineSetup } from "@/lib/setup/model";
+import { useMeasureEntries } from "@/app/(tools)/workspace/useMeasureEntries";
+
+/**
+ * The counter's placard fields: typed in the reader's inch/metric choice, read into SI by the
+ * garage's own reader and checks (lib/garage/loadProfileForm), so the counter refuses what the
+ * vehicle page refuses, with the same field names. The body points are not asked here.
+ */
+export function useCounterPlacard(currentSetup: Setup | null) {
+  const [prefs, setPrefs] = useDisplayPrefs();
+  const { entries, set, note } = useMeasureEntries<MeasureKey>(PROFILE_QUANTITIES, prefs);
+  const [placardTire, setPlacardTire] = useState("");
+  const [server, setServer] = useState<ProfileErrors>({});
+  const [tried, setTried] = useState(false);
+
+  const read = useMemo(() => {
+    // The checks take the current tire for body points; none are asked, so its diameter is never read.
+    let current = { text: currentSetup?.tire ?? "", diameterMm: 0 };
+    try {
+      if (currentSetup) current = { text: currentSetup.tire, diameterMm: setupGeometry(toEngineSetup(currentSetup)).overallDiameterMm };
+    } catch {
+      // The setup's own fields report it; the placard's checks do not need it.
+    }
+    return readProfileForm({ entries, placardTire, vehicleKind: "light-truck" }, prefs, current);
+  }, [entries, placardTire, prefs, currentSetup]);
+
+  const errors: ProfileErrors = tried ? { ...read.errors, ...server } : server;
+  const given = placardTire.trim() !== "" || PLACARD_KEYS.some((k) => entries[k].text.trim() !== "");
+  /** The placard as the request carries it (SI with its units), null when nothing was typed, undefined while refused. */
+  const value = () => {
+    setTried(true);
+    if (!given) return null;
+    const p = read.profile;
+    if (!p) return undefined;
+    return {
+      units: p.units,
+      vehicleKind: p.vehicleKind,
+      placardTire: p.placardTire,
+      ...Object.fromEntries(PLACARD_KEYS.map((k) => [k, p[k]])),
+    };
+  };
+  /** A refusal from the server, beside the placard's fields ("placard.<field>" keys of the vehicle's request). */
+  const fromServer = (err: unknown) => {
+    const fe = err instanceof ApiError ? err.body.fieldErrors : undefined;
+    if (!fe) return;
+    const mine = Object.entries(fe).filter(([k]) => /(^|\.)placard\./.test(k));
+    setServer(Object.fromEntries(mine.map(([k, m]) => [k.replace(/^.*placard\./, ""), m[0]])) as ProfileErrors);
+  };
+  const message = (k: ProfileField) => [errors[k], k === "placardTire" ? undefined : note(k)].filter(Boolean).join(" ") || undefined;
+  const edit = (k: ProfileField, text: string) => {
+    setServer(({ [k]: _, ...rest }) => rest);
+    if (k === "placardTire") setPlacardTire(text);
+    else set(k, text);
+  };
+  return { prefs, setPrefs, entries, placardTire, edit, message, value, fromServer };
+}
+
+export type CounterPlacardState = ReturnType<typeof useCounterPlacard>;

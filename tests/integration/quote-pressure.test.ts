@@ -1,0 +1,129 @@
+import { describe, expect, it, vi } from "vitest";
+import { psiToKpa } from "@/lib/fitment";
+import { ctx, req } from "./support/requests";
+import { depositPaidQuote, firstFreeStart, STAFF_A } from "./support/quoteJourney";
+import { SHOP_A, VEHICLE, quoteRequest } from "./support/shopFixture";
+import { staffAtCounter } from "./support/staffAtCounter";
+
+// Staff of shop A at the counter; drafts send no mail.
+const session = vi.hoisted(() => ({ current: null as unknown }));
+vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
+const db = staffAtCounter(session, { bookable: true });
+const customers = await import("@/app/api/shop/customers/route");
+const quotes = await import("@/app/api/shop/quotes/route");
+const quote = await import("@/app/api/shop/quotes/[id]/route");
+const pdfRoute = (await import("@/app/api/shop/quotes/[id]/pdf/route")).GET;
+
+/** The counter truck's door placard: 265/70R17 113T at 35 psi front and rear, weighed on a scale (invented). */
+const PLACARD = {
+  units: "imperial",
+  placardTire: "265/70R17 113T",
+  placardFrontKpa: psiToKpa(35),
+  placardRearKpa: psiToKpa(35),
+  frontAxleKg: 1430,
+  rearAxleKg: 1200,
+};
+
+async function pdfText(id: string): Promise<string> {
+  const res = await pdfRoute(req("GET", `/api/shop/quotes/${id}/pdf`), ctx({ id }));
+  expect(res.status).toBe(200);
+  const { PDFParse } = await import("pdf-parse");
+  const parser = new PDFParse({ data: new Uint8Array(Buffer.from(await res.arrayBuffer())) });
+  try {
+    return (await parser.getText()).text.replace(/\s+/g, " ");
+  } finally {
+    await parser.destroy();
+  }
+}
+
+let n = 0;
+async function makeQuote(vehicle: Record<string, unknown>) {
+  n += 1;
+  const cres = await customers.POST(
+    req("POST", "/api/shop/customers", { name: `Ida Placard ${n}`, phone: `(555) 010-778${n}`, email: "" }),
+    ctx(),
+  );
+  const c = await cres.json();
+  return quotes.POST(req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId: c.customer.id, vehicle })), ctx());
+}
+
+describe("a quote for a counter vehicle with its door placard gives the cold pressure to set", () => {
+  it("per axle in its summary, its cautions and its PDF; 35x12.50R17LT 121Q E sets its road minimum, 37.9 psi", async () => {
+    const made = await makeQuote({ ...VEHICLE, placard: PLACARD });
+    const body = await made.json();
+    expect(made.status, JSON.stringify(body)).toBe(201);
+    const detail = await (await quote.GET(req("GET", `/api/shop/quotes/${body.id}`), ctx({ id: body.id }))).json();
+    const p = detail.quote.fitment.pressure;
+    // TRA light-truck load formula (NHTSA "The Pneumatic Tire", 2006): 65 psi × (1027 kg / 1450 kg)^(1/0.585)
+    // = 36.0 psi carries what the placard tire carries at 35 psi; the LRE flotation road minimum
+    // 0.5833 × 65 psi = 37.9 psi (FMVSS 138 ratio by proportion, the engine's) is above it and is set.
+    expect(p.axles.map((a: { axle: string; decidedBy: string }) => [a.axle, a.decidedBy])).toEqual([
+      ["front", "road minimum"],
+      ["rear", "road minimum"],
+    ]);
+    expect(p.axles[0].kpa).toBeCloseTo(psiToKpa(65) * 0.5833, 0);
+    const text = await pdfText(body.id);
+    expect(text).toContain("Cold pressure to set: front 37.9 psi (261 kPa), rear 37.9 psi (261 kPa)");
+    expect(text).toMatch(/Cold pressure to set for 35x12\.50R17LT 121Q LRE: front 37\.9 psi \(261 kPa\)/);
+    expect(text).toContain("Never inflate above the sidewall maximum, 65 psi (448 kPa)");
+    expect(text).not.toContain("Cold pressure: set it for the vehicle's axle loads");
+  });
+
+  it("without a placard, the quote keeps today's caution and no pressure", async () => {
+    const made = await makeQuote(VEHICLE);
+    const { id } = await made.json();
+    const detail = await (await quote.GET(req("GET", `/api/shop/quotes/${id}`), ctx({ id }))).json();
+    expect(detail.quote.fitment.pressure).toBeUndefined();
+    const text = await pdfText(id);
+    expect(text).toContain("Cold pressure: set it for the vehicle's axle loads from the door placard");
+    expect(text).not.toContain("Cold pressure to set");
+    expect(text).toContain("Never inflate above the maximum on the sidewall or the wheel.");
+  });
+
+  it("refuses a placard pressure the placard tire does not allow, beside its field, and stores nothing", async () => {
+    const before = await db("quotes").count<{ count: string }[]>({ count: "*" });
+    const res = await makeQuote({ ...VEHICLE, placard: { ...PLACARD, placardFrontKpa: psiToKpa(70) } });
+    const body = await res.json();
+    expect(res.status).toBe(422);
+    expect(Object.keys(body.fieldErrors)).toEqual(["vehicle.placard.placardFrontKpa"]);
+    const key = Object.keys(body.fieldErrors).find((k) => k.endsWith("placardFrontKpa"));
+    expect(body.fieldErrors[key!][0]).toMatch(/^Placard cold pressure, front \(psi\):/);
+    expect(await db("quotes").count<{ count: string }[]>({ count: "*" })).toEqual(before);
+  });
+
+  it("the work order's pressure step gives the pressure to set per axle; without a placard, only the tire's limits", async () => {
+    const { bookInstall } = await import("@/lib/shop/bookings/queries");
+    const { getWorkOrder, openWorkOrder } = await import("@/lib/shop/workOrders/queries");
+    const orderOf = async (vehicle: object, name: string) => {
+      const q = await depositPaidQuote(db, name, vehicle);
+      await bookInstall(db, { by: "staff", scope: { shopId: SHOP_A }, quoteId: q.id }, { start: await firstFreeStart(db, q.id) }, STAFF_A);
+      return getWorkOrder(db, SHOP_A, await openWorkOrder(db, SHOP_A, q.id));
+    };
+    const withPlacard = await orderOf({ ...VEHICLE, placard: PLACARD }, "Ida Bay");
+    // As on the quote: the LRE flotation road minimum 0.5833 × 65 psi (the engine's FMVSS 138 proportion).
+    expect(withPlacard.pressureLimits?.toSet?.map((a) => [a.axle, Math.round(a.kpa)])).toEqual([
+      ["front", 261],
+      ["rear", 261],
+    ]);
+    const without = await orderOf(VEHICLE, "Ida Bay Two");
+    expect(without.pressureLimits?.toSet).toBeUndefined();
+    expect(without.pressureLimits?.maxKpa).toBeCloseTo(psiToKpa(65), 0);
+  });
+
+  it("a saved vehicle keeps its placard: a later quote for it gives the same pressure to set", async () => {
+    const cres = await customers.POST(req("POST", "/api/shop/customers", { name: "Ida Saved", phone: "(555) 010-7799", email: "" }), ctx());
+    const customerId = (await cres.json()).customer.id as string;
+    const first = await quotes.POST(
+      req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId, vehicle: { ...VEHICLE, placard: PLACARD }, saveVehicle: true })),
+      ctx(),
+    );
+    expect(first.status).toBe(201);
+    const saved = await db("customer_vehicles").where({ customer_id: customerId }).first();
+    expect(saved.load_placard).toMatchObject({ placardTire: "265/70R17 113T", frontAxleKg: 1430, units: "imperial" });
+    const again = await quotes.POST(req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId, vehicleId: saved.id })), ctx());
+    const { id } = await again.json();
+    expect(again.status).toBe(201);
+    const detail = await (await quote.GET(req("GET", `/api/shop/quotes/${id}`), ctx({ id }))).json();
+    expect(detail.quote.fitment.pressure.axles.map((a: { kpa: number }) => Math.round(a.kpa))).toEqual([261, 261]);
+  });
+});
