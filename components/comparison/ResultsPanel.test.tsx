@@ -4,7 +4,8 @@ import { afterEach, describe, expect, it } from "vitest";
 import { computeComparison } from "@/lib/comparisons/compute";
 import type { DisplayPrefs } from "@/lib/comparisons/format";
 import { DEFAULT_INPUT } from "@/lib/comparisons/schema";
-import { HeadlineChanges, SetupDetailTable, WarningList } from "./ResultsPanel";
+import { HeadlineChanges, WarningList } from "./ResultsPanel";
+import { SetupDetailTable } from "./SetupDetailTable";
 
 const inch: DisplayPrefs = { units: "imperial", lengths: "decimal" };
 const metric: DisplayPrefs = { units: "metric", lengths: "decimal" };

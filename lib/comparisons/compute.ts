@@ -6,24 +6,13 @@
  * workspace's words for its findings are in warnings.ts.
  * Speed rows come once per unit system at round speeds of that unit (see speedometer.ts).
  */
-import {
-  DEFAULT_FLANGE_IN,
-  KM_PER_MILE,
-  backspacingFromOffset,
-  compareSetups,
-  crawlRatio,
-  effectiveCrawlRatio,
-  kgToLb,
-  loadIndexKg,
-  loadRangeInfo,
-  plyRating,
-  setupGeometry,
-  speedSymbolKmh,
-  tireDimensions,
-  type SetupComparison,
-  type SetupGeometry,
-  type TireDimensions,
-} from "@/lib/fitment";
+import { DEFAULT_FLANGE_IN, backspacingFromOffset } from "@/lib/fitment/offset";
+import { KM_PER_MILE, kgToLb } from "@/lib/fitment/units";
+import { compareSetups, crawlRatio, effectiveCrawlRatio, type SetupComparison } from "@/lib/fitment/compare";
+import { loadIndexKg, speedSymbolKmh } from "@/lib/fitment/loadSpeed";
+import { loadRangeInfo, plyRating } from "@/lib/fitment/loadRange";
+import { setupGeometry, type SetupGeometry } from "@/lib/fitment/geometry";
+import { tireDimensions, type TireDimensions } from "@/lib/fitment/dimensions";
 import { type Setup, toEngineSetup } from "@/lib/setup/model";
 import type { ComparisonInput } from "./model";
 import {

@@ -8,7 +8,10 @@
  * messages name the field as labelled (fields.ts), give an example the field accepts and state
  * bounds in the field's unit.
  */
-import { DEFAULT_FLANGE_IN, KM_PER_MILE, MM_PER_IN, formatLength, inToMm, mmToIn, parseTireSize } from "@/lib/fitment";
+import { DEFAULT_FLANGE_IN } from "@/lib/fitment/offset";
+import { KM_PER_MILE, MM_PER_IN, inToMm, mmToIn } from "@/lib/fitment/units";
+import { formatLength } from "@/lib/fitment/length";
+import { parseTireSize } from "@/lib/fitment/tireSize";
 import { checkSetup } from "@/lib/setup/check";
 import { boundText, lengthMessages } from "@/lib/setup/messages";
 import type { BackspacingReference, Setup, SetupForm } from "@/lib/setup/model";

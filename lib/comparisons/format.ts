@@ -5,7 +5,8 @@
  * not converted here: the result carries them at round speeds of each unit (speedometer.ts).
  * Negative values use the typographic minus sign (U+2212).
  */
-import { KM_PER_MILE, MM_PER_IN, formatLength, inToMm, kgToLb, psiToKpa } from "@/lib/fitment";
+import { KM_PER_MILE, MM_PER_IN, inToMm, kgToLb, psiToKpa } from "@/lib/fitment/units";
+import { formatLength } from "@/lib/fitment/length";
 import { type ComparisonWarning, LENGTH_TOKEN } from "./warnings";
 import { type SpeedSystem, type SpeedUnit, SPEED_UNIT, enteredSpeed } from "./speedometer";
 

@@ -9,7 +9,7 @@
  * `checkSetup` without text (lib/setup/check.ts), so an input that passes never makes
  * `computeComparison` throw.
  */
-import { DEFAULT_AXLE_RATIO, DEFAULT_TRANSMISSION_RATIO } from "@/lib/fitment";
+import { DEFAULT_AXLE_RATIO, DEFAULT_TRANSMISSION_RATIO } from "@/lib/fitment/compare";
 import { type Checked, type Issue, checkSetup, isObject } from "@/lib/setup/check";
 import type { Setup } from "@/lib/setup/model";
 

@@ -12,7 +12,7 @@
  * The round speeds are chosen in each unit (mph for imperial readers, km/h for metric ones)
  * rather than converted from the other, so nobody reads a "96.6 km/h" row. Pure.
  */
-import { KM_PER_MILE } from "@/lib/fitment";
+import { KM_PER_MILE } from "@/lib/fitment/units";
 
 /** The reader's unit system (the display toggle). */
 export type SpeedSystem = "imperial" | "metric";

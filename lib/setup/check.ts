@@ -5,7 +5,8 @@
  * matching the tire's rim diameter, an offset or backspacing that keeps the mounting face inside
  * the wheel), so a setup that passes never makes the engine throw.
  */
-import { FitmentInputError, parseTireSize } from "@/lib/fitment";
+import { FitmentInputError } from "@/lib/fitment/errors";
+import { parseTireSize } from "@/lib/fitment/tireSize";
 import { SETUP_FIELD_EXAMPLE as EX, SETUP_FIELD_LABEL as L, type SetupFieldPath } from "./fields";
 import { SETUP_MESSAGE, lengthMessages } from "./messages";
 import {

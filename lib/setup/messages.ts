@@ -4,7 +4,8 @@
  * field as the screens label it (fields.ts), gives an example the field accepts and states
  * bounds in the field's own unit.
  */
-import { MM_PER_IN, OFFSET_MARGIN_MM } from "@/lib/fitment";
+import { MM_PER_IN } from "@/lib/fitment/units";
+import { OFFSET_MARGIN_MM } from "@/lib/fitment/offset";
 import { BACKSPACING_REFERENCE_LABEL, SETUP_FIELD_EXAMPLE as EX, SETUP_FIELD_LABEL as L } from "./fields";
 import type { BackspacingReference } from "./model";
 

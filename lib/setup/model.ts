@@ -8,16 +8,9 @@
  * Units follow the engine (lib/fitment/README.md): mm inside, inches where the trade designates
  * in inches (wheel diameter and width, backspacing, flange allowance).
  */
-import {
-  type BackspacingReference,
-  FLANGE_ALLOWANCE_LIMITS_IN,
-  RIM_WIDTH_LIMITS_IN,
-  SPACER_LIMITS_MM,
-  type SetupInput,
-  WHEEL_DIAMETER_LIMITS_IN,
-  checkOffsetMm,
-  offsetFromBackspacing,
-} from "@/lib/fitment";
+import { type BackspacingReference, FLANGE_ALLOWANCE_LIMITS_IN, checkOffsetMm, offsetFromBackspacing } from "@/lib/fitment/offset";
+import { RIM_WIDTH_LIMITS_IN } from "@/lib/fitment/dimensions";
+import { SPACER_LIMITS_MM, type SetupInput, WHEEL_DIAMETER_LIMITS_IN } from "@/lib/fitment/geometry";
 
 export type { BackspacingReference };
 

@@ -5,7 +5,8 @@
  * field is refused with a message, never read as 1.5 mm. Zod-free: the workspace uses it in the
  * browser, the zod fields (schema.ts) and the URL codec (url.ts) wrap it.
  */
-import { MM_PER_IN, parseLength } from "@/lib/fitment";
+import { MM_PER_IN } from "@/lib/fitment/units";
+import { parseLength } from "@/lib/fitment/length";
 
 /** Rounds away float noise from unit conversion (4.75 in → mm → in stays 4.75). */
 export const tidy = (v: number): number => {

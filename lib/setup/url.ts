@@ -16,7 +16,8 @@
  * falls back and is reported as a `LinkProblem`), `setupFromQuery` is strict (the garage pages:
  * null unless the link gives a whole valid setup).
  */
-import { DEFAULT_FLANGE_IN, parseTireSize } from "@/lib/fitment";
+import { DEFAULT_FLANGE_IN } from "@/lib/fitment/offset";
+import { parseTireSize } from "@/lib/fitment/tireSize";
 import { checkSetup } from "./check";
 import { BACKSPACING_REFERENCE_LABEL, SETUP_FIELD_LABEL } from "./fields";
 import {

@@ -7,7 +7,7 @@ import type { SetupFigures } from "@/lib/comparisons/compute";
 import type { DraftErrors, SetupDraft } from "@/lib/comparisons/draft";
 import { SETUP_FIELD_LABEL as L } from "@/lib/setup/fields";
 import { type DisplayPrefs, formatInches, formatLen, formatNumber } from "@/lib/comparisons/format";
-import { parseTireSize } from "@/lib/fitment";
+import { parseTireSize } from "@/lib/fitment/tireSize";
 import { BackspacingDiagram } from "./BackspacingDiagram";
 
 type Side = "current" | "planned";

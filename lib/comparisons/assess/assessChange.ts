@@ -23,14 +23,12 @@
  * - load: the planned tire's load index and load range, always (a note to check against the
  *   axle ratings).
  */
-import {
-  RIM_WIDTH_TOLERANCE_IN,
-  type ClearancePrediction,
-  type SetupComparison,
-  type SetupGeometry,
-  loadIndexKg,
-  loadRangeInfo,
-} from "@/lib/fitment";
+import { RIM_WIDTH_TOLERANCE_IN } from "@/lib/fitment/dimensions";
+import type { ClearancePrediction } from "@/lib/fitment/clearance";
+import type { SetupComparison } from "@/lib/fitment/compare";
+import type { SetupGeometry } from "@/lib/fitment/geometry";
+import { loadIndexKg } from "@/lib/fitment/loadSpeed";
+import { loadRangeInfo } from "@/lib/fitment/loadRange";
 import {
   ALIGNMENT_DIAMETER_MM,
   ALIGNMENT_SHIFT_MM,
