@@ -20,7 +20,6 @@ import { pressureWords } from "@/lib/shop/workOrders/signedText";
 
 /** The placard figures a counter vehicle keeps (SI). */
 export const PLACARD_KEYS = ["placardFrontKpa", "placardRearKpa", "frontGawrKg", "rearGawrKg", "frontAxleKg", "rearAxleKg"] as const;
-type PlacardKey = (typeof PLACARD_KEYS)[number];
 
 export type CounterPlacard = {
   units: Units;
