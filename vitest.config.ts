@@ -8,18 +8,33 @@ const alias = {
   "server-only": fileURLToPath(new URL("./tests/support/empty.ts", import.meta.url)),
 };
 
+const BROWSER_ALONE = ["tests/browser/outage.test.ts", "tests/browser/several-servers.test.ts", "tests/browser/lighthouse.test.ts"];
+/** Knex loads migration files itself: tsx lets those TypeScript files load inside the forks. */
+const withTsx = { pool: "forks" as const, execArgv: ["--import", "tsx"] };
+const browser = {
+  ...withTsx,
+  include: ["tests/browser/**/*.test.ts"],
+  environment: "node" as const,
+  testTimeout: 90000,
+  hookTimeout: 90000,
+  // Two files share the machine with the server and two Chromiums: a page may take more than
+  // expect.poll's default second to answer a click.
+  expect: { poll: { timeout: 15000 } },
+};
+
 export default defineConfig({
   resolve: { alias },
   oxc: { jsx: { runtime: "automatic" } },
   test: {
-    pool: "forks",
-    // Knex loads migration files itself: tsx lets those TypeScript files load inside the forks.
-    execArgv: ["--import", "tsx"],
+    // The machine this runs on has two cores; more workers only queue.
+    maxWorkers: 2,
     projects: [
       {
         extends: true,
         test: {
           name: "unit",
+          // Threads start faster than forks, and pure tests need no loader of their own.
+          pool: "threads",
           // Pure tests sit beside their module (tests/ holds integration and browser tests, and the
           // integration tests' own helpers, whose tests sit beside them and run here).
           include: ["{app,components,lib,scripts}/**/*.test.{ts,tsx}", "tests/integration/support/**/*.test.ts"],
@@ -30,10 +45,12 @@ export default defineConfig({
         extends: true,
         test: {
           name: "integration",
+          ...withTsx,
           include: ["tests/integration/**/*.test.ts"],
           exclude: ["tests/integration/support/**"],
           environment: "node",
-          fileParallelism: false,
+          // One database per worker, so files run side by side.
+          setupFiles: ["tests/integration/support/workerDatabase.ts"],
           testTimeout: 30000,
           hookTimeout: 60000,
         },
@@ -41,12 +58,22 @@ export default defineConfig({
       {
         extends: true,
         test: {
+          ...browser,
           name: "browser",
-          include: ["tests/browser/**/*.test.ts"],
-          environment: "node",
+          // Two files at a time against the one server: each signs up accounts of its own.
+          exclude: BROWSER_ALONE,
+        },
+      },
+      {
+        extends: true,
+        test: {
+          ...browser,
+          name: "browser-alone",
+          // Files that stop the database, start servers of their own or load the whole machine
+          // (Lighthouse) run after the others, one at a time.
+          include: BROWSER_ALONE,
           fileParallelism: false,
-          testTimeout: 90000,
-          hookTimeout: 90000,
+          sequence: { groupOrder: 1 },
         },
       },
     ],

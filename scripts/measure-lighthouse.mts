@@ -2,7 +2,7 @@
  * Lighthouse (12.2.3, the mobile preset with simulated throttling) against a running server with
  * the demo data, for the pages a phone user opens first:
  *
- *   npm run measure:lighthouse [-- http://127.0.0.1:3000]
+ *   npm run measure:lighthouse [-- http://127.0.0.1:3000] [--only=workspace-comparison,vehicle]
  *
  * Starts no server and downloads nothing: it drives Debian's Chromium (CHROME_PATH, default
  * /usr/bin/chromium) through chrome-launcher, which ships with Lighthouse. It signs in as the demo
@@ -15,7 +15,14 @@ import lighthouse from "lighthouse";
 import { CHROMIUM_FLAGS } from "./chromium";
 import { signInOverHttp } from "./http-session";
 
-const base = (process.argv[2] ?? process.env.BASE_URL ?? "http://127.0.0.1:3000").replace(/\/$/, "");
+const args = process.argv.slice(2);
+const base = (args.find((a) => !a.startsWith("--")) ?? process.env.BASE_URL ?? "http://127.0.0.1:3000").replace(/\/$/, "");
+/** `--only=name,name`: measure just those pages (the browser suite measures two, to keep its time). */
+const only = args
+  .find((a) => a.startsWith("--only="))
+  ?.slice("--only=".length)
+  .split(",")
+  .filter(Boolean);
 const MEMBER = { email: "juno@demo.hubface.test", password: "hubface-demo-1" };
 /** A comparison in the URL, as a shared workspace link carries it (the codec reads these names). */
 const WITH_COMPARISON = "/workspace?ct=285%2F75R16&cd=16&cw=8&co=0&pt=35x12.50R17LT&pd=17&pw=9&po=-12";
@@ -76,15 +83,18 @@ async function measure(port: number, path: string, cookie?: string): Promise<Row
 async function main() {
   const cookie = await signIn();
   const found = await demoPaths(cookie);
-  const pages: { path: string; signedIn?: boolean }[] = [
-    { path: "/" },
-    { path: "/workspace" },
-    { path: WITH_COMPARISON },
-    ...(found.share ? [{ path: found.share }] : []),
-    { path: "/convert" },
-    { path: "/beadlock" },
-    ...(found.vehicle ? [{ path: found.vehicle, signedIn: true }] : []),
+  const all: { name: string; path: string; signedIn?: boolean }[] = [
+    { name: "home", path: "/" },
+    { name: "workspace", path: "/workspace" },
+    { name: "workspace-comparison", path: WITH_COMPARISON },
+    ...(found.share ? [{ name: "share", path: found.share }] : []),
+    { name: "convert", path: "/convert" },
+    { name: "beadlock", path: "/beadlock" },
+    ...(found.vehicle ? [{ name: "vehicle", path: found.vehicle, signedIn: true }] : []),
   ];
+  const unknown = only?.filter((n) => !all.some((p) => p.name === n)) ?? [];
+  if (unknown.length) throw new Error(`--only names no page: ${unknown.join(", ")} (pages: ${all.map((p) => p.name).join(", ")})`);
+  const pages = only ? all.filter((p) => only.includes(p.name)) : all;
   const chrome = await chromeLauncher.launch({
     chromePath: process.env.CHROME_PATH ?? "/usr/bin/chromium",
     chromeFlags: ["--headless=new", ...CHROMIUM_FLAGS],

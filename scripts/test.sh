@@ -39,13 +39,28 @@ export TEST_DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT_TEST/hubface_tes
 export E2E_DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT_TEST/hubface_e2e"
 export NEXTAUTH_SECRET="test-secret-$(random_hex 16)"
 
-check format prettier --check . --log-level warn
-check lint eslint . --max-warnings=0
-check typecheck tsc --noEmit
-# Dead exports (knip will replace this script once package changes are free).
-check exports tsx scripts/check-exports.mts
+# The four static checks in two chains side by side (each check is single-threaded; the machine
+# has two cores). Each chain's output goes to a file, printed once the chain is done.
+chain() { # chain a|b: runs checks_a or checks_b, its output to a file
+  "checks_$1" > "$RESULTS/checks-$1.log" 2>&1
+}
+checks_a() {
+  check lint eslint . --max-warnings=0
+  # Dead exports (knip will replace this script once package changes are free).
+  check exports tsx scripts/check-exports.mts
+}
+checks_b() {
+  check typecheck tsc --noEmit
+  check format prettier --check . --log-level warn
+}
+chain a & chain_a=$!
+chain b & chain_b=$!
+wait "$chain_a" "$chain_b"
+cat "$RESULTS/checks-a.log" "$RESULTS/checks-b.log"
 
 log "unit and integration tests (Vitest)"
+# Integration files run side by side, each worker on a database of its own
+# (tests/integration/support/workerDatabase.ts makes them beside hubface_test).
 DATABASE_URL="$TEST_DATABASE_URL" vitest run --project unit --project integration \
   --reporter=default --reporter=json --outputFile.json="$RESULTS/vitest.json"
 
@@ -54,7 +69,8 @@ export DATABASE_URL="$E2E_DATABASE_URL"
 export E2E_BASE_URL="http://127.0.0.1:$APP_PORT"
 fake_mail_and_pay_env "$E2E_BASE_URL" "$T_SMTP" "$T_OUTBOX" "$T_PAY" sk_test_hubface_e2e
 export PG_TEST_DATA_DIR="$PGDATA_DIR" PGBIN
-if next build > "$RESULTS/next-build.log" 2>&1; then
+# Types were checked above; the build skips its own type pass and cache (next.config.mjs).
+if HUBFACE_TEST_BUILD=1 next build > "$RESULTS/next-build.log" 2>&1; then
   record build 1 0
   fake_photo_store_env "$T_S3" "$ROOT/.data/s3-test"
   export S3_RESET=1
@@ -67,7 +83,7 @@ if next build > "$RESULTS/next-build.log" 2>&1; then
   tsx scripts/serve.ts --hostname 127.0.0.1 --port "$APP_PORT" > "$RESULTS/next-start.log" 2>&1 & PIDS+=($!)
   if wait_for_http "$E2E_BASE_URL/api/health"; then
     log "browser and HTTP tests (Chromium)"
-    vitest run --project browser --reporter=default --reporter=json --outputFile.json="$RESULTS/vitest-browser.json"
+    vitest run --project browser --project browser-alone --reporter=default --reporter=json --outputFile.json="$RESULTS/vitest-browser.json"
   else
     log "the app did not start; see $RESULTS/next-start.log"; record browser-start 0 1
   fi
