@@ -29,7 +29,7 @@ import {
   type SuspensionState,
   clearanceEnvelope,
   steeringAxisInboardMm,
-} from "./clearance";
+} from "./clearanceGeometry";
 import type { DimensionLine } from "./crossSectionLayout";
 import { FitmentInputError, requireNumber } from "./errors";
 import type { SetupGeometry, SetupInput } from "./geometry";

@@ -1,4 +1,5 @@
 import type { ReactNode } from "react";
+import QueryLayout from "@/app/QueryLayout";
 import { currentCaller } from "@/lib/platform/auth/session";
 import { ShopTabs, type Tab } from "./ShopTabs";
 
@@ -21,9 +22,9 @@ export default async function ShopLayout({ children }: { children: ReactNode }) 
       : []),
   ];
   return (
-    <>
+    <QueryLayout>
       {caller && (caller.role === "shop_staff" || owner) && <ShopTabs tabs={tabs} />}
       {children}
-    </>
+    </QueryLayout>
   );
 }

@@ -5,9 +5,9 @@ import { buttonClass } from "@/components/ui/Button";
 import { workspaceUrl } from "@/lib/comparisons/url";
 import { type OpenedComparison, useCurrentInput } from "./currentInput";
 
-// The members' control carries react-hook-form and zod; visitors never download them, and the
+// The members' control carries react-hook-form, zod and TanStack Query; visitors never download them, and the
 // workspace's first-load scripts stay within budget. The placeholder keeps the row's height.
-const SaveComparison = dynamic(() => import("./SaveComparison").then((m) => m.SaveComparison), {
+const SaveComparison = dynamic(() => import("./SaveComparisonWithQuery").then((m) => m.SaveComparisonWithQuery), {
   ssr: false,
   loading: () => (
     <div
