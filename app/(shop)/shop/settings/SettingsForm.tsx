@@ -9,21 +9,14 @@ import { TextField } from "@/components/ui/TextField";
 import { fieldBinder } from "@/components/ui/fieldProps";
 import { api, applyFieldErrors } from "@/lib/platform/client/api";
 import { type ShopSettings, type ShopSettingsInput, shopSettingsSchema } from "@/lib/shop/schema";
+import { HEADER_FIELDS, SETTINGS_FIELD_NAMES, type SettingsField, TERMS_FIELDS } from "./settingsFields";
 
-const FIELDS = [
-  "name",
-  "address",
-  "phone",
-  "taxRate",
-  "labourRate",
-  "fabricationRate",
-  "quoteValidityDays",
-  "depositPct",
-  "currency",
-  "noticeEmail",
-] as const;
+/** Draws each setting as a text field bound to the form (registration and error from fieldBinder). */
+function fieldRows(fields: readonly SettingsField[], field: ReturnType<typeof fieldBinder<ShopSettingsInput>>) {
+  return fields.map(({ name, ...shown }) => <TextField key={name} {...shown} {...field(name)} />);
+}
 
-export function SettingsForm({ initial }: { initial: Record<(typeof FIELDS)[number], string> }) {
+export function SettingsForm({ initial }: { initial: Record<keyof ShopSettingsInput, string> }) {
   const router = useRouter();
   const [message, setMessage] = useState<{ tone: "success" | "error"; text: string } | null>(null);
   const form = useForm<ShopSettingsInput, unknown, ShopSettings>({
@@ -41,35 +34,15 @@ export function SettingsForm({ initial }: { initial: Record<(typeof FIELDS)[numb
       setMessage({ tone: "success", text: "Settings saved. New quotes use them from now on." });
       router.refresh();
     } catch (e) {
-      const rest = applyFieldErrors(e, setError, FIELDS);
+      const rest = applyFieldErrors(e, setError, SETTINGS_FIELD_NAMES);
       if (rest) setMessage({ tone: "error", text: rest });
     }
   });
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-3">
       <div aria-live="polite">{message && <Alert tone={message.tone}>{message.text}</Alert>}</div>
-      <TextField label="Shop name" {...field("name")} />
-      <TextField label="Address" {...field("address")} hint="Printed in the quote header." />
-      <TextField label="Phone" type="tel" {...field("phone")} />
-      <TextField
-        label="E-mail for shop notices"
-        type="email"
-        {...field("noticeEmail")}
-        hint="Where we tell the shop that a customer accepted, paid or booked. Leave it empty to use the owners' addresses."
-      />
-      <div className="grid gap-3 sm:grid-cols-2">
-        <TextField label="Sales tax rate (%)" inputMode="decimal" {...field("taxRate")} hint="Applied to taxable lines, e.g. 8.25." />
-        <TextField label="Deposit (% of total)" inputMode="numeric" {...field("depositPct")} />
-        <TextField label="Labour rate ($ per hour)" inputMode="decimal" {...field("labourRate")} />
-        <TextField
-          label="Fabrication rate ($ per hour)"
-          inputMode="decimal"
-          {...field("fabricationRate")}
-          hint="Fender trimming and other cutting work."
-        />
-        <TextField label="Quote valid for (days)" inputMode="numeric" {...field("quoteValidityDays")} />
-        <TextField label="Currency" readOnly {...field("currency")} hint="Quotes and deposits are in US dollars." />
-      </div>
+      {fieldRows(HEADER_FIELDS, field)}
+      <div className="grid gap-3 sm:grid-cols-2">{fieldRows(TERMS_FIELDS, field)}</div>
       <Button type="submit" pending={formState.isSubmitting} className="self-start">
         Save settings
       </Button>
