@@ -4,7 +4,8 @@ import type { Knex } from "knex";
 import { parseBoltPattern } from "@/lib/fitment";
 import type { InstallChecklistRow, Role, VehicleClearanceRow, VehiclePhotoRow, VehicleRow } from "@/lib/platform/db/types";
 import { type PhotoStore } from "@/lib/garage/photos/s3";
-import { type ProcessedImage, extensionOf } from "@/lib/garage/photos/image";
+import type { ProcessedImage } from "@/lib/garage/photos/image";
+import { storePhotoObjects } from "@/lib/garage/photos/objects";
 import type { ClearanceValues, GarageVehicleValues } from "@/lib/garage/schema";
 import type { Setup } from "@/lib/setup/model";
 import type { Vehicle, VehicleClearance, VehicleDetail, VehiclePhoto, WorkspaceVehicle } from "@/lib/garage/types";
@@ -210,55 +211,19 @@ export async function clearanceBelongs(db: Knex, vehicleId: string, clearanceId:
   return Boolean(await db("vehicle_clearances").where({ id: clearanceId, vehicle_id: vehicleId }).first("id"));
 }
 
-/**
- * Stores both objects, then the row. Keys are built from ids only. If anything fails, the
- * objects already written are removed again, so nothing is left half-written. The order is the
- * crash-safe one: a server killed in between leaves objects without a row (never a row without
- * its image), and the queue's photo sweep (lib/garage/photos/sweep.ts) deletes those.
- */
+/** Stores the photo's objects, then its row (lib/garage/photos/objects.ts says why in that order). */
 export async function addPhoto(
   db: Knex,
   store: PhotoStore,
   input: { vehicleId: string; clearanceId: string | null; image: ProcessedImage; name: string },
 ): Promise<VehiclePhoto> {
   const id = randomUUID();
-  const base = `vehicles/${input.vehicleId}/${id}`;
-  const objectKey = `${base}.${extensionOf(input.image.type)}`;
-  const thumbKey = `${base}-thumb.webp`;
-  const written: string[] = [];
-  try {
-    await store.put(objectKey, input.image.full, input.image.type);
-    written.push(objectKey);
-    await store.put(thumbKey, input.image.thumb, "image/webp");
-    written.push(thumbKey);
+  return storePhotoObjects(store, `vehicles/${input.vehicleId}/${id}`, input.image, input.name, async (columns) => {
     const [row] = await db<VehiclePhotoRow>("vehicle_photos")
-      .insert({
-        id,
-        vehicle_id: input.vehicleId,
-        clearance_id: input.clearanceId,
-        object_key: objectKey,
-        thumb_key: thumbKey,
-        content_type: input.image.type,
-        width: input.image.width,
-        height: input.image.height,
-        bytes: input.image.full.length,
-        original_name: input.name,
-      })
+      .insert({ id, vehicle_id: input.vehicleId, clearance_id: input.clearanceId, ...columns })
       .returning("*");
     return photoDto(row as VehiclePhotoRow);
-  } catch (e) {
-    await store.deleteMany(written).catch(() => undefined);
-    throw e;
-  }
-}
-
-/** Of these object keys, the ones a photo row still names (as the photo or its thumbnail). */
-export async function referencedPhotoKeys(db: Knex, keys: string[]): Promise<Set<string>> {
-  const rows = (await db("vehicle_photos").whereIn("object_key", keys).orWhereIn("thumb_key", keys).select("object_key", "thumb_key")) as {
-    object_key: string;
-    thumb_key: string;
-  }[];
-  return new Set(rows.flatMap((r) => [r.object_key, r.thumb_key]));
+  });
 }
 
 /** A photo the caller may see: its owner's, or any for an admin. */

@@ -1,4 +1,5 @@
 import type { Locator } from "playwright-core";
+import sharp from "sharp";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { launch, seriousViolations, shot, signInAs } from "./support/browser";
 import { DEMO, DEMO_PASSWORD, call } from "./support/http";
@@ -6,7 +7,8 @@ import { DEMO, DEMO_PASSWORD, call } from "./support/http";
 /*
  * The technician in the bay, on a phone (390 px): opens the work order of the demo shop's booked
  * quote (db/seeds/05_demo_shop.ts Q-1003, booked by db/seeds/06_demo_bookings.ts), starts it,
- * signs every step with figures typed as a technician would, and marks it done.
+ * signs every step with figures typed as a technician would, and marks it done. On the way a photo
+ * of the left front's lug nuts goes on that step, is opened full size, and stays once signed.
  */
 const PAID_QUOTE = "d0000000-0000-4000-8000-000000000003";
 
@@ -83,6 +85,27 @@ describe("work order in the bay", () => {
     expect(await seriousViolations(page), "work order in the bay").toEqual([]);
     await shot(page, "work-order-phone");
 
+    // A photo of the left front's lug nuts, picked as from the phone's pictures, before the step is signed.
+    const torque = page
+      .getByRole("listitem")
+      .filter({ has: page.getByRole("heading", { name: "Lug nuts torqued" }) })
+      .first();
+    const jpeg = await sharp({ create: { width: 640, height: 480, channels: 3, background: "#5a4632" } })
+      .jpeg()
+      .toBuffer();
+    await torque.getByLabel("Add photos").setInputFiles({ name: "lf-lugs.jpg", mimeType: "image/jpeg", buffer: jpeg });
+    await torque.getByText("lf-lugs.jpg added.").waitFor();
+    const thumbs = page.getByRole("list", { name: "Photos of LF lug nuts torqued" });
+    await thumbs.getByRole("img", { name: "Thumbnail: lf-lugs.jpg" }).waitFor();
+    expect(await thumbs.getByRole("button", { name: "Remove photo lf-lugs.jpg" }).count()).toBe(1);
+    await thumbs.getByRole("button", { name: "Open photo lf-lugs.jpg full size" }).click();
+    const viewer = page.getByRole("dialog", { name: "Photo of LF lug nuts torqued: lf-lugs.jpg" });
+    await viewer.getByTestId("photo-full").waitFor();
+    expect(await viewer.getByTestId("photo-full").evaluate((img) => (img as HTMLImageElement).naturalWidth)).toBe(640);
+    await shot(page, "work-order-photo-phone");
+    await page.keyboard.press("Escape");
+    await viewer.waitFor({ state: "detached" });
+
     // Each signed step replaces its form with the signature, so the first form left is always the next one.
     for (let guard = 0; guard < 40; guard++) {
       const form = page.locator('form[aria-label^="Sign off"]').first();
@@ -94,6 +117,9 @@ describe("work order in the bay", () => {
       expect(await page.getByTestId(`${position}-${step}-signed`).textContent()).toContain("Signed by Teo Marrow");
     }
     expect(await page.locator('form[aria-label^="Sign off"]').count()).toBe(0);
+    // Signed off, the photo stays with the step; staff can no longer remove it (only the owner can).
+    await thumbs.getByRole("img", { name: "Thumbnail: lf-lugs.jpg" }).waitFor();
+    expect(await thumbs.getByRole("button", { name: "Remove photo lf-lugs.jpg" }).count()).toBe(0);
     await page.getByRole("button", { name: "Mark the work order done" }).click();
     await page.getByText("Done", { exact: true }).waitFor();
     await shot(page, "work-order-done-phone");

@@ -1,8 +1,8 @@
 import sharp from "sharp";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import { setPhotoStore } from "@/lib/garage/photos/s3";
 import { closeDatabases, rebuild, testDb } from "./support/db";
 import { SETUP, VEHICLE as STOCK_VEHICLE } from "./support/garageFixture";
+import { withStoreFailingHalfway } from "./support/photoObjects";
 import { startTestPhotoStore, type TestPhotoStore } from "./support/photoStore";
 import { ctx, req } from "./support/requests";
 
@@ -283,24 +283,14 @@ describe("photo uploads", () => {
   });
 
   it("leaves nothing behind when the store fails halfway", async () => {
-    let puts = 0;
-    setPhotoStore({
-      ...photos.store,
-      async put(key, body, type) {
-        if (++puts === 2) throw new Error("store went away");
-        return photos.store.put(key, body, type);
-      },
-    });
-    try {
+    await withStoreFailingHalfway(photos, async () => {
       as("ada");
       const res = await upload(adaVehicle, await pngWithGps(), "half.jpg");
       expect(res.status).toBe(503);
       expect((await res.json()).error).toMatch(/nothing was saved/);
       expect(await db("vehicle_photos").count()).toEqual([{ count: "1" }]);
       expect(await photos.objectKeys()).toHaveLength(2);
-    } finally {
-      setPhotoStore(photos.store);
-    }
+    });
   });
 
   it("deleting a clearance point deletes its photos' objects; deleting a vehicle deletes all of them", async () => {

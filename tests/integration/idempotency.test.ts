@@ -1,11 +1,10 @@
 import { createHash } from "node:crypto";
-import { readdirSync, utimesSync } from "node:fs";
-import { join } from "node:path";
 import sharp from "sharp";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { closeDatabases, rebuild, testDb } from "./support/db";
 import { VEHICLE } from "./support/garageFixture";
 import { drainQueue, startTestBoss, stopBoss } from "./support/jobs";
+import { ageObject } from "./support/photoObjects";
 import { startTestPhotoStore, type TestPhotoStore } from "./support/photoStore";
 import { ctx, req } from "./support/requests";
 
@@ -146,16 +145,6 @@ async function multipart(bytes: Buffer, name: string): Promise<{ body: Buffer; t
   return { body: Buffer.from(await r.arrayBuffer()), type: r.headers.get("content-type")! };
 }
 
-/** Backdates an object in the fake store (its LastModified is the file's mtime). */
-function age(key: string, minutes: number) {
-  const parts = key.split("/");
-  const folder = join(photos.dir, photos.bucket, ...parts.slice(0, -1));
-  const file = readdirSync(folder).find((f) => f === `${parts.at(-1)}._S3rver_object`);
-  if (!file) throw new Error(`no stored object for ${key}`);
-  const t = new Date(Date.now() - minutes * 60_000);
-  utimesSync(join(folder, file), t, t);
-}
-
 describe("photo uploads", () => {
   let vehicleId: string;
   let keptKeys: string[] = [];
@@ -186,8 +175,8 @@ describe("photo uploads", () => {
     const freshOrphan = `vehicles/${vehicleId}/e1000000-0000-4000-8000-0000000000b2.jpg`;
     await photos.store.put(oldOrphan, image, "image/jpeg");
     await photos.store.put(freshOrphan, image, "image/jpeg");
-    age(oldOrphan, 120);
-    for (const k of keptKeys) age(k, 120); // old, but the photo's row points to them
+    ageObject(photos, oldOrphan, 120);
+    for (const k of keptKeys) ageObject(photos, k, 120); // old, but the photo's row points to them
     await (await getBoss()).send(QUEUES.photoSweep.name, {});
     const run = await drainQueue(QUEUES.photoSweep.name);
     expect(run.failed).toEqual([]);

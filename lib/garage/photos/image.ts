@@ -4,8 +4,9 @@
  * upright by its orientation tag first, and a thumbnail made.
  */
 import sharp, { type Metadata, type Sharp } from "sharp";
+import { MAX_PHOTO_BYTES } from "./limits";
 
-export const MAX_PHOTO_BYTES = 10 * 1024 * 1024;
+export { MAX_PHOTO_BYTES };
 export const THUMB_SIZE_PX = 360;
 export type PhotoType = "image/jpeg" | "image/png" | "image/webp";
 const EXT: Record<PhotoType, string> = { "image/jpeg": "jpg", "image/png": "png", "image/webp": "webp" };

@@ -413,6 +413,25 @@ export interface WorkOrderStepRow {
   signed_at: Date;
 }
 
+/** A photo of one step of a work order; its image and thumbnail are objects in the photo store. */
+export interface WorkOrderStepPhotoRow {
+  id: string;
+  work_order_id: string;
+  shop_id: string;
+  position: StepPosition;
+  step: string;
+  object_key: string;
+  thumb_key: string;
+  content_type: "image/jpeg" | "image/png" | "image/webp";
+  width: number;
+  height: number;
+  bytes: number;
+  original_name: string;
+  taken_by_user_id: string | null;
+  taken_by: string;
+  created_at: Date;
+}
+
 /** A bay held by a booking; `during` is a tstzrange, read through lower()/upper() as starts_at/ends_at. */
 /** The table's row as stored; the booking queries read it through joins. @public */
 export interface BayReservationRow {

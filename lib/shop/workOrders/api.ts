@@ -2,7 +2,7 @@
  * What the work order routes answer (camelCase, ISO instants) and the row → API mappers, shared
  * by server and browser.
  */
-import type { StepPosition, WorkOrderRow, WorkOrderStatus, WorkOrderStepRow } from "@/lib/platform/db/types";
+import type { StepPosition, WorkOrderRow, WorkOrderStatus, WorkOrderStepPhotoRow, WorkOrderStepRow } from "@/lib/platform/db/types";
 import type { QuotePressure } from "@/lib/shop/customers/counterPlacard";
 import { type TirePressureLimits, tirePressureLimits, withPressureToSet } from "./pressureLimit";
 import { type StepKind, positionsFor, stepsFor } from "./vocabulary";
@@ -17,6 +17,40 @@ export interface SignedOff {
   signedBy: string;
   signedAt: string;
 }
+
+/** A photo of one step of the sheet; the URLs answer the shop's staff only. */
+export interface StepPhoto {
+  id: string;
+  position: StepPosition;
+  step: StepKind;
+  name: string;
+  contentType: string;
+  width: number;
+  height: number;
+  bytes: number;
+  takenBy: string;
+  createdAt: string;
+  url: string;
+  thumbUrl: string;
+}
+
+export const stepPhotoDto = (r: WorkOrderStepPhotoRow): StepPhoto => {
+  const url = `/api/shop/work-orders/${r.work_order_id}/photos/${r.id}`;
+  return {
+    id: r.id,
+    position: r.position,
+    step: r.step as StepKind,
+    name: r.original_name,
+    contentType: r.content_type,
+    width: r.width,
+    height: r.height,
+    bytes: r.bytes,
+    takenBy: r.taken_by,
+    createdAt: new Date(r.created_at).toISOString(),
+    url,
+    thumbUrl: `${url}?variant=thumb`,
+  };
+};
 
 export interface WorkOrder {
   id: string;
@@ -43,6 +77,8 @@ export interface WorkOrder {
   /** The quoted tire's highest pressure and road minimum, when its size says them (pressureLimit.ts). */
   pressureLimits: TirePressureLimits | null;
   steps: SignedOff[];
+  /** Every step's photos, oldest first (photoQueries.ts). */
+  photos: StepPhoto[];
 }
 
 export const signedOffDto = (r: WorkOrderStepRow): SignedOff => ({
@@ -65,6 +101,7 @@ export function workOrderDto(
   },
   steps: WorkOrderStepRow[],
   bookedFor: string | null,
+  photos: WorkOrderStepPhotoRow[],
 ): WorkOrder {
   return {
     id: r.id,
@@ -89,6 +126,7 @@ export function workOrderDto(
     bookedFor,
     pressureLimits: withPressureToSet(tirePressureLimits(quote.plannedTire), quote.pressure ?? null),
     steps: steps.map(signedOffDto),
+    photos: photos.map(stepPhotoDto),
   };
 }
 

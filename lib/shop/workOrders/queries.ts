@@ -14,6 +14,7 @@ import { queueMailIn } from "@/lib/platform/mail/transactional";
 import { hashToken, randomToken } from "@/lib/platform/tokens";
 import { type RecheckDue, type WorkOrder, requiredSteps, unsignedSteps, workOrderDto } from "./api";
 import { queueCompletionMail } from "./completionQueries";
+import { stepPhotoRows } from "./photoQueries";
 import type { FitmentSummary } from "@/lib/shop/quotes/fitment";
 import { recheckMail } from "./recheckMail";
 import { recheckLinkExpiry, recheckUrl } from "./recheckLink";
@@ -121,6 +122,7 @@ export async function getWorkOrder(db: Db, shopId: string, id: string): Promise<
     },
     steps,
     bookedFor,
+    await stepPhotoRows(db, id),
   );
 }
 

@@ -34,6 +34,28 @@ export const cases: MatrixCase[] = [
     expect: only([...SHOP], 404),
     note: "no such work order",
   },
+  // Step photos: the shop's staff only; another shop's (or no) work order is not found, never 403.
+  {
+    route: "/api/shop/work-orders/[id]/photos",
+    method: "GET",
+    path: `/api/shop/work-orders/${UNKNOWN}/photos`,
+    expect: only([...SHOP], 404),
+  },
+  {
+    route: "/api/shop/work-orders/[id]/photos",
+    method: "POST",
+    path: `/api/shop/work-orders/${UNKNOWN}/photos`,
+    body: { file: "not multipart" },
+    expect: only([...SHOP], 415),
+    note: "JSON instead of multipart: refused before any lookup",
+  },
+  ...(["GET", "DELETE"] as const).map((method) => ({
+    route: "/api/shop/work-orders/[id]/photos/[photoId]",
+    method,
+    path: `/api/shop/work-orders/${UNKNOWN}/photos/${UNKNOWN}`,
+    expect: only([...SHOP], 404),
+    note: "no such work order or photo",
+  })),
   { route: "/api/shop/rechecks", method: "GET", path: "/api/shop/rechecks", expect: only([...SHOP]) },
   {
     route: "/api/shop/rechecks",

@@ -4,35 +4,11 @@ import Image from "next/image";
 import { useId, useRef, useState } from "react";
 import { Button } from "@/components/ui/Button";
 import { cx } from "@/components/ui/cx";
-import { api, newIdempotencyKey } from "@/lib/platform/client/api";
+import { api } from "@/lib/platform/client/api";
+import { PHOTO_ACCEPT, PHOTO_HINT, MAX_PHOTO_BYTES, photoTooBigFor } from "@/lib/garage/photos/limits";
+import { sendPhoto } from "@/lib/garage/photos/sendPhoto";
 import { queryKeys } from "@/lib/platform/query/keys";
 import type { VehiclePhoto } from "@/lib/garage/types";
-
-const MAX = 10 * 1024 * 1024;
-const ACCEPT = "image/jpeg,image/png,image/webp";
-
-/** Sends one file with XMLHttpRequest so the upload progress can be shown. */
-function send(url: string, file: File, clearanceId: string | null, onProgress: (pct: number) => void): Promise<VehiclePhoto> {
-  return new Promise((resolve, reject) => {
-    const xhr = new XMLHttpRequest();
-    xhr.open("POST", url);
-    xhr.setRequestHeader("Idempotency-Key", newIdempotencyKey());
-    xhr.responseType = "json";
-    xhr.upload.onprogress = (e) => {
-      if (e.lengthComputable) onProgress(Math.round((e.loaded / e.total) * 100));
-    };
-    xhr.onload = () => {
-      const body = (xhr.response ?? {}) as { photo?: VehiclePhoto; error?: string };
-      if (xhr.status === 201 && body.photo) resolve(body.photo);
-      else reject(new Error(body.error ?? `The upload failed (${xhr.status}).`));
-    };
-    xhr.onerror = () => reject(new Error("The upload did not reach Hubface. Check your connection and try again."));
-    const form = new FormData();
-    form.set("file", file);
-    if (clearanceId) form.set("clearanceId", clearanceId);
-    xhr.send(form);
-  });
-}
 
 /** Drag-and-drop (or pick) photos for a vehicle or one of its clearance points. */
 export function PhotoDrop({
@@ -56,13 +32,15 @@ export function PhotoDrop({
   async function upload(files: FileList | File[]) {
     for (const file of Array.from(files)) {
       setMessage(null);
-      if (file.size > MAX) {
-        setMessage({ tone: "error", text: `${file.name} is larger than 10 MB. Resize it or pick a smaller one.` });
+      if (file.size > MAX_PHOTO_BYTES) {
+        setMessage({ tone: "error", text: photoTooBigFor(file.name) });
         continue;
       }
       setProgress({ name: file.name, pct: 0 });
       try {
-        await send(`/api/vehicles/${vehicleId}/photos`, file, clearanceId, (pct) => setProgress({ name: file.name, pct }));
+        await sendPhoto<VehiclePhoto>(`/api/vehicles/${vehicleId}/photos`, file, { clearanceId }, (pct) =>
+          setProgress({ name: file.name, pct }),
+        );
         setMessage({ tone: "ok", text: `${file.name} uploaded.` });
         await qc.invalidateQueries({ queryKey: queryKeys.garage.vehicle(vehicleId) });
       } catch (e) {
@@ -140,14 +118,14 @@ export function PhotoDrop({
           ref={input}
           id={inputId}
           type="file"
-          accept={ACCEPT}
+          accept={PHOTO_ACCEPT}
           className="sr-only"
           onChange={(e) => {
             if (e.target.files) void upload(e.target.files);
             e.target.value = "";
           }}
         />
-        <p className="text-xs text-basalt-500">JPEG, PNG or WebP, up to 10 MB. Location data is removed.</p>
+        <p className="text-xs text-basalt-500">{PHOTO_HINT}</p>
         {progress && (
           <div className="w-full max-w-xs">
             <progress

@@ -2,6 +2,7 @@ import { z } from "zod";
 import { NotFoundError } from "@/lib/platform/errors";
 import { route } from "@/lib/platform/http/route";
 import { photoStore } from "@/lib/garage/photos/s3";
+import { photoResponse } from "@/lib/garage/photos/serve";
 import { garageQueries } from "@/lib/garage/queries";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
 
@@ -14,17 +15,9 @@ const query = z.object({ variant: z.enum(["full", "thumb"]).default("full") });
  */
 export const GET = route({ access: GARAGE_ACCESS, params, query }, async ({ caller, params, query }) => {
   const photo = await garageQueries.findVisiblePhoto(caller, params.id);
-  if (!photo) throw new NotFoundError("That photo");
-  const obj = await photoStore().get(query.variant === "thumb" ? photo.thumb_key : photo.object_key);
-  if (!obj) throw new NotFoundError("That photo");
-  return new Response(Buffer.from(obj.body), {
-    headers: {
-      "Content-Type": query.variant === "thumb" ? "image/webp" : photo.content_type,
-      "Cache-Control": "private, max-age=300",
-      "X-Content-Type-Options": "nosniff",
-      "Content-Disposition": "inline",
-    },
-  });
+  const res = photo && (await photoResponse(photoStore(), photo, query.variant));
+  if (!res) throw new NotFoundError("That photo");
+  return res;
 });
 
 export const DELETE = route({ access: GARAGE_ACCESS, params }, async ({ caller, params }) => {

@@ -5,7 +5,8 @@ import { Alert } from "@/components/ui/Alert";
 import { Badge } from "@/components/ui/Badge";
 import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
-import { type WorkOrder, unsignedSteps } from "@/lib/shop/workOrders/api";
+import type { Role } from "@/lib/platform/db/types";
+import { type StepPhoto, type WorkOrder, unsignedSteps } from "@/lib/shop/workOrders/api";
 import {
   BEAD_SEAT_CAUTION,
   POSITION_LABEL,
@@ -23,8 +24,10 @@ import { StepCard } from "./StepCard";
  * then the vehicle's. One column on a phone; on paper every step prints with its sign-off (or a
  * blank line to sign by hand), without the forms.
  */
-export function WorkOrderSheet({ initial }: { initial: WorkOrder }) {
+export function WorkOrderSheet({ initial, role }: { initial: WorkOrder; role: Role }) {
   const [w, setW] = useState(initial);
+  const photoAdded = (p: StepPhoto) => setW((cur) => ({ ...cur, photos: [...cur.photos, p] }));
+  const photoRemoved = (id: string) => setW((cur) => ({ ...cur, photos: cur.photos.filter((p) => p.id !== id) }));
   const open = unsignedSteps(w).length;
   const sections = [...positionsFor(w.spare), "vehicle" as const].filter((p) => stepsFor(p, w).length);
   return (
@@ -83,7 +86,10 @@ export function WorkOrderSheet({ initial }: { initial: WorkOrder }) {
                 position={position}
                 step={step}
                 signed={w.steps.find((s) => s.position === position && s.step === step) ?? null}
+                role={role}
                 onSigned={setW}
+                onPhotoAdded={photoAdded}
+                onPhotoRemoved={photoRemoved}
               />
             ))}
           </ol>

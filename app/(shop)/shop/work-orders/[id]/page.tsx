@@ -14,5 +14,5 @@ export default async function WorkOrderPage({ params }: { params: Promise<{ id: 
   const caller = await requirePageCaller(`/shop/work-orders/${id}`, ["shop_staff", "shop_owner"]);
   if (!/^[0-9a-f-]{36}$/i.test(id)) notFound();
   const workOrder = await pageGuard(workOrderQueries.getWorkOrder(shopIdOf(caller), id));
-  return <WorkOrderSheet initial={workOrder} />;
+  return <WorkOrderSheet initial={workOrder} role={caller.role} />;
 }
