@@ -5,7 +5,7 @@ import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
 import { ApiError, api } from "@/lib/platform/client/api";
 import type { SlotsAnswer } from "@/lib/shop/bookings/api";
-import { BAY_KIND_LABEL, START_FIELD_LABEL } from "@/lib/shop/bookings/vocabulary";
+import { BAY_KIND_LABEL, START_FIELD_LABELS } from "@/lib/shop/bookings/vocabulary";
 import { addDays, formatDuration } from "@/lib/shop/bookings/zoned";
 import { queryKeys } from "@/lib/platform/query/keys";
 
@@ -21,7 +21,7 @@ interface Props {
 }
 
 /**
- * The free install starts, a week at a time on the shop's clock, as one radio group; the chosen
+ * The free starts of a booking's work (an install, or the re-check), a week at a time on the shop's clock, as one radio group; the chosen
  * start goes to `onPick`. The server checks it again (and PostgreSQL last), so a start taken in
  * the meantime comes back as a message beside the group and the list reloads.
  */
@@ -36,9 +36,11 @@ export function SlotPicker({ slotsUrl, actionLabel, onPick, idPrefix }: Props) {
     placeholderData: keepPreviousData,
   });
   const errorId = `${idPrefix}-start-error`;
+  // The field is named after what is booked (an install, or the re-check), as the server's messages name it.
+  const fieldLabel = START_FIELD_LABELS[slots.data?.kind ?? "install"];
   const submit = async () => {
     if (!chosen) {
-      setError(`${START_FIELD_LABEL}: pick one of the offered times.`);
+      setError(`${fieldLabel}: pick one of the offered times.`);
       return;
     }
     setError(null);
@@ -72,7 +74,7 @@ export function SlotPicker({ slotsUrl, actionLabel, onPick, idPrefix }: Props) {
         . Times are on the shop&apos;s clock ({data.timeZone}).
       </p>
       <fieldset aria-describedby={errorId} aria-invalid={error ? true : undefined} className="flex flex-col gap-3">
-        <legend className="text-sm font-medium text-basalt-800">{START_FIELD_LABEL}</legend>
+        <legend className="text-sm font-medium text-basalt-800">{fieldLabel}</legend>
         {!open && <p className="text-sm text-basalt-600">No free time in these days: try later days.</p>}
         {data.days.map((d) => (
           <div key={d.date} data-testid="slot-day">

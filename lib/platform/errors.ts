@@ -53,12 +53,27 @@ export class NotFoundError extends DomainError {
 
 /**
  * The record is in a state that does not allow this (a quote already sent, an import already
- * confirmed, a duplicate of an existing record).
+ * confirmed, a duplicate of an existing record). `fieldErrors` put the message beside the field
+ * it concerns when there is one (a booking time another booking took a moment ago).
  *
  * @example
  * throw new ConflictError("Only a draft can be edited. Take the quote back to draft first.");
+ * throw ConflictError.onField("start", "Install time: that time is already taken."); // fieldErrors: { start: [that message] }
  */
-export class ConflictError extends DomainError {}
+export class ConflictError extends DomainError {
+  constructor(
+    message: string,
+    details?: Record<string, unknown>,
+    public readonly fieldErrors?: FieldErrors,
+  ) {
+    super(message, details);
+  }
+
+  /** A conflict about one field: the message is also that field's error. */
+  static onField(field: string, message: string): ConflictError {
+    return new ConflictError(message, undefined, { [field]: [message] });
+  }
+}
 
 /**
  * The input breaks a rule the schema could not check (the vehicle is someone else's, the wheel

@@ -54,6 +54,14 @@ describe("route() answers domain errors", () => {
     });
   });
 
+  it("ConflictError about a field: 409 with the message beside that field too (a booking time taken a moment ago)", async () => {
+    const taken = "Re-check time: that time is already taken in the shop's bays. Pick another time.";
+    expect(await answer(ConflictError.onField("start", taken))).toEqual({
+      status: 409,
+      body: { error: taken, fieldErrors: { start: [taken] } },
+    });
+  });
+
   it("InvalidError: 422 with field errors, rows counted from 1 as for schema errors", async () => {
     expect(await answer(InvalidError.fields({ vehicleId: ["That vehicle is not in your garage."] }))).toEqual({
       status: 422,

@@ -21,6 +21,7 @@ const calendarRoute = (await import("@/app/api/shop/bookings/route")).GET;
 const quotes = await import("@/app/api/shop/quotes/route");
 const customers = await import("@/app/api/shop/customers/route");
 const { bookInstall, queueDueReminders } = await import("@/lib/shop/bookings/queries");
+const { errorResponse } = await import("@/lib/platform/http/route");
 const { addDays, wallTime, weekdayOf, zonedInstant } = await import("@/lib/shop/bookings/zoned");
 const { db: appDb } = await import("@/lib/platform/db");
 const { QUEUES, getBoss } = await import("@/lib/platform/jobs/boss");
@@ -479,7 +480,12 @@ describe("the last slot, taken twice at once", () => {
       { userId: null, label: "customer" },
     ).then(
       () => 201,
-      (e: { status?: number; fieldErrors?: Record<string, string[]> }) => ({ status: e.status, start: e.fieldErrors?.start?.[0] }),
+      // The query throws a domain error; route() is what answers it over HTTP.
+      async (e: unknown) => {
+        const res = errorResponse(e);
+        const body = (await res.json()) as { fieldErrors?: Record<string, string[]> };
+        return { status: res.status, start: body.fieldErrors?.start?.[0] };
+      },
     );
     await new Promise((r) => setTimeout(r, 300));
     await t0.commit();

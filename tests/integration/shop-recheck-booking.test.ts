@@ -13,7 +13,13 @@ const db = testDb();
 const slotsRoute = await import("@/app/api/recheck/[token]/slots/route");
 const bookRoute = await import("@/app/api/recheck/[token]/booking/route");
 const workOrders = await import("@/app/api/shop/work-orders/route");
-const { calendar, slotsForQuote } = await import("@/lib/shop/bookings/queries");
+const bookingRoute = await import("@/app/api/shop/bookings/[id]/route");
+const bookingSlotsRoute = await import("@/app/api/shop/bookings/[id]/slots/route");
+const recheckSlotRoute = await import("@/app/api/shop/rechecks/slot/route");
+const { bookInstall, calendar, getSetup, saveSetup, slotsForQuote } = await import("@/lib/shop/bookings/queries");
+const { bookRecheck, recheckPageByLink } = await import("@/lib/shop/workOrders/recheckBookingQueries");
+const { baysSetupSchema } = await import("@/lib/shop/bookings/schema");
+const { ConflictError, InvalidError } = await import("@/lib/platform/errors");
 const { queueDueRechecks } = await import("@/lib/shop/workOrders/queries");
 const { db: appDb } = await import("@/lib/platform/db");
 
@@ -24,8 +30,11 @@ interface Mail {
   to: string;
   subject: string;
   text: string;
-  attachments?: { filename: string }[];
+  attachments?: { filename: string; contentType: string; contentBase64: string }[];
 }
+/** The calendar file riding along a mail, as text. */
+const icsOf = (m: Mail) =>
+  Buffer.from(m.attachments?.find((a) => a.filename.endsWith(".ics"))?.contentBase64 ?? "", "base64").toString("utf8");
 const mails = async (to: string) =>
   ((await db.withSchema("pgboss").from("job").where({ name: "mail.send" }).select("data")) as { data: Mail }[])
     .map((r) => r.data)
@@ -104,6 +113,16 @@ describe("the re-check e-mail's booking link", () => {
     );
     const confirmation = booked.find((m) => m.subject.includes("re-check"))!;
     expect(confirmation.attachments?.[0]?.filename).toMatch(/^recheck-Q-\d+\.ics$/);
+    // RFC 5546: a REQUEST carrying the booking's own UID, as an install's confirmation does.
+    expect(icsOf(confirmation)).toContain("METHOD:REQUEST");
+    expect(icsOf(confirmation)).toContain(`UID:booking-${booking.id}@`);
+    // The shop hears of it as of an install booked on the customer's link, in the re-check's words.
+    const number = (await db("quotes").where({ id: quoteId }).first()).number;
+    const notice = (await mails(U.ownerA.email)).filter((m) => m.subject.startsWith(`Booked: re-check for quote Q-${number}, `));
+    expect(notice).toHaveLength(1);
+    expect(notice[0]!.text).toMatch(
+      new RegExp(`^The lug and ring re-check for quote Q-${number} was booked by the customer on their link for `),
+    );
     // The quote's install booking is still the install one; the re-check sits beside it on the calendar.
     const quote = await db("quotes").where({ id: quoteId }).first();
     expect((await slotsForQuote(db, quote)).booking?.kind).toBe("install");
@@ -127,7 +146,9 @@ describe("the re-check e-mail's booking link", () => {
     const before = await written();
     const taken = await postBooking(second.token, start);
     expect(taken.status).toBe(409);
-    expect((await taken.json()).fieldErrors.start[0]).toMatch(/^Install time: /);
+    // The field is the re-check page's "Re-check time", never the install's.
+    const message = (await taken.json()).fieldErrors.start[0];
+    expect(message).toBe("Re-check time: that time is already taken in the shop's bays. Pick another time.");
     const far = await postBooking(second.token, new Date(Date.now() + 20 * 24 * HOUR).toISOString().slice(0, 11) + "16:00:00.000Z");
     expect(far.status).toBe(422);
     expect(await written()).toEqual(before);
@@ -173,3 +194,187 @@ describe("the re-check e-mail's booking link", () => {
 function addDaysIso(date: string, days: number): string {
   return new Date(Date.parse(`${date}T00:00:00Z`) + days * 24 * HOUR).toISOString().slice(0, 10);
 }
+
+const asStaff = () => void (session.current = sessionOf(U.staffA));
+const moveRoute = (id: string, body: object) => bookingRoute.PUT(req("PUT", `/api/shop/bookings/${id}`, body), ctx({ id }));
+const cancelRoute = (id: string) => bookingRoute.DELETE(req("DELETE", `/api/shop/bookings/${id}`), ctx({ id }));
+const moveSlots = (id: string, query = "?days=7") =>
+  bookingSlotsRoute.GET(req("GET", `/api/shop/bookings/${id}/slots${query}`), ctx({ id }));
+const startsOf = (a: { days: { slots: { start: string }[] }[] }) => a.days.flatMap((d) => d.slots).map((s) => s.start);
+
+/** A re-check booked on its link at the first free start, with the quote's number. */
+async function bookedRecheck() {
+  const m = await mailedRecheck();
+  const start = await firstStart(m.token);
+  const { booking } = await (await postBooking(m.token, start)).json();
+  const number = (await db("quotes").where({ id: m.quoteId }).first()).number as number;
+  return { ...m, start, booking, number };
+}
+
+describe("the counter moves and cancels a re-check as it does an install", () => {
+  it("lists the re-check's own free starts and moves it: checked again, the same calendar entry raised, customer and shop told", async () => {
+    const a = await bookedRecheck();
+    const b = await bookedRecheck();
+    asStaff();
+    const listed = await moveSlots(a.booking.id);
+    expect(listed.status).toBe(200);
+    const slots = await listed.json();
+    expect(slots).toMatchObject({
+      kind: "recheck",
+      minutes: 30,
+      segments: [{ bayKind: "lift_bay", minutes: 30 }],
+      booking: { id: a.booking.id },
+    });
+    // Its own time counts as free for the move; the other re-check's does not (one lift in shop A).
+    expect(startsOf(slots)).toContain(a.start);
+    expect(startsOf(slots)).not.toContain(b.start);
+
+    const before = await written();
+    const taken = await moveRoute(a.booking.id, { start: b.start });
+    expect(taken.status).toBe(409);
+    expect((await taken.json()).fieldErrors.start).toEqual([
+      "Re-check time: that time is already taken in the shop's bays. Pick another time.",
+    ]);
+    const bad = await moveRoute(a.booking.id, { start: "tomorrow" });
+    expect(bad.status).toBe(422);
+    expect((await bad.json()).fieldErrors.start).toEqual(["Re-check time: pick one of the offered times."]);
+    expect(await written()).toEqual(before);
+
+    const to = startsOf(slots).find((s) => s > b.start)!;
+    const moved = await moveRoute(a.booking.id, { start: to });
+    expect(moved.status).toBe(200);
+    const { booking } = await moved.json();
+    expect(booking).toMatchObject({ id: a.booking.id, kind: "recheck", status: "booked", startsAt: to, sequence: 1 });
+    expect(new Date(booking.endsAt).getTime() - new Date(to).getTime()).toBe(30 * 60_000);
+    const mail = (await mails(a.email)).find((m) => m.subject.startsWith("Moved: your lug and ring re-check at Shop A is now"))!;
+    expect(icsOf(mail)).toContain(`UID:booking-${a.booking.id}@`);
+    expect(icsOf(mail)).toContain("SEQUENCE:1");
+    const notices = (await mails(U.ownerA.email)).filter((m) => m.subject.startsWith(`Moved: re-check for quote Q-${a.number}, now `));
+    expect(notices).toHaveLength(1);
+    expect(notices[0]!.text).toContain("was moved by Sam Staff from ");
+  });
+
+  it("cancels it: the bay time freed, METHOD:CANCEL to the customer, the shop told, the link open to book again; twice is a 409", async () => {
+    const a = await bookedRecheck();
+    asStaff();
+    const r = await cancelRoute(a.booking.id);
+    expect(r.status).toBe(200);
+    expect((await r.json()).booking).toMatchObject({ id: a.booking.id, kind: "recheck", status: "cancelled", sequence: 1 });
+    expect(Number((await db("bay_reservations").where({ booking_id: a.booking.id }).count({ n: "*" }))[0]!.n)).toBe(0);
+    const mail = (await mails(a.email)).find((m) => m.subject.startsWith("Cancelled: your lug and ring re-check at Shop A"))!;
+    expect(icsOf(mail)).toContain("METHOD:CANCEL");
+    expect(icsOf(mail)).toContain("STATUS:CANCELLED");
+    expect((await mails(U.ownerA.email)).filter((m) => m.subject.startsWith(`Cancelled: re-check for quote Q-${a.number}, `))).toHaveLength(
+      1,
+    );
+    expect((await (await getSlots(a.token)).json()).booking).toBeNull();
+
+    const before = await written();
+    const again = await cancelRoute(a.booking.id);
+    expect(again.status).toBe(409);
+    expect((await again.json()).error).toBe("This booking is cancelled: there is nothing to move or cancel.");
+    expect((await moveRoute(a.booking.id, { start: a.start })).status).toBe(409);
+    expect(await written()).toEqual(before);
+  });
+
+  it("moves an install through the same booking route (the calendar's drag), in the install's words", async () => {
+    asStaff();
+    const { quoteId, email } = await bookedInstallOfShopA(db, "Drag Customer");
+    const install = await db("bookings").where({ quote_id: quoteId, kind: "install", status: "booked" }).first();
+    const slots = await (await moveSlots(install.id)).json();
+    expect(slots.kind).toBe("install");
+    const to = startsOf(slots).find((s) => s !== new Date(install.starts_at).toISOString())!;
+    const r = await moveRoute(install.id, { start: to });
+    expect(r.status).toBe(200);
+    expect((await r.json()).booking).toMatchObject({ kind: "install", startsAt: to, sequence: 1 });
+    expect((await mails(email)).some((m) => m.subject.startsWith("Moved: your install at Shop A is now"))).toBe(true);
+  });
+
+  it("another shop's staff find no such booking, and change nothing", async () => {
+    const a = await bookedRecheck();
+    session.current = sessionOf(U.staffB);
+    const before = await written();
+    expect((await moveSlots(a.booking.id)).status).toBe(404);
+    expect((await moveRoute(a.booking.id, { start: a.start })).status).toBe(404);
+    expect((await cancelRoute(a.booking.id)).status).toBe(404);
+    expect(await written()).toEqual(before);
+  });
+});
+
+describe("the booking queries throw domain errors; only route() makes HTTP of them", () => {
+  it("a taken start is a ConflictError beside the time field, a start past the horizon an InvalidError, a foreign bay an InvalidError", async () => {
+    const a = await bookedRecheck();
+    const b = await mailedRecheck();
+    const taken = await bookRecheck(db, b.token, { start: a.start }).catch((e: unknown) => e);
+    expect(taken).toBeInstanceOf(ConflictError);
+    expect((taken as InstanceType<typeof ConflictError>).fieldErrors).toEqual({
+      start: ["Re-check time: that time is already taken in the shop's bays. Pick another time."],
+    });
+    const far = await bookRecheck(db, b.token, { start: new Date(Date.now() + 20 * 24 * HOUR).toISOString() }).catch((e: unknown) => e);
+    expect(far).toBeInstanceOf(InvalidError);
+    expect((far as InstanceType<typeof InvalidError>).fieldErrors?.start?.[0]).toMatch(/^Re-check time: bookings open 14 days ahead/);
+
+    const setup = await getSetup(db, SHOP_A);
+    const foreign = await saveSetup(
+      db,
+      SHOP_A,
+      baysSetupSchema.parse({
+        ...setup,
+        bays: [...setup.bays, { id: "0b000000-0000-4000-8000-00000000ffff", name: "Ghost", kind: "lift_bay" }],
+        serviceTimes: setup.serviceTimes.map((s) => ({ ...s, minutes: String(s.minutes) })),
+      }),
+    ).catch((e: unknown) => e);
+    expect(foreign).toBeInstanceOf(InvalidError);
+    expect((foreign as InstanceType<typeof InvalidError>).fieldErrors).toEqual({
+      "bays.2.id": ["Bay 3: this bay is not one of your shop's bays (any more). Reload the page."],
+    });
+    const twice = await bookInstall(
+      db,
+      { by: "staff", scope: { shopId: SHOP_A }, quoteId: b.quoteId },
+      { start: a.start },
+      { userId: null, label: "t" },
+    ).catch((e: unknown) => e);
+    expect(twice).toBeInstanceOf(ConflictError);
+  });
+});
+
+describe("the shop's re-check length", () => {
+  const setLength = (minutes: unknown) => recheckSlotRoute.PUT(req("PUT", "/api/shop/rechecks/slot", { minutes }), ctx());
+
+  it("refuses a length that is no whole number of minutes from 10 to 120, naming the field as the form labels it; staff cannot set it", async () => {
+    session.current = sessionOf(U.ownerA);
+    const cases: [unknown, string][] = [
+      ["abc", "Re-check slot (minutes): enter a whole number of minutes, e.g. 30."],
+      ["30.5", "Re-check slot (minutes): enter a whole number of minutes, e.g. 30."],
+      ["9", "Re-check slot (minutes): use 10 to 120 minutes."],
+      [121, "Re-check slot (minutes): use 10 to 120 minutes."],
+    ];
+    for (const [minutes, message] of cases) {
+      const r = await setLength(minutes);
+      expect(r.status, String(minutes)).toBe(422);
+      expect((await r.json()).fieldErrors.minutes).toEqual([message]);
+    }
+    asStaff();
+    expect((await setLength(45)).status).toBe(403);
+    expect((await db("shops").where({ id: SHOP_A }).first("recheck_slot_minutes")).recheck_slot_minutes).toBe(30);
+  });
+
+  it("the owner's length is what the link offers, books and shows", async () => {
+    session.current = sessionOf(U.ownerA);
+    const set = await setLength("45");
+    expect(set.status).toBe(200);
+    expect(await set.json()).toEqual({ minutes: 45 });
+    try {
+      const { token } = await mailedRecheck();
+      expect(await recheckPageByLink(db, token)).toMatchObject({ state: "open", slotMinutes: 45 });
+      const a = await (await getSlots(token, "?days=7")).json();
+      expect(a).toMatchObject({ kind: "recheck", minutes: 45, segments: [{ bayKind: "lift_bay", minutes: 45 }] });
+      const first = a.days.flatMap((d: { slots: { start: string; end: string }[] }) => d.slots)[0];
+      expect(new Date(first.end).getTime() - new Date(first.start).getTime()).toBe(45 * 60_000);
+      const { booking } = await (await postBooking(token, first.start)).json();
+      expect(new Date(booking.endsAt).getTime() - new Date(booking.startsAt).getTime()).toBe(45 * 60_000);
+    } finally {
+      await db("shops").where({ id: SHOP_A }).update({ recheck_slot_minutes: 30 });
+    }
+  });
+});

@@ -58,6 +58,8 @@ export interface ShopSettingsRow extends ShopRow {
   currency: "USD";
   /** Days after a job is done that the customer is asked back for the lug and ring re-check. */
   recheck_after_days: number;
+  /** How long the re-check slot keeps the truck on a lift, 10–120 minutes (default 30). */
+  recheck_slot_minutes: number;
   /** Where the shop's notices go; "" for its owners' addresses. */
   notice_email: string;
   updated_at: Date;

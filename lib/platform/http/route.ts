@@ -196,7 +196,7 @@ export function errorResponse(error: unknown): Response {
   }
   const status = error instanceof DomainError ? domainStatus(error) : null;
   if (error instanceof DomainError && status !== null) {
-    const fieldErrors = error instanceof InvalidError ? error.fieldErrors : undefined;
+    const fieldErrors = error instanceof InvalidError || error instanceof ConflictError ? error.fieldErrors : undefined;
     return json({ ...error.details, ...errorBody(error.message, fieldErrors) }, status);
   }
   if (error instanceof FitmentInputError) {

@@ -106,6 +106,8 @@ export interface SlotDayOption {
 
 /** GET …/slots: the job's length and the free starts of the days asked for. */
 export interface SlotsAnswer {
+  /** What the times are for (the picker names its field after it); an install when left out. */
+  kind?: BookingKind;
   timeZone: string;
   /** Today on the shop's clock: no earlier day is listed. */
   today: string;

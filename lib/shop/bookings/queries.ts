@@ -1,9 +1,8 @@
 import "server-only";
 import type { Knex } from "knex";
-import type { BayKind, BayRow, BookingRow, CatalogItemRow, QuoteRow, ServiceTimeRow } from "@/lib/platform/db/types";
+import type { BayKind, BayRow, BookingKind, BookingRow, CatalogItemRow, QuoteRow, ServiceTimeRow } from "@/lib/platform/db/types";
 import { bindAppDb } from "@/lib/platform/db/bind";
-import { HttpError } from "@/lib/platform/http/errors";
-import { NotFoundError } from "@/lib/platform/errors";
+import { ConflictError, InvalidError, NotFoundError } from "@/lib/platform/errors";
 import { appOrigin, mailFrom } from "@/lib/platform/mail";
 import { queueMailIn } from "@/lib/platform/mail/transactional";
 import { type Actor, type QuoteScope, findByToken, getQuote, readLines } from "@/lib/shop/quotes/queries";
@@ -26,7 +25,7 @@ import { queueShopNotice } from "@/lib/shop/notices/noticeQueries";
 import { assertDepositHeld } from "@/lib/shop/payments/depositQueries";
 import { canBook } from "./bookable";
 import { type BookingMailKind, addressOf, bookingMail } from "./mail";
-import { type BaysSetupValues, type BookingRequest, openingHoursOf } from "./schema";
+import { type BaysSetupValues, type BookingRequest, bookingRequestSchemaFor, openingHoursOf } from "./schema";
 import { type BayLite, type Held, type Schedule, type Slot, type SlotProblem, cannotBook, checkStart, freeSlots } from "./slots";
 import {
   BAY_KIND_LABEL,
@@ -34,11 +33,13 @@ import {
   DEFAULT_SLOT_STEP,
   DEFAULT_TIME_ZONE,
   REMINDER_FROM_HOUR,
-  START_FIELD_LABEL,
+  START_FIELD_LABELS,
   defaultServiceTime,
 } from "./vocabulary";
 import { type Workload, workloadOf } from "./workload";
 import { addDays, formatInstant, wallTime, weekdayOf, zonedInstant } from "./zoned";
+import { recheckWork } from "@/lib/shop/workOrders/recheckLink";
+import { recheckSlotMinutes } from "@/lib/shop/workOrders/recheckSlotQueries";
 
 type Db = Knex | Knex.Transaction;
 
@@ -119,8 +120,9 @@ export async function getSetup(db: Knex, shopId: string): Promise<BaysSetup> {
   };
 }
 
+/** A refusal of fields whose first message is the answer's message (as the forms show it above the fields). */
 const invalid = (fieldErrors: Record<string, string[]>) =>
-  new HttpError(422, Object.values(fieldErrors)[0]?.[0] ?? "Some fields need attention.", fieldErrors);
+  new InvalidError(Object.values(fieldErrors)[0]?.[0] ?? "Some fields need attention.", fieldErrors);
 
 /** Bay time held from now on, per bay. */
 async function futureHolds(db: Db, bayIds: string[]): Promise<Map<string, number>> {
@@ -182,8 +184,7 @@ export async function saveSetup(db: Knex, shopId: string, v: BaysSetupValues): P
     const removed = existing.filter((b) => !kept.has(b.id));
     const busy = removed.filter((b) => holds.get(b.id));
     if (busy.length) {
-      throw new HttpError(
-        409,
+      throw new ConflictError(
         `${busy.map((b) => `${b.name} has ${holds.get(b.id)} booking(s) from now on`).join("; ")}: move or cancel them before removing ${busy.length > 1 ? "those bays" : "the bay"}.`,
       );
     }
@@ -323,8 +324,8 @@ async function bookedBays(db: Db, bookingIds: string[]): Promise<Map<string, Boo
   return out;
 }
 
-async function liveBookingRow(db: Db, quoteId: string, lock = false): Promise<BookingRow | undefined> {
-  const q = db<BookingRow>("bookings").where({ quote_id: quoteId, kind: "install", status: "booked" }).first();
+async function liveBookingRow(db: Db, quoteId: string, lock = false, job: BookingKind = "install"): Promise<BookingRow | undefined> {
+  const q = db<BookingRow>("bookings").where({ quote_id: quoteId, kind: job, status: "booked" }).first();
   if (lock) q.forUpdate();
   return (await q) as BookingRow | undefined;
 }
@@ -338,6 +339,19 @@ export async function liveBooking(db: Db, quote: Pick<QuoteRow, "id" | "shop_id"
 }
 
 /**
+ * The job's stretches per kind of bay: the quote's install work from its lines, or the re-check
+ * as one stretch of the shop's re-check length on a lift. Every slot list, booking and move of
+ * either kind reads its length here.
+ */
+export async function workFor(
+  db: Db,
+  quote: Pick<QuoteRow, "id" | "shop_id">,
+  job: BookingKind,
+): Promise<Pick<Workload, "segments" | "minutes">> {
+  return job === "recheck" ? recheckWork(await recheckSlotMinutes(db, quote.shop_id)) : quoteWork(db, quote);
+}
+
+/**
  * The free starts for the quote's work over `days` days from `from` (the shop's dates; never
  * before today), with the job's length and the live booking (whose own bay time counts as free,
  * so the counter can move it to a neighbouring time).
@@ -347,25 +361,25 @@ export async function slotsForQuote(
   quote: Pick<QuoteRow, "id" | "shop_id">,
   opts: { from?: string; days?: number; now?: Date } = {},
 ): Promise<SlotsAnswer> {
-  const [work, live] = await Promise.all([quoteWork(db, quote), liveBookingRow(db, quote.id)]);
-  return slotsForWork(db, quote.shop_id, work, live, opts);
+  return slotsForJob(db, quote, "install", await liveBookingRow(db, quote.id), opts);
 }
 
 /**
- * The free starts for a job of known stretches (a quote's work, or the short re-check) in the
- * shop, with `live` (whose own bay time counts as free) as the booking shown; `horizonDays`
- * caps how far ahead a start may lie.
+ * The free starts for one of the quote's jobs (its install, or the short re-check), with `live`
+ * (whose own bay time counts as free) as the booking shown; `horizonDays` caps how far ahead a
+ * start may lie.
  */
-export async function slotsForWork(
+export async function slotsForJob(
   db: Db,
-  shopId: string,
-  work: Pick<Workload, "segments" | "minutes">,
+  quote: Pick<QuoteRow, "id" | "shop_id">,
+  job: BookingKind,
   live: BookingRow | undefined,
   opts: { from?: string; days?: number; now?: Date },
   horizonDays: number = BOOKING_HORIZON_DAYS,
 ): Promise<SlotsAnswer> {
+  const shopId = quote.shop_id;
   const now = opts.now ?? new Date();
-  const [schedule, bays] = await Promise.all([readSchedule(db, shopId), activeBays(db, shopId)]);
+  const [work, schedule, bays] = await Promise.all([workFor(db, quote, job), readSchedule(db, shopId), activeBays(db, shopId)]);
   const today = wallTime(now, schedule.timeZone).date;
   const from = opts.from && opts.from > today ? opts.from : today;
   const days = opts.days ?? 7;
@@ -376,10 +390,11 @@ export async function slotsForWork(
     zonedInstant(addDays(from, days), 0, schedule.timeZone),
     live?.id,
   );
-  const ctx = { schedule, bays: bays.map(lite), held, segments: work.segments, now, horizonDays };
+  const ctx = { schedule, bays: bays.map(lite), held, segments: work.segments, now, horizonDays, job };
   const cannot = cannotBook(ctx);
   const booked = live ? bookingDto(live, (await bookedBays(db, [live.id])).get(live.id) ?? [], schedule.timeZone) : null;
   return {
+    kind: job,
     timeZone: schedule.timeZone,
     today,
     minutes: work.minutes,
@@ -413,6 +428,26 @@ export async function slotsForStaff(
   return slotsForQuote(db, quote, opts);
 }
 
+/**
+ * The counter's free starts for moving one booking of either kind (the calendar's Move…), its
+ * own bay time counted as free; a booking of a quote outside the caller's scope is not found.
+ */
+export async function slotsForBooking(
+  db: Knex,
+  scope: QuoteScope,
+  bookingId: string,
+  opts: { from?: string; days?: number; now?: Date } = {},
+): Promise<SlotsAnswer> {
+  const found = (await db<BookingRow>("bookings").where({ id: bookingId, shop_id: scope.shopId }).first()) as BookingRow | undefined;
+  if (!found) throw new NotFoundError("That booking");
+  const quote = await getQuote(db, scope, found.quote_id);
+  if (found.kind === "install") {
+    assertBookable(quote, "staff");
+    await assertDepositHeld(db, quote);
+  }
+  return slotsForJob(db, quote, found.kind, found.status === "booked" ? found : undefined, opts);
+}
+
 /* ---------------------------------------------------------------- booking, moving, cancelling */
 
 /** Whose request: the customer's link, or the counter within the caller's quote scope. */
@@ -429,25 +464,25 @@ async function lockQuote(trx: Knex.Transaction, target: BookingTarget): Promise<
 function assertBookable(quote: QuoteRow, by: BookingTarget["by"]): void {
   if (canBook(quote)) return;
   if (quote.status === "accepted") {
-    throw new HttpError(
-      409,
+    throw new ConflictError(
       by === "customer"
         ? "Pay the deposit before booking an install time."
         : "The deposit is not paid yet: book an install time once the customer has paid it.",
     );
   }
-  throw new HttpError(
-    409,
+  throw new ConflictError(
     `A quote that is ${STATUS_LABEL[quote.status].toLowerCase()} cannot be booked: only a quote with its deposit paid can.`,
   );
 }
 
-function refusal(p: SlotProblem): HttpError {
-  return new HttpError(p.code === "taken" ? 409 : 422, p.message, { start: [p.message] });
+/** A start the slot check refused: taken is a conflict (409), every other reason an invalid time (422); both beside the time field. */
+function refusal(p: SlotProblem): ConflictError | InvalidError {
+  return p.code === "taken" ? ConflictError.onField("start", p.message) : new InvalidError(p.message, { start: [p.message] });
 }
 
 const isOverlap = (e: unknown) => (e as { code?: string; constraint?: string }).code === "23P01";
-const TAKEN = `${START_FIELD_LABEL}: that time was taken a moment ago by another booking. Pick another time.`;
+const takenMessage = (job: BookingKind) =>
+  `${START_FIELD_LABELS[job]}: that time was taken a moment ago by another booking. Pick another time.`;
 
 interface Placing {
   quote: QuoteRow;
@@ -455,8 +490,8 @@ interface Placing {
   now: Date;
   /** The booking being moved: its own bay time counts as free. */
   exceptBookingId?: string;
-  /** The job's stretches when it is not the quote's install work (the re-check). */
-  segments?: Workload["segments"];
+  /** What is booked: its work (workFor) and the field its messages name; an install when left out. */
+  job?: BookingKind;
   /** How far ahead a start may lie; the install's horizon when left out. */
   horizonDays?: number;
 }
@@ -469,11 +504,11 @@ interface Placing {
  */
 export async function place<T>(trx: Knex.Transaction, p: Placing, write: (sp: Knex.Transaction, slot: Slot) => Promise<T>): Promise<T> {
   const shopId = p.quote.shop_id;
-  const [schedule, bays, work] = await Promise.all([
-    readSchedule(trx, shopId),
-    activeBays(trx, shopId),
-    p.segments ? { segments: p.segments } : quoteWork(trx, p.quote),
-  ]);
+  const job = p.job ?? "install";
+  // One after another: the transaction is one connection.
+  const schedule = await readSchedule(trx, shopId);
+  const bays = await activeBays(trx, shopId);
+  const work = await workFor(trx, p.quote, job);
   if (p.request.bayId) {
     const pinned = bays.find((b) => b.id === p.request.bayId);
     if (!pinned) throw invalid({ bayId: ["Bay: that is not one of your shop's bays."] });
@@ -497,13 +532,14 @@ export async function place<T>(trx: Knex.Transaction, p: Placing, write: (sp: Kn
       now: p.now,
       horizonDays: p.horizonDays ?? BOOKING_HORIZON_DAYS,
       pinnedBayId: p.request.bayId,
+      job,
     });
     if (!r.ok) throw refusal(r.problem);
     try {
       return await trx.transaction((sp) => write(sp, r.slot));
     } catch (e) {
       if (!isOverlap(e)) throw e;
-      if (attempt >= 3) throw new HttpError(409, TAKEN, { start: [TAKEN] });
+      if (attempt >= 3) throw ConflictError.onField("start", takenMessage(job));
     }
   }
 }
@@ -579,8 +615,7 @@ export async function bookInstall(
     const live = await liveBookingRow(trx, quote.id);
     if (live) {
       const { timeZone } = await readSchedule(trx, quote.shop_id);
-      throw new HttpError(
-        409,
+      throw new ConflictError(
         `This quote is already booked for ${formatInstant(live.starts_at, timeZone)}. ${target.by === "customer" ? "Call the shop to move it." : "Move that booking instead."}`,
       );
     }
@@ -605,21 +640,62 @@ export async function bookInstall(
   });
 }
 
-/** Moves the quote's live booking (counter only): the same calendar entry with its SEQUENCE raised, and the reminder due again. */
-export async function moveInstall(
+/** Which live booking the counter acts on: the quote's install (the quote page), or any booking by its id (the calendar). */
+type LiveTarget = { quoteId: string } | { bookingId: string };
+
+/**
+ * Locks the quote (in the caller's scope: another's booking is not found) and then its live
+ * booking, in that order, as every booking change does; a cancelled or missing booking is a 409.
+ */
+async function lockLive(
+  trx: Knex.Transaction,
+  scope: QuoteScope,
+  target: LiveTarget,
+  noneMessage: string,
+): Promise<{ quote: QuoteRow; live: BookingRow }> {
+  if ("quoteId" in target) {
+    const quote = await lockQuote(trx, { by: "staff", scope, quoteId: target.quoteId });
+    const live = await liveBookingRow(trx, quote.id, true);
+    if (!live) throw new ConflictError(noneMessage);
+    return { quote, live };
+  }
+  const found = (await trx<BookingRow>("bookings").where({ id: target.bookingId, shop_id: scope.shopId }).first("quote_id")) as
+    Pick<BookingRow, "quote_id"> | undefined;
+  if (!found) throw new NotFoundError("That booking");
+  const quote = await getQuote(trx, scope, found.quote_id, true);
+  const live = (await trx<BookingRow>("bookings").where({ id: target.bookingId }).forUpdate().first()) as BookingRow | undefined;
+  if (!live || live.status !== "booked") throw new ConflictError("This booking is cancelled: there is nothing to move or cancel.");
+  return { quote, live };
+}
+
+/** The request checked against the booking's kind, so its messages name the time field as that kind's screens do. */
+function requestFor(job: BookingKind, raw: unknown): BookingRequest {
+  const r = bookingRequestSchemaFor(job).safeParse(raw);
+  if (r.success) return r.data;
+  const fe: Record<string, string[]> = {};
+  for (const issue of r.error.issues) (fe[issue.path.length ? issue.path.join(".") : "start"] ??= []).push(issue.message);
+  throw InvalidError.fields(fe);
+}
+
+/**
+ * Moves a live booking of either kind (counter only): the start checked again against the
+ * shop's rules and the bay time held now (its own counted as free), the same calendar entry with
+ * its SEQUENCE raised e-mailed to the customer, the reminder due again and the shop told.
+ */
+async function moveLive(
   db: Knex,
   scope: QuoteScope,
-  quoteId: string,
-  request: BookingRequest,
+  target: LiveTarget,
+  requestOf: (job: BookingKind) => BookingRequest,
   actor: Actor,
-  now = new Date(),
+  now: Date,
 ): Promise<Booking> {
   return db.transaction(async (trx) => {
-    const quote = await lockQuote(trx, { by: "staff", scope, quoteId });
-    const live = await liveBookingRow(trx, quote.id, true);
-    if (!live) throw new HttpError(409, "This quote has no booking to move: book an install time first.");
-    assertBookable(quote, "staff");
-    const row = await place(trx, { quote, request, now, exceptBookingId: live.id }, async (sp, slot) => {
+    const { quote, live } = await lockLive(trx, scope, target, "This quote has no booking to move: book an install time first.");
+    // An install moves while its quote may be booked; a re-check follows work already done.
+    if (live.kind === "install") assertBookable(quote, "staff");
+    const request = requestOf(live.kind);
+    const row = await place(trx, { quote, request, now, exceptBookingId: live.id, job: live.kind }, async (sp, slot) => {
       await sp("bay_reservations").where({ booking_id: live.id }).delete();
       const [b] = (await sp("bookings")
         .where({ id: live.id })
@@ -637,6 +713,7 @@ export async function moveInstall(
     await mailCustomer(trx, quote, row, "moved", new Date(live.starts_at));
     await queueShopNotice(trx, quote, {
       kind: "moved",
+      job: live.kind,
       start: row.starts_at,
       end: row.ends_at,
       by: actor.label,
@@ -646,12 +723,10 @@ export async function moveInstall(
   });
 }
 
-/** Cancels the quote's live booking (counter only): its bay time is freed and the customer's calendar entry withdrawn. */
-export async function cancelInstall(db: Knex, scope: QuoteScope, quoteId: string, actor: Actor): Promise<Booking> {
+/** Cancels a live booking of either kind (counter only): its bay time freed, the customer's calendar entry withdrawn, the shop told. */
+async function cancelLive(db: Knex, scope: QuoteScope, target: LiveTarget, actor: Actor): Promise<Booking> {
   return db.transaction(async (trx) => {
-    const quote = await lockQuote(trx, { by: "staff", scope, quoteId });
-    const live = await liveBookingRow(trx, quote.id, true);
-    if (!live) throw new HttpError(409, "This quote has no booking to cancel.");
+    const { quote, live } = await lockLive(trx, scope, target, "This quote has no booking to cancel.");
     // The bays it held are listed in the answer before they are freed.
     const held = (await bookedBays(trx, [live.id])).get(live.id) ?? [];
     await trx("bay_reservations").where({ booking_id: live.id }).delete();
@@ -660,10 +735,44 @@ export async function cancelInstall(db: Knex, scope: QuoteScope, quoteId: string
       .update({ status: "cancelled", cancelled_at: trx.fn.now(), sequence: live.sequence + 1, updated_at: trx.fn.now() })
       .returning("*")) as BookingRow[];
     await mailCustomer(trx, quote, row!, "cancelled");
-    await queueShopNotice(trx, quote, { kind: "cancelled", start: row!.starts_at, end: row!.ends_at, by: actor.label });
+    await queueShopNotice(trx, quote, { kind: "cancelled", job: live.kind, start: row!.starts_at, end: row!.ends_at, by: actor.label });
     const { timeZone } = await readSchedule(trx, quote.shop_id);
     return bookingDto(row!, held, timeZone);
   });
+}
+
+/** Moves the quote's live install booking (the quote page): the same calendar entry with its SEQUENCE raised, and the reminder due again. */
+export async function moveInstall(
+  db: Knex,
+  scope: QuoteScope,
+  quoteId: string,
+  request: BookingRequest,
+  actor: Actor,
+  now = new Date(),
+): Promise<Booking> {
+  return moveLive(db, scope, { quoteId }, () => request, actor, now);
+}
+
+/** Cancels the quote's live install booking (the quote page): its bay time is freed and the customer's calendar entry withdrawn. */
+export async function cancelInstall(db: Knex, scope: QuoteScope, quoteId: string, actor: Actor): Promise<Booking> {
+  return cancelLive(db, scope, { quoteId }, actor);
+}
+
+/** Moves a booking of either kind by its id (the calendar's drag and Move…); `raw` is checked against the booking's kind. */
+export async function moveBooking(
+  db: Knex,
+  scope: QuoteScope,
+  bookingId: string,
+  raw: unknown,
+  actor: Actor,
+  now = new Date(),
+): Promise<Booking> {
+  return moveLive(db, scope, { bookingId }, (job) => requestFor(job, raw), actor, now);
+}
+
+/** Cancels a booking of either kind by its id (the calendar). */
+export async function cancelBooking(db: Knex, scope: QuoteScope, bookingId: string, actor: Actor): Promise<Booking> {
+  return cancelLive(db, scope, { bookingId }, actor);
 }
 
 /**
@@ -747,12 +856,15 @@ export async function calendar(db: Knex, shopId: string, opts: { from?: string; 
 export const bookingQueries = bindAppDb({
   bookInstall,
   calendar,
+  cancelBooking,
   cancelInstall,
   getSetup,
   liveBooking,
+  moveBooking,
   moveInstall,
   queueDueReminders,
   saveSetup,
   slotsByToken,
+  slotsForBooking,
   slotsForStaff,
 });

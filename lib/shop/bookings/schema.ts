@@ -3,8 +3,8 @@
  * route handlers. Messages name the field as the screen labels it.
  */
 import { z } from "zod";
-import { BAY_KINDS } from "@/lib/platform/db/types";
-import { BAY_KIND_LABEL, MAX_SLOT_DAYS, SLOT_STEPS, START_FIELD_LABEL, WEEKDAY_LABEL } from "./vocabulary";
+import { BAY_KINDS, type BookingKind } from "@/lib/platform/db/types";
+import { BAY_KIND_LABEL, MAX_SLOT_DAYS, SLOT_STEPS, START_FIELD_LABELS, WEEKDAY_LABEL } from "./vocabulary";
 import { hhmmToMinute, isTimeZone } from "./zoned";
 
 const DATE = /^\d{4}-\d{2}-\d{2}$/;
@@ -121,18 +121,34 @@ export function openingHoursOf(v: BaysSetupValues): { weekday: number; opens: nu
     .map((h) => ({ weekday: h.weekday, opens: hhmmToMinute(h.opens)!, closes: hhmmToMinute(h.closes)! }));
 }
 
-/** A start the customer or the counter picked; `bayId` pins the stretch of that bay's kind (counter only). */
-export const bookingRequestSchema = z.object(
-  {
-    start: z.iso.datetime({ offset: true, error: `${START_FIELD_LABEL}: pick one of the offered times.` }),
-    bayId: z.uuid({ error: "Bay: pick one of the shop's bays, or leave it to the calendar." }).optional(),
-  },
-  { error: `${START_FIELD_LABEL}: pick one of the offered times.` },
-);
+/**
+ * A start the customer or the counter picked for a booking of `job`; `bayId` pins the stretch of
+ * that bay's kind (counter only). The messages name the time field as that job's screens label it.
+ */
+export const bookingRequestSchemaFor = (job: BookingKind) =>
+  z.object(
+    {
+      start: z.iso.datetime({ offset: true, error: `${START_FIELD_LABELS[job]}: pick one of the offered times.` }),
+      bayId: z.uuid({ error: "Bay: pick one of the shop's bays, or leave it to the calendar." }).optional(),
+    },
+    { error: `${START_FIELD_LABELS[job]}: pick one of the offered times.` },
+  );
+
+/** The install's request (the quote's booking routes). */
+export const bookingRequestSchema = bookingRequestSchemaFor("install");
 export type BookingRequest = z.infer<typeof bookingRequestSchema>;
 
 /** The customer's request: no bay choice on the public page. */
 export const publicBookingSchema = bookingRequestSchema.pick({ start: true });
+
+/** The customer's request on the re-check link. */
+export const recheckBookingSchema = bookingRequestSchemaFor("recheck").pick({ start: true });
+
+/**
+ * What a route that acts on a booking of either kind takes before it knows the kind: any JSON
+ * object, checked against bookingRequestSchemaFor(the booking's kind) by the query.
+ */
+export const anyBookingRequestSchema = z.record(z.string(), z.unknown(), { error: "Send the new time as a JSON object." });
 
 /** Which days of free slots to list: from a date in the shop's calendar, up to two weeks. */
 export const slotsQuerySchema = z.object({

@@ -153,6 +153,13 @@ describe("one chosen start", () => {
     }
   });
 
+  it("names the re-check's own field when the re-check is being placed, never the install's", () => {
+    const past = checkStart(at("2027-03-12T11:00:00Z"), ctx({ job: "recheck" }));
+    expect(!past.ok && past.problem.message).toBe("Re-check time: that time has already passed. Pick a time from now on.");
+    const closed = checkStart(at("2027-03-14T16:00:00Z"), ctx({ job: "recheck" }));
+    expect(!closed.ok && closed.problem.message).toBe("Re-check time: the shop is closed on Sundays.");
+  });
+
   it("refuses a start where every bay of the kind is held, and one the shop has no bay for", () => {
     const busy = [
       held("lift-a", "2027-03-15T14:30:00Z", "2027-03-15T15:00:00Z"),

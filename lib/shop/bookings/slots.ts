@@ -7,9 +7,9 @@
  * one bay of its kind, and the whole job within one day's opening hours. Offered starts lie on
  * the shop's step (every 15, 30 or 60 minutes) counted from the opening time.
  */
-import type { BayKind } from "@/lib/platform/db/types";
+import type { BayKind, BookingKind } from "@/lib/platform/db/types";
 import type { Segment } from "./workload";
-import { BAY_KIND_LABEL, START_FIELD_LABEL, WEEKDAY_LABEL } from "./vocabulary";
+import { BAY_KIND_LABEL, START_FIELD_LABELS, WEEKDAY_LABEL } from "./vocabulary";
 import { addDays, formatDay, formatDuration, formatMinute, wallTime, weekdayOf, zonedInstant } from "./zoned";
 
 export interface Schedule {
@@ -58,6 +58,8 @@ export interface SlotContext {
   horizonDays: number;
   /** A bay the staff pinned for the stretch of its kind. */
   pinnedBayId?: string;
+  /** What is being booked, for the field the messages name; an install when left out. */
+  job?: BookingKind;
 }
 
 export type SlotProblemCode =
@@ -102,20 +104,21 @@ function aBay(kind: BayKind): string {
   return `${/^[aeiou]/.test(words) ? "an" : "a"} ${words}`;
 }
 
-const problem = (code: SlotProblemCode, text: string): { ok: false; problem: SlotProblem } => ({
+const problem = (job: BookingKind | undefined, code: SlotProblemCode, text: string): { ok: false; problem: SlotProblem } => ({
   ok: false,
-  problem: { code, message: `${START_FIELD_LABEL}: ${text}` },
+  problem: { code, message: `${START_FIELD_LABELS[job ?? "install"]}: ${text}` },
 });
 
 /**
  * Why this job cannot be booked at any time (no bay work, or a kind of bay the shop lacks), or
  * null when some start may do.
  */
-export function cannotBook(ctx: Pick<SlotContext, "bays" | "segments">): SlotProblem | null {
+export function cannotBook(ctx: Pick<SlotContext, "bays" | "segments" | "job">): SlotProblem | null {
   if (totalOf(ctx.segments) <= 0)
-    return problem("no_work", "this quote has no work that takes bay time, so there is nothing to book.").problem;
+    return problem(ctx.job, "no_work", "this quote has no work that takes bay time, so there is nothing to book.").problem;
   const lacking = missingKinds(ctx);
-  if (lacking.length) return problem("no_bay", `this work needs ${lacking.map(aBay).join(" and ")}, and the shop has none set up.`).problem;
+  if (lacking.length)
+    return problem(ctx.job, "no_bay", `this work needs ${lacking.map(aBay).join(" and ")}, and the shop has none set up.`).problem;
   return null;
 }
 
@@ -132,32 +135,35 @@ export function checkStart(start: Date, ctx: SlotContext): { ok: true; slot: Slo
   const cannot = cannotBook(ctx);
   if (cannot) return { ok: false, problem: cannot };
   const t = start.getTime();
-  if (!Number.isFinite(t) || t <= ctx.now.getTime()) return problem("past", "that time has already passed. Pick a time from now on.");
+  if (!Number.isFinite(t) || t <= ctx.now.getTime())
+    return problem(ctx.job, "past", "that time has already passed. Pick a time from now on.");
   const local = wallTime(start, schedule.timeZone);
   const today = wallTime(ctx.now, schedule.timeZone).date;
   if (local.date > addDays(today, ctx.horizonDays))
     return problem(
+      ctx.job,
       "too_far",
       `bookings open ${ctx.horizonDays} days ahead; pick a day up to ${formatDay(addDays(today, ctx.horizonDays))}.`,
     );
   const closedNote = schedule.closedDays.get(local.date);
   if (closedNote !== undefined)
-    return problem("closed_day", `the shop is closed on ${formatDay(local.date)}${closedNote ? ` (${closedNote})` : ""}.`);
+    return problem(ctx.job, "closed_day", `the shop is closed on ${formatDay(local.date)}${closedNote ? ` (${closedNote})` : ""}.`);
   const hours = schedule.hours[local.weekday];
-  if (!hours) return problem("closed_weekday", `the shop is closed on ${WEEKDAY_LABEL[local.weekday]}s.`);
+  if (!hours) return problem(ctx.job, "closed_weekday", `the shop is closed on ${WEEKDAY_LABEL[local.weekday]}s.`);
   const opens = zonedInstant(local.date, hours.opens, schedule.timeZone).getTime();
   const closes = zonedInstant(local.date, hours.closes, schedule.timeZone).getTime();
   const end = t + minutes * MINUTE;
   if (t < opens || end > closes) {
     return problem(
+      ctx.job,
       "outside_hours",
       `on ${WEEKDAY_LABEL[local.weekday]}s the shop works ${formatMinute(hours.opens)} to ${formatMinute(hours.closes)}, and this work takes ${formatDuration(minutes)}: pick a start that ends by closing time.`,
     );
   }
   if ((t - opens) % (schedule.stepMinutes * MINUTE) !== 0)
-    return problem("off_step", `pick one of the offered times (every ${schedule.stepMinutes} minutes from opening).`);
+    return problem(ctx.job, "off_step", `pick one of the offered times (every ${schedule.stepMinutes} minutes from opening).`);
   const placements = placeAt(t, ctx);
-  if (!placements) return problem("taken", "that time is already taken in the shop's bays. Pick another time.");
+  if (!placements) return problem(ctx.job, "taken", "that time is already taken in the shop's bays. Pick another time.");
   return { ok: true, slot: { start: new Date(t), end: new Date(end), placements } };
 }
 

@@ -2,7 +2,7 @@
  * The words and defaults of install bookings, said once: forms, pages, e-mails, the calendar
  * and the server's messages all read them from here. Plain data, safe for the browser.
  */
-import { BAY_KINDS, type BayKind, type BookingStatus, type ServiceType, type ServiceUnit } from "@/lib/platform/db/types";
+import { BAY_KINDS, type BayKind, type BookingKind, type BookingStatus, type ServiceType, type ServiceUnit } from "@/lib/platform/db/types";
 
 export { BAY_KINDS };
 
@@ -76,8 +76,16 @@ export function defaultServiceTime(type: ServiceType | null, unit: ServiceUnit |
 /** Hourly labour written on a quote by hand (no catalog item): the hours quoted, on a lift. */
 export const HAND_WRITTEN_HOURS_BAY: BayKind = "lift_bay";
 
-/** How the field that carries the chosen time reads on the screens, for messages that name it. */
-export const START_FIELD_LABEL = "Install time";
+/**
+ * How the field that carries the chosen time reads on the screens, per kind of booking: the
+ * slot picker's legend and every message about the chosen time (schema, slot check, the race
+ * lost) read it from here, so the re-check page never speaks of an install.
+ */
+export const START_FIELD_LABELS: Record<BookingKind, string> = { install: "Install time", recheck: "Re-check time" };
+export const START_FIELD_LABEL = START_FIELD_LABELS.install;
+
+/** What a booking is for, as the staff calendar names it. */
+export const BOOKING_KIND_LABEL: Record<BookingKind, string> = { install: "Install", recheck: "Lug and ring re-check" };
 
 /** The day-before reminder goes out from this hour on the shop's clock (not at midnight). */
 export const REMINDER_FROM_HOUR = 9;

@@ -52,4 +52,17 @@ describe("shopNoticeMail", () => {
     expect(cancelled.subject).toMatch(/^Cancelled: quote Q-1042, Tue, Dec 15/);
     expect(cancelled.text).toContain("was cancelled by Sam Staff.");
   });
+
+  it("a re-check's notices speak of the re-check, never of an install", () => {
+    const start = new Date("2026-12-15T16:00:00Z");
+    const end = new Date("2026-12-15T16:30:00Z");
+    const booked = shopNoticeMail({ ...base, event: { kind: "booked", job: "recheck", start, end, by: "customer" } });
+    expect(booked.subject).toBe("Booked: re-check for quote Q-1042, Tue, Dec 15, 2026, 9:00 AM MST – 9:30 AM");
+    expect(booked.text).toContain("The lug and ring re-check for quote Q-1042 was booked by the customer on their link for Tue, Dec 15");
+    const moved = shopNoticeMail({ ...base, event: { kind: "moved", job: "recheck", start, end, by: "Sam Staff" } });
+    expect(moved.subject).toMatch(/^Moved: re-check for quote Q-1042, now Tue, Dec 15/);
+    const cancelled = shopNoticeMail({ ...base, event: { kind: "cancelled", job: "recheck", start, end, by: "Sam Staff" } });
+    expect(cancelled.text).toContain("The lug and ring re-check for quote Q-1042 on Tue, Dec 15");
+    for (const m of [booked, moved, cancelled]) expect(m.text).not.toContain("install");
+  });
 });

@@ -1,11 +1,11 @@
 /**
  * The shop's own notices: an e-mail to the shop when a customer accepts a quote, a payment comes
- * in through the provider, or an install is booked, moved or cancelled — so the owner learns of
+ * in through the provider, or an install or a re-check is booked, moved or cancelled — so the owner learns of
  * it without watching the counter. Pure composition; noticeQueries.ts queues what this returns in
  * the transaction that makes the change. The customer's receipts are lib/shop/payments/receiptMail.ts.
  */
 import type { OutgoingMail } from "@/lib/platform/mail";
-import type { PaymentKind } from "@/lib/platform/db/types";
+import type { BookingKind, PaymentKind } from "@/lib/platform/db/types";
 import { escapeHtml } from "@/lib/platform/text";
 import { formatClock, formatInstant } from "@/lib/shop/bookings/zoned";
 import { PAYMENT_KIND_LABEL } from "@/lib/shop/payments/labels";
@@ -15,7 +15,13 @@ import { formatUsd } from "@/lib/shop/quotes/money";
 export type ShopNoticeEvent =
   | { kind: "accepted" }
   | { kind: "paid"; payment: PaymentKind; amountCents: number }
-  | { kind: "booked" | "moved" | "cancelled"; start: Date; end: Date; by: string; previousStart?: Date };
+  | { kind: "booked" | "moved" | "cancelled"; job?: BookingKind; start: Date; end: Date; by: string; previousStart?: Date };
+
+/** What a booking is for, as the notice names it in its lead and (for a re-check) its subject; an install when left out. */
+const JOB_NOTICE: Record<BookingKind, { lead: string; subject: string }> = {
+  install: { lead: "The install", subject: "" },
+  recheck: { lead: "The lug and ring re-check", subject: "re-check for " },
+};
 
 export interface ShopNoticeFacts {
   event: ShopNoticeEvent;
@@ -55,14 +61,21 @@ function headline(f: ShopNoticeFacts): { subject: string; lead: string } {
     case "moved":
     case "cancelled": {
       const when = `${formatInstant(e.start, f.timeZone)} – ${formatClock(e.end, f.timeZone)}`;
+      const job = JOB_NOTICE[e.job ?? "install"];
       if (e.kind === "booked")
-        return { subject: `Booked: quote ${q}, ${when}`, lead: `The install for quote ${q} was booked ${byWhom(e.by)} for ${when}.` };
+        return {
+          subject: `Booked: ${job.subject}quote ${q}, ${when}`,
+          lead: `${job.lead} for quote ${q} was booked ${byWhom(e.by)} for ${when}.`,
+        };
       if (e.kind === "moved")
         return {
-          subject: `Moved: quote ${q}, now ${when}`,
-          lead: `The install for quote ${q} was moved ${byWhom(e.by)}${e.previousStart ? ` from ${formatInstant(e.previousStart, f.timeZone)}` : ""} to ${when}.`,
+          subject: `Moved: ${job.subject}quote ${q}, now ${when}`,
+          lead: `${job.lead} for quote ${q} was moved ${byWhom(e.by)}${e.previousStart ? ` from ${formatInstant(e.previousStart, f.timeZone)}` : ""} to ${when}.`,
         };
-      return { subject: `Cancelled: quote ${q}, ${when}`, lead: `The install for quote ${q} on ${when} was cancelled ${byWhom(e.by)}.` };
+      return {
+        subject: `Cancelled: ${job.subject}quote ${q}, ${when}`,
+        lead: `${job.lead} for quote ${q} on ${when} was cancelled ${byWhom(e.by)}.`,
+      };
     }
   }
 }

@@ -3,7 +3,9 @@
  * a booking of the job's quote with kind "recheck" (migration 20261209090000_recheck_bookings):
  * the same bay_reservations and exclusion constraint keep it off every install, the day-before
  * reminder and the calendar take it as they are, and the install's "one live booking" stays one
- * per quote and kind. Only the token's SHA-256 is kept on the work order, with an expiry.
+ * per quote and kind. Only the token's SHA-256 is kept on the work order, with an expiry. Its
+ * length is the shop's (recheckSlotQueries.ts); its placing, mails, the shop's notice and the
+ * counter's moves and cancels are the install's own code in lib/shop/bookings/queries.ts.
  */
 import "server-only";
 import type { Knex } from "knex";
@@ -13,10 +15,12 @@ import { ConflictError, GoneError, NotFoundError } from "@/lib/platform/errors";
 import { isLinkToken } from "@/lib/platform/tokenFormat";
 import { hashToken } from "@/lib/platform/tokens";
 import type { Booking, SlotsAnswer } from "@/lib/shop/bookings/api";
-import { answer, mailCustomer, place, readSchedule, reserve, slotsForWork } from "@/lib/shop/bookings/queries";
+import { answer, mailCustomer, place, readSchedule, reserve, slotsForJob } from "@/lib/shop/bookings/queries";
 import type { BookingRequest } from "@/lib/shop/bookings/schema";
 import { formatInstant } from "@/lib/shop/bookings/zoned";
-import { RECHECK_BOOKING_DAYS, recheckLinkLive, recheckWork } from "./recheckLink";
+import { queueShopNotice } from "@/lib/shop/notices/noticeQueries";
+import { RECHECK_BOOKING_DAYS, recheckLinkLive } from "./recheckLink";
+import { recheckSlotMinutes } from "./recheckSlotQueries";
 
 type Db = Knex | Knex.Transaction;
 
@@ -46,7 +50,7 @@ async function liveRecheck(db: Db, quoteId: string): Promise<BookingRow | undefi
     BookingRow | undefined;
 }
 
-/** The free re-check starts of the next RECHECK_BOOKING_DAYS days on the link, with the re-check already booked (if any). */
+/** The free re-check starts (the shop's re-check length) of the next RECHECK_BOOKING_DAYS days on the link, with the re-check already booked (if any). */
 export async function recheckSlotsByLink(
   db: Knex,
   token: string,
@@ -54,14 +58,15 @@ export async function recheckSlotsByLink(
 ): Promise<SlotsAnswer> {
   const now = opts.now ?? new Date();
   const { quote } = await byLink(db, token, now);
-  return slotsForWork(db, quote.shop_id, recheckWork(), await liveRecheck(db, quote.id), { ...opts, now }, RECHECK_BOOKING_DAYS);
+  return slotsForJob(db, quote, "recheck", await liveRecheck(db, quote.id), { ...opts, now }, RECHECK_BOOKING_DAYS);
 }
 
 /**
  * Books the re-check at the chosen start: the work order locked (so two tabs cannot both book),
  * no live re-check yet, the start within the shop's hours, the next RECHECK_BOOKING_DAYS days and
- * a free lift bay — then the booking, its bay time and the confirmation with its calendar file,
- * in one transaction; any refusal writes nothing.
+ * a free lift bay for the shop's re-check length — then the booking, its bay time, the
+ * confirmation with its calendar file and the shop's notice, in one transaction; any refusal
+ * writes nothing.
  */
 export async function bookRecheck(db: Knex, token: string, request: Pick<BookingRequest, "start">, now = new Date()): Promise<Booking> {
   return db.transaction(async (trx) => {
@@ -71,8 +76,7 @@ export async function bookRecheck(db: Knex, token: string, request: Pick<Booking
       const { timeZone } = await readSchedule(trx, quote.shop_id);
       throw new ConflictError(`Your re-check is already booked for ${formatInstant(live.starts_at, timeZone)}. Call the shop to move it.`);
     }
-    const work = recheckWork();
-    const row = await place(trx, { quote, request, now, segments: work.segments, horizonDays: RECHECK_BOOKING_DAYS }, async (sp, slot) => {
+    const row = await place(trx, { quote, request, now, job: "recheck", horizonDays: RECHECK_BOOKING_DAYS }, async (sp, slot) => {
       const [b] = (await sp("bookings")
         .insert({
           shop_id: quote.shop_id,
@@ -89,25 +93,40 @@ export async function bookRecheck(db: Knex, token: string, request: Pick<Booking
       return b!;
     });
     await mailCustomer(trx, quote, row, "confirmed");
+    await queueShopNotice(trx, quote, { kind: "booked", job: "recheck", start: row.starts_at, end: row.ends_at, by: "customer" });
     return answer(trx, row);
   });
 }
 
 /** What the customer's page shows: the job and the re-check booked, or why the link does not work. */
 export type RecheckPage =
-  | { state: "open"; shopName: string; shopPhone: string; quoteNumber: number; vehicle: string; booking: Booking | null }
+  | {
+      state: "open";
+      shopName: string;
+      shopPhone: string;
+      quoteNumber: number;
+      vehicle: string;
+      /** The shop's re-check length, for the page's "takes about" line. */
+      slotMinutes: number;
+      booking: Booking | null;
+    }
   | { state: "refused"; title: string; message: string };
 
 export async function recheckPageByLink(db: Knex, token: string, now = new Date()): Promise<RecheckPage> {
   try {
     const { quote } = await byLink(db, token, now);
-    const [shop, live] = await Promise.all([db("shops").where({ id: quote.shop_id }).first("name", "phone"), liveRecheck(db, quote.id)]);
+    const [shop, live, slotMinutes] = await Promise.all([
+      db("shops").where({ id: quote.shop_id }).first("name", "phone"),
+      liveRecheck(db, quote.id),
+      recheckSlotMinutes(db, quote.shop_id),
+    ]);
     return {
       state: "open",
       shopName: shop.name,
       shopPhone: shop.phone,
       quoteNumber: quote.number,
       vehicle: quote.vehicle_description,
+      slotMinutes,
       booking: live ? await answer(db, live) : null,
     };
   } catch (e) {

@@ -6,6 +6,10 @@ describe("the re-check link", () => {
     expect(recheckWork()).toEqual({ segments: [{ bayKind: "lift_bay", minutes: 30 }], minutes: 30 });
   });
 
+  it("times the re-check by the shop's own length when it has set one", () => {
+    expect(recheckWork(45)).toEqual({ segments: [{ bayKind: "lift_bay", minutes: 45 }], minutes: 45 });
+  });
+
   it("expires 30 days after it is made, counted in whole 86 400 s days (NIST SP 811 table 6: 1 d = 86 400 s)", () => {
     expect(RECHECK_LINK_DAYS).toBe(30);
     expect(recheckLinkExpiry(new Date("2027-03-01T16:00:00Z")).toISOString()).toBe("2027-03-31T16:00:00.000Z");

@@ -6,11 +6,15 @@
 import type { BayKind } from "@/lib/platform/db/types";
 
 /**
- * The re-check's bay time: lug nuts and ring bolts torqued again on a lift, 30 minutes (common
- * practice, no source). The bays-and-hours form times catalog services only, and a re-check is
- * no catalog line, so this is the shop's re-check time until the owner gets a field for it.
+ * The re-check's bay time when the shop has set none: lug nuts and ring bolts torqued again on a
+ * lift, 30 minutes (common practice, no source). The owner sets the shop's own length on the
+ * re-checks page, within RECHECK_SLOT_LIMITS; the column default of shops.recheck_slot_minutes
+ * (migration 20261210100000_recheck_length) holds the same 30.
  */
 export const RECHECK_SLOT = { minutes: 30, bayKind: "lift_bay" as BayKind } as const;
+
+/** The shortest and longest re-check slot the owner may set (common practice, no source); the column's check holds the same. */
+export const RECHECK_SLOT_LIMITS = { min: 10, max: 120 } as const;
 
 /** The customer picks among the free starts of the next 14 days. */
 export const RECHECK_BOOKING_DAYS = 14;
@@ -21,13 +25,18 @@ export const RECHECK_LINK_DAYS = 30;
 const DAY_MS = 86_400_000;
 
 /**
- * The re-check as a job of one stretch, in the shape the slot search takes.
+ * The re-check as a job of one stretch of `minutes` (the shop's length) on a lift, in the shape
+ * the slot search takes.
  *
  * @example
  * recheckWork(); // { segments: [{ bayKind: "lift_bay", minutes: 30 }], minutes: 30 }
+ * recheckWork(45); // { segments: [{ bayKind: "lift_bay", minutes: 45 }], minutes: 45 }
  */
-export function recheckWork(): { segments: { bayKind: BayKind; minutes: number }[]; minutes: number } {
-  return { segments: [{ bayKind: RECHECK_SLOT.bayKind, minutes: RECHECK_SLOT.minutes }], minutes: RECHECK_SLOT.minutes };
+export function recheckWork(minutes: number = RECHECK_SLOT.minutes): {
+  segments: { bayKind: BayKind; minutes: number }[];
+  minutes: number;
+} {
+  return { segments: [{ bayKind: RECHECK_SLOT.bayKind, minutes }], minutes };
 }
 
 /**

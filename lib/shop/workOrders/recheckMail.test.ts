@@ -21,6 +21,10 @@ describe("the re-check e-mail", () => {
     expect(m.html).toContain("Hello Ada &#60;Pond&#62;,");
   });
 
+  it("offers the shop's own re-check length when it is given", () => {
+    expect(recheckMail({ ...facts, slotMinutes: 45 }).text).toContain("Book a 45-minute slot in the next 14 days here");
+  });
+
   it("without a phone, says to contact the shop; without beadlocks, asks for the lug nuts only", () => {
     const m = recheckMail({ ...facts, beadlock: false, shop: { ...facts.shop, phone: "" } });
     expect(m.text).toContain("Or contact Shop A.");

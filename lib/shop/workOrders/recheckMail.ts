@@ -16,6 +16,8 @@ export interface RecheckFacts {
   beadlock: boolean;
   /** The customer's page to book the short re-check slot (recheckLink.ts). */
   bookUrl: string;
+  /** The shop's re-check length in minutes (shops.recheck_slot_minutes); RECHECK_SLOT's default when left out. */
+  slotMinutes?: number;
 }
 
 /**
@@ -26,7 +28,7 @@ export interface RecheckFacts {
 export function recheckMail(f: RecheckFacts): OutgoingMail {
   const what = f.beadlock ? "lug nuts and beadlock ring bolts" : "lug nuts";
   const lead = `your new wheels and tires (quote Q-${f.quoteNumber}, ${f.vehicle}) have had time to settle: it is time to have the ${what} re-checked to the maker's torque. It takes a few minutes.`;
-  const book = `Book a ${RECHECK_SLOT.minutes}-minute slot in the next ${RECHECK_BOOKING_DAYS} days here (the link works for ${RECHECK_LINK_DAYS} days):`;
+  const book = `Book a ${f.slotMinutes ?? RECHECK_SLOT.minutes}-minute slot in the next ${RECHECK_BOOKING_DAYS} days here (the link works for ${RECHECK_LINK_DAYS} days):`;
   const call = f.shop.phone ? `Or call ${f.shop.name} on ${f.shop.phone}.` : `Or contact ${f.shop.name}.`;
   const contact = [f.shop.name, f.shop.address, f.shop.phone].filter(Boolean).join(" · ");
   return {

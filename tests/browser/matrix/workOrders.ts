@@ -65,6 +65,15 @@ export const cases: MatrixCase[] = [
     expect: { ...only(["shop_owner"], 422), shop_staff: 403 },
     note: "invalid body: owners get field errors, staff a 403 before any parsing",
   },
+  { route: "/api/shop/rechecks/slot", method: "GET", path: "/api/shop/rechecks/slot", expect: only([...SHOP]) },
+  {
+    route: "/api/shop/rechecks/slot",
+    method: "PUT",
+    path: "/api/shop/rechecks/slot",
+    body: { minutes: 5 },
+    expect: { ...only(["shop_owner"], 422), shop_staff: 403 },
+    note: "invalid body: owners get field errors, staff a 403 before any parsing",
+  },
   // The re-check e-mail's link: both routes look the link up before anything else.
   ...(
     [

@@ -1,7 +1,7 @@
 "use client";
 import { LinkBooking } from "@/components/bookings/LinkBooking";
 import type { Booking } from "@/lib/shop/bookings/api";
-import { RECHECK_BOOKING_DAYS, RECHECK_SLOT } from "@/lib/shop/workOrders/recheckLink";
+import { RECHECK_BOOKING_DAYS } from "@/lib/shop/workOrders/recheckLink";
 
 /** The customer picks a re-check time among the shop's free starts, or sees the one booked. */
 export function RecheckBooking({
@@ -9,8 +9,11 @@ export function RecheckBooking({
   booking,
   shopName,
   shopPhone,
+  slotMinutes,
 }: {
   token: string;
+  /** The shop's re-check length. */
+  slotMinutes: number;
   booking: Booking | null;
   shopName: string;
   shopPhone: string;
@@ -25,7 +28,7 @@ export function RecheckBooking({
       idPrefix="recheck"
       intro={
         <p className="text-sm text-basalt-700">
-          The re-check takes about {RECHECK_SLOT.minutes} minutes. Pick a time in the next {RECHECK_BOOKING_DAYS} days, or {call}.
+          The re-check takes about {slotMinutes} minutes. Pick a time in the next {RECHECK_BOOKING_DAYS} days, or {call}.
         </p>
       }
     />

@@ -32,7 +32,13 @@ export default async function RecheckPage({ params }: { params: Promise<{ token:
         </p>
       </header>
       <Alert tone="warning">{RECHECK_NOTE}</Alert>
-      <RecheckBooking token={token} booking={page.booking} shopName={page.shopName} shopPhone={page.shopPhone} />
+      <RecheckBooking
+        token={token}
+        booking={page.booking}
+        shopName={page.shopName}
+        shopPhone={page.shopPhone}
+        slotMinutes={page.slotMinutes}
+      />
     </div>
   );
 }

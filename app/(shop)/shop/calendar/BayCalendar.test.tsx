@@ -28,9 +28,10 @@ const day = { ...week, days: ["2026-12-14"], hours: { "2026-12-14": week.hours["
 const TAKEN = "That time was just taken: pick another one.";
 
 /** Answers the move route with a refusal (once `held` resolves) and the slots route with one free start; records what was sent. */
-function serveRefusal(held: Promise<void> = Promise.resolve(), refuse = true) {
+function serveRefusal(held: Promise<void> = Promise.resolve(), refuse = true, kind: SlotsAnswer["kind"] = "install") {
   const sent: { url: string; method: string; body?: unknown }[] = [];
   const slots: SlotsAnswer = {
+    kind,
     timeZone: "America/Denver",
     today: "2026-12-10",
     minutes: 80,
@@ -52,6 +53,8 @@ function serveRefusal(held: Promise<void> = Promise.resolve(), refuse = true) {
       sent.push({ url, method: init?.method ?? "GET", body: init?.body ? JSON.parse(String(init.body)) : undefined });
       if (url.includes("/slots")) return new Response(JSON.stringify(slots), { status: 200 });
       if (init?.method === "PUT") await held;
+      if (init?.method === "DELETE")
+        return new Response(JSON.stringify({ booking: { ...day.bookings[0], status: "cancelled" } }), { status: 200 });
       if (init?.method === "PUT")
         return refuse
           ? new Response(JSON.stringify({ error: TAKEN, fieldErrors: { start: [TAKEN] } }), { status: 409 })
@@ -110,7 +113,7 @@ describe("the staff calendar", () => {
     await user.click(within(panel).getByRole("button", { name: /^Move to 10:00 AM/ }));
     await within(panel).findByText(TAKEN);
     expect(sent.find((r) => r.method === "PUT")).toEqual({
-      url: "/api/shop/quotes/q1/booking",
+      url: "/api/shop/bookings/b1",
       method: "PUT",
       body: { start: "2026-12-14T17:00:00.000Z" },
     });
@@ -130,6 +133,41 @@ describe("the staff calendar", () => {
     await screen.findByText("Moved; the customer is e-mailed the updated calendar entry.");
     await waitFor(() => expect(sent.filter((r) => r.url.startsWith("/api/shop/bookings?"))).toHaveLength(1));
     expect(sent.find((r) => r.url.startsWith("/api/shop/bookings?"))!.url).toBe("/api/shop/bookings?from=2026-12-14&days=1");
+  });
+
+  it("moves a re-check as it moves an install: its own free starts under its own field name, sent to the booking's move route", async () => {
+    const sent = serveRefusal(Promise.resolve(), false, "recheck");
+    const user = userEvent.setup();
+    renderCalendar({ ...day, bookings: [{ ...day.bookings[0]!, kind: "recheck" }] });
+    await user.click(screen.getByRole("button", { name: /Q-1003 · Ilse Varga-Pond/ }));
+    const panel = screen.getByRole("region", { name: "Selected booking" });
+    expect(within(panel).getByRole("heading").textContent).toBe("Lug and ring re-check · Q-1003 · Ilse Varga-Pond");
+    await user.click(within(panel).getByRole("button", { name: "Move…" }));
+    expect(await within(panel).findByRole("group", { name: "Re-check time" })).toBeTruthy();
+    expect(sent.find((r) => r.url.includes("/slots"))!.url).toBe("/api/shop/bookings/b1/slots?days=7");
+    await user.click(within(panel).getByText("10:00 AM"));
+    await user.click(within(panel).getByRole("button", { name: /^Move to 10:00 AM/ }));
+    await screen.findByText("Moved; the customer is e-mailed the updated calendar entry.");
+    expect(sent.find((r) => r.method === "PUT")).toEqual({
+      url: "/api/shop/bookings/b1",
+      method: "PUT",
+      body: { start: "2026-12-14T17:00:00.000Z" },
+    });
+  });
+
+  it("cancels the picked booking once the person confirms, and says the customer's calendar entry is withdrawn", async () => {
+    const sent = serveRefusal();
+    const confirm = vi.fn(() => true);
+    vi.stubGlobal("confirm", confirm);
+    const user = userEvent.setup();
+    renderCalendar({ ...day, bookings: [{ ...day.bookings[0]!, kind: "recheck" }] });
+    await user.click(booking());
+    await user.click(within(screen.getByRole("region", { name: "Selected booking" })).getByRole("button", { name: "Cancel booking" }));
+    expect(confirm).toHaveBeenCalledWith(
+      "Cancel this lug and ring re-check booking? The customer is e-mailed a cancellation for their calendar.",
+    );
+    await screen.findByText("Booking cancelled; the customer's calendar entry is withdrawn by e-mail.");
+    expect(sent.find((r) => r.method === "DELETE")).toEqual({ url: "/api/shop/bookings/b1", method: "DELETE", body: undefined });
   });
 
   it("opens on today's day view on a narrow screen when the link named no range", async () => {

@@ -141,8 +141,8 @@ export function BayCalendar({ initial, today, askedDays }: { initial: CalendarAn
               step={15}
               timeslots={4}
               resizable={false}
-              // A re-check is booked by the customer on their link; the counter's move route moves installs only.
-              draggableAccessor={(e) => !move.pending && e.booking.kind === "install"}
+              // Installs and re-checks move through the same route, which checks every move again.
+              draggableAccessor={() => !move.pending}
               onEventDrop={({ event, start, resourceId, isAllDay }) =>
                 void move.drop(event, new Date(start), resourceId === undefined ? undefined : String(resourceId), isAllDay)
               }
@@ -170,8 +170,8 @@ export function BayCalendar({ initial, today, askedDays }: { initial: CalendarAn
         <SelectedBooking
           key={selected.booking.id}
           booking={selected.booking}
-          onMoved={async () => {
-            await move.moved();
+          onChanged={async (text) => {
+            await move.moved(text);
             setSelectedId(null);
           }}
           onClose={() => setSelectedId(null)}

@@ -3,46 +3,65 @@ import Link from "next/link";
 import { useState } from "react";
 import { BookingSummary } from "@/components/bookings/BookingSummary";
 import { SlotPicker } from "@/components/bookings/SlotPicker";
+import { Alert } from "@/components/ui/Alert";
 import { Button, buttonClass } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import type { CalendarBooking } from "@/lib/shop/bookings/api";
-import { putMove } from "./useBookingMove";
+import { BOOKING_KIND_LABEL } from "@/lib/shop/bookings/vocabulary";
+import { CANCELLED, MOVED, bookingUrl, deleteBooking, putMove } from "./useBookingMove";
 
 /**
  * The booking picked on the calendar (click, or Enter on a focused booking): what it is for, a
- * link to its quote, and "Move…", the keyboard's way to move it: the free starts that fit its
- * work, each sent to the same move route a drag uses.
+ * link to its quote, "Move…" (the keyboard's way to move it: the free starts that fit its work,
+ * each sent to the same move route a drag uses) and "Cancel booking". Installs and re-checks
+ * alike: the server checks every move again and e-mails the customer the changed calendar entry.
  */
 export function SelectedBooking({
   booking,
-  onMoved,
+  onChanged,
   onClose,
 }: {
   booking: CalendarBooking;
-  onMoved: () => Promise<void>;
+  /** After the server moved or cancelled it, with the words to say. */
+  onChanged: (text: string) => Promise<void>;
   onClose: () => void;
 }) {
   const [picking, setPicking] = useState(false);
-  const url = `/api/shop/quotes/${booking.quoteId}/booking`;
+  const [cancelling, setCancelling] = useState(false);
+  const [error, setError] = useState<string | null>(null);
+  const what = BOOKING_KIND_LABEL[booking.kind];
+  const cancel = async () => {
+    if (!window.confirm(`Cancel this ${what.toLowerCase()} booking? The customer is e-mailed a cancellation for their calendar.`)) return;
+    setCancelling(true);
+    setError(null);
+    try {
+      await deleteBooking(booking.id);
+      await onChanged(CANCELLED);
+    } catch (e) {
+      setError((e as Error).message);
+    }
+    setCancelling(false);
+  };
   return (
     <Card className="mt-4 flex flex-col gap-3" role="region" aria-label="Selected booking">
       <h2 className="text-lg font-semibold">
-        {booking.kind === "recheck" && "Lug and ring re-check · "}Q-{booking.quoteNumber} · {booking.customerName}
+        {booking.kind === "recheck" && `${what} · `}Q-{booking.quoteNumber} · {booking.customerName}
       </h2>
       <p className="text-sm text-basalt-700">Vehicle: {booking.vehicleDescription}</p>
       <BookingSummary booking={booking} showBays />
-      {booking.kind === "recheck" && (
-        <p className="text-sm text-basalt-600">Booked by the customer on the re-check link; call them to change it.</p>
-      )}
+      <div aria-live="polite">{error && <Alert tone="error">{error}</Alert>}</div>
       <div className="flex flex-wrap gap-2">
         <Link className={buttonClass("primary")} href={`/shop/quotes/${booking.quoteId}`}>
           Open quote Q-{booking.quoteNumber}
         </Link>
-        {!picking && booking.kind === "install" && (
+        {!picking && (
           <Button type="button" variant="secondary" onClick={() => setPicking(true)}>
             Move…
           </Button>
         )}
+        <Button type="button" variant="danger" pending={cancelling} onClick={() => void cancel()}>
+          Cancel booking
+        </Button>
         <Button type="button" variant="ghost" onClick={onClose}>
           Close
         </Button>
@@ -50,12 +69,12 @@ export function SelectedBooking({
       {picking && (
         <SlotPicker
           idPrefix={`calendar-${booking.id}`}
-          slotsUrl={`${url}/slots`}
+          slotsUrl={`${bookingUrl(booking.id)}/slots`}
           actionLabel={(words) => `Move to ${words}`}
           onPick={async (start) => {
-            await putMove(booking.quoteId, { start });
+            await putMove(booking.id, { start });
             setPicking(false);
-            await onMoved();
+            await onChanged(MOVED);
           }}
         />
       )}

@@ -17,6 +17,7 @@ export interface DraggedTo {
 }
 
 export const MOVED = "Moved; the customer is e-mailed the updated calendar entry.";
+export const CANCELLED = "Booking cancelled; the customer's calendar entry is withdrawn by e-mail.";
 
 /** The server's own words for a refused move (taken, outside hours, closed day, wrong bay). */
 export function refusalText(e: unknown): string {
@@ -25,9 +26,15 @@ export function refusalText(e: unknown): string {
   return fields.start?.[0] ?? fields.bayId?.[0] ?? e.message;
 }
 
+/** A booking of either kind (install or re-check) on the counter's booking route. */
+export const bookingUrl = (bookingId: string) => `/api/shop/bookings/${bookingId}`;
+
 /** Sends a booking to another start (and bay) through the counter's move route, which checks it again. */
-export const putMove = (quoteId: string, body: { start: string; bayId?: string }) =>
-  api<{ booking: Booking }>(`/api/shop/quotes/${quoteId}/booking`, { method: "PUT", body });
+export const putMove = (bookingId: string, body: { start: string; bayId?: string }) =>
+  api<{ booking: Booking }>(bookingUrl(bookingId), { method: "PUT", body });
+
+/** Cancels a booking through the counter's route; the customer's calendar entry is withdrawn. */
+export const deleteBooking = (bookingId: string) => api<{ booking: Booking }>(bookingUrl(bookingId), { method: "DELETE" });
 
 /**
  * A drop on the calendar: the event is drawn where it was dropped until the server answers; a
@@ -43,8 +50,9 @@ export function useBookingMove(timeZone: string) {
       queryClient.invalidateQueries({ queryKey: queryKeys.shop.calendar.all }),
       queryClient.invalidateQueries({ queryKey: queryKeys.shop.slots.all }),
     ]);
-  const moved = async () => {
-    setMessage({ tone: "success", text: MOVED });
+  /** After a move or a cancel the server made: says so and reloads the calendar and free times. */
+  const moved = async (text: string = MOVED) => {
+    setMessage({ tone: "success", text });
     await refresh();
   };
   const drop = async (event: BayEvent, droppedAt: Date, resourceId: string | undefined, isAllDay = false) => {
@@ -59,7 +67,7 @@ export function useBookingMove(timeZone: string) {
     setMessage(null);
     setDragged({ id: event.id, start: droppedAt, end: new Date(droppedAt.getTime() + length), resourceId: bayId });
     try {
-      await putMove(event.booking.quoteId, body);
+      await putMove(event.booking.id, body);
       await moved();
     } catch (e) {
       setMessage({ tone: "error", text: `Not moved: ${refusalText(e)}` });

@@ -6,7 +6,9 @@ import { requirePageCaller } from "@/lib/platform/auth/session";
 import { shopIdOf } from "@/lib/shop/queries";
 import { RECHECK_NOTE } from "@/lib/shop/workOrders/vocabulary";
 import { workOrderQueries } from "@/lib/shop/workOrders/queries";
+import { recheckSlotQueries } from "@/lib/shop/workOrders/recheckSlotQueries";
 import { RecheckDaysForm } from "./RecheckDaysForm";
+import { RecheckSlotForm } from "./RecheckSlotForm";
 
 export const metadata: Metadata = { title: "Re-checks" };
 
@@ -14,11 +16,23 @@ export const metadata: Metadata = { title: "Re-checks" };
 export default async function RechecksPage() {
   const caller = await requirePageCaller("/shop/rechecks", ["shop_staff", "shop_owner"]);
   const shopId = shopIdOf(caller);
-  const [days, due] = await Promise.all([workOrderQueries.recheckDays(shopId), workOrderQueries.dueForRecheck(shopId)]);
+  const [days, due, slotMinutes] = await Promise.all([
+    workOrderQueries.recheckDays(shopId),
+    workOrderQueries.dueForRecheck(shopId),
+    recheckSlotQueries.recheckSlotMinutes(shopId),
+  ]);
   return (
     <>
-      <PageHeader title="Due for re-check" lead={`Customers are e-mailed ${days} days after their work is done. ${RECHECK_NOTE}`} />
-      {caller.role === "shop_owner" && <RecheckDaysForm days={days} />}
+      <PageHeader
+        title="Due for re-check"
+        lead={`Customers are e-mailed ${days} days after their work is done and book a ${slotMinutes}-minute re-check slot. ${RECHECK_NOTE}`}
+      />
+      {caller.role === "shop_owner" && (
+        <>
+          <RecheckDaysForm days={days} />
+          <RecheckSlotForm minutes={slotMinutes} />
+        </>
+      )}
       <Card className="mt-5">
         {due.length === 0 ? (
           <p className="text-sm text-basalt-600">No one is due for a re-check.</p>
