@@ -359,13 +359,14 @@ describe("the shop's re-check length", () => {
     expect((await db("shops").where({ id: SHOP_A }).first("recheck_slot_minutes")).recheck_slot_minutes).toBe(30);
   });
 
-  it("the owner's length is what the link offers, books and shows", async () => {
+  it("the owner's length is what the e-mail and the link offer, book and show", async () => {
     session.current = sessionOf(U.ownerA);
     const set = await setLength("45");
     expect(set.status).toBe(200);
     expect(await set.json()).toEqual({ minutes: 45 });
     try {
-      const { token } = await mailedRecheck();
+      const { token, mail } = await mailedRecheck();
+      expect(mail.text).toMatch(/Book a 45-minute slot in the next 14 days here/);
       expect(await recheckPageByLink(db, token)).toMatchObject({ state: "open", slotMinutes: 45 });
       const a = await (await getSlots(token, "?days=7")).json();
       expect(a).toMatchObject({ kind: "recheck", minutes: 45, segments: [{ bayKind: "lift_bay", minutes: 45 }] });

@@ -309,6 +309,7 @@ export async function queueDueRechecks(db: Knex, now = new Date()): Promise<numb
         "s.name as shop_name",
         "s.address",
         "s.phone",
+        "s.recheck_slot_minutes",
       )) as {
       id: string;
       beadlock: boolean;
@@ -319,6 +320,7 @@ export async function queueDueRechecks(db: Knex, now = new Date()): Promise<numb
       shop_name: string;
       address: string;
       phone: string;
+      recheck_slot_minutes: number;
     }[];
     let queued = 0;
     for (const d of due) {
@@ -337,6 +339,7 @@ export async function queueDueRechecks(db: Knex, now = new Date()): Promise<numb
             vehicle: d.vehicle_description,
             beadlock: d.beadlock,
             bookUrl: recheckUrl(appOrigin(), token),
+            slotMinutes: d.recheck_slot_minutes,
           }),
         );
         queued++;
