@@ -176,7 +176,7 @@ describe("install booking", () => {
     await shot(s, "booking-counter-moved");
     // The newest "Moved" mail is read until the second one has been sent by the job queue.
     await expect.poll(async () => Number((await calendarOf(email, /^Moved: your install/)).event.sequence), { timeout: 20000 }).toBe(2);
-  });
+  }, 180_000); // the whole journey, customer and counter: longer than one step's 90 s
 
   it("the owner's Bays and hours page passes the accessibility check; staff are sent away from it", async () => {
     const page = await staff.context.newPage();
