@@ -38,3 +38,17 @@ export function timestamps(t: Knex.TableBuilder, knex: Knex): void {
   createdAt(t, knex);
   instant(t, "updated_at").notNullable().defaultTo(knex.fn.now());
 }
+
+/**
+ * An image in the photo store and its thumbnail, named by object key (keys are built from ids
+ * only, never from a file name), with what the upload check read off the file.
+ */
+export function storedPhotoColumns(t: Knex.TableBuilder): void {
+  t.text("object_key").notNullable().unique();
+  t.text("thumb_key").notNullable().unique();
+  t.text("content_type").notNullable();
+  t.integer("width").notNullable();
+  t.integer("height").notNullable();
+  t.integer("bytes").notNullable();
+  t.text("original_name").notNullable();
+}

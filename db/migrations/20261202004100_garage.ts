@@ -1,5 +1,5 @@
 import type { Knex } from "knex";
-import { createdAt, optionalRef, requiredRef, timestamps, uuidId } from "../lib/columns";
+import { createdAt, optionalRef, requiredRef, storedPhotoColumns, timestamps, uuidId } from "../lib/columns";
 
 /**
  * The garage: a member's vehicles, the clearances measured on them, photos (objects in the
@@ -54,14 +54,7 @@ export async function up(knex: Knex): Promise<void> {
     uuidId(t, knex);
     requiredRef(t, "vehicle_id", "vehicles");
     optionalRef(t, "clearance_id", "vehicle_clearances", "CASCADE");
-    /** Object keys are built from ids only, never from a file name. */
-    t.text("object_key").notNullable().unique();
-    t.text("thumb_key").notNullable().unique();
-    t.text("content_type").notNullable();
-    t.integer("width").notNullable();
-    t.integer("height").notNullable();
-    t.integer("bytes").notNullable();
-    t.text("original_name").notNullable();
+    storedPhotoColumns(t);
     createdAt(t, knex);
     t.check("content_type in ('image/jpeg','image/png','image/webp')", [], "photos_type_known");
     t.index(["vehicle_id"], "photos_vehicle");

@@ -1,5 +1,5 @@
 import type { Knex } from "knex";
-import { createdAt, optionalRef, uuidId } from "../lib/columns";
+import { createdAt, optionalRef, storedPhotoColumns, uuidId } from "../lib/columns";
 
 /**
  * Photos a technician takes of a work order's step (the DOT code, the beadlock ring's bolts in
@@ -20,13 +20,7 @@ export async function up(knex: Knex): Promise<void> {
       .onDelete("CASCADE");
     t.text("position").notNullable();
     t.text("step").notNullable();
-    t.text("object_key").notNullable().unique();
-    t.text("thumb_key").notNullable().unique();
-    t.text("content_type").notNullable();
-    t.integer("width").notNullable();
-    t.integer("height").notNullable();
-    t.integer("bytes").notNullable();
-    t.text("original_name").notNullable();
+    storedPhotoColumns(t);
     optionalRef(t, "taken_by_user_id", "users");
     t.text("taken_by").notNullable();
     createdAt(t, knex);

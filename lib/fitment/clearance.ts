@@ -81,23 +81,7 @@ import {
 } from "./clearanceGeometry";
 // The vocabulary, ranges, envelope and steering axis live in clearanceGeometry.ts (light enough for
 // the drawing's first load); this module is still where the rest of the app imports them from.
-export {
-  CLEARANCE_DIRECTIONS,
-  SUSPENSION_STATES,
-  DEFAULT_CLEARANCE_MARGIN_MM,
-  CLEARANCE_MARGIN_LIMITS_MM,
-  CLEARANCE_DISTANCE_LIMITS_MM,
-  CLEARANCE_HEIGHT_LIMITS_MM,
-  STEERING_AXIS_LIMITS_MM,
-  SCRUB_RADIUS_LIMITS_MM,
-  clearanceEnvelope,
-  steeringAxisInboardMm,
-  type ClearanceDirection,
-  type SuspensionState,
-  type ClearanceStatus,
-  type ClearanceBasis,
-  type ClearanceEnvelope,
-} from "./clearanceGeometry";
+export * from "./clearanceGeometry";
 
 /** Steepest angle above horizontal at which a lateral part may sit over the shoulder corner. */
 const SHOULDER_ARC_RAD = Math.PI / 4;

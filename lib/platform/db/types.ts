@@ -416,19 +416,12 @@ export interface WorkOrderStepRow {
 }
 
 /** A photo of one step of a work order; its image and thumbnail are objects in the photo store. */
-export interface WorkOrderStepPhotoRow {
+export interface WorkOrderStepPhotoRow extends StoredPhotoColumns {
   id: string;
   work_order_id: string;
   shop_id: string;
   position: StepPosition;
   step: string;
-  object_key: string;
-  thumb_key: string;
-  content_type: "image/jpeg" | "image/png" | "image/webp";
-  width: number;
-  height: number;
-  bytes: number;
-  original_name: string;
   taken_by_user_id: string | null;
   taken_by: string;
   created_at: Date;
@@ -510,10 +503,8 @@ export interface VehicleClearanceRow {
   created_at: Date;
 }
 
-export interface VehiclePhotoRow {
-  id: string;
-  vehicle_id: string;
-  clearance_id: string | null;
+/** The columns of a stored photo (db/lib/columns.ts `storedPhotoColumns`). */
+interface StoredPhotoColumns {
   object_key: string;
   thumb_key: string;
   content_type: "image/jpeg" | "image/png" | "image/webp";
@@ -521,6 +512,12 @@ export interface VehiclePhotoRow {
   height: number;
   bytes: number;
   original_name: string;
+}
+
+export interface VehiclePhotoRow extends StoredPhotoColumns {
+  id: string;
+  vehicle_id: string;
+  clearance_id: string | null;
   created_at: Date;
 }
 
