@@ -47,6 +47,18 @@ async function makeQuote(vehicle: Record<string, unknown>) {
   return quotes.POST(req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId: c.customer.id, vehicle })), ctx());
 }
 
+/** A new customer whose first quote saved the counter truck with its placard; their id and the saved vehicle's row. */
+async function customerWithSavedTruck(name: string, phone: string) {
+  const cres = await customers.POST(req("POST", "/api/shop/customers", { name, phone, email: "" }), ctx());
+  const customerId = (await cres.json()).customer.id as string;
+  const first = await quotes.POST(
+    req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId, vehicle: { ...VEHICLE, placard: PLACARD }, saveVehicle: true })),
+    ctx(),
+  );
+  expect(first.status).toBe(201);
+  return { customerId, saved: await db("customer_vehicles").where({ customer_id: customerId }).first() };
+}
+
 describe("a quote for a counter vehicle with its door placard gives the cold pressure to set", () => {
   it("per axle in its summary, its cautions and its PDF; 35x12.50R17LT 121Q E sets its road minimum, 37.9 psi", async () => {
     const made = await makeQuote({ ...VEHICLE, placard: PLACARD });
@@ -111,19 +123,76 @@ describe("a quote for a counter vehicle with its door placard gives the cold pre
   });
 
   it("a saved vehicle keeps its placard: a later quote for it gives the same pressure to set", async () => {
-    const cres = await customers.POST(req("POST", "/api/shop/customers", { name: "Ida Saved", phone: "(555) 010-7799", email: "" }), ctx());
-    const customerId = (await cres.json()).customer.id as string;
-    const first = await quotes.POST(
-      req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId, vehicle: { ...VEHICLE, placard: PLACARD }, saveVehicle: true })),
-      ctx(),
-    );
-    expect(first.status).toBe(201);
-    const saved = await db("customer_vehicles").where({ customer_id: customerId }).first();
+    const { customerId, saved } = await customerWithSavedTruck("Ida Saved", "(555) 010-7799");
     expect(saved.load_placard).toMatchObject({ placardTire: "265/70R17 113T", frontAxleKg: 1430, units: "imperial" });
     const again = await quotes.POST(req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId, vehicleId: saved.id })), ctx());
     const { id } = await again.json();
     expect(again.status).toBe(201);
     const detail = await (await quote.GET(req("GET", `/api/shop/quotes/${id}`), ctx({ id }))).json();
     expect(detail.quote.fitment.pressure.axles.map((a: { kpa: number }) => Math.round(a.kpa))).toEqual([261, 261]);
+  });
+
+  it("a saved vehicle changed at the counter: ticked, the changes are written over it (no second copy); unticked, it stays as stored", async () => {
+    const { customerId, saved } = await customerWithSavedTruck("Ida Changed", "(555) 010-7798");
+    const changed = { ...VEHICLE, placard: { ...PLACARD, vehicleKind: "passenger-car", placardFrontKpa: psiToKpa(36), rearAxleKg: 1250 } };
+
+    const kept = await quotes.POST(
+      req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId, vehicleId: saved.id, vehicle: changed, saveVehicle: false })),
+      ctx(),
+    );
+    expect(kept.status).toBe(201);
+    expect((await db("customer_vehicles").where({ id: saved.id }).first()).load_placard).toEqual(saved.load_placard);
+
+    const made = await quotes.POST(
+      req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId, vehicleId: saved.id, vehicle: changed, saveVehicle: true })),
+      ctx(),
+    );
+    const { id } = await made.json();
+    expect(made.status).toBe(201);
+    const rows = await db("customer_vehicles").where({ customer_id: customerId });
+    expect(rows).toHaveLength(1);
+    expect(rows[0].load_placard).toMatchObject({ vehicleKind: "passenger-car", rearAxleKg: 1250 });
+    expect(rows[0].load_placard.placardFrontKpa).toBeCloseTo(psiToKpa(36), 6);
+    const detail = await (await quote.GET(req("GET", `/api/shop/quotes/${id}`), ctx({ id }))).json();
+    expect(detail.quote.vehicleId).toBe(saved.id);
+    expect(detail.quote.fitment.pressure.placardFrontKpa).toBeCloseTo(psiToKpa(36), 6);
+  });
+
+  it("a saved vehicle's change refused (a negative axle weight) or for another customer's vehicle: nothing stored, the vehicle as it was", async () => {
+    const { customerId, saved } = await customerWithSavedTruck("Ida Refused", "(555) 010-7797");
+    const before = await db("quotes").count<{ count: string }[]>({ count: "*" });
+    const bad = await quotes.POST(
+      req(
+        "POST",
+        "/api/shop/quotes",
+        await quoteRequest(db, {
+          customerId,
+          vehicleId: saved.id,
+          vehicle: { ...VEHICLE, placard: { ...PLACARD, rearAxleKg: -1200 } },
+          saveVehicle: true,
+        }),
+      ),
+      ctx(),
+    );
+    const body = await bad.json();
+    expect(bad.status).toBe(422);
+    expect(body.fieldErrors["vehicle.placard.rearAxleKg"][0]).toMatch(/^Rear axle weight, scale ticket \(lb\):/);
+    const other = await customers.POST(
+      req("POST", "/api/shop/customers", { name: "Ida Other", phone: "(555) 010-7796", email: "" }),
+      ctx(),
+    );
+    const otherId = (await other.json()).customer.id as string;
+    const notTheirs = await quotes.POST(
+      req(
+        "POST",
+        "/api/shop/quotes",
+        await quoteRequest(db, { customerId: otherId, vehicleId: saved.id, vehicle: VEHICLE, saveVehicle: true }),
+      ),
+      ctx(),
+    );
+    expect(notTheirs.status).toBe(422);
+    expect((await notTheirs.json()).fieldErrors.vehicleId).toEqual(["That vehicle was not found."]);
+    expect(await db("quotes").count<{ count: string }[]>({ count: "*" })).toEqual(before);
+    expect(await db("customer_vehicles").where({ id: saved.id }).first()).toEqual(saved);
   });
 });

@@ -58,6 +58,18 @@ describe("the counter's door placard fields", () => {
     expect(sent.frontGawrKg).toBeNull();
   });
 
+  it("send the vehicle kind chosen: truck unless Car is picked (a passenger tire's load is derated on a truck)", async () => {
+    render(<Probe />);
+    await type("Tire size on the placard", "265/70R17 113T");
+    await type("Placard cold pressure, front (psi)", "35");
+    await type("Placard cold pressure, rear (psi)", "35");
+    await userEvent.click(screen.getByRole("button", { name: "Find" }));
+    expect(JSON.parse(screen.getByRole("status").textContent!).vehicleKind).toBe("light-truck");
+    await userEvent.click(screen.getByRole("radio", { name: "Car" }));
+    await userEvent.click(screen.getByRole("button", { name: "Find" }));
+    expect(JSON.parse(screen.getByRole("status").textContent!).vehicleKind).toBe("passenger-car");
+  });
+
   it("convert the figures on a unit switch, and refuse a placard without its rear pressure beside that field", async () => {
     render(<Probe />);
     await type("Tire size on the placard", "265/70R17 113T");

@@ -1,6 +1,7 @@
 "use client";
 import { MeasureField } from "@/components/comparison/MeasureField";
 import { DisplayToggle } from "@/components/comparison/DisplayToggle";
+import { VehicleKindChoice } from "@/components/comparison/VehicleKindChoice";
 import { TextField } from "@/components/ui/TextField";
 import { PROFILE_SPEC, profileLabels } from "@/lib/garage/loadProfile";
 import { PLACARD_KEYS } from "@/lib/shop/customers/counterPlacard";
@@ -32,6 +33,7 @@ export function CounterPlacardFields({ placard }: { placard: CounterPlacardState
         error={placard.message("placardTire")}
         hint="As printed on the door placard, with its load index (e.g. P265/70R17 113S)."
       />
+      <VehicleKindChoice name="placard-vehicleKind" value={placard.vehicleKind} onChange={placard.setVehicleKind} />
       {PLACARD_KEYS.map((k) => (
         <MeasureField
           key={k}

@@ -1,23 +1,26 @@
 "use client";
 import { useMemo, useState } from "react";
 import { useDisplayPrefs } from "@/components/comparison/useDisplayPrefs";
-import { setupGeometry } from "@/lib/fitment";
+import { type VehicleKind, setupGeometry } from "@/lib/fitment";
 import { type MeasureKey, PROFILE_QUANTITIES, type ProfileErrors, type ProfileField } from "@/lib/garage/loadProfile";
 import { readProfileForm } from "@/lib/garage/loadProfileForm";
 import { ApiError } from "@/lib/platform/client/api";
-import { PLACARD_KEYS } from "@/lib/shop/customers/counterPlacard";
+import { type CounterPlacard, PLACARD_KEYS } from "@/lib/shop/customers/counterPlacard";
 import { type Setup, toEngineSetup } from "@/lib/setup/model";
 import { useMeasureEntries } from "@/app/(tools)/workspace/useMeasureEntries";
 
 /**
  * The counter's placard fields: typed in the reader's inch/metric choice, read into SI by the
  * garage's own reader and checks (lib/garage/loadProfileForm), so the counter refuses what the
- * vehicle page refuses, with the same field names. The body points are not asked here.
+ * vehicle page refuses, with the same field names. The body points are not asked here. The
+ * vehicle kind (truck or car) decides whether a passenger tire's load is derated (the engine's
+ * 1.10 rule), so it is asked and sent with the placard. `fill` puts a saved vehicle's placard back.
  */
 export function useCounterPlacard(currentSetup: Setup | null) {
   const [prefs, setPrefs] = useDisplayPrefs();
-  const { entries, set, note } = useMeasureEntries<MeasureKey>(PROFILE_QUANTITIES, prefs);
+  const { entries, set, note, fill: fillEntries } = useMeasureEntries<MeasureKey>(PROFILE_QUANTITIES, prefs);
   const [placardTire, setPlacardTire] = useState("");
+  const [vehicleKind, setVehicleKind] = useState<VehicleKind>("light-truck");
   const [server, setServer] = useState<ProfileErrors>({});
   const [tried, setTried] = useState(false);
 
@@ -29,8 +32,8 @@ export function useCounterPlacard(currentSetup: Setup | null) {
     } catch {
       // The setup's own fields report it; the placard's checks do not need it.
     }
-    return readProfileForm({ entries, placardTire, vehicleKind: "light-truck" }, prefs, current);
-  }, [entries, placardTire, prefs, currentSetup]);
+    return readProfileForm({ entries, placardTire, vehicleKind }, prefs, current);
+  }, [entries, placardTire, vehicleKind, prefs, currentSetup]);
 
   const errors: ProfileErrors = tried ? { ...read.errors, ...server } : server;
   const given = placardTire.trim() !== "" || PLACARD_KEYS.some((k) => entries[k].text.trim() !== "");
@@ -60,7 +63,15 @@ export function useCounterPlacard(currentSetup: Setup | null) {
     if (k === "placardTire") setPlacardTire(text);
     else set(k, text);
   };
-  return { prefs, setPrefs, entries, placardTire, edit, message, value, fromServer };
+  /** A saved vehicle's placard (SI) in the fields, written in the screen's units; null empties them. */
+  const fill = (p: CounterPlacard | null) => {
+    fillEntries(p ? Object.fromEntries(PLACARD_KEYS.map((k) => [k, p[k]])) : null);
+    setPlacardTire(p?.placardTire ?? "");
+    setVehicleKind(p?.vehicleKind ?? "light-truck");
+    setServer({});
+    setTried(false);
+  };
+  return { prefs, setPrefs, entries, placardTire, vehicleKind, setVehicleKind, edit, message, value, fromServer, fill };
 }
 
 export type CounterPlacardState = ReturnType<typeof useCounterPlacard>;
