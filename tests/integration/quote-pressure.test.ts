@@ -1,5 +1,6 @@
 import { describe, expect, it, vi } from "vitest";
 import { psiToKpa } from "@/lib/fitment";
+import { COUNTER_BODY_POINTS } from "@/lib/shop/customers/placardTestUtil";
 import { ctx, req } from "./support/requests";
 import { depositPaidQuote, firstFreeStart, STAFF_A } from "./support/quoteJourney";
 import { SHOP_A, VEHICLE, quoteRequest } from "./support/shopFixture";
@@ -37,14 +38,14 @@ async function pdfText(id: string): Promise<string> {
 }
 
 let n = 0;
-async function makeQuote(vehicle: Record<string, unknown>) {
+async function makeQuote(vehicle: Record<string, unknown>, extra: Record<string, unknown> = {}) {
   n += 1;
   const cres = await customers.POST(
     req("POST", "/api/shop/customers", { name: `Ida Placard ${n}`, phone: `(555) 010-778${n}`, email: "" }),
     ctx(),
   );
   const c = await cres.json();
-  return quotes.POST(req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId: c.customer.id, vehicle })), ctx());
+  return quotes.POST(req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId: c.customer.id, vehicle, ...extra })), ctx());
 }
 
 /** A new customer whose first quote saved the counter truck with its placard; their id and the saved vehicle's row. */
@@ -194,5 +195,63 @@ describe("a quote for a counter vehicle with its door placard gives the cold pre
     expect((await notTheirs.json()).fieldErrors.vehicleId).toEqual(["That vehicle was not found."]);
     expect(await db("quotes").count<{ count: string }[]>({ count: "*" })).toEqual(before);
     expect(await db("customer_vehicles").where({ id: saved.id }).first()).toEqual(saved);
+  });
+});
+
+/** The counter truck's body points, measured with its 265/70R17 tires (invented). */
+const BODY_POINTS = COUNTER_BODY_POINTS;
+
+describe("a quote for a counter vehicle with its body points gives the trail angles now and with the quoted tires", () => {
+  it("in its summary, its PDF and its cautions; a saved vehicle keeps them for a later quote", async () => {
+    const made = await makeQuote({ ...VEHICLE, bodyPoints: BODY_POINTS });
+    const body = await made.json();
+    expect(made.status, JSON.stringify(body)).toBe(201);
+    const detail = await (await quote.GET(req("GET", `/api/shop/quotes/${body.id}`), ctx({ id: body.id }))).json();
+    expect(detail.quote.fitment.angles.angles.map((a: { kind: string }) => a.kind)).toEqual(["approach", "departure", "breakover"]);
+    const text = await pdfText(body.id);
+    // 265/70R17 (802.8 mm) → 35x12.50R17LT (889 mm): the tangent from the corner 900 mm ahead and 750 mm
+    // high, 45.7° → 48.6° with the corner raised by the 43.1 mm radius change (SAE J1100 definition;
+    // worked in lib/shop/customers/counterBodyPoints.test.ts).
+    expect(text).toContain("Approach angle: 45.7° → 48.6°");
+    expect(text).toMatch(/Departure angle: \d+\.\d° → \d+\.\d°/);
+    expect(text).toMatch(/Ramp breakover angle: \d+\.\d° → \d+\.\d°/);
+    expect(text).toContain("Trail angles: from the body points the shop measured with the current tires");
+    expect(text).not.toContain("Cold pressure to set");
+
+    const { customerId, saved } = await customerWithSavedTruck("Ida Points", "(555) 010-7795");
+    const changed = { ...VEHICLE, placard: PLACARD, bodyPoints: BODY_POINTS };
+    const again = await quotes.POST(
+      req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId, vehicleId: saved.id, vehicle: changed, saveVehicle: true })),
+      ctx(),
+    );
+    expect(again.status).toBe(201);
+    expect((await db("customer_vehicles").where({ id: saved.id }).first()).body_points).toEqual(BODY_POINTS);
+    const later = await quotes.POST(req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId, vehicleId: saved.id })), ctx());
+    const { id } = await later.json();
+    const d2 = await (await quote.GET(req("GET", `/api/shop/quotes/${id}`), ctx({ id }))).json();
+    expect(d2.quote.fitment.angles).toEqual(detail.quote.fitment.angles);
+  });
+
+  it("refuses a negative height or a point inside the tire beside its field, as labelled, and stores nothing", async () => {
+    const quotesBefore = await db("quotes").count<{ count: string }[]>({ count: "*" });
+    const vehiclesBefore = await db("customer_vehicles").count<{ count: string }[]>({ count: "*" });
+    const negative = await makeQuote(
+      { ...VEHICLE, placard: PLACARD, bodyPoints: { ...BODY_POINTS, units: "imperial", midHeightMm: -420 } },
+      { saveVehicle: true },
+    );
+    const n = await negative.json();
+    expect(negative.status).toBe(422);
+    expect(Object.keys(n.fieldErrors)).toEqual(["vehicle.bodyPoints.midHeightMm"]);
+    expect(n.fieldErrors["vehicle.bodyPoints.midHeightMm"][0]).toMatch(/^Lowest point midway, height \(in\): /);
+    const inside = await makeQuote(
+      { ...VEHICLE, bodyPoints: { ...BODY_POINTS, frontCornerHeightMm: 200, frontCornerAheadMm: 100 } },
+      { saveVehicle: true },
+    );
+    expect(inside.status).toBe(422);
+    expect((await inside.json()).fieldErrors["vehicle.bodyPoints.frontCornerHeightMm"][0]).toMatch(
+      /^Front corner height \(mm\): .*measured with the current tire/,
+    );
+    expect(await db("quotes").count<{ count: string }[]>({ count: "*" })).toEqual(quotesBefore);
+    expect(await db("customer_vehicles").count<{ count: string }[]>({ count: "*" })).toEqual(vehiclesBefore);
   });
 });

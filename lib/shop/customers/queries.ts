@@ -83,6 +83,7 @@ const vehicleColumns = (v: CounterVehicleForEngine) => ({
   axle_ratio: v.axleRatio,
   hub_bore_mm: v.hubBoreMm,
   load_placard: v.placard ? JSON.stringify(v.placard) : null,
+  body_points: v.bodyPoints ? JSON.stringify(v.bodyPoints) : null,
 });
 
 /** A customer's vehicle saved at the counter (inside the caller's transaction, so a refused quote saves nothing). */

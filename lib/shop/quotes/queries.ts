@@ -23,6 +23,7 @@ import { formatQuantity } from "@/lib/shop/quotes/quantity";
 import type { updateQuoteSchema } from "@/lib/shop/quotes/schema";
 import { TotalsError, computeTotals } from "@/lib/shop/quotes/totals";
 import { type CounterPlacard, quotePressure } from "@/lib/shop/customers/counterPlacard";
+import { type CounterBodyPoints, quoteAngles } from "@/lib/shop/customers/counterBodyPoints";
 import { type CounterVehicle, type CounterVehicleForEngine, counterVehicleForEngine } from "@/lib/shop/customers/schema";
 import type { Setup } from "@/lib/setup/model";
 import { bindAppDb } from "@/lib/platform/db/bind";
@@ -404,6 +405,7 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
         axleRatio: saved.axle_ratio,
         currentSetup: saved.current_setup as Setup,
         placard: saved.load_placard as CounterPlacard | null,
+        bodyPoints: saved.body_points as CounterBodyPoints | null,
       });
     }
     const items = await trx<CatalogItemRow>("catalog_items")
@@ -435,6 +437,7 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
       beadlock: wheel.beadlock,
     });
     if (v.placard) fit.pressure = quotePressure(v.placard, v.currentSetup, fit.setups.planned);
+    if (v.bodyPoints) fit.angles = quoteAngles(v.bodyPoints, v.currentSetup, fit.setups.planned);
     const services = await trx<CatalogItemRow>("catalog_items")
       .where({ shop_id: shopId, kind: "service" })
       .whereNull("archived_at")

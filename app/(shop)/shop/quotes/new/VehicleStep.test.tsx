@@ -31,6 +31,16 @@ const SAVED: CustomerVehicle = {
     frontAxleKg: lbToKg(2200),
     rearAxleKg: lbToKg(2000),
   },
+  // Measured in mm with the current tires.
+  bodyPoints: {
+    units: "metric",
+    frontCornerHeightMm: 750,
+    frontCornerAheadMm: 900,
+    rearCornerHeightMm: null,
+    rearCornerBehindMm: null,
+    midHeightMm: 420,
+    wheelbaseMm: 2800,
+  },
   createdAt: "2026-12-01T10:00:00.000Z",
 };
 
@@ -94,6 +104,10 @@ describe("the counter's vehicle step with a saved vehicle", () => {
     expect(valueOf("Front axle weight, scale ticket (lb)")).toBe("2200");
     expect(valueOf("Rear axle weight, scale ticket (lb)")).toBe("2000");
     expect((screen.getByRole("radio", { name: "Car" }) as HTMLInputElement).checked).toBe(true);
+    // 750 mm = 29.53 in, 2800 mm = 110.24 in (1 in = 25.4 mm exactly, NIST SP 811), shown rounded.
+    expect(valueOf("Front corner height (in)")).toMatch(/^29\.5/);
+    expect(valueOf("Wheelbase (in)")).toMatch(/^110\.2/);
+    expect(valueOf("Rear corner height (in)")).toBe("");
     const box = screen.getByRole("checkbox", { name: "Save the changes to this saved vehicle" }) as HTMLInputElement;
     expect(box.disabled).toBe(true);
   });
@@ -124,6 +138,9 @@ describe("the counter's vehicle step with a saved vehicle", () => {
     expect(sent.vehicle.placard.placardRearKpa).toBeCloseTo(SAVED.placard!.placardRearKpa, 6);
     expect(sent.vehicle.placard.frontAxleKg).toBeCloseTo(SAVED.placard!.frontAxleKg!, 6);
     expect(sent.vehicle.placard.vehicleKind).toBe("light-truck");
+    // The body points as stored, their exact values kept through the inch fields.
+    expect(sent.vehicle.bodyPoints).toMatchObject({ frontCornerHeightMm: expect.closeTo(750, 6), wheelbaseMm: expect.closeTo(2800, 6) });
+    expect(sent.vehicle.bodyPoints.rearCornerHeightMm).toBeNull();
     expect(sent.vehicle.description).toBe("Invented wagon");
     await waitFor(() => expect(fetchMock.mock.calls.some(([u]) => u === "/api/shop/fitment/candidates")).toBe(true));
   });

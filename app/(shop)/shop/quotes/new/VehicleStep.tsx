@@ -51,10 +51,12 @@ export function VehicleStep(props: {
   const onFind = (ev: React.FormEvent) => {
     // The placard is read into SI by its own fields (kept apart: their unit follows the inch/metric choice).
     const p = placard.value();
+    const b = placard.bodyPoints();
     form.setValue("placard", p ?? null);
+    form.setValue("bodyPoints", b ?? null);
     return handleSubmit(async (v) => {
       setFailure(null);
-      if (p === undefined) return setFailure("See the messages beside the placard's fields.");
+      if (p === undefined || b === undefined) return setFailure("See the messages beside the placard's fields.");
       await find(v);
     })(ev);
   };
@@ -76,7 +78,7 @@ export function VehicleStep(props: {
       currentSetup: setupToForm(v.currentSetup),
       axleRatio: v.axleRatio ? String(v.axleRatio) : "",
     });
-    placard.fill(v.placard);
+    placard.fill(v.placard, v.bodyPoints);
     props.onSaved(v.id);
     props.onEdited(false);
   };
