@@ -152,11 +152,27 @@ describe("the counter's vehicle step with a saved vehicle", () => {
     await userEvent.clear(rear);
     await userEvent.type(rear, "-2000");
     await userEvent.click(screen.getByRole("button", { name: "Find fitments" }));
-    expect(await screen.findByText("See the messages beside the placard's fields.")).toBeTruthy();
+    expect(await screen.findByText("See the messages beside the placard and body point fields.")).toBeTruthy();
     const described = (rear.getAttribute("aria-describedby") ?? "").split(" ");
     const text = described.map((id) => document.getElementById(id)?.textContent ?? "").join(" ");
     expect(text).toContain("Rear axle weight, scale ticket (lb): must be between 221 and 44092 lb, e.g. 2900.");
     expect(fetchMock.mock.calls.some(([u]) => u === "/api/shop/fitment/candidates")).toBe(false);
     expect(screen.queryByTestId("request")).toBeNull();
+  });
+
+  it("refuses a body point inside the current tire beside its field, as labelled, and finds nothing", async () => {
+    renderStep();
+    await pickSaved();
+    // 4 in high and 2 in ahead of the axle: inside the 362.2 mm (14.3 in) radius of 225/65R17 (17 × 25.4 + 2 × 0.65 × 225 = 724.3 mm across, ISO 4000-1).
+    await userEvent.clear(screen.getByLabelText("Front corner height (in)"));
+    await userEvent.type(screen.getByLabelText("Front corner height (in)"), "4");
+    await userEvent.clear(screen.getByLabelText("Front corner ahead of the front axle (in)"));
+    await userEvent.type(screen.getByLabelText("Front corner ahead of the front axle (in)"), "2");
+    await userEvent.click(screen.getByRole("button", { name: "Find fitments" }));
+    expect(await screen.findByText("See the messages beside the placard and body point fields.")).toBeTruthy();
+    const field = screen.getByLabelText("Front corner height (in)");
+    const said = (field.getAttribute("aria-describedby") ?? "").split(" ").map((id) => document.getElementById(id)?.textContent ?? "");
+    expect(said.join(" ")).toMatch(/Front corner height \(in\): .*measured with the current tire, 225\/65R17 102H/);
+    expect(fetchMock.mock.calls.some(([u]) => u === "/api/shop/fitment/candidates")).toBe(false);
   });
 });

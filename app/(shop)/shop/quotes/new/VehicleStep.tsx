@@ -56,7 +56,7 @@ export function VehicleStep(props: {
     form.setValue("bodyPoints", b ?? null);
     return handleSubmit(async (v) => {
       setFailure(null);
-      if (p === undefined || b === undefined) return setFailure("See the messages beside the placard's fields.");
+      if (p === undefined || b === undefined) return setFailure("See the messages beside the placard and body point fields.");
       await find(v);
     })(ev);
   };
