@@ -1,5 +1,6 @@
 import { describe, expect, it, vi } from "vitest";
 import { psiToKpa } from "@/lib/fitment";
+import { COUNTER_BODY_POINTS } from "@/lib/shop/customers/placardTestUtil";
 import { ctx, req } from "./support/requests";
 import { depositPaidQuote, firstFreeStart, STAFF_A } from "./support/quoteJourney";
 import { SHOP_A, VEHICLE, quoteRequest } from "./support/shopFixture";
@@ -37,14 +38,26 @@ async function pdfText(id: string): Promise<string> {
 }
 
 let n = 0;
-async function makeQuote(vehicle: Record<string, unknown>) {
+async function makeQuote(vehicle: Record<string, unknown>, extra: Record<string, unknown> = {}) {
   n += 1;
   const cres = await customers.POST(
     req("POST", "/api/shop/customers", { name: `Ida Placard ${n}`, phone: `(555) 010-778${n}`, email: "" }),
     ctx(),
   );
   const c = await cres.json();
-  return quotes.POST(req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId: c.customer.id, vehicle })), ctx());
+  return quotes.POST(req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId: c.customer.id, vehicle, ...extra })), ctx());
+}
+
+/** A new customer whose first quote saved the counter truck with its placard; their id and the saved vehicle's row. */
+async function customerWithSavedTruck(name: string, phone: string) {
+  const cres = await customers.POST(req("POST", "/api/shop/customers", { name, phone, email: "" }), ctx());
+  const customerId = (await cres.json()).customer.id as string;
+  const first = await quotes.POST(
+    req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId, vehicle: { ...VEHICLE, placard: PLACARD }, saveVehicle: true })),
+    ctx(),
+  );
+  expect(first.status).toBe(201);
+  return { customerId, saved: await db("customer_vehicles").where({ customer_id: customerId }).first() };
 }
 
 describe("a quote for a counter vehicle with its door placard gives the cold pressure to set", () => {
@@ -111,19 +124,134 @@ describe("a quote for a counter vehicle with its door placard gives the cold pre
   });
 
   it("a saved vehicle keeps its placard: a later quote for it gives the same pressure to set", async () => {
-    const cres = await customers.POST(req("POST", "/api/shop/customers", { name: "Ida Saved", phone: "(555) 010-7799", email: "" }), ctx());
-    const customerId = (await cres.json()).customer.id as string;
-    const first = await quotes.POST(
-      req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId, vehicle: { ...VEHICLE, placard: PLACARD }, saveVehicle: true })),
-      ctx(),
-    );
-    expect(first.status).toBe(201);
-    const saved = await db("customer_vehicles").where({ customer_id: customerId }).first();
+    const { customerId, saved } = await customerWithSavedTruck("Ida Saved", "(555) 010-7799");
     expect(saved.load_placard).toMatchObject({ placardTire: "265/70R17 113T", frontAxleKg: 1430, units: "imperial" });
     const again = await quotes.POST(req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId, vehicleId: saved.id })), ctx());
     const { id } = await again.json();
     expect(again.status).toBe(201);
     const detail = await (await quote.GET(req("GET", `/api/shop/quotes/${id}`), ctx({ id }))).json();
     expect(detail.quote.fitment.pressure.axles.map((a: { kpa: number }) => Math.round(a.kpa))).toEqual([261, 261]);
+  });
+
+  it("a saved vehicle changed at the counter: ticked, the changes are written over it (no second copy); unticked, it stays as stored", async () => {
+    const { customerId, saved } = await customerWithSavedTruck("Ida Changed", "(555) 010-7798");
+    const changed = { ...VEHICLE, placard: { ...PLACARD, vehicleKind: "passenger-car", placardFrontKpa: psiToKpa(36), rearAxleKg: 1250 } };
+
+    const kept = await quotes.POST(
+      req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId, vehicleId: saved.id, vehicle: changed, saveVehicle: false })),
+      ctx(),
+    );
+    expect(kept.status).toBe(201);
+    expect((await db("customer_vehicles").where({ id: saved.id }).first()).load_placard).toEqual(saved.load_placard);
+
+    const made = await quotes.POST(
+      req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId, vehicleId: saved.id, vehicle: changed, saveVehicle: true })),
+      ctx(),
+    );
+    const { id } = await made.json();
+    expect(made.status).toBe(201);
+    const rows = await db("customer_vehicles").where({ customer_id: customerId });
+    expect(rows).toHaveLength(1);
+    expect(rows[0].load_placard).toMatchObject({ vehicleKind: "passenger-car", rearAxleKg: 1250 });
+    expect(rows[0].load_placard.placardFrontKpa).toBeCloseTo(psiToKpa(36), 6);
+    const detail = await (await quote.GET(req("GET", `/api/shop/quotes/${id}`), ctx({ id }))).json();
+    expect(detail.quote.vehicleId).toBe(saved.id);
+    expect(detail.quote.fitment.pressure.placardFrontKpa).toBeCloseTo(psiToKpa(36), 6);
+  });
+
+  it("a saved vehicle's change refused (a negative axle weight) or for another customer's vehicle: nothing stored, the vehicle as it was", async () => {
+    const { customerId, saved } = await customerWithSavedTruck("Ida Refused", "(555) 010-7797");
+    const before = await db("quotes").count<{ count: string }[]>({ count: "*" });
+    const bad = await quotes.POST(
+      req(
+        "POST",
+        "/api/shop/quotes",
+        await quoteRequest(db, {
+          customerId,
+          vehicleId: saved.id,
+          vehicle: { ...VEHICLE, placard: { ...PLACARD, rearAxleKg: -1200 } },
+          saveVehicle: true,
+        }),
+      ),
+      ctx(),
+    );
+    const body = await bad.json();
+    expect(bad.status).toBe(422);
+    expect(body.fieldErrors["vehicle.placard.rearAxleKg"][0]).toMatch(/^Rear axle weight, scale ticket \(lb\):/);
+    const other = await customers.POST(
+      req("POST", "/api/shop/customers", { name: "Ida Other", phone: "(555) 010-7796", email: "" }),
+      ctx(),
+    );
+    const otherId = (await other.json()).customer.id as string;
+    const notTheirs = await quotes.POST(
+      req(
+        "POST",
+        "/api/shop/quotes",
+        await quoteRequest(db, { customerId: otherId, vehicleId: saved.id, vehicle: VEHICLE, saveVehicle: true }),
+      ),
+      ctx(),
+    );
+    expect(notTheirs.status).toBe(422);
+    expect((await notTheirs.json()).fieldErrors.vehicleId).toEqual(["That vehicle was not found."]);
+    expect(await db("quotes").count<{ count: string }[]>({ count: "*" })).toEqual(before);
+    expect(await db("customer_vehicles").where({ id: saved.id }).first()).toEqual(saved);
+  });
+});
+
+/** The counter truck's body points, measured with its 265/70R17 tires (invented). */
+const BODY_POINTS = COUNTER_BODY_POINTS;
+
+describe("a quote for a counter vehicle with its body points gives the trail angles now and with the quoted tires", () => {
+  it("in its summary, its PDF and its cautions; a saved vehicle keeps them for a later quote", async () => {
+    const made = await makeQuote({ ...VEHICLE, bodyPoints: BODY_POINTS });
+    const body = await made.json();
+    expect(made.status, JSON.stringify(body)).toBe(201);
+    const detail = await (await quote.GET(req("GET", `/api/shop/quotes/${body.id}`), ctx({ id: body.id }))).json();
+    expect(detail.quote.fitment.angles.angles.map((a: { kind: string }) => a.kind)).toEqual(["approach", "departure", "breakover"]);
+    const text = await pdfText(body.id);
+    // 265/70R17 (802.8 mm) → 35x12.50R17LT (889 mm): the tangent from the corner 900 mm ahead and 750 mm
+    // high, 45.7° → 48.6° with the corner raised by the 43.1 mm radius change (SAE J1100 definition;
+    // worked in lib/shop/customers/counterBodyPoints.test.ts).
+    expect(text).toContain("Approach angle: 45.7° → 48.6°");
+    expect(text).toMatch(/Departure angle: \d+\.\d° → \d+\.\d°/);
+    expect(text).toMatch(/Ramp breakover angle: \d+\.\d° → \d+\.\d°/);
+    expect(text).toContain("Trail angles: from the body points the shop measured with the current tires");
+    expect(text).not.toContain("Cold pressure to set");
+
+    const { customerId, saved } = await customerWithSavedTruck("Ida Points", "(555) 010-7795");
+    const changed = { ...VEHICLE, placard: PLACARD, bodyPoints: BODY_POINTS };
+    const again = await quotes.POST(
+      req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId, vehicleId: saved.id, vehicle: changed, saveVehicle: true })),
+      ctx(),
+    );
+    expect(again.status).toBe(201);
+    expect((await db("customer_vehicles").where({ id: saved.id }).first()).body_points).toEqual(BODY_POINTS);
+    const later = await quotes.POST(req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId, vehicleId: saved.id })), ctx());
+    const { id } = await later.json();
+    const d2 = await (await quote.GET(req("GET", `/api/shop/quotes/${id}`), ctx({ id }))).json();
+    expect(d2.quote.fitment.angles).toEqual(detail.quote.fitment.angles);
+  });
+
+  it("refuses a negative height or a point inside the tire beside its field, as labelled, and stores nothing", async () => {
+    const quotesBefore = await db("quotes").count<{ count: string }[]>({ count: "*" });
+    const vehiclesBefore = await db("customer_vehicles").count<{ count: string }[]>({ count: "*" });
+    const negative = await makeQuote(
+      { ...VEHICLE, placard: PLACARD, bodyPoints: { ...BODY_POINTS, units: "imperial", midHeightMm: -420 } },
+      { saveVehicle: true },
+    );
+    const n = await negative.json();
+    expect(negative.status).toBe(422);
+    expect(Object.keys(n.fieldErrors)).toEqual(["vehicle.bodyPoints.midHeightMm"]);
+    expect(n.fieldErrors["vehicle.bodyPoints.midHeightMm"][0]).toMatch(/^Lowest point midway, height \(in\): /);
+    const inside = await makeQuote(
+      { ...VEHICLE, bodyPoints: { ...BODY_POINTS, frontCornerHeightMm: 200, frontCornerAheadMm: 100 } },
+      { saveVehicle: true },
+    );
+    expect(inside.status).toBe(422);
+    expect((await inside.json()).fieldErrors["vehicle.bodyPoints.frontCornerHeightMm"][0]).toMatch(
+      /^Front corner height \(mm\): .*measured with the current tire/,
+    );
+    expect(await db("quotes").count<{ count: string }[]>({ count: "*" })).toEqual(quotesBefore);
+    expect(await db("customer_vehicles").count<{ count: string }[]>({ count: "*" })).toEqual(vehiclesBefore);
   });
 });

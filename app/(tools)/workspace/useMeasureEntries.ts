@@ -18,21 +18,23 @@ const same = (a: DisplayPrefs, b: DisplayPrefs) => a.units === b.units && a.leng
  * figure is converted (lib/comparisons/measureEntry: convertEntry) at render time, the way the
  * workspace rewrites its own fields, so no figure is ever shown relabelled in another unit.
  * `note(key)` is the message for a field whose text could not be converted. `initial` fills
- * fields from stored values (kPa, kg, mm), written in the current choice (the garage's forms).
+ * fields from stored values (kPa, kg, mm), written in the current choice (the garage's forms);
+ * `fill` does the same later (the counter's saved vehicles).
  */
 export function useMeasureEntries<K extends string>(
   quantities: Record<K, Quantity>,
   prefs: DisplayPrefs,
   initial?: Partial<Record<K, number | null>>,
 ) {
-  const [state, setState] = useState<EntriesState<K>>(() => {
+  const fromValues = (values: Partial<Record<K, number | null>> | undefined, p: DisplayPrefs): EntriesState<K> => {
     const entries = {} as Record<K, MeasureEntry>;
     for (const k of Object.keys(quantities) as K[]) {
-      const v = initial?.[k];
-      entries[k] = v === undefined || v === null ? typed("") : entryFromValue(v, quantities[k], prefs);
+      const v = values?.[k];
+      entries[k] = v === undefined || v === null ? typed("") : entryFromValue(v, quantities[k], p);
     }
-    return { entries, prefs, unconverted: {} };
-  });
+    return { entries, prefs: p, unconverted: {} };
+  };
+  const [state, setState] = useState<EntriesState<K>>(() => fromValues(initial, prefs));
   let s = state;
   if (!same(state.prefs, prefs)) {
     const entries = { ...state.entries };
@@ -58,5 +60,7 @@ export function useMeasureEntries<K extends string>(
       ? `The unit is now ${measureUnit(quantities[key], prefs)}; this text, typed in ${was}, was not converted — check it, then retype it.`
       : undefined;
   };
-  return { entries: s.entries, set, note };
+  /** Every figure replaced by stored values (kPa, kg, mm), exact values kept: a saved record picked after the form opened. */
+  const fill = (values: Partial<Record<K, number | null>> | null) => setState(fromValues(values ?? undefined, prefs));
+  return { entries: s.entries, set, note, fill };
 }

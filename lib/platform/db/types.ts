@@ -179,6 +179,8 @@ export interface CustomerVehicleRow {
   hub_bore_mm: number | null;
   /** The door placard and axle loads, a lib/shop/customers/counterPlacard CounterPlacard (JSONB), or null. */
   load_placard: unknown;
+  /** The body points, a lib/shop/customers/counterBodyPoints CounterBodyPoints (JSONB), or null. */
+  body_points: unknown;
   created_at: Date;
 }
 

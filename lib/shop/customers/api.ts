@@ -5,6 +5,7 @@
 import type { CustomerRow, CustomerVehicleRow } from "@/lib/platform/db/types";
 import { iso, rowTimes } from "@/lib/platform/http/isoDates";
 import type { Setup } from "@/lib/setup/model";
+import type { CounterBodyPoints } from "./counterBodyPoints";
 import type { CounterPlacard } from "./counterPlacard";
 
 export interface Customer {
@@ -28,6 +29,8 @@ export interface CustomerVehicle {
   hubBoreMm: number | null;
   /** The door placard and axle loads, when the counter took them (SI). */
   placard: CounterPlacard | null;
+  /** The body points, when the counter measured them (mm). */
+  bodyPoints: CounterBodyPoints | null;
   createdAt: string;
 }
 
@@ -56,6 +59,7 @@ export function customerVehicleDto(r: CustomerVehicleRow): CustomerVehicle {
     axleRatio: r.axle_ratio,
     hubBoreMm: r.hub_bore_mm,
     placard: (r.load_placard ?? null) as CounterPlacard | null,
+    bodyPoints: (r.body_points ?? null) as CounterBodyPoints | null,
     createdAt: iso(r.created_at),
   };
 }

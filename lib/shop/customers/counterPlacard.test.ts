@@ -50,6 +50,29 @@ describe("quotePressure: the cold pressure to set per axle from a counter vehicl
     expect(p.maxKpa).toBeCloseTo(psiToKpa(50), 0);
   });
 
+  it("the vehicle kind the counter chose: a passenger tire quoted on a car vs on a light truck gets different pressures", () => {
+    // An invented van placarded for LT245/75R17 121/118S LRE at 35 psi, quoted a passenger 265/70R17 113T.
+    const placard = { ...PLACARD, placardTire: "LT245/75R17 121/118S LRE" };
+    const current: Setup = { ...CUR, tire: "LT245/75R17 121/118S LRE" };
+    const planned: Setup = { ...PLAN, tire: "265/70R17 113T", wheelWidthIn: 8 };
+    const car = quotePressure({ ...placard, vehicleKind: "passenger-car" }, current, planned);
+    const truck = quotePressure({ ...placard, vehicleKind: "light-truck" }, current, planned);
+    if ("missing" in car || "missing" in truck) throw new Error("no pressure");
+    // TRA light-truck load formula L ∝ P^0.585 (NHTSA "The Pneumatic Tire", 2006): LI 121 = 1450 kg
+    // (ISO 4000-1 load-index table) at the load range E maximum, 80 psi, so at 35 psi it carries
+    // 1450 × (35 / 80)^0.585 = 894.0 kg. The passenger tire, TRA passenger form L ∝ P^0.5: LI 113 =
+    // 1150 kg at 250 kPa (standard-load reference, from memory); on a light truck its load is divided
+    // by 1.10 (TRA; FMVSS 120 S5.1.2), so the same 894.0 kg needs 1.10² = 1.21 times the pressure.
+    const placardKg = 1450 * (35 / 80) ** 0.585;
+    expect(placardKg).toBeCloseTo(894.0, 1);
+    const onCar = 250 * (placardKg / 1150) ** 2;
+    const onTruck = 250 * (placardKg / (1150 / 1.1)) ** 2;
+    expect(onCar).toBeCloseTo(151.1, 1); // 21.9 psi
+    expect(onTruck).toBeCloseTo(182.8, 1); // 26.5 psi
+    for (const a of car.axles) expect([a.kpa, a.decidedBy]).toEqual([expect.closeTo(onCar, 1), "placard"]);
+    for (const a of truck.axles) expect([a.kpa, a.decidedBy]).toEqual([expect.closeTo(onTruck, 1), "placard"]);
+  });
+
   it("uses the axle ratings without a scale ticket", () => {
     const p = quotePressure(
       { ...PLACARD, frontAxleKg: null, rearAxleKg: null, frontGawrKg: lbToKg(3700), rearGawrKg: lbToKg(3900) },

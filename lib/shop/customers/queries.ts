@@ -4,6 +4,7 @@ import type { CustomerRow, CustomerVehicleRow } from "@/lib/platform/db/types";
 import { type Customer, type CustomerVehicle, customerDto, customerVehicleDto } from "@/lib/shop/customers/api";
 import { containsPattern, searchKey } from "@/lib/platform/search/normalize";
 import type { CustomerInput } from "@/lib/shop/quotes/schema";
+import type { CounterVehicleForEngine } from "@/lib/shop/customers/schema";
 import { bindAppDb } from "@/lib/platform/db/bind";
 import { ConflictError, InvalidError, NotFoundError } from "@/lib/platform/errors";
 
@@ -72,6 +73,34 @@ export async function listVehicles(db: Knex, shopId: string, customerId: string)
   return (
     await db<CustomerVehicleRow>("customer_vehicles").where({ shop_id: shopId, customer_id: customerId }).orderBy("created_at", "desc")
   ).map(customerVehicleDto);
+}
+
+/** The stored columns of a counter vehicle, as the engine reads it (schema.ts counterVehicleForEngine). */
+const vehicleColumns = (v: CounterVehicleForEngine) => ({
+  description: v.description,
+  bolt_pattern: v.boltPattern,
+  current_setup: JSON.stringify(v.currentSetup),
+  axle_ratio: v.axleRatio,
+  hub_bore_mm: v.hubBoreMm,
+  load_placard: v.placard ? JSON.stringify(v.placard) : null,
+  body_points: v.bodyPoints ? JSON.stringify(v.bodyPoints) : null,
+});
+
+/** A customer's vehicle saved at the counter (inside the caller's transaction, so a refused quote saves nothing). */
+export async function insertVehicle(db: Knex, shopId: string, customerId: string, v: CounterVehicleForEngine): Promise<string> {
+  const [row] = await db("customer_vehicles")
+    .insert({ shop_id: shopId, customer_id: customerId, ...vehicleColumns(v) })
+    .returning(["id"]);
+  return (row as { id: string }).id;
+}
+
+/**
+ * A saved vehicle the counter picked and changed (its placard re-typed, say), written over whole;
+ * NotFoundError when it is not this customer's.
+ */
+export async function updateVehicle(db: Knex, shopId: string, customerId: string, id: string, v: CounterVehicleForEngine): Promise<void> {
+  const n = await db("customer_vehicles").where({ id, shop_id: shopId, customer_id: customerId }).update(vehicleColumns(v));
+  if (n === 0) throw new NotFoundError("That vehicle");
 }
 
 /** These queries on the app's database handle, for pages and route handlers. */

@@ -12,6 +12,7 @@ import { SETUP_FIELD_LABEL } from "@/lib/setup/fields";
 import { type Setup, type SetupForm, toEngineSetup } from "@/lib/setup/model";
 import { optionalLengthField, setupSchema } from "@/lib/setup/schema";
 import { requiredText } from "@/lib/platform/validation/requiredText";
+import { type CounterBodyPoints, bodyPointsSchema } from "./counterBodyPoints";
 import { type CounterPlacard, placardSchema } from "./counterPlacard";
 
 const engineMessage = (e: unknown, fallback: string) => (e instanceof FitmentInputError ? e.message : fallback);
@@ -40,12 +41,16 @@ const counterVehicleFields = z.object({
     .optional(),
 });
 
-/** The form's values: text as typed, the setup as lib/setup's form shape; the placard already read into SI (counterPlacard.ts). */
+/** The form's values: text as typed, the setup as lib/setup's form shape; the placard and body points already read into SI (counterPlacard.ts, counterBodyPoints.ts). */
 export type CounterVehicleForm = Omit<z.input<typeof counterVehicleFields>, "currentSetup"> & {
   currentSetup: SetupForm;
   placard?: unknown;
+  bodyPoints?: unknown;
 };
-export type CounterVehicle = z.output<typeof counterVehicleFields> & { placard?: CounterPlacard | null };
+export type CounterVehicle = z.output<typeof counterVehicleFields> & {
+  placard?: CounterPlacard | null;
+  bodyPoints?: CounterBodyPoints | null;
+};
 
 /**
  * The flat vehicle the counter took before its setup was lib/setup's (`tireSize`, `offsetMode`,
@@ -93,14 +98,23 @@ export const counterVehicleSchema = z.unknown().transform((v, ctx) => {
   const flat = isFlat(v);
   const r = counterVehicleFields.safeParse(flat ? fromFlat(v) : v);
   if (r.success) {
-    const raw = isObject(v) ? v.placard : undefined;
-    if (raw === undefined || raw === null) return r.data;
-    // The placard's checks need the current tire (the garage's checks take one); the setup read above.
+    // The placard's and the body points' checks need the current tire (the garage's checks take one); the setup read above.
     const s = r.data.currentSetup;
-    const p = placardSchema(() => ({ text: s.tire, diameterMm: setupGeometry(toEngineSetup(s)).overallDiameterMm })).safeParse(raw);
-    if (p.success) return { ...r.data, placard: p.data };
-    for (const i of p.error.issues) ctx.addIssue({ code: "custom", path: ["placard", ...i.path], message: i.message });
-    return z.NEVER;
+    const current = () => ({ text: s.tire, diameterMm: setupGeometry(toEngineSetup(s)).overallDiameterMm });
+    const out: CounterVehicle = { ...r.data };
+    let refused = false;
+    for (const [key, schema] of [
+      ["placard", placardSchema(current)],
+      ["bodyPoints", bodyPointsSchema(current)],
+    ] as const) {
+      const raw = isObject(v) ? v[key] : undefined;
+      if (raw === undefined || raw === null) continue;
+      const p = schema.safeParse(raw);
+      if (p.success) Object.assign(out, { [key]: p.data });
+      else for (const i of p.error.issues) ctx.addIssue({ code: "custom", path: [key, ...i.path], message: i.message });
+      refused ||= !p.success;
+    }
+    return refused ? z.NEVER : out;
   }
   for (const i of r.error.issues) ctx.addIssue({ code: "custom", path: flat ? flatPath(i.path) : i.path, message: i.message });
   return z.NEVER;
@@ -120,6 +134,8 @@ export interface CounterVehicleForEngine {
   wheel: { diameterIn: number; widthIn: number; offsetMm: number };
   /** The door placard (and axle loads) when the counter took them. */
   placard: CounterPlacard | null;
+  /** The body points when the counter measured them. */
+  bodyPoints: CounterBodyPoints | null;
 }
 
 /**
@@ -138,6 +154,7 @@ export function counterVehicleForEngine(v: {
   axleRatio?: number | null;
   currentSetup: Setup;
   placard?: CounterPlacard | null;
+  bodyPoints?: CounterBodyPoints | null;
 }): CounterVehicleForEngine {
   return {
     description: v.description,
@@ -148,5 +165,6 @@ export function counterVehicleForEngine(v: {
     tireSize: parseTireSize(v.currentSetup.tire).text,
     wheel: toEngineSetup(v.currentSetup).wheel,
     placard: v.placard ?? null,
+    bodyPoints: v.bodyPoints ?? null,
   };
 }

@@ -1,8 +1,9 @@
 import { describe, expect, it } from "vitest";
 import { quotePressure } from "@/lib/shop/customers/counterPlacard";
 import { COUNTER_PLACARD } from "@/lib/shop/customers/placardTestUtil";
+import { quoteAngles } from "@/lib/shop/customers/counterBodyPoints";
 import { quoteCautions } from "./cautions";
-import { summarize } from "./fitment";
+import { fitmentChangeRows, summarize } from "./fitment";
 
 const current = { boltPattern: "6x5.5", tireSize: "265/70R17", wheel: { diameterIn: 17, widthIn: 8, offsetMm: 25 } };
 const LIFT = /^Lift and steering changes/;
@@ -59,5 +60,25 @@ describe("quote cautions", () => {
     const d = quoteCautions({ ...fit, pressure: noLoads }).find((x) => x.startsWith("Cold pressure"))!;
     expect(d).toMatch(/door placard and the tire maker's load table/);
     expect(d).toMatch(/Enter the axle weights \(scale ticket\) or the axle ratings \(GAWR\)/);
+  });
+
+  it("with the counter's body points, the angle rows (now → quoted) and their caution, with any angle left out said why", () => {
+    const big = summarize(current, "35x12.50R17LT", { diameterIn: 17, widthIn: 9, offsetMm: -12, beadlock: false });
+    const points = {
+      units: "metric" as const,
+      frontCornerHeightMm: 750,
+      frontCornerAheadMm: 900,
+      rearCornerHeightMm: null,
+      rearCornerBehindMm: null,
+    };
+    const angles = quoteAngles({ ...points, midHeightMm: null, wheelbaseMm: null }, big.setups.current, big.setups.planned);
+    // 45.7° → 48.6°: the tangent construction worked in lib/shop/customers/counterBodyPoints.test.ts (SAE J1100 definition).
+    expect(fitmentChangeRows({ ...big, angles })).toContainEqual(["Approach angle", "45.7° → 48.6°"]);
+    expect(fitmentChangeRows(big).some(([k]) => /angle/.test(k))).toBe(false);
+    const c = quoteCautions({ ...big, angles: { ...angles, messages: ["Ramp breakover: not computed."] } });
+    expect(c.find((x) => x.startsWith("Trail angles:"))).toMatch(
+      /measured with the current tires.*vehicle maker's guidance\. Ramp breakover: not computed\.$/,
+    );
+    expect(quoteCautions(big).some((x) => x.startsWith("Trail angles:"))).toBe(false);
   });
 });

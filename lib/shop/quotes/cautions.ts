@@ -2,6 +2,7 @@ import { diameterChange } from "@/lib/comparisons/assess/assessChange";
 import { tirePressureLimits } from "@/lib/shop/workOrders/pressureLimit";
 import { pressureWords } from "@/lib/shop/workOrders/signedText";
 import { pressureToSetText } from "@/lib/shop/customers/counterPlacard";
+import { ANGLE_CAUTION } from "@/lib/shop/customers/counterBodyPoints";
 import type { FitmentSummary } from "./fitment";
 
 /**
@@ -24,7 +25,7 @@ function pressureCaution(tire: string, pressure: FitmentSummary["pressure"]): st
  * to the makers and licensed practice; Hubface gives no torque figure of its own, and for pressure
  * only the quoted tire's limits.
  */
-export function quoteCautions(fit: Pick<FitmentSummary, "planned" | "diameterChangeMm" | "pressure">): string[] {
+export function quoteCautions(fit: Pick<FitmentSummary, "planned" | "diameterChangeMm" | "pressure" | "angles">): string[] {
   const out = [
     "Bead seating: inflate only in a restraining cage with a clip-on chuck and remote gauge, standing clear of the assembly; never exceed the tire maker's maximum bead-seating pressure.",
     "Wheel fasteners: tighten in a crisscross order to the vehicle maker's torque figure and re-check the torque after the first 50 to 100 miles (80 to 160 km).",
@@ -41,6 +42,7 @@ export function quoteCautions(fit: Pick<FitmentSummary, "planned" | "diameterCha
       "Lift and steering changes must be done to the lift maker's instructions and local vehicle codes; check brake lines, steering stops and clearance at full lock and full compression.",
     );
   }
+  if (fit.angles) out.push([ANGLE_CAUTION, ...fit.angles.messages].join(" "));
   out.push(
     "All figures are computed from nominal sizes; actual tire dimensions vary by maker and model. The makers' data and a licensed technician's judgement take precedence.",
   );

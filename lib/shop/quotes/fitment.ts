@@ -17,6 +17,7 @@ import {
 import { assessChange } from "@/lib/comparisons/assess/assessChange";
 import { type Finding, type FindingKind, type FindingOf, findingsOf } from "@/lib/comparisons/assess/vocabulary";
 import { type QuotePressure, axlePressureWords } from "@/lib/shop/customers/counterPlacard";
+import { type QuoteAngles, angleRows } from "@/lib/shop/customers/counterBodyPoints";
 import type { Setup } from "@/lib/setup/model";
 import { checkWheelOnHub, hubRefusal } from "./hubFit";
 
@@ -74,6 +75,8 @@ export interface FitmentSummary {
   setups?: { current: Setup; planned: Setup };
   /** The cold pressure to set per axle, when the counter took the vehicle's door placard (lib/shop/customers/counterPlacard.ts). */
   pressure?: QuotePressure;
+  /** The trail angles now and with the quoted tires, when the counter measured the body points (lib/shop/customers/counterBodyPoints.ts). */
+  angles?: QuoteAngles;
 }
 
 /** A summary just computed: its findings and setups are there. */
@@ -216,6 +219,8 @@ export function fitmentChangeRows(fit: FitmentSummary): [string, string][] {
     ]);
   // Only with the placard the counter took; its caution (cautions.ts) says how it was found and its limits.
   if (fit.pressure && "axles" in fit.pressure) rows.push(["Cold pressure to set", axlePressureWords(fit.pressure)]);
+  // Only with the body points the counter measured; their caution (cautions.ts) says how they were found.
+  if (fit.angles) rows.push(...angleRows(fit.angles));
   return rows;
 }
 

@@ -15,7 +15,7 @@ import { ConflictError, InvalidError, NotFoundError } from "@/lib/platform/error
 import { type QuoteListItem, type QuoteListRow, type QuotePage, quoteListItemDto } from "@/lib/shop/quotes/api";
 import { QUOTE_EXPORT_MAX, QUOTE_PAGE_SIZE, type QuoteListQuery, type QuoteSort } from "@/lib/shop/quotes/listQuery";
 import { containsPattern, searchKey } from "@/lib/platform/search/normalize";
-import { phoneDigits } from "@/lib/shop/customers/queries";
+import { insertVehicle, phoneDigits, updateVehicle } from "@/lib/shop/customers/queries";
 import { type HubCheck, type QuoteDocument, buildQuoteDocument, hubChecksOf } from "@/lib/shop/quotes/document";
 import { type FitmentSummary, summarize } from "@/lib/shop/quotes/fitment";
 import { checkWheelOnHub, hubRefusal } from "@/lib/shop/quotes/hubFit";
@@ -23,6 +23,7 @@ import { formatQuantity } from "@/lib/shop/quotes/quantity";
 import type { updateQuoteSchema } from "@/lib/shop/quotes/schema";
 import { TotalsError, computeTotals } from "@/lib/shop/quotes/totals";
 import { type CounterPlacard, quotePressure } from "@/lib/shop/customers/counterPlacard";
+import { type CounterBodyPoints, quoteAngles } from "@/lib/shop/customers/counterBodyPoints";
 import { type CounterVehicle, type CounterVehicleForEngine, counterVehicleForEngine } from "@/lib/shop/customers/schema";
 import type { Setup } from "@/lib/setup/model";
 import { bindAppDb } from "@/lib/platform/db/bind";
@@ -386,9 +387,17 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
     if (!customer) throw InvalidError.fields({ customerId: ["That customer was not found."] });
     let vehicleId: string | null = input.vehicleId ?? null;
     let v: CounterVehicleForEngine;
-    if (input.vehicleId) {
-      const saved = await trx("customer_vehicles").where({ id: input.vehicleId, shop_id: shopId, customer_id: input.customerId }).first();
-      if (!saved) throw InvalidError.fields({ vehicleId: ["That vehicle was not found."] });
+    const saved = input.vehicleId
+      ? await trx("customer_vehicles").where({ id: input.vehicleId, shop_id: shopId, customer_id: input.customerId }).first()
+      : undefined;
+    if (input.vehicleId && !saved) throw InvalidError.fields({ vehicleId: ["That vehicle was not found."] });
+    if (input.vehicle) {
+      // Typed, or a saved vehicle the counter changed (its placard re-typed): with the box ticked,
+      // the saved one is written over rather than a second copy added.
+      v = counterVehicleForEngine(input.vehicle);
+      if (input.saveVehicle && vehicleId) await updateVehicle(trx, shopId, input.customerId, vehicleId, v);
+      else if (input.saveVehicle) vehicleId = await insertVehicle(trx, shopId, input.customerId, v);
+    } else {
       v = counterVehicleForEngine({
         description: saved.description,
         boltPattern: saved.bolt_pattern,
@@ -396,24 +405,8 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
         axleRatio: saved.axle_ratio,
         currentSetup: saved.current_setup as Setup,
         placard: saved.load_placard as CounterPlacard | null,
+        bodyPoints: saved.body_points as CounterBodyPoints | null,
       });
-    } else {
-      v = counterVehicleForEngine(input.vehicle!);
-      if (input.saveVehicle) {
-        const [row] = await trx("customer_vehicles")
-          .insert({
-            shop_id: shopId,
-            customer_id: input.customerId,
-            description: v.description,
-            bolt_pattern: v.boltPattern,
-            current_setup: JSON.stringify(v.currentSetup),
-            axle_ratio: v.axleRatio,
-            hub_bore_mm: v.hubBoreMm,
-            load_placard: v.placard ? JSON.stringify(v.placard) : null,
-          })
-          .returning(["id"]);
-        vehicleId = (row as { id: string }).id;
-      }
     }
     const items = await trx<CatalogItemRow>("catalog_items")
       .where({ shop_id: shopId })
@@ -444,6 +437,7 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
       beadlock: wheel.beadlock,
     });
     if (v.placard) fit.pressure = quotePressure(v.placard, v.currentSetup, fit.setups.planned);
+    if (v.bodyPoints) fit.angles = quoteAngles(v.bodyPoints, v.currentSetup, fit.setups.planned);
     const services = await trx<CatalogItemRow>("catalog_items")
       .where({ shop_id: shopId, kind: "service" })
       .whereNull("archived_at")

@@ -44,7 +44,8 @@ export const createQuoteSchema = z
     },
     { error: "Send the quote as a form." },
   )
-  .refine((q) => !!q.vehicle !== !!q.vehicleId, { path: ["vehicle"], message: "Enter the vehicle or pick a saved one." });
+  // Both: a saved vehicle the counter changed; `saveVehicle` then writes the changes over it.
+  .refine((q) => !!q.vehicle || !!q.vehicleId, { path: ["vehicle"], message: "Enter the vehicle or pick a saved one." });
 
 export const QUOTE_LINE_KINDS = ["tire", "wheel", "service", "custom"] as const;
 export const QUOTE_LINE_UNITS = ["each", "hour"] as const;

@@ -15,14 +15,16 @@ beforeEach(() => window.localStorage.clear());
 // The invented counter truck on its placard size.
 const CURRENT: Setup = { ...CUR, tire: "265/70R17 113T" };
 
-/** The fields and what the vehicle step would send (the placard in SI, null, or "refused"). */
-function Probe() {
+const sentOf = (v: unknown) => JSON.stringify(v === undefined ? "refused" : v);
+
+/** The fields and what the vehicle step would send (the placard or the body points in SI, null, or "refused"). */
+function Probe({ part = "placard" }: { part?: "placard" | "bodyPoints" }) {
   const placard = useCounterPlacard(CURRENT);
   const [sent, setSent] = useState("");
   return (
     <>
       <CounterPlacardFields placard={placard} />
-      <button type="button" onClick={() => setSent(JSON.stringify(placard.value() ?? (placard.value() === null ? null : "refused")))}>
+      <button type="button" onClick={() => setSent(sentOf(part === "placard" ? placard.value() : placard.bodyPoints()))}>
         Find
       </button>
       <output>{sent}</output>
@@ -56,6 +58,41 @@ describe("the counter's door placard fields", () => {
     expect(sent.placardFrontKpa).toBeCloseTo(psiToKpa(35), 6);
     expect(sent.frontAxleKg).toBeCloseTo(3150 * 0.45359237, 6);
     expect(sent.frontGawrKg).toBeNull();
+  });
+
+  it("send the vehicle kind chosen: truck unless Car is picked (a passenger tire's load is derated on a truck)", async () => {
+    render(<Probe />);
+    await type("Tire size on the placard", "265/70R17 113T");
+    await type("Placard cold pressure, front (psi)", "35");
+    await type("Placard cold pressure, rear (psi)", "35");
+    await userEvent.click(screen.getByRole("button", { name: "Find" }));
+    expect(JSON.parse(screen.getByRole("status").textContent!).vehicleKind).toBe("light-truck");
+    await userEvent.click(screen.getByRole("radio", { name: "Car" }));
+    await userEvent.click(screen.getByRole("button", { name: "Find" }));
+    expect(JSON.parse(screen.getByRole("status").textContent!).vehicleKind).toBe("passenger-car");
+  });
+
+  it("send the body points in mm, typed in inches (1 in = 25.4 mm, NIST SP 811), without a placard", async () => {
+    render(<Probe part="bodyPoints" />);
+    await type("Front corner height (in)", "29.5");
+    await type("Front corner ahead of the front axle (in)", "35.4");
+    await userEvent.click(screen.getByRole("button", { name: "Find" }));
+    const sent = JSON.parse(screen.getByRole("status").textContent!);
+    expect(sent.units).toBe("imperial");
+    expect(sent.frontCornerHeightMm).toBeCloseTo(29.5 * 25.4, 6);
+    expect(sent.frontCornerAheadMm).toBeCloseTo(35.4 * 25.4, 6);
+    expect(sent.wheelbaseMm).toBeNull();
+  });
+
+  it("refuse a negative lowest point beside its field, named as labelled", async () => {
+    render(<Probe part="bodyPoints" />);
+    await type("Lowest point midway, height (in)", "-16");
+    await type("Wheelbase (in)", "140");
+    await userEvent.click(screen.getByRole("button", { name: "Find" }));
+    expect(screen.getByRole("status").textContent).toBe('"refused"');
+    const mid = screen.getByLabelText("Lowest point midway, height (in)");
+    const said = (mid.getAttribute("aria-describedby") ?? "").split(" ").map((id) => document.getElementById(id)?.textContent ?? "");
+    expect(said.join(" ")).toMatch(/Lowest point midway, height \(in\): /);
   });
 
   it("convert the figures on a unit switch, and refuse a placard without its rear pressure beside that field", async () => {

@@ -15,6 +15,7 @@ import { formatUsd } from "@/lib/shop/quotes/money";
 import type { CounterVehicle } from "@/lib/shop/customers/schema";
 import { CustomerStep } from "./CustomerStep";
 import { VehicleStep } from "./VehicleStep";
+import { vehicleRequest } from "./vehicleRequest";
 
 const signed = (mm: number, digits = 0) => `${mm > 0 ? "+" : mm < 0 ? "−" : "±"}${Math.abs(mm).toFixed(digits)}`;
 const mmIn = (mm: number) => `${signed(mm)} mm (${signed(mmToIn(mm), 1)} in)`;
@@ -23,6 +24,7 @@ export function QuoteBuilder() {
   const router = useRouter();
   const [customer, setCustomer] = useState<Customer | null>(null);
   const [savedVehicle, setSavedVehicle] = useState<string | null>(null);
+  const [savedEdited, setSavedEdited] = useState(false);
   const [vehicle, setVehicle] = useState<CounterVehicle | null>(null);
   const [saveVehicle, setSaveVehicle] = useState(true);
   const [candidates, setCandidates] = useState<Candidates | null>(null);
@@ -36,7 +38,7 @@ export function QuoteBuilder() {
       return api<{ id: string }>("/api/shop/quotes", {
         body: {
           customerId: customer!.id,
-          ...(savedVehicle ? { vehicleId: savedVehicle } : { vehicle, saveVehicle }),
+          ...vehicleRequest({ savedVehicle, edited: savedEdited, vehicle, saveVehicle }),
           tireItemId: p!.tireId,
           wheelItemId: p!.wheelId,
           quantity,
@@ -64,6 +66,8 @@ export function QuoteBuilder() {
           customerId={customer.id}
           savedVehicle={savedVehicle}
           onSaved={setSavedVehicle}
+          edited={savedEdited}
+          onEdited={setSavedEdited}
           saveVehicle={saveVehicle}
           onSaveVehicle={setSaveVehicle}
           onCandidates={(v, c) => {

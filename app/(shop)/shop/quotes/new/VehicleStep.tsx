@@ -19,11 +19,18 @@ import { type CounterVehicle, type CounterVehicleForm, counterVehicleSchema } fr
 import { CounterPlacardFields } from "./CounterPlacardFields";
 import { useCounterPlacard } from "./useCounterPlacard";
 
-/** Step 2 of a new quote: the vehicle as it is now (typed, or one the customer has saved), then the catalog's fits. */
+/**
+ * Step 2 of a new quote: the vehicle as it is now (typed, or one the customer has saved, its
+ * placard filled in too), then the catalog's fits. A saved vehicle changed here is marked edited:
+ * with the box ticked, the quote writes the changes over it.
+ */
 export function VehicleStep(props: {
   customerId: string;
   savedVehicle: string | null;
   onSaved: (id: string | null) => void;
+  /** The picked saved vehicle was changed on the screen. */
+  edited: boolean;
+  onEdited: (b: boolean) => void;
   saveVehicle: boolean;
   onSaveVehicle: (b: boolean) => void;
   onCandidates: (v: CounterVehicle, c: Candidates) => void;
@@ -44,10 +51,12 @@ export function VehicleStep(props: {
   const onFind = (ev: React.FormEvent) => {
     // The placard is read into SI by its own fields (kept apart: their unit follows the inch/metric choice).
     const p = placard.value();
+    const b = placard.bodyPoints();
     form.setValue("placard", p ?? null);
+    form.setValue("bodyPoints", b ?? null);
     return handleSubmit(async (v) => {
       setFailure(null);
-      if (p === undefined) return setFailure("See the messages beside the placard's fields.");
+      if (p === undefined || b === undefined) return setFailure("See the messages beside the placard and body point fields.");
       await find(v);
     })(ev);
   };
@@ -69,9 +78,12 @@ export function VehicleStep(props: {
       currentSetup: setupToForm(v.currentSetup),
       axleRatio: v.axleRatio ? String(v.axleRatio) : "",
     });
+    placard.fill(v.placard, v.bodyPoints);
     props.onSaved(v.id);
+    props.onEdited(false);
   };
-  const edited = () => props.savedVehicle && props.onSaved(null);
+  const edited = () => props.savedVehicle && !props.edited && props.onEdited(true);
+  const picked = !!props.savedVehicle;
   return (
     <Card>
       <h2 className="text-lg font-semibold">2. Vehicle as it is now</h2>
@@ -116,11 +128,11 @@ export function VehicleStep(props: {
           <input
             type="checkbox"
             className="size-4 accent-ember-600"
-            checked={props.saveVehicle && !props.savedVehicle}
-            disabled={!!props.savedVehicle}
+            checked={props.saveVehicle && (!picked || props.edited)}
+            disabled={picked && !props.edited}
             onChange={(ev) => props.onSaveVehicle(ev.target.checked)}
           />
-          Save this vehicle to the customer
+          {picked ? "Save the changes to this saved vehicle" : "Save this vehicle to the customer"}
         </label>
         <Button type="submit" pending={formState.isSubmitting} className="justify-self-start">
           Find fitments
