@@ -6,7 +6,7 @@ import { Card } from "@/components/ui/Card";
 import type { Vehicle } from "@/lib/garage/types";
 import { setupGeometry } from "@/lib/fitment";
 import { toEngineSetup } from "@/lib/setup/model";
-import { BodyPointsDrawing } from "./BodyPointsDrawing";
+import { BodyPointsDrawing } from "@/components/garage/BodyPointsDrawing";
 import { LoadProfileForm } from "./LoadProfileForm";
 import { useLoadProfile } from "./useLoadProfile";
 

@@ -6,7 +6,7 @@ import { TextField } from "@/components/ui/TextField";
 import { PROFILE_SPEC, profileLabels } from "@/lib/garage/loadProfile";
 import { BODY_KEYS } from "@/lib/shop/customers/counterBodyPoints";
 import { PLACARD_KEYS } from "@/lib/shop/customers/counterPlacard";
-import { BodyPointsDrawing } from "@/app/(garage)/garage/[id]/BodyPointsDrawing";
+import { BodyPointsDrawing } from "@/components/garage/BodyPointsDrawing";
 import type { CounterPlacardState } from "./useCounterPlacard";
 
 /**
