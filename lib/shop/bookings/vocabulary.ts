@@ -82,7 +82,6 @@ export const HAND_WRITTEN_HOURS_BAY: BayKind = "lift_bay";
  * lost) read it from here, so the re-check page never speaks of an install.
  */
 export const START_FIELD_LABELS: Record<BookingKind, string> = { install: "Install time", recheck: "Re-check time" };
-export const START_FIELD_LABEL = START_FIELD_LABELS.install;
 
 /** What a booking is for, as the staff calendar names it. */
 export const BOOKING_KIND_LABEL: Record<BookingKind, string> = { install: "Install", recheck: "Lug and ring re-check" };

@@ -19,4 +19,3 @@ export const recheckSlotSchema = z.object({
     .refine((n) => Number.isInteger(n), WHOLE)
     .refine((n) => n >= RECHECK_SLOT_LIMITS.min && n <= RECHECK_SLOT_LIMITS.max, RANGE),
 });
-export type RecheckSlotInput = z.input<typeof recheckSlotSchema>;
