@@ -120,9 +120,15 @@ export async function signInAs(page: Page, email: string, password: string): Pro
 export async function panelsShown(page: Page, ...labels: string[]): Promise<void> {
   for (const label of labels) {
     const placeholder = page.getByRole("status", { name: label, exact: true });
-    // The panel may mount between the count and the scroll (it was near already): then there is nothing to scroll to.
-    if (await placeholder.count()) await placeholder.scrollIntoViewIfNeeded({ timeout: 5000 }).catch(() => undefined);
-    await placeholder.waitFor({ state: "detached", timeout: 20000 });
+    const until = Date.now() + 20000;
+    // Scroll again while it waits: a panel above that mounts taller than its placeholder can push
+    // this one back out of reach after the first scroll, as a reader would then scroll on.
+    while (await placeholder.count()) {
+      if (Date.now() > until) throw new Error(`panelsShown: "${label}" still a placeholder after 20 s`);
+      // The panel may mount between the count and the scroll (it was near already): then there is nothing to scroll to.
+      await placeholder.scrollIntoViewIfNeeded({ timeout: 5000 }).catch(() => undefined);
+      await placeholder.waitFor({ state: "detached", timeout: 2000 }).catch(() => undefined);
+    }
   }
 }
 
