@@ -126,7 +126,8 @@ describe("the re-check e-mail's booking link", () => {
     // The quote's install booking is still the install one; the re-check sits beside it on the calendar.
     const quote = await db("quotes").where({ id: quoteId }).first();
     expect((await slotsForQuote(db, quote)).booking?.kind).toBe("install");
-    const week = await calendar(db, SHOP_A, { from: start.slice(0, 10), days: 2 });
+    // The shop's own day of the start (its clock, not UTC: an afternoon start in Denver is the next UTC day).
+    const week = await calendar(db, SHOP_A, { now: new Date(start), days: 1 });
     expect(week.bookings.find((b) => b.id === booking.id)).toMatchObject({ kind: "recheck", customerName: "Check Customer" });
     // The page now shows what is booked.
     expect((await (await getSlots(token)).json()).booking).toMatchObject({ id: booking.id });
