@@ -1,5 +1,6 @@
 import { getToken } from "next-auth/jwt";
 import { NextResponse, type NextRequest } from "next/server";
+import { SESSION_COOKIE_NAME } from "@/lib/platform/auth/sessionCookie";
 
 /**
  * Coarse path gating only: sends anonymous visitors of signed-in areas to sign-in early.
@@ -7,9 +8,6 @@ import { NextResponse, type NextRequest } from "next/server";
  * And one shortcut: a visitor's bare /workspace is the prerendered page (see {@link visitorWorkspace}).
  */
 const SIGNED_IN_PREFIXES = ["/account", "/shop", "/admin"];
-
-/** next-auth's session cookie, plain or __Secure- (over HTTPS), whole or in chunks. */
-const SESSION_COOKIE = /^(__Secure-)?next-auth\.session-token(\.\d+)?$/;
 
 /** The prerendered workspace of a visitor (app/(tools)/workspace/visitor). */
 export const VISITOR_WORKSPACE = "/workspace/visitor";
@@ -22,7 +20,7 @@ export const VISITOR_WORKSPACE = "/workspace/visitor";
  */
 export function visitorWorkspace(req: NextRequest): URL | null {
   if (req.nextUrl.pathname !== "/workspace" || req.nextUrl.search !== "") return null;
-  if (req.cookies.getAll().some((c) => SESSION_COOKIE.test(c.name))) return null;
+  if (req.cookies.getAll().some((c) => SESSION_COOKIE_NAME.test(c.name))) return null;
   const url = req.nextUrl.clone();
   url.pathname = VISITOR_WORKSPACE;
   return url;

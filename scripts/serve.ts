@@ -17,6 +17,7 @@ import { parseArgs } from "node:util";
 import next from "next";
 import { getToken } from "next-auth/jwt";
 import { CLIENT_ADDRESS_HEADER, resolveClientAddress, trustClientAddressHeader, trustedProxies } from "@/lib/platform/auth/clientAddress";
+import { hasSessionCookie } from "@/lib/platform/auth/sessionCookie";
 import { Microcache, installSharedMicrocache } from "@/lib/platform/http/microcache";
 import { ownServerPurge, selfUrl, startSharePurgeListener } from "@/lib/platform/http/sharePurge";
 import { databaseUrl } from "@/lib/platform/db/config";
@@ -37,8 +38,13 @@ const app = next({ dev: false, hostname, port, dir: process.cwd() });
 const handle = app.getRequestHandler();
 await app.prepare();
 
-// Share pages only: /s/<slug>. Their Open Graph images and every other page go to Next.
-const cache = process.env.HUBFACE_MICROCACHE === "off" ? undefined : new Microcache({ paths: /^\/s\/[A-Za-z0-9_-]{16,64}$/ });
+// Share pages (/s/<slug>) and a visitor's bare /workspace (prerendered, the same for everyone:
+// proxy.ts): their Open Graph images and every other page go to Next. A request with a session
+// cookie always goes to Next: a member's workspace is their own.
+const cache =
+  process.env.HUBFACE_MICROCACHE === "off"
+    ? undefined
+    : new Microcache({ paths: /^\/(?:s\/[A-Za-z0-9_-]{16,64}|workspace)$/, personal: hasSessionCookie });
 installSharedMicrocache(cache);
 
 const jobs = process.env.HUBFACE_JOBS === "off" ? undefined : await import("@/lib/platform/jobs/workers");

@@ -2,6 +2,7 @@ import { type IncomingMessage, type Server, type ServerResponse, createServer } 
 import type { AddressInfo } from "node:net";
 import { gzipSync } from "node:zlib";
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
+import { hasSessionCookie } from "@/lib/platform/auth/sessionCookie";
 import { Microcache, clearSharedMicrocache, installSharedMicrocache, purgeSharedMicrocache, sMaxAgeSeconds } from "./microcache";
 
 // A stand-in for Next behind the cache: answers as the test says, counting what reaches it.
@@ -11,7 +12,10 @@ type Answer = { status?: number; headers?: Record<string, string | string[]>; bo
 let answer: Answer = {};
 let reached = 0;
 let clock = 1_000_000;
-const cache = new Microcache({ paths: /^\/s\/[A-Za-z0-9_-]+$/, maxEntryBytes: 64 * 1024 }, () => clock);
+const cache = new Microcache(
+  { paths: /^\/(?:s\/[A-Za-z0-9_-]+|workspace)$/, maxEntryBytes: 64 * 1024, personal: hasSessionCookie },
+  () => clock,
+);
 let server: Server;
 let base = "";
 
@@ -47,6 +51,7 @@ beforeEach(() => {
   reached = 0;
   cache.purge("/s/abc");
   cache.purge("/s/other");
+  cache.purge("/workspace");
 });
 
 const get = (path: string, headers: Record<string, string | undefined> = {}, method = "GET") =>
@@ -121,9 +126,23 @@ describe("the share pages' micro-cache", () => {
     }
     expect((await get("/s/abc?_rsc=1")).headers.get("x-hubface-cache")).toBeNull();
     expect((await get("/s/abc/opengraph-image")).headers.get("x-hubface-cache")).toBeNull();
-    expect((await get("/workspace")).headers.get("x-hubface-cache")).toBeNull();
+    expect((await get("/workspaces")).headers.get("x-hubface-cache")).toBeNull();
     expect((await fetch(`${base}/s/abc`, { method: "POST", body: "x" })).headers.get("x-hubface-cache")).toBeNull();
     expect(reached).toBe(9);
+  });
+
+  it("serves a visitor's bare /workspace from the cache, never a request with a session cookie, nor keeps its answer", async () => {
+    const member = { cookie: "theme=dark; __Secure-next-auth.session-token.0=abc" };
+    answer = { body: "<p>the member's own workspace</p>" };
+    expect(await (await get("/workspace", member)).text()).toBe("<p>the member's own workspace</p>");
+    answer = { body: "<p>visitor workspace</p>" };
+    await (await get("/workspace")).text();
+    const hit = await get("/workspace", { cookie: "theme=dark" });
+    expect(hit.headers.get("x-hubface-cache")).toBe("hit");
+    expect(await hit.text()).toBe("<p>visitor workspace</p>");
+    const again = await get("/workspace", { cookie: "next-auth.session-token=stale" });
+    expect(again.headers.get("x-hubface-cache")).toBeNull();
+    expect(reached).toBe(3);
   });
 
   it("never keeps an error, a page that sets a cookie, one not meant for shared caches, or one too large", async () => {

@@ -5,8 +5,9 @@
  * of CPU (routing, headers, its render cache); a hit here is a buffer write, so a link posted
  * where many people click it at once does not queue requests.
  *
- * Only paths the server names are eligible (the share pages), only plain GET/HEAD page requests
- * (no query, no RSC or server-action headers), and only 200 answers with `s-maxage` and no
+ * Only paths the server names are eligible (the share pages, a visitor's bare /workspace), only
+ * plain GET/HEAD page requests (no query, no RSC or server-action headers, no session cookie when
+ * the server says so), and only 200 answers with `s-maxage` and no
  * `Set-Cookie`; an entry lives at most `s-maxage` (capped by `maxTtlMs`). One copy is kept per
  * content encoding. The app drops a path on its own changes ({@link purgeSharedMicrocache}), so a
  * revoked link answers 404 on the next request, as it does without this cache.
@@ -26,6 +27,11 @@ export interface MicrocacheOptions {
   maxEntryBytes?: number;
   /** Upper bound on an entry's life whatever `s-maxage` says. */
   maxTtlMs?: number;
+  /**
+   * A request whose Cookie header says true here goes to the app, neither served nor kept: a page
+   * for a signed-in reader may be their own (the members' /workspace), e.g. `hasSessionCookie`.
+   */
+  personal?: (cookieHeader: string | undefined) => boolean;
 }
 
 interface Entry {
@@ -84,7 +90,7 @@ export class Microcache {
     options: MicrocacheOptions,
     private readonly now: () => number = Date.now,
   ) {
-    this.opts = { maxBytes: 32 * 1024 * 1024, maxEntryBytes: 1024 * 1024, maxTtlMs: 60_000, ...options };
+    this.opts = { maxBytes: 32 * 1024 * 1024, maxEntryBytes: 1024 * 1024, maxTtlMs: 60_000, personal: () => false, ...options };
     this.entries = new LRUCache<string, Entry>({ maxSize: this.opts.maxBytes, sizeCalculation: (e) => Math.max(1, e.body.length) });
   }
 
@@ -94,6 +100,7 @@ export class Microcache {
     const url = req.url ?? "";
     if (url.includes("?") || !this.opts.paths.test(url)) return null;
     if (BYPASS_HEADERS.some((h) => req.headers[h] !== undefined)) return null;
+    if (this.opts.personal(req.headers.cookie)) return null;
     return url;
   }
 

@@ -1,11 +1,9 @@
 import type { NextRequest } from "next/server";
+import { hasSessionCookie } from "@/lib/platform/auth/sessionCookie";
 import { HttpError } from "./errors";
 
 /** Methods that change state; only these are checked (GET and HEAD must stay side-effect free). */
 const STATE_CHANGING = new Set(["POST", "PUT", "PATCH", "DELETE"]);
-
-/** next-auth's session cookie, plain or __Secure-, whole or split into numbered chunks. */
-const SESSION_COOKIE = /(?:^|;\s*)(?:__Secure-)?next-auth\.session-token(?:\.\d+)?=/;
 
 function originOf(url: string | undefined): string | null {
   if (!url) return null;
@@ -53,7 +51,7 @@ export function assertSameOrigin(req: NextRequest): void {
   if (fetchSite !== null && fetchSite !== "same-origin" && fetchSite !== "none") {
     throw new HttpError(403, "This request came from another site and was refused. Open Hubface directly and try again.");
   }
-  if (SESSION_COOKIE.test(req.headers.get("cookie") ?? "") && fetchSite === null) {
+  if (hasSessionCookie(req.headers.get("cookie")) && fetchSite === null) {
     throw new HttpError(403, "Your browser did not say which site sent this request, so it was refused. Update the browser and try again.");
   }
 }
