@@ -1,14 +1,24 @@
+import PgBoss from "pg-boss";
+import pg from "pg";
 import type { Locator } from "playwright-core";
 import sharp from "sharp";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { type WorkOrder, unsignedSteps } from "@/lib/shop/workOrders/api";
+import { bodyFor } from "../integration/support/workOrderSteps";
 import { launch, seriousViolations, shot, signInAs } from "./support/browser";
 import { DEMO, DEMO_PASSWORD, call } from "./support/http";
+import { waitForMail } from "./support/outbox";
 
 /*
  * The technician in the bay, on a phone (390 px): opens the work order of the demo shop's booked
  * quote (db/seeds/05_demo_shop.ts Q-1003, booked by db/seeds/06_demo_bookings.ts), starts it,
  * signs every step with figures typed as a technician would, and marks it done. On the way a photo
  * of the left front's lug nuts goes on that step, is opened full size, and stays once signed.
+ *
+ * Then the end of the job for the customer, Ilse Varga-Pond: the completion e-mail with the
+ * invoice arrives and she pays the balance on the provider's page from the link in it; the clock
+ * is moved on to the re-check's due time, the reminder arrives, and she books a re-check from its
+ * link. One file, in this order: every step works on the demo shop's one booked quote.
  */
 const PAID_QUOTE = "d0000000-0000-4000-8000-000000000003";
 
@@ -126,4 +136,101 @@ describe("work order in the bay", () => {
     const w = (await (await call("shop_staff", "GET", `/api/shop/work-orders/${id}`)).json()) as { workOrder: { status: string } };
     expect(w.workOrder.status).toBe("done");
   });
+});
+
+const CUSTOMER = "ilse@example.test";
+
+/** The work order done, through the API for any step the technician's test above left unsigned. */
+async function workOrderDone(): Promise<void> {
+  const opened = await call("shop_staff", "POST", "/api/shop/work-orders", { quoteId: PAID_QUOTE });
+  const { id } = (await opened.json()) as { id: string };
+  const read = async () =>
+    ((await (await call("shop_staff", "GET", `/api/shop/work-orders/${id}`)).json()) as { workOrder: WorkOrder }).workOrder;
+  let w = await read();
+  if (w.status === "done") return;
+  if (w.status === "booked")
+    expect((await call("shop_staff", "POST", `/api/shop/work-orders/${id}/status`, { to: "in_bay" })).status).toBe(200);
+  w = await read();
+  for (const s of unsignedSteps(w)) {
+    expect((await call("shop_staff", "PUT", `/api/shop/work-orders/${id}/steps`, bodyFor(s.position, s.step))).status).toBe(200);
+  }
+  expect((await call("shop_staff", "POST", `/api/shop/work-orders/${id}/status`, { to: "done" })).status).toBe(200);
+}
+
+describe("completion and the balance", () => {
+  it("the customer receives the completion e-mail with the invoice and pays the balance on the provider's page", async () => {
+    await workOrderDone();
+    const mail = await waitForMail(CUSTOMER, /^Done: your wheels and tires at .+ \(quote Q-1003\)$/);
+    expect(mail.text).toMatch(/Quote total: \$[\d,]+\.\d\d\nDeposit paid: −\$[\d,]+\.\d\d\nBalance due: \$[\d,]+\.\d\d/);
+    expect(mail.text).toContain("re-checked after the first 50–100 miles");
+    const [, owed, link] = /Pay the balance of (\$[\d,]+\.\d\d) here: (\S+)/.exec(mail.text)!;
+
+    const page = await phone.context.newPage();
+    await page.goto(link!);
+    const panel = page.getByRole("region", { name: "Invoice and payments" });
+    expect(await panel.getByTestId("invoice-status").textContent()).toBe(`${owed} to pay`);
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+    expect(await seriousViolations(page), "invoice on the customer's page").toEqual([]);
+    await shot(page, "balance-due-phone");
+
+    await panel.getByRole("button", { name: `Pay the ${owed} balance` }).click();
+    await page.getByLabel("Card number").waitFor();
+    expect(await page.getByTestId("pay-amount").textContent()).toBe(owed);
+    await page.getByLabel("Card number").fill("4242 4242 4242 4242");
+    await page.getByLabel("Expiry (MM/YY)").fill("12/30");
+    await page.getByLabel("CVC").fill("123");
+    await page.getByRole("button", { name: `Pay ${owed}` }).click();
+    await page.waitForURL(/\/q\/[A-Za-z0-9_-]{43}\?paid=balance$/);
+    await page.getByTestId("invoice-status").filter({ hasText: "Paid" }).waitFor();
+    expect(await page.getByRole("button", { name: /balance$/ }).count()).toBe(0);
+    await shot(page, "balance-paid-phone");
+
+    const receipt = await waitForMail(CUSTOMER, new RegExp(`^Receipt: \\${owed} balance for quote Q-1003 at `));
+    expect(receipt.text).toContain("Your invoice is paid in full.");
+  });
+
+  it("after the clock is moved on, the re-check reminder is in the outbox and the customer books a re-check from its link", async () => {
+    // "Days later": the work order's re-check falls due now (the server's database, DATABASE_URL
+    // set by scripts/test.sh), and the hourly re-check job is sent at once rather than awaited.
+    const db = new pg.Client({ connectionString: process.env.DATABASE_URL });
+    await db.connect();
+    try {
+      const moved = await db.query(
+        "update work_orders set recheck_due_at = now() - interval '1 hour' where quote_id = $1 and status = 'done'",
+        [PAID_QUOTE],
+      );
+      expect(moved.rowCount).toBe(1);
+    } finally {
+      await db.end();
+    }
+    const boss = new PgBoss({ connectionString: process.env.DATABASE_URL, supervise: false, schedule: false, migrate: false });
+    await boss.start();
+    try {
+      await boss.send("workorders.recheck", {});
+    } finally {
+      await boss.stop({ graceful: false });
+    }
+    // The server's workers run it and queue the mail; the mail job sends it.
+    const mail = await waitForMail(CUSTOMER, /^Time for your (lug and ring|lug) re-check at /, 60000);
+    expect(mail.text).toMatch(/Book a \d+-minute slot in the next 14 days here/);
+    const link = /(\S+\/recheck\/[A-Za-z0-9_-]{43})/.exec(mail.text)![1]!;
+
+    const page = await phone.context.newPage();
+    await page.goto(link);
+    expect(await page.getByRole("heading", { level: 1 }).textContent()).toBe("Lug and ring re-check");
+    const region = page.getByRole("region", { name: "Re-check time" });
+    await region.getByRole("radio").first().waitFor({ state: "attached" });
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+    expect(await seriousViolations(page), "re-check booking page").toEqual([]);
+    await shot(page, "recheck-slots-phone");
+    const firstSlot = region.locator("label:has(input[type=radio])").first();
+    const picked = (await firstSlot.textContent())!.trim();
+    await firstSlot.click();
+    await region.getByRole("button", { name: /^Book / }).click();
+    await region.getByText("Booked. A confirmation with a calendar file is on its way to your e-mail.").waitFor();
+    expect(await region.getByTestId("booking-when").textContent()).toContain(picked.split(",")[0]!);
+    await shot(page, "recheck-booked-phone");
+    const confirmation = await waitForMail(CUSTOMER, /^Booked: your (lug and ring |lug )?re-check at /);
+    expect(confirmation.attachments.some((a) => a.filename.endsWith(".ics"))).toBe(true);
+  }, 120_000);
 });
