@@ -121,6 +121,16 @@ describe("a quote for a counter vehicle with its door placard gives the cold pre
     const without = await orderOf(VEHICLE, "Ida Bay Two");
     expect(without.pressureLimits?.toSet).toBeUndefined();
     expect(without.pressureLimits?.maxKpa).toBeCloseTo(psiToKpa(65), 0);
+    expect(without.trailAngles).toBeNull();
+    // With the body points the counter measured, the sheet carries the quote's own angle rows and caution.
+    const withBody = await orderOf({ ...VEHICLE, bodyPoints: BODY_POINTS }, "Ida Bay Three");
+    const quoteOf = await db("quotes").where({ id: withBody.quoteId }).first("fitment");
+    const quoted = (quoteOf.fitment.angles.angles as { kind: string; currentDeg: number; plannedDeg: number }[]).map(
+      (a) => `${a.currentDeg.toFixed(1)}° → ${a.plannedDeg.toFixed(1)}°`,
+    );
+    expect(withBody.trailAngles?.rows.map((r) => r.label)).toEqual(["Approach angle", "Departure angle", "Ramp breakover angle"]);
+    expect(withBody.trailAngles?.rows.map((r) => r.change)).toEqual(quoted);
+    expect(withBody.trailAngles?.caution).toMatch(/^Trail angles: from the body points the shop measured/);
   });
 
   it("a saved vehicle keeps its placard: a later quote for it gives the same pressure to set", async () => {

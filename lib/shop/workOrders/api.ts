@@ -5,6 +5,7 @@
 import type { StepPosition, WorkOrderRow, WorkOrderStatus, WorkOrderStepPhotoRow, WorkOrderStepRow } from "@/lib/platform/db/types";
 import type { QuotePressure } from "@/lib/shop/customers/counterPlacard";
 import { type TirePressureLimits, tirePressureLimits, withPressureToSet } from "./pressureLimit";
+import type { WorkOrderTrailAngles } from "./trailAngles";
 import { type StepKind, positionsFor, stepsFor } from "./vocabulary";
 
 const iso = (d: Date | string | null) => (d === null ? null : new Date(d).toISOString());
@@ -76,6 +77,8 @@ export interface WorkOrder {
   bookedFor: string | null;
   /** The quoted tire's highest pressure and road minimum, when its size says them (pressureLimit.ts). */
   pressureLimits: TirePressureLimits | null;
+  /** The quote's trail angles now → with these tires, when the counter measured body points (trailAngles.ts). */
+  trailAngles: WorkOrderTrailAngles | null;
   steps: SignedOff[];
   /** Every step's photos, oldest first (photoQueries.ts). */
   photos: StepPhoto[];
@@ -98,6 +101,7 @@ export function workOrderDto(
     boltPattern: string;
     plannedTire?: string | null;
     pressure?: QuotePressure | null;
+    trailAngles?: WorkOrderTrailAngles | null;
   },
   steps: WorkOrderStepRow[],
   bookedFor: string | null,
@@ -125,6 +129,7 @@ export function workOrderDto(
     recheckDueAt: iso(r.recheck_due_at),
     bookedFor,
     pressureLimits: withPressureToSet(tirePressureLimits(quote.plannedTire), quote.pressure ?? null),
+    trailAngles: quote.trailAngles ?? null,
     steps: steps.map(signedOffDto),
     photos: photos.map(stepPhotoDto),
   };

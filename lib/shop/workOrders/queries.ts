@@ -17,6 +17,7 @@ import { queueCompletionMail } from "./completionQueries";
 import { stepPhotoRows } from "./photoQueries";
 import type { FitmentSummary } from "@/lib/shop/quotes/fitment";
 import { recheckMail } from "./recheckMail";
+import { trailAnglesOf } from "./trailAngles";
 import { recheckLinkExpiry, recheckUrl } from "./recheckLink";
 import { aboveMaximum, tirePressureLimits } from "./pressureLimit";
 import { type SignedStep, pressureFieldLabel } from "./schema";
@@ -119,6 +120,7 @@ export async function getWorkOrder(db: Db, shopId: string, id: string): Promise<
       boltPattern: quote.bolt_pattern,
       plannedTire: plannedTireOf(quote.fitment),
       pressure: pressureToSetOf(quote.fitment),
+      trailAngles: trailAnglesOf(quote.fitment),
     },
     steps,
     bookedFor,

@@ -18,6 +18,7 @@ import {
 } from "@/lib/shop/workOrders/vocabulary";
 import { StatusBar } from "./StatusBar";
 import { StepCard } from "./StepCard";
+import { TrailAngleChanges } from "./TrailAngleChanges";
 
 /**
  * The work order: a column of wheel positions, each with its steps in the order they are done,
@@ -70,6 +71,7 @@ export function WorkOrderSheet({ initial, role }: { initial: WorkOrder; role: Ro
           <li>{RECHECK_NOTE}</li>
         </ul>
       </Alert>
+      {w.trailAngles && <TrailAngleChanges angles={w.trailAngles} />}
       {sections.map((position) => (
         <Card
           key={position}
