@@ -60,7 +60,8 @@ export default defineConfig({
         test: {
           ...browser,
           name: "browser",
-          // Two files at a time against the one server: each signs up accounts of its own.
+          // Two files at a time against the one server: each works on accounts and records of its own
+          // or only reads the demo data; steps that change one shared record share a file (shop-work-order).
           exclude: BROWSER_ALONE,
         },
       },
