@@ -118,6 +118,9 @@ export async function signInAs(page: Page, email: string, password: string): Pro
  * scroll to each placeholder named in `labels` as a reader does, then wait for the panel in its place.
  */
 export async function panelsShown(page: Page, ...labels: string[]): Promise<void> {
+  // While the route's loading state is up the placeholders are not in the page yet, and finding
+  // none would read as "all mounted": wait for the page itself first.
+  await page.getByTestId("page-loading").waitFor({ state: "detached", timeout: 30000 });
   for (const label of labels) {
     const placeholder = page.getByRole("status", { name: label, exact: true });
     const until = Date.now() + 20000;
