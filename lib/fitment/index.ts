@@ -49,6 +49,8 @@ export {
   loadAtPressure,
   pressureForLoad,
   loadPressureBasis,
+  loadIndexNeeded,
+  type LoadIndexNeeded,
   type TireLoadClass,
   type VehicleKind,
   type LoadPressureOptions,

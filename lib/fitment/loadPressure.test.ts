@@ -1,7 +1,15 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { FitmentInputError, TireLimitError, TireSizeError } from "./errors";
-import { LOAD_PRESSURE_EXPONENT, ROAD_MINIMUM_RATIO, loadAtPressure, loadPressureBasis, pressureForLoad } from "./loadPressure";
+import {
+  LOAD_PRESSURE_EXPONENT,
+  ROAD_MINIMUM_RATIO,
+  loadAtPressure,
+  loadIndexNeeded,
+  loadPressureBasis,
+  pressureForLoad,
+} from "./loadPressure";
+import { LOAD_INDEX_KG, MAX_LOAD_INDEX } from "./loadSpeed";
 import { errorField, nonFinite } from "./testUtil";
 import { parseTireSize } from "./tireSize";
 import { psiToKpa } from "./units";
@@ -257,6 +265,56 @@ describe("properties (fast-check)", () => {
         if (share > 0) expect(nonFinite(pressureForLoad(t, share * b.maxLoadKg, { vehicle: v }))).toEqual([]);
       }),
       { numRuns: 500 },
+    );
+  });
+});
+
+describe("loadIndexNeeded: the least load index a size must have (ISO 4000-1 table; FMVSS 120 S5.1.2 for × 1.10)", () => {
+  it("35x12.50R17LT carrying 894 kg needs LI 104 (900 kg; 103 = 875 kg) — ISO 4000-1", () => {
+    const r = loadIndexNeeded("35x12.50R17LT", 894);
+    expect(r).toMatchObject({ loadIndex: 104, indexLoadKg: 900, ratingNeededKg: 894, tireClass: "light-truck", derated: false });
+  });
+
+  it("a passenger size on a light truck needs 1.10 × the load: 285/70R17 for 894 kg → 983.4 kg → LI 108 (1000 kg; 107 = 975 kg)", () => {
+    const r = loadIndexNeeded("285/70R17", 894, { vehicle: "light-truck" });
+    expect(r.ratingNeededKg).toBeCloseTo(983.4, 6);
+    expect(r).toMatchObject({ loadIndex: 108, indexLoadKg: 1000, derated: true, tireClass: "passenger" });
+    // On a car the same size needs LI 104 (900 kg).
+    expect(loadIndexNeeded("285/70R17", 894, { vehicle: "passenger-car" }).loadIndex).toBe(104);
+    // An LT size is never derated.
+    expect(loadIndexNeeded("LT285/70R17", 894, { vehicle: "light-truck" }).derated).toBe(false);
+  });
+
+  it("a load exactly at a table figure needs that index: 1450 kg → LI 121 (ISO 4000-1: 121 = 1450 kg)", () => {
+    expect(loadIndexNeeded("37x12.50R17LT", 1450).loadIndex).toBe(121);
+    expect(loadIndexNeeded("37x12.50R17LT", 1450.01).loadIndex).toBe(122);
+  });
+
+  it("refuses a load above the table's top, a negative load and a temporary spare, naming the field", () => {
+    const top = LOAD_INDEX_KG[MAX_LOAD_INDEX] as number;
+    expect(() => loadIndexNeeded("37x12.50R17LT", top + 1)).toThrow(TireLimitError);
+    expect(() => loadIndexNeeded("37x12.50R17LT", top + 1)).toThrow(/loadKg: .* above the load of the table's largest index/);
+    expect(errorField(() => loadIndexNeeded("37x12.50R17LT", -5))).toBe("loadKg");
+    expect(() => loadIndexNeeded("T135/70R16", 300)).toThrow(/temporary spare/);
+  });
+
+  it("agrees with pressureForLoad: a tire of that index carries the load at or below its maximum pressure, one index less cannot (property)", () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 100, max: 2000, noNaN: true }),
+        fc.constantFrom("passenger-car" as const, "light-truck" as const),
+        fc.constantFrom("285/70R17", "35x12.50R17LT"),
+        (load, vehicle, size) => {
+          const need = loadIndexNeeded(size, load, { vehicle });
+          expect(need.indexLoadKg).toBeGreaterThanOrEqual(need.ratingNeededKg);
+          expect(LOAD_INDEX_KG[need.loadIndex - 1] as number).toBeLessThan(need.ratingNeededKg);
+          // The flotation size needs a load range for its maximum pressure; D is any one of them.
+          const withIndex = (li: number) => (size.endsWith("LT") ? `${size} ${li}Q LRD` : `${size} ${li}T`);
+          expect(() => pressureForLoad(withIndex(need.loadIndex), load, { vehicle })).not.toThrow();
+          expect(() => pressureForLoad(withIndex(need.loadIndex - 1), load, { vehicle })).toThrow(TireLimitError);
+        },
+      ),
+      { numRuns: 300 },
     );
   });
 });

@@ -31,7 +31,7 @@
  *   their Pmax (applied by proportion, no source). A maker's minimum, when given, wins.
  */
 import { FitmentInputError, TireLimitError, TireSizeError, requireNumber, requireObject } from "./errors";
-import { loadIndexKg } from "./loadSpeed";
+import { LOAD_INDEX_KG, MAX_LOAD_INDEX, loadIndexKg } from "./loadSpeed";
 import { loadRangeInfo } from "./loadRange";
 import { type TireSize, toTireSize } from "./tireSize";
 import { kpaToPsi, psiToKpa } from "./units";
@@ -516,4 +516,53 @@ export function pressureFromBasis(b: LoadPressureBasis, loadKg: number, field: s
     notes,
     sources: b.sources,
   };
+}
+
+/** Result of {@link loadIndexNeeded}. */
+export interface LoadIndexNeeded {
+  /** The least single load index whose load is at least `ratingNeededKg`. */
+  loadIndex: number;
+  /** The load of that index (ISO 4000-1 table), kg. */
+  indexLoadKg: number;
+  /** The load one tire must carry, kg, as given. */
+  loadKg: number;
+  /** The rating that load asks for: `loadKg`, × 1.10 for a passenger tire on a light truck, kg. */
+  ratingNeededKg: number;
+  tireClass: TireLoadClass;
+  /** The passenger-on-light-truck rule raised the rating needed. */
+  derated: boolean;
+}
+
+/**
+ * The least load index a tire of this size must have to carry `loadKg` at its maximum pressure —
+ * for sizes written without a service description (a size from a list, not from a sidewall),
+ * whose pressure for a load cannot be computed because their maximum load is not known. A
+ * passenger tire on a light truck (`vehicle: "light-truck"`) needs a rating 1.10 times the load.
+ * A load above the table's largest index throws {@link TireLimitError} (`loadKg`).
+ *
+ * Sources: ISO 4000-1 load index table; FMVSS 120 S5.1.2 (÷ 1.10 on a light truck).
+ *
+ * @example
+ * loadIndexNeeded("35x12.50R17LT", 894).loadIndex;                         // 104 (900 kg; 103 = 875 kg)
+ * loadIndexNeeded("285/70R17", 894, { vehicle: "light-truck" }).loadIndex; // 108 (1000 kg ≥ 894 × 1.10 = 983.4 kg)
+ */
+export function loadIndexNeeded(tire: string | TireSize, loadKg: number, options: { vehicle?: VehicleKind } = {}): LoadIndexNeeded {
+  const t = readTire(tire, "tire");
+  const tireClass = classOf(t, "tire");
+  const L = LOAD_PRESSURE_LIMITS.loadKg;
+  requireNumber("loadKg", loadKg, L.min, L.max, "894 kg", "kg");
+  const derated = tireClass === "passenger" && options.vehicle === "light-truck";
+  const ratingNeededKg = derated ? loadKg * PASSENGER_ON_LIGHT_TRUCK_DIVISOR : loadKg;
+  const loadIndex = LOAD_INDEX_KG.findIndex((kg) => kg >= ratingNeededKg);
+  if (loadIndex < 0) {
+    const top = LOAD_INDEX_KG[MAX_LOAD_INDEX] as number;
+    throw new TireLimitError(
+      "loadKg",
+      `loadKg: ${round1(ratingNeededKg)} kg is above the load of the table's largest index ${MAX_LOAD_INDEX} (${top} kg) (e.g. 894 kg)`,
+      loadKg,
+      top,
+      "kg",
+    );
+  }
+  return { loadIndex, indexLoadKg: LOAD_INDEX_KG[loadIndex] as number, loadKg, ratingNeededKg, tireClass, derated };
 }

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { psiToKpa } from "@/lib/fitment";
+import { lbToKg, psiToKpa } from "@/lib/fitment";
 import type { Setup } from "@/lib/setup/model";
-import { missingText, setupFigures } from "./loadFigures";
+import { loadToCarry, missingText, setupFigures } from "./loadFigures";
 import { emptyProfile } from "./loadProfile";
 import { DEMO_PROFILE } from "./loadTestUtil";
 import { CUR, PLAN } from "./testUtil";
@@ -72,5 +72,33 @@ describe("setupFigures: a 37x12.50R17LT load range D on a truck placarded for 26
     expect(e.angles).toEqual([]);
     expect(missingText(null).load).toMatch(/placard/);
     expect(missingText(DEMO_PROFILE)).toEqual({ load: null, angles: null });
+  });
+});
+
+describe("loadToCarry: what one planned tire must carry on the demo truck", () => {
+  // 265/70R17 113T: LI 113 = 1150 kg (ISO 4000-1) at 250 kPa (ETRTO standard load, from memory); on a
+  // light truck ÷ 1.10 (FMVSS 120 S5.1.2) = 1045.45 kg; at 35 psi = 241.317 kPa (NIST SP 811) it carries
+  // 1045.45 × (241.317 / 250)^0.5 = 1027.15 kg (TRA passenger formula, by hand).
+  const placardKg = (1150 / 1.1) * Math.sqrt(psiToKpa(35) / 250);
+
+  it("is what the placard tire carries at the placard pressure when that is above each axle's share", () => {
+    expect(placardKg).toBeCloseTo(1027.15, 1);
+    const r = loadToCarry(DEMO_PROFILE)!;
+    // Front share 3150 lb / 2 = 714.4 kg (NIST SP 811: 1 lb = 0.45359237 kg) is below it.
+    expect(r).toMatchObject({ axle: "front", decidedBy: "placard", from: "scale ticket" });
+    expect(r.loadKg).toBeCloseTo(placardKg, 6);
+  });
+
+  it("is the axle's share when the truck is loaded above the placard tire's capacity (scale ticket 5000 lb rear)", () => {
+    const r = loadToCarry({ ...DEMO_PROFILE, rearAxleKg: lbToKg(5000) })!;
+    expect(r).toMatchObject({ axle: "rear", decidedBy: "axle load" });
+    expect(r.loadKg).toBeCloseTo(lbToKg(2500), 6); // 1133.98 kg
+  });
+
+  it("reads the axle ratings without a scale ticket, and is null without a placard or loads", () => {
+    const noTicket = { ...DEMO_PROFILE, frontAxleKg: null, rearAxleKg: null };
+    expect(loadToCarry(noTicket)?.from).toBe("axle ratings (GAWR)");
+    expect(loadToCarry({ ...DEMO_PROFILE, placardTire: null })).toBeNull();
+    expect(loadToCarry({ ...noTicket, frontGawrKg: null })).toBeNull();
   });
 });

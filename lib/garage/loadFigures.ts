@@ -6,7 +6,7 @@
  */
 import { type LoadErrors, type LoadPlan, planLoad } from "@/lib/comparisons/loadPlan";
 import { type TrailAngle, planTrail } from "@/lib/comparisons/trailPlan";
-import { setupGeometry } from "@/lib/fitment";
+import { FitmentInputError, loadAtPressure, setupGeometry } from "@/lib/fitment";
 import { type LoadProfile, type Units, axleLoadsOf, profileLabels, trailLabelsOf } from "@/lib/garage/loadProfile";
 import { type Setup, toEngineSetup } from "@/lib/setup/model";
 
@@ -96,4 +96,48 @@ export function setupFigures(profile: LoadProfile, current: Setup, planned: Setu
     trailLabelsOf(labels),
   );
   return { load, angles: trail.angles, angleMessages: Object.values(trail.errors).filter((m): m is string => Boolean(m)) };
+}
+
+/** What one planned tire must carry on this vehicle, and which axle and figure decide it. */
+export interface LoadToCarry {
+  loadKg: number;
+  axle: "front" | "rear";
+  decidedBy: "placard" | "axle load";
+  from: "scale ticket" | "axle ratings (GAWR)";
+}
+
+/**
+ * The load one planned tire must be able to carry at its maximum pressure: over both axles, the
+ * most of what the placard tire carries at the placard pressure (a replacement carries at least
+ * what the vehicle maker's tire did — the equivalence behind the pressure to set) and the axle's
+ * share (half the axle load). null without a placard or axle loads, or when the placard's own
+ * figures are refused (the vehicle page shows why).
+ *
+ * Sources: TRA load formulas via lib/fitment's loadAtPressure; FMVSS 120 S5.1.2 (÷ 1.10).
+ *
+ * @example
+ * loadToCarry(DEMO_PROFILE); // { loadKg: ≈ 1027.1, axle: "front", decidedBy: "placard", from: "scale ticket" }
+ */
+export function loadToCarry(profile: LoadProfile): LoadToCarry | null {
+  const loads = axleLoadsOf(profile);
+  const { placardTire, placardFrontKpa, placardRearKpa } = profile;
+  if (!loads || !placardTire || placardFrontKpa === null || placardRearKpa === null) return null;
+  const sides = [
+    { axle: "front", kpa: placardFrontKpa, share: loads.frontKg / 2 },
+    { axle: "rear", kpa: placardRearKpa, share: loads.rearKg / 2 },
+  ] as const;
+  let best: LoadToCarry | null = null;
+  for (const side of sides) {
+    let placardKg: number;
+    try {
+      placardKg = loadAtPressure(placardTire, side.kpa, { vehicle: profile.vehicleKind }).loadKg;
+    } catch (e) {
+      if (e instanceof FitmentInputError) return null;
+      throw e;
+    }
+    const byPlacard = placardKg >= side.share;
+    const loadKg = byPlacard ? placardKg : side.share;
+    if (!best || loadKg > best.loadKg) best = { loadKg, axle: side.axle, decidedBy: byPlacard ? "placard" : "axle load", from: loads.from };
+  }
+  return best;
 }

@@ -120,7 +120,7 @@ describe("a garage vehicle's placard, axle weights and body points", () => {
     await expect.poll(() => page.getByLabel("Front axle weight, scale ticket (kg)").inputValue()).toBe("1399.8");
   });
 
-  it("ranks the finder's fits by the angles, and says why a fit has no pressure", async () => {
+  it("ranks the finder's fits by the angles and by the load index they need, and says why a fit has no pressure", async () => {
     await page.goto(`/garage/${vehicleId}/finder`);
     await page.getByLabel(/^Target diameter/).fill("35");
     const header = page.getByRole("button", { name: /^Approach \(change\)/ });
@@ -129,6 +129,14 @@ describe("a garage vehicle's placard, axle weights and body points", () => {
     // (it used to claim the fit could not carry the load).
     await expect.poll(() => page.getByText("load index not known").first().isVisible()).toBe(true);
     expect(await page.getByText("cannot carry the placard or axle load").count()).toBe(0);
+    // What it can say instead: the least load index per size, and the fits rank by it (ISO 4000-1 table).
+    await expect.poll(() => page.getByText(/Load index needed is the least load index a tire of that size/).isVisible()).toBe(true);
+    await page.getByRole("button", { name: /^Load index needed/ }).click();
+    const indexes = async () =>
+      (await page.getByTestId("finder-load-index").allTextContents()).map((t) => Number(/^≥ (\d+)/.exec(t)?.[1] ?? NaN));
+    await expect.poll(async () => (await indexes()).length).toBeGreaterThan(1);
+    const ranked = await indexes();
+    expect(ranked.every((li, i) => Number.isInteger(li) && (i === 0 || li >= ranked[i - 1]!))).toBe(true);
     await header.click();
     await header.click();
     await shot(page, "garage-load-finder");

@@ -18,9 +18,15 @@ const FITS = [fit("35x12.50R17LT 121Q LRE"), fit("37x12.50R17LT 124Q LRD"), fit(
 describe("the finder's pressure and angle columns", () => {
   it("are absent without a stored profile, and only for the angles measured", () => {
     expect(loadColumns(null, VEHICLE, IMPERIAL)).toEqual([]);
-    expect(loadColumns(DEMO_PROFILE, VEHICLE, IMPERIAL).map((c) => c.id)).toEqual(["pressure", "approach", "departure", "breakover"]);
+    expect(loadColumns(DEMO_PROFILE, VEHICLE, IMPERIAL).map((c) => c.id)).toEqual([
+      "pressure",
+      "loadIndex",
+      "approach",
+      "departure",
+      "breakover",
+    ]);
     const noRear = { ...DEMO_PROFILE, rearCornerHeightMm: null, rearCornerBehindMm: null };
-    expect(loadColumns(noRear, VEHICLE, IMPERIAL).map((c) => c.id)).toEqual(["pressure", "approach", "breakover"]);
+    expect(loadColumns(noRear, VEHICLE, IMPERIAL).map((c) => c.id)).toEqual(["pressure", "loadIndex", "approach", "breakover"]);
   });
 
   it("rank by the approach angle: the taller tire raises the front corner more (SAE J1100 geometry)", () => {
@@ -47,5 +53,36 @@ describe("the finder's pressure and angle columns", () => {
     expect(screen.getByText("load index not known").getAttribute("title")).toMatch(/has no load index/);
     expect(screen.queryByText(/cannot carry/)).toBeNull();
     expect(pressure.sortValue!(fit("285/70R17"))).toBeNull();
+  });
+});
+
+describe("the finder's load index needed column", () => {
+  // Load to carry on the demo truck: 265/70R17 113T (LI 113 = 1150 kg, ISO 4000-1) at 250 kPa (ETRTO, from
+  // memory), ÷ 1.10 on a light truck (FMVSS 120 S5.1.2), at 35 psi: 1045.45 × √(241.317/250) = 1027.15 kg.
+  const column = (prefs: DisplayPrefs) => loadColumns(DEMO_PROFILE, VEHICLE, prefs).find((c) => c.id === "loadIndex")!;
+
+  it("gives the least index per size: 109 (1030 kg) for a flotation LT size, 113 (1150 kg) for a passenger size on a light truck", () => {
+    const col = column(METRIC);
+    // LT: 1027.15 kg → ISO 4000-1 LI 109 = 1030 kg (108 = 1000 kg).
+    expect(col.sortValue!(fit("35x12.50R17LT"))).toBe(109);
+    // Passenger on a light truck: 1027.15 × 1.10 = 1129.9 kg → LI 113 = 1150 kg (112 = 1120 kg).
+    expect(col.sortValue!(fit("285/70R17"))).toBe(113);
+    render(<>{col.cell!(fit("285/70R17"), 0)}</>);
+    const cell = screen.getByTestId("finder-load-index");
+    expect(cell.textContent).toBe("≥ 1131,150 kg (2,535 lb)");
+    expect(cell.getAttribute("title")).toMatch(/× 1.10 for a passenger size on a light truck \(FMVSS 120 S5.1.2\)/);
+  });
+
+  it("ranks the LT sizes first and says the pounds first in inch units (1 lb = 0.45359237 kg, NIST SP 811)", () => {
+    const col = column(IMPERIAL);
+    const sorted = [fit("285/70R17"), fit("35x12.50R17LT")].sort((a, b) => Number(col.sortValue!(a)) - Number(col.sortValue!(b)));
+    expect(sorted.map((m) => m.tire.text)).toEqual(["35x12.50R17LT", "285/70R17"]);
+    render(<>{col.cell!(fit("35x12.50R17LT"), 0)}</>);
+    expect(screen.getByTestId("finder-load-index").textContent).toBe("≥ 1092,271 lb (1,030 kg)");
+  });
+
+  it("is absent without axle loads (nothing to carry is known)", () => {
+    const noLoads = { ...DEMO_PROFILE, frontAxleKg: null, rearAxleKg: null, frontGawrKg: null, rearGawrKg: null };
+    expect(loadColumns(noLoads, VEHICLE, METRIC).map((c) => c.id)).not.toContain("loadIndex");
   });
 });

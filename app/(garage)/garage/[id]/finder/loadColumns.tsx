@@ -1,9 +1,9 @@
 import type { TableColumn } from "@/components/ui/Table";
-import { type DisplayPrefs, formatNumber } from "@/lib/comparisons/format";
+import { type DisplayPrefs, formatLoad, formatNumber } from "@/lib/comparisons/format";
 import { pressureText } from "@/lib/comparisons/pressureText";
 import { TRAIL_ANGLE_NAME, type TrailAngle } from "@/lib/comparisons/trailPlan";
-import type { FitmentMatch } from "@/lib/fitment";
-import { type SetupFigures, setupFigures } from "@/lib/garage/loadFigures";
+import { FitmentInputError, type FitmentMatch, type LoadIndexNeeded, loadIndexNeeded } from "@/lib/fitment";
+import { type SetupFigures, loadToCarry, setupFigures } from "@/lib/garage/loadFigures";
 import type { LoadProfile } from "@/lib/garage/loadProfile";
 import type { Vehicle } from "@/lib/garage/types";
 import { candidateSetup } from "./candidate";
@@ -12,11 +12,16 @@ const KINDS: TrailAngle["kind"][] = ["approach", "departure", "breakover"];
 
 /**
  * The finder's pressure and angle columns for a vehicle with a stored load profile: per fit, the
- * cold pressure to set (front / rear, every unit) and each angle with the planned tires and its
- * change. Each sorts, so the fits can be ranked by them. Figures are computed once per fit.
+ * cold pressure to set (front / rear, every unit), the least load index a tire of that size must
+ * have, and each angle with the planned tires and its change. Each sorts, so the fits can be
+ * ranked by them. Figures are computed once per fit.
+ *
+ * The finder's sizes come from a list, not a sidewall: they name no load index, so their pressure
+ * cannot be computed (the pressure column says so) — the load index needed is the figure that
+ * can, and it differs between fits (a passenger size on a light truck needs 1.10 × the load).
  *
  * @example
- * loadColumns(profile, vehicle, prefs).map((c) => c.id); // ["pressure", "approach", "departure", "breakover"]
+ * loadColumns(profile, vehicle, prefs).map((c) => c.id); // ["pressure", "loadIndex", "approach", "departure", "breakover"]
  */
 export function loadColumns(profile: LoadProfile | null, vehicle: Vehicle, prefs: DisplayPrefs): TableColumn<FitmentMatch>[] {
   if (!profile) return [];
@@ -59,6 +64,46 @@ export function loadColumns(profile: LoadProfile | null, vehicle: Vehicle, prefs
                 {a.axle === "front" ? "F" : "R"} {pressureText(a.pressureToSetKpa, prefs)}
               </span>
             ))}
+          </span>
+        );
+      },
+    });
+  }
+  const carry = loadToCarry(profile);
+  if (carry) {
+    const needs = new WeakMap<FitmentMatch, LoadIndexNeeded | null>();
+    const needOf = (m: FitmentMatch) => {
+      if (!needs.has(m)) {
+        let n: LoadIndexNeeded | null = null;
+        try {
+          n = loadIndexNeeded(m.tire, carry.loadKg, { vehicle: profile.vehicleKind });
+        } catch (e) {
+          if (!(e instanceof FitmentInputError)) throw e;
+        }
+        needs.set(m, n);
+      }
+      return needs.get(m) ?? null;
+    };
+    const basis = `what the placard tire carries at the placard pressure (${carry.axle} axle, ${carry.from})`;
+    columns.push({
+      id: "loadIndex",
+      header: "Load index needed",
+      sortable: true,
+      sortValue: (m) => needOf(m)?.loadIndex ?? null,
+      cell: (m) => {
+        const n = needOf(m);
+        if (!n) return <span className="text-contact-700">no load index carries {formatLoad(carry.loadKg, prefs)}</span>;
+        const why = `${carry.decidedBy === "placard" ? basis : `the ${carry.axle} axle's share (${carry.from})`}: ${formatLoad(carry.loadKg, prefs)} per tire${
+          n.derated ? `, × 1.10 for a passenger size on a light truck (FMVSS 120 S5.1.2) = ${formatLoad(n.ratingNeededKg, prefs)}` : ""
+        }. ISO 4000-1 load index table.`;
+        return (
+          <span
+            className="flex flex-col text-xs"
+            data-testid="finder-load-index"
+            title={`At least ${n.loadIndex}: a tire of this size must carry ${why}`}
+          >
+            <span className="whitespace-nowrap font-semibold">≥ {n.loadIndex}</span>
+            <span className="whitespace-nowrap">{formatLoad(n.indexLoadKg, prefs)}</span>
           </span>
         );
       },
