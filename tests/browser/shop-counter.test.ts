@@ -194,4 +194,79 @@ describe("the shop counter, end to end", () => {
       expect(await page.getByTestId("hub-checks").textContent()).toMatch(/hub-centric rings/);
     });
   });
+  it("the counter takes a placard, axle weights and body points typed in inches, converts them to metric, quotes the pressure and angles, and fills them again from the saved vehicle", async () => {
+    const page = await staff.context.newPage();
+    await signInAs(page, DEMO.shop_staff, DEMO_PASSWORD);
+    const vehicle = `Flatbed hauler ${Date.now().toString(36)}`;
+    await page.goto("/shop/quotes/new");
+    await page.getByLabel("Phone, e-mail or name").fill("Rook");
+    await page.getByRole("button", { name: "Find", exact: true }).click();
+    await page.getByRole("button", { name: "Use Rook Tamsin" }).click();
+    await expect.poll(() => page.getByTestId("chosen-customer").textContent(), { timeout: 15000 }).toContain("Rook Tamsin");
+    await page.getByLabel("Vehicle", { exact: true }).fill(vehicle);
+    await page.getByLabel("Bolt pattern").fill("6x5.5");
+    await page.getByLabel("Tire size", { exact: true }).fill("265/70R17 113T");
+    await page.getByLabel("Wheel diameter (in)").fill("17");
+    await page.getByLabel("Wheel width (in)").fill("8");
+    await page.getByRole("textbox", { name: "Offset (mm)" }).fill("25");
+    await page.getByRole("radio", { name: "Inch", exact: true }).check({ force: true });
+    await page.getByRole("radio", { name: "Truck, SUV, van" }).check({ force: true });
+    const typed: Record<string, string> = {
+      "Tire size on the placard": "P265/70R17 113S",
+      "Placard cold pressure, front (psi)": "35",
+      "Placard cold pressure, rear (psi)": "35",
+      "Front axle weight, scale ticket (lb)": "3086",
+      "Rear axle weight, scale ticket (lb)": "2646",
+      "Front corner height (in)": "24",
+      "Front corner ahead of the front axle (in)": "35",
+      "Rear corner height (in)": "26",
+      "Rear corner behind the rear axle (in)": "40",
+      "Lowest point midway, height (in)": "11",
+      "Wheelbase (in)": "118",
+    };
+    for (const [label, text] of Object.entries(typed)) await page.getByLabel(label, { exact: true }).pressSequentially(text);
+    // The unit switch converts what was typed (NIST SP 811: 1 psi = 6.894757 kPa, 1 lb = 0.45359237 kg, 1 in = 25.4 mm).
+    await page.getByRole("radio", { name: "Metric", exact: true }).check({ force: true });
+    await expect.poll(() => page.getByLabel("Placard cold pressure, front (kPa)").inputValue()).toBe("241");
+    expect(await page.getByLabel("Front axle weight, scale ticket (kg)").inputValue()).toBe("1399.8");
+    expect(await page.getByLabel("Front corner height (mm)").inputValue()).toBe("609.6");
+    expect(await page.getByLabel("Wheelbase (mm)").inputValue()).toBe("2997.2");
+    await checkA11y(page, "counter placard in metric");
+    await shot(page, "shop-counter-placard-metric");
+    await page.getByRole("checkbox", { name: "Save this vehicle to the customer" }).check();
+    await page.getByRole("button", { name: "Find fitments" }).click();
+    await page.getByRole("heading", { name: "3. Pick a tire and wheel" }).waitFor();
+    await page.locator("li", { hasText: "Scree Claw MT mud-terrain 35x12.50R17LT" }).first().locator('input[name="pick"]').check();
+    await page.getByRole("button", { name: "Create draft quote" }).click();
+    await page.waitForURL(/\/shop\/quotes\/[0-9a-f-]{36}$/);
+    await page.getByRole("heading", { name: /Quote Q-\d+/ }).waitFor();
+    // 35x12.50R17LT 121Q load range E (65 psi, from memory): what the P265/70R17 113S carries at 35 psi on a light truck
+    // (1150 kg ÷ 1.10, FMVSS 120) it carries at 65 × (1045.5/1450)^(1/0.585) = 37.2 psi (TRA load formula); the road
+    // minimum 0.5833 × 65 = 37.9 psi (261 kPa) is higher and is set.
+    const summary = page.getByRole("heading", { name: "Fitment summary" }).locator("..");
+    await expect.poll(() => summary.textContent()).toContain("Cold pressure to setfront 37.9 psi (261 kPa), rear 37.9 psi (261 kPa)");
+    const text = (await summary.textContent()) ?? "";
+    for (const kind of ["Approach", "Departure", "Ramp breakover"]) {
+      const m = new RegExp(`${kind} angle(\\d+\\.\\d)° → (\\d+\\.\\d)°`).exec(text);
+      expect(m, kind).not.toBeNull();
+      // A taller tire raises every body point (SAE J1100 geometry): each angle grows.
+      expect(Number(m![2])).toBeGreaterThan(Number(m![1]));
+    }
+    expect(text).toMatch(/Trail angles: from the body points the shop measured/);
+    await shot(page, "shop-counter-quote-pressure-angles");
+
+    // A new quote for the same customer: the saved vehicle fills the placard and body points again.
+    await page.goto("/shop/quotes/new");
+    await page.getByLabel("Phone, e-mail or name").fill("Rook");
+    await page.getByRole("button", { name: "Find", exact: true }).click();
+    await page.getByRole("button", { name: "Use Rook Tamsin" }).click();
+    await page.getByRole("button", { name: new RegExp(`^${vehicle}`) }).click();
+    await expect.poll(() => page.getByLabel("Tire size on the placard").inputValue()).toBe("P265/70R17 113S");
+    await page.getByRole("radio", { name: "Inch", exact: true }).check({ force: true });
+    await expect.poll(() => page.getByLabel("Placard cold pressure, front (psi)").inputValue()).toBe("35");
+    expect(await page.getByLabel("Rear axle weight, scale ticket (lb)").inputValue()).toBe("2646");
+    expect(await page.getByLabel("Lowest point midway, height (in)").inputValue()).toBe("11");
+    expect(await page.getByRole("radio", { name: "Truck, SUV, van" }).isChecked()).toBe(true);
+    await page.close();
+  });
 });
