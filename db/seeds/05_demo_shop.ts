@@ -3,6 +3,7 @@ import { parseCatalogCsv } from "../../lib/shop/catalog/csv";
 import { buildQuoteDocument } from "../../lib/shop/quotes/document";
 import { summarize } from "../../lib/shop/quotes/fitment";
 import { counterVehicleForEngine } from "../../lib/shop/customers/schema";
+import { type CounterBodyPoints, quoteAngles } from "../../lib/shop/customers/counterBodyPoints";
 import type { Setup } from "../../lib/setup/model";
 import { computeTotals } from "../../lib/shop/quotes/totals";
 import { hashToken, randomToken } from "../../lib/platform/tokens";
@@ -64,6 +65,19 @@ const CURRENT_SETUP: Setup = {
   position: { mode: "offset", offsetMm: 25 },
   spacerMm: 0,
 };
+/**
+ * Ilse's pickup's body points, measured at the counter with its 265/70R17 tires (802.8 mm across):
+ * invented figures, so her quotes and the work order show the trail angles the tires change.
+ */
+const BODY_POINTS: CounterBodyPoints = {
+  units: "imperial",
+  frontCornerHeightMm: 762,
+  frontCornerAheadMm: 914.4,
+  rearCornerHeightMm: 812.8,
+  rearCornerBehindMm: 1143,
+  midHeightMm: 431.8,
+  wheelbaseMm: 3683,
+};
 const VEHICLE = counterVehicleForEngine({
   description: "Half-ton pickup, stock height",
   boltPattern: "6x5.5",
@@ -108,6 +122,7 @@ export async function seed(knex: Knex): Promise<void> {
       current_setup: JSON.stringify(CURRENT_SETUP),
       axle_ratio: VEHICLE.axleRatio,
       hub_bore_mm: VEHICLE.hubBoreMm,
+      body_points: JSON.stringify(BODY_POINTS),
     })
     .onConflict("id")
     .ignore();
@@ -201,6 +216,8 @@ export async function seed(knex: Knex): Promise<void> {
       offsetMm: wheel.wheel_offset_mm,
       beadlock: wheel.beadlock,
     });
+    // As the counter does for a saved vehicle with body points (lib/shop/quotes/queries.ts).
+    if (p.customer === 0) fit.angles = quoteAngles(BODY_POINTS, CURRENT_SETUP, fit.setups.planned);
     const svc = async (sku: string, qty: number) => {
       const s = await bySku(sku);
       return {

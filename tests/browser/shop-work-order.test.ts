@@ -90,6 +90,16 @@ describe("work order in the bay", () => {
     expect(await page.getByRole("heading", { level: 1 }).textContent()).toContain("Work order · Q-1003");
     // Nothing scrolls sideways on the phone.
     expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+    // The counter measured the demo pickup's body points (db/seeds/05_demo_shop.ts): the sheet shows the quote's angle
+    // changes with the 37 in tires, each larger (a taller tire raises every body point; SAE J1100 geometry).
+    const angles = page.getByRole("region", { name: "Trail angles" });
+    for (const kind of ["Approach", "Departure", "Ramp breakover"]) {
+      const change = (await angles.getByTestId(`trail-${kind} angle`).textContent()) ?? "";
+      const m = /(\d+\.\d)° → (\d+\.\d)°/.exec(change);
+      expect(m, kind).not.toBeNull();
+      expect(Number(m![2])).toBeGreaterThan(Number(m![1]));
+    }
+    expect(await angles.getByText(/no lift or load change is counted/).isVisible()).toBe(true);
     await page.getByRole("button", { name: "Start: the truck is in the bay" }).click();
     await page.getByText("In the bay", { exact: true }).waitFor();
     expect(await seriousViolations(page), "work order in the bay").toEqual([]);
