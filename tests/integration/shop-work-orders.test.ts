@@ -84,6 +84,8 @@ describe("opening the work order", () => {
     // The quote's beadlock wheel, alignment and trimming lines put those steps on the sheet; 6x5.5 has 6 lugs.
     expect(w).toMatchObject({ status: "booked", beadlock: true, alignment: true, trimming: true, spare: false, lugCount: 6 });
     expect(w.bookedFor).toMatch(/AM|PM/);
+    // The sheet's times read on the shop's clock (its schedule's zone; the schema's default here).
+    expect(w.timeZone).toBe("America/Denver");
     expect(requiredSteps(w)).toHaveLength(4 * 7 + 2);
   });
 
@@ -306,6 +308,15 @@ describe("the re-check reminder", () => {
       const due = (await (await rechecks.GET(req("GET", "/api/shop/rechecks"), ctx())).json()).due;
       const row = due.find((d: { workOrderId: string }) => d.workOrderId === w.id);
       expect(row).toMatchObject({ quoteId: w.quoteId, customerName: "Bay Customer", remindedAt: expect.any(String) });
+      // The due day as the shop's clock reads it (America/Denver), not the server's UTC date.
+      const shopDay = new Date(row.recheckDueAt).toLocaleDateString("en-US", {
+        timeZone: "America/Denver",
+        weekday: "long",
+        year: "numeric",
+        month: "long",
+        day: "numeric",
+      });
+      expect(row.dueOn).toBe(shopDay);
       // Another shop's counter does not see it.
       as(U.staffB);
       const other = (await (await rechecks.GET(req("GET", "/api/shop/rechecks"), ctx())).json()).due;

@@ -75,6 +75,8 @@ export interface WorkOrder {
   recheckDueAt: string | null;
   /** The booked install, on the shop's clock, e.g. "Mon, Mar 15, 2027, 9:00 AM MDT – 11:30 AM". */
   bookedFor: string | null;
+  /** The shop's time zone (IANA), so every time on the sheet reads on the shop's clock, not the device's. */
+  timeZone: string;
   /** The quoted tire's highest pressure and road minimum, when its size says them (pressureLimit.ts). */
   pressureLimits: TirePressureLimits | null;
   /** The quote's trail angles now → with these tires, when the counter measured body points (trailAngles.ts). */
@@ -106,6 +108,7 @@ export function workOrderDto(
   steps: WorkOrderStepRow[],
   bookedFor: string | null,
   photos: WorkOrderStepPhotoRow[],
+  timeZone: string,
 ): WorkOrder {
   return {
     id: r.id,
@@ -128,6 +131,7 @@ export function workOrderDto(
     doneBy: r.done_by,
     recheckDueAt: iso(r.recheck_due_at),
     bookedFor,
+    timeZone,
     pressureLimits: withPressureToSet(tirePressureLimits(quote.plannedTire), quote.pressure ?? null),
     trailAngles: quote.trailAngles ?? null,
     steps: steps.map(signedOffDto),
@@ -161,6 +165,8 @@ export interface RecheckDue {
   vehicleDescription: string;
   doneAt: string;
   recheckDueAt: string;
+  /** The due day on the shop's clock, e.g. "Thursday, December 3, 2026" (a server renders in UTC). */
+  dueOn: string;
   /** When the reminder mail was queued, or null (no e-mail address, or not due yet). */
   remindedAt: string | null;
 }

@@ -7,7 +7,7 @@ import { ConflictError, InvalidError, NotFoundError } from "@/lib/platform/error
 import { iso, isoOrNull } from "@/lib/platform/http/isoDates";
 import { canBook } from "@/lib/shop/bookings/bookable";
 import { readSchedule } from "@/lib/shop/bookings/queries";
-import { formatClock, formatInstant } from "@/lib/shop/bookings/zoned";
+import { formatClock, formatDay, formatInstant, wallTime } from "@/lib/shop/bookings/zoned";
 import { type Actor, readLines, transition } from "@/lib/shop/quotes/queries";
 import { appOrigin } from "@/lib/platform/mail";
 import { queueMailIn } from "@/lib/platform/mail/transactional";
@@ -125,6 +125,7 @@ export async function getWorkOrder(db: Db, shopId: string, id: string): Promise<
     steps,
     bookedFor,
     await stepPhotoRows(db, id),
+    timeZone,
   );
 }
 
@@ -271,6 +272,7 @@ export async function dueForRecheck(db: Db, shopId: string, now = new Date()): P
     name: string;
     phone: string;
   }[];
+  const { timeZone } = await readSchedule(db, shopId);
   return rows.map((r) => ({
     workOrderId: r.id,
     quoteId: r.quote_id,
@@ -280,6 +282,7 @@ export async function dueForRecheck(db: Db, shopId: string, now = new Date()): P
     vehicleDescription: r.vehicle_description,
     doneAt: iso(r.done_at),
     recheckDueAt: iso(r.recheck_due_at),
+    dueOn: formatDay(wallTime(r.recheck_due_at, timeZone).date),
     remindedAt: isoOrNull(r.recheck_queued_at),
   }));
 }

@@ -47,7 +47,7 @@ export default async function RechecksPage() {
                   {d.customerName} · {d.customerPhone || "no phone"} · {d.vehicleDescription}
                 </span>
                 <span className="text-basalt-600">
-                  Due {new Date(d.recheckDueAt).toLocaleDateString()} · {d.remindedAt ? "e-mailed" : "not e-mailed (no address): call"}
+                  Due {d.dueOn} · {d.remindedAt ? "e-mailed" : "not e-mailed (no address): call"}
                 </span>
               </li>
             ))}

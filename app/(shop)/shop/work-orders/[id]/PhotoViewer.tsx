@@ -1,13 +1,24 @@
 "use client";
 import { useEffect, useRef } from "react";
 import { buttonClass } from "@/components/ui/Button";
+import { formatInstant } from "@/lib/shop/bookings/zoned";
 import type { StepPhoto } from "@/lib/shop/workOrders/api";
 
 /**
  * One step photo full size over the sheet, as a phone shows a picture: the whole screen, closed
  * by its button or Escape; focus goes to the button and back to the sheet after.
  */
-export function PhotoViewer({ photo, title, onClose }: { photo: StepPhoto; title: string; onClose: () => void }) {
+export function PhotoViewer({
+  photo,
+  title,
+  timeZone,
+  onClose,
+}: {
+  photo: StepPhoto;
+  title: string;
+  timeZone: string;
+  onClose: () => void;
+}) {
   const close = useRef<HTMLButtonElement>(null);
   useEffect(() => {
     const back = document.activeElement as HTMLElement | null;
@@ -32,7 +43,7 @@ export function PhotoViewer({ photo, title, onClose }: { photo: StepPhoto; title
       {/* eslint-disable-next-line @next/next/no-img-element */}
       <img src={photo.url} alt={title} className="max-h-[80vh] max-w-full object-contain" data-testid="photo-full" />
       <p className="text-sm text-white">
-        {photo.name} · taken by {photo.takenBy}, {new Date(photo.createdAt).toLocaleString()}
+        {photo.name} · taken by {photo.takenBy}, {formatInstant(photo.createdAt, timeZone)}
       </p>
       <div className="flex gap-2">
         <button ref={close} type="button" className={buttonClass("secondary")} onClick={onClose}>

@@ -2,6 +2,7 @@
 import { useState } from "react";
 import { Button } from "@/components/ui/Button";
 import type { Role, StepPosition } from "@/lib/platform/db/types";
+import { formatInstant } from "@/lib/shop/bookings/zoned";
 import type { SignedOff, StepPhoto, WorkOrder } from "@/lib/shop/workOrders/api";
 import { mayRemoveStepPhoto } from "@/lib/shop/workOrders/photoSchema";
 import { signedText } from "@/lib/shop/workOrders/signedText";
@@ -43,7 +44,7 @@ export function StepCard({
         </h3>
         {signed ? (
           <span className="text-sm text-clear-800" data-testid={`${id}-signed`}>
-            ✓ Signed by {signed.signedBy}, {new Date(signed.signedAt).toLocaleString()}
+            ✓ Signed by {signed.signedBy}, {formatInstant(signed.signedAt, workOrder.timeZone)}
           </span>
         ) : (
           <span className="hidden text-sm print:inline">Signed: ____________ Date/time: ________</span>
@@ -60,6 +61,7 @@ export function StepCard({
         canRemove={mayRemoveStepPhoto(role, !!signed, workOrder.status === "done")}
         onAdded={onPhotoAdded}
         onRemoved={onPhotoRemoved}
+        timeZone={workOrder.timeZone}
       />
       {canSign && (!signed || editing) && (
         <StepForm

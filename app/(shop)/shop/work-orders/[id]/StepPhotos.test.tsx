@@ -41,6 +41,7 @@ function setUp(props: Partial<Parameters<typeof StepPhotos>[0]> = {}) {
       canRemove
       onAdded={onAdded}
       onRemoved={onRemoved}
+      timeZone="America/Denver"
       {...props}
     />,
   );
@@ -63,6 +64,8 @@ describe("a work order step's photos", () => {
     await user.click(screen.getByRole("button", { name: "Open photo torque-pass-2.jpg full size" }));
     const dialog = screen.getByRole("dialog", { name: "Photo of LF lug nuts torqued: torque-pass-2.jpg" });
     expect(within(dialog).getByTestId("photo-full").getAttribute("src")).toBe(B.url);
+    // On the shop's clock, whatever the device's zone: 15:00 UTC is 8:00 AM in Denver in December (MST, UTC−7).
+    expect(within(dialog).getByText(/taken by Sam Staff/).textContent).toContain("taken by Sam Staff, Thu, Dec 3, 2026, 8:00 AM MST");
     expect(document.activeElement).toBe(within(dialog).getByRole("button", { name: "Close" }));
     await user.keyboard("{Escape}");
     expect(screen.queryByRole("dialog")).toBeNull();
@@ -127,6 +130,7 @@ describe("a work order step's photos", () => {
         canRemove={false}
         onAdded={vi.fn()}
         onRemoved={vi.fn()}
+        timeZone="America/Denver"
       />,
     );
     expect(container.innerHTML).toBe("");

@@ -30,6 +30,7 @@ export function StepPhotos({
   canRemove,
   onAdded,
   onRemoved,
+  timeZone,
 }: {
   workOrderId: string;
   position: StepPosition;
@@ -41,6 +42,8 @@ export function StepPhotos({
   canRemove: boolean;
   onAdded: (p: StepPhoto) => void;
   onRemoved: (id: string) => void;
+  /** The shop's, for the time a photo was taken. */
+  timeZone: string;
 }) {
   const ids = useId();
   const what = `${position} ${STEP_LABEL[step].toLowerCase()}`;
@@ -164,7 +167,7 @@ export function StepPhotos({
       <p aria-live="polite" className={cx("text-sm print:hidden", message?.tone === "error" ? "text-contact-600" : "text-clear-800")}>
         {message?.text}
       </p>
-      {open && <PhotoViewer photo={open} title={`Photo of ${what}: ${open.name}`} onClose={closeViewer} />}
+      {open && <PhotoViewer photo={open} title={`Photo of ${what}: ${open.name}`} timeZone={timeZone} onClose={closeViewer} />}
     </div>
   );
 }

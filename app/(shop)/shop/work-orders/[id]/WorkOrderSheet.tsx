@@ -6,6 +6,7 @@ import { Badge } from "@/components/ui/Badge";
 import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import type { Role } from "@/lib/platform/db/types";
+import { formatInstant } from "@/lib/shop/bookings/zoned";
 import { type StepPhoto, type WorkOrder, unsignedSteps } from "@/lib/shop/workOrders/api";
 import {
   BEAD_SEAT_CAUTION,
@@ -49,12 +50,12 @@ export function WorkOrderSheet({ initial, role }: { initial: WorkOrder; role: Ro
           {w.status !== "done" && <span>{open === 0 ? "Every step is signed." : `${open} step${open === 1 ? "" : "s"} to sign.`}</span>}
           {w.startedBy && (
             <span className="text-basalt-600">
-              In the bay since {new Date(w.startedAt!).toLocaleString()} ({w.startedBy})
+              In the bay since {formatInstant(w.startedAt!, w.timeZone)} ({w.startedBy})
             </span>
           )}
           {w.doneBy && (
             <span className="text-basalt-600">
-              Done {new Date(w.doneAt!).toLocaleString()} ({w.doneBy})
+              Done {formatInstant(w.doneAt!, w.timeZone)} ({w.doneBy})
             </span>
           )}
         </p>
