@@ -2,6 +2,7 @@ import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { launch, panelsShown, seriousViolations, shot, signInAs } from "./support/browser";
 import { DEMO, DEMO_PASSWORD } from "./support/http";
+import { PLACARD_TYPED_IN_INCHES } from "./support/placard";
 
 /** The vehicle page's panels below the fold, mounted when scrolled near (MountWhenNear). */
 const VEHICLE_PANELS = ["Loading placard, axle weights and body points", "Loading plan a setup"];
@@ -54,20 +55,7 @@ describe("a garage vehicle's placard, axle weights and body points", () => {
     await panelsShown(page, ...VEHICLE_PANELS);
     await units("Inch");
     await expect.poll(() => page.getByTestId("body-points-drawing").isVisible()).toBe(true);
-    const fill: Record<string, string> = {
-      "Tire size on the placard": "P265/70R17 113S",
-      "Placard cold pressure, front (psi)": "35",
-      "Placard cold pressure, rear (psi)": "35",
-      "Front axle weight, scale ticket (lb)": "3086",
-      "Rear axle weight, scale ticket (lb)": "2646",
-      "Front corner height (in)": "24",
-      "Front corner ahead of the front axle (in)": "35",
-      "Rear corner height (in)": "26",
-      "Rear corner behind the rear axle (in)": "40",
-      "Lowest point midway, height (in)": "11",
-      "Wheelbase (in)": "118",
-    };
-    for (const [label, text] of Object.entries(fill)) await page.getByLabel(label, { exact: true }).fill(text);
+    for (const [label, text] of Object.entries(PLACARD_TYPED_IN_INCHES)) await page.getByLabel(label, { exact: true }).fill(text);
     await page.getByRole("button", { name: "Save placard and body points" }).click();
     await expect.poll(() => page.getByText("Saved.").isVisible()).toBe(true);
     await expect.poll(() => page.getByTestId("set-front").textContent()).toBe("29.2 psi (201 kPa, 2.01 bar)");

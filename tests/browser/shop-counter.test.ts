@@ -5,6 +5,7 @@ import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { launch, payWithTestCard, seriousViolations, shot, signInAs, withBrowserPage } from "./support/browser";
 import { DEMO, DEMO_PASSWORD } from "./support/http";
+import { PLACARD_TYPED_IN_INCHES } from "./support/placard";
 
 const OUTBOX = process.env.OUTBOX_URL ?? "http://127.0.0.1:2526";
 
@@ -211,20 +212,8 @@ describe("the shop counter, end to end", () => {
     await page.getByRole("textbox", { name: "Offset (mm)" }).fill("25");
     await page.getByRole("radio", { name: "Inch", exact: true }).check({ force: true });
     await page.getByRole("radio", { name: "Truck, SUV, van" }).check({ force: true });
-    const typed: Record<string, string> = {
-      "Tire size on the placard": "P265/70R17 113S",
-      "Placard cold pressure, front (psi)": "35",
-      "Placard cold pressure, rear (psi)": "35",
-      "Front axle weight, scale ticket (lb)": "3086",
-      "Rear axle weight, scale ticket (lb)": "2646",
-      "Front corner height (in)": "24",
-      "Front corner ahead of the front axle (in)": "35",
-      "Rear corner height (in)": "26",
-      "Rear corner behind the rear axle (in)": "40",
-      "Lowest point midway, height (in)": "11",
-      "Wheelbase (in)": "118",
-    };
-    for (const [label, text] of Object.entries(typed)) await page.getByLabel(label, { exact: true }).pressSequentially(text);
+    for (const [label, text] of Object.entries(PLACARD_TYPED_IN_INCHES))
+      await page.getByLabel(label, { exact: true }).pressSequentially(text);
     // The unit switch converts what was typed (NIST SP 811: 1 psi = 6.894757 kPa, 1 lb = 0.45359237 kg, 1 in = 25.4 mm).
     await page.getByRole("radio", { name: "Metric", exact: true }).check({ force: true });
     await expect.poll(() => page.getByLabel("Placard cold pressure, front (kPa)").inputValue()).toBe("241");
