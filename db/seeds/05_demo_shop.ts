@@ -4,6 +4,8 @@ import { buildQuoteDocument } from "../../lib/shop/quotes/document";
 import { summarize } from "../../lib/shop/quotes/fitment";
 import { counterVehicleForEngine } from "../../lib/shop/customers/schema";
 import { type CounterBodyPoints, quoteAngles } from "../../lib/shop/customers/counterBodyPoints";
+import { type CounterPlacard, quotePressure } from "../../lib/shop/customers/counterPlacard";
+import { lbToKg, psiToKpa } from "../../lib/fitment";
 import type { Setup } from "../../lib/setup/model";
 import { computeTotals } from "../../lib/shop/quotes/totals";
 import { hashToken, randomToken } from "../../lib/platform/tokens";
@@ -78,6 +80,22 @@ const BODY_POINTS: CounterBodyPoints = {
   midHeightMm: 431.8,
   wheelbaseMm: 3683,
 };
+/**
+ * Its door placard as the counter took it (invented): P265/70R17 113S at 35 psi front and rear,
+ * axle ratings 3,700 lb front and 3,900 lb rear, no scale ticket — so her quotes and the work
+ * order give the cold pressure to set for the quoted tire.
+ */
+const PLACARD: CounterPlacard = {
+  units: "imperial",
+  vehicleKind: "light-truck",
+  placardTire: "P265/70R17 113S",
+  placardFrontKpa: psiToKpa(35),
+  placardRearKpa: psiToKpa(35),
+  frontGawrKg: lbToKg(3700),
+  rearGawrKg: lbToKg(3900),
+  frontAxleKg: null,
+  rearAxleKg: null,
+};
 const VEHICLE = counterVehicleForEngine({
   description: "Half-ton pickup, stock height",
   boltPattern: "6x5.5",
@@ -122,6 +140,7 @@ export async function seed(knex: Knex): Promise<void> {
       current_setup: JSON.stringify(CURRENT_SETUP),
       axle_ratio: VEHICLE.axleRatio,
       hub_bore_mm: VEHICLE.hubBoreMm,
+      load_placard: JSON.stringify(PLACARD),
       body_points: JSON.stringify(BODY_POINTS),
     })
     .onConflict("id")
@@ -217,7 +236,10 @@ export async function seed(knex: Knex): Promise<void> {
       beadlock: wheel.beadlock,
     });
     // As the counter does for a saved vehicle with body points (lib/shop/quotes/queries.ts).
-    if (p.customer === 0) fit.angles = quoteAngles(BODY_POINTS, CURRENT_SETUP, fit.setups.planned);
+    if (p.customer === 0) {
+      fit.pressure = quotePressure(PLACARD, CURRENT_SETUP, fit.setups.planned);
+      fit.angles = quoteAngles(BODY_POINTS, CURRENT_SETUP, fit.setups.planned);
+    }
     const svc = async (sku: string, qty: number) => {
       const s = await bySku(sku);
       return {

@@ -49,7 +49,13 @@ async function fill(form: Locator, step: string) {
       await form.getByLabel("Beads seated following the cautions above").check();
       return;
     case "pressure":
-      await form.getByLabel("Cold pressure set (psi)").fill("35");
+      // The quote carries the demo pickup's door placard (db/seeds/05_demo_shop.ts): P265/70R17 113S at 35 psi, axle
+      // ratings 3,700 / 3,900 lb. For 37x12.50R17LT 124Q load range D the equivalent pressure is 50 · (1045.5/1600)^(1/0.585)
+      // = 24.2 psi (TRA load formula; 1150 kg ÷ 1.10, FMVSS 120), below the road minimum 0.5833 × 50 = 29.2 psi, which is set.
+      expect(await form.getByText(/Cold pressure to set \(from the door placard on the quote\)/).textContent()).toContain(
+        "front 29.2 psi (201 kPa), rear 29.2 psi (201 kPa)",
+      );
+      await form.getByLabel("Cold pressure set (psi)").fill("29.2");
       return;
     case "balance":
       await form.getByLabel("Inner plane weight (g)").fill("42.5");
