@@ -3,13 +3,13 @@ import type { QuotePayments } from "@/lib/shop/payments/api";
 import { invoiceLines } from "@/lib/shop/payments/invoice";
 import { PAYMENT_KIND_LABEL, PAYMENT_METHOD_LABEL } from "@/lib/shop/payments/labels";
 import { formatUsd } from "@/lib/shop/quotes/money";
-
-const when = (iso: string | null) =>
-  iso ? new Date(iso).toLocaleString("en-US", { month: "short", day: "numeric", year: "numeric", hour: "numeric", minute: "2-digit" }) : "";
+import { formatInstant } from "@/lib/shop/bookings/zoned";
 
 /** The invoice once the work is done, and every payment and refund of the quote: the counter and the customer see the same. */
 export function PaymentHistory({ payments }: { payments: QuotePayments }) {
   const { invoice } = payments;
+  // On the shop's clock, whoever reads it and wherever (a server-rendered page is in UTC).
+  const when = (iso: string | null) => (iso ? formatInstant(iso, payments.timeZone) : "");
   return (
     <div className="flex flex-col gap-3">
       {payments.invoiceOpen && (

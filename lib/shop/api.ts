@@ -40,6 +40,8 @@ export interface StaffInvite {
 export interface StaffData {
   team: TeamMember[];
   invites: StaffInvite[];
+  /** The shop's time zone (IANA): an invitation's expiry reads on the shop's clock, not the device's. */
+  timeZone: string;
 }
 
 const iso = (d: Date | string) => new Date(d).toISOString();

@@ -1,7 +1,8 @@
 import "server-only";
 import type { Knex } from "knex";
 import type { ShopSettingsRow } from "@/lib/platform/db/types";
-import { type StaffInvite, type TeamMember, staffInviteDto } from "@/lib/shop/api";
+import { type StaffData, type StaffInvite, type TeamMember, staffInviteDto } from "@/lib/shop/api";
+import { shopTimeZone } from "@/lib/shop/bookings/timeZoneQueries";
 import { hashPassword, verifyPassword } from "@/lib/platform/auth/password";
 import { ConflictError, GoneError, InvalidError, NotFoundError } from "@/lib/platform/errors";
 import { passwordField } from "@/lib/accounts/schema";
@@ -62,6 +63,12 @@ export async function listOpenInvites(db: Knex, shopId: string): Promise<StaffIn
     .orderBy("created_at", "desc")
     .select("id", "email", "expires_at", "created_at");
   return rows.map(staffInviteDto);
+}
+
+/** The staff page's data: the team, the open invitations and the shop's zone to date them in. */
+export async function staffData(db: Knex, shopId: string): Promise<StaffData> {
+  const [team, invites, timeZone] = await Promise.all([listTeam(db, shopId), listOpenInvites(db, shopId), shopTimeZone(db, shopId)]);
+  return { team, invites, timeZone };
 }
 
 /** A new single-use invitation (256-bit URL-safe token; only its hash is kept). */
@@ -191,5 +198,6 @@ export const shopQueries = bindAppDb({
   listTeam,
   removeStaff,
   revokeInvite,
+  staffData,
   updateShopSettings,
 });

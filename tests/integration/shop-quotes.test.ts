@@ -6,7 +6,7 @@ import { internalKeys } from "./support/apiKeys";
 
 const session = vi.hoisted(() => ({ current: null as unknown }));
 vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
-const sent = vi.hoisted(() => [] as { to: string; text: string; attachments?: { filename: string; content: Buffer }[] }[]);
+const sent = vi.hoisted(() => [] as { to: string; text: string; html: string; attachments?: { filename: string; content: Buffer }[] }[]);
 // The mail as it is queued (the queue itself: tests/integration/jobs.test.ts).
 vi.mock("@/lib/platform/mail", () => ({
   queueMail: async (m: (typeof sent)[number]) => void sent.push(m),
@@ -29,6 +29,8 @@ const quoteById = await import("@/app/api/shop/quotes/[id]/route");
 const status = (await import("@/app/api/shop/quotes/[id]/status/route")).POST;
 const send = (await import("@/app/api/shop/quotes/[id]/send/route")).POST;
 const pdfRoute = (await import("@/app/api/shop/quotes/[id]/pdf/route")).GET;
+const paymentsRoute = (await import("@/app/api/shop/quotes/[id]/payments/route")).GET;
+const staffRoute = (await import("@/app/api/shop/staff/route")).GET;
 
 async function pdfText(buf: Buffer): Promise<string> {
   const { PDFParse } = await import("pdf-parse");
@@ -678,6 +680,59 @@ describe("the quote PDF prints every name", () => {
       expect(text).not.toMatch(/\?ód\?|\?ukasz/);
     } finally {
       await db("shops").where({ id: SHOP_A }).update({ name: before, address: "1 Test Lane" });
+    }
+  });
+});
+
+/** The calendar day of an instant in a zone, written out by the platform's Intl (not the app's helper). */
+const dayIn = (instant: Date, timeZone: string) =>
+  instant.toLocaleDateString("en-US", { timeZone, weekday: "long", year: "numeric", month: "long", day: "numeric" });
+
+describe("a quote's days on the shop's clock", () => {
+  /*
+   * The e-mail and the PDF are made, and the customer's page rendered, on a UTC server; the editor,
+   * the payments card and the staff page format from the zone the API gives them. The zone is
+   * picked from the hour the test runs, so that the quote's last valid day in the shop differs
+   * from the UTC one: UTC+14 (Pacific/Kiritimati) is a day ahead from 10:00 UTC, UTC−11
+   * (Pacific/Pago_Pago) a day behind until 11:00 UTC (IANA tz database; neither keeps daylight time).
+   */
+  it("the e-mail, the PDF and the customer's page say the shop's last valid day; the API carries the shop's zone", async () => {
+    // Close to midnight UTC the zone picked could be on the wrong side by the time the quote is sent: wait it out.
+    const toMidnight = 86_400_000 - (Date.now() % 86_400_000);
+    if (toMidnight < 30_000) await new Promise((r) => setTimeout(r, toMidnight + 1000));
+    const timeZone = new Date().getUTCHours() >= 10 ? "Pacific/Kiritimati" : "Pacific/Pago_Pago";
+    await db("shop_schedules").insert({ shop_id: SHOP_A, time_zone: timeZone });
+    try {
+      const { id } = await draftFor();
+      sent.length = 0;
+      expect((await send(req("POST", `/api/shop/quotes/${id}/send`, {}), ctx({ id }))).status).toBe(200);
+      const row = await db("quotes").where({ id }).first();
+      const shopDay = dayIn(row.valid_until, timeZone);
+      // The test tells the two clocks apart, or it proves nothing.
+      expect(shopDay).not.toBe(dayIn(row.valid_until, "UTC"));
+
+      expect(sent).toHaveLength(1);
+      expect(sent[0]!.text).toContain(`(valid until ${shopDay})`);
+      expect(sent[0]!.html).toContain(`(valid until ${shopDay})`);
+      const oneLine = (t: string) => t.replace(/\s+/g, " ");
+      expect(oneLine(await pdfText(sent[0]!.attachments![0]!.content))).toContain(`valid until ${shopDay}`);
+      const pdf = await pdfRoute(req("GET", `/api/shop/quotes/${id}/pdf`), ctx({ id }));
+      expect(oneLine(await pdfText(Buffer.from(await pdf.arrayBuffer())))).toContain(`valid until ${shopDay}`);
+      const token = /\/q\/([A-Za-z0-9_-]{43})/.exec(sent[0]!.text)![1]!;
+      expect((await findPublicQuoteView(db, token))!.validUntilDay).toBe(shopDay);
+
+      // What the browser formats from: the editor's validity and history, the payments card, the staff page.
+      expect((await detailOf(id)).timeZone).toBe(timeZone);
+      expect((await (await paymentsRoute(req("GET", `/api/shop/quotes/${id}/payments`), ctx({ id }))).json()).payments.timeZone).toBe(
+        timeZone,
+      );
+      as(U.ownerA);
+      expect((await (await staffRoute(req("GET", "/api/shop/staff"), ctx())).json()).timeZone).toBe(timeZone);
+      // A shop that never saved its calendar is on the default zone (lib/shop/bookings/vocabulary.ts).
+      as(U.ownerB);
+      expect((await (await staffRoute(req("GET", "/api/shop/staff"), ctx())).json()).timeZone).toBe("America/Denver");
+    } finally {
+      await db("shop_schedules").where({ shop_id: SHOP_A }).delete();
     }
   });
 });

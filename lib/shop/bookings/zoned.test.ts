@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { addDays, formatDuration, hhmmToMinute, isTimeZone, minuteToHhmm, wallTime, weekdayOf, zonedInstant } from "./zoned";
+import { addDays, formatDayOf, formatDuration, hhmmToMinute, isTimeZone, minuteToHhmm, wallTime, weekdayOf, zonedInstant } from "./zoned";
 
 /*
  * US daylight saving time: from 2:00 a.m. on the second Sunday of March to 2:00 a.m. on the first
@@ -57,5 +57,17 @@ describe("wall-clock time in the shop's zone (Intl, IANA data)", () => {
     expect(formatDuration(150)).toBe("2 h 30 min");
     expect(formatDuration(45)).toBe("45 min");
     expect(formatDuration(120)).toBe("2 h");
+  });
+});
+
+describe("the shop's day of an instant", () => {
+  it("is the day on the shop's clock, not UTC's: 03:30 UTC on Dec 4 is 8:30 PM on Dec 3 in Denver (MST, UTC−7, 49 CFR §71.9)", () => {
+    expect(formatDayOf("2026-12-04T03:30:00Z", DENVER)).toBe("Thursday, December 3, 2026");
+    expect(formatDayOf("2026-12-04T03:30:00Z", "UTC")).toBe("Friday, December 4, 2026");
+    expect(formatDayOf(new Date("2026-12-04T03:30:00Z"), DENVER, "short")).toBe("Thu, Dec 3");
+  });
+  it("follows daylight time: 05:30 UTC on Jul 5 2027 is 11:30 PM on Jul 4 in Denver (MDT, UTC−6), Jul 5 at 06:30 UTC", () => {
+    expect(formatDayOf("2027-07-05T05:30:00Z", DENVER)).toBe("Sunday, July 4, 2027");
+    expect(formatDayOf("2027-07-05T06:30:00Z", DENVER)).toBe("Monday, July 5, 2027");
   });
 });

@@ -138,6 +138,17 @@ export function formatDay(date: string, style: "long" | "short" = "long"): strin
   );
 }
 
+/**
+ * The shop's calendar day an instant falls on, as formatDay writes it: a quote valid until
+ * 03:30 UTC on Dec 4 is valid until Dec 3 in Denver.
+ *
+ * @example
+ * formatDayOf("2026-12-04T03:30:00Z", "America/Denver"); // "Thursday, December 3, 2026" (MST, UTC−7)
+ */
+export function formatDayOf(instant: Date | string, timeZone: string, style: "long" | "short" = "long"): string {
+  return formatDay(wallTime(new Date(instant), timeZone).date, style);
+}
+
 /** "8:00 AM" for minutes after midnight. */
 export function formatMinute(minute: number): string {
   const h = Math.floor(minute / 60) % 24;

@@ -37,6 +37,8 @@ export interface QuotePayments {
   refundBlocked: string | null;
   payments: PaymentEntry[];
   refunds: RefundEntry[];
+  /** The shop's time zone (IANA): payment times read on the shop's clock on the counter and the customer's page alike. */
+  timeZone: string;
 }
 
 export const paymentEntryDto = (r: PaymentRow): PaymentEntry => ({

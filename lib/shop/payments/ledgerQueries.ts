@@ -7,6 +7,7 @@ import { log } from "@/lib/platform/log";
 import { appOrigin } from "@/lib/platform/mail";
 import { queueMailIn } from "@/lib/platform/mail/transactional";
 import { readSchedule } from "@/lib/shop/bookings/queries";
+import { shopTimeZone } from "@/lib/shop/bookings/timeZoneQueries";
 import { queueShopNotice } from "@/lib/shop/notices/noticeQueries";
 import { type Actor, type QuoteScope, findByToken, getQuote } from "@/lib/shop/quotes/queries";
 import { type QuotePayments, paymentEntryDto, refundEntryDto } from "./api";
@@ -56,6 +57,7 @@ export async function paymentsOf(db: Db, quote: QuoteRow): Promise<QuotePayments
     refundBlocked: await refundBlocked(db, quote, figures),
     payments: payments.filter((p) => p.status === "paid").map(paymentEntryDto),
     refunds: refunds.map(refundEntryDto),
+    timeZone: await shopTimeZone(db, quote.shop_id),
   };
 }
 

@@ -67,6 +67,8 @@ export interface QuoteDetail {
   createdByName: string | null;
   /** Each wheel line checked against the quoted vehicle's bolt pattern and hub bore. */
   hubChecks: HubCheck[];
+  /** The shop's time zone (IANA), so the validity day and the history read on the shop's clock, not the device's. */
+  timeZone: string;
 }
 
 /** One row of the quotes list. */
@@ -159,6 +161,7 @@ export function quoteDetailDto(d: {
   customer: QuoteDetail["customer"];
   createdByName: string | null;
   hubChecks: HubCheck[];
+  timeZone: string;
 }): QuoteDetail {
   return {
     quote: quoteDto(d.quote),
@@ -167,6 +170,7 @@ export function quoteDetailDto(d: {
     customer: { id: d.customer.id, name: d.customer.name, phone: d.customer.phone, email: d.customer.email },
     createdByName: d.createdByName,
     hubChecks: d.hubChecks,
+    timeZone: d.timeZone,
   };
 }
 

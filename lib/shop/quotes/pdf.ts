@@ -8,6 +8,7 @@ import { type QuoteDrawing, quoteDrawing } from "./drawing";
 import { fitmentChangeRows } from "./fitment";
 import { formatBp, formatUsd } from "./money";
 import { formatQuantity } from "./quantity";
+import { formatDayOf } from "@/lib/shop/bookings/zoned";
 
 /**
  * Inter (SIL OFL 1.1, from the @expo-google-fonts/inter package), embedded as a subset: it covers
@@ -65,15 +66,16 @@ function drawingPage(doc: PDFKit.PDFDocument, drawing: QuoteDrawing, text: (s: s
   });
 }
 
-const date = (d: Date | string) => new Date(d).toLocaleDateString("en-US", { year: "numeric", month: "short", day: "numeric" });
-
 /**
  * The quote as a PDF (US Letter), set in the embedded Inter (no font fetched from anywhere).
- * It prints a QuoteDocument only, so a sent quote prints from what was sent; the last page is the
- * cross-section of the current and quoted setups (drawing.tsx), when the summary's setups read.
+ * It prints a QuoteDocument only, so a sent quote prints from what was sent, its days on the shop's
+ * clock (`timeZone`); the last page is the cross-section of the current and quoted setups
+ * (drawing.tsx), when the summary's setups read.
  */
-export function quotePdf(d: QuoteDocument): Promise<Buffer> {
+export function quotePdf(d: QuoteDocument, timeZone: string): Promise<Buffer> {
   const { shop, customer, lines, totals: t } = d;
+  // Days on the shop's clock (`timeZone`, the shop's IANA zone), not the server's UTC.
+  const date = (at: string) => formatDayOf(at, timeZone);
   const fit = d.fitment;
   const doc = new PDFDocument({ size: "LETTER", margin: 50, info: { Title: `Quote Q-${d.number}`, Author: shop.name }, font: REGULAR });
   doc.registerFont("Body", REGULAR);

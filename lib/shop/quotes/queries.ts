@@ -28,6 +28,7 @@ import { type CounterVehicle, type CounterVehicleForEngine, counterVehicleForEng
 import type { Setup } from "@/lib/setup/model";
 import { bindAppDb } from "@/lib/platform/db/bind";
 import { queueShopNotice } from "@/lib/shop/notices/noticeQueries";
+import { shopTimeZone } from "@/lib/shop/bookings/timeZoneQueries";
 import { stockFollowsQuote } from "@/lib/shop/catalog/stockQueries";
 import { isLinkToken } from "@/lib/platform/tokenFormat";
 import { hashToken, randomToken } from "@/lib/platform/tokens";
@@ -148,6 +149,8 @@ export interface QuoteRecord {
   createdByName: string | null;
   /** Each wheel line checked against the quoted vehicle's bolt pattern and hub bore. */
   hubChecks: HubCheck[];
+  /** The shop's time zone (IANA): the editor shows the validity day and the history on the shop's clock. */
+  timeZone: string;
 }
 
 /** A quote's lines in order; pg reads numeric(8,2) as text, so the quantity is made a number here. */
@@ -167,12 +170,13 @@ export async function quoteParties(db: Knex, quote: QuoteRow): Promise<Pick<Quot
 }
 
 export async function quoteDetail(db: Knex, quote: QuoteRow): Promise<QuoteRecord> {
-  const [parties, events] = await Promise.all([
+  const [parties, events, timeZone] = await Promise.all([
     quoteParties(db, quote),
     db<QuoteEventRow>("quote_events").where({ quote_id: quote.id }).orderBy("id"),
+    shopTimeZone(db, quote.shop_id),
   ]);
   const { public_token_hash: _hidden, ...shown } = quote;
-  return { quote: shown, events, ...parties, hubChecks: hubChecksOf(quote, parties.lines) };
+  return { quote: shown, events, ...parties, hubChecks: hubChecksOf(quote, parties.lines), timeZone };
 }
 
 export async function getQuoteDetail(db: Knex, scope: QuoteScope, id: string): Promise<QuoteRecord> {

@@ -17,6 +17,8 @@ import {
 } from "./queries";
 import { getShop } from "../queries";
 import { bindAppDb } from "@/lib/platform/db/bind";
+import { shopTimeZone } from "@/lib/shop/bookings/timeZoneQueries";
+import { formatDayOf } from "@/lib/shop/bookings/zoned";
 import { escapeHtml as esc } from "@/lib/platform/text";
 
 /**
@@ -43,14 +45,25 @@ export async function documentFor(
 }
 
 export async function renderQuotePdf(db: Knex, detail: QuoteRecord): Promise<Buffer> {
-  return quotePdf(await documentFor(db, detail));
+  return quotePdf(await documentFor(db, detail), detail.timeZone);
 }
 
-/** What the customer's link shows: the live status and the document as sent. */
-export async function findPublicQuoteView(db: Knex, token: string): Promise<{ quote: QuoteRow; document: QuoteDocument } | undefined> {
+/** What the customer's link shows: the live status, the document as sent and its validity day on the shop's clock. */
+export interface PublicQuoteView {
+  quote: QuoteRow;
+  document: QuoteDocument;
+  /** The day the quote is valid until, on the shop's clock (the page renders on a UTC server), e.g. "Thursday, December 3, 2026". */
+  validUntilDay: string | null;
+}
+
+export async function findPublicQuoteView(db: Knex, token: string): Promise<PublicQuoteView | undefined> {
   const quote = await findByToken(db, token);
   if (!quote) return undefined;
-  return { quote, document: await documentFor(db, { quote, ...(await quoteParties(db, quote)) }) };
+  const [document, timeZone] = await Promise.all([
+    documentFor(db, { quote, ...(await quoteParties(db, quote)) }),
+    shopTimeZone(db, quote.shop_id),
+  ]);
+  return { quote, document, validUntilDay: document.validUntil ? formatDayOf(document.validUntil, timeZone) : null };
 }
 
 /**
@@ -60,10 +73,11 @@ export async function findPublicQuoteView(db: Knex, token: string): Promise<{ qu
 export async function sendQuote(db: Knex, scope: QuoteScope, id: string, actor: Actor, seenUpdatedAt?: string): Promise<QuoteRecord> {
   const { token, document: d } = await markSent(db, scope, id, actor, seenUpdatedAt);
   const detail = await getQuoteDetail(db, scope, id);
-  const pdf = await quotePdf(d);
+  const pdf = await quotePdf(d, detail.timeZone);
   const t = d.totals;
   const link = `${appOrigin()}/q/${token}`;
-  const until = d.validUntil ? new Date(d.validUntil).toLocaleDateString("en-US", { year: "numeric", month: "long", day: "numeric" }) : "";
+  // The day on the shop's clock: the server's is UTC, a day ahead of Denver's every evening.
+  const until = d.validUntil ? formatDayOf(d.validUntil, detail.timeZone) : "";
   const hub = hubCautions(d);
   await queueMail({
     to: d.customer.email,

@@ -27,6 +27,7 @@ describe("BalancePanel", () => {
       refundBlocked: null,
       payments: [entry],
       refunds: [],
+      timeZone: "America/Denver",
     };
     render(<BalancePanel token={TOKEN} payments={payments} justPaid={false} />);
     await userEvent.click(screen.getByRole("button", { name: "Pay the $3,230.86 balance" }));
@@ -39,7 +40,7 @@ describe("BalancePanel", () => {
     render(
       <BalancePanel
         token={TOKEN}
-        payments={{ invoice, invoiceOpen: true, refundBlocked: null, payments: [entry], refunds: [] }}
+        payments={{ invoice, invoiceOpen: true, refundBlocked: null, payments: [entry], refunds: [], timeZone: "America/Denver" }}
         justPaid
       />,
     );

@@ -59,9 +59,7 @@ export default async function PublicQuotePage({
             <span data-testid="public-status">{STATUS_LABEL[quote.status]}</span>
           </Badge>{" "}
           {d.vehicle.description}
-          {d.validUntil &&
-            quote.status !== "expired" &&
-            ` · valid until ${new Date(d.validUntil).toLocaleDateString("en-US", { year: "numeric", month: "long", day: "numeric" })}`}
+          {view.validUntilDay && quote.status !== "expired" && ` · valid until ${view.validUntilDay}`}
         </p>
         <p className="text-sm text-basalt-600">{[d.shop.address, d.shop.phone].filter(Boolean).join(" · ")}</p>
       </header>

@@ -11,6 +11,7 @@ import { TextField } from "@/components/ui/TextField";
 import { api, applyFieldErrors } from "@/lib/platform/client/api";
 import { queryKeys } from "@/lib/platform/query/keys";
 import type { StaffData } from "@/lib/shop/api";
+import { formatInstant } from "@/lib/shop/bookings/zoned";
 import { type StaffInviteInput, staffInviteSchema } from "@/lib/shop/schema";
 
 export function StaffPanel({ initial, selfId }: { initial: StaffData; selfId: string }) {
@@ -100,7 +101,7 @@ export function StaffPanel({ initial, selfId }: { initial: StaffData; selfId: st
             {d.invites.map((i) => (
               <li key={i.id} className="flex flex-wrap items-center justify-between gap-2 py-2">
                 <span>
-                  {i.email} <span className="text-basalt-600">· expires {new Date(i.expiresAt).toLocaleString("en-US")}</span>
+                  {i.email} <span className="text-basalt-600">· expires {formatInstant(i.expiresAt, d.timeZone)}</span>
                 </span>
                 <Button variant="ghost" className="min-h-8 py-1" onClick={() => revoke.mutate(i.id)}>
                   Withdraw<span className="sr-only"> invitation for {i.email}</span>

@@ -8,15 +8,14 @@ export const metadata: Metadata = { title: "Staff" };
 
 export default async function StaffPage() {
   const caller = await requirePageCaller("/shop/staff", ["shop_owner"]);
-  const shopId = shopIdOf(caller);
-  const [team, invites] = await Promise.all([shopQueries.listTeam(shopId), shopQueries.listOpenInvites(shopId)]);
+  const data = await shopQueries.staffData(shopIdOf(caller));
   return (
     <>
       <PageHeader
         title="Staff"
         lead="Invite counter staff by e-mail. The link works once and expires after three days. Staff can do everything a member can: the garage and saved comparisons they keep are their own, the shop does not see them, and they keep them if they leave the shop."
       />
-      <StaffPanel selfId={caller.userId} initial={{ team, invites }} />
+      <StaffPanel selfId={caller.userId} initial={data} />
     </>
   );
 }

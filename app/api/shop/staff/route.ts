@@ -7,11 +7,7 @@ import { INVITE_TTL_HOURS, SHOP_OWNER, shopIdOf, shopQueries } from "@/lib/shop/
 import { staffInviteSchema } from "@/lib/shop/schema";
 import { escapeHtml } from "@/lib/platform/text";
 
-export const GET = route({ access: SHOP_OWNER }, async ({ caller }) => {
-  const shopId = shopIdOf(caller);
-  const [team, invites] = await Promise.all([shopQueries.listTeam(shopId), shopQueries.listOpenInvites(shopId)]);
-  return { team, invites };
-});
+export const GET = route({ access: SHOP_OWNER }, async ({ caller }) => shopQueries.staffData(shopIdOf(caller)));
 
 export const POST = route({ access: SHOP_OWNER, body: staffInviteSchema, idempotent: true }, async ({ caller, body }) => {
   const shopId = shopIdOf(caller);

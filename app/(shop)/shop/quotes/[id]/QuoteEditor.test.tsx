@@ -84,6 +84,7 @@ function detail(
     customer: { id: "c", name: "Dace Holloway", phone: "555-0132", email: "dace@example.test" },
     createdByName: "Sam Staff",
     hubChecks: [],
+    timeZone: "America/Denver",
   };
 }
 
@@ -244,5 +245,18 @@ describe("the quote editor's catalog and figures", () => {
     server(() => ({ status: 500, body: {} }));
     renderEditor();
     expect(screen.getByTestId("quote-balance").textContent).toBe("$101.25");
+  });
+});
+
+describe("the quote editor's dates", () => {
+  it("reads the validity day and the history on the shop's clock, not the device's (vitest runs in UTC)", () => {
+    // 03:30 UTC on Dec 4 is 8:30 PM on Dec 3 in Denver (MST, UTC−7: 49 CFR §71.9).
+    const d = detail({ status: "sent", validUntil: "2026-12-04T03:30:00.000Z" });
+    d.events = [
+      { id: "1", fromStatus: "draft", toStatus: "sent", actorUserId: null, actor: "Sam Staff", note: "", at: "2026-12-04T03:30:00.000Z" },
+    ];
+    renderEditor(d);
+    expect(screen.getByText(/valid until/).textContent).toContain("valid until Thursday, December 3, 2026");
+    expect(screen.getByTestId("quote-history").textContent).toContain("Sam Staff, Thu, Dec 3, 2026, 8:30 PM MST");
   });
 });

@@ -10,6 +10,7 @@ import { Button, buttonClass } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { ApiError, api } from "@/lib/platform/client/api";
+import { formatDayOf, formatInstant } from "@/lib/shop/bookings/zoned";
 import { type EditForm, type EditLine, bodyOf, formOf, isDirty, labourLine, lineFromCatalog, partsLine } from "@/lib/shop/quotes/editLines";
 import { describeFieldErrors } from "@/lib/shop/quotes/fieldLabels";
 import { STATUS_LABEL } from "@/lib/shop/quotes/status";
@@ -129,7 +130,7 @@ export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; lab
               </>
             )}
             {detail.customer.name} · {q.vehicleDescription}
-            {q.validUntil && ` · valid until ${new Date(q.validUntil).toLocaleDateString("en-US")}`}
+            {q.validUntil && ` · valid until ${formatDayOf(q.validUntil, detail.timeZone)}`}
           </>
         }
         actions={
@@ -270,7 +271,7 @@ export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; lab
             <ol className="mt-2 flex flex-col gap-1 text-sm" data-testid="quote-history">
               {detail.events.map((e) => (
                 <li key={e.id}>
-                  <span className="font-medium">{STATUS_LABEL[e.toStatus]}</span> — {e.actor}, {new Date(e.at).toLocaleString("en-US")}
+                  <span className="font-medium">{STATUS_LABEL[e.toStatus]}</span> — {e.actor}, {formatInstant(e.at, detail.timeZone)}
                   {e.note && <span className="text-basalt-600"> ({e.note})</span>}
                 </li>
               ))}
