@@ -45,6 +45,12 @@ describe("the finder's results table", () => {
     render(<FinderTable rows={ROWS} vehicle={HAULER} />);
     expect(firstCells()).toEqual(Array.from({ length: 25 }, (_, i) => String(i + 1)));
     expect(screen.getByTestId("finder-page-rows").textContent).toBe("Rows 1–25 of 60");
+    // The table scrolls sideways in its own focusable region; the filter and the pages stay outside it, in view.
+    const region = screen.getByRole("region", { name: /Fitments found/ });
+    expect(region.tabIndex).toBe(0);
+    expect(within(region).getByTestId("finder-results")).toBeTruthy();
+    expect(within(region).queryByRole("searchbox")).toBeNull();
+    expect(within(region).queryByRole("navigation")).toBeNull();
     const pages = screen.getByRole("navigation", { name: "Pages of fitments" });
     expect((within(pages).getByRole("button", { name: "Previous" }) as HTMLButtonElement).disabled).toBe(true);
     await user.click(within(pages).getByRole("button", { name: "Next" }));

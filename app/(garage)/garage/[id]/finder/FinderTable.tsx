@@ -116,7 +116,7 @@ export function FinderTable({
   const shown = pageOf(sorted.rows, page, FINDER_PAGE_SIZE);
   const first = shown.pageIndex * FINDER_PAGE_SIZE;
   return (
-    <Card className="flex flex-col gap-3 overflow-x-auto">
+    <Card className="flex flex-col gap-3">
       <label className="flex max-w-sm flex-col gap-1 text-sm font-medium">
         Filter by tire size or wheel
         <input
@@ -130,19 +130,22 @@ export function FinderTable({
           placeholder="e.g. 35x or 17x9"
         />
       </label>
-      <Table
-        testId="finder-results"
-        caption="Fitments found, best first; column headers sort"
-        className="min-w-[760px]"
-        columns={columns}
-        rows={shown.rows}
-        rowKey={(m) => String(m.rank)}
-        sort={sorted.sort}
-        onSort={(id) => {
-          sorted.onSort(id);
-          setPage(0);
-        }}
-      />
+      {/* Only the table scrolls sideways (its own focusable region), so the filter and the pages stay in view. */}
+      <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Fitments found (scrolls sideways)">
+        <Table
+          testId="finder-results"
+          caption="Fitments found, best first; column headers sort"
+          className="min-w-[760px]"
+          columns={columns}
+          rows={shown.rows}
+          rowKey={(m) => String(m.rank)}
+          sort={sorted.sort}
+          onSort={(id) => {
+            sorted.onSort(id);
+            setPage(0);
+          }}
+        />
+      </div>
       {rows.length === 0 ? (
         <p className="text-sm text-basalt-700">
           Nothing fits these goals. Widen the diameter range or allow more poke; the sizes the measured points exclude are listed with what
