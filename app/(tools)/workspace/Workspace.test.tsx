@@ -7,7 +7,7 @@ import { PREFS_STORAGE_KEY } from "@/lib/comparisons/format";
 import { decodeComparison } from "@/lib/comparisons/url";
 import { Workspace } from "./Workspace";
 
-// The charts load lazily through next/dynamic; they are not what these tests are about.
+// The charts load lazily through clientLazy; they are not what these tests are about.
 // Typing through user-event in jsdom is slow on a shared machine; the default 5 s is too tight.
 vi.setConfig({ testTimeout: 20_000 });
 vi.mock("@/components/comparison/LazyComparisonCharts", () => ({ LazyComparisonCharts: () => <div data-testid="charts-stub" /> }));

@@ -1,5 +1,4 @@
 "use client";
-import dynamic from "next/dynamic";
 import { type ReactNode, useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { ChartsSection } from "@/components/comparison/ChartsSection";
 import type { DrawnLimits } from "@/components/comparison/CrossSection";
@@ -10,6 +9,7 @@ import { LazySetupDetailTable } from "@/components/comparison/LazySetupDetailTab
 import { useDisplayPrefs } from "@/components/comparison/useDisplayPrefs";
 import { Button } from "@/components/ui/Button";
 import { MountWhenNear } from "@/components/ui/MountWhenNear";
+import { clientLazy } from "@/components/ui/clientLazy";
 import { computeComparison } from "@/lib/comparisons/compute";
 import {
   type Draft,
@@ -32,14 +32,14 @@ import { SetupDraftFields } from "./SetupDraftFields";
 import { VehicleFields } from "./VehicleFields";
 
 // Below the fold on every screen: their code loads when they are scrolled near (MountWhenNear below).
-const LoadPressurePanel = dynamic(() => import("./LoadPressurePanel").then((m) => m.LoadPressurePanel), { ssr: false });
-const TrailAnglesPanel = dynamic(() => import("./TrailAnglesPanel").then((m) => m.TrailAnglesPanel), { ssr: false });
+const LoadPressurePanel = clientLazy(() => import("./LoadPressurePanel").then((m) => m.LoadPressurePanel));
+const TrailAnglesPanel = clientLazy(() => import("./TrailAnglesPanel").then((m) => m.TrailAnglesPanel));
 
 // Only members with vehicles load the garage panel (and the prediction code with it).
-const GaragePanel = dynamic(() => import("./GaragePanel"), {
-  ssr: false,
-  loading: () => <div className="h-24 animate-pulse rounded-card bg-basalt-50" role="status" aria-label="Loading your garage" />,
-});
+const GaragePanel = clientLazy(
+  () => import("./GaragePanel").then((m) => m.default),
+  () => <div className="h-24 animate-pulse rounded-card bg-basalt-50" role="status" aria-label="Loading your garage" />,
+);
 
 interface State {
   draft: Draft;
