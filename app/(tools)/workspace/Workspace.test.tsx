@@ -4,7 +4,7 @@ import userEvent from "@testing-library/user-event";
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
 import { DEFAULT_INPUT } from "@/lib/comparisons/schema";
 import { PREFS_STORAGE_KEY } from "@/lib/comparisons/format";
-import { decodeComparison } from "@/lib/comparisons/url";
+import { decodeComparison } from "@/lib/comparisons/urlRead";
 import { Workspace } from "./Workspace";
 
 // The charts load lazily through clientLazy; they are not what these tests are about.
