@@ -103,6 +103,19 @@ describe("workspace inputs", () => {
     expect(planned().getByText(/Reads as 37x12\.50R15LT/)).toBeTruthy();
   });
 
+  it("draws where a backspacing is measured once the wheel position is given as backspacing, for the reference chosen", async () => {
+    const user = renderDefault();
+    expect(screen.queryByRole("img", { name: /^Backspacing measured/ })).toBeNull();
+    await user.click(planned().getByRole("radio", { name: "Backspacing" }));
+    expect(
+      await planned().findByRole("img", {
+        name: "Backspacing measured from the mounting face to the flange edge, which includes the flange allowance",
+      }),
+    ).toBeTruthy();
+    await user.click(planned().getByRole("radio", { name: "Bead seat" }));
+    expect(planned().getByRole("img", { name: "Backspacing measured from the mounting face to the bead seat" })).toBeTruthy();
+  });
+
   it("names a wheel diameter that does not fit the tire", async () => {
     const user = renderDefault();
     const d = planned().getByLabelText("Wheel diameter (in)");
