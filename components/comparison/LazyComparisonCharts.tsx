@@ -1,10 +1,10 @@
 "use client";
-import dynamic from "next/dynamic";
 import { useRef } from "react";
 import type { ComparisonResult } from "@/lib/comparisons/compute";
 import type { DisplayPrefs } from "@/lib/comparisons/format";
 import { CHART_HEIGHT_RESERVED } from "./chartSize";
 import { useVisibleAndIdle } from "@/components/ui/useVisibleAndIdle";
+import { clientLazy } from "@/components/ui/clientLazy";
 
 function ChartsPlaceholder() {
   return (
@@ -16,7 +16,7 @@ function ChartsPlaceholder() {
   );
 }
 
-const Charts = dynamic(() => import("./ComparisonCharts"), { ssr: false, loading: ChartsPlaceholder });
+const Charts = clientLazy(() => import("./ComparisonCharts").then((m) => m.default), ChartsPlaceholder);
 
 /**
  * The charts, loaded only when they come near the viewport and the browser is idle: recharts is

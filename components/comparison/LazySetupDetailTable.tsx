@@ -1,11 +1,11 @@
 "use client";
-import dynamic from "next/dynamic";
 import type { ComparisonResult } from "@/lib/comparisons/compute";
 import type { DisplayPrefs } from "@/lib/comparisons/format";
 import { MountWhenNear } from "@/components/ui/MountWhenNear";
+import { clientLazy } from "@/components/ui/clientLazy";
 
 // Its code too waits for the approach: the rows' labels and formatting are not first-load JavaScript.
-const SetupDetailTable = dynamic(() => import("./SetupDetailTable").then((m) => m.SetupDetailTable));
+const SetupDetailTable = clientLazy(() => import("./SetupDetailTable").then((m) => m.SetupDetailTable));
 
 /**
  * The detail table where it is below the fold (the workspace, a share page): mounted when scrolled

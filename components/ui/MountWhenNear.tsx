@@ -10,7 +10,7 @@ import { useVisibleAndIdle } from "./useVisibleAndIdle";
  * `label` (a status, so a screen reader hears that something is coming) stands in.
  *
  * `reserve` is a min-height class per breakpoint, a lower bound of the panel's own height. The box
- * keeps it after mounting too, so a panel whose code is still arriving (next/dynamic) holds its
+ * keeps it after mounting too, so a panel whose code is still arriving (clientLazy) holds its
  * space and nothing below moves; being a lower bound it never adds a gap under the panel.
  * Once mounted the panel stays mounted: what the reader typed into it is kept.
  */

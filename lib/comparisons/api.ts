@@ -3,7 +3,8 @@
  * mappers; shared by server and client. The owner's id stays on the server.
  */
 import type { ComparisonRow } from "@/lib/platform/db/types";
-import { type ComparisonInput, checkComparison } from "./model";
+import { checkComparison } from "./checkInput";
+import type { ComparisonInput } from "./model";
 
 /** Key figures stored beside the input (computed on the server). */
 export interface ComparisonFigures {

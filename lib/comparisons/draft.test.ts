@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import type { DisplayPrefs } from "./format";
-import { type Draft, draftFromInput, followTire, readDraft } from "./draft";
+import { type Draft, draftFromInput, followTire } from "./draft";
+import { readDraft } from "./readDraft";
 import { DEFAULT_INPUT } from "./schema";
 
 const inch: DisplayPrefs = { units: "imperial", lengths: "decimal" };

@@ -61,8 +61,8 @@ describe("crawl-ratio inputs (first-gear and transfer-case low ratios)", () => {
 });
 
 describe("zod adapter over checkComparison", () => {
-  it("returns the clean copy (unknown fields dropped, tire trimmed) and the same issues as model.ts", async () => {
-    const { checkComparison } = await import("./model");
+  it("returns the clean copy (unknown fields dropped, tire trimmed) and the same issues as checkInput.ts", async () => {
+    const { checkComparison } = await import("./checkInput");
     const dirty = { ...DEFAULT_INPUT, extra: 1, planned: { ...DEFAULT_INPUT.planned, tire: "  37x12.50R17LT  ", note: "x" } };
     const parsed = comparisonInputSchema.parse(dirty);
     expect(parsed).toEqual({ ...DEFAULT_INPUT, planned: { ...DEFAULT_INPUT.planned, tire: "37x12.50R17LT" } });

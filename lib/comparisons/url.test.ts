@@ -2,7 +2,8 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { type ComparisonInput, DEFAULT_INPUT, comparisonInputSchema } from "./schema";
 import { problemText } from "@/lib/setup/url";
-import { decodeComparison, encodeComparison, hasComparisonParams } from "./url";
+import { encodeComparison } from "./url";
+import { decodeComparison, hasComparisonParams } from "./urlRead";
 
 describe("comparison query string", () => {
   it("is compact and readable", () => {

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import type { Setup } from "./model";
-import { decodeSetupParams, type LinkProblem, problemText, setupFromQuery, setupQuery } from "./url";
+import { type LinkProblem, problemText, setupQuery } from "./url";
+import { decodeSetupParams, setupFromQuery } from "./urlRead";
 
 const PLAN: Setup = {
   tire: "35x12.50R17LT",

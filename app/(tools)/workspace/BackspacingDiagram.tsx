@@ -1,4 +1,5 @@
 import type { BackspacingReference } from "@/lib/setup/model";
+import { BACKSPACING_DIAGRAM_BOX } from "./backspacingDiagramBox";
 
 /**
  * A small schematic of a wheel's inboard half: backspacing measured from the mounting face to the
@@ -10,8 +11,7 @@ export function BackspacingDiagram({ reference }: { reference: BackspacingRefere
   const off = "#a3acb8";
   return (
     <svg
-      viewBox="0 0 220 92"
-      className="h-auto w-full max-w-[15rem]"
+      {...BACKSPACING_DIAGRAM_BOX}
       role="img"
       aria-label={
         flange

@@ -1,5 +1,5 @@
 "use client";
-import dynamic from "next/dynamic";
+import { clientLazy } from "@/components/ui/clientLazy";
 import type { DisplayPrefs } from "@/lib/comparisons/format";
 import type { LoadPlan } from "@/lib/comparisons/loadPlan";
 import { LOAD_CHART_HEIGHT } from "./loadChartSize";
@@ -15,7 +15,7 @@ function ChartPlaceholder() {
   );
 }
 
-const Chart = dynamic(() => import("./LoadPressureChart"), { ssr: false, loading: ChartPlaceholder });
+const Chart = clientLazy(() => import("./LoadPressureChart").then((m) => m.default), ChartPlaceholder);
 
 /** The load–pressure chart, loaded after the page (recharts is not in the first-load JavaScript); space is reserved meanwhile. */
 export function LazyLoadPressureChart({ plan, prefs }: { plan: LoadPlan; prefs: DisplayPrefs }) {

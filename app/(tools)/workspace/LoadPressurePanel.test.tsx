@@ -6,7 +6,7 @@ import type { DisplayPrefs } from "@/lib/comparisons/format";
 import type { LoadPlan } from "@/lib/comparisons/loadPlan";
 import { LoadPressurePanel } from "./LoadPressurePanel";
 
-// The chart loads lazily through next/dynamic (recharts); the stub shows what it was given.
+// The chart loads lazily through clientLazy (recharts); the stub shows what it was given.
 vi.mock("./LazyLoadPressureChart", () => ({
   LazyLoadPressureChart: ({ plan }: { plan: LoadPlan }) => <div data-testid="load-chart-stub">{plan.curve.length} points</div>,
 }));

@@ -1,15 +1,15 @@
 "use client";
-import dynamic from "next/dynamic";
 import Link from "next/link";
 import { buttonClass } from "@/components/ui/Button";
+import { clientLazy } from "@/components/ui/clientLazy";
 import { workspaceUrl } from "@/lib/comparisons/url";
 import { type OpenedComparison, useCurrentInput } from "./currentInput";
 
 // The members' control carries react-hook-form, zod and TanStack Query; visitors never download them, and the
 // workspace's first-load scripts stay within budget. The placeholder keeps the row's height.
-const SaveComparison = dynamic(() => import("./SaveComparisonWithQuery").then((m) => m.SaveComparisonWithQuery), {
-  ssr: false,
-  loading: () => (
+const SaveComparison = clientLazy(
+  () => import("./SaveComparisonWithQuery").then((m) => m.SaveComparisonWithQuery),
+  () => (
     <div
       className="flex min-h-[3.75rem] items-center rounded-lg bg-white px-4 py-3 text-sm text-basalt-600 ring-1 ring-basalt-100"
       aria-busy="true"
@@ -17,7 +17,7 @@ const SaveComparison = dynamic(() => import("./SaveComparisonWithQuery").then((m
       Loading the save control…
     </div>
   ),
-});
+);
 
 /**
  * The workspace's save slot. Anonymous visitors get a sign-in link that brings them back to this

@@ -3,12 +3,20 @@ import type { ComponentProps } from "react";
 import { TextField } from "@/components/ui/TextField";
 import { cx } from "@/components/ui/cx";
 import { Segmented } from "@/components/comparison/Segmented";
+import { clientLazy } from "@/components/ui/clientLazy";
 import type { SetupFigures } from "@/lib/comparisons/compute";
 import type { DraftErrors, SetupDraft } from "@/lib/comparisons/draft";
 import { SETUP_FIELD_LABEL as L } from "@/lib/setup/fields";
 import { type DisplayPrefs, formatInches, formatLen, formatNumber } from "@/lib/comparisons/format";
 import { parseTireSize } from "@/lib/fitment/tireSize";
-import { BackspacingDiagram } from "./BackspacingDiagram";
+import { BACKSPACING_DIAGRAM_BOX } from "./backspacingDiagramBox";
+
+// Shown only with a backspacing entry (the demo comparison gives offsets), so its drawing is not
+// first-load JavaScript. The stand-in is the same empty box, so nothing moves when it arrives.
+const BackspacingDiagram = clientLazy(
+  () => import("./BackspacingDiagram").then((m) => m.BackspacingDiagram),
+  () => <svg {...BACKSPACING_DIAGRAM_BOX} aria-hidden="true" />,
+);
 
 type Side = "current" | "planned";
 type DraftText = "diameter" | "width" | "offset" | "backspacing" | "flange" | "spacer";

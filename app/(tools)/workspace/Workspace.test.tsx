@@ -4,10 +4,10 @@ import userEvent from "@testing-library/user-event";
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
 import { DEFAULT_INPUT } from "@/lib/comparisons/schema";
 import { PREFS_STORAGE_KEY } from "@/lib/comparisons/format";
-import { decodeComparison } from "@/lib/comparisons/url";
+import { decodeComparison } from "@/lib/comparisons/urlRead";
 import { Workspace } from "./Workspace";
 
-// The charts load lazily through next/dynamic; they are not what these tests are about.
+// The charts load lazily through clientLazy; they are not what these tests are about.
 // Typing through user-event in jsdom is slow on a shared machine; the default 5 s is too tight.
 vi.setConfig({ testTimeout: 20_000 });
 vi.mock("@/components/comparison/LazyComparisonCharts", () => ({ LazyComparisonCharts: () => <div data-testid="charts-stub" /> }));
@@ -101,6 +101,19 @@ describe("workspace inputs", () => {
     expect(planned().getByLabelText("Wheel diameter (in)")).toHaveProperty("value", "15");
     expect(tire.getAttribute("aria-invalid")).toBeNull();
     expect(planned().getByText(/Reads as 37x12\.50R15LT/)).toBeTruthy();
+  });
+
+  it("draws where a backspacing is measured once the wheel position is given as backspacing, for the reference chosen", async () => {
+    const user = renderDefault();
+    expect(screen.queryByRole("img", { name: /^Backspacing measured/ })).toBeNull();
+    await user.click(planned().getByRole("radio", { name: "Backspacing" }));
+    expect(
+      await planned().findByRole("img", {
+        name: "Backspacing measured from the mounting face to the flange edge, which includes the flange allowance",
+      }),
+    ).toBeTruthy();
+    await user.click(planned().getByRole("radio", { name: "Bead seat" }));
+    expect(planned().getByRole("img", { name: "Backspacing measured from the mounting face to the bead seat" })).toBeTruthy();
   });
 
   it("names a wheel diameter that does not fit the tire", async () => {

@@ -1,5 +1,4 @@
 "use client";
-import dynamic from "next/dynamic";
 import { type ReactNode, useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { ChartsSection } from "@/components/comparison/ChartsSection";
 import type { DrawnLimits } from "@/components/comparison/CrossSection";
@@ -10,36 +9,29 @@ import { LazySetupDetailTable } from "@/components/comparison/LazySetupDetailTab
 import { useDisplayPrefs } from "@/components/comparison/useDisplayPrefs";
 import { Button } from "@/components/ui/Button";
 import { MountWhenNear } from "@/components/ui/MountWhenNear";
+import { clientLazy } from "@/components/ui/clientLazy";
 import { computeComparison } from "@/lib/comparisons/compute";
-import {
-  type Draft,
-  type DraftErrors,
-  type SetupDraft,
-  convertDraft,
-  draftFromInput,
-  followTire,
-  inchText,
-  readDraft,
-} from "@/lib/comparisons/draft";
+import { type Draft, type DraftErrors, type SetupDraft, draftFromInput, followTire, inchText } from "@/lib/comparisons/draft";
 import { fenderUnit, speedUnit, vehicleFieldLabel } from "@/lib/comparisons/fields";
 import type { DisplayPrefs } from "@/lib/comparisons/format";
 import { type ComparisonInput, DEFAULT_INPUT } from "@/lib/comparisons/model";
-import { decodeComparison, workspaceParam, workspaceUrl } from "@/lib/comparisons/url";
+import { workspaceParam, workspaceUrl } from "@/lib/comparisons/url";
 import { type LinkProblem, problemText } from "@/lib/setup/url";
 import type { WorkspaceVehicle } from "@/lib/garage/types";
 import { CurrentInputContext } from "./currentInput";
 import { SetupDraftFields } from "./SetupDraftFields";
+import { type Reading, loadReading, readingNow, useReading } from "./useReading";
 import { VehicleFields } from "./VehicleFields";
 
 // Below the fold on every screen: their code loads when they are scrolled near (MountWhenNear below).
-const LoadPressurePanel = dynamic(() => import("./LoadPressurePanel").then((m) => m.LoadPressurePanel), { ssr: false });
-const TrailAnglesPanel = dynamic(() => import("./TrailAnglesPanel").then((m) => m.TrailAnglesPanel), { ssr: false });
+const LoadPressurePanel = clientLazy(() => import("./LoadPressurePanel").then((m) => m.LoadPressurePanel));
+const TrailAnglesPanel = clientLazy(() => import("./TrailAnglesPanel").then((m) => m.TrailAnglesPanel));
 
 // Only members with vehicles load the garage panel (and the prediction code with it).
-const GaragePanel = dynamic(() => import("./GaragePanel"), {
-  ssr: false,
-  loading: () => <div className="h-24 animate-pulse rounded-card bg-basalt-50" role="status" aria-label="Loading your garage" />,
-});
+const GaragePanel = clientLazy(
+  () => import("./GaragePanel").then((m) => m.default),
+  () => <div className="h-24 animate-pulse rounded-card bg-basalt-50" role="status" aria-label="Loading your garage" />,
+);
 
 interface State {
   draft: Draft;
@@ -63,7 +55,7 @@ const sameprefs = (a: DisplayPrefs, b: DisplayPrefs) => a.units === b.units && a
  * reads is converted whatever the other fields hold; one that does not keeps its text, and its
  * message says the unit changed under it (never a figure silently relabelled).
  */
-function reformat(s: State, prefs: DisplayPrefs): State {
+function reformat({ convertDraft, readDraft }: Reading, s: State, prefs: DisplayPrefs): State {
   const { draft, unconverted } = convertDraft(s.draft, s.good, s.prefs, prefs);
   const read = readDraft(draft, prefs);
   const errors = { ...read.errors };
@@ -101,8 +93,9 @@ export function Workspace({
   /** The caller's saved comparison this workspace was opened from (null: none). */
   savedId?: string | null;
 }) {
-  const [prefs, setPrefs] = useDisplayPrefs();
-  const [state, setState] = useState<State>(() => fromInput(initialInput, prefs));
+  const [storedPrefs, setPrefs] = useDisplayPrefs();
+  const reading = useReading();
+  const [state, setState] = useState<State>(() => fromInput(initialInput, storedPrefs));
   const [linkProblems, setLinkProblems] = useState(initialProblems);
   const [copied, setCopied] = useState<"idle" | "done" | "failed">("idle");
   const [vehicleId, setVehicleId] = useState<string | null>(garage?.initialVehicleId ?? null);
@@ -110,13 +103,17 @@ export function Workspace({
   const [limits, setLimits] = useState<DrawnLimits | null>(null);
   // An edit (typing in one field) is one history entry: the first change pushes, the rest replace.
   const editOpen = useRef(false);
+  // An entry made before the reading code arrived: its text is kept, and read when the code lands.
+  const pendingRead = useRef<{ discrete: boolean } | null>(null);
 
   // The stored unit choice arrives after hydration: rewrite the text for it (render-time update).
+  // Until the reading code is here everything shows in the units the text is written in.
   let s = state;
-  if (!sameprefs(state.prefs, prefs)) {
-    s = reformat(state, prefs);
+  if (reading && !sameprefs(state.prefs, storedPrefs)) {
+    s = reformat(reading, state, storedPrefs);
     setState(s);
   }
+  const prefs = s.prefs;
 
   const writeUrl = useCallback((url: string, mode: "push" | "replace") => {
     if (url === `${window.location.pathname}${window.location.search}`) return;
@@ -126,28 +123,53 @@ export function Workspace({
 
   const apply = useCallback(
     (draft: Draft, discrete = false) => {
-      const read = readDraft(draft, prefs);
+      if (!reading) {
+        setState((prev) => ({ ...prev, draft }));
+        pendingRead.current = { discrete };
+        return;
+      }
+      const read = reading.readDraft(draft, prefs);
       setState((prev) => ({ draft, errors: read.errors, good: read.input ?? prev.good, prefs }));
       if (read.input) {
         writeUrl(workspaceUrl({ input: read.input, savedId, vehicleId }), editOpen.current && !discrete ? "replace" : "push");
         editOpen.current = !discrete;
       }
     },
-    [prefs, writeUrl, savedId, vehicleId],
+    [reading, prefs, writeUrl, savedId, vehicleId],
   );
   const commit = useCallback(() => {
     editOpen.current = false;
   }, []);
 
+  const draftNow = s.draft;
   useEffect(() => {
-    const onPop = () => {
-      editOpen.current = false;
-      const { input } = decodeComparison(window.location.search);
+    const pending = pendingRead.current;
+    if (!reading || !pending) return;
+    pendingRead.current = null;
+    apply(draftNow, pending.discrete);
+  }, [reading, apply, draftNow]);
+
+  useEffect(() => {
+    const show = ({ decodeComparison }: Reading, search: string) => {
+      const { input } = decodeComparison(search);
+      pendingRead.current = null;
       setState(fromInput(input, prefs));
       // The saved comparison stays the one being worked on (the save control keeps it too).
-      const v = workspaceParam(window.location.search, "vehicle");
+      const v = workspaceParam(search, "vehicle");
       setVehicleId(garage?.vehicles.some((x) => x.id === v) ? v : null);
       setLinkProblems([]);
+    };
+    const onPop = () => {
+      editOpen.current = false;
+      const search = window.location.search;
+      const now = readingNow();
+      if (now) show(now, search);
+      // The same fetch as useReading's: if it fails, useReading shows the error.
+      else
+        loadReading().then(
+          (r) => show(r, search),
+          () => undefined,
+        );
     };
     window.addEventListener("popstate", onPop);
     return () => window.removeEventListener("popstate", onPop);

@@ -1,7 +1,8 @@
 import type { Metadata } from "next";
 import { z } from "zod";
 import { PageHeader } from "@/components/ui/PageHeader";
-import { decodeComparison, workspaceParam } from "@/lib/comparisons/url";
+import { workspaceParam } from "@/lib/comparisons/url";
+import { decodeComparison } from "@/lib/comparisons/urlRead";
 import { admits, currentCaller } from "@/lib/platform/auth/session";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
 import { comparisonQueries } from "@/lib/comparisons/queries";

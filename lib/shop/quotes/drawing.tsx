@@ -7,7 +7,8 @@ import { CrossSectionSvg } from "@/lib/comparisons/crossSection/CrossSectionSvg"
 import { buildDrawing } from "@/lib/comparisons/crossSection/drawing";
 import { type HostRewrite, svgMarkup } from "@/lib/comparisons/crossSection/markup";
 import { DEFAULT_PREFS } from "@/lib/comparisons/format";
-import { type ComparisonInput, DEFAULT_VEHICLE, checkComparison } from "@/lib/comparisons/model";
+import { checkComparison } from "@/lib/comparisons/checkInput";
+import { type ComparisonInput, DEFAULT_VEHICLE } from "@/lib/comparisons/model";
 import type { Setup } from "@/lib/setup/model";
 import type { FitmentSummary } from "./fitment";
 

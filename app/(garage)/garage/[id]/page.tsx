@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { pageGuard } from "@/lib/platform/http/pageGuard";
-import { setupFromQuery } from "@/lib/setup/url";
+import { setupFromQuery } from "@/lib/setup/urlRead";
 import { garageQueries } from "@/lib/garage/queries";
 import { VehicleView } from "./VehicleView";
 import { type VehiclePageProps, vehiclePageCaller } from "./vehiclePage";

@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { GARAGE_ACCESS } from "@/lib/garage/access";
-import { setupFromQuery } from "@/lib/setup/url";
+import { setupFromQuery } from "@/lib/setup/urlRead";
 import { InvalidError } from "@/lib/platform/errors";
 import { HttpError } from "@/lib/platform/http/errors";
 import { route } from "@/lib/platform/http/route";
