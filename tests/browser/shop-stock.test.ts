@@ -93,4 +93,49 @@ describe("stock", () => {
     await page.goto("/shop");
     expect(await page.getByTestId("low-stock-count").textContent()).toMatch(/^Low stock\d+ items? (is|are) at or under/);
   });
+  it("the owner archives an item, finds it among the archived items on a 390 px phone, and brings it back", async () => {
+    const run = Date.now().toString(36).toUpperCase();
+    const sku = `WH-ARC-${run}`;
+    const made = await call("shop_owner", "POST", "/api/shop/catalog", {
+      kind: "wheel",
+      sku,
+      description: `Invented steel wheel 17x8 ${run}`,
+      price: "149",
+      qtyOnHand: "4",
+      wheelDiameterIn: "17",
+      wheelWidthIn: "8",
+      wheelOffsetMm: "0",
+      boltPattern: "6x5.5",
+      centerBoreMm: "108",
+    });
+    expect(made.status, await made.clone().text()).toBe(201);
+    const { item } = (await made.json()) as { item: { id: string } };
+    const phone = await launch({ width: 390, height: 844 });
+    try {
+      const page = await phone.context.newPage();
+      await signInAs(page, DEMO.shop_owner, DEMO_PASSWORD);
+      await page.goto(`/shop/catalog/${item.id}`);
+      await page.getByRole("button", { name: "Archive item" }).click();
+      await page.getByRole("button", { name: "Bring back into the catalog" }).waitFor();
+
+      // Gone from the catalog's list; there under "Archived items only".
+      await page.goto("/shop/catalog");
+      await page.getByLabel("Search SKU, description, size or bolt pattern").fill(sku);
+      await expect.poll(() => page.getByText("0 items", { exact: true }).isVisible()).toBe(true);
+      await page.getByRole("checkbox", { name: "Archived items only" }).check();
+      const row = page.getByTestId("catalog-row").filter({ hasText: sku });
+      await expect.poll(() => row.count()).toBe(1);
+      expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+      await checkA11y(page, "archived catalog items at 390 px");
+      await shot(page, "catalog-archived-390");
+      await row.getByRole("link", { name: `Edit ${sku}` }).click();
+      await page.waitForURL(new RegExp(`/shop/catalog/${item.id}$`));
+      await page.getByRole("button", { name: "Bring back into the catalog" }).click();
+      await page.getByRole("button", { name: "Archive item" }).waitFor();
+      const listed = (await (await call("shop_owner", "GET", `/api/shop/catalog?q=${sku}`)).json()) as { total: number };
+      expect(listed.total).toBe(1);
+    } finally {
+      await phone.close();
+    }
+  });
 });

@@ -339,6 +339,17 @@ describe("the single-item editor", () => {
     const list = await (await catalog.GET(req("GET", "/api/shop/catalog?q=TR-NEW-37"), ctx())).json();
     expect(list.total).toBe(0);
     expect((await one.GET(req("GET", `/api/shop/catalog/${id}`), ctx({ id }))).status).toBe(200);
+    // The owner finds it among the archived items only, and brings it back into the lists.
+    const archivedOnly = await (await catalog.GET(req("GET", "/api/shop/catalog?q=TR-NEW-37&archived=1"), ctx())).json();
+    expect(archivedOnly.items.map((i: { id: string }) => i.id)).toEqual([id]);
+    const all = await (await catalog.GET(req("GET", "/api/shop/catalog?archived=1&pageSize=200"), ctx())).json();
+    expect(all.items.every((i: { archivedAt: string | null }) => i.archivedAt !== null)).toBe(true);
+    const badFlag = await catalog.GET(req("GET", "/api/shop/catalog?archived=yes"), ctx());
+    expect(badFlag.status).toBe(400);
+    expect((await badFlag.json()).error).toMatch(/^Archived items only: /);
+    expect((await archive(req("PUT", `/api/shop/catalog/${id}/archived`, { archived: false }), ctx({ id }))).status).toBe(200);
+    expect((await (await catalog.GET(req("GET", "/api/shop/catalog?q=TR-NEW-37"), ctx())).json()).total).toBe(1);
+    expect((await (await catalog.GET(req("GET", "/api/shop/catalog?q=TR-NEW-37&archived=1"), ctx())).json()).total).toBe(0);
   });
 
   it("an archived item stays on the quotes that have it but is not offered to new ones", async () => {

@@ -18,6 +18,8 @@ export interface CatalogQuery {
   q?: string;
   sort?: CatalogSort;
   dir?: "asc" | "desc";
+  /** The archived items only (the owner finds one to bring it back); otherwise only the live ones. */
+  archived?: boolean;
   page?: number;
   pageSize?: number;
 }
@@ -31,8 +33,10 @@ export interface CatalogQuery {
 export async function listCatalog(db: Knex, shopId: string, q: CatalogQuery = {}): Promise<CatalogPage> {
   const pageSize = Math.min(Math.max(q.pageSize ?? 25, 1), 200);
   const page = Math.max(q.page ?? 1, 1);
-  // Archived items leave the lists and pickers (quote lines keep their own copy).
-  const base = db<CatalogItemRow>("catalog_items").where({ shop_id: shopId }).whereNull("archived_at");
+  // Archived items leave the lists and pickers (quote lines keep their own copy); the owner lists them apart.
+  const base = db<CatalogItemRow>("catalog_items").where({ shop_id: shopId });
+  if (q.archived) base.whereNotNull("archived_at");
+  else base.whereNull("archived_at");
   if (q.kind) base.andWhere({ kind: q.kind });
   const text = q.q?.trim() ?? "";
   if (text) {

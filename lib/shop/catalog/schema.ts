@@ -10,6 +10,11 @@ export const catalogQuerySchema = z.object({
   q: z.string().trim().max(100, "Use at most 100 characters.").optional(),
   sort: z.enum(CATALOG_SORT_KEYS, "Sort by one of the table's columns.").optional(),
   dir: z.enum(["asc", "desc"], "Sort ascending or descending.").optional(),
+  /** `archived=1`: the archived items only, to find one and bring it back. */
+  archived: z
+    .literal("1", "Show archived items with 1, or leave it out.")
+    .transform(() => true)
+    .optional(),
   ...pagingFields(200),
 });
 
@@ -19,6 +24,7 @@ export const CATALOG_QUERY_LABELS = {
   kind: "Kind",
   sort: "Sort",
   dir: "Sort",
+  archived: "Archived items only",
   page: "Page",
   pageSize: "Rows per page",
 } as const;

@@ -73,6 +73,7 @@ export function CatalogTable({ canEdit = false }: { canEdit?: boolean }) {
   const [sort, setSort] = useState<NonNullable<TableSort>>({ id: "sku", desc: false });
   const [pagination, setPagination] = useState({ pageIndex: 0, pageSize: 25 });
   const [kind, setKind] = useState<"" | CatalogKind>("");
+  const [archived, setArchived] = useState(false);
   const [search, setSearch] = useState("");
   const [q, setQ] = useState("");
   useEffect(() => {
@@ -87,6 +88,7 @@ export function CatalogTable({ canEdit = false }: { canEdit?: boolean }) {
     dir: sort.desc ? "desc" : "asc",
     ...(kind ? { kind } : {}),
     ...(q ? { q } : {}),
+    ...(archived ? { archived: "1" } : {}),
   });
   const data = useQuery({
     queryKey: queryKeys.shop.catalog.page(params.toString()),
@@ -97,7 +99,9 @@ export function CatalogTable({ canEdit = false }: { canEdit?: boolean }) {
   const pageCount = Math.max(1, Math.ceil(total / pagination.pageSize));
 
   return (
-    <Card className="overflow-x-auto" tabIndex={0} role="region" aria-label="Catalog items">
+    // `relative`: the screen-reader-only header of the last column is positioned absolutely; without a
+    // positioned scroller it escaped the scroll and made the whole page 959 px wide on a phone.
+    <Card className="relative overflow-x-auto" tabIndex={0} role="region" aria-label="Catalog items">
       <div className="mb-4 flex flex-wrap items-end gap-3">
         <label className="flex flex-col gap-1 text-sm font-medium">
           {CATALOG_QUERY_LABELS.q}
@@ -120,8 +124,22 @@ export function CatalogTable({ canEdit = false }: { canEdit?: boolean }) {
             setPagination((p) => ({ ...p, pageIndex: 0 }));
           }}
         />
+        {canEdit && (
+          <label className="flex min-h-10 items-center gap-2 text-sm font-medium">
+            <input
+              type="checkbox"
+              className="size-4 accent-ember-600"
+              checked={archived}
+              onChange={(e) => {
+                setArchived(e.target.checked);
+                setPagination((p) => ({ ...p, pageIndex: 0 }));
+              }}
+            />
+            {CATALOG_QUERY_LABELS.archived}
+          </label>
+        )}
         <p className="ml-auto text-sm text-basalt-600" aria-live="polite">
-          {data.isFetching ? "Loading…" : `${total.toLocaleString("en-US")} items`}
+          {data.isFetching ? "Loading…" : `${total.toLocaleString("en-US")} ${archived ? "archived " : ""}item${total === 1 ? "" : "s"}`}
         </p>
       </div>
       {data.isError && <Alert tone="error">{(data.error as Error).message}</Alert>}
@@ -137,7 +155,7 @@ export function CatalogTable({ canEdit = false }: { canEdit?: boolean }) {
           setSort((cur) => nextSort(cur, id) ?? cur);
           setPagination((p) => ({ ...p, pageIndex: 0 }));
         }}
-        empty={!data.isLoading && total === 0 ? "Nothing matches." : undefined}
+        empty={!data.isLoading && total === 0 ? (archived ? "No archived item matches." : "Nothing matches.") : undefined}
       />
       <div className="mt-4 flex flex-wrap items-center gap-2 text-sm">
         <Pagination
