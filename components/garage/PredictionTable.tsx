@@ -29,7 +29,12 @@ export function PredictionTable({
 }) {
   return (
     <div>
-      <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Predicted clearances (scrolls sideways on narrow screens)">
+      <div
+        className="relative overflow-x-auto"
+        tabIndex={0}
+        role="region"
+        aria-label="Predicted clearances (scrolls sideways on narrow screens)"
+      >
         <table className="w-full min-w-[560px] text-left text-sm" data-testid={testId}>
           <caption className="sr-only">{caption}</caption>
           <thead className="text-xs uppercase tracking-wide text-basalt-500">

@@ -10,7 +10,12 @@ export function OverviewSection({ id, title, lead, children }: { id: string; tit
       </h2>
       <p className="text-sm text-basalt-600">{lead}</p>
       {/* Focusable, so a keyboard can scroll it too (axe: scrollable-region-focusable). */}
-      <div className="mt-3 overflow-x-auto" tabIndex={0} role="region" aria-label={`${title} (scrolls sideways on narrow screens)`}>
+      <div
+        className="relative mt-3 overflow-x-auto"
+        tabIndex={0}
+        role="region"
+        aria-label={`${title} (scrolls sideways on narrow screens)`}
+      >
         {children}
       </div>
     </Card>
