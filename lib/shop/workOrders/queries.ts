@@ -6,8 +6,8 @@ import { bindAppDb } from "@/lib/platform/db/bind";
 import { ConflictError, InvalidError, NotFoundError } from "@/lib/platform/errors";
 import { iso, isoOrNull } from "@/lib/platform/http/isoDates";
 import { canBook } from "@/lib/shop/bookings/bookable";
-import { readSchedule } from "@/lib/shop/bookings/queries";
-import { formatClock, formatDay, formatInstant, wallTime } from "@/lib/shop/bookings/zoned";
+import { shopTimeZone } from "@/lib/shop/bookings/timeZoneQueries";
+import { formatClock, formatDayOf, formatInstant } from "@/lib/shop/bookings/zoned";
 import { type Actor, readLines, transition } from "@/lib/shop/quotes/queries";
 import { appOrigin } from "@/lib/platform/mail";
 import { queueMailIn } from "@/lib/platform/mail/transactional";
@@ -109,7 +109,7 @@ export async function getWorkOrder(db: Db, shopId: string, id: string): Promise<
   };
   const steps = (await db<WorkOrderStepRow>("work_order_steps").where({ work_order_id: id }).orderBy("signed_at")) as WorkOrderStepRow[];
   const booking = await db("bookings").where({ quote_id: row.quote_id, kind: "install", status: "booked" }).first("starts_at", "ends_at");
-  const { timeZone } = await readSchedule(db, shopId);
+  const timeZone = await shopTimeZone(db, shopId);
   const bookedFor = booking ? `${formatInstant(booking.starts_at, timeZone)} – ${formatClock(booking.ends_at, timeZone)}` : null;
   return workOrderDto(
     row,
@@ -272,7 +272,7 @@ export async function dueForRecheck(db: Db, shopId: string, now = new Date()): P
     name: string;
     phone: string;
   }[];
-  const { timeZone } = await readSchedule(db, shopId);
+  const timeZone = await shopTimeZone(db, shopId);
   return rows.map((r) => ({
     workOrderId: r.id,
     quoteId: r.quote_id,
@@ -282,7 +282,7 @@ export async function dueForRecheck(db: Db, shopId: string, now = new Date()): P
     vehicleDescription: r.vehicle_description,
     doneAt: iso(r.done_at),
     recheckDueAt: iso(r.recheck_due_at),
-    dueOn: formatDay(wallTime(r.recheck_due_at, timeZone).date),
+    dueOn: formatDayOf(r.recheck_due_at, timeZone),
     remindedAt: isoOrNull(r.recheck_queued_at),
   }));
 }

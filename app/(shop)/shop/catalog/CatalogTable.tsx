@@ -74,6 +74,8 @@ export function CatalogTable({ canEdit = false }: { canEdit?: boolean }) {
   const [pagination, setPagination] = useState({ pageIndex: 0, pageSize: 25 });
   const [kind, setKind] = useState<"" | CatalogKind>("");
   const [archived, setArchived] = useState(false);
+  // A new filter, search or order starts again at its first page.
+  const firstPage = () => setPagination((p) => ({ ...p, pageIndex: 0 }));
   const [search, setSearch] = useState("");
   const [q, setQ] = useState("");
   useEffect(() => {
@@ -113,7 +115,7 @@ export function CatalogTable({ canEdit = false }: { canEdit?: boolean }) {
             value={search}
             onChange={(e) => {
               setSearch(e.target.value);
-              setPagination((p) => ({ ...p, pageIndex: 0 }));
+              firstPage();
             }}
           />
         </label>
@@ -121,7 +123,7 @@ export function CatalogTable({ canEdit = false }: { canEdit?: boolean }) {
           value={kind}
           onChange={(k) => {
             setKind(k);
-            setPagination((p) => ({ ...p, pageIndex: 0 }));
+            firstPage();
           }}
         />
         {canEdit && (
@@ -132,7 +134,7 @@ export function CatalogTable({ canEdit = false }: { canEdit?: boolean }) {
               checked={archived}
               onChange={(e) => {
                 setArchived(e.target.checked);
-                setPagination((p) => ({ ...p, pageIndex: 0 }));
+                firstPage();
               }}
             />
             {CATALOG_QUERY_LABELS.archived}
@@ -153,7 +155,7 @@ export function CatalogTable({ canEdit = false }: { canEdit?: boolean }) {
         sort={sort}
         onSort={(id) => {
           setSort((cur) => nextSort(cur, id) ?? cur);
-          setPagination((p) => ({ ...p, pageIndex: 0 }));
+          firstPage();
         }}
         empty={!data.isLoading && total === 0 ? (archived ? "No archived item matches." : "Nothing matches.") : undefined}
       />
