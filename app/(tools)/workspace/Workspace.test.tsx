@@ -1,10 +1,11 @@
 // @vitest-environment jsdom
 import { cleanup, render, screen, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
-import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
+import { afterEach, beforeAll, beforeEach, describe, expect, it, vi } from "vitest";
 import { DEFAULT_INPUT } from "@/lib/comparisons/schema";
 import { PREFS_STORAGE_KEY } from "@/lib/comparisons/format";
 import { decodeComparison } from "@/lib/comparisons/urlRead";
+import { loadReading } from "./useReading";
 import { Workspace } from "./Workspace";
 
 // The charts load lazily through clientLazy; they are not what these tests are about.
@@ -21,6 +22,10 @@ const renderDefault = () => {
   render(<Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} />);
   return user;
 };
+
+// These tests are about reading entries, not about its code arriving (Workspace.reading.test.tsx is):
+// fetched once before them, as a page has it moments after load, the first test no longer races it.
+beforeAll(() => loadReading());
 
 beforeEach(() => {
   window.localStorage.clear();
