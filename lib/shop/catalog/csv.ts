@@ -67,6 +67,33 @@ export type CatalogInput = Omit<
   "id" | "shop_id" | "created_at" | "updated_at" | "qty_reserved" | "low_stock_at" | "archived_at"
 >;
 
+/** A row with no cell read yet; its keys are every stored field a file sets, listed only here. */
+function blankCatalogInput(): CatalogInput {
+  return {
+    kind: "service",
+    sku: "",
+    description: "",
+    price_cents: 0,
+    qty_on_hand: null,
+    tire_size: null,
+    tire_rim_in: null,
+    tire_diameter_mm: null,
+    wheel_diameter_in: null,
+    wheel_width_in: null,
+    wheel_offset_mm: null,
+    wheel_backspacing_in: null,
+    wheel_backspacing_reference: null,
+    bolt_pattern: null,
+    center_bore_mm: null,
+    beadlock: false,
+    service_type: null,
+    service_unit: null,
+  };
+}
+
+/** The stored fields an import replaces on an item the shop already has (the SKU is what matched it). */
+export const IMPORTED_FIELDS = (Object.keys(blankCatalogInput()) as (keyof CatalogInput)[]).filter((f) => f !== "sku");
+
 export interface RowError {
   /** The row a spreadsheet shows: the header is row 1, blank rows keep their numbers. */
   row: number;
@@ -267,24 +294,12 @@ function validateRow(
   } else if (kind === "tire" || kind === "wheel") qty = 0;
 
   const item: CatalogInput = {
+    ...blankCatalogInput(),
     kind: kind ?? "service",
     sku,
     description,
     price_cents: price ?? 0,
     qty_on_hand: qty,
-    tire_size: null,
-    tire_rim_in: null,
-    tire_diameter_mm: null,
-    wheel_diameter_in: null,
-    wheel_width_in: null,
-    wheel_offset_mm: null,
-    wheel_backspacing_in: null,
-    wheel_backspacing_reference: null,
-    bolt_pattern: null,
-    center_bore_mm: null,
-    beadlock: false,
-    service_type: null,
-    service_unit: null,
   };
 
   if (kind === "tire") {

@@ -3,7 +3,7 @@ import type { Knex } from "knex";
 import type { CatalogImportRow, CatalogItemRow, CatalogKind } from "@/lib/platform/db/types";
 import { type CatalogPage, catalogItemDto } from "@/lib/shop/catalog/api";
 import { boltPatternQuery, equivalentBoltPatterns } from "@/lib/shop/catalog/boltPatternSearch";
-import type { CatalogInput, CsvReport } from "@/lib/shop/catalog/csv";
+import { type CatalogInput, type CsvReport, IMPORTED_FIELDS } from "@/lib/shop/catalog/csv";
 import { containsPattern, searchKey } from "@/lib/platform/search/normalize";
 import { withoutSearchKey } from "../../platform/search/searchKeyColumn";
 import { bindAppDb } from "@/lib/platform/db/bind";
@@ -178,26 +178,7 @@ export async function commitImport(
       await trx("catalog_items")
         .insert(batch)
         .onConflict(["shop_id", "sku"])
-        .merge([
-          "kind",
-          "description",
-          "price_cents",
-          "qty_on_hand",
-          "tire_size",
-          "tire_rim_in",
-          "tire_diameter_mm",
-          "wheel_diameter_in",
-          "wheel_width_in",
-          "wheel_offset_mm",
-          "wheel_backspacing_in",
-          "wheel_backspacing_reference",
-          "bolt_pattern",
-          "center_bore_mm",
-          "beadlock",
-          "service_type",
-          "service_unit",
-          "updated_at",
-        ]);
+        .merge([...IMPORTED_FIELDS, "updated_at"]);
       onProgress(Math.min(i + IMPORT_BATCH, rows.length), rows.length);
     }
     // The staged copy has done its job; keep the record, drop the bulk.
