@@ -17,6 +17,23 @@ const ITEM = "That catalog item";
 const duplicateSku = (sku: string) => InvalidError.fields({ sku: [`SKU ${sku} is already in the catalog. Edit that item instead.`] });
 const isUniqueViolation = (e: unknown) => (e as { code?: string }).code === "23505";
 
+async function assertSkuFree(trx: Knex.Transaction, shopId: string, sku: string): Promise<void> {
+  if (await trx("catalog_items").where({ shop_id: shopId, sku }).first("id")) throw duplicateSku(sku);
+}
+
+/**
+ * Runs one item's write in a transaction and answers the row it returns. Two writes of one SKU at
+ * once both pass assertSkuFree: the unique index decides, and the loser hears it on the SKU field too.
+ */
+async function savingSku(db: Knex, sku: string, write: (trx: Knex.Transaction) => Promise<CatalogItemRow>): Promise<CatalogItemRow> {
+  try {
+    return withoutSearchKey(await db.transaction(write));
+  } catch (e) {
+    if (isUniqueViolation(e)) throw duplicateSku(sku);
+    throw e;
+  }
+}
+
 /** One item of the shop (archived or not). NotFoundError when missing or another shop's. */
 export async function getCatalogItem(db: Knex | Knex.Transaction, shopId: string, id: string, lock = false): Promise<CatalogItemRow> {
   const q = db<CatalogItemRow>("catalog_items").where({ shop_id: shopId, id }).first();
@@ -28,19 +45,13 @@ export async function getCatalogItem(db: Knex | Knex.Transaction, shopId: string
 
 /** Adds one item; a SKU the shop already has is refused on the SKU field. */
 export async function addCatalogItem(db: Knex, shopId: string, save: CatalogItemSave): Promise<CatalogItemRow> {
-  try {
-    return await db.transaction(async (trx) => {
-      if (await trx("catalog_items").where({ shop_id: shopId, sku: save.item.sku }).first("id")) throw duplicateSku(save.item.sku);
-      const [row] = await trx("catalog_items")
-        .insert({ ...save.item, low_stock_at: save.lowStockAt, shop_id: shopId })
-        .returning("*");
-      return withoutSearchKey(row as CatalogItemRow);
-    });
-  } catch (e) {
-    // Two adds of one SKU at once: the unique index decides, the loser hears it on the field.
-    if (isUniqueViolation(e)) throw duplicateSku(save.item.sku);
-    throw e;
-  }
+  return savingSku(db, save.item.sku, async (trx) => {
+    await assertSkuFree(trx, shopId, save.item.sku);
+    const [row] = await trx("catalog_items")
+      .insert({ ...save.item, low_stock_at: save.lowStockAt, shop_id: shopId })
+      .returning("*");
+    return row as CatalogItemRow;
+  });
 }
 
 /**
@@ -48,29 +59,23 @@ export async function addCatalogItem(db: Knex, shopId: string, save: CatalogItem
  * cannot go under it (nor the item stop being counted while units are held).
  */
 export async function updateCatalogItem(db: Knex, shopId: string, id: string, save: CatalogItemSave): Promise<CatalogItemRow> {
-  try {
-    return await db.transaction(async (trx) => {
-      const current = await getCatalogItem(trx, shopId, id, true);
-      const held = current.qty_reserved;
-      if (held > 0 && (save.item.qty_on_hand === null || save.item.qty_on_hand < held)) {
-        throw InvalidError.fields({
-          qtyOnHand: [
-            `Accepted quotes hold ${held} of this item: on hand cannot be less than ${held} until their work is done or they lapse.`,
-          ],
-        });
-      }
-      if (save.item.sku !== current.sku && (await trx("catalog_items").where({ shop_id: shopId, sku: save.item.sku }).first("id")))
-        throw duplicateSku(save.item.sku);
-      const [row] = await trx("catalog_items")
-        .where({ id, shop_id: shopId })
-        .update({ ...save.item, low_stock_at: save.lowStockAt, updated_at: trx.fn.now() })
-        .returning("*");
-      return withoutSearchKey(row as CatalogItemRow);
-    });
-  } catch (e) {
-    if (isUniqueViolation(e)) throw duplicateSku(save.item.sku);
-    throw e;
-  }
+  return savingSku(db, save.item.sku, async (trx) => {
+    const current = await getCatalogItem(trx, shopId, id, true);
+    const held = current.qty_reserved;
+    if (held > 0 && (save.item.qty_on_hand === null || save.item.qty_on_hand < held)) {
+      throw InvalidError.fields({
+        qtyOnHand: [
+          `Accepted quotes hold ${held} of this item: on hand cannot be less than ${held} until their work is done or they lapse.`,
+        ],
+      });
+    }
+    if (save.item.sku !== current.sku) await assertSkuFree(trx, shopId, save.item.sku);
+    const [row] = await trx("catalog_items")
+      .where({ id, shop_id: shopId })
+      .update({ ...save.item, low_stock_at: save.lowStockAt, updated_at: trx.fn.now() })
+      .returning("*");
+    return row as CatalogItemRow;
+  });
 }
 
 /**
