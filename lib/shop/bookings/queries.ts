@@ -351,16 +351,19 @@ export async function workFor(
   return job === "recheck" ? recheckWork(await recheckSlotMinutes(db, quote.shop_id)) : quoteWork(db, quote);
 }
 
+/** Which days a slot list covers: `days` days from `from` (the shop's dates), seen at `now`. */
+export interface SlotWindow {
+  from?: string;
+  days?: number;
+  now?: Date;
+}
+
 /**
  * The free starts for the quote's work over `days` days from `from` (the shop's dates; never
  * before today), with the job's length and the live booking (whose own bay time counts as free,
  * so the counter can move it to a neighbouring time).
  */
-export async function slotsForQuote(
-  db: Db,
-  quote: Pick<QuoteRow, "id" | "shop_id">,
-  opts: { from?: string; days?: number; now?: Date } = {},
-): Promise<SlotsAnswer> {
+export async function slotsForQuote(db: Db, quote: Pick<QuoteRow, "id" | "shop_id">, opts: SlotWindow = {}): Promise<SlotsAnswer> {
   return slotsForJob(db, quote, "install", await liveBookingRow(db, quote.id), opts);
 }
 
@@ -374,7 +377,7 @@ export async function slotsForJob(
   quote: Pick<QuoteRow, "id" | "shop_id">,
   job: BookingKind,
   live: BookingRow | undefined,
-  opts: { from?: string; days?: number; now?: Date },
+  opts: SlotWindow,
   horizonDays: number = BOOKING_HORIZON_DAYS,
 ): Promise<SlotsAnswer> {
   const shopId = quote.shop_id;
@@ -407,24 +410,17 @@ export async function slotsForJob(
 }
 
 /** The customer's free starts on their link: only once the deposit is paid (409 before, 404 for an unknown link). */
-export async function slotsByToken(db: Knex, token: string, opts: { from?: string; days?: number; now?: Date } = {}): Promise<SlotsAnswer> {
+export async function slotsByToken(db: Knex, token: string, opts: SlotWindow = {}): Promise<SlotsAnswer> {
   const quote = await findByToken(db, token);
   if (!quote) throw new NotFoundError("That quote");
-  assertBookable(quote, "customer");
-  await assertDepositHeld(db, quote);
+  await assertReadyToBook(db, quote, "customer");
   return slotsForQuote(db, quote, opts);
 }
 
 /** The counter's free starts for a quote in the caller's scope. */
-export async function slotsForStaff(
-  db: Knex,
-  scope: QuoteScope,
-  quoteId: string,
-  opts: { from?: string; days?: number; now?: Date } = {},
-): Promise<SlotsAnswer> {
+export async function slotsForStaff(db: Knex, scope: QuoteScope, quoteId: string, opts: SlotWindow = {}): Promise<SlotsAnswer> {
   const quote = await getQuote(db, scope, quoteId);
-  assertBookable(quote, "staff");
-  await assertDepositHeld(db, quote);
+  await assertReadyToBook(db, quote, "staff");
   return slotsForQuote(db, quote, opts);
 }
 
@@ -432,19 +428,11 @@ export async function slotsForStaff(
  * The counter's free starts for moving one booking of either kind (the calendar's Move…), its
  * own bay time counted as free; a booking of a quote outside the caller's scope is not found.
  */
-export async function slotsForBooking(
-  db: Knex,
-  scope: QuoteScope,
-  bookingId: string,
-  opts: { from?: string; days?: number; now?: Date } = {},
-): Promise<SlotsAnswer> {
+export async function slotsForBooking(db: Knex, scope: QuoteScope, bookingId: string, opts: SlotWindow = {}): Promise<SlotsAnswer> {
   const found = (await db<BookingRow>("bookings").where({ id: bookingId, shop_id: scope.shopId }).first()) as BookingRow | undefined;
   if (!found) throw new NotFoundError("That booking");
   const quote = await getQuote(db, scope, found.quote_id);
-  if (found.kind === "install") {
-    assertBookable(quote, "staff");
-    await assertDepositHeld(db, quote);
-  }
+  if (found.kind === "install") await assertReadyToBook(db, quote, "staff");
   return slotsForJob(db, quote, found.kind, found.status === "booked" ? found : undefined, opts);
 }
 
@@ -473,6 +461,12 @@ function assertBookable(quote: QuoteRow, by: BookingTarget["by"]): void {
   throw new ConflictError(
     `A quote that is ${STATUS_LABEL[quote.status].toLowerCase()} cannot be booked: only a quote with its deposit paid can.`,
   );
+}
+
+/** Bookable, and its deposit not refunded in full: what the install's slot lists and its booking check first. */
+async function assertReadyToBook(db: Db, quote: QuoteRow, by: BookingTarget["by"]): Promise<void> {
+  assertBookable(quote, by);
+  await assertDepositHeld(db, quote);
 }
 
 /** A start the slot check refused: taken is a conflict (409), every other reason an invalid time (422); both beside the time field. */
@@ -610,8 +604,7 @@ export async function bookInstall(
 ): Promise<Booking> {
   return db.transaction(async (trx) => {
     const quote = await lockQuote(trx, target);
-    assertBookable(quote, target.by);
-    await assertDepositHeld(trx, quote);
+    await assertReadyToBook(trx, quote, target.by);
     const live = await liveBookingRow(trx, quote.id);
     if (live) {
       const { timeZone } = await readSchedule(trx, quote.shop_id);

@@ -15,7 +15,7 @@ import { ConflictError, GoneError, NotFoundError } from "@/lib/platform/errors";
 import { isLinkToken } from "@/lib/platform/tokenFormat";
 import { hashToken } from "@/lib/platform/tokens";
 import type { Booking, SlotsAnswer } from "@/lib/shop/bookings/api";
-import { answer, mailCustomer, place, readSchedule, reserve, slotsForJob } from "@/lib/shop/bookings/queries";
+import { type SlotWindow, answer, mailCustomer, place, readSchedule, reserve, slotsForJob } from "@/lib/shop/bookings/queries";
 import type { BookingRequest } from "@/lib/shop/bookings/schema";
 import { formatInstant } from "@/lib/shop/bookings/zoned";
 import { queueShopNotice } from "@/lib/shop/notices/noticeQueries";
@@ -51,11 +51,7 @@ async function liveRecheck(db: Db, quoteId: string): Promise<BookingRow | undefi
 }
 
 /** The free re-check starts (the shop's re-check length) of the next RECHECK_BOOKING_DAYS days on the link, with the re-check already booked (if any). */
-export async function recheckSlotsByLink(
-  db: Knex,
-  token: string,
-  opts: { from?: string; days?: number; now?: Date } = {},
-): Promise<SlotsAnswer> {
+export async function recheckSlotsByLink(db: Knex, token: string, opts: SlotWindow = {}): Promise<SlotsAnswer> {
   const now = opts.now ?? new Date();
   const { quote } = await byLink(db, token, now);
   return slotsForJob(db, quote, "recheck", await liveRecheck(db, quote.id), { ...opts, now }, RECHECK_BOOKING_DAYS);
