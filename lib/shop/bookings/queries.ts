@@ -22,6 +22,7 @@ import {
   slotDayOption,
 } from "./api";
 import { queueShopNotice } from "@/lib/shop/notices/noticeQueries";
+import { quoteMailParties } from "@/lib/shop/quoteMailQueries";
 import { assertDepositHeld } from "@/lib/shop/payments/depositQueries";
 import { canBook } from "./bookable";
 import { type BookingMailKind, addressOf, bookingMail } from "./mail";
@@ -557,26 +558,20 @@ export async function mailCustomer(
   kind: BookingMailKind,
   previousStart?: Date,
 ): Promise<boolean> {
-  const customer = await trx("customers").where({ id: quote.customer_id, shop_id: quote.shop_id }).first("name", "email");
-  if (!customer?.email) return false;
-  const [shop, schedule] = await Promise.all([
-    trx("shops").where({ id: quote.shop_id }).first("name", "address", "phone"),
-    readSchedule(trx, quote.shop_id),
-  ]);
+  const parties = await quoteMailParties(trx, quote);
+  if (!parties) return false;
   await queueMailIn(
     trx,
     bookingMail({
+      ...parties,
       kind,
       job: booking.kind,
       bookingId: booking.id,
       sequence: booking.sequence,
       start: new Date(booking.starts_at),
       end: new Date(booking.ends_at),
-      timeZone: schedule.timeZone,
       quoteNumber: quote.number,
       vehicle: quote.vehicle_description,
-      customer: { name: customer.name, email: customer.email },
-      shop,
       origin: appOrigin(),
       organizerEmail: addressOf(mailFrom()),
       previousStart,

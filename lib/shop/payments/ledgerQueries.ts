@@ -6,9 +6,9 @@ import { ConflictError, InvalidError, NotFoundError, UnknownReferenceError } fro
 import { log } from "@/lib/platform/log";
 import { appOrigin } from "@/lib/platform/mail";
 import { queueMailIn } from "@/lib/platform/mail/transactional";
-import { readSchedule } from "@/lib/shop/bookings/queries";
 import { shopTimeZone } from "@/lib/shop/bookings/timeZoneQueries";
 import { queueShopNotice } from "@/lib/shop/notices/noticeQueries";
+import { quoteMailParties } from "@/lib/shop/quoteMailQueries";
 import { type Actor, type QuoteScope, findByToken, getQuote } from "@/lib/shop/quotes/queries";
 import { type QuotePayments, paymentEntryDto, refundEntryDto } from "./api";
 import type { CounterMethod } from "./labels";
@@ -81,23 +81,17 @@ async function queueReceipt(
   amountCents: number,
   outstandingCents: number | null,
 ): Promise<void> {
-  const customer = await trx("customers").where({ id: quote.customer_id, shop_id: quote.shop_id }).first("name", "email");
-  if (!customer?.email) return;
-  const [shop, schedule] = await Promise.all([
-    trx("shops").where({ id: quote.shop_id }).first("name", "address", "phone"),
-    readSchedule(trx, quote.shop_id),
-  ]);
+  const parties = await quoteMailParties(trx, quote);
+  if (!parties) return;
   await queueMailIn(
     trx,
     receiptMail({
-      customer: { name: customer.name, email: customer.email },
-      shop,
+      ...parties,
       quoteNumber: quote.number,
       vehicle: quote.vehicle_description,
       what,
       amountCents,
       at: new Date(),
-      timeZone: schedule.timeZone,
       outstandingCents,
     }),
   );

@@ -4,8 +4,8 @@ import type { QuoteRow, WorkOrderRow } from "@/lib/platform/db/types";
 import { appOrigin } from "@/lib/platform/mail";
 import { queueMailIn } from "@/lib/platform/mail/transactional";
 import { hashToken, randomToken } from "@/lib/platform/tokens";
-import { readSchedule } from "@/lib/shop/bookings/queries";
 import { paymentsOf } from "@/lib/shop/payments/ledgerQueries";
+import { quoteMailParties } from "@/lib/shop/quoteMailQueries";
 import { completionMail } from "./completionMail";
 import { getWorkOrder } from "./queries";
 
@@ -19,27 +19,20 @@ import { getWorkOrder } from "./queries";
 export async function queueCompletionMail(trx: Knex.Transaction, shopId: string, workOrderId: string): Promise<boolean> {
   const row = (await trx<WorkOrderRow>("work_orders").where({ id: workOrderId, shop_id: shopId }).first()) as WorkOrderRow;
   const quote = (await trx<QuoteRow>("quotes").where({ id: row.quote_id, shop_id: shopId }).first()) as QuoteRow;
-  const customer = await trx("customers").where({ id: quote.customer_id, shop_id: shopId }).first("name", "email");
-  if (!customer?.email) return false;
+  const parties = await quoteMailParties(trx, quote);
+  if (!parties) return false;
   const token = randomToken();
   await trx("quotes")
     .where({ id: quote.id })
     .update({ public_token_hash: hashToken(token) });
-  const [order, shop, schedule, money] = await Promise.all([
-    getWorkOrder(trx, shopId, workOrderId),
-    trx("shops").where({ id: shopId }).first("name", "address", "phone"),
-    readSchedule(trx, shopId),
-    paymentsOf(trx, quote),
-  ]);
+  const [order, money] = await Promise.all([getWorkOrder(trx, shopId, workOrderId), paymentsOf(trx, quote)]);
   await queueMailIn(
     trx,
     completionMail({
-      customer: { name: customer.name, email: customer.email },
-      shop,
+      ...parties,
       order,
       doneAt: new Date(row.done_at!),
       recheckDueAt: new Date(row.recheck_due_at!),
-      timeZone: schedule.timeZone,
       invoice: money.invoice,
       payUrl: `${appOrigin()}/q/${token}`,
     }),

@@ -1,0 +1,29 @@
+import "server-only";
+import type { Knex } from "knex";
+import type { QuoteRow } from "@/lib/platform/db/types";
+import { shopTimeZone } from "@/lib/shop/bookings/timeZoneQueries";
+
+/** Who a mail about a quote goes to, who it comes from, and the zone its times are said in. */
+export interface QuoteMailParties {
+  customer: { name: string; email: string };
+  shop: { name: string; address: string; phone: string };
+  timeZone: string;
+}
+
+/**
+ * The parties of a mail to the quote's customer (booking, receipt, completion), read in `trx`;
+ * null when the customer has no e-mail address on file: then no mail is queued, and the shop is
+ * not read.
+ */
+export async function quoteMailParties(
+  trx: Knex.Transaction,
+  quote: Pick<QuoteRow, "customer_id" | "shop_id">,
+): Promise<QuoteMailParties | null> {
+  const customer = await trx("customers").where({ id: quote.customer_id, shop_id: quote.shop_id }).first("name", "email");
+  if (!customer?.email) return null;
+  const [shop, timeZone] = await Promise.all([
+    trx("shops").where({ id: quote.shop_id }).first("name", "address", "phone"),
+    shopTimeZone(trx, quote.shop_id),
+  ]);
+  return { customer: { name: customer.name, email: customer.email }, shop, timeZone };
+}
