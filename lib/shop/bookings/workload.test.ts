@@ -1,5 +1,21 @@
 import { describe, expect, it } from "vitest";
-import { workloadOf } from "./workload";
+import type { BayKind, QuoteLineUnit } from "@/lib/platform/db/types";
+import { type WorkLine, workloadOf } from "./workload";
+
+/** A catalog service line: `quantity` units of `unit` at the shop's `minutesPerUnit` in a bay of `bayKind`. */
+const service = (
+  description: string,
+  quantity: number,
+  minutesPerUnit: number,
+  bayKind: BayKind,
+  unit: QuoteLineUnit = "each",
+): WorkLine => ({
+  kind: "service",
+  unit,
+  quantity,
+  description,
+  time: { minutesPerUnit, bayKind },
+});
 
 // Bay times are the shop's own settings; the figures here are invented (common practice, no source).
 describe("a quote's bay time", () => {
@@ -7,17 +23,11 @@ describe("a quote's bay time", () => {
     const w = workloadOf([
       { kind: "tire", unit: "each", quantity: 4, description: "Tire" },
       { kind: "wheel", unit: "each", quantity: 4, description: "Wheel" },
-      { kind: "service", unit: "each", quantity: 1, description: "Alignment", time: { minutesPerUnit: 60, bayKind: "alignment_rack" } },
-      { kind: "service", unit: "each", quantity: 4, description: "Mount and balance", time: { minutesPerUnit: 20, bayKind: "lift_bay" } },
-      { kind: "service", unit: "each", quantity: 4, description: "Beadlock assembly", time: { minutesPerUnit: 30, bayKind: "lift_bay" } },
-      {
-        kind: "service",
-        unit: "hour",
-        quantity: 1.5,
-        description: "Fender trimming",
-        time: { minutesPerUnit: 60, bayKind: "fabrication_bay" },
-      },
-      { kind: "service", unit: "each", quantity: 4, description: "Disposal", time: { minutesPerUnit: 0, bayKind: "lift_bay" } },
+      service("Alignment", 1, 60, "alignment_rack"),
+      service("Mount and balance", 4, 20, "lift_bay"),
+      service("Beadlock assembly", 4, 30, "lift_bay"),
+      service("Fender trimming", 1.5, 60, "fabrication_bay", "hour"),
+      service("Disposal", 4, 0, "lift_bay"),
     ]);
     expect(w.segments).toEqual([
       { bayKind: "fabrication_bay", minutes: 90 },
@@ -32,8 +42,8 @@ describe("a quote's bay time", () => {
     const w = workloadOf([
       { kind: "custom", unit: "hour", quantity: 0.25, description: "Extra labour" },
       { kind: "custom", unit: "each", quantity: 1, description: "Valve caps" },
-      { kind: "service", unit: "hour", quantity: 0.1, description: "Check", time: { minutesPerUnit: 60, bayKind: "lift_bay" } },
-      { kind: "service", unit: "each", quantity: 3, description: "Odd", time: { minutesPerUnit: 7.5, bayKind: "lift_bay" } },
+      service("Check", 0.1, 60, "lift_bay", "hour"),
+      service("Odd", 3, 7.5, "lift_bay"),
     ]);
     // 15 + 6 + 22.5 = 43.5 → 44 whole minutes.
     expect(w.segments).toEqual([{ bayKind: "lift_bay", minutes: 44 }]);
