@@ -1,19 +1,12 @@
 import Papa from "papaparse";
 import { describe, expect, it } from "vitest";
 import { CSV_COLUMNS, CSV_TEMPLATE, catalogToCsv, decodeCsvBytes, parseCatalogCsv } from "./csv";
+import { INVENTED_WHEEL } from "./wheelTestUtil";
 
 const HEAD = CSV_COLUMNS.join(",");
 const row = (cells: Partial<Record<(typeof CSV_COLUMNS)[number], string>>) => CSV_COLUMNS.map((c) => cells[c] ?? "").join(",");
 /** A wheel row with every cell the wheel checks below do not vary (width and position are the cases'). */
-const WHEEL = {
-  kind: "wheel",
-  sku: "W",
-  description: "d",
-  price: "1",
-  qty_on_hand: "1",
-  wheel_diameter_in: "17",
-  bolt_pattern: "6x5.5",
-};
+const WHEEL = { ...INVENTED_WHEEL, qty_on_hand: "1" };
 
 describe("catalog CSV", () => {
   it("reads the template: every kind, sizes through the engine", () => {

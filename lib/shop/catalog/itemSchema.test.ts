@@ -1,19 +1,9 @@
 import { describe, expect, it } from "vitest";
 import type { CatalogItem } from "./api";
 import { catalogItemFormValues, catalogItemSchema } from "./itemSchema";
+import { INVENTED_WHEEL, formFieldsOf } from "./wheelTestUtil";
 
-const wheel = {
-  kind: "wheel",
-  sku: "WH-T1",
-  description: "Invented 17x9 wheel",
-  price: "189",
-  qtyOnHand: "",
-  wheelDiameterIn: "17",
-  wheelWidthIn: "9",
-  wheelOffsetMm: "-12",
-  boltPattern: "6x5.5",
-  lowStockAt: "",
-};
+const wheel = { ...formFieldsOf({ ...INVENTED_WHEEL, wheel_width_in: "9", wheel_offset_mm: "-12" }), qtyOnHand: "", lowStockAt: "" };
 
 describe("catalogItemSchema", () => {
   it("reads the form's text through the CSV's rules: blank on hand counts 0 for a wheel, blank mark is never", () => {
