@@ -3,7 +3,8 @@ import type { Knex } from "knex";
 /**
  * Column helpers the migrations share. They live outside db/migrations because knex loads every
  * .ts file there as a migration. Each helper writes exactly the column the migrations wrote by
- * hand before, so a fresh database gets the same schema.
+ * hand before, so a fresh database gets the same schema. Past migrations call them: a helper
+ * never changes what it writes; a new shape is a new helper.
  */
 
 type OnDelete = "CASCADE" | "SET NULL" | "RESTRICT";
@@ -51,4 +52,31 @@ export function storedPhotoColumns(t: Knex.TableBuilder): void {
   t.integer("height").notNullable();
   t.integer("bytes").notNullable();
   t.text("original_name").notNullable();
+}
+
+/** The CHECK that `status` takes one of `values`, named `<table>_status_known` as every table names it. */
+export function statusCheck(t: Knex.TableBuilder, table: string, values: readonly string[]): void {
+  t.check(`status in (${values.map((v) => `'${v}'`).join(",")})`, [], `${table}_status_known`);
+}
+
+/** `status text not null default <initial>`, held to `values` by `statusCheck`. */
+export function statusColumn(t: Knex.TableBuilder, table: string, values: readonly string[], initial: string): void {
+  t.text("status").notNullable().defaultTo(initial);
+  statusCheck(t, table, values);
+}
+
+/** Adds an optional JSONB column that holds an object or null, checked by `<table>_<column>_object`. */
+export async function addJsonObjectColumn(knex: Knex, table: string, column: string): Promise<void> {
+  await knex.schema.alterTable(table, (t) => {
+    t.jsonb(column).nullable();
+    t.check(`${column} is null or jsonb_typeof(${column}) = 'object'`, [], `${table}_${column}_object`);
+  });
+}
+
+/** Takes back `addJsonObjectColumn`: its check, then the column. */
+export async function dropJsonObjectColumn(knex: Knex, table: string, column: string): Promise<void> {
+  await knex.schema.alterTable(table, (t) => {
+    t.dropChecks([`${table}_${column}_object`]);
+    t.dropColumn(column);
+  });
 }

@@ -1,5 +1,5 @@
 import type { Knex } from "knex";
-import { createdAt, instant, optionalRef, requiredRef, timestamps, uuidId } from "../lib/columns";
+import { createdAt, instant, optionalRef, requiredRef, statusColumn, timestamps, uuidId } from "../lib/columns";
 
 /** A shop's catalog (tires, wheels, services) and staged CSV imports awaiting confirmation. */
 export async function up(knex: Knex): Promise<void> {
@@ -58,10 +58,9 @@ export async function up(knex: Knex): Promise<void> {
     t.jsonb("rows").notNullable();
     t.integer("row_count").notNullable();
     t.integer("error_count").notNullable();
-    t.text("status").notNullable().defaultTo("staged");
+    statusColumn(t, "catalog_imports", ["staged", "committed"], "staged");
     createdAt(t, knex);
     instant(t, "committed_at").nullable();
-    t.check("status in ('staged','committed')", [], "catalog_imports_status_known");
     t.index(["shop_id"]);
   });
 }

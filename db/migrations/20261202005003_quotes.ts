@@ -1,5 +1,5 @@
 import type { Knex } from "knex";
-import { createdAt, instant, optionalRef, requiredRef, timestamps, uuidId } from "../lib/columns";
+import { createdAt, instant, optionalRef, requiredRef, statusColumn, timestamps, uuidId } from "../lib/columns";
 
 /** Customers and their vehicles, quotes with lines and a status history, deposits and webhook receipts. */
 export async function up(knex: Knex): Promise<void> {
@@ -38,7 +38,7 @@ export async function up(knex: Knex): Promise<void> {
     requiredRef(t, "customer_id", "customers", "RESTRICT");
     optionalRef(t, "vehicle_id", "customer_vehicles");
     optionalRef(t, "created_by", "users");
-    t.text("status").notNullable().defaultTo("draft");
+    statusColumn(t, "quotes", ["draft", "sent", "accepted", "deposit_paid", "installed", "declined", "expired"], "draft");
     // The vehicle as quoted (kept even if the saved vehicle changes later).
     t.text("vehicle_description").notNullable();
     t.text("bolt_pattern").notNullable();
@@ -65,7 +65,6 @@ export async function up(knex: Knex): Promise<void> {
     timestamps(t, knex);
     t.unique(["shop_id", "number"]);
     t.index(["shop_id", "status"]);
-    t.check("status in ('draft','sent','accepted','deposit_paid','installed','declined','expired')", [], "quotes_status_known");
     t.check("wheel_qty in (4, 5)", [], "quotes_wheel_qty");
     t.check(
       "discount_cents >= 0 and subtotal_cents >= 0 and tax_cents >= 0 and total_cents >= 0 and deposit_cents >= 0",
@@ -112,11 +111,10 @@ export async function up(knex: Knex): Promise<void> {
     t.text("provider_session_id").notNullable().unique();
     t.integer("amount_cents").notNullable();
     t.text("currency").notNullable().defaultTo("usd");
-    t.text("status").notNullable().defaultTo("open");
+    statusColumn(t, "payments", ["open", "paid"], "open");
     createdAt(t, knex);
     instant(t, "paid_at").nullable();
     t.index(["quote_id"]);
-    t.check("status in ('open','paid')", [], "payments_status_known");
   });
 
   // Every verified webhook event handled once: a replay finds its id here and changes nothing.

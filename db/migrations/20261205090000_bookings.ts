@@ -1,5 +1,5 @@
 import type { Knex } from "knex";
-import { createdAt, instant, optionalRef, requiredRef, timestamps, uuidId } from "../lib/columns";
+import { createdAt, instant, optionalRef, requiredRef, statusColumn, timestamps, uuidId } from "../lib/columns";
 
 /**
  * Install bookings: the shop's week (time zone, opening hours per weekday, closed dates), its
@@ -73,7 +73,7 @@ export async function up(knex: Knex): Promise<void> {
     uuidId(t, knex);
     requiredRef(t, "shop_id", "shops");
     requiredRef(t, "quote_id", "quotes");
-    t.text("status").notNullable().defaultTo("booked");
+    statusColumn(t, "bookings", ["booked", "cancelled"], "booked");
     instant(t, "starts_at").notNullable();
     instant(t, "ends_at").notNullable();
     // The calendar entry's SEQUENCE (RFC 5545 §3.8.7.4): raised on every move and on cancelling.
@@ -85,7 +85,6 @@ export async function up(knex: Knex): Promise<void> {
     instant(t, "cancelled_at").nullable();
     timestamps(t, knex);
     t.index(["shop_id", "starts_at"]);
-    t.check("status in ('booked','cancelled')", [], "bookings_status_known");
     t.check("starts_at < ends_at", [], "bookings_order");
   });
   // One live booking per quote; cancelled ones stay as history.

@@ -1,5 +1,6 @@
 import type { Knex } from "knex";
-import { instant, optionalRef, requiredRef, timestamps, uuidId } from "../lib/columns";
+import { instant, optionalRef, requiredRef, statusColumn, timestamps, uuidId } from "../lib/columns";
+import { workOrderStepColumns } from "../lib/workOrderSteps";
 
 /**
  * Work orders: one per booked quote, the sheet the technician works through in the bay. Each
@@ -21,7 +22,7 @@ export async function up(knex: Knex): Promise<void> {
     uuidId(t, knex);
     requiredRef(t, "shop_id", "shops");
     t.uuid("quote_id").notNullable().unique().references("id").inTable("quotes").onDelete("CASCADE");
-    t.text("status").notNullable().defaultTo("booked");
+    statusColumn(t, "work_orders", ["booked", "in_bay", "done"], "booked");
     // What the sheet covers, fixed from the quote when the work order is made.
     t.text("tire_description").notNullable().defaultTo("");
     t.text("wheel_description").notNullable().defaultTo("");
@@ -40,29 +41,20 @@ export async function up(knex: Knex): Promise<void> {
     timestamps(t, knex);
     t.unique(["id", "shop_id"]);
     t.index(["shop_id", "status"]);
-    t.check("status in ('booked','in_bay','done')", [], "work_orders_status_known");
     t.check("lug_count between 3 and 12", [], "work_orders_lug_count_range");
     t.check("(status = 'done') = (done_at is not null)", [], "work_orders_done_when_done");
   });
 
   await knex.schema.createTable("work_order_steps", (t) => {
     uuidId(t, knex);
-    t.uuid("work_order_id").notNullable();
-    t.uuid("shop_id").notNullable();
-    // A step of another shop's work order cannot be written even by a query that forgets the scope.
-    t.foreign(["work_order_id", "shop_id"], "work_order_steps_of_shop")
-      .references(["id", "shop_id"])
-      .inTable("work_orders")
-      .onDelete("CASCADE");
-    t.text("position").notNullable();
-    t.text("step").notNullable();
+    // Scoped to the work order's shop by a composite key (see workOrderStepColumns).
+    workOrderStepColumns(t, "work_order_steps");
     // What was recorded (validated by lib/shop/workOrders/schema.ts; torque in N·m, pressure in kPa).
     t.jsonb("data").notNullable().defaultTo("{}");
     optionalRef(t, "signed_by_user_id", "users");
     t.text("signed_by").notNullable();
     instant(t, "signed_at").notNullable().defaultTo(knex.fn.now());
     t.unique(["work_order_id", "position", "step"]);
-    t.check("position in ('LF','RF','LR','RR','spare','vehicle')", [], "work_order_steps_position_known");
   });
 }
 

@@ -1,4 +1,5 @@
 import type { Knex } from "knex";
+import { statusCheck, statusColumn } from "../lib/columns";
 
 /**
  * The balance after the work and refunds of deposits.
@@ -23,7 +24,7 @@ export async function up(knex: Knex): Promise<void> {
   });
   await knex.raw("alter table payments alter column provider_session_id drop not null");
   await knex.schema.alterTable("payments", (t) => {
-    t.check("status in ('open','paid','expired')", [], "payments_status_known");
+    statusCheck(t, "payments", ["open", "paid", "expired"]);
     t.check("kind in ('deposit','balance')", [], "payments_kind_known");
     t.check("method in ('provider','cash','card')", [], "payments_method_known");
     // A provider payment is matched to its webhook by the session; a counter payment has none.
@@ -38,7 +39,7 @@ export async function up(knex: Knex): Promise<void> {
     t.uuid("payment_id").notNullable().references("id").inTable("payments").onDelete("CASCADE");
     t.text("provider_refund_id").nullable().unique();
     t.integer("amount_cents").notNullable();
-    t.text("status").notNullable().defaultTo("pending");
+    statusColumn(t, "payment_refunds", ["pending", "succeeded"], "pending");
     t.uuid("requested_by_user_id").nullable().references("id").inTable("users").onDelete("SET NULL");
     t.text("requested_by").notNullable();
     t.timestamp("created_at", { useTz: true }).notNullable().defaultTo(knex.fn.now());
@@ -46,7 +47,6 @@ export async function up(knex: Knex): Promise<void> {
     t.index(["quote_id"]);
     t.index(["payment_id"]);
     t.check("amount_cents > 0", [], "payment_refunds_amount_positive");
-    t.check("status in ('pending','succeeded')", [], "payment_refunds_status_known");
   });
 }
 
@@ -70,6 +70,6 @@ export async function down(knex: Knex): Promise<void> {
     t.dropColumn("provider_payment_intent");
     t.dropColumn("method");
     t.dropColumn("kind");
-    t.check("status in ('open','paid')", [], "payments_status_known");
+    statusCheck(t, "payments", ["open", "paid"]);
   });
 }

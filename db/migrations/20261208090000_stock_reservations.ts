@@ -1,5 +1,5 @@
 import type { Knex } from "knex";
-import { createdAt, instant, requiredRef, uuidId } from "../lib/columns";
+import { createdAt, instant, requiredRef, statusColumn, uuidId } from "../lib/columns";
 
 /**
  * Stock: what accepted quotes hold of the shelf.
@@ -30,14 +30,13 @@ export async function up(knex: Knex): Promise<void> {
     requiredRef(t, "quote_line_id", "quote_lines");
     requiredRef(t, "catalog_item_id", "catalog_items");
     t.integer("quantity").notNullable();
-    t.text("status").notNullable().defaultTo("reserved");
+    statusColumn(t, "stock_reservations", ["reserved", "consumed", "released"], "reserved");
     createdAt(t, knex);
     instant(t, "closed_at").nullable();
     t.unique(["quote_line_id"]);
     t.index(["quote_id"]);
     t.index(["catalog_item_id"]);
     t.check("quantity > 0", [], "stock_reservations_quantity_positive");
-    t.check("status in ('reserved','consumed','released')", [], "stock_reservations_status_known");
     t.check("(status = 'reserved') = (closed_at is null)", [], "stock_reservations_closed_when_done");
   });
 }

@@ -1,4 +1,5 @@
 import type { Knex } from "knex";
+import { addJsonObjectColumn, dropJsonObjectColumn } from "../lib/columns";
 
 /**
  * A saved counter vehicle's door placard and axle loads (lib/shop/customers/counterPlacard.ts:
@@ -7,15 +8,9 @@ import type { Knex } from "knex";
  * it with its fitment summary, so a later change here never alters a quote.
  */
 export async function up(knex: Knex): Promise<void> {
-  await knex.schema.alterTable("customer_vehicles", (t) => {
-    t.jsonb("load_placard").nullable();
-    t.check("load_placard is null or jsonb_typeof(load_placard) = 'object'", [], "customer_vehicles_load_placard_object");
-  });
+  await addJsonObjectColumn(knex, "customer_vehicles", "load_placard");
 }
 
 export async function down(knex: Knex): Promise<void> {
-  await knex.schema.alterTable("customer_vehicles", (t) => {
-    t.dropChecks(["customer_vehicles_load_placard_object"]);
-    t.dropColumn("load_placard");
-  });
+  await dropJsonObjectColumn(knex, "customer_vehicles", "load_placard");
 }

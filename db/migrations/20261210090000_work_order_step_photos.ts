@@ -1,5 +1,6 @@
 import type { Knex } from "knex";
 import { createdAt, optionalRef, storedPhotoColumns, uuidId } from "../lib/columns";
+import { workOrderStepColumns } from "../lib/workOrderSteps";
 
 /**
  * Photos a technician takes of a work order's step (the DOT code, the beadlock ring's bolts in
@@ -11,20 +12,12 @@ import { createdAt, optionalRef, storedPhotoColumns, uuidId } from "../lib/colum
 export async function up(knex: Knex): Promise<void> {
   await knex.schema.createTable("work_order_step_photos", (t) => {
     uuidId(t, knex);
-    t.uuid("work_order_id").notNullable();
-    t.uuid("shop_id").notNullable();
-    // A photo of another shop's work order cannot be written even by a query that forgets the scope.
-    t.foreign(["work_order_id", "shop_id"], "work_order_step_photos_of_shop")
-      .references(["id", "shop_id"])
-      .inTable("work_orders")
-      .onDelete("CASCADE");
-    t.text("position").notNullable();
-    t.text("step").notNullable();
+    // Scoped to the work order's shop by a composite key (see workOrderStepColumns).
+    workOrderStepColumns(t, "work_order_step_photos");
     storedPhotoColumns(t);
     optionalRef(t, "taken_by_user_id", "users");
     t.text("taken_by").notNullable();
     createdAt(t, knex);
-    t.check("position in ('LF','RF','LR','RR','spare','vehicle')", [], "work_order_step_photos_position_known");
     t.check("content_type in ('image/jpeg','image/png','image/webp')", [], "work_order_step_photos_type_known");
     t.index(["work_order_id", "position", "step"], "work_order_step_photos_step");
   });

@@ -1,4 +1,5 @@
 import type { Knex } from "knex";
+import { addJsonObjectColumn, dropJsonObjectColumn } from "../lib/columns";
 
 /**
  * A saved counter vehicle's body points (lib/shop/customers/counterBodyPoints.ts: corner heights
@@ -7,15 +8,9 @@ import type { Knex } from "knex";
  * with its fitment summary, so a later change here never alters a quote.
  */
 export async function up(knex: Knex): Promise<void> {
-  await knex.schema.alterTable("customer_vehicles", (t) => {
-    t.jsonb("body_points").nullable();
-    t.check("body_points is null or jsonb_typeof(body_points) = 'object'", [], "customer_vehicles_body_points_object");
-  });
+  await addJsonObjectColumn(knex, "customer_vehicles", "body_points");
 }
 
 export async function down(knex: Knex): Promise<void> {
-  await knex.schema.alterTable("customer_vehicles", (t) => {
-    t.dropChecks(["customer_vehicles_body_points_object"]);
-    t.dropColumn("body_points");
-  });
+  await dropJsonObjectColumn(knex, "customer_vehicles", "body_points");
 }

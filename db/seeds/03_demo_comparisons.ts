@@ -1,5 +1,6 @@
 import type { Knex } from "knex";
 import { keyFigureColumns } from "../../lib/comparisons/keyFigures";
+import { DEFAULT_INPUT } from "../../lib/comparisons/model";
 import { type ComparisonInput, comparisonInputSchema } from "../../lib/comparisons/schema";
 import { randomToken } from "../../lib/platform/tokens";
 
@@ -69,14 +70,9 @@ export const DEMO_COMPARISONS: { id: string; name: string; input: ComparisonInpu
     name: "Rock crawler — 37s on beadlocks",
     shared: true,
     input: {
-      current: { tire: "265/70R17 113T", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 }, spacerMm: 0 },
-      planned: {
-        tire: "37x12.50R17LT 124Q LRD",
-        wheelDiameterIn: 17,
-        wheelWidthIn: 9,
-        position: { mode: "offset", offsetMm: -12 },
-        spacerMm: 0,
-      },
+      // The build the workspace opens with, on a rig with its own figures.
+      current: DEFAULT_INPUT.current,
+      planned: DEFAULT_INPUT.planned,
       vehicle: {
         kingpinInclinationDeg: 9,
         axleRatio: 4.1,

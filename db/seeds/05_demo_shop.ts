@@ -9,6 +9,7 @@ import { lbToKg, psiToKpa } from "../../lib/fitment";
 import type { Setup } from "../../lib/setup/model";
 import { computeTotals } from "../../lib/shop/quotes/totals";
 import { hashToken, randomToken } from "../../lib/platform/tokens";
+import type { CatalogItemRow } from "../../lib/platform/db/types";
 import { DEMO_SHOP, DEMO_USERS } from "./01_demo_accounts";
 
 /**
@@ -16,8 +17,38 @@ import { DEMO_SHOP, DEMO_USERS } from "./01_demo_accounts";
  * are made up), a few customers and quotes in different states. Idempotent: only adds what is
  * missing, and leaves an owner's later changes alone.
  */
-const TEO = DEMO_USERS[1].id;
-const MARA = DEMO_USERS[2].id;
+const TEO = DEMO_USERS[1];
+const MARA = DEMO_USERS[2];
+
+/** One change of a quote's status: the status, the staff user's id ("" for none) and the actor in words. */
+type Step = [status: string, userId: string, actor: string];
+/** The steps a staff member took on a quote, in order. */
+const by = (user: { id: string; name: string }, ...statuses: string[]): Step[] => statuses.map((s) => [s, user.id, user.name]);
+/** A step nobody on the staff took: the customer's, the payment provider's or the system's. */
+const outside = (status: string, actor: string): Step => [status, "", actor];
+
+/** A demo quote: catalog SKUs of its tire and wheel, its age and its history (the first step's author made it). */
+interface QuotePlan {
+  id: string;
+  number: number;
+  customer: number;
+  tire: string;
+  wheel: string;
+  daysAgo: number;
+  history: Step[];
+}
+
+/** A quote line sold from the catalog item, at its price with no discount. */
+const catalogLine = (item: CatalogItemRow, quantity: number, taxable: boolean) => ({
+  kind: item.kind,
+  catalog_item_id: item.id,
+  sku: item.sku,
+  description: item.description,
+  quantity,
+  unit_price_cents: item.price_cents,
+  discount_cents: 0,
+  taxable,
+});
 
 export const DEMO_CUSTOMERS = [
   { id: "c0000000-0000-4000-8000-000000000001", name: "Ilse Varga-Pond", phone: "555-0160", email: "ilse@example.test" },
@@ -148,25 +179,15 @@ export async function seed(knex: Knex): Promise<void> {
 
   const bySku = async (sku: string) => knex("catalog_items").where({ shop_id: DEMO_SHOP.id, sku }).first();
   const shop = await knex("shops").where({ id: DEMO_SHOP.id }).first();
-  const plans: {
-    id: string;
-    number: number;
-    customer: number;
-    tire: string;
-    wheel: string;
-    by: string;
-    history: [string, string, string][];
-    daysAgo: number;
-  }[] = [
+  const plans: QuotePlan[] = [
     {
       id: DEMO_QUOTES.draft,
       number: 1001,
       customer: 0,
       tire: "SC-MT-35125017",
       wheel: "BS-1790-6550",
-      by: TEO,
-      history: [["draft", TEO, "Teo Marrow"]],
       daysAgo: 0,
+      history: by(TEO, "draft"),
     },
     {
       id: DEMO_QUOTES.sent,
@@ -174,12 +195,8 @@ export async function seed(knex: Knex): Promise<void> {
       customer: 1,
       tire: "HB-AT-3157017",
       wheel: "CF-1790-6550",
-      by: TEO,
-      history: [
-        ["draft", TEO, "Teo Marrow"],
-        ["sent", TEO, "Teo Marrow"],
-      ],
       daysAgo: 2,
+      history: by(TEO, "draft", "sent"),
     },
     {
       id: DEMO_QUOTES.paid,
@@ -187,14 +204,8 @@ export async function seed(knex: Knex): Promise<void> {
       customer: 0,
       tire: "SC-MT-37125017",
       wheel: "TB-1790-6550",
-      by: MARA,
-      history: [
-        ["draft", MARA, "Mara Velkin"],
-        ["sent", MARA, "Mara Velkin"],
-        ["accepted", "", "customer"],
-        ["deposit_paid", "", "payment provider"],
-      ],
       daysAgo: 5,
+      history: [...by(MARA, "draft", "sent"), outside("accepted", "customer"), outside("deposit_paid", "payment provider")],
     },
     {
       id: DEMO_QUOTES.declined,
@@ -202,13 +213,8 @@ export async function seed(knex: Knex): Promise<void> {
       customer: 2,
       tire: "HB-AT-2857017",
       wheel: "BS-1780-6550",
-      by: TEO,
-      history: [
-        ["draft", TEO, "Teo Marrow"],
-        ["sent", TEO, "Teo Marrow"],
-        ["declined", TEO, "Teo Marrow"],
-      ],
       daysAgo: 9,
+      history: by(TEO, "draft", "sent", "declined"),
     },
     {
       id: DEMO_QUOTES.expired,
@@ -216,13 +222,8 @@ export async function seed(knex: Knex): Promise<void> {
       customer: 1,
       tire: "HB-AT-2857017",
       wheel: "BS-1790-6550",
-      by: MARA,
-      history: [
-        ["draft", MARA, "Mara Velkin"],
-        ["sent", MARA, "Mara Velkin"],
-        ["expired", "", "system"],
-      ],
       daysAgo: 30,
+      history: [...by(MARA, "draft", "sent"), outside("expired", "system")],
     },
   ];
   for (const p of plans) {
@@ -242,41 +243,11 @@ export async function seed(knex: Knex): Promise<void> {
     }
     const svc = async (sku: string, qty: number) => {
       const s = await bySku(sku);
-      return {
-        kind: "service",
-        unit: s.service_unit === "per_hour" ? "hour" : "each",
-        catalog_item_id: s.id,
-        sku,
-        description: s.description,
-        quantity: qty,
-        unit_price_cents: s.price_cents,
-        discount_cents: 0,
-        taxable: false,
-      };
+      return { ...catalogLine(s, qty, false), unit: s.service_unit === "per_hour" ? "hour" : "each" };
     };
     const lines = [
-      {
-        kind: "tire",
-        catalog_item_id: tire.id,
-        sku: tire.sku,
-        description: tire.description,
-        quantity: 4,
-        unit_price_cents: tire.price_cents,
-        discount_cents: 0,
-        taxable: true,
-      },
-      {
-        kind: "wheel",
-        catalog_item_id: wheel.id,
-        sku: wheel.sku,
-        description: wheel.description,
-        quantity: 4,
-        unit_price_cents: wheel.price_cents,
-        discount_cents: 0,
-        taxable: true,
-        wheel_bolt_pattern: wheel.bolt_pattern,
-        wheel_center_bore_mm: wheel.center_bore_mm,
-      },
+      catalogLine(tire, 4, true),
+      { ...catalogLine(wheel, 4, true), wheel_bolt_pattern: wheel.bolt_pattern, wheel_center_bore_mm: wheel.center_bore_mm },
       await svc("SV-MB", 4),
       ...(wheel.beadlock ? [await svc("SV-BLA", 4)] : []),
       await svc("SV-VS", 4),
@@ -296,6 +267,7 @@ export async function seed(knex: Knex): Promise<void> {
       depositPct: shop.deposit_pct,
     });
     const status = p.history[p.history.length - 1]![0];
+    const authorId = p.history[0]![1];
     const created = knex.raw("now() - make_interval(days => ?)", [p.daysAgo]);
     const sent = p.history.some((h) => h[0] === "sent");
     await knex.transaction(async (trx) => {
@@ -305,7 +277,7 @@ export async function seed(knex: Knex): Promise<void> {
         number: p.number,
         customer_id: DEMO_CUSTOMERS[p.customer]!.id,
         vehicle_id: p.customer === 0 ? vehicleId : null,
-        created_by: p.by,
+        created_by: authorId,
         status,
         vehicle_description: VEHICLE.description,
         bolt_pattern: VEHICLE.boltPattern,
@@ -350,7 +322,7 @@ export async function seed(knex: Knex): Promise<void> {
         // What the customer received, as the app stores it when a quote is sent.
         const row = await trx("quotes").where({ id: p.id }).first();
         const stored = await trx("quote_lines").where({ quote_id: p.id }).orderBy("position");
-        const author = DEMO_USERS.find((u) => u.id === p.by);
+        const author = DEMO_USERS.find((u) => u.id === authorId);
         const document = buildQuoteDocument({
           shop,
           quote: row,
@@ -359,7 +331,7 @@ export async function seed(knex: Knex): Promise<void> {
           preparedBy: author?.name ?? null,
           sentAt: row.created_at,
         });
-        await trx("quote_documents").insert({ quote_id: p.id, sent_by: p.by, sent_at: created, document: JSON.stringify(document) });
+        await trx("quote_documents").insert({ quote_id: p.id, sent_by: authorId, sent_at: created, document: JSON.stringify(document) });
       }
       if (status === "deposit_paid") {
         await trx("payments").insert({

@@ -47,6 +47,12 @@ export interface PendingSignUpRow {
 
 /* ---- shop counter (shops settings, staff invitations, catalog, customers, quotes, payments) ---- */
 
+/** The key of every table a shop owns: the row's id and its shop, which each query scopes by. */
+interface ShopOwnedRow {
+  id: string;
+  shop_id: string;
+}
+
 export interface ShopSettingsRow extends ShopRow {
   address: string;
   phone: string;
@@ -65,9 +71,7 @@ export interface ShopSettingsRow extends ShopRow {
   updated_at: Date;
 }
 
-export interface StaffInviteRow {
-  id: string;
-  shop_id: string;
+export interface StaffInviteRow extends ShopOwnedRow {
   email: string;
   token_hash: string;
   invited_by: string | null;
@@ -93,9 +97,7 @@ export type ServiceType = (typeof SERVICE_TYPES)[number];
 export const SERVICE_UNITS = ["per_wheel", "per_vehicle", "per_hour"] as const;
 export type ServiceUnit = (typeof SERVICE_UNITS)[number];
 
-export interface CatalogItemRow {
-  id: string;
-  shop_id: string;
+export interface CatalogItemRow extends ShopOwnedRow {
   kind: CatalogKind;
   sku: string;
   description: string;
@@ -126,9 +128,7 @@ export interface CatalogItemRow {
 export type StockReservationStatus = "reserved" | "consumed" | "released";
 
 /** Units of one quote line held for the quote from its acceptance until the work is done or the quote lapses. */
-export interface StockReservationRow {
-  id: string;
-  shop_id: string;
+export interface StockReservationRow extends ShopOwnedRow {
   quote_id: string;
   quote_line_id: string;
   catalog_item_id: string;
@@ -138,9 +138,7 @@ export interface StockReservationRow {
   closed_at: Date | null;
 }
 
-export interface CatalogImportRow {
-  id: string;
-  shop_id: string;
+export interface CatalogImportRow extends ShopOwnedRow {
   created_by: string | null;
   filename: string;
   rows: unknown;
@@ -154,9 +152,7 @@ export interface CatalogImportRow {
 export const QUOTE_STATUSES = ["draft", "sent", "accepted", "deposit_paid", "installed", "declined", "expired"] as const;
 export type QuoteStatus = (typeof QUOTE_STATUSES)[number];
 
-export interface CustomerRow {
-  id: string;
-  shop_id: string;
+export interface CustomerRow extends ShopOwnedRow {
   name: string;
   phone: string;
   phone_digits: string;
@@ -166,9 +162,7 @@ export interface CustomerRow {
 }
 
 /** A customer's vehicle as the shop counter keeps it (table customer_vehicles). */
-export interface CustomerVehicleRow {
-  id: string;
-  shop_id: string;
+export interface CustomerVehicleRow extends ShopOwnedRow {
   customer_id: string;
   description: string;
   bolt_pattern: string;
@@ -184,9 +178,7 @@ export interface CustomerVehicleRow {
   created_at: Date;
 }
 
-export interface QuoteRow {
-  id: string;
-  shop_id: string;
+export interface QuoteRow extends ShopOwnedRow {
   number: number;
   customer_id: string;
   vehicle_id: string | null;
@@ -268,9 +260,7 @@ export type PaymentKind = (typeof PAYMENT_KINDS)[number];
 export const PAYMENT_METHODS = ["provider", "cash", "card"] as const;
 export type PaymentMethod = (typeof PAYMENT_METHODS)[number];
 
-export interface PaymentRow {
-  id: string;
-  shop_id: string;
+export interface PaymentRow extends ShopOwnedRow {
   quote_id: string;
   /** The provider's checkout session; null for a payment taken at the counter. */
   provider_session_id: string | null;
@@ -288,9 +278,7 @@ export interface PaymentRow {
   paid_at: Date | null;
 }
 
-export interface PaymentRefundRow {
-  id: string;
-  shop_id: string;
+export interface PaymentRefundRow extends ShopOwnedRow {
   quote_id: string;
   payment_id: string;
   provider_refund_id: string | null;
@@ -333,9 +321,7 @@ export interface ClosedDayRow {
   note: string;
 }
 
-export interface BayRow {
-  id: string;
-  shop_id: string;
+export interface BayRow extends ShopOwnedRow {
   name: string;
   kind: BayKind;
   position: number;
@@ -356,9 +342,7 @@ export type BookingStatus = (typeof BOOKING_STATUSES)[number];
 export const BOOKING_KINDS = ["install", "recheck"] as const;
 export type BookingKind = (typeof BOOKING_KINDS)[number];
 
-export interface BookingRow {
-  id: string;
-  shop_id: string;
+export interface BookingRow extends ShopOwnedRow {
   quote_id: string;
   kind: BookingKind;
   status: BookingStatus;
@@ -380,9 +364,7 @@ export type WheelPosition = (typeof WHEEL_POSITIONS)[number];
 /** A step's place on the sheet: a wheel, or the vehicle as a whole (alignment, trimming). */
 export type StepPosition = WheelPosition | "vehicle";
 
-export interface WorkOrderRow {
-  id: string;
-  shop_id: string;
+export interface WorkOrderRow extends ShopOwnedRow {
   quote_id: string;
   status: WorkOrderStatus;
   tire_description: string;
@@ -404,12 +386,19 @@ export interface WorkOrderRow {
   updated_at: Date;
 }
 
-export interface WorkOrderStepRow {
-  id: string;
+/**
+ * The columns that tie a row to one step of a work order's sheet (db/lib/workOrderSteps.ts
+ * `workOrderStepColumns`).
+ */
+interface WorkOrderStepColumns {
   work_order_id: string;
   shop_id: string;
   position: StepPosition;
   step: string;
+}
+
+export interface WorkOrderStepRow extends WorkOrderStepColumns {
+  id: string;
   /** What was recorded, as lib/shop/workOrders/schema.ts stores it (JSONB). */
   data: unknown;
   signed_by_user_id: string | null;
@@ -418,12 +407,8 @@ export interface WorkOrderStepRow {
 }
 
 /** A photo of one step of a work order; its image and thumbnail are objects in the photo store. */
-export interface WorkOrderStepPhotoRow extends StoredPhotoColumns {
+export interface WorkOrderStepPhotoRow extends WorkOrderStepColumns, StoredPhotoColumns {
   id: string;
-  work_order_id: string;
-  shop_id: string;
-  position: StepPosition;
-  step: string;
   taken_by_user_id: string | null;
   taken_by: string;
   created_at: Date;
@@ -431,10 +416,8 @@ export interface WorkOrderStepPhotoRow extends StoredPhotoColumns {
 
 /** A bay held by a booking; `during` is a tstzrange, read through lower()/upper() as starts_at/ends_at. */
 /** The table's row as stored; the booking queries read it through joins. @public */
-export interface BayReservationRow {
-  id: string;
+export interface BayReservationRow extends ShopOwnedRow {
   booking_id: string;
-  shop_id: string;
   bay_id: string;
   starts_at: Date;
   ends_at: Date;
