@@ -7,9 +7,9 @@ import { type CounterBodyPoints, quoteAngles } from "../../lib/shop/customers/co
 import { type CounterPlacard, quotePressure } from "../../lib/shop/customers/counterPlacard";
 import { lbToKg, psiToKpa } from "../../lib/fitment";
 import type { Setup } from "../../lib/setup/model";
+import { catalogLine } from "../../lib/shop/quotes/catalogLine";
 import { computeTotals } from "../../lib/shop/quotes/totals";
 import { hashToken, randomToken } from "../../lib/platform/tokens";
-import type { CatalogItemRow } from "../../lib/platform/db/types";
 import { DEMO_SHOP, DEMO_USERS } from "./01_demo_accounts";
 
 /**
@@ -37,18 +37,6 @@ interface QuotePlan {
   daysAgo: number;
   history: Step[];
 }
-
-/** A quote line sold from the catalog item, at its price with no discount. */
-const catalogLine = (item: CatalogItemRow, quantity: number, taxable: boolean) => ({
-  kind: item.kind,
-  catalog_item_id: item.id,
-  sku: item.sku,
-  description: item.description,
-  quantity,
-  unit_price_cents: item.price_cents,
-  discount_cents: 0,
-  taxable,
-});
 
 export const DEMO_CUSTOMERS = [
   { id: "c0000000-0000-4000-8000-000000000001", name: "Ilse Varga-Pond", phone: "555-0160", email: "ilse@example.test" },
@@ -243,11 +231,11 @@ export async function seed(knex: Knex): Promise<void> {
     }
     const svc = async (sku: string, qty: number) => {
       const s = await bySku(sku);
-      return { ...catalogLine(s, qty, false), unit: s.service_unit === "per_hour" ? "hour" : "each" };
+      return catalogLine(s, qty, false);
     };
     const lines = [
       catalogLine(tire, 4, true),
-      { ...catalogLine(wheel, 4, true), wheel_bolt_pattern: wheel.bolt_pattern, wheel_center_bore_mm: wheel.center_bore_mm },
+      catalogLine(wheel, 4, true),
       await svc("SV-MB", 4),
       ...(wheel.beadlock ? [await svc("SV-BLA", 4)] : []),
       await svc("SV-VS", 4),

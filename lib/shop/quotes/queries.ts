@@ -2,15 +2,7 @@ import "server-only";
 import { STATUS_LABEL } from "@/lib/shop/quotes/status";
 import type { Knex } from "knex";
 import type { z } from "zod";
-import type {
-  CatalogItemRow,
-  QuoteEventRow,
-  QuoteLineRow,
-  QuoteLineUnit,
-  QuoteRow,
-  QuoteStatus,
-  ServiceType,
-} from "@/lib/platform/db/types";
+import type { CatalogItemRow, QuoteEventRow, QuoteLineRow, QuoteRow, QuoteStatus, ServiceType } from "@/lib/platform/db/types";
 import { ConflictError, InvalidError, NotFoundError } from "@/lib/platform/errors";
 import { type QuoteListItem, type QuoteListRow, type QuotePage, quoteListItemDto } from "@/lib/shop/quotes/api";
 import { QUOTE_EXPORT_MAX, QUOTE_PAGE_SIZE, type QuoteListQuery, type QuoteSort } from "@/lib/shop/quotes/listQuery";
@@ -27,6 +19,7 @@ import { type CounterBodyPoints, quoteAngles } from "@/lib/shop/customers/counte
 import { type CounterVehicle, type CounterVehicleForEngine, counterVehicleForEngine } from "@/lib/shop/customers/schema";
 import type { Setup } from "@/lib/setup/model";
 import { bindAppDb } from "@/lib/platform/db/bind";
+import { type LineDraft, catalogLine, fromCatalog } from "@/lib/shop/quotes/catalogLine";
 import { queueShopNotice } from "@/lib/shop/notices/noticeQueries";
 import { shopTimeZone } from "@/lib/shop/bookings/timeZoneQueries";
 import { stockFollowsQuote } from "@/lib/shop/catalog/stockQueries";
@@ -268,22 +261,6 @@ export async function exportQuotes(db: Knex, scope: QuoteScope, query: QuoteList
   return rows.map(quoteListItemDto);
 }
 
-type LineDraft = Omit<QuoteLineRow, "id" | "quote_id" | "position" | "line_total_cents">;
-
-/** Hourly services may be quoted in part hours; everything else from the catalog is counted. */
-const unitOf = (item: Pick<CatalogItemRow, "kind" | "service_unit">): QuoteLineUnit =>
-  item.kind === "service" && item.service_unit === "per_hour" ? "hour" : "each";
-
-/** What a line copies from its catalog item: the item's own kind and unit, and a wheel's drilling and bore. */
-function fromCatalog(item: CatalogItemRow): Pick<LineDraft, "kind" | "unit" | "wheel_bolt_pattern" | "wheel_center_bore_mm"> {
-  return {
-    kind: item.kind,
-    unit: unitOf(item),
-    wheel_bolt_pattern: item.kind === "wheel" ? item.bolt_pattern : null,
-    wheel_center_bore_mm: item.kind === "wheel" ? item.center_bore_mm : null,
-  };
-}
-
 /** The services the pick calls for, from the shop's own service items (names and prices the shop set). */
 export function suggestedServiceLines(
   services: CatalogItemRow[],
@@ -295,17 +272,7 @@ export function suggestedServiceLines(
   const first = (t: ServiceType) => services.find((s) => s.service_type === t);
   const out: LineDraft[] = [];
   const add = (item: CatalogItemRow | undefined, quantity: number) => {
-    if (item)
-      out.push({
-        ...fromCatalog(item),
-        catalog_item_id: item.id,
-        sku: item.sku,
-        description: item.description,
-        quantity,
-        unit_price_cents: item.price_cents,
-        discount_cents: 0,
-        taxable: false,
-      });
+    if (item) out.push(catalogLine(item, quantity, false));
   };
   add(first("mount_balance"), qty);
   if (wheel.beadlock) add(first("beadlock_assembly"), qty);
@@ -447,26 +414,8 @@ export async function createQuote(db: Knex, shopId: string, actor: Actor & { use
       .whereNull("archived_at")
       .orderBy("sku");
     const lines: LineDraft[] = [
-      {
-        ...fromCatalog(tire),
-        catalog_item_id: tire.id,
-        sku: tire.sku,
-        description: tire.description,
-        quantity: input.quantity,
-        unit_price_cents: tire.price_cents,
-        discount_cents: 0,
-        taxable: true,
-      },
-      {
-        ...fromCatalog(wheel),
-        catalog_item_id: wheel.id,
-        sku: wheel.sku,
-        description: wheel.description,
-        quantity: input.quantity,
-        unit_price_cents: wheel.price_cents,
-        discount_cents: 0,
-        taxable: true,
-      },
+      catalogLine(tire, input.quantity, true),
+      catalogLine(wheel, input.quantity, true),
       ...suggestedServiceLines(services, wheel, input.quantity, fit, shop.fabrication_rate_cents),
     ];
     const totals = totalsOf(lines, 0, shop.tax_rate_bp, shop.deposit_pct);
