@@ -171,74 +171,37 @@ describe("units: a field reads its stated unit, fractions only as inches", () =>
     expect(vehicle({ cruise: "55, 65" }).input?.vehicle.cruiseSpeedsMph).toEqual([55, 65]);
   });
 
-  it("every message names its field as labelled and gives an example the field accepts", () => {
-    const cases: { field: string; bad: () => ReturnType<typeof readDraft>; label: string; good: () => ReturnType<typeof readDraft> }[] = [
-      {
-        field: "planned.wheelDiameterIn",
-        label: "Wheel diameter (in)",
-        bad: () => setup({ diameter: "x" }),
-        good: () => setup({ diameter: "17" }),
-      },
-      {
-        field: "planned.wheelWidthIn",
-        label: "Wheel width (in)",
-        bad: () => setup({ width: "40" }),
-        good: () => setup({ width: "8-1/2" }),
-      },
-      {
-        field: "planned.position.offsetMm",
-        label: "Offset (mm)",
-        bad: () => setup({ offset: "300" }),
-        good: () => setup({ offset: "-12" }),
-      },
-      {
-        field: "planned.position.backspacingIn",
-        label: "Backspacing (in)",
-        bad: () => setup({ mode: "backspacing", backspacing: "x", flange: "1/2" }),
-        good: () => setup({ mode: "backspacing", backspacing: "4¾", flange: "1/2" }),
-      },
-      {
-        field: "planned.position.flangeIn",
-        label: "Flange allowance (in)",
-        bad: () => setup({ mode: "backspacing", backspacing: "4.75", flange: "3" }),
-        good: () => setup({ mode: "backspacing", backspacing: "4.75", flange: "1/2" }),
-      },
-      {
-        field: "planned.spacerMm",
-        label: "Spacer (mm, optional)",
-        bad: () => setup({ spacer: "200" }),
-        good: () => setup({ spacer: "25" }),
-      },
-      {
-        field: "vehicle.kingpinInclinationDeg",
-        label: "Kingpin inclination (°)",
-        bad: () => vehicle({ kpi: "45" }),
-        good: () => vehicle({ kpi: "8" }),
-      },
-      { field: "vehicle.axleRatio", label: "Axle ratio", bad: () => vehicle({ axle: "" }), good: () => vehicle({ axle: "3.73" }) },
-      {
-        field: "vehicle.transmissionRatio",
-        label: "Top-gear ratio",
-        bad: () => vehicle({ top: "20" }),
-        good: () => vehicle({ top: "1.00" }),
-      },
-      {
-        field: "vehicle.firstGearRatio",
-        label: "First-gear ratio (optional)",
-        bad: () => vehicle({ first: "first" }),
-        good: () => vehicle({ first: "4.03:1" }),
-      },
-      {
-        field: "vehicle.transferLowRatio",
-        label: "Transfer-case low ratio (optional)",
-        bad: () => vehicle({ low: "0.5" }),
-        good: () => vehicle({ low: "2.72" }),
-      },
-    ];
-    for (const c of cases) {
-      const message = c.bad().errors[c.field];
-      expect(message, c.field).toMatch(new RegExp(`^${c.label.replace(/[()]/g, "\\$&")}: .*e\\.g\\. `));
-      expect(c.good().errors, c.field).toEqual({});
-    }
+  describe("every message names its field as labelled and gives an example the field accepts", () => {
+    const namesItsField = (field: string, label: string, bad: ReturnType<typeof readDraft>, good: ReturnType<typeof readDraft>) => {
+      expect(bad.errors[field], field).toMatch(new RegExp(`^${label.replace(/[()]/g, "\\$&")}: .*e\\.g\\. `));
+      expect(good.errors, field).toEqual({});
+    };
+
+    it.each<[string, string, Partial<Draft["planned"]>, Partial<Draft["planned"]>]>([
+      ["planned.wheelDiameterIn", "Wheel diameter (in)", { diameter: "x" }, { diameter: "17" }],
+      ["planned.wheelWidthIn", "Wheel width (in)", { width: "40" }, { width: "8-1/2" }],
+      ["planned.position.offsetMm", "Offset (mm)", { offset: "300" }, { offset: "-12" }],
+      [
+        "planned.position.backspacingIn",
+        "Backspacing (in)",
+        { mode: "backspacing", backspacing: "x", flange: "1/2" },
+        { mode: "backspacing", backspacing: "4¾", flange: "1/2" },
+      ],
+      [
+        "planned.position.flangeIn",
+        "Flange allowance (in)",
+        { mode: "backspacing", backspacing: "4.75", flange: "3" },
+        { mode: "backspacing", backspacing: "4.75", flange: "1/2" },
+      ],
+      ["planned.spacerMm", "Spacer (mm, optional)", { spacer: "200" }, { spacer: "25" }],
+    ])("%s (%s)", (field, label, bad, good) => namesItsField(field, label, setup(bad), setup(good)));
+
+    it.each<[string, string, Partial<Draft["vehicle"]>, Partial<Draft["vehicle"]>]>([
+      ["vehicle.kingpinInclinationDeg", "Kingpin inclination (°)", { kpi: "45" }, { kpi: "8" }],
+      ["vehicle.axleRatio", "Axle ratio", { axle: "" }, { axle: "3.73" }],
+      ["vehicle.transmissionRatio", "Top-gear ratio", { top: "20" }, { top: "1.00" }],
+      ["vehicle.firstGearRatio", "First-gear ratio (optional)", { first: "first" }, { first: "4.03:1" }],
+      ["vehicle.transferLowRatio", "Transfer-case low ratio (optional)", { low: "0.5" }, { low: "2.72" }],
+    ])("%s (%s)", (field, label, bad, good) => namesItsField(field, label, vehicle(bad), vehicle(good)));
   });
 });

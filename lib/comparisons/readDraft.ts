@@ -61,25 +61,14 @@ export function convertDraft(
 ): { draft: Draft; unconverted: VehicleFieldPath[] } {
   const v = draft.vehicle;
   const hasFender = v.fender.trim() !== "";
-  const cruiseMph =
-    v.exact?.cruise === v.cruise
-      ? v.exact.cruiseMph
-      : readAlone(
-          good,
-          from,
-          (d) => void (d.vehicle.cruise = v.cruise),
-          (i) => i.vehicle.cruiseSpeedsMph,
-        );
-  const fenderMm = !hasFender
-    ? null
-    : v.exact?.fender === v.fender
-      ? v.exact.fenderMm
-      : readAlone(
-          good,
-          from,
-          (d) => void (d.vehicle.fender = v.fender),
-          (i) => i.vehicle.fenderLineMm,
-        );
+  /**
+   * A unit-bearing text's value: `exact`, the value the draft keeps behind it, while the text is
+   * the one written from that value; otherwise the text read alone.
+   */
+  const valueOf = <T>(field: "cruise" | "fender", exact: T | undefined, pick: (i: ComparisonInput) => T): T | null =>
+    exact !== undefined && v.exact?.[field] === v[field] ? exact : readAlone(good, from, (d) => void (d.vehicle[field] = v[field]), pick);
+  const cruiseMph = valueOf("cruise", v.exact?.cruiseMph, (i) => i.vehicle.cruiseSpeedsMph);
+  const fenderMm = hasFender ? valueOf("fender", v.exact?.fenderMm, (i) => i.vehicle.fenderLineMm) : null;
   const fenderRead = !hasFender || fenderMm !== null;
   const fresh = vehicleUnitFields(
     { ...good, vehicle: { ...good.vehicle, cruiseSpeedsMph: cruiseMph ?? good.vehicle.cruiseSpeedsMph, fenderLineMm: fenderMm } },

@@ -6,6 +6,7 @@
  * leaves only that angle out.
  */
 import {
+  type CornerInput,
   FitmentInputError,
   TRAIL_ANGLE_LIMITS_MM,
   approachAngleDeg,
@@ -53,6 +54,35 @@ const ENGINE_FIELD: Record<string, "height" | "offset" | "lift"> = {
   liftMm: "lift",
 };
 
+/** A measured trail field (all but the lift), read from `TrailInput` as `<field>Mm`. */
+type BodyField = Exclude<TrailField, "lift">;
+
+/** Approach and departure take the same corner: a height, and a distance from the axle. */
+const corner =
+  (angleDeg: (input: CornerInput) => number) =>
+  (tireDiameterMm: number, heightMm: number, offsetMm: number): number =>
+    angleDeg({ tireDiameterMm, cornerHeightMm: heightMm, cornerOffsetMm: offsetMm });
+
+/**
+ * Each angle, in the order of the screen: the fields of its body point (its height, and its
+ * distance from the axle or the wheelbase) and the engine's function of the tire's diameter.
+ */
+const TRAIL_ANGLES: readonly {
+  kind: TrailAngle["kind"];
+  height: BodyField;
+  offset: BodyField;
+  angleDeg: (tireDiameterMm: number, heightMm: number, offsetMm: number) => number;
+}[] = [
+  { kind: "approach", height: "frontHeight", offset: "frontAhead", angleDeg: corner(approachAngleDeg) },
+  { kind: "departure", height: "rearHeight", offset: "rearBehind", angleDeg: corner(departureAngleDeg) },
+  {
+    kind: "breakover",
+    height: "midHeight",
+    offset: "wheelbase",
+    angleDeg: (tireDiameterMm, clearanceMm, wheelbaseMm) => breakoverAngleDeg({ tireDiameterMm, wheelbaseMm, clearanceMm }),
+  },
+];
+
 /**
  * @example
  * planTrail({ currentDiameterMm: 802.8, plannedDiameterMm: 939.8, frontHeightMm: 600, frontAheadMm: 900, ... liftMm: 50 }, labels).angles[0];
@@ -68,43 +98,24 @@ export function planTrail(input: TrailInput, labels: TrailLabels): { angles: Tra
       plannedTireDiameterMm: input.plannedDiameterMm,
       liftMm: input.liftMm,
     });
-  const run = (
-    kind: TrailAngle["kind"],
-    fields: { height: TrailField; offset: TrailField },
-    f: (diameter: number, height: number) => number,
-    h: number,
-  ) => {
+  for (const { kind, height, offset, angleDeg } of TRAIL_ANGLES) {
+    const h = input[`${height}Mm`];
+    const o = input[`${offset}Mm`];
+    // A body point not entered: that angle is skipped.
+    if (h === null || o === null) continue;
     try {
-      angles.push({ kind, currentDeg: f(input.currentDiameterMm, h), plannedDeg: f(input.plannedDiameterMm, raise(h)) });
+      angles.push({
+        kind,
+        currentDeg: angleDeg(input.currentDiameterMm, h, o),
+        plannedDeg: angleDeg(input.plannedDiameterMm, raise(h), o),
+      });
     } catch (e) {
       if (!(e instanceof FitmentInputError)) throw e;
       const which = ENGINE_FIELD[e.field] ?? "height";
-      const key = which === "lift" ? "lift" : fields[which];
+      const key = which === "lift" ? "lift" : which === "height" ? height : offset;
       errors[key] ??= `${labels[key]}: ${e.message}`;
     }
-  };
-  const { frontHeightMm: fh, frontAheadMm: fa, rearHeightMm: rh, rearBehindMm: rb, wheelbaseMm: wb, midHeightMm: mh } = input;
-  if (fh !== null && fa !== null)
-    run(
-      "approach",
-      { height: "frontHeight", offset: "frontAhead" },
-      (d, h) => approachAngleDeg({ tireDiameterMm: d, cornerHeightMm: h, cornerOffsetMm: fa }),
-      fh,
-    );
-  if (rh !== null && rb !== null)
-    run(
-      "departure",
-      { height: "rearHeight", offset: "rearBehind" },
-      (d, h) => departureAngleDeg({ tireDiameterMm: d, cornerHeightMm: h, cornerOffsetMm: rb }),
-      rh,
-    );
-  if (wb !== null && mh !== null)
-    run(
-      "breakover",
-      { height: "midHeight", offset: "wheelbase" },
-      (d, h) => breakoverAngleDeg({ tireDiameterMm: d, wheelbaseMm: wb, clearanceMm: h }),
-      mh,
-    );
+  }
   return { angles, errors };
 }
 

@@ -1,7 +1,8 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { type ComparisonInput, DEFAULT_INPUT, comparisonInputSchema } from "./schema";
-import { problemText } from "@/lib/setup/url";
+import { SETUP_PARAM, problemText } from "@/lib/setup/url";
+import { setupAt } from "@/lib/setup/testUtil";
 import { encodeComparison } from "./url";
 import { decodeComparison, hasComparisonParams } from "./urlRead";
 
@@ -98,13 +99,9 @@ describe("comparison query string", () => {
     );
     expect(input.current).toEqual(DEFAULT_INPUT.current);
     // The wheel diameter follows the tire when missing; an unknown reference reads as "flange".
-    expect(input.planned).toEqual({
-      tire: "35x12.50R15LT",
-      wheelDiameterIn: 15,
-      wheelWidthIn: 10,
-      position: { mode: "backspacing", backspacingIn: 3.75, reference: "flange", flangeIn: 0.5 },
-      spacerMm: 0,
-    });
+    expect(input.planned).toEqual(
+      setupAt("35x12.50R15LT", 15, 10, { mode: "backspacing", backspacingIn: 3.75, reference: "flange", flangeIn: 0.5 }, 0),
+    );
     expect(input.vehicle).toEqual({ ...DEFAULT_INPUT.vehicle, cruiseSpeedsMph: [60, 70] });
     expect(problems.map(problemText)).toEqual([
       "Current setup · Tire size: “not-a-size” is not a tire size; using 265/70R17 113T.",
@@ -158,30 +155,9 @@ describe("comparison query string", () => {
   });
 
   it("never throws and always returns a valid input, whatever the query (property)", () => {
-    const keys = fc.constantFrom(
-      "ct",
-      "cd",
-      "cw",
-      "co",
-      "cb",
-      "cr",
-      "cf",
-      "cs",
-      "pt",
-      "pd",
-      "pw",
-      "po",
-      "pb",
-      "pr",
-      "pf",
-      "ps",
-      "kpi",
-      "axle",
-      "top",
-      "cruise",
-      "fender",
-      "zz",
-    );
+    // Every parameter of both setups (lib/setup's SETUP_PARAM after each prefix), the vehicle's first five and an unknown one.
+    const setupKeys = (["c", "p"] as const).flatMap((side) => Object.values(SETUP_PARAM).map((key) => `${side}${key}`));
+    const keys = fc.constantFrom(...setupKeys, "kpi", "axle", "top", "cruise", "fender", "zz");
     const value = fc.oneof(
       fc.string(),
       fc.double().map(String),

@@ -3,7 +3,8 @@ import { describe, expect, it } from "vitest";
 import { TireLimitError, TireSizeError } from "./errors";
 import { equivalentPressure } from "./equivalentPressure";
 import { ROAD_MINIMUM_RATIO, loadPressureBasis } from "./loadPressure";
-import { errorField, nonFinite } from "./testUtil";
+import { VEHICLE_KIND, forTireShares } from "./loadPressureTestUtil";
+import { errorField, nonFinite, real } from "./testUtil";
 import { psiToKpa } from "./units";
 
 // NIST SP 811 (2008) B.8: 1 psi = 6.894757 kPa.
@@ -103,24 +104,19 @@ describe("properties (fast-check)", () => {
     "P265/70R17 113S",
     "265/70R17 115T",
   );
-  const vehicle = fc.constantFrom("passenger-car" as const, "light-truck" as const);
 
   it("a tire replaced by itself keeps the placard pressure (between the minimum and the reference)", () => {
-    fc.assert(
-      fc.property(sizes, vehicle, fc.double({ min: 0, max: 1, noNaN: true }), (t, v, share) => {
-        const b = loadPressureBasis(t, { vehicle: v });
-        const placard = b.minimumPressureKpa + share * (b.maxPressureKpa - b.minimumPressureKpa);
-        const r = equivalentPressure({ current: t, currentPressureKpa: placard, planned: t, vehicle: v });
-        expect(r.pressureKpa).toBeCloseTo(placard, 6);
-        expect(r.pressureToSetKpa).toBeCloseTo(placard, 6);
-      }),
-      { numRuns: 500 },
-    );
+    forTireShares(sizes, 0, 500, (t, v, share, b) => {
+      const placard = b.minimumPressureKpa + share * (b.maxPressureKpa - b.minimumPressureKpa);
+      const r = equivalentPressure({ current: t, currentPressureKpa: placard, planned: t, vehicle: v });
+      expect(r.pressureKpa).toBeCloseTo(placard, 6);
+      expect(r.pressureToSetKpa).toBeCloseTo(placard, 6);
+    });
   });
 
   it("a higher placard pressure never gives a lower equivalent pressure, and nothing is NaN", () => {
     fc.assert(
-      fc.property(vehicle, fc.double({ min: 0.3, max: 1, noNaN: true }), fc.double({ min: 0.3, max: 1, noNaN: true }), (v, a, c) => {
+      fc.property(VEHICLE_KIND, real(0.3, 1), real(0.3, 1), (v, a, c) => {
         const ref = loadPressureBasis("P265/70R17 113S").maxPressureKpa;
         const run = (share: number) =>
           equivalentPressure({

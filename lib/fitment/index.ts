@@ -113,26 +113,8 @@ export {
   type CornerMass,
   type RotatingMassComparison,
 } from "./compare";
-export {
-  BOLT_COUNT_LIMITS,
-  DEFAULT_TORQUE_STAGES,
-  TORQUE_LIMITS_NM,
-  TORQUE_UNIT_SYMBOL,
-  formatTorqueEntry,
-  parseTorqueEntry,
-  requireTorqueNm,
-  switchTorqueUnit,
-  tighteningSequence,
-  torqueEntryNm,
-  torqueFromNm,
-  torqueLimitsIn,
-  torquePlan,
-  torqueToNm,
-  type TorqueEntry,
-  type TorquePass,
-  type TorquePlan,
-  type TorqueUnit,
-} from "./tightening";
+// Every name of the torque module is public (values, parsing and the tightening plan).
+export * from "./tightening";
 export { parseLength, formatLength, type LengthUnit } from "./length";
 export {
   BOLT_PATTERN_TOLERANCE_MM,

@@ -9,8 +9,9 @@ import {
   loadPressureBasis,
   pressureForLoad,
 } from "./loadPressure";
+import { forTireShares } from "./loadPressureTestUtil";
 import { LOAD_INDEX_KG, MAX_LOAD_INDEX } from "./loadSpeed";
-import { errorField, nonFinite } from "./testUtil";
+import { errorField, nonFinite, real } from "./testUtil";
 import { parseTireSize } from "./tireSize";
 import { psiToKpa } from "./units";
 
@@ -83,18 +84,12 @@ describe("worked examples (TRA load formula; ISO 4000-1 load index; NIST SP 811 
 describe("the ratio form agrees with the full TRA formulas (TRA; NHTSA, The Pneumatic Tire, 2006)", () => {
   it("for any K, design section and rim diameter, L(P)/L(Pmax) is the engine's loadKg/maxLoadKg (property)", () => {
     fc.assert(
-      fc.property(
-        fc.double({ min: 0.5, max: 2, noNaN: true }),
-        fc.double({ min: 5, max: 16, noNaN: true }),
-        fc.double({ min: 14, max: 24, noNaN: true }),
-        fc.double({ min: 0.05, max: 1, noNaN: true }),
-        (k, sd, dr, share) => {
-          const lt = loadAtPressure("LT265/75R16 123/120S LRE", psiToKpa(share * 80));
-          expect(lt.loadKg / lt.maxLoadKg).toBeCloseTo(traLightTruck(k, share * 80, sd, dr) / traLightTruck(k, 80, sd, dr), 9);
-          const p = loadAtPressure("P215/75R15 100S", psiToKpa(share * 35));
-          expect(p.loadKg / p.maxLoadKg).toBeCloseTo(traPassenger(k, share * 35, sd, dr) / traPassenger(k, 35, sd, dr), 9);
-        },
-      ),
+      fc.property(real(0.5, 2), real(5, 16), real(14, 24), real(0.05, 1), (k, sd, dr, share) => {
+        const lt = loadAtPressure("LT265/75R16 123/120S LRE", psiToKpa(share * 80));
+        expect(lt.loadKg / lt.maxLoadKg).toBeCloseTo(traLightTruck(k, share * 80, sd, dr) / traLightTruck(k, 80, sd, dr), 9);
+        const p = loadAtPressure("P215/75R15 100S", psiToKpa(share * 35));
+        expect(p.loadKg / p.maxLoadKg).toBeCloseTo(traPassenger(k, share * 35, sd, dr) / traPassenger(k, 35, sd, dr), 9);
+      }),
       { numRuns: 300 },
     );
   });
@@ -216,38 +211,29 @@ describe("properties (fast-check)", () => {
     "265/70R17 115T",
     "245/45R19 102V XL",
   );
-  const vehicle = fc.constantFrom("passenger-car" as const, "light-truck" as const);
 
   it("pressure → load → pressure round-trips for every pressure up to the reference", () => {
-    fc.assert(
-      fc.property(tires, vehicle, fc.double({ min: 0.01, max: 1, noNaN: true }), (t, v, share) => {
-        const b = loadPressureBasis(t, { vehicle: v });
-        const p = share * b.maxPressureKpa;
-        const load = loadAtPressure(t, p, { vehicle: v }).loadKg;
-        expect(pressureForLoad(t, load, { vehicle: v }).pressureKpa).toBeCloseTo(p, 6);
-      }),
-      { numRuns: 1000 },
-    );
+    forTireShares(tires, 0.01, 1000, (t, v, share, b) => {
+      const p = share * b.maxPressureKpa;
+      const load = loadAtPressure(t, p, { vehicle: v }).loadKg;
+      expect(pressureForLoad(t, load, { vehicle: v }).pressureKpa).toBeCloseTo(p, 6);
+    });
   });
 
   it("load → pressure → load round-trips for every load up to the maximum", () => {
-    fc.assert(
-      fc.property(tires, vehicle, fc.double({ min: 0.01, max: 1, noNaN: true }), (t, v, share) => {
-        const b = loadPressureBasis(t, { vehicle: v });
-        const load = share * b.maxLoadKg;
-        const p = pressureForLoad(t, load, { vehicle: v });
-        expect(loadAtPressure(t, p.pressureKpa, { vehicle: v }).loadKg).toBeCloseTo(load, 6);
-        expect(p.pressureToSetKpa).toBeGreaterThanOrEqual(p.pressureKpa);
-        expect(p.pressureToSetKpa).toBeGreaterThanOrEqual(p.minimumPressureKpa);
-        expect(p.reserveKg).toBeGreaterThanOrEqual(0);
-      }),
-      { numRuns: 1000 },
-    );
+    forTireShares(tires, 0.01, 1000, (t, v, share, b) => {
+      const load = share * b.maxLoadKg;
+      const p = pressureForLoad(t, load, { vehicle: v });
+      expect(loadAtPressure(t, p.pressureKpa, { vehicle: v }).loadKg).toBeCloseTo(load, 6);
+      expect(p.pressureToSetKpa).toBeGreaterThanOrEqual(p.pressureKpa);
+      expect(p.pressureToSetKpa).toBeGreaterThanOrEqual(p.minimumPressureKpa);
+      expect(p.reserveKg).toBeGreaterThanOrEqual(0);
+    });
   });
 
   it("load grows with pressure and pressure with load; the exponent is 0.585 or 0.5 (TRA)", () => {
     fc.assert(
-      fc.property(tires, fc.double({ min: 0, max: 1, noNaN: true }), fc.double({ min: 0, max: 1, noNaN: true }), (t, a, c) => {
+      fc.property(tires, real(0, 1), real(0, 1), (t, a, c) => {
         const b = loadPressureBasis(t);
         expect(Object.values(LOAD_PRESSURE_EXPONENT)).toContain(b.exponent);
         const [lo, hi] = a < c ? [a, c] : [c, a];
@@ -258,14 +244,10 @@ describe("properties (fast-check)", () => {
   });
 
   it("no output is NaN or infinite over the valid domain", () => {
-    fc.assert(
-      fc.property(tires, vehicle, fc.double({ min: 0, max: 1, noNaN: true }), (t, v, share) => {
-        const b = loadPressureBasis(t, { vehicle: v });
-        expect(nonFinite(loadAtPressure(t, share * b.maxInflationKpa, { vehicle: v }))).toEqual([]);
-        if (share > 0) expect(nonFinite(pressureForLoad(t, share * b.maxLoadKg, { vehicle: v }))).toEqual([]);
-      }),
-      { numRuns: 500 },
-    );
+    forTireShares(tires, 0, 500, (t, v, share, b) => {
+      expect(nonFinite(loadAtPressure(t, share * b.maxInflationKpa, { vehicle: v }))).toEqual([]);
+      if (share > 0) expect(nonFinite(pressureForLoad(t, share * b.maxLoadKg, { vehicle: v }))).toEqual([]);
+    });
   });
 });
 
@@ -301,7 +283,7 @@ describe("loadIndexNeeded: the least load index a size must have (ISO 4000-1 tab
   it("agrees with pressureForLoad: a tire of that index carries the load at or below its maximum pressure, one index less cannot (property)", () => {
     fc.assert(
       fc.property(
-        fc.double({ min: 100, max: 2000, noNaN: true }),
+        real(100, 2000),
         fc.constantFrom("passenger-car" as const, "light-truck" as const),
         fc.constantFrom("285/70R17", "35x12.50R17LT"),
         (load, vehicle, size) => {

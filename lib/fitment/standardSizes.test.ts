@@ -1,10 +1,15 @@
 import { describe, expect, it } from "vitest";
 import { STANDARD_FLOTATION_SIZES, STANDARD_METRIC_SIZES, STANDARD_SIZES, standardSizes } from "./standardSizes";
 
+/** Fails naming each of `sizes` that `table` lacks. */
+function expectAllIn(table: readonly { text: string }[], sizes: readonly string[]): void {
+  const texts = new Set(table.map((t) => t.text));
+  for (const s of sizes) expect(texts.has(s), s).toBe(true);
+}
+
 describe("standard sizes (data)", () => {
   it("contains the sizes the rest of the engine relies on", () => {
-    const texts = new Set(STANDARD_SIZES.map((t) => t.text));
-    for (const s of [
+    expectAllIn(STANDARD_SIZES, [
       "205/55R16",
       "265/70R17",
       "285/70R17",
@@ -17,9 +22,7 @@ describe("standard sizes (data)", () => {
       "37x13.50R22LT",
       "40x13.50R24LT",
       "42x14.50R20LT",
-    ]) {
-      expect(texts.has(s)).toBe(true);
-    }
+    ]);
   });
   it("metric series: widths 175–375 ending in 5, aspect 30–85 in steps of 5, rims 14–24 (rule of the data)", () => {
     for (const t of STANDARD_METRIC_SIZES) {
@@ -51,8 +54,7 @@ describe("standard sizes cover the usual truck rims", () => {
   });
 
   it("the common metric LT and P sizes on those rims (common practice, no source)", () => {
-    const metric = new Set(STANDARD_METRIC_SIZES.map((t) => t.text));
-    for (const s of [
+    expectAllIn(STANDARD_METRIC_SIZES, [
       "215/75R15",
       "225/75R15",
       "235/75R15",
@@ -76,8 +78,6 @@ describe("standard sizes cover the usual truck rims", () => {
       "285/45R22",
       "305/45R22",
       "325/50R22",
-    ]) {
-      expect(metric.has(s), s).toBe(true);
-    }
+    ]);
   });
 });

@@ -1,4 +1,11 @@
+import fc from "fast-check";
 import { FitmentInputError } from "./errors";
+
+/**
+ * Test helper: a double in [min, max], never NaN, for fast-check properties over the engine's inputs.
+ * @example fc.property(real(600, 1200), (diameterMm) => diameterMm >= 600);
+ */
+export const real = (min: number, max: number): fc.Arbitrary<number> => fc.double({ min, max, noNaN: true });
 
 /**
  * Test helper (not exported from index): every number reachable in a value, with its path.

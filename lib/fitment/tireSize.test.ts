@@ -2,7 +2,7 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { TireSizeError } from "./errors";
 import { loadIndexKg } from "./loadSpeed";
-import { formatTireSize, parseTireSize } from "./tireSize";
+import { type TireSize, formatTireSize, parseTireSize } from "./tireSize";
 
 describe("parseTireSize — metric (ISO 4000-1 designation)", () => {
   it("LT285/70R17 121/118Q: prefix, construction, dual load index, speed symbol", () => {
@@ -51,15 +51,6 @@ describe("parseTireSize — metric (ISO 4000-1 designation)", () => {
     expect(() => parseTireSize("255/35ZR18 (94Y")).toThrow(TireSizeError);
     expect(parseTireSize("T125/70D16").service).toBe("T");
     expect(parseTireSize("ST225/75R15").service).toBe("ST");
-  });
-
-  it("load range and XL markings after the service description", () => {
-    expect(parseTireSize("LT285/70R17 121/118Q E").loadRange).toBe("E");
-    expect(parseTireSize("LT285/70R17 121/118Q LRE").loadRange).toBe("E");
-    expect(parseTireSize("LT285/70R17 121/118Q Load Range E").text).toBe("LT285/70R17 121/118Q LRE");
-    expect(parseTireSize("LT285/70R17 10PR").loadRange).toBe("E");
-    expect(parseTireSize("LT285/70R17 121/118Q 10 PLY").loadRange).toBe("E");
-    expect(parseTireSize("225/45R17 94W XL").loadMarking).toBe("XL");
   });
 });
 
@@ -156,12 +147,22 @@ describe("parseTireSize — what people copy from a sidewall", () => {
     }
   });
 
-  it("extra load and reinforced spelled out read as XL and RF; standard load as SL", () => {
-    expect(parseTireSize("225/45R17 94W Extra Load").loadMarking).toBe("XL");
-    expect(parseTireSize("225/45R17 94W Reinforced").loadMarking).toBe("RF");
-    expect(parseTireSize("225/45R17 94W reinf").loadMarking).toBe("RF");
-    expect(parseTireSize("225/45R17 91W Standard Load").loadMarking).toBe("SL");
-    expect(parseTireSize("225/45R17 94W Extra Load").text).toBe("225/45R17 94W XL");
+  it.each<[string, keyof TireSize, string]>([
+    // Load range and XL markings after the service description.
+    ["LT285/70R17 121/118Q E", "loadRange", "E"],
+    ["LT285/70R17 121/118Q LRE", "loadRange", "E"],
+    ["LT285/70R17 121/118Q Load Range E", "text", "LT285/70R17 121/118Q LRE"],
+    ["LT285/70R17 10PR", "loadRange", "E"],
+    ["LT285/70R17 121/118Q 10 PLY", "loadRange", "E"],
+    ["225/45R17 94W XL", "loadMarking", "XL"],
+    // Extra load and reinforced spelled out read as XL and RF; standard load as SL.
+    ["225/45R17 94W Extra Load", "loadMarking", "XL"],
+    ["225/45R17 94W Reinforced", "loadMarking", "RF"],
+    ["225/45R17 94W reinf", "loadMarking", "RF"],
+    ["225/45R17 91W Standard Load", "loadMarking", "SL"],
+    ["225/45R17 94W Extra Load", "text", "225/45R17 94W XL"],
+  ])("load marking: %s reads with %s %s", (text, field, value) => {
+    expect(parseTireSize(text)[field]).toBe(value);
   });
 
   it("run-flat: RFT, run-flat, runflat, run flat, ROF and ZP read as RUN-FLAT", () => {

@@ -1,7 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { BodyPointError, FitmentInputError } from "./errors";
-import { errorField } from "./testUtil";
+import { errorField, real } from "./testUtil";
 import { parseTireSize } from "./tireSize";
 import { approachAngleDeg, breakoverAngleDeg, departureAngleDeg, raiseBodyPoint } from "./trailAngles";
 
@@ -47,18 +47,13 @@ describe("approach and departure angle (SAE J1100 definition, from memory)", () 
 
   it("agrees with the ramp found by bisection (independent construction), and the line is tangent to the tire", () => {
     fc.assert(
-      fc.property(
-        fc.double({ min: 600, max: 1200, noNaN: true }),
-        fc.double({ min: 100, max: 1200, noNaN: true }),
-        fc.double({ min: 50, max: 2500, noNaN: true }),
-        (D, h, extra) => {
-          const r = D / 2;
-          const d = r + extra; // beyond the tire's front
-          const deg = approachAngleDeg({ tireDiameterMm: D, cornerHeightMm: h, cornerOffsetMm: d });
-          expect(deg).toBeCloseTo(rampAngleByBisection(D, d, h), 6);
-          expect(distanceToLine(r, d, h, (deg * Math.PI) / 180)).toBeCloseTo(r, 6);
-        },
-      ),
+      fc.property(real(600, 1200), real(100, 1200), real(50, 2500), (D, h, extra) => {
+        const r = D / 2;
+        const d = r + extra; // beyond the tire's front
+        const deg = approachAngleDeg({ tireDiameterMm: D, cornerHeightMm: h, cornerOffsetMm: d });
+        expect(deg).toBeCloseTo(rampAngleByBisection(D, d, h), 6);
+        expect(distanceToLine(r, d, h, (deg * Math.PI) / 180)).toBeCloseTo(r, 6);
+      }),
       { numRuns: 1000 },
     );
   });
@@ -89,23 +84,18 @@ describe("ramp breakover angle (SAE J1100 definition, from memory)", () => {
 
   it("is the supplement of the angle between the two tangent lines meeting at the midpoint (the J1100 construction)", () => {
     fc.assert(
-      fc.property(
-        fc.double({ min: 600, max: 1100, noNaN: true }),
-        fc.double({ min: 2000, max: 4500, noNaN: true }),
-        fc.double({ min: 150, max: 500, noNaN: true }),
-        (D, L, c) => {
-          const r = D / 2;
-          const a = L / 2;
-          // Each tangent from M = (a, c) (front axle at x = 0) found by the independent ramp bisection.
-          const front = (rampAngleByBisection(D, a, c) * Math.PI) / 180;
-          // The rear line is the mirror image: direction from M toward the front tire goes down-forward, toward the rear tire down-backward.
-          const toFront = { x: -Math.cos(front), y: -Math.sin(front) };
-          const toRear = { x: Math.cos(front), y: -Math.sin(front) };
-          const between = (Math.acos(toFront.x * toRear.x + toFront.y * toRear.y) * 180) / Math.PI;
-          expect(breakoverAngleDeg({ tireDiameterMm: D, wheelbaseMm: L, clearanceMm: c })).toBeCloseTo(180 - between, 6);
-          expect(distanceToLine(r, a, c, front)).toBeCloseTo(r, 6);
-        },
-      ),
+      fc.property(real(600, 1100), real(2000, 4500), real(150, 500), (D, L, c) => {
+        const r = D / 2;
+        const a = L / 2;
+        // Each tangent from M = (a, c) (front axle at x = 0) found by the independent ramp bisection.
+        const front = (rampAngleByBisection(D, a, c) * Math.PI) / 180;
+        // The rear line is the mirror image: direction from M toward the front tire goes down-forward, toward the rear tire down-backward.
+        const toFront = { x: -Math.cos(front), y: -Math.sin(front) };
+        const toRear = { x: Math.cos(front), y: -Math.sin(front) };
+        const between = (Math.acos(toFront.x * toRear.x + toFront.y * toRear.y) * 180) / Math.PI;
+        expect(breakoverAngleDeg({ tireDiameterMm: D, wheelbaseMm: L, clearanceMm: c })).toBeCloseTo(180 - between, 6);
+        expect(distanceToLine(r, a, c, front)).toBeCloseTo(r, 6);
+      }),
       { numRuns: 500 },
     );
   });
@@ -142,11 +132,11 @@ describe("raiseBodyPoint (the axle centre sits one radius above the ground; comm
 
 describe("properties (fast-check): angles grow with tire size and lift, never NaN", () => {
   const corner = fc.record({
-    D: fc.double({ min: 650, max: 950, noNaN: true }),
-    grow: fc.double({ min: 1, max: 200, noNaN: true }),
-    lift: fc.double({ min: 0, max: 150, noNaN: true }),
-    h: fc.double({ min: 300, max: 900, noNaN: true }),
-    beyond: fc.double({ min: 250, max: 1500, noNaN: true }),
+    D: real(650, 950),
+    grow: real(1, 200),
+    lift: real(0, 150),
+    h: real(300, 900),
+    beyond: real(250, 1500),
   });
 
   it("approach/departure: a taller tire (body raised by ΔR) and a lift each give a larger angle", () => {
@@ -174,51 +164,38 @@ describe("properties (fast-check): angles grow with tire size and lift, never Na
 
   it("breakover: a taller tire (midpoint raised by ΔR) and a lift each give a larger angle", () => {
     fc.assert(
-      fc.property(
-        fc.double({ min: 650, max: 950, noNaN: true }),
-        fc.double({ min: 1, max: 200, noNaN: true }),
-        fc.double({ min: 1, max: 150, noNaN: true }),
-        fc.double({ min: 2200, max: 4000, noNaN: true }),
-        fc.double({ min: 150, max: 450, noNaN: true }),
-        (D, grow, lift, L, c) => {
-          const base = breakoverAngleDeg({ tireDiameterMm: D, wheelbaseMm: L, clearanceMm: c });
-          const taller = breakoverAngleDeg({
-            tireDiameterMm: D + grow,
-            wheelbaseMm: L,
-            clearanceMm: raiseBodyPoint({ heightMm: c, currentTireDiameterMm: D, plannedTireDiameterMm: D + grow }),
-          });
-          const lifted = breakoverAngleDeg({ tireDiameterMm: D, wheelbaseMm: L, clearanceMm: c + lift });
-          expect(taller).toBeGreaterThan(base);
-          expect(lifted).toBeGreaterThan(base);
-        },
-      ),
+      fc.property(real(650, 950), real(1, 200), real(1, 150), real(2200, 4000), real(150, 450), (D, grow, lift, L, c) => {
+        const base = breakoverAngleDeg({ tireDiameterMm: D, wheelbaseMm: L, clearanceMm: c });
+        const taller = breakoverAngleDeg({
+          tireDiameterMm: D + grow,
+          wheelbaseMm: L,
+          clearanceMm: raiseBodyPoint({ heightMm: c, currentTireDiameterMm: D, plannedTireDiameterMm: D + grow }),
+        });
+        const lifted = breakoverAngleDeg({ tireDiameterMm: D, wheelbaseMm: L, clearanceMm: c + lift });
+        expect(taller).toBeGreaterThan(base);
+        expect(lifted).toBeGreaterThan(base);
+      }),
       { numRuns: 1000 },
     );
   });
 
   it("over the whole accepted range: a finite angle in (0°, 90°] (approach) or (0°, 180°) (breakover), or a FitmentInputError — never NaN", () => {
     fc.assert(
-      fc.property(
-        fc.double({ min: 300, max: 2000, noNaN: true }),
-        fc.double({ min: 1, max: 3000, noNaN: true }),
-        fc.double({ min: 1, max: 5000, noNaN: true }),
-        fc.double({ min: 1000, max: 10000, noNaN: true }),
-        (D, h, d, L) => {
-          for (const f of [
-            () => approachAngleDeg({ tireDiameterMm: D, cornerHeightMm: h, cornerOffsetMm: d }),
-            () => breakoverAngleDeg({ tireDiameterMm: D, wheelbaseMm: L, clearanceMm: h }),
-          ]) {
-            try {
-              const deg = f();
-              expect(Number.isFinite(deg)).toBe(true);
-              expect(deg).toBeGreaterThan(0);
-              expect(deg).toBeLessThan(180);
-            } catch (e) {
-              if (!(e instanceof FitmentInputError)) throw e;
-            }
+      fc.property(real(300, 2000), real(1, 3000), real(1, 5000), real(1000, 10000), (D, h, d, L) => {
+        for (const f of [
+          () => approachAngleDeg({ tireDiameterMm: D, cornerHeightMm: h, cornerOffsetMm: d }),
+          () => breakoverAngleDeg({ tireDiameterMm: D, wheelbaseMm: L, clearanceMm: h }),
+        ]) {
+          try {
+            const deg = f();
+            expect(Number.isFinite(deg)).toBe(true);
+            expect(deg).toBeGreaterThan(0);
+            expect(deg).toBeLessThan(180);
+          } catch (e) {
+            if (!(e instanceof FitmentInputError)) throw e;
           }
-        },
-      ),
+        }
+      }),
       { numRuns: 3000 },
     );
   });

@@ -71,9 +71,23 @@ export interface RaiseInput {
   liftMm?: number;
 }
 
-/** Slope angle (rad) of the line from (d, h) tangent under the front of the circle of radius r resting on the ground. */
-function tangentAngle(r: number, d: number, h: number): number {
-  return Math.atan2(h - r, d) + Math.asin(r / Math.hypot(d, h - r));
+/**
+ * Half the tire diameter of an angle's input, mm, once the input is known to be an object
+ * (`example`: a whole valid input, `diameterExample` its tire diameter, for the messages).
+ */
+function tireRadius(input: { tireDiameterMm: number }, example: string, diameterExample: string): number {
+  requireObject("input", input, example);
+  const L = TRAIL_ANGLE_LIMITS_MM.tireDiameter;
+  return requireNumber("tireDiameterMm", input.tireDiameterMm, L.min, L.max, diameterExample, "mm") / 2;
+}
+
+/**
+ * Slope angle (degrees) of the line from (d, h) tangent under the front of the circle of radius r
+ * resting on the ground; the point must lie outside the circle (else a BodyPointError on `field`).
+ */
+function tangentAngleDeg(r: number, d: number, h: number, field: string, what: string): number {
+  checkOutside(r, d, h, field, what);
+  return (Math.atan2(h - r, d) + Math.asin(r / Math.hypot(d, h - r))) * DEG;
 }
 
 function checkOutside(r: number, d: number, h: number, field: string, what: string): void {
@@ -100,13 +114,11 @@ function checkOutside(r: number, d: number, h: number, field: string, what: stri
  * approachAngleDeg({ tireDiameterMm: 800, cornerHeightMm: 600, cornerOffsetMm: 900 }); // ≈ 38.24
  */
 export function approachAngleDeg(input: CornerInput): number {
-  requireObject("input", input, "{ tireDiameterMm: 800, cornerHeightMm: 600, cornerOffsetMm: 900 }");
+  const r = tireRadius(input, "{ tireDiameterMm: 800, cornerHeightMm: 600, cornerOffsetMm: 900 }", "800");
   const L = TRAIL_ANGLE_LIMITS_MM;
-  const r = requireNumber("tireDiameterMm", input.tireDiameterMm, L.tireDiameter.min, L.tireDiameter.max, "800", "mm") / 2;
   const h = requireNumber("cornerHeightMm", input.cornerHeightMm, L.height.min, L.height.max, "600", "mm");
   const d = requireNumber("cornerOffsetMm", input.cornerOffsetMm, L.offset.min, L.offset.max, "900", "mm");
-  checkOutside(r, d, h, "cornerHeightMm", "the body point");
-  const deg = tangentAngle(r, d, h) * DEG;
+  const deg = tangentAngleDeg(r, d, h, "cornerHeightMm", "the body point");
   if (deg > 90) {
     throw new BodyPointError(
       "cornerOffsetMm",
@@ -141,13 +153,11 @@ export function departureAngleDeg(input: CornerInput): number {
  * breakoverAngleDeg({ tireDiameterMm: 838.2, wheelbaseMm: 2450, clearanceMm: 280 }); // ≈ 26.79 (a 33 in tire)
  */
 export function breakoverAngleDeg(input: BreakoverInput): number {
-  requireObject("input", input, "{ tireDiameterMm: 838.2, wheelbaseMm: 2450, clearanceMm: 280 }");
+  const r = tireRadius(input, "{ tireDiameterMm: 838.2, wheelbaseMm: 2450, clearanceMm: 280 }", "838.2");
   const L = TRAIL_ANGLE_LIMITS_MM;
-  const r = requireNumber("tireDiameterMm", input.tireDiameterMm, L.tireDiameter.min, L.tireDiameter.max, "838.2", "mm") / 2;
   const wheelbase = requireNumber("wheelbaseMm", input.wheelbaseMm, L.wheelbase.min, L.wheelbase.max, "2450", "mm");
   const c = requireNumber("clearanceMm", input.clearanceMm, L.height.min, L.height.max, "280", "mm");
-  checkOutside(r, wheelbase / 2, c, "clearanceMm", "the lowest point midway");
-  const deg = 2 * tangentAngle(r, wheelbase / 2, c) * DEG;
+  const deg = 2 * tangentAngleDeg(r, wheelbase / 2, c, "clearanceMm", "the lowest point midway");
   if (deg >= 180) {
     throw new BodyPointError(
       "clearanceMm",

@@ -1,16 +1,16 @@
 import { describe, expect, it } from "vitest";
 import { clearanceSchema, vehicleMarginSchema, garageVehicleSchema } from "./schema";
+import { issueAt } from "@/lib/setup/testUtil";
 import { CUR } from "./testUtil";
+
+/** The vehicle form's required fields, filled in. */
+const REQUIRED = { name: "A", frontSuspension: "independent", boltPattern: "6x5.5", stockSetup: CUR, currentSetup: CUR };
+/** The vehicle form: `fields` over the required ones. */
+const vehicleForm = (fields: Record<string, unknown>) => ({ ...REQUIRED, ...fields });
 
 describe("vehicle schema", () => {
   it("normalizes the bolt pattern: 5x4.5 and 5x114.3 are one pattern", () => {
-    const a = garageVehicleSchema.parse({
-      name: "A",
-      frontSuspension: "independent",
-      boltPattern: "5 on 4.5",
-      stockSetup: CUR,
-      currentSetup: CUR,
-    });
+    const a = garageVehicleSchema.parse(vehicleForm({ boltPattern: "5 on 4.5" }));
     expect(a.boltPattern).toBe("5x4.5");
     expect(a.year).toBeNull();
     expect(a.notes).toBe("");
@@ -18,37 +18,27 @@ describe("vehicle schema", () => {
 });
 
 describe("units in the garage forms: a field reads the unit its label states", () => {
-  const issue = (r: { success: boolean; error?: { issues: { path: PropertyKey[]; message: string }[] } }, path: string) =>
-    r.error?.issues.find((i) => i.path.join(".") === path)?.message;
-
   it("lift height: typed in inches, its bound stated in inches, its example accepted", () => {
-    const base = { name: "A", frontSuspension: "independent", boltPattern: "6x5.5", stockSetup: CUR, currentSetup: CUR };
-    const r = garageVehicleSchema.safeParse({ ...base, liftHeightMm: "25" });
+    const r = garageVehicleSchema.safeParse(vehicleForm({ liftHeightMm: "25" }));
     // 500 mm / 25.4 = 19.685 in, stated inward as 19.68 in.
-    expect(issue(r, "liftHeightMm")).toBe("Lift height (in): must be between 0 and 19.68 in, e.g. 2-1/2 or 2.5.");
-    expect(garageVehicleSchema.parse({ ...base, liftHeightMm: "2-1/2" }).liftHeightMm).toBeCloseTo(63.5, 9);
-    expect(garageVehicleSchema.parse({ ...base, liftHeightMm: "2½" }).liftHeightMm).toBeCloseTo(63.5, 9);
-    expect(garageVehicleSchema.parse({ ...base, liftHeightMm: "2.5" }).liftHeightMm).toBeCloseTo(63.5, 9);
-    expect(issue(garageVehicleSchema.safeParse({ ...base, liftHeightMm: "lots" }), "liftHeightMm")).toBe(
+    expect(issueAt(r, "liftHeightMm")).toBe("Lift height (in): must be between 0 and 19.68 in, e.g. 2-1/2 or 2.5.");
+    expect(garageVehicleSchema.parse(vehicleForm({ liftHeightMm: "2-1/2" })).liftHeightMm).toBeCloseTo(63.5, 9);
+    expect(garageVehicleSchema.parse(vehicleForm({ liftHeightMm: "2½" })).liftHeightMm).toBeCloseTo(63.5, 9);
+    expect(garageVehicleSchema.parse(vehicleForm({ liftHeightMm: "2.5" })).liftHeightMm).toBeCloseTo(63.5, 9);
+    expect(issueAt(garageVehicleSchema.safeParse(vehicleForm({ liftHeightMm: "lots" })), "liftHeightMm")).toBe(
       "Lift height (in): not a length in inches, e.g. 2-1/2 or 2.5.",
     );
   });
 
   it("names each field as the vehicle form labels it", () => {
-    const base = { name: "A", frontSuspension: "independent", boltPattern: "6x5.5", stockSetup: CUR, currentSetup: CUR };
-    const r = garageVehicleSchema.safeParse({
-      ...base,
-      year: "1800",
-      hubBoreMm: "3/4",
-      axleRatio: "x",
-      transmissionRatio: "20",
-      kingpinInclinationDeg: "40",
-    });
-    expect(issue(r, "year")).toBe("Year: must be between 1900 and 2100, e.g. 2009.");
-    expect(issue(r, "hubBoreMm")).toMatch(/^Hub bore \(mm\): “3\/4” is a fraction/);
-    expect(issue(r, "axleRatio")).toBe("Axle ratio: enter a number, e.g. 3.73.");
-    expect(issue(r, "transmissionRatio")).toBe("Top-gear ratio: must be between 0.3 and 10, e.g. 0.72.");
-    expect(issue(r, "kingpinInclinationDeg")).toBe("Kingpin inclination (°): must be between 0 and 30°, e.g. 8.");
+    const r = garageVehicleSchema.safeParse(
+      vehicleForm({ year: "1800", hubBoreMm: "3/4", axleRatio: "x", transmissionRatio: "20", kingpinInclinationDeg: "40" }),
+    );
+    expect(issueAt(r, "year")).toBe("Year: must be between 1900 and 2100, e.g. 2009.");
+    expect(issueAt(r, "hubBoreMm")).toMatch(/^Hub bore \(mm\): “3\/4” is a fraction/);
+    expect(issueAt(r, "axleRatio")).toBe("Axle ratio: enter a number, e.g. 3.73.");
+    expect(issueAt(r, "transmissionRatio")).toBe("Top-gear ratio: must be between 0.3 and 10, e.g. 0.72.");
+    expect(issueAt(r, "kingpinInclinationDeg")).toBe("Kingpin inclination (°): must be between 0 and 30°, e.g. 8.");
   });
 });
 

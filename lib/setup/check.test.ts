@@ -1,16 +1,11 @@
 import { describe, expect, it } from "vitest";
 import { FLANGE_ALLOWANCE_LIMITS_IN, RIM_WIDTH_LIMITS_IN, SPACER_LIMITS_MM, WHEEL_DIAMETER_LIMITS_IN } from "@/lib/fitment";
 import { checkSetup } from "./check";
-import { SETUP_LIMITS, type Setup } from "./model";
+import { SETUP_LIMITS } from "./model";
 import { setupSchema } from "./schema";
+import { setupByOffset } from "./testUtil";
 
-const PLANNED: Setup = {
-  tire: "37x12.50R17LT 124Q LRD",
-  wheelDiameterIn: 17,
-  wheelWidthIn: 9,
-  position: { mode: "offset", offsetMm: -12 },
-  spacerMm: 0,
-};
+const PLANNED = setupByOffset("37x12.50R17LT 124Q LRD", 17, 9, -12);
 
 /** The messages of a setup given as numbers (a stored setup, the comparison API), by field path. */
 const issues = (v: unknown) => {

@@ -1,10 +1,9 @@
 import { describe, expect, it } from "vitest";
 import type { Setup } from "./model";
 import { EMPTY_SETUP_FORM, setupSchema, setupToForm } from "./schema";
+import { issueAt, setupByOffset } from "./testUtil";
 
-const CUR: Setup = { tire: "265/70R17", wheelDiameterIn: 17, wheelWidthIn: 8, position: { mode: "offset", offsetMm: 25 }, spacerMm: 0 };
-const issue = (r: { success: boolean; error?: { issues: { path: PropertyKey[]; message: string }[] } }, path: string) =>
-  r.error?.issues.find((i) => i.path.join(".") === path)?.message;
+const CUR = setupByOffset("265/70R17", 17, 8, 25);
 
 describe("setup schema (fractions through the engine's parseLength)", () => {
   it("reads inch fractions and mm text into the engine's units", () => {
@@ -32,11 +31,11 @@ describe("units in the setup fields: a field reads the unit its label states", (
   it("refuses a spacer of 1-1/2 (a fraction in a mm field) instead of 1.5 mm; 1-1/2 in is 38.1 mm (NIST SP 811)", () => {
     const r = setupSchema.safeParse({ ...CUR, spacerMm: "1-1/2" });
     expect(r.success).toBe(false);
-    expect(issue(r, "spacerMm")).toBe(
+    expect(issueAt(r, "spacerMm")).toBe(
       "Spacer (mm, optional): “1-1/2” is a fraction, which is read only in inches — write “1-1/2 in”, or mm as a decimal, e.g. 25 (leave empty for none).",
     );
     expect(setupSchema.parse({ ...CUR, spacerMm: "1-1/2 in" }).spacerMm).toBeCloseTo(38.1, 9);
-    expect(issue(setupSchema.safeParse({ ...CUR, position: { mode: "offset", offsetMm: "1/2" } }), "position.offsetMm")).toMatch(
+    expect(issueAt(setupSchema.safeParse({ ...CUR, position: { mode: "offset", offsetMm: "1/2" } }), "position.offsetMm")).toMatch(
       /^Offset \(mm\): “1\/2” is a fraction/,
     );
   });

@@ -1,15 +1,10 @@
 import { describe, expect, it } from "vitest";
 import type { Setup } from "./model";
 import { type LinkProblem, problemText, setupQuery } from "./url";
+import { setupByOffset } from "./testUtil";
 import { decodeSetupParams, setupFromQuery } from "./urlRead";
 
-const PLAN: Setup = {
-  tire: "35x12.50R17LT",
-  wheelDiameterIn: 17,
-  wheelWidthIn: 9,
-  position: { mode: "offset", offsetMm: -12 },
-  spacerMm: 0,
-};
+const PLAN = setupByOffset("35x12.50R17LT", 17, 9, -12);
 const BS: Setup = { ...PLAN, position: { mode: "backspacing", backspacingIn: 4.5, reference: "bead-seat", flangeIn: 0.5 }, spacerMm: 12 };
 
 describe("a setup in a link (moved from the garage's tests)", () => {

@@ -7,9 +7,8 @@ import type { DisplayPrefs } from "@/lib/comparisons/format";
 import { type ComparisonInput, DEFAULT_INPUT } from "@/lib/comparisons/model";
 import type { Setup } from "@/lib/setup/model";
 import { stockPart } from "@/lib/fitment/crossSectionTestUtil";
-import { SETUP_A, SETUP_B } from "@/lib/comparisons/crossSection/testUtil";
+import { SETUP_A, SETUP_B, garageLimits } from "@/lib/comparisons/crossSection/testUtil";
 import { CrossSection } from "./CrossSection";
-import type { DrawnLimits } from "@/lib/comparisons/crossSection/drawing";
 
 afterEach(cleanup);
 
@@ -86,11 +85,11 @@ describe("CrossSection", () => {
     expect(screen.getByTestId("cross-section-table").className).toContain("sr-only");
   });
 
-  it("labels the dimensions in inches, in sixteenths and in millimetres", () => {
-    const r = computeComparison(withPlanned(A));
-    render(<CrossSection result={r} prefs={inch} />);
-    expect(labels()).toEqual(
-      expect.arrayContaining([
+  it.each([
+    {
+      unit: "inches",
+      prefs: inch,
+      labels: [
         "inboard 5.58 in",
         "outboard 6.52 in",
         "backspacing 4.53 in",
@@ -100,16 +99,14 @@ describe("CrossSection", () => {
         "diameter 35 in",
         "diameter 31.61 in",
         "ground clearance +1.7 in",
-      ]),
-    );
-    cleanup();
-    render(<CrossSection result={r} prefs={frac} />);
+      ],
+    },
     // 5.5776 in × 16 = 89.2 → 89/16 = 5-9/16 in; 4.5276 × 16 = 72.4 → 4-1/2 in.
-    expect(labels()).toEqual(expect.arrayContaining(["inboard 5-9/16 in", "backspacing 4-1/2 in", "flange 1/2 in"]));
-    cleanup();
-    render(<CrossSection result={r} prefs={metric} />);
-    expect(labels()).toEqual(
-      expect.arrayContaining([
+    { unit: "sixteenths", prefs: frac, labels: ["inboard 5-9/16 in", "backspacing 4-1/2 in", "flange 1/2 in"] },
+    {
+      unit: "millimetres",
+      prefs: metric,
+      labels: [
         "inboard 142 mm",
         "outboard 166 mm",
         "backspacing 115 mm",
@@ -118,8 +115,11 @@ describe("CrossSection", () => {
         "diameter 889 mm",
         "diameter 803 mm",
         "ground clearance +43 mm",
-      ]),
-    );
+      ],
+    },
+  ])("labels the dimensions in $unit", ({ prefs, labels: expected }) => {
+    render(<CrossSection result={computeComparison(withPlanned(A))} prefs={prefs} />);
+    expect(labels()).toEqual(expect.arrayContaining(expected));
   });
 
   it("draws a spacer between the hub face and the wheel, with its thickness as bought", () => {
@@ -147,15 +147,11 @@ describe("CrossSection", () => {
   });
 
   it("with a garage vehicle: its inner limit and fender lip where they are, parts marked by predicted status", () => {
-    const limits: DrawnLimits = {
-      innerMm: 187.5,
-      outerMm: 127.5,
-      parts: [
-        stockPart("Frame rail", "inboard", "ride-height", 30, 45.83, "clear"),
-        stockPart("Flare", "outboard", "ride-height", 20, -38.17, "contact"),
-        stockPart("Bumper corner", "fore-aft", "full-lock", 19.05, 3, "tight"),
-      ],
-    };
+    const limits = garageLimits(
+      stockPart("Frame rail", "inboard", "ride-height", 30, 45.83, "clear"),
+      stockPart("Flare", "outboard", "ride-height", 20, -38.17, "contact"),
+      stockPart("Bumper corner", "fore-aft", "full-lock", 19.05, 3, "tight"),
+    );
     render(<CrossSection result={computeComparison(withPlanned(A))} prefs={metric} limits={limits} />);
     const svg = screen.getByTestId("cross-section");
     expect(svg.querySelector("[data-testid=inner-limit]")!.getAttribute("x1")).toBe("-187.5");

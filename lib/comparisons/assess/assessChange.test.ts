@@ -36,6 +36,32 @@ interface Case {
   none: () => Finding[];
   found: () => Finding[];
 }
+
+/** A case on one change figure of the comparison: no finding at `noneAt`, one at `foundAt`. */
+const onFigure = (
+  kind: FindingKind,
+  figure: "outerPokeChangeMm" | "scrubRadiusChangeMm" | "innerClearanceChangeMm" | "diameterChangeMm",
+  noneAt: number,
+  foundAt: number,
+  source = /common practice, no source/,
+): Case => ({
+  source,
+  none: () => of(kind, changed({ [figure]: noneAt })),
+  found: () => of(kind, changed({ [figure]: foundAt })),
+});
+
+/** The clearance case: a fender measured `distanceMm` above the same setup, against a 12.7 mm margin. */
+const fenderAt = (distanceMm: number) => () =>
+  of("clearance", BASE, {
+    points: [
+      {
+        id: "p",
+        label: "Fender",
+        prediction: predictClearance({ direction: "upward", distanceMm, measuredWith: SAME }, SAME, { marginMm: 12.7 }),
+      },
+    ],
+  });
+
 const CASES: Record<Exclude<FindingKind, "load">, Case> = {
   // Measuring rim of 265/70: 265 × 0.75 / 25.4 = 7.82 → 8 in (factor 0.75 for a 70 series, from
   // memory of the UN R30/ETRTO rule); ± 1 in (common practice, no source) gives 7–9 in. Rims come
@@ -51,16 +77,8 @@ const CASES: Record<Exclude<FindingKind, "load">, Case> = {
     none: () => of("poke", BASE, { fenderLineMm: BASE.planned.outerSwingMm }),
     found: () => of("poke", BASE, { fenderLineMm: BASE.planned.outerSwingMm - 0.1 }),
   },
-  "outer-reach": {
-    source: /common practice, no source/,
-    none: () => of("outer-reach", changed({ outerPokeChangeMm: OUTER_REACH_WARN_MM })),
-    found: () => of("outer-reach", changed({ outerPokeChangeMm: OUTER_REACH_WARN_MM + 0.1 })),
-  },
-  scrub: {
-    source: /common practice, no source/,
-    none: () => of("scrub", changed({ scrubRadiusChangeMm: SCRUB_WARN_MM })),
-    found: () => of("scrub", changed({ scrubRadiusChangeMm: SCRUB_WARN_MM + 0.1 })),
-  },
+  "outer-reach": onFigure("outer-reach", "outerPokeChangeMm", OUTER_REACH_WARN_MM, OUTER_REACH_WARN_MM + 0.1),
+  scrub: onFigure("scrub", "scrubRadiusChangeMm", SCRUB_WARN_MM, SCRUB_WARN_MM + 0.1),
   // 3 % itself has no exact binary value ((1.03 − 1) × 100 = 3.0000000000000027): either side of it.
   speedometer: {
     source: /common practice, no source/,
@@ -74,21 +92,9 @@ const CASES: Record<Exclude<FindingKind, "load">, Case> = {
     found: () => of("regear", gearing(4, 4.2, 4.1)),
   },
   // Any reach further inboard is a note; the caution threshold has its own case below.
-  "inner-reach": {
-    source: /engine/,
-    none: () => of("inner-reach", changed({ innerClearanceChangeMm: 0 })),
-    found: () => of("inner-reach", changed({ innerClearanceChangeMm: -0.1 })),
-  },
-  diameter: {
-    source: /common practice, no source/,
-    none: () => of("diameter", changed({ diameterChangeMm: DIAMETER_CHANGE_WARN_MM })),
-    found: () => of("diameter", changed({ diameterChangeMm: DIAMETER_CHANGE_WARN_MM + 0.1 })),
-  },
-  alignment: {
-    source: /common practice, no source/,
-    none: () => of("alignment", changed({ diameterChangeMm: ALIGNMENT_DIAMETER_MM - 0.1 })),
-    found: () => of("alignment", changed({ diameterChangeMm: ALIGNMENT_DIAMETER_MM })),
-  },
+  "inner-reach": onFigure("inner-reach", "innerClearanceChangeMm", 0, -0.1, /engine/),
+  diameter: onFigure("diameter", "diameterChangeMm", DIAMETER_CHANGE_WARN_MM, DIAMETER_CHANGE_WARN_MM + 0.1),
+  alignment: onFigure("alignment", "diameterChangeMm", ALIGNMENT_DIAMETER_MM - 0.1, ALIGNMENT_DIAMETER_MM),
   spacer: {
     source: /common practice, no source/i,
     none: () => of("spacer", withPlanned({ spacerMm: 0 })),
@@ -96,29 +102,7 @@ const CASES: Record<Exclude<FindingKind, "load">, Case> = {
   },
   // The vehicle's margin (its default 1/2 in = 12.7 mm is common practice, no source): an upward
   // gap measured with the same setup is predicted unchanged; at the margin it is clear.
-  clearance: {
-    source: /margin you set/,
-    none: () =>
-      of("clearance", BASE, {
-        points: [
-          {
-            id: "p",
-            label: "Fender",
-            prediction: predictClearance({ direction: "upward", distanceMm: 12.7, measuredWith: SAME }, SAME, { marginMm: 12.7 }),
-          },
-        ],
-      }),
-    found: () =>
-      of("clearance", BASE, {
-        points: [
-          {
-            id: "p",
-            label: "Fender",
-            prediction: predictClearance({ direction: "upward", distanceMm: 12.6, measuredWith: SAME }, SAME, { marginMm: 12.7 }),
-          },
-        ],
-      }),
-  },
+  clearance: { source: /margin you set/, none: fenderAt(12.7), found: fenderAt(12.6) },
 };
 
 describe("assessChange: each kind at and just past its threshold", () => {

@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { computeComparison } from "@/lib/comparisons/compute";
 import type { DisplayPrefs } from "@/lib/comparisons/format";
 import { type ComparisonInput, DEFAULT_INPUT } from "@/lib/comparisons/model";
-import { SETUP_A, SETUP_B, SETUP_C } from "./testUtil";
+import { SETUP_A, SETUP_B, SETUP_C, garageLimits } from "./testUtil";
 import { boxesOverlap } from "@/lib/fitment/crossSectionLayout";
 import { stockPart } from "@/lib/fitment/crossSectionTestUtil";
 import { DESIGN_WIDTH_PX, type DrawnLimits, buildDrawing } from "./drawing";
@@ -19,15 +19,11 @@ const PREFS: DisplayPrefs[] = [
   { units: "imperial", lengths: "fraction" },
   { units: "metric", lengths: "decimal" },
 ];
-const GARAGE: DrawnLimits = {
-  innerMm: 187.5,
-  outerMm: 127.5,
-  parts: [
-    stockPart("Lower control arm, front bolt", "inboard", "ride-height", 30, 2, "tight"),
-    stockPart("Flare", "outboard", "full-stuff", 20, -38, "contact"),
-    stockPart("Inner fender liner", "upward", "full-stuff", 60, 17, "clear"),
-  ],
-};
+const GARAGE = garageLimits(
+  stockPart("Lower control arm, front bolt", "inboard", "ride-height", 30, 2, "tight"),
+  stockPart("Flare", "outboard", "full-stuff", 20, -38, "contact"),
+  stockPart("Inner fender liner", "upward", "full-stuff", 60, 17, "clear"),
+);
 
 const cases: [string, ComparisonInput, DrawnLimits | null][] = [];
 for (const [name, cur, pla] of [
