@@ -1,3 +1,4 @@
+import { SelectOptions } from "@/components/ui/SelectOptions";
 import type { CatalogKind } from "@/lib/platform/db/types";
 import { CATALOG_KIND_FILTERS } from "@/lib/shop/catalog/api";
 import { CATALOG_QUERY_LABELS } from "@/lib/shop/catalog/schema";
@@ -15,12 +16,7 @@ export function CatalogKindSelect({ value, onChange }: { value: "" | CatalogKind
         value={value}
         onChange={(e) => onChange(e.target.value as "" | CatalogKind)}
       >
-        <option value="">All</option>
-        {CATALOG_KIND_FILTERS.map((k) => (
-          <option key={k.kind} value={k.kind}>
-            {k.label}
-          </option>
-        ))}
+        <SelectOptions options={[{ value: "", label: "All" }, ...CATALOG_KIND_FILTERS.map((k) => ({ value: k.kind, label: k.label }))]} />
       </select>
     </label>
   );

@@ -8,6 +8,8 @@
  * Tapping a bolt ticks it; the tick-off list beside the diagram does the same from the keyboard
  * and for screen readers, so the drawing itself stays one image to assistive technology.
  */
+import type { SVGProps } from "react";
+
 const r2 = (v: number): number => Math.round(v * 100) / 100;
 
 const INK = "#181b21"; // basalt-900
@@ -16,6 +18,11 @@ const EMBER = "#bd460f"; // ember-600
 const DONE_FILL = "#dcf3e4"; // clear-100
 const DONE_INK = "#14502d"; // clear-800
 const DONE_LINE = "#1f7a44"; // clear-600
+
+/** A label centred on a point, across and (by its 0.35em drop) up and down: a bolt's number, its step. */
+function CentredText({ label, at, ...rest }: { label: "bolt" | "step"; at: { x: number; y: number } } & SVGProps<SVGTextElement>) {
+  return <text data-label={label} x={at.x} y={at.y} dy="0.35em" textAnchor="middle" {...rest} />;
+}
 
 export function RingDiagram({
   sequence,
@@ -102,32 +109,19 @@ export function RingDiagram({
               strokeWidth={isDone ? 2.5 : 1.5}
               className="print:fill-white print:stroke-basalt-900 print:stroke-[1.5]"
             />
-            <text
-              data-label="bolt"
-              x={p.x}
-              y={p.y}
-              dy="0.35em"
-              textAnchor="middle"
-              fontSize={boltFont}
-              fontWeight={800}
-              fill={ink}
-              className="print:fill-basalt-900"
-            >
+            <CentredText label="bolt" at={p} fontSize={boltFont} fontWeight={800} fill={ink} className="print:fill-basalt-900">
               {bolt}
-            </text>
-            <text
-              data-label="step"
-              x={l.x}
-              y={l.y}
-              dy="0.35em"
-              textAnchor="middle"
+            </CentredText>
+            <CentredText
+              label="step"
+              at={l}
               fontSize={stepFont}
               fontStyle="italic"
               fill={MUTED}
               transform={radial ? `rotate(${turn} ${l.x} ${l.y})` : undefined}
             >
               {`step ${s}`}
-            </text>
+            </CentredText>
           </g>
         );
       })}

@@ -5,6 +5,7 @@ import type { DrawnLimits } from "@/components/comparison/CrossSection";
 import { drawnParts } from "@/components/comparison/crossSection/garageParts";
 import { PredictionTable } from "@/components/garage/PredictionTable";
 import { Button } from "@/components/ui/Button";
+import { SelectOptions } from "@/components/ui/SelectOptions";
 import { type DisplayPrefs, formatLen } from "@/lib/comparisons/format";
 import type { Setup } from "@/lib/setup/model";
 import { setupQuery } from "@/lib/setup/url";
@@ -77,12 +78,7 @@ export default function GaragePanel({
             value={vehicleId ?? ""}
             onChange={(e) => onPick(e.target.value || null)}
           >
-            <option value="">None picked</option>
-            {vehicles.map((v) => (
-              <option key={v.id} value={v.id}>
-                {v.name}
-              </option>
-            ))}
+            <SelectOptions options={[{ value: "", label: "None picked" }, ...vehicles.map((v) => ({ value: v.id, label: v.name }))]} />
           </select>
         </div>
       </div>

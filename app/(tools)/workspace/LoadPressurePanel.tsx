@@ -11,6 +11,7 @@ import { LazyLoadPressureChart } from "./LazyLoadPressureChart";
 import { LoadPressureFigures } from "@/components/comparison/LoadPressureFigures";
 import { measureFields } from "@/components/comparison/measureFields";
 import { useMeasureEntries } from "./useMeasureEntries";
+import { WorkspacePanel } from "./WorkspacePanel";
 
 const QUANTITIES = {
   placardFront: "pressure",
@@ -49,6 +50,11 @@ const HINT: Record<MeasureKey, string> = {
   plannedMaxLoad: "Only if the size has no load index: “max load … at …” on the sidewall.",
   plannedMaxPressure: "Only if the size has no load range: the pressure of “max load … at …”.",
 };
+
+const INTRO =
+  "A bigger or different tire carries the same load at another pressure. Enter the door placard and the axle loads; the planned " +
+  "tire's pressure follows. The vehicle's placard, the tire maker's load tables and the wheel maker's limits take precedence over " +
+  "any figure here; never exceed the pressure on the sidewall or the wheel.";
 
 /**
  * Load and pressure for the planned tire: the vehicle's placard and axle loads in, the pressure to
@@ -97,20 +103,7 @@ export function LoadPressurePanel({ currentTire, plannedTire, prefs }: { current
   const fieldErrors = (Object.keys(errors) as LoadField[]).length;
 
   return (
-    <section
-      aria-labelledby="load-title"
-      className="flex flex-col gap-4 rounded-card bg-white p-4 shadow-card ring-1 ring-basalt-100 sm:p-5"
-    >
-      <div>
-        <h2 id="load-title" className="text-lg font-semibold">
-          Load and pressure
-        </h2>
-        <p className="text-sm text-basalt-700">
-          A bigger or different tire carries the same load at another pressure. Enter the door placard and the axle loads; the planned
-          tire&apos;s pressure follows. The vehicle&apos;s placard, the tire maker&apos;s load tables and the wheel maker&apos;s limits take
-          precedence over any figure here; never exceed the pressure on the sidewall or the wheel.
-        </p>
-      </div>
+    <WorkspacePanel titleId="load-title" title="Load and pressure" intro={INTRO}>
       <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
         <TextField
           label={labels.placardTire}
@@ -155,6 +148,6 @@ export function LoadPressurePanel({ currentTire, plannedTire, prefs }: { current
         )}
       </div>
       <AiredDownGuidance />
-    </section>
+    </WorkspacePanel>
   );
 }

@@ -7,6 +7,7 @@ import { type DisplayPrefs, formatNumber } from "@/lib/comparisons/format";
 import { measureUnit, readMeasure } from "@/lib/comparisons/measureEntry";
 import { TRAIL_SPEC, type TrailField, type TrailLabels, planTrail } from "@/lib/comparisons/trailPlan";
 import { useMeasureEntries } from "./useMeasureEntries";
+import { WorkspacePanel } from "./WorkspacePanel";
 
 const FIELDS: TrailField[] = ["frontHeight", "frontAhead", "rearHeight", "rearBehind", "wheelbase", "midHeight", "lift"];
 const QUANTITIES = Object.fromEntries(FIELDS.map((k) => [k, "length"])) as Record<TrailField, "length">;
@@ -26,6 +27,11 @@ const HINT: Partial<Record<TrailField, string>> = {
   midHeight: "The lowest point of the underbody halfway between the axles (frame, skid plate), from the ground.",
   lift: "Raises every body point measured here; leave empty for none.",
 };
+
+const INTRO =
+  "Measure on level ground with the current tires, at normal load. The planned figures raise every point by the tire's radius " +
+  "change and the lift. A lift changes steering and driveline angles too: follow the lift maker's instructions and have the " +
+  "alignment checked.";
 
 /** Labels for a display choice; messages name each field by this same text. */
 export function trailLabels(prefs: DisplayPrefs): TrailLabels {
@@ -73,20 +79,7 @@ export function TrailAnglesPanel({ result, prefs }: { result: ComparisonResult; 
   const ratio = result.engine.brakeTorqueRatio;
   const field = measureFields({ prefix: "trail", labels, hints: HINT, entries, set, errors, note });
   return (
-    <section
-      aria-labelledby="trail-title"
-      className="flex flex-col gap-4 rounded-card bg-white p-4 shadow-card ring-1 ring-basalt-100 sm:p-5"
-    >
-      <div>
-        <h2 id="trail-title" className="text-lg font-semibold">
-          Trail angles
-        </h2>
-        <p className="text-sm text-basalt-700">
-          Measure on level ground with the current tires, at normal load. The planned figures raise every point by the tire&apos;s radius
-          change and the lift. A lift changes steering and driveline angles too: follow the lift maker&apos;s instructions and have the
-          alignment checked.
-        </p>
-      </div>
+    <WorkspacePanel titleId="trail-title" title="Trail angles" intro={INTRO}>
       <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">{FIELDS.map(field)}</div>
       <div aria-live="polite">
         {angles.length > 0 ? (
@@ -100,6 +93,6 @@ export function TrailAnglesPanel({ result, prefs }: { result: ComparisonResult; 
         {formatNumber(ratio, 3)}, planned ÷ current rolling radius), before any added wheel and tire weight. Stopping distances grow;
         consider brakes rated for the larger tire and follow the brake maker&apos;s guidance.
       </p>
-    </section>
+    </WorkspacePanel>
   );
 }

@@ -1,9 +1,7 @@
 // @vitest-environment jsdom
-import { cleanup, render, screen, waitFor } from "@testing-library/react";
-import userEvent from "@testing-library/user-event";
-import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
-import { DEFAULT_INPUT } from "@/lib/comparisons/model";
-import { Workspace } from "./Workspace";
+import { screen, waitFor } from "@testing-library/react";
+import { describe, expect, it, vi } from "vitest";
+import { freshWorkspaceEachTest, headline, renderDefault } from "./workspaceTestUtil";
 
 // The reading code (./reading.ts) arrives after the page; here it arrives when the test opens the gate.
 // One test per file: once arrived it stays for the page (useReading.ts), as in a browser tab.
@@ -19,18 +17,11 @@ vi.mock("./reading", async (importOriginal) => {
 });
 vi.mock("@/components/comparison/LazyComparisonCharts", () => ({ LazyComparisonCharts: () => <div data-testid="charts-stub" /> }));
 
-const headline = (id: string) => screen.getByTestId(id).querySelector("dd")?.textContent;
-
-beforeEach(() => {
-  window.localStorage.clear();
-  window.history.replaceState(null, "", "/workspace");
-});
-afterEach(cleanup);
+freshWorkspaceEachTest();
 
 describe("entries made before the reading code arrives", () => {
   it("keeps the text and the units it was typed in, then reads it and converts it when the code lands", async () => {
-    const user = userEvent.setup();
-    render(<Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} />);
+    const user = renderDefault();
     await user.click(screen.getByText(/^Vehicle details/));
     const ratioBefore = headline("change-ratio");
     const axle = screen.getByLabelText(/^Axle ratio/);

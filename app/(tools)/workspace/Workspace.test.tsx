@@ -1,12 +1,13 @@
 // @vitest-environment jsdom
-import { cleanup, render, screen, within } from "@testing-library/react";
+import { render, screen, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
-import { afterEach, beforeAll, beforeEach, describe, expect, it, vi } from "vitest";
+import { beforeAll, describe, expect, it, vi } from "vitest";
 import { DEFAULT_INPUT } from "@/lib/comparisons/schema";
 import { PREFS_STORAGE_KEY } from "@/lib/comparisons/format";
 import { decodeComparison } from "@/lib/comparisons/urlRead";
 import { loadReading } from "./useReading";
 import { Workspace } from "./Workspace";
+import { freshWorkspaceEachTest, headline, renderDefault } from "./workspaceTestUtil";
 
 // The charts load lazily through clientLazy; they are not what these tests are about.
 // Typing through user-event in jsdom is slow on a shared machine; the default 5 s is too tight.
@@ -14,24 +15,11 @@ vi.setConfig({ testTimeout: 20_000 });
 vi.mock("@/components/comparison/LazyComparisonCharts", () => ({ LazyComparisonCharts: () => <div data-testid="charts-stub" /> }));
 
 const planned = () => within(screen.getByRole("region", { name: "Planned setup" }));
-const headline = (id: string) => screen.getByTestId(id).querySelector("dd")?.textContent;
-
-/** The workspace on the default comparison, with a user to drive it. */
-const renderDefault = () => {
-  const user = userEvent.setup();
-  render(<Workspace initialInput={DEFAULT_INPUT} initialProblems={[]} />);
-  return user;
-};
 
 // These tests are about reading entries, not about its code arriving (Workspace.reading.test.tsx is):
 // fetched once before them, as a page has it moments after load, the first test no longer races it.
 beforeAll(() => loadReading());
-
-beforeEach(() => {
-  window.localStorage.clear();
-  window.history.replaceState(null, "", "/workspace");
-});
-afterEach(cleanup);
+freshWorkspaceEachTest();
 
 describe("workspace inputs", () => {
   it("takes backspacing with fractions and shows the offset it stands for (W/2 + offset, common practice, no source)", async () => {

@@ -7,6 +7,7 @@ import { useForm, useWatch } from "react-hook-form";
 import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
+import { FieldFrame } from "@/components/ui/FieldFrame";
 import { SelectField } from "@/components/ui/SelectField";
 import { TextField } from "@/components/ui/TextField";
 import { fieldBinder } from "@/components/ui/fieldProps";
@@ -149,21 +150,12 @@ export function VehicleForm({ vehicle }: { vehicle: Vehicle | null }) {
           hint="The gap you want kept at every measured point; 1/2 in if left empty (common practice, no source). Give the unit, e.g. 3/4 in or 15 mm"
           {...field("clearanceMarginMm")}
         />
-        <div className="flex flex-col gap-1 sm:col-span-2">
-          <label htmlFor="f-notes" className="text-sm font-medium text-basalt-800">
-            Notes
-          </label>
-          <textarea
-            id="f-notes"
-            rows={3}
-            className="rounded-lg border border-basalt-300 bg-white px-3 py-2"
-            {...register("notes")}
-            aria-describedby="f-notes-error"
-          />
-          <p id="f-notes-error" aria-live="polite" className="text-sm text-contact-600">
-            {e.notes?.message}
-          </p>
-        </div>
+        <FieldFrame label="Notes" name="notes" error={e.notes?.message} className="sm:col-span-2">
+          {/* The frame gives the box its label, ids and message; the box keeps the plainer look it has always had. */}
+          {(control) => (
+            <textarea {...control} rows={3} className="rounded-lg border border-basalt-300 bg-white px-3 py-2" {...register("notes")} />
+          )}
+        </FieldFrame>
       </Card>
       <div className="grid gap-4 lg:grid-cols-2">
         <SetupFields form={form} name="stockSetup" legend="Stock setup (as it left the factory)" />
