@@ -37,6 +37,15 @@ const FIELDS = [
   "notes",
 ] as const;
 
+/** The figures a vehicle may go without: each typed as a plain number (lift in inches, fractions too). */
+const OPTIONAL_FIGURES = [
+  { name: "hubBoreMm", label: "Hub bore (mm)", hint: "Optional, e.g. 106.1" },
+  { name: "liftHeightMm", label: "Lift height (in)", hint: "Optional, in inches; fractions work, e.g. 2-1/2, 2½ or 2.5" },
+  { name: "kingpinInclinationDeg", label: "Kingpin inclination (°)", hint: "Optional, from the maker's data, e.g. 8" },
+  { name: "axleRatio", label: "Axle ratio", hint: "Optional, e.g. 3.73" },
+  { name: "transmissionRatio", label: "Top-gear ratio", hint: "Optional, e.g. 0.72 (overdrive) or 1.00" },
+] as const satisfies readonly { name: (typeof FIELDS)[number]; label: string; hint: string }[];
+
 function toForm(v: Vehicle | null): GarageVehicleForm {
   if (!v) {
     return {
@@ -140,11 +149,9 @@ export function VehicleForm({ vehicle }: { vehicle: Vehicle | null }) {
           hint={boltNote ?? "e.g. 6x5.5 or 6x139.7 — inch and mm forms of one pattern are the same"}
           {...field("boltPattern")}
         />
-        <TextField label="Hub bore (mm)" hint="Optional, e.g. 106.1" {...field("hubBoreMm")} />
-        <TextField label="Lift height (in)" hint="Optional, in inches; fractions work, e.g. 2-1/2, 2½ or 2.5" {...field("liftHeightMm")} />
-        <TextField label="Kingpin inclination (°)" hint="Optional, from the maker's data, e.g. 8" {...field("kingpinInclinationDeg")} />
-        <TextField label="Axle ratio" hint="Optional, e.g. 3.73" {...field("axleRatio")} />
-        <TextField label="Top-gear ratio" hint="Optional, e.g. 0.72 (overdrive) or 1.00" {...field("transmissionRatio")} />
+        {OPTIONAL_FIGURES.map(({ name, label, hint }) => (
+          <TextField key={name} label={label} hint={hint} {...field(name)} />
+        ))}
         <TextField
           label="Clearance margin"
           hint="The gap you want kept at every measured point; 1/2 in if left empty (common practice, no source). Give the unit, e.g. 3/4 in or 15 mm"
