@@ -1,13 +1,13 @@
 import type { QuoteDocument } from "@/lib/shop/quotes/document";
-import { formatBp, formatUsd } from "@/lib/shop/quotes/money";
+import { formatUsd } from "@/lib/shop/quotes/money";
 import { formatQuantity } from "@/lib/shop/quotes/quantity";
+import { QuoteTotalsList } from "./QuoteTotalsList";
 
 /**
  * A quote document's lines and totals for the customer: a table from 640 px up, and one card per
  * line on a phone (the page never scrolls sideways).
  */
 export function QuoteDocumentLines({ document: d }: { document: QuoteDocument }) {
-  const t = d.totals;
   return (
     <>
       <table className="mt-3 hidden w-full text-left text-sm sm:table">
@@ -47,28 +47,11 @@ export function QuoteDocumentLines({ document: d }: { document: QuoteDocument })
           </li>
         ))}
       </ul>
-      <dl className="ml-auto mt-4 grid max-w-xs grid-cols-[1fr_auto] gap-x-4 gap-y-1 text-sm tabular-nums">
-        <dt>Subtotal</dt>
-        <dd className="text-right">{formatUsd(t.subtotalCents)}</dd>
-        {t.discountCents > 0 && (
-          <>
-            <dt>Discount</dt>
-            <dd className="text-right">−{formatUsd(t.discountCents)}</dd>
-          </>
-        )}
-        <dt>Tax ({formatBp(t.taxRateBp)} %)</dt>
-        <dd className="text-right">{formatUsd(t.taxCents)}</dd>
-        <dt className="font-semibold">Total</dt>
-        <dd className="text-right font-semibold">{formatUsd(t.totalCents)}</dd>
-        <dt>Deposit ({t.depositPct} %)</dt>
-        <dd className="text-right" data-testid="public-deposit">
-          {formatUsd(t.depositCents)}
-        </dd>
-        <dt>Balance due after the deposit</dt>
-        <dd className="text-right" data-testid="public-balance">
-          {formatUsd(t.balanceCents)}
-        </dd>
-      </dl>
+      <QuoteTotalsList
+        totals={d.totals}
+        className="ml-auto mt-4 max-w-xs gap-x-4"
+        testIds={{ deposit: "public-deposit", balance: "public-balance" }}
+      />
     </>
   );
 }

@@ -1,11 +1,11 @@
 // @vitest-environment jsdom
-import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
-import { cleanup, render, screen, waitFor } from "@testing-library/react";
+import { cleanup, screen, waitFor } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { answerFetch } from "@/tests/support/fetchAnswer";
 import { router } from "@/tests/support/navigation";
 import { EMPTY_CATALOG_ITEM } from "@/lib/shop/catalog/itemSchema";
+import { renderWithQuery } from "@/app/(shop)/shop/shopTestUtil";
 import { CatalogItemForm } from "./CatalogItemForm";
 
 vi.mock("next/navigation", () => import("@/tests/support/navigation"));
@@ -17,12 +17,7 @@ afterEach(() => {
 });
 
 const ITEM = "c1000000-0000-4000-8000-0000000000aa";
-const renderForm = (props: Parameters<typeof CatalogItemForm>[0]) =>
-  render(
-    <QueryClientProvider client={new QueryClient()}>
-      <CatalogItemForm {...props} />
-    </QueryClientProvider>,
-  );
+const renderForm = (props: Parameters<typeof CatalogItemForm>[0]) => renderWithQuery(<CatalogItemForm {...props} />);
 
 describe("CatalogItemForm", () => {
   it("checks a new tire with the CSV's messages before sending, each tied to its field", async () => {

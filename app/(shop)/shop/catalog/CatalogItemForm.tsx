@@ -27,6 +27,9 @@ const L = Object.fromEntries(Object.entries(CATALOG_ITEM_FIELDS).map(([k, f]) =>
   string
 >;
 const opts = (o: Record<string, string>) => Object.entries(o).map(([value, label]) => ({ value, label }));
+/** Optional: "—" leaves the backspacing's reference unsaid. */
+const BACKSPACING_REFERENCES = [{ value: "", label: "—" }, ...opts({ flange: "Flange", "bead-seat": "Bead seat" })];
+const NO_YES = opts({ no: "No", yes: "Yes" });
 
 /**
  * The owner's single-item editor: one tire, wheel or service, checked by the catalog CSV's own
@@ -89,25 +92,10 @@ export function CatalogItemForm({ itemId, initial }: { itemId?: string; initial:
           <TextField label={L.wheelWidthIn} inputMode="decimal" {...field("wheelWidthIn")} />
           <TextField label={L.wheelOffsetMm} inputMode="decimal" {...field("wheelOffsetMm")} hint="Give the offset or the backspacing." />
           <TextField label={L.wheelBackspacingIn} inputMode="decimal" {...field("wheelBackspacingIn")} />
-          <SelectField
-            label={L.wheelBackspacingReference}
-            options={[
-              { value: "", label: "—" },
-              { value: "flange", label: "Flange" },
-              { value: "bead-seat", label: "Bead seat" },
-            ]}
-            {...field("wheelBackspacingReference")}
-          />
+          <SelectField label={L.wheelBackspacingReference} options={BACKSPACING_REFERENCES} {...field("wheelBackspacingReference")} />
           <TextField label={L.boltPattern} {...field("boltPattern")} hint="e.g. 6x5.5 or 8x165.1" />
           <TextField label={L.centerBoreMm} inputMode="decimal" {...field("centerBoreMm")} />
-          <SelectField
-            label={L.beadlock}
-            options={[
-              { value: "no", label: "No" },
-              { value: "yes", label: "Yes" },
-            ]}
-            {...field("beadlock")}
-          />
+          <SelectField label={L.beadlock} options={NO_YES} {...field("beadlock")} />
         </div>
       )}
       {kind === "service" && (

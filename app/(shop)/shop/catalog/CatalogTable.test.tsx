@@ -1,9 +1,9 @@
 // @vitest-environment jsdom
-import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
-import { cleanup, render, screen, waitFor } from "@testing-library/react";
+import { cleanup, screen, waitFor } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { answerFetch } from "@/tests/support/fetchAnswer";
+import { renderWithQuery } from "@/app/(shop)/shop/shopTestUtil";
 import { CatalogTable } from "./CatalogTable";
 
 afterEach(() => {
@@ -11,12 +11,7 @@ afterEach(() => {
   vi.unstubAllGlobals();
 });
 
-const renderTable = (canEdit: boolean) =>
-  render(
-    <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
-      <CatalogTable canEdit={canEdit} />
-    </QueryClientProvider>,
-  );
+const renderTable = (canEdit: boolean) => renderWithQuery(<CatalogTable canEdit={canEdit} />, { retry: false });
 
 describe("CatalogTable's archived items", () => {
   it("lets the owner list the archived items only, from page 1, to find one and bring it back", async () => {

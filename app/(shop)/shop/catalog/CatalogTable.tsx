@@ -8,6 +8,7 @@ import { Alert } from "@/components/ui/Alert";
 import { Badge } from "@/components/ui/Badge";
 import { Card } from "@/components/ui/Card";
 import { Pagination } from "@/components/ui/Pagination";
+import { SearchField } from "@/components/ui/SearchField";
 import { Table, type TableColumn } from "@/components/ui/Table";
 import { type TableSort, nextSort } from "@/components/ui/tableSort";
 import type { CatalogItem, CatalogPage } from "@/lib/shop/catalog/api";
@@ -67,16 +68,22 @@ function columns(canEdit: boolean): TableColumn<CatalogItem>[] {
   ];
 }
 
+/** What the list is narrowed to: a kind, the archived items only, a search. */
+type Filters = { kind: "" | CatalogKind; archived: boolean; search: string };
+
 /** The catalog table: paging, sorting and filtering all happen on the server. */
 export function CatalogTable({ canEdit = false }: { canEdit?: boolean }) {
   // The server always orders the rows, so the header flips between the two directions.
   const [sort, setSort] = useState<NonNullable<TableSort>>({ id: "sku", desc: false });
   const [pagination, setPagination] = useState({ pageIndex: 0, pageSize: 25 });
-  const [kind, setKind] = useState<"" | CatalogKind>("");
-  const [archived, setArchived] = useState(false);
+  const [filters, setFilters] = useState<Filters>({ kind: "", archived: false, search: "" });
+  const { kind, archived, search } = filters;
   // A new filter, search or order starts again at its first page.
   const firstPage = () => setPagination((p) => ({ ...p, pageIndex: 0 }));
-  const [search, setSearch] = useState("");
+  const refilter = (change: Partial<Filters>) => {
+    setFilters((f) => ({ ...f, ...change }));
+    firstPage();
+  };
   const [q, setQ] = useState("");
   useEffect(() => {
     const t = setTimeout(() => setQ(search), 250);
@@ -105,37 +112,22 @@ export function CatalogTable({ canEdit = false }: { canEdit?: boolean }) {
     // positioned scroller it escaped the scroll and made the whole page 959 px wide on a phone.
     <Card className="relative overflow-x-auto" tabIndex={0} role="region" aria-label="Catalog items">
       <div className="mb-4 flex flex-wrap items-end gap-3">
-        <label className="flex flex-col gap-1 text-sm font-medium">
-          {CATALOG_QUERY_LABELS.q}
-          <input
-            type="search"
-            maxLength={100}
-            placeholder="e.g. 37x12.50, 6x139.7 or a SKU"
-            className="min-h-10 w-72 max-w-full rounded-lg border border-basalt-300 px-3 placeholder:text-basalt-500"
-            value={search}
-            onChange={(e) => {
-              setSearch(e.target.value);
-              firstPage();
-            }}
-          />
-        </label>
-        <CatalogKindSelect
-          value={kind}
-          onChange={(k) => {
-            setKind(k);
-            firstPage();
-          }}
+        <SearchField
+          label={CATALOG_QUERY_LABELS.q}
+          maxLength={100}
+          placeholder="e.g. 37x12.50, 6x139.7 or a SKU"
+          inputClassName="min-h-10 w-72 max-w-full placeholder:text-basalt-500"
+          value={search}
+          onValue={(text) => refilter({ search: text })}
         />
+        <CatalogKindSelect value={kind} onChange={(k) => refilter({ kind: k })} />
         {canEdit && (
           <label className="flex min-h-10 items-center gap-2 text-sm font-medium">
             <input
               type="checkbox"
               className="size-4 accent-ember-600"
               checked={archived}
-              onChange={(e) => {
-                setArchived(e.target.checked);
-                firstPage();
-              }}
+              onChange={(e) => refilter({ archived: e.target.checked })}
             />
             {CATALOG_QUERY_LABELS.archived}
           </label>

@@ -1,8 +1,8 @@
 // @vitest-environment jsdom
-import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
-import { cleanup, render, screen } from "@testing-library/react";
+import { cleanup, screen } from "@testing-library/react";
 import { afterEach, describe, expect, it } from "vitest";
 import type { StaffData } from "@/lib/shop/api";
+import { renderWithQuery } from "@/app/(shop)/shop/shopTestUtil";
 import { StaffPanel } from "./StaffPanel";
 
 afterEach(cleanup);
@@ -17,11 +17,7 @@ const data: StaffData = {
 
 describe("the staff panel", () => {
   it("dates an open invitation's expiry on the shop's clock, not the device's (vitest runs in UTC)", () => {
-    render(
-      <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false, staleTime: Infinity } } })}>
-        <StaffPanel initial={data} selfId={OWNER} />
-      </QueryClientProvider>,
-    );
+    renderWithQuery(<StaffPanel initial={data} selfId={OWNER} />, { retry: false, staleTime: Infinity });
     const invite = screen.getAllByRole("listitem").find((li) => li.textContent?.includes("new-hire@example.test"))!;
     expect(invite.textContent).toContain("new-hire@example.test · expires Thu, Dec 3, 2026, 8:30 PM MST");
   });

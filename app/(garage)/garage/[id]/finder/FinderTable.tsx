@@ -3,6 +3,7 @@ import Link from "next/link";
 import { useState } from "react";
 import { Card } from "@/components/ui/Card";
 import { Pagination } from "@/components/ui/Pagination";
+import { SearchField } from "@/components/ui/SearchField";
 import { Table, type TableColumn } from "@/components/ui/Table";
 import { pageOf } from "@/components/ui/tableSort";
 import { useSortedRows } from "@/components/ui/useSortedRows";
@@ -117,19 +118,17 @@ export function FinderTable({
   const first = shown.pageIndex * FINDER_PAGE_SIZE;
   return (
     <Card className="flex flex-col gap-3">
-      <label className="flex max-w-sm flex-col gap-1 text-sm font-medium">
-        Filter by tire size or wheel
-        <input
-          type="search"
-          className="min-h-10 rounded-lg border border-basalt-300 px-3"
-          value={filter}
-          onChange={(e) => {
-            setFilter(e.target.value);
-            setPage(0);
-          }}
-          placeholder="e.g. 35x or 17x9"
-        />
-      </label>
+      <SearchField
+        label="Filter by tire size or wheel"
+        className="max-w-sm"
+        inputClassName="min-h-10"
+        placeholder="e.g. 35x or 17x9"
+        value={filter}
+        onValue={(v) => {
+          setFilter(v);
+          setPage(0);
+        }}
+      />
       {/* Only the table scrolls sideways (its own focusable region), so the filter and the pages stay in view. */}
       <div className="relative overflow-x-auto" tabIndex={0} role="region" aria-label="Fitments found (scrolls sideways)">
         <Table

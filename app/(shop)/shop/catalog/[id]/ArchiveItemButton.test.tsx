@@ -1,10 +1,10 @@
 // @vitest-environment jsdom
-import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
-import { cleanup, render, screen, waitFor } from "@testing-library/react";
+import { cleanup, screen, waitFor } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { answerFetch } from "@/tests/support/fetchAnswer";
 import { router } from "@/tests/support/navigation";
+import { renderWithQuery } from "@/app/(shop)/shop/shopTestUtil";
 import { ArchiveItemButton } from "./ArchiveItemButton";
 
 vi.mock("next/navigation", () => import("@/tests/support/navigation"));
@@ -16,12 +16,7 @@ afterEach(() => {
 });
 
 const ITEM = "c1000000-0000-4000-8000-0000000000bb";
-const renderButton = (archived: boolean) =>
-  render(
-    <QueryClientProvider client={new QueryClient()}>
-      <ArchiveItemButton itemId={ITEM} archived={archived} />
-    </QueryClientProvider>,
-  );
+const renderButton = (archived: boolean) => renderWithQuery(<ArchiveItemButton itemId={ITEM} archived={archived} />);
 
 describe("ArchiveItemButton", () => {
   it("archives a listed item and refreshes the page", async () => {

@@ -1,18 +1,10 @@
 // @vitest-environment jsdom
-import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
-import { cleanup, fireEvent, render, screen } from "@testing-library/react";
-import type { ReactNode } from "react";
+import { cleanup, fireEvent, screen } from "@testing-library/react";
 import { afterEach, describe, expect, it, vi } from "vitest";
+import { renderWithQuery } from "@/app/(shop)/shop/shopTestUtil";
 import { ImportFlow } from "./ImportFlow";
 
-vi.mock("next/link", () => ({
-  default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => (
-    <a href={href} {...rest}>
-      {children}
-    </a>
-  ),
-}));
-
+vi.mock("next/link", () => import("@/tests/support/nextLink"));
 afterEach(() => {
   cleanup();
   vi.unstubAllGlobals();
@@ -36,11 +28,7 @@ function answerUploadWith(body: unknown) {
 }
 
 async function pickFile() {
-  render(
-    <QueryClientProvider client={new QueryClient()}>
-      <ImportFlow />
-    </QueryClientProvider>,
-  );
+  renderWithQuery(<ImportFlow />);
   fireEvent.change(screen.getByLabelText("Catalog CSV file"), {
     target: { files: [new File(["x"], "catalog.csv", { type: "text/csv" })] },
   });

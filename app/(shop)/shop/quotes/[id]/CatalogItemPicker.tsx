@@ -5,6 +5,7 @@ import { CatalogKindSelect } from "@/components/catalog/CatalogKindSelect";
 import { StockLevel } from "@/components/catalog/StockLevel";
 import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
+import { SearchField } from "@/components/ui/SearchField";
 import { api } from "@/lib/platform/client/api";
 import { queryKeys } from "@/lib/platform/query/keys";
 import type { CatalogItem } from "@/lib/shop/catalog/api";
@@ -46,16 +47,14 @@ export function CatalogItemPicker({
           setAsked({ q: text.trim(), kind });
         }}
       >
-        <label className="flex min-w-48 flex-1 flex-col gap-1 text-sm font-medium">
-          Add from the catalog
-          <input
-            type="search"
-            className="rounded-lg border border-basalt-300 px-3 py-2"
-            placeholder="SKU, description, size or bolt pattern"
-            value={text}
-            onChange={(e) => setText(e.target.value)}
-          />
-        </label>
+        <SearchField
+          label="Add from the catalog"
+          className="min-w-48 flex-1"
+          inputClassName="py-2"
+          placeholder="SKU, description, size or bolt pattern"
+          value={text}
+          onValue={setText}
+        />
         <CatalogKindSelect value={kind} onChange={setKind} />
         <Button type="submit" variant="secondary" pending={found.isFetching}>
           Find

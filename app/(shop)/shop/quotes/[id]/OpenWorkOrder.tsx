@@ -1,7 +1,7 @@
 "use client";
+import { useMutation } from "@tanstack/react-query";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
-import { useState } from "react";
 import { Alert } from "@/components/ui/Alert";
 import { Button, buttonClass } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
@@ -10,19 +10,12 @@ import { api } from "@/lib/platform/client/api";
 /** The booked quote's way into the bay: its work order, made on first open. */
 export function OpenWorkOrder({ quoteId, workOrderId }: { quoteId: string; workOrderId: string | null }) {
   const router = useRouter();
-  const [pending, setPending] = useState(false);
-  const [error, setError] = useState<string | null>(null);
-  const open = async () => {
-    setPending(true);
-    setError(null);
-    try {
-      const r = await api<{ id: string }>("/api/shop/work-orders", { body: { quoteId } });
-      router.push(`/shop/work-orders/${r.id}`);
-    } catch (e) {
-      setError((e as Error).message);
-      setPending(false);
-    }
-  };
+  const open = useMutation({
+    mutationFn: () => api<{ id: string }>("/api/shop/work-orders", { body: { quoteId } }),
+    onSuccess: (r) => router.push(`/shop/work-orders/${r.id}`),
+  });
+  // Made, the button stays pending while the page moves to the work order.
+  const pending = open.isPending || open.isSuccess;
   return (
     <Card className="mt-5 flex flex-col gap-2" role="region" aria-label="Work order">
       <h2 className="text-lg font-semibold">Work order</h2>
@@ -32,11 +25,11 @@ export function OpenWorkOrder({ quoteId, workOrderId }: { quoteId: string; workO
           Open the work order
         </Link>
       ) : (
-        <Button type="button" variant="secondary" className="self-start" pending={pending} onClick={() => void open()}>
+        <Button type="button" variant="secondary" className="self-start" pending={pending} onClick={() => open.mutate()}>
           Open the work order
         </Button>
       )}
-      <div aria-live="assertive">{error && <Alert tone="error">{error}</Alert>}</div>
+      <div aria-live="assertive">{open.error && <Alert tone="error">{open.error.message}</Alert>}</div>
     </Card>
   );
 }

@@ -1,20 +1,13 @@
 // @vitest-environment jsdom
-import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
-import { cleanup, render, screen, waitFor, within } from "@testing-library/react";
+import { cleanup, screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
-import type { ReactNode } from "react";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { summarize } from "@/lib/shop/quotes/fitment";
+import { renderWithQuery } from "@/app/(shop)/shop/shopTestUtil";
 import { QuoteEditor } from "./QuoteEditor";
 import type { QuoteDetail as Detail } from "@/lib/shop/quotes/api";
 
-vi.mock("next/link", () => ({
-  default: ({ href, children, ...rest }: { href: string; children: ReactNode }) => (
-    <a href={href} {...rest}>
-      {children}
-    </a>
-  ),
-}));
+vi.mock("next/link", () => import("@/tests/support/nextLink"));
 afterEach(() => {
   cleanup();
   vi.unstubAllGlobals();
@@ -102,12 +95,7 @@ function server(answers: (c: Call) => { status: number; body: unknown }) {
   );
   return calls;
 }
-const renderEditor = (d = detail()) =>
-  render(
-    <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
-      <QuoteEditor initial={d} labourRateCents={12500} />
-    </QueryClientProvider>,
-  );
+const renderEditor = (d = detail()) => renderWithQuery(<QuoteEditor initial={d} labourRateCents={12500} />, { retry: false });
 
 describe("the quote editor's unsaved changes", () => {
   it("says so while lines differ from the saved ones, and warns before leaving the page", async () => {

@@ -12,10 +12,9 @@ import type { Customer } from "@/lib/shop/customers/api";
 import { mmToIn } from "@/lib/fitment";
 import { describeFieldErrors } from "@/lib/shop/quotes/fieldLabels";
 import { formatUsd } from "@/lib/shop/quotes/money";
-import type { CounterVehicle } from "@/lib/shop/customers/schema";
 import { CustomerStep } from "./CustomerStep";
 import { VehicleStep } from "./VehicleStep";
-import { vehicleRequest } from "./vehicleRequest";
+import { useVehicleChoice } from "./useVehicleChoice";
 
 const signed = (mm: number, digits = 0) => `${mm > 0 ? "+" : mm < 0 ? "−" : "±"}${Math.abs(mm).toFixed(digits)}`;
 const mmIn = (mm: number) => `${signed(mm)} mm (${signed(mmToIn(mm), 1)} in)`;
@@ -23,10 +22,7 @@ const mmIn = (mm: number) => `${signed(mm)} mm (${signed(mmToIn(mm), 1)} in)`;
 export function QuoteBuilder() {
   const router = useRouter();
   const [customer, setCustomer] = useState<Customer | null>(null);
-  const [savedVehicle, setSavedVehicle] = useState<string | null>(null);
-  const [savedEdited, setSavedEdited] = useState(false);
-  const [vehicle, setVehicle] = useState<CounterVehicle | null>(null);
-  const [saveVehicle, setSaveVehicle] = useState(true);
+  const choice = useVehicleChoice();
   const [candidates, setCandidates] = useState<Candidates | null>(null);
   const [pick, setPick] = useState<string | null>(null);
   const [quantity, setQuantity] = useState<4 | 5>(4);
@@ -38,7 +34,7 @@ export function QuoteBuilder() {
       return api<{ id: string }>("/api/shop/quotes", {
         body: {
           customerId: customer!.id,
-          ...vehicleRequest({ savedVehicle, edited: savedEdited, vehicle, saveVehicle }),
+          ...choice.request(),
           tireItemId: p!.tireId,
           wheelItemId: p!.wheelId,
           quantity,
@@ -57,21 +53,16 @@ export function QuoteBuilder() {
         customer={customer}
         onPick={(c) => {
           setCustomer(c);
-          setSavedVehicle(null);
+          choice.forgetSaved();
           setCandidates(null);
         }}
       />
       {customer && (
         <VehicleStep
           customerId={customer.id}
-          savedVehicle={savedVehicle}
-          onSaved={setSavedVehicle}
-          edited={savedEdited}
-          onEdited={setSavedEdited}
-          saveVehicle={saveVehicle}
-          onSaveVehicle={setSaveVehicle}
+          {...choice.step}
           onCandidates={(v, c) => {
-            setVehicle(v);
+            choice.setVehicle(v);
             setCandidates(c);
             setPick(null);
           }}

@@ -1,14 +1,12 @@
 // @vitest-environment jsdom
-import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
-import { cleanup, render, screen, waitFor } from "@testing-library/react";
+import { cleanup, screen, waitFor } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
-import { useState } from "react";
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
 import { lbToKg, psiToKpa } from "@/lib/fitment";
 import type { CustomerVehicle } from "@/lib/shop/customers/api";
-import type { CounterVehicle } from "@/lib/shop/customers/schema";
+import { renderWithQuery } from "@/app/(shop)/shop/shopTestUtil";
 import { VehicleStep } from "./VehicleStep";
-import { vehicleRequest } from "./vehicleRequest";
+import { useVehicleChoice } from "./useVehicleChoice";
 
 const CUSTOMER = "c1000000-0000-4000-8000-000000000001";
 // An invented saved car: placarded for 225/65R17 102H at 35 psi front, 33 psi rear, weighed on a scale.
@@ -61,42 +59,33 @@ afterEach(() => {
 
 /** The vehicle step with the quote builder's own state, and the vehicle part of the request it would send. */
 function Harness() {
-  const [savedVehicle, setSavedVehicle] = useState<string | null>(null);
-  const [edited, setEdited] = useState(false);
-  const [saveVehicle, setSaveVehicle] = useState(true);
-  const [vehicle, setVehicle] = useState<CounterVehicle | null>(null);
+  const choice = useVehicleChoice();
   return (
     <>
-      <VehicleStep
-        customerId={CUSTOMER}
-        savedVehicle={savedVehicle}
-        onSaved={setSavedVehicle}
-        edited={edited}
-        onEdited={setEdited}
-        saveVehicle={saveVehicle}
-        onSaveVehicle={setSaveVehicle}
-        onCandidates={(v) => setVehicle(v)}
-      />
-      {vehicle && <pre data-testid="request">{JSON.stringify(vehicleRequest({ savedVehicle, edited, vehicle, saveVehicle }))}</pre>}
+      <VehicleStep customerId={CUSTOMER} {...choice.step} onCandidates={(v) => choice.setVehicle(v)} />
+      {choice.vehicle && <pre data-testid="request">{JSON.stringify(choice.request())}</pre>}
     </>
   );
 }
 
-const renderStep = () =>
-  render(
-    <QueryClientProvider client={new QueryClient()}>
-      <Harness />
-    </QueryClientProvider>,
-  );
-// The first render loads the form's modules; the saved list then comes from the mocked server.
-const pickSaved = async () => userEvent.click(await screen.findByRole("button", { name: /Invented wagon/ }, { timeout: 5000 }));
+/** The step with the saved wagon picked. The first render loads the form's modules; the saved list then comes from the mocked server. */
+async function openSaved() {
+  renderWithQuery(<Harness />);
+  await userEvent.click(await screen.findByRole("button", { name: /Invented wagon/ }, { timeout: 5000 }));
+}
+/** Types `text` over what the labelled field holds; the field, for what it then says. */
+async function retype(label: string, text: string) {
+  const field = screen.getByLabelText(label);
+  await userEvent.clear(field);
+  await userEvent.type(field, text);
+  return field;
+}
 const valueOf = (label: string) => (screen.getByLabelText(label) as HTMLInputElement).value;
 const request = async () => JSON.parse((await screen.findByTestId("request")).textContent!);
 
 describe("the counter's vehicle step with a saved vehicle", () => {
   it("fills the placard fields from what the vehicle stored, in the screen's units, and its vehicle kind", async () => {
-    renderStep();
-    await pickSaved();
+    await openSaved();
     expect(valueOf("Tire size on the placard")).toBe("225/65R17 102H");
     // Stored in SI, shown in psi and lb: 241.3 kPa = 35 psi, 997.9 kg = 2200 lb (NIST SP 811 factors).
     expect(valueOf("Placard cold pressure, front (psi)")).toBe("35");
@@ -113,18 +102,14 @@ describe("the counter's vehicle step with a saved vehicle", () => {
   });
 
   it("unchanged, the quote names the saved vehicle only, with its placard as stored", async () => {
-    renderStep();
-    await pickSaved();
+    await openSaved();
     await userEvent.click(screen.getByRole("button", { name: "Find fitments" }));
     expect(await request()).toEqual({ vehicleId: SAVED.id });
   });
 
   it("a changed placard pressure and vehicle kind are sent with the saved vehicle's id, to be written over it", async () => {
-    renderStep();
-    await pickSaved();
-    const front = screen.getByLabelText("Placard cold pressure, front (psi)");
-    await userEvent.clear(front);
-    await userEvent.type(front, "36");
+    await openSaved();
+    await retype("Placard cold pressure, front (psi)", "36");
     await userEvent.click(screen.getByRole("radio", { name: "Truck, SUV, van" }));
     const box = screen.getByRole("checkbox", { name: "Save the changes to this saved vehicle" }) as HTMLInputElement;
     expect(box.disabled).toBe(false);
@@ -146,11 +131,8 @@ describe("the counter's vehicle step with a saved vehicle", () => {
   });
 
   it("refuses a negative axle weight beside its field, and finds nothing", async () => {
-    renderStep();
-    await pickSaved();
-    const rear = screen.getByLabelText("Rear axle weight, scale ticket (lb)");
-    await userEvent.clear(rear);
-    await userEvent.type(rear, "-2000");
+    await openSaved();
+    const rear = await retype("Rear axle weight, scale ticket (lb)", "-2000");
     await userEvent.click(screen.getByRole("button", { name: "Find fitments" }));
     expect(await screen.findByText("See the messages beside the placard and body point fields.")).toBeTruthy();
     const described = (rear.getAttribute("aria-describedby") ?? "").split(" ");
@@ -161,13 +143,10 @@ describe("the counter's vehicle step with a saved vehicle", () => {
   });
 
   it("refuses a body point inside the current tire beside its field, as labelled, and finds nothing", async () => {
-    renderStep();
-    await pickSaved();
+    await openSaved();
     // 4 in high and 2 in ahead of the axle: inside the 362.2 mm (14.3 in) radius of 225/65R17 (17 × 25.4 + 2 × 0.65 × 225 = 724.3 mm across, ISO 4000-1).
-    await userEvent.clear(screen.getByLabelText("Front corner height (in)"));
-    await userEvent.type(screen.getByLabelText("Front corner height (in)"), "4");
-    await userEvent.clear(screen.getByLabelText("Front corner ahead of the front axle (in)"));
-    await userEvent.type(screen.getByLabelText("Front corner ahead of the front axle (in)"), "2");
+    await retype("Front corner height (in)", "4");
+    await retype("Front corner ahead of the front axle (in)", "2");
     await userEvent.click(screen.getByRole("button", { name: "Find fitments" }));
     expect(await screen.findByText("See the messages beside the placard and body point fields.")).toBeTruthy();
     const field = screen.getByLabelText("Front corner height (in)");

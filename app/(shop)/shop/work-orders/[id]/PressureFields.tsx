@@ -1,23 +1,19 @@
 "use client";
-import type { UseFormReturn } from "react-hook-form";
-import { SelectField } from "@/components/ui/SelectField";
-import { TextField } from "@/components/ui/TextField";
 import { kpaToPsi, psiToKpa } from "@/lib/fitment";
 import { pressureFieldLabel, readDecimal } from "@/lib/shop/workOrders/schema";
-import { FIELD_LABEL, type PressureEntryUnit } from "@/lib/shop/workOrders/vocabulary";
+import type { PressureEntryUnit } from "@/lib/shop/workOrders/vocabulary";
 import { type TirePressureLimits, toSetWords } from "@/lib/shop/workOrders/pressureLimit";
 import { pressureWords } from "@/lib/shop/workOrders/signedText";
 import { PRESSURE_CAUTION } from "@/lib/comparisons/pressureText";
-import { type StepValues, errorAt } from "./stepForm";
+import { FigureWithUnit } from "./FigureWithUnit";
+import { type StepFieldGroupProps, errorAt } from "./stepForm";
 
 /** The cold pressure set, in psi or kPa; switching the unit converts the figure (NIST SP 811 B.8) instead of relabelling it. */
 export function PressureFields({
   form,
   idPrefix,
   limits = null,
-}: {
-  form: UseFormReturn<StepValues>;
-  idPrefix: string;
+}: StepFieldGroupProps & {
   /** The quoted tire's highest pressure and road minimum, shown beside the field (the server refuses above it). */
   limits?: TirePressureLimits | null;
 }) {
@@ -34,35 +30,20 @@ export function PressureFields({
     form.setValue("pressureUnit", to);
   };
   return (
-    <div className="flex flex-wrap items-end gap-3">
-      <TextField
-        id={`${idPrefix}-pressure`}
-        className="w-48"
-        label={pressureFieldLabel(unit)}
-        inputMode="decimal"
-        autoComplete="off"
-        hint={`${
-          limits?.toSet ? `Cold pressure to set (from the door placard on the quote): ${toSetWords(limits.toSet, unit)}. ` : ""
-        }Cold, to the figure for this tire and load (door placard or the tire maker's load table).${
-          limits
-            ? ` ${limits.tire}: at most ${pressureWords(limits.maxKpa, unit)}, road minimum ${pressureWords(limits.minimumKpa, unit)}.`
-            : ""
-        } ${PRESSURE_CAUTION}`}
-        error={errorAt(form.formState.errors, "pressure")}
-        {...form.register("pressure")}
-      />
-      <SelectField
-        id={`${idPrefix}-pressureUnit`}
-        className="w-28"
-        label={FIELD_LABEL.pressureUnit}
-        name="pressureUnit"
-        value={unit}
-        onChange={(e) => onUnit(e.target.value as PressureEntryUnit)}
-        options={[
-          { value: "psi", label: "psi" },
-          { value: "kPa", label: "kPa" },
-        ]}
-      />
-    </div>
+    <FigureWithUnit
+      form={form}
+      idPrefix={idPrefix}
+      name="pressure"
+      label={pressureFieldLabel(unit)}
+      hint={`${
+        limits?.toSet ? `Cold pressure to set (from the door placard on the quote): ${toSetWords(limits.toSet, unit)}. ` : ""
+      }Cold, to the figure for this tire and load (door placard or the tire maker's load table).${
+        limits
+          ? ` ${limits.tire}: at most ${pressureWords(limits.maxKpa, unit)}, road minimum ${pressureWords(limits.minimumKpa, unit)}.`
+          : ""
+      } ${PRESSURE_CAUTION}`}
+      error={errorAt(form.formState.errors, "pressure")}
+      unit={{ name: "pressureUnit", value: unit, className: "w-28", onChange: onUnit }}
+    />
   );
 }

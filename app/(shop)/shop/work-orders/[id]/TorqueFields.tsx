@@ -1,12 +1,9 @@
 "use client";
 import { useState } from "react";
-import type { UseFormReturn } from "react-hook-form";
-import { SelectField } from "@/components/ui/SelectField";
-import { TextField } from "@/components/ui/TextField";
 import { FitmentInputError, requireTorqueNm, switchTorqueUnit, torqueEntryNm, type TorqueUnit } from "@/lib/fitment";
 import { torqueFieldLabel } from "@/lib/shop/workOrders/schema";
-import { FIELD_LABEL } from "@/lib/shop/workOrders/vocabulary";
-import { type StepValues, errorAt } from "./stepForm";
+import { FigureWithUnit } from "./FigureWithUnit";
+import { type StepFieldGroupProps, errorAt } from "./stepForm";
 import { TorquePlanView } from "./TorquePlanView";
 
 /**
@@ -19,9 +16,7 @@ export function TorqueFields({
   idPrefix,
   boltCount,
   what,
-}: {
-  form: UseFormReturn<StepValues>;
-  idPrefix: string;
+}: StepFieldGroupProps & {
   boltCount: number | null;
   what: string;
 }) {
@@ -49,31 +44,16 @@ export function TorqueFields({
   const error = errorAt(form.formState.errors, "torque") ?? switchError ?? undefined;
   return (
     <>
-      <div className="flex flex-wrap items-end gap-3">
-        <TextField
-          id={`${idPrefix}-torque`}
-          className="w-48"
-          label={label}
-          inputMode="decimal"
-          autoComplete="off"
-          placeholder="from the maker"
-          hint={what}
-          error={error}
-          {...form.register("torque")}
-        />
-        <SelectField
-          id={`${idPrefix}-unit`}
-          className="w-32"
-          label={FIELD_LABEL.unit}
-          name="unit"
-          value={unit}
-          onChange={(e) => onUnit(e.target.value as TorqueUnit)}
-          options={[
-            { value: "ftlb", label: "ft·lb" },
-            { value: "nm", label: "N·m" },
-          ]}
-        />
-      </div>
+      <FigureWithUnit
+        form={form}
+        idPrefix={idPrefix}
+        name="torque"
+        label={label}
+        placeholder="from the maker"
+        hint={what}
+        error={error}
+        unit={{ name: "unit", value: unit, className: "w-32", onChange: onUnit }}
+      />
       <TorquePlanView boltCount={boltCount} torqueNm={nm} unit={unit} />
     </>
   );

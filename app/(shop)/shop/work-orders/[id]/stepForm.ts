@@ -1,10 +1,16 @@
-import { type FieldErrors, get } from "react-hook-form";
+import { type FieldErrors, type UseFormReturn, get } from "react-hook-form";
 import type { StepPosition } from "@/lib/platform/db/types";
 import type { WorkOrder } from "@/lib/shop/workOrders/api";
 import type { StepKind } from "@/lib/shop/workOrders/vocabulary";
 
 /** The sign-off form's values as typed: text and ticks, nested for the alignment readings. */
 export type StepValues = Record<string, string | boolean | Record<string, string>>;
+
+/** What a group of a step's fields is handed: the step's form, and the prefix of its fields' ids. */
+export interface StepFieldGroupProps {
+  form: UseFormReturn<StepValues>;
+  idPrefix: string;
+}
 
 const READINGS = { camberLeft: "", camberRight: "", casterLeft: "", casterRight: "", toeTotal: "" };
 
