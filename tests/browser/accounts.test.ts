@@ -1,19 +1,17 @@
 import type { Page } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { BASE, expectAxeClean, launch, signInAs } from "./support/browser";
+import { beforeAll, describe, expect, it } from "vitest";
+import { BASE, expectAxeClean, filePage, signInAs } from "./support/browser";
 import { DEMO, DEMO_PASSWORD, sessionCookie } from "./support/http";
 import { waitForMail } from "./support/outbox";
 import { confirmFromMail, createAccount, signUpAs } from "./support/signUp";
 
-let session: Awaited<ReturnType<typeof launch>>;
+// The file's one page: filePage opens it before the tests and closes it after them.
+const browser = filePage();
 let page: Page;
-const stamp = Date.now().toString(36);
-
-beforeAll(async () => {
-  session = await launch();
-  page = await session.context.newPage();
+beforeAll(() => {
+  page = browser.page();
 });
-afterAll(() => session.close());
+const stamp = Date.now().toString(36);
 
 const axeClean = (name: string) => expectAxeClean(page, name);
 

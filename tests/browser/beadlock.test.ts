@@ -1,17 +1,11 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launch, seriousViolations, shot } from "./support/browser";
+import { describe, expect, it } from "vitest";
+import { filePage, seriousViolations, shot } from "./support/browser";
 
-let browser: Awaited<ReturnType<typeof launch>>;
-beforeAll(async () => {
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const session = filePage();
 
 describe("beadlock ring helper: unit switch, tick-off and print sheet in Chromium", () => {
   it("converts the figure on a unit switch, ticks bolts from the keyboard, and prints on one page", async () => {
-    const page = await browser.context.newPage();
+    const page = session.page();
     await page.goto("/beadlock", { waitUntil: "networkidle" });
     await page.getByLabel("Bolts on the ring").fill("24");
     await page.getByLabel("Maker's torque (ft·lb)").fill("18");

@@ -1,20 +1,18 @@
 import { randomBytes } from "node:crypto";
 import type { Page } from "playwright-core";
 import sharp from "sharp";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { expectAxeClean, launch, panelsShown, seriousViolations, shot, signInAs, withBrowserPage } from "./support/browser";
+import { beforeAll, describe, expect, it } from "vitest";
+import { expectAxeClean, filePage, launch, panelsShown, seriousViolations, shot, signInAs, withBrowserPage } from "./support/browser";
 import { DEMO, DEMO_PASSWORD } from "./support/http";
 
-let session: Awaited<ReturnType<typeof launch>>;
+// The file's one page: filePage opens it before the tests and closes it after them.
+const browser = filePage();
 let page: Page;
+beforeAll(() => {
+  page = browser.page();
+});
 let vehicleUrl = "";
 const stamp = Date.now().toString(36);
-
-beforeAll(async () => {
-  session = await launch();
-  page = await session.context.newPage();
-});
-afterAll(() => session.close());
 
 const axeClean = (name: string) => expectAxeClean(page, name);
 
@@ -85,7 +83,7 @@ describe("the garage in Chromium", () => {
   });
 
   it("uploads a photo by the file picker with a progress bar, then shows its thumbnail; a fake image is refused", async () => {
-    const cdp = await session.context.newCDPSession(page);
+    const cdp = await browser.context().newCDPSession(page);
     await cdp.send("Network.enable");
     await cdp.send("Network.emulateNetworkConditions", {
       offline: false,

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { expectAxeClean, filePage, pageWidth, signInAs } from "./support/browser";
-import { DEMO, DEMO_PASSWORD, call } from "./support/http";
+import { expectAxeClean, filePage, pageWidth } from "./support/browser";
+import { call, signedInDemo } from "./support/http";
 
 /*
  * The shop's quotes list as counter staff use it (the demo shop's quotes, db/seeds/05_demo_shop.ts):
@@ -11,8 +11,7 @@ const session = filePage();
 
 describe("the quotes list", () => {
   it("finds a quote by its printed number and by status, keeps the search in the address, at 1280 and 390 px", async () => {
-    const page = session.page();
-    await signInAs(page, DEMO.shop_owner, DEMO_PASSWORD);
+    const page = await signedInDemo(session.page(), "shop_owner");
     await page.goto("/shop/quotes");
     await page.getByRole("heading", { level: 1, name: "Quotes" }).waitFor();
     const rows = page.getByRole("region", { name: "Quotes" }).getByRole("row");

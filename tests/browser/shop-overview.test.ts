@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { expectAxeClean, filePage, pageWidth, signInAs } from "./support/browser";
-import { DEMO, DEMO_PASSWORD } from "./support/http";
+import { expectAxeClean, filePage, pageWidth } from "./support/browser";
+import { signedInDemo } from "./support/http";
 
 /*
  * The owner's overview of the demo shop (db/seeds/05_demo_shop.ts): reached from the shop's tabs,
@@ -12,8 +12,7 @@ const session = filePage();
 
 describe("the owner's overview", () => {
   it("the owner opens it from the shop's tabs and reads the week, the deposits and the takings at 1280 and 390 px", async () => {
-    const page = session.page();
-    await signInAs(page, DEMO.shop_owner, DEMO_PASSWORD);
+    const page = await signedInDemo(session.page(), "shop_owner");
     await page.goto("/shop");
     await page.getByRole("navigation", { name: "Shop" }).getByRole("link", { name: "Overview" }).click();
     await page.waitForURL(/\/shop\/overview$/);
@@ -41,7 +40,7 @@ describe("the owner's overview", () => {
   it("staff see no Overview tab and cannot open the page", async () => {
     const page = session.page();
     await page.setViewportSize({ width: 1280, height: 900 });
-    await signInAs(page, DEMO.shop_staff, DEMO_PASSWORD);
+    await signedInDemo(page, "shop_staff");
     await page.goto("/shop");
     expect(await page.getByRole("navigation", { name: "Shop" }).getByRole("link", { name: "Overview" }).count()).toBe(0);
     await page.goto("/shop/overview");

@@ -1,7 +1,7 @@
 import type { Page } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launch, seriousViolations, shot, signInAs } from "./support/browser";
-import { DEMO, DEMO_PASSWORD, call } from "./support/http";
+import { describe, expect, it } from "vitest";
+import { filePage, launch, seriousViolations, shot } from "./support/browser";
+import { call, signedInDemo } from "./support/http";
 import { waitForMail } from "./support/outbox";
 import { VEHICLE } from "../integration/support/shopFixture";
 
@@ -15,20 +15,13 @@ async function checkA11y(page: Page, what: string) {
   expect(await seriousViolations(page), what).toEqual([]);
 }
 
-let owner: Awaited<ReturnType<typeof launch>>;
-beforeAll(async () => {
-  owner = await launch();
-});
-afterAll(async () => {
-  await owner?.close();
-});
+const owner = filePage();
 
 describe("stock", () => {
   it("the owner adds and edits an item, and sees what an accepted quote holds and what is left", async () => {
     const run = Date.now().toString(36).toUpperCase();
     const sku = `TR-STK-${run}`;
-    const page = await owner.context.newPage();
-    await signInAs(page, DEMO.shop_owner, DEMO_PASSWORD);
+    const page = await signedInDemo(owner.page(), "shop_owner");
 
     // Add one tire without a file.
     await page.goto("/shop/catalog");
@@ -112,8 +105,7 @@ describe("stock", () => {
     const { item } = (await made.json()) as { item: { id: string } };
     const phone = await launch({ width: 390, height: 844 });
     try {
-      const page = await phone.context.newPage();
-      await signInAs(page, DEMO.shop_owner, DEMO_PASSWORD);
+      const page = await signedInDemo(await phone.context.newPage(), "shop_owner");
       await page.goto(`/shop/catalog/${item.id}`);
       await page.getByRole("button", { name: "Archive item" }).click();
       await page.getByRole("button", { name: "Bring back into the catalog" }).waitFor();

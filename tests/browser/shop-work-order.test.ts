@@ -30,6 +30,16 @@ afterAll(async () => {
   await phone?.close();
 });
 
+/**
+ * The torque part the beadlock and lug steps share (TorqueFields and the passes box): the maker's
+ * figure typed in ft·lb, `check` of what the form makes of it, then all passes ticked done.
+ */
+async function fillTorque(form: Locator, ftLb: string, check: () => Promise<void>) {
+  await form.getByLabel("Maker's torque (ft·lb)").fill(ftLb);
+  await check();
+  await form.getByLabel("All passes done in the order shown").check();
+}
+
 /** Fills one step's form the way a technician would; the form's label says which step. */
 async function fill(form: Locator, step: string) {
   switch (step) {
@@ -41,9 +51,9 @@ async function fill(form: Locator, step: string) {
       return;
     case "beadlock":
       await form.getByLabel("Bolts on the ring").fill("24");
-      await form.getByLabel("Maker's torque (ft·lb)").fill("17");
-      expect(await form.getByTestId("torque-plan").textContent()).toContain("17 ft·lb (23 N·m)");
-      await form.getByLabel("All passes done in the order shown").check();
+      await fillTorque(form, "17", async () => {
+        expect(await form.getByTestId("torque-plan").textContent()).toContain("17 ft·lb (23 N·m)");
+      });
       return;
     case "bead_seat":
       await form.getByLabel("Beads seated following the cautions above").check();
@@ -62,11 +72,11 @@ async function fill(form: Locator, step: string) {
       await form.getByLabel("Outer plane weight (g)").fill("0");
       return;
     case "lug_torque":
-      // Typed in ft·lb, switched to N·m: the figure is converted, not relabelled (NIST SP 811 B.9: 140 ft·lbf = 189.8 N·m).
-      await form.getByLabel("Maker's torque (ft·lb)").fill("140");
-      await form.getByLabel("Torque unit").selectOption("nm");
-      expect(await form.getByLabel("Maker's torque (N·m)").inputValue()).toBe("189.8");
-      await form.getByLabel("All passes done in the order shown").check();
+      await fillTorque(form, "140", async () => {
+        // Typed in ft·lb, switched to N·m: the figure is converted, not relabelled (NIST SP 811 B.9: 140 ft·lbf = 189.8 N·m).
+        await form.getByLabel("Torque unit").selectOption("nm");
+        expect(await form.getByLabel("Maker's torque (N·m)").inputValue()).toBe("189.8");
+      });
       return;
     case "alignment":
       for (const when of ["Before", "After"]) {

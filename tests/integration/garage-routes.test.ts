@@ -318,13 +318,15 @@ describe("install checklists", () => {
   const PLANNED = { tire: "35x12.50R17LT", wheelDiameterIn: 17, wheelWidthIn: 9, position: { mode: "offset", offsetMm: -12 }, spacerMm: 0 };
   const Q = "pt=35x12.50R17LT&pd=17&pw=9&po=-12";
 
-  /** A vehicle of Ada's (signed in as her after) with one clearance point measured on it. */
+  /** A vehicle of Ada's (signed in as her after) with one clearance point measured on it, and its checklist read for a query. */
   async function vehicleWithPoint(name: string, point: object) {
     const { body } = await createAs("ada", { ...VEHICLE, name });
     const id = body.vehicle.id as string;
     as("ada");
     const res = await clearances.POST(req("POST", `/api/vehicles/${id}/clearances`, point), ctx({ id }));
-    return { id, pointId: (await res.json()).clearance.id as string };
+    const { GET } = await checklist();
+    const checklistFor = async (query: string) => (await GET(req("GET", `/api/vehicles/${id}/checklist?${query}`), ctx({ id }))).json();
+    return { id, pointId: (await res.json()).clearance.id as string, checklistFor };
   }
 
   it("saves ticks per vehicle + planned setup, refuses unknown items, and is owner-scoped", async () => {
@@ -416,14 +418,13 @@ describe("install checklists", () => {
   });
 
   it("predicts a full-lock point by the tread corner's sweep about the vehicle's steering axis", async () => {
-    const { GET } = await checklist();
-    const { id, pointId } = await vehicleWithPoint("Lock hauler", {
+    const { pointId, checklistFor } = await vehicleWithPoint("Lock hauler", {
       label: "Frame rail",
       direction: "inboard",
       distance: "1-1/2 in",
       suspensionState: "full-lock",
     });
-    const r = await (await GET(req("GET", `/api/vehicles/${id}/checklist?${Q}`), ctx({ id }))).json();
+    const r = await checklistFor(Q);
     const trim = (r.items as { id: string; title: string; detail: string }[]).find((i) => i.id === `trim:${pointId}`);
     // Current 265/70R17 on 17x8, 5-3/4 in backspacing to the bead seat: offset 5.75 − 4 = 1.75 in = 44.45 mm;
     // inner reach 44.45 + 132.5 = 176.95 mm. Steering axis (KPI 8°, zero scrub assumed):
@@ -436,15 +437,14 @@ describe("install checklists", () => {
   });
 
   it("classes the points against the vehicle's margin, or the one tried with m", async () => {
-    const { GET } = await checklist();
-    const { id, pointId } = await vehicleWithPoint("Margin hauler", {
+    const { id, pointId, checklistFor } = await vehicleWithPoint("Margin hauler", {
       label: "fender lip, full stuff",
       direction: "upward",
       distance: "3 in",
       suspensionState: "full-stuff",
     });
     const trims = async (query: string) => {
-      const r = await (await GET(req("GET", `/api/vehicles/${id}/checklist?${query}`), ctx({ id }))).json();
+      const r = await checklistFor(query);
       return { margin: r.marginMm as number, trims: (r.items as { id: string; title: string }[]).filter((i) => i.id.startsWith("trim:")) };
     };
     // 3 in = 76.2 mm measured; 265/70R17 → 35x12.50R17LT raises the tire's top by

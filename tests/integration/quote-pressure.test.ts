@@ -37,6 +37,9 @@ async function pdfText(id: string): Promise<string> {
   }
 }
 
+/** The quote as its page reads it. */
+const detailOf = async (id: string) => (await quote.GET(req("GET", `/api/shop/quotes/${id}`), ctx({ id }))).json();
+
 let n = 0;
 async function makeQuote(vehicle: Record<string, unknown>, extra: Record<string, unknown> = {}) {
   n += 1;
@@ -46,6 +49,13 @@ async function makeQuote(vehicle: Record<string, unknown>, extra: Record<string,
   );
   const c = await cres.json();
   return quotes.POST(req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId: c.customer.id, vehicle, ...extra })), ctx());
+}
+/** A quote by makeQuote that must be made (201), with its detail. */
+async function madeQuote(vehicle: Record<string, unknown>) {
+  const made = await makeQuote(vehicle);
+  const body = await made.json();
+  expect(made.status, JSON.stringify(body)).toBe(201);
+  return { id: body.id as string, detail: await detailOf(body.id) };
 }
 
 /** A new customer whose first quote saved the counter truck with its placard; their id and the saved vehicle's row. */
@@ -62,10 +72,7 @@ async function customerWithSavedTruck(name: string, phone: string) {
 
 describe("a quote for a counter vehicle with its door placard gives the cold pressure to set", () => {
   it("per axle in its summary, its cautions and its PDF; 35x12.50R17LT 121Q E sets its road minimum, 37.9 psi", async () => {
-    const made = await makeQuote({ ...VEHICLE, placard: PLACARD });
-    const body = await made.json();
-    expect(made.status, JSON.stringify(body)).toBe(201);
-    const detail = await (await quote.GET(req("GET", `/api/shop/quotes/${body.id}`), ctx({ id: body.id }))).json();
+    const { id, detail } = await madeQuote({ ...VEHICLE, placard: PLACARD });
     const p = detail.quote.fitment.pressure;
     // TRA light-truck load formula (NHTSA "The Pneumatic Tire", 2006): 65 psi × (1027 kg / 1450 kg)^(1/0.585)
     // = 36.0 psi carries what the placard tire carries at 35 psi; the LRE flotation road minimum
@@ -75,7 +82,7 @@ describe("a quote for a counter vehicle with its door placard gives the cold pre
       ["rear", "road minimum"],
     ]);
     expect(p.axles[0].kpa).toBeCloseTo(psiToKpa(65) * 0.5833, 0);
-    const text = await pdfText(body.id);
+    const text = await pdfText(id);
     expect(text).toContain("Cold pressure to set: front 37.9 psi (261 kPa), rear 37.9 psi (261 kPa)");
     expect(text).toMatch(/Cold pressure to set for 35x12\.50R17LT 121Q LRE: front 37\.9 psi \(261 kPa\)/);
     expect(text).toContain("Never inflate above the sidewall maximum, 65 psi (448 kPa)");
@@ -85,7 +92,7 @@ describe("a quote for a counter vehicle with its door placard gives the cold pre
   it("without a placard, the quote keeps today's caution and no pressure", async () => {
     const made = await makeQuote(VEHICLE);
     const { id } = await made.json();
-    const detail = await (await quote.GET(req("GET", `/api/shop/quotes/${id}`), ctx({ id }))).json();
+    const detail = await detailOf(id);
     expect(detail.quote.fitment.pressure).toBeUndefined();
     const text = await pdfText(id);
     expect(text).toContain("Cold pressure: set it for the vehicle's axle loads from the door placard");
@@ -139,7 +146,7 @@ describe("a quote for a counter vehicle with its door placard gives the cold pre
     const again = await quotes.POST(req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId, vehicleId: saved.id })), ctx());
     const { id } = await again.json();
     expect(again.status).toBe(201);
-    const detail = await (await quote.GET(req("GET", `/api/shop/quotes/${id}`), ctx({ id }))).json();
+    const detail = await detailOf(id);
     expect(detail.quote.fitment.pressure.axles.map((a: { kpa: number }) => Math.round(a.kpa))).toEqual([261, 261]);
   });
 
@@ -164,7 +171,7 @@ describe("a quote for a counter vehicle with its door placard gives the cold pre
     expect(rows).toHaveLength(1);
     expect(rows[0].load_placard).toMatchObject({ vehicleKind: "passenger-car", rearAxleKg: 1250 });
     expect(rows[0].load_placard.placardFrontKpa).toBeCloseTo(psiToKpa(36), 6);
-    const detail = await (await quote.GET(req("GET", `/api/shop/quotes/${id}`), ctx({ id }))).json();
+    const detail = await detailOf(id);
     expect(detail.quote.vehicleId).toBe(saved.id);
     expect(detail.quote.fitment.pressure.placardFrontKpa).toBeCloseTo(psiToKpa(36), 6);
   });
@@ -213,12 +220,9 @@ const BODY_POINTS = COUNTER_BODY_POINTS;
 
 describe("a quote for a counter vehicle with its body points gives the trail angles now and with the quoted tires", () => {
   it("in its summary, its PDF and its cautions; a saved vehicle keeps them for a later quote", async () => {
-    const made = await makeQuote({ ...VEHICLE, bodyPoints: BODY_POINTS });
-    const body = await made.json();
-    expect(made.status, JSON.stringify(body)).toBe(201);
-    const detail = await (await quote.GET(req("GET", `/api/shop/quotes/${body.id}`), ctx({ id: body.id }))).json();
+    const { id, detail } = await madeQuote({ ...VEHICLE, bodyPoints: BODY_POINTS });
     expect(detail.quote.fitment.angles.angles.map((a: { kind: string }) => a.kind)).toEqual(["approach", "departure", "breakover"]);
-    const text = await pdfText(body.id);
+    const text = await pdfText(id);
     // 265/70R17 (802.8 mm) → 35x12.50R17LT (889 mm): the tangent from the corner 900 mm ahead and 750 mm
     // high, 45.7° → 48.6° with the corner raised by the 43.1 mm radius change (SAE J1100 definition;
     // worked in lib/shop/customers/counterBodyPoints.test.ts).
@@ -237,8 +241,8 @@ describe("a quote for a counter vehicle with its body points gives the trail ang
     expect(again.status).toBe(201);
     expect((await db("customer_vehicles").where({ id: saved.id }).first()).body_points).toEqual(BODY_POINTS);
     const later = await quotes.POST(req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId, vehicleId: saved.id })), ctx());
-    const { id } = await later.json();
-    const d2 = await (await quote.GET(req("GET", `/api/shop/quotes/${id}`), ctx({ id }))).json();
+    const { id: laterId } = await later.json();
+    const d2 = await detailOf(laterId);
     expect(d2.quote.fitment.angles).toEqual(detail.quote.fitment.angles);
   });
 

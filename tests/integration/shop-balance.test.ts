@@ -1,13 +1,14 @@
 import { randomBytes } from "node:crypto";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { signPayload, startFakePay } from "@/scripts/services/fake-pay";
-import { rebuild, testDb } from "./support/db";
-import { startTestBoss, stopBoss } from "./support/jobs";
+import { testDb } from "./support/db";
+import { setUpBookableShops, tearDownBookableShops } from "./support/openShop";
 import { ctx, req, sessionOf } from "./support/requests";
 import { openAllDay } from "./support/quoteJourney";
-import { SHOP_A, U, VEHICLE, item, seedShops } from "./support/shopFixture";
+import { SHOP_A, U, VEHICLE, item } from "./support/shopFixture";
 import { postWebhook as post, startWebhookForwarder } from "./support/webhookForwarder";
 import { bodyFor } from "./support/workOrderSteps";
+import { workOrderRoutes } from "./support/workOrderRoutes";
 
 /*
  * Completion and the balance: the completion mail with the invoice, the balance paid through the
@@ -37,12 +38,9 @@ const refunds = (await import("@/app/api/shop/quotes/[id]/refunds/route")).POST;
 const quotes = await import("@/app/api/shop/quotes/route");
 const sendRoute = (await import("@/app/api/shop/quotes/[id]/send/route")).POST;
 const customers = await import("@/app/api/shop/customers/route");
-const openOrder = (await import("@/app/api/shop/work-orders/route")).POST;
-const sign = (await import("@/app/api/shop/work-orders/[id]/steps/route")).PUT;
-const move = (await import("@/app/api/shop/work-orders/[id]/status/route")).POST;
+const { open: openOrder, sign, move } = await workOrderRoutes();
 const { bookInstall, cancelInstall, slotsForQuote } = await import("@/lib/shop/bookings/queries");
 const { requiredSteps } = await import("@/lib/shop/workOrders/api");
-const { db: appDb } = await import("@/lib/platform/db");
 
 let forwarder: Awaited<ReturnType<typeof startWebhookForwarder>>;
 const postWebhook = (body: string, signature: string) => post(webhook, body, signature);
@@ -128,10 +126,7 @@ const refund = (id: string, body: object) => refunds(req("POST", `/api/shop/quot
 const count = async (table: string) => Number((await db(table).count({ n: "*" }))[0]!.n);
 
 beforeAll(async () => {
-  await rebuild(db);
-  await seedShops(db);
-  await startTestBoss();
-  await openAllDay(db);
+  await setUpBookableShops(db, openAllDay);
   forwarder = await startWebhookForwarder(webhook);
   pay = await startFakePay({ port: 0, secretKey: process.env.STRIPE_SECRET_KEY!, webhookSecret: SECRET, webhookUrl: forwarder.url });
   process.env.STRIPE_API_PORT = String(pay.port);
@@ -139,9 +134,7 @@ beforeAll(async () => {
 afterAll(async () => {
   await pay.close();
   await forwarder.close();
-  await stopBoss();
-  await db.destroy();
-  await appDb.destroy();
+  await tearDownBookableShops(db);
 });
 
 describe("completion mail and the balance through the payment SDK", () => {

@@ -305,10 +305,6 @@ describe("catalog search: what people type finds what is stored", () => {
   });
 
   it("folds accents and takes % and _ as themselves", async () => {
-    expect(await skus("cafe")).toEqual(["S-CAF"]);
-    expect(await skus("EQUILIBRAGE")).toEqual(["S-CAF"]);
-    expect(await skus("50%_")).toEqual(["S-CAF"]);
-    expect(await skus("%")).toEqual(["S-CAF"]);
-    expect(await skus("_")).toEqual(["S-CAF"]);
+    for (const q of ["cafe", "EQUILIBRAGE", "50%_", "%", "_"]) expect(await skus(q), q).toEqual(["S-CAF"]);
   });
 });

@@ -1,8 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { closeDatabases, rebuild, testDb } from "./support/db";
-import { startTestBoss, stopBoss } from "./support/jobs";
+import { testDb } from "./support/db";
+import { setUpBookableShops, tearDownBookableShops } from "./support/openShop";
 import { STAFF_A, depositEvent, depositPaidQuote, firstFreeStart, openAllDay, queuedMails, sentQuote } from "./support/quoteJourney";
-import { SHOP_A, U, seedShops } from "./support/shopFixture";
+import { SHOP_A, U } from "./support/shopFixture";
 
 /*
  * The shop hears of its customers' moves: a notice is queued (in the change's own transaction)
@@ -32,8 +32,7 @@ async function newNotices(run: () => Promise<unknown>) {
 const quoteRow = (id: string) => db("quotes").where({ id }).first();
 
 beforeAll(async () => {
-  await rebuild(db);
-  await seedShops(db);
+  await setUpBookableShops(db, openAllDay);
   // A second owner: the notice names every owner of the shop (and nobody of shop B or the staff).
   await db("users").insert({
     role: "shop_owner",
@@ -42,13 +41,8 @@ beforeAll(async () => {
     name: "Second Owner",
     password_hash: "x",
   });
-  await startTestBoss();
-  await openAllDay(db);
 });
-afterAll(async () => {
-  await stopBoss();
-  await closeDatabases(db);
-});
+afterAll(() => tearDownBookableShops(db));
 
 describe("the customer accepts", () => {
   it("queues one notice to the owners with the quote number, customer, vehicle and the staff link", async () => {

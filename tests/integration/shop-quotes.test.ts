@@ -474,15 +474,22 @@ describe("any catalog item on a quote", () => {
 });
 
 describe("the wheel on the vehicle's hub", () => {
-  it("refuses a wheel whose centre bore is smaller than the hub (106.1 mm bore on a 108 mm hub)", async () => {
-    await addWheel({
+  /** Invented 17x9 wheels (addWheel): centre bores either side of the vehicle's 108 mm hub, and one of another bolt pattern. */
+  const WHEELS = {
+    bore1061: {
       sku: "WH-T-1061",
       description: "Test 17x9 106.1 mm bore",
       price_cents: 28900,
       bolt_pattern: "6x139.7",
       center_bore_mm: 106.1,
-    });
-    const { res } = await draftFor({ ...VEHICLE, hubBoreMm: 108 }, "WH-T-1061");
+    },
+    bore1101: { sku: "WH-T-110", description: "Test 17x9 110 mm bore", price_cents: 25900, bolt_pattern: "6x5.5", center_bore_mm: 110.1 },
+    eightLug: { sku: "WH-T-8L", description: "Test 8-lug", price_cents: 30000, bolt_pattern: "8x6.5", center_bore_mm: 125 },
+  };
+
+  it("refuses a wheel whose centre bore is smaller than the hub (106.1 mm bore on a 108 mm hub)", async () => {
+    await addWheel(WHEELS.bore1061);
+    const { res } = await draftFor({ ...VEHICLE, hubBoreMm: 108 }, WHEELS.bore1061.sku);
     expect(res.status).toBe(422);
     const body = await res.json();
     expect(body.fieldErrors.wheelItemId[0]).toMatch(/106\.1 mm.*108 mm/);
@@ -490,14 +497,8 @@ describe("the wheel on the vehicle's hub", () => {
   });
 
   it("takes a larger bore but says hub-centric rings are needed, with their sizes", async () => {
-    await addWheel({
-      sku: "WH-T-110",
-      description: "Test 17x9 110 mm bore",
-      price_cents: 25900,
-      bolt_pattern: "6x5.5",
-      center_bore_mm: 110.1,
-    });
-    const { res, id } = await draftFor({ ...VEHICLE, hubBoreMm: 108 }, "WH-T-110");
+    await addWheel(WHEELS.bore1101);
+    const { res, id } = await draftFor({ ...VEHICLE, hubBoreMm: 108 }, WHEELS.bore1101.sku);
     expect(res.status).toBe(201);
     const d = await detailOf(id);
     expect(d.quote.hubBoreMm).toBe(108);
@@ -511,13 +512,7 @@ describe("the wheel on the vehicle's hub", () => {
   });
 
   it("refuses a wheel line of another bolt pattern, and takes 6x139.7 on a 6x5.5 vehicle (6 × 5.5 in × 25.4 = 139.7 mm, NIST SP 811)", async () => {
-    const eight = await addWheel({
-      sku: "WH-T-8L",
-      description: "Test 8-lug",
-      price_cents: 30000,
-      bolt_pattern: "8x6.5",
-      center_bore_mm: 125,
-    });
+    const eight = await addWheel(WHEELS.eightLug);
     const metric = await item(db, SHOP_A, "WH-EXAMPLE-BL"); // 6x139.7, 108 mm
     const { id } = await draftFor({ ...VEHICLE, hubBoreMm: 108 });
     const wheelLine = (w: { id: string; sku: string; description: string; price_cents: number }) => ({

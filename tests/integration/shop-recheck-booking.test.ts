@@ -5,6 +5,7 @@ import { ctx, req, sessionOf } from "./support/requests";
 import { SHOP_A, U } from "./support/shopFixture";
 import { bookedInstallOfShopA } from "./support/bookedInstall";
 import { setUpBookableShops, tearDownBookableShops } from "./support/openShop";
+import { workOrderRoutes } from "./support/workOrderRoutes";
 
 const session = vi.hoisted(() => ({ current: null as unknown }));
 vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
@@ -12,7 +13,6 @@ vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
 const db = testDb();
 const slotsRoute = await import("@/app/api/recheck/[token]/slots/route");
 const bookRoute = await import("@/app/api/recheck/[token]/booking/route");
-const workOrders = await import("@/app/api/shop/work-orders/route");
 const bookingRoute = await import("@/app/api/shop/bookings/[id]/route");
 const bookingSlotsRoute = await import("@/app/api/shop/bookings/[id]/slots/route");
 const recheckSlotRoute = await import("@/app/api/shop/rechecks/slot/route");
@@ -20,6 +20,7 @@ const { bookInstall, calendar, getSetup, saveSetup, slotsForQuote } = await impo
 const { bookRecheck, recheckPageByLink } = await import("@/lib/shop/workOrders/recheckBookingQueries");
 const { baysSetupSchema } = await import("@/lib/shop/bookings/schema");
 const { ConflictError, InvalidError } = await import("@/lib/platform/errors");
+const { open: openWorkOrder } = await workOrderRoutes();
 const { queueDueRechecks } = await import("@/lib/shop/workOrders/queries");
 const { db: appDb } = await import("@/lib/platform/db");
 
@@ -47,7 +48,7 @@ const mails = async (to: string) =>
 async function mailedRecheck() {
   session.current = sessionOf(U.staffA);
   const { quoteId, email } = await bookedInstallOfShopA(db, "Check Customer");
-  const { id } = await (await workOrders.POST(req("POST", "/api/shop/work-orders", { quoteId }), ctx())).json();
+  const { id } = await (await openWorkOrder(req("POST", "/api/shop/work-orders", { quoteId }), ctx())).json();
   // The sheet itself is covered in shop-work-orders.test.ts: here the job is simply done and due.
   await db("work_orders")
     .where({ id })

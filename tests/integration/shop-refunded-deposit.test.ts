@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { closeDatabases, rebuild, testDb } from "./support/db";
-import { startTestBoss, stopBoss } from "./support/jobs";
+import { testDb } from "./support/db";
+import { setUpBookableShops, tearDownBookableShops } from "./support/openShop";
 import { STAFF_A, depositPaidQuote, firstFreeStart, openAllDay } from "./support/quoteJourney";
 import { SHOP_A, U } from "./support/shopFixture";
 
@@ -35,17 +35,8 @@ async function bookedCancelledRefunded(id: string, amountCents: (deposit: number
 
 const bookings = async (id: string) => (await db("bookings").where({ quote_id: id }).select("status")).map((b) => b.status);
 
-beforeAll(async () => {
-  await rebuild(db);
-  const { seedShops } = await import("./support/shopFixture");
-  await seedShops(db);
-  await startTestBoss();
-  await openAllDay(db);
-});
-afterAll(async () => {
-  await stopBoss();
-  await closeDatabases(db);
-});
+beforeAll(() => setUpBookableShops(db, openAllDay));
+afterAll(() => tearDownBookableShops(db));
 
 describe("a quote whose deposit was refunded in full", () => {
   it("cannot be booked again from the counter: refused with the reason, nothing written", async () => {

@@ -3,7 +3,9 @@ import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { testDb } from "./support/db";
 import { ctx, req, sessionOf } from "./support/requests";
 import { SHOP_A, U, VEHICLE, item, quoteRequest } from "./support/shopFixture";
+import { counterQuote } from "./support/bookedInstall";
 import { bodyFor } from "./support/workOrderSteps";
+import { workOrderRoutes } from "./support/workOrderRoutes";
 import { setUpBookableShops, tearDownBookableShops } from "./support/openShop";
 
 const session = vi.hoisted(() => ({ current: null as unknown }));
@@ -15,14 +17,10 @@ const as = (u: (typeof U)[keyof typeof U] | null) => void (session.current = u ?
 const act = (await import("@/app/api/q/[token]/route")).POST;
 const quotes = await import("@/app/api/shop/quotes/route");
 const status = (await import("@/app/api/shop/quotes/[id]/status/route")).POST;
-const customers = await import("@/app/api/shop/customers/route");
 const catalog = await import("@/app/api/shop/catalog/route");
 const one = await import("@/app/api/shop/catalog/[id]/route");
 const archive = (await import("@/app/api/shop/catalog/[id]/archived/route")).PUT;
-const openWorkOrder = (await import("@/app/api/shop/work-orders/route")).POST;
-const readWorkOrder = (await import("@/app/api/shop/work-orders/[id]/route")).GET;
-const sign = (await import("@/app/api/shop/work-orders/[id]/steps/route")).PUT;
-const moveWorkOrder = (await import("@/app/api/shop/work-orders/[id]/status/route")).POST;
+const { open: openWorkOrder, read: readWorkOrder, sign, move: moveWorkOrder } = await workOrderRoutes();
 const { bookInstall, slotsForQuote } = await import("@/lib/shop/bookings/queries");
 const { requiredSteps } = await import("@/lib/shop/workOrders/api");
 const { expireDue } = await import("@/lib/shop/quotes/queries");
@@ -48,24 +46,19 @@ const counts = async (sku: string) => {
 /** A quote of shop A for four tires and four wheels, sent, valid 30 days, and its link token. */
 async function sentQuote() {
   as(U.staffA);
-  const c = await customers.POST(
-    req("POST", "/api/shop/customers", {
-      name: "Stock Customer",
-      phone: `555 ${Math.floor(1000000 + Math.random() * 8999999)}`,
-      email: `s${randomBytes(4).toString("hex")}@example.test`,
-    }),
-    ctx(),
-  );
-  const customerId = (await c.json()).customer.id;
-  const r = await quotes.POST(req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId, vehicle: VEHICLE }, WHEEL)), ctx());
-  expect(r.status).toBe(201);
-  const id = (await r.json()).id as string;
+  const { quoteId: id } = await counterQuote(db, "Stock Customer", WHEEL);
   const token = randomBytes(32).toString("base64url");
   await db("quotes")
     .where({ id })
     .update({ status: "sent", public_token_hash: sha256(token), valid_until: db.raw("now() + interval '30 days'") });
   session.current = null;
   return { id, token };
+}
+/** Ten of the tire and ten of the wheel left to hold, then a sent quote for four of each. */
+async function sentQuoteWithTenLeft() {
+  await setAvailable(TIRE, 10);
+  await setAvailable(WHEEL, 10);
+  return sentQuote();
 }
 const accept = (token: string) => act(req("POST", `/api/q/${token}`, { action: "accept" }), ctx({ token }));
 const reservations = (quoteId: string) => db("stock_reservations").where({ quote_id: quoteId }).orderBy("catalog_item_id");
@@ -165,9 +158,7 @@ describe("accepting a quote reserves its tires and wheels", () => {
 
 describe("release and consumption", () => {
   it("a declined quote gives its units back", async () => {
-    await setAvailable(TIRE, 10);
-    await setAvailable(WHEEL, 10);
-    const q = await sentQuote();
+    const q = await sentQuoteWithTenLeft();
     const before = await counts(TIRE);
     expect((await accept(q.token)).status).toBe(200);
     expect((await counts(TIRE)).reserved).toBe(before.reserved + 4);
@@ -179,9 +170,7 @@ describe("release and consumption", () => {
   });
 
   it("the scheduled expiry gives an accepted quote's units back", async () => {
-    await setAvailable(TIRE, 10);
-    await setAvailable(WHEEL, 10);
-    const q = await sentQuote();
+    const q = await sentQuoteWithTenLeft();
     const before = await counts(WHEEL);
     expect((await accept(q.token)).status).toBe(200);
     await db("quotes")
@@ -194,9 +183,7 @@ describe("release and consumption", () => {
   });
 
   it("the work order marked done takes the units off the shelf", async () => {
-    await setAvailable(TIRE, 10);
-    await setAvailable(WHEEL, 10);
-    const q = await sentQuote();
+    const q = await sentQuoteWithTenLeft();
     expect((await accept(q.token)).status).toBe(200);
     const before = await counts(TIRE);
     await db("quotes").where({ id: q.id }).update({ status: "deposit_paid" });
@@ -353,9 +340,7 @@ describe("the single-item editor", () => {
   });
 
   it("an archived item stays on the quotes that have it but is not offered to new ones", async () => {
-    await setAvailable(TIRE, 10);
-    await setAvailable(WHEEL, 10);
-    const q = await sentQuote();
+    const q = await sentQuoteWithTenLeft();
     const wheel = await item(db, SHOP_A, WHEEL);
     as(U.ownerA);
     expect((await archive(req("PUT", `/api/shop/catalog/${wheel.id}/archived`, { archived: true }), ctx({ id: wheel.id }))).status).toBe(

@@ -9,6 +9,7 @@ import { startTestPhotoStore, type TestPhotoStore } from "./support/photoStore";
 import { ctx, req, sessionOf } from "./support/requests";
 import { SHOP_A, U } from "./support/shopFixture";
 import { bodyFor } from "./support/workOrderSteps";
+import { workOrderRoutes } from "./support/workOrderRoutes";
 
 const session = vi.hoisted(() => ({ current: null as unknown }));
 vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
@@ -17,10 +18,7 @@ const db = testDb();
 const as = (u: (typeof U)[keyof typeof U] | null) => void (session.current = u ? sessionOf(u) : null);
 let photos: TestPhotoStore;
 
-const open = (await import("@/app/api/shop/work-orders/route")).POST;
-const read = (await import("@/app/api/shop/work-orders/[id]/route")).GET;
-const sign = (await import("@/app/api/shop/work-orders/[id]/steps/route")).PUT;
-const move = (await import("@/app/api/shop/work-orders/[id]/status/route")).POST;
+const { open, read, sign, move } = await workOrderRoutes();
 const collection = await import("@/app/api/shop/work-orders/[id]/photos/route");
 const single = await import("@/app/api/shop/work-orders/[id]/photos/[photoId]/route");
 const { requiredSteps } = await import("@/lib/shop/workOrders/api");

@@ -1,10 +1,11 @@
-import { createHash, randomBytes } from "node:crypto";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { testDb } from "./support/db";
 import { drainQueue } from "./support/jobs";
 import { ctx, req, sessionOf } from "./support/requests";
-import { SHOP_A, U, VEHICLE, quoteRequest } from "./support/shopFixture";
+import { SHOP_A, U } from "./support/shopFixture";
+import { bookedInstallOfShopA } from "./support/bookedInstall";
 import { bodyFor } from "./support/workOrderSteps";
+import { workOrderRoutes } from "./support/workOrderRoutes";
 import { setUpBookableShops, tearDownBookableShops } from "./support/openShop";
 
 const session = vi.hoisted(() => ({ current: null as unknown }));
@@ -13,49 +14,17 @@ vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
 const db = testDb();
 const as = (u: (typeof U)[keyof typeof U] | null) => void (session.current = u ? sessionOf(u) : null);
 
-const quotes = await import("@/app/api/shop/quotes/route");
-const customers = await import("@/app/api/shop/customers/route");
-const open = (await import("@/app/api/shop/work-orders/route")).POST;
-const read = (await import("@/app/api/shop/work-orders/[id]/route")).GET;
-const sign = (await import("@/app/api/shop/work-orders/[id]/steps/route")).PUT;
-const move = (await import("@/app/api/shop/work-orders/[id]/status/route")).POST;
-const { bookInstall, slotsForQuote } = await import("@/lib/shop/bookings/queries");
+const { open, read, sign, move } = await workOrderRoutes();
 const { requiredSteps } = await import("@/lib/shop/workOrders/api");
 const { db: appDb } = await import("@/lib/platform/db");
 const rechecks = await import("@/app/api/shop/rechecks/route");
 const { queueDueRechecks } = await import("@/lib/shop/workOrders/queries");
 const { QUEUES, getBoss } = await import("@/lib/platform/jobs/boss");
 
-const sha256 = (s: string) => createHash("sha256").update(s).digest("hex");
-
 /** A quote of shop A with its deposit paid and, unless told, its install booked at the first free start. */
 async function bookedQuote(book = true) {
   as(U.staffA);
-  const c = await customers.POST(
-    req("POST", "/api/shop/customers", {
-      name: "Bay Customer",
-      phone: `555 ${Math.floor(1000000 + Math.random() * 8999999)}`,
-      email: `w${randomBytes(4).toString("hex")}@example.test`,
-    }),
-    ctx(),
-  );
-  const customerId = (await c.json()).customer.id;
-  const r = await quotes.POST(req("POST", "/api/shop/quotes", await quoteRequest(db, { customerId, vehicle: VEHICLE })), ctx());
-  const id = (await r.json()).id as string;
-  await db("quotes")
-    .where({ id })
-    .update({
-      status: "deposit_paid",
-      public_token_hash: sha256(randomBytes(32).toString("base64url")),
-      valid_until: db.raw("now() + interval '30 days'"),
-    });
-  if (book) {
-    const quote = await db("quotes").where({ id }).first();
-    const slots = await slotsForQuote(db, quote, { days: 14 });
-    const start = slots.days.flatMap((d) => d.slots)[0]!.start;
-    await bookInstall(db, { by: "staff", scope: { shopId: SHOP_A }, quoteId: id }, { start }, { userId: U.staffA.id, label: "Sam Staff" });
-  }
-  return id;
+  return (await bookedInstallOfShopA(db, "Bay Customer", { book })).quoteId;
 }
 
 const openFor = (quoteId: string) => open(req("POST", "/api/shop/work-orders", { quoteId }), ctx());

@@ -1,9 +1,6 @@
-import { type MatrixCase, only, publicRoute } from "./types";
+import { type MatrixCase, onDraftQuote, ownerOnly, publicRoute, shopTeam } from "./types";
 
-/** The demo draft quote (db/seeds/05_demo_shop.ts): in the demo shop, not done, no deposit paid. */
-const DRAFT = "d0000000-0000-4000-8000-000000000001";
 const UNKNOWN_LINK = "A".repeat(43);
-const SHOP = ["shop_staff", "shop_owner"] as const;
 
 export const cases: MatrixCase[] = [
   {
@@ -21,26 +18,7 @@ export const cases: MatrixCase[] = [
     expect: publicRoute(404),
     note: "unknown link",
   },
-  {
-    route: "/api/shop/quotes/[id]/payments",
-    method: "GET",
-    path: `/api/shop/quotes/${DRAFT}/payments`,
-    expect: only([...SHOP]),
-  },
-  {
-    route: "/api/shop/quotes/[id]/payments",
-    method: "POST",
-    path: `/api/shop/quotes/${DRAFT}/payments`,
-    body: { amount: "", method: "cash" },
-    expect: only([...SHOP], 422),
-    note: "no amount: refused before any lookup",
-  },
-  {
-    route: "/api/shop/quotes/[id]/refunds",
-    method: "POST",
-    path: `/api/shop/quotes/${DRAFT}/refunds`,
-    body: { amount: "10.00" },
-    expect: only(["shop_owner"], 409),
-    note: "owner only; a draft has no deposit to refund",
-  },
+  onDraftQuote("payments", "GET", shopTeam()),
+  onDraftQuote("payments", "POST", shopTeam(422), { body: { amount: "", method: "cash" }, note: "no amount: refused before any lookup" }),
+  onDraftQuote("refunds", "POST", ownerOnly(409), { body: { amount: "10.00" }, note: "owner only; a draft has no deposit to refund" }),
 ];

@@ -39,3 +39,45 @@ export const only = (roles: Exclude<Who, "anonymous">[], status = 200): Record<W
   shop_owner: roles.includes("shop_owner") ? status : 403,
   admin: roles.includes("admin") ? status : 403,
 });
+
+/** The demo shop's staff and owner both get `status`. */
+export const shopTeam = (status = 200): Record<Who, number> => only(["shop_staff", "shop_owner"], status);
+/** The shop's owner gets `status`; its staff `staffStatus` (a 403 before any parsing, unless told). */
+export const ownerOnly = (status = 200, staffStatus = 403): Record<Who, number> => ({
+  ...only(["shop_owner"], status),
+  shop_staff: staffStatus,
+});
+
+/**
+ * The demo draft quote (db/seeds/05_demo_shop.ts), written by the demo staff member so staff and
+ * owner both see it: in the demo shop, not done, not booked, no deposit paid.
+ */
+export const DRAFT = "d0000000-0000-4000-8000-000000000001";
+
+/**
+ * Rows for the routes under `${base}/[id]`, each called with `id` in the path: `leaf` names the
+ * route below the id ("" for `${base}/[id]` itself).
+ */
+export function rowsOn(base: string, id: string) {
+  return (
+    leaf: string,
+    method: MatrixCase["method"],
+    expect: Record<Who, number>,
+    more: Pick<MatrixCase, "body" | "note"> = {},
+  ): MatrixCase => {
+    const tail = leaf ? `/${leaf}` : "";
+    return { route: `${base}/[id]${tail}`, method, path: `${base}/${id}${tail}`, expect, ...more };
+  };
+}
+/** Rows for the routes under /api/shop/quotes/[id], called on the demo draft quote. */
+export const onDraftQuote = rowsOn("/api/shop/quotes", DRAFT);
+
+/** An owner's settings form (path = route) saved with an invalid `body`. */
+export const invalidOwnerForm = (route: string, body: unknown): MatrixCase => ({
+  route,
+  method: "PUT",
+  path: route,
+  body,
+  expect: ownerOnly(422),
+  note: "invalid body: owners get field errors, staff a 403 before any parsing",
+});

@@ -1,5 +1,6 @@
+import type { Page } from "playwright-core";
 import { signInOverHttp } from "@/scripts/http-session";
-import { BASE } from "./browser";
+import { BASE, signInAs } from "./browser";
 
 export const DEMO_PASSWORD = "hubface-demo-1";
 export const DEMO = {
@@ -23,6 +24,12 @@ export function cookieFor(who: Who): Promise<string> {
   if (who === "anonymous") return Promise.resolve("");
   if (!cache.has(who)) cache.set(who, sessionCookie(DEMO[who]));
   return cache.get(who)!;
+}
+
+/** `page`, with the demo account of `role` signed in on it through the sign-in form. */
+export async function signedInDemo(page: Page, role: DemoRole): Promise<Page> {
+  await signInAs(page, DEMO[role], DEMO_PASSWORD);
+  return page;
 }
 
 /** A call as the app's own pages make it: a browser sends Origin on every POST/PUT/PATCH/DELETE (lib/platform/http/origin.ts). */

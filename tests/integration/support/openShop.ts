@@ -28,12 +28,15 @@ export async function openShopEveryDay(db: Knex): Promise<void> {
   );
 }
 
-/** A fresh database with the two test shops, the job queue (no background workers) and shop A open every day. */
-export async function setUpBookableShops(db: Knex): Promise<void> {
+/**
+ * A fresh database with the two test shops, the job queue (no background workers) and shop A open
+ * every day: by `open`, 07:00–19:00 unless told (quoteJourney's openAllDay opens it all day).
+ */
+export async function setUpBookableShops(db: Knex, open: (db: Knex) => Promise<unknown> = openShopEveryDay): Promise<void> {
   await rebuild(db);
   await seedShops(db);
   await startTestBoss();
-  await openShopEveryDay(db);
+  await open(db);
 }
 
 /** Stops the queue and closes both database pools: call last in afterAll. */
