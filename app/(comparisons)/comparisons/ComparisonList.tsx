@@ -5,6 +5,7 @@ import { useState } from "react";
 import { DisplayToggle } from "@/components/comparison/DisplayToggle";
 import { useDisplayPrefs } from "@/components/comparison/useDisplayPrefs";
 import { Alert } from "@/components/ui/Alert";
+import { SearchField } from "@/components/ui/SearchField";
 import { buttonClass } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { api } from "@/lib/platform/client/api";
@@ -34,17 +35,15 @@ export function ComparisonList({ initial }: { initial: ListData }) {
   return (
     <div className="flex flex-col gap-4">
       <Card className="flex flex-wrap items-end gap-4 p-4">
-        <label className="flex min-w-[14rem] flex-1 flex-col gap-1 text-sm font-medium text-basalt-800">
-          Search by name or tire size
-          <input
-            type="search"
-            value={search}
-            onChange={(e) => setSearch(e.target.value)}
-            maxLength={100}
-            placeholder="e.g. 35x12.50 or trail"
-            className="min-h-10 rounded-lg border border-basalt-300 bg-white px-3 text-base placeholder:text-basalt-500"
-          />
-        </label>
+        <SearchField
+          label="Search by name or tire size"
+          value={search}
+          onValue={setSearch}
+          maxLength={100}
+          placeholder="e.g. 35x12.50 or trail"
+          className="min-w-[14rem] flex-1 text-basalt-800"
+          inputClassName="min-h-10 bg-white text-base placeholder:text-basalt-500"
+        />
         <label className="flex flex-col gap-1 text-sm font-medium text-basalt-800">
           Sort
           <select

@@ -1,6 +1,7 @@
 "use client";
 import { useQuery } from "@tanstack/react-query";
 import { useState } from "react";
+import { SearchField } from "@/components/ui/SearchField";
 import { Alert } from "@/components/ui/Alert";
 import { Card } from "@/components/ui/Card";
 import { Table, type TableColumn } from "@/components/ui/Table";
@@ -39,16 +40,14 @@ export function UsersTable({ initial, shops, selfId }: { initial: UserItem[]; sh
   const sorted = useSortedRows(users.data ?? [], COLUMNS);
   return (
     <Card>
-      <label className="mb-4 flex max-w-sm flex-col gap-1 text-sm font-medium">
-        {USERS_SEARCH_LABEL}
-        <input
-          className="min-h-10 rounded-lg border border-basalt-300 px-3"
-          value={search}
-          onChange={(e) => setSearch(e.target.value)}
-          type="search"
-          maxLength={100}
-        />
-      </label>
+      <SearchField
+        label={USERS_SEARCH_LABEL}
+        value={search}
+        onValue={setSearch}
+        maxLength={100}
+        className="mb-4 max-w-sm"
+        inputClassName="min-h-10"
+      />
       {users.isError && <Alert tone="error">{(users.error as Error).message}</Alert>}
       {/* On a phone each account reflows into a block with its own labels, so the header row goes. */}
       <Table
