@@ -47,8 +47,9 @@ export function FigureWithUnit<U extends string>({
   error: string | undefined;
   unit: UnitChoice<U>;
 }) {
+  // Tops aligned: a long hint under the figure would otherwise push its unit select down, away from the figure.
   return (
-    <div className="flex flex-wrap items-end gap-3">
+    <div className="flex flex-wrap items-start gap-3">
       <TextField
         id={`${idPrefix}-${name}`}
         className="w-48"
