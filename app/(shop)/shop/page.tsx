@@ -5,14 +5,14 @@ import { Card } from "@/components/ui/Card";
 import { LinkButton } from "@/components/ui/LinkButton";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { requirePageCaller } from "@/lib/platform/auth/session";
-import { shopIdOf, shopQueries } from "@/lib/shop/queries";
+import { shopIdOf, shopQueries, SHOP_ANY } from "@/lib/shop/queries";
 import { catalogItemQueries } from "@/lib/shop/catalog/itemQueries";
 import { LowStockNote } from "@/components/catalog/LowStockNote";
 
 export const metadata: Metadata = { title: "Your shop" };
 
 export default async function ShopPage() {
-  const caller = await requirePageCaller("/shop", ["shop_staff", "shop_owner"]);
+  const caller = await requirePageCaller("/shop", SHOP_ANY);
   // Scoped by the session's shop id: nobody sees another shop's people.
   const shopId = shopIdOf(caller);
   const [shop, people, lowStock] = await Promise.all([

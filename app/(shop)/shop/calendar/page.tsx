@@ -4,7 +4,7 @@ import { requirePageCaller } from "@/lib/platform/auth/session";
 import { bookingQueries } from "@/lib/shop/bookings/queries";
 import { calendarQuerySchema } from "@/lib/shop/bookings/schema";
 import { wallTime } from "@/lib/shop/bookings/zoned";
-import { shopIdOf } from "@/lib/shop/queries";
+import { shopIdOf, SHOP_ANY } from "@/lib/shop/queries";
 import { BayCalendar } from "./BayCalendar";
 import { weekStart } from "./bayEvents";
 
@@ -12,7 +12,7 @@ export const metadata: Metadata = { title: "Calendar" };
 
 /** The shop's bookings per bay, a day or a week at a time; staff drag a booking or pick it to move it, or open its quote. */
 export default async function CalendarPage({ searchParams }: { searchParams: Promise<{ from?: string; days?: string }> }) {
-  const caller = await requirePageCaller("/shop/calendar", ["shop_staff", "shop_owner"]);
+  const caller = await requirePageCaller("/shop/calendar", SHOP_ANY);
   const parsed = calendarQuerySchema.safeParse(await searchParams);
   const query = parsed.success ? parsed.data : {};
   const days = query.days ?? 7;

@@ -5,6 +5,7 @@ import { Card } from "@/components/ui/Card";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { Pagination } from "@/components/ui/Pagination";
 import { requirePageCaller } from "@/lib/platform/auth/session";
+import { SHOP_ANY } from "@/lib/shop/queries";
 import { fieldErrorsOf } from "@/lib/platform/http/route";
 import { type QuoteListQuery, quoteListQuerySchema, quoteListSearch } from "@/lib/shop/quotes/listQuery";
 import { quoteQueries, quoteScopeOf } from "@/lib/shop/quotes/queries";
@@ -31,7 +32,7 @@ function readQuery(params: Params): { query: QuoteListQuery; errors: Record<stri
 }
 
 export default async function QuotesPage({ searchParams }: { searchParams: Promise<Params> }) {
-  const caller = await requirePageCaller("/shop/quotes", ["shop_staff", "shop_owner"]);
+  const caller = await requirePageCaller("/shop/quotes", SHOP_ANY);
   const { query, errors } = readQuery(await searchParams);
   const list = await quoteQueries.pageQuotes(quoteScopeOf(caller), query);
   const pageCount = Math.max(1, Math.ceil(list.total / list.pageSize));

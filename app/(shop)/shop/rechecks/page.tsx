@@ -3,7 +3,7 @@ import Link from "next/link";
 import { Card } from "@/components/ui/Card";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { requirePageCaller } from "@/lib/platform/auth/session";
-import { shopIdOf } from "@/lib/shop/queries";
+import { shopIdOf, SHOP_ANY } from "@/lib/shop/queries";
 import { RECHECK_NOTE } from "@/lib/shop/workOrders/vocabulary";
 import { workOrderQueries } from "@/lib/shop/workOrders/queries";
 import { recheckSlotQueries } from "@/lib/shop/workOrders/recheckSlotQueries";
@@ -14,7 +14,7 @@ export const metadata: Metadata = { title: "Re-checks" };
 
 /** The counter's "due for re-check" list: finished jobs whose customers are due back for the lug and ring re-check. */
 export default async function RechecksPage() {
-  const caller = await requirePageCaller("/shop/rechecks", ["shop_staff", "shop_owner"]);
+  const caller = await requirePageCaller("/shop/rechecks", SHOP_ANY);
   const shopId = shopIdOf(caller);
   const [days, due, slotMinutes] = await Promise.all([
     workOrderQueries.recheckDays(shopId),

@@ -4,13 +4,13 @@ import { PageHeader } from "@/components/ui/PageHeader";
 import { requirePageCaller } from "@/lib/platform/auth/session";
 import { pageGuard } from "@/lib/platform/http/pageGuard";
 import { formatBp, formatCents } from "@/lib/shop/quotes/money";
-import { shopIdOf, shopQueries } from "@/lib/shop/queries";
+import { shopIdOf, shopQueries, SHOP_OWNER } from "@/lib/shop/queries";
 import { SettingsForm } from "./SettingsForm";
 
 export const metadata: Metadata = { title: "Shop settings" };
 
 export default async function SettingsPage() {
-  const caller = await requirePageCaller("/shop/settings", ["shop_owner"]);
+  const caller = await requirePageCaller("/shop/settings", SHOP_OWNER);
   const shop = await pageGuard(shopQueries.getShop(shopIdOf(caller)));
   return (
     <>

@@ -1,13 +1,13 @@
 import type { Metadata } from "next";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { requirePageCaller } from "@/lib/platform/auth/session";
-import { shopIdOf, shopQueries } from "@/lib/shop/queries";
+import { shopIdOf, shopQueries, SHOP_OWNER } from "@/lib/shop/queries";
 import { StaffPanel } from "./StaffPanel";
 
 export const metadata: Metadata = { title: "Staff" };
 
 export default async function StaffPage() {
-  const caller = await requirePageCaller("/shop/staff", ["shop_owner"]);
+  const caller = await requirePageCaller("/shop/staff", SHOP_OWNER);
   const data = await shopQueries.staffData(shopIdOf(caller));
   return (
     <>

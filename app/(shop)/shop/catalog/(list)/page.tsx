@@ -3,12 +3,13 @@ import { buttonClass } from "@/components/ui/Button";
 import { LinkButton } from "@/components/ui/LinkButton";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { requirePageCaller } from "@/lib/platform/auth/session";
+import { SHOP_ANY } from "@/lib/shop/queries";
 import { CatalogTable } from "../CatalogTable";
 
 export const metadata: Metadata = { title: "Catalog" };
 
 export default async function CatalogPage() {
-  const caller = await requirePageCaller("/shop/catalog", ["shop_staff", "shop_owner"]);
+  const caller = await requirePageCaller("/shop/catalog", SHOP_ANY);
   const owner = caller.role === "shop_owner";
   return (
     <>

@@ -8,7 +8,7 @@ import { pageGuard } from "@/lib/platform/http/pageGuard";
 import { catalogItemDto } from "@/lib/shop/catalog/api";
 import { catalogItemQueries } from "@/lib/shop/catalog/itemQueries";
 import { catalogItemFormValues } from "@/lib/shop/catalog/itemSchema";
-import { shopIdOf } from "@/lib/shop/queries";
+import { shopIdOf, SHOP_OWNER } from "@/lib/shop/queries";
 import { CatalogItemForm } from "../CatalogItemForm";
 import { ArchiveItemButton } from "./ArchiveItemButton";
 
@@ -17,7 +17,7 @@ export const metadata: Metadata = { title: "Edit catalog item" };
 /** The owner's editor for one item, with what is on the shelf, held by accepted quotes and left to sell. */
 export default async function CatalogItemPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
-  const caller = await requirePageCaller(`/shop/catalog/${id}`, ["shop_owner"]);
+  const caller = await requirePageCaller(`/shop/catalog/${id}`, SHOP_OWNER);
   const item = catalogItemDto(await pageGuard(catalogItemQueries.getCatalogItem(shopIdOf(caller), id)));
   return (
     <>

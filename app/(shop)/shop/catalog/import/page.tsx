@@ -1,13 +1,14 @@
 import type { Metadata } from "next";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { requirePageCaller } from "@/lib/platform/auth/session";
+import { SHOP_OWNER } from "@/lib/shop/queries";
 import { CSV_MAX_BYTES } from "@/lib/shop/catalog/csv";
 import { ImportFlow } from "./ImportFlow";
 
 export const metadata: Metadata = { title: "Import catalog" };
 
 export default async function ImportPage() {
-  await requirePageCaller("/shop/catalog/import", ["shop_owner"]);
+  await requirePageCaller("/shop/catalog/import", SHOP_OWNER);
   return (
     <>
       <PageHeader

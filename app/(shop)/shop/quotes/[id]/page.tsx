@@ -4,7 +4,7 @@ import { requirePageCaller } from "@/lib/platform/auth/session";
 import { pageGuard } from "@/lib/platform/http/pageGuard";
 import { quoteDetailDto } from "@/lib/shop/quotes/api";
 import { quoteQueries, quoteScopeOf } from "@/lib/shop/quotes/queries";
-import { shopQueries } from "@/lib/shop/queries";
+import { shopQueries, SHOP_ANY } from "@/lib/shop/queries";
 import { canBook } from "@/lib/shop/bookings/bookable";
 import { bookingQueries } from "@/lib/shop/bookings/queries";
 import { workOrderQueries } from "@/lib/shop/workOrders/queries";
@@ -20,7 +20,7 @@ export const metadata: Metadata = { title: "Quote" };
 
 export default async function QuotePage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
-  const caller = await requirePageCaller(`/shop/quotes/${id}`, ["shop_staff", "shop_owner"]);
+  const caller = await requirePageCaller(`/shop/quotes/${id}`, SHOP_ANY);
   if (!/^[0-9a-f-]{36}$/i.test(id)) notFound();
   const detail = await pageGuard(quoteQueries.getQuoteDetail(quoteScopeOf(caller), id));
   const shop = await shopQueries.findShop(detail.quote.shop_id);
