@@ -3,7 +3,7 @@ import type { Knex } from "knex";
 import type { QuoteRow } from "@/lib/platform/db/types";
 import { appOrigin } from "@/lib/platform/mail";
 import { queueMailIn } from "@/lib/platform/mail/transactional";
-import { DEFAULT_TIME_ZONE } from "@/lib/shop/bookings/vocabulary";
+import { shopTimeZone } from "@/lib/shop/bookings/timeZoneQueries";
 import { type ShopNoticeEvent, shopNoticeMail } from "./mail";
 
 /** Who hears of the shop's news: the address in the shop's settings, or else its owners' addresses. */
@@ -31,7 +31,7 @@ export async function queueShopNotice(
   // One after another: the transaction is one connection.
   const shop = await trx("shops").where({ id: quote.shop_id }).first("name");
   const customer = await trx("customers").where({ id: quote.customer_id, shop_id: quote.shop_id }).first("name", "phone", "email");
-  const schedule = await trx("shop_schedules").where({ shop_id: quote.shop_id }).first("time_zone");
+  const timeZone = await shopTimeZone(trx, quote.shop_id);
   await queueMailIn(
     trx,
     shopNoticeMail({
@@ -44,7 +44,7 @@ export async function queueShopNotice(
       totalCents: quote.total_cents,
       depositCents: quote.deposit_cents,
       link: `${appOrigin()}/shop/quotes/${quote.id}`,
-      timeZone: schedule?.time_zone ?? DEFAULT_TIME_ZONE,
+      timeZone,
     }),
   );
   return true;
