@@ -21,9 +21,8 @@ export async function quoteMailParties(
 ): Promise<QuoteMailParties | null> {
   const customer = await trx("customers").where({ id: quote.customer_id, shop_id: quote.shop_id }).first("name", "email");
   if (!customer?.email) return null;
-  const [shop, timeZone] = await Promise.all([
-    trx("shops").where({ id: quote.shop_id }).first("name", "address", "phone"),
-    shopTimeZone(trx, quote.shop_id),
-  ]);
+  // One after another: the transaction is one connection (pg deprecates queries overlapping on one client).
+  const shop = await trx("shops").where({ id: quote.shop_id }).first("name", "address", "phone");
+  const timeZone = await shopTimeZone(trx, quote.shop_id);
   return { customer: { name: customer.name, email: customer.email }, shop, timeZone };
 }
