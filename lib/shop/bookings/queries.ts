@@ -41,6 +41,7 @@ import { type Workload, workloadOf } from "./workload";
 import { addDays, formatInstant, wallTime, weekdayOf, zonedInstant } from "./zoned";
 import { recheckWork } from "@/lib/shop/workOrders/recheckLink";
 import { recheckSlotMinutes } from "@/lib/shop/workOrders/recheckSlotQueries";
+import { readTogether } from "@/lib/platform/db/readTogether";
 
 type Db = Knex | Knex.Transaction;
 
@@ -334,9 +335,7 @@ async function liveBookingRow(db: Db, quoteId: string, lock = false, job: Bookin
 /** The quote's live booking as the API shows it, or null. */
 export async function liveBooking(db: Db, quote: Pick<QuoteRow, "id" | "shop_id">): Promise<Booking | null> {
   const row = await liveBookingRow(db, quote.id);
-  if (!row) return null;
-  const [schedule, bays] = await Promise.all([readSchedule(db, quote.shop_id), bookedBays(db, [row.id])]);
-  return bookingDto(row, bays.get(row.id) ?? [], schedule.timeZone);
+  return row ? answer(db, row) : null;
 }
 
 /**
@@ -383,7 +382,12 @@ export async function slotsForJob(
 ): Promise<SlotsAnswer> {
   const shopId = quote.shop_id;
   const now = opts.now ?? new Date();
-  const [work, schedule, bays] = await Promise.all([workFor(db, quote, job), readSchedule(db, shopId), activeBays(db, shopId)]);
+  const [work, schedule, bays] = await readTogether(
+    db,
+    () => workFor(db, quote, job),
+    () => readSchedule(db, shopId),
+    () => activeBays(db, shopId),
+  );
   const today = wallTime(now, schedule.timeZone).date;
   const from = opts.from && opts.from > today ? opts.from : today;
   const days = opts.days ?? 7;
@@ -581,7 +585,11 @@ export async function mailCustomer(
 }
 
 export async function answer(db: Db, row: BookingRow): Promise<Booking> {
-  const [schedule, bays] = await Promise.all([readSchedule(db, row.shop_id), bookedBays(db, [row.id])]);
+  const [schedule, bays] = await readTogether(
+    db,
+    () => readSchedule(db, row.shop_id),
+    () => bookedBays(db, [row.id]),
+  );
   return bookingDto(row, bays.get(row.id) ?? [], schedule.timeZone);
 }
 

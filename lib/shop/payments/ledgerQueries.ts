@@ -17,16 +17,18 @@ import { type InvoiceFigures, invoiceFigures, overLimit } from "./invoice";
 import { createBalanceSession, createRefund, expireSession } from "./provider";
 import { receiptMail, type ReceiptFacts } from "./receiptMail";
 import type { PaymentEvent } from "./schema";
+import { readTogether } from "@/lib/platform/db/readTogether";
 
 type Db = Knex | Knex.Transaction;
 type CheckoutSession = Extract<PaymentEvent, { type: "checkout.session.completed" }>["data"]["object"];
 type ProviderRefund = Extract<PaymentEvent, { type: "refund.updated" }>["data"]["object"];
 
 async function ledger(db: Db, quote: Pick<QuoteRow, "id" | "total_cents">) {
-  const [payments, refunds] = (await Promise.all([
-    db<PaymentRow>("payments").where({ quote_id: quote.id }).orderBy("created_at"),
-    db<PaymentRefundRow>("payment_refunds").where({ quote_id: quote.id }).orderBy("created_at"),
-  ])) as [PaymentRow[], PaymentRefundRow[]];
+  const [payments, refunds] = (await readTogether(
+    db,
+    () => db<PaymentRow>("payments").where({ quote_id: quote.id }).orderBy("created_at"),
+    () => db<PaymentRefundRow>("payment_refunds").where({ quote_id: quote.id }).orderBy("created_at"),
+  )) as [PaymentRow[], PaymentRefundRow[]];
   const figures = invoiceFigures(
     quote.total_cents,
     payments.map((p) => ({ kind: p.kind, status: p.status, amountCents: p.amount_cents })),
@@ -131,10 +133,9 @@ export async function openBalanceCheckout(db: Knex, token: string): Promise<{ ur
     if (!quote) throw new NotFoundError("That quote");
     const figures = await owing(trx, quote);
     await expireOpenBalanceSessions(trx, quote.id);
-    const [customer, shop] = await Promise.all([
-      trx("customers").where({ id: quote.customer_id, shop_id: quote.shop_id }).first("email"),
-      trx("shops").where({ id: quote.shop_id }).first("name"),
-    ]);
+    // One after another: the transaction is one connection.
+    const customer = await trx("customers").where({ id: quote.customer_id, shop_id: quote.shop_id }).first("email");
+    const shop = await trx("shops").where({ id: quote.shop_id }).first("name");
     const link = `${appOrigin()}/q/${token}`;
     const session = await createBalanceSession({
       quoteId: quote.id,

@@ -540,11 +540,10 @@ export async function markSent(
       public_token_hash: hashToken(token),
       valid_until: trx.raw("now() + make_interval(days => ?)", [shop.quote_validity_days]) as unknown as Date,
     });
-    const [now, lines, author] = await Promise.all([
-      getQuote(trx, scope, id),
-      readLines(trx, id),
-      quote.created_by ? trx("users").where({ id: quote.created_by }).first("name") : null,
-    ]);
+    // One after another: the transaction is one connection.
+    const now = await getQuote(trx, scope, id);
+    const lines = await readLines(trx, id);
+    const author = quote.created_by ? await trx("users").where({ id: quote.created_by }).first("name") : null;
     const doc = buildQuoteDocument({ shop, quote: now, customer, lines, preparedBy: author?.name ?? null, sentAt: new Date() });
     await trx("quote_documents").insert({ quote_id: id, sent_by: actor.userId, document: JSON.stringify(doc) });
     return doc;

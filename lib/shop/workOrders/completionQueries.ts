@@ -25,7 +25,9 @@ export async function queueCompletionMail(trx: Knex.Transaction, shopId: string,
   await trx("quotes")
     .where({ id: quote.id })
     .update({ public_token_hash: hashToken(token) });
-  const [order, money] = await Promise.all([getWorkOrder(trx, shopId, workOrderId), paymentsOf(trx, quote)]);
+  // One after another: the transaction is one connection.
+  const order = await getWorkOrder(trx, shopId, workOrderId);
+  const money = await paymentsOf(trx, quote);
   await queueMailIn(
     trx,
     completionMail({
