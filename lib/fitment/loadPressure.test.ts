@@ -9,7 +9,7 @@ import {
   loadPressureBasis,
   pressureForLoad,
 } from "./loadPressure";
-import { forTireShares } from "./loadPressureTestUtil";
+import { LOAD_RATED_TIRES, forTireShares } from "./loadPressureTestUtil";
 import { LOAD_INDEX_KG, MAX_LOAD_INDEX } from "./loadSpeed";
 import { errorField, nonFinite, real } from "./testUtil";
 import { parseTireSize } from "./tireSize";
@@ -200,20 +200,8 @@ describe("missing or impossible figures name the field and show an example", () 
 });
 
 describe("properties (fast-check)", () => {
-  const tires = fc.constantFrom(
-    "LT265/75R16 123/120S LRE",
-    "LT285/70R17 121/118Q LRC",
-    "LT315/70R17 121/118S LRD",
-    "37x12.50R17LT 124Q LRD",
-    "35x12.50R20LT 121Q LRE",
-    "P215/75R15 100S",
-    "P265/70R17 113S XL",
-    "265/70R17 115T",
-    "245/45R19 102V XL",
-  );
-
   it("pressure → load → pressure round-trips for every pressure up to the reference", () => {
-    forTireShares(tires, 0.01, 1000, (t, v, share, b) => {
+    forTireShares(LOAD_RATED_TIRES, 0.01, 1000, (t, v, share, b) => {
       const p = share * b.maxPressureKpa;
       const load = loadAtPressure(t, p, { vehicle: v }).loadKg;
       expect(pressureForLoad(t, load, { vehicle: v }).pressureKpa).toBeCloseTo(p, 6);
@@ -221,7 +209,7 @@ describe("properties (fast-check)", () => {
   });
 
   it("load → pressure → load round-trips for every load up to the maximum", () => {
-    forTireShares(tires, 0.01, 1000, (t, v, share, b) => {
+    forTireShares(LOAD_RATED_TIRES, 0.01, 1000, (t, v, share, b) => {
       const load = share * b.maxLoadKg;
       const p = pressureForLoad(t, load, { vehicle: v });
       expect(loadAtPressure(t, p.pressureKpa, { vehicle: v }).loadKg).toBeCloseTo(load, 6);
@@ -233,7 +221,7 @@ describe("properties (fast-check)", () => {
 
   it("load grows with pressure and pressure with load; the exponent is 0.585 or 0.5 (TRA)", () => {
     fc.assert(
-      fc.property(tires, real(0, 1), real(0, 1), (t, a, c) => {
+      fc.property(LOAD_RATED_TIRES, real(0, 1), real(0, 1), (t, a, c) => {
         const b = loadPressureBasis(t);
         expect(Object.values(LOAD_PRESSURE_EXPONENT)).toContain(b.exponent);
         const [lo, hi] = a < c ? [a, c] : [c, a];
@@ -244,7 +232,7 @@ describe("properties (fast-check)", () => {
   });
 
   it("no output is NaN or infinite over the valid domain", () => {
-    forTireShares(tires, 0, 500, (t, v, share, b) => {
+    forTireShares(LOAD_RATED_TIRES, 0, 500, (t, v, share, b) => {
       expect(nonFinite(loadAtPressure(t, share * b.maxInflationKpa, { vehicle: v }))).toEqual([]);
       if (share > 0) expect(nonFinite(pressureForLoad(t, share * b.maxLoadKg, { vehicle: v }))).toEqual([]);
     });

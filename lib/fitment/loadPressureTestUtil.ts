@@ -6,6 +6,24 @@ import fc from "fast-check";
 import { type LoadPressureBasis, type VehicleKind, loadPressureBasis } from "./loadPressure";
 import { real } from "./testUtil";
 
+/**
+ * Sizes that carry a load rating, one or more of each kind the load tables treat apart: LT metric
+ * in load ranges C, D and E, LT flotation, P-metric standard and extra load, and Euro-metric
+ * standard and XL. Both modules' properties run over all of them.
+ */
+export const LOAD_RATED_TIRES = fc.constantFrom(
+  "LT265/75R16 123/120S LRE",
+  "LT285/70R17 121/118Q LRC",
+  "LT315/70R17 121/118S LRD",
+  "37x12.50R17LT 124Q LRD",
+  "35x12.50R20LT 121Q LRE",
+  "P215/75R15 100S",
+  "P265/70R17 113S",
+  "P265/70R17 113S XL",
+  "265/70R17 115T",
+  "245/45R19 102V XL",
+);
+
 /** Either vehicle class a tire is rated on. */
 export const VEHICLE_KIND = fc.constantFrom<VehicleKind>("passenger-car", "light-truck");
 

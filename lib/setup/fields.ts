@@ -36,5 +36,8 @@ export const SETUP_FIELD_EXAMPLE = {
   spacerMm: "25 (leave empty for none)",
 } as const;
 
-/** The words for each backspacing reference, as the screens and messages say them. */
+/** The two ways a wheel's position is given, as the setup forms offer them. */
+export const POSITION_MODE_LABEL = { offset: "Offset", backspacing: "Backspacing" } as const;
+
+/** The words for each backspacing reference, as the screens and messages say them (inside a sentence). */
 export const BACKSPACING_REFERENCE_LABEL = { flange: "flange edge", "bead-seat": "bead seat" } as const;

@@ -1,5 +1,6 @@
 import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
+import { labelOptions } from "@/components/ui/labelOptions";
 import { TextField } from "@/components/ui/TextField";
 import { Segmented } from "@/components/comparison/Segmented";
 import { TORQUE_UNIT_SYMBOL, formatTorqueEntry, type TorqueUnit } from "@/lib/fitment";
@@ -54,10 +55,7 @@ export function RingInputs({
           legend="Torque unit"
           name="ring-unit"
           value={torque.unit}
-          options={[
-            { value: "ftlb", label: "ft·lb" },
-            { value: "nm", label: "N·m" },
-          ]}
+          options={labelOptions(TORQUE_UNIT_SYMBOL)}
           onChange={torque.switchUnit}
           className="mb-6"
         />

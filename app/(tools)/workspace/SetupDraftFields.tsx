@@ -1,12 +1,13 @@
 "use client";
 import type { ComponentProps } from "react";
 import { TextField } from "@/components/ui/TextField";
+import { labelOptions } from "@/components/ui/labelOptions";
 import { cx } from "@/components/ui/cx";
 import { Segmented } from "@/components/comparison/Segmented";
 import { clientLazy } from "@/components/ui/clientLazy";
 import type { SetupFigures } from "@/lib/comparisons/compute";
 import type { DraftErrors, SetupDraft } from "@/lib/comparisons/draft";
-import { SETUP_FIELD_LABEL as L } from "@/lib/setup/fields";
+import { BACKSPACING_REFERENCE_LABEL, POSITION_MODE_LABEL, SETUP_FIELD_LABEL as L } from "@/lib/setup/fields";
 import { type DisplayPrefs, formatInches, formatLen, formatNumber } from "@/lib/comparisons/format";
 import { parseTireSize } from "@/lib/fitment/tireSize";
 import { BACKSPACING_DIAGRAM_BOX } from "./backspacingDiagramBox";
@@ -100,10 +101,7 @@ export function SetupDraftFields({
           legend="Wheel position given as"
           name={id("mode")}
           value={draft.mode}
-          options={[
-            { value: "offset", label: "Offset" },
-            { value: "backspacing", label: "Backspacing" },
-          ]}
+          options={labelOptions(POSITION_MODE_LABEL)}
           onChange={onModeChange}
         />
         {draft.mode === "offset" ? (
@@ -121,10 +119,7 @@ export function SetupDraftFields({
               legend={L["position.reference"]}
               name={id("reference")}
               value={draft.reference}
-              options={[
-                { value: "flange", label: "Flange edge" },
-                { value: "bead-seat", label: "Bead seat" },
-              ]}
+              options={labelOptions(BACKSPACING_REFERENCE_LABEL, { capitalize: true })}
               onChange={(reference) => set({ reference }, true)}
             />
             <p className="text-xs text-basalt-600">

@@ -2,13 +2,13 @@
 import { useId, useRef, useState, useSyncExternalStore } from "react";
 import { Segmented } from "@/components/comparison/Segmented";
 import { Button } from "@/components/ui/Button";
+import { labelOptions } from "@/components/ui/labelOptions";
 import type { ComparisonResult } from "@/lib/comparisons/compute";
 import type { DisplayPrefs } from "@/lib/comparisons/format";
 import { FORUM_FORMAT_LABEL, type ForumFormat, forumPost } from "@/lib/comparisons/forumPost";
 import { useShareOrigin } from "./ShareOrigin";
 
 const noSubscribe = () => () => {};
-const FORMATS: ForumFormat[] = ["markdown", "bbcode"];
 
 /**
  * "Copy as forum post": the key figures, the drawing (the share page's Open Graph image) and
@@ -59,7 +59,7 @@ export function ForumPostButton({
           hideLegend
           name={groupName}
           value={format}
-          options={FORMATS.map((f) => ({ value: f, label: FORUM_FORMAT_LABEL[f] }))}
+          options={labelOptions(FORUM_FORMAT_LABEL)}
           onChange={(f) => {
             setFormat(f);
             if (state === "copied") setState("idle");

@@ -3,12 +3,13 @@ import { useFieldArray, useFormContext } from "react-hook-form";
 import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
+import { labelOptions } from "@/components/ui/labelOptions";
 import { SelectField } from "@/components/ui/SelectField";
 import { TextField } from "@/components/ui/TextField";
 import type { BaysSetupInput } from "@/lib/shop/bookings/schema";
-import { BAY_KINDS, BAY_KIND_LABEL } from "@/lib/shop/bookings/vocabulary";
+import { BAY_KIND_LABEL } from "@/lib/shop/bookings/vocabulary";
 
-const KIND_OPTIONS = BAY_KINDS.map((k) => ({ value: k, label: BAY_KIND_LABEL[k] }));
+const KIND_OPTIONS = labelOptions(BAY_KIND_LABEL);
 
 /** The shop's bays, in the order slots try them. A removed bay keeps its past bookings. */
 export function BayListFields() {

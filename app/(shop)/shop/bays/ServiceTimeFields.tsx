@@ -1,13 +1,14 @@
 "use client";
 import { useFormContext } from "react-hook-form";
 import { Card } from "@/components/ui/Card";
+import { labelOptions } from "@/components/ui/labelOptions";
 import { SelectField } from "@/components/ui/SelectField";
 import { TextField } from "@/components/ui/TextField";
 import type { ServiceTime } from "@/lib/shop/bookings/api";
 import type { BaysSetupInput } from "@/lib/shop/bookings/schema";
-import { BAY_KINDS, BAY_KIND_LABEL, SERVICE_UNIT_WORD } from "@/lib/shop/bookings/vocabulary";
+import { BAY_KIND_LABEL, SERVICE_UNIT_WORD } from "@/lib/shop/bookings/vocabulary";
 
-const KIND_OPTIONS = BAY_KINDS.map((k) => ({ value: k, label: BAY_KIND_LABEL[k] }));
+const KIND_OPTIONS = labelOptions(BAY_KIND_LABEL);
 
 /** How long each catalog service keeps the truck, per unit it is sold in, and in which kind of bay. */
 export function ServiceTimeFields({ services }: { services: ServiceTime[] }) {

@@ -6,6 +6,7 @@ import { useState } from "react";
 import { useForm, useWatch } from "react-hook-form";
 import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
+import { labelOptions } from "@/components/ui/labelOptions";
 import { SelectField } from "@/components/ui/SelectField";
 import { TextField } from "@/components/ui/TextField";
 import { fieldBinder } from "@/components/ui/fieldProps";
@@ -20,16 +21,16 @@ import {
   catalogItemSchema,
 } from "@/lib/shop/catalog/itemSchema";
 import { SERVICE_LABEL, UNIT_LABEL } from "@/lib/shop/catalog/labels";
+import { BACKSPACING_REFERENCE_LABEL } from "@/lib/setup/fields";
 
 const FIELDS = [...(Object.keys(CATALOG_ITEM_FIELDS) as (keyof typeof CATALOG_ITEM_FIELDS)[]), "lowStockAt"] as const;
 const L = Object.fromEntries(Object.entries(CATALOG_ITEM_FIELDS).map(([k, f]) => [k, f.label])) as Record<
   keyof typeof CATALOG_ITEM_FIELDS,
   string
 >;
-const opts = (o: Record<string, string>) => Object.entries(o).map(([value, label]) => ({ value, label }));
 /** Optional: "—" leaves the backspacing's reference unsaid. */
-const BACKSPACING_REFERENCES = [{ value: "", label: "—" }, ...opts({ flange: "Flange", "bead-seat": "Bead seat" })];
-const NO_YES = opts({ no: "No", yes: "Yes" });
+const BACKSPACING_REFERENCES = [{ value: "", label: "—" }, ...labelOptions(BACKSPACING_REFERENCE_LABEL, { capitalize: true })];
+const NO_YES = labelOptions({ no: "No", yes: "Yes" });
 
 /**
  * The owner's single-item editor: one tire, wheel or service, checked by the catalog CSV's own
@@ -100,10 +101,14 @@ export function CatalogItemForm({ itemId, initial }: { itemId?: string; initial:
       )}
       {kind === "service" && (
         <div className="grid gap-3 sm:grid-cols-2">
-          <SelectField label={L.serviceType} options={[{ value: "", label: "—" }, ...opts(SERVICE_LABEL)]} {...field("serviceType")} />
+          <SelectField
+            label={L.serviceType}
+            options={[{ value: "", label: "—" }, ...labelOptions(SERVICE_LABEL)]}
+            {...field("serviceType")}
+          />
           <SelectField
             label={L.serviceUnit}
-            options={[{ value: "", label: "The service's usual unit" }, ...opts(UNIT_LABEL)]}
+            options={[{ value: "", label: "The service's usual unit" }, ...labelOptions(UNIT_LABEL)]}
             {...field("serviceUnit")}
           />
         </div>

@@ -6,6 +6,7 @@ import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { Alert } from "@/components/ui/Alert";
 import { Button } from "@/components/ui/Button";
+import { labelOptions } from "@/components/ui/labelOptions";
 import { SelectField } from "@/components/ui/SelectField";
 import { TextField } from "@/components/ui/TextField";
 import { api, applyFieldErrors } from "@/lib/platform/client/api";
@@ -13,7 +14,7 @@ import { counterPaymentSchema, refundSchema } from "@/lib/shop/payments/counterS
 import { COUNTER_METHODS, PAYMENT_FIELD_LABEL, PAYMENT_METHOD_LABEL } from "@/lib/shop/payments/labels";
 
 type Input = z.input<typeof counterPaymentSchema>;
-const METHOD_OPTIONS = COUNTER_METHODS.map((m) => ({ value: m, label: PAYMENT_METHOD_LABEL[m] }));
+const METHOD_OPTIONS = labelOptions(PAYMENT_METHOD_LABEL, { values: COUNTER_METHODS });
 
 /**
  * The counter's money form: a payment of the balance taken in cash or by card, or (owner) a

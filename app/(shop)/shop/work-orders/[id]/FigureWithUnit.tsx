@@ -1,19 +1,15 @@
 "use client";
+import { labelOptions } from "@/components/ui/labelOptions";
 import { SelectField } from "@/components/ui/SelectField";
 import { TextField } from "@/components/ui/TextField";
-import { FIELD_LABEL } from "@/lib/shop/workOrders/vocabulary";
+import { TORQUE_UNIT_SYMBOL } from "@/lib/fitment";
+import { FIELD_LABEL, PRESSURE_UNITS } from "@/lib/shop/workOrders/vocabulary";
 import type { StepFieldGroupProps } from "./stepForm";
 
 /** The units each unit field offers: psi and kPa for the pressure, ft·lb and N·m for the torque. */
 const UNIT_OPTIONS = {
-  pressureUnit: [
-    { value: "psi", label: "psi" },
-    { value: "kPa", label: "kPa" },
-  ],
-  unit: [
-    { value: "ftlb", label: "ft·lb" },
-    { value: "nm", label: "N·m" },
-  ],
+  pressureUnit: PRESSURE_UNITS.map((u) => ({ value: u, label: u })),
+  unit: labelOptions(TORQUE_UNIT_SYMBOL),
 } as const;
 
 /** The unit select beside a figure: its field in the step's form, the unit chosen, and the select's width. */

@@ -1,5 +1,6 @@
 "use client";
 import type { UseFormReturn } from "react-hook-form";
+import { labelOptions } from "@/components/ui/labelOptions";
 import { SelectField } from "@/components/ui/SelectField";
 import { TextField } from "@/components/ui/TextField";
 import { FIELD_LABEL, MATCH_MOUNT_LABEL, MATCH_MOUNT_METHODS, type StepKind } from "@/lib/shop/workOrders/vocabulary";
@@ -63,10 +64,7 @@ export function StepFields({
           id={`${idPrefix}-method`}
           label={FIELD_LABEL.method}
           error={err("method")}
-          options={[
-            { value: "", label: "Pick what was lined up" },
-            ...MATCH_MOUNT_METHODS.map((m) => ({ value: m, label: MATCH_MOUNT_LABEL[m] })),
-          ]}
+          options={[{ value: "", label: "Pick what was lined up" }, ...labelOptions(MATCH_MOUNT_LABEL, { values: MATCH_MOUNT_METHODS })]}
           {...form.register("method")}
         />
       );
