@@ -15,11 +15,12 @@ import { type Draft, type DraftErrors, type SetupDraft, draftFromInput, followTi
 import { fenderUnit, speedUnit, vehicleFieldLabel } from "@/lib/comparisons/fields";
 import type { DisplayPrefs } from "@/lib/comparisons/format";
 import { type ComparisonInput, DEFAULT_INPUT } from "@/lib/comparisons/model";
-import { workspaceParam, workspaceUrl } from "@/lib/comparisons/url";
+import { WORKSPACE_PATH, workspaceParam, workspaceUrl } from "@/lib/comparisons/url";
 import { type LinkProblem, problemText } from "@/lib/setup/url";
 import type { WorkspaceVehicle } from "@/lib/garage/types";
 import { CurrentInputContext } from "./currentInput";
 import { SetupDraftFields } from "./SetupDraftFields";
+import { useAddressBar } from "./useAddressBar";
 import { type Reading, loadReading, readingNow, useReading } from "./useReading";
 import { VehicleFields } from "./VehicleFields";
 
@@ -115,11 +116,7 @@ export function Workspace({
   }
   const prefs = s.prefs;
 
-  const writeUrl = useCallback((url: string, mode: "push" | "replace") => {
-    if (url === `${window.location.pathname}${window.location.search}`) return;
-    if (mode === "push") window.history.pushState(null, "", url);
-    else window.history.replaceState(window.history.state, "", url);
-  }, []);
+  const writeUrl = useAddressBar();
 
   const apply = useCallback(
     (draft: Draft, discrete = false) => {
@@ -149,31 +146,45 @@ export function Workspace({
     apply(draftNow, pending.discrete);
   }, [reading, apply, draftNow]);
 
+  /** Shows the comparison the address bar holds; `unless`: not when it is that comparison already. */
+  const showAddressBar = useCallback(
+    (unless?: ComparisonInput) => {
+      const search = window.location.search;
+      const show = ({ decodeComparison }: Reading) => {
+        const { input } = decodeComparison(search);
+        if (unless && workspaceUrl({ input }) === workspaceUrl({ input: unless })) return;
+        pendingRead.current = null;
+        setState(fromInput(input, prefs));
+        // The saved comparison stays the one being worked on (the save control keeps it too).
+        const v = workspaceParam(search, "vehicle");
+        setVehicleId(garage?.vehicles.some((x) => x.id === v) ? v : null);
+        setLinkProblems([]);
+      };
+      const now = readingNow();
+      if (now) show(now);
+      // The same fetch as useReading's: if it fails, useReading shows the error.
+      else loadReading().then(show, () => undefined);
+    },
+    [prefs, garage],
+  );
+
   useEffect(() => {
-    const show = ({ decodeComparison }: Reading, search: string) => {
-      const { input } = decodeComparison(search);
-      pendingRead.current = null;
-      setState(fromInput(input, prefs));
-      // The saved comparison stays the one being worked on (the save control keeps it too).
-      const v = workspaceParam(search, "vehicle");
-      setVehicleId(garage?.vehicles.some((x) => x.id === v) ? v : null);
-      setLinkProblems([]);
-    };
     const onPop = () => {
       editOpen.current = false;
-      const search = window.location.search;
-      const now = readingNow();
-      if (now) show(now, search);
-      // The same fetch as useReading's: if it fails, useReading shows the error.
-      else
-        loadReading().then(
-          (r) => show(r, search),
-          () => undefined,
-        );
+      showAddressBar();
     };
     window.addEventListener("popstate", onPop);
     return () => window.removeEventListener("popstate", onPop);
-  }, [prefs, garage]);
+  }, [showAddressBar]);
+
+  // Back or Forward into the workspace from another page: Next shows the page as it was first
+  // rendered, while the address bar holds the edits made after. The address bar wins. A bare
+  // /workspace is the page as rendered, so the reading code is not fetched for it.
+  const opened = useRef({ initialInput, showAddressBar });
+  useEffect(() => {
+    const { initialInput: rendered, showAddressBar: showOnce } = opened.current;
+    if (window.location.search !== "" && workspaceUrl({ input: rendered }) !== WORKSPACE_PATH + window.location.search) showOnce(rendered);
+  }, []);
 
   const good = s.good;
   const pickVehicle = useCallback(
@@ -238,7 +249,8 @@ export function Workspace({
   const swap = () => apply({ ...s.draft, current: s.draft.planned, planned: s.draft.current }, true);
   const copyLink = async () => {
     try {
-      await navigator.clipboard.writeText(window.location.href);
+      // From what the screen shows, not from the address bar, which may be a moment behind.
+      await navigator.clipboard.writeText(new URL(workspaceUrl({ input: s.good, savedId, vehicleId }), window.location.origin).href);
       setCopied("done");
     } catch {
       setCopied("failed");
