@@ -611,6 +611,33 @@ describe("sending what the screen shows", () => {
   });
 });
 
+describe("saving what the screen shows", () => {
+  const line = (description: string, unitPriceCents: number) => ({
+    kind: "custom",
+    sku: "",
+    description,
+    quantity: 1,
+    unitPriceCents,
+    discountCents: 0,
+    taxable: false,
+  });
+
+  it("refuses a save from a window opened before another window's save (409), keeping the other's lines", async () => {
+    const { id } = await draftFor();
+    const seen = (await detailOf(id)).quote.updatedAt;
+    // Window A saves a new price; window B, still showing the version before, saves a new description.
+    expect((await put(id, [line("Mount and balance", 25000)], 0, { seenUpdatedAt: seen })).status).toBe(200);
+    const stale = await put(id, [line("Mount, balance and valve stems", 123450)], 0, { seenUpdatedAt: seen });
+    expect(stale.status).toBe(409);
+    expect((await stale.json()).error).toMatch(/^Not saved: this quote was saved from another window or by a colleague/);
+    const lines = await db("quote_lines").where({ quote_id: id }).orderBy("position");
+    expect(lines.map((l) => [l.description, l.unit_price_cents])).toEqual([["Mount and balance", 25000]]);
+    // Reloaded (the newer version on screen), the same edit saves.
+    const now = (await detailOf(id)).quote.updatedAt;
+    expect((await put(id, [line("Mount, balance and valve stems", 25000)], 0, { seenUpdatedAt: now })).status).toBe(200);
+  });
+});
+
 describe("messages a person reads", () => {
   it("never carry zod's raw wording, and name totals problems by the line's own field", async () => {
     const { id } = await draftFor();

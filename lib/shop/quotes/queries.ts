@@ -466,10 +466,24 @@ export type UpdateQuote = z.output<typeof updateQuoteSchema>;
  * come from the catalog. A wheel that does not go on the quoted vehicle's hub is refused, and
  * only hourly lines may be part hours. Problems are keyed by the line's path (lines.2.quantity).
  */
+/**
+ * Refuses (409) a write based on a version of the quote older than the stored one: `seen` is the
+ * `updatedAt` the person's screen was showing. Without `seen` (API callers that do not send it) the
+ * write goes ahead, last one wins.
+ */
+function assertUnchangedSince(quote: Pick<QuoteRow, "updated_at">, seen: string | undefined, message: string): void {
+  if (seen && new Date(quote.updated_at).getTime() !== new Date(seen).getTime()) throw new ConflictError(message);
+}
+
 export async function updateDraft(db: Knex, scope: QuoteScope, id: string, input: UpdateQuote): Promise<void> {
   await db.transaction(async (trx) => {
     const quote = await getQuote(trx, scope, id, true);
     if (quote.status !== "draft") throw new ConflictError("Only a draft can be edited. Take the quote back to draft first.");
+    assertUnchangedSince(
+      quote,
+      input.seenUpdatedAt,
+      "Not saved: this quote was saved from another window or by a colleague after you opened it, and saving would undo their changes. Your changes are still on this screen: note them, reload the quote, and enter them again.",
+    );
     const ids = [...new Set(input.lines.map((l) => l.catalogItemId).filter((x): x is string => !!x))];
     const items = new Map<string, CatalogItemRow>();
     if (ids.length)
@@ -528,11 +542,11 @@ export async function markSent(
   const token = randomToken();
   const document = await db.transaction(async (trx) => {
     const quote = await getQuote(trx, scope, id, true);
-    if (seenUpdatedAt && new Date(quote.updated_at).getTime() !== new Date(seenUpdatedAt).getTime()) {
-      throw new ConflictError(
-        "This quote changed after you opened it (saved from another window or by a colleague). Reload it, check the lines, and send again.",
-      );
-    }
+    assertUnchangedSince(
+      quote,
+      seenUpdatedAt,
+      "This quote changed after you opened it (saved from another window or by a colleague). Reload it, check the lines, and send again.",
+    );
     const customer = await trx("customers").where({ id: quote.customer_id, shop_id: scope.shopId }).first("name", "phone", "email");
     if (!customer?.email) throw new InvalidError("The customer has no e-mail address. Add one before sending.");
     const shop = await trx("shops").where({ id: scope.shopId }).first("name", "address", "phone", "quote_validity_days");

@@ -88,6 +88,8 @@ export const updateQuoteSchema = z.object(
       .max(60, "At most 60 lines."),
     discountCents: centsField("the quote discount"),
     notes: z.string({ error: "Enter the notes as text." }).max(2000, "Use at most 2000 characters.").default(""),
+    /** The version the editor was showing: a quote saved since (another window, a colleague) is not overwritten. */
+    seenUpdatedAt: z.iso.datetime({ offset: true, error: "Reload the quote and save again." }).optional(),
   },
   { error: "Send the lines, the quote discount and the notes." },
 );

@@ -140,6 +140,8 @@ describe("the quote editor's unsaved changes", () => {
     await screen.findByText(/Sent to dace@example.test/);
     expect(calls.map((c) => `${c.method} ${c.url}`)).toEqual([`PUT /api/shop/quotes/${ID}`, `POST /api/shop/quotes/${ID}/send`]);
     expect((calls[0]!.body as { lines: { quantity: number }[] }).lines[1]!.quantity).toBe(1.5);
+    // The save names the version the screen opened with, so a save made meanwhile elsewhere is not overwritten.
+    expect((calls[0]!.body as { seenUpdatedAt: string }).seenUpdatedAt).toBe(detail().quote.updatedAt);
     expect(calls[1]!.body).toEqual({ seenUpdatedAt: "2026-12-01T10:05:00.456Z" });
   });
 

@@ -55,7 +55,8 @@ export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; lab
   const saveNow = async (): Promise<Detail> => {
     const { body, problems: list } = bodyOf(form);
     if (!body) throw new Problems(list);
-    const d = await api<Detail>(`/api/shop/quotes/${q.id}`, { method: "PUT", body });
+    // With the version on screen: a save made meanwhile in another window is refused, not overwritten.
+    const d = await api<Detail>(`/api/shop/quotes/${q.id}`, { method: "PUT", body: { ...body, seenUpdatedAt: q.updatedAt } });
     accept(d);
     return d;
   };
