@@ -166,9 +166,48 @@ describe("signing off and the status", () => {
     // 17 ft·lbf × 1.355818 N·m per ft·lbf = 23.049 N·m.
     expect(data("beadlock").torqueNm).toBeCloseTo(23.049, 3);
     expect(data("lug_torque").torqueNm).toBe(190);
-    // 35 psi × 6.894757 kPa per psi = 241.32 kPa.
-    expect(data("pressure").pressureKpa).toBeCloseTo(241.32, 2);
+    // 40 psi × 6.894757 kPa per psi = 275.79 kPa.
+    expect(data("pressure").pressureKpa).toBeCloseTo(275.79, 2);
     expect(w.steps.find((s: { step: string }) => s.step === "beadlock")).toMatchObject({ signedBy: "Sam Staff" });
+  });
+
+  it("refuses torque outside the fastener's band and pressure below the road minimum (nothing written); the maker's-table tick signs", async () => {
+    as(U.staffA);
+    const before = await stepRows();
+    const refused = async (body: object, field: string) => {
+      const r = await signAs(id, body);
+      expect(r.status, field).toBe(422);
+      return (await r.json()).fieldErrors?.[field]?.[0] as string;
+    };
+    // 1400 ft·lb × 1.355818 = 1898.1 N·m (NIST SP 811 B.9): inside the engine's 2000 N·m, outside what lug nuts take.
+    expect(await refused({ ...bodyFor("RF", "lug_torque"), torque: "1400", unit: "ftlb" }, "torque")).toMatch(
+      /^Maker's torque \(ft·lb\): 1400 ft·lb \(1898\.1 N·m\) is outside what lug nuts are torqued to, .*Did you mean 140 ft·lb\?/,
+    );
+    // 150 ft·lb = 203.4 N·m on a ring bolt (common practice, no source: 5–70 N·m).
+    expect(await refused({ ...bodyFor("RF", "beadlock"), torque: "150" }, "torque")).toMatch(
+      /^Maker's torque \(ft·lb\): 150 ft·lb \(203\.4 N·m\) is outside what beadlock ring bolts are torqued to, .*Did you mean 15 ft·lb\?/,
+    );
+    // 30 psi = 206.8 kPa (NIST SP 811 B.8) below the road minimum 0.5833 × 448.2 kPa = 261.4 kPa = 37.9 psi.
+    expect(await refused({ ...bodyFor("RF", "pressure"), pressure: "30" }, "pressure")).toMatch(
+      /^Cold pressure set \(psi\): 30 psi \(207 kPa\) is below the road minimum for 35x12\.50R17LT 121Q LRE, 37\.9 psi \(261 kPa\)/,
+    );
+    // The tick does not lift the maximum.
+    expect(await refused({ ...bodyFor("RF", "pressure"), pressure: "80", makerTable: true }, "pressure")).toMatch(/is above the highest/);
+    expect(await stepRows()).toBe(before);
+    expect(
+      await db("work_order_steps").where({ work_order_id: id, position: "RF" }).whereIn("step", ["lug_torque", "beadlock", "pressure"]),
+    ).toEqual([]);
+
+    // On the technician's word for the tire maker's load table it signs, and the record says so.
+    const ok = await signAs(id, { ...bodyFor("RF", "pressure"), pressure: "30", makerTable: true });
+    expect(ok.status).toBe(200);
+    const row = await db("work_order_steps").where({ work_order_id: id, position: "RF", step: "pressure" }).first();
+    expect(row.data).toMatchObject({ unit: "psi", makerTable: true });
+    expect(row.data.pressureKpa).toBeCloseTo(206.84, 2);
+    // A tick on a figure above the minimum does nothing, and the record does not claim it.
+    expect((await signAs(id, { ...bodyFor("RF", "pressure"), makerTable: true })).status).toBe(200);
+    const again = await db("work_order_steps").where({ work_order_id: id, position: "RF", step: "pressure" }).first();
+    expect(again.data).toMatchObject({ unit: "psi", makerTable: false });
   });
 
   it("done is refused while steps are open, naming them; any of the shop's staff signs; done marks the quote installed", async () => {

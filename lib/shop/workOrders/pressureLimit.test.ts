@@ -1,6 +1,14 @@
 import { describe, expect, it } from "vitest";
 import { psiToKpa } from "@/lib/fitment";
-import { aboveMaximum, tirePressureLimits, toSetWords, withPressureToSet } from "./pressureLimit";
+import {
+  aboveMaximum,
+  belowRoadMinimum,
+  isBelowRoadMinimum,
+  pressureRefusal,
+  tirePressureLimits,
+  toSetWords,
+  withPressureToSet,
+} from "./pressureLimit";
 
 describe("the quoted tire's pressure limits", () => {
   it("reads the load range's maximum and the road minimum", () => {
@@ -27,6 +35,21 @@ describe("the quoted tire's pressure limits", () => {
     );
     expect(aboveMaximum(400, "kPa", l, "Cold pressure (kPa)")).toMatch(/^Cold pressure \(kPa\): 400 kPa \(58(\.0)? psi\) is above/);
     expect(aboveMaximum(900, "kPa", null, "Cold pressure (kPa)")).toBeNull();
+  });
+
+  it("refuses below the road minimum unless the maker's load table is ticked (1 psi = 6.894757 kPa, NIST SP 811)", () => {
+    // Flotation load range D: no FMVSS 138 row, so 0.5833 × 50 psi = 29.17 psi = 201.1 kPa (the engine's ratio, no source).
+    const l = tirePressureLimits("37x12.50R17LT 124Q LRD");
+    expect(isBelowRoadMinimum(psiToKpa(29.2), "psi", l)).toBe(false);
+    expect(isBelowRoadMinimum(psiToKpa(29.1), "psi", l)).toBe(true);
+    expect(isBelowRoadMinimum(psiToKpa(20), "psi", null)).toBe(false);
+    expect(belowRoadMinimum(psiToKpa(25), "psi", l, "Cold pressure set (psi)", false)).toMatch(
+      /^Cold pressure set \(psi\): 25 psi \(172 kPa\) is below the road minimum for 37x12\.50R17LT 124Q LRD, 29\.2 psi \(201 kPa\) \(58\.3 % of the pressure at maximum load/,
+    );
+    expect(belowRoadMinimum(psiToKpa(25), "psi", l, "Cold pressure set (psi)", true)).toBeNull();
+    // The maximum holds whatever is ticked.
+    expect(pressureRefusal(psiToKpa(65), "psi", l, "Cold pressure set (psi)", true)).toMatch(/is above the highest pressure/);
+    expect(pressureRefusal(psiToKpa(35), "psi", l, "Cold pressure set (psi)", false)).toBeNull();
   });
 
   it("carries the quote's pressures to set per axle, in the sheet's unit; without them the limits alone", () => {

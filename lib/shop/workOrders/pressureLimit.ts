@@ -3,11 +3,13 @@
  * pressure it allows and its road minimum, from the engine (lib/fitment loadPressureBasis: load
  * range, passenger reference pressures, FMVSS 138 ratio). A counter vehicle keeps no door placard,
  * so the pressure to set comes from the placard and the tire maker's load table; these only bound
- * it. A recorded pressure above the maximum is refused.
+ * it. A recorded pressure above the maximum is refused; one below the road minimum is refused unless
+ * the technician says the tire maker's load table allows it (belowRoadMinimum).
  */
-import { FitmentInputError, loadPressureBasis } from "@/lib/fitment";
+import { FitmentInputError, loadPressureBasis, psiToKpa } from "@/lib/fitment";
 import type { AxlePressure, QuotePressure } from "@/lib/shop/customers/counterPlacard";
 import { pressureWords } from "./signedText";
+import { FIELD_LABEL } from "./vocabulary";
 
 export interface TirePressureLimits {
   tire: string;
@@ -72,3 +74,52 @@ export function aboveMaximum(kpa: number, unit: "psi" | "kPa", limits: TirePress
   if (!limits || kpa <= limits.maxKpa + 1e-6) return null;
   return `${label}: ${pressureWords(kpa, unit)} is above the highest pressure ${limits.tire} allows, ${pressureWords(limits.maxKpa, unit)}; never inflate above the sidewall maximum.`;
 }
+
+/**
+ * How far below the road minimum a figure may be and still read as it on the card: half the card's
+ * last digit in the unit typed (psi to 0.1, kPa whole). The card says "46.4 psi" for 320 kPa, and
+ * 46.4 psi is 319.9 kPa; typing what the card shows must not be refused.
+ */
+const shownAs = (unit: "psi" | "kPa") => (unit === "psi" ? psiToKpa(0.05) : 0.5);
+
+/**
+ * The pressure is below the quoted tire's road minimum as the card shows it (false without limits).
+ *
+ * @example
+ * isBelowRoadMinimum(psiToKpa(30), "psi", tirePressureLimits("LT285/70R17 121/118Q LRE")); // true (320 kPa = 46.4 psi)
+ */
+export function isBelowRoadMinimum(kpa: number, unit: "psi" | "kPa", limits: TirePressureLimits | null): boolean {
+  return !!limits && kpa < limits.minimumKpa - shownAs(unit);
+}
+
+/**
+ * The refusal of a recorded pressure below the tire's road minimum, unless `makerTable` (the
+ * technician's tick) says the tire maker's load table allows it for this load; null otherwise.
+ *
+ * Why a tick and not a plain refusal: the road minimum is the app's figure (FMVSS 138 Table 1
+ * from memory, or a share of the maximum with no source for flotation sizes), and the tire maker's
+ * own load table comes first; a technician may set a lower figure read from it, and says so on the
+ * record. Why not an "aired down" tick: this step is the pressure the truck leaves the shop on, a
+ * road pressure; airing down for the trail happens at the trail.
+ *
+ * @example
+ * belowRoadMinimum(psiToKpa(30), "psi", limits, "Cold pressure set (psi)", false);
+ * // "Cold pressure set (psi): 30 psi (207 kPa) is below the road minimum for LT285/70R17 121/118Q LRE, 46.4 psi (320 kPa) (…); …"
+ */
+export function belowRoadMinimum(
+  kpa: number,
+  unit: "psi" | "kPa",
+  limits: TirePressureLimits | null,
+  label: string,
+  makerTable: boolean,
+): string | null {
+  if (!limits || makerTable || !isBelowRoadMinimum(kpa, unit, limits)) return null;
+  return `${label}: ${pressureWords(kpa, unit)} is below the road minimum for ${limits.tire}, ${pressureWords(limits.minimumKpa, unit)} (${limits.minimumSource}); set at least that, or tick "${FIELD_LABEL.makerTable}" only if the tire maker's load table gives this pressure for this load.`;
+}
+
+/**
+ * What the sheet's form and the server both refuse of a recorded pressure against the quoted
+ * tire's limits: above the maximum always, below the road minimum without the tick.
+ */
+export const pressureRefusal = (kpa: number, unit: "psi" | "kPa", limits: TirePressureLimits | null, label: string, makerTable: boolean) =>
+  aboveMaximum(kpa, unit, limits, label) ?? belowRoadMinimum(kpa, unit, limits, label, makerTable);

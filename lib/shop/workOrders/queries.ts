@@ -19,9 +19,9 @@ import type { FitmentSummary } from "@/lib/shop/quotes/fitment";
 import { recheckMail } from "./recheckMail";
 import { trailAnglesOf } from "./trailAngles";
 import { recheckLinkExpiry, recheckUrl } from "./recheckLink";
-import { aboveMaximum, tirePressureLimits } from "./pressureLimit";
+import { isBelowRoadMinimum, pressureRefusal, tirePressureLimits } from "./pressureLimit";
 import { type SignedStep, pressureFieldLabel } from "./schema";
-import { POSITION_LABEL, type PressureEntryUnit, STEP_LABEL, WORK_ORDER_STATUS_LABEL } from "./vocabulary";
+import { POSITION_LABEL, STEP_LABEL, WORK_ORDER_STATUS_LABEL } from "./vocabulary";
 
 /** The planned tire of a quote's stored fitment summary (lib/shop/quotes/fitment.ts), when it has one. */
 function plannedTireOf(fitment: unknown): string | null {
@@ -153,12 +153,16 @@ export async function signStep(db: Knex, shopId: string, id: string, signed: Sig
     if (!requiredSteps(row).some((s) => s.position === signed.position && s.step === signed.step)) {
       throw InvalidError.fields({ position: [`${what} is not on this work order.`] });
     }
+    let data: object = signed.data;
     if (signed.step === "pressure") {
-      // Never recorded above what the quoted tire allows: nothing is signed, the field says why.
+      // Held to the quoted tire's limits by the rule the sheet's form applies (pressureRefusal): never
+      // above the maximum, below the road minimum only on the technician's word for the maker's table.
       const q = (await trx("quotes").where({ id: row.quote_id }).first("fitment")) as { fitment: unknown } | undefined;
-      const d = signed.data as { pressureKpa: number; unit: PressureEntryUnit };
-      const refused = aboveMaximum(d.pressureKpa, d.unit, tirePressureLimits(plannedTireOf(q?.fitment)), pressureFieldLabel(d.unit));
+      const limits = tirePressureLimits(plannedTireOf(q?.fitment));
+      const d = signed.data;
+      const refused = pressureRefusal(d.pressureKpa, d.unit, limits, pressureFieldLabel(d.unit), d.makerTable);
       if (refused) throw InvalidError.fields({ pressure: [refused] });
+      data = { ...d, makerTable: d.makerTable && isBelowRoadMinimum(d.pressureKpa, d.unit, limits) };
     }
     await trx("work_order_steps")
       .insert({
@@ -166,7 +170,7 @@ export async function signStep(db: Knex, shopId: string, id: string, signed: Sig
         shop_id: shopId,
         position: signed.position,
         step: signed.step,
-        data: JSON.stringify(signed.data),
+        data: JSON.stringify(data),
         signed_by_user_id: actor.userId,
         signed_by: actor.label,
         signed_at: trx.fn.now(),

@@ -12,6 +12,15 @@ describe("signed step words", () => {
     expect(pressureWords(240, "kPa")).toBe("240 kPa (34.8 psi)");
   });
 
+  it("says on the record when a pressure below the road minimum was set to the tire maker's load table", () => {
+    expect(signedText({ step: "pressure", data: { pressureKpa: 30 * 6.894757, unit: "psi", makerTable: false } })).toBe(
+      "Set cold to 30 psi (207 kPa)",
+    );
+    expect(signedText({ step: "pressure", data: { pressureKpa: 30 * 6.894757, unit: "psi", makerTable: true } })).toBe(
+      "Set cold to 30 psi (207 kPa), below the road minimum, to the tire maker's load table for this load",
+    );
+  });
+
   it("reads a fitted step back with its DOT week and year", () => {
     expect(signedText({ step: "fitted", data: { tire: "T", wheel: "W", dotCode: "2326", dotWeek: 23, dotYear: 2026 } })).toBe(
       "T on W; DOT date code 2326 (week 23 of 2026)",

@@ -41,6 +41,8 @@ interface StepData extends Readings {
   torqueNm: number;
   unit: string;
   pressureKpa: number;
+  /** Set below the road minimum on the tire maker's load table (the technician's tick). */
+  makerTable?: boolean;
   innerGrams: number;
   outerGrams: number;
   before: Readings;
@@ -61,7 +63,9 @@ export function signedText(s: Pick<SignedOff, "step" | "data">): string {
     case "bead_seat":
       return "Beads seated following the cautions";
     case "pressure":
-      return `Set cold to ${pressureWords(d.pressureKpa, d.unit as "psi" | "kPa")}`;
+      return `Set cold to ${pressureWords(d.pressureKpa, d.unit as "psi" | "kPa")}${
+        d.makerTable ? ", below the road minimum, to the tire maker's load table for this load" : ""
+      }`;
     case "balance":
       return `${FIELD_LABEL.innerGrams.replace(" (g)", "")} ${d.innerGrams} g, outer ${d.outerGrams} g`;
     case "lug_torque":

@@ -84,6 +84,7 @@ export const FIELD_LABEL = {
   acknowledged: "Beads seated following the cautions above",
   pressure: "Cold pressure set",
   pressureUnit: "Pressure unit",
+  makerTable: "Below the road minimum: the tire maker's load table gives this pressure for this load",
   innerGrams: "Inner plane weight (g)",
   outerGrams: "Outer plane weight (g)",
   lugCount: "Lug nuts",

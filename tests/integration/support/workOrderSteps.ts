@@ -11,7 +11,8 @@ export function bodyFor(position: string, step: string): object {
     case "bead_seat":
       return { position, step, acknowledged: true };
     case "pressure":
-      return { position, step, pressure: "35", pressureUnit: "psi" };
+      // Above the quoted 35x12.50R17LT load range E's road minimum, 0.5833 × 65 = 37.9 psi (the engine's ratio, no source).
+      return { position, step, pressure: "40", pressureUnit: "psi" };
     case "balance":
       return { position, step, innerGrams: "42.5", outerGrams: "0" };
     case "lug_torque":

@@ -13,7 +13,9 @@ import type { StepValues } from "./stepForm";
 afterEach(cleanup);
 
 function Probe({ limits }: { limits: TirePressureLimits | null }) {
-  const form = useForm<StepValues>({ defaultValues: { step: "pressure", position: "lf", pressure: "", pressureUnit: "psi" } });
+  const form = useForm<StepValues>({
+    defaultValues: { step: "pressure", position: "lf", pressure: "", pressureUnit: "psi", makerTable: false },
+  });
   return <PressureFields form={form} idPrefix="t" limits={limits} />;
 }
 
@@ -44,5 +46,15 @@ describe("the work order's cold pressure step", () => {
     expect(document.body.textContent).toContain(
       "Cold, to the figure for this tire and load (door placard or the tire maker's load table).",
     );
+  });
+
+  it("offers the maker's load table tick only for a figure below the road minimum (0.5833 × 65 psi = 37.9 psi, no source)", async () => {
+    render(<Probe limits={LIMITS} />);
+    const field = screen.getByLabelText(pressureFieldLabel("psi"));
+    await userEvent.type(field, "38");
+    expect(screen.queryByLabelText(FIELD_LABEL.makerTable)).toBeNull();
+    await userEvent.clear(field);
+    await userEvent.type(field, "30");
+    expect(screen.getByLabelText(FIELD_LABEL.makerTable)).toBeTruthy();
   });
 });

@@ -73,7 +73,13 @@ export function StepFields({
       return (
         <>
           {text("ringBolts", FIELD_LABEL.ringBolts, { inputMode: "numeric", hint: "Common: 16, 24, 30, 32" })}
-          <TorqueFields form={form} idPrefix={idPrefix} boltCount={Number.isInteger(bolts) ? bolts : null} what="The ring maker's figure" />
+          <TorqueFields
+            form={form}
+            idPrefix={idPrefix}
+            boltCount={Number.isInteger(bolts) ? bolts : null}
+            what="The ring maker's figure"
+            step="beadlock"
+          />
           {check("passesDone", FIELD_LABEL.passesDone)}
         </>
       );
@@ -92,7 +98,7 @@ export function StepFields({
     case "lug_torque":
       return (
         <>
-          <TorqueFields form={form} idPrefix={idPrefix} boltCount={lugCount} what="The vehicle maker's figure" />
+          <TorqueFields form={form} idPrefix={idPrefix} boltCount={lugCount} what="The vehicle maker's figure" step="lug_torque" />
           {check("passesDone", FIELD_LABEL.passesDone)}
         </>
       );

@@ -1,7 +1,7 @@
 "use client";
 import { useState } from "react";
-import { FitmentInputError, requireTorqueNm, switchTorqueUnit, torqueEntryNm, type TorqueUnit } from "@/lib/fitment";
-import { torqueFieldLabel } from "@/lib/shop/workOrders/schema";
+import { FitmentInputError, requireTorqueNm, switchTorqueUnit, torqueEntryNm, torqueFromNm, type TorqueUnit } from "@/lib/fitment";
+import { type TorqueStep, torqueBandRefusal, torqueFieldLabel } from "@/lib/shop/workOrders/schema";
 import { FigureWithUnit } from "./FigureWithUnit";
 import { type StepFieldGroupProps, errorAt } from "./stepForm";
 import { TorquePlanView } from "./TorquePlanView";
@@ -9,16 +9,19 @@ import { TorquePlanView } from "./TorquePlanView";
 /**
  * The maker's torque with its unit. Switching the unit converts the figure typed (NIST SP 811
  * B.9, through lib/fitment) rather than relabelling it; a figure that cannot be read keeps its
- * unit and says why. Below, the engine's passes and order for that figure.
+ * unit and says why. Below, the engine's passes and order for that figure, only for a figure the
+ * step accepts (inside the fastener's band): no passes are drawn for a figure that will be refused.
  */
 export function TorqueFields({
   form,
   idPrefix,
   boltCount,
   what,
+  step,
 }: StepFieldGroupProps & {
   boltCount: number | null;
   what: string;
+  step: TorqueStep;
 }) {
   const [switchError, setSwitchError] = useState<string | null>(null);
   const unit = form.watch("unit") as TorqueUnit;
@@ -28,6 +31,7 @@ export function TorqueFields({
   try {
     const read = torqueEntryNm({ text, unit, exact: null }, label);
     nm = read === null ? null : requireTorqueNm(read, unit, label);
+    if (nm !== null && torqueBandRefusal(torqueFromNm(nm, unit), unit, step, label)) nm = null;
   } catch {
     nm = null;
   }

@@ -27,7 +27,7 @@ export function emptyStep(step: StepKind, position: StepPosition, w: Pick<WorkOr
     case "bead_seat":
       return { ...base, acknowledged: false };
     case "pressure":
-      return { ...base, pressure: "", pressureUnit: "psi" };
+      return { ...base, pressure: "", pressureUnit: "psi", makerTable: false };
     case "balance":
       return { ...base, innerGrams: "", outerGrams: "" };
     case "lug_torque":
