@@ -30,7 +30,7 @@ export function PredictionTable({
   return (
     <div>
       <div
-        className="relative overflow-x-auto"
+        className="scroll-cue relative overflow-x-auto"
         tabIndex={0}
         role="region"
         aria-label="Predicted clearances (scrolls sideways on narrow screens)"

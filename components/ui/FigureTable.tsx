@@ -151,7 +151,12 @@ export function FigureTable<R>({
   );
   if (!scrollRegion) return table;
   return (
-    <div className={cx("relative overflow-x-auto", scrollRegion.className)} tabIndex={0} role="region" aria-label={scrollRegion.label}>
+    <div
+      className={cx("scroll-cue relative overflow-x-auto", scrollRegion.className)}
+      tabIndex={0}
+      role="region"
+      aria-label={scrollRegion.label}
+    >
       {table}
     </div>
   );

@@ -61,7 +61,7 @@ export function TireSizeEquivalents() {
         </p>
       )}
       <div
-        className="relative mt-2 min-h-64 overflow-x-auto"
+        className="scroll-cue relative mt-2 min-h-64 overflow-x-auto"
         tabIndex={0}
         role="region"
         aria-label="Equivalent sizes (scrolls sideways on narrow screens)"

@@ -116,7 +116,7 @@ export function BayCalendar({ initial, today, askedDays }: { initial: CalendarAn
         role="region"
         aria-label="Bookings by bay"
         tabIndex={0}
-        className="relative overflow-x-auto rounded-card bg-white p-3 shadow-card ring-1 ring-basalt-100"
+        className="scroll-cue relative overflow-x-auto rounded-card bg-white p-3 shadow-card ring-1 ring-basalt-100"
       >
         <div className="bay-calendar" style={{ minWidth: `${4 + data.bays.length * shownDays * 7}rem` }}>
           <ClosedDays.Provider value={closed}>

@@ -110,7 +110,7 @@ export function CatalogTable({ canEdit = false }: { canEdit?: boolean }) {
   return (
     // `relative`: the screen-reader-only header of the last column is positioned absolutely; without a
     // positioned scroller it escaped the scroll and made the whole page 959 px wide on a phone.
-    <Card className="relative overflow-x-auto" tabIndex={0} role="region" aria-label="Catalog items">
+    <Card className="scroll-cue relative overflow-x-auto" tabIndex={0} role="region" aria-label="Catalog items">
       <div className="mb-4 flex flex-wrap items-end gap-3">
         <SearchField
           label={CATALOG_QUERY_LABELS.q}

@@ -11,7 +11,7 @@ export function OverviewSection({ id, title, lead, children }: { id: string; tit
       <p className="text-sm text-basalt-600">{lead}</p>
       {/* Focusable, so a keyboard can scroll it too (axe: scrollable-region-focusable). */}
       <div
-        className="relative mt-3 overflow-x-auto"
+        className="scroll-cue relative mt-3 overflow-x-auto"
         tabIndex={0}
         role="region"
         aria-label={`${title} (scrolls sideways on narrow screens)`}

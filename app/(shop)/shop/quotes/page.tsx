@@ -59,7 +59,7 @@ export default async function QuotesPage({ searchParams }: { searchParams: Promi
         {list.total === 1 ? "1 quote" : `${list.total.toLocaleString("en-US")} quotes`}
         {filtered ? (list.total === 1 ? " matches" : " match") : ""}
       </p>
-      <Card className="relative overflow-x-auto" tabIndex={0} role="region" aria-label="Quotes">
+      <Card className="scroll-cue relative overflow-x-auto" tabIndex={0} role="region" aria-label="Quotes">
         {list.total === 0 ? (
           <p className="text-basalt-600">{filtered ? "No quote matches. Try fewer words, or clear the search." : "No quotes yet."}</p>
         ) : (

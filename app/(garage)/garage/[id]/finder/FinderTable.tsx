@@ -130,7 +130,7 @@ export function FinderTable({
         }}
       />
       {/* Only the table scrolls sideways (its own focusable region), so the filter and the pages stay in view. */}
-      <div className="relative overflow-x-auto" tabIndex={0} role="region" aria-label="Fitments found (scrolls sideways)">
+      <div className="scroll-cue relative overflow-x-auto" tabIndex={0} role="region" aria-label="Fitments found (scrolls sideways)">
         <Table
           testId="finder-results"
           caption="Fitments found, best first; column headers sort"

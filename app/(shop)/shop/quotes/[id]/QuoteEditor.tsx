@@ -183,7 +183,7 @@ export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; lab
             {/* relative: the table's screen-reader-only labels are absolutely positioned; without a
                 containing block here they escape the scrolling region and widen the page. */}
             <div
-              className="relative overflow-x-auto"
+              className="scroll-cue relative overflow-x-auto"
               tabIndex={0}
               role="region"
               aria-label="Quote lines (scrolls sideways on a narrow screen)"
