@@ -23,6 +23,8 @@ import { type LineDraft, catalogLine, fromCatalog } from "@/lib/shop/quotes/cata
 import { queueShopNotice } from "@/lib/shop/notices/noticeQueries";
 import { shopTimeZone } from "@/lib/shop/bookings/timeZoneQueries";
 import { stockFollowsQuote } from "@/lib/shop/catalog/stockQueries";
+import { releaseInstallTime } from "@/lib/shop/bookings/releaseQueries";
+import { assertNoOpenWorkOrder } from "@/lib/shop/workOrders/openOrderQueries";
 import { isLinkToken } from "@/lib/platform/tokenFormat";
 import { hashToken, randomToken } from "@/lib/platform/tokens";
 
@@ -571,7 +573,11 @@ export async function latestSentDocument(db: Knex | Knex.Transaction, quoteId: s
   return row ? (row.document as QuoteDocument) : null;
 }
 
-/** Staff moves: back to draft (the link stops working), declined, installed. */
+/**
+ * Staff moves: back to draft (the link stops working), declined, installed. Installed from here
+ * is for a job without a work order (one with a sheet is installed by its "done"); the install's
+ * bay time still ahead is given back then.
+ */
 export async function staffTransition(
   db: Knex,
   scope: QuoteScope,
@@ -579,10 +585,13 @@ export async function staffTransition(
   to: "draft" | "declined" | "installed",
   actor: Actor,
   note = "",
+  now = new Date(),
 ) {
   await db.transaction(async (trx) => {
     const quote = await getQuote(trx, scope, id, true);
+    if (to === "installed") await assertNoOpenWorkOrder(trx, quote.shop_id, quote.id);
     await transition(trx, quote, to, actor, note, to === "draft" ? { public_token_hash: null } : {});
+    if (to === "installed") await releaseInstallTime(trx, quote.id, now);
   });
 }
 

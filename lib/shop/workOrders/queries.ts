@@ -14,6 +14,8 @@ import { queueMailIn } from "@/lib/platform/mail/transactional";
 import { hashToken, randomToken } from "@/lib/platform/tokens";
 import { type RecheckDue, type WorkOrder, requiredSteps, unsignedSteps, workOrderDto } from "./api";
 import { queueCompletionMail } from "./completionQueries";
+import { findWorkOrderOfQuote } from "./openOrderQueries";
+import { releaseInstallTime } from "@/lib/shop/bookings/releaseQueries";
 import { stepPhotoRows } from "./photoQueries";
 import type { FitmentSummary } from "@/lib/shop/quotes/fitment";
 import { recheckMail } from "./recheckMail";
@@ -129,12 +131,6 @@ export async function getWorkOrder(db: Db, shopId: string, id: string): Promise<
   );
 }
 
-/** The quote's work order id, if it has one in the shop. */
-export async function findWorkOrderIdOfQuote(db: Db, shopId: string, quoteId: string): Promise<string | undefined> {
-  const row = await db("work_orders").where({ quote_id: quoteId, shop_id: shopId }).first("id");
-  return row?.id as string | undefined;
-}
-
 /**
  * Signs one step off as the caller: the work order must be in the bay and have that step. A step
  * signed again is replaced (who and when are the latest). Nothing is written when refused.
@@ -183,8 +179,9 @@ export async function signStep(db: Knex, shopId: string, id: string, signed: Sig
 }
 
 /**
- * booked → in the bay → done. Done needs every step signed; it marks the quote installed, sets
- * the re-check date from the shop's number of days and queues the completion mail with the invoice.
+ * booked → in the bay → done. Done needs every step signed; it marks the quote installed (unless
+ * it already is), gives back the install's bay time still ahead, sets the re-check date from the
+ * shop's number of days and queues the completion mail with the invoice.
  */
 export async function moveWorkOrder(
   db: Knex,
@@ -209,7 +206,10 @@ export async function moveWorkOrder(
         throw new ConflictError(`Sign every step off before marking the work order done. Still open: ${list.join("; ")}.`);
       }
       const quote = (await trx<QuoteRow>("quotes").where({ id: row.quote_id, shop_id: shopId }).forUpdate().first())!;
-      await transition(trx, quote, "installed", actor, `work order done`);
+      // A quote already marked installed (from its page, before that was refused while a work order is open)
+      // stays so: the work order still closes, or it would sit in the bay for good.
+      if (quote.status !== "installed") await transition(trx, quote, "installed", actor, `work order done`);
+      await releaseInstallTime(trx, quote.id, now);
       const shop = await trx("shops").where({ id: shopId }).first("recheck_after_days");
       const due = new Date(now.getTime() + (shop?.recheck_after_days ?? 7) * 86_400_000);
       await trx("work_orders")
@@ -362,7 +362,7 @@ export async function queueDueRechecks(db: Knex, now = new Date()): Promise<numb
 /** These queries on the app's database handle, for pages and route handlers. */
 export const workOrderQueries = bindAppDb({
   dueForRecheck,
-  findWorkOrderIdOfQuote,
+  findWorkOrderOfQuote,
   getWorkOrder,
   moveWorkOrder,
   openWorkOrder,

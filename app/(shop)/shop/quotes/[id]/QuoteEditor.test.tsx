@@ -250,3 +250,32 @@ describe("the quote editor's dates", () => {
     expect(screen.getByTestId("quote-history").textContent).toContain("Sam Staff, Thu, Dec 3, 2026, 8:30 PM MST");
   });
 });
+
+describe("the quote editor's Mark installed", () => {
+  // This app's rule (common practice, no source): a job with a work order is finished on its signed sheet.
+  it("is not offered while the quote's work order is open: a link to the work order is, and nothing is sent", () => {
+    const calls = server(() => ({ status: 500, body: {} }));
+    renderWithQuery(
+      <QuoteEditor
+        initial={detail({ status: "deposit_paid" })}
+        labourRateCents={12500}
+        workOrder={{ id: "w0000000-0000-4000-8000-000000000001", status: "in_bay" }}
+      />,
+      { retry: false },
+    );
+    expect(screen.queryByRole("button", { name: "Mark installed" })).toBeNull();
+    const link = screen.getByRole("link", { name: "Finish the work order to mark installed" });
+    expect(link.getAttribute("href")).toBe("/shop/work-orders/w0000000-0000-4000-8000-000000000001");
+    expect(calls).toEqual([]);
+  });
+
+  it("is offered for a quote with its deposit paid and no work order", async () => {
+    const calls = server(() => ({ status: 200, body: detail({ status: "installed" }) }));
+    const user = userEvent.setup();
+    renderEditor(detail({ status: "deposit_paid" }));
+    expect(screen.queryByRole("link", { name: "Finish the work order to mark installed" })).toBeNull();
+    await user.click(screen.getByRole("button", { name: "Mark installed" }));
+    await waitFor(() => expect(screen.getByTestId("quote-status").textContent).toBe("Installed"));
+    expect(calls.map((c) => [c.url, c.body])).toEqual([[`/api/shop/quotes/${ID}/status`, { to: "installed" }]]);
+  });
+});

@@ -20,6 +20,7 @@ import { HubChecksCard } from "./HubChecksCard";
 import { QuoteLinesTable } from "./QuoteLinesTable";
 import { QuoteTotalsCard } from "./QuoteTotalsCard";
 import type { QuoteDetail as Detail } from "@/lib/shop/quotes/api";
+import type { WorkOrderStatus } from "@/lib/platform/db/types";
 
 const LEAVE = "This quote has changes that are not saved. Leave without saving them?";
 
@@ -36,7 +37,16 @@ const problemsOf = (e: unknown): string[] =>
       ? describeFieldErrors(e.body.fieldErrors)
       : [(e as Error).message];
 
-export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; labourRateCents: number }) {
+export function QuoteEditor({
+  initial,
+  labourRateCents,
+  workOrder = null,
+}: {
+  initial: Detail;
+  labourRateCents: number;
+  /** The quote's work order, when it has one: while it is not done, the quote is installed from there. */
+  workOrder?: { id: string; status: WorkOrderStatus } | null;
+}) {
   const [detail, setDetail] = useState(initial);
   const q = detail.quote;
   const draft = q.status === "draft";
@@ -112,6 +122,8 @@ export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; lab
     setForm((cur) => ({ ...cur, lines: f(cur.lines) }));
   };
   const fit = q.fitment;
+  // A job with a sheet in progress is installed by the sheet's "done"; the server refuses it here too.
+  const workOrderOpen = workOrder !== null && workOrder.status !== "done";
 
   return (
     <>
@@ -154,7 +166,12 @@ export function QuoteEditor({ initial, labourRateCents }: { initial: Detail; lab
                 Mark declined
               </Button>
             )}
-            {q.status === "deposit_paid" && (
+            {q.status === "deposit_paid" && workOrderOpen && (
+              <Link className={buttonClass("primary")} href={`/shop/work-orders/${workOrder.id}`}>
+                Finish the work order to mark installed
+              </Link>
+            )}
+            {q.status === "deposit_paid" && !workOrderOpen && (
               <Button pending={move.isPending} onClick={() => move.mutate("installed")}>
                 Mark installed
               </Button>

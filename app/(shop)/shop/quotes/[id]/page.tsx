@@ -29,10 +29,11 @@ export default async function QuotePage({ params }: { params: Promise<{ id: stri
   const givenBack = invoiceDepositGivenBack(payments.invoice);
   const [booking, setup] =
     canBook(q) && !givenBack ? await Promise.all([bookingQueries.liveBooking(q), bookingQueries.getSetup(q.shop_id)]) : [null, null];
-  const workOrderId = (await workOrderQueries.findWorkOrderIdOfQuote(q.shop_id, q.id)) ?? null;
+  const workOrder = (await workOrderQueries.findWorkOrderOfQuote(q.shop_id, q.id)) ?? null;
+  const workOrderId = workOrder?.id ?? null;
   return (
     <>
-      <QuoteEditor initial={quoteDetailDto(detail)} labourRateCents={shop?.labour_rate_cents ?? 0} />
+      <QuoteEditor initial={quoteDetailDto(detail)} labourRateCents={shop?.labour_rate_cents ?? 0} workOrder={workOrder} />
       {givenBack && q.status === "deposit_paid" && (
         <Alert tone="info" className="mt-5">
           {DEPOSIT_REFUNDED}
