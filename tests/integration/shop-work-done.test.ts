@@ -38,12 +38,12 @@ const markInstalled = (quoteId: string) =>
 /** A quote of shop A, deposit paid, its install booked at the first free start; with its work order in the bay when asked. */
 async function bookedJob({ inBay = false } = {}) {
   as(U.staffA);
-  const { quoteId } = await bookedInstallOfShopA(db, "Done Customer");
+  const { quoteId, email } = await bookedInstallOfShopA(db, "Done Customer");
   const booking = await db("bookings").where({ quote_id: quoteId, kind: "install" }).first();
-  if (!inBay) return { quoteId, booking, workOrderId: "" };
+  if (!inBay) return { quoteId, email, booking, workOrderId: "" };
   const workOrderId = await openFor(quoteId);
   expect((await moveTo(workOrderId, "in_bay")).status).toBe(200);
-  return { quoteId, booking, workOrderId };
+  return { quoteId, email, booking, workOrderId };
 }
 
 async function signEverything(id: string) {
@@ -63,6 +63,16 @@ async function calendarIds(): Promise<string[]> {
   const answer = await calendar(db, SHOP_A, { from: wallTime(new Date(), "America/Denver").date, days: 15 });
   return answer.bookings.map((b) => b.id);
 }
+
+/** The booking mails queued for one customer, by subject. */
+const mailsTo = async (email: string) =>
+  (
+    (await db.withSchema("pgboss").from("job").where({ name: "mail.send" }).select("data")) as {
+      data: { to: string; subject: string; text: string; attachments?: { contentType: string }[] };
+    }[]
+  )
+    .map((r) => r.data)
+    .filter((m) => m.to === email);
 
 const reservations = (bookingId: string) =>
   db("bay_reservations")
@@ -135,7 +145,7 @@ describe("marking installed on the quote page while a work order is open", () =>
 
 describe("the install's bay time once the work is done", () => {
   it("a booking not started yet is cancelled as of the moment the quote was marked installed; the slot search and calendar free it", async () => {
-    const { quoteId, booking } = await bookedJob();
+    const { quoteId, email, booking } = await bookedJob();
     const start = new Date(booking.starts_at).toISOString();
     expect(await freeStarts()).not.toContain(start);
     expect(await calendarIds()).toContain(booking.id);
@@ -150,6 +160,12 @@ describe("the install's bay time once the work is done", () => {
     expect(await reservations(booking.id)).toEqual([]);
     expect(await freeStarts()).toContain(start);
     expect(await calendarIds()).not.toContain(booking.id);
+    // The customer's calendar entry is withdrawn (the same entry, its SEQUENCE raised), saying why.
+    expect(after.sequence).toBe(booking.sequence + 1);
+    const released = (await mailsTo(email)).filter((m) => m.subject.startsWith("No longer needed: your install at Shop A, "));
+    expect(released).toHaveLength(1);
+    expect(released[0]!.attachments?.[0]?.contentType).toMatch(/method=CANCEL$/);
+    expect(released[0]!.text).toMatch(/the work on quote Q-\d+ \(.+\) is done, so the install booked for .+ is no longer needed/);
   });
 
   it("a booking under way when the work order is done ends then: its later bay time is freed, what was used stays", async () => {

@@ -32,4 +32,17 @@ describe("booking e-mails name what is booked", () => {
     expect(m.attachments![0]!.filename).toBe("recheck-Q-1003.ics");
     expect(m.attachments![0]!.content.toString()).toContain("SUMMARY:Lug and ring re-check\\, Shop A (Q-1003)");
   });
+
+  it("an install no longer needed because the work was done: the calendar entry withdrawn, no stay asked for (common practice, no source)", () => {
+    const m = bookingMail({ ...facts, kind: "released", sequence: 1 });
+    expect(m.subject).toMatch(/^No longer needed: your install at Shop A, /);
+    expect(m.text).toContain("the work on quote Q-1003 (Half-ton pickup) is done, so the install booked for");
+    expect(m.text).not.toContain("Plan on the truck staying");
+    expect(m.attachments![0]!.contentType).toBe("text/calendar; charset=utf-8; method=CANCEL");
+    // RFC 5546 §3.2.5 (CANCEL): STATUS:CANCELLED cancels the whole event; the SEQUENCE is the one the booking was raised to.
+    const ics = m.attachments![0]!.content.toString();
+    expect(ics).toContain("METHOD:CANCEL");
+    expect(ics).toContain("STATUS:CANCELLED");
+    expect(ics).toContain("SEQUENCE:1");
+  });
 });

@@ -8,7 +8,10 @@ import type { OutgoingMail } from "@/lib/platform/mail";
 import { bookingCalendar, bookingUid } from "./ics";
 import { formatClock, formatDuration, formatInstant } from "./zoned";
 
-export type BookingMailKind = "confirmed" | "moved" | "cancelled" | "reminder";
+export type BookingMailKind = "confirmed" | "moved" | "cancelled" | "released" | "reminder";
+
+/** The kinds that take the entry off the customer's calendar. */
+const WITHDRAWN: readonly BookingMailKind[] = ["cancelled", "released"];
 
 export interface BookingMailFacts {
   kind: BookingMailKind;
@@ -54,6 +57,8 @@ function subjectOf(f: BookingMailFacts, when: string): string {
       return `Moved: your ${wordsOf(f).word} at ${f.shop.name} is now ${when}`;
     case "cancelled":
       return `Cancelled: your ${wordsOf(f).word} at ${f.shop.name}, ${when}`;
+    case "released":
+      return `No longer needed: your ${wordsOf(f).word} at ${f.shop.name}, ${when}`;
     case "reminder":
       return `Reminder: your ${wordsOf(f).word} at ${f.shop.name} tomorrow, ${formatClock(f.start, f.timeZone)}`;
   }
@@ -67,6 +72,8 @@ function leadOf(f: BookingMailFacts, when: string): string {
       return `your ${wordsOf(f).word} for quote Q-${f.quoteNumber} (${f.vehicle}) has moved${f.previousStart ? ` from ${formatInstant(f.previousStart, f.timeZone)}` : ""} to ${when}.`;
     case "cancelled":
       return `your ${wordsOf(f).word} for quote Q-${f.quoteNumber} (${f.vehicle}) on ${when} is cancelled. Call the shop to book another time.`;
+    case "released":
+      return `the work on quote Q-${f.quoteNumber} (${f.vehicle}) is done, so the ${wordsOf(f).word} booked for ${when} is no longer needed and comes off your calendar.`;
     case "reminder":
       return `a reminder that your ${wordsOf(f).word} for quote Q-${f.quoteNumber} (${f.vehicle}) is tomorrow, ${when}.`;
   }
@@ -80,12 +87,12 @@ export function bookingMail(f: BookingMailFacts): OutgoingMail {
   const minutes = Math.round((f.end.getTime() - f.start.getTime()) / 60_000);
   const when = `${formatInstant(f.start, f.timeZone)} – ${formatClock(f.end, f.timeZone)}`;
   const place = [f.shop.name, f.shop.address].filter(Boolean).join(", ");
-  const stay =
-    f.kind === "cancelled" ? "" : `Plan on the truck staying ${formatDuration(minutes)}. Bring the lug lock key if your wheels have one.`;
+  const withdrawn = WITHDRAWN.includes(f.kind);
+  const stay = withdrawn ? "" : `Plan on the truck staying ${formatDuration(minutes)}. Bring the lug lock key if your wheels have one.`;
   const calendar = bookingCalendar({
     uid: bookingUid(f.bookingId, f.origin),
     sequence: f.sequence,
-    cancelled: f.kind === "cancelled",
+    cancelled: withdrawn,
     start: f.start,
     end: f.end,
     title: `${wordsOf(f).title}, ${f.shop.name} (Q-${f.quoteNumber})`,
@@ -105,7 +112,7 @@ export function bookingMail(f: BookingMailFacts): OutgoingMail {
       {
         filename: `${wordsOf(f).file}-Q-${f.quoteNumber}.ics`,
         content: Buffer.from(calendar, "utf8"),
-        contentType: `text/calendar; charset=utf-8; method=${f.kind === "cancelled" ? "CANCEL" : "REQUEST"}`,
+        contentType: `text/calendar; charset=utf-8; method=${withdrawn ? "CANCEL" : "REQUEST"}`,
       },
     ],
   };

@@ -3,8 +3,6 @@ import type { Knex } from "knex";
 import type { BayKind, BayRow, BookingKind, BookingRow, CatalogItemRow, QuoteRow, ServiceTimeRow } from "@/lib/platform/db/types";
 import { bindAppDb } from "@/lib/platform/db/bind";
 import { ConflictError, InvalidError, NotFoundError } from "@/lib/platform/errors";
-import { appOrigin, mailFrom } from "@/lib/platform/mail";
-import { queueMailIn } from "@/lib/platform/mail/transactional";
 import { type Actor, type QuoteScope, findByToken, getQuote, readLines } from "@/lib/shop/quotes/queries";
 import { STATUS_LABEL } from "@/lib/shop/quotes/status";
 import {
@@ -22,10 +20,9 @@ import {
   slotDayOption,
 } from "./api";
 import { queueShopNotice } from "@/lib/shop/notices/noticeQueries";
-import { quoteMailParties } from "@/lib/shop/quoteMailQueries";
 import { assertDepositHeld } from "@/lib/shop/payments/depositQueries";
 import { canBook } from "./bookable";
-import { type BookingMailKind, addressOf, bookingMail } from "./mail";
+import { mailCustomer } from "./customerMailQueries";
 import { type BaysSetupValues, type BookingRequest, bookingRequestSchemaFor, openingHoursOf } from "./schema";
 import { type BayLite, type Held, type Schedule, type Slot, type SlotProblem, cannotBook, checkStart, freeSlots } from "./slots";
 import {
@@ -552,36 +549,6 @@ export async function reserve(sp: Knex.Transaction, bookingId: string, shopId: s
       during: sp.raw("tstzrange(?, ?, '[)')", [pl.start.toISOString(), pl.end.toISOString()]),
     })),
   );
-}
-
-/** Queues the booking's e-mail with its calendar file in the same transaction; a customer without an address gets none. */
-export async function mailCustomer(
-  trx: Knex.Transaction,
-  quote: QuoteRow,
-  booking: BookingRow,
-  kind: BookingMailKind,
-  previousStart?: Date,
-): Promise<boolean> {
-  const parties = await quoteMailParties(trx, quote);
-  if (!parties) return false;
-  await queueMailIn(
-    trx,
-    bookingMail({
-      ...parties,
-      kind,
-      job: booking.kind,
-      bookingId: booking.id,
-      sequence: booking.sequence,
-      start: new Date(booking.starts_at),
-      end: new Date(booking.ends_at),
-      quoteNumber: quote.number,
-      vehicle: quote.vehicle_description,
-      origin: appOrigin(),
-      organizerEmail: addressOf(mailFrom()),
-      previousStart,
-    }),
-  );
-  return true;
 }
 
 export async function answer(db: Db, row: BookingRow): Promise<Booking> {

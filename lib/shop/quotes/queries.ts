@@ -591,7 +591,7 @@ export async function staffTransition(
     const quote = await getQuote(trx, scope, id, true);
     if (to === "installed") await assertNoOpenWorkOrder(trx, quote.shop_id, quote.id);
     await transition(trx, quote, to, actor, note, to === "draft" ? { public_token_hash: null } : {});
-    if (to === "installed") await releaseInstallTime(trx, quote.id, now);
+    if (to === "installed") await releaseInstallTime(trx, quote, now);
   });
 }
 

@@ -209,7 +209,7 @@ export async function moveWorkOrder(
       // A quote already marked installed (from its page, before that was refused while a work order is open)
       // stays so: the work order still closes, or it would sit in the bay for good.
       if (quote.status !== "installed") await transition(trx, quote, "installed", actor, `work order done`);
-      await releaseInstallTime(trx, quote.id, now);
+      await releaseInstallTime(trx, quote, now);
       const shop = await trx("shops").where({ id: shopId }).first("recheck_after_days");
       const due = new Date(now.getTime() + (shop?.recheck_after_days ?? 7) * 86_400_000);
       await trx("work_orders")
