@@ -5,16 +5,16 @@ import { formatBp, formatUsd } from "@/lib/shop/quotes/money";
 /**
  * A quote's totals as the counter and the customer both read them: subtotal, the discount when
  * there is one, tax, total, the deposit and the balance due after it. The counter's list names
- * the taxable amount beside the rate (`taxableShown`); `className` places and spaces the list.
+ * the taxable amount beside the rate, as the PDF does: with a discount spread over the lines the
+ * tax is not the rate times the subtotal, and a customer checking it needs the base. `className`
+ * places and spaces the list.
  */
 export function QuoteTotalsList({
   totals: t,
-  taxableShown = false,
   className,
   testIds = {},
 }: {
   totals: QuoteDocument["totals"];
-  taxableShown?: boolean;
   className?: string;
   /** Test ids of the list, the deposit's figure and the balance's, where browser tests read them. */
   testIds?: { list?: string; deposit?: string; balance?: string };
@@ -30,13 +30,7 @@ export function QuoteTotalsList({
         </>
       )}
       <dt>
-        {taxableShown ? (
-          <>
-            Tax {formatBp(t.taxRateBp)} % on {formatUsd(t.taxableCents)}
-          </>
-        ) : (
-          <>Tax ({formatBp(t.taxRateBp)} %)</>
-        )}
+        Tax {formatBp(t.taxRateBp)} % on {formatUsd(t.taxableCents)}
       </dt>
       <dd className="text-right">{formatUsd(t.taxCents)}</dd>
       <dt className="font-semibold">Total</dt>

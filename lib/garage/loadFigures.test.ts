@@ -50,7 +50,7 @@ describe("setupFigures: a 37x12.50R17LT load range D on a truck placarded for 26
 
   it("uses the axle ratings without a scale ticket, and says so", () => {
     const g = setupFigures({ ...DEMO_PROFILE, frontAxleKg: null, rearAxleKg: null }, CURRENT, PLANNED, "metric");
-    expect(g.load?.from).toBe("axle ratings (GAWR)");
+    expect(g.load?.from).toBe("GAWR axle ratings");
   });
 
   it("reports a planned tire that cannot carry the placard load instead of a pressure", () => {
@@ -97,7 +97,7 @@ describe("loadToCarry: what one planned tire must carry on the demo truck", () =
 
   it("reads the axle ratings without a scale ticket, and is null without a placard or loads", () => {
     const noTicket = { ...DEMO_PROFILE, frontAxleKg: null, rearAxleKg: null };
-    expect(loadToCarry(noTicket)?.from).toBe("axle ratings (GAWR)");
+    expect(loadToCarry(noTicket)?.from).toBe("GAWR axle ratings");
     expect(loadToCarry({ ...DEMO_PROFILE, placardTire: null })).toBeNull();
     expect(loadToCarry({ ...noTicket, frontGawrKg: null })).toBeNull();
   });

@@ -7,7 +7,7 @@
 import { type LoadErrors, type LoadPlan, planLoad } from "@/lib/comparisons/loadPlan";
 import { type TrailAngle, planTrail } from "@/lib/comparisons/trailPlan";
 import { FitmentInputError, loadAtPressure, setupGeometry } from "@/lib/fitment";
-import { type LoadProfile, type Units, axleLoadsOf, profileLabels, trailLabelsOf } from "@/lib/garage/loadProfile";
+import { type AxleLoadSource, type LoadProfile, type Units, axleLoadsOf, profileLabels, trailLabelsOf } from "@/lib/garage/loadProfile";
 import { type Setup, toEngineSetup } from "@/lib/setup/model";
 
 export interface SetupFigures {
@@ -17,7 +17,7 @@ export interface SetupFigures {
     messages: string[];
     /** The planned tire itself was refused (typically: its size names no load index), not the load it must carry. */
     tireRefused: boolean;
-    from: "scale ticket" | "axle ratings (GAWR)";
+    from: AxleLoadSource;
   } | null;
   /** Angles with the current and the planned tires; empty when no body point is stored. */
   angles: TrailAngle[];
@@ -103,7 +103,7 @@ export interface LoadToCarry {
   loadKg: number;
   axle: "front" | "rear";
   decidedBy: "placard" | "axle load";
-  from: "scale ticket" | "axle ratings (GAWR)";
+  from: AxleLoadSource;
 }
 
 /**

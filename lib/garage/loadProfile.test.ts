@@ -83,7 +83,7 @@ describe("axleLoadsOf", () => {
     expect(axleLoadsOf({ ...FULL, frontAxleKg: null, rearAxleKg: null })).toEqual({
       frontKg: lbToKg(3700),
       rearKg: lbToKg(3900),
-      from: "axle ratings (GAWR)",
+      from: "GAWR axle ratings",
     });
     expect(axleLoadsOf(emptyProfile("imperial"))).toBeNull();
   });

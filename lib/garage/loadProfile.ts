@@ -239,9 +239,12 @@ export function emptyProfile(units: Units): LoadProfile {
   return p;
 }
 
+/** Where the axle loads a pressure is set for come from, as the sentences that cite them say it. */
+export type AxleLoadSource = "scale ticket" | "GAWR axle ratings";
+
 /** The axle loads the pressure is set for: the scale ticket when there is one, else the axle ratings. */
-export function axleLoadsOf(p: LoadProfile): { frontKg: number; rearKg: number; from: "scale ticket" | "axle ratings (GAWR)" } | null {
+export function axleLoadsOf(p: LoadProfile): { frontKg: number; rearKg: number; from: AxleLoadSource } | null {
   if (p.frontAxleKg !== null && p.rearAxleKg !== null) return { frontKg: p.frontAxleKg, rearKg: p.rearAxleKg, from: "scale ticket" };
-  if (p.frontGawrKg !== null && p.rearGawrKg !== null) return { frontKg: p.frontGawrKg, rearKg: p.rearGawrKg, from: "axle ratings (GAWR)" };
+  if (p.frontGawrKg !== null && p.rearGawrKg !== null) return { frontKg: p.frontGawrKg, rearKg: p.rearGawrKg, from: "GAWR axle ratings" };
   return null;
 }

@@ -53,7 +53,7 @@ describe("the customer accepts", () => {
     const [n] = sent;
     expect(n!.subject).toBe(`Accepted: quote Q-${quote.number} by Ada Accepting`);
     expect(n!.text).toContain(`Ada Accepting accepted quote Q-${quote.number}`);
-    expect(n!.text).toContain(`Customer: Ada Accepting (${q.email})`);
+    expect(n!.text).toContain(`Customer: Ada Accepting · ${q.email}`);
     expect(n!.text).toContain("Vehicle: Test pickup");
     expect(n!.text).toContain(`Open the quote: http://127.0.0.1:3000/shop/quotes/${q.id}`);
     expect(n!.html).toContain(`href="http://127.0.0.1:3000/shop/quotes/${q.id}"`);

@@ -165,7 +165,7 @@ describe("the install's bay time once the work is done", () => {
     const released = (await mailsTo(email)).filter((m) => m.subject.startsWith("No longer needed: your install at Shop A, "));
     expect(released).toHaveLength(1);
     expect(released[0]!.attachments?.[0]?.contentType).toMatch(/method=CANCEL$/);
-    expect(released[0]!.text).toMatch(/the work on quote Q-\d+ \(.+\) is done, so the install booked for .+ is no longer needed/);
+    expect(released[0]!.text).toMatch(/The work on quote Q-\d+ \(.+\) is done, so the install booked for .+ is no longer needed/);
   });
 
   it("a booking under way when the work order is done ends then: its later bay time is freed, what was used stays", async () => {

@@ -26,7 +26,7 @@ describe("booking e-mails name what is booked", () => {
   it("the re-check by its own words, in the subject, the text, the calendar entry and the file name", () => {
     const m = bookingMail({ ...facts, kind: "confirmed", job: "recheck" });
     expect(m.subject).toMatch(/^Booked: your lug and ring re-check at Shop A, /);
-    expect(m.text).toContain("your lug and ring re-check for quote Q-1003 (Half-ton pickup) is booked for");
+    expect(m.text).toContain("Your lug and ring re-check for quote Q-1003 (Half-ton pickup) is booked for");
     // 15:00Z is 9:00 AM MDT (UTC−6 from the second Sunday of March, 15 U.S.C. §260a), a 30-minute stay.
     expect(m.text).toContain("Plan on the truck staying 30 min.");
     expect(m.attachments![0]!.filename).toBe("recheck-Q-1003.ics");
@@ -36,7 +36,7 @@ describe("booking e-mails name what is booked", () => {
   it("an install no longer needed because the work was done: the calendar entry withdrawn, no stay asked for (common practice, no source)", () => {
     const m = bookingMail({ ...facts, kind: "released", sequence: 1 });
     expect(m.subject).toMatch(/^No longer needed: your install at Shop A, /);
-    expect(m.text).toContain("the work on quote Q-1003 (Half-ton pickup) is done, so the install booked for");
+    expect(m.text).toContain("The work on quote Q-1003 (Half-ton pickup) is done, so the install booked for");
     expect(m.text).not.toContain("Plan on the truck staying");
     expect(m.attachments![0]!.contentType).toBe("text/calendar; charset=utf-8; method=CANCEL");
     // RFC 5546 §3.2.5 (CANCEL): STATUS:CANCELLED cancels the whole event; the SEQUENCE is the one the booking was raised to.

@@ -67,15 +67,15 @@ function subjectOf(f: BookingMailFacts, when: string): string {
 function leadOf(f: BookingMailFacts, when: string): string {
   switch (f.kind) {
     case "confirmed":
-      return `your ${wordsOf(f).word} for quote Q-${f.quoteNumber} (${f.vehicle}) is booked for ${when}.`;
+      return `Your ${wordsOf(f).word} for quote Q-${f.quoteNumber} (${f.vehicle}) is booked for ${when}.`;
     case "moved":
-      return `your ${wordsOf(f).word} for quote Q-${f.quoteNumber} (${f.vehicle}) has moved${f.previousStart ? ` from ${formatInstant(f.previousStart, f.timeZone)}` : ""} to ${when}.`;
+      return `Your ${wordsOf(f).word} for quote Q-${f.quoteNumber} (${f.vehicle}) has moved${f.previousStart ? ` from ${formatInstant(f.previousStart, f.timeZone)}` : ""} to ${when}.`;
     case "cancelled":
-      return `your ${wordsOf(f).word} for quote Q-${f.quoteNumber} (${f.vehicle}) on ${when} is cancelled. Call the shop to book another time.`;
+      return `Your ${wordsOf(f).word} for quote Q-${f.quoteNumber} (${f.vehicle}) on ${when} is cancelled. Call the shop to book another time.`;
     case "released":
-      return `the work on quote Q-${f.quoteNumber} (${f.vehicle}) is done, so the ${wordsOf(f).word} booked for ${when} is no longer needed and comes off your calendar.`;
+      return `The work on quote Q-${f.quoteNumber} (${f.vehicle}) is done, so the ${wordsOf(f).word} booked for ${when} is no longer needed and comes off your calendar.`;
     case "reminder":
-      return `a reminder that your ${wordsOf(f).word} for quote Q-${f.quoteNumber} (${f.vehicle}) is tomorrow, ${when}.`;
+      return `A reminder that your ${wordsOf(f).word} for quote Q-${f.quoteNumber} (${f.vehicle}) is tomorrow, ${when}.`;
   }
 }
 

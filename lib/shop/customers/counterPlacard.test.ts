@@ -82,7 +82,7 @@ describe("quotePressure: the cold pressure to set per axle from a counter vehicl
         tire: "37x12.50R17LT 124Q LRD",
       },
     );
-    expect("from" in p && p.from).toBe("axle ratings (GAWR)");
+    expect("from" in p && p.from).toBe("GAWR axle ratings");
   });
 
   it("says so when the quoted tire names no load index, and when no axle figure was given", () => {

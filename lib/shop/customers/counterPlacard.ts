@@ -13,7 +13,14 @@
 import { z } from "zod";
 import type { VehicleKind } from "@/lib/fitment";
 import { setupFigures } from "@/lib/garage/loadFigures";
-import { type CurrentTire, type LoadProfile, type Units, checkLoadProfile, emptyProfile } from "@/lib/garage/loadProfile";
+import {
+  type AxleLoadSource,
+  type CurrentTire,
+  type LoadProfile,
+  type Units,
+  checkLoadProfile,
+  emptyProfile,
+} from "@/lib/garage/loadProfile";
 import type { Setup } from "@/lib/setup/model";
 import { tirePressureLimits, toSetWords } from "@/lib/shop/workOrders/pressureLimit";
 import { pressureWords } from "@/lib/shop/workOrders/signedText";
@@ -95,7 +102,7 @@ export type QuotePressure =
       placardFrontKpa: number;
       placardRearKpa: number;
       /** Where the axle loads came from. */
-      from: "scale ticket" | "axle ratings (GAWR)";
+      from: AxleLoadSource;
       tire: string;
       axles: AxlePressure[];
       /** The quoted tire's highest inflation pressure (the sidewall maximum, lib/shop/workOrders/pressureLimit.ts). */

@@ -20,7 +20,7 @@ describe("shopNoticeMail", () => {
     expect(m.subject).toBe("Accepted: quote Q-1042 by Jo <b>Doe</b>");
     const lines = [
       "accepted quote Q-1042 ($4,307.82). Deposit asked: $1,076.96.",
-      "Customer: Jo <b>Doe</b> (555-0142 · jo@example.test)",
+      "Customer: Jo <b>Doe</b> · 555-0142 · jo@example.test",
       "Vehicle: Ranch truck",
       "Open the quote: http://127.0.0.1:3000/shop/quotes/q1",
     ];

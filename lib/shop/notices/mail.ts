@@ -87,8 +87,12 @@ function headline(f: ShopNoticeFacts): { subject: string; lead: string } {
  */
 export function shopNoticeMail(f: ShopNoticeFacts): OutgoingMail {
   const { subject, lead } = headline(f);
-  const contact = [f.customer.phone, f.customer.email].filter(Boolean).join(" · ");
-  const lines = [lead, `Customer: ${f.customer.name}${contact ? ` (${contact})` : ""}`, `Vehicle: ${f.vehicle}`];
+  // Dots, not brackets: a phone number is often written with its own, "(555) 014-2278".
+  const lines = [
+    lead,
+    `Customer: ${[f.customer.name, f.customer.phone, f.customer.email].filter(Boolean).join(" · ")}`,
+    `Vehicle: ${f.vehicle}`,
+  ];
   return {
     to: f.to,
     subject,

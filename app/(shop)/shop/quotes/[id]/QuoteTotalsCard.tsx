@@ -10,7 +10,6 @@ export function QuoteTotalsCard({ quote: q, stale }: { quote: Detail["quote"]; s
       {stale && <p className="mt-1 text-sm text-tight-800">These are the saved totals; save the lines to update them.</p>}
       <QuoteTotalsList
         totals={{ ...q, balanceCents: q.totalCents - q.depositCents }}
-        taxableShown
         className="mt-3 gap-x-3"
         testIds={{ list: "quote-totals", balance: "quote-balance" }}
       />
