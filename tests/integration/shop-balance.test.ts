@@ -35,6 +35,7 @@ const act = (await import("@/app/api/q/[token]/route")).POST;
 const balance = await import("@/app/api/q/[token]/balance/route");
 const counter = await import("@/app/api/shop/quotes/[id]/payments/route");
 const refunds = (await import("@/app/api/shop/quotes/[id]/refunds/route")).POST;
+const statusRoute = (await import("@/app/api/shop/quotes/[id]/status/route")).POST;
 const quotes = await import("@/app/api/shop/quotes/route");
 const sendRoute = (await import("@/app/api/shop/quotes/[id]/send/route")).POST;
 const customers = await import("@/app/api/shop/customers/route");
@@ -401,5 +402,58 @@ describe("refunding a deposit on a cancelled booking", () => {
       /^The payment provider refused the refund: Refund amount \(1000\) is greater than unrefunded amount/,
     );
     expect(await count("payment_refunds")).toBe(rows);
+  });
+});
+
+describe("a refunded deposit on the invoice and on the quote", () => {
+  /*
+   * By hand in integer cents (common practice, no source): a refund the provider confirmed is money
+   * given back, so it no longer counts against the total. Quote total 4,307.82, deposit 1,076.96.
+   * - refunded 125.12: deposit held 1,076.96 − 125.12 = 951.84; balance due 4,307.82 − 951.84 = 3,355.98;
+   *   after 1,000.00 at the counter, 3,355.98 − 1,000.00 = 2,355.98 still to pay.
+   */
+  const owner = { userId: U.ownerA.id, label: "Olive Owner" };
+  const markAs = (id: string, to: string) => statusRoute(req("POST", `/api/shop/quotes/${id}/status`, { to }), ctx({ id }));
+
+  /** A deposit-paid quote whose booking was made and cancelled. */
+  async function cancelledQuote() {
+    const q = await depositPaidQuote();
+    await book(q.id);
+    await cancelInstall(db, { shopId: SHOP_A }, q.id, owner);
+    return q;
+  }
+  /** The owner refunds `amount` through the SDK; waits for the provider's webhook confirming it. */
+  async function refunded(id: string, amount: string) {
+    as(U.ownerA);
+    const before = forwarder.delivered.length;
+    expect((await refund(id, { amount })).status).toBe(202);
+    await until(() => forwarder.delivered.length > before, "the refund webhook");
+    expect(forwarder.delivered.at(-1)).toMatchObject({ status: 200, answer: { outcome: "refund_succeeded" } });
+  }
+
+  it("a part refund comes off the deposit on every figure: the invoice on both pages, the checkout, the counter's check, the receipt", async () => {
+    const q = await cancelledQuote();
+    await refunded(q.id, "125.12");
+    expect((await db("quotes").where({ id: q.id }).first()).status).toBe("deposit_paid");
+    as(U.staffA);
+    expect((await markAs(q.id, "installed")).status).toBe(200);
+
+    const figures = { depositPaidCents: 107696, refundedCents: 12512, depositHeldCents: 95184, balanceDueCents: 335598 };
+    const staffView = (await (await counter.GET(req("GET", `/api/shop/quotes/${q.id}/payments`), ctx({ id: q.id }))).json()).payments;
+    expect(staffView.invoice).toMatchObject({ ...figures, outstandingCents: 335598, paid: false });
+    as(null);
+    const publicView = (await (await balance.GET(req("GET", `/api/q/${q.token}/balance`), ctx({ token: q.token }))).json()).payments;
+    expect(publicView.invoice).toEqual(staffView.invoice);
+
+    const checkout = await (await balance.POST(req("POST", `/api/q/${q.token}/balance`, {}), ctx({ token: q.token }))).json();
+    expect(await (await fetch(checkout.url)).text()).toContain("$3,355.98");
+
+    as(U.staffA);
+    const over = await counterPay(q.id, { amount: "3,355.99", method: "cash" });
+    expect((await over.json()).fieldErrors.amount[0]).toBe("Amount ($): $3,355.99 is more than the balance outstanding, $3,355.98.");
+    const cash = await counterPay(q.id, { amount: "1,000.00", method: "cash" });
+    expect(cash.status).toBe(201);
+    expect((await cash.json()).payments.invoice).toMatchObject({ balancePaidCents: 100000, outstandingCents: 235598, paid: false });
+    expect((await mailsTo(q.email)).at(-1)!.text).toContain("Still to pay: $2,355.98.");
   });
 });

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { invoiceFigures, overLimit } from "./invoice";
+import { invoiceFigures, invoiceLines, overLimit } from "./invoice";
 
 // The quote of tests/integration/shop-quotes.test.ts, worked by hand in integer cents:
 // total 4,307.82; 25 % deposit = 1,076.955 → 1,076.96 (half a cent up); balance 4,307.82 − 1,076.96 = 3,230.86.
@@ -42,6 +42,53 @@ describe("invoiceFigures", () => {
       ],
     );
     expect(f).toMatchObject({ refundedCents: 40000, refundableCents: 7696 });
+  });
+});
+
+describe("a refunded deposit is not money the shop holds", () => {
+  // Worked by hand in integer cents (common practice, no source): a quote of 1,700.49 with a
+  // 425.12 deposit (25 % of 1,700.49 = 425.1225 → 425.12), refunded as 125.12 then 300.00.
+  const total = 170049;
+  const paid = [{ kind: "deposit" as const, status: "paid" as const, amountCents: 42512 }];
+
+  it("refunded in full: 1,700.49 − 425.12 + (125.12 + 300.00) = 1,700.49 still to pay", () => {
+    const f = invoiceFigures(total, paid, [
+      { status: "succeeded", amountCents: 12512 },
+      { status: "succeeded", amountCents: 30000 },
+    ]);
+    expect(f).toMatchObject({
+      depositPaidCents: 42512,
+      refundedCents: 42512,
+      depositHeldCents: 0,
+      balanceDueCents: 170049,
+      outstandingCents: 170049,
+      paid: false,
+      refundableCents: 0,
+    });
+    expect(invoiceLines(f)).toEqual([
+      "Quote total: $1,700.49",
+      "Deposit paid: −$425.12",
+      "Deposit refunded: +$425.12",
+      "Balance due: $1,700.49",
+      "Still to pay: $1,700.49",
+    ]);
+  });
+
+  it("refunded in part: 1,700.49 − (425.12 − 125.12) = 1,400.49 due; a balance of 1,275.37 no longer pays it", () => {
+    const f = invoiceFigures(
+      total,
+      [...paid, { kind: "balance", status: "paid", amountCents: 127537 }],
+      [{ status: "succeeded", amountCents: 12512 }],
+    );
+    // 1,400.49 − 1,275.37 = 125.12: exactly the part given back.
+    expect(f).toMatchObject({ depositHeldCents: 30000, balanceDueCents: 140049, outstandingCents: 12512, paid: false });
+  });
+
+  it("a refund still waiting for the provider is not taken off yet, but is no longer refundable", () => {
+    const f = invoiceFigures(total, paid, [{ status: "pending", amountCents: 42512 }]);
+    // 1,700.49 − 425.12 = 1,275.37 until the provider confirms.
+    expect(f).toMatchObject({ depositHeldCents: 42512, balanceDueCents: 127537, refundedCents: 0, refundableCents: 0 });
+    expect(invoiceLines(f)).not.toContain("Deposit refunded: +$425.12");
   });
 });
 

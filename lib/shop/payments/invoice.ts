@@ -3,7 +3,12 @@
  * total and its payment records, so the counter, the customer's page and the mails agree.
  *
  * - deposit paid = Σ paid deposits (a quote that asked none has 0);
- * - balance due = quote total − deposit paid;
+ * - refunded = Σ refunds the provider confirmed (succeeded);
+ * - deposit held = deposit paid − refunded: a deposit given back (wholly or in part) is not money
+ *   the shop holds, so it no longer counts against the total. A refund still waiting for the
+ *   provider is not taken off yet: until it is confirmed the shop still holds that money, and a
+ *   refund the provider never makes must not leave the customer owing it twice;
+ * - balance due = quote total − deposit held;
  * - balance paid = Σ paid balance payments (online or at the counter);
  * - outstanding = balance due − balance paid; the invoice is "Paid" at 0;
  * - refundable = deposit paid − Σ refunds asked (pending or succeeded), so two refunds can never
@@ -25,6 +30,8 @@ export interface LedgerRefund {
 export interface InvoiceFigures {
   totalCents: number;
   depositPaidCents: number;
+  /** Deposit paid less the refunds confirmed: what the shop still holds of it. */
+  depositHeldCents: number;
   balanceDueCents: number;
   balancePaidCents: number;
   outstandingCents: number;
@@ -44,16 +51,19 @@ export function invoiceFigures(totalCents: number, payments: readonly LedgerPaym
   const paid = payments.filter((p) => p.status === "paid");
   const depositPaid = sum(paid.filter((p) => p.kind === "deposit"));
   const balancePaid = sum(paid.filter((p) => p.kind === "balance"));
-  const balanceDue = totalCents - depositPaid;
+  const refunded = sum(refunds.filter((r) => r.status === "succeeded"));
+  const depositHeld = depositPaid - refunded;
+  const balanceDue = totalCents - depositHeld;
   const outstanding = balanceDue - balancePaid;
   return {
     totalCents,
     depositPaidCents: depositPaid,
+    depositHeldCents: depositHeld,
     balanceDueCents: balanceDue,
     balancePaidCents: balancePaid,
     outstandingCents: outstanding,
     paid: outstanding <= 0,
-    refundedCents: sum(refunds.filter((r) => r.status === "succeeded")),
+    refundedCents: refunded,
     refundableCents: depositPaid - sum([...refunds]),
   };
 }
@@ -69,11 +79,12 @@ export function overLimit(amountCents: number, limitCents: number, label: string
   return `${label}: ${formatUsd(amountCents)} is more than ${what}, ${formatUsd(limitCents)}.`;
 }
 
-/** The invoice in lines: total − deposit paid = balance due, and what is still to pay. */
+/** The invoice in lines: total − deposit paid + deposit refunded = balance due, and what is still to pay. */
 export function invoiceLines(i: InvoiceFigures): string[] {
   return [
     `Quote total: ${formatUsd(i.totalCents)}`,
     `Deposit paid: −${formatUsd(i.depositPaidCents)}`,
+    ...(i.refundedCents > 0 ? [`Deposit refunded: +${formatUsd(i.refundedCents)}`] : []),
     `Balance due: ${formatUsd(i.balanceDueCents)}`,
     ...(i.balancePaidCents > 0 ? [`Paid since: −${formatUsd(i.balancePaidCents)}`] : []),
     i.paid ? "Status: Paid" : `Still to pay: ${formatUsd(i.outstandingCents)}`,

@@ -70,7 +70,7 @@ export default async function PublicQuotePage({
       {quote.status === "deposit_paid" && !givenBack && (
         <Alert tone="success" title="Deposit paid">
           Thank you. {booking ? "Your install time is below." : "Pick your install time below."} Still to pay at the fitting:{" "}
-          <span data-testid="public-balance-after-paid">{formatUsd(t.balanceCents)}</span>.
+          <span data-testid="public-balance-after-paid">{formatUsd(payments.invoice.outstandingCents)}</span>.
         </Alert>
       )}
       {quote.status === "expired" && <Alert tone="warning">This quote has expired. Ask the shop for a new one.</Alert>}
