@@ -411,6 +411,8 @@ describe("a refunded deposit on the invoice and on the quote", () => {
    * given back, so it no longer counts against the total. Quote total 4,307.82, deposit 1,076.96.
    * - refunded 125.12: deposit held 1,076.96 − 125.12 = 951.84; balance due 4,307.82 − 951.84 = 3,355.98;
    *   after 1,000.00 at the counter, 3,355.98 − 1,000.00 = 2,355.98 still to pay.
+   * - refunded 125.12 + 951.84 = 1,076.96 (all of it): nothing held, 4,307.82 would be due, and the
+   *   quote is declined instead (its stock released; a new quote is needed).
    */
   const owner = { userId: U.ownerA.id, label: "Olive Owner" };
   const markAs = (id: string, to: string) => statusRoute(req("POST", `/api/shop/quotes/${id}/status`, { to }), ctx({ id }));
@@ -455,5 +457,71 @@ describe("a refunded deposit on the invoice and on the quote", () => {
     expect(cash.status).toBe(201);
     expect((await cash.json()).payments.invoice).toMatchObject({ balancePaidCents: 100000, outstandingCents: 235598, paid: false });
     expect((await mailsTo(q.email)).at(-1)!.text).toContain("Still to pay: $2,355.98.");
+  });
+
+  it("refunded in full in two parts: the quote is declined by the provider's confirmation, its stock released; it cannot be installed", async () => {
+    const q = await cancelledQuote();
+    const held = await db("stock_reservations").where({ quote_id: q.id, status: "reserved" }).select("catalog_item_id", "quantity");
+    expect(held.length).toBeGreaterThan(0);
+    const reservedBefore = async () =>
+      Object.fromEntries(
+        (
+          await db("catalog_items")
+            .whereIn(
+              "id",
+              held.map((h) => h.catalog_item_id),
+            )
+            .select("id", "qty_reserved")
+        ).map((r) => [r.id, r.qty_reserved]),
+      );
+    const before = await reservedBefore();
+
+    await refunded(q.id, "125.12");
+    expect((await db("quotes").where({ id: q.id }).first()).status).toBe("deposit_paid");
+    await refunded(q.id, "951.84");
+
+    expect((await db("quotes").where({ id: q.id }).first()).status).toBe("declined");
+    const last = await db("quote_events").where({ quote_id: q.id }).orderBy("id", "desc").first();
+    expect(last).toMatchObject({ from_status: "deposit_paid", to_status: "declined", actor: "payment provider", actor_user_id: null });
+    expect(last.note).toMatch(/^deposit refunded in full \(last refund re_\S+, asked by Olive Owner\)$/);
+    expect(await db("stock_reservations").where({ quote_id: q.id }).pluck("status")).toEqual(held.map(() => "released"));
+    const after = await reservedBefore();
+    for (const h of held) expect(after[h.catalog_item_id]).toBe(before[h.catalog_item_id] - h.quantity);
+
+    as(U.staffA);
+    const install = await markAs(q.id, "installed");
+    expect(install.status).toBe(409);
+    expect((await install.json()).error).toBe("A quote that is declined cannot become installed.");
+    const view = (await (await counter.GET(req("GET", `/api/shop/quotes/${q.id}/payments`), ctx({ id: q.id }))).json()).payments;
+    // 4,307.82 − 1,076.96 + 1,076.96 = 4,307.82: nothing of the deposit is held.
+    expect(view.invoice).toMatchObject({ refundedCents: 107696, depositHeldCents: 0, balanceDueCents: 430782, refundableCents: 0 });
+  });
+
+  it("a full refund still waiting for the provider already stops the work being marked installed; nothing written", async () => {
+    const q = await cancelledQuote();
+    const deposit = await db("payments").where({ quote_id: q.id, kind: "deposit", status: "paid" }).first();
+    await db("payment_refunds").insert({
+      shop_id: SHOP_A,
+      quote_id: q.id,
+      payment_id: deposit.id,
+      amount_cents: deposit.amount_cents,
+      requested_by_user_id: U.ownerA.id,
+      requested_by: U.ownerA.name,
+    });
+    as(U.staffA);
+    const install = await markAs(q.id, "installed");
+    expect(install.status).toBe(409);
+    expect((await install.json()).error).toBe(
+      "The deposit on this quote has been refunded in full, so the work cannot be marked installed. A new quote is needed to do the work.",
+    );
+    expect((await db("quotes").where({ id: q.id }).first()).status).toBe("deposit_paid");
+  });
+
+  it("staff cannot decline a quote whose deposit the shop holds (only a full refund ends it)", async () => {
+    const q = await cancelledQuote();
+    as(U.ownerA);
+    const r = await markAs(q.id, "declined");
+    expect(r.status).toBe(409);
+    expect((await r.json()).error).toBe("A quote that is deposit paid cannot become declined.");
   });
 });

@@ -9,6 +9,10 @@ import type { InvoiceFigures } from "./invoice";
 export const DEPOSIT_REFUNDED =
   "The deposit on this quote has been refunded in full, so it can no longer be booked. A new quote is needed to book again.";
 
+/** Why a quote whose deposit was asked back in full cannot be marked installed. */
+export const DEPOSIT_REFUNDED_NOT_INSTALLED =
+  "The deposit on this quote has been refunded in full, so the work cannot be marked installed. A new quote is needed to do the work.";
+
 /**
  * @example
  * depositGivenBack(107696, 107696); // true

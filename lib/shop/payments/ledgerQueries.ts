@@ -9,7 +9,7 @@ import { queueMailIn } from "@/lib/platform/mail/transactional";
 import { shopTimeZone } from "@/lib/shop/bookings/timeZoneQueries";
 import { queueShopNotice } from "@/lib/shop/notices/noticeQueries";
 import { quoteMailParties } from "@/lib/shop/quoteMailQueries";
-import { type Actor, type QuoteScope, findByToken, getQuote } from "@/lib/shop/quotes/queries";
+import { type Actor, type QuoteScope, declineOnDepositRefunded, findByToken, getQuote } from "@/lib/shop/quotes/queries";
 import { type QuotePayments, paymentEntryDto, refundEntryDto } from "./api";
 import type { CounterMethod } from "./labels";
 import { PAYMENT_FIELD_LABEL } from "./labels";
@@ -292,9 +292,27 @@ export async function markRefundSucceeded(
   if (r.status !== "succeeded") return { outcome: "ignored", quoteId: row.quote_id };
   if (row.status === "succeeded") return { outcome: "already_refunded", quoteId: row.quote_id };
   await trx("payment_refunds").where({ id: row.id }).update({ status: "succeeded", succeeded_at: trx.fn.now(), provider_refund_id: r.id });
-  const quote = (await trx<QuoteRow>("quotes").where({ id: row.quote_id }).first()) as QuoteRow;
+  const quote = (await trx<QuoteRow>("quotes").where({ id: row.quote_id }).forUpdate().first()) as QuoteRow;
   await queueReceipt(trx, quote, { kind: "refund" }, row.amount_cents, null);
+  await endWhenRefundedInFull(trx, quote, row, r.id);
   return { outcome: "refund_succeeded", quoteId: row.quote_id };
+}
+
+/**
+ * Once the provider has confirmed refunds adding up to the whole deposit, the shop holds none of
+ * it: the quote is declined (its held stock released, no longer counted as paid, nothing left to
+ * install or book; a new quote is needed). The history names the provider, which confirmed it,
+ * and the owner who asked. A part refund leaves the quote as it is: the shop kept the rest.
+ */
+async function endWhenRefundedInFull(trx: Knex.Transaction, quote: QuoteRow, last: PaymentRefundRow, providerRefundId: string) {
+  const { figures } = await ledger(trx, quote);
+  if (figures.depositPaidCents === 0 || figures.depositHeldCents > 0) return;
+  await declineOnDepositRefunded(
+    trx,
+    quote,
+    { userId: null, label: "payment provider" },
+    `deposit refunded in full (last refund ${providerRefundId}, asked by ${last.requested_by})`,
+  );
 }
 
 /** These queries on the app's database handle, for pages and route handlers. */

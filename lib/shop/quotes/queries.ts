@@ -25,6 +25,8 @@ import { shopTimeZone } from "@/lib/shop/bookings/timeZoneQueries";
 import { stockFollowsQuote } from "@/lib/shop/catalog/stockQueries";
 import { releaseInstallTime } from "@/lib/shop/bookings/releaseQueries";
 import { assertNoOpenWorkOrder } from "@/lib/shop/workOrders/openOrderQueries";
+import { DEPOSIT_REFUNDED_NOT_INSTALLED } from "@/lib/shop/payments/depositBack";
+import { depositRefundedInFull } from "@/lib/shop/payments/depositQueries";
 import { isLinkToken } from "@/lib/platform/tokenFormat";
 import { hashToken, randomToken } from "@/lib/platform/tokens";
 
@@ -68,6 +70,35 @@ export async function transition(
   if (!TRANSITIONS[quote.status].includes(to)) {
     throw new ConflictError(`A quote that is ${STATUS_LABEL[quote.status].toLowerCase()} cannot become ${STATUS_LABEL[to].toLowerCase()}.`);
   }
+  await moveQuote(trx, quote, to, actor, note, extra);
+}
+
+/**
+ * A deposit refunded in full ends its quote: deposit paid → declined, which releases the stock it
+ * held and takes it off the paid quotes. Not in TRANSITIONS, because neither staff nor the
+ * customer may decline a quote whose deposit the shop still holds; only the confirmation of the
+ * last refund calls this (lib/shop/payments/ledgerQueries.ts). Returns whether the quote moved.
+ */
+export async function declineOnDepositRefunded(
+  trx: Knex.Transaction,
+  quote: Pick<QuoteRow, "id" | "status">,
+  actor: Actor,
+  note: string,
+): Promise<boolean> {
+  if (quote.status !== "deposit_paid") return false;
+  await moveQuote(trx, quote, "declined", actor, note);
+  return true;
+}
+
+/** Writes a move checked by the caller: the status, the stock that follows it, and the history line. */
+async function moveQuote(
+  trx: Knex.Transaction,
+  quote: Pick<QuoteRow, "id" | "status">,
+  to: QuoteStatus,
+  actor: Actor,
+  note: string,
+  extra: Partial<QuoteRow> = {},
+) {
   await trx("quotes")
     .where({ id: quote.id })
     .update({ ...extra, status: to, updated_at: trx.fn.now() });
@@ -589,6 +620,10 @@ export async function staffTransition(
 ) {
   await db.transaction(async (trx) => {
     const quote = await getQuote(trx, scope, id, true);
+    // A deposit asked back in full (confirmed or on its way) means the job is off: nothing to install.
+    if (to === "installed" && quote.status === "deposit_paid" && (await depositRefundedInFull(trx, quote.id))) {
+      throw new ConflictError(DEPOSIT_REFUNDED_NOT_INSTALLED);
+    }
     if (to === "installed") await assertNoOpenWorkOrder(trx, quote.shop_id, quote.id);
     await transition(trx, quote, to, actor, note, to === "draft" ? { public_token_hash: null } : {});
     if (to === "installed") await releaseInstallTime(trx, quote, now);

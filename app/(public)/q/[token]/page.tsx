@@ -66,7 +66,7 @@ export default async function PublicQuotePage({
       {paid && quote.status === "accepted" && (
         <Alert tone="info">Payment received by the provider; waiting for its confirmation. Refresh in a moment.</Alert>
       )}
-      {givenBack && quote.status === "deposit_paid" && <Alert tone="info">{DEPOSIT_REFUNDED}</Alert>}
+      {givenBack && (quote.status === "deposit_paid" || quote.status === "declined") && <Alert tone="info">{DEPOSIT_REFUNDED}</Alert>}
       {quote.status === "deposit_paid" && !givenBack && (
         <Alert tone="success" title="Deposit paid">
           Thank you. {booking ? "Your install time is below." : "Pick your install time below."} Still to pay at the fitting:{" "}

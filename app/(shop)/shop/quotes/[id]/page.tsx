@@ -34,7 +34,7 @@ export default async function QuotePage({ params }: { params: Promise<{ id: stri
   return (
     <>
       <QuoteEditor initial={quoteDetailDto(detail)} labourRateCents={shop?.labour_rate_cents ?? 0} workOrder={workOrder} />
-      {givenBack && q.status === "deposit_paid" && (
+      {givenBack && (q.status === "deposit_paid" || q.status === "declined") && (
         <Alert tone="info" className="mt-5">
           {DEPOSIT_REFUNDED}
         </Alert>
