@@ -32,6 +32,18 @@ export function formatCents(cents: number): string {
   return `${neg ? "-" : ""}${whole}.${String(abs % 100).padStart(2, "0")}`;
 }
 
+/**
+ * Cents → an amount field's starting text: dollars and cents without thousands commas, empty when
+ * nothing is left to take or give back (so no stale figure sits in the field).
+ *
+ * @example
+ * amountFieldText(323086); // "3230.86"
+ * amountFieldText(0); // ""
+ */
+export function amountFieldText(cents: number): string {
+  return cents > 0 ? formatCents(cents).replace(/,/g, "") : "";
+}
+
 /** Cents → "$1,249.50". */
 export function formatUsd(cents: number): string {
   const s = formatCents(cents);

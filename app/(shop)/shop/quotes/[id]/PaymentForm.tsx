@@ -10,6 +10,8 @@ import { labelOptions } from "@/components/ui/labelOptions";
 import { SelectField } from "@/components/ui/SelectField";
 import { TextField } from "@/components/ui/TextField";
 import { api, applyFieldErrors } from "@/lib/platform/client/api";
+import type { QuotePayments } from "@/lib/shop/payments/api";
+import { amountFieldText } from "@/lib/shop/quotes/money";
 import { counterPaymentSchema, refundSchema } from "@/lib/shop/payments/counterSchema";
 import { COUNTER_METHODS, PAYMENT_FIELD_LABEL, PAYMENT_METHOD_LABEL } from "@/lib/shop/payments/labels";
 
@@ -36,9 +38,13 @@ export function PaymentForm({ quoteId, mode, suggested }: { quoteId: string; mod
     setFailure(null);
     setDone(null);
     try {
-      await api(`/api/shop/quotes/${quoteId}/${refund ? "refunds" : "payments"}`, {
+      const answer = await api<{ payments: QuotePayments }>(`/api/shop/quotes/${quoteId}/${refund ? "refunds" : "payments"}`, {
         body: refund ? { amount: form.getValues("amount") } : { amount: form.getValues("amount"), method: values.method },
       });
+      // The field must never keep the amount just taken or refunded: a second click would take it
+      // again. It now offers what is left, as the server just computed it.
+      const { invoice } = answer.payments;
+      form.reset({ amount: amountFieldText(refund ? invoice.refundableCents : invoice.outstandingCents), method: values.method });
       setDone(
         refund
           ? "Refund sent to the payment provider; it shows as refunded once the provider confirms."

@@ -1,7 +1,7 @@
 import { PaymentHistory } from "@/components/payments/PaymentHistory";
 import { Card } from "@/components/ui/Card";
 import type { QuotePayments } from "@/lib/shop/payments/api";
-import { formatCents } from "@/lib/shop/quotes/money";
+import { amountFieldText } from "@/lib/shop/quotes/money";
 import { PaymentForm } from "./PaymentForm";
 
 /** The quote's money at the counter: invoice, history, the balance taken in cash or by card, and (owner) refunds of the deposit. */
@@ -12,10 +12,10 @@ export function PaymentsCard({ quoteId, payments, owner }: { quoteId: string; pa
       <h2 className="text-lg font-semibold">Payments</h2>
       <PaymentHistory payments={payments} />
       {payments.invoiceOpen && !invoice.paid && (
-        <PaymentForm quoteId={quoteId} mode="counter" suggested={formatCents(invoice.outstandingCents).replace(/,/g, "")} />
+        <PaymentForm quoteId={quoteId} mode="counter" suggested={amountFieldText(invoice.outstandingCents)} />
       )}
       {owner && !payments.refundBlocked && (
-        <PaymentForm quoteId={quoteId} mode="refund" suggested={formatCents(invoice.refundableCents).replace(/,/g, "")} />
+        <PaymentForm quoteId={quoteId} mode="refund" suggested={amountFieldText(invoice.refundableCents)} />
       )}
       {owner && payments.refundBlocked && invoice.depositPaidCents > 0 && !payments.invoiceOpen && (
         <p className="text-sm text-basalt-600">{payments.refundBlocked}</p>
