@@ -76,3 +76,54 @@ describe("a quote whose deposit was refunded in full", () => {
     expect(await bookings(q.id)).toEqual(expect.arrayContaining(["cancelled", "booked"]));
   });
 });
+
+describe("quotes refunded in full before a full refund declined them (migration 20261211090000)", () => {
+  // Runs last in this file: the quotes above were refunded by writing the rows directly, as
+  // before the rule, so they are in the state the migration corrects.
+  it("are declined with their held stock released and a history line; part refunds and pending refunds are left alone", async () => {
+    const { up } = await import("@/db/migrations/20261211090000_decline_refunded_deposits");
+    const full = await depositPaidQuote(db);
+    await bookedCancelledRefunded(full.id, (d) => d);
+    const part = await depositPaidQuote(db);
+    await bookedCancelledRefunded(part.id, (d) => d - 5000);
+    const pending = await depositPaidQuote(db);
+    await bookedCancelledRefunded(pending.id, (d) => d, "pending");
+    const held = await db("stock_reservations").where({ quote_id: full.id, status: "reserved" }).select("catalog_item_id", "quantity");
+    expect(held.length).toBeGreaterThan(0);
+    const reserved = async () =>
+      new Map(
+        (
+          await db("catalog_items")
+            .whereIn(
+              "id",
+              held.map((h) => h.catalog_item_id),
+            )
+            .select("id", "qty_reserved")
+        ).map((r) => [r.id, r.qty_reserved as number]),
+      );
+    const before = await reserved();
+
+    await up(db);
+
+    const status = async (id: string) => (await db("quotes").where({ id }).first()).status;
+    expect(await status(full.id)).toBe("declined");
+    expect(await status(part.id)).toBe("deposit_paid");
+    expect(await status(pending.id)).toBe("deposit_paid");
+    expect(await db("stock_reservations").where({ quote_id: full.id }).pluck("status")).toEqual(held.map(() => "released"));
+    const after = await reserved();
+    const released = new Map<string, number>();
+    for (const h of held) released.set(h.catalog_item_id, (released.get(h.catalog_item_id) ?? 0) + h.quantity);
+    // Other quotes of this file were refunded in full the same way and are released too: at least this one's units.
+    for (const [item, n] of released) expect(before.get(item)! - after.get(item)!).toBeGreaterThanOrEqual(n);
+    expect(await db("quote_events").where({ quote_id: full.id }).orderBy("id", "desc").first()).toMatchObject({
+      from_status: "deposit_paid",
+      to_status: "declined",
+      actor: "system",
+      actor_user_id: null,
+    });
+    // Run again, nothing more moves.
+    const events = await db("quote_events").count({ n: "*" });
+    await up(db);
+    expect(await db("quote_events").count({ n: "*" })).toEqual(events);
+  });
+});
