@@ -238,6 +238,18 @@ describe("the quote editor's catalog and figures", () => {
   });
 });
 
+describe("the quote editor's status moves", () => {
+  it("offers Mark installed on a paid deposit, but not once the deposit was asked back in full", () => {
+    server(() => ({ status: 500, body: {} }));
+    const paid = detail({ status: "deposit_paid" });
+    const { unmount } = renderWithQuery(<QuoteEditor initial={paid} labourRateCents={12500} />, { retry: false });
+    expect(screen.getByRole("button", { name: "Mark installed" })).toBeTruthy();
+    unmount();
+    renderWithQuery(<QuoteEditor initial={paid} labourRateCents={12500} depositGivenBack />, { retry: false });
+    expect(screen.queryByRole("button", { name: "Mark installed" })).toBeNull();
+  });
+});
+
 describe("the quote editor's dates", () => {
   it("reads the validity day and the history on the shop's clock, not the device's (vitest runs in UTC)", () => {
     // 03:30 UTC on Dec 4 is 8:30 PM on Dec 3 in Denver (MST, UTC−7: 49 CFR §71.9).

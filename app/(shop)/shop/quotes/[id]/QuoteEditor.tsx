@@ -41,11 +41,14 @@ export function QuoteEditor({
   initial,
   labourRateCents,
   workOrder = null,
+  depositGivenBack = false,
 }: {
   initial: Detail;
   labourRateCents: number;
   /** The quote's work order, when it has one: while it is not done, the quote is installed from there. */
   workOrder?: { id: string; status: WorkOrderStatus } | null;
+  /** The deposit was asked back in full (the quote is declined once the provider confirms): nothing to install. */
+  depositGivenBack?: boolean;
 }) {
   const [detail, setDetail] = useState(initial);
   const q = detail.quote;
@@ -166,12 +169,12 @@ export function QuoteEditor({
                 Mark declined
               </Button>
             )}
-            {q.status === "deposit_paid" && workOrderOpen && (
+            {q.status === "deposit_paid" && !depositGivenBack && workOrderOpen && (
               <Link className={buttonClass("primary")} href={`/shop/work-orders/${workOrder.id}`}>
                 Finish the work order to mark installed
               </Link>
             )}
-            {q.status === "deposit_paid" && !workOrderOpen && (
+            {q.status === "deposit_paid" && !depositGivenBack && !workOrderOpen && (
               <Button pending={move.isPending} onClick={() => move.mutate("installed")}>
                 Mark installed
               </Button>

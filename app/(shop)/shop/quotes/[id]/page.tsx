@@ -33,7 +33,12 @@ export default async function QuotePage({ params }: { params: Promise<{ id: stri
   const workOrderId = workOrder?.id ?? null;
   return (
     <>
-      <QuoteEditor initial={quoteDetailDto(detail)} labourRateCents={shop?.labour_rate_cents ?? 0} workOrder={workOrder} />
+      <QuoteEditor
+        initial={quoteDetailDto(detail)}
+        labourRateCents={shop?.labour_rate_cents ?? 0}
+        workOrder={workOrder}
+        depositGivenBack={givenBack}
+      />
       {givenBack && (q.status === "deposit_paid" || q.status === "declined") && (
         <Alert tone="info" className="mt-5">
           {DEPOSIT_REFUNDED}
