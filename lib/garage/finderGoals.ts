@@ -72,28 +72,43 @@ export const finderGoalsSchema = z
 export type FinderGoalsForm = z.input<typeof finderGoalsSchema>;
 export type FinderGoals = z.output<typeof finderGoalsSchema>;
 
-export interface FinderPlan {
-  constraints: FitmentConstraints;
-  wheelWidthsIn: number[] | undefined;
+/**
+ * What the finder's hints quote about the vehicle itself. These depend on the vehicle only, never
+ * on the goals, so a goal that does not read leaves them standing (they are not part of the plan).
+ */
+export interface FinderBaseline {
+  /** The current setup's outboard reach from the hub face, mm. */
   currentOuterSwingMm: number;
   /** Steering axis at the wheel centre, mm inboard of the hub face (for full-lock points). */
   steeringAxisInboardMm: number;
 }
 
+/** The vehicle's own figures the finder's goals are measured from. */
+export function finderBaseline(vehicle: Vehicle): FinderBaseline {
+  return {
+    currentOuterSwingMm: setupGeometry(toEngineSetup(vehicle.currentSetup)).outerSwingMm,
+    steeringAxisInboardMm: steeringAxisOf(vehicle),
+  };
+}
+
+export interface FinderPlan extends FinderBaseline {
+  constraints: FitmentConstraints;
+  wheelWidthsIn: number[] | undefined;
+}
+
 /** The engine's constraints for these goals on this vehicle. */
 export function finderPlan(goals: FinderGoals, vehicle: Vehicle, clearances: VehicleClearance[]): FinderPlan {
-  const current = setupGeometry(toEngineSetup(vehicle.currentSetup));
-  const axis = steeringAxisOf(vehicle);
+  const baseline = finderBaseline(vehicle);
   const constraints: FitmentConstraints = { boltPattern: vehicle.boltPattern };
   if (goals.targetDiameterMm !== null) constraints.targetDiameterMm = goals.targetDiameterMm;
   if (goals.minDiameterMm !== null) constraints.minDiameterMm = goals.minDiameterMm;
   if (goals.maxDiameterMm !== null) constraints.maxDiameterMm = goals.maxDiameterMm;
   if (goals.wheelDiameters) constraints.wheelDiametersIn = goals.wheelDiameters;
-  if (goals.maxPokeMm !== null) constraints.maxOuterSwingMm = Math.max(0, current.outerSwingMm + goals.maxPokeMm);
+  if (goals.maxPokeMm !== null) constraints.maxOuterSwingMm = Math.max(0, baseline.currentOuterSwingMm + goals.maxPokeMm);
   if (goals.usePoints && clearances.length > 0) {
     constraints.clearancePoints = measuredPoints(clearances);
     constraints.clearanceMarginMm = goals.margin;
-    constraints.steeringAxisInboardMm = axis;
+    constraints.steeringAxisInboardMm = baseline.steeringAxisInboardMm;
   }
   let widths: number[] | undefined;
   if (goals.minWidthIn !== null || goals.maxWidthIn !== null) {
@@ -102,5 +117,5 @@ export function finderPlan(goals: FinderGoals, vehicle: Vehicle, clearances: Veh
     widths = DEFAULT_WHEEL_WIDTHS_IN.filter((w) => w >= lo - 1e-9 && w <= hi + 1e-9);
     if (widths.length === 0) widths = [lo];
   }
-  return { constraints, wheelWidthsIn: widths, currentOuterSwingMm: current.outerSwingMm, steeringAxisInboardMm: axis };
+  return { constraints, wheelWidthsIn: widths, ...baseline };
 }

@@ -1,6 +1,6 @@
 "use client";
 import { zodResolver } from "@hookform/resolvers/zod";
-import { useEffect, useRef, useState } from "react";
+import { useEffect, useMemo, useRef, useState } from "react";
 import { useForm, useWatch } from "react-hook-form";
 import { Alert } from "@/components/ui/Alert";
 import { Card } from "@/components/ui/Card";
@@ -9,7 +9,7 @@ import { PageHeader } from "@/components/ui/PageHeader";
 import { TextField } from "@/components/ui/TextField";
 import { fieldBinder } from "@/components/ui/fieldProps";
 import { type FinderResult, formatLength } from "@/lib/fitment";
-import { FINDER_LABEL, type FinderGoalsForm, finderGoalsSchema, finderPlan } from "@/lib/garage/finderGoals";
+import { FINDER_LABEL, type FinderGoalsForm, finderBaseline, finderGoalsSchema, finderPlan } from "@/lib/garage/finderGoals";
 import type { FinderJob, FinderReply } from "@/lib/garage/finderJob";
 import type { Vehicle, VehicleClearance } from "@/lib/garage/types";
 import { ExcludedList } from "./ExcludedList";
@@ -39,6 +39,8 @@ export function FinderPanel({ vehicle, clearances }: { vehicle: Vehicle; clearan
   const values = useWatch({ control: form.control }) as FinderGoalsForm;
   const parsed = finderGoalsSchema.safeParse(values);
   const plan = parsed.success ? finderPlan(parsed.data, vehicle, clearances) : null;
+  // The hints quote the vehicle, not the goals: a goal that does not read must not blank them.
+  const baseline = useMemo(() => finderBaseline(vehicle), [vehicle]);
   const planKey = plan ? JSON.stringify([plan.constraints, plan.wheelWidthsIn]) : null;
 
   const worker = useRef<Worker | null>(null);
@@ -127,7 +129,7 @@ export function FinderPanel({ vehicle, clearances }: { vehicle: Vehicle; clearan
             </div>
             <TextField
               label={FINDER_LABEL.maxPokeMm}
-              hint={`Beyond the current setup's ${mm(plan?.currentOuterSwingMm ?? 0)} outboard reach; e.g. 25 or 1 in; empty for no limit`}
+              hint={`Beyond the current setup's ${mm(baseline.currentOuterSwingMm)} outboard reach; e.g. 25 or 1 in; empty for no limit`}
               {...field("maxPokeMm")}
             />
             <label className="flex items-start gap-2 text-sm">
@@ -137,11 +139,7 @@ export function FinderPanel({ vehicle, clearances }: { vehicle: Vehicle; clearan
                 <span id="f-usePoints-hint" className="block text-xs text-basalt-500">
                   {!hasPoints
                     ? "No points measured yet."
-                    : `${clearances.length} point${clearances.length === 1 ? "" : "s"}, each predicted for every combination exactly as on the vehicle page${
-                        plan
-                          ? ` (full-lock points turn about a steering axis ${mm(plan.steeringAxisInboardMm)} inboard of the hub face)`
-                          : ""
-                      }.`}
+                    : `${clearances.length} point${clearances.length === 1 ? "" : "s"}, each predicted for every combination exactly as on the vehicle page (full-lock points turn about a steering axis ${mm(baseline.steeringAxisInboardMm)} inboard of the hub face).`}
                 </span>
               </span>
             </label>
