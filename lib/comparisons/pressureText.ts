@@ -19,6 +19,22 @@ export function pressureText(kpa: number, prefs: DisplayPrefs): string {
   return prefs.units === "metric" ? `${k} (${bar}, ${psi})` : `${psi} (${k}, ${bar})`;
 }
 
+/** The engine's pressure pair in its messages and notes: "166.6 kPa (24.2 psi)" (lib/fitment/loadPressure.ts). */
+const ENGINE_PAIR = /(\d+(?:\.\d+)?) kPa \((\d+(?:\.\d+)?) psi\)/g;
+
+/**
+ * An engine note or message with its pressures in the chosen unit's order. The engine writes
+ * every pressure as "kPa (psi)"; in the imperial display the table and fields read psi first, so
+ * each pair is turned round there. The figures are the engine's own, only their order changes.
+ *
+ * @example
+ * pressuresInOrder("needs only 166.6 kPa (24.2 psi)", { units: "imperial", lengths: "decimal" }); // "needs only 24.2 psi (166.6 kPa)"
+ * pressuresInOrder("needs only 166.6 kPa (24.2 psi)", { units: "metric", lengths: "decimal" });   // unchanged
+ */
+export function pressuresInOrder(text: string, prefs: DisplayPrefs): string {
+  return prefs.units === "metric" ? text : text.replace(ENGINE_PAIR, "$2 psi ($1 kPa)");
+}
+
 /** A load (kg) in the chosen unit only, for chart axes and tooltips. */
 export const loadIn = (kg: number, prefs: DisplayPrefs): number => (prefs.units === "metric" ? kg : kgToLb(kg));
 /** A pressure (kPa) in the chosen unit only (psi or kPa), for chart axes and tooltips. */

@@ -44,12 +44,19 @@ describe("LoadPressurePanel", () => {
     expect(screen.getByTestId("equivalent-front").textContent).toMatch(/^24\.2 psi \(167 kPa, 1\.67 bar\)below the road minimum/);
     expect(screen.getByTestId("sidewall-max").textContent).toMatch(/^Maximum on the sidewall: 3,527 lb \(1,600 kg\) at 50\.0 psi/);
     expect(screen.getByTestId("load-chart-stub").textContent).toBe("41 points");
+    // The engine's advice reads psi first like the table: 166.6 kPa = 24.2 psi, 201.1 kPa = 29.2 psi (NIST SP 811).
+    expect(screen.getByText(/^The load needs only/).textContent).toMatch(
+      /^The load needs only 24\.2 psi \(166\.6 kPa\), below the road minimum 29\.2 psi \(201\.1 kPa\)/,
+    );
 
     rerender(<LoadPressurePanel currentTire="265/70R17 113T" plannedTire={PLANNED} prefs={METRIC} />);
     // Converted, never relabelled: 35 psi = 241.3 kPa, 3086 lb = 1399.8 kg (NIST SP 811).
     expect(screen.getByLabelText("Placard pressure, front (kPa)")).toHaveProperty("value", "241");
     expect(screen.getByLabelText("Front axle load (kg)")).toHaveProperty("value", "1399.8");
     expect(screen.getByTestId("set-front").textContent).toBe("201 kPa (2.01 bar, 29.2 psi)");
+    expect(screen.getByText(/^The load needs only/).textContent).toMatch(
+      /^The load needs only 166\.6 kPa \(24\.2 psi\), below the road minimum 201\.1 kPa/,
+    );
 
     rerender(<LoadPressurePanel currentTire="265/70R17 113T" plannedTire={PLANNED} prefs={IMPERIAL} />);
     expect(screen.getByLabelText("Placard pressure, front (psi)")).toHaveProperty("value", "35");
