@@ -1,27 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { psiToKpa } from "@/lib/fitment";
-import { type LoadLabels, type LoadPlanInput, planLoad } from "./loadPlan";
-
-const LABELS: LoadLabels = {
-  placardTire: "Placard tire size",
-  placardFront: "Placard pressure, front (psi)",
-  placardRear: "Placard pressure, rear (psi)",
-  frontAxle: "Front axle load (lb)",
-  rearAxle: "Rear axle load (lb)",
-  plannedTire: "Planned tire",
-  plannedMaxLoad: "Planned tire's maximum load, sidewall (lb, optional)",
-  plannedMaxPressure: "Planned tire's maximum pressure, sidewall (psi, optional)",
-};
-
-const BASE: LoadPlanInput = {
-  placardTire: "P265/70R17 113S",
-  plannedTire: "37x12.50R17LT 124Q LRD",
-  vehicle: "light-truck",
-  placardFrontKpa: psiToKpa(35),
-  placardRearKpa: psiToKpa(35),
-  frontAxleKg: 1400,
-  rearAxleKg: 1200,
-};
+import { planLoad } from "./loadPlan";
+import { LOAD_BASE as BASE, LOAD_LABELS as LABELS } from "./loadPlanTestUtil";
 
 // TRA light-truck load formula, L ∝ P^0.585 (NHTSA, The Pneumatic Tire, 2006): P = Pmax · (L / Lmax)^(1 / 0.585).
 const traPsi = (loadKg: number, maxKg: number, maxPsi: number) => maxPsi * (loadKg / maxKg) ** (1 / 0.585);

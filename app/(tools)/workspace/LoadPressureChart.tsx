@@ -3,6 +3,7 @@ import { CartesianGrid, Legend, Line, LineChart, ReferenceLine, ResponsiveContai
 import { type DisplayPrefs, formatNumber } from "@/lib/comparisons/format";
 import type { LoadPlan } from "@/lib/comparisons/loadPlan";
 import { loadIn, pressureIn } from "@/lib/comparisons/pressureText";
+import { pressureAxis } from "@/components/comparison/chartData";
 import { LOAD_CHART_HEIGHT } from "./loadChartSize";
 
 const STEEL = "#245a88";
@@ -22,6 +23,8 @@ export default function LoadPressureChart({ plan, prefs }: { plan: LoadPlan; pre
     placard: c.placardKg === null ? null : Math.round(loadIn(c.placardKg, prefs)),
     planned: c.plannedKg === null ? null : Math.round(loadIn(c.plannedKg, prefs)),
   }));
+  // Round ticks in the unit shown: the curve's own ends are converted figures (10.2 psi from 70 kPa).
+  const axis = pressureAxis(plan, prefs);
   const tick = { fontSize: 12, fill: "#434c58" };
   return (
     <figure className="min-w-0 rounded-lg bg-white p-3 ring-1 ring-basalt-100" aria-labelledby="chart-load" data-testid="load-chart">
@@ -32,7 +35,7 @@ export default function LoadPressureChart({ plan, prefs }: { plan: LoadPlan; pre
         <ResponsiveContainer width="100%" height="100%">
           <LineChart data={data} margin={{ left: 4, right: 16, top: 8, bottom: 4 }}>
             <CartesianGrid strokeDasharray="3 3" />
-            <XAxis dataKey="p" type="number" domain={["dataMin", "dataMax"]} tick={tick} />
+            <XAxis dataKey="p" type="number" domain={axis.domain} ticks={axis.ticks} tick={tick} />
             <YAxis tick={tick} width={48} />
             <Tooltip
               labelFormatter={(v) => `${formatNumber(Number(v), prefs.units === "metric" ? 0 : 1)} ${pUnit}`}
