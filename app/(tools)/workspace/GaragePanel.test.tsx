@@ -56,7 +56,8 @@ describe("full-lock predictions: the workspace's garage panel and the vehicle pa
     const withoutAxis = predictPoints([swayBar], planned, 12.7)[0]!.predictedMm;
     expect(Math.abs(expected - withoutAxis)).toBeGreaterThan(1);
     expect(predictedCell("workspace-predictions")).toBe(formatLen(expected, metric, { decimals: 0 }));
-    expect(predictedCell("predictions").startsWith(formatLength(expected, { unit: "mm" }))).toBe(true);
+    // The vehicle page's mm, with the true minus sign (U+2212) like every other figure.
+    expect(predictedCell("predictions").startsWith(formatLen(expected, metric, { decimals: 1 }))).toBe(true);
     // Both notes name the same axis.
     const axis = formatLength(steeringAxisOf(wsVehicle), { unit: "mm" });
     for (const note of screen.getAllByTestId("prediction-note")) expect(note.textContent).toContain(`${axis} inboard of the hub face`);
