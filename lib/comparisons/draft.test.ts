@@ -51,6 +51,14 @@ describe("form text ⇄ comparison input", () => {
     expect(Object.keys(errors).filter((k) => k.startsWith("current"))).toEqual([]);
   });
 
+  it("names the tire field once, with the likely size for three numbers between slashes (the workspace's planned tire)", () => {
+    const d = base();
+    d.planned = { ...d.planned, tire: "285/70/17" };
+    const message = readDraft(d, inch).errors["planned.tire"];
+    expect(message).toMatch(/^Tire size: not a recognised tire size designation; did you mean 285\/70R17\? \(accepted forms:/);
+    expect(message?.match(/Tire size/g)).toHaveLength(1);
+  });
+
   it("passes the schema's messages on (wheel diameter vs tire)", () => {
     const d = base();
     d.planned = { ...d.planned, diameter: "18" };

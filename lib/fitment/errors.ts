@@ -29,15 +29,21 @@ export class FitmentInputError extends Error {
 
 /**
  * Thrown by `parseTireSize` (and everything that accepts a tire size as text) when the text is
- * not a tire size designation the engine understands.
+ * not a tire size designation the engine understands. `message` names the size ('Tire size
+ * "285/70/17": …'); `reason` is the same without that name, for a screen that puts its own field
+ * label first, so the field is not named twice.
  *
  * @example
  * try { parseTireSize("265/7R17"); } catch (e) { console.log(e instanceof TireSizeError); } // true
+ * try { parseTireSize("285/70/17"); } catch (e) { console.log((e as TireSizeError).reason); }
+ * // "not a recognised tire size designation; did you mean 285/70R17? (accepted forms: …)"
  */
 export class TireSizeError extends FitmentInputError {
-  constructor(message: string, value?: unknown, field = "tire") {
+  readonly reason: string;
+  constructor(message: string, value?: unknown, field = "tire", reason = message) {
     super(field, message, value);
     this.name = "TireSizeError";
+    this.reason = reason;
   }
 }
 

@@ -176,7 +176,7 @@ function readTire(tire: unknown, field: string): TireSize {
     try {
       return toTireSize(tire);
     } catch (e) {
-      if (e instanceof TireSizeError && field !== "tire") throw new TireSizeError(`${field}: ${e.message}`, tire, field);
+      if (e instanceof TireSizeError && field !== "tire") throw new TireSizeError(`${field}: ${e.message}`, tire, field, e.reason);
       throw e;
     }
   }

@@ -237,6 +237,27 @@ describe("parseTireSize — what people copy from a sidewall", () => {
     expect(parseTireSize("35x1250R17").sectionWidthMm).toBeCloseTo(317.5, 9);
     expect(() => parseTireSize("35x125R17")).toThrow(/section width 1.25 in/);
   });
+
+  it("three numbers between slashes are refused with the metric size they most likely mean (common practice, no source)", () => {
+    // Metric designation width/aspect, construction letter, rim (ISO 4000-1): 285/70/17 has a slash for the R.
+    expect(() => parseTireSize("285/70/17")).toThrow(
+      /^Tire size "285\/70\/17": not a recognised tire size designation; did you mean 285\/70R17\? \(accepted forms:/,
+    );
+    expect(() => parseTireSize("lt 285/70/17 121/118q")).toThrow(/did you mean LT285\/70R17 121\/118Q\?/);
+    // No suggestion that would itself be refused (rim 40 in is outside 8–30 in) or for other slips.
+    expect(() => parseTireSize("285/70/40")).toThrow(/not a recognised tire size designation \(accepted forms/);
+    expect(() => parseTireSize("285-70-17")).not.toThrow(/did you mean/);
+    // The reason alone, for a screen that names the field itself.
+    const refused = (() => {
+      try {
+        parseTireSize("285/70/17");
+      } catch (e) {
+        return e as TireSizeError;
+      }
+    })();
+    expect(refused?.reason).toMatch(/^not a recognised tire size designation; did you mean 285\/70R17\? \(accepted forms: 265\/70R17/);
+    expect(refused?.message).toBe(`Tire size "285/70/17": ${refused?.reason}`);
+  });
 });
 
 describe("parseTireSize — invalid input", () => {

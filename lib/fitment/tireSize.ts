@@ -92,7 +92,13 @@ const NUMERIC_RE = /^(LT|ST|T)?(\d{1,2}\.\d{2})(R|D|B|-)(\d{2}(?:\.5)?)(LT|C)?$/
 const SERVICE_RE = /^(\()?(\d{1,3})(?:\/(\d{1,3}))?(A[1-8]|[B-HJ-NP-WY])?(\))?$/;
 
 function fail(text: string, why: string): never {
-  throw new TireSizeError(`Tire size ${JSON.stringify(text.length > 40 ? text.slice(0, 40) + "…" : text)}: ${why} (${EXAMPLES})`, text);
+  const reason = `${why} (${EXAMPLES})`;
+  throw new TireSizeError(
+    `Tire size ${JSON.stringify(text.length > 40 ? text.slice(0, 40) + "…" : text)}: ${reason}`,
+    text,
+    "tire",
+    reason,
+  );
 }
 
 function checkRim(text: string, rim: number): void {
@@ -303,7 +309,8 @@ function buildText(s: Omit<TireSize, "text">): string {
  */
 export function parseTireSize(text: string): TireSize {
   if (typeof text !== "string") {
-    throw new TireSizeError(`Tire size must be text, got ${text === null ? "null" : typeof text} (${EXAMPLES})`, text);
+    const reason = `must be text, got ${text === null ? "null" : typeof text} (${EXAMPLES})`;
+    throw new TireSizeError(`Tire size ${reason}`, text, "tire", reason);
   }
   const upper = foldLookalikes(text).trim().toUpperCase().replace(/\s+/g, " ");
   if (upper === "") fail(text, "the text is empty");
@@ -396,7 +403,26 @@ export function parseTireSize(text: string): TireSize {
       ...t,
     });
   }
-  return fail(text, "not a recognised tire size designation");
+  const guess = slashedGuess(upper);
+  return fail(text, `not a recognised tire size designation${guess ? `; did you mean ${guess}?` : ""}`);
+}
+
+/** Three numbers between slashes with an optional P or LT before them, e.g. "285/70/17" or "LT 285/70/17 121S". */
+const SLASHED_RE = /^(P|LT)?\s*(\d{3})\s*\/\s*(\d{2,3})\s*\/\s*(\d{2}(?:\.5)?)(?=\s|$)(.*)$/;
+
+/**
+ * The metric size someone most likely meant by "285/70/17": the construction letter typed as a
+ * slash (common practice, no source). Offered only when that reading is itself a valid size.
+ */
+function slashedGuess(upper: string): string | null {
+  const m = SLASHED_RE.exec(upper);
+  if (!m) return null;
+  const [, prefix, width, aspect, rim, rest] = m;
+  try {
+    return parseTireSize(`${prefix ?? ""}${width}/${aspect}R${rim}${rest ?? ""}`).text;
+  } catch {
+    return null;
+  }
 }
 
 function finish(fields: Omit<TireSize, "text">): TireSize {

@@ -5,7 +5,7 @@
  * matching the tire's rim diameter, an offset or backspacing that keeps the mounting face inside
  * the wheel), so a setup that passes never makes the engine throw.
  */
-import { FitmentInputError } from "@/lib/fitment/errors";
+import { FitmentInputError, TireSizeError } from "@/lib/fitment/errors";
 import { parseTireSize } from "@/lib/fitment/tireSize";
 import { SETUP_FIELD_EXAMPLE as EX, SETUP_FIELD_LABEL as L, type SetupFieldPath } from "./fields";
 import { SETUP_MESSAGE, lengthMessages } from "./messages";
@@ -114,7 +114,10 @@ export function checkSetup(v: unknown, path: Issue["path"] = [], opts: CheckSetu
     } catch (e) {
       issues.push({
         path: at("tire"),
-        message: SETUP_MESSAGE.tireUnreadable(e instanceof Error ? e.message : `not a tire size, e.g. ${EX.tire}.`),
+        // The engine's reason without its own "Tire size …" naming: the label comes first, once.
+        message: SETUP_MESSAGE.tireUnreadable(
+          e instanceof TireSizeError ? e.reason : e instanceof Error ? e.message : `not a tire size, e.g. ${EX.tire}.`,
+        ),
       });
     }
     if (rim !== null && !Number.isNaN(wheelDiameterIn) && wheelDiameterIn !== rim)

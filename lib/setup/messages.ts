@@ -51,8 +51,8 @@ export const SETUP_MESSAGE = {
   reference: `${L["position.reference"]}: say where the backspacing was measured to, "flange" (the ${BACKSPACING_REFERENCE_LABEL.flange}) or "bead-seat".`,
   tireEmpty: `${L.tire}: enter a tire size, e.g. ${EX.tire}.`,
   tireTooLong: `${L.tire}: too long for a tire size, e.g. ${EX.tire}.`,
-  /** The engine's own message, which shows the accepted forms. */
-  tireUnreadable: (engineMessage: string) => `${L.tire}: ${engineMessage}`,
+  /** The engine's reason (TireSizeError.reason: without its own "Tire size" naming), which shows the accepted forms. */
+  tireUnreadable: (engineReason: string) => `${L.tire}: ${engineReason}`,
   rimMismatch: (rimIn: number, wheelIn: number) =>
     `${L.wheelDiameterIn}: a ${rimIn} in tire needs a ${rimIn} in wheel; this wheel is ${wheelIn} in.`,
   /** The offset a person may give a wheel of this width: W/2 + the engine's margin either way. */
