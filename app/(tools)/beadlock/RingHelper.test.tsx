@@ -103,6 +103,34 @@ describe("beadlock ring helper: torque unit switch", () => {
     expect(describedText(field)).toMatch(/stays ft·lb/);
   });
 
+  for (const text of ["0", "2.5", "24 bolts"]) {
+    it(`with the torque entered, a bolt count of ${JSON.stringify(text)} makes the Passes card ask for the bolt count, not the torque`, async () => {
+      const user = renderHelper();
+      await user.type(torqueField(), "18");
+      const count = await retypeBoltCount(user, text);
+      expect(describedText(count)).toMatch(/Bolts on the ring: enter a whole number from 3 to 64/);
+      expect(screen.queryByTestId("torque-passes")).toBeNull();
+      expect(screen.getByTestId("passes-missing").textContent).toBe("Fix “Bolts on the ring” to see the passes in ft·lb and N·m.");
+    });
+  }
+
+  it("asks the Passes card for what is missing: the torque, or both", async () => {
+    const user = renderHelper();
+    expect(screen.getByTestId("passes-missing").textContent).toBe(
+      "Enter the ring maker's torque figure to see the passes in ft·lb and N·m.",
+    );
+    await retypeBoltCount(user, "0");
+    expect(screen.getByTestId("passes-missing").textContent).toBe(
+      "Fix “Bolts on the ring” and enter the ring maker's torque figure to see the passes in ft·lb and N·m.",
+    );
+    await user.type(torqueField(), "abc");
+    expect(screen.getByTestId("passes-missing").textContent).toBe(
+      "Fix “Bolts on the ring” and “Maker's torque (ft·lb)” to see the passes in ft·lb and N·m.",
+    );
+    await retypeBoltCount(user, "24");
+    expect(screen.getByTestId("passes-missing").textContent).toBe("Fix “Maker's torque (ft·lb)” to see the passes in ft·lb and N·m.");
+  });
+
   it("names the bolt count field in its message", async () => {
     const user = renderHelper();
     const count = await retypeBoltCount(user, "2");

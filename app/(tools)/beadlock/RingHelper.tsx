@@ -30,6 +30,15 @@ export function RingHelper() {
   }
   // torque.nm is already read and range-checked, naming the field; the plan cannot refuse it.
   const plan: TorquePlan | null = sequence && torque.nm !== null ? torquePlan({ boltCount: sequence.length, torqueNm: torque.nm }) : null;
+  // Without passes, say what stands in the way: a torque that is entered is not asked for again.
+  const toFix = [countError ? "Bolts on the ring" : null, torque.error ? torque.label : null].filter((x): x is string => x !== null);
+  const missing = [
+    toFix.length > 0 ? `fix ${toFix.map((f) => `“${f}”`).join(" and ")}` : null,
+    torque.nm === null && !torque.error ? "enter the ring maker's torque figure" : null,
+  ]
+    .filter((x): x is string => x !== null)
+    .join(" and ");
+  const noPasses = `${missing.charAt(0).toUpperCase()}${missing.slice(1)} to see the passes in ft·lb and N·m.`;
   const tick = useTickOff(plan ? `${plan.boltCount}|${plan.torqueNm}` : null, sequence ?? [], plan?.passes.length ?? 0);
 
   return (
@@ -56,7 +65,9 @@ export function RingHelper() {
               </p>
             </>
           ) : (
-            <p className="mt-1 text-sm text-basalt-600">Enter the ring maker&apos;s torque figure to see the passes in ft·lb and N·m.</p>
+            <p className="mt-1 text-sm text-basalt-600" data-testid="passes-missing">
+              {noPasses}
+            </p>
           )}
         </Card>
       </div>
