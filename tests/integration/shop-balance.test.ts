@@ -172,8 +172,8 @@ describe("completion mail and the balance through the payment SDK", () => {
     expect(mail.text).toContain("Balance due: $3,230.86");
     expect(mail.text).toContain("Still to pay: $3,230.86");
     for (const heading of ["Left front", "Right front", "Left rear", "Right rear"]) expect(mail.text).toContain(`\n\n${heading}\n- `);
-    // 35 psi × 6.894757 kPa/psi = 241.3 kPa (NIST SP 811, B.8); 190 N·m ÷ 1.355818 = 140.1 ft·lb (NIST SP 811, B.8).
-    expect(mail.text).toContain("Cold pressure set: Set cold to 35 psi (241 kPa) (signed by Sam Staff)");
+    // 40 psi × 6.894757 kPa/psi = 275.8 kPa (NIST SP 811, B.8); 190 N·m ÷ 1.355818 = 140.1 ft·lb (NIST SP 811, B.8).
+    expect(mail.text).toContain("Cold pressure set: Set cold to 40 psi (276 kPa) (signed by Sam Staff)");
     expect(mail.text).toContain("Lug nuts torqued: Lug nuts to 190 N·m (140.1 ft·lb) in the star order, all passes (signed by Sam Staff)");
     expect(mail.text).toContain("re-checked after the first 50–100 miles");
     link = linkIn(mail.text);

@@ -65,7 +65,7 @@ export function completionMail(f: CompletionFacts): OutgoingMail {
   const sections = workSummary(f.order);
   const invoice = invoiceLines(f.invoice);
   const what = f.order.beadlock ? "lug nuts and beadlock ring bolts" : "lug nuts";
-  const lead = `the work on your ${f.order.vehicleDescription} for quote Q-${f.order.quoteNumber} was finished on ${formatInstant(f.doneAt, f.timeZone)}. Here is what was done and your invoice.`;
+  const lead = `The work on your ${f.order.vehicleDescription} for quote Q-${f.order.quoteNumber} was finished on ${formatInstant(f.doneAt, f.timeZone)}. Here is what was done and your invoice.`;
   const recheck = `Please come back around ${dayOf(f.recheckDueAt, f.timeZone)} to have the ${what} re-checked to the maker's torque. ${RECHECK_NOTE}`;
   const pay = f.invoice.paid
     ? "Your invoice is paid. Thank you."
