@@ -5,7 +5,11 @@ import { afterEach, describe, expect, it, vi } from "vitest";
 import { tighteningSequence } from "@/lib/fitment";
 import { RingHelper } from "./RingHelper";
 
-afterEach(cleanup);
+afterEach(() => {
+  cleanup();
+  // The helper remembers the ring in this tab (ringMemory.ts): every test starts from a fresh tab.
+  sessionStorage.clear();
+});
 // user-event drives every key and click through the DOM; on a busy shared machine that is slow.
 vi.setConfig({ testTimeout: 20_000 });
 
@@ -164,6 +168,28 @@ describe("beadlock tick-off", () => {
   const tick = () => within(screen.getByRole("region", { name: "Tick off as you go" }));
   const status = () => screen.getByTestId("tickoff-status").textContent ?? "";
   const nextOnDiagram = () => document.querySelector('[data-testid="ring-bolt"][data-next="true"]')?.getAttribute("data-bolt");
+
+  it("finds the ring and the bolts ticked again after a reload of the page (same tab)", async () => {
+    const user = userEvent.setup();
+    render(<RingHelper />);
+    await retypeBoltCount(user, "32");
+    await user.click(screen.getByRole("radio", { name: "N·m" }));
+    await user.type(torqueField(), "24.4");
+    await user.click(screen.getByRole("radio", { name: "ft·lb" }));
+    for (let i = 0; i < 3; i++) await user.click(tick().getByRole("button", { name: /^Mark bolt \d+ done$/ }));
+    const before = status();
+    expect(before).toMatch(/3 of 32/);
+    // A reload: the component is gone and mounts again from the prerendered defaults.
+    cleanup();
+    render(<RingHelper />);
+    expect((screen.getByLabelText("Bolts on the ring") as HTMLInputElement).value).toBe("32");
+    // 24.4 N·m ÷ 1.355818 = 18.0 ft·lb (NIST SP 811 B.9), still in ft·lb, the exact N·m kept behind it.
+    expect(torqueField().value).toBe("18");
+    expect(status()).toBe(before);
+    // A new ring (another count) does not inherit the ticks.
+    await retypeBoltCount(user, "24");
+    expect(status()).toMatch(/0 of 24/);
+  });
 
   it("ticks bolts in order per pass, shows the next one, survives a unit switch and a re-render, and resets", async () => {
     const user = userEvent.setup();

@@ -1,15 +1,25 @@
 "use client";
-import { useState } from "react";
+import { useEffect, useState, useSyncExternalStore } from "react";
 import { Card } from "@/components/ui/Card";
 import { BOLT_COUNT_LIMITS, tighteningSequence, torquePlan, type TorquePlan } from "@/lib/fitment";
 import { PassTable } from "./PassTable";
 import { RingCautions } from "./RingCautions";
 import { RingDiagram } from "./RingDiagram";
 import { RingInputs } from "./RingInputs";
+import { RING_MEMORY_KEY, type RingMemory, readRingMemory } from "./ringMemory";
 import { TickOff } from "./TickOff";
 import { torquePair } from "./torqueText";
 import { useTickOff } from "./useTickOff";
 import { useTorqueEntry } from "./useTorqueEntry";
+
+const noSubscribe = () => () => {};
+const readKept = (): string | null => {
+  try {
+    return sessionStorage.getItem(RING_MEMORY_KEY);
+  } catch {
+    return null; // storage blocked: the helper works, it only forgets on a reload
+  }
+};
 
 /**
  * The beadlock ring helper: bolt count and the maker's torque in, the crisscross order as a
@@ -40,6 +50,30 @@ export function RingHelper() {
     .join(" and ");
   const noPasses = `${missing.charAt(0).toUpperCase()}${missing.slice(1)} to see the passes in ft·lb and N·m.`;
   const tick = useTickOff(plan ? `${plan.boltCount}|${plan.torqueNm}` : null, sequence ?? [], plan?.passes.length ?? 0);
+
+  // A reload finds the ring as it was (ringMemory.ts). Read once hydrated (the page is
+  // prerendered; `undefined` until then), as a render-time update; nothing is written before,
+  // so the defaults never overwrite what was kept.
+  const kept = useSyncExternalStore(noSubscribe, readKept, () => undefined);
+  const [recalled, setRecalled] = useState(false);
+  if (!recalled && kept !== undefined) {
+    setRecalled(true);
+    const m = readRingMemory(kept);
+    if (m) {
+      setCountText(m.countText);
+      torque.restore(m.torque);
+      if (m.ticks) tick.restore(m.ticks);
+    }
+  }
+  const memory = JSON.stringify({ countText, torque: torque.entry, ticks: tick.saved } satisfies RingMemory);
+  useEffect(() => {
+    if (!recalled) return;
+    try {
+      sessionStorage.setItem(RING_MEMORY_KEY, memory);
+    } catch {
+      // Storage blocked or full: nothing to keep it in; the screen is unaffected.
+    }
+  }, [recalled, memory]);
 
   return (
     // On paper: the diagram on the left, the summary and cautions beside it, the passes below (one page).

@@ -27,6 +27,10 @@ export interface TickOff {
   markNext: () => void;
   select: (pass: number) => void;
   reset: () => void;
+  /** The ticks and the ring they belong to, to remember; null when nothing is ticked. */
+  saved: { key: string; done: number[][] } | null;
+  /** Puts back remembered ticks; they stay only if `key` is the ring shown once the inputs are back too. */
+  restore: (saved: { key: string; done: number[][] }) => void;
 }
 
 /**
@@ -73,5 +77,7 @@ export function useTickOff(key: string | null, sequence: readonly number[], pass
     },
     select: (i) => setState({ ...s, view: i }),
     reset: () => setState({ key, done: [], view: null, cleared: false }),
+    saved: s.key !== null && s.done.some((d) => d.length > 0) ? { key: s.key, done: s.done } : null,
+    restore: (saved) => setState({ key: saved.key, done: saved.done, view: null, cleared: false }),
   };
 }

@@ -15,6 +15,10 @@ export interface TorqueField {
   error?: string;
   setText: (text: string) => void;
   switchUnit: (to: TorqueUnit) => void;
+  /** The entry as it stands (text, unit and the exact value behind a converted text), to remember. */
+  entry: TorqueEntry;
+  /** Puts back a remembered entry. */
+  restore: (entry: TorqueEntry) => void;
 }
 
 /**
@@ -47,6 +51,11 @@ export function useTorqueEntry(initialUnit: TorqueUnit = "ftlb"): TorqueField {
     // Typing replaces the converted text, so the exact value behind it no longer applies.
     setText: (text) => {
       setEntry({ text, unit: entry.unit, exact: null });
+      setRefusedSwitch(false);
+    },
+    entry,
+    restore: (remembered) => {
+      setEntry(remembered);
       setRefusedSwitch(false);
     },
     switchUnit: (to) => {
