@@ -55,7 +55,9 @@ describe("form text ⇄ comparison input", () => {
     const d = base();
     d.planned = { ...d.planned, tire: "285/70/17" };
     const message = readDraft(d, inch).errors["planned.tire"];
-    expect(message).toMatch(/^Tire size: not a recognised tire size designation; did you mean 285\/70R17\? \(accepted forms:/);
+    expect(message).toMatch(
+      /^Tire size: "285\/70\/17" — not a recognised tire size designation; did you mean 285\/70R17\? \(accepted forms:/,
+    );
     expect(message?.match(/Tire size/g)).toHaveLength(1);
   });
 

@@ -19,7 +19,9 @@ describe("checkSetup (moved from the comparison schema's tests)", () => {
     expect(issues({ ...PLANNED, tire: "" }).tire).toBe("Tire size: enter a tire size, e.g. 265/70R17.");
     // The engine's message already names the field: it reads once, with the likely size offered.
     const slashed = issues({ ...PLANNED, tire: "285/70/17" }).tire;
-    expect(slashed).toMatch(/^Tire size: not a recognised tire size designation; did you mean 285\/70R17\? \(accepted forms:/);
+    expect(slashed).toMatch(
+      /^Tire size: "285\/70\/17" — not a recognised tire size designation; did you mean 285\/70R17\? \(accepted forms:/,
+    );
     expect(slashed?.match(/Tire size/g)).toHaveLength(1);
   });
 

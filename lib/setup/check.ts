@@ -114,8 +114,9 @@ export function checkSetup(v: unknown, path: Issue["path"] = [], opts: CheckSetu
     } catch (e) {
       issues.push({
         path: at("tire"),
-        // The engine's reason without its own "Tire size …" naming: the label comes first, once.
+        // The label once, then what was typed (a person sees which text was refused) and the engine's reason.
         message: SETUP_MESSAGE.tireUnreadable(
+          tire,
           e instanceof TireSizeError ? e.reason : e instanceof Error ? e.message : `not a tire size, e.g. ${EX.tire}.`,
         ),
       });

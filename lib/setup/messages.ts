@@ -52,7 +52,8 @@ export const SETUP_MESSAGE = {
   tireEmpty: `${L.tire}: enter a tire size, e.g. ${EX.tire}.`,
   tireTooLong: `${L.tire}: too long for a tire size, e.g. ${EX.tire}.`,
   /** The engine's reason (TireSizeError.reason: without its own "Tire size" naming), which shows the accepted forms. */
-  tireUnreadable: (engineReason: string) => `${L.tire}: ${engineReason}`,
+  tireUnreadable: (typed: string, engineReason: string) =>
+    `${L.tire}: ${JSON.stringify(typed.length > 40 ? `${typed.slice(0, 40)}…` : typed)} — ${engineReason}`,
   rimMismatch: (rimIn: number, wheelIn: number) =>
     `${L.wheelDiameterIn}: a ${rimIn} in tire needs a ${rimIn} in wheel; this wheel is ${wheelIn} in.`,
   /** The offset a person may give a wheel of this width: W/2 + the engine's margin either way. */
