@@ -1,5 +1,5 @@
 "use client";
-import { useCallback, useEffect, useRef } from "react";
+import { useCallback, useLayoutEffect, useRef } from "react";
 
 /** When to look again after a write: Next's router settles within a frame or two, a slow phone later. */
 const RECHECKS_MS = [150, 600, 2000];
@@ -29,7 +29,8 @@ export function useAddressBar(): (url: string, mode: "push" | "replace") => void
     timers.current = [];
   }, []);
 
-  useEffect(() => {
+  // A layout effect: its cleanup runs in the commit that leaves the page, before a timer can fire.
+  useLayoutEffect(() => {
     window.addEventListener("popstate", stop);
     return () => {
       window.removeEventListener("popstate", stop);
@@ -48,7 +49,9 @@ export function useAddressBar(): (url: string, mode: "push" | "replace") => void
       timers.current = RECHECKS_MS.map((ms) =>
         setTimeout(() => {
           // A later write, Back/Forward or leaving the page cleared `wanted`: nothing to keep.
-          if (wanted.current === url && here() !== url) window.history.replaceState(window.history.state, "", url);
+          // Only while the address bar is still on this page: a move to another page is never undone.
+          const samePage = window.location.pathname === new URL(url, window.location.origin).pathname;
+          if (wanted.current === url && samePage && here() !== url) window.history.replaceState(window.history.state, "", url);
         }, ms),
       );
     },
