@@ -62,6 +62,7 @@ describe("PaymentHistory", () => {
       requestedBy: "Olive Owner",
       createdAt: "2027-03-02T17:00:00Z",
       succeededAt: null,
+      failedAt: null,
     };
     render(
       <PaymentHistory
@@ -72,6 +73,33 @@ describe("PaymentHistory", () => {
     expect(screen.getByRole("list", { name: "Payment history" }).textContent).toContain(
       "−$400.00 · waiting for the provider · by Olive Owner",
     );
+  });
+
+  it("lists a refund the provider reported as failed as not given back; the whole deposit is refundable again", () => {
+    const invoice = invoiceFigures(
+      430782,
+      [{ kind: "deposit", status: "paid", amountCents: 107696 }],
+      [{ status: "failed", amountCents: 40000 }],
+    );
+    const refund = {
+      id: "r1",
+      paymentId: "p1",
+      amountCents: 40000,
+      status: "failed" as const,
+      requestedBy: "Olive Owner",
+      createdAt: "2027-03-02T17:00:00Z",
+      succeededAt: null,
+      failedAt: "2027-03-02T17:05:00Z",
+    };
+    render(
+      <PaymentHistory
+        payments={{ invoice, invoiceOpen: false, refundBlocked: null, payments: [deposit], refunds: [refund], timeZone: DENVER }}
+      />,
+    );
+    expect(screen.getByRole("list", { name: "Payment history" }).textContent).toContain(
+      "−$400.00 · refund failed — not given back · by Olive Owner",
+    );
+    expect(invoice.refundableCents).toBe(107696);
   });
 
   it("dates payments and refunds on the shop's clock, not the device's or the server's (vitest runs in UTC)", () => {
@@ -90,6 +118,7 @@ describe("PaymentHistory", () => {
       requestedBy: "Olive Owner",
       createdAt: "2026-12-04T04:00:00Z",
       succeededAt: "2026-12-04T04:15:00Z",
+      failedAt: null,
     };
     render(
       <PaymentHistory

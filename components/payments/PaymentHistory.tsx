@@ -1,7 +1,7 @@
 import { Badge } from "@/components/ui/Badge";
 import type { QuotePayments } from "@/lib/shop/payments/api";
 import { invoiceLines } from "@/lib/shop/payments/invoice";
-import { PAYMENT_KIND_LABEL, PAYMENT_METHOD_LABEL } from "@/lib/shop/payments/labels";
+import { PAYMENT_KIND_LABEL, PAYMENT_METHOD_LABEL, REFUND_STATUS_LABEL } from "@/lib/shop/payments/labels";
 import { formatUsd } from "@/lib/shop/quotes/money";
 import { formatInstant } from "@/lib/shop/bookings/zoned";
 
@@ -42,8 +42,8 @@ export function PaymentHistory({ payments }: { payments: QuotePayments }) {
             ))}
             {payments.refunds.map((r) => (
               <li key={r.id}>
-                {when(r.succeededAt ?? r.createdAt)} · Refund of the deposit · <strong>−{formatUsd(r.amountCents)}</strong> ·{" "}
-                {r.status === "succeeded" ? "refunded" : "waiting for the provider"} · by {r.requestedBy}
+                {when(r.failedAt ?? r.succeededAt ?? r.createdAt)} · Refund of the deposit · <strong>−{formatUsd(r.amountCents)}</strong> ·{" "}
+                {REFUND_STATUS_LABEL[r.status]} · by {r.requestedBy}
               </li>
             ))}
           </ul>

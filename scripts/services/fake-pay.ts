@@ -7,12 +7,15 @@
  *   POST /v1/checkout/sessions/:id/expire   expire an unpaid session (its page then takes no payment)
  *   POST /v1/refunds             refund part or all of a paid session's payment (`payment_intent`, `amount`);
  *                                answers the refund as pending, then sends a signed `refund.updated` event
- *                                with the refund's status "succeeded"
+ *                                with the refund's status "succeeded" — or "failed" (failure_reason
+ *                                "expired_or_canceled_card") when the payment was made with the card whose
+ *                                refunds fail; a failed refund gives nothing back, so it can be asked again
  * The webhook is signed the way the provider documents (header `Stripe-Signature: t=…,v1=…`,
  * v1 = HMAC-SHA256 of "t.payload" with the endpoint secret), so the SDK's constructEvent verifies it.
  *
  * Env: FAKE_PAY_PORT (2527), STRIPE_SECRET_KEY, STRIPE_WEBHOOK_SECRET, STRIPE_WEBHOOK_URL.
- * Test cards: 4242 4242 4242 4242 pays; 4000 0000 0000 0002 is declined; anything failing the Luhn check is refused.
+ * Test cards: 4242 4242 4242 4242 pays; 4000 0000 0000 0002 is declined; 4000 0000 0000 5126 pays, but
+ * every refund of it fails; anything failing the Luhn check is refused.
  */
 import { createHmac, randomBytes } from "node:crypto";
 import { type IncomingMessage, type Server, type ServerResponse, createServer } from "node:http";
@@ -29,6 +32,8 @@ interface Session {
   payment_status: "unpaid" | "paid";
   /** Set when paid: what a refund names. */
   payment_intent: string | null;
+  /** Paid with the card whose refunds fail (not a field of the provider's session; never sent). */
+  refundsFail?: boolean;
   client_reference_id: string | null;
   customer_email: string | null;
   metadata: Record<string, string>;
@@ -47,7 +52,8 @@ interface Refund {
   currency: string;
   payment_intent: string;
   metadata: Record<string, string>;
-  status: "pending" | "succeeded";
+  status: "pending" | "succeeded" | "failed";
+  failure_reason?: string;
   created: number;
 }
 
@@ -127,7 +133,7 @@ a{color:#1f4a6f}
 <h1>Test payment</h1>
 <p>${esc(s.description)}</p>
 <p><strong style="font-size:1.5rem" data-testid="pay-amount">${esc(usd(s.amount_total))}</strong> ${esc(s.currency.toUpperCase())}</p>
-<p class="note">Local test server — no real money moves. Card 4242 4242 4242 4242 pays; 4000 0000 0000 0002 is declined.</p>
+<p class="note">Local test server — no real money moves. Card 4242 4242 4242 4242 pays; 4000 0000 0000 0002 is declined; 4000 0000 0000 5126 pays, but its refunds fail.</p>
 ${error ? `<p class="err" role="alert">${esc(error)}</p>` : ""}
 <form method="post" action="/pay/${esc(s.id)}">
 <label for="card">Card number</label><input id="card" name="card" inputmode="numeric" autocomplete="cc-number" required>
@@ -254,7 +260,9 @@ export function startFakePay(
       const f = parseForm(await readBody(req)) as { payment_intent?: string; amount?: string; metadata?: Record<string, string> };
       const paid = [...sessions.values()].find((x) => x.payment_intent && x.payment_intent === f.payment_intent);
       if (!paid) return fail(404, `No such payment_intent: '${f.payment_intent ?? ""}'`, "payment_intent");
-      const refunded = [...refunds.values()].filter((r) => r.payment_intent === paid.payment_intent).reduce((n, r) => n + r.amount, 0);
+      const refunded = [...refunds.values()]
+        .filter((r) => r.payment_intent === paid.payment_intent && r.status !== "failed")
+        .reduce((n, r) => n + r.amount, 0);
       const amount = f.amount === undefined ? paid.amount_total - refunded : Number(f.amount);
       if (!Number.isInteger(amount) || amount < 1) return fail(400, "amount must be a positive integer.", "amount");
       if (amount > paid.amount_total - refunded)
@@ -274,9 +282,10 @@ export function startFakePay(
         created: Math.floor(Date.now() / 1000),
       };
       refunds.set(refund.id, refund);
-      // The provider settles a refund after answering; the webhook tells the app it succeeded.
+      // The provider settles a refund after answering; the webhook tells the app it succeeded (or failed).
       setTimeout(() => {
-        refund.status = "succeeded";
+        if (paid.refundsFail) Object.assign(refund, { status: "failed", failure_reason: "expired_or_canceled_card" });
+        else refund.status = "succeeded";
         void deliver("refund.updated", { ...refund });
       }, 20);
       return json(200, refund);
@@ -319,7 +328,9 @@ export function startFakePay(
             s.status = "complete";
             s.payment_status = "paid";
             s.payment_intent = `pi_${randomBytes(12).toString("hex")}`;
-            await deliver("checkout.session.completed", s);
+            s.refundsFail = card === "4000000000005126";
+            const { refundsFail: _, ...sent } = s;
+            await deliver("checkout.session.completed", sent);
           }
           res.writeHead(303, { Location: s.success_url });
           return res.end();

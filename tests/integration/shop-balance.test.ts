@@ -60,12 +60,16 @@ async function until(check: () => boolean, what: string) {
   if (!check()) throw new Error(`timed out waiting for ${what}`);
 }
 
-/** Pays a checkout page of the fake with the test card that pays; waits for its webhook. */
-async function payOnPage(url: string) {
+/** The fake's test card that pays, and the one that pays but whose refunds fail (scripts/services/fake-pay.ts). */
+const CARD_PAYS = "4242 4242 4242 4242";
+const CARD_REFUNDS_FAIL = "4000 0000 0000 5126";
+
+/** Pays a checkout page of the fake with a test card that pays; waits for its webhook. */
+async function payOnPage(url: string, card = CARD_PAYS) {
   const before = forwarder.delivered.length;
   const res = await fetch(url, {
     method: "POST",
-    body: new URLSearchParams({ card: "4242 4242 4242 4242", exp: "12/30", cvc: "123" }),
+    body: new URLSearchParams({ card, exp: "12/30", cvc: "123" }),
     redirect: "manual",
   });
   expect(res.status).toBe(303);
@@ -74,7 +78,7 @@ async function payOnPage(url: string) {
 }
 
 /** A quote of shop A, sent, accepted and its deposit paid on the fake's page; its customer's address and link. */
-async function depositPaidQuote() {
+async function depositPaidQuote(card = CARD_PAYS) {
   as(U.staffA);
   const email = `b${randomBytes(4).toString("hex")}@example.test`;
   const c = await customers.POST(
@@ -94,7 +98,7 @@ async function depositPaidQuote() {
   as(null);
   const action = (a: string) => act(req("POST", `/api/q/${token}`, { action: a }), ctx({ token }));
   expect((await action("accept")).status).toBe(200);
-  await payOnPage((await (await action("pay")).json()).url);
+  await payOnPage((await (await action("pay")).json()).url, card);
   expect((await db("quotes").where({ id }).first()).status).toBe("deposit_paid");
   return { id, email, token };
 }
@@ -402,6 +406,72 @@ describe("refunding a deposit on a cancelled booking", () => {
       /^The payment provider refused the refund: Refund amount \(1000\) is greater than unrefunded amount/,
     );
     expect(await count("payment_refunds")).toBe(rows);
+  });
+});
+
+describe("a refund the provider reports as failed", () => {
+  let q: { id: string; email: string; token: string };
+
+  it("the provider's signed refund.updated (failed) marks the row failed: no longer asked back, nothing blocked, refundable again", async () => {
+    q = await depositPaidQuote(CARD_REFUNDS_FAIL);
+    await book(q.id);
+    await cancelInstall(db, { shopId: SHOP_A }, q.id, { userId: U.staffA.id, label: "Sam Staff" });
+    as(U.ownerA);
+    const before = forwarder.delivered.length;
+    const mailsBefore = (await mails()).length;
+    expect((await refund(q.id, { amount: "1076.96" })).status).toBe(202);
+    await until(() => forwarder.delivered.length > before, "the refund webhook");
+    expect(forwarder.delivered.at(-1)).toMatchObject({ status: 200, answer: { outcome: "refund_failed" } });
+    const row = await db("payment_refunds").where({ quote_id: q.id }).first();
+    expect(row).toMatchObject({ status: "failed", succeeded_at: null });
+    expect(row.failed_at).toBeInstanceOf(Date);
+    expect(row.provider_refund_id).toMatch(/^re_/);
+    // No money moved: no refund note, the quote stays deposit paid.
+    expect((await mails()).length).toBe(mailsBefore);
+    expect((await db("quotes").where({ id: q.id }).first()).status).toBe("deposit_paid");
+
+    const view = (await (await counter.GET(req("GET", `/api/shop/quotes/${q.id}/payments`), ctx({ id: q.id }))).json()).payments;
+    // 1,076.96 paid − 0 given back = 1,076.96 refundable and held again (by hand).
+    expect(view.invoice).toMatchObject({ refundedCents: 0, depositHeldCents: 107696, refundableCents: 107696 });
+    expect(view.refundBlocked).toBeNull();
+    expect(view.refunds).toEqual([expect.objectContaining({ status: "failed", failedAt: expect.stringMatching(/Z$/) })]);
+    // Booking is open again: the deposit is held.
+    await book(q.id);
+    expect(await db("bookings").where({ quote_id: q.id, status: "booked" })).toHaveLength(1);
+  });
+
+  it("a replay of the failure changes nothing", async () => {
+    const last = forwarder.delivered.at(-1)!;
+    expect(await postWebhook(last.body, last.signature)).toMatchObject({ status: 200, answer: { outcome: "duplicate" } });
+    const again = JSON.parse(last.body);
+    again.id = `evt_again_${randomBytes(4).toString("hex")}`;
+    const body = JSON.stringify(again);
+    expect(await postWebhook(body, signPayload(body, SECRET))).toMatchObject({ status: 200, answer: { outcome: "already_failed" } });
+    expect(await db("payment_refunds").where({ quote_id: q.id }).pluck("status")).toEqual(["failed"]);
+  });
+
+  it("the provider's refund.failed event type is read the same way", async () => {
+    const row = await db("payment_refunds").where({ quote_id: q.id }).first();
+    await db("payment_refunds").where({ id: row.id }).update({ status: "pending", failed_at: null });
+    const payment = await db("payments").where({ id: row.payment_id }).first();
+    const body = JSON.stringify({
+      id: `evt_failed_${randomBytes(4).toString("hex")}`,
+      object: "event",
+      type: "refund.failed",
+      data: {
+        object: {
+          id: row.provider_refund_id,
+          object: "refund",
+          amount: row.amount_cents,
+          currency: "usd",
+          status: "failed",
+          payment_intent: payment.provider_payment_intent,
+          metadata: { refund_id: row.id },
+        },
+      },
+    });
+    expect(await postWebhook(body, signPayload(body, SECRET))).toMatchObject({ status: 200, answer: { outcome: "refund_failed" } });
+    expect((await db("payment_refunds").where({ id: row.id }).first()).status).toBe("failed");
   });
 });
 

@@ -283,11 +283,12 @@ export interface PaymentRefundRow extends ShopOwnedRow {
   payment_id: string;
   provider_refund_id: string | null;
   amount_cents: number;
-  status: "pending" | "succeeded";
+  status: "pending" | "succeeded" | "failed";
   requested_by_user_id: string | null;
   requested_by: string;
   created_at: Date;
   succeeded_at: Date | null;
+  failed_at: Date | null;
 }
 
 /* ---- install bookings (lib/shop/bookings) ---- */

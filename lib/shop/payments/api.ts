@@ -26,6 +26,8 @@ export interface RefundEntry {
   requestedBy: string;
   createdAt: string;
   succeededAt: string | null;
+  /** When the provider reported it failed (nothing given back); null otherwise. */
+  failedAt: string | null;
 }
 
 /** A quote's money after the deposit: the invoice once the work is done, the history, and what may be refunded. */
@@ -58,4 +60,5 @@ export const refundEntryDto = (r: PaymentRefundRow): RefundEntry => ({
   requestedBy: r.requested_by,
   createdAt: new Date(r.created_at).toISOString(),
   succeededAt: iso(r.succeeded_at),
+  failedAt: iso(r.failed_at),
 });

@@ -13,7 +13,7 @@ export async function depositRefundedInFull(db: Knex | Knex.Transaction, quoteId
   const row = (await db
     .select(
       db("payments").where({ quote_id: quoteId, kind: "deposit", status: "paid" }).sum("amount_cents").as("paid"),
-      db("payment_refunds").where({ quote_id: quoteId }).sum("amount_cents").as("refunded"),
+      db("payment_refunds").where({ quote_id: quoteId }).whereIn("status", ["pending", "succeeded"]).sum("amount_cents").as("refunded"),
     )
     .first()) as { paid: string | null; refunded: string | null };
   return depositGivenBack(Number(row.paid ?? 0), Number(row.refunded ?? 0));

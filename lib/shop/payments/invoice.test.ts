@@ -90,6 +90,15 @@ describe("a refunded deposit is not money the shop holds", () => {
     expect(f).toMatchObject({ depositHeldCents: 42512, balanceDueCents: 127537, refundedCents: 0, refundableCents: 0 });
     expect(invoiceLines(f)).not.toContain("Deposit refunded: +$425.12");
   });
+
+  it("a refund the provider reports as failed gave nothing back: the whole deposit is refundable again and still held", () => {
+    // 425.12 − 100.00 (the part that succeeded) = 325.12 refundable; the failed 325.12 counts nowhere (by hand).
+    const f = invoiceFigures(total, paid, [
+      { status: "succeeded", amountCents: 10000 },
+      { status: "failed", amountCents: 32512 },
+    ]);
+    expect(f).toMatchObject({ refundedCents: 10000, depositHeldCents: 32512, refundableCents: 32512 });
+  });
 });
 
 describe("overLimit", () => {

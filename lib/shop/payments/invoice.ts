@@ -12,7 +12,8 @@
  * - balance paid = Σ paid balance payments (online or at the counter);
  * - outstanding = balance due − balance paid; the invoice is "Paid" at 0;
  * - refundable = deposit paid − Σ refunds asked (pending or succeeded), so two refunds can never
- *   add up to more than was paid.
+ *   add up to more than was paid; a refund the provider reports as failed gave nothing back and
+ *   counts nowhere (the deposit can be refunded again).
  */
 import type { PaymentKind } from "@/lib/platform/db/types";
 import { formatUsd } from "@/lib/shop/quotes/money";
@@ -24,7 +25,7 @@ export interface LedgerPayment {
 }
 export interface LedgerRefund {
   amountCents: number;
-  status: "pending" | "succeeded";
+  status: "pending" | "succeeded" | "failed";
 }
 
 export interface InvoiceFigures {
@@ -64,7 +65,7 @@ export function invoiceFigures(totalCents: number, payments: readonly LedgerPaym
     outstandingCents: outstanding,
     paid: outstanding <= 0,
     refundedCents: refunded,
-    refundableCents: depositPaid - sum([...refunds]),
+    refundableCents: depositPaid - sum(refunds.filter((r) => r.status !== "failed")),
   };
 }
 

@@ -21,7 +21,10 @@ import { readTogether } from "@/lib/platform/db/readTogether";
 
 type Db = Knex | Knex.Transaction;
 type CheckoutSession = Extract<PaymentEvent, { type: "checkout.session.completed" }>["data"]["object"];
-type ProviderRefund = Extract<PaymentEvent, { type: "refund.updated" }>["data"]["object"];
+type ProviderRefund = Extract<PaymentEvent, { type: "refund.updated" | "refund.failed" }>["data"]["object"];
+
+/** The provider's refund statuses that mean nothing was given back (and never will be, for this refund). */
+const REFUND_GAVE_NOTHING = ["failed", "canceled"];
 
 async function ledger(db: Db, quote: Pick<QuoteRow, "id" | "total_cents">) {
   const [payments, refunds] = (await readTogether(
@@ -258,6 +261,10 @@ export async function requestRefund(db: Knex, shopId: string, quoteId: string, a
     const r = await createRefund({ refundId: refund.id, paymentIntent, amountCents, quoteId: quote.id, shopId });
     // The webhook may have set it already; either way it is the same id.
     await db("payment_refunds").where({ id: refund.id }).whereNull("provider_refund_id").update({ provider_refund_id: r.id });
+    if (r.status && REFUND_GAVE_NOTHING.includes(r.status)) {
+      // Failed at once: nothing was given back, so the row must not wait as pending for an event that may not come.
+      await db("payment_refunds").where({ id: refund.id, status: "pending" }).update({ status: "failed", failed_at: db.fn.now() });
+    }
   } catch (e) {
     await db("payment_refunds").where({ id: refund.id, status: "pending" }).delete();
     throw e;
@@ -266,14 +273,16 @@ export async function requestRefund(db: Knex, shopId: string, quoteId: string, a
 }
 
 /**
- * The provider's signed "refund succeeded" (a `refund.updated` event whose refund succeeded), in
- * applyPaymentEvent's transaction. A refund the app never asked for is an UnknownReferenceError,
- * one that does not match its row an InvalidError; nothing is written then.
+ * The provider's signed word on a refund (a `refund.updated` or `refund.failed` event), in
+ * applyPaymentEvent's transaction: "succeeded" confirms it; "failed" or "canceled" marks a pending
+ * row failed, so it no longer counts as asked back and the deposit can be refunded again. A refund
+ * the app never asked for is an UnknownReferenceError, one that does not match its row an
+ * InvalidError; nothing is written then.
  */
-export async function markRefundSucceeded(
+export async function applyRefundUpdate(
   trx: Knex.Transaction,
   r: ProviderRefund,
-): Promise<{ outcome: "refund_succeeded" | "already_refunded" | "ignored"; quoteId: string | null }> {
+): Promise<{ outcome: "refund_succeeded" | "already_refunded" | "refund_failed" | "already_failed" | "ignored"; quoteId: string | null }> {
   const rowId = r.metadata?.refund_id ?? "";
   const row = (await trx<PaymentRefundRow>("payment_refunds")
     .where((q) => {
@@ -289,13 +298,29 @@ export async function markRefundSucceeded(
   if (r.amount !== row.amount_cents || r.currency.toLowerCase() !== "usd") {
     throw new InvalidError(`The refunded amount ${r.amount} does not match the refund asked, ${row.amount_cents}.`);
   }
+  if (REFUND_GAVE_NOTHING.includes(r.status)) return markRefundFailed(trx, row, r);
   if (r.status !== "succeeded") return { outcome: "ignored", quoteId: row.quote_id };
   if (row.status === "succeeded") return { outcome: "already_refunded", quoteId: row.quote_id };
+  // A late "succeeded" after the provider said it failed is out of order: the failure stands.
+  if (row.status === "failed") return { outcome: "ignored", quoteId: row.quote_id };
   await trx("payment_refunds").where({ id: row.id }).update({ status: "succeeded", succeeded_at: trx.fn.now(), provider_refund_id: r.id });
   const quote = (await trx<QuoteRow>("quotes").where({ id: row.quote_id }).forUpdate().first()) as QuoteRow;
   await queueReceipt(trx, quote, { kind: "refund" }, row.amount_cents, null);
   await endWhenRefundedInFull(trx, quote, row, r.id);
   return { outcome: "refund_succeeded", quoteId: row.quote_id };
+}
+
+/** A pending refund the provider could not make: marked failed, nothing else changes (no money moved). */
+async function markRefundFailed(trx: Knex.Transaction, row: PaymentRefundRow, r: ProviderRefund) {
+  if (row.status === "failed") return { outcome: "already_failed" as const, quoteId: row.quote_id };
+  if (row.status === "succeeded") {
+    // The provider took back a refund it had confirmed (the bank returned it). The quote may have been declined on it,
+    // so this is not undone here: say so loudly for the shop to settle with the customer.
+    log().error({ refundId: row.id, providerRefundId: r.id, quoteId: row.quote_id }, "a confirmed refund failed afterwards");
+    return { outcome: "ignored" as const, quoteId: row.quote_id };
+  }
+  await trx("payment_refunds").where({ id: row.id }).update({ status: "failed", failed_at: trx.fn.now(), provider_refund_id: r.id });
+  return { outcome: "refund_failed" as const, quoteId: row.quote_id };
 }
 
 /**

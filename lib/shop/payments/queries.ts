@@ -5,13 +5,15 @@ import type { PaymentRow, QuoteRow } from "@/lib/platform/db/types";
 import { InvalidError, UnknownReferenceError } from "@/lib/platform/errors";
 import { transition } from "../quotes/queries";
 import { bindAppDb } from "@/lib/platform/db/bind";
-import { markRefundSucceeded, markSessionPaid } from "./ledgerQueries";
+import { applyRefundUpdate, markSessionPaid } from "./ledgerQueries";
 
 export type WebhookOutcome =
   | "deposit_paid"
   | "balance_paid"
   | "refund_succeeded"
   | "already_refunded"
+  | "refund_failed"
+  | "already_failed"
   | "duplicate"
   | "already_paid"
   | "paid_but_quote_not_accepted"
@@ -26,7 +28,7 @@ type CheckoutSession = Extract<PaymentEvent, { type: "checkout.session.completed
  * does not match an InvalidError; nothing is written then.
  */
 export async function applyPaymentEvent(db: Knex, event: PaymentEvent): Promise<WebhookOutcome> {
-  if (event.type !== "checkout.session.completed" && event.type !== "refund.updated") {
+  if (event.type !== "checkout.session.completed" && event.type !== "refund.updated" && event.type !== "refund.failed") {
     await db("payment_webhook_events").insert({ event_id: event.id, type: event.type, outcome: "ignored" }).onConflict("event_id").ignore();
     return "ignored";
   }
@@ -39,8 +41,8 @@ export async function applyPaymentEvent(db: Knex, event: PaymentEvent): Promise<
     if (first.length === 0) return "duplicate";
     // The schema checked each type's object shape (lib/shop/payments/schema.ts).
     const { outcome, quoteId } =
-      event.type === "refund.updated"
-        ? await markRefundSucceeded(trx, (event as Extract<PaymentEvent, { type: "refund.updated" }>).data.object)
+      event.type === "refund.updated" || event.type === "refund.failed"
+        ? await applyRefundUpdate(trx, (event as Extract<PaymentEvent, { type: "refund.updated" | "refund.failed" }>).data.object)
         : await applyCheckout(trx, (event as Extract<PaymentEvent, { type: "checkout.session.completed" }>).data.object);
     await trx("payment_webhook_events").where({ event_id: event.id }).update({ outcome, quote_id: quoteId });
     return outcome;

@@ -31,11 +31,13 @@ const refund = z.looseObject({
   metadata: z.record(z.string(), z.string()).nullable().optional(),
 });
 
-const READ_TYPES = ["checkout.session.completed", "refund.updated"];
+/** `refund.failed` carries the same refund object as `refund.updated`; both are read by its status. */
+const REFUND_TYPES = ["refund.updated", "refund.failed"] as const;
+const READ_TYPES: readonly string[] = ["checkout.session.completed", ...REFUND_TYPES];
 
 export const paymentEventSchema = z.union([
   eventBase.extend({ type: z.literal("checkout.session.completed"), data: z.object({ object: checkoutSession }) }),
-  eventBase.extend({ type: z.literal("refund.updated"), data: z.object({ object: refund }) }),
+  eventBase.extend({ type: z.enum(REFUND_TYPES), data: z.object({ object: refund }) }),
   eventBase.extend({ type: z.string().refine((t) => !READ_TYPES.includes(t)) }),
 ]);
 export type PaymentEvent = z.infer<typeof paymentEventSchema>;
