@@ -567,6 +567,30 @@ describe("a refunded deposit on the invoice and on the quote", () => {
     expect(view.invoice).toMatchObject({ refundedCents: 107696, depositHeldCents: 0, balanceDueCents: 430782, refundableCents: 0 });
   });
 
+  it("the confirmation that declines the quote mails the customer once: quote closed, deposit refunded; a replay sends no second", async () => {
+    const q = await cancelledQuote();
+    const number = (await db("quotes").where({ id: q.id }).first()).number;
+    const closed = async () => (await mailsTo(q.email)).filter((m) => m.subject.startsWith("Closed:"));
+    await refunded(q.id, "125.12");
+    expect(await closed()).toHaveLength(0); // a part refund leaves the quote open
+    await refunded(q.id, "951.84");
+    expect((await db("quotes").where({ id: q.id }).first()).status).toBe("declined");
+    const [mail, ...more] = await closed();
+    expect(more).toHaveLength(0);
+    // 125.12 + 951.84 = 1,076.96, the whole deposit (by hand).
+    expect(mail!.subject).toBe(`Closed: quote Q-${number} at Shop A, your deposit of $1,076.96 refunded`);
+    expect(mail!.text).toContain(`Your deposit of $1,076.96 for quote Q-${number} (`);
+    expect(mail!.text).toContain("call Shop A on 555-0100 for a new quote.");
+
+    const last = forwarder.delivered.at(-1)!;
+    expect(await postWebhook(last.body, last.signature)).toMatchObject({ status: 200, answer: { outcome: "duplicate" } });
+    const again = JSON.parse(last.body);
+    again.id = `evt_again_${randomBytes(4).toString("hex")}`;
+    const body = JSON.stringify(again);
+    expect(await postWebhook(body, signPayload(body, SECRET))).toMatchObject({ status: 200, answer: { outcome: "already_refunded" } });
+    expect(await closed()).toHaveLength(1);
+  });
+
   it("a full refund still waiting for the provider already stops the work being marked installed; nothing written", async () => {
     const q = await cancelledQuote();
     const deposit = await db("payments").where({ quote_id: q.id, kind: "deposit", status: "paid" }).first();

@@ -16,6 +16,7 @@ import { PAYMENT_FIELD_LABEL } from "./labels";
 import { type InvoiceFigures, invoiceFigures, overLimit } from "./invoice";
 import { createBalanceSession, createRefund, expireSession } from "./provider";
 import { receiptMail, type ReceiptFacts } from "./receiptMail";
+import { closedOnRefundMail } from "./closedMail";
 import type { PaymentEvent } from "./schema";
 import { readTogether } from "@/lib/platform/db/readTogether";
 
@@ -327,16 +328,25 @@ async function markRefundFailed(trx: Knex.Transaction, row: PaymentRefundRow, r:
  * Once the provider has confirmed refunds adding up to the whole deposit, the shop holds none of
  * it: the quote is declined (its held stock released, no longer counted as paid, nothing left to
  * install or book; a new quote is needed). The history names the provider, which confirmed it,
- * and the owner who asked. A part refund leaves the quote as it is: the shop kept the rest.
+ * and the owner who asked; the customer is mailed once that the quote is closed and the deposit
+ * refunded. A part refund leaves the quote as it is: the shop kept the rest.
  */
 async function endWhenRefundedInFull(trx: Knex.Transaction, quote: QuoteRow, last: PaymentRefundRow, providerRefundId: string) {
   const { figures } = await ledger(trx, quote);
   if (figures.depositPaidCents === 0 || figures.depositHeldCents > 0) return;
-  await declineOnDepositRefunded(
+  const declined = await declineOnDepositRefunded(
     trx,
     quote,
     { userId: null, label: "payment provider" },
     `deposit refunded in full (last refund ${providerRefundId}, asked by ${last.requested_by})`,
+  );
+  // Only the move itself tells the customer: a replayed or later event finds the quote declined already and sends nothing.
+  if (!declined) return;
+  const parties = await quoteMailParties(trx, quote);
+  if (!parties) return;
+  await queueMailIn(
+    trx,
+    closedOnRefundMail({ ...parties, quoteNumber: quote.number, vehicle: quote.vehicle_description, refundedCents: figures.refundedCents }),
   );
 }
 

@@ -1,0 +1,36 @@
+/**
+ * The mail to the customer when the provider confirms the last refund of their deposit and the
+ * quote is closed for it (declined, its stock released). Pure composition; the webhook's
+ * transaction queues it once, with the decline.
+ */
+import type { OutgoingMail } from "@/lib/platform/mail";
+import { escapeHtml } from "@/lib/platform/text";
+import { formatUsd } from "@/lib/shop/quotes/money";
+import type { ReceiptFacts } from "./receiptMail";
+
+export interface ClosedOnRefundFacts extends Pick<ReceiptFacts, "customer" | "shop" | "quoteNumber" | "vehicle"> {
+  /** The whole deposit given back (Σ refunds the provider confirmed). */
+  refundedCents: number;
+}
+
+/**
+ * @example
+ * closedOnRefundMail({ ...facts, quoteNumber: 1003, refundedCents: 107696 }).subject;
+ * // "Closed: quote Q-1003 at Shop A, your deposit of $1,076.96 refunded"
+ */
+export function closedOnRefundMail(f: ClosedOnRefundFacts): OutgoingMail {
+  const amount = formatUsd(f.refundedCents);
+  const ask = f.shop.phone ? `call ${f.shop.name} on ${f.shop.phone}` : `ask ${f.shop.name}`;
+  const lines = [
+    `Your deposit of ${amount} for quote Q-${f.quoteNumber} (${f.vehicle}) has been refunded in full, so the quote is now closed.`,
+    "The refund goes back to the card you paid with. Nothing is booked or held for this quote any more.",
+    `To have the work done after all, ${ask} for a new quote.`,
+  ];
+  const contact = [f.shop.name, f.shop.address, f.shop.phone].filter(Boolean).join(" · ");
+  return {
+    to: f.customer.email,
+    subject: `Closed: quote Q-${f.quoteNumber} at ${f.shop.name}, your deposit of ${amount} refunded`,
+    text: `Hello ${f.customer.name},\n\n${lines.join("\n")}\n\n${contact}\n`,
+    html: `<p>Hello ${escapeHtml(f.customer.name)},</p>${lines.map((l) => `<p>${escapeHtml(l)}</p>`).join("")}<p>${escapeHtml(contact)}</p>`,
+  };
+}
