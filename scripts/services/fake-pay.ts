@@ -305,10 +305,11 @@ export function startFakePay(
       if (parts[0] === "pay" && parts[1]) {
         const s = sessions.get(parts[1]);
         if (!s) return html(404, "<!doctype html><html lang=en><title>Not found</title><p>No such checkout session.</p></html>");
+        // No "start again" here: it may have been closed because the balance was paid another way. The shop's page says.
         if (s.status === "expired")
           return html(
             410,
-            "<!doctype html><html lang=en><title>Expired</title><p>This checkout has expired. Go back and start again.</p></html>",
+            `<!doctype html><html lang=en><title>Closed</title><p>This checkout is closed and takes no payment.</p><p><a href="${esc(s.cancel_url)}">Back to the shop's page</a> to see what is still owed.</p></html>`,
           );
         if (req.method === "GET") {
           if (s.status === "complete") {

@@ -276,6 +276,25 @@ describe("the balance at the counter", () => {
     expect((await counterPay(q.id, { amount: "0.01", method: "cash" })).status).toBe(409);
   });
 
+  it("an online balance page left open while the balance is taken at the counter is closed and leads back to a page that reads Paid", async () => {
+    const other = await depositPaidQuote();
+    await completed(other.id);
+    const link = linkIn((await mailsTo(other.email)).filter((m) => m.subject.startsWith("Done:")).at(-1)!.text);
+    as(null);
+    const checkout = await (await balance.POST(req("POST", `/api/q/${link}/balance`, {}), ctx({ token: link }))).json();
+    as(U.staffA);
+    expect((await counterPay(other.id, { amount: "3230.86", method: "cash" })).status).toBe(201);
+    const page = await fetch(checkout.url);
+    expect(page.status).toBe(410);
+    const text = await page.text();
+    expect(text).not.toMatch(/start again/i);
+    expect(text).toContain(`href="http://127.0.0.1:3000/q/${link}?checkout=balance"`);
+    // Where that link lands: the invoice paid, so the page says so (BalancePanel.test.tsx shows the words).
+    as(null);
+    const view = await (await balance.GET(req("GET", `/api/q/${link}/balance`), ctx({ token: link }))).json();
+    expect(view.payments.invoice).toMatchObject({ outstandingCents: 0, paid: true });
+  });
+
   it("another shop's staff cannot see or record payments on the quote (404, nothing written)", async () => {
     as(U.staffB);
     expect((await counter.GET(req("GET", `/api/shop/quotes/${q.id}/payments`), ctx({ id: q.id }))).status).toBe(404);

@@ -14,6 +14,10 @@ export const REFUND_STATUS_LABEL: Record<PaymentRefundRow["status"], string> = {
 /** Under the owner's refund form when the latest refund failed: the money is still with the shop. */
 export const REFUND_FAILED_NOTE = "The last refund failed, so nothing was given back. You can try again.";
 
+/** On the customer's page when they come back from a balance payment page and nothing is owed (paid there, or already at the counter). */
+export const BALANCE_ALREADY_PAID =
+  "Your invoice is paid in full, so there is nothing more to pay. Any payment page opened for it has been closed.";
+
 /** What staff may record at the counter. */
 export const COUNTER_METHODS = ["cash", "card"] as const;
 export type CounterMethod = (typeof COUNTER_METHODS)[number];

@@ -149,7 +149,8 @@ export async function openBalanceCheckout(db: Knex, token: string): Promise<{ ur
       amountCents: figures.outstandingCents,
       customerEmail: customer?.email ?? "",
       successUrl: `${link}?paid=balance`,
-      cancelUrl: link,
+      // Marked, so a customer who comes back from this page (left, or closed because the balance was taken at the counter) is told where the invoice stands.
+      cancelUrl: `${link}?checkout=balance`,
     });
     await trx("payments").insert({
       shop_id: quote.shop_id,

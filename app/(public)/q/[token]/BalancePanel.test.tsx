@@ -4,6 +4,7 @@ import userEvent from "@testing-library/user-event";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { invoiceFigures } from "@/lib/shop/payments/invoice";
 import { PAID_DEPOSIT } from "@/components/payments/paymentsTestUtil";
+import { BALANCE_ALREADY_PAID } from "@/lib/shop/payments/labels";
 import { BalancePanel } from "./BalancePanel";
 
 afterEach(() => {
@@ -33,6 +34,36 @@ describe("BalancePanel", () => {
     await userEvent.click(screen.getByRole("button", { name: "Pay the $3,230.86 balance" }));
     await waitFor(() => expect(assign).toHaveBeenCalledWith("http://127.0.0.1:2527/pay/cs_test_x"));
     expect((fetch.mock.calls[0] as unknown as [string])[0]).toBe(`/api/q/${TOKEN}/balance`);
+  });
+
+  it("back from a balance page closed because the balance was taken at the counter: says it is paid, never 'expired'", () => {
+    // 1,076.96 + 3,230.86 = 4,307.82: nothing owed (by hand).
+    const invoice = invoiceFigures(430782, [deposit, { kind: "balance", status: "paid", amountCents: 323086 }], []);
+    render(
+      <BalancePanel
+        token={TOKEN}
+        payments={{ invoice, invoiceOpen: true, refundBlocked: null, payments: [entry], refunds: [], timeZone: "America/Denver" }}
+        justPaid={false}
+        returned
+      />,
+    );
+    expect(screen.getByText(BALANCE_ALREADY_PAID)).toBeTruthy();
+    expect(screen.queryByText(/expired/i)).toBeNull();
+    expect(screen.queryByRole("button")).toBeNull();
+  });
+
+  it("back from a balance page without paying while something is owed: no paid message, the payment is offered again", () => {
+    const invoice = invoiceFigures(430782, [deposit], []);
+    render(
+      <BalancePanel
+        token={TOKEN}
+        payments={{ invoice, invoiceOpen: true, refundBlocked: null, payments: [entry], refunds: [], timeZone: "America/Denver" }}
+        justPaid={false}
+        returned
+      />,
+    );
+    expect(screen.queryByText(BALANCE_ALREADY_PAID)).toBeNull();
+    expect(screen.getByRole("button", { name: "Pay the $3,230.86 balance" })).toBeTruthy();
   });
 
   it("a paid invoice says Paid and offers no payment", () => {

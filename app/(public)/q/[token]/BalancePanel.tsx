@@ -6,10 +6,25 @@ import { Button } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { api } from "@/lib/platform/client/api";
 import type { QuotePayments } from "@/lib/shop/payments/api";
+import { BALANCE_ALREADY_PAID } from "@/lib/shop/payments/labels";
 import { formatUsd } from "@/lib/shop/quotes/money";
 
-/** The customer's invoice once the work is done, their payments, and the way to pay the balance on the provider's page. */
-export function BalancePanel({ token, payments, justPaid }: { token: string; payments: QuotePayments; justPaid: boolean }) {
+/**
+ * The customer's invoice once the work is done, their payments, and the way to pay the balance on the provider's page.
+ * `justPaid`: back from that page paid; `returned`: back from it without paying (left it, or it was closed because the
+ * balance was taken at the counter meanwhile).
+ */
+export function BalancePanel({
+  token,
+  payments,
+  justPaid,
+  returned = false,
+}: {
+  token: string;
+  payments: QuotePayments;
+  justPaid: boolean;
+  returned?: boolean;
+}) {
   const [busy, setBusy] = useState(false);
   const [failure, setFailure] = useState<string | null>(null);
   const { invoice } = payments;
@@ -31,6 +46,7 @@ export function BalancePanel({ token, payments, justPaid }: { token: string; pay
       {justPaid && !invoice.paid && (
         <Alert tone="info">Payment received by the provider; waiting for its confirmation. Refresh in a moment.</Alert>
       )}
+      {(justPaid || returned) && invoice.paid && <Alert tone="success">{BALANCE_ALREADY_PAID}</Alert>}
       <PaymentHistory payments={payments} />
       {payments.invoiceOpen && !invoice.paid && (
         <Button className="self-start" pending={busy} onClick={() => void pay()}>

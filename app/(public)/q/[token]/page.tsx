@@ -25,10 +25,10 @@ export default async function PublicQuotePage({
   searchParams,
 }: {
   params: Promise<{ token: string }>;
-  searchParams: Promise<{ paid?: string }>;
+  searchParams: Promise<{ paid?: string; checkout?: string }>;
 }) {
   const { token } = await params;
-  const { paid } = await searchParams;
+  const { paid, checkout } = await searchParams;
   const view = await quoteSendQueries.findPublicQuoteView(token);
   if (!view) {
     return (
@@ -80,7 +80,7 @@ export default async function PublicQuotePage({
         {d.notes && <p className="mt-3 text-sm text-basalt-700">{d.notes}</p>}
       </Card>
       {(payments.invoiceOpen || payments.payments.length > 0) && (
-        <BalancePanel token={token} payments={payments} justPaid={paid === "balance"} />
+        <BalancePanel token={token} payments={payments} justPaid={paid === "balance"} returned={checkout === "balance"} />
       )}
       {bookable && <InstallBooking token={token} booking={booking} shopName={d.shop.name} />}
       <PublicQuoteActions token={token} status={quote.status} deposit={formatUsd(t.depositCents)} balance={formatUsd(t.balanceCents)} />
