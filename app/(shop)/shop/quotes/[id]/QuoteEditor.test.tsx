@@ -1,15 +1,20 @@
 // @vitest-environment jsdom
-import { cleanup, screen, waitFor, within } from "@testing-library/react";
+import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
+import { cleanup, render, screen, waitFor, within } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { summarize } from "@/lib/shop/quotes/fitment";
 import { renderWithQuery } from "@/app/(shop)/shop/shopTestUtil";
+import { router } from "@/tests/support/navigation";
+import { queryKeys } from "@/lib/platform/query/keys";
 import { QuoteEditor } from "./QuoteEditor";
 import type { QuoteDetail as Detail } from "@/lib/shop/quotes/api";
 
 vi.mock("next/link", () => import("@/tests/support/nextLink"));
+vi.mock("next/navigation", () => import("@/tests/support/navigation"));
 afterEach(() => {
   cleanup();
+  vi.clearAllMocks();
   vi.unstubAllGlobals();
   vi.restoreAllMocks();
 });
@@ -289,5 +294,30 @@ describe("the quote editor's Mark installed", () => {
     await user.click(screen.getByRole("button", { name: "Mark installed" }));
     await waitFor(() => expect(screen.getByTestId("quote-status").textContent).toBe("Installed"));
     expect(calls.map((c) => [c.url, c.body])).toEqual([[`/api/shop/quotes/${ID}/status`, { to: "installed" }]]);
+  });
+
+  it("re-renders the page's server panels at once (the released booking goes) and drops the cached bay time", async () => {
+    server(() => ({ status: 200, body: detail({ status: "installed" }) }));
+    const user = userEvent.setup();
+    const client = new QueryClient();
+    const invalidate = vi.spyOn(client, "invalidateQueries");
+    render(
+      <QueryClientProvider client={client}>
+        <QuoteEditor initial={detail({ status: "deposit_paid" })} labourRateCents={12500} />
+      </QueryClientProvider>,
+    );
+    expect(router.refresh).not.toHaveBeenCalled();
+    await user.click(screen.getByRole("button", { name: "Mark installed" }));
+    await waitFor(() => expect(router.refresh).toHaveBeenCalledTimes(1));
+    expect(invalidate.mock.calls.map(([f]) => f?.queryKey)).toEqual([queryKeys.shop.calendar.all, queryKeys.shop.slots.all]);
+  });
+
+  it("a refused move changes nothing on the page", async () => {
+    server(() => ({ status: 409, body: { error: "A quote that is declined cannot become installed." } }));
+    const user = userEvent.setup();
+    renderEditor(detail({ status: "deposit_paid" }));
+    await user.click(screen.getByRole("button", { name: "Mark installed" }));
+    await waitFor(() => expect(screen.getByText("A quote that is declined cannot become installed.")).toBeTruthy());
+    expect(router.refresh).not.toHaveBeenCalled();
   });
 });

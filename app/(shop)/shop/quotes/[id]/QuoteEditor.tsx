@@ -1,6 +1,7 @@
 "use client";
-import { useMutation } from "@tanstack/react-query";
+import { useMutation, useQueryClient } from "@tanstack/react-query";
 import Link from "next/link";
+import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { FitmentSummaryCard } from "@/components/quotes/FitmentSummaryCard";
 import { useLeaveGuard } from "@/components/feedback/useLeaveGuard";
@@ -10,6 +11,7 @@ import { Button, buttonClass } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { ApiError, api } from "@/lib/platform/client/api";
+import { queryKeys } from "@/lib/platform/query/keys";
 import { formatDayOf, formatInstant } from "@/lib/shop/bookings/zoned";
 import { type EditForm, type EditLine, bodyOf, formOf, isDirty, labourLine, lineFromCatalog, partsLine } from "@/lib/shop/quotes/editLines";
 import { describeFieldErrors } from "@/lib/shop/quotes/fieldLabels";
@@ -50,6 +52,8 @@ export function QuoteEditor({
   /** The deposit was asked back in full (the quote is declined once the provider confirms): nothing to install. */
   depositGivenBack?: boolean;
 }) {
+  const router = useRouter();
+  const queryClient = useQueryClient();
   const [detail, setDetail] = useState(initial);
   const q = detail.quote;
   const draft = q.status === "draft";
@@ -113,9 +117,17 @@ export function QuoteEditor({
   const move = useMutation({
     mutationFn: (to: "draft" | "declined" | "installed") => api<Detail>(`/api/shop/quotes/${q.id}/status`, { body: { to } }),
     onMutate: () => setProblems(null),
-    onSuccess: (d) => {
+    onSuccess: async (d) => {
       accept(d);
       setNotice(`Quote is now ${STATUS_LABEL[d.quote.status].toLowerCase()}.`);
+      // The booking, work-order and payments panels below are rendered on the server from the status (an installed
+      // quote's booking is released, its invoice opens): re-render them now, and drop the bay time cached for the
+      // calendar and the slot pickers.
+      router.refresh();
+      await Promise.all([
+        queryClient.invalidateQueries({ queryKey: queryKeys.shop.calendar.all }),
+        queryClient.invalidateQueries({ queryKey: queryKeys.shop.slots.all }),
+      ]);
     },
     onError: (e) => setProblems({ title: "Not changed", list: problemsOf(e) }),
   });
