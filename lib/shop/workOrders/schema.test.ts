@@ -24,6 +24,18 @@ const ring = (torque: string, unit: "ftlb" | "nm") => ({
   passesDone: true,
 });
 
+describe("a comma in a figure is refused and named as the reason (decimals or thousands? common practice, no source)", () => {
+  it("in the cold pressure, with an example in the field's unit", () => {
+    const why = "is ambiguous — a comma can mark decimals or thousands; write decimals with a point and no thousands separator";
+    const pressure = (p: string, pressureUnit: "psi" | "kPa") => ({ step: "pressure", position: "LF", pressure: p, pressureUnit });
+    expect(sign(pressure("32,5", "psi")).issues?.pressure).toBe(`Cold pressure set (psi): "32,5" ${why} (e.g. 35 psi).`);
+    expect(sign(pressure("2,2", "kPa")).issues?.pressure).toBe(`Cold pressure set (kPa): "2,2" ${why} (e.g. 240 kPa).`);
+    expect(sign({ step: "balance", position: "LF", innerGrams: "12,5", outerGrams: "0" }).issues?.innerGrams).toBe(
+      `Inner plane weight (g): "12,5" ${why} (e.g. 12.5).`,
+    );
+  });
+});
+
 describe("torque bands (common practice, no source): typos and unit mix-ups are refused", () => {
   it("refuses lug nuts at 1400 ft·lb = 1898.1 N·m (1400 × 1.355818 = 1898.145), suggesting the slipped digit", () => {
     expect(1400 * FT_LB).toBeCloseTo(1898.145, 3);

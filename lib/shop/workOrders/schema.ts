@@ -7,6 +7,8 @@ import { z } from "zod";
 import {
   FitmentInputError,
   TORQUE_UNIT_SYMBOL,
+  commaRefusal,
+  hasNumberComma,
   parseTorqueEntry,
   psiToKpa,
   requireTorqueNm,
@@ -81,30 +83,33 @@ export function torqueBandRefusal(typed: number, unit: TorqueUnit, step: TorqueS
 
 /** Accepted cold pressures: from a spare's low figure to a load range E tire's maximum, with room (kPa). */
 export const PRESSURE_LIMITS_KPA = { min: psiToKpa(10), max: psiToKpa(120) } as const;
+/** A cold pressure the field accepts in each unit, shown in its refusals. */
+export const PRESSURE_EXAMPLE: Record<PressureEntryUnit, string> = { psi: "35 psi", kPa: "240 kPa" };
 
 /**
  * One plain decimal number typed in a field: no comma (decimal mark or thousands?), no range, in
- * [min, max]. Returns the number, or a message that starts with the label.
+ * [min, max]. Returns the number, or a message that starts with the label; `example` is a figure
+ * the field accepts, in its unit, shown when a comma is refused.
  *
  * @example
- * readDecimal("-0.25", "Camber left (°)", -10, 10); // -0.25
- * readDecimal("1,5", "Camber left (°)", -10, 10); // "Camber left (°): "1,5" is ambiguous …"
+ * readDecimal("-0.25", "Camber left (°)", -10, 10, "-0.25"); // -0.25
+ * readDecimal("1,5", "Camber left (°)", -10, 10, "-0.25"); // "Camber left (°): "1,5" is ambiguous — a comma can mark decimals or thousands; …"
  */
-export function readDecimal(text: string, label: string, min: number, max: number): number | string {
+export function readDecimal(text: string, label: string, min: number, max: number, example: string): number | string {
   const t = String(text ?? "")
     .trim()
     .replace(/\u2212/g, "-");
   if (t === "") return `${label}: enter a number.`;
-  if (t.includes(",")) return `${label}: "${t}" is ambiguous — write decimals with a point and no thousands separator.`;
+  if (hasNumberComma(t)) return `${label}: ${commaRefusal(JSON.stringify(t), example)}.`;
   if (!/^[+-]?(\d+(\.\d*)?|\.\d+)$/.test(t)) return `${label}: "${t}" is not one number.`;
   const n = Number(t);
   if (n < min || n > max) return `${label}: use ${min} to ${max}, got ${t}.`;
   return n;
 }
 
-const decimal = (label: string, min: number, max: number) =>
+const decimal = (label: string, min: number, max: number, example: string) =>
   z.string({ error: `${label}: enter a number.` }).transform((s, ctx) => {
-    const r = readDecimal(s, label, min, max);
+    const r = readDecimal(s, label, min, max, example);
     if (typeof r === "string") {
       ctx.addIssue({ code: "custom", message: r });
       return z.NEVER;
@@ -212,7 +217,13 @@ const pressureStep = (limits: TirePressureLimits | null) =>
     .transform((v, ctx) => {
       const label = pressureFieldLabel(v.pressureUnit);
       const toUnit = (kpa: number) => (v.pressureUnit === "kPa" ? Math.round(kpa) : Math.round(kpa / psiToKpa(1)));
-      const r = readDecimal(v.pressure, label, toUnit(PRESSURE_LIMITS_KPA.min), toUnit(PRESSURE_LIMITS_KPA.max));
+      const r = readDecimal(
+        v.pressure,
+        label,
+        toUnit(PRESSURE_LIMITS_KPA.min),
+        toUnit(PRESSURE_LIMITS_KPA.max),
+        PRESSURE_EXAMPLE[v.pressureUnit],
+      );
       const kpa = typeof r === "number" ? (v.pressureUnit === "kPa" ? r : psiToKpa(r)) : 0;
       const refused = typeof r === "string" ? r : pressureRefusal(kpa, v.pressureUnit, limits, label, v.makerTable);
       if (refused) {
@@ -226,8 +237,8 @@ const balance = z
   .object({
     step: z.literal("balance"),
     position,
-    innerGrams: decimal(FIELD_LABEL.innerGrams, 0, 500),
-    outerGrams: decimal(FIELD_LABEL.outerGrams, 0, 500),
+    innerGrams: decimal(FIELD_LABEL.innerGrams, 0, 500, "12.5"),
+    outerGrams: decimal(FIELD_LABEL.outerGrams, 0, 500, "12.5"),
   })
   .transform((v) => ({ step: v.step, position: v.position, data: { innerGrams: v.innerGrams, outerGrams: v.outerGrams } }));
 
@@ -246,11 +257,11 @@ const lugTorque = z
 
 /** Readings in degrees; the ranges hold any truck's readings with room, and refuse a slipped decimal point. */
 const readings = z.object({
-  camberLeft: decimal(FIELD_LABEL.camberLeft, -10, 10),
-  camberRight: decimal(FIELD_LABEL.camberRight, -10, 10),
-  casterLeft: decimal(FIELD_LABEL.casterLeft, -5, 15),
-  casterRight: decimal(FIELD_LABEL.casterRight, -5, 15),
-  toeTotal: decimal(FIELD_LABEL.toeTotal, -5, 5),
+  camberLeft: decimal(FIELD_LABEL.camberLeft, -10, 10, "-0.25"),
+  camberRight: decimal(FIELD_LABEL.camberRight, -10, 10, "-0.25"),
+  casterLeft: decimal(FIELD_LABEL.casterLeft, -5, 15, "3.5"),
+  casterRight: decimal(FIELD_LABEL.casterRight, -5, 15, "3.5"),
+  toeTotal: decimal(FIELD_LABEL.toeTotal, -5, 5, "0.1"),
 });
 
 const alignment = z
