@@ -47,6 +47,20 @@ describe("torque bands (common practice, no source): typos and unit mix-ups are 
     );
   });
 
+  it("the band's message wins beyond the engine's 2000 N·m too: 3000 ft·lb on lug nuts = 4067.5 N·m (3000 × 1.355818 = 4067.454)", () => {
+    expect(3000 * FT_LB).toBeCloseTo(4067.454, 3);
+    // 300 ft·lb = 406.7 N·m lies in the band (40–700 N·m); 3000 N·m and 30000 ft·lb do not.
+    expect(sign(lug("3000", "ftlb")).issues?.torque).toBe(
+      "Maker's torque (ft·lb): 3000 ft·lb (4067.5 N·m) is outside what lug nuts are torqued to, 29.6 to 516.2 ft·lb (40 to 700 N·m) " +
+        "(common practice, no source): a typo or a figure in the other unit? Did you mean 300 ft·lb? " +
+        "Type the maker's figure in the unit it is given in, e.g. 140 ft·lb.",
+    );
+    // 2500 N·m on ring bolts (5–70 N·m): no tenfold slip lands in the band, so no guess.
+    expect(sign(ring("2500", "nm")).issues?.torque).toMatch(
+      /^Maker's torque \(N·m\): 2500 N·m \(1843\.9 ft·lb\) is outside what beadlock ring bolts/,
+    );
+  });
+
   it("refuses beadlock ring bolts at 150 ft·lb = 203.4 N·m (150 × 1.355818 = 203.37)", () => {
     // 5 / 1.355818 = 3.688 → 3.7; 70 / 1.355818 = 51.629 → 51.6; 15 ft·lb = 20.3 N·m is inside.
     expect(sign(ring("150", "ftlb")).issues?.torque).toBe(

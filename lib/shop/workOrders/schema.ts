@@ -122,8 +122,10 @@ const torqueUnit = z.enum(["ftlb", "nm"], { error: `${FIELD_LABEL.unit}: pick ft
 const confirmed = (label: string) => z.literal(true, { error: `${label}: tick it once it is done.` });
 
 /**
- * The maker's torque, read in its unit, range-checked in N·m and held to the fastener's band
- * (TORQUE_BANDS_NM); the issue sits on `torque`.
+ * The maker's torque, read in its unit, held to the fastener's band (TORQUE_BANDS_NM) and then
+ * range-checked in N·m; the issue sits on `torque`. The band comes first because it lies inside
+ * the engine's range and its message says what the figure may have been meant as (3000 ft·lb on a
+ * lug nut: "Did you mean 300 ft·lb?"), which the engine's generic range message cannot.
  */
 function torqueNmOf(v: { torque: string; unit: TorqueUnit }, step: TorqueStep, ctx: z.RefinementCtx): number {
   const label = torqueFieldLabel(v.unit);
@@ -131,16 +133,13 @@ function torqueNmOf(v: { torque: string; unit: TorqueUnit }, step: TorqueStep, c
     ctx.addIssue({ code: "custom", path: ["torque"], message });
     return z.NEVER;
   };
-  let typed: number;
-  let nm: number;
   try {
-    typed = parseTorqueEntry(v.torque, v.unit, label);
-    nm = requireTorqueNm(torqueToNm(typed, v.unit), v.unit, label);
+    const typed = parseTorqueEntry(v.torque, v.unit, label);
+    const outside = Number.isFinite(typed) ? torqueBandRefusal(typed, v.unit, step, label) : null;
+    return outside ? refuse(outside) : requireTorqueNm(torqueToNm(typed, v.unit), v.unit, label);
   } catch (e) {
     return refuse(e instanceof FitmentInputError ? e.message : `${label}: enter one figure.`);
   }
-  const outside = torqueBandRefusal(typed, v.unit, step, label);
-  return outside ? refuse(outside) : nm;
 }
 
 const fitted = z
