@@ -23,7 +23,7 @@ describe("round chart axes", () => {
   });
 
   it("gives the load chart's pressure axis round psi and kPa ticks (P265/70R17 113S placard → 37x12.50R17LT LRD)", () => {
-    const { plan } = planLoad(LOAD_BASE, LOAD_LABELS);
+    const { plan } = planLoad(LOAD_BASE, LOAD_LABELS, { units: "imperial", lengths: "decimal" });
     // The curve runs from half the lower road minimum to the higher maximum pressure: 50 psi (flotation load range D,
     // from memory) = 344.7 kPa; the P-metric road minimum 140 kPa (FMVSS 138 Table 1, from memory) halved = 70 kPa = 10.15 psi
     // (1 psi = 6.894757 kPa, NIST SP 811), which the chart used to show as 10.2, 20.2, 30.2 …

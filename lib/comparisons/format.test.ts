@@ -31,10 +31,29 @@ describe("display helpers", () => {
     expect(formatLenOther(120.65, inch)).toBe("121 mm");
   });
 
+  it("never writes a length that is not zero as 0 (1 in = 25.4 mm exactly, NIST SP 811)", () => {
+    // 0.7 mm = 0.7 / 25.4 = 0.02756 in: under half a sixteenth (0.03125 in), so thousandths, as the garage shows it.
+    expect(formatLen(0.7, frac)).toBe("0.028 in");
+    expect(formatLen(-0.7, frac)).toBe(`${MINUS}0.028 in`);
+    // 0.1 mm = 0.0039 in: two decimals would read 0.
+    expect(formatLen(0.1, inch)).toBe("0.004 in");
+    expect(formatLen(-0.1, inch)).toBe(`${MINUS}0.004 in`);
+    expect(formatLen(-0.3, inch)).toBe(`${MINUS}0.01 in`); // 0.3 / 25.4 = 0.0118 in: two decimals show it
+    expect(formatLen(0.4, metric)).toBe("0.4 mm");
+    expect(formatLen(-0.4, metric)).toBe(`${MINUS}0.4 mm`);
+    // Figures a step shows are unchanged: 0.8 mm = 0.504 sixteenth → 1/16 in; 0.7 mm = 0.03 in to two decimals.
+    expect(formatLen(0.8, frac)).toBe("1/16 in");
+    expect(formatLen(0.7, inch)).toBe("0.03 in");
+    expect(formatLen(0, frac)).toBe("0 in");
+  });
+
   it("signs: typographic minus, plus for gains, none for zero", () => {
     expect(formatLen(-12, metric, { signed: true })).toBe(`${MINUS}12 mm`);
     expect(formatLen(37, metric, { signed: true })).toBe("+37 mm");
-    expect(formatLen(0.2, metric, { signed: true })).toBe("0 mm");
+    // 0.2 mm is a real figure: it shows, signed (it read "0 mm" before); under 0.05 mm it is zero, unsigned.
+    expect(formatLen(0.2, metric, { signed: true })).toBe("+0.2 mm");
+    expect(formatLen(0.03, metric, { signed: true })).toBe("0 mm");
+    expect(formatLen(-0.03, frac, { signed: true })).toBe("0 in");
     // −12 mm = −0.472 in → nearest sixteenth −8/16 = −1/2 in.
     expect(formatLen(-12, frac, { signed: true })).toBe(`${MINUS}1/2 in`);
     expect(formatNumber(-0.001, 1)).toBe("0.0");

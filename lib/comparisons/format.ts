@@ -48,20 +48,44 @@ function signed(s: string, value: number): string {
   return value > 0 && !/^0( |$)/.test(s) ? `+${s}` : s;
 }
 
+const readsZero = (s: string) => /^-?0(\.0*)? (in|mm)$/.test(s);
+
+/**
+ * A length in one unit, the one writing of lengths for every screen (the workspace's formatLen,
+ * the garage's bothUnits): the engine's `formatLength`, negatives with the true minus sign, and a
+ * figure that is not zero to a tenth of a millimetre never written "0": where the sixteenth or
+ * the decimals asked for round it away, it gets decimals until it shows (0.7 mm → "0.028 in",
+ * 0.4 mm → "0.4 mm"; 1 in = 25.4 mm exactly, NIST SP 811). Below 0.05 mm it is 0, unsigned.
+ *
+ * @example
+ * lengthText(0.7, { unit: "in", fraction: 16 }); // "0.028 in"
+ * lengthText(-4.3, { unit: "in", fraction: 16 }); // "−3/16 in"
+ * lengthText(0.4, { unit: "mm", decimals: 0 });   // "0.4 mm"
+ */
+export function lengthText(mm: number, opts: { unit: "in" | "mm"; fraction?: 16; decimals?: number }): string {
+  let s = formatLength(mm, opts);
+  if (readsZero(s) && !readsZero(formatLength(mm, { unit: "mm", decimals: 1 }))) {
+    const from = Math.max(opts.decimals ?? 0, opts.unit === "in" ? 3 : 1);
+    for (let d = from; d <= 6 && (d === from || readsZero(s)); d++) s = formatLength(mm, { unit: opts.unit, decimals: d });
+  }
+  return typographic(s);
+}
+
 /**
  * A length in the chosen units: inches as decimals (2 places) or sixteenths, or millimetres
- * (whole mm unless `decimals` is given).
+ * (whole mm unless `decimals` is given); a figure that is not zero never reads "0" (lengthText).
  *
  * @example
  * formatLen(120.65, { units: "imperial", lengths: "fraction" }); // "4-3/4 in"
  * formatLen(-12, { units: "metric", lengths: "decimal" }, { signed: true }); // "−12 mm"
+ * formatLen(0.7, { units: "imperial", lengths: "fraction" }); // "0.028 in"
  */
 export function formatLen(mm: number, prefs: DisplayPrefs, opts: { signed?: boolean; decimals?: number } = {}): string {
   const s =
     prefs.units === "metric"
-      ? formatLength(mm, { unit: "mm", decimals: opts.decimals ?? 0 })
-      : formatLength(mm, { unit: "in", fraction: prefs.lengths === "fraction" ? 16 : undefined, decimals: opts.decimals ?? 2 });
-  return opts.signed ? signed(s, mm) : typographic(s);
+      ? lengthText(mm, { unit: "mm", decimals: opts.decimals ?? 0 })
+      : lengthText(mm, { unit: "in", fraction: prefs.lengths === "fraction" ? 16 : undefined, decimals: opts.decimals ?? 2 });
+  return opts.signed ? signed(s, mm) : s;
 }
 
 /** A length in the other units, for a secondary line ("802.8 mm" under "31.61 in"). */

@@ -24,6 +24,8 @@ import {
   pressureForLoad,
 } from "@/lib/fitment";
 import type { MeasureSpec } from "./measureEntry";
+import type { DisplayPrefs } from "./format";
+import { messageInUnits } from "./pressureText";
 
 export type LoadField =
   "placardTire" | "placardFront" | "placardRear" | "frontAxle" | "rearAxle" | "plannedTire" | "plannedMaxLoad" | "plannedMaxPressure";
@@ -126,14 +128,22 @@ function curveOf(placard: LoadPressureBasis, planned: LoadPressureBasis, vehicle
 /**
  * The figures of the load and pressure panel, or the fields' messages and no figures at all: an
  * axle whose load the planned tire cannot carry gets the engine's message beside its field, and
- * nothing is computed from a figure that is refused.
+ * nothing is computed from a figure that is refused. Messages give loads and pressures in the
+ * units of `prefs`, the units the fields are labelled in (the engine's are kg and kPa first).
  *
  * @example
  * planLoad({ placardTire: "265/70R17 113T", plannedTire: "37x12.50R17LT 124Q LRD", vehicle: "light-truck",
- *   placardFrontKpa: psiToKpa(35), placardRearKpa: psiToKpa(35), frontAxleKg: 1300, rearAxleKg: 1100 }, labels);
+ *   placardFrontKpa: psiToKpa(35), placardRearKpa: psiToKpa(35), frontAxleKg: 1300, rearAxleKg: 1100 }, labels, prefs);
  * // plan.axles[0].pressureToSetKpa ≈ 201 (29.2 psi: the flotation road minimum, 0.5833 × 50 psi)
  */
-export function planLoad(input: LoadPlanInput, labels: LoadLabels): { plan: LoadPlan | null; errors: LoadErrors } {
+export function planLoad(input: LoadPlanInput, labels: LoadLabels, prefs: DisplayPrefs): { plan: LoadPlan | null; errors: LoadErrors } {
+  const { plan, errors } = planLoadSI(input, labels);
+  const shown = Object.fromEntries(Object.entries(errors).map(([k, m]) => [k, messageInUnits(m, prefs)])) as LoadErrors;
+  return { plan, errors: shown };
+}
+
+/** {@link planLoad} with the engine's messages as they come (kg, kPa first). */
+function planLoadSI(input: LoadPlanInput, labels: LoadLabels): { plan: LoadPlan | null; errors: LoadErrors } {
   const errors: LoadErrors = {};
   const { vehicle } = input;
   const plannedOpts = { maxLoadKg: input.plannedMaxLoadKg, maxPressureKpa: input.plannedMaxPressureKpa };

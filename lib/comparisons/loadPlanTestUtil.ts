@@ -2,7 +2,7 @@
  * Test helper (the load plan's, the load chart's and its axis's tests): the load panel's labels in
  * inch units and the invented truck the tests load, on a P-metric placard size at 35 psi with a
  * 37 in flotation tire planned.
- * @example planLoad({ ...LOAD_BASE, rearAxleKg: 2800 }, LOAD_LABELS);
+ * @example planLoad({ ...LOAD_BASE, rearAxleKg: 2800 }, LOAD_LABELS, { units: "imperial", lengths: "decimal" });
  */
 import { psiToKpa } from "@/lib/fitment";
 import type { LoadLabels, LoadPlanInput } from "./loadPlan";

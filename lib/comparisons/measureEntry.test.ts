@@ -35,6 +35,23 @@ describe("readMeasure", () => {
   });
 });
 
+describe("readMeasure: a comma is refused and named as the reason", () => {
+  // Decimal comma or thousands separator? Never guessed (common practice, no source).
+  const why = "is ambiguous — a comma can mark decimals or thousands; write decimals with a point and no thousands separator";
+  it("in a pressure, a load and a length field, with an example in the field's unit", () => {
+    expect(readMeasure(typed("32,5 psi"), PRESSURE, IMPERIAL, "Placard pressure, front (psi)")).toEqual({
+      error: `Placard pressure, front (psi): “32,5 psi” ${why} (e.g. 35 psi).`,
+    });
+    expect(readMeasure(typed("2,2 bar"), PRESSURE, METRIC, "Placard pressure, front (kPa)")).toEqual({
+      error: `Placard pressure, front (kPa): “2,2 bar” ${why} (e.g. 240 kPa).`,
+    });
+    expect(readMeasure(typed("3,900 lb"), LOAD, IMPERIAL, "Front axle load (lb)")).toEqual({
+      error: `Front axle load (lb): “3,900 lb” ${why} (e.g. 3100 lb).`,
+    });
+    expect(readMeasure(typed("1,5"), LENGTH, IMPERIAL, "H (in)")).toEqual({ error: `H (in): “1,5” ${why} (e.g. 24).` });
+  });
+});
+
 describe("convertEntry", () => {
   it("converts a typed figure and gives it back exactly when switched back", () => {
     const kpa = convertEntry(typed("35"), "pressure", IMPERIAL, METRIC);

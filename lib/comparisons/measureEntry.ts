@@ -3,7 +3,8 @@
  * and lengths (in or mm). A bare number is read in the unit the field's label states; the same
  * unit written after it is accepted; another unit (bar in a kPa field, kg in an lb field, psi in
  * a kPa field) is refused with the conversion spelled out, so nobody inflates by a figure read in
- * the wrong unit. Lengths go through lib/setup's reader (fractions only as inches).
+ * the wrong unit. A comma in a figure is refused the same way everywhere (lib/fitment/commaEntry:
+ * decimals or thousands is never guessed). Lengths go through lib/setup's reader (fractions only as inches).
  *
  * A unit switch converts each figure that reads and keeps its exact value behind the rounded
  * text (`exact`), so switching back gives the typed figure again; a figure that does not read
@@ -12,7 +13,7 @@
  * Inside, SI-ish units as the engine uses them: kPa, kg, mm. Conversions: NIST SP 811
  * (1 psi = 6.894757 kPa, 1 lb = 0.45359237 kg, 1 in = 25.4 mm) through lib/fitment.
  */
-import { kgToLb, kpaToPsi, lbToKg, mmToIn, psiToKpa } from "@/lib/fitment";
+import { commaRefusal, hasNumberComma, kgToLb, kpaToPsi, lbToKg, mmToIn, psiToKpa } from "@/lib/fitment";
 import { inchText } from "./draft";
 import type { DisplayPrefs } from "./format";
 import { lengthMessages } from "@/lib/setup/messages";
@@ -86,6 +87,7 @@ function splitUnit(text: string): [number, string] | null {
 }
 
 function readPressureOrLoad(text: string, unit: MeasureUnit, label: string, example: string): MeasureRead {
+  if (hasNumberComma(text)) return { error: `${label}: ${commaRefusal(`“${text.trim()}”`, `${example} ${unit}`)}.` };
   const parts = splitUnit(text);
   const words = unit === "psi" || unit === "kPa" ? PRESSURE_UNITS : LOAD_UNITS;
   const noun = unit === "psi" || unit === "kPa" ? "pressure" : "load";
@@ -124,8 +126,7 @@ export function readMeasure(entry: MeasureEntry, spec: MeasureSpec, prefs: Displ
   } else if (spec.quantity === "length") {
     const mm = readLength(entry.text, unit as "in" | "mm");
     const m = lengthMessages(label, unit as "in" | "mm", example);
-    if (mm === "fraction") return { error: m.fraction(entry.text) };
-    if (mm === null) return { error: m.unreadable };
+    if (typeof mm !== "number") return { error: m.because(mm ?? "unreadable", entry.text) };
     value = mm;
   } else {
     const r = readPressureOrLoad(entry.text, unit, label, example);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { pressureText, pressuresInOrder } from "./pressureText";
+import { messageInUnits, pressureText, pressuresInOrder } from "./pressureText";
 
 const IMPERIAL = { units: "imperial", lengths: "decimal" } as const;
 const METRIC = { units: "metric", lengths: "decimal" } as const;
@@ -28,5 +28,20 @@ describe("pressures in the chosen unit's order", () => {
   it("reads the same way round as the table's own pressures", () => {
     expect(pressureText(201.1, IMPERIAL).startsWith("29.2 psi (")).toBe(true);
     expect(pressuresInOrder("201.1 kPa (29.2 psi)", IMPERIAL).startsWith("29.2 psi (")).toBe(true);
+  });
+});
+
+describe("engine messages in the units the fields are labelled in", () => {
+  // 1 lb = 0.45359237 kg exactly (NIST SP 811, Appendix B.8): 1769 kg = 3899.98 lb, 1045.5 kg = 2304.9 lb, 850 kg = 1873.9 lb.
+  const M = "and 1769 kg is above the maximum load of 265/70R17 113T, 1045.5 kg at 250 kPa (36.3 psi); 850 kg";
+  it("gives each load in lb first with the engine's kg beside it, pressures psi first", () => {
+    expect(messageInUnits(M, IMPERIAL)).toBe(
+      "and 3,900 lb (1,769 kg) is above the maximum load of 265/70R17 113T, 2,305 lb (1,045.5 kg) at 36.3 psi (250 kPa); 1,874 lb (850 kg)",
+    );
+  });
+  it("leaves the metric display and figures already given in both units alone", () => {
+    expect(messageInUnits(M, METRIC)).toBe(M);
+    expect(messageInUnits("3,527 lb (1,600 kg) at 50 psi", IMPERIAL)).toBe("3,527 lb (1,600 kg) at 50 psi");
+    expect(messageInUnits("1 kgf·m", IMPERIAL)).toBe("1 kgf·m");
   });
 });

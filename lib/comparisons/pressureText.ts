@@ -35,6 +35,28 @@ export function pressuresInOrder(text: string, prefs: DisplayPrefs): string {
   return prefs.units === "metric" ? text : text.replace(ENGINE_PAIR, "$2 psi ($1 kPa)");
 }
 
+/** The engine's loads in its messages: "1045.5 kg" (lib/fitment/loadPressure.ts); not a figure already in a pair. */
+const ENGINE_LOAD = /(?<![\d.,])(\d+)(?:\.(\d+))? kg\b/g;
+
+/**
+ * An engine message in the chosen units, as the fields beside it are labelled: pressures in that
+ * unit's order ({@link pressuresInOrder}) and, in the imperial display, each load in lb first with
+ * the engine's kg beside it (1 lb = 0.45359237 kg exactly, NIST SP 811 B.8). The lb is the kg
+ * figure as printed, converted, so the two agree as shown; the metric display is unchanged.
+ *
+ * @example
+ * messageInUnits("1360.8 kg is above 1045.5 kg at 250 kPa (36.3 psi)", { units: "imperial", lengths: "decimal" });
+ * // "3,000 lb (1,360.8 kg) is above 2,305 lb (1,045.5 kg) at 36.3 psi (250 kPa)"
+ */
+export function messageInUnits(text: string, prefs: DisplayPrefs): string {
+  const t = pressuresInOrder(text, prefs);
+  if (prefs.units === "metric") return t;
+  return t.replace(ENGINE_LOAD, (_, whole: string, frac: string | undefined) => {
+    const kg = Number(frac === undefined ? whole : `${whole}.${frac}`);
+    return `${formatNumber(kgToLb(kg))} lb (${formatNumber(kg, frac?.length ?? 0)} kg)`;
+  });
+}
+
 /** A load (kg) in the chosen unit only, for chart axes and tooltips. */
 export const loadIn = (kg: number, prefs: DisplayPrefs): number => (prefs.units === "metric" ? kg : kgToLb(kg));
 /** A pressure (kPa) in the chosen unit only (psi or kPa), for chart axes and tooltips. */

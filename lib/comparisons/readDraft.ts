@@ -117,8 +117,7 @@ function lengthField(text: string, unit: "in" | "mm", bounds: Bounds, label: str
   const m = lengthMessages(label, unit, example);
   if (text.trim() === "") return fail(m.empty);
   const mm = readLength(text, unit);
-  if (mm === "fraction") return fail(m.fraction(text));
-  if (mm === null) return fail(m.unreadable);
+  if (typeof mm !== "number") return fail(m.because(mm ?? "unreadable", text));
   const v = unit === "in" ? tidy(mmToIn(mm)) : mm;
   return inBounds(v, bounds) ? v : fail(m.bounds(String(bounds.min), String(bounds.max)));
 }

@@ -116,6 +116,7 @@ export {
 // Every name of the torque module is public (values, parsing and the tightening plan).
 export * from "./tightening";
 export { parseLength, formatLength, type LengthUnit } from "./length";
+export { commaRefusal, hasNumberComma } from "./commaEntry";
 export {
   BOLT_PATTERN_TOLERANCE_MM,
   parseBoltPattern,

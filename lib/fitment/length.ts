@@ -9,6 +9,7 @@
  */
 import { FitmentInputError } from "./errors";
 import { MM_PER_IN } from "./units";
+import { commaRefusal, hasNumberComma } from "./commaEntry";
 
 /** Length units accepted at the edges. */
 export type LengthUnit = "in" | "mm";
@@ -67,6 +68,7 @@ function asciiFractions(text: string): string {
  * parseLength("120 mm", "in"); // 120
  * parseLength('3.5"', "mm");   // 88.9
  * parseLength("1-1/2", "mm");  // throws FitmentInputError: a fraction is inches, write "1-1/2 in"
+ * parseLength("1,5", "in");    // throws FitmentInputError: a comma is decimals or thousands?
  */
 export function parseLength(text: string, defaultUnit: LengthUnit): number {
   if (defaultUnit !== "in" && defaultUnit !== "mm") {
@@ -75,6 +77,8 @@ export function parseLength(text: string, defaultUnit: LengthUnit): number {
   if (typeof text !== "string" || text.length > 40) {
     throw new FitmentInputError("length", `length must be short text (${EXAMPLE})`, text);
   }
+  if (hasNumberComma(text))
+    throw new FitmentInputError("length", commaRefusal(JSON.stringify(text), defaultUnit === "in" ? "4.75" : "120.5"), text);
   const m = LENGTH_RE.exec(asciiFractions(text));
   if (!m) throw new FitmentInputError("length", `${JSON.stringify(text)} is not a length (${EXAMPLE})`, text);
   const [, sign, whole, num, den, onlyNum, onlyDen, unitRaw] = m;

@@ -23,6 +23,7 @@
  */
 import { FitmentInputError, requireInteger, requireNumber } from "./errors";
 import { ftLbToNm, nmToFtLb } from "./units";
+import { commaRefusal, hasNumberComma } from "./commaEntry";
 
 /** Accepted bolt counts. */
 export const BOLT_COUNT_LIMITS = { min: 3, max: 64 } as const;
@@ -318,11 +319,7 @@ export function parseTorqueEntry(text: string, unit: TorqueUnit, field: string):
     refuse(`${shown} is a range — enter the one figure to tighten to, from the maker's instructions (e.g. ${example})`);
   }
   if (/^-/.test(t)) refuse(`${shown}: a torque cannot be negative (e.g. ${example})`);
-  if (/^\+?[\d.]*,[\d.,]*/.test(t)) {
-    refuse(
-      `${shown} is ambiguous — a comma can mark decimals or thousands; write decimals with a point and no thousands separator (e.g. ${example === "18" ? "17.5" : "24.4"})`,
-    );
-  }
+  if (hasNumberComma(t)) refuse(commaRefusal(shown, example === "18" ? "17.5" : "24.4"));
   const m = /^\+?(\d+(?:\.\d*)?|\.\d+)\s*([^\d]*)$/.exec(t);
   if (!m) refuse(`${shown} is not a number — enter the maker's figure like ${example}`);
   const [, num, rawUnit] = m as RegExpExecArray;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { MINUS } from "@/lib/comparisons/format";
+import { MINUS, formatLen } from "@/lib/comparisons/format";
 import { bothUnits } from "./format";
 
 // 1 in = 25.4 mm exactly (NIST SP 811), so 1/16 in = 1.5875 mm and 1/32 in = 0.79375 mm.
@@ -26,5 +26,15 @@ describe("bothUnits: millimetres with the inch fraction beside them", () => {
     expect(bothUnits(-4.3)).toBe(`${MINUS}4.3 mm (${MINUS}3/16 in)`); // 0.169 in = 2.71 sixteenths
     expect(bothUnits(-0.3)).toBe(`${MINUS}0.3 mm (${MINUS}0.012 in)`); // 0.3 / 25.4 = 0.0118 in
     expect(bothUnits(-38.1)).toBe(`${MINUS}38.1 mm (${MINUS}1-1/2 in)`); // the hyphen joins whole and fraction only
+  });
+});
+
+describe("bothUnits writes lengths as the workspace does", () => {
+  it("is the workspace's formatLen in each unit: one function for both (1 in = 25.4 mm exactly, NIST SP 811)", () => {
+    const metric = { units: "metric", lengths: "decimal" } as const;
+    const frac = { units: "imperial", lengths: "fraction" } as const;
+    for (const mm of [0.7, -0.3, 0.1, 38.1, -4.3, 0.03, 0]) {
+      expect(bothUnits(mm), String(mm)).toBe(`${formatLen(mm, metric, { decimals: 1 })} (${formatLen(mm, frac)})`);
+    }
   });
 });

@@ -1,17 +1,13 @@
 /** Display helpers for the garage: every number still comes from the engine. */
-import { MINUS } from "@/lib/comparisons/format";
+import { lengthText } from "@/lib/comparisons/format";
 import { MM_PER_IN, formatLength, inToMm } from "@/lib/fitment";
 import { BACKSPACING_REFERENCE_LABEL } from "@/lib/setup/fields";
 import type { Setup } from "@/lib/setup/model";
 
-/** Below half a sixteenth an inch fraction rounds to "0 in", which would hide a real figure (1 in = 25.4 mm, NIST SP 811). */
-const HALF_SIXTEENTH_MM = MM_PER_IN / 32;
-const typographic = (s: string) => (s.startsWith("-") ? MINUS + s.slice(1) : s);
-
 /**
- * A length in mm with its inch fraction beside it, negatives with the true minus sign. A figure
- * too small for a sixteenth shows its inches in thousandths, never as "0 in", unless the
- * millimetres read 0 as well.
+ * A length in mm with its inch fraction beside it, through the workspace's own lengthText:
+ * negatives with the true minus sign, and a figure too small for a sixteenth shows its inches in
+ * thousandths, never as "0 in", unless the millimetres read 0 as well.
  *
  * @example
  * bothUnits(38.1); // "38.1 mm (1-1/2 in)"
@@ -19,10 +15,7 @@ const typographic = (s: string) => (s.startsWith("-") ? MINUS + s.slice(1) : s);
  * bothUnits(-4.3); // "−4.3 mm (−3/16 in)"
  */
 export function bothUnits(mm: number): string {
-  const metric = typographic(formatLength(mm, { unit: "mm" }));
-  const tiny = Math.abs(mm) < HALF_SIXTEENTH_MM && metric !== "0 mm";
-  const inches = formatLength(mm, tiny ? { unit: "in", decimals: 3 } : { unit: "in", fraction: 16 });
-  return `${metric} (${typographic(inches)})`;
+  return `${lengthText(mm, { unit: "mm", decimals: 1 })} (${lengthText(mm, { unit: "in", fraction: 16 })})`;
 }
 
 /** "+14.5 mm" / "−10 mm" with a sign, for changes. */

@@ -63,7 +63,10 @@ describe("setupFigures: a 37x12.50R17LT load range D on a truck placarded for 26
     );
     expect(g.load?.plan).toBeNull();
     // LI 102 = 850 kg (ISO 4000-1 table) ÷ 1.10 on a light truck = 773 kg, below the placard tire's 1027 kg.
-    expect(g.load?.messages[0]).toMatch(/^Planned tire: 225\/65R17 102H carries at most 773 kg/);
+    // The imperial display gives lb first (1 lb = 0.45359237 kg exactly, NIST SP 811 B.8): 773 kg = 1704.2 lb, 1027 kg = 2264.2 lb.
+    expect(g.load?.messages[0]).toMatch(
+      /^Planned tire: 225\/65R17 102H carries at most 1,704 lb \(773 kg\) at its maximum 36 psi, less than the 2,264 lb \(1,027 kg\) 265\/70R17 113T carries/,
+    );
   });
 
   it("is empty without the figures, and says what to add", () => {

@@ -71,6 +71,7 @@ export function setupFigures(profile: LoadProfile, current: Setup, planned: Setu
         plannedMaxLoad: "Planned tire",
         plannedMaxPressure: "Planned tire",
       },
+      { units, lengths: "decimal" },
     );
     const errs = errors as LoadErrors;
     load = {

@@ -26,10 +26,28 @@ describe("checkLoadProfile", () => {
     const ok = checkLoadProfile({ ...FULL, frontAxleKg: 2080, rearAxleKg: 2080 }, CURRENT);
     expect(ok).toEqual({});
     const over = checkLoadProfile({ ...FULL, frontAxleKg: 2100, rearAxleKg: 1200 }, CURRENT);
-    expect(over.frontAxleKg).toMatch(/^Front axle weight, scale ticket \(lb\): one tire carries half the axle, and 1050 kg is above/);
+    // In the field's unit first: 1050 kg = 1050 / 0.45359237 = 2314.85 lb (NIST SP 811 B.8: 1 lb = 0.45359237 kg exactly).
+    expect(over.frontAxleKg).toMatch(
+      /^Front axle weight, scale ticket \(lb\): one tire carries half the axle, and 2,315 lb \(1,050 kg\) is above/,
+    );
     expect(over.rearAxleKg).toBeUndefined();
     const asCar = checkLoadProfile({ ...FULL, vehicleKind: "passenger-car", frontAxleKg: 2100, rearAxleKg: 1200 }, CURRENT);
     expect(asCar).toEqual({});
+  });
+
+  it("gives loads in lb, the unit the fields are in, with the engine's kg beside them (1 lb = 0.45359237 kg exactly, NIST SP 811 B.8)", () => {
+    // A 7800 lb rear axle: 3900 lb per tire = 3900 × 0.45359237 = 1769.01 kg; the tire's 1150 / 1.10 = 1045.45 kg
+    // (LI 113, ISO 4000-1 load index table; ÷ 1.10 on a light truck, FMVSS 120 S5.1.2) = 1045.45 / 0.45359237 = 2304.8 lb.
+    expect(3900 * 0.45359237).toBeCloseTo(1769.01, 2);
+    const e = checkLoadProfile({ ...FULL, rearAxleKg: lbToKg(7800) }, CURRENT);
+    expect(e.rearAxleKg).toBe(
+      "Rear axle weight, scale ticket (lb): one tire carries half the axle, and 3,900 lb (1,769 kg) is above the maximum load of " +
+        "265/70R17 113T, 2,305 lb (1,045.5 kg) at 36.3 psi (250 kPa) (÷ 1.10 on a light truck); choose a tire with a higher load index or load range.",
+    );
+    // The metric screen keeps the engine's kg.
+    expect(checkLoadProfile({ ...FULL, units: "metric", rearAxleKg: lbToKg(7800) }, CURRENT).rearAxleKg).toMatch(
+      /^Rear axle weight, scale ticket \(kg\): one tire carries half the axle, and 1769 kg is above the maximum load of 265\/70R17 113T, 1045\.5 kg at 250 kPa/,
+    );
   });
 
   it("checks the axle ratings against the placard tire as well", () => {

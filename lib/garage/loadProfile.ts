@@ -153,6 +153,7 @@ function checkPlacard(p: LoadProfile, labels: Record<ProfileField, string>, erro
         rearAxleKg: (s && p[s.rear]) ?? LOAD_FIELD_BOUNDS.axleKg.min,
       },
       l,
+      prefsOf(p.units),
     );
     if (e.placardTire) errors.placardTire ??= e.placardTire;
     if (e.placardFront) errors.placardFrontKpa ??= e.placardFront;

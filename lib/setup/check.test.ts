@@ -99,6 +99,17 @@ describe("one set of messages", () => {
     expect(checkSetup({ ...PLANNED, wheelWidthIn: "9" }, [], { text: true }).ok).toBe(true);
   });
 
+  it("a comma in a length is refused as the reason, on the form and in its schema alike (decimals or thousands? common practice, no source)", () => {
+    const why = "is ambiguous — a comma can mark decimals or thousands; write decimals with a point and no thousands separator";
+    const r = checkSetup({ ...PLANNED, wheelWidthIn: "8,5", spacerMm: "1,5" }, [], { text: true });
+    expect(r.ok ? {} : Object.fromEntries(r.issues.map((i) => [i.path.join("."), i.message]))).toEqual({
+      wheelWidthIn: `Wheel width (in): “8,5” ${why} (e.g. 9 or 8-1/2).`,
+      spacerMm: `Spacer (mm, optional): “1,5” ${why} (e.g. 25).`,
+    });
+    const z = setupSchema.safeParse({ ...PLANNED, wheelWidthIn: "8,5" });
+    expect(z.success ? null : z.error.issues[0]?.message).toBe(`Wheel width (in): “8,5” ${why} (e.g. 9 or 8-1/2).`);
+  });
+
   it("says what a setup is when it is none, with the path it was given at", () => {
     expect(checkSetup("big", ["currentSetup"])).toEqual({
       ok: false,

@@ -68,14 +68,7 @@ export function checkSetup(v: unknown, path: Issue["path"] = [], opts: CheckSetu
     const m = lengthMessages(L[field], unit, EX[field]);
     const r = readLengthValue(raw, unit, opts.text === true);
     if ("value" in r && r.value >= bounds.min && r.value <= bounds.max) return r.value === 0 ? 0 : r.value;
-    const message =
-      "value" in r
-        ? m.bounds(String(bounds.min), String(bounds.max))
-        : r.problem === "fraction"
-          ? m.fraction(String(raw))
-          : r.problem === "unreadable"
-            ? m.unreadable
-            : m.empty;
+    const message = "value" in r ? m.bounds(String(bounds.min), String(bounds.max)) : m.because(r.problem, String(raw));
     issues.push({ path: at(field), message });
     return NaN;
   };

@@ -5,9 +5,11 @@
  * bounds in the field's own unit.
  */
 import { MM_PER_IN } from "@/lib/fitment/units";
+import { commaRefusal } from "@/lib/fitment/commaEntry";
 import { OFFSET_MARGIN_MM } from "@/lib/fitment/offset";
 import { BACKSPACING_REFERENCE_LABEL, SETUP_FIELD_EXAMPLE as EX, SETUP_FIELD_LABEL as L } from "./fields";
 import type { BackspacingReference } from "./model";
+import type { LengthProblem } from "./read";
 
 /**
  * A bound as a message states it in another unit: rounded inward (a minimum up, a maximum down)
@@ -30,9 +32,11 @@ export function boundText(v: number, side: "min" | "max", decimals: number): str
  * @example
  * lengthMessages("Spacer (mm, optional)", "mm", "25").fraction("1-1/2");
  * // "Spacer (mm, optional): “1-1/2” is a fraction, which is read only in inches — write “1-1/2 in”, or mm as a decimal, e.g. 25."
+ * lengthMessages("Wheel width (in)", "in", "9 or 8-1/2").comma("8,5");
+ * // "Wheel width (in): “8,5” is ambiguous — a comma can mark decimals or thousands; write decimals with a point and no thousands separator (e.g. 9 or 8-1/2)."
  */
 export function lengthMessages(label: string, unit: "in" | "mm", example: string) {
-  return {
+  const m = {
     empty: `${label}: enter ${unit === "in" ? "inches" : "mm"}, e.g. ${example}.`,
     unreadable:
       unit === "in"
@@ -41,7 +45,13 @@ export function lengthMessages(label: string, unit: "in" | "mm", example: string
     fraction: (typed: string) =>
       `${label}: “${typed.trim()}” is a fraction, which is read only in inches — write “${typed.trim()} in”, or mm as a decimal, e.g. ${example}.`,
     bounds: (min: string, max: string) => `${label}: must be between ${min} and ${max} ${unit}, e.g. ${example}.`,
+    // The example without its trailing note ("25 (leave empty for none)"), since the refusal puts it in brackets.
+    comma: (typed: string) => `${label}: ${commaRefusal(`“${typed.trim()}”`, example.replace(/\s*\(.*\)$/, ""))}.`,
   };
+  /** The message for a length that did not read, by why (readLengthValue's problem). */
+  const because = (problem: LengthProblem, typed: string): string =>
+    problem === "fraction" ? m.fraction(typed) : problem === "comma" ? m.comma(typed) : problem === "unreadable" ? m.unreadable : m.empty;
+  return { ...m, because };
 }
 
 /** The messages about a setup as a whole and about what its fields mean together. */

@@ -7,6 +7,7 @@
  */
 import { MM_PER_IN } from "@/lib/fitment/units";
 import { parseLength } from "@/lib/fitment/length";
+import { hasNumberComma } from "@/lib/fitment/commaEntry";
 
 /** Rounds away float noise from unit conversion (4.75 in → mm → in stays 4.75). */
 export const tidy = (v: number): number => {
@@ -15,16 +16,19 @@ export const tidy = (v: number): number => {
 };
 
 /**
- * A length in mm, or why not: "fraction" when a fraction was typed where mm is the unit, null
- * when the text is no length at all. A typographic minus (−) reads as a minus.
+ * A length in mm, or why not: "fraction" when a fraction was typed where mm is the unit, "comma"
+ * when the figure has a comma (decimals or thousands? never guessed), null when the text is no
+ * length at all. A typographic minus (−) reads as a minus.
  *
  * @example
  * readLength("4-3/4", "in"); // 120.65
  * readLength("1-1/2", "mm"); // "fraction"
+ * readLength("1,5", "in");   // "comma"
  * readLength("wide", "in");  // null
  */
-export function readLength(text: string, unit: "in" | "mm"): number | "fraction" | null {
+export function readLength(text: string, unit: "in" | "mm"): number | "fraction" | "comma" | null {
   const t = text.trim().replace(/\u2212/g, "-");
+  if (hasNumberComma(t)) return "comma";
   try {
     return tidy(parseLength(t, unit));
   } catch {
@@ -39,7 +43,8 @@ export function readLength(text: string, unit: "in" | "mm"): number | "fraction"
 }
 
 /** What a length field holds: its value in the field's unit, or why it has none. */
-export type LengthRead = { value: number } | { problem: "empty" | "unreadable" | "fraction" };
+export type LengthRead = { value: number } | { problem: LengthProblem };
+export type LengthProblem = "empty" | "unreadable" | "fraction" | "comma";
 
 /**
  * A length field's value in its own unit (`unit`, the unit its label states): a number is taken
@@ -55,7 +60,7 @@ export function readLengthValue(v: unknown, unit: "in" | "mm", text: boolean): L
   if (typeof v === "number") return Number.isFinite(v) ? { value: v } : { problem: "unreadable" };
   if (typeof v !== "string" || !text || v.trim() === "") return { problem: "empty" };
   const mm = readLength(v, unit);
-  if (mm === "fraction") return { problem: "fraction" };
+  if (mm === "fraction" || mm === "comma") return { problem: mm };
   if (mm === null) return { problem: "unreadable" };
   return { value: unit === "mm" ? mm : tidy(mm / MM_PER_IN) };
 }

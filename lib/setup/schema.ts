@@ -90,7 +90,7 @@ export function lengthField(label: string, unit: "in" | "mm", bounds: Bounds, ex
       if (typeof v === "number") return v;
       const r = readLengthValue(v, unit, true);
       if ("value" in r) return unit === out ? r.value : tidy(unit === "in" ? r.value * MM_PER_IN : r.value / MM_PER_IN);
-      ctx.addIssue({ code: "custom", message: r.problem === "fraction" ? m.fraction(v) : r.problem === "empty" ? m.empty : m.unreadable });
+      ctx.addIssue({ code: "custom", message: m.because(r.problem, v) });
       return z.NEVER;
     })
     .pipe(

@@ -82,7 +82,9 @@ describe("vehicle load profile", () => {
       why: "a scale weight above what two placard tires carry (load index 113 = 1150 kg, ÷ 1.10 on a light truck)",
       patch: { frontAxleKg: 2200 },
       field: "frontAxleKg",
-      message: /^Front axle weight, scale ticket \(lb\): one tire carries half the axle, and 1100 kg is above the maximum load/,
+      // In the field's unit first: 1100 kg = 1100 / 0.45359237 = 2425.1 lb (NIST SP 811 B.8, 1 lb = 0.45359237 kg exactly).
+      message:
+        /^Front axle weight, scale ticket \(lb\): one tire carries half the axle, and 2,425 lb \(1,100 kg\) is above the maximum load/,
     },
     {
       why: "a negative weight",

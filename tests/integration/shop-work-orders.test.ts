@@ -125,7 +125,12 @@ describe("signing off and the status", () => {
         "torque",
         /^Maker's torque \(N·m\): "190 ft-lb" is in ft·lb but the chosen unit is N·m/,
       ],
-      [{ ...bodyFor("LF", "lug_torque"), torque: "5000" }, "torque", /^Maker's torque \(N·m\) must be between 1 and 2000 N·m/],
+      // Beyond the engine's 2000 N·m the lug nut band still answers, with its guess: 5000 N·m / 1.355818 = 3687.8 ft·lb.
+      [
+        { ...bodyFor("LF", "lug_torque"), torque: "5000" },
+        "torque",
+        /^Maker's torque \(N·m\): 5000 N·m \(3687\.8 ft·lb\) is outside what lug nuts are torqued to, .*Did you mean 500 N·m\?/,
+      ],
       [
         { ...bodyFor("LF", "lug_torque"), passesDone: false },
         "passesDone",
@@ -182,6 +187,10 @@ describe("signing off and the status", () => {
     // 1400 ft·lb × 1.355818 = 1898.1 N·m (NIST SP 811 B.9): inside the engine's 2000 N·m, outside what lug nuts take.
     expect(await refused({ ...bodyFor("RF", "lug_torque"), torque: "1400", unit: "ftlb" }, "torque")).toMatch(
       /^Maker's torque \(ft·lb\): 1400 ft·lb \(1898\.1 N·m\) is outside what lug nuts are torqued to, .*Did you mean 140 ft·lb\?/,
+    );
+    // 3000 ft·lb × 1.355818 = 4067.5 N·m, beyond the engine's 2000 N·m: the band's message, not the engine's limit.
+    expect(await refused({ ...bodyFor("RF", "lug_torque"), torque: "3000", unit: "ftlb" }, "torque")).toMatch(
+      /^Maker's torque \(ft·lb\): 3000 ft·lb \(4067\.5 N·m\) is outside what lug nuts are torqued to, .*Did you mean 300 ft·lb\?/,
     );
     // 150 ft·lb = 203.4 N·m on a ring bolt (common practice, no source: 5–70 N·m).
     expect(await refused({ ...bodyFor("RF", "beadlock"), torque: "150" }, "torque")).toMatch(

@@ -10,7 +10,7 @@ vi.setConfig({ testTimeout: 30_000 });
 vi.mock("recharts", async (importOriginal) => (await import("@/components/comparison/chartsTestUtil")).fixedSizeRecharts(importOriginal));
 afterEach(cleanup);
 
-const { plan } = planLoad(LOAD_BASE, LOAD_LABELS);
+const { plan } = planLoad(LOAD_BASE, LOAD_LABELS, { units: "imperial", lengths: "decimal" });
 
 const xTicks = () =>
   [...screen.getByTestId("load-chart").querySelectorAll(".recharts-xAxis-tick-labels .recharts-cartesian-axis-tick-value")].map(

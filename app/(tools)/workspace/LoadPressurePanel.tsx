@@ -5,7 +5,6 @@ import { TextField } from "@/components/ui/TextField";
 import type { DisplayPrefs } from "@/lib/comparisons/format";
 import { LOAD_SPEC, type LoadErrors, type LoadField, type LoadLabels, planLoad } from "@/lib/comparisons/loadPlan";
 import { measureUnit, readMeasure } from "@/lib/comparisons/measureEntry";
-import { pressuresInOrder } from "@/lib/comparisons/pressureText";
 import type { VehicleKind } from "@/lib/fitment";
 import { AiredDownGuidance } from "./AiredDownGuidance";
 import { LazyLoadPressureChart } from "./LazyLoadPressureChart";
@@ -84,7 +83,7 @@ export function LoadPressurePanel({ currentTire, plannedTire, prefs }: { current
     const touched = (Object.keys(QUANTITIES) as MeasureKey[]).some((k) => entries[k].text.trim() !== "");
     if (!touched) return { plan: null, errors: {} as LoadErrors };
     if (Object.keys(errs).length > 0) return { plan: null, errors: errs };
-    const computed = planLoad(
+    return planLoad(
       {
         placardTire: placard,
         plannedTire,
@@ -97,10 +96,8 @@ export function LoadPressurePanel({ currentTire, plannedTire, prefs }: { current
         plannedMaxPressureKpa: values.plannedMaxPressure,
       },
       labels,
+      prefs,
     );
-    // The engine's messages name pressures "kPa (psi)"; the fields here read in the chosen unit first.
-    const ordered = Object.fromEntries(Object.entries(computed.errors).map(([k, m]) => [k, pressuresInOrder(m, prefs)])) as LoadErrors;
-    return { plan: computed.plan, errors: ordered };
   }, [entries, prefs, placard, plannedTire, vehicle]);
 
   const measureField = measureFields({ prefix: "load", labels, hints: HINT, entries, set, errors, note });

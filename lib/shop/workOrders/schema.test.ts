@@ -24,6 +24,18 @@ const ring = (torque: string, unit: "ftlb" | "nm") => ({
   passesDone: true,
 });
 
+describe("a comma in a figure is refused and named as the reason (decimals or thousands? common practice, no source)", () => {
+  it("in the cold pressure, with an example in the field's unit", () => {
+    const why = "is ambiguous — a comma can mark decimals or thousands; write decimals with a point and no thousands separator";
+    const pressure = (p: string, pressureUnit: "psi" | "kPa") => ({ step: "pressure", position: "LF", pressure: p, pressureUnit });
+    expect(sign(pressure("32,5", "psi")).issues?.pressure).toBe(`Cold pressure set (psi): "32,5" ${why} (e.g. 35 psi).`);
+    expect(sign(pressure("2,2", "kPa")).issues?.pressure).toBe(`Cold pressure set (kPa): "2,2" ${why} (e.g. 240 kPa).`);
+    expect(sign({ step: "balance", position: "LF", innerGrams: "12,5", outerGrams: "0" }).issues?.innerGrams).toBe(
+      `Inner plane weight (g): "12,5" ${why} (e.g. 12.5).`,
+    );
+  });
+});
+
 describe("torque bands (common practice, no source): typos and unit mix-ups are refused", () => {
   it("refuses lug nuts at 1400 ft·lb = 1898.1 N·m (1400 × 1.355818 = 1898.145), suggesting the slipped digit", () => {
     expect(1400 * FT_LB).toBeCloseTo(1898.145, 3);
@@ -32,6 +44,20 @@ describe("torque bands (common practice, no source): typos and unit mix-ups are 
       "Maker's torque (ft·lb): 1400 ft·lb (1898.1 N·m) is outside what lug nuts are torqued to, 29.6 to 516.2 ft·lb (40 to 700 N·m) " +
         "(common practice, no source): a typo or a figure in the other unit? Did you mean 140 ft·lb? " +
         "Type the maker's figure in the unit it is given in, e.g. 140 ft·lb.",
+    );
+  });
+
+  it("the band's message wins beyond the engine's 2000 N·m too: 3000 ft·lb on lug nuts = 4067.5 N·m (3000 × 1.355818 = 4067.454)", () => {
+    expect(3000 * FT_LB).toBeCloseTo(4067.454, 3);
+    // 300 ft·lb = 406.7 N·m lies in the band (40–700 N·m); 3000 N·m and 30000 ft·lb do not.
+    expect(sign(lug("3000", "ftlb")).issues?.torque).toBe(
+      "Maker's torque (ft·lb): 3000 ft·lb (4067.5 N·m) is outside what lug nuts are torqued to, 29.6 to 516.2 ft·lb (40 to 700 N·m) " +
+        "(common practice, no source): a typo or a figure in the other unit? Did you mean 300 ft·lb? " +
+        "Type the maker's figure in the unit it is given in, e.g. 140 ft·lb.",
+    );
+    // 2500 N·m on ring bolts (5–70 N·m): no tenfold slip lands in the band, so no guess.
+    expect(sign(ring("2500", "nm")).issues?.torque).toMatch(
+      /^Maker's torque \(N·m\): 2500 N·m \(1843\.9 ft·lb\) is outside what beadlock ring bolts/,
     );
   });
 

@@ -7,6 +7,8 @@ import { z } from "zod";
 import {
   FitmentInputError,
   TORQUE_UNIT_SYMBOL,
+  commaRefusal,
+  hasNumberComma,
   parseTorqueEntry,
   psiToKpa,
   requireTorqueNm,
@@ -81,30 +83,33 @@ export function torqueBandRefusal(typed: number, unit: TorqueUnit, step: TorqueS
 
 /** Accepted cold pressures: from a spare's low figure to a load range E tire's maximum, with room (kPa). */
 export const PRESSURE_LIMITS_KPA = { min: psiToKpa(10), max: psiToKpa(120) } as const;
+/** A cold pressure the field accepts in each unit, shown in its refusals. */
+export const PRESSURE_EXAMPLE: Record<PressureEntryUnit, string> = { psi: "35 psi", kPa: "240 kPa" };
 
 /**
  * One plain decimal number typed in a field: no comma (decimal mark or thousands?), no range, in
- * [min, max]. Returns the number, or a message that starts with the label.
+ * [min, max]. Returns the number, or a message that starts with the label; `example` is a figure
+ * the field accepts, in its unit, shown when a comma is refused.
  *
  * @example
- * readDecimal("-0.25", "Camber left (°)", -10, 10); // -0.25
- * readDecimal("1,5", "Camber left (°)", -10, 10); // "Camber left (°): "1,5" is ambiguous …"
+ * readDecimal("-0.25", "Camber left (°)", -10, 10, "-0.25"); // -0.25
+ * readDecimal("1,5", "Camber left (°)", -10, 10, "-0.25"); // "Camber left (°): "1,5" is ambiguous — a comma can mark decimals or thousands; …"
  */
-export function readDecimal(text: string, label: string, min: number, max: number): number | string {
+export function readDecimal(text: string, label: string, min: number, max: number, example: string): number | string {
   const t = String(text ?? "")
     .trim()
     .replace(/\u2212/g, "-");
   if (t === "") return `${label}: enter a number.`;
-  if (t.includes(",")) return `${label}: "${t}" is ambiguous — write decimals with a point and no thousands separator.`;
+  if (hasNumberComma(t)) return `${label}: ${commaRefusal(JSON.stringify(t), example)}.`;
   if (!/^[+-]?(\d+(\.\d*)?|\.\d+)$/.test(t)) return `${label}: "${t}" is not one number.`;
   const n = Number(t);
   if (n < min || n > max) return `${label}: use ${min} to ${max}, got ${t}.`;
   return n;
 }
 
-const decimal = (label: string, min: number, max: number) =>
+const decimal = (label: string, min: number, max: number, example: string) =>
   z.string({ error: `${label}: enter a number.` }).transform((s, ctx) => {
-    const r = readDecimal(s, label, min, max);
+    const r = readDecimal(s, label, min, max, example);
     if (typeof r === "string") {
       ctx.addIssue({ code: "custom", message: r });
       return z.NEVER;
@@ -117,8 +122,10 @@ const torqueUnit = z.enum(["ftlb", "nm"], { error: `${FIELD_LABEL.unit}: pick ft
 const confirmed = (label: string) => z.literal(true, { error: `${label}: tick it once it is done.` });
 
 /**
- * The maker's torque, read in its unit, range-checked in N·m and held to the fastener's band
- * (TORQUE_BANDS_NM); the issue sits on `torque`.
+ * The maker's torque, read in its unit, held to the fastener's band (TORQUE_BANDS_NM) and then
+ * range-checked in N·m; the issue sits on `torque`. The band comes first because it lies inside
+ * the engine's range and its message says what the figure may have been meant as (3000 ft·lb on a
+ * lug nut: "Did you mean 300 ft·lb?"), which the engine's generic range message cannot.
  */
 function torqueNmOf(v: { torque: string; unit: TorqueUnit }, step: TorqueStep, ctx: z.RefinementCtx): number {
   const label = torqueFieldLabel(v.unit);
@@ -126,16 +133,13 @@ function torqueNmOf(v: { torque: string; unit: TorqueUnit }, step: TorqueStep, c
     ctx.addIssue({ code: "custom", path: ["torque"], message });
     return z.NEVER;
   };
-  let typed: number;
-  let nm: number;
   try {
-    typed = parseTorqueEntry(v.torque, v.unit, label);
-    nm = requireTorqueNm(torqueToNm(typed, v.unit), v.unit, label);
+    const typed = parseTorqueEntry(v.torque, v.unit, label);
+    const outside = Number.isFinite(typed) ? torqueBandRefusal(typed, v.unit, step, label) : null;
+    return outside ? refuse(outside) : requireTorqueNm(torqueToNm(typed, v.unit), v.unit, label);
   } catch (e) {
     return refuse(e instanceof FitmentInputError ? e.message : `${label}: enter one figure.`);
   }
-  const outside = torqueBandRefusal(typed, v.unit, step, label);
-  return outside ? refuse(outside) : nm;
 }
 
 const fitted = z
@@ -212,7 +216,13 @@ const pressureStep = (limits: TirePressureLimits | null) =>
     .transform((v, ctx) => {
       const label = pressureFieldLabel(v.pressureUnit);
       const toUnit = (kpa: number) => (v.pressureUnit === "kPa" ? Math.round(kpa) : Math.round(kpa / psiToKpa(1)));
-      const r = readDecimal(v.pressure, label, toUnit(PRESSURE_LIMITS_KPA.min), toUnit(PRESSURE_LIMITS_KPA.max));
+      const r = readDecimal(
+        v.pressure,
+        label,
+        toUnit(PRESSURE_LIMITS_KPA.min),
+        toUnit(PRESSURE_LIMITS_KPA.max),
+        PRESSURE_EXAMPLE[v.pressureUnit],
+      );
       const kpa = typeof r === "number" ? (v.pressureUnit === "kPa" ? r : psiToKpa(r)) : 0;
       const refused = typeof r === "string" ? r : pressureRefusal(kpa, v.pressureUnit, limits, label, v.makerTable);
       if (refused) {
@@ -226,8 +236,8 @@ const balance = z
   .object({
     step: z.literal("balance"),
     position,
-    innerGrams: decimal(FIELD_LABEL.innerGrams, 0, 500),
-    outerGrams: decimal(FIELD_LABEL.outerGrams, 0, 500),
+    innerGrams: decimal(FIELD_LABEL.innerGrams, 0, 500, "12.5"),
+    outerGrams: decimal(FIELD_LABEL.outerGrams, 0, 500, "12.5"),
   })
   .transform((v) => ({ step: v.step, position: v.position, data: { innerGrams: v.innerGrams, outerGrams: v.outerGrams } }));
 
@@ -246,11 +256,11 @@ const lugTorque = z
 
 /** Readings in degrees; the ranges hold any truck's readings with room, and refuse a slipped decimal point. */
 const readings = z.object({
-  camberLeft: decimal(FIELD_LABEL.camberLeft, -10, 10),
-  camberRight: decimal(FIELD_LABEL.camberRight, -10, 10),
-  casterLeft: decimal(FIELD_LABEL.casterLeft, -5, 15),
-  casterRight: decimal(FIELD_LABEL.casterRight, -5, 15),
-  toeTotal: decimal(FIELD_LABEL.toeTotal, -5, 5),
+  camberLeft: decimal(FIELD_LABEL.camberLeft, -10, 10, "-0.25"),
+  camberRight: decimal(FIELD_LABEL.camberRight, -10, 10, "-0.25"),
+  casterLeft: decimal(FIELD_LABEL.casterLeft, -5, 15, "3.5"),
+  casterRight: decimal(FIELD_LABEL.casterRight, -5, 15, "3.5"),
+  toeTotal: decimal(FIELD_LABEL.toeTotal, -5, 5, "0.1"),
 });
 
 const alignment = z

@@ -1,6 +1,6 @@
 "use client";
 import { kpaToPsi, psiToKpa } from "@/lib/fitment";
-import { pressureFieldLabel, readDecimal } from "@/lib/shop/workOrders/schema";
+import { PRESSURE_EXAMPLE, pressureFieldLabel, readDecimal } from "@/lib/shop/workOrders/schema";
 import { FIELD_LABEL, type PressureEntryUnit } from "@/lib/shop/workOrders/vocabulary";
 import { type TirePressureLimits, isBelowRoadMinimum, toSetWords } from "@/lib/shop/workOrders/pressureLimit";
 import { pressureWords } from "@/lib/shop/workOrders/signedText";
@@ -23,13 +23,13 @@ export function PressureFields({
   limits?: TirePressureLimits | null;
 }) {
   const unit = form.watch("pressureUnit") as PressureEntryUnit;
-  const typed = readDecimal(form.watch("pressure") as string, pressureFieldLabel(unit), 0, 10_000);
+  const typed = readDecimal(form.watch("pressure") as string, pressureFieldLabel(unit), 0, 10_000, PRESSURE_EXAMPLE[unit]);
   const below = typeof typed === "number" && isBelowRoadMinimum(unit === "kPa" ? typed : psiToKpa(typed), unit, limits);
   const ticked = form.watch("makerTable") === true;
   const onUnit = (to: PressureEntryUnit) => {
     const text = form.getValues("pressure") as string;
     if (text.trim() !== "") {
-      const n = readDecimal(text, pressureFieldLabel(unit), 0, 10_000);
+      const n = readDecimal(text, pressureFieldLabel(unit), 0, 10_000, PRESSURE_EXAMPLE[unit]);
       // A figure that cannot be read keeps its unit: relabelling it would claim a reading nobody took.
       if (typeof n === "string")
         return form.setError("pressure", { type: "unit", message: `${n} The unit stays ${unit} until it reads as one number.` });
