@@ -3,7 +3,7 @@ import { cleanup, render, screen, within } from "@testing-library/react";
 import { afterEach, describe, expect, it } from "vitest";
 import { invoiceFigures } from "@/lib/shop/payments/invoice";
 import { PaymentHistory } from "./PaymentHistory";
-import { PAID_DEPOSIT } from "./paymentsTestUtil";
+import { DEPOSIT_PAID, PAID_DEPOSIT, quotePayments, refundEntry } from "./paymentsTestUtil";
 
 afterEach(cleanup);
 
@@ -13,10 +13,8 @@ const DENVER = "America/Denver";
 
 describe("PaymentHistory", () => {
   it("shows the invoice with what is still to pay, and the deposit in the history", () => {
-    const invoice = invoiceFigures(430782, [{ kind: "deposit", status: "paid", amountCents: 107696 }], []);
-    render(
-      <PaymentHistory payments={{ invoice, invoiceOpen: true, refundBlocked: null, payments: [deposit], refunds: [], timeZone: DENVER }} />,
-    );
+    const invoice = invoiceFigures(430782, [DEPOSIT_PAID], []);
+    render(<PaymentHistory payments={quotePayments(invoice)} />);
     expect(screen.getByTestId("invoice-status").textContent).toBe("$3,230.86 to pay");
     expect(screen.getByText("Balance due: $3,230.86")).toBeTruthy();
     expect(within(screen.getByRole("list", { name: "Payment history" })).getByText("$1,076.96")).toBeTruthy();
@@ -39,36 +37,14 @@ describe("PaymentHistory", () => {
       paidAt: "2027-03-16T17:00:00Z",
       recordedBy: "Sam Staff",
     };
-    render(
-      <PaymentHistory
-        payments={{ invoice, invoiceOpen: true, refundBlocked: null, payments: [deposit, cash], refunds: [], timeZone: DENVER }}
-      />,
-    );
+    render(<PaymentHistory payments={quotePayments(invoice, { payments: [deposit, cash] })} />);
     expect(screen.getByTestId("invoice-status").textContent).toBe("Paid");
     expect(screen.getByRole("list", { name: "Payment history" }).textContent).toContain("Balance · Cash · $3,230.86 · taken by Sam Staff");
   });
 
   it("before the work is done shows no invoice, and lists a refund waiting for the provider", () => {
-    const invoice = invoiceFigures(
-      430782,
-      [{ kind: "deposit", status: "paid", amountCents: 107696 }],
-      [{ status: "pending", amountCents: 40000 }],
-    );
-    const refund = {
-      id: "r1",
-      paymentId: "p1",
-      amountCents: 40000,
-      status: "pending" as const,
-      requestedBy: "Olive Owner",
-      createdAt: "2027-03-02T17:00:00Z",
-      succeededAt: null,
-      failedAt: null,
-    };
-    render(
-      <PaymentHistory
-        payments={{ invoice, invoiceOpen: false, refundBlocked: null, payments: [deposit], refunds: [refund], timeZone: DENVER }}
-      />,
-    );
+    const invoice = invoiceFigures(430782, [DEPOSIT_PAID], [{ status: "pending", amountCents: 40000 }]);
+    render(<PaymentHistory payments={quotePayments(invoice, { invoiceOpen: false, refunds: [refundEntry("pending", 40000)] })} />);
     expect(screen.queryByTestId("invoice-status")).toBeNull();
     expect(screen.getByRole("list", { name: "Payment history" }).textContent).toContain(
       "−$400.00 · waiting for the provider · by Olive Owner",
@@ -76,26 +52,8 @@ describe("PaymentHistory", () => {
   });
 
   it("lists a refund the provider reported as failed as not given back; the whole deposit is refundable again", () => {
-    const invoice = invoiceFigures(
-      430782,
-      [{ kind: "deposit", status: "paid", amountCents: 107696 }],
-      [{ status: "failed", amountCents: 40000 }],
-    );
-    const refund = {
-      id: "r1",
-      paymentId: "p1",
-      amountCents: 40000,
-      status: "failed" as const,
-      requestedBy: "Olive Owner",
-      createdAt: "2027-03-02T17:00:00Z",
-      succeededAt: null,
-      failedAt: "2027-03-02T17:05:00Z",
-    };
-    render(
-      <PaymentHistory
-        payments={{ invoice, invoiceOpen: false, refundBlocked: null, payments: [deposit], refunds: [refund], timeZone: DENVER }}
-      />,
-    );
+    const invoice = invoiceFigures(430782, [DEPOSIT_PAID], [{ status: "failed", amountCents: 40000 }]);
+    render(<PaymentHistory payments={quotePayments(invoice, { invoiceOpen: false, refunds: [refundEntry("failed", 40000)] })} />);
     expect(screen.getByRole("list", { name: "Payment history" }).textContent).toContain(
       "−$400.00 · refund failed — not given back · by Olive Owner",
     );

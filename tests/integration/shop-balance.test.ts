@@ -130,6 +130,47 @@ const counterPay = (id: string, body: object) => counter.POST(req("POST", `/api/
 const refund = (id: string, body: object) => refunds(req("POST", `/api/shop/quotes/${id}/refunds`, body), ctx({ id }));
 const count = async (table: string) => Number((await db(table).count({ n: "*" }))[0]!.n);
 
+/**
+ * The provider's event about the app's refund `row` of `payment`, unsigned: a confirmed refund
+ * (`refund.updated`, succeeded) unless `over` changes the refund's fields or the event's `type`.
+ */
+function refundEvent(
+  row: { id: string; provider_refund_id: string; amount_cents: number },
+  payment: { provider_payment_intent: string },
+  { type = "refund.updated", ...over }: Record<string, unknown> = {},
+) {
+  return JSON.stringify({
+    id: `evt_test_${randomBytes(4).toString("hex")}`,
+    object: "event",
+    type,
+    data: {
+      object: {
+        id: row.provider_refund_id,
+        object: "refund",
+        amount: row.amount_cents,
+        currency: "usd",
+        status: "succeeded",
+        payment_intent: payment.provider_payment_intent,
+        metadata: { refund_id: row.id },
+        ...over,
+      },
+    },
+  });
+}
+
+/**
+ * Sends the provider's last event again: as it was (the same event id, answered "duplicate"), then
+ * as a new event about the same refund (a new id), which must be answered `outcome` and change nothing.
+ */
+async function replayLastEvent(outcome: string) {
+  const last = forwarder.delivered.at(-1)!;
+  expect(await postWebhook(last.body, last.signature)).toMatchObject({ status: 200, answer: { outcome: "duplicate" } });
+  const again = JSON.parse(last.body);
+  again.id = `evt_again_${randomBytes(4).toString("hex")}`;
+  const body = JSON.stringify(again);
+  expect(await postWebhook(body, signPayload(body, SECRET))).toMatchObject({ status: 200, answer: { outcome } });
+}
+
 beforeAll(async () => {
   await setUpBookableShops(db, openAllDay);
   forwarder = await startWebhookForwarder(webhook);
@@ -372,24 +413,7 @@ describe("refunding a deposit on a cancelled booking", () => {
   it("a forged or mismatched refund event is refused; nothing written", async () => {
     const row = await db("payment_refunds").where({ quote_id: q.id }).orderBy("created_at").first();
     const payment = await db("payments").where({ id: row.payment_id }).first();
-    const event = (over: object) =>
-      JSON.stringify({
-        id: `evt_forged_${randomBytes(4).toString("hex")}`,
-        object: "event",
-        type: "refund.updated",
-        data: {
-          object: {
-            id: row.provider_refund_id,
-            object: "refund",
-            amount: row.amount_cents,
-            currency: "usd",
-            status: "succeeded",
-            payment_intent: payment.provider_payment_intent,
-            metadata: { refund_id: row.id },
-            ...over,
-          },
-        },
-      });
+    const event = (over: Record<string, unknown>) => refundEvent(row, payment, over);
     const eventsBefore = await count("payment_webhook_events");
     const unsigned = event({});
     expect((await postWebhook(unsigned, signPayload(unsigned, "whsec_someone_else"))).status).toBe(400);
@@ -460,12 +484,7 @@ describe("a refund the provider reports as failed", () => {
   });
 
   it("a replay of the failure changes nothing", async () => {
-    const last = forwarder.delivered.at(-1)!;
-    expect(await postWebhook(last.body, last.signature)).toMatchObject({ status: 200, answer: { outcome: "duplicate" } });
-    const again = JSON.parse(last.body);
-    again.id = `evt_again_${randomBytes(4).toString("hex")}`;
-    const body = JSON.stringify(again);
-    expect(await postWebhook(body, signPayload(body, SECRET))).toMatchObject({ status: 200, answer: { outcome: "already_failed" } });
+    await replayLastEvent("already_failed");
     expect(await db("payment_refunds").where({ quote_id: q.id }).pluck("status")).toEqual(["failed"]);
   });
 
@@ -473,22 +492,7 @@ describe("a refund the provider reports as failed", () => {
     const row = await db("payment_refunds").where({ quote_id: q.id }).first();
     await db("payment_refunds").where({ id: row.id }).update({ status: "pending", failed_at: null });
     const payment = await db("payments").where({ id: row.payment_id }).first();
-    const body = JSON.stringify({
-      id: `evt_failed_${randomBytes(4).toString("hex")}`,
-      object: "event",
-      type: "refund.failed",
-      data: {
-        object: {
-          id: row.provider_refund_id,
-          object: "refund",
-          amount: row.amount_cents,
-          currency: "usd",
-          status: "failed",
-          payment_intent: payment.provider_payment_intent,
-          metadata: { refund_id: row.id },
-        },
-      },
-    });
+    const body = refundEvent(row, payment, { type: "refund.failed", status: "failed" });
     expect(await postWebhook(body, signPayload(body, SECRET))).toMatchObject({ status: 200, answer: { outcome: "refund_failed" } });
     expect((await db("payment_refunds").where({ id: row.id }).first()).status).toBe("failed");
   });
@@ -601,12 +605,7 @@ describe("a refunded deposit on the invoice and on the quote", () => {
     expect(mail!.text).toContain(`Your deposit of $1,076.96 for quote Q-${number} (`);
     expect(mail!.text).toContain("call Shop A on 555-0100 for a new quote.");
 
-    const last = forwarder.delivered.at(-1)!;
-    expect(await postWebhook(last.body, last.signature)).toMatchObject({ status: 200, answer: { outcome: "duplicate" } });
-    const again = JSON.parse(last.body);
-    again.id = `evt_again_${randomBytes(4).toString("hex")}`;
-    const body = JSON.stringify(again);
-    expect(await postWebhook(body, signPayload(body, SECRET))).toMatchObject({ status: 200, answer: { outcome: "already_refunded" } });
+    await replayLastEvent("already_refunded");
     expect(await closed()).toHaveLength(1);
   });
 

@@ -36,25 +36,23 @@ describe("a comma in a figure is refused and named as the reason (decimals or th
   });
 });
 
+/** The whole refusal of a lug-nut torque typed in ft·lb: what was typed (with its N·m) and the likely meaning. */
+const lugRefusal = (shown: string, guess: string) =>
+  `Maker's torque (ft·lb): ${shown} is outside what lug nuts are torqued to, 29.6 to 516.2 ft·lb (40 to 700 N·m) ` +
+  `(common practice, no source): a typo or a figure in the other unit? Did you mean ${guess}? ` +
+  "Type the maker's figure in the unit it is given in, e.g. 140 ft·lb.";
+
 describe("torque bands (common practice, no source): typos and unit mix-ups are refused", () => {
   it("refuses lug nuts at 1400 ft·lb = 1898.1 N·m (1400 × 1.355818 = 1898.145), suggesting the slipped digit", () => {
     expect(1400 * FT_LB).toBeCloseTo(1898.145, 3);
     // Band ends in ft·lb by hand, rounded inward: 40 / 1.355818 = 29.502 → 29.6; 700 / 1.355818 = 516.29 → 516.2.
-    expect(sign(lug("1400", "ftlb")).issues?.torque).toBe(
-      "Maker's torque (ft·lb): 1400 ft·lb (1898.1 N·m) is outside what lug nuts are torqued to, 29.6 to 516.2 ft·lb (40 to 700 N·m) " +
-        "(common practice, no source): a typo or a figure in the other unit? Did you mean 140 ft·lb? " +
-        "Type the maker's figure in the unit it is given in, e.g. 140 ft·lb.",
-    );
+    expect(sign(lug("1400", "ftlb")).issues?.torque).toBe(lugRefusal("1400 ft·lb (1898.1 N·m)", "140 ft·lb"));
   });
 
   it("the band's message wins beyond the engine's 2000 N·m too: 3000 ft·lb on lug nuts = 4067.5 N·m (3000 × 1.355818 = 4067.454)", () => {
     expect(3000 * FT_LB).toBeCloseTo(4067.454, 3);
     // 300 ft·lb = 406.7 N·m lies in the band (40–700 N·m); 3000 N·m and 30000 ft·lb do not.
-    expect(sign(lug("3000", "ftlb")).issues?.torque).toBe(
-      "Maker's torque (ft·lb): 3000 ft·lb (4067.5 N·m) is outside what lug nuts are torqued to, 29.6 to 516.2 ft·lb (40 to 700 N·m) " +
-        "(common practice, no source): a typo or a figure in the other unit? Did you mean 300 ft·lb? " +
-        "Type the maker's figure in the unit it is given in, e.g. 140 ft·lb.",
-    );
+    expect(sign(lug("3000", "ftlb")).issues?.torque).toBe(lugRefusal("3000 ft·lb (4067.5 N·m)", "300 ft·lb"));
     // 2500 N·m on ring bolts (5–70 N·m): no tenfold slip lands in the band, so no guess.
     expect(sign(ring("2500", "nm")).issues?.torque).toMatch(
       /^Maker's torque \(N·m\): 2500 N·m \(1843\.9 ft·lb\) is outside what beadlock ring bolts/,

@@ -3,7 +3,7 @@ import { cleanup, render, screen, waitFor } from "@testing-library/react";
 import userEvent from "@testing-library/user-event";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { invoiceFigures } from "@/lib/shop/payments/invoice";
-import { PAID_DEPOSIT } from "@/components/payments/paymentsTestUtil";
+import { DEPOSIT_PAID, quotePayments } from "@/components/payments/paymentsTestUtil";
 import { BALANCE_ALREADY_PAID } from "@/lib/shop/payments/labels";
 import { BalancePanel } from "./BalancePanel";
 
@@ -13,8 +13,7 @@ afterEach(() => {
 });
 
 const TOKEN = "A".repeat(43);
-const deposit = { kind: "deposit" as const, status: "paid" as const, amountCents: 107696 };
-const entry = PAID_DEPOSIT;
+const deposit = DEPOSIT_PAID;
 
 describe("BalancePanel", () => {
   it("offers the balance still owed (4,307.82 − 1,076.96 = 3,230.86) and sends the customer to the provider's page", async () => {
@@ -22,14 +21,7 @@ describe("BalancePanel", () => {
     vi.stubGlobal("fetch", fetch);
     const assign = vi.fn();
     vi.stubGlobal("location", { ...window.location, assign });
-    const payments = {
-      invoice: invoiceFigures(430782, [deposit], []),
-      invoiceOpen: true,
-      refundBlocked: null,
-      payments: [entry],
-      refunds: [],
-      timeZone: "America/Denver",
-    };
+    const payments = quotePayments(invoiceFigures(430782, [deposit], []));
     render(<BalancePanel token={TOKEN} payments={payments} justPaid={false} />);
     await userEvent.click(screen.getByRole("button", { name: "Pay the $3,230.86 balance" }));
     await waitFor(() => expect(assign).toHaveBeenCalledWith("http://127.0.0.1:2527/pay/cs_test_x"));
@@ -39,14 +31,7 @@ describe("BalancePanel", () => {
   it("back from a balance page closed because the balance was taken at the counter: says it is paid, never 'expired'", () => {
     // 1,076.96 + 3,230.86 = 4,307.82: nothing owed (by hand).
     const invoice = invoiceFigures(430782, [deposit, { kind: "balance", status: "paid", amountCents: 323086 }], []);
-    render(
-      <BalancePanel
-        token={TOKEN}
-        payments={{ invoice, invoiceOpen: true, refundBlocked: null, payments: [entry], refunds: [], timeZone: "America/Denver" }}
-        justPaid={false}
-        returned
-      />,
-    );
+    render(<BalancePanel token={TOKEN} payments={quotePayments(invoice)} justPaid={false} returned />);
     expect(screen.getByText(BALANCE_ALREADY_PAID)).toBeTruthy();
     expect(screen.queryByText(/expired/i)).toBeNull();
     expect(screen.queryByRole("button")).toBeNull();
@@ -54,27 +39,14 @@ describe("BalancePanel", () => {
 
   it("back from a balance page without paying while something is owed: no paid message, the payment is offered again", () => {
     const invoice = invoiceFigures(430782, [deposit], []);
-    render(
-      <BalancePanel
-        token={TOKEN}
-        payments={{ invoice, invoiceOpen: true, refundBlocked: null, payments: [entry], refunds: [], timeZone: "America/Denver" }}
-        justPaid={false}
-        returned
-      />,
-    );
+    render(<BalancePanel token={TOKEN} payments={quotePayments(invoice)} justPaid={false} returned />);
     expect(screen.queryByText(BALANCE_ALREADY_PAID)).toBeNull();
     expect(screen.getByRole("button", { name: "Pay the $3,230.86 balance" })).toBeTruthy();
   });
 
   it("a paid invoice says Paid and offers no payment", () => {
     const invoice = invoiceFigures(430782, [deposit, { kind: "balance", status: "paid", amountCents: 323086 }], []);
-    render(
-      <BalancePanel
-        token={TOKEN}
-        payments={{ invoice, invoiceOpen: true, refundBlocked: null, payments: [entry], refunds: [], timeZone: "America/Denver" }}
-        justPaid
-      />,
-    );
+    render(<BalancePanel token={TOKEN} payments={quotePayments(invoice)} justPaid />);
     expect(screen.getByTestId("invoice-status").textContent).toBe("Paid");
     expect(screen.queryByRole("button")).toBeNull();
     expect(screen.queryByText(/waiting for its confirmation/)).toBeNull();
