@@ -2,14 +2,21 @@ import { formatLength } from "@/lib/fitment";
 
 /**
  * "How this is predicted", beside every predictions table (vehicle page and workspace): the
- * model of lib/fitment/clearance.ts and its limits in plain words. `axisInboardMm` is the steering
+ * model of lib/fitment/clearance.ts and its limits in plain words, the axis's distance in the caller's units. `axisInboardMm` is the steering
  * axis the full-lock points turned about, when the caller placed it from the vehicle.
  */
-export function PredictionNote({ axisInboardMm }: { axisInboardMm?: number | null }) {
+export function PredictionNote({
+  axisInboardMm,
+  len = (mm: number) => formatLength(mm, { unit: "mm" }),
+}: {
+  axisInboardMm?: number | null;
+  /** How the axis's distance is written (the reader's units); millimetres when not given. */
+  len?: (mm: number) => string;
+}) {
   const axis =
     axisInboardMm === undefined || axisInboardMm === null
       ? "through the centre line of the tire each point was measured with (no kingpin inclination or scrub assumed)"
-      : `${formatLength(axisInboardMm, { unit: "mm" })} inboard of the hub face at the wheel centre — from the vehicle's kingpin inclination, with zero scrub assumed on the current setup`;
+      : `${len(axisInboardMm)} inboard of the hub face at the wheel centre — from the vehicle's kingpin inclination, with zero scrub assumed on the current setup`;
   return (
     <details className="mt-2 rounded-lg bg-basalt-50 p-3 text-sm" data-testid="prediction-note">
       <summary className="cursor-pointer font-semibold">How this is predicted</summary>

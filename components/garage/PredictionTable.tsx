@@ -18,6 +18,7 @@ export function PredictionTable({
   caption,
   testId,
   axisInboardMm,
+  noteLen,
 }: {
   points: readonly Pick<VehicleClearance, "id" | "label" | "direction">[];
   predictions: readonly ClearancePrediction[];
@@ -26,6 +27,8 @@ export function PredictionTable({
   caption: string;
   testId: string;
   axisInboardMm?: number | null;
+  /** How the note writes the axis's distance (one unit, the reader's); millimetres when not given. */
+  noteLen?: (mm: number) => string;
 }) {
   return (
     <div>
@@ -71,7 +74,7 @@ export function PredictionTable({
           </tbody>
         </table>
       </div>
-      <PredictionNote axisInboardMm={axisInboardMm} />
+      <PredictionNote axisInboardMm={axisInboardMm} len={noteLen} />
     </div>
   );
 }

@@ -2,7 +2,7 @@
 import { cleanup, render, screen, within } from "@testing-library/react";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { PlannedPanel } from "@/app/(garage)/garage/[id]/PlannedPanel";
-import { type DisplayPrefs, formatLen } from "@/lib/comparisons/format";
+import { type DisplayPrefs, PREFS_STORAGE_KEY, formatLen } from "@/lib/comparisons/format";
 import { DEFAULT_INPUT } from "@/lib/comparisons/model";
 import { formatLength } from "@/lib/fitment";
 import { predictPoints, steeringAxisOf } from "@/lib/garage/predict";
@@ -11,7 +11,10 @@ import type { WorkspaceVehicle } from "@/lib/garage/types";
 import GaragePanel from "./GaragePanel";
 
 vi.mock("next/link", () => import("@/tests/support/nextLink"));
-afterEach(cleanup);
+afterEach(() => {
+  cleanup();
+  window.localStorage.clear();
+});
 
 // An invented vehicle with 9° of kingpin inclination recorded and one point measured at full lock.
 const metric: DisplayPrefs = { units: "metric", lengths: "decimal" };
@@ -50,6 +53,8 @@ describe("full-lock predictions: the workspace's garage panel and the vehicle pa
         onUseVehicle={() => {}}
       />,
     );
+    // The vehicle page reads the reader's stored Units choice: the same metric one the workspace is given.
+    window.localStorage.setItem(PREFS_STORAGE_KEY, JSON.stringify(metric));
     render(<PlannedPanel detail={detail} initialPlanned={planned} />);
     // The engine's own figure with the vehicle's axis (lib/fitment/clearance.ts), to the mm.
     const expected = predictPoints([swayBar], planned, 12.7, wsVehicle)[0]!.predictedMm;

@@ -10,7 +10,9 @@ import { buttonClass } from "@/components/ui/Button";
 import { Card } from "@/components/ui/Card";
 import { TextField } from "@/components/ui/TextField";
 import { DEFAULT_CLEARANCE_MARGIN_MM, compareSetups } from "@/lib/fitment";
-import { bothUnits, marginText, signedMm } from "@/lib/garage/format";
+import { bothUnits, marginText, signedLen } from "@/lib/garage/format";
+import { useDisplayPrefs } from "@/components/comparison/useDisplayPrefs";
+import { formatLen } from "@/lib/comparisons/format";
 import { vehicleWorkspaceUrl } from "@/lib/garage/links";
 import { setupQuery, urlNumber } from "@/lib/setup/url";
 import type { VehicleDetail } from "@/lib/garage/types";
@@ -39,6 +41,10 @@ export function PlannedPanel({
   loadProfile?: LoadProfile | null;
 }) {
   const { vehicle: v, clearances } = detail;
+  // The page's Units switch (on the placard card): the changes and predictions follow it.
+  const [prefs] = useDisplayPrefs();
+  const len = (mm: number) => bothUnits(mm, prefs);
+  const signed = (mm: number) => signedLen(mm, prefs);
   const form = useForm<PlannedForm>({
     resolver: zodResolver(plannedFormSchema) as never,
     mode: "onChange",
@@ -92,10 +98,10 @@ export function PlannedPanel({
             <>
               <dl className="grid grid-cols-2 gap-3 text-sm sm:grid-cols-4">
                 {[
-                  ["Diameter", signedMm(result.cmp.diameterChangeMm)],
-                  ["Radius (upward)", signedMm(result.cmp.groundClearanceChangeMm)],
-                  ["Inner clearance", signedMm(result.cmp.innerClearanceChangeMm)],
-                  ["Poke", signedMm(result.cmp.outerPokeChangeMm)],
+                  ["Diameter", signed(result.cmp.diameterChangeMm)],
+                  ["Radius (upward)", signed(result.cmp.groundClearanceChangeMm)],
+                  ["Inner clearance", signed(result.cmp.innerClearanceChangeMm)],
+                  ["Poke", signed(result.cmp.outerPokeChangeMm)],
                 ].map(([k, val]) => (
                   <div key={k} className="rounded-lg bg-dune-100 p-2">
                     <dt className="text-xs text-basalt-600">{k}</dt>
@@ -109,8 +115,9 @@ export function PlannedPanel({
                 <PredictionTable
                   points={clearances}
                   predictions={result.predictions}
-                  len={bothUnits}
-                  signed={signedMm}
+                  len={len}
+                  signed={signed}
+                  noteLen={(mm) => formatLen(mm, prefs, { decimals: prefs.units === "metric" ? 1 : undefined })}
                   caption="Predicted clearance at each measured point"
                   testId="predictions"
                   axisInboardMm={result.axis}

@@ -10,7 +10,8 @@ import { Card } from "@/components/ui/Card";
 import { MountWhenNear } from "@/components/ui/MountWhenNear";
 import { api } from "@/lib/platform/client/api";
 import { queryKeys } from "@/lib/platform/query/keys";
-import { formatBoltPattern, formatLength, parseBoltPattern, setupGeometry } from "@/lib/fitment";
+import { useDisplayPrefs } from "@/components/comparison/useDisplayPrefs";
+import { formatBoltPattern, parseBoltPattern, setupGeometry } from "@/lib/fitment";
 import { bothUnits, setupLine } from "@/lib/garage/format";
 import type { VehicleDetail } from "@/lib/garage/types";
 import { CLEARANCE_DIRECTION_LABEL, FRONT_SUSPENSION_LABEL, SUSPENSION_STATE_LABEL } from "@/lib/garage/schema";
@@ -34,6 +35,9 @@ export function VehicleView({ initial, initialPlanned }: { initial: VehicleDetai
   });
   const { vehicle: v, clearances, photos } = q.data;
   const loadProfile = useLoadProfile(id).data?.profile ?? null;
+  // The Units switch sits on the placard card below; every length on the page follows it.
+  const [prefs] = useDisplayPrefs();
+  const len = (mm: number) => bothUnits(mm, prefs);
   const [confirming, setConfirming] = useState(false);
   const del = useMutation({
     mutationFn: () => api(`/api/vehicles/${id}`, { method: "DELETE" }),
@@ -90,18 +94,15 @@ export function VehicleView({ initial, initialPlanned }: { initial: VehicleDetai
           <dl className="mt-2">
             {row("Front suspension", FRONT_SUSPENSION_LABEL[v.frontSuspension])}
             {row("Bolt pattern", `${formatBoltPattern(bp, "in")} in = ${formatBoltPattern(bp, "mm")} mm`)}
-            {row("Hub bore", v.hubBoreMm === null ? null : formatLength(v.hubBoreMm, { unit: "mm" }))}
-            {row("Lift height", v.liftHeightMm === null ? null : bothUnits(v.liftHeightMm))}
+            {row("Hub bore", v.hubBoreMm === null ? null : len(v.hubBoreMm))}
+            {row("Lift height", v.liftHeightMm === null ? null : len(v.liftHeightMm))}
             {row("Kingpin inclination", v.kingpinInclinationDeg === null ? null : `${v.kingpinInclinationDeg}°`)}
             {row("Axle ratio", v.axleRatio === null ? null : v.axleRatio.toFixed(2))}
             {row("Top-gear ratio", v.transmissionRatio === null ? null : v.transmissionRatio.toFixed(2))}
             {row("Stock setup", setupLine(v.stockSetup))}
             {row("Current setup", setupLine(v.currentSetup))}
-            {row("Current tire diameter", bothUnits(current.overallDiameterMm))}
-            {row(
-              "Current reach inboard / outboard of the hub face",
-              `${formatLength(current.innerSwingMm, { unit: "mm" })} / ${formatLength(current.outerSwingMm, { unit: "mm" })}`,
-            )}
+            {row("Current tire diameter", len(current.overallDiameterMm))}
+            {row("Current reach inboard / outboard of the hub face", `${len(current.innerSwingMm)} / ${len(current.outerSwingMm)}`)}
           </dl>
           {v.notes && <p className="mt-3 whitespace-pre-line text-sm text-basalt-700">{v.notes}</p>}
         </Card>
@@ -130,8 +131,8 @@ export function VehicleView({ initial, initialPlanned }: { initial: VehicleDetai
                   <div>
                     <p className="font-semibold">{c.label}</p>
                     <p className="text-sm text-basalt-600">
-                      {CLEARANCE_DIRECTION_LABEL[c.direction]} · {SUSPENSION_STATE_LABEL[c.suspensionState]} · {bothUnits(c.distanceMm)}{" "}
-                      (entered as {c.distanceText})
+                      {CLEARANCE_DIRECTION_LABEL[c.direction]} · {SUSPENSION_STATE_LABEL[c.suspensionState]} · {len(c.distanceMm)} (entered
+                      as {c.distanceText})
                     </p>
                     <p className="text-xs text-basalt-500">Measured with {setupLine(c.measuredSetup)}</p>
                   </div>
