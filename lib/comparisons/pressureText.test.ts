@@ -39,8 +39,11 @@ describe("engine messages in the units the fields are labelled in", () => {
       "and 3,900 lb (1,769 kg) is above the maximum load of 265/70R17 113T, 2,305 lb (1,045.5 kg) at 36.3 psi (250 kPa); 1,874 lb (850 kg)",
     );
   });
-  it("leaves the metric display and figures already given in both units alone", () => {
-    expect(messageInUnits(M, METRIC)).toBe(M);
+  it("groups the metric display's loads by thousands as the imperial one does, and leaves figures already given in both units alone", () => {
+    // Only the grouping changes: the engine's kg figures, decimals and pressures as printed (common practice, no source).
+    expect(messageInUnits(M, METRIC)).toBe(
+      "and 1,769 kg is above the maximum load of 265/70R17 113T, 1,045.5 kg at 250 kPa (36.3 psi); 850 kg",
+    );
     expect(messageInUnits("3,527 lb (1,600 kg) at 50 psi", IMPERIAL)).toBe("3,527 lb (1,600 kg) at 50 psi");
     expect(messageInUnits("1 kgf·m", IMPERIAL)).toBe("1 kgf·m");
   });

@@ -40,20 +40,22 @@ const ENGINE_LOAD = /(?<![\d.,])(\d+)(?:\.(\d+))? kg\b/g;
 
 /**
  * An engine message in the chosen units, as the fields beside it are labelled: pressures in that
- * unit's order ({@link pressuresInOrder}) and, in the imperial display, each load in lb first with
- * the engine's kg beside it (1 lb = 0.45359237 kg exactly, NIST SP 811 B.8). The lb is the kg
- * figure as printed, converted, so the two agree as shown; the metric display is unchanged.
+ * unit's order ({@link pressuresInOrder}) and each load grouped by thousands as every other figure
+ * of the panel ("1,769 kg"): in the imperial display in lb first with the engine's kg beside it
+ * (1 lb = 0.45359237 kg exactly, NIST SP 811 B.8), the lb being the kg figure as printed,
+ * converted, so the two agree as shown; in the metric display the engine's kg, its decimals kept.
  *
  * @example
  * messageInUnits("1360.8 kg is above 1045.5 kg at 250 kPa (36.3 psi)", { units: "imperial", lengths: "decimal" });
  * // "3,000 lb (1,360.8 kg) is above 2,305 lb (1,045.5 kg) at 36.3 psi (250 kPa)"
+ * messageInUnits("1360.8 kg is above 1045.5 kg at 250 kPa (36.3 psi)", { units: "metric", lengths: "decimal" });
+ * // "1,360.8 kg is above 1,045.5 kg at 250 kPa (36.3 psi)"
  */
 export function messageInUnits(text: string, prefs: DisplayPrefs): string {
-  const t = pressuresInOrder(text, prefs);
-  if (prefs.units === "metric") return t;
-  return t.replace(ENGINE_LOAD, (_, whole: string, frac: string | undefined) => {
+  return pressuresInOrder(text, prefs).replace(ENGINE_LOAD, (_, whole: string, frac: string | undefined) => {
     const kg = Number(frac === undefined ? whole : `${whole}.${frac}`);
-    return `${formatNumber(kgToLb(kg))} lb (${formatNumber(kg, frac?.length ?? 0)} kg)`;
+    const kgText = `${formatNumber(kg, frac?.length ?? 0)} kg`;
+    return prefs.units === "metric" ? kgText : `${formatNumber(kgToLb(kg))} lb (${kgText})`;
   });
 }
 

@@ -44,9 +44,9 @@ describe("checkLoadProfile", () => {
       "Rear axle weight, scale ticket (lb): one tire carries half the axle, and 3,900 lb (1,769 kg) is above the maximum load of " +
         "265/70R17 113T, 2,305 lb (1,045.5 kg) at 36.3 psi (250 kPa) (÷ 1.10 on a light truck); choose a tire with a higher load index or load range.",
     );
-    // The metric screen keeps the engine's kg.
+    // The metric screen keeps the engine's kg, grouped by thousands as the imperial screen groups them.
     expect(checkLoadProfile({ ...FULL, units: "metric", rearAxleKg: lbToKg(7800) }, CURRENT).rearAxleKg).toMatch(
-      /^Rear axle weight, scale ticket \(kg\): one tire carries half the axle, and 1769 kg is above the maximum load of 265\/70R17 113T, 1045\.5 kg at 250 kPa/,
+      /^Rear axle weight, scale ticket \(kg\): one tire carries half the axle, and 1,769 kg is above the maximum load of 265\/70R17 113T, 1,045\.5 kg at 250 kPa/,
     );
   });
 

@@ -63,7 +63,7 @@ for (const width of [1280, 390]) {
       await page.getByLabel("Rear axle load (kg)").fill("3400");
       await expect
         .poll(() =>
-          page.getByText(/Rear axle load \(kg\): one tire carries half the axle, and 1700 kg is above the maximum load/).isVisible(),
+          page.getByText(/Rear axle load \(kg\): one tire carries half the axle, and 1,700 kg is above the maximum load/).isVisible(),
         )
         .toBe(true);
       await expect.poll(() => page.getByTestId("set-front").count()).toBe(0);

@@ -76,7 +76,7 @@ describe("LoadPressurePanel", () => {
     expect(field.getAttribute("aria-invalid")).toBe("true");
     const described = (field.getAttribute("aria-describedby") ?? "").split(" ").map((id) => document.getElementById(id)?.textContent ?? "");
     expect(described.join(" ")).toMatch(
-      /Rear axle load \(kg\): one tire carries half the axle, and 1700 kg is above the maximum load of 37x12\.50R17LT 124Q LRD, 1600 kg/,
+      /Rear axle load \(kg\): one tire carries half the axle, and 1,700 kg is above the maximum load of 37x12\.50R17LT 124Q LRD, 1,600 kg/,
     );
     expect(screen.queryByTestId("set-front")).toBeNull();
     expect(screen.getByTestId("load-status").textContent).toMatch(/Nothing is computed/);
