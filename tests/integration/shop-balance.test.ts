@@ -590,23 +590,31 @@ describe("a refunded deposit on the invoice and on the quote", () => {
     expect(view.invoice).toMatchObject({ refundedCents: 107696, depositHeldCents: 0, balanceDueCents: 430782, refundableCents: 0 });
   });
 
-  it("the confirmation that declines the quote mails the customer once: quote closed, deposit refunded; a replay sends no second", async () => {
+  it("the confirmation that declines the quote mails the customer once: quote closed, deposit refunded, the last refund receipted in it; a replay sends no second", async () => {
     const q = await cancelledQuote();
     const number = (await db("quotes").where({ id: q.id }).first()).number;
     const closed = async () => (await mailsTo(q.email)).filter((m) => m.subject.startsWith("Closed:"));
+    const receipts = async () => (await mailsTo(q.email)).filter((m) => m.subject.startsWith("Refund:"));
     await refunded(q.id, "125.12");
     expect(await closed()).toHaveLength(0); // a part refund leaves the quote open
+    expect((await receipts()).map((m) => m.subject)).toEqual([`Refund: $125.12 of your deposit for quote Q-${number} at Shop A`]);
+    const mailsBefore = (await mailsTo(q.email)).length;
     await refunded(q.id, "951.84");
     expect((await db("quotes").where({ id: q.id }).first()).status).toBe("declined");
+    // One mail for the last refund: the closing mail, no separate receipt beside it.
+    expect((await mailsTo(q.email)).length).toBe(mailsBefore + 1);
+    expect(await receipts()).toHaveLength(1);
     const [mail, ...more] = await closed();
     expect(more).toHaveLength(0);
     // 125.12 + 951.84 = 1,076.96, the whole deposit (by hand).
     expect(mail!.subject).toBe(`Closed: quote Q-${number} at Shop A, your deposit of $1,076.96 refunded`);
+    expect(mail!.text).toContain(`Shop A has refunded $951.84 of your deposit for quote Q-${number} (`);
     expect(mail!.text).toContain(`Your deposit of $1,076.96 for quote Q-${number} (`);
     expect(mail!.text).toContain("call Shop A on 555-0100 for a new quote.");
 
     await replayLastEvent("already_refunded");
     expect(await closed()).toHaveLength(1);
+    expect((await mailsTo(q.email)).length).toBe(mailsBefore + 1);
   });
 
   it("a full refund still waiting for the provider already stops the work being marked installed; nothing written", async () => {

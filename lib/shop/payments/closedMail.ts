@@ -1,27 +1,34 @@
 /**
  * The mail to the customer when the provider confirms the last refund of their deposit and the
- * quote is closed for it (declined, its stock released). Pure composition; the webhook's
- * transaction queues it once, with the decline.
+ * quote is closed for it (declined, its stock released). It is that last refund's receipt as well
+ * (the amount refunded now and when, then the whole deposit refunded), so the customer gets one
+ * mail, not a receipt and a closing notice at the same moment. Pure composition; the webhook's
+ * transaction queues it once, with the decline, instead of the refund's receipt.
  */
 import type { OutgoingMail } from "@/lib/platform/mail";
 import { escapeHtml } from "@/lib/platform/text";
+import { formatInstant } from "@/lib/shop/bookings/zoned";
 import { formatUsd } from "@/lib/shop/quotes/money";
 import type { ReceiptFacts } from "./receiptMail";
 
-export interface ClosedOnRefundFacts extends Pick<ReceiptFacts, "customer" | "shop" | "quoteNumber" | "vehicle"> {
+export interface ClosedOnRefundFacts extends Pick<ReceiptFacts, "customer" | "shop" | "quoteNumber" | "vehicle" | "at" | "timeZone"> {
   /** The whole deposit given back (Σ refunds the provider confirmed). */
   refundedCents: number;
+  /** The last refund, the one that closed the quote (its receipt is this mail). */
+  refundedNowCents: number;
 }
 
 /**
  * @example
- * closedOnRefundMail({ ...facts, quoteNumber: 1003, refundedCents: 107696 }).subject;
+ * closedOnRefundMail({ ...facts, quoteNumber: 1003, refundedCents: 107696, refundedNowCents: 57696 }).subject;
  * // "Closed: quote Q-1003 at Shop A, your deposit of $1,076.96 refunded"
  */
 export function closedOnRefundMail(f: ClosedOnRefundFacts): OutgoingMail {
   const amount = formatUsd(f.refundedCents);
+  const when = formatInstant(f.at, f.timeZone);
   const ask = f.shop.phone ? `call ${f.shop.name} on ${f.shop.phone}` : `ask ${f.shop.name}`;
   const lines = [
+    `${f.shop.name} has refunded ${formatUsd(f.refundedNowCents)} of your deposit for quote Q-${f.quoteNumber} (${f.vehicle}) on ${when}.`,
     `Your deposit of ${amount} for quote Q-${f.quoteNumber} (${f.vehicle}) has been refunded in full, so the quote is now closed.`,
     "The refund goes back to the card you paid with. Nothing is booked or held for this quote any more.",
     `To have the work done after all, ${ask} for a new quote.`,

@@ -307,8 +307,9 @@ export async function applyRefundUpdate(
   if (row.status === "failed") return { outcome: "ignored", quoteId: row.quote_id };
   await trx("payment_refunds").where({ id: row.id }).update({ status: "succeeded", succeeded_at: trx.fn.now(), provider_refund_id: r.id });
   const quote = (await trx<QuoteRow>("quotes").where({ id: row.quote_id }).forUpdate().first()) as QuoteRow;
-  await queueReceipt(trx, quote, { kind: "refund" }, row.amount_cents, null);
-  await endWhenRefundedInFull(trx, quote, row, r.id);
+  // The refund that closes the quote is receipted by the closing mail; any other gets its own receipt.
+  const closed = await endWhenRefundedInFull(trx, quote, row, r.id);
+  if (!closed) await queueReceipt(trx, quote, { kind: "refund" }, row.amount_cents, null);
   return { outcome: "refund_succeeded", quoteId: row.quote_id };
 }
 
@@ -330,11 +331,17 @@ async function markRefundFailed(trx: Knex.Transaction, row: PaymentRefundRow, r:
  * it: the quote is declined (its held stock released, no longer counted as paid, nothing left to
  * install or book; a new quote is needed). The history names the provider, which confirmed it,
  * and the owner who asked; the customer is mailed once that the quote is closed and the deposit
- * refunded. A part refund leaves the quote as it is: the shop kept the rest.
+ * refunded, that mail carrying the last refund's receipt. A part refund leaves the quote as it is:
+ * the shop kept the rest. True when the quote was closed here (the caller sends no receipt then).
  */
-async function endWhenRefundedInFull(trx: Knex.Transaction, quote: QuoteRow, last: PaymentRefundRow, providerRefundId: string) {
+async function endWhenRefundedInFull(
+  trx: Knex.Transaction,
+  quote: QuoteRow,
+  last: PaymentRefundRow,
+  providerRefundId: string,
+): Promise<boolean> {
   const { figures } = await ledger(trx, quote);
-  if (figures.depositPaidCents === 0 || figures.depositHeldCents > 0) return;
+  if (figures.depositPaidCents === 0 || figures.depositHeldCents > 0) return false;
   const declined = await declineOnDepositRefunded(
     trx,
     quote,
@@ -342,13 +349,21 @@ async function endWhenRefundedInFull(trx: Knex.Transaction, quote: QuoteRow, las
     `deposit refunded in full (last refund ${providerRefundId}, asked by ${last.requested_by})`,
   );
   // Only the move itself tells the customer: a replayed or later event finds the quote declined already and sends nothing.
-  if (!declined) return;
+  if (!declined) return false;
   const parties = await quoteMailParties(trx, quote);
-  if (!parties) return;
+  if (!parties) return true;
   await queueMailIn(
     trx,
-    closedOnRefundMail({ ...parties, quoteNumber: quote.number, vehicle: quote.vehicle_description, refundedCents: figures.refundedCents }),
+    closedOnRefundMail({
+      ...parties,
+      quoteNumber: quote.number,
+      vehicle: quote.vehicle_description,
+      at: new Date(),
+      refundedCents: figures.refundedCents,
+      refundedNowCents: last.amount_cents,
+    }),
   );
+  return true;
 }
 
 /** These queries on the app's database handle, for pages and route handlers. */
