@@ -5,10 +5,9 @@ import { bindAppDb } from "@/lib/platform/db/bind";
 import { ConflictError, InvalidError, NotFoundError, UnknownReferenceError } from "@/lib/platform/errors";
 import { log } from "@/lib/platform/log";
 import { appOrigin } from "@/lib/platform/mail";
-import { queueMailIn } from "@/lib/platform/mail/transactional";
 import { shopTimeZone } from "@/lib/shop/bookings/timeZoneQueries";
 import { queueShopNotice } from "@/lib/shop/notices/noticeQueries";
-import { quoteMailParties } from "@/lib/shop/quoteMailQueries";
+import { queueQuoteMail } from "@/lib/shop/quoteMailQueries";
 import { type Actor, type QuoteScope, declineOnDepositRefunded, findByToken, getQuote } from "@/lib/shop/quotes/queries";
 import { type QuotePayments, paymentEntryDto, refundEntryDto } from "./api";
 import type { CounterMethod } from "./labels";
@@ -87,20 +86,7 @@ async function queueReceipt(
   amountCents: number,
   outstandingCents: number | null,
 ): Promise<void> {
-  const parties = await quoteMailParties(trx, quote);
-  if (!parties) return;
-  await queueMailIn(
-    trx,
-    receiptMail({
-      ...parties,
-      quoteNumber: quote.number,
-      vehicle: quote.vehicle_description,
-      what,
-      amountCents,
-      at: new Date(),
-      outstandingCents,
-    }),
-  );
+  await queueQuoteMail(trx, quote, (head) => receiptMail({ ...head, what, amountCents, at: new Date(), outstandingCents }));
 }
 
 /**
@@ -350,18 +336,8 @@ async function endWhenRefundedInFull(
   );
   // Only the move itself tells the customer: a replayed or later event finds the quote declined already and sends nothing.
   if (!declined) return false;
-  const parties = await quoteMailParties(trx, quote);
-  if (!parties) return true;
-  await queueMailIn(
-    trx,
-    closedOnRefundMail({
-      ...parties,
-      quoteNumber: quote.number,
-      vehicle: quote.vehicle_description,
-      at: new Date(),
-      refundedCents: figures.refundedCents,
-      refundedNowCents: last.amount_cents,
-    }),
+  await queueQuoteMail(trx, quote, (head) =>
+    closedOnRefundMail({ ...head, at: new Date(), refundedCents: figures.refundedCents, refundedNowCents: last.amount_cents }),
   );
   return true;
 }

@@ -26,12 +26,16 @@ describe("plan a setup: the margin's messages name it as labelled", () => {
 describe("plan a setup: the predictions follow the page's Units switch", () => {
   afterEach(() => window.localStorage.clear());
   const withPoint = detailOf(HAULER, [point("rail", "inboard", 40)]);
+  /** The panel as drawn after the page's Units switch was last left on `units`, lengths as `lengths`. */
+  const renderIn = (units: "imperial" | "metric", lengths: "decimal" | "fraction", detail = withPoint) => {
+    window.localStorage.setItem(PREFS_STORAGE_KEY, JSON.stringify({ units, lengths }));
+    render(<PlannedPanel detail={detail} initialPlanned={PLAN} />);
+  };
   const measuredCell = () => within(screen.getByTestId("predictions")).getAllByRole("row")[1]!.querySelectorAll("td")[1]!.textContent;
 
   // 40 mm / 25.4 = 1.5748 in (1 in = 25.4 mm exactly, NIST SP 811): 1.57 in; 25.2 sixteenths → 1-9/16 in.
   it("inch mode shows the measured gap in inches first, the millimetres in brackets", () => {
-    window.localStorage.setItem(PREFS_STORAGE_KEY, JSON.stringify({ units: "imperial", lengths: "decimal" }));
-    render(<PlannedPanel detail={withPoint} initialPlanned={PLAN} />);
+    renderIn("imperial", "decimal");
     expect(measuredCell()).toBe("1.57 in (40 mm)");
     for (const tile of ["Diameter", "Radius (upward)", "Inner clearance", "Poke"]) {
       expect(screen.getByText(tile).nextElementSibling!.textContent, tile).toMatch(/ in$/);
@@ -39,15 +43,16 @@ describe("plan a setup: the predictions follow the page's Units switch", () => {
   });
 
   it("inch mode writes the steering axis in the prediction note in inches", () => {
-    window.localStorage.setItem(PREFS_STORAGE_KEY, JSON.stringify({ units: "imperial", lengths: "decimal" }));
-    const kpi = detailOf({ ...HAULER, kingpinInclinationDeg: 9 }, [point("rail", "inboard", 40, { suspensionState: "full-lock" })]);
-    render(<PlannedPanel detail={kpi} initialPlanned={PLAN} />);
+    renderIn(
+      "imperial",
+      "decimal",
+      detailOf({ ...HAULER, kingpinInclinationDeg: 9 }, [point("rail", "inboard", 40, { suspensionState: "full-lock" })]),
+    );
     expect(screen.getByTestId("prediction-note").textContent).toMatch(/[\d.]+ in inboard of the hub face/);
   });
 
   it("metric mode shows millimetres first, the inches in brackets", () => {
-    window.localStorage.setItem(PREFS_STORAGE_KEY, JSON.stringify({ units: "metric", lengths: "fraction" }));
-    render(<PlannedPanel detail={withPoint} initialPlanned={PLAN} />);
+    renderIn("metric", "fraction");
     expect(measuredCell()).toBe("40 mm (1-9/16 in)");
     for (const tile of ["Diameter", "Radius (upward)", "Inner clearance", "Poke"]) {
       expect(screen.getByText(tile).nextElementSibling!.textContent, tile).toMatch(/ mm$/);
