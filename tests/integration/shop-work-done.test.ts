@@ -143,6 +143,21 @@ describe("marking installed on the quote page while a work order is open", () =>
   });
 });
 
+describe("the calendar's ways into a job", () => {
+  it("links the quote only for its author (owners: every quote), and every job's work order once it is opened", async () => {
+    const { quoteId, booking } = await bookedJob();
+    const from = wallTime(new Date(booking.starts_at), "America/Denver").date;
+    const shown = async (quotesOf?: string) =>
+      (await calendar(db, SHOP_A, { from, days: 1, quotesOf })).bookings.find((b) => b.id === booking.id)!;
+    expect(await shown(U.staffA.id)).toMatchObject({ quoteOpen: true, workOrderId: null });
+    expect(await shown(undefined)).toMatchObject({ quoteOpen: true });
+    // Another member of staff (an invented id: the calendar only compares it with the quote's author).
+    expect(await shown("0a000000-0000-4000-8000-0000000000aa")).toMatchObject({ quoteOpen: false, workOrderId: null });
+    const workOrderId = await openFor(quoteId);
+    expect(await shown("0a000000-0000-4000-8000-0000000000aa")).toMatchObject({ quoteOpen: false, workOrderId });
+  });
+});
+
 describe("the install's bay time once the work is done", () => {
   it("a booking not started yet is cancelled as of the moment the quote was marked installed; the slot search and calendar free it", async () => {
     const { quoteId, email, booking } = await bookedJob();

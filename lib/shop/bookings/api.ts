@@ -143,6 +143,10 @@ export interface CalendarBooking extends Booking {
   quoteNumber: number;
   customerName: string;
   vehicleDescription: string;
+  /** The job's work order, once one is opened: any of the shop's staff may open it. */
+  workOrderId: string | null;
+  /** Whether the caller may open the quote (owners every quote, staff the ones they wrote). */
+  quoteOpen: boolean;
 }
 
 /** GET /api/shop/bookings: a day or a week of the shop's bays. */

@@ -41,6 +41,8 @@ export const calendarWith = (endsAt: string, bays: BayStretch[]): CalendarAnswer
       quoteNumber: 1003,
       customerName: "Ilse Varga-Pond",
       vehicleDescription: "Half-ton pickup",
+      workOrderId: null,
+      quoteOpen: true,
       bays,
     },
   ],

@@ -772,8 +772,17 @@ export async function queueDueReminders(db: Knex, now = new Date()): Promise<num
 
 /* ---------------------------------------------------------------- the staff calendar */
 
-/** A day or a week of the shop's live bookings per bay, on the shop's clock. */
-export async function calendar(db: Knex, shopId: string, opts: { from?: string; days: number; now?: Date }): Promise<CalendarAnswer> {
+/**
+ * A day or a week of the shop's live bookings per bay, on the shop's clock. `quotesOf` is the
+ * staff member whose quotes the caller may open (quoteScopeOf's createdBy; none for an owner):
+ * the others' bookings still show, linked to their work order rather than to a quote that would
+ * answer "not found".
+ */
+export async function calendar(
+  db: Knex,
+  shopId: string,
+  opts: { from?: string; days: number; now?: Date; quotesOf?: string },
+): Promise<CalendarAnswer> {
   const schedule = await readSchedule(db, shopId);
   const from = opts.from ?? wallTime(opts.now ?? new Date(), schedule.timeZone).date;
   const start = zonedInstant(from, 0, schedule.timeZone);
@@ -781,14 +790,24 @@ export async function calendar(db: Knex, shopId: string, opts: { from?: string; 
   const rows = (await db("bookings as b")
     .join("quotes as q", "q.id", "b.quote_id")
     .join("customers as c", "c.id", "q.customer_id")
+    .leftJoin("work_orders as w", "w.quote_id", "q.id")
     .where({ "b.shop_id": shopId, "b.status": "booked" })
     .andWhere("b.starts_at", "<", end)
     .andWhere("b.ends_at", ">", start)
     .orderBy("b.starts_at")
-    .select("b.*", "q.number as quote_number", "q.vehicle_description", "c.name as customer_name")) as (BookingRow & {
+    .select(
+      "b.*",
+      "q.number as quote_number",
+      "q.vehicle_description",
+      "q.created_by as quote_created_by",
+      "c.name as customer_name",
+      "w.id as work_order_id",
+    )) as (BookingRow & {
     quote_number: number;
     vehicle_description: string;
+    quote_created_by: string | null;
     customer_name: string;
+    work_order_id: string | null;
   })[];
   const held = await bookedBays(
     db,
@@ -804,6 +823,8 @@ export async function calendar(db: Knex, shopId: string, opts: { from?: string; 
     quoteNumber: r.quote_number,
     customerName: r.customer_name,
     vehicleDescription: r.vehicle_description,
+    workOrderId: r.work_order_id,
+    quoteOpen: opts.quotesOf === undefined || r.quote_created_by === opts.quotesOf,
   }));
   return {
     timeZone: schedule.timeZone,

@@ -121,3 +121,10 @@ export function stepsFor(
 
 /** The wheel positions on a sheet. */
 export const positionsFor = (spare: boolean): readonly WheelPosition[] => WHEEL_POSITIONS.filter((p) => p !== "spare" || spare);
+
+/**
+ * Asked before a quote with no work order is marked installed: then nothing records the lug
+ * torque, the pressures or the bead seating, and the customer is mailed that the work is done.
+ */
+export const INSTALL_WITHOUT_SHEET =
+  "No work order was opened for this job, so no torque, pressure or bead-seating sign-off is on record, and the customer is told the work is done. Mark it installed anyway? (Cancel, then “Open the work order” to have each step signed.)";

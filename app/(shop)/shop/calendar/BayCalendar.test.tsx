@@ -121,6 +121,36 @@ describe("the staff calendar", () => {
     expect(booking().style.top).toBe("0%");
   });
 
+  it("a booking on a quote another staff member wrote: no dead quote link, its work order instead (made on first open)", async () => {
+    const sent = serveRefusal();
+    const user = userEvent.setup();
+    const others = { ...day, bookings: day.bookings.map((b) => ({ ...b, quoteOpen: false })) };
+    renderCalendar(others);
+    booking().focus();
+    await user.keyboard("{Enter}");
+    const panel = screen.getByRole("region", { name: "Selected booking" });
+    expect(within(panel).queryByRole("link", { name: /Open quote/ })).toBeNull();
+    expect(within(panel).getByText(/Quote Q-1003 was written by someone else at the counter/)).toBeTruthy();
+    await user.click(within(panel).getByRole("button", { name: "Open the work order" }));
+    await waitFor(() =>
+      expect(sent.find((r) => r.url === "/api/shop/work-orders")).toEqual({
+        url: "/api/shop/work-orders",
+        method: "POST",
+        body: { quoteId: "q1" },
+      }),
+    );
+  });
+
+  it("links the work order once the job has one", async () => {
+    const user = userEvent.setup();
+    renderCalendar({ ...day, bookings: day.bookings.map((b) => ({ ...b, workOrderId: "w1" })) });
+    booking().focus();
+    await user.keyboard("{Enter}");
+    const panel = screen.getByRole("region", { name: "Selected booking" });
+    expect(within(panel).getByRole("link", { name: "Open the work order" }).getAttribute("href")).toBe("/shop/work-orders/w1");
+    expect(within(panel).getByRole("link", { name: "Open quote Q-1003" })).toBeTruthy();
+  });
+
   it("after a move, says so and reloads the calendar from the server", async () => {
     const sent = serveRefusal(Promise.resolve(), false);
     const user = userEvent.setup();

@@ -2,6 +2,7 @@
 import Link from "next/link";
 import { useState } from "react";
 import { BookingSummary } from "@/components/bookings/BookingSummary";
+import { WorkOrderButton } from "@/components/bookings/WorkOrderButton";
 import { SlotPicker } from "@/components/bookings/SlotPicker";
 import { Alert } from "@/components/ui/Alert";
 import { Button, buttonClass } from "@/components/ui/Button";
@@ -49,11 +50,25 @@ export function SelectedBooking({
       </h2>
       <p className="text-sm text-basalt-700">Vehicle: {booking.vehicleDescription}</p>
       <BookingSummary booking={booking} showBays />
+      {!booking.quoteOpen && (
+        <p className="text-sm text-basalt-600">
+          Quote Q-{booking.quoteNumber} was written by someone else at the counter: it opens for them and the owner.
+        </p>
+      )}
       <div aria-live="polite">{error && <Alert tone="error">{error}</Alert>}</div>
       <div className="flex flex-wrap gap-2">
-        <Link className={buttonClass("primary")} href={`/shop/quotes/${booking.quoteId}`}>
-          Open quote Q-{booking.quoteNumber}
-        </Link>
+        {booking.quoteOpen && (
+          <Link className={buttonClass("primary")} href={`/shop/quotes/${booking.quoteId}`}>
+            Open quote Q-{booking.quoteNumber}
+          </Link>
+        )}
+        {(booking.kind === "install" || booking.workOrderId) && (
+          <WorkOrderButton
+            quoteId={booking.quoteId}
+            workOrderId={booking.workOrderId}
+            variant={booking.quoteOpen ? "secondary" : "primary"}
+          />
+        )}
         {!picking && (
           <Button type="button" variant="secondary" onClick={() => setPicking(true)}>
             Move…

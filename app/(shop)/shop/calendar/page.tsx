@@ -5,6 +5,7 @@ import { bookingQueries } from "@/lib/shop/bookings/queries";
 import { calendarQuerySchema } from "@/lib/shop/bookings/schema";
 import { wallTime } from "@/lib/shop/bookings/zoned";
 import { shopIdOf, SHOP_ANY } from "@/lib/shop/queries";
+import { quoteScopeOf } from "@/lib/shop/quotes/queries";
 import { BayCalendar } from "./BayCalendar";
 import { weekStart } from "./bayEvents";
 
@@ -17,9 +18,11 @@ export default async function CalendarPage({ searchParams }: { searchParams: Pro
   const query = parsed.success ? parsed.data : {};
   const days = query.days ?? 7;
   const shopId = shopIdOf(caller);
-  let data = await bookingQueries.calendar(shopId, { from: query.from, days });
+  const quotesOf = quoteScopeOf(caller).createdBy;
+  let data = await bookingQueries.calendar(shopId, { from: query.from, days, quotesOf });
   // The week view runs Sunday to Saturday: ask again from that Sunday when the range starts elsewhere.
-  if (days === 7 && weekStart(data.from) !== data.from) data = await bookingQueries.calendar(shopId, { from: weekStart(data.from), days });
+  if (days === 7 && weekStart(data.from) !== data.from)
+    data = await bookingQueries.calendar(shopId, { from: weekStart(data.from), days, quotesOf });
   return (
     <>
       <PageHeader

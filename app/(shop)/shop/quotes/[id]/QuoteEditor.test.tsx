@@ -7,6 +7,7 @@ import { summarize } from "@/lib/shop/quotes/fitment";
 import { renderWithQuery } from "@/app/(shop)/shop/shopTestUtil";
 import { router } from "@/tests/support/navigation";
 import { queryKeys } from "@/lib/platform/query/keys";
+import { INSTALL_WITHOUT_SHEET } from "@/lib/shop/workOrders/vocabulary";
 import { QuoteEditor } from "./QuoteEditor";
 import type { QuoteDetail as Detail } from "@/lib/shop/quotes/api";
 
@@ -269,35 +270,61 @@ describe("the quote editor's dates", () => {
 });
 
 describe("the quote editor's Mark installed", () => {
-  // This app's rule (common practice, no source): a job with a work order is finished on its signed sheet.
-  it("is not offered while the quote's work order is open: a link to the work order is, and nothing is sent", () => {
-    const calls = server(() => ({ status: 500, body: {} }));
+  /** A quote with its deposit paid whose job has a work order in `status`. */
+  const renderWithWorkOrder = (status: "in_bay" | "done") =>
     renderWithQuery(
       <QuoteEditor
         initial={detail({ status: "deposit_paid" })}
         labourRateCents={12500}
-        workOrder={{ id: "w0000000-0000-4000-8000-000000000001", status: "in_bay" }}
+        workOrder={{ id: "w0000000-0000-4000-8000-000000000001", status }}
       />,
       { retry: false },
     );
+  // This app's rule (common practice, no source): a job with a work order is finished on its signed sheet.
+  it("is not offered while the quote's work order is open: a link to the work order is, and nothing is sent", () => {
+    const calls = server(() => ({ status: 500, body: {} }));
+    renderWithWorkOrder("in_bay");
     expect(screen.queryByRole("button", { name: "Mark installed" })).toBeNull();
     const link = screen.getByRole("link", { name: "Finish the work order to mark installed" });
     expect(link.getAttribute("href")).toBe("/shop/work-orders/w0000000-0000-4000-8000-000000000001");
     expect(calls).toEqual([]);
   });
 
-  it("is offered for a quote with its deposit paid and no work order", async () => {
+  it("is offered for a quote with its deposit paid and no work order, once the counter confirms no sheet was signed", async () => {
     const calls = server(() => ({ status: 200, body: detail({ status: "installed" }) }));
+    const confirm = vi.spyOn(window, "confirm").mockReturnValue(true);
     const user = userEvent.setup();
     renderEditor(detail({ status: "deposit_paid" }));
     expect(screen.queryByRole("link", { name: "Finish the work order to mark installed" })).toBeNull();
     await user.click(screen.getByRole("button", { name: "Mark installed" }));
+    expect(confirm).toHaveBeenCalledWith(INSTALL_WITHOUT_SHEET);
     await waitFor(() => expect(screen.getByTestId("quote-status").textContent).toBe("Installed"));
     expect(calls.map((c) => [c.url, c.body])).toEqual([[`/api/shop/quotes/${ID}/status`, { to: "installed" }]]);
   });
 
+  it("without that confirmation nothing is sent and the quote stays deposit paid", async () => {
+    const calls = server(() => ({ status: 200, body: detail({ status: "installed" }) }));
+    vi.spyOn(window, "confirm").mockReturnValue(false);
+    const user = userEvent.setup();
+    renderEditor(detail({ status: "deposit_paid" }));
+    await user.click(screen.getByRole("button", { name: "Mark installed" }));
+    expect(calls).toEqual([]);
+    expect(screen.getByTestId("quote-status").textContent).toBe("Deposit paid");
+  });
+
+  it("asks nothing when the job's work order is done (its sheet is the record)", async () => {
+    const calls = server(() => ({ status: 200, body: detail({ status: "installed" }) }));
+    const confirm = vi.spyOn(window, "confirm");
+    const user = userEvent.setup();
+    renderWithWorkOrder("done");
+    await user.click(screen.getByRole("button", { name: "Mark installed" }));
+    await waitFor(() => expect(calls).toHaveLength(1));
+    expect(confirm).not.toHaveBeenCalled();
+  });
+
   it("re-renders the page's server panels at once (the released booking goes) and drops the cached bay time", async () => {
     server(() => ({ status: 200, body: detail({ status: "installed" }) }));
+    vi.spyOn(window, "confirm").mockReturnValue(true);
     const user = userEvent.setup();
     const client = new QueryClient();
     const invalidate = vi.spyOn(client, "invalidateQueries");
@@ -314,6 +341,7 @@ describe("the quote editor's Mark installed", () => {
 
   it("a refused move changes nothing on the page", async () => {
     server(() => ({ status: 409, body: { error: "A quote that is declined cannot become installed." } }));
+    vi.spyOn(window, "confirm").mockReturnValue(true);
     const user = userEvent.setup();
     renderEditor(detail({ status: "deposit_paid" }));
     await user.click(screen.getByRole("button", { name: "Mark installed" }));

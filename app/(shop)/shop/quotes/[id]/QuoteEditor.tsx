@@ -23,6 +23,7 @@ import { QuoteLinesTable } from "./QuoteLinesTable";
 import { QuoteTotalsCard } from "./QuoteTotalsCard";
 import type { QuoteDetail as Detail } from "@/lib/shop/quotes/api";
 import type { WorkOrderStatus } from "@/lib/platform/db/types";
+import { INSTALL_WITHOUT_SHEET } from "@/lib/shop/workOrders/vocabulary";
 
 const LEAVE = "This quote has changes that are not saved. Leave without saving them?";
 
@@ -187,7 +188,13 @@ export function QuoteEditor({
               </Link>
             )}
             {q.status === "deposit_paid" && !depositGivenBack && !workOrderOpen && (
-              <Button pending={move.isPending} onClick={() => move.mutate("installed")}>
+              <Button
+                pending={move.isPending}
+                onClick={() => {
+                  if (workOrder === null && !window.confirm(INSTALL_WITHOUT_SHEET)) return;
+                  move.mutate("installed");
+                }}
+              >
                 Mark installed
               </Button>
             )}
