@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { closeDatabases, rebuild, testDb } from "./support/db";
 import { ctx, req, sessionOf } from "./support/requests";
 import { SHOP_A, U, VEHICLE, item, seedShops } from "./support/shopFixture";
+import { canOpenQuote, quoteScopeOf } from "@/lib/shop/quotes/queries";
 
 const session = vi.hoisted(() => ({ current: null as unknown }));
 vi.mock("next-auth", () => ({ getServerSession: async () => session.current }));
@@ -118,6 +119,15 @@ describe("the quotes list (search, status, order, pages)", () => {
     const { body } = await list("?q=heron", U.staffA);
     expect(body.total).toBe(0);
     expect((await list("?q=heron", U.ownerA)).body.total).toBe(1);
+  });
+
+  it("says which quotes a caller may open, by the same rule, for the links to them (calendar, work order)", async () => {
+    const heron = (await list("?q=heron", U.ownerA)).body.quotes[0].id as string;
+    const scope = (u: { role: string; id: string }) => quoteScopeOf({ shopId: SHOP_A, role: u.role, userId: u.id });
+    expect(await canOpenQuote(db, scope(U.ownerA), heron)).toBe(true);
+    expect(await canOpenQuote(db, scope(U.staffA), heron)).toBe(false);
+    const { id: authorId } = await db("quotes").where({ id: heron }).first("created_by as id");
+    expect(await canOpenQuote(db, { shopId: SHOP_A, createdBy: authorId }, heron)).toBe(true);
   });
 
   it("refuses a query the form could not send, naming the control", async () => {

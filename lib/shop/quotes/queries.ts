@@ -165,6 +165,11 @@ export async function getQuote(db: Knex | Knex.Transaction, scope: QuoteScope, i
   return withEffectiveStatus(row);
 }
 
+/** Whether the caller may open the quote (owners every quote of the shop, staff the ones they wrote), for links to it. */
+export async function canOpenQuote(db: Knex, scope: QuoteScope, id: string): Promise<boolean> {
+  return Boolean(await scoped(db, scope).andWhere("quotes.id", id).first("quotes.id"));
+}
+
 /** A quote with its lines, history and customer, as rows (lib/shop/quotes/api.ts quoteDetailDto makes it the API shape). */
 export interface QuoteRecord {
   /** The quote without its link's token hash. */
@@ -656,6 +661,7 @@ export async function findByToken(db: Knex | Knex.Transaction, token: string, lo
 /** These queries on the app's database handle, for pages and route handlers. */
 export const quoteQueries = bindAppDb({
   answerByToken,
+  canOpenQuote,
   createQuote,
   expireDue,
   exportQuotes,

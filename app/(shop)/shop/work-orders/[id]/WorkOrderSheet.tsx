@@ -26,7 +26,16 @@ import { TrailAngleChanges } from "./TrailAngleChanges";
  * then the vehicle's. One column on a phone; on paper every step prints with its sign-off (or a
  * blank line to sign by hand), without the forms.
  */
-export function WorkOrderSheet({ initial, role }: { initial: WorkOrder; role: Role }) {
+export function WorkOrderSheet({
+  initial,
+  role,
+  quoteOpen = true,
+}: {
+  initial: WorkOrder;
+  role: Role;
+  /** The caller may open the quote (staff open the ones they wrote): otherwise its number is plain text, not a link that answers "not found". */
+  quoteOpen?: boolean;
+}) {
   const [w, setW] = useState(initial);
   const photoAdded = (p: StepPhoto) => setW((cur) => ({ ...cur, photos: [...cur.photos, p] }));
   const photoRemoved = (id: string) => setW((cur) => ({ ...cur, photos: cur.photos.filter((p) => p.id !== id) }));
@@ -36,9 +45,13 @@ export function WorkOrderSheet({ initial, role }: { initial: WorkOrder; role: Ro
     <div className="mx-auto flex max-w-3xl flex-col gap-4 print:max-w-none print:gap-2">
       <header className="flex flex-col gap-1">
         <p className="text-sm text-basalt-600 print:hidden">
-          <Link className="underline" href={`/shop/quotes/${w.quoteId}`}>
-            Quote Q-{w.quoteNumber}
-          </Link>
+          {quoteOpen ? (
+            <Link className="underline" href={`/shop/quotes/${w.quoteId}`}>
+              Quote Q-{w.quoteNumber}
+            </Link>
+          ) : (
+            <>Quote Q-{w.quoteNumber}</>
+          )}
         </p>
         <h1 className="text-2xl font-bold">Work order · Q-{w.quoteNumber}</h1>
         <p className="text-basalt-700">
