@@ -60,8 +60,8 @@ describe("the garage in Chromium", () => {
     vehicleUrl = new URL(page.url()).pathname;
     await expect.poll(() => page.getByRole("heading", { level: 1 }).textContent()).toBe(`Dune Skiff ${stamp}`);
     await expect.poll(() => page.getByText("5x4.5 in = 5x114.3 mm").isVisible()).toBe(true);
-    // 2-1/2 in = 63.5 mm exactly (NIST SP 811)
-    await expect.poll(() => page.getByText("63.5 mm (2-1/2 in)").isVisible()).toBe(true);
+    // 2-1/2 in = 63.5 mm exactly (NIST SP 811); the page follows the Units switch, inches (decimals) first by default.
+    await expect.poll(() => page.getByText("2.5 in (63.5 mm)").isVisible()).toBe(true);
   });
 
   it("adds measured points (inches with a fraction from the unit choice, inches in the text)", async () => {
@@ -71,8 +71,8 @@ describe("the garage in Chromium", () => {
     await page.locator("#f-point-distance").fill("1-1/4");
     await page.getByRole("button", { name: "Add point" }).click();
     await expect.poll(() => page.getByTestId("clearance-point").count()).toBe(1);
-    // 1-1/4 in = 31.75 mm, shown to 0.1 mm
-    await expect.poll(() => page.getByTestId("clearance-point").first().textContent()).toMatch(/31\.8 mm \(1-1\/4 in\)/);
+    // 1-1/4 in = 31.75 mm, shown to 0.1 mm, after the inches the Units switch puts first
+    await expect.poll(() => page.getByTestId("clearance-point").first().textContent()).toMatch(/1\.25 in \(31\.8 mm\)/);
 
     await page.locator("#f-point-label").fill("Bumper corner, full right lock");
     await page.locator("#f-point-direction").selectOption("fore-aft");
@@ -131,7 +131,8 @@ describe("the garage in Chromium", () => {
       .toMatch(/inner tread corner swinging about the steering axis/);
     await expect.poll(() => page.getByTestId("prediction-note").textContent()).toMatch(/How this is predicted/);
     await page.getByTestId("prediction-note").locator("summary").click();
-    await expect.poll(() => page.getByTestId("prediction-note").textContent()).toMatch(/25 mm inboard of the hub face/);
+    // 25 mm / 25.4 = 0.984 in (NIST SP 811), in the page's inch units.
+    await expect.poll(() => page.getByTestId("prediction-note").textContent()).toMatch(/0\.98 in inboard of the hub face/);
     await expect.poll(() => page.url()).toMatch(/pt=35x12\.50R17LT/);
     const href = await page.getByTestId("open-workspace").getAttribute("href");
     expect(href).toMatch(/^\/workspace\?ct=265\/70R17&cd=17&cw=8&co=25&pt=35x12\.50R17LT&pd=17&pw=9&po=-12/);
