@@ -81,11 +81,20 @@ describe("catalog import", () => {
 
   it("updates by SKU on a second import", async () => {
     as(ownerA);
+    const before = new Map(
+      (await db("catalog_items").where({ shop_id: SHOP_A }).select("sku", "updated_at")).map((r) => [r.sku, r.updated_at.getTime()]),
+    );
+    // Only the first tire's price differs from what the shop has; the other three rows are the same items.
     const p = await (await upload(CSV_TEMPLATE.replace("389.00", "399.00"))).json();
-    expect(p).toMatchObject({ newItems: 0, updatedItems: 4 });
+    expect(p).toMatchObject({ newItems: 0, updatedItems: 1, unchangedItems: 3 });
     await confirm(p.importId);
     expect((await db("catalog_items").where({ shop_id: SHOP_A, sku: "TR-EXAMPLE-35" }).first()).price_cents).toBe(39900);
     expect(await count()).toBe(4);
+    // What the preview called unchanged is left untouched (its updated_at too); the changed item is updated.
+    const after = await db("catalog_items").where({ shop_id: SHOP_A }).select("sku", "updated_at");
+    expect(after.filter((r) => r.updated_at.getTime() !== before.get(r.sku)).map((r) => r.sku)).toEqual(["TR-EXAMPLE-35"]);
+    const same = await (await upload(CSV_TEMPLATE.replace("389.00", "399.00"))).json();
+    expect(same).toMatchObject({ newItems: 0, updatedItems: 0, unchangedItems: 4 });
   });
 
   it("a mixed file: row errors reported, only the valid rows are staged", async () => {
@@ -159,6 +168,8 @@ describe("catalog import", () => {
 
   it("refuses wrong headers, bad encodings, and 50 MB of junk early", async () => {
     as(ownerA);
+    const staged = async () => (await db("catalog_imports").where({ shop_id: SHOP_A }).count<{ c: string }[]>({ c: "*" }))[0]!.c;
+    const stagedBefore = await staged();
     const wrong = await upload("name,cost\nA,1\n");
     expect(wrong.status).toBe(422);
     expect((await wrong.json()).error).toMatch(/Unknown columns/);
@@ -188,7 +199,8 @@ describe("catalog import", () => {
     );
     expect(res.status).toBe(413);
     console.log(`50 MB upload refused in ${(performance.now() - t0).toFixed(0)} ms`);
-    expect(await db("catalog_imports").where({ shop_id: SHOP_A }).count<{ c: string }[]>({ c: "*" })).toEqual([{ c: "6" }]);
+    // None of the refused files was staged.
+    expect(await staged()).toBe(stagedBefore);
   });
 });
 

@@ -1,6 +1,6 @@
 import Papa from "papaparse";
 import { describe, expect, it } from "vitest";
-import { CSV_COLUMNS, CSV_TEMPLATE, catalogToCsv, decodeCsvBytes, parseCatalogCsv } from "./csv";
+import { CSV_COLUMNS, CSV_TEMPLATE, catalogToCsv, decodeCsvBytes, importChanges, parseCatalogCsv } from "./csv";
 import { INVENTED_WHEEL } from "./wheelTestUtil";
 
 const HEAD = CSV_COLUMNS.join(",");
@@ -228,5 +228,22 @@ describe("catalog CSV export against formula injection (OWASP CSV Injection guid
     const back = parseCatalogCsv(catalogToCsv(items));
     expect(back.errors).toEqual([]);
     expect(back.items.map(({ row: _r, ...i }) => i)).toEqual(items.map((i) => ({ ...i, description: i.description.trim() })));
+  });
+});
+
+describe("importChanges: what a re-import would change on an item the shop has", () => {
+  const [tire] = parseCatalogCsv(CSV_TEMPLATE).items;
+  // As PostgreSQL hands the stored row back: every column present, the missing ones null, doubles as numbers.
+  const stored = { ...tire!, tire_rim_in: 17.0, beadlock: false };
+
+  it("a row equal to the stored item changes nothing, a missing value reading as null", () => {
+    expect(importChanges(tire!, stored)).toBe(false);
+    expect(importChanges({ ...tire!, bolt_pattern: undefined as unknown as null }, stored)).toBe(false);
+  });
+
+  it("any imported field that differs is a change: price, stock, a null becoming a figure", () => {
+    expect(importChanges({ ...tire!, price_cents: tire!.price_cents + 1 }, stored)).toBe(true);
+    expect(importChanges({ ...tire!, qty_on_hand: null }, stored)).toBe(true);
+    expect(importChanges({ ...tire!, center_bore_mm: 108 }, stored)).toBe(true);
   });
 });

@@ -94,6 +94,22 @@ function blankCatalogInput(): CatalogInput {
 /** The stored fields an import replaces on an item the shop already has (the SKU is what matched it). */
 export const IMPORTED_FIELDS = (Object.keys(blankCatalogInput()) as (keyof CatalogInput)[]).filter((f) => f !== "sku");
 
+/**
+ * Whether an import row would leave the stored item as it is: every imported field equal (numbers
+ * as numbers, a missing value as null). The preview counts such rows "unchanged", and confirming
+ * does not touch them.
+ *
+ * @example
+ * importChanges({ ...row, price_cents: 38900 }, { ...stored, price_cents: 38900 }); // false
+ * importChanges({ ...row, price_cents: 39900 }, { ...stored, price_cents: 38900 }); // true
+ */
+export function importChanges(row: CatalogInput, stored: Readonly<Record<string, unknown>>): boolean {
+  return IMPORTED_FIELDS.some((f) => {
+    const [a, b] = [row[f] ?? null, stored[f] ?? null];
+    return a !== b && !(typeof a === "number" && typeof b === "number" && Math.abs(a - b) < 1e-9);
+  });
+}
+
 export interface RowError {
   /** The row a spreadsheet shows: the header is row 1, blank rows keep their numbers. */
   row: number;

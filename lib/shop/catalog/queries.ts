@@ -3,7 +3,7 @@ import type { Knex } from "knex";
 import type { CatalogImportRow, CatalogItemRow, CatalogKind } from "@/lib/platform/db/types";
 import { type CatalogPage, catalogItemDto } from "@/lib/shop/catalog/api";
 import { boltPatternQuery, equivalentBoltPatterns } from "@/lib/shop/catalog/boltPatternSearch";
-import { type CatalogInput, type CsvReport, IMPORTED_FIELDS } from "@/lib/shop/catalog/csv";
+import { type CatalogInput, type CsvReport, IMPORTED_FIELDS, importChanges } from "@/lib/shop/catalog/csv";
 import { containsPattern, searchKey } from "@/lib/platform/search/normalize";
 import { withoutSearchKey } from "../../platform/search/searchKeyColumn";
 import { bindAppDb } from "@/lib/platform/db/bind";
@@ -106,16 +106,18 @@ export async function allCatalogItems(db: Knex, shopId: string): Promise<Catalog
 
 /** Keeps the validated rows of a previewed file until the owner confirms (or not). */
 export async function stageImport(db: Knex, shopId: string, userId: string, filename: string, report: CsvReport) {
-  const skus = report.items.map((i) => i.sku);
-  // Which SKUs already exist decides "new" vs "updated" in the preview.
-  let existing = 0;
-  for (let i = 0; i < skus.length; i += 5000) {
-    const chunk = skus.slice(i, i + 5000);
-    const [{ n }] = (await db("catalog_items").where({ shop_id: shopId }).whereIn("sku", chunk).count<{ n: string }[]>({ n: "*" })) as [
-      { n: string },
-    ];
-    existing += Number(n);
+  // Which SKUs already exist, and with what, decides "new", "updated" or "unchanged" in the preview.
+  const stored = new Map<string, Record<string, unknown>>();
+  for (let i = 0; i < report.items.length; i += 5000) {
+    const chunk = report.items.slice(i, i + 5000).map((item) => item.sku);
+    const rows = (await db("catalog_items")
+      .where({ shop_id: shopId })
+      .whereIn("sku", chunk)
+      .select("sku", ...IMPORTED_FIELDS)) as (Record<string, unknown> & { sku: string })[];
+    for (const r of rows) stored.set(r.sku, r);
   }
+  const existing = report.items.filter((item) => stored.has(item.sku));
+  const changed = existing.filter((item) => importChanges(item, stored.get(item.sku)!)).length;
   const [row] = await db<CatalogImportRow>("catalog_imports")
     .insert({
       shop_id: shopId,
@@ -127,7 +129,12 @@ export async function stageImport(db: Knex, shopId: string, userId: string, file
       error_count: report.skippedRows,
     })
     .returning(["id"]);
-  return { id: (row as { id: string }).id, newItems: report.items.length - existing, updatedItems: existing };
+  return {
+    id: (row as { id: string }).id,
+    newItems: report.items.length - existing.length,
+    updatedItems: changed,
+    unchangedItems: existing.length - changed,
+  };
 }
 
 /** How long a preview may wait for confirmation. */
@@ -178,7 +185,9 @@ export async function commitImport(
       await trx("catalog_items")
         .insert(batch)
         .onConflict(["shop_id", "sku"])
-        .merge([...IMPORTED_FIELDS, "updated_at"]);
+        .merge([...IMPORTED_FIELDS, "updated_at"])
+        // A row equal to the stored item (counted "unchanged" in the preview) leaves it untouched, updated_at too.
+        .whereRaw(IMPORTED_FIELDS.map((f) => `catalog_items.${f} is distinct from excluded.${f}`).join(" or "));
       onProgress(Math.min(i + IMPORT_BATCH, rows.length), rows.length);
     }
     // The staged copy has done its job; keep the record, drop the bulk.

@@ -43,6 +43,7 @@ describe("catalog import preview", () => {
       valid: 3,
       newItems: 2,
       updatedItems: 1,
+      unchangedItems: 0,
       skippedRows: 9,
       problemCount: 10,
       errors: [
@@ -64,6 +65,7 @@ describe("catalog import preview", () => {
       valid: 1,
       newItems: 1,
       updatedItems: 0,
+      unchangedItems: 0,
       skippedRows: 1,
       problemCount: 1,
       errors: [{ row: 3, column: "sku", message: "Enter a SKU." }],
@@ -71,5 +73,21 @@ describe("catalog import preview", () => {
     const summary = await pickFile();
     expect(summary.textContent).toBe("2 rows read · 1 ready (1 new, 0 updated) · 1 row skipped, 1 problem");
     expect(screen.getByRole("button", { name: "Import 1 row (skip 1 with problems)" })).toBeTruthy();
+  });
+
+  it("counts the rows equal to the shop's items apart from the ones that change something", async () => {
+    answerUploadWith({
+      importId: "0a000000-0000-4000-8000-0000000000fd",
+      total: 4,
+      valid: 4,
+      newItems: 0,
+      updatedItems: 1,
+      unchangedItems: 3,
+      skippedRows: 0,
+      problemCount: 0,
+      errors: [],
+    });
+    const summary = await pickFile();
+    expect(summary.textContent).toBe("4 rows read · 4 ready (0 new, 1 updated, 3 unchanged)");
   });
 });

@@ -17,6 +17,8 @@ interface Preview {
   valid: number;
   newItems: number;
   updatedItems: number;
+  /** Rows equal to the item the shop already has: confirming leaves those items as they are. */
+  unchangedItems: number;
   /** Rows left out (a row with several problems counts once). */
   skippedRows: number;
   /** Problems found, the length of `errors` before it was cut at 500. */
@@ -147,7 +149,8 @@ export function ImportFlow() {
             <h2 className="text-lg font-semibold">Preview of {phase.file}</h2>
             <p className="mt-1 text-sm" data-testid="import-summary">
               {count(phase.preview.total, "row")} read · {phase.preview.valid.toLocaleString("en-US")} ready (
-              {phase.preview.newItems.toLocaleString("en-US")} new, {phase.preview.updatedItems.toLocaleString("en-US")} updated)
+              {phase.preview.newItems.toLocaleString("en-US")} new, {phase.preview.updatedItems.toLocaleString("en-US")} updated
+              {phase.preview.unchangedItems > 0 && `, ${phase.preview.unchangedItems.toLocaleString("en-US")} unchanged`})
               {phase.preview.skippedRows > 0 &&
                 ` · ${count(phase.preview.skippedRows, "row")} skipped, ${count(phase.preview.problemCount, "problem")}`}
             </p>

@@ -35,6 +35,7 @@ export const POST = route({ access: SHOP_OWNER, query: FILENAME }, async ({ call
     valid: report.items.length,
     newItems: staged?.newItems ?? 0,
     updatedItems: staged?.updatedItems ?? 0,
+    unchangedItems: staged?.unchangedItems ?? 0,
     // Rows and problems are counted apart: one row can have several problems, and it is rows that are skipped.
     skippedRows: report.skippedRows,
     problemCount: report.errors.length,
