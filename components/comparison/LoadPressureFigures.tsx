@@ -2,7 +2,7 @@ import { BulletList } from "@/components/ui/BulletList";
 import { type FigureColumn, FigureTable } from "@/components/ui/FigureTable";
 import { type DisplayPrefs, formatLoad } from "@/lib/comparisons/format";
 import type { AxlePlan, LoadPlan, PressureReason } from "@/lib/comparisons/loadPlan";
-import { pressureText, pressuresInOrder } from "@/lib/comparisons/pressureText";
+import { messageInUnits, pressureText } from "@/lib/comparisons/pressureText";
 
 const REASON: Record<PressureReason, string> = {
   placard: "the placard load (equivalent pressure)",
@@ -70,7 +70,8 @@ export function LoadPressureFigures({ plan, prefs }: { plan: LoadPlan; prefs: Di
           and do not load past the vehicle&apos;s axle ratings.
         </p>
       )}
-      <BulletList items={plan.notes.map((n) => pressuresInOrder(n, prefs))} className="text-xs text-basalt-600" />
+      {/* The engine's notes in the panel's units, loads and pressures alike, as its messages are. */}
+      <BulletList items={plan.notes.map((n) => messageInUnits(n, prefs))} className="text-xs text-basalt-600" />
     </div>
   );
 }

@@ -63,6 +63,22 @@ describe("LoadPressurePanel", () => {
     expect(screen.getByLabelText("Front axle load (lb)")).toHaveProperty("value", "3086");
   });
 
+  it("writes the engine's notes in the panel's units: a passenger tire's derated load in lb first on an lb panel", async () => {
+    const user = userEvent.setup();
+    render(<LoadPressurePanel currentTire="P265/70R17 113S" plannedTire="P275/65R18 114T" prefs={IMPERIAL} />);
+    await fill(user, {
+      "Placard pressure, front (psi)": "35",
+      "Placard pressure, rear (psi)": "35",
+      "Front axle load (lb)": "3086",
+      "Rear axle load (lb)": "2646",
+    });
+    // LI 114 = 1180 kg (ISO 4000-1 load index table) ÷ 1.10 on a light truck (FMVSS 120 S5.1.2) = 1072.7 kg;
+    // 1180 / 0.45359237 = 2601.5 lb, 1072.7 / 0.45359237 = 2364.9 lb (NIST SP 811).
+    expect(screen.getByText(/^Load rating/).textContent).toBe(
+      "Load rating 2,601 lb (1,180 kg) ÷ 1.10 = 2,365 lb (1,072.7 kg) on a light truck (FMVSS 120 S5.1.2).",
+    );
+  });
+
   it("puts the engine's message beside an axle load the planned tire cannot carry, and computes nothing", async () => {
     const user = userEvent.setup();
     render(<LoadPressurePanel currentTire="P265/70R17 113S" plannedTire={PLANNED} prefs={METRIC} />);
