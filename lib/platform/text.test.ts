@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { escapeHtml } from "./text";
+import { countOf, escapeHtml } from "./text";
 
 describe("escapeHtml", () => {
   it("writes & < > \" ' as numeric character references", () => {
@@ -18,5 +18,12 @@ describe("escapeHtml", () => {
 
   it("leaves no tag to open", () => {
     expect(escapeHtml("<script>alert(1)</script>")).not.toMatch(/[<>]/);
+  });
+});
+
+describe("countOf", () => {
+  it("puts the noun in the singular for one only, and groups thousands (en-US)", () => {
+    expect([0, 1, 2].map((n) => countOf(n, "booking"))).toEqual(["0 bookings", "1 booking", "2 bookings"]);
+    expect(countOf(10000, "row")).toBe("10,000 rows");
   });
 });

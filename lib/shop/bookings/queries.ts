@@ -39,6 +39,7 @@ import { addDays, formatInstant, wallTime, weekdayOf, zonedInstant } from "./zon
 import { recheckWork } from "@/lib/shop/workOrders/recheckLink";
 import { recheckSlotMinutes } from "@/lib/shop/workOrders/recheckSlotQueries";
 import { readTogether } from "@/lib/platform/db/readTogether";
+import { countOf } from "@/lib/platform/text";
 
 type Db = Knex | Knex.Transaction;
 
@@ -172,19 +173,21 @@ export async function saveSetup(db: Knex, shopId: string, v: BaysSetupValues): P
       trx,
       existing.map((b) => b.id),
     );
+    // "1 booking … move or cancel it", "2 bookings … move or cancel them".
+    const ahead = (n: number) => `${countOf(n, "booking")} from now on`;
+    const them = (n: number) => (n === 1 ? "it" : "them");
     v.bays.forEach((b, i) => {
       const was = b.id ? byId.get(b.id) : undefined;
-      if (was && was.kind !== b.kind && holds.get(was.id))
-        fe[`bays.${i}.kind`] = [
-          `${was.name} has ${holds.get(was.id)} booking(s) from now on: move or cancel them before changing its kind.`,
-        ];
+      const n = was ? (holds.get(was.id) ?? 0) : 0;
+      if (was && was.kind !== b.kind && n)
+        fe[`bays.${i}.kind`] = [`${was.name} has ${ahead(n)}: move or cancel ${them(n)} before changing its kind.`];
     });
     if (Object.keys(fe).length) throw invalid(fe);
     const removed = existing.filter((b) => !kept.has(b.id));
     const busy = removed.filter((b) => holds.get(b.id));
     if (busy.length) {
       throw new ConflictError(
-        `${busy.map((b) => `${b.name} has ${holds.get(b.id)} booking(s) from now on`).join("; ")}: move or cancel them before removing ${busy.length > 1 ? "those bays" : "the bay"}.`,
+        `${busy.map((b) => `${b.name} has ${ahead(holds.get(b.id) ?? 0)}`).join("; ")}: move or cancel ${them(busy.reduce((sum, b) => sum + (holds.get(b.id) ?? 0), 0))} before removing ${busy.length > 1 ? "those bays" : "the bay"}.`,
       );
     }
 

@@ -19,6 +19,7 @@ import { BookingEvent } from "./BookingEvent";
 import { ClosedDays, DayHeader } from "./DayHeader";
 import { SelectedBooking } from "./SelectedBooking";
 import { useBookingMove } from "./useBookingMove";
+import { countOf } from "@/lib/platform/text";
 
 const localizer = dayjsLocalizer(dayjs);
 const DragAndDropCalendar = withDragAndDrop<BayEvent, Bay>(Calendar);
@@ -163,8 +164,8 @@ export function BayCalendar({ initial, today, askedDays }: { initial: CalendarAn
         </div>
       </div>
       <p className="mt-3 text-sm text-basalt-600">
-        {data.bookings.length === 0 ? "No bookings in these days." : `${data.bookings.length} booking(s) in these days.`} Drag a booking to
-        another time or bay, or pick it and choose Move…
+        {data.bookings.length === 0 ? "No bookings in these days." : `${countOf(data.bookings.length, "booking")} in these days.`} Drag a
+        booking to another time or bay, or pick it and choose Move…
       </p>
       {selected && (
         <SelectedBooking

@@ -10,6 +10,7 @@ import { Table, type TableColumn } from "@/components/ui/Table";
 import { ImportProgress } from "./ImportProgress";
 import { CSV_MAX_BYTES } from "@/lib/shop/catalog/csv";
 import { queryKeys } from "@/lib/platform/query/keys";
+import { countOf } from "@/lib/platform/text";
 
 interface Preview {
   importId: string | null;
@@ -64,7 +65,6 @@ const ERROR_COLUMNS: TableColumn<ImportProblem>[] = [
 ];
 
 /** "1 row", "9 rows": the preview counts rows and problems, never one for the other. */
-const count = (n: number, noun: string) => `${n.toLocaleString("en-US")} ${noun}${n === 1 ? "" : "s"}`;
 
 export function ImportFlow() {
   const qc = useQueryClient();
@@ -148,11 +148,11 @@ export function ImportFlow() {
           <div>
             <h2 className="text-lg font-semibold">Preview of {phase.file}</h2>
             <p className="mt-1 text-sm" data-testid="import-summary">
-              {count(phase.preview.total, "row")} read · {phase.preview.valid.toLocaleString("en-US")} ready (
+              {countOf(phase.preview.total, "row")} read · {phase.preview.valid.toLocaleString("en-US")} ready (
               {phase.preview.newItems.toLocaleString("en-US")} new, {phase.preview.updatedItems.toLocaleString("en-US")} updated
               {phase.preview.unchangedItems > 0 && `, ${phase.preview.unchangedItems.toLocaleString("en-US")} unchanged`})
               {phase.preview.skippedRows > 0 &&
-                ` · ${count(phase.preview.skippedRows, "row")} skipped, ${count(phase.preview.problemCount, "problem")}`}
+                ` · ${countOf(phase.preview.skippedRows, "row")} skipped, ${countOf(phase.preview.problemCount, "problem")}`}
             </p>
           </div>
           {phase.preview.problemCount > 0 && (
@@ -172,7 +172,7 @@ export function ImportFlow() {
               />
               {phase.preview.problemCount > phase.preview.errors.length && (
                 <p className="p-3 text-sm text-basalt-600">
-                  … and {count(phase.preview.problemCount - phase.preview.errors.length, "more problem")}.
+                  … and {countOf(phase.preview.problemCount - phase.preview.errors.length, "more problem")}.
                 </p>
               )}
             </div>
@@ -180,7 +180,7 @@ export function ImportFlow() {
           <div className="flex flex-wrap gap-2">
             {phase.preview.importId ? (
               <Button onClick={() => void onConfirm(phase.preview.importId!, phase.preview.valid, phase.preview.skippedRows)}>
-                Import {count(phase.preview.valid, "row")}
+                Import {countOf(phase.preview.valid, "row")}
                 {phase.preview.skippedRows ? ` (skip ${phase.preview.skippedRows.toLocaleString("en-US")} with problems)` : ""}
               </Button>
             ) : (
@@ -198,7 +198,7 @@ export function ImportFlow() {
       {phase.at === "done" && (
         <Alert tone="success" title="Import finished">
           {phase.imported.toLocaleString("en-US")} items imported.
-          {phase.skipped ? ` ${count(phase.skipped, "row")} with problems skipped.` : ""}{" "}
+          {phase.skipped ? ` ${countOf(phase.skipped, "row")} with problems skipped.` : ""}{" "}
           <Link className="underline" href="/shop/catalog">
             Back to the catalog
           </Link>
