@@ -27,6 +27,15 @@ function answerUploadWith(body: unknown) {
   vi.stubGlobal("XMLHttpRequest", FakeXhr);
 }
 
+/** A preview of a file without problems, as the import route answers it; `counts` are what the test is about. */
+const problemFree = (counts: { total: number; valid: number; newItems: number; updatedItems: number; unchangedItems: number }) => ({
+  importId: "0a000000-0000-4000-8000-0000000000fd",
+  ...counts,
+  skippedRows: 0,
+  problemCount: 0,
+  errors: [],
+});
+
 async function pickFile() {
   renderWithQuery(<ImportFlow />);
   fireEvent.change(screen.getByLabelText("Catalog CSV file"), {
@@ -76,17 +85,8 @@ describe("catalog import preview", () => {
   });
 
   it("counts the rows equal to the shop's items apart from the ones that change something", async () => {
-    answerUploadWith({
-      importId: "0a000000-0000-4000-8000-0000000000fd",
-      total: 4,
-      valid: 4,
-      newItems: 0,
-      updatedItems: 1,
-      unchangedItems: 3,
-      skippedRows: 0,
-      problemCount: 0,
-      errors: [],
-    });
+    // A file of four rows, all valid: one changes an item the shop has, three repeat what it has.
+    answerUploadWith(problemFree({ total: 4, valid: 4, newItems: 0, updatedItems: 1, unchangedItems: 3 }));
     const summary = await pickFile();
     expect(summary.textContent).toBe("4 rows read · 4 ready (0 new, 1 updated, 3 unchanged)");
   });
