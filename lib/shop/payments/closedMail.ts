@@ -6,10 +6,8 @@
  * transaction queues it once, with the decline, instead of the refund's receipt.
  */
 import type { OutgoingMail } from "@/lib/platform/mail";
-import { escapeHtml } from "@/lib/platform/text";
-import { formatInstant } from "@/lib/shop/bookings/zoned";
 import { formatUsd } from "@/lib/shop/quotes/money";
-import type { ReceiptFacts } from "./receiptMail";
+import { type ReceiptFacts, linesMail, refundSentence } from "./receiptMail";
 
 export interface ClosedOnRefundFacts extends Pick<ReceiptFacts, "customer" | "shop" | "quoteNumber" | "vehicle" | "at" | "timeZone"> {
   /** The whole deposit given back (Σ refunds the provider confirmed). */
@@ -25,19 +23,11 @@ export interface ClosedOnRefundFacts extends Pick<ReceiptFacts, "customer" | "sh
  */
 export function closedOnRefundMail(f: ClosedOnRefundFacts): OutgoingMail {
   const amount = formatUsd(f.refundedCents);
-  const when = formatInstant(f.at, f.timeZone);
   const ask = f.shop.phone ? `call ${f.shop.name} on ${f.shop.phone}` : `ask ${f.shop.name}`;
-  const lines = [
-    `${f.shop.name} has refunded ${formatUsd(f.refundedNowCents)} of your deposit for quote Q-${f.quoteNumber} (${f.vehicle}) on ${when}.`,
+  return linesMail(f, `Closed: quote Q-${f.quoteNumber} at ${f.shop.name}, your deposit of ${amount} refunded`, [
+    refundSentence(f, f.refundedNowCents),
     `Your deposit of ${amount} for quote Q-${f.quoteNumber} (${f.vehicle}) has been refunded in full, so the quote is now closed.`,
     "The refund goes back to the card you paid with. Nothing is booked or held for this quote any more.",
     `To have the work done after all, ${ask} for a new quote.`,
-  ];
-  const contact = [f.shop.name, f.shop.address, f.shop.phone].filter(Boolean).join(" · ");
-  return {
-    to: f.customer.email,
-    subject: `Closed: quote Q-${f.quoteNumber} at ${f.shop.name}, your deposit of ${amount} refunded`,
-    text: `Hello ${f.customer.name},\n\n${lines.join("\n")}\n\n${contact}\n`,
-    html: `<p>Hello ${escapeHtml(f.customer.name)},</p>${lines.map((l) => `<p>${escapeHtml(l)}</p>`).join("")}<p>${escapeHtml(contact)}</p>`,
-  };
+  ]);
 }

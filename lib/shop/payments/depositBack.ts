@@ -6,6 +6,13 @@
  */
 import type { InvoiceFigures } from "./invoice";
 
+/**
+ * The refunds that count as asked back: confirmed by the provider, or still on their way. A refund
+ * the provider reports as failed gave nothing back and counts nowhere (the deposit can be refunded
+ * again). The ledger's SQL sum and the invoice figures both read this list.
+ */
+export const REFUND_ASKED_STATUSES = ["pending", "succeeded"] as const;
+
 export const DEPOSIT_REFUNDED =
   "The deposit on this quote has been refunded in full, so it can no longer be booked. A new quote is needed to book again.";
 

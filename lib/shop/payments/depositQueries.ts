@@ -2,7 +2,7 @@ import "server-only";
 import type { Knex } from "knex";
 import type { QuoteRow } from "@/lib/platform/db/types";
 import { ConflictError } from "@/lib/platform/errors";
-import { DEPOSIT_REFUNDED, depositGivenBack } from "./depositBack";
+import { DEPOSIT_REFUNDED, REFUND_ASKED_STATUSES, depositGivenBack } from "./depositBack";
 
 /**
  * Whether the quote's paid deposit has been given back in full (depositBack.ts), summed from the
@@ -13,7 +13,7 @@ export async function depositRefundedInFull(db: Knex | Knex.Transaction, quoteId
   const row = (await db
     .select(
       db("payments").where({ quote_id: quoteId, kind: "deposit", status: "paid" }).sum("amount_cents").as("paid"),
-      db("payment_refunds").where({ quote_id: quoteId }).whereIn("status", ["pending", "succeeded"]).sum("amount_cents").as("refunded"),
+      db("payment_refunds").where({ quote_id: quoteId }).whereIn("status", REFUND_ASKED_STATUSES).sum("amount_cents").as("refunded"),
     )
     .first()) as { paid: string | null; refunded: string | null };
   return depositGivenBack(Number(row.paid ?? 0), Number(row.refunded ?? 0));

@@ -17,6 +17,7 @@
  */
 import type { PaymentKind } from "@/lib/platform/db/types";
 import { formatUsd } from "@/lib/shop/quotes/money";
+import { REFUND_ASKED_STATUSES } from "./depositBack";
 
 export interface LedgerPayment {
   kind: PaymentKind;
@@ -65,7 +66,7 @@ export function invoiceFigures(totalCents: number, payments: readonly LedgerPaym
     outstandingCents: outstanding,
     paid: outstanding <= 0,
     refundedCents: refunded,
-    refundableCents: depositPaid - sum(refunds.filter((r) => r.status !== "failed")),
+    refundableCents: depositPaid - sum(refunds.filter((r) => (REFUND_ASKED_STATUSES as readonly string[]).includes(r.status))),
   };
 }
 

@@ -30,7 +30,6 @@ export interface ReceiptFacts {
  */
 export function receiptMail(f: ReceiptFacts): OutgoingMail {
   const amount = formatUsd(f.amountCents);
-  const when = formatInstant(f.at, f.timeZone);
   const w = f.what;
   const subject =
     w.kind === "refund"
@@ -38,17 +37,27 @@ export function receiptMail(f: ReceiptFacts): OutgoingMail {
       : `Receipt: ${amount} ${PAYMENT_KIND_LABEL[w.kind].toLowerCase()} for quote Q-${f.quoteNumber} at ${f.shop.name}`;
   const lines =
     w.kind === "refund"
-      ? [
-          `${f.shop.name} has refunded ${amount} of your deposit for quote Q-${f.quoteNumber} (${f.vehicle}) on ${when}.`,
-          "It goes back to the card you paid with.",
-        ]
+      ? [refundSentence(f, f.amountCents), "It goes back to the card you paid with."]
       : [
-          `${f.shop.name} received ${amount} on ${when} for quote Q-${f.quoteNumber} (${f.vehicle}).`,
+          `${f.shop.name} received ${amount} on ${formatInstant(f.at, f.timeZone)} for quote Q-${f.quoteNumber} (${f.vehicle}).`,
           `Paid: ${PAYMENT_KIND_LABEL[w.kind]}, ${PAYMENT_METHOD_LABEL[w.method].toLowerCase()}.`,
           ...(f.outstandingCents === null
             ? []
             : [f.outstandingCents <= 0 ? "Your invoice is paid in full. Thank you." : `Still to pay: ${formatUsd(f.outstandingCents)}.`]),
         ];
+  return linesMail(f, subject, lines);
+}
+
+/**
+ * What a refund's receipt says first: who refunded how much of the deposit, for which quote, when.
+ * The closing mail of a full refund (closedMail.ts) opens with it too.
+ */
+export function refundSentence(f: Pick<ReceiptFacts, "shop" | "quoteNumber" | "vehicle" | "at" | "timeZone">, amountCents: number): string {
+  return `${f.shop.name} has refunded ${formatUsd(amountCents)} of your deposit for quote Q-${f.quoteNumber} (${f.vehicle}) on ${formatInstant(f.at, f.timeZone)}.`;
+}
+
+/** A mail to the quote's customer of plain lines: the greeting, a paragraph per line, the shop's contact line. */
+export function linesMail(f: Pick<ReceiptFacts, "customer" | "shop">, subject: string, lines: readonly string[]): OutgoingMail {
   const contact = [f.shop.name, f.shop.address, f.shop.phone].filter(Boolean).join(" · ");
   return {
     to: f.customer.email,
